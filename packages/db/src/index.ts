@@ -1,0 +1,6 @@
+export * as schema from './schema';
+export * from './schema';
+export * from './client';
+export * from './tenant/scoped';
+export * from './migrate';
+export { sql, eq, and, or, desc, asc, isNull, isNotNull, inArray, gt, lt, gte, lte } from 'drizzle-orm';

@@ -1,0 +1,20 @@
+import { index, jsonb, pgTable, text, uuid } from 'drizzle-orm/pg-core';
+import { createdAt, id, tenantId, tenantPolicy } from './columns';
+import { firms } from './firms';
+
+/** Who did what, when, to which record. Append-only: the app role has no UPDATE/DELETE on it. */
+export const auditLog = pgTable(
+  'audit_log',
+  {
+    id: id(),
+    tenantId: tenantId().references(() => firms.id),
+    actorUserId: uuid('actor_user_id'),
+    actorKind: text('actor_kind', { enum: ['staff', 'client', 'system'] }).notNull(),
+    action: text('action').notNull(),
+    entity: text('entity').notNull(),
+    entityId: uuid('entity_id'),
+    data: jsonb('data').notNull().default({}),
+    createdAt: createdAt(),
+  },
+  (t) => [index('audit_log_tenant_created_idx').on(t.tenantId, t.createdAt, t.id), tenantPolicy('audit_log')],
+);

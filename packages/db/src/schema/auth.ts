@@ -1,0 +1,31 @@
+import { index, json, pgTable, text, timestamp, uniqueIndex, uuid, varchar } from 'drizzle-orm/pg-core';
+import { createdAt, id } from './columns';
+import { users } from './team';
+
+/**
+ * Password-reset links. A user is not firm data (see users), so neither is their reset link;
+ * only the hash of the token is stored, it is single-use and short-lived.
+ */
+export const passwordResets = pgTable(
+  'password_resets',
+  {
+    id: id(),
+    userId: uuid('user_id').notNull().references(() => users.id),
+    tokenHash: text('token_hash').notNull(),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    usedAt: timestamp('used_at', { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('password_resets_token_hash_key').on(t.tokenHash), index('password_resets_user_idx').on(t.userId)],
+);
+
+/** connect-pg-simple's table, declared here so drizzle-kit owns the migration. */
+export const sessions = pgTable(
+  'session',
+  {
+    sid: varchar('sid').primaryKey(),
+    sess: json('sess').notNull(),
+    expire: timestamp('expire', { precision: 6, withTimezone: false }).notNull(),
+  },
+  (t) => [index('IDX_session_expire').on(t.expire)],
+);

@@ -1,0 +1,36 @@
+import { sql } from 'drizzle-orm';
+import { pgPolicy, pgTable, text, uniqueIndex } from 'drizzle-orm/pg-core';
+import { createdAt, currentTenant, id, updatedAt } from './columns';
+
+/** The tenant. Its own id is its tenant id, so the policy compares `id`. */
+export const firms = pgTable(
+  'firms',
+  {
+    id: id(),
+    name: text('name').notNull(),
+    slug: text('slug').notNull(),
+    addressLine1: text('address_line1').notNull().default(''),
+    addressLine2: text('address_line2').notNull().default(''),
+    city: text('city').notNull().default(''),
+    region: text('region').notNull().default(''),
+    postalCode: text('postal_code').notNull().default(''),
+    country: text('country').notNull().default('US'),
+    phone: text('phone').notNull().default(''),
+    timeZone: text('time_zone').notNull().default('America/New_York'),
+    currency: text('currency').notNull().default('USD'),
+    units: text('units', { enum: ['imperial', 'metric'] }).notNull().default('imperial'),
+    language: text('language', { enum: ['en', 'es'] }).notNull().default('en'),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    uniqueIndex('firms_slug_key').on(t.slug),
+    pgPolicy('firms_tenant_isolation', {
+      as: 'permissive',
+      for: 'all',
+      to: 'public',
+      using: sql`id = ${currentTenant}`,
+      withCheck: sql`id = ${currentTenant}`,
+    }),
+  ],
+);

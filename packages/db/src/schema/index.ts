@@ -1,0 +1,6 @@
+export * from './firms';
+export * from './team';
+export * from './auth';
+export * from './clients';
+export * from './audit';
+export * from './mail';

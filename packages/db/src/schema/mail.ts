@@ -1,0 +1,26 @@
+import { integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { createdAt, id } from './columns';
+
+/**
+ * Outbox of e-mails. A row is written in the same transaction as the change that causes it, and
+ * a queue job sends it; `purposeKey` is unique so a retried write or job never sends twice.
+ * The web role may only INSERT here (grants), because bodies carry one-time links; the jobs role reads.
+ */
+export const mailOutbox = pgTable(
+  'mail_outbox',
+  {
+    id: id(),
+    tenantId: uuid('tenant_id'),
+    purposeKey: text('purpose_key').notNull(),
+    toAddress: text('to_address').notNull(),
+    subject: text('subject').notNull(),
+    html: text('html').notNull(),
+    text: text('text').notNull(),
+    status: text('status', { enum: ['pending', 'sent', 'failed'] }).notNull().default('pending'),
+    attempts: integer('attempts').notNull().default(0),
+    lastError: text('last_error'),
+    sentAt: timestamp('sent_at', { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('mail_outbox_purpose_key').on(t.purposeKey)],
+);

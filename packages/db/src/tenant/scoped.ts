@@ -1,0 +1,85 @@
+import { drizzle, NodePgDatabase } from 'drizzle-orm/node-postgres';
+import type { Pool, PoolClient } from 'pg';
+import * as schema from '../schema';
+
+type Db = NodePgDatabase<typeof schema>;
+
+declare const tenantScoped: unique symbol;
+declare const lookupScoped: unique symbol;
+
+/**
+ * One transaction on one pooled connection. `client` is there for libraries that must join the
+ * same transaction (pg-boss `send(..., { db })`), `db` for Drizzle queries.
+ */
+export interface Tx {
+  readonly db: Db;
+  readonly client: PoolClient;
+}
+
+/**
+ * A transaction in which `app.tenant_id` is set. Only withTenant() makes one, so a function that
+ * takes a TenantTx cannot be handed a bare pool or another transaction: it fails to compile.
+ */
+export interface TenantTx extends Tx {
+  readonly tenantId: string;
+  readonly [tenantScoped]: true;
+}
+
+/** A transaction that may read the few rows a lookup key opens (see lookupPolicy in the schema). */
+export interface LookupTx extends Tx {
+  readonly [lookupScoped]: true;
+}
+
+export interface LookupKeys {
+  readonly userId?: string;
+  readonly email?: string;
+  readonly tokenHash?: string;
+}
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+async function inTransaction<T>(pool: Pool, begin: (client: PoolClient) => Promise<void>, fn: (tx: Tx) => Promise<T>): Promise<T> {
+  const client = await pool.connect();
+  try {
+    await client.query('begin');
+    await begin(client);
+    const result = await fn({ client, db: drizzle(client, { schema, casing: 'snake_case' }) });
+    await client.query('commit');
+    return result;
+  } catch (error) {
+    await client.query('rollback').catch(() => undefined);
+    throw error;
+  } finally {
+    client.release();
+  }
+}
+
+/** Runs fn in one transaction with the firm set transaction-locally (never a plain SET on a pooled connection). */
+export function withTenant<T>(pool: Pool, tenantId: string, fn: (tx: TenantTx) => Promise<T>): Promise<T> {
+  if (!UUID.test(tenantId)) return Promise.reject(new Error('withTenant needs a firm id'));
+  return inTransaction(
+    pool,
+    async (client) => {
+      await client.query(`select set_config('app.tenant_id', $1, true)`, [tenantId]);
+    },
+    (tx) => fn({ ...tx, tenantId } as TenantTx),
+  );
+}
+
+export function withLookup<T>(pool: Pool, keys: LookupKeys, fn: (tx: LookupTx) => Promise<T>): Promise<T> {
+  return inTransaction(
+    pool,
+    async (client) => {
+      await client.query(
+        `select set_config('app.user_id', $1, true), set_config('app.lookup_email', $2, true), set_config('app.token_hash', $3, true)`,
+        [keys.userId ?? '', keys.email ?? '', keys.tokenHash ?? ''],
+      );
+    },
+    (tx) => fn(tx as LookupTx),
+  );
+}
+
+/** For tables that are not firm data (users, password resets, outbox). */
+export function withGlobal<T>(pool: Pool, fn: (tx: Tx) => Promise<T>): Promise<T> {
+  return inTransaction(pool, async () => undefined, fn);
+}

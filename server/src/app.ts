@@ -1,0 +1,70 @@
+import { randomUUID } from 'node:crypto';
+import express, { Express, RequestHandler } from 'express';
+import { pinoHttp } from 'pino-http';
+import { authRoutes } from './auth/routes';
+import { absoluteTimeout, createPassport } from './auth/passport-setup';
+import type { AppContext } from './context';
+import { firmRoutes } from './firms/routes';
+import { csrf } from './http/csrf';
+import { apiNotFound, problemHandler } from './http/errors';
+import { signInRateLimit } from './http/rate-limit';
+import { cspNonce, securityHeaders } from './http/security';
+import { sessionMiddleware } from './http/session';
+import { portalRoutes } from './portal/routes';
+import { teamRoutes } from './team/routes';
+
+export interface SsrHandlers {
+  readonly admin: RequestHandler;
+  readonly portal: RequestHandler;
+}
+
+/** The whole HTTP surface, without listening: supertest drives it in-process, main.ts serves it. */
+export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', ctx.config.NODE_ENV === 'production' ? 1 : false);
+  app.use(
+    pinoHttp({
+      logger: ctx.logger,
+      genReqId: (req, res) => {
+        const id = (req.headers['x-request-id'] as string | undefined)?.slice(0, 64) || randomUUID();
+        res.setHeader('x-request-id', id);
+        return id;
+      },
+      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+    }),
+  );
+  app.use(cspNonce, securityHeaders(ctx.config));
+  app.use('/api', api(ctx));
+  if (ssr) {
+    app.use('/portal', ssr.portal);
+    app.use(ssr.admin);
+  }
+  app.use(problemHandler);
+  return app;
+}
+
+function api(ctx: AppContext): express.Router {
+  const router = express.Router();
+  const pass = createPassport(ctx);
+  const limiter = signInRateLimit(ctx.config.SIGN_IN_RATE_LIMIT);
+  router.use((_req, res, next) => {
+    res.set('cache-control', 'no-store');
+    next();
+  });
+  router.use(express.json({ limit: '100kb' }));
+  router.use(sessionMiddleware(ctx.config, ctx.pool));
+  router.use(pass.initialize());
+  router.use(pass.session());
+  router.use(absoluteTimeout(ctx));
+  router.use(csrf.csrfSynchronisedProtection);
+  router.use('/auth', authRoutes(ctx, pass, limiter));
+  router.use('/portal', portalRoutes(ctx, limiter));
+  router.use('/firm', firmRoutes(ctx));
+  router.use('/team', teamRoutes(ctx));
+  router.get('/health', (_req, res) => {
+    res.json({ status: 'ok' });
+  });
+  router.use(apiNotFound);
+  return router;
+}

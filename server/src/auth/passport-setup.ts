@@ -1,0 +1,66 @@
+import { signInRequest } from '@layerbook/contracts';
+import type { Request, RequestHandler } from 'express';
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import type { AppContext } from '../context';
+import type { Principal, SessionPrincipal } from '../http/principal';
+import { ABSOLUTE_MS } from '../http/session';
+import { parse } from '../http/validate';
+import { loadClientPrincipal } from './portal-auth';
+import { signIn } from './staff-auth';
+import { loadStaffPrincipal } from './staff-principal';
+
+declare module 'express-session' {
+  interface SessionData {
+    signedInAt?: number;
+  }
+}
+
+/** One Passport instance per app (tests build several apps in one process). */
+export function createPassport(ctx: AppContext): passport.PassportStatic {
+  const instance = new passport.Passport() as passport.PassportStatic;
+  instance.use(
+    'staff-password',
+    new LocalStrategy({ usernameField: 'email', passwordField: 'password', session: true }, (email, password, done) => {
+      signIn(ctx, parse(signInRequest, { email, password }))
+        .then((principal) => done(null, principal))
+        .catch((error) => done(error));
+    }),
+  );
+  instance.serializeUser((user, done) => {
+    const stored: SessionPrincipal = { kind: user.kind, id: user.id, tenantId: user.tenantId };
+    done(null, stored);
+  });
+  instance.deserializeUser((stored: SessionPrincipal, done) => {
+    const load = stored.kind === 'staff' ? loadStaffPrincipal(ctx.pool, stored.id, stored.tenantId) : loadClientPrincipal(ctx.pool, stored.id, stored.tenantId);
+    load.then((principal) => done(null, principal ?? false)).catch(done);
+  });
+  return instance;
+}
+
+/** Signs the principal in on a fresh session id (Passport ≥ 0.6 regenerates it) and stamps the time. */
+export function logIn(req: Request, principal: Principal, now: Date): Promise<void> {
+  return new Promise((resolve, reject) => {
+    req.logIn(principal, (err) => {
+      if (err) return reject(err);
+      req.session.signedInAt = now.getTime();
+      resolve();
+    });
+  });
+}
+
+export function logOut(req: Request): Promise<void> {
+  return new Promise((resolve, reject) => req.logOut((err) => (err ? reject(err) : resolve())));
+}
+
+/** Absolute session timeout: a week after sign-in the session ends however active it has been. */
+export function absoluteTimeout(ctx: AppContext): RequestHandler {
+  return (req, _res, next) => {
+    const at = req.session?.signedInAt;
+    if (req.user && at && ctx.now().getTime() - at > ABSOLUTE_MS) {
+      logOut(req).then(() => next(), next);
+      return;
+    }
+    next();
+  };
+}

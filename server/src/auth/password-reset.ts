@@ -1,0 +1,45 @@
+import { and, eq, isNull, passwordResets, users, withGlobal } from '@layerbook/db';
+import type { AppContext } from '../context';
+import type { StaffPrincipal } from '../http/principal';
+import { gone, notFound } from '../http/problem';
+import { enqueueMail } from '../mail/outbox';
+import { passwordResetMail } from '../mail/templates';
+import { assertNotCommonPassword, hashPassword } from './passwords';
+import { firstActivePrincipal } from './staff-auth';
+import { hashToken, minutesFromNow, newToken } from './tokens';
+
+export const RESET_MINUTES = 30;
+
+/** Always succeeds from the caller's point of view, so it never reveals which e-mails have accounts. */
+export async function requestPasswordReset(ctx: AppContext, email: string): Promise<void> {
+  await withGlobal(ctx.pool, async (tx) => {
+    const user = (await tx.db.select().from(users).where(eq(users.email, email)))[0];
+    if (!user) return;
+    const { token, hash } = newToken();
+    const [reset] = await tx.db
+      .insert(passwordResets)
+      .values({ userId: user.id, tokenHash: hash, expiresAt: minutesFromNow(ctx.now(), RESET_MINUTES) })
+      .returning({ id: passwordResets.id });
+    const url = `${ctx.config.PUBLIC_URL}/reset-password?token=${token}`;
+    await enqueueMail(tx, ctx.queue, {
+      purposeKey: `password-reset:${reset!.id}`,
+      to: user.email,
+      ...passwordResetMail({ name: user.name, url, minutes: RESET_MINUTES }),
+    });
+  });
+}
+
+export async function completePasswordReset(ctx: AppContext, token: string, password: string): Promise<StaffPrincipal> {
+  assertNotCommonPassword(password);
+  const passwordHash = await hashPassword(password);
+  const userId = await withGlobal(ctx.pool, async (tx) => {
+    const reset = (await tx.db.select().from(passwordResets).where(eq(passwordResets.tokenHash, hashToken(token))).for('update'))[0];
+    if (!reset) throw notFound('reset link');
+    if (reset.usedAt) throw gone('This reset link was already used. Ask for a new one.');
+    if (reset.expiresAt <= ctx.now()) throw gone('This reset link has expired. Ask for a new one.');
+    await tx.db.update(passwordResets).set({ usedAt: ctx.now() }).where(and(eq(passwordResets.id, reset.id), isNull(passwordResets.usedAt)));
+    await tx.db.update(users).set({ passwordHash, failedSignIns: 0, lockedUntil: null }).where(eq(users.id, reset.userId));
+    return reset.userId;
+  });
+  return firstActivePrincipal(ctx, userId);
+}

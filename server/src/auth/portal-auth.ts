@@ -1,0 +1,65 @@
+import { and, eq, firms, isNull, portalLinks, portalUsers, withLookup, withTenant } from '@layerbook/db';
+import type { Pool } from 'pg';
+import type { AppContext } from '../context';
+import type { ClientPrincipal } from '../http/principal';
+import { gone, notFound } from '../http/problem';
+import { enqueueMail } from '../mail/outbox';
+import { portalLinkMail } from '../mail/templates';
+import { hashToken, minutesFromNow, newToken } from './tokens';
+
+export const PORTAL_LINK_MINUTES = 20;
+
+/** E-mails a one-time link for every firm where this address is a client; silent otherwise. */
+export async function requestPortalLink(ctx: AppContext, email: string): Promise<void> {
+  const accounts = await withLookup(ctx.pool, { email }, (tx) =>
+    tx.db.select({ id: portalUsers.id, tenantId: portalUsers.tenantId }).from(portalUsers).where(and(eq(portalUsers.email, email), eq(portalUsers.status, 'active'))),
+  );
+  for (const account of accounts) {
+    await withTenant(ctx.pool, account.tenantId, async (tx) => {
+      const user = (await tx.db.select().from(portalUsers).where(eq(portalUsers.id, account.id)))[0];
+      const firm = (await tx.db.select({ name: firms.name }).from(firms))[0];
+      if (!user || !firm) return;
+      const { token, hash } = newToken();
+      const [link] = await tx.db
+        .insert(portalLinks)
+        .values({ tenantId: tx.tenantId, portalUserId: user.id, tokenHash: hash, expiresAt: minutesFromNow(ctx.now(), PORTAL_LINK_MINUTES) })
+        .returning({ id: portalLinks.id });
+      await enqueueMail(tx, ctx.queue, {
+        purposeKey: `portal-link:${link!.id}`,
+        tenantId: tx.tenantId,
+        to: user.email,
+        ...portalLinkMail({ name: user.name, firmName: firm.name, url: `${ctx.config.PUBLIC_URL}/portal/sign-in/link?token=${token}`, minutes: PORTAL_LINK_MINUTES }),
+      });
+    });
+  }
+}
+
+export async function redeemPortalLink(ctx: AppContext, token: string): Promise<ClientPrincipal> {
+  const tokenHash = hashToken(token);
+  const found = await withLookup(ctx.pool, { tokenHash }, async (tx) => (await tx.db.select().from(portalLinks).where(eq(portalLinks.tokenHash, tokenHash)))[0]);
+  if (!found) throw notFound('sign-in link');
+  const portalUserId = await withTenant(ctx.pool, found.tenantId, async (tx) => {
+    const link = (await tx.db.select().from(portalLinks).where(eq(portalLinks.id, found.id)).for('update'))[0];
+    if (!link) throw notFound('sign-in link');
+    if (link.usedAt) throw gone('This sign-in link was already used. Ask for a new one.');
+    if (link.expiresAt <= ctx.now()) throw gone('This sign-in link has expired. Ask for a new one.');
+    await tx.db.update(portalLinks).set({ usedAt: ctx.now() }).where(and(eq(portalLinks.id, link.id), isNull(portalLinks.usedAt)));
+    return link.portalUserId;
+  });
+  const principal = await loadClientPrincipal(ctx.pool, portalUserId, found.tenantId);
+  if (!principal) throw gone('This client account is no longer active.');
+  return principal;
+}
+
+export async function loadClientPrincipal(pool: Pool, portalUserId: string, tenantId: string): Promise<ClientPrincipal | null> {
+  return withTenant(pool, tenantId, async (tx) => {
+    const rows = await tx.db
+      .select({ name: portalUsers.name, email: portalUsers.email, status: portalUsers.status, firmName: firms.name })
+      .from(portalUsers)
+      .innerJoin(firms, eq(firms.id, portalUsers.tenantId))
+      .where(and(eq(portalUsers.tenantId, tx.tenantId), eq(portalUsers.id, portalUserId)));
+    const row = rows[0];
+    if (!row || row.status !== 'active') return null;
+    return { kind: 'client', id: portalUserId, tenantId, name: row.name, email: row.email, firmName: row.firmName };
+  });
+}

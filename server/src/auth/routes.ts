@@ -1,0 +1,85 @@
+import {
+  invitationAccept,
+  passwordResetComplete,
+  passwordResetRequest,
+  signInRequest,
+  signUpRequest,
+  StaffSession,
+  token as tokenField,
+} from '@layerbook/contracts';
+import { Request, Response, Router } from 'express';
+import type passport from 'passport';
+import { z } from 'zod';
+import type { AppContext } from '../context';
+import { csrf } from '../http/csrf';
+import type { Principal, StaffPrincipal } from '../http/principal';
+import { parse } from '../http/validate';
+import { acceptInvitation, previewInvitation } from './invitations';
+import { logIn, logOut } from './passport-setup';
+import { completePasswordReset, requestPasswordReset } from './password-reset';
+import { signUp } from './staff-auth';
+
+export function staffSession(req: Request, fresh = false): StaffSession {
+  const user = req.user?.kind === 'staff' ? (req.user as StaffPrincipal) : null;
+  return {
+    user: user ? { id: user.id, name: user.name, email: user.email, role: user.role, firmId: user.tenantId, firmName: user.firmName } : null,
+    csrfToken: csrf.generateToken(req, fresh),
+  };
+}
+
+async function signInAndAnswer(ctx: AppContext, req: Request, res: Response, principal: Principal, status = 200) {
+  await logIn(req, principal, ctx.now());
+  res.status(status).json(staffSession(req, true));
+}
+
+export function authRoutes(ctx: AppContext, pass: passport.PassportStatic, signInLimiter: import('express').RequestHandler): Router {
+  const router = Router();
+
+  router.get('/session', (req, res) => {
+    res.set('cache-control', 'no-store').json(staffSession(req));
+  });
+
+  router.post('/signup', signInLimiter, async (req, res) => {
+    const principal = await signUp(ctx, parse(signUpRequest, req.body));
+    await signInAndAnswer(ctx, req, res, principal, 201);
+  });
+
+  router.post('/signin', signInLimiter, async (req, res) => {
+    parse(signInRequest, req.body);
+    const principal = await new Promise<Principal>((resolve, reject) => {
+      pass.authenticate('staff-password', { session: false }, (err: unknown, user: Principal | false) => {
+        if (err) return reject(err);
+        if (!user) return reject(new Error('sign-in produced no user'));
+        resolve(user);
+      })(req, res, reject);
+    });
+    await signInAndAnswer(ctx, req, res, principal);
+  });
+
+  router.post('/signout', async (req, res) => {
+    await logOut(req);
+    await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+    res.json(staffSession(req, true));
+  });
+
+  router.post('/password-reset', signInLimiter, async (req, res) => {
+    await requestPasswordReset(ctx, parse(passwordResetRequest, req.body).email);
+    res.status(202).json({ detail: 'If that e-mail has an account, a reset link is on its way.' });
+  });
+
+  router.post('/password-reset/complete', signInLimiter, async (req, res) => {
+    const input = parse(passwordResetComplete, req.body);
+    await signInAndAnswer(ctx, req, res, await completePasswordReset(ctx, input.token, input.password));
+  });
+
+  router.get('/invitations/:token', async (req, res) => {
+    const { token } = parse(z.strictObject({ token: tokenField }), req.params);
+    res.set('cache-control', 'no-store').json(await previewInvitation(ctx, token));
+  });
+
+  router.post('/invitations/accept', signInLimiter, async (req, res) => {
+    await signInAndAnswer(ctx, req, res, await acceptInvitation(ctx, parse(invitationAccept, req.body)));
+  });
+
+  return router;
+}

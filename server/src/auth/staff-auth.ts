@@ -1,0 +1,89 @@
+import { randomUUID } from 'node:crypto';
+import type { SignInRequest, SignUpRequest } from '@layerbook/contracts';
+import { asc, eq, firms, memberships, users, withGlobal, withLookup, withTenant } from '@layerbook/db';
+import type { AppContext } from '../context';
+import type { StaffPrincipal } from '../http/principal';
+import { conflict, HttpError } from '../http/problem';
+import { recordAudit } from '../audit/record';
+import { isSlugTaken, slugCandidates } from '../firms/slug';
+import { isUniqueViolation } from '../http/pg-errors';
+import { loadStaffPrincipal } from './staff-principal';
+import { assertNotCommonPassword, decoyPasswordHash, hashPassword, verifyPassword } from './passwords';
+
+const WRONG = () => new HttpError(401, 'Sign-in failed', 'E-mail or password is not right.');
+const LOCK_AFTER = 5;
+const emailTaken = () =>
+  conflict('An account with this e-mail already exists.', [{ field: 'email', message: 'An account with this e-mail already exists; sign in instead.' }]);
+
+/** Creates a firm and its owner in one transaction, and returns the owner, signed in. */
+export async function signUp(ctx: AppContext, input: SignUpRequest): Promise<StaffPrincipal> {
+  assertNotCommonPassword(input.password);
+  const passwordHash = await hashPassword(input.password);
+  const firmId = randomUUID();
+  const userId = randomUUID();
+  for (const slug of slugCandidates(input.firmName)) {
+    try {
+      await createFirmWithOwner(ctx, { ...input, firmId, userId, slug, passwordHash });
+      break;
+    } catch (error) {
+      if (isUniqueViolation(error, 'users_email_key')) throw emailTaken();
+      if (!isSlugTaken(error)) throw error;
+    }
+  }
+  const principal = await loadStaffPrincipal(ctx.pool, userId, firmId);
+  if (!principal) throw new Error('new owner not found');
+  return principal;
+}
+
+async function createFirmWithOwner(
+  ctx: AppContext,
+  p: SignUpRequest & { firmId: string; userId: string; slug: string; passwordHash: string },
+): Promise<void> {
+  await withTenant(ctx.pool, p.firmId, async (tx) => {
+    const taken = await tx.db.select({ id: users.id }).from(users).where(eq(users.email, p.email));
+    if (taken.length) {
+      throw emailTaken();
+    }
+    await tx.db.insert(firms).values({ id: p.firmId, name: p.firmName, slug: p.slug });
+    await tx.db.insert(users).values({ id: p.userId, email: p.email, name: p.name, passwordHash: p.passwordHash });
+    await tx.db.insert(memberships).values({ tenantId: p.firmId, userId: p.userId, role: 'owner' });
+    await recordAudit(tx, { actorUserId: p.userId, actorKind: 'staff', action: 'firm.created', entity: 'firm', entityId: p.firmId });
+  });
+}
+
+/** Checks a password with per-account lockout and back-off; failures never say which part was wrong. */
+export async function signIn(ctx: AppContext, input: SignInRequest): Promise<StaffPrincipal> {
+  const now = ctx.now();
+  const user = await withGlobal(ctx.pool, async (tx) => (await tx.db.select().from(users).where(eq(users.email, input.email)))[0]);
+  if (!user) {
+    await verifyPassword(await decoyPasswordHash(), input.password);
+    throw WRONG();
+  }
+  if (user.lockedUntil && user.lockedUntil > now) {
+    const minutes = Math.ceil((user.lockedUntil.getTime() - now.getTime()) / 60_000);
+    throw new HttpError(423, 'Account locked for now', `Too many failed attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`);
+  }
+  if (!(await verifyPassword(user.passwordHash, input.password))) {
+    const failures = user.failedSignIns + 1;
+    // Back-off doubles from 1 minute after the fifth failure, capped at an hour.
+    const lockedUntil = failures >= LOCK_AFTER ? new Date(now.getTime() + Math.min(2 ** (failures - LOCK_AFTER), 60) * 60_000) : null;
+    await withGlobal(ctx.pool, (tx) => tx.db.update(users).set({ failedSignIns: failures, lockedUntil }).where(eq(users.id, user.id)));
+    throw WRONG();
+  }
+  if (user.failedSignIns || user.lockedUntil) {
+    await withGlobal(ctx.pool, (tx) => tx.db.update(users).set({ failedSignIns: 0, lockedUntil: null }).where(eq(users.id, user.id)));
+  }
+  return firstActivePrincipal(ctx, user.id);
+}
+
+/** A person may belong to several firms; they enter the one they joined first. */
+export async function firstActivePrincipal(ctx: AppContext, userId: string): Promise<StaffPrincipal> {
+  const rows = await withLookup(ctx.pool, { userId }, (tx) =>
+    tx.db.select({ tenantId: memberships.tenantId, status: memberships.status }).from(memberships).where(eq(memberships.userId, userId)).orderBy(asc(memberships.createdAt)),
+  );
+  const active = rows.find((r) => r.status === 'active');
+  if (!active) throw new HttpError(403, 'No access', 'Your access to this firm has been turned off. Ask the owner.');
+  const principal = await loadStaffPrincipal(ctx.pool, userId, active.tenantId);
+  if (!principal) throw new HttpError(403, 'No access', 'Your access to this firm has been turned off. Ask the owner.');
+  return principal;
+}

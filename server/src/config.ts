@@ -1,0 +1,38 @@
+import path from 'node:path';
+import { z } from 'zod';
+
+const flag = z.enum(['true', 'false']).transform((v) => v === 'true');
+
+const schema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(4300),
+  PUBLIC_URL: z.url().default('http://localhost:4300'),
+  DATABASE_URL: z.string().min(1),
+  DATABASE_OWNER_URL: z.string().min(1),
+  DATABASE_JOBS_URL: z.string().min(1),
+  SESSION_SECRET: z.string().min(32, { error: 'SESSION_SECRET must have at least 32 characters' }),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().default(1025),
+  MAIL_FROM: z.string().default('Layerbook <no-reply@layerbook.local>'),
+  ROOT_DIR: z.string().default(path.resolve(__dirname, '../..')),
+  RUN_WORKERS: flag.default(true),
+  RUN_MIGRATIONS: flag.default(true),
+  SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
+});
+
+export type Config = z.infer<typeof schema>;
+
+/** Parses the environment once at start-up; a bad value stops the process with a clear message. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = schema.safeParse(env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n');
+    throw new Error(`Configuration is not valid:\n${lines}`);
+  }
+  return parsed.data;
+}
+
+export const isProduction = (config: Config) => config.NODE_ENV === 'production';

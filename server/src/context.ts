@@ -1,0 +1,14 @@
+import type { Pool } from 'pg';
+import type { Logger } from 'pino';
+import type { Config } from './config';
+import type { JobQueue } from './jobs/job-queue';
+
+/** What services need from the outside world; routes pass it in, jobs can too. */
+export interface AppContext {
+  readonly config: Config;
+  readonly pool: Pool;
+  readonly queue: JobQueue;
+  readonly logger: Logger;
+  /** The clock, injectable so tests can move time (link expiry, lockouts). */
+  readonly now: () => Date;
+}

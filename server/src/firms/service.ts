@@ -1,0 +1,38 @@
+import type { FirmSettings, FirmSettingsUpdate } from '@layerbook/contracts';
+import { eq, firms, TenantTx } from '@layerbook/db';
+import { recordAudit } from '../audit/record';
+import { notFound } from '../http/problem';
+
+type FirmRow = typeof firms.$inferSelect;
+
+const toSettings = (f: FirmRow): FirmSettings => ({
+  id: f.id,
+  slug: f.slug,
+  name: f.name,
+  addressLine1: f.addressLine1,
+  addressLine2: f.addressLine2,
+  city: f.city,
+  region: f.region,
+  postalCode: f.postalCode,
+  country: f.country,
+  phone: f.phone,
+  timeZone: f.timeZone,
+  currency: f.currency,
+  units: f.units,
+  language: f.language,
+  updatedAt: f.updatedAt.toISOString(),
+});
+
+export async function getFirm(tx: TenantTx): Promise<FirmSettings> {
+  const firm = (await tx.db.select().from(firms).where(eq(firms.id, tx.tenantId)))[0];
+  if (!firm) throw notFound('firm');
+  return toSettings(firm);
+}
+
+export async function updateFirm(tx: TenantTx, actorUserId: string, input: FirmSettingsUpdate): Promise<FirmSettings> {
+  const before = await getFirm(tx);
+  const [updated] = await tx.db.update(firms).set({ ...input, updatedAt: new Date() }).where(eq(firms.id, tx.tenantId)).returning();
+  const changed = Object.keys(input).filter((k) => before[k as keyof FirmSettingsUpdate] !== input[k as keyof FirmSettingsUpdate]);
+  if (changed.length) await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'firm.settings_changed', entity: 'firm', entityId: tx.tenantId, data: { changed } });
+  return toSettings(updated!);
+}

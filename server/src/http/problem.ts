@@ -1,0 +1,32 @@
+import type { FieldProblem, Problem } from '@layerbook/contracts';
+
+/** The one typed error of the server. The error middleware turns it into problem+json. */
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly title: string,
+    readonly detail?: string,
+    readonly errors?: readonly FieldProblem[],
+  ) {
+    super(detail ?? title);
+  }
+
+  toProblem(requestId?: string): Problem {
+    return {
+      type: `https://layerbook.local/problems/${this.status}`,
+      title: this.title,
+      status: this.status,
+      ...(this.detail ? { detail: this.detail } : {}),
+      ...(this.errors?.length ? { errors: this.errors } : {}),
+      ...(requestId ? { requestId } : {}),
+    };
+  }
+}
+
+export const badRequest = (errors: readonly FieldProblem[], detail = 'Some fields need attention.') =>
+  new HttpError(400, 'The request has invalid fields', detail, errors);
+export const unauthorized = (detail = 'Sign in to continue.') => new HttpError(401, 'Not signed in', detail);
+export const forbidden = (detail = 'Your role does not allow this.') => new HttpError(403, 'Not allowed', detail);
+export const notFound = (what = 'record') => new HttpError(404, 'Not found', `No such ${what}.`);
+export const conflict = (detail: string, errors?: readonly FieldProblem[]) => new HttpError(409, 'Conflict', detail, errors);
+export const gone = (detail: string) => new HttpError(410, 'No longer valid', detail);

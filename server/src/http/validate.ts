@@ -1,0 +1,24 @@
+import type { FieldProblem } from '@layerbook/contracts';
+import type { z } from 'zod';
+import { badRequest } from './problem';
+
+/** Parses input with a shared zod schema; failure is a 400 naming every bad field. */
+export function parse<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
+  const result = schema.safeParse(input ?? {});
+  if (result.success) return result.data;
+  throw badRequest(fieldProblems(result.error));
+}
+
+export function fieldProblems(error: z.ZodError): FieldProblem[] {
+  const problems: FieldProblem[] = [];
+  for (const issue of error.issues) {
+    if (issue.code === 'unrecognized_keys') {
+      for (const key of issue.keys) {
+        problems.push({ field: [...issue.path, key].join('.'), message: 'This field is not accepted.' });
+      }
+      continue;
+    }
+    problems.push({ field: issue.path.join('.') || '(body)', message: issue.message });
+  }
+  return problems;
+}

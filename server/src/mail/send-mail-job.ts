@@ -1,0 +1,43 @@
+import type { Pool } from 'pg';
+import type { Transporter } from 'nodemailer';
+import type { Logger } from 'pino';
+import type { MailSendJob } from '../jobs/queues';
+
+/**
+ * Sends one outbox row. Safe to run twice: the row is locked, and a row already sent is skipped.
+ * The Message-ID is stable per row, so a resend after a crash can be recognised downstream.
+ */
+export async function sendOutboxMail(pool: Pool, transport: Transporter, from: string, job: MailSendJob, logger: Logger): Promise<void> {
+  const client = await pool.connect();
+  try {
+    await client.query('begin');
+    const { rows } = await client.query(
+      `select id, to_address, subject, html, text, status from mail_outbox where id = $1 for update`,
+      [job.outboxId],
+    );
+    const row = rows[0] as { id: string; to_address: string; subject: string; html: string; text: string; status: string } | undefined;
+    if (!row || row.status === 'sent') {
+      await client.query('commit');
+      return;
+    }
+    await transport.sendMail({
+      from,
+      to: row.to_address,
+      subject: row.subject,
+      html: row.html,
+      text: row.text,
+      messageId: `<${row.id}@layerbook.local>`,
+    });
+    await client.query(`update mail_outbox set status = 'sent', sent_at = now(), attempts = attempts + 1 where id = $1`, [row.id]);
+    await client.query('commit');
+    logger.info({ outboxId: row.id }, 'mail sent');
+  } catch (error) {
+    await client.query('rollback').catch(() => undefined);
+    await pool
+      .query(`update mail_outbox set attempts = attempts + 1, last_error = $2 where id = $1`, [job.outboxId, String(error)])
+      .catch(() => undefined);
+    throw error;
+  } finally {
+    client.release();
+  }
+}

@@ -1,0 +1,56 @@
+import path from 'node:path';
+import { migrateDatabase } from '@layerbook/db';
+import { Pool } from 'pg';
+import pino from 'pino';
+import { createApp } from './app';
+import { loadConfig } from './config';
+import type { AppContext } from './context';
+import { assertRlsBoundRole } from './db-roles';
+import { startQueue } from './jobs/job-queue';
+import { startWorkers } from './jobs/workers';
+import { loadSsrHandlers } from './ssr/load';
+
+/**
+ * `web` (default): HTTP plus the job workers in one process. `worker`: the job workers alone.
+ * Either can be scaled out; sessions and jobs live in PostgreSQL.
+ */
+async function main(mode: 'web' | 'worker'): Promise<void> {
+  const config = loadConfig();
+  const logger = pino({ level: config.LOG_LEVEL });
+  if (config.RUN_MIGRATIONS) await migrateDatabase(config.DATABASE_OWNER_URL, path.join(config.ROOT_DIR, 'migrations'));
+  const pool = new Pool({ connectionString: config.DATABASE_URL, max: config.DB_POOL_MAX, application_name: `layerbook-${mode}` });
+  await assertRlsBoundRole(pool);
+  const queue = await startQueue(config, logger);
+  const workers = mode === 'worker' || config.RUN_WORKERS ? await startWorkers(config, queue, logger) : undefined;
+  const ctx: AppContext = { config, pool, queue, logger, now: () => new Date() };
+
+  let server: import('node:http').Server | undefined;
+  if (mode === 'web') {
+    const app = createApp(ctx, await loadSsrHandlers(config.ROOT_DIR));
+    server = app.listen(config.PORT, config.HOST, () => logger.info({ url: config.PUBLIC_URL }, 'Layerbook is listening'));
+  } else {
+    logger.info('Layerbook worker started');
+  }
+
+  let stopping = false;
+  const shutdown = async (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    logger.info({ signal }, 'shutting down');
+    const force = setTimeout(() => process.exit(1), 15_000).unref();
+    await new Promise<void>((resolve) => (server ? server.close(() => resolve()) : resolve()));
+    server?.closeAllConnections?.();
+    await workers?.stop();
+    await queue.stop();
+    await pool.end();
+    clearTimeout(force);
+    process.exit(0);
+  };
+  process.on('SIGTERM', () => void shutdown('SIGTERM'));
+  process.on('SIGINT', () => void shutdown('SIGINT'));
+}
+
+main(process.argv[2] === 'worker' ? 'worker' : 'web').catch((error) => {
+  console.error(error);
+  process.exit(1);
+});

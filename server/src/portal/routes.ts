@@ -1,0 +1,53 @@
+import { PortalSession, portalLinkRequest, portalRedeemRequest } from '@layerbook/contracts';
+import { Request, RequestHandler, Router } from 'express';
+import type { AppContext } from '../context';
+import { loadClientPrincipal, redeemPortalLink, requestPortalLink } from '../auth/portal-auth';
+import { logIn, logOut } from '../auth/passport-setup';
+import { csrf } from '../http/csrf';
+import { requireClient } from '../http/guards';
+import type { ClientPrincipal } from '../http/principal';
+import { parse } from '../http/validate';
+
+function portalSession(req: Request, fresh = false): PortalSession {
+  const client = req.user?.kind === 'client' ? (req.user as ClientPrincipal) : null;
+  return {
+    client: client ? { id: client.id, name: client.name, email: client.email, firmId: client.tenantId, firmName: client.firmName } : null,
+    csrfToken: csrf.generateToken(req, fresh),
+  };
+}
+
+/** The client-facing API: sign-in by e-mailed link, and (later issues) their own projects only. */
+export function portalRoutes(ctx: AppContext, linkLimiter: RequestHandler): Router {
+  const router = Router();
+
+  router.get('/session', (req, res) => {
+    res.set('cache-control', 'no-store').json(portalSession(req));
+  });
+
+  router.post('/auth/link', linkLimiter, async (req, res) => {
+    await requestPortalLink(ctx, parse(portalLinkRequest, req.body).email);
+    res.status(202).json({ detail: 'If that address belongs to a client, a sign-in link is on its way.' });
+  });
+
+  router.post('/auth/redeem', linkLimiter, async (req, res) => {
+    const { token } = parse(portalRedeemRequest, req.body);
+    const principal = await redeemPortalLink(ctx, token);
+    await logIn(req, principal, ctx.now());
+    res.json(portalSession(req, true));
+  });
+
+  router.post('/auth/signout', async (req, res) => {
+    await logOut(req);
+    await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+    res.json(portalSession(req, true));
+  });
+
+  router.get('/projects', async (req, res) => {
+    const client = requireClient(req);
+    // Re-check the account is still active; later issues list this client's proposals here.
+    if (!(await loadClientPrincipal(ctx.pool, client.id, client.tenantId))) throw new Error('client vanished');
+    res.json({ projects: [] });
+  });
+
+  return router;
+}

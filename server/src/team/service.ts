@@ -1,0 +1,102 @@
+import type { InvitationCreate, StaffRole, TeamInvitation, TeamMember, TeamView } from '@layerbook/contracts';
+import { and, desc, eq, firms, invitations, isNull, memberships, TenantTx, users } from '@layerbook/db';
+import type { AppContext } from '../context';
+import { recordAudit } from '../audit/record';
+import { minutesFromNow, newToken } from '../auth/tokens';
+import type { StaffPrincipal } from '../http/principal';
+import { conflict, notFound } from '../http/problem';
+import { enqueueMail } from '../mail/outbox';
+import { invitationMail } from '../mail/templates';
+
+export const INVITATION_DAYS = 7;
+
+function invitationStatus(inv: typeof invitations.$inferSelect, now: Date): TeamInvitation['status'] {
+  if (inv.acceptedAt) return 'accepted';
+  if (inv.revokedAt) return 'revoked';
+  return inv.expiresAt <= now ? 'expired' : 'pending';
+}
+
+async function members(tx: TenantTx, you: string): Promise<TeamMember[]> {
+  const rows = await tx.db
+    .select({ id: memberships.id, userId: users.id, name: users.name, email: users.email, role: memberships.role, status: memberships.status })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(eq(memberships.tenantId, tx.tenantId))
+    .orderBy(memberships.createdAt);
+  return rows.map((r) => ({ ...r, isYou: r.userId === you }));
+}
+
+export async function getTeam(tx: TenantTx, you: string, now: Date): Promise<TeamView> {
+  const invites = await tx.db.select().from(invitations).where(eq(invitations.tenantId, tx.tenantId)).orderBy(desc(invitations.createdAt)).limit(100);
+  return {
+    members: await members(tx, you),
+    invitations: invites
+      .map((inv) => ({ id: inv.id, email: inv.email, role: inv.role, status: invitationStatus(inv, now), expiresAt: inv.expiresAt.toISOString(), createdAt: inv.createdAt.toISOString() }))
+      .filter((inv) => inv.status === 'pending' || inv.status === 'expired'),
+  };
+}
+
+export async function invite(ctx: AppContext, tx: TenantTx, actor: StaffPrincipal, input: InvitationCreate): Promise<TeamInvitation> {
+  const now = ctx.now();
+  const current = await members(tx, actor.id);
+  if (current.some((m) => m.email === input.email)) {
+    throw conflict('That person is already on the team.', [{ field: 'email', message: 'This person is already on the team.' }]);
+  }
+  const pending = await tx.db
+    .select()
+    .from(invitations)
+    .where(and(eq(invitations.tenantId, tx.tenantId), eq(invitations.email, input.email), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)));
+  if (pending.some((inv) => inv.expiresAt > now)) {
+    throw conflict('That e-mail already has a pending invitation.', [{ field: 'email', message: 'An invitation to this e-mail is already waiting. Revoke it to send a new one.' }]);
+  }
+  const { token, hash } = newToken();
+  const [inv] = await tx.db
+    .insert(invitations)
+    .values({ tenantId: tx.tenantId, email: input.email, role: input.role, tokenHash: hash, invitedBy: actor.id, expiresAt: minutesFromNow(now, INVITATION_DAYS * 24 * 60) })
+    .returning();
+  const firm = (await tx.db.select({ name: firms.name }).from(firms))[0];
+  await enqueueMail(tx, ctx.queue, {
+    purposeKey: `invitation:${inv!.id}`,
+    tenantId: tx.tenantId,
+    to: input.email,
+    ...invitationMail({ firmName: firm?.name ?? '', inviterName: actor.name, role: input.role, url: `${ctx.config.PUBLIC_URL}/accept-invitation?token=${token}`, days: INVITATION_DAYS }),
+  });
+  await recordAudit(tx, { actorUserId: actor.id, actorKind: 'staff', action: 'invitation.sent', entity: 'invitation', entityId: inv!.id, data: { email: input.email, role: input.role } });
+  return { id: inv!.id, email: inv!.email, role: inv!.role, status: 'pending', expiresAt: inv!.expiresAt.toISOString(), createdAt: inv!.createdAt.toISOString() };
+}
+
+export async function revokeInvitation(ctx: AppContext, tx: TenantTx, actor: StaffPrincipal, id: string): Promise<void> {
+  const updated = await tx.db
+    .update(invitations)
+    .set({ revokedAt: ctx.now() })
+    .where(and(eq(invitations.tenantId, tx.tenantId), eq(invitations.id, id), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
+    .returning({ id: invitations.id });
+  if (!updated.length) throw notFound('pending invitation');
+  await recordAudit(tx, { actorUserId: actor.id, actorKind: 'staff', action: 'invitation.revoked', entity: 'invitation', entityId: id });
+}
+
+/** Changes a member's role or status, never leaving the firm without an active owner. */
+export async function changeMember(
+  tx: TenantTx,
+  actor: StaffPrincipal,
+  membershipId: string,
+  change: { role?: StaffRole; status?: 'active' | 'deactivated' },
+): Promise<TeamMember> {
+  const all = await members(tx, actor.id);
+  const target = all.find((m) => m.id === membershipId);
+  if (!target) throw notFound('team member');
+  const after = all.map((m) => (m.id === membershipId ? { ...m, ...change } : m));
+  if (!after.some((m) => m.role === 'owner' && m.status === 'active')) {
+    throw conflict('The firm needs at least one active owner.', change.role ? [{ field: 'role', message: 'Make someone else an owner first.' }] : undefined);
+  }
+  await tx.db.update(memberships).set(change).where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.id, membershipId)));
+  await recordAudit(tx, {
+    actorUserId: actor.id,
+    actorKind: 'staff',
+    action: change.role ? 'member.role_changed' : `member.${change.status === 'active' ? 'reactivated' : 'deactivated'}`,
+    entity: 'membership',
+    entityId: membershipId,
+    data: { from: { role: target.role, status: target.status }, to: change },
+  });
+  return { ...target, ...change };
+}
