@@ -103,7 +103,7 @@ CREATE TABLE "audit_log" (
 ALTER TABLE "audit_log" ENABLE ROW LEVEL SECURITY;--> statement-breakpoint
 CREATE TABLE "mail_outbox" (
 	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
-	"tenant_id" uuid,
+	"tenant_id" uuid NOT NULL,
 	"purpose_key" text NOT NULL,
 	"to_address" text NOT NULL,
 	"subject" text NOT NULL,
@@ -116,6 +116,7 @@ CREATE TABLE "mail_outbox" (
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL
 );
 --> statement-breakpoint
+ALTER TABLE "mail_outbox" ENABLE ROW LEVEL SECURITY;--> statement-breakpoint
 ALTER TABLE "invitations" ADD CONSTRAINT "invitations_tenant_id_firms_id_fk" FOREIGN KEY ("tenant_id") REFERENCES "public"."firms"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "invitations" ADD CONSTRAINT "invitations_invited_by_users_id_fk" FOREIGN KEY ("invited_by") REFERENCES "public"."users"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "memberships" ADD CONSTRAINT "memberships_tenant_id_firms_id_fk" FOREIGN KEY ("tenant_id") REFERENCES "public"."firms"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
@@ -148,4 +149,6 @@ CREATE POLICY "portal_links_tenant_isolation" ON "portal_links" AS PERMISSIVE FO
 CREATE POLICY "portal_links_lookup_by_token_hash" ON "portal_links" AS PERMISSIVE FOR SELECT TO public USING (token_hash = nullif(current_setting('app.token_hash', true), '')::text);--> statement-breakpoint
 CREATE POLICY "portal_users_tenant_isolation" ON "portal_users" AS PERMISSIVE FOR ALL TO public USING (tenant_id = nullif(current_setting('app.tenant_id', true), '')::uuid) WITH CHECK (tenant_id = nullif(current_setting('app.tenant_id', true), '')::uuid);--> statement-breakpoint
 CREATE POLICY "portal_users_lookup_by_email" ON "portal_users" AS PERMISSIVE FOR SELECT TO public USING (email = nullif(current_setting('app.lookup_email', true), '')::text);--> statement-breakpoint
-CREATE POLICY "audit_log_tenant_isolation" ON "audit_log" AS PERMISSIVE FOR ALL TO public USING (tenant_id = nullif(current_setting('app.tenant_id', true), '')::uuid) WITH CHECK (tenant_id = nullif(current_setting('app.tenant_id', true), '')::uuid);
+CREATE POLICY "audit_log_tenant_isolation" ON "audit_log" AS PERMISSIVE FOR ALL TO public USING (tenant_id = nullif(current_setting('app.tenant_id', true), '')::uuid) WITH CHECK (tenant_id = nullif(current_setting('app.tenant_id', true), '')::uuid);--> statement-breakpoint
+CREATE POLICY "mail_outbox_tenant_isolation" ON "mail_outbox" AS PERMISSIVE FOR ALL TO public USING (tenant_id = nullif(current_setting('app.tenant_id', true), '')::uuid) WITH CHECK (tenant_id = nullif(current_setting('app.tenant_id', true), '')::uuid);--> statement-breakpoint
+CREATE POLICY "mail_outbox_sender" ON "mail_outbox" AS PERMISSIVE FOR ALL TO "layerbook_jobs" USING (true) WITH CHECK (true);

@@ -1,12 +1,11 @@
--- Custom SQL migration file, put your code below! --
-
--- Row-level security applies to the table owner too (FORCE), so no role but a superuser skips it.
+-- Custom SQL migration file, put your code below! ---- Row-level security applies to the table owner too (FORCE), so no role but a superuser skips it.
 ALTER TABLE "firms" FORCE ROW LEVEL SECURITY;
 ALTER TABLE "memberships" FORCE ROW LEVEL SECURITY;
 ALTER TABLE "invitations" FORCE ROW LEVEL SECURITY;
 ALTER TABLE "portal_users" FORCE ROW LEVEL SECURITY;
 ALTER TABLE "portal_links" FORCE ROW LEVEL SECURITY;
 ALTER TABLE "audit_log" FORCE ROW LEVEL SECURITY;
+ALTER TABLE "mail_outbox" FORCE ROW LEVEL SECURITY;
 
 -- The web role: DML only, no DDL, no ownership.
 GRANT USAGE ON SCHEMA public TO layerbook_app, layerbook_jobs;

@@ -1,4 +1,4 @@
-import { and, eq, isNull, passwordResets, users, withGlobal } from '@layerbook/db';
+import { and, asc, eq, isNull, memberships as membershipsTable, passwordResets, users, withGlobal, withLookup, withTenant } from '@layerbook/db';
 import type { AppContext } from '../context';
 import type { StaffPrincipal } from '../http/principal';
 import { gone, notFound } from '../http/problem';
@@ -12,9 +12,14 @@ export const RESET_MINUTES = 30;
 
 /** Always succeeds from the caller's point of view, so it never reveals which e-mails have accounts. */
 export async function requestPasswordReset(ctx: AppContext, email: string): Promise<void> {
-  await withGlobal(ctx.pool, async (tx) => {
-    const user = (await tx.db.select().from(users).where(eq(users.email, email)))[0];
-    if (!user) return;
+  const user = await withGlobal(ctx.pool, async (tx) => (await tx.db.select().from(users).where(eq(users.email, email)))[0]);
+  if (!user) return;
+  const memberships = await withLookup(ctx.pool, { userId: user.id }, (tx) =>
+    tx.db.select({ tenantId: membershipsTable.tenantId }).from(membershipsTable).where(eq(membershipsTable.userId, user.id)).orderBy(asc(membershipsTable.createdAt)),
+  );
+  const tenantId = memberships[0]?.tenantId;
+  if (!tenantId) return;
+  await withTenant(ctx.pool, tenantId, async (tx) => {
     const { token, hash } = newToken();
     const [reset] = await tx.db
       .insert(passwordResets)
@@ -23,6 +28,7 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
     const url = `${ctx.config.PUBLIC_URL}/reset-password?token=${token}`;
     await enqueueMail(tx, ctx.queue, {
       purposeKey: `password-reset:${reset!.id}`,
+      tenantId,
       to: user.email,
       ...passwordResetMail({ name: user.name, url, minutes: RESET_MINUTES }),
     });

@@ -1,0 +1,72 @@
+import { portalUsers, withTenant } from '@layerbook/db';
+import { linkIn } from '../testing/inbox';
+import { newAgent, signUpFirm, startTestServer, TestServer, uniqueEmail } from '../testing/harness';
+
+let t: TestServer;
+beforeAll(async () => {
+  t = await startTestServer();
+});
+afterAll(() => t.stop());
+
+async function clientOf(firmId: string, email: string) {
+  await withTenant(t.ctx.pool, firmId, (tx) => tx.db.insert(portalUsers).values({ tenantId: firmId, email, name: 'Cora Client' }));
+}
+
+describe('portal sign-in by e-mailed one-time link', () => {
+  it('sends a link that signs the client in once, into their own firm only', async () => {
+    const firm = await signUpFirm(t.app, 'Lantern Street Plaster');
+    const email = uniqueEmail('client');
+    await clientOf(firm.firmId, email);
+    const c = await newAgent(t.app, 'portal');
+    expect((await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email })).status).toBe(202);
+    const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email));
+    const url = new URL(linkIn(mail));
+    expect(url.pathname).toBe('/portal/sign-in/link');
+    const token = url.searchParams.get('token')!;
+    const signedIn = await c.agent.post('/api/portal/auth/redeem').set('x-csrf-token', c.csrf()).send({ token });
+    expect(signedIn.status).toBe(200);
+    expect(signedIn.body.client).toMatchObject({ email, firmName: 'Lantern Street Plaster' });
+    expect((await c.agent.get('/api/portal/projects')).body).toEqual({ projects: [] });
+    // A client is not staff.
+    expect((await c.agent.get('/api/team')).status).toBe(401);
+    const again = await (await newAgent(t.app, 'portal')).agent.post('/api/portal/auth/redeem').set('x-csrf-token', signedIn.body.csrfToken).send({ token });
+    expect([403, 410]).toContain(again.status);
+  });
+
+  it('refuses a reused or expired link with a clear message', async () => {
+    const firm = await signUpFirm(t.app);
+    const email = uniqueEmail('client');
+    await clientOf(firm.firmId, email);
+    const c = await newAgent(t.app, 'portal');
+    await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email });
+    const token = new URL(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email)))).searchParams.get('token')!;
+    t.setNow(new Date(Date.now() + 60 * 60 * 1000));
+    try {
+      const late = await c.agent.post('/api/portal/auth/redeem').set('x-csrf-token', c.csrf()).send({ token });
+      expect(late.status).toBe(410);
+      expect(late.body.detail).toMatch(/expired/);
+    } finally {
+      t.setNow(null);
+    }
+    const ok = await c.agent.post('/api/portal/auth/redeem').set('x-csrf-token', c.csrf()).send({ token });
+    expect(ok.status).toBe(200);
+    const used = await c.agent.post('/api/portal/auth/redeem').set('x-csrf-token', ok.body.csrfToken).send({ token });
+    expect(used.status).toBe(410);
+    expect(used.body.detail).toMatch(/already used/);
+  });
+
+  it('answers 202 for an unknown address and sends nothing; 400 for a malformed one', async () => {
+    const c = await newAgent(t.app, 'portal');
+    const email = uniqueEmail('nobody');
+    expect((await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email })).status).toBe(202);
+    const bad = await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email: 'nope' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors[0].field).toBe('email');
+    expect((await c.agent.post('/api/portal/auth/redeem').set('x-csrf-token', c.csrf()).send({ token: 'x'.repeat(43) })).status).toBe(404);
+  });
+
+  it('keeps signed-out clients out of their projects', async () => {
+    const c = await newAgent(t.app, 'portal');
+    expect((await c.agent.get('/api/portal/projects')).status).toBe(401);
+  });
+});
