@@ -1,0 +1,55 @@
+import { execFileSync, spawn } from 'node:child_process';
+import { mkdirSync, openSync, rmSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { E2E } from './env';
+
+const root = path.resolve(__dirname, '../..');
+
+async function waitFor(url: string, timeoutMs: number): Promise<void> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    try {
+      if ((await fetch(url)).ok) return;
+    } catch {
+      /* not up yet */
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`${url} did not come up`);
+}
+
+function startByPid(name: string, command: string, args: string[], env: NodeJS.ProcessEnv): void {
+  const dir = path.join(root, E2E.stateDir);
+  mkdirSync(dir, { recursive: true });
+  const log = openSync(path.join(dir, `${name}.log`), 'w');
+  const child = spawn(command, args, { cwd: root, env, stdio: ['ignore', log, log], detached: true });
+  child.unref();
+  writeFileSync(path.join(dir, `${name}.pid`), String(child.pid));
+}
+
+/** Fresh database, demo seed, a mail catcher and the built server — each started by PID. */
+export default async function globalSetup(): Promise<void> {
+  execFileSync('bash', ['ops/pg-start.sh'], { cwd: root, stdio: 'inherit' });
+  execFileSync('bash', ['ops/pg-createdb.sh', E2E.db, '--fresh'], { cwd: root, stdio: 'inherit' });
+  const port = process.env['LB_PG_PORT'] ?? '54329';
+  const pw = (n: string, d: string) => process.env[n] ?? d;
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    NODE_ENV: 'test',
+    PORT: String(E2E.port),
+    PUBLIC_URL: E2E.baseUrl,
+    ROOT_DIR: root,
+    SESSION_SECRET: 'e2e-session-secret-that-is-long-enough-0123',
+    SMTP_PORT: String(E2E.smtpPort),
+    LOG_LEVEL: 'warn',
+    DATABASE_URL: `postgres://layerbook_app:${pw('LB_APP_PASSWORD', 'layerbook-app-local')}@127.0.0.1:${port}/${E2E.db}`,
+    DATABASE_OWNER_URL: `postgres://layerbook_owner:${pw('LB_OWNER_PASSWORD', 'layerbook-owner-local')}@127.0.0.1:${port}/${E2E.db}`,
+    DATABASE_JOBS_URL: `postgres://layerbook_jobs:${pw('LB_JOBS_PASSWORD', 'layerbook-jobs-local')}@127.0.0.1:${port}/${E2E.db}`,
+  };
+  rmSync(path.join(root, E2E.stateDir, 'mail'), { recursive: true, force: true });
+  startByPid('maildev', path.join(root, 'node_modules/.bin/maildev'), ['--smtp', String(E2E.smtpPort), '--web', String(E2E.mailWebPort), '--ip', '127.0.0.1', '--mail-directory', path.join(root, E2E.stateDir, 'mail')], env);
+  execFileSync('node', ['server/dist/seed/run.js'], { cwd: root, env, stdio: 'inherit' });
+  startByPid('server', 'node', ['server/dist/main.js'], env);
+  await waitFor(`http://127.0.0.1:${E2E.mailWebPort}/api/healthz`, 30_000).catch(() => waitFor(`http://127.0.0.1:${E2E.mailWebPort}/`, 5_000));
+  await waitFor(`${E2E.baseUrl}/api/health`, 60_000);
+}

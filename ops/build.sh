@@ -1,0 +1,21 @@
+#!/usr/bin/env bash
+# Builds both server-rendered apps into dist/ (skipped when nothing changed since the last build)
+# and bundles the server with esbuild into server/dist/.
+set -euo pipefail
+source "$(dirname "$0")/env.sh"
+cd "$LB_ROOT"
+stale() { # $1 = built file; stale when missing or older than any source it is built from
+  [ ! -f "$1" ] && return 0
+  [ -n "$(find projects packages/contracts packages/domain angular.json package-lock.json -newer "$1" -type f -print -quit 2>/dev/null)" ]
+}
+if stale dist/admin/server/server.mjs || stale dist/portal/server/server.mjs || [ "${1:-}" = "--force" ]; then
+  echo "Building the admin and portal apps…"
+  npx ng build admin >/tmp/layerbook-build-admin.log 2>&1 || { cat /tmp/layerbook-build-admin.log; exit 1; }
+  npx ng build portal >/tmp/layerbook-build-portal.log 2>&1 || { cat /tmp/layerbook-build-portal.log; exit 1; }
+  touch dist/admin/server/server.mjs dist/portal/server/server.mjs
+fi
+# npm packages stay external (argon2 is native); our own workspace packages are TypeScript, so they are bundled.
+externals=$(node -e "const p=require('./package.json');console.log(Object.keys({...p.dependencies,...p.devDependencies}).map(n=>'--external:'+n).join(' '))")
+# shellcheck disable=SC2086
+npx esbuild server/src/main.ts server/src/seed/run.ts --bundle --platform=node --target=node20 --format=cjs \
+  $externals --outdir=server/dist --log-level=warning

@@ -1,0 +1,47 @@
+#!/usr/bin/env bash
+# `npm start`: install what is missing, start PostgreSQL and the mail catcher, migrate, seed the
+# demo firm, build, and serve both apps. Safe to run twice. Stop with `npm stop` (or Ctrl+C).
+set -euo pipefail
+source "$(dirname "$0")/env.sh"
+cd "$LB_ROOT"
+bash ops/deps.sh
+bash ops/pg-start.sh
+bash ops/pg-createdb.sh layerbook_dev
+db_urls layerbook_dev
+mkdir -p "$LB_DATA/run"
+
+export PORT="${PORT:-4300}" MAIL_WEB_PORT="${MAIL_WEB_PORT:-1080}" SMTP_PORT="${SMTP_PORT:-1025}"
+export PUBLIC_URL="${PUBLIC_URL:-http://localhost:$PORT}"
+if [ ! -s "$LB_DATA/session-secret" ]; then head -c 48 /dev/urandom | base64 | tr -d '\n/+=' > "$LB_DATA/session-secret"; fi
+export SESSION_SECRET="${SESSION_SECRET:-$(cat "$LB_DATA/session-secret")}"
+export NODE_ENV="${NODE_ENV:-development}" ROOT_DIR="$LB_ROOT"
+
+# Mail catcher with a web inbox; started by PID, stopped by PID.
+if ! { [ -f "$LB_DATA/run/maildev.pid" ] && kill -0 "$(cat "$LB_DATA/run/maildev.pid")" 2>/dev/null; }; then
+  nohup npx maildev --smtp "$SMTP_PORT" --web "$MAIL_WEB_PORT" --ip 127.0.0.1 --mail-directory "$LB_DATA/mail" >"$LB_DATA/run/maildev.log" 2>&1 &
+  echo $! > "$LB_DATA/run/maildev.pid"
+fi
+
+bash ops/build.sh
+node server/dist/seed/run.js
+
+if [ -f "$LB_DATA/run/server.pid" ] && kill -0 "$(cat "$LB_DATA/run/server.pid")" 2>/dev/null; then
+  kill "$(cat "$LB_DATA/run/server.pid")"; sleep 1
+fi
+cat <<INFO
+
+  Layerbook is starting at  $PUBLIC_URL
+    admin (owner, office, crew)   $PUBLIC_URL/sign-in
+    client portal                 $PUBLIC_URL/portal/sign-in
+    mail inbox (every e-mail)     http://localhost:$MAIL_WEB_PORT
+  Demo firm "Fernhollow Plaster & Glaze", password for every demo login: limewash-demo-2026
+    owner   owner@fernhollow.example
+    office  office@fernhollow.example
+    crew    crew@fernhollow.example
+    client  hattie@brambleton.example  (portal: ask for a sign-in link, then open it from the inbox)
+  Stop everything with: npm stop
+
+INFO
+node server/dist/main.js &
+echo $! > "$LB_DATA/run/server.pid"
+wait "$(cat "$LB_DATA/run/server.pid")"

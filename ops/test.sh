@@ -1,0 +1,17 @@
+#!/usr/bin/env bash
+# `npm test`: everything — unit (packages), API on a real PostgreSQL, end-to-end in Chromium.
+# Installs what is missing first; uses its own databases, never the demo data.
+set -euo pipefail
+source "$(dirname "$0")/env.sh"
+cd "$LB_ROOT"
+bash ops/deps.sh --browser
+bash ops/pg-start.sh
+
+echo "== unit and API tests (jest) =="
+npx jest --runInBand --ci
+
+echo "== build for the browser tests =="
+bash ops/build.sh
+
+echo "== end-to-end tests (Playwright, Chromium) =="
+npx playwright test
