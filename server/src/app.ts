@@ -12,6 +12,9 @@ import { cspNonce, securityHeaders } from './http/security';
 import { sessionMiddleware } from './http/session';
 import { portalRoutes } from './portal/routes';
 import { teamRoutes } from './team/routes';
+import { clientRoutes, siteRoutes } from './clients/routes';
+import { inquiryRoutes } from './inquiries/routes';
+import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
 
 export interface SsrHandlers {
   readonly admin: RequestHandler;
@@ -35,8 +38,10 @@ export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
     }),
   );
   app.use(cspNonce, securityHeaders(ctx.config));
-  app.use('/api', api(ctx));
+  const inquiryLimiter = publicInquiryLimiter(ctx.config.PUBLIC_FORM_RATE_LIMIT);
+  app.use('/api', api(ctx, inquiryLimiter));
   if (ssr) {
+    app.use('/portal', publicFormPost(ctx, inquiryLimiter, ssr.portal));
     app.use('/portal', ssr.portal);
     app.use(ssr.admin);
   }
@@ -44,7 +49,7 @@ export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
   return app;
 }
 
-function api(ctx: AppContext): express.Router {
+function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   const router = express.Router();
   const pass = createPassport(ctx);
   const limiter = signInRateLimit(ctx.config.SIGN_IN_RATE_LIMIT);
@@ -53,6 +58,8 @@ function api(ctx: AppContext): express.Router {
     next();
   });
   router.use(express.json({ limit: '100kb' }));
+  // Anonymous public pages carry no session, so they need no CSRF token; they are rate limited instead.
+  router.use('/public', publicRoutes(ctx, inquiryLimiter));
   router.use(sessionMiddleware(ctx.config, ctx.pool));
   router.use(pass.initialize());
   router.use(pass.session());
@@ -62,6 +69,9 @@ function api(ctx: AppContext): express.Router {
   router.use('/portal', portalRoutes(ctx, limiter));
   router.use('/firm', firmRoutes(ctx));
   router.use('/team', teamRoutes(ctx));
+  router.use('/inquiries', inquiryRoutes(ctx));
+  router.use('/clients', clientRoutes(ctx));
+  router.use('/sites', siteRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });

@@ -19,6 +19,7 @@ const schema = z.object({
   RUN_WORKERS: flag.default(true),
   RUN_MIGRATIONS: flag.default(true),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
+  PUBLIC_FORM_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
 });

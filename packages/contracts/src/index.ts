@@ -4,3 +4,6 @@ export * from './auth/fields';
 export * from './auth/auth';
 export * from './firms/firm';
 export * from './team/team';
+export * from './common/fields';
+export * from './inquiries/inquiry';
+export * from './clients/client';

@@ -4,6 +4,9 @@ import type PgBoss from 'pg-boss';
 export const QUEUES = {
   mailSend: 'mail-send',
   mailDead: 'mail-dead',
+  followUpSweep: 'follow-up-sweep',
+  followUpDigest: 'follow-up-digest',
+  followUpDead: 'follow-up-dead',
 } as const;
 
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
@@ -11,6 +14,15 @@ export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
 export const QUEUE_OPTIONS: ReadonlyArray<{ name: QueueName; options: Omit<PgBoss.Queue, 'name'> }> = [
   // The dead-letter queue first: a queue may only name one that exists.
   { name: QUEUES.mailDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
+  { name: QUEUES.followUpDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
+  {
+    name: QUEUES.followUpSweep,
+    options: { retryLimit: 2, retryDelay: 60, retryBackoff: true, expireInSeconds: 300, retentionDays: 3, deadLetter: QUEUES.followUpDead },
+  },
+  {
+    name: QUEUES.followUpDigest,
+    options: { retryLimit: 5, retryDelay: 30, retryBackoff: true, expireInSeconds: 300, retentionDays: 7, deadLetter: QUEUES.followUpDead },
+  },
   {
     name: QUEUES.mailSend,
     options: { retryLimit: 6, retryDelay: 15, retryBackoff: true, expireInSeconds: 120, retentionDays: 7, deadLetter: QUEUES.mailDead },
@@ -20,3 +32,17 @@ export const QUEUE_OPTIONS: ReadonlyArray<{ name: QueueName; options: Omit<PgBos
 export interface MailSendJob {
   readonly outboxId: string;
 }
+
+export interface FollowUpSweepJob {
+  /** Run for every firm now, whatever its local hour (tests and the ops command). */
+  readonly force?: boolean;
+}
+
+export interface FollowUpDigestJob {
+  readonly tenantId: string;
+  readonly localDate: string;
+}
+
+/** Hourly, on the hour plus five (UTC); each firm's digest goes out at FOLLOW_UP_LOCAL_HOUR its time. */
+export const FOLLOW_UP_SWEEP_CRON = '5 * * * *';
+export const FOLLOW_UP_LOCAL_HOUR = 7;

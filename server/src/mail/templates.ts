@@ -8,23 +8,25 @@ export interface RenderedMail {
 const escape = (s: string) =>
   s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
 
-function layout(heading: string, paragraphs: string[], action: { label: string; url: string }, footer: string): string {
+type Action = { label: string; url: string } | null;
+
+function layout(heading: string, paragraphs: string[], action: Action, footer: string): string {
   const body = paragraphs.map((p) => `<p style="margin:0 0 14px">${escape(p)}</p>`).join('');
   return `<!doctype html><html><body style="margin:0;background:#f6f1e7;font-family:Georgia,serif;color:#2f2419">
 <div style="max-width:560px;margin:0 auto;padding:28px 24px">
 <p style="font-size:13px;letter-spacing:.08em;text-transform:uppercase;color:#6b4a2f;margin:0 0 18px">Layerbook</p>
 <h1 style="font-size:22px;font-weight:600;margin:0 0 16px">${escape(heading)}</h1>
 <div style="font-family:Arial,sans-serif;font-size:15px;line-height:1.5">${body}
-<p style="margin:22px 0"><a href="${escape(action.url)}" style="background:#6b4a2f;color:#fff;padding:11px 18px;border-radius:6px;text-decoration:none;display:inline-block">${escape(action.label)}</a></p>
-<p style="font-size:13px;color:#5d5246">If the button does not work, paste this address into your browser:<br>${escape(action.url)}</p>
+${action ? `<p style="margin:22px 0"><a href="${escape(action.url)}" style="background:#6b4a2f;color:#fff;padding:11px 18px;border-radius:6px;text-decoration:none;display:inline-block">${escape(action.label)}</a></p>
+<p style="font-size:13px;color:#5d5246">If the button does not work, paste this address into your browser:<br>${escape(action.url)}</p>` : ''}
 <p style="font-size:13px;color:#5d5246;margin-top:24px">${escape(footer)}</p></div></div></body></html>`;
 }
 
-function plain(heading: string, paragraphs: string[], action: { label: string; url: string }, footer: string): string {
-  return [heading, '', ...paragraphs.flatMap((p) => [p, '']), `${action.label}: ${action.url}`, '', footer, ''].join('\n');
+function plain(heading: string, paragraphs: string[], action: Action, footer: string): string {
+  return [heading, '', ...paragraphs.flatMap((p) => [p, '']), ...(action ? [`${action.label}: ${action.url}`, ''] : []), footer, ''].join('\n');
 }
 
-function render(subject: string, heading: string, paragraphs: string[], action: { label: string; url: string }, footer: string): RenderedMail {
+export function render(subject: string, heading: string, paragraphs: string[], action: Action, footer: string): RenderedMail {
   return { subject, html: layout(heading, paragraphs, action, footer), text: plain(heading, paragraphs, action, footer) };
 }
 

@@ -32,13 +32,14 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
     ROOT_DIR: path.resolve(__dirname, '../../..'),
     LOG_LEVEL: 'silent',
     SIGN_IN_RATE_LIMIT: '1000',
+    PUBLIC_FORM_RATE_LIMIT: '1000',
     ...overrides,
   });
   const logger = pino({ level: process.env['LB_TEST_LOG'] ?? 'silent' });
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: 5 });
   const queue = await startQueue(config, logger);
-  const workers: Workers = await startWorkers(config, queue, logger);
   let fixedNow: Date | null = null;
+  const workers: Workers = await startWorkers(config, queue, logger, () => fixedNow ?? new Date());
   const ctx: AppContext = { config, pool, queue, logger, now: () => fixedNow ?? new Date() };
   return {
     app: createApp(ctx),

@@ -1,6 +1,63 @@
-import { index, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { createdAt, id, lookupPolicy, tenantId, tenantPolicy } from './columns';
+import { boolean, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { createdAt, id, lookupPolicy, tenantId, tenantPolicy, updatedAt } from './columns';
 import { firms } from './firms';
+
+export const CLIENT_KINDS = ['homeowner', 'designer', 'general_contractor', 'other'] as const;
+
+/** A client of the firm: a person or a company. */
+export const clients = pgTable(
+  'clients',
+  {
+    id: id(),
+    tenantId: tenantId().references(() => firms.id),
+    kind: text('kind', { enum: CLIENT_KINDS }).notNull(),
+    isCompany: boolean('is_company').notNull().default(false),
+    name: text('name').notNull(),
+    email: text('email').notNull().default(''),
+    phone: text('phone').notNull().default(''),
+    notes: text('notes').notNull().default(''),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index('clients_tenant_created_idx').on(t.tenantId, t.createdAt, t.id), index('clients_tenant_name_idx').on(t.tenantId, t.name), tenantPolicy('clients')],
+);
+
+/** People at a client (the designer's assistant, the contractor's site manager). */
+export const clientContacts = pgTable(
+  'client_contacts',
+  {
+    id: id(),
+    tenantId: tenantId().references(() => firms.id),
+    clientId: uuid('client_id').notNull().references(() => clients.id),
+    name: text('name').notNull(),
+    email: text('email').notNull().default(''),
+    phone: text('phone').notNull().default(''),
+    roleTitle: text('role_title').notNull().default(''),
+    createdAt: createdAt(),
+  },
+  (t) => [index('client_contacts_client_idx').on(t.tenantId, t.clientId), tenantPolicy('client_contacts')],
+);
+
+/** A place where work is done: its age drives lead-safe rules, its heights drive access. */
+export const sites = pgTable(
+  'sites',
+  {
+    id: id(),
+    tenantId: tenantId().references(() => firms.id),
+    clientId: uuid('client_id').notNull().references(() => clients.id),
+    label: text('label').notNull().default(''),
+    addressLine1: text('address_line1').notNull(),
+    addressLine2: text('address_line2').notNull().default(''),
+    city: text('city').notNull().default(''),
+    region: text('region').notNull().default(''),
+    postalCode: text('postal_code').notNull().default(''),
+    country: text('country').notNull().default('US'),
+    yearBuilt: integer('year_built'),
+    accessNotes: text('access_notes').notNull().default(''),
+    createdAt: createdAt(),
+  },
+  (t) => [index('sites_client_idx').on(t.tenantId, t.clientId), tenantPolicy('sites')],
+);
 
 /** A client's sign-in to the portal (homeowner, designer or contractor contact). */
 export const portalUsers = pgTable(
@@ -8,6 +65,7 @@ export const portalUsers = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
+    clientId: uuid('client_id').references(() => clients.id),
     email: text('email').notNull(),
     name: text('name').notNull(),
     status: text('status', { enum: ['active', 'disabled'] }).notNull().default('active'),

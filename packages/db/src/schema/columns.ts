@@ -1,5 +1,8 @@
 import { sql } from 'drizzle-orm';
-import { pgPolicy, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { pgPolicy, pgRole, timestamp, uuid } from 'drizzle-orm/pg-core';
+
+/** The role pg-boss and the workers run as (ops/pg-start.sh creates it). */
+export const jobsRole = pgRole('layerbook_jobs').existing();
 
 /** The firm a row belongs to. Every firm-owned table has it, and RLS checks it. */
 export const tenantId = () => uuid('tenant_id').notNull();

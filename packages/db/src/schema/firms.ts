@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { pgPolicy, pgTable, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import { createdAt, currentTenant, id, updatedAt } from './columns';
+import { createdAt, currentTenant, id, jobsRole, lookupPolicy, updatedAt } from './columns';
 
 /** The tenant. Its own id is its tenant id, so the policy compares `id`. */
 export const firms = pgTable(
@@ -32,5 +32,9 @@ export const firms = pgTable(
       using: sql`id = ${currentTenant}`,
       withCheck: sql`id = ${currentTenant}`,
     }),
+    // The public inquiry form names its firm by slug; only that firm's row opens.
+    lookupPolicy('firms', 'slug', 'lookup_slug'),
+    // The scheduler walks every firm (to fire each one's daily jobs at its local hour); it reads only.
+    pgPolicy('firms_scheduler_read', { as: 'permissive', for: 'select', to: jobsRole, using: sql`true` }),
   ],
 );

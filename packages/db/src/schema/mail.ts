@@ -1,8 +1,6 @@
 import { sql } from 'drizzle-orm';
-import { integer, pgPolicy, pgRole, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { createdAt, currentTenant, id } from './columns';
-
-export const jobsRole = pgRole('layerbook_jobs').existing();
+import { integer, pgPolicy, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { createdAt, currentTenant, id, jobsRole } from './columns';
 
 /**
  * Outbox of e-mails. A row is written in the same transaction as the change that causes it, and

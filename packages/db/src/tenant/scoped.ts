@@ -34,6 +34,7 @@ export interface LookupKeys {
   readonly userId?: string;
   readonly email?: string;
   readonly tokenHash?: string;
+  readonly slug?: string;
 }
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -71,8 +72,9 @@ export function withLookup<T>(pool: Pool, keys: LookupKeys, fn: (tx: LookupTx) =
     pool,
     async (client) => {
       await client.query(
-        `select set_config('app.user_id', $1, true), set_config('app.lookup_email', $2, true), set_config('app.token_hash', $3, true)`,
-        [keys.userId ?? '', keys.email ?? '', keys.tokenHash ?? ''],
+        `select set_config('app.user_id', $1, true), set_config('app.lookup_email', $2, true),
+                set_config('app.token_hash', $3, true), set_config('app.lookup_slug', $4, true)`,
+        [keys.userId ?? '', keys.email ?? '', keys.tokenHash ?? '', keys.slug ?? ''],
       );
     },
     (tx) => fn(tx as LookupTx),

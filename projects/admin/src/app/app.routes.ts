@@ -1,0 +1,66 @@
+import { Routes } from '@angular/router';
+import { roleGuard, signedInGuard } from './core/auth/guards';
+
+export const routes: Routes = [
+  { path: '', pathMatch: 'full', redirectTo: 'today' },
+  { path: '', loadChildren: () => import('./features/auth/auth.routes') },
+  {
+    path: '',
+    loadComponent: () => import('./core/layout/shell').then((m) => m.Shell),
+    canActivate: [signedInGuard],
+    children: [
+      {
+        path: 'today',
+        title: 'Today · Layerbook',
+        loadComponent: () => import('./features/today/today').then((m) => m.Today),
+      },
+      {
+        path: 'inquiries',
+        title: 'Inquiries · Layerbook',
+        loadComponent: () => import('./features/inquiries/inquiries').then((m) => m.Inquiries),
+      },
+      {
+        path: 'clients',
+        title: 'Clients · Layerbook',
+        loadComponent: () => import('./features/clients/clients').then((m) => m.Clients),
+      },
+      {
+        path: 'jobs',
+        title: 'Jobs & proposals · Layerbook',
+        loadComponent: () => import('./features/jobs/jobs').then((m) => m.Jobs),
+      },
+      {
+        path: 'billing',
+        title: 'Billing · Layerbook',
+        canActivate: [roleGuard('office')],
+        loadComponent: () => import('./features/billing/billing').then((m) => m.Billing),
+      },
+      {
+        path: 'cash',
+        title: 'Cash · Layerbook',
+        canActivate: [roleGuard('office')],
+        loadComponent: () => import('./features/cash/cash').then((m) => m.Cash),
+      },
+      {
+        path: 'library',
+        title: 'Finish library · Layerbook',
+        loadComponent: () => import('./features/library/library').then((m) => m.Library),
+      },
+      {
+        path: 'team',
+        title: 'Team · Layerbook',
+        loadComponent: () => import('./features/team/team').then((m) => m.Team),
+      },
+      {
+        path: 'settings',
+        title: 'Settings · Layerbook',
+        loadComponent: () => import('./features/firms/firm-settings').then((m) => m.FirmSettingsPage),
+      },
+    ],
+  },
+  {
+    path: '**',
+    title: 'Page not found · Layerbook',
+    loadComponent: () => import('./shared/ui/not-found').then((m) => m.NotFound),
+  },
+];

@@ -1,0 +1,21 @@
+import type { StaffRole } from '@layerbook/contracts';
+
+export interface NavItem {
+  readonly label: string;
+  readonly icon: string;
+  readonly path: string;
+  /** Least trusted role that sees the item; the server enforces the same rule. */
+  readonly minRole: StaffRole;
+}
+
+export const NAV_ITEMS: readonly NavItem[] = [
+  { label: 'Today', icon: 'wb_sunny', path: '/today', minRole: 'crew' },
+  { label: 'Inquiries', icon: 'call', path: '/inquiries', minRole: 'crew' },
+  { label: 'Clients', icon: 'group', path: '/clients', minRole: 'crew' },
+  { label: 'Jobs & proposals', icon: 'format_paint', path: '/jobs', minRole: 'crew' },
+  { label: 'Billing', icon: 'receipt_long', path: '/billing', minRole: 'office' },
+  { label: 'Cash', icon: 'savings', path: '/cash', minRole: 'office' },
+  { label: 'Finish library', icon: 'layers', path: '/library', minRole: 'crew' },
+  { label: 'Team', icon: 'badge', path: '/team', minRole: 'crew' },
+  { label: 'Settings', icon: 'tune', path: '/settings', minRole: 'office' },
+];

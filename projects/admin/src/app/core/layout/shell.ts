@@ -1,0 +1,74 @@
+import { BreakpointObserver } from '@angular/cdk/layout';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatListModule } from '@angular/material/list';
+import { MatMenuModule } from '@angular/material/menu';
+import { MatSidenavModule } from '@angular/material/sidenav';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { MatToolbarModule } from '@angular/material/toolbar';
+import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { map } from 'rxjs';
+import { Session } from '../auth/session';
+import { toProblem } from '../errors/problem';
+import { Wordmark } from '../../shared/ui/wordmark';
+import { NAV_ITEMS } from './nav-items';
+
+/** Phones and small tablets get the navigation as an overlay (crew read job sheets on site). */
+const NARROW = '(max-width: 959.98px)';
+
+@Component({
+  selector: 'lb-shell',
+  imports: [
+    MatButtonModule,
+    MatIconModule,
+    MatListModule,
+    MatMenuModule,
+    MatSidenavModule,
+    MatToolbarModule,
+    RouterLink,
+    RouterLinkActive,
+    RouterOutlet,
+    Wordmark,
+  ],
+  templateUrl: './shell.html',
+  styleUrl: './shell.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class Shell {
+  private readonly session = inject(Session);
+  private readonly router = inject(Router);
+  private readonly snackBar = inject(MatSnackBar);
+
+  protected readonly user = this.session.user;
+  protected readonly isNarrow = toSignal(
+    inject(BreakpointObserver)
+      .observe(NARROW)
+      .pipe(map((state) => state.matches)),
+    { initialValue: false },
+  );
+  protected readonly isNavOpen = signal(false);
+  protected readonly navItems = computed(() =>
+    NAV_ITEMS.filter((item) => this.session.hasRole(item.minRole)),
+  );
+
+  protected toggleNav(): void {
+    this.isNavOpen.update((open) => !open);
+  }
+
+  protected closeNavOnPhone(): void {
+    if (this.isNarrow()) {
+      this.isNavOpen.set(false);
+    }
+  }
+
+  protected async signOut(): Promise<void> {
+    try {
+      await this.session.signOut();
+      await this.router.navigateByUrl('/sign-in');
+    } catch (error) {
+      this.snackBar.open(toProblem(error).title, 'Close', { duration: 6000 });
+    }
+  }
+}

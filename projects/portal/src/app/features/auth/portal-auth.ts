@@ -1,0 +1,20 @@
+import { HttpClient } from '@angular/common/http';
+import { Injectable, inject } from '@angular/core';
+import { firstValueFrom } from 'rxjs';
+import type { PortalLinkRequest, PortalRedeemRequest, PortalSession } from '@layerbook/contracts';
+import { Session } from '../../core/auth/session';
+
+/** Clients sign in with a one-time link sent by e-mail; there are no client passwords. */
+@Injectable({ providedIn: 'root' })
+export class PortalAuth {
+  private readonly http = inject(HttpClient);
+  private readonly session = inject(Session);
+
+  async requestLink(body: PortalLinkRequest): Promise<void> {
+    await firstValueFrom(this.http.post('/api/portal/auth/link', body));
+  }
+
+  async redeem(body: PortalRedeemRequest): Promise<void> {
+    this.session.accept(await firstValueFrom(this.http.post<PortalSession>('/api/portal/auth/redeem', body)));
+  }
+}

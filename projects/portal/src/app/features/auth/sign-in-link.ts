@@ -1,0 +1,58 @@
+import { ChangeDetectionStrategy, Component, afterNextRender, inject, input, signal } from '@angular/core';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { Router, RouterLink } from '@angular/router';
+import { HOME_URL } from '../../core/auth/guards';
+import { toProblem } from '../../core/errors/problem';
+import { AuthFrame } from './auth-frame';
+import { isWellFormedToken } from './link-token';
+import { PortalAuth } from './portal-auth';
+
+type LinkState = 'working' | 'incomplete' | 'expired' | 'unknown' | 'failed';
+
+/**
+ * Redeems an e-mailed sign-in link. Redeeming spends the link (a POST), so it happens only in
+ * the browser: mail scanners and link previews that fetch the page must not use it up.
+ */
+@Component({
+  selector: 'lb-sign-in-link',
+  imports: [AuthFrame, MatIconModule, MatProgressBarModule, RouterLink],
+  templateUrl: './sign-in-link.html',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class SignInLink {
+  private readonly auth = inject(PortalAuth);
+  private readonly router = inject(Router);
+
+  /** The one-time code from the e-mailed link (query parameter). */
+  readonly token = input<string>();
+
+  protected readonly state = signal<LinkState>('working');
+  protected readonly failure = signal('');
+
+  constructor() {
+    afterNextRender(() => void this.redeem());
+  }
+
+  private async redeem(): Promise<void> {
+    const token = this.token();
+    if (!isWellFormedToken(token)) {
+      this.state.set('incomplete');
+      return;
+    }
+    try {
+      await this.auth.redeem({ token });
+      await this.router.navigateByUrl(HOME_URL, { replaceUrl: true });
+    } catch (error) {
+      const problem = toProblem(error);
+      if (problem.status === 410) {
+        this.state.set('expired');
+      } else if (problem.status === 404) {
+        this.state.set('unknown');
+      } else {
+        this.failure.set(problem.detail ?? problem.title);
+        this.state.set('failed');
+      }
+    }
+  }
+}

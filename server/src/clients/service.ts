@@ -1,0 +1,115 @@
+import type { ClientCreate, ClientDetail, ClientSummary, ContactCreate, Page, SiteCreate, SiteView } from '@layerbook/contracts';
+import { and, clientContacts, clients, desc, eq, inquiries, sites, TenantTx } from '@layerbook/db';
+import { recordAudit } from '../audit/record';
+import { notFound } from '../http/problem';
+import { decodeCursor, encodeCursor } from '../inquiries/cursor';
+
+type ClientRow = typeof clients.$inferSelect;
+type SiteRow = typeof sites.$inferSelect;
+
+const toSummary = (c: ClientRow): ClientSummary => ({
+  id: c.id,
+  kind: c.kind,
+  isCompany: c.isCompany,
+  name: c.name,
+  email: c.email,
+  phone: c.phone,
+  createdAt: c.createdAt.toISOString(),
+});
+
+/** Lead rules apply to target housing built before 1978 (40 CFR 745, TSCA §401(17)); unknown stays unknown. */
+export const toSite = (s: SiteRow): SiteView => ({
+  id: s.id,
+  clientId: s.clientId,
+  label: s.label,
+  addressLine1: s.addressLine1,
+  addressLine2: s.addressLine2,
+  city: s.city,
+  region: s.region,
+  postalCode: s.postalCode,
+  country: s.country,
+  yearBuilt: s.yearBuilt,
+  accessNotes: s.accessNotes,
+  isPre1978: s.yearBuilt === null ? null : s.yearBuilt < 1978,
+});
+
+export async function createClient(tx: TenantTx, actorUserId: string, input: ClientCreate): Promise<ClientSummary> {
+  const [row] = await tx.db.insert(clients).values({ ...input, tenantId: tx.tenantId }).returning();
+  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'client.created', entity: 'client', entityId: row!.id });
+  return toSummary(row!);
+}
+
+export async function updateClient(tx: TenantTx, id: string, patch: Partial<ClientCreate>): Promise<ClientSummary> {
+  const [row] = await tx.db.update(clients).set({ ...patch, updatedAt: new Date() }).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id))).returning();
+  if (!row) throw notFound('client');
+  return toSummary(row);
+}
+
+export async function listClients(tx: TenantTx, q: { q?: string; kind?: ClientRow['kind']; after?: string; limit: number }): Promise<Page<ClientSummary>> {
+  const values: unknown[] = [tx.tenantId];
+  const where = ['tenant_id = $1'];
+  const add = (v: unknown) => `$${values.push(v)}`;
+  if (q.kind) where.push(`kind = ${add(q.kind)}`);
+  if (q.q) {
+    const like = add(`%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
+    where.push(`(name ilike ${like} or email ilike ${like} or phone ilike ${like})`);
+  }
+  if (q.after) {
+    const c = decodeCursor(q.after);
+    where.push(`(created_at, id) < (${add(c.sortValue)}::timestamptz, ${add(c.id)}::uuid)`);
+  }
+  const { rows } = await tx.client.query(
+    `select *, created_at::text as cursor_at from clients where ${where.join(' and ')} order by created_at desc, id desc limit ${add(q.limit + 1)}`,
+    values,
+  );
+  const page = rows.slice(0, q.limit);
+  const last = page[page.length - 1];
+  return {
+    items: page.map((r) => ({ id: r.id, kind: r.kind, isCompany: r.is_company, name: r.name, email: r.email, phone: r.phone, createdAt: r.created_at.toISOString() })),
+    nextCursor: rows.length > q.limit && last ? encodeCursor(last.cursor_at, last.id) : null,
+  };
+}
+
+export async function getClient(tx: TenantTx, id: string): Promise<ClientDetail> {
+  const client = (await tx.db.select().from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id))))[0];
+  if (!client) throw notFound('client');
+  const [contacts, siteRows, linked] = await Promise.all([
+    tx.db.select().from(clientContacts).where(and(eq(clientContacts.tenantId, tx.tenantId), eq(clientContacts.clientId, id))).orderBy(clientContacts.createdAt),
+    tx.db.select().from(sites).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.clientId, id))).orderBy(sites.createdAt),
+    tx.db
+      .select({ id: inquiries.id, contactName: inquiries.contactName, stage: inquiries.stage, createdAt: inquiries.createdAt })
+      .from(inquiries)
+      .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.clientId, id)))
+      .orderBy(desc(inquiries.createdAt)),
+  ]);
+  return {
+    ...toSummary(client),
+    notes: client.notes,
+    contacts: contacts.map((c) => ({ id: c.id, name: c.name, email: c.email, phone: c.phone, roleTitle: c.roleTitle })),
+    sites: siteRows.map(toSite),
+    inquiries: linked.map((i) => ({ ...i, createdAt: i.createdAt.toISOString() })),
+  };
+}
+
+async function assertClient(tx: TenantTx, clientId: string): Promise<void> {
+  const found = await tx.db.select({ id: clients.id }).from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)));
+  if (!found.length) throw notFound('client');
+}
+
+export async function addContact(tx: TenantTx, clientId: string, input: ContactCreate) {
+  await assertClient(tx, clientId);
+  const [row] = await tx.db.insert(clientContacts).values({ ...input, clientId, tenantId: tx.tenantId }).returning();
+  return { id: row!.id, name: row!.name, email: row!.email, phone: row!.phone, roleTitle: row!.roleTitle };
+}
+
+export async function addSite(tx: TenantTx, clientId: string, input: SiteCreate): Promise<SiteView> {
+  await assertClient(tx, clientId);
+  const [row] = await tx.db.insert(sites).values({ ...input, clientId, tenantId: tx.tenantId }).returning();
+  return toSite(row!);
+}
+
+export async function updateSite(tx: TenantTx, siteId: string, patch: Partial<SiteCreate>): Promise<SiteView> {
+  const [row] = await tx.db.update(sites).set(patch).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, siteId))).returning();
+  if (!row) throw notFound('site');
+  return toSite(row);
+}

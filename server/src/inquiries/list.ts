@@ -1,0 +1,104 @@
+import type { BoardColumn, InquiryListQuery, InquirySummary, Page, TodayView } from '@layerbook/contracts';
+import { INQUIRY_STAGES, STAGE_LABELS } from '@layerbook/contracts';
+import { weightedPipeline } from '@layerbook/domain';
+import type { TenantTx } from '@layerbook/db';
+import { decodeCursor, encodeCursor } from './cursor';
+import { SUMMARY_COLUMNS, SUMMARY_FROM, SummaryRow, toSummary } from './rows';
+import type { FirmClock } from './service';
+import { stageLikelihoods } from './stage-settings';
+
+/**
+ * Each sort is a keyset over (sort key, id): the cursor carries the last row's key, so a deep page
+ * costs the same as the first (no OFFSET). `newest`/`oldest` ride the (tenant_id, created_at, id) index.
+ */
+const SORTS = {
+  newest: { key: 'i.created_at', cast: 'timestamptz', dir: 'desc', text: 'created_at_text' },
+  oldest: { key: 'i.created_at', cast: 'timestamptz', dir: 'asc', text: 'created_at_text' },
+  value: { key: "coalesce(i.estimated_value, -1)", cast: 'numeric', dir: 'desc', text: 'sort_value' },
+  follow_up: { key: "coalesce(i.next_follow_up, '9999-12-31'::date)", cast: 'date', dir: 'asc', text: 'sort_value' },
+} as const;
+
+export function buildListQuery(tenantId: string, q: InquiryListQuery): { text: string; values: unknown[] } {
+  const sort = SORTS[q.sort];
+  const values: unknown[] = [tenantId];
+  const where = ['i.tenant_id = $1'];
+  const add = (v: unknown) => `$${values.push(v)}`;
+  if (q.stage) where.push(`i.stage = ${add(q.stage)}`);
+  if (q.source) where.push(`i.source = ${add(q.source)}`);
+  if (q.assignee === 'none') where.push('i.assignee_user_id is null');
+  else if (q.assignee) where.push(`i.assignee_user_id = ${add(q.assignee)}`);
+  if (q.q) {
+    const like = add(`%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
+    where.push(`(i.contact_name ilike ${like} or i.email ilike ${like} or i.site_address ilike ${like} or i.phone ilike ${like})`);
+  }
+  if (q.after) {
+    const c = decodeCursor(q.after);
+    where.push(`(${sort.key}, i.id) ${sort.dir === 'desc' ? '<' : '>'} (${add(c.sortValue)}::${sort.cast}, ${add(c.id)}::uuid)`);
+  }
+  const text = `select ${SUMMARY_COLUMNS}, (${sort.key})::text as sort_value ${SUMMARY_FROM}
+    where ${where.join(' and ')} order by ${sort.key} ${sort.dir}, i.id ${sort.dir} limit ${add(q.limit + 1)}`;
+  return { text, values };
+}
+
+export async function listInquiries(tx: TenantTx, q: InquiryListQuery, today: string): Promise<Page<InquirySummary>> {
+  const { text, values } = buildListQuery(tx.tenantId, q);
+  const { rows } = await tx.client.query(text, values);
+  const page = (rows as Array<SummaryRow & { sort_value: string }>).slice(0, q.limit);
+  const last = page[page.length - 1];
+  const sortKey = SORTS[q.sort].text;
+  return {
+    items: page.map((r) => toSummary(r, today)),
+    nextCursor: rows.length > q.limit && last ? encodeCursor(sortKey === 'created_at_text' ? last.created_at_text : last.sort_value, last.id) : null,
+  };
+}
+
+/** The board: every stage with its count and its most recent cards (won/lost show the latest few). */
+export async function getBoard(tx: TenantTx, clock: FirmClock, perColumn = 50): Promise<BoardColumn[]> {
+  const likelihood = await stageLikelihoods(tx);
+  const { rows: counts } = await tx.client.query(`select stage, count(*)::int as n from inquiries where tenant_id = $1 group by stage`, [tx.tenantId]);
+  const countOf = new Map((counts as Array<{ stage: string; n: number }>).map((c) => [c.stage, c.n]));
+  const { rows } = await tx.client.query(
+    `select * from (select ${SUMMARY_COLUMNS}, row_number() over (partition by i.stage order by i.created_at desc, i.id desc) as rn
+       ${SUMMARY_FROM} where i.tenant_id = $1) ranked where rn <= $2 order by created_at desc, id desc`,
+    [tx.tenantId, perColumn],
+  );
+  return INQUIRY_STAGES.map((stage) => ({
+    stage,
+    label: STAGE_LABELS[stage],
+    likelihoodPercent: likelihood[stage],
+    count: countOf.get(stage) ?? 0,
+    items: (rows as SummaryRow[]).filter((r) => r.stage === stage).map((r) => toSummary(r, clock.today)),
+  }));
+}
+
+/** Today: follow-ups overdue and due, and the weighted value of open inquiries. */
+export async function getToday(tx: TenantTx, clock: FirmClock, userId?: string): Promise<TodayView> {
+  const { rows } = await tx.client.query(
+    `select ${SUMMARY_COLUMNS} ${SUMMARY_FROM}
+      where i.tenant_id = $1 and i.next_follow_up <= $2::date and i.stage not in ('won', 'lost')
+        ${userId ? 'and (i.assignee_user_id = $3 or i.assignee_user_id is null)' : ''}
+      order by i.next_follow_up, i.created_at limit 200`,
+    userId ? [tx.tenantId, clock.today, userId] : [tx.tenantId, clock.today],
+  );
+  const due = (rows as SummaryRow[]).map((r) => toSummary(r, clock.today));
+  const likelihood = await stageLikelihoods(tx);
+  const { rows: open } = await tx.client.query(
+    `select stage, coalesce(sum(estimated_value), 0)::text as value, count(*)::int as n
+       from inquiries where tenant_id = $1 and stage not in ('won', 'lost') group by stage`,
+    [tx.tenantId],
+  );
+  const pipeline = weightedPipeline(
+    (open as Array<{ stage: keyof typeof likelihood; value: string }>).map((o) => ({ id: o.stage, value: o.value, probability: likelihood[o.stage] / 100 })),
+  );
+  return {
+    localDate: clock.today,
+    overdue: due.filter((d) => d.nextFollowUp! < clock.today),
+    dueToday: due.filter((d) => d.nextFollowUp === clock.today),
+    pipeline: {
+      unweighted: pipeline.unweighted.toFixed(2),
+      weighted: pipeline.weighted.toFixed(2),
+      openCount: (open as Array<{ n: number }>).reduce((s, o) => s + o.n, 0),
+      currency: clock.currency,
+    },
+  };
+}

@@ -1,0 +1,90 @@
+import { createHmac, timingSafeEqual } from 'node:crypto';
+import type { InquirySource, PublicInquiryRequest } from '@layerbook/contracts';
+import { and, eq, firms, inArray, memberships, users, withLookup, withTenant } from '@layerbook/db';
+import type { AppContext } from '../context';
+import { badRequest, notFound } from '../http/problem';
+import { enqueueMail } from '../mail/outbox';
+import { inquiryAcknowledgementMail, inquiryNotificationMail } from '../mail/inquiry-templates';
+import { createInquiry } from './service';
+
+/** A form must be open at least this long before it is sent: bots fill forms in milliseconds. */
+export const MIN_FILL_MS = 3000;
+const MAX_FILL_MS = 24 * 60 * 60 * 1000;
+
+/** The page stamps when the form was shown, signed so a bot cannot forge an old time. */
+export function formStamp(secret: string, now: Date): string {
+  const t = String(now.getTime());
+  return `${t}.${createHmac('sha256', secret).update(`inquiry-form:${t}`).digest('base64url')}`;
+}
+
+function stampAge(secret: string, stamp: string | undefined, now: Date): number | null {
+  const [t, mac] = (stamp ?? '').split('.');
+  if (!t || !mac) return null;
+  const expected = createHmac('sha256', secret).update(`inquiry-form:${t}`).digest('base64url');
+  if (expected.length !== mac.length || !timingSafeEqual(Buffer.from(expected), Buffer.from(mac))) return null;
+  return now.getTime() - Number(t);
+}
+
+/** Referrals keep their kind (they may be owed thanks or a fee); everything else is the web form. */
+function sourceFromForm(heardFrom: PublicInquiryRequest['heardFrom']): InquirySource {
+  return heardFrom === 'search_or_social' || heardFrom === 'other' ? 'web_form' : heardFrom;
+}
+
+export async function publicFirm(ctx: AppContext, slug: string): Promise<{ id: string; name: string }> {
+  const firm = await withLookup(ctx.pool, { slug }, async (tx) => (await tx.db.select({ id: firms.id, name: firms.name }).from(firms).where(eq(firms.slug, slug)))[0]);
+  if (!firm) throw notFound('firm');
+  return firm;
+}
+
+/**
+ * Files a prospect's inquiry with that firm only, and queues the acknowledgement to the prospect
+ * and the notice to the owner and office — all in one transaction, through the outbox.
+ * Returns 'ignored' for a bot (honeypot filled or sent too fast): it is told nothing different.
+ */
+export async function submitPublicInquiry(ctx: AppContext, slug: string, input: PublicInquiryRequest): Promise<'filed' | 'ignored'> {
+  const now = ctx.now();
+  if (input.website) return 'ignored';
+  const age = stampAge(ctx.config.SESSION_SECRET, input.startedAt, now);
+  if (age === null || age > MAX_FILL_MS) throw badRequest([{ field: 'startedAt', message: 'This form has expired; reload the page and send it again.' }]);
+  if (age < MIN_FILL_MS) return 'ignored';
+  const firm = await publicFirm(ctx, slug);
+  await withTenant(ctx.pool, firm.id, async (tx) => {
+    const id = await createInquiry(tx, { userId: null, kind: 'client' }, {
+      contactName: input.name,
+      email: input.email,
+      phone: input.phone,
+      siteAddress: input.siteAddress,
+      yearBuilt: typeof input.yearBuilt === 'number' ? input.yearBuilt : null,
+      rooms: input.rooms,
+      finishIdea: input.finishIdea,
+      timeline: input.timeline,
+      budgetRange: input.budgetRange,
+      source: sourceFromForm(input.heardFrom),
+      referrerName: input.referrerName,
+      estimatedValue: null,
+      assigneeUserId: null,
+      nextFollowUp: null,
+      consentToContact: input.consent,
+    });
+    await enqueueMail(tx, ctx.queue, {
+      purposeKey: `inquiry-ack:${id}`,
+      tenantId: tx.tenantId,
+      to: input.email,
+      ...inquiryAcknowledgementMail({ firmName: firm.name, name: input.name }),
+    });
+    const staff = await tx.db
+      .select({ userId: users.id, email: users.email, name: users.name })
+      .from(memberships)
+      .innerJoin(users, eq(users.id, memberships.userId))
+      .where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.status, 'active'), inArray(memberships.role, ['owner', 'office'])));
+    for (const person of staff) {
+      await enqueueMail(tx, ctx.queue, {
+        purposeKey: `inquiry-notice:${id}:${person.userId}`,
+        tenantId: tx.tenantId,
+        to: person.email,
+        ...inquiryNotificationMail({ firmName: firm.name, prospect: input.name, rooms: input.rooms, url: `${ctx.config.PUBLIC_URL}/inquiries/${id}` }),
+      });
+    }
+  });
+  return 'filed';
+}
