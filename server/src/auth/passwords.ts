@@ -1,15 +1,16 @@
-import argon2 from 'argon2';
+import { hash, verify } from '@node-rs/argon2';
 import commonPasswords from 'fxa-common-password-list';
 import { badRequest } from '../http/problem';
 
 // OWASP Password Storage Cheat Sheet: Argon2id, m=19456 KiB, t=2, p=1.
-const ARGON2_OPTIONS = { type: argon2.argon2id, memoryCost: 19456, timeCost: 2, parallelism: 1 } as const;
+// `algorithm: 2` is the library's Algorithm.Argon2id (a const enum, which isolated modules cannot import).
+const ARGON2_OPTIONS = { algorithm: 2, memoryCost: 19456, timeCost: 2, parallelism: 1 } as const;
 
-export const hashPassword = (password: string) => argon2.hash(password, ARGON2_OPTIONS);
+export const hashPassword = (password: string) => hash(password, ARGON2_OPTIONS);
 
-export async function verifyPassword(hash: string, password: string): Promise<boolean> {
+export async function verifyPassword(passwordHash: string, password: string): Promise<boolean> {
   try {
-    return await argon2.verify(hash, password);
+    return await verify(passwordHash, password);
   } catch {
     return false;
   }

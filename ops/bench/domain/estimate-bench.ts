@@ -1,0 +1,139 @@
+/**
+ * Median timings for the two computations the apps run most: a full estimate of a 50-room job
+ * (4 layers per surface), recomputed on every keystroke in the browser, and a two-year cash
+ * forecast over 500 open invoices. Prints figures; it is not a timed test.
+ *
+ *   npx tsx ops/bench/domain/estimate-bench.ts
+ */
+import {
+  type CashForecastInput,
+  type EstimateInput,
+  type FinishLayer,
+  type SurfaceShape,
+  addDays,
+  cashForecast,
+  computeEstimate,
+} from '../../../packages/domain/src/index';
+
+const ROOMS = 50;
+const ESTIMATE_TARGET_MS = 1;
+
+function layer(id: string, productId: string, rate: number, wait: number): FinishLayer {
+  return {
+    id,
+    name: id,
+    method: 'trowel',
+    productId,
+    coats: 1,
+    waste: 0.1,
+    coverage: productId === 'lime'
+      ? { kind: 'consumption', unitPerSurface: 0.5, unit: 'kg', lengthUnit: 'm' }
+      : { kind: 'spreadRate', surfacePerUnit: 350, unit: 'gallon', lengthUnit: 'ft' },
+    productionRate: { surfacePerHour: rate, lengthUnit: 'ft' },
+    waitHoursAfter: wait,
+  };
+}
+
+function fiftyRoomJob(surfacesPerRoom: 2 | 4): EstimateInput {
+  const allShapes: SurfaceShape[] = [
+    { kind: 'walls', perimeter: 56, height: 9, openings: [{ width: 3, height: 7 }, { width: 4, height: 5, count: 2 }] },
+    { kind: 'ceilingRect', length: 14, width: 14, elevation: 9 },
+    { kind: 'roundWalls', radius: 9, height: 10, openings: [{ width: 3, height: 7 }] },
+    { kind: 'sphericalCap', baseRadius: 9, rise: 3, elevation: 10 },
+  ];
+  const shapes = allShapes.slice(0, surfacesPerRoom);
+  return {
+    startDate: '2025-06-05',
+    property: { yearBuilt: 1965, isOccupied: true },
+    settings: {
+      currency: 'USD',
+      lengthUnit: 'ft',
+      minDeductedOpeningArea: 4,
+      labourRate: '45.00',
+      materialsMarkup: 0.2,
+      overheadProfit: { method: 'margin', overhead: 0.2, profit: 0.15 },
+      minimumCharge: '2500.00',
+      tax: { mode: 'materials', rate: 0.0825 },
+      rounding: { kind: 'nearest', increment: '5' },
+      calendar: { workingWeekdays: [1, 2, 3, 4, 5], dayStartHour: 8, productiveHoursPerDay: 7, minimumBlockHours: 3, holidays: ['2025-07-04'] },
+      crewSize: 3,
+      setupHours: 6,
+      cleanupHours: 4,
+      multipliers: { ceiling: 1.4, curvedWall: 1.15, curvedCeiling: 1.5, height: 1.2, occupied: 1.1 },
+      scaffoldHeight: 12,
+      workingReach: 6,
+    },
+    products: [
+      { id: 'primer', name: 'Primer', unit: 'gallon', containers: [
+        { label: '5 gal', size: 5, unit: 'gallon', price: '190.00' },
+        { label: '1 gal', size: 1, unit: 'gallon', price: '45.00' },
+        { label: '1 qt', size: 1, unit: 'quart', price: '16.00' },
+      ] },
+      { id: 'lime', name: 'Lime plaster', unit: 'kg', hazards: { isLime: true }, containers: [
+        { label: '25 kg', size: 25, unit: 'kg', price: '110.00' },
+        { label: '20 kg', size: 20, unit: 'kg', price: '95.00' },
+        { label: '5 kg', size: 5, unit: 'kg', price: '28.00' },
+      ] },
+      { id: 'sealer', name: 'Sealer', unit: 'gallon', containers: [{ label: '1 gal', size: 1, unit: 'gallon', price: '60.00' }] },
+    ],
+    finishSystems: [
+      {
+        id: 'venetian',
+        name: 'Venetian',
+        layers: [layer('prime', 'primer', 250, 4), layer('coat1', 'lime', 60, 16), layer('coat2', 'lime', 40, 24), layer('seal', 'sealer', 120, 0)],
+      },
+    ],
+    rooms: Array.from({ length: ROOMS }, (_, r) => ({
+      id: `room${r}`,
+      name: `Room ${r + 1}`,
+      surfaces: shapes.map((shape, s) => ({ id: `r${r}s${s}`, name: shape.kind, shape, finishSystemId: 'venetian', disturbedPaintedArea: 2 })),
+    })),
+    perAreaRates: { venetian: '9.00' },
+    options: [{ id: 'beams', label: 'Faux beams', labourHours: 12, materialsCost: '180.00' }],
+  };
+}
+
+function fiveHundredInvoices(): CashForecastInput {
+  const asOf = '2025-06-30';
+  return {
+    asOf,
+    weeks: 105,
+    currency: 'USD',
+    openInvoices: Array.from({ length: 500 }, (_, i) => ({
+      id: `inv${i}`,
+      date: addDays(asOf, (i * 37) % 730 - 60),
+      amount: `${1000 + ((i * 7919) % 9000)}.${String(i % 100).padStart(2, '0')}`,
+      probability: 0.9,
+    })),
+    milestones: Array.from({ length: 100 }, (_, i) => ({ id: `m${i}`, date: addDays(asOf, (i * 11) % 700), amount: '2500.00', probability: 0.8 })),
+    pipelineDeposits: Array.from({ length: 40 }, (_, i) => ({ id: `p${i}`, date: addDays(asOf, i * 9), amount: '1000.00', probability: 0.4 })),
+  };
+}
+
+function median(run: () => unknown, iterations: number): number {
+  for (let i = 0; i < Math.min(50, iterations); i++) run();
+  const times: number[] = [];
+  for (let i = 0; i < iterations; i++) {
+    const t0 = performance.now();
+    run();
+    times.push(performance.now() - t0);
+  }
+  times.sort((a, b) => a - b);
+  return times[Math.floor(times.length / 2)];
+}
+
+const forecastInput = fiveHundredInvoices();
+// Walls + ceiling per room is the usual job; round walls and a dome in every room is the heavy case.
+for (const surfacesPerRoom of [2, 4] as const) {
+  const job = fiftyRoomJob(surfacesPerRoom);
+  const sample = computeEstimate(job);
+  const ms = median(() => computeEstimate(job), 400);
+  console.log(
+    `computeEstimate, ${ROOMS} rooms × ${surfacesPerRoom} surfaces × 4 layers (${sample.schedule.tasks.length} scheduled tasks, ` +
+      `${sample.schedule.workingDays} working days, price ${sample.price.price.toFixed(2)}):`,
+  );
+  console.log(`  median ${ms.toFixed(3)} ms (target ≤ ${ESTIMATE_TARGET_MS} ms: ${ms <= ESTIMATE_TARGET_MS ? 'met' : 'missed'})`);
+}
+const forecastMs = median(() => cashForecast(forecastInput), 400);
+console.log('cashForecast, 500 open invoices + 100 milestones + 40 pipeline deposits over 105 weeks (2 years):');
+console.log(`  median ${forecastMs.toFixed(3)} ms`);

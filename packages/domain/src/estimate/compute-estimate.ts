@@ -1,0 +1,222 @@
+import Decimal from 'decimal.js';
+import { DomainInputError } from '../errors/domain-input-error';
+import { requireNonEmpty } from '../errors/input-checks';
+import { type ContainerPack, chooseContainers } from '../finishes/container-pack';
+import type { FinishSystem, Product } from '../finishes/finish-system';
+import { type LayerQuantity, layerQuantity } from '../finishes/layer-quantity';
+import { measureSurface } from '../geometry/measure-surface';
+import type { SurfaceMeasure } from '../geometry/surface-shape';
+import { type CrewTime, type LayerHours, crewTime, layerHours } from '../labour/layer-hours';
+import { perAreaCheck } from '../pricing/per-area-check';
+import { type PriceBreakdown, priceJob } from '../pricing/price-job';
+import { type Caution, safetyCautions } from '../safety/safety-cautions';
+import { type JobSchedule, type WorkChain, scheduleJob } from '../schedule/schedule-job';
+import { type Dimension, dimensionOf, fromBase } from '../units/quantity-unit';
+import type { EstimateInput } from './estimate-input';
+
+export interface LayerLine {
+  layerId: string;
+  name: string;
+  quantity: LayerQuantity;
+  labour: LayerHours;
+}
+
+export interface SurfaceResult {
+  roomId: string;
+  surfaceId: string;
+  name: string;
+  finishSystemId: string;
+  measure: SurfaceMeasure;
+  layers: LayerLine[];
+}
+
+export interface ProductTotal {
+  productId: string;
+  name: string;
+  dimension: Dimension;
+  /** whole-job need in base units (mL or g), summed before rounding to containers */
+  need: number;
+  /** the same need in the product's own unit */
+  needInUnit: number;
+  unit: Product['unit'];
+  pack: ContainerPack;
+}
+
+export interface EstimateResult {
+  surfaces: SurfaceResult[];
+  products: ProductTotal[];
+  labour: CrewTime;
+  schedule: JobSchedule;
+  price: PriceBreakdown;
+  options: Array<{ id: string; label: string; price: PriceBreakdown }>;
+  perAreaCheck: { total: Decimal; lines: Array<{ surfaceId: string; amount: Decimal }> } | null;
+  cautions: Caution[];
+  totals: { area: number; length: number; materialsCost: Decimal };
+}
+
+/**
+ * Everything an estimate shows, from the job's surfaces and the firm's settings. Pure and
+ * deterministic, so the browser recomputing on each keystroke and the server recomputing on
+ * save get the same numbers.
+ */
+export function computeEstimate(input: EstimateInput): EstimateResult {
+  const s = input.settings;
+  requireNonEmpty(input.rooms, 'rooms', 'list of rooms');
+  const products = new Map<string, Product>(input.products.map((p) => [p.id, p]));
+  const systems = new Map<string, { system: FinishSystem; index: number }>();
+  input.finishSystems.forEach((f, i) => {
+    requireNonEmpty(f.layers, `finishSystems[${i}].layers`, 'layer list');
+    systems.set(f.id, { system: f, index: i });
+  });
+  const takeoff = { minDeductedOpeningArea: s.minDeductedOpeningArea };
+  const isOccupied = input.property?.isOccupied === true;
+
+  const surfaces: SurfaceResult[] = [];
+  const chains: WorkChain[] = [];
+  const needs = new Map<string, number>();
+  const usedProducts = new Set<string>();
+  const disturbedPaint: Array<{ roomId: string; isExterior: boolean; area: number }> = [];
+  let layerTotal = 0;
+  let sandsPlaster = false;
+  let highestTop = 0;
+  let area = 0;
+  let length = 0;
+
+  input.rooms.forEach((room, r) => {
+    room.surfaces.forEach((surface, k) => {
+      const at = `rooms[${r}].surfaces[${k}]`;
+      const found = systems.get(surface.finishSystemId);
+      if (!found) throw new DomainInputError(`${at}.finishSystemId`, `No finish system with id "${surface.finishSystemId}".`);
+      const { system, index: systemIndex } = found;
+      const m = measureSurface(surface.shape, takeoff, `${at}.shape`);
+      if (m.measure === 'area') area += m.quantity;
+      else length += m.quantity;
+      if (m.topHeight !== null) highestTop = Math.max(highestTop, m.topHeight);
+      if (surface.disturbedPaintedArea !== undefined) {
+        disturbedPaint.push({ roomId: room.id, isExterior: room.isExterior === true, area: surface.disturbedPaintedArea });
+      }
+      const amount = { quantity: m.quantity, measure: m.measure, unit: s.lengthUnit };
+      const conditions = {
+        isCeiling: m.isCeiling,
+        isCurved: m.isCurved,
+        topHeight: m.topHeight,
+        isOccupied,
+        scaffoldHeight: s.scaffoldHeight,
+      };
+      const layers: LayerLine[] = system.layers.map((layer, li) => {
+        const lf = `finishSystems[${systemIndex}].layers[${li}]`;
+        const quantity = layerQuantity(amount, layer, products, lf);
+        for (const p of quantity.products) {
+          needs.set(p.productId, (needs.get(p.productId) ?? 0) + p.amount);
+          usedProducts.add(p.productId);
+        }
+        if (layer.method === 'sand') sandsPlaster = true;
+        const labour = layerHours(amount, layer, conditions, s.multipliers, lf);
+        layerTotal += labour.hours;
+        return { layerId: layer.id, name: layer.name, quantity, labour };
+      });
+      surfaces.push({ roomId: room.id, surfaceId: surface.id, name: surface.name, finishSystemId: system.id, measure: m, layers });
+      chains.push({
+        id: surface.id,
+        label: `${room.name} – ${surface.name}`,
+        steps: layers.map((l, li) => ({
+          layerId: l.layerId,
+          label: l.name,
+          crewHours: l.labour.hours,
+          waitHoursAfter: system.layers[li].waitHoursAfter,
+        })),
+      });
+    });
+  });
+
+  // Whole-job totals first, containers second: tinted products are bought once and boxed.
+  let materialsCost = new Decimal(0);
+  const productTotals: ProductTotal[] = [];
+  for (const [productId, need] of needs) {
+    const p = products.get(productId) as Product;
+    const index = input.products.indexOf(p);
+    const dimension = dimensionOf(p.unit, `products[${index}].unit`);
+    const pack = chooseContainers(need, dimension, p.containers, `products[${index}].containers`);
+    materialsCost = materialsCost.plus(pack.totalCost);
+    productTotals.push({ productId, name: p.name, dimension, need, needInUnit: fromBase(need, p.unit), unit: p.unit, pack });
+  }
+
+  const labour = crewTime(layerTotal, s.setupHours, s.cleanupHours, s.crewSize, s.calendar.productiveHoursPerDay);
+  const schedule = scheduleJob({
+    startDate: input.startDate,
+    calendar: s.calendar,
+    crewSize: s.crewSize,
+    setupHours: s.setupHours,
+    cleanupHours: s.cleanupHours,
+    chains,
+  });
+
+  const priceRules = { currency: s.currency, overheadProfit: s.overheadProfit, tax: s.tax, rounding: s.rounding };
+  const price = priceJob({
+    ...priceRules,
+    minimumCharge: s.minimumCharge,
+    discount: input.discount,
+    direct: {
+      labourHours: labour.totalCrewHours,
+      labourRate: s.labourRate,
+      materialsCost: materialsCost,
+      materialsMarkup: s.materialsMarkup,
+      equipment: input.equipment,
+      subcontracts: input.subcontracts,
+      sundries: input.sundries,
+    },
+  });
+  const options = (input.options ?? []).map((o, i) => ({
+    id: o.id,
+    label: o.label,
+    price: priceJob(
+      {
+        ...priceRules,
+        direct: {
+          labourHours: o.labourHours,
+          labourRate: s.labourRate,
+          materialsCost: o.materialsCost,
+          materialsMarkup: s.materialsMarkup,
+          equipment: o.equipment,
+          subcontracts: o.subcontracts,
+          sundries: o.sundries,
+        },
+      },
+      `options[${i}]`,
+    ),
+  }));
+
+  let perArea: EstimateResult['perAreaCheck'] = null;
+  const rates = input.perAreaRates;
+  if (rates) {
+    const priced = surfaces.filter((x) => Object.prototype.hasOwnProperty.call(rates, x.finishSystemId));
+    const check = perAreaCheck(
+      priced.map((x) => ({ label: x.name, quantity: x.measure.quantity, rate: rates[x.finishSystemId] })),
+    );
+    perArea = { total: check.total, lines: priced.map((x, i) => ({ surfaceId: x.surfaceId, amount: check.lines[i] })) };
+  }
+
+  const cautions = safetyCautions({
+    lengthUnit: s.lengthUnit,
+    yearBuilt: input.property?.yearBuilt,
+    disturbedPaint,
+    workingLevel: Math.max(0, highestTop - s.workingReach),
+    products: [...usedProducts].map((id) => {
+      const p = products.get(id) as Product;
+      return { name: p.name, ...p.hazards };
+    }),
+    sandsPlaster,
+  });
+
+  return {
+    surfaces,
+    products: productTotals,
+    labour,
+    schedule,
+    price,
+    options,
+    perAreaCheck: perArea,
+    cautions,
+    totals: { area, length, materialsCost },
+  };
+}

@@ -1,0 +1,37 @@
+import { DomainInputError } from '../errors/domain-input-error';
+import { requireNonNegative } from '../errors/input-checks';
+import type { SurfaceMeasure } from './surface-shape';
+
+export interface MeasureParts {
+  measure?: 'area' | 'length';
+  gross: number;
+  deductions?: number;
+  formula: string;
+  isCeiling: boolean;
+  isCurved: boolean;
+  topHeight: number | null;
+}
+
+/** Builds the result and refuses openings that add up to more than the surface. */
+export function measureResult(parts: MeasureParts, field: string): SurfaceMeasure {
+  const deductions = parts.deductions ?? 0;
+  if (deductions > parts.gross) {
+    throw new DomainInputError(`${field}.openings`, 'The openings add up to more than the surface itself.');
+  }
+  return {
+    measure: parts.measure ?? 'area',
+    quantity: parts.gross - deductions,
+    gross: parts.gross,
+    deductions,
+    formula: parts.formula,
+    isCeiling: parts.isCeiling,
+    isCurved: parts.isCurved,
+    topHeight: parts.topHeight,
+  };
+}
+
+/** Top of a shape whose lowest edge sits at `elevation` (unknown when not given). */
+export function topFrom(elevation: number | undefined, rise: number, field: string): number | null {
+  if (elevation === undefined) return null;
+  return requireNonNegative(elevation, `${field}.elevation`, 'elevation') + rise;
+}

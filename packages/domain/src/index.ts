@@ -1,0 +1,127 @@
+/**
+ * @layerbook/domain — the estimate, schedule, billing and receivables arithmetic.
+ * Pure TypeScript: no I/O, no clock, no randomness. Money is Decimal (inputs: decimal strings
+ * or Decimal; outputs: Decimal); geometry and quantities are plain numbers.
+ */
+export { DomainInputError } from './errors/domain-input-error';
+
+// units
+export type { LengthUnit } from './units/length';
+export { convertArea, convertAreaExact, convertLength, convertLengthExact, isLengthUnit } from './units/length';
+export type { Dimension, MassUnit, QuantityUnit, VolumeUnit } from './units/quantity-unit';
+export {
+  convertQuantity,
+  convertQuantityExact,
+  dimensionOf,
+  fromBase,
+  isMassUnit,
+  isVolumeUnit,
+  toBase,
+} from './units/quantity-unit';
+export type { KitchenVolume } from './units/kitchen-display';
+export { formatKitchenVolume, formatMetricMass, formatMetricVolume } from './units/kitchen-display';
+
+// calendar dates
+export type { IsoDate } from './calendar/local-date';
+export { addDays, daysBetween, fromDayNumber, isoWeekLabel, isoWeekday, mondayOf, toDayNumber } from './calendar/local-date';
+
+// money
+export type { MoneyInput } from './money/money';
+export { fromMinorUnits, roundToCurrency, sumMoney, toMinorUnits } from './money/money';
+export { isKnownCurrency, knownCurrencies, minorUnitDigits } from './money/currency';
+export type { ProcessorCurrencyRule } from './money/stripe-amount';
+export { fromProcessorAmount, processorCurrencyRule, toProcessorAmount } from './money/stripe-amount';
+export { allocateByWeights, splitEvenly } from './money/allocate';
+
+// takeoff geometry
+export type { Opening, SurfaceKind, SurfaceMeasure, SurfaceShape, TakeoffSettings } from './geometry/surface-shape';
+export { DEFAULT_TAKEOFF_SETTINGS, convertMeasure, measureSurface } from './geometry/measure-surface';
+export { shoelaceArea } from './geometry/ceilings';
+
+// finishes
+export type {
+  ApplicationMethod,
+  Container,
+  Coverage,
+  Dilution,
+  FinishLayer,
+  FinishSystem,
+  LabourMultipliers,
+  MixRecipe,
+  Product,
+  ProductHazards,
+  ProductionRate,
+} from './finishes/finish-system';
+export { concentrateShare, splitDilutedMix } from './finishes/dilution';
+export type { RecipeShare } from './finishes/mix-recipe';
+export { recipeShares } from './finishes/mix-recipe';
+export type { LayerQuantity, SurfaceAmount } from './finishes/layer-quantity';
+export { layerQuantity } from './finishes/layer-quantity';
+export type { ContainerPack, PackLine } from './finishes/container-pack';
+export { chooseContainers } from './finishes/container-pack';
+export type { BatchLine, PerBaseRecipe } from './finishes/mix-batch';
+export { mixBatch, scaleRecipeToBase } from './finishes/mix-batch';
+
+// labour
+export type { CrewTime, LayerHours, MultiplierStep, SurfaceConditions } from './labour/layer-hours';
+export { crewTime, layerHours } from './labour/layer-hours';
+
+// schedule
+export type { WorkCalendar } from './schedule/work-calendar';
+export type {
+  JobSchedule,
+  Milestone,
+  ScheduleDay,
+  ScheduleInput,
+  ScheduleStep,
+  ScheduledTask,
+  WorkChain,
+} from './schedule/schedule-job';
+export { scheduleJob } from './schedule/schedule-job';
+
+// pricing
+export type { Ratio } from './pricing/ratio';
+export { marginFromMarkup, markupFromMargin } from './pricing/markup-margin';
+export type { OverheadProfitResult, OverheadProfitRule } from './pricing/overhead-profit';
+export { applyOverheadProfit } from './pricing/overhead-profit';
+export type { RoundingRule } from './pricing/price-rounding';
+export { roundPrice } from './pricing/price-rounding';
+export type { TaxRule } from './pricing/sales-tax';
+export { salesTax } from './pricing/sales-tax';
+export type { CostLine, DirectCostInput, Discount, PriceBreakdown, PriceInput } from './pricing/price-job';
+export { priceJob } from './pricing/price-job';
+export type { PerAreaLine } from './pricing/per-area-check';
+export { perAreaCheck } from './pricing/per-area-check';
+
+// billing
+export type { PaymentBasis, PaymentLine, PaymentLineInput, PaymentTrigger } from './billing/payment-schedule';
+export { buildPaymentSchedule } from './billing/payment-schedule';
+export type { DepositCapRule, DepositCheck } from './billing/deposit-cap';
+export { checkDeposit, depositCap } from './billing/deposit-cap';
+export type { ChangeOrder } from './billing/change-orders';
+export { contractSumToDate, respreadSchedule } from './billing/change-orders';
+export type {
+  PayApplication,
+  PayApplicationInput,
+  PayApplicationSummary,
+  ValueLine,
+  ValueLineInput,
+} from './billing/pay-application';
+export { carryForward, computePayApplication, retainageRateFor } from './billing/pay-application';
+
+// receivables
+export type { AgedReceivable, AgingBucket, AgingReport, ReceivableInput } from './receivables/aging';
+export { AGING_BUCKETS, ageReceivables, bucketFor } from './receivables/aging';
+export type { Opportunity } from './receivables/weighted-pipeline';
+export { weightedPipeline } from './receivables/weighted-pipeline';
+export type { CashForecastInput, ExpectedReceipt, ForecastWeek } from './receivables/cash-forecast';
+export { cashForecast } from './receivables/cash-forecast';
+
+// safety
+export type { Caution, CautionId, SafetyFacts } from './safety/safety-cautions';
+export { STANDING_LINE, safetyCautions } from './safety/safety-cautions';
+
+// the whole estimate
+export type { EstimateInput, EstimateOption, EstimateRoom, EstimateSurface, FirmSettings } from './estimate/estimate-input';
+export type { EstimateResult, LayerLine, ProductTotal, SurfaceResult } from './estimate/compute-estimate';
+export { computeEstimate } from './estimate/compute-estimate';

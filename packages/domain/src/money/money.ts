@@ -1,0 +1,40 @@
+import Decimal from 'decimal.js';
+import { DomainInputError } from '../errors/domain-input-error';
+import { minorUnitDigits } from './currency';
+
+/**
+ * Money crosses the package boundary as a decimal string or a Decimal, never a JS number;
+ * results come back as Decimal (call `.toFixed(digits)` to serialise).
+ */
+export type MoneyInput = string | Decimal;
+
+/** Half away from zero, the usual commercial rounding for invoices. */
+export function roundToCurrency(amount: Decimal.Value, currency: string): Decimal {
+  return new Decimal(amount).toDecimalPlaces(minorUnitDigits(currency), Decimal.ROUND_HALF_UP);
+}
+
+/** Integer count of ISO minor units ($10.00 → 1000). Refuses amounts finer than the minor unit. */
+export function toMinorUnits(amount: Decimal.Value, currency: string, field = 'amount'): number {
+  const digits = minorUnitDigits(currency);
+  const scaled = new Decimal(amount).times(new Decimal(10).pow(digits));
+  if (!scaled.isInteger()) {
+    throw new DomainInputError(field, `${String(amount)} ${currency} has more than ${digits} decimal places.`);
+  }
+  if (scaled.abs().greaterThan(Number.MAX_SAFE_INTEGER)) {
+    throw new DomainInputError(field, 'The amount is too large.');
+  }
+  return scaled.toNumber();
+}
+
+export function fromMinorUnits(minor: number, currency: string, field = 'amount'): Decimal {
+  if (!Number.isSafeInteger(minor)) {
+    throw new DomainInputError(field, 'Minor units must be a whole number.');
+  }
+  return new Decimal(minor).div(new Decimal(10).pow(minorUnitDigits(currency)));
+}
+
+export function sumMoney(amounts: readonly Decimal[]): Decimal {
+  let total = new Decimal(0);
+  for (const a of amounts) total = total.plus(a);
+  return total;
+}

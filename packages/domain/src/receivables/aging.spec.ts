@@ -1,0 +1,51 @@
+import { expectInputError } from '../errors/expect-input-error';
+import { ageReceivables } from './aging';
+
+/** DOMAIN.md §2.12 [D]; buckets by days past due are an accounting convention (common practice). */
+describe('receivables aging', () => {
+  const report = ageReceivables(
+    [
+      { id: 'a', dueDate: '2025-07-10', amount: '2000.00' },
+      { id: 'b', dueDate: '2025-06-20', amount: '1500.00' },
+      { id: 'c', dueDate: '2025-05-15', amount: '3000.00' },
+      { id: 'd', dueDate: '2025-04-10', amount: '800.00' },
+      { id: 'e', dueDate: '2025-02-28', amount: '1200.00' },
+    ],
+    '2025-06-30',
+  );
+
+  it('puts each invoice in its bucket by days past due', () => {
+    expect(report.invoices.map((i) => [i.id, i.daysPastDue, i.bucket])).toEqual([
+      ['a', -10, 'current'],
+      ['b', 10, '1-30'],
+      ['c', 46, '31-60'],
+      ['d', 81, '61-90'],
+      ['e', 122, '90+'],
+    ]);
+    expect(Object.fromEntries(Object.entries(report.buckets).map(([k, v]) => [k, v.toFixed(2)]))).toEqual({
+      current: '2000.00', '1-30': '1500.00', '31-60': '3000.00', '61-90': '800.00', '90+': '1200.00',
+    });
+    expect(report.total.toFixed(2)).toBe('8500.00');
+  });
+
+  it('keeps retainage apart and lets partial payments reduce the open balance', () => {
+    const r = ageReceivables(
+      [
+        { id: 'pay-app', dueDate: '2025-06-01', amount: '18900.00', retainageHeld: '1890.00', payments: ['10000.00'] },
+        { id: 'edge', dueDate: '2025-05-31', amount: '100.00' },
+      ],
+      '2025-06-30',
+    );
+    expect(r.invoices[0].open.toFixed(2)).toBe('7010.00');
+    expect(r.invoices[0].bucket).toBe('1-30');
+    expect(r.invoices[1].bucket).toBe('1-30'); // 30 days past due is still 1–30
+    expect(r.retainage.toFixed(2)).toBe('1890.00');
+    expect(r.total.toFixed(2)).toBe('7110.00');
+  });
+
+  it('names bad fields', () => {
+    expectInputError(() => ageReceivables([{ id: 'x', dueDate: 'June 1', amount: '1.00' }], '2025-06-30'), 'invoices[0].dueDate');
+    expectInputError(() => ageReceivables([{ id: 'x', dueDate: '2025-06-01', amount: '1.00', payments: ['-2'] }], '2025-06-30'), 'invoices[0].payments[0]');
+    expectInputError(() => ageReceivables([], 'today'), 'asOf');
+  });
+});

@@ -1,0 +1,81 @@
+import { expectInputError } from '../errors/expect-input-error';
+import { STANDING_LINE, type SafetyFacts, safetyCautions } from './safety-cautions';
+
+const QUIET: SafetyFacts = { lengthUnit: 'ft', disturbedPaint: [], workingLevel: 0, products: [], sandsPlaster: false };
+const ids = (facts: Partial<SafetyFacts>): string[] => safetyCautions({ ...QUIET, ...facts }).map((c) => c.id);
+
+describe('safety cautions from job facts', () => {
+  it('nothing to flag on a quiet job', () => {
+    expect(ids({})).toEqual([]);
+  });
+
+  it.each([
+    // 40 CFR 745.83 minor repair and maintenance: ≤ 6 ft² per room interior, ≤ 20 ft² exterior;
+    // target housing built before 1978, 15 U.S.C. 2681(17)
+    [1975, [{ roomId: 'r1', isExterior: false, area: 6 }], []],
+    [1975, [{ roomId: 'r1', isExterior: false, area: 4 }, { roomId: 'r1', isExterior: false, area: 3 }], ['lead-safe-work']],
+    [1975, [{ roomId: 'r1', isExterior: false, area: 4 }, { roomId: 'r2', isExterior: false, area: 3 }], []],
+    [1975, [{ roomId: 'x', isExterior: true, area: 20 }], []],
+    [1975, [{ roomId: 'x', isExterior: true, area: 12 }, { roomId: 'y', isExterior: true, area: 9 }], ['lead-safe-work']],
+    [1978, [{ roomId: 'r1', isExterior: false, area: 100 }], []],
+  ])('built %d, disturbed %j', (yearBuilt, disturbedPaint, expected) => {
+    expect(ids({ yearBuilt, disturbedPaint })).toEqual(expected);
+  });
+
+  it('converts metric disturbed areas: 0.6 m² is 6.46 ft², over the 6 ft² room limit', () => {
+    // 40 CFR 745.83; ft² factor NIST SP 811 App. B.8
+    expect(ids({ lengthUnit: 'm', yearBuilt: 1960, disturbedPaint: [{ roomId: 'r', isExterior: false, area: 0.6 }] })).toEqual(['lead-safe-work']);
+  });
+
+  it.each([
+    // 29 CFR 1926.501(b)(1): 6 ft or more; 29 CFR 1926.451(g)(1): more than 10 ft
+    [5.9, []],
+    [6, ['edge-fall-protection']],
+    [10, ['edge-fall-protection']],
+    [10.1, ['scaffold-fall-protection', 'edge-fall-protection']],
+  ])('working level %d ft', (workingLevel, expected) => {
+    expect(ids({ workingLevel })).toEqual(expected);
+  });
+
+  it.each([
+    // 29 CFR 1910.106(a)(19): flammable liquid, flash point below 73.4 °F (23 °C)
+    [12, ['flammable-liquid']], // isopropyl alcohol closed-cup flash point 12 °C (supplier SDS)
+    [22.9, ['flammable-liquid']],
+    [23, []],
+  ])('flash point %d °C', (flashPointC, expected) => {
+    expect(ids({ products: [{ name: 'Isopropyl alcohol', flashPointC }] })).toEqual(expected);
+  });
+
+  it('lime (ICSC 0408) and sanding plaster (29 CFR 1926.1153)', () => {
+    expect(ids({ products: [{ name: 'Lime putty', isLime: true }], sandsPlaster: true })).toEqual(['lime-alkali', 'plaster-dust-silica']);
+  });
+
+  it('every caution names its rule and carries the standing line', () => {
+    const all = safetyCautions({
+      ...QUIET,
+      yearBuilt: 1950,
+      disturbedPaint: [{ roomId: 'r', isExterior: false, area: 50 }],
+      workingLevel: 14,
+      products: [{ name: 'Isopropyl alcohol', flashPointC: 12 }, { name: 'Lime putty', isLime: true }],
+      sandsPlaster: true,
+    });
+    expect(all.map((c) => [c.id, c.rule])).toEqual([
+      ['lead-safe-work', '40 CFR 745 subpart E (EPA Renovation, Repair and Painting)'],
+      ['scaffold-fall-protection', '29 CFR 1926.451(g)(1)'],
+      ['edge-fall-protection', '29 CFR 1926.501(b)(1); 29 CFR 1926.1053(b)(1)'],
+      ['flammable-liquid', '29 CFR 1910.106 (flash point below 73.4 °F / 23 °C)'],
+      ['lime-alkali', 'ICSC 0408 (calcium hydroxide)'],
+      ['plaster-dust-silica', '29 CFR 1926.1153 (respirable crystalline silica)'],
+    ]);
+    for (const c of all) {
+      expect(c.standing).toBe(STANDING_LINE);
+      expect(c.bullets.length).toBeGreaterThan(0);
+    }
+    expect(STANDING_LINE).toMatch(/local codes.*safety data sheet.*licensed or qualified.*not legal or safety advice/);
+  });
+
+  it('names bad fields', () => {
+    expectInputError(() => safetyCautions({ ...QUIET, yearBuilt: 1975, disturbedPaint: [{ roomId: 'r', isExterior: false, area: -1 }] }), 'disturbedPaint[0].area');
+    expectInputError(() => safetyCautions({ ...QUIET, workingLevel: Number.NaN }), 'workingLevel');
+  });
+});

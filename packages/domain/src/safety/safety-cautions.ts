@@ -1,0 +1,133 @@
+import { requireFiniteNumber, requireInteger, requireNonNegative } from '../errors/input-checks';
+import { type LengthUnit, convertArea, convertLength } from '../units/length';
+
+export type CautionId =
+  | 'lead-safe-work'
+  | 'scaffold-fall-protection'
+  | 'edge-fall-protection'
+  | 'flammable-liquid'
+  | 'lime-alkali'
+  | 'plaster-dust-silica';
+
+export interface Caution {
+  /** stable, for translation in the apps */
+  id: CautionId;
+  title: string;
+  bullets: string[];
+  /** the rule the caution points to */
+  rule: string;
+  standing: string;
+}
+
+export const STANDING_LINE =
+  "Follow local codes, the product's safety data sheet and licensed or qualified practice. This reminder is not legal or safety advice.";
+
+export interface SafetyFacts {
+  lengthUnit: LengthUnit;
+  yearBuilt?: number;
+  /** painted surface the work disturbs (sanding, scraping, removing trim), per room */
+  disturbedPaint: ReadonlyArray<{ roomId: string; isExterior: boolean; area: number }>;
+  /** highest standing or platform level the work needs, in `lengthUnit` */
+  workingLevel: number;
+  products: ReadonlyArray<{ name: string; flashPointC?: number; isLime?: boolean; containsSilica?: boolean }>;
+  sandsPlaster: boolean;
+}
+
+/** Target housing: built before 1978 (15 U.S.C. 2681(17)). */
+const LEAD_YEAR = 1978;
+/** Minor repair and maintenance limits, 40 CFR 745.83: ≤ 6 ft² per room inside, ≤ 20 ft² outside. */
+const INTERIOR_FT2 = 6;
+const EXTERIOR_FT2 = 20;
+/** 29 CFR 1926.451(g)(1): scaffold more than 10 ft above a lower level. */
+const SCAFFOLD_FT = 10;
+/** 29 CFR 1926.501(b)(1): unprotected side or edge 6 ft or more above a lower level. */
+const EDGE_FT = 6;
+/** 29 CFR 1910.106(a)(19): flammable liquid, flash point below 73.4 °F (23 °C). */
+const FLAMMABLE_FLASH_C = 23;
+
+function caution(id: CautionId, title: string, rule: string, bullets: string[]): Caution {
+  return { id, title, bullets, rule, standing: STANDING_LINE };
+}
+
+/** Reminders drawn from job facts; English text, stable ids for the apps to translate. */
+export function safetyCautions(facts: SafetyFacts): Caution[] {
+  const out: Caution[] = [];
+  const unit = facts.lengthUnit;
+
+  if (facts.yearBuilt !== undefined) requireInteger(facts.yearBuilt, 'yearBuilt', 1000, 'year built');
+  if (facts.yearBuilt !== undefined && facts.yearBuilt < LEAD_YEAR) {
+    const perRoom = new Map<string, number>();
+    let exterior = 0;
+    facts.disturbedPaint.forEach((d, i) => {
+      const ft2 = convertArea(requireNonNegative(d.area, `disturbedPaint[${i}].area`, 'disturbed area'), unit, 'ft');
+      if (d.isExterior) exterior += ft2;
+      else perRoom.set(d.roomId, (perRoom.get(d.roomId) ?? 0) + ft2);
+    });
+    const overInside = [...perRoom.values()].some((a) => a > INTERIOR_FT2);
+    if (overInside || exterior > EXTERIOR_FT2) {
+      out.push(
+        caution('lead-safe-work', 'Lead-safe work practices', '40 CFR 745 subpart E (EPA Renovation, Repair and Painting)', [
+          `Built before ${LEAD_YEAR} and the work disturbs more painted surface than the minor-repair limits (more than 6 ft² in a room or 20 ft² outside).`,
+          'Use a certified firm with a certified renovator assigned, and record delivery of the lead pamphlet before work starts.',
+          'Contain the work area and clean and verify under the rule; avoid the practices it prohibits.',
+          'Keep the records for three years and give the compliance record with the final invoice.',
+        ]),
+      );
+    }
+  }
+
+  const levelFt = convertLength(requireFiniteNumber(facts.workingLevel, 'workingLevel', 'working level'), unit, 'ft');
+  if (levelFt > SCAFFOLD_FT) {
+    out.push(
+      caution('scaffold-fall-protection', 'Scaffold fall protection', '29 CFR 1926.451(g)(1)', [
+        'Work on a scaffold more than 10 ft above a lower level needs guardrails or personal fall arrest, depending on the scaffold type.',
+        'Have a competent person erect and inspect the scaffold; lock the casters on rolling towers.',
+        'Price the scaffold rental and the time to put it up and take it down.',
+      ]),
+    );
+  }
+  if (levelFt >= EDGE_FT) {
+    out.push(
+      caution('edge-fall-protection', 'Unprotected edges and ladders', '29 CFR 1926.501(b)(1); 29 CFR 1926.1053(b)(1)', [
+        'Protect sides and edges 6 ft or more above a lower level.',
+        'Ladders to an upper landing extend at least 3 ft above it, or are secured with a grab device.',
+      ]),
+    );
+  }
+
+  const flammable = facts.products.filter((p, i) => {
+    if (p.flashPointC === undefined) return false;
+    return requireFiniteNumber(p.flashPointC, `products[${i}].flashPointC`, 'flash point') < FLAMMABLE_FLASH_C;
+  });
+  if (flammable.length > 0) {
+    out.push(
+      caution('flammable-liquid', 'Flammable liquids in the mix', '29 CFR 1910.106 (flash point below 73.4 °F / 23 °C)', [
+        `Flammable: ${flammable.map((p) => p.name).join(', ')}.`,
+        'No open flames, pilot lights or sparks; ventilate; keep containers closed. Vapours can be heavier than air and travel to an ignition source.',
+        'Lay oily rags flat to dry or keep them in water in a closed metal can.',
+      ]),
+    );
+  }
+
+  const lime = facts.products.filter((p) => p.isLime === true);
+  if (lime.length > 0) {
+    out.push(
+      caution('lime-alkali', 'Lime is caustic', 'ICSC 0408 (calcium hydroxide)', [
+        `Lime products: ${lime.map((p) => p.name).join(', ')}.`,
+        'Strongly alkaline: can burn eyes and skin. Wear goggles or a face shield, alkali-resistant gloves and covered skin.',
+        'Keep eyewash on site; flush eyes or skin with water for at least 15 minutes.',
+      ]),
+    );
+  }
+
+  if (facts.sandsPlaster) {
+    out.push(
+      caution('plaster-dust-silica', 'Dust from sanding plaster', '29 CFR 1926.1153 (respirable crystalline silica)', [
+        "Check section 3 of each product's safety data sheet for crystalline silica; the standard applies unless exposure stays below 25 µg/m³.",
+        'Prefer wet methods and HEPA vacuums to dry sweeping or compressed air.',
+        'Respirators need a written program, medical clearance and fit testing.',
+      ]),
+    );
+  }
+  return out;
+}
