@@ -1,4 +1,4 @@
-import { clientCreate, clientListQuery, clientUpdate, contactCreate, siteCreate, uuid } from '@layerbook/contracts';
+import { clientCreate, clientListQuery, clientUpdate, contactCreate, siteCreate, siteUpdate, uuid } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { Router } from 'express';
 import { z } from 'zod';
@@ -61,7 +61,7 @@ export function siteRoutes(ctx: AppContext): Router {
   router.patch('/:id', async (req, res) => {
     const staff = requireStaff(req, 'office');
     const { id } = parse(siteParam, req.params);
-    const patch = parse(siteCreate.partial().strict(), req.body);
+    const patch = parse(siteUpdate, req.body);
     res.json(await withTenant(ctx.pool, staff.tenantId, (tx) => updateSite(tx, id, patch)));
   });
   return router;

@@ -11,20 +11,26 @@ export interface Workers {
   stop(): Promise<void>;
 }
 
+/**
+ * pg-boss 10 polls once per interval per worker, whatever it found; several workers per queue in one
+ * process give concurrency, each handling one job so a failure retries only that job.
+ */
+async function workEach<T extends object>(boss: StartedQueue['boss'], name: string, workers: number, handle: (data: T) => Promise<unknown>): Promise<void> {
+  for (let i = 0; i < workers; i++) {
+    await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: 0.5 }, async ([job]) => {
+      if (job) await handle(job.data);
+    });
+  }
+}
+
 /** Registers every job handler. Runs in the web process by default, or alone in `worker` mode. */
 export async function startWorkers(config: Config, queue: StartedQueue, logger: Logger, now: () => Date = () => new Date()): Promise<Workers> {
   const pool = new Pool({ connectionString: config.DATABASE_JOBS_URL, max: 4, application_name: 'layerbook-worker' });
   const transport = nodemailer.createTransport({ host: config.SMTP_HOST, port: config.SMTP_PORT, secure: false, ignoreTLS: true });
   const { boss } = queue;
-  await boss.work<MailSendJob>(QUEUES.mailSend, { batchSize: 1, pollingIntervalSeconds: 0.5 }, async ([job]) => {
-    if (job) await sendOutboxMail(pool, transport, config.MAIL_FROM, job.data, logger);
-  });
-  await boss.work<FollowUpSweepJob>(QUEUES.followUpSweep, { batchSize: 1, pollingIntervalSeconds: 1 }, async ([job]) => {
-    if (job) await sweepFollowUps(pool, queue, job.data ?? {}, now());
-  });
-  await boss.work<FollowUpDigestJob>(QUEUES.followUpDigest, { batchSize: 1, pollingIntervalSeconds: 1 }, async ([job]) => {
-    if (job) await sendFollowUpDigest(pool, queue, config, job.data, logger);
-  });
+  await workEach<MailSendJob>(boss, QUEUES.mailSend, 4, (data) => sendOutboxMail(pool, transport, config.MAIL_FROM, data, logger));
+  await workEach<FollowUpSweepJob>(boss, QUEUES.followUpSweep, 1, (data) => sweepFollowUps(pool, queue, data ?? {}, now()));
+  await workEach<FollowUpDigestJob>(boss, QUEUES.followUpDigest, 2, (data) => sendFollowUpDigest(pool, queue, config, data, logger));
   // Declared once; pg-boss keeps one schedule per queue however many processes call this.
   await boss.schedule(QUEUES.followUpSweep, FOLLOW_UP_SWEEP_CRON, {}, { tz: 'UTC' });
   return {

@@ -13,18 +13,31 @@ export const CLIENT_KIND_LABELS: Record<ClientKind, string> = {
 
 const optionalEmail = z.union([email, z.literal('')]).default('');
 
-export const siteCreate = z.strictObject({
-  label: text(80).default(''),
+const siteFields = {
+  label: text(80),
   addressLine1: requiredText(200, 'Enter the street address.'),
-  addressLine2: text(200).default(''),
-  city: text(80).default(''),
-  region: text(80).default(''),
-  postalCode: text(20).default(''),
-  country: z.string().trim().regex(/^[A-Z]{2}$/, { error: 'Use a two-letter country code, like US.' }).default('US'),
-  yearBuilt: yearBuilt.nullable().default(null),
-  accessNotes: text(2000).default(''),
+  addressLine2: text(200),
+  city: text(80),
+  region: text(80),
+  postalCode: text(20),
+  country: z.string().trim().regex(/^[A-Z]{2}$/, { error: 'Use a two-letter country code, like US.' }),
+  yearBuilt: yearBuilt.nullable(),
+  accessNotes: text(2000),
+};
+export const siteCreate = z.strictObject({
+  ...siteFields,
+  label: siteFields.label.default(''),
+  addressLine2: siteFields.addressLine2.default(''),
+  city: siteFields.city.default(''),
+  region: siteFields.region.default(''),
+  postalCode: siteFields.postalCode.default(''),
+  country: siteFields.country.default('US'),
+  yearBuilt: siteFields.yearBuilt.default(null),
+  accessNotes: siteFields.accessNotes.default(''),
 });
 export type SiteCreate = z.infer<typeof siteCreate>;
+/** No defaults: a partial update changes only what it names. */
+export const siteUpdate = z.strictObject(siteFields).partial();
 
 export const contactCreate = z.strictObject({
   name: requiredText(120, 'Enter the contact name.'),
@@ -34,16 +47,23 @@ export const contactCreate = z.strictObject({
 });
 export type ContactCreate = z.infer<typeof contactCreate>;
 
-export const clientCreate = z.strictObject({
+const clientFields = {
   kind: z.enum(CLIENT_KINDS, { error: 'Choose homeowner, designer, general contractor or other.' }),
-  isCompany: z.boolean().default(false),
+  isCompany: z.boolean({ error: 'Say whether this is a company.' }),
   name: requiredText(160, 'Enter the client name.'),
-  email: optionalEmail,
-  phone: text(40).default(''),
-  notes: text(5000).default(''),
+  email: z.union([email, z.literal('')]),
+  phone: text(40),
+  notes: text(5000),
+};
+export const clientCreate = z.strictObject({
+  ...clientFields,
+  isCompany: clientFields.isCompany.default(false),
+  email: clientFields.email.default(''),
+  phone: clientFields.phone.default(''),
+  notes: clientFields.notes.default(''),
 });
 export type ClientCreate = z.infer<typeof clientCreate>;
-export const clientUpdate = clientCreate.partial().strict();
+export const clientUpdate = z.strictObject(clientFields).partial();
 
 export const clientListQuery = z.strictObject({
   q: z.string().trim().max(100).optional(),

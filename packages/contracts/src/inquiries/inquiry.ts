@@ -80,26 +80,43 @@ export const publicInquiryRequest = z
   });
 export type PublicInquiryRequest = z.infer<typeof publicInquiryRequest>;
 
+/** Inquiry fields as staff edit them; no defaults here, so a partial update never blanks a field. */
+const inquiryFields = {
+  contactName: requiredText(120, 'Enter the contact name.'),
+  email: z.union([email, z.literal('')]),
+  phone,
+  siteAddress: text(300),
+  yearBuilt: yearBuilt.nullable(),
+  rooms: text(2000),
+  finishIdea: text(2000),
+  timeline: text(200),
+  budgetRange: z.enum(BUDGET_RANGES, { error: 'Choose a budget range from the list.' }),
+  source: z.enum(INQUIRY_SOURCES, { error: 'Choose where the inquiry came from.' }),
+  referrerName: text(120),
+  estimatedValue: moneyAmount.nullable(),
+  assigneeUserId: uuid('person').nullable(),
+  nextFollowUp: isoDate.nullable(),
+};
+
 /** Staff log an inquiry from a call or a referral. */
 export const inquiryCreate = z.strictObject({
-  contactName: requiredText(120, 'Enter the contact name.'),
-  email: z.union([email, z.literal('')]).default(''),
+  ...inquiryFields,
+  email: inquiryFields.email.default(''),
   phone: phone.default(''),
-  siteAddress: text(300).default(''),
-  yearBuilt: yearBuilt.nullable().default(null),
-  rooms: text(2000).default(''),
-  finishIdea: text(2000).default(''),
-  timeline: text(200).default(''),
-  budgetRange: z.enum(BUDGET_RANGES, { error: 'Choose a budget range from the list.' }).default(''),
-  source: z.enum(INQUIRY_SOURCES, { error: 'Choose where the inquiry came from.' }),
-  referrerName: text(120).default(''),
-  estimatedValue: moneyAmount.nullable().default(null),
-  assigneeUserId: uuid('person').nullable().default(null),
-  nextFollowUp: isoDate.nullable().default(null),
+  siteAddress: inquiryFields.siteAddress.default(''),
+  yearBuilt: inquiryFields.yearBuilt.default(null),
+  rooms: inquiryFields.rooms.default(''),
+  finishIdea: inquiryFields.finishIdea.default(''),
+  timeline: inquiryFields.timeline.default(''),
+  budgetRange: inquiryFields.budgetRange.default(''),
+  referrerName: inquiryFields.referrerName.default(''),
+  estimatedValue: inquiryFields.estimatedValue.default(null),
+  assigneeUserId: inquiryFields.assigneeUserId.default(null),
+  nextFollowUp: inquiryFields.nextFollowUp.default(null),
 });
 export type InquiryCreate = z.infer<typeof inquiryCreate>;
 
-export const inquiryUpdate = inquiryCreate.partial().strict();
+export const inquiryUpdate = z.strictObject(inquiryFields).partial();
 export type InquiryUpdate = z.infer<typeof inquiryUpdate>;
 
 export const stageMove = z

@@ -1,0 +1,58 @@
+import { linkIn } from '../testing/inbox';
+import { newAgent, signUpFirm, startTestServer, TestServer, uniqueEmail } from '../testing/harness';
+
+let t: TestServer;
+beforeAll(async () => {
+  t = await startTestServer();
+});
+afterAll(() => t.stop());
+
+describe('clients, contacts and sites', () => {
+  it('creates a designer client with a contact and a site, and lists with search and pages', async () => {
+    const o = await signUpFirm(t.app, 'Client Plaster');
+    const made = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'designer', isCompany: true, name: 'Quillfeather Interiors', email: 'studio@quillfeather.example' });
+    expect(made.status).toBe(201);
+    const id = made.body.id;
+    expect((await o.agent.post(`/api/clients/${id}/contacts`).set('x-csrf-token', o.csrf()).send({ name: 'Rosalind Vetch', roleTitle: 'Project lead' })).status).toBe(201);
+    const site = await o.agent.post(`/api/clients/${id}/sites`).set('x-csrf-token', o.csrf()).send({ addressLine1: '9 Heron Walk', city: 'Ashbury', yearBuilt: 1994, accessNotes: 'Stairwell ceiling 22 ft' });
+    expect(site.body).toMatchObject({ isPre1978: false, accessNotes: 'Stairwell ceiling 22 ft' });
+    const patched = await o.agent.patch(`/api/sites/${site.body.id}`).set('x-csrf-token', o.csrf()).send({ label: 'Main house' });
+    expect(patched.body).toMatchObject({ label: 'Main house', addressLine1: '9 Heron Walk', yearBuilt: 1994 });
+    const renamed = await o.agent.patch(`/api/clients/${id}`).set('x-csrf-token', o.csrf()).send({ phone: '555-0123' });
+    expect(renamed.body).toMatchObject({ phone: '555-0123', name: 'Quillfeather Interiors', email: 'studio@quillfeather.example' });
+    const detail = await o.agent.get(`/api/clients/${id}`);
+    expect(detail.body.contacts[0].name).toBe('Rosalind Vetch');
+    expect(detail.body.sites[0].label).toBe('Main house');
+    for (let i = 0; i < 3; i++) await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: `Home ${i}` });
+    const first = await o.agent.get('/api/clients').query({ limit: 2 });
+    const second = await o.agent.get('/api/clients').query({ limit: 2, after: first.body.nextCursor });
+    expect([...first.body.items, ...second.body.items].map((c: { name: string }) => c.name)).toEqual(['Home 2', 'Home 1', 'Home 0', 'Quillfeather Interiors']);
+    expect(second.body.nextCursor).toBeNull();
+    expect((await o.agent.get('/api/clients').query({ q: 'quill' })).body.items).toHaveLength(1);
+    expect((await o.agent.get('/api/clients').query({ kind: 'designer' })).body.items).toHaveLength(1);
+  });
+
+  it('answers 400 naming the field for bad input, and writes nothing', async () => {
+    const o = await signUpFirm(t.app);
+    const bad = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'landlord', name: '', email: 'nope' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['email', 'kind', 'name']);
+    const made = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: 'H' });
+    const badSite = await o.agent.post(`/api/clients/${made.body.id}/sites`).set('x-csrf-token', o.csrf()).send({ addressLine1: '', yearBuilt: 1066, country: 'usa' });
+    expect(badSite.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['addressLine1', 'country', 'yearBuilt']);
+    expect((await o.agent.get(`/api/clients/${made.body.id}`)).body.sites).toHaveLength(0);
+  });
+
+  it('keeps crew out of clients and inquiries (no contact or money figures for crew here)', async () => {
+    const o = await signUpFirm(t.app);
+    const email = uniqueEmail('crew');
+    await o.agent.post('/api/team/invitations').set('x-csrf-token', o.csrf()).send({ email, role: 'crew' });
+    const token = new URL(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email)))).searchParams.get('token')!;
+    const crew = await newAgent(t.app);
+    await crew.agent.post('/api/auth/invitations/accept').set('x-csrf-token', crew.csrf()).send({ token, name: 'Crew', password: 'crew-password-2026' });
+    await crew.refresh();
+    for (const path of ['/api/clients', '/api/inquiries', '/api/inquiries/board', '/api/inquiries/today']) {
+      expect({ path, status: (await crew.agent.get(path)).status }).toEqual({ path, status: 403 });
+    }
+  });
+});
