@@ -6,9 +6,7 @@ import type { AppContext } from '../context';
 import type { Principal, SessionPrincipal } from '../http/principal';
 import { ABSOLUTE_MS } from '../http/session';
 import { parse } from '../http/validate';
-import { loadClientPrincipal } from './portal-auth';
 import { signIn } from './staff-auth';
-import { loadStaffPrincipal } from './staff-principal';
 
 declare module 'express-session' {
   interface SessionData {
@@ -31,10 +29,8 @@ export function createPassport(ctx: AppContext): passport.PassportStatic {
     const stored: SessionPrincipal = { kind: user.kind, id: user.id, tenantId: user.tenantId };
     done(null, stored);
   });
-  instance.deserializeUser((stored: SessionPrincipal, done) => {
-    const load = stored.kind === 'staff' ? loadStaffPrincipal(ctx.pool, stored.id, stored.tenantId) : loadClientPrincipal(ctx.pool, stored.id, stored.tenantId);
-    load.then((principal) => done(null, principal ?? false)).catch(done);
-  });
+  // No query here: routes re-load the person inside their own firm transaction (http/guards.ts).
+  instance.deserializeUser((stored: SessionPrincipal, done) => done(null, stored));
   return instance;
 }
 

@@ -1,4 +1,4 @@
-import { and, eq, firms, isNull, portalLinks, portalUsers, withLookup, withTenant } from '@layerbook/db';
+import { and, eq, firms, isNull, portalLinks, portalUsers, TenantTx, withLookup, withTenant } from '@layerbook/db';
 import type { Pool } from 'pg';
 import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
@@ -51,8 +51,13 @@ export async function redeemPortalLink(ctx: AppContext, token: string): Promise<
   return principal;
 }
 
-export async function loadClientPrincipal(pool: Pool, portalUserId: string, tenantId: string): Promise<ClientPrincipal | null> {
-  return withTenant(pool, tenantId, async (tx) => {
+export function loadClientPrincipal(pool: Pool, portalUserId: string, tenantId: string): Promise<ClientPrincipal | null> {
+  return withTenant(pool, tenantId, (tx) => loadClientInTx(tx, portalUserId));
+}
+
+/** Loads a portal client inside the request's firm transaction (see loadStaffInTx). */
+export async function loadClientInTx(tx: TenantTx, portalUserId: string): Promise<ClientPrincipal | null> {
+  {
     const rows = await tx.db
       .select({ name: portalUsers.name, email: portalUsers.email, status: portalUsers.status, firmName: firms.name })
       .from(portalUsers)
@@ -60,6 +65,6 @@ export async function loadClientPrincipal(pool: Pool, portalUserId: string, tena
       .where(and(eq(portalUsers.tenantId, tx.tenantId), eq(portalUsers.id, portalUserId)));
     const row = rows[0];
     if (!row || row.status !== 'active') return null;
-    return { kind: 'client', id: portalUserId, tenantId, name: row.name, email: row.email, firmName: row.firmName };
-  });
+    return { kind: 'client', id: portalUserId, tenantId: tx.tenantId, name: row.name, email: row.email, firmName: row.firmName };
+  }
 }

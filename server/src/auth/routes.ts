@@ -12,15 +12,17 @@ import type passport from 'passport';
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { csrf } from '../http/csrf';
-import type { Principal, StaffPrincipal } from '../http/principal';
+import type { Principal } from '../http/principal';
+import { loadStaffPrincipal } from './staff-principal';
 import { parse } from '../http/validate';
 import { acceptInvitation, previewInvitation } from './invitations';
 import { logIn, logOut } from './passport-setup';
 import { completePasswordReset, requestPasswordReset } from './password-reset';
 import { signUp } from './staff-auth';
 
-export function staffSession(req: Request, fresh = false): StaffSession {
-  const user = req.user?.kind === 'staff' ? (req.user as StaffPrincipal) : null;
+export async function staffSession(ctx: AppContext, req: Request, fresh = false): Promise<StaffSession> {
+  const claim = req.user?.kind === 'staff' ? req.user : null;
+  const user = claim ? await loadStaffPrincipal(ctx.pool, claim.id, claim.tenantId) : null;
   return {
     user: user ? { id: user.id, name: user.name, email: user.email, role: user.role, firmId: user.tenantId, firmName: user.firmName } : null,
     csrfToken: csrf.generateToken(req, fresh),
@@ -29,14 +31,14 @@ export function staffSession(req: Request, fresh = false): StaffSession {
 
 async function signInAndAnswer(ctx: AppContext, req: Request, res: Response, principal: Principal, status = 200) {
   await logIn(req, principal, ctx.now());
-  res.status(status).json(staffSession(req, true));
+  res.status(status).json(await staffSession(ctx, req, true));
 }
 
 export function authRoutes(ctx: AppContext, pass: passport.PassportStatic, signInLimiter: import('express').RequestHandler): Router {
   const router = Router();
 
-  router.get('/session', (req, res) => {
-    res.set('cache-control', 'no-store').json(staffSession(req));
+  router.get('/session', async (req, res) => {
+    res.set('cache-control', 'no-store').json(await staffSession(ctx, req));
   });
 
   router.post('/signup', signInLimiter, async (req, res) => {
@@ -59,7 +61,7 @@ export function authRoutes(ctx: AppContext, pass: passport.PassportStatic, signI
   router.post('/signout', async (req, res) => {
     await logOut(req);
     await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
-    res.json(staffSession(req, true));
+    res.json(await staffSession(ctx, req, true));
   });
 
   router.post('/password-reset', signInLimiter, async (req, res) => {

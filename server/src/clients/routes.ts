@@ -1,9 +1,8 @@
 import { clientCreate, clientListQuery, clientUpdate, contactCreate, siteCreate, siteUpdate, uuid } from '@layerbook/contracts';
-import { withTenant } from '@layerbook/db';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
-import { requireStaff } from '../http/guards';
+import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { addContact, addSite, createClient, getClient, listClients, updateClient, updateSite } from './service';
 
@@ -14,42 +13,27 @@ export function clientRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    const staff = requireStaff(req, 'office');
-    const q = parse(clientListQuery, req.query);
-    res.json(await withTenant(ctx.pool, staff.tenantId, (tx) => listClients(tx, q)));
+    res.json(await withStaff(ctx, req, 'office', (tx) => listClients(tx, parse(clientListQuery, req.query))));
   });
 
   router.post('/', async (req, res) => {
-    const staff = requireStaff(req, 'office');
-    const input = parse(clientCreate, req.body);
-    res.status(201).json(await withTenant(ctx.pool, staff.tenantId, (tx) => createClient(tx, staff.id, input)));
+    res.status(201).json(await withStaff(ctx, req, 'office', (tx, staff) => createClient(tx, staff.id, parse(clientCreate, req.body))));
   });
 
   router.get('/:id', async (req, res) => {
-    const staff = requireStaff(req, 'office');
-    const { id } = parse(idParam, req.params);
-    res.json(await withTenant(ctx.pool, staff.tenantId, (tx) => getClient(tx, id)));
+    res.json(await withStaff(ctx, req, 'office', (tx) => getClient(tx, parse(idParam, req.params).id)));
   });
 
   router.patch('/:id', async (req, res) => {
-    const staff = requireStaff(req, 'office');
-    const { id } = parse(idParam, req.params);
-    const patch = parse(clientUpdate, req.body);
-    res.json(await withTenant(ctx.pool, staff.tenantId, (tx) => updateClient(tx, id, patch)));
+    res.json(await withStaff(ctx, req, 'office', (tx) => updateClient(tx, parse(idParam, req.params).id, parse(clientUpdate, req.body))));
   });
 
   router.post('/:id/contacts', async (req, res) => {
-    const staff = requireStaff(req, 'office');
-    const { id } = parse(idParam, req.params);
-    const input = parse(contactCreate, req.body);
-    res.status(201).json(await withTenant(ctx.pool, staff.tenantId, (tx) => addContact(tx, id, input)));
+    res.status(201).json(await withStaff(ctx, req, 'office', (tx) => addContact(tx, parse(idParam, req.params).id, parse(contactCreate, req.body))));
   });
 
   router.post('/:id/sites', async (req, res) => {
-    const staff = requireStaff(req, 'office');
-    const { id } = parse(idParam, req.params);
-    const input = parse(siteCreate, req.body);
-    res.status(201).json(await withTenant(ctx.pool, staff.tenantId, (tx) => addSite(tx, id, input)));
+    res.status(201).json(await withStaff(ctx, req, 'office', (tx) => addSite(tx, parse(idParam, req.params).id, parse(siteCreate, req.body))));
   });
 
   return router;
@@ -59,10 +43,7 @@ export function clientRoutes(ctx: AppContext): Router {
 export function siteRoutes(ctx: AppContext): Router {
   const router = Router();
   router.patch('/:id', async (req, res) => {
-    const staff = requireStaff(req, 'office');
-    const { id } = parse(siteParam, req.params);
-    const patch = parse(siteUpdate, req.body);
-    res.json(await withTenant(ctx.pool, staff.tenantId, (tx) => updateSite(tx, id, patch)));
+    res.json(await withStaff(ctx, req, 'office', (tx) => updateSite(tx, parse(siteParam, req.params).id, parse(siteUpdate, req.body))));
   });
   return router;
 }

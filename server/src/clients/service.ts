@@ -73,15 +73,14 @@ export async function listClients(tx: TenantTx, q: { q?: string; kind?: ClientRo
 export async function getClient(tx: TenantTx, id: string): Promise<ClientDetail> {
   const client = (await tx.db.select().from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id))))[0];
   if (!client) throw notFound('client');
-  const [contacts, siteRows, linked] = await Promise.all([
-    tx.db.select().from(clientContacts).where(and(eq(clientContacts.tenantId, tx.tenantId), eq(clientContacts.clientId, id))).orderBy(clientContacts.createdAt),
-    tx.db.select().from(sites).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.clientId, id))).orderBy(sites.createdAt),
-    tx.db
-      .select({ id: inquiries.id, contactName: inquiries.contactName, stage: inquiries.stage, createdAt: inquiries.createdAt })
-      .from(inquiries)
-      .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.clientId, id)))
-      .orderBy(desc(inquiries.createdAt)),
-  ]);
+  // One connection runs one query at a time, so these run in turn.
+  const contacts = await tx.db.select().from(clientContacts).where(and(eq(clientContacts.tenantId, tx.tenantId), eq(clientContacts.clientId, id))).orderBy(clientContacts.createdAt);
+  const siteRows = await tx.db.select().from(sites).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.clientId, id))).orderBy(sites.createdAt);
+  const linked = await tx.db
+    .select({ id: inquiries.id, contactName: inquiries.contactName, stage: inquiries.stage, createdAt: inquiries.createdAt })
+    .from(inquiries)
+    .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.clientId, id)))
+    .orderBy(desc(inquiries.createdAt));
   return {
     ...toSummary(client),
     notes: client.notes,

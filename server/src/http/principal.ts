@@ -1,6 +1,6 @@
 import type { StaffRole } from '@layerbook/contracts';
 
-/** Who is making the request: a firm's staff member (admin app) or a client (portal). */
+/** A firm's staff member (admin app), as loaded inside a request's firm transaction. */
 export interface StaffPrincipal {
   readonly kind: 'staff';
   readonly id: string; // user id
@@ -10,8 +10,12 @@ export interface StaffPrincipal {
   readonly name: string;
   readonly email: string;
   readonly firmName: string;
+  /** The firm's calendar and money, loaded with the principal so routes need no extra query. */
+  readonly timeZone: string;
+  readonly currency: string;
 }
 
+/** A firm's client (portal). */
 export interface ClientPrincipal {
   readonly kind: 'client';
   readonly id: string; // portal user id
@@ -23,7 +27,11 @@ export interface ClientPrincipal {
 
 export type Principal = StaffPrincipal | ClientPrincipal;
 
-/** What the session cookie's record keeps: enough to reload the principal, nothing more. */
+/**
+ * What the session keeps and `req.user` holds: who claims to be signed in, and to which firm.
+ * It is only a claim: every route re-loads the person inside its own firm transaction
+ * (withStaff / withClient), so deactivation and role changes apply on the next request.
+ */
 export interface SessionPrincipal {
   readonly kind: 'staff' | 'client';
   readonly id: string;
@@ -33,15 +41,7 @@ export interface SessionPrincipal {
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
-    // Passport types req.user as Express.User; ours is always a Principal.
     // eslint-disable-next-line @typescript-eslint/no-empty-object-type
-    interface User extends Partial<Omit<StaffPrincipal, 'kind'>> {
-      readonly kind: 'staff' | 'client';
-      readonly id: string;
-      readonly tenantId: string;
-      readonly name: string;
-      readonly email: string;
-      readonly firmName: string;
-    }
+    interface User extends SessionPrincipal {}
   }
 }

@@ -8,12 +8,28 @@ import { isProduction } from '../config';
 const IDLE_MS = 8 * 60 * 60 * 1000; // idle timeout: a working day
 export const ABSOLUTE_MS = 7 * 24 * 60 * 60 * 1000; // absolute timeout, checked in passport setup
 
-/** Sessions live in PostgreSQL so any number of web processes can serve any request. */
+const TOUCH_EVERY_MS = 60_000;
+
+/**
+ * Sessions live in PostgreSQL so any number of web processes can serve any request. The idle
+ * timeout slides, but the row's expiry is rewritten at most once a minute per session (per
+ * process) instead of on every request, which would double the writes of a busy list page.
+ */
 export function sessionMiddleware(config: Config, pool: Pool): RequestHandler {
   const PgStore = connectPgSimple(session);
   const production = isProduction(config);
+  const store = new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: production ? 900 : false });
+  const touch = store.touch.bind(store);
+  const lastTouched = new Map<string, number>();
+  store.touch = (sid, sess, done) => {
+    const now = Date.now();
+    if (now - (lastTouched.get(sid) ?? 0) < TOUCH_EVERY_MS) return done?.();
+    if (lastTouched.size > 10_000) lastTouched.clear();
+    lastTouched.set(sid, now);
+    touch(sid, sess, done);
+  };
   return session({
-    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: production ? 900 : false }),
+    store,
     name: production ? '__Host-lb.sid' : 'lb.sid',
     secret: config.SESSION_SECRET,
     resave: false,

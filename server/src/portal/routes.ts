@@ -4,12 +4,12 @@ import type { AppContext } from '../context';
 import { loadClientPrincipal, redeemPortalLink, requestPortalLink } from '../auth/portal-auth';
 import { logIn, logOut } from '../auth/passport-setup';
 import { csrf } from '../http/csrf';
-import { requireClient } from '../http/guards';
-import type { ClientPrincipal } from '../http/principal';
+import { withClient } from '../http/guards';
 import { parse } from '../http/validate';
 
-function portalSession(req: Request, fresh = false): PortalSession {
-  const client = req.user?.kind === 'client' ? (req.user as ClientPrincipal) : null;
+async function portalSession(ctx: AppContext, req: Request, fresh = false): Promise<PortalSession> {
+  const claim = req.user?.kind === 'client' ? req.user : null;
+  const client = claim ? await loadClientPrincipal(ctx.pool, claim.id, claim.tenantId) : null;
   return {
     client: client ? { id: client.id, name: client.name, email: client.email, firmId: client.tenantId, firmName: client.firmName } : null,
     csrfToken: csrf.generateToken(req, fresh),
@@ -20,8 +20,8 @@ function portalSession(req: Request, fresh = false): PortalSession {
 export function portalRoutes(ctx: AppContext, linkLimiter: RequestHandler): Router {
   const router = Router();
 
-  router.get('/session', (req, res) => {
-    res.set('cache-control', 'no-store').json(portalSession(req));
+  router.get('/session', async (req, res) => {
+    res.set('cache-control', 'no-store').json(await portalSession(ctx, req));
   });
 
   router.post('/auth/link', linkLimiter, async (req, res) => {
@@ -33,20 +33,18 @@ export function portalRoutes(ctx: AppContext, linkLimiter: RequestHandler): Rout
     const { token } = parse(portalRedeemRequest, req.body);
     const principal = await redeemPortalLink(ctx, token);
     await logIn(req, principal, ctx.now());
-    res.json(portalSession(req, true));
+    res.json(await portalSession(ctx, req, true));
   });
 
   router.post('/auth/signout', async (req, res) => {
     await logOut(req);
     await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
-    res.json(portalSession(req, true));
+    res.json(await portalSession(ctx, req, true));
   });
 
   router.get('/projects', async (req, res) => {
-    const client = requireClient(req);
-    // Re-check the account is still active; later issues list this client's proposals here.
-    if (!(await loadClientPrincipal(ctx.pool, client.id, client.tenantId))) throw new Error('client vanished');
-    res.json({ projects: [] });
+    // Later issues list this client's proposals and sample boards here.
+    res.json(await withClient(ctx, req, async () => ({ projects: [] })));
   });
 
   return router;

@@ -1,8 +1,7 @@
 import { idParam, invitationCreate, memberRoleUpdate } from '@layerbook/contracts';
-import { withTenant } from '@layerbook/db';
 import { Router } from 'express';
 import type { AppContext } from '../context';
-import { requireStaff } from '../http/guards';
+import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { changeMember, getTeam, invite, revokeInvitation } from './service';
 
@@ -10,35 +9,30 @@ export function teamRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    const staff = requireStaff(req, 'crew');
-    res.json(await withTenant(ctx.pool, staff.tenantId, (tx) => getTeam(tx, staff.id, ctx.now())));
+    res.json(await withStaff(ctx, req, 'crew', (tx, staff) => getTeam(tx, staff.id, ctx.now())));
   });
 
   router.post('/invitations', async (req, res) => {
-    const staff = requireStaff(req, 'owner');
-    const input = parse(invitationCreate, req.body);
-    res.status(201).json(await withTenant(ctx.pool, staff.tenantId, (tx) => invite(ctx, tx, staff, input)));
+    res.status(201).json(await withStaff(ctx, req, 'owner', (tx, staff) => invite(ctx, tx, staff, parse(invitationCreate, req.body))));
   });
 
   router.delete('/invitations/:id', async (req, res) => {
-    const staff = requireStaff(req, 'owner');
-    const { id } = parse(idParam, req.params);
-    await withTenant(ctx.pool, staff.tenantId, (tx) => revokeInvitation(ctx, tx, staff, id));
+    await withStaff(ctx, req, 'owner', (tx, staff) => revokeInvitation(ctx, tx, staff, parse(idParam, req.params).id));
     res.status(204).end();
   });
 
   router.patch('/members/:id', async (req, res) => {
-    const staff = requireStaff(req, 'owner');
-    const { id } = parse(idParam, req.params);
-    const { role } = parse(memberRoleUpdate, req.body);
-    res.json(await withTenant(ctx.pool, staff.tenantId, (tx) => changeMember(tx, staff, id, { role })));
+    res.json(
+      await withStaff(ctx, req, 'owner', (tx, staff) => {
+        const { id } = parse(idParam, req.params);
+        return changeMember(tx, staff, id, { role: parse(memberRoleUpdate, req.body).role });
+      }),
+    );
   });
 
   for (const [action, status] of [['deactivate', 'deactivated'], ['reactivate', 'active']] as const) {
     router.post(`/members/:id/${action}`, async (req, res) => {
-      const staff = requireStaff(req, 'owner');
-      const { id } = parse(idParam, req.params);
-      res.json(await withTenant(ctx.pool, staff.tenantId, (tx) => changeMember(tx, staff, id, { status })));
+      res.json(await withStaff(ctx, req, 'owner', (tx, staff) => changeMember(tx, staff, parse(idParam, req.params).id, { status })));
     });
   }
 

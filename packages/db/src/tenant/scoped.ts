@@ -1,8 +1,11 @@
 import { drizzle, NodePgDatabase } from 'drizzle-orm/node-postgres';
 import type { Pool, PoolClient } from 'pg';
-import * as schema from '../schema';
 
-type Db = NodePgDatabase<typeof schema>;
+/**
+ * Query-builder only (no relational `db.query` API): building Drizzle's relational config from the
+ * schema on every transaction costs more than the queries of a typical request.
+ */
+type Db = NodePgDatabase;
 
 declare const tenantScoped: unique symbol;
 declare const lookupScoped: unique symbol;
@@ -42,9 +45,8 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 async function inTransaction<T>(pool: Pool, begin: (client: PoolClient) => Promise<void>, fn: (tx: Tx) => Promise<T>): Promise<T> {
   const client = await pool.connect();
   try {
-    await client.query('begin');
     await begin(client);
-    const result = await fn({ client, db: drizzle(client, { schema, casing: 'snake_case' }) });
+    const result = await fn({ client, db: drizzle(client, { casing: 'snake_case' }) });
     await client.query('commit');
     return result;
   } catch (error) {
@@ -61,7 +63,8 @@ export function withTenant<T>(pool: Pool, tenantId: string, fn: (tx: TenantTx) =
   return inTransaction(
     pool,
     async (client) => {
-      await client.query(`select set_config('app.tenant_id', $1, true)`, [tenantId]);
+      // One round trip for BEGIN and the setting; the id is a checked UUID, so inlining it is safe.
+      await client.query(`begin; select set_config('app.tenant_id', '${tenantId}', true)`);
     },
     (tx) => fn({ ...tx, tenantId } as TenantTx),
   );
@@ -71,6 +74,7 @@ export function withLookup<T>(pool: Pool, keys: LookupKeys, fn: (tx: LookupTx) =
   return inTransaction(
     pool,
     async (client) => {
+      await client.query('begin');
       await client.query(
         `select set_config('app.user_id', $1, true), set_config('app.lookup_email', $2, true),
                 set_config('app.token_hash', $3, true), set_config('app.lookup_slug', $4, true)`,
@@ -83,5 +87,5 @@ export function withLookup<T>(pool: Pool, keys: LookupKeys, fn: (tx: LookupTx) =
 
 /** For tables that are not firm data (users, password resets, outbox). */
 export function withGlobal<T>(pool: Pool, fn: (tx: Tx) => Promise<T>): Promise<T> {
-  return inTransaction(pool, async () => undefined, fn);
+  return inTransaction(pool, async (client) => void (await client.query('begin')), fn);
 }

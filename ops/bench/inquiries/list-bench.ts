@@ -1,0 +1,187 @@
+/**
+ * Inquiries list API against a raw node-postgres loop running the same query in the same tenant
+ * transaction, with 20,000 inquiries in one firm and 20 other firms. Prints throughput of each, their
+ * ratio, and p95 latency at 10 connections, for the first page and a deep page. Figures, not a test.
+ *   npx tsx ops/bench/inquiries/list-bench.ts        (PostgreSQL must be up: bash ops/pg-start.sh)
+ */
+import { execFileSync } from 'node:child_process';
+import http from 'node:http';
+import path from 'node:path';
+import { migrateDatabase } from '@layerbook/db';
+import { Pool } from 'pg';
+import pino from 'pino';
+import { createApp } from '../../../server/src/app';
+import { loadConfig } from '../../../server/src/config';
+import { buildListQuery } from '../../../server/src/inquiries/list';
+import { startQueue } from '../../../server/src/jobs/job-queue';
+import { testDatabaseUrls } from '../../../server/src/testing/test-env';
+
+const root = path.resolve(__dirname, '../../..');
+const DB = 'layerbook_bench';
+const BIG = 20_000;
+const OTHERS = 20;
+const PER_OTHER = 1_000;
+const CONNECTIONS = 10;
+const REQUESTS = 2_000;
+
+async function seed(ownerUrl: string): Promise<string> {
+  const owner = new Pool({ connectionString: ownerUrl, max: 2 });
+  const firmIds: string[] = [];
+  for (let f = 0; f <= OTHERS; f++) {
+    const client = await owner.connect();
+    try {
+      await client.query('begin');
+      const id = (await client.query(`select gen_random_uuid() as id`)).rows[0].id as string;
+      await client.query(`select set_config('app.tenant_id', $1, true)`, [id]);
+      await client.query(`insert into firms (id, name, slug) values ($1, $2, $3)`, [id, `Bench Firm ${f}`, `bench-${f}-${id.slice(0, 8)}`]);
+      const n = f === 0 ? BIG : PER_OTHER;
+      // Spread over a year so the keyset walks real timestamps.
+      await client.query(
+        `insert into inquiries (tenant_id, contact_name, email, site_address, source, stage, estimated_value, created_at)
+         select $1, 'Prospect ' || g, 'p' || g || '@example.test', g || ' Kiln Row', 'phone',
+                (array['new','contacted','visit_booked','samples','proposal_sent','won','lost'])[1 + g % 7],
+                (1000 + g % 40000)::numeric, now() - (g || ' minutes')::interval
+           from generate_series(1, $2) g`,
+        [id, n],
+      );
+      await client.query('commit');
+      firmIds.push(id);
+    } finally {
+      client.release();
+    }
+  }
+  await owner.query('analyze');
+  await owner.end();
+  return firmIds[0]!;
+}
+
+function percentile(sorted: number[], p: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))]!;
+}
+
+/** Runs `total` calls with `concurrency` in flight; returns ops/s and latencies (ms). */
+async function drive(total: number, concurrency: number, call: () => Promise<void>): Promise<{ rps: number; p50: number; p95: number }> {
+  const latencies: number[] = [];
+  let next = 0;
+  const start = process.hrtime.bigint();
+  await Promise.all(
+    Array.from({ length: concurrency }, async () => {
+      while (next++ < total) {
+        const t0 = process.hrtime.bigint();
+        await call();
+        latencies.push(Number(process.hrtime.bigint() - t0) / 1e6);
+      }
+    }),
+  );
+  const seconds = Number(process.hrtime.bigint() - start) / 1e9;
+  latencies.sort((a, b) => a - b);
+  return { rps: total / seconds, p50: percentile(latencies, 50), p95: percentile(latencies, 95) };
+}
+
+async function main(): Promise<void> {
+  execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: 'inherit' });
+  const urls = testDatabaseUrls(DB);
+  await migrateDatabase(urls.DATABASE_OWNER_URL, path.join(root, 'migrations'));
+  const firmId = await seed(urls.DATABASE_OWNER_URL);
+
+  const config = loadConfig({ ...urls, NODE_ENV: 'production', SESSION_SECRET: 'bench-session-secret-that-is-long-enough', ROOT_DIR: root, LOG_LEVEL: 'silent', PUBLIC_URL: 'http://localhost', DB_POOL_MAX: String(CONNECTIONS) });
+  const logger = pino({ level: 'silent' });
+  const pool = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
+  const queue = await startQueue(config, logger);
+  const app = createApp({ config: { ...config, NODE_ENV: 'development' }, pool, queue, logger, now: () => new Date() });
+  const server = app.listen(0, '127.0.0.1');
+  await new Promise((r) => server.once('listening', r));
+  const port = (server.address() as { port: number }).port;
+  const agent = new http.Agent({ keepAlive: true, maxSockets: CONNECTIONS });
+
+  // A staff member of the big firm, signed in through the API.
+  const jobsPool = new Pool({ connectionString: config.DATABASE_OWNER_URL, max: 1 });
+  const signUp = await fetch(`http://127.0.0.1:${port}/api/auth/session`);
+  const cookie0 = signUp.headers.get('set-cookie')!.split(';')[0]!;
+  const csrf = ((await signUp.json()) as { csrfToken: string }).csrfToken;
+  const made = await fetch(`http://127.0.0.1:${port}/api/auth/signup`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', cookie: cookie0, 'x-csrf-token': csrf },
+    body: JSON.stringify({ firmName: 'Bench Owner Firm', name: 'Bench Owner', email: 'bench@example.test', password: 'bench-password-2026' }),
+  });
+  const cookie = made.headers.get('set-cookie')!.split(';')[0]!;
+  const user = ((await made.json()) as { user: { id: string; firmId: string } }).user;
+  // Move the signed-up owner into the big firm so the API reads its 20,000 rows.
+  const c = await jobsPool.connect();
+  await c.query('begin');
+  await c.query(`select set_config('app.tenant_id', $1, true)`, [firmId]);
+  await c.query(`insert into memberships (tenant_id, user_id, role) values ($1, $2, 'owner')`, [firmId, user.id]);
+  await c.query('commit');
+  await c.query('begin');
+  await c.query(`select set_config('app.tenant_id', $1, true)`, [user.firmId]);
+  await c.query(`update memberships set status = 'deactivated' where user_id = $1`, [user.id]);
+  await c.query('commit');
+  c.release();
+  await jobsPool.end();
+  const relogin = await fetch(`http://127.0.0.1:${port}/api/auth/session`, { headers: { cookie } });
+  const csrf2 = ((await relogin.json()) as { csrfToken: string }).csrfToken;
+  const signedIn = await fetch(`http://127.0.0.1:${port}/api/auth/signin`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', cookie, 'x-csrf-token': csrf2 },
+    body: JSON.stringify({ email: 'bench@example.test', password: 'bench-password-2026' }),
+  });
+  const session = signedIn.headers.get('set-cookie')!.split(';')[0]!;
+
+  const get = (url: string) =>
+    new Promise<string>((resolve, reject) => {
+      http
+        .get({ host: '127.0.0.1', port, path: url, agent, headers: { cookie: session } }, (res) => {
+          let body = '';
+          res.on('data', (d) => (body += d));
+          res.on('end', () => (res.statusCode === 200 ? resolve(body) : reject(new Error(`${res.statusCode} ${body}`))));
+        })
+        .on('error', reject);
+    });
+
+  // A deep cursor: walk ~15,000 rows in once.
+  let after: string | null = null;
+  for (let i = 0; i < 150; i++) after = (JSON.parse(await get(`/api/inquiries?limit=100${after ? `&after=${after}` : ''}`)) as { nextCursor: string }).nextCursor;
+
+  const raw = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
+  const rawCall = (cursor: string | null) => async () => {
+    const q = buildListQuery(firmId, { sort: 'newest', limit: 50, ...(cursor ? { after: cursor } : {}) });
+    const client = await raw.connect();
+    try {
+      await client.query('begin');
+      await client.query(`select set_config('app.tenant_id', $1, true)`, [firmId]);
+      await client.query(q.text, q.values);
+      await client.query('commit');
+    } finally {
+      client.release();
+    }
+  };
+
+  if (process.env['BENCH_PROBE']) {
+    for (const url of ['/api/health', '/api/auth/session', '/api/firm', '/api/inquiries?limit=50']) {
+      await drive(200, CONNECTIONS, () => get(url).then(() => undefined));
+      const r = await drive(1000, CONNECTIONS, () => get(url).then(() => undefined));
+      console.log(`  probe ${url.padEnd(28)} ${r.rps.toFixed(0)} req/s p50 ${r.p50.toFixed(1)} ms`);
+    }
+  }
+  console.log(`inquiries list: ${BIG} in one firm, ${OTHERS} other firms × ${PER_OTHER}; ${REQUESTS} requests, ${CONNECTIONS} connections`);
+  for (const [label, cursor] of [['first page', null], ['deep page (~15,000 in)', after]] as const) {
+    await drive(200, CONNECTIONS, () => get(`/api/inquiries?limit=50${cursor ? `&after=${cursor}` : ''}`).then(() => undefined)); // warm-up
+    await drive(200, CONNECTIONS, rawCall(cursor));
+    const api = await drive(REQUESTS, CONNECTIONS, () => get(`/api/inquiries?limit=50${cursor ? `&after=${cursor}` : ''}`).then(() => undefined));
+    const base = await drive(REQUESTS, CONNECTIONS, rawCall(cursor));
+    console.log(
+      `  ${label.padEnd(24)} API ${api.rps.toFixed(0)} req/s (p50 ${api.p50.toFixed(1)} ms, p95 ${api.p95.toFixed(1)} ms) | ` +
+        `raw pg ${base.rps.toFixed(0)} q/s (p95 ${base.p95.toFixed(1)} ms) | ratio ${(api.rps / base.rps).toFixed(2)}  (targets: ratio ≥ 0.5, p95 ≤ 25 ms)`,
+    );
+  }
+  agent.destroy();
+  server.close();
+  await raw.end();
+  await queue.stop();
+  await pool.end();
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});
