@@ -20,6 +20,8 @@ const schema = z.object({
   RUN_MIGRATIONS: flag.default(true),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
   PUBLIC_FORM_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  /** A public form sent sooner than this after it was shown is taken for a bot (0 in browser tests). */
+  PUBLIC_FORM_MIN_FILL_MS: z.coerce.number().int().min(0).default(3000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
 });

@@ -7,7 +7,7 @@ import { enqueueMail } from '../mail/outbox';
 import { inquiryAcknowledgementMail, inquiryNotificationMail } from '../mail/inquiry-templates';
 import { createInquiry } from './service';
 
-/** A form must be open at least this long before it is sent: bots fill forms in milliseconds. */
+/** By default a form must be open this long before it is sent: bots fill forms in milliseconds. */
 export const MIN_FILL_MS = 3000;
 const MAX_FILL_MS = 24 * 60 * 60 * 1000;
 
@@ -46,7 +46,7 @@ export async function submitPublicInquiry(ctx: AppContext, slug: string, input: 
   if (input.website) return 'ignored';
   const age = stampAge(ctx.config.SESSION_SECRET, input.startedAt, now);
   if (age === null || age > MAX_FILL_MS) throw badRequest([{ field: 'startedAt', message: 'This form has expired; reload the page and send it again.' }]);
-  if (age < MIN_FILL_MS) return 'ignored';
+  if (age < ctx.config.PUBLIC_FORM_MIN_FILL_MS) return 'ignored';
   const firm = await publicFirm(ctx, slug);
   await withTenant(ctx.pool, firm.id, async (tx) => {
     const id = await createInquiry(tx, { userId: null, kind: 'client' }, {

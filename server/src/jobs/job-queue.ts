@@ -36,6 +36,6 @@ export async function startQueue(config: Config, logger: Logger): Promise<Starte
     async send(name, data, tx) {
       await boss.send(name, data, { db: { executeSql: (text, values) => tx.client.query(text, values) } });
     },
-    stop: () => boss.stop({ graceful: true, timeout: 10_000 }),
+    stop: () => boss.stop({ graceful: true, timeout: 10_000, wait: true }),
   };
 }

@@ -35,7 +35,7 @@ export async function startWorkers(config: Config, queue: StartedQueue, logger: 
   await boss.schedule(QUEUES.followUpSweep, FOLLOW_UP_SWEEP_CRON, {}, { tz: 'UTC' });
   return {
     async stop() {
-      for (const name of [QUEUES.mailSend, QUEUES.followUpSweep, QUEUES.followUpDigest]) await boss.offWork(name);
+      // Workers stop with the queue (boss.stop); here only what the workers opened.
       transport.close();
       await pool.end();
     },

@@ -1,11 +1,13 @@
 import { randomUUID } from 'node:crypto';
-import { auditLog, eq, firms, memberships, portalUsers, users, withGlobal, withTenant } from '@layerbook/db';
+import { auditLog, clients, eq, firms, memberships, portalUsers, sites, users, withGlobal, withTenant } from '@layerbook/db';
+import { localDate } from '../firms/local-date';
+import { seedDemoInquiries } from './demo-inquiries';
 import { Pool } from 'pg';
 import { hashPassword } from '../auth/passwords';
 
 /**
- * The demo firm: an invented decorative-plaster studio in an invented town. Every name here is
- * made up. Seeded once; running again changes nothing.
+ * The demo firm: an invented decorative-plaster studio in invented towns (Marrowby, Ebbsfold,
+ * Sallowby). Every name, address and figure here is made up. Seeded once; running again changes nothing.
  */
 export const DEMO = {
   firm: {
@@ -28,18 +30,26 @@ export const DEMO = {
   client: { name: 'Hattie Brambleton', email: 'hattie@brambleton.example' },
 } as const;
 
-export async function seedDemo(pool: Pool): Promise<'created' | 'present'> {
+export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'created' | 'present'> {
   const existing = await withGlobal(pool, async (tx) => (await tx.db.select().from(users).where(eq(users.email, DEMO.people[0].email)))[0]);
   if (existing) return 'present';
   const passwordHash = await hashPassword(DEMO.password);
   const firmId = randomUUID();
   await withTenant(pool, firmId, async (tx) => {
     await tx.db.insert(firms).values({ id: firmId, ...DEMO.firm });
+    const userIds: string[] = [];
     for (const person of DEMO.people) {
       const [user] = await tx.db.insert(users).values({ email: person.email, name: person.name, passwordHash }).returning({ id: users.id });
       await tx.db.insert(memberships).values({ tenantId: firmId, userId: user!.id, role: person.role });
+      userIds.push(user!.id);
     }
-    await tx.db.insert(portalUsers).values({ tenantId: firmId, email: DEMO.client.email, name: DEMO.client.name });
+    const [client] = await tx.db
+      .insert(clients)
+      .values({ tenantId: firmId, kind: 'homeowner', name: DEMO.client.name, email: DEMO.client.email, phone: '555-0177' })
+      .returning({ id: clients.id });
+    await tx.db.insert(sites).values({ tenantId: firmId, clientId: client!.id, label: 'Home', addressLine1: '24 Thistledown Lane', city: 'Marrowby', region: 'VT', postalCode: '05999', yearBuilt: 1924, accessNotes: 'Stair hall ceiling 17 ft; round sitting room with a turret ceiling' });
+    await tx.db.insert(portalUsers).values({ tenantId: firmId, clientId: client!.id, email: DEMO.client.email, name: DEMO.client.name });
+    await seedDemoInquiries(tx, localDate(DEMO.firm.timeZone, now), userIds[0]!);
     await tx.db.insert(auditLog).values({ tenantId: firmId, actorKind: 'system', action: 'demo.seeded', entity: 'firm', entityId: firmId });
   });
   return 'created';

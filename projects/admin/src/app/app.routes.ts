@@ -16,13 +16,13 @@ export const routes: Routes = [
       },
       {
         path: 'inquiries',
-        title: 'Inquiries · Layerbook',
-        loadComponent: () => import('./features/inquiries/inquiries').then((m) => m.Inquiries),
+        canActivate: [roleGuard('office')],
+        loadChildren: () => import('./features/inquiries/inquiries.routes'),
       },
       {
         path: 'clients',
-        title: 'Clients · Layerbook',
-        loadComponent: () => import('./features/clients/clients').then((m) => m.Clients),
+        canActivate: [roleGuard('office')],
+        loadChildren: () => import('./features/clients/clients.routes'),
       },
       {
         path: 'jobs',

@@ -1,5 +1,6 @@
 import { Routes } from '@angular/router';
 import { signedInGuard, signedOutGuard } from './core/auth/guards';
+import { firmLookupResolver, firmNameResolver } from './features/inquiry/firm-lookup';
 
 export const routes: Routes = [
   { path: '', pathMatch: 'full', redirectTo: 'projects' },
@@ -13,6 +14,17 @@ export const routes: Routes = [
     path: 'sign-in/link',
     title: 'Signing you in · Layerbook client portal',
     loadComponent: () => import('./features/auth/sign-in-link').then((m) => m.SignInLink),
+  },
+  // A firm's public inquiry form: no sign-in; the page title names the firm (set by the page).
+  {
+    path: 'f/:slug/inquiry',
+    resolve: { lookup: firmLookupResolver },
+    loadComponent: () => import('./features/inquiry/inquiry-page').then((m) => m.InquiryPage),
+  },
+  {
+    path: 'f/:slug/inquiry/thanks',
+    resolve: { lookup: firmNameResolver },
+    loadComponent: () => import('./features/inquiry/inquiry-thanks').then((m) => m.InquiryThanks),
   },
   {
     path: '',

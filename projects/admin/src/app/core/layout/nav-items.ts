@@ -10,8 +10,8 @@ export interface NavItem {
 
 export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Today', icon: 'wb_sunny', path: '/today', minRole: 'crew' },
-  { label: 'Inquiries', icon: 'call', path: '/inquiries', minRole: 'crew' },
-  { label: 'Clients', icon: 'group', path: '/clients', minRole: 'crew' },
+  { label: 'Inquiries', icon: 'call', path: '/inquiries', minRole: 'office' },
+  { label: 'Clients', icon: 'group', path: '/clients', minRole: 'office' },
   { label: 'Jobs & proposals', icon: 'format_paint', path: '/jobs', minRole: 'crew' },
   { label: 'Billing', icon: 'receipt_long', path: '/billing', minRole: 'office' },
   { label: 'Cash', icon: 'savings', path: '/cash', minRole: 'office' },

@@ -17,6 +17,7 @@ import { errorText } from '../../shared/forms/error-text';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { FirmApi } from './firm-api';
+import { StageLikelihoodsForm } from './stage-likelihoods';
 import { CURRENCY_CHOICES, LANGUAGE_CHOICES, UNIT_CHOICES, type Language, type UnitSystem } from './firm-choices';
 import { timeZoneChoices } from './time-zones';
 
@@ -35,6 +36,7 @@ const TOO_LONG = { maxlength: 'That is too long for this field.' };
     MatRadioModule,
     MatSelectModule,
     ReactiveFormsModule,
+    StageLikelihoodsForm,
   ],
   templateUrl: './firm-settings.html',
   styleUrl: './firm-settings.scss',
@@ -45,7 +47,10 @@ export class FirmSettingsPage {
   private readonly snackBar = inject(MatSnackBar);
   private readonly fb = inject(NonNullableFormBuilder);
 
-  protected readonly isOwner = inject(Session).isOwner;
+  private readonly session = inject(Session);
+  protected readonly isOwner = this.session.isOwner;
+  /** Crew are refused the stage likelihoods (they carry money weighting), so the section is not drawn. */
+  protected readonly seesStageLikelihoods = this.session.hasRole('office');
   protected readonly currencies = CURRENCY_CHOICES;
   protected readonly unitChoices = UNIT_CHOICES;
   protected readonly languageChoices = LANGUAGE_CHOICES;

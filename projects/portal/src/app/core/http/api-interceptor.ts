@@ -12,13 +12,16 @@ import { CsrfToken } from './csrf-token';
 
 const API_PREFIX = '/api/';
 const SESSION_URL = '/api/portal/session';
+/** Anonymous endpoints (the public inquiry form): no session, no cookie, so no CSRF token either. */
+const PUBLIC_PREFIX = '/api/public/';
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
 /**
  * The one interceptor for calls to our own API.
  * Server (SSR): relative URLs have no origin there, and the API only knows the visitor by the
  * session cookie, so the URL is made absolute against the incoming request and its cookie forwarded.
- * Browser: same-origin cookies plus the CSRF token from the last session answer on writes.
+ * Browser: same-origin cookies plus the CSRF token from the last session answer on writes;
+ * the anonymous public API goes out as it is.
  */
 export const apiInterceptor: HttpInterceptorFn = (req, next) => {
   if (!req.url.startsWith(API_PREFIX)) {
@@ -26,6 +29,9 @@ export const apiInterceptor: HttpInterceptorFn = (req, next) => {
   }
   if (isPlatformServer(inject(PLATFORM_ID))) {
     return next(forServer(req, inject(REQUEST, { optional: true })));
+  }
+  if (req.url.startsWith(PUBLIC_PREFIX)) {
+    return next(req);
   }
   const csrf = inject(CsrfToken);
   const remember = (event: HttpEvent<unknown>) => rememberToken(event, csrf);

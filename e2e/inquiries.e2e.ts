@@ -1,0 +1,85 @@
+import { execFileSync } from 'node:child_process';
+import path from 'node:path';
+import { expect, test } from '@playwright/test';
+import { e2eEnv } from './support/global-setup';
+import { waitForMail } from './support/inbox';
+
+const root = path.resolve(__dirname, '..');
+/** The demo firm's calendar date (America/New_York), as the follow-up field expects it (M/D/YYYY). */
+const firmToday = new Intl.DateTimeFormat('en-US', { timeZone: 'America/New_York', year: 'numeric', month: 'numeric', day: 'numeric' }).format(new Date());
+
+// Journey (inquiries): a prospect asks through the public form; the owner works the inquiry.
+test('a prospect submits the public form; the owner moves it with the keyboard, logs a note and a follow-up, and the reminder arrives', async ({ page, browser }) => {
+  const prospectEmail = `prospect.${Date.now()}@example.test`;
+  const prospect = await browser.newContext();
+  const form = await prospect.newPage();
+  await form.goto('/portal/f/fernhollow/inquiry');
+  await expect(form.getByRole('heading', { name: /Tell Fernhollow Plaster & Glaze about your project/ })).toBeVisible();
+  await form.getByLabel('Your name').fill('Perpetua Langdale');
+  await form.getByLabel('E-mail').fill(prospectEmail);
+  await form.getByLabel('Address of the place to be finished').fill('9 Cinderford Way, Marrowby');
+  await form.getByLabel('Year the building was built').fill('1912');
+  await form.getByLabel('Which rooms and surfaces?').fill('Round sitting room with a turret ceiling');
+  await form.getByLabel('How did you hear of us?').selectOption('showroom');
+  await form.getByLabel('You may contact me about this inquiry.').check();
+  await form.screenshot({ path: 'e2e/.artifacts/public-form.png', fullPage: true });
+  await form.getByRole('button', { name: 'Send inquiry' }).click();
+  await expect(form.getByRole('heading', { name: 'Thank you' })).toBeVisible();
+  await waitForMail(prospectEmail, /received your inquiry/);
+  await prospect.close();
+
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill('owner@fernhollow.example');
+  await page.getByLabel('Password', { exact: true }).fill('limewash-demo-2026');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page).toHaveURL(/\/today$/);
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Inquiries' }).click();
+  const newColumn = page.getByRole('region', { name: 'Stage: New' });
+  await expect(newColumn.getByRole('link', { name: 'Perpetua Langdale' })).toBeVisible();
+  await page.screenshot({ path: 'e2e/.artifacts/board.png', fullPage: true });
+
+  // Move the card with the keyboard only.
+  await newColumn.getByRole('button', { name: 'Move Perpetua Langdale' }).focus();
+  await page.keyboard.press('Enter');
+  const target = page.getByRole('menuitem', { name: 'Move to Site visit booked' });
+  await expect(target).toBeVisible();
+  for (let i = 0; i < 6 && !(await target.evaluate((el) => el === document.activeElement)); i++) await page.keyboard.press('ArrowDown');
+  await page.keyboard.press('Enter');
+  const visitColumn = page.getByRole('region', { name: 'Stage: Site visit booked' });
+  await expect(visitColumn.getByRole('link', { name: 'Perpetua Langdale' })).toBeVisible();
+
+  await visitColumn.getByRole('link', { name: 'Perpetua Langdale' }).click();
+  await expect(page.getByRole('combobox', { name: 'Stage' })).toContainText('Site visit booked');
+  await page.getByLabel('What happened').fill('Called: visit on Thursday at 10, bring the turret sample boards.');
+  await page.getByRole('button', { name: 'Add to log' }).click();
+  await expect(page.getByRole('list', { name: 'Activity log' })).toContainText('visit on Thursday');
+  await page.getByLabel('Next follow-up').fill(firmToday);
+  await page.getByRole('button', { name: 'Save', exact: true }).click();
+  await expect(page.getByRole('list', { name: 'Activity log' })).toContainText(/follow-up/i);
+  await expect(page.getByRole('link', { name: 'Open the client record' })).toBeVisible();
+  await page.screenshot({ path: 'e2e/.artifacts/inquiry-detail.png', fullPage: true });
+
+  // The daily reminder job, triggered directly rather than waiting for its hour.
+  execFileSync('node', ['server/dist/jobs/cli.js', 'follow-ups'], { cwd: root, env: e2eEnv(), stdio: 'inherit' });
+  const reminder = await waitForMail('owner@fernhollow.example', /Follow-ups for today/);
+  expect(reminder.text).toContain('Perpetua Langdale');
+
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Today' }).click();
+  await expect(page.getByRole('region', { name: 'Due today' })).toContainText('Perpetua Langdale');
+  await page.screenshot({ path: 'e2e/.artifacts/today.png', fullPage: true });
+});
+
+test('the public form keeps what the prospect typed and names each field when it refuses, without scripts', async ({ browser }) => {
+  const context = await browser.newContext({ javaScriptEnabled: false });
+  const form = await context.newPage();
+  await form.goto('/portal/f/fernhollow/inquiry');
+  await form.getByLabel('Your name').fill('Ambrose Tull');
+  await form.getByLabel('E-mail').fill('not-an-address');
+  await form.getByRole('button', { name: 'Send inquiry' }).click();
+  await expect(form.getByRole('alert').first()).toContainText('Please check the fields marked below.');
+  await expect(form.getByLabel('Your name')).toHaveValue('Ambrose Tull');
+  await expect(form.getByText('Enter a valid e-mail address')).toBeVisible();
+  await expect(form.getByText('Tick the box so we may contact you')).toBeVisible();
+  await form.screenshot({ path: 'e2e/.artifacts/public-form-refused.png', fullPage: true });
+  await context.close();
+});

@@ -1,0 +1,156 @@
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCheckboxModule } from '@angular/material/checkbox';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import type { ClientCreate, ClientDetail, ClientKind, ClientSummary } from '@layerbook/contracts';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { errorText } from '../../shared/forms/error-text';
+import { EMAIL_WORDS } from '../../shared/forms/field-words';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { requiredText } from '../../shared/forms/text-validators';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { ClientApi } from './client-api';
+import { CLIENT_KINDS, CLIENT_KIND_LABELS } from './client-words';
+
+/** Adds a client, or edits one when given it. */
+@Component({
+  selector: 'lb-client-form',
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+  ],
+  template: `
+    <form [formGroup]="form" (ngSubmit)="saveClient()" novalidate [attr.aria-label]="isNew() ? 'New client' : 'Edit client'">
+      <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
+        <lb-form-alert [message]="formMessage()" />
+        <mat-form-field class="wide">
+          <mat-label>Client name</mat-label>
+          <input matInput formControlName="name" autocomplete="off" required />
+          <mat-hint>A person, or a design studio or building firm.</mat-hint>
+          <mat-error>{{ errorText(form.controls.name, words.name) }}</mat-error>
+        </mat-form-field>
+        <mat-form-field>
+          <mat-label>Kind of client</mat-label>
+          <mat-select formControlName="kind" required>
+            @for (kind of kinds; track kind) {
+              <mat-option [value]="kind">{{ kindLabels[kind] }}</mat-option>
+            }
+          </mat-select>
+          <mat-error>{{ errorText(form.controls.kind, words.kind) }}</mat-error>
+        </mat-form-field>
+        <mat-checkbox formControlName="isCompany">This is a company</mat-checkbox>
+        <mat-form-field>
+          <mat-label>E-mail</mat-label>
+          <input matInput type="email" formControlName="email" autocomplete="off" />
+          <mat-error>{{ errorText(form.controls.email, words.email) }}</mat-error>
+        </mat-form-field>
+        <mat-form-field>
+          <mat-label>Phone</mat-label>
+          <input matInput type="tel" formControlName="phone" autocomplete="off" />
+          <mat-error>{{ errorText(form.controls.phone, words.line) }}</mat-error>
+        </mat-form-field>
+        <mat-form-field class="wide">
+          <mat-label>Notes</mat-label>
+          <textarea matInput formControlName="notes" rows="3"></textarea>
+          <mat-hint>Gate codes go with the site; this is for the client: how they like to be reached, pets…</mat-hint>
+          <mat-error>{{ errorText(form.controls.notes, words.line) }}</mat-error>
+        </mat-form-field>
+        <div class="lb-form-actions wide">
+          <button mat-flat-button type="submit" [disabled]="isBusy()">{{ isNew() ? 'Add client' : 'Save client' }}</button>
+          <button mat-button type="button" (click)="cancelled.emit()">Cancel</button>
+        </div>
+      </fieldset>
+    </form>
+  `,
+  styles: `
+    .fields {
+      display: grid;
+      grid-template-columns: repeat(auto-fill, minmax(15rem, 1fr));
+      gap: 1rem;
+      align-items: center;
+    }
+    .wide,
+    lb-form-alert {
+      grid-column: 1 / -1;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ClientForm implements OnInit {
+  private readonly api = inject(ClientApi);
+  private readonly fb = inject(NonNullableFormBuilder);
+
+  readonly client = input<ClientDetail | null>(null);
+  readonly saved = output<ClientSummary>();
+  readonly cancelled = output<void>();
+
+  protected readonly isNew = computed(() => this.client() === null);
+  protected readonly kinds = CLIENT_KINDS;
+  protected readonly kindLabels = CLIENT_KIND_LABELS;
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly isBusy = signal(false);
+  protected readonly formMessage = signal<string | null>(null);
+  protected readonly errorText = errorText;
+  protected readonly words = {
+    name: { required: 'Enter the client name.', maxlength: 'Use at most 160 characters.' },
+    kind: { required: 'Choose homeowner, designer, general contractor or other.' },
+    email: EMAIL_WORDS,
+    line: { maxlength: 'That is too long for this field.' },
+  };
+
+  protected readonly form = this.fb.group({
+    name: ['', [requiredText, Validators.maxLength(160)]],
+    kind: this.fb.control<ClientKind>('homeowner', Validators.required),
+    isCompany: [false],
+    email: ['', [Validators.email, Validators.maxLength(254)]],
+    phone: ['', Validators.maxLength(40)],
+    notes: ['', Validators.maxLength(5000)],
+  });
+
+  ngOnInit(): void {
+    const client = this.client();
+    if (client) {
+      const { name, kind, isCompany, email, phone, notes } = client;
+      this.form.reset({ name, kind, isCompany, email, phone, notes });
+    }
+  }
+
+  protected async saveClient(): Promise<void> {
+    this.formMessage.set(null);
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.isBusy.set(true);
+    try {
+      const body = this.toBody();
+      const current = this.client();
+      this.saved.emit(current ? await this.api.update(current.id, body) : await this.api.create(body));
+    } catch (error) {
+      this.formMessage.set(applyProblem(this.form, toProblem(error)));
+    } finally {
+      this.isBusy.set(false);
+    }
+  }
+
+  private toBody(): ClientCreate {
+    const v = this.form.getRawValue();
+    return {
+      kind: v.kind,
+      isCompany: v.isCompany,
+      name: v.name.trim(),
+      email: v.email.trim(),
+      phone: v.phone.trim(),
+      notes: v.notes.trim(),
+    };
+  }
+}

@@ -1,0 +1,111 @@
+import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import type { ContactView } from '@layerbook/contracts';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { errorText } from '../../shared/forms/error-text';
+import { EMAIL_WORDS } from '../../shared/forms/field-words';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { requiredText } from '../../shared/forms/text-validators';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { ClientApi } from './client-api';
+
+/** Another person at the client: a partner, the designer's project lead, a site super. */
+@Component({
+  selector: 'lb-contact-form',
+  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  template: `
+    <form [formGroup]="form" #formDir="ngForm" (ngSubmit)="addContact(formDir)" novalidate aria-label="Add a contact">
+      <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
+        <lb-form-alert [message]="formMessage()" />
+        <mat-form-field>
+          <mat-label>Contact name</mat-label>
+          <input matInput formControlName="name" autocomplete="off" required />
+          <mat-error>{{ errorText(form.controls.name, words.name) }}</mat-error>
+        </mat-form-field>
+        <mat-form-field>
+          <mat-label>Role or title</mat-label>
+          <input matInput formControlName="roleTitle" autocomplete="off" />
+          <mat-hint>Like "project designer" or "site super".</mat-hint>
+          <mat-error>{{ errorText(form.controls.roleTitle, words.line) }}</mat-error>
+        </mat-form-field>
+        <mat-form-field>
+          <mat-label>Contact e-mail</mat-label>
+          <input matInput type="email" formControlName="email" autocomplete="off" />
+          <mat-error>{{ errorText(form.controls.email, words.email) }}</mat-error>
+        </mat-form-field>
+        <mat-form-field>
+          <mat-label>Contact phone</mat-label>
+          <input matInput type="tel" formControlName="phone" autocomplete="off" />
+          <mat-error>{{ errorText(form.controls.phone, words.line) }}</mat-error>
+        </mat-form-field>
+        <div class="lb-form-actions">
+          <button mat-stroked-button type="submit" [disabled]="isBusy()">Add contact</button>
+        </div>
+      </fieldset>
+    </form>
+  `,
+  styles: `
+    .fields {
+      display: grid;
+      grid-template-columns: repeat(auto-fill, minmax(14rem, 1fr));
+      gap: 1rem;
+      align-items: start;
+    }
+    lb-form-alert,
+    .lb-form-actions {
+      grid-column: 1 / -1;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ContactForm {
+  private readonly api = inject(ClientApi);
+
+  readonly clientId = input.required<string>();
+  readonly added = output<ContactView>();
+
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    name: ['', [requiredText, Validators.maxLength(120)]],
+    roleTitle: ['', Validators.maxLength(80)],
+    email: ['', [Validators.email, Validators.maxLength(254)]],
+    phone: ['', Validators.maxLength(40)],
+  });
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly isBusy = signal(false);
+  protected readonly formMessage = signal<string | null>(null);
+  protected readonly errorText = errorText;
+  protected readonly words = {
+    name: { required: 'Enter the contact name.', maxlength: 'Use at most 120 characters.' },
+    email: EMAIL_WORDS,
+    line: { maxlength: 'That is too long for this field.' },
+  };
+
+  protected async addContact(formDir: FormGroupDirective): Promise<void> {
+    this.formMessage.set(null);
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.isBusy.set(true);
+    try {
+      const v = this.form.getRawValue();
+      const contact = await this.api.addContact(this.clientId(), {
+        name: v.name.trim(),
+        roleTitle: v.roleTitle.trim(),
+        email: v.email.trim(),
+        phone: v.phone.trim(),
+      });
+      // resetForm also clears "submitted", so the emptied fields do not show as errors.
+      formDir.resetForm();
+      this.added.emit(contact);
+    } catch (error) {
+      this.formMessage.set(applyProblem(this.form, toProblem(error)));
+    } finally {
+      this.isBusy.set(false);
+    }
+  }
+}

@@ -1,0 +1,57 @@
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { errorText } from '../../shared/forms/error-text';
+import { requiredText } from '../../shared/forms/text-validators';
+
+export interface LostReasonData {
+  readonly contactName: string;
+}
+
+/** Asks why an inquiry was lost before it is marked so; closes with the reason, or nothing. */
+@Component({
+  selector: 'lb-lost-reason-dialog',
+  imports: [MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  template: `
+    <h2 mat-dialog-title id="lost-title">Why was {{ data.contactName }} lost?</h2>
+    <form [formGroup]="form" (ngSubmit)="markLost()" novalidate>
+      <mat-dialog-content>
+        <p>A word on why helps with pricing and follow-up later: price, timing, went with someone else…</p>
+        <mat-form-field class="lb-full">
+          <mat-label>Reason it was lost</mat-label>
+          <textarea matInput formControlName="reason" rows="3" required cdkFocusInitial></textarea>
+          <mat-error>{{ errorText(form.controls.reason, words) }}</mat-error>
+        </mat-form-field>
+      </mat-dialog-content>
+      <mat-dialog-actions align="end">
+        <button mat-button type="button" [mat-dialog-close]="undefined">Cancel</button>
+        <button mat-flat-button type="submit">Mark as lost</button>
+      </mat-dialog-actions>
+    </form>
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class LostReasonDialog {
+  protected readonly data = inject<LostReasonData>(MAT_DIALOG_DATA);
+  private readonly ref = inject<MatDialogRef<LostReasonDialog, string>>(MatDialogRef);
+
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    reason: ['', [requiredText, Validators.maxLength(500)]],
+  });
+  protected readonly errorText = errorText;
+  protected readonly words = {
+    required: 'Say why it was lost; it helps pricing later.',
+    maxlength: 'Use at most 500 characters.',
+  };
+
+  protected markLost(): void {
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.ref.close(this.form.controls.reason.value.trim());
+  }
+}

@@ -1,0 +1,151 @@
+import { ChangeDetectionStrategy, Component, OnInit, inject, input, output, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { provideNativeDateAdapter } from '@angular/material/core';
+import { MatDatepickerModule } from '@angular/material/datepicker';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import type { InquiryDetail, InquiryUpdate } from '@layerbook/contracts';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { FirmCurrency } from '../../core/firm/firm-currency';
+import { errorText } from '../../shared/forms/error-text';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
+import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { Assignees } from './assignees';
+import { InquiryApi } from './inquiry-api';
+
+/** What the inquiry may be worth, who has it, and when to call back. */
+@Component({
+  selector: 'lb-next-step-form',
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatDatepickerModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+  ],
+  providers: [provideNativeDateAdapter()],
+  template: `
+    <form [formGroup]="form" (ngSubmit)="saveNextStep()" novalidate aria-labelledby="next-step-heading">
+      <fieldset class="lb-gate" [disabled]="!isHydrated()">
+        <lb-form-alert [message]="formMessage()" />
+        <div class="fields">
+          <mat-form-field>
+            <mat-label>Estimated value</mat-label>
+            <input matInput formControlName="estimatedValue" inputmode="decimal" autocomplete="off" />
+            @if (currency(); as code) {
+              <span matTextSuffix>&nbsp;{{ code }}</span>
+            }
+            <mat-hint>Like 12500; empty if too early to say.</mat-hint>
+            <mat-error>{{ errorText(form.controls.estimatedValue, words.amount) }}</mat-error>
+          </mat-form-field>
+          <mat-form-field>
+            <mat-label>Assigned to</mat-label>
+            <mat-select formControlName="assigneeUserId">
+              <mat-option [value]="null">Nobody yet</mat-option>
+              @for (person of people(); track person.userId) {
+                <mat-option [value]="person.userId">{{ person.name }}</mat-option>
+              }
+            </mat-select>
+            <mat-error>{{ errorText(form.controls.assigneeUserId, {}) }}</mat-error>
+          </mat-form-field>
+          <mat-form-field>
+            <mat-label>Next follow-up</mat-label>
+            <input matInput [matDatepicker]="picker" formControlName="nextFollowUp" autocomplete="off" />
+            <mat-datepicker-toggle matIconSuffix [for]="picker" />
+            <mat-datepicker #picker />
+            <mat-hint>Empty means no call-back planned.</mat-hint>
+            <mat-error>{{ errorText(form.controls.nextFollowUp, words.date) }}</mat-error>
+          </mat-form-field>
+        </div>
+        <div class="lb-form-actions">
+          <button mat-flat-button type="submit" [disabled]="isBusy()">Save</button>
+        </div>
+      </fieldset>
+    </form>
+  `,
+  styles: `
+    .fields {
+      display: grid;
+      grid-template-columns: repeat(auto-fill, minmax(14rem, 1fr));
+      gap: 1rem;
+      align-items: start;
+      margin-bottom: 0.75rem;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class NextStepForm implements OnInit {
+  private readonly api = inject(InquiryApi);
+  private readonly fb = inject(NonNullableFormBuilder);
+  private readonly assignees = inject(Assignees);
+
+  readonly inquiry = input.required<InquiryDetail>();
+  readonly saved = output<InquiryDetail>();
+
+  protected readonly people = this.assignees.active;
+  protected readonly currency = inject(FirmCurrency).code;
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly isBusy = signal(false);
+  protected readonly formMessage = signal<string | null>(null);
+  protected readonly errorText = errorText;
+  protected readonly words = {
+    amount: AMOUNT_WORDS,
+    date: { matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.' },
+  };
+
+  protected readonly form = this.fb.group({
+    estimatedValue: ['', amountText],
+    assigneeUserId: this.fb.control<string | null>(null),
+    nextFollowUp: this.fb.control<Date | null>(null),
+  });
+
+  constructor() {
+    void this.assignees.load();
+  }
+
+  ngOnInit(): void {
+    this.show(this.inquiry());
+  }
+
+  protected async saveNextStep(): Promise<void> {
+    this.formMessage.set(null);
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.isBusy.set(true);
+    try {
+      const saved = await this.api.update(this.inquiry().id, this.toUpdate());
+      this.show(saved);
+      this.saved.emit(saved);
+    } catch (error) {
+      this.formMessage.set(applyProblem(this.form, toProblem(error)));
+    } finally {
+      this.isBusy.set(false);
+    }
+  }
+
+  private show(inquiry: InquiryDetail): void {
+    this.form.reset({
+      estimatedValue: inquiry.estimatedValue ?? '',
+      assigneeUserId: inquiry.assigneeUserId,
+      nextFollowUp: fromIsoDate(inquiry.nextFollowUp),
+    });
+  }
+
+  private toUpdate(): InquiryUpdate {
+    const value = this.form.getRawValue();
+    return {
+      estimatedValue: toAmount(value.estimatedValue),
+      assigneeUserId: value.assigneeUserId,
+      nextFollowUp: toIsoDate(value.nextFollowUp),
+    };
+  }
+}

@@ -1,0 +1,43 @@
+import { LiveAnnouncer } from '@angular/cdk/a11y';
+import { Injectable, inject } from '@angular/core';
+import { MatDialog } from '@angular/material/dialog';
+import { firstValueFrom } from 'rxjs';
+import type { InquiryDetail, InquiryStage, InquirySummary } from '@layerbook/contracts';
+import { STAGE_LABELS } from '../../shared/ui/stage-words';
+import { InquiryApi } from './inquiry-api';
+import { LostReasonDialog, type LostReasonData } from './lost-reason-dialog';
+
+/**
+ * Moves an inquiry to another stage the same way from the board, its menus and the detail page:
+ * asks for a reason before "Lost", then tells screen-reader users what happened.
+ */
+@Injectable({ providedIn: 'root' })
+export class StageMover {
+  private readonly api = inject(InquiryApi);
+  private readonly dialog = inject(MatDialog);
+  private readonly announcer = inject(LiveAnnouncer);
+
+  /** The saved inquiry, or null when the person changed their mind in the lost-reason dialog. */
+  async move(inquiry: Pick<InquirySummary, 'id' | 'contactName'>, stage: InquiryStage): Promise<InquiryDetail | null> {
+    let lostReason: string | undefined;
+    if (stage === 'lost') {
+      lostReason = await this.askWhyLost(inquiry.contactName);
+      if (!lostReason) {
+        void this.announcer.announce(`${inquiry.contactName} was not moved.`);
+        return null;
+      }
+    }
+    const saved = await this.api.moveStage(inquiry.id, stage, lostReason);
+    void this.announcer.announce(`Moved ${inquiry.contactName} to ${STAGE_LABELS[stage]}.`);
+    return saved;
+  }
+
+  private async askWhyLost(contactName: string): Promise<string | undefined> {
+    const ref = this.dialog.open<LostReasonDialog, LostReasonData, string>(LostReasonDialog, {
+      data: { contactName },
+      width: '30rem',
+      ariaLabelledBy: 'lost-title',
+    });
+    return firstValueFrom(ref.afterClosed());
+  }
+}

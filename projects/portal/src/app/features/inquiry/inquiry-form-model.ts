@@ -1,0 +1,146 @@
+import { AbstractControl, FormControl, FormGroup, ValidationErrors, ValidatorFn, Validators } from '@angular/forms';
+import { ErrorWords } from '../../shared/forms/error-text';
+import { EMAIL_WORDS } from '../../shared/forms/field-words';
+import { requiredText } from '../../shared/forms/text-validators';
+import { isReferral } from './inquiry-choices';
+import type { InquiryBody } from './inquiry-api';
+
+/**
+ * The inquiry form, field for field as the API's `publicInquiryRequest` names them. The same
+ * names are the `name` attributes of the plain HTML form, which posts without scripts.
+ * Validators mirror the API's zod schema; its own messages win when it answers.
+ */
+export function inquiryForm(formStamp: string) {
+  const text = (value = '', ...validators: ((c: AbstractControl) => ValidationErrors | null)[]) =>
+    new FormControl(value, { nonNullable: true, validators });
+  const box = (...validators: ((c: AbstractControl) => ValidationErrors | null)[]) =>
+    new FormControl(false, { nonNullable: true, validators });
+  return new FormGroup({
+    name: text('', requiredText, Validators.maxLength(120)),
+    email: text('', requiredText, Validators.email, Validators.maxLength(254)),
+    phone: text('', Validators.maxLength(40)),
+    siteAddress: text('', requiredText, Validators.maxLength(300)),
+    yearBuilt: text('', yearBuiltUnlessUnknown),
+    yearBuiltUnknown: box(),
+    rooms: text('', requiredText, Validators.maxLength(2000)),
+    finishIdea: text('', Validators.maxLength(2000)),
+    timeline: text('', Validators.maxLength(200)),
+    budgetRange: text(''),
+    heardFrom: text('', Validators.required),
+    referrerName: text('', referrerForReferrals, Validators.maxLength(120)),
+    consent: box(Validators.requiredTrue),
+    website: text(''),
+    startedAt: text(formStamp),
+  });
+}
+
+export type InquiryForm = ReturnType<typeof inquiryForm>;
+export type InquiryFormValue = ReturnType<InquiryForm['getRawValue']>;
+type FieldName = keyof InquiryFormValue;
+
+const CHECKBOXES = ['yearBuiltUnknown', 'consent'] as const satisfies readonly FieldName[];
+
+/** Words beside each field, matching the API's messages (packages/contracts, publicInquiryRequest). */
+export const INQUIRY_WORDS = {
+  name: { required: 'Enter your name.', maxlength: 'Use at most 120 characters.' },
+  email: EMAIL_WORDS,
+  phone: { maxlength: 'Use at most 40 characters.' },
+  siteAddress: { required: 'Enter the address of the place to be finished.', maxlength: 'Use at most 300 characters.' },
+  yearBuilt: {
+    required: 'Enter the year the building was built, or tick "Not sure".',
+    year: 'Enter a year like 1925.',
+    yearRange: 'Enter a year between 1600 and 2100.',
+  },
+  rooms: { required: 'Tell us which rooms and surfaces.', maxlength: 'Use at most 2000 characters.' },
+  finishIdea: { maxlength: 'Use at most 2000 characters.' },
+  timeline: { maxlength: 'Use at most 200 characters.' },
+  heardFrom: { required: 'Choose how you heard of us.' },
+  referrerName: { required: 'Tell us who referred you, so we can thank them.', maxlength: 'Use at most 120 characters.' },
+  consent: { required: 'Tick the box so we may contact you about this inquiry.' },
+} as const satisfies Partial<Record<FieldName, ErrorWords>>;
+
+function yearBuiltUnlessUnknown(control: AbstractControl): ValidationErrors | null {
+  const year = String(control.value ?? '').trim();
+  if (year === '') {
+    return control.parent?.get('yearBuiltUnknown')?.value === true ? null : { required: true };
+  }
+  if (!/^\d{1,4}$/.test(year)) {
+    return { year: true };
+  }
+  const value = Number(year);
+  return value >= 1600 && value <= 2100 ? null : { yearRange: true };
+}
+
+function referrerForReferrals(control: AbstractControl): ValidationErrors | null {
+  const heardFrom: unknown = control.parent?.get('heardFrom')?.value;
+  const isNeeded = typeof heardFrom === 'string' && isReferral(heardFrom);
+  return isNeeded && String(control.value ?? '').trim() === '' ? { required: true } : null;
+}
+
+/** Fields whose rule depends on another field's value. */
+const DEPENDS_ON: Partial<Record<FieldName, FieldName>> = { yearBuilt: 'yearBuiltUnknown', referrerName: 'heardFrom' };
+
+/**
+ * The server's message for a field it refused, for as long as the field (and the field its rule
+ * depends on) still holds what was sent.
+ */
+export function refusedAsSent(sent: InquiryFormValue, field: FieldName, message: string): ValidatorFn {
+  const other = DEPENDS_ON[field];
+  return (control) => {
+    const isAsSent = control.value === sent[field] && (!other || control.parent?.get(other)?.value === sent[other]);
+    return isAsSent ? { server: message } : null;
+  };
+}
+
+/** Re-checks the fields whose rule depends on another field when that field changes. */
+export function linkDependentFields(form: InquiryForm): { unsubscribe(): void } {
+  const a = form.controls.yearBuiltUnknown.valueChanges.subscribe(() => form.controls.yearBuilt.updateValueAndValidity());
+  const b = form.controls.heardFrom.valueChanges.subscribe(() => form.controls.referrerName.updateValueAndValidity());
+  return { unsubscribe: () => (a.unsubscribe(), b.unsubscribe()) };
+}
+
+/**
+ * Form values as a browser posts them: text as given, a ticked box as "on", an unticked box
+ * absent. Unknown names are dropped. With `boxes: 'keep'`, the boxes keep their value in `into`
+ * (for a reading that leaves them out; see typed-before-hydration.ts).
+ */
+export function fromPosted(
+  posted: Readonly<Record<string, string>>,
+  into: InquiryFormValue,
+  boxes: 'posted' | 'keep' = 'posted',
+): InquiryFormValue {
+  const value: Record<string, string | boolean> = { ...into };
+  for (const name of Object.keys(into) as FieldName[]) {
+    if ((CHECKBOXES as readonly string[]).includes(name)) {
+      if (boxes === 'keep') {
+        continue;
+      }
+      value[name] = posted[name] === 'on' || posted[name] === 'true';
+    } else if (typeof posted[name] === 'string') {
+      value[name] = posted[name];
+    }
+  }
+  return value as InquiryFormValue;
+}
+
+/** The JSON body for the API: trimmed text, the year as a number when one was given. */
+export function toBody(value: InquiryFormValue): InquiryBody {
+  const year = value.yearBuilt.trim();
+  return {
+    name: value.name.trim(),
+    email: value.email.trim(),
+    phone: value.phone.trim(),
+    siteAddress: value.siteAddress.trim(),
+    yearBuilt: year === '' ? '' : Number(year),
+    yearBuiltUnknown: value.yearBuiltUnknown,
+    rooms: value.rooms.trim(),
+    finishIdea: value.finishIdea.trim(),
+    timeline: value.timeline.trim(),
+    budgetRange: value.budgetRange as InquiryBody['budgetRange'],
+    heardFrom: value.heardFrom as InquiryBody['heardFrom'],
+    referrerName: value.referrerName.trim(),
+    consent: value.consent,
+    website: value.website,
+    startedAt: value.startedAt,
+  };
+}

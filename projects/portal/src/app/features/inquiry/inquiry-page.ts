@@ -1,0 +1,252 @@
+import {
+  ChangeDetectionStrategy,
+  Component,
+  DestroyRef,
+  ElementRef,
+  Injector,
+  Signal,
+  afterNextRender,
+  computed,
+  inject,
+  signal,
+} from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCheckboxModule } from '@angular/material/checkbox';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { Title } from '@angular/platform-browser';
+import { ActivatedRoute, Router } from '@angular/router';
+import type { FieldProblem, Problem } from '@layerbook/contracts';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { errorText } from '../../shared/forms/error-text';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { FormAlert } from '../../shared/ui/form-alert';
+import type { FirmLookup } from './firm-lookup';
+import { InquiryApi } from './inquiry-api';
+import { BUDGET_CHOICES, HEARD_FROM_CHOICES, isReferral } from './inquiry-choices';
+import { INQUIRY_WORDS, fromPosted, inquiryForm, linkDependentFields, refusedAsSent, toBody } from './inquiry-form-model';
+import { postedRefusal, type PostedRefusal } from './posted-refusal';
+import { PublicFrame } from './public-frame';
+import { typedBeforeHydration } from './typed-before-hydration';
+
+const FORM_ID = 'inquiry-form';
+const CHECK_FIELDS = 'Please check the fields marked below.';
+const STALE_FORM =
+  'This form had been open for a long time, so it was not sent. It is ready again: check your details and send it once more.';
+/** `Event.eventPhase` of an event Angular replays after hydration (EventPhase.REPLAY). */
+const REPLAYED = 101;
+
+/**
+ * A firm's public inquiry form. It is a plain HTML form that posts without scripts (the host
+ * files it, or renders this page again with the refusal); once hydrated, it sends JSON instead.
+ */
+@Component({
+  selector: 'lb-inquiry-page',
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatInputModule,
+    PublicFrame,
+    ReactiveFormsModule,
+  ],
+  templateUrl: './inquiry-page.html',
+  styleUrl: './inquiry-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class InquiryPage {
+  private readonly api = inject(InquiryApi);
+  private readonly router = inject(Router);
+  private readonly injector = inject(Injector);
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
+  private readonly route = inject(ActivatedRoute).snapshot;
+
+  protected readonly slug = this.route.paramMap.get('slug') ?? '';
+  protected readonly lookup = this.route.data['lookup'] as FirmLookup;
+  protected readonly firm = this.lookup.kind === 'found' ? this.lookup.firm : null;
+  protected readonly action = `/portal/f/${encodeURIComponent(this.slug)}/inquiry`;
+  protected readonly formId = FORM_ID;
+
+  protected readonly form = inquiryForm(this.firm?.formStamp ?? '');
+  protected readonly words = INQUIRY_WORDS;
+  protected readonly budgetChoices = BUDGET_CHOICES;
+  protected readonly heardFromChoices = HEARD_FROM_CHOICES;
+  protected readonly errorText = errorText;
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly isBusy = signal(false);
+  protected readonly formMessage = signal<string | null>(null);
+
+  protected readonly isReferralChosen: Signal<boolean>;
+  /**
+   * Without scripts the referrer field is always there; once hydrated, only when it is asked for
+   * (or holds words, or a message).
+   */
+  protected readonly showReferrer: Signal<boolean>;
+
+  constructor() {
+    inject(Title).setTitle(pageTitle(this.lookup));
+    const refusal = postedRefusal();
+    const typed = typedBeforeHydration(FORM_ID);
+    let value = this.form.getRawValue();
+    if (refusal) {
+      value = fromPosted(withoutStaleStamp(refusal), value);
+    }
+    if (typed) {
+      value = fromPosted(typed, value, 'keep');
+    }
+    this.form.setValue(value);
+    if (refusal) {
+      this.showRefusal(refusal);
+    }
+
+    const links = linkDependentFields(this.form);
+    inject(DestroyRef).onDestroy(() => links.unsubscribe());
+    const heardFrom = this.form.controls.heardFrom;
+    const referrerName = this.form.controls.referrerName;
+    const chosen = toSignal(heardFrom.valueChanges, { initialValue: heardFrom.value });
+    const referrer = toSignal(referrerName.valueChanges, { initialValue: referrerName.value });
+    const referrerStatus = toSignal(referrerName.statusChanges, { initialValue: referrerName.status });
+    this.isReferralChosen = computed(() => isReferral(chosen()));
+    this.showReferrer = computed(
+      () => !this.isHydrated() || this.isReferralChosen() || referrer().trim() !== '' || referrerStatus() === 'INVALID',
+    );
+  }
+
+  /**
+   * Server rendering does not carry a select's value into the HTML, so the chosen option is
+   * marked by hand: a refused post shows the prospect's choice again before any script runs.
+   */
+  protected isChosen(name: 'budgetRange' | 'heardFrom', value: string): '' | null {
+    return this.form.controls[name].value === value ? '' : null;
+  }
+
+  /** The consent box is not a form field, so its message is placed by hand. */
+  protected isConsentMissing(): boolean {
+    const consent = this.form.controls.consent;
+    return consent.invalid && consent.touched;
+  }
+
+  protected async sendInquiry(event: Event | undefined): Promise<void> {
+    // Sent before hydration, the form has already gone as a plain post: do not send it twice.
+    if (event?.eventPhase === REPLAYED || this.isBusy() || !this.firm) {
+      return;
+    }
+    this.formMessage.set(null);
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      this.formMessage.set(CHECK_FIELDS);
+      this.focusFirstProblem();
+      return;
+    }
+    this.isBusy.set(true);
+    try {
+      await this.api.send(this.slug, toBody(this.form.getRawValue()));
+      await this.router.navigate(['/f', this.slug, 'inquiry', 'thanks']);
+    } catch (error) {
+      const problem = toProblem(error);
+      this.showProblem(problem);
+      if (problem.errors?.some(isStampProblem)) {
+        await this.renewStamp();
+      }
+      this.focusFirstProblem();
+    } finally {
+      this.isBusy.set(false);
+    }
+  }
+
+  /**
+   * Each message stays beside its field for as long as the field holds what was refused. A
+   * validator rather than setErrors: the form directives re-run validation when they attach
+   * (after this constructor), and a visitor who changed a field before hydration has answered it.
+   */
+  private showRefusal(refusal: PostedRefusal): void {
+    const sent = fromPosted(refusal.values, this.form.getRawValue());
+    const unplaced: string[] = [];
+    let placedAny = false;
+    for (const problem of refusal.errors) {
+      const { field, message } = problem;
+      if (isStampProblem(problem)) {
+        continue;
+      }
+      if (!isFieldOf(sent, field)) {
+        unplaced.push(message);
+        continue;
+      }
+      const control = this.form.controls[field];
+      control.addValidators(refusedAsSent(sent, field, message));
+      control.updateValueAndValidity();
+      control.markAsTouched();
+      placedAny = true;
+    }
+    this.formMessage.set(summary(placedAny, unplaced.join(' '), refusal.errors.some(isStampProblem)));
+  }
+
+  /** An answer to a JSON send: messages beside fields until the visitor edits them. */
+  private showProblem(problem: Problem): void {
+    const errors = problem.errors ?? [];
+    const fieldErrors = errors.filter((item) => !isStampProblem(item));
+    const isStale = fieldErrors.length < errors.length;
+    if (isStale && fieldErrors.length === 0) {
+      this.formMessage.set(summary(false, null, true));
+      return;
+    }
+    const placedAny = fieldErrors.some(({ field }) => field in this.form.controls);
+    const unplaced = applyProblem(this.form, { ...problem, errors: fieldErrors });
+    this.formMessage.set(summary(placedAny, unplaced, isStale));
+  }
+
+  private async renewStamp(): Promise<void> {
+    try {
+      this.form.controls.startedAt.setValue((await this.api.firm(this.slug)).formStamp);
+    } catch {
+      this.formMessage.set('This form has expired. Reload the page, check your details and send it again.');
+    }
+  }
+
+  private focusFirstProblem(): void {
+    afterNextRender(
+      () => {
+        const field = this.host.nativeElement.querySelector<HTMLElement>(
+          'input.ng-invalid:not([type="hidden"]), textarea.ng-invalid, select.ng-invalid, mat-checkbox.ng-invalid input',
+        );
+        field?.focus();
+      },
+      { injector: this.injector },
+    );
+  }
+}
+
+function pageTitle(lookup: FirmLookup): string {
+  if (lookup.kind === 'found') {
+    return `Tell ${lookup.firm.name} about your project`;
+  }
+  return lookup.kind === 'missing' ? 'Inquiry form not found' : 'Inquiry form';
+}
+
+/** What the alert at the top says: where to look, what no field shows, and a renewed form. */
+function summary(placedAny: boolean, unplaced: string | null, isStale: boolean): string | null {
+  const parts = [placedAny ? CHECK_FIELDS : '', unplaced ?? '', isStale ? STALE_FORM : ''].filter((part) => part !== '');
+  return parts.length > 0 ? parts.join(' ') : null;
+}
+
+/** The form stamp is a hidden field: its problem is said at the top, not beside a field. */
+function isStampProblem({ field }: FieldProblem): boolean {
+  return field === 'startedAt';
+}
+
+function isFieldOf<T extends object>(value: T, field: string): field is Extract<keyof T, string> {
+  return field in value;
+}
+
+/** An expired stamp is not sent back into the page: the page already carries a fresh one. */
+function withoutStaleStamp(refusal: PostedRefusal): Record<string, string> {
+  if (!refusal.errors.some(isStampProblem)) {
+    return refusal.values;
+  }
+  const { startedAt: _stale, ...rest } = refusal.values;
+  return rest;
+}
