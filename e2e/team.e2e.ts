@@ -18,7 +18,7 @@ test('owner invites an office manager who sets a password and signs in', async (
   await page.getByRole('combobox', { name: 'Role', exact: true }).click();
   await page.getByRole('option', { name: /^Office/ }).click();
   await page.getByRole('button', { name: 'Send invitation' }).click();
-  await expect(page.getByText(email)).toBeVisible();
+  await expect(page.getByText(email, { exact: true })).toBeVisible();
   await page.screenshot({ path: 'e2e/.artifacts/team.png', fullPage: true });
 
   const mail = await waitForMail(email, /invited you/);

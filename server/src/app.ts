@@ -25,6 +25,8 @@ export interface SsrHandlers {
 export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
   const app = express();
   app.disable('x-powered-by');
+  // API answers are no-store; hashing every body for an ETag is wasted work.
+  app.set('etag', false);
   app.set('trust proxy', ctx.config.NODE_ENV === 'production' ? 1 : false);
   app.use(
     pinoHttp({

@@ -6,6 +6,7 @@
  */
 import { execFileSync } from 'node:child_process';
 import http from 'node:http';
+import { Worker } from 'node:worker_threads';
 import path from 'node:path';
 import { migrateDatabase } from '@layerbook/db';
 import { Pool } from 'pg';
@@ -142,33 +143,25 @@ async function main(): Promise<void> {
   let after: string | null = null;
   for (let i = 0; i < 150; i++) after = (JSON.parse(await get(`/api/inquiries?limit=100${after ? `&after=${after}` : ''}`)) as { nextCursor: string }).nextCursor;
 
-  const raw = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
-  const rawCall = (cursor: string | null) => async () => {
-    const q = buildListQuery(firmId, { sort: 'newest', limit: 50, ...(cursor ? { after: cursor } : {}) });
-    const client = await raw.connect();
-    try {
-      await client.query('begin');
-      await client.query(`select set_config('app.tenant_id', $1, true)`, [firmId]);
-      await client.query(q.text, q.values);
-      await client.query('commit');
-    } finally {
-      client.release();
-    }
-  };
+  const measure = (job: Record<string, unknown>) =>
+    new Promise<{ rps: number; p50: number; p95: number }>((resolve, reject) => {
+      // The driver is TypeScript: register tsx's CommonJS hook inside the worker, then load it.
+      const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, 'driver.ts'))});`;
+      const worker = new Worker(source, { eval: true, workerData: { concurrency: CONNECTIONS, ...job } });
+      worker.once('message', (m) => (m.error ? reject(new Error(m.error)) : resolve(m)));
+      worker.once('error', reject);
+    });
 
-  if (process.env['BENCH_PROBE']) {
-    for (const url of ['/api/health', '/api/auth/session', '/api/firm', '/api/inquiries?limit=50']) {
-      await drive(200, CONNECTIONS, () => get(url).then(() => undefined));
-      const r = await drive(1000, CONNECTIONS, () => get(url).then(() => undefined));
-      console.log(`  probe ${url.padEnd(28)} ${r.rps.toFixed(0)} req/s p50 ${r.p50.toFixed(1)} ms`);
-    }
-  }
-  console.log(`inquiries list: ${BIG} in one firm, ${OTHERS} other firms × ${PER_OTHER}; ${REQUESTS} requests, ${CONNECTIONS} connections`);
+  console.log(`inquiries list: ${BIG} in one firm, ${OTHERS} other firms × ${PER_OTHER}; ${REQUESTS} requests, ${CONNECTIONS} connections; load from a worker thread`);
   for (const [label, cursor] of [['first page', null], ['deep page (~15,000 in)', after]] as const) {
-    await drive(200, CONNECTIONS, () => get(`/api/inquiries?limit=50${cursor ? `&after=${cursor}` : ''}`).then(() => undefined)); // warm-up
-    await drive(200, CONNECTIONS, rawCall(cursor));
-    const api = await drive(REQUESTS, CONNECTIONS, () => get(`/api/inquiries?limit=50${cursor ? `&after=${cursor}` : ''}`).then(() => undefined));
-    const base = await drive(REQUESTS, CONNECTIONS, rawCall(cursor));
+    const url = `/api/inquiries?limit=50${cursor ? `&after=${cursor}` : ''}`;
+    const sqlQuery = buildListQuery(firmId, { sort: 'newest', limit: 50, ...(cursor ? { after: cursor } : {}) });
+    const httpJob = { mode: 'http', port, path: url, cookie: session };
+    const pgJob = { mode: 'pg', databaseUrl: config.DATABASE_URL, tenantId: firmId, sql: sqlQuery };
+    await measure({ ...httpJob, total: 300 }); // warm-up
+    await measure({ ...pgJob, total: 300 });
+    const api = await measure({ ...httpJob, total: REQUESTS });
+    const base = await measure({ ...pgJob, total: REQUESTS });
     console.log(
       `  ${label.padEnd(24)} API ${api.rps.toFixed(0)} req/s (p50 ${api.p50.toFixed(1)} ms, p95 ${api.p95.toFixed(1)} ms) | ` +
         `raw pg ${base.rps.toFixed(0)} q/s (p95 ${base.p95.toFixed(1)} ms) | ratio ${(api.rps / base.rps).toFixed(2)}  (targets: ratio ≥ 0.5, p95 ≤ 25 ms)`,
@@ -176,7 +169,6 @@ async function main(): Promise<void> {
   }
   agent.destroy();
   server.close();
-  await raw.end();
   await queue.stop();
   await pool.end();
 }

@@ -1,4 +1,4 @@
-import { firms, memberships, users, and, eq, withTenant, TenantTx } from '@layerbook/db';
+import { isUuid, withTenant, TenantTx } from '@layerbook/db';
 import type { Pool } from 'pg';
 import type { StaffPrincipal } from '../http/principal';
 
@@ -6,26 +6,60 @@ import type { StaffPrincipal } from '../http/principal';
  * Loads a staff member inside the request's own firm transaction, so a deactivation or role change
  * takes effect on the very next request at the cost of one query, not one more transaction.
  */
+interface StaffRow {
+  membership_id: string;
+  role: StaffPrincipal['role'];
+  status: string;
+  name: string;
+  email: string;
+  firm_name: string;
+  time_zone: string;
+  currency: string;
+}
+
+/**
+ * The staff member's row as literal SQL for the first round trip of a request's transaction
+ * (withTenantAndFirst). Both ids are checked UUIDs, so inlining them is safe.
+ */
+export function staffRowSql(tenantId: string, userId: string): string {
+  if (!isUuid(tenantId) || !isUuid(userId)) throw new Error('staffRowSql needs ids');
+  return `select m.id as membership_id, m.role, m.status, u.name, u.email, f.name as firm_name, f.time_zone, f.currency
+            from memberships m join users u on u.id = m.user_id join firms f on f.id = m.tenant_id
+           where m.tenant_id = '${tenantId}' and m.user_id = '${userId}'`;
+}
+
+export function toStaffPrincipal(tenantId: string, userId: string, row: StaffRow | undefined): StaffPrincipal | null {
+  if (!row || row.status !== 'active') return null;
+  return {
+    kind: 'staff',
+    id: userId,
+    tenantId,
+    membershipId: row.membership_id,
+    role: row.role,
+    name: row.name,
+    email: row.email,
+    firmName: row.firm_name,
+    timeZone: row.time_zone,
+    currency: row.currency,
+  };
+}
+
 export async function loadStaffInTx(tx: TenantTx, userId: string): Promise<StaffPrincipal | null> {
-  const rows = await tx.db
-    .select({
-      membershipId: memberships.id,
-      role: memberships.role,
-      status: memberships.status,
-      name: users.name,
-      email: users.email,
-      firmName: firms.name,
-      timeZone: firms.timeZone,
-      currency: firms.currency,
-    })
-    .from(memberships)
-    .innerJoin(users, eq(users.id, memberships.userId))
-    .innerJoin(firms, eq(firms.id, memberships.tenantId))
-    .where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.userId, userId)));
+  const { rows } = await tx.client.query<StaffRow>(staffRowSql(tx.tenantId, userId));
   const row = rows[0];
   if (!row || row.status !== 'active') return null;
-  const { status: _status, ...rest } = row;
-  return { kind: 'staff', id: userId, tenantId: tx.tenantId, ...rest };
+  return {
+    kind: 'staff',
+    id: userId,
+    tenantId: tx.tenantId,
+    membershipId: row.membership_id,
+    role: row.role,
+    name: row.name,
+    email: row.email,
+    firmName: row.firm_name,
+    timeZone: row.time_zone,
+    currency: row.currency,
+  };
 }
 
 export function loadStaffPrincipal(pool: Pool, userId: string, tenantId: string): Promise<StaffPrincipal | null> {

@@ -1,8 +1,8 @@
 import { roleAtLeast, StaffRole } from '@layerbook/contracts';
-import { TenantTx, withTenant } from '@layerbook/db';
+import { TenantTx, withTenant, withTenantAndFirst } from '@layerbook/db';
 import type { Request } from 'express';
 import { loadClientInTx } from '../auth/portal-auth';
-import { loadStaffInTx } from '../auth/staff-principal';
+import { staffRowSql, toStaffPrincipal } from '../auth/staff-principal';
 import type { AppContext } from '../context';
 import type { ClientPrincipal, StaffPrincipal } from './principal';
 import { forbidden, unauthorized } from './problem';
@@ -15,8 +15,8 @@ import { forbidden, unauthorized } from './problem';
 export async function withStaff<T>(ctx: AppContext, req: Request, needed: StaffRole, fn: (tx: TenantTx, staff: StaffPrincipal) => Promise<T>): Promise<T> {
   const claim = req.user;
   if (!claim || claim.kind !== 'staff') throw unauthorized();
-  return withTenant(ctx.pool, claim.tenantId, async (tx) => {
-    const staff = await loadStaffInTx(tx, claim.id);
+  return withTenantAndFirst(ctx.pool, claim.tenantId, staffRowSql(claim.tenantId, claim.id), async (tx, rows) => {
+    const staff = toStaffPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toStaffPrincipal>[2]);
     if (!staff) throw unauthorized('Your access has ended. Sign in again, or ask the owner.');
     if (!roleAtLeast(staff.role, needed)) throw forbidden();
     return fn(tx, staff);

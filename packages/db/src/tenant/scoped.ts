@@ -70,6 +70,31 @@ export function withTenant<T>(pool: Pool, tenantId: string, fn: (tx: TenantTx) =
   );
 }
 
+/**
+ * withTenant whose first round trip also runs `firstSql` (a trusted literal built by the caller from
+ * checked ids — the simple-query protocol takes no parameters), handing its rows to `fn`. Saves a
+ * round trip on every request that must re-check the signed-in person first.
+ */
+export function withTenantAndFirst<T>(
+  pool: Pool,
+  tenantId: string,
+  firstSql: string,
+  fn: (tx: TenantTx, firstRows: Record<string, unknown>[]) => Promise<T>,
+): Promise<T> {
+  if (!UUID.test(tenantId)) return Promise.reject(new Error('withTenant needs a firm id'));
+  let firstRows: Record<string, unknown>[] = [];
+  return inTransaction(
+    pool,
+    async (client) => {
+      const results = (await client.query(`begin; select set_config('app.tenant_id', '${tenantId}', true); ${firstSql}`)) as unknown as Array<{ rows: Record<string, unknown>[] }>;
+      firstRows = results[2]?.rows ?? [];
+    },
+    (tx) => fn({ ...tx, tenantId } as TenantTx, firstRows),
+  );
+}
+
+export const isUuid = (value: string) => UUID.test(value);
+
 export function withLookup<T>(pool: Pool, keys: LookupKeys, fn: (tx: LookupTx) => Promise<T>): Promise<T> {
   return inTransaction(
     pool,

@@ -1,0 +1,76 @@
+/**
+ * Load driver, run in a worker thread so the measuring client never shares the server's event loop.
+ * `http`: GETs a URL with a session cookie; `pg`: the same list query in a tenant transaction.
+ */
+import http from 'node:http';
+import { parentPort, workerData } from 'node:worker_threads';
+import { Pool } from 'pg';
+
+interface Job {
+  mode: 'http' | 'pg';
+  total: number;
+  concurrency: number;
+  port?: number;
+  path?: string;
+  cookie?: string;
+  databaseUrl?: string;
+  tenantId?: string;
+  sql?: { text: string; values: unknown[] };
+}
+
+function percentile(sorted: number[], p: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))]!;
+}
+
+async function run(job: Job): Promise<{ rps: number; p50: number; p95: number }> {
+  let call: () => Promise<void>;
+  let close = async () => undefined as void;
+  if (job.mode === 'http') {
+    const agent = new http.Agent({ keepAlive: true, maxSockets: job.concurrency });
+    close = async () => agent.destroy();
+    call = () =>
+      new Promise((resolve, reject) => {
+        http
+          .get({ host: '127.0.0.1', port: job.port, path: job.path, agent, headers: { cookie: job.cookie } }, (res) => {
+            res.resume();
+            res.on('end', () => (res.statusCode === 200 ? resolve() : reject(new Error(`HTTP ${res.statusCode}`))));
+          })
+          .on('error', reject);
+      });
+  } else {
+    const pool = new Pool({ connectionString: job.databaseUrl, max: job.concurrency });
+    close = () => pool.end();
+    call = async () => {
+      const client = await pool.connect();
+      try {
+        await client.query('begin');
+        await client.query(`select set_config('app.tenant_id', $1, true)`, [job.tenantId]);
+        await client.query(job.sql!.text, job.sql!.values);
+        await client.query('commit');
+      } finally {
+        client.release();
+      }
+    };
+  }
+  const latencies: number[] = [];
+  let next = 0;
+  const start = process.hrtime.bigint();
+  await Promise.all(
+    Array.from({ length: job.concurrency }, async () => {
+      while (next++ < job.total) {
+        const t0 = process.hrtime.bigint();
+        await call();
+        latencies.push(Number(process.hrtime.bigint() - t0) / 1e6);
+      }
+    }),
+  );
+  const seconds = Number(process.hrtime.bigint() - start) / 1e9;
+  await close();
+  latencies.sort((a, b) => a - b);
+  return { rps: job.total / seconds, p50: percentile(latencies, 50), p95: percentile(latencies, 95) };
+}
+
+run(workerData as Job).then(
+  (result) => parentPort!.postMessage(result),
+  (error) => parentPort!.postMessage({ error: String(error) }),
+);
