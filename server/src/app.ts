@@ -14,6 +14,8 @@ import { portalRoutes } from './portal/routes';
 import { teamRoutes } from './team/routes';
 import { clientRoutes, siteRoutes } from './clients/routes';
 import { inquiryRoutes } from './inquiries/routes';
+import { libraryRoutes } from './library/routes';
+import { takeoffRoutes } from './takeoff/routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
 
 export interface SsrHandlers {
@@ -74,6 +76,8 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/inquiries', inquiryRoutes(ctx));
   router.use('/clients', clientRoutes(ctx));
   router.use('/sites', siteRoutes(ctx));
+  router.use('/library', libraryRoutes(ctx));
+  router.use('/takeoff', takeoffRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });
