@@ -7,3 +7,5 @@ export * from './team/team';
 export * from './common/fields';
 export * from './inquiries/inquiry';
 export * from './clients/client';
+export * from './library';
+export * from './takeoff';

@@ -2,6 +2,8 @@ import { randomUUID } from 'node:crypto';
 import { auditLog, clients, eq, firms, memberships, portalUsers, sites, users, withGlobal, withTenant } from '@layerbook/db';
 import { localDate } from '../firms/local-date';
 import { seedDemoInquiries } from './demo-inquiries';
+import { seedDemoLibrary } from './demo-library';
+import { seedDemoTakeoff } from './demo-takeoff';
 import { Pool } from 'pg';
 import { hashPassword } from '../auth/passwords';
 
@@ -47,9 +49,11 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
       .insert(clients)
       .values({ tenantId: firmId, kind: 'homeowner', name: DEMO.client.name, email: DEMO.client.email, phone: '555-0177' })
       .returning({ id: clients.id });
-    await tx.db.insert(sites).values({ tenantId: firmId, clientId: client!.id, label: 'Home', addressLine1: '24 Thistledown Lane', city: 'Marrowby', region: 'VT', postalCode: '05999', yearBuilt: 1924, accessNotes: 'Stair hall ceiling 17 ft; round sitting room with a turret ceiling' });
+    const [site] = await tx.db.insert(sites).values({ tenantId: firmId, clientId: client!.id, label: 'Home', addressLine1: '24 Thistledown Lane', city: 'Marrowby', region: 'VT', postalCode: '05999', yearBuilt: 1924, accessNotes: 'Stair hall ceiling 17 ft; round sitting room with a turret ceiling' }).returning({ id: sites.id });
     await tx.db.insert(portalUsers).values({ tenantId: firmId, clientId: client!.id, email: DEMO.client.email, name: DEMO.client.name });
     await seedDemoInquiries(tx, localDate(DEMO.firm.timeZone, now), userIds[0]!);
+    await seedDemoLibrary(tx);
+    await seedDemoTakeoff(tx, site!.id);
     await tx.db.insert(auditLog).values({ tenantId: firmId, actorKind: 'system', action: 'demo.seeded', entity: 'firm', entityId: firmId });
   });
   return 'created';
