@@ -9,3 +9,5 @@ export * from './inquiries/inquiry';
 export * from './clients/client';
 export * from './library';
 export * from './takeoff';
+export * from './firms/estimating';
+export * from './firms/estimating-defaults';

@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
-import { pgPolicy, pgTable, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import { createdAt, currentTenant, id, jobsRole, lookupPolicy, updatedAt } from './columns';
+import { jsonb, pgPolicy, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { createdAt, currentTenant, id, jobsRole, lookupPolicy, tenantPolicy, updatedAt } from './columns';
 
 /** The tenant. Its own id is its tenant id, so the policy compares `id`. */
 export const firms = pgTable(
@@ -37,4 +37,20 @@ export const firms = pgTable(
     // The scheduler walks every firm (to fire each one's daily jobs at its local hour); it reads only.
     pgPolicy('firms_scheduler_read', { as: 'permissive', for: 'select', to: jobsRole, using: sql`true` }),
   ],
+);
+
+/**
+ * How the firm prices and schedules work: rates, overhead and profit method, minimum charge, tax,
+ * rounding, calendar and crew. `settings` holds @layerbook/contracts' EstimatingSettings.
+ */
+export const firmEstimatingSettings = pgTable(
+  'firm_estimating_settings',
+  {
+    tenantId: uuid('tenant_id')
+      .primaryKey()
+      .references(() => firms.id),
+    settings: jsonb('settings').notNull(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [tenantPolicy('firm_estimating_settings')],
 );
