@@ -16,6 +16,7 @@ import { clientRoutes, siteRoutes } from './clients/routes';
 import { inquiryRoutes } from './inquiries/routes';
 import { libraryRoutes } from './library/routes';
 import { takeoffRoutes } from './takeoff/routes';
+import { estimateRoutes } from './proposals/routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
 
 export interface SsrHandlers {
@@ -78,6 +79,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/sites', siteRoutes(ctx));
   router.use('/library', libraryRoutes(ctx));
   router.use('/takeoff', takeoffRoutes(ctx));
+  router.use('/estimates', estimateRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });

@@ -11,3 +11,5 @@ export * from './library';
 export * from './takeoff';
 export * from './firms/estimating';
 export * from './firms/estimating-defaults';
+export * from './proposals/estimate';
+export * from './engine';

@@ -5,5 +5,6 @@ export * from './clients';
 export * from './inquiries';
 export * from './library';
 export * from './takeoff';
+export * from './proposals';
 export * from './audit';
 export * from './mail';

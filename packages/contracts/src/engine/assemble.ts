@@ -1,0 +1,64 @@
+import type { EstimateInput, FinishSystem, Product, SurfaceShape } from '@layerbook/domain';
+import type { EstimatingSettings } from '../firms/estimating';
+import type { EstimateInputs } from '../proposals/estimate';
+import { toEngineSettings } from './settings';
+
+/** A measured room as the estimate needs it (from the site's takeoff). */
+export interface EngineRoom {
+  readonly id: string;
+  readonly name: string;
+  readonly isExterior: boolean;
+  readonly surfaces: ReadonlyArray<{ readonly id: string; readonly name: string; readonly shape: SurfaceShape; readonly disturbedPaintedArea: string | null }>;
+}
+
+/** Everything an estimate is computed from, besides the office's choices. */
+export interface EstimateContext {
+  readonly settings: EstimatingSettings;
+  readonly lengthUnit: 'ft' | 'm';
+  readonly currency: string;
+  readonly yearBuilt: number | null;
+  readonly rooms: readonly EngineRoom[];
+  readonly finishSystems: readonly FinishSystem[];
+  readonly products: readonly Product[];
+}
+
+/**
+ * The engine input for one option (variant) of an estimate. The browser runs this on every
+ * keystroke and the server on save, so both compute from exactly the same input.
+ * Surfaces without a finish in this option are left out; rooms left empty are dropped.
+ */
+export function assembleEstimateInput(context: EstimateContext, inputs: EstimateInputs, variantId: string): EstimateInput {
+  const variant = inputs.variants.find((v) => v.id === variantId) ?? inputs.variants[0]!;
+  const finishBySurface = new Map(variant.surfaces.map((s) => [s.surfaceId, s.finishSystemId]));
+  const rooms = context.rooms
+    .map((room) => ({
+      id: room.id,
+      name: room.name,
+      isExterior: room.isExterior,
+      surfaces: room.surfaces
+        .filter((s) => finishBySurface.has(s.id))
+        .map((s) => ({
+          id: s.id,
+          name: s.name,
+          shape: s.shape,
+          finishSystemId: finishBySurface.get(s.id)!,
+          ...(s.disturbedPaintedArea !== null ? { disturbedPaintedArea: Number(s.disturbedPaintedArea) } : {}),
+        })),
+    }))
+    .filter((room) => room.surfaces.length > 0);
+  const usedSystems = new Set(finishBySurface.values());
+  return {
+    settings: toEngineSettings(context.settings, context.lengthUnit, context.currency),
+    startDate: inputs.startDate,
+    property: { ...(context.yearBuilt !== null ? { yearBuilt: context.yearBuilt } : {}), isOccupied: inputs.isOccupied },
+    rooms,
+    finishSystems: context.finishSystems.filter((f) => usedSystems.has(f.id)),
+    products: [...context.products],
+    equipment: inputs.equipment,
+    subcontracts: inputs.subcontracts,
+    sundries: inputs.sundries,
+    ...(inputs.discount ? { discount: inputs.discount.kind === 'percent' ? { kind: 'share' as const, share: String(inputs.discount.percent / 100) } : { kind: 'amount' as const, amount: inputs.discount.amount } } : {}),
+    options: inputs.addOns.map((a) => ({ id: a.id, label: a.label, labourHours: a.labourHours, materialsCost: a.materialsCost })),
+    perAreaRates: inputs.perAreaRates,
+  };
+}

@@ -1,0 +1,54 @@
+import type { EngineRoom, EstimateContext } from '@layerbook/contracts';
+import type { FinishSystem, Product, SurfaceShape } from '@layerbook/domain';
+import type { TenantTx } from '@layerbook/db';
+import { getEstimatingSettings } from '../firms/estimating';
+import { notFound } from '../http/problem';
+
+/**
+ * Loads what an estimate for `siteId` is computed from: the firm's settings, the site's measured
+ * rooms and surfaces, and the firm's live finish systems and products. Plain SQL over the
+ * library and takeoff tables, whose JSON columns hold the engine's own shapes.
+ */
+export async function loadEstimateContext(tx: TenantTx, siteId: string): Promise<EstimateContext & { siteId: string; clientId: string }> {
+  const site = (await tx.client.query<{ id: string; client_id: string; year_built: number | null }>(
+    `select id, client_id, year_built from sites where tenant_id = $1 and id = $2`,
+    [tx.tenantId, siteId],
+  )).rows[0];
+  if (!site) throw notFound('site');
+  const { settings, lengthUnit, currency } = await getEstimatingSettings(tx);
+  const { rows: roomRows } = await tx.client.query<{ id: string; name: string; is_exterior: boolean }>(
+    `select id, name, is_exterior from rooms where tenant_id = $1 and site_id = $2 order by position, created_at`,
+    [tx.tenantId, siteId],
+  );
+  const { rows: surfaceRows } = await tx.client.query<{ id: string; room_id: string; name: string; shape: SurfaceShape; disturbed_painted_area: string | null }>(
+    `select s.id, s.room_id, s.name, s.shape, s.disturbed_painted_area::text as disturbed_painted_area
+       from surfaces s join rooms r on r.id = s.room_id
+      where s.tenant_id = $1 and r.site_id = $2 order by s.position, s.created_at`,
+    [tx.tenantId, siteId],
+  );
+  const rooms: EngineRoom[] = roomRows.map((r) => ({
+    id: r.id,
+    name: r.name,
+    isExterior: r.is_exterior,
+    surfaces: surfaceRows.filter((s) => s.room_id === r.id).map((s) => ({ id: s.id, name: s.name, shape: s.shape, disturbedPaintedArea: s.disturbed_painted_area })),
+  }));
+  const { rows: systemRows } = await tx.client.query<{ id: string; name: string; layers: FinishSystem['layers'] }>(
+    `select id, name, layers from finish_systems where tenant_id = $1 and archived_at is null order by name`,
+    [tx.tenantId],
+  );
+  const { rows: productRows } = await tx.client.query<{ id: string; name: string; unit: Product['unit']; containers: Product['containers']; hazards: Product['hazards'] }>(
+    `select id, name, unit, containers, hazards from products where tenant_id = $1 and archived_at is null order by name`,
+    [tx.tenantId],
+  );
+  return {
+    siteId: site.id,
+    clientId: site.client_id,
+    settings,
+    lengthUnit,
+    currency,
+    yearBuilt: site.year_built,
+    rooms,
+    finishSystems: systemRows.map((f) => ({ id: f.id, name: f.name, layers: f.layers })),
+    products: productRows.map((p) => ({ id: p.id, name: p.name, unit: p.unit, containers: p.containers, hazards: p.hazards ?? {} })),
+  };
+}
