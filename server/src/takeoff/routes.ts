@@ -1,7 +1,79 @@
+import { moveInput, roomInput, roomUpdate, surfaceInput, surfaceUpdate, uuid } from '@layerbook/contracts';
 import { Router } from 'express';
+import { z } from 'zod';
 import type { AppContext } from '../context';
+import { withStaff } from '../http/guards';
+import { parse } from '../http/validate';
+import {
+  addRoom,
+  addSurface,
+  deleteRoom,
+  deleteSurface,
+  duplicateSurface,
+  getTakeoff,
+  moveRoom,
+  moveSurface,
+  updateRoom,
+  updateSurface,
+} from './service';
 
-/** Takeoff routes (being built). */
-export function takeoffRoutes(_ctx: AppContext): Router {
-  return Router();
+const siteParam = z.strictObject({ siteId: uuid('site id') });
+const idParam = (label: string) => z.strictObject({ id: uuid(label) });
+const roomParam = idParam('room id');
+const surfaceParam = idParam('surface id');
+
+/**
+ * Site takeoff: rooms and their measured surfaces. Crew read it (the job sheet needs the rooms);
+ * owner and office change it. Bodies are parsed inside withStaff so a wrong role hears 403 first.
+ */
+export function takeoffRoutes(ctx: AppContext): Router {
+  const router = Router();
+
+  router.get('/sites/:siteId', async (req, res) => {
+    res.json(await withStaff(ctx, req, 'crew', (tx) => getTakeoff(tx, parse(siteParam, req.params).siteId)));
+  });
+
+  router.post('/sites/:siteId/rooms', async (req, res) => {
+    res.status(201).json(
+      await withStaff(ctx, req, 'office', (tx, staff) => addRoom(tx, { userId: staff.id }, parse(siteParam, req.params).siteId, parse(roomInput, req.body))),
+    );
+  });
+
+  router.patch('/rooms/:id', async (req, res) => {
+    res.json(await withStaff(ctx, req, 'office', (tx) => updateRoom(tx, parse(roomParam, req.params).id, parse(roomUpdate, req.body))));
+  });
+
+  router.delete('/rooms/:id', async (req, res) => {
+    await withStaff(ctx, req, 'office', (tx, staff) => deleteRoom(tx, { userId: staff.id }, parse(roomParam, req.params).id));
+    res.status(204).end();
+  });
+
+  router.post('/rooms/:id/move', async (req, res) => {
+    res.json(await withStaff(ctx, req, 'office', (tx) => moveRoom(tx, parse(roomParam, req.params).id, parse(moveInput, req.body))));
+  });
+
+  router.post('/rooms/:id/surfaces', async (req, res) => {
+    res.status(201).json(
+      await withStaff(ctx, req, 'office', (tx, staff) => addSurface(tx, { userId: staff.id }, parse(roomParam, req.params).id, parse(surfaceInput, req.body))),
+    );
+  });
+
+  router.patch('/surfaces/:id', async (req, res) => {
+    res.json(await withStaff(ctx, req, 'office', (tx) => updateSurface(tx, parse(surfaceParam, req.params).id, parse(surfaceUpdate, req.body))));
+  });
+
+  router.delete('/surfaces/:id', async (req, res) => {
+    await withStaff(ctx, req, 'office', (tx, staff) => deleteSurface(tx, { userId: staff.id }, parse(surfaceParam, req.params).id));
+    res.status(204).end();
+  });
+
+  router.post('/surfaces/:id/duplicate', async (req, res) => {
+    res.status(201).json(await withStaff(ctx, req, 'office', (tx, staff) => duplicateSurface(tx, { userId: staff.id }, parse(surfaceParam, req.params).id)));
+  });
+
+  router.post('/surfaces/:id/move', async (req, res) => {
+    res.json(await withStaff(ctx, req, 'office', (tx) => moveSurface(tx, parse(surfaceParam, req.params).id, parse(moveInput, req.body))));
+  });
+
+  return router;
 }

@@ -1,1 +1,2 @@
-export {};
+export * from './shape';
+export * from './takeoff';

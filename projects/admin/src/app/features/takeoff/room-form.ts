@@ -1,0 +1,107 @@
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCheckboxModule } from '@angular/material/checkbox';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import type { RoomView } from '@layerbook/contracts';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { errorText } from '../../shared/forms/error-text';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { requiredText } from '../../shared/forms/text-validators';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { TakeoffApi } from './takeoff-api';
+
+/** Adds a room (or an outside elevation) to a site, or renames the one it is given. */
+@Component({
+  selector: 'lb-room-form',
+  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  template: `
+    <form [formGroup]="form" (ngSubmit)="saveRoom()" novalidate [attr.aria-label]="isNew() ? 'Add a room' : 'Edit room ' + room()?.name">
+      <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
+        <lb-form-alert [message]="formMessage()" />
+        <mat-form-field>
+          <mat-label>Room name</mat-label>
+          <input matInput formControlName="name" autocomplete="off" required />
+          <mat-hint>Like "Stair hall" or "South elevation".</mat-hint>
+          <mat-error>{{ errorText(form.controls.name, words.name) }}</mat-error>
+        </mat-form-field>
+        <mat-checkbox formControlName="isExterior">Outside (an exterior wall or elevation)</mat-checkbox>
+        <mat-form-field class="wide">
+          <mat-label>Room notes</mat-label>
+          <textarea matInput formControlName="notes" rows="2"></textarea>
+          <mat-error>{{ errorText(form.controls.notes, words.notes) }}</mat-error>
+        </mat-form-field>
+        <div class="lb-form-actions">
+          <button mat-flat-button type="submit" [disabled]="isBusy()">{{ isNew() ? 'Add room' : 'Save room' }}</button>
+          <button mat-button type="button" (click)="cancelled.emit()">Cancel</button>
+        </div>
+      </fieldset>
+    </form>
+  `,
+  styles: `
+    .fields {
+      display: grid;
+      grid-template-columns: repeat(auto-fill, minmax(14rem, 1fr));
+      gap: 0.75rem;
+      align-items: center;
+    }
+    .wide,
+    lb-form-alert,
+    .lb-form-actions {
+      grid-column: 1 / -1;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class RoomForm implements OnInit {
+  private readonly api = inject(TakeoffApi);
+
+  readonly siteId = input.required<string>();
+  readonly room = input<RoomView | null>(null);
+  readonly saved = output<RoomView>();
+  readonly cancelled = output<void>();
+
+  protected readonly isNew = computed(() => this.room() === null);
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly isBusy = signal(false);
+  protected readonly formMessage = signal<string | null>(null);
+  protected readonly errorText = errorText;
+  protected readonly words = {
+    name: { required: 'Enter the room name.', maxlength: 'Use at most 120 characters.' },
+    notes: { maxlength: 'Use at most 2000 characters.' },
+  };
+
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    name: ['', [requiredText, Validators.maxLength(120)]],
+    isExterior: [false],
+    notes: ['', Validators.maxLength(2000)],
+  });
+
+  ngOnInit(): void {
+    const room = this.room();
+    if (room) this.form.reset({ name: room.name, isExterior: room.isExterior, notes: room.notes });
+  }
+
+  protected async saveRoom(): Promise<void> {
+    this.formMessage.set(null);
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const v = this.form.getRawValue();
+    const body = { name: v.name.trim(), isExterior: v.isExterior, notes: v.notes.trim() };
+    this.isBusy.set(true);
+    try {
+      const current = this.room();
+      const saved = current ? await this.api.updateRoom(current.id, body) : await this.api.addRoom(this.siteId(), body);
+      this.form.reset();
+      this.saved.emit(saved);
+    } catch (error) {
+      this.formMessage.set(applyProblem(this.form, toProblem(error)));
+    } finally {
+      this.isBusy.set(false);
+    }
+  }
+}

@@ -1,0 +1,195 @@
+import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, inject, input, output, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { AbstractControl, FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { ErrorStateMatcher, ShowOnDirtyErrorStateMatcher } from '@angular/material/core';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import type { SurfaceInput, SurfaceView, TakeoffLengthUnit } from '@layerbook/contracts';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { requiredText } from '../../shared/forms/text-validators';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { type LiveMeasure, measureLive } from './live-measure';
+import { quantityText, workingText } from './measure-words';
+import { readNumber, shortNumber } from './number-text';
+import { type DimField, SHAPE_GROUPS, shapeChoice } from './shape-catalog';
+import { cornerArray, enableFor, loadShape, openingGroup, readShape, shapeGroup } from './shape-form-model';
+import { ShapeSketch } from './shape-sketch';
+import { TakeoffApi } from './takeoff-api';
+
+const DISTURBED_NOUN = 'painted area the prep disturbs';
+
+/** Adds a surface to a room or edits one: choose a shape, type its sizes, watch the area, save. */
+@Component({
+  selector: 'lb-surface-form',
+  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule, ShapeSketch],
+  // Messages appear while typing, not only after leaving the field: a phone user rarely tabs out.
+  providers: [{ provide: ErrorStateMatcher, useClass: ShowOnDirtyErrorStateMatcher }],
+  templateUrl: './surface-form.html',
+  styleUrl: './surface-form.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class SurfaceForm implements OnInit {
+  private readonly api = inject(TakeoffApi);
+  private readonly destroyRef = inject(DestroyRef);
+
+  readonly roomId = input.required<string>();
+  readonly roomName = input.required<string>();
+  readonly unit = input.required<TakeoffLengthUnit>();
+  readonly surface = input<SurfaceView | null>(null);
+  readonly saved = output<SurfaceView>();
+  readonly cancelled = output<void>();
+
+  protected readonly groups = SHAPE_GROUPS;
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly isBusy = signal(false);
+  protected readonly formMessage = signal<string | null>(null);
+  protected readonly live = signal<LiveMeasure>({ state: 'missing' });
+  protected readonly choice = signal(shapeChoice('walls'));
+  protected readonly isNew = computed(() => this.surface() === null);
+  protected readonly liveShape = computed(() => {
+    const live = this.live();
+    return live.state === 'measured' ? live.shape : null;
+  });
+  protected readonly quantityText = quantityText;
+  protected readonly workingText = workingText;
+  protected readonly shortNumber = shortNumber;
+
+  protected readonly form = new FormGroup({
+    name: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(120)] }),
+    shape: shapeGroup(),
+    disturbedPaintedArea: new FormControl('', { nonNullable: true, validators: disturbedRule }),
+    notes: new FormControl('', { nonNullable: true, validators: Validators.maxLength(2000) }),
+  });
+  protected readonly shape = this.form.controls.shape;
+  /** Controls the engine's last refusal was pinned to, so the next reading can clear it. */
+  private marked: AbstractControl[] = [];
+
+  ngOnInit(): void {
+    const surface = this.surface();
+    if (surface) {
+      loadShape(this.shape, surface, this.unit());
+      const disturbed = surface.disturbedPaintedArea;
+      this.form.controls.name.setValue(surface.name);
+      this.form.controls.notes.setValue(surface.notes);
+      this.form.controls.disturbedPaintedArea.setValue(disturbed === null ? '' : shortNumber(disturbed));
+    } else {
+      enableFor(this.shape);
+    }
+    this.choice.set(shapeChoice(this.shape.controls.kind.value));
+    this.shape.controls.kind.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe((kind) => {
+      enableFor(this.shape);
+      const next = shapeChoice(kind);
+      // A name nobody typed follows the shape ("Walls" → "Turret ceiling").
+      if (this.form.controls.name.pristine) this.form.controls.name.setValue(next.defaultName, { emitEvent: false });
+      this.choice.set(next);
+    });
+    this.form.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe(() => this.remeasure());
+    if (this.isNew()) this.form.controls.name.setValue(this.choice().defaultName, { emitEvent: false });
+    this.remeasure();
+  }
+
+  protected message(control: AbstractControl): string {
+    const errors = control.errors ?? {};
+    for (const key of ['server', 'geometry', 'rule']) {
+      const text: unknown = errors[key];
+      if (typeof text === 'string') return text;
+    }
+    if (errors['required']) return 'Enter a name for the surface, like "North wall".';
+    if (errors['maxlength']) return 'That is too long for this field.';
+    return 'Check this field.';
+  }
+
+  protected suffix(field: DimField): string {
+    if (field.rule === 'length' || field.rule === 'depth0') return this.unit();
+    if (field.rule === 'area') return `${this.unit()}²`;
+    if (field.rule === 'angle') return '°';
+    return '';
+  }
+
+  protected inputMode(field: DimField): string {
+    return typeof field.rule === 'object' ? 'numeric' : 'decimal';
+  }
+
+  protected addOpening(): void {
+    this.shape.controls.openings.push(openingGroup());
+  }
+
+  protected removeOpening(index: number): void {
+    this.shape.controls.openings.removeAt(index);
+  }
+
+  protected addCorner(): void {
+    this.shape.controls.corners.push(cornerArray());
+  }
+
+  protected removeCorner(index: number): void {
+    this.shape.controls.corners.removeAt(index);
+  }
+
+  protected async saveSurface(): Promise<void> {
+    this.formMessage.set(null);
+    const reading = readShape(this.shape.getRawValue());
+    if (this.form.invalid || 'missing' in reading) {
+      this.form.markAllAsTouched();
+      for (const control of Object.values(this.shape.controls)) control.markAsDirty();
+      this.formMessage.set(this.live().state === 'refused' ? null : 'Some sizes are missing or need a look; see the messages beside the fields.');
+      return;
+    }
+    const v = this.form.getRawValue();
+    const body: SurfaceInput = {
+      name: v.name.trim(),
+      shape: reading.shape as SurfaceInput['shape'],
+      disturbedPaintedArea: readNumber(v.disturbedPaintedArea),
+      notes: v.notes.trim(),
+    };
+    this.isBusy.set(true);
+    try {
+      const current = this.surface();
+      this.saved.emit(current ? await this.api.updateSurface(current.id, body) : await this.api.addSurface(this.roomId(), body));
+    } catch (error) {
+      this.formMessage.set(applyProblem(this.form, toProblem(error)));
+    } finally {
+      this.isBusy.set(false);
+    }
+  }
+
+  /** Measures what is typed so far and pins the engine's refusal, if any, to the field it names. */
+  private remeasure(): void {
+    for (const control of this.marked) control.updateValueAndValidity({ emitEvent: false });
+    this.marked = [];
+    const reading = readShape(this.shape.getRawValue());
+    if ('missing' in reading) {
+      this.live.set({ state: 'missing' });
+      return;
+    }
+    const live = measureLive(reading.shape);
+    this.live.set(live);
+    if (live.state === 'refused') {
+      this.mark(this.form.get(live.field), live.message);
+    } else if (live.state === 'measured' && live.measure.measure === 'area') {
+      const disturbed = readNumber(this.form.controls.disturbedPaintedArea.value);
+      if (disturbed !== null && disturbed > live.measure.gross) {
+        this.mark(this.form.controls.disturbedPaintedArea, 'The disturbed painted area cannot be more than the surface itself.');
+      }
+    }
+  }
+
+  private mark(control: AbstractControl | null, message: string): void {
+    if (!(control instanceof FormControl)) return;
+    control.setErrors({ ...control.errors, geometry: message }, { emitEvent: false });
+    control.markAsDirty();
+    this.marked.push(control);
+  }
+
+}
+
+function disturbedRule(control: AbstractControl<string>) {
+  const value = readNumber(control.value);
+  if (value === null) return null;
+  return Number.isNaN(value) || value < 0 ? { rule: `Enter the ${DISTURBED_NOUN}, 0 or more, or leave it empty.` } : null;
+}

@@ -1,0 +1,52 @@
+import { HttpClient } from '@angular/common/http';
+import { Injectable, inject } from '@angular/core';
+import { firstValueFrom } from 'rxjs';
+import type { RoomInput, RoomUpdate, RoomView, SurfaceInput, SurfaceView, TakeoffView } from '@layerbook/contracts';
+
+const id = (value: string) => encodeURIComponent(value);
+
+/** The takeoff API (/api/takeoff); every write answers with what changed, the page reloads the whole view. */
+@Injectable({ providedIn: 'root' })
+export class TakeoffApi {
+  private readonly http = inject(HttpClient);
+
+  load(siteId: string): Promise<TakeoffView> {
+    return firstValueFrom(this.http.get<TakeoffView>(`/api/takeoff/sites/${id(siteId)}`));
+  }
+
+  addRoom(siteId: string, body: RoomInput): Promise<RoomView> {
+    return firstValueFrom(this.http.post<RoomView>(`/api/takeoff/sites/${id(siteId)}/rooms`, body));
+  }
+
+  updateRoom(roomId: string, body: RoomUpdate): Promise<RoomView> {
+    return firstValueFrom(this.http.patch<RoomView>(`/api/takeoff/rooms/${id(roomId)}`, body));
+  }
+
+  deleteRoom(roomId: string): Promise<unknown> {
+    return firstValueFrom(this.http.delete(`/api/takeoff/rooms/${id(roomId)}`));
+  }
+
+  moveRoom(roomId: string, to: number): Promise<TakeoffView> {
+    return firstValueFrom(this.http.post<TakeoffView>(`/api/takeoff/rooms/${id(roomId)}/move`, { to }));
+  }
+
+  addSurface(roomId: string, body: SurfaceInput): Promise<SurfaceView> {
+    return firstValueFrom(this.http.post<SurfaceView>(`/api/takeoff/rooms/${id(roomId)}/surfaces`, body));
+  }
+
+  updateSurface(surfaceId: string, body: SurfaceInput): Promise<SurfaceView> {
+    return firstValueFrom(this.http.patch<SurfaceView>(`/api/takeoff/surfaces/${id(surfaceId)}`, body));
+  }
+
+  deleteSurface(surfaceId: string): Promise<unknown> {
+    return firstValueFrom(this.http.delete(`/api/takeoff/surfaces/${id(surfaceId)}`));
+  }
+
+  duplicateSurface(surfaceId: string): Promise<SurfaceView> {
+    return firstValueFrom(this.http.post<SurfaceView>(`/api/takeoff/surfaces/${id(surfaceId)}/duplicate`, {}));
+  }
+
+  moveSurface(surfaceId: string, to: number): Promise<TakeoffView> {
+    return firstValueFrom(this.http.post<TakeoffView>(`/api/takeoff/surfaces/${id(surfaceId)}/move`, { to }));
+  }
+}

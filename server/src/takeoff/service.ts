@@ -1,0 +1,246 @@
+import type { MoveInput, RoomInput, RoomUpdate, RoomView, SurfaceInput, SurfaceUpdate, SurfaceView, TakeoffLengthUnit, TakeoffView } from '@layerbook/contracts';
+import { and, asc, clients, eq, firms, rooms, sites, sql, surfaces, TenantTx } from '@layerbook/db';
+import { recordAudit } from '../audit/record';
+import { badRequest, notFound } from '../http/problem';
+import { measureOrReject, sumMeasures, unitOfSystem } from './measure';
+import { toSurfaceView, type SurfaceRow } from './surface-view';
+
+type RoomRow = typeof rooms.$inferSelect;
+
+/** Each write names its actor in the audit log. */
+export interface Actor {
+  readonly userId: string;
+}
+
+async function firmUnit(tx: TenantTx): Promise<TakeoffLengthUnit> {
+  const firm = (await tx.db.select({ units: firms.units }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
+  if (!firm) throw notFound('firm');
+  return unitOfSystem(firm.units);
+}
+
+// Every lookup filters on tenant_id as well as relying on RLS: the index leads with it, and a
+// wrong-firm id answers the same 404 as an id that never existed.
+async function findSite(tx: TenantTx, siteId: string) {
+  const row = (
+    await tx.db
+      .select({ site: sites, clientName: clients.name })
+      .from(sites)
+      .innerJoin(clients, and(eq(clients.tenantId, sites.tenantId), eq(clients.id, sites.clientId)))
+      .where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, siteId)))
+  )[0];
+  if (!row) throw notFound('site');
+  return row;
+}
+
+async function findRoom(tx: TenantTx, roomId: string): Promise<RoomRow> {
+  const row = (await tx.db.select().from(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId))))[0];
+  if (!row) throw notFound('room');
+  return row;
+}
+
+async function findSurface(tx: TenantTx, surfaceId: string): Promise<SurfaceRow> {
+  const row = (await tx.db.select().from(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId))))[0];
+  if (!row) throw notFound('surface');
+  return row;
+}
+
+export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffView> {
+  const { site, clientName } = await findSite(tx, siteId);
+  const unit = await firmUnit(tx);
+  const roomRows = await tx.db.select().from(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.siteId, siteId))).orderBy(asc(rooms.position), asc(rooms.createdAt));
+  const surfaceRows = await tx.db
+    .select({ surface: surfaces })
+    .from(surfaces)
+    .innerJoin(rooms, and(eq(rooms.tenantId, surfaces.tenantId), eq(rooms.id, surfaces.roomId)))
+    .where(and(eq(surfaces.tenantId, tx.tenantId), eq(rooms.siteId, siteId)))
+    .orderBy(asc(surfaces.position), asc(surfaces.createdAt));
+  const byRoom = new Map<string, SurfaceView[]>();
+  for (const { surface } of surfaceRows) {
+    const list = byRoom.get(surface.roomId) ?? [];
+    list.push(toSurfaceView(surface));
+    byRoom.set(surface.roomId, list);
+  }
+  const roomViews: RoomView[] = roomRows.map((r) => {
+    const list = byRoom.get(r.id) ?? [];
+    return { id: r.id, siteId: r.siteId, name: r.name, position: r.position, isExterior: r.isExterior, notes: r.notes, surfaces: list, totals: sumMeasures(list, unit) };
+  });
+  return {
+    site: {
+      id: site.id,
+      clientId: site.clientId,
+      clientName,
+      label: site.label,
+      addressLine1: site.addressLine1,
+      city: site.city,
+      yearBuilt: site.yearBuilt,
+      // Target housing is built before 1978 (15 U.S.C. 2681(17)); an unknown year stays unknown.
+      isPre1978: site.yearBuilt === null ? null : site.yearBuilt < 1978,
+      accessNotes: site.accessNotes,
+    },
+    lengthUnit: unit,
+    rooms: roomViews,
+    totals: sumMeasures(roomViews.flatMap((r) => r.surfaces), unit),
+  };
+}
+
+const toRoomView = (r: RoomRow, list: SurfaceView[], unit: TakeoffLengthUnit): RoomView => ({
+  id: r.id,
+  siteId: r.siteId,
+  name: r.name,
+  position: r.position,
+  isExterior: r.isExterior,
+  notes: r.notes,
+  surfaces: list,
+  totals: sumMeasures(list, unit),
+});
+
+async function roomSurfaces(tx: TenantTx, roomId: string): Promise<SurfaceView[]> {
+  const rows = await tx.db.select().from(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId))).orderBy(asc(surfaces.position), asc(surfaces.createdAt));
+  return rows.map(toSurfaceView);
+}
+
+export async function addRoom(tx: TenantTx, actor: Actor, siteId: string, input: RoomInput): Promise<RoomView> {
+  await findSite(tx, siteId);
+  const [{ next }] = await tx.db
+    .select({ next: sql<number>`coalesce(max(${rooms.position}) + 1, 0)::int` })
+    .from(rooms)
+    .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.siteId, siteId)));
+  const [row] = await tx.db.insert(rooms).values({ ...input, tenantId: tx.tenantId, siteId, position: next ?? 0 }).returning();
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.room_created', entity: 'room', entityId: row!.id, data: { siteId, name: row!.name } });
+  return toRoomView(row!, [], await firmUnit(tx));
+}
+
+export async function updateRoom(tx: TenantTx, roomId: string, patch: RoomUpdate): Promise<RoomView> {
+  const [row] = await tx.db.update(rooms).set({ ...patch, updatedAt: new Date() }).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId))).returning();
+  if (!row) throw notFound('room');
+  return toRoomView(row, await roomSurfaces(tx, roomId), await firmUnit(tx));
+}
+
+/** The room and all its surfaces go together, in the request's one transaction. */
+export async function deleteRoom(tx: TenantTx, actor: Actor, roomId: string): Promise<void> {
+  const room = await findRoom(tx, roomId);
+  const gone = await tx.db.delete(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId))).returning({ id: surfaces.id });
+  await tx.db.delete(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)));
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.room_deleted', entity: 'room', entityId: roomId, data: { siteId: room.siteId, name: room.name, surfacesDeleted: gone.length } });
+}
+
+/** Renumbers the list 0…n−1 with `id` at `to` (clamped to the end). Lists are a room or a site long. */
+function reorder(ids: readonly string[], id: string, to: number): string[] {
+  const rest = ids.filter((x) => x !== id);
+  rest.splice(Math.min(to, rest.length), 0, id);
+  return rest;
+}
+
+export async function moveRoom(tx: TenantTx, roomId: string, { to }: MoveInput): Promise<TakeoffView> {
+  const room = await findRoom(tx, roomId);
+  const siblings = await tx.db.select({ id: rooms.id }).from(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.siteId, room.siteId))).orderBy(asc(rooms.position), asc(rooms.createdAt));
+  const order = reorder(siblings.map((s) => s.id), roomId, to);
+  for (const [position, id] of order.entries()) {
+    await tx.db.update(rooms).set({ position }).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, id)));
+  }
+  return getTakeoff(tx, room.siteId);
+}
+
+/** Refuses a disturbed area larger than the surface it is on: a typing slip, and it would trip lead-safe reminders. */
+function checkDisturbed(disturbed: number | null, measure: ReturnType<typeof measureOrReject>): void {
+  if (disturbed !== null && measure.measure === 'area' && disturbed > measure.gross + 1e-9) {
+    throw badRequest([{ field: 'disturbedPaintedArea', message: 'The disturbed painted area cannot be more than the surface itself.' }]);
+  }
+}
+
+export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, input: SurfaceInput): Promise<SurfaceView> {
+  await findRoom(tx, roomId);
+  const measure = measureOrReject(input.shape);
+  checkDisturbed(input.disturbedPaintedArea, measure);
+  const unit = await firmUnit(tx);
+  const [{ next }] = await tx.db
+    .select({ next: sql<number>`coalesce(max(${surfaces.position}) + 1, 0)::int` })
+    .from(surfaces)
+    .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId)));
+  const [row] = await tx.db
+    .insert(surfaces)
+    .values({
+      tenantId: tx.tenantId,
+      roomId,
+      name: input.name,
+      position: next ?? 0,
+      shape: input.shape,
+      lengthUnit: unit,
+      disturbedPaintedArea: input.disturbedPaintedArea === null ? null : String(input.disturbedPaintedArea),
+      notes: input.notes,
+    })
+    .returning();
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.surface_created', entity: 'surface', entityId: row!.id, data: { roomId, kind: input.shape.kind } });
+  return toSurfaceView(row!);
+}
+
+/**
+ * A new shape is measured again and saved in the firm's unit of today. Without a shape, the stored
+ * one keeps its unit, and a disturbed area sent alone is read in that unit too.
+ */
+export async function updateSurface(tx: TenantTx, surfaceId: string, patch: SurfaceUpdate): Promise<SurfaceView> {
+  const current = await findSurface(tx, surfaceId);
+  const shape = patch.shape ?? toSurfaceView(current).shape;
+  const measure = measureOrReject(shape);
+  const disturbed = patch.disturbedPaintedArea !== undefined ? patch.disturbedPaintedArea : toSurfaceView(current).disturbedPaintedArea;
+  checkDisturbed(disturbed, measure);
+  const [row] = await tx.db
+    .update(surfaces)
+    .set({
+      ...(patch.name !== undefined ? { name: patch.name } : {}),
+      ...(patch.notes !== undefined ? { notes: patch.notes } : {}),
+      ...(patch.shape !== undefined ? { shape: patch.shape, lengthUnit: await firmUnit(tx) } : {}),
+      ...(patch.disturbedPaintedArea !== undefined ? { disturbedPaintedArea: patch.disturbedPaintedArea === null ? null : String(patch.disturbedPaintedArea) } : {}),
+      updatedAt: new Date(),
+    })
+    .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)))
+    .returning();
+  return toSurfaceView(row!);
+}
+
+export async function deleteSurface(tx: TenantTx, actor: Actor, surfaceId: string): Promise<void> {
+  const current = await findSurface(tx, surfaceId);
+  await tx.db.delete(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)));
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.surface_deleted', entity: 'surface', entityId: surfaceId, data: { roomId: current.roomId, name: current.name } });
+}
+
+/** A copy placed right after the original (four alike walls, two alike vault bays). */
+export async function duplicateSurface(tx: TenantTx, actor: Actor, surfaceId: string): Promise<SurfaceView> {
+  const original = await findSurface(tx, surfaceId);
+  await tx.db
+    .update(surfaces)
+    .set({ position: sql`${surfaces.position} + 1` })
+    .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, original.roomId), sql`${surfaces.position} > ${original.position}`));
+  const [row] = await tx.db
+    .insert(surfaces)
+    .values({
+      tenantId: tx.tenantId,
+      roomId: original.roomId,
+      name: copyName(original.name),
+      position: original.position + 1,
+      shape: original.shape,
+      lengthUnit: original.lengthUnit,
+      disturbedPaintedArea: original.disturbedPaintedArea,
+      notes: original.notes,
+    })
+    .returning();
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.surface_created', entity: 'surface', entityId: row!.id, data: { roomId: original.roomId, copyOf: surfaceId } });
+  return toSurfaceView(row!);
+}
+
+/** "North wall" → "North wall (copy)"; names stay within the 120-character limit. */
+function copyName(name: string): string {
+  const suffix = ' (copy)';
+  return `${name.slice(0, 120 - suffix.length)}${suffix}`;
+}
+
+export async function moveSurface(tx: TenantTx, surfaceId: string, { to }: MoveInput): Promise<TakeoffView> {
+  const surface = await findSurface(tx, surfaceId);
+  const room = await findRoom(tx, surface.roomId);
+  const siblings = await tx.db.select({ id: surfaces.id }).from(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, room.id))).orderBy(asc(surfaces.position), asc(surfaces.createdAt));
+  const order = reorder(siblings.map((s) => s.id), surfaceId, to);
+  for (const [position, id] of order.entries()) {
+    await tx.db.update(surfaces).set({ position }).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, id)));
+  }
+  return getTakeoff(tx, room.siteId);
+}
