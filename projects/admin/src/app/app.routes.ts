@@ -26,8 +26,8 @@ export const routes: Routes = [
       },
       {
         path: 'jobs',
-        title: 'Jobs & proposals · Layerbook',
-        loadComponent: () => import('./features/jobs/jobs').then((m) => m.Jobs),
+        canActivate: [roleGuard('office')],
+        loadChildren: () => import('./features/proposals/proposals.routes'),
       },
       {
         path: 'billing',
@@ -43,8 +43,12 @@ export const routes: Routes = [
       },
       {
         path: 'library',
-        title: 'Finish library · Layerbook',
-        loadComponent: () => import('./features/library/library').then((m) => m.Library),
+        loadChildren: () => import('./features/library/library.routes'),
+      },
+      {
+        path: 'sites/:siteId/takeoff',
+        canActivate: [roleGuard('office')],
+        loadChildren: () => import('./features/takeoff/takeoff.routes'),
       },
       {
         path: 'team',

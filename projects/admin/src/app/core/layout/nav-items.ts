@@ -12,7 +12,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Today', icon: 'wb_sunny', path: '/today', minRole: 'crew' },
   { label: 'Inquiries', icon: 'call', path: '/inquiries', minRole: 'office' },
   { label: 'Clients', icon: 'group', path: '/clients', minRole: 'office' },
-  { label: 'Jobs & proposals', icon: 'format_paint', path: '/jobs', minRole: 'crew' },
+  { label: 'Jobs & proposals', icon: 'format_paint', path: '/jobs', minRole: 'office' },
   { label: 'Billing', icon: 'receipt_long', path: '/billing', minRole: 'office' },
   { label: 'Cash', icon: 'savings', path: '/cash', minRole: 'office' },
   { label: 'Finish library', icon: 'layers', path: '/library', minRole: 'crew' },

@@ -17,6 +17,7 @@ import { errorText } from '../../shared/forms/error-text';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { FirmApi } from './firm-api';
+import { EstimatingSettingsForm } from './estimating-settings';
 import { StageLikelihoodsForm } from './stage-likelihoods';
 import { CURRENCY_CHOICES, LANGUAGE_CHOICES, UNIT_CHOICES, type Language, type UnitSystem } from './firm-choices';
 import { timeZoneChoices } from './time-zones';
@@ -36,6 +37,7 @@ const TOO_LONG = { maxlength: 'That is too long for this field.' };
     MatRadioModule,
     MatSelectModule,
     ReactiveFormsModule,
+    EstimatingSettingsForm,
     StageLikelihoodsForm,
   ],
   templateUrl: './firm-settings.html',

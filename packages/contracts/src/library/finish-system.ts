@@ -1,0 +1,170 @@
+import type { FinishLayer } from '@layerbook/domain';
+import { z } from 'zod';
+import { requiredText, text, uuid } from '../common/fields';
+import { applicationMethod, lengthUnit, numberField, quantityUnit } from './units';
+
+const positive = (missing: string, tooSmall: string) => numberField(missing).positive({ error: tooSmall });
+
+/**
+ * How far a product goes per coat: surface per unit for paints and glazes (400 ft² per gallon),
+ * or product per surface for plasters, whose data sheets give kg per m².
+ */
+export const coverageInput = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({
+      kind: z.literal('spreadRate'),
+      surfacePerUnit: positive('Enter how much surface one unit covers.', 'The spread rate must be more than zero.'),
+      unit: quantityUnit,
+      lengthUnit,
+    }),
+    z.strictObject({
+      kind: z.literal('consumption'),
+      unitPerSurface: positive('Enter how much product one unit of surface takes.', 'The consumption must be more than zero.'),
+      unit: quantityUnit,
+      lengthUnit,
+    }),
+  ],
+  { error: 'Choose spread rate (surface per unit) or consumption (product per surface).' },
+);
+export type CoverageInput = z.infer<typeof coverageInput>;
+
+export const DILUTION_CONVENTIONS = ['ofConcentrate', 'ofMix'] as const;
+export const dilutionInput = z.strictObject({
+  share: numberField('Enter the dilution as a share, like 0.1 for 10 %.')
+    .min(0, { error: 'The dilution cannot be negative.' })
+    .lt(1, { error: 'Dilution must be under 100 %.' }),
+  convention: z.enum(DILUTION_CONVENTIONS, { error: 'Say whether the water is a share of the product or of the final mix.' }),
+});
+
+export const mixRecipeInput = z
+  .strictObject({
+    by: z.enum(['volume', 'weight'], { error: 'Say whether the parts are by volume or by weight.' }),
+    baseProductId: uuid('product'),
+    components: z
+      .array(z.strictObject({ productId: uuid('product'), parts: positive('Enter the parts as a number.', 'Parts must be more than zero.') }), {
+        error: 'List the products in the mix.',
+      })
+      .min(2, { error: 'A mix recipe needs at least two products; use a single product otherwise.' })
+      .max(8, { error: 'Use at most 8 products in one mix.' }),
+  })
+  .superRefine((r, ctx) => {
+    const seen = new Set<string>();
+    r.components.forEach((c, i) => {
+      if (seen.has(c.productId)) ctx.addIssue({ code: 'custom', path: ['components', i, 'productId'], message: 'This product is already in the mix.' });
+      seen.add(c.productId);
+    });
+    if (!seen.has(r.baseProductId)) ctx.addIssue({ code: 'custom', path: ['baseProductId'], message: 'The base must be one of the products in the mix.' });
+  });
+
+const multiplier = numberField('Enter the multiplier as a number, like 1.25.')
+  .min(1, { error: 'A multiplier is at least 1 (no extra time).' })
+  .max(5, { error: 'A multiplier above 5 is surely a typo.' })
+  .optional();
+
+/** A waiting time longer than 90 days is not a layer wait; it is a second job. */
+const MAX_WAIT_HOURS = 90 * 24;
+
+export const finishLayerInput = z
+  .strictObject({
+    /** made by the browser (a uuid or short id); keeps a layer's identity across reorders */
+    id: z
+      .string({ error: 'Each layer needs an id.' })
+      .regex(/^[A-Za-z0-9_-]{1,64}$/, { error: 'A layer id uses letters, digits, - and _ (at most 64).' }),
+    name: requiredText(120, 'Name the layer, like "Scratch coat" or "Glaze".'),
+    method: applicationMethod,
+    productId: uuid('product').optional(),
+    recipe: mixRecipeInput.optional(),
+    coverage: coverageInput,
+    coats: numberField('Enter the number of coats.')
+      .int({ error: 'Coats are whole numbers.' })
+      .min(1, { error: 'A layer has at least one coat.' })
+      .max(20, { error: 'Use at most 20 coats.' }),
+    coatCoverages: z.array(coverageInput, { error: 'Give one coverage per coat.' }).optional(),
+    coverageShare: numberField('Enter the share of the surface, like 0.3 for 30 %.')
+      .gt(0, { error: 'The share of the surface must be more than 0 %.' })
+      .max(1, { error: 'The share of the surface is at most 100 %.' })
+      .optional(),
+    dilution: dilutionInput.optional(),
+    waste: numberField('Enter the waste as a share, like 0.1 for 10 %.')
+      .min(0, { error: 'Waste cannot be negative.' })
+      .lt(1, { error: 'Waste must be under 100 %.' }),
+    productionRate: z.strictObject({
+      surfacePerHour: positive('Enter how much surface one worker finishes in an hour.', 'The production rate must be more than zero.'),
+      lengthUnit,
+    }),
+    multipliers: z
+      .strictObject({ ceiling: multiplier, height: multiplier, curvedWall: multiplier, curvedCeiling: multiplier, occupied: multiplier })
+      .optional(),
+    waitHoursAfter: numberField('Enter the wait in hours.')
+      .min(0, { error: 'The wait cannot be negative.' })
+      .max(MAX_WAIT_HOURS, { error: 'Use at most 90 days (2160 hours).' }),
+  })
+  .superRefine((l, ctx) => {
+    if (l.productId === undefined && l.recipe === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['productId'], message: 'Choose a product, or give a mix recipe.' });
+    }
+    if (l.productId !== undefined && l.recipe !== undefined) {
+      ctx.addIssue({ code: 'custom', path: ['productId'], message: 'Use either one product or a mix recipe, not both.' });
+    }
+    if (l.coatCoverages && l.coatCoverages.length !== l.coats) {
+      ctx.addIssue({ code: 'custom', path: ['coatCoverages'], message: `Give one coverage per coat: ${l.coats} coat${l.coats === 1 ? '' : 's'}, ${l.coatCoverages.length} given.` });
+    }
+  });
+export type FinishLayerInput = z.infer<typeof finishLayerInput>;
+
+/** The stored layer must be exactly what the estimate engine takes. */
+type Assignable<A, B> = A extends B ? true : false;
+export const LAYER_MATCHES_ENGINE: Assignable<FinishLayerInput, FinishLayer> = true;
+
+const layerList = z
+  .array(finishLayerInput, { error: 'A finish system needs at least one layer.' })
+  .min(1, { error: 'A finish system needs at least one layer.' })
+  .max(30, { error: 'Use at most 30 layers in one system.' })
+  .superRefine((layers, ctx) => {
+    const seen = new Set<string>();
+    layers.forEach((l, i) => {
+      if (seen.has(l.id)) ctx.addIssue({ code: 'custom', path: [i, 'id'], message: 'Two layers share this id.' });
+      seen.add(l.id);
+    });
+  });
+
+const finishSystemFields = {
+  name: requiredText(120, 'Name the finish system.'),
+  description: text(2000),
+  layers: layerList,
+};
+export const finishSystemInput = z.strictObject({ ...finishSystemFields, description: finishSystemFields.description.default('') });
+export type FinishSystemInput = z.infer<typeof finishSystemInput>;
+/** No defaults: a partial update changes only what it names. */
+export const finishSystemUpdate = z.strictObject(finishSystemFields).partial();
+export type FinishSystemUpdate = z.infer<typeof finishSystemUpdate>;
+
+export const systemListQuery = z.strictObject({
+  archived: z.enum(['exclude', 'include', 'only'], { error: 'Use exclude, include or only.' }).default('exclude'),
+});
+
+/** A product a system uses, with its name resolved for display. */
+export interface UsedProduct {
+  readonly id: string;
+  readonly name: string;
+  readonly unit: string;
+  readonly isArchived: boolean;
+}
+
+export interface FinishSystemSummary {
+  readonly id: string;
+  readonly name: string;
+  readonly description: string;
+  readonly layerCount: number;
+  /** sum of the waits between layers (the last layer's wait included: it is the cure before use) */
+  readonly totalWaitHours: number;
+  readonly usesProducts: readonly UsedProduct[];
+  readonly archivedAt: string | null;
+  readonly updatedAt: string;
+}
+
+export interface FinishSystemView extends FinishSystemSummary {
+  readonly layers: readonly FinishLayerInput[];
+  readonly createdAt: string;
+}

@@ -1,0 +1,153 @@
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCheckboxModule } from '@angular/material/checkbox';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import type { ContainerView, ProductInput, ProductKind, ProductView } from '@layerbook/contracts';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { errorText } from '../../shared/forms/error-text';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
+import { requiredText } from '../../shared/forms/text-validators';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { LibraryApi } from './library-api';
+import { FLAMMABLE_BELOW_C, PRODUCT_KIND_CHOICES, type QuantityUnit, UNIT_GROUPS } from './library-words';
+
+const TOO_LONG = { maxlength: 'That is too long for this field.' };
+
+/** Adds a product, or edits the one it is given: containers with prices, hazards from the SDS. */
+@Component({
+  selector: 'lb-product-form',
+  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  templateUrl: './product-form.html',
+  styleUrl: './product-form.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ProductForm implements OnInit {
+  private readonly api = inject(LibraryApi);
+  private readonly fb = inject(NonNullableFormBuilder);
+
+  readonly product = input<ProductView | null>(null);
+  readonly saved = output<ProductView>();
+  readonly cancelled = output<void>();
+
+  protected readonly isNew = computed(() => this.product() === null);
+  protected readonly kinds = PRODUCT_KIND_CHOICES;
+  protected readonly unitGroups = UNIT_GROUPS;
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly isBusy = signal(false);
+  protected readonly formMessage = signal<string | null>(null);
+  protected readonly errorText = errorText;
+  protected readonly words = {
+    name: { required: 'Enter the product name.', ...TOO_LONG },
+    kind: { required: 'Choose what kind of product this is.' },
+    unit: { required: 'Choose the unit the product is counted in.' },
+    label: { required: 'Name the container, like "1 gal" or "20 kg pail".', ...TOO_LONG },
+    size: { required: 'Enter the container size.', min: 'The container size must be more than zero.' },
+    price: { required: 'Enter the price of this container, like 45.00.', ...AMOUNT_WORDS },
+    flashPoint: { min: 'Check the flash point: it should be between −100 and 400 °C.', max: 'Check the flash point: it should be between −100 and 400 °C.' },
+    url: { pattern: 'Enter a web address starting with https://.', ...TOO_LONG },
+    line: TOO_LONG,
+    containers: { required: 'Add at least one container with its price.' },
+  };
+
+  protected readonly form = this.fb.group({
+    name: ['', [requiredText, Validators.maxLength(120)]],
+    kind: this.fb.control<ProductKind>('paint', Validators.required),
+    unit: this.fb.control<QuantityUnit>('gallon', Validators.required),
+    containers: this.fb.array([this.containerGroup()]),
+    hazards: this.fb.group({
+      flashPointC: this.fb.control<number | null>(null, [Validators.min(-100), Validators.max(400)]),
+      isLime: [false],
+      containsSilica: [false],
+    }),
+    sdsUrl: ['', [Validators.maxLength(500), Validators.pattern(/^\s*(https?:\/\/\S+)?\s*$/)]],
+    notes: ['', Validators.maxLength(2000)],
+  });
+
+  private readonly flashPoint = toSignal(this.form.controls.hazards.controls.flashPointC.valueChanges, { initialValue: null });
+  /** Shown live beside the flash point so the rule is visible, not hidden in the server. */
+  protected readonly flammableNote = computed(() => {
+    const c = this.flashPoint();
+    if (c === null || c === undefined || Number.isNaN(c)) return 'Leave empty if it does not burn. Below 23 °C it counts as flammable (29 CFR 1910.106).';
+    return c < FLAMMABLE_BELOW_C
+      ? `Flammable: ${c} °C is below 23 °C (29 CFR 1910.106). Crew sheets will carry the fire cautions.`
+      : `Not flammable under 29 CFR 1910.106: ${c} °C is 23 °C or above. Still keep it away from flames.`;
+  });
+
+  ngOnInit(): void {
+    const p = this.product();
+    if (!p) return;
+    this.form.controls.containers.clear();
+    for (const c of p.containers) this.form.controls.containers.push(this.containerGroup(c));
+    this.form.reset({
+      name: p.name,
+      kind: p.kind,
+      unit: p.unit,
+      hazards: { flashPointC: p.hazards.flashPointC ?? null, isLime: !!p.hazards.isLime, containsSilica: !!p.hazards.containsSilica },
+      sdsUrl: p.sdsUrl,
+      notes: p.notes,
+    });
+  }
+
+  protected addContainer(): void {
+    this.form.controls.containers.push(this.containerGroup({ label: '', size: 1, unit: this.form.controls.unit.value, price: '' }));
+  }
+
+  protected removeContainer(index: number): void {
+    this.form.controls.containers.removeAt(index);
+  }
+
+  protected async saveProduct(): Promise<void> {
+    this.formMessage.set(null);
+    if (this.form.controls.containers.length === 0) {
+      this.formMessage.set(this.words.containers.required);
+      return;
+    }
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.isBusy.set(true);
+    try {
+      const body = this.toBody();
+      const current = this.product();
+      this.saved.emit(current ? await this.api.updateProduct(current.id, body) : await this.api.createProduct(body));
+    } catch (error) {
+      this.formMessage.set(applyProblem(this.form, toProblem(error)));
+    } finally {
+      this.isBusy.set(false);
+    }
+  }
+
+  private containerGroup(c: Partial<ContainerView> = { label: '1 gal', size: 1, unit: 'gallon', price: '' }) {
+    return this.fb.group({
+      label: [c.label ?? '', [requiredText, Validators.maxLength(40)]],
+      size: this.fb.control<number | null>(c.size ?? null, [Validators.required, Validators.min(Number.MIN_VALUE)]),
+      unit: this.fb.control<QuantityUnit>(c.unit ?? 'gallon', Validators.required),
+      price: [c.price ?? '', [requiredText, amountText]],
+    });
+  }
+
+  private toBody(): ProductInput {
+    const v = this.form.getRawValue();
+    const hazards: ProductInput['hazards'] = {};
+    if (v.hazards.flashPointC !== null) hazards.flashPointC = v.hazards.flashPointC;
+    if (v.hazards.isLime) hazards.isLime = true;
+    if (v.hazards.containsSilica) hazards.containsSilica = true;
+    return {
+      name: v.name.trim(),
+      kind: v.kind,
+      unit: v.unit,
+      containers: v.containers.map((c) => ({ label: c.label.trim(), size: c.size ?? 0, unit: c.unit, price: toAmount(c.price) ?? '' })),
+      hazards,
+      sdsUrl: v.sdsUrl.trim(),
+      notes: v.notes.trim(),
+    };
+  }
+}

@@ -1,0 +1,274 @@
+import { ChangeDetectionStrategy, Component, DestroyRef, LOCALE_ID, OnInit, computed, inject, input, linkedSignal, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCheckboxModule } from '@angular/material/checkbox';
+import { provideNativeDateAdapter } from '@angular/material/core';
+import { MatDatepickerModule } from '@angular/material/datepicker';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { DomainInputError, measureSurface } from '@layerbook/domain';
+import { merge } from 'rxjs';
+import { toProblem } from '../../core/errors/problem';
+import { errorText } from '../../shared/forms/error-text';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { AddOnsSection } from './addons-section';
+import { EstimateApi, type EstimateView } from './estimate-api';
+import { MAX_OPTIONS, WORDS, estimateForm, fillForm, nextOptionId, optionGroup, readInputs } from './estimate-form';
+import { measureUnit, roundTo, statusWord } from './estimate-words';
+import { ExtrasFields } from './extras-fields';
+import { applySaveProblem, targetKey } from './field-targets';
+import { LabourSection } from './labour-section';
+import { type LiveAttempt, computeLive } from './live-estimate';
+import { MaterialsSection } from './materials-section';
+import { PriceSection } from './price-section';
+import type { ResultJson } from './result-json';
+import { SafetySection } from './safety-section';
+import { ScheduleSection } from './schedule-section';
+import { SurfaceFinishes } from './surface-finishes';
+
+type Shown =
+  | { readonly source: 'server' | 'live'; readonly result: ResultJson }
+  | { readonly source: 'stale'; readonly result: ResultJson | null; readonly message: string };
+
+/**
+ * The estimate builder: the office chooses finishes per surface in up to four options and adds
+ * the extras; the numbers are recomputed in the browser on every change with the same engine
+ * the server uses, and Save stores the server's own numbers.
+ */
+@Component({
+  selector: 'lb-estimate-builder',
+  imports: [
+    AddOnsSection,
+    ExtrasFields,
+    FormAlert,
+    LabourSection,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatDatepickerModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatProgressBarModule,
+    MaterialsSection,
+    PriceSection,
+    ReactiveFormsModule,
+    RouterLink,
+    SafetySection,
+    ScheduleSection,
+    SurfaceFinishes,
+  ],
+  providers: [provideNativeDateAdapter()],
+  templateUrl: './estimate-builder.html',
+  styleUrl: './estimate-builder.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class EstimateBuilder implements OnInit {
+  private readonly api = inject(EstimateApi);
+  private readonly locale = inject(LOCALE_ID);
+
+  /** From the route (withComponentInputBinding). */
+  readonly id = input.required<string>();
+
+  protected readonly form = estimateForm();
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly view = signal<EstimateView | null>(null);
+  protected readonly isLoading = signal(true);
+  protected readonly isSaving = signal(false);
+  protected readonly loadMessage = signal<string | null>(null);
+  protected readonly formMessage = signal<string | null>(null);
+  protected readonly justSaved = signal(false);
+  protected readonly currentIndex = signal(0);
+  protected readonly maxOptions = MAX_OPTIONS;
+  protected readonly noNotes: ReadonlyMap<string, string> = new Map();
+  protected readonly words = WORDS;
+  protected readonly errorText = errorText;
+  protected readonly statusWord = statusWord;
+  /** bumps on every value or status change of the form: the signals below read the form through it */
+  protected readonly revision = signal(0);
+  private readonly baseline = signal('');
+
+  protected readonly context = computed(() => this.view()?.context ?? null);
+  protected readonly options = computed(() => {
+    this.revision();
+    return [...this.form.controls.variants.controls];
+  });
+  protected readonly currentOption = computed(() => this.options()[Math.min(this.currentIndex(), this.options().length - 1)] ?? null);
+  protected readonly currentLabel = computed(() => {
+    this.revision();
+    return this.currentOption()?.getRawValue().label ?? '';
+  });
+  private readonly currentOptionId = computed(() => this.currentOption()?.controls.id.value ?? 'A');
+  protected readonly isDirty = computed(() => {
+    this.revision();
+    return this.view() !== null && JSON.stringify(this.form.getRawValue()) !== this.baseline();
+  });
+
+  /** surface id → its measured area or length, from the takeoff shape */
+  protected readonly measures = computed(() => {
+    const context = this.context();
+    const out = new Map<string, string>();
+    if (!context) return out;
+    const takeoff = { minDeductedOpeningArea: context.settings.minDeductedOpeningArea };
+    for (const room of context.rooms) {
+      for (const s of room.surfaces) {
+        try {
+          const m = measureSurface(s.shape, takeoff);
+          out.set(s.id, `Measured ${roundTo(m.quantity, 2)} ${measureUnit(context.lengthUnit, m.measure)}`);
+        } catch (error) {
+          if (!(error instanceof DomainInputError)) throw error;
+          out.set(s.id, `Cannot be measured: ${error.message}`);
+        }
+      }
+    }
+    return out;
+  });
+
+  private readonly attempt = computed<LiveAttempt | null>(() => {
+    this.revision();
+    const context = this.context();
+    if (!context) return null;
+    const variantId = this.currentOptionId();
+    if (this.form.invalid) return { kind: 'waiting', variantId, message: 'Fix the marked fields to see new numbers.' };
+    return computeLive(context, readInputs(this.form, context), variantId);
+  });
+
+  /** The last numbers the engine gave for this option, kept while a change cannot be priced. */
+  private readonly lastGood = linkedSignal<LiveAttempt | null, { variantId: string; result: ResultJson } | null>({
+    source: this.attempt,
+    computation: (attempt, previous) => {
+      if (attempt?.kind === 'ok') return { variantId: attempt.variantId, result: attempt.result };
+      const kept = previous?.value;
+      return kept && attempt && kept.variantId === attempt.variantId ? kept : null;
+    },
+  });
+
+  private readonly savedResult = computed(
+    () => this.view()?.result?.variants.find((v) => v.id === this.currentOptionId())?.result ?? null,
+  );
+
+  protected readonly shown = computed<Shown | null>(() => {
+    const saved = this.savedResult();
+    if (saved && !this.isDirty()) return { source: 'server', result: saved };
+    const attempt = this.attempt();
+    if (!attempt) return null;
+    if (attempt.kind === 'ok') return { source: 'live', result: attempt.result };
+    const message = attempt.kind === 'refused' && attempt.target.kind === 'top' ? `${attempt.target.prefix}${attempt.message}` : attempt.message;
+    return { source: 'stale', result: this.lastGood()?.result ?? saved, message };
+  });
+
+  /** Live engine messages beside the field they name. */
+  protected readonly notes = computed(() => {
+    const attempt = this.attempt();
+    const out = new Map<string, string>();
+    if (attempt?.kind === 'refused' && attempt.target.kind !== 'top') out.set(targetKey(attempt.target), attempt.message);
+    return out;
+  });
+
+  protected readonly computedAt = computed(() => {
+    const at = this.view()?.computedAt;
+    return at ? new Intl.DateTimeFormat(this.locale, { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(at)) : '';
+  });
+
+  protected readonly perAreaRates = computed(() => {
+    this.revision();
+    const context = this.context();
+    return context ? readInputs(this.form, context).perAreaRates : {};
+  });
+
+  constructor() {
+    merge(this.form.valueChanges, this.form.statusChanges)
+      .pipe(takeUntilDestroyed(inject(DestroyRef)))
+      .subscribe(() => this.revision.update((n) => n + 1));
+  }
+
+  ngOnInit(): void {
+    void this.load();
+  }
+
+  protected selectOption(index: number): void {
+    this.currentIndex.set(index);
+  }
+
+  /** Arrow keys move between option tabs, as in any tab list. */
+  protected moveBetweenOptions(event: KeyboardEvent, index: number): void {
+    const count = this.options().length;
+    const step = event.key === 'ArrowRight' ? 1 : event.key === 'ArrowLeft' ? -1 : 0;
+    if (step === 0) return;
+    event.preventDefault();
+    const next = (index + step + count) % count;
+    this.currentIndex.set(next);
+    (event.currentTarget as HTMLElement).parentElement?.querySelectorAll<HTMLElement>('[role="tab"]')[next]?.focus();
+  }
+
+  protected optionNeedsAttention(index: number): boolean {
+    this.revision();
+    const option = this.form.controls.variants.at(index);
+    return !!option && option.invalid && option.touched;
+  }
+
+  /** A new option starts from the current option's finishes. */
+  protected addOption(): void {
+    const context = this.context();
+    const options = this.form.controls.variants;
+    const current = this.currentOption();
+    if (!context || !current || options.length >= MAX_OPTIONS) return;
+    const id = nextOptionId(options.controls.map((o) => o.controls.id.value));
+    options.push(optionGroup(context, id, `Option ${id}`, current.controls.finishes.getRawValue()));
+    this.currentIndex.set(options.length - 1);
+  }
+
+  protected removeOption(): void {
+    const options = this.form.controls.variants;
+    if (options.length <= 1) return;
+    options.removeAt(this.currentIndex());
+    this.currentIndex.set(Math.max(0, Math.min(this.currentIndex(), options.length - 1)));
+  }
+
+  protected async save(): Promise<void> {
+    const view = this.view();
+    if (!view) return;
+    this.formMessage.set(null);
+    this.justSaved.set(false);
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      this.revision.update((n) => n + 1);
+      this.formMessage.set('Some fields need attention; the messages are beside them.');
+      return;
+    }
+    const sent = readInputs(this.form, view.context);
+    this.isSaving.set(true);
+    try {
+      this.show(await this.api.saveInputs(view.id, sent));
+      this.justSaved.set(true);
+    } catch (error) {
+      this.formMessage.set(applySaveProblem(this.form, view.context, sent, toProblem(error)));
+      this.revision.update((n) => n + 1);
+    } finally {
+      this.isSaving.set(false);
+    }
+  }
+
+  private async load(): Promise<void> {
+    try {
+      this.show(await this.api.get(this.id()));
+    } catch (error) {
+      this.loadMessage.set(toProblem(error).title);
+    } finally {
+      this.isLoading.set(false);
+    }
+  }
+
+  /** Shows what the server holds: its inputs in the form, its numbers on the right. */
+  private show(view: EstimateView): void {
+    fillForm(this.form, view.context, view.inputs);
+    this.baseline.set(JSON.stringify(this.form.getRawValue()));
+    this.view.set(view);
+    this.currentIndex.update((i) => Math.min(i, this.form.controls.variants.length - 1));
+    this.revision.update((n) => n + 1);
+  }
+}

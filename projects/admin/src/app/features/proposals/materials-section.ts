@@ -1,0 +1,111 @@
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import type { EngineRoom } from '@layerbook/contracts/engine';
+import { formatKitchenVolume, formatMetricMass, fromBase } from '@layerbook/domain';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { roundTo, unitWord } from './estimate-words';
+import type { ResultJson } from './result-json';
+
+/** What to buy (whole-job totals rounded up to the containers sold) and what to mix per layer. */
+@Component({
+  selector: 'lb-materials-section',
+  imports: [MoneyPipe],
+  template: `
+    <h2 id="materials-heading">Materials to buy</h2>
+    <div class="table-wrap">
+      <table aria-labelledby="materials-heading">
+        <thead>
+          <tr>
+            <th scope="col">Product</th>
+            <th scope="col" class="num">Need</th>
+            <th scope="col">Buy</th>
+            <th scope="col" class="num">Cost</th>
+            <th scope="col" class="num">Left over</th>
+          </tr>
+        </thead>
+        <tbody>
+          @for (p of products(); track p.productId) {
+            <tr>
+              <th scope="row">{{ p.name }}</th>
+              <td class="num">{{ p.need }}</td>
+              <td>
+                <ul class="plain">
+                  @for (line of p.lines; track line.label) {
+                    <li>{{ line.count }} × {{ line.label }} at {{ line.unitPrice | money: currency() }}</li>
+                  }
+                </ul>
+              </td>
+              <td class="num">{{ p.cost | money: currency() }}</td>
+              <td class="num">{{ p.leftover }}</td>
+            </tr>
+          }
+          <tr class="sum">
+            <th scope="row">Materials at cost</th>
+            <td colspan="2"></td>
+            <td class="num">{{ result().totals.materialsCost | money: currency() }}</td>
+            <td></td>
+          </tr>
+        </tbody>
+      </table>
+    </div>
+    <p class="hint">Totals are for the whole job, so tinted products can be bought at once and boxed.</p>
+
+    <h3 id="mix-heading">Mix per layer</h3>
+    <div class="table-wrap">
+      <table aria-labelledby="mix-heading">
+        <thead>
+          <tr>
+            <th scope="col">Surface and layer</th>
+            <th scope="col">Mixed amount</th>
+            <th scope="col">Of which water</th>
+          </tr>
+        </thead>
+        <tbody>
+          @for (m of mixes(); track m.key) {
+            <tr>
+              <th scope="row">{{ m.label }}</th>
+              <td>{{ m.mix }}</td>
+              <td>{{ m.water }}</td>
+            </tr>
+          }
+        </tbody>
+      </table>
+    </div>
+  `,
+  styleUrl: './result-section.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class MaterialsSection {
+  readonly result = input.required<ResultJson>();
+  readonly currency = input.required<string>();
+  readonly rooms = input.required<readonly EngineRoom[]>();
+
+  protected readonly products = computed(() =>
+    this.result().products.map((p) => ({
+      productId: p.productId,
+      name: p.name,
+      need: `${roundTo(p.needInUnit, 2)} ${unitWord(p.unit)}`,
+      lines: p.pack.lines,
+      cost: p.pack.totalCost,
+      leftover: `${roundTo(fromBase(p.pack.leftover, p.unit), 2)} ${unitWord(p.unit)}`,
+    })),
+  );
+
+  protected readonly mixes = computed(() => {
+    const roomNames = new Map(this.rooms().map((r) => [r.id, r.name]));
+    return this.result().surfaces.flatMap((s) =>
+      s.layers.map((l) => ({
+        key: `${s.surfaceId}:${l.layerId}`,
+        label: `${roomNames.get(s.roomId) ?? ''} – ${s.name}: ${l.name}`,
+        mix: amountText(l.quantity.mix, l.quantity.dimension),
+        water: l.quantity.water > 0 ? amountText(l.quantity.water, l.quantity.dimension) : '—',
+      })),
+    );
+  });
+}
+
+/** Volumes in kitchen measures with metric alongside; weights in metric (a scale, not spoons). */
+function amountText(base: number, dimension: 'volume' | 'mass'): string {
+  if (dimension === 'mass') return formatMetricMass(base);
+  const k = formatKitchenVolume(base);
+  return `${k.text} (${k.metric})`;
+}

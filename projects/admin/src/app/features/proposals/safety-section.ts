@@ -1,0 +1,45 @@
+import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import type { ResultJson } from './result-json';
+
+/** The engine's cautions for this job's facts, each with the rule it points to. */
+@Component({
+  selector: 'lb-safety-section',
+  template: `
+    <h2 id="safety-heading">Safety</h2>
+    @for (c of result().cautions; track c.id) {
+      <article class="caution" [attr.aria-labelledby]="'caution-' + c.id">
+        <h3 [id]="'caution-' + c.id">{{ c.title }}</h3>
+        <ul>
+          @for (b of c.bullets; track $index) {
+            <li>{{ b }}</li>
+          }
+        </ul>
+        <p class="rule">Rule: {{ c.rule }}</p>
+        <p class="hint">{{ c.standing }}</p>
+      </article>
+    } @empty {
+      <p class="hint">No cautions from this job’s facts (age of the building, heights, products, sanding).</p>
+    }
+  `,
+  styleUrl: './result-section.scss',
+  styles: `
+    .caution {
+      padding: 0.5rem 0.75rem;
+      margin-bottom: 0.75rem;
+      border-left: 4px solid var(--lb-ochre);
+      background: var(--mat-sys-surface-container-low);
+      border-radius: 6px;
+    }
+    .caution h3 {
+      margin-top: 0.25rem;
+    }
+    .rule {
+      margin: 0.25rem 0;
+      font-weight: 600;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class SafetySection {
+  readonly result = input.required<ResultJson>();
+}

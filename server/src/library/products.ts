@@ -1,0 +1,104 @@
+import { type ProductInput, type ProductUpdate, type ProductView, productInput } from '@layerbook/contracts';
+import { and, asc, eq, finishSystems, isNotNull, isNull, products, TenantTx } from '@layerbook/db';
+import { isMassUnit } from '@layerbook/domain';
+import { recordAudit } from '../audit/record';
+import { conflict, notFound } from '../http/problem';
+import { parse } from '../http/validate';
+import { layersOf, productIdsOf, type ProductRow, toProductView } from './views';
+
+export interface Actor {
+  readonly userId: string;
+  /** crew read the library without money figures */
+  readonly canSeePrices: boolean;
+}
+
+/** A small firm's library holds tens of products, and the layer editor needs all of them to pick from: one capped list, no pages. */
+const LIST_CAP = 1000;
+
+export type ArchivedFilter = 'exclude' | 'include' | 'only';
+
+export async function listProducts(tx: TenantTx, actor: Actor, archived: ArchivedFilter): Promise<ProductView[]> {
+  const scope = archived === 'exclude' ? isNull(products.archivedAt) : archived === 'only' ? isNotNull(products.archivedAt) : undefined;
+  const rows = await tx.db.select().from(products).where(and(eq(products.tenantId, tx.tenantId), scope)).orderBy(asc(products.name), asc(products.id)).limit(LIST_CAP);
+  return rows.map((r) => toProductView(r, actor.canSeePrices));
+}
+
+async function loadProduct(tx: TenantTx, id: string): Promise<ProductRow> {
+  const row = (await tx.db.select().from(products).where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id))))[0];
+  if (!row) throw notFound('product');
+  return row;
+}
+
+export async function getProduct(tx: TenantTx, actor: Actor, id: string): Promise<ProductView> {
+  return toProductView(await loadProduct(tx, id), actor.canSeePrices);
+}
+
+export async function createProduct(tx: TenantTx, actor: Actor, input: ProductInput): Promise<ProductView> {
+  const [row] = await tx.db.insert(products).values({ ...input, tenantId: tx.tenantId }).returning();
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'product.created', entity: 'product', entityId: row!.id, data: { name: input.name } });
+  return toProductView(row!, actor.canSeePrices);
+}
+
+export async function updateProduct(tx: TenantTx, actor: Actor, id: string, patch: ProductUpdate, now: Date): Promise<ProductView> {
+  const current = await loadProduct(tx, id);
+  // The partial names only what changes; the merged product must still pass every whole-product rule
+  // (a new unit with the old containers, say), reported against the same field names.
+  const merged = parse(productInput, {
+    name: current.name,
+    kind: current.kind,
+    unit: current.unit,
+    containers: current.containers,
+    hazards: current.hazards,
+    sdsUrl: current.sdsUrl,
+    notes: current.notes,
+    ...patch,
+  });
+  if (merged.unit !== current.unit) await refuseUnitChangeInUse(tx, current, merged.unit);
+  const [row] = await tx.db
+    .update(products)
+    .set({ ...merged, updatedAt: now })
+    .where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id)))
+    .returning();
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'product.updated', entity: 'product', entityId: id, data: { changed: Object.keys(patch) } });
+  return toProductView(row!, actor.canSeePrices);
+}
+
+/** Names of the firm's active systems whose layers use the product. A firm has few systems, so they are read whole. */
+export async function activeSystemsUsing(tx: TenantTx, productId: string): Promise<string[]> {
+  const rows = await tx.db.select().from(finishSystems).where(and(eq(finishSystems.tenantId, tx.tenantId), isNull(finishSystems.archivedAt))).orderBy(asc(finishSystems.name));
+  return rows.filter((s) => productIdsOf(layersOf(s)).has(productId)).map((s) => s.name);
+}
+
+/**
+ * Switching a used product between volume and weight would make the systems that use it fail to
+ * compute (their coverage is measured the other way), so that change waits until they are changed.
+ */
+async function refuseUnitChangeInUse(tx: TenantTx, current: ProductRow, unit: string): Promise<void> {
+  const wasByWeight = isMassUnit(current.unit);
+  if (wasByWeight === isMassUnit(unit)) return;
+  const names = await activeSystemsUsing(tx, current.id);
+  if (names.length) {
+    throw conflict(`"${current.name}" is used by ${listNames(names)}, measured by ${wasByWeight ? 'weight' : 'volume'}. Change those layers first.`, [
+      { field: 'unit', message: 'Used by finish systems measured the other way; change those layers first.' },
+    ]);
+  }
+}
+
+export const listNames = (names: readonly string[]) => names.map((n) => `"${n}"`).join(', ');
+
+export async function setProductArchived(tx: TenantTx, actor: Actor, id: string, isArchived: boolean, now: Date): Promise<ProductView> {
+  const current = await loadProduct(tx, id);
+  if (isArchived && !current.archivedAt) {
+    const names = await activeSystemsUsing(tx, id);
+    if (names.length) {
+      throw conflict(`"${current.name}" is used by ${names.length === 1 ? 'the finish system' : 'the finish systems'} ${listNames(names)}. Change or archive ${names.length === 1 ? 'it' : 'them'} first.`);
+    }
+  }
+  const [row] = await tx.db
+    .update(products)
+    .set({ archivedAt: isArchived ? (current.archivedAt ?? now) : null, updatedAt: now })
+    .where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id)))
+    .returning();
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: isArchived ? 'product.archived' : 'product.unarchived', entity: 'product', entityId: id });
+  return toProductView(row!, actor.canSeePrices);
+}
