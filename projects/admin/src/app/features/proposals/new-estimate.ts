@@ -81,7 +81,8 @@ export class NewEstimate {
     client: new FormControl<string | ClientSummary | null>('', chosenClient),
     siteId: new FormControl('', { nonNullable: true, validators: Validators.required }),
     title: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(160)] }),
-    startDate: new FormControl<Date | null>(null, Validators.required),
+    // Most estimates are for work starting soon; the office changes it when the date is known.
+    startDate: new FormControl<Date | null>(new Date(), Validators.required),
   });
 
   constructor() {
