@@ -3,6 +3,7 @@ export * from './team';
 export * from './auth';
 export * from './clients';
 export * from './inquiries';
+export * from './files';
 export * from './library';
 export * from './takeoff';
 export * from './proposals';

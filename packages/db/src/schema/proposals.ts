@@ -1,8 +1,9 @@
-import { date, index, jsonb, numeric, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { date, index, integer, jsonb, numeric, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { createdAt, id, tenantId, tenantPolicy, updatedAt } from './columns';
 import { clients, sites } from './clients';
 import { firms } from './firms';
 import { inquiries } from './inquiries';
+import { users } from './team';
 
 /**
  * An estimate for the work at one site: the choices the office makes (`inputs`: which finish
@@ -29,4 +30,39 @@ export const estimates = pgTable(
     updatedAt: updatedAt(),
   },
   (t) => [index('estimates_tenant_created_idx').on(t.tenantId, t.createdAt, t.id), index('estimates_site_idx').on(t.tenantId, t.siteId), tenantPolicy('estimates')],
+);
+
+export const PROPOSAL_STATUSES = ['draft', 'sent', 'accepted', 'declined', 'changes_requested', 'superseded'] as const;
+
+/**
+ * A version of the proposal made from an estimate. Once sent it is frozen: `snapshot` is what the
+ * client reads and signs (scope, options with prices, schedule, payment terms, safety notes) and
+ * `snapshotHash` its SHA-256, recorded again at acceptance. A change is a new version.
+ */
+export const proposalVersions = pgTable(
+  'proposal_versions',
+  {
+    id: id(),
+    tenantId: tenantId().references(() => firms.id),
+    estimateId: uuid('estimate_id').notNull().references(() => estimates.id),
+    version: integer('version').notNull(),
+    status: text('status', { enum: PROPOSAL_STATUSES }).notNull().default('draft'),
+    snapshot: jsonb('snapshot').notNull(),
+    snapshotHash: text('snapshot_hash').notNull(),
+    expiresOn: date('expires_on').notNull(),
+    sentAt: timestamp('sent_at', { withTimezone: true }),
+    decidedAt: timestamp('decided_at', { withTimezone: true }),
+    acceptedVariantId: text('accepted_variant_id'),
+    signedName: text('signed_name'),
+    signedIp: text('signed_ip'),
+    signedUserAgent: text('signed_user_agent'),
+    clientComment: text('client_comment').notNull().default(''),
+    createdBy: uuid('created_by').references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    uniqueIndex('proposal_versions_estimate_version_key').on(t.tenantId, t.estimateId, t.version),
+    index('proposal_versions_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
+    tenantPolicy('proposal_versions'),
+  ],
 );

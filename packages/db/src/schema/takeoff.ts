@@ -1,6 +1,7 @@
 import { boolean, index, integer, jsonb, numeric, pgTable, text, uuid } from 'drizzle-orm/pg-core';
 import { createdAt, id, tenantId, tenantPolicy, updatedAt } from './columns';
 import { sites } from './clients';
+import { files } from './files';
 import { firms } from './firms';
 
 /** A room (or an exterior elevation) measured at a site. */
@@ -40,4 +41,18 @@ export const surfaces = pgTable(
     updatedAt: updatedAt(),
   },
   (t) => [index('surfaces_room_idx').on(t.tenantId, t.roomId, t.position), tenantPolicy('surfaces')],
+);
+
+/** A photo of a room, taken on the site visit. */
+export const roomPhotos = pgTable(
+  'room_photos',
+  {
+    id: id(),
+    tenantId: tenantId().references(() => firms.id),
+    roomId: uuid('room_id').notNull().references(() => rooms.id),
+    fileId: uuid('file_id').notNull().references(() => files.id),
+    caption: text('caption').notNull().default(''),
+    createdAt: createdAt(),
+  },
+  (t) => [index('room_photos_room_idx').on(t.tenantId, t.roomId, t.createdAt), tenantPolicy('room_photos')],
 );
