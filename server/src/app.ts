@@ -17,6 +17,7 @@ import { inquiryRoutes } from './inquiries/routes';
 import { libraryRoutes } from './library/routes';
 import { takeoffRoutes } from './takeoff/routes';
 import { estimateRoutes } from './proposals/routes';
+import { proposalRoutes } from './proposals/proposal-routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
 
 export interface SsrHandlers {
@@ -80,6 +81,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/library', libraryRoutes(ctx));
   router.use('/takeoff', takeoffRoutes(ctx));
   router.use('/estimates', estimateRoutes(ctx));
+  router.use('/proposals', proposalRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });
