@@ -13,3 +13,5 @@ export * from './firms/estimating';
 export * from './firms/estimating-defaults';
 export * from './proposals/estimate';
 export * from './engine';
+export * from './proposals/proposal';
+export * from './proposals/proposal-snapshot';

@@ -19,19 +19,25 @@ export async function requestPortalLink(ctx: AppContext, email: string): Promise
       const user = (await tx.db.select().from(portalUsers).where(eq(portalUsers.id, account.id)))[0];
       const firm = (await tx.db.select({ name: firms.name }).from(firms))[0];
       if (!user || !firm) return;
-      const { token, hash } = newToken();
-      const [link] = await tx.db
-        .insert(portalLinks)
-        .values({ tenantId: tx.tenantId, portalUserId: user.id, tokenHash: hash, expiresAt: minutesFromNow(ctx.now(), PORTAL_LINK_MINUTES) })
-        .returning({ id: portalLinks.id });
+      const { id: linkId, token } = await createPortalLink(tx, user.id, ctx.now(), PORTAL_LINK_MINUTES);
       await enqueueMail(tx, ctx.queue, {
-        purposeKey: `portal-link:${link!.id}`,
+        purposeKey: `portal-link:${linkId}`,
         tenantId: tx.tenantId,
         to: user.email,
         ...portalLinkMail({ name: user.name, firmName: firm.name, url: `${ctx.config.PUBLIC_URL}/portal/sign-in/link?token=${token}`, minutes: PORTAL_LINK_MINUTES }),
       });
     });
   }
+}
+
+/** A one-time portal sign-in link for a client's account (token for the e-mail, hash at rest). */
+export async function createPortalLink(tx: TenantTx, portalUserId: string, now: Date, minutes: number): Promise<{ id: string; token: string }> {
+  const { token, hash } = newToken();
+  const [link] = await tx.db
+    .insert(portalLinks)
+    .values({ tenantId: tx.tenantId, portalUserId, tokenHash: hash, expiresAt: minutesFromNow(now, minutes) })
+    .returning({ id: portalLinks.id });
+  return { id: link!.id, token };
 }
 
 export async function redeemPortalLink(ctx: AppContext, token: string): Promise<ClientPrincipal> {

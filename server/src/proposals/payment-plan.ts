@@ -1,0 +1,59 @@
+import type { ProposalTerms, SnapshotPayment } from '@layerbook/contracts';
+import { buildPaymentSchedule, checkDeposit, type DepositCapRule, type PaymentLineInput } from '@layerbook/domain';
+import Decimal from 'decimal.js';
+
+export interface ScheduleFacts {
+  readonly finishDate: string;
+  /** layer milestones in time order, as the engine dated them (the job's own milestone excluded) */
+  readonly layerMilestones: ReadonlyArray<{ layerId: string; label: string; date: string }>;
+}
+
+/**
+ * The payment lines of one option: deposit on acceptance, a progress payment when the base layers
+ * are done (the first layer finished on every surface, when it is not also the last), the rest on
+ * completion. Amounts come from the domain and add up to `total` exactly. A deposit over the cap
+ * becomes the cap, and the rest moves to the final payment.
+ */
+export function optionPayments(total: string, currency: string, digits: number, terms: ProposalTerms, facts: ScheduleFacts, capRule: DepositCapRule) {
+  const base = facts.layerMilestones.length > 1 ? facts.layerMilestones[0]! : null;
+  const share = (p: number) => new Decimal(p).div(100);
+  const lines: Array<PaymentLineInput & { percent: number | null; expectedOn: string | null }> = [];
+  if (terms.depositPercent > 0) {
+    lines.push({ id: 'deposit', label: 'Deposit on acceptance', role: 'deposit', basis: { kind: 'share', share: share(terms.depositPercent) }, trigger: { kind: 'acceptance' }, percent: terms.depositPercent, expectedOn: null });
+  }
+  if (base && terms.progressPercent > 0) {
+    lines.push({
+      id: 'progress',
+      label: `Progress payment: ${base.label} complete`,
+      role: 'milestone',
+      basis: { kind: 'share', share: share(terms.progressPercent) },
+      trigger: { kind: 'layerComplete', layerId: base.layerId },
+      percent: terms.progressPercent,
+      expectedOn: base.date,
+    });
+  }
+  lines.push({ id: 'final', label: 'Final payment on completion', role: 'final', basis: { kind: 'remainder' }, trigger: { kind: 'walkthrough' }, percent: null, expectedOn: facts.finishDate });
+
+  let isDepositCapped = false;
+  let built = buildPaymentSchedule(total, lines, currency, 'terms');
+  const deposit = built.find((l) => l.role === 'deposit');
+  if (deposit) {
+    const check = checkDeposit(deposit.amount, capRule, total, currency);
+    if (!check.isWithinCap && check.cap) {
+      isDepositCapped = true;
+      const at = lines.findIndex((l) => l.role === 'deposit');
+      lines[at] = { ...lines[at]!, basis: { kind: 'amount', amount: check.cap.toFixed(digits) }, percent: null };
+      built = buildPaymentSchedule(total, lines, currency, 'terms');
+    }
+  }
+  const payments: SnapshotPayment[] = built.map((l, i) => ({
+    id: l.id,
+    label: l.label,
+    role: l.role,
+    trigger: l.trigger.kind === 'layerComplete' ? { kind: 'layerComplete', layerId: l.trigger.layerId } : l.trigger.kind === 'acceptance' ? { kind: 'acceptance' } : { kind: 'walkthrough' },
+    percent: lines[i]!.percent,
+    amount: l.amount.toFixed(digits),
+    expectedOn: lines[i]!.expectedOn,
+  }));
+  return { payments, isDepositCapped };
+}

@@ -1,0 +1,133 @@
+import { DEFAULT_PROPOSAL_TERMS, type ProposalCreate, type ProposalSnapshot, type ProposalTerms, type ProposalUpdate, type ProposalVersionSummary, type ProposalVersionView } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import { type DepositCapRule, DomainInputError } from '@layerbook/domain';
+import { recordAudit } from '../audit/record';
+import { localDate } from '../firms/local-date';
+import { badRequest, conflict, notFound } from '../http/problem';
+import { buildSnapshot, type ProposalChoice } from './build-snapshot';
+import { loadProposalSources, type ProposalSources } from './proposal-sources';
+import { snapshotHash } from './snapshot-hash';
+
+/**
+ * The firm's limit on deposits. Jurisdiction rules (e.g. California's lesser of $1,000 or 10 %)
+ * will come from firm settings; until then there is no cap, but every schedule passes through here.
+ */
+export function depositCapRule(_sources: ProposalSources): DepositCapRule {
+  return { kind: 'none' };
+}
+
+const COLUMNS = `id, estimate_id, version, status, snapshot, snapshot_hash, expires_on::text as expires_on, sent_at, decided_at,
+  accepted_variant_id, signed_name, client_comment, created_at`;
+
+type Row = Record<string, unknown> & { snapshot: ProposalSnapshot };
+
+function summary(r: Row): ProposalVersionSummary {
+  return {
+    id: r['id'] as string,
+    estimateId: r['estimate_id'] as string,
+    version: r['version'] as number,
+    status: r['status'] as ProposalVersionSummary['status'],
+    title: r.snapshot.title,
+    snapshotHash: r['snapshot_hash'] as string,
+    expiresOn: r['expires_on'] as string,
+    sentAt: (r['sent_at'] as Date | null)?.toISOString() ?? null,
+    decidedAt: (r['decided_at'] as Date | null)?.toISOString() ?? null,
+    createdAt: (r['created_at'] as Date).toISOString(),
+  };
+}
+
+const view = (r: Row): ProposalVersionView => ({
+  ...summary(r),
+  snapshot: r.snapshot,
+  acceptedVariantId: (r['accepted_variant_id'] as string | null) ?? null,
+  signedName: (r['signed_name'] as string | null) ?? null,
+  clientComment: r['client_comment'] as string,
+});
+
+export async function getVersion(tx: TenantTx, id: string, lock = false): Promise<ProposalVersionView> {
+  const { rows } = await tx.client.query<Row>(`select ${COLUMNS} from proposal_versions where tenant_id = $1 and id = $2 ${lock ? 'for update' : ''}`, [tx.tenantId, id]);
+  if (!rows[0]) throw notFound('proposal');
+  return view(rows[0]);
+}
+
+export async function listVersions(tx: TenantTx, estimateId?: string): Promise<ProposalVersionSummary[]> {
+  const { rows } = await tx.client.query<Row>(
+    `select ${COLUMNS} from proposal_versions where tenant_id = $1 ${estimateId ? 'and estimate_id = $2 order by version desc' : 'order by created_at desc'} limit 200`,
+    estimateId ? [tx.tenantId, estimateId] : [tx.tenantId],
+  );
+  return rows.map(summary);
+}
+
+/** The offer must stand past today in the firm's calendar (and not for more than a year). */
+function checkExpiry(expiresOn: string, today: string): void {
+  if (expiresOn <= today) throw badRequest([{ field: 'expiresOn', message: `Choose a day after today (${today}).` }]);
+  const yearOn = `${Number(today.slice(0, 4)) + 1}${today.slice(4)}`;
+  if (expiresOn > yearOn) throw badRequest([{ field: 'expiresOn', message: 'Choose a day within a year.' }]);
+}
+
+function mergeTerms(base: ProposalTerms, change: Partial<ProposalTerms> | undefined): ProposalTerms {
+  const terms = { ...base, ...change };
+  if (terms.depositPercent + terms.progressPercent > 100) {
+    throw badRequest([{ field: 'terms.progressPercent', message: `The deposit and the progress payment add up to more than 100 % (${terms.depositPercent + terms.progressPercent} %).` }]);
+  }
+  return terms;
+}
+
+/** Builds the snapshot; an engine refusal of the payment lines is a 400 naming its field. */
+function snapshotFor(sources: ProposalSources, choice: Omit<ProposalChoice, 'depositCap'>): { snapshot: ProposalSnapshot; hash: string } {
+  try {
+    const snapshot = buildSnapshot(sources, { ...choice, depositCap: depositCapRule(sources) });
+    return { snapshot, hash: snapshotHash(snapshot) };
+  } catch (error) {
+    if (error instanceof DomainInputError) throw badRequest([{ field: error.field, message: error.message }], `The payment schedule cannot be made: ${error.message}`);
+    throw error;
+  }
+}
+
+/**
+ * Version N+1 of the proposal for an estimate, as a draft made from its saved numbers. Older
+ * drafts are superseded: only the newest draft can be sent. An accepted proposal takes no new version.
+ */
+export async function createVersion(tx: TenantTx, actorUserId: string, input: ProposalCreate, now: Date): Promise<ProposalVersionView> {
+  const sources = await loadProposalSources(tx, input.estimateId);
+  const today = localDate(sources.firm.timeZone, now);
+  checkExpiry(input.expiresOn, today);
+  const accepted = await tx.client.query(`select 1 from proposal_versions where tenant_id = $1 and estimate_id = $2 and status = 'accepted'`, [tx.tenantId, input.estimateId]);
+  if (accepted.rowCount) throw conflict('A version of this proposal was accepted. Changes now go through a change order.');
+  const terms = mergeTerms(DEFAULT_PROPOSAL_TERMS, input.terms);
+  const { snapshot, hash } = snapshotFor(sources, { issuedOn: today, expiresOn: input.expiresOn, terms, exclusions: input.exclusions ?? [], notes: input.notes ?? '' });
+  await tx.client.query(`update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status = 'draft'`, [tx.tenantId, input.estimateId]);
+  const { rows } = await tx.client.query<{ id: string; version: number }>(
+    `insert into proposal_versions (tenant_id, estimate_id, version, status, snapshot, snapshot_hash, expires_on, created_by)
+     select $1, $2, coalesce(max(version), 0) + 1, 'draft', $3, $4, $5, $6 from proposal_versions where tenant_id = $1 and estimate_id = $2
+     returning id, version`,
+    [tx.tenantId, input.estimateId, JSON.stringify(snapshot), hash, input.expiresOn, actorUserId],
+  );
+  const made = rows[0]!;
+  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'proposal.created', entity: 'proposal_version', entityId: made.id, data: { estimateId: input.estimateId, version: made.version, snapshotHash: hash } });
+  return getVersion(tx, made.id);
+}
+
+/**
+ * Changes a draft: expiry, terms, exclusions, notes. The snapshot is rebuilt from the estimate's
+ * current numbers. A sent (or decided) version is frozen: 409, make a new version instead.
+ */
+export async function updateDraft(tx: TenantTx, actorUserId: string, id: string, change: ProposalUpdate, now: Date): Promise<ProposalVersionView> {
+  const current = await getVersion(tx, id, true);
+  if (current.status !== 'draft') throw conflict(`Version ${current.version} is ${current.status.replace('_', ' ')} and cannot change. Make a new version instead.`);
+  const sources = await loadProposalSources(tx, current.estimateId);
+  const today = localDate(sources.firm.timeZone, now);
+  const expiresOn = change.expiresOn ?? current.expiresOn;
+  if (change.expiresOn) checkExpiry(expiresOn, today);
+  const prev = current.snapshot;
+  const { snapshot, hash } = snapshotFor(sources, {
+    issuedOn: today,
+    expiresOn,
+    terms: mergeTerms(prev.terms, change.terms),
+    exclusions: change.exclusions ?? prev.exclusions,
+    notes: change.notes ?? prev.notes,
+  });
+  await tx.client.query(`update proposal_versions set snapshot = $3, snapshot_hash = $4, expires_on = $5 where tenant_id = $1 and id = $2`, [tx.tenantId, id, JSON.stringify(snapshot), hash, expiresOn]);
+  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'proposal.updated', entity: 'proposal_version', entityId: id, data: { version: current.version, snapshotHash: hash } });
+  return getVersion(tx, id);
+}
