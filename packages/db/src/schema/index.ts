@@ -7,5 +7,7 @@ export * from './files';
 export * from './library';
 export * from './takeoff';
 export * from './proposals';
+export * from './jobs';
+export * from './samples';
 export * from './audit';
 export * from './mail';
