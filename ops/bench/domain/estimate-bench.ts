@@ -4,6 +4,10 @@
  * forecast over 500 open invoices. Prints figures; it is not a timed test.
  *
  *   npx tsx ops/bench/domain/estimate-bench.ts
+ *
+ * Prints two sets: the sources run through tsx, then the same bench bundled with esbuild and
+ * run with plain node (what the browser runs is bundled code). Both are medians of one process
+ * each on whatever else the machine is doing, so compare runs made back to back.
  */
 import {
   type CashForecastInput,
@@ -14,8 +18,12 @@ import {
   cashForecast,
   computeEstimate,
 } from '../../../packages/domain/src/index';
+import { runBundled } from './bundled-run';
 
 const ROOMS = 50;
+/** set in the bundled child so it measures without bundling itself again */
+const BUNDLED_FLAG = 'LAYERBOOK_BENCH_BUNDLED';
+const isBundled = process.env[BUNDLED_FLAG] === '1';
 const ESTIMATE_TARGET_MS = 1;
 
 function layer(id: string, productId: string, rate: number, wait: number): FinishLayer {
@@ -122,6 +130,7 @@ function median(run: () => unknown, iterations: number): number {
   return times[Math.floor(times.length / 2)];
 }
 
+console.log(isBundled ? '— bundled (esbuild --bundle, node) —' : '— tsx (TypeScript sources) —');
 const forecastInput = fiveHundredInvoices();
 // Walls + ceiling per room is the usual job; round walls and a dome in every room is the heavy case.
 for (const surfacesPerRoom of [2, 4] as const) {
@@ -137,3 +146,4 @@ for (const surfacesPerRoom of [2, 4] as const) {
 const forecastMs = median(() => cashForecast(forecastInput), 400);
 console.log('cashForecast, 500 open invoices + 100 milestones + 40 pipeline deposits over 105 weeks (2 years):');
 console.log(`  median ${forecastMs.toFixed(3)} ms`);
+if (!isBundled) runBundled(__filename, BUNDLED_FLAG);

@@ -16,6 +16,11 @@ export function requirePositive(value: number, field: string, label = 'value'): 
   return value;
 }
 
+/** True exactly when `requireNonNegative` passes; hot loops build the field path only on failure. */
+export function isNonNegativeNumber(value: unknown): boolean {
+  return typeof value === 'number' && Number.isFinite(value) && value >= 0;
+}
+
 export function requireNonNegative(value: number, field: string, label = 'value'): number {
   requireFiniteNumber(value, field, label);
   if (value < 0) throw new DomainInputError(field, `The ${label} cannot be negative.`);

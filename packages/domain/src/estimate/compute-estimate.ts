@@ -1,18 +1,19 @@
 import Decimal from 'decimal.js';
 import { DomainInputError } from '../errors/domain-input-error';
-import { requireNonEmpty } from '../errors/input-checks';
+import { requireNonEmpty, requireNonNegative } from '../errors/input-checks';
 import { type ContainerPack, chooseContainers } from '../finishes/container-pack';
 import type { FinishSystem, Product } from '../finishes/finish-system';
-import { type LayerQuantity, layerQuantity } from '../finishes/layer-quantity';
+import { type LayerQuantity, applyLayerQuantity } from '../finishes/layer-quantity';
 import { measureSurface } from '../geometry/measure-surface';
 import type { SurfaceMeasure } from '../geometry/surface-shape';
-import { type CrewTime, type LayerHours, crewTime, layerHours } from '../labour/layer-hours';
+import { type CrewTime, type LayerHours, applyLayerHours, crewTime } from '../labour/layer-hours';
 import { perAreaCheck } from '../pricing/per-area-check';
 import { type PriceBreakdown, priceJob } from '../pricing/price-job';
 import { type Caution, safetyCautions } from '../safety/safety-cautions';
 import { type JobSchedule, type WorkChain, scheduleJob } from '../schedule/schedule-job';
 import { type Dimension, dimensionOf, fromBase } from '../units/quantity-unit';
 import type { EstimateInput } from './estimate-input';
+import { LayerPlan } from './layer-plan';
 
 export interface LayerLine {
   layerId: string;
@@ -70,11 +71,10 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
   });
   const takeoff = { minDeductedOpeningArea: s.minDeductedOpeningArea };
   const isOccupied = input.property?.isOccupied === true;
+  const plan = new LayerPlan(products, s.lengthUnit, s.multipliers);
 
   const surfaces: SurfaceResult[] = [];
   const chains: WorkChain[] = [];
-  const needs = new Map<string, number>();
-  const usedProducts = new Set<string>();
   const disturbedPaint: Array<{ roomId: string; isExterior: boolean; area: number }> = [];
   let layerTotal = 0;
   let sandsPlaster = false;
@@ -95,7 +95,6 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
       if (surface.disturbedPaintedArea !== undefined) {
         disturbedPaint.push({ roomId: room.id, isExterior: room.isExterior === true, area: surface.disturbedPaintedArea });
       }
-      const amount = { quantity: m.quantity, measure: m.measure, unit: s.lengthUnit };
       const conditions = {
         isCeiling: m.isCeiling,
         isCurved: m.isCurved,
@@ -103,15 +102,14 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
         isOccupied,
         scaffoldHeight: s.scaffoldHeight,
       };
+      // Checked here once rather than by each layer: it is the only per-surface input check.
+      requireNonNegative(m.quantity, 'surface.quantity', 'surface');
       const layers: LayerLine[] = system.layers.map((layer, li) => {
-        const lf = `finishSystems[${systemIndex}].layers[${li}]`;
-        const quantity = layerQuantity(amount, layer, products, lf);
-        for (const p of quantity.products) {
-          needs.set(p.productId, (needs.get(p.productId) ?? 0) + p.amount);
-          usedProducts.add(p.productId);
-        }
+        const planned = plan.layer(systemIndex, layer, li);
+        const quantity = applyLayerQuantity(planned.quantity, m.quantity, m.measure);
+        plan.addNeeds(planned, quantity);
         if (layer.method === 'sand') sandsPlaster = true;
-        const labour = layerHours(amount, layer, conditions, s.multipliers, lf);
+        const labour = applyLayerHours(planned.hours, m.quantity, m.measure, plan.steps(planned, conditions));
         layerTotal += labour.hours;
         return { layerId: layer.id, name: layer.name, quantity, labour };
       });
@@ -132,7 +130,9 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
   // Whole-job totals first, containers second: tinted products are bought once and boxed.
   let materialsCost = new Decimal(0);
   const productTotals: ProductTotal[] = [];
-  for (const [productId, need] of needs) {
+  for (let slot = 0; slot < plan.needIds.length; slot++) {
+    const productId = plan.needIds[slot];
+    const need = plan.needs[slot];
     const p = products.get(productId) as Product;
     const index = input.products.indexOf(p);
     const dimension = dimensionOf(p.unit, `products[${index}].unit`);
@@ -201,7 +201,7 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
     yearBuilt: input.property?.yearBuilt,
     disturbedPaint,
     workingLevel: Math.max(0, highestTop - s.workingReach),
-    products: [...usedProducts].map((id) => {
+    products: plan.needIds.map((id) => {
       const p = products.get(id) as Product;
       return { name: p.name, ...p.hazards };
     }),

@@ -1,7 +1,7 @@
-import { requireInteger, requireFraction, requireNonNegative, requirePositive } from '../errors/input-checks';
+import { requireFiniteNumber, requireFraction, requireInteger, requireNonNegative, requirePositive } from '../errors/input-checks';
 import type { FinishLayer, LabourMultipliers } from '../finishes/finish-system';
 import type { SurfaceAmount } from '../finishes/layer-quantity';
-import { convertArea, convertLength } from '../units/length';
+import { type LengthUnit, type UnitScale, scaleArea, scaleLength, unitScale } from '../units/length';
 
 export interface MultiplierStep {
   name: keyof LabourMultipliers;
@@ -44,6 +44,55 @@ function applies(name: keyof LabourMultipliers, c: SurfaceConditions): boolean {
   }
 }
 
+/** A layer's labour inputs, checked and looked up once per estimate rather than per surface. */
+export interface PreparedLayerHours {
+  layer: FinishLayer;
+  rate: number;
+  coats: number;
+  share: number;
+  scale: UnitScale;
+  field: string;
+}
+
+/** Every check `layerHours` makes before the multipliers, in the same order. */
+export function prepareLayerHours(layer: FinishLayer, surfaceUnit: LengthUnit, field = 'layer'): PreparedLayerHours {
+  const rate = requirePositive(layer.productionRate.surfacePerHour, `${field}.productionRate.surfacePerHour`, 'production rate');
+  const coats = requireInteger(layer.coats, `${field}.coats`, 1, 'number of coats');
+  const share = layer.coverageShare === undefined ? 1 : requireFraction(layer.coverageShare, `${field}.coverageShare`, 'coverage share');
+  return { layer, rate, coats, share, scale: unitScale(surfaceUnit, layer.productionRate.lengthUnit), field };
+}
+
+/**
+ * The multipliers that apply under these conditions, checked. Layer multipliers override the
+ * firm's defaults key by key; each applies at most once, in a fixed order.
+ */
+export function multiplierSteps(p: PreparedLayerHours, conditions: SurfaceConditions, firmMultipliers: LabourMultipliers): MultiplierStep[] {
+  const { layer, field } = p;
+  const chain: MultiplierStep[] = [];
+  for (const name of ORDER) {
+    if (!applies(name, conditions)) continue;
+    const factor = layer.multipliers?.[name] ?? firmMultipliers[name];
+    if (factor === undefined || factor === 1) continue;
+    requirePositive(factor, layer.multipliers?.[name] !== undefined ? `${field}.multipliers.${name}` : `settings.multipliers.${name}`, 'multiplier');
+    chain.push({ name, factor });
+  }
+  return chain;
+}
+
+/** Hours of a prepared layer on one surface (quantity in the unit it was prepared for). */
+export function applyLayerHours(p: PreparedLayerHours, quantity: number, measure: SurfaceAmount['measure'], steps: readonly MultiplierStep[]): LayerHours {
+  const counted = measure === 'area' ? scaleArea(quantity, p.scale) : scaleLength(quantity, p.scale);
+  const baseHours = (counted * p.share * p.coats) / p.rate;
+  // A fresh chain per surface (callers may keep or change one surface's result), sized up front.
+  const chain: MultiplierStep[] = new Array(steps.length);
+  let hours = baseHours;
+  for (let i = 0; i < steps.length; i++) {
+    chain[i] = { name: steps[i].name, factor: steps[i].factor };
+    hours *= steps[i].factor;
+  }
+  return { layerId: p.layer.id, baseHours, chain, hours };
+}
+
 /**
  * hours = surface × share × coats / rate × Π multipliers. Layer multipliers override the
  * firm's defaults key by key; each applies at most once and the chain is returned for display.
@@ -55,24 +104,12 @@ export function layerHours(
   firmMultipliers: LabourMultipliers,
   field = 'layer',
 ): LayerHours {
-  const rate = requirePositive(layer.productionRate.surfacePerHour, `${field}.productionRate.surfacePerHour`, 'production rate');
-  const coats = requireInteger(layer.coats, `${field}.coats`, 1, 'number of coats');
-  const share = layer.coverageShare === undefined ? 1 : requireFraction(layer.coverageShare, `${field}.coverageShare`, 'coverage share');
-  const unit = layer.productionRate.lengthUnit;
-  const counted =
-    surface.measure === 'area' ? convertArea(surface.quantity, surface.unit, unit) : convertLength(surface.quantity, surface.unit, unit);
-  const baseHours = (counted * share * coats) / rate;
-  const chain: MultiplierStep[] = [];
-  let hours = baseHours;
-  for (const name of ORDER) {
-    if (!applies(name, conditions)) continue;
-    const factor = layer.multipliers?.[name] ?? firmMultipliers[name];
-    if (factor === undefined || factor === 1) continue;
-    requirePositive(factor, layer.multipliers?.[name] !== undefined ? `${field}.multipliers.${name}` : `settings.multipliers.${name}`, 'multiplier');
-    chain.push({ name, factor });
-    hours *= factor;
-  }
-  return { layerId: layer.id, baseHours, chain, hours };
+  requirePositive(layer.productionRate.surfacePerHour, `${field}.productionRate.surfacePerHour`, 'production rate');
+  requireInteger(layer.coats, `${field}.coats`, 1, 'number of coats');
+  if (layer.coverageShare !== undefined) requireFraction(layer.coverageShare, `${field}.coverageShare`, 'coverage share');
+  requireFiniteNumber(surface.quantity, 'value');
+  const p = prepareLayerHours(layer, surface.unit, field);
+  return applyLayerHours(p, surface.quantity, surface.measure, multiplierSteps(p, conditions, firmMultipliers));
 }
 
 export interface CrewTime {

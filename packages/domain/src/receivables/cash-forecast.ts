@@ -51,11 +51,24 @@ export function cashForecast(input: CashForecastInput): { weeks: ForecastWeek[];
     pipeline: Array.from({ length: count }, () => new Decimal(0)),
   };
   let beyond = new Decimal(0);
+  // Most receipts share a handful of probabilities: parse each once. Only values that passed
+  // are kept, so a bad one still fails at its first receipt, naming that receipt's field.
+  const ratios = new Map<Ratio, Decimal>();
+  const ratioOf = (value: Ratio, field: string): Decimal => {
+    // A map sees 0 and −0 as one key, but −0 is refused; zero is cheap to parse anyway.
+    if (value === 0) return toRatio(value, field, 'probability');
+    let r = ratios.get(value);
+    if (r === undefined) {
+      r = toRatio(value, field, 'probability');
+      ratios.set(value, r);
+    }
+    return r;
+  };
   const add = (stream: Stream, list: readonly ExpectedReceipt[], field: string): void => {
     list.forEach((r, i) => {
       const at = `${field}[${i}]`;
       const amount = toNonNegativeMoney(r.amount, `${at}.amount`);
-      const expected = r.probability === undefined ? amount : amount.times(toRatio(r.probability, `${at}.probability`, 'probability'));
+      const expected = r.probability === undefined ? amount : amount.times(ratioOf(r.probability, `${at}.probability`));
       const week = Math.max(0, Math.floor((toDayNumber(r.date, `${at}.date`) - firstMonday) / 7));
       if (week >= count) beyond = beyond.plus(expected);
       else sums[stream][week] = sums[stream][week].plus(expected);

@@ -1,7 +1,9 @@
 import { type IsoDate, fromDayNumber, toDayNumber } from '../calendar/local-date';
 import { DomainInputError } from '../errors/domain-input-error';
-import { requireInteger, requireNonNegative } from '../errors/input-checks';
-import { StartQueue, insertSorted } from './start-queue';
+import { isNonNegativeNumber, requireInteger, requireNonNegative } from '../errors/input-checks';
+import { ReadySet } from './ready-set';
+import { ScheduleTally } from './schedule-tally';
+import { StartQueue } from './start-queue';
 import { type WorkCalendar, WorkingTime } from './work-calendar';
 
 /** One surface's layers, in order; different surfaces interleave during each other's waits. */
@@ -88,69 +90,81 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
   const chainCount = input.chains.length;
   const durations: number[][] = input.chains.map((c, ci) =>
     c.steps.map((s, si) => {
-      requireNonNegative(s.crewHours, `chains[${ci}].steps[${si}].crewHours`, 'crew hours');
-      requireNonNegative(s.waitHoursAfter, `chains[${ci}].steps[${si}].waitHoursAfter`, 'wait');
+      // The field path is only built for a bad value: this runs for every layer of every surface.
+      if (!isNonNegativeNumber(s.crewHours)) requireNonNegative(s.crewHours, `chains[${ci}].steps[${si}].crewHours`, 'crew hours');
+      if (!isNonNegativeNumber(s.waitHoursAfter)) requireNonNegative(s.waitHoursAfter, `chains[${ci}].steps[${si}].waitHoursAfter`, 'wait');
       return s.crewHours / crew;
     }),
   );
 
   const steps: ScheduleStep[] = [];
   const tasks: ScheduledTask[] = [];
-  const workingDayIndex = new Map<number, number>();
+  const tally = new ScheduleTally(crew * time.dayLength);
+  // Per-day lookups in arrays indexed from the start day (work never comes before it): the
+  // scheduler asks for every step, and arrays are much cheaper than maps keyed by day.
+  const workingDayIndex: number[] = [];
+  let workingDayCount = 0;
   const dayIndexOf = (day: number): number => {
-    let n = workingDayIndex.get(day);
+    let n = workingDayIndex[day - startDay];
     if (n === undefined) {
-      n = workingDayIndex.size + 1;
-      workingDayIndex.set(day, n);
+      n = ++workingDayCount;
+      workingDayIndex[day - startDay] = n;
     }
     return n;
   };
   let lastEndDay = time.nextWorkingDay(startDay);
-  const dates = new Map<number, IsoDate>();
+  const dates: IsoDate[] = [];
   const dateOf = (day: number): IsoDate => {
-    let d = dates.get(day);
+    let d = dates[day - startDay];
     if (d === undefined) {
       d = fromDayNumber(day);
-      dates.set(day, d);
+      dates[day - startDay] = d;
     }
     return d;
   };
 
+  // Task fields come as arguments rather than an object: this runs once per task.
   const place = (
-    task: { taskId: string; chainId: string | null; layerId: string | null; label: string },
+    taskId: string,
+    chainId: string | null,
+    layerId: string | null,
+    label: string,
     readyAt: number,
     start: number,
     duration: number,
   ): number => {
-    const { taskId, chainId, layerId, label } = task;
     let cur = start;
     let remaining = duration;
     let day = Math.floor(cur / 24);
     while (remaining > EPS) {
       day = time.nextWorkingDay(Math.floor(cur / 24));
-      const w = time.windowOf(day);
-      if (cur < w.start) cur = w.start;
-      const take = Math.min(w.end - cur, remaining);
+      const windowStart = time.windowStart(day);
+      if (cur < windowStart) cur = windowStart;
+      const take = Math.min(time.windowEnd(day) - cur, remaining);
       if (take <= EPS) {
-        cur = time.windowOf(time.nextWorkingDay(day + 1)).start;
+        cur = time.windowStart(time.nextWorkingDay(day + 1));
         continue;
       }
+      const date = dateOf(day);
+      const workingDay = dayIndexOf(day);
+      const crewHours = take * crew;
       steps.push({
         taskId,
         chainId,
         layerId,
         label,
-        date: dateOf(day),
-        workingDay: dayIndexOf(day),
+        date,
+        workingDay,
         startHour: cur - day * 24,
         endHour: cur + take - day * 24,
-        crewHours: take * crew,
+        crewHours,
       });
+      tally.addStep(workingDay, date, crewHours);
       remaining -= take;
       cur += take;
     }
     lastEndDay = Math.max(lastEndDay, day);
-    tasks.push({
+    const task: ScheduledTask = {
       taskId,
       chainId,
       layerId,
@@ -160,74 +174,73 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
       end: cur,
       endDate: dateOf(day),
       endHour: cur - day * 24,
-    });
+    };
+    tasks.push(task);
+    tally.addTask(task);
     return cur;
   };
 
   let t = startDay * 24;
   const setupDuration = input.setupHours / crew;
   if (input.setupHours > 0) {
-    const setup = { taskId: 'setup', chainId: null, layerId: null, label: 'Setup, masking and protection' };
-    t = place(setup, t, time.earliestStart(t, setupDuration), setupDuration);
+    t = place('setup', null, null, 'Setup, masking and protection', t, time.earliestStart(t, setupDuration), setupDuration);
   }
   const next = new Array<number>(chainCount).fill(0);
   const readyAt = new Array<number>(chainCount).fill(t);
   // Earliest start of each chain's next layer, computed when the chain's wait begins. While it
   // lies ahead of the clock it stays exact (a layer that cannot start at its ready time cannot
   // start at any later moment before then either), so only chains whose start has come round
-  // need looking at again; they move to `ready`, kept in chain order.
+  // need looking at again; they move to `ready`, which finds the first-listed one that fits.
   const startWhenReady = new Array<number>(chainCount).fill(0);
   const waiting = new StartQueue(startWhenReady);
-  const ready: number[] = [];
+  const ready = new ReadySet(chainCount);
   for (let c = 0; c < chainCount; c++) {
     if (durations[c].length === 0) continue;
     startWhenReady[c] = time.earliestStart(t, durations[c][0]);
     waiting.push(c);
   }
-  const layerLabels = new Map<string, string>();
-  while (waiting.size > 0 || ready.length > 0) {
+  while (waiting.size > 0 || ready.size > 0) {
     const now = time.earliestStart(t, 0);
-    while (waiting.size > 0 && startWhenReady[waiting.peek()] <= now + EPS) insertSorted(ready, waiting.pop());
-    const nowDay = time.nextWorkingDay(Math.floor(now / 24));
-    const left = time.windowOf(nowDay).end - now;
-    let chosen = -1;
-    let start = now;
-    if (left >= time.minimumBlock - EPS && left > EPS && ready.length > 0) {
-      chosen = 0; // every ready layer fits: the first listed wins
-    } else if (left > EPS) {
-      for (let k = 0; k < ready.length; k++) {
-        const d = durations[ready[k]][next[ready[k]]];
-        if (Math.min(time.minimumBlock, d) <= left + EPS) {
-          chosen = k;
-          break;
-        }
-      }
+    while (waiting.size > 0 && startWhenReady[waiting.peek()] <= now + EPS) {
+      const c = waiting.pop();
+      ready.add(c, durations[c][next[c]]);
     }
-    let bestChain: number;
-    if (chosen >= 0) {
-      bestChain = ready[chosen];
-      ready.splice(chosen, 1);
+    const nowDay = time.nextWorkingDay(Math.floor(now / 24));
+    const left = time.windowEnd(nowDay) - now;
+    let bestChain = -1;
+    let start = now;
+    if (left >= time.minimumBlock - EPS && left > EPS && ready.size > 0) {
+      bestChain = ready.first(); // every ready layer fits: the first listed wins
+    } else if (left > EPS) {
+      // A layer fits when min(minimum block, its duration) <= left + EPS, i.e. when the block
+      // fits (then every ready layer does) or the whole layer does.
+      const limit = left + EPS;
+      bestChain = time.minimumBlock <= limit ? ready.first() : ready.firstAtMost(limit);
+    }
+    if (bestChain >= 0) {
+      ready.remove(bestChain);
     } else {
       // Nothing fits today: ready layers start at the next day's start, unless a waiting one starts sooner.
-      const nextDayStart = time.windowOf(time.nextWorkingDay(nowDay + 1)).start;
+      const nextDayStart = time.windowStart(time.nextWorkingDay(nowDay + 1));
       const top = waiting.peek();
+      const firstReady = ready.first();
       const waitingWins =
         top >= 0 &&
-        (ready.length === 0 || startWhenReady[top] < nextDayStart - EPS || (Math.abs(startWhenReady[top] - nextDayStart) <= EPS && top < ready[0]));
+        (firstReady < 0 || startWhenReady[top] < nextDayStart - EPS || (Math.abs(startWhenReady[top] - nextDayStart) <= EPS && top < firstReady));
       if (waitingWins) {
         bestChain = waiting.pop();
         start = startWhenReady[bestChain];
       } else {
-        bestChain = ready.shift() as number;
+        bestChain = firstReady;
+        ready.remove(firstReady);
         start = nextDayStart;
       }
     }
     const chain = input.chains[bestChain];
     const i = next[bestChain];
     const step = chain.steps[i];
-    const task = { taskId: `${chain.id}:${i}`, chainId: chain.id, layerId: step.layerId, label: `${chain.label}: ${step.label}` };
-    layerLabels.set(step.layerId, step.label);
-    t = place(task, readyAt[bestChain], start, durations[bestChain][i]);
+    tally.labelLayer(step.layerId, step.label);
+    t = place(`${chain.id}:${i}`, chain.id, step.layerId, `${chain.label}: ${step.label}`, readyAt[bestChain], start, durations[bestChain][i]);
     readyAt[bestChain] = t + step.waitHoursAfter;
     next[bestChain] = i + 1;
     if (next[bestChain] < durations[bestChain].length) {
@@ -237,47 +250,15 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
   }
   if (input.cleanupHours > 0) {
     const d = input.cleanupHours / crew;
-    const cleanup = { taskId: 'cleanup', chainId: null, layerId: null, label: 'Demasking and clean-up' };
-    t = place(cleanup, t, time.earliestStart(t, d), d);
+    t = place('cleanup', null, null, 'Demasking and clean-up', t, time.earliestStart(t, d), d);
   }
 
   return {
     steps,
     tasks,
-    days: summariseDays(steps, crew * time.dayLength),
-    milestones: milestones(tasks, layerLabels),
+    days: tally.days,
+    milestones: tally.milestones(),
     finishDate: fromDayNumber(lastEndDay),
-    workingDays: workingDayIndex.size,
+    workingDays: workingDayCount,
   };
-}
-
-function summariseDays(steps: readonly ScheduleStep[], capacity: number): ScheduleDay[] {
-  const byDate = new Map<string, ScheduleDay>();
-  for (const s of steps) {
-    const d = byDate.get(s.date) ?? { date: s.date, workingDay: s.workingDay, crewHours: 0, capacity };
-    d.crewHours += s.crewHours;
-    byDate.set(s.date, d);
-  }
-  return [...byDate.values()];
-}
-
-/** A layer's milestone is reached when it is finished on every surface; the job at the last task's end. */
-function milestones(tasks: readonly ScheduledTask[], labels: ReadonlyMap<string, string>): Milestone[] {
-  const lastByLayer = new Map<string, ScheduledTask>();
-  let last: ScheduledTask | null = null;
-  for (const task of tasks) {
-    if (!last || task.end >= last.end) last = task;
-    if (task.layerId === null) continue;
-    const prev = lastByLayer.get(task.layerId);
-    if (!prev || task.end >= prev.end) lastByLayer.set(task.layerId, task);
-  }
-  const out: Array<Milestone & { at: number }> = [...lastByLayer.entries()].map(([layerId, task]) => ({
-    id: `layer:${layerId}`,
-    label: labels.get(layerId) ?? layerId,
-    date: task.endDate,
-    hour: task.endHour,
-    at: task.end,
-  }));
-  if (last) out.push({ id: 'job', label: 'Job complete', date: last.endDate, hour: last.endHour, at: last.end });
-  return out.sort((a, b) => a.at - b.at).map(({ at: _at, ...m }) => m);
 }

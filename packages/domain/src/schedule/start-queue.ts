@@ -23,7 +23,10 @@ export class StartQueue {
     while (i > 0) {
       const parent = (i - 1) >> 1;
       if (!this.before(h[i], h[parent])) break;
-      [h[i], h[parent]] = [h[parent], h[i]];
+      // Swapped through a local: destructuring swaps allocate an array in unoptimised code.
+      const swap = h[i];
+      h[i] = h[parent];
+      h[parent] = swap;
       i = parent;
     }
   }
@@ -42,7 +45,9 @@ export class StartQueue {
         if (l < h.length && this.before(h[l], h[m])) m = l;
         if (r < h.length && this.before(h[r], h[m])) m = r;
         if (m === i) break;
-        [h[i], h[m]] = [h[m], h[i]];
+        const swap = h[i];
+        h[i] = h[m];
+        h[m] = swap;
         i = m;
       }
     }
@@ -54,16 +59,4 @@ export class StartQueue {
     const sb = this.startOf[b];
     return sa < sb || (sa === sb && a < b);
   }
-}
-
-/** Ready chains kept in index order: the surface listed first wins a tie. */
-export function insertSorted(list: number[], value: number): void {
-  let lo = 0;
-  let hi = list.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (list[mid] < value) lo = mid + 1;
-    else hi = mid;
-  }
-  list.splice(lo, 0, value);
 }

@@ -23,7 +23,13 @@ const SEARCH_LIMIT_DAYS = 3660;
 export class WorkingTime {
   private readonly weekdays: ReadonlySet<number>;
   private readonly holidays: ReadonlySet<number>;
-  /** next working day on or after a day, memoised: the scheduler asks the same days many times */
+  /**
+   * Next working day on or after a day, memoised: the scheduler asks the same days many times.
+   * Days from the first one asked are kept in an array (a job moves forward a few days at a
+   * time, so it stays dense and is far cheaper than a map); any other day goes in the map.
+   */
+  private nextBase: number | undefined;
+  private readonly nextByOffset: Array<number | undefined> = [];
   private readonly nextCache = new Map<number, number>();
   readonly dayStart: number;
   readonly dayLength: number;
@@ -56,11 +62,15 @@ export class WorkingTime {
   }
 
   nextWorkingDay(day: number): number {
-    const cached = this.nextCache.get(day);
+    if (this.nextBase === undefined) this.nextBase = day;
+    const offset = day - this.nextBase;
+    const inArray = offset >= 0 && offset < this.nextByOffset.length + 64 && Number.isInteger(offset);
+    const cached = inArray ? this.nextByOffset[offset] : this.nextCache.get(day);
     if (cached !== undefined) return cached;
     for (let d = day, i = 0; i < SEARCH_LIMIT_DAYS; d++, i++) {
       if (this.isWorkingDay(d)) {
-        this.nextCache.set(day, d);
+        if (inArray) this.nextByOffset[offset] = d;
+        else this.nextCache.set(day, d);
         return d;
       }
     }
@@ -68,8 +78,16 @@ export class WorkingTime {
   }
 
   windowOf(day: number): { start: number; end: number } {
-    const start = day * 24 + this.dayStart;
-    return { start, end: start + this.dayLength };
+    return { start: this.windowStart(day), end: this.windowEnd(day) };
+  }
+
+  /** Start of a day's working window, without allocating a window (hot loops). */
+  windowStart(day: number): number {
+    return day * 24 + this.dayStart;
+  }
+
+  windowEnd(day: number): number {
+    return day * 24 + this.dayStart + this.dayLength;
   }
 
   /**
@@ -80,10 +98,11 @@ export class WorkingTime {
     const need = Math.min(this.minimumBlock, duration);
     let day = this.nextWorkingDay(Math.floor(t / 24));
     for (let i = 0; i < SEARCH_LIMIT_DAYS; i++) {
-      const w = this.windowOf(day);
-      const s = Math.max(t, w.start);
-      if (s < w.end - EPS && w.end - s >= need - EPS) return s;
-      if (duration === 0 && s <= w.end + EPS && s >= w.start) return s;
+      const start = this.windowStart(day);
+      const end = this.windowEnd(day);
+      const s = Math.max(t, start);
+      if (s < end - EPS && end - s >= need - EPS) return s;
+      if (duration === 0 && s <= end + EPS && s >= start) return s;
       day = this.nextWorkingDay(day + 1);
     }
     throw new DomainInputError('calendar', 'No working time found within ten years.');

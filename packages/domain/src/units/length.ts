@@ -34,23 +34,46 @@ function requireLengthUnit(unit: string, field: string): LengthUnit {
   return unit;
 }
 
+/**
+ * The factors for converting between two units, checked once. Estimates convert every surface
+ * of a finish system with the same units, so they look the units up once and reuse this.
+ */
+export interface UnitScale {
+  same: boolean;
+  /** metres per `from` unit over metres per `to` unit */
+  ratio: number;
+  fromMetres: number;
+  toMetres: number;
+}
+
+export function unitScale(from: LengthUnit, to: LengthUnit): UnitScale {
+  requireLengthUnit(from, 'from');
+  requireLengthUnit(to, 'to');
+  const fromMetres = METRES_PER_NUMBER[from];
+  const toMetres = METRES_PER_NUMBER[to];
+  return { same: from === to, ratio: fromMetres / toMetres, fromMetres, toMetres };
+}
+
+/** The one length formula; `convertLength` and the estimate's hot loop both use it. */
+export function scaleLength(value: number, s: UnitScale): number {
+  return s.same ? value : (value * s.fromMetres) / s.toMetres;
+}
+
+/** The one area formula (kept as value × ratio × ratio so results do not move by an ulp). */
+export function scaleArea(value: number, s: UnitScale): number {
+  return s.same ? value : value * s.ratio * s.ratio;
+}
+
 /** Fast path for geometry: plain numbers are fine for measured dimensions. */
 export function convertLength(value: number, from: LengthUnit, to: LengthUnit): number {
   requireFiniteNumber(value, 'value');
-  requireLengthUnit(from, 'from');
-  requireLengthUnit(to, 'to');
-  if (from === to) return value;
-  return (value * METRES_PER_NUMBER[from]) / METRES_PER_NUMBER[to];
+  return scaleLength(value, unitScale(from, to));
 }
 
 /** Area in `from`² to `to`²; areas are always kept in a length unit squared. */
 export function convertArea(value: number, from: LengthUnit, to: LengthUnit): number {
   requireFiniteNumber(value, 'value');
-  requireLengthUnit(from, 'from');
-  requireLengthUnit(to, 'to');
-  if (from === to) return value;
-  const ratio = METRES_PER_NUMBER[from] / METRES_PER_NUMBER[to];
-  return value * ratio * ratio;
+  return scaleArea(value, unitScale(from, to));
 }
 
 /** Exact path, for audits and tests: the factors are exact decimals. */
