@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# `npm start`: install what is missing, start PostgreSQL and the mail catcher, migrate, seed the
+# `npm start`: install what is missing, start PostgreSQL, the mail catcher and the S3 fake, migrate, seed the
 # demo firm, build, and serve both apps. Safe to run twice. Stop with `npm stop` (or Ctrl+C).
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
@@ -10,7 +10,8 @@ bash ops/pg-createdb.sh layerbook_dev
 db_urls layerbook_dev
 mkdir -p "$LB_DATA/run"
 
-export PORT="${PORT:-4300}" MAIL_WEB_PORT="${MAIL_WEB_PORT:-1080}" SMTP_PORT="${SMTP_PORT:-1025}"
+export PORT="${PORT:-4300}" MAIL_WEB_PORT="${MAIL_WEB_PORT:-1080}" SMTP_PORT="${SMTP_PORT:-1025}" S3_FAKE_PORT="${S3_FAKE_PORT:-4569}"
+export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$S3_FAKE_PORT}"
 export PUBLIC_URL="${PUBLIC_URL:-http://localhost:$PORT}"
 if [ ! -s "$LB_DATA/session-secret" ]; then head -c 48 /dev/urandom | base64 | tr -d '\n/+=' > "$LB_DATA/session-secret"; fi
 export SESSION_SECRET="${SESSION_SECRET:-$(cat "$LB_DATA/session-secret")}"
@@ -23,6 +24,14 @@ if ! { [ -f "$LB_DATA/run/maildev.pid" ] && kill -0 "$(cat "$LB_DATA/run/maildev
 fi
 
 bash ops/build.sh
+
+# S3 stand-in for uploaded files (objects kept in .data/s3); started by PID, stopped by PID.
+if ! { [ -f "$LB_DATA/run/s3.pid" ] && kill -0 "$(cat "$LB_DATA/run/s3.pid")" 2>/dev/null; }; then
+  nohup node server/dist/files/s3-fake-cli.js "$LB_DATA/s3" "$S3_FAKE_PORT" >"$LB_DATA/run/s3.log" 2>&1 &
+  echo $! > "$LB_DATA/run/s3.pid"
+  for _ in $(seq 1 50); do curl -s -o /dev/null "$S3_ENDPOINT" && break; sleep 0.1; done
+fi
+
 node server/dist/seed/run.js
 
 if [ -f "$LB_DATA/run/server.pid" ] && kill -0 "$(cat "$LB_DATA/run/server.pid")" 2>/dev/null; then
@@ -34,6 +43,7 @@ cat <<INFO
     admin (owner, office, crew)   $PUBLIC_URL/sign-in
     client portal                 $PUBLIC_URL/portal/sign-in
     mail inbox (every e-mail)     http://localhost:$MAIL_WEB_PORT
+    S3 fake (uploaded files)      $S3_ENDPOINT  (objects in .data/s3)
   Demo firm "Fernhollow Plaster & Glaze", password for every demo login: limewash-demo-2026
     owner   owner@fernhollow.example
     office  office@fernhollow.example

@@ -5,6 +5,20 @@ import { E2E } from './env';
 
 const root = path.resolve(__dirname, '../..');
 
+/** Up when it answers at all: the S3 fake answers an unsigned request with an error status. */
+async function waitForAnswer(url: string, timeoutMs: number): Promise<void> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    try {
+      await fetch(url);
+      return;
+    } catch {
+      await new Promise((r) => setTimeout(r, 100));
+    }
+  }
+  throw new Error(`${url} did not come up`);
+}
+
 async function waitFor(url: string, timeoutMs: number): Promise<void> {
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {
@@ -39,6 +53,7 @@ export function e2eEnv(): NodeJS.ProcessEnv {
     ROOT_DIR: root,
     SESSION_SECRET: 'e2e-session-secret-that-is-long-enough-0123',
     SMTP_PORT: String(E2E.smtpPort),
+    S3_ENDPOINT: `http://127.0.0.1:${E2E.s3Port}`,
     LOG_LEVEL: 'warn',
     DATABASE_URL: `postgres://layerbook_app:${pw('LB_APP_PASSWORD', 'layerbook-app-local')}@127.0.0.1:${port}/${E2E.db}`,
     DATABASE_OWNER_URL: `postgres://layerbook_owner:${pw('LB_OWNER_PASSWORD', 'layerbook-owner-local')}@127.0.0.1:${port}/${E2E.db}`,
@@ -49,14 +64,20 @@ export function e2eEnv(): NodeJS.ProcessEnv {
   return env;
 }
 
-/** Fresh database, demo seed, a mail catcher and the built server — each started by PID. */
+/** Fresh database, demo seed, a mail catcher, the S3 fake and the built server — each started by PID. */
 export default async function globalSetup(): Promise<void> {
   execFileSync('bash', ['ops/pg-start.sh'], { cwd: root, stdio: 'inherit' });
   execFileSync('bash', ['ops/pg-createdb.sh', E2E.db, '--fresh'], { cwd: root, stdio: 'inherit' });
   const env = e2eEnv();
   rmSync(path.join(root, E2E.stateDir, 'mail'), { recursive: true, force: true });
   startByPid('maildev', path.join(root, 'node_modules/.bin/maildev'), ['--smtp', String(E2E.smtpPort), '--web', String(E2E.mailWebPort), '--ip', '127.0.0.1', '--mail-directory', path.join(root, E2E.stateDir, 'mail')], env);
+  // Uploaded files from earlier runs are dropped with the database that pointed at them.
+  const s3Dir = path.join(root, E2E.stateDir, 's3');
+  rmSync(s3Dir, { recursive: true, force: true });
+  startByPid('s3', 'node', ['server/dist/files/s3-fake-cli.js', s3Dir, String(E2E.s3Port)], env);
   execFileSync('node', ['server/dist/seed/run.js'], { cwd: root, env, stdio: 'inherit' });
+  // The server creates its bucket at start-up, so the fake must answer first.
+  await waitForAnswer(`http://127.0.0.1:${E2E.s3Port}/`, 15_000);
   startByPid('server', 'node', ['server/dist/main.js'], env);
   await waitFor(`http://127.0.0.1:${E2E.mailWebPort}/api/healthz`, 30_000).catch(() => waitFor(`http://127.0.0.1:${E2E.mailWebPort}/`, 5_000));
   await waitFor(`${E2E.baseUrl}/api/health`, 60_000);

@@ -4,6 +4,7 @@ import { pinoHttp } from 'pino-http';
 import { authRoutes } from './auth/routes';
 import { absoluteTimeout, createPassport } from './auth/passport-setup';
 import type { AppContext } from './context';
+import { fileRoutes } from './files/routes';
 import { firmRoutes } from './firms/routes';
 import { csrf } from './http/csrf';
 import { apiNotFound, problemHandler } from './http/errors';
@@ -18,6 +19,8 @@ import { libraryRoutes } from './library/routes';
 import { takeoffRoutes } from './takeoff/routes';
 import { estimateRoutes } from './proposals/routes';
 import { proposalRoutes } from './proposals/proposal-routes';
+import { sampleRoutes } from './samples/routes';
+import { portalSampleRoutes } from './samples/portal-routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
 
 export interface SsrHandlers {
@@ -72,6 +75,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use(absoluteTimeout(ctx));
   router.use(csrf.csrfSynchronisedProtection);
   router.use('/auth', authRoutes(ctx, pass, limiter));
+  router.use('/portal/boards', portalSampleRoutes(ctx));
   router.use('/portal', portalRoutes(ctx, limiter));
   router.use('/firm', firmRoutes(ctx));
   router.use('/team', teamRoutes(ctx));
@@ -80,8 +84,10 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/sites', siteRoutes(ctx));
   router.use('/library', libraryRoutes(ctx));
   router.use('/takeoff', takeoffRoutes(ctx));
+  router.use('/files', fileRoutes(ctx));
   router.use('/estimates', estimateRoutes(ctx));
   router.use('/proposals', proposalRoutes(ctx));
+  router.use('/samples', sampleRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });

@@ -24,6 +24,16 @@ const schema = z.object({
   PUBLIC_FORM_MIN_FILL_MS: z.coerce.number().int().min(0).default(3000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
+  // Object storage: any S3-compatible service; the defaults point at the local fake (ops/start.sh).
+  S3_ENDPOINT: z.url().default('http://127.0.0.1:4569'),
+  S3_BUCKET: z.string().min(3).default('layerbook'),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
+  S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
+  /** Path-style URLs (`endpoint/bucket/key`): what local fakes and most S3-compatible services expect. */
+  S3_FORCE_PATH_STYLE: flag.default(true),
+  /** Largest upload accepted, per file; a phone photo is 3–12 MB. */
+  FILE_MAX_BYTES: z.coerce.number().int().min(1).default(15 * 1024 * 1024),
 });
 
 export type Config = z.infer<typeof schema>;

@@ -6,6 +6,7 @@ import { createApp } from './app';
 import { loadConfig } from './config';
 import type { AppContext } from './context';
 import { assertRlsBoundRole } from './db-roles';
+import { openObjectStore } from './files/object-store';
 import { startQueue } from './jobs/job-queue';
 import { startWorkers } from './jobs/workers';
 import { loadSsrHandlers } from './ssr/load';
@@ -22,7 +23,8 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
   await assertRlsBoundRole(pool);
   const queue = await startQueue(config, logger);
   const workers = mode === 'worker' || config.RUN_WORKERS ? await startWorkers(config, queue, logger) : undefined;
-  const ctx: AppContext = { config, pool, queue, logger, now: () => new Date() };
+  const storage = await openObjectStore(config);
+  const ctx: AppContext = { config, pool, queue, logger, storage, now: () => new Date() };
 
   let server: import('node:http').Server | undefined;
   if (mode === 'web') {
@@ -43,6 +45,7 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
     await workers?.stop();
     await queue.stop();
     await pool.end();
+    storage.close();
     clearTimeout(force);
     process.exit(0);
   };

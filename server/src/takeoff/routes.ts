@@ -2,8 +2,10 @@ import { moveInput, roomInput, roomUpdate, surfaceInput, surfaceUpdate, uuid } f
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
+import { discardObjects } from '../files/stored-files';
 import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
+import { roomPhotoRoutes } from './photo-routes';
 import {
   addRoom,
   addSurface,
@@ -28,6 +30,7 @@ const surfaceParam = idParam('surface id');
  */
 export function takeoffRoutes(ctx: AppContext): Router {
   const router = Router();
+  router.use(roomPhotoRoutes(ctx));
 
   router.get('/sites/:siteId', async (req, res) => {
     res.json(await withStaff(ctx, req, 'crew', (tx) => getTakeoff(tx, parse(siteParam, req.params).siteId)));
@@ -44,7 +47,8 @@ export function takeoffRoutes(ctx: AppContext): Router {
   });
 
   router.delete('/rooms/:id', async (req, res) => {
-    await withStaff(ctx, req, 'office', (tx, staff) => deleteRoom(tx, { userId: staff.id }, parse(roomParam, req.params).id));
+    const photoKeys = await withStaff(ctx, req, 'office', (tx, staff) => deleteRoom(tx, { userId: staff.id }, parse(roomParam, req.params).id));
+    await discardObjects(ctx.storage, ctx.logger, photoKeys);
     res.status(204).end();
   });
 

@@ -2,7 +2,9 @@ import type { MoveInput, RoomInput, RoomUpdate, RoomView, SurfaceInput, SurfaceU
 import { and, asc, clients, eq, firms, rooms, sites, sql, surfaces, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import { badRequest, notFound } from '../http/problem';
+import type { ObjectKeys } from '../files/stored-files';
 import { measureOrReject, sumMeasures, unitOfSystem } from './measure';
+import { detachRoomPhotos } from './photos';
 import { toSurfaceView, type SurfaceRow } from './surface-view';
 
 type RoomRow = typeof rooms.$inferSelect;
@@ -116,12 +118,17 @@ export async function updateRoom(tx: TenantTx, roomId: string, patch: RoomUpdate
   return toRoomView(row, await roomSurfaces(tx, roomId), await firmUnit(tx));
 }
 
-/** The room and all its surfaces go together, in the request's one transaction. */
-export async function deleteRoom(tx: TenantTx, actor: Actor, roomId: string): Promise<void> {
+/**
+ * The room, its surfaces and its photos go together, in the request's one transaction. Returns the
+ * photos' object keys, which the caller deletes from the store after the commit.
+ */
+export async function deleteRoom(tx: TenantTx, actor: Actor, roomId: string): Promise<ObjectKeys> {
   const room = await findRoom(tx, roomId);
+  const photos = await detachRoomPhotos(tx, roomId);
   const gone = await tx.db.delete(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId))).returning({ id: surfaces.id });
   await tx.db.delete(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)));
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.room_deleted', entity: 'room', entityId: roomId, data: { siteId: room.siteId, name: room.name, surfacesDeleted: gone.length } });
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.room_deleted', entity: 'room', entityId: roomId, data: { siteId: room.siteId, name: room.name, surfacesDeleted: gone.length, photosDeleted: photos.count } });
+  return photos.keys;
 }
 
 /** Renumbers the list 0…n−1 with `id` at `to` (clamped to the end). Lists are a room or a site long. */

@@ -1,3 +1,5 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import type { Express } from 'express';
 import { Pool } from 'pg';
@@ -6,6 +8,8 @@ import request from 'supertest';
 import { createApp } from '../app';
 import { Config, loadConfig } from '../config';
 import type { AppContext } from '../context';
+import { openObjectStore } from '../files/object-store';
+import { startS3Fake } from '../files/s3-fake';
 import { startQueue, StartedQueue } from '../jobs/job-queue';
 import { startWorkers, Workers } from '../jobs/workers';
 import { Inbox, startInbox } from './inbox';
@@ -23,6 +27,9 @@ export interface TestServer {
 
 export async function startTestServer(overrides: Partial<Record<keyof Config, string>> = {}): Promise<TestServer> {
   const inbox = await startInbox();
+  // Each test server gets its own S3 fake on a free port with a throwaway folder.
+  const s3Dir = mkdtempSync(path.join(os.tmpdir(), 'layerbook-s3-'));
+  const s3 = await startS3Fake({ directory: s3Dir, port: 0 });
   const config = loadConfig({
     NODE_ENV: 'test',
     ...testDatabaseUrls(),
@@ -33,6 +40,7 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
     LOG_LEVEL: 'silent',
     SIGN_IN_RATE_LIMIT: '1000',
     PUBLIC_FORM_RATE_LIMIT: '1000',
+    S3_ENDPOINT: s3.endpoint,
     ...overrides,
   });
   const logger = pino({ level: process.env['LB_TEST_LOG'] ?? 'silent' });
@@ -40,7 +48,8 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
   const queue = await startQueue(config, logger);
   let fixedNow: Date | null = null;
   const workers: Workers = await startWorkers(config, queue, logger, () => fixedNow ?? new Date());
-  const ctx: AppContext = { config, pool, queue, logger, now: () => fixedNow ?? new Date() };
+  const storage = await openObjectStore(config);
+  const ctx: AppContext = { config, pool, queue, logger, storage, now: () => fixedNow ?? new Date() };
   return {
     app: createApp(ctx),
     ctx,
@@ -52,6 +61,9 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
       await queue.stop();
       await pool.end();
       await inbox.close();
+      storage.close();
+      await s3.stop();
+      rmSync(s3Dir, { recursive: true, force: true });
     },
   };
 }

@@ -13,6 +13,7 @@ import { amount, shortNumber } from './number-text';
 import { shapeChoice } from './shape-catalog';
 import { ShapeSketch } from './shape-sketch';
 import { RoomForm } from './room-form';
+import { RoomPhotos } from './room-photos';
 import { SurfaceForm } from './surface-form';
 import { TakeoffApi } from './takeoff-api';
 
@@ -22,7 +23,7 @@ type Editing = 'room' | 'new' | string | null;
 /** One room as an expandable panel: its surfaces with their numbers and sketches, and the edits. */
 @Component({
   selector: 'lb-room-panel',
-  imports: [MatButtonModule, MatExpansionModule, MatIconModule, RoomForm, ShapeSketch, SurfaceForm],
+  imports: [MatButtonModule, MatExpansionModule, MatIconModule, RoomForm, RoomPhotos, ShapeSketch, SurfaceForm],
   templateUrl: './room-panel.html',
   styleUrl: './room-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -81,7 +82,7 @@ export class RoomPanel implements OnInit {
     const n = room.surfaces.length;
     const ok = await this.confirm({
       title: `Delete ${room.name}?`,
-      message: n === 0 ? 'The room has no surfaces yet.' : `Its ${n} measured surface${n === 1 ? '' : 's'} will be deleted with it.`,
+      message: `${n === 0 ? 'The room has no surfaces yet.' : `Its ${n} measured surface${n === 1 ? '' : 's'} will be deleted with it.`} Its photos go too.`,
       confirmLabel: 'Delete room',
     });
     if (ok) await this.run(() => this.api.deleteRoom(room.id), `${room.name} deleted.`);
