@@ -19,8 +19,6 @@ import { libraryRoutes } from './library/routes';
 import { takeoffRoutes } from './takeoff/routes';
 import { estimateRoutes } from './proposals/routes';
 import { proposalRoutes } from './proposals/proposal-routes';
-import { sampleRoutes } from './samples/routes';
-import { portalSampleRoutes } from './samples/portal-routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
 
 export interface SsrHandlers {
@@ -75,7 +73,6 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use(absoluteTimeout(ctx));
   router.use(csrf.csrfSynchronisedProtection);
   router.use('/auth', authRoutes(ctx, pass, limiter));
-  router.use('/portal/boards', portalSampleRoutes(ctx));
   router.use('/portal', portalRoutes(ctx, limiter));
   router.use('/firm', firmRoutes(ctx));
   router.use('/team', teamRoutes(ctx));
@@ -87,7 +84,6 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/files', fileRoutes(ctx));
   router.use('/estimates', estimateRoutes(ctx));
   router.use('/proposals', proposalRoutes(ctx));
-  router.use('/samples', sampleRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });
