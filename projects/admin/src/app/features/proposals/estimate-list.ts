@@ -17,6 +17,10 @@ import { statusWord } from './estimate-words';
   imports: [DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
   template: `
     <section class="lb-page">
+      <nav class="switch" aria-label="Jobs and proposals">
+        <a routerLink="/jobs" aria-current="page">Estimates</a>
+        <a routerLink="/jobs/work">Accepted jobs</a>
+      </nav>
       <div class="heading">
         <h1>Jobs &amp; proposals</h1>
         <a mat-flat-button routerLink="/jobs/estimates/new">
@@ -68,6 +72,17 @@ import { statusWord } from './estimate-words';
     </section>
   `,
   styles: `
+    .switch {
+      display: flex;
+      gap: 1rem;
+      margin-bottom: 0.5rem;
+    }
+    .switch a[aria-current='page'] {
+      font-weight: 600;
+      text-decoration: none;
+      color: inherit;
+      border-bottom: 2px solid var(--lb-umber, currentColor);
+    }
     .heading {
       display: flex;
       flex-wrap: wrap;

@@ -17,4 +17,14 @@ export default [
     title: 'Estimate · Layerbook',
     loadComponent: () => import('./estimate-builder').then((m) => m.EstimateBuilder),
   },
+  {
+    path: 'estimates/:id/proposals',
+    title: 'Proposals · Layerbook',
+    loadComponent: () => import('./proposal-versions').then((m) => m.ProposalVersions),
+  },
+  // Accepted jobs live in their own feature folder; /jobs is where the office finds them.
+  {
+    path: 'work',
+    loadChildren: () => import('../jobs/jobs.routes'),
+  },
 ] satisfies Routes;

@@ -1,0 +1,156 @@
+import { ChangeDetectionStrategy, Component, OnInit, inject, signal } from '@angular/core';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { toProblem } from '../../core/errors/problem';
+import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { JobApi, type JobListItem } from './job-api';
+import { jobStatus } from './job-words';
+
+/** Accepted jobs: every proposal a client signed, newest first. */
+@Component({
+  selector: 'lb-job-list',
+  imports: [CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
+  template: `
+    <section class="lb-page">
+      <nav class="switch" aria-label="Jobs and proposals">
+        <a routerLink="/jobs">Estimates</a>
+        <a routerLink="/jobs/work" aria-current="page">Accepted jobs</a>
+      </nav>
+      <h1>Accepted jobs</h1>
+      <p class="lb-lead">Work the client accepted: the option they signed, the contract sum and the payments to ask for.</p>
+      <lb-form-alert [message]="message()" />
+      @if (isLoading()) {
+        <mat-progress-bar mode="indeterminate" aria-label="Loading jobs" />
+      }
+      <div class="table-wrap">
+        <table aria-label="Accepted jobs">
+          <thead>
+            <tr>
+              <th scope="col">Job</th>
+              <th scope="col">Client</th>
+              <th scope="col">Option</th>
+              <th scope="col" class="num">Contract sum</th>
+              <th scope="col">Status</th>
+              <th scope="col">Starts</th>
+            </tr>
+          </thead>
+          <tbody>
+            @for (j of items(); track j.id) {
+              @let look = statusLook(j.status);
+              <tr>
+                <th scope="row"><a [routerLink]="['/jobs/work', j.id]">{{ j.title }}</a></th>
+                <td>{{ j.clientName }}</td>
+                <td>{{ j.optionLabel }}</td>
+                <td class="num">{{ j.contractSum | money: j.currency }}</td>
+                <td>
+                  <span class="status"><mat-icon aria-hidden="true">{{ look.icon }}</mat-icon>{{ look.word }}</span>
+                </td>
+                <td>
+                  @if (j.startDate) {
+                    {{ j.startDate | calendarDate }}
+                  } @else {
+                    <span class="muted">Not set</span>
+                  }
+                </td>
+              </tr>
+            } @empty {
+              @if (!isLoading()) {
+                <tr>
+                  <td colspan="6" class="none">No accepted jobs yet. They appear here when a client accepts a proposal.</td>
+                </tr>
+              }
+            }
+          </tbody>
+        </table>
+      </div>
+    </section>
+  `,
+  styles: `
+    .switch {
+      display: flex;
+      gap: 1rem;
+      margin-bottom: 0.5rem;
+    }
+    .switch a[aria-current='page'] {
+      font-weight: 600;
+      text-decoration: none;
+      color: inherit;
+      border-bottom: 2px solid var(--lb-umber, currentColor);
+    }
+    h1 {
+      margin: 0;
+    }
+    .table-wrap {
+      overflow-x: auto;
+      border: 1px solid var(--mat-sys-outline-variant);
+      border-radius: 12px;
+      background: var(--mat-sys-surface-container-lowest);
+    }
+    table {
+      width: 100%;
+      min-width: 44rem;
+      border-collapse: collapse;
+    }
+    th,
+    td {
+      padding: 0.6rem 1rem;
+      text-align: left;
+      border-bottom: 1px solid var(--mat-sys-outline-variant);
+    }
+    thead th {
+      font-size: 0.9rem;
+      color: var(--mat-sys-on-surface-variant);
+      background: var(--mat-sys-surface-container-low);
+    }
+    tbody tr:last-child > * {
+      border-bottom: 0;
+    }
+    .num {
+      text-align: right;
+      font-variant-numeric: tabular-nums;
+    }
+    .status {
+      display: inline-flex;
+      align-items: center;
+      gap: 0.3rem;
+    }
+    .status mat-icon {
+      width: 18px;
+      height: 18px;
+      font-size: 18px;
+    }
+    .muted,
+    .none {
+      color: var(--mat-sys-on-surface-variant);
+    }
+    .none {
+      padding: 1.5rem 1rem;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class JobList implements OnInit {
+  private readonly api = inject(JobApi);
+
+  protected readonly items = signal<readonly JobListItem[]>([]);
+  protected readonly isLoading = signal(true);
+  protected readonly message = signal<string | null>(null);
+  protected readonly statusLook = jobStatus;
+
+  ngOnInit(): void {
+    void this.load();
+  }
+
+  private async load(): Promise<void> {
+    try {
+      this.items.set(await this.api.list());
+    } catch (error) {
+      this.message.set(toProblem(error).title);
+    } finally {
+      this.isLoading.set(false);
+    }
+  }
+}

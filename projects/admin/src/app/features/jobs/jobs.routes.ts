@@ -1,0 +1,16 @@
+import { Routes } from '@angular/router';
+
+/** Accepted jobs, mounted under /jobs/work by the proposals routes. */
+export default [
+  {
+    path: '',
+    pathMatch: 'full',
+    title: 'Accepted jobs · Layerbook',
+    loadComponent: () => import('./job-list').then((m) => m.JobList),
+  },
+  {
+    path: ':id',
+    title: 'Job · Layerbook',
+    loadComponent: () => import('./job-detail').then((m) => m.JobDetail),
+  },
+] satisfies Routes;

@@ -1,0 +1,155 @@
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output, signal } from '@angular/core';
+import { ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { provideNativeDateAdapter } from '@angular/material/core';
+import { MatDatepickerModule } from '@angular/material/datepicker';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import type { ProposalVersionView } from '@layerbook/contracts';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { errorText } from '../../shared/forms/error-text';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { ProposalApi } from './proposal-api';
+import { MAX_EXCLUSIONS, PROPOSAL_WORDS, fillProposal, placeExclusionErrors, proposalForm, readProposal } from './proposal-form';
+
+/**
+ * The choices a proposal version carries beyond the estimate's numbers: how long the offer stands,
+ * how the client pays, what is left out. Makes a new draft, or changes the given one.
+ */
+@Component({
+  selector: 'lb-proposal-editor',
+  imports: [FormAlert, MatButtonModule, MatDatepickerModule, MatFormFieldModule, MatIconModule, MatInputModule, ReactiveFormsModule],
+  providers: [provideNativeDateAdapter()],
+  template: `
+    <form class="editor" [formGroup]="form" (ngSubmit)="save()" novalidate [attr.aria-labelledby]="headingId()">
+      <h3 [id]="headingId()">{{ draft() ? 'Change version ' + draft()!.version : 'New proposal version' }}</h3>
+      <p class="hint">The prices come from the estimate as last saved. Only a draft can change; once sent it is frozen.</p>
+      <lb-form-alert [message]="message()" />
+      <fieldset class="lb-gate" [disabled]="!isHydrated() || isSaving()">
+        <div class="row">
+          <mat-form-field>
+            <mat-label>Valid until</mat-label>
+            <input matInput [matDatepicker]="picker" formControlName="expiresOn" autocomplete="off" required />
+            <mat-datepicker-toggle matIconSuffix [for]="picker" />
+            <mat-datepicker #picker />
+            <mat-hint>The last day the client can accept this offer.</mat-hint>
+            <mat-error>{{ errorText(form.controls.expiresOn, words.expiresOn) }}</mat-error>
+          </mat-form-field>
+          <ng-container formGroupName="terms">
+            <mat-form-field class="pct">
+              <mat-label>Deposit (%)</mat-label>
+              <input matInput type="number" inputmode="numeric" min="0" max="100" step="1" formControlName="depositPercent" required />
+              <mat-hint>Due on acceptance.</mat-hint>
+              <mat-error>{{ errorText(form.controls.terms.controls.depositPercent, words.percent) }}</mat-error>
+            </mat-form-field>
+            <mat-form-field class="pct">
+              <mat-label>Progress payment (%)</mat-label>
+              <input matInput type="number" inputmode="numeric" min="0" max="100" step="1" formControlName="progressPercent" required />
+              <mat-hint>When the base coats are done. The rest is due on completion.</mat-hint>
+              <mat-error>{{ errorText(form.controls.terms.controls.progressPercent, words.percent) }}</mat-error>
+            </mat-form-field>
+          </ng-container>
+        </div>
+        <mat-form-field class="lb-full" formGroupName="terms">
+          <mat-label>Terms</mat-label>
+          <textarea matInput formControlName="text" rows="3" maxlength="4000"></textarea>
+          <mat-hint>Printed under “Terms”: when payments fall due, cancellation, warranty.</mat-hint>
+          <mat-error>{{ errorText(form.controls.terms.controls.text, words.text) }}</mat-error>
+        </mat-form-field>
+        <mat-form-field class="lb-full">
+          <mat-label>Exclusions</mat-label>
+          <textarea matInput formControlName="exclusions" rows="4"></textarea>
+          <mat-hint>One per line, at most {{ maxExclusions }}: what this price does not cover.</mat-hint>
+          <mat-error>{{ errorText(form.controls.exclusions, words.exclusions) }}</mat-error>
+        </mat-form-field>
+        <mat-form-field class="lb-full">
+          <mat-label>Notes</mat-label>
+          <textarea matInput formControlName="notes" rows="3" maxlength="4000"></textarea>
+          <mat-hint>Anything else the client should read with the offer.</mat-hint>
+          <mat-error>{{ errorText(form.controls.notes, words.text) }}</mat-error>
+        </mat-form-field>
+        <div class="lb-form-actions">
+          <button mat-flat-button type="submit">
+            <mat-icon aria-hidden="true">{{ draft() ? 'save' : 'note_add' }}</mat-icon>
+            {{ draft() ? 'Save changes' : 'Create version' }}
+          </button>
+          <button mat-button type="button" (click)="cancelled.emit()">Cancel</button>
+        </div>
+      </fieldset>
+    </form>
+  `,
+  styles: `
+    .editor {
+      padding: 1rem;
+      border: 1px solid var(--mat-sys-outline-variant);
+      border-radius: 12px;
+      background: var(--mat-sys-surface-container-lowest);
+    }
+    h3 {
+      margin: 0;
+      font-size: 1.15rem;
+    }
+    .hint {
+      margin: 0.25rem 0 1rem;
+      color: var(--mat-sys-on-surface-variant);
+    }
+    .row {
+      display: flex;
+      flex-wrap: wrap;
+      gap: 0 1rem;
+    }
+    .row mat-form-field {
+      flex: 1 1 14rem;
+    }
+    fieldset {
+      display: grid;
+      gap: 0.75rem;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ProposalEditor implements OnInit {
+  private readonly api = inject(ProposalApi);
+
+  readonly estimateId = input.required<string>();
+  /** the draft to change; none makes a new version */
+  readonly draft = input<ProposalVersionView | null>(null);
+  readonly saved = output<ProposalVersionView>();
+  readonly cancelled = output<void>();
+
+  protected readonly form = proposalForm();
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly isSaving = signal(false);
+  protected readonly message = signal<string | null>(null);
+  protected readonly words = PROPOSAL_WORDS;
+  protected readonly errorText = errorText;
+  protected readonly maxExclusions = MAX_EXCLUSIONS;
+  protected readonly headingId = computed(() => `proposal-editor-${this.draft()?.id ?? 'new'}`);
+
+  ngOnInit(): void {
+    const draft = this.draft();
+    if (draft) fillProposal(this.form, draft.snapshot);
+  }
+
+  protected async save(): Promise<void> {
+    this.message.set(null);
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      this.message.set('Some fields need attention; the messages are beside them.');
+      return;
+    }
+    const body = readProposal(this.form);
+    const draft = this.draft();
+    this.isSaving.set(true);
+    try {
+      this.saved.emit(draft ? await this.api.update(draft.id, body) : await this.api.create({ estimateId: this.estimateId(), ...body }));
+    } catch (error) {
+      this.message.set(applyProblem(this.form, placeExclusionErrors(toProblem(error))));
+    } finally {
+      this.isSaving.set(false);
+    }
+  }
+}

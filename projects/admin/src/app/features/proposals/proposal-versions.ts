@@ -1,0 +1,164 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import type { ProposalVersionSummary, ProposalVersionView } from '@layerbook/contracts';
+import { firstValueFrom } from 'rxjs';
+import { toProblem } from '../../core/errors/problem';
+import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
+import { ConfirmDialog, type ConfirmDialogData } from '../../shared/ui/confirm-dialog';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { EstimateApi, type EstimateView } from './estimate-api';
+import { ProposalApi } from './proposal-api';
+import { ProposalEditor } from './proposal-editor';
+import { versionStatus } from './proposal-words';
+
+/** What went wrong with one version's action, said beside that version. */
+interface VersionMessage {
+  readonly id: string;
+  readonly text: string;
+  /** the server asked for the client's e-mail: offer the way to the client's page */
+  readonly needsClientEmail: boolean;
+}
+
+/** Statuses whose full record says more than the summary (who accepted, what they said). */
+const READ_IN_FULL = new Set(['draft', 'accepted', 'declined', 'changes_requested']);
+
+/**
+ * The proposal versions of one estimate: make a draft from the saved numbers, change it, download
+ * its PDF and send it to the client; sent versions stay as they were sent.
+ */
+@Component({
+  selector: 'lb-proposal-versions',
+  imports: [CalendarDatePipe, DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, MoneyPipe, ProposalEditor, RouterLink],
+  templateUrl: './proposal-versions.html',
+  styleUrl: './proposal-versions.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ProposalVersions implements OnInit {
+  private readonly estimates = inject(EstimateApi);
+  protected readonly api = inject(ProposalApi);
+  private readonly dialog = inject(MatDialog);
+
+  /** the estimate's id, from the route (withComponentInputBinding) */
+  readonly id = input.required<string>();
+
+  protected readonly estimate = signal<EstimateView | null>(null);
+  protected readonly clientEmail = signal<string | null>(null);
+  protected readonly versions = signal<readonly ProposalVersionSummary[]>([]);
+  protected readonly details = signal<ReadonlyMap<string, ProposalVersionView>>(new Map());
+  protected readonly isLoading = signal(true);
+  protected readonly loadMessage = signal<string | null>(null);
+  /** 'new' for a new version, a version id while changing that draft */
+  protected readonly editing = signal<string | null>(null);
+  protected readonly busyId = signal<string | null>(null);
+  protected readonly versionMessage = signal<VersionMessage | null>(null);
+  protected readonly notice = signal<string | null>(null);
+  protected readonly versionStatus = versionStatus;
+
+  protected readonly isAccepted = computed(() => this.versions().some((v) => v.status === 'accepted'));
+  protected readonly isPriced = computed(() => !!this.estimate()?.result);
+  protected readonly canPropose = computed(() => this.isPriced() && !this.isAccepted());
+
+  ngOnInit(): void {
+    void this.load();
+  }
+
+  protected detail(id: string): ProposalVersionView | null {
+    return this.details().get(id) ?? null;
+  }
+
+  protected optionLabel(view: ProposalVersionView): string {
+    const id = view.acceptedVariantId;
+    return view.snapshot.options.find((o) => o.id === id)?.label ?? id ?? '';
+  }
+
+  protected startNew(): void {
+    this.notice.set(null);
+    this.versionMessage.set(null);
+    this.editing.set('new');
+  }
+
+  protected startEdit(id: string): void {
+    this.notice.set(null);
+    this.versionMessage.set(null);
+    this.editing.set(id);
+  }
+
+  protected stopEditing(): void {
+    this.editing.set(null);
+  }
+
+  protected async saved(view: ProposalVersionView, wasNew: boolean): Promise<void> {
+    this.editing.set(null);
+    this.notice.set(wasNew ? `Version ${view.version} made as a draft. Check the PDF, then send it.` : `Version ${view.version} saved.`);
+    await this.reloadVersions();
+  }
+
+  protected async sendToClient(version: ProposalVersionSummary): Promise<void> {
+    this.notice.set(null);
+    this.versionMessage.set(null);
+    const email = this.clientEmail() || this.detail(version.id)?.snapshot.client.email || '';
+    const isSure = await this.confirm({
+      title: 'Send the proposal?',
+      message: email
+        ? `Send version ${version.version} to ${email}? Once sent, this version cannot change.`
+        : `Send version ${version.version} to the client? Once sent, this version cannot change.`,
+      confirmLabel: 'Send',
+    });
+    if (!isSure) return;
+    this.busyId.set(version.id);
+    try {
+      const sent = await this.api.send(version.id);
+      this.notice.set(`Version ${sent.version} sent${email ? ` to ${email}` : ''}. The client gets a link to read and accept it.`);
+      await this.reloadVersions();
+    } catch (error) {
+      const problem = toProblem(error);
+      const errors = problem.errors ?? [];
+      const needsClientEmail = errors.some((e) => e.field === 'client.email');
+      const detail = problem.detail ?? problem.title;
+      const text = errors.length > 0 ? [detail, ...errors.map((e) => e.message)].filter((t, i, all) => all.indexOf(t) === i).join(' ') : detail;
+      this.versionMessage.set({ id: version.id, text, needsClientEmail });
+    } finally {
+      this.busyId.set(null);
+    }
+  }
+
+  private confirm(data: ConfirmDialogData): Promise<boolean> {
+    const ref = this.dialog.open<ConfirmDialog, ConfirmDialogData, boolean>(ConfirmDialog, { data, width: '30rem' });
+    return firstValueFrom(ref.afterClosed()).then((answer) => answer === true);
+  }
+
+  private async load(): Promise<void> {
+    try {
+      const estimate = await this.estimates.get(this.id());
+      this.estimate.set(estimate);
+      void this.estimates.client(estimate.clientId).then(
+        (client) => this.clientEmail.set(client.email),
+        // The confirmation then names the address in the draft; the server has the last word.
+        () => undefined,
+      );
+      await this.reloadVersions();
+    } catch (error) {
+      this.loadMessage.set(toProblem(error).title);
+    } finally {
+      this.isLoading.set(false);
+    }
+  }
+
+  private async reloadVersions(): Promise<void> {
+    try {
+      const { items } = await this.api.list(this.id());
+      const wanted = items.filter((v) => READ_IN_FULL.has(v.status));
+      const views = await Promise.all(wanted.map((v) => this.api.get(v.id)));
+      this.details.set(new Map(views.map((v) => [v.id, v])));
+      this.versions.set(items);
+    } catch (error) {
+      this.loadMessage.set(toProblem(error).title);
+    }
+  }
+}
