@@ -19,6 +19,7 @@ import { libraryRoutes } from './library/routes';
 import { takeoffRoutes } from './takeoff/routes';
 import { estimateRoutes } from './proposals/routes';
 import { proposalRoutes } from './proposals/proposal-routes';
+import { jobRoutes } from './work/routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
 
 export interface SsrHandlers {
@@ -84,6 +85,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/files', fileRoutes(ctx));
   router.use('/estimates', estimateRoutes(ctx));
   router.use('/proposals', proposalRoutes(ctx));
+  router.use('/jobs', jobRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });

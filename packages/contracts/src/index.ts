@@ -15,3 +15,4 @@ export * from './proposals/estimate';
 export * from './engine';
 export * from './proposals/proposal';
 export * from './proposals/proposal-snapshot';
+export * from './work';

@@ -36,6 +36,11 @@ export const routes: Routes = [
         title: 'Your projects · Layerbook client portal',
         loadComponent: () => import('./features/projects/projects').then((m) => m.Projects),
       },
+      {
+        path: 'proposals/:id',
+        title: 'Proposal · Layerbook client portal',
+        loadComponent: () => import('./features/proposals/proposal-page').then((m) => m.ProposalPage),
+      },
     ],
   },
   {

@@ -2,10 +2,10 @@ import { ChangeDetectionStrategy, Component, afterNextRender, inject, input, sig
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
-import { HOME_URL } from '../../core/auth/guards';
 import { toProblem } from '../../core/errors/problem';
 import { AuthFrame } from './auth-frame';
 import { isWellFormedToken } from './link-token';
+import { nextUrl } from './next-url';
 import { PortalAuth } from './portal-auth';
 
 type LinkState = 'working' | 'incomplete' | 'expired' | 'unknown' | 'failed';
@@ -26,6 +26,8 @@ export class SignInLink {
 
   /** The one-time code from the e-mailed link (query parameter). */
   readonly token = input<string>();
+  /** Where the e-mail wants the client to land (query parameter), e.g. `/portal/proposals/…`. */
+  readonly next = input<string>();
 
   protected readonly state = signal<LinkState>('working');
   protected readonly failure = signal('');
@@ -42,7 +44,7 @@ export class SignInLink {
     }
     try {
       await this.auth.redeem({ token });
-      await this.router.navigateByUrl(HOME_URL, { replaceUrl: true });
+      await this.router.navigateByUrl(nextUrl(this.next()), { replaceUrl: true });
     } catch (error) {
       const problem = toProblem(error);
       if (problem.status === 410) {

@@ -3,11 +3,15 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
-import { ProjectsApi, type PortalProject } from './projects-api';
+import type { PortalProject } from '@layerbook/contracts';
+import { RouterLink } from '@angular/router';
+import { formatDay } from '../../shared/format/money';
+import { PROPOSAL_STATUS_WORDS } from '../proposals/status-words';
+import { ProjectsApi } from './projects-api';
 
 @Component({
   selector: 'lb-projects',
-  imports: [MatIconModule, MatProgressBarModule],
+  imports: [MatIconModule, MatProgressBarModule, RouterLink],
   template: `
     <h1>Your projects</h1>
     @if (client(); as me) {
@@ -27,8 +31,19 @@ import { ProjectsApi, type PortalProject } from './projects-api';
       </div>
     } @else {
       <ul class="list">
-        @for (project of projects(); track project.id) {
-          <li>{{ project.title }}</li>
+        @for (project of projects(); track project.estimateId) {
+          <li class="project">
+            <h2>{{ project.title }}</h2>
+            <p class="site">{{ project.siteAddress }}</p>
+            <p>
+              Proposal, version {{ project.latest.version }}:
+              <strong>{{ statusWords[project.latest.status] }}</strong>
+              @if (project.latest.status === 'sent') {
+                · the offer stands until {{ day(project.latest.expiresOn) }}
+              }
+            </p>
+            <a [routerLink]="['/proposals', project.latest.id]">Read the proposal<span class="lb-visually-hidden"> for {{ project.title }}</span></a>
+          </li>
         }
       </ul>
     }
@@ -46,6 +61,11 @@ import { ProjectsApi, type PortalProject } from './projects-api';
     }
     .empty p { margin: 0; }
     .empty mat-icon { color: var(--lb-verdigris); }
+    .list { list-style: none; margin: 0; padding: 0; display: grid; gap: 1rem; max-width: 48rem; }
+    .project { padding: 1rem 1.25rem; border: 1px solid var(--mat-sys-outline-variant); border-radius: 12px; background: var(--mat-sys-surface-container-lowest); }
+    .project h2 { font-family: var(--lb-serif); margin: 0 0 0.25rem; font-size: 1.25rem; }
+    .project p { margin: 0 0 0.5rem; }
+    .site { color: var(--mat-sys-on-surface-variant); }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -56,6 +76,11 @@ export class Projects {
   protected readonly projects = signal<readonly PortalProject[]>([]);
   protected readonly isLoading = signal(true);
   protected readonly loadMessage = signal<string | null>(null);
+  protected readonly statusWords = PROPOSAL_STATUS_WORDS;
+
+  protected day(isoDay: string): string {
+    return formatDay(isoDay, 'en-US');
+  }
 
   constructor() {
     void this.load();

@@ -1,0 +1,3 @@
+export * from './portal-decisions';
+export * from './portal-views';
+export * from './job';

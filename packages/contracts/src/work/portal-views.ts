@@ -1,0 +1,41 @@
+import type { ProposalVersionStatus } from '../proposals/proposal';
+import type { ProposalSnapshot } from '../proposals/proposal-snapshot';
+
+/** The newest proposal version the client can read for a project (never a draft). */
+export interface PortalLatestProposal {
+  readonly id: string;
+  readonly version: number;
+  readonly status: ProposalVersionStatus;
+  readonly expiresOn: string;
+  readonly sentAt: string | null;
+}
+
+export interface PortalProject {
+  readonly estimateId: string;
+  readonly title: string;
+  readonly siteAddress: string;
+  readonly latest: PortalLatestProposal;
+  /** sample boards to approve (a later issue fills this) */
+  readonly boards: readonly never[];
+}
+
+export interface PortalProjects {
+  readonly projects: readonly PortalProject[];
+}
+
+/** A proposal version as its client reads it: the frozen snapshot plus where it stands. */
+export interface PortalProposal {
+  readonly id: string;
+  readonly version: number;
+  readonly status: ProposalVersionStatus;
+  readonly expiresOn: string;
+  /** past its expiry day in the firm's calendar */
+  readonly isExpired: boolean;
+  /** no newer version was sent for the same project */
+  readonly isLatest: boolean;
+  readonly snapshot: ProposalSnapshot;
+  readonly decidedAt: string | null;
+  readonly acceptedVariantId: string | null;
+  readonly signedName: string | null;
+  readonly clientComment: string;
+}

@@ -1,0 +1,107 @@
+import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import type { PortalProposal } from '@layerbook/contracts';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { errorText } from '../../shared/forms/error-text';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { requiredText } from '../../shared/forms/text-validators';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { ProposalApi } from './proposal-api';
+
+type Mode = 'changes' | 'decline' | null;
+
+/** The other answers: ask for changes (a comment is needed) or decline (a comment is optional). */
+@Component({
+  selector: 'lb-answer-forms',
+  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  template: `
+    <div class="lb-form-actions">
+      <button mat-stroked-button type="button" [disabled]="!isHydrated()" [attr.aria-expanded]="mode() === 'changes'" (click)="open('changes')">Ask for changes</button>
+      <button mat-button type="button" [disabled]="!isHydrated()" [attr.aria-expanded]="mode() === 'decline'" (click)="open('decline')">Decline</button>
+    </div>
+    @if (mode() === 'changes') {
+      <form [formGroup]="changes" (ngSubmit)="sendChanges()" novalidate class="panel" aria-label="Ask for changes">
+        <fieldset class="lb-gate lb-form" [disabled]="isBusy()">
+          <lb-form-alert [message]="formMessage()" />
+          <mat-form-field>
+            <mat-label>What would you like changed?</mat-label>
+            <textarea matInput formControlName="comment" rows="4" maxlength="2000" required></textarea>
+            <mat-error>{{ errorText(changes.controls.comment, words) }}</mat-error>
+          </mat-form-field>
+          <div class="lb-form-actions">
+            <button mat-flat-button type="submit">Send my request</button>
+          </div>
+        </fieldset>
+      </form>
+    }
+    @if (mode() === 'decline') {
+      <form [formGroup]="decline" (ngSubmit)="sendDecline()" novalidate class="panel" aria-label="Decline this proposal">
+        <fieldset class="lb-gate lb-form" [disabled]="isBusy()">
+          <lb-form-alert [message]="formMessage()" />
+          <mat-form-field>
+            <mat-label>Anything the firm should know? (optional)</mat-label>
+            <textarea matInput formControlName="comment" rows="3" maxlength="2000"></textarea>
+            <mat-error>{{ errorText(decline.controls.comment, words) }}</mat-error>
+          </mat-form-field>
+          <div class="lb-form-actions">
+            <button mat-flat-button type="submit">Decline the proposal</button>
+          </div>
+        </fieldset>
+      </form>
+    }
+  `,
+  styles: `
+    .panel { margin-top: 1rem; max-width: 40rem; }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class AnswerForms {
+  private readonly api = inject(ProposalApi);
+  private readonly fb = inject(NonNullableFormBuilder);
+
+  readonly proposal = input.required<PortalProposal>();
+  readonly decided = output<PortalProposal>();
+
+  protected readonly mode = signal<Mode>(null);
+  protected readonly changes = this.fb.group({ comment: ['', [requiredText, Validators.maxLength(2000)]] });
+  protected readonly decline = this.fb.group({ comment: ['', Validators.maxLength(2000)] });
+  protected readonly isBusy = signal(false);
+  protected readonly formMessage = signal<string | null>(null);
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly errorText = errorText;
+  protected readonly words = { required: 'Say what you would like changed.', maxlength: 'Use at most 2000 characters.' };
+
+  protected open(mode: Mode): void {
+    this.formMessage.set(null);
+    this.mode.set(this.mode() === mode ? null : mode);
+  }
+
+  protected sendChanges(): Promise<void> {
+    return this.send(this.changes, () => this.api.requestChanges(this.proposal().id, { comment: this.changes.getRawValue().comment.trim() }));
+  }
+
+  protected sendDecline(): Promise<void> {
+    const comment = this.decline.getRawValue().comment.trim();
+    return this.send(this.decline, () => this.api.decline(this.proposal().id, comment ? { comment } : {}));
+  }
+
+  private async send(form: typeof this.changes, call: () => Promise<PortalProposal>): Promise<void> {
+    this.formMessage.set(null);
+    if (form.invalid) {
+      form.markAllAsTouched();
+      return;
+    }
+    this.isBusy.set(true);
+    try {
+      this.decided.emit(await call());
+    } catch (error) {
+      this.formMessage.set(applyProblem(form, toProblem(error)));
+    } finally {
+      this.isBusy.set(false);
+    }
+  }
+}

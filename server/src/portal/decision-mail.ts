@@ -1,0 +1,81 @@
+import type { SnapshotOption } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import type { AppContext } from '../context';
+import type { ClientPrincipal } from '../http/principal';
+import { proposalAcceptedClientMail, proposalAcceptedMail, proposalAnsweredMail } from '../mail/acceptance-templates';
+import { enqueueMail } from '../mail/outbox';
+import type { ClientVersionRow } from './client-proposals';
+
+/** Active owners and office members: the people who act on a client's answer. */
+async function officeRecipients(tx: TenantTx): Promise<Array<{ id: string; email: string }>> {
+  const { rows } = await tx.client.query<{ id: string; email: string }>(
+    `select u.id, u.email from memberships m join users u on u.id = m.user_id
+      where m.tenant_id = $1 and m.status = 'active' and m.role in ('owner', 'office') order by u.id`,
+    [tx.tenantId],
+  );
+  return rows;
+}
+
+const money = (locale: string, currency: string, amount: string) =>
+  // Intl accepts a decimal string and formats it exactly; no float arithmetic happens here.
+  new Intl.NumberFormat(locale, { style: 'currency', currency }).format(amount as unknown as number);
+
+const signedOn = (locale: string, at: Date) => new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }).format(at) + ' UTC';
+
+export async function mailAcceptance(
+  tx: TenantTx,
+  ctx: AppContext,
+  p: { row: ClientVersionRow; option: SnapshotOption; signedName: string; signedAt: Date; client: ClientPrincipal; jobId: string },
+): Promise<void> {
+  const snap = p.row.snapshot;
+  const base = ctx.config.PUBLIC_URL;
+  const common = {
+    firmName: snap.firm.name,
+    clientName: snap.client.name || p.client.name,
+    title: snap.title,
+    version: p.row.version,
+    optionLabel: p.option.label,
+    total: money(snap.locale, snap.currency, p.option.total),
+    signedName: p.signedName,
+    signedOn: signedOn(snap.locale, p.signedAt),
+  };
+  for (const staff of await officeRecipients(tx)) {
+    await enqueueMail(tx, ctx.queue, {
+      purposeKey: `proposal-accepted:${p.row.id}:${staff.id}`,
+      tenantId: tx.tenantId,
+      to: staff.email,
+      ...proposalAcceptedMail({ ...common, url: `${base}/jobs/estimates/${p.row.estimate_id}` }),
+    });
+  }
+  await enqueueMail(tx, ctx.queue, {
+    purposeKey: `proposal-accepted-client:${p.row.id}`,
+    tenantId: tx.tenantId,
+    to: p.client.email,
+    ...proposalAcceptedClientMail({ ...common, reference: p.row.snapshot_hash.slice(0, 12), url: `${base}/portal/proposals/${p.row.id}` }),
+  });
+}
+
+export async function mailAnswer(
+  tx: TenantTx,
+  ctx: AppContext,
+  p: { row: ClientVersionRow; answer: 'declined' | 'changes_requested'; comment: string; client: ClientPrincipal },
+): Promise<void> {
+  const snap = p.row.snapshot;
+  const purpose = p.answer === 'declined' ? 'proposal-declined' : 'proposal-changes';
+  for (const staff of await officeRecipients(tx)) {
+    await enqueueMail(tx, ctx.queue, {
+      purposeKey: `${purpose}:${p.row.id}:${staff.id}`,
+      tenantId: tx.tenantId,
+      to: staff.email,
+      ...proposalAnsweredMail({
+        firmName: snap.firm.name,
+        clientName: snap.client.name || p.client.name,
+        title: snap.title,
+        version: p.row.version,
+        answer: p.answer,
+        comment: p.comment,
+        url: `${ctx.config.PUBLIC_URL}/jobs/estimates/${p.row.estimate_id}`,
+      }),
+    });
+  }
+}

@@ -1,0 +1,51 @@
+import type { SnapshotOption } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import Decimal from 'decimal.js';
+import { recordAudit } from '../audit/record';
+
+export interface AcceptedWork {
+  readonly proposalVersionId: string;
+  readonly estimateId: string;
+  readonly clientId: string;
+  readonly siteId: string;
+  readonly inquiryId: string | null;
+  readonly title: string;
+  readonly currency: string;
+  readonly option: SnapshotOption;
+  /** who signed: the client's portal account */
+  readonly actorPortalUserId: string;
+}
+
+/**
+ * The job an acceptance makes, in the acceptance's transaction: the contract sum is the chosen
+ * option's total and the draft payment schedule is the option's payments exactly as the client
+ * read them. They must add up to the total to the cent, or nothing is written.
+ */
+export async function createJobFromAcceptance(tx: TenantTx, work: AcceptedWork): Promise<string> {
+  const { option } = work;
+  const sum = option.payments.reduce((acc, p) => acc.plus(p.amount), new Decimal(0));
+  if (!sum.equals(option.total)) {
+    throw new Error(`payment schedule of option ${option.id} sums to ${sum.toFixed(2)}, not ${option.total}`);
+  }
+  const { rows } = await tx.client.query<{ id: string }>(
+    `insert into jobs (tenant_id, estimate_id, proposal_version_id, client_id, site_id, inquiry_id, title, accepted_variant_id, option_label, currency, contract_sum, start_date, finish_date)
+     values ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13) returning id`,
+    [tx.tenantId, work.estimateId, work.proposalVersionId, work.clientId, work.siteId, work.inquiryId, work.title, option.id, option.label, work.currency, option.total, option.schedule.startDate, option.schedule.finishDate],
+  );
+  const jobId = rows[0]!.id;
+  for (const [position, p] of option.payments.entries()) {
+    await tx.client.query(
+      `insert into payment_schedule_lines (tenant_id, job_id, position, label, role, trigger, percent, amount, expected_on) values ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
+      [tx.tenantId, jobId, position + 1, p.label, p.role, JSON.stringify(p.trigger), p.percent, p.amount, p.expectedOn],
+    );
+  }
+  await recordAudit(tx, {
+    actorUserId: null,
+    actorKind: 'client',
+    action: 'job.created',
+    entity: 'job',
+    entityId: jobId,
+    data: { proposalVersionId: work.proposalVersionId, optionId: option.id, contractSum: option.total, currency: work.currency, lines: option.payments.length, portalUserId: work.actorPortalUserId },
+  });
+  return jobId;
+}

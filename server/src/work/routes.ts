@@ -1,0 +1,24 @@
+import { uuid } from '@layerbook/contracts';
+import { Router } from 'express';
+import { z } from 'zod';
+import type { AppContext } from '../context';
+import { withStaff } from '../http/guards';
+import { parse } from '../http/validate';
+import { getJob, listJobs } from './jobs';
+
+const idParam = z.strictObject({ id: uuid('job id') });
+
+/** Accepted work carries the contract sum: owner and office only (crew get their job sheet elsewhere). */
+export function jobRoutes(ctx: AppContext): Router {
+  const router = Router();
+
+  router.get('/', async (req, res) => {
+    res.json({ items: await withStaff(ctx, req, 'office', (tx) => listJobs(tx)) });
+  });
+
+  router.get('/:id', async (req, res) => {
+    res.json(await withStaff(ctx, req, 'office', (tx) => getJob(tx, parse(idParam, req.params).id)));
+  });
+
+  return router;
+}
