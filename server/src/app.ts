@@ -20,6 +20,8 @@ import { takeoffRoutes } from './takeoff/routes';
 import { estimateRoutes } from './proposals/routes';
 import { proposalRoutes } from './proposals/proposal-routes';
 import { jobRoutes } from './work/routes';
+import { sampleRoutes } from './samples/routes';
+import { portalSampleRoutes } from './samples/portal-routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
 
 export interface SsrHandlers {
@@ -74,6 +76,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use(absoluteTimeout(ctx));
   router.use(csrf.csrfSynchronisedProtection);
   router.use('/auth', authRoutes(ctx, pass, limiter));
+  router.use('/portal/boards', portalSampleRoutes(ctx));
   router.use('/portal', portalRoutes(ctx, limiter));
   router.use('/firm', firmRoutes(ctx));
   router.use('/team', teamRoutes(ctx));
@@ -86,6 +89,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/estimates', estimateRoutes(ctx));
   router.use('/proposals', proposalRoutes(ctx));
   router.use('/jobs', jobRoutes(ctx));
+  router.use('/samples', sampleRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });

@@ -42,6 +42,10 @@ export const routes: Routes = [
         loadComponent: () => import('./features/cash/cash').then((m) => m.Cash),
       },
       {
+        path: 'samples',
+        loadChildren: () => import('./features/samples/samples.routes'),
+      },
+      {
         path: 'library',
         loadChildren: () => import('./features/library/library.routes'),
       },

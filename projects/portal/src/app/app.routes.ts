@@ -37,6 +37,10 @@ export const routes: Routes = [
         loadComponent: () => import('./features/projects/projects').then((m) => m.Projects),
       },
       {
+        path: 'boards',
+        loadChildren: () => import('./features/samples/samples.routes'),
+      },
+      {
         path: 'proposals/:id',
         title: 'Proposal · Layerbook client portal',
         loadComponent: () => import('./features/proposals/proposal-page').then((m) => m.ProposalPage),

@@ -15,6 +15,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Jobs & proposals', icon: 'format_paint', path: '/jobs', minRole: 'office' },
   { label: 'Billing', icon: 'receipt_long', path: '/billing', minRole: 'office' },
   { label: 'Cash', icon: 'savings', path: '/cash', minRole: 'office' },
+  { label: 'Sample boards', icon: 'palette', path: '/samples', minRole: 'crew' },
   { label: 'Finish library', icon: 'layers', path: '/library', minRole: 'crew' },
   { label: 'Team', icon: 'badge', path: '/team', minRole: 'crew' },
   { label: 'Settings', icon: 'tune', path: '/settings', minRole: 'office' },

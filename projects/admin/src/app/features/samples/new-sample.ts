@@ -1,0 +1,187 @@
+import { ChangeDetectionStrategy, Component, DestroyRef, inject, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatAutocompleteModule, MatAutocompleteSelectedEvent } from '@angular/material/autocomplete';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { Router, RouterLink } from '@angular/router';
+import type { ClientSummary, FinishSystemSummary, SiteView } from '@layerbook/contracts';
+import { catchError, debounceTime, distinctUntilChanged, filter, map, of, switchMap } from 'rxjs';
+import { applyProblem } from '../../core/errors/apply-problem';
+import { toProblem } from '../../core/errors/problem';
+import { errorText } from '../../shared/forms/error-text';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { requiredText } from '../../shared/forms/text-validators';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { SampleApi } from './sample-api';
+
+const siteWords = (s: SiteView) => [s.label, s.addressLine1, s.city].filter(Boolean).join(', ');
+
+/** A new board: whose it is (client, optional site), which finish it shows, a label and notes. */
+@Component({
+  selector: 'lb-new-sample',
+  imports: [FormAlert, MatAutocompleteModule, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule, RouterLink],
+  template: `
+    <section class="lb-page">
+      <p><a routerLink="/samples">Back to sample boards</a></p>
+      <h1>New sample board</h1>
+      <p class="lb-lead">The finish is copied onto the board as it is in your library today, so the record stays true if the library changes.</p>
+
+      <form [formGroup]="form" (ngSubmit)="save()" novalidate>
+        <fieldset class="lb-gate" [disabled]="!isHydrated()">
+          <mat-form-field>
+            <mat-label>Client</mat-label>
+            <input matInput type="search" [formControl]="clientSearch" [matAutocomplete]="clients" autocomplete="off" maxlength="100" />
+            <mat-autocomplete #clients="matAutocomplete" (optionSelected)="chooseClient($event)">
+              @for (c of clientOptions(); track c.id) {
+                <mat-option [value]="c">{{ c.name }}</mat-option>
+              }
+            </mat-autocomplete>
+            <mat-hint>Type a name, e-mail or phone, then choose</mat-hint>
+          </mat-form-field>
+          @if (form.controls.clientId.invalid && form.controls.clientId.touched) {
+            <p class="field-error" role="alert">{{ fieldError('clientId') }}</p>
+          }
+
+          <mat-form-field>
+            <mat-label>Site</mat-label>
+            <mat-select formControlName="siteId">
+              <mat-option [value]="''">No particular site</mat-option>
+              @for (s of sites(); track s.id) {
+                <mat-option [value]="s.id">{{ siteWords(s) }}</mat-option>
+              }
+            </mat-select>
+            @if (form.controls.siteId.invalid) {
+              <mat-error>{{ fieldError('siteId') }}</mat-error>
+            }
+          </mat-form-field>
+
+          <mat-form-field>
+            <mat-label>Finish system</mat-label>
+            <mat-select formControlName="finishSystemId">
+              <mat-option [value]="''">Not chosen yet</mat-option>
+              @for (f of systems(); track f.id) {
+                <mat-option [value]="f.id">{{ f.name }} ({{ f.layerCount }} layers)</mat-option>
+              }
+            </mat-select>
+            @if (form.controls.finishSystemId.invalid) {
+              <mat-error>{{ fieldError('finishSystemId') }}</mat-error>
+            }
+          </mat-form-field>
+
+          <mat-form-field>
+            <mat-label>Label</mat-label>
+            <input matInput formControlName="label" maxlength="120" />
+            <mat-hint>Written on the back of the board, like "Stair hall, board A"</mat-hint>
+            @if (form.controls.label.invalid) {
+              <mat-error>{{ fieldError('label') }}</mat-error>
+            }
+          </mat-form-field>
+
+          <mat-form-field>
+            <mat-label>Notes</mat-label>
+            <textarea matInput formControlName="notes" rows="4" maxlength="4000"></textarea>
+            <mat-hint>Product lots, tint formulas, tools — what the crew need to make it again</mat-hint>
+            @if (form.controls.notes.invalid) {
+              <mat-error>{{ fieldError('notes') }}</mat-error>
+            }
+          </mat-form-field>
+
+          <lb-form-alert [message]="message()" />
+          <div class="actions">
+            <button mat-flat-button type="submit" [disabled]="isSaving()">Make the board</button>
+            <a mat-button routerLink="/samples">Cancel</a>
+          </div>
+        </fieldset>
+      </form>
+    </section>
+  `,
+  styles: `
+    fieldset { display: grid; gap: 0.75rem; max-width: 36rem; border: 0; padding: 0; margin: 0; }
+    .actions { display: flex; gap: 0.75rem; }
+    .field-error { color: var(--mat-sys-error, #8c1d18); margin: -0.5rem 0 0; font-size: 0.875rem; }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class NewSample {
+  private readonly api = inject(SampleApi);
+  private readonly router = inject(Router);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly destroyRef = inject(DestroyRef);
+
+  protected readonly isHydrated = hydratedSignal();
+  protected readonly siteWords = siteWords;
+  protected readonly clientOptions = signal<readonly ClientSummary[]>([]);
+  protected readonly sites = signal<readonly SiteView[]>([]);
+  protected readonly systems = signal<readonly FinishSystemSummary[]>([]);
+  protected readonly message = signal<string | null>(null);
+  protected readonly isSaving = signal(false);
+
+  /** What is typed to find the client; the chosen id goes into `clientId`. */
+  protected readonly clientSearch = new FormControl<string | ClientSummary>('', { nonNullable: true });
+  protected readonly form = new FormGroup({
+    clientId: new FormControl('', { nonNullable: true, validators: [Validators.required] }),
+    siteId: new FormControl('', { nonNullable: true }),
+    finishSystemId: new FormControl('', { nonNullable: true }),
+    label: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(120)] }),
+    notes: new FormControl('', { nonNullable: true, validators: [Validators.maxLength(4000)] }),
+  });
+
+  constructor() {
+    this.clientSearch.valueChanges
+      .pipe(
+        filter((v): v is string => typeof v === 'string'),
+        map((v) => v.trim()),
+        debounceTime(250),
+        distinctUntilChanged(),
+        switchMap((q) => (q.length < 2 ? of([]) : this.api.searchClients(q).pipe(map((page) => page.items), catchError(() => of([]))))),
+        takeUntilDestroyed(this.destroyRef),
+      )
+      .subscribe((items) => this.clientOptions.set(items));
+    void this.api.finishSystems().then((list) => this.systems.set(list), () => this.systems.set([]));
+  }
+
+  protected fieldError(name: keyof typeof this.form.controls): string {
+    return errorText(this.form.controls[name], {
+      required: name === 'clientId' ? 'Choose the client from the list.' : 'Give the board a label, like "Stair hall, board A".',
+      maxlength: 'This is too long.',
+    });
+  }
+
+  protected async chooseClient(event: MatAutocompleteSelectedEvent): Promise<void> {
+    const client = event.option.value as ClientSummary;
+    this.clientSearch.setValue(client.name, { emitEvent: false });
+    this.form.patchValue({ clientId: client.id, siteId: '' });
+    try {
+      this.sites.set((await this.api.client(client.id)).sites);
+    } catch {
+      this.sites.set([]);
+    }
+  }
+
+  protected async save(): Promise<void> {
+    this.form.markAllAsTouched();
+    if (this.form.invalid) return;
+    const v = this.form.getRawValue();
+    this.isSaving.set(true);
+    this.message.set(null);
+    try {
+      const board = await this.api.create({
+        clientId: v.clientId,
+        label: v.label.trim(),
+        notes: v.notes,
+        ...(v.siteId ? { siteId: v.siteId } : {}),
+        ...(v.finishSystemId ? { finishSystemId: v.finishSystemId } : {}),
+      });
+      this.snackBar.open(`${board.label} added.`, 'Close', { duration: 4000 });
+      await this.router.navigate(['/samples', board.id]);
+    } catch (error) {
+      this.message.set(applyProblem(this.form, toProblem(error)));
+    } finally {
+      this.isSaving.set(false);
+    }
+  }
+}

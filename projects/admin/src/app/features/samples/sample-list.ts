@@ -1,0 +1,115 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, afterNextRender, inject, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { Session } from '../../core/auth/session';
+import { toProblem } from '../../core/errors/problem';
+import { FormAlert } from '../../shared/ui/form-alert';
+import type { SampleBoardListItem } from './sample-board';
+import { SampleApi } from './sample-api';
+import { STATUS_WORDS } from './status-words';
+
+/** Every sample board of the firm, newest first, with its status in words and a first photo. */
+@Component({
+  selector: 'lb-sample-list',
+  imports: [DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink],
+  template: `
+    <section class="lb-page">
+      <div class="heading">
+        <h1>Sample boards</h1>
+        @if (canWrite()) {
+          <a mat-flat-button routerLink="/samples/new">
+            <mat-icon aria-hidden="true">add</mat-icon>
+            New sample board
+          </a>
+        }
+      </div>
+      <p class="lb-lead">Boards made for clients to approve. The approved board is the control sample the crew match on site.</p>
+
+      <lb-form-alert [message]="message()" />
+      @if (isLoading()) {
+        <mat-progress-bar mode="indeterminate" aria-label="Loading sample boards" />
+      }
+
+      <div class="table-wrap">
+        <table aria-label="Sample boards">
+          <thead>
+            <tr>
+              <th scope="col"><span class="cdk-visually-hidden">Photo</span></th>
+              <th scope="col">Label</th>
+              <th scope="col">Client</th>
+              <th scope="col">Round</th>
+              <th scope="col">Status</th>
+              <th scope="col">Made</th>
+            </tr>
+          </thead>
+          <tbody>
+            @for (board of boards(); track board.id) {
+              <tr>
+                <td class="thumb">
+                  @if (board.coverThumbnailUrl) {
+                    <img [src]="board.coverThumbnailUrl" [alt]="'Photo of ' + board.label" width="64" height="48" loading="lazy" decoding="async" />
+                  } @else {
+                    <mat-icon aria-hidden="true" class="no-photo">photo_camera</mat-icon>
+                  }
+                </td>
+                <th scope="row"><a [routerLink]="['/samples', board.id]">{{ board.label }}</a></th>
+                <td>{{ board.clientName }}</td>
+                <td>{{ board.round }}</td>
+                <td>
+                  <span class="status">
+                    <mat-icon aria-hidden="true">{{ words[board.status].icon }}</mat-icon>
+                    {{ words[board.status].text }}
+                  </span>
+                </td>
+                <td>{{ board.createdAt | date: 'mediumDate' }}</td>
+              </tr>
+            } @empty {
+              @if (!isLoading()) {
+                <tr><td colspan="6" class="none">No sample boards yet.</td></tr>
+              }
+            }
+          </tbody>
+        </table>
+      </div>
+    </section>
+  `,
+  styles: `
+    .heading { display: flex; align-items: center; justify-content: space-between; gap: 1rem; flex-wrap: wrap; }
+    .table-wrap { overflow-x: auto; }
+    table { width: 100%; border-collapse: collapse; }
+    th, td { text-align: left; padding: 0.5rem; border-bottom: 1px solid var(--lb-line, #d9cfbf); vertical-align: middle; }
+    .thumb img { display: block; object-fit: cover; border-radius: 4px; }
+    .no-photo { opacity: 0.5; }
+    .status { display: inline-flex; align-items: center; gap: 0.35rem; }
+    .none { padding: 1.5rem 0.5rem; }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class SampleList {
+  private readonly api = inject(SampleApi);
+  private readonly session = inject(Session);
+
+  protected readonly words = STATUS_WORDS;
+  protected readonly boards = signal<readonly SampleBoardListItem[]>([]);
+  protected readonly isLoading = signal(true);
+  protected readonly message = signal<string | null>(null);
+  protected readonly canWrite = () => this.session.hasRole('office');
+
+  constructor() {
+    afterNextRender(() => void this.load());
+  }
+
+  private async load(): Promise<void> {
+    try {
+      this.boards.set(await this.api.list());
+    } catch (error) {
+      const problem = toProblem(error);
+      this.message.set(problem.detail ?? problem.title);
+    } finally {
+      this.isLoading.set(false);
+    }
+  }
+}

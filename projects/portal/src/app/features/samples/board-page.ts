@@ -1,0 +1,218 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
+import { AbstractControl, FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { Title } from '@angular/platform-browser';
+import { RouterLink } from '@angular/router';
+import { toProblem } from '../../core/errors/problem';
+import { BoardApi } from './board-api';
+import { BOARD_STATUS_WORDS, type ClientBoard } from './client-board';
+
+/** Spaces alone are not a request; the server trims before it checks. */
+const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' && c.value.trim() ? null : { required: true });
+
+/** One sample board: its photos and finish in plain words, then approve it or ask for changes (once). */
+@Component({
+  selector: 'lb-board-page',
+  imports: [DatePipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, ReactiveFormsModule, RouterLink],
+  template: `
+    <section class="lb-page">
+      <p><a routerLink="/boards">All your sample boards</a></p>
+      @if (board(); as b) {
+        <h1>{{ b.label }}</h1>
+        <p class="meta">
+          From {{ b.firmName }}@if (b.round > 1) {<span>, round {{ b.round }}</span>}
+        </p>
+
+        @switch (b.status) {
+          @case ('approved') {
+            <p class="decided" role="status">
+              <mat-icon aria-hidden="true">verified</mat-icon>
+              You approved this board on {{ b.decidedAt | date: 'longDate' }}. {{ b.firmName }} will match the work to it.
+            </p>
+          }
+          @case ('changes_requested') {
+            <div class="decided" role="status">
+              <p><mat-icon aria-hidden="true">edit_note</mat-icon> You asked for changes on {{ b.decidedAt | date: 'longDate' }}. {{ b.firmName }} will make a new board for you to see.</p>
+              <p class="comment">You wrote: “{{ b.clientComment }}”</p>
+            </div>
+          }
+          @default {
+            <p class="status"><mat-icon aria-hidden="true">{{ words.shown.icon }}</mat-icon> {{ words.shown.text }}</p>
+          }
+        }
+
+        <section aria-labelledby="photos-heading">
+          <h2 id="photos-heading">Photos</h2>
+          @if (b.photos.length > 0) {
+            <ul class="photos" aria-label="Photos of the board">
+              @for (p of b.photos; track p.id; let i = $index) {
+                <li>
+                  <img [src]="p.thumbnailUrl" [alt]="p.caption || 'Photo ' + (i + 1) + ' of ' + b.label" width="240" [height]="p.width && p.height ? round((240 * p.height) / p.width) : 180" loading="lazy" decoding="async" />
+                  @if (p.caption) {
+                    <span>{{ p.caption }}</span>
+                  }
+                </li>
+              }
+            </ul>
+          } @else {
+            <p>No photos yet.</p>
+          }
+        </section>
+
+        <section aria-labelledby="finish-heading">
+          <h2 id="finish-heading">The finish</h2>
+          @if (b.finishName) {
+            <p>{{ b.finishName }}, in the order it goes on:</p>
+            <ul class="steps">
+              @for (step of b.finishSteps; track $index) {
+                <li>{{ step }}</li>
+              }
+            </ul>
+          } @else {
+            <p>{{ b.firmName }} will tell you about the finish on this board.</p>
+          }
+        </section>
+
+        @if (b.status === 'shown') {
+          <section class="answer" aria-labelledby="answer-heading">
+            <h2 id="answer-heading">Your answer</h2>
+            <p role="alert" class="error">{{ message() }}</p>
+            @if (isConfirming()) {
+              <div class="confirm" role="group" aria-labelledby="confirm-text">
+                <p id="confirm-text">Approve "{{ b.label }}"? The finished work will be matched to this board. You cannot change your answer here afterwards.</p>
+                <button mat-flat-button type="button" [disabled]="isBusy()" (click)="approve(b)">Yes, approve this board</button>
+                <button mat-button type="button" [disabled]="isBusy()" (click)="isConfirming.set(false)">Not yet</button>
+              </div>
+            } @else if (!isAsking()) {
+              <div class="buttons">
+                <button mat-flat-button type="button" (click)="isConfirming.set(true)">
+                  <mat-icon aria-hidden="true">check</mat-icon>Approve this board
+                </button>
+                <button mat-stroked-button type="button" (click)="isAsking.set(true)">
+                  <mat-icon aria-hidden="true">edit_note</mat-icon>Ask for changes
+                </button>
+              </div>
+            }
+            @if (isAsking()) {
+              <form (ngSubmit)="requestChanges(b)" novalidate>
+                <mat-form-field class="wide">
+                  <mat-label>What would you like changed?</mat-label>
+                  <textarea matInput [formControl]="comment" rows="4" maxlength="2000"></textarea>
+                  <mat-hint>For example: a little darker, less shine, softer movement</mat-hint>
+                  @if (comment.invalid) {
+                    <mat-error>{{ commentError() }}</mat-error>
+                  }
+                </mat-form-field>
+                <div class="buttons">
+                  <button mat-flat-button type="submit" [disabled]="isBusy()">Send my request</button>
+                  <button mat-button type="button" [disabled]="isBusy()" (click)="isAsking.set(false)">Cancel</button>
+                </div>
+              </form>
+            }
+          </section>
+        }
+      } @else if (isLoading()) {
+        <mat-progress-bar mode="indeterminate" aria-label="Loading the sample board" />
+      } @else {
+        <p role="alert">{{ message() }}</p>
+      }
+    </section>
+  `,
+  styles: `
+    .meta { color: var(--mat-sys-on-surface-variant); margin-top: 0; }
+    .status, .decided p:first-child { display: flex; gap: 0.4rem; align-items: center; }
+    .decided { padding: 1rem 1.25rem; border-radius: 12px; border: 1px solid var(--mat-sys-outline-variant); background: var(--mat-sys-surface-container-low); }
+    .comment { white-space: pre-line; }
+    .photos { list-style: none; padding: 0; display: flex; flex-wrap: wrap; gap: 0.75rem; }
+    .photos li { display: grid; gap: 0.25rem; }
+    .photos img { border-radius: 8px; object-fit: cover; max-width: 100%; height: auto; }
+    .answer { margin: 2rem 0 0; padding: 1.25rem; border-radius: 12px; border: 1px solid var(--mat-sys-outline-variant); background: var(--mat-sys-surface-container-low); }
+    .buttons, .confirm { display: flex; flex-wrap: wrap; gap: 0.75rem; align-items: center; }
+    .confirm p { flex-basis: 100%; margin: 0; }
+    .wide { width: 100%; }
+    .error:empty { display: none; }
+    .error { color: var(--mat-sys-error); }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class BoardPage {
+  private readonly api = inject(BoardApi);
+  private readonly title = inject(Title);
+
+  /** route parameter */
+  readonly id = input.required<string>();
+
+  protected readonly words = BOARD_STATUS_WORDS;
+  protected readonly board = signal<ClientBoard | null>(null);
+  protected readonly isLoading = signal(true);
+  protected readonly isBusy = signal(false);
+  protected readonly isConfirming = signal(false);
+  protected readonly isAsking = signal(false);
+  protected readonly message = signal<string | null>(null);
+  protected readonly comment = new FormControl('', { nonNullable: true, validators: [notBlank, Validators.maxLength(2000)] });
+  protected readonly round = Math.round;
+
+  constructor() {
+    effect(() => void this.load(this.id()));
+  }
+
+  protected commentError(): string {
+    const errors = this.comment.errors ?? {};
+    if (typeof errors['server'] === 'string') return errors['server'];
+    if (errors['maxlength']) return 'Please keep it under 2000 characters.';
+    return 'Tell us what you would like changed.';
+  }
+
+  protected async approve(b: ClientBoard): Promise<void> {
+    await this.answer(() => this.api.approve(b.id));
+  }
+
+  protected async requestChanges(b: ClientBoard): Promise<void> {
+    this.comment.markAsTouched();
+    if (this.comment.invalid) return;
+    await this.answer(() => this.api.requestChanges(b.id, this.comment.value.trim()));
+  }
+
+  private async answer(call: () => Promise<ClientBoard>): Promise<void> {
+    this.isBusy.set(true);
+    this.message.set(null);
+    try {
+      this.board.set(await call());
+      this.isConfirming.set(false);
+      this.isAsking.set(false);
+    } catch (error) {
+      const problem = toProblem(error);
+      const field = problem.errors?.find((e) => e.field === 'comment');
+      if (field) {
+        this.comment.setErrors({ server: field.message });
+      } else {
+        this.message.set(problem.detail ?? problem.title);
+        // Already answered (perhaps in another tab): show the board as it now stands.
+        if (problem.status === 409) void this.load(this.id(), true);
+      }
+    } finally {
+      this.isBusy.set(false);
+    }
+  }
+
+  private async load(id: string, keepMessage = false): Promise<void> {
+    this.isLoading.set(true);
+    if (!keepMessage) this.message.set(null);
+    try {
+      const b = await this.api.get(id);
+      this.board.set(b);
+      this.title.setTitle(`${b.label} · Layerbook client portal`);
+    } catch (error) {
+      const problem = toProblem(error);
+      this.board.set(null);
+      this.message.set(problem.status === 404 ? 'This sample board is not here. It may not have been shown to you yet.' : problem.detail ?? problem.title);
+    } finally {
+      this.isLoading.set(false);
+    }
+  }
+}

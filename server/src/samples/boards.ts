@@ -1,0 +1,189 @@
+import { and, clients, desc, eq, estimates, portalUsers, sampleBoards, sites, TenantTx } from '@layerbook/db';
+import type { AppContext } from '../context';
+import { recordAudit } from '../audit/record';
+import { badRequest, conflict, notFound } from '../http/problem';
+import { listBoardPhotos } from './board-photos';
+import { mailBoardShown } from './sample-mail';
+import type { FinishSnapshot, SampleBoardInput, SampleBoardListItem, SampleBoardUpdate, SampleBoardView } from './schemas';
+import { describeFinish, snapshotFinish } from './snapshot';
+
+export interface Actor {
+  readonly userId: string;
+}
+
+export type BoardRow = typeof sampleBoards.$inferSelect;
+
+/** The board, or the same 404 whether it never existed or belongs to another firm (RLS). */
+export async function findBoard(tx: TenantTx, boardId: string): Promise<BoardRow> {
+  const row = (await tx.db.select().from(sampleBoards).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId))))[0];
+  if (!row) throw notFound('sample board');
+  return row;
+}
+
+const siteAddress = (s: { label: string; addressLine1: string; city: string }) => [s.label, s.addressLine1, s.city].filter(Boolean).join(', ');
+
+export async function listBoards(tx: TenantTx, filter: { clientId?: string; siteId?: string }): Promise<SampleBoardListItem[]> {
+  // One query with the first photo and the count per board: the list shows a thumbnail per row.
+  const { rows } = await tx.client.query<{
+    id: string; label: string; client_id: string; client_name: string; site_id: string | null; round: number; status: SampleBoardListItem['status'];
+    finish_name: string | null; photo_count: number; cover_file_id: string | null; decided_at: Date | null; created_at: Date;
+  }>(
+    `select b.id, b.label, b.client_id, c.name as client_name, b.site_id, b.round, b.status,
+            b.finish_snapshot->>'systemName' as finish_name,
+            (select count(*)::int from sample_board_photos p where p.tenant_id = b.tenant_id and p.board_id = b.id) as photo_count,
+            (select p.file_id from sample_board_photos p where p.tenant_id = b.tenant_id and p.board_id = b.id order by p.created_at, p.id limit 1) as cover_file_id,
+            b.decided_at, b.created_at
+       from sample_boards b join clients c on c.tenant_id = b.tenant_id and c.id = b.client_id
+      where b.tenant_id = $1 and ($2::uuid is null or b.client_id = $2) and ($3::uuid is null or b.site_id = $3)
+      order by b.created_at desc, b.id desc
+      limit 500`,
+    [tx.tenantId, filter.clientId ?? null, filter.siteId ?? null],
+  );
+  return rows.map((r) => ({
+    id: r.id,
+    label: r.label,
+    clientId: r.client_id,
+    clientName: r.client_name,
+    siteId: r.site_id,
+    round: r.round,
+    status: r.status,
+    finishName: r.finish_name,
+    photoCount: r.photo_count,
+    coverThumbnailUrl: r.cover_file_id ? `/api/files/${r.cover_file_id}/thumbnail` : null,
+    decidedAt: r.decided_at?.toISOString() ?? null,
+    createdAt: r.created_at.toISOString(),
+  }));
+}
+
+export async function getBoard(tx: TenantTx, boardId: string): Promise<SampleBoardView> {
+  const board = await findBoard(tx, boardId);
+  const client = (await tx.db.select({ name: clients.name }).from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, board.clientId))))[0];
+  const site = board.siteId
+    ? (await tx.db.select().from(sites).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, board.siteId))))[0]
+    : undefined;
+  const decidedBy = board.decidedBy
+    ? (await tx.db.select({ name: portalUsers.name }).from(portalUsers).where(and(eq(portalUsers.tenantId, tx.tenantId), eq(portalUsers.id, board.decidedBy))))[0]
+    : undefined;
+  const snapshot = board.finishSnapshot as FinishSnapshot | null;
+  return {
+    id: board.id,
+    label: board.label,
+    round: board.round,
+    status: board.status,
+    clientId: board.clientId,
+    clientName: client?.name ?? '',
+    siteId: board.siteId,
+    siteAddress: site ? siteAddress(site) : null,
+    estimateId: board.estimateId,
+    finishSystemId: board.finishSystemId,
+    finish: snapshot,
+    finishSteps: describeFinish(snapshot),
+    notes: board.notes,
+    clientComment: board.clientComment,
+    decidedAt: board.decidedAt?.toISOString() ?? null,
+    decidedByName: decidedBy?.name ?? null,
+    hasNextRound: (await findNextRound(tx, board)) !== undefined,
+    photos: await listBoardPhotos(tx, board.id),
+    createdAt: board.createdAt.toISOString(),
+    updatedAt: board.updatedAt.toISOString(),
+  };
+}
+
+/** The client, site and estimate must be this firm's and belong together; each refusal names its field. */
+async function checkLinks(tx: TenantTx, input: { clientId: string; siteId?: string | undefined; estimateId?: string | undefined }): Promise<void> {
+  const client = (await tx.db.select({ id: clients.id }).from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, input.clientId))))[0];
+  if (!client) throw badRequest([{ field: 'clientId', message: 'Choose one of your clients.' }]);
+  if (input.siteId) {
+    const site = (await tx.db.select({ clientId: sites.clientId }).from(sites).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, input.siteId))))[0];
+    if (!site || site.clientId !== input.clientId) throw badRequest([{ field: 'siteId', message: 'Choose a site of this client.' }]);
+  }
+  if (input.estimateId) {
+    const est = (await tx.db.select({ clientId: estimates.clientId }).from(estimates).where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, input.estimateId))))[0];
+    if (!est || est.clientId !== input.clientId) throw badRequest([{ field: 'estimateId', message: 'Choose an estimate for this client.' }]);
+  }
+}
+
+export async function createBoard(tx: TenantTx, actor: Actor, input: SampleBoardInput, now: Date): Promise<SampleBoardView> {
+  await checkLinks(tx, input);
+  const snapshot = input.finishSystemId ? await snapshotFinish(tx, input.finishSystemId, now) : null;
+  const row = (
+    await tx.db
+      .insert(sampleBoards)
+      .values({
+        tenantId: tx.tenantId,
+        clientId: input.clientId,
+        siteId: input.siteId ?? null,
+        estimateId: input.estimateId ?? null,
+        label: input.label,
+        finishSystemId: input.finishSystemId ?? null,
+        finishSnapshot: snapshot,
+        notes: input.notes,
+      })
+      .returning()
+  )[0]!;
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'samples.board_created', entity: 'sample_board', entityId: row.id, data: { label: row.label, clientId: row.clientId, finishSystemId: row.finishSystemId } });
+  return getBoard(tx, row.id);
+}
+
+export async function updateBoard(tx: TenantTx, actor: Actor, boardId: string, input: SampleBoardUpdate, now: Date): Promise<SampleBoardView> {
+  const board = await findBoard(tx, boardId);
+  if (board.status === 'approved') throw conflict('The client has approved this board; it is now the control sample and stays as it was.');
+  const changes: Partial<typeof sampleBoards.$inferInsert> = { updatedAt: now };
+  if (input.label !== undefined) changes.label = input.label;
+  if (input.notes !== undefined) changes.notes = input.notes;
+  if (input.finishSystemId !== undefined) {
+    // What the client has seen stays what they saw: the finish is chosen again only on a draft.
+    if (board.status !== 'draft') throw conflict('The client has seen this board, so its finish stays as shown. Start the next round to change it.', [{ field: 'finishSystemId', message: 'The finish of a shown board cannot change.' }]);
+    changes.finishSystemId = input.finishSystemId;
+    changes.finishSnapshot = input.finishSystemId ? await snapshotFinish(tx, input.finishSystemId, now) : null;
+  }
+  await tx.db.update(sampleBoards).set(changes).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId)));
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'samples.board_updated', entity: 'sample_board', entityId: boardId, data: { fields: Object.keys(input) } });
+  return getBoard(tx, boardId);
+}
+
+export async function showBoard(tx: TenantTx, ctx: AppContext, actor: Actor & { firmName: string }, boardId: string, now: Date): Promise<SampleBoardView> {
+  const board = await findBoard(tx, boardId);
+  if (board.status !== 'draft') throw conflict('This board has already been shown to the client.');
+  await tx.db.update(sampleBoards).set({ status: 'shown', updatedAt: now }).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId), eq(sampleBoards.status, 'draft')));
+  const recipients = await mailBoardShown(tx, ctx, { board, firmName: actor.firmName });
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'samples.board_shown', entity: 'sample_board', entityId: boardId, data: { label: board.label, round: board.round, mailedTo: recipients } });
+  return getBoard(tx, boardId);
+}
+
+/** A later round of the same board (same client and label), if one was started already. */
+async function findNextRound(tx: TenantTx, board: BoardRow): Promise<BoardRow | undefined> {
+  return (
+    await tx.db
+      .select()
+      .from(sampleBoards)
+      .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.clientId, board.clientId), eq(sampleBoards.label, board.label), eq(sampleBoards.round, board.round + 1)))
+      .orderBy(desc(sampleBoards.createdAt))
+      .limit(1)
+  )[0];
+}
+
+/** After the client asked for changes: a new draft, round N+1, carrying the finish forward to be adjusted. Photos stay with the board they show. */
+export async function startNextRound(tx: TenantTx, actor: Actor, boardId: string): Promise<SampleBoardView> {
+  const board = await findBoard(tx, boardId);
+  if (board.status !== 'changes_requested') throw conflict('Start the next round once the client has asked for changes.');
+  if (await findNextRound(tx, board)) throw conflict(`Round ${board.round + 1} of this board has already been started.`);
+  const row = (
+    await tx.db
+      .insert(sampleBoards)
+      .values({
+        tenantId: tx.tenantId,
+        clientId: board.clientId,
+        siteId: board.siteId,
+        estimateId: board.estimateId,
+        label: board.label,
+        round: board.round + 1,
+        finishSystemId: board.finishSystemId,
+        finishSnapshot: board.finishSnapshot,
+        notes: board.notes,
+      })
+      .returning()
+  )[0]!;
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'samples.round_started', entity: 'sample_board', entityId: row.id, data: { previousBoardId: board.id, round: row.round } });
+  return getBoard(tx, row.id);
+}

@@ -1,0 +1,141 @@
+import { and, asc, eq, files, inArray, portalUsers, sampleBoardPhotos, sampleBoards, TenantTx } from '@layerbook/db';
+import { recordAudit } from '../audit/record';
+import type { AppContext } from '../context';
+import type { ClientPrincipal } from '../http/principal';
+import { conflict, notFound } from '../http/problem';
+import type { BoardRow } from './boards';
+import { mailBoardDecision } from './sample-mail';
+import type { ClientBoardPhoto, ClientBoardView, FinishSnapshot } from './schemas';
+import { describeFinish } from './snapshot';
+
+/** What a client may see: boards of their own client record that the firm has shown. Drafts stay in the office. */
+const VISIBLE = ['shown', 'approved', 'changes_requested'] as const;
+
+const portalThumbnail = (photoId: string) => `/api/portal/boards/photos/${photoId}/thumbnail`;
+
+/** The client record this portal login belongs to; a login with none sees no boards. */
+async function clientRecordOf(tx: TenantTx, client: ClientPrincipal): Promise<string | null> {
+  const row = (await tx.db.select({ clientId: portalUsers.clientId }).from(portalUsers).where(and(eq(portalUsers.tenantId, tx.tenantId), eq(portalUsers.id, client.id))))[0];
+  return row?.clientId ?? null;
+}
+
+/** The board if this client may see it; otherwise the same 404 as a board that does not exist. */
+async function findClientBoard(tx: TenantTx, client: ClientPrincipal, boardId: string): Promise<BoardRow> {
+  const clientId = await clientRecordOf(tx, client);
+  const row = clientId
+    ? (
+        await tx.db
+          .select()
+          .from(sampleBoards)
+          .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId), eq(sampleBoards.clientId, clientId), inArray(sampleBoards.status, [...VISIBLE])))
+      )[0]
+    : undefined;
+  if (!row) throw notFound('sample board');
+  return row;
+}
+
+async function photosOf(tx: TenantTx, boardIds: readonly string[]): Promise<Map<string, ClientBoardPhoto[]>> {
+  const byBoard = new Map<string, ClientBoardPhoto[]>();
+  if (boardIds.length === 0) return byBoard;
+  const rows = await tx.db
+    .select({ id: sampleBoardPhotos.id, boardId: sampleBoardPhotos.boardId, caption: sampleBoardPhotos.caption, width: files.width, height: files.height })
+    .from(sampleBoardPhotos)
+    .innerJoin(files, and(eq(files.tenantId, sampleBoardPhotos.tenantId), eq(files.id, sampleBoardPhotos.fileId)))
+    .where(and(eq(sampleBoardPhotos.tenantId, tx.tenantId), inArray(sampleBoardPhotos.boardId, [...boardIds])))
+    .orderBy(asc(sampleBoardPhotos.createdAt), asc(sampleBoardPhotos.id));
+  for (const r of rows) {
+    const list = byBoard.get(r.boardId) ?? [];
+    list.push({ id: r.id, caption: r.caption, thumbnailUrl: portalThumbnail(r.id), width: r.width, height: r.height });
+    byBoard.set(r.boardId, list);
+  }
+  return byBoard;
+}
+
+const toClientView = (board: BoardRow, client: ClientPrincipal, photos: ClientBoardPhoto[]): ClientBoardView => {
+  const snapshot = board.finishSnapshot as FinishSnapshot | null;
+  return {
+    id: board.id,
+    label: board.label,
+    round: board.round,
+    status: board.status as ClientBoardView['status'],
+    firmName: client.firmName,
+    finishName: snapshot?.systemName ?? null,
+    finishSteps: describeFinish(snapshot),
+    clientComment: board.clientComment,
+    decidedAt: board.decidedAt?.toISOString() ?? null,
+    photos,
+  };
+};
+
+export async function listClientBoards(tx: TenantTx, client: ClientPrincipal): Promise<ClientBoardView[]> {
+  const clientId = await clientRecordOf(tx, client);
+  if (!clientId) return [];
+  const boards = await tx.db
+    .select()
+    .from(sampleBoards)
+    .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.clientId, clientId), inArray(sampleBoards.status, [...VISIBLE])))
+    .orderBy(asc(sampleBoards.label), asc(sampleBoards.round), asc(sampleBoards.createdAt));
+  const photos = await photosOf(tx, boards.map((b) => b.id));
+  return boards.map((b) => toClientView(b, client, photos.get(b.id) ?? []));
+}
+
+export async function getClientBoard(tx: TenantTx, client: ClientPrincipal, boardId: string): Promise<ClientBoardView> {
+  const board = await findClientBoard(tx, client, boardId);
+  return toClientView(board, client, (await photosOf(tx, [board.id])).get(board.id) ?? []);
+}
+
+/** The stored thumbnail key of a photo on a board this client may see. */
+export async function clientPhotoThumbnailKey(tx: TenantTx, client: ClientPrincipal, photoId: string): Promise<string> {
+  const row = (
+    await tx.db
+      .select({ boardId: sampleBoardPhotos.boardId, thumbnailKey: files.thumbnailKey })
+      .from(sampleBoardPhotos)
+      .innerJoin(files, and(eq(files.tenantId, sampleBoardPhotos.tenantId), eq(files.id, sampleBoardPhotos.fileId)))
+      .where(and(eq(sampleBoardPhotos.tenantId, tx.tenantId), eq(sampleBoardPhotos.id, photoId)))
+  )[0];
+  if (!row?.thumbnailKey) throw notFound('photo');
+  await findClientBoard(tx, client, row.boardId).catch(() => {
+    throw notFound('photo');
+  });
+  return row.thumbnailKey;
+}
+
+const alreadyDecided = (board: BoardRow) =>
+  conflict(
+    board.status === 'approved'
+      ? 'You have already approved this board. Thank you — nothing more to do here.'
+      : 'You have already asked for changes to this board. The firm will show you the next round.',
+  );
+
+/** The client's answer, once: the update only applies while the board is still waiting, so two clicks cannot both count. */
+export async function decideBoard(
+  tx: TenantTx,
+  ctx: AppContext,
+  client: ClientPrincipal,
+  boardId: string,
+  decision: 'approved' | 'changes_requested',
+  readComment: () => string,
+): Promise<ClientBoardView> {
+  const board = await findClientBoard(tx, client, boardId);
+  if (board.status !== 'shown') throw alreadyDecided(board);
+  const comment = readComment();
+  const now = ctx.now();
+  const updated = (
+    await tx.db
+      .update(sampleBoards)
+      .set({ status: decision, clientComment: comment, decidedAt: now, decidedBy: client.id, updatedAt: now })
+      .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId), eq(sampleBoards.status, 'shown')))
+      .returning()
+  )[0];
+  if (!updated) throw alreadyDecided((await findClientBoard(tx, client, boardId)));
+  await recordAudit(tx, {
+    actorUserId: client.id,
+    actorKind: 'client',
+    action: decision === 'approved' ? 'samples.board_approved' : 'samples.changes_requested',
+    entity: 'sample_board',
+    entityId: boardId,
+    data: { label: board.label, round: board.round, clientName: client.name, ...(comment ? { comment } : {}) },
+  });
+  await mailBoardDecision(tx, ctx, { board: updated, clientName: client.name, decision, comment });
+  return toClientView(updated, client, (await photosOf(tx, [boardId])).get(boardId) ?? []);
+}

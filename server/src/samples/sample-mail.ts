@@ -1,0 +1,77 @@
+import { TenantTx } from '@layerbook/db';
+import type { AppContext } from '../context';
+import { enqueueMail } from '../mail/outbox';
+import { render, RenderedMail } from '../mail/templates';
+import type { BoardRow } from './boards';
+
+export function boardShownMail(p: { firmName: string; name: string; label: string; round: number; url: string }): RenderedMail {
+  return render(
+    `${p.firmName} has a sample board for you to look at`,
+    `A sample board from ${p.firmName}`,
+    [
+      `Hello ${p.name},`,
+      `${p.firmName} has made a sample board of your finish: "${p.label}"${p.round > 1 ? ` (round ${p.round})` : ''}. You can see its photos and the finish it shows, then approve it or ask for changes.`,
+    ],
+    { label: 'See the sample board', url: p.url },
+    'Sign in with your e-mail address if the portal asks; we send you a one-time link.',
+  );
+}
+
+export function boardDecisionMail(p: { clientName: string; label: string; round: number; decision: 'approved' | 'changes_requested'; comment: string; url: string }): RenderedMail {
+  const board = `"${p.label}" (round ${p.round})`;
+  return p.decision === 'approved'
+    ? render(
+        `${p.clientName} approved the sample board ${board}`,
+        'Sample board approved',
+        [`${p.clientName} approved the sample board ${board}. It is now the control sample for the work.`],
+        { label: 'Open the sample board', url: p.url },
+        'Sent by Layerbook to the owners and office of your firm.',
+      )
+    : render(
+        `${p.clientName} asked for changes to the sample board ${board}`,
+        'Changes asked for on a sample board',
+        [`${p.clientName} asked for changes to the sample board ${board}:`, p.comment, 'Start the next round from the board when you are ready.'],
+        { label: 'Open the sample board', url: p.url },
+        'Sent by Layerbook to the owners and office of your firm.',
+      );
+}
+
+/** Mails each active portal login of the board's client; returns how many were queued. */
+export async function mailBoardShown(tx: TenantTx, ctx: AppContext, p: { board: BoardRow; firmName: string }): Promise<number> {
+  const { rows } = await tx.client.query<{ id: string; email: string; name: string }>(
+    `select id, email, name from portal_users where tenant_id = $1 and client_id = $2 and status = 'active' order by id`,
+    [tx.tenantId, p.board.clientId],
+  );
+  for (const user of rows) {
+    await enqueueMail(tx, ctx.queue, {
+      // One e-mail per board and person, even if the request is retried.
+      purposeKey: `sample-shown:${p.board.id}:${user.id}`,
+      tenantId: tx.tenantId,
+      to: user.email,
+      ...boardShownMail({ firmName: p.firmName, name: user.name, label: p.board.label, round: p.board.round, url: `${ctx.config.PUBLIC_URL}/portal/boards/${p.board.id}` }),
+    });
+  }
+  return rows.length;
+}
+
+/** Mails the active owners and office members, who act on the client's answer. */
+export async function mailBoardDecision(
+  tx: TenantTx,
+  ctx: AppContext,
+  p: { board: BoardRow; clientName: string; decision: 'approved' | 'changes_requested'; comment: string },
+): Promise<void> {
+  const { rows } = await tx.client.query<{ id: string; email: string }>(
+    `select u.id, u.email from memberships m join users u on u.id = m.user_id
+      where m.tenant_id = $1 and m.status = 'active' and m.role in ('owner', 'office') order by u.id`,
+    [tx.tenantId],
+  );
+  const purpose = p.decision === 'approved' ? 'sample-approved' : 'sample-changes';
+  for (const staff of rows) {
+    await enqueueMail(tx, ctx.queue, {
+      purposeKey: `${purpose}:${p.board.id}:${staff.id}`,
+      tenantId: tx.tenantId,
+      to: staff.email,
+      ...boardDecisionMail({ clientName: p.clientName, label: p.board.label, round: p.board.round, decision: p.decision, comment: p.comment, url: `${ctx.config.PUBLIC_URL}/samples/${p.board.id}` }),
+    });
+  }
+}
