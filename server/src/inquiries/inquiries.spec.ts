@@ -226,15 +226,16 @@ describe('follow-up reminders', () => {
     const o = await firmWithSlug('Reminder Plaster');
     await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'Overdue Olga', source: 'phone', nextFollowUp: '2020-05-01' });
     await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'Later Lars', source: 'phone', nextFollowUp: '2999-01-01' });
-    await t.queue.boss.send('follow-up-sweep', { force: true });
+    // Only this test's firms: the test database holds every other spec's firms too.
+    await t.queue.boss.send('follow-up-sweep', { force: true, tenantIds: [o.firmId] });
     const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(o.email) && /Follow-ups/.test(m.subject ?? ''));
     expect(mail.text).toContain('Overdue Olga');
     expect(mail.text).not.toContain('Later Lars');
     expect(linkIn(mail)).toContain('/today');
-    await t.queue.boss.send('follow-up-sweep', { force: true });
+    await t.queue.boss.send('follow-up-sweep', { force: true, tenantIds: [o.firmId] });
     const marker = await firmWithSlug('Marker Plaster');
     await marker.agent.post('/api/inquiries').set('x-csrf-token', marker.csrf()).send({ contactName: 'M', source: 'phone', nextFollowUp: '2020-05-01' });
-    await t.queue.boss.send('follow-up-sweep', { force: true });
+    await t.queue.boss.send('follow-up-sweep', { force: true, tenantIds: [o.firmId, marker.firmId] });
     await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(marker.email) && /Follow-ups/.test(m.subject ?? ''));
     expect(t.inbox.messages.filter((m) => JSON.stringify(m.to).includes(o.email) && /Follow-ups/.test(m.subject ?? ''))).toHaveLength(1);
   });

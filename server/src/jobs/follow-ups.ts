@@ -15,7 +15,9 @@ import { FOLLOW_UP_LOCAL_HOUR, FollowUpDigestJob, FollowUpSweepJob, QUEUES } fro
 export async function sweepFollowUps(pool: Pool, queue: StartedQueue, job: FollowUpSweepJob, now: Date): Promise<number> {
   const { rows } = await pool.query<{ id: string; time_zone: string }>(`select id, time_zone from firms`);
   let queued = 0;
+  const only = job.tenantIds ? new Set(job.tenantIds) : null;
   for (const firm of rows) {
+    if (only && !only.has(firm.id)) continue;
     if (!job.force && localHour(firm.time_zone, now) !== FOLLOW_UP_LOCAL_HOUR) continue;
     const data: FollowUpDigestJob = { tenantId: firm.id, localDate: localDate(firm.time_zone, now) };
     const id = await queue.boss.send(QUEUES.followUpDigest, data, { singletonKey: `${data.tenantId}:${data.localDate}` });

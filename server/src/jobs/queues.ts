@@ -36,6 +36,8 @@ export interface MailSendJob {
 export interface FollowUpSweepJob {
   /** Run for every firm now, whatever its local hour (tests and the ops command). */
   readonly force?: boolean;
+  /** Only these firms (an operator's targeted rerun, and tests that share a database). */
+  readonly tenantIds?: readonly string[];
 }
 
 export interface FollowUpDigestJob {
