@@ -9,13 +9,16 @@ export interface ScheduleFacts {
 }
 
 /**
- * The payment lines of one option: deposit on acceptance, a progress payment when the base layers
- * are done (the first layer finished on every surface, when it is not also the last), the rest on
- * completion. Amounts come from the domain and add up to `total` exactly. A deposit over the cap
+ * The payment lines of one option: deposit on acceptance, a progress payment when about half the
+ * layers are on (the middle layer finished on every surface, never the last), the rest on
+ * completion. Tying progress to the middle of the stack rather than the first coat keeps payments
+ * from running ahead of the work done (DOMAIN.md §1.4; California B&P §7159 forbids it for home
+ * improvement). Amounts come from the domain and add up to `total` exactly. A deposit over the cap
  * becomes the cap, and the rest moves to the final payment.
  */
 export function optionPayments(total: string, currency: string, digits: number, terms: ProposalTerms, facts: ScheduleFacts, capRule: DepositCapRule) {
-  const base = facts.layerMilestones.length > 1 ? facts.layerMilestones[0]! : null;
+  const n = facts.layerMilestones.length;
+  const base = n > 1 ? facts.layerMilestones[Math.floor((n - 1) / 2)]! : null;
   const share = (p: number) => new Decimal(p).div(100);
   const lines: Array<PaymentLineInput & { percent: number | null; expectedOn: string | null }> = [];
   if (terms.depositPercent > 0) {
