@@ -3,6 +3,7 @@ import { Pool } from 'pg';
 import type { Logger } from 'pino';
 import type { Config } from '../config';
 import { sendOutboxMail } from '../mail/send-mail-job';
+import { sendProposalReminders } from '../proposals/expiry-reminders';
 import { sendFollowUpDigest, sweepFollowUps } from './follow-ups';
 import type { StartedQueue } from './job-queue';
 import { FOLLOW_UP_SWEEP_CRON, FollowUpDigestJob, FollowUpSweepJob, MailSendJob, QUEUES } from './queues';
@@ -30,7 +31,11 @@ export async function startWorkers(config: Config, queue: StartedQueue, logger: 
   const { boss } = queue;
   await workEach<MailSendJob>(boss, QUEUES.mailSend, 4, (data) => sendOutboxMail(pool, transport, config.MAIL_FROM, data, logger));
   await workEach<FollowUpSweepJob>(boss, QUEUES.followUpSweep, 1, (data) => sweepFollowUps(pool, queue, data ?? {}, now()));
-  await workEach<FollowUpDigestJob>(boss, QUEUES.followUpDigest, 2, (data) => sendFollowUpDigest(pool, queue, config, data, logger));
+  // Each firm's morning job: the follow-up digest for the staff, then reminders of proposals about to lapse.
+  await workEach<FollowUpDigestJob>(boss, QUEUES.followUpDigest, 2, async (data) => {
+    await sendFollowUpDigest(pool, queue, config, data, logger);
+    await sendProposalReminders(pool, queue, config, data, logger);
+  });
   // Declared once; pg-boss keeps one schedule per queue however many processes call this.
   await boss.schedule(QUEUES.followUpSweep, FOLLOW_UP_SWEEP_CRON, {}, { tz: 'UTC' });
   return {

@@ -1,0 +1,65 @@
+import { withTenant } from '@layerbook/db';
+import type { Pool } from 'pg';
+import type { Logger } from 'pino';
+import { createPortalLink } from '../auth/portal-auth';
+import type { Config } from '../config';
+import type { JobQueue } from '../jobs/job-queue';
+import { enqueueMail } from '../mail/outbox';
+import { render } from '../mail/templates';
+
+/** Reminders go out this many days before a sent proposal's last day (common practice, no source). */
+export const REMINDER_DAYS_BEFORE = 3;
+const LINK_MINUTES = 3 * 24 * 60;
+
+interface OpenVersion {
+  id: string;
+  version: number;
+  title: string;
+  expires_on: string;
+  firm_name: string;
+  portal_user_id: string;
+  name: string;
+  email: string;
+}
+
+/**
+ * Reminds each client whose sent, undecided proposal ends within REMINDER_DAYS_BEFORE days of
+ * the firm's local date. Runs with the firm's morning jobs; the purpose key sends once per version.
+ */
+export async function sendProposalReminders(pool: Pool, queue: JobQueue, config: Config, job: { tenantId: string; localDate: string }, logger: Logger): Promise<number> {
+  return withTenant(pool, job.tenantId, async (tx) => {
+    const { rows } = await tx.client.query<OpenVersion>(
+      `select v.id, v.version, e.title, v.expires_on::text as expires_on, f.name as firm_name, p.id as portal_user_id, p.name, p.email
+         from proposal_versions v
+         join estimates e on e.id = v.estimate_id and e.tenant_id = v.tenant_id
+         join firms f on f.id = v.tenant_id
+         join portal_users p on p.tenant_id = v.tenant_id and p.client_id = e.client_id and p.status = 'active'
+        where v.tenant_id = $1 and v.status = 'sent'
+          and v.expires_on >= $2::date and v.expires_on <= $2::date + $3::int`,
+      [tx.tenantId, job.localDate, REMINDER_DAYS_BEFORE],
+    );
+    let queued = 0;
+    for (const v of rows) {
+      const purposeKey = `proposal-expiring:${v.id}:${v.portal_user_id}`;
+      const { rows: sent } = await tx.client.query(`select 1 from mail_outbox where purpose_key = $1`, [purposeKey]);
+      if (sent.length) continue;
+      const link = await createPortalLink(tx, v.portal_user_id, new Date(), LINK_MINUTES);
+      const url = `${config.PUBLIC_URL}/portal/sign-in/link?token=${link.token}&next=${encodeURIComponent(`/portal/proposals/${v.id}`)}`;
+      await enqueueMail(tx, queue, {
+        purposeKey,
+        tenantId: tx.tenantId,
+        to: v.email,
+        ...render(
+          `Reminder: your proposal from ${v.firm_name} is open until ${v.expires_on}`,
+          `Your proposal is open until ${v.expires_on}`,
+          [`Hello ${v.name},`, `${v.firm_name}'s proposal "${v.title}" (version ${v.version}) stands until ${v.expires_on}. You can read it, accept an option, or ask for changes in your portal.`],
+          { label: 'Read the proposal', url },
+          'The link signs you in once and works for three days.',
+        ),
+      });
+      queued++;
+    }
+    if (queued) logger.info({ tenantId: job.tenantId, queued }, 'proposal reminders queued');
+    return queued;
+  });
+}
