@@ -16,6 +16,7 @@ import { ProjectsApi } from './projects-api';
     <h1>Your projects</h1>
     @if (client(); as me) {
       <p class="lb-lead">Proposals, sample boards, invoices and receipts from {{ me.firmName }}.</p>
+      <p><a routerLink="/boards">See your sample boards</a></p>
     }
     @if (isLoading()) {
       <mat-progress-bar mode="indeterminate" aria-label="Loading your projects" />
