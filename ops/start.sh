@@ -19,7 +19,8 @@ export NODE_ENV="${NODE_ENV:-development}" ROOT_DIR="$LB_ROOT"
 
 # Mail catcher with a web inbox; started by PID, stopped by PID.
 if ! { [ -f "$LB_DATA/run/maildev.pid" ] && kill -0 "$(cat "$LB_DATA/run/maildev.pid")" 2>/dev/null; }; then
-  nohup npx maildev --smtp "$SMTP_PORT" --web "$MAIL_WEB_PORT" --ip 127.0.0.1 --mail-directory "$LB_DATA/mail" >"$LB_DATA/run/maildev.log" 2>&1 &
+  # Run the binary itself (not through npx) so the recorded PID is the server, and npm stop can stop it.
+  nohup "$LB_ROOT/node_modules/.bin/maildev" --smtp "$SMTP_PORT" --web "$MAIL_WEB_PORT" --ip 127.0.0.1 --mail-directory "$LB_DATA/mail" >"$LB_DATA/run/maildev.log" 2>&1 &
   echo $! > "$LB_DATA/run/maildev.pid"
 fi
 
