@@ -1,4 +1,4 @@
-import { and, clients, desc, eq, estimates, portalUsers, sampleBoards, sites, TenantTx } from '@layerbook/db';
+import { and, clients, eq, estimates, portalUsers, sampleBoards, sites, TenantTx } from '@layerbook/db';
 import type { AppContext } from '../context';
 import { recordAudit } from '../audit/record';
 import { badRequest, conflict, notFound } from '../http/problem';
@@ -151,14 +151,13 @@ export async function showBoard(tx: TenantTx, ctx: AppContext, actor: Actor & { 
   return getBoard(tx, boardId);
 }
 
-/** A later round of the same board (same client and label), if one was started already. */
+/** The round that follows this board, if one was started (a unique index allows only one). */
 async function findNextRound(tx: TenantTx, board: BoardRow): Promise<BoardRow | undefined> {
   return (
     await tx.db
       .select()
       .from(sampleBoards)
-      .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.clientId, board.clientId), eq(sampleBoards.label, board.label), eq(sampleBoards.round, board.round + 1)))
-      .orderBy(desc(sampleBoards.createdAt))
+      .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.previousBoardId, board.id)))
       .limit(1)
   )[0];
 }
@@ -178,6 +177,7 @@ export async function startNextRound(tx: TenantTx, actor: Actor, boardId: string
         estimateId: board.estimateId,
         label: board.label,
         round: board.round + 1,
+        previousBoardId: board.id,
         finishSystemId: board.finishSystemId,
         finishSnapshot: board.finishSnapshot,
         notes: board.notes,

@@ -1,4 +1,4 @@
-import { index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { createdAt, id, tenantId, tenantPolicy, updatedAt } from './columns';
 import { clients, portalUsers, sites } from './clients';
 import { files } from './files';
@@ -20,6 +20,8 @@ export const sampleBoards = pgTable(
     estimateId: uuid('estimate_id').references(() => estimates.id),
     label: text('label').notNull(),
     round: integer('round').notNull().default(1),
+    /** the board this round follows (after the client asked for changes); one next round per board */
+    previousBoardId: uuid('previous_board_id'),
     finishSystemId: uuid('finish_system_id').references(() => finishSystems.id),
     finishSnapshot: jsonb('finish_snapshot'),
     notes: text('notes').notNull().default(''),
@@ -30,7 +32,11 @@ export const sampleBoards = pgTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index('sample_boards_client_idx').on(t.tenantId, t.clientId, t.createdAt), tenantPolicy('sample_boards')],
+  (t) => [
+    index('sample_boards_client_idx').on(t.tenantId, t.clientId, t.createdAt),
+    uniqueIndex('sample_boards_previous_key').on(t.tenantId, t.previousBoardId),
+    tenantPolicy('sample_boards'),
+  ],
 );
 
 export const sampleBoardPhotos = pgTable(

@@ -1,0 +1,2 @@
+ALTER TABLE "sample_boards" ADD COLUMN "previous_board_id" uuid;--> statement-breakpoint
+CREATE UNIQUE INDEX "sample_boards_previous_key" ON "sample_boards" USING btree ("tenant_id","previous_board_id");
