@@ -33,8 +33,10 @@ export async function listJobs(tx: TenantTx): Promise<JobSummary[]> {
 
 export async function getJob(tx: TenantTx, id: string): Promise<JobDetail> {
   const { rows } = await tx.client.query<Row>(
-    `select ${SUMMARY}, j.estimate_id, j.proposal_version_id, j.site_id, j.inquiry_id, j.accepted_variant_id
+    `select ${SUMMARY}, j.estimate_id, j.proposal_version_id, j.site_id, j.inquiry_id, j.accepted_variant_id,
+            concat_ws(', ', nullif(s.address_line1, ''), nullif(s.city, '')) as site_address
        from jobs j join clients c on c.tenant_id = j.tenant_id and c.id = j.client_id
+       join sites s on s.tenant_id = j.tenant_id and s.id = j.site_id
       where j.tenant_id = $1 and j.id = $2`,
     [tx.tenantId, id],
   );
@@ -50,6 +52,7 @@ export async function getJob(tx: TenantTx, id: string): Promise<JobDetail> {
     estimateId: r['estimate_id'] as string,
     proposalVersionId: r['proposal_version_id'] as string,
     siteId: r['site_id'] as string,
+    siteAddress: (r['site_address'] as string | null) ?? '',
     inquiryId: (r['inquiry_id'] as string | null) ?? null,
     acceptedVariantId: r['accepted_variant_id'] as string,
     paymentSchedule: lines.rows.map(

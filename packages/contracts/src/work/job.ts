@@ -34,6 +34,8 @@ export interface JobDetail extends JobSummary {
   readonly estimateId: string;
   readonly proposalVersionId: string;
   readonly siteId: string;
+  /** street, town — where the crew goes */
+  readonly siteAddress: string;
   readonly inquiryId: string | null;
   readonly acceptedVariantId: string;
   readonly paymentSchedule: readonly PaymentScheduleLineView[];
