@@ -90,8 +90,9 @@ describe('sign-up, sign-in and sign-out', () => {
 });
 
 describe('password reset by e-mailed link', () => {
-  it('sends a single-use link that sets a new password', async () => {
-    const { email } = await signUpFirm(t.app);
+  it('sends a single-use link that sets a new password, and signs out every other session', async () => {
+    const { email, agent: elsewhere } = await signUpFirm(t.app);
+    expect((await elsewhere.get('/api/auth/session')).body.user?.email).toBe(email);
     const { agent, csrf } = await newAgent(t.app);
     expect((await agent.post('/api/auth/password-reset').set('x-csrf-token', csrf()).send({ email })).status).toBe(202);
     const mail = await t.inbox.waitFor((m) => m.to !== undefined && JSON.stringify(m.to).includes(email) && /reset/i.test(m.subject ?? ''));
@@ -102,6 +103,8 @@ describe('password reset by e-mailed link', () => {
     expect(done.body.user.email).toBe(email);
     const again = await agent.post('/api/auth/password-reset/complete').set('x-csrf-token', done.body.csrfToken).send({ token, password: 'a-brand-new-pass-43' });
     expect(again.status).toBe(410);
+    expect((await elsewhere.get('/api/auth/session')).body.user).toBeNull();
+    expect((await elsewhere.get('/api/team')).status).toBe(401);
   });
 
   it('answers the same for an unknown e-mail', async () => {

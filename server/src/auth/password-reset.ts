@@ -45,6 +45,8 @@ export async function completePasswordReset(ctx: AppContext, token: string, pass
     if (reset.expiresAt <= ctx.now()) throw gone('This reset link has expired. Ask for a new one.');
     await tx.db.update(passwordResets).set({ usedAt: ctx.now() }).where(and(eq(passwordResets.id, reset.id), isNull(passwordResets.usedAt)));
     await tx.db.update(users).set({ passwordHash, failedSignIns: 0, lockedUntil: null }).where(eq(users.id, reset.userId));
+    // Whoever held a session (perhaps the reason for the reset) is signed out everywhere.
+    await tx.client.query(`delete from session where sess->'passport'->'user'->>'kind' = 'staff' and sess->'passport'->'user'->>'id' = $1`, [reset.userId]);
     return reset.userId;
   });
   return firstActivePrincipal(ctx, userId);

@@ -64,16 +64,30 @@ export async function signIn(ctx: AppContext, input: SignInRequest): Promise<Sta
     throw new HttpError(423, 'Account locked for now', `Too many failed attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`);
   }
   if (!(await verifyPassword(user.passwordHash, input.password))) {
-    const failures = user.failedSignIns + 1;
-    // Back-off doubles from 1 minute after the fifth failure, capped at an hour.
-    const lockedUntil = failures >= LOCK_AFTER ? new Date(now.getTime() + Math.min(2 ** (failures - LOCK_AFTER), 60) * 60_000) : null;
-    await withGlobal(ctx.pool, (tx) => tx.db.update(users).set({ failedSignIns: failures, lockedUntil }).where(eq(users.id, user.id)));
+    await countFailure(ctx, user.id, now);
     throw WRONG();
   }
   if (user.failedSignIns || user.lockedUntil) {
     await withGlobal(ctx.pool, (tx) => tx.db.update(users).set({ failedSignIns: 0, lockedUntil: null }).where(eq(users.id, user.id)));
   }
   return firstActivePrincipal(ctx, user.id);
+}
+
+/**
+ * Counts a failed attempt in one statement, so parallel guesses each count. Back-off doubles from
+ * one minute after the fifth failure, capped at an hour.
+ */
+async function countFailure(ctx: AppContext, userId: string, now: Date): Promise<void> {
+  await withGlobal(ctx.pool, (tx) =>
+    tx.client.query(
+      `update users set failed_sign_ins = failed_sign_ins + 1,
+              locked_until = case when failed_sign_ins + 1 >= $2
+                                  then $3::timestamptz + make_interval(mins => least(power(2, failed_sign_ins + 1 - $2)::int, 60))
+                                  else locked_until end
+        where id = $1`,
+      [userId, LOCK_AFTER, now.toISOString()],
+    ),
+  );
 }
 
 /** A person may belong to several firms; they enter the one they joined first. */

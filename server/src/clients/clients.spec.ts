@@ -1,3 +1,4 @@
+import { withTenant } from '@layerbook/db';
 import { linkIn } from '../testing/inbox';
 import { newAgent, signUpFirm, startTestServer, TestServer, uniqueEmail } from '../testing/harness';
 
@@ -8,6 +9,25 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 describe('clients, contacts and sites', () => {
+  it('moves portal access with the client’s e-mail: the old address stops getting sign-in links', async () => {
+    const o = await signUpFirm(t.app, 'Portal Move Plaster');
+    const oldEmail = uniqueEmail('old');
+    const made = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: 'Moved Client', email: oldEmail });
+    await withTenant(t.ctx.pool, o.firmId, (tx) =>
+      tx.client.query(`insert into portal_users (tenant_id, client_id, email, name) values ($1, $2, $3, 'Moved Client')`, [tx.tenantId, made.body.id, oldEmail]),
+    );
+    const newEmail = uniqueEmail('new');
+    expect((await o.agent.patch(`/api/clients/${made.body.id}`).set('x-csrf-token', o.csrf()).send({ email: newEmail })).status).toBe(200);
+    const { rows } = await withTenant(t.ctx.pool, o.firmId, (tx) => tx.client.query(`select status from portal_users where email = $1`, [oldEmail]));
+    expect(rows[0].status).toBe('disabled');
+    const c = await newAgent(t.app, 'portal');
+    await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email: oldEmail });
+    const marker = uniqueEmail('marker');
+    await o.agent.post('/api/team/invitations').set('x-csrf-token', o.csrf()).send({ email: marker, role: 'crew' });
+    await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(marker));
+    expect(t.inbox.messages.filter((m) => JSON.stringify(m.to).includes(oldEmail))).toHaveLength(0);
+  });
+
   it('creates a designer client with a contact and a site, and lists with search and pages', async () => {
     const o = await signUpFirm(t.app, 'Client Plaster');
     const made = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'designer', isCompany: true, name: 'Quillfeather Interiors', email: 'studio@quillfeather.example' });

@@ -42,6 +42,18 @@ export async function createClient(tx: TenantTx, actorUserId: string, input: Cli
 export async function updateClient(tx: TenantTx, id: string, patch: Partial<ClientCreate>): Promise<ClientSummary> {
   const [row] = await tx.db.update(clients).set({ ...patch, updatedAt: new Date() }).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id))).returning();
   if (!row) throw notFound('client');
+  if (patch.email !== undefined) {
+    // Portal access follows the client's address: an old or mistyped address stops seeing their
+    // proposals and boards (and stops getting sign-in links) the moment the office corrects it.
+    await tx.client.query(
+      `update portal_users set status = 'disabled' where tenant_id = $1 and client_id = $2 and email <> $3 and status = 'active'`,
+      [tx.tenantId, id, row.email],
+    );
+    await tx.client.query(
+      `update portal_users set status = 'active' where tenant_id = $1 and client_id = $2 and email = $3 and status = 'disabled'`,
+      [tx.tenantId, id, row.email],
+    );
+  }
   return toSummary(row);
 }
 

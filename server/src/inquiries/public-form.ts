@@ -9,7 +9,8 @@ import { createInquiry } from './service';
 
 /** By default a form must be open this long before it is sent: bots fill forms in milliseconds. */
 export const MIN_FILL_MS = 3000;
-const MAX_FILL_MS = 24 * 60 * 60 * 1000;
+// A stamp is good for two hours: long enough to write an inquiry, short enough to limit replays.
+const MAX_FILL_MS = 2 * 60 * 60 * 1000;
 
 /** The page stamps when the form was shown, signed so a bot cannot forge an old time. */
 export function formStamp(secret: string, now: Date): string {

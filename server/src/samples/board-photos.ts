@@ -34,7 +34,9 @@ export async function listBoardPhotos(tx: TenantTx, boardId: string): Promise<Bo
 
 /** Writes the file row and links it to the board in one transaction; the bytes are already stored. */
 export async function addBoardPhoto(tx: TenantTx, actor: Actor, boardId: string, caption: string, stored: StoredImage): Promise<BoardPhotoView> {
-  const board = await findBoard(tx, boardId);
+  // Locked, so a client's approval cannot slip in between this check and the insert.
+  const board = await findBoard(tx, boardId, true);
+  if (board.status === 'approved') throw conflict('The client approved this board with its photos; start a new board or round to show different ones.');
   const file = await insertImageRow(tx, stored, BOARD_PHOTO_PURPOSE, actor.userId);
   const photo = (await tx.db.insert(sampleBoardPhotos).values({ tenantId: tx.tenantId, boardId, fileId: file.id, caption }).returning())[0]!;
   await recordAudit(tx, {
@@ -58,7 +60,7 @@ export async function deleteBoardPhoto(tx: TenantTx, actor: Actor, photoId: stri
       .where(and(eq(sampleBoardPhotos.tenantId, tx.tenantId), eq(sampleBoardPhotos.id, photoId)))
   )[0];
   if (!row) throw notFound('photo');
-  const board = await findBoard(tx, row.photo.boardId);
+  const board = await findBoard(tx, row.photo.boardId, true);
   // The approved board is the control sample: the photos the client approved stay on record.
   if (board.status === 'approved') throw conflict('The client approved this board with these photos, so they stay on record.');
   await tx.db.delete(sampleBoardPhotos).where(and(eq(sampleBoardPhotos.tenantId, tx.tenantId), eq(sampleBoardPhotos.id, photoId)));

@@ -14,8 +14,9 @@ export interface Actor {
 export type BoardRow = typeof sampleBoards.$inferSelect;
 
 /** The board, or the same 404 whether it never existed or belongs to another firm (RLS). */
-export async function findBoard(tx: TenantTx, boardId: string): Promise<BoardRow> {
-  const row = (await tx.db.select().from(sampleBoards).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId))))[0];
+export async function findBoard(tx: TenantTx, boardId: string, lock = false): Promise<BoardRow> {
+  const query = tx.db.select().from(sampleBoards).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId)));
+  const row = (lock ? await query.for('update') : await query)[0];
   if (!row) throw notFound('sample board');
   return row;
 }
