@@ -5,6 +5,7 @@ import type { StaffPrincipal } from '../http/principal';
 import { conflict, gone, notFound } from '../http/problem';
 import { recordAudit } from '../audit/record';
 import { loadStaffPrincipal } from './staff-principal';
+import { assertNotLocked, countFailure } from './staff-auth';
 import { assertNotCommonPassword, hashPassword, verifyPassword } from './passwords';
 import { hashToken } from './tokens';
 
@@ -40,7 +41,10 @@ export async function acceptInvitation(ctx: AppContext, input: InvitationAccept)
   const existing = await withTenant(ctx.pool, found.tenantId, async (tx) => (await tx.db.select().from(users).where(eq(users.email, found.email)))[0]);
   let passwordHash: string | null = null;
   if (existing) {
+    // The same lockout as sign-in: an invitation link must not become a way to guess a password.
+    assertNotLocked(existing.lockedUntil, ctx.now());
     if (!(await verifyPassword(existing.passwordHash, input.password))) {
+      await countFailure(ctx, existing.id, ctx.now());
       throw conflict('This e-mail already has a Layerbook account.', [
         { field: 'password', message: 'This e-mail already has an account: enter its current password to join.' },
       ]);

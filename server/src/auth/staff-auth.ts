@@ -59,10 +59,7 @@ export async function signIn(ctx: AppContext, input: SignInRequest): Promise<Sta
     await verifyPassword(await decoyPasswordHash(), input.password);
     throw WRONG();
   }
-  if (user.lockedUntil && user.lockedUntil > now) {
-    const minutes = Math.ceil((user.lockedUntil.getTime() - now.getTime()) / 60_000);
-    throw new HttpError(423, 'Account locked for now', `Too many failed attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`);
-  }
+  assertNotLocked(user.lockedUntil, now);
   if (!(await verifyPassword(user.passwordHash, input.password))) {
     await countFailure(ctx, user.id, now);
     throw WRONG();
@@ -73,11 +70,19 @@ export async function signIn(ctx: AppContext, input: SignInRequest): Promise<Sta
   return firstActivePrincipal(ctx, user.id);
 }
 
+/** An account locked by repeated failures answers 423 wherever its password is checked. */
+export function assertNotLocked(lockedUntil: Date | null, now: Date): void {
+  if (lockedUntil && lockedUntil > now) {
+    const minutes = Math.ceil((lockedUntil.getTime() - now.getTime()) / 60_000);
+    throw new HttpError(423, 'Account locked for now', `Too many failed attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`);
+  }
+}
+
 /**
  * Counts a failed attempt in one statement, so parallel guesses each count. Back-off doubles from
  * one minute after the fifth failure, capped at an hour.
  */
-async function countFailure(ctx: AppContext, userId: string, now: Date): Promise<void> {
+export async function countFailure(ctx: AppContext, userId: string, now: Date): Promise<void> {
   await withGlobal(ctx.pool, (tx) =>
     tx.client.query(
       `update users set failed_sign_ins = failed_sign_ins + 1,

@@ -55,6 +55,21 @@ describe('invitations, end to end through the e-mail', () => {
     expect(t.inbox.messages.filter((m) => JSON.stringify(m.to).includes(email))).toHaveLength(1);
   });
 
+  it('locks out password guessing through an invitation to an existing account', async () => {
+    const existing = await signUpFirm(t.app, 'Existing Account Plaster');
+    const inviter = await signUpFirm(t.app, 'Inviting Plaster');
+    await inviter.agent.post('/api/team/invitations').set('x-csrf-token', inviter.csrf()).send({ email: existing.email, role: 'crew' });
+    const token = tokenFrom(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(existing.email) && /Inviting Plaster/.test(m.subject ?? ''))));
+    const guest = await newAgent(t.app);
+    const statuses: number[] = [];
+    for (let i = 0; i < 6; i++) {
+      statuses.push((await guest.agent.post('/api/auth/invitations/accept').set('x-csrf-token', guest.csrf()).send({ token, name: 'X', password: `wrong-guess-${i}-xyz` })).status);
+    }
+    expect(statuses).toEqual([409, 409, 409, 409, 409, 423]);
+    const right = await guest.agent.post('/api/auth/invitations/accept').set('x-csrf-token', guest.csrf()).send({ token, name: 'X', password: existing.password });
+    expect(right.status).toBe(423);
+  });
+
   it('refuses a second invitation to a pending or existing e-mail, naming the field', async () => {
     const owner = await signUpFirm(t.app);
     const email = uniqueEmail('dup');
