@@ -66,6 +66,19 @@ describe('public inquiry form', () => {
     expect((await a.agent.get('/api/inquiries')).body.items).toHaveLength(0);
   });
 
+  it('files one inquiry per form stamp: a replayed stamp is quietly dropped', async () => {
+    const a = await firmWithSlug('Replay Plaster');
+    const { body } = await submitPublic(a.slug);
+    t.setNow(new Date(Date.now() + MIN_FILL_MS + 1000));
+    try {
+      const again = await request(t.app).post(`/api/public/firms/${a.slug}/inquiries`).send({ ...body, email: 'someone.else@example.test' });
+      expect(again.status).toBe(201);
+    } finally {
+      t.setNow(null);
+    }
+    expect((await a.agent.get('/api/inquiries')).body.items).toHaveLength(1);
+  });
+
   it('refuses a forged form stamp naming the field', async () => {
     const a = await firmWithSlug('Stamp Plaster');
     const { res } = await submitPublic(a.slug, { startedAt: '1.forged' });

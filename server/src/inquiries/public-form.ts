@@ -1,4 +1,4 @@
-import { createHmac, timingSafeEqual } from 'node:crypto';
+import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
 import type { InquirySource, PublicInquiryRequest } from '@layerbook/contracts';
 import { and, eq, firms, inArray, memberships, users, withLookup, withTenant } from '@layerbook/db';
 import type { AppContext } from '../context';
@@ -12,18 +12,22 @@ export const MIN_FILL_MS = 3000;
 // A stamp is good for two hours: long enough to write an inquiry, short enough to limit replays.
 const MAX_FILL_MS = 2 * 60 * 60 * 1000;
 
-/** The page stamps when the form was shown, signed so a bot cannot forge an old time. */
+/**
+ * The page stamps when the form was shown, with a random nonce, signed so a bot can neither forge
+ * an old time nor reuse one stamp: each nonce files one inquiry (used_form_stamps).
+ */
 export function formStamp(secret: string, now: Date): string {
   const t = String(now.getTime());
-  return `${t}.${createHmac('sha256', secret).update(`inquiry-form:${t}`).digest('base64url')}`;
+  const nonce = randomBytes(12).toString('base64url');
+  return `${t}.${nonce}.${createHmac('sha256', secret).update(`inquiry-form:${t}:${nonce}`).digest('base64url')}`;
 }
 
-function stampAge(secret: string, stamp: string | undefined, now: Date): number | null {
-  const [t, mac] = (stamp ?? '').split('.');
-  if (!t || !mac) return null;
-  const expected = createHmac('sha256', secret).update(`inquiry-form:${t}`).digest('base64url');
+function readStamp(secret: string, stamp: string | undefined, now: Date): { age: number; nonce: string } | null {
+  const [t, nonce, mac] = (stamp ?? '').split('.');
+  if (!t || !nonce || !mac) return null;
+  const expected = createHmac('sha256', secret).update(`inquiry-form:${t}:${nonce}`).digest('base64url');
   if (expected.length !== mac.length || !timingSafeEqual(Buffer.from(expected), Buffer.from(mac))) return null;
-  return now.getTime() - Number(t);
+  return { age: now.getTime() - Number(t), nonce };
 }
 
 /** Referrals keep their kind (they may be owed thanks or a fee); everything else is the web form. */
@@ -45,11 +49,14 @@ export async function publicFirm(ctx: AppContext, slug: string): Promise<{ id: s
 export async function submitPublicInquiry(ctx: AppContext, slug: string, input: PublicInquiryRequest): Promise<'filed' | 'ignored'> {
   const now = ctx.now();
   if (input.website) return 'ignored';
-  const age = stampAge(ctx.config.SESSION_SECRET, input.startedAt, now);
-  if (age === null || age > MAX_FILL_MS) throw badRequest([{ field: 'startedAt', message: 'This form has expired; reload the page and send it again.' }]);
-  if (age < ctx.config.PUBLIC_FORM_MIN_FILL_MS) return 'ignored';
+  const stamp = readStamp(ctx.config.SESSION_SECRET, input.startedAt, now);
+  if (stamp === null || stamp.age > MAX_FILL_MS) throw badRequest([{ field: 'startedAt', message: 'This form has expired; reload the page and send it again.' }]);
+  if (stamp.age < ctx.config.PUBLIC_FORM_MIN_FILL_MS) return 'ignored';
   const firm = await publicFirm(ctx, slug);
-  await withTenant(ctx.pool, firm.id, async (tx) => {
+  return withTenant(ctx.pool, firm.id, async (tx) => {
+    // A stamp files once: a replay (or a double click) is quietly dropped, like any bot.
+    const fresh = await tx.client.query(`insert into used_form_stamps (nonce) values ($1) on conflict (nonce) do nothing`, [stamp.nonce]);
+    if (fresh.rowCount !== 1) return 'ignored' as const;
     const id = await createInquiry(tx, { userId: null, kind: 'client' }, {
       contactName: input.name,
       email: input.email,
@@ -86,6 +93,6 @@ export async function submitPublicInquiry(ctx: AppContext, slug: string, input: 
         ...inquiryNotificationMail({ firmName: firm.name, prospect: input.name, rooms: input.rooms, url: `${ctx.config.PUBLIC_URL}/inquiries/${id}` }),
       });
     }
+    return 'filed' as const;
   });
-  return 'filed';
 }

@@ -73,3 +73,12 @@ export const inquiryStageSettings = pgTable(
   },
   (t) => [primaryKey({ columns: [t.tenantId, t.stage] }), tenantPolicy('inquiry_stage_settings')],
 );
+
+/**
+ * Public form stamps already used: a stamp files one inquiry, so a bot cannot fetch one page and
+ * replay its stamp. Not firm data (a random nonce and a time), so no RLS; old rows can be pruned.
+ */
+export const usedFormStamps = pgTable('used_form_stamps', {
+  nonce: text('nonce').primaryKey(),
+  usedAt: timestamp('used_at', { withTimezone: true }).notNull().defaultNow(),
+});
