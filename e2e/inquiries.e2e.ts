@@ -15,6 +15,9 @@ test('a prospect submits the public form; the owner moves it with the keyboard, 
   const form = await prospect.newPage();
   await form.goto('/portal/f/fernhollow/inquiry');
   await expect(form.getByRole('heading', { name: /Tell Fernhollow Plaster & Glaze about your project/ })).toBeVisible();
+  // Type once the page is live: text typed in the instant hydration swaps the form in can be lost
+  // (the no-script path is covered by the next test).
+  await expect(form.locator('form[data-hydrated="true"]')).toBeVisible();
   await form.getByLabel('Your name').fill('Perpetua Langdale');
   await form.getByLabel('E-mail').fill(prospectEmail);
   await form.getByLabel('Address of the place to be finished').fill('9 Cinderford Way, Marrowby');
