@@ -17,7 +17,7 @@ async function finishWholeRoom(page: Page, room: string, system: string) {
 // Journey (proposals → portal → jobs): two options priced, a proposal sent, option B accepted by the client.
 test('the office sends a two-option proposal; the client accepts option B; the job appears with its draft payment schedule', async ({ page, browser }) => {
   await signInAsOffice(page);
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs & proposals' }).click();
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Estimates' }).click();
   await page.getByRole('link', { name: 'New estimate' }).click();
   await page.getByLabel('Client').fill('Hattie');
   await page.getByRole('option', { name: /Hattie Brambleton/ }).click();
@@ -25,7 +25,7 @@ test('the office sends a two-option proposal; the client accepts option B; the j
   await page.getByRole('option').first().click();
   await page.getByLabel('Estimate title').fill('Sitting room plaster');
   await page.getByRole('button', { name: 'Create estimate' }).click();
-  await expect(page).toHaveURL(/\/jobs\/estimates\/[0-9a-f-]+$/);
+  await expect(page).toHaveURL(/\/estimates\/[0-9a-f-]+$/);
 
   await finishWholeRoom(page, 'Round sitting room', 'Layered lime plaster, burnished and waxed');
   await page.getByRole('button', { name: 'Add an option' }).click();
@@ -82,8 +82,7 @@ test('the office sends a two-option proposal; the client accepts option B; the j
   await expect(portal.getByText(/Accepted by Hattie Brambleton/)).toBeVisible();
   await client.close();
 
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs & proposals' }).click();
-  await page.getByRole('link', { name: 'Accepted jobs' }).click();
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
   await page.getByRole('link', { name: /Sitting room plaster/ }).first().click();
   await expect(page.getByText('Option B: limewash', { exact: true })).toBeVisible();
   const schedule = page.getByRole('table', { name: 'Payment schedule' });

@@ -63,7 +63,7 @@ test('a prospect submits the public form; the owner moves it with the keyboard, 
   await page.screenshot({ path: 'e2e/.artifacts/inquiry-detail.png', fullPage: true });
 
   // The daily reminder job, triggered directly rather than waiting for its hour.
-  execFileSync('node', ['server/dist/jobs/cli.js', 'follow-ups'], { cwd: root, env: e2eEnv(), stdio: 'inherit' });
+  execFileSync('node', ['server/dist/queue/cli.js', 'follow-ups'], { cwd: root, env: e2eEnv(), stdio: 'inherit' });
   const reminder = await waitForMail('owner@fernhollow.example', /Follow-ups for today/);
   expect(reminder.text).toContain('Perpetua Langdale');
 

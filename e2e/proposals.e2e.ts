@@ -48,7 +48,7 @@ test('the office measures a round room with a turret ceiling and builds an estim
   await expect(page.getByRole('article', { name: 'Turret ceiling' })).toContainText('188.5');
   await page.screenshot({ path: 'e2e/.artifacts/takeoff.png', fullPage: true });
 
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs & proposals' }).click();
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Estimates' }).click();
   await page.getByRole('link', { name: 'New estimate' }).click();
   await page.getByLabel('Client').fill('Hattie');
   await page.getByRole('option', { name: /Hattie Brambleton/ }).click();
@@ -56,7 +56,7 @@ test('the office measures a round room with a turret ceiling and builds an estim
   await page.getByRole('option').first().click();
   await page.getByLabel('Estimate title').fill('Turret study finishes');
   await page.getByRole('button', { name: 'Create estimate' }).click();
-  await expect(page).toHaveURL(/\/jobs\/estimates\/[0-9a-f-]+$/);
+  await expect(page).toHaveURL(/\/estimates\/[0-9a-f-]+$/);
 
   const study = page.getByRole('group', { name: 'Turret study' });
   await study.getByLabel('Same finish for the whole room').click();
@@ -71,6 +71,6 @@ test('the office measures a round room with a turret ceiling and builds an estim
   await expect(page.getByText('All changes saved')).toBeVisible();
   await page.screenshot({ path: 'e2e/.artifacts/estimate-builder.png', fullPage: true });
 
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs & proposals' }).click();
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Estimates' }).click();
   await expect(page.getByRole('table', { name: 'Estimates' })).toContainText('Turret study finishes');
 });

@@ -17,5 +17,5 @@ fi
 # npm packages stay external (argon2 is native); our own workspace packages are TypeScript, so they are bundled.
 externals=$(node -e "const p=require('./package.json');console.log(Object.keys({...p.dependencies,...p.devDependencies}).map(n=>'--external:'+n).join(' '))")
 # shellcheck disable=SC2086
-npx esbuild server/src/main.ts server/src/seed/run.ts server/src/jobs/cli.ts server/src/files/s3-fake-cli.ts --bundle --platform=node --target=node20 --format=cjs \
+npx esbuild server/src/main.ts server/src/seed/run.ts server/src/queue/cli.ts server/src/files/s3-fake-cli.ts --bundle --platform=node --target=node20 --format=cjs \
   $externals --outdir=server/dist --log-level=warning

@@ -2,7 +2,7 @@ import type { Pool } from 'pg';
 import type { Logger } from 'pino';
 import type { Config } from './config';
 import type { ObjectStore } from './files/object-store';
-import type { JobQueue } from './jobs/job-queue';
+import type { JobQueue } from './queue/job-queue';
 
 /** What services need from the outside world; routes pass it in, jobs can too. */
 export interface AppContext {

@@ -7,8 +7,8 @@ import { loadConfig } from './config';
 import type { AppContext } from './context';
 import { assertRlsBoundRole } from './db-roles';
 import { openObjectStore } from './files/object-store';
-import { startQueue } from './jobs/job-queue';
-import { startWorkers } from './jobs/workers';
+import { startQueue } from './queue/job-queue';
+import { startWorkers } from './queue/workers';
 import { loadSsrHandlers } from './ssr/load';
 
 /**

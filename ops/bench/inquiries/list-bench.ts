@@ -14,7 +14,7 @@ import pino from 'pino';
 import { createApp } from '../../../server/src/app';
 import { loadConfig } from '../../../server/src/config';
 import { buildListQuery } from '../../../server/src/inquiries/list';
-import { startQueue } from '../../../server/src/jobs/job-queue';
+import { startQueue } from '../../../server/src/queue/job-queue';
 import { testDatabaseUrls } from '../../../server/src/testing/test-env';
 
 const root = path.resolve(__dirname, '../../..');

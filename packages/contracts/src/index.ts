@@ -1,3 +1,4 @@
+export * from './types';
 export * from './errors/problem';
 export * from './auth/roles';
 export * from './auth/fields';
@@ -15,4 +16,6 @@ export * from './proposals/estimate';
 export * from './engine';
 export * from './proposals/proposal';
 export * from './proposals/proposal-snapshot';
-export * from './work';
+export * from './jobs';
+export * from './proposals/portal-decisions';
+export * from './proposals/portal-views';

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Tx } from '@layerbook/db';
-import type { JobQueue } from '../jobs/job-queue';
-import { QUEUES } from '../jobs/queues';
+import type { JobQueue } from '../queue/job-queue';
+import { QUEUES } from '../queue/queues';
 import type { RenderedMail } from './templates';
 
 export interface OutgoingMail extends RenderedMail {

@@ -1,7 +1,7 @@
 import type { Pool } from 'pg';
 import type { Transporter } from 'nodemailer';
 import type { Logger } from 'pino';
-import type { MailSendJob } from '../jobs/queues';
+import type { MailSendJob } from '../queue/queues';
 
 /**
  * Sends one outbox row. Safe to run twice: the row is locked, and a row already sent is skipped.

@@ -1,4 +1,4 @@
-import { sentProposal } from '../portal/portal-fixtures';
+import { sentProposal } from '../proposals/portal-fixtures';
 import { linkIn } from '../testing/inbox';
 import { startTestServer, TestServer } from '../testing/harness';
 

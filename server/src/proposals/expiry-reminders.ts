@@ -3,7 +3,7 @@ import type { Pool } from 'pg';
 import type { Logger } from 'pino';
 import { createPortalLink } from '../auth/portal-auth';
 import type { Config } from '../config';
-import type { JobQueue } from '../jobs/job-queue';
+import type { JobQueue } from '../queue/job-queue';
 import { enqueueMail } from '../mail/outbox';
 import { render } from '../mail/templates';
 

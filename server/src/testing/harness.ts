@@ -10,8 +10,8 @@ import { Config, loadConfig } from '../config';
 import type { AppContext } from '../context';
 import { openObjectStore } from '../files/object-store';
 import { startS3Fake } from '../files/s3-fake';
-import { startQueue, StartedQueue } from '../jobs/job-queue';
-import { startWorkers, Workers } from '../jobs/workers';
+import { startQueue, StartedQueue } from '../queue/job-queue';
+import { startWorkers, Workers } from '../queue/workers';
 import { Inbox, startInbox } from './inbox';
 import { testDatabaseUrls } from './test-env';
 

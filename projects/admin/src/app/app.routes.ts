@@ -25,9 +25,14 @@ export const routes: Routes = [
         loadChildren: () => import('./features/clients/clients.routes'),
       },
       {
-        path: 'jobs',
+        path: 'estimates',
         canActivate: [roleGuard('office')],
         loadChildren: () => import('./features/proposals/proposals.routes'),
+      },
+      {
+        path: 'jobs',
+        canActivate: [roleGuard('office')],
+        loadChildren: () => import('./features/jobs/jobs.routes'),
       },
       {
         path: 'billing',

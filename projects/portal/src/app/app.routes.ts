@@ -34,7 +34,7 @@ export const routes: Routes = [
       {
         path: 'projects',
         title: 'Your projects · Layerbook client portal',
-        loadComponent: () => import('./features/projects/projects').then((m) => m.Projects),
+        loadComponent: () => import('./features/proposals/proposal-list').then((m) => m.ProposalList),
       },
       {
         path: 'boards',

@@ -16,8 +16,8 @@ import { jobStatus } from './job-words';
   template: `
     <section class="lb-page">
       <nav class="switch" aria-label="Jobs and proposals">
-        <a routerLink="/jobs">Estimates</a>
-        <a routerLink="/jobs/work" aria-current="page">Accepted jobs</a>
+        <a routerLink="/estimates">Estimates</a>
+        <a routerLink="/jobs" aria-current="page">Accepted jobs</a>
       </nav>
       <h1>Accepted jobs</h1>
       <p class="lb-lead">Work the client accepted: the option they signed, the contract sum and the payments to ask for.</p>
@@ -41,7 +41,7 @@ import { jobStatus } from './job-words';
             @for (j of items(); track j.id) {
               @let look = statusLook(j.status);
               <tr>
-                <th scope="row"><a [routerLink]="['/jobs/work', j.id]">{{ j.title }}</a></th>
+                <th scope="row"><a [routerLink]="['/jobs', j.id]">{{ j.title }}</a></th>
                 <td>{{ j.clientName }}</td>
                 <td>{{ j.optionLabel }}</td>
                 <td class="num">{{ j.contractSum | money: j.currency }}</td>

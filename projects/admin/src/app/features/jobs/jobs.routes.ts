@@ -1,6 +1,6 @@
 import { Routes } from '@angular/router';
 
-/** Accepted jobs, mounted under /jobs/work by the proposals routes. */
+/** Accepted jobs: /jobs. */
 export default [
   {
     path: '',

@@ -11,19 +11,19 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { EstimateApi, type EstimateListItem } from './estimate-api';
 import { statusWord } from './estimate-words';
 
-/** Jobs & proposals: every estimate of the firm, newest change first. */
+/** Estimates: every estimate of the firm, newest change first. */
 @Component({
   selector: 'lb-estimate-list',
   imports: [DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
   template: `
     <section class="lb-page">
       <nav class="switch" aria-label="Jobs and proposals">
-        <a routerLink="/jobs" aria-current="page">Estimates</a>
-        <a routerLink="/jobs/work">Accepted jobs</a>
+        <a routerLink="/estimates" aria-current="page">Estimates</a>
+        <a routerLink="/jobs">Accepted jobs</a>
       </nav>
       <div class="heading">
         <h1>Jobs &amp; proposals</h1>
-        <a mat-flat-button routerLink="/jobs/estimates/new">
+        <a mat-flat-button routerLink="/estimates/new">
           <mat-icon aria-hidden="true">add</mat-icon>
           New estimate
         </a>
@@ -47,7 +47,7 @@ import { statusWord } from './estimate-words';
           <tbody>
             @for (e of items(); track e.id) {
               <tr>
-                <th scope="row"><a [routerLink]="['/jobs/estimates', e.id]">{{ e.title }}</a></th>
+                <th scope="row"><a [routerLink]="['/estimates', e.id]">{{ e.title }}</a></th>
                 <td>{{ e.clientName }}</td>
                 <td class="num">
                   @if (e.price !== null) {

@@ -135,7 +135,7 @@ export class NewEstimate {
     this.isBusy.set(true);
     try {
       const made = await this.api.create({ siteId: v.siteId, inquiryId: null, title: v.title.trim(), startDate: toIsoDate(v.startDate) ?? '' });
-      await this.router.navigate(['/jobs/estimates', made.id]);
+      await this.router.navigate(['/estimates', made.id]);
     } catch (error) {
       this.formMessage.set(applyProblem(this.form, toProblem(error)));
     } finally {

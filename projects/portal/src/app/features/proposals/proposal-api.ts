@@ -1,12 +1,16 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { PortalProposal, ProposalAcceptance, ProposalChangeRequest, ProposalDecline } from '@layerbook/contracts';
+import type { ItemList, PortalProposal, PortalProposalSummary, ProposalAcceptance, ProposalChangeRequest, ProposalDecline } from '@layerbook/contracts';
 
 /** The client's own proposal versions: read, accept, ask for changes, decline. */
 @Injectable({ providedIn: 'root' })
 export class ProposalApi {
   private readonly http = inject(HttpClient);
+
+  async list(): Promise<readonly PortalProposalSummary[]> {
+    return (await firstValueFrom(this.http.get<ItemList<PortalProposalSummary>>('/api/portal/proposals'))).items;
+  }
 
   get(id: string): Promise<PortalProposal> {
     return firstValueFrom(this.http.get<PortalProposal>(`/api/portal/proposals/${encodeURIComponent(id)}`));

@@ -1,7 +1,7 @@
 import { withTenant } from '@layerbook/db';
 import Decimal from 'decimal.js';
 import { newAgent, startTestServer, TestServer } from '../testing/harness';
-import { joinAs } from '../proposals/proposal-fixtures';
+import { joinAs } from './proposal-fixtures';
 import { makeAndSend, otherClientOf, sentProposal, signInByLink } from './portal-fixtures';
 
 let t: TestServer;
@@ -23,12 +23,12 @@ describe('a client reads and accepts a proposal in the portal', () => {
     const office = await joinAs(t, p, 'office');
     const officeEmail = (await office.agent.get('/api/auth/session')).body.user.email as string;
 
-    const projects = await p.client.agent.get('/api/portal/projects');
-    expect(projects.status).toBe(200);
-    expect(projects.body).toEqual({
-      projects: [{
+    const list = await p.client.agent.get('/api/portal/proposals');
+    expect(list.status).toBe(200);
+    expect(list.body).toEqual({
+      items: [{
         estimateId: p.estimateId, title: 'Dining room plaster', siteAddress: '1 Round Row, Ochreford',
-        latest: { id: p.version.id, version: 1, status: 'sent', expiresOn: '2026-12-31', sentAt: '2026-12-01T15:00:00.000Z' }, boards: [],
+        latest: { id: p.version.id, version: 1, status: 'sent', expiresOn: '2026-12-31', sentAt: '2026-12-01T15:00:00.000Z' },
       }],
     });
     const read = await p.client.agent.get(`/api/portal/proposals/${p.version.id}`);
@@ -150,7 +150,7 @@ describe('a client reads and accepts a proposal in the portal', () => {
     const res = await accept(p.client, p.version.id);
     expect(res.status).toBe(409);
     expect(res.body.detail).toBe('A newer version of this proposal was sent; please read that one.');
-    expect((await p.client.agent.get('/api/portal/projects')).body.projects[0].latest).toMatchObject({ id: v2.id, version: 2, status: 'sent' });
+    expect((await p.client.agent.get('/api/portal/proposals')).body.items[0].latest).toMatchObject({ id: v2.id, version: 2, status: 'sent' });
     expect((await accept(p.client, v2.id, { variantId: 'A' })).status).toBe(200);
   });
 
@@ -186,7 +186,7 @@ describe('who may see a proposal in the portal', () => {
     ];
     const neighbour = await otherClientOf(t, p);
     for (const res of await Promise.all(routes(neighbour))) expect(res.status).toBe(404);
-    expect((await neighbour.agent.get('/api/portal/projects')).body).toEqual({ projects: [] });
+    expect((await neighbour.agent.get('/api/portal/proposals')).body).toEqual({ items: [] });
 
     const other = await sentProposal(t, 'Other Firm Plaster');
     for (const res of await Promise.all(routes(other.client))) expect(res.status).toBe(404);

@@ -26,7 +26,7 @@ describe('portal sign-in by e-mailed one-time link', () => {
     const signedIn = await c.agent.post('/api/portal/auth/redeem').set('x-csrf-token', c.csrf()).send({ token });
     expect(signedIn.status).toBe(200);
     expect(signedIn.body.client).toMatchObject({ email, firmName: 'Lantern Street Plaster' });
-    expect((await c.agent.get('/api/portal/projects')).body).toEqual({ projects: [] });
+    expect((await c.agent.get('/api/portal/proposals')).body).toEqual({ items: [] });
     // A client is not staff.
     expect((await c.agent.get('/api/team')).status).toBe(401);
     const again = await (await newAgent(t.app, 'portal')).agent.post('/api/portal/auth/redeem').set('x-csrf-token', signedIn.body.csrfToken).send({ token });
@@ -67,6 +67,6 @@ describe('portal sign-in by e-mailed one-time link', () => {
 
   it('keeps signed-out clients out of their projects', async () => {
     const c = await newAgent(t.app, 'portal');
-    expect((await c.agent.get('/api/portal/projects')).status).toBe(401);
+    expect((await c.agent.get('/api/portal/proposals')).status).toBe(401);
   });
 });

@@ -1,6 +1,6 @@
 import { startTestServer, TestServer } from '../testing/harness';
 import { joinAs } from '../proposals/proposal-fixtures';
-import { sentProposal } from '../portal/portal-fixtures';
+import { sentProposal } from '../proposals/portal-fixtures';
 
 let t: TestServer;
 beforeAll(async () => {

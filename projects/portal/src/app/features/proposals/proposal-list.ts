@@ -3,14 +3,14 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
-import type { PortalProject } from '@layerbook/contracts';
+import type { PortalProposalSummary } from '@layerbook/contracts';
 import { RouterLink } from '@angular/router';
 import { formatDay } from '../../shared/format/money';
-import { PROPOSAL_STATUS_WORDS } from '../proposals/status-words';
-import { ProjectsApi } from './projects-api';
+import { ProposalApi } from './proposal-api';
+import { PROPOSAL_STATUS_WORDS } from './status-words';
 
 @Component({
-  selector: 'lb-projects',
+  selector: 'lb-proposal-list',
   imports: [MatIconModule, MatProgressBarModule, RouterLink],
   template: `
     <h1>Your projects</h1>
@@ -70,11 +70,12 @@ import { ProjectsApi } from './projects-api';
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class Projects {
-  private readonly api = inject(ProjectsApi);
+/** The client's proposals, one per estimate ("your projects" to the client). */
+export class ProposalList {
+  private readonly api = inject(ProposalApi);
 
   protected readonly client = inject(Session).client;
-  protected readonly projects = signal<readonly PortalProject[]>([]);
+  protected readonly projects = signal<readonly PortalProposalSummary[]>([]);
   protected readonly isLoading = signal(true);
   protected readonly loadMessage = signal<string | null>(null);
   protected readonly statusWords = PROPOSAL_STATUS_WORDS;

@@ -1,4 +1,4 @@
-import type { PortalProject, PortalProposal, ProposalSnapshot, ProposalVersionStatus } from '@layerbook/contracts';
+import type { PortalProposal, PortalProposalSummary, ProposalSnapshot, ProposalVersionStatus } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { localDate } from '../firms/local-date';
 import type { ClientPrincipal } from '../http/principal';
@@ -78,8 +78,8 @@ export async function getClientProposal(tx: TenantTx, client: ClientPrincipal, i
   return toPortalProposal(row, await firmToday(tx, now));
 }
 
-/** Each project (estimate) of this client that has a sent proposal, with its newest sent version. */
-export async function listClientProjects(tx: TenantTx, client: ClientPrincipal): Promise<PortalProject[]> {
+/** Each estimate of this client that has a sent proposal, with its newest sent version. */
+export async function listClientProposals(tx: TenantTx, client: ClientPrincipal): Promise<PortalProposalSummary[]> {
   const clientId = await clientIdOf(tx, client);
   if (!clientId) return [];
   const { rows } = await tx.client.query<{
@@ -98,6 +98,5 @@ export async function listClientProjects(tx: TenantTx, client: ClientPrincipal):
       title: r.title,
       siteAddress: r.site.addressLines.join(', '),
       latest: { id: r.id, version: r.version, status: r.status, expiresOn: r.expires_on, sentAt: r.sent_at?.toISOString() ?? null },
-      boards: [],
     }));
 }

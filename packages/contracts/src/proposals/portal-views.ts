@@ -1,5 +1,5 @@
-import type { ProposalVersionStatus } from '../proposals/proposal';
-import type { ProposalSnapshot } from '../proposals/proposal-snapshot';
+import type { ProposalVersionStatus } from './proposal';
+import type { ProposalSnapshot } from './proposal-snapshot';
 
 /** The newest proposal version the client can read for a project (never a draft). */
 export interface PortalLatestProposal {
@@ -10,17 +10,12 @@ export interface PortalLatestProposal {
   readonly sentAt: string | null;
 }
 
-export interface PortalProject {
+/** One estimate of the client's with a sent proposal: the portal's list ("your projects"). */
+export interface PortalProposalSummary {
   readonly estimateId: string;
   readonly title: string;
   readonly siteAddress: string;
   readonly latest: PortalLatestProposal;
-  /** sample boards to approve (a later issue fills this) */
-  readonly boards: readonly never[];
-}
-
-export interface PortalProjects {
-  readonly projects: readonly PortalProject[];
 }
 
 /** A proposal version as its client reads it: the frozen snapshot plus where it stands. */

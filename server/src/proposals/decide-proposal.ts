@@ -5,8 +5,8 @@ import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
 import { badRequest, conflict, HttpError } from '../http/problem';
 import { moveStage } from '../inquiries/service';
-import { snapshotHash } from '../proposals/snapshot-hash';
-import { createJobFromAcceptance } from '../work/create-job';
+import { snapshotHash } from './snapshot-hash';
+import { createJobFromAcceptance } from '../jobs/create-job';
 import { firmToday, isLatest, loadClientVersion, toPortalProposal, type ClientVersionRow } from './client-proposals';
 import { mailAcceptance, mailAnswer } from './decision-mail';
 

@@ -44,7 +44,7 @@ export async function mailAcceptance(
       purposeKey: `proposal-accepted:${p.row.id}:${staff.id}`,
       tenantId: tx.tenantId,
       to: staff.email,
-      ...proposalAcceptedMail({ ...common, url: `${base}/jobs/estimates/${p.row.estimate_id}` }),
+      ...proposalAcceptedMail({ ...common, url: `${base}/estimates/${p.row.estimate_id}` }),
     });
   }
   await enqueueMail(tx, ctx.queue, {
@@ -74,7 +74,7 @@ export async function mailAnswer(
         version: p.row.version,
         answer: p.answer,
         comment: p.comment,
-        url: `${ctx.config.PUBLIC_URL}/jobs/estimates/${p.row.estimate_id}`,
+        url: `${ctx.config.PUBLIC_URL}/estimates/${p.row.estimate_id}`,
       }),
     });
   }

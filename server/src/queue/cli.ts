@@ -5,7 +5,7 @@ import { QUEUES } from './queues';
 
 /**
  * Operator command: queue a job now instead of waiting for its schedule.
- *   node server/dist/jobs/cli.js follow-ups      — send today's follow-up digests for every firm
+ *   node server/dist/queue/cli.js follow-ups      — send today's follow-up digests for every firm
  */
 async function run(command: string | undefined): Promise<void> {
   const config = loadConfig();

@@ -1,5 +1,5 @@
 import { withTenant } from '@layerbook/db';
-import { firmWithPricedEstimate } from '../proposals/proposal-fixtures';
+import { firmWithPricedEstimate } from './proposal-fixtures';
 import { linkIn } from '../testing/inbox';
 import { newAgent, TestServer, uniqueEmail } from '../testing/harness';
 

@@ -1,3 +1,0 @@
-export * from './portal-decisions';
-export * from './portal-views';
-export * from './job';

@@ -1,0 +1,45 @@
+import { PortalSession, portalLinkRequest, portalRedeemRequest } from '@layerbook/contracts';
+import { Request, RequestHandler, Router } from 'express';
+import type { AppContext } from '../context';
+import { csrf } from '../http/csrf';
+import { parse } from '../http/validate';
+import { logIn, logOut } from './passport-setup';
+import { loadClientPrincipal, redeemPortalLink, requestPortalLink } from './portal-auth';
+
+async function portalSession(ctx: AppContext, req: Request, fresh = false): Promise<PortalSession> {
+  const claim = req.user?.kind === 'client' ? req.user : null;
+  const client = claim ? await loadClientPrincipal(ctx.pool, claim.id, claim.tenantId) : null;
+  return {
+    client: client ? { id: client.id, name: client.name, email: client.email, firmId: client.tenantId, firmName: client.firmName } : null,
+    csrfToken: csrf.generateToken(req, fresh),
+  };
+}
+
+/** The client's sign-in, mounted at /api/portal: session, e-mailed one-time link, sign-out. */
+export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): Router {
+  const router = Router();
+
+  router.get('/session', async (req, res) => {
+    res.set('cache-control', 'no-store').json(await portalSession(ctx, req));
+  });
+
+  router.post('/auth/link', linkLimiter, async (req, res) => {
+    await requestPortalLink(ctx, parse(portalLinkRequest, req.body).email);
+    res.status(202).json({ detail: 'If that address belongs to a client, a sign-in link is on its way.' });
+  });
+
+  router.post('/auth/redeem', linkLimiter, async (req, res) => {
+    const { token } = parse(portalRedeemRequest, req.body);
+    const principal = await redeemPortalLink(ctx, token);
+    await logIn(req, principal, ctx.now());
+    res.json(await portalSession(ctx, req, true));
+  });
+
+  router.post('/auth/signout', async (req, res) => {
+    await logOut(req);
+    await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+    res.json(await portalSession(ctx, req, true));
+  });
+
+  return router;
+}
