@@ -8,6 +8,7 @@ import { fileRoutes } from './files/routes';
 import { firmRoutes } from './firms/routes';
 import { csrf } from './http/csrf';
 import { apiNotFound, problemHandler } from './http/errors';
+import { refuseUndecodablePath } from './http/bad-path';
 import { signInRateLimit } from './http/rate-limit';
 import { cspNonce, securityHeaders } from './http/security';
 import { sessionMiddleware } from './http/session';
@@ -49,6 +50,7 @@ export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
     }),
   );
   app.use(cspNonce, securityHeaders(ctx.config));
+  app.use(refuseUndecodablePath);
   const inquiryLimiter = publicInquiryLimiter(ctx.config.PUBLIC_FORM_RATE_LIMIT);
   app.use('/api', api(ctx, inquiryLimiter));
   if (ssr) {

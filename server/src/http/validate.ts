@@ -1,9 +1,12 @@
 import type { FieldProblem } from '@layerbook/contracts';
 import type { z } from 'zod';
 import { badRequest } from './problem';
+import { unstorableText } from './text-guard';
 
 /** Parses input with a shared zod schema; failure is a 400 naming every bad field. */
 export function parse<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
+  const unstorable = unstorableText(input);
+  if (unstorable.length > 0) throw badRequest(unstorable);
   const result = schema.safeParse(input ?? {});
   if (result.success) return result.data;
   throw badRequest(fieldProblems(result.error));
