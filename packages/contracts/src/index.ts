@@ -19,3 +19,5 @@ export * from './proposals/proposal-snapshot';
 export * from './jobs';
 export * from './proposals/portal-decisions';
 export * from './proposals/portal-views';
+export * from './samples/samples';
+export * from './files/photo-fields';

@@ -4,3 +4,9 @@
  * (checked by `types.spec.ts`), so the browser never downloads it.
  */
 export * from './common/lists';
+export * from './proposals/proposal-types';
+export * from './proposals/proposal-snapshot';
+export * from './proposals/portal-views';
+export * from './jobs/job';
+export * from './samples/sample-types';
+export * from './files/photo-types';

@@ -3,6 +3,26 @@ import type { SnapshotPaymentTrigger } from '../proposals/proposal-snapshot';
 export const JOB_STATUSES = ['scheduled', 'in_progress', 'complete', 'cancelled'] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 
+export const JOB_STATUS_LABELS: Readonly<Record<JobStatus, string>> = {
+  scheduled: 'Scheduled',
+  in_progress: 'Under way',
+  complete: 'Finished',
+  cancelled: 'Cancelled',
+};
+
+/** Where a payment sits in the schedule: the deposit, a payment during the work, the balance. */
+export const PAYMENT_LINE_ROLES = ['deposit', 'milestone', 'final'] as const;
+export type PaymentLineRole = (typeof PAYMENT_LINE_ROLES)[number];
+
+export const PAYMENT_LINE_STATUSES = ['draft', 'scheduled', 'invoiced'] as const;
+export type PaymentLineStatus = (typeof PAYMENT_LINE_STATUSES)[number];
+
+export const PAYMENT_LINE_STATUS_LABELS: Readonly<Record<PaymentLineStatus, string>> = {
+  draft: 'Draft',
+  scheduled: 'Scheduled',
+  invoiced: 'Invoiced',
+};
+
 /** Accepted work as the office lists it. Money is a decimal string in `currency`. */
 export interface JobSummary {
   readonly id: string;
@@ -22,12 +42,13 @@ export interface PaymentScheduleLineView {
   readonly id: string;
   readonly position: number;
   readonly label: string;
-  readonly role: 'deposit' | 'milestone' | 'final';
+  readonly role: PaymentLineRole;
   readonly trigger: SnapshotPaymentTrigger;
+  /** a decimal string ("30" or "33.5"); null for a fixed amount or the rest of the sum */
   readonly percent: string | null;
   readonly amount: string;
   readonly expectedOn: string | null;
-  readonly status: 'draft' | 'scheduled' | 'invoiced';
+  readonly status: PaymentLineStatus;
 }
 
 export interface JobDetail extends JobSummary {
@@ -38,5 +59,6 @@ export interface JobDetail extends JobSummary {
   readonly siteAddress: string;
   readonly inquiryId: string | null;
   readonly acceptedVariantId: string;
+  /** in schedule order (by `position`) */
   readonly paymentSchedule: readonly PaymentScheduleLineView[];
 }

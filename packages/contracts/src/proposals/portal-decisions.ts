@@ -1,5 +1,13 @@
 import { z } from 'zod';
 import { requiredText, text } from '../common/fields';
+import {
+  PROPOSAL_COMMENT_MAX,
+  SIGNED_NAME_MAX,
+  SIGNED_NAME_MIN,
+  type ProposalAcceptance,
+  type ProposalChangeRequest,
+  type ProposalDecline,
+} from './proposal-types';
 
 /**
  * The client's answer to a sent proposal in the portal. Acceptance is a typed signature: the
@@ -10,18 +18,15 @@ export const proposalAcceptance = z.strictObject({
   signedName: z
     .string({ error: 'Type your full name to sign.' })
     .trim()
-    .min(2, { error: 'Type your full name to sign (at least 2 characters).' })
-    .max(120, { error: 'Use at most 120 characters.' }),
+    .min(SIGNED_NAME_MIN, { error: `Type your full name to sign (at least ${SIGNED_NAME_MIN} characters).` })
+    .max(SIGNED_NAME_MAX, { error: `Use at most ${SIGNED_NAME_MAX} characters.` }),
   consent: z.literal(true, { error: 'Tick the box to confirm you accept this proposal.' }),
-});
-export type ProposalAcceptance = z.infer<typeof proposalAcceptance>;
+}) satisfies z.ZodType<ProposalAcceptance>;
 
 export const proposalDecline = z.strictObject({
-  comment: text(2000, 'The comment').optional(),
-});
-export type ProposalDecline = z.infer<typeof proposalDecline>;
+  comment: text(PROPOSAL_COMMENT_MAX, 'The comment').optional(),
+}) satisfies z.ZodType<ProposalDecline>;
 
 export const proposalChangeRequest = z.strictObject({
-  comment: requiredText(2000, 'Say what you would like changed.'),
-});
-export type ProposalChangeRequest = z.infer<typeof proposalChangeRequest>;
+  comment: requiredText(PROPOSAL_COMMENT_MAX, 'Say what you would like changed.'),
+}) satisfies z.ZodType<ProposalChangeRequest>;

@@ -1,4 +1,4 @@
-import type { ProposalVersionStatus } from './proposal';
+import type { ProposalVersionStatus } from './proposal-types';
 import type { ProposalSnapshot } from './proposal-snapshot';
 
 /** The newest proposal version the client can read for a project (never a draft). */

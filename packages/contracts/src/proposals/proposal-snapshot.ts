@@ -1,4 +1,4 @@
-import type { ProposalTerms, ProposalVersionStatus } from './proposal';
+import type { ProposalTerms, ProposalVersionStatus } from './proposal-types';
 
 /**
  * What the client reads and signs, frozen once sent: everything the PDF and the portal page show,

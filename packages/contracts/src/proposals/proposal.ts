@@ -1,5 +1,13 @@
 import { z } from 'zod';
 import { isoDate, requiredText, text, uuid } from '../common/fields';
+import {
+  PROPOSAL_EXCLUSION_MAX,
+  PROPOSAL_EXCLUSIONS_MAX,
+  PROPOSAL_TEXT_MAX,
+  type ProposalCreate,
+  type ProposalTerms,
+  type ProposalUpdate,
+} from './proposal-types';
 
 const percent = (label: string) =>
   z
@@ -17,13 +25,12 @@ export const proposalTerms = z.strictObject({
   depositPercent: percent('the deposit'),
   progressPercent: percent('the progress payment'),
   /** free wording printed under "Terms" (due dates, cancellation right, warranty) */
-  text: text(4000, 'The terms'),
-});
-export type ProposalTerms = z.infer<typeof proposalTerms>;
+  text: text(PROPOSAL_TEXT_MAX, 'The terms'),
+}) satisfies z.ZodType<ProposalTerms>;
 
-export const DEFAULT_PROPOSAL_TERMS: ProposalTerms = { depositPercent: 30, progressPercent: 40, text: '' };
-
-const exclusions = z.array(requiredText(300, 'Write the exclusion or remove the line.')).max(30, { error: 'At most 30 exclusions.' });
+const exclusions = z
+  .array(requiredText(PROPOSAL_EXCLUSION_MAX, 'Write the exclusion or remove the line.'))
+  .max(PROPOSAL_EXCLUSIONS_MAX, { error: `At most ${PROPOSAL_EXCLUSIONS_MAX} exclusions.` });
 
 export const proposalCreate = z.strictObject({
   estimateId: uuid('estimate id'),
@@ -31,20 +38,15 @@ export const proposalCreate = z.strictObject({
   expiresOn: isoDate,
   terms: proposalTerms.partial().optional(),
   exclusions: exclusions.optional(),
-  notes: text(4000, 'The notes').optional(),
-});
-export type ProposalCreate = z.infer<typeof proposalCreate>;
+  notes: text(PROPOSAL_TEXT_MAX, 'The notes').optional(),
+}) satisfies z.ZodType<ProposalCreate>;
 
 /** Only a draft can change; a sent version is frozen and a change is a new version. */
 export const proposalUpdate = z.strictObject({
   expiresOn: isoDate.optional(),
   terms: proposalTerms.partial().optional(),
   exclusions: exclusions.optional(),
-  notes: text(4000, 'The notes').optional(),
-});
-export type ProposalUpdate = z.infer<typeof proposalUpdate>;
+  notes: text(PROPOSAL_TEXT_MAX, 'The notes').optional(),
+}) satisfies z.ZodType<ProposalUpdate>;
 
 export const proposalListQuery = z.strictObject({ estimateId: uuid('estimate id').optional() });
-
-export const PROPOSAL_VERSION_STATUSES = ['draft', 'sent', 'accepted', 'declined', 'changes_requested', 'superseded'] as const;
-export type ProposalVersionStatus = (typeof PROPOSAL_VERSION_STATUSES)[number];
