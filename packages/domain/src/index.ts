@@ -20,6 +20,7 @@ export {
 } from './units/quantity-unit';
 export type { KitchenVolume } from './units/kitchen-display';
 export { formatKitchenVolume, formatMetricMass, formatMetricVolume } from './units/kitchen-display';
+export { fixedNumber, plainNumber, roundedNumber } from './units/number-text';
 
 // calendar dates
 export type { IsoDate } from './calendar/local-date';
@@ -27,7 +28,7 @@ export { addDays, daysBetween, fromDayNumber, isoWeekLabel, isoWeekday, mondayOf
 
 // money
 export type { MoneyInput } from './money/money';
-export { fromMinorUnits, roundToCurrency, sumMoney, toMinorUnits } from './money/money';
+export { fromMinorUnits, roundToCurrency, roundsToZero, sumMoney, toMinorUnits } from './money/money';
 export { isKnownCurrency, knownCurrencies, minorUnitDigits } from './money/currency';
 export type { ProcessorCurrencyRule } from './money/stripe-amount';
 export { fromProcessorAmount, processorCurrencyRule, toProcessorAmount } from './money/stripe-amount';
@@ -37,6 +38,7 @@ export { allocateByWeights, splitEvenly } from './money/allocate';
 export type { Opening, SurfaceKind, SurfaceMeasure, SurfaceShape, TakeoffSettings } from './geometry/surface-shape';
 export { DEFAULT_TAKEOFF_SETTINGS, convertMeasure, measureSurface } from './geometry/measure-surface';
 export { shoelaceArea } from './geometry/ceilings';
+export { measureText, totalsText, workingText } from './geometry/measure-text';
 
 // finishes
 export type {
@@ -61,6 +63,8 @@ export type { ContainerPack, PackLine } from './finishes/container-pack';
 export { chooseContainers } from './finishes/container-pack';
 export type { BatchLine, PerBaseRecipe } from './finishes/mix-batch';
 export { mixBatch, scaleRecipeToBase } from './finishes/mix-batch';
+export type { FinishOutline } from './finishes/finish-outline';
+export { finishProductIds, layerProductIds, outlineFinish, totalWaitHours } from './finishes/finish-outline';
 
 // labour
 export type { CrewTime, LayerHours, MultiplierStep, SurfaceConditions } from './labour/layer-hours';
@@ -75,9 +79,13 @@ export type {
   ScheduleInput,
   ScheduleStep,
   ScheduledTask,
+  ScheduleWait,
   WorkChain,
 } from './schedule/schedule-job';
 export { scheduleJob } from './schedule/schedule-job';
+export type { PlanDay, PlannedSchedule, PlanStep, PlanWait } from './schedule/day-plan';
+export { planDays } from './schedule/day-plan';
+export { hoursText, waitText } from './schedule/hours-text';
 
 // pricing
 export type { Ratio } from './pricing/ratio';
@@ -91,7 +99,7 @@ export { salesTax } from './pricing/sales-tax';
 export type { CostLine, DirectCostInput, Discount, PriceBreakdown, PriceInput } from './pricing/price-job';
 export { priceJob } from './pricing/price-job';
 export type { PerAreaLine } from './pricing/per-area-check';
-export { perAreaCheck } from './pricing/per-area-check';
+export { perAreaCheck, perAreaGap } from './pricing/per-area-check';
 
 // billing
 export type { PaymentBasis, PaymentLine, PaymentLineInput, PaymentTrigger } from './billing/payment-schedule';
@@ -125,3 +133,5 @@ export { STANDING_LINE, safetyCautions } from './safety/safety-cautions';
 export type { EstimateInput, EstimateOption, EstimateRoom, EstimateSurface, FirmSettings } from './estimate/estimate-input';
 export type { EstimateResult, LayerLine, ProductTotal, SurfaceResult } from './estimate/compute-estimate';
 export { computeEstimate } from './estimate/compute-estimate';
+export type { EstimateResultJson, Jsonified } from './estimate/result-json';
+export { toResultJson } from './estimate/result-json';

@@ -1,5 +1,5 @@
 import Decimal from 'decimal.js';
-import { fromMinorUnits, roundToCurrency, toMinorUnits } from './money';
+import { fromMinorUnits, roundToCurrency, roundsToZero, toMinorUnits } from './money';
 
 describe('minor units', () => {
   it.each([
@@ -22,4 +22,17 @@ describe('minor units', () => {
     expect(roundToCurrency(new Decimal('-2.345'), 'USD').toString()).toBe('-2.35');
     expect(roundToCurrency('1234.5', 'JPY').toString()).toBe('1235');
   });
+});
+
+describe('roundsToZero', () => {
+  // ISO 4217 exponents: USD 2, JPY 0, KWD 3; half away from zero as above.
+  it.each([
+    ['0.004', 'USD', true],
+    ['0.005', 'USD', false],
+    ['-0.004', 'USD', true],
+    ['0.4', 'JPY', true],
+    ['0.0004', 'KWD', true],
+    ['0.0005', 'KWD', false],
+    ['0', 'USD', true],
+  ])('%s %s shows as zero: %s', (amount, currency, isZero) => expect(roundsToZero(amount, currency)).toBe(isZero));
 });

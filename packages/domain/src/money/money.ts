@@ -38,3 +38,8 @@ export function sumMoney(amounts: readonly Decimal[]): Decimal {
   for (const a of amounts) total = total.plus(a);
   return total;
 }
+
+/** True when the amount shows as zero in the currency ("0.00"), e.g. a rounding of a fraction of a cent. */
+export function roundsToZero(amount: Decimal.Value, currency: string): boolean {
+  return roundToCurrency(amount, currency).isZero();
+}

@@ -1,6 +1,6 @@
 import Decimal from 'decimal.js';
 import { requireNonNegative, toNonNegativeMoney } from '../errors/input-checks';
-import type { MoneyInput } from '../money/money';
+import { type MoneyInput, sumMoney } from '../money/money';
 
 export interface PerAreaLine {
   label: string;
@@ -26,5 +26,14 @@ export function perAreaCheck(lines: readonly PerAreaLine[], field = 'perAreaRate
     }
     return rate.times(Math.round(l.quantity * 100));
   });
-  return { lines: amounts, total: amounts.reduce((a, b) => a.plus(b), new Decimal(0)) };
+  return { lines: amounts, total: sumMoney(amounts) };
+}
+
+/**
+ * How far the bottom-up price is from the per-area check: the difference and which side is
+ * higher, for "Bottom-up is higher by …" (common practice, no source).
+ */
+export function perAreaGap(bottomUp: MoneyInput, byArea: MoneyInput): { isAbove: boolean; amount: Decimal } {
+  const diff = new Decimal(bottomUp).minus(byArea);
+  return { isAbove: diff.greaterThan(0), amount: diff.abs() };
 }

@@ -61,6 +61,18 @@ describe('dry-time-aware schedule', () => {
     expect(day5[0].startHour).toBeCloseTo(8.25, 9); // 24 h after coat 2 ended Tue 8:15
   });
 
+  it('lists each drying wait before a following layer, from the day it begins until the clock time it ends', () => {
+    // DOMAIN.md §2.7: waits run on the clock, nights and weekends included; the last layer's wait
+    // (wax) has no following layer on its surface, and a zero wait is no wait.
+    const rows = result.waits.map((w) => [w.taskId, w.label, w.date, w.untilDate, Number(w.untilHour.toFixed(3))]);
+    expect(rows).toEqual([
+      ['walls:0', 'Dining room walls: Primer', '2025-06-05', '2025-06-05', 15.16], // primer ends 11:09.6, +4 h
+      ['dome:0', 'Dining room dome: Dome base coat', '2025-06-05', '2025-06-05', 16.485], // ends 12:29.1, +4 h
+      ['walls:1', 'Dining room walls: Plaster coat 1', '2025-06-06', '2025-06-07', 4.835], // Fri 12:50 + 16 h = Sat 4:50
+      ['walls:2', 'Dining room walls: Plaster coat 2 and burnish', '2025-06-10', '2025-06-11', 8.25], // Tue 8:15 + 24 h
+    ]);
+  });
+
   it('reports when each layer is finished everywhere, and the job', () => {
     expect(result.milestones.map((m) => [m.id, m.date])).toEqual([
       ['layer:primer', '2025-06-05'],

@@ -49,6 +49,23 @@ export interface ScheduledTask {
   endHour: number;
 }
 
+/**
+ * A layer drying before the next layer on the same surface may start: from the end of `taskId`
+ * until the next layer's ready time, on the clock (nights and weekends count).
+ */
+export interface ScheduleWait {
+  taskId: string;
+  chainId: string;
+  layerId: string;
+  /** what is drying, e.g. "Dining room – Walls: Lime plaster, first coat" */
+  label: string;
+  /** the day the wait begins (the layer's last working day) */
+  date: IsoDate;
+  untilDate: IsoDate;
+  /** hour of `untilDate`; may fall outside working hours */
+  untilHour: number;
+}
+
 export interface Milestone {
   id: string;
   label: string;
@@ -66,6 +83,8 @@ export interface ScheduleDay {
 export interface JobSchedule {
   steps: ScheduleStep[];
   tasks: ScheduledTask[];
+  /** in the order the waits begin; only waits before a following layer, and only those longer than zero */
+  waits: ScheduleWait[];
   days: ScheduleDay[];
   milestones: Milestone[];
   finishDate: IsoDate;
@@ -99,6 +118,7 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
 
   const steps: ScheduleStep[] = [];
   const tasks: ScheduledTask[] = [];
+  const waits: ScheduleWait[] = [];
   const tally = new ScheduleTally(crew * time.dayLength);
   // Per-day lookups in arrays indexed from the start day (work never comes before it): the
   // scheduler asks for every step, and arrays are much cheaper than maps keyed by day.
@@ -240,12 +260,20 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
     const i = next[bestChain];
     const step = chain.steps[i];
     tally.labelLayer(step.layerId, step.label);
-    t = place(`${chain.id}:${i}`, chain.id, step.layerId, `${chain.label}: ${step.label}`, readyAt[bestChain], start, durations[bestChain][i]);
+    const taskId = `${chain.id}:${i}`;
+    const label = `${chain.label}: ${step.label}`;
+    t = place(taskId, chain.id, step.layerId, label, readyAt[bestChain], start, durations[bestChain][i]);
     readyAt[bestChain] = t + step.waitHoursAfter;
     next[bestChain] = i + 1;
     if (next[bestChain] < durations[bestChain].length) {
       startWhenReady[bestChain] = time.earliestStart(readyAt[bestChain], durations[bestChain][i + 1]);
       waiting.push(bestChain);
+      if (step.waitHoursAfter > EPS) {
+        const until = readyAt[bestChain];
+        const untilDay = Math.floor(until / 24);
+        const date = tasks[tasks.length - 1].endDate;
+        waits.push({ taskId, chainId: chain.id, layerId: step.layerId, label, date, untilDate: dateOf(untilDay), untilHour: until - untilDay * 24 });
+      }
     }
   }
   if (input.cleanupHours > 0) {
@@ -256,6 +284,7 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
   return {
     steps,
     tasks,
+    waits,
     days: tally.days,
     milestones: tally.milestones(),
     finishDate: fromDayNumber(lastEndDay),
