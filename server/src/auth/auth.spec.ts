@@ -104,7 +104,7 @@ describe('password reset by e-mailed link', () => {
     const again = await agent.post('/api/auth/password-reset/complete').set('x-csrf-token', done.body.csrfToken).send({ token, password: 'a-brand-new-pass-43' });
     expect(again.status).toBe(410);
     expect((await elsewhere.get('/api/auth/session')).body.user).toBeNull();
-    expect((await elsewhere.get('/api/team')).status).toBe(401);
+    expect((await elsewhere.get('/api/team/members')).status).toBe(401);
   });
 
   it('answers the same for an unknown e-mail', async () => {

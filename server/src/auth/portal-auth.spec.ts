@@ -28,7 +28,7 @@ describe('portal sign-in by e-mailed one-time link', () => {
     expect(signedIn.body.client).toMatchObject({ email, firmName: 'Lantern Street Plaster' });
     expect((await c.agent.get('/api/portal/proposals')).body).toEqual({ items: [] });
     // A client is not staff.
-    expect((await c.agent.get('/api/team')).status).toBe(401);
+    expect((await c.agent.get('/api/team/members')).status).toBe(401);
     const again = await (await newAgent(t.app, 'portal')).agent.post('/api/portal/auth/redeem').set('x-csrf-token', signedIn.body.csrfToken).send({ token });
     expect([403, 410]).toContain(again.status);
   });

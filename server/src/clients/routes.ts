@@ -1,39 +1,58 @@
-import { clientCreate, clientListQuery, clientUpdate, contactCreate, siteCreate, siteUpdate, uuid } from '@layerbook/contracts';
+import {
+  clientCreate,
+  clientIdParam,
+  clientListQuery,
+  clientUpdate,
+  contactCreate,
+  siteCreate,
+  siteIdParam,
+  siteUpdate,
+  type ClientDetail,
+  type ClientSummary,
+  type ContactView,
+  type KeysetPage,
+  type SiteView,
+} from '@layerbook/contracts';
 import { Router } from 'express';
-import { z } from 'zod';
 import type { AppContext } from '../context';
+import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { addContact, addSite, createClient, getClient, listClients, updateClient, updateSite } from './service';
-
-const idParam = z.strictObject({ id: uuid('client id') });
-const siteParam = z.strictObject({ id: uuid('site id') });
 
 export function clientRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => listClients(tx, parse(clientListQuery, req.query))));
+    const page = await withStaff(ctx, req, 'office', (tx) => listClients(tx, parse(clientListQuery, req.query)));
+    res.json(page satisfies KeysetPage<ClientSummary>);
   });
 
   router.post('/', async (req, res) => {
-    res.status(201).json(await withStaff(ctx, req, 'office', (tx, staff) => createClient(tx, staff.id, parse(clientCreate, req.body))));
+    const created = await withStaff(ctx, req, 'office', (tx, staff) => createClient(tx, staffActor(staff), parse(clientCreate, req.body)));
+    res.status(201).json(created satisfies ClientSummary);
   });
 
   router.get('/:id', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => getClient(tx, parse(idParam, req.params).id)));
+    const detail = await withStaff(ctx, req, 'office', (tx) => getClient(tx, parse(clientIdParam, req.params).id));
+    res.json(detail satisfies ClientDetail);
   });
 
   router.patch('/:id', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => updateClient(tx, parse(idParam, req.params).id, parse(clientUpdate, req.body))));
+    const updated = await withStaff(ctx, req, 'office', (tx) =>
+      updateClient(tx, parse(clientIdParam, req.params).id, parse(clientUpdate, req.body), ctx.now()),
+    );
+    res.json(updated satisfies ClientSummary);
   });
 
   router.post('/:id/contacts', async (req, res) => {
-    res.status(201).json(await withStaff(ctx, req, 'office', (tx) => addContact(tx, parse(idParam, req.params).id, parse(contactCreate, req.body))));
+    const contact = await withStaff(ctx, req, 'office', (tx) => addContact(tx, parse(clientIdParam, req.params).id, parse(contactCreate, req.body)));
+    res.status(201).json(contact satisfies ContactView);
   });
 
   router.post('/:id/sites', async (req, res) => {
-    res.status(201).json(await withStaff(ctx, req, 'office', (tx) => addSite(tx, parse(idParam, req.params).id, parse(siteCreate, req.body))));
+    const site = await withStaff(ctx, req, 'office', (tx) => addSite(tx, parse(clientIdParam, req.params).id, parse(siteCreate, req.body)));
+    res.status(201).json(site satisfies SiteView);
   });
 
   return router;
@@ -43,7 +62,8 @@ export function clientRoutes(ctx: AppContext): Router {
 export function siteRoutes(ctx: AppContext): Router {
   const router = Router();
   router.patch('/:id', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => updateSite(tx, parse(siteParam, req.params).id, parse(siteUpdate, req.body))));
+    const site = await withStaff(ctx, req, 'office', (tx) => updateSite(tx, parse(siteIdParam, req.params).id, parse(siteUpdate, req.body)));
+    res.json(site satisfies SiteView);
   });
   return router;
 }

@@ -1,13 +1,27 @@
-import type { ClientCreate, ClientDetail, ClientSummary, ContactCreate, Page, SiteCreate, SiteView } from '@layerbook/contracts';
+import type {
+  ClientCreate,
+  ClientDetail,
+  ClientListQuery,
+  ClientSummary,
+  ClientUpdate,
+  ContactCreate,
+  ContactView,
+  KeysetPage,
+  SiteCreate,
+  SiteUpdate,
+  SiteView,
+} from '@layerbook/contracts';
 import { and, clientContacts, clients, desc, eq, inquiries, sites, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
+import type { Actor } from '../http/actor';
 import { notFound } from '../http/problem';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
 
 type ClientRow = typeof clients.$inferSelect;
 type SiteRow = typeof sites.$inferSelect;
+type ContactRow = typeof clientContacts.$inferSelect;
 
-const toSummary = (c: ClientRow): ClientSummary => ({
+const toSummary = (c: Pick<ClientRow, keyof ClientSummary>): ClientSummary => ({
   id: c.id,
   kind: c.kind,
   isCompany: c.isCompany,
@@ -33,14 +47,17 @@ export const toSite = (s: SiteRow): SiteView => ({
   isPre1978: s.yearBuilt === null ? null : s.yearBuilt < 1978,
 });
 
-export async function createClient(tx: TenantTx, actorUserId: string, input: ClientCreate): Promise<ClientSummary> {
+const toContact = (c: ContactRow): ContactView => ({ id: c.id, name: c.name, email: c.email, phone: c.phone, roleTitle: c.roleTitle });
+
+export async function createClient(tx: TenantTx, actor: Actor, input: ClientCreate): Promise<ClientSummary> {
   const [row] = await tx.db.insert(clients).values({ ...input, tenantId: tx.tenantId }).returning();
-  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'client.created', entity: 'client', entityId: row!.id });
+  const actorUserId = actor.kind === 'staff' ? actor.userId : null;
+  await recordAudit(tx, { actorUserId, actorKind: actor.kind, action: 'client.created', entity: 'client', entityId: row!.id });
   return toSummary(row!);
 }
 
-export async function updateClient(tx: TenantTx, id: string, patch: Partial<ClientCreate>): Promise<ClientSummary> {
-  const [row] = await tx.db.update(clients).set({ ...patch, updatedAt: new Date() }).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id))).returning();
+export async function updateClient(tx: TenantTx, id: string, patch: ClientUpdate, now: Date): Promise<ClientSummary> {
+  const [row] = await tx.db.update(clients).set({ ...patch, updatedAt: now }).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id))).returning();
   if (!row) throw notFound('client');
   if (patch.email !== undefined) {
     // Portal access follows the client's address: an old or mistyped address stops seeing their
@@ -57,7 +74,20 @@ export async function updateClient(tx: TenantTx, id: string, patch: Partial<Clie
   return toSummary(row);
 }
 
-export async function listClients(tx: TenantTx, q: { q?: string; kind?: ClientRow['kind']; after?: string; limit: number }): Promise<Page<ClientSummary>> {
+/** One row of the client list query: the summary's columns plus the cursor's exact timestamp text. */
+interface ClientListRow {
+  id: string;
+  kind: ClientRow['kind'];
+  is_company: boolean;
+  name: string;
+  email: string;
+  phone: string;
+  created_at: Date;
+  cursor_at: string;
+}
+
+/** Newest first, keyset over (created_at, id), so a deep page costs the same as the first. */
+export async function listClients(tx: TenantTx, q: ClientListQuery): Promise<KeysetPage<ClientSummary>> {
   const values: unknown[] = [tx.tenantId];
   const where = ['tenant_id = $1'];
   const add = (v: unknown) => `$${values.push(v)}`;
@@ -70,14 +100,15 @@ export async function listClients(tx: TenantTx, q: { q?: string; kind?: ClientRo
     const c = decodeCursor(q.after);
     where.push(`(created_at, id) < (${add(c.sortValue)}::timestamptz, ${add(c.id)}::uuid)`);
   }
-  const { rows } = await tx.client.query(
-    `select *, created_at::text as cursor_at from clients where ${where.join(' and ')} order by created_at desc, id desc limit ${add(q.limit + 1)}`,
+  const { rows } = await tx.client.query<ClientListRow>(
+    `select id, kind, is_company, name, email, phone, created_at, created_at::text as cursor_at
+       from clients where ${where.join(' and ')} order by created_at desc, id desc limit ${add(q.limit + 1)}`,
     values,
   );
   const page = rows.slice(0, q.limit);
   const last = page[page.length - 1];
   return {
-    items: page.map((r) => ({ id: r.id, kind: r.kind, isCompany: r.is_company, name: r.name, email: r.email, phone: r.phone, createdAt: r.created_at.toISOString() })),
+    items: page.map((r) => toSummary({ id: r.id, kind: r.kind, isCompany: r.is_company, name: r.name, email: r.email, phone: r.phone, createdAt: r.created_at })),
     nextCursor: rows.length > q.limit && last ? encodeCursor(last.cursor_at, last.id) : null,
   };
 }
@@ -96,7 +127,7 @@ export async function getClient(tx: TenantTx, id: string): Promise<ClientDetail>
   return {
     ...toSummary(client),
     notes: client.notes,
-    contacts: contacts.map((c) => ({ id: c.id, name: c.name, email: c.email, phone: c.phone, roleTitle: c.roleTitle })),
+    contacts: contacts.map(toContact),
     sites: siteRows.map(toSite),
     inquiries: linked.map((i) => ({ ...i, createdAt: i.createdAt.toISOString() })),
   };
@@ -107,10 +138,10 @@ async function assertClient(tx: TenantTx, clientId: string): Promise<void> {
   if (!found.length) throw notFound('client');
 }
 
-export async function addContact(tx: TenantTx, clientId: string, input: ContactCreate) {
+export async function addContact(tx: TenantTx, clientId: string, input: ContactCreate): Promise<ContactView> {
   await assertClient(tx, clientId);
   const [row] = await tx.db.insert(clientContacts).values({ ...input, clientId, tenantId: tx.tenantId }).returning();
-  return { id: row!.id, name: row!.name, email: row!.email, phone: row!.phone, roleTitle: row!.roleTitle };
+  return toContact(row!);
 }
 
 export async function addSite(tx: TenantTx, clientId: string, input: SiteCreate): Promise<SiteView> {
@@ -119,7 +150,7 @@ export async function addSite(tx: TenantTx, clientId: string, input: SiteCreate)
   return toSite(row!);
 }
 
-export async function updateSite(tx: TenantTx, siteId: string, patch: Partial<SiteCreate>): Promise<SiteView> {
+export async function updateSite(tx: TenantTx, siteId: string, patch: SiteUpdate): Promise<SiteView> {
   const [row] = await tx.db.update(sites).set(patch).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, siteId))).returning();
   if (!row) throw notFound('site');
   return toSite(row);

@@ -1,6 +1,7 @@
-import { estimatingSettings, firmSettingsUpdate } from '@layerbook/contracts';
+import { estimatingSettings, firmSettingsUpdate, type EstimatingSettingsView, type FirmSettings } from '@layerbook/contracts';
 import { Router } from 'express';
 import type { AppContext } from '../context';
+import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
 import { badRequest } from '../http/problem';
 import { parse } from '../http/validate';
@@ -13,26 +14,30 @@ export function firmRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'crew', (tx) => getFirm(tx)));
+    const firm = await withStaff(ctx, req, 'crew', (tx) => getFirm(tx));
+    res.json(firm satisfies FirmSettings);
   });
 
   router.patch('/', async (req, res) => {
-    res.json(
-      await withStaff(ctx, req, 'owner', (tx, staff) => {
-        const input = parse(firmSettingsUpdate, req.body);
-        if (!isKnownCurrency(input.currency)) throw badRequest([{ field: 'currency', message: 'Choose a currency from the list.' }]);
-        return updateFirm(tx, staff.id, input);
-      }),
-    );
+    const firm = await withStaff(ctx, req, 'owner', (tx, staff) => {
+      const input = parse(firmSettingsUpdate, req.body);
+      if (!isKnownCurrency(input.currency)) throw badRequest([{ field: 'currency', message: 'Choose a currency from the list.' }]);
+      return updateFirm(tx, staffActor(staff), input, ctx.now());
+    });
+    res.json(firm satisfies FirmSettings);
   });
 
   // Rates and margins are money figures: office reads them, the owner sets them, crew never sees them.
   router.get('/estimating', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => getEstimatingSettings(tx)));
+    const view = await withStaff(ctx, req, 'office', (tx) => getEstimatingSettings(tx));
+    res.json(view satisfies EstimatingSettingsView);
   });
 
   router.put('/estimating', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'owner', (tx, staff) => saveEstimatingSettings(tx, staff.id, parse(estimatingSettings, req.body))));
+    const view = await withStaff(ctx, req, 'owner', (tx, staff) =>
+      saveEstimatingSettings(tx, staffActor(staff), parse(estimatingSettings, req.body), ctx.now()),
+    );
+    res.json(view satisfies EstimatingSettingsView);
   });
 
   return router;

@@ -1,6 +1,7 @@
 import type { FirmSettings, FirmSettingsUpdate } from '@layerbook/contracts';
 import { eq, firms, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
+import type { Actor } from '../http/actor';
 import { notFound } from '../http/problem';
 
 type FirmRow = typeof firms.$inferSelect;
@@ -29,10 +30,13 @@ export async function getFirm(tx: TenantTx): Promise<FirmSettings> {
   return toSettings(firm);
 }
 
-export async function updateFirm(tx: TenantTx, actorUserId: string, input: FirmSettingsUpdate): Promise<FirmSettings> {
+export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettingsUpdate, now: Date): Promise<FirmSettings> {
   const before = await getFirm(tx);
-  const [updated] = await tx.db.update(firms).set({ ...input, updatedAt: new Date() }).where(eq(firms.id, tx.tenantId)).returning();
-  const changed = Object.keys(input).filter((k) => before[k as keyof FirmSettingsUpdate] !== input[k as keyof FirmSettingsUpdate]);
-  if (changed.length) await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'firm.settings_changed', entity: 'firm', entityId: tx.tenantId, data: { changed } });
+  const [updated] = await tx.db.update(firms).set({ ...input, updatedAt: now }).where(eq(firms.id, tx.tenantId)).returning();
+  const changed = (Object.keys(input) as (keyof FirmSettingsUpdate)[]).filter((k) => before[k] !== input[k]);
+  if (changed.length) {
+    const actorUserId = actor.kind === 'staff' ? actor.userId : null;
+    await recordAudit(tx, { actorUserId, actorKind: actor.kind, action: 'firm.settings_changed', entity: 'firm', entityId: tx.tenantId, data: { changed } });
+  }
   return toSettings(updated!);
 }

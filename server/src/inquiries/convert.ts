@@ -1,14 +1,15 @@
-import type { InquiryConvert } from '@layerbook/contracts';
+import { DEFAULT_COUNTRY, type InquiryConversion, type InquiryConvert } from '@layerbook/contracts';
 import { and, clients, eq, inquiries, sites, TenantTx } from '@layerbook/db';
 import { addSite, createClient } from '../clients/service';
+import type { Actor } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
-import { logActivity, type Actor } from './service';
+import { logActivity } from './service';
 
 /**
  * Links an inquiry to a client and a site — existing ones, given ones, or ones made from what the
  * prospect already told us — so booking a visit or winning never means retyping.
  */
-export async function convertInquiry(tx: TenantTx, actor: Actor & { userId: string }, id: string, input: InquiryConvert): Promise<{ clientId: string; siteId: string | null }> {
+export async function convertInquiry(tx: TenantTx, actor: Actor, id: string, input: InquiryConvert, now: Date): Promise<InquiryConversion> {
   const inq = (await tx.db.select().from(inquiries).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id))).for('update'))[0];
   if (!inq) throw notFound('inquiry');
 
@@ -17,7 +18,7 @@ export async function convertInquiry(tx: TenantTx, actor: Actor & { userId: stri
     const found = await tx.db.select({ id: clients.id }).from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)));
     if (!found.length) throw badRequest([{ field: 'clientId', message: 'Choose a client of this firm.' }]);
   } else {
-    const made = await createClient(tx, actor.userId, input.client ?? {
+    const made = await createClient(tx, actor, input.client ?? {
       kind: 'homeowner',
       isCompany: false,
       name: inq.contactName,
@@ -40,14 +41,14 @@ export async function convertInquiry(tx: TenantTx, actor: Actor & { userId: stri
       city: '',
       region: '',
       postalCode: '',
-      country: 'US',
+      country: DEFAULT_COUNTRY,
       yearBuilt: inq.yearBuilt,
       accessNotes: '',
     });
     siteId = made.id;
   }
 
-  await tx.db.update(inquiries).set({ clientId, siteId, updatedAt: new Date() }).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
+  await tx.db.update(inquiries).set({ clientId, siteId, updatedAt: now }).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
   await logActivity(tx, actor, id, 'converted', '', { clientId, siteId });
   return { clientId, siteId };
 }

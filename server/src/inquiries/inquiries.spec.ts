@@ -117,11 +117,11 @@ describe('public inquiry form', () => {
 describe('inquiries in admin', () => {
   it('creates, moves through stages, logs activity and audits stage changes and reassignment', async () => {
     const o = await firmWithSlug('Pipeline Plaster');
-    const team = await o.agent.get('/api/team');
+    const team = await o.agent.get('/api/team/members');
     const created = await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'Ambrose Fell', source: 'phone', estimatedValue: '18000.00', siteAddress: '3 Mill Lane', yearBuilt: 1952 });
     expect(created.status).toBe(201);
     const id = created.body.id;
-    const assigned = await o.agent.patch(`/api/inquiries/${id}`).set('x-csrf-token', o.csrf()).send({ assigneeUserId: team.body.members[0].userId, nextFollowUp: '2026-12-10' });
+    const assigned = await o.agent.patch(`/api/inquiries/${id}`).set('x-csrf-token', o.csrf()).send({ assigneeUserId: team.body.items[0].userId, nextFollowUp: '2026-12-10' });
     expect(assigned.body).toMatchObject({ assigneeName: 'Olive Owner', nextFollowUp: '2026-12-10' });
     const moved = await o.agent.post(`/api/inquiries/${id}/stage`).set('x-csrf-token', o.csrf()).send({ stage: 'visit_booked' });
     expect(moved.body.stage).toBe('visit_booked');
@@ -131,10 +131,38 @@ describe('inquiries in admin', () => {
     expect(client.body).toMatchObject({ name: 'Ambrose Fell', kind: 'homeowner' });
     expect(client.body.sites[0]).toMatchObject({ addressLine1: '3 Mill Lane', yearBuilt: 1952, isPre1978: true });
     const noted = await o.agent.post(`/api/inquiries/${id}/activities`).set('x-csrf-token', o.csrf()).send({ kind: 'call', body: 'Left a voicemail about Thursday' });
+    expect(noted.status).toBe(201);
     expect(noted.body.activities[0]).toMatchObject({ kind: 'call', body: 'Left a voicemail about Thursday', actorName: 'Olive Owner' });
     expect(noted.body.activities.map((a: { kind: string }) => a.kind)).toEqual(expect.arrayContaining(['created', 'assignment', 'follow_up', 'stage_change', 'converted', 'call']));
     const audit = await withTenant(t.ctx.pool, o.firmId, (tx) => tx.client.query(`select action from audit_log where entity_id = $1 order by created_at`, [id]));
     expect(audit.rows.map((r) => r.action)).toEqual(['inquiry.reassigned', 'inquiry.stage_changed']);
+    const conversion = await o.agent.post(`/api/inquiries/${id}/convert`).set('x-csrf-token', o.csrf()).send({});
+    expect(conversion.body).toEqual({ clientId: moved.body.clientId, siteId: moved.body.siteId });
+  });
+
+  it('answers the board as a list of stages in order, each with its count and cards', async () => {
+    const o = await firmWithSlug('Board Plaster');
+    const made = await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'Card One', source: 'phone' });
+    await o.agent.post(`/api/inquiries/${made.body.id}/stage`).set('x-csrf-token', o.csrf()).send({ stage: 'contacted' });
+    const board = await o.agent.get('/api/inquiries/board');
+    expect(Object.keys(board.body)).toEqual(['items']);
+    expect(board.body.items.map((c: { stage: string }) => c.stage)).toEqual(['new', 'contacted', 'visit_booked', 'samples', 'proposal_sent', 'won', 'lost']);
+    expect(board.body.items[1]).toMatchObject({ stage: 'contacted', label: 'Contacted', likelihoodPercent: 15, count: 1 });
+    expect(board.body.items[1].items.map((i: { contactName: string }) => i.contactName)).toEqual(['Card One']);
+    expect(board.body.items[0]).toMatchObject({ count: 0, items: [] });
+  });
+
+  it('lists the chance of winning by stage; the owner sets it, office reads it', async () => {
+    const o = await firmWithSlug('Likely Plaster');
+    const before = await o.agent.get('/api/inquiries/stages');
+    expect(before.body.items[0]).toEqual({ stage: 'new', label: 'New', likelihoodPercent: 10 });
+    expect(before.body.items).toHaveLength(7);
+    const likelihoods = { new: 5, contacted: 20, visit_booked: 30, samples: 55, proposal_sent: 65, won: 100, lost: 0 };
+    const saved = await o.agent.put('/api/inquiries/stages').set('x-csrf-token', o.csrf()).send({ likelihoods });
+    expect(saved.body.items.map((s: { likelihoodPercent: number }) => s.likelihoodPercent)).toEqual([5, 20, 30, 55, 65, 100, 0]);
+    const bad = await o.agent.put('/api/inquiries/stages').set('x-csrf-token', o.csrf()).send({ likelihoods: { ...likelihoods, samples: 120 } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors[0].field).toBe('likelihoods.samples');
   });
 
   it('requires a reason to mark an inquiry lost', async () => {

@@ -1,10 +1,10 @@
-import type { BoardColumn, InquiryListQuery, InquirySummary, Page, TodayView } from '@layerbook/contracts';
-import { INQUIRY_STAGES, STAGE_LABELS } from '@layerbook/contracts';
+import type { BoardColumn, InquiryListQuery, InquiryStage, InquirySummary, ItemList, KeysetPage, TodayView } from '@layerbook/contracts';
+import { INQUIRY_STAGES, STAGE_LABELS, UNASSIGNED } from '@layerbook/contracts';
 import { weightedPipeline } from '@layerbook/domain';
 import type { TenantTx } from '@layerbook/db';
+import type { FirmClock } from './clock';
 import { decodeCursor, encodeCursor } from './cursor';
 import { SUMMARY_COLUMNS, SUMMARY_FROM, SummaryRow, toSummary } from './rows';
-import type { FirmClock } from './service';
 import { stageLikelihoods } from './stage-settings';
 
 /**
@@ -18,6 +18,8 @@ const SORTS = {
   follow_up: { key: "coalesce(i.next_follow_up, '9999-12-31'::date)", cast: 'date', dir: 'asc', text: 'sort_value' },
 } as const;
 
+type ListRow = SummaryRow & { sort_value: string };
+
 export function buildListQuery(tenantId: string, q: InquiryListQuery): { text: string; values: unknown[] } {
   const sort = SORTS[q.sort];
   const values: unknown[] = [tenantId];
@@ -25,7 +27,7 @@ export function buildListQuery(tenantId: string, q: InquiryListQuery): { text: s
   const add = (v: unknown) => `$${values.push(v)}`;
   if (q.stage) where.push(`i.stage = ${add(q.stage)}`);
   if (q.source) where.push(`i.source = ${add(q.source)}`);
-  if (q.assignee === 'none') where.push('i.assignee_user_id is null');
+  if (q.assignee === UNASSIGNED) where.push('i.assignee_user_id is null');
   else if (q.assignee) where.push(`i.assignee_user_id = ${add(q.assignee)}`);
   if (q.q) {
     const like = add(`%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
@@ -40,10 +42,10 @@ export function buildListQuery(tenantId: string, q: InquiryListQuery): { text: s
   return { text, values };
 }
 
-export async function listInquiries(tx: TenantTx, q: InquiryListQuery, today: string): Promise<Page<InquirySummary>> {
+export async function listInquiries(tx: TenantTx, q: InquiryListQuery, today: string): Promise<KeysetPage<InquirySummary>> {
   const { text, values } = buildListQuery(tx.tenantId, q);
-  const { rows } = await tx.client.query(text, values);
-  const page = (rows as Array<SummaryRow & { sort_value: string }>).slice(0, q.limit);
+  const { rows } = await tx.client.query<ListRow>(text, values);
+  const page = rows.slice(0, q.limit);
   const last = page[page.length - 1];
   const sortKey = SORTS[q.sort].text;
   return {
@@ -53,43 +55,46 @@ export async function listInquiries(tx: TenantTx, q: InquiryListQuery, today: st
 }
 
 /** The board: every stage with its count and its most recent cards (won/lost show the latest few). */
-export async function getBoard(tx: TenantTx, clock: FirmClock, perColumn = 50): Promise<BoardColumn[]> {
+export async function getBoard(tx: TenantTx, clock: FirmClock, perColumn = 50): Promise<ItemList<BoardColumn>> {
   const likelihood = await stageLikelihoods(tx);
-  const { rows: counts } = await tx.client.query(`select stage, count(*)::int as n from inquiries where tenant_id = $1 group by stage`, [tx.tenantId]);
-  const countOf = new Map((counts as Array<{ stage: string; n: number }>).map((c) => [c.stage, c.n]));
-  const { rows } = await tx.client.query(
+  const { rows: counts } = await tx.client.query<{ stage: InquiryStage; n: number }>(
+    `select stage, count(*)::int as n from inquiries where tenant_id = $1 group by stage`,
+    [tx.tenantId],
+  );
+  const countOf = new Map(counts.map((c) => [c.stage, c.n]));
+  const { rows } = await tx.client.query<SummaryRow>(
     `select * from (select ${SUMMARY_COLUMNS}, row_number() over (partition by i.stage order by i.created_at desc, i.id desc) as rn
        ${SUMMARY_FROM} where i.tenant_id = $1) ranked where rn <= $2 order by created_at desc, id desc`,
     [tx.tenantId, perColumn],
   );
-  return INQUIRY_STAGES.map((stage) => ({
-    stage,
-    label: STAGE_LABELS[stage],
-    likelihoodPercent: likelihood[stage],
-    count: countOf.get(stage) ?? 0,
-    items: (rows as SummaryRow[]).filter((r) => r.stage === stage).map((r) => toSummary(r, clock.today)),
-  }));
+  return {
+    items: INQUIRY_STAGES.map((stage) => ({
+      stage,
+      label: STAGE_LABELS[stage],
+      likelihoodPercent: likelihood[stage],
+      count: countOf.get(stage) ?? 0,
+      items: rows.filter((r) => r.stage === stage).map((r) => toSummary(r, clock.today)),
+    })),
+  };
 }
 
 /** Today: follow-ups overdue and due, and the weighted value of open inquiries. */
 export async function getToday(tx: TenantTx, clock: FirmClock, userId?: string): Promise<TodayView> {
-  const { rows } = await tx.client.query(
+  const { rows } = await tx.client.query<SummaryRow>(
     `select ${SUMMARY_COLUMNS} ${SUMMARY_FROM}
       where i.tenant_id = $1 and i.next_follow_up <= $2::date and i.stage not in ('won', 'lost')
         ${userId ? 'and (i.assignee_user_id = $3 or i.assignee_user_id is null)' : ''}
       order by i.next_follow_up, i.created_at limit 200`,
     userId ? [tx.tenantId, clock.today, userId] : [tx.tenantId, clock.today],
   );
-  const due = (rows as SummaryRow[]).map((r) => toSummary(r, clock.today));
+  const due = rows.map((r) => toSummary(r, clock.today));
   const likelihood = await stageLikelihoods(tx);
-  const { rows: open } = await tx.client.query(
+  const { rows: open } = await tx.client.query<{ stage: InquiryStage; value: string; n: number }>(
     `select stage, coalesce(sum(estimated_value), 0)::text as value, count(*)::int as n
        from inquiries where tenant_id = $1 and stage not in ('won', 'lost') group by stage`,
     [tx.tenantId],
   );
-  const pipeline = weightedPipeline(
-    (open as Array<{ stage: keyof typeof likelihood; value: string }>).map((o) => ({ id: o.stage, value: o.value, probability: likelihood[o.stage] / 100 })),
-  );
+  const pipeline = weightedPipeline(open.map((o) => ({ id: o.stage, value: o.value, probability: likelihood[o.stage] / 100 })));
   return {
     localDate: clock.today,
     overdue: due.filter((d) => d.nextFollowUp! < clock.today),
@@ -97,7 +102,7 @@ export async function getToday(tx: TenantTx, clock: FirmClock, userId?: string):
     pipeline: {
       unweighted: pipeline.unweighted.toFixed(2),
       weighted: pipeline.weighted.toFixed(2),
-      openCount: (open as Array<{ n: number }>).reduce((s, o) => s + o.n, 0),
+      openCount: open.reduce((s, o) => s + o.n, 0),
       currency: clock.currency,
     },
   };

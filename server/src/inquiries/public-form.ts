@@ -1,7 +1,8 @@
 import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
-import type { InquirySource, PublicInquiryRequest } from '@layerbook/contracts';
+import type { InquirySource, PublicInquiryRequest, PublicSource } from '@layerbook/contracts';
 import { and, eq, firms, inArray, memberships, users, withLookup, withTenant } from '@layerbook/db';
 import type { AppContext } from '../context';
+import { SYSTEM_ACTOR } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
 import { inquiryAcknowledgementMail, inquiryNotificationMail } from '../mail/inquiry-templates';
@@ -31,7 +32,7 @@ function readStamp(secret: string, stamp: string | undefined, now: Date): { age:
 }
 
 /** Referrals keep their kind (they may be owed thanks or a fee); everything else is the web form. */
-function sourceFromForm(heardFrom: PublicInquiryRequest['heardFrom']): InquirySource {
+function sourceFromForm(heardFrom: PublicSource): InquirySource {
   return heardFrom === 'search_or_social' || heardFrom === 'other' ? 'web_form' : heardFrom;
 }
 
@@ -57,7 +58,8 @@ export async function submitPublicInquiry(ctx: AppContext, slug: string, input: 
     // A stamp files once: a replay (or a double click) is quietly dropped, like any bot.
     const fresh = await tx.client.query(`insert into used_form_stamps (nonce) values ($1) on conflict (nonce) do nothing`, [stamp.nonce]);
     if (fresh.rowCount !== 1) return 'ignored' as const;
-    const id = await createInquiry(tx, { userId: null, kind: 'client' }, {
+    // An anonymous prospect is no one we know yet: the form files it as the system does.
+    const id = await createInquiry(tx, SYSTEM_ACTOR, {
       contactName: input.name,
       email: input.email,
       phone: input.phone,

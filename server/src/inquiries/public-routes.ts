@@ -1,4 +1,4 @@
-import { publicInquiryRequest } from '@layerbook/contracts';
+import { publicInquiryRequest, type Notice, type PublicFirm } from '@layerbook/contracts';
 import express, { RequestHandler, Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { z } from 'zod';
@@ -26,14 +26,15 @@ export function publicRoutes(ctx: AppContext, limiter: RequestHandler): Router {
   router.get('/firms/:slug', async (req, res) => {
     const { slug } = parse(slugParam, req.params);
     const firm = await publicFirm(ctx, slug);
-    res.set('cache-control', 'no-store').json({ name: firm.name, slug, formStamp: formStamp(ctx.config.SESSION_SECRET, ctx.now()) });
+    const answer = { name: firm.name, slug, formStamp: formStamp(ctx.config.SESSION_SECRET, ctx.now()) } satisfies PublicFirm;
+    res.set('cache-control', 'no-store').json(answer);
   });
 
   router.post('/firms/:slug/inquiries', limiter, async (req, res) => {
     const { slug } = parse(slugParam, req.params);
     const input = parse(publicInquiryRequest, req.body);
     await submitPublicInquiry(ctx, slug, input);
-    res.status(201).json({ detail: 'Thank you. The firm has your inquiry and will be in touch.' });
+    res.status(201).json({ detail: 'Thank you. The firm has your inquiry and will be in touch.' } satisfies Notice);
   });
 
   return router;

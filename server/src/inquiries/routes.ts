@@ -1,94 +1,120 @@
-import { activityCreate, inquiryConvert, inquiryCreate, inquiryListQuery, inquiryUpdate, stageLikelihoodUpdate, stageMove, uuid } from '@layerbook/contracts';
+import {
+  activityCreate,
+  inquiryConvert,
+  inquiryCreate,
+  inquiryIdParam,
+  inquiryListQuery,
+  inquiryUpdate,
+  stageLikelihoodUpdate,
+  stageMove,
+  STAGES_THAT_FILE_A_CLIENT,
+  type BoardColumn,
+  type InquiryConversion,
+  type InquiryDetail,
+  type InquirySummary,
+  type ItemList,
+  type KeysetPage,
+  type StageLikelihood,
+  type TodayView,
+} from '@layerbook/contracts';
 import { Router } from 'express';
-import { z } from 'zod';
 import type { AppContext } from '../context';
+import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
+import type { StaffPrincipal } from '../http/principal';
 import { parse } from '../http/validate';
+import { staffClock } from './clock';
 import { convertInquiry } from './convert';
+import { getInquiry } from './detail';
 import { getBoard, getToday, listInquiries } from './list';
-import { addActivity, createInquiry, getInquiry, moveStage, staffClock, updateInquiry } from './service';
-import { saveStageLikelihoods, stageLikelihoods } from './stage-settings';
-
-const idParam = z.strictObject({ id: uuid('inquiry id') });
+import { addActivity, createInquiry, moveStage, updateInquiry } from './service';
+import { listStageLikelihoods, saveStageLikelihoods } from './stage-settings';
 
 /** Owner and office only: inquiries carry contact details and money figures (estimated value, pipeline). */
 export function inquiryRoutes(ctx: AppContext): Router {
   const router = Router();
-  const today = (staff: { timeZone: string; currency: string }) => staffClock(staff, ctx.now()).today;
+  const clock = (staff: StaffPrincipal) => staffClock(staff, ctx.now());
+  const today = (staff: StaffPrincipal) => clock(staff).today;
 
   router.get('/', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx, staff) => listInquiries(tx, parse(inquiryListQuery, req.query), today(staff))));
+    const page = await withStaff(ctx, req, 'office', (tx, staff) => listInquiries(tx, parse(inquiryListQuery, req.query), today(staff)));
+    res.json(page satisfies KeysetPage<InquirySummary>);
   });
 
   router.get('/board', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx, staff) => getBoard(tx, staffClock(staff, ctx.now()))));
+    const board = await withStaff(ctx, req, 'office', (tx, staff) => getBoard(tx, clock(staff)));
+    res.json(board satisfies ItemList<BoardColumn>);
   });
 
   router.get('/today', async (req, res) => {
     const mine = req.query['mine'] === 'true';
-    res.json(await withStaff(ctx, req, 'office', (tx, staff) => getToday(tx, staffClock(staff, ctx.now()), mine ? staff.id : undefined)));
+    const view = await withStaff(ctx, req, 'office', (tx, staff) => getToday(tx, clock(staff), mine ? staff.id : undefined));
+    res.json(view satisfies TodayView);
   });
 
   router.get('/stages', async (req, res) => {
-    res.json({ likelihoods: await withStaff(ctx, req, 'office', (tx) => stageLikelihoods(tx)) });
+    const stages = await withStaff(ctx, req, 'office', (tx) => listStageLikelihoods(tx));
+    res.json(stages satisfies ItemList<StageLikelihood>);
   });
 
   router.put('/stages', async (req, res) => {
-    const likelihoods = await withStaff(ctx, req, 'owner', (tx, staff) => saveStageLikelihoods(tx, staff.id, parse(stageLikelihoodUpdate, req.body).likelihoods));
-    res.json({ likelihoods });
+    const stages = await withStaff(ctx, req, 'owner', (tx, staff) =>
+      saveStageLikelihoods(tx, staffActor(staff), parse(stageLikelihoodUpdate, req.body).likelihoods),
+    );
+    res.json(stages satisfies ItemList<StageLikelihood>);
   });
 
   router.post('/', async (req, res) => {
     const created = await withStaff(ctx, req, 'office', async (tx, staff) => {
-      const id = await createInquiry(tx, { userId: staff.id, kind: 'staff' }, parse(inquiryCreate, req.body));
+      const id = await createInquiry(tx, staffActor(staff), parse(inquiryCreate, req.body));
       return getInquiry(tx, id, today(staff));
     });
-    res.status(201).json(created);
+    res.status(201).json(created satisfies InquiryDetail);
   });
 
   router.get('/:id', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx, staff) => getInquiry(tx, parse(idParam, req.params).id, today(staff))));
+    const detail = await withStaff(ctx, req, 'office', (tx, staff) => getInquiry(tx, parse(inquiryIdParam, req.params).id, today(staff)));
+    res.json(detail satisfies InquiryDetail);
   });
 
   router.patch('/:id', async (req, res) => {
     const updated = await withStaff(ctx, req, 'office', async (tx, staff) => {
-      const { id } = parse(idParam, req.params);
-      await updateInquiry(tx, { userId: staff.id, kind: 'staff' }, id, parse(inquiryUpdate, req.body));
+      const { id } = parse(inquiryIdParam, req.params);
+      await updateInquiry(tx, staffActor(staff), id, parse(inquiryUpdate, req.body), ctx.now());
       return getInquiry(tx, id, today(staff));
     });
-    res.json(updated);
+    res.json(updated satisfies InquiryDetail);
   });
 
   router.post('/:id/stage', async (req, res) => {
     const moved = await withStaff(ctx, req, 'office', async (tx, staff) => {
-      const { id } = parse(idParam, req.params);
+      const { id } = parse(inquiryIdParam, req.params);
       const move = parse(stageMove, req.body);
-      const actor = { userId: staff.id, kind: 'staff' as const };
-      await moveStage(tx, actor, id, move);
+      const actor = staffActor(staff);
+      await moveStage(tx, actor, id, move, ctx.now());
       // Booking the visit or winning the work files the prospect as a client with their site.
-      if ((move.stage === 'visit_booked' || move.stage === 'won') && !(await getInquiry(tx, id, today(staff))).clientId) {
-        await convertInquiry(tx, actor, id, {});
+      if (STAGES_THAT_FILE_A_CLIENT.includes(move.stage) && !(await getInquiry(tx, id, today(staff))).clientId) {
+        await convertInquiry(tx, actor, id, {}, ctx.now());
       }
       return getInquiry(tx, id, today(staff));
     });
-    res.json(moved);
+    res.json(moved satisfies InquiryDetail);
   });
 
   router.post('/:id/activities', async (req, res) => {
     const logged = await withStaff(ctx, req, 'office', async (tx, staff) => {
-      const { id } = parse(idParam, req.params);
-      await addActivity(tx, { userId: staff.id, kind: 'staff' }, id, parse(activityCreate, req.body));
+      const { id } = parse(inquiryIdParam, req.params);
+      await addActivity(tx, staffActor(staff), id, parse(activityCreate, req.body), ctx.now());
       return getInquiry(tx, id, today(staff));
     });
-    res.status(201).json(logged);
+    res.status(201).json(logged satisfies InquiryDetail);
   });
 
   router.post('/:id/convert', async (req, res) => {
-    res.json(
-      await withStaff(ctx, req, 'office', (tx, staff) =>
-        convertInquiry(tx, { userId: staff.id, kind: 'staff' }, parse(idParam, req.params).id, parse(inquiryConvert, req.body)),
-      ),
+    const conversion = await withStaff(ctx, req, 'office', (tx, staff) =>
+      convertInquiry(tx, staffActor(staff), parse(inquiryIdParam, req.params).id, parse(inquiryConvert, req.body), ctx.now()),
     );
+    res.json(conversion satisfies InquiryConversion);
   });
 
   return router;

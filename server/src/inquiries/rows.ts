@@ -1,4 +1,4 @@
-import type { InquiryDetail, InquirySummary } from '@layerbook/contracts';
+import { isBudgetRange, isOpenStage, type InquiryDetail, type InquirySummary } from '@layerbook/contracts';
 
 /** Columns every inquiry listing selects (raw SQL, so the list stays one indexed query). */
 export const SUMMARY_COLUMNS = `i.id, i.contact_name, i.email, i.phone, i.site_address, i.stage, i.source, i.referrer_name,
@@ -7,6 +7,7 @@ export const SUMMARY_COLUMNS = `i.id, i.contact_name, i.email, i.phone, i.site_a
 
 export const SUMMARY_FROM = `from inquiries i left join users u on u.id = i.assignee_user_id`;
 
+/** One row of SUMMARY_COLUMNS. */
 export interface SummaryRow {
   id: string;
   contact_name: string;
@@ -24,8 +25,24 @@ export interface SummaryRow {
   created_at_text: string;
 }
 
+/** The columns the detail page adds to the summary's. */
+export const DETAIL_COLUMNS = `i.year_built, i.rooms, i.finish_idea, i.timeline, i.budget_range,
+  i.consent_to_contact, i.lost_reason, i.client_id, i.site_id`;
+
+/** One row of SUMMARY_COLUMNS and DETAIL_COLUMNS. */
+export interface DetailRow extends SummaryRow {
+  year_built: number | null;
+  rooms: string;
+  finish_idea: string;
+  timeline: string;
+  budget_range: string;
+  consent_to_contact: boolean;
+  lost_reason: string;
+  client_id: string | null;
+  site_id: string | null;
+}
+
 export function toSummary(r: SummaryRow, today: string): InquirySummary {
-  const open = r.stage !== 'won' && r.stage !== 'lost';
   return {
     id: r.id,
     contactName: r.contact_name,
@@ -39,9 +56,24 @@ export function toSummary(r: SummaryRow, today: string): InquirySummary {
     assigneeUserId: r.assignee_user_id,
     assigneeName: r.assignee_name,
     nextFollowUp: r.next_follow_up,
-    isFollowUpOverdue: open && r.next_follow_up !== null && r.next_follow_up < today,
+    isFollowUpOverdue: isOpenStage(r.stage) && r.next_follow_up !== null && r.next_follow_up < today,
     createdAt: r.created_at.toISOString(),
   };
 }
 
-export type DetailExtras = Omit<InquiryDetail, keyof InquirySummary | 'activities'>;
+export function toDetail(r: DetailRow, today: string, activities: InquiryDetail['activities']): InquiryDetail {
+  return {
+    ...toSummary(r, today),
+    yearBuilt: r.year_built,
+    rooms: r.rooms,
+    finishIdea: r.finish_idea,
+    timeline: r.timeline,
+    // The column is free text; anything the form no longer offers reads as not said.
+    budgetRange: isBudgetRange(r.budget_range) ? r.budget_range : '',
+    consentToContact: r.consent_to_contact,
+    lostReason: r.lost_reason,
+    clientId: r.client_id,
+    siteId: r.site_id,
+    activities,
+  };
+}

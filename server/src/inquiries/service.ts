@@ -1,31 +1,15 @@
-import type { InquiryCreate, InquiryDetail, InquiryStage, InquiryUpdate, StageMove, ActivityCreate } from '@layerbook/contracts';
-import { and, eq, firms, inquiries, inquiryActivities, memberships, TenantTx, users } from '@layerbook/db';
+import type { ActivityCreate, ActivityKind, InquiryCreate, InquiryStage, InquiryUpdate, StageMove } from '@layerbook/contracts';
+import { and, eq, inquiries, inquiryActivities, memberships, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
-import { localDate } from '../firms/local-date';
+import type { Actor } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
-import { SUMMARY_COLUMNS, SUMMARY_FROM, SummaryRow, toSummary } from './rows';
 
-export interface Actor {
-  readonly userId: string | null;
-  readonly kind: 'staff' | 'client' | 'system';
-}
-
-export interface FirmClock {
-  readonly timeZone: string;
-  readonly currency: string;
-  readonly today: string;
-}
-
-/** The clock of a signed-in staff member's firm, without a query. */
-export function staffClock(staff: { timeZone: string; currency: string }, now: Date): FirmClock {
-  return { timeZone: staff.timeZone, currency: staff.currency, today: localDate(staff.timeZone, now) };
-}
-
-export async function firmClock(tx: TenantTx, now: Date): Promise<FirmClock> {
-  const firm = (await tx.db.select({ timeZone: firms.timeZone, currency: firms.currency }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
-  if (!firm) throw notFound('firm');
-  return { ...firm, today: localDate(firm.timeZone, now) };
-}
+/**
+ * The log and the audit name a staff member by their user id. A portal client is not a user, and
+ * the public form and queue jobs are no one, so their lines carry no person (they read as the form
+ * or the system).
+ */
+const staffUserId = (actor: Actor): string | null => (actor.kind === 'staff' ? actor.userId : null);
 
 async function assertAssignable(tx: TenantTx, userId: string | null | undefined): Promise<void> {
   if (!userId) return;
@@ -40,11 +24,15 @@ export async function logActivity(
   tx: TenantTx,
   actor: Actor,
   inquiryId: string,
-  kind: (typeof inquiryActivities.$inferInsert)['kind'],
+  kind: ActivityKind,
   body = '',
   data: Record<string, unknown> = {},
 ): Promise<void> {
-  await tx.db.insert(inquiryActivities).values({ tenantId: tx.tenantId, inquiryId, kind, body, data, actorUserId: actor.userId });
+  await tx.db.insert(inquiryActivities).values({ tenantId: tx.tenantId, inquiryId, kind, body, data, actorUserId: staffUserId(actor) });
+}
+
+async function audit(tx: TenantTx, actor: Actor, action: string, inquiryId: string, data: Record<string, unknown>): Promise<void> {
+  await recordAudit(tx, { actorUserId: staffUserId(actor), actorKind: actor.kind, action, entity: 'inquiry', entityId: inquiryId, data });
 }
 
 export async function createInquiry(tx: TenantTx, actor: Actor, input: InquiryCreate & { consentToContact?: boolean }): Promise<string> {
@@ -57,67 +45,42 @@ export async function createInquiry(tx: TenantTx, actor: Actor, input: InquiryCr
   return row!.id;
 }
 
-export async function getInquiry(tx: TenantTx, id: string, today: string): Promise<InquiryDetail> {
-  const { rows } = await tx.client.query(`select ${SUMMARY_COLUMNS}, i.year_built, i.rooms, i.finish_idea, i.timeline, i.budget_range,
-      i.consent_to_contact, i.lost_reason, i.client_id, i.site_id ${SUMMARY_FROM} where i.tenant_id = $1 and i.id = $2`, [tx.tenantId, id]);
-  const r = rows[0] as (SummaryRow & Record<string, unknown>) | undefined;
-  if (!r) throw notFound('inquiry');
-  const activities = await tx.db
-    .select({ id: inquiryActivities.id, kind: inquiryActivities.kind, body: inquiryActivities.body, data: inquiryActivities.data, actorName: users.name, createdAt: inquiryActivities.createdAt })
-    .from(inquiryActivities)
-    .leftJoin(users, eq(users.id, inquiryActivities.actorUserId))
-    .where(and(eq(inquiryActivities.tenantId, tx.tenantId), eq(inquiryActivities.inquiryId, id)))
-    .orderBy(inquiryActivities.createdAt);
-  return {
-    ...toSummary(r, today),
-    yearBuilt: (r['year_built'] as number | null) ?? null,
-    rooms: r['rooms'] as string,
-    finishIdea: r['finish_idea'] as string,
-    timeline: r['timeline'] as string,
-    budgetRange: r['budget_range'] as string,
-    consentToContact: r['consent_to_contact'] as boolean,
-    lostReason: r['lost_reason'] as string,
-    clientId: (r['client_id'] as string | null) ?? null,
-    siteId: (r['site_id'] as string | null) ?? null,
-    activities: activities.reverse().map((a) => ({ ...a, data: a.data as Record<string, unknown>, createdAt: a.createdAt.toISOString() })),
-  };
-}
-
-async function current(tx: TenantTx, id: string) {
+/** The inquiry's row, locked for the change about to be made. */
+async function lockInquiry(tx: TenantTx, id: string) {
   const row = (await tx.db.select().from(inquiries).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id))).for('update'))[0];
   if (!row) throw notFound('inquiry');
   return row;
 }
 
-export async function updateInquiry(tx: TenantTx, actor: Actor, id: string, patch: InquiryUpdate): Promise<void> {
-  const before = await current(tx, id);
+export async function updateInquiry(tx: TenantTx, actor: Actor, id: string, patch: InquiryUpdate, now: Date): Promise<void> {
+  const before = await lockInquiry(tx, id);
   if ('assigneeUserId' in patch) await assertAssignable(tx, patch.assigneeUserId);
-  await tx.db.update(inquiries).set({ ...patch, updatedAt: new Date() }).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
+  await tx.db.update(inquiries).set({ ...patch, updatedAt: now }).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
   if ('assigneeUserId' in patch && patch.assigneeUserId !== before.assigneeUserId) {
     const data = { from: before.assigneeUserId, to: patch.assigneeUserId ?? null };
     await logActivity(tx, actor, id, 'assignment', '', data);
-    await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'inquiry.reassigned', entity: 'inquiry', entityId: id, data });
+    await audit(tx, actor, 'inquiry.reassigned', id, data);
   }
   if ('nextFollowUp' in patch && patch.nextFollowUp !== before.nextFollowUp) {
     await logActivity(tx, actor, id, 'follow_up', '', { from: before.nextFollowUp, to: patch.nextFollowUp ?? null });
   }
 }
 
-export async function moveStage(tx: TenantTx, actor: Actor, id: string, move: StageMove): Promise<InquiryStage> {
-  const before = await current(tx, id);
+export async function moveStage(tx: TenantTx, actor: Actor, id: string, move: StageMove, now: Date): Promise<InquiryStage> {
+  const before = await lockInquiry(tx, id);
   if (before.stage === move.stage) return before.stage;
   await tx.db
     .update(inquiries)
-    .set({ stage: move.stage, lostReason: move.stage === 'lost' ? (move.lostReason ?? '') : '', stageChangedAt: new Date(), updatedAt: new Date() })
+    .set({ stage: move.stage, lostReason: move.stage === 'lost' ? (move.lostReason ?? '') : '', stageChangedAt: now, updatedAt: now })
     .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
   const data = { from: before.stage, to: move.stage, ...(move.stage === 'lost' ? { lostReason: move.lostReason } : {}) };
   await logActivity(tx, actor, id, 'stage_change', move.lostReason ?? '', data);
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'inquiry.stage_changed', entity: 'inquiry', entityId: id, data });
+  await audit(tx, actor, 'inquiry.stage_changed', id, data);
   return move.stage;
 }
 
-export async function addActivity(tx: TenantTx, actor: Actor, id: string, input: ActivityCreate): Promise<void> {
-  await current(tx, id);
+export async function addActivity(tx: TenantTx, actor: Actor, id: string, input: ActivityCreate, now: Date): Promise<void> {
+  await lockInquiry(tx, id);
   await logActivity(tx, actor, id, input.kind, input.body);
-  await tx.db.update(inquiries).set({ updatedAt: new Date() }).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
+  await tx.db.update(inquiries).set({ updatedAt: now }).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
 }

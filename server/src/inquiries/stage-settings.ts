@@ -1,6 +1,8 @@
-import { DEFAULT_STAGE_LIKELIHOOD, INQUIRY_STAGES, InquiryStage } from '@layerbook/contracts';
+import { DEFAULT_STAGE_LIKELIHOOD, INQUIRY_STAGES, STAGE_LABELS } from '@layerbook/contracts';
+import type { InquiryStage, ItemList, StageLikelihood } from '@layerbook/contracts';
 import { eq, inquiryStageSettings, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
+import type { Actor } from '../http/actor';
 
 /** The firm's likelihood per stage, falling back to the defaults for stages it has not set. */
 export async function stageLikelihoods(tx: TenantTx): Promise<Record<InquiryStage, number>> {
@@ -10,7 +12,17 @@ export async function stageLikelihoods(tx: TenantTx): Promise<Record<InquiryStag
   return result;
 }
 
-export async function saveStageLikelihoods(tx: TenantTx, actorUserId: string, values: Record<InquiryStage, number>): Promise<Record<InquiryStage, number>> {
+/** Every stage in order with its chance of ending in work, as GET/PUT /api/inquiries/stages answer. */
+export async function listStageLikelihoods(tx: TenantTx): Promise<ItemList<StageLikelihood>> {
+  const likelihood = await stageLikelihoods(tx);
+  return { items: INQUIRY_STAGES.map((stage) => ({ stage, label: STAGE_LABELS[stage], likelihoodPercent: likelihood[stage] })) };
+}
+
+export async function saveStageLikelihoods(
+  tx: TenantTx,
+  actor: Actor,
+  values: Readonly<Record<InquiryStage, number>>,
+): Promise<ItemList<StageLikelihood>> {
   for (const stage of INQUIRY_STAGES) {
     const likelihoodPercent = values[stage].toFixed(2);
     await tx.db
@@ -18,6 +30,7 @@ export async function saveStageLikelihoods(tx: TenantTx, actorUserId: string, va
       .values({ tenantId: tx.tenantId, stage, likelihoodPercent })
       .onConflictDoUpdate({ target: [inquiryStageSettings.tenantId, inquiryStageSettings.stage], set: { likelihoodPercent } });
   }
-  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'inquiry_stages.likelihoods_changed', entity: 'firm', entityId: tx.tenantId, data: values });
-  return stageLikelihoods(tx);
+  const actorUserId = actor.kind === 'staff' ? actor.userId : null;
+  await recordAudit(tx, { actorUserId, actorKind: actor.kind, action: 'inquiry_stages.likelihoods_changed', entity: 'firm', entityId: tx.tenantId, data: values });
+  return listStageLikelihoods(tx);
 }

@@ -84,22 +84,23 @@ describe('firm A with firm B ids, through every route', () => {
     const b = await signUpFirm(t.app, 'Firm B Glazing');
     const invitee = uniqueEmail('b-crew');
     const invitation = await b.agent.post('/api/team/invitations').set('x-csrf-token', b.csrf()).send({ email: invitee, role: 'crew' });
-    const bTeam = await b.agent.get('/api/team');
-    const bMemberId = bTeam.body.members[0].id as string;
+    const bTeam = await b.agent.get('/api/team/members');
+    const bMemberId = bTeam.body.items[0].id as string;
 
     expect((await a.agent.patch(`/api/team/members/${bMemberId}`).set('x-csrf-token', a.csrf()).send({ role: 'crew' })).status).toBe(404);
     expect((await a.agent.post(`/api/team/members/${bMemberId}/deactivate`).set('x-csrf-token', a.csrf()).send({})).status).toBe(404);
     expect((await a.agent.post(`/api/team/members/${bMemberId}/reactivate`).set('x-csrf-token', a.csrf()).send({})).status).toBe(404);
     expect((await a.agent.delete(`/api/team/invitations/${invitation.body.id}`).set('x-csrf-token', a.csrf())).status).toBe(404);
 
-    const aTeam = await a.agent.get('/api/team');
-    expect(JSON.stringify(aTeam.body)).not.toContain(invitee);
-    expect(JSON.stringify(aTeam.body)).not.toContain(b.email);
+    for (const path of ['/api/team/members', '/api/team/invitations']) {
+      const aTeam = await a.agent.get(path);
+      expect(JSON.stringify(aTeam.body)).not.toContain(invitee);
+      expect(JSON.stringify(aTeam.body)).not.toContain(b.email);
+    }
     expect((await a.agent.get('/api/firm')).body.name).toBe('Firm A Plaster');
 
-    const after = await b.agent.get('/api/team');
-    expect(after.body.members[0]).toMatchObject({ role: 'owner', status: 'active' });
-    expect(after.body.invitations[0]).toMatchObject({ email: invitee, status: 'pending' });
+    expect((await b.agent.get('/api/team/members')).body.items[0]).toMatchObject({ role: 'owner', status: 'active' });
+    expect((await b.agent.get('/api/team/invitations')).body.items[0]).toMatchObject({ email: invitee, status: 'pending' });
     // And B's invitation still works after A's attempts.
     const token = new URL(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(invitee)))).searchParams.get('token')!;
     expect((await (await newAgent(t.app)).agent.get(`/api/auth/invitations/${token}`)).body.firmName).toBe('Firm B Glazing');

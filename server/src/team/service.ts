@@ -1,4 +1,5 @@
-import type { InvitationCreate, StaffRole, TeamInvitation, TeamMember, TeamView } from '@layerbook/contracts';
+import { INVITATION_DAYS } from '@layerbook/contracts';
+import type { InvitationCreate, ItemList, MemberStatus, StaffRole, TeamInvitation, TeamMember } from '@layerbook/contracts';
 import { and, desc, eq, firms, invitations, isNull, memberships, TenantTx, users } from '@layerbook/db';
 import type { AppContext } from '../context';
 import { recordAudit } from '../audit/record';
@@ -8,13 +9,22 @@ import { conflict, notFound } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
 import { invitationMail } from '../mail/templates';
 
-export const INVITATION_DAYS = 7;
+type InvitationRow = typeof invitations.$inferSelect;
 
-function invitationStatus(inv: typeof invitations.$inferSelect, now: Date): TeamInvitation['status'] {
+function invitationStatus(inv: InvitationRow, now: Date): TeamInvitation['status'] {
   if (inv.acceptedAt) return 'accepted';
   if (inv.revokedAt) return 'revoked';
   return inv.expiresAt <= now ? 'expired' : 'pending';
 }
+
+const toInvitation = (inv: InvitationRow, now: Date): TeamInvitation => ({
+  id: inv.id,
+  email: inv.email,
+  role: inv.role,
+  status: invitationStatus(inv, now),
+  expiresAt: inv.expiresAt.toISOString(),
+  createdAt: inv.createdAt.toISOString(),
+});
 
 async function members(tx: TenantTx, you: string): Promise<TeamMember[]> {
   const rows = await tx.db
@@ -26,13 +36,16 @@ async function members(tx: TenantTx, you: string): Promise<TeamMember[]> {
   return rows.map((r) => ({ ...r, isYou: r.userId === you }));
 }
 
-export async function getTeam(tx: TenantTx, you: string, now: Date): Promise<TeamView> {
+/** Everyone who has joined the firm, in the order they joined; `you` marks the one asking. */
+export async function listMembers(tx: TenantTx, you: string): Promise<ItemList<TeamMember>> {
+  return { items: await members(tx, you) };
+}
+
+/** Invitations still worth showing: waiting for an answer, or expired unanswered (newest first, at most 100). */
+export async function listInvitations(tx: TenantTx, now: Date): Promise<ItemList<TeamInvitation>> {
   const invites = await tx.db.select().from(invitations).where(eq(invitations.tenantId, tx.tenantId)).orderBy(desc(invitations.createdAt)).limit(100);
   return {
-    members: await members(tx, you),
-    invitations: invites
-      .map((inv) => ({ id: inv.id, email: inv.email, role: inv.role, status: invitationStatus(inv, now), expiresAt: inv.expiresAt.toISOString(), createdAt: inv.createdAt.toISOString() }))
-      .filter((inv) => inv.status === 'pending' || inv.status === 'expired'),
+    items: invites.map((inv) => toInvitation(inv, now)).filter((inv) => inv.status === 'pending' || inv.status === 'expired'),
   };
 }
 
@@ -62,7 +75,7 @@ export async function invite(ctx: AppContext, tx: TenantTx, actor: StaffPrincipa
     ...invitationMail({ firmName: firm?.name ?? '', inviterName: actor.name, role: input.role, url: `${ctx.config.PUBLIC_URL}/accept-invitation?token=${token}`, days: INVITATION_DAYS }),
   });
   await recordAudit(tx, { actorUserId: actor.id, actorKind: 'staff', action: 'invitation.sent', entity: 'invitation', entityId: inv!.id, data: { email: input.email, role: input.role } });
-  return { id: inv!.id, email: inv!.email, role: inv!.role, status: 'pending', expiresAt: inv!.expiresAt.toISOString(), createdAt: inv!.createdAt.toISOString() };
+  return toInvitation(inv!, now);
 }
 
 export async function revokeInvitation(ctx: AppContext, tx: TenantTx, actor: StaffPrincipal, id: string): Promise<void> {
@@ -80,7 +93,7 @@ export async function changeMember(
   tx: TenantTx,
   actor: StaffPrincipal,
   membershipId: string,
-  change: { role?: StaffRole; status?: 'active' | 'deactivated' },
+  change: { role?: StaffRole; status?: MemberStatus },
 ): Promise<TeamMember> {
   const all = await members(tx, actor.id);
   const target = all.find((m) => m.id === membershipId);

@@ -38,8 +38,10 @@ describe('invitations, end to end through the e-mail', () => {
     const signin = await fresh.agent.post('/api/auth/signin').set('x-csrf-token', fresh.csrf()).send({ email, password: 'ledger-and-lime-77' });
     expect(signin.body.user.role).toBe('office');
 
-    const team = await owner.agent.get('/api/team');
-    expect(team.body.members.map((m: { email: string }) => m.email)).toContain(email);
+    const members = await owner.agent.get('/api/team/members');
+    expect(members.body.items.map((m: { email: string }) => m.email)).toContain(email);
+    // Accepted invitations leave the list of those waiting.
+    expect((await owner.agent.get('/api/team/invitations')).body).toEqual({ items: [] });
   });
 
   it('sends the invitation e-mail once even when its job runs twice', async () => {
@@ -94,7 +96,19 @@ describe('invitations, end to end through the e-mail', () => {
     } finally {
       t.setNow(null);
     }
+    t.setNow(new Date(Date.now() + 8 * 24 * 3600 * 1000));
+    try {
+      // A week on, the owner's own session has ended too: they sign in again to look.
+      const later = await newAgent(t.app);
+      await later.agent.post('/api/auth/signin').set('x-csrf-token', later.csrf()).send({ email: owner.email, password: owner.password });
+      const listed = await later.agent.get('/api/team/invitations');
+      expect(listed.body.items).toEqual([expect.objectContaining({ id: sent.body.id, email, status: 'expired' })]);
+    } finally {
+      t.setNow(null);
+    }
+    expect((await owner.agent.get('/api/team/invitations')).body.items[0]).toMatchObject({ id: sent.body.id, status: 'pending' });
     expect((await owner.agent.delete(`/api/team/invitations/${sent.body.id}`).set('x-csrf-token', owner.csrf())).status).toBe(204);
+    expect((await owner.agent.get('/api/team/invitations')).body).toEqual({ items: [] });
     const revoked = await (await newAgent(t.app)).agent.get(`/api/auth/invitations/${token}`);
     expect(revoked.status).toBe(410);
     expect(revoked.body.detail).toMatch(/withdrawn/);
@@ -116,7 +130,8 @@ describe('roles', () => {
   it('crew and office cannot invite, change roles or edit firm settings; they can read', async () => {
     for (const role of ['office', 'crew'] as const) {
       const { member } = await memberWithRole(role);
-      expect((await member.agent.get('/api/team')).status).toBe(200);
+      expect((await member.agent.get('/api/team/members')).status).toBe(200);
+      expect((await member.agent.get('/api/team/invitations')).status).toBe(200);
       expect((await member.agent.get('/api/firm')).status).toBe(200);
       expect((await member.agent.post('/api/team/invitations').set('x-csrf-token', member.csrf()).send({ email: uniqueEmail(), role: 'crew' })).status).toBe(403);
       const patch = await member.agent.patch('/api/firm').set('x-csrf-token', member.csrf()).send({});
@@ -126,27 +141,30 @@ describe('roles', () => {
 
   it('an anonymous caller gets 401 problem+json', async () => {
     const anon = await newAgent(t.app);
-    const res = await anon.agent.get('/api/team');
-    expect(res.status).toBe(401);
-    expect(res.headers['content-type']).toMatch(/problem\+json/);
+    for (const path of ['/api/team/members', '/api/team/invitations']) {
+      const res = await anon.agent.get(path);
+      expect(res.status).toBe(401);
+      expect(res.headers['content-type']).toMatch(/problem\+json/);
+    }
   });
 
   it('owner changes a role and deactivates a member, who then loses access at once', async () => {
     const { owner, member, userId } = await memberWithRole('crew');
-    const team = await owner.agent.get('/api/team');
-    const row = team.body.members.find((m: { userId: string }) => m.userId === userId);
+    const team = await owner.agent.get('/api/team/members');
+    const row = team.body.items.find((m: { userId: string }) => m.userId === userId);
     const changed = await owner.agent.patch(`/api/team/members/${row.id}`).set('x-csrf-token', owner.csrf()).send({ role: 'office' });
     expect(changed.body.role).toBe('office');
     expect((await member.agent.get('/api/auth/session')).body.user.role).toBe('office');
     const off = await owner.agent.post(`/api/team/members/${row.id}/deactivate`).set('x-csrf-token', owner.csrf()).send({});
     expect(off.body.status).toBe('deactivated');
-    expect((await member.agent.get('/api/team')).status).toBe(401);
+    expect((await member.agent.get('/api/team/members')).status).toBe(401);
   });
 
   it('never leaves a firm without an active owner', async () => {
     const owner = await signUpFirm(t.app);
-    const team = await owner.agent.get('/api/team');
-    const me = team.body.members[0];
+    const team = await owner.agent.get('/api/team/members');
+    expect(team.body.items).toEqual([expect.objectContaining({ role: 'owner', status: 'active', isYou: true })]);
+    const me = team.body.items[0];
     const demote = await owner.agent.patch(`/api/team/members/${me.id}`).set('x-csrf-token', owner.csrf()).send({ role: 'crew' });
     expect(demote.status).toBe(409);
     expect(demote.body.errors[0].field).toBe('role');

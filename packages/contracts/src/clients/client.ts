@@ -1,105 +1,83 @@
 import { z } from 'zod';
 import { email } from '../auth/fields';
+import { COUNTRY_CODE_PATTERN, PHONE_MAX_LENGTH } from '../common/field-limits';
 import { pageQuery, requiredText, text, uuid, yearBuilt } from '../common/fields';
+import { SEARCH_MAX_LENGTH } from '../common/lists';
+import { requestSchema } from '../common/schema-check';
+import {
+  CLIENT_KINDS,
+  CLIENT_LIMITS as L,
+  DEFAULT_COUNTRY,
+  type ClientCreate,
+  type ClientUpdate,
+  type ContactCreate,
+  type SiteCreate,
+  type SiteUpdate,
+} from './client-types';
 
-export const CLIENT_KINDS = ['homeowner', 'designer', 'general_contractor', 'other'] as const;
-export type ClientKind = (typeof CLIENT_KINDS)[number];
-export const CLIENT_KIND_LABELS: Record<ClientKind, string> = {
-  homeowner: 'Homeowner',
-  designer: 'Interior designer',
-  general_contractor: 'General contractor',
-  other: 'Other',
-};
+const optionalEmail = z.union([email, z.literal('')]);
 
-const optionalEmail = z.union([email, z.literal('')]).default('');
-
+/** Site fields with no defaults, so a partial update never blanks a field it does not name. */
 const siteFields = {
-  label: text(80),
-  addressLine1: requiredText(200, 'Enter the street address.'),
-  addressLine2: text(200),
-  city: text(80),
-  region: text(80),
-  postalCode: text(20),
-  country: z.string().trim().regex(/^[A-Z]{2}$/, { error: 'Use a two-letter country code, like US.' }),
+  label: text(L.siteLabel),
+  addressLine1: requiredText(L.addressLine1, 'Enter the street address.'),
+  addressLine2: text(L.addressLine2),
+  city: text(L.city),
+  region: text(L.region),
+  postalCode: text(L.postalCode),
+  country: z.string().trim().regex(COUNTRY_CODE_PATTERN, { error: 'Use a two-letter country code, like US.' }),
   yearBuilt: yearBuilt.nullable(),
-  accessNotes: text(2000),
+  accessNotes: text(L.accessNotes),
 };
-export const siteCreate = z.strictObject({
-  ...siteFields,
-  label: siteFields.label.default(''),
-  addressLine2: siteFields.addressLine2.default(''),
-  city: siteFields.city.default(''),
-  region: siteFields.region.default(''),
-  postalCode: siteFields.postalCode.default(''),
-  country: siteFields.country.default('US'),
-  yearBuilt: siteFields.yearBuilt.default(null),
-  accessNotes: siteFields.accessNotes.default(''),
-});
-export type SiteCreate = z.infer<typeof siteCreate>;
-/** No defaults: a partial update changes only what it names. */
-export const siteUpdate = z.strictObject(siteFields).partial();
+export const siteCreate = requestSchema<SiteCreate>()(
+  z.strictObject({
+    ...siteFields,
+    label: siteFields.label.default(''),
+    addressLine2: siteFields.addressLine2.default(''),
+    city: siteFields.city.default(''),
+    region: siteFields.region.default(''),
+    postalCode: siteFields.postalCode.default(''),
+    country: siteFields.country.default(DEFAULT_COUNTRY),
+    yearBuilt: siteFields.yearBuilt.default(null),
+    accessNotes: siteFields.accessNotes.default(''),
+  }),
+);
+export const siteUpdate = requestSchema<SiteUpdate>()(z.strictObject(siteFields).partial());
 
-export const contactCreate = z.strictObject({
-  name: requiredText(120, 'Enter the contact name.'),
-  email: optionalEmail,
-  phone: text(40).default(''),
-  roleTitle: text(80).default(''),
-});
-export type ContactCreate = z.infer<typeof contactCreate>;
+export const contactCreate = requestSchema<ContactCreate>()(
+  z.strictObject({
+    name: requiredText(L.contactName, 'Enter the contact name.'),
+    email: optionalEmail.default(''),
+    phone: text(PHONE_MAX_LENGTH).default(''),
+    roleTitle: text(L.roleTitle).default(''),
+  }),
+);
 
 const clientFields = {
   kind: z.enum(CLIENT_KINDS, { error: 'Choose homeowner, designer, general contractor or other.' }),
   isCompany: z.boolean({ error: 'Say whether this is a company.' }),
-  name: requiredText(160, 'Enter the client name.'),
-  email: z.union([email, z.literal('')]),
-  phone: text(40),
-  notes: text(5000),
+  name: requiredText(L.name, 'Enter the client name.'),
+  email: optionalEmail,
+  phone: text(PHONE_MAX_LENGTH),
+  notes: text(L.notes),
 };
-export const clientCreate = z.strictObject({
-  ...clientFields,
-  isCompany: clientFields.isCompany.default(false),
-  email: clientFields.email.default(''),
-  phone: clientFields.phone.default(''),
-  notes: clientFields.notes.default(''),
-});
-export type ClientCreate = z.infer<typeof clientCreate>;
-export const clientUpdate = z.strictObject(clientFields).partial();
+export const clientCreate = requestSchema<ClientCreate>()(
+  z.strictObject({
+    ...clientFields,
+    isCompany: clientFields.isCompany.default(false),
+    email: clientFields.email.default(''),
+    phone: clientFields.phone.default(''),
+    notes: clientFields.notes.default(''),
+  }),
+);
+export const clientUpdate = requestSchema<ClientUpdate>()(z.strictObject(clientFields).partial());
 
 export const clientListQuery = z.strictObject({
-  q: z.string().trim().max(100).optional(),
+  q: z.string().trim().max(SEARCH_MAX_LENGTH).optional(),
   kind: z.enum(CLIENT_KINDS, { error: 'Unknown kind.' }).optional(),
   ...pageQuery,
 });
+export type ClientListQuery = z.infer<typeof clientListQuery>;
 
-/** Booking a visit or winning: make or link the client and site from the inquiry without retyping. */
-export const inquiryConvert = z.strictObject({
-  clientId: uuid('client').optional(),
-  client: clientCreate.optional(),
-  siteId: uuid('site').optional(),
-  site: siteCreate.optional(),
-});
-export type InquiryConvert = z.infer<typeof inquiryConvert>;
-
-export interface SiteView extends SiteCreate {
-  readonly id: string;
-  readonly clientId: string;
-  readonly isPre1978: boolean | null;
-}
-export interface ContactView extends ContactCreate {
-  readonly id: string;
-}
-export interface ClientSummary {
-  readonly id: string;
-  readonly kind: ClientKind;
-  readonly isCompany: boolean;
-  readonly name: string;
-  readonly email: string;
-  readonly phone: string;
-  readonly createdAt: string;
-}
-export interface ClientDetail extends ClientSummary {
-  readonly notes: string;
-  readonly contacts: readonly ContactView[];
-  readonly sites: readonly SiteView[];
-  readonly inquiries: readonly { id: string; contactName: string; stage: string; createdAt: string }[];
-}
+export const clientIdParam = z.strictObject({ id: uuid('client id') });
+export const siteIdParam = z.strictObject({ id: uuid('site id') });

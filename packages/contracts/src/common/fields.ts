@@ -1,4 +1,11 @@
 import { z } from 'zod';
+import {
+  ISO_DATE_PATTERN,
+  MONEY_AMOUNT_PATTERN,
+  YEAR_BUILT_MAX,
+  YEAR_BUILT_MIN,
+} from './field-limits';
+import { CURSOR_MAX_LENGTH, PAGE_SIZE_DEFAULT, PAGE_SIZE_MAX } from './lists';
 
 /** Trimmed text with a length cap; empty allowed unless `min` says otherwise. */
 export const text = (max: number, label = 'This field') =>
@@ -11,11 +18,11 @@ export const requiredText = (max: number, missing: string) =>
 export const moneyAmount = z
   .string({ error: 'Enter an amount, like 1250.00.' })
   .trim()
-  .regex(/^\d{1,12}(\.\d{1,2})?$/, { error: 'Enter an amount with at most two decimals, like 1250.00.' });
+  .regex(MONEY_AMOUNT_PATTERN, { error: 'Enter an amount with at most two decimals, like 1250.00.' });
 
 export const isoDate = z
   .string({ error: 'Enter a date.' })
-  .regex(/^\d{4}-\d{2}-\d{2}$/, { error: 'Enter a date as YYYY-MM-DD.' })
+  .regex(ISO_DATE_PATTERN, { error: 'Enter a date as YYYY-MM-DD.' })
   .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d), {
     error: 'That date does not exist.',
   });
@@ -23,18 +30,20 @@ export const isoDate = z
 export const yearBuilt = z.coerce
   .number({ error: 'Enter a year like 1925.' })
   .int({ error: 'Enter a whole year like 1925.' })
-  .min(1600, { error: 'Enter a year after 1600.' })
-  .max(2100, { error: 'Enter a year before 2100.' });
+  .min(YEAR_BUILT_MIN, { error: `Enter a year after ${YEAR_BUILT_MIN}.` })
+  .max(YEAR_BUILT_MAX, { error: `Enter a year before ${YEAR_BUILT_MAX}.` });
 
 export const uuid = (label = 'id') => z.uuid({ error: `Not a valid ${label}.` });
 
+const pageSizeWords = `Use 1 to ${PAGE_SIZE_MAX}.`;
+
 /** Keyset page: `after` is an opaque cursor from the previous page. */
 export const pageQuery = {
-  after: z.string().max(200).optional(),
-  limit: z.coerce.number().int().min(1, { error: 'Use 1 to 100.' }).max(100, { error: 'Use 1 to 100.' }).default(50),
+  after: z.string().max(CURSOR_MAX_LENGTH).optional(),
+  limit: z.coerce
+    .number()
+    .int()
+    .min(1, { error: pageSizeWords })
+    .max(PAGE_SIZE_MAX, { error: pageSizeWords })
+    .default(PAGE_SIZE_DEFAULT),
 };
-
-export interface Page<T> {
-  readonly items: readonly T[];
-  readonly nextCursor: string | null;
-}

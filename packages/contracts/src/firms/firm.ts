@@ -1,12 +1,13 @@
 import { z } from 'zod';
-
-export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
-export const LANGUAGES = ['en', 'es'] as const;
+import { FIRM_NAME_MAX_LENGTH, FIRM_NAME_MIN_LENGTH } from '../auth/auth-types';
+import { COUNTRY_CODE_PATTERN, CURRENCY_CODE_PATTERN, PHONE_MAX_LENGTH } from '../common/field-limits';
+import { requestSchema } from '../common/schema-check';
+import { FIRM_PROFILE_LIMITS, LANGUAGES, UNIT_SYSTEMS, type FirmSettingsUpdate } from './firm-types';
 
 /** ISO 4217 code: three capital letters. The server checks it is a currency it can bill in. */
 const currency = z
   .string({ error: 'Choose a currency.' })
-  .regex(/^[A-Z]{3}$/, { error: 'Use a three-letter currency code, like USD.' });
+  .regex(CURRENCY_CODE_PATTERN, { error: 'Use a three-letter currency code, like USD.' });
 
 const timeZone = z
   .string({ error: 'Choose a time zone.' })
@@ -22,30 +23,22 @@ function isKnownTimeZone(tz: string): boolean {
   }
 }
 
-const line = (label: string, max = 120) =>
+const line = (label: string, max: number) =>
   z.string({ error: `Enter the ${label}.` }).trim().max(max, { error: `Use at most ${max} characters.` });
 
-export const firmSettingsUpdate = z.strictObject({
-  name: line('firm name').min(2, { error: 'Enter the firm name.' }),
-  addressLine1: line('street address'),
-  addressLine2: line('second address line'),
-  city: line('town or city', 80),
-  region: line('state, province or region', 80),
-  postalCode: line('postal code', 20),
-  country: z.string().trim().regex(/^[A-Z]{2}$/, { error: 'Use a two-letter country code, like US.' }),
-  phone: line('phone number', 40),
-  timeZone,
-  currency,
-  units: z.enum(UNIT_SYSTEMS, { error: 'Choose imperial or metric.' }),
-  language: z.enum(LANGUAGES, { error: 'Choose English or Spanish.' }),
-});
-export type FirmSettingsUpdate = z.infer<typeof firmSettingsUpdate>;
-
-export interface FirmSettings extends FirmSettingsUpdate {
-  readonly id: string;
-  readonly slug: string;
-  readonly updatedAt: string;
-}
-
-/** Currencies offered in the settings form (any Stripe currency is accepted by the API). */
-export const COMMON_CURRENCIES = ['USD', 'CAD', 'EUR', 'GBP', 'AUD', 'NZD', 'MXN', 'CHF', 'JPY'] as const;
+export const firmSettingsUpdate = requestSchema<FirmSettingsUpdate>()(
+  z.strictObject({
+    name: line('firm name', FIRM_NAME_MAX_LENGTH).min(FIRM_NAME_MIN_LENGTH, { error: 'Enter the firm name.' }),
+    addressLine1: line('street address', FIRM_PROFILE_LIMITS.addressLine1),
+    addressLine2: line('second address line', FIRM_PROFILE_LIMITS.addressLine2),
+    city: line('town or city', FIRM_PROFILE_LIMITS.city),
+    region: line('state, province or region', FIRM_PROFILE_LIMITS.region),
+    postalCode: line('postal code', FIRM_PROFILE_LIMITS.postalCode),
+    country: z.string().trim().regex(COUNTRY_CODE_PATTERN, { error: 'Use a two-letter country code, like US.' }),
+    phone: line('phone number', PHONE_MAX_LENGTH),
+    timeZone,
+    currency,
+    units: z.enum(UNIT_SYSTEMS, { error: 'Choose imperial or metric.' }),
+    language: z.enum(LANGUAGES, { error: 'Choose English or Spanish.' }),
+  }),
+);

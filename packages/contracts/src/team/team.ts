@@ -1,41 +1,11 @@
 import { z } from 'zod';
 import { email } from '../auth/fields';
-import { staffRole, StaffRole } from '../auth/roles';
+import { staffRole } from '../auth/roles';
+import { requestSchema } from '../common/schema-check';
+import type { InvitationCreate, MemberRoleUpdate } from './team-types';
 
-export const invitationCreate = z.strictObject({
-  email,
-  role: staffRole,
-});
-export type InvitationCreate = z.infer<typeof invitationCreate>;
+export const invitationCreate = requestSchema<InvitationCreate>()(z.strictObject({ email, role: staffRole }));
 
-export const memberRoleUpdate = z.strictObject({ role: staffRole });
-export type MemberRoleUpdate = z.infer<typeof memberRoleUpdate>;
+export const memberRoleUpdate = requestSchema<MemberRoleUpdate>()(z.strictObject({ role: staffRole }));
 
 export const idParam = z.strictObject({ id: z.uuid({ error: 'Not a valid id.' }) });
-
-export type MemberStatus = 'active' | 'deactivated';
-export type InvitationStatus = 'pending' | 'accepted' | 'revoked' | 'expired';
-
-export interface TeamMember {
-  readonly id: string;
-  readonly userId: string;
-  readonly name: string;
-  readonly email: string;
-  readonly role: StaffRole;
-  readonly status: MemberStatus;
-  readonly isYou: boolean;
-}
-
-export interface TeamInvitation {
-  readonly id: string;
-  readonly email: string;
-  readonly role: StaffRole;
-  readonly status: InvitationStatus;
-  readonly expiresAt: string;
-  readonly createdAt: string;
-}
-
-export interface TeamView {
-  readonly members: readonly TeamMember[];
-  readonly invitations: readonly TeamInvitation[];
-}

@@ -1,0 +1,113 @@
+/**
+ * Sign-in, sessions and roles without zod: roles with their words, field limits, what the apps
+ * send and what the auth routes answer. The zod schemas (auth.ts, fields.ts) are built from these.
+ */
+
+/** Staff roles of a firm, from most to least trusted. Clients use the portal only. */
+export const STAFF_ROLES = ['owner', 'office', 'crew'] as const;
+export type StaffRole = (typeof STAFF_ROLES)[number];
+
+/** How each role is named wherever people choose or see one. */
+export const STAFF_ROLE_LABELS: Readonly<Record<StaffRole, string>> = {
+  owner: 'Owner',
+  office: 'Office',
+  crew: 'Crew',
+};
+
+/** What each role may do, in one line, beside the role's name. */
+export const STAFF_ROLE_SUMMARIES: Readonly<Record<StaffRole, string>> = {
+  owner: 'Everything, including prices, money, settings and the team.',
+  office: 'Clients, proposals, invoices and payments; no settings or team changes.',
+  crew: 'Job sheets, mix amounts, schedules and photos; no money figures.',
+};
+
+/** owner ⊃ office ⊃ crew: a route or page that needs `office` admits owners too. */
+export function roleAtLeast(actual: StaffRole, needed: StaffRole): boolean {
+  return STAFF_ROLES.indexOf(actual) <= STAFF_ROLES.indexOf(needed);
+}
+
+export function isStaffRole(value: unknown): value is StaffRole {
+  return typeof value === 'string' && (STAFF_ROLES as readonly string[]).includes(value);
+}
+
+/** RFC 5321 caps a forward path at 256 octets, 254 of them the address. */
+export const EMAIL_MAX_LENGTH = 254;
+/** OWASP ASVS 2.1: at least 8 characters, long passphrases allowed, no composition rules. */
+export const PASSWORD_MIN_LENGTH = 8;
+export const PASSWORD_MAX_LENGTH = 128;
+export const PERSON_NAME_MAX_LENGTH = 120;
+export const FIRM_NAME_MIN_LENGTH = 2;
+export const FIRM_NAME_MAX_LENGTH = 120;
+/** The code in an e-mailed one-time link (invitation, password reset, portal sign-in). */
+export const LINK_TOKEN_PATTERN = /^[A-Za-z0-9_-]{32,128}$/;
+
+export function isWellFormedLinkToken(token: unknown): token is string {
+  return typeof token === 'string' && LINK_TOKEN_PATTERN.test(token);
+}
+
+// What the apps send.
+export interface SignInRequest {
+  readonly email: string;
+  readonly password: string;
+}
+export interface SignUpRequest {
+  readonly firmName: string;
+  readonly name: string;
+  readonly email: string;
+  readonly password: string;
+}
+export interface PasswordResetRequest {
+  readonly email: string;
+}
+export interface PasswordResetComplete {
+  readonly token: string;
+  readonly password: string;
+}
+export interface InvitationAccept {
+  readonly token: string;
+  readonly name: string;
+  readonly password: string;
+}
+export interface PortalLinkRequest {
+  readonly email: string;
+}
+export interface PortalRedeemRequest {
+  readonly token: string;
+}
+
+// What the auth routes answer.
+export interface StaffUser {
+  readonly id: string;
+  readonly name: string;
+  readonly email: string;
+  readonly role: StaffRole;
+  readonly firmId: string;
+  readonly firmName: string;
+}
+
+/** What the admin app knows about who is signed in (every /api/auth answer that signs in or out). */
+export interface StaffSession {
+  readonly user: StaffUser | null;
+  readonly csrfToken: string;
+}
+
+/** GET /api/auth/invitations/:token: what the invited person is joining. */
+export interface InvitationPreview {
+  readonly firmName: string;
+  readonly email: string;
+  readonly role: StaffRole;
+}
+
+export interface PortalClient {
+  readonly id: string;
+  readonly name: string;
+  readonly email: string;
+  readonly firmId: string;
+  readonly firmName: string;
+}
+
+/** Portal (client) session: signed in by an e-mailed one-time link. */
+export interface PortalSession {
+  readonly client: PortalClient | null;
+  readonly csrfToken: string;
+}

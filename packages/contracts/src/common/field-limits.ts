@@ -1,0 +1,23 @@
+/**
+ * Limits and patterns that several areas' fields share. The zod schemas check them on the
+ * server; the apps' validators use the same constants, so both sides refuse the same input.
+ */
+
+/** Money in API bodies is a decimal string ("1250.00"), never a float. */
+export const MONEY_AMOUNT_PATTERN = /^\d{1,12}(\.\d{1,2})?$/;
+
+/** A calendar day as the API sends and takes it: "2026-03-14". */
+export const ISO_DATE_PATTERN = /^\d{4}-\d{2}-\d{2}$/;
+
+/** ISO 3166-1 alpha-2, as typed in capitals: "US". */
+export const COUNTRY_CODE_PATTERN = /^[A-Z]{2}$/;
+
+/** ISO 4217: three capital letters, "USD". */
+export const CURRENCY_CODE_PATTERN = /^[A-Z]{3}$/;
+
+/** The year a building was built: older than any building we will see, and not far ahead. */
+export const YEAR_BUILT_MIN = 1600;
+export const YEAR_BUILT_MAX = 2100;
+
+/** A phone number as typed, spaces and all. */
+export const PHONE_MAX_LENGTH = 40;
