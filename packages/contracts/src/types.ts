@@ -19,3 +19,8 @@ export * from './firms/firm-types';
 export * from './firms/estimating-types';
 export * from './inquiries/inquiry-types';
 export * from './clients/client-types';
+export * from './library/library-types';
+export * from './takeoff/takeoff-types';
+export * from './takeoff/shape-catalog';
+export * from './engine/context';
+export * from './proposals/estimate-types';

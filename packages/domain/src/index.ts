@@ -4,6 +4,7 @@
  * or Decimal; outputs: Decimal); geometry and quantities are plain numbers.
  */
 export { DomainInputError } from './errors/domain-input-error';
+export { dottedPath } from './errors/field-path';
 
 // units
 export type { LengthUnit } from './units/length';
@@ -33,6 +34,7 @@ export { isKnownCurrency, knownCurrencies, minorUnitDigits } from './money/curre
 export type { ProcessorCurrencyRule } from './money/stripe-amount';
 export { fromProcessorAmount, processorCurrencyRule, toProcessorAmount } from './money/stripe-amount';
 export { allocateByWeights, splitEvenly } from './money/allocate';
+export { formatMoney } from './money/format-money';
 
 // takeoff geometry
 export type { Opening, SurfaceKind, SurfaceMeasure, SurfaceShape, TakeoffSettings } from './geometry/surface-shape';
@@ -135,3 +137,9 @@ export type { EstimateResult, LayerLine, ProductTotal, SurfaceResult } from './e
 export { computeEstimate } from './estimate/compute-estimate';
 export type { EstimateResultJson, Jsonified } from './estimate/result-json';
 export { toResultJson } from './estimate/result-json';
+
+// payment schedule totals, sample-board finish words
+export type { ScheduleTotals, ScheduledAmount } from './billing/schedule-totals';
+export { scheduleTotals } from './billing/schedule-totals';
+export type { DescribedLayer } from './samples/finish-steps';
+export { clientFinishSteps, crewLayerNote } from './samples/finish-steps';

@@ -13,7 +13,7 @@ describe('demo library', () => {
   it('seeds three systems that exercise long waits, partial coverage, dilution both ways and a mix recipe', async () => {
     const o = await signUpFirm(t.app, 'Demo Library Studio');
     const seeded = await withTenant(t.ctx.pool, o.firmId, (tx) => seedDemoLibrary(tx));
-    const systems = (await o.agent.get('/api/library/systems')).body as { id: string; name: string; totalWaitHours: number }[];
+    const systems = (await o.agent.get('/api/library/systems')).body.items as { id: string; name: string; totalWaitHours: number }[];
     expect(systems).toHaveLength(3);
     const lime = (await o.agent.get(`/api/library/systems/${seeded.systemIds.layeredLime}`)).body;
     expect(lime.layers.map((l: { waitHoursAfter: number }) => l.waitHoursAfter)).toEqual([4, 16, 24, 72, 24]);
@@ -25,7 +25,7 @@ describe('demo library', () => {
 
     // The stored layer feeds the engine as is. DOMAIN.md §2.3 [D]: 84.82 ft² of dome at 30 %, 400 ft²/gal of mix,
     // 15 % waste, water 10 % of the concentrate, 4 medium : 1 tint → tint 5.675 fl oz.
-    const products = (await o.agent.get('/api/library/products')).body as Product[];
+    const products = (await o.agent.get('/api/library/products')).body.items as Product[];
     const q = layerQuantity({ quantity: 84.82 / 0.3, measure: 'area', unit: 'ft' }, glazeLayer, new Map(products.map((p) => [p.id, p])));
     const tint = q.products.find((p) => p.productId === seeded.productIds.tint)!;
     expect(tint.amount / 29.5735295625).toBeCloseTo(5.675, 2);

@@ -1,6 +1,6 @@
 import type { FieldProblem, FinishLayerInput } from '@layerbook/contracts';
 import { and, eq, inArray, products, TenantTx } from '@layerbook/db';
-import { DomainInputError, layerHours, layerQuantity, type Product, type SurfaceAmount } from '@layerbook/domain';
+import { DomainInputError, dottedPath, layerHours, layerQuantity, type Product, type SurfaceAmount } from '@layerbook/domain';
 import { badRequest } from '../http/problem';
 import { containersOf, hazardsOf, type ProductRow } from './views';
 
@@ -24,9 +24,6 @@ function refsOf(layers: readonly FinishLayerInput[]): ProductRef[] {
     return l.productId ? [{ id: l.productId, field: `layers.${i}.productId` }] : [];
   });
 }
-
-/** The engine names fields like `layers.2.coatCoverages[0].unit`; forms and zod use dots throughout. */
-export const dottedPath = (field: string) => field.replace(/\[(\d+)\]/g, '.$1');
 
 const toEngineProduct = (row: ProductRow): Product => ({ id: row.id, name: row.name, unit: row.unit as Product['unit'], containers: containersOf(row), hazards: hazardsOf(row) });
 

@@ -18,7 +18,7 @@ describe('library products', () => {
     expect(patched.status).toBe(200);
     expect(patched.body).toMatchObject({ name: 'Bonding primer', notes: 'Tint to the base colour.', kind: 'primer', containers: [{ price: '45.00' }, { price: '16.00' }] });
     expect((await o.agent.get(`/api/library/products/${made.body.id}`)).body.name).toBe('Bonding primer');
-    expect((await o.agent.get('/api/library/products')).body.map((p: { name: string }) => p.name)).toEqual(['Bonding primer']);
+    expect((await o.agent.get('/api/library/products')).body.items.map((p: { name: string }) => p.name)).toEqual(['Bonding primer']);
   });
 
   it('derives "flammable" from the flash point (below 23 °C, 29 CFR 1910.106) and keeps lime and silica flags', async () => {
@@ -44,7 +44,7 @@ describe('library products', () => {
     expect(fields(mixed.body)).toEqual(['containers.0.unit']);
     const junk = await send({ ...PRIMER, name: ' ', kind: 'varnish', unit: 'bucket', colour: 'red', hazards: { flashPointC: 'low' }, sdsUrl: 'javascript:alert(1)' });
     expect(fields(junk.body)).toEqual(['colour', 'hazards.flashPointC', 'kind', 'name', 'sdsUrl', 'unit']);
-    expect((await o.agent.get('/api/library/products')).body).toEqual([]);
+    expect((await o.agent.get('/api/library/products')).body.items).toEqual([]);
     const id = await addProduct(o, PRIMER);
     const badPatch = await o.agent.patch(`/api/library/products/${id}`).set('x-csrf-token', o.csrf()).send({ unit: 'kg' });
     expect(fields(badPatch.body)).toEqual(['containers.0.unit', 'containers.1.unit']);
@@ -66,8 +66,8 @@ describe('library products', () => {
     const archived = await o.agent.post(`/api/library/products/${medium}/archive`).set('x-csrf-token', o.csrf());
     expect(archived.status).toBe(200);
     expect(archived.body.archivedAt).not.toBeNull();
-    expect((await o.agent.get('/api/library/products')).body.map((p: { id: string }) => p.id)).toEqual([tint]);
-    expect((await o.agent.get('/api/library/products').query({ archived: 'only' })).body.map((p: { id: string }) => p.id)).toEqual([medium]);
+    expect((await o.agent.get('/api/library/products')).body.items.map((p: { id: string }) => p.id)).toEqual([tint]);
+    expect((await o.agent.get('/api/library/products').query({ archived: 'only' })).body.items.map((p: { id: string }) => p.id)).toEqual([medium]);
     // The system cannot come back while its product is archived; once the product returns, it can.
     const back = await o.agent.post(`/api/library/systems/${system.body.id}/unarchive`).set('x-csrf-token', o.csrf());
     expect(back.status).toBe(409);
@@ -82,7 +82,7 @@ describe('library products', () => {
     const crew = await joinAs(t, o, 'crew');
     const list = await crew.agent.get('/api/library/products');
     expect(list.status).toBe(200);
-    expect(list.body[0].containers).toEqual([{ label: '1 gal', size: 1, unit: 'gallon', price: null }, { label: '1 qt', size: 1, unit: 'quart', price: null }]);
+    expect(list.body.items[0].containers).toEqual([{ label: '1 gal', size: 1, unit: 'gallon', price: null }, { label: '1 qt', size: 1, unit: 'quart', price: null }]);
     expect((await crew.agent.get(`/api/library/products/${id}`)).body.containers[0].price).toBeNull();
     expect((await crew.agent.post('/api/library/products').set('x-csrf-token', crew.csrf()).send({ name: '' })).status).toBe(403);
     expect((await crew.agent.patch(`/api/library/products/${id}`).set('x-csrf-token', crew.csrf()).send({ name: '' })).status).toBe(403);

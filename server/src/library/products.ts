@@ -1,26 +1,22 @@
-import { type ProductInput, type ProductUpdate, type ProductView, productInput } from '@layerbook/contracts';
+import { type ArchivedFilter, type ItemList, type ProductInput, type ProductUpdate, type ProductView, productInput } from '@layerbook/contracts';
 import { and, asc, eq, finishSystems, isNotNull, isNull, products, TenantTx } from '@layerbook/db';
-import { isMassUnit } from '@layerbook/domain';
+import { finishProductIds, isMassUnit } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
+import { type Actor, canSeeMoney } from '../http/actor';
 import { conflict, notFound } from '../http/problem';
 import { parse } from '../http/validate';
-import { layersOf, productIdsOf, type ProductRow, toProductView } from './views';
-
-export interface Actor {
-  readonly userId: string;
-  /** crew read the library without money figures */
-  readonly canSeePrices: boolean;
-}
+import { layersOf, type ProductRow, toProductView } from './views';
 
 /** A small firm's library holds tens of products, and the layer editor needs all of them to pick from: one capped list, no pages. */
 const LIST_CAP = 1000;
 
-export type ArchivedFilter = 'exclude' | 'include' | 'only';
+/** Each change names who made it in the firm's audit log. */
+export const auditedBy = (actor: Actor) => ({ actorUserId: actor.userId, actorKind: actor.kind });
 
-export async function listProducts(tx: TenantTx, actor: Actor, archived: ArchivedFilter): Promise<ProductView[]> {
+export async function listProducts(tx: TenantTx, actor: Actor, archived: ArchivedFilter): Promise<ItemList<ProductView>> {
   const scope = archived === 'exclude' ? isNull(products.archivedAt) : archived === 'only' ? isNotNull(products.archivedAt) : undefined;
   const rows = await tx.db.select().from(products).where(and(eq(products.tenantId, tx.tenantId), scope)).orderBy(asc(products.name), asc(products.id)).limit(LIST_CAP);
-  return rows.map((r) => toProductView(r, actor.canSeePrices));
+  return { items: rows.map((r) => toProductView(r, canSeeMoney(actor))) };
 }
 
 async function loadProduct(tx: TenantTx, id: string): Promise<ProductRow> {
@@ -30,13 +26,13 @@ async function loadProduct(tx: TenantTx, id: string): Promise<ProductRow> {
 }
 
 export async function getProduct(tx: TenantTx, actor: Actor, id: string): Promise<ProductView> {
-  return toProductView(await loadProduct(tx, id), actor.canSeePrices);
+  return toProductView(await loadProduct(tx, id), canSeeMoney(actor));
 }
 
 export async function createProduct(tx: TenantTx, actor: Actor, input: ProductInput): Promise<ProductView> {
   const [row] = await tx.db.insert(products).values({ ...input, tenantId: tx.tenantId }).returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'product.created', entity: 'product', entityId: row!.id, data: { name: input.name } });
-  return toProductView(row!, actor.canSeePrices);
+  await recordAudit(tx, { ...auditedBy(actor), action: 'product.created', entity: 'product', entityId: row!.id, data: { name: input.name } });
+  return toProductView(row!, canSeeMoney(actor));
 }
 
 export async function updateProduct(tx: TenantTx, actor: Actor, id: string, patch: ProductUpdate, now: Date): Promise<ProductView> {
@@ -59,14 +55,14 @@ export async function updateProduct(tx: TenantTx, actor: Actor, id: string, patc
     .set({ ...merged, updatedAt: now })
     .where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id)))
     .returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'product.updated', entity: 'product', entityId: id, data: { changed: Object.keys(patch) } });
-  return toProductView(row!, actor.canSeePrices);
+  await recordAudit(tx, { ...auditedBy(actor), action: 'product.updated', entity: 'product', entityId: id, data: { changed: Object.keys(patch) } });
+  return toProductView(row!, canSeeMoney(actor));
 }
 
 /** Names of the firm's active systems whose layers use the product. A firm has few systems, so they are read whole. */
 export async function activeSystemsUsing(tx: TenantTx, productId: string): Promise<string[]> {
   const rows = await tx.db.select().from(finishSystems).where(and(eq(finishSystems.tenantId, tx.tenantId), isNull(finishSystems.archivedAt))).orderBy(asc(finishSystems.name));
-  return rows.filter((s) => productIdsOf(layersOf(s)).has(productId)).map((s) => s.name);
+  return rows.filter((s) => finishProductIds(layersOf(s)).includes(productId)).map((s) => s.name);
 }
 
 /**
@@ -99,6 +95,6 @@ export async function setProductArchived(tx: TenantTx, actor: Actor, id: string,
     .set({ archivedAt: isArchived ? (current.archivedAt ?? now) : null, updatedAt: now })
     .where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id)))
     .returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: isArchived ? 'product.archived' : 'product.unarchived', entity: 'product', entityId: id });
-  return toProductView(row!, actor.canSeePrices);
+  await recordAudit(tx, { ...auditedBy(actor), action: isArchived ? 'product.archived' : 'product.unarchived', entity: 'product', entityId: id });
+  return toProductView(row!, canSeeMoney(actor));
 }

@@ -42,13 +42,13 @@ describe('finish systems', () => {
     const reordered = await o.agent.patch(`/api/library/systems/${id}`).set('x-csrf-token', o.csrf()).send({ layers: [layers[0], layers[2]] });
     expect(reordered.body.layers.map((l: { id: string }) => l.id)).toEqual(['primer', 'glaze']);
     const list = await o.agent.get('/api/library/systems');
-    expect(list.body).toEqual([expect.objectContaining({ id, layerCount: 2, totalWaitHours: 28 })]);
+    expect(list.body).toEqual({ items: [expect.objectContaining({ id, layerCount: 2, totalWaitHours: 28 })] });
     const copy = await o.agent.post(`/api/library/systems/${id}/duplicate`).set('x-csrf-token', o.csrf());
     expect(copy.status).toBe(201);
     expect(copy.body).toMatchObject({ name: 'Lime with antiqued glaze (copy)', layerCount: 2, archivedAt: null });
     expect((await o.agent.post(`/api/library/systems/${id}/archive`).set('x-csrf-token', o.csrf())).body.archivedAt).not.toBeNull();
-    expect((await o.agent.get('/api/library/systems')).body.map((s: { id: string }) => s.id)).toEqual([copy.body.id]);
-    expect((await o.agent.get('/api/library/systems').query({ archived: 'include' })).body).toHaveLength(2);
+    expect((await o.agent.get('/api/library/systems')).body.items.map((s: { id: string }) => s.id)).toEqual([copy.body.id]);
+    expect((await o.agent.get('/api/library/systems').query({ archived: 'include' })).body.items).toHaveLength(2);
   });
 
   it('names the exact layer field for bad input and saves nothing', async () => {
@@ -91,7 +91,7 @@ describe('finish systems', () => {
 
     const missingPrefix = await send([p], '');
     expect(fields(missingPrefix.body)).toEqual(['name']);
-    expect((await o.agent.get('/api/library/systems')).body).toEqual([]);
+    expect((await o.agent.get('/api/library/systems')).body.items).toEqual([]);
   });
 
   it('refuses products of another firm and archived products, naming the layer field', async () => {
@@ -103,14 +103,14 @@ describe('finish systems', () => {
     await a.o.agent.post(`/api/library/products/${a.primer}/archive`).set('x-csrf-token', a.o.csrf());
     const archived = await a.o.agent.post('/api/library/systems').set('x-csrf-token', a.o.csrf()).send({ name: 'Old primer', layers: [primerLayer(a.primer)] });
     expect(archived.body.errors).toEqual([{ field: 'layers.0.productId', message: expect.stringContaining('archived') }]);
-    expect((await a.o.agent.get('/api/library/systems')).body).toEqual([]);
+    expect((await a.o.agent.get('/api/library/systems')).body.items).toEqual([]);
   });
 
   it('lets crew read systems and refuses their writes with 403 before any 400', async () => {
     const { o, primer } = await firmWithProducts();
     const made = await o.agent.post('/api/library/systems').set('x-csrf-token', o.csrf()).send({ name: 'Primer only', layers: [primerLayer(primer)] });
     const crew = await joinAs(t, o, 'crew');
-    expect((await crew.agent.get('/api/library/systems')).body).toHaveLength(1);
+    expect((await crew.agent.get('/api/library/systems')).body.items).toHaveLength(1);
     expect((await crew.agent.get(`/api/library/systems/${made.body.id}`)).body.layers).toHaveLength(1);
     const id = made.body.id;
     for (const [method, path] of [

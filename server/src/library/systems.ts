@@ -1,16 +1,18 @@
-import { type FinishSystemInput, type FinishSystemSummary, type FinishSystemUpdate, type FinishSystemView, type FieldProblem } from '@layerbook/contracts';
+import type { ArchivedFilter, FieldProblem, FinishSystemInput, FinishSystemSummary, FinishSystemUpdate, FinishSystemView, ItemList } from '@layerbook/contracts';
 import { and, asc, eq, finishSystems, inArray, isNotNull, isNull, products, TenantTx } from '@layerbook/db';
+import { finishProductIds } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
+import type { Actor } from '../http/actor';
 import { conflict, HttpError, notFound } from '../http/problem';
 import { checkLayers } from './layer-checks';
-import type { Actor, ArchivedFilter } from './products';
-import { layersOf, productIdsOf, type ProductRow, type SystemRow, toSystemSummary, toSystemView } from './views';
+import { auditedBy } from './products';
+import { layersOf, type ProductRow, type SystemRow, toSystemSummary, toSystemView } from './views';
 
 /** A firm keeps tens of systems; the list is read whole (see products.ts). */
 const LIST_CAP = 1000;
 
 async function productsFor(tx: TenantTx, rows: readonly SystemRow[]): Promise<Map<string, ProductRow>> {
-  const ids = [...new Set(rows.flatMap((r) => [...productIdsOf(layersOf(r))]))];
+  const ids = [...new Set(rows.flatMap((r) => finishProductIds(layersOf(r))))];
   if (!ids.length) return new Map();
   const found = await tx.db.select().from(products).where(and(eq(products.tenantId, tx.tenantId), inArray(products.id, ids)));
   return new Map(found.map((p) => [p.id, p]));
@@ -26,11 +28,11 @@ async function view(tx: TenantTx, row: SystemRow): Promise<FinishSystemView> {
   return toSystemView(row, await productsFor(tx, [row]));
 }
 
-export async function listSystems(tx: TenantTx, archived: ArchivedFilter): Promise<FinishSystemSummary[]> {
+export async function listSystems(tx: TenantTx, archived: ArchivedFilter): Promise<ItemList<FinishSystemSummary>> {
   const scope = archived === 'exclude' ? isNull(finishSystems.archivedAt) : archived === 'only' ? isNotNull(finishSystems.archivedAt) : undefined;
   const rows = await tx.db.select().from(finishSystems).where(and(eq(finishSystems.tenantId, tx.tenantId), scope)).orderBy(asc(finishSystems.name), asc(finishSystems.id)).limit(LIST_CAP);
   const byId = await productsFor(tx, rows);
-  return rows.map((r) => toSystemSummary(r, byId));
+  return { items: rows.map((r) => toSystemSummary(r, byId)) };
 }
 
 export async function getSystem(tx: TenantTx, id: string): Promise<FinishSystemView> {
@@ -40,7 +42,7 @@ export async function getSystem(tx: TenantTx, id: string): Promise<FinishSystemV
 export async function createSystem(tx: TenantTx, actor: Actor, input: FinishSystemInput): Promise<FinishSystemView> {
   await checkLayers(tx, input.layers);
   const [row] = await tx.db.insert(finishSystems).values({ ...input, tenantId: tx.tenantId }).returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'finish_system.created', entity: 'finish_system', entityId: row!.id, data: { name: input.name, layers: input.layers.length } });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'finish_system.created', entity: 'finish_system', entityId: row!.id, data: { name: input.name, layers: input.layers.length } });
   return view(tx, row!);
 }
 
@@ -54,7 +56,7 @@ export async function updateSystem(tx: TenantTx, actor: Actor, id: string, patch
     .set({ ...patch, updatedAt: now })
     .where(and(eq(finishSystems.tenantId, tx.tenantId), eq(finishSystems.id, id)))
     .returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'finish_system.updated', entity: 'finish_system', entityId: id, data: { changed: Object.keys(patch) } });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'finish_system.updated', entity: 'finish_system', entityId: id, data: { changed: Object.keys(patch) } });
   return view(tx, row!);
 }
 
@@ -79,7 +81,7 @@ export async function setSystemArchived(tx: TenantTx, actor: Actor, id: string, 
     .set({ archivedAt: isArchived ? (current.archivedAt ?? now) : null, updatedAt: now })
     .where(and(eq(finishSystems.tenantId, tx.tenantId), eq(finishSystems.id, id)))
     .returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: isArchived ? 'finish_system.archived' : 'finish_system.unarchived', entity: 'finish_system', entityId: id });
+  await recordAudit(tx, { ...auditedBy(actor), action: isArchived ? 'finish_system.archived' : 'finish_system.unarchived', entity: 'finish_system', entityId: id });
   return view(tx, row!);
 }
 
@@ -89,6 +91,6 @@ export async function duplicateSystem(tx: TenantTx, actor: Actor, id: string): P
   await requireComputable(tx, source, 'This finish system cannot be copied yet:');
   const name = `${source.name} (copy)`.slice(0, 120);
   const [row] = await tx.db.insert(finishSystems).values({ tenantId: tx.tenantId, name, description: source.description, layers: source.layers }).returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'finish_system.created', entity: 'finish_system', entityId: row!.id, data: { name, copiedFrom: id } });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'finish_system.created', entity: 'finish_system', entityId: row!.id, data: { name, copiedFrom: id } });
   return view(tx, row!);
 }

@@ -74,6 +74,41 @@ describe('estimates', () => {
     expect(saved.body.result.variants[0].result.options[0].label).toBe('Stencilled border');
   });
 
+  it('stamps the save with the server clock and lists the drying waits the schedule plans', async () => {
+    const f = await firmWithMeasuredSite('Clocked Estimates');
+    const made = await f.agent.post('/api/estimates').set('x-csrf-token', f.csrf()).send({ siteId: f.siteId, title: 'T', startDate: '2026-12-03' });
+    t.setNow(new Date('2026-12-01T09:30:00.000Z'));
+    try {
+      const saved = await f.agent.put(`/api/estimates/${made.body.id}/inputs`).set('x-csrf-token', f.csrf()).send(inputsFor(f.surfaceId, f.systemId));
+      expect(saved.body.computedAt).toBe('2026-12-01T09:30:00.000Z');
+    } finally {
+      t.setNow(null);
+    }
+    // One layer only: its 4 h wait is the cure before use, not a wait before another layer.
+    expect((await f.agent.get(`/api/estimates/${made.body.id}`)).body.result.variants[0].result.schedule.waits).toEqual([]);
+  });
+
+  it('lists the firm\'s estimates newest first, one keyset page at a time, optionally for one site', async () => {
+    const f = await firmWithMeasuredSite('Listed Estimates');
+    const ids: string[] = [];
+    for (const title of ['First', 'Second', 'Third']) {
+      ids.push((await f.agent.post('/api/estimates').set('x-csrf-token', f.csrf()).send({ siteId: f.siteId, title, startDate: '2026-12-03' })).body.id);
+    }
+    const first = await f.agent.get('/api/estimates').query({ limit: 2 });
+    expect(first.status).toBe(200);
+    expect(first.body.items.map((e: { title: string }) => e.title)).toEqual(['Third', 'Second']);
+    expect(first.body.items[0]).toEqual({
+      id: ids[2], title: 'Third', status: 'draft', price: null, siteId: f.siteId, clientId: expect.any(String), clientName: 'Edwina Marl', updatedAt: expect.any(String),
+    });
+    const second = await f.agent.get('/api/estimates').query({ limit: 2, after: first.body.nextCursor });
+    expect(second.body).toEqual({ items: [expect.objectContaining({ id: ids[0] })], nextCursor: null });
+    const otherSite = await firmWithMeasuredSite('Other Site Estimates');
+    expect((await f.agent.get('/api/estimates').query({ siteId: otherSite.siteId })).body.items).toEqual([]);
+    const bad = await f.agent.get('/api/estimates').query({ after: 'not-a-cursor', limit: 500 });
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['limit']);
+  });
+
   it('starts from the firm defaults when it has not set its own', async () => {
     const f = await firmWithMeasuredSite('Default Plaster');
     const made = await f.agent.post('/api/estimates').set('x-csrf-token', f.csrf()).send({ siteId: f.siteId, title: 'T', startDate: '2026-12-03' });

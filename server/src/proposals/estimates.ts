@@ -1,39 +1,20 @@
-import type { EstimateContext, EstimateCreate, EstimateInputs } from '@layerbook/contracts';
+import type { EstimateContext, EstimateCreate, EstimateInputs, EstimateListItem, EstimateOptionResult, EstimateView, KeysetPage } from '@layerbook/contracts';
 import { assembleEstimateInput } from '@layerbook/contracts';
-import { and, eq, estimates, TenantTx } from '@layerbook/db';
-import { computeEstimate, DomainInputError, type EstimateResult } from '@layerbook/domain';
+import { and, clients, desc, eq, estimates, sql, TenantTx } from '@layerbook/db';
+import { computeEstimate, DomainInputError, toResultJson } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
+import type { Actor } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
+import { decodeCursor, encodeCursor } from '../inquiries/cursor';
 import { loadEstimateContext } from './estimate-context';
-
-export interface VariantResult {
-  readonly id: string;
-  readonly label: string;
-  readonly result: EstimateResult;
-}
-
-export interface EstimateView {
-  readonly id: string;
-  readonly siteId: string;
-  readonly clientId: string;
-  readonly inquiryId: string | null;
-  readonly title: string;
-  readonly status: string;
-  readonly inputs: EstimateInputs;
-  /** the server's numbers, per option; null until the first save with a finish on some surface */
-  readonly result: { variants: VariantResult[] } | null;
-  readonly price: string | null;
-  readonly computedAt: string | null;
-  /** what the browser needs to recompute live with the same engine */
-  readonly context: EstimateContext;
-}
 
 export function blankInputs(title: string, startDate: string): EstimateInputs {
   return {
     title,
     startDate,
     isOccupied: false,
-    variants: [{ id: 'A', label: 'Option A', surfaces: [] as unknown as EstimateInputs['variants'][number]['surfaces'] }],
+    // An option with no surfaces yet: the first save must choose at least one (the schema says so).
+    variants: [{ id: 'A', label: 'Option A', surfaces: [] }],
     addOns: [],
     equipment: [],
     subcontracts: [],
@@ -43,7 +24,9 @@ export function blankInputs(title: string, startDate: string): EstimateInputs {
   };
 }
 
-export async function createEstimate(tx: TenantTx, actorUserId: string, input: EstimateCreate): Promise<string> {
+const auditedBy = (actor: Actor) => ({ actorUserId: actor.userId, actorKind: actor.kind });
+
+export async function createEstimate(tx: TenantTx, actor: Actor, input: EstimateCreate): Promise<string> {
   const context = await loadEstimateContext(tx, input.siteId);
   if (input.inquiryId) {
     const { rows } = await tx.client.query(`select 1 from inquiries where tenant_id = $1 and id = $2`, [tx.tenantId, input.inquiryId]);
@@ -53,7 +36,7 @@ export async function createEstimate(tx: TenantTx, actorUserId: string, input: E
     .insert(estimates)
     .values({ tenantId: tx.tenantId, siteId: context.siteId, clientId: context.clientId, inquiryId: input.inquiryId, title: input.title, startDate: input.startDate, inputs: blankInputs(input.title, input.startDate) })
     .returning({ id: estimates.id });
-  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'estimate.created', entity: 'estimate', entityId: row!.id });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'estimate.created', entity: 'estimate', entityId: row!.id });
   return row!.id;
 }
 
@@ -68,6 +51,7 @@ export async function getEstimate(tx: TenantTx, id: string): Promise<EstimateVie
     inquiryId: row.inquiryId,
     title: row.title,
     status: row.status,
+    // jsonb comes back untyped; both were written by this module (inputs parsed by the contracts schema).
     inputs: row.inputs as EstimateInputs,
     result: (row.result as EstimateView['result']) ?? null,
     price: row.price,
@@ -94,12 +78,12 @@ function checkReferences(context: EstimateContext, inputs: EstimateInputs): void
  * Saves the office's choices and recomputes every option with the engine — the stored numbers are
  * the server's, whatever the browser showed. An engine refusal becomes a 400 naming its field.
  */
-export async function saveEstimateInputs(tx: TenantTx, actorUserId: string, id: string, inputs: EstimateInputs): Promise<EstimateView> {
+export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string, inputs: EstimateInputs, now: Date): Promise<EstimateView> {
   const row = (await tx.db.select().from(estimates).where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, id))).for('update'))[0];
   if (!row) throw notFound('estimate');
   const context = await loadEstimateContext(tx, row.siteId);
   checkReferences(context, inputs);
-  const variants: VariantResult[] = inputs.variants.map((v, i) => {
+  const computed = inputs.variants.map((v, i) => {
     try {
       return { id: v.id, label: v.label, result: computeEstimate(assembleEstimateInput(context, inputs, v.id)) };
     } catch (error) {
@@ -107,22 +91,54 @@ export async function saveEstimateInputs(tx: TenantTx, actorUserId: string, id: 
       throw error;
     }
   });
-  // JSON keeps Decimals as strings (Decimal#toJSON), so the stored result has no floats for money.
-  const result = JSON.parse(JSON.stringify({ variants })) as { variants: VariantResult[] };
+  const prices = computed.map((v) => ({ id: v.id, price: v.result.price.price.toFixed(2) }));
+  // Stored as JSON with Decimals as strings, so the stored result has no floats for money.
+  const variants: EstimateOptionResult[] = computed.map((v) => ({ id: v.id, label: v.label, result: toResultJson(v.result) }));
   await tx.db
     .update(estimates)
-    .set({ inputs, title: inputs.title, startDate: inputs.startDate, result, price: variants[0]!.result.price.price.toFixed(2), computedAt: new Date(), updatedAt: new Date() })
+    .set({ inputs, title: inputs.title, startDate: inputs.startDate, result: { variants }, price: prices[0]!.price, computedAt: now, updatedAt: now })
     .where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, id)));
-  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'estimate.saved', entity: 'estimate', entityId: id, data: { prices: variants.map((v) => ({ id: v.id, price: v.result.price.price.toFixed(2) })) } });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'estimate.saved', entity: 'estimate', entityId: id, data: { prices } });
   return getEstimate(tx, id);
 }
 
-export async function listEstimates(tx: TenantTx, siteId?: string) {
-  const { rows } = await tx.client.query(
-    `select e.id, e.title, e.status, e.price::text as price, e.site_id, e.client_id, c.name as client_name, e.created_at, e.updated_at
-       from estimates e join clients c on c.id = e.client_id
-      where e.tenant_id = $1 ${siteId ? 'and e.site_id = $2' : ''} order by e.updated_at desc limit 200`,
-    siteId ? [tx.tenantId, siteId] : [tx.tenantId],
-  );
-  return rows.map((r) => ({ id: r.id, title: r.title, status: r.status, price: r.price, siteId: r.site_id, clientId: r.client_id, clientName: r.client_name, updatedAt: r.updated_at.toISOString() }));
+export interface EstimateListQuery {
+  readonly siteId?: string;
+  readonly after?: string;
+  readonly limit: number;
+}
+
+/** Newest first, keyset over (created_at, id) — the index the table has — so a deep page costs the same as the first. */
+export async function listEstimates(tx: TenantTx, q: EstimateListQuery): Promise<KeysetPage<EstimateListItem>> {
+  const after = q.after ? decodeCursor(q.after) : null;
+  const rows = await tx.db
+    .select({
+      id: estimates.id,
+      title: estimates.title,
+      status: estimates.status,
+      price: estimates.price,
+      siteId: estimates.siteId,
+      clientId: estimates.clientId,
+      clientName: clients.name,
+      updatedAt: estimates.updatedAt,
+      // the exact timestamp text, so the cursor loses no microseconds
+      cursorAt: sql<string>`${estimates.createdAt}::text`,
+    })
+    .from(estimates)
+    .innerJoin(clients, and(eq(clients.tenantId, estimates.tenantId), eq(clients.id, estimates.clientId)))
+    .where(
+      and(
+        eq(estimates.tenantId, tx.tenantId),
+        q.siteId ? eq(estimates.siteId, q.siteId) : undefined,
+        after ? sql`(${estimates.createdAt}, ${estimates.id}) < (${after.sortValue}::timestamptz, ${after.id}::uuid)` : undefined,
+      ),
+    )
+    .orderBy(desc(estimates.createdAt), desc(estimates.id))
+    .limit(q.limit + 1);
+  const page = rows.slice(0, q.limit);
+  const last = page[page.length - 1];
+  return {
+    items: page.map(({ cursorAt: _c, updatedAt, ...r }) => ({ ...r, updatedAt: updatedAt.toISOString() })),
+    nextCursor: rows.length > q.limit && last ? encodeCursor(last.cursorAt, last.id) : null,
+  };
 }

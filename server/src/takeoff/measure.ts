@@ -1,5 +1,5 @@
 import type { SurfaceShapeInput, TakeoffLengthUnit, TakeoffTotals } from '@layerbook/contracts';
-import { DEFAULT_TAKEOFF_SETTINGS, DomainInputError, convertMeasure, measureSurface, type SurfaceMeasure } from '@layerbook/domain';
+import { DEFAULT_TAKEOFF_SETTINGS, DomainInputError, convertMeasure, dottedPath, measureSurface, type SurfaceMeasure } from '@layerbook/domain';
 import { badRequest } from '../http/problem';
 
 /**
@@ -12,15 +12,10 @@ export function measureOrReject(shape: SurfaceShapeInput): SurfaceMeasure {
     return measureSurface(shape, DEFAULT_TAKEOFF_SETTINGS, 'shape');
   } catch (error) {
     if (error instanceof DomainInputError) {
-      throw badRequest([{ field: toFieldPath(error.field), message: error.message }], 'The sizes do not make a shape we can measure.');
+      throw badRequest([{ field: dottedPath(error.field), message: error.message }], 'The sizes do not make a shape we can measure.');
     }
     throw error;
   }
-}
-
-/** `shape.openings[0].width` → `shape.openings.0.width`, the same path a zod error gives. */
-export function toFieldPath(domainField: string): string {
-  return domainField.replace(/\[(\d+)\]/g, '.$1');
 }
 
 /** Adds measures saved in any unit into `unit`: areas and running lengths apart. */

@@ -1,8 +1,9 @@
-import { moveInput, roomInput, roomUpdate, surfaceInput, surfaceUpdate, uuid } from '@layerbook/contracts';
+import { moveInput, roomInput, roomUpdate, surfaceInput, surfaceUpdate, uuid, type RoomView, type SurfaceView, type TakeoffView } from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { discardObjects } from '../files/stored-files';
+import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { roomPhotoRoutes } from './photo-routes';
@@ -33,50 +34,54 @@ export function takeoffRoutes(ctx: AppContext): Router {
   router.use(roomPhotoRoutes(ctx));
 
   router.get('/sites/:siteId', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'crew', (tx) => getTakeoff(tx, parse(siteParam, req.params).siteId)));
+    const view = await withStaff(ctx, req, 'crew', (tx) => getTakeoff(tx, parse(siteParam, req.params).siteId));
+    res.json(view satisfies TakeoffView);
   });
 
   router.post('/sites/:siteId/rooms', async (req, res) => {
-    res.status(201).json(
-      await withStaff(ctx, req, 'office', (tx, staff) => addRoom(tx, { userId: staff.id }, parse(siteParam, req.params).siteId, parse(roomInput, req.body))),
-    );
+    const room = await withStaff(ctx, req, 'office', (tx, staff) => addRoom(tx, staffActor(staff), parse(siteParam, req.params).siteId, parse(roomInput, req.body)));
+    res.status(201).json(room satisfies RoomView);
   });
 
   router.patch('/rooms/:id', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => updateRoom(tx, parse(roomParam, req.params).id, parse(roomUpdate, req.body))));
+    const room = await withStaff(ctx, req, 'office', (tx) => updateRoom(tx, parse(roomParam, req.params).id, parse(roomUpdate, req.body), ctx.now()));
+    res.json(room satisfies RoomView);
   });
 
   router.delete('/rooms/:id', async (req, res) => {
-    const photoKeys = await withStaff(ctx, req, 'office', (tx, staff) => deleteRoom(tx, { userId: staff.id }, parse(roomParam, req.params).id));
+    const photoKeys = await withStaff(ctx, req, 'office', (tx, staff) => deleteRoom(tx, staffActor(staff), parse(roomParam, req.params).id));
     await discardObjects(ctx.storage, ctx.logger, photoKeys);
     res.status(204).end();
   });
 
   router.post('/rooms/:id/move', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => moveRoom(tx, parse(roomParam, req.params).id, parse(moveInput, req.body))));
+    const view = await withStaff(ctx, req, 'office', (tx) => moveRoom(tx, parse(roomParam, req.params).id, parse(moveInput, req.body)));
+    res.json(view satisfies TakeoffView);
   });
 
   router.post('/rooms/:id/surfaces', async (req, res) => {
-    res.status(201).json(
-      await withStaff(ctx, req, 'office', (tx, staff) => addSurface(tx, { userId: staff.id }, parse(roomParam, req.params).id, parse(surfaceInput, req.body))),
-    );
+    const surface = await withStaff(ctx, req, 'office', (tx, staff) => addSurface(tx, staffActor(staff), parse(roomParam, req.params).id, parse(surfaceInput, req.body)));
+    res.status(201).json(surface satisfies SurfaceView);
   });
 
   router.patch('/surfaces/:id', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => updateSurface(tx, parse(surfaceParam, req.params).id, parse(surfaceUpdate, req.body))));
+    const surface = await withStaff(ctx, req, 'office', (tx) => updateSurface(tx, parse(surfaceParam, req.params).id, parse(surfaceUpdate, req.body), ctx.now()));
+    res.json(surface satisfies SurfaceView);
   });
 
   router.delete('/surfaces/:id', async (req, res) => {
-    await withStaff(ctx, req, 'office', (tx, staff) => deleteSurface(tx, { userId: staff.id }, parse(surfaceParam, req.params).id));
+    await withStaff(ctx, req, 'office', (tx, staff) => deleteSurface(tx, staffActor(staff), parse(surfaceParam, req.params).id));
     res.status(204).end();
   });
 
   router.post('/surfaces/:id/duplicate', async (req, res) => {
-    res.status(201).json(await withStaff(ctx, req, 'office', (tx, staff) => duplicateSurface(tx, { userId: staff.id }, parse(surfaceParam, req.params).id)));
+    const copy = await withStaff(ctx, req, 'office', (tx, staff) => duplicateSurface(tx, staffActor(staff), parse(surfaceParam, req.params).id));
+    res.status(201).json(copy satisfies SurfaceView);
   });
 
   router.post('/surfaces/:id/move', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => moveSurface(tx, parse(surfaceParam, req.params).id, parse(moveInput, req.body))));
+    const view = await withStaff(ctx, req, 'office', (tx) => moveSurface(tx, parse(surfaceParam, req.params).id, parse(moveInput, req.body)));
+    res.json(view satisfies TakeoffView);
   });
 
   return router;

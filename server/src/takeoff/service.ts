@@ -1,6 +1,7 @@
 import type { MoveInput, RoomInput, RoomUpdate, RoomView, SurfaceInput, SurfaceUpdate, SurfaceView, TakeoffLengthUnit, TakeoffView } from '@layerbook/contracts';
 import { and, asc, clients, eq, firms, rooms, sites, sql, surfaces, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
+import type { Actor } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
 import type { ObjectKeys } from '../files/stored-files';
 import { measureOrReject, sumMeasures, unitOfSystem } from './measure';
@@ -9,10 +10,8 @@ import { toSurfaceView, type SurfaceRow } from './surface-view';
 
 type RoomRow = typeof rooms.$inferSelect;
 
-/** Each write names its actor in the audit log. */
-export interface Actor {
-  readonly userId: string;
-}
+/** Each write names who made it in the firm's audit log. */
+const auditedBy = (actor: Actor) => ({ actorUserId: actor.userId, actorKind: actor.kind });
 
 async function firmUnit(tx: TenantTx): Promise<TakeoffLengthUnit> {
   const firm = (await tx.db.select({ units: firms.units }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
@@ -62,10 +61,7 @@ export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffV
     list.push(toSurfaceView(surface));
     byRoom.set(surface.roomId, list);
   }
-  const roomViews: RoomView[] = roomRows.map((r) => {
-    const list = byRoom.get(r.id) ?? [];
-    return { id: r.id, siteId: r.siteId, name: r.name, position: r.position, isExterior: r.isExterior, notes: r.notes, surfaces: list, totals: sumMeasures(list, unit) };
-  });
+  const roomViews = roomRows.map((r) => toRoomView(r, byRoom.get(r.id) ?? [], unit));
   return {
     site: {
       id: site.id,
@@ -85,16 +81,9 @@ export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffV
   };
 }
 
-const toRoomView = (r: RoomRow, list: SurfaceView[], unit: TakeoffLengthUnit): RoomView => ({
-  id: r.id,
-  siteId: r.siteId,
-  name: r.name,
-  position: r.position,
-  isExterior: r.isExterior,
-  notes: r.notes,
-  surfaces: list,
-  totals: sumMeasures(list, unit),
-});
+function toRoomView(r: RoomRow, list: SurfaceView[], unit: TakeoffLengthUnit): RoomView {
+  return { id: r.id, siteId: r.siteId, name: r.name, position: r.position, isExterior: r.isExterior, notes: r.notes, surfaces: list, totals: sumMeasures(list, unit) };
+}
 
 async function roomSurfaces(tx: TenantTx, roomId: string): Promise<SurfaceView[]> {
   const rows = await tx.db.select().from(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId))).orderBy(asc(surfaces.position), asc(surfaces.createdAt));
@@ -108,12 +97,12 @@ export async function addRoom(tx: TenantTx, actor: Actor, siteId: string, input:
     .from(rooms)
     .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.siteId, siteId)));
   const [row] = await tx.db.insert(rooms).values({ ...input, tenantId: tx.tenantId, siteId, position: next ?? 0 }).returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.room_created', entity: 'room', entityId: row!.id, data: { siteId, name: row!.name } });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.room_created', entity: 'room', entityId: row!.id, data: { siteId, name: row!.name } });
   return toRoomView(row!, [], await firmUnit(tx));
 }
 
-export async function updateRoom(tx: TenantTx, roomId: string, patch: RoomUpdate): Promise<RoomView> {
-  const [row] = await tx.db.update(rooms).set({ ...patch, updatedAt: new Date() }).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId))).returning();
+export async function updateRoom(tx: TenantTx, roomId: string, patch: RoomUpdate, now: Date): Promise<RoomView> {
+  const [row] = await tx.db.update(rooms).set({ ...patch, updatedAt: now }).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId))).returning();
   if (!row) throw notFound('room');
   return toRoomView(row, await roomSurfaces(tx, roomId), await firmUnit(tx));
 }
@@ -127,7 +116,7 @@ export async function deleteRoom(tx: TenantTx, actor: Actor, roomId: string): Pr
   const photos = await detachRoomPhotos(tx, roomId);
   const gone = await tx.db.delete(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId))).returning({ id: surfaces.id });
   await tx.db.delete(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)));
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.room_deleted', entity: 'room', entityId: roomId, data: { siteId: room.siteId, name: room.name, surfacesDeleted: gone.length, photosDeleted: photos.count } });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.room_deleted', entity: 'room', entityId: roomId, data: { siteId: room.siteId, name: room.name, surfacesDeleted: gone.length, photosDeleted: photos.count } });
   return photos.keys;
 }
 
@@ -177,7 +166,7 @@ export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, inp
       notes: input.notes,
     })
     .returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.surface_created', entity: 'surface', entityId: row!.id, data: { roomId, kind: input.shape.kind } });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.surface_created', entity: 'surface', entityId: row!.id, data: { roomId, kind: input.shape.kind } });
   return toSurfaceView(row!);
 }
 
@@ -185,7 +174,7 @@ export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, inp
  * A new shape is measured again and saved in the firm's unit of today. Without a shape, the stored
  * one keeps its unit, and a disturbed area sent alone is read in that unit too.
  */
-export async function updateSurface(tx: TenantTx, surfaceId: string, patch: SurfaceUpdate): Promise<SurfaceView> {
+export async function updateSurface(tx: TenantTx, surfaceId: string, patch: SurfaceUpdate, now: Date): Promise<SurfaceView> {
   const current = await findSurface(tx, surfaceId);
   const shape = patch.shape ?? toSurfaceView(current).shape;
   const measure = measureOrReject(shape);
@@ -198,7 +187,7 @@ export async function updateSurface(tx: TenantTx, surfaceId: string, patch: Surf
       ...(patch.notes !== undefined ? { notes: patch.notes } : {}),
       ...(patch.shape !== undefined ? { shape: patch.shape, lengthUnit: await firmUnit(tx) } : {}),
       ...(patch.disturbedPaintedArea !== undefined ? { disturbedPaintedArea: patch.disturbedPaintedArea === null ? null : String(patch.disturbedPaintedArea) } : {}),
-      updatedAt: new Date(),
+      updatedAt: now,
     })
     .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)))
     .returning();
@@ -208,7 +197,7 @@ export async function updateSurface(tx: TenantTx, surfaceId: string, patch: Surf
 export async function deleteSurface(tx: TenantTx, actor: Actor, surfaceId: string): Promise<void> {
   const current = await findSurface(tx, surfaceId);
   await tx.db.delete(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)));
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.surface_deleted', entity: 'surface', entityId: surfaceId, data: { roomId: current.roomId, name: current.name } });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.surface_deleted', entity: 'surface', entityId: surfaceId, data: { roomId: current.roomId, name: current.name } });
 }
 
 /** A copy placed right after the original (four alike walls, two alike vault bays). */
@@ -231,7 +220,7 @@ export async function duplicateSurface(tx: TenantTx, actor: Actor, surfaceId: st
       notes: original.notes,
     })
     .returning();
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'takeoff.surface_created', entity: 'surface', entityId: row!.id, data: { roomId: original.roomId, copyOf: surfaceId } });
+  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.surface_created', entity: 'surface', entityId: row!.id, data: { roomId: original.roomId, copyOf: surfaceId } });
   return toSurfaceView(row!);
 }
 

@@ -1,26 +1,7 @@
-import type { EstimateInput, FinishSystem, Product, SurfaceShape } from '@layerbook/domain';
-import type { EstimatingSettings } from '../firms/estimating';
-import type { EstimateInputs } from '../proposals/estimate';
+import type { EstimateInput } from '@layerbook/domain';
+import type { EstimateInputs } from '../proposals/estimate-types';
+import type { EstimateContext } from './context';
 import { toEngineSettings } from './settings';
-
-/** A measured room as the estimate needs it (from the site's takeoff). */
-export interface EngineRoom {
-  readonly id: string;
-  readonly name: string;
-  readonly isExterior: boolean;
-  readonly surfaces: ReadonlyArray<{ readonly id: string; readonly name: string; readonly shape: SurfaceShape; readonly disturbedPaintedArea: string | null }>;
-}
-
-/** Everything an estimate is computed from, besides the office's choices. */
-export interface EstimateContext {
-  readonly settings: EstimatingSettings;
-  readonly lengthUnit: 'ft' | 'm';
-  readonly currency: string;
-  readonly yearBuilt: number | null;
-  readonly rooms: readonly EngineRoom[];
-  readonly finishSystems: readonly FinishSystem[];
-  readonly products: readonly Product[];
-}
 
 /**
  * The engine input for one option (variant) of an estimate. The browser runs this on every

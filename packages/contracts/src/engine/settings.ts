@@ -1,5 +1,5 @@
 import type { FirmSettings } from '@layerbook/domain';
-import type { EstimatingSettings } from '../firms/estimating';
+import type { EstimatingSettings } from '../firms/estimating-types';
 
 /**
  * The firm's settings as the estimate engine takes them: whole percents become fractions,

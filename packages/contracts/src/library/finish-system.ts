@@ -1,7 +1,17 @@
-import type { FinishLayer } from '@layerbook/domain';
 import { z } from 'zod';
 import { requiredText, text, uuid } from '../common/fields';
+import {
+  ARCHIVED_FILTERS,
+  DILUTION_CONVENTIONS,
+  FINISH_SYSTEM_LIMITS,
+  type CoverageInput,
+  type FinishLayerInput,
+  type FinishSystemInput,
+  RECIPE_BASES,
+} from './library-types';
 import { applicationMethod, lengthUnit, numberField, quantityUnit } from './units';
+
+const L = FINISH_SYSTEM_LIMITS;
 
 const positive = (missing: string, tooSmall: string) => numberField(missing).positive({ error: tooSmall });
 
@@ -27,9 +37,7 @@ export const coverageInput = z.discriminatedUnion(
   ],
   { error: 'Choose spread rate (surface per unit) or consumption (product per surface).' },
 );
-export type CoverageInput = z.infer<typeof coverageInput>;
 
-export const DILUTION_CONVENTIONS = ['ofConcentrate', 'ofMix'] as const;
 export const dilutionInput = z.strictObject({
   share: numberField('Enter the dilution as a share, like 0.1 for 10 %.')
     .min(0, { error: 'The dilution cannot be negative.' })
@@ -39,14 +47,14 @@ export const dilutionInput = z.strictObject({
 
 export const mixRecipeInput = z
   .strictObject({
-    by: z.enum(['volume', 'weight'], { error: 'Say whether the parts are by volume or by weight.' }),
+    by: z.enum(RECIPE_BASES, { error: 'Say whether the parts are by volume or by weight.' }),
     baseProductId: uuid('product'),
     components: z
       .array(z.strictObject({ productId: uuid('product'), parts: positive('Enter the parts as a number.', 'Parts must be more than zero.') }), {
         error: 'List the products in the mix.',
       })
-      .min(2, { error: 'A mix recipe needs at least two products; use a single product otherwise.' })
-      .max(8, { error: 'Use at most 8 products in one mix.' }),
+      .min(L.recipeProductsMin, { error: 'A mix recipe needs at least two products; use a single product otherwise.' })
+      .max(L.recipeProductsMax, { error: `Use at most ${L.recipeProductsMax} products in one mix.` }),
   })
   .superRefine((r, ctx) => {
     const seen = new Set<string>();
@@ -58,20 +66,17 @@ export const mixRecipeInput = z
   });
 
 const multiplier = numberField('Enter the multiplier as a number, like 1.25.')
-  .min(1, { error: 'A multiplier is at least 1 (no extra time).' })
-  .max(5, { error: 'A multiplier above 5 is surely a typo.' })
+  .min(L.multiplierMin, { error: 'A multiplier is at least 1 (no extra time).' })
+  .max(L.multiplierMax, { error: 'A multiplier above 5 is surely a typo.' })
   .optional();
-
-/** A waiting time longer than 90 days is not a layer wait; it is a second job. */
-const MAX_WAIT_HOURS = 90 * 24;
 
 export const finishLayerInput = z
   .strictObject({
     /** made by the browser (a uuid or short id); keeps a layer's identity across reorders */
     id: z
       .string({ error: 'Each layer needs an id.' })
-      .regex(/^[A-Za-z0-9_-]{1,64}$/, { error: 'A layer id uses letters, digits, - and _ (at most 64).' }),
-    name: requiredText(120, 'Name the layer, like "Scratch coat" or "Glaze".'),
+      .regex(new RegExp(`^[A-Za-z0-9_-]{1,${L.layerIdMax}}$`), { error: `A layer id uses letters, digits, - and _ (at most ${L.layerIdMax}).` }),
+    name: requiredText(L.layerNameMax, 'Name the layer, like "Scratch coat" or "Glaze".'),
     method: applicationMethod,
     productId: uuid('product').optional(),
     recipe: mixRecipeInput.optional(),
@@ -79,7 +84,7 @@ export const finishLayerInput = z
     coats: numberField('Enter the number of coats.')
       .int({ error: 'Coats are whole numbers.' })
       .min(1, { error: 'A layer has at least one coat.' })
-      .max(20, { error: 'Use at most 20 coats.' }),
+      .max(L.coatsMax, { error: `Use at most ${L.coatsMax} coats.` }),
     coatCoverages: z.array(coverageInput, { error: 'Give one coverage per coat.' }).optional(),
     coverageShare: numberField('Enter the share of the surface, like 0.3 for 30 %.')
       .gt(0, { error: 'The share of the surface must be more than 0 %.' })
@@ -98,7 +103,7 @@ export const finishLayerInput = z
       .optional(),
     waitHoursAfter: numberField('Enter the wait in hours.')
       .min(0, { error: 'The wait cannot be negative.' })
-      .max(MAX_WAIT_HOURS, { error: 'Use at most 90 days (2160 hours).' }),
+      .max(L.waitHoursMax, { error: `Use at most 90 days (${L.waitHoursMax} hours).` }),
   })
   .superRefine((l, ctx) => {
     if (l.productId === undefined && l.recipe === undefined) {
@@ -111,16 +116,11 @@ export const finishLayerInput = z
       ctx.addIssue({ code: 'custom', path: ['coatCoverages'], message: `Give one coverage per coat: ${l.coats} coat${l.coats === 1 ? '' : 's'}, ${l.coatCoverages.length} given.` });
     }
   });
-export type FinishLayerInput = z.infer<typeof finishLayerInput>;
-
-/** The stored layer must be exactly what the estimate engine takes. */
-type Assignable<A, B> = A extends B ? true : false;
-export const LAYER_MATCHES_ENGINE: Assignable<FinishLayerInput, FinishLayer> = true;
 
 const layerList = z
   .array(finishLayerInput, { error: 'A finish system needs at least one layer.' })
   .min(1, { error: 'A finish system needs at least one layer.' })
-  .max(30, { error: 'Use at most 30 layers in one system.' })
+  .max(L.layersMax, { error: `Use at most ${L.layersMax} layers in one system.` })
   .superRefine((layers, ctx) => {
     const seen = new Set<string>();
     layers.forEach((l, i) => {
@@ -130,41 +130,24 @@ const layerList = z
   });
 
 const finishSystemFields = {
-  name: requiredText(120, 'Name the finish system.'),
-  description: text(2000),
+  name: requiredText(L.nameMax, 'Name the finish system.'),
+  description: text(L.descriptionMax),
   layers: layerList,
 };
 export const finishSystemInput = z.strictObject({ ...finishSystemFields, description: finishSystemFields.description.default('') });
-export type FinishSystemInput = z.infer<typeof finishSystemInput>;
 /** No defaults: a partial update changes only what it names. */
 export const finishSystemUpdate = z.strictObject(finishSystemFields).partial();
-export type FinishSystemUpdate = z.infer<typeof finishSystemUpdate>;
 
 export const systemListQuery = z.strictObject({
-  archived: z.enum(['exclude', 'include', 'only'], { error: 'Use exclude, include or only.' }).default('exclude'),
+  archived: z.enum(ARCHIVED_FILTERS, { error: 'Use exclude, include or only.' }).default('exclude'),
 });
 
-/** A product a system uses, with its name resolved for display. */
-export interface UsedProduct {
-  readonly id: string;
-  readonly name: string;
-  readonly unit: string;
-  readonly isArchived: boolean;
-}
-
-export interface FinishSystemSummary {
-  readonly id: string;
-  readonly name: string;
-  readonly description: string;
-  readonly layerCount: number;
-  /** sum of the waits between layers (the last layer's wait included: it is the cure before use) */
-  readonly totalWaitHours: number;
-  readonly usesProducts: readonly UsedProduct[];
-  readonly archivedAt: string | null;
-  readonly updatedAt: string;
-}
-
-export interface FinishSystemView extends FinishSystemSummary {
-  readonly layers: readonly FinishLayerInput[];
-  readonly createdAt: string;
-}
+// A stored layer must be exactly what the estimate engine takes (library-types.ts names the
+// engine's own FinishLayer); parsed bodies fit the plain request types the apps send.
+type Assignable<A, B> = [A] extends [B] ? true : false;
+export const FINISH_SCHEMAS_MATCH_TYPES: [
+  Assignable<z.infer<typeof coverageInput>, CoverageInput>,
+  Assignable<z.infer<typeof finishLayerInput>, FinishLayerInput>,
+  Assignable<z.infer<typeof finishSystemInput>, FinishSystemInput>,
+  Assignable<z.infer<typeof finishSystemUpdate>, Partial<FinishSystemInput>>,
+] = [true, true, true, true];

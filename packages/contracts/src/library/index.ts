@@ -1,5 +1,4 @@
-// Only library-specific names leave this folder: generic ones (lengthUnit, numberField) stay
-// internal so they cannot clash with another area's `export *` in the package index.
-export { APPLICATION_METHODS, QUANTITY_UNITS, ALL_LIBRARY_UNITS_LISTED } from './units';
+// The zod schemas only: enums, labels, limits and answers come through ../types.ts. Generic
+// names (lengthUnit, numberField) stay internal so they cannot clash with another area's.
 export * from './product';
 export * from './finish-system';

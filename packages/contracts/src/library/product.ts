@@ -1,46 +1,51 @@
+import { isMassUnit } from '@layerbook/domain';
 import { z } from 'zod';
 import { moneyAmount, requiredText, text } from '../common/fields';
-import { isMassUnit, numberField, quantityUnit } from './units';
+import { requestSchema } from '../common/schema-check';
+import { ARCHIVED_FILTERS, type ContainerInput, PRODUCT_KINDS, PRODUCT_LIMITS, type ProductHazardsInput, type ProductInput, type ProductUpdate } from './library-types';
+import { numberField, quantityUnit } from './units';
 
-export const PRODUCT_KINDS = ['primer', 'paint', 'plaster', 'lime', 'glaze', 'medium', 'colorant', 'sealer', 'wax', 'solvent', 'other'] as const;
-export type ProductKind = (typeof PRODUCT_KINDS)[number];
+const L = PRODUCT_LIMITS;
+const flashPointRange = `Check the flash point: it should be between −${-L.flashPointMinC} and ${L.flashPointMaxC} °C.`;
 
-/** 29 CFR 1910.106(a)(19): a liquid with a flash point below 73.4 °F (23 °C) counts as flammable (categories 1 and 2). */
-export const FLAMMABLE_BELOW_C = 23;
+export const containerInput = requestSchema<ContainerInput>()(
+  z.strictObject({
+    label: requiredText(L.containerLabelMax, 'Name the container, like "1 gal" or "20 kg pail".'),
+    size: numberField('Enter the container size as a number.').positive({ error: 'The container size must be more than zero.' }),
+    unit: quantityUnit,
+    price: moneyAmount,
+  }),
+);
 
-export const containerInput = z.strictObject({
-  label: requiredText(40, 'Name the container, like "1 gal" or "20 kg pail".'),
-  size: numberField('Enter the container size as a number.').positive({ error: 'The container size must be more than zero.' }),
-  unit: quantityUnit,
-  price: moneyAmount,
-});
-export type ContainerInput = z.infer<typeof containerInput>;
+export const productHazards = requestSchema<ProductHazardsInput>()(
+  z.strictObject({
+    /** closed-cup flash point from the SDS; leave out when the product does not burn */
+    flashPointC: numberField('Enter the flash point in °C as a number.')
+      .min(L.flashPointMinC, { error: flashPointRange })
+      .max(L.flashPointMaxC, { error: flashPointRange })
+      .optional(),
+    isLime: z.boolean({ error: 'Say whether the product contains lime.' }).optional(),
+    containsSilica: z.boolean({ error: 'Say whether the SDS lists crystalline silica.' }).optional(),
+  }),
+);
 
-export const productHazards = z.strictObject({
-  /** closed-cup flash point from the SDS; leave out when the product does not burn */
-  flashPointC: numberField('Enter the flash point in °C as a number.')
-    .min(-100, { error: 'Check the flash point: it should be between −100 and 400 °C.' })
-    .max(400, { error: 'Check the flash point: it should be between −100 and 400 °C.' })
-    .optional(),
-  isLime: z.boolean({ error: 'Say whether the product contains lime.' }).optional(),
-  containsSilica: z.boolean({ error: 'Say whether the SDS lists crystalline silica.' }).optional(),
-});
-export type ProductHazardsInput = z.infer<typeof productHazards>;
-
-const sdsUrl = z.union([z.url({ protocol: /^https?$/, error: 'Enter a web address starting with https://.' }).max(500, { error: 'Use at most 500 characters.' }), z.literal('')]);
+const sdsUrl = z.union([
+  z.url({ protocol: /^https?$/, error: 'Enter a web address starting with https://.' }).max(L.sdsUrlMax, { error: `Use at most ${L.sdsUrlMax} characters.` }),
+  z.literal(''),
+]);
 
 /** Fields without defaults, so `productUpdate` (a partial) changes only what it names. */
 const productFields = {
-  name: requiredText(120, 'Enter the product name.'),
+  name: requiredText(L.nameMax, 'Enter the product name.'),
   kind: z.enum(PRODUCT_KINDS, { error: 'Choose what kind of product this is.' }),
   unit: quantityUnit,
   containers: z
     .array(containerInput, { error: 'Add at least one container with its price.' })
     .min(1, { error: 'Add at least one container with its price.' })
-    .max(12, { error: 'Use at most 12 container sizes.' }),
+    .max(L.containersMax, { error: `Use at most ${L.containersMax} container sizes.` }),
   hazards: productHazards,
   sdsUrl,
-  notes: text(2000),
+  notes: text(L.notesMax),
 };
 
 /** Every container must be measured like the product (volume or weight): converting needs a density. */
@@ -58,43 +63,19 @@ function checkContainerUnits(p: { unit?: ProductInput['unit']; containers?: Cont
   });
 }
 
-export const productInput = z
-  .strictObject({
-    ...productFields,
-    hazards: productFields.hazards.default({}),
-    sdsUrl: productFields.sdsUrl.default(''),
-    notes: productFields.notes.default(''),
-  })
-  .superRefine(checkContainerUnits);
-export type ProductInput = z.infer<typeof productInput>;
+export const productInput = requestSchema<ProductInput>()(
+  z
+    .strictObject({
+      ...productFields,
+      hazards: productFields.hazards.default({}),
+      sdsUrl: productFields.sdsUrl.default(''),
+      notes: productFields.notes.default(''),
+    })
+    .superRefine(checkContainerUnits),
+);
 /** No defaults: a partial update changes only what it names. The server re-checks the merged product with `productInput`. */
-export const productUpdate = z.strictObject(productFields).partial();
-export type ProductUpdate = z.infer<typeof productUpdate>;
+export const productUpdate = requestSchema<ProductUpdate>()(z.strictObject(productFields).partial());
 
 export const productListQuery = z.strictObject({
-  archived: z.enum(['exclude', 'include', 'only'], { error: 'Use exclude, include or only.' }).default('exclude'),
+  archived: z.enum(ARCHIVED_FILTERS, { error: 'Use exclude, include or only.' }).default('exclude'),
 });
-
-/** Crew read the library on site but see no money figures (PRODUCT.md), so their prices come back null. */
-export interface ContainerView {
-  readonly label: string;
-  readonly size: number;
-  readonly unit: ContainerInput['unit'];
-  readonly price: string | null;
-}
-
-export interface ProductView {
-  readonly id: string;
-  readonly name: string;
-  readonly kind: ProductKind;
-  readonly unit: ProductInput['unit'];
-  readonly containers: readonly ContainerView[];
-  readonly hazards: ProductHazardsInput;
-  /** derived from the flash point (below FLAMMABLE_BELOW_C) */
-  readonly isFlammable: boolean;
-  readonly sdsUrl: string;
-  readonly notes: string;
-  readonly archivedAt: string | null;
-  readonly createdAt: string;
-  readonly updatedAt: string;
-}
