@@ -1,5 +1,5 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import type { FieldProblem, Problem } from '@layerbook/contracts';
+import type { FieldProblem, Problem } from '@layerbook/contracts/types';
 
 /** Turns whatever an HTTP call threw into the API's problem shape, so callers handle one thing. */
 export function toProblem(error: unknown): Problem {
@@ -17,6 +17,15 @@ export function toProblem(error: unknown): Problem {
     return { type: 'about:blank', title: fallbackTitle(error.status), status: error.status };
   }
   return { type: 'about:blank', title: 'Something went wrong. Please try again.', status: 0 };
+}
+
+/**
+ * The one sentence to show for a failed call when no form field can carry it: the server's detail
+ * when it gave one, otherwise its title (or ours, when the API was not reached or said nothing).
+ */
+export function problemMessage(error: unknown): string {
+  const problem = toProblem(error);
+  return problem.detail ?? problem.title;
 }
 
 function isProblem(body: unknown): body is Problem {

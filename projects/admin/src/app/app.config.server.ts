@@ -1,10 +1,4 @@
-import { ApplicationConfig, mergeApplicationConfig } from '@angular/core';
-import { provideServerRendering, withRoutes } from '@angular/ssr';
+import { serverConfigFor } from '../../../shared/app/server-config';
 import { appConfig } from './app.config';
-import { serverRoutes } from './app.routes.server';
 
-const serverConfig: ApplicationConfig = {
-  providers: [provideServerRendering(withRoutes(serverRoutes))],
-};
-
-export const config = mergeApplicationConfig(appConfig, serverConfig);
+export const config = serverConfigFor(appConfig);

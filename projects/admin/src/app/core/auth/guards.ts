@@ -1,6 +1,6 @@
 import { inject } from '@angular/core';
 import { CanActivateFn, Router } from '@angular/router';
-import type { StaffRole } from '@layerbook/contracts';
+import type { StaffRole } from '@layerbook/contracts/types';
 import { Session } from './session';
 
 export const HOME_URL = '/today';

@@ -1,8 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { StaffRole, StaffSession } from '@layerbook/contracts';
-import { roleAtLeast } from './roles';
+import { type StaffRole, type StaffSession, roleAtLeast } from '@layerbook/contracts/types';
 
 export type StaffUser = NonNullable<StaffSession['user']>;
 

@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { FirmSettings } from '@layerbook/contracts';
+import type { FirmSettings } from '@layerbook/contracts/types';
 
 /** The firm's currency, asked once per visit, for pages that show estimated values. */
 @Injectable({ providedIn: 'root' })

@@ -1,4 +1,4 @@
-import type { StaffRole } from '@layerbook/contracts';
+import type { StaffRole } from '@layerbook/contracts/types';
 
 export interface NavItem {
   readonly label: string;

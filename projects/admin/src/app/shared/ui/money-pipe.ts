@@ -1,10 +1,7 @@
 import { LOCALE_ID, Pipe, PipeTransform, inject } from '@angular/core';
+import { DomainInputError, formatMoney } from '@layerbook/domain';
 
-/**
- * Formats an API amount (a decimal string like "12500.00") in the firm's currency.
- * Intl.NumberFormat reads numeric strings as exact decimals (ECMA-402 NumberFormat v3), so the
- * amount is never turned into a float; TypeScript's ES2022 lib does not know that overload yet.
- */
+/** Shows an API amount (a decimal string like "12500.00") in the firm's currency, never via a float. */
 @Pipe({ name: 'money' })
 export class MoneyPipe implements PipeTransform {
   private readonly locale = inject(LOCALE_ID);
@@ -16,7 +13,14 @@ export class MoneyPipe implements PipeTransform {
     if (!currency) {
       return amount;
     }
-    const format = new Intl.NumberFormat(this.locale, { style: 'currency', currency });
-    return format.format(amount as unknown as number);
+    try {
+      return formatMoney(amount, currency, this.locale);
+    } catch (error) {
+      // A value the formatter refuses still shows as the server sent it, rather than breaking the page.
+      if (error instanceof DomainInputError) {
+        return `${amount} ${currency}`;
+      }
+      throw error;
+    }
   }
 }

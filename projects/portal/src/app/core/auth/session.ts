@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { PortalSession } from '@layerbook/contracts';
+import type { PortalSession } from '@layerbook/contracts/types';
 
 export type PortalClient = NonNullable<PortalSession['client']>;
 

@@ -1,0 +1,43 @@
+import { APP_BASE_HREF } from '@angular/common';
+import { provideHttpClient, withFetch, withInterceptors } from '@angular/common/http';
+import {
+  ApplicationConfig,
+  provideBrowserGlobalErrorListeners,
+  provideZonelessChangeDetection,
+} from '@angular/core';
+import { MAT_FORM_FIELD_DEFAULT_OPTIONS } from '@angular/material/form-field';
+import { MAT_ICON_DEFAULT_OPTIONS } from '@angular/material/icon';
+import {
+  provideClientHydration,
+  withEventReplay,
+  withHttpTransferCacheOptions,
+} from '@angular/platform-browser';
+import { Routes, provideRouter, withComponentInputBinding } from '@angular/router';
+import { apiInterceptorFor } from '../http/api-interceptor';
+import { ApiSettings, isSessionCall } from '../http/api-settings';
+
+/** Both apps' browser configuration: the same providers, told apart by their API settings. */
+export function appConfigFor(settings: ApiSettings, routes: Routes): ApplicationConfig {
+  return {
+    providers: [
+      provideBrowserGlobalErrorListeners(),
+      // The served HTML has no <base> element (see ssr/ssr-app.ts), so the router learns its root here.
+      { provide: APP_BASE_HREF, useValue: settings.baseHref },
+      provideZonelessChangeDetection(),
+      provideRouter(routes, withComponentInputBinding()),
+      provideHttpClient(withFetch(), withInterceptors([apiInterceptorFor(settings)])),
+      provideClientHydration(
+        withEventReplay(),
+        withHttpTransferCacheOptions({
+          // Session answers carry a CSRF token bound to the browser's own cookie: never replay them.
+          filter: (req) => !isSessionCall(req.url, settings),
+        }),
+      ),
+      { provide: MAT_ICON_DEFAULT_OPTIONS, useValue: { fontSet: 'material-symbols-outlined' } },
+      {
+        provide: MAT_FORM_FIELD_DEFAULT_OPTIONS,
+        useValue: { appearance: 'outline', subscriptSizing: 'dynamic' },
+      },
+    ],
+  };
+}

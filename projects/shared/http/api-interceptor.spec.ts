@@ -1,0 +1,166 @@
+import { HttpClient, HttpErrorResponse, provideHttpClient, withInterceptors } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { ApplicationRef, Component, Injectable } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { Router, provideRouter } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { apiInterceptorFor } from './api-interceptor';
+import type { ApiSettings } from './api-settings';
+
+@Component({ template: '' })
+class Page {}
+
+/** Stands in for an app's Session: records being told to forget the user. */
+@Injectable({ providedIn: 'root' })
+class FakeSession {
+  forgotten = 0;
+  accept(session: null): null {
+    this.forgotten++;
+    return session;
+  }
+}
+
+const ADMIN_LIKE: ApiSettings = {
+  sessionUrl: '/api/auth/session',
+  sessionCalls: ['/api/auth/'],
+  signInPath: '/sign-in',
+  baseHref: '/',
+  session: FakeSession,
+};
+const PORTAL_LIKE: ApiSettings = {
+  sessionUrl: '/api/portal/session',
+  sessionCalls: ['/api/portal/session', '/api/portal/auth/'],
+  signInPath: '/sign-in',
+  baseHref: '/portal/',
+  session: FakeSession,
+};
+const EXPIRED = { type: 'about:blank', title: 'Please sign in.', status: 401 };
+
+function setUp(settings: ApiSettings) {
+  TestBed.configureTestingModule({
+    providers: [
+      provideRouter([
+        { path: 'sign-in', component: Page },
+        { path: '**', component: Page },
+      ]),
+      provideHttpClient(withInterceptors([apiInterceptorFor(settings)])),
+      provideHttpClientTesting(),
+    ],
+  });
+  return {
+    http: TestBed.inject(HttpClient),
+    api: TestBed.inject(HttpTestingController),
+    router: TestBed.inject(Router),
+    session: TestBed.inject(FakeSession),
+  };
+}
+
+/** Waits for a request the test expects to fail, then for whatever the interceptor started. */
+async function failing(request: Promise<unknown>): Promise<void> {
+  await expect(request).rejects.toBeInstanceOf(HttpErrorResponse);
+  await TestBed.inject(ApplicationRef).whenStable();
+}
+
+describe('apiInterceptorFor', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  describe('when the session ends (401)', () => {
+    it.each([
+      // settings, page the person is on, sign-in URL they land on
+      [ADMIN_LIKE, '/jobs/7?tab=photos', '/sign-in?next=%2Fjobs%2F7%3Ftab%3Dphotos'],
+      [PORTAL_LIKE, '/proposals/9', '/sign-in?next=%2Fportal%2Fproposals%2F9'],
+    ])('sends them to sign in and back (%#)', async (settings, page, landing) => {
+      const { http, api, router, session } = setUp(settings);
+      await router.navigateByUrl(page);
+      const sent = failing(firstValueFrom(http.get('/api/jobs/7')));
+      api.expectOne('/api/jobs/7').flush(EXPIRED, { status: 401, statusText: 'Unauthorized' });
+      await sent;
+      expect(router.url).toBe(landing);
+      expect(session.forgotten).toBe(1);
+    });
+
+    it.each([
+      [ADMIN_LIKE, '/api/auth/session'],
+      [ADMIN_LIKE, '/api/auth/signin'],
+      [PORTAL_LIKE, '/api/portal/session'],
+      [PORTAL_LIKE, '/api/portal/auth/redeem'],
+    ])('leaves a 401 from a session call to the page (%#: %s)', async (settings, url) => {
+      const { http, api, router, session } = setUp(settings);
+      await router.navigateByUrl('/today');
+      const sent = failing(firstValueFrom(http.post(url, {})));
+      if (url.endsWith('/session')) {
+        api.expectOne(url).flush(EXPIRED, { status: 401, statusText: 'Unauthorized' });
+      } else {
+        // A write with no token yet asks the session for one first.
+        api.expectOne(settings.sessionUrl).flush({ csrfToken: 't1' });
+        api.expectOne(url).flush(EXPIRED, { status: 401, statusText: 'Unauthorized' });
+      }
+      await sent;
+      expect(router.url).toBe('/today');
+      expect(session.forgotten).toBe(0);
+    });
+
+    it('does not send someone on the sign-in page to the sign-in page', async () => {
+      const { http, api, router } = setUp(ADMIN_LIKE);
+      await router.navigateByUrl('/sign-in?next=%2Fjobs');
+      const sent = failing(firstValueFrom(http.get('/api/firm')));
+      api.expectOne('/api/firm').flush(EXPIRED, { status: 401, statusText: 'Unauthorized' });
+      await sent;
+      expect(router.url).toBe('/sign-in?next=%2Fjobs');
+    });
+
+    it('leaves other failures to the page', async () => {
+      const { http, api, router, session } = setUp(ADMIN_LIKE);
+      await router.navigateByUrl('/jobs');
+      const sent = failing(firstValueFrom(http.get('/api/jobs')));
+      api.expectOne('/api/jobs').flush({ ...EXPIRED, status: 403 }, { status: 403, statusText: 'Forbidden' });
+      await sent;
+      expect(router.url).toBe('/jobs');
+      expect(session.forgotten).toBe(0);
+    });
+  });
+
+  describe('cookies and CSRF', () => {
+    let http: HttpClient;
+    let api: HttpTestingController;
+    beforeEach(() => ({ http, api } = setUp(ADMIN_LIKE)));
+
+    it('sends the token from the last session answer on writes, with the cookie', async () => {
+      const probe = firstValueFrom(http.get('/api/auth/session'));
+      const read = api.expectOne('/api/auth/session');
+      expect(read.request.withCredentials).toBe(true);
+      expect(read.request.headers.has('x-csrf-token')).toBe(false);
+      read.flush({ user: null, csrfToken: 'token-1' });
+      await probe;
+
+      const write = firstValueFrom(http.post('/api/jobs', { name: 'Hall' }));
+      const sent = api.expectOne('/api/jobs');
+      expect(sent.request.headers.get('x-csrf-token')).toBe('token-1');
+      expect(sent.request.withCredentials).toBe(true);
+      sent.flush({ id: 'j1' });
+      await write;
+    });
+
+    it('asks for a token first when a write comes before any session answer', async () => {
+      const write = firstValueFrom(http.post('/api/jobs', {}));
+      api.expectOne({ method: 'GET', url: '/api/auth/session' }).flush({ user: null, csrfToken: 'token-2' });
+      const sent = api.expectOne({ method: 'POST', url: '/api/jobs' });
+      expect(sent.request.headers.get('x-csrf-token')).toBe('token-2');
+      sent.flush({});
+      await write;
+    });
+
+    it.each([['/api/public/firms/fernhollow'], ['/assets/logo.svg'], ['https://example.test/api/x']])(
+      'sends %s as it is (no cookie, no token)',
+      async (url) => {
+        const read = firstValueFrom(http.get(url));
+        const sent = api.expectOne(url);
+        expect(sent.request.withCredentials).toBe(false);
+        expect(sent.request.headers.has('x-csrf-token')).toBe(false);
+        sent.flush({});
+        await read;
+      },
+    );
+  });
+});

@@ -1,0 +1,115 @@
+import {
+  HttpErrorResponse,
+  HttpEvent,
+  HttpHandlerFn,
+  HttpInterceptorFn,
+  HttpRequest,
+  HttpResponse,
+} from '@angular/common/http';
+import { isPlatformServer } from '@angular/common';
+import { PLATFORM_ID, REQUEST, inject } from '@angular/core';
+import { Router } from '@angular/router';
+import { Observable, filter, switchMap, take, tap } from 'rxjs';
+import { API_PREFIX, ApiSettings, PUBLIC_API_PREFIX, isSessionCall } from './api-settings';
+import { CsrfToken } from './csrf-token';
+import { signInRedirect } from './return-address';
+
+const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
+
+/**
+ * The one interceptor for calls to our own API, set up per app by its settings.
+ * Server (SSR): relative URLs have no origin there, and the API only knows the visitor by the
+ * session cookie, so the URL is made absolute against the incoming request and its cookie forwarded.
+ * Browser: same-origin cookies plus the CSRF token from the last session answer on writes; the
+ * anonymous public API goes out as it is; a 401 means the session ended, so the person is sent to
+ * sign in and brought back afterwards.
+ */
+export function apiInterceptorFor(settings: ApiSettings): HttpInterceptorFn {
+  return (req, next) => {
+    if (!req.url.startsWith(API_PREFIX)) {
+      return next(req);
+    }
+    if (isPlatformServer(inject(PLATFORM_ID))) {
+      return next(forServer(req, inject(REQUEST, { optional: true })));
+    }
+    if (req.url.startsWith(PUBLIC_API_PREFIX)) {
+      return next(req);
+    }
+    const csrf = inject(CsrfToken);
+    const endSession = isSessionCall(req.url, settings) ? null : sessionEnder(settings);
+    const watch = tap<HttpEvent<unknown>>({
+      next: (event) => rememberToken(event, csrf),
+      error: (error: unknown) => {
+        if (endSession && error instanceof HttpErrorResponse && error.status === 401) {
+          endSession();
+        }
+      },
+    });
+    const request = req.clone({ withCredentials: true });
+
+    if (SAFE_METHODS.has(req.method)) {
+      return next(request).pipe(watch);
+    }
+    const send = () => next(request.clone({ setHeaders: { 'x-csrf-token': csrf.value() } })).pipe(watch);
+    if (csrf.value()) {
+      return send();
+    }
+    // A write before any session answer (e.g. the session call failed): fetch a token first.
+    return fetchSession(next, settings.sessionUrl).pipe(
+      tap((event) => rememberToken(event, csrf)),
+      switchMap(send),
+    );
+  };
+}
+
+/** Forgets the user and opens the sign-in page with the current page as the way back. */
+function sessionEnder(settings: ApiSettings): () => void {
+  const router = inject(Router);
+  const session = inject(settings.session);
+  return () => {
+    session.accept(null);
+    const navigating = router.currentNavigation();
+    const target = navigating?.finalUrl ?? navigating?.extractedUrl;
+    const redirect = signInRedirect(
+      target ? router.serializeUrl(target) : router.url,
+      settings.signInPath,
+      settings.baseHref,
+    );
+    if (redirect) {
+      void router.navigate([redirect.path], { queryParams: { next: redirect.next } });
+    }
+  };
+}
+
+function forServer(req: HttpRequest<unknown>, incoming: Request | null): HttpRequest<unknown> {
+  if (!incoming) {
+    return req;
+  }
+  const cookie = incoming.headers.get('cookie');
+  return req.clone({
+    url: new URL(req.url, incoming.url).href,
+    setHeaders: cookie ? { cookie } : {},
+  });
+}
+
+function fetchSession(next: HttpHandlerFn, sessionUrl: string): Observable<HttpResponse<unknown>> {
+  return next(new HttpRequest('GET', sessionUrl, { withCredentials: true })).pipe(
+    filter((event): event is HttpResponse<unknown> => event instanceof HttpResponse),
+    take(1),
+  );
+}
+
+function rememberToken(event: HttpEvent<unknown>, csrf: CsrfToken): void {
+  if (!(event instanceof HttpResponse)) {
+    return;
+  }
+  const body: unknown = event.body;
+  if (
+    typeof body === 'object' &&
+    body !== null &&
+    'csrfToken' in body &&
+    typeof body.csrfToken === 'string'
+  ) {
+    csrf.remember(body.csrfToken);
+  }
+}

@@ -1,0 +1,128 @@
+import {
+  AngularNodeAppEngine,
+  createNodeRequestHandler,
+  isMainModule,
+  writeResponseToNodeResponse,
+} from '@angular/ssr/node';
+import express, { type Express, type Response as ExpressResponse } from 'express';
+import { randomBytes } from 'node:crypto';
+
+/** index.html carries this marker in `ngCspNonce`; every copy is swapped for the request's nonce. */
+const NONCE_PLACEHOLDER = '__LB_CSP_NONCE__';
+const NONCE_SHAPE = /^[A-Za-z0-9+/=_-]{8,128}$/;
+/**
+ * The host's CSP has `base-uri 'none'`, so browsers refuse a <base> element (and log a violation).
+ * Asset URLs are absolute (`deployUrl`) and the router gets APP_BASE_HREF from DI instead.
+ */
+const BASE_ELEMENT = /<base href="[^"]*"\s*\/?>/i;
+/**
+ * Without <base>, font URLs in critical CSS inlined into <head> (`url("./media/…")`) would resolve
+ * against the page's own path, and break on any deeper page (/portal/f/:slug/inquiry).
+ */
+const INLINED_MEDIA_URL = /url\((['"]?)\.\/media\//g;
+
+export interface SsrAppOptions {
+  /** The built browser files (`dist/<app>/browser`), served as they are. */
+  readonly browserDistFolder: string;
+  /** Where the browser files are served from (`deployUrl` + `media/`), e.g. `/portal/media/`. */
+  readonly mediaRoot: string;
+  /** More request context for the app, taken from what the host put in `res.locals`. */
+  readonly requestContext?: (res: ExpressResponse) => Record<string, unknown>;
+  /** The status to answer with, when the host's context changes it (a refused form post). */
+  readonly statusFor?: (rendered: number, res: ExpressResponse) => number;
+}
+
+/** One app's server-side rendering: static files, then Angular pages carrying the host's CSP nonce. */
+export function createSsrApp(options: SsrAppOptions): Express {
+  const app = express();
+  const angularApp = new AngularNodeAppEngine();
+  app.use(
+    express.static(options.browserDistFolder, {
+      maxAge: '1y',
+      index: false,
+      redirect: false,
+    }),
+  );
+  app.use((req, res, next) => {
+    const cspNonce = nonceFor(res);
+    angularApp
+      .handle(req, { ...options.requestContext?.(res), cspNonce })
+      .then((response) => {
+        if (!response) {
+          return next();
+        }
+        const status = options.statusFor?.(response.status, res) ?? response.status;
+        return sendWithNonce(response, res, { nonce: cspNonce, status, mediaRoot: options.mediaRoot });
+      })
+      .catch(next);
+  });
+  return app;
+}
+
+/**
+ * The handler the Layerbook host server mounts (and the Angular CLI dev server uses); the app
+ * listens by itself only when its bundle is run directly.
+ */
+export function ssrRequestHandler(app: Express, moduleUrl: string): ReturnType<typeof createNodeRequestHandler> {
+  if (isMainModule(moduleUrl) || process.env['pm_id']) {
+    const port = process.env['PORT'] || 4000;
+    app.listen(port, (error) => {
+      if (error) {
+        throw error;
+      }
+      console.log(`Node Express server listening on http://localhost:${port}`);
+    });
+  }
+  return createNodeRequestHandler(app);
+}
+
+/**
+ * The host puts a fresh nonce in `res.locals.cspNonce` and sends it in its CSP header. When this
+ * bundle runs on its own there is no CSP header, so any well-formed value will do.
+ */
+function nonceFor(res: ExpressResponse): string {
+  const given: unknown = res.locals['cspNonce'];
+  if (typeof given === 'string' && NONCE_SHAPE.test(given)) {
+    return given;
+  }
+  return randomBytes(16).toString('base64');
+}
+
+interface HtmlAnswer {
+  readonly nonce: string;
+  readonly status: number;
+  readonly mediaRoot: string;
+}
+
+async function sendWithNonce(response: Response, res: ExpressResponse, answer: HtmlAnswer): Promise<void> {
+  const contentType = response.headers.get('content-type') ?? '';
+  if (!contentType.startsWith('text/html')) {
+    await writeResponseToNodeResponse(response, res);
+    return;
+  }
+  const html = withRootedMedia(
+    (await response.text()).replaceAll(NONCE_PLACEHOLDER, answer.nonce).replace(BASE_ELEMENT, ''),
+    answer.mediaRoot,
+  );
+  res.status(answer.status);
+  response.headers.forEach((value, key) => {
+    // The body length changes with the nonce; cookies need their own list form.
+    if (key !== 'content-length' && key !== 'set-cookie') {
+      res.setHeader(key, value);
+    }
+  });
+  const cookies = response.headers.getSetCookie();
+  if (cookies.length > 0) {
+    res.setHeader('set-cookie', cookies);
+  }
+  res.send(html);
+}
+
+/** Only the head is touched: the body may hold visitors' own words. */
+function withRootedMedia(html: string, mediaRoot: string): string {
+  const headEnd = html.indexOf('</head>');
+  if (headEnd < 0) {
+    return html;
+  }
+  return html.slice(0, headEnd).replace(INLINED_MEDIA_URL, `url($1${mediaRoot}`) + html.slice(headEnd);
+}
