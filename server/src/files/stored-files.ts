@@ -48,7 +48,8 @@ export async function discardObjects(storage: ObjectStore, logger: Logger, keys:
   }
 }
 
-export async function insertImageRow(tx: TenantTx, stored: StoredImage, purpose: string, uploadedBy: string): Promise<FileRow> {
+/** `uploadedBy` is a staff member's user id (null for an upload no staff member made). */
+export async function insertImageRow(tx: TenantTx, stored: StoredImage, purpose: string, uploadedBy: string | null): Promise<FileRow> {
   const { image } = stored;
   const rows = await tx.db
     .insert(files)

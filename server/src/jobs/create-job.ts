@@ -1,6 +1,6 @@
 import type { SnapshotOption } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import Decimal from 'decimal.js';
+import { scheduleTotals } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
 
 export interface AcceptedWork {
@@ -23,9 +23,9 @@ export interface AcceptedWork {
  */
 export async function createJobFromAcceptance(tx: TenantTx, work: AcceptedWork): Promise<string> {
   const { option } = work;
-  const sum = option.payments.reduce((acc, p) => acc.plus(p.amount), new Decimal(0));
-  if (!sum.equals(option.total)) {
-    throw new Error(`payment schedule of option ${option.id} sums to ${sum.toFixed(2)}, not ${option.total}`);
+  const totals = scheduleTotals(option.payments.map((p) => ({ amount: p.amount, percent: null })), option.total);
+  if (!totals.isContractSum) {
+    throw new Error(`payment schedule of option ${option.id} sums to ${totals.amount.toFixed(2)}, not ${option.total}`);
   }
   const { rows } = await tx.client.query<{ id: string }>(
     `insert into jobs (tenant_id, estimate_id, proposal_version_id, client_id, site_id, inquiry_id, title, accepted_variant_id, option_label, currency, contract_sum, start_date, finish_date)

@@ -24,8 +24,13 @@ describe('accepted work (jobs) for the office', () => {
     const detail = await p.agent.get(`/api/jobs/${job.id}`);
     expect(detail.status).toBe(200);
     expect(detail.body).toMatchObject({ proposalVersionId: p.version.id, estimateId: p.estimateId, acceptedVariantId: 'A' });
+    expect(Object.keys(detail.body).sort()).toEqual(
+      ['acceptedVariantId', 'clientId', 'clientName', 'contractSum', 'createdAt', 'currency', 'estimateId', 'finishDate', 'id', 'inquiryId', 'optionLabel', 'paymentSchedule', 'proposalVersionId', 'siteAddress', 'siteId', 'startDate', 'status', 'title'],
+    );
+    expect(typeof detail.body.siteAddress).toBe('string');
     const lines = detail.body.paymentSchedule as Array<{ position: number; role: string; percent: string | null; amount: string }>;
-    expect(lines.map((l) => [l.position, l.role, l.percent === null ? null : Number(l.percent)])).toEqual([[1, 'deposit', 30], [2, 'milestone', 40], [3, 'final', null]]);
+    // Percentages as decimal strings with no trailing zeros, as the office asked for them.
+    expect(lines.map((l) => [l.position, l.role, l.percent])).toEqual([[1, 'deposit', '30'], [2, 'milestone', '40'], [3, 'final', null]]);
     expect(lines.map((l) => l.amount)).toEqual(optionA.payments.map((pay) => pay.amount));
 
     const office = await joinAs(t, p, 'office');

@@ -1,38 +1,84 @@
-import type { JobDetail, JobSummary, PaymentScheduleLineView } from '@layerbook/contracts';
+import type { ItemList, JobDetail, JobStatus, JobSummary, PaymentLineRole, PaymentLineStatus, PaymentScheduleLineView, SnapshotPaymentTrigger } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { notFound } from '../http/problem';
 
 const SUMMARY = `j.id, j.title, j.client_id, c.name as client_name, j.option_label, j.contract_sum::text as contract_sum, j.currency, j.status,
   j.start_date::text as start_date, j.finish_date::text as finish_date, j.created_at`;
 
-type Row = Record<string, unknown>;
+/** The columns SUMMARY selects, as PostgreSQL hands them over (numeric and dates as text). */
+interface SummaryRow {
+  id: string;
+  title: string;
+  client_id: string;
+  client_name: string;
+  option_label: string;
+  contract_sum: string;
+  currency: string;
+  status: JobStatus;
+  start_date: string | null;
+  finish_date: string | null;
+  created_at: Date;
+}
 
-const toSummary = (r: Row): JobSummary => ({
-  id: r['id'] as string,
-  title: r['title'] as string,
-  clientId: r['client_id'] as string,
-  clientName: r['client_name'] as string,
-  optionLabel: r['option_label'] as string,
-  contractSum: r['contract_sum'] as string,
-  currency: r['currency'] as string,
-  status: r['status'] as JobSummary['status'],
-  startDate: (r['start_date'] as string | null) ?? null,
-  finishDate: (r['finish_date'] as string | null) ?? null,
-  createdAt: (r['created_at'] as Date).toISOString(),
+interface DetailRow extends SummaryRow {
+  estimate_id: string;
+  proposal_version_id: string;
+  site_id: string;
+  inquiry_id: string | null;
+  accepted_variant_id: string;
+  site_address: string | null;
+}
+
+interface LineRow {
+  id: string;
+  position: number;
+  label: string;
+  role: PaymentLineRole;
+  trigger: SnapshotPaymentTrigger;
+  percent: string | null;
+  amount: string;
+  expected_on: string | null;
+  status: PaymentLineStatus;
+}
+
+const toSummary = (r: SummaryRow): JobSummary => ({
+  id: r.id,
+  title: r.title,
+  clientId: r.client_id,
+  clientName: r.client_name,
+  optionLabel: r.option_label,
+  contractSum: r.contract_sum,
+  currency: r.currency,
+  status: r.status,
+  startDate: r.start_date,
+  finishDate: r.finish_date,
+  createdAt: r.created_at.toISOString(),
+});
+
+const toLine = (l: LineRow): PaymentScheduleLineView => ({
+  id: l.id,
+  position: l.position,
+  label: l.label,
+  role: l.role,
+  trigger: l.trigger,
+  percent: l.percent,
+  amount: l.amount,
+  expectedOn: l.expected_on,
+  status: l.status,
 });
 
 /** Newest first. A firm of this size has tens of jobs a year; 200 is a page nobody reaches yet. */
-export async function listJobs(tx: TenantTx): Promise<JobSummary[]> {
-  const { rows } = await tx.client.query<Row>(
+export async function listJobs(tx: TenantTx): Promise<ItemList<JobSummary>> {
+  const { rows } = await tx.client.query<SummaryRow>(
     `select ${SUMMARY} from jobs j join clients c on c.tenant_id = j.tenant_id and c.id = j.client_id
       where j.tenant_id = $1 order by j.created_at desc, j.id desc limit 200`,
     [tx.tenantId],
   );
-  return rows.map(toSummary);
+  return { items: rows.map(toSummary) };
 }
 
 export async function getJob(tx: TenantTx, id: string): Promise<JobDetail> {
-  const { rows } = await tx.client.query<Row>(
+  const { rows } = await tx.client.query<DetailRow>(
     `select ${SUMMARY}, j.estimate_id, j.proposal_version_id, j.site_id, j.inquiry_id, j.accepted_variant_id,
             concat_ws(', ', nullif(s.address_line1, ''), nullif(s.city, '')) as site_address
        from jobs j join clients c on c.tenant_id = j.tenant_id and c.id = j.client_id
@@ -42,31 +88,20 @@ export async function getJob(tx: TenantTx, id: string): Promise<JobDetail> {
   );
   const r = rows[0];
   if (!r) throw notFound('job');
-  const lines = await tx.client.query<Row>(
-    `select id, position, label, role, trigger, percent::text as percent, amount::text as amount, expected_on::text as expected_on, status
+  // percent::text of 30.00 is "30.00"; trimmed to "30" so the apps print what was asked for.
+  const lines = await tx.client.query<LineRow>(
+    `select id, position, label, role, trigger, trim_scale(percent)::text as percent, amount::text as amount, expected_on::text as expected_on, status
        from payment_schedule_lines where tenant_id = $1 and job_id = $2 order by position`,
     [tx.tenantId, id],
   );
   return {
     ...toSummary(r),
-    estimateId: r['estimate_id'] as string,
-    proposalVersionId: r['proposal_version_id'] as string,
-    siteId: r['site_id'] as string,
-    siteAddress: (r['site_address'] as string | null) ?? '',
-    inquiryId: (r['inquiry_id'] as string | null) ?? null,
-    acceptedVariantId: r['accepted_variant_id'] as string,
-    paymentSchedule: lines.rows.map(
-      (l): PaymentScheduleLineView => ({
-        id: l['id'] as string,
-        position: l['position'] as number,
-        label: l['label'] as string,
-        role: l['role'] as PaymentScheduleLineView['role'],
-        trigger: l['trigger'] as PaymentScheduleLineView['trigger'],
-        percent: (l['percent'] as string | null) ?? null,
-        amount: l['amount'] as string,
-        expectedOn: (l['expected_on'] as string | null) ?? null,
-        status: l['status'] as PaymentScheduleLineView['status'],
-      }),
-    ),
+    estimateId: r.estimate_id,
+    proposalVersionId: r.proposal_version_id,
+    siteId: r.site_id,
+    siteAddress: r.site_address ?? '',
+    inquiryId: r.inquiry_id,
+    acceptedVariantId: r.accepted_variant_id,
+    paymentSchedule: lines.rows.map(toLine),
   };
 }

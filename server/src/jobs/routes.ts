@@ -1,4 +1,4 @@
-import { uuid } from '@layerbook/contracts';
+import { uuid, type ItemList, type JobDetail, type JobSummary } from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
@@ -13,11 +13,11 @@ export function jobRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    res.json({ items: await withStaff(ctx, req, 'office', (tx) => listJobs(tx)) });
+    res.json((await withStaff(ctx, req, 'office', (tx) => listJobs(tx))) satisfies ItemList<JobSummary>);
   });
 
   router.get('/:id', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'office', (tx) => getJob(tx, parse(idParam, req.params).id)));
+    res.json((await withStaff(ctx, req, 'office', (tx) => getJob(tx, parse(idParam, req.params).id))) satisfies JobDetail);
   });
 
   return router;

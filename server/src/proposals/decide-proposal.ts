@@ -2,6 +2,7 @@ import type { PortalProposal, ProposalAcceptance, ProposalChangeRequest, Proposa
 import type { TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { AppContext } from '../context';
+import { clientActor } from '../http/actor';
 import type { ClientPrincipal } from '../http/principal';
 import { badRequest, conflict, HttpError } from '../http/problem';
 import { moveStage } from '../inquiries/service';
@@ -57,7 +58,7 @@ export async function acceptProposal(tx: TenantTx, ctx: AppContext, client: Clie
     [tx.tenantId, id, now, option.id, input.signedName, signing.ip, signing.userAgent.slice(0, 500)],
   );
   await tx.client.query(`update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status = 'draft'`, [tx.tenantId, row.estimate_id]);
-  await tx.client.query(`update estimates set status = 'accepted', updated_at = now() where tenant_id = $1 and id = $2`, [tx.tenantId, row.estimate_id]);
+  await tx.client.query(`update estimates set status = 'accepted', updated_at = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, row.estimate_id, now]);
   const jobId = await createJobFromAcceptance(tx, {
     proposalVersionId: id,
     estimateId: row.estimate_id,
@@ -69,7 +70,7 @@ export async function acceptProposal(tx: TenantTx, ctx: AppContext, client: Clie
     option,
     actorPortalUserId: client.id,
   });
-  if (row.inquiry_id) await moveStage(tx, { userId: null, kind: 'client' }, row.inquiry_id, { stage: 'won' });
+  if (row.inquiry_id) await moveStage(tx, clientActor(client), row.inquiry_id, { stage: 'won' }, now);
   await recordAudit(tx, {
     actorUserId: null,
     actorKind: 'client',
@@ -100,7 +101,7 @@ export async function answerProposal(
   if (refused) throw refused;
   await tx.client.query(`update proposal_versions set status = $3, client_comment = $4, decided_at = $5 where tenant_id = $1 and id = $2 and status = 'sent'`, [tx.tenantId, id, answer, comment, now]);
   if (answer === 'declined') {
-    await tx.client.query(`update estimates set status = 'declined', updated_at = now() where tenant_id = $1 and id = $2 and status <> 'accepted'`, [tx.tenantId, row.estimate_id]);
+    await tx.client.query(`update estimates set status = 'declined', updated_at = $3 where tenant_id = $1 and id = $2 and status <> 'accepted'`, [tx.tenantId, row.estimate_id, now]);
   }
   await recordAudit(tx, {
     actorUserId: null,

@@ -25,8 +25,16 @@ interface OpenVersion {
 /**
  * Reminds each client whose sent, undecided proposal ends within REMINDER_DAYS_BEFORE days of
  * the firm's local date. Runs with the firm's morning jobs; the purpose key sends once per version.
+ * `now` starts the sign-in links' lifetime (the worker's clock, movable in tests).
  */
-export async function sendProposalReminders(pool: Pool, queue: JobQueue, config: Config, job: { tenantId: string; localDate: string }, logger: Logger): Promise<number> {
+export async function sendProposalReminders(
+  pool: Pool,
+  queue: JobQueue,
+  config: Config,
+  job: { tenantId: string; localDate: string },
+  logger: Logger,
+  now: Date,
+): Promise<number> {
   return withTenant(pool, job.tenantId, async (tx) => {
     const { rows } = await tx.client.query<OpenVersion>(
       `select v.id, v.version, e.title, v.expires_on::text as expires_on, f.name as firm_name, p.id as portal_user_id, p.name, p.email
@@ -43,7 +51,7 @@ export async function sendProposalReminders(pool: Pool, queue: JobQueue, config:
       const purposeKey = `proposal-expiring:${v.id}:${v.portal_user_id}`;
       const { rows: sent } = await tx.client.query(`select 1 from mail_outbox where purpose_key = $1`, [purposeKey]);
       if (sent.length) continue;
-      const link = await createPortalLink(tx, v.portal_user_id, new Date(), LINK_MINUTES);
+      const link = await createPortalLink(tx, v.portal_user_id, now, LINK_MINUTES);
       const url = `${config.PUBLIC_URL}/portal/sign-in/link?token=${link.token}&next=${encodeURIComponent(`/portal/proposals/${v.id}`)}`;
       await enqueueMail(tx, queue, {
         purposeKey,

@@ -1,4 +1,4 @@
-import { proposalAcceptance, proposalChangeRequest, proposalDecline, uuid } from '@layerbook/contracts';
+import { proposalAcceptance, proposalChangeRequest, proposalDecline, uuid, type ItemList, type PortalProposal, type PortalProposalSummary } from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
@@ -16,11 +16,12 @@ export function portalProposalRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    res.json(await withClient(ctx, req, async (tx, client) => ({ items: await listClientProposals(tx, client) })));
+    const items = await withClient(ctx, req, (tx, client) => listClientProposals(tx, client));
+    res.json({ items } satisfies ItemList<PortalProposalSummary>);
   });
 
   router.get('/:id', async (req, res) => {
-    res.json(await withClient(ctx, req, (tx, client) => getClientProposal(tx, client, parse(idParam, req.params).id, ctx.now())));
+    res.json((await withClient(ctx, req, (tx, client) => getClientProposal(tx, client, parse(idParam, req.params).id, ctx.now()))) satisfies PortalProposal);
   });
 
   // Drawn from the stored snapshot after the transaction ends: a GET with no side effects.

@@ -1,4 +1,14 @@
-import { DEFAULT_PROPOSAL_TERMS, type ProposalCreate, type ProposalSnapshot, type ProposalTerms, type ProposalUpdate, type ProposalVersionSummary, type ProposalVersionView } from '@layerbook/contracts';
+import {
+  DEFAULT_PROPOSAL_TERMS,
+  type ItemList,
+  type ProposalCreate,
+  type ProposalSnapshot,
+  type ProposalTerms,
+  type ProposalUpdate,
+  type ProposalVersionStatus,
+  type ProposalVersionSummary,
+  type ProposalVersionView,
+} from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { type DepositCapRule, DomainInputError } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
@@ -19,29 +29,44 @@ export function depositCapRule(_sources: ProposalSources): DepositCapRule {
 const COLUMNS = `id, estimate_id, version, status, snapshot, snapshot_hash, expires_on::text as expires_on, sent_at, decided_at,
   accepted_variant_id, signed_name, client_comment, created_at`;
 
-type Row = Record<string, unknown> & { snapshot: ProposalSnapshot };
+/** The columns COLUMNS selects, as PostgreSQL hands them over. */
+interface Row {
+  id: string;
+  estimate_id: string;
+  version: number;
+  status: ProposalVersionStatus;
+  snapshot: ProposalSnapshot;
+  snapshot_hash: string;
+  expires_on: string;
+  sent_at: Date | null;
+  decided_at: Date | null;
+  accepted_variant_id: string | null;
+  signed_name: string | null;
+  client_comment: string;
+  created_at: Date;
+}
 
 function summary(r: Row): ProposalVersionSummary {
   return {
-    id: r['id'] as string,
-    estimateId: r['estimate_id'] as string,
-    version: r['version'] as number,
-    status: r['status'] as ProposalVersionSummary['status'],
+    id: r.id,
+    estimateId: r.estimate_id,
+    version: r.version,
+    status: r.status,
     title: r.snapshot.title,
-    snapshotHash: r['snapshot_hash'] as string,
-    expiresOn: r['expires_on'] as string,
-    sentAt: (r['sent_at'] as Date | null)?.toISOString() ?? null,
-    decidedAt: (r['decided_at'] as Date | null)?.toISOString() ?? null,
-    createdAt: (r['created_at'] as Date).toISOString(),
+    snapshotHash: r.snapshot_hash,
+    expiresOn: r.expires_on,
+    sentAt: r.sent_at?.toISOString() ?? null,
+    decidedAt: r.decided_at?.toISOString() ?? null,
+    createdAt: r.created_at.toISOString(),
   };
 }
 
 const view = (r: Row): ProposalVersionView => ({
   ...summary(r),
   snapshot: r.snapshot,
-  acceptedVariantId: (r['accepted_variant_id'] as string | null) ?? null,
-  signedName: (r['signed_name'] as string | null) ?? null,
-  clientComment: r['client_comment'] as string,
+  acceptedVariantId: r.accepted_variant_id,
+  signedName: r.signed_name,
+  clientComment: r.client_comment,
 });
 
 export async function getVersion(tx: TenantTx, id: string, lock = false): Promise<ProposalVersionView> {
@@ -50,12 +75,12 @@ export async function getVersion(tx: TenantTx, id: string, lock = false): Promis
   return view(rows[0]);
 }
 
-export async function listVersions(tx: TenantTx, estimateId?: string): Promise<ProposalVersionSummary[]> {
+export async function listVersions(tx: TenantTx, estimateId?: string): Promise<ItemList<ProposalVersionSummary>> {
   const { rows } = await tx.client.query<Row>(
     `select ${COLUMNS} from proposal_versions where tenant_id = $1 ${estimateId ? 'and estimate_id = $2 order by version desc' : 'order by created_at desc'} limit 200`,
     estimateId ? [tx.tenantId, estimateId] : [tx.tenantId],
   );
-  return rows.map(summary);
+  return { items: rows.map(summary) };
 }
 
 /** The offer must stand past today in the firm's calendar (and not for more than a year). */

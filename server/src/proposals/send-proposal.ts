@@ -34,7 +34,7 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
     [tx.tenantId, version.estimateId, id],
   );
   await tx.client.query(`update proposal_versions set status = 'sent', sent_at = $3 where tenant_id = $1 and id = $2 and status = 'draft'`, [tx.tenantId, id, sentAt]);
-  await tx.client.query(`update estimates set status = 'proposed', updated_at = now() where tenant_id = $1 and id = $2 and status <> 'accepted'`, [tx.tenantId, version.estimateId]);
+  await tx.client.query(`update estimates set status = 'proposed', updated_at = $3 where tenant_id = $1 and id = $2 and status <> 'accepted'`, [tx.tenantId, version.estimateId, sentAt]);
 
   const { token } = await createPortalLink(tx, account.id, sentAt, PROPOSAL_LINK_DAYS * 24 * 60);
   const base = ctx.config.PUBLIC_URL;

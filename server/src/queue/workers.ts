@@ -34,7 +34,7 @@ export async function startWorkers(config: Config, queue: StartedQueue, logger: 
   // Each firm's morning job: the follow-up digest for the staff, then reminders of proposals about to lapse.
   await workEach<FollowUpDigestJob>(boss, QUEUES.followUpDigest, 2, async (data) => {
     await sendFollowUpDigest(pool, queue, config, data, logger);
-    await sendProposalReminders(pool, queue, config, data, logger);
+    await sendProposalReminders(pool, queue, config, data, logger, now());
   });
   // Declared once; pg-boss keeps one schedule per queue however many processes call this.
   await boss.schedule(QUEUES.followUpSweep, FOLLOW_UP_SWEEP_CRON, {}, { tz: 'UTC' });

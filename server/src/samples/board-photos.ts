@@ -1,35 +1,43 @@
-import { and, asc, eq, files, sampleBoardPhotos, TenantTx } from '@layerbook/db';
-import { recordAudit } from '../audit/record';
-import { deleteFileRows, fileUrls, FileRow, insertImageRow, ObjectKeys, StoredImage } from '../files/stored-files';
-import { conflict, notFound } from '../http/problem';
-import type { Actor } from './boards';
+import type { BoardPhotoView } from '@layerbook/contracts';
+import { sampleBoardPhotos, TenantTx } from '@layerbook/db';
+import { addPhoto, deletePhoto, listPhotos, type PhotoAlbum } from '../files/photos';
+import type { ObjectKeys, StoredImage } from '../files/stored-files';
+import type { Actor } from '../http/actor';
+import { conflict } from '../http/problem';
 import { findBoard } from './boards';
-import type { BoardPhotoView } from './schemas';
 
-export const BOARD_PHOTO_PURPOSE = 'sample_board_photo';
+/** Sample-board photos: what the client looks at before approving (files/photos.ts does the rest). */
+export const BOARD_PHOTOS: PhotoAlbum = {
+  table: sampleBoardPhotos,
+  columns: {
+    id: sampleBoardPhotos.id,
+    tenantId: sampleBoardPhotos.tenantId,
+    ownerId: sampleBoardPhotos.boardId,
+    fileId: sampleBoardPhotos.fileId,
+    caption: sampleBoardPhotos.caption,
+    createdAt: sampleBoardPhotos.createdAt,
+  },
+  link: async (tx, row) =>
+    (
+      await tx.db
+        .insert(sampleBoardPhotos)
+        .values({ tenantId: tx.tenantId, boardId: row.ownerId, fileId: row.fileId, caption: row.caption })
+        .returning({ id: sampleBoardPhotos.id, createdAt: sampleBoardPhotos.createdAt })
+    )[0]!,
+  purpose: 'sample_board_photo',
+  audit: { entity: 'sample_board_photo', area: 'samples', ownerKey: 'boardId' },
+};
 
-type PhotoRow = typeof sampleBoardPhotos.$inferSelect;
-
-const toView = (photo: PhotoRow, file: FileRow): BoardPhotoView => ({
-  id: photo.id,
-  boardId: photo.boardId,
-  fileId: file.id,
-  caption: photo.caption,
-  originalName: file.originalName,
-  ...fileUrls(file.id),
-  width: file.width,
-  height: file.height,
-  createdAt: photo.createdAt.toISOString(),
-});
+/** The photos of these boards, grouped by board, in the order they were added. */
+export async function boardPhotosOf(tx: TenantTx, boardIds: readonly string[]): Promise<Map<string, BoardPhotoView[]>> {
+  const byBoard = new Map<string, BoardPhotoView[]>();
+  for (const [boardId, views] of await listPhotos(tx, BOARD_PHOTOS, boardIds)) byBoard.set(boardId, views.map((view) => ({ ...view, boardId })));
+  return byBoard;
+}
 
 export async function listBoardPhotos(tx: TenantTx, boardId: string): Promise<BoardPhotoView[]> {
-  const rows = await tx.db
-    .select({ photo: sampleBoardPhotos, file: files })
-    .from(sampleBoardPhotos)
-    .innerJoin(files, and(eq(files.tenantId, sampleBoardPhotos.tenantId), eq(files.id, sampleBoardPhotos.fileId)))
-    .where(and(eq(sampleBoardPhotos.tenantId, tx.tenantId), eq(sampleBoardPhotos.boardId, boardId)))
-    .orderBy(asc(sampleBoardPhotos.createdAt), asc(sampleBoardPhotos.id));
-  return rows.map((r) => toView(r.photo, r.file));
+  await findBoard(tx, boardId);
+  return (await boardPhotosOf(tx, [boardId])).get(boardId) ?? [];
 }
 
 /** Writes the file row and links it to the board in one transaction; the bytes are already stored. */
@@ -37,41 +45,15 @@ export async function addBoardPhoto(tx: TenantTx, actor: Actor, boardId: string,
   // Locked, so a client's approval cannot slip in between this check and the insert.
   const board = await findBoard(tx, boardId, true);
   if (board.status === 'approved') throw conflict('The client approved this board with its photos; start a new board or round to show different ones.');
-  const file = await insertImageRow(tx, stored, BOARD_PHOTO_PURPOSE, actor.userId);
-  const photo = (await tx.db.insert(sampleBoardPhotos).values({ tenantId: tx.tenantId, boardId, fileId: file.id, caption }).returning())[0]!;
-  await recordAudit(tx, {
-    actorUserId: actor.userId,
-    actorKind: 'staff',
-    action: 'samples.photo_added',
-    entity: 'sample_board_photo',
-    entityId: photo.id,
-    data: { boardId, label: board.label, round: board.round, fileId: file.id, sizeBytes: file.sizeBytes, contentType: file.contentType },
-  });
-  return toView(photo, file);
+  const view = await addPhoto(tx, BOARD_PHOTOS, actor, { id: boardId, about: { label: board.label, round: board.round } }, caption, stored);
+  return { ...view, boardId };
 }
 
 /** Removes the photo and its file row; returns the object keys to delete after the commit. */
-export async function deleteBoardPhoto(tx: TenantTx, actor: Actor, photoId: string): Promise<ObjectKeys> {
-  const row = (
-    await tx.db
-      .select({ photo: sampleBoardPhotos, file: files })
-      .from(sampleBoardPhotos)
-      .innerJoin(files, and(eq(files.tenantId, sampleBoardPhotos.tenantId), eq(files.id, sampleBoardPhotos.fileId)))
-      .where(and(eq(sampleBoardPhotos.tenantId, tx.tenantId), eq(sampleBoardPhotos.id, photoId)))
-  )[0];
-  if (!row) throw notFound('photo');
-  const board = await findBoard(tx, row.photo.boardId, true);
-  // The approved board is the control sample: the photos the client approved stay on record.
-  if (board.status === 'approved') throw conflict('The client approved this board with these photos, so they stay on record.');
-  await tx.db.delete(sampleBoardPhotos).where(and(eq(sampleBoardPhotos.tenantId, tx.tenantId), eq(sampleBoardPhotos.id, photoId)));
-  const keys = await deleteFileRows(tx, [row.file]);
-  await recordAudit(tx, {
-    actorUserId: actor.userId,
-    actorKind: 'staff',
-    action: 'samples.photo_deleted',
-    entity: 'sample_board_photo',
-    entityId: photoId,
-    data: { boardId: row.photo.boardId, fileId: row.file.id, originalName: row.file.originalName },
+export function deleteBoardPhoto(tx: TenantTx, actor: Actor, photoId: string): Promise<ObjectKeys> {
+  return deletePhoto(tx, BOARD_PHOTOS, actor, photoId, async (boardId) => {
+    const board = await findBoard(tx, boardId, true);
+    // The approved board is the control sample: the photos the client approved stay on record.
+    if (board.status === 'approved') throw conflict('The client approved this board with these photos, so they stay on record.');
   });
-  return keys;
 }

@@ -1,15 +1,12 @@
+import type { FinishSnapshot, SampleBoardInput, SampleBoardListItem, SampleBoardUpdate, SampleBoardView } from '@layerbook/contracts';
 import { and, clients, eq, estimates, portalUsers, sampleBoards, sites, TenantTx } from '@layerbook/db';
 import type { AppContext } from '../context';
 import { recordAudit } from '../audit/record';
+import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
-import { listBoardPhotos } from './board-photos';
+import { boardPhotosOf } from './board-photos';
 import { mailBoardShown } from './sample-mail';
-import type { FinishSnapshot, SampleBoardInput, SampleBoardListItem, SampleBoardUpdate, SampleBoardView } from './schemas';
 import { describeFinish, snapshotFinish } from './snapshot';
-
-export interface Actor {
-  readonly userId: string;
-}
 
 export type BoardRow = typeof sampleBoards.$inferSelect;
 
@@ -40,7 +37,7 @@ export async function listBoards(tx: TenantTx, filter: { clientId?: string; site
       limit 500`,
     [tx.tenantId, filter.clientId ?? null, filter.siteId ?? null],
   );
-  return rows.map((r) => ({
+  return rows.map((r): SampleBoardListItem => ({
     id: r.id,
     label: r.label,
     clientId: r.client_id,
@@ -84,7 +81,7 @@ export async function getBoard(tx: TenantTx, boardId: string): Promise<SampleBoa
     decidedAt: board.decidedAt?.toISOString() ?? null,
     decidedByName: decidedBy?.name ?? null,
     hasNextRound: (await findNextRound(tx, board)) !== undefined,
-    photos: await listBoardPhotos(tx, board.id),
+    photos: (await boardPhotosOf(tx, [board.id])).get(board.id) ?? [],
     createdAt: board.createdAt.toISOString(),
     updatedAt: board.updatedAt.toISOString(),
   };
@@ -122,7 +119,7 @@ export async function createBoard(tx: TenantTx, actor: Actor, input: SampleBoard
       })
       .returning()
   )[0]!;
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'samples.board_created', entity: 'sample_board', entityId: row.id, data: { label: row.label, clientId: row.clientId, finishSystemId: row.finishSystemId } });
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'samples.board_created', entity: 'sample_board', entityId: row.id, data: { label: row.label, clientId: row.clientId, finishSystemId: row.finishSystemId } });
   return getBoard(tx, row.id);
 }
 
@@ -139,16 +136,16 @@ export async function updateBoard(tx: TenantTx, actor: Actor, boardId: string, i
     changes.finishSnapshot = input.finishSystemId ? await snapshotFinish(tx, input.finishSystemId, now) : null;
   }
   await tx.db.update(sampleBoards).set(changes).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId)));
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'samples.board_updated', entity: 'sample_board', entityId: boardId, data: { fields: Object.keys(input) } });
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'samples.board_updated', entity: 'sample_board', entityId: boardId, data: { fields: Object.keys(input) } });
   return getBoard(tx, boardId);
 }
 
-export async function showBoard(tx: TenantTx, ctx: AppContext, actor: Actor & { firmName: string }, boardId: string, now: Date): Promise<SampleBoardView> {
+export async function showBoard(tx: TenantTx, ctx: AppContext, actor: Actor, firmName: string, boardId: string, now: Date): Promise<SampleBoardView> {
   const board = await findBoard(tx, boardId);
   if (board.status !== 'draft') throw conflict('This board has already been shown to the client.');
   await tx.db.update(sampleBoards).set({ status: 'shown', updatedAt: now }).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId), eq(sampleBoards.status, 'draft')));
-  const recipients = await mailBoardShown(tx, ctx, { board, firmName: actor.firmName });
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'samples.board_shown', entity: 'sample_board', entityId: boardId, data: { label: board.label, round: board.round, mailedTo: recipients } });
+  const recipients = await mailBoardShown(tx, ctx, { board, firmName });
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'samples.board_shown', entity: 'sample_board', entityId: boardId, data: { label: board.label, round: board.round, mailedTo: recipients } });
   return getBoard(tx, boardId);
 }
 
@@ -185,6 +182,6 @@ export async function startNextRound(tx: TenantTx, actor: Actor, boardId: string
       })
       .returning()
   )[0]!;
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: 'staff', action: 'samples.round_started', entity: 'sample_board', entityId: row.id, data: { previousBoardId: board.id, round: row.round } });
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'samples.round_started', entity: 'sample_board', entityId: row.id, data: { previousBoardId: board.id, round: row.round } });
   return getBoard(tx, row.id);
 }

@@ -1,15 +1,18 @@
-import { and, asc, eq, files, inArray, portalUsers, sampleBoardPhotos, sampleBoards, TenantTx } from '@layerbook/db';
+import { CLIENT_BOARD_STATUSES, type ClientBoardStatus, type ClientBoardView, type FinishSnapshot, type PhotoThumbnail } from '@layerbook/contracts';
+import { and, asc, eq, inArray, portalUsers, sampleBoards, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { AppContext } from '../context';
+import { clientActor } from '../http/actor';
 import type { ClientPrincipal } from '../http/principal';
 import { conflict, notFound } from '../http/problem';
+import { findPhoto, listPhotos } from '../files/photos';
+import { BOARD_PHOTOS } from './board-photos';
 import type { BoardRow } from './boards';
 import { mailBoardDecision } from './sample-mail';
-import type { ClientBoardPhoto, ClientBoardView, FinishSnapshot } from './schemas';
 import { describeFinish } from './snapshot';
 
 /** What a client may see: boards of their own client record that the firm has shown. Drafts stay in the office. */
-const VISIBLE = ['shown', 'approved', 'changes_requested'] as const;
+const VISIBLE = CLIENT_BOARD_STATUSES;
 
 const portalThumbnail = (photoId: string) => `/api/portal/boards/photos/${photoId}/thumbnail`;
 
@@ -34,30 +37,25 @@ async function findClientBoard(tx: TenantTx, client: ClientPrincipal, boardId: s
   return row;
 }
 
-async function photosOf(tx: TenantTx, boardIds: readonly string[]): Promise<Map<string, ClientBoardPhoto[]>> {
-  const byBoard = new Map<string, ClientBoardPhoto[]>();
-  if (boardIds.length === 0) return byBoard;
-  const rows = await tx.db
-    .select({ id: sampleBoardPhotos.id, boardId: sampleBoardPhotos.boardId, caption: sampleBoardPhotos.caption, width: files.width, height: files.height })
-    .from(sampleBoardPhotos)
-    .innerJoin(files, and(eq(files.tenantId, sampleBoardPhotos.tenantId), eq(files.id, sampleBoardPhotos.fileId)))
-    .where(and(eq(sampleBoardPhotos.tenantId, tx.tenantId), inArray(sampleBoardPhotos.boardId, [...boardIds])))
-    .orderBy(asc(sampleBoardPhotos.createdAt), asc(sampleBoardPhotos.id));
-  for (const r of rows) {
-    const list = byBoard.get(r.boardId) ?? [];
-    list.push({ id: r.id, caption: r.caption, thumbnailUrl: portalThumbnail(r.id), width: r.width, height: r.height });
-    byBoard.set(r.boardId, list);
+/** Thumbnails only, each served by the portal's own route (clients cannot use /api/files). */
+async function photosOf(tx: TenantTx, boardIds: readonly string[]): Promise<Map<string, PhotoThumbnail[]>> {
+  const byBoard = new Map<string, PhotoThumbnail[]>();
+  for (const [boardId, views] of await listPhotos(tx, BOARD_PHOTOS, boardIds)) {
+    byBoard.set(
+      boardId,
+      views.map((p) => ({ id: p.id, caption: p.caption, thumbnailUrl: portalThumbnail(p.id), width: p.width, height: p.height })),
+    );
   }
   return byBoard;
 }
 
-const toClientView = (board: BoardRow, client: ClientPrincipal, photos: ClientBoardPhoto[]): ClientBoardView => {
+const toClientView = (board: BoardRow, client: ClientPrincipal, photos: PhotoThumbnail[]): ClientBoardView => {
   const snapshot = board.finishSnapshot as FinishSnapshot | null;
   return {
     id: board.id,
     label: board.label,
     round: board.round,
-    status: board.status as ClientBoardView['status'],
+    status: board.status as ClientBoardStatus,
     firmName: client.firmName,
     finishName: snapshot?.systemName ?? null,
     finishSteps: describeFinish(snapshot),
@@ -86,18 +84,12 @@ export async function getClientBoard(tx: TenantTx, client: ClientPrincipal, boar
 
 /** The stored thumbnail key of a photo on a board this client may see. */
 export async function clientPhotoThumbnailKey(tx: TenantTx, client: ClientPrincipal, photoId: string): Promise<string> {
-  const row = (
-    await tx.db
-      .select({ boardId: sampleBoardPhotos.boardId, thumbnailKey: files.thumbnailKey })
-      .from(sampleBoardPhotos)
-      .innerJoin(files, and(eq(files.tenantId, sampleBoardPhotos.tenantId), eq(files.id, sampleBoardPhotos.fileId)))
-      .where(and(eq(sampleBoardPhotos.tenantId, tx.tenantId), eq(sampleBoardPhotos.id, photoId)))
-  )[0];
-  if (!row?.thumbnailKey) throw notFound('photo');
-  await findClientBoard(tx, client, row.boardId).catch(() => {
+  const photo = await findPhoto(tx, BOARD_PHOTOS, photoId);
+  if (!photo.file.thumbnailKey) throw notFound('photo');
+  await findClientBoard(tx, client, photo.ownerId).catch(() => {
     throw notFound('photo');
   });
-  return row.thumbnailKey;
+  return photo.file.thumbnailKey;
 }
 
 const alreadyDecided = (board: BoardRow) =>
@@ -128,9 +120,10 @@ export async function decideBoard(
       .returning()
   )[0];
   if (!updated) throw alreadyDecided((await findClientBoard(tx, client, boardId)));
+  const actor = clientActor(client);
   await recordAudit(tx, {
-    actorUserId: client.id,
-    actorKind: 'client',
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
     action: decision === 'approved' ? 'samples.board_approved' : 'samples.changes_requested',
     entity: 'sample_board',
     entityId: boardId,

@@ -25,8 +25,8 @@ describe('sample boards in the client portal', () => {
     await makeBoard(f, { clientId: f.clientId, label: 'Still a draft' });
     const list = await client.agent.get('/api/portal/boards');
     expect(list.status).toBe(200);
-    expect(list.body.boards).toHaveLength(1);
-    const item = list.body.boards[0];
+    expect(list.body.items).toHaveLength(1);
+    const item = list.body.items[0];
     expect(item).toMatchObject({ id: board.id, label: 'Stair hall, board A', round: 1, status: 'shown', firmName: 'Umber & Lime', finishName: 'Antiqued glaze over primer', decidedAt: null });
     expect(item.finishSteps[0]).toBe('1. Primer: Acrylic primer, rolled on, one coat.');
     // No recipe details, no staff file URLs.
@@ -63,6 +63,8 @@ describe('sample boards in the client portal', () => {
     // The approved board is the control sample: it stays as it was.
     expect((await f.agent.patch(`/api/samples/${board.id}`).set('x-csrf-token', f.csrf()).send({ notes: 'x' })).status).toBe(409);
     expect((await f.agent.delete(`/api/samples/photos/${staffView.photos[0].id}`).set('x-csrf-token', f.csrf())).status).toBe(409);
+    expect((await uploadBoardPhoto(f, board.id)).status).toBe(409);
+    expect((await f.agent.get(`/api/samples/${board.id}/photos`)).body.items).toEqual(staffView.photos);
     expect((await post(f, `/api/samples/${board.id}/next-round`)).status).toBe(409);
 
     const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(f.email) && (m.subject ?? '').includes('approved the sample board'));
@@ -94,7 +96,7 @@ describe('sample boards in the client portal', () => {
     // The new round is a draft: the client does not see it until it is shown.
     expect((await client.agent.get(`/api/portal/boards/${next.body.id}`)).status).toBe(404);
     expect((await post(f, `/api/samples/${next.body.id}/show`)).status).toBe(200);
-    const rounds = (await client.agent.get('/api/portal/boards')).body.boards.map((b: { round: number; status: string }) => [b.round, b.status]);
+    const rounds = (await client.agent.get('/api/portal/boards')).body.items.map((b: { round: number; status: string }) => [b.round, b.status]);
     expect(rounds).toEqual([[1, 'changes_requested'], [2, 'shown']]);
   });
 
@@ -115,7 +117,7 @@ describe('sample boards in the client portal', () => {
     ];
     for (const [name, call] of cases) expect({ name, status: (await call()).status }).toEqual({ name, status: 404 });
     expect((await client.agent.get(`/api/portal/boards/${draft.id}`)).status).toBe(404);
-    expect((await other.agent.get('/api/portal/boards')).body).toEqual({ boards: [] });
+    expect((await other.agent.get('/api/portal/boards')).body).toEqual({ items: [] });
     expect((await (await newAgent(t.app, 'portal')).agent.get('/api/portal/boards')).status).toBe(401);
     expect((await f.agent.get(`/api/samples/${board.id}`)).body.status).toBe('shown');
   });

@@ -1,5 +1,5 @@
 import { pipeline } from 'node:stream/promises';
-import { uuid } from '@layerbook/contracts';
+import { sampleChangeRequest, uuid, type ClientBoardView, type ItemList } from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
@@ -7,7 +7,6 @@ import { withClient } from '../http/guards';
 import { notFound } from '../http/problem';
 import { parse } from '../http/validate';
 import { clientPhotoThumbnailKey, decideBoard, getClientBoard, listClientBoards } from './client-boards';
-import { changeRequest } from './schemas';
 
 const boardParam = z.strictObject({ id: uuid('sample board id') });
 const photoParam = z.strictObject({ photoId: uuid('photo id') });
@@ -21,7 +20,8 @@ export function portalSampleRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    res.json({ boards: await withClient(ctx, req, (tx, client) => listClientBoards(tx, client)) });
+    const items = await withClient(ctx, req, (tx, client) => listClientBoards(tx, client));
+    res.json({ items } satisfies ItemList<ClientBoardView>);
   });
 
   // Clients cannot use the staff /api/files routes; this serves only thumbnails of boards they may see.
@@ -46,7 +46,7 @@ export function portalSampleRoutes(ctx: AppContext): Router {
   });
 
   router.get('/:id', async (req, res) => {
-    res.json(await withClient(ctx, req, (tx, client) => getClientBoard(tx, client, parse(boardParam, req.params).id)));
+    res.json((await withClient(ctx, req, (tx, client) => getClientBoard(tx, client, parse(boardParam, req.params).id))) satisfies ClientBoardView);
   });
 
   router.post('/:id/approve', async (req, res) => {
@@ -63,7 +63,7 @@ export function portalSampleRoutes(ctx: AppContext): Router {
   router.post('/:id/request-changes', async (req, res) => {
     res.json(
       await withClient(ctx, req, (tx, client) =>
-        decideBoard(tx, ctx, client, parse(boardParam, req.params).id, 'changes_requested', () => parse(changeRequest, req.body).comment),
+        decideBoard(tx, ctx, client, parse(boardParam, req.params).id, 'changes_requested', () => parse(sampleChangeRequest, req.body).comment),
       ),
     );
   });

@@ -39,7 +39,7 @@ describe('sample boards (staff)', () => {
     expect(after.body.finish).toEqual(got.body.finish);
 
     const list = await f.agent.get('/api/samples').query({ clientId: f.clientId });
-    expect(list.body).toEqual([expect.objectContaining({ id: board.id, label: 'Stair hall, board A', clientName: 'Wren Halloway', round: 1, status: 'draft', finishName: 'Antiqued glaze over primer', photoCount: 0, coverThumbnailUrl: null })]);
+    expect(list.body.items).toEqual([expect.objectContaining({ id: board.id, label: 'Stair hall, board A', clientName: 'Wren Halloway', round: 1, status: 'draft', finishName: 'Antiqued glaze over primer', photoCount: 0, coverThumbnailUrl: null })]);
     const audit = await withTenant(t.ctx.pool, f.firmId, async (tx) => (await tx.client.query(`select action from audit_log where entity = 'sample_board'`)).rows);
     expect(audit.map((a: { action: string }) => a.action)).toEqual(['samples.board_created']);
   });
@@ -54,7 +54,7 @@ describe('sample boards (staff)', () => {
     expect(fields((await send({ clientId: f.clientId, label: ' ', colour: 'red' })).body)).toEqual(['colour', 'label']);
     const otherClientSite = (await addClient(f, 'Someone Else')).siteId;
     expect(fields((await send({ clientId: f.clientId, siteId: otherClientSite, label: 'A' })).body)).toEqual(['siteId']);
-    expect((await f.agent.get('/api/samples')).body).toEqual([]);
+    expect((await f.agent.get('/api/samples')).body).toEqual({ items: [] });
   });
 
   it('edits a draft, re-snapshots its finish, and keeps a shown finish as shown', async () => {
@@ -85,7 +85,8 @@ describe('sample boards (staff)', () => {
     expect(added.body).toMatchObject({ boardId: board.id, caption: '', width: 64, height: 48, thumbnailUrl: `/api/files/${added.body.fileId}/thumbnail` });
     await uploadBoardPhoto(f, board.id, { bytes: await pngImage(), name: 'daylight.png' });
     expect((await f.agent.get(`/api/samples/${board.id}`)).body.photos).toHaveLength(2);
-    const listed = (await f.agent.get('/api/samples')).body[0];
+    expect((await f.agent.get(`/api/samples/${board.id}/photos`)).body.items.map((p: { id: string }) => p.id)).toEqual([added.body.id, expect.any(String)]);
+    const listed = (await f.agent.get('/api/samples')).body.items[0];
     expect(listed).toMatchObject({ photoCount: 2, coverThumbnailUrl: added.body.thumbnailUrl });
     expect((await f.agent.get(added.body.thumbnailUrl)).status).toBe(200);
 
@@ -100,7 +101,7 @@ describe('sample boards (staff)', () => {
     const f = await firmWithFinish(t);
     const board = await makeBoard(f, { clientId: f.clientId, label: 'Library ceiling', finishSystemId: f.systemId });
     const crew = await joinAs(t, f, 'crew');
-    expect((await crew.agent.get('/api/samples')).body).toHaveLength(1);
+    expect((await crew.agent.get('/api/samples')).body.items).toHaveLength(1);
     expect((await crew.agent.get(`/api/samples/${board.id}`)).body.finish.layers).toHaveLength(2);
     const photo = await uploadBoardPhoto(crew, board.id);
     expect(photo.status).toBe(201);
@@ -127,11 +128,12 @@ describe('sample boards (staff)', () => {
       ['show', () => post(b, `/api/samples/${board.id}/show`)],
       ['next-round', () => post(b, `/api/samples/${board.id}/next-round`)],
       ['upload', () => uploadBoardPhoto(b, board.id)],
+      ['photos', () => b.agent.get(`/api/samples/${board.id}/photos`)],
       ['delete photo', () => b.agent.delete(`/api/samples/photos/${photo.id}`).set('x-csrf-token', b.csrf())],
       ['thumbnail', () => b.agent.get(photo.thumbnailUrl)],
     ];
     for (const [name, call] of calls) expect({ name, status: (await call()).status }).toEqual({ name, status: 404 });
-    expect((await b.agent.get('/api/samples')).body).toEqual([]);
+    expect((await b.agent.get('/api/samples')).body).toEqual({ items: [] });
     expect(await storedFor(t.ctx, b.firmId)).toEqual({ keys: [], rows: 0 });
   });
 

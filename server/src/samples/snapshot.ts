@@ -1,7 +1,7 @@
 import { and, eq, finishSystems, inArray, products, TenantTx } from '@layerbook/db';
-import type { FinishLayer } from '@layerbook/domain';
+import { clientFinishSteps, type FinishLayer } from '@layerbook/domain';
 import { badRequest } from '../http/problem';
-import type { FinishSnapshot, SnapshotLayer } from './schemas';
+import type { FinishSnapshot, SnapshotLayer } from '@layerbook/contracts';
 
 /**
  * Copies the finish system as it is today into the board's record: the layers in order (the
@@ -42,33 +42,5 @@ export async function snapshotFinish(tx: TenantTx, finishSystemId: string, now: 
   };
 }
 
-const METHOD_WORDS: Record<string, string> = {
-  roll: 'rolled on',
-  brush: 'brushed on',
-  spray: 'sprayed',
-  trowel: 'troweled on',
-  burnish: 'burnished',
-  glaze: 'glazed',
-  wax: 'waxed',
-  sand: 'sanded',
-  stencil: 'stenciled',
-  other: 'applied',
-};
-
-const coatWords = (n: number) => (n === 1 ? 'one coat' : n === 2 ? 'two coats' : n === 3 ? 'three coats' : `${n} coats`);
-
-/**
- * The finish in words a client reads, one line per layer in the order it goes on:
- * "1. Primer: Acrylic primer, rolled on, one coat."
- * No coverage, rates or prices: those are the firm's business, not the client's.
- */
-export function describeFinish(snapshot: FinishSnapshot | null): string[] {
-  if (!snapshot) return [];
-  return snapshot.layers.map((l) => {
-    const what =
-      l.products.length > 1 ? `a mix of ${l.products.map((p) => p.name).join(' and ')}` : l.products.length === 1 ? l.products[0]!.name : '';
-    const share = l.coverageShare !== undefined && l.coverageShare < 1 ? `, over about ${Math.round(l.coverageShare * 100)} % of the surface` : '';
-    const parts = [what, METHOD_WORDS[l.method] ?? 'applied', coatWords(l.coats)].filter(Boolean).join(', ');
-    return `${l.position}. ${l.name}: ${parts}${share}.`;
-  });
-}
+/** The finish in words a client reads, one line per layer in the order it goes on (no rates or prices). */
+export const describeFinish = (snapshot: FinishSnapshot | null): string[] => (snapshot ? clientFinishSteps(snapshot.layers) : []);

@@ -2,13 +2,9 @@ import { uuid } from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
-import { checkImage } from '../files/image';
-import { discardObjects, storeImageThen } from '../files/stored-files';
-import { receiveOneFile } from '../files/upload';
-import { withStaff } from '../http/guards';
-import { unauthorized } from '../http/problem';
+import { mountPhotoRoutes } from '../files/photo-routes';
 import { parse } from '../http/validate';
-import { addRoomPhoto, deleteRoomPhoto, findPhotoRoom, listRoomPhotos, roomPhotoFields } from './photos';
+import { addRoomPhoto, deleteRoomPhoto, findPhotoRoom, listRoomPhotos } from './photos';
 
 const roomParam = z.strictObject({ id: uuid('room id') });
 const photoParam = z.strictObject({ id: uuid('photo id') });
@@ -19,41 +15,15 @@ const photoParam = z.strictObject({ id: uuid('photo id') });
  */
 export function roomPhotoRoutes(ctx: AppContext): Router {
   const router = Router();
-  const receiveFile = receiveOneFile(ctx.config, 'file');
-
-  router.get('/rooms/:id/photos', async (req, res) => {
-    res.json(await withStaff(ctx, req, 'crew', (tx) => listRoomPhotos(tx, parse(roomParam, req.params).id)));
+  mountPhotoRoutes(router, ctx, {
+    paths: { owner: '/rooms/:id/photos', photo: '/photos/:id' },
+    ownerId: (req) => parse(roomParam, req.params).id,
+    photoId: (req) => parse(photoParam, req.params).id,
+    roles: { read: 'crew', upload: 'crew', delete: 'office' },
+    findOwner: findPhotoRoom,
+    list: listRoomPhotos,
+    add: addRoomPhoto,
+    remove: deleteRoomPhoto,
   });
-
-  router.post(
-    '/rooms/:id/photos',
-    // Role and room are checked before the body is read: a refused upload costs neither memory nor a
-    // decode, and a wrong role hears 403 before any 400 about the file.
-    async (req, _res, next) => {
-      await withStaff(ctx, req, 'crew', (tx) => findPhotoRoom(tx, parse(roomParam, req.params).id));
-      next();
-    },
-    receiveFile,
-    async (req, res) => {
-      const fields = parse(roomPhotoFields, req.body);
-      // Decoded and thumbnailed outside any transaction: that takes a moment for a phone photo and
-      // should not hold a database connection.
-      const image = await checkImage(req.file, 'file');
-      const tenantId = req.user?.tenantId;
-      if (!tenantId) throw unauthorized();
-      const photo = await storeImageThen(ctx.storage, ctx.logger, tenantId, image, (stored) =>
-        withStaff(ctx, req, 'crew', (tx, staff) => addRoomPhoto(tx, { userId: staff.id }, parse(roomParam, req.params).id, fields, stored)),
-      );
-      res.status(201).json(photo);
-    },
-  );
-
-  router.delete('/photos/:id', async (req, res) => {
-    const keys = await withStaff(ctx, req, 'office', (tx, staff) => deleteRoomPhoto(tx, { userId: staff.id }, parse(photoParam, req.params).id));
-    // Only after the commit: a rolled-back delete must still find its bytes.
-    await discardObjects(ctx.storage, ctx.logger, keys);
-    res.status(204).end();
-  });
-
   return router;
 }

@@ -49,11 +49,11 @@ describe('room photos', () => {
 
     const list = await o.agent.get(`/api/takeoff/rooms/${roomId}/photos`);
     expect(list.status).toBe(200);
-    expect(list.body.map((p: { caption: string }) => p.caption)).toEqual(['Cornice before repair', '']);
+    expect(list.body.items.map((p: { caption: string }) => p.caption)).toEqual(['Cornice before repair', '']);
 
     const del = await o.agent.delete(`/api/takeoff/photos/${added.body.id}`).set('x-csrf-token', o.csrf());
     expect(del.status).toBe(204);
-    expect((await o.agent.get(`/api/takeoff/rooms/${roomId}/photos`)).body).toHaveLength(1);
+    expect((await o.agent.get(`/api/takeoff/rooms/${roomId}/photos`)).body.items).toHaveLength(1);
     expect((await o.agent.get(added.body.downloadUrl)).status).toBe(404);
     const stored = await storedFor(t.ctx, o.firmId);
     expect(stored.rows).toBe(1);
@@ -81,7 +81,7 @@ describe('room photos', () => {
     const crew = await crewOf(o);
     const added = await upload(crew, roomId, 'Second coat drying');
     expect(added.status).toBe(201);
-    expect((await crew.agent.get(`/api/takeoff/rooms/${roomId}/photos`)).body).toHaveLength(1);
+    expect((await crew.agent.get(`/api/takeoff/rooms/${roomId}/photos`)).body.items).toHaveLength(1);
     expect((await crew.agent.get(added.body.thumbnailUrl)).status).toBe(200);
     expect((await crew.agent.get(added.body.downloadUrl)).status).toBe(200);
     expect((await crew.agent.delete(`/api/takeoff/photos/${added.body.id}`).set('x-csrf-token', crew.csrf())).status).toBe(403);
@@ -115,6 +115,6 @@ describe('room photos', () => {
       expect({ name, status: (await call()).status }).toEqual({ name, status: 404 });
     }
     expect(await storedFor(t.ctx, b.firmId)).toEqual({ keys: [], rows: 0 });
-    expect((await a.agent.get(`/api/takeoff/rooms/${roomId}/photos`)).body).toHaveLength(1);
+    expect((await a.agent.get(`/api/takeoff/rooms/${roomId}/photos`)).body.items).toHaveLength(1);
   });
 });
