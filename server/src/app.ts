@@ -1,6 +1,4 @@
-import { randomUUID } from 'node:crypto';
 import express, { Express, RequestHandler } from 'express';
-import { pinoHttp } from 'pino-http';
 import { authRoutes } from './auth/routes';
 import { absoluteTimeout, createPassport } from './auth/passport-setup';
 import type { AppContext } from './context';
@@ -8,6 +6,7 @@ import { fileRoutes } from './files/routes';
 import { firmRoutes } from './firms/routes';
 import { csrf } from './http/csrf';
 import { apiNotFound, problemHandler } from './http/errors';
+import { requestLogging } from './http/logger';
 import { refuseUndecodablePath } from './http/bad-path';
 import { signInRateLimit } from './http/rate-limit';
 import { cspNonce, securityHeaders } from './http/security';
@@ -38,17 +37,7 @@ export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
   // API answers are no-store; hashing every body for an ETag is wasted work.
   app.set('etag', false);
   app.set('trust proxy', ctx.config.NODE_ENV === 'production' ? 1 : false);
-  app.use(
-    pinoHttp({
-      logger: ctx.logger,
-      genReqId: (req, res) => {
-        const id = (req.headers['x-request-id'] as string | undefined)?.slice(0, 64) || randomUUID();
-        res.setHeader('x-request-id', id);
-        return id;
-      },
-      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-    }),
-  );
+  app.use(requestLogging(ctx.logger));
   app.use(cspNonce, securityHeaders(ctx.config));
   app.use(refuseUndecodablePath);
   const inquiryLimiter = publicInquiryLimiter(ctx.config.PUBLIC_FORM_RATE_LIMIT);

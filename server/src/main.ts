@@ -1,11 +1,11 @@
 import path from 'node:path';
 import { migrateDatabase } from '@layerbook/db';
 import { Pool } from 'pg';
-import pino from 'pino';
 import { createApp } from './app';
 import { loadConfig } from './config';
 import type { AppContext } from './context';
 import { assertRlsBoundRole } from './db-roles';
+import { createLogger } from './http/logger';
 import { openObjectStore } from './files/object-store';
 import { startQueue } from './queue/job-queue';
 import { startWorkers } from './queue/workers';
@@ -17,7 +17,7 @@ import { loadSsrHandlers } from './ssr/load';
  */
 async function main(mode: 'web' | 'worker'): Promise<void> {
   const config = loadConfig();
-  const logger = pino({ level: config.LOG_LEVEL });
+  const logger = createLogger(config);
   if (config.RUN_MIGRATIONS) await migrateDatabase(config.DATABASE_OWNER_URL, path.join(config.ROOT_DIR, 'migrations'));
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: config.DB_POOL_MAX, application_name: `layerbook-${mode}` });
   await assertRlsBoundRole(pool);
