@@ -39,6 +39,7 @@ export { formatMoney } from './money/format-money';
 // takeoff geometry
 export type { Opening, SurfaceKind, SurfaceMeasure, SurfaceShape, TakeoffSettings } from './geometry/surface-shape';
 export { DEFAULT_TAKEOFF_SETTINGS, convertMeasure, measureSurface } from './geometry/measure-surface';
+export { convertShape } from './geometry/convert-shape';
 export { shoelaceArea } from './geometry/ceilings';
 export { measureText, totalsText, workingText } from './geometry/measure-text';
 

@@ -109,6 +109,18 @@ describe('estimates', () => {
     expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['limit']);
   });
 
+  it('gives surfaces saved in another unit in the firm\'s unit, so the engine never mixes metres and feet', async () => {
+    const f = await firmWithMeasuredSite('Unit Estimates');
+    await withTenant(t.ctx.pool, f.firmId, (tx) => tx.client.query(`update surfaces set length_unit = 'm', disturbed_painted_area = 2 where id = $1`, [f.surfaceId]));
+    const made = await f.agent.post('/api/estimates').set('x-csrf-token', f.csrf()).send({ siteId: f.siteId, title: 'T', startDate: '2026-12-03' });
+    const surface = made.body.context.rooms[0].surfaces[0];
+    // 1 ft = 0.3048 m exactly (NIST SP 811 App. B.8): 9 m = 29.5276 ft; 2 m² = 21.5278 ft².
+    expect(made.body.context.lengthUnit).toBe('ft');
+    expect(surface.shape.radius).toBeCloseTo(9 / 0.3048, 9);
+    expect(surface.shape.openings[1]).toEqual({ width: expect.closeTo(4 / 0.3048, 9), height: expect.closeTo(5 / 0.3048, 9), count: 2 });
+    expect(Number(surface.disturbedPaintedArea)).toBeCloseTo(2 / 0.09290304, 9);
+  });
+
   it('starts from the firm defaults when it has not set its own', async () => {
     const f = await firmWithMeasuredSite('Default Plaster');
     const made = await f.agent.post('/api/estimates').set('x-csrf-token', f.csrf()).send({ siteId: f.siteId, title: 'T', startDate: '2026-12-03' });

@@ -1,5 +1,5 @@
-import type { SurfaceShapeInput, TakeoffLengthUnit, TakeoffTotals } from '@layerbook/contracts';
-import { DEFAULT_TAKEOFF_SETTINGS, DomainInputError, convertMeasure, dottedPath, measureSurface, type SurfaceMeasure } from '@layerbook/domain';
+import type { RoomView, SurfaceShapeInput, TakeoffLengthUnit, TakeoffTotals } from '@layerbook/contracts';
+import { type Caution, DEFAULT_TAKEOFF_SETTINGS, DomainInputError, convertArea, convertMeasure, dottedPath, measureSurface, safetyCautions, type SurfaceMeasure } from '@layerbook/domain';
 import { badRequest } from '../http/problem';
 
 /**
@@ -31,3 +31,18 @@ export function sumMeasures(items: readonly { measure: SurfaceMeasure; lengthUni
 }
 
 export const unitOfSystem = (units: 'imperial' | 'metric'): TakeoffLengthUnit => (units === 'metric' ? 'm' : 'ft');
+
+/**
+ * The lead-safe reminder for the takeoff: the domain's safety rules (40 CFR 745.83 thresholds,
+ * target housing before 1978) over the disturbed painted areas measured so far, in `unit`.
+ */
+export function leadCaution(rooms: readonly RoomView[], yearBuilt: number | null, unit: TakeoffLengthUnit): Caution | null {
+  if (yearBuilt === null) return null;
+  const disturbedPaint = rooms.flatMap((room) =>
+    room.surfaces
+      .filter((s) => s.disturbedPaintedArea !== null && s.disturbedPaintedArea > 0)
+      .map((s) => ({ roomId: room.id, isExterior: room.isExterior, area: convertArea(s.disturbedPaintedArea ?? 0, s.lengthUnit, unit) })),
+  );
+  const cautions = safetyCautions({ lengthUnit: unit, yearBuilt, disturbedPaint, workingLevel: 0, products: [], sandsPlaster: false });
+  return cautions.find((c) => c.id === 'lead-safe-work') ?? null;
+}

@@ -4,7 +4,7 @@ import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
 import type { ObjectKeys } from '../files/stored-files';
-import { measureOrReject, sumMeasures, unitOfSystem } from './measure';
+import { leadCaution, measureOrReject, sumMeasures, unitOfSystem } from './measure';
 import { detachRoomPhotos } from './photos';
 import { toSurfaceView, type SurfaceRow } from './surface-view';
 
@@ -78,6 +78,7 @@ export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffV
     lengthUnit: unit,
     rooms: roomViews,
     totals: sumMeasures(roomViews.flatMap((r) => r.surfaces), unit),
+    leadCaution: leadCaution(roomViews, site.yearBuilt, unit),
   };
 }
 

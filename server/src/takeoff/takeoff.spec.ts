@@ -90,6 +90,23 @@ describe('site takeoff', () => {
     expect(metric.body.lengthUnit).toBe('m');
   });
 
+  it.each([
+    // 40 CFR 745.83: minor repair is at most 6 ft² of painted surface per room inside; target housing is pre-1978.
+    ['more than 6 ft² disturbed in a 1924 house', 1924, [4, 3], 'lead-safe-work'],
+    ['6 ft² or less disturbed in a 1924 house', 1924, [4, 2], null],
+    ['a 1990 house, however much is disturbed', 1990, [40], null],
+    ['a house of unknown age', null, [40], null],
+  ])('answers the lead-safe reminder with the takeoff: %s', async (_what, yearBuilt, disturbed, caution) => {
+    const o = await signUpFirm(t.app);
+    const siteId = await makeSite(o, yearBuilt as number | null);
+    const roomId = await makeRoom(o, siteId, 'Parlour');
+    for (const [i, area] of (disturbed as number[]).entries()) {
+      expect((await addSurface(o, roomId, { name: `Wall ${i + 1}`, shape: { kind: 'walls', perimeter: 12, height: 10 }, disturbedPaintedArea: area })).status).toBe(201);
+    }
+    const view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
+    expect(view.leadCaution?.id ?? null).toBe(caution);
+  });
+
   it('refuses impossible geometry naming the field, and saves nothing', async () => {
     const o = await signUpFirm(t.app);
     const siteId = await makeSite(o);

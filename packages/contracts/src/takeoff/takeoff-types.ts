@@ -1,4 +1,4 @@
-import type { LengthUnit, SurfaceMeasure, SurfaceShape } from '@layerbook/domain';
+import type { Caution, LengthUnit, SurfaceMeasure, SurfaceShape } from '@layerbook/domain';
 
 /*
  * The takeoff's limits, request bodies and answers, free of zod so the apps can import them
@@ -102,4 +102,9 @@ export interface TakeoffView {
   readonly lengthUnit: TakeoffLengthUnit;
   readonly rooms: readonly RoomView[];
   readonly totals: TakeoffTotals;
+  /**
+   * The lead-safe reminder once the measurements show enough disturbed paint in a building from
+   * before 1978 (40 CFR 745.83 minor-repair limits); null otherwise or when the year is not known.
+   */
+  readonly leadCaution: Caution | null;
 }
