@@ -144,3 +144,5 @@ export type { ScheduleTotals, ScheduledAmount } from './billing/schedule-totals'
 export { scheduleTotals } from './billing/schedule-totals';
 export type { DescribedLayer } from './samples/finish-steps';
 export { clientFinishSteps, crewLayerNote } from './samples/finish-steps';
+export type { SiteParts } from './samples/site-line';
+export { siteLine } from './samples/site-line';

@@ -1,5 +1,6 @@
 import type { FinishSnapshot, SampleBoardInput, SampleBoardListItem, SampleBoardUpdate, SampleBoardView } from '@layerbook/contracts';
 import { and, clients, eq, estimates, portalUsers, sampleBoards, sites, TenantTx } from '@layerbook/db';
+import { siteLine } from '@layerbook/domain';
 import type { AppContext } from '../context';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
@@ -17,8 +18,6 @@ export async function findBoard(tx: TenantTx, boardId: string, lock = false): Pr
   if (!row) throw notFound('sample board');
   return row;
 }
-
-const siteAddress = (s: { label: string; addressLine1: string; city: string }) => [s.label, s.addressLine1, s.city].filter(Boolean).join(', ');
 
 export async function listBoards(tx: TenantTx, filter: { clientId?: string; siteId?: string }): Promise<SampleBoardListItem[]> {
   // One query with the first photo and the count per board: the list shows a thumbnail per row.
@@ -71,7 +70,7 @@ export async function getBoard(tx: TenantTx, boardId: string): Promise<SampleBoa
     clientId: board.clientId,
     clientName: client?.name ?? '',
     siteId: board.siteId,
-    siteAddress: site ? siteAddress(site) : null,
+    siteAddress: site ? siteLine(site) : null,
     estimateId: board.estimateId,
     finishSystemId: board.finishSystemId,
     finish: snapshot,

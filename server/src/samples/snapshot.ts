@@ -1,5 +1,5 @@
 import { and, eq, finishSystems, inArray, products, TenantTx } from '@layerbook/db';
-import { clientFinishSteps, type FinishLayer } from '@layerbook/domain';
+import { clientFinishSteps, finishProductIds, type FinishLayer } from '@layerbook/domain';
 import { badRequest } from '../http/problem';
 import type { FinishSnapshot, SnapshotLayer } from '@layerbook/contracts';
 
@@ -12,7 +12,7 @@ export async function snapshotFinish(tx: TenantTx, finishSystemId: string, now: 
   const system = (await tx.db.select().from(finishSystems).where(and(eq(finishSystems.tenantId, tx.tenantId), eq(finishSystems.id, finishSystemId))))[0];
   if (!system) throw badRequest([{ field: 'finishSystemId', message: 'Choose a finish system from your library.' }]);
   const layers = system.layers as FinishLayer[];
-  const ids = [...new Set(layers.flatMap((l) => (l.recipe ? l.recipe.components.map((c) => c.productId) : l.productId ? [l.productId] : [])))];
+  const ids = finishProductIds(layers);
   const named = ids.length
     ? await tx.db.select({ id: products.id, name: products.name }).from(products).where(and(eq(products.tenantId, tx.tenantId), inArray(products.id, ids)))
     : [];

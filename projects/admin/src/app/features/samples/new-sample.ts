@@ -1,4 +1,5 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, inject, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject, signal } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatAutocompleteModule, MatAutocompleteSelectedEvent } from '@angular/material/autocomplete';
@@ -8,7 +9,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import type { ClientSummary, FinishSystemSummary, SiteView } from '@layerbook/contracts';
+import { SAMPLE_LABEL_MAX, SAMPLE_NOTES_MAX, type ClientDetail, type ClientSummary, type FinishSystemSummary, type ItemList, type SiteView } from '@layerbook/contracts/types';
 import { catchError, debounceTime, distinctUntilChanged, filter, map, of, switchMap } from 'rxjs';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
@@ -16,9 +17,8 @@ import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { SampleApi } from './sample-api';
-
-const siteWords = (s: SiteView) => [s.label, s.addressLine1, s.city].filter(Boolean).join(', ');
+import { siteLine } from '@layerbook/domain';
+import { FINISH_SYSTEMS_URL, SampleApi } from './sample-api';
 
 /** A new board: whose it is (client, optional site), which finish it shows, a label and notes. */
 @Component({
@@ -74,7 +74,7 @@ const siteWords = (s: SiteView) => [s.label, s.addressLine1, s.city].filter(Bool
 
           <mat-form-field>
             <mat-label>Label</mat-label>
-            <input matInput formControlName="label" maxlength="120" />
+            <input matInput formControlName="label" [maxlength]="labelMax" />
             <mat-hint>Written on the back of the board, like "Stair hall, board A"</mat-hint>
             @if (form.controls.label.invalid) {
               <mat-error>{{ fieldError('label') }}</mat-error>
@@ -83,7 +83,7 @@ const siteWords = (s: SiteView) => [s.label, s.addressLine1, s.city].filter(Bool
 
           <mat-form-field>
             <mat-label>Notes</mat-label>
-            <textarea matInput formControlName="notes" rows="4" maxlength="4000"></textarea>
+            <textarea matInput formControlName="notes" rows="4" [maxlength]="notesMax"></textarea>
             <mat-hint>Product lots, tint formulas, tools — what the crew need to make it again</mat-hint>
             @if (form.controls.notes.invalid) {
               <mat-error>{{ fieldError('notes') }}</mat-error>
@@ -113,10 +113,20 @@ export class NewSample {
   private readonly destroyRef = inject(DestroyRef);
 
   protected readonly isHydrated = hydratedSignal();
-  protected readonly siteWords = siteWords;
+  protected readonly siteWords = siteLine;
   protected readonly clientOptions = signal<readonly ClientSummary[]>([]);
-  protected readonly sites = signal<readonly SiteView[]>([]);
-  protected readonly systems = signal<readonly FinishSystemSummary[]>([]);
+  /** the client chosen from the search, whose sites the form offers */
+  private readonly chosenClientId = signal<string | null>(null);
+  private readonly chosenClient = httpResource<ClientDetail>(() => {
+    const id = this.chosenClientId();
+    return id ? `/api/clients/${encodeURIComponent(id)}` : undefined;
+  });
+  private readonly systemList = httpResource<ItemList<FinishSystemSummary>>(() => FINISH_SYSTEMS_URL);
+  // A failed look-up leaves the choice empty: the board can still be made without a site or finish.
+  protected readonly sites = computed<readonly SiteView[]>(() => (this.chosenClient.hasValue() ? this.chosenClient.value().sites : []));
+  protected readonly systems = computed<readonly FinishSystemSummary[]>(() => (this.systemList.hasValue() ? this.systemList.value().items : []));
+  protected readonly labelMax = SAMPLE_LABEL_MAX;
+  protected readonly notesMax = SAMPLE_NOTES_MAX;
   protected readonly message = signal<string | null>(null);
   protected readonly isSaving = signal(false);
 
@@ -126,8 +136,8 @@ export class NewSample {
     clientId: new FormControl('', { nonNullable: true, validators: [Validators.required] }),
     siteId: new FormControl('', { nonNullable: true }),
     finishSystemId: new FormControl('', { nonNullable: true }),
-    label: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(120)] }),
-    notes: new FormControl('', { nonNullable: true, validators: [Validators.maxLength(4000)] }),
+    label: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(SAMPLE_LABEL_MAX)] }),
+    notes: new FormControl('', { nonNullable: true, validators: [Validators.maxLength(SAMPLE_NOTES_MAX)] }),
   });
 
   constructor() {
@@ -141,7 +151,6 @@ export class NewSample {
         takeUntilDestroyed(this.destroyRef),
       )
       .subscribe((items) => this.clientOptions.set(items));
-    void this.api.finishSystems().then((list) => this.systems.set(list), () => this.systems.set([]));
   }
 
   protected fieldError(name: keyof typeof this.form.controls): string {
@@ -151,15 +160,11 @@ export class NewSample {
     });
   }
 
-  protected async chooseClient(event: MatAutocompleteSelectedEvent): Promise<void> {
+  protected chooseClient(event: MatAutocompleteSelectedEvent): void {
     const client = event.option.value as ClientSummary;
     this.clientSearch.setValue(client.name, { emitEvent: false });
     this.form.patchValue({ clientId: client.id, siteId: '' });
-    try {
-      this.sites.set((await this.api.client(client.id)).sites);
-    } catch {
-      this.sites.set([]);
-    }
+    this.chosenClientId.set(client.id);
   }
 
   protected async save(): Promise<void> {

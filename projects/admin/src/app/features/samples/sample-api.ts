@@ -1,61 +1,40 @@
-import { HttpClient, HttpEvent, HttpParams } from '@angular/common/http';
+import { HttpClient, HttpParams } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
-import type { ClientDetail, ClientSummary, FinishSystemSummary, Page } from '@layerbook/contracts';
+import type { ClientSummary, KeysetPage, SampleBoardCreate, SampleBoardUpdate, SampleBoardView } from '@layerbook/contracts/types';
 import { Observable, firstValueFrom } from 'rxjs';
-import type { BoardPhoto, SampleBoard, SampleBoardCreate, SampleBoardListItem } from './sample-board';
 
 const id = (value: string) => encodeURIComponent(value);
 
-/** /api/samples, plus the few client and library look-ups the new-board form needs. */
+/** Where the sample-board reads live, for the components' httpResource calls. */
+export const SAMPLES_URL = '/api/samples';
+export const boardUrl = (boardId: string) => `${SAMPLES_URL}/${id(boardId)}`;
+export const boardPhotosUrl = (boardId: string) => `${boardUrl(boardId)}/photos`;
+/** DELETE `${BOARD_PHOTO_BASE}/:photoId` */
+export const BOARD_PHOTO_BASE = `${SAMPLES_URL}/photos`;
+export const FINISH_SYSTEMS_URL = '/api/library/systems';
+
+/** The writes of /api/samples, plus the client look-ups the new-board form needs. */
 @Injectable({ providedIn: 'root' })
 export class SampleApi {
   private readonly http = inject(HttpClient);
 
-  list(filter: { clientId?: string } = {}): Promise<SampleBoardListItem[]> {
-    const params = filter.clientId ? new HttpParams().set('clientId', filter.clientId) : undefined;
-    return firstValueFrom(this.http.get<SampleBoardListItem[]>('/api/samples', { params }));
+  create(body: SampleBoardCreate): Promise<SampleBoardView> {
+    return firstValueFrom(this.http.post<SampleBoardView>(SAMPLES_URL, body));
   }
 
-  get(boardId: string): Promise<SampleBoard> {
-    return firstValueFrom(this.http.get<SampleBoard>(`/api/samples/${id(boardId)}`));
+  update(boardId: string, body: SampleBoardUpdate): Promise<SampleBoardView> {
+    return firstValueFrom(this.http.patch<SampleBoardView>(boardUrl(boardId), body));
   }
 
-  create(body: SampleBoardCreate): Promise<SampleBoard> {
-    return firstValueFrom(this.http.post<SampleBoard>('/api/samples', body));
+  show(boardId: string): Promise<SampleBoardView> {
+    return firstValueFrom(this.http.post<SampleBoardView>(`${boardUrl(boardId)}/show`, {}));
   }
 
-  update(boardId: string, body: { label?: string; notes?: string }): Promise<SampleBoard> {
-    return firstValueFrom(this.http.patch<SampleBoard>(`/api/samples/${id(boardId)}`, body));
+  startNextRound(boardId: string): Promise<SampleBoardView> {
+    return firstValueFrom(this.http.post<SampleBoardView>(`${boardUrl(boardId)}/next-round`, {}));
   }
 
-  show(boardId: string): Promise<SampleBoard> {
-    return firstValueFrom(this.http.post<SampleBoard>(`/api/samples/${id(boardId)}/show`, {}));
-  }
-
-  startNextRound(boardId: string): Promise<SampleBoard> {
-    return firstValueFrom(this.http.post<SampleBoard>(`/api/samples/${id(boardId)}/next-round`, {}));
-  }
-
-  /** Every HTTP event, so the caller can show upload progress; the last one carries the photo. */
-  uploadPhoto(boardId: string, file: File): Observable<HttpEvent<BoardPhoto>> {
-    const form = new FormData();
-    form.append('file', file, file.name);
-    return this.http.post<BoardPhoto>(`/api/samples/${id(boardId)}/photos`, form, { reportProgress: true, observe: 'events' });
-  }
-
-  deletePhoto(photoId: string): Promise<unknown> {
-    return firstValueFrom(this.http.delete(`/api/samples/photos/${id(photoId)}`));
-  }
-
-  searchClients(q: string): Observable<Page<ClientSummary>> {
-    return this.http.get<Page<ClientSummary>>('/api/clients', { params: new HttpParams().set('limit', 20).set('q', q.trim()) });
-  }
-
-  client(clientId: string): Promise<ClientDetail> {
-    return firstValueFrom(this.http.get<ClientDetail>(`/api/clients/${id(clientId)}`));
-  }
-
-  finishSystems(): Promise<FinishSystemSummary[]> {
-    return firstValueFrom(this.http.get<FinishSystemSummary[]>('/api/library/systems'));
+  searchClients(q: string): Observable<KeysetPage<ClientSummary>> {
+    return this.http.get<KeysetPage<ClientSummary>>('/api/clients', { params: new HttpParams().set('limit', 20).set('q', q.trim()) });
   }
 }

@@ -1,26 +1,27 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject, signal } from '@angular/core';
-import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject, input, linkedSignal, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
+import type { SampleBoardView } from '@layerbook/contracts/types';
+import { crewLayerNote } from '@layerbook/domain';
 import { firstValueFrom } from 'rxjs';
+import { PhotoGallery, type GalleryPhoto } from '../../../../../shared/photos/photo-gallery';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
 import { ConfirmDialog, type ConfirmDialogData } from '../../shared/ui/confirm-dialog';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { BoardPhotos } from './board-photos';
-import type { BoardPhoto, SampleBoard, SnapshotLayer } from './sample-board';
-import { SampleApi } from './sample-api';
+import { BOARD_PHOTO_BASE, SampleApi, boardPhotosUrl, boardUrl } from './sample-api';
 import { STATUS_WORDS } from './status-words';
 
 /** One board: its finish as made (layers in order), photos, and where it stands with the client. */
 @Component({
   selector: 'lb-sample-detail',
-  imports: [BoardPhotos, DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, PhotoGallery, RouterLink],
   template: `
     <section class="lb-page">
       <p><a routerLink="/samples">Back to sample boards</a></p>
@@ -56,7 +57,7 @@ import { STATUS_WORDS } from './status-words';
           </div>
         }
 
-        <lb-form-alert [message]="message()" />
+        <lb-form-alert [message]="actionMessage()" />
         @if (canWrite()) {
           <div class="actions">
             @if (b.status === 'draft') {
@@ -89,7 +90,7 @@ import { STATUS_WORDS } from './status-words';
               @for (layer of finish.layers; track layer.position) {
                 <li>
                   <strong>{{ layer.name }}</strong>
-                  <span>{{ layerWords(layer) }}</span>
+                  <span>{{ layerNote(layer) }}</span>
                 </li>
               }
             </ol>
@@ -105,11 +106,17 @@ import { STATUS_WORDS } from './status-words';
           </section>
         }
 
-        <lb-board-photos [boardId]="b.id" [label]="b.label" [canDelete]="canWrite() && b.status !== 'approved'" [(photos)]="photos" />
+        <lb-photo-gallery
+          [subject]="b.label"
+          [(photos)]="photos"
+          [uploadUrl]="b.status === 'approved' ? null : photosUrl(b.id)"
+          [deleteBase]="canWrite() && b.status !== 'approved' ? photoBase : null"
+          emptyText="No photos yet. Photograph the board in the room's own light if you can."
+        />
       } @else if (isLoading()) {
         <mat-progress-bar mode="indeterminate" aria-label="Loading the sample board" />
       } @else {
-        <lb-form-alert [message]="message()" />
+        <lb-form-alert [message]="loadMessage()" />
       }
     </section>
   `,
@@ -131,38 +138,32 @@ import { STATUS_WORDS } from './status-words';
 })
 export class SampleDetail {
   private readonly api = inject(SampleApi);
-  private readonly route = inject(ActivatedRoute);
   private readonly router = inject(Router);
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly session = inject(Session);
 
+  /** from the route (withComponentInputBinding) */
+  readonly id = input.required<string>();
+
+  private readonly loaded = httpResource<SampleBoardView>(() => boardUrl(this.id()));
+
   protected readonly words = STATUS_WORDS;
-  protected readonly board = signal<SampleBoard | null>(null);
-  protected readonly photos = signal<readonly BoardPhoto[]>([]);
-  protected readonly isLoading = signal(true);
+  protected readonly photoBase = BOARD_PHOTO_BASE;
+  protected readonly photosUrl = boardPhotosUrl;
+  protected readonly layerNote = crewLayerNote;
+  protected readonly board = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
+  /** the gallery adds and removes photos without reloading the board */
+  protected readonly photos = linkedSignal<readonly GalleryPhoto[]>(() => this.board()?.photos ?? []);
+  protected readonly isLoading = this.loaded.isLoading;
+  protected readonly loadMessage = computed(() => {
+    const error = this.loaded.error();
+    if (!error) return null;
+    return toProblem(error).status === 404 ? 'This sample board does not exist, or is not one of yours.' : describe(error);
+  });
   protected readonly isBusy = signal(false);
-  protected readonly message = signal<string | null>(null);
+  protected readonly actionMessage = signal<string | null>(null);
   protected readonly canWrite = computed(() => this.session.hasRole('office'));
-
-  constructor() {
-    this.route.paramMap.pipe(takeUntilDestroyed(inject(DestroyRef))).subscribe((params) => void this.load(params.get('id') ?? ''));
-  }
-
-  protected layerWords(layer: SnapshotLayer): string {
-    const products =
-      layer.products.length > 1
-        ? `Mix by ${layer.mixBy ?? 'volume'}: ${layer.products.map((p) => `${p.parts ?? 1} part${p.parts === 1 ? '' : 's'} ${p.name}`).join(', ')}`
-        : layer.products[0]?.name ?? '';
-    const bits = [
-      products,
-      `${layer.method}, ${layer.coats} coat${layer.coats === 1 ? '' : 's'}`,
-      layer.coverageShare !== undefined && layer.coverageShare < 1 ? `over ${Math.round(layer.coverageShare * 100)} % of the surface` : '',
-      layer.dilution ? `thinned ${Math.round(layer.dilution.share * 100)} %` : '',
-      layer.waitHoursAfter > 0 ? `wait ${layer.waitHoursAfter} h before the next layer` : '',
-    ];
-    return bits.filter(Boolean).join('; ');
-  }
 
   protected async showToClient(): Promise<void> {
     const b = this.board();
@@ -172,32 +173,33 @@ export class SampleDetail {
       message: 'They will see it in their portal and get an e-mail, and the finish on this board will no longer change.',
       confirmLabel: 'Show to the client',
     });
-    if (ok) await this.act(() => this.api.show(b.id), 'The client can now see this board.');
+    if (!ok) return;
+    const shown = await this.act(() => this.api.show(b.id));
+    if (shown) {
+      this.loaded.set(shown);
+      this.snackBar.open('The client can now see this board.', 'Close', { duration: 4000 });
+    }
   }
 
   protected async startNextRound(): Promise<void> {
     const b = this.board();
     if (!b) return;
-    this.isBusy.set(true);
-    try {
-      const next = await this.api.startNextRound(b.id);
+    const next = await this.act(() => this.api.startNextRound(b.id));
+    if (next) {
       this.snackBar.open(`Round ${next.round} started.`, 'Close', { duration: 4000 });
       await this.router.navigate(['/samples', next.id]);
-    } catch (error) {
-      this.message.set(describe(error));
-    } finally {
-      this.isBusy.set(false);
     }
   }
 
-  private async act(call: () => Promise<SampleBoard>, done: string): Promise<void> {
+  /** Runs one write with the buttons held; its refusal is said above them. */
+  private async act(call: () => Promise<SampleBoardView>): Promise<SampleBoardView | null> {
     this.isBusy.set(true);
-    this.message.set(null);
+    this.actionMessage.set(null);
     try {
-      this.setBoard(await call());
-      this.snackBar.open(done, 'Close', { duration: 4000 });
+      return await call();
     } catch (error) {
-      this.message.set(describe(error));
+      this.actionMessage.set(describe(error));
+      return null;
     } finally {
       this.isBusy.set(false);
     }
@@ -205,24 +207,6 @@ export class SampleDetail {
 
   private confirm(data: ConfirmDialogData): Promise<boolean | undefined> {
     return firstValueFrom(this.dialog.open<ConfirmDialog, ConfirmDialogData, boolean>(ConfirmDialog, { data }).afterClosed());
-  }
-
-  private setBoard(b: SampleBoard): void {
-    this.board.set(b);
-    this.photos.set(b.photos);
-  }
-
-  private async load(id: string): Promise<void> {
-    this.isLoading.set(true);
-    this.message.set(null);
-    try {
-      this.setBoard(await this.api.get(id));
-    } catch (error) {
-      this.board.set(null);
-      this.message.set(toProblem(error).status === 404 ? 'This sample board does not exist, or is not one of yours.' : describe(error));
-    } finally {
-      this.isLoading.set(false);
-    }
   }
 }
 

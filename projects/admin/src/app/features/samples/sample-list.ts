@@ -1,14 +1,15 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, afterNextRender, inject, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
+import type { ItemList, SampleBoardListItem } from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
-import { toProblem } from '../../core/errors/problem';
+import { problemMessage } from '../../core/errors/problem';
 import { FormAlert } from '../../shared/ui/form-alert';
-import type { SampleBoardListItem } from './sample-board';
-import { SampleApi } from './sample-api';
+import { SAMPLES_URL } from './sample-api';
 import { STATUS_WORDS } from './status-words';
 
 /** Every sample board of the firm, newest first, with its status in words and a first photo. */
@@ -89,27 +90,15 @@ import { STATUS_WORDS } from './status-words';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class SampleList {
-  private readonly api = inject(SampleApi);
   private readonly session = inject(Session);
+  private readonly list = httpResource<ItemList<SampleBoardListItem>>(() => SAMPLES_URL);
 
   protected readonly words = STATUS_WORDS;
-  protected readonly boards = signal<readonly SampleBoardListItem[]>([]);
-  protected readonly isLoading = signal(true);
-  protected readonly message = signal<string | null>(null);
+  protected readonly boards = computed(() => (this.list.hasValue() ? this.list.value().items : []));
+  protected readonly isLoading = this.list.isLoading;
+  protected readonly message = computed(() => {
+    const error = this.list.error();
+    return error ? problemMessage(error) : null;
+  });
   protected readonly canWrite = () => this.session.hasRole('office');
-
-  constructor() {
-    afterNextRender(() => void this.load());
-  }
-
-  private async load(): Promise<void> {
-    try {
-      this.boards.set(await this.api.list());
-    } catch (error) {
-      const problem = toProblem(error);
-      this.message.set(problem.detail ?? problem.title);
-    } finally {
-      this.isLoading.set(false);
-    }
-  }
 }
