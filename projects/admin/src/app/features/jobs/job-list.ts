@@ -1,12 +1,13 @@
-import { ChangeDetectionStrategy, Component, OnInit, inject, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { toProblem } from '../../core/errors/problem';
+import type { ItemList, JobSummary } from '@layerbook/contracts/types';
+import { problemMessage } from '../../core/errors/problem';
 import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { JobApi, type JobListItem } from './job-api';
 import { jobStatus } from './job-words';
 
 /** Accepted jobs: every proposal a client signed, newest first. */
@@ -132,25 +133,14 @@ import { jobStatus } from './job-words';
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class JobList implements OnInit {
-  private readonly api = inject(JobApi);
+export class JobList {
+  private readonly list = httpResource<ItemList<JobSummary>>(() => '/api/jobs');
 
-  protected readonly items = signal<readonly JobListItem[]>([]);
-  protected readonly isLoading = signal(true);
-  protected readonly message = signal<string | null>(null);
+  protected readonly items = computed(() => (this.list.hasValue() ? this.list.value().items : []));
+  protected readonly isLoading = this.list.isLoading;
+  protected readonly message = computed(() => {
+    const error = this.list.error();
+    return error ? problemMessage(error) : null;
+  });
   protected readonly statusLook = jobStatus;
-
-  ngOnInit(): void {
-    void this.load();
-  }
-
-  private async load(): Promise<void> {
-    try {
-      this.items.set(await this.api.list());
-    } catch (error) {
-      this.message.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
-    }
-  }
 }
