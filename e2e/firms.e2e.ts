@@ -1,6 +1,6 @@
 import { expect, type Page, test } from '@playwright/test';
 import { navLink, newFirm, signUp } from './support/people';
-import { onPhone } from './support/phone';
+import { onPhone, openLiveOnPhone } from './support/phone';
 
 /** Saves by the named button and waits for the server to answer the PUT it sends. */
 async function saveBy(page: Page, button: string, path: string) {
@@ -62,7 +62,7 @@ test('the owner changes the firm name, address, time zone and pricing rates, and
   await expect(page.getByRole('banner')).toContainText('Quarry Lane Lime & Plaster');
 
   const { phone, context } = await onPhone(browser, page);
-  await phone.goto('/settings');
+  await openLiveOnPhone(phone, '/settings', '/api/firm/estimating');
   await expect(phone.getByRole('group', { name: 'Firm' }).getByLabel('Firm name')).toHaveValue('Quarry Lane Lime & Plaster');
   await phone.screenshot({ path: 'e2e/.artifacts/phone-settings.png' });
   await phone.getByRole('heading', { name: 'Pricing and schedule' }).scrollIntoViewIfNeeded();

@@ -1,6 +1,6 @@
 import { expect, type Page, test } from '@playwright/test';
 import { DEMO, navLink, signIn } from './support/people';
-import { onPhone } from './support/phone';
+import { onPhone, openLiveOnPhone } from './support/phone';
 
 const PRODUCT = 'Slaked lime finishing plaster';
 const SYSTEM = 'Three-coat polished lime';
@@ -88,7 +88,7 @@ test('the office adds a product with container sizes and prices, then a three-la
   await page.screenshot({ path: 'e2e/.artifacts/library-systems.png', fullPage: true });
 
   const { phone, context } = await onPhone(browser, page);
-  await phone.goto('/library');
+  await openLiveOnPhone(phone, '/library', '/api/library/systems');
   const phoneRow = phone.getByRole('table', { name: 'Finish systems' }).getByRole('row', { name: new RegExp(SYSTEM) });
   await expect(phoneRow).toBeVisible();
   await phone.screenshot({ path: 'e2e/.artifacts/phone-library.png' });
