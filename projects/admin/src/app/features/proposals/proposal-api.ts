@@ -1,16 +1,16 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { ProposalCreate, ProposalUpdate, ProposalVersionSummary, ProposalVersionView } from '@layerbook/contracts';
+import type { ItemList, ProposalCreate, ProposalUpdate, ProposalVersionSummary, ProposalVersionView } from '@layerbook/contracts/types';
 
 /** Proposal versions of an estimate: drafts made from its saved numbers, frozen once sent. */
 @Injectable({ providedIn: 'root' })
 export class ProposalApi {
   private readonly http = inject(HttpClient);
 
-  list(estimateId: string): Promise<{ items: ProposalVersionSummary[] }> {
+  list(estimateId: string): Promise<ItemList<ProposalVersionSummary>> {
     const params = new HttpParams().set('estimateId', estimateId);
-    return firstValueFrom(this.http.get<{ items: ProposalVersionSummary[] }>('/api/proposals', { params }));
+    return firstValueFrom(this.http.get<ItemList<ProposalVersionSummary>>('/api/proposals', { params }));
   }
 
   get(id: string): Promise<ProposalVersionView> {

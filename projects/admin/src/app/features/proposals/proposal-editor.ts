@@ -6,14 +6,14 @@ import { MatDatepickerModule } from '@angular/material/datepicker';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import type { ProposalVersionView } from '@layerbook/contracts';
+import type { ProposalVersionView } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ProposalApi } from './proposal-api';
-import { MAX_EXCLUSIONS, PROPOSAL_WORDS, fillProposal, placeExclusionErrors, proposalForm, readProposal } from './proposal-form';
+import { MAX_EXCLUSIONS, MAX_TEXT, PROPOSAL_WORDS, fillProposal, placeExclusionErrors, proposalForm, readProposal } from './proposal-form';
 
 /**
  * The choices a proposal version carries beyond the estimate's numbers: how long the offer stands,
@@ -55,7 +55,7 @@ import { MAX_EXCLUSIONS, PROPOSAL_WORDS, fillProposal, placeExclusionErrors, pro
         </div>
         <mat-form-field class="lb-full" formGroupName="terms">
           <mat-label>Terms</mat-label>
-          <textarea matInput formControlName="text" rows="3" maxlength="4000"></textarea>
+          <textarea matInput formControlName="text" rows="3" [maxlength]="maxText"></textarea>
           <mat-hint>Printed under “Terms”: when payments fall due, cancellation, warranty.</mat-hint>
           <mat-error>{{ errorText(form.controls.terms.controls.text, words.text) }}</mat-error>
         </mat-form-field>
@@ -67,7 +67,7 @@ import { MAX_EXCLUSIONS, PROPOSAL_WORDS, fillProposal, placeExclusionErrors, pro
         </mat-form-field>
         <mat-form-field class="lb-full">
           <mat-label>Notes</mat-label>
-          <textarea matInput formControlName="notes" rows="3" maxlength="4000"></textarea>
+          <textarea matInput formControlName="notes" rows="3" [maxlength]="maxText"></textarea>
           <mat-hint>Anything else the client should read with the offer.</mat-hint>
           <mat-error>{{ errorText(form.controls.notes, words.text) }}</mat-error>
         </mat-form-field>
@@ -127,6 +127,7 @@ export class ProposalEditor implements OnInit {
   protected readonly words = PROPOSAL_WORDS;
   protected readonly errorText = errorText;
   protected readonly maxExclusions = MAX_EXCLUSIONS;
+  protected readonly maxText = MAX_TEXT;
   protected readonly headingId = computed(() => `proposal-editor-${this.draft()?.id ?? 'new'}`);
 
   ngOnInit(): void {

@@ -1,11 +1,18 @@
 import { AbstractControl, FormControl, FormGroup, ValidationErrors, Validators } from '@angular/forms';
-import type { ProposalSnapshot, ProposalUpdate, Problem } from '@layerbook/contracts';
+import {
+  PROPOSAL_EXCLUSION_MAX,
+  PROPOSAL_EXCLUSIONS_MAX,
+  PROPOSAL_TEXT_MAX,
+  type Problem,
+  type ProposalSnapshot,
+  type ProposalUpdate,
+} from '@layerbook/contracts/types';
 import { fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { DEFAULT_EXCLUSIONS, DEFAULT_TERMS_TEXT, DEFAULT_VALID_DAYS } from './proposal-words';
 
-export const MAX_EXCLUSIONS = 30;
-const MAX_EXCLUSION_LENGTH = 300;
-const MAX_TEXT = 4000;
+export const MAX_EXCLUSIONS = PROPOSAL_EXCLUSIONS_MAX;
+const MAX_EXCLUSION_LENGTH = PROPOSAL_EXCLUSION_MAX;
+export const MAX_TEXT = PROPOSAL_TEXT_MAX;
 
 /** Mirrors packages/contracts/src/proposals/proposal.ts so both sides say the same. */
 export const PROPOSAL_WORDS = {

@@ -1,18 +1,18 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, resource, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import type { ProposalVersionSummary, ProposalVersionView } from '@layerbook/contracts';
+import type { ProposalVersionStatus, ProposalVersionSummary, ProposalVersionView } from '@layerbook/contracts/types';
 import { firstValueFrom } from 'rxjs';
-import { toProblem } from '../../core/errors/problem';
+import { problemMessage, toProblem } from '../../core/errors/problem';
 import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { ConfirmDialog, type ConfirmDialogData } from '../../shared/ui/confirm-dialog';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { EstimateApi, type EstimateView } from './estimate-api';
+import { EstimateApi } from './estimate-api';
 import { ProposalApi } from './proposal-api';
 import { ProposalEditor } from './proposal-editor';
 import { versionStatus } from './proposal-words';
@@ -26,7 +26,7 @@ interface VersionMessage {
 }
 
 /** Statuses whose full record says more than the summary (who accepted, what they said). */
-const READ_IN_FULL = new Set(['draft', 'accepted', 'declined', 'changes_requested']);
+const READ_IN_FULL: ReadonlySet<ProposalVersionStatus> = new Set(['draft', 'accepted', 'declined', 'changes_requested']);
 
 /**
  * The proposal versions of one estimate: make a draft from the saved numbers, change it, download
@@ -39,7 +39,7 @@ const READ_IN_FULL = new Set(['draft', 'accepted', 'declined', 'changes_requeste
   styleUrl: './proposal-versions.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class ProposalVersions implements OnInit {
+export class ProposalVersions {
   private readonly estimates = inject(EstimateApi);
   protected readonly api = inject(ProposalApi);
   private readonly dialog = inject(MatDialog);
@@ -47,12 +47,31 @@ export class ProposalVersions implements OnInit {
   /** the estimate's id, from the route (withComponentInputBinding) */
   readonly id = input.required<string>();
 
-  protected readonly estimate = signal<EstimateView | null>(null);
-  protected readonly clientEmail = signal<string | null>(null);
-  protected readonly versions = signal<readonly ProposalVersionSummary[]>([]);
-  protected readonly details = signal<ReadonlyMap<string, ProposalVersionView>>(new Map());
-  protected readonly isLoading = signal(true);
-  protected readonly loadMessage = signal<string | null>(null);
+  private readonly loadedEstimate = resource({ params: () => this.id(), loader: ({ params }) => this.estimates.get(params) });
+  /** the client's address for the send confirmation; without it the draft's own address is named */
+  private readonly client = resource({
+    params: () => (this.loadedEstimate.hasValue() ? this.loadedEstimate.value().clientId : undefined),
+    loader: ({ params }) => this.estimates.client(params),
+  });
+  /** the versions, and the full record of those whose summary says too little (who accepted, what they said) */
+  private readonly loadedVersions = resource({
+    params: () => this.id(),
+    loader: async ({ params }) => {
+      const { items } = await this.api.list(params);
+      const views = await Promise.all(items.filter((v) => READ_IN_FULL.has(v.status)).map((v) => this.api.get(v.id)));
+      return { items, details: new Map(views.map((v) => [v.id, v])) as ReadonlyMap<string, ProposalVersionView> };
+    },
+  });
+
+  protected readonly estimate = computed(() => (this.loadedEstimate.hasValue() ? this.loadedEstimate.value() : null));
+  protected readonly clientEmail = computed(() => (this.client.hasValue() ? this.client.value().email : null));
+  protected readonly versions = computed<readonly ProposalVersionSummary[]>(() => (this.loadedVersions.hasValue() ? this.loadedVersions.value().items : []));
+  private readonly details = computed(() => (this.loadedVersions.hasValue() ? this.loadedVersions.value().details : new Map<string, ProposalVersionView>()));
+  protected readonly isLoading = computed(() => this.loadedEstimate.isLoading() || this.loadedVersions.isLoading());
+  protected readonly loadMessage = computed(() => {
+    const error = this.loadedEstimate.error() ?? this.loadedVersions.error();
+    return error ? problemMessage(error) : null;
+  });
   /** 'new' for a new version, a version id while changing that draft */
   protected readonly editing = signal<string | null>(null);
   protected readonly busyId = signal<string | null>(null);
@@ -63,10 +82,6 @@ export class ProposalVersions implements OnInit {
   protected readonly isAccepted = computed(() => this.versions().some((v) => v.status === 'accepted'));
   protected readonly isPriced = computed(() => !!this.estimate()?.result);
   protected readonly canPropose = computed(() => this.isPriced() && !this.isAccepted());
-
-  ngOnInit(): void {
-    void this.load();
-  }
 
   protected detail(id: string): ProposalVersionView | null {
     return this.details().get(id) ?? null;
@@ -93,10 +108,10 @@ export class ProposalVersions implements OnInit {
     this.editing.set(null);
   }
 
-  protected async saved(view: ProposalVersionView, wasNew: boolean): Promise<void> {
+  protected saved(view: ProposalVersionView, wasNew: boolean): void {
     this.editing.set(null);
     this.notice.set(wasNew ? `Version ${view.version} made as a draft. Check the PDF, then send it.` : `Version ${view.version} saved.`);
-    await this.reloadVersions();
+    this.loadedVersions.reload();
   }
 
   protected async sendToClient(version: ProposalVersionSummary): Promise<void> {
@@ -115,7 +130,7 @@ export class ProposalVersions implements OnInit {
     try {
       const sent = await this.api.send(version.id);
       this.notice.set(`Version ${sent.version} sent${email ? ` to ${email}` : ''}. The client gets a link to read and accept it.`);
-      await this.reloadVersions();
+      this.loadedVersions.reload();
     } catch (error) {
       const problem = toProblem(error);
       const errors = problem.errors ?? [];
@@ -131,34 +146,5 @@ export class ProposalVersions implements OnInit {
   private confirm(data: ConfirmDialogData): Promise<boolean> {
     const ref = this.dialog.open<ConfirmDialog, ConfirmDialogData, boolean>(ConfirmDialog, { data, width: '30rem' });
     return firstValueFrom(ref.afterClosed()).then((answer) => answer === true);
-  }
-
-  private async load(): Promise<void> {
-    try {
-      const estimate = await this.estimates.get(this.id());
-      this.estimate.set(estimate);
-      void this.estimates.client(estimate.clientId).then(
-        (client) => this.clientEmail.set(client.email),
-        // The confirmation then names the address in the draft; the server has the last word.
-        () => undefined,
-      );
-      await this.reloadVersions();
-    } catch (error) {
-      this.loadMessage.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
-    }
-  }
-
-  private async reloadVersions(): Promise<void> {
-    try {
-      const { items } = await this.api.list(this.id());
-      const wanted = items.filter((v) => READ_IN_FULL.has(v.status));
-      const views = await Promise.all(wanted.map((v) => this.api.get(v.id)));
-      this.details.set(new Map(views.map((v) => [v.id, v])));
-      this.versions.set(items);
-    } catch (error) {
-      this.loadMessage.set(toProblem(error).title);
-    }
   }
 }

@@ -1,4 +1,4 @@
-import type { ProposalVersionStatus } from '@layerbook/contracts';
+import { PROPOSAL_VERSION_STATUS_LABELS, type ProposalVersionStatus } from '@layerbook/contracts/types';
 
 export interface StatusLook {
   readonly word: string;
@@ -6,17 +6,18 @@ export interface StatusLook {
   readonly icon: string;
 }
 
-export const VERSION_STATUS = {
-  draft: { word: 'Draft', icon: 'edit_note' },
-  sent: { word: 'Sent', icon: 'outgoing_mail' },
-  accepted: { word: 'Accepted', icon: 'handshake' },
-  declined: { word: 'Declined', icon: 'block' },
-  changes_requested: { word: 'Changes asked for', icon: 'rate_review' },
-  superseded: { word: 'Replaced by a newer version', icon: 'history' },
-} as const satisfies Record<ProposalVersionStatus, StatusLook>;
+const VERSION_ICONS: Readonly<Record<ProposalVersionStatus, string>> = {
+  draft: 'edit_note',
+  sent: 'outgoing_mail',
+  accepted: 'handshake',
+  declined: 'block',
+  changes_requested: 'rate_review',
+  superseded: 'history',
+};
 
-export function versionStatus(status: string): StatusLook {
-  return (VERSION_STATUS as Record<string, StatusLook>)[status] ?? { word: status.replace(/_/g, ' '), icon: 'help' };
+/** A version's state in the contract's words, with its icon. */
+export function versionStatus(status: ProposalVersionStatus): StatusLook {
+  return { word: PROPOSAL_VERSION_STATUS_LABELS[status], icon: VERSION_ICONS[status] };
 }
 
 /** The terms wording a new proposal starts from; the office edits it freely. */
