@@ -18,16 +18,18 @@ export function measureOrReject(shape: SurfaceShapeInput): SurfaceMeasure {
   }
 }
 
-/** Adds measures saved in any unit into `unit`: areas and running lengths apart. */
-export function sumMeasures(items: readonly { measure: SurfaceMeasure; lengthUnit: TakeoffLengthUnit }[], unit: TakeoffLengthUnit): TakeoffTotals {
+/** Adds measures saved in any unit into `unit`: areas, running lengths and disturbed paint apart. */
+export function sumMeasures(items: readonly { measure: SurfaceMeasure; lengthUnit: TakeoffLengthUnit; disturbedPaintedArea: number | null }[], unit: TakeoffLengthUnit): TakeoffTotals {
   let area = 0;
   let length = 0;
+  let disturbedPaintedArea = 0;
   for (const item of items) {
     const m = convertMeasure(item.measure, item.lengthUnit, unit);
     if (m.measure === 'area') area += m.quantity;
     else length += m.quantity;
+    if (item.disturbedPaintedArea !== null) disturbedPaintedArea += convertArea(item.disturbedPaintedArea, item.lengthUnit, unit);
   }
-  return { area, length };
+  return { area, length, disturbedPaintedArea };
 }
 
 export const unitOfSystem = (units: 'imperial' | 'metric'): TakeoffLengthUnit => (units === 'metric' ? 'm' : 'ft');

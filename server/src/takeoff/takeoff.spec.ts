@@ -105,6 +105,7 @@ describe('site takeoff', () => {
     }
     const view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
     expect(view.leadCaution?.id ?? null).toBe(caution);
+    expect(view.rooms[0].totals.disturbedPaintedArea).toBe((disturbed as number[]).reduce((sum, x) => sum + x, 0));
   });
 
   it('refuses impossible geometry naming the field, and saves nothing', async () => {

@@ -54,6 +54,8 @@ export interface TakeoffTotals {
   readonly area: number;
   /** running length (crown, borders, beams by length) in the view's length unit */
   readonly length: number;
+  /** painted area the prep disturbs, in the view's length unit squared */
+  readonly disturbedPaintedArea: number;
 }
 
 export interface SurfaceView {
