@@ -9,19 +9,13 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
 import { MatSelectModule } from '@angular/material/select';
-import { startWith, switchMap } from 'rxjs';
 import { toObservable } from '@angular/core/rxjs-interop';
+import { FINISH_SYSTEM_LIMITS as L } from '@layerbook/contracts/types';
+import { waitText } from '@layerbook/domain';
+import { startWith, switchMap } from 'rxjs';
 import { errorText } from '../../shared/forms/error-text';
 import { type LayerGroup, addComponent } from './layer-form';
-import {
-  AREA_UNIT_CHOICES,
-  DILUTION_CHOICES,
-  METHOD_CHOICES,
-  MULTIPLIER_CHOICES,
-  UNIT_GROUPS,
-  WAIT_PICKS,
-  waitText,
-} from './library-words';
+import { AREA_UNIT_CHOICES, DILUTION_CHOICES, METHOD_CHOICES, MULTIPLIER_CHOICES, UNIT_GROUPS, WAIT_PICKS } from './library-words';
 
 export interface ProductChoice {
   readonly id: string;
@@ -59,18 +53,18 @@ export class LayerCard {
   protected readonly waitText = waitText;
   protected readonly errorText = errorText;
   protected readonly words = {
-    name: { required: 'Name the layer, like "Scratch coat" or "Glaze".', maxlength: 'Use at most 120 characters.' },
+    name: { required: 'Name the layer, like "Scratch coat" or "Glaze".', maxlength: `Use at most ${L.layerNameMax} characters.` },
     choose: { required: 'Choose from the list.' },
     product: { required: 'Choose a product, or give a mix recipe.' },
     amount: { required: 'Enter how far the product goes.', positive: 'Coverage must be more than zero.' },
     parts: { required: 'Enter the parts.', positive: 'Parts must be more than zero.' },
-    coats: { required: 'Enter the number of coats.', min: 'A layer has at least one coat.', max: 'Use at most 20 coats.', pattern: 'Coats are whole numbers.' },
+    coats: { required: 'Enter the number of coats.', min: 'A layer has at least one coat.', max: `Use at most ${L.coatsMax} coats.`, pattern: 'Coats are whole numbers.' },
     share: { required: 'Enter the share of the surface.', positive: 'The share must be more than 0 %.', max: 'The share is at most 100 %.' },
     dilution: { min: 'The dilution cannot be negative.', max: 'Dilution must be under 100 %.' },
     waste: { required: 'Enter the waste (0 for none).', min: 'Waste cannot be negative.', max: 'Waste must be under 100 %.' },
     rate: { ...NUMBER, positive: 'The production rate must be more than zero.' },
     multiplier: { min: 'A multiplier is at least 1 (no extra time).', max: 'A multiplier above 5 is surely a typo.' },
-    wait: { required: 'Enter the wait in hours (0 for none).', min: 'The wait cannot be negative.', max: 'Use at most 90 days (2160 hours).' },
+    wait: { required: 'Enter the wait in hours (0 for none).', min: 'The wait cannot be negative.', max: `Use at most 90 days (${L.waitHoursMax} hours).` },
   };
 
   /** Re-read on every change of the layer, so labels and the summary line follow what is typed. */

@@ -1,7 +1,16 @@
 import { AbstractControl, FormArray, FormControl, FormGroup, NonNullableFormBuilder, ValidationErrors, Validators } from '@angular/forms';
-import type { Problem, FinishLayerInput } from '@layerbook/contracts';
+import {
+  FINISH_SYSTEM_LIMITS as L,
+  MULTIPLIER_NAMES,
+  type CoverageKind,
+  type DilutionConvention,
+  type FinishLayerInput,
+  type MultiplierName,
+  type Problem,
+  type RecipeBasis,
+} from '@layerbook/contracts/types';
+import type { ApplicationMethod, LengthUnit, QuantityUnit } from '@layerbook/domain';
 import { requiredText } from '../../shared/forms/text-validators';
-import type { ApplicationMethod, CoverageKind, DilutionConvention, LengthUnit, MultiplierName, QuantityUnit, RecipeBasis } from './library-words';
 
 /*
  * A layer in the form mirrors the API's FinishLayer field by field, so a server error at
@@ -55,11 +64,11 @@ function componentGroup(fb: NonNullableFormBuilder, productId = '', parts: numbe
  * hour and a 4 h recoat wait (DOMAIN.md §3.6 ranges; common practice, no source).
  */
 export function layerGroup(fb: NonNullableFormBuilder, layer?: FinishLayerInput) {
-  const multiplier = (name: MultiplierName) => fb.control<number | null>(layer?.multipliers?.[name] ?? null, [Validators.min(1), Validators.max(5)]);
+  const multiplier = (name: MultiplierName) => fb.control<number | null>(layer?.multipliers?.[name] ?? null, [Validators.min(L.multiplierMin), Validators.max(L.multiplierMax)]);
   const recipe = layer?.recipe;
   const group = fb.group({
     id: fb.control(layer?.id ?? newLayerId()),
-    name: fb.control(layer?.name ?? '', [requiredText, Validators.maxLength(120)]),
+    name: fb.control(layer?.name ?? '', [requiredText, Validators.maxLength(L.layerNameMax)]),
     method: fb.control<ApplicationMethod>(layer?.method ?? 'roll', Validators.required),
     source: fb.control<'product' | 'recipe'>(recipe ? 'recipe' : 'product'),
     productId: fb.control(layer?.productId ?? '', Validators.required),
@@ -69,7 +78,7 @@ export function layerGroup(fb: NonNullableFormBuilder, layer?: FinishLayerInput)
       components: fb.array(recipe ? recipe.components.map((c) => componentGroup(fb, c.productId, c.parts)) : [componentGroup(fb), componentGroup(fb, '', 4)]),
     }),
     coverage: coverageGroup(fb, layer?.coverage ?? { kind: 'spreadRate', surfacePerUnit: 350, unit: 'gallon', lengthUnit: 'ft' }),
-    coats: fb.control<number | null>(layer?.coats ?? 1, [Validators.required, Validators.min(1), Validators.max(20), Validators.pattern(/^\d+$/)]),
+    coats: fb.control<number | null>(layer?.coats ?? 1, [Validators.required, Validators.min(1), Validators.max(L.coatsMax), Validators.pattern(/^\d+$/)]),
     isPerCoat: fb.control(!!layer?.coatCoverages),
     coatCoverages: fb.array((layer?.coatCoverages ?? []).map((c) => coverageGroup(fb, c))),
     coverageShare: fb.control<number | null>(toPercent(layer?.coverageShare ?? 1), [Validators.required, positive, Validators.max(100)]),
@@ -82,14 +91,8 @@ export function layerGroup(fb: NonNullableFormBuilder, layer?: FinishLayerInput)
       surfacePerHour: fb.control<number | null>(layer?.productionRate.surfacePerHour ?? 250, [Validators.required, positive]),
       lengthUnit: fb.control<LengthUnit>(layer?.productionRate.lengthUnit ?? 'ft', Validators.required),
     }),
-    multipliers: fb.group({
-      ceiling: multiplier('ceiling'),
-      height: multiplier('height'),
-      curvedWall: multiplier('curvedWall'),
-      curvedCeiling: multiplier('curvedCeiling'),
-      occupied: multiplier('occupied'),
-    }),
-    waitHoursAfter: fb.control<number | null>(layer?.waitHoursAfter ?? 4, [Validators.required, Validators.min(0), Validators.max(2160)]),
+    multipliers: fb.group(Object.fromEntries(MULTIPLIER_NAMES.map((name) => [name, multiplier(name)])) as Record<MultiplierName, FormControl<number | null>>),
+    waitHoursAfter: fb.control<number | null>(layer?.waitHoursAfter ?? 4, [Validators.required, Validators.min(0), Validators.max(L.waitHoursMax)]),
   });
 
   // Only the chosen source (one product, or a mix) and, when asked for, per-coat coverages count
@@ -109,7 +112,7 @@ export function layerGroup(fb: NonNullableFormBuilder, layer?: FinishLayerInput)
       return;
     }
     const coats = group.controls.coats.value;
-    const wanted = coats !== null && Number.isInteger(coats) && coats >= 1 && coats <= 20 ? coats : list.length;
+    const wanted = coats !== null && Number.isInteger(coats) && coats >= 1 && coats <= L.coatsMax ? coats : list.length;
     while (list.length < wanted) list.push(coverageGroup(fb, fromCoverageValue(group.controls.coverage.getRawValue())));
     while (list.length > wanted) list.removeAt(list.length - 1);
     toggle(list, true);

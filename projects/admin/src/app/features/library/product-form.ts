@@ -7,7 +7,8 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import type { ContainerView, ProductInput, ProductKind, ProductView } from '@layerbook/contracts';
+import { PRODUCT_LIMITS as L, type ContainerView, type ProductInput, type ProductKind, type ProductView } from '@layerbook/contracts/types';
+import type { QuantityUnit } from '@layerbook/domain';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
@@ -16,9 +17,10 @@ import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-inp
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LibraryApi } from './library-api';
-import { FLAMMABLE_BELOW_C, PRODUCT_KIND_CHOICES, type QuantityUnit, UNIT_GROUPS } from './library-words';
+import { PRODUCT_KIND_CHOICES, UNIT_GROUPS, flammableNote } from './library-words';
 
 const TOO_LONG = { maxlength: 'That is too long for this field.' };
+const FLASH_POINT_RANGE = `Check the flash point: it should be between −${-L.flashPointMinC} and ${L.flashPointMaxC} °C.`;
 
 /** Adds a product, or edits the one it is given: containers with prices, hazards from the SDS. */
 @Component({
@@ -38,6 +40,7 @@ export class ProductForm implements OnInit {
 
   protected readonly isNew = computed(() => this.product() === null);
   protected readonly kinds = PRODUCT_KIND_CHOICES;
+  protected readonly maxContainers = L.containersMax;
   protected readonly unitGroups = UNIT_GROUPS;
   protected readonly isHydrated = hydratedSignal();
   protected readonly isBusy = signal(false);
@@ -50,35 +53,29 @@ export class ProductForm implements OnInit {
     label: { required: 'Name the container, like "1 gal" or "20 kg pail".', ...TOO_LONG },
     size: { required: 'Enter the container size.', min: 'The container size must be more than zero.' },
     price: { required: 'Enter the price of this container, like 45.00.', ...AMOUNT_WORDS },
-    flashPoint: { min: 'Check the flash point: it should be between −100 and 400 °C.', max: 'Check the flash point: it should be between −100 and 400 °C.' },
+    flashPoint: { min: FLASH_POINT_RANGE, max: FLASH_POINT_RANGE },
     url: { pattern: 'Enter a web address starting with https://.', ...TOO_LONG },
     line: TOO_LONG,
     containers: { required: 'Add at least one container with its price.' },
   };
 
   protected readonly form = this.fb.group({
-    name: ['', [requiredText, Validators.maxLength(120)]],
+    name: ['', [requiredText, Validators.maxLength(L.nameMax)]],
     kind: this.fb.control<ProductKind>('paint', Validators.required),
     unit: this.fb.control<QuantityUnit>('gallon', Validators.required),
     containers: this.fb.array([this.containerGroup()]),
     hazards: this.fb.group({
-      flashPointC: this.fb.control<number | null>(null, [Validators.min(-100), Validators.max(400)]),
+      flashPointC: this.fb.control<number | null>(null, [Validators.min(L.flashPointMinC), Validators.max(L.flashPointMaxC)]),
       isLime: [false],
       containsSilica: [false],
     }),
-    sdsUrl: ['', [Validators.maxLength(500), Validators.pattern(/^\s*(https?:\/\/\S+)?\s*$/)]],
-    notes: ['', Validators.maxLength(2000)],
+    sdsUrl: ['', [Validators.maxLength(L.sdsUrlMax), Validators.pattern(/^\s*(https?:\/\/\S+)?\s*$/)]],
+    notes: ['', Validators.maxLength(L.notesMax)],
   });
 
   private readonly flashPoint = toSignal(this.form.controls.hazards.controls.flashPointC.valueChanges, { initialValue: null });
   /** Shown live beside the flash point so the rule is visible, not hidden in the server. */
-  protected readonly flammableNote = computed(() => {
-    const c = this.flashPoint();
-    if (c === null || c === undefined || Number.isNaN(c)) return 'Leave empty if it does not burn. Below 23 °C it counts as flammable (29 CFR 1910.106).';
-    return c < FLAMMABLE_BELOW_C
-      ? `Flammable: ${c} °C is below 23 °C (29 CFR 1910.106). Crew sheets will carry the fire cautions.`
-      : `Not flammable under 29 CFR 1910.106: ${c} °C is 23 °C or above. Still keep it away from flames.`;
-  });
+  protected readonly flammableNote = computed(() => flammableNote(this.flashPoint()));
 
   ngOnInit(): void {
     const p = this.product();
@@ -127,7 +124,7 @@ export class ProductForm implements OnInit {
 
   private containerGroup(c: Partial<ContainerView> = { label: '1 gal', size: 1, unit: 'gallon', price: '' }) {
     return this.fb.group({
-      label: [c.label ?? '', [requiredText, Validators.maxLength(40)]],
+      label: [c.label ?? '', [requiredText, Validators.maxLength(L.containerLabelMax)]],
       size: this.fb.control<number | null>(c.size ?? null, [Validators.required, Validators.min(Number.MIN_VALUE)]),
       unit: this.fb.control<QuantityUnit>(c.unit ?? 'gallon', Validators.required),
       price: [c.price ?? '', [requiredText, amountText]],

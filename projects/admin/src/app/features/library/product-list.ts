@@ -1,17 +1,19 @@
+import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import type { ProductView } from '@layerbook/contracts';
+import { PRODUCT_KIND_LABELS, QUANTITY_UNIT_SYMBOLS, type ItemList, type ProductView } from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
 import { FirmCurrency } from '../../core/firm/firm-currency';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { loadMessage } from '../../shared/forms/load-message';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { LibraryApi } from './library-api';
-import { UNIT_SHORT, hazardWords, kindLabel } from './library-words';
+import { LIBRARY_URLS, LibraryApi, archivedParam } from './library-api';
+import { hazardWords } from './library-words';
 import { ProductForm } from './product-form';
 
 /** Products the firm buys, with container prices (hidden from crew by the server) and hazards in words. */
@@ -30,63 +32,63 @@ export class ProductList {
   protected readonly canEdit = computed(() => this.session.hasRole('office'));
   protected readonly currency = this.firmCurrency.code;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly products = signal<readonly ProductView[]>([]);
   protected readonly showArchived = signal(false);
-  protected readonly isLoading = signal(true);
+  private readonly list = httpResource<ItemList<ProductView>>(() => ({ url: LIBRARY_URLS.products, params: archivedParam(this.showArchived()) }), {
+    defaultValue: { items: [] },
+  });
+  protected readonly products = computed(() => (this.list.hasValue() ? this.list.value().items : []));
+  protected readonly isLoading = this.list.isLoading;
   protected readonly isBusy = signal(false);
-  protected readonly message = signal<string | null>(null);
+  private readonly actionMessage = signal<string | null>(null);
+  private readonly loadFailure = loadMessage(this.list);
+  protected readonly message = computed(() => this.actionMessage() ?? this.loadFailure());
   /** 'new', a product id being edited, or null */
   protected readonly editing = signal<string | null>(null);
   protected readonly editingProduct = computed(() => this.products().find((p) => p.id === this.editing()) ?? null);
   protected readonly hazardWords = hazardWords;
-  protected readonly kindLabel = kindLabel;
-  protected readonly unitShort = UNIT_SHORT;
+  protected readonly kindLabel = (kind: ProductView['kind']) => PRODUCT_KIND_LABELS[kind];
+  protected readonly unitShort = QUANTITY_UNIT_SYMBOLS;
 
   constructor() {
     void this.firmCurrency.load();
-    void this.load();
   }
 
   protected toggleArchived(show: boolean): void {
+    this.actionMessage.set(null);
     this.showArchived.set(show);
-    void this.load();
   }
 
   protected productSaved(saved: ProductView): void {
     this.editing.set(null);
-    this.products.update((list) => {
-      const others = list.filter((p) => p.id !== saved.id);
-      return [...others, saved].sort((a, b) => a.name.localeCompare(b.name));
-    });
+    this.replaceInList(saved);
   }
 
   protected async setArchived(product: ProductView, isArchived: boolean): Promise<void> {
     this.isBusy.set(true);
-    this.message.set(null);
+    this.actionMessage.set(null);
     try {
       const saved = await this.api.setProductArchived(product.id, isArchived);
       if (isArchived && !this.showArchived()) {
-        this.products.update((list) => list.filter((p) => p.id !== saved.id));
+        this.editList((items) => items.filter((p) => p.id !== saved.id));
       } else {
-        this.productSaved(saved);
+        this.replaceInList(saved);
       }
     } catch (error) {
       const problem = toProblem(error);
-      this.message.set(problem.detail ?? problem.title);
+      this.actionMessage.set(problem.detail ?? problem.title);
     } finally {
       this.isBusy.set(false);
     }
   }
 
-  private async load(): Promise<void> {
-    this.isLoading.set(true);
-    try {
-      this.products.set(await this.api.products(this.showArchived() ? 'include' : 'exclude'));
-      this.message.set(null);
-    } catch (error) {
-      this.message.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
-    }
+  /** The saved product in its place by name, without asking for the whole list again. */
+  private replaceInList(saved: ProductView): void {
+    this.editList((items) => [...items.filter((p) => p.id !== saved.id), saved].sort((a, b) => a.name.localeCompare(b.name)));
+  }
+
+  /** Changes the shown list in place; a list that failed to load is asked for again instead. */
+  private editList(change: (items: readonly ProductView[]) => readonly ProductView[]): void {
+    if (this.list.hasValue()) this.list.update((list) => ({ items: change(list.items) }));
+    else this.list.reload();
   }
 }

@@ -10,7 +10,8 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import type { FinishSystemView, ProductView } from '@layerbook/contracts';
+import { FINISH_SYSTEM_LIMITS as L, QUANTITY_UNIT_SYMBOLS, type FinishSystemView, type ProductView } from '@layerbook/contracts/types';
+import { totalWaitHours, waitText } from '@layerbook/domain';
 import { map, startWith } from 'rxjs';
 import { Session } from '../../core/auth/session';
 import { applyProblem } from '../../core/errors/apply-problem';
@@ -22,7 +23,6 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { LayerCard, type ProductChoice } from './layer-card';
 import { type LayerGroup, layerGroup, problemForForm, toLayer } from './layer-form';
 import { LibraryApi } from './library-api';
-import { UNIT_SHORT, waitText } from './library-words';
 
 /** One finish system: its layers in order, edited as a whole and saved in one request (nothing half-saved). */
 @Component({
@@ -51,25 +51,26 @@ export class SystemEditor {
   protected readonly products = signal<readonly ProductView[]>([]);
   protected readonly errorText = errorText;
   protected readonly words = {
-    name: { required: 'Name the finish system.', maxlength: 'Use at most 120 characters.' },
-    description: { maxlength: 'Use at most 2000 characters.' },
+    name: { required: 'Name the finish system.', maxlength: `Use at most ${L.nameMax} characters.` },
+    description: { maxlength: `Use at most ${L.descriptionMax} characters.` },
   };
   protected readonly dragDelay = { touch: 300, mouse: 0 };
 
   protected readonly form = this.fb.group({
-    name: ['', [requiredText, Validators.maxLength(120)]],
-    description: ['', Validators.maxLength(2000)],
+    name: ['', [requiredText, Validators.maxLength(L.nameMax)]],
+    description: ['', Validators.maxLength(L.descriptionMax)],
     layers: this.fb.array<LayerGroup>([]),
   });
 
   private readonly formValue = toSignal(this.form.valueChanges.pipe(startWith(null), map(() => this.form.getRawValue())));
   protected readonly layerCount = computed(() => this.formValue()?.layers.length ?? 0);
-  protected readonly totalWait = computed(() => waitText((this.formValue()?.layers ?? []).reduce((sum, l) => sum + (l.waitHoursAfter ?? 0), 0)));
+  /** The same sum the library shows for a saved system, over the layers as typed (a blank wait counts as none). */
+  protected readonly totalWait = computed(() => waitText(totalWaitHours((this.formValue()?.layers ?? []).map((l) => ({ waitHoursAfter: l.waitHoursAfter ?? 0 })))));
   protected readonly isNew = computed(() => this.system() === null);
 
   /** Current products, plus any archived one this system still names, so its select shows a name. */
   protected readonly productChoices = computed<ProductChoice[]>(() => {
-    const choices: ProductChoice[] = this.products().map((p) => ({ id: p.id, label: `${p.name} (${UNIT_SHORT[p.unit]})` }));
+    const choices: ProductChoice[] = this.products().map((p) => ({ id: p.id, label: `${p.name} (${QUANTITY_UNIT_SYMBOLS[p.unit]})` }));
     for (const used of this.system()?.usesProducts ?? []) {
       if (!choices.some((c) => c.id === used.id)) choices.push({ id: used.id, label: `${used.name} (archived)` });
     }

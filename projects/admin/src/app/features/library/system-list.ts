@@ -1,16 +1,18 @@
+import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
-import type { FinishSystemSummary } from '@layerbook/contracts';
+import type { FinishSystemSummary, ItemList } from '@layerbook/contracts/types';
+import { waitText } from '@layerbook/domain';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { loadMessage } from '../../shared/forms/load-message';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { LibraryApi } from './library-api';
-import { waitText } from './library-words';
+import { LIBRARY_URLS, LibraryApi, archivedParam } from './library-api';
 
 @Component({
   selector: 'lb-system-list',
@@ -81,47 +83,38 @@ export class SystemList {
 
   protected readonly canEdit = computed(() => this.session.hasRole('office') && !!this.session.user());
   protected readonly isHydrated = hydratedSignal();
-  protected readonly systems = signal<readonly FinishSystemSummary[]>([]);
   protected readonly showArchived = signal(false);
-  protected readonly isLoading = signal(true);
+  private readonly list = httpResource<ItemList<FinishSystemSummary>>(() => ({ url: LIBRARY_URLS.systems, params: archivedParam(this.showArchived()) }), {
+    defaultValue: { items: [] },
+  });
+  protected readonly systems = computed(() => (this.list.hasValue() ? this.list.value().items : []));
+  protected readonly isLoading = this.list.isLoading;
   protected readonly isBusy = signal(false);
-  protected readonly message = signal<string | null>(null);
+  private readonly actionMessage = signal<string | null>(null);
+  private readonly loadFailure = loadMessage(this.list);
+  protected readonly message = computed(() => this.actionMessage() ?? this.loadFailure());
   protected readonly waitText = waitText;
-
-  constructor() {
-    void this.load();
-  }
 
   protected productNames(system: FinishSystemSummary): string {
     return system.usesProducts.map((p) => p.name).join(', ');
   }
 
   protected toggleArchived(show: boolean): void {
+    this.actionMessage.set(null);
     this.showArchived.set(show);
-    void this.load();
   }
 
   protected async duplicate(system: FinishSystemSummary): Promise<void> {
     this.isBusy.set(true);
+    this.actionMessage.set(null);
     try {
       const copy = await this.api.duplicateSystem(system.id);
       await this.router.navigate(['/library/systems', copy.id]);
     } catch (error) {
-      this.message.set(toProblem(error).detail ?? toProblem(error).title);
+      const problem = toProblem(error);
+      this.actionMessage.set(problem.detail ?? problem.title);
     } finally {
       this.isBusy.set(false);
-    }
-  }
-
-  private async load(): Promise<void> {
-    this.isLoading.set(true);
-    try {
-      this.systems.set(await this.api.systems(this.showArchived() ? 'include' : 'exclude'));
-      this.message.set(null);
-    } catch (error) {
-      this.message.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
     }
   }
 }

@@ -1,4 +1,4 @@
-import { DomainInputError, measureSurface, type SurfaceMeasure, type SurfaceShape } from '@layerbook/domain';
+import { DomainInputError, dottedPath, measureSurface, type SurfaceMeasure, type SurfaceShape } from '@layerbook/domain';
 
 export type LiveMeasure =
   | { readonly state: 'missing' }
@@ -12,7 +12,7 @@ export function measureLive(shape: SurfaceShape): LiveMeasure {
     return { state: 'measured', shape, measure: measureSurface(shape) };
   } catch (error) {
     if (error instanceof DomainInputError) {
-      return { state: 'refused', shape, field: error.field.replace(/\[(\d+)\]/g, '.$1'), message: error.message };
+      return { state: 'refused', shape, field: dottedPath(error.field), message: error.message };
     }
     throw error;
   }

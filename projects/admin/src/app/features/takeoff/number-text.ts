@@ -8,13 +8,3 @@ export function readNumber(typed: string | null | undefined): number | null {
   if (plain === '') return null;
   return /^-?(\d+\.?\d*|\.\d+)$/.test(plain) ? Number(plain) : Number.NaN;
 }
-
-/** For labels and sketches: at most two decimals, no trailing zeros ("9", "4.5", "282.74"). */
-export function shortNumber(value: number): string {
-  return String(Number(value.toFixed(2)));
-}
-
-/** For the measured amounts: always two decimals, grouped ("1,204.50"). */
-export function amount(value: number): string {
-  return value.toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
-}

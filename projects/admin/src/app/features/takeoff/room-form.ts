@@ -4,7 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import type { RoomView } from '@layerbook/contracts';
+import { TAKEOFF_LIMITS as L, type RoomView } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
@@ -69,14 +69,14 @@ export class RoomForm implements OnInit {
   protected readonly formMessage = signal<string | null>(null);
   protected readonly errorText = errorText;
   protected readonly words = {
-    name: { required: 'Enter the room name.', maxlength: 'Use at most 120 characters.' },
-    notes: { maxlength: 'Use at most 2000 characters.' },
+    name: { required: 'Enter the room name.', maxlength: `Use at most ${L.roomNameMax} characters.` },
+    notes: { maxlength: `Use at most ${L.notesMax} characters.` },
   };
 
   protected readonly form = inject(NonNullableFormBuilder).group({
-    name: ['', [requiredText, Validators.maxLength(120)]],
+    name: ['', [requiredText, Validators.maxLength(L.roomNameMax)]],
     isExterior: [false],
-    notes: ['', Validators.maxLength(2000)],
+    notes: ['', Validators.maxLength(L.notesMax)],
   });
 
   ngOnInit(): void {

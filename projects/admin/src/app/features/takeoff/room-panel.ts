@@ -4,13 +4,10 @@ import { MatDialog } from '@angular/material/dialog';
 import { MatExpansionModule } from '@angular/material/expansion';
 import { MatIconModule } from '@angular/material/icon';
 import { firstValueFrom } from 'rxjs';
-import type { RoomView, SurfaceView, TakeoffLengthUnit } from '@layerbook/contracts';
-import type { SurfaceShape } from '@layerbook/domain';
+import { shapeChoice, type RoomView, type SurfaceView, type TakeoffLengthUnit } from '@layerbook/contracts/types';
+import { fixedNumber, measureText, plainNumber, totalsText, workingText } from '@layerbook/domain';
 import { toProblem } from '../../core/errors/problem';
 import { ConfirmDialog, type ConfirmDialogData } from '../../shared/ui/confirm-dialog';
-import { quantityText, totalsText, workingText } from './measure-words';
-import { amount, shortNumber } from './number-text';
-import { shapeChoice } from './shape-catalog';
 import { ShapeSketch } from './shape-sketch';
 import { RoomForm } from './room-form';
 import { RoomPhotos } from './room-photos';
@@ -46,11 +43,11 @@ export class RoomPanel implements OnInit {
   protected readonly isOpen = signal(false);
   protected readonly editing = signal<Editing>(null);
   protected readonly isBusy = signal(false);
-  protected readonly quantityText = quantityText;
+  protected readonly quantityText = measureText;
   protected readonly workingText = workingText;
   protected readonly totalsText = totalsText;
-  protected readonly amount = amount;
-  protected readonly shortNumber = shortNumber;
+  protected readonly amount = fixedNumber;
+  protected readonly shortNumber = plainNumber;
 
   ngOnInit(): void {
     this.isOpen.set(this.startOpen());
@@ -58,14 +55,6 @@ export class RoomPanel implements OnInit {
 
   protected shapeLabel(surface: SurfaceView): string {
     return shapeChoice(surface.shape.kind).label;
-  }
-
-  protected asShape(surface: SurfaceView): SurfaceShape {
-    return surface.shape as SurfaceShape;
-  }
-
-  protected disturbedTotal(): number {
-    return this.room().surfaces.reduce((sum, s) => sum + (s.disturbedPaintedArea ?? 0), 0);
   }
 
   protected done(message: string): void {

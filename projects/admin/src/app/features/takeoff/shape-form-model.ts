@@ -1,11 +1,8 @@
 import { AbstractControl, FormArray, FormControl, FormGroup, ValidationErrors, ValidatorFn } from '@angular/forms';
-import type { SurfaceView, TakeoffLengthUnit } from '@layerbook/contracts';
-import { convertArea, convertLength, type SurfaceKind, type SurfaceShape } from '@layerbook/domain';
+import { DIM_KEYS, DIM_WORDS, ELEVATION_NOUN, OPENING_FIELDS, shapeChoice, type DimKey, type DimRule, type SurfaceView, type TakeoffLengthUnit } from '@layerbook/contracts/types';
+import type { SurfaceKind } from '@layerbook/domain';
 import { readNumber } from './number-text';
-import { DIM_KEYS, type DimField, type DimKey, type DimRule, shapeChoice } from './shape-catalog';
-
-/** The API's upper bound on any size (contracts: takeoff/shape.ts). */
-const MAX_SIZE = 100_000;
+import { dimMessage, optionalNonNegativeMessage, shapeFormValue } from './shape-reading';
 
 export type OpeningGroup = FormGroup<{ width: FormControl<string>; height: FormControl<string>; count: FormControl<string> }>;
 /** [x, y] as a two-control array, so the API's `shape.corners.1.0` finds its control. */
@@ -18,21 +15,6 @@ export type ShapeGroupControls = { [K in DimKey]: FormControl<string> } & {
   corners: FormArray<CornerArray>;
 };
 
-/** A rule's message, the same words as the API's schema. */
-export function dimMessage(rule: DimRule, noun: string, value: number | null): string | null {
-  if (typeof rule === 'object') {
-    const [min, max] = rule.whole;
-    return value !== null && Number.isInteger(value) && value >= min && value <= max ? null : `Enter the ${noun} as a whole number from ${min} to ${max}.`;
-  }
-  if (rule === 'depth0') {
-    if (value === null || Number.isNaN(value) || value < 0) return `Enter the ${noun}, 0 or more.`;
-  } else if (value === null || Number.isNaN(value) || value <= 0) {
-    return `Enter the ${noun}, more than 0.`;
-  }
-  if (rule === 'angle' && value > 360) return 'Enter an angle of at most 360 degrees.';
-  return value > MAX_SIZE ? `Enter the ${noun}, at most ${MAX_SIZE}.` : null;
-}
-
 const asErrors = (message: string | null): ValidationErrors | null => (message === null ? null : { rule: message });
 
 /** Each dimension checks itself against the rule of the shape chosen now (a depth may be 0 for coffers, not beams). */
@@ -43,26 +25,23 @@ function dimValidator(key: DimKey, kindOf: () => SurfaceKind): ValidatorFn {
   };
 }
 
-const optionalNonNegative =
-  (noun: string): ValidatorFn =>
-  (control: AbstractControl<string>) => {
-    const value = readNumber(control.value);
-    if (value === null) return null;
-    return asErrors(Number.isNaN(value) || value < 0 ? `Enter the ${noun}, 0 or more, or leave it empty.` : value > MAX_SIZE ? `Enter the ${noun}, at most ${MAX_SIZE}.` : null);
-  };
-
-const rule = (r: DimRule, noun: string): ValidatorFn => (control: AbstractControl<string>) => asErrors(dimMessage(r, noun, readNumber(control.value)));
+const rule =
+  (r: DimRule, noun: string): ValidatorFn =>
+  (control: AbstractControl<string>) =>
+    asErrors(dimMessage(r, noun, readNumber(control.value)));
 
 const anyNumber: ValidatorFn = (control: AbstractControl<string>) => {
   const value = readNumber(control.value);
-  return value === null || Number.isNaN(value) ? { rule: 'Enter a number, like 12 or -3.5.' } : null;
+  return value === null || Number.isNaN(value) ? { rule: DIM_WORDS.corner } : null;
 };
+
+const [WIDTH, HEIGHT, COUNT] = OPENING_FIELDS;
 
 export function openingGroup(width = '', height = '', count = '1'): OpeningGroup {
   return new FormGroup({
-    width: new FormControl(width, { nonNullable: true, validators: rule('length', 'opening width') }),
-    height: new FormControl(height, { nonNullable: true, validators: rule('length', 'opening height') }),
-    count: new FormControl(count, { nonNullable: true, validators: rule({ whole: [1, 100] }, 'number of alike openings') }),
+    width: new FormControl(width, { nonNullable: true, validators: rule(WIDTH.rule, WIDTH.noun) }),
+    height: new FormControl(height, { nonNullable: true, validators: rule(HEIGHT.rule, HEIGHT.noun) }),
+    count: new FormControl(count, { nonNullable: true, validators: rule(COUNT.rule, COUNT.noun) }),
   });
 }
 
@@ -79,7 +58,7 @@ export function shapeGroup(): FormGroup<ShapeGroupControls> {
   return new FormGroup<ShapeGroupControls>({
     ...dims,
     kind,
-    elevation: new FormControl('', { nonNullable: true, validators: optionalNonNegative('height above the floor') }),
+    elevation: new FormControl('', { nonNullable: true, validators: (c: AbstractControl<string>) => asErrors(optionalNonNegativeMessage(ELEVATION_NOUN, readNumber(c.value))) }),
     measureBy: new FormControl<'faces' | 'length'>('faces', { nonNullable: true }),
     openings: new FormArray<OpeningGroup>([]),
     // A rectangle's four corners to start from: most odd ceilings are a rectangle with a corner cut.
@@ -104,89 +83,19 @@ function toggle(control: AbstractControl, on: boolean): void {
   if (on) control.updateValueAndValidity({ emitEvent: false });
 }
 
-export type ShapeReading = { readonly shape: SurfaceShape } | { readonly missing: true };
-
-/**
- * The shape as the engine wants it, or `missing` while any field of the chosen shape is empty or
- * not yet a valid number. Geometry that does not fit together is left for the engine to judge.
- */
-export function readShape(raw: ReturnType<FormGroup<ShapeGroupControls>['getRawValue']>): ShapeReading {
-  const c = shapeChoice(raw.kind);
-  const out: Record<string, unknown> = { kind: raw.kind };
-  for (const field of c.fields) {
-    const value = readNumber(raw[field.key]);
-    if (dimMessage(field.rule, field.noun, value) !== null) return { missing: true };
-    out[field.key] = value;
-  }
-  if (c.hasElevation) {
-    const elevation = readNumber(raw.elevation);
-    if (elevation !== null) {
-      if (Number.isNaN(elevation) || elevation < 0) return { missing: true };
-      out['elevation'] = elevation;
-    }
-  }
-  if (c.hasOpenings) {
-    const openings = [];
-    for (const o of raw.openings) {
-      const width = readNumber(o.width);
-      const height = readNumber(o.height);
-      const count = readNumber(o.count);
-      if (dimMessage('length', '', width) || dimMessage('length', '', height) || dimMessage({ whole: [1, 100] }, '', count)) return { missing: true };
-      openings.push({ width: width!, height: height!, count: count! });
-    }
-    out['openings'] = openings;
-  }
-  if (c.hasCorners) {
-    const corners: [number, number][] = [];
-    for (const [x, y] of raw.corners) {
-      const nx = readNumber(x);
-      const ny = readNumber(y);
-      if (nx === null || ny === null || Number.isNaN(nx) || Number.isNaN(ny)) return { missing: true };
-      corners.push([nx, ny]);
-    }
-    out['corners'] = corners;
-  }
-  if (c.hasMeasureBy) out['measureBy'] = raw.measureBy;
-  return { shape: out as unknown as SurfaceShape };
-}
-
-/** How a field scales between units: lengths linearly, areas by the square, counts and angles not at all. */
-function convertField(field: DimField, value: number, from: TakeoffLengthUnit, to: TakeoffLengthUnit): number {
-  if (field.rule === 'length' || field.rule === 'depth0') return convertLength(value, from, to);
-  if (field.rule === 'area') return convertArea(value, from, to);
-  return value;
-}
-
-const text = (value: number | undefined) => (value === undefined ? '' : shortNumberFine(value));
-/** Four decimals keep a converted 10 ft (3.048 m) exact enough to re-measure the same. */
-const shortNumberFine = (value: number) => String(Number(value.toFixed(4)));
-
-/**
- * Puts a saved surface into the form, in the unit the firm measures in now: a surface saved in
- * feet before the firm went metric is shown (and saved again) in metres.
- */
+/** Puts a saved surface into the form, in the unit the firm measures in now (see shapeFormValue). */
 export function loadShape(group: FormGroup<ShapeGroupControls>, surface: SurfaceView, unit: TakeoffLengthUnit): void {
-  const shape = surface.shape as SurfaceShape;
-  const values = shape as unknown as Readonly<Record<string, unknown>>;
-  const from = surface.lengthUnit;
-  const c = shapeChoice(shape.kind);
-  const len = (value: number) => convertLength(value, from, unit);
-  group.controls.kind.setValue(shape.kind, { emitEvent: false });
-  for (const field of c.fields) {
-    const value = values[field.key];
-    group.controls[field.key].setValue(typeof value === 'number' ? text(convertField(field, value, from, unit)) : field.key === 'count' ? '1' : '', { emitEvent: false });
-  }
-  const elevation = values['elevation'];
-  group.controls.elevation.setValue(typeof elevation === 'number' ? text(len(elevation)) : '', { emitEvent: false });
-  if (shape.kind === 'beams') group.controls.measureBy.setValue(shape.measureBy ?? 'faces', { emitEvent: false });
-  group.controls.openings.clear({ emitEvent: false });
-  if ((shape.kind === 'walls' || shape.kind === 'roundWalls' || shape.kind === 'curvedWall') && shape.openings) {
-    for (const o of shape.openings) group.controls.openings.push(openingGroup(text(len(o.width)), text(len(o.height)), String(o.count ?? 1)), { emitEvent: false });
-  }
-  if (shape.kind === 'ceilingPolygon') {
-    group.controls.corners.clear({ emitEvent: false });
-    for (const [x, y] of shape.corners) group.controls.corners.push(cornerArray(text(len(x)), text(len(y))), { emitEvent: false });
+  const value = shapeFormValue(surface.shape, surface.lengthUnit, unit);
+  const c = group.controls;
+  c.kind.setValue(value.kind, { emitEvent: false });
+  for (const field of shapeChoice(value.kind).fields) c[field.key].setValue(value[field.key] ?? '', { emitEvent: false });
+  c.elevation.setValue(value.elevation ?? '', { emitEvent: false });
+  if (value.measureBy) c.measureBy.setValue(value.measureBy, { emitEvent: false });
+  c.openings.clear({ emitEvent: false });
+  for (const o of value.openings ?? []) c.openings.push(openingGroup(o.width, o.height, o.count), { emitEvent: false });
+  if (value.corners) {
+    c.corners.clear({ emitEvent: false });
+    for (const [x, y] of value.corners) c.corners.push(cornerArray(x, y), { emitEvent: false });
   }
   enableFor(group);
 }
-

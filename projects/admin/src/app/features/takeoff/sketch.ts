@@ -1,5 +1,4 @@
-import type { SurfaceShape } from '@layerbook/domain';
-import { shortNumber } from './number-text';
+import { plainNumber as shortNumber, type SurfaceShape } from '@layerbook/domain';
 
 /**
  * Simple line drawings of each shape with its numbers, so a mistyped size shows at a glance.

@@ -7,21 +7,19 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import type { SurfaceInput, SurfaceView, TakeoffLengthUnit } from '@layerbook/contracts';
+import { DIM_WORDS, DISTURBED_AREA_NOUN, SHAPE_GROUPS, TAKEOFF_LIMITS as L, shapeChoice, type DimField, type SurfaceInput, type SurfaceView, type TakeoffLengthUnit } from '@layerbook/contracts/types';
+import { measureText, plainNumber, workingText } from '@layerbook/domain';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { type LiveMeasure, measureLive } from './live-measure';
-import { quantityText, workingText } from './measure-words';
-import { readNumber, shortNumber } from './number-text';
-import { type DimField, SHAPE_GROUPS, shapeChoice } from './shape-catalog';
-import { cornerArray, enableFor, loadShape, openingGroup, readShape, shapeGroup } from './shape-form-model';
+import { readNumber } from './number-text';
+import { cornerArray, enableFor, loadShape, openingGroup, shapeGroup } from './shape-form-model';
+import { readShape } from './shape-reading';
 import { ShapeSketch } from './shape-sketch';
 import { TakeoffApi } from './takeoff-api';
-
-const DISTURBED_NOUN = 'painted area the prep disturbs';
 
 /** Adds a surface to a room or edits one: choose a shape, type its sizes, watch the area, save. */
 @Component({
@@ -55,15 +53,15 @@ export class SurfaceForm implements OnInit {
     const live = this.live();
     return live.state === 'measured' ? live.shape : null;
   });
-  protected readonly quantityText = quantityText;
+  protected readonly quantityText = measureText;
   protected readonly workingText = workingText;
-  protected readonly shortNumber = shortNumber;
+  protected readonly shortNumber = plainNumber;
 
   protected readonly form = new FormGroup({
-    name: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(120)] }),
+    name: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(L.surfaceNameMax)] }),
     shape: shapeGroup(),
     disturbedPaintedArea: new FormControl('', { nonNullable: true, validators: disturbedRule }),
-    notes: new FormControl('', { nonNullable: true, validators: Validators.maxLength(2000) }),
+    notes: new FormControl('', { nonNullable: true, validators: Validators.maxLength(L.notesMax) }),
   });
   protected readonly shape = this.form.controls.shape;
   /** Controls the engine's last refusal was pinned to, so the next reading can clear it. */
@@ -76,7 +74,7 @@ export class SurfaceForm implements OnInit {
       const disturbed = surface.disturbedPaintedArea;
       this.form.controls.name.setValue(surface.name);
       this.form.controls.notes.setValue(surface.notes);
-      this.form.controls.disturbedPaintedArea.setValue(disturbed === null ? '' : shortNumber(disturbed));
+      this.form.controls.disturbedPaintedArea.setValue(disturbed === null ? '' : plainNumber(disturbed));
     } else {
       enableFor(this.shape);
     }
@@ -143,7 +141,7 @@ export class SurfaceForm implements OnInit {
     const v = this.form.getRawValue();
     const body: SurfaceInput = {
       name: v.name.trim(),
-      shape: reading.shape as SurfaceInput['shape'],
+      shape: reading.shape,
       disturbedPaintedArea: readNumber(v.disturbedPaintedArea),
       notes: v.notes.trim(),
     };
@@ -188,8 +186,9 @@ export class SurfaceForm implements OnInit {
 
 }
 
+/** The same range and words as the API (contracts: takeoff.ts). */
 function disturbedRule(control: AbstractControl<string>) {
   const value = readNumber(control.value);
-  if (value === null) return null;
-  return Number.isNaN(value) || value < 0 ? { rule: `Enter the ${DISTURBED_NOUN}, 0 or more, or leave it empty.` } : null;
+  const isFine = value === null || (!Number.isNaN(value) && value >= 0 && value <= L.disturbedAreaMax);
+  return isFine ? null : { rule: DIM_WORDS.optionalNonNegative(DISTURBED_AREA_NOUN) };
 }

@@ -1,21 +1,20 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { RoomInput, RoomUpdate, RoomView, SurfaceInput, SurfaceView, TakeoffView } from '@layerbook/contracts';
+import type { RoomInput, RoomUpdate, RoomView, SurfaceInput, SurfaceUpdate, SurfaceView, TakeoffView } from '@layerbook/contracts/types';
 
 const id = (value: string) => encodeURIComponent(value);
 
-/** The takeoff API (/api/takeoff); every write answers with what changed, the page reloads the whole view. */
+/** A site's takeoff, read by the page through httpResource. */
+export const takeoffUrl = (siteId: string) => `/api/takeoff/sites/${id(siteId)}`;
+
+/** The takeoff's writes (/api/takeoff); every write answers with what changed, the page reloads the whole view. */
 @Injectable({ providedIn: 'root' })
 export class TakeoffApi {
   private readonly http = inject(HttpClient);
 
-  load(siteId: string): Promise<TakeoffView> {
-    return firstValueFrom(this.http.get<TakeoffView>(`/api/takeoff/sites/${id(siteId)}`));
-  }
-
   addRoom(siteId: string, body: RoomInput): Promise<RoomView> {
-    return firstValueFrom(this.http.post<RoomView>(`/api/takeoff/sites/${id(siteId)}/rooms`, body));
+    return firstValueFrom(this.http.post<RoomView>(`${takeoffUrl(siteId)}/rooms`, body));
   }
 
   updateRoom(roomId: string, body: RoomUpdate): Promise<RoomView> {
@@ -34,7 +33,7 @@ export class TakeoffApi {
     return firstValueFrom(this.http.post<SurfaceView>(`/api/takeoff/rooms/${id(roomId)}/surfaces`, body));
   }
 
-  updateSurface(surfaceId: string, body: SurfaceInput): Promise<SurfaceView> {
+  updateSurface(surfaceId: string, body: SurfaceUpdate): Promise<SurfaceView> {
     return firstValueFrom(this.http.patch<SurfaceView>(`/api/takeoff/surfaces/${id(surfaceId)}`, body));
   }
 
