@@ -5,7 +5,7 @@ import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
-import type { PortalProposal } from '@layerbook/contracts';
+import { SIGNED_NAME_MAX, SIGNED_NAME_MIN, type PortalProposal } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
@@ -20,8 +20,8 @@ const WORDS = {
   variantId: { required: 'Choose an option.' },
   signedName: {
     required: 'Type your full name to sign.',
-    minlength: 'Type your full name to sign (at least 2 characters).',
-    maxlength: 'Use at most 120 characters.',
+    minlength: `Type your full name to sign (at least ${SIGNED_NAME_MIN} characters).`,
+    maxlength: `Use at most ${SIGNED_NAME_MAX} characters.`,
   },
   consent: { required: 'Tick the box to confirm you accept this proposal.' },
 } as const;
@@ -52,7 +52,7 @@ const trimmedMin = (min: number) => (c: { value: string }) => (c.value.trim().le
         </div>
         <mat-form-field>
           <mat-label>Your full name</mat-label>
-          <input matInput formControlName="signedName" autocomplete="name" required maxlength="120" />
+          <input matInput formControlName="signedName" autocomplete="name" required [maxlength]="signedNameMax" />
           <mat-hint>Typing your name is your signature.</mat-hint>
           <mat-error>{{ errorText(form.controls.signedName, words.signedName) }}</mat-error>
         </mat-form-field>
@@ -86,9 +86,10 @@ export class AcceptanceForm {
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     variantId: ['', requiredText],
-    signedName: ['', [requiredText, trimmedMin(2), Validators.maxLength(120)]],
+    signedName: ['', [requiredText, trimmedMin(SIGNED_NAME_MIN), Validators.maxLength(SIGNED_NAME_MAX)]],
     consent: [false, Validators.requiredTrue],
   });
+  protected readonly signedNameMax = SIGNED_NAME_MAX;
   protected readonly options = computed(() => {
     const s = this.proposal().snapshot;
     return s.options.map((o) => ({ id: o.id, text: `${o.label} — ${formatMoney(o.total, s.currency, s.locale)}` }));

@@ -3,7 +3,7 @@ import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angula
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import type { PortalProposal } from '@layerbook/contracts';
+import { PROPOSAL_COMMENT_MAX, type PortalProposal } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
@@ -29,7 +29,7 @@ type Mode = 'changes' | 'decline' | null;
           <lb-form-alert [message]="formMessage()" />
           <mat-form-field>
             <mat-label>What would you like changed?</mat-label>
-            <textarea matInput formControlName="comment" rows="4" maxlength="2000" required></textarea>
+            <textarea matInput formControlName="comment" rows="4" [maxlength]="commentMax" required></textarea>
             <mat-error>{{ errorText(changes.controls.comment, words) }}</mat-error>
           </mat-form-field>
           <div class="lb-form-actions">
@@ -44,7 +44,7 @@ type Mode = 'changes' | 'decline' | null;
           <lb-form-alert [message]="formMessage()" />
           <mat-form-field>
             <mat-label>Anything the firm should know? (optional)</mat-label>
-            <textarea matInput formControlName="comment" rows="3" maxlength="2000"></textarea>
+            <textarea matInput formControlName="comment" rows="3" [maxlength]="commentMax"></textarea>
             <mat-error>{{ errorText(decline.controls.comment, words) }}</mat-error>
           </mat-form-field>
           <div class="lb-form-actions">
@@ -67,13 +67,14 @@ export class AnswerForms {
   readonly decided = output<PortalProposal>();
 
   protected readonly mode = signal<Mode>(null);
-  protected readonly changes = this.fb.group({ comment: ['', [requiredText, Validators.maxLength(2000)]] });
-  protected readonly decline = this.fb.group({ comment: ['', Validators.maxLength(2000)] });
+  protected readonly changes = this.fb.group({ comment: ['', [requiredText, Validators.maxLength(PROPOSAL_COMMENT_MAX)]] });
+  protected readonly decline = this.fb.group({ comment: ['', Validators.maxLength(PROPOSAL_COMMENT_MAX)] });
   protected readonly isBusy = signal(false);
   protected readonly formMessage = signal<string | null>(null);
   protected readonly isHydrated = hydratedSignal();
   protected readonly errorText = errorText;
-  protected readonly words = { required: 'Say what you would like changed.', maxlength: 'Use at most 2000 characters.' };
+  protected readonly words = { required: 'Say what you would like changed.', maxlength: `Use at most ${PROPOSAL_COMMENT_MAX} characters.` };
+  protected readonly commentMax = PROPOSAL_COMMENT_MAX;
 
   protected open(mode: Mode): void {
     this.formMessage.set(null);

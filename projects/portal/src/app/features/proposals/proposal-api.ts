@@ -1,34 +1,30 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { ItemList, PortalProposal, PortalProposalSummary, ProposalAcceptance, ProposalChangeRequest, ProposalDecline } from '@layerbook/contracts';
+import type { PortalProposal, ProposalAcceptance, ProposalChangeRequest, ProposalDecline } from '@layerbook/contracts/types';
 
-/** The client's own proposal versions: read, accept, ask for changes, decline. */
+/** The client's proposals (GET, `{ items }`) and one of them, for the pages' httpResource reads. */
+export const PROPOSALS_URL = '/api/portal/proposals';
+export const proposalUrl = (id: string) => `${PROPOSALS_URL}/${encodeURIComponent(id)}`;
+
+/** The client's answers to a proposal version: accept, ask for changes, decline; and its PDF. */
 @Injectable({ providedIn: 'root' })
 export class ProposalApi {
   private readonly http = inject(HttpClient);
 
-  async list(): Promise<readonly PortalProposalSummary[]> {
-    return (await firstValueFrom(this.http.get<ItemList<PortalProposalSummary>>('/api/portal/proposals'))).items;
-  }
-
-  get(id: string): Promise<PortalProposal> {
-    return firstValueFrom(this.http.get<PortalProposal>(`/api/portal/proposals/${encodeURIComponent(id)}`));
-  }
-
   accept(id: string, body: ProposalAcceptance): Promise<PortalProposal> {
-    return firstValueFrom(this.http.post<PortalProposal>(`/api/portal/proposals/${encodeURIComponent(id)}/accept`, body));
+    return firstValueFrom(this.http.post<PortalProposal>(`${proposalUrl(id)}/accept`, body));
   }
 
   requestChanges(id: string, body: ProposalChangeRequest): Promise<PortalProposal> {
-    return firstValueFrom(this.http.post<PortalProposal>(`/api/portal/proposals/${encodeURIComponent(id)}/request-changes`, body));
+    return firstValueFrom(this.http.post<PortalProposal>(`${proposalUrl(id)}/request-changes`, body));
   }
 
   decline(id: string, body: ProposalDecline): Promise<PortalProposal> {
-    return firstValueFrom(this.http.post<PortalProposal>(`/api/portal/proposals/${encodeURIComponent(id)}/decline`, body));
+    return firstValueFrom(this.http.post<PortalProposal>(`${proposalUrl(id)}/decline`, body));
   }
 
   pdfUrl(id: string): string {
-    return `/api/portal/proposals/${encodeURIComponent(id)}/pdf`;
+    return `${proposalUrl(id)}/pdf`;
   }
 }

@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
-import type { ProposalSnapshot, SnapshotOption } from '@layerbook/contracts';
+import type { ProposalSnapshot, SnapshotOption } from '@layerbook/contracts/types';
 import { formatDay, formatMoney } from '../../shared/format/money';
 
 /** The proposal as sent, drawn only from its frozen snapshot: what the PDF says, on the page. */

@@ -1,13 +1,13 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { PROPOSAL_CLIENT_STATUS_LABELS, type ItemList, type PortalProposalSummary } from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
-import type { PortalProposalSummary } from '@layerbook/contracts';
-import { RouterLink } from '@angular/router';
 import { formatDay } from '../../shared/format/money';
-import { ProposalApi } from './proposal-api';
-import { PROPOSAL_STATUS_WORDS } from './status-words';
+import { PROPOSALS_URL } from './proposal-api';
 
 @Component({
   selector: 'lb-proposal-list',
@@ -72,29 +72,18 @@ import { PROPOSAL_STATUS_WORDS } from './status-words';
 })
 /** The client's proposals, one per estimate ("your projects" to the client). */
 export class ProposalList {
-  private readonly api = inject(ProposalApi);
+  private readonly list = httpResource<ItemList<PortalProposalSummary>>(() => PROPOSALS_URL);
 
   protected readonly client = inject(Session).client;
-  protected readonly projects = signal<readonly PortalProposalSummary[]>([]);
-  protected readonly isLoading = signal(true);
-  protected readonly loadMessage = signal<string | null>(null);
-  protected readonly statusWords = PROPOSAL_STATUS_WORDS;
+  protected readonly projects = computed(() => (this.list.hasValue() ? this.list.value().items : []));
+  protected readonly isLoading = this.list.isLoading;
+  protected readonly loadMessage = computed(() => {
+    const error = this.list.error();
+    return error ? toProblem(error).title : null;
+  });
+  protected readonly statusWords = PROPOSAL_CLIENT_STATUS_LABELS;
 
   protected day(isoDay: string): string {
     return formatDay(isoDay, 'en-US');
-  }
-
-  constructor() {
-    void this.load();
-  }
-
-  private async load(): Promise<void> {
-    try {
-      this.projects.set(await this.api.list());
-    } catch (error) {
-      this.loadMessage.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
-    }
   }
 }

@@ -1,17 +1,17 @@
 import { DOCUMENT } from '@angular/common';
-import { ChangeDetectionStrategy, Component, RESPONSE_INIT, computed, effect, inject, input, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, RESPONSE_INIT, computed, effect, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
-import type { PortalProposal } from '@layerbook/contracts';
-import { toProblem } from '../../core/errors/problem';
+import { PROPOSAL_CLIENT_STATUS_LABELS, type PortalProposal } from '@layerbook/contracts/types';
+import { problemMessage, toProblem } from '../../core/errors/problem';
 import { formatDay, formatMoment } from '../../shared/format/money';
 import { AcceptanceForm } from './acceptance-form';
 import { AnswerForms } from './answer-forms';
-import { ProposalApi } from './proposal-api';
+import { ProposalApi, proposalUrl } from './proposal-api';
 import { ProposalDocument } from './proposal-document';
-import { PROPOSAL_STATUS_WORDS } from './status-words';
 
 /** One proposal version for the signed-in client: read it, then accept, ask for changes or decline. */
 @Component({
@@ -36,10 +36,21 @@ export class ProposalPage {
   /** route parameter */
   readonly id = input.required<string>();
 
-  protected readonly proposal = signal<PortalProposal | null>(null);
-  protected readonly isLoading = signal(true);
-  protected readonly loadMessage = signal<string | null>(null);
-  protected readonly statusWords = PROPOSAL_STATUS_WORDS;
+  private readonly loaded = httpResource<PortalProposal>(() => proposalUrl(this.id()));
+
+  protected readonly proposal = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
+  protected readonly isLoading = this.loaded.isLoading;
+  /** 404 and a malformed id read the same: the link is wrong, or the proposal is not theirs. */
+  private readonly isMissing = computed(() => {
+    const error = this.loaded.error();
+    return error !== undefined && [400, 404].includes(toProblem(error).status);
+  });
+  protected readonly loadMessage = computed(() => {
+    const error = this.loaded.error();
+    if (!error) return null;
+    return this.isMissing() ? 'We could not find this proposal. Open it from your projects or from the e-mail the firm sent.' : problemMessage(error);
+  });
+  protected readonly statusWords = PROPOSAL_CLIENT_STATUS_LABELS;
 
   /** Open for an answer: sent, the newest version, and not past its expiry day. */
   protected readonly isOpen = computed(() => {
@@ -49,7 +60,14 @@ export class ProposalPage {
   protected readonly pdfUrl = computed(() => this.api.pdfUrl(this.id()));
 
   constructor() {
-    effect(() => void this.load(this.id()));
+    effect(() => {
+      const p = this.proposal();
+      if (p) this.title.setTitle(`${p.snapshot.title} · Layerbook client portal`);
+    });
+    // Tells crawlers and the host's logs the truth while rendering on the server.
+    effect(() => {
+      if (this.isMissing() && this.response) this.response.status = 404;
+    });
   }
 
   protected day(isoDay: string): string {
@@ -66,27 +84,7 @@ export class ProposalPage {
 
   /** After an answer the forms go away; bring the reader back to the message at the top. */
   protected show(answer: PortalProposal): void {
-    this.proposal.set(answer);
+    this.loaded.set(answer);
     this.document.querySelector('h1')?.scrollIntoView();
-  }
-
-  private async load(id: string): Promise<void> {
-    this.isLoading.set(true);
-    this.loadMessage.set(null);
-    try {
-      const p = await this.api.get(id);
-      this.proposal.set(p);
-      this.title.setTitle(`${p.snapshot.title} · Layerbook client portal`);
-    } catch (error) {
-      const problem = toProblem(error);
-      if (problem.status === 404 || problem.status === 400) {
-        if (this.response) this.response.status = 404;
-        this.loadMessage.set('We could not find this proposal. Open it from your projects or from the e-mail the firm sent.');
-      } else {
-        this.loadMessage.set(problem.detail ?? problem.title);
-      }
-    } finally {
-      this.isLoading.set(false);
-    }
   }
 }

@@ -1,28 +1,22 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
+import type { ClientBoardView, SampleChangeRequest } from '@layerbook/contracts/types';
 import { firstValueFrom } from 'rxjs';
-import type { ClientBoard } from './client-board';
 
-const id = (value: string) => encodeURIComponent(value);
+/** The signed-in client's boards (GET, `{ items }`) and one of them, for the pages' httpResource reads. */
+export const BOARDS_URL = '/api/portal/boards';
+export const boardUrl = (boardId: string) => `${BOARDS_URL}/${encodeURIComponent(boardId)}`;
 
-/** The signed-in client's sample boards: list, read, approve, ask for changes. */
+/** The client's one answer per board: approve it, or ask for changes. */
 @Injectable({ providedIn: 'root' })
 export class BoardApi {
   private readonly http = inject(HttpClient);
 
-  async list(): Promise<readonly ClientBoard[]> {
-    return (await firstValueFrom(this.http.get<{ boards: ClientBoard[] }>('/api/portal/boards'))).boards;
+  approve(boardId: string): Promise<ClientBoardView> {
+    return firstValueFrom(this.http.post<ClientBoardView>(`${boardUrl(boardId)}/approve`, {}));
   }
 
-  get(boardId: string): Promise<ClientBoard> {
-    return firstValueFrom(this.http.get<ClientBoard>(`/api/portal/boards/${id(boardId)}`));
-  }
-
-  approve(boardId: string): Promise<ClientBoard> {
-    return firstValueFrom(this.http.post<ClientBoard>(`/api/portal/boards/${id(boardId)}/approve`, {}));
-  }
-
-  requestChanges(boardId: string, comment: string): Promise<ClientBoard> {
-    return firstValueFrom(this.http.post<ClientBoard>(`/api/portal/boards/${id(boardId)}/request-changes`, { comment }));
+  requestChanges(boardId: string, body: SampleChangeRequest): Promise<ClientBoardView> {
+    return firstValueFrom(this.http.post<ClientBoardView>(`${boardUrl(boardId)}/request-changes`, body));
   }
 }

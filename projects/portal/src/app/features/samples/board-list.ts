@@ -1,10 +1,12 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { toProblem } from '../../core/errors/problem';
-import { BoardApi } from './board-api';
-import { BOARD_STATUS_WORDS, type ClientBoard } from './client-board';
+import type { ClientBoardView, ItemList } from '@layerbook/contracts/types';
+import { problemMessage } from '../../core/errors/problem';
+import { BOARDS_URL } from './board-api';
+import { BOARD_STATUS_WORDS } from './board-words';
 
 /** The boards the firm has shown this client, each with its first photo and where it stands. */
 @Component({
@@ -59,25 +61,13 @@ import { BOARD_STATUS_WORDS, type ClientBoard } from './client-board';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class BoardList {
-  private readonly api = inject(BoardApi);
+  private readonly list = httpResource<ItemList<ClientBoardView>>(() => BOARDS_URL);
 
   protected readonly words = BOARD_STATUS_WORDS;
-  protected readonly boards = signal<readonly ClientBoard[]>([]);
-  protected readonly isLoading = signal(true);
-  protected readonly message = signal<string | null>(null);
-
-  constructor() {
-    void this.load();
-  }
-
-  private async load(): Promise<void> {
-    try {
-      this.boards.set(await this.api.list());
-    } catch (error) {
-      const problem = toProblem(error);
-      this.message.set(problem.detail ?? problem.title);
-    } finally {
-      this.isLoading.set(false);
-    }
-  }
+  protected readonly boards = computed(() => (this.list.hasValue() ? this.list.value().items : []));
+  protected readonly isLoading = this.list.isLoading;
+  protected readonly message = computed(() => {
+    const error = this.list.error();
+    return error ? problemMessage(error) : null;
+  });
 }

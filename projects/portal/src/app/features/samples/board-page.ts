@@ -1,5 +1,6 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { AbstractControl, FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -8,9 +9,11 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
-import { toProblem } from '../../core/errors/problem';
-import { BoardApi } from './board-api';
-import { BOARD_STATUS_WORDS, type ClientBoard } from './client-board';
+import { SAMPLE_COMMENT_MAX, type ClientBoardView } from '@layerbook/contracts/types';
+import { PhotoGallery } from '../../../../../shared/photos/photo-gallery';
+import { problemMessage, toProblem } from '../../core/errors/problem';
+import { BoardApi, boardUrl } from './board-api';
+import { BOARD_STATUS_WORDS } from './board-words';
 
 /** Spaces alone are not a request; the server trims before it checks. */
 const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' && c.value.trim() ? null : { required: true });
@@ -18,7 +21,7 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
 /** One sample board: its photos and finish in plain words, then approve it or ask for changes (once). */
 @Component({
   selector: 'lb-board-page',
-  imports: [DatePipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, ReactiveFormsModule, RouterLink],
+  imports: [DatePipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoGallery, ReactiveFormsModule, RouterLink],
   template: `
     <section class="lb-page">
       <p><a routerLink="/boards">All your sample boards</a></p>
@@ -46,23 +49,7 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
           }
         }
 
-        <section aria-labelledby="photos-heading">
-          <h2 id="photos-heading">Photos</h2>
-          @if (b.photos.length > 0) {
-            <ul class="photos" aria-label="Photos of the board">
-              @for (p of b.photos; track p.id; let i = $index) {
-                <li>
-                  <img [src]="p.thumbnailUrl" [alt]="p.caption || 'Photo ' + (i + 1) + ' of ' + b.label" width="240" [height]="p.width && p.height ? round((240 * p.height) / p.width) : 180" loading="lazy" decoding="async" />
-                  @if (p.caption) {
-                    <span>{{ p.caption }}</span>
-                  }
-                </li>
-              }
-            </ul>
-          } @else {
-            <p>No photos yet.</p>
-          }
-        </section>
+        <lb-photo-gallery [subject]="b.label" [photos]="b.photos" [readOnly]="true" [thumbHeight]="180" />
 
         <section aria-labelledby="finish-heading">
           <h2 id="finish-heading">The finish</h2>
@@ -102,7 +89,7 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
               <form (ngSubmit)="requestChanges(b)" novalidate>
                 <mat-form-field class="wide">
                   <mat-label>What would you like changed?</mat-label>
-                  <textarea matInput [formControl]="comment" rows="4" maxlength="2000"></textarea>
+                  <textarea matInput [formControl]="comment" rows="4" [maxlength]="commentMax"></textarea>
                   <mat-hint>For example: a little darker, less shine, softer movement</mat-hint>
                   @if (comment.invalid) {
                     <mat-error>{{ commentError() }}</mat-error>
@@ -119,7 +106,7 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
       } @else if (isLoading()) {
         <mat-progress-bar mode="indeterminate" aria-label="Loading the sample board" />
       } @else {
-        <p role="alert">{{ message() }}</p>
+        <p role="alert">{{ loadMessage() }}</p>
       }
     </section>
   `,
@@ -128,9 +115,6 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
     .status, .decided p:first-child { display: flex; gap: 0.4rem; align-items: center; }
     .decided { padding: 1rem 1.25rem; border-radius: 12px; border: 1px solid var(--mat-sys-outline-variant); background: var(--mat-sys-surface-container-low); }
     .comment { white-space: pre-line; }
-    .photos { list-style: none; padding: 0; display: flex; flex-wrap: wrap; gap: 0.75rem; }
-    .photos li { display: grid; gap: 0.25rem; }
-    .photos img { border-radius: 8px; object-fit: cover; max-width: 100%; height: auto; }
     .answer { margin: 2rem 0 0; padding: 1.25rem; border-radius: 12px; border: 1px solid var(--mat-sys-outline-variant); background: var(--mat-sys-surface-container-low); }
     .buttons, .confirm { display: flex; flex-wrap: wrap; gap: 0.75rem; align-items: center; }
     .confirm p { flex-basis: 100%; margin: 0; }
@@ -147,42 +131,53 @@ export class BoardPage {
   /** route parameter */
   readonly id = input.required<string>();
 
+  private readonly loaded = httpResource<ClientBoardView>(() => boardUrl(this.id()));
+
   protected readonly words = BOARD_STATUS_WORDS;
-  protected readonly board = signal<ClientBoard | null>(null);
-  protected readonly isLoading = signal(true);
+  protected readonly board = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
+  protected readonly isLoading = this.loaded.isLoading;
+  protected readonly loadMessage = computed(() => {
+    const error = this.loaded.error();
+    if (!error) return null;
+    return toProblem(error).status === 404 ? 'This sample board is not here. It may not have been shown to you yet.' : problemMessage(error);
+  });
   protected readonly isBusy = signal(false);
   protected readonly isConfirming = signal(false);
   protected readonly isAsking = signal(false);
+  /** what went wrong with the answer, said above the buttons */
   protected readonly message = signal<string | null>(null);
-  protected readonly comment = new FormControl('', { nonNullable: true, validators: [notBlank, Validators.maxLength(2000)] });
-  protected readonly round = Math.round;
+  protected readonly commentMax = SAMPLE_COMMENT_MAX;
+  protected readonly comment = new FormControl('', { nonNullable: true, validators: [notBlank, Validators.maxLength(SAMPLE_COMMENT_MAX)] });
 
   constructor() {
-    effect(() => void this.load(this.id()));
+    effect(() => {
+      const b = this.board();
+      if (b) this.title.setTitle(`${b.label} · Layerbook client portal`);
+    });
   }
 
   protected commentError(): string {
     const errors = this.comment.errors ?? {};
     if (typeof errors['server'] === 'string') return errors['server'];
-    if (errors['maxlength']) return 'Please keep it under 2000 characters.';
+    if (errors['maxlength']) return `Please keep it under ${SAMPLE_COMMENT_MAX} characters.`;
     return 'Tell us what you would like changed.';
   }
 
-  protected async approve(b: ClientBoard): Promise<void> {
+  protected async approve(b: ClientBoardView): Promise<void> {
     await this.answer(() => this.api.approve(b.id));
   }
 
-  protected async requestChanges(b: ClientBoard): Promise<void> {
+  protected async requestChanges(b: ClientBoardView): Promise<void> {
     this.comment.markAsTouched();
     if (this.comment.invalid) return;
-    await this.answer(() => this.api.requestChanges(b.id, this.comment.value.trim()));
+    await this.answer(() => this.api.requestChanges(b.id, { comment: this.comment.value.trim() }));
   }
 
-  private async answer(call: () => Promise<ClientBoard>): Promise<void> {
+  private async answer(call: () => Promise<ClientBoardView>): Promise<void> {
     this.isBusy.set(true);
     this.message.set(null);
     try {
-      this.board.set(await call());
+      this.loaded.set(await call());
       this.isConfirming.set(false);
       this.isAsking.set(false);
     } catch (error) {
@@ -193,26 +188,10 @@ export class BoardPage {
       } else {
         this.message.set(problem.detail ?? problem.title);
         // Already answered (perhaps in another tab): show the board as it now stands.
-        if (problem.status === 409) void this.load(this.id(), true);
+        if (problem.status === 409) this.loaded.reload();
       }
     } finally {
       this.isBusy.set(false);
-    }
-  }
-
-  private async load(id: string, keepMessage = false): Promise<void> {
-    this.isLoading.set(true);
-    if (!keepMessage) this.message.set(null);
-    try {
-      const b = await this.api.get(id);
-      this.board.set(b);
-      this.title.setTitle(`${b.label} · Layerbook client portal`);
-    } catch (error) {
-      const problem = toProblem(error);
-      this.board.set(null);
-      this.message.set(problem.status === 404 ? 'This sample board is not here. It may not have been shown to you yet.' : problem.detail ?? problem.title);
-    } finally {
-      this.isLoading.set(false);
     }
   }
 }
