@@ -146,3 +146,5 @@ export type { DescribedLayer } from './samples/finish-steps';
 export { clientFinishSteps, crewLayerNote } from './samples/finish-steps';
 export type { SiteParts } from './samples/site-line';
 export { siteLine } from './samples/site-line';
+export type { OverheadProfitEquivalents } from './pricing/overhead-profit-equivalents';
+export { overheadProfitEquivalents } from './pricing/overhead-profit-equivalents';

@@ -4,16 +4,16 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
-import { HOME_URL } from '../../core/auth/guards';
-import { applyProblem } from '../../core/errors/apply-problem';
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, isWellFormedLinkToken } from '@layerbook/contracts/types';
 import { toProblem } from '../../core/errors/problem';
+import { HOME_URL } from '../../core/auth/guards';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { Submission } from '../../shared/forms/submission';
 import { errorText } from '../../shared/forms/error-text';
 import { NEW_PASSWORD_WORDS } from '../../shared/forms/field-words';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { RevealPassword } from '../../shared/ui/reveal-password';
 import { AuthFrame } from './auth-frame';
-import { isWellFormedToken } from './link-token';
 import { StaffAuth } from './staff-auth';
 
 @Component({
@@ -38,12 +38,11 @@ export class ResetPassword {
   /** The one-time code from the e-mailed link (query parameter). */
   readonly token = input<string>();
 
-  protected readonly hasToken = computed(() => isWellFormedToken(this.token()));
+  protected readonly hasToken = computed(() => isWellFormedLinkToken(this.token()));
   protected readonly form = inject(NonNullableFormBuilder).group({
-    password: ['', [Validators.required, Validators.minLength(8), Validators.maxLength(128)]],
+    password: ['', [Validators.required, Validators.minLength(PASSWORD_MIN_LENGTH), Validators.maxLength(PASSWORD_MAX_LENGTH)]],
   });
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   /** Expired, used or unknown links cannot be fixed on this page; offer a new one instead. */
   protected readonly isLinkDead = signal(false);
   protected readonly errorText = errorText;
@@ -52,21 +51,19 @@ export class ResetPassword {
 
   protected async saveNewPassword(): Promise<void> {
     const token = this.token();
-    this.formMessage.set(null);
-    if (this.form.invalid || !isWellFormedToken(token)) {
+    if (!isWellFormedLinkToken(token)) {
       this.form.markAllAsTouched();
       return;
     }
-    this.isBusy.set(true);
-    try {
-      await this.auth.completePasswordReset({ token, password: this.form.getRawValue().password });
+    await this.submission.send(this.form, async () => {
+      try {
+        await this.auth.completePasswordReset({ token, password: this.form.getRawValue().password });
+      } catch (error) {
+        const status = toProblem(error).status;
+        this.isLinkDead.set(status === 404 || status === 410);
+        throw error;
+      }
       await this.router.navigateByUrl(HOME_URL);
-    } catch (error) {
-      const problem = toProblem(error);
-      this.isLinkDead.set(problem.status === 404 || problem.status === 410);
-      this.formMessage.set(applyProblem(this.form, problem));
-    } finally {
-      this.isBusy.set(false);
-    }
+    });
   }
 }

@@ -1,13 +1,13 @@
-import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, input } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
+import { EMAIL_MAX_LENGTH, PASSWORD_MAX_LENGTH } from '@layerbook/contracts/types';
 import { safeNextUrl } from '../../core/auth/guards';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { Submission } from '../../shared/forms/submission';
 import { errorText } from '../../shared/forms/error-text';
 import { EMAIL_WORDS } from '../../shared/forms/field-words';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -39,33 +39,23 @@ export class SignIn {
   readonly next = input<string>();
 
   protected readonly form = inject(NonNullableFormBuilder).group({
-    email: ['', [requiredText, Validators.email, Validators.maxLength(254)]],
-    password: ['', [Validators.required, Validators.maxLength(128)]],
+    email: ['', [requiredText, Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
+    password: ['', [Validators.required, Validators.maxLength(PASSWORD_MAX_LENGTH)]],
   });
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
   protected readonly words = {
     email: EMAIL_WORDS,
-    password: { required: 'Enter your password.', maxlength: 'Use at most 128 characters.' },
+    password: { required: 'Enter your password.', maxlength: `Use at most ${PASSWORD_MAX_LENGTH} characters.` },
   };
 
   protected async signIn(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const { email, password } = this.form.getRawValue();
+    const { email, password } = this.form.getRawValue();
+    // Busy until the next page is open, so a second click cannot send it twice.
+    await this.submission.send(this.form, async () => {
       await this.auth.signIn({ email: email.trim(), password });
       await this.router.navigateByUrl(safeNextUrl(this.next()));
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
-    }
+    });
   }
 }

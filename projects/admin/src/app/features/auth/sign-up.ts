@@ -1,13 +1,20 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
+import {
+  EMAIL_MAX_LENGTH,
+  FIRM_NAME_MAX_LENGTH,
+  FIRM_NAME_MIN_LENGTH,
+  PASSWORD_MAX_LENGTH,
+  PASSWORD_MIN_LENGTH,
+  PERSON_NAME_MAX_LENGTH,
+} from '@layerbook/contracts/types';
 import { HOME_URL } from '../../core/auth/guards';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { Submission } from '../../shared/forms/submission';
 import { errorText } from '../../shared/forms/error-text';
 import { EMAIL_WORDS, NAME_WORDS, NEW_PASSWORD_WORDS } from '../../shared/forms/field-words';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -36,20 +43,19 @@ export class SignUp {
   private readonly router = inject(Router);
 
   protected readonly form = inject(NonNullableFormBuilder).group({
-    firmName: ['', [requiredText, Validators.minLength(2), Validators.maxLength(120)]],
-    name: ['', [requiredText, Validators.maxLength(120)]],
-    email: ['', [requiredText, Validators.email, Validators.maxLength(254)]],
-    password: ['', [Validators.required, Validators.minLength(8), Validators.maxLength(128)]],
+    firmName: ['', [requiredText, Validators.minLength(FIRM_NAME_MIN_LENGTH), Validators.maxLength(FIRM_NAME_MAX_LENGTH)]],
+    name: ['', [requiredText, Validators.maxLength(PERSON_NAME_MAX_LENGTH)]],
+    email: ['', [requiredText, Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
+    password: ['', [Validators.required, Validators.minLength(PASSWORD_MIN_LENGTH), Validators.maxLength(PASSWORD_MAX_LENGTH)]],
   });
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
   protected readonly words = {
     firmName: {
       required: 'Enter the firm name.',
       minlength: 'Enter the firm name.',
-      maxlength: 'Use at most 120 characters.',
+      maxlength: `Use at most ${FIRM_NAME_MAX_LENGTH} characters.`,
     },
     name: NAME_WORDS,
     email: EMAIL_WORDS,
@@ -57,20 +63,11 @@ export class SignUp {
   };
 
   protected async createFirm(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const { firmName, name, email, password } = this.form.getRawValue();
+    const { firmName, name, email, password } = this.form.getRawValue();
+    // Busy until the next page is open, so a second click cannot send it twice.
+    await this.submission.send(this.form, async () => {
       await this.auth.signUp({ firmName: firmName.trim(), name: name.trim(), email: email.trim(), password });
       await this.router.navigateByUrl(HOME_URL);
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
-    }
+    });
   }
 }

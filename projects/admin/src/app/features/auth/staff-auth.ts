@@ -9,7 +9,7 @@ import type {
   SignInRequest,
   SignUpRequest,
   StaffSession,
-} from '@layerbook/contracts';
+} from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
 
 /** The staff sign-in calls. Each one that signs someone in hands the new session to `Session`. */

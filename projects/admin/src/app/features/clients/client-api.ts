@@ -1,64 +1,43 @@
-import { HttpClient, HttpParams } from '@angular/common/http';
+import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
-import { Observable, firstValueFrom } from 'rxjs';
+import { firstValueFrom } from 'rxjs';
 import type {
   ClientCreate,
-  ClientDetail,
-  ClientKind,
   ClientSummary,
+  ClientUpdate,
   ContactCreate,
   ContactView,
-  Page,
   SiteCreate,
+  SiteUpdate,
   SiteView,
-} from '@layerbook/contracts';
+} from '@layerbook/contracts/types';
 
-export interface ClientFilters {
-  readonly q: string;
-  readonly kind: ClientKind | null;
-}
-
+/** The client and site changes; reads are resources in the pages that show them. */
 @Injectable({ providedIn: 'root' })
 export class ClientApi {
   private readonly http = inject(HttpClient);
-
-  list(filters: ClientFilters, after: string | null = null): Observable<Page<ClientSummary>> {
-    let params = new HttpParams().set('limit', 50);
-    if (filters.q.trim()) {
-      params = params.set('q', filters.q.trim());
-    }
-    if (filters.kind) {
-      params = params.set('kind', filters.kind);
-    }
-    if (after) {
-      params = params.set('after', after);
-    }
-    return this.http.get<Page<ClientSummary>>('/api/clients', { params });
-  }
-
-  get(id: string): Promise<ClientDetail> {
-    return firstValueFrom(this.http.get<ClientDetail>(`/api/clients/${encodeURIComponent(id)}`));
-  }
 
   create(body: ClientCreate): Promise<ClientSummary> {
     return firstValueFrom(this.http.post<ClientSummary>('/api/clients', body));
   }
 
-  update(id: string, body: Partial<ClientCreate>): Promise<ClientSummary> {
-    return firstValueFrom(this.http.patch<ClientSummary>(`/api/clients/${encodeURIComponent(id)}`, body));
+  update(id: string, body: ClientUpdate): Promise<ClientSummary> {
+    return firstValueFrom(this.http.patch<ClientSummary>(clientUrl(id), body));
   }
 
   addContact(clientId: string, body: ContactCreate): Promise<ContactView> {
-    return firstValueFrom(
-      this.http.post<ContactView>(`/api/clients/${encodeURIComponent(clientId)}/contacts`, body),
-    );
+    return firstValueFrom(this.http.post<ContactView>(`${clientUrl(clientId)}/contacts`, body));
   }
 
   addSite(clientId: string, body: SiteCreate): Promise<SiteView> {
-    return firstValueFrom(this.http.post<SiteView>(`/api/clients/${encodeURIComponent(clientId)}/sites`, body));
+    return firstValueFrom(this.http.post<SiteView>(`${clientUrl(clientId)}/sites`, body));
   }
 
-  updateSite(siteId: string, body: Partial<SiteCreate>): Promise<SiteView> {
+  updateSite(siteId: string, body: SiteUpdate): Promise<SiteView> {
     return firstValueFrom(this.http.patch<SiteView>(`/api/sites/${encodeURIComponent(siteId)}`, body));
   }
+}
+
+export function clientUrl(id: string): string {
+  return `/api/clients/${encodeURIComponent(id)}`;
 }

@@ -1,17 +1,16 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, OnInit, inject, input, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
-import type { ClientDetail } from '@layerbook/contracts';
-import { toProblem } from '../../core/errors/problem';
+import { CLIENT_KIND_LABELS, STAGE_LABELS, type ClientDetail } from '@layerbook/contracts/types';
+import { loadMessage } from '../../shared/forms/load-message';
 import { LeadSafetyNote } from '../../shared/ui/lead-safety-note';
-import { STAGE_LABELS, isStage } from '../../shared/ui/stage-words';
-import { ClientApi } from './client-api';
+import { clientUrl } from './client-api';
 import { ClientForm } from './client-form';
-import { CLIENT_KIND_LABELS } from './client-words';
 import { ContactForm } from './contact-form';
 import { SiteForm } from './site-form';
 
@@ -35,42 +34,25 @@ type SiteEditing = 'new' | string | null;
   styleUrl: './client-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class ClientDetailPage implements OnInit {
-  private readonly api = inject(ClientApi);
+export class ClientDetailPage {
   private readonly snackBar = inject(MatSnackBar);
 
   /** From the route (withComponentInputBinding). */
   readonly id = input.required<string>();
 
-  protected readonly client = signal<ClientDetail | null>(null);
-  protected readonly isLoading = signal(true);
-  protected readonly loadMessage = signal<string | null>(null);
+  protected readonly detail = httpResource<ClientDetail>(() => clientUrl(this.id()));
+  protected readonly client = computed(() => (this.detail.hasValue() ? this.detail.value() : null));
+  protected readonly loadMessage = loadMessage(this.detail);
   protected readonly isEditing = signal(false);
   protected readonly siteEditing = signal<SiteEditing>(null);
   protected readonly kindLabels = CLIENT_KIND_LABELS;
+  protected readonly stageLabels = STAGE_LABELS;
 
-  ngOnInit(): void {
-    void this.reload();
-  }
-
-  protected stageLabel(stage: string): string {
-    return isStage(stage) ? STAGE_LABELS[stage] : stage;
-  }
-
-  protected async afterSave(what: string): Promise<void> {
+  /** Each form answers with its own part only, so the page reads the whole client again. */
+  protected afterSave(what: string): void {
     this.isEditing.set(false);
     this.siteEditing.set(null);
     this.snackBar.open(what, 'Close', { duration: 4000 });
-    await this.reload();
-  }
-
-  private async reload(): Promise<void> {
-    try {
-      this.client.set(await this.api.get(this.id()));
-    } catch (error) {
-      this.loadMessage.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
-    }
+    this.detail.reload();
   }
 }

@@ -1,20 +1,28 @@
-import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import type { ClientCreate, ClientDetail, ClientKind, ClientSummary } from '@layerbook/contracts';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
+import {
+  CLIENT_KINDS,
+  CLIENT_KIND_LABELS,
+  CLIENT_LIMITS as L,
+  EMAIL_MAX_LENGTH,
+  PHONE_MAX_LENGTH,
+  type ClientCreate,
+  type ClientDetail,
+  type ClientKind,
+  type ClientSummary,
+} from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
-import { EMAIL_WORDS } from '../../shared/forms/field-words';
+import { EMAIL_WORDS, tooLong } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ClientApi } from './client-api';
-import { CLIENT_KINDS, CLIENT_KIND_LABELS } from './client-words';
 
 /** Adds a client, or edits one when given it. */
 @Component({
@@ -31,7 +39,7 @@ import { CLIENT_KINDS, CLIENT_KIND_LABELS } from './client-words';
   template: `
     <form [formGroup]="form" (ngSubmit)="saveClient()" novalidate [attr.aria-label]="isNew() ? 'New client' : 'Edit client'">
       <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
-        <lb-form-alert [message]="formMessage()" />
+        <lb-form-alert [message]="submission.message()" />
         <mat-form-field class="wide">
           <mat-label>Client name</mat-label>
           <input matInput formControlName="name" autocomplete="off" required />
@@ -56,16 +64,16 @@ import { CLIENT_KINDS, CLIENT_KIND_LABELS } from './client-words';
         <mat-form-field>
           <mat-label>Phone</mat-label>
           <input matInput type="tel" formControlName="phone" autocomplete="off" />
-          <mat-error>{{ errorText(form.controls.phone, words.line) }}</mat-error>
+          <mat-error>{{ errorText(form.controls.phone, words.phone) }}</mat-error>
         </mat-form-field>
         <mat-form-field class="wide">
           <mat-label>Notes</mat-label>
           <textarea matInput formControlName="notes" rows="3"></textarea>
           <mat-hint>Gate codes go with the site; this is for the client: how they like to be reached, pets…</mat-hint>
-          <mat-error>{{ errorText(form.controls.notes, words.line) }}</mat-error>
+          <mat-error>{{ errorText(form.controls.notes, words.notes) }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions wide">
-          <button mat-flat-button type="submit" [disabled]="isBusy()">{{ isNew() ? 'Add client' : 'Save client' }}</button>
+          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">{{ isNew() ? 'Add client' : 'Save client' }}</button>
           <button mat-button type="button" (click)="cancelled.emit()">Cancel</button>
         </div>
       </fieldset>
@@ -97,23 +105,23 @@ export class ClientForm implements OnInit {
   protected readonly kinds = CLIENT_KINDS;
   protected readonly kindLabels = CLIENT_KIND_LABELS;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly words = {
-    name: { required: 'Enter the client name.', maxlength: 'Use at most 160 characters.' },
+    name: { required: 'Enter the client name.', ...tooLong(L.name) },
     kind: { required: 'Choose homeowner, designer, general contractor or other.' },
     email: EMAIL_WORDS,
-    line: { maxlength: 'That is too long for this field.' },
+    phone: tooLong(PHONE_MAX_LENGTH),
+    notes: tooLong(L.notes),
   };
 
   protected readonly form = this.fb.group({
-    name: ['', [requiredText, Validators.maxLength(160)]],
+    name: ['', [requiredText, Validators.maxLength(L.name)]],
     kind: this.fb.control<ClientKind>('homeowner', Validators.required),
     isCompany: [false],
-    email: ['', [Validators.email, Validators.maxLength(254)]],
-    phone: ['', Validators.maxLength(40)],
-    notes: ['', Validators.maxLength(5000)],
+    email: ['', [Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
+    phone: ['', Validators.maxLength(PHONE_MAX_LENGTH)],
+    notes: ['', Validators.maxLength(L.notes)],
   });
 
   ngOnInit(): void {
@@ -125,20 +133,12 @@ export class ClientForm implements OnInit {
   }
 
   protected async saveClient(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const body = this.toBody();
-      const current = this.client();
-      this.saved.emit(current ? await this.api.update(current.id, body) : await this.api.create(body));
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
+    const current = this.client();
+    const saved = await this.submission.send(this.form, () =>
+      current ? this.api.update(current.id, this.toBody()) : this.api.create(this.toBody()),
+    );
+    if (saved) {
+      this.saved.emit(saved);
     }
   }
 

@@ -1,14 +1,13 @@
-import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, input, output } from '@angular/core';
 import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import type { ContactView } from '@layerbook/contracts';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
+import { CLIENT_LIMITS as L, EMAIL_MAX_LENGTH, PHONE_MAX_LENGTH, type ContactView } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
-import { EMAIL_WORDS } from '../../shared/forms/field-words';
+import { EMAIL_WORDS, tooLong } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ClientApi } from './client-api';
@@ -20,7 +19,7 @@ import { ClientApi } from './client-api';
   template: `
     <form [formGroup]="form" #formDir="ngForm" (ngSubmit)="addContact(formDir)" novalidate aria-label="Add a contact">
       <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
-        <lb-form-alert [message]="formMessage()" />
+        <lb-form-alert [message]="submission.message()" />
         <mat-form-field>
           <mat-label>Contact name</mat-label>
           <input matInput formControlName="name" autocomplete="off" required />
@@ -30,7 +29,7 @@ import { ClientApi } from './client-api';
           <mat-label>Role or title</mat-label>
           <input matInput formControlName="roleTitle" autocomplete="off" />
           <mat-hint>Like "project designer" or "site super".</mat-hint>
-          <mat-error>{{ errorText(form.controls.roleTitle, words.line) }}</mat-error>
+          <mat-error>{{ errorText(form.controls.roleTitle, words.roleTitle) }}</mat-error>
         </mat-form-field>
         <mat-form-field>
           <mat-label>Contact e-mail</mat-label>
@@ -40,10 +39,10 @@ import { ClientApi } from './client-api';
         <mat-form-field>
           <mat-label>Contact phone</mat-label>
           <input matInput type="tel" formControlName="phone" autocomplete="off" />
-          <mat-error>{{ errorText(form.controls.phone, words.line) }}</mat-error>
+          <mat-error>{{ errorText(form.controls.phone, words.phone) }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions">
-          <button mat-stroked-button type="submit" [disabled]="isBusy()">Add contact</button>
+          <button mat-stroked-button type="submit" [disabled]="submission.isBusy()">Add contact</button>
         </div>
       </fieldset>
     </form>
@@ -69,43 +68,35 @@ export class ContactForm {
   readonly added = output<ContactView>();
 
   protected readonly form = inject(NonNullableFormBuilder).group({
-    name: ['', [requiredText, Validators.maxLength(120)]],
-    roleTitle: ['', Validators.maxLength(80)],
-    email: ['', [Validators.email, Validators.maxLength(254)]],
-    phone: ['', Validators.maxLength(40)],
+    name: ['', [requiredText, Validators.maxLength(L.contactName)]],
+    roleTitle: ['', Validators.maxLength(L.roleTitle)],
+    email: ['', [Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
+    phone: ['', Validators.maxLength(PHONE_MAX_LENGTH)],
   });
   protected readonly isHydrated = hydratedSignal();
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly words = {
-    name: { required: 'Enter the contact name.', maxlength: 'Use at most 120 characters.' },
+    name: { required: 'Enter the contact name.', ...tooLong(L.contactName) },
     email: EMAIL_WORDS,
-    line: { maxlength: 'That is too long for this field.' },
+    roleTitle: tooLong(L.roleTitle),
+    phone: tooLong(PHONE_MAX_LENGTH),
   };
 
   protected async addContact(formDir: FormGroupDirective): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const v = this.form.getRawValue();
-      const contact = await this.api.addContact(this.clientId(), {
+    const v = this.form.getRawValue();
+    const contact = await this.submission.send(this.form, () =>
+      this.api.addContact(this.clientId(), {
         name: v.name.trim(),
         roleTitle: v.roleTitle.trim(),
         email: v.email.trim(),
         phone: v.phone.trim(),
-      });
+      }),
+    );
+    if (contact) {
       // resetForm also clears "submitted", so the emptied fields do not show as errors.
       formDir.resetForm();
       this.added.emit(contact);
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
     }
   }
 }

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import type { ClientSummary } from '@layerbook/contracts';
+import type { ClientSummary } from '@layerbook/contracts/types';
 import { ClientForm } from './client-form';
 
 @Component({

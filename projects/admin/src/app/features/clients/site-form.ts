@@ -1,19 +1,20 @@
-import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import type { SiteCreate, SiteView } from '@layerbook/contracts';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
+import { CLIENT_LIMITS as L, DEFAULT_COUNTRY, type SiteCreate, type SiteView } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
+import { tooLong } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
 import { YEAR_WORDS, toYear, yearText } from '../../shared/forms/year-input';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ClientApi } from './client-api';
 
-const TOO_LONG = { maxlength: 'That is too long for this field.' };
+/** Two letters, any case, spaces around allowed: the form sends it trimmed in capitals. */
+const TYPED_COUNTRY = /^\s*[A-Za-z]{2}\s*$/;
 
 /** A place where work happens; adds one to a client, or edits the one it is given. */
 @Component({
@@ -33,12 +34,16 @@ export class SiteForm implements OnInit {
 
   protected readonly isNew = computed(() => this.site() === null);
   protected readonly isHydrated = hydratedSignal();
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly words = {
-    street: { required: 'Enter the street address.', ...TOO_LONG },
-    line: TOO_LONG,
+    label: tooLong(L.siteLabel),
+    street: { required: 'Enter the street address.', ...tooLong(L.addressLine1) },
+    addressLine2: tooLong(L.addressLine2),
+    city: tooLong(L.city),
+    region: tooLong(L.region),
+    postalCode: tooLong(L.postalCode),
+    accessNotes: tooLong(L.accessNotes),
     year: YEAR_WORDS,
     country: {
       required: 'Enter a two-letter country code, like US.',
@@ -47,15 +52,15 @@ export class SiteForm implements OnInit {
   };
 
   protected readonly form = inject(NonNullableFormBuilder).group({
-    label: ['', Validators.maxLength(80)],
-    addressLine1: ['', [requiredText, Validators.maxLength(200)]],
-    addressLine2: ['', Validators.maxLength(200)],
-    city: ['', Validators.maxLength(80)],
-    region: ['', Validators.maxLength(80)],
-    postalCode: ['', Validators.maxLength(20)],
-    country: ['US', [Validators.required, Validators.pattern(/^\s*[A-Za-z]{2}\s*$/)]],
+    label: ['', Validators.maxLength(L.siteLabel)],
+    addressLine1: ['', [requiredText, Validators.maxLength(L.addressLine1)]],
+    addressLine2: ['', Validators.maxLength(L.addressLine2)],
+    city: ['', Validators.maxLength(L.city)],
+    region: ['', Validators.maxLength(L.region)],
+    postalCode: ['', Validators.maxLength(L.postalCode)],
+    country: [DEFAULT_COUNTRY, [Validators.required, Validators.pattern(TYPED_COUNTRY)]],
     yearBuilt: ['', yearText],
-    accessNotes: ['', Validators.maxLength(2000)],
+    accessNotes: ['', Validators.maxLength(L.accessNotes)],
   });
 
   ngOnInit(): void {
@@ -76,22 +81,13 @@ export class SiteForm implements OnInit {
   }
 
   protected async saveSite(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const current = this.site();
-      const body = this.toBody();
-      const saved = current ? await this.api.updateSite(current.id, body) : await this.api.addSite(this.clientId(), body);
+    const current = this.site();
+    const saved = await this.submission.send(this.form, () =>
+      current ? this.api.updateSite(current.id, this.toBody()) : this.api.addSite(this.clientId(), this.toBody()),
+    );
+    if (saved) {
       this.form.reset();
       this.saved.emit(saved);
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
     }
   }
 

@@ -1,60 +1,63 @@
 import { FormArray, FormControl, FormGroup, Validators } from '@angular/forms';
-import type { EstimatingSettings } from '@layerbook/contracts';
+import {
+  ESTIMATING_LIMITS as L,
+  ISO_WEEKDAYS,
+  MONEY_AMOUNT_PATTERN,
+  type EstimatingSettings,
+  type NumberRange,
+  type OverheadProfitMethod,
+  type RoundingKind,
+  type TaxMode,
+} from '@layerbook/contracts/types';
+import { overheadProfitEquivalents } from '@layerbook/domain';
+import { inRange } from '../../shared/forms/number-range';
 
-const num = (min: number, max: number, required = true) =>
-  new FormControl<number | null>(null, [...(required ? [Validators.required] : []), Validators.min(min), Validators.max(max)]);
+const num = (range: NumberRange) => new FormControl<number | null>(null, [Validators.required, ...inRange(range)]);
 const money = (required = true) =>
-  new FormControl<string>('', { nonNullable: true, validators: [...(required ? [Validators.required] : []), Validators.pattern(/^\d{1,12}(\.\d{1,2})?$/)] });
-
-export const WEEKDAYS = [
-  { value: 1, label: 'Mon' },
-  { value: 2, label: 'Tue' },
-  { value: 3, label: 'Wed' },
-  { value: 4, label: 'Thu' },
-  { value: 5, label: 'Fri' },
-  { value: 6, label: 'Sat' },
-  { value: 7, label: 'Sun' },
-] as const;
+  new FormControl<string>('', {
+    nonNullable: true,
+    validators: [...(required ? [Validators.required] : []), Validators.pattern(MONEY_AMOUNT_PATTERN)],
+  });
 
 /** The estimating settings as a typed form; nested group names match the API's field paths. */
 export function estimatingForm() {
   return new FormGroup({
     labourRate: money(),
-    materialsMarkupPercent: num(0, 500),
+    materialsMarkupPercent: num(L.materialsMarkupPercent),
     overheadProfit: new FormGroup({
-      method: new FormControl<'margin' | 'markup'>('margin', { nonNullable: true }),
-      overheadPercent: num(0, 100),
-      profitPercent: num(0, 100),
+      method: new FormControl<OverheadProfitMethod>('margin', { nonNullable: true }),
+      overheadPercent: num(L.overheadPercent),
+      profitPercent: num(L.profitPercent),
     }),
     minimumCharge: money(false),
     tax: new FormGroup({
-      mode: new FormControl<'none' | 'materials' | 'wholeJob'>('none', { nonNullable: true }),
-      ratePercent: num(0, 50),
+      mode: new FormControl<TaxMode>('none', { nonNullable: true }),
+      ratePercent: num(L.taxRatePercent),
     }),
     rounding: new FormGroup({
-      kind: new FormControl<'minorUnit' | 'nearest'>('minorUnit', { nonNullable: true }),
+      kind: new FormControl<RoundingKind>('minorUnit', { nonNullable: true }),
       increment: money(false),
     }),
     calendar: new FormGroup({
-      workingWeekdays: new FormArray(WEEKDAYS.map(() => new FormControl<boolean>(false, { nonNullable: true }))),
-      dayStartHour: num(0, 23),
-      productiveHoursPerDay: num(0.5, 16),
+      workingWeekdays: new FormArray(ISO_WEEKDAYS.map(() => new FormControl<boolean>(false, { nonNullable: true }))),
+      dayStartHour: num(L.dayStartHour),
+      productiveHoursPerDay: num(L.productiveHoursPerDay),
       holidays: new FormControl<string>('', { nonNullable: true }),
-      minimumBlockHours: num(0, 16),
+      minimumBlockHours: num(L.minimumBlockHours),
     }),
-    crewSize: num(1, 30),
-    setupHours: num(0, 200),
-    cleanupHours: num(0, 200),
+    crewSize: num(L.crewSize),
+    setupHours: num(L.setupHours),
+    cleanupHours: num(L.cleanupHours),
     multipliers: new FormGroup({
-      ceiling: num(1, 3),
-      height: num(1, 3),
-      curvedWall: num(1, 3),
-      curvedCeiling: num(1, 3),
-      occupied: num(1, 3),
+      ceiling: num(L.multiplier),
+      height: num(L.multiplier),
+      curvedWall: num(L.multiplier),
+      curvedCeiling: num(L.multiplier),
+      occupied: num(L.multiplier),
     }),
-    scaffoldHeight: num(0.1, 200),
-    workingReach: num(0, 20),
-    minDeductedOpeningArea: num(0, 1000),
+    scaffoldHeight: num(L.scaffoldHeight),
+    workingReach: num(L.workingReach),
+    minDeductedOpeningArea: num(L.minDeductedOpeningArea),
   });
 }
 
@@ -67,7 +70,7 @@ export function fillForm(form: EstimatingFormGroup, s: EstimatingSettings): void
     rounding: { kind: s.rounding.kind, increment: s.rounding.kind === 'nearest' ? s.rounding.increment : '' },
     calendar: {
       ...s.calendar,
-      workingWeekdays: WEEKDAYS.map((d) => s.calendar.workingWeekdays.includes(d.value)),
+      workingWeekdays: ISO_WEEKDAYS.map((day) => s.calendar.workingWeekdays.includes(day)),
       holidays: s.calendar.holidays.join('\n'),
     },
   });
@@ -84,7 +87,7 @@ export function readForm(form: EstimatingFormGroup): EstimatingSettings {
     tax: { mode: v.tax.mode, ratePercent: n(v.tax.ratePercent) },
     rounding: v.rounding.kind === 'nearest' ? { kind: 'nearest', increment: v.rounding.increment.trim() } : { kind: 'minorUnit' },
     calendar: {
-      workingWeekdays: WEEKDAYS.filter((_, i) => v.calendar.workingWeekdays[i]).map((d) => d.value),
+      workingWeekdays: ISO_WEEKDAYS.filter((_, i) => v.calendar.workingWeekdays[i]),
       dayStartHour: n(v.calendar.dayStartHour),
       productiveHoursPerDay: n(v.calendar.productiveHoursPerDay),
       holidays: v.calendar.holidays.split(/[\s,]+/).filter(Boolean),
@@ -107,19 +110,25 @@ export function readForm(form: EstimatingFormGroup): EstimatingSettings {
 }
 
 /**
- * What the chosen method means for a price, in words (numbers only for display, not money):
- * margin: price = direct ÷ (1 − OH − P); markup: price = direct × (1 + OH) × (1 + P). DOMAIN.md §2.8.
+ * What the chosen method means for a price, in words: margin shows the markup on cost it comes
+ * to, markup the share of the price (packages/domain computes both).
  */
-export function methodInWords(method: 'margin' | 'markup', overheadPercent: number, profitPercent: number): string {
-  const oh = overheadPercent / 100;
-  const p = profitPercent / 100;
-  if (method === 'margin') {
-    const left = 1 - oh - p;
-    if (left <= 0) return 'Overhead and profit must leave part of the price for the work itself.';
-    const markup = (1 / left - 1) * 100;
-    return `Price = direct cost ÷ (1 − ${overheadPercent} % − ${profitPercent} %): ${markup.toFixed(1)} % on top of cost.`;
+export function methodInWords(method: OverheadProfitMethod, overheadPercent: number, profitPercent: number): string {
+  const overhead = overheadPercent / 100;
+  const profit = profitPercent / 100;
+  if (method === 'margin' && overhead + profit >= 1) {
+    return 'Overhead and profit must leave part of the price for the work itself.';
   }
-  const factor = (1 + oh) * (1 + p);
-  const margin = (1 - 1 / factor) * 100;
-  return `Price = direct cost × (1 + ${overheadPercent} %) × (1 + ${profitPercent} %): overhead and profit are ${margin.toFixed(1)} % of the price.`;
+  let equivalents: ReturnType<typeof overheadProfitEquivalents>;
+  try {
+    equivalents = overheadProfitEquivalents({ method, overhead, profit });
+  } catch {
+    // A number out of range while typing: its field says so; there is nothing to explain yet.
+    return '';
+  }
+  const { markupOnCost, shareOfPrice } = equivalents;
+  if (method === 'margin') {
+    return `Price = direct cost ÷ (1 − ${overheadPercent} % − ${profitPercent} %): ${markupOnCost.times(100).toFixed(1)} % on top of cost.`;
+  }
+  return `Price = direct cost × (1 + ${overheadPercent} %) × (1 + ${profitPercent} %): overhead and profit are ${shareOfPrice.times(100).toFixed(1)} % of the price.`;
 }

@@ -1,5 +1,5 @@
-import { HttpClient } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -9,22 +9,27 @@ import { MatInputModule } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import type { EstimatingSettings } from '@layerbook/contracts';
-import { firstValueFrom, map, startWith } from 'rxjs';
+import {
+  ISO_WEEKDAYS,
+  OVERHEAD_PROFIT_METHODS,
+  OVERHEAD_PROFIT_METHOD_LABELS,
+  ROUNDING_KINDS,
+  ROUNDING_KIND_LABELS,
+  TAX_MODES,
+  TAX_MODE_LABELS,
+  WEEKDAY_LABELS,
+  type EstimatingSettingsView,
+} from '@layerbook/contracts/types';
+import { map, startWith } from 'rxjs';
 import { Session } from '../../core/auth/session';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
+import { fillWhenLoaded } from '../../shared/forms/fill-when-loaded';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { loadMessage } from '../../shared/forms/load-message';
+import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { estimatingForm, fillForm, methodInWords, readForm, WEEKDAYS } from './estimating-form';
-
-interface EstimatingView {
-  readonly settings: EstimatingSettings;
-  readonly isDefault: boolean;
-  readonly lengthUnit: 'ft' | 'm';
-  readonly currency: string;
-}
+import { estimatingForm, fillForm, methodInWords, readForm } from './estimating-form';
+import { FirmApi } from './firm-api';
 
 /**
  * The numbers every estimate is built from: labour rate, overhead and profit, minimum charge, tax,
@@ -38,16 +43,25 @@ interface EstimatingView {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class EstimatingSettingsForm {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(FirmApi);
   private readonly snackBar = inject(MatSnackBar);
 
   protected readonly isOwner = inject(Session).isOwner;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly view = signal<EstimatingView | null>(null);
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly estimating = httpResource<EstimatingSettingsView>(() => '/api/firm/estimating');
+  protected readonly view = computed(() => (this.estimating.hasValue() ? this.estimating.value() : null));
+  private readonly loadFailure = loadMessage(this.estimating);
+  protected readonly submission = new Submission();
+  protected readonly message = computed(() => this.submission.message() ?? this.loadFailure());
   protected readonly errorText = errorText;
-  protected readonly weekdays = WEEKDAYS;
+  protected readonly weekdays = ISO_WEEKDAYS;
+  protected readonly weekdayLabels = WEEKDAY_LABELS;
+  protected readonly methods = OVERHEAD_PROFIT_METHODS;
+  protected readonly methodLabels = OVERHEAD_PROFIT_METHOD_LABELS;
+  protected readonly taxModes = TAX_MODES;
+  protected readonly taxModeLabels = TAX_MODE_LABELS;
+  protected readonly roundingKinds = ROUNDING_KINDS;
+  protected readonly roundingKindLabels = ROUNDING_KIND_LABELS;
   protected readonly words = { required: 'Enter a value.', min: 'Too small.', max: 'Too large.', pattern: 'Enter an amount like 55.00.' };
   protected readonly form = estimatingForm();
 
@@ -64,39 +78,18 @@ export class EstimatingSettingsForm {
   protected readonly roundingKind = toSignal(this.form.controls.rounding.controls.kind.valueChanges, { initialValue: 'minorUnit' as const });
 
   constructor() {
-    void this.load();
+    fillWhenLoaded(this.estimating, (view) => {
+      fillForm(this.form, view.settings);
+      if (this.isOwner()) this.form.enable();
+      else this.form.disable();
+    });
   }
 
   protected async saveEstimating(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const saved = await firstValueFrom(this.http.put<EstimatingView>('/api/firm/estimating', readForm(this.form)));
-      this.show(saved);
+    const saved = await this.submission.send(this.form, () => this.api.saveEstimating(readForm(this.form)));
+    if (saved) {
+      this.estimating.set(saved);
       this.snackBar.open('Pricing and schedule settings saved.', 'Close', { duration: 4000 });
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
     }
-  }
-
-  private async load(): Promise<void> {
-    try {
-      this.show(await firstValueFrom(this.http.get<EstimatingView>('/api/firm/estimating')));
-    } catch (error) {
-      this.formMessage.set(toProblem(error).title);
-    }
-  }
-
-  private show(view: EstimatingView): void {
-    this.view.set(view);
-    fillForm(this.form, view.settings);
-    if (this.isOwner()) this.form.enable();
-    else this.form.disable();
   }
 }

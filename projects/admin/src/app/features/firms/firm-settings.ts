@@ -1,4 +1,5 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -8,26 +9,42 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatRadioModule } from '@angular/material/radio';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import type { FirmSettings, FirmSettingsUpdate } from '@layerbook/contracts';
+import {
+  COMMON_CURRENCIES,
+  FIRM_NAME_MAX_LENGTH,
+  FIRM_NAME_MIN_LENGTH,
+  FIRM_PROFILE_LIMITS as L,
+  LANGUAGES,
+  LANGUAGE_LABELS,
+  PHONE_MAX_LENGTH,
+  UNIT_SYSTEMS,
+  UNIT_SYSTEM_LABELS,
+  type FirmSettings,
+  type FirmSettingsUpdate,
+  type Language,
+  type UnitSystem,
+} from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
-import { hydratedSignal } from '../../shared/forms/hydrated';
 import { errorText } from '../../shared/forms/error-text';
+import { tooLong } from '../../shared/forms/field-words';
+import { fillWhenLoaded } from '../../shared/forms/fill-when-loaded';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { loadMessage } from '../../shared/forms/load-message';
+import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { FirmApi } from './firm-api';
 import { EstimatingSettingsForm } from './estimating-settings';
+import { FirmApi } from './firm-api';
 import { StageLikelihoodsForm } from './stage-likelihoods';
-import { CURRENCY_CHOICES, LANGUAGE_CHOICES, UNIT_CHOICES, type Language, type UnitSystem } from './firm-choices';
 import { timeZoneChoices } from './time-zones';
 
-
-const TOO_LONG = { maxlength: 'That is too long for this field.' };
+/** Two letters, any case, spaces around allowed: the form sends it trimmed in capitals. */
+const TYPED_COUNTRY = /^\s*[A-Za-z]{2}\s*$/;
 
 @Component({
   selector: 'lb-firm-settings',
   imports: [
+    EstimatingSettingsForm,
     FormAlert,
     MatButtonModule,
     MatFormFieldModule,
@@ -37,7 +54,6 @@ const TOO_LONG = { maxlength: 'That is too long for this field.' };
     MatRadioModule,
     MatSelectModule,
     ReactiveFormsModule,
-    EstimatingSettingsForm,
     StageLikelihoodsForm,
   ],
   templateUrl: './firm-settings.html',
@@ -48,31 +64,33 @@ export class FirmSettingsPage {
   private readonly api = inject(FirmApi);
   private readonly snackBar = inject(MatSnackBar);
   private readonly fb = inject(NonNullableFormBuilder);
-
   private readonly session = inject(Session);
+
   protected readonly isOwner = this.session.isOwner;
   /** Crew are refused the stage likelihoods (they carry money weighting), so the section is not drawn. */
   protected readonly seesStageLikelihoods = this.session.hasRole('office');
-  protected readonly currencies = CURRENCY_CHOICES;
-  protected readonly unitChoices = UNIT_CHOICES;
-  protected readonly languageChoices = LANGUAGE_CHOICES;
-  protected readonly timeZones = signal<readonly string[]>(timeZoneChoices(''));
-  protected readonly isLoading = signal(true);
-  protected readonly isBusy = signal(false);
-  protected readonly loadMessage = signal<string | null>(null);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly currencies = COMMON_CURRENCIES;
+  protected readonly unitSystems = UNIT_SYSTEMS;
+  protected readonly unitLabels = UNIT_SYSTEM_LABELS;
+  protected readonly languages = LANGUAGES;
+  protected readonly languageLabels = LANGUAGE_LABELS;
+  protected readonly firm = httpResource<FirmSettings>(() => '/api/firm');
+  protected readonly isLoading = computed(() => !this.firm.hasValue() && this.firm.isLoading());
+  protected readonly loadMessage = loadMessage(this.firm);
+  protected readonly timeZones = computed(() => timeZoneChoices(this.firm.hasValue() ? this.firm.value().timeZone : ''));
+  protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
 
   protected readonly form = this.fb.group({
-    name: ['', [requiredText, Validators.minLength(2), Validators.maxLength(120)]],
-    addressLine1: ['', Validators.maxLength(120)],
-    addressLine2: ['', Validators.maxLength(120)],
-    city: ['', Validators.maxLength(80)],
-    region: ['', Validators.maxLength(80)],
-    postalCode: ['', Validators.maxLength(20)],
-    country: ['', [Validators.required, Validators.pattern(/^\s*[A-Za-z]{2}\s*$/)]],
-    phone: ['', Validators.maxLength(40)],
+    name: ['', [requiredText, Validators.minLength(FIRM_NAME_MIN_LENGTH), Validators.maxLength(FIRM_NAME_MAX_LENGTH)]],
+    addressLine1: ['', Validators.maxLength(L.addressLine1)],
+    addressLine2: ['', Validators.maxLength(L.addressLine2)],
+    city: ['', Validators.maxLength(L.city)],
+    region: ['', Validators.maxLength(L.region)],
+    postalCode: ['', Validators.maxLength(L.postalCode)],
+    country: ['', [Validators.required, Validators.pattern(TYPED_COUNTRY)]],
+    phone: ['', Validators.maxLength(PHONE_MAX_LENGTH)],
     timeZone: ['', Validators.required],
     currency: ['', Validators.required],
     units: this.fb.control<UnitSystem>('imperial'),
@@ -80,8 +98,13 @@ export class FirmSettingsPage {
   });
 
   protected readonly words = {
-    name: { required: 'Enter the firm name.', minlength: 'Enter the firm name.', maxlength: 'Use at most 120 characters.' },
-    line: TOO_LONG,
+    name: { required: 'Enter the firm name.', minlength: 'Enter the firm name.', ...tooLong(FIRM_NAME_MAX_LENGTH) },
+    phone: tooLong(PHONE_MAX_LENGTH),
+    addressLine1: tooLong(L.addressLine1),
+    addressLine2: tooLong(L.addressLine2),
+    city: tooLong(L.city),
+    region: tooLong(L.region),
+    postalCode: tooLong(L.postalCode),
     country: {
       required: 'Enter a two-letter country code, like US.',
       pattern: 'Use a two-letter country code, like US.',
@@ -91,53 +114,20 @@ export class FirmSettingsPage {
   };
 
   constructor() {
-    void this.load();
+    fillWhenLoaded(this.firm, (settings) => this.show(settings));
   }
 
   protected async saveSettings(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const saved = await this.api.save(this.toUpdate());
-      this.show(saved);
+    const saved = await this.submission.send(this.form, () => this.api.saveProfile(this.toUpdate()));
+    if (saved) {
+      this.firm.set(saved);
       this.snackBar.open('Settings saved.', 'Close', { duration: 4000 });
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
-    }
-  }
-
-  private async load(): Promise<void> {
-    try {
-      this.show(await this.api.load());
-    } catch (error) {
-      this.loadMessage.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
     }
   }
 
   private show(settings: FirmSettings): void {
-    this.timeZones.set(timeZoneChoices(settings.timeZone));
-    this.form.reset({
-      name: settings.name,
-      addressLine1: settings.addressLine1,
-      addressLine2: settings.addressLine2,
-      city: settings.city,
-      region: settings.region,
-      postalCode: settings.postalCode,
-      country: settings.country,
-      phone: settings.phone,
-      timeZone: settings.timeZone,
-      currency: settings.currency,
-      units: settings.units,
-      language: settings.language,
-    });
+    const { name, addressLine1, addressLine2, city, region, postalCode, country, phone, timeZone, currency, units, language } = settings;
+    this.form.reset({ name, addressLine1, addressLine2, city, region, postalCode, country, phone, timeZone, currency, units, language });
     // Only owners may change settings; the server refuses the rest with 403 anyway.
     if (this.isOwner()) {
       this.form.enable();

@@ -1,23 +1,26 @@
-import { HttpClient } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import type { InquiryStage } from '@layerbook/contracts';
-import { firstValueFrom } from 'rxjs';
+import {
+  INQUIRY_STAGES,
+  STAGE_LABELS,
+  type InquiryStage,
+  type ItemList,
+  type StageLikelihood,
+  type StageLikelihoodUpdate,
+} from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
+import { fillWhenLoaded } from '../../shared/forms/fill-when-loaded';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { loadMessage } from '../../shared/forms/load-message';
+import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { INQUIRY_STAGES, STAGE_LABELS } from '../../shared/ui/stage-words';
-
-interface StageLikelihoods {
-  readonly likelihoods: Record<InquiryStage, number>;
-}
+import { FirmApi } from './firm-api';
 
 type LikelihoodControls = Record<InquiryStage, FormControl<number | null>>;
 
@@ -36,21 +39,21 @@ type LikelihoodControls = Record<InquiryStage, FormControl<number | null>>;
           Each open inquiry's estimated value is multiplied by its stage's chance to give the weighted
           pipeline. Set these from your own record, for example how many sample boards turn into jobs.
         </p>
-        <lb-form-alert [message]="formMessage()" />
+        <lb-form-alert [message]="message()" />
         @if (hasLoaded()) {
-          <div class="fields">
+          <div class="fields" formGroupName="likelihoods">
             @for (stage of stages; track stage) {
               <mat-form-field>
                 <mat-label>{{ stageLabels[stage] }}</mat-label>
                 <input matInput type="number" min="0" max="100" step="1" [formControlName]="stage" required />
                 <span matTextSuffix>%</span>
-                <mat-error>{{ errorText(form.controls[stage], words) }}</mat-error>
+                <mat-error>{{ errorText(form.controls.likelihoods.controls[stage], words) }}</mat-error>
               </mat-form-field>
             }
           </div>
           @if (isOwner()) {
             <div class="lb-form-actions">
-              <button mat-flat-button type="submit" [disabled]="isBusy()">Save likelihoods</button>
+              <button mat-flat-button type="submit" [disabled]="submission.isBusy()">Save likelihoods</button>
             </div>
           }
         }
@@ -82,16 +85,18 @@ type LikelihoodControls = Record<InquiryStage, FormControl<number | null>>;
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class StageLikelihoodsForm {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(FirmApi);
   private readonly snackBar = inject(MatSnackBar);
 
   protected readonly isOwner = inject(Session).isOwner;
   protected readonly stages = INQUIRY_STAGES;
   protected readonly stageLabels = STAGE_LABELS;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly hasLoaded = signal(false);
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly likelihoods = httpResource<ItemList<StageLikelihood>>(() => '/api/inquiries/stages');
+  protected readonly hasLoaded = computed(() => this.likelihoods.hasValue());
+  private readonly loadFailure = loadMessage(this.likelihoods);
+  protected readonly submission = new Submission();
+  protected readonly message = computed(() => this.submission.message() ?? this.loadFailure());
   protected readonly errorText = errorText;
   protected readonly words = {
     required: 'Enter a percentage from 0 to 100.',
@@ -99,63 +104,36 @@ export class StageLikelihoodsForm {
     max: 'Use 0 to 100.',
   };
 
-  protected readonly form = new FormGroup(
-    Object.fromEntries(
-      INQUIRY_STAGES.map((stage) => [
-        stage,
-        new FormControl<number | null>(null, [Validators.required, Validators.min(0), Validators.max(100)]),
-      ]),
-    ) as LikelihoodControls,
-  );
+  /** Shaped like the API's body, so its field names ("likelihoods.samples") find their controls. */
+  protected readonly form = new FormGroup({
+    likelihoods: new FormGroup(
+      Object.fromEntries(
+        INQUIRY_STAGES.map((stage) => [
+          stage,
+          new FormControl<number | null>(null, [Validators.required, Validators.min(0), Validators.max(100)]),
+        ]),
+      ) as LikelihoodControls,
+    ),
+  });
 
   constructor() {
-    void this.load();
+    fillWhenLoaded(this.likelihoods, ({ items }) => {
+      this.form.reset({ likelihoods: Object.fromEntries(items.map((item) => [item.stage, item.likelihoodPercent])) });
+      if (this.isOwner()) {
+        this.form.enable();
+      } else {
+        this.form.disable();
+      }
+    });
   }
 
   protected async saveLikelihoods(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const likelihoods = this.form.getRawValue() as Record<InquiryStage, number>;
-      const saved = await firstValueFrom(
-        this.http.put<StageLikelihoods>('/api/inquiries/stages', { likelihoods }),
-      );
-      this.show(saved);
+    // Validators.required has passed, so every stage holds a number.
+    const body = this.form.getRawValue() as StageLikelihoodUpdate;
+    const saved = await this.submission.send(this.form, () => this.api.saveStageLikelihoods(body));
+    if (saved) {
+      this.likelihoods.set(saved);
       this.snackBar.open('Chances of winning saved.', 'Close', { duration: 4000 });
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, this.withStagePaths(toProblem(error))));
-    } finally {
-      this.isBusy.set(false);
     }
-  }
-
-  private async load(): Promise<void> {
-    try {
-      this.show(await firstValueFrom(this.http.get<StageLikelihoods>('/api/inquiries/stages')));
-      this.hasLoaded.set(true);
-    } catch (error) {
-      this.formMessage.set(toProblem(error).title);
-    }
-  }
-
-  private show({ likelihoods }: StageLikelihoods): void {
-    this.form.reset(likelihoods);
-    if (this.isOwner()) {
-      this.form.enable();
-    } else {
-      this.form.disable();
-    }
-  }
-
-  /** The API names fields "likelihoods.samples"; the form's controls are just "samples". */
-  private withStagePaths<T extends { errors?: readonly { field: string; message: string }[] }>(problem: T): T {
-    return {
-      ...problem,
-      errors: problem.errors?.map((e) => ({ ...e, field: e.field.replace(/^likelihoods\./, '') })),
-    };
   }
 }

@@ -1,28 +1,22 @@
-import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, input, output } from '@angular/core';
 import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import type { ActivityCreate, InquiryDetail } from '@layerbook/contracts';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
+import {
+  INQUIRY_LIMITS,
+  LOGGED_ACTIVITY_KINDS,
+  LOGGED_ACTIVITY_LABELS,
+  type InquiryDetail,
+  type LoggedActivityKind,
+} from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { InquiryApi } from './inquiry-api';
-
-type LoggedKind = ActivityCreate['kind'];
-
-const KIND_CHOICES = [
-  { value: 'note', label: 'Note' },
-  { value: 'call', label: 'Call' },
-  { value: 'email', label: 'E-mail' },
-] as const satisfies readonly { value: LoggedKind; label: string }[];
-
-type MissingKind = Exclude<LoggedKind, (typeof KIND_CHOICES)[number]['value']>;
-export const ALL_KINDS_LISTED: [MissingKind] extends [never] ? true : never = true;
 
 /** Adds a note, a call or an e-mail to an inquiry's log. */
 @Component({
@@ -31,12 +25,12 @@ export const ALL_KINDS_LISTED: [MissingKind] extends [never] ? true : never = tr
   template: `
     <form [formGroup]="form" #formDir="ngForm" (ngSubmit)="addToLog(formDir)" novalidate aria-label="Add to the log">
       <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
-        <lb-form-alert [message]="formMessage()" />
+        <lb-form-alert [message]="submission.message()" />
         <mat-form-field class="kind">
           <mat-label>Kind</mat-label>
           <mat-select formControlName="kind" required>
-            @for (choice of kinds; track choice.value) {
-              <mat-option [value]="choice.value">{{ choice.label }}</mat-option>
+            @for (kind of kinds; track kind) {
+              <mat-option [value]="kind">{{ kindLabels[kind] }}</mat-option>
             }
           </mat-select>
           <mat-error>{{ errorText(form.controls.kind, words.kind) }}</mat-error>
@@ -47,7 +41,7 @@ export const ALL_KINDS_LISTED: [MissingKind] extends [never] ? true : never = tr
           <mat-error>{{ errorText(form.controls.body, words.body) }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions">
-          <button mat-stroked-button type="submit" [disabled]="isBusy()">Add to log</button>
+          <button mat-stroked-button type="submit" [disabled]="submission.isBusy()">Add to log</button>
         </div>
       </fieldset>
     </form>
@@ -78,37 +72,27 @@ export class ActivityForm {
   readonly inquiryId = input.required<string>();
   readonly saved = output<InquiryDetail>();
 
-  protected readonly kinds = KIND_CHOICES;
+  protected readonly kinds = LOGGED_ACTIVITY_KINDS;
+  protected readonly kindLabels = LOGGED_ACTIVITY_LABELS;
   protected readonly form = this.fb.group({
-    kind: this.fb.control<LoggedKind>('note', Validators.required),
-    body: ['', [requiredText, Validators.maxLength(5000)]],
+    kind: this.fb.control<LoggedActivityKind>('note', Validators.required),
+    body: ['', [requiredText, Validators.maxLength(INQUIRY_LIMITS.activityBody)]],
   });
   protected readonly isHydrated = hydratedSignal();
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly words = {
     kind: { required: 'Choose note, call or e-mail.' },
-    body: { required: 'Write what happened.', maxlength: 'Use at most 5000 characters.' },
+    body: { required: 'Write what happened.', maxlength: `Use at most ${INQUIRY_LIMITS.activityBody} characters.` },
   };
 
   protected async addToLog(formDir: FormGroupDirective): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const { kind, body } = this.form.getRawValue();
-      const saved = await this.api.addActivity(this.inquiryId(), { kind, body: body.trim() });
+    const { kind, body } = this.form.getRawValue();
+    const saved = await this.submission.send(this.form, () => this.api.addActivity(this.inquiryId(), { kind, body: body.trim() }));
+    if (saved) {
       // resetForm also clears "submitted", so the emptied text area does not show as an error.
       formDir.resetForm({ kind, body: '' });
       this.saved.emit(saved);
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
     }
   }
 }

@@ -1,7 +1,7 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
-import type { InquiryActivity } from '@layerbook/contracts';
+import type { InquiryActivity } from '@layerbook/contracts/types';
 import { formatCalendarDate } from '../../shared/ui/calendar-date-pipe';
 import { describeActivity } from './activity-words';
 import { Assignees } from './assignees';

@@ -1,5 +1,11 @@
-import type { InquiryActivity } from '@layerbook/contracts';
-import { STAGE_LABELS, SOURCE_LABELS, isSource, isStage } from '../../shared/ui/stage-words';
+import {
+  LOGGED_ACTIVITY_LABELS,
+  SOURCE_LABELS,
+  STAGE_LABELS,
+  isInquirySource,
+  isInquiryStage,
+  type InquiryActivity,
+} from '@layerbook/contracts/types';
 
 export interface ActivityLine {
   readonly icon: string;
@@ -19,15 +25,15 @@ export function describeActivity(
   switch (activity.kind) {
     case 'created': {
       const source = data['source'];
-      const from = isSource(source) ? ` (${SOURCE_LABELS[source]})` : '';
+      const from = isInquirySource(source) ? ` (${SOURCE_LABELS[source]})` : '';
       return { icon: 'add_circle', title: `Inquiry logged${from}`, body: activity.body };
     }
     case 'note':
-      return { icon: 'sticky_note_2', title: 'Note', body: activity.body };
+      return { icon: 'sticky_note_2', title: LOGGED_ACTIVITY_LABELS.note, body: activity.body };
     case 'call':
-      return { icon: 'call', title: 'Call', body: activity.body };
+      return { icon: 'call', title: LOGGED_ACTIVITY_LABELS.call, body: activity.body };
     case 'email':
-      return { icon: 'mail', title: 'E-mail', body: activity.body };
+      return { icon: 'mail', title: LOGGED_ACTIVITY_LABELS.email, body: activity.body };
     case 'stage_change':
       return {
         icon: 'swap_horiz',
@@ -54,5 +60,5 @@ export function describeActivity(
 }
 
 function stageName(stage: unknown): string {
-  return isStage(stage) ? STAGE_LABELS[stage] : 'unknown';
+  return isInquiryStage(stage) ? STAGE_LABELS[stage] : 'unknown';
 }

@@ -1,4 +1,4 @@
-import type { BoardColumn, InquiryStage, InquirySummary } from '@layerbook/contracts';
+import type { BoardColumn, InquiryStage, InquirySummary } from '@layerbook/contracts/types';
 
 /**
  * The board after one card moves: it leaves its column and goes on top of the new one, and both

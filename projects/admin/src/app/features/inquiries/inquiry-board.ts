@@ -1,26 +1,28 @@
 import { CdkDrag, CdkDragDrop, CdkDropList, CdkDropListGroup } from '@angular/cdk/drag-drop';
+import { httpResource } from '@angular/common/http';
 import {
   ChangeDetectionStrategy,
   Component,
   ElementRef,
   Injector,
   afterNextRender,
+  computed,
   inject,
   signal,
 } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import type { BoardColumn, InquiryStage, InquirySummary } from '@layerbook/contracts';
+import type { BoardColumn, InquiryStage, InquirySummary, ItemList } from '@layerbook/contracts/types';
 import { FirmCurrency } from '../../core/firm/firm-currency';
-import { toProblem } from '../../core/errors/problem';
+import { problemMessage } from '../../core/errors/problem';
+import { loadMessage } from '../../shared/forms/load-message';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { STAGE_ICONS } from '../../shared/ui/stage-words';
 import { moveCard, replaceCard } from './board-moves';
-import { InquiryApi } from './inquiry-api';
 import { InquiryCard } from './inquiry-card';
 import { InquiryViews } from './inquiry-views';
 import { StageMover } from './stage-mover';
+import { STAGE_ICONS } from './stage-icons';
 
 @Component({
   selector: 'lb-inquiry-board',
@@ -40,15 +42,16 @@ import { StageMover } from './stage-mover';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class InquiryBoard {
-  private readonly api = inject(InquiryApi);
   private readonly mover = inject(StageMover);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly injector = inject(Injector);
   private readonly firmCurrency = inject(FirmCurrency);
 
-  protected readonly columns = signal<readonly BoardColumn[]>([]);
-  protected readonly isLoading = signal(true);
-  protected readonly message = signal<string | null>(null);
+  protected readonly board = httpResource<ItemList<BoardColumn>>(() => '/api/inquiries/board');
+  protected readonly columns = computed(() => (this.board.hasValue() ? this.board.value().items : []));
+  private readonly moveMessage = signal<string | null>(null);
+  private readonly boardMessage = loadMessage(this.board);
+  protected readonly message = computed(() => this.boardMessage() ?? this.moveMessage());
   protected readonly currency = this.firmCurrency.code;
   protected readonly stageIcons = STAGE_ICONS;
   /** On touch screens a swipe should scroll the board; a press-and-hold picks a card up. */
@@ -56,7 +59,6 @@ export class InquiryBoard {
 
   constructor() {
     void this.firmCurrency.load();
-    void this.load();
   }
 
   protected async dropCard(event: CdkDragDrop<InquiryStage, InquiryStage, InquirySummary>): Promise<void> {
@@ -67,20 +69,15 @@ export class InquiryBoard {
 
   /** Shows the move at once, then keeps what the server says, or puts the card back. */
   protected async moveCard(card: InquirySummary, stage: InquiryStage): Promise<void> {
-    this.message.set(null);
+    this.moveMessage.set(null);
     const before = this.columns();
-    this.columns.set(moveCard(before, card, stage));
+    this.board.set({ items: moveCard(before, card, stage) });
     try {
       const saved = await this.mover.move(card, stage);
-      if (saved) {
-        this.columns.update((columns) => replaceCard(columns, saved));
-      } else {
-        this.columns.set(before);
-      }
+      this.board.set({ items: saved ? replaceCard(this.columns(), saved) : before });
     } catch (error) {
-      this.columns.set(before);
-      const problem = toProblem(error);
-      this.message.set(`${card.contactName} was not moved. ${problem.detail ?? problem.title}`);
+      this.board.set({ items: before });
+      this.moveMessage.set(`${card.contactName} was not moved. ${problemMessage(error)}`);
     }
     this.focusMoveButton(card.id);
   }
@@ -94,15 +91,5 @@ export class InquiryBoard {
       },
       { injector: this.injector },
     );
-  }
-
-  private async load(): Promise<void> {
-    try {
-      this.columns.set(await this.api.board());
-    } catch (error) {
-      this.message.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
-    }
   }
 }

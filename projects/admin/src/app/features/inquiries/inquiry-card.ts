@@ -3,10 +3,9 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule, MatMenuTrigger } from '@angular/material/menu';
 import { RouterLink } from '@angular/router';
-import type { InquiryStage, InquirySummary } from '@layerbook/contracts';
+import { INQUIRY_STAGES, STAGE_LABELS, type InquiryStage, type InquirySummary } from '@layerbook/contracts/types';
 import { FollowUpDate } from '../../shared/ui/follow-up-date';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { INQUIRY_STAGES, STAGE_LABELS } from '../../shared/ui/stage-words';
 
 /** One inquiry on the board, with a menu that moves it without dragging (keyboard, switch access). */
 @Component({

@@ -1,5 +1,6 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, OnInit, inject, input, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -7,21 +8,29 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
-import type { InquiryDetail, InquiryStage } from '@layerbook/contracts';
-import { toProblem } from '../../core/errors/problem';
+import {
+  BUDGET_LABELS,
+  INQUIRY_STAGES,
+  SOURCE_LABELS,
+  STAGE_LABELS,
+  isReferralSource,
+  type InquiryDetail,
+  type InquiryStage,
+} from '@layerbook/contracts/types';
+import { problemMessage, toProblem } from '../../core/errors/problem';
 import { FirmCurrency } from '../../core/firm/firm-currency';
+import { loadMessage } from '../../shared/forms/load-message';
 import { FollowUpDate } from '../../shared/ui/follow-up-date';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LeadSafetyNote } from '../../shared/ui/lead-safety-note';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { INQUIRY_STAGES, SOURCE_LABELS, STAGE_ICONS, STAGE_LABELS, isReferral } from '../../shared/ui/stage-words';
 import { ActivityForm } from './activity-form';
 import { ActivityLog } from './activity-log';
-import { budgetLabel } from './budget-words';
-import { InquiryApi } from './inquiry-api';
+import { InquiryApi, inquiryUrl } from './inquiry-api';
 import { InquiryForm } from './inquiry-form';
 import { NextStepForm } from './next-step-form';
 import { StageMover } from './stage-mover';
+import { STAGE_ICONS } from './stage-icons';
 
 @Component({
   selector: 'lb-inquiry-detail',
@@ -46,7 +55,7 @@ import { StageMover } from './stage-mover';
   styleUrl: './inquiry-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class InquiryDetailPage implements OnInit {
+export class InquiryDetailPage {
   private readonly api = inject(InquiryApi);
   private readonly mover = inject(StageMover);
   private readonly snackBar = inject(MatSnackBar);
@@ -55,26 +64,23 @@ export class InquiryDetailPage implements OnInit {
   /** From the route (withComponentInputBinding). */
   readonly id = input.required<string>();
 
-  protected readonly inquiry = signal<InquiryDetail | null>(null);
-  protected readonly isLoading = signal(true);
+  /** Each change answers with the whole inquiry, which replaces what the page shows. */
+  protected readonly detail = httpResource<InquiryDetail>(() => inquiryUrl(this.id()));
+  protected readonly inquiry = computed(() => (this.detail.hasValue() ? this.detail.value() : null));
+  protected readonly loadMessage = loadMessage(this.detail);
   protected readonly isEditing = signal(false);
   protected readonly isBusy = signal(false);
-  protected readonly loadMessage = signal<string | null>(null);
   protected readonly message = signal<string | null>(null);
   protected readonly currency = this.firmCurrency.code;
   protected readonly stages = INQUIRY_STAGES;
   protected readonly stageLabels = STAGE_LABELS;
   protected readonly stageIcons = STAGE_ICONS;
   protected readonly sourceLabels = SOURCE_LABELS;
-  protected readonly budgetLabel = budgetLabel;
-  protected readonly isReferral = isReferral;
+  protected readonly budgetLabels = BUDGET_LABELS;
+  protected readonly isReferral = isReferralSource;
 
   constructor() {
     void this.firmCurrency.load();
-  }
-
-  ngOnInit(): void {
-    void this.load();
   }
 
   protected async changeStage(select: MatSelect, stage: InquiryStage): Promise<void> {
@@ -82,22 +88,17 @@ export class InquiryDetailPage implements OnInit {
     if (!current || stage === current.stage) {
       return;
     }
-    this.message.set(null);
-    this.isBusy.set(true);
-    try {
-      const saved = await this.mover.move(current, stage);
+    await this.act(async () => {
+      const saved = await this.mover.move(current, stage).catch((error: unknown) => {
+        select.writeValue(current.stage);
+        throw error;
+      });
       if (saved) {
-        this.inquiry.set(saved);
+        this.detail.set(saved);
       } else {
         select.writeValue(current.stage);
       }
-    } catch (error) {
-      select.writeValue(current.stage);
-      const problem = toProblem(error);
-      this.message.set(problem.detail ?? problem.title);
-    } finally {
-      this.isBusy.set(false);
-    }
+    });
   }
 
   protected async fileAsClient(): Promise<void> {
@@ -105,33 +106,31 @@ export class InquiryDetailPage implements OnInit {
     if (!current) {
       return;
     }
-    this.message.set(null);
-    this.isBusy.set(true);
-    try {
+    await this.act(async () => {
       await this.api.convert(current.id, {});
-      this.inquiry.set(await this.api.get(current.id));
+      this.detail.reload();
       this.snackBar.open(`${current.contactName} is filed as a client.`, 'Close', { duration: 5000 });
-    } catch (error) {
-      const problem = toProblem(error);
-      this.message.set(problem.errors?.map((e) => e.message).join(' ') || (problem.detail ?? problem.title));
-    } finally {
-      this.isBusy.set(false);
-    }
+    });
   }
 
   protected showSaved(saved: InquiryDetail, what: string): void {
-    this.inquiry.set(saved);
+    this.detail.set(saved);
     this.isEditing.set(false);
     this.snackBar.open(what, 'Close', { duration: 4000 });
   }
 
-  private async load(): Promise<void> {
+  /** One change from the page's own buttons: busy while it runs, the server's words if it fails. */
+  private async act(change: () => Promise<void>): Promise<void> {
+    this.message.set(null);
+    this.isBusy.set(true);
     try {
-      this.inquiry.set(await this.api.get(this.id()));
+      await change();
     } catch (error) {
-      this.loadMessage.set(toProblem(error).title);
+      // A refused change names its fields, but this page has none to put them beside.
+      const fieldWords = toProblem(error).errors?.map((e) => e.message).join(' ');
+      this.message.set(fieldWords || problemMessage(error));
     } finally {
-      this.isLoading.set(false);
+      this.isBusy.set(false);
     }
   }
 }

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -7,24 +7,35 @@ import { MatDatepickerModule } from '@angular/material/datepicker';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import type { InquiryCreate, InquiryDetail, InquirySource } from '@layerbook/contracts';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
+import {
+  BUDGET_LABELS,
+  BUDGET_RANGES,
+  EMAIL_MAX_LENGTH,
+  INQUIRY_LIMITS as L,
+  INQUIRY_SOURCES,
+  PHONE_MAX_LENGTH,
+  SOURCE_LABELS,
+  isReferralSource,
+  type BudgetRange,
+  type InquiryCreate,
+  type InquiryDetail,
+  type InquirySource,
+} from '@layerbook/contracts/types';
 import { FirmCurrency } from '../../core/firm/firm-currency';
 import { errorText } from '../../shared/forms/error-text';
-import { EMAIL_WORDS } from '../../shared/forms/field-words';
+import { EMAIL_WORDS, tooLong } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { toIsoDate } from '../../shared/forms/iso-date';
 import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
+import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
 import { YEAR_WORDS, toYear, yearText } from '../../shared/forms/year-input';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { INQUIRY_SOURCES, SOURCE_LABELS, isReferral } from '../../shared/ui/stage-words';
 import { Assignees } from './assignees';
-import { BUDGET_CHOICES } from './budget-words';
 import { InquiryApi } from './inquiry-api';
 
-const TOO_LONG = { maxlength: 'That is too long for this field.' };
+/** What the prospect told us, as PATCH /api/inquiries/:id takes it. */
+type InquiryDetails = Omit<InquiryCreate, 'estimatedValue' | 'assigneeUserId' | 'nextFollowUp'>;
 
 /**
  * What the prospect told us. New inquiries also get a value, a person and a follow-up date here;
@@ -49,7 +60,6 @@ const TOO_LONG = { maxlength: 'That is too long for this field.' };
 export class InquiryForm implements OnInit {
   private readonly api = inject(InquiryApi);
   private readonly fb = inject(NonNullableFormBuilder);
-  private readonly assignees = inject(Assignees);
 
   /** The inquiry being edited; none means a new one. */
   readonly inquiry = input<InquiryDetail | null>(null);
@@ -59,41 +69,43 @@ export class InquiryForm implements OnInit {
   protected readonly isNew = computed(() => this.inquiry() === null);
   protected readonly sources = INQUIRY_SOURCES;
   protected readonly sourceLabels = SOURCE_LABELS;
-  protected readonly budgets = BUDGET_CHOICES;
-  protected readonly people = this.assignees.active;
+  protected readonly budgets = BUDGET_RANGES;
+  protected readonly budgetLabels = BUDGET_LABELS;
+  protected readonly people = inject(Assignees).active;
   protected readonly currency = inject(FirmCurrency).code;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   protected readonly errorText = errorText;
 
   protected readonly form = this.fb.group({
-    contactName: ['', [requiredText, Validators.maxLength(120)]],
-    email: ['', [Validators.email, Validators.maxLength(254)]],
-    phone: ['', Validators.maxLength(40)],
-    siteAddress: ['', Validators.maxLength(300)],
+    contactName: ['', [requiredText, Validators.maxLength(L.contactName)]],
+    email: ['', [Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
+    phone: ['', Validators.maxLength(PHONE_MAX_LENGTH)],
+    siteAddress: ['', Validators.maxLength(L.siteAddress)],
     yearBuilt: ['', yearText],
-    rooms: ['', Validators.maxLength(2000)],
-    finishIdea: ['', Validators.maxLength(2000)],
-    timeline: ['', Validators.maxLength(200)],
-    budgetRange: this.fb.control<InquiryCreate['budgetRange']>(''),
+    rooms: ['', Validators.maxLength(L.rooms)],
+    finishIdea: ['', Validators.maxLength(L.finishIdea)],
+    timeline: ['', Validators.maxLength(L.timeline)],
+    budgetRange: this.fb.control<BudgetRange>(''),
     source: this.fb.control<InquirySource | ''>('', Validators.required),
-    referrerName: ['', Validators.maxLength(120)],
+    referrerName: ['', Validators.maxLength(L.referrerName)],
     estimatedValue: ['', amountText],
     assigneeUserId: this.fb.control<string | null>(null),
     nextFollowUp: this.fb.control<Date | null>(null),
   });
 
   private readonly source = toSignal(this.form.controls.source.valueChanges, { initialValue: '' as const });
-  protected readonly isReferral = computed(() => {
-    const source = this.source();
-    return source !== '' && isReferral(source);
-  });
+  protected readonly isReferral = computed(() => isReferralSource(this.source()));
 
   protected readonly words = {
-    contactName: { required: 'Enter the contact name.', maxlength: 'Use at most 120 characters.' },
+    contactName: { required: 'Enter the contact name.', ...tooLong(L.contactName) },
     email: EMAIL_WORDS,
-    line: TOO_LONG,
+    phone: tooLong(PHONE_MAX_LENGTH),
+    siteAddress: tooLong(L.siteAddress),
+    rooms: tooLong(L.rooms),
+    finishIdea: tooLong(L.finishIdea),
+    timeline: tooLong(L.timeline),
+    referrerName: tooLong(L.referrerName),
     year: YEAR_WORDS,
     source: { required: 'Choose where the inquiry came from.' },
     amount: AMOUNT_WORDS,
@@ -101,7 +113,6 @@ export class InquiryForm implements OnInit {
   };
 
   constructor() {
-    void this.assignees.load();
     void inject(FirmCurrency).load();
   }
 
@@ -120,7 +131,7 @@ export class InquiryForm implements OnInit {
       rooms: inquiry.rooms,
       finishIdea: inquiry.finishIdea,
       timeline: inquiry.timeline,
-      budgetRange: inquiry.budgetRange as InquiryCreate['budgetRange'],
+      budgetRange: inquiry.budgetRange,
       source: inquiry.source,
       referrerName: inquiry.referrerName,
     });
@@ -128,24 +139,16 @@ export class InquiryForm implements OnInit {
   }
 
   protected async saveInquiry(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const current = this.inquiry();
-      const saved = current ? await this.api.update(current.id, this.details()) : await this.api.create(this.toCreate());
+    const current = this.inquiry();
+    const saved = await this.submission.send(this.form, () =>
+      current ? this.api.update(current.id, this.details()) : this.api.create(this.toCreate()),
+    );
+    if (saved) {
       this.saved.emit(saved);
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
     }
   }
 
-  private details() {
+  private details(): InquiryDetails {
     const v = this.form.getRawValue();
     const source = v.source === '' ? 'other' : v.source;
     return {
@@ -159,8 +162,8 @@ export class InquiryForm implements OnInit {
       timeline: v.timeline.trim(),
       budgetRange: v.budgetRange,
       source,
-      referrerName: isReferral(source) ? v.referrerName.trim() : '',
-    } satisfies Partial<InquiryCreate>;
+      referrerName: isReferralSource(source) ? v.referrerName.trim() : '',
+    };
   }
 
   private toCreate(): InquiryCreate {

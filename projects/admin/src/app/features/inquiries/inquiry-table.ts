@@ -1,6 +1,6 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, DestroyRef, inject, signal } from '@angular/core';
-import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject } from '@angular/core';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { FormControl, NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -10,19 +10,39 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatTableModule } from '@angular/material/table';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import type { InquirySource, InquiryStage, InquirySummary } from '@layerbook/contracts';
-import { catchError, debounceTime, distinctUntilChanged, firstValueFrom, map, of, switchMap, tap } from 'rxjs';
+import {
+  INQUIRY_SORTS,
+  INQUIRY_SORT_LABELS,
+  INQUIRY_SOURCES,
+  INQUIRY_STAGES,
+  SEARCH_MAX_LENGTH,
+  SOURCE_LABELS,
+  STAGE_LABELS,
+  UNASSIGNED,
+  type InquirySort,
+  type InquirySource,
+  type InquiryStage,
+  type InquirySummary,
+} from '@layerbook/contracts/types';
+import { debounceTime, distinctUntilChanged, map, tap } from 'rxjs';
 import { FirmCurrency } from '../../core/firm/firm-currency';
-import { toProblem } from '../../core/errors/problem';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { keysetList } from '../../shared/forms/keyset-list';
 import { FollowUpDate } from '../../shared/ui/follow-up-date';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { INQUIRY_SOURCES, INQUIRY_STAGES, SOURCE_LABELS, STAGE_ICONS, STAGE_LABELS } from '../../shared/ui/stage-words';
 import { Assignees } from './assignees';
-import { InquiryApi } from './inquiry-api';
-import { INQUIRY_SORTS, type InquiryFilters, type InquirySort, filtersFromParams, filtersToParams } from './inquiry-filters';
+import {
+  NO_FILTERS,
+  filtersFromParams,
+  filtersToParams,
+  hasFilters,
+  listParams,
+  sameFilters,
+  type InquiryFilters,
+} from './inquiry-filters';
 import { InquiryViews } from './inquiry-views';
+import { STAGE_ICONS } from './stage-icons';
 
 const SEARCH_PAUSE_MS = 300;
 
@@ -49,117 +69,70 @@ const SEARCH_PAUSE_MS = 300;
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class InquiryTable {
-  private readonly api = inject(InquiryApi);
   private readonly router = inject(Router);
   private readonly route = inject(ActivatedRoute);
   private readonly firmCurrency = inject(FirmCurrency);
-  private readonly assignees = inject(Assignees);
 
   protected readonly columns = ['contact', 'stage', 'source', 'value', 'followUp', 'assignee', 'received'];
   protected readonly stages = INQUIRY_STAGES;
   protected readonly sources = INQUIRY_SOURCES;
   protected readonly sorts = INQUIRY_SORTS;
+  protected readonly sortLabels = INQUIRY_SORT_LABELS;
   protected readonly stageLabels = STAGE_LABELS;
   protected readonly stageIcons = STAGE_ICONS;
   protected readonly sourceLabels = SOURCE_LABELS;
-  protected readonly people = this.assignees.active;
+  protected readonly unassigned = UNASSIGNED;
+  protected readonly searchMaxLength = SEARCH_MAX_LENGTH;
+  protected readonly people = inject(Assignees).active;
   protected readonly currency = this.firmCurrency.code;
   protected readonly isHydrated = hydratedSignal();
 
-  protected readonly items = signal<readonly InquirySummary[]>([]);
-  protected readonly nextCursor = signal<string | null>(null);
-  protected readonly isLoading = signal(true);
-  protected readonly isLoadingMore = signal(false);
-  protected readonly message = signal<string | null>(null);
-
   protected readonly search = new FormControl('', { nonNullable: true });
-  protected readonly filters = inject(NonNullableFormBuilder).group({
+  protected readonly filterForm = inject(NonNullableFormBuilder).group({
     stage: new FormControl<InquiryStage | null>(null),
     source: new FormControl<InquirySource | null>(null),
     assignee: new FormControl<string | null>(null),
     sort: new FormControl<InquirySort>('newest', { nonNullable: true }),
   });
-  private current: InquiryFilters = filtersFromParams({});
+
+  /** The address bar is the one source of truth: controls write to it, and the list follows it. */
+  private readonly filters = toSignal(
+    this.route.queryParams.pipe(
+      map(filtersFromParams),
+      distinctUntilChanged(sameFilters),
+      tap((filters) => this.showFilters(filters)),
+    ),
+    { initialValue: NO_FILTERS },
+  );
+  protected readonly list = keysetList<InquirySummary>('/api/inquiries', () => listParams(this.filters()));
+  protected readonly isFiltered = computed(() => hasFilters(this.filters()));
 
   /** Table cell templates receive rows untyped; this gives them their type back. */
   protected readonly typed = (row: InquirySummary): InquirySummary => row;
 
   constructor() {
     void this.firmCurrency.load();
-    void this.assignees.load();
     const destroyRef = inject(DestroyRef);
-
-    // The address bar is the one source of truth: controls write to it, and the list follows it.
-    this.route.queryParams
-      .pipe(
-        map(filtersFromParams),
-        distinctUntilChanged((a, b) => JSON.stringify(a) === JSON.stringify(b)),
-        tap((filters) => this.showFilters(filters)),
-        switchMap((filters) =>
-          this.api.list(filters).pipe(
-            map((page) => ({ page, error: null })),
-            catchError((error: unknown) => of({ page: null, error })),
-          ),
-        ),
-        takeUntilDestroyed(destroyRef),
-      )
-      .subscribe(({ page, error }) => {
-        this.isLoading.set(false);
-        this.items.set(page?.items ?? []);
-        this.nextCursor.set(page?.nextCursor ?? null);
-        this.message.set(error ? toProblem(error).title : null);
-      });
-
     this.search.valueChanges
       .pipe(debounceTime(SEARCH_PAUSE_MS), distinctUntilChanged(), takeUntilDestroyed(destroyRef))
-      .subscribe((q) => this.applyFilters({ ...this.current, q }));
-
-    this.filters.valueChanges.pipe(takeUntilDestroyed(destroyRef)).subscribe(() => {
-      const { stage, source, assignee, sort } = this.filters.getRawValue();
-      this.applyFilters({ ...this.current, stage, source, assignee, sort });
+      .subscribe((q) => this.applyFilters({ ...this.filters(), q }));
+    this.filterForm.valueChanges.pipe(takeUntilDestroyed(destroyRef)).subscribe(() => {
+      const { stage, source, assignee, sort } = this.filterForm.getRawValue();
+      this.applyFilters({ ...this.filters(), stage, source, assignee, sort });
     });
-  }
-
-  protected async loadMore(): Promise<void> {
-    const after = this.nextCursor();
-    if (!after) {
-      return;
-    }
-    this.isLoadingMore.set(true);
-    try {
-      const page = await firstValueFrom(this.api.list(this.current, after));
-      this.items.update((items) => [...items, ...page.items]);
-      this.nextCursor.set(page.nextCursor);
-    } catch (error) {
-      this.message.set(toProblem(error).title);
-    } finally {
-      this.isLoadingMore.set(false);
-    }
   }
 
   protected clearFilters(): void {
-    this.applyFilters(filtersFromParams({}));
-  }
-
-  protected hasFilters(): boolean {
-    const { stage, source, assignee, q } = this.current;
-    return !!(stage || source || assignee || q);
+    this.applyFilters(NO_FILTERS);
   }
 
   private applyFilters(filters: InquiryFilters): void {
-    void this.router.navigate([], {
-      relativeTo: this.route,
-      queryParams: filtersToParams(filters),
-      replaceUrl: true,
-    });
+    void this.router.navigate([], { relativeTo: this.route, queryParams: filtersToParams(filters), replaceUrl: true });
   }
 
   /** Puts the address bar's filters in the controls without starting another round trip. */
-  private showFilters(filters: InquiryFilters): void {
-    this.current = filters;
-    this.isLoading.set(true);
-    const { stage, source, assignee, sort, q } = filters;
-    this.filters.setValue({ stage, source, assignee, sort }, { emitEvent: false });
+  private showFilters({ stage, source, assignee, sort, q }: InquiryFilters): void {
+    this.filterForm.setValue({ stage, source, assignee, sort }, { emitEvent: false });
     if (this.search.value.trim() !== q.trim()) {
       this.search.setValue(q, { emitEvent: false });
     }

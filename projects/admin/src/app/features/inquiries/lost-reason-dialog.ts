@@ -4,6 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { INQUIRY_LIMITS } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
 import { requiredText } from '../../shared/forms/text-validators';
 
@@ -39,12 +40,12 @@ export class LostReasonDialog {
   private readonly ref = inject<MatDialogRef<LostReasonDialog, string>>(MatDialogRef);
 
   protected readonly form = inject(NonNullableFormBuilder).group({
-    reason: ['', [requiredText, Validators.maxLength(500)]],
+    reason: ['', [requiredText, Validators.maxLength(INQUIRY_LIMITS.lostReason)]],
   });
   protected readonly errorText = errorText;
   protected readonly words = {
     required: 'Say why it was lost; it helps pricing later.',
-    maxlength: 'Use at most 500 characters.',
+    maxlength: `Use at most ${INQUIRY_LIMITS.lostReason} characters.`,
   };
 
   protected markLost(): void {

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import type { InquiryDetail } from '@layerbook/contracts';
+import type { InquiryDetail } from '@layerbook/contracts/types';
 import { InquiryForm } from './inquiry-form';
 
 /** Logging a phone call or a referral; web-form inquiries arrive by themselves. */

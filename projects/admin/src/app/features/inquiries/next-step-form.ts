@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, OnInit, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, OnInit, inject, input, output } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { provideNativeDateAdapter } from '@angular/material/core';
@@ -6,14 +6,13 @@ import { MatDatepickerModule } from '@angular/material/datepicker';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import type { InquiryDetail, InquiryUpdate } from '@layerbook/contracts';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
+import type { InquiryDetail, InquiryUpdate } from '@layerbook/contracts/types';
 import { FirmCurrency } from '../../core/firm/firm-currency';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
+import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { Assignees } from './assignees';
 import { InquiryApi } from './inquiry-api';
@@ -34,7 +33,7 @@ import { InquiryApi } from './inquiry-api';
   template: `
     <form [formGroup]="form" (ngSubmit)="saveNextStep()" novalidate aria-labelledby="next-step-heading">
       <fieldset class="lb-gate" [disabled]="!isHydrated()">
-        <lb-form-alert [message]="formMessage()" />
+        <lb-form-alert [message]="submission.message()" />
         <div class="fields">
           <mat-form-field>
             <mat-label>Estimated value</mat-label>
@@ -65,7 +64,7 @@ import { InquiryApi } from './inquiry-api';
           </mat-form-field>
         </div>
         <div class="lb-form-actions">
-          <button mat-flat-button type="submit" [disabled]="isBusy()">Save</button>
+          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">Save</button>
         </div>
       </fieldset>
     </form>
@@ -84,16 +83,14 @@ import { InquiryApi } from './inquiry-api';
 export class NextStepForm implements OnInit {
   private readonly api = inject(InquiryApi);
   private readonly fb = inject(NonNullableFormBuilder);
-  private readonly assignees = inject(Assignees);
 
   readonly inquiry = input.required<InquiryDetail>();
   readonly saved = output<InquiryDetail>();
 
-  protected readonly people = this.assignees.active;
+  protected readonly people = inject(Assignees).active;
   protected readonly currency = inject(FirmCurrency).code;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly words = {
     amount: AMOUNT_WORDS,
@@ -106,29 +103,15 @@ export class NextStepForm implements OnInit {
     nextFollowUp: this.fb.control<Date | null>(null),
   });
 
-  constructor() {
-    void this.assignees.load();
-  }
-
   ngOnInit(): void {
     this.show(this.inquiry());
   }
 
   protected async saveNextStep(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const saved = await this.api.update(this.inquiry().id, this.toUpdate());
+    const saved = await this.submission.send(this.form, () => this.api.update(this.inquiry().id, this.toUpdate()));
+    if (saved) {
       this.show(saved);
       this.saved.emit(saved);
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
     }
   }
 

@@ -2,8 +2,7 @@ import { LiveAnnouncer } from '@angular/cdk/a11y';
 import { Injectable, inject } from '@angular/core';
 import { MatDialog } from '@angular/material/dialog';
 import { firstValueFrom } from 'rxjs';
-import type { InquiryDetail, InquiryStage, InquirySummary } from '@layerbook/contracts';
-import { STAGE_LABELS } from '../../shared/ui/stage-words';
+import { STAGE_LABELS, type InquiryDetail, type InquiryStage, type InquirySummary } from '@layerbook/contracts/types';
 import { InquiryApi } from './inquiry-api';
 import { LostReasonDialog, type LostReasonData } from './lost-reason-dialog';
 

@@ -1,21 +1,12 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type {
-  InvitationCreate,
-  StaffRole,
-  TeamInvitation,
-  TeamMember,
-  TeamView,
-} from '@layerbook/contracts';
+import type { InvitationCreate, MemberRoleUpdate, StaffRole, TeamInvitation, TeamMember } from '@layerbook/contracts/types';
 
+/** The owner's changes to the team; the lists are resources in the team page. */
 @Injectable({ providedIn: 'root' })
 export class TeamApi {
   private readonly http = inject(HttpClient);
-
-  load(): Promise<TeamView> {
-    return firstValueFrom(this.http.get<TeamView>('/api/team'));
-  }
 
   invite(body: InvitationCreate): Promise<TeamInvitation> {
     return firstValueFrom(this.http.post<TeamInvitation>('/api/team/invitations', body));
@@ -26,20 +17,19 @@ export class TeamApi {
   }
 
   changeRole(memberId: string, role: StaffRole): Promise<TeamMember> {
-    return firstValueFrom(
-      this.http.patch<TeamMember>(`/api/team/members/${encodeURIComponent(memberId)}`, { role }),
-    );
+    const body: MemberRoleUpdate = { role };
+    return firstValueFrom(this.http.patch<TeamMember>(memberUrl(memberId), body));
   }
 
   deactivate(memberId: string): Promise<TeamMember> {
-    return firstValueFrom(
-      this.http.post<TeamMember>(`/api/team/members/${encodeURIComponent(memberId)}/deactivate`, {}),
-    );
+    return firstValueFrom(this.http.post<TeamMember>(`${memberUrl(memberId)}/deactivate`, {}));
   }
 
   reactivate(memberId: string): Promise<TeamMember> {
-    return firstValueFrom(
-      this.http.post<TeamMember>(`/api/team/members/${encodeURIComponent(memberId)}/reactivate`, {}),
-    );
+    return firstValueFrom(this.http.post<TeamMember>(`${memberUrl(memberId)}/reactivate`, {}));
   }
+}
+
+function memberUrl(id: string): string {
+  return `/api/team/members/${encodeURIComponent(id)}`;
 }

@@ -1,19 +1,27 @@
 import { DatePipe } from '@angular/common';
+import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { MatSelectModule } from '@angular/material/select';
+import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
+import {
+  MEMBER_STATUS_LABELS,
+  STAFF_ROLES,
+  STAFF_ROLE_LABELS,
+  type ItemList,
+  type StaffRole,
+  type TeamInvitation,
+  type TeamMember,
+} from '@layerbook/contracts/types';
 import { firstValueFrom } from 'rxjs';
-import type { StaffRole, TeamInvitation, TeamMember, TeamView } from '@layerbook/contracts';
-import { STAFF_ROLES } from '../../core/auth/roles';
 import { Session } from '../../core/auth/session';
-import { toProblem } from '../../core/errors/problem';
+import { problemMessage } from '../../core/errors/problem';
+import { loadMessage } from '../../shared/forms/load-message';
 import { ConfirmDialog, type ConfirmDialogData } from '../../shared/ui/confirm-dialog';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { ROLE_WORDS } from '../../shared/ui/role-words';
 import { InviteForm } from './invite-form';
 import { TeamApi } from './team-api';
 
@@ -39,23 +47,28 @@ export class Team {
 
   protected readonly isOwner = inject(Session).isOwner;
   protected readonly roles = STAFF_ROLES;
-  protected readonly roleWords = ROLE_WORDS;
-  protected readonly view = signal<TeamView | null>(null);
-  protected readonly isLoading = signal(true);
-  protected readonly pageMessage = signal<string | null>(null);
-  protected readonly pendingInvitations = computed(
-    () => this.view()?.invitations.filter((invitation) => invitation.status === 'pending') ?? [],
+  protected readonly roleLabels = STAFF_ROLE_LABELS;
+  protected readonly statusLabels = MEMBER_STATUS_LABELS;
+
+  private readonly memberList = httpResource<ItemList<TeamMember>>(() => '/api/team/members');
+  private readonly invitationList = httpResource<ItemList<TeamInvitation>>(() => '/api/team/invitations');
+  protected readonly members = computed(() => (this.memberList.hasValue() ? this.memberList.value().items : []));
+  protected readonly pendingInvitations = computed(() =>
+    this.invitationList.hasValue() ? this.invitationList.value().items.filter((invitation) => invitation.status === 'pending') : [],
   );
+  protected readonly hasMembers = computed(() => this.memberList.hasValue());
+  protected readonly isLoading = computed(() => !this.hasMembers() && this.memberList.isLoading());
+  private readonly actionMessage = signal<string | null>(null);
+  private readonly membersMessage = loadMessage(this.memberList);
+  private readonly invitationsMessage = loadMessage(this.invitationList);
+  protected readonly pageMessage = computed(() => this.membersMessage() ?? this.invitationsMessage() ?? this.actionMessage());
 
-  constructor() {
-    void this.reload();
-  }
-
-  protected async changeRole(member: TeamMember, role: StaffRole): Promise<void> {
-    await this.act(
-      () => this.api.changeRole(member.id, role),
-      `${member.name} is now ${ROLE_WORDS[role].label}.`,
-    );
+  protected async changeRole(select: MatSelect, member: TeamMember, role: StaffRole): Promise<void> {
+    const changed = await this.act(() => this.api.changeRole(member.id, role), `${member.name} is now ${STAFF_ROLE_LABELS[role]}.`);
+    if (!changed) {
+      // The list reloads with the same role, which would leave the refused choice showing.
+      select.writeValue(member.role);
+    }
   }
 
   protected async deactivate(member: TeamMember): Promise<void> {
@@ -72,7 +85,7 @@ export class Team {
   protected async reactivate(member: TeamMember): Promise<void> {
     const confirmed = await this.confirm({
       title: `Reactivate ${member.name}?`,
-      message: `${member.name} will be able to sign in again as ${ROLE_WORDS[member.role].label}.`,
+      message: `${member.name} will be able to sign in again as ${STAFF_ROLE_LABELS[member.role]}.`,
       confirmLabel: 'Reactivate',
     });
     if (confirmed) {
@@ -91,39 +104,29 @@ export class Team {
     }
   }
 
-  protected async showInvitation(invitation: TeamInvitation): Promise<void> {
+  protected showInvitation(invitation: TeamInvitation): void {
     this.snackBar.open(`Invitation sent to ${invitation.email}.`, 'Close', { duration: 5000 });
-    await this.reload();
+    this.invitationList.reload();
   }
 
-  /** Runs one change, then reloads so the table shows what the server holds (or puts a refused role back). */
-  private async act(change: () => Promise<unknown>, done: string): Promise<void> {
-    this.pageMessage.set(null);
+  /** Runs one change, then reloads so the page shows what the server holds. True when it was made. */
+  private async act(change: () => Promise<unknown>, done: string): Promise<boolean> {
+    this.actionMessage.set(null);
+    let isDone = false;
     try {
       await change();
       this.snackBar.open(done, 'Close', { duration: 5000 });
+      isDone = true;
     } catch (error) {
-      const problem = toProblem(error);
-      this.pageMessage.set(problem.detail ?? problem.title);
+      this.actionMessage.set(problemMessage(error));
     }
-    await this.reload();
+    this.memberList.reload();
+    this.invitationList.reload();
+    return isDone;
   }
 
   private async confirm(data: ConfirmDialogData): Promise<boolean> {
-    const ref = this.dialog.open<ConfirmDialog, ConfirmDialogData, boolean>(ConfirmDialog, {
-      data,
-      width: '28rem',
-    });
+    const ref = this.dialog.open<ConfirmDialog, ConfirmDialogData, boolean>(ConfirmDialog, { data, width: '28rem' });
     return (await firstValueFrom(ref.afterClosed())) === true;
-  }
-
-  private async reload(): Promise<void> {
-    try {
-      this.view.set(await this.api.load());
-    } catch (error) {
-      this.pageMessage.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
-    }
   }
 }

@@ -1,7 +1,5 @@
 import { AbstractControl, ValidationErrors } from '@angular/forms';
-
-/** The API's amount pattern (contracts: moneyAmount), after dropping thousands separators. */
-const AMOUNT = /^\d{1,12}(\.\d{1,2})?$/;
+import { MONEY_AMOUNT_PATTERN } from '@layerbook/contracts/types';
 
 /** "12,500" → "12500"; blank → null. The string is sent as typed: money is never a float here. */
 export function toAmount(typed: string): string | null {
@@ -9,9 +7,10 @@ export function toAmount(typed: string): string | null {
   return plain === '' ? null : plain;
 }
 
+/** The API's amount pattern (contracts: moneyAmount), after dropping thousands separators. */
 export function amountText(control: AbstractControl<string>): ValidationErrors | null {
   const amount = toAmount(control.value ?? '');
-  return amount === null || AMOUNT.test(amount) ? null : { amount: true };
+  return amount === null || MONEY_AMOUNT_PATTERN.test(amount) ? null : { amount: true };
 }
 
 export const AMOUNT_WORDS = {
