@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { PortalLinkRequest, PortalRedeemRequest, PortalSession } from '@layerbook/contracts';
+import type { PortalLinkRequest, PortalRedeemRequest, PortalSession } from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
 
 /** Clients sign in with a one-time link sent by e-mail; there are no client passwords. */

@@ -2,9 +2,9 @@ import { ChangeDetectionStrategy, Component, afterNextRender, inject, input, sig
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
+import { isWellFormedLinkToken } from '@layerbook/contracts/types';
 import { toProblem } from '../../core/errors/problem';
 import { AuthFrame } from './auth-frame';
-import { isWellFormedToken } from './link-token';
 import { nextUrl } from './next-url';
 import { PortalAuth } from './portal-auth';
 
@@ -38,7 +38,7 @@ export class SignInLink {
 
   private async redeem(): Promise<void> {
     const token = this.token();
-    if (!isWellFormedToken(token)) {
+    if (!isWellFormedLinkToken(token)) {
       this.state.set('incomplete');
       return;
     }

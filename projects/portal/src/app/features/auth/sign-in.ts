@@ -4,9 +4,9 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { applyProblem } from '../../core/errors/apply-problem';
-import { toProblem } from '../../core/errors/problem';
+import { EMAIL_MAX_LENGTH } from '@layerbook/contracts/types';
 import { hydratedSignal } from '../../shared/forms/hydrated';
+import { Submission } from '../../shared/forms/submission';
 import { errorText } from '../../shared/forms/error-text';
 import { EMAIL_WORDS } from '../../shared/forms/field-words';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -32,10 +32,9 @@ export class SignIn {
   private readonly auth = inject(PortalAuth);
 
   protected readonly form = inject(NonNullableFormBuilder).group({
-    email: ['', [requiredText, Validators.email, Validators.maxLength(254)]],
+    email: ['', [requiredText, Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
   });
-  protected readonly isBusy = signal(false);
-  protected readonly formMessage = signal<string | null>(null);
+  protected readonly submission = new Submission();
   /** The address the link went to; set once the request is accepted. */
   protected readonly sentTo = signal<string | null>(null);
   protected readonly errorText = errorText;
@@ -43,21 +42,11 @@ export class SignIn {
   protected readonly words = { email: EMAIL_WORDS };
 
   protected async sendLink(): Promise<void> {
-    this.formMessage.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.isBusy.set(true);
-    try {
-      const email = this.form.getRawValue().email.trim();
+    const email = this.form.getRawValue().email.trim();
+    await this.submission.send(this.form, async () => {
       await this.auth.requestLink({ email });
       this.sentTo.set(email);
-    } catch (error) {
-      this.formMessage.set(applyProblem(this.form, toProblem(error)));
-    } finally {
-      this.isBusy.set(false);
-    }
+    });
   }
 
   protected startAgain(): void {

@@ -2,7 +2,8 @@ import { isPlatformServer } from '@angular/common';
 import { PLATFORM_ID, RESPONSE_INIT, TransferState, inject, makeStateKey } from '@angular/core';
 import type { ResolveFn } from '@angular/router';
 import { toProblem } from '../../core/errors/problem';
-import { InquiryApi, type PublicFirm } from './inquiry-api';
+import type { PublicFirm } from '@layerbook/contracts/types';
+import { InquiryApi } from './inquiry-api';
 
 export type FirmLookup =
   | { readonly kind: 'found'; readonly firm: PublicFirm }

@@ -1,14 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { PublicInquiryRequest } from '@layerbook/contracts';
-
-/** What GET /api/public/firms/:slug answers: enough to head the form, plus the signed form stamp. */
-export interface PublicFirm {
-  readonly name: string;
-  readonly slug: string;
-  readonly formStamp: string;
-}
+import type { Notice, PublicFirm, PublicInquiryRequest } from '@layerbook/contracts/types';
 
 /** The form's body; `consent` is whatever the box says, and the API refuses anything but true. */
 export type InquiryBody = Omit<PublicInquiryRequest, 'consent'> & { readonly consent: boolean };
@@ -19,10 +12,14 @@ export class InquiryApi {
   private readonly http = inject(HttpClient);
 
   firm(slug: string): Promise<PublicFirm> {
-    return firstValueFrom(this.http.get<PublicFirm>(`/api/public/firms/${encodeURIComponent(slug)}`));
+    return firstValueFrom(this.http.get<PublicFirm>(firmUrl(slug)));
   }
 
-  async send(slug: string, body: InquiryBody): Promise<void> {
-    await firstValueFrom(this.http.post(`/api/public/firms/${encodeURIComponent(slug)}/inquiries`, body));
+  send(slug: string, body: InquiryBody): Promise<Notice> {
+    return firstValueFrom(this.http.post<Notice>(`${firmUrl(slug)}/inquiries`, body));
   }
+}
+
+function firmUrl(slug: string): string {
+  return `/api/public/firms/${encodeURIComponent(slug)}`;
 }

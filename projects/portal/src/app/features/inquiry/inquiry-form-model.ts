@@ -1,8 +1,17 @@
 import { AbstractControl, FormControl, FormGroup, ValidationErrors, ValidatorFn, Validators } from '@angular/forms';
+import {
+  EMAIL_MAX_LENGTH,
+  INQUIRY_LIMITS as L,
+  PHONE_MAX_LENGTH,
+  YEAR_BUILT_MAX,
+  YEAR_BUILT_MIN,
+  isReferralSource,
+  type BudgetRange,
+  type PublicSource,
+} from '@layerbook/contracts/types';
 import { ErrorWords } from '../../shared/forms/error-text';
-import { EMAIL_WORDS } from '../../shared/forms/field-words';
+import { EMAIL_WORDS, tooLong } from '../../shared/forms/field-words';
 import { requiredText } from '../../shared/forms/text-validators';
-import { isReferral } from './inquiry-choices';
 import type { InquiryBody } from './inquiry-api';
 
 /**
@@ -16,18 +25,18 @@ export function inquiryForm(formStamp: string) {
   const box = (...validators: ((c: AbstractControl) => ValidationErrors | null)[]) =>
     new FormControl(false, { nonNullable: true, validators });
   return new FormGroup({
-    name: text('', requiredText, Validators.maxLength(120)),
-    email: text('', requiredText, Validators.email, Validators.maxLength(254)),
-    phone: text('', Validators.maxLength(40)),
-    siteAddress: text('', requiredText, Validators.maxLength(300)),
+    name: text('', requiredText, Validators.maxLength(L.contactName)),
+    email: text('', requiredText, Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)),
+    phone: text('', Validators.maxLength(PHONE_MAX_LENGTH)),
+    siteAddress: text('', requiredText, Validators.maxLength(L.siteAddress)),
     yearBuilt: text('', yearBuiltUnlessUnknown),
     yearBuiltUnknown: box(),
-    rooms: text('', requiredText, Validators.maxLength(2000)),
-    finishIdea: text('', Validators.maxLength(2000)),
-    timeline: text('', Validators.maxLength(200)),
+    rooms: text('', requiredText, Validators.maxLength(L.rooms)),
+    finishIdea: text('', Validators.maxLength(L.finishIdea)),
+    timeline: text('', Validators.maxLength(L.timeline)),
     budgetRange: text(''),
     heardFrom: text('', Validators.required),
-    referrerName: text('', referrerForReferrals, Validators.maxLength(120)),
+    referrerName: text('', referrerForReferrals, Validators.maxLength(L.referrerName)),
     consent: box(Validators.requiredTrue),
     website: text(''),
     startedAt: text(formStamp),
@@ -42,20 +51,20 @@ const CHECKBOXES = ['yearBuiltUnknown', 'consent'] as const satisfies readonly F
 
 /** Words beside each field, matching the API's messages (packages/contracts, publicInquiryRequest). */
 export const INQUIRY_WORDS = {
-  name: { required: 'Enter your name.', maxlength: 'Use at most 120 characters.' },
+  name: { required: 'Enter your name.', ...tooLong(L.contactName) },
   email: EMAIL_WORDS,
-  phone: { maxlength: 'Use at most 40 characters.' },
-  siteAddress: { required: 'Enter the address of the place to be finished.', maxlength: 'Use at most 300 characters.' },
+  phone: tooLong(PHONE_MAX_LENGTH),
+  siteAddress: { required: 'Enter the address of the place to be finished.', ...tooLong(L.siteAddress) },
   yearBuilt: {
     required: 'Enter the year the building was built, or tick "Not sure".',
     year: 'Enter a year like 1925.',
-    yearRange: 'Enter a year between 1600 and 2100.',
+    yearRange: `Enter a year between ${YEAR_BUILT_MIN} and ${YEAR_BUILT_MAX}.`,
   },
-  rooms: { required: 'Tell us which rooms and surfaces.', maxlength: 'Use at most 2000 characters.' },
-  finishIdea: { maxlength: 'Use at most 2000 characters.' },
-  timeline: { maxlength: 'Use at most 200 characters.' },
+  rooms: { required: 'Tell us which rooms and surfaces.', ...tooLong(L.rooms) },
+  finishIdea: tooLong(L.finishIdea),
+  timeline: tooLong(L.timeline),
   heardFrom: { required: 'Choose how you heard of us.' },
-  referrerName: { required: 'Tell us who referred you, so we can thank them.', maxlength: 'Use at most 120 characters.' },
+  referrerName: { required: 'Tell us who referred you, so we can thank them.', ...tooLong(L.referrerName) },
   consent: { required: 'Tick the box so we may contact you about this inquiry.' },
 } as const satisfies Partial<Record<FieldName, ErrorWords>>;
 
@@ -68,12 +77,12 @@ function yearBuiltUnlessUnknown(control: AbstractControl): ValidationErrors | nu
     return { year: true };
   }
   const value = Number(year);
-  return value >= 1600 && value <= 2100 ? null : { yearRange: true };
+  return value >= YEAR_BUILT_MIN && value <= YEAR_BUILT_MAX ? null : { yearRange: true };
 }
 
 function referrerForReferrals(control: AbstractControl): ValidationErrors | null {
   const heardFrom: unknown = control.parent?.get('heardFrom')?.value;
-  const isNeeded = typeof heardFrom === 'string' && isReferral(heardFrom);
+  const isNeeded = typeof heardFrom === 'string' && isReferralSource(heardFrom);
   return isNeeded && String(control.value ?? '').trim() === '' ? { required: true } : null;
 }
 
@@ -136,8 +145,10 @@ export function toBody(value: InquiryFormValue): InquiryBody {
     rooms: value.rooms.trim(),
     finishIdea: value.finishIdea.trim(),
     timeline: value.timeline.trim(),
-    budgetRange: value.budgetRange as InquiryBody['budgetRange'],
-    heardFrom: value.heardFrom as InquiryBody['heardFrom'],
+    // The selects offer only the contract's choices; anything else (a hand-made post) is sent
+    // as it is, and the API names the field it refuses.
+    budgetRange: value.budgetRange as BudgetRange,
+    heardFrom: value.heardFrom as PublicSource,
     referrerName: value.referrerName.trim(),
     consent: value.consent,
     website: value.website,

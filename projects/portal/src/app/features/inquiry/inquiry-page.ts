@@ -18,7 +18,15 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Title } from '@angular/platform-browser';
 import { ActivatedRoute, Router } from '@angular/router';
-import type { FieldProblem, Problem } from '@layerbook/contracts';
+import {
+  BUDGET_RANGES,
+  PUBLIC_BUDGET_LABELS,
+  PUBLIC_SOURCES,
+  PUBLIC_SOURCE_LABELS,
+  isReferralSource,
+  type FieldProblem,
+  type Problem,
+} from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
@@ -26,7 +34,6 @@ import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import type { FirmLookup } from './firm-lookup';
 import { InquiryApi } from './inquiry-api';
-import { BUDGET_CHOICES, HEARD_FROM_CHOICES, isReferral } from './inquiry-choices';
 import { INQUIRY_WORDS, fromPosted, inquiryForm, linkDependentFields, refusedAsSent, toBody } from './inquiry-form-model';
 import { postedRefusal, type PostedRefusal } from './posted-refusal';
 import { PublicFrame } from './public-frame';
@@ -73,8 +80,10 @@ export class InquiryPage {
 
   protected readonly form = inquiryForm(this.firm?.formStamp ?? '');
   protected readonly words = INQUIRY_WORDS;
-  protected readonly budgetChoices = BUDGET_CHOICES;
-  protected readonly heardFromChoices = HEARD_FROM_CHOICES;
+  protected readonly budgets = BUDGET_RANGES;
+  protected readonly budgetLabels = PUBLIC_BUDGET_LABELS;
+  protected readonly sources = PUBLIC_SOURCES;
+  protected readonly sourceLabels = PUBLIC_SOURCE_LABELS;
   protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
   protected readonly isBusy = signal(false);
@@ -110,7 +119,7 @@ export class InquiryPage {
     const chosen = toSignal(heardFrom.valueChanges, { initialValue: heardFrom.value });
     const referrer = toSignal(referrerName.valueChanges, { initialValue: referrerName.value });
     const referrerStatus = toSignal(referrerName.statusChanges, { initialValue: referrerName.status });
-    this.isReferralChosen = computed(() => isReferral(chosen()));
+    this.isReferralChosen = computed(() => isReferralSource(chosen()));
     this.showReferrer = computed(
       () => !this.isHydrated() || this.isReferralChosen() || referrer().trim() !== '' || referrerStatus() === 'INVALID',
     );

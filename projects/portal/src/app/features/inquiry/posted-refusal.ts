@@ -1,6 +1,6 @@
 import { isPlatformServer } from '@angular/common';
 import { PLATFORM_ID, REQUEST_CONTEXT, RESPONSE_INIT, TransferState, inject, makeStateKey } from '@angular/core';
-import type { FieldProblem } from '@layerbook/contracts';
+import type { FieldProblem } from '@layerbook/contracts/types';
 
 /** A no-script post the API refused: what the prospect sent, and what was wrong with it. */
 export interface PostedRefusal {
