@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import type { ResultJson } from './result-json';
+import type { EstimateResultJson } from '@layerbook/domain';
 
 /** Alternates the client may add, each priced on its own (no minimum charge). */
 @Component({
@@ -40,6 +40,6 @@ import type { ResultJson } from './result-json';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class AddOnsSection {
-  readonly result = input.required<ResultJson>();
+  readonly result = input.required<EstimateResultJson>();
   readonly currency = input.required<string>();
 }

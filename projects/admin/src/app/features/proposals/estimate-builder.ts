@@ -10,30 +10,30 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { DomainInputError, measureSurface } from '@layerbook/domain';
+import type { EstimateView } from '@layerbook/contracts/types';
+import { DomainInputError, measureSurface, measureText, type EstimateResultJson } from '@layerbook/domain';
 import { merge } from 'rxjs';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { AddOnsSection } from './addons-section';
-import { EstimateApi, type EstimateView } from './estimate-api';
+import { EstimateApi } from './estimate-api';
 import { MAX_OPTIONS, WORDS, estimateForm, fillForm, nextOptionId, optionGroup, readInputs } from './estimate-form';
-import { measureUnit, roundTo, statusWord } from './estimate-words';
+import { statusWord } from './estimate-words';
 import { ExtrasFields } from './extras-fields';
 import { applySaveProblem, targetKey } from './field-targets';
 import { LabourSection } from './labour-section';
 import { type LiveAttempt, computeLive } from './live-estimate';
 import { MaterialsSection } from './materials-section';
 import { PriceSection } from './price-section';
-import type { ResultJson } from './result-json';
 import { SafetySection } from './safety-section';
 import { ScheduleSection } from './schedule-section';
 import { SurfaceFinishes } from './surface-finishes';
 
 type Shown =
-  | { readonly source: 'server' | 'live'; readonly result: ResultJson }
-  | { readonly source: 'stale'; readonly result: ResultJson | null; readonly message: string };
+  | { readonly source: 'server' | 'live'; readonly result: EstimateResultJson }
+  | { readonly source: 'stale'; readonly result: EstimateResultJson | null; readonly message: string };
 
 /**
  * The estimate builder: the office chooses finishes per surface in up to four options and adds
@@ -118,7 +118,7 @@ export class EstimateBuilder implements OnInit {
       for (const s of room.surfaces) {
         try {
           const m = measureSurface(s.shape, takeoff);
-          out.set(s.id, `Measured ${roundTo(m.quantity, 2)} ${measureUnit(context.lengthUnit, m.measure)}`);
+          out.set(s.id, `Measured ${measureText(m, context.lengthUnit)}`);
         } catch (error) {
           if (!(error instanceof DomainInputError)) throw error;
           out.set(s.id, `Cannot be measured: ${error.message}`);
@@ -138,7 +138,7 @@ export class EstimateBuilder implements OnInit {
   });
 
   /** The last numbers the engine gave for this option, kept while a change cannot be priced. */
-  private readonly lastGood = linkedSignal<LiveAttempt | null, { variantId: string; result: ResultJson } | null>({
+  private readonly lastGood = linkedSignal<LiveAttempt | null, { variantId: string; result: EstimateResultJson } | null>({
     source: this.attempt,
     computation: (attempt, previous) => {
       if (attempt?.kind === 'ok') return { variantId: attempt.variantId, result: attempt.result };

@@ -1,21 +1,23 @@
 import { AbstractControl, FormArray, FormControl, FormGroup, FormRecord, ValidationErrors, Validators } from '@angular/forms';
-import type { EstimateInputs } from '@layerbook/contracts';
-import type { EstimateContext } from '@layerbook/contracts/engine';
+import { COST_LINE_KINDS, ESTIMATE_INPUT_LIMITS as L, type CostLineKind, type EstimateContext, type EstimateInputs } from '@layerbook/contracts/types';
 import { amountText, toAmount } from '../../shared/forms/money-input';
 import { fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { requiredText } from '../../shared/forms/text-validators';
 
-export const MAX_OPTIONS = 4;
-export const MAX_LINES = 20;
+export const MAX_OPTIONS = L.optionsMax;
+/** Add-ons and each kind of cost line have the same cap. */
+export const MAX_LINES = Math.min(L.addOnsMax, L.costLinesMax);
+
+const atMost = (max: number) => `Use at most ${max} characters.`;
 
 /** Mirrors the contracts' schema (proposals/estimate.ts) so both sides say the same. */
 export const WORDS = {
-  title: { required: 'Give the estimate a title.', maxlength: 'Use at most 160 characters.' },
+  title: { required: 'Give the estimate a title.', maxlength: atMost(L.titleMax) },
   startDate: { required: 'Enter a date.', matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.' },
-  optionLabel: { required: 'Name this option.', maxlength: 'Use at most 80 characters.' },
-  addOnLabel: { required: 'Name this add-on.', maxlength: 'Use at most 120 characters.' },
-  costLabel: { required: 'Name this cost.', maxlength: 'Use at most 120 characters.' },
-  hours: { required: 'Enter hours.', hours: 'Enter hours from 0 to 10000, like 6.5.' },
+  optionLabel: { required: 'Name this option.', maxlength: atMost(L.optionLabelMax) },
+  addOnLabel: { required: 'Name this add-on.', maxlength: atMost(L.addOnLabelMax) },
+  costLabel: { required: 'Name this cost.', maxlength: atMost(L.costLabelMax) },
+  hours: { required: 'Enter hours.', hours: `Enter hours from 0 to ${L.addOnHoursMax}, like 6.5.` },
   amount: { required: 'Enter an amount, like 1250.00.', amount: 'Enter an amount with at most two decimals, like 1250.00.' },
   percent: { required: 'Enter a percentage.', percent: 'Enter more than 0 and at most 100.' },
   rate: { amount: 'Enter a price with at most two decimals, like 6.00.' },
@@ -26,14 +28,14 @@ function hoursText(control: AbstractControl<string>): ValidationErrors | null {
   const typed = (control.value ?? '').trim();
   if (typed === '') return null;
   const n = Number(typed);
-  return Number.isFinite(n) && n >= 0 && n <= 10_000 ? null : { hours: true };
+  return Number.isFinite(n) && n >= 0 && n <= L.addOnHoursMax ? null : { hours: true };
 }
 
 function percentText(control: AbstractControl<string>): ValidationErrors | null {
   const typed = (control.value ?? '').trim();
   if (typed === '') return null;
   const n = Number(typed);
-  return Number.isFinite(n) && n > 0 && n <= 100 ? null : { percent: true };
+  return Number.isFinite(n) && n > 0 && n <= L.discountPercentMax ? null : { percent: true };
 }
 
 const text = (value: string, max: number) => new FormControl(value, { nonNullable: true, validators: [requiredText, Validators.maxLength(max)] });
@@ -53,7 +55,7 @@ export type AddOnGroup = FormGroup<{
 }>;
 export type CostLineGroup = FormGroup<{ label: FormControl<string>; amount: FormControl<string> }>;
 export type DiscountKind = 'none' | 'percent' | 'amount';
-export type CostLineKind = 'equipment' | 'subcontracts' | 'sundries';
+export type { CostLineKind };
 
 export function optionGroup(context: EstimateContext, id: string, label: string, finishes: Readonly<Record<string, string>>): OptionGroup {
   const record = new FormRecord<FormControl<string>>({});
@@ -62,25 +64,25 @@ export function optionGroup(context: EstimateContext, id: string, label: string,
       record.addControl(surface.id, new FormControl(finishes[surface.id] ?? '', { nonNullable: true }));
     }
   }
-  return new FormGroup({ id: new FormControl(id, { nonNullable: true }), label: text(label, 80), finishes: record });
+  return new FormGroup({ id: new FormControl(id, { nonNullable: true }), label: text(label, L.optionLabelMax), finishes: record });
 }
 
 export function addOnGroup(id: string, label = '', labourHours = '', materialsCost = ''): AddOnGroup {
   return new FormGroup({
     id: new FormControl(id, { nonNullable: true }),
-    label: text(label, 120),
+    label: text(label, L.addOnLabelMax),
     labourHours: new FormControl(labourHours, { nonNullable: true, validators: [Validators.required, hoursText] }),
     materialsCost: amount(materialsCost),
   });
 }
 
 export function costLineGroup(label = '', value = ''): CostLineGroup {
-  return new FormGroup({ label: text(label, 120), amount: amount(value) });
+  return new FormGroup({ label: text(label, L.costLabelMax), amount: amount(value) });
 }
 
 export function estimateForm() {
   return new FormGroup({
-    title: text('', 160),
+    title: text('', L.titleMax),
     startDate: new FormControl<Date | null>(null, Validators.required),
     isOccupied: new FormControl(false, { nonNullable: true }),
     variants: new FormArray<OptionGroup>([]),
@@ -117,7 +119,7 @@ export function fillForm(form: EstimateForm, context: EstimateContext, inputs: E
   }
   c.addOns.clear({ emitEvent: false });
   for (const a of inputs.addOns) c.addOns.push(addOnGroup(a.id, a.label, String(a.labourHours), a.materialsCost), { emitEvent: false });
-  for (const kind of ['equipment', 'subcontracts', 'sundries'] as const) {
+  for (const kind of COST_LINE_KINDS) {
     c[kind].clear({ emitEvent: false });
     for (const line of inputs[kind]) c[kind].push(costLineGroup(line.label, line.amount), { emitEvent: false });
   }
@@ -156,7 +158,7 @@ export function readInputs(form: EstimateForm, context: EstimateContext): Estima
       id: o.id,
       label: o.label.trim(),
       surfaces: surfaceOrder.filter((id) => (o.finishes[id] ?? '') !== '').map((id) => ({ surfaceId: id, finishSystemId: o.finishes[id]! })),
-    })) as EstimateInputs['variants'],
+    })),
     addOns: v.addOns.map((a) => ({ id: a.id, label: a.label.trim(), labourHours: Number(a.labourHours.trim() || '0'), materialsCost: toAmount(a.materialsCost) ?? '0' })),
     equipment: v.equipment.map(costLine),
     subcontracts: v.subcontracts.map(costLine),

@@ -1,17 +1,21 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, OnInit, inject, signal } from '@angular/core';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, linkedSignal, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { toProblem } from '../../core/errors/problem';
+import type { EstimateListItem, KeysetPage } from '@layerbook/contracts/types';
 import { FirmCurrency } from '../../core/firm/firm-currency';
+import { loadMessage } from '../../shared/forms/load-message';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { EstimateApi, type EstimateListItem } from './estimate-api';
+import { ESTIMATES_URL } from './estimate-api';
 import { statusWord } from './estimate-words';
 
-/** Estimates: every estimate of the firm, newest change first. */
+const PAGE_SIZE = 50;
+
+/** Estimates: every estimate of the firm, newest first, a page at a time. */
 @Component({
   selector: 'lb-estimate-list',
   imports: [DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
@@ -69,6 +73,9 @@ import { statusWord } from './estimate-words';
           </tbody>
         </table>
       </div>
+      @if (nextCursor(); as cursor) {
+        <button mat-stroked-button type="button" class="more" (click)="showMore(cursor)" [disabled]="isLoading()">Show more estimates</button>
+      }
     </section>
   `,
   styles: `
@@ -129,30 +136,42 @@ import { statusWord } from './estimate-words';
     .none {
       padding: 1.5rem 1rem;
     }
+    .more {
+      margin-top: 1rem;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class EstimateList implements OnInit {
-  private readonly api = inject(EstimateApi);
   protected readonly currency = inject(FirmCurrency);
 
-  protected readonly items = signal<readonly EstimateListItem[]>([]);
-  protected readonly isLoading = signal(true);
-  protected readonly message = signal<string | null>(null);
+  /** The cursor of the page being read; null for the first. */
+  private readonly after = signal<string | null>(null);
+  private readonly page = httpResource<KeysetPage<EstimateListItem>>(() => {
+    const after = this.after();
+    const params: Record<string, string | number> = { limit: PAGE_SIZE };
+    if (after) params['after'] = after;
+    return { url: ESTIMATES_URL, params };
+  });
+  private readonly lastPage = computed(() => (this.page.hasValue() ? this.page.value() : null));
+  /** Every page read so far: a further page is added below the ones shown. */
+  protected readonly items = linkedSignal<KeysetPage<EstimateListItem> | null, readonly EstimateListItem[]>({
+    source: this.lastPage,
+    computation: (page, previous) => {
+      if (!page) return previous?.value ?? [];
+      return this.after() === null ? page.items : [...(previous?.value ?? []), ...page.items];
+    },
+  });
+  protected readonly nextCursor = computed(() => this.lastPage()?.nextCursor ?? null);
+  protected readonly isLoading = this.page.isLoading;
+  protected readonly message = loadMessage(this.page);
   protected readonly statusWord = statusWord;
 
   ngOnInit(): void {
     void this.currency.load();
-    void this.load();
   }
 
-  private async load(): Promise<void> {
-    try {
-      this.items.set((await this.api.list()).items);
-    } catch (error) {
-      this.message.set(toProblem(error).title);
-    } finally {
-      this.isLoading.set(false);
-    }
+  protected showMore(cursor: string): void {
+    this.after.set(cursor);
   }
 }

@@ -1,67 +1,19 @@
-import type { LabourMultipliers, QuantityUnit } from '@layerbook/domain';
+import { ESTIMATE_STATUS_LABELS, MULTIPLIER_LABELS, type EstimateStatus, type MultiplierName } from '@layerbook/contracts/types';
+import { outlineFinish, roundedNumber, waitText, type FinishLayer } from '@layerbook/domain';
 
-export const STATUS_WORDS: Readonly<Record<string, string>> = {
-  draft: 'Draft',
-  proposed: 'Proposal sent',
-  accepted: 'Accepted',
-  declined: 'Declined',
-};
+export const statusWord = (status: EstimateStatus): string => ESTIMATE_STATUS_LABELS[status];
 
-export function statusWord(status: string): string {
-  return STATUS_WORDS[status] ?? status;
+/** "ceiling ×1.25 · dome or vault ×1.5", or "no extra time"; the names are the library's. */
+export function multiplierChain(chain: ReadonlyArray<{ name: MultiplierName; factor: number }>): string {
+  if (chain.length === 0) return 'no extra time';
+  return chain.map((step) => `${MULTIPLIER_LABELS[step.name].toLowerCase()} ×${roundedNumber(step.factor, 3)}`).join(' · ');
 }
 
-const MULTIPLIER_WORDS: Readonly<Record<keyof LabourMultipliers, string>> = {
-  ceiling: 'ceiling',
-  height: 'high work',
-  curvedWall: 'curved wall',
-  curvedCeiling: 'curved ceiling',
-  occupied: 'lived-in home',
-};
-
-/** "ceiling ×1.25 · curved ceiling ×1.5", or "no extra time". */
-export function multiplierChain(chain: ReadonlyArray<{ name: keyof LabourMultipliers; factor: number }>): string {
-  if (chain.length === 0) {
-    return 'no extra time';
-  }
-  return chain.map((step) => `${MULTIPLIER_WORDS[step.name] ?? step.name} ×${roundTo(step.factor, 3)}`).join(' · ');
-}
-
-const UNIT_WORDS: Readonly<Record<QuantityUnit, string>> = {
-  mL: 'mL',
-  L: 'L',
-  cm3: 'cm³',
-  m3: 'm³',
-  in3: 'in³',
-  ft3: 'ft³',
-  tsp: 'tsp',
-  tbsp: 'tbsp',
-  floz: 'fl oz',
-  cup: 'cups',
-  pint: 'pt',
-  quart: 'qt',
-  gallon: 'gal',
-  g: 'g',
-  kg: 'kg',
-  oz: 'oz',
-  lb: 'lb',
-};
-
-export function unitWord(unit: QuantityUnit): string {
-  return UNIT_WORDS[unit] ?? unit;
-}
-
-/** For display only: the numbers themselves keep full precision. */
-export function roundTo(value: number, digits: number): string {
-  return new Intl.NumberFormat('en-US', { maximumFractionDigits: digits }).format(value);
-}
-
-export function hoursText(hours: number): string {
-  return `${roundTo(hours, 2)} h`;
-}
-
-export function measureUnit(lengthUnit: 'ft' | 'm', measure: 'area' | 'length'): string {
-  return measure === 'area' ? `${lengthUnit}²` : lengthUnit === 'ft' ? 'ft (running)' : 'm (running)';
+/** A finish system summed up as the library sums it up: "3 layers · waits 100 h (4 days 4 h)". */
+export function finishOutlineText(layers: readonly FinishLayer[]): string {
+  const outline = outlineFinish(layers);
+  const count = `${outline.layerCount} ${outline.layerCount === 1 ? 'layer' : 'layers'}`;
+  return outline.totalWaitHours === 0 ? `${count} · no waits` : `${count} · waits ${waitText(outline.totalWaitHours)}`;
 }
 
 /** Ratios come as decimal strings ("0.5385"); Intl reads them exactly. */
@@ -76,16 +28,13 @@ export function clockText(hourOfDay: number, locale: string): string {
   return new Intl.DateTimeFormat(locale, { hour: 'numeric', minute: '2-digit', timeZone: 'UTC' }).format(date);
 }
 
-/** "Tue 8:00 AM" for a calendar date and an hour of that day. */
+/** "Tue, Jun 10, 8:00 AM" for a calendar date and an hour of that day. */
 export function dayAndClock(isoDate: string, hourOfDay: number, locale: string): string {
-  const day = new Intl.DateTimeFormat(locale, { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(
-    new Date(`${isoDate}T00:00:00Z`),
-  );
+  const day = new Intl.DateTimeFormat(locale, { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`));
   return `${day}, ${clockText(hourOfDay, locale)}`;
 }
 
+/** "Tuesday, Jun 10". */
 export function dayWords(isoDate: string, locale: string): string {
-  return new Intl.DateTimeFormat(locale, { weekday: 'long', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(
-    new Date(`${isoDate}T00:00:00Z`),
-  );
+  return new Intl.DateTimeFormat(locale, { weekday: 'long', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`));
 }

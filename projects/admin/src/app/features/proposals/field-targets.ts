@@ -1,5 +1,5 @@
-import type { EstimateInputs, Problem } from '@layerbook/contracts';
-import { assembleEstimateInput, type EstimateContext } from '@layerbook/contracts/engine';
+import { assembleEstimateInput } from '@layerbook/contracts/engine';
+import type { EstimateContext, EstimateInputs, Problem } from '@layerbook/contracts/types';
 import type { EstimateInput } from '@layerbook/domain';
 import type { EstimateForm } from './estimate-form';
 

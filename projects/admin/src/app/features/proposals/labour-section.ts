@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import type { EngineRoom } from '@layerbook/contracts/engine';
-import { hoursText, measureUnit, multiplierChain, roundTo } from './estimate-words';
-import type { ResultJson } from './result-json';
+import type { EngineRoom } from '@layerbook/contracts/types';
+import { hoursText, measureText, roundedNumber, type EstimateResultJson } from '@layerbook/domain';
+import { multiplierChain } from './estimate-words';
 
 /** Hours per surface and layer, with each multiplier that applied, then the crew's time. */
 @Component({
@@ -49,7 +49,7 @@ import type { ResultJson } from './result-json';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class LabourSection {
-  readonly result = input.required<ResultJson>();
+  readonly result = input.required<EstimateResultJson>();
   readonly rooms = input.required<readonly EngineRoom[]>();
   readonly lengthUnit = input.required<'ft' | 'm'>();
 
@@ -57,7 +57,7 @@ export class LabourSection {
     const roomNames = new Map(this.rooms().map((r) => [r.id, r.name]));
     return this.result().surfaces.map((s) => ({
       surfaceId: s.surfaceId,
-      title: `${roomNames.get(s.roomId) ?? ''} – ${s.name} (${roundTo(s.measure.quantity, 2)} ${measureUnit(this.lengthUnit(), s.measure.measure)})`,
+      title: `${roomNames.get(s.roomId) ?? ''} – ${s.name} (${measureText(s.measure, this.lengthUnit())})`,
       layers: s.layers.map((l) => ({
         layerId: l.layerId,
         name: l.name,
@@ -73,6 +73,6 @@ export class LabourSection {
   }
 
   protected days(value: number): string {
-    return roundTo(value, 1);
+    return roundedNumber(value, 1);
   }
 }

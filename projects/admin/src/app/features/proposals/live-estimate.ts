@@ -1,11 +1,10 @@
-import type { EstimateInputs } from '@layerbook/contracts';
-import { assembleEstimateInput, type EstimateContext } from '@layerbook/contracts/engine';
-import { DomainInputError, computeEstimate } from '@layerbook/domain';
+import { assembleEstimateInput } from '@layerbook/contracts/engine';
+import type { EstimateContext, EstimateInputs } from '@layerbook/contracts/types';
+import { DomainInputError, computeEstimate, toResultJson, type EstimateResultJson } from '@layerbook/domain';
 import { type FieldTarget, engineTarget } from './field-targets';
-import { type ResultJson, toResultJson } from './result-json';
 
 export type LiveAttempt =
-  | { readonly kind: 'ok'; readonly variantId: string; readonly result: ResultJson }
+  | { readonly kind: 'ok'; readonly variantId: string; readonly result: EstimateResultJson }
   /** the engine refused: its message, and the field it names */
   | { readonly kind: 'refused'; readonly variantId: string; readonly message: string; readonly target: FieldTarget }
   /** nothing to compute yet, or the form itself has errors */

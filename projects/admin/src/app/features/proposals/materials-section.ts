@@ -1,9 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import type { EngineRoom } from '@layerbook/contracts/engine';
-import { formatKitchenVolume, formatMetricMass, fromBase } from '@layerbook/domain';
+import { QUANTITY_UNIT_SYMBOLS, type EngineRoom } from '@layerbook/contracts/types';
+import { formatKitchenVolume, formatMetricMass, fromBase, roundedNumber, type EstimateResultJson } from '@layerbook/domain';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { roundTo, unitWord } from './estimate-words';
-import type { ResultJson } from './result-json';
 
 /** What to buy (whole-job totals rounded up to the containers sold) and what to mix per layer. */
 @Component({
@@ -75,7 +73,7 @@ import type { ResultJson } from './result-json';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class MaterialsSection {
-  readonly result = input.required<ResultJson>();
+  readonly result = input.required<EstimateResultJson>();
   readonly currency = input.required<string>();
   readonly rooms = input.required<readonly EngineRoom[]>();
 
@@ -83,10 +81,10 @@ export class MaterialsSection {
     this.result().products.map((p) => ({
       productId: p.productId,
       name: p.name,
-      need: `${roundTo(p.needInUnit, 2)} ${unitWord(p.unit)}`,
+      need: `${roundedNumber(p.needInUnit, 2)} ${QUANTITY_UNIT_SYMBOLS[p.unit]}`,
       lines: p.pack.lines,
       cost: p.pack.totalCost,
-      leftover: `${roundTo(fromBase(p.pack.leftover, p.unit), 2)} ${unitWord(p.unit)}`,
+      leftover: `${roundedNumber(fromBase(p.pack.leftover, p.unit), 2)} ${QUANTITY_UNIT_SYMBOLS[p.unit]}`,
     })),
   );
 

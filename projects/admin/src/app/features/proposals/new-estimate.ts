@@ -9,7 +9,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { Router, RouterLink } from '@angular/router';
-import type { ClientSummary, SiteView } from '@layerbook/contracts';
+import { ESTIMATE_INPUT_LIMITS, type ClientSummary, type SiteView } from '@layerbook/contracts/types';
 import { catchError, debounceTime, distinctUntilChanged, filter, map, of, switchMap } from 'rxjs';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
@@ -80,7 +80,7 @@ export class NewEstimate {
   protected readonly form = new FormGroup({
     client: new FormControl<string | ClientSummary | null>('', chosenClient),
     siteId: new FormControl('', { nonNullable: true, validators: Validators.required }),
-    title: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(160)] }),
+    title: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(ESTIMATE_INPUT_LIMITS.titleMax)] }),
     // Most estimates are for work starting soon; the office changes it when the date is known.
     startDate: new FormControl<Date | null>(new Date(), Validators.required),
   });

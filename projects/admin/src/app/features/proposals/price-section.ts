@@ -1,10 +1,8 @@
 import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input } from '@angular/core';
-import type { EstimatingSettings } from '@layerbook/contracts';
-import { minorUnitDigits } from '@layerbook/domain';
-import Decimal from 'decimal.js';
+import type { EstimatingSettings } from '@layerbook/contracts/types';
+import { measureText, perAreaGap, roundedNumber, roundsToZero, type EstimateResultJson } from '@layerbook/domain';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { hoursText, measureUnit, percentText, roundTo } from './estimate-words';
-import type { ResultJson } from './result-json';
+import { percentText } from './estimate-words';
 
 /** The price build-up, bottom-up, with the owner's per-area check beside it. */
 @Component({
@@ -157,7 +155,7 @@ import type { ResultJson } from './result-json';
 export class PriceSection {
   private readonly locale = inject(LOCALE_ID);
 
-  readonly result = input.required<ResultJson>();
+  readonly result = input.required<EstimateResultJson>();
   readonly settings = input.required<EstimatingSettings>();
   readonly currency = input.required<string>();
   readonly lengthUnit = input.required<'ft' | 'm'>();
@@ -183,7 +181,7 @@ export class PriceSection {
       return {
         surfaceId: line.surfaceId,
         name: s?.name ?? '',
-        measured: s ? `${roundTo(s.measure.quantity, 2)} ${measureUnit(this.lengthUnit(), s.measure.measure)}` : '',
+        measured: s ? measureText(s.measure, this.lengthUnit()) : '',
         rate: s ? (this.rates()[s.finishSystemId] ?? '') : '',
         amount: line.amount,
       };
@@ -191,12 +189,13 @@ export class PriceSection {
   });
   protected readonly gap = computed(() => {
     const r = this.result();
-    const diff = new Decimal(r.price.price).minus(r.perAreaCheck?.total ?? '0');
-    return { isAbove: diff.isPositive() && !diff.isZero(), amount: diff.abs().toString() };
+    const gap = perAreaGap(r.price.price, r.perAreaCheck?.total ?? '0');
+    return { isAbove: gap.isAbove, amount: gap.amount.toString() };
   });
 
+  /** Crew-hours as a number beside "crew-hours" (they come as a decimal string). */
   protected hours(value: string): string {
-    return hoursText(Number(value)).replace(' h', '');
+    return roundedNumber(Number(value), 2);
   }
 
   protected percent(ratio: string): string {
@@ -205,6 +204,6 @@ export class PriceSection {
 
   /** Hides lines that would read "$0.00", such as a rounding of a fraction of a cent. */
   protected roundsToZero(amount: string): boolean {
-    return new Decimal(amount).toDecimalPlaces(minorUnitDigits(this.currency())).isZero();
+    return roundsToZero(amount, this.currency());
   }
 }

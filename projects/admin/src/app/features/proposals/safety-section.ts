@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
-import type { ResultJson } from './result-json';
+import type { EstimateResultJson } from '@layerbook/domain';
 
 /** The engine's cautions for this job's facts, each with the rule it points to. */
 @Component({
@@ -41,5 +41,5 @@ import type { ResultJson } from './result-json';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class SafetySection {
-  readonly result = input.required<ResultJson>();
+  readonly result = input.required<EstimateResultJson>();
 }

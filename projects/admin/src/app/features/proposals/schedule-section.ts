@@ -1,8 +1,7 @@
 import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
-import { clockText, dayAndClock, dayWords, hoursText } from './estimate-words';
-import type { ResultJson } from './result-json';
-import { planDays } from './schedule-days';
+import { hoursText, planDays, type EstimateResultJson } from '@layerbook/domain';
+import { clockText, dayAndClock, dayWords } from './estimate-words';
 
 /** The dated plan: each working day's work, what is drying and until when, and the milestones. */
 @Component({
@@ -77,7 +76,7 @@ import { planDays } from './schedule-days';
 export class ScheduleSection {
   private readonly locale = inject(LOCALE_ID);
 
-  readonly result = input.required<ResultJson>();
+  readonly result = input.required<EstimateResultJson>();
 
   protected readonly days = computed(() => planDays(this.result().schedule));
 

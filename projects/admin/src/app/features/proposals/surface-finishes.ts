@@ -1,13 +1,14 @@
-import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { takeUntilDestroyed, toObservable } from '@angular/core/rxjs-interop';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectChange, MatSelectModule } from '@angular/material/select';
-import type { EngineRoom } from '@layerbook/contracts/engine';
+import type { EngineRoom } from '@layerbook/contracts/types';
 import type { FinishSystem } from '@layerbook/domain';
 import { map, startWith, switchMap } from 'rxjs';
 import { errorText } from '../../shared/forms/error-text';
 import type { OptionGroup } from './estimate-form';
+import { finishOutlineText } from './estimate-words';
 
 /** Which finish goes on each measured surface in one option, room by room. */
 @Component({
@@ -33,9 +34,11 @@ import type { OptionGroup } from './estimate-form';
             <mat-form-field>
               <mat-label>Finish for {{ surface.name }}</mat-label>
               <mat-select [formControl]="option().controls.finishes.controls[surface.id]!">
+                <!-- The closed select shows the name only; the open list adds each finish's summary. -->
+                <mat-select-trigger>{{ names().get(option().controls.finishes.controls[surface.id]!.value) ?? 'Not in this option' }}</mat-select-trigger>
                 <mat-option value="">Not in this option</mat-option>
                 @for (system of finishSystems(); track system.id) {
-                  <mat-option [value]="system.id">{{ system.name }}</mat-option>
+                  <mat-option [value]="system.id">{{ system.name }} <span class="outline">· {{ outlines().get(system.id) }}</span></mat-option>
                 }
               </mat-select>
               <mat-hint>{{ measures().get(surface.id) }}</mat-hint>
@@ -70,6 +73,10 @@ import type { OptionGroup } from './estimate-form';
     mat-form-field {
       width: 100%;
     }
+    .outline {
+      color: var(--mat-sys-on-surface-variant);
+      font-size: 0.9em;
+    }
     .field-note {
       margin: 0.25rem 0 0;
       color: var(--mat-sys-error);
@@ -88,6 +95,9 @@ export class SurfaceFinishes {
   readonly notes = input.required<ReadonlyMap<string, string>>();
 
   protected readonly errorText = errorText;
+  /** finish system id → "3 layers · waits 28 h", the library's summary beside each choice */
+  protected readonly outlines = computed(() => new Map(this.finishSystems().map((f) => [f.id, finishOutlineText(f.layers)])));
+  protected readonly names = computed(() => new Map(this.finishSystems().map((f) => [f.id, f.name])));
   /** room id → the shortcut select, showing the room's finish when every surface shares it */
   private readonly roomControls = new Map<string, FormControl<string | null>>();
 
