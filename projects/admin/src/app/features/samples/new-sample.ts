@@ -10,6 +10,7 @@ import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 import { SAMPLE_LABEL_MAX, SAMPLE_NOTES_MAX, type ClientDetail, type ClientSummary, type FinishSystemSummary, type ItemList, type SiteView } from '@layerbook/contracts/types';
+import { siteLine } from '@layerbook/domain';
 import { catchError, debounceTime, distinctUntilChanged, filter, map, of, switchMap } from 'rxjs';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
@@ -17,7 +18,6 @@ import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { siteLine } from '@layerbook/domain';
 import { FINISH_SYSTEMS_URL, SampleApi } from './sample-api';
 
 /** A new board: whose it is (client, optional site), which finish it shows, a label and notes. */
