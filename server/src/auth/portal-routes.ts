@@ -1,4 +1,4 @@
-import { PortalSession, portalLinkRequest, portalRedeemRequest } from '@layerbook/contracts';
+import { portalLinkRequest, portalRedeemRequest, type Notice, type PortalSession } from '@layerbook/contracts';
 import { Request, RequestHandler, Router } from 'express';
 import type { AppContext } from '../context';
 import { csrf } from '../http/csrf';
@@ -25,7 +25,7 @@ export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): 
 
   router.post('/auth/link', linkLimiter, async (req, res) => {
     await requestPortalLink(ctx, parse(portalLinkRequest, req.body).email);
-    res.status(202).json({ detail: 'If that address belongs to a client, a sign-in link is on its way.' });
+    res.status(202).json({ detail: 'If that address belongs to a client, a sign-in link is on its way.' } satisfies Notice);
   });
 
   router.post('/auth/redeem', linkLimiter, async (req, res) => {

@@ -4,8 +4,10 @@ import {
   passwordResetRequest,
   signInRequest,
   signUpRequest,
-  StaffSession,
   token as tokenField,
+  type InvitationPreview,
+  type Notice,
+  type StaffSession,
 } from '@layerbook/contracts';
 import { Request, Response, Router } from 'express';
 import type passport from 'passport';
@@ -38,7 +40,7 @@ export function authRoutes(ctx: AppContext, pass: passport.PassportStatic, signI
   const router = Router();
 
   router.get('/session', async (req, res) => {
-    res.set('cache-control', 'no-store').json(await staffSession(ctx, req));
+    res.set('cache-control', 'no-store').json((await staffSession(ctx, req)) satisfies StaffSession);
   });
 
   router.post('/signup', signInLimiter, async (req, res) => {
@@ -66,7 +68,7 @@ export function authRoutes(ctx: AppContext, pass: passport.PassportStatic, signI
 
   router.post('/password-reset', signInLimiter, async (req, res) => {
     await requestPasswordReset(ctx, parse(passwordResetRequest, req.body).email);
-    res.status(202).json({ detail: 'If that e-mail has an account, a reset link is on its way.' });
+    res.status(202).json({ detail: 'If that e-mail has an account, a reset link is on its way.' } satisfies Notice);
   });
 
   router.post('/password-reset/complete', signInLimiter, async (req, res) => {
@@ -76,7 +78,7 @@ export function authRoutes(ctx: AppContext, pass: passport.PassportStatic, signI
 
   router.get('/invitations/:token', async (req, res) => {
     const { token } = parse(z.strictObject({ token: tokenField }), req.params);
-    res.set('cache-control', 'no-store').json(await previewInvitation(ctx, token));
+    res.set('cache-control', 'no-store').json((await previewInvitation(ctx, token)) satisfies InvitationPreview);
   });
 
   router.post('/invitations/accept', signInLimiter, async (req, res) => {
