@@ -12,12 +12,6 @@ export interface KeysetPage<T> extends ItemList<T> {
   readonly nextCursor: string | null;
 }
 
-/**
- * @deprecated The old name of KeysetPage, kept while the other areas move over; use ItemList or
- * KeysetPage.
- */
-export type Page<T> = KeysetPage<T>;
-
 /** Page sizes every keyset list accepts (`?limit=`). */
 export const PAGE_SIZE_DEFAULT = 50;
 export const PAGE_SIZE_MAX = 100;
