@@ -48,6 +48,9 @@ test('the office adds a product with container sizes and prices, then a three-la
   await page.getByRole('tab', { name: 'Finish systems' }).click();
   await page.getByRole('link', { name: 'New finish system' }).click();
   await expect(page.getByRole('heading', { name: 'New finish system' })).toBeVisible();
+  // A new system opens with one empty layer once the products are loaded; text typed before then
+  // is wiped when the form is reset (reported), so wait for that layer first.
+  await expect(page.getByRole('region', { name: 'Layer 1' })).toBeVisible();
   await page.getByLabel('Finish system name').fill(SYSTEM);
   await page.getByLabel('Description').fill('Bonding primer, a lime body coat, then two thin finish coats troweled tight and polished.');
 
@@ -56,8 +59,7 @@ test('the office adds a product with container sizes and prices, then a three-la
     { name: 'Lime body coat', method: 'Trowel', product: new RegExp(`^${PRODUCT}`), coverage: '9', wait: 'overnight (16 h)' },
     { name: 'Polished finish coats', method: 'Trowel', product: new RegExp(`^${PRODUCT}`), coverage: '30', coats: '2', wait: '24 h' },
   ];
-  // A new system opens with one empty layer; each further layer is added.
-  await expect(page.getByRole('region', { name: 'Layer 1' })).toBeVisible();
+  // Each further layer is added.
   for (const [i, layer] of layers.entries()) {
     if (i > 0) await page.getByRole('button', { name: 'Add a layer' }).click();
     const card = page.getByRole('region', { name: new RegExp(`^Layer ${i + 1}\\b`) });
