@@ -13,6 +13,7 @@ import { Pool } from 'pg';
 import pino from 'pino';
 import { createApp } from '../../../server/src/app';
 import { loadConfig } from '../../../server/src/config';
+import type { ObjectStore } from '../../../server/src/files/object-store';
 import { buildListQuery } from '../../../server/src/inquiries/list';
 import { startQueue } from '../../../server/src/queue/job-queue';
 import { testDatabaseUrls } from '../../../server/src/testing/test-env';
@@ -89,7 +90,14 @@ async function main(): Promise<void> {
   const logger = pino({ level: 'silent' });
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
   const queue = await startQueue(config, logger);
-  const app = createApp({ config: { ...config, NODE_ENV: 'development' }, pool, queue, logger, now: () => new Date() });
+  // The list bench stores no files: a store that refuses uploads keeps the context complete.
+  const storage: ObjectStore = {
+    put: () => Promise.reject(new Error('This bench stores no files.')),
+    get: () => Promise.resolve(null),
+    delete: () => Promise.resolve(),
+    close: () => undefined,
+  };
+  const app = createApp({ config: { ...config, NODE_ENV: 'development' }, pool, queue, logger, storage, now: () => new Date() });
   const server = app.listen(0, '127.0.0.1');
   await new Promise((r) => server.once('listening', r));
   const port = (server.address() as { port: number }).port;
