@@ -3,7 +3,6 @@ import { Injectable, inject } from '@angular/core';
 import { Observable, firstValueFrom } from 'rxjs';
 import type {
   InvitationAccept,
-  InvitationPreview,
   PasswordResetComplete,
   PasswordResetRequest,
   SignInRequest,
@@ -32,12 +31,6 @@ export class StaffAuth {
 
   completePasswordReset(body: PasswordResetComplete): Promise<void> {
     return this.signedIn(this.http.post<StaffSession>('/api/auth/password-reset/complete', body));
-  }
-
-  previewInvitation(token: string): Promise<InvitationPreview> {
-    return firstValueFrom(
-      this.http.get<InvitationPreview>(`/api/auth/invitations/${encodeURIComponent(token)}`),
-    );
   }
 
   acceptInvitation(body: InvitationAccept): Promise<void> {

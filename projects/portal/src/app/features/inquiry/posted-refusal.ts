@@ -37,7 +37,7 @@ export function postedRefusal(): PostedRefusal | null {
 }
 
 /** The context comes from outside the app: take only well-formed strings from it. */
-function readRefusal(context: unknown): PostedRefusal | null {
+export function readRefusal(context: unknown): PostedRefusal | null {
   if (!isRecord(context) || !isRecord(context['inquiryForm'])) {
     return null;
   }
