@@ -59,7 +59,7 @@ function prettyStream(destination?: DestinationStream): DestinationStream {
     translateTime: 'SYS:HH:MM:ss.l',
     // A finished request reads `GET /api/jobs 200 12ms`; its id stays in the fields after it.
     ignore: 'pid,hostname,req,res,responseTime',
-    messageFormat: (log, messageKey) => requestSummary(log) ?? String(log[messageKey] ?? ''),
+    messageFormat: (log, messageKey) => requestSummary(log) ?? text(log[messageKey]),
     ...(destination ? { destination } : {}),
   });
 }
@@ -70,7 +70,11 @@ function requestSummary(log: Record<string, unknown>): string | undefined {
   if (!req || !res) {
     return undefined;
   }
-  return `${req.method ?? ''} ${req.url ?? ''} ${res.statusCode ?? ''} ${String(log['responseTime'] ?? '?')}ms`;
+  return `${req.method ?? ''} ${req.url ?? ''} ${res.statusCode ?? ''} ${text(log['responseTime'])}ms`;
+}
+
+function text(value: unknown): string {
+  return typeof value === 'string' || typeof value === 'number' ? String(value) : '';
 }
 
 /** One line per API request (id, method, URL without secrets, status, time); pages are not logged. */
