@@ -88,8 +88,14 @@ export default defineConfig(
     extends: [angular.configs.tsRecommended],
     processor: angular.processInlineTemplates,
     rules: {
-      '@angular-eslint/component-selector': ['error', { type: 'element', prefix: 'lb', style: 'kebab-case' }],
-      '@angular-eslint/directive-selector': ['error', { type: 'attribute', prefix: 'lb', style: 'camelCase' }],
+      '@angular-eslint/component-selector': [
+        'error',
+        { type: 'element', prefix: 'lb', style: 'kebab-case' },
+      ],
+      '@angular-eslint/directive-selector': [
+        'error',
+        { type: 'attribute', prefix: 'lb', style: 'camelCase' },
+      ],
       'no-restricted-imports': ['error', BROWSER_IMPORTS],
     },
   },
@@ -115,7 +121,12 @@ export default defineConfig(
     files: ['**/*.{js,cjs,mjs}'],
     extends: [eslint.configs.recommended, tseslint.configs.disableTypeChecked],
     languageOptions: {
-      globals: { module: 'writable', require: 'readonly', __dirname: 'readonly', process: 'readonly' },
+      globals: {
+        module: 'writable',
+        require: 'readonly',
+        __dirname: 'readonly',
+        process: 'readonly',
+      },
     },
   },
 );

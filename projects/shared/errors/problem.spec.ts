@@ -27,7 +27,11 @@ describe('toProblem', () => {
     [503, 'Something went wrong on our side. Please try again.'],
     [418, 'Something went wrong. Please try again.'],
   ])('answers %d without a problem body with words', (status, title) => {
-    expect(toProblem(httpError(status, '<html>proxy page</html>'))).toEqual({ type: 'about:blank', title, status });
+    expect(toProblem(httpError(status, '<html>proxy page</html>'))).toEqual({
+      type: 'about:blank',
+      title,
+      status,
+    });
   });
 
   it.each([
@@ -49,13 +53,19 @@ describe('toProblem', () => {
 
 describe('problemMessage', () => {
   it.each([
-    ['the detail when there is one', { title: 'Conflict', status: 409, detail: 'The estimate was sent meanwhile.' }, 'The estimate was sent meanwhile.'],
+    [
+      'the detail when there is one',
+      { title: 'Conflict', status: 409, detail: 'The estimate was sent meanwhile.' },
+      'The estimate was sent meanwhile.',
+    ],
     ['the title otherwise', { title: 'Not found', status: 404 }, 'Not found'],
   ])('says %s', (_what, body, words) => {
     expect(problemMessage(httpError(body.status, { type: 'about:blank', ...body }))).toBe(words);
   });
 
   it('says something even for an unreachable API', () => {
-    expect(problemMessage(httpError(0))).toBe('Layerbook could not be reached. Check your connection and try again.');
+    expect(problemMessage(httpError(0))).toBe(
+      'Layerbook could not be reached. Check your connection and try again.',
+    );
   });
 });

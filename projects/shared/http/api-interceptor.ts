@@ -50,7 +50,8 @@ export function apiInterceptorFor(settings: ApiSettings): HttpInterceptorFn {
     if (SAFE_METHODS.has(req.method)) {
       return next(request).pipe(watch);
     }
-    const send = () => next(request.clone({ setHeaders: { 'x-csrf-token': csrf.value() } })).pipe(watch);
+    const send = () =>
+      next(request.clone({ setHeaders: { 'x-csrf-token': csrf.value() } })).pipe(watch);
     if (csrf.value()) {
       return send();
     }

@@ -8,7 +8,12 @@ describe('signInRedirect', () => {
     ['/jobs/7?tab=photos', '/sign-in', '/', { path: '/sign-in', next: '/jobs/7?tab=photos' }],
     ['/today', '/sign-in', '/', { path: '/sign-in', next: '/today' }],
     ['/proposals/abc', '/sign-in', '/portal/', { path: '/sign-in', next: '/portal/proposals/abc' }],
-    ['/boards/1#photos', '/sign-in', '/portal', { path: '/sign-in', next: '/portal/boards/1#photos' }],
+    [
+      '/boards/1#photos',
+      '/sign-in',
+      '/portal',
+      { path: '/sign-in', next: '/portal/boards/1#photos' },
+    ],
     ['/', '/sign-in', '/portal/', { path: '/sign-in', next: '/portal/' }],
     ['projects', '/sign-in', '/portal/', { path: '/sign-in', next: '/portal/projects' }],
   ])('%s in %s under %s', (current, signIn, base, expected) => {
@@ -23,6 +28,9 @@ describe('signInRedirect', () => {
   );
 
   it('does not mistake a page that only starts like the sign-in path for it', () => {
-    expect(signInRedirect('/sign-in-help', '/sign-in', '/')).toEqual({ path: '/sign-in', next: '/sign-in-help' });
+    expect(signInRedirect('/sign-in-help', '/sign-in', '/')).toEqual({
+      path: '/sign-in',
+      next: '/sign-in-help',
+    });
   });
 });

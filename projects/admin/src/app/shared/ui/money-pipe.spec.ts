@@ -4,7 +4,9 @@ import { describe, expect, it } from 'vitest';
 import { MoneyPipe } from './money-pipe';
 
 function pipeIn(locale: string): MoneyPipe {
-  TestBed.configureTestingModule({ providers: [MoneyPipe, { provide: LOCALE_ID, useValue: locale }] });
+  TestBed.configureTestingModule({
+    providers: [MoneyPipe, { provide: LOCALE_ID, useValue: locale }],
+  });
   return TestBed.inject(MoneyPipe);
 }
 

@@ -21,6 +21,8 @@ describe('portal API settings', () => {
   );
 
   it('does not treat the client data calls as session calls', () => {
-    expect(API_SETTINGS.sessionCalls.some((prefix) => '/api/portal/proposals'.startsWith(prefix))).toBe(false);
+    expect(
+      API_SETTINGS.sessionCalls.some((prefix) => '/api/portal/proposals'.startsWith(prefix)),
+    ).toBe(false);
   });
 });

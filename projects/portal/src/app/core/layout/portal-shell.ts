@@ -11,7 +11,15 @@ import { Wordmark } from '../../shared/ui/wordmark';
 /** The frame around a signed-in client's pages: whose portal this is, and a way out. */
 @Component({
   selector: 'lb-portal-shell',
-  imports: [FormAlert, MatButtonModule, MatIconModule, MatToolbarModule, RouterLink, RouterOutlet, Wordmark],
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatIconModule,
+    MatToolbarModule,
+    RouterLink,
+    RouterOutlet,
+    Wordmark,
+  ],
   template: `
     <header>
       <mat-toolbar class="lb-toolbar">
@@ -35,13 +43,32 @@ import { Wordmark } from '../../shared/ui/wordmark';
     </main>
   `,
   styles: `
-    .home { display: inline-flex; text-decoration: none; }
-    .firm { margin-left: 1rem; font-size: 1rem; overflow: hidden; text-overflow: ellipsis; white-space: nowrap; }
-    .spacer { flex: 1; }
-    .me { font-size: 1rem; margin-right: 0.5rem; }
-    .sign-out { --mat-button-text-label-text-color: var(--lb-ivory); }
+    .home {
+      display: inline-flex;
+      text-decoration: none;
+    }
+    .firm {
+      margin-left: 1rem;
+      font-size: 1rem;
+      overflow: hidden;
+      text-overflow: ellipsis;
+      white-space: nowrap;
+    }
+    .spacer {
+      flex: 1;
+    }
+    .me {
+      font-size: 1rem;
+      margin-right: 0.5rem;
+    }
+    .sign-out {
+      --mat-button-text-label-text-color: var(--lb-ivory);
+    }
     @media (max-width: 599.98px) {
-      .firm, .me { display: none; }
+      .firm,
+      .me {
+        display: none;
+      }
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -10,5 +10,7 @@ export function formatDay(isoDay: string, locale: string): string {
 
 /** A moment (ISO timestamp) as a date in the reader's own zone. */
 export function formatMoment(iso: string, locale: string): string {
-  return new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeStyle: 'short' }).format(new Date(iso));
+  return new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeStyle: 'short' }).format(
+    new Date(iso),
+  );
 }
