@@ -1,19 +1,31 @@
 #!/usr/bin/env bash
-# `npm test`: everything — unit (packages), API on a real PostgreSQL, end-to-end in Chromium.
-# Installs what is missing first; uses its own databases, never the demo data.
+# `npm test`: everything, stopping at the first failure — static checks (types, lint, format, all at
+# zero warnings), unit and API tests (jest, real PostgreSQL), the apps' unit specs (Vitest), then
+# end-to-end tests in Chromium. Installs what is missing first; uses its own databases, never the demo data.
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
 cd "$LB_ROOT"
 # The pinned AWS SDK prints a Node-22-from-2027 notice in every test process; it is known (DEVELOPERS.md).
 export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
+# The Angular CLI never asks about usage data in a test run.
+export NG_CLI_ANALYTICS=false
 bash ops/deps.sh --browser
+
+started=$SECONDS
+stage() { # $1 = title; the rest = command
+  local title=$1 began=$SECONDS
+  shift
+  echo "== $title =="
+  "$@"
+  echo "-- $title: $((SECONDS - began)) s"
+}
+
+stage "type check (server, packages, e2e, both apps with templates)" npm run --silent typecheck
+stage "lint (ESLint, zero warnings)" npm run --silent lint
+stage "format (Prettier)" npm run --silent format:check
 bash ops/pg-start.sh
-
-echo "== unit and API tests (jest) =="
-npx jest --runInBand --ci
-
-echo "== build for the browser tests =="
-bash ops/build.sh
-
-echo "== end-to-end tests (Playwright, Chromium) =="
-npx playwright test
+stage "unit and API tests (jest)" npx jest --runInBand --ci
+stage "app unit specs (Vitest, jsdom)" npm run --silent test:apps
+stage "build for the browser tests" bash ops/build.sh
+stage "end-to-end tests (Playwright, Chromium)" npx playwright test
+echo "npm test passed in $((SECONDS - started)) s"
