@@ -26,8 +26,7 @@ const BROWSER_IMPORTS = {
   paths: [
     {
       name: '@layerbook/contracts',
-      message:
-        "Import from '@layerbook/contracts/types' or '@layerbook/contracts/engine': the root pulls zod into the browser.",
+      message: "Import from '@layerbook/contracts/types' or '@layerbook/contracts/engine': the root pulls zod into the browser.",
     },
     { name: 'zod', message: 'Validation with zod belongs to the server and packages/contracts.' },
     { name: '@layerbook/db', message: 'The database package is server-only.' },
@@ -66,10 +65,7 @@ export default defineConfig(
       // Static methods such as Angular's `Validators.required` are passed around by design.
       '@typescript-eslint/unbound-method': ['error', { ignoreStatic: true }],
       // `_unused` says "deliberately ignored" (Express's four-argument error handler, tuple holes).
-      '@typescript-eslint/no-unused-vars': [
-        'error',
-        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrorsIgnorePattern: '^_' },
-      ],
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrorsIgnorePattern: '^_' }],
     },
   },
   {
@@ -88,14 +84,8 @@ export default defineConfig(
     extends: [angular.configs.tsRecommended],
     processor: angular.processInlineTemplates,
     rules: {
-      '@angular-eslint/component-selector': [
-        'error',
-        { type: 'element', prefix: 'lb', style: 'kebab-case' },
-      ],
-      '@angular-eslint/directive-selector': [
-        'error',
-        { type: 'attribute', prefix: 'lb', style: 'camelCase' },
-      ],
+      '@angular-eslint/component-selector': ['error', { type: 'element', prefix: 'lb', style: 'kebab-case' }],
+      '@angular-eslint/directive-selector': ['error', { type: 'attribute', prefix: 'lb', style: 'camelCase' }],
       'no-restricted-imports': ['error', BROWSER_IMPORTS],
     },
   },

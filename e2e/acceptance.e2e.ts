@@ -15,7 +15,10 @@ async function finishWholeRoom(page: Page, room: string, system: string) {
 }
 
 // Journey (proposals → portal → jobs): two options priced, a proposal sent, option B accepted by the client.
-test('the office sends a two-option proposal; the client accepts option B; the job appears with its draft payment schedule', async ({ page, browser }) => {
+test('the office sends a two-option proposal; the client accepts option B; the job appears with its draft payment schedule', async ({
+  page,
+  browser,
+}) => {
   await signInAsOffice(page);
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Estimates' }).click();
   await page.getByRole('link', { name: 'New estimate' }).click();
@@ -68,7 +71,10 @@ test('the office sends a two-option proposal; the client accepts option B; the j
 
   // The client approves the sample board first: the finish is sold by the board.
   await portal.goto('/portal/boards');
-  await portal.getByRole('list', { name: 'Sample boards' }).getByRole('link', { name: /Limewash, warm white/ }).click();
+  await portal
+    .getByRole('list', { name: 'Sample boards' })
+    .getByRole('link', { name: /Limewash, warm white/ })
+    .click();
   await portal.getByRole('button', { name: 'Approve this board' }).click();
   await portal.getByRole('button', { name: 'Yes, approve this board' }).click();
   await expect(portal.getByText(/You approved this board on/)).toBeVisible();
@@ -83,7 +89,10 @@ test('the office sends a two-option proposal; the client accepts option B; the j
   await client.close();
 
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
-  await page.getByRole('link', { name: /Sitting room plaster/ }).first().click();
+  await page
+    .getByRole('link', { name: /Sitting room plaster/ })
+    .first()
+    .click();
   await expect(page.getByText('Option B: limewash', { exact: true })).toBeVisible();
   const schedule = page.getByRole('table', { name: 'Payment schedule' });
   await expect(schedule).toContainText('Total');

@@ -14,7 +14,10 @@ async function trySignIn(page: Page, email: string, password: string) {
 
 // Journey (auth): a forgotten password is replaced through the e-mailed link; only the new one works.
 // The owner of a firm of their own, so the demo accounts the other journeys sign in with keep their password.
-test('an owner resets a forgotten password by e-mail, signs in with the new one, and the old one no longer works', async ({ page, browser }) => {
+test('an owner resets a forgotten password by e-mail, signs in with the new one, and the old one no longer works', async ({
+  page,
+  browser,
+}) => {
   const firm = newFirm('Saltmarsh Fresco Works', 'Dorcas Velliquette', 'first-password-of-lime');
   await signUp(page, firm);
   await signOut(page, firm.name);

@@ -6,10 +6,18 @@ import { waitForMail } from './support/inbox';
 
 const root = path.resolve(__dirname, '..');
 /** The demo firm's calendar date (America/New_York), as the follow-up field expects it (M/D/YYYY). */
-const firmToday = new Intl.DateTimeFormat('en-US', { timeZone: 'America/New_York', year: 'numeric', month: 'numeric', day: 'numeric' }).format(new Date());
+const firmToday = new Intl.DateTimeFormat('en-US', {
+  timeZone: 'America/New_York',
+  year: 'numeric',
+  month: 'numeric',
+  day: 'numeric',
+}).format(new Date());
 
 // Journey (inquiries): a prospect asks through the public form; the owner works the inquiry.
-test('a prospect submits the public form; the owner moves it with the keyboard, logs a note and a follow-up, and the reminder arrives', async ({ page, browser }) => {
+test('a prospect submits the public form; the owner moves it with the keyboard, logs a note and a follow-up, and the reminder arrives', async ({
+  page,
+  browser,
+}) => {
   const prospectEmail = `prospect.${Date.now()}@example.test`;
   const prospect = await browser.newContext();
   const form = await prospect.newPage();

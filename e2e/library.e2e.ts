@@ -12,7 +12,10 @@ async function choose(page: Page, scope: ReturnType<Page['locator']> | Page, lab
 }
 
 // Journey (library): a new product with its container sizes and prices, then a three-layer system using it.
-test('the office adds a product with container sizes and prices, then a three-layer finish system that uses it', async ({ page, browser }) => {
+test('the office adds a product with container sizes and prices, then a three-layer finish system that uses it', async ({
+  page,
+  browser,
+}) => {
   await signIn(page, DEMO.office);
   await navLink(page, 'Finish library').click();
   // The two halves of the library are tab links, each with its own address.
@@ -72,7 +75,10 @@ test('the office adds a product with container sizes and prices, then a three-la
       await choose(page, card, 'Product unit', 'kilogram (kg)');
     }
     if (layer.coats) await card.getByLabel('Coats', { exact: true }).fill(layer.coats);
-    await card.getByRole('group', { name: /^Quick waits for/ }).getByRole('button', { name: layer.wait, exact: true }).click();
+    await card
+      .getByRole('group', { name: /^Quick waits for/ })
+      .getByRole('button', { name: layer.wait, exact: true })
+      .click();
     await expect(page.getByRole('region', { name: `Layer ${i + 1}: ${layer.name}` })).toBeVisible();
   }
   await expect(page.getByText('3 layers · total wait')).toBeVisible();

@@ -9,20 +9,27 @@ async function signInAsOffice(page: Page) {
 }
 
 /** Sizes are typed into the named fields; sketches also carry the numbers in their labels. */
-const field = (page: Page, name: string) => page.getByRole('textbox', { name, exact: true }).or(page.getByRole('spinbutton', { name, exact: true }));
+const field = (page: Page, name: string) =>
+  page.getByRole('textbox', { name, exact: true }).or(page.getByRole('spinbutton', { name, exact: true }));
 
 // Journey (takeoff → proposals): the office measures a round room with a turret ceiling and prices it two ways.
 test('the office measures a round room with a turret ceiling and builds an estimate with two options', async ({ page }) => {
   await signInAsOffice(page);
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Clients' }).click();
   await page.getByRole('link', { name: 'Hattie Brambleton' }).first().click();
-  await page.getByRole('link', { name: /^Measure rooms/ }).first().click();
+  await page
+    .getByRole('link', { name: /^Measure rooms/ })
+    .first()
+    .click();
   await expect(page.getByRole('heading', { name: 'Measure rooms' })).toBeVisible();
 
   await page.getByRole('button', { name: 'Add a room' }).click();
   await page.getByLabel('Room name').fill('Turret study');
   await page.getByRole('button', { name: 'Add room' }).click();
-  const room = page.getByRole('region', { name: /Turret study/ }).or(page.locator('mat-expansion-panel', { hasText: 'Turret study' })).first();
+  const room = page
+    .getByRole('region', { name: /Turret study/ })
+    .or(page.locator('mat-expansion-panel', { hasText: 'Turret study' }))
+    .first();
   await expect(room).toBeVisible();
 
   // Round walls: r 6 ft, H 9 ft → 2π·6·9 = 339.29 ft² (DOMAIN.md §2.2, round room wall 2πrH).

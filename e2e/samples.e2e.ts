@@ -7,7 +7,10 @@ import { onPhone, openLiveOnPhone, PHONE } from './support/phone';
 const LABEL = 'Stair hall glaze, board A';
 
 // Journey (samples → portal): a board with a photo is shown to the client, who approves it.
-test('the office makes a sample board with a photo and shows it; the client signs in by e-mailed link and approves it; the office sees it approved', async ({ page, browser }) => {
+test('the office makes a sample board with a photo and shows it; the client signs in by e-mailed link and approves it; the office sees it approved', async ({
+  page,
+  browser,
+}) => {
   await signIn(page, DEMO.office);
   await navLink(page, 'Sample boards').click();
   await page.getByRole('link', { name: 'New sample board' }).click();

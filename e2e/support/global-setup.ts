@@ -70,7 +70,21 @@ export default async function globalSetup(): Promise<void> {
   execFileSync('bash', ['ops/pg-createdb.sh', E2E.db, '--fresh'], { cwd: root, stdio: 'inherit' });
   const env = e2eEnv();
   rmSync(path.join(root, E2E.stateDir, 'mail'), { recursive: true, force: true });
-  startByPid('maildev', path.join(root, 'node_modules/.bin/maildev'), ['--smtp', String(E2E.smtpPort), '--web', String(E2E.mailWebPort), '--ip', '127.0.0.1', '--mail-directory', path.join(root, E2E.stateDir, 'mail')], env);
+  startByPid(
+    'maildev',
+    path.join(root, 'node_modules/.bin/maildev'),
+    [
+      '--smtp',
+      String(E2E.smtpPort),
+      '--web',
+      String(E2E.mailWebPort),
+      '--ip',
+      '127.0.0.1',
+      '--mail-directory',
+      path.join(root, E2E.stateDir, 'mail'),
+    ],
+    env,
+  );
   // Uploaded files from earlier runs are dropped with the database that pointed at them.
   const s3Dir = path.join(root, E2E.stateDir, 's3');
   rmSync(s3Dir, { recursive: true, force: true });
@@ -79,6 +93,8 @@ export default async function globalSetup(): Promise<void> {
   // The server creates its bucket at start-up, so the fake must answer first.
   await waitForAnswer(`http://127.0.0.1:${E2E.s3Port}/`, 15_000);
   startByPid('server', 'node', ['server/dist/main.js'], env);
-  await waitFor(`http://127.0.0.1:${E2E.mailWebPort}/api/healthz`, 30_000).catch(() => waitFor(`http://127.0.0.1:${E2E.mailWebPort}/`, 5_000));
+  await waitFor(`http://127.0.0.1:${E2E.mailWebPort}/api/healthz`, 30_000).catch(() =>
+    waitFor(`http://127.0.0.1:${E2E.mailWebPort}/`, 5_000),
+  );
   await waitFor(`${E2E.baseUrl}/api/health`, 60_000);
 }

@@ -37,7 +37,10 @@ export interface NewFirm {
  * so the demo firm the other journeys rely on stays as seeded.
  */
 export function newFirm(firmName: string, name: string, password: string): NewFirm {
-  const slug = firmName.toLowerCase().replace(/[^a-z]+/g, '-').replace(/^-|-$/g, '');
+  const slug = firmName
+    .toLowerCase()
+    .replace(/[^a-z]+/g, '-')
+    .replace(/^-|-$/g, '');
   return { firmName, name, email: `owner.${Date.now()}@${slug}.example`, password };
 }
 

@@ -33,7 +33,11 @@ const schema = z.object({
   /** Path-style URLs (`endpoint/bucket/key`): what local fakes and most S3-compatible services expect. */
   S3_FORCE_PATH_STYLE: flag.default(true),
   /** Largest upload accepted, per file; a phone photo is 3–12 MB. */
-  FILE_MAX_BYTES: z.coerce.number().int().min(1).default(15 * 1024 * 1024),
+  FILE_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .default(15 * 1024 * 1024),
 });
 
 export type Config = z.infer<typeof schema>;

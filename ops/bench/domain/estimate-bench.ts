@@ -34,9 +34,10 @@ function layer(id: string, productId: string, rate: number, wait: number): Finis
     productId,
     coats: 1,
     waste: 0.1,
-    coverage: productId === 'lime'
-      ? { kind: 'consumption', unitPerSurface: 0.5, unit: 'kg', lengthUnit: 'm' }
-      : { kind: 'spreadRate', surfacePerUnit: 350, unit: 'gallon', lengthUnit: 'ft' },
+    coverage:
+      productId === 'lime'
+        ? { kind: 'consumption', unitPerSurface: 0.5, unit: 'kg', lengthUnit: 'm' }
+        : { kind: 'spreadRate', surfacePerUnit: 350, unit: 'gallon', lengthUnit: 'ft' },
     productionRate: { surfacePerHour: rate, lengthUnit: 'ft' },
     waitHoursAfter: wait,
   };
@@ -44,7 +45,15 @@ function layer(id: string, productId: string, rate: number, wait: number): Finis
 
 function fiftyRoomJob(surfacesPerRoom: 2 | 4): EstimateInput {
   const allShapes: SurfaceShape[] = [
-    { kind: 'walls', perimeter: 56, height: 9, openings: [{ width: 3, height: 7 }, { width: 4, height: 5, count: 2 }] },
+    {
+      kind: 'walls',
+      perimeter: 56,
+      height: 9,
+      openings: [
+        { width: 3, height: 7 },
+        { width: 4, height: 5, count: 2 },
+      ],
+    },
     { kind: 'ceilingRect', length: 14, width: 14, elevation: 9 },
     { kind: 'roundWalls', radius: 9, height: 10, openings: [{ width: 3, height: 7 }] },
     { kind: 'sphericalCap', baseRadius: 9, rise: 3, elevation: 10 },
@@ -63,7 +72,13 @@ function fiftyRoomJob(surfacesPerRoom: 2 | 4): EstimateInput {
       minimumCharge: '2500.00',
       tax: { mode: 'materials', rate: 0.0825 },
       rounding: { kind: 'nearest', increment: '5' },
-      calendar: { workingWeekdays: [1, 2, 3, 4, 5], dayStartHour: 8, productiveHoursPerDay: 7, minimumBlockHours: 3, holidays: ['2025-07-04'] },
+      calendar: {
+        workingWeekdays: [1, 2, 3, 4, 5],
+        dayStartHour: 8,
+        productiveHoursPerDay: 7,
+        minimumBlockHours: 3,
+        holidays: ['2025-07-04'],
+      },
       crewSize: 3,
       setupHours: 6,
       cleanupHours: 4,
@@ -72,29 +87,51 @@ function fiftyRoomJob(surfacesPerRoom: 2 | 4): EstimateInput {
       workingReach: 6,
     },
     products: [
-      { id: 'primer', name: 'Primer', unit: 'gallon', containers: [
-        { label: '5 gal', size: 5, unit: 'gallon', price: '190.00' },
-        { label: '1 gal', size: 1, unit: 'gallon', price: '45.00' },
-        { label: '1 qt', size: 1, unit: 'quart', price: '16.00' },
-      ] },
-      { id: 'lime', name: 'Lime plaster', unit: 'kg', hazards: { isLime: true }, containers: [
-        { label: '25 kg', size: 25, unit: 'kg', price: '110.00' },
-        { label: '20 kg', size: 20, unit: 'kg', price: '95.00' },
-        { label: '5 kg', size: 5, unit: 'kg', price: '28.00' },
-      ] },
+      {
+        id: 'primer',
+        name: 'Primer',
+        unit: 'gallon',
+        containers: [
+          { label: '5 gal', size: 5, unit: 'gallon', price: '190.00' },
+          { label: '1 gal', size: 1, unit: 'gallon', price: '45.00' },
+          { label: '1 qt', size: 1, unit: 'quart', price: '16.00' },
+        ],
+      },
+      {
+        id: 'lime',
+        name: 'Lime plaster',
+        unit: 'kg',
+        hazards: { isLime: true },
+        containers: [
+          { label: '25 kg', size: 25, unit: 'kg', price: '110.00' },
+          { label: '20 kg', size: 20, unit: 'kg', price: '95.00' },
+          { label: '5 kg', size: 5, unit: 'kg', price: '28.00' },
+        ],
+      },
       { id: 'sealer', name: 'Sealer', unit: 'gallon', containers: [{ label: '1 gal', size: 1, unit: 'gallon', price: '60.00' }] },
     ],
     finishSystems: [
       {
         id: 'venetian',
         name: 'Venetian',
-        layers: [layer('prime', 'primer', 250, 4), layer('coat1', 'lime', 60, 16), layer('coat2', 'lime', 40, 24), layer('seal', 'sealer', 120, 0)],
+        layers: [
+          layer('prime', 'primer', 250, 4),
+          layer('coat1', 'lime', 60, 16),
+          layer('coat2', 'lime', 40, 24),
+          layer('seal', 'sealer', 120, 0),
+        ],
       },
     ],
     rooms: Array.from({ length: ROOMS }, (_, r) => ({
       id: `room${r}`,
       name: `Room ${r + 1}`,
-      surfaces: shapes.map((shape, s) => ({ id: `r${r}s${s}`, name: shape.kind, shape, finishSystemId: 'venetian', disturbedPaintedArea: 2 })),
+      surfaces: shapes.map((shape, s) => ({
+        id: `r${r}s${s}`,
+        name: shape.kind,
+        shape,
+        finishSystemId: 'venetian',
+        disturbedPaintedArea: 2,
+      })),
     })),
     perAreaRates: { venetian: '9.00' },
     options: [{ id: 'beams', label: 'Faux beams', labourHours: 12, materialsCost: '180.00' }],
@@ -109,12 +146,22 @@ function fiveHundredInvoices(): CashForecastInput {
     currency: 'USD',
     openInvoices: Array.from({ length: 500 }, (_, i) => ({
       id: `inv${i}`,
-      date: addDays(asOf, (i * 37) % 730 - 60),
+      date: addDays(asOf, ((i * 37) % 730) - 60),
       amount: `${1000 + ((i * 7919) % 9000)}.${String(i % 100).padStart(2, '0')}`,
       probability: 0.9,
     })),
-    milestones: Array.from({ length: 100 }, (_, i) => ({ id: `m${i}`, date: addDays(asOf, (i * 11) % 700), amount: '2500.00', probability: 0.8 })),
-    pipelineDeposits: Array.from({ length: 40 }, (_, i) => ({ id: `p${i}`, date: addDays(asOf, i * 9), amount: '1000.00', probability: 0.4 })),
+    milestones: Array.from({ length: 100 }, (_, i) => ({
+      id: `m${i}`,
+      date: addDays(asOf, (i * 11) % 700),
+      amount: '2500.00',
+      probability: 0.8,
+    })),
+    pipelineDeposits: Array.from({ length: 40 }, (_, i) => ({
+      id: `p${i}`,
+      date: addDays(asOf, i * 9),
+      amount: '1000.00',
+      probability: 0.4,
+    })),
   };
 }
 

@@ -86,7 +86,15 @@ async function main(): Promise<void> {
   await migrateDatabase(urls.DATABASE_OWNER_URL, path.join(root, 'migrations'));
   const firmId = await seed(urls.DATABASE_OWNER_URL);
 
-  const config = loadConfig({ ...urls, NODE_ENV: 'production', SESSION_SECRET: 'bench-session-secret-that-is-long-enough', ROOT_DIR: root, LOG_LEVEL: 'silent', PUBLIC_URL: 'http://localhost', DB_POOL_MAX: String(CONNECTIONS) });
+  const config = loadConfig({
+    ...urls,
+    NODE_ENV: 'production',
+    SESSION_SECRET: 'bench-session-secret-that-is-long-enough',
+    ROOT_DIR: root,
+    LOG_LEVEL: 'silent',
+    PUBLIC_URL: 'http://localhost',
+    DB_POOL_MAX: String(CONNECTIONS),
+  });
   const logger = pino({ level: 'silent' });
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
   const queue = await startQueue(config, logger);
@@ -111,7 +119,12 @@ async function main(): Promise<void> {
   const made = await fetch(`http://127.0.0.1:${port}/api/auth/signup`, {
     method: 'POST',
     headers: { 'content-type': 'application/json', cookie: cookie0, 'x-csrf-token': csrf },
-    body: JSON.stringify({ firmName: 'Bench Owner Firm', name: 'Bench Owner', email: 'bench@example.test', password: 'bench-password-2026' }),
+    body: JSON.stringify({
+      firmName: 'Bench Owner Firm',
+      name: 'Bench Owner',
+      email: 'bench@example.test',
+      password: 'bench-password-2026',
+    }),
   });
   const cookie = made.headers.get('set-cookie')!.split(';')[0]!;
   const user = ((await made.json()) as { user: { id: string; firmId: string } }).user;
@@ -149,7 +162,8 @@ async function main(): Promise<void> {
 
   // A deep cursor: walk ~15,000 rows in once.
   let after: string | null = null;
-  for (let i = 0; i < 150; i++) after = (JSON.parse(await get(`/api/inquiries?limit=100${after ? `&after=${after}` : ''}`)) as { nextCursor: string }).nextCursor;
+  for (let i = 0; i < 150; i++)
+    after = (JSON.parse(await get(`/api/inquiries?limit=100${after ? `&after=${after}` : ''}`)) as { nextCursor: string }).nextCursor;
 
   const measure = (job: Record<string, unknown>) =>
     new Promise<{ rps: number; p50: number; p95: number }>((resolve, reject) => {
@@ -160,8 +174,13 @@ async function main(): Promise<void> {
       worker.once('error', reject);
     });
 
-  console.log(`inquiries list: ${BIG} in one firm, ${OTHERS} other firms × ${PER_OTHER}; ${REQUESTS} requests, ${CONNECTIONS} connections; load from a worker thread`);
-  for (const [label, cursor] of [['first page', null], ['deep page (~15,000 in)', after]] as const) {
+  console.log(
+    `inquiries list: ${BIG} in one firm, ${OTHERS} other firms × ${PER_OTHER}; ${REQUESTS} requests, ${CONNECTIONS} connections; load from a worker thread`,
+  );
+  for (const [label, cursor] of [
+    ['first page', null],
+    ['deep page (~15,000 in)', after],
+  ] as const) {
     const url = `/api/inquiries?limit=50${cursor ? `&after=${cursor}` : ''}`;
     const sqlQuery = buildListQuery(firmId, { sort: 'newest', limit: 50, ...(cursor ? { after: cursor } : {}) });
     const httpJob = { mode: 'http', port, path: url, cookie: session };

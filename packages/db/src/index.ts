@@ -3,18 +3,4 @@ export * from './schema';
 export * from './client';
 export * from './tenant/scoped';
 export * from './migrate';
-export {
-  sql,
-  eq,
-  and,
-  or,
-  desc,
-  asc,
-  isNull,
-  isNotNull,
-  inArray,
-  gt,
-  lt,
-  gte,
-  lte,
-} from 'drizzle-orm';
+export { sql, eq, and, or, desc, asc, isNull, isNotNull, inArray, gt, lt, gte, lte } from 'drizzle-orm';

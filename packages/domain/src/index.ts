@@ -10,15 +10,7 @@ export { dottedPath } from './errors/field-path';
 export type { LengthUnit } from './units/length';
 export { convertArea, convertAreaExact, convertLength, convertLengthExact, isLengthUnit } from './units/length';
 export type { Dimension, MassUnit, QuantityUnit, VolumeUnit } from './units/quantity-unit';
-export {
-  convertQuantity,
-  convertQuantityExact,
-  dimensionOf,
-  fromBase,
-  isMassUnit,
-  isVolumeUnit,
-  toBase,
-} from './units/quantity-unit';
+export { convertQuantity, convertQuantityExact, dimensionOf, fromBase, isMassUnit, isVolumeUnit, toBase } from './units/quantity-unit';
 export type { KitchenVolume } from './units/kitchen-display';
 export { formatKitchenVolume, formatMetricMass, formatMetricVolume } from './units/kitchen-display';
 export { fixedNumber, plainNumber, roundedNumber } from './units/number-text';
@@ -111,13 +103,7 @@ export type { DepositCapRule, DepositCheck } from './billing/deposit-cap';
 export { checkDeposit, depositCap } from './billing/deposit-cap';
 export type { ChangeOrder } from './billing/change-orders';
 export { contractSumToDate, respreadSchedule } from './billing/change-orders';
-export type {
-  PayApplication,
-  PayApplicationInput,
-  PayApplicationSummary,
-  ValueLine,
-  ValueLineInput,
-} from './billing/pay-application';
+export type { PayApplication, PayApplicationInput, PayApplicationSummary, ValueLine, ValueLineInput } from './billing/pay-application';
 export { carryForward, computePayApplication, retainageRateFor } from './billing/pay-application';
 
 // receivables

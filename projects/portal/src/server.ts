@@ -8,8 +8,7 @@ const app = createSsrApp({
   // prospect's words and messages (features/inquiry/posted-refusal.ts reads it).
   requestContext: (res) => ({ inquiryForm: res.locals['inquiryForm'] }),
   // A refused post answers 400 even if rendering itself went well (a 404 or 5xx stays as it is).
-  statusFor: (rendered, res) =>
-    res.locals['inquiryForm'] !== undefined && rendered < 300 ? 400 : rendered,
+  statusFor: (rendered, res) => (res.locals['inquiryForm'] !== undefined && rendered < 300 ? 400 : rendered),
 });
 
 /** Mounted by the Layerbook host server (and used by the Angular CLI dev server). */

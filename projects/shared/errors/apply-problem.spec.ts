@@ -42,15 +42,9 @@ describe('applyProblem', () => {
   });
 
   it.each([
-    [
-      'the detail',
-      { detail: 'This e-mail already has an account.' },
-      'This e-mail already has an account.',
-    ],
+    ['the detail', { detail: 'This e-mail already has an account.' }, 'This e-mail already has an account.'],
     ['the title', {}, 'Conflict'],
   ])('says %s when there are no field errors', (_what, extra, words) => {
-    expect(
-      applyProblem(signUpForm(), { type: 'about:blank', title: 'Conflict', status: 409, ...extra }),
-    ).toBe(words);
+    expect(applyProblem(signUpForm(), { type: 'about:blank', title: 'Conflict', status: 409, ...extra })).toBe(words);
   });
 });

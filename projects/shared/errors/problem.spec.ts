@@ -2,8 +2,7 @@ import { HttpErrorResponse } from '@angular/common/http';
 import { describe, expect, it } from 'vitest';
 import { problemMessage, toProblem } from './problem';
 
-const httpError = (status: number, error: unknown = null) =>
-  new HttpErrorResponse({ status, error, url: '/api/x' });
+const httpError = (status: number, error: unknown = null) => new HttpErrorResponse({ status, error, url: '/api/x' });
 
 describe('toProblem', () => {
   it('keeps the API problem as it came', () => {
@@ -64,8 +63,6 @@ describe('problemMessage', () => {
   });
 
   it('says something even for an unreachable API', () => {
-    expect(problemMessage(httpError(0))).toBe(
-      'Layerbook could not be reached. Check your connection and try again.',
-    );
+    expect(problemMessage(httpError(0))).toBe('Layerbook could not be reached. Check your connection and try again.');
   });
 });

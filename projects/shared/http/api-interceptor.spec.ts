@@ -1,9 +1,4 @@
-import {
-  HttpClient,
-  HttpErrorResponse,
-  provideHttpClient,
-  withInterceptors,
-} from '@angular/common/http';
+import { HttpClient, HttpErrorResponse, provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ApplicationRef, Component, Injectable } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
@@ -119,9 +114,7 @@ describe('apiInterceptorFor', () => {
       const { http, api, router, session } = setUp(ADMIN_LIKE);
       await router.navigateByUrl('/jobs');
       const sent = failing(firstValueFrom(http.get('/api/jobs')));
-      api
-        .expectOne('/api/jobs')
-        .flush({ ...EXPIRED, status: 403 }, { status: 403, statusText: 'Forbidden' });
+      api.expectOne('/api/jobs').flush({ ...EXPIRED, status: 403 }, { status: 403, statusText: 'Forbidden' });
       await sent;
       expect(router.url).toBe('/jobs');
       expect(session.forgotten).toBe(0);
@@ -151,26 +144,23 @@ describe('apiInterceptorFor', () => {
 
     it('asks for a token first when a write comes before any session answer', async () => {
       const write = firstValueFrom(http.post('/api/jobs', {}));
-      api
-        .expectOne({ method: 'GET', url: '/api/auth/session' })
-        .flush({ user: null, csrfToken: 'token-2' });
+      api.expectOne({ method: 'GET', url: '/api/auth/session' }).flush({ user: null, csrfToken: 'token-2' });
       const sent = api.expectOne({ method: 'POST', url: '/api/jobs' });
       expect(sent.request.headers.get('x-csrf-token')).toBe('token-2');
       sent.flush({});
       await write;
     });
 
-    it.each([
-      ['/api/public/firms/fernhollow'],
-      ['/assets/logo.svg'],
-      ['https://example.test/api/x'],
-    ])('sends %s as it is (no cookie, no token)', async (url) => {
-      const read = firstValueFrom(http.get(url));
-      const sent = api.expectOne(url);
-      expect(sent.request.withCredentials).toBe(false);
-      expect(sent.request.headers.has('x-csrf-token')).toBe(false);
-      sent.flush({});
-      await read;
-    });
+    it.each([['/api/public/firms/fernhollow'], ['/assets/logo.svg'], ['https://example.test/api/x']])(
+      'sends %s as it is (no cookie, no token)',
+      async (url) => {
+        const read = firstValueFrom(http.get(url));
+        const sent = api.expectOne(url);
+        expect(sent.request.withCredentials).toBe(false);
+        expect(sent.request.headers.has('x-csrf-token')).toBe(false);
+        sent.flush({});
+        await read;
+      },
+    );
   });
 });

@@ -1,11 +1,4 @@
-import {
-  HttpErrorResponse,
-  HttpEvent,
-  HttpHandlerFn,
-  HttpInterceptorFn,
-  HttpRequest,
-  HttpResponse,
-} from '@angular/common/http';
+import { HttpErrorResponse, HttpEvent, HttpHandlerFn, HttpInterceptorFn, HttpRequest, HttpResponse } from '@angular/common/http';
 import { isPlatformServer } from '@angular/common';
 import { PLATFORM_ID, REQUEST, inject } from '@angular/core';
 import { Router } from '@angular/router';
@@ -50,8 +43,7 @@ export function apiInterceptorFor(settings: ApiSettings): HttpInterceptorFn {
     if (SAFE_METHODS.has(req.method)) {
       return next(request).pipe(watch);
     }
-    const send = () =>
-      next(request.clone({ setHeaders: { 'x-csrf-token': csrf.value() } })).pipe(watch);
+    const send = () => next(request.clone({ setHeaders: { 'x-csrf-token': csrf.value() } })).pipe(watch);
     if (csrf.value()) {
       return send();
     }
@@ -71,11 +63,7 @@ function sessionEnder(settings: ApiSettings): () => void {
     session.accept(null);
     const navigating = router.currentNavigation();
     const target = navigating?.finalUrl ?? navigating?.extractedUrl;
-    const redirect = signInRedirect(
-      target ? router.serializeUrl(target) : router.url,
-      settings.signInPath,
-      settings.baseHref,
-    );
+    const redirect = signInRedirect(target ? router.serializeUrl(target) : router.url, settings.signInPath, settings.baseHref);
     if (redirect) {
       void router.navigate([redirect.path], { queryParams: { next: redirect.next } });
     }
@@ -105,12 +93,7 @@ function rememberToken(event: HttpEvent<unknown>, csrf: CsrfToken): void {
     return;
   }
   const body: unknown = event.body;
-  if (
-    typeof body === 'object' &&
-    body !== null &&
-    'csrfToken' in body &&
-    typeof body.csrfToken === 'string'
-  ) {
+  if (typeof body === 'object' && body !== null && 'csrfToken' in body && typeof body.csrfToken === 'string') {
     csrf.remember(body.csrfToken);
   }
 }

@@ -8,12 +8,7 @@ describe('signInRedirect', () => {
     ['/jobs/7?tab=photos', '/sign-in', '/', { path: '/sign-in', next: '/jobs/7?tab=photos' }],
     ['/today', '/sign-in', '/', { path: '/sign-in', next: '/today' }],
     ['/proposals/abc', '/sign-in', '/portal/', { path: '/sign-in', next: '/portal/proposals/abc' }],
-    [
-      '/boards/1#photos',
-      '/sign-in',
-      '/portal',
-      { path: '/sign-in', next: '/portal/boards/1#photos' },
-    ],
+    ['/boards/1#photos', '/sign-in', '/portal', { path: '/sign-in', next: '/portal/boards/1#photos' }],
     ['/', '/sign-in', '/portal/', { path: '/sign-in', next: '/portal/' }],
     ['projects', '/sign-in', '/portal/', { path: '/sign-in', next: '/portal/projects' }],
   ])('%s in %s under %s', (current, signIn, base, expected) => {

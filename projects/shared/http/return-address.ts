@@ -10,11 +10,7 @@ export interface SignInRedirect {
  * written from the site root, as each app's sign-in reads it back (the portal's next-url.ts wants
  * `/portal/…`). Null when they are on the sign-in page already: there is nothing to return to.
  */
-export function signInRedirect(
-  currentUrl: string,
-  signInPath: string,
-  baseHref: string,
-): SignInRedirect | null {
+export function signInRedirect(currentUrl: string, signInPath: string, baseHref: string): SignInRedirect | null {
   const path = currentUrl.split(/[?#]/, 1)[0] ?? '';
   if (path === signInPath || path.startsWith(`${signInPath}/`)) {
     return null;

@@ -1,5 +1,16 @@
 import { HttpClient, HttpEventType } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, Injector, afterNextRender, inject, input, model, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  DestroyRef,
+  ElementRef,
+  Injector,
+  afterNextRender,
+  inject,
+  input,
+  model,
+  signal,
+} from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -61,7 +72,14 @@ let nextGalleryId = 0;
                     <button mat-button type="button" [disabled]="isBusy()" (click)="confirming.set(null)">Keep</button>
                   </span>
                 } @else {
-                  <button mat-icon-button type="button" class="delete" [disabled]="isBusy()" [attr.aria-label]="'Delete photo ' + (i + 1) + ' of ' + name" (click)="askToDelete(p)">
+                  <button
+                    mat-icon-button
+                    type="button"
+                    class="delete"
+                    [disabled]="isBusy()"
+                    [attr.aria-label]="'Delete photo ' + (i + 1) + ' of ' + name"
+                    (click)="askToDelete(p)"
+                  >
                     <mat-icon aria-hidden="true">delete</mat-icon>
                   </button>
                 }
@@ -76,7 +94,11 @@ let nextGalleryId = 0;
       @for (u of uploads(); track u.key) {
         <div class="upload">
           <span class="upload-name">{{ u.name }}</span>
-          <mat-progress-bar [mode]="u.percent === null ? 'indeterminate' : 'determinate'" [value]="u.percent ?? 0" [attr.aria-label]="'Uploading ' + u.name" />
+          <mat-progress-bar
+            [mode]="u.percent === null ? 'indeterminate' : 'determinate'"
+            [value]="u.percent ?? 0"
+            [attr.aria-label]="'Uploading ' + u.name"
+          />
         </div>
       }
 
@@ -110,23 +132,90 @@ let nextGalleryId = 0;
     </section>
   `,
   styles: `
-    :host { display: block; margin: 1rem 0; }
-    h2, h3 { margin: 0 0 0.5rem; }
-    p { margin: 0.15rem 0; }
-    .muted { color: var(--mat-sys-on-surface-variant); }
+    :host {
+      display: block;
+      margin: 1rem 0;
+    }
+    h2,
+    h3 {
+      margin: 0 0 0.5rem;
+    }
+    p {
+      margin: 0.15rem 0;
+    }
+    .muted {
+      color: var(--mat-sys-on-surface-variant);
+    }
     /* One row that scrolls sideways on a phone rather than pushing the page far down. */
-    .strip { list-style: none; margin: 0 0 0.5rem; padding: 0 0 0.25rem; display: flex; gap: 0.75rem; overflow-x: auto; }
-    .photo { position: relative; flex: none; display: flex; flex-direction: column; align-items: flex-start; gap: 0.25rem; max-width: 16rem; }
-    .photo img { display: block; width: auto; max-width: 16rem; object-fit: cover; border-radius: 4px; background: var(--mat-sys-surface-container); }
-    .caption { font-size: 0.85rem; overflow-wrap: anywhere; }
-    .delete { position: absolute; top: 0; right: 0; background: color-mix(in srgb, var(--mat-sys-surface) 85%, transparent); }
-    .confirm { display: flex; gap: 0.25rem; }
-    .upload { display: grid; grid-template-columns: minmax(0, 12rem) minmax(0, 1fr); align-items: center; gap: 0.5rem; margin: 0.25rem 0; max-width: 32rem; }
-    .upload-name { overflow: hidden; text-overflow: ellipsis; white-space: nowrap; }
-    .add { display: flex; flex-wrap: wrap; align-items: flex-start; gap: 0.5rem 1rem; }
+    .strip {
+      list-style: none;
+      margin: 0 0 0.5rem;
+      padding: 0 0 0.25rem;
+      display: flex;
+      gap: 0.75rem;
+      overflow-x: auto;
+    }
+    .photo {
+      position: relative;
+      flex: none;
+      display: flex;
+      flex-direction: column;
+      align-items: flex-start;
+      gap: 0.25rem;
+      max-width: 16rem;
+    }
+    .photo img {
+      display: block;
+      width: auto;
+      max-width: 16rem;
+      object-fit: cover;
+      border-radius: 4px;
+      background: var(--mat-sys-surface-container);
+    }
+    .caption {
+      font-size: 0.85rem;
+      overflow-wrap: anywhere;
+    }
+    .delete {
+      position: absolute;
+      top: 0;
+      right: 0;
+      background: color-mix(in srgb, var(--mat-sys-surface) 85%, transparent);
+    }
+    .confirm {
+      display: flex;
+      gap: 0.25rem;
+    }
+    .upload {
+      display: grid;
+      grid-template-columns: minmax(0, 12rem) minmax(0, 1fr);
+      align-items: center;
+      gap: 0.5rem;
+      margin: 0.25rem 0;
+      max-width: 32rem;
+    }
+    .upload-name {
+      overflow: hidden;
+      text-overflow: ellipsis;
+      white-space: nowrap;
+    }
+    .add {
+      display: flex;
+      flex-wrap: wrap;
+      align-items: flex-start;
+      gap: 0.5rem 1rem;
+    }
     /* Hidden but still in the page, so the button can open it and tests can hand it files. */
-    .picker { position: absolute; width: 1px; height: 1px; opacity: 0; pointer-events: none; }
-    .errors { color: var(--mat-sys-error); }
+    .picker {
+      position: absolute;
+      width: 1px;
+      height: 1px;
+      opacity: 0;
+      pointer-events: none;
+    }
+    .errors {
+      color: var(--mat-sys-error);
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

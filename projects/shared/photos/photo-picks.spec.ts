@@ -54,14 +54,24 @@ describe('photoProblemText', () => {
   it('prefers the message about the file', () => {
     const error = new HttpErrorResponse({
       status: 400,
-      error: { type: 'about:blank', title: 'The request has invalid fields', status: 400, errors: [{ field: 'file', message: 'SVG and HTML files are not accepted.' }] },
+      error: {
+        type: 'about:blank',
+        title: 'The request has invalid fields',
+        status: 400,
+        errors: [{ field: 'file', message: 'SVG and HTML files are not accepted.' }],
+      },
     });
     expect(photoProblemText(error)).toBe('SVG and HTML files are not accepted.');
   });
 
   it('falls back to the detail, then the title', () => {
-    const conflict = new HttpErrorResponse({ status: 409, error: { type: 'about:blank', title: 'Conflict', status: 409, detail: 'The client approved this board.' } });
+    const conflict = new HttpErrorResponse({
+      status: 409,
+      error: { type: 'about:blank', title: 'Conflict', status: 409, detail: 'The client approved this board.' },
+    });
     expect(photoProblemText(conflict)).toBe('The client approved this board.');
-    expect(photoProblemText(new HttpErrorResponse({ status: 0 }))).toBe('Layerbook could not be reached. Check your connection and try again.');
+    expect(photoProblemText(new HttpErrorResponse({ status: 0 }))).toBe(
+      'Layerbook could not be reached. Check your connection and try again.',
+    );
   });
 });

@@ -1,9 +1,4 @@
-import {
-  AngularNodeAppEngine,
-  createNodeRequestHandler,
-  isMainModule,
-  writeResponseToNodeResponse,
-} from '@angular/ssr/node';
+import { AngularNodeAppEngine, createNodeRequestHandler, isMainModule, writeResponseToNodeResponse } from '@angular/ssr/node';
 import express, { type Express, type Response as ExpressResponse } from 'express';
 import { randomBytes } from 'node:crypto';
 
@@ -67,10 +62,7 @@ export function createSsrApp(options: SsrAppOptions): Express {
  * The handler the Layerbook host server mounts (and the Angular CLI dev server uses); the app
  * listens by itself only when its bundle is run directly.
  */
-export function ssrRequestHandler(
-  app: Express,
-  moduleUrl: string,
-): ReturnType<typeof createNodeRequestHandler> {
+export function ssrRequestHandler(app: Express, moduleUrl: string): ReturnType<typeof createNodeRequestHandler> {
   if (isMainModule(moduleUrl) || process.env['pm_id']) {
     const port = process.env['PORT'] || 4000;
     app.listen(port, (error) => {
@@ -101,11 +93,7 @@ interface HtmlAnswer {
   readonly mediaRoot: string;
 }
 
-async function sendWithNonce(
-  response: Response,
-  res: ExpressResponse,
-  answer: HtmlAnswer,
-): Promise<void> {
+async function sendWithNonce(response: Response, res: ExpressResponse, answer: HtmlAnswer): Promise<void> {
   const contentType = response.headers.get('content-type') ?? '';
   if (!contentType.startsWith('text/html')) {
     await writeResponseToNodeResponse(response, res);
@@ -135,7 +123,5 @@ function withRootedMedia(html: string, mediaRoot: string): string {
   if (headEnd < 0) {
     return html;
   }
-  return (
-    html.slice(0, headEnd).replace(INLINED_MEDIA_URL, `url($1${mediaRoot}`) + html.slice(headEnd)
-  );
+  return html.slice(0, headEnd).replace(INLINED_MEDIA_URL, `url($1${mediaRoot}`) + html.slice(headEnd);
 }

@@ -23,13 +23,7 @@ import { Wordmark } from './wordmark';
       box-sizing: border-box;
       background:
         linear-gradient(175deg, transparent 0 62%, rgb(63 143 127 / 8%) 62% 70%, transparent 70%),
-        linear-gradient(
-          178deg,
-          transparent 0 74%,
-          rgb(200 150 46 / 10%) 74% 84%,
-          rgb(107 74 47 / 8%) 84%
-        ),
-        var(--lb-ivory);
+        linear-gradient(178deg, transparent 0 74%, rgb(200 150 46 / 10%) 74% 84%, rgb(107 74 47 / 8%) 84%), var(--lb-ivory);
     }
     .card {
       width: min(100%, 26rem);

@@ -10,14 +10,8 @@ import { ChangeDetectionStrategy, Component, input } from '@angular/core';
   },
   template: `
     <svg viewBox="0 0 32 32" width="32" height="32" aria-hidden="true" focusable="false">
-      <path
-        d="M4 11.5c4-2.2 8-2.2 12 0s8 2.2 12 0v4c-4 2.2-8 2.2-12 0s-8-2.2-12 0z"
-        fill="#3f8f7f"
-      />
-      <path
-        d="M4 17.5c4-2.2 8-2.2 12 0s8 2.2 12 0v4c-4 2.2-8 2.2-12 0s-8-2.2-12 0z"
-        fill="#c8962e"
-      />
+      <path d="M4 11.5c4-2.2 8-2.2 12 0s8 2.2 12 0v4c-4 2.2-8 2.2-12 0s-8-2.2-12 0z" fill="#3f8f7f" />
+      <path d="M4 17.5c4-2.2 8-2.2 12 0s8 2.2 12 0v4c-4 2.2-8 2.2-12 0s-8-2.2-12 0z" fill="#c8962e" />
       <path d="M4 23.5c4-2.2 8-2.2 12 0s8 2.2 12 0V28H4z" class="base" />
       <path d="M4 6.5c4-2.2 8-2.2 12 0s8 2.2 12 0" fill="none" class="line" stroke-width="1.6" />
     </svg>

@@ -17,7 +17,10 @@ describe('sign-up, sign-in and sign-out', () => {
   it('refuses a duplicate e-mail with a message on the field, and writes nothing', async () => {
     const { email } = await signUpFirm(t.app);
     const { agent, csrf } = await newAgent(t.app);
-    const res = await agent.post('/api/auth/signup').set('x-csrf-token', csrf()).send({ firmName: 'Second Firm', name: 'X', email, password: 'another-long-pass-99' });
+    const res = await agent
+      .post('/api/auth/signup')
+      .set('x-csrf-token', csrf())
+      .send({ firmName: 'Second Firm', name: 'X', email, password: 'another-long-pass-99' });
     expect(res.status).toBe(409);
     expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
     expect(res.body.errors).toEqual([expect.objectContaining({ field: 'email' })]);
@@ -25,7 +28,10 @@ describe('sign-up, sign-in and sign-out', () => {
 
   it('answers 400 problem+json naming each bad field, and refuses unknown fields', async () => {
     const { agent, csrf } = await newAgent(t.app);
-    const res = await agent.post('/api/auth/signup').set('x-csrf-token', csrf()).send({ firmName: '', name: 'A', email: 'not-an-email', password: 'short', admin: true });
+    const res = await agent
+      .post('/api/auth/signup')
+      .set('x-csrf-token', csrf())
+      .send({ firmName: '', name: 'A', email: 'not-an-email', password: 'short', admin: true });
     expect(res.status).toBe(400);
     expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
     const fields = res.body.errors.map((e: { field: string }) => e.field).sort();
@@ -34,7 +40,10 @@ describe('sign-up, sign-in and sign-out', () => {
 
   it('refuses a common password', async () => {
     const { agent, csrf } = await newAgent(t.app);
-    const res = await agent.post('/api/auth/signup').set('x-csrf-token', csrf()).send({ firmName: 'Firm', name: 'A', email: uniqueEmail(), password: 'password123' });
+    const res = await agent
+      .post('/api/auth/signup')
+      .set('x-csrf-token', csrf())
+      .send({ firmName: 'Firm', name: 'A', email: uniqueEmail(), password: 'password123' });
     expect(res.status).toBe(400);
     expect(res.body.errors[0]).toMatchObject({ field: 'password' });
   });
@@ -60,7 +69,10 @@ describe('sign-up, sign-in and sign-out', () => {
     const { email } = await signUpFirm(t.app);
     const { agent, csrf } = await newAgent(t.app);
     const wrong = await agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email, password: 'not-the-password' });
-    const unknown = await agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email: uniqueEmail(), password: 'not-the-password' });
+    const unknown = await agent
+      .post('/api/auth/signin')
+      .set('x-csrf-token', csrf())
+      .send({ email: uniqueEmail(), password: 'not-the-password' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body.detail).toBe(unknown.body.detail);
@@ -69,7 +81,8 @@ describe('sign-up, sign-in and sign-out', () => {
   it('locks an account after repeated failures', async () => {
     const { email, password } = await signUpFirm(t.app);
     const { agent, csrf } = await newAgent(t.app);
-    for (let i = 0; i < 5; i++) await agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email, password: 'wrong-password-x' });
+    for (let i = 0; i < 5; i++)
+      await agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email, password: 'wrong-password-x' });
     const locked = await agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email, password });
     expect(locked.status).toBe(423);
   });
@@ -98,10 +111,16 @@ describe('password reset by e-mailed link', () => {
     const mail = await t.inbox.waitFor((m) => m.to !== undefined && JSON.stringify(m.to).includes(email) && /reset/i.test(m.subject ?? ''));
     expect(mail.html).toBeTruthy();
     const token = new URL(linkIn(mail)).searchParams.get('token')!;
-    const done = await agent.post('/api/auth/password-reset/complete').set('x-csrf-token', csrf()).send({ token, password: 'a-brand-new-pass-42' });
+    const done = await agent
+      .post('/api/auth/password-reset/complete')
+      .set('x-csrf-token', csrf())
+      .send({ token, password: 'a-brand-new-pass-42' });
     expect(done.status).toBe(200);
     expect(done.body.user.email).toBe(email);
-    const again = await agent.post('/api/auth/password-reset/complete').set('x-csrf-token', done.body.csrfToken).send({ token, password: 'a-brand-new-pass-43' });
+    const again = await agent
+      .post('/api/auth/password-reset/complete')
+      .set('x-csrf-token', done.body.csrfToken)
+      .send({ token, password: 'a-brand-new-pass-43' });
     expect(again.status).toBe(410);
     expect((await elsewhere.get('/api/auth/session')).body.user).toBeNull();
     expect((await elsewhere.get('/api/team/members')).status).toBe(401);
@@ -120,7 +139,10 @@ describe('sign-in rate limit', () => {
       const { agent, csrf } = await newAgent(limited.app);
       const statuses: number[] = [];
       for (let i = 0; i < 4; i++) {
-        statuses.push((await agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email: uniqueEmail(), password: 'whatever-123' })).status);
+        statuses.push(
+          (await agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email: uniqueEmail(), password: 'whatever-123' }))
+            .status,
+        );
       }
       expect(statuses).toEqual([401, 401, 401, 429]);
     } finally {

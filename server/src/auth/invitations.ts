@@ -19,7 +19,11 @@ function assertUsable(inv: InvitationRow, now: Date): void {
 
 async function findByToken(ctx: AppContext, token: string): Promise<InvitationRow> {
   const tokenHash = hashToken(token);
-  const inv = await withLookup(ctx.pool, { tokenHash }, async (tx) => (await tx.db.select().from(invitations).where(eq(invitations.tokenHash, tokenHash)))[0]);
+  const inv = await withLookup(
+    ctx.pool,
+    { tokenHash },
+    async (tx) => (await tx.db.select().from(invitations).where(eq(invitations.tokenHash, tokenHash)))[0],
+  );
   if (!inv) throw notFound('invitation');
   return inv;
 }
@@ -38,7 +42,11 @@ export async function previewInvitation(ctx: AppContext, token: string): Promise
 export async function acceptInvitation(ctx: AppContext, input: InvitationAccept): Promise<StaffPrincipal> {
   const found = await findByToken(ctx, input.token);
   assertUsable(found, ctx.now());
-  const existing = await withTenant(ctx.pool, found.tenantId, async (tx) => (await tx.db.select().from(users).where(eq(users.email, found.email)))[0]);
+  const existing = await withTenant(
+    ctx.pool,
+    found.tenantId,
+    async (tx) => (await tx.db.select().from(users).where(eq(users.email, found.email)))[0],
+  );
   let passwordHash: string | null = null;
   if (existing) {
     // The same lockout as sign-in: an invitation link must not become a way to guess a password.
@@ -59,14 +67,27 @@ export async function acceptInvitation(ctx: AppContext, input: InvitationAccept)
     assertUsable(inv, ctx.now());
     let id = existing?.id;
     if (!id) {
-      const [created] = await tx.db.insert(users).values({ email: inv.email, name: input.name, passwordHash: passwordHash! }).returning({ id: users.id });
+      const [created] = await tx.db
+        .insert(users)
+        .values({ email: inv.email, name: input.name, passwordHash: passwordHash! })
+        .returning({ id: users.id });
       id = created!.id;
     }
-    const already = await tx.db.select().from(memberships).where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.userId, id)));
+    const already = await tx.db
+      .select()
+      .from(memberships)
+      .where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.userId, id)));
     if (already.length) throw conflict('You are already on this team. Sign in instead.');
     await tx.db.insert(memberships).values({ tenantId: tx.tenantId, userId: id, role: inv.role });
     await tx.db.update(invitations).set({ acceptedAt: ctx.now() }).where(eq(invitations.id, inv.id));
-    await recordAudit(tx, { actorUserId: id, actorKind: 'staff', action: 'invitation.accepted', entity: 'invitation', entityId: inv.id, data: { role: inv.role } });
+    await recordAudit(tx, {
+      actorUserId: id,
+      actorKind: 'staff',
+      action: 'invitation.accepted',
+      entity: 'invitation',
+      entityId: inv.id,
+      data: { role: inv.role },
+    });
     return id;
   });
   const principal = await loadStaffPrincipal(ctx.pool, userId, found.tenantId);

@@ -1,4 +1,15 @@
-import { and, asc, eq, isNull, memberships as membershipsTable, passwordResets, users, withGlobal, withLookup, withTenant } from '@layerbook/db';
+import {
+  and,
+  asc,
+  eq,
+  isNull,
+  memberships as membershipsTable,
+  passwordResets,
+  users,
+  withGlobal,
+  withLookup,
+  withTenant,
+} from '@layerbook/db';
 import type { AppContext } from '../context';
 import type { StaffPrincipal } from '../http/principal';
 import { gone, notFound } from '../http/problem';
@@ -15,7 +26,11 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
   const user = await withGlobal(ctx.pool, async (tx) => (await tx.db.select().from(users).where(eq(users.email, email)))[0]);
   if (!user) return;
   const memberships = await withLookup(ctx.pool, { userId: user.id }, (tx) =>
-    tx.db.select({ tenantId: membershipsTable.tenantId }).from(membershipsTable).where(eq(membershipsTable.userId, user.id)).orderBy(asc(membershipsTable.createdAt)),
+    tx.db
+      .select({ tenantId: membershipsTable.tenantId })
+      .from(membershipsTable)
+      .where(eq(membershipsTable.userId, user.id))
+      .orderBy(asc(membershipsTable.createdAt)),
   );
   const tenantId = memberships[0]?.tenantId;
   if (!tenantId) return;
@@ -39,14 +54,26 @@ export async function completePasswordReset(ctx: AppContext, token: string, pass
   assertNotCommonPassword(password);
   const passwordHash = await hashPassword(password);
   const userId = await withGlobal(ctx.pool, async (tx) => {
-    const reset = (await tx.db.select().from(passwordResets).where(eq(passwordResets.tokenHash, hashToken(token))).for('update'))[0];
+    const reset = (
+      await tx.db
+        .select()
+        .from(passwordResets)
+        .where(eq(passwordResets.tokenHash, hashToken(token)))
+        .for('update')
+    )[0];
     if (!reset) throw notFound('reset link');
     if (reset.usedAt) throw gone('This reset link was already used. Ask for a new one.');
     if (reset.expiresAt <= ctx.now()) throw gone('This reset link has expired. Ask for a new one.');
-    await tx.db.update(passwordResets).set({ usedAt: ctx.now() }).where(and(eq(passwordResets.id, reset.id), isNull(passwordResets.usedAt)));
+    await tx.db
+      .update(passwordResets)
+      .set({ usedAt: ctx.now() })
+      .where(and(eq(passwordResets.id, reset.id), isNull(passwordResets.usedAt)));
     await tx.db.update(users).set({ passwordHash, failedSignIns: 0, lockedUntil: null }).where(eq(users.id, reset.userId));
     // Whoever held a session (perhaps the reason for the reset) is signed out everywhere.
-    await tx.client.query(`delete from session where sess->'passport'->'user'->>'kind' = 'staff' and sess->'passport'->'user'->>'id' = $1`, [reset.userId]);
+    await tx.client.query(
+      `delete from session where sess->'passport'->'user'->>'kind' = 'staff' and sess->'passport'->'user'->>'id' = $1`,
+      [reset.userId],
+    );
     return reset.userId;
   });
   return firstActivePrincipal(ctx, userId);

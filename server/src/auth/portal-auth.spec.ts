@@ -29,7 +29,12 @@ describe('portal sign-in by e-mailed one-time link', () => {
     expect((await c.agent.get('/api/portal/proposals')).body).toEqual({ items: [] });
     // A client is not staff.
     expect((await c.agent.get('/api/team/members')).status).toBe(401);
-    const again = await (await newAgent(t.app, 'portal')).agent.post('/api/portal/auth/redeem').set('x-csrf-token', signedIn.body.csrfToken).send({ token });
+    const again = await (
+      await newAgent(t.app, 'portal')
+    ).agent
+      .post('/api/portal/auth/redeem')
+      .set('x-csrf-token', signedIn.body.csrfToken)
+      .send({ token });
     expect([403, 410]).toContain(again.status);
   });
 
@@ -62,7 +67,14 @@ describe('portal sign-in by e-mailed one-time link', () => {
     const bad = await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email: 'nope' });
     expect(bad.status).toBe(400);
     expect(bad.body.errors[0].field).toBe('email');
-    expect((await c.agent.post('/api/portal/auth/redeem').set('x-csrf-token', c.csrf()).send({ token: 'x'.repeat(43) })).status).toBe(404);
+    expect(
+      (
+        await c.agent
+          .post('/api/portal/auth/redeem')
+          .set('x-csrf-token', c.csrf())
+          .send({ token: 'x'.repeat(43) })
+      ).status,
+    ).toBe(404);
   });
 
   it('keeps signed-out clients out of their projects', async () => {

@@ -12,7 +12,10 @@ export const PORTAL_LINK_MINUTES = 20;
 /** E-mails a one-time link for every firm where this address is a client; silent otherwise. */
 export async function requestPortalLink(ctx: AppContext, email: string): Promise<void> {
   const accounts = await withLookup(ctx.pool, { email }, (tx) =>
-    tx.db.select({ id: portalUsers.id, tenantId: portalUsers.tenantId }).from(portalUsers).where(and(eq(portalUsers.email, email), eq(portalUsers.status, 'active'))),
+    tx.db
+      .select({ id: portalUsers.id, tenantId: portalUsers.tenantId })
+      .from(portalUsers)
+      .where(and(eq(portalUsers.email, email), eq(portalUsers.status, 'active'))),
   );
   for (const account of accounts) {
     await withTenant(ctx.pool, account.tenantId, async (tx) => {
@@ -24,14 +27,24 @@ export async function requestPortalLink(ctx: AppContext, email: string): Promise
         purposeKey: `portal-link:${linkId}`,
         tenantId: tx.tenantId,
         to: user.email,
-        ...portalLinkMail({ name: user.name, firmName: firm.name, url: `${ctx.config.PUBLIC_URL}/portal/sign-in/link?token=${token}`, minutes: PORTAL_LINK_MINUTES }),
+        ...portalLinkMail({
+          name: user.name,
+          firmName: firm.name,
+          url: `${ctx.config.PUBLIC_URL}/portal/sign-in/link?token=${token}`,
+          minutes: PORTAL_LINK_MINUTES,
+        }),
       });
     });
   }
 }
 
 /** A one-time portal sign-in link for a client's account (token for the e-mail, hash at rest). */
-export async function createPortalLink(tx: TenantTx, portalUserId: string, now: Date, minutes: number): Promise<{ id: string; token: string }> {
+export async function createPortalLink(
+  tx: TenantTx,
+  portalUserId: string,
+  now: Date,
+  minutes: number,
+): Promise<{ id: string; token: string }> {
   const { token, hash } = newToken();
   const [link] = await tx.db
     .insert(portalLinks)
@@ -42,14 +55,21 @@ export async function createPortalLink(tx: TenantTx, portalUserId: string, now: 
 
 export async function redeemPortalLink(ctx: AppContext, token: string): Promise<ClientPrincipal> {
   const tokenHash = hashToken(token);
-  const found = await withLookup(ctx.pool, { tokenHash }, async (tx) => (await tx.db.select().from(portalLinks).where(eq(portalLinks.tokenHash, tokenHash)))[0]);
+  const found = await withLookup(
+    ctx.pool,
+    { tokenHash },
+    async (tx) => (await tx.db.select().from(portalLinks).where(eq(portalLinks.tokenHash, tokenHash)))[0],
+  );
   if (!found) throw notFound('sign-in link');
   const portalUserId = await withTenant(ctx.pool, found.tenantId, async (tx) => {
     const link = (await tx.db.select().from(portalLinks).where(eq(portalLinks.id, found.id)).for('update'))[0];
     if (!link) throw notFound('sign-in link');
     if (link.usedAt) throw gone('This sign-in link was already used. Ask for a new one.');
     if (link.expiresAt <= ctx.now()) throw gone('This sign-in link has expired. Ask for a new one.');
-    await tx.db.update(portalLinks).set({ usedAt: ctx.now() }).where(and(eq(portalLinks.id, link.id), isNull(portalLinks.usedAt)));
+    await tx.db
+      .update(portalLinks)
+      .set({ usedAt: ctx.now() })
+      .where(and(eq(portalLinks.id, link.id), isNull(portalLinks.usedAt)));
     return link.portalUserId;
   });
   const principal = await loadClientPrincipal(ctx.pool, portalUserId, found.tenantId);

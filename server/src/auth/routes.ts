@@ -26,7 +26,9 @@ export async function staffSession(ctx: AppContext, req: Request, fresh = false)
   const claim = req.user?.kind === 'staff' ? req.user : null;
   const user = claim ? await loadStaffPrincipal(ctx.pool, claim.id, claim.tenantId) : null;
   return {
-    user: user ? { id: user.id, name: user.name, email: user.email, role: user.role, firmId: user.tenantId, firmName: user.firmName } : null,
+    user: user
+      ? { id: user.id, name: user.name, email: user.email, role: user.role, firmId: user.tenantId, firmName: user.firmName }
+      : null,
     csrfToken: csrf.generateToken(req, fresh),
   };
 }

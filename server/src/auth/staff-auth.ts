@@ -13,7 +13,9 @@ import { assertNotCommonPassword, decoyPasswordHash, hashPassword, verifyPasswor
 const WRONG = () => new HttpError(401, 'Sign-in failed', 'E-mail or password is not right.');
 const LOCK_AFTER = 5;
 const emailTaken = () =>
-  conflict('An account with this e-mail already exists.', [{ field: 'email', message: 'An account with this e-mail already exists; sign in instead.' }]);
+  conflict('An account with this e-mail already exists.', [
+    { field: 'email', message: 'An account with this e-mail already exists; sign in instead.' },
+  ]);
 
 /** Creates a firm and its owner in one transaction, and returns the owner, signed in. */
 export async function signUp(ctx: AppContext, input: SignUpRequest): Promise<StaffPrincipal> {
@@ -74,7 +76,11 @@ export async function signIn(ctx: AppContext, input: SignInRequest): Promise<Sta
 export function assertNotLocked(lockedUntil: Date | null, now: Date): void {
   if (lockedUntil && lockedUntil > now) {
     const minutes = Math.ceil((lockedUntil.getTime() - now.getTime()) / 60_000);
-    throw new HttpError(423, 'Account locked for now', `Too many failed attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`);
+    throw new HttpError(
+      423,
+      'Account locked for now',
+      `Too many failed attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`,
+    );
   }
 }
 
@@ -98,7 +104,11 @@ export async function countFailure(ctx: AppContext, userId: string, now: Date): 
 /** A person may belong to several firms; they enter the one they joined first. */
 export async function firstActivePrincipal(ctx: AppContext, userId: string): Promise<StaffPrincipal> {
   const rows = await withLookup(ctx.pool, { userId }, (tx) =>
-    tx.db.select({ tenantId: memberships.tenantId, status: memberships.status }).from(memberships).where(eq(memberships.userId, userId)).orderBy(asc(memberships.createdAt)),
+    tx.db
+      .select({ tenantId: memberships.tenantId, status: memberships.status })
+      .from(memberships)
+      .where(eq(memberships.userId, userId))
+      .orderBy(asc(memberships.createdAt)),
   );
   const active = rows.find((r) => r.status === 'active');
   if (!active) throw new HttpError(403, 'No access', 'Your access to this firm has been turned off. Ask the owner.');

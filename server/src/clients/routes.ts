@@ -46,7 +46,9 @@ export function clientRoutes(ctx: AppContext): Router {
   });
 
   router.post('/:id/contacts', async (req, res) => {
-    const contact = await withStaff(ctx, req, 'office', (tx) => addContact(tx, parse(clientIdParam, req.params).id, parse(contactCreate, req.body)));
+    const contact = await withStaff(ctx, req, 'office', (tx) =>
+      addContact(tx, parse(clientIdParam, req.params).id, parse(contactCreate, req.body)),
+    );
     res.status(201).json(contact satisfies ContactView);
   });
 
@@ -62,7 +64,9 @@ export function clientRoutes(ctx: AppContext): Router {
 export function siteRoutes(ctx: AppContext): Router {
   const router = Router();
   router.patch('/:id', async (req, res) => {
-    const site = await withStaff(ctx, req, 'office', (tx) => updateSite(tx, parse(siteIdParam, req.params).id, parse(siteUpdate, req.body)));
+    const site = await withStaff(ctx, req, 'office', (tx) =>
+      updateSite(tx, parse(siteIdParam, req.params).id, parse(siteUpdate, req.body)),
+    );
     res.json(site satisfies SiteView);
   });
   return router;

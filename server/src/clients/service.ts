@@ -50,14 +50,21 @@ export const toSite = (s: SiteRow): SiteView => ({
 const toContact = (c: ContactRow): ContactView => ({ id: c.id, name: c.name, email: c.email, phone: c.phone, roleTitle: c.roleTitle });
 
 export async function createClient(tx: TenantTx, actor: Actor, input: ClientCreate): Promise<ClientSummary> {
-  const [row] = await tx.db.insert(clients).values({ ...input, tenantId: tx.tenantId }).returning();
+  const [row] = await tx.db
+    .insert(clients)
+    .values({ ...input, tenantId: tx.tenantId })
+    .returning();
   const actorUserId = actor.kind === 'staff' ? actor.userId : null;
   await recordAudit(tx, { actorUserId, actorKind: actor.kind, action: 'client.created', entity: 'client', entityId: row!.id });
   return toSummary(row!);
 }
 
 export async function updateClient(tx: TenantTx, id: string, patch: ClientUpdate, now: Date): Promise<ClientSummary> {
-  const [row] = await tx.db.update(clients).set({ ...patch, updatedAt: now }).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id))).returning();
+  const [row] = await tx.db
+    .update(clients)
+    .set({ ...patch, updatedAt: now })
+    .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id)))
+    .returning();
   if (!row) throw notFound('client');
   if (patch.email !== undefined) {
     // Portal access follows the client's address: an old or mistyped address stops seeing their
@@ -108,17 +115,32 @@ export async function listClients(tx: TenantTx, q: ClientListQuery): Promise<Key
   const page = rows.slice(0, q.limit);
   const last = page[page.length - 1];
   return {
-    items: page.map((r) => toSummary({ id: r.id, kind: r.kind, isCompany: r.is_company, name: r.name, email: r.email, phone: r.phone, createdAt: r.created_at })),
+    items: page.map((r) =>
+      toSummary({ id: r.id, kind: r.kind, isCompany: r.is_company, name: r.name, email: r.email, phone: r.phone, createdAt: r.created_at }),
+    ),
     nextCursor: rows.length > q.limit && last ? encodeCursor(last.cursor_at, last.id) : null,
   };
 }
 
 export async function getClient(tx: TenantTx, id: string): Promise<ClientDetail> {
-  const client = (await tx.db.select().from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id))))[0];
+  const client = (
+    await tx.db
+      .select()
+      .from(clients)
+      .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, id)))
+  )[0];
   if (!client) throw notFound('client');
   // One connection runs one query at a time, so these run in turn.
-  const contacts = await tx.db.select().from(clientContacts).where(and(eq(clientContacts.tenantId, tx.tenantId), eq(clientContacts.clientId, id))).orderBy(clientContacts.createdAt);
-  const siteRows = await tx.db.select().from(sites).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.clientId, id))).orderBy(sites.createdAt);
+  const contacts = await tx.db
+    .select()
+    .from(clientContacts)
+    .where(and(eq(clientContacts.tenantId, tx.tenantId), eq(clientContacts.clientId, id)))
+    .orderBy(clientContacts.createdAt);
+  const siteRows = await tx.db
+    .select()
+    .from(sites)
+    .where(and(eq(sites.tenantId, tx.tenantId), eq(sites.clientId, id)))
+    .orderBy(sites.createdAt);
   const linked = await tx.db
     .select({ id: inquiries.id, contactName: inquiries.contactName, stage: inquiries.stage, createdAt: inquiries.createdAt })
     .from(inquiries)
@@ -134,24 +156,37 @@ export async function getClient(tx: TenantTx, id: string): Promise<ClientDetail>
 }
 
 async function assertClient(tx: TenantTx, clientId: string): Promise<void> {
-  const found = await tx.db.select({ id: clients.id }).from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)));
+  const found = await tx.db
+    .select({ id: clients.id })
+    .from(clients)
+    .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)));
   if (!found.length) throw notFound('client');
 }
 
 export async function addContact(tx: TenantTx, clientId: string, input: ContactCreate): Promise<ContactView> {
   await assertClient(tx, clientId);
-  const [row] = await tx.db.insert(clientContacts).values({ ...input, clientId, tenantId: tx.tenantId }).returning();
+  const [row] = await tx.db
+    .insert(clientContacts)
+    .values({ ...input, clientId, tenantId: tx.tenantId })
+    .returning();
   return toContact(row!);
 }
 
 export async function addSite(tx: TenantTx, clientId: string, input: SiteCreate): Promise<SiteView> {
   await assertClient(tx, clientId);
-  const [row] = await tx.db.insert(sites).values({ ...input, clientId, tenantId: tx.tenantId }).returning();
+  const [row] = await tx.db
+    .insert(sites)
+    .values({ ...input, clientId, tenantId: tx.tenantId })
+    .returning();
   return toSite(row!);
 }
 
 export async function updateSite(tx: TenantTx, siteId: string, patch: SiteUpdate): Promise<SiteView> {
-  const [row] = await tx.db.update(sites).set(patch).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, siteId))).returning();
+  const [row] = await tx.db
+    .update(sites)
+    .set(patch)
+    .where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, siteId)))
+    .returning();
   if (!row) throw notFound('site');
   return toSite(row);
 }

@@ -19,7 +19,10 @@ type Owner = Awaited<ReturnType<typeof signUpFirm>>;
 
 async function makeRoom(o: Owner): Promise<string> {
   const client = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: 'Ottoline Marsh' });
-  const site = await o.agent.post(`/api/clients/${client.body.id}/sites`).set('x-csrf-token', o.csrf()).send({ addressLine1: '9 Quarry Lane', city: 'Hobb' });
+  const site = await o.agent
+    .post(`/api/clients/${client.body.id}/sites`)
+    .set('x-csrf-token', o.csrf())
+    .send({ addressLine1: '9 Quarry Lane', city: 'Hobb' });
   const room = await o.agent.post(`/api/takeoff/sites/${site.body.id}/rooms`).set('x-csrf-token', o.csrf()).send({ name: 'Library' });
   return room.body.id;
 }
@@ -108,7 +111,11 @@ describe('files: upload, storage and download', () => {
   it('refuses a bad caption before anything is stored', async () => {
     const o = await signUpFirm(t.app);
     const roomId = await makeRoom(o);
-    const res = await o.agent.post(`/api/takeoff/rooms/${roomId}/photos`).set('x-csrf-token', o.csrf()).attach('file', await pngImage(), 'a.png').field('caption', 'x'.repeat(201));
+    const res = await o.agent
+      .post(`/api/takeoff/rooms/${roomId}/photos`)
+      .set('x-csrf-token', o.csrf())
+      .attach('file', await pngImage(), 'a.png')
+      .field('caption', 'x'.repeat(201));
     expect(res.status).toBe(400);
     expect(res.body.errors[0].field).toBe('caption');
     expect(await storedFor(t.ctx, o.firmId)).toEqual({ keys: [], rows: 0 });

@@ -53,7 +53,9 @@ describe('checkImage', () => {
   });
 
   it('refuses a GIF (decodable, but not a photo format we keep) and an empty or missing file', async () => {
-    const gif = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#000' } }).gif().toBuffer();
+    const gif = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#000' } })
+      .gif()
+      .toBuffer();
     expect((await refusal(gif, 'a.gif')).message).toMatch(/GIF images are not accepted/);
     expect((await refusal(Buffer.alloc(0), 'a.png')).message).toMatch(/Choose a JPEG, PNG or WebP photo/);
     await expect(checkImage(undefined)).rejects.toMatchObject({ status: 400 });

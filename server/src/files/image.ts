@@ -63,7 +63,10 @@ export async function checkImage(file: ReceivedFile | undefined, field = 'file')
   const allowed = ALLOWED[format];
   if (!(allowed.extensions as readonly string[]).includes(extension)) {
     const named = extension ? `is named ${extension}` : 'has no extension';
-    throw refuse(field, `The file ${named} but holds a ${format.toUpperCase()} image. Rename it to ${allowed.extensions[0]} and try again.`);
+    throw refuse(
+      field,
+      `The file ${named} but holds a ${format.toUpperCase()} image. Rename it to ${allowed.extensions[0]} and try again.`,
+    );
   }
 
   let thumbnail: Buffer;
@@ -92,7 +95,8 @@ export async function checkImage(file: ReceivedFile | undefined, field = 'file')
  * characters are dropped and the length capped. Storage never uses it.
  */
 export function safeName(name: string, fallbackExtension: string): string {
-  const base = path.basename(name.replaceAll('\\', '/'))
+  const base = path
+    .basename(name.replaceAll('\\', '/'))
     // eslint-disable-next-line no-control-regex
     .replace(/[\u0000-\u001f\u007f"]/g, '')
     .trim()

@@ -55,7 +55,9 @@ export function mountPhotoRoutes<V extends PhotoView>(router: Router, ctx: AppCo
       const tenantId = req.user?.tenantId;
       if (!tenantId) throw unauthorized();
       const photo: V = await storeImageThen(ctx.storage, ctx.logger, tenantId, image, (stored) =>
-        withStaff(ctx, req, photos.roles.upload, (tx, staff) => photos.add(tx, staffActor(staff), photos.ownerId(req), fields.caption ?? '', stored)),
+        withStaff(ctx, req, photos.roles.upload, (tx, staff) =>
+          photos.add(tx, staffActor(staff), photos.ownerId(req), fields.caption ?? '', stored),
+        ),
       );
       res.status(201).json(photo);
     },

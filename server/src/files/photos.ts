@@ -146,6 +146,14 @@ export async function deleteAllPhotos(tx: TenantTx, album: PhotoAlbum, ownerId: 
   const fileRows = await tx.db
     .select()
     .from(files)
-    .where(and(eq(files.tenantId, tx.tenantId), inArray(files.id, links.map((l) => l.fileId))));
+    .where(
+      and(
+        eq(files.tenantId, tx.tenantId),
+        inArray(
+          files.id,
+          links.map((l) => l.fileId),
+        ),
+      ),
+    );
   return { count: links.length, keys: await deleteFileRows(tx, fileRows) };
 }

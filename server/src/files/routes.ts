@@ -34,7 +34,11 @@ export function fileRoutes(ctx: AppContext): Router {
     const body = file.thumbnailKey ? await ctx.storage.get(file.thumbnailKey) : null;
     if (!body) throw notFound('thumbnail');
     // Shown inline: the thumbnail is WebP that sharp wrote itself, not bytes from the uploader.
-    res.set({ 'content-type': 'image/webp', 'content-disposition': 'inline; filename="thumbnail.webp"', 'cache-control': 'private, max-age=3600' });
+    res.set({
+      'content-type': 'image/webp',
+      'content-disposition': 'inline; filename="thumbnail.webp"',
+      'cache-control': 'private, max-age=3600',
+    });
     await send(ctx, res, body);
   });
 

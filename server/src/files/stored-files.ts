@@ -23,7 +23,13 @@ export type ObjectKeys = readonly string[];
  * uploader's name, then runs `record` — the transaction that writes the rows. If `record` fails
  * (a 404, a constraint, a failed commit), the objects are deleted again so nothing is left unowned.
  */
-export async function storeImageThen<T>(storage: ObjectStore, logger: Logger, tenantId: string, image: CheckedImage, record: (stored: StoredImage) => Promise<T>): Promise<T> {
+export async function storeImageThen<T>(
+  storage: ObjectStore,
+  logger: Logger,
+  tenantId: string,
+  image: CheckedImage,
+  record: (stored: StoredImage) => Promise<T>,
+): Promise<T> {
   const fileId = randomUUID();
   const stored: StoredImage = { fileId, storageKey: `${tenantId}/${fileId}`, thumbnailKey: `${tenantId}/${fileId}-thumb.webp`, image };
   const keys = [stored.storageKey, stored.thumbnailKey];
@@ -71,7 +77,12 @@ export async function insertImageRow(tx: TenantTx, stored: StoredImage, purpose:
 }
 
 export async function findFile(tx: TenantTx, fileId: string): Promise<FileRow> {
-  const row = (await tx.db.select().from(files).where(and(eq(files.tenantId, tx.tenantId), eq(files.id, fileId))))[0];
+  const row = (
+    await tx.db
+      .select()
+      .from(files)
+      .where(and(eq(files.tenantId, tx.tenantId), eq(files.id, fileId)))
+  )[0];
   if (!row) throw notFound('file');
   return row;
 }

@@ -1,7 +1,10 @@
 import sharp from 'sharp';
 
 /** Small real images made on the fly, so the tests carry no binary fixtures. */
-export const pngImage = (width = 64, height = 48) => sharp({ create: { width, height, channels: 3, background: '#b0894f' } }).png().toBuffer();
+export const pngImage = (width = 64, height = 48) =>
+  sharp({ create: { width, height, channels: 3, background: '#b0894f' } })
+    .png()
+    .toBuffer();
 
 export const jpegImage = (width = 64, height = 48, orientation?: number) => {
   const image = sharp({ create: { width, height, channels: 3, background: '#6d8a96' } }).jpeg();
@@ -12,9 +15,13 @@ export const jpegImage = (width = 64, height = 48, orientation?: number) => {
 export const noisyPng = (width: number, height: number) => {
   const pixels = Buffer.alloc(width * height * 3);
   for (let i = 0; i < pixels.length; i++) pixels[i] = (i * 7919 + (i >> 3) * 104729) % 251;
-  return sharp(pixels, { raw: { width, height, channels: 3 } }).png({ compressionLevel: 0 }).toBuffer();
+  return sharp(pixels, { raw: { width, height, channels: 3 } })
+    .png({ compressionLevel: 0 })
+    .toBuffer();
 };
 
-export const SVG = Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><script>alert(1)</script><rect width="10" height="10"/></svg>');
+export const SVG = Buffer.from(
+  '<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><script>alert(1)</script><rect width="10" height="10"/></svg>',
+);
 export const HTML = Buffer.from('<!doctype html><html><body><script>alert(document.cookie)</script></body></html>');
 export const TEXT = Buffer.from('Ceiling: two coats of lime, one of wax.\n');

@@ -13,7 +13,17 @@ export async function storedFor(ctx: AppContext, tenantId: string): Promise<{ ke
   });
   try {
     const listed = await client.send(new ListObjectsV2Command({ Bucket: config.S3_BUCKET, Prefix: `${tenantId}/` }));
-    const rows = await withTenant(ctx.pool, tenantId, async (tx) => (await tx.db.select({ n: sql<number>`count(*)::int` }).from(files).where(eq(files.tenantId, tenantId)))[0]!.n);
+    const rows = await withTenant(
+      ctx.pool,
+      tenantId,
+      async (tx) =>
+        (
+          await tx.db
+            .select({ n: sql<number>`count(*)::int` })
+            .from(files)
+            .where(eq(files.tenantId, tenantId))
+        )[0]!.n,
+    );
     return { keys: (listed.Contents ?? []).map((o) => o.Key ?? '').sort(), rows };
   } finally {
     client.destroy();

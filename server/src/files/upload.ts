@@ -35,14 +35,18 @@ function uploadProblem(error: unknown, field: string, maxBytes: number): HttpErr
       case 'LIMIT_FILE_COUNT':
       case 'LIMIT_UNEXPECTED_FILE': {
         const message = `Send one file, in the field "${field}".`;
-        return new HttpError(400, 'The request has invalid fields', message, [{ field: error.field && error.field !== field ? error.field : field, message }]);
+        return new HttpError(400, 'The request has invalid fields', message, [
+          { field: error.field && error.field !== field ? error.field : field, message },
+        ]);
       }
       case 'LIMIT_FIELD_VALUE': {
         const message = 'This text is too long.';
         return new HttpError(400, 'The request has invalid fields', message, [{ field: error.field ?? '(body)', message }]);
       }
       default:
-        return new HttpError(400, 'The request has invalid fields', 'The form has too many parts.', [{ field: '(body)', message: 'The form has too many parts.' }]);
+        return new HttpError(400, 'The request has invalid fields', 'The form has too many parts.', [
+          { field: '(body)', message: 'The form has too many parts.' },
+        ]);
     }
   }
   // busboy's own errors: a cut-off or malformed multipart body.

@@ -15,13 +15,25 @@ export async function getEstimatingSettings(tx: TenantTx): Promise<EstimatingSet
   };
 }
 
-export async function saveEstimatingSettings(tx: TenantTx, actor: Actor, settings: EstimatingSettings, now: Date): Promise<EstimatingSettingsView> {
+export async function saveEstimatingSettings(
+  tx: TenantTx,
+  actor: Actor,
+  settings: EstimatingSettings,
+  now: Date,
+): Promise<EstimatingSettingsView> {
   await tx.db
     .insert(firmEstimatingSettings)
     .values({ tenantId: tx.tenantId, settings })
     .onConflictDoUpdate({ target: firmEstimatingSettings.tenantId, set: { settings, updatedAt: now } });
   // Prices follow from these numbers, so every change is kept (QUALITY.md: audit money rules).
   const actorUserId = actor.kind === 'staff' ? actor.userId : null;
-  await recordAudit(tx, { actorUserId, actorKind: actor.kind, action: 'firm.estimating_settings_changed', entity: 'firm', entityId: tx.tenantId, data: { settings } });
+  await recordAudit(tx, {
+    actorUserId,
+    actorKind: actor.kind,
+    action: 'firm.estimating_settings_changed',
+    entity: 'firm',
+    entityId: tx.tenantId,
+    data: { settings },
+  });
   return getEstimatingSettings(tx);
 }

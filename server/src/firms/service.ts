@@ -32,11 +32,22 @@ export async function getFirm(tx: TenantTx): Promise<FirmSettings> {
 
 export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettingsUpdate, now: Date): Promise<FirmSettings> {
   const before = await getFirm(tx);
-  const [updated] = await tx.db.update(firms).set({ ...input, updatedAt: now }).where(eq(firms.id, tx.tenantId)).returning();
+  const [updated] = await tx.db
+    .update(firms)
+    .set({ ...input, updatedAt: now })
+    .where(eq(firms.id, tx.tenantId))
+    .returning();
   const changed = (Object.keys(input) as (keyof FirmSettingsUpdate)[]).filter((k) => before[k] !== input[k]);
   if (changed.length) {
     const actorUserId = actor.kind === 'staff' ? actor.userId : null;
-    await recordAudit(tx, { actorUserId, actorKind: actor.kind, action: 'firm.settings_changed', entity: 'firm', entityId: tx.tenantId, data: { changed } });
+    await recordAudit(tx, {
+      actorUserId,
+      actorKind: actor.kind,
+      action: 'firm.settings_changed',
+      entity: 'firm',
+      entityId: tx.tenantId,
+      data: { changed },
+    });
   }
   return toSettings(updated!);
 }

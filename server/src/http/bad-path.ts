@@ -9,7 +9,11 @@ export const refuseUndecodablePath: RequestHandler = (req, _res, next) => {
   try {
     decodeURIComponent(req.path);
   } catch {
-    return next(new HttpError(400, 'The address is not valid', 'Check the link: part of it is not valid URL encoding.', [{ field: '(path)', message: 'Not valid percent-encoding.' }]));
+    return next(
+      new HttpError(400, 'The address is not valid', 'Check the link: part of it is not valid URL encoding.', [
+        { field: '(path)', message: 'Not valid percent-encoding.' },
+      ]),
+    );
   }
   next();
 };

@@ -6,7 +6,11 @@ export const apiNotFound: RequestHandler = (_req, _res, next) => {
   next(new HttpError(404, 'Not found', 'No such API route.'));
 };
 
-interface BodyParserError { type?: string; status?: number; expose?: boolean }
+interface BodyParserError {
+  type?: string;
+  status?: number;
+  expose?: boolean;
+}
 
 /** The one error middleware: every failure answers application/problem+json, never a stack trace. */
 export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
@@ -15,7 +19,9 @@ export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof HttpError) {
     error = err;
   } else if (parserError?.type === 'entity.parse.failed') {
-    error = new HttpError(400, 'The request body is not valid JSON', 'Send a JSON object.', [{ field: '(body)', message: 'Not valid JSON.' }]);
+    error = new HttpError(400, 'The request body is not valid JSON', 'Send a JSON object.', [
+      { field: '(body)', message: 'Not valid JSON.' },
+    ]);
   } else if (parserError?.type === 'entity.too.large') {
     error = new HttpError(413, 'The request is too large', 'Send less data.');
   } else if (typeof parserError?.status === 'number' && parserError.status < 500 && parserError.expose) {
@@ -27,5 +33,8 @@ export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (error.status === 403 && (err as { code?: string }).code === 'EBADCSRFTOKEN') {
     error = new HttpError(403, 'Security check failed', 'Reload the page and try again.');
   }
-  res.status(error.status).type(PROBLEM_CONTENT_TYPE).send(JSON.stringify(error.toProblem(String(req.id ?? ''))));
+  res
+    .status(error.status)
+    .type(PROBLEM_CONTENT_TYPE)
+    .send(JSON.stringify(error.toProblem(String(req.id ?? ''))));
 };

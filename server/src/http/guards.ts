@@ -12,7 +12,12 @@ import { forbidden, unauthorized } from './problem';
  * transaction, re-checks they are an active member with at least `needed`, then runs `fn` in it.
  * owner ⊃ office ⊃ crew.
  */
-export async function withStaff<T>(ctx: AppContext, req: Request, needed: StaffRole, fn: (tx: TenantTx, staff: StaffPrincipal) => Promise<T>): Promise<T> {
+export async function withStaff<T>(
+  ctx: AppContext,
+  req: Request,
+  needed: StaffRole,
+  fn: (tx: TenantTx, staff: StaffPrincipal) => Promise<T>,
+): Promise<T> {
   const claim = req.user;
   if (!claim || claim.kind !== 'staff') throw unauthorized();
   return withTenantAndFirst(ctx.pool, claim.tenantId, staffRowSql(claim.tenantId, claim.id), async (tx, rows) => {

@@ -9,16 +9,7 @@ const PASSWORD = 'limewash-password-never-logged';
 const LINK_TOKEN = 'Zm9vYmFyYmF6cXV4MTIzNDU2Nzg5MGFiY2RlZmdoaWprbG0';
 const INVITE_TOKEN = 'aW52aXRhdGlvbnRva2VudmFsdWUxMjM0NTY3ODkwYWJjZGVm';
 const RESET_TOKEN = 'cmVzZXR0b2tlbnZhbHVlMTIzNDU2Nzg5MGFiY2RlZmdoaWpr';
-const SECRETS = [
-  SESSION_COOKIE,
-  'sessionSecretValue123',
-  CSRF_TOKEN,
-  PASSWORD,
-  LINK_TOKEN,
-  INVITE_TOKEN,
-  RESET_TOKEN,
-  'set-cookie-secret',
-];
+const SECRETS = [SESSION_COOKIE, 'sessionSecretValue123', CSRF_TOKEN, PASSWORD, LINK_TOKEN, INVITE_TOKEN, RESET_TOKEN, 'set-cookie-secret'];
 
 /** An in-memory log destination. */
 function memory(): { stream: Writable; text: () => string } {
@@ -63,9 +54,7 @@ async function sendEverySecret(app: express.Express): Promise<void> {
     .set('x-csrf-token', CSRF_TOKEN)
     .set('referer', `http://localhost:4300/reset-password?token=${RESET_TOKEN}`)
     .send({ email: 'owner@fernhollow.example', password: PASSWORD });
-  await request(app)
-    .get(`/api/portal/auth/link?token=${LINK_TOKEN}&next=%2Fportal%2Fproposals%2F7`)
-    .set('cookie', SESSION_COOKIE);
+  await request(app).get(`/api/portal/auth/link?token=${LINK_TOKEN}&next=%2Fportal%2Fproposals%2F7`).set('cookie', SESSION_COOKIE);
   await request(app).get(`/api/auth/invitations/${INVITE_TOKEN}`);
   await request(app)
     .post('/api/auth/password-reset/complete')
@@ -99,9 +88,7 @@ describe('request logs', () => {
     for (const line of lines) expect(() => JSON.parse(line) as unknown).not.toThrow();
 
     const pretty = memory();
-    await sendEverySecret(
-      appLoggingTo({ NODE_ENV: 'development', LOG_LEVEL: 'info' }, pretty.stream),
-    );
+    await sendEverySecret(appLoggingTo({ NODE_ENV: 'development', LOG_LEVEL: 'info' }, pretty.stream));
     const prettyLines = pretty.text().trim().split('\n');
     expect(prettyLines).toHaveLength(lines.length);
     expect(prettyLines[0]).toMatch(/^\[\d\d:\d\d:\d\d\.\d{3}\] (INFO|WARN)/);
@@ -112,10 +99,7 @@ describe('request logs', () => {
 describe('safeUrl', () => {
   it.each([
     ['/api/jobs?cursor=abc', '/api/jobs?cursor=abc'],
-    [
-      '/portal/sign-in/link?token=abc&next=%2Fportal%2Fx',
-      '/portal/sign-in/link?token=[redacted]&next=%2Fportal%2Fx',
-    ],
+    ['/portal/sign-in/link?token=abc&next=%2Fportal%2Fx', '/portal/sign-in/link?token=[redacted]&next=%2Fportal%2Fx'],
     ['/reset-password?Token=abc', '/reset-password?Token=[redacted]'],
     ['/x?csrfToken=abc&password=p&a=1', '/x?csrfToken=[redacted]&password=[redacted]&a=1'],
     ['/x?%74oken=abc', '/x?%74oken=[redacted]'],

@@ -8,22 +8,9 @@ import type { Config } from '../config';
 const REDACTED = '[redacted]';
 
 /** Headers that carry the session or the CSRF token: never in a log line. */
-const SECRET_HEADERS = new Set([
-  'cookie',
-  'set-cookie',
-  'authorization',
-  'proxy-authorization',
-  'x-csrf-token',
-]);
+const SECRET_HEADERS = new Set(['cookie', 'set-cookie', 'authorization', 'proxy-authorization', 'x-csrf-token']);
 /** Body and query fields that hold passwords or one-time tokens, at whatever depth they are logged. */
-const SECRET_FIELDS = [
-  'password',
-  'newPassword',
-  'currentPassword',
-  'token',
-  'csrfToken',
-  'secret',
-];
+const SECRET_FIELDS = ['password', 'newPassword', 'currentPassword', 'token', 'csrfToken', 'secret'];
 const SECRET_QUERY_NAME = /token|password|secret/i;
 /** Paths that carry a one-time token as a segment (an invitation preview; `accept` is a route). */
 const TOKEN_IN_PATH = /^(\/api\/auth\/invitations\/)(?!accept(?:$|[/?#]))[^/?#]+/;
@@ -157,16 +144,13 @@ function safeDecode(text: string): string {
   }
 }
 
-function safeHeaders<T extends IncomingHttpHeaders | OutgoingHttpHeaders>(
-  headers: T | undefined,
-): Partial<T> {
+function safeHeaders<T extends IncomingHttpHeaders | OutgoingHttpHeaders>(headers: T | undefined): Partial<T> {
   const kept: Partial<T> = {};
   for (const [name, value] of Object.entries(headers ?? {})) {
     if (SECRET_HEADERS.has(name.toLowerCase())) {
       continue;
     }
-    (kept as Record<string, unknown>)[name] =
-      name.toLowerCase() === 'referer' && typeof value === 'string' ? safeUrl(value) : value;
+    (kept as Record<string, unknown>)[name] = name.toLowerCase() === 'referer' && typeof value === 'string' ? safeUrl(value) : value;
   }
   return kept;
 }

@@ -12,6 +12,7 @@ export function signInRateLimit(limit: number): RequestHandler {
     limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: (_req, _res, next) => next(new HttpError(429, 'Too many attempts', 'Too many attempts from this address. Wait a few minutes and try again.')),
+    handler: (_req, _res, next) =>
+      next(new HttpError(429, 'Too many attempts', 'Too many attempts from this address. Wait a few minutes and try again.')),
   });
 }

@@ -10,12 +10,14 @@ const UNSTORABLE = /\u0000|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF
 
 export function unstorableText(input: unknown, path: readonly (string | number)[] = [], found: FieldProblem[] = []): FieldProblem[] {
   if (typeof input === 'string') {
-    if (UNSTORABLE.test(input)) found.push({ field: path.join('.') || '(body)', message: 'Remove the invisible control characters from this text.' });
+    if (UNSTORABLE.test(input))
+      found.push({ field: path.join('.') || '(body)', message: 'Remove the invisible control characters from this text.' });
   } else if (Array.isArray(input)) {
     input.forEach((item, i) => unstorableText(item, [...path, i], found));
   } else if (input !== null && typeof input === 'object') {
     for (const [key, value] of Object.entries(input)) {
-      if (UNSTORABLE.test(key)) found.push({ field: [...path, '(key)'].join('.'), message: 'Remove the invisible control characters from this field name.' });
+      if (UNSTORABLE.test(key))
+        found.push({ field: [...path, '(key)'].join('.'), message: 'Remove the invisible control characters from this field name.' });
       else unstorableText(value, [...path, key], found);
     }
   }

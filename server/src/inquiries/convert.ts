@@ -10,45 +10,68 @@ import { logActivity } from './service';
  * prospect already told us — so booking a visit or winning never means retyping.
  */
 export async function convertInquiry(tx: TenantTx, actor: Actor, id: string, input: InquiryConvert, now: Date): Promise<InquiryConversion> {
-  const inq = (await tx.db.select().from(inquiries).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id))).for('update'))[0];
+  const inq = (
+    await tx.db
+      .select()
+      .from(inquiries)
+      .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)))
+      .for('update')
+  )[0];
   if (!inq) throw notFound('inquiry');
 
   let clientId = input.clientId ?? inq.clientId ?? null;
   if (clientId) {
-    const found = await tx.db.select({ id: clients.id }).from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)));
+    const found = await tx.db
+      .select({ id: clients.id })
+      .from(clients)
+      .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)));
     if (!found.length) throw badRequest([{ field: 'clientId', message: 'Choose a client of this firm.' }]);
   } else {
-    const made = await createClient(tx, actor, input.client ?? {
-      kind: 'homeowner',
-      isCompany: false,
-      name: inq.contactName,
-      email: inq.email,
-      phone: inq.phone,
-      notes: '',
-    });
+    const made = await createClient(
+      tx,
+      actor,
+      input.client ?? {
+        kind: 'homeowner',
+        isCompany: false,
+        name: inq.contactName,
+        email: inq.email,
+        phone: inq.phone,
+        notes: '',
+      },
+    );
     clientId = made.id;
   }
 
   let siteId = input.siteId ?? inq.siteId ?? null;
   if (siteId) {
-    const found = await tx.db.select({ id: sites.id }).from(sites).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, siteId), eq(sites.clientId, clientId)));
+    const found = await tx.db
+      .select({ id: sites.id })
+      .from(sites)
+      .where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, siteId), eq(sites.clientId, clientId)));
     if (!found.length) throw badRequest([{ field: 'siteId', message: "Choose one of this client's sites." }]);
   } else if (input.site || inq.siteAddress) {
-    const made = await addSite(tx, clientId, input.site ?? {
-      label: '',
-      addressLine1: inq.siteAddress,
-      addressLine2: '',
-      city: '',
-      region: '',
-      postalCode: '',
-      country: DEFAULT_COUNTRY,
-      yearBuilt: inq.yearBuilt,
-      accessNotes: '',
-    });
+    const made = await addSite(
+      tx,
+      clientId,
+      input.site ?? {
+        label: '',
+        addressLine1: inq.siteAddress,
+        addressLine2: '',
+        city: '',
+        region: '',
+        postalCode: '',
+        country: DEFAULT_COUNTRY,
+        yearBuilt: inq.yearBuilt,
+        accessNotes: '',
+      },
+    );
     siteId = made.id;
   }
 
-  await tx.db.update(inquiries).set({ clientId, siteId, updatedAt: now }).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
+  await tx.db
+    .update(inquiries)
+    .set({ clientId, siteId, updatedAt: now })
+    .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
   await logActivity(tx, actor, id, 'converted', '', { clientId, siteId });
   return { clientId, siteId };
 }

@@ -8,7 +8,8 @@ export function encodeCursor(sortValue: string | null, id: string): string {
 export function decodeCursor(cursor: string): { sortValue: string | null; id: string } {
   try {
     const [sortValue, id] = JSON.parse(Buffer.from(cursor, 'base64url').toString('utf8')) as [unknown, unknown];
-    if ((sortValue === null || typeof sortValue === 'string') && typeof id === 'string' && /^[0-9a-f-]{36}$/i.test(id)) return { sortValue, id };
+    if ((sortValue === null || typeof sortValue === 'string') && typeof id === 'string' && /^[0-9a-f-]{36}$/i.test(id))
+      return { sortValue, id };
   } catch {
     /* fall through */
   }

@@ -40,7 +40,12 @@ describe('public inquiry form', () => {
     expect(notice.text).toContain('Della Hawthorne');
     const listA = await a.agent.get('/api/inquiries');
     expect(listA.body.items).toHaveLength(1);
-    expect(listA.body.items[0]).toMatchObject({ contactName: 'Della Hawthorne', stage: 'new', source: 'designer_referral', referrerName: 'Ottoline Marsh Interiors' });
+    expect(listA.body.items[0]).toMatchObject({
+      contactName: 'Della Hawthorne',
+      stage: 'new',
+      source: 'designer_referral',
+      referrerName: 'Ottoline Marsh Interiors',
+    });
     expect((await b.agent.get('/api/inquiries')).body.items).toHaveLength(0);
     expect(JSON.stringify((await b.agent.get('/api/inquiries/board')).body)).not.toContain('Della');
   });
@@ -61,7 +66,9 @@ describe('public inquiry form', () => {
     const a = await firmWithSlug('Honeypot Plaster');
     const honeypot = await submitPublic(a.slug, { website: 'http://spam.example' });
     expect(honeypot.res.status).toBe(201);
-    const fast = await request(t.app).post(`/api/public/firms/${a.slug}/inquiries`).send(await publicInquiryBody(t.app, a.slug));
+    const fast = await request(t.app)
+      .post(`/api/public/firms/${a.slug}/inquiries`)
+      .send(await publicInquiryBody(t.app, a.slug));
     expect(fast.status).toBe(201);
     expect((await a.agent.get('/api/inquiries')).body.items).toHaveLength(0);
   });
@@ -71,7 +78,9 @@ describe('public inquiry form', () => {
     const { body } = await submitPublic(a.slug);
     t.setNow(new Date(Date.now() + MIN_FILL_MS + 1000));
     try {
-      const again = await request(t.app).post(`/api/public/firms/${a.slug}/inquiries`).send({ ...body, email: 'someone.else@example.test' });
+      const again = await request(t.app)
+        .post(`/api/public/firms/${a.slug}/inquiries`)
+        .send({ ...body, email: 'someone.else@example.test' });
       expect(again.status).toBe(201);
     } finally {
       t.setNow(null);
@@ -88,7 +97,16 @@ describe('public inquiry form', () => {
 
   it('answers 400 naming each bad field, and nothing is filed', async () => {
     const a = await firmWithSlug('Strict Plaster');
-    const { res } = await submitPublic(a.slug, { name: '', email: 'x', consent: false, heardFrom: 'designer_referral', referrerName: '', yearBuilt: '', rooms: 'x'.repeat(2001), extra: 1 });
+    const { res } = await submitPublic(a.slug, {
+      name: '',
+      email: 'x',
+      consent: false,
+      heardFrom: 'designer_referral',
+      referrerName: '',
+      yearBuilt: '',
+      rooms: 'x'.repeat(2001),
+      extra: 1,
+    });
     expect(res.status).toBe(400);
     expect(res.headers['content-type']).toMatch(/problem\+json/);
     const fields = res.body.errors.map((e: { field: string }) => e.field).sort();
@@ -118,10 +136,16 @@ describe('inquiries in admin', () => {
   it('creates, moves through stages, logs activity and audits stage changes and reassignment', async () => {
     const o = await firmWithSlug('Pipeline Plaster');
     const team = await o.agent.get('/api/team/members');
-    const created = await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'Ambrose Fell', source: 'phone', estimatedValue: '18000.00', siteAddress: '3 Mill Lane', yearBuilt: 1952 });
+    const created = await o.agent
+      .post('/api/inquiries')
+      .set('x-csrf-token', o.csrf())
+      .send({ contactName: 'Ambrose Fell', source: 'phone', estimatedValue: '18000.00', siteAddress: '3 Mill Lane', yearBuilt: 1952 });
     expect(created.status).toBe(201);
     const id = created.body.id;
-    const assigned = await o.agent.patch(`/api/inquiries/${id}`).set('x-csrf-token', o.csrf()).send({ assigneeUserId: team.body.items[0].userId, nextFollowUp: '2026-12-10' });
+    const assigned = await o.agent
+      .patch(`/api/inquiries/${id}`)
+      .set('x-csrf-token', o.csrf())
+      .send({ assigneeUserId: team.body.items[0].userId, nextFollowUp: '2026-12-10' });
     expect(assigned.body).toMatchObject({ assigneeName: 'Olive Owner', nextFollowUp: '2026-12-10' });
     const moved = await o.agent.post(`/api/inquiries/${id}/stage`).set('x-csrf-token', o.csrf()).send({ stage: 'visit_booked' });
     expect(moved.body.stage).toBe('visit_booked');
@@ -130,11 +154,18 @@ describe('inquiries in admin', () => {
     const client = await o.agent.get(`/api/clients/${moved.body.clientId}`);
     expect(client.body).toMatchObject({ name: 'Ambrose Fell', kind: 'homeowner' });
     expect(client.body.sites[0]).toMatchObject({ addressLine1: '3 Mill Lane', yearBuilt: 1952, isPre1978: true });
-    const noted = await o.agent.post(`/api/inquiries/${id}/activities`).set('x-csrf-token', o.csrf()).send({ kind: 'call', body: 'Left a voicemail about Thursday' });
+    const noted = await o.agent
+      .post(`/api/inquiries/${id}/activities`)
+      .set('x-csrf-token', o.csrf())
+      .send({ kind: 'call', body: 'Left a voicemail about Thursday' });
     expect(noted.status).toBe(201);
     expect(noted.body.activities[0]).toMatchObject({ kind: 'call', body: 'Left a voicemail about Thursday', actorName: 'Olive Owner' });
-    expect(noted.body.activities.map((a: { kind: string }) => a.kind)).toEqual(expect.arrayContaining(['created', 'assignment', 'follow_up', 'stage_change', 'converted', 'call']));
-    const audit = await withTenant(t.ctx.pool, o.firmId, (tx) => tx.client.query(`select action from audit_log where entity_id = $1 order by created_at`, [id]));
+    expect(noted.body.activities.map((a: { kind: string }) => a.kind)).toEqual(
+      expect.arrayContaining(['created', 'assignment', 'follow_up', 'stage_change', 'converted', 'call']),
+    );
+    const audit = await withTenant(t.ctx.pool, o.firmId, (tx) =>
+      tx.client.query(`select action from audit_log where entity_id = $1 order by created_at`, [id]),
+    );
     expect(audit.rows.map((r) => r.action)).toEqual(['inquiry.reassigned', 'inquiry.stage_changed']);
     const conversion = await o.agent.post(`/api/inquiries/${id}/convert`).set('x-csrf-token', o.csrf()).send({});
     expect(conversion.body).toEqual({ clientId: moved.body.clientId, siteId: moved.body.siteId });
@@ -146,7 +177,15 @@ describe('inquiries in admin', () => {
     await o.agent.post(`/api/inquiries/${made.body.id}/stage`).set('x-csrf-token', o.csrf()).send({ stage: 'contacted' });
     const board = await o.agent.get('/api/inquiries/board');
     expect(Object.keys(board.body)).toEqual(['items']);
-    expect(board.body.items.map((c: { stage: string }) => c.stage)).toEqual(['new', 'contacted', 'visit_booked', 'samples', 'proposal_sent', 'won', 'lost']);
+    expect(board.body.items.map((c: { stage: string }) => c.stage)).toEqual([
+      'new',
+      'contacted',
+      'visit_booked',
+      'samples',
+      'proposal_sent',
+      'won',
+      'lost',
+    ]);
     expect(board.body.items[1]).toMatchObject({ stage: 'contacted', label: 'Contacted', likelihoodPercent: 15, count: 1 });
     expect(board.body.items[1].items.map((i: { contactName: string }) => i.contactName)).toEqual(['Card One']);
     expect(board.body.items[0]).toMatchObject({ count: 0, items: [] });
@@ -160,7 +199,10 @@ describe('inquiries in admin', () => {
     const likelihoods = { new: 5, contacted: 20, visit_booked: 30, samples: 55, proposal_sent: 65, won: 100, lost: 0 };
     const saved = await o.agent.put('/api/inquiries/stages').set('x-csrf-token', o.csrf()).send({ likelihoods });
     expect(saved.body.items.map((s: { likelihoodPercent: number }) => s.likelihoodPercent)).toEqual([5, 20, 30, 55, 65, 100, 0]);
-    const bad = await o.agent.put('/api/inquiries/stages').set('x-csrf-token', o.csrf()).send({ likelihoods: { ...likelihoods, samples: 120 } });
+    const bad = await o.agent
+      .put('/api/inquiries/stages')
+      .set('x-csrf-token', o.csrf())
+      .send({ likelihoods: { ...likelihoods, samples: 120 } });
     expect(bad.status).toBe(400);
     expect(bad.body.errors[0].field).toBe('likelihoods.samples');
   });
@@ -171,17 +213,31 @@ describe('inquiries in admin', () => {
     const bad = await o.agent.post(`/api/inquiries/${body.id}/stage`).set('x-csrf-token', o.csrf()).send({ stage: 'lost' });
     expect(bad.status).toBe(400);
     expect(bad.body.errors[0].field).toBe('lostReason');
-    const ok = await o.agent.post(`/api/inquiries/${body.id}/stage`).set('x-csrf-token', o.csrf()).send({ stage: 'lost', lostReason: 'Chose a cheaper painter' });
+    const ok = await o.agent
+      .post(`/api/inquiries/${body.id}/stage`)
+      .set('x-csrf-token', o.csrf())
+      .send({ stage: 'lost', lostReason: 'Chose a cheaper painter' });
     expect(ok.body).toMatchObject({ stage: 'lost', lostReason: 'Chose a cheaper painter' });
   });
 
   it('validates each field and refuses an assignee from another firm', async () => {
     const o = await firmWithSlug('Valid Plaster');
     const other = await signUpFirm(t.app, 'Elsewhere');
-    const res = await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: '', source: 'carrier pigeon', estimatedValue: 12.345, nextFollowUp: '2026-02-30' });
+    const res = await o.agent
+      .post('/api/inquiries')
+      .set('x-csrf-token', o.csrf())
+      .send({ contactName: '', source: 'carrier pigeon', estimatedValue: 12.345, nextFollowUp: '2026-02-30' });
     expect(res.status).toBe(400);
-    expect(res.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['contactName', 'estimatedValue', 'nextFollowUp', 'source']);
-    const foreign = await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'Y', source: 'phone', assigneeUserId: other.userId });
+    expect(res.body.errors.map((e: { field: string }) => e.field).sort()).toEqual([
+      'contactName',
+      'estimatedValue',
+      'nextFollowUp',
+      'source',
+    ]);
+    const foreign = await o.agent
+      .post('/api/inquiries')
+      .set('x-csrf-token', o.csrf())
+      .send({ contactName: 'Y', source: 'phone', assigneeUserId: other.userId });
     expect(foreign.status).toBe(400);
     expect(foreign.body.errors[0].field).toBe('assigneeUserId');
   });
@@ -189,7 +245,10 @@ describe('inquiries in admin', () => {
   it('lists with filters, search and keyset pages that never repeat or skip', async () => {
     const o = await firmWithSlug('Paging Plaster');
     for (let i = 0; i < 7; i++) {
-      await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: `Prospect ${i}`, source: i % 2 ? 'phone' : 'showroom', estimatedValue: `${1000 * (i + 1)}.00` });
+      await o.agent
+        .post('/api/inquiries')
+        .set('x-csrf-token', o.csrf())
+        .send({ contactName: `Prospect ${i}`, source: i % 2 ? 'phone' : 'showroom', estimatedValue: `${1000 * (i + 1)}.00` });
     }
     const seen: string[] = [];
     let after: string | null = null;
@@ -215,11 +274,17 @@ describe('inquiries in admin', () => {
   it('shows the weighted pipeline and overdue follow-ups on today', async () => {
     const o = await firmWithSlug('Weighted Plaster');
     const add = async (value: string, stage: string, nextFollowUp: string | null) => {
-      const c = await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: `V${value}`, source: 'phone', estimatedValue: value, nextFollowUp });
+      const c = await o.agent
+        .post('/api/inquiries')
+        .set('x-csrf-token', o.csrf())
+        .send({ contactName: `V${value}`, source: 'phone', estimatedValue: value, nextFollowUp });
       if (stage !== 'new') await o.agent.post(`/api/inquiries/${c.body.id}/stage`).set('x-csrf-token', o.csrf()).send({ stage });
     };
     // DOMAIN.md §2.13 worked example [D]: 18,000×20% + 9,500×40% + 32,000×70% + 6,000×90% = 35,200 (weighted pipeline, common practice).
-    await o.agent.put('/api/inquiries/stages').set('x-csrf-token', o.csrf()).send({ likelihoods: { new: 10, contacted: 20, visit_booked: 20, samples: 70, proposal_sent: 40, won: 100, lost: 0 } });
+    await o.agent
+      .put('/api/inquiries/stages')
+      .set('x-csrf-token', o.csrf())
+      .send({ likelihoods: { new: 10, contacted: 20, visit_booked: 20, samples: 70, proposal_sent: 40, won: 100, lost: 0 } });
     await add('18000.00', 'visit_booked', '2000-01-01');
     await add('9500.00', 'proposal_sent', null);
     await add('32000.00', 'samples', null);
@@ -227,18 +292,27 @@ describe('inquiries in admin', () => {
     expect(today.body.pipeline).toMatchObject({ unweighted: '59500.00', weighted: '29800.00', openCount: 3, currency: 'USD' });
     expect(today.body.overdue.map((i: { contactName: string }) => i.contactName)).toEqual(['V18000.00']);
     expect(today.body.overdue[0].isFollowUpOverdue).toBe(true);
-    await o.agent.put('/api/inquiries/stages').set('x-csrf-token', o.csrf()).send({ likelihoods: { new: 10, contacted: 90, visit_booked: 20, samples: 70, proposal_sent: 40, won: 100, lost: 0 } });
-    const six = await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'V6000', source: 'phone', estimatedValue: '6000.00' });
+    await o.agent
+      .put('/api/inquiries/stages')
+      .set('x-csrf-token', o.csrf())
+      .send({ likelihoods: { new: 10, contacted: 90, visit_booked: 20, samples: 70, proposal_sent: 40, won: 100, lost: 0 } });
+    const six = await o.agent
+      .post('/api/inquiries')
+      .set('x-csrf-token', o.csrf())
+      .send({ contactName: 'V6000', source: 'phone', estimatedValue: '6000.00' });
     await o.agent.post(`/api/inquiries/${six.body.id}/stage`).set('x-csrf-token', o.csrf()).send({ stage: 'contacted' });
     expect((await o.agent.get('/api/inquiries/today')).body.pipeline).toMatchObject({ unweighted: '65500.00', weighted: '35200.00' });
   });
 
-  it('keeps crew out and answers another firm\'s ids with 404', async () => {
+  it("keeps crew out and answers another firm's ids with 404", async () => {
     const a = await firmWithSlug('A Plaster');
     const b = await firmWithSlug('B Plaster');
     const bInq = await b.agent.post('/api/inquiries').set('x-csrf-token', b.csrf()).send({ contactName: 'Secret', source: 'phone' });
     const bClient = await b.agent.post('/api/clients').set('x-csrf-token', b.csrf()).send({ kind: 'designer', name: 'B Designer' });
-    const bSite = await b.agent.post(`/api/clients/${bClient.body.id}/sites`).set('x-csrf-token', b.csrf()).send({ addressLine1: '1 B Street' });
+    const bSite = await b.agent
+      .post(`/api/clients/${bClient.body.id}/sites`)
+      .set('x-csrf-token', b.csrf())
+      .send({ addressLine1: '1 B Street' });
     const id = bInq.body.id;
     const w = (r: request.Test) => r.set('x-csrf-token', a.csrf());
     const statuses = [
@@ -265,8 +339,14 @@ describe('inquiries in admin', () => {
 describe('follow-up reminders', () => {
   it('e-mails each person their due follow-ups once per day, however often the job runs', async () => {
     const o = await firmWithSlug('Reminder Plaster');
-    await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'Overdue Olga', source: 'phone', nextFollowUp: '2020-05-01' });
-    await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'Later Lars', source: 'phone', nextFollowUp: '2999-01-01' });
+    await o.agent
+      .post('/api/inquiries')
+      .set('x-csrf-token', o.csrf())
+      .send({ contactName: 'Overdue Olga', source: 'phone', nextFollowUp: '2020-05-01' });
+    await o.agent
+      .post('/api/inquiries')
+      .set('x-csrf-token', o.csrf())
+      .send({ contactName: 'Later Lars', source: 'phone', nextFollowUp: '2999-01-01' });
     // Only this test's firms: the test database holds every other spec's firms too.
     await t.queue.boss.send('follow-up-sweep', { force: true, tenantIds: [o.firmId] });
     const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(o.email) && /Follow-ups/.test(m.subject ?? ''));
@@ -275,7 +355,10 @@ describe('follow-up reminders', () => {
     expect(linkIn(mail)).toContain('/today');
     await t.queue.boss.send('follow-up-sweep', { force: true, tenantIds: [o.firmId] });
     const marker = await firmWithSlug('Marker Plaster');
-    await marker.agent.post('/api/inquiries').set('x-csrf-token', marker.csrf()).send({ contactName: 'M', source: 'phone', nextFollowUp: '2020-05-01' });
+    await marker.agent
+      .post('/api/inquiries')
+      .set('x-csrf-token', marker.csrf())
+      .send({ contactName: 'M', source: 'phone', nextFollowUp: '2020-05-01' });
     await t.queue.boss.send('follow-up-sweep', { force: true, tenantIds: [o.firmId, marker.firmId] });
     await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(marker.email) && /Follow-ups/.test(m.subject ?? ''));
     expect(t.inbox.messages.filter((m) => JSON.stringify(m.to).includes(o.email) && /Follow-ups/.test(m.subject ?? ''))).toHaveLength(1);

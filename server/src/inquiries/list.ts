@@ -14,7 +14,7 @@ import { stageLikelihoods } from './stage-settings';
 const SORTS = {
   newest: { key: 'i.created_at', cast: 'timestamptz', dir: 'desc', text: 'created_at_text' },
   oldest: { key: 'i.created_at', cast: 'timestamptz', dir: 'asc', text: 'created_at_text' },
-  value: { key: "coalesce(i.estimated_value, -1)", cast: 'numeric', dir: 'desc', text: 'sort_value' },
+  value: { key: 'coalesce(i.estimated_value, -1)', cast: 'numeric', dir: 'desc', text: 'sort_value' },
   follow_up: { key: "coalesce(i.next_follow_up, '9999-12-31'::date)", cast: 'date', dir: 'asc', text: 'sort_value' },
 } as const;
 
@@ -50,7 +50,8 @@ export async function listInquiries(tx: TenantTx, q: InquiryListQuery, today: st
   const sortKey = SORTS[q.sort].text;
   return {
     items: page.map((r) => toSummary(r, today)),
-    nextCursor: rows.length > q.limit && last ? encodeCursor(sortKey === 'created_at_text' ? last.created_at_text : last.sort_value, last.id) : null,
+    nextCursor:
+      rows.length > q.limit && last ? encodeCursor(sortKey === 'created_at_text' ? last.created_at_text : last.sort_value, last.id) : null,
   };
 }
 

@@ -37,7 +37,11 @@ function sourceFromForm(heardFrom: PublicSource): InquirySource {
 }
 
 export async function publicFirm(ctx: AppContext, slug: string): Promise<{ id: string; name: string }> {
-  const firm = await withLookup(ctx.pool, { slug }, async (tx) => (await tx.db.select({ id: firms.id, name: firms.name }).from(firms).where(eq(firms.slug, slug)))[0]);
+  const firm = await withLookup(
+    ctx.pool,
+    { slug },
+    async (tx) => (await tx.db.select({ id: firms.id, name: firms.name }).from(firms).where(eq(firms.slug, slug)))[0],
+  );
   if (!firm) throw notFound('firm');
   return firm;
 }
@@ -51,7 +55,8 @@ export async function submitPublicInquiry(ctx: AppContext, slug: string, input: 
   const now = ctx.now();
   if (input.website) return 'ignored';
   const stamp = readStamp(ctx.config.SESSION_SECRET, input.startedAt, now);
-  if (stamp === null || stamp.age > MAX_FILL_MS) throw badRequest([{ field: 'startedAt', message: 'This form has expired; reload the page and send it again.' }]);
+  if (stamp === null || stamp.age > MAX_FILL_MS)
+    throw badRequest([{ field: 'startedAt', message: 'This form has expired; reload the page and send it again.' }]);
   if (stamp.age < ctx.config.PUBLIC_FORM_MIN_FILL_MS) return 'ignored';
   const firm = await publicFirm(ctx, slug);
   return withTenant(ctx.pool, firm.id, async (tx) => {
@@ -92,7 +97,12 @@ export async function submitPublicInquiry(ctx: AppContext, slug: string, input: 
         purposeKey: `inquiry-notice:${id}:${person.userId}`,
         tenantId: tx.tenantId,
         to: person.email,
-        ...inquiryNotificationMail({ firmName: firm.name, prospect: input.name, rooms: input.rooms, url: `${ctx.config.PUBLIC_URL}/inquiries/${id}` }),
+        ...inquiryNotificationMail({
+          firmName: firm.name,
+          prospect: input.name,
+          rooms: input.rooms,
+          url: `${ctx.config.PUBLIC_URL}/inquiries/${id}`,
+        }),
       });
     }
     return 'filed' as const;

@@ -15,7 +15,8 @@ export function publicInquiryLimiter(limit: number): RequestHandler {
     limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: (_req, _res, next) => next(new HttpError(429, 'Too many inquiries', 'Too many inquiries from this address. Please call the firm instead, or try later.')),
+    handler: (_req, _res, next) =>
+      next(new HttpError(429, 'Too many inquiries', 'Too many inquiries from this address. Please call the firm instead, or try later.')),
   });
 }
 
@@ -51,7 +52,11 @@ export function publicFormPost(ctx: AppContext, limiter: RequestHandler, renderP
     const slugOk = slugParam.safeParse(req.params);
     if (!slugOk.success) return next(new HttpError(404, 'Not found', 'No such firm.'));
     const body = { ...(req.body as Record<string, string>) };
-    const form = { ...body, consent: body['consent'] === 'on' || body['consent'] === 'true', yearBuiltUnknown: body['yearBuiltUnknown'] === 'on' || body['yearBuiltUnknown'] === 'true' };
+    const form = {
+      ...body,
+      consent: body['consent'] === 'on' || body['consent'] === 'true',
+      yearBuiltUnknown: body['yearBuiltUnknown'] === 'on' || body['yearBuiltUnknown'] === 'true',
+    };
     const parsed = publicInquiryRequest.safeParse(form);
     if (parsed.success) {
       try {

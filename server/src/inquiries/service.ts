@@ -47,7 +47,13 @@ export async function createInquiry(tx: TenantTx, actor: Actor, input: InquiryCr
 
 /** The inquiry's row, locked for the change about to be made. */
 async function lockInquiry(tx: TenantTx, id: string) {
-  const row = (await tx.db.select().from(inquiries).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id))).for('update'))[0];
+  const row = (
+    await tx.db
+      .select()
+      .from(inquiries)
+      .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)))
+      .for('update')
+  )[0];
   if (!row) throw notFound('inquiry');
   return row;
 }
@@ -55,7 +61,10 @@ async function lockInquiry(tx: TenantTx, id: string) {
 export async function updateInquiry(tx: TenantTx, actor: Actor, id: string, patch: InquiryUpdate, now: Date): Promise<void> {
   const before = await lockInquiry(tx, id);
   if ('assigneeUserId' in patch) await assertAssignable(tx, patch.assigneeUserId);
-  await tx.db.update(inquiries).set({ ...patch, updatedAt: now }).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
+  await tx.db
+    .update(inquiries)
+    .set({ ...patch, updatedAt: now })
+    .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
   if ('assigneeUserId' in patch && patch.assigneeUserId !== before.assigneeUserId) {
     const data = { from: before.assigneeUserId, to: patch.assigneeUserId ?? null };
     await logActivity(tx, actor, id, 'assignment', '', data);
@@ -82,5 +91,8 @@ export async function moveStage(tx: TenantTx, actor: Actor, id: string, move: St
 export async function addActivity(tx: TenantTx, actor: Actor, id: string, input: ActivityCreate, now: Date): Promise<void> {
   await lockInquiry(tx, id);
   await logActivity(tx, actor, id, input.kind, input.body);
-  await tx.db.update(inquiries).set({ updatedAt: now }).where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
+  await tx.db
+    .update(inquiries)
+    .set({ updatedAt: now })
+    .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
 }

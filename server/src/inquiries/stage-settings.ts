@@ -31,6 +31,13 @@ export async function saveStageLikelihoods(
       .onConflictDoUpdate({ target: [inquiryStageSettings.tenantId, inquiryStageSettings.stage], set: { likelihoodPercent } });
   }
   const actorUserId = actor.kind === 'staff' ? actor.userId : null;
-  await recordAudit(tx, { actorUserId, actorKind: actor.kind, action: 'inquiry_stages.likelihoods_changed', entity: 'firm', entityId: tx.tenantId, data: values });
+  await recordAudit(tx, {
+    actorUserId,
+    actorKind: actor.kind,
+    action: 'inquiry_stages.likelihoods_changed',
+    entity: 'firm',
+    entityId: tx.tenantId,
+    data: values,
+  });
   return listStageLikelihoods(tx);
 }

@@ -48,7 +48,12 @@ describe('row-level security', () => {
       `select relname, relrowsecurity, relforcerowsecurity from pg_class where relname = any($1) and relnamespace = 'public'::regnamespace`,
       [tables],
     );
-    for (const row of rows) expect({ table: row.relname, enabled: row.relrowsecurity, forced: row.relforcerowsecurity }).toEqual({ table: row.relname, enabled: true, forced: true });
+    for (const row of rows)
+      expect({ table: row.relname, enabled: row.relrowsecurity, forced: row.relforcerowsecurity }).toEqual({
+        table: row.relname,
+        enabled: true,
+        forced: true,
+      });
   });
 
   it('returns zero rows from every firm table to a raw query with no firm set', async () => {
@@ -64,7 +69,9 @@ describe('row-level security', () => {
     const a = await signUpFirm(t.app);
     const b = await signUpFirm(t.app);
     await expect(
-      withTenant(t.ctx.pool, a.firmId, (tx) => tx.client.query(`insert into audit_log (tenant_id, actor_kind, action, entity) values ($1, 'system', 'x', 'y')`, [b.firmId])),
+      withTenant(t.ctx.pool, a.firmId, (tx) =>
+        tx.client.query(`insert into audit_log (tenant_id, actor_kind, action, entity) values ($1, 'system', 'x', 'y')`, [b.firmId]),
+      ),
     ).rejects.toThrow(/row-level security/);
   });
 

@@ -23,14 +23,31 @@ export interface AcceptedWork {
  */
 export async function createJobFromAcceptance(tx: TenantTx, work: AcceptedWork): Promise<string> {
   const { option } = work;
-  const totals = scheduleTotals(option.payments.map((p) => ({ amount: p.amount, percent: null })), option.total);
+  const totals = scheduleTotals(
+    option.payments.map((p) => ({ amount: p.amount, percent: null })),
+    option.total,
+  );
   if (!totals.isContractSum) {
     throw new Error(`payment schedule of option ${option.id} sums to ${totals.amount.toFixed(2)}, not ${option.total}`);
   }
   const { rows } = await tx.client.query<{ id: string }>(
     `insert into jobs (tenant_id, estimate_id, proposal_version_id, client_id, site_id, inquiry_id, title, accepted_variant_id, option_label, currency, contract_sum, start_date, finish_date)
      values ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13) returning id`,
-    [tx.tenantId, work.estimateId, work.proposalVersionId, work.clientId, work.siteId, work.inquiryId, work.title, option.id, option.label, work.currency, option.total, option.schedule.startDate, option.schedule.finishDate],
+    [
+      tx.tenantId,
+      work.estimateId,
+      work.proposalVersionId,
+      work.clientId,
+      work.siteId,
+      work.inquiryId,
+      work.title,
+      option.id,
+      option.label,
+      work.currency,
+      option.total,
+      option.schedule.startDate,
+      option.schedule.finishDate,
+    ],
   );
   const jobId = rows[0]!.id;
   for (const [position, p] of option.payments.entries()) {
@@ -45,7 +62,14 @@ export async function createJobFromAcceptance(tx: TenantTx, work: AcceptedWork):
     action: 'job.created',
     entity: 'job',
     entityId: jobId,
-    data: { proposalVersionId: work.proposalVersionId, optionId: option.id, contractSum: option.total, currency: work.currency, lines: option.payments.length, portalUserId: work.actorPortalUserId },
+    data: {
+      proposalVersionId: work.proposalVersionId,
+      optionId: option.id,
+      contractSum: option.total,
+      currency: work.currency,
+      lines: option.payments.length,
+      portalUserId: work.actorPortalUserId,
+    },
   });
   return jobId;
 }

@@ -12,7 +12,10 @@ afterAll(() => t.stop());
 describe('accepted work (jobs) for the office', () => {
   it('lists and shows jobs to owner and office; crew get 403 (money); another firm 404', async () => {
     const p = await sentProposal(t, 'Job Desk Plaster');
-    const res = await p.client.agent.post(`/api/portal/proposals/${p.version.id}/accept`).set('x-csrf-token', p.client.csrf()).send({ variantId: 'A', signedName: 'Edwina Marl', consent: true });
+    const res = await p.client.agent
+      .post(`/api/portal/proposals/${p.version.id}/accept`)
+      .set('x-csrf-token', p.client.csrf())
+      .send({ variantId: 'A', signedName: 'Edwina Marl', consent: true });
     expect(res.status).toBe(200);
     const optionA = p.version.snapshot.options.find((o) => o.id === 'A')!;
 
@@ -20,17 +23,46 @@ describe('accepted work (jobs) for the office', () => {
     expect(list.status).toBe(200);
     expect(list.body.items).toHaveLength(1);
     const job = list.body.items[0];
-    expect(job).toMatchObject({ title: 'Dining room plaster', clientName: 'Edwina Marl', optionLabel: 'Polished lime', contractSum: optionA.total, currency: 'USD', status: 'scheduled', startDate: '2026-12-07' });
+    expect(job).toMatchObject({
+      title: 'Dining room plaster',
+      clientName: 'Edwina Marl',
+      optionLabel: 'Polished lime',
+      contractSum: optionA.total,
+      currency: 'USD',
+      status: 'scheduled',
+      startDate: '2026-12-07',
+    });
     const detail = await p.agent.get(`/api/jobs/${job.id}`);
     expect(detail.status).toBe(200);
     expect(detail.body).toMatchObject({ proposalVersionId: p.version.id, estimateId: p.estimateId, acceptedVariantId: 'A' });
-    expect(Object.keys(detail.body).sort()).toEqual(
-      ['acceptedVariantId', 'clientId', 'clientName', 'contractSum', 'createdAt', 'currency', 'estimateId', 'finishDate', 'id', 'inquiryId', 'optionLabel', 'paymentSchedule', 'proposalVersionId', 'siteAddress', 'siteId', 'startDate', 'status', 'title'],
-    );
+    expect(Object.keys(detail.body).sort()).toEqual([
+      'acceptedVariantId',
+      'clientId',
+      'clientName',
+      'contractSum',
+      'createdAt',
+      'currency',
+      'estimateId',
+      'finishDate',
+      'id',
+      'inquiryId',
+      'optionLabel',
+      'paymentSchedule',
+      'proposalVersionId',
+      'siteAddress',
+      'siteId',
+      'startDate',
+      'status',
+      'title',
+    ]);
     expect(typeof detail.body.siteAddress).toBe('string');
     const lines = detail.body.paymentSchedule as Array<{ position: number; role: string; percent: string | null; amount: string }>;
     // Percentages as decimal strings with no trailing zeros, as the office asked for them.
-    expect(lines.map((l) => [l.position, l.role, l.percent])).toEqual([[1, 'deposit', '30'], [2, 'milestone', '40'], [3, 'final', null]]);
+    expect(lines.map((l) => [l.position, l.role, l.percent])).toEqual([
+      [1, 'deposit', '30'],
+      [2, 'milestone', '40'],
+      [3, 'final', null],
+    ]);
     expect(lines.map((l) => l.amount)).toEqual(optionA.payments.map((pay) => pay.amount));
 
     const office = await joinAs(t, p, 'office');

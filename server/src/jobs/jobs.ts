@@ -1,4 +1,13 @@
-import type { ItemList, JobDetail, JobStatus, JobSummary, PaymentLineRole, PaymentLineStatus, PaymentScheduleLineView, SnapshotPaymentTrigger } from '@layerbook/contracts';
+import type {
+  ItemList,
+  JobDetail,
+  JobStatus,
+  JobSummary,
+  PaymentLineRole,
+  PaymentLineStatus,
+  PaymentScheduleLineView,
+  SnapshotPaymentTrigger,
+} from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { notFound } from '../http/problem';
 

@@ -19,7 +19,11 @@ describe('demo library', () => {
     expect(lime.layers.map((l: { waitHoursAfter: number }) => l.waitHoursAfter)).toEqual([4, 16, 24, 72, 24]);
     const glaze = (await o.agent.get(`/api/library/systems/${seeded.systemIds.antiquedGlaze}`)).body;
     const glazeLayer = glaze.layers.find((l: { id: string }) => l.id === 'glaze');
-    expect(glazeLayer).toMatchObject({ coverageShare: 0.3, dilution: { share: 0.1, convention: 'ofConcentrate' }, recipe: { by: 'volume' } });
+    expect(glazeLayer).toMatchObject({
+      coverageShare: 0.3,
+      dilution: { share: 0.1, convention: 'ofConcentrate' },
+      recipe: { by: 'volume' },
+    });
     const wash = (await o.agent.get(`/api/library/systems/${seeded.systemIds.limewash}`)).body;
     expect(wash.layers.filter((l: { dilution?: { convention: string } }) => l.dilution?.convention === 'ofMix')).toHaveLength(2);
 

@@ -25,7 +25,13 @@ function refsOf(layers: readonly FinishLayerInput[]): ProductRef[] {
   });
 }
 
-const toEngineProduct = (row: ProductRow): Product => ({ id: row.id, name: row.name, unit: row.unit as Product['unit'], containers: containersOf(row), hazards: hazardsOf(row) });
+const toEngineProduct = (row: ProductRow): Product => ({
+  id: row.id,
+  name: row.name,
+  unit: row.unit as Product['unit'],
+  containers: containersOf(row),
+  hazards: hazardsOf(row),
+});
 
 /**
  * A system is saved only if every product it names is a current product of this firm (another
@@ -35,13 +41,19 @@ const toEngineProduct = (row: ProductRow): Product => ({ id: row.id, name: row.n
 export async function checkLayers(tx: TenantTx, layers: readonly FinishLayerInput[]): Promise<void> {
   const refs = refsOf(layers);
   const ids = [...new Set(refs.map((r) => r.id))];
-  const rows = ids.length ? await tx.db.select().from(products).where(and(eq(products.tenantId, tx.tenantId), inArray(products.id, ids))) : [];
+  const rows = ids.length
+    ? await tx.db
+        .select()
+        .from(products)
+        .where(and(eq(products.tenantId, tx.tenantId), inArray(products.id, ids)))
+    : [];
   const byId = new Map(rows.map((r) => [r.id, r]));
   const problems: FieldProblem[] = [];
   for (const ref of refs) {
     const row = byId.get(ref.id);
     if (!row) problems.push({ field: ref.field, message: 'That product is not in your library.' });
-    else if (row.archivedAt) problems.push({ field: ref.field, message: `"${row.name}" is archived; choose a current product or bring it back first.` });
+    else if (row.archivedAt)
+      problems.push({ field: ref.field, message: `"${row.name}" is archived; choose a current product or bring it back first.` });
   }
   if (problems.length) throw badRequest(problems);
 

@@ -11,7 +11,10 @@ export async function joinAs(t: TestServer, owner: Firm, role: 'crew' | 'office'
   await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email, role });
   const token = new URL(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email)))).searchParams.get('token')!;
   const member = await newAgent(t.app);
-  await member.agent.post('/api/auth/invitations/accept').set('x-csrf-token', member.csrf()).send({ token, name: `A ${role}`, password: 'member-password-2026' });
+  await member.agent
+    .post('/api/auth/invitations/accept')
+    .set('x-csrf-token', member.csrf())
+    .send({ token, name: `A ${role}`, password: 'member-password-2026' });
   await member.refresh();
   return member;
 }
@@ -28,9 +31,28 @@ export const PRIMER: ProductInput = {
   sdsUrl: '',
   notes: '',
 };
-export const LIME: ProductInput = { ...PRIMER, name: 'Lime putty plaster', kind: 'lime', unit: 'kg', hazards: { isLime: true }, containers: [{ label: '20 kg pail', size: 20, unit: 'kg', price: '95.00' }] };
-export const MEDIUM: ProductInput = { ...PRIMER, name: 'Glazing medium', kind: 'medium', unit: 'quart', containers: [{ label: '1 qt', size: 1, unit: 'quart', price: '22.00' }] };
-export const TINT: ProductInput = { ...PRIMER, name: 'Umber tint paint', kind: 'paint', unit: 'quart', containers: [{ label: '1 qt', size: 1, unit: 'quart', price: '18.00' }] };
+export const LIME: ProductInput = {
+  ...PRIMER,
+  name: 'Lime putty plaster',
+  kind: 'lime',
+  unit: 'kg',
+  hazards: { isLime: true },
+  containers: [{ label: '20 kg pail', size: 20, unit: 'kg', price: '95.00' }],
+};
+export const MEDIUM: ProductInput = {
+  ...PRIMER,
+  name: 'Glazing medium',
+  kind: 'medium',
+  unit: 'quart',
+  containers: [{ label: '1 qt', size: 1, unit: 'quart', price: '22.00' }],
+};
+export const TINT: ProductInput = {
+  ...PRIMER,
+  name: 'Umber tint paint',
+  kind: 'paint',
+  unit: 'quart',
+  containers: [{ label: '1 qt', size: 1, unit: 'quart', price: '18.00' }],
+};
 
 export async function addProduct(firm: Firm, body: ProductInput): Promise<string> {
   const res = await firm.agent.post('/api/library/products').set('x-csrf-token', firm.csrf()).send(body);
@@ -55,7 +77,14 @@ export const glazeLayer = (tintId: string, mediumId: string): FinishLayerInput =
   id: 'glaze',
   name: 'Antiquing glaze',
   method: 'glaze',
-  recipe: { by: 'volume', baseProductId: tintId, components: [{ productId: tintId, parts: 1 }, { productId: mediumId, parts: 4 }] },
+  recipe: {
+    by: 'volume',
+    baseProductId: tintId,
+    components: [
+      { productId: tintId, parts: 1 },
+      { productId: mediumId, parts: 4 },
+    ],
+  },
   coverage: { kind: 'spreadRate', surfacePerUnit: 400, unit: 'gallon', lengthUnit: 'ft' },
   coats: 1,
   coverageShare: 0.3,

@@ -11,38 +11,87 @@ afterAll(() => t.stop());
 describe('library products', () => {
   it('adds, lists, reads and partly updates a product without blanking other fields', async () => {
     const o = await signUpFirm(t.app, 'Product Studio');
-    const made = await o.agent.post('/api/library/products').set('x-csrf-token', o.csrf()).send({ ...PRIMER, notes: 'Tint to the base colour.' });
+    const made = await o.agent
+      .post('/api/library/products')
+      .set('x-csrf-token', o.csrf())
+      .send({ ...PRIMER, notes: 'Tint to the base colour.' });
     expect(made.status).toBe(201);
-    expect(made.body).toMatchObject({ name: 'Acrylic primer', unit: 'gallon', isFlammable: false, archivedAt: null, containers: [{ label: '1 gal', price: '45.00' }, { label: '1 qt', price: '16.00' }] });
-    const patched = await o.agent.patch(`/api/library/products/${made.body.id}`).set('x-csrf-token', o.csrf()).send({ name: 'Bonding primer' });
+    expect(made.body).toMatchObject({
+      name: 'Acrylic primer',
+      unit: 'gallon',
+      isFlammable: false,
+      archivedAt: null,
+      containers: [
+        { label: '1 gal', price: '45.00' },
+        { label: '1 qt', price: '16.00' },
+      ],
+    });
+    const patched = await o.agent
+      .patch(`/api/library/products/${made.body.id}`)
+      .set('x-csrf-token', o.csrf())
+      .send({ name: 'Bonding primer' });
     expect(patched.status).toBe(200);
-    expect(patched.body).toMatchObject({ name: 'Bonding primer', notes: 'Tint to the base colour.', kind: 'primer', containers: [{ price: '45.00' }, { price: '16.00' }] });
+    expect(patched.body).toMatchObject({
+      name: 'Bonding primer',
+      notes: 'Tint to the base colour.',
+      kind: 'primer',
+      containers: [{ price: '45.00' }, { price: '16.00' }],
+    });
     expect((await o.agent.get(`/api/library/products/${made.body.id}`)).body.name).toBe('Bonding primer');
     expect((await o.agent.get('/api/library/products')).body.items.map((p: { name: string }) => p.name)).toEqual(['Bonding primer']);
   });
 
   it('derives "flammable" from the flash point (below 23 °C, 29 CFR 1910.106) and keeps lime and silica flags', async () => {
     const o = await signUpFirm(t.app);
-    const ipa = await o.agent.post('/api/library/products').set('x-csrf-token', o.csrf())
-      .send({ ...PRIMER, name: 'Isopropyl alcohol', kind: 'solvent', unit: 'L', containers: [{ label: '1 L', size: 1, unit: 'L', price: '9.50' }], hazards: { flashPointC: 12 } });
+    const ipa = await o.agent
+      .post('/api/library/products')
+      .set('x-csrf-token', o.csrf())
+      .send({
+        ...PRIMER,
+        name: 'Isopropyl alcohol',
+        kind: 'solvent',
+        unit: 'L',
+        containers: [{ label: '1 L', size: 1, unit: 'L', price: '9.50' }],
+        hazards: { flashPointC: 12 },
+      });
     expect(ipa.body).toMatchObject({ isFlammable: true, hazards: { flashPointC: 12 } });
-    const sealer = await o.agent.post('/api/library/products').set('x-csrf-token', o.csrf()).send({ ...PRIMER, name: 'Oil sealer', hazards: { flashPointC: 40 } });
+    const sealer = await o.agent
+      .post('/api/library/products')
+      .set('x-csrf-token', o.csrf())
+      .send({ ...PRIMER, name: 'Oil sealer', hazards: { flashPointC: 40 } });
     expect(sealer.body.isFlammable).toBe(false);
-    const marble = await o.agent.post('/api/library/products').set('x-csrf-token', o.csrf()).send({ ...LIME, name: 'Marble dust plaster', hazards: { isLime: true, containsSilica: true } });
+    const marble = await o.agent
+      .post('/api/library/products')
+      .set('x-csrf-token', o.csrf())
+      .send({ ...LIME, name: 'Marble dust plaster', hazards: { isLime: true, containsSilica: true } });
     expect(marble.body.hazards).toEqual({ isLime: true, containsSilica: true });
   });
 
   it('answers 400 naming each bad field (missing price, no containers, mixed units) and saves nothing', async () => {
     const o = await signUpFirm(t.app);
     const send = (body: object) => o.agent.post('/api/library/products').set('x-csrf-token', o.csrf()).send(body);
-    const noPrice = await send({ ...PRIMER, containers: [{ label: '1 gal', size: 1, unit: 'gallon' }, { label: '1 qt', size: 0, unit: 'quart', price: '16' }] });
+    const noPrice = await send({
+      ...PRIMER,
+      containers: [
+        { label: '1 gal', size: 1, unit: 'gallon' },
+        { label: '1 qt', size: 0, unit: 'quart', price: '16' },
+      ],
+    });
     expect(noPrice.status).toBe(400);
     expect(fields(noPrice.body)).toEqual(['containers.0.price', 'containers.1.size']);
     const none = await send({ ...PRIMER, containers: [] });
     expect(none.body.errors).toEqual([{ field: 'containers', message: 'Add at least one container with its price.' }]);
     const mixed = await send({ ...PRIMER, containers: [{ label: '20 kg pail', size: 20, unit: 'kg', price: '95.00' }] });
     expect(fields(mixed.body)).toEqual(['containers.0.unit']);
-    const junk = await send({ ...PRIMER, name: ' ', kind: 'varnish', unit: 'bucket', colour: 'red', hazards: { flashPointC: 'low' }, sdsUrl: 'javascript:alert(1)' });
+    const junk = await send({
+      ...PRIMER,
+      name: ' ',
+      kind: 'varnish',
+      unit: 'bucket',
+      colour: 'red',
+      hazards: { flashPointC: 'low' },
+      sdsUrl: 'javascript:alert(1)',
+    });
     expect(fields(junk.body)).toEqual(['colour', 'hazards.flashPointC', 'kind', 'name', 'sdsUrl', 'unit']);
     expect((await o.agent.get('/api/library/products')).body.items).toEqual([]);
     const id = await addProduct(o, PRIMER);
@@ -55,19 +104,27 @@ describe('library products', () => {
     const o = await signUpFirm(t.app);
     const tint = await addProduct(o, TINT);
     const medium = await addProduct(o, MEDIUM);
-    const system = await o.agent.post('/api/library/systems').set('x-csrf-token', o.csrf()).send({ name: 'Antiqued glaze', layers: [glazeLayer(tint, medium)] });
+    const system = await o.agent
+      .post('/api/library/systems')
+      .set('x-csrf-token', o.csrf())
+      .send({ name: 'Antiqued glaze', layers: [glazeLayer(tint, medium)] });
     expect(system.status).toBe(201);
     const refused = await o.agent.post(`/api/library/products/${medium}/archive`).set('x-csrf-token', o.csrf());
     expect(refused.status).toBe(409);
     expect(refused.body.detail).toContain('"Antiqued glaze"');
-    const unitChange = await o.agent.patch(`/api/library/products/${medium}`).set('x-csrf-token', o.csrf()).send({ unit: 'kg', containers: [{ label: '1 kg', size: 1, unit: 'kg', price: '20.00' }] });
+    const unitChange = await o.agent
+      .patch(`/api/library/products/${medium}`)
+      .set('x-csrf-token', o.csrf())
+      .send({ unit: 'kg', containers: [{ label: '1 kg', size: 1, unit: 'kg', price: '20.00' }] });
     expect(unitChange.status).toBe(409);
     expect((await o.agent.post(`/api/library/systems/${system.body.id}/archive`).set('x-csrf-token', o.csrf())).status).toBe(200);
     const archived = await o.agent.post(`/api/library/products/${medium}/archive`).set('x-csrf-token', o.csrf());
     expect(archived.status).toBe(200);
     expect(archived.body.archivedAt).not.toBeNull();
     expect((await o.agent.get('/api/library/products')).body.items.map((p: { id: string }) => p.id)).toEqual([tint]);
-    expect((await o.agent.get('/api/library/products').query({ archived: 'only' })).body.items.map((p: { id: string }) => p.id)).toEqual([medium]);
+    expect((await o.agent.get('/api/library/products').query({ archived: 'only' })).body.items.map((p: { id: string }) => p.id)).toEqual([
+      medium,
+    ]);
     // The system cannot come back while its product is archived; once the product returns, it can.
     const back = await o.agent.post(`/api/library/systems/${system.body.id}/unarchive`).set('x-csrf-token', o.csrf());
     expect(back.status).toBe(409);
@@ -82,13 +139,19 @@ describe('library products', () => {
     const crew = await joinAs(t, o, 'crew');
     const list = await crew.agent.get('/api/library/products');
     expect(list.status).toBe(200);
-    expect(list.body.items[0].containers).toEqual([{ label: '1 gal', size: 1, unit: 'gallon', price: null }, { label: '1 qt', size: 1, unit: 'quart', price: null }]);
+    expect(list.body.items[0].containers).toEqual([
+      { label: '1 gal', size: 1, unit: 'gallon', price: null },
+      { label: '1 qt', size: 1, unit: 'quart', price: null },
+    ]);
     expect((await crew.agent.get(`/api/library/products/${id}`)).body.containers[0].price).toBeNull();
     expect((await crew.agent.post('/api/library/products').set('x-csrf-token', crew.csrf()).send({ name: '' })).status).toBe(403);
     expect((await crew.agent.patch(`/api/library/products/${id}`).set('x-csrf-token', crew.csrf()).send({ name: '' })).status).toBe(403);
     expect((await crew.agent.post(`/api/library/products/${id}/archive`).set('x-csrf-token', crew.csrf())).status).toBe(403);
     const office = await joinAs(t, o, 'office');
-    const edited = await office.agent.patch(`/api/library/products/${id}`).set('x-csrf-token', office.csrf()).send({ notes: 'Office note' });
+    const edited = await office.agent
+      .patch(`/api/library/products/${id}`)
+      .set('x-csrf-token', office.csrf())
+      .send({ notes: 'Office note' });
     expect(edited.status).toBe(200);
     expect(edited.body.containers[0].price).toBe('45.00');
   });
@@ -98,7 +161,9 @@ describe('library products', () => {
     const id = await addProduct(o, PRIMER);
     await o.agent.patch(`/api/library/products/${id}`).set('x-csrf-token', o.csrf()).send({ notes: 'x' });
     await o.agent.post(`/api/library/products/${id}/archive`).set('x-csrf-token', o.csrf());
-    const audit = await withTenant(t.ctx.pool, o.firmId, (tx) => tx.client.query(`select action from audit_log where entity_id = $1 order by created_at`, [id]));
+    const audit = await withTenant(t.ctx.pool, o.firmId, (tx) =>
+      tx.client.query(`select action from audit_log where entity_id = $1 order by created_at`, [id]),
+    );
     expect(audit.rows.map((r: { action: string }) => r.action)).toEqual(['product.created', 'product.updated', 'product.archived']);
   });
 });

@@ -1,4 +1,11 @@
-import { type ArchivedFilter, type ItemList, type ProductInput, type ProductUpdate, type ProductView, productInput } from '@layerbook/contracts';
+import {
+  type ArchivedFilter,
+  type ItemList,
+  type ProductInput,
+  type ProductUpdate,
+  type ProductView,
+  productInput,
+} from '@layerbook/contracts';
 import { and, asc, eq, finishSystems, isNotNull, isNull, products, TenantTx } from '@layerbook/db';
 import { finishProductIds, isMassUnit } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
@@ -15,12 +22,22 @@ export const auditedBy = (actor: Actor) => ({ actorUserId: actor.userId, actorKi
 
 export async function listProducts(tx: TenantTx, actor: Actor, archived: ArchivedFilter): Promise<ItemList<ProductView>> {
   const scope = archived === 'exclude' ? isNull(products.archivedAt) : archived === 'only' ? isNotNull(products.archivedAt) : undefined;
-  const rows = await tx.db.select().from(products).where(and(eq(products.tenantId, tx.tenantId), scope)).orderBy(asc(products.name), asc(products.id)).limit(LIST_CAP);
+  const rows = await tx.db
+    .select()
+    .from(products)
+    .where(and(eq(products.tenantId, tx.tenantId), scope))
+    .orderBy(asc(products.name), asc(products.id))
+    .limit(LIST_CAP);
   return { items: rows.map((r) => toProductView(r, canSeeMoney(actor))) };
 }
 
 async function loadProduct(tx: TenantTx, id: string): Promise<ProductRow> {
-  const row = (await tx.db.select().from(products).where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id))))[0];
+  const row = (
+    await tx.db
+      .select()
+      .from(products)
+      .where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id)))
+  )[0];
   if (!row) throw notFound('product');
   return row;
 }
@@ -30,8 +47,17 @@ export async function getProduct(tx: TenantTx, actor: Actor, id: string): Promis
 }
 
 export async function createProduct(tx: TenantTx, actor: Actor, input: ProductInput): Promise<ProductView> {
-  const [row] = await tx.db.insert(products).values({ ...input, tenantId: tx.tenantId }).returning();
-  await recordAudit(tx, { ...auditedBy(actor), action: 'product.created', entity: 'product', entityId: row!.id, data: { name: input.name } });
+  const [row] = await tx.db
+    .insert(products)
+    .values({ ...input, tenantId: tx.tenantId })
+    .returning();
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: 'product.created',
+    entity: 'product',
+    entityId: row!.id,
+    data: { name: input.name },
+  });
   return toProductView(row!, canSeeMoney(actor));
 }
 
@@ -55,13 +81,23 @@ export async function updateProduct(tx: TenantTx, actor: Actor, id: string, patc
     .set({ ...merged, updatedAt: now })
     .where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id)))
     .returning();
-  await recordAudit(tx, { ...auditedBy(actor), action: 'product.updated', entity: 'product', entityId: id, data: { changed: Object.keys(patch) } });
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: 'product.updated',
+    entity: 'product',
+    entityId: id,
+    data: { changed: Object.keys(patch) },
+  });
   return toProductView(row!, canSeeMoney(actor));
 }
 
 /** Names of the firm's active systems whose layers use the product. A firm has few systems, so they are read whole. */
 export async function activeSystemsUsing(tx: TenantTx, productId: string): Promise<string[]> {
-  const rows = await tx.db.select().from(finishSystems).where(and(eq(finishSystems.tenantId, tx.tenantId), isNull(finishSystems.archivedAt))).orderBy(asc(finishSystems.name));
+  const rows = await tx.db
+    .select()
+    .from(finishSystems)
+    .where(and(eq(finishSystems.tenantId, tx.tenantId), isNull(finishSystems.archivedAt)))
+    .orderBy(asc(finishSystems.name));
   return rows.filter((s) => finishProductIds(layersOf(s)).includes(productId)).map((s) => s.name);
 }
 
@@ -74,9 +110,10 @@ async function refuseUnitChangeInUse(tx: TenantTx, current: ProductRow, unit: st
   if (wasByWeight === isMassUnit(unit)) return;
   const names = await activeSystemsUsing(tx, current.id);
   if (names.length) {
-    throw conflict(`"${current.name}" is used by ${listNames(names)}, measured by ${wasByWeight ? 'weight' : 'volume'}. Change those layers first.`, [
-      { field: 'unit', message: 'Used by finish systems measured the other way; change those layers first.' },
-    ]);
+    throw conflict(
+      `"${current.name}" is used by ${listNames(names)}, measured by ${wasByWeight ? 'weight' : 'volume'}. Change those layers first.`,
+      [{ field: 'unit', message: 'Used by finish systems measured the other way; change those layers first.' }],
+    );
   }
 }
 
@@ -87,7 +124,9 @@ export async function setProductArchived(tx: TenantTx, actor: Actor, id: string,
   if (isArchived && !current.archivedAt) {
     const names = await activeSystemsUsing(tx, id);
     if (names.length) {
-      throw conflict(`"${current.name}" is used by ${names.length === 1 ? 'the finish system' : 'the finish systems'} ${listNames(names)}. Change or archive ${names.length === 1 ? 'it' : 'them'} first.`);
+      throw conflict(
+        `"${current.name}" is used by ${names.length === 1 ? 'the finish system' : 'the finish systems'} ${listNames(names)}. Change or archive ${names.length === 1 ? 'it' : 'them'} first.`,
+      );
     }
   }
   const [row] = await tx.db
@@ -95,6 +134,11 @@ export async function setProductArchived(tx: TenantTx, actor: Actor, id: string,
     .set({ archivedAt: isArchived ? (current.archivedAt ?? now) : null, updatedAt: now })
     .where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id)))
     .returning();
-  await recordAudit(tx, { ...auditedBy(actor), action: isArchived ? 'product.archived' : 'product.unarchived', entity: 'product', entityId: id });
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: isArchived ? 'product.archived' : 'product.unarchived',
+    entity: 'product',
+    entityId: id,
+  });
   return toProductView(row!, canSeeMoney(actor));
 }

@@ -31,7 +31,9 @@ export function libraryRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/products', async (req, res) => {
-    const list = await withStaff(ctx, req, 'crew', (tx, staff) => listProducts(tx, staffActor(staff), parse(productListQuery, req.query).archived));
+    const list = await withStaff(ctx, req, 'crew', (tx, staff) =>
+      listProducts(tx, staffActor(staff), parse(productListQuery, req.query).archived),
+    );
     res.json(list satisfies ItemList<ProductView>);
   });
   router.post('/products', async (req, res) => {
@@ -48,9 +50,14 @@ export function libraryRoutes(ctx: AppContext): Router {
     );
     res.json(saved satisfies ProductView);
   });
-  for (const [action, isArchived] of [['archive', true], ['unarchive', false]] as const) {
+  for (const [action, isArchived] of [
+    ['archive', true],
+    ['unarchive', false],
+  ] as const) {
     router.post(`/products/:id/${action}`, async (req, res) => {
-      const saved = await withStaff(ctx, req, 'office', (tx, staff) => setProductArchived(tx, staffActor(staff), parse(productParam, req.params).id, isArchived, ctx.now()));
+      const saved = await withStaff(ctx, req, 'office', (tx, staff) =>
+        setProductArchived(tx, staffActor(staff), parse(productParam, req.params).id, isArchived, ctx.now()),
+      );
       res.json(saved satisfies ProductView);
     });
   }
@@ -60,7 +67,9 @@ export function libraryRoutes(ctx: AppContext): Router {
     res.json(list satisfies ItemList<FinishSystemSummary>);
   });
   router.post('/systems', async (req, res) => {
-    const made = await withStaff(ctx, req, 'office', (tx, staff) => createSystem(tx, staffActor(staff), parse(finishSystemInput, req.body)));
+    const made = await withStaff(ctx, req, 'office', (tx, staff) =>
+      createSystem(tx, staffActor(staff), parse(finishSystemInput, req.body)),
+    );
     res.status(201).json(made satisfies FinishSystemView);
   });
   router.get('/systems/:id', async (req, res) => {
@@ -73,14 +82,21 @@ export function libraryRoutes(ctx: AppContext): Router {
     );
     res.json(saved satisfies FinishSystemView);
   });
-  for (const [action, isArchived] of [['archive', true], ['unarchive', false]] as const) {
+  for (const [action, isArchived] of [
+    ['archive', true],
+    ['unarchive', false],
+  ] as const) {
     router.post(`/systems/:id/${action}`, async (req, res) => {
-      const saved = await withStaff(ctx, req, 'office', (tx, staff) => setSystemArchived(tx, staffActor(staff), parse(systemParam, req.params).id, isArchived, ctx.now()));
+      const saved = await withStaff(ctx, req, 'office', (tx, staff) =>
+        setSystemArchived(tx, staffActor(staff), parse(systemParam, req.params).id, isArchived, ctx.now()),
+      );
       res.json(saved satisfies FinishSystemView);
     });
   }
   router.post('/systems/:id/duplicate', async (req, res) => {
-    const copy = await withStaff(ctx, req, 'office', (tx, staff) => duplicateSystem(tx, staffActor(staff), parse(systemParam, req.params).id));
+    const copy = await withStaff(ctx, req, 'office', (tx, staff) =>
+      duplicateSystem(tx, staffActor(staff), parse(systemParam, req.params).id),
+    );
     res.status(201).json(copy satisfies FinishSystemView);
   });
 

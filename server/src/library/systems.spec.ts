@@ -25,21 +25,38 @@ const limeLayer = (limeId: string) => ({
 
 async function firmWithProducts(name?: string) {
   const o = await signUpFirm(t.app, name);
-  return { o, primer: await addProduct(o, PRIMER), lime: await addProduct(o, LIME), tint: await addProduct(o, TINT), medium: await addProduct(o, MEDIUM) };
+  return {
+    o,
+    primer: await addProduct(o, PRIMER),
+    lime: await addProduct(o, LIME),
+    tint: await addProduct(o, TINT),
+    medium: await addProduct(o, MEDIUM),
+  };
 }
 
 describe('finish systems', () => {
   it('saves ordered layers with every engine field, resolves product names, and updates one field at a time', async () => {
     const { o, primer, lime, tint, medium } = await firmWithProducts('System Studio');
     const layers = [primerLayer(primer), limeLayer(lime), glazeLayer(tint, medium)];
-    const made = await o.agent.post('/api/library/systems').set('x-csrf-token', o.csrf()).send({ name: 'Lime with antiqued glaze', layers });
+    const made = await o.agent
+      .post('/api/library/systems')
+      .set('x-csrf-token', o.csrf())
+      .send({ name: 'Lime with antiqued glaze', layers });
     expect(made.status).toBe(201);
     expect(made.body).toMatchObject({ name: 'Lime with antiqued glaze', description: '', layerCount: 3, totalWaitHours: 100, layers });
-    expect(made.body.usesProducts.map((p: { name: string }) => p.name)).toEqual(['Acrylic primer', 'Lime putty plaster', 'Umber tint paint', 'Glazing medium']);
+    expect(made.body.usesProducts.map((p: { name: string }) => p.name)).toEqual([
+      'Acrylic primer',
+      'Lime putty plaster',
+      'Umber tint paint',
+      'Glazing medium',
+    ]);
     const id = made.body.id;
     const renamed = await o.agent.patch(`/api/library/systems/${id}`).set('x-csrf-token', o.csrf()).send({ description: 'Stair hall' });
     expect(renamed.body).toMatchObject({ name: 'Lime with antiqued glaze', description: 'Stair hall', layers });
-    const reordered = await o.agent.patch(`/api/library/systems/${id}`).set('x-csrf-token', o.csrf()).send({ layers: [layers[0], layers[2]] });
+    const reordered = await o.agent
+      .patch(`/api/library/systems/${id}`)
+      .set('x-csrf-token', o.csrf())
+      .send({ layers: [layers[0], layers[2]] });
     expect(reordered.body.layers.map((l: { id: string }) => l.id)).toEqual(['primer', 'glaze']);
     const list = await o.agent.get('/api/library/systems');
     expect(list.body).toEqual({ items: [expect.objectContaining({ id, layerCount: 2, totalWaitHours: 28 })] });
@@ -53,14 +70,18 @@ describe('finish systems', () => {
 
   it('names the exact layer field for bad input and saves nothing', async () => {
     const { o, primer, lime, tint, medium } = await firmWithProducts();
-    const send = (layers: unknown, name = 'Bad') => o.agent.post('/api/library/systems').set('x-csrf-token', o.csrf()).send({ name, layers });
+    const send = (layers: unknown, name = 'Bad') =>
+      o.agent.post('/api/library/systems').set('x-csrf-token', o.csrf()).send({ name, layers });
     const p = primerLayer(primer);
 
     const none = await send([]);
     expect(none.body.errors).toEqual([{ field: 'layers', message: 'A finish system needs at least one layer.' }]);
     expect((await send(undefined)).body.errors).toEqual([{ field: 'layers', message: 'A finish system needs at least one layer.' }]);
 
-    const zero = await send([p, { ...glazeLayer(tint, medium), coverage: { kind: 'spreadRate', surfacePerUnit: 0, unit: 'gallon', lengthUnit: 'ft' } }]);
+    const zero = await send([
+      p,
+      { ...glazeLayer(tint, medium), coverage: { kind: 'spreadRate', surfacePerUnit: 0, unit: 'gallon', lengthUnit: 'ft' } },
+    ]);
     expect(zero.status).toBe(400);
     expect(fields(zero.body)).toEqual(['layers.1.coverage.surfacePerUnit']);
 
@@ -70,7 +91,19 @@ describe('finish systems', () => {
     const coats = await send([{ ...limeLayer(lime), coats: 3 }]);
     expect(coats.body.errors).toEqual([{ field: 'layers.0.coatCoverages', message: 'Give one coverage per coat: 3 coats, 2 given.' }]);
 
-    const mixed = await send([{ ...p, productId: undefined }, { ...p, id: 'p2', coats: 0, waste: 1.2, coverageShare: 0, productionRate: { surfacePerHour: -5, lengthUnit: 'ft' }, multipliers: { ceiling: 0.5 }, waitHoursAfter: -1 }]);
+    const mixed = await send([
+      { ...p, productId: undefined },
+      {
+        ...p,
+        id: 'p2',
+        coats: 0,
+        waste: 1.2,
+        coverageShare: 0,
+        productionRate: { surfacePerHour: -5, lengthUnit: 'ft' },
+        multipliers: { ceiling: 0.5 },
+        waitHoursAfter: -1,
+      },
+    ]);
     expect(fields(mixed.body)).toEqual([
       'layers.0.productId',
       'layers.1.coats',
@@ -81,8 +114,24 @@ describe('finish systems', () => {
       'layers.1.waste',
     ]);
 
-    const recipe = await send([{ ...glazeLayer(tint, medium), recipe: { by: 'volume', baseProductId: primer, components: [{ productId: tint, parts: 1 }, { productId: tint, parts: 0 }] } }]);
-    expect(fields(recipe.body)).toEqual(['layers.0.recipe.baseProductId', 'layers.0.recipe.components.1.parts', 'layers.0.recipe.components.1.productId']);
+    const recipe = await send([
+      {
+        ...glazeLayer(tint, medium),
+        recipe: {
+          by: 'volume',
+          baseProductId: primer,
+          components: [
+            { productId: tint, parts: 1 },
+            { productId: tint, parts: 0 },
+          ],
+        },
+      },
+    ]);
+    expect(fields(recipe.body)).toEqual([
+      'layers.0.recipe.baseProductId',
+      'layers.0.recipe.components.1.parts',
+      'layers.0.recipe.components.1.productId',
+    ]);
 
     // The engine's own checks: the lime is bought by weight but this coverage is by volume.
     const engine = await send([p, { ...p, id: 'lime-by-volume', productId: lime }]);
@@ -97,18 +146,29 @@ describe('finish systems', () => {
   it('refuses products of another firm and archived products, naming the layer field', async () => {
     const a = await firmWithProducts();
     const b = await firmWithProducts();
-    const theirs = await a.o.agent.post('/api/library/systems').set('x-csrf-token', a.o.csrf()).send({ name: 'Theirs', layers: [primerLayer(a.primer), glazeLayer(a.tint, b.medium)] });
+    const theirs = await a.o.agent
+      .post('/api/library/systems')
+      .set('x-csrf-token', a.o.csrf())
+      .send({ name: 'Theirs', layers: [primerLayer(a.primer), glazeLayer(a.tint, b.medium)] });
     expect(theirs.status).toBe(400);
-    expect(theirs.body.errors).toEqual([{ field: 'layers.1.recipe.components.1.productId', message: 'That product is not in your library.' }]);
+    expect(theirs.body.errors).toEqual([
+      { field: 'layers.1.recipe.components.1.productId', message: 'That product is not in your library.' },
+    ]);
     await a.o.agent.post(`/api/library/products/${a.primer}/archive`).set('x-csrf-token', a.o.csrf());
-    const archived = await a.o.agent.post('/api/library/systems').set('x-csrf-token', a.o.csrf()).send({ name: 'Old primer', layers: [primerLayer(a.primer)] });
+    const archived = await a.o.agent
+      .post('/api/library/systems')
+      .set('x-csrf-token', a.o.csrf())
+      .send({ name: 'Old primer', layers: [primerLayer(a.primer)] });
     expect(archived.body.errors).toEqual([{ field: 'layers.0.productId', message: expect.stringContaining('archived') }]);
     expect((await a.o.agent.get('/api/library/systems')).body.items).toEqual([]);
   });
 
   it('lets crew read systems and refuses their writes with 403 before any 400', async () => {
     const { o, primer } = await firmWithProducts();
-    const made = await o.agent.post('/api/library/systems').set('x-csrf-token', o.csrf()).send({ name: 'Primer only', layers: [primerLayer(primer)] });
+    const made = await o.agent
+      .post('/api/library/systems')
+      .set('x-csrf-token', o.csrf())
+      .send({ name: 'Primer only', layers: [primerLayer(primer)] });
     const crew = await joinAs(t, o, 'crew');
     expect((await crew.agent.get('/api/library/systems')).body.items).toHaveLength(1);
     expect((await crew.agent.get(`/api/library/systems/${made.body.id}`)).body.layers).toHaveLength(1);
@@ -128,7 +188,12 @@ describe('finish systems', () => {
   it('answers 404 on every route for another firm’s ids', async () => {
     const a = await firmWithProducts();
     const b = await firmWithProducts();
-    const system = (await b.o.agent.post('/api/library/systems').set('x-csrf-token', b.o.csrf()).send({ name: 'B only', layers: [primerLayer(b.primer)] })).body.id;
+    const system = (
+      await b.o.agent
+        .post('/api/library/systems')
+        .set('x-csrf-token', b.o.csrf())
+        .send({ name: 'B only', layers: [primerLayer(b.primer)] })
+    ).body.id;
     const calls = [
       ['get', `/api/library/products/${b.primer}`, undefined],
       ['patch', `/api/library/products/${b.primer}`, { name: 'Taken' }],

@@ -1,4 +1,13 @@
-import { FLAMMABLE_BELOW_C, type ContainerInput, type FinishLayerInput, type FinishSystemSummary, type FinishSystemView, type ProductHazardsInput, type ProductView, type UsedProduct } from '@layerbook/contracts';
+import {
+  FLAMMABLE_BELOW_C,
+  type ContainerInput,
+  type FinishLayerInput,
+  type FinishSystemSummary,
+  type FinishSystemView,
+  type ProductHazardsInput,
+  type ProductView,
+  type UsedProduct,
+} from '@layerbook/contracts';
 import type { finishSystems, products } from '@layerbook/db';
 import { outlineFinish } from '@layerbook/domain';
 
@@ -34,7 +43,9 @@ export function toSystemSummary(row: SystemRow, byId: ReadonlyMap<string, Produc
   // A missing row cannot happen through the API (ids are checked on save); show it rather than hide it.
   const usesProducts = outline.productIds.map((id): UsedProduct => {
     const p = byId.get(id);
-    return p ? { id, name: p.name, unit: p.unit as ProductView['unit'], isArchived: p.archivedAt !== null } : { id, name: 'Unknown product', unit: '', isArchived: true };
+    return p
+      ? { id, name: p.name, unit: p.unit as ProductView['unit'], isArchived: p.archivedAt !== null }
+      : { id, name: 'Unknown product', unit: '', isArchived: true };
   });
   return {
     id: row.id,

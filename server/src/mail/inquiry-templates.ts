@@ -4,7 +4,10 @@ export function inquiryAcknowledgementMail(p: { firmName: string; name: string }
   return render(
     `${p.firmName} received your inquiry`,
     'Thank you — we have your inquiry',
-    [`Hello ${p.name},`, `${p.firmName} has your request and will be in touch soon to talk about the work and, if it helps, to arrange a visit.`],
+    [
+      `Hello ${p.name},`,
+      `${p.firmName} has your request and will be in touch soon to talk about the work and, if it helps, to arrange a visit.`,
+    ],
     null,
     `You are receiving this because you sent an inquiry to ${p.firmName}.`,
   );
@@ -20,7 +23,12 @@ export function inquiryNotificationMail(p: { firmName: string; prospect: string;
   );
 }
 
-export function followUpDigestMail(p: { name: string; firmName: string; items: Array<{ contactName: string; due: string; overdue: boolean }>; url: string }): RenderedMail {
+export function followUpDigestMail(p: {
+  name: string;
+  firmName: string;
+  items: Array<{ contactName: string; due: string; overdue: boolean }>;
+  url: string;
+}): RenderedMail {
   const lines = p.items.map((i) => `${i.contactName} — ${i.overdue ? `overdue since ${i.due}` : 'due today'}`);
   return render(
     `Follow-ups for today: ${p.items.length}`,

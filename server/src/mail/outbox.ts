@@ -21,4 +21,3 @@ export async function enqueueMail(tx: Tx, queue: JobQueue, mail: OutgoingMail): 
   );
   if (inserted.rowCount === 1) await queue.send(QUEUES.mailSend, { outboxId: id }, tx);
 }
-

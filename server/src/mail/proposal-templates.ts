@@ -1,6 +1,15 @@
 import { render, RenderedMail } from './templates';
 
-export function proposalSentMail(p: { firmName: string; clientName: string; title: string; version: number; expiresOn: string; url: string; linkDays: number; portalUrl: string }): RenderedMail {
+export function proposalSentMail(p: {
+  firmName: string;
+  clientName: string;
+  title: string;
+  version: number;
+  expiresOn: string;
+  url: string;
+  linkDays: number;
+  portalUrl: string;
+}): RenderedMail {
   return render(
     `${p.firmName} sent you a proposal: ${p.title}`,
     `A proposal from ${p.firmName}`,

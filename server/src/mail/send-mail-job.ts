@@ -11,10 +11,9 @@ export async function sendOutboxMail(pool: Pool, transport: Transporter, from: s
   const client = await pool.connect();
   try {
     await client.query('begin');
-    const { rows } = await client.query(
-      `select id, to_address, subject, html, text, status from mail_outbox where id = $1 for update`,
-      [job.outboxId],
-    );
+    const { rows } = await client.query(`select id, to_address, subject, html, text, status from mail_outbox where id = $1 for update`, [
+      job.outboxId,
+    ]);
     const row = rows[0] as { id: string; to_address: string; subject: string; html: string; text: string; status: string } | undefined;
     if (!row || row.status === 'sent') {
       await client.query('commit');

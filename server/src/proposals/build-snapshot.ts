@@ -23,7 +23,11 @@ function scopeByRoom(src: ProposalSources, unit: 'ft' | 'm'): SnapshotRoom[] {
     for (const s of v.result.surfaces) {
       const known = src.roomNames.get(s.roomId);
       let room = rooms.get(s.roomId);
-      if (!room) rooms.set(s.roomId, (room = { id: s.roomId, name: known?.name ?? 'Room', position: known?.position ?? Number.MAX_SAFE_INTEGER, surfaces: new Map() }));
+      if (!room)
+        rooms.set(
+          s.roomId,
+          (room = { id: s.roomId, name: known?.name ?? 'Room', position: known?.position ?? Number.MAX_SAFE_INTEGER, surfaces: new Map() }),
+        );
       if (room.surfaces.has(s.surfaceId)) continue;
       room.surfaces.set(s.surfaceId, {
         id: s.surfaceId,
@@ -38,7 +42,9 @@ function scopeByRoom(src: ProposalSources, unit: 'ft' | 'm'): SnapshotRoom[] {
       });
     }
   }
-  return [...rooms.values()].sort((a, b) => a.position - b.position).map((r) => ({ id: r.id, name: r.name, surfaces: [...r.surfaces.values()] }));
+  return [...rooms.values()]
+    .sort((a, b) => a.position - b.position)
+    .map((r) => ({ id: r.id, name: r.name, surfaces: [...r.surfaces.values()] }));
 }
 
 /** The engine's cautions across all options, once each, bullets merged in order. */
@@ -57,9 +63,18 @@ function safetyNotes(variants: readonly StoredVariant[]): SnapshotCaution[] {
 function option(v: StoredVariant, currency: string, digits: number, choice: ProposalChoice): SnapshotOption {
   const money = (s: string) => new Decimal(s).toFixed(digits);
   const sched = v.result.schedule;
-  const layerMilestones = sched.milestones.filter((m) => m.id.startsWith('layer:')).map((m) => ({ layerId: m.id.slice('layer:'.length), label: m.label, date: m.date }));
+  const layerMilestones = sched.milestones
+    .filter((m) => m.id.startsWith('layer:'))
+    .map((m) => ({ layerId: m.id.slice('layer:'.length), label: m.label, date: m.date }));
   const total = money(v.result.price.total);
-  const { payments, isDepositCapped } = optionPayments(total, currency, digits, choice.terms, { finishDate: sched.finishDate, layerMilestones }, choice.depositCap);
+  const { payments, isDepositCapped } = optionPayments(
+    total,
+    currency,
+    digits,
+    choice.terms,
+    { finishDate: sched.finishDate, layerMilestones },
+    choice.depositCap,
+  );
   return {
     id: v.id,
     label: v.label,
@@ -100,7 +115,13 @@ export function buildSnapshot(src: ProposalSources, choice: ProposalChoice): Pro
     scope: scopeByRoom(src, lengthUnit),
     options: src.estimate.variants.map((v) => option(v, currency, digits, choice)),
     // Add-ons are priced from their own labour and materials, the same under every option.
-    addOns: first.result.options.map((a) => ({ id: a.id, label: a.label, price: new Decimal(a.price.price).toFixed(digits), tax: new Decimal(a.price.tax).toFixed(digits), total: new Decimal(a.price.total).toFixed(digits) })),
+    addOns: first.result.options.map((a) => ({
+      id: a.id,
+      label: a.label,
+      price: new Decimal(a.price.price).toFixed(digits),
+      tax: new Decimal(a.price.tax).toFixed(digits),
+      total: new Decimal(a.price.total).toFixed(digits),
+    })),
     exclusions: [...choice.exclusions],
     notes: choice.notes,
     terms: choice.terms,

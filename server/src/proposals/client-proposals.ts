@@ -9,7 +9,10 @@ import { notFound } from '../http/problem';
  * client their portal account belongs to. Anything else is "not found", never "forbidden".
  */
 export async function clientIdOf(tx: TenantTx, client: ClientPrincipal): Promise<string | null> {
-  const { rows } = await tx.client.query<{ client_id: string | null }>(`select client_id from portal_users where tenant_id = $1 and id = $2`, [tx.tenantId, client.id]);
+  const { rows } = await tx.client.query<{ client_id: string | null }>(
+    `select client_id from portal_users where tenant_id = $1 and id = $2`,
+    [tx.tenantId, client.id],
+  );
   return rows[0]?.client_id ?? null;
 }
 
@@ -83,7 +86,14 @@ export async function listClientProposals(tx: TenantTx, client: ClientPrincipal)
   const clientId = await clientIdOf(tx, client);
   if (!clientId) return [];
   const { rows } = await tx.client.query<{
-    estimate_id: string; title: string; site: ProposalSnapshot['site']; id: string; version: number; status: ProposalVersionStatus; expires_on: string; sent_at: Date | null;
+    estimate_id: string;
+    title: string;
+    site: ProposalSnapshot['site'];
+    id: string;
+    version: number;
+    status: ProposalVersionStatus;
+    expires_on: string;
+    sent_at: Date | null;
   }>(
     `select distinct on (e.id) e.id as estimate_id, e.title, v.snapshot->'site' as site, v.id, v.version, v.status, v.expires_on::text as expires_on, v.sent_at, e.created_at
        from estimates e join proposal_versions v on v.tenant_id = e.tenant_id and v.estimate_id = e.id and v.status <> 'draft'

@@ -27,7 +27,8 @@ function refusal(row: ClientVersionRow, today: string, checkExpiry: boolean): Ht
   if (row.status === 'declined') return conflict('You declined this proposal. Ask the firm if you would like a new one.');
   if (row.status === 'changes_requested') return conflict('You asked for changes to this proposal; the firm will send a new version.');
   if (row.status !== 'sent') return conflict('This proposal cannot be answered.');
-  if (checkExpiry && row.expires_on < today) return conflict(`This proposal expired on ${longDate(row.snapshot.locale, row.expires_on)}; ask the firm for a new one.`);
+  if (checkExpiry && row.expires_on < today)
+    return conflict(`This proposal expired on ${longDate(row.snapshot.locale, row.expires_on)}; ask the firm for a new one.`);
   return null;
 }
 
@@ -36,7 +37,14 @@ function refusal(row: ClientVersionRow, today: string, checkExpiry: boolean): Ht
  * (name, time, IP, browser), the job and its draft payment schedule are made from the snapshot,
  * the estimate and its inquiry are won, the audit log and the outbox get their rows.
  */
-export async function acceptProposal(tx: TenantTx, ctx: AppContext, client: ClientPrincipal, id: string, parseBody: () => ProposalAcceptance, signing: SigningContext): Promise<PortalProposal> {
+export async function acceptProposal(
+  tx: TenantTx,
+  ctx: AppContext,
+  client: ClientPrincipal,
+  id: string,
+  parseBody: () => ProposalAcceptance,
+  signing: SigningContext,
+): Promise<PortalProposal> {
   const row = await loadClientVersion(tx, client, id, true);
   const input = parseBody();
   const option = row.snapshot.options.find((o) => o.id === input.variantId);
@@ -57,8 +65,15 @@ export async function acceptProposal(tx: TenantTx, ctx: AppContext, client: Clie
       where tenant_id = $1 and id = $2 and status = 'sent'`,
     [tx.tenantId, id, now, option.id, input.signedName, signing.ip, signing.userAgent.slice(0, 500)],
   );
-  await tx.client.query(`update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status = 'draft'`, [tx.tenantId, row.estimate_id]);
-  await tx.client.query(`update estimates set status = 'accepted', updated_at = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, row.estimate_id, now]);
+  await tx.client.query(
+    `update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status = 'draft'`,
+    [tx.tenantId, row.estimate_id],
+  );
+  await tx.client.query(`update estimates set status = 'accepted', updated_at = $3 where tenant_id = $1 and id = $2`, [
+    tx.tenantId,
+    row.estimate_id,
+    now,
+  ]);
   const jobId = await createJobFromAcceptance(tx, {
     proposalVersionId: id,
     estimateId: row.estimate_id,
@@ -77,7 +92,16 @@ export async function acceptProposal(tx: TenantTx, ctx: AppContext, client: Clie
     action: 'proposal.accepted',
     entity: 'proposal_version',
     entityId: id,
-    data: { version: row.version, optionId: option.id, total: option.total, signedName: input.signedName, ip: signing.ip, snapshotHash: hash, jobId, portalUserId: client.id },
+    data: {
+      version: row.version,
+      optionId: option.id,
+      total: option.total,
+      signedName: input.signedName,
+      ip: signing.ip,
+      snapshotHash: hash,
+      jobId,
+      portalUserId: client.id,
+    },
   });
   await mailAcceptance(tx, ctx, { row, option, signedName: input.signedName, signedAt: now, client, jobId });
   return toPortalProposal(await loadClientVersion(tx, client, id), today);
@@ -99,9 +123,15 @@ export async function answerProposal(
   // Asking for changes to (or declining) an expired offer still tells the firm something useful.
   const refused = refusal(row, today, false);
   if (refused) throw refused;
-  await tx.client.query(`update proposal_versions set status = $3, client_comment = $4, decided_at = $5 where tenant_id = $1 and id = $2 and status = 'sent'`, [tx.tenantId, id, answer, comment, now]);
+  await tx.client.query(
+    `update proposal_versions set status = $3, client_comment = $4, decided_at = $5 where tenant_id = $1 and id = $2 and status = 'sent'`,
+    [tx.tenantId, id, answer, comment, now],
+  );
   if (answer === 'declined') {
-    await tx.client.query(`update estimates set status = 'declined', updated_at = $3 where tenant_id = $1 and id = $2 and status <> 'accepted'`, [tx.tenantId, row.estimate_id, now]);
+    await tx.client.query(
+      `update estimates set status = 'declined', updated_at = $3 where tenant_id = $1 and id = $2 and status <> 'accepted'`,
+      [tx.tenantId, row.estimate_id, now],
+    );
   }
   await recordAudit(tx, {
     actorUserId: null,

@@ -20,7 +20,8 @@ const money = (locale: string, currency: string, amount: string) =>
   // Intl accepts a decimal string and formats it exactly; no float arithmetic happens here.
   new Intl.NumberFormat(locale, { style: 'currency', currency }).format(amount as unknown as number);
 
-const signedOn = (locale: string, at: Date) => new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }).format(at) + ' UTC';
+const signedOn = (locale: string, at: Date) =>
+  new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }).format(at) + ' UTC';
 
 export async function mailAcceptance(
   tx: TenantTx,

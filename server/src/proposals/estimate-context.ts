@@ -12,17 +12,26 @@ import { notFound } from '../http/problem';
  * the unit the engine computes in.
  */
 export async function loadEstimateContext(tx: TenantTx, siteId: string): Promise<EstimateContext & { siteId: string; clientId: string }> {
-  const site = (await tx.client.query<{ id: string; client_id: string; year_built: number | null }>(
-    `select id, client_id, year_built from sites where tenant_id = $1 and id = $2`,
-    [tx.tenantId, siteId],
-  )).rows[0];
+  const site = (
+    await tx.client.query<{ id: string; client_id: string; year_built: number | null }>(
+      `select id, client_id, year_built from sites where tenant_id = $1 and id = $2`,
+      [tx.tenantId, siteId],
+    )
+  ).rows[0];
   if (!site) throw notFound('site');
   const { settings, lengthUnit, currency } = await getEstimatingSettings(tx);
   const { rows: roomRows } = await tx.client.query<{ id: string; name: string; is_exterior: boolean }>(
     `select id, name, is_exterior from rooms where tenant_id = $1 and site_id = $2 order by position, created_at`,
     [tx.tenantId, siteId],
   );
-  const { rows: surfaceRows } = await tx.client.query<{ id: string; room_id: string; name: string; shape: SurfaceShape; length_unit: LengthUnit; disturbed_painted_area: string | null }>(
+  const { rows: surfaceRows } = await tx.client.query<{
+    id: string;
+    room_id: string;
+    name: string;
+    shape: SurfaceShape;
+    length_unit: LengthUnit;
+    disturbed_painted_area: string | null;
+  }>(
     `select s.id, s.room_id, s.name, s.shape, s.length_unit, s.disturbed_painted_area::text as disturbed_painted_area
        from surfaces s join rooms r on r.id = s.room_id
       where s.tenant_id = $1 and r.site_id = $2 order by s.position, s.created_at`,
@@ -39,17 +48,22 @@ export async function loadEstimateContext(tx: TenantTx, siteId: string): Promise
         name: s.name,
         shape: convertShape(s.shape, s.length_unit, lengthUnit),
         disturbedPaintedArea:
-          s.disturbed_painted_area === null || s.length_unit === lengthUnit ? s.disturbed_painted_area : String(convertArea(Number(s.disturbed_painted_area), s.length_unit, lengthUnit)),
+          s.disturbed_painted_area === null || s.length_unit === lengthUnit
+            ? s.disturbed_painted_area
+            : String(convertArea(Number(s.disturbed_painted_area), s.length_unit, lengthUnit)),
       })),
   }));
   const { rows: systemRows } = await tx.client.query<{ id: string; name: string; layers: FinishSystem['layers'] }>(
     `select id, name, layers from finish_systems where tenant_id = $1 and archived_at is null order by name`,
     [tx.tenantId],
   );
-  const { rows: productRows } = await tx.client.query<{ id: string; name: string; unit: Product['unit']; containers: Product['containers']; hazards: Product['hazards'] }>(
-    `select id, name, unit, containers, hazards from products where tenant_id = $1 and archived_at is null order by name`,
-    [tx.tenantId],
-  );
+  const { rows: productRows } = await tx.client.query<{
+    id: string;
+    name: string;
+    unit: Product['unit'];
+    containers: Product['containers'];
+    hazards: Product['hazards'];
+  }>(`select id, name, unit, containers, hazards from products where tenant_id = $1 and archived_at is null order by name`, [tx.tenantId]);
   return {
     siteId: site.id,
     clientId: site.client_id,

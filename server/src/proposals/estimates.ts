@@ -1,4 +1,12 @@
-import type { EstimateContext, EstimateCreate, EstimateInputs, EstimateListItem, EstimateOptionResult, EstimateView, KeysetPage } from '@layerbook/contracts';
+import type {
+  EstimateContext,
+  EstimateCreate,
+  EstimateInputs,
+  EstimateListItem,
+  EstimateOptionResult,
+  EstimateView,
+  KeysetPage,
+} from '@layerbook/contracts';
 import { assembleEstimateInput } from '@layerbook/contracts';
 import { and, clients, desc, eq, estimates, sql, TenantTx } from '@layerbook/db';
 import { computeEstimate, DomainInputError, toResultJson } from '@layerbook/domain';
@@ -34,14 +42,27 @@ export async function createEstimate(tx: TenantTx, actor: Actor, input: Estimate
   }
   const [row] = await tx.db
     .insert(estimates)
-    .values({ tenantId: tx.tenantId, siteId: context.siteId, clientId: context.clientId, inquiryId: input.inquiryId, title: input.title, startDate: input.startDate, inputs: blankInputs(input.title, input.startDate) })
+    .values({
+      tenantId: tx.tenantId,
+      siteId: context.siteId,
+      clientId: context.clientId,
+      inquiryId: input.inquiryId,
+      title: input.title,
+      startDate: input.startDate,
+      inputs: blankInputs(input.title, input.startDate),
+    })
     .returning({ id: estimates.id });
   await recordAudit(tx, { ...auditedBy(actor), action: 'estimate.created', entity: 'estimate', entityId: row!.id });
   return row!.id;
 }
 
 export async function getEstimate(tx: TenantTx, id: string): Promise<EstimateView> {
-  const row = (await tx.db.select().from(estimates).where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, id))))[0];
+  const row = (
+    await tx.db
+      .select()
+      .from(estimates)
+      .where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, id)))
+  )[0];
   if (!row) throw notFound('estimate');
   const { siteId: _s, clientId: _c, ...context } = await loadEstimateContext(tx, row.siteId);
   return {
@@ -67,8 +88,10 @@ function checkReferences(context: EstimateContext, inputs: EstimateInputs): void
   const problems: Array<{ field: string; message: string }> = [];
   inputs.variants.forEach((v, i) =>
     v.surfaces.forEach((s, j) => {
-      if (!surfaceIds.has(s.surfaceId)) problems.push({ field: `variants.${i}.surfaces.${j}.surfaceId`, message: "Choose one of this site's measured surfaces." });
-      if (!systemIds.has(s.finishSystemId)) problems.push({ field: `variants.${i}.surfaces.${j}.finishSystemId`, message: 'Choose a finish system from the library.' });
+      if (!surfaceIds.has(s.surfaceId))
+        problems.push({ field: `variants.${i}.surfaces.${j}.surfaceId`, message: "Choose one of this site's measured surfaces." });
+      if (!systemIds.has(s.finishSystemId))
+        problems.push({ field: `variants.${i}.surfaces.${j}.finishSystemId`, message: 'Choose a finish system from the library.' });
     }),
   );
   if (problems.length) throw badRequest(problems);
@@ -79,7 +102,13 @@ function checkReferences(context: EstimateContext, inputs: EstimateInputs): void
  * the server's, whatever the browser showed. An engine refusal becomes a 400 naming its field.
  */
 export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string, inputs: EstimateInputs, now: Date): Promise<EstimateView> {
-  const row = (await tx.db.select().from(estimates).where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, id))).for('update'))[0];
+  const row = (
+    await tx.db
+      .select()
+      .from(estimates)
+      .where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, id)))
+      .for('update')
+  )[0];
   if (!row) throw notFound('estimate');
   const context = await loadEstimateContext(tx, row.siteId);
   checkReferences(context, inputs);
@@ -87,7 +116,11 @@ export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string,
     try {
       return { id: v.id, label: v.label, result: computeEstimate(assembleEstimateInput(context, inputs, v.id)) };
     } catch (error) {
-      if (error instanceof DomainInputError) throw badRequest([{ field: `variants.${i}.${error.field}`, message: error.message }], `Option "${v.label}" cannot be priced: ${error.message}`);
+      if (error instanceof DomainInputError)
+        throw badRequest(
+          [{ field: `variants.${i}.${error.field}`, message: error.message }],
+          `Option "${v.label}" cannot be priced: ${error.message}`,
+        );
       throw error;
     }
   });
@@ -96,7 +129,15 @@ export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string,
   const variants: EstimateOptionResult[] = computed.map((v) => ({ id: v.id, label: v.label, result: toResultJson(v.result) }));
   await tx.db
     .update(estimates)
-    .set({ inputs, title: inputs.title, startDate: inputs.startDate, result: { variants }, price: prices[0]!.price, computedAt: now, updatedAt: now })
+    .set({
+      inputs,
+      title: inputs.title,
+      startDate: inputs.startDate,
+      result: { variants },
+      price: prices[0]!.price,
+      computedAt: now,
+      updatedAt: now,
+    })
     .where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, id)));
   await recordAudit(tx, { ...auditedBy(actor), action: 'estimate.saved', entity: 'estimate', entityId: id, data: { prices } });
   return getEstimate(tx, id);

@@ -23,7 +23,8 @@ describe('proposal expiry reminders', () => {
     const marker = await sentProposal(t, 'Marker Studio', { expiresOn: '2026-12-02', signIn: false });
     await t.queue.boss.send('follow-up-sweep', { force: true, tenantIds: [marker.firmId] });
     await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(marker.clientEmail) && /^Reminder:/.test(m.subject ?? ''));
-    const reminders = (email: string) => t.inbox.messages.filter((m) => JSON.stringify(m.to).includes(email) && /^Reminder:/.test(m.subject ?? '')).length;
+    const reminders = (email: string) =>
+      t.inbox.messages.filter((m) => JSON.stringify(m.to).includes(email) && /^Reminder:/.test(m.subject ?? '')).length;
     expect(reminders(p.clientEmail)).toBe(1);
     expect(reminders(later.clientEmail)).toBe(0);
   });

@@ -60,7 +60,10 @@ export async function sendProposalReminders(
         ...render(
           `Reminder: your proposal from ${v.firm_name} is open until ${v.expires_on}`,
           `Your proposal is open until ${v.expires_on}`,
-          [`Hello ${v.name},`, `${v.firm_name}'s proposal "${v.title}" (version ${v.version}) stands until ${v.expires_on}. You can read it, accept an option, or ask for changes in your portal.`],
+          [
+            `Hello ${v.name},`,
+            `${v.firm_name}'s proposal "${v.title}" (version ${v.version}) stands until ${v.expires_on}. You can read it, accept an option, or ask for changes in your portal.`,
+          ],
           { label: 'Read the proposal', url },
           'The link signs you in once and works for three days.',
         ),

@@ -16,13 +16,28 @@ export interface ScheduleFacts {
  * improvement). Amounts come from the domain and add up to `total` exactly. A deposit over the cap
  * becomes the cap, and the rest moves to the final payment.
  */
-export function optionPayments(total: string, currency: string, digits: number, terms: ProposalTerms, facts: ScheduleFacts, capRule: DepositCapRule) {
+export function optionPayments(
+  total: string,
+  currency: string,
+  digits: number,
+  terms: ProposalTerms,
+  facts: ScheduleFacts,
+  capRule: DepositCapRule,
+) {
   const n = facts.layerMilestones.length;
   const base = n > 1 ? facts.layerMilestones[Math.floor((n - 1) / 2)]! : null;
   const share = (p: number) => new Decimal(p).div(100);
   const lines: Array<PaymentLineInput & { percent: number | null; expectedOn: string | null }> = [];
   if (terms.depositPercent > 0) {
-    lines.push({ id: 'deposit', label: 'Deposit on acceptance', role: 'deposit', basis: { kind: 'share', share: share(terms.depositPercent) }, trigger: { kind: 'acceptance' }, percent: terms.depositPercent, expectedOn: null });
+    lines.push({
+      id: 'deposit',
+      label: 'Deposit on acceptance',
+      role: 'deposit',
+      basis: { kind: 'share', share: share(terms.depositPercent) },
+      trigger: { kind: 'acceptance' },
+      percent: terms.depositPercent,
+      expectedOn: null,
+    });
   }
   if (base && terms.progressPercent > 0) {
     lines.push({
@@ -35,7 +50,15 @@ export function optionPayments(total: string, currency: string, digits: number, 
       expectedOn: base.date,
     });
   }
-  lines.push({ id: 'final', label: 'Final payment on completion', role: 'final', basis: { kind: 'remainder' }, trigger: { kind: 'walkthrough' }, percent: null, expectedOn: facts.finishDate });
+  lines.push({
+    id: 'final',
+    label: 'Final payment on completion',
+    role: 'final',
+    basis: { kind: 'remainder' },
+    trigger: { kind: 'walkthrough' },
+    percent: null,
+    expectedOn: facts.finishDate,
+  });
 
   let isDepositCapped = false;
   let built = buildPaymentSchedule(total, lines, currency, 'terms');
@@ -53,7 +76,12 @@ export function optionPayments(total: string, currency: string, digits: number, 
     id: l.id,
     label: l.label,
     role: l.role,
-    trigger: l.trigger.kind === 'layerComplete' ? { kind: 'layerComplete', layerId: l.trigger.layerId } : l.trigger.kind === 'acceptance' ? { kind: 'acceptance' } : { kind: 'walkthrough' },
+    trigger:
+      l.trigger.kind === 'layerComplete'
+        ? { kind: 'layerComplete', layerId: l.trigger.layerId }
+        : l.trigger.kind === 'acceptance'
+          ? { kind: 'acceptance' }
+          : { kind: 'walkthrough' },
     percent: lines[i]!.percent,
     amount: l.amount.toFixed(digits),
     expectedOn: lines[i]!.expectedOn,

@@ -32,8 +32,15 @@ export async function makeAndSend(t: TestServer, f: Firm, expiresOn = '2026-12-3
   if (made.status !== 201) throw new Error(`proposal not made: ${made.status} ${JSON.stringify(made.body)}`);
   const sent = await f.agent.post(`/api/proposals/${made.body.id}/send`).set('x-csrf-token', f.csrf()).send({});
   if (sent.status !== 200) throw new Error(`proposal not sent: ${sent.status} ${JSON.stringify(sent.body)}`);
-  const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(f.clientEmail) && (m.text ?? '').includes(`/portal/proposals/${made.body.id}`));
-  return { ...sent.body, link: linkIn(mail) } as { id: string; version: number; snapshot: { options: Array<{ id: string; label: string; total: string; payments: Array<{ label: string; amount: string }> }> }; link: string };
+  const mail = await t.inbox.waitFor(
+    (m) => JSON.stringify(m.to).includes(f.clientEmail) && (m.text ?? '').includes(`/portal/proposals/${made.body.id}`),
+  );
+  return { ...sent.body, link: linkIn(mail) } as {
+    id: string;
+    version: number;
+    snapshot: { options: Array<{ id: string; label: string; total: string; payments: Array<{ label: string; amount: string }> }> };
+    link: string;
+  };
 }
 
 export async function signInByLink(client: Awaited<ReturnType<typeof newAgent>>, link: string): Promise<void> {
@@ -48,7 +55,11 @@ export async function otherClientOf(t: TestServer, f: Firm) {
   const email = uniqueEmail('neighbour');
   const made = await f.agent.post('/api/clients').set('x-csrf-token', f.csrf()).send({ kind: 'homeowner', name: 'Nell Neighbour', email });
   await withTenant(t.ctx.pool, f.firmId, (tx) =>
-    tx.client.query(`insert into portal_users (tenant_id, client_id, email, name) values ($1, $2, $3, 'Nell Neighbour')`, [tx.tenantId, made.body.id, email]),
+    tx.client.query(`insert into portal_users (tenant_id, client_id, email, name) values ($1, $2, $3, 'Nell Neighbour')`, [
+      tx.tenantId,
+      made.body.id,
+      email,
+    ]),
   );
   const c = await newAgent(t.app, 'portal');
   await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email });

@@ -1,4 +1,12 @@
-import { proposalAcceptance, proposalChangeRequest, proposalDecline, uuid, type ItemList, type PortalProposal, type PortalProposalSummary } from '@layerbook/contracts';
+import {
+  proposalAcceptance,
+  proposalChangeRequest,
+  proposalDecline,
+  uuid,
+  type ItemList,
+  type PortalProposal,
+  type PortalProposalSummary,
+} from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
@@ -21,7 +29,11 @@ export function portalProposalRoutes(ctx: AppContext): Router {
   });
 
   router.get('/:id', async (req, res) => {
-    res.json((await withClient(ctx, req, (tx, client) => getClientProposal(tx, client, parse(idParam, req.params).id, ctx.now()))) satisfies PortalProposal);
+    res.json(
+      (await withClient(ctx, req, (tx, client) =>
+        getClientProposal(tx, client, parse(idParam, req.params).id, ctx.now()),
+      )) satisfies PortalProposal,
+    );
   });
 
   // Drawn from the stored snapshot after the transaction ends: a GET with no side effects.
@@ -47,11 +59,19 @@ export function portalProposalRoutes(ctx: AppContext): Router {
   });
 
   router.post('/:id/decline', async (req, res) => {
-    res.json(await withClient(ctx, req, (tx, client) => answerProposal(tx, ctx, client, parse(idParam, req.params).id, 'declined', () => parse(proposalDecline, req.body ?? {}))));
+    res.json(
+      await withClient(ctx, req, (tx, client) =>
+        answerProposal(tx, ctx, client, parse(idParam, req.params).id, 'declined', () => parse(proposalDecline, req.body ?? {})),
+      ),
+    );
   });
 
   router.post('/:id/request-changes', async (req, res) => {
-    res.json(await withClient(ctx, req, (tx, client) => answerProposal(tx, ctx, client, parse(idParam, req.params).id, 'changes_requested', () => parse(proposalChangeRequest, req.body))));
+    res.json(
+      await withClient(ctx, req, (tx, client) =>
+        answerProposal(tx, ctx, client, parse(idParam, req.params).id, 'changes_requested', () => parse(proposalChangeRequest, req.body)),
+      ),
+    );
   });
 
   return router;

@@ -14,7 +14,8 @@ afterAll(() => t.stop());
 
 type Portal = Awaited<ReturnType<typeof sentProposal>>['client'];
 const post = (c: Portal, url: string, body: object) => c.agent.post(url).set('x-csrf-token', c.csrf()).send(body);
-const accept = (c: Portal, id: string, body: object = {}) => post(c, `/api/portal/proposals/${id}/accept`, { variantId: 'B', signedName: 'Edwina Marl', consent: true, ...body });
+const accept = (c: Portal, id: string, body: object = {}) =>
+  post(c, `/api/portal/proposals/${id}/accept`, { variantId: 'B', signedName: 'Edwina Marl', consent: true, ...body });
 const to = (address: string) => (m: { to?: unknown }) => JSON.stringify(m.to).includes(address);
 
 describe('a client reads and accepts a proposal in the portal', () => {
@@ -26,14 +27,29 @@ describe('a client reads and accepts a proposal in the portal', () => {
     const list = await p.client.agent.get('/api/portal/proposals');
     expect(list.status).toBe(200);
     expect(list.body).toEqual({
-      items: [{
-        estimateId: p.estimateId, title: 'Dining room plaster', siteAddress: '1 Round Row, Ochreford',
-        latest: { id: p.version.id, version: 1, status: 'sent', expiresOn: '2026-12-31', sentAt: '2026-12-01T15:00:00.000Z' },
-      }],
+      items: [
+        {
+          estimateId: p.estimateId,
+          title: 'Dining room plaster',
+          siteAddress: '1 Round Row, Ochreford',
+          latest: { id: p.version.id, version: 1, status: 'sent', expiresOn: '2026-12-31', sentAt: '2026-12-01T15:00:00.000Z' },
+        },
+      ],
     });
     const read = await p.client.agent.get(`/api/portal/proposals/${p.version.id}`);
     expect(read.status).toBe(200);
-    expect(read.body).toMatchObject({ id: p.version.id, version: 1, status: 'sent', expiresOn: '2026-12-31', isExpired: false, isLatest: true, decidedAt: null, acceptedVariantId: null, signedName: null, clientComment: '' });
+    expect(read.body).toMatchObject({
+      id: p.version.id,
+      version: 1,
+      status: 'sent',
+      expiresOn: '2026-12-31',
+      isExpired: false,
+      isLatest: true,
+      decidedAt: null,
+      acceptedVariantId: null,
+      signedName: null,
+      clientComment: '',
+    });
     expect(read.body.snapshot).toEqual(p.version.snapshot);
 
     const pdf = await p.client.agent.get(`/api/portal/proposals/${p.version.id}/pdf`);
@@ -45,16 +61,36 @@ describe('a client reads and accepts a proposal in the portal', () => {
     const optionB = p.version.snapshot.options.find((o) => o.id === 'B')!;
     const accepted = await accept(p.client, p.version.id, { signedName: '  Edwina Marl ' }).set('user-agent', 'JestBrowser/1.0');
     expect(accepted.status).toBe(200);
-    expect(accepted.body).toMatchObject({ status: 'accepted', acceptedVariantId: 'B', signedName: 'Edwina Marl', decidedAt: '2026-12-01T15:00:00.000Z' });
+    expect(accepted.body).toMatchObject({
+      status: 'accepted',
+      acceptedVariantId: 'B',
+      signedName: 'Edwina Marl',
+      decidedAt: '2026-12-01T15:00:00.000Z',
+    });
 
     const stored = await withTenant(t.ctx.pool, p.firmId, async (tx) => ({
-      version: (await tx.client.query(`select signed_name, signed_ip, signed_user_agent, decided_at from proposal_versions where id = $1`, [p.version.id])).rows[0],
+      version: (
+        await tx.client.query(`select signed_name, signed_ip, signed_user_agent, decided_at from proposal_versions where id = $1`, [
+          p.version.id,
+        ])
+      ).rows[0],
       estimate: (await tx.client.query(`select status from estimates where id = $1`, [p.estimateId])).rows[0],
       inquiry: (await tx.client.query(`select stage from inquiries where id = $1`, [p.inquiryId])).rows[0],
-      activity: (await tx.client.query(`select kind, data from inquiry_activities where inquiry_id = $1 and kind = 'stage_change'`, [p.inquiryId])).rows,
-      audit: (await tx.client.query(`select action, actor_kind from audit_log where tenant_id = $1 and action in ('proposal.accepted', 'job.created', 'inquiry.stage_changed') order by action`, [tx.tenantId])).rows,
+      activity: (
+        await tx.client.query(`select kind, data from inquiry_activities where inquiry_id = $1 and kind = 'stage_change'`, [p.inquiryId])
+      ).rows,
+      audit: (
+        await tx.client.query(
+          `select action, actor_kind from audit_log where tenant_id = $1 and action in ('proposal.accepted', 'job.created', 'inquiry.stage_changed') order by action`,
+          [tx.tenantId],
+        )
+      ).rows,
     }));
-    expect(stored.version).toMatchObject({ signed_name: 'Edwina Marl', signed_user_agent: 'JestBrowser/1.0', decided_at: new Date('2026-12-01T15:00:00Z') });
+    expect(stored.version).toMatchObject({
+      signed_name: 'Edwina Marl',
+      signed_user_agent: 'JestBrowser/1.0',
+      decided_at: new Date('2026-12-01T15:00:00Z'),
+    });
     expect(stored.version.signed_ip).toMatch(/127\.0\.0\.1|::1/);
     expect(stored.estimate.status).toBe('accepted');
     expect(stored.inquiry.stage).toBe('won');
@@ -68,12 +104,31 @@ describe('a client reads and accepts a proposal in the portal', () => {
     // The office sees the job: option B's total, and its payment lines adding up to it exactly.
     const jobs = await office.agent.get('/api/jobs');
     expect(jobs.status).toBe(200);
-    expect(jobs.body.items).toEqual([expect.objectContaining({ clientName: 'Edwina Marl', optionLabel: 'Primed only', contractSum: optionB.total, currency: 'USD', status: 'scheduled', startDate: '2026-12-07' })]);
+    expect(jobs.body.items).toEqual([
+      expect.objectContaining({
+        clientName: 'Edwina Marl',
+        optionLabel: 'Primed only',
+        contractSum: optionB.total,
+        currency: 'USD',
+        status: 'scheduled',
+        startDate: '2026-12-07',
+      }),
+    ]);
     const job = (await office.agent.get(`/api/jobs/${jobs.body.items[0].id}`)).body;
-    expect(job).toMatchObject({ proposalVersionId: p.version.id, estimateId: p.estimateId, inquiryId: p.inquiryId, acceptedVariantId: 'B' });
-    expect(job.paymentSchedule.map((l: { position: number; label: string; amount: string; status: string }) => [l.position, l.label, l.amount, l.status])).toEqual(
-      optionB.payments.map((pay, i) => [i + 1, pay.label, pay.amount, 'draft']),
-    );
+    expect(job).toMatchObject({
+      proposalVersionId: p.version.id,
+      estimateId: p.estimateId,
+      inquiryId: p.inquiryId,
+      acceptedVariantId: 'B',
+    });
+    expect(
+      job.paymentSchedule.map((l: { position: number; label: string; amount: string; status: string }) => [
+        l.position,
+        l.label,
+        l.amount,
+        l.status,
+      ]),
+    ).toEqual(optionB.payments.map((pay, i) => [i + 1, pay.label, pay.amount, 'draft']));
     const sum = job.paymentSchedule.reduce((acc: Decimal, l: { amount: string }) => acc.plus(l.amount), new Decimal(0));
     expect(sum.toFixed(2)).toBe(optionB.total);
 
@@ -91,7 +146,10 @@ describe('a client reads and accepts a proposal in the portal', () => {
     expect(again.body.detail).toBe('This proposal was already accepted.');
     expect((await post(p.client, `/api/portal/proposals/${p.version.id}/decline`, {})).status).toBe(409);
     const counts = await withTenant(t.ctx.pool, p.firmId, (tx) =>
-      tx.client.query(`select (select count(*) from jobs)::int as jobs, (select count(*) from mail_outbox where purpose_key like $1)::int as mails`, [`proposal-accepted%${p.version.id}%`]),
+      tx.client.query(
+        `select (select count(*) from jobs)::int as jobs, (select count(*) from mail_outbox where purpose_key like $1)::int as mails`,
+        [`proposal-accepted%${p.version.id}%`],
+      ),
     );
     expect(counts.rows[0]).toEqual({ jobs: 1, mails: 3 });
     const marker = await sentProposal(t, 'Marker Lime Works');
@@ -150,7 +208,11 @@ describe('a client reads and accepts a proposal in the portal', () => {
     const res = await accept(p.client, p.version.id);
     expect(res.status).toBe(409);
     expect(res.body.detail).toBe('A newer version of this proposal was sent; please read that one.');
-    expect((await p.client.agent.get('/api/portal/proposals')).body.items[0].latest).toMatchObject({ id: v2.id, version: 2, status: 'sent' });
+    expect((await p.client.agent.get('/api/portal/proposals')).body.items[0].latest).toMatchObject({
+      id: v2.id,
+      version: 2,
+      status: 'sent',
+    });
     expect((await accept(p.client, v2.id, { variantId: 'A' })).status).toBe(200);
   });
 
@@ -158,7 +220,11 @@ describe('a client reads and accepts a proposal in the portal', () => {
     const p = await sentProposal(t, 'Answer Plaster');
     const asked = await post(p.client, `/api/portal/proposals/${p.version.id}/request-changes`, { comment: 'Could the border be ochre?' });
     expect(asked.status).toBe(200);
-    expect(asked.body).toMatchObject({ status: 'changes_requested', clientComment: 'Could the border be ochre?', decidedAt: '2026-12-01T15:00:00.000Z' });
+    expect(asked.body).toMatchObject({
+      status: 'changes_requested',
+      clientComment: 'Could the border be ochre?',
+      decidedAt: '2026-12-01T15:00:00.000Z',
+    });
     const mail = await t.inbox.waitFor((m) => to(p.email)(m) && /asked for changes/.test(m.subject ?? ''));
     expect(mail.text).toContain('Could the border be ochre?');
     expect((await accept(p.client, p.version.id)).status).toBe(409);
@@ -168,7 +234,12 @@ describe('a client reads and accepts a proposal in the portal', () => {
     expect(declined.status).toBe(200);
     expect(declined.body).toMatchObject({ status: 'declined', clientComment: '' });
     await t.inbox.waitFor((m) => to(p.email)(m) && /declined/.test(m.subject ?? ''));
-    const audit = await withTenant(t.ctx.pool, p.firmId, (tx) => tx.client.query(`select action, actor_kind from audit_log where tenant_id = $1 and action like 'proposal.%' and actor_kind = 'client' order by created_at`, [tx.tenantId]));
+    const audit = await withTenant(t.ctx.pool, p.firmId, (tx) =>
+      tx.client.query(
+        `select action, actor_kind from audit_log where tenant_id = $1 and action like 'proposal.%' and actor_kind = 'client' order by created_at`,
+        [tx.tenantId],
+      ),
+    );
     expect(audit.rows.map((r) => r.action)).toEqual(['proposal.changes_requested', 'proposal.declined']);
   });
 });
@@ -192,7 +263,10 @@ describe('who may see a proposal in the portal', () => {
     for (const res of await Promise.all(routes(other.client))) expect(res.status).toBe(404);
 
     // A draft is never shown.
-    const draft = await p.agent.post('/api/proposals').set('x-csrf-token', p.csrf()).send({ estimateId: p.estimateId, expiresOn: '2026-12-31' });
+    const draft = await p.agent
+      .post('/api/proposals')
+      .set('x-csrf-token', p.csrf())
+      .send({ estimateId: p.estimateId, expiresOn: '2026-12-31' });
     expect((await p.client.agent.get(`/api/portal/proposals/${draft.body.id}`)).status).toBe(404);
     expect((await p.client.agent.get('/api/portal/proposals/not-a-uuid')).status).toBe(400);
 

@@ -14,17 +14,43 @@ export async function firmWithPricedEstimate(t: TestServer, name: string, opts: 
   const csrf = () => o.csrf();
   const firm = (await o.agent.get('/api/firm')).body;
   const { id: _id, slug: _slug, updatedAt: _u, ...profile } = firm;
-  await o.agent.patch('/api/firm').set('x-csrf-token', csrf()).send({ ...profile, addressLine1: '12 Kiln Lane', city: 'Ochreford', region: 'VT', postalCode: '05999', phone: '+1 802 555 0142' });
+  await o.agent
+    .patch('/api/firm')
+    .set('x-csrf-token', csrf())
+    .send({ ...profile, addressLine1: '12 Kiln Lane', city: 'Ochreford', region: 'VT', postalCode: '05999', phone: '+1 802 555 0142' });
   const estimating = (await o.agent.get('/api/firm/estimating')).body.settings;
-  await o.agent.put('/api/firm/estimating').set('x-csrf-token', csrf()).send({ ...estimating, tax: { mode: 'wholeJob', ratePercent: 8.25 } });
+  await o.agent
+    .put('/api/firm/estimating')
+    .set('x-csrf-token', csrf())
+    .send({ ...estimating, tax: { mode: 'wholeJob', ratePercent: 8.25 } });
 
   const clientEmail = opts.clientEmail ?? uniqueEmail('client');
-  const client = await o.agent.post('/api/clients').set('x-csrf-token', csrf()).send({ kind: 'homeowner', name: 'Edwina Marl', email: clientEmail });
-  const site = await o.agent.post(`/api/clients/${client.body.id}/sites`).set('x-csrf-token', csrf()).send({ addressLine1: '1 Round Row', city: 'Ochreford', yearBuilt: 1990 });
+  const client = await o.agent
+    .post('/api/clients')
+    .set('x-csrf-token', csrf())
+    .send({ kind: 'homeowner', name: 'Edwina Marl', email: clientEmail });
+  const site = await o.agent
+    .post(`/api/clients/${client.body.id}/sites`)
+    .set('x-csrf-token', csrf())
+    .send({ addressLine1: '1 Round Row', city: 'Ochreford', yearBuilt: 1990 });
   const ids = await withTenant(t.ctx.pool, o.firmId, async (tx) => {
-    const room = await tx.client.query(`insert into rooms (tenant_id, site_id, name) values ($1, $2, 'Dining room') returning id`, [tx.tenantId, site.body.id]);
-    const walls = { kind: 'roundWalls', radius: 9, height: 10, openings: [{ width: 3, height: 7 }, { width: 4, height: 5, count: 2 }] };
-    const surface = await tx.client.query(`insert into surfaces (tenant_id, room_id, name, shape, length_unit) values ($1, $2, 'Walls', $3, 'ft') returning id`, [tx.tenantId, room.rows[0].id, walls]);
+    const room = await tx.client.query(`insert into rooms (tenant_id, site_id, name) values ($1, $2, 'Dining room') returning id`, [
+      tx.tenantId,
+      site.body.id,
+    ]);
+    const walls = {
+      kind: 'roundWalls',
+      radius: 9,
+      height: 10,
+      openings: [
+        { width: 3, height: 7 },
+        { width: 4, height: 5, count: 2 },
+      ],
+    };
+    const surface = await tx.client.query(
+      `insert into surfaces (tenant_id, room_id, name, shape, length_unit) values ($1, $2, 'Walls', $3, 'ft') returning id`,
+      [tx.tenantId, room.rows[0].id, walls],
+    );
     const primer = await tx.client.query(
       `insert into products (tenant_id, name, kind, unit, containers) values ($1, 'Acrylic primer', 'primer', 'gallon', $2) returning id`,
       [tx.tenantId, JSON.stringify([{ label: 'Gallon', size: 1, unit: 'gallon', price: '45.00' }])],
@@ -34,20 +60,41 @@ export async function firmWithPricedEstimate(t: TestServer, name: string, opts: 
       [tx.tenantId, JSON.stringify([{ label: '20 kg pail', size: 20, unit: 'kg', price: '95.00' }])],
     );
     const primeLayer = {
-      id: 'prime', name: 'Primer', method: 'roll', productId: primer.rows[0].id,
+      id: 'prime',
+      name: 'Primer',
+      method: 'roll',
+      productId: primer.rows[0].id,
       coverage: { kind: 'spreadRate', surfacePerUnit: 350, unit: 'gallon', lengthUnit: 'ft' },
-      coats: 1, waste: 0.1, productionRate: { surfacePerHour: 250, lengthUnit: 'ft' }, waitHoursAfter: 4,
+      coats: 1,
+      waste: 0.1,
+      productionRate: { surfacePerHour: 250, lengthUnit: 'ft' },
+      waitHoursAfter: 4,
     };
     const limeLayer = {
-      id: 'lime', name: 'Lime plaster', method: 'trowel', productId: lime.rows[0].id,
+      id: 'lime',
+      name: 'Lime plaster',
+      method: 'trowel',
+      productId: lime.rows[0].id,
       coverage: { kind: 'consumption', unitPerSurface: 0.15, unit: 'kg', lengthUnit: 'ft' },
-      coats: 2, waste: 0.1, productionRate: { surfacePerHour: 60, lengthUnit: 'ft' }, waitHoursAfter: 24,
+      coats: 2,
+      waste: 0.1,
+      productionRate: { surfacePerHour: 60, lengthUnit: 'ft' },
+      waitHoursAfter: 24,
     };
-    const system = await tx.client.query(`insert into finish_systems (tenant_id, name, layers) values ($1, 'Polished lime plaster', $2) returning id`, [tx.tenantId, JSON.stringify([primeLayer, limeLayer])]);
-    const simple = await tx.client.query(`insert into finish_systems (tenant_id, name, layers) values ($1, 'Primed walls', $2) returning id`, [tx.tenantId, JSON.stringify([primeLayer])]);
+    const system = await tx.client.query(
+      `insert into finish_systems (tenant_id, name, layers) values ($1, 'Polished lime plaster', $2) returning id`,
+      [tx.tenantId, JSON.stringify([primeLayer, limeLayer])],
+    );
+    const simple = await tx.client.query(
+      `insert into finish_systems (tenant_id, name, layers) values ($1, 'Primed walls', $2) returning id`,
+      [tx.tenantId, JSON.stringify([primeLayer])],
+    );
     return { surfaceId: surface.rows[0].id as string, systemId: system.rows[0].id as string, simpleId: simple.rows[0].id as string };
   });
-  const estimate = await o.agent.post('/api/estimates').set('x-csrf-token', csrf()).send({ siteId: site.body.id, title: 'Dining room plaster', startDate: '2026-12-07' });
+  const estimate = await o.agent
+    .post('/api/estimates')
+    .set('x-csrf-token', csrf())
+    .send({ siteId: site.body.id, title: 'Dining room plaster', startDate: '2026-12-07' });
   const inputs: EstimateInputs = {
     title: 'Dining room plaster',
     startDate: '2026-12-07',
@@ -75,7 +122,10 @@ export async function joinAs(t: TestServer, owner: Awaited<ReturnType<typeof sig
   await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email, role });
   const token = new URL(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email)))).searchParams.get('token')!;
   const member = await newAgent(t.app);
-  await member.agent.post('/api/auth/invitations/accept').set('x-csrf-token', member.csrf()).send({ token, name: `A ${role}`, password: 'member-password-2026' });
+  await member.agent
+    .post('/api/auth/invitations/accept')
+    .set('x-csrf-token', member.csrf())
+    .send({ token, name: `A ${role}`, password: 'member-password-2026' });
   await member.refresh();
   return member;
 }

@@ -1,4 +1,12 @@
-import { proposalCreate, proposalListQuery, proposalUpdate, uuid, type ItemList, type ProposalVersionSummary, type ProposalVersionView } from '@layerbook/contracts';
+import {
+  proposalCreate,
+  proposalListQuery,
+  proposalUpdate,
+  uuid,
+  type ItemList,
+  type ProposalVersionSummary,
+  type ProposalVersionView,
+} from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
@@ -16,11 +24,21 @@ export function proposalRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    res.json((await withStaff(ctx, req, 'office', (tx) => listVersions(tx, parse(proposalListQuery, req.query).estimateId))) satisfies ItemList<ProposalVersionSummary>);
+    res.json(
+      (await withStaff(ctx, req, 'office', (tx) =>
+        listVersions(tx, parse(proposalListQuery, req.query).estimateId),
+      )) satisfies ItemList<ProposalVersionSummary>,
+    );
   });
 
   router.post('/', async (req, res) => {
-    res.status(201).json((await withStaff(ctx, req, 'office', (tx, staff) => createVersion(tx, staff.id, parse(proposalCreate, req.body), ctx.now()))) satisfies ProposalVersionView);
+    res
+      .status(201)
+      .json(
+        (await withStaff(ctx, req, 'office', (tx, staff) =>
+          createVersion(tx, staff.id, parse(proposalCreate, req.body), ctx.now()),
+        )) satisfies ProposalVersionView,
+      );
   });
 
   router.get('/:id', async (req, res) => {
@@ -28,11 +46,19 @@ export function proposalRoutes(ctx: AppContext): Router {
   });
 
   router.patch('/:id', async (req, res) => {
-    res.json((await withStaff(ctx, req, 'office', (tx, staff) => updateDraft(tx, staff.id, parse(idParam, req.params).id, parse(proposalUpdate, req.body), ctx.now()))) satisfies ProposalVersionView);
+    res.json(
+      (await withStaff(ctx, req, 'office', (tx, staff) =>
+        updateDraft(tx, staff.id, parse(idParam, req.params).id, parse(proposalUpdate, req.body), ctx.now()),
+      )) satisfies ProposalVersionView,
+    );
   });
 
   router.post('/:id/send', async (req, res) => {
-    res.json((await withStaff(ctx, req, 'office', (tx, staff) => sendVersion(tx, ctx, staff.id, parse(idParam, req.params).id))) satisfies ProposalVersionView);
+    res.json(
+      (await withStaff(ctx, req, 'office', (tx, staff) =>
+        sendVersion(tx, ctx, staff.id, parse(idParam, req.params).id),
+      )) satisfies ProposalVersionView,
+    );
   });
 
   // Drawn from the stored snapshot after the transaction ends: a GET with no side effects.

@@ -7,7 +7,13 @@ export interface StoredVariant {
   readonly id: string;
   readonly label: string;
   readonly result: {
-    readonly surfaces: ReadonlyArray<{ roomId: string; surfaceId: string; name: string; finishSystemId: string; measure: { measure: 'area' | 'length'; quantity: number } }>;
+    readonly surfaces: ReadonlyArray<{
+      roomId: string;
+      surfaceId: string;
+      name: string;
+      finishSystemId: string;
+      measure: { measure: 'area' | 'length'; quantity: number };
+    }>;
     readonly schedule: {
       readonly days: ReadonlyArray<{ date: string }>;
       readonly milestones: ReadonlyArray<{ id: string; label: string; date: string }>;
@@ -22,7 +28,15 @@ export interface StoredVariant {
 
 export interface ProposalSources {
   readonly estimate: { id: string; title: string; status: string; startDate: string; variants: readonly StoredVariant[] };
-  readonly firm: { name: string; addressLines: string[]; phone: string; timeZone: string; currency: string; country: string; units: 'imperial' | 'metric' };
+  readonly firm: {
+    name: string;
+    addressLines: string[];
+    phone: string;
+    timeZone: string;
+    currency: string;
+    country: string;
+    units: 'imperial' | 'metric';
+  };
   readonly client: { id: string; name: string; email: string; phone: string };
   readonly site: { label: string; addressLines: string[]; yearBuilt: number | null };
   readonly roomNames: ReadonlyMap<string, { name: string; position: number }>;
@@ -30,32 +44,66 @@ export interface ProposalSources {
 }
 
 const addressLines = (r: { address_line1: string; address_line2: string; city: string; region: string; postal_code: string }) =>
-  [r.address_line1, r.address_line2, [r.city, [r.region, r.postal_code].filter(Boolean).join(' ')].filter(Boolean).join(', ')].filter((l) => l.trim() !== '');
+  [r.address_line1, r.address_line2, [r.city, [r.region, r.postal_code].filter(Boolean).join(' ')].filter(Boolean).join(', ')].filter(
+    (l) => l.trim() !== '',
+  );
 
 /**
  * Everything a proposal is made from, read in the caller's transaction with the estimate row
  * locked, so version numbers are handed out one at a time. 409 when the estimate has no saved numbers.
  */
 export async function loadProposalSources(tx: TenantTx, estimateId: string): Promise<ProposalSources> {
-  const est = (await tx.client.query(
-    `select id, title, status, start_date::text as start_date, site_id, client_id, result from estimates where tenant_id = $1 and id = $2 for update`,
-    [tx.tenantId, estimateId],
-  )).rows[0];
+  const est = (
+    await tx.client.query(
+      `select id, title, status, start_date::text as start_date, site_id, client_id, result from estimates where tenant_id = $1 and id = $2 for update`,
+      [tx.tenantId, estimateId],
+    )
+  ).rows[0];
   if (!est) throw notFound('estimate');
   const variants = (est.result as { variants?: StoredVariant[] } | null)?.variants ?? [];
-  if (!variants.length) throw conflict('This estimate has no saved prices yet. Choose finishes and save the estimate first.', [{ field: 'estimateId', message: 'Save the estimate with prices first.' }]);
+  if (!variants.length)
+    throw conflict('This estimate has no saved prices yet. Choose finishes and save the estimate first.', [
+      { field: 'estimateId', message: 'Save the estimate with prices first.' },
+    ]);
 
-  const firm = (await tx.client.query(`select name, address_line1, address_line2, city, region, postal_code, country, phone, time_zone, currency, units from firms where id = $1`, [tx.tenantId])).rows[0];
-  const client = (await tx.client.query(`select id, name, email, phone from clients where tenant_id = $1 and id = $2`, [tx.tenantId, est.client_id])).rows[0];
-  const site = (await tx.client.query(`select label, address_line1, address_line2, city, region, postal_code, year_built from sites where tenant_id = $1 and id = $2`, [tx.tenantId, est.site_id])).rows[0];
+  const firm = (
+    await tx.client.query(
+      `select name, address_line1, address_line2, city, region, postal_code, country, phone, time_zone, currency, units from firms where id = $1`,
+      [tx.tenantId],
+    )
+  ).rows[0];
+  const client = (
+    await tx.client.query(`select id, name, email, phone from clients where tenant_id = $1 and id = $2`, [tx.tenantId, est.client_id])
+  ).rows[0];
+  const site = (
+    await tx.client.query(
+      `select label, address_line1, address_line2, city, region, postal_code, year_built from sites where tenant_id = $1 and id = $2`,
+      [tx.tenantId, est.site_id],
+    )
+  ).rows[0];
   const roomIds = [...new Set(variants.flatMap((v) => v.result.surfaces.map((s) => s.roomId)))];
   const systemIds = [...new Set(variants.flatMap((v) => v.result.surfaces.map((s) => s.finishSystemId)))];
   // Archived finish systems and rooms still name what was priced.
-  const rooms = (await tx.client.query(`select id, name from rooms where tenant_id = $1 and id = any($2::uuid[]) order by position, created_at`, [tx.tenantId, roomIds])).rows;
-  const systems = (await tx.client.query(`select id, name from finish_systems where tenant_id = $1 and id = any($2::uuid[])`, [tx.tenantId, systemIds])).rows;
+  const rooms = (
+    await tx.client.query(`select id, name from rooms where tenant_id = $1 and id = any($2::uuid[]) order by position, created_at`, [
+      tx.tenantId,
+      roomIds,
+    ])
+  ).rows;
+  const systems = (
+    await tx.client.query(`select id, name from finish_systems where tenant_id = $1 and id = any($2::uuid[])`, [tx.tenantId, systemIds])
+  ).rows;
   return {
     estimate: { id: est.id, title: est.title, status: est.status, startDate: est.start_date, variants },
-    firm: { name: firm.name, addressLines: addressLines(firm), phone: firm.phone, timeZone: firm.time_zone, currency: firm.currency, country: firm.country, units: firm.units },
+    firm: {
+      name: firm.name,
+      addressLines: addressLines(firm),
+      phone: firm.phone,
+      timeZone: firm.time_zone,
+      currency: firm.currency,
+      country: firm.country,
+      units: firm.units,
+    },
     client: { id: client.id, name: client.name, email: client.email, phone: client.phone },
     site: { label: site.label, addressLines: addressLines(site), yearBuilt: site.year_built },
     roomNames: new Map(rooms.map((r, i) => [r.id as string, { name: r.name as string, position: i }])),

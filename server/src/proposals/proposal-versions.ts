@@ -70,7 +70,10 @@ const view = (r: Row): ProposalVersionView => ({
 });
 
 export async function getVersion(tx: TenantTx, id: string, lock = false): Promise<ProposalVersionView> {
-  const { rows } = await tx.client.query<Row>(`select ${COLUMNS} from proposal_versions where tenant_id = $1 and id = $2 ${lock ? 'for update' : ''}`, [tx.tenantId, id]);
+  const { rows } = await tx.client.query<Row>(
+    `select ${COLUMNS} from proposal_versions where tenant_id = $1 and id = $2 ${lock ? 'for update' : ''}`,
+    [tx.tenantId, id],
+  );
   if (!rows[0]) throw notFound('proposal');
   return view(rows[0]);
 }
@@ -93,7 +96,12 @@ function checkExpiry(expiresOn: string, today: string): void {
 function mergeTerms(base: ProposalTerms, change: Partial<ProposalTerms> | undefined): ProposalTerms {
   const terms = { ...base, ...change };
   if (terms.depositPercent + terms.progressPercent > 100) {
-    throw badRequest([{ field: 'terms.progressPercent', message: `The deposit and the progress payment add up to more than 100 % (${terms.depositPercent + terms.progressPercent} %).` }]);
+    throw badRequest([
+      {
+        field: 'terms.progressPercent',
+        message: `The deposit and the progress payment add up to more than 100 % (${terms.depositPercent + terms.progressPercent} %).`,
+      },
+    ]);
   }
   return terms;
 }
@@ -104,7 +112,8 @@ function snapshotFor(sources: ProposalSources, choice: Omit<ProposalChoice, 'dep
     const snapshot = buildSnapshot(sources, { ...choice, depositCap: depositCapRule(sources) });
     return { snapshot, hash: snapshotHash(snapshot) };
   } catch (error) {
-    if (error instanceof DomainInputError) throw badRequest([{ field: error.field, message: error.message }], `The payment schedule cannot be made: ${error.message}`);
+    if (error instanceof DomainInputError)
+      throw badRequest([{ field: error.field, message: error.message }], `The payment schedule cannot be made: ${error.message}`);
     throw error;
   }
 }
@@ -117,11 +126,23 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
   const sources = await loadProposalSources(tx, input.estimateId);
   const today = localDate(sources.firm.timeZone, now);
   checkExpiry(input.expiresOn, today);
-  const accepted = await tx.client.query(`select 1 from proposal_versions where tenant_id = $1 and estimate_id = $2 and status = 'accepted'`, [tx.tenantId, input.estimateId]);
+  const accepted = await tx.client.query(
+    `select 1 from proposal_versions where tenant_id = $1 and estimate_id = $2 and status = 'accepted'`,
+    [tx.tenantId, input.estimateId],
+  );
   if (accepted.rowCount) throw conflict('A version of this proposal was accepted. Changes now go through a change order.');
   const terms = mergeTerms(DEFAULT_PROPOSAL_TERMS, input.terms);
-  const { snapshot, hash } = snapshotFor(sources, { issuedOn: today, expiresOn: input.expiresOn, terms, exclusions: input.exclusions ?? [], notes: input.notes ?? '' });
-  await tx.client.query(`update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status = 'draft'`, [tx.tenantId, input.estimateId]);
+  const { snapshot, hash } = snapshotFor(sources, {
+    issuedOn: today,
+    expiresOn: input.expiresOn,
+    terms,
+    exclusions: input.exclusions ?? [],
+    notes: input.notes ?? '',
+  });
+  await tx.client.query(
+    `update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status = 'draft'`,
+    [tx.tenantId, input.estimateId],
+  );
   const { rows } = await tx.client.query<{ id: string; version: number }>(
     `insert into proposal_versions (tenant_id, estimate_id, version, status, snapshot, snapshot_hash, expires_on, created_by)
      select $1, $2, coalesce(max(version), 0) + 1, 'draft', $3, $4, $5, $6 from proposal_versions where tenant_id = $1 and estimate_id = $2
@@ -129,7 +150,14 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
     [tx.tenantId, input.estimateId, JSON.stringify(snapshot), hash, input.expiresOn, actorUserId],
   );
   const made = rows[0]!;
-  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'proposal.created', entity: 'proposal_version', entityId: made.id, data: { estimateId: input.estimateId, version: made.version, snapshotHash: hash } });
+  await recordAudit(tx, {
+    actorUserId,
+    actorKind: 'staff',
+    action: 'proposal.created',
+    entity: 'proposal_version',
+    entityId: made.id,
+    data: { estimateId: input.estimateId, version: made.version, snapshotHash: hash },
+  });
   return getVersion(tx, made.id);
 }
 
@@ -137,9 +165,16 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
  * Changes a draft: expiry, terms, exclusions, notes. The snapshot is rebuilt from the estimate's
  * current numbers. A sent (or decided) version is frozen: 409, make a new version instead.
  */
-export async function updateDraft(tx: TenantTx, actorUserId: string, id: string, change: ProposalUpdate, now: Date): Promise<ProposalVersionView> {
+export async function updateDraft(
+  tx: TenantTx,
+  actorUserId: string,
+  id: string,
+  change: ProposalUpdate,
+  now: Date,
+): Promise<ProposalVersionView> {
   const current = await getVersion(tx, id, true);
-  if (current.status !== 'draft') throw conflict(`Version ${current.version} is ${current.status.replace('_', ' ')} and cannot change. Make a new version instead.`);
+  if (current.status !== 'draft')
+    throw conflict(`Version ${current.version} is ${current.status.replace('_', ' ')} and cannot change. Make a new version instead.`);
   const sources = await loadProposalSources(tx, current.estimateId);
   const today = localDate(sources.firm.timeZone, now);
   const expiresOn = change.expiresOn ?? current.expiresOn;
@@ -152,7 +187,17 @@ export async function updateDraft(tx: TenantTx, actorUserId: string, id: string,
     exclusions: change.exclusions ?? prev.exclusions,
     notes: change.notes ?? prev.notes,
   });
-  await tx.client.query(`update proposal_versions set snapshot = $3, snapshot_hash = $4, expires_on = $5 where tenant_id = $1 and id = $2`, [tx.tenantId, id, JSON.stringify(snapshot), hash, expiresOn]);
-  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'proposal.updated', entity: 'proposal_version', entityId: id, data: { version: current.version, snapshotHash: hash } });
+  await tx.client.query(
+    `update proposal_versions set snapshot = $3, snapshot_hash = $4, expires_on = $5 where tenant_id = $1 and id = $2`,
+    [tx.tenantId, id, JSON.stringify(snapshot), hash, expiresOn],
+  );
+  await recordAudit(tx, {
+    actorUserId,
+    actorKind: 'staff',
+    action: 'proposal.updated',
+    entity: 'proposal_version',
+    entityId: id,
+    data: { version: current.version, snapshotHash: hash },
+  });
   return getVersion(tx, id);
 }

@@ -23,15 +23,30 @@ const sum = (amounts: string[]) => amounts.reduce((a, b) => a.plus(b), new Decim
 describe('proposal versions', () => {
   it('makes numbered drafts from the saved estimate, superseding the older draft, with a stable recorded hash', async () => {
     const f = await firmWithPricedEstimate(t, 'Kiln Lane Plaster');
-    const v1 = await propose(f, { exclusions: ['Repairing cracked plaster', 'Moving furniture'], notes: 'Colours as on the approved sample board.' });
+    const v1 = await propose(f, {
+      exclusions: ['Repairing cracked plaster', 'Moving furniture'],
+      notes: 'Colours as on the approved sample board.',
+    });
     expect(v1.status).toBe(201);
-    expect(v1.body).toMatchObject({ version: 1, status: 'draft', estimateId: f.estimateId, title: 'Dining room plaster', expiresOn: '2026-12-31', sentAt: null });
+    expect(v1.body).toMatchObject({
+      version: 1,
+      status: 'draft',
+      estimateId: f.estimateId,
+      title: 'Dining room plaster',
+      expiresOn: '2026-12-31',
+      sentAt: null,
+    });
     expect(v1.body.snapshotHash).toBe(snapshotHash(v1.body.snapshot));
     expect(v1.body.snapshotHash).toMatch(/^[0-9a-f]{64}$/);
 
     const s = v1.body.snapshot;
     expect(s).toMatchObject({
-      title: 'Dining room plaster', issuedOn: '2026-12-01', expiresOn: '2026-12-31', currency: 'USD', locale: 'en-US', lengthUnit: 'ft',
+      title: 'Dining room plaster',
+      issuedOn: '2026-12-01',
+      expiresOn: '2026-12-31',
+      currency: 'USD',
+      locale: 'en-US',
+      lengthUnit: 'ft',
       firm: { name: 'Kiln Lane Plaster', addressLines: ['12 Kiln Lane', 'Ochreford, VT 05999'], phone: '+1 802 555 0142' },
       client: { name: 'Edwina Marl', email: f.clientEmail },
       site: { addressLines: ['1 Round Row', 'Ochreford'], yearBuilt: 1990 },
@@ -40,25 +55,54 @@ describe('proposal versions', () => {
       terms: { depositPercent: 30, progressPercent: 40, text: '' },
     });
     // DOMAIN.md §2.2: 2π·9·10 − 61 = 504.49 ft² of round walls.
-    expect(s.scope).toEqual([{
-      id: expect.any(String), name: 'Dining room',
-      surfaces: [{ id: f.surfaceId, name: 'Walls', measure: 'area', quantity: 504.5, unit: 'ft²', finishes: [{ optionId: 'A', finish: 'Polished lime plaster' }, { optionId: 'B', finish: 'Primed walls' }] }],
-    }]);
+    expect(s.scope).toEqual([
+      {
+        id: expect.any(String),
+        name: 'Dining room',
+        surfaces: [
+          {
+            id: f.surfaceId,
+            name: 'Walls',
+            measure: 'area',
+            quantity: 504.5,
+            unit: 'ft²',
+            finishes: [
+              { optionId: 'A', finish: 'Polished lime plaster' },
+              { optionId: 'B', finish: 'Primed walls' },
+            ],
+          },
+        ],
+      },
+    ]);
     // Option prices are the saved estimate's, at cents.
     const estimate = (await f.agent.get(`/api/estimates/${f.estimateId}`)).body;
     for (const [i, option] of s.options.entries()) {
       const price = estimate.result.variants[i].result.price;
-      expect(option).toMatchObject({ id: estimate.result.variants[i].id, price: new Decimal(price.price).toFixed(2), tax: new Decimal(price.tax).toFixed(2), total: new Decimal(price.total).toFixed(2) });
+      expect(option).toMatchObject({
+        id: estimate.result.variants[i].id,
+        price: new Decimal(price.price).toFixed(2),
+        tax: new Decimal(price.tax).toFixed(2),
+        total: new Decimal(price.total).toFixed(2),
+      });
       expect(new Decimal(option.tax).isZero()).toBe(false);
       // The payment schedule adds up to the option's total to the cent.
       expect(sum(option.payments.map((p: { amount: string }) => p.amount))).toBe(option.total);
     }
     const [a, b] = s.options;
-    expect(a.payments.map((p: { id: string; percent: number | null }) => [p.id, p.percent])).toEqual([['deposit', 30], ['progress', 40], ['final', null]]);
-    expect(a.payments[1]).toMatchObject({ label: 'Progress payment: Primer complete', trigger: { kind: 'layerComplete', layerId: 'prime' } });
+    expect(a.payments.map((p: { id: string; percent: number | null }) => [p.id, p.percent])).toEqual([
+      ['deposit', 30],
+      ['progress', 40],
+      ['final', null],
+    ]);
+    expect(a.payments[1]).toMatchObject({
+      label: 'Progress payment: Primer complete',
+      trigger: { kind: 'layerComplete', layerId: 'prime' },
+    });
     // 30 % and 40 % of the total, split to the cent by largest remainder (the domain's rule).
     expect(new Decimal(a.payments[0].amount).minus(new Decimal(a.total).times(0.3)).abs().lte('0.01')).toBe(true);
-    expect(new Decimal(a.payments[0].amount).plus(a.payments[1].amount).toFixed(2)).toBe(new Decimal(a.total).times(0.7).toDecimalPlaces(2, Decimal.ROUND_HALF_UP).toFixed(2));
+    expect(new Decimal(a.payments[0].amount).plus(a.payments[1].amount).toFixed(2)).toBe(
+      new Decimal(a.total).times(0.7).toDecimalPlaces(2, Decimal.ROUND_HALF_UP).toFixed(2),
+    );
     // A one-layer option has no base-layer milestone before completion: deposit, then the rest.
     expect(b.payments.map((p: { id: string }) => p.id)).toEqual(['deposit', 'final']);
     expect(a.schedule).toMatchObject({ startDate: '2026-12-07', workingDays: expect.any(Number) });
@@ -68,18 +112,27 @@ describe('proposal versions', () => {
     expect(s.safety.standing).toBe(STANDING_LINE);
     expect(s.safety.cautions.map((c: { id: string }) => c.id)).toContain('lime-alkali');
 
-    const v2 = await propose(f, { exclusions: ['Repairing cracked plaster', 'Moving furniture'], notes: 'Colours as on the approved sample board.' });
+    const v2 = await propose(f, {
+      exclusions: ['Repairing cracked plaster', 'Moving furniture'],
+      notes: 'Colours as on the approved sample board.',
+    });
     expect(v2.body.version).toBe(2);
     // Same content, same day: the same hash, whatever order jsonb returns the keys in.
     expect(v2.body.snapshotHash).toBe(v1.body.snapshotHash);
     const list = await f.agent.get(`/api/proposals?estimateId=${f.estimateId}`);
-    expect(list.body.items.map((v: { version: number; status: string }) => [v.version, v.status])).toEqual([[2, 'draft'], [1, 'superseded']]);
+    expect(list.body.items.map((v: { version: number; status: string }) => [v.version, v.status])).toEqual([
+      [2, 'draft'],
+      [1, 'superseded'],
+    ]);
     const v3 = await propose(f, { terms: { depositPercent: 50, progressPercent: 0 } });
     expect(v3.body.snapshotHash).not.toBe(v2.body.snapshotHash);
     expect(v3.body.snapshot.options[0].payments.map((p: { id: string }) => p.id)).toEqual(['deposit', 'final']);
 
     const audit = await withTenant(t.ctx.pool, f.firmId, (tx) =>
-      tx.client.query(`select data from audit_log where tenant_id = $1 and action = 'proposal.created' and entity_id = $2`, [tx.tenantId, v1.body.id]),
+      tx.client.query(`select data from audit_log where tenant_id = $1 and action = 'proposal.created' and entity_id = $2`, [
+        tx.tenantId,
+        v1.body.id,
+      ]),
     );
     expect(audit.rows[0].data).toMatchObject({ version: 1, snapshotHash: v1.body.snapshotHash });
   });
@@ -106,11 +159,14 @@ describe('proposal versions', () => {
   it('draws the PDF from the snapshot: firm, title, prices, payments, safety line and reference', async () => {
     const f = await firmWithPricedEstimate(t, 'Verdigris & Umber Finishes');
     const v = (await propose(f, { exclusions: ['Repairing cracked plaster'], terms: { text: 'Invoices are due on receipt.' } })).body;
-    const res = await f.agent.get(`/api/proposals/${v.id}/pdf`).buffer(true).parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
+    const res = await f.agent
+      .get(`/api/proposals/${v.id}/pdf`)
+      .buffer(true)
+      .parse((r, done) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => done(null, Buffer.concat(chunks)));
+      });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     expect(res.headers['content-disposition']).toBe('attachment; filename="proposal-dining-room-plaster-v1.pdf"');
@@ -137,9 +193,16 @@ describe('sending a proposal', () => {
   it('freezes the version, opens a portal account and e-mails a one-time link once, even if the job runs twice', async () => {
     const f = await firmWithPricedEstimate(t, 'Lime Lantern Studio');
     const v = (await propose(f)).body;
-    const edited = await f.agent.patch(`/api/proposals/${v.id}`).set('x-csrf-token', f.csrf()).send({ expiresOn: '2027-01-15', exclusions: ['Moving furniture'] });
+    const edited = await f.agent
+      .patch(`/api/proposals/${v.id}`)
+      .set('x-csrf-token', f.csrf())
+      .send({ expiresOn: '2027-01-15', exclusions: ['Moving furniture'] });
     expect(edited.status).toBe(200);
-    expect(edited.body).toMatchObject({ version: 1, expiresOn: '2027-01-15', snapshot: { expiresOn: '2027-01-15', exclusions: ['Moving furniture'] } });
+    expect(edited.body).toMatchObject({
+      version: 1,
+      expiresOn: '2027-01-15',
+      snapshot: { expiresOn: '2027-01-15', exclusions: ['Moving furniture'] },
+    });
     expect(edited.body.snapshotHash).toBe(snapshotHash(edited.body.snapshot));
 
     const sent = await post(f, `/api/proposals/${v.id}/send`);
@@ -156,10 +219,15 @@ describe('sending a proposal', () => {
 
     // The link signs the client in to this firm's portal as this client.
     const c = await newAgent(t.app, 'portal');
-    const signedIn = await c.agent.post('/api/portal/auth/redeem').set('x-csrf-token', c.csrf()).send({ token: url.searchParams.get('token') });
+    const signedIn = await c.agent
+      .post('/api/portal/auth/redeem')
+      .set('x-csrf-token', c.csrf())
+      .send({ token: url.searchParams.get('token') });
     expect(signedIn.status).toBe(200);
     expect(signedIn.body.client).toMatchObject({ email: f.clientEmail, firmName: 'Lime Lantern Studio' });
-    const account = await withTenant(t.ctx.pool, f.firmId, (tx) => tx.client.query(`select client_id from portal_users where tenant_id = $1 and email = $2`, [tx.tenantId, f.clientEmail]));
+    const account = await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(`select client_id from portal_users where tenant_id = $1 and email = $2`, [tx.tenantId, f.clientEmail]),
+    );
     expect(account.rows).toEqual([{ client_id: f.clientId }]);
 
     // The mail job runs again: the outbox row is already sent, nothing goes out twice.
@@ -183,9 +251,17 @@ describe('sending a proposal', () => {
     const v2 = (await propose(f)).body;
     expect((await post(f, `/api/proposals/${v2.id}/send`)).status).toBe(200);
     const list = (await f.agent.get(`/api/proposals?estimateId=${f.estimateId}`)).body.items;
-    expect(list.map((x: { version: number; status: string }) => [x.version, x.status])).toEqual([[2, 'sent'], [1, 'superseded']]);
+    expect(list.map((x: { version: number; status: string }) => [x.version, x.status])).toEqual([
+      [2, 'sent'],
+      [1, 'superseded'],
+    ]);
 
-    const audit = await withTenant(t.ctx.pool, f.firmId, (tx) => tx.client.query(`select data from audit_log where tenant_id = $1 and action = 'proposal.sent' and entity_id = $2`, [tx.tenantId, v.id]));
+    const audit = await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(`select data from audit_log where tenant_id = $1 and action = 'proposal.sent' and entity_id = $2`, [
+        tx.tenantId,
+        v.id,
+      ]),
+    );
     expect(audit.rows[0].data).toMatchObject({ version: 1, snapshotHash: edited.body.snapshotHash, to: f.clientEmail });
   });
 

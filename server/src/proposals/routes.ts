@@ -1,4 +1,12 @@
-import { estimateCreate, estimateInputs, estimateListQuery, uuid, type EstimateListItem, type EstimateView, type KeysetPage } from '@layerbook/contracts';
+import {
+  estimateCreate,
+  estimateInputs,
+  estimateListQuery,
+  uuid,
+  type EstimateListItem,
+  type EstimateView,
+  type KeysetPage,
+} from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
@@ -19,7 +27,9 @@ export function estimateRoutes(ctx: AppContext): Router {
   });
 
   router.post('/', async (req, res) => {
-    const made = await withStaff(ctx, req, 'office', async (tx, staff) => getEstimate(tx, await createEstimate(tx, staffActor(staff), parse(estimateCreate, req.body))));
+    const made = await withStaff(ctx, req, 'office', async (tx, staff) =>
+      getEstimate(tx, await createEstimate(tx, staffActor(staff), parse(estimateCreate, req.body))),
+    );
     res.status(201).json(made satisfies EstimateView);
   });
 

@@ -20,12 +20,22 @@ export const PROPOSAL_LINK_DAYS = 3;
  */
 export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: string, id: string): Promise<ProposalVersionView> {
   const version = await getVersion(tx, id, true);
-  if (version.status !== 'draft') throw conflict(`Version ${version.version} is ${version.status.replace('_', ' ')}; only a draft can be sent. Make a new version instead.`);
-  const est = (await tx.client.query(`select client_id from estimates where tenant_id = $1 and id = $2 for update`, [tx.tenantId, version.estimateId])).rows[0]!;
+  if (version.status !== 'draft')
+    throw conflict(
+      `Version ${version.version} is ${version.status.replace('_', ' ')}; only a draft can be sent. Make a new version instead.`,
+    );
+  const est = (
+    await tx.client.query(`select client_id from estimates where tenant_id = $1 and id = $2 for update`, [tx.tenantId, version.estimateId])
+  ).rows[0]!;
   const firm = (await tx.client.query(`select name, time_zone from firms where id = $1`, [tx.tenantId])).rows[0]!;
   const today = localDate(firm.time_zone, ctx.now());
-  if (version.expiresOn <= today) throw conflict('The offer would expire before it is read. Choose a later expiry date.', [{ field: 'expiresOn', message: `Choose a day after today (${today}).` }]);
-  const client = (await tx.client.query(`select id, name, email from clients where tenant_id = $1 and id = $2`, [tx.tenantId, est.client_id])).rows[0]!;
+  if (version.expiresOn <= today)
+    throw conflict('The offer would expire before it is read. Choose a later expiry date.', [
+      { field: 'expiresOn', message: `Choose a day after today (${today}).` },
+    ]);
+  const client = (
+    await tx.client.query(`select id, name, email from clients where tenant_id = $1 and id = $2`, [tx.tenantId, est.client_id])
+  ).rows[0]!;
   const account = await ensurePortalAccount(tx, client);
 
   const sentAt = ctx.now();
@@ -33,8 +43,14 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
     `update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status in ('sent', 'changes_requested') and id <> $3`,
     [tx.tenantId, version.estimateId, id],
   );
-  await tx.client.query(`update proposal_versions set status = 'sent', sent_at = $3 where tenant_id = $1 and id = $2 and status = 'draft'`, [tx.tenantId, id, sentAt]);
-  await tx.client.query(`update estimates set status = 'proposed', updated_at = $3 where tenant_id = $1 and id = $2 and status <> 'accepted'`, [tx.tenantId, version.estimateId, sentAt]);
+  await tx.client.query(
+    `update proposal_versions set status = 'sent', sent_at = $3 where tenant_id = $1 and id = $2 and status = 'draft'`,
+    [tx.tenantId, id, sentAt],
+  );
+  await tx.client.query(
+    `update estimates set status = 'proposed', updated_at = $3 where tenant_id = $1 and id = $2 and status <> 'accepted'`,
+    [tx.tenantId, version.estimateId, sentAt],
+  );
 
   const { token } = await createPortalLink(tx, account.id, sentAt, PROPOSAL_LINK_DAYS * 24 * 60);
   const base = ctx.config.PUBLIC_URL;
@@ -48,12 +64,21 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
       clientName: client.name,
       title: snap.title,
       version: version.version,
-      expiresOn: new Intl.DateTimeFormat(snap.locale, { dateStyle: 'long', timeZone: 'UTC' }).format(new Date(`${snap.expiresOn}T00:00:00Z`)),
+      expiresOn: new Intl.DateTimeFormat(snap.locale, { dateStyle: 'long', timeZone: 'UTC' }).format(
+        new Date(`${snap.expiresOn}T00:00:00Z`),
+      ),
       url: `${base}/portal/sign-in/link?token=${token}&next=/portal/proposals/${id}`,
       linkDays: PROPOSAL_LINK_DAYS,
       portalUrl: `${base}/portal/sign-in`,
     }),
   });
-  await recordAudit(tx, { actorUserId, actorKind: 'staff', action: 'proposal.sent', entity: 'proposal_version', entityId: id, data: { version: version.version, snapshotHash: version.snapshotHash, to: account.email } });
+  await recordAudit(tx, {
+    actorUserId,
+    actorKind: 'staff',
+    action: 'proposal.sent',
+    entity: 'proposal_version',
+    entityId: id,
+    data: { version: version.version, snapshotHash: version.snapshotHash, to: account.email },
+  });
   return getVersion(tx, id);
 }

@@ -36,7 +36,13 @@ interface DueRow {
  * E-mails each person the open inquiries whose follow-up is due or overdue: their own, and the
  * unassigned ones to the owners and office. Safe to run twice: one outbox row per person per day.
  */
-export async function sendFollowUpDigest(pool: Pool, queue: StartedQueue, config: Config, job: FollowUpDigestJob, logger: Logger): Promise<void> {
+export async function sendFollowUpDigest(
+  pool: Pool,
+  queue: StartedQueue,
+  config: Config,
+  job: FollowUpDigestJob,
+  logger: Logger,
+): Promise<void> {
   await withTenant(pool, job.tenantId, async (tx) => {
     const { rows: due } = await tx.client.query<DueRow>(
       `select contact_name, next_follow_up::text as next_follow_up, assignee_user_id from inquiries

@@ -26,16 +26,30 @@ it('two web and two worker processes share one database without double work', as
   for (const [i, email] of emails.entries()) {
     const app = i % 2 ? b.app : a.app;
     const token = (await request(app).get('/api/auth/session').set('cookie', cookie)).body.csrfToken;
-    const res = await request(app).post('/api/team/invitations').set('cookie', cookie).set('x-csrf-token', token).send({ email, role: 'crew' });
+    const res = await request(app)
+      .post('/api/team/invitations')
+      .set('cookie', cookie)
+      .set('x-csrf-token', token)
+      .send({ email, role: 'crew' });
     expect(res.status).toBe(201);
   }
   const arrived = (email: string) => [...a.inbox.messages, ...b.inbox.messages].filter((m) => JSON.stringify(m.to).includes(email)).length;
-  await Promise.all(emails.map((email) => Promise.race([a.inbox.waitFor((m) => JSON.stringify(m.to).includes(email)), b.inbox.waitFor((m) => JSON.stringify(m.to).includes(email))])));
+  await Promise.all(
+    emails.map((email) =>
+      Promise.race([
+        a.inbox.waitFor((m) => JSON.stringify(m.to).includes(email)),
+        b.inbox.waitFor((m) => JSON.stringify(m.to).includes(email)),
+      ]),
+    ),
+  );
   // Let any duplicate that was going to happen arrive: another round of jobs through both workers.
   const marker = uniqueEmail('marker');
   const token = (await request(a.app).get('/api/auth/session').set('cookie', cookie)).body.csrfToken;
   await request(a.app).post('/api/team/invitations').set('cookie', cookie).set('x-csrf-token', token).send({ email: marker, role: 'crew' });
-  await Promise.race([a.inbox.waitFor((m) => JSON.stringify(m.to).includes(marker)), b.inbox.waitFor((m) => JSON.stringify(m.to).includes(marker))]);
+  await Promise.race([
+    a.inbox.waitFor((m) => JSON.stringify(m.to).includes(marker)),
+    b.inbox.waitFor((m) => JSON.stringify(m.to).includes(marker)),
+  ]);
   expect(emails.map(arrived)).toEqual(emails.map(() => 1));
   // Both processes' workers took part.
   expect(a.inbox.messages.length).toBeGreaterThan(0);

@@ -16,7 +16,12 @@ export interface Workers {
  * pg-boss 10 polls once per interval per worker, whatever it found; several workers per queue in one
  * process give concurrency, each handling one job so a failure retries only that job.
  */
-async function workEach<T extends object>(boss: StartedQueue['boss'], name: string, workers: number, handle: (data: T) => Promise<unknown>): Promise<void> {
+async function workEach<T extends object>(
+  boss: StartedQueue['boss'],
+  name: string,
+  workers: number,
+  handle: (data: T) => Promise<unknown>,
+): Promise<void> {
   for (let i = 0; i < workers; i++) {
     await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: 0.5 }, async ([job]) => {
       if (job) await handle(job.data);
@@ -25,7 +30,12 @@ async function workEach<T extends object>(boss: StartedQueue['boss'], name: stri
 }
 
 /** Registers every job handler. Runs in the web process by default, or alone in `worker` mode. */
-export async function startWorkers(config: Config, queue: StartedQueue, logger: Logger, now: () => Date = () => new Date()): Promise<Workers> {
+export async function startWorkers(
+  config: Config,
+  queue: StartedQueue,
+  logger: Logger,
+  now: () => Date = () => new Date(),
+): Promise<Workers> {
   const pool = new Pool({ connectionString: config.DATABASE_JOBS_URL, max: 4, application_name: 'layerbook-worker' });
   const transport = nodemailer.createTransport({ host: config.SMTP_HOST, port: config.SMTP_PORT, secure: false, ignoreTLS: true });
   const { boss } = queue;

@@ -31,7 +31,11 @@ export const BOARD_PHOTOS: PhotoAlbum = {
 /** The photos of these boards, grouped by board, in the order they were added. */
 export async function boardPhotosOf(tx: TenantTx, boardIds: readonly string[]): Promise<Map<string, BoardPhotoView[]>> {
   const byBoard = new Map<string, BoardPhotoView[]>();
-  for (const [boardId, views] of await listPhotos(tx, BOARD_PHOTOS, boardIds)) byBoard.set(boardId, views.map((view) => ({ ...view, boardId })));
+  for (const [boardId, views] of await listPhotos(tx, BOARD_PHOTOS, boardIds))
+    byBoard.set(
+      boardId,
+      views.map((view) => ({ ...view, boardId })),
+    );
   return byBoard;
 }
 
@@ -41,10 +45,17 @@ export async function listBoardPhotos(tx: TenantTx, boardId: string): Promise<Bo
 }
 
 /** Writes the file row and links it to the board in one transaction; the bytes are already stored. */
-export async function addBoardPhoto(tx: TenantTx, actor: Actor, boardId: string, caption: string, stored: StoredImage): Promise<BoardPhotoView> {
+export async function addBoardPhoto(
+  tx: TenantTx,
+  actor: Actor,
+  boardId: string,
+  caption: string,
+  stored: StoredImage,
+): Promise<BoardPhotoView> {
   // Locked, so a client's approval cannot slip in between this check and the insert.
   const board = await findBoard(tx, boardId, true);
-  if (board.status === 'approved') throw conflict('The client approved this board with its photos; start a new board or round to show different ones.');
+  if (board.status === 'approved')
+    throw conflict('The client approved this board with its photos; start a new board or round to show different ones.');
   const view = await addPhoto(tx, BOARD_PHOTOS, actor, { id: boardId, about: { label: board.label, round: board.round } }, caption, stored);
   return { ...view, boardId };
 }

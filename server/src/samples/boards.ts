@@ -13,7 +13,10 @@ export type BoardRow = typeof sampleBoards.$inferSelect;
 
 /** The board, or the same 404 whether it never existed or belongs to another firm (RLS). */
 export async function findBoard(tx: TenantTx, boardId: string, lock = false): Promise<BoardRow> {
-  const query = tx.db.select().from(sampleBoards).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId)));
+  const query = tx.db
+    .select()
+    .from(sampleBoards)
+    .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId)));
   const row = (lock ? await query.for('update') : await query)[0];
   if (!row) throw notFound('sample board');
   return row;
@@ -22,8 +25,18 @@ export async function findBoard(tx: TenantTx, boardId: string, lock = false): Pr
 export async function listBoards(tx: TenantTx, filter: { clientId?: string; siteId?: string }): Promise<SampleBoardListItem[]> {
   // One query with the first photo and the count per board: the list shows a thumbnail per row.
   const { rows } = await tx.client.query<{
-    id: string; label: string; client_id: string; client_name: string; site_id: string | null; round: number; status: SampleBoardListItem['status'];
-    finish_name: string | null; photo_count: number; cover_file_id: string | null; decided_at: Date | null; created_at: Date;
+    id: string;
+    label: string;
+    client_id: string;
+    client_name: string;
+    site_id: string | null;
+    round: number;
+    status: SampleBoardListItem['status'];
+    finish_name: string | null;
+    photo_count: number;
+    cover_file_id: string | null;
+    decided_at: Date | null;
+    created_at: Date;
   }>(
     `select b.id, b.label, b.client_id, c.name as client_name, b.site_id, b.round, b.status,
             b.finish_snapshot->>'systemName' as finish_name,
@@ -54,12 +67,27 @@ export async function listBoards(tx: TenantTx, filter: { clientId?: string; site
 
 export async function getBoard(tx: TenantTx, boardId: string): Promise<SampleBoardView> {
   const board = await findBoard(tx, boardId);
-  const client = (await tx.db.select({ name: clients.name }).from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, board.clientId))))[0];
+  const client = (
+    await tx.db
+      .select({ name: clients.name })
+      .from(clients)
+      .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, board.clientId)))
+  )[0];
   const site = board.siteId
-    ? (await tx.db.select().from(sites).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, board.siteId))))[0]
+    ? (
+        await tx.db
+          .select()
+          .from(sites)
+          .where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, board.siteId)))
+      )[0]
     : undefined;
   const decidedBy = board.decidedBy
-    ? (await tx.db.select({ name: portalUsers.name }).from(portalUsers).where(and(eq(portalUsers.tenantId, tx.tenantId), eq(portalUsers.id, board.decidedBy))))[0]
+    ? (
+        await tx.db
+          .select({ name: portalUsers.name })
+          .from(portalUsers)
+          .where(and(eq(portalUsers.tenantId, tx.tenantId), eq(portalUsers.id, board.decidedBy)))
+      )[0]
     : undefined;
   const snapshot = board.finishSnapshot as FinishSnapshot | null;
   return {
@@ -87,16 +115,35 @@ export async function getBoard(tx: TenantTx, boardId: string): Promise<SampleBoa
 }
 
 /** The client, site and estimate must be this firm's and belong together; each refusal names its field. */
-async function checkLinks(tx: TenantTx, input: { clientId: string; siteId?: string | undefined; estimateId?: string | undefined }): Promise<void> {
-  const client = (await tx.db.select({ id: clients.id }).from(clients).where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, input.clientId))))[0];
+async function checkLinks(
+  tx: TenantTx,
+  input: { clientId: string; siteId?: string | undefined; estimateId?: string | undefined },
+): Promise<void> {
+  const client = (
+    await tx.db
+      .select({ id: clients.id })
+      .from(clients)
+      .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, input.clientId)))
+  )[0];
   if (!client) throw badRequest([{ field: 'clientId', message: 'Choose one of your clients.' }]);
   if (input.siteId) {
-    const site = (await tx.db.select({ clientId: sites.clientId }).from(sites).where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, input.siteId))))[0];
+    const site = (
+      await tx.db
+        .select({ clientId: sites.clientId })
+        .from(sites)
+        .where(and(eq(sites.tenantId, tx.tenantId), eq(sites.id, input.siteId)))
+    )[0];
     if (!site || site.clientId !== input.clientId) throw badRequest([{ field: 'siteId', message: 'Choose a site of this client.' }]);
   }
   if (input.estimateId) {
-    const est = (await tx.db.select({ clientId: estimates.clientId }).from(estimates).where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, input.estimateId))))[0];
-    if (!est || est.clientId !== input.clientId) throw badRequest([{ field: 'estimateId', message: 'Choose an estimate for this client.' }]);
+    const est = (
+      await tx.db
+        .select({ clientId: estimates.clientId })
+        .from(estimates)
+        .where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, input.estimateId)))
+    )[0];
+    if (!est || est.clientId !== input.clientId)
+      throw badRequest([{ field: 'estimateId', message: 'Choose an estimate for this client.' }]);
   }
 }
 
@@ -118,11 +165,24 @@ export async function createBoard(tx: TenantTx, actor: Actor, input: SampleBoard
       })
       .returning()
   )[0]!;
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'samples.board_created', entity: 'sample_board', entityId: row.id, data: { label: row.label, clientId: row.clientId, finishSystemId: row.finishSystemId } });
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'samples.board_created',
+    entity: 'sample_board',
+    entityId: row.id,
+    data: { label: row.label, clientId: row.clientId, finishSystemId: row.finishSystemId },
+  });
   return getBoard(tx, row.id);
 }
 
-export async function updateBoard(tx: TenantTx, actor: Actor, boardId: string, input: SampleBoardUpdate, now: Date): Promise<SampleBoardView> {
+export async function updateBoard(
+  tx: TenantTx,
+  actor: Actor,
+  boardId: string,
+  input: SampleBoardUpdate,
+  now: Date,
+): Promise<SampleBoardView> {
   const board = await findBoard(tx, boardId);
   if (board.status === 'approved') throw conflict('The client has approved this board; it is now the control sample and stays as it was.');
   const changes: Partial<typeof sampleBoards.$inferInsert> = { updatedAt: now };
@@ -130,21 +190,51 @@ export async function updateBoard(tx: TenantTx, actor: Actor, boardId: string, i
   if (input.notes !== undefined) changes.notes = input.notes;
   if (input.finishSystemId !== undefined) {
     // What the client has seen stays what they saw: the finish is chosen again only on a draft.
-    if (board.status !== 'draft') throw conflict('The client has seen this board, so its finish stays as shown. Start the next round to change it.', [{ field: 'finishSystemId', message: 'The finish of a shown board cannot change.' }]);
+    if (board.status !== 'draft')
+      throw conflict('The client has seen this board, so its finish stays as shown. Start the next round to change it.', [
+        { field: 'finishSystemId', message: 'The finish of a shown board cannot change.' },
+      ]);
     changes.finishSystemId = input.finishSystemId;
     changes.finishSnapshot = input.finishSystemId ? await snapshotFinish(tx, input.finishSystemId, now) : null;
   }
-  await tx.db.update(sampleBoards).set(changes).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId)));
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'samples.board_updated', entity: 'sample_board', entityId: boardId, data: { fields: Object.keys(input) } });
+  await tx.db
+    .update(sampleBoards)
+    .set(changes)
+    .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId)));
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'samples.board_updated',
+    entity: 'sample_board',
+    entityId: boardId,
+    data: { fields: Object.keys(input) },
+  });
   return getBoard(tx, boardId);
 }
 
-export async function showBoard(tx: TenantTx, ctx: AppContext, actor: Actor, firmName: string, boardId: string, now: Date): Promise<SampleBoardView> {
+export async function showBoard(
+  tx: TenantTx,
+  ctx: AppContext,
+  actor: Actor,
+  firmName: string,
+  boardId: string,
+  now: Date,
+): Promise<SampleBoardView> {
   const board = await findBoard(tx, boardId);
   if (board.status !== 'draft') throw conflict('This board has already been shown to the client.');
-  await tx.db.update(sampleBoards).set({ status: 'shown', updatedAt: now }).where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId), eq(sampleBoards.status, 'draft')));
+  await tx.db
+    .update(sampleBoards)
+    .set({ status: 'shown', updatedAt: now })
+    .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId), eq(sampleBoards.status, 'draft')));
   const recipients = await mailBoardShown(tx, ctx, { board, firmName });
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'samples.board_shown', entity: 'sample_board', entityId: boardId, data: { label: board.label, round: board.round, mailedTo: recipients } });
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'samples.board_shown',
+    entity: 'sample_board',
+    entityId: boardId,
+    data: { label: board.label, round: board.round, mailedTo: recipients },
+  });
   return getBoard(tx, boardId);
 }
 
@@ -181,6 +271,13 @@ export async function startNextRound(tx: TenantTx, actor: Actor, boardId: string
       })
       .returning()
   )[0]!;
-  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'samples.round_started', entity: 'sample_board', entityId: row.id, data: { previousBoardId: board.id, round: row.round } });
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'samples.round_started',
+    entity: 'sample_board',
+    entityId: row.id,
+    data: { previousBoardId: board.id, round: row.round },
+  });
   return getBoard(tx, row.id);
 }

@@ -1,4 +1,10 @@
-import { CLIENT_BOARD_STATUSES, type ClientBoardStatus, type ClientBoardView, type FinishSnapshot, type PhotoThumbnail } from '@layerbook/contracts';
+import {
+  CLIENT_BOARD_STATUSES,
+  type ClientBoardStatus,
+  type ClientBoardView,
+  type FinishSnapshot,
+  type PhotoThumbnail,
+} from '@layerbook/contracts';
 import { and, asc, eq, inArray, portalUsers, sampleBoards, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { AppContext } from '../context';
@@ -18,7 +24,12 @@ const portalThumbnail = (photoId: string) => `/api/portal/boards/photos/${photoI
 
 /** The client record this portal login belongs to; a login with none sees no boards. */
 async function clientRecordOf(tx: TenantTx, client: ClientPrincipal): Promise<string | null> {
-  const row = (await tx.db.select({ clientId: portalUsers.clientId }).from(portalUsers).where(and(eq(portalUsers.tenantId, tx.tenantId), eq(portalUsers.id, client.id))))[0];
+  const row = (
+    await tx.db
+      .select({ clientId: portalUsers.clientId })
+      .from(portalUsers)
+      .where(and(eq(portalUsers.tenantId, tx.tenantId), eq(portalUsers.id, client.id)))
+  )[0];
   return row?.clientId ?? null;
 }
 
@@ -30,7 +41,14 @@ async function findClientBoard(tx: TenantTx, client: ClientPrincipal, boardId: s
         await tx.db
           .select()
           .from(sampleBoards)
-          .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId), eq(sampleBoards.clientId, clientId), inArray(sampleBoards.status, [...VISIBLE])))
+          .where(
+            and(
+              eq(sampleBoards.tenantId, tx.tenantId),
+              eq(sampleBoards.id, boardId),
+              eq(sampleBoards.clientId, clientId),
+              inArray(sampleBoards.status, [...VISIBLE]),
+            ),
+          )
       )[0]
     : undefined;
   if (!row) throw notFound('sample board');
@@ -73,7 +91,10 @@ export async function listClientBoards(tx: TenantTx, client: ClientPrincipal): P
     .from(sampleBoards)
     .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.clientId, clientId), inArray(sampleBoards.status, [...VISIBLE])))
     .orderBy(asc(sampleBoards.label), asc(sampleBoards.round), asc(sampleBoards.createdAt));
-  const photos = await photosOf(tx, boards.map((b) => b.id));
+  const photos = await photosOf(
+    tx,
+    boards.map((b) => b.id),
+  );
   return boards.map((b) => toClientView(b, client, photos.get(b.id) ?? []));
 }
 
@@ -119,7 +140,7 @@ export async function decideBoard(
       .where(and(eq(sampleBoards.tenantId, tx.tenantId), eq(sampleBoards.id, boardId), eq(sampleBoards.status, 'shown')))
       .returning()
   )[0];
-  if (!updated) throw alreadyDecided((await findClientBoard(tx, client, boardId)));
+  if (!updated) throw alreadyDecided(await findClientBoard(tx, client, boardId));
   const actor = clientActor(client);
   await recordAudit(tx, {
     actorUserId: actor.userId,

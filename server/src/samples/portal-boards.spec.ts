@@ -27,11 +27,21 @@ describe('sample boards in the client portal', () => {
     expect(list.status).toBe(200);
     expect(list.body.items).toHaveLength(1);
     const item = list.body.items[0];
-    expect(item).toMatchObject({ id: board.id, label: 'Stair hall, board A', round: 1, status: 'shown', firmName: 'Umber & Lime', finishName: 'Antiqued glaze over primer', decidedAt: null });
+    expect(item).toMatchObject({
+      id: board.id,
+      label: 'Stair hall, board A',
+      round: 1,
+      status: 'shown',
+      firmName: 'Umber & Lime',
+      finishName: 'Antiqued glaze over primer',
+      decidedAt: null,
+    });
     expect(item.finishSteps[0]).toBe('1. Primer: Acrylic primer, rolled on, one coat.');
     // No recipe details, no staff file URLs.
     expect(JSON.stringify(item)).not.toMatch(/surfacePerUnit|\/api\/files\//);
-    expect(item.photos).toEqual([{ id: photo.id, caption: '', thumbnailUrl: `/api/portal/boards/photos/${photo.id}/thumbnail`, width: 64, height: 48 }]);
+    expect(item.photos).toEqual([
+      { id: photo.id, caption: '', thumbnailUrl: `/api/portal/boards/photos/${photo.id}/thumbnail`, width: 64, height: 48 },
+    ]);
 
     const thumb = await client.agent.get(item.photos[0].thumbnailUrl);
     expect(thumb.status).toBe(200);
@@ -67,9 +77,16 @@ describe('sample boards in the client portal', () => {
     expect((await f.agent.get(`/api/samples/${board.id}/photos`)).body.items).toEqual(staffView.photos);
     expect((await post(f, `/api/samples/${board.id}/next-round`)).status).toBe(409);
 
-    const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(f.email) && (m.subject ?? '').includes('approved the sample board'));
+    const mail = await t.inbox.waitFor(
+      (m) => JSON.stringify(m.to).includes(f.email) && (m.subject ?? '').includes('approved the sample board'),
+    );
     expect(mail.subject).toBe('Wren Halloway approved the sample board "Stair hall, board A" (round 1)');
-    const audit = await withTenant(t.ctx.pool, f.firmId, async (tx) => (await tx.client.query(`select actor_kind, action from audit_log where entity = 'sample_board' order by created_at`)).rows);
+    const audit = await withTenant(
+      t.ctx.pool,
+      f.firmId,
+      async (tx) =>
+        (await tx.client.query(`select actor_kind, action from audit_log where entity = 'sample_board' order by created_at`)).rows,
+    );
     expect(audit.at(-1)).toEqual({ actor_kind: 'client', action: 'samples.board_approved' });
   });
 
@@ -78,7 +95,9 @@ describe('sample boards in the client portal', () => {
     const empty = await post(client, `/api/portal/boards/${board.id}/request-changes`, { comment: '  ' });
     expect(empty.status).toBe(400);
     expect(empty.body.errors).toEqual([{ field: 'comment', message: 'Tell us what you would like changed.' }]);
-    const asked = await post(client, `/api/portal/boards/${board.id}/request-changes`, { comment: 'A little less glaze in the corners, please.' });
+    const asked = await post(client, `/api/portal/boards/${board.id}/request-changes`, {
+      comment: 'A little less glaze in the corners, please.',
+    });
     expect(asked.status).toBe(200);
     expect(asked.body).toMatchObject({ status: 'changes_requested', clientComment: 'A little less glaze in the corners, please.' });
     expect((await post(client, `/api/portal/boards/${board.id}/request-changes`, { comment: 'Again' })).status).toBe(409);
@@ -88,7 +107,15 @@ describe('sample boards in the client portal', () => {
 
     const next = await post(f, `/api/samples/${board.id}/next-round`);
     expect(next.status).toBe(201);
-    expect(next.body).toMatchObject({ label: 'Stair hall, board A', round: 2, status: 'draft', clientComment: '', decidedAt: null, photos: [], siteId: f.siteId });
+    expect(next.body).toMatchObject({
+      label: 'Stair hall, board A',
+      round: 2,
+      status: 'draft',
+      clientComment: '',
+      decidedAt: null,
+      photos: [],
+      siteId: f.siteId,
+    });
     const original = (await f.agent.get(`/api/samples/${board.id}`)).body;
     expect(next.body.finish).toEqual(original.finish);
     expect(original.hasNextRound).toBe(true);
@@ -96,8 +123,14 @@ describe('sample boards in the client portal', () => {
     // The new round is a draft: the client does not see it until it is shown.
     expect((await client.agent.get(`/api/portal/boards/${next.body.id}`)).status).toBe(404);
     expect((await post(f, `/api/samples/${next.body.id}/show`)).status).toBe(200);
-    const rounds = (await client.agent.get('/api/portal/boards')).body.items.map((b: { round: number; status: string }) => [b.round, b.status]);
-    expect(rounds).toEqual([[1, 'changes_requested'], [2, 'shown']]);
+    const rounds = (await client.agent.get('/api/portal/boards')).body.items.map((b: { round: number; status: string }) => [
+      b.round,
+      b.status,
+    ]);
+    expect(rounds).toEqual([
+      [1, 'changes_requested'],
+      [2, 'shown'],
+    ]);
   });
 
   it("answers 404 for another client's board, a draft, and another firm's board", async () => {

@@ -46,7 +46,9 @@ export function portalSampleRoutes(ctx: AppContext): Router {
   });
 
   router.get('/:id', async (req, res) => {
-    res.json((await withClient(ctx, req, (tx, client) => getClientBoard(tx, client, parse(boardParam, req.params).id))) satisfies ClientBoardView);
+    res.json(
+      (await withClient(ctx, req, (tx, client) => getClientBoard(tx, client, parse(boardParam, req.params).id))) satisfies ClientBoardView,
+    );
   });
 
   router.post('/:id/approve', async (req, res) => {
@@ -63,7 +65,14 @@ export function portalSampleRoutes(ctx: AppContext): Router {
   router.post('/:id/request-changes', async (req, res) => {
     res.json(
       await withClient(ctx, req, (tx, client) =>
-        decideBoard(tx, ctx, client, parse(boardParam, req.params).id, 'changes_requested', () => parse(sampleChangeRequest, req.body).comment),
+        decideBoard(
+          tx,
+          ctx,
+          client,
+          parse(boardParam, req.params).id,
+          'changes_requested',
+          () => parse(sampleChangeRequest, req.body).comment,
+        ),
       ),
     );
   });

@@ -1,4 +1,12 @@
-import { sampleBoardInput, sampleBoardListQuery, sampleBoardUpdate, uuid, type ItemList, type SampleBoardListItem, type SampleBoardView } from '@layerbook/contracts';
+import {
+  sampleBoardInput,
+  sampleBoardListQuery,
+  sampleBoardUpdate,
+  uuid,
+  type ItemList,
+  type SampleBoardListItem,
+  type SampleBoardView,
+} from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
@@ -37,7 +45,9 @@ export function sampleRoutes(ctx: AppContext): Router {
   });
 
   router.post('/', async (req, res) => {
-    const board = await withStaff(ctx, req, 'office', (tx, staff) => createBoard(tx, staffActor(staff), parse(sampleBoardInput, req.body), ctx.now()));
+    const board = await withStaff(ctx, req, 'office', (tx, staff) =>
+      createBoard(tx, staffActor(staff), parse(sampleBoardInput, req.body), ctx.now()),
+    );
     res.status(201).json(board satisfies SampleBoardView);
   });
 
@@ -53,12 +63,16 @@ export function sampleRoutes(ctx: AppContext): Router {
   });
 
   router.post('/:id/show', async (req, res) => {
-    const board = await withStaff(ctx, req, 'office', (tx, staff) => showBoard(tx, ctx, staffActor(staff), staff.firmName, parse(boardParam, req.params).id, ctx.now()));
+    const board = await withStaff(ctx, req, 'office', (tx, staff) =>
+      showBoard(tx, ctx, staffActor(staff), staff.firmName, parse(boardParam, req.params).id, ctx.now()),
+    );
     res.json(board satisfies SampleBoardView);
   });
 
   router.post('/:id/next-round', async (req, res) => {
-    const board = await withStaff(ctx, req, 'office', (tx, staff) => startNextRound(tx, staffActor(staff), parse(boardParam, req.params).id));
+    const board = await withStaff(ctx, req, 'office', (tx, staff) =>
+      startNextRound(tx, staffActor(staff), parse(boardParam, req.params).id),
+    );
     res.status(201).json(board satisfies SampleBoardView);
   });
 

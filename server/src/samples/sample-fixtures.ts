@@ -29,14 +29,28 @@ export async function addClient(o: Agent, name: string) {
   const email = uniqueEmail('client');
   const client = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name, email });
   if (client.status !== 201) throw new Error(`client not made: ${client.status} ${JSON.stringify(client.body)}`);
-  const site = await o.agent.post(`/api/clients/${client.body.id}/sites`).set('x-csrf-token', o.csrf()).send({ addressLine1: '14 Kiln Row', city: 'Ashford Vale' });
+  const site = await o.agent
+    .post(`/api/clients/${client.body.id}/sites`)
+    .set('x-csrf-token', o.csrf())
+    .send({ addressLine1: '14 Kiln Row', city: 'Ashford Vale' });
   return { clientId: client.body.id as string, siteId: site.body.id as string, email };
 }
 
 /** Gives the client record a portal login and signs it in by the e-mailed one-time link. */
-export async function signInClient(t: TestServer, firmId: string, clientId: string, email: string, name = 'Wren Halloway'): Promise<ClientAgent> {
+export async function signInClient(
+  t: TestServer,
+  firmId: string,
+  clientId: string,
+  email: string,
+  name = 'Wren Halloway',
+): Promise<ClientAgent> {
   await withTenant(t.ctx.pool, firmId, (tx) =>
-    tx.client.query(`insert into portal_users (tenant_id, client_id, email, name) values ($1, $2, $3, $4) on conflict do nothing`, [tx.tenantId, clientId, email, name]),
+    tx.client.query(`insert into portal_users (tenant_id, client_id, email, name) values ($1, $2, $3, $4) on conflict do nothing`, [
+      tx.tenantId,
+      clientId,
+      email,
+      name,
+    ]),
   );
   const c = await newAgent(t.app, 'portal');
   await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email });

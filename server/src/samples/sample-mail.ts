@@ -17,7 +17,14 @@ export function boardShownMail(p: { firmName: string; name: string; label: strin
   );
 }
 
-export function boardDecisionMail(p: { clientName: string; label: string; round: number; decision: 'approved' | 'changes_requested'; comment: string; url: string }): RenderedMail {
+export function boardDecisionMail(p: {
+  clientName: string;
+  label: string;
+  round: number;
+  decision: 'approved' | 'changes_requested';
+  comment: string;
+  url: string;
+}): RenderedMail {
   const board = `"${p.label}" (round ${p.round})`;
   return p.decision === 'approved'
     ? render(
@@ -30,7 +37,11 @@ export function boardDecisionMail(p: { clientName: string; label: string; round:
     : render(
         `${p.clientName} asked for changes to the sample board ${board}`,
         'Changes asked for on a sample board',
-        [`${p.clientName} asked for changes to the sample board ${board}:`, p.comment, 'Start the next round from the board when you are ready.'],
+        [
+          `${p.clientName} asked for changes to the sample board ${board}:`,
+          p.comment,
+          'Start the next round from the board when you are ready.',
+        ],
         { label: 'Open the sample board', url: p.url },
         'Sent by Layerbook to the owners and office of your firm.',
       );
@@ -48,7 +59,13 @@ export async function mailBoardShown(tx: TenantTx, ctx: AppContext, p: { board: 
       purposeKey: `sample-shown:${p.board.id}:${user.id}`,
       tenantId: tx.tenantId,
       to: user.email,
-      ...boardShownMail({ firmName: p.firmName, name: user.name, label: p.board.label, round: p.board.round, url: `${ctx.config.PUBLIC_URL}/portal/boards/${p.board.id}` }),
+      ...boardShownMail({
+        firmName: p.firmName,
+        name: user.name,
+        label: p.board.label,
+        round: p.board.round,
+        url: `${ctx.config.PUBLIC_URL}/portal/boards/${p.board.id}`,
+      }),
     });
   }
   return rows.length;
@@ -71,7 +88,14 @@ export async function mailBoardDecision(
       purposeKey: `${purpose}:${p.board.id}:${staff.id}`,
       tenantId: tx.tenantId,
       to: staff.email,
-      ...boardDecisionMail({ clientName: p.clientName, label: p.board.label, round: p.board.round, decision: p.decision, comment: p.comment, url: `${ctx.config.PUBLIC_URL}/samples/${p.board.id}` }),
+      ...boardDecisionMail({
+        clientName: p.clientName,
+        label: p.board.label,
+        round: p.board.round,
+        decision: p.decision,
+        comment: p.comment,
+        url: `${ctx.config.PUBLIC_URL}/samples/${p.board.id}`,
+      }),
     });
   }
 }

@@ -15,12 +15,34 @@ const fields = (body: { errors?: { field: string }[] }) => (body.errors ?? []).m
 describe('sample boards (staff)', () => {
   it('snapshots the finish at creation, so later library edits leave the record as made', async () => {
     const f = await firmWithFinish(t);
-    const board = await makeBoard(f, { clientId: f.clientId, siteId: f.siteId, label: 'Stair hall, board A', finishSystemId: f.systemId, notes: 'Lot 2291 of the tint' });
+    const board = await makeBoard(f, {
+      clientId: f.clientId,
+      siteId: f.siteId,
+      label: 'Stair hall, board A',
+      finishSystemId: f.systemId,
+      notes: 'Lot 2291 of the tint',
+    });
     const got = await f.agent.get(`/api/samples/${board.id}`);
     expect(got.status).toBe(200);
-    expect(got.body).toMatchObject({ label: 'Stair hall, board A', round: 1, status: 'draft', clientName: 'Wren Halloway', siteAddress: '14 Kiln Row, Ashford Vale', notes: 'Lot 2291 of the tint', decidedAt: null, photos: [] });
-    expect(got.body.finish).toMatchObject({ systemId: f.systemId, systemName: 'Antiqued glaze over primer', description: 'Warm umber glaze' });
-    expect(got.body.finish.layers.map((l: { position: number; name: string }) => [l.position, l.name])).toEqual([[1, 'Primer'], [2, 'Antiquing glaze']]);
+    expect(got.body).toMatchObject({
+      label: 'Stair hall, board A',
+      round: 1,
+      status: 'draft',
+      clientName: 'Wren Halloway',
+      siteAddress: '14 Kiln Row, Ashford Vale',
+      notes: 'Lot 2291 of the tint',
+      decidedAt: null,
+      photos: [],
+    });
+    expect(got.body.finish).toMatchObject({
+      systemId: f.systemId,
+      systemName: 'Antiqued glaze over primer',
+      description: 'Warm umber glaze',
+    });
+    expect(got.body.finish.layers.map((l: { position: number; name: string }) => [l.position, l.name])).toEqual([
+      [1, 'Primer'],
+      [2, 'Antiquing glaze'],
+    ]);
     expect(got.body.finish.layers[1].products).toEqual([
       { id: f.productIds.tint, name: 'Umber tint paint', parts: 1 },
       { id: f.productIds.medium, name: 'Glazing medium', parts: 4 },
@@ -34,13 +56,31 @@ describe('sample boards (staff)', () => {
     // The library changes afterwards: renamed product, a layer removed. The board keeps what was made.
     await f.agent.patch(`/api/library/products/${f.productIds.primer}`).set('x-csrf-token', f.csrf()).send({ name: 'Renamed primer' });
     const sys = await f.agent.get(`/api/library/systems/${f.systemId}`);
-    await f.agent.patch(`/api/library/systems/${f.systemId}`).set('x-csrf-token', f.csrf()).send({ layers: [sys.body.layers[0]] });
+    await f.agent
+      .patch(`/api/library/systems/${f.systemId}`)
+      .set('x-csrf-token', f.csrf())
+      .send({ layers: [sys.body.layers[0]] });
     const after = await f.agent.get(`/api/samples/${board.id}`);
     expect(after.body.finish).toEqual(got.body.finish);
 
     const list = await f.agent.get('/api/samples').query({ clientId: f.clientId });
-    expect(list.body.items).toEqual([expect.objectContaining({ id: board.id, label: 'Stair hall, board A', clientName: 'Wren Halloway', round: 1, status: 'draft', finishName: 'Antiqued glaze over primer', photoCount: 0, coverThumbnailUrl: null })]);
-    const audit = await withTenant(t.ctx.pool, f.firmId, async (tx) => (await tx.client.query(`select action from audit_log where entity = 'sample_board'`)).rows);
+    expect(list.body.items).toEqual([
+      expect.objectContaining({
+        id: board.id,
+        label: 'Stair hall, board A',
+        clientName: 'Wren Halloway',
+        round: 1,
+        status: 'draft',
+        finishName: 'Antiqued glaze over primer',
+        photoCount: 0,
+        coverThumbnailUrl: null,
+      }),
+    ]);
+    const audit = await withTenant(
+      t.ctx.pool,
+      f.firmId,
+      async (tx) => (await tx.client.query(`select action from audit_log where entity = 'sample_board'`)).rows,
+    );
     expect(audit.map((a: { action: string }) => a.action)).toEqual(['samples.board_created']);
   });
 
@@ -60,14 +100,19 @@ describe('sample boards (staff)', () => {
   it('edits a draft, re-snapshots its finish, and keeps a shown finish as shown', async () => {
     const f = await firmWithFinish(t);
     const board = await makeBoard(f, { clientId: f.clientId, label: 'Dining room' });
-    const edited = await f.agent.patch(`/api/samples/${board.id}`).set('x-csrf-token', f.csrf()).send({ label: 'Dining room, board B', finishSystemId: f.systemId });
+    const edited = await f.agent
+      .patch(`/api/samples/${board.id}`)
+      .set('x-csrf-token', f.csrf())
+      .send({ label: 'Dining room, board B', finishSystemId: f.systemId });
     expect(edited.status).toBe(200);
     expect(edited.body).toMatchObject({ label: 'Dining room, board B', notes: '', finishSystemId: f.systemId });
     expect(edited.body.finish.layers).toHaveLength(2);
     expect((await post(f, `/api/samples/${board.id}/show`)).status).toBe(200);
     const refused = await f.agent.patch(`/api/samples/${board.id}`).set('x-csrf-token', f.csrf()).send({ finishSystemId: null });
     expect(refused.status).toBe(409);
-    expect((await f.agent.patch(`/api/samples/${board.id}`).set('x-csrf-token', f.csrf()).send({ notes: 'Shown by the window' })).body.notes).toBe('Shown by the window');
+    expect(
+      (await f.agent.patch(`/api/samples/${board.id}`).set('x-csrf-token', f.csrf()).send({ notes: 'Shown by the window' })).body.notes,
+    ).toBe('Shown by the window');
   });
 
   it('adds photos (refusing an SVG), lists them with a cover, and deletes them with their stored objects', async () => {
@@ -82,10 +127,19 @@ describe('sample boards (staff)', () => {
 
     const added = await uploadBoardPhoto(f, board.id);
     expect(added.status).toBe(201);
-    expect(added.body).toMatchObject({ boardId: board.id, caption: '', width: 64, height: 48, thumbnailUrl: `/api/files/${added.body.fileId}/thumbnail` });
+    expect(added.body).toMatchObject({
+      boardId: board.id,
+      caption: '',
+      width: 64,
+      height: 48,
+      thumbnailUrl: `/api/files/${added.body.fileId}/thumbnail`,
+    });
     await uploadBoardPhoto(f, board.id, { bytes: await pngImage(), name: 'daylight.png' });
     expect((await f.agent.get(`/api/samples/${board.id}`)).body.photos).toHaveLength(2);
-    expect((await f.agent.get(`/api/samples/${board.id}/photos`)).body.items.map((p: { id: string }) => p.id)).toEqual([added.body.id, expect.any(String)]);
+    expect((await f.agent.get(`/api/samples/${board.id}/photos`)).body.items.map((p: { id: string }) => p.id)).toEqual([
+      added.body.id,
+      expect.any(String),
+    ]);
     const listed = (await f.agent.get('/api/samples')).body.items[0];
     expect(listed).toMatchObject({ photoCount: 2, coverThumbnailUrl: added.body.thumbnailUrl });
     expect((await f.agent.get(added.body.thumbnailUrl)).status).toBe(200);
@@ -144,12 +198,16 @@ describe('sample boards (staff)', () => {
     const shown = await post(f, `/api/samples/${board.id}/show`);
     expect(shown.status).toBe(200);
     expect(shown.body.status).toBe('shown');
-    const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(f.clientEmail) && m.subject === 'Verdigris & Daughters has a sample board for you to look at');
+    const mail = await t.inbox.waitFor(
+      (m) => JSON.stringify(m.to).includes(f.clientEmail) && m.subject === 'Verdigris & Daughters has a sample board for you to look at',
+    );
     expect(mail.text).toContain(`http://localhost:4300/portal/boards/${board.id}`);
     const again = await post(f, `/api/samples/${board.id}/show`);
     expect(again.status).toBe(409);
     expect(again.body.detail).toBe('This board has already been shown to the client.');
-    const { rows: outbox } = await t.queue.boss.getDb().executeSql(`select to_address from mail_outbox where purpose_key like $1`, [`sample-shown:${board.id}:%`]);
+    const { rows: outbox } = await t.queue.boss
+      .getDb()
+      .executeSql(`select to_address from mail_outbox where purpose_key like $1`, [`sample-shown:${board.id}:%`]);
     expect(outbox).toEqual([{ to_address: f.clientEmail }]);
   });
 });

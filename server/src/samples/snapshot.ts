@@ -9,12 +9,20 @@ import type { FinishSnapshot, SnapshotLayer } from '@layerbook/contracts';
  * edits to the library — a renamed product, a changed coat count — do not rewrite what was shown.
  */
 export async function snapshotFinish(tx: TenantTx, finishSystemId: string, now: Date): Promise<FinishSnapshot> {
-  const system = (await tx.db.select().from(finishSystems).where(and(eq(finishSystems.tenantId, tx.tenantId), eq(finishSystems.id, finishSystemId))))[0];
+  const system = (
+    await tx.db
+      .select()
+      .from(finishSystems)
+      .where(and(eq(finishSystems.tenantId, tx.tenantId), eq(finishSystems.id, finishSystemId)))
+  )[0];
   if (!system) throw badRequest([{ field: 'finishSystemId', message: 'Choose a finish system from your library.' }]);
   const layers = system.layers as FinishLayer[];
   const ids = finishProductIds(layers);
   const named = ids.length
-    ? await tx.db.select({ id: products.id, name: products.name }).from(products).where(and(eq(products.tenantId, tx.tenantId), inArray(products.id, ids)))
+    ? await tx.db
+        .select({ id: products.id, name: products.name })
+        .from(products)
+        .where(and(eq(products.tenantId, tx.tenantId), inArray(products.id, ids)))
     : [];
   const nameOf = new Map(named.map((p) => [p.id, p.name]));
   const productName = (id: string) => nameOf.get(id) ?? 'a product no longer in the library';

@@ -17,7 +17,15 @@ const DEMO_ROOMS: readonly { name: string; notes: string; surfaces: readonly Dem
     surfaces: [
       {
         name: 'Round walls',
-        shape: { kind: 'roundWalls', radius: 7, height: 10, openings: [{ width: 3, height: 7, count: 1 }, { width: 3, height: 5, count: 2 }] },
+        shape: {
+          kind: 'roundWalls',
+          radius: 7,
+          height: 10,
+          openings: [
+            { width: 3, height: 7, count: 1 },
+            { width: 3, height: 5, count: 2 },
+          ],
+        },
         disturbedPaintedArea: 4,
         notes: 'Scrape and feather the window trim edges before the scratch coat.',
       },

@@ -49,7 +49,20 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
       .insert(clients)
       .values({ tenantId: firmId, kind: 'homeowner', name: DEMO.client.name, email: DEMO.client.email, phone: '555-0177' })
       .returning({ id: clients.id });
-    const [site] = await tx.db.insert(sites).values({ tenantId: firmId, clientId: client!.id, label: 'Home', addressLine1: '24 Thistledown Lane', city: 'Marrowby', region: 'VT', postalCode: '05999', yearBuilt: 1924, accessNotes: 'Stair hall ceiling 17 ft; round sitting room with a turret ceiling' }).returning({ id: sites.id });
+    const [site] = await tx.db
+      .insert(sites)
+      .values({
+        tenantId: firmId,
+        clientId: client!.id,
+        label: 'Home',
+        addressLine1: '24 Thistledown Lane',
+        city: 'Marrowby',
+        region: 'VT',
+        postalCode: '05999',
+        yearBuilt: 1924,
+        accessNotes: 'Stair hall ceiling 17 ft; round sitting room with a turret ceiling',
+      })
+      .returning({ id: sites.id });
     await tx.db.insert(portalUsers).values({ tenantId: firmId, clientId: client!.id, email: DEMO.client.email, name: DEMO.client.name });
     await seedDemoInquiries(tx, localDate(DEMO.firm.timeZone, now), userIds[0]!);
     await seedDemoLibrary(tx);

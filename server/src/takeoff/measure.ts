@@ -1,5 +1,15 @@
 import type { RoomView, SurfaceShapeInput, TakeoffLengthUnit, TakeoffTotals } from '@layerbook/contracts';
-import { type Caution, DEFAULT_TAKEOFF_SETTINGS, DomainInputError, convertArea, convertMeasure, dottedPath, measureSurface, safetyCautions, type SurfaceMeasure } from '@layerbook/domain';
+import {
+  type Caution,
+  DEFAULT_TAKEOFF_SETTINGS,
+  DomainInputError,
+  convertArea,
+  convertMeasure,
+  dottedPath,
+  measureSurface,
+  safetyCautions,
+  type SurfaceMeasure,
+} from '@layerbook/domain';
 import { badRequest } from '../http/problem';
 
 /**
@@ -19,7 +29,10 @@ export function measureOrReject(shape: SurfaceShapeInput): SurfaceMeasure {
 }
 
 /** Adds measures saved in any unit into `unit`: areas, running lengths and disturbed paint apart. */
-export function sumMeasures(items: readonly { measure: SurfaceMeasure; lengthUnit: TakeoffLengthUnit; disturbedPaintedArea: number | null }[], unit: TakeoffLengthUnit): TakeoffTotals {
+export function sumMeasures(
+  items: readonly { measure: SurfaceMeasure; lengthUnit: TakeoffLengthUnit; disturbedPaintedArea: number | null }[],
+  unit: TakeoffLengthUnit,
+): TakeoffTotals {
   let area = 0;
   let length = 0;
   let disturbedPaintedArea = 0;

@@ -15,13 +15,19 @@ type Agent = Pick<Owner, 'agent' | 'csrf'>;
 
 async function makeRoom(o: Owner, name = 'Morning room'): Promise<string> {
   const client = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: 'Cressida Holt' });
-  const site = await o.agent.post(`/api/clients/${client.body.id}/sites`).set('x-csrf-token', o.csrf()).send({ addressLine1: '2 Weir Close', city: 'Stell' });
+  const site = await o.agent
+    .post(`/api/clients/${client.body.id}/sites`)
+    .set('x-csrf-token', o.csrf())
+    .send({ addressLine1: '2 Weir Close', city: 'Stell' });
   const room = await o.agent.post(`/api/takeoff/sites/${site.body.id}/rooms`).set('x-csrf-token', o.csrf()).send({ name });
   return room.body.id;
 }
 
 const upload = async (a: Agent, roomId: string, caption?: string) => {
-  const req = a.agent.post(`/api/takeoff/rooms/${roomId}/photos`).set('x-csrf-token', a.csrf()).attach('file', await jpegImage(), 'progress.jpg');
+  const req = a.agent
+    .post(`/api/takeoff/rooms/${roomId}/photos`)
+    .set('x-csrf-token', a.csrf())
+    .attach('file', await jpegImage(), 'progress.jpg');
   return caption === undefined ? req : req.field('caption', caption);
 };
 
@@ -30,7 +36,10 @@ async function crewOf(o: Owner): Promise<Agent> {
   await o.agent.post('/api/team/invitations').set('x-csrf-token', o.csrf()).send({ email, role: 'crew' });
   const token = new URL(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email)))).searchParams.get('token')!;
   const crew = await newAgent(t.app);
-  await crew.agent.post('/api/auth/invitations/accept').set('x-csrf-token', crew.csrf()).send({ token, name: 'Crew', password: 'crew-password-2026' });
+  await crew.agent
+    .post('/api/auth/invitations/accept')
+    .set('x-csrf-token', crew.csrf())
+    .send({ token, name: 'Crew', password: 'crew-password-2026' });
   await crew.refresh();
   return crew;
 }
@@ -44,7 +53,18 @@ describe('room photos', () => {
     expect(added.body).toMatchObject({ roomId, caption: 'Cornice before repair', width: 64, height: 48 });
     expect(added.body.thumbnailUrl).toBe(`/api/files/${added.body.fileId}/thumbnail`);
     expect(added.body.downloadUrl).toBe(`/api/files/${added.body.fileId}`);
-    expect(Object.keys(added.body).sort()).toEqual(['caption', 'createdAt', 'downloadUrl', 'fileId', 'height', 'id', 'originalName', 'roomId', 'thumbnailUrl', 'width']);
+    expect(Object.keys(added.body).sort()).toEqual([
+      'caption',
+      'createdAt',
+      'downloadUrl',
+      'fileId',
+      'height',
+      'id',
+      'originalName',
+      'roomId',
+      'thumbnailUrl',
+      'width',
+    ]);
     await upload(o, roomId);
 
     const list = await o.agent.get(`/api/takeoff/rooms/${roomId}/photos`);
@@ -59,8 +79,16 @@ describe('room photos', () => {
     expect(stored.rows).toBe(1);
     expect(stored.keys.some((k) => k.includes(added.body.fileId))).toBe(false);
 
-    const actions = await withTenant(t.ctx.pool, o.firmId, async (tx) => (await tx.client.query(`select action, data from audit_log where entity = 'room_photo' order by created_at`)).rows);
-    expect(actions.map((a: { action: string }) => a.action)).toEqual(['takeoff.photo_added', 'takeoff.photo_added', 'takeoff.photo_deleted']);
+    const actions = await withTenant(
+      t.ctx.pool,
+      o.firmId,
+      async (tx) => (await tx.client.query(`select action, data from audit_log where entity = 'room_photo' order by created_at`)).rows,
+    );
+    expect(actions.map((a: { action: string }) => a.action)).toEqual([
+      'takeoff.photo_added',
+      'takeoff.photo_added',
+      'takeoff.photo_deleted',
+    ]);
     expect(actions[0].data).toMatchObject({ roomId, roomName: 'Morning room', contentType: 'image/jpeg' });
   });
 

@@ -29,7 +29,12 @@ export const ROOM_PHOTOS: PhotoAlbum = {
 
 /** The room, or the same 404 whether it never existed or belongs to another firm. */
 export async function findPhotoRoom(tx: TenantTx, roomId: string): Promise<{ id: string; name: string; siteId: string }> {
-  const room = (await tx.db.select({ id: rooms.id, name: rooms.name, siteId: rooms.siteId }).from(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId))))[0];
+  const room = (
+    await tx.db
+      .select({ id: rooms.id, name: rooms.name, siteId: rooms.siteId })
+      .from(rooms)
+      .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)))
+  )[0];
   if (!room) throw notFound('room');
   return room;
 }
@@ -39,7 +44,13 @@ export async function listRoomPhotos(tx: TenantTx, roomId: string): Promise<Room
   return ((await listPhotos(tx, ROOM_PHOTOS, [roomId])).get(roomId) ?? []).map((view) => ({ ...view, roomId }));
 }
 
-export async function addRoomPhoto(tx: TenantTx, actor: Actor, roomId: string, caption: string, stored: StoredImage): Promise<RoomPhotoView> {
+export async function addRoomPhoto(
+  tx: TenantTx,
+  actor: Actor,
+  roomId: string,
+  caption: string,
+  stored: StoredImage,
+): Promise<RoomPhotoView> {
   const room = await findPhotoRoom(tx, roomId);
   const view = await addPhoto(tx, ROOM_PHOTOS, actor, { id: roomId, about: { roomName: room.name, siteId: room.siteId } }, caption, stored);
   return { ...view, roomId };

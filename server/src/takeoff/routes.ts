@@ -1,4 +1,14 @@
-import { moveInput, roomInput, roomUpdate, surfaceInput, surfaceUpdate, uuid, type RoomView, type SurfaceView, type TakeoffView } from '@layerbook/contracts';
+import {
+  moveInput,
+  roomInput,
+  roomUpdate,
+  surfaceInput,
+  surfaceUpdate,
+  uuid,
+  type RoomView,
+  type SurfaceView,
+  type TakeoffView,
+} from '@layerbook/contracts';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
@@ -39,17 +49,23 @@ export function takeoffRoutes(ctx: AppContext): Router {
   });
 
   router.post('/sites/:siteId/rooms', async (req, res) => {
-    const room = await withStaff(ctx, req, 'office', (tx, staff) => addRoom(tx, staffActor(staff), parse(siteParam, req.params).siteId, parse(roomInput, req.body)));
+    const room = await withStaff(ctx, req, 'office', (tx, staff) =>
+      addRoom(tx, staffActor(staff), parse(siteParam, req.params).siteId, parse(roomInput, req.body)),
+    );
     res.status(201).json(room satisfies RoomView);
   });
 
   router.patch('/rooms/:id', async (req, res) => {
-    const room = await withStaff(ctx, req, 'office', (tx) => updateRoom(tx, parse(roomParam, req.params).id, parse(roomUpdate, req.body), ctx.now()));
+    const room = await withStaff(ctx, req, 'office', (tx) =>
+      updateRoom(tx, parse(roomParam, req.params).id, parse(roomUpdate, req.body), ctx.now()),
+    );
     res.json(room satisfies RoomView);
   });
 
   router.delete('/rooms/:id', async (req, res) => {
-    const photoKeys = await withStaff(ctx, req, 'office', (tx, staff) => deleteRoom(tx, staffActor(staff), parse(roomParam, req.params).id));
+    const photoKeys = await withStaff(ctx, req, 'office', (tx, staff) =>
+      deleteRoom(tx, staffActor(staff), parse(roomParam, req.params).id),
+    );
     await discardObjects(ctx.storage, ctx.logger, photoKeys);
     res.status(204).end();
   });
@@ -60,12 +76,16 @@ export function takeoffRoutes(ctx: AppContext): Router {
   });
 
   router.post('/rooms/:id/surfaces', async (req, res) => {
-    const surface = await withStaff(ctx, req, 'office', (tx, staff) => addSurface(tx, staffActor(staff), parse(roomParam, req.params).id, parse(surfaceInput, req.body)));
+    const surface = await withStaff(ctx, req, 'office', (tx, staff) =>
+      addSurface(tx, staffActor(staff), parse(roomParam, req.params).id, parse(surfaceInput, req.body)),
+    );
     res.status(201).json(surface satisfies SurfaceView);
   });
 
   router.patch('/surfaces/:id', async (req, res) => {
-    const surface = await withStaff(ctx, req, 'office', (tx) => updateSurface(tx, parse(surfaceParam, req.params).id, parse(surfaceUpdate, req.body), ctx.now()));
+    const surface = await withStaff(ctx, req, 'office', (tx) =>
+      updateSurface(tx, parse(surfaceParam, req.params).id, parse(surfaceUpdate, req.body), ctx.now()),
+    );
     res.json(surface satisfies SurfaceView);
   });
 
@@ -75,12 +95,16 @@ export function takeoffRoutes(ctx: AppContext): Router {
   });
 
   router.post('/surfaces/:id/duplicate', async (req, res) => {
-    const copy = await withStaff(ctx, req, 'office', (tx, staff) => duplicateSurface(tx, staffActor(staff), parse(surfaceParam, req.params).id));
+    const copy = await withStaff(ctx, req, 'office', (tx, staff) =>
+      duplicateSurface(tx, staffActor(staff), parse(surfaceParam, req.params).id),
+    );
     res.status(201).json(copy satisfies SurfaceView);
   });
 
   router.post('/surfaces/:id/move', async (req, res) => {
-    const view = await withStaff(ctx, req, 'office', (tx) => moveSurface(tx, parse(surfaceParam, req.params).id, parse(moveInput, req.body)));
+    const view = await withStaff(ctx, req, 'office', (tx) =>
+      moveSurface(tx, parse(surfaceParam, req.params).id, parse(moveInput, req.body)),
+    );
     res.json(view satisfies TakeoffView);
   });
 

@@ -1,4 +1,14 @@
-import type { MoveInput, RoomInput, RoomUpdate, RoomView, SurfaceInput, SurfaceUpdate, SurfaceView, TakeoffLengthUnit, TakeoffView } from '@layerbook/contracts';
+import type {
+  MoveInput,
+  RoomInput,
+  RoomUpdate,
+  RoomView,
+  SurfaceInput,
+  SurfaceUpdate,
+  SurfaceView,
+  TakeoffLengthUnit,
+  TakeoffView,
+} from '@layerbook/contracts';
 import { and, asc, clients, eq, firms, rooms, sites, sql, surfaces, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
@@ -34,13 +44,23 @@ async function findSite(tx: TenantTx, siteId: string) {
 }
 
 async function findRoom(tx: TenantTx, roomId: string): Promise<RoomRow> {
-  const row = (await tx.db.select().from(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId))))[0];
+  const row = (
+    await tx.db
+      .select()
+      .from(rooms)
+      .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)))
+  )[0];
   if (!row) throw notFound('room');
   return row;
 }
 
 async function findSurface(tx: TenantTx, surfaceId: string): Promise<SurfaceRow> {
-  const row = (await tx.db.select().from(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId))))[0];
+  const row = (
+    await tx.db
+      .select()
+      .from(surfaces)
+      .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)))
+  )[0];
   if (!row) throw notFound('surface');
   return row;
 }
@@ -48,7 +68,11 @@ async function findSurface(tx: TenantTx, surfaceId: string): Promise<SurfaceRow>
 export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffView> {
   const { site, clientName } = await findSite(tx, siteId);
   const unit = await firmUnit(tx);
-  const roomRows = await tx.db.select().from(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.siteId, siteId))).orderBy(asc(rooms.position), asc(rooms.createdAt));
+  const roomRows = await tx.db
+    .select()
+    .from(rooms)
+    .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.siteId, siteId)))
+    .orderBy(asc(rooms.position), asc(rooms.createdAt));
   const surfaceRows = await tx.db
     .select({ surface: surfaces })
     .from(surfaces)
@@ -77,17 +101,33 @@ export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffV
     },
     lengthUnit: unit,
     rooms: roomViews,
-    totals: sumMeasures(roomViews.flatMap((r) => r.surfaces), unit),
+    totals: sumMeasures(
+      roomViews.flatMap((r) => r.surfaces),
+      unit,
+    ),
     leadCaution: leadCaution(roomViews, site.yearBuilt, unit),
   };
 }
 
 function toRoomView(r: RoomRow, list: SurfaceView[], unit: TakeoffLengthUnit): RoomView {
-  return { id: r.id, siteId: r.siteId, name: r.name, position: r.position, isExterior: r.isExterior, notes: r.notes, surfaces: list, totals: sumMeasures(list, unit) };
+  return {
+    id: r.id,
+    siteId: r.siteId,
+    name: r.name,
+    position: r.position,
+    isExterior: r.isExterior,
+    notes: r.notes,
+    surfaces: list,
+    totals: sumMeasures(list, unit),
+  };
 }
 
 async function roomSurfaces(tx: TenantTx, roomId: string): Promise<SurfaceView[]> {
-  const rows = await tx.db.select().from(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId))).orderBy(asc(surfaces.position), asc(surfaces.createdAt));
+  const rows = await tx.db
+    .select()
+    .from(surfaces)
+    .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId)))
+    .orderBy(asc(surfaces.position), asc(surfaces.createdAt));
   return rows.map(toSurfaceView);
 }
 
@@ -97,13 +137,26 @@ export async function addRoom(tx: TenantTx, actor: Actor, siteId: string, input:
     .select({ next: sql<number>`coalesce(max(${rooms.position}) + 1, 0)::int` })
     .from(rooms)
     .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.siteId, siteId)));
-  const [row] = await tx.db.insert(rooms).values({ ...input, tenantId: tx.tenantId, siteId, position: next ?? 0 }).returning();
-  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.room_created', entity: 'room', entityId: row!.id, data: { siteId, name: row!.name } });
+  const [row] = await tx.db
+    .insert(rooms)
+    .values({ ...input, tenantId: tx.tenantId, siteId, position: next ?? 0 })
+    .returning();
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: 'takeoff.room_created',
+    entity: 'room',
+    entityId: row!.id,
+    data: { siteId, name: row!.name },
+  });
   return toRoomView(row!, [], await firmUnit(tx));
 }
 
 export async function updateRoom(tx: TenantTx, roomId: string, patch: RoomUpdate, now: Date): Promise<RoomView> {
-  const [row] = await tx.db.update(rooms).set({ ...patch, updatedAt: now }).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId))).returning();
+  const [row] = await tx.db
+    .update(rooms)
+    .set({ ...patch, updatedAt: now })
+    .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)))
+    .returning();
   if (!row) throw notFound('room');
   return toRoomView(row, await roomSurfaces(tx, roomId), await firmUnit(tx));
 }
@@ -115,9 +168,18 @@ export async function updateRoom(tx: TenantTx, roomId: string, patch: RoomUpdate
 export async function deleteRoom(tx: TenantTx, actor: Actor, roomId: string): Promise<ObjectKeys> {
   const room = await findRoom(tx, roomId);
   const photos = await detachRoomPhotos(tx, roomId);
-  const gone = await tx.db.delete(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId))).returning({ id: surfaces.id });
+  const gone = await tx.db
+    .delete(surfaces)
+    .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId)))
+    .returning({ id: surfaces.id });
   await tx.db.delete(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)));
-  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.room_deleted', entity: 'room', entityId: roomId, data: { siteId: room.siteId, name: room.name, surfacesDeleted: gone.length, photosDeleted: photos.count } });
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: 'takeoff.room_deleted',
+    entity: 'room',
+    entityId: roomId,
+    data: { siteId: room.siteId, name: room.name, surfacesDeleted: gone.length, photosDeleted: photos.count },
+  });
   return photos.keys;
 }
 
@@ -130,10 +192,21 @@ function reorder(ids: readonly string[], id: string, to: number): string[] {
 
 export async function moveRoom(tx: TenantTx, roomId: string, { to }: MoveInput): Promise<TakeoffView> {
   const room = await findRoom(tx, roomId);
-  const siblings = await tx.db.select({ id: rooms.id }).from(rooms).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.siteId, room.siteId))).orderBy(asc(rooms.position), asc(rooms.createdAt));
-  const order = reorder(siblings.map((s) => s.id), roomId, to);
+  const siblings = await tx.db
+    .select({ id: rooms.id })
+    .from(rooms)
+    .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.siteId, room.siteId)))
+    .orderBy(asc(rooms.position), asc(rooms.createdAt));
+  const order = reorder(
+    siblings.map((s) => s.id),
+    roomId,
+    to,
+  );
   for (const [position, id] of order.entries()) {
-    await tx.db.update(rooms).set({ position }).where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, id)));
+    await tx.db
+      .update(rooms)
+      .set({ position })
+      .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, id)));
   }
   return getTakeoff(tx, room.siteId);
 }
@@ -167,7 +240,13 @@ export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, inp
       notes: input.notes,
     })
     .returning();
-  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.surface_created', entity: 'surface', entityId: row!.id, data: { roomId, kind: input.shape.kind } });
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: 'takeoff.surface_created',
+    entity: 'surface',
+    entityId: row!.id,
+    data: { roomId, kind: input.shape.kind },
+  });
   return toSurfaceView(row!);
 }
 
@@ -187,7 +266,9 @@ export async function updateSurface(tx: TenantTx, surfaceId: string, patch: Surf
       ...(patch.name !== undefined ? { name: patch.name } : {}),
       ...(patch.notes !== undefined ? { notes: patch.notes } : {}),
       ...(patch.shape !== undefined ? { shape: patch.shape, lengthUnit: await firmUnit(tx) } : {}),
-      ...(patch.disturbedPaintedArea !== undefined ? { disturbedPaintedArea: patch.disturbedPaintedArea === null ? null : String(patch.disturbedPaintedArea) } : {}),
+      ...(patch.disturbedPaintedArea !== undefined
+        ? { disturbedPaintedArea: patch.disturbedPaintedArea === null ? null : String(patch.disturbedPaintedArea) }
+        : {}),
       updatedAt: now,
     })
     .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)))
@@ -198,7 +279,13 @@ export async function updateSurface(tx: TenantTx, surfaceId: string, patch: Surf
 export async function deleteSurface(tx: TenantTx, actor: Actor, surfaceId: string): Promise<void> {
   const current = await findSurface(tx, surfaceId);
   await tx.db.delete(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)));
-  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.surface_deleted', entity: 'surface', entityId: surfaceId, data: { roomId: current.roomId, name: current.name } });
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: 'takeoff.surface_deleted',
+    entity: 'surface',
+    entityId: surfaceId,
+    data: { roomId: current.roomId, name: current.name },
+  });
 }
 
 /** A copy placed right after the original (four alike walls, two alike vault bays). */
@@ -221,7 +308,13 @@ export async function duplicateSurface(tx: TenantTx, actor: Actor, surfaceId: st
       notes: original.notes,
     })
     .returning();
-  await recordAudit(tx, { ...auditedBy(actor), action: 'takeoff.surface_created', entity: 'surface', entityId: row!.id, data: { roomId: original.roomId, copyOf: surfaceId } });
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: 'takeoff.surface_created',
+    entity: 'surface',
+    entityId: row!.id,
+    data: { roomId: original.roomId, copyOf: surfaceId },
+  });
   return toSurfaceView(row!);
 }
 
@@ -234,10 +327,21 @@ function copyName(name: string): string {
 export async function moveSurface(tx: TenantTx, surfaceId: string, { to }: MoveInput): Promise<TakeoffView> {
   const surface = await findSurface(tx, surfaceId);
   const room = await findRoom(tx, surface.roomId);
-  const siblings = await tx.db.select({ id: surfaces.id }).from(surfaces).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, room.id))).orderBy(asc(surfaces.position), asc(surfaces.createdAt));
-  const order = reorder(siblings.map((s) => s.id), surfaceId, to);
+  const siblings = await tx.db
+    .select({ id: surfaces.id })
+    .from(surfaces)
+    .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, room.id)))
+    .orderBy(asc(surfaces.position), asc(surfaces.createdAt));
+  const order = reorder(
+    siblings.map((s) => s.id),
+    surfaceId,
+    to,
+  );
   for (const [position, id] of order.entries()) {
-    await tx.db.update(surfaces).set({ position }).where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, id)));
+    await tx.db
+      .update(surfaces)
+      .set({ position })
+      .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, id)));
   }
   return getTakeoff(tx, room.siteId);
 }

@@ -13,7 +13,10 @@ type Owner = Awaited<ReturnType<typeof signUpFirm>>;
 
 async function makeSite(o: Owner, yearBuilt: number | null = 1924): Promise<string> {
   const client = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: 'Perpetua Vane' });
-  const site = await o.agent.post(`/api/clients/${client.body.id}/sites`).set('x-csrf-token', o.csrf()).send({ addressLine1: '3 Larkspur Row', city: 'Ebbsfold', yearBuilt, accessNotes: 'Turret stair is narrow' });
+  const site = await o.agent
+    .post(`/api/clients/${client.body.id}/sites`)
+    .set('x-csrf-token', o.csrf())
+    .send({ addressLine1: '3 Larkspur Row', city: 'Ebbsfold', yearBuilt, accessNotes: 'Turret stair is narrow' });
   return site.body.id;
 }
 
@@ -23,7 +26,8 @@ async function makeRoom(o: Owner, siteId: string, name = 'Round dining room'): P
   return res.body.id;
 }
 
-const addSurface = (o: Owner, roomId: string, body: object) => o.agent.post(`/api/takeoff/rooms/${roomId}/surfaces`).set('x-csrf-token', o.csrf()).send(body);
+const addSurface = (o: Owner, roomId: string, body: object) =>
+  o.agent.post(`/api/takeoff/rooms/${roomId}/surfaces`).set('x-csrf-token', o.csrf()).send(body);
 const fields = (body: { errors?: { field: string }[] }) => (body.errors ?? []).map((e) => e.field).sort();
 
 describe('site takeoff', () => {
@@ -35,7 +39,15 @@ describe('site takeoff', () => {
     // DOMAIN.md §2.2 worked example [D]: walls 2π·9·10 − (3·7 + 2·4·5) = 565.49 − 61 = 504.49 ft².
     const walls = await addSurface(o, roomId, {
       name: 'Round walls',
-      shape: { kind: 'roundWalls', radius: 9, height: 10, openings: [{ width: 3, height: 7 }, { width: 4, height: 5, count: 2 }] },
+      shape: {
+        kind: 'roundWalls',
+        radius: 9,
+        height: 10,
+        openings: [
+          { width: 3, height: 7 },
+          { width: 4, height: 5, count: 2 },
+        ],
+      },
     });
     expect(walls.status).toBe(201);
     expect(walls.body).toMatchObject({ lengthUnit: 'ft', measure: { measure: 'area', deductions: 61, isCurved: true } });
@@ -44,7 +56,10 @@ describe('site takeoff', () => {
 
     // DOMAIN.md §2.2 worked example [D]; cap area 2πRh per Weisstein, MathWorld "Zone":
     // R = (81 + 9)/6 = 15, 2π·15·3 = 90π = 282.74 ft².
-    const dome = await addSurface(o, roomId, { name: 'Shallow dome', shape: { kind: 'sphericalCap', baseRadius: 9, rise: 3, elevation: 10 } });
+    const dome = await addSurface(o, roomId, {
+      name: 'Shallow dome',
+      shape: { kind: 'sphericalCap', baseRadius: 9, rise: 3, elevation: 10 },
+    });
     expect(dome.status).toBe(201);
     expect(dome.body.measure.quantity).toBeCloseTo(90 * Math.PI, 9);
     expect(dome.body.measure.quantity).toBeCloseTo(282.74, 2);
@@ -57,7 +72,14 @@ describe('site takeoff', () => {
 
     const view = await o.agent.get(`/api/takeoff/sites/${siteId}`);
     expect(view.status).toBe(200);
-    expect(view.body.site).toMatchObject({ id: siteId, addressLine1: '3 Larkspur Row', yearBuilt: 1924, isPre1978: true, accessNotes: 'Turret stair is narrow', clientName: 'Perpetua Vane' });
+    expect(view.body.site).toMatchObject({
+      id: siteId,
+      addressLine1: '3 Larkspur Row',
+      yearBuilt: 1924,
+      isPre1978: true,
+      accessNotes: 'Turret stair is narrow',
+      clientName: 'Perpetua Vane',
+    });
     expect(view.body.lengthUnit).toBe('ft');
     expect(view.body.rooms).toHaveLength(1);
     expect(view.body.rooms[0].surfaces.map((s: { name: string }) => s.name)).toEqual(['Round walls', 'Shallow dome', 'Crown']);
@@ -78,7 +100,14 @@ describe('site takeoff', () => {
 
     const firm = (await o.agent.get('/api/firm')).body;
     const { id: _id, slug: _slug, updatedAt: _at, ...settings } = firm;
-    expect((await o.agent.patch('/api/firm').set('x-csrf-token', o.csrf()).send({ ...settings, units: 'metric' })).status).toBe(200);
+    expect(
+      (
+        await o.agent
+          .patch('/api/firm')
+          .set('x-csrf-token', o.csrf())
+          .send({ ...settings, units: 'metric' })
+      ).status,
+    ).toBe(200);
     const view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
     expect(view.lengthUnit).toBe('m');
     expect(view.site.isPre1978).toBe(false);
@@ -101,7 +130,15 @@ describe('site takeoff', () => {
     const siteId = await makeSite(o, yearBuilt as number | null);
     const roomId = await makeRoom(o, siteId, 'Parlour');
     for (const [i, area] of (disturbed as number[]).entries()) {
-      expect((await addSurface(o, roomId, { name: `Wall ${i + 1}`, shape: { kind: 'walls', perimeter: 12, height: 10 }, disturbedPaintedArea: area })).status).toBe(201);
+      expect(
+        (
+          await addSurface(o, roomId, {
+            name: `Wall ${i + 1}`,
+            shape: { kind: 'walls', perimeter: 12, height: 10 },
+            disturbedPaintedArea: area,
+          })
+        ).status,
+      ).toBe(201);
     }
     const view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
     expect(view.leadCaution?.id ?? null).toBe(caution);
@@ -120,10 +157,16 @@ describe('site takeoff', () => {
     const cap = await addSurface(o, roomId, { name: 'Dome', shape: { kind: 'sphericalCap', baseRadius: 6, rise: 7 } });
     expect(fields(cap.body)).toEqual(['shape.rise']);
 
-    const doors = await addSurface(o, roomId, { name: 'Walls', shape: { kind: 'walls', perimeter: 4, height: 2, openings: [{ width: 3, height: 7 }] } });
+    const doors = await addSurface(o, roomId, {
+      name: 'Walls',
+      shape: { kind: 'walls', perimeter: 4, height: 2, openings: [{ width: 3, height: 7 }] },
+    });
     expect(fields(doors.body)).toEqual(['shape.openings']);
 
-    const negative = await addSurface(o, roomId, { name: '', shape: { kind: 'roundWalls', radius: -9, height: 0, openings: [{ width: -3, height: 7, count: 1.5 }] } });
+    const negative = await addSurface(o, roomId, {
+      name: '',
+      shape: { kind: 'roundWalls', radius: -9, height: 0, openings: [{ width: -3, height: 7, count: 1.5 }] },
+    });
     expect(negative.status).toBe(400);
     expect(fields(negative.body)).toEqual(['name', 'shape.height', 'shape.openings.0.count', 'shape.openings.0.width', 'shape.radius']);
     expect(negative.body.errors.find((e: { field: string }) => e.field === 'shape.radius').message).toBe('Enter the radius, more than 0.');
@@ -132,7 +175,11 @@ describe('site takeoff', () => {
     expect(fields(unknown.body)).toEqual(['shape.kind']);
     const stray = await addSurface(o, roomId, { name: 'Cone', shape: { kind: 'cone', radius: 3, rise: 4, slant: 5 } });
     expect(fields(stray.body)).toEqual(['shape.slant']);
-    const tooDisturbed = await addSurface(o, roomId, { name: 'Ceiling', shape: { kind: 'ceilingRect', length: 2, width: 3 }, disturbedPaintedArea: 7 });
+    const tooDisturbed = await addSurface(o, roomId, {
+      name: 'Ceiling',
+      shape: { kind: 'ceilingRect', length: 2, width: 3 },
+      disturbedPaintedArea: 7,
+    });
     expect(fields(tooDisturbed.body)).toEqual(['disturbedPaintedArea']);
 
     expect((await o.agent.get(`/api/takeoff/sites/${siteId}`)).body.rooms[0].surfaces).toHaveLength(0);
@@ -141,7 +188,10 @@ describe('site takeoff', () => {
     const good = await addSurface(o, roomId, { name: 'Vault', shape: { kind: 'segmentalVault', span: 12, rise: 3, length: 20 } });
     // DOMAIN.md §3.7 project check [D]: span 12, rise 3, L 20 → R 7.5, θ 1.85459 rad, 278.19 ft².
     expect(good.body.measure.quantity).toBeCloseTo(278.19, 2);
-    const broken = await o.agent.patch(`/api/takeoff/surfaces/${good.body.id}`).set('x-csrf-token', o.csrf()).send({ name: 'Renamed', shape: { kind: 'segmentalVault', span: 12, rise: 6.5, length: 20 } });
+    const broken = await o.agent
+      .patch(`/api/takeoff/surfaces/${good.body.id}`)
+      .set('x-csrf-token', o.csrf())
+      .send({ name: 'Renamed', shape: { kind: 'segmentalVault', span: 12, rise: 6.5, length: 20 } });
     expect(fields(broken.body)).toEqual(['shape.rise']);
     const after = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body.rooms[0].surfaces[0];
     expect(after).toMatchObject({ name: 'Vault', shape: { rise: 3 } });
@@ -151,7 +201,10 @@ describe('site takeoff', () => {
     const o = await signUpFirm(t.app);
     const siteId = await makeSite(o);
     const hall = await makeRoom(o, siteId, 'Stair hall');
-    const porch = await o.agent.post(`/api/takeoff/sites/${siteId}/rooms`).set('x-csrf-token', o.csrf()).send({ name: 'Porch', isExterior: true, notes: 'North side' });
+    const porch = await o.agent
+      .post(`/api/takeoff/sites/${siteId}/rooms`)
+      .set('x-csrf-token', o.csrf())
+      .send({ name: 'Porch', isExterior: true, notes: 'North side' });
     expect(porch.body).toMatchObject({ name: 'Porch', isExterior: true, position: 1, surfaces: [], totals: { area: 0, length: 0 } });
 
     const renamed = await o.agent.patch(`/api/takeoff/rooms/${hall}`).set('x-csrf-token', o.csrf()).send({ name: 'Front stair hall' });
@@ -162,19 +215,42 @@ describe('site takeoff', () => {
     const moved = await o.agent.post(`/api/takeoff/rooms/${porch.body.id}/move`).set('x-csrf-token', o.csrf()).send({ to: 0 });
     expect(moved.body.rooms.map((r: { name: string }) => r.name)).toEqual(['Porch', 'Front stair hall']);
 
-    const wall = await addSurface(o, hall, { name: 'North wall', shape: { kind: 'walls', perimeter: 12, height: 10 }, disturbedPaintedArea: 4.5, notes: 'Patch the crack first' });
-    expect(wall.body).toMatchObject({ position: 0, disturbedPaintedArea: 4.5, notes: 'Patch the crack first', measure: { quantity: 120, formula: 'P·H − openings' } });
+    const wall = await addSurface(o, hall, {
+      name: 'North wall',
+      shape: { kind: 'walls', perimeter: 12, height: 10 },
+      disturbedPaintedArea: 4.5,
+      notes: 'Patch the crack first',
+    });
+    expect(wall.body).toMatchObject({
+      position: 0,
+      disturbedPaintedArea: 4.5,
+      notes: 'Patch the crack first',
+      measure: { quantity: 120, formula: 'P·H − openings' },
+    });
     const ceiling = await addSurface(o, hall, { name: 'Vault', shape: { kind: 'barrelVault', radius: 6, length: 20 } });
     const copy = await o.agent.post(`/api/takeoff/surfaces/${wall.body.id}/duplicate`).set('x-csrf-token', o.csrf());
     expect(copy.status).toBe(201);
-    expect(copy.body).toMatchObject({ name: 'North wall (copy)', position: 1, disturbedPaintedArea: 4.5, shape: { kind: 'walls', perimeter: 12, height: 10 } });
+    expect(copy.body).toMatchObject({
+      name: 'North wall (copy)',
+      position: 1,
+      disturbedPaintedArea: 4.5,
+      shape: { kind: 'walls', perimeter: 12, height: 10 },
+    });
     let view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
     expect(view.rooms[1].surfaces.map((s: { name: string }) => s.name)).toEqual(['North wall', 'North wall (copy)', 'Vault']);
     // DOMAIN.md §3.7 project check [D]: barrel r 6, L 20 → 120π = 376.99 ft²; with two 120 ft² walls.
     expect(view.rooms[1].totals.area).toBeCloseTo(240 + 120 * Math.PI, 9);
 
-    const patched = await o.agent.patch(`/api/takeoff/surfaces/${copy.body.id}`).set('x-csrf-token', o.csrf()).send({ name: 'South wall', disturbedPaintedArea: null });
-    expect(patched.body).toMatchObject({ name: 'South wall', disturbedPaintedArea: null, notes: 'Patch the crack first', measure: { quantity: 120 } });
+    const patched = await o.agent
+      .patch(`/api/takeoff/surfaces/${copy.body.id}`)
+      .set('x-csrf-token', o.csrf())
+      .send({ name: 'South wall', disturbedPaintedArea: null });
+    expect(patched.body).toMatchObject({
+      name: 'South wall',
+      disturbedPaintedArea: null,
+      notes: 'Patch the crack first',
+      measure: { quantity: 120 },
+    });
     const movedSurface = await o.agent.post(`/api/takeoff/surfaces/${ceiling.body.id}/move`).set('x-csrf-token', o.csrf()).send({ to: 0 });
     expect(movedSurface.body.rooms[1].surfaces.map((s: { name: string }) => s.name)).toEqual(['Vault', 'North wall', 'South wall']);
 
@@ -182,11 +258,23 @@ describe('site takeoff', () => {
     expect((await o.agent.delete(`/api/takeoff/rooms/${hall}`).set('x-csrf-token', o.csrf())).status).toBe(204);
     view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
     expect(view.rooms.map((r: { name: string }) => r.name)).toEqual(['Porch']);
-    expect((await o.agent.patch(`/api/takeoff/surfaces/${ceiling.body.id}`).set('x-csrf-token', o.csrf()).send({ name: 'x' })).status).toBe(404);
+    expect((await o.agent.patch(`/api/takeoff/surfaces/${ceiling.body.id}`).set('x-csrf-token', o.csrf()).send({ name: 'x' })).status).toBe(
+      404,
+    );
 
-    const actions = await withTenant(t.ctx.pool, o.firmId, async (tx) => (await tx.client.query(`select action, data from audit_log where action like 'takeoff.%' order by created_at, action`)).rows);
+    const actions = await withTenant(
+      t.ctx.pool,
+      o.firmId,
+      async (tx) =>
+        (await tx.client.query(`select action, data from audit_log where action like 'takeoff.%' order by created_at, action`)).rows,
+    );
     const counts = actions.reduce<Record<string, number>>((acc, a) => ({ ...acc, [a.action]: (acc[a.action] ?? 0) + 1 }), {});
-    expect(counts).toEqual({ 'takeoff.room_created': 2, 'takeoff.room_deleted': 1, 'takeoff.surface_created': 3, 'takeoff.surface_deleted': 1 });
+    expect(counts).toEqual({
+      'takeoff.room_created': 2,
+      'takeoff.room_deleted': 1,
+      'takeoff.surface_created': 3,
+      'takeoff.surface_deleted': 1,
+    });
     expect(actions.find((a) => a.action === 'takeoff.room_deleted').data).toMatchObject({ name: 'Front stair hall', surfacesDeleted: 2 });
   });
 
@@ -199,7 +287,10 @@ describe('site takeoff', () => {
     await o.agent.post('/api/team/invitations').set('x-csrf-token', o.csrf()).send({ email, role: 'crew' });
     const token = new URL(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email)))).searchParams.get('token')!;
     const crew = await newAgent(t.app);
-    await crew.agent.post('/api/auth/invitations/accept').set('x-csrf-token', crew.csrf()).send({ token, name: 'Crew', password: 'crew-password-2026' });
+    await crew.agent
+      .post('/api/auth/invitations/accept')
+      .set('x-csrf-token', crew.csrf())
+      .send({ token, name: 'Crew', password: 'crew-password-2026' });
     await crew.refresh();
 
     const read = await crew.agent.get(`/api/takeoff/sites/${siteId}`);
@@ -217,7 +308,14 @@ describe('site takeoff', () => {
       ['post', `/api/takeoff/surfaces/${surface.body.id}/move`, { to: 'x' }],
     ];
     for (const [method, path, body] of writes) {
-      const res = await (crew.agent as unknown as Record<string, (p: string) => { set: (k: string, v: string) => { send: (b: object) => Promise<{ status: number }> } }>)[method]!(path).set('x-csrf-token', crew.csrf()).send(body);
+      const res = await (
+        crew.agent as unknown as Record<
+          string,
+          (p: string) => { set: (k: string, v: string) => { send: (b: object) => Promise<{ status: number }> } }
+        >
+      )[method]!(path)
+        .set('x-csrf-token', crew.csrf())
+        .send(body);
       expect({ method, path, status: res.status }).toEqual({ method, path, status: 403 });
     }
     expect((await o.agent.get(`/api/takeoff/sites/${siteId}`)).body.rooms[0].surfaces).toHaveLength(1);
@@ -243,7 +341,14 @@ describe('site takeoff', () => {
       ['post', `/api/takeoff/surfaces/${surfaceId}/move`, { to: 0 }],
     ];
     for (const [method, path, body] of calls) {
-      const res = await (b.agent as unknown as Record<string, (p: string) => { set: (k: string, v: string) => { send: (x: object) => Promise<{ status: number }> } }>)[method]!(path).set('x-csrf-token', b.csrf()).send(body);
+      const res = await (
+        b.agent as unknown as Record<
+          string,
+          (p: string) => { set: (k: string, v: string) => { send: (x: object) => Promise<{ status: number }> } }
+        >
+      )[method]!(path)
+        .set('x-csrf-token', b.csrf())
+        .send(body);
       expect({ method, path, status: res.status }).toEqual({ method, path, status: 404 });
     }
     const still = (await a.agent.get(`/api/takeoff/sites/${siteId}`)).body;

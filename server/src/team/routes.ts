@@ -37,7 +37,10 @@ export function teamRoutes(ctx: AppContext): Router {
     res.json(member satisfies TeamMember);
   });
 
-  for (const [action, status] of [['deactivate', 'deactivated'], ['reactivate', 'active']] as const) {
+  for (const [action, status] of [
+    ['deactivate', 'deactivated'],
+    ['reactivate', 'active'],
+  ] as const) {
     router.post(`/members/:id/${action}`, async (req, res) => {
       const member = await withStaff(ctx, req, 'owner', (tx, staff) => changeMember(tx, staff, parse(idParam, req.params).id, { status }));
       res.json(member satisfies TeamMember);

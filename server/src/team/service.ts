@@ -28,7 +28,14 @@ const toInvitation = (inv: InvitationRow, now: Date): TeamInvitation => ({
 
 async function members(tx: TenantTx, you: string): Promise<TeamMember[]> {
   const rows = await tx.db
-    .select({ id: memberships.id, userId: users.id, name: users.name, email: users.email, role: memberships.role, status: memberships.status })
+    .select({
+      id: memberships.id,
+      userId: users.id,
+      name: users.name,
+      email: users.email,
+      role: memberships.role,
+      status: memberships.status,
+    })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(eq(memberships.tenantId, tx.tenantId))
@@ -43,7 +50,12 @@ export async function listMembers(tx: TenantTx, you: string): Promise<ItemList<T
 
 /** Invitations still worth showing: waiting for an answer, or expired unanswered (newest first, at most 100). */
 export async function listInvitations(tx: TenantTx, now: Date): Promise<ItemList<TeamInvitation>> {
-  const invites = await tx.db.select().from(invitations).where(eq(invitations.tenantId, tx.tenantId)).orderBy(desc(invitations.createdAt)).limit(100);
+  const invites = await tx.db
+    .select()
+    .from(invitations)
+    .where(eq(invitations.tenantId, tx.tenantId))
+    .orderBy(desc(invitations.createdAt))
+    .limit(100);
   return {
     items: invites.map((inv) => toInvitation(inv, now)).filter((inv) => inv.status === 'pending' || inv.status === 'expired'),
   };
@@ -58,23 +70,52 @@ export async function invite(ctx: AppContext, tx: TenantTx, actor: StaffPrincipa
   const pending = await tx.db
     .select()
     .from(invitations)
-    .where(and(eq(invitations.tenantId, tx.tenantId), eq(invitations.email, input.email), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)));
+    .where(
+      and(
+        eq(invitations.tenantId, tx.tenantId),
+        eq(invitations.email, input.email),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+      ),
+    );
   if (pending.some((inv) => inv.expiresAt > now)) {
-    throw conflict('That e-mail already has a pending invitation.', [{ field: 'email', message: 'An invitation to this e-mail is already waiting. Revoke it to send a new one.' }]);
+    throw conflict('That e-mail already has a pending invitation.', [
+      { field: 'email', message: 'An invitation to this e-mail is already waiting. Revoke it to send a new one.' },
+    ]);
   }
   const { token, hash } = newToken();
   const [inv] = await tx.db
     .insert(invitations)
-    .values({ tenantId: tx.tenantId, email: input.email, role: input.role, tokenHash: hash, invitedBy: actor.id, expiresAt: minutesFromNow(now, INVITATION_DAYS * 24 * 60) })
+    .values({
+      tenantId: tx.tenantId,
+      email: input.email,
+      role: input.role,
+      tokenHash: hash,
+      invitedBy: actor.id,
+      expiresAt: minutesFromNow(now, INVITATION_DAYS * 24 * 60),
+    })
     .returning();
   const firm = (await tx.db.select({ name: firms.name }).from(firms))[0];
   await enqueueMail(tx, ctx.queue, {
     purposeKey: `invitation:${inv!.id}`,
     tenantId: tx.tenantId,
     to: input.email,
-    ...invitationMail({ firmName: firm?.name ?? '', inviterName: actor.name, role: input.role, url: `${ctx.config.PUBLIC_URL}/accept-invitation?token=${token}`, days: INVITATION_DAYS }),
+    ...invitationMail({
+      firmName: firm?.name ?? '',
+      inviterName: actor.name,
+      role: input.role,
+      url: `${ctx.config.PUBLIC_URL}/accept-invitation?token=${token}`,
+      days: INVITATION_DAYS,
+    }),
   });
-  await recordAudit(tx, { actorUserId: actor.id, actorKind: 'staff', action: 'invitation.sent', entity: 'invitation', entityId: inv!.id, data: { email: input.email, role: input.role } });
+  await recordAudit(tx, {
+    actorUserId: actor.id,
+    actorKind: 'staff',
+    action: 'invitation.sent',
+    entity: 'invitation',
+    entityId: inv!.id,
+    data: { email: input.email, role: input.role },
+  });
   return toInvitation(inv!, now);
 }
 
@@ -82,7 +123,9 @@ export async function revokeInvitation(ctx: AppContext, tx: TenantTx, actor: Sta
   const updated = await tx.db
     .update(invitations)
     .set({ revokedAt: ctx.now() })
-    .where(and(eq(invitations.tenantId, tx.tenantId), eq(invitations.id, id), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
+    .where(
+      and(eq(invitations.tenantId, tx.tenantId), eq(invitations.id, id), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)),
+    )
     .returning({ id: invitations.id });
   if (!updated.length) throw notFound('pending invitation');
   await recordAudit(tx, { actorUserId: actor.id, actorKind: 'staff', action: 'invitation.revoked', entity: 'invitation', entityId: id });
@@ -100,9 +143,15 @@ export async function changeMember(
   if (!target) throw notFound('team member');
   const after = all.map((m) => (m.id === membershipId ? { ...m, ...change } : m));
   if (!after.some((m) => m.role === 'owner' && m.status === 'active')) {
-    throw conflict('The firm needs at least one active owner.', change.role ? [{ field: 'role', message: 'Make someone else an owner first.' }] : undefined);
+    throw conflict(
+      'The firm needs at least one active owner.',
+      change.role ? [{ field: 'role', message: 'Make someone else an owner first.' }] : undefined,
+    );
   }
-  await tx.db.update(memberships).set(change).where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.id, membershipId)));
+  await tx.db
+    .update(memberships)
+    .set(change)
+    .where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.id, membershipId)));
   await recordAudit(tx, {
     actorUserId: actor.id,
     actorKind: 'staff',

@@ -27,15 +27,24 @@ describe('invitations, end to end through the e-mail', () => {
     const preview = await guest.agent.get(`/api/auth/invitations/${token}`);
     expect(preview.body).toEqual({ firmName: 'Millbrook Lime Works', email, role: 'office' });
 
-    const accepted = await guest.agent.post('/api/auth/invitations/accept').set('x-csrf-token', guest.csrf()).send({ token, name: 'Otto Office', password: 'ledger-and-lime-77' });
+    const accepted = await guest.agent
+      .post('/api/auth/invitations/accept')
+      .set('x-csrf-token', guest.csrf())
+      .send({ token, name: 'Otto Office', password: 'ledger-and-lime-77' });
     expect(accepted.status).toBe(200);
     expect(accepted.body.user).toMatchObject({ role: 'office', firmId: owner.firmId, name: 'Otto Office' });
 
-    const reuse = await guest.agent.post('/api/auth/invitations/accept').set('x-csrf-token', accepted.body.csrfToken).send({ token, name: 'Otto', password: 'ledger-and-lime-78' });
+    const reuse = await guest.agent
+      .post('/api/auth/invitations/accept')
+      .set('x-csrf-token', accepted.body.csrfToken)
+      .send({ token, name: 'Otto', password: 'ledger-and-lime-78' });
     expect(reuse.status).toBe(410);
 
     const fresh = await newAgent(t.app);
-    const signin = await fresh.agent.post('/api/auth/signin').set('x-csrf-token', fresh.csrf()).send({ email, password: 'ledger-and-lime-77' });
+    const signin = await fresh.agent
+      .post('/api/auth/signin')
+      .set('x-csrf-token', fresh.csrf())
+      .send({ email, password: 'ledger-and-lime-77' });
     expect(signin.body.user.role).toBe('office');
 
     const members = await owner.agent.get('/api/team/members');
@@ -61,14 +70,26 @@ describe('invitations, end to end through the e-mail', () => {
     const existing = await signUpFirm(t.app, 'Existing Account Plaster');
     const inviter = await signUpFirm(t.app, 'Inviting Plaster');
     await inviter.agent.post('/api/team/invitations').set('x-csrf-token', inviter.csrf()).send({ email: existing.email, role: 'crew' });
-    const token = tokenFrom(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(existing.email) && /Inviting Plaster/.test(m.subject ?? ''))));
+    const token = tokenFrom(
+      linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(existing.email) && /Inviting Plaster/.test(m.subject ?? ''))),
+    );
     const guest = await newAgent(t.app);
     const statuses: number[] = [];
     for (let i = 0; i < 6; i++) {
-      statuses.push((await guest.agent.post('/api/auth/invitations/accept').set('x-csrf-token', guest.csrf()).send({ token, name: 'X', password: `wrong-guess-${i}-xyz` })).status);
+      statuses.push(
+        (
+          await guest.agent
+            .post('/api/auth/invitations/accept')
+            .set('x-csrf-token', guest.csrf())
+            .send({ token, name: 'X', password: `wrong-guess-${i}-xyz` })
+        ).status,
+      );
     }
     expect(statuses).toEqual([409, 409, 409, 409, 409, 423]);
-    const right = await guest.agent.post('/api/auth/invitations/accept').set('x-csrf-token', guest.csrf()).send({ token, name: 'X', password: existing.password });
+    const right = await guest.agent
+      .post('/api/auth/invitations/accept')
+      .set('x-csrf-token', guest.csrf())
+      .send({ token, name: 'X', password: existing.password });
     expect(right.status).toBe(423);
   });
 
@@ -79,7 +100,10 @@ describe('invitations, end to end through the e-mail', () => {
     const again = await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email, role: 'crew' });
     expect(again.status).toBe(409);
     expect(again.body.errors[0].field).toBe('email');
-    const self = await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email: owner.email, role: 'crew' });
+    const self = await owner.agent
+      .post('/api/team/invitations')
+      .set('x-csrf-token', owner.csrf())
+      .send({ email: owner.email, role: 'crew' });
     expect(self.status).toBe(409);
   });
 
@@ -122,7 +146,10 @@ describe('roles', () => {
     await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email, role });
     const token = tokenFrom(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email))));
     const member = await newAgent(t.app);
-    const res = await member.agent.post('/api/auth/invitations/accept').set('x-csrf-token', member.csrf()).send({ token, name: 'Member', password: 'member-pass-2026' });
+    const res = await member.agent
+      .post('/api/auth/invitations/accept')
+      .set('x-csrf-token', member.csrf())
+      .send({ token, name: 'Member', password: 'member-pass-2026' });
     await member.refresh();
     return { owner, member, membershipId: '', userId: res.body.user.id as string };
   }
@@ -133,7 +160,10 @@ describe('roles', () => {
       expect((await member.agent.get('/api/team/members')).status).toBe(200);
       expect((await member.agent.get('/api/team/invitations')).status).toBe(200);
       expect((await member.agent.get('/api/firm')).status).toBe(200);
-      expect((await member.agent.post('/api/team/invitations').set('x-csrf-token', member.csrf()).send({ email: uniqueEmail(), role: 'crew' })).status).toBe(403);
+      expect(
+        (await member.agent.post('/api/team/invitations').set('x-csrf-token', member.csrf()).send({ email: uniqueEmail(), role: 'crew' }))
+          .status,
+      ).toBe(403);
       const patch = await member.agent.patch('/api/firm').set('x-csrf-token', member.csrf()).send({});
       expect(patch.status).toBe(403);
     }
@@ -173,7 +203,10 @@ describe('roles', () => {
 
   it('answers 400 naming the field for a bad role or id', async () => {
     const owner = await signUpFirm(t.app);
-    const bad = await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email: uniqueEmail(), role: 'boss' });
+    const bad = await owner.agent
+      .post('/api/team/invitations')
+      .set('x-csrf-token', owner.csrf())
+      .send({ email: uniqueEmail(), role: 'boss' });
     expect(bad.status).toBe(400);
     expect(bad.body.errors[0].field).toBe('role');
     const badId = await owner.agent.patch('/api/team/members/not-a-uuid').set('x-csrf-token', owner.csrf()).send({ role: 'crew' });
@@ -203,17 +236,25 @@ describe('firm settings', () => {
     const saved = await owner.agent.patch('/api/firm').set('x-csrf-token', owner.csrf()).send(settings);
     expect(saved.status).toBe(200);
     expect(saved.body).toMatchObject({ ...settings });
-    const audit = await withTenant(t.ctx.pool, owner.firmId, (tx) => tx.client.query(`select action, data from audit_log where action = 'firm.settings_changed'`));
+    const audit = await withTenant(t.ctx.pool, owner.firmId, (tx) =>
+      tx.client.query(`select action, data from audit_log where action = 'firm.settings_changed'`),
+    );
     expect(audit.rows).toHaveLength(1);
     expect(audit.rows[0].data.changed).toEqual(expect.arrayContaining(['name', 'units', 'language']));
   });
 
   it('refuses a bad time zone, currency and units, naming each field', async () => {
     const owner = await signUpFirm(t.app);
-    const res = await owner.agent.patch('/api/firm').set('x-csrf-token', owner.csrf()).send({ ...settings, timeZone: 'Mars/Olympus', currency: 'usd', units: 'cubits' });
+    const res = await owner.agent
+      .patch('/api/firm')
+      .set('x-csrf-token', owner.csrf())
+      .send({ ...settings, timeZone: 'Mars/Olympus', currency: 'usd', units: 'cubits' });
     expect(res.status).toBe(400);
     expect(res.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['currency', 'timeZone', 'units']);
-    const unknownCurrency = await owner.agent.patch('/api/firm').set('x-csrf-token', owner.csrf()).send({ ...settings, currency: 'ZZZ' });
+    const unknownCurrency = await owner.agent
+      .patch('/api/firm')
+      .set('x-csrf-token', owner.csrf())
+      .send({ ...settings, currency: 'ZZZ' });
     expect(unknownCurrency.status).toBe(400);
     expect(unknownCurrency.body.errors[0].field).toBe('currency');
   });

@@ -71,7 +71,10 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
 export type Agent = ReturnType<typeof request.agent>;
 
 /** A browser-like client: keeps the cookie and sends the CSRF token the session hands out. */
-export async function newAgent(app: Express, area: 'auth' | 'portal' = 'auth'): Promise<{ agent: Agent; csrf: () => string; refresh: () => Promise<void> }> {
+export async function newAgent(
+  app: Express,
+  area: 'auth' | 'portal' = 'auth',
+): Promise<{ agent: Agent; csrf: () => string; refresh: () => Promise<void> }> {
   const agent = request.agent(app);
   let token = '';
   const refresh = async () => {

@@ -17,10 +17,7 @@ import { email, newPassword, personName, token } from './fields';
 export const signInRequest = requestSchema<SignInRequest>()(
   z.strictObject({
     email,
-    password: z
-      .string({ error: 'Enter your password.' })
-      .min(1, { error: 'Enter your password.' })
-      .max(PASSWORD_MAX_LENGTH),
+    password: z.string({ error: 'Enter your password.' }).min(1, { error: 'Enter your password.' }).max(PASSWORD_MAX_LENGTH),
   }),
 );
 
@@ -39,13 +36,9 @@ export const signUpRequest = requestSchema<SignUpRequest>()(
 
 export const passwordResetRequest = requestSchema<PasswordResetRequest>()(z.strictObject({ email }));
 
-export const passwordResetComplete = requestSchema<PasswordResetComplete>()(
-  z.strictObject({ token, password: newPassword }),
-);
+export const passwordResetComplete = requestSchema<PasswordResetComplete>()(z.strictObject({ token, password: newPassword }));
 
-export const invitationAccept = requestSchema<InvitationAccept>()(
-  z.strictObject({ token, name: personName, password: newPassword }),
-);
+export const invitationAccept = requestSchema<InvitationAccept>()(z.strictObject({ token, name: personName, password: newPassword }));
 
 /** Portal (client) sign-in by e-mailed one-time link. */
 export const portalLinkRequest = requestSchema<PortalLinkRequest>()(z.strictObject({ email }));

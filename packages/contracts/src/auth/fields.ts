@@ -1,11 +1,5 @@
 import { z } from 'zod';
-import {
-  EMAIL_MAX_LENGTH,
-  LINK_TOKEN_PATTERN,
-  PASSWORD_MAX_LENGTH,
-  PASSWORD_MIN_LENGTH,
-  PERSON_NAME_MAX_LENGTH,
-} from './auth-types';
+import { EMAIL_MAX_LENGTH, LINK_TOKEN_PATTERN, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, PERSON_NAME_MAX_LENGTH } from './auth-types';
 
 export const email = z
   .string({ error: 'Enter an e-mail address.' })
@@ -26,6 +20,4 @@ export const personName = z
   .min(1, { error: 'Enter a name.' })
   .max(PERSON_NAME_MAX_LENGTH, { error: `Use at most ${PERSON_NAME_MAX_LENGTH} characters.` });
 
-export const token = z
-  .string({ error: 'The link is missing its code.' })
-  .regex(LINK_TOKEN_PATTERN, { error: 'This link is not valid.' });
+export const token = z.string({ error: 'The link is missing its code.' }).regex(LINK_TOKEN_PATTERN, { error: 'This link is not valid.' });

@@ -1,18 +1,20 @@
 import { z } from 'zod';
-import {
-  ISO_DATE_PATTERN,
-  MONEY_AMOUNT_PATTERN,
-  YEAR_BUILT_MAX,
-  YEAR_BUILT_MIN,
-} from './field-limits';
+import { ISO_DATE_PATTERN, MONEY_AMOUNT_PATTERN, YEAR_BUILT_MAX, YEAR_BUILT_MIN } from './field-limits';
 import { CURSOR_MAX_LENGTH, PAGE_SIZE_DEFAULT, PAGE_SIZE_MAX } from './lists';
 
 /** Trimmed text with a length cap; empty allowed unless `min` says otherwise. */
 export const text = (max: number, label = 'This field') =>
-  z.string({ error: `${label} must be text.` }).trim().max(max, { error: `Use at most ${max} characters.` });
+  z
+    .string({ error: `${label} must be text.` })
+    .trim()
+    .max(max, { error: `Use at most ${max} characters.` });
 
 export const requiredText = (max: number, missing: string) =>
-  z.string({ error: missing }).trim().min(1, { error: missing }).max(max, { error: `Use at most ${max} characters.` });
+  z
+    .string({ error: missing })
+    .trim()
+    .min(1, { error: missing })
+    .max(max, { error: `Use at most ${max} characters.` });
 
 /** Money in API bodies is a decimal string ("1250.00"), never a float. */
 export const moneyAmount = z
@@ -40,10 +42,5 @@ const pageSizeWords = `Use 1 to ${PAGE_SIZE_MAX}.`;
 /** Keyset page: `after` is an opaque cursor from the previous page. */
 export const pageQuery = {
   after: z.string().max(CURSOR_MAX_LENGTH).optional(),
-  limit: z.coerce
-    .number()
-    .int()
-    .min(1, { error: pageSizeWords })
-    .max(PAGE_SIZE_MAX, { error: pageSizeWords })
-    .default(PAGE_SIZE_DEFAULT),
+  limit: z.coerce.number().int().min(1, { error: pageSizeWords }).max(PAGE_SIZE_MAX, { error: pageSizeWords }).default(PAGE_SIZE_DEFAULT),
 };

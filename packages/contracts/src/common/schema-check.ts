@@ -12,7 +12,5 @@ type Same<A, B> = Assignable<A, B> extends true ? Assignable<keyof A, keyof B> :
  * A mismatch fails here, naming the interface.
  */
 export function requestSchema<Request>() {
-  return <S extends z.ZodType>(
-    schema: S & (Same<z.output<S>, Request> extends true ? unknown : { parsesExactly: Request }),
-  ): S => schema;
+  return <S extends z.ZodType>(schema: S & (Same<z.output<S>, Request> extends true ? unknown : { parsesExactly: Request })): S => schema;
 }

@@ -38,7 +38,14 @@ export function assembleEstimateInput(context: EstimateContext, inputs: Estimate
     equipment: inputs.equipment,
     subcontracts: inputs.subcontracts,
     sundries: inputs.sundries,
-    ...(inputs.discount ? { discount: inputs.discount.kind === 'percent' ? { kind: 'share' as const, share: String(inputs.discount.percent / 100) } : { kind: 'amount' as const, amount: inputs.discount.amount } } : {}),
+    ...(inputs.discount
+      ? {
+          discount:
+            inputs.discount.kind === 'percent'
+              ? { kind: 'share' as const, share: String(inputs.discount.percent / 100) }
+              : { kind: 'amount' as const, amount: inputs.discount.amount },
+        }
+      : {}),
     options: inputs.addOns.map((a) => ({ id: a.id, label: a.label, labourHours: a.labourHours, materialsCost: a.materialsCost })),
     perAreaRates: inputs.perAreaRates,
   };

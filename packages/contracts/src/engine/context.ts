@@ -6,7 +6,12 @@ export interface EngineRoom {
   readonly id: string;
   readonly name: string;
   readonly isExterior: boolean;
-  readonly surfaces: ReadonlyArray<{ readonly id: string; readonly name: string; readonly shape: SurfaceShape; readonly disturbedPaintedArea: string | null }>;
+  readonly surfaces: ReadonlyArray<{
+    readonly id: string;
+    readonly name: string;
+    readonly shape: SurfaceShape;
+    readonly disturbedPaintedArea: string | null;
+  }>;
 }
 
 /** Everything an estimate is computed from, besides the office's choices. */

@@ -29,7 +29,11 @@ const factor = z
   .min(L.multiplier.min, { error: 'A multiplier is 1 or more (1 = no extra time).' })
   .max(L.multiplier.max, { error: `Use at most ${L.multiplier.max}.` });
 
-const weekday = z.number().int().min(ISO_WEEKDAYS[0]).max(ISO_WEEKDAYS[ISO_WEEKDAYS.length - 1]!);
+const weekday = z
+  .number()
+  .int()
+  .min(ISO_WEEKDAYS[0])
+  .max(ISO_WEEKDAYS[ISO_WEEKDAYS.length - 1]!);
 
 /**
  * How a firm prices and schedules work. Percentages are whole percents here (20 = 20 %); the
@@ -83,10 +87,7 @@ export const estimatingSettings = requestSchema<EstimatingSettings>()(
         .number({ error: 'Enter a height.' })
         .gt(L.scaffoldHeight.above, { error: 'More than 0.' })
         .max(L.scaffoldHeight.max),
-      workingReach: z
-        .number({ error: 'Enter a reach.' })
-        .min(L.workingReach.min, { error: 'Cannot be negative.' })
-        .max(L.workingReach.max),
+      workingReach: z.number({ error: 'Enter a reach.' }).min(L.workingReach.min, { error: 'Cannot be negative.' }).max(L.workingReach.max),
       minDeductedOpeningArea: z
         .number({ error: 'Enter an area.' })
         .min(L.minDeductedOpeningArea.min, { error: 'Cannot be negative.' })

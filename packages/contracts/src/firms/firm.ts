@@ -24,7 +24,10 @@ function isKnownTimeZone(tz: string): boolean {
 }
 
 const line = (label: string, max: number) =>
-  z.string({ error: `Enter the ${label}.` }).trim().max(max, { error: `Use at most ${max} characters.` });
+  z
+    .string({ error: `Enter the ${label}.` })
+    .trim()
+    .max(max, { error: `Use at most ${max} characters.` });
 
 export const firmSettingsUpdate = requestSchema<FirmSettingsUpdate>()(
   z.strictObject({

@@ -39,7 +39,15 @@ export function isOpenStage(stage: InquiryStage): boolean {
   return stage !== 'won' && stage !== 'lost';
 }
 
-export const INQUIRY_SOURCES = ['web_form', 'phone', 'designer_referral', 'contractor_referral', 'past_client', 'showroom', 'other'] as const;
+export const INQUIRY_SOURCES = [
+  'web_form',
+  'phone',
+  'designer_referral',
+  'contractor_referral',
+  'past_client',
+  'showroom',
+  'other',
+] as const;
 export type InquirySource = (typeof INQUIRY_SOURCES)[number];
 export const SOURCE_LABELS: Readonly<Record<InquirySource, string>> = {
   web_form: 'Inquiry form',

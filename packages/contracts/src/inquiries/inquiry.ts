@@ -138,9 +138,7 @@ const likelihood = z.coerce
 
 export const stageLikelihoodUpdate = requestSchema<StageLikelihoodUpdate>()(
   z.strictObject({
-    likelihoods: z.strictObject(
-      Object.fromEntries(INQUIRY_STAGES.map((s) => [s, likelihood])) as Record<InquiryStage, typeof likelihood>,
-    ),
+    likelihoods: z.strictObject(Object.fromEntries(INQUIRY_STAGES.map((s) => [s, likelihood])) as Record<InquiryStage, typeof likelihood>),
   }),
 );
 

@@ -50,19 +50,24 @@ export const mixRecipeInput = z
     by: z.enum(RECIPE_BASES, { error: 'Say whether the parts are by volume or by weight.' }),
     baseProductId: uuid('product'),
     components: z
-      .array(z.strictObject({ productId: uuid('product'), parts: positive('Enter the parts as a number.', 'Parts must be more than zero.') }), {
-        error: 'List the products in the mix.',
-      })
+      .array(
+        z.strictObject({ productId: uuid('product'), parts: positive('Enter the parts as a number.', 'Parts must be more than zero.') }),
+        {
+          error: 'List the products in the mix.',
+        },
+      )
       .min(L.recipeProductsMin, { error: 'A mix recipe needs at least two products; use a single product otherwise.' })
       .max(L.recipeProductsMax, { error: `Use at most ${L.recipeProductsMax} products in one mix.` }),
   })
   .superRefine((r, ctx) => {
     const seen = new Set<string>();
     r.components.forEach((c, i) => {
-      if (seen.has(c.productId)) ctx.addIssue({ code: 'custom', path: ['components', i, 'productId'], message: 'This product is already in the mix.' });
+      if (seen.has(c.productId))
+        ctx.addIssue({ code: 'custom', path: ['components', i, 'productId'], message: 'This product is already in the mix.' });
       seen.add(c.productId);
     });
-    if (!seen.has(r.baseProductId)) ctx.addIssue({ code: 'custom', path: ['baseProductId'], message: 'The base must be one of the products in the mix.' });
+    if (!seen.has(r.baseProductId))
+      ctx.addIssue({ code: 'custom', path: ['baseProductId'], message: 'The base must be one of the products in the mix.' });
   });
 
 const multiplier = numberField('Enter the multiplier as a number, like 1.25.')
@@ -75,7 +80,9 @@ export const finishLayerInput = z
     /** made by the browser (a uuid or short id); keeps a layer's identity across reorders */
     id: z
       .string({ error: 'Each layer needs an id.' })
-      .regex(new RegExp(`^[A-Za-z0-9_-]{1,${L.layerIdMax}}$`), { error: `A layer id uses letters, digits, - and _ (at most ${L.layerIdMax}).` }),
+      .regex(new RegExp(`^[A-Za-z0-9_-]{1,${L.layerIdMax}}$`), {
+        error: `A layer id uses letters, digits, - and _ (at most ${L.layerIdMax}).`,
+      }),
     name: requiredText(L.layerNameMax, 'Name the layer, like "Scratch coat" or "Glaze".'),
     method: applicationMethod,
     productId: uuid('product').optional(),
@@ -113,7 +120,11 @@ export const finishLayerInput = z
       ctx.addIssue({ code: 'custom', path: ['productId'], message: 'Use either one product or a mix recipe, not both.' });
     }
     if (l.coatCoverages && l.coatCoverages.length !== l.coats) {
-      ctx.addIssue({ code: 'custom', path: ['coatCoverages'], message: `Give one coverage per coat: ${l.coats} coat${l.coats === 1 ? '' : 's'}, ${l.coatCoverages.length} given.` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['coatCoverages'],
+        message: `Give one coverage per coat: ${l.coats} coat${l.coats === 1 ? '' : 's'}, ${l.coatCoverages.length} given.`,
+      });
     }
   });
 

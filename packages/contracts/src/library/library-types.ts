@@ -1,4 +1,13 @@
-import type { ApplicationMethod, Coverage, FinishLayer, LabourMultipliers, LengthUnit, MixRecipe, ProductHazards, QuantityUnit } from '@layerbook/domain';
+import type {
+  ApplicationMethod,
+  Coverage,
+  FinishLayer,
+  LabourMultipliers,
+  LengthUnit,
+  MixRecipe,
+  ProductHazards,
+  QuantityUnit,
+} from '@layerbook/domain';
 
 /*
  * The library's vocabulary, limits and answers, free of zod so the apps can import them
@@ -13,16 +22,47 @@ export const MASS_UNITS = ['lb', 'oz', 'kg', 'g'] as const;
 export const QUANTITY_UNITS = [...VOLUME_UNITS, ...MASS_UNITS] as const satisfies readonly QuantityUnit[];
 /** Units a coverage or production rate counts surface in (unit² for areas, unit for running length). */
 export const LENGTH_UNITS = ['ft', 'm', 'yd', 'in', 'cm', 'mm'] as const satisfies readonly LengthUnit[];
-export const APPLICATION_METHODS = ['roll', 'brush', 'spray', 'trowel', 'burnish', 'glaze', 'wax', 'sand', 'stencil', 'other'] as const satisfies readonly ApplicationMethod[];
-export const PRODUCT_KINDS = ['primer', 'paint', 'plaster', 'lime', 'glaze', 'medium', 'colorant', 'sealer', 'wax', 'solvent', 'other'] as const;
+export const APPLICATION_METHODS = [
+  'roll',
+  'brush',
+  'spray',
+  'trowel',
+  'burnish',
+  'glaze',
+  'wax',
+  'sand',
+  'stencil',
+  'other',
+] as const satisfies readonly ApplicationMethod[];
+export const PRODUCT_KINDS = [
+  'primer',
+  'paint',
+  'plaster',
+  'lime',
+  'glaze',
+  'medium',
+  'colorant',
+  'sealer',
+  'wax',
+  'solvent',
+  'other',
+] as const;
 export type ProductKind = (typeof PRODUCT_KINDS)[number];
 export const COVERAGE_KINDS = ['spreadRate', 'consumption'] as const satisfies readonly Coverage['kind'][];
 export type CoverageKind = (typeof COVERAGE_KINDS)[number];
-export const DILUTION_CONVENTIONS = ['ofConcentrate', 'ofMix'] as const satisfies readonly NonNullable<FinishLayer['dilution']>['convention'][];
+export const DILUTION_CONVENTIONS = ['ofConcentrate', 'ofMix'] as const satisfies readonly NonNullable<
+  FinishLayer['dilution']
+>['convention'][];
 export type DilutionConvention = (typeof DILUTION_CONVENTIONS)[number];
 export const RECIPE_BASES = ['volume', 'weight'] as const satisfies readonly MixRecipe['by'][];
 export type RecipeBasis = (typeof RECIPE_BASES)[number];
-export const MULTIPLIER_NAMES = ['ceiling', 'height', 'curvedWall', 'curvedCeiling', 'occupied'] as const satisfies readonly (keyof LabourMultipliers)[];
+export const MULTIPLIER_NAMES = [
+  'ceiling',
+  'height',
+  'curvedWall',
+  'curvedCeiling',
+  'occupied',
+] as const satisfies readonly (keyof LabourMultipliers)[];
 export type MultiplierName = (typeof MULTIPLIER_NAMES)[number];
 /** Which part of the library a list shows. */
 export const ARCHIVED_FILTERS = ['exclude', 'include', 'only'] as const;
@@ -33,7 +73,11 @@ type MissingLength = Exclude<LengthUnit, (typeof LENGTH_UNITS)[number]>;
 type MissingMethod = Exclude<ApplicationMethod, (typeof APPLICATION_METHODS)[number]>;
 type MissingCoverage = Exclude<Coverage['kind'], CoverageKind>;
 type MissingMultiplier = Exclude<keyof LabourMultipliers, MultiplierName>;
-export const ALL_LIBRARY_UNITS_LISTED: [MissingQuantity | MissingLength | MissingMethod | MissingCoverage | MissingMultiplier] extends [never] ? true : never = true;
+export const ALL_LIBRARY_UNITS_LISTED: [MissingQuantity | MissingLength | MissingMethod | MissingCoverage | MissingMultiplier] extends [
+  never,
+]
+  ? true
+  : never = true;
 
 export const PRODUCT_KIND_LABELS: Readonly<Record<ProductKind, string>> = {
   primer: 'Primer',

@@ -2,7 +2,15 @@ import { isMassUnit } from '@layerbook/domain';
 import { z } from 'zod';
 import { moneyAmount, requiredText, text } from '../common/fields';
 import { requestSchema } from '../common/schema-check';
-import { ARCHIVED_FILTERS, type ContainerInput, PRODUCT_KINDS, PRODUCT_LIMITS, type ProductHazardsInput, type ProductInput, type ProductUpdate } from './library-types';
+import {
+  ARCHIVED_FILTERS,
+  type ContainerInput,
+  PRODUCT_KINDS,
+  PRODUCT_LIMITS,
+  type ProductHazardsInput,
+  type ProductInput,
+  type ProductUpdate,
+} from './library-types';
 import { numberField, quantityUnit } from './units';
 
 const L = PRODUCT_LIMITS;
@@ -30,7 +38,9 @@ export const productHazards = requestSchema<ProductHazardsInput>()(
 );
 
 const sdsUrl = z.union([
-  z.url({ protocol: /^https?$/, error: 'Enter a web address starting with https://.' }).max(L.sdsUrlMax, { error: `Use at most ${L.sdsUrlMax} characters.` }),
+  z
+    .url({ protocol: /^https?$/, error: 'Enter a web address starting with https://.' })
+    .max(L.sdsUrlMax, { error: `Use at most ${L.sdsUrlMax} characters.` }),
   z.literal(''),
 ]);
 
@@ -57,7 +67,9 @@ function checkContainerUnits(p: { unit?: ProductInput['unit']; containers?: Cont
       ctx.addIssue({
         code: 'custom',
         path: ['containers', i, 'unit'],
-        message: byWeight ? 'This product is counted by weight; give the container size by weight too.' : 'This product is counted by volume; give the container size by volume too.',
+        message: byWeight
+          ? 'This product is counted by weight; give the container size by weight too.'
+          : 'This product is counted by volume; give the container size by volume too.',
       });
     }
   });

@@ -41,7 +41,10 @@ export const estimateInputs = requestSchema<EstimateInputs>()(
       sundries: costLines,
       discount: z
         .discriminatedUnion('kind', [
-          z.strictObject({ kind: z.literal('percent'), percent: z.number().gt(0, { error: 'More than 0 %.' }).max(L.discountPercentMax, { error: 'At most 100 %.' }) }),
+          z.strictObject({
+            kind: z.literal('percent'),
+            percent: z.number().gt(0, { error: 'More than 0 %.' }).max(L.discountPercentMax, { error: 'At most 100 %.' }),
+          }),
           z.strictObject({ kind: z.literal('amount'), amount: moneyAmount }),
         ])
         .nullable(),
@@ -55,7 +58,12 @@ export const estimateInputs = requestSchema<EstimateInputs>()(
         ids.add(variant.id);
         const seen = new Set<string>();
         variant.surfaces.forEach((s, j) => {
-          if (seen.has(s.surfaceId)) ctx.addIssue({ code: 'custom', path: ['variants', i, 'surfaces', j, 'surfaceId'], message: 'This surface already has a finish in this option.' });
+          if (seen.has(s.surfaceId))
+            ctx.addIssue({
+              code: 'custom',
+              path: ['variants', i, 'surfaces', j, 'surfaceId'],
+              message: 'This surface already has a finish in this option.',
+            });
           seen.add(s.surfaceId);
         });
       });

@@ -50,9 +50,7 @@ export interface SnapshotPrice {
 }
 
 export type SnapshotPaymentTrigger =
-  | { readonly kind: 'acceptance' }
-  | { readonly kind: 'layerComplete'; readonly layerId: string }
-  | { readonly kind: 'walkthrough' };
+  { readonly kind: 'acceptance' } | { readonly kind: 'layerComplete'; readonly layerId: string } | { readonly kind: 'walkthrough' };
 
 export interface SnapshotPayment {
   readonly id: string;

@@ -81,7 +81,13 @@ export const DIM_WORDS = {
   corner: 'Enter a number, like 12 or -3.5.',
 } as const;
 
-const f = (key: DimKey, label: string, noun: string, rule: DimRule = 'length', hint?: string): DimField => ({ key, label, noun, rule, ...(hint ? { hint } : {}) });
+const f = (key: DimKey, label: string, noun: string, rule: DimRule = 'length', hint?: string): DimField => ({
+  key,
+  label,
+  noun,
+  rule,
+  ...(hint ? { hint } : {}),
+});
 const RADIUS = f('radius', 'Radius', 'radius', 'length', 'Half the distance across.');
 const WALL_HEIGHT = f('height', 'Wall height', 'wall height');
 const RISE = f('rise', 'Rise', 'rise', 'length', 'From the springing line up to the highest point.');
@@ -97,18 +103,57 @@ export const OPENING_FIELDS = [
 export const ELEVATION_NOUN = 'height above the floor';
 
 /** Generic in the kind so the list's type names each kind it offers (checked at the end). */
-function choice<K extends SurfaceKind>(kind: K, group: ShapeGroup, label: string, defaultName: string, fields: DimField[], extra: Partial<ShapeChoice> = {}): ShapeChoice & { readonly kind: K } {
-  return { group, label, defaultName, fields, hasOpenings: false, hasElevation: true, hasCorners: false, hasMeasureBy: false, ...extra, kind };
+function choice<K extends SurfaceKind>(
+  kind: K,
+  group: ShapeGroup,
+  label: string,
+  defaultName: string,
+  fields: DimField[],
+  extra: Partial<ShapeChoice> = {},
+): ShapeChoice & { readonly kind: K } {
+  return {
+    group,
+    label,
+    defaultName,
+    fields,
+    hasOpenings: false,
+    hasElevation: true,
+    hasCorners: false,
+    hasMeasureBy: false,
+    ...extra,
+    kind,
+  };
 }
 
 const WALL_EXTRAS = { hasOpenings: true, hasElevation: false } as const;
 
 export const SHAPE_CHOICES = [
-  choice('walls', 'Walls', 'Straight walls, by perimeter', 'Walls', [f('perimeter', 'Perimeter', 'perimeter', 'length', 'All the wall lengths added together.'), WALL_HEIGHT], WALL_EXTRAS),
-  choice('gable', 'Walls', 'Gable wall (triangle)', 'Gable wall', [f('base', 'Base width', 'base width'), f('height', 'Height', 'height', 'length', 'From the base up to the peak.')]),
-  choice('trapezoid', 'Walls', 'Trapezoid wall (stair side, clipped gable)', 'Stair wall', [f('base1', 'Bottom width', 'bottom width'), f('base2', 'Top width', 'top width'), f('height', 'Height', 'height')]),
+  choice(
+    'walls',
+    'Walls',
+    'Straight walls, by perimeter',
+    'Walls',
+    [f('perimeter', 'Perimeter', 'perimeter', 'length', 'All the wall lengths added together.'), WALL_HEIGHT],
+    WALL_EXTRAS,
+  ),
+  choice('gable', 'Walls', 'Gable wall (triangle)', 'Gable wall', [
+    f('base', 'Base width', 'base width'),
+    f('height', 'Height', 'height', 'length', 'From the base up to the peak.'),
+  ]),
+  choice('trapezoid', 'Walls', 'Trapezoid wall (stair side, clipped gable)', 'Stair wall', [
+    f('base1', 'Bottom width', 'bottom width'),
+    f('base2', 'Top width', 'top width'),
+    f('height', 'Height', 'height'),
+  ]),
   choice('roundWalls', 'Walls', 'Round room walls (all the way round)', 'Round walls', [RADIUS, WALL_HEIGHT], WALL_EXTRAS),
-  choice('curvedWall', 'Walls', 'Curved wall segment', 'Curved wall', [RADIUS, f('angleDegrees', 'Angle the wall turns through', 'angle in degrees', 'angle', 'A quarter circle is 90°.'), WALL_HEIGHT], WALL_EXTRAS),
+  choice(
+    'curvedWall',
+    'Walls',
+    'Curved wall segment',
+    'Curved wall',
+    [RADIUS, f('angleDegrees', 'Angle the wall turns through', 'angle in degrees', 'angle', 'A quarter circle is 90°.'), WALL_HEIGHT],
+    WALL_EXTRAS,
+  ),
   choice('ceilingRect', 'Ceilings', 'Flat ceiling, rectangle', 'Ceiling', [f('length', 'Length', 'length'), f('width', 'Width', 'width')]),
   choice('ceilingCircle', 'Ceilings', 'Flat ceiling, circle', 'Round ceiling', [RADIUS]),
   choice('ceilingPolygon', 'Ceilings', 'Flat ceiling, by its corners', 'Ceiling', [], { hasCorners: true }),
@@ -119,10 +164,20 @@ export const SHAPE_CHOICES = [
     RISE,
   ]),
   choice('hemisphere', 'Ceilings', 'Dome (half sphere)', 'Dome', [RADIUS]),
-  choice('sphericalCap', 'Ceilings', 'Shallow dome (base radius and rise)', 'Shallow dome', [f('baseRadius', 'Base radius', 'base radius', 'length', 'Half the width across the base of the dome.'), RISE]),
-  choice('sphericalCapFromSphere', 'Ceilings', 'Shallow dome (sphere radius and rise)', 'Shallow dome', [f('sphereRadius', 'Sphere radius', 'sphere radius', 'length', 'From a drawing: the radius of the whole sphere.'), RISE]),
+  choice('sphericalCap', 'Ceilings', 'Shallow dome (base radius and rise)', 'Shallow dome', [
+    f('baseRadius', 'Base radius', 'base radius', 'length', 'Half the width across the base of the dome.'),
+    RISE,
+  ]),
+  choice('sphericalCapFromSphere', 'Ceilings', 'Shallow dome (sphere radius and rise)', 'Shallow dome', [
+    f('sphereRadius', 'Sphere radius', 'sphere radius', 'length', 'From a drawing: the radius of the whole sphere.'),
+    RISE,
+  ]),
   choice('barrelVault', 'Ceilings', 'Barrel vault (half round)', 'Barrel vault', [RADIUS, f('length', 'Length of the vault', 'length')]),
-  choice('segmentalVault', 'Ceilings', 'Segmental vault (flatter arc)', 'Segmental vault', [f('span', 'Span', 'span', 'length', 'Wall to wall, across the arc.'), RISE, f('length', 'Length of the vault', 'length')]),
+  choice('segmentalVault', 'Ceilings', 'Segmental vault (flatter arc)', 'Segmental vault', [
+    f('span', 'Span', 'span', 'length', 'Wall to wall, across the arc.'),
+    RISE,
+    f('length', 'Length of the vault', 'length'),
+  ]),
   choice('groinVault', 'Ceilings', 'Groin vault over a square bay', 'Groin vault', [f('side', 'Bay side', 'bay side')]),
   choice('cloisterVault', 'Ceilings', 'Cloister vault over a square bay', 'Cloister vault', [f('side', 'Bay side', 'bay side')]),
   choice('coffers', 'Ceilings', 'Coffers (recessed panels)', 'Coffers', [
@@ -132,7 +187,9 @@ export const SHAPE_CHOICES = [
     f('panelArea', 'Panel area of one coffer', 'panel area', 'area'),
   ]),
   choice('crownStraight', 'Running length', 'Crown along a straight run', 'Crown', [f('length', 'Length', 'length')]),
-  choice('crownCircular', 'Running length', 'Crown around a round room', 'Crown', [f('radius', 'Room radius', 'radius', 'length', 'Measured at the wall line.')]),
+  choice('crownCircular', 'Running length', 'Crown around a round room', 'Crown', [
+    f('radius', 'Room radius', 'radius', 'length', 'Measured at the wall line.'),
+  ]),
   choice(
     'beams',
     'Running length',
@@ -149,10 +206,12 @@ export const SHAPE_CHOICES = [
   choice('border', 'Running length', 'Border or band', 'Border', [f('length', 'Length', 'length')]),
 ] as const;
 
-export const SHAPE_GROUPS: readonly { readonly group: ShapeGroup; readonly choices: readonly ShapeChoice[] }[] = SHAPE_GROUPS_IN_ORDER.map((group) => ({
-  group,
-  choices: SHAPE_CHOICES.filter((c) => c.group === group),
-}));
+export const SHAPE_GROUPS: readonly { readonly group: ShapeGroup; readonly choices: readonly ShapeChoice[] }[] = SHAPE_GROUPS_IN_ORDER.map(
+  (group) => ({
+    group,
+    choices: SHAPE_CHOICES.filter((c) => c.group === group),
+  }),
+);
 
 const BY_KIND = new Map<SurfaceKind, ShapeChoice>(SHAPE_CHOICES.map((c) => [c.kind, c]));
 

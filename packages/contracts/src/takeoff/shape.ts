@@ -20,11 +20,16 @@ function numberFor(rule: DimRule, noun: string): z.ZodNumber {
   }
   if (rule === 'depth0') {
     const missing = DIM_WORDS.nonNegative(noun);
-    return z.number({ error: missing }).min(0, { error: missing }).max(MAX, { error: DIM_WORDS.tooBig(noun) });
+    return z
+      .number({ error: missing })
+      .min(0, { error: missing })
+      .max(MAX, { error: DIM_WORDS.tooBig(noun) });
   }
   const missing = DIM_WORDS.positive(noun);
   const positive = z.number({ error: missing }).positive({ error: missing });
-  return rule === 'angle' ? positive.max(SHAPE_LIMITS.angleMaxDegrees, { error: DIM_WORDS.angleTooBig }) : positive.max(MAX, { error: DIM_WORDS.tooBig(noun) });
+  return rule === 'angle'
+    ? positive.max(SHAPE_LIMITS.angleMaxDegrees, { error: DIM_WORDS.angleTooBig })
+    : positive.max(MAX, { error: DIM_WORDS.tooBig(noun) });
 }
 
 /** A shape's dimension, with the catalogue's rule and words. */
@@ -61,7 +66,13 @@ export const surfaceShape = z.discriminatedUnion(
   [
     z.strictObject({ kind: z.literal('walls'), perimeter: dim('walls', 'perimeter'), height: dim('walls', 'height'), openings }),
     z.strictObject({ kind: z.literal('gable'), base: dim('gable', 'base'), height: dim('gable', 'height'), elevation }),
-    z.strictObject({ kind: z.literal('trapezoid'), base1: dim('trapezoid', 'base1'), base2: dim('trapezoid', 'base2'), height: dim('trapezoid', 'height'), elevation }),
+    z.strictObject({
+      kind: z.literal('trapezoid'),
+      base1: dim('trapezoid', 'base1'),
+      base2: dim('trapezoid', 'base2'),
+      height: dim('trapezoid', 'height'),
+      elevation,
+    }),
     z.strictObject({ kind: z.literal('ceilingRect'), length: dim('ceilingRect', 'length'), width: dim('ceilingRect', 'width'), elevation }),
     z.strictObject({ kind: z.literal('ceilingCircle'), radius: dim('ceilingCircle', 'radius'), elevation }),
     z.strictObject({
@@ -81,16 +92,32 @@ export const surfaceShape = z.discriminatedUnion(
       openings,
     }),
     z.strictObject({ kind: z.literal('cone'), radius: dim('cone', 'radius'), rise: dim('cone', 'rise'), elevation }),
-    z.strictObject({ kind: z.literal('pyramid'), sides: dim('pyramid', 'sides'), sideLength: dim('pyramid', 'sideLength'), rise: dim('pyramid', 'rise'), elevation }),
+    z.strictObject({
+      kind: z.literal('pyramid'),
+      sides: dim('pyramid', 'sides'),
+      sideLength: dim('pyramid', 'sideLength'),
+      rise: dim('pyramid', 'rise'),
+      elevation,
+    }),
     z.strictObject({ kind: z.literal('hemisphere'), radius: dim('hemisphere', 'radius'), elevation }),
-    z.strictObject({ kind: z.literal('sphericalCap'), baseRadius: dim('sphericalCap', 'baseRadius'), rise: dim('sphericalCap', 'rise'), elevation }),
+    z.strictObject({
+      kind: z.literal('sphericalCap'),
+      baseRadius: dim('sphericalCap', 'baseRadius'),
+      rise: dim('sphericalCap', 'rise'),
+      elevation,
+    }),
     z.strictObject({
       kind: z.literal('sphericalCapFromSphere'),
       sphereRadius: dim('sphericalCapFromSphere', 'sphereRadius'),
       rise: dim('sphericalCapFromSphere', 'rise'),
       elevation,
     }),
-    z.strictObject({ kind: z.literal('barrelVault'), radius: dim('barrelVault', 'radius'), length: dim('barrelVault', 'length'), elevation }),
+    z.strictObject({
+      kind: z.literal('barrelVault'),
+      radius: dim('barrelVault', 'radius'),
+      length: dim('barrelVault', 'length'),
+      elevation,
+    }),
     z.strictObject({
       kind: z.literal('segmentalVault'),
       span: dim('segmentalVault', 'span'),

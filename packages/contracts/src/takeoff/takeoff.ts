@@ -49,4 +49,7 @@ export const moveInput = requestSchema<MoveInput>()(
 // Parsed surfaces fit the plain request types the apps send; not the reverse only because the
 // engine's shape holds its polygon corners as read-only arrays.
 type Assignable<A, B> = [A] extends [B] ? true : false;
-export const SURFACE_SCHEMAS_MATCH_TYPES: [Assignable<z.infer<typeof surfaceInput>, SurfaceInput>, Assignable<z.infer<typeof surfaceUpdate>, Partial<SurfaceInput>>] = [true, true];
+export const SURFACE_SCHEMAS_MATCH_TYPES: [
+  Assignable<z.infer<typeof surfaceInput>, SurfaceInput>,
+  Assignable<z.infer<typeof surfaceUpdate>, Partial<SurfaceInput>>,
+] = [true, true];

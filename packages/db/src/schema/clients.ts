@@ -19,7 +19,11 @@ export const clients = pgTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index('clients_tenant_created_idx').on(t.tenantId, t.createdAt, t.id), index('clients_tenant_name_idx').on(t.tenantId, t.name), tenantPolicy('clients')],
+  (t) => [
+    index('clients_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
+    index('clients_tenant_name_idx').on(t.tenantId, t.name),
+    tenantPolicy('clients'),
+  ],
 );
 
 /** People at a client (the designer's assistant, the contractor's site manager). */
@@ -28,7 +32,9 @@ export const clientContacts = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    clientId: uuid('client_id').notNull().references(() => clients.id),
+    clientId: uuid('client_id')
+      .notNull()
+      .references(() => clients.id),
     name: text('name').notNull(),
     email: text('email').notNull().default(''),
     phone: text('phone').notNull().default(''),
@@ -44,7 +50,9 @@ export const sites = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    clientId: uuid('client_id').notNull().references(() => clients.id),
+    clientId: uuid('client_id')
+      .notNull()
+      .references(() => clients.id),
     label: text('label').notNull().default(''),
     addressLine1: text('address_line1').notNull(),
     addressLine2: text('address_line2').notNull().default(''),
@@ -68,7 +76,9 @@ export const portalUsers = pgTable(
     clientId: uuid('client_id').references(() => clients.id),
     email: text('email').notNull(),
     name: text('name').notNull(),
-    status: text('status', { enum: ['active', 'disabled'] }).notNull().default('active'),
+    status: text('status', { enum: ['active', 'disabled'] })
+      .notNull()
+      .default('active'),
     createdAt: createdAt(),
   },
   (t) => [
@@ -86,7 +96,9 @@ export const portalLinks = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    portalUserId: uuid('portal_user_id').notNull().references(() => portalUsers.id),
+    portalUserId: uuid('portal_user_id')
+      .notNull()
+      .references(() => portalUsers.id),
     tokenHash: text('token_hash').notNull(),
     expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
     usedAt: timestamp('used_at', { withTimezone: true }),

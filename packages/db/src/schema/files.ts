@@ -23,5 +23,9 @@ export const files = pgTable(
     uploadedBy: uuid('uploaded_by').references(() => users.id),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex('files_storage_key_key').on(t.storageKey), index('files_tenant_created_idx').on(t.tenantId, t.createdAt, t.id), tenantPolicy('files')],
+  (t) => [
+    uniqueIndex('files_storage_key_key').on(t.storageKey),
+    index('files_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
+    tenantPolicy('files'),
+  ],
 );

@@ -18,8 +18,12 @@ export const firms = pgTable(
     phone: text('phone').notNull().default(''),
     timeZone: text('time_zone').notNull().default('America/New_York'),
     currency: text('currency').notNull().default('USD'),
-    units: text('units', { enum: ['imperial', 'metric'] }).notNull().default('imperial'),
-    language: text('language', { enum: ['en', 'es'] }).notNull().default('en'),
+    units: text('units', { enum: ['imperial', 'metric'] })
+      .notNull()
+      .default('imperial'),
+    language: text('language', { enum: ['en', 'es'] })
+      .notNull()
+      .default('en'),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },

@@ -6,7 +6,15 @@ import { firms } from './firms';
 import { users } from './team';
 
 export const INQUIRY_STAGES = ['new', 'contacted', 'visit_booked', 'samples', 'proposal_sent', 'won', 'lost'] as const;
-export const INQUIRY_SOURCES = ['web_form', 'phone', 'designer_referral', 'contractor_referral', 'past_client', 'showroom', 'other'] as const;
+export const INQUIRY_SOURCES = [
+  'web_form',
+  'phone',
+  'designer_referral',
+  'contractor_referral',
+  'past_client',
+  'showroom',
+  'other',
+] as const;
 export const ACTIVITY_KINDS = ['created', 'note', 'call', 'email', 'stage_change', 'assignment', 'follow_up', 'converted'] as const;
 
 /** A prospect's request for work, followed from first contact until won or lost. */
@@ -42,7 +50,9 @@ export const inquiries = pgTable(
     // Keyset pagination leads with the firm: (tenant_id, created_at, id).
     index('inquiries_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
     index('inquiries_tenant_stage_idx').on(t.tenantId, t.stage, t.createdAt, t.id),
-    index('inquiries_tenant_follow_up_idx').on(t.tenantId, t.nextFollowUp).where(sql`next_follow_up is not null`),
+    index('inquiries_tenant_follow_up_idx')
+      .on(t.tenantId, t.nextFollowUp)
+      .where(sql`next_follow_up is not null`),
     tenantPolicy('inquiries'),
   ],
 );
@@ -53,7 +63,9 @@ export const inquiryActivities = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    inquiryId: uuid('inquiry_id').notNull().references(() => inquiries.id),
+    inquiryId: uuid('inquiry_id')
+      .notNull()
+      .references(() => inquiries.id),
     kind: text('kind', { enum: ACTIVITY_KINDS }).notNull(),
     body: text('body').notNull().default(''),
     data: jsonb('data').notNull().default({}),

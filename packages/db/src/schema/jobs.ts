@@ -11,15 +11,25 @@ export const jobs = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    estimateId: uuid('estimate_id').notNull().references(() => estimates.id),
-    proposalVersionId: uuid('proposal_version_id').notNull().references(() => proposalVersions.id),
-    clientId: uuid('client_id').notNull().references(() => clients.id),
-    siteId: uuid('site_id').notNull().references(() => sites.id),
+    estimateId: uuid('estimate_id')
+      .notNull()
+      .references(() => estimates.id),
+    proposalVersionId: uuid('proposal_version_id')
+      .notNull()
+      .references(() => proposalVersions.id),
+    clientId: uuid('client_id')
+      .notNull()
+      .references(() => clients.id),
+    siteId: uuid('site_id')
+      .notNull()
+      .references(() => sites.id),
     inquiryId: uuid('inquiry_id').references(() => inquiries.id),
     title: text('title').notNull(),
     acceptedVariantId: text('accepted_variant_id').notNull(),
     optionLabel: text('option_label').notNull(),
-    status: text('status', { enum: ['scheduled', 'in_progress', 'complete', 'cancelled'] }).notNull().default('scheduled'),
+    status: text('status', { enum: ['scheduled', 'in_progress', 'complete', 'cancelled'] })
+      .notNull()
+      .default('scheduled'),
     currency: text('currency').notNull(),
     /** the accepted option's total; change orders add to it later */
     contractSum: numeric('contract_sum', { precision: 14, scale: 2 }).notNull(),
@@ -41,7 +51,9 @@ export const paymentScheduleLines = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    jobId: uuid('job_id').notNull().references(() => jobs.id),
+    jobId: uuid('job_id')
+      .notNull()
+      .references(() => jobs.id),
     position: integer('position').notNull(),
     label: text('label').notNull(),
     role: text('role').notNull(),
@@ -49,7 +61,9 @@ export const paymentScheduleLines = pgTable(
     percent: numeric('percent', { precision: 7, scale: 4 }),
     amount: numeric('amount', { precision: 14, scale: 2 }).notNull(),
     expectedOn: date('expected_on'),
-    status: text('status', { enum: ['draft', 'scheduled', 'invoiced'] }).notNull().default('draft'),
+    status: text('status', { enum: ['draft', 'scheduled', 'invoiced'] })
+      .notNull()
+      .default('draft'),
     createdAt: createdAt(),
   },
   (t) => [index('payment_schedule_lines_job_idx').on(t.tenantId, t.jobId, t.position), tenantPolicy('payment_schedule_lines')],

@@ -19,7 +19,9 @@ export const mailOutbox = pgTable(
     subject: text('subject').notNull(),
     html: text('html').notNull(),
     text: text('text').notNull(),
-    status: text('status', { enum: ['pending', 'sent', 'failed'] }).notNull().default('pending'),
+    status: text('status', { enum: ['pending', 'sent', 'failed'] })
+      .notNull()
+      .default('pending'),
     attempts: integer('attempts').notNull().default(0),
     lastError: text('last_error'),
     sentAt: timestamp('sent_at', { withTimezone: true }),

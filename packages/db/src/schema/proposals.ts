@@ -15,11 +15,17 @@ export const estimates = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    siteId: uuid('site_id').notNull().references(() => sites.id),
-    clientId: uuid('client_id').notNull().references(() => clients.id),
+    siteId: uuid('site_id')
+      .notNull()
+      .references(() => sites.id),
+    clientId: uuid('client_id')
+      .notNull()
+      .references(() => clients.id),
     inquiryId: uuid('inquiry_id').references(() => inquiries.id),
     title: text('title').notNull(),
-    status: text('status', { enum: ['draft', 'proposed', 'accepted', 'declined'] }).notNull().default('draft'),
+    status: text('status', { enum: ['draft', 'proposed', 'accepted', 'declined'] })
+      .notNull()
+      .default('draft'),
     startDate: date('start_date').notNull(),
     inputs: jsonb('inputs').notNull(),
     result: jsonb('result'),
@@ -29,7 +35,11 @@ export const estimates = pgTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index('estimates_tenant_created_idx').on(t.tenantId, t.createdAt, t.id), index('estimates_site_idx').on(t.tenantId, t.siteId), tenantPolicy('estimates')],
+  (t) => [
+    index('estimates_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
+    index('estimates_site_idx').on(t.tenantId, t.siteId),
+    tenantPolicy('estimates'),
+  ],
 );
 
 export const PROPOSAL_STATUSES = ['draft', 'sent', 'accepted', 'declined', 'changes_requested', 'superseded'] as const;
@@ -44,7 +54,9 @@ export const proposalVersions = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    estimateId: uuid('estimate_id').notNull().references(() => estimates.id),
+    estimateId: uuid('estimate_id')
+      .notNull()
+      .references(() => estimates.id),
     version: integer('version').notNull(),
     status: text('status', { enum: PROPOSAL_STATUSES }).notNull().default('draft'),
     snapshot: jsonb('snapshot').notNull(),

@@ -15,7 +15,9 @@ export const sampleBoards = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    clientId: uuid('client_id').notNull().references(() => clients.id),
+    clientId: uuid('client_id')
+      .notNull()
+      .references(() => clients.id),
     siteId: uuid('site_id').references(() => sites.id),
     estimateId: uuid('estimate_id').references(() => estimates.id),
     label: text('label').notNull(),
@@ -25,7 +27,9 @@ export const sampleBoards = pgTable(
     finishSystemId: uuid('finish_system_id').references(() => finishSystems.id),
     finishSnapshot: jsonb('finish_snapshot'),
     notes: text('notes').notNull().default(''),
-    status: text('status', { enum: ['draft', 'shown', 'approved', 'changes_requested'] }).notNull().default('draft'),
+    status: text('status', { enum: ['draft', 'shown', 'approved', 'changes_requested'] })
+      .notNull()
+      .default('draft'),
     clientComment: text('client_comment').notNull().default(''),
     decidedAt: timestamp('decided_at', { withTimezone: true }),
     decidedBy: uuid('decided_by').references(() => portalUsers.id),
@@ -44,8 +48,12 @@ export const sampleBoardPhotos = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    boardId: uuid('board_id').notNull().references(() => sampleBoards.id),
-    fileId: uuid('file_id').notNull().references(() => files.id),
+    boardId: uuid('board_id')
+      .notNull()
+      .references(() => sampleBoards.id),
+    fileId: uuid('file_id')
+      .notNull()
+      .references(() => files.id),
     caption: text('caption').notNull().default(''),
     createdAt: createdAt(),
   },

@@ -10,7 +10,9 @@ export const rooms = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    siteId: uuid('site_id').notNull().references(() => sites.id),
+    siteId: uuid('site_id')
+      .notNull()
+      .references(() => sites.id),
     name: text('name').notNull(),
     position: integer('position').notNull().default(0),
     isExterior: boolean('is_exterior').notNull().default(false),
@@ -30,7 +32,9 @@ export const surfaces = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    roomId: uuid('room_id').notNull().references(() => rooms.id),
+    roomId: uuid('room_id')
+      .notNull()
+      .references(() => rooms.id),
     name: text('name').notNull(),
     position: integer('position').notNull().default(0),
     shape: jsonb('shape').notNull(),
@@ -49,8 +53,12 @@ export const roomPhotos = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    roomId: uuid('room_id').notNull().references(() => rooms.id),
-    fileId: uuid('file_id').notNull().references(() => files.id),
+    roomId: uuid('room_id')
+      .notNull()
+      .references(() => rooms.id),
+    fileId: uuid('file_id')
+      .notNull()
+      .references(() => files.id),
     caption: text('caption').notNull().default(''),
     createdAt: createdAt(),
   },

@@ -28,9 +28,13 @@ export const memberships = pgTable(
   {
     id: id(),
     tenantId: tenantId().references(() => firms.id),
-    userId: uuid('user_id').notNull().references(() => users.id),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id),
     role: text('role', { enum: STAFF_ROLE_VALUES }).notNull(),
-    status: text('status', { enum: ['active', 'deactivated'] }).notNull().default('active'),
+    status: text('status', { enum: ['active', 'deactivated'] })
+      .notNull()
+      .default('active'),
     createdAt: createdAt(),
   },
   (t) => [
@@ -55,7 +59,9 @@ export const invitations = pgTable(
     email: text('email').notNull(),
     role: text('role', { enum: STAFF_ROLE_VALUES }).notNull(),
     tokenHash: text('token_hash').notNull(),
-    invitedBy: uuid('invited_by').notNull().references(() => users.id),
+    invitedBy: uuid('invited_by')
+      .notNull()
+      .references(() => users.id),
     expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
     acceptedAt: timestamp('accepted_at', { withTimezone: true }),
     revokedAt: timestamp('revoked_at', { withTimezone: true }),
@@ -68,4 +74,3 @@ export const invitations = pgTable(
     lookupPolicy('invitations', 'token_hash', 'token_hash'),
   ],
 );
-

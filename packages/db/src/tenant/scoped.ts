@@ -86,7 +86,9 @@ export function withTenantAndFirst<T>(
   return inTransaction(
     pool,
     async (client) => {
-      const results = (await client.query(`begin; select set_config('app.tenant_id', '${tenantId}', true); ${firstSql}`)) as unknown as Array<{ rows: Record<string, unknown>[] }>;
+      const results = (await client.query(
+        `begin; select set_config('app.tenant_id', '${tenantId}', true); ${firstSql}`,
+      )) as unknown as Array<{ rows: Record<string, unknown>[] }>;
       firstRows = results[2]?.rows ?? [];
     },
     (tx) => fn({ ...tx, tenantId } as TenantTx, firstRows),

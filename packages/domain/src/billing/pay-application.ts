@@ -78,8 +78,14 @@ export function computePayApplication(input: PayApplicationInput): PayApplicatio
   const rStored = toRatio(input.retainage.stored, 'retainage.stored', 'retainage rate');
   const zero = new Decimal(0);
   const totals = {
-    scheduledValue: zero, previousWork: zero, thisPeriodWork: zero, storedMaterials: zero,
-    completedAndStored: zero, shareComplete: zero, balanceToFinish: zero, retainage: zero,
+    scheduledValue: zero,
+    previousWork: zero,
+    thisPeriodWork: zero,
+    storedMaterials: zero,
+    completedAndStored: zero,
+    shareComplete: zero,
+    balanceToFinish: zero,
+    retainage: zero,
   };
   const lines: ValueLine[] = input.lines.map((l, i) => {
     const at = `lines[${i}]`;
@@ -89,7 +95,10 @@ export function computePayApplication(input: PayApplicationInput): PayApplicatio
     const f = toNonNegativeMoney(l.storedMaterials, `${at}.storedMaterials`, 'stored materials');
     const g = d.plus(e).plus(f);
     if (g.greaterThan(c)) {
-      throw new DomainInputError(`${at}.thisPeriodWork`, 'Completed and stored to date is more than the scheduled value; approve a change order first.');
+      throw new DomainInputError(
+        `${at}.thisPeriodWork`,
+        'Completed and stored to date is more than the scheduled value; approve a change order first.',
+      );
     }
     const line: ValueLine = {
       id: l.id,
@@ -113,7 +122,10 @@ export function computePayApplication(input: PayApplicationInput): PayApplicatio
     return line;
   });
   if (!totals.scheduledValue.equals(toDate)) {
-    throw new DomainInputError('lines', `The scheduled values add up to ${totals.scheduledValue.toString()}, not the contract sum to date ${toDate.toString()}.`);
+    throw new DomainInputError(
+      'lines',
+      `The scheduled values add up to ${totals.scheduledValue.toString()}, not the contract sum to date ${toDate.toString()}.`,
+    );
   }
   totals.shareComplete = toDate.isZero() ? zero : totals.completedAndStored.div(toDate);
   const retainageOnWork = roundToCurrency(totals.previousWork.plus(totals.thisPeriodWork).times(rWork), currency);
@@ -153,10 +165,7 @@ export function carryForward(app: PayApplication): ValueLineInput[] {
 }
 
 /** Retainage that steps down as the job progresses, e.g. 10 % until 50 % complete, then 5 %. */
-export function retainageRateFor(
-  shareComplete: Ratio,
-  steps: ReadonlyArray<{ fromShareComplete: Ratio; rate: Ratio }>,
-): Decimal {
+export function retainageRateFor(shareComplete: Ratio, steps: ReadonlyArray<{ fromShareComplete: Ratio; rate: Ratio }>): Decimal {
   const done = toRatio(shareComplete, 'shareComplete', 'share complete');
   requireNonEmpty(steps, 'steps', 'list of retainage steps');
   let rate: Decimal | null = null;

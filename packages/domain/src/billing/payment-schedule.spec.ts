@@ -8,7 +8,13 @@ import { type PaymentLineInput, buildPaymentSchedule } from './payment-schedule'
 const acceptance = { kind: 'acceptance' } as const;
 const thirds: PaymentLineInput[] = [
   { id: 'dep', label: 'Deposit', role: 'deposit', basis: { kind: 'share', share: '0.3333' }, trigger: acceptance },
-  { id: 'base', label: 'Base coats complete', role: 'milestone', basis: { kind: 'share', share: '0.3333' }, trigger: { kind: 'layerComplete', layerId: 'primer' } },
+  {
+    id: 'base',
+    label: 'Base coats complete',
+    role: 'milestone',
+    basis: { kind: 'share', share: '0.3333' },
+    trigger: { kind: 'layerComplete', layerId: 'primer' },
+  },
   { id: 'final', label: 'Final', role: 'final', basis: { kind: 'remainder' }, trigger: { kind: 'walkthrough' } },
 ];
 const amounts = (lines: Array<{ amount: Decimal }>): string[] => lines.map((l) => l.amount.toFixed(2));
@@ -19,11 +25,15 @@ describe('payment schedule (common practice, DOMAIN.md §2.11)', () => {
   });
 
   it('fixed deposit plus percentages of the contract', () => {
-    const lines = buildPaymentSchedule('12000.00', [
-      { id: 'dep', label: 'Deposit', role: 'deposit', basis: { kind: 'amount', amount: '1000.00' }, trigger: acceptance },
-      { id: 'm1', label: 'Plaster complete', role: 'milestone', basis: { kind: 'share', share: '0.5' }, trigger: acceptance },
-      { id: 'fin', label: 'Final', role: 'final', basis: { kind: 'remainder' }, trigger: acceptance },
-    ], 'USD');
+    const lines = buildPaymentSchedule(
+      '12000.00',
+      [
+        { id: 'dep', label: 'Deposit', role: 'deposit', basis: { kind: 'amount', amount: '1000.00' }, trigger: acceptance },
+        { id: 'm1', label: 'Plaster complete', role: 'milestone', basis: { kind: 'share', share: '0.5' }, trigger: acceptance },
+        { id: 'fin', label: 'Final', role: 'final', basis: { kind: 'remainder' }, trigger: acceptance },
+      ],
+      'USD',
+    );
     expect(amounts(lines)).toEqual(['1000.00', '6000.00', '5000.00']);
   });
 

@@ -10,10 +10,7 @@ import { type Ratio, toRatio } from '../pricing/ratio';
 export type PaymentBasis = { kind: 'share'; share: Ratio } | { kind: 'amount'; amount: MoneyInput } | { kind: 'remainder' };
 
 export type PaymentTrigger =
-  | { kind: 'acceptance' }
-  | { kind: 'date'; date: IsoDate }
-  | { kind: 'layerComplete'; layerId: string }
-  | { kind: 'walkthrough' };
+  { kind: 'acceptance' } | { kind: 'date'; date: IsoDate } | { kind: 'layerComplete'; layerId: string } | { kind: 'walkthrough' };
 
 export interface PaymentLineInput {
   id: string;
@@ -47,7 +44,8 @@ export function buildPaymentSchedule(
   const digits = minorUnitDigits(currency, 'currency');
   const contract = toMoney(contractSum, 'contractSum', 'contract sum');
   if (contract.lessThanOrEqualTo(0)) throw new DomainInputError('contractSum', 'The contract sum must be greater than zero.');
-  if (contract.decimalPlaces() > digits) throw new DomainInputError('contractSum', `The contract sum has more than ${digits} decimal places.`);
+  if (contract.decimalPlaces() > digits)
+    throw new DomainInputError('contractSum', `The contract sum has more than ${digits} decimal places.`);
   requireNonEmpty(lines, field, 'payment schedule');
 
   const amounts: Array<Decimal | null> = lines.map(() => null);
@@ -77,10 +75,16 @@ export function buildPaymentSchedule(
   if (remainderIdx < 0) {
     shareTotal = contract.minus(fixed);
     if (shareIdx.length === 0 && !shareTotal.isZero()) {
-      throw new DomainInputError(field, `The payments add up to ${fixed.toFixed(digits)}, not the contract sum ${contract.toFixed(digits)}.`);
+      throw new DomainInputError(
+        field,
+        `The payments add up to ${fixed.toFixed(digits)}, not the contract sum ${contract.toFixed(digits)}.`,
+      );
     }
     if (shareIdx.length > 0 && !contract.times(shareSum).equals(shareTotal)) {
-      throw new DomainInputError(field, `The percentages add up to ${shareSum.times(100).toString()} % of the contract; with the fixed amounts they must make exactly 100 %.`);
+      throw new DomainInputError(
+        field,
+        `The percentages add up to ${shareSum.times(100).toString()} % of the contract; with the fixed amounts they must make exactly 100 %.`,
+      );
     }
   } else {
     shareTotal = contract.times(shareSum).toDecimalPlaces(digits, Decimal.ROUND_HALF_UP);
@@ -97,5 +101,12 @@ export function buildPaymentSchedule(
     if (rest.isNegative()) throw new DomainInputError(field, 'The payments add up to more than the contract sum.');
     amounts[remainderIdx] = rest;
   }
-  return lines.map((l, i) => ({ id: l.id, label: l.label, role: l.role, trigger: l.trigger, amount: amounts[i] as Decimal, isBilled: false }));
+  return lines.map((l, i) => ({
+    id: l.id,
+    label: l.label,
+    role: l.role,
+    trigger: l.trigger,
+    amount: amounts[i] as Decimal,
+    isBilled: false,
+  }));
 }

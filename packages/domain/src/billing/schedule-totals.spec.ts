@@ -8,7 +8,14 @@ describe('payment schedule totals (common practice, no source)', () => {
   it.each<[string, ScheduledAmount[], string, string, string | null, boolean]>([
     // name, lines, contract sum, amount total, percent total, adds up
     ['30 / 40 / rest of 10,000.00', [line('3000.00', '30'), line('4000.00', '40'), line('3000.00')], '10000.00', '10000', null, true],
-    ['thirds that leave a cent on the last line', [line('3333.33', '33.3333'), line('3333.33', '33.3333'), line('3333.34', '33.3334')], '10000.00', '10000', '100', true],
+    [
+      'thirds that leave a cent on the last line',
+      [line('3333.33', '33.3333'), line('3333.33', '33.3333'), line('3333.34', '33.3334')],
+      '10000.00',
+      '10000',
+      '100',
+      true,
+    ],
     ['decimals that floats would get wrong (0.1 + 0.2)', [line('0.10', '10'), line('0.20', '20')], '0.30', '0.3', '30', true],
     ['a cent short of the contract sum', [line('5000.00', '50'), line('4999.99', '50')], '10000.00', '9999.99', '100', false],
     ['"100" and "100.00" are the same amount', [line('100')], '100.00', '100', null, true],

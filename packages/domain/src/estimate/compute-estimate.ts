@@ -190,9 +190,7 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
   const rates = input.perAreaRates;
   if (rates) {
     const priced = surfaces.filter((x) => Object.prototype.hasOwnProperty.call(rates, x.finishSystemId));
-    const check = perAreaCheck(
-      priced.map((x) => ({ label: x.name, quantity: x.measure.quantity, rate: rates[x.finishSystemId] })),
-    );
+    const check = perAreaCheck(priced.map((x) => ({ label: x.name, quantity: x.measure.quantity, rate: rates[x.finishSystemId] })));
     perArea = { total: check.total, lines: priced.map((x, i) => ({ surfaceId: x.surfaceId, amount: check.lines[i] })) };
   }
 

@@ -1,6 +1,12 @@
 import type { FinishLayer, LabourMultipliers, Product } from '../finishes/finish-system';
 import { type LayerQuantity, type PreparedLayerQuantity, prepareLayerQuantity } from '../finishes/layer-quantity';
-import { type MultiplierStep, type PreparedLayerHours, type SurfaceConditions, multiplierSteps, prepareLayerHours } from '../labour/layer-hours';
+import {
+  type MultiplierStep,
+  type PreparedLayerHours,
+  type SurfaceConditions,
+  multiplierSteps,
+  prepareLayerHours,
+} from '../labour/layer-hours';
 import type { LengthUnit } from '../units/length';
 
 /** One finish-system layer, checked and looked up once for all the surfaces it goes on. */

@@ -48,7 +48,10 @@ export function chooseContainers(
     const at = `${field}[${i}]`;
     requirePositive(c.size, `${at}.size`, 'container size');
     if (dimensionOf(c.unit, `${at}.unit`) !== dimension) {
-      throw new DomainInputError(`${at}.unit`, `The container is sold by ${dimensionOf(c.unit)} but the product is measured by ${dimension}.`);
+      throw new DomainInputError(
+        `${at}.unit`,
+        `The container is sold by ${dimensionOf(c.unit)} but the product is measured by ${dimension}.`,
+      );
     }
     const exactPrice = toNonNegativeMoney(c.price, `${at}.price`, 'container price');
     return { label: c.label, size: toBase(c.size, c.unit), price: exactPrice.toNumber(), exactPrice };

@@ -29,6 +29,10 @@ describe('finish outline', () => {
   ])('totalWaitHours(%j) is %d', (layers, hours) => expect(totalWaitHours(layers)).toBe(hours));
 
   it('outlines a system in one call', () => {
-    expect(outlineFinish(stack)).toEqual({ layerCount: 3, totalWaitHours: 100, productIds: ['primer', 'lime', 'marble', 'medium', 'tint'] });
+    expect(outlineFinish(stack)).toEqual({
+      layerCount: 3,
+      totalWaitHours: 100,
+      productIds: ['primer', 'lime', 'marble', 'medium', 'tint'],
+    });
   });
 });

@@ -2,17 +2,7 @@ import type { MoneyInput } from '../money/money';
 import type { LengthUnit } from '../units/length';
 import type { QuantityUnit } from '../units/quantity-unit';
 
-export type ApplicationMethod =
-  | 'roll'
-  | 'brush'
-  | 'spray'
-  | 'trowel'
-  | 'burnish'
-  | 'glaze'
-  | 'wax'
-  | 'sand'
-  | 'stencil'
-  | 'other';
+export type ApplicationMethod = 'roll' | 'brush' | 'spray' | 'trowel' | 'burnish' | 'glaze' | 'wax' | 'sand' | 'stencil' | 'other';
 
 /**
  * How far a product goes, per coat. `lengthUnit` says which unit the surface is counted in:

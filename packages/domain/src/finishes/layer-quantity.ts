@@ -30,7 +30,10 @@ function requireProduct(products: ReadonlyMap<string, Product>, id: string, dime
   const p = products.get(id);
   if (!p) throw new DomainInputError(at, `No product with id "${id}".`);
   if (dimensionOf(p.unit, at) !== dimension) {
-    throw new DomainInputError(at, `"${p.name}" is bought by ${dimensionOf(p.unit)} but this layer is measured by ${dimension}; converting needs a density.`);
+    throw new DomainInputError(
+      at,
+      `"${p.name}" is bought by ${dimensionOf(p.unit)} but this layer is measured by ${dimension}; converting needs a density.`,
+    );
   }
   return p;
 }
@@ -117,7 +120,15 @@ export function prepareLayerQuantity(
   } else {
     throw new DomainInputError(`${field}.productId`, 'A layer needs a product or a recipe.');
   }
-  return { layerId: layer.id, share, wasteFactor: 1 + waste, dimension, coats: prepared, concentrateShare: concentrate, products: productsOut };
+  return {
+    layerId: layer.id,
+    share,
+    wasteFactor: 1 + waste,
+    dimension,
+    coats: prepared,
+    concentrateShare: concentrate,
+    products: productsOut,
+  };
 }
 
 /**
@@ -144,7 +155,16 @@ export function applyLayerQuantity(p: PreparedLayerQuantity, quantity: number, m
     const x = p.products[i];
     products[i] = { productId: x.productId, amount: x.share === null ? concentrate : concentrate * x.share };
   }
-  return { layerId: p.layerId, effectiveSurface: covered, dimension: p.dimension, coatAmounts, mix, water: mix - concentrate, concentrate, products };
+  return {
+    layerId: p.layerId,
+    effectiveSurface: covered,
+    dimension: p.dimension,
+    coatAmounts,
+    mix,
+    water: mix - concentrate,
+    concentrate,
+    products,
+  };
 }
 
 /**

@@ -41,7 +41,14 @@ describe('mix cards', () => {
 
   it('shows weight recipes in grams only', () => {
     const lines = mixBatch(
-      { by: 'weight', baseProductId: 'lime', components: [{ productId: 'lime', parts: 100 }, { productId: 'pigment', parts: 3 }] },
+      {
+        by: 'weight',
+        baseProductId: 'lime',
+        components: [
+          { productId: 'lime', parts: 100 },
+          { productId: 'pigment', parts: 3 },
+        ],
+      },
       { amount: 10.3, unit: 'kg' },
     );
     expect(lines.map((l) => [l.component, l.metric, l.kitchen])).toEqual([
@@ -53,8 +60,16 @@ describe('mix cards', () => {
   it.each([
     [() => mixBatch(DOME_GLAZE.recipe!, { amount: 1, unit: 'kg' }), 'batch.unit', /by volume/],
     [() => mixBatch(DOME_GLAZE.recipe!, { amount: 0, unit: 'quart' }), 'batch.amount', /greater than zero/],
-    [() => mixBatch({ ...DOME_GLAZE.recipe!, components: [{ productId: 'paint', parts: 0 }] }, { amount: 1, unit: 'quart' }), 'recipe.components[0].parts', /greater than zero/],
-    [() => scaleRecipeToBase({ base: { name: 'm', amount: 1, unit: 'quart' }, additions: [] }, { amount: 1, unit: 'gallon' }), 'recipe.additions', /empty/],
+    [
+      () => mixBatch({ ...DOME_GLAZE.recipe!, components: [{ productId: 'paint', parts: 0 }] }, { amount: 1, unit: 'quart' }),
+      'recipe.components[0].parts',
+      /greater than zero/,
+    ],
+    [
+      () => scaleRecipeToBase({ base: { name: 'm', amount: 1, unit: 'quart' }, additions: [] }, { amount: 1, unit: 'gallon' }),
+      'recipe.additions',
+      /empty/,
+    ],
   ])('bad input %# names its field', (call, field, message) => {
     expectInputError(call, field, message);
   });

@@ -3,18 +3,21 @@ import { requireFiniteNumber, requirePositive } from '../errors/input-checks';
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
-export function measureCeilingRect(
-  s: { length: number; width: number; elevation?: number },
-  field: string,
-): SurfaceMeasure {
+export function measureCeilingRect(s: { length: number; width: number; elevation?: number }, field: string): SurfaceMeasure {
   const l = requirePositive(s.length, `${field}.length`, 'length');
   const w = requirePositive(s.width, `${field}.width`, 'width');
-  return measureResult({ isCeiling: true, isCurved: false, gross: l * w, formula: 'L·W', topHeight: topFrom(s.elevation, 0, field) }, field);
+  return measureResult(
+    { isCeiling: true, isCurved: false, gross: l * w, formula: 'L·W', topHeight: topFrom(s.elevation, 0, field) },
+    field,
+  );
 }
 
 export function measureCeilingCircle(s: { radius: number; elevation?: number }, field: string): SurfaceMeasure {
   const r = requirePositive(s.radius, `${field}.radius`, 'radius');
-  return measureResult({ isCeiling: true, isCurved: false, gross: Math.PI * r * r, formula: 'π·r²', topHeight: topFrom(s.elevation, 0, field) }, field);
+  return measureResult(
+    { isCeiling: true, isCurved: false, gross: Math.PI * r * r, formula: 'π·r²', topHeight: topFrom(s.elevation, 0, field) },
+    field,
+  );
 }
 
 /** Shoelace formula over the corners in order (either direction); the outline must not cross itself. */
@@ -40,7 +43,13 @@ export function measureCeilingPolygon(
   field: string,
 ): SurfaceMeasure {
   return measureResult(
-    { isCeiling: true, isCurved: false, gross: shoelaceArea(s.corners, field), formula: '½·|Σ(xᵢ·yᵢ₊₁ − xᵢ₊₁·yᵢ)|', topHeight: topFrom(s.elevation, 0, field) },
+    {
+      isCeiling: true,
+      isCurved: false,
+      gross: shoelaceArea(s.corners, field),
+      formula: '½·|Σ(xᵢ·yᵢ₊₁ − xᵢ₊₁·yᵢ)|',
+      topHeight: topFrom(s.elevation, 0, field),
+    },
     field,
   );
 }

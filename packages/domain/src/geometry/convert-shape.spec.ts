@@ -11,20 +11,51 @@ describe('convertShape', () => {
       { kind: 'walls', perimeter: 10, height: 8, openings: [{ width: 3, height: 7, count: 2 }] },
       { kind: 'walls', perimeter: 3.048, height: 2.4384, openings: [{ width: 0.9144, height: 2.1336, count: 2 }] },
     ],
-    ['a curved wall keeps its angle', { kind: 'curvedWall', radius: 10, angleDegrees: 90, height: 10 }, { kind: 'curvedWall', radius: 3.048, angleDegrees: 90, height: 3.048 }],
-    ['a pyramid keeps its number of sides', { kind: 'pyramid', sides: 8, sideLength: 5, rise: 10, elevation: 10 }, { kind: 'pyramid', sides: 8, sideLength: 1.524, rise: 3.048, elevation: 3.048 }],
+    [
+      'a curved wall keeps its angle',
+      { kind: 'curvedWall', radius: 10, angleDegrees: 90, height: 10 },
+      { kind: 'curvedWall', radius: 3.048, angleDegrees: 90, height: 3.048 },
+    ],
+    [
+      'a pyramid keeps its number of sides',
+      { kind: 'pyramid', sides: 8, sideLength: 5, rise: 10, elevation: 10 },
+      { kind: 'pyramid', sides: 8, sideLength: 1.524, rise: 3.048, elevation: 3.048 },
+    ],
     [
       'coffers: panel area by the square, depth as a length',
       { kind: 'coffers', count: 4, innerPerimeter: 10, depth: 0, panelArea: 100 },
       { kind: 'coffers', count: 4, innerPerimeter: 3.048, depth: 0, panelArea: 9.290304 },
     ],
-    ['beams keep how they are counted', { kind: 'beams', length: 10, width: 1, depth: 1, measureBy: 'length' }, { kind: 'beams', length: 3.048, width: 0.3048, depth: 0.3048, measureBy: 'length' }],
-    ['polygon corners', { kind: 'ceilingPolygon', corners: [[0, 0], [10, 0], [10, 5]] }, { kind: 'ceilingPolygon', corners: [[0, 0], [3.048, 0], [3.048, 1.524]] }],
+    [
+      'beams keep how they are counted',
+      { kind: 'beams', length: 10, width: 1, depth: 1, measureBy: 'length' },
+      { kind: 'beams', length: 3.048, width: 0.3048, depth: 0.3048, measureBy: 'length' },
+    ],
+    [
+      'polygon corners',
+      {
+        kind: 'ceilingPolygon',
+        corners: [
+          [0, 0],
+          [10, 0],
+          [10, 5],
+        ],
+      },
+      {
+        kind: 'ceilingPolygon',
+        corners: [
+          [0, 0],
+          [3.048, 0],
+          [3.048, 1.524],
+        ],
+      },
+    ],
   ])('ft → m: %s', (_what, feet, metres) => {
     const got = convertShape(feet, 'ft', 'm') as unknown as Record<string, unknown>;
     for (const [key, value] of Object.entries(metres)) {
       if (typeof value === 'number') expect(got[key]).toBeCloseTo(value, 9);
-      else expect(JSON.parse(JSON.stringify(got[key]), (_k, v: unknown) => (typeof v === 'number' ? Number(v.toFixed(9)) : v))).toEqual(value);
+      else
+        expect(JSON.parse(JSON.stringify(got[key]), (_k, v: unknown) => (typeof v === 'number' ? Number(v.toFixed(9)) : v))).toEqual(value);
     }
   });
 

@@ -17,8 +17,14 @@ export function convertShape(shape: SurfaceShape, from: LengthUnit, to: LengthUn
   for (const [key, value] of Object.entries(shape)) {
     if (UNCHANGED.has(key)) out[key] = value;
     else if (AREAS.has(key)) out[key] = convertArea(value as number, from, to);
-    else if (key === 'openings') out[key] = (value as { width: number; height: number; count?: number }[]).map((o) => ({ ...o, width: length(o.width), height: length(o.height) }));
-    else if (key === 'corners') out[key] = (value as ReadonlyArray<readonly [number, number]>).map(([x, y]) => [length(x), length(y)] as const);
+    else if (key === 'openings')
+      out[key] = (value as { width: number; height: number; count?: number }[]).map((o) => ({
+        ...o,
+        width: length(o.width),
+        height: length(o.height),
+      }));
+    else if (key === 'corners')
+      out[key] = (value as ReadonlyArray<readonly [number, number]>).map(([x, y]) => [length(x), length(y)] as const);
     else out[key] = length(value as number);
   }
   return out as unknown as SurfaceShape;

@@ -3,11 +3,13 @@ import { requirePositive } from '../errors/input-checks';
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
-
 /** Curved surface of a hemisphere, 2π·r². */
 export function measureHemisphere(s: { radius: number; elevation?: number }, field: string): SurfaceMeasure {
   const r = requirePositive(s.radius, `${field}.radius`, 'radius');
-  return measureResult({ isCeiling: true, isCurved: true, gross: 2 * Math.PI * r * r, formula: '2π·r²', topHeight: topFrom(s.elevation, r, field) }, field);
+  return measureResult(
+    { isCeiling: true, isCurved: true, gross: 2 * Math.PI * r * r, formula: '2π·r²', topHeight: topFrom(s.elevation, r, field) },
+    field,
+  );
 }
 
 /**
@@ -16,16 +18,22 @@ export function measureHemisphere(s: { radius: number; elevation?: number }, fie
  * A rise above the base radius would be more than a hemisphere (an overhang), which a
  * ceiling springing from a wall cannot be.
  */
-export function measureSphericalCap(
-  s: { baseRadius: number; rise: number; elevation?: number },
-  field: string,
-): SurfaceMeasure {
+export function measureSphericalCap(s: { baseRadius: number; rise: number; elevation?: number }, field: string): SurfaceMeasure {
   const a = requirePositive(s.baseRadius, `${field}.baseRadius`, 'base radius');
   const h = requirePositive(s.rise, `${field}.rise`, 'rise');
   if (h > a) {
     throw new DomainInputError(`${field}.rise`, 'The rise cannot be more than the base radius (that would be more than a hemisphere).');
   }
-  return measureResult({ isCeiling: true, isCurved: true, gross: Math.PI * (a * a + h * h), formula: 'π·(a²+h²) = 2π·R·h', topHeight: topFrom(s.elevation, h, field) }, field);
+  return measureResult(
+    {
+      isCeiling: true,
+      isCurved: true,
+      gross: Math.PI * (a * a + h * h),
+      formula: 'π·(a²+h²) = 2π·R·h',
+      topHeight: topFrom(s.elevation, h, field),
+    },
+    field,
+  );
 }
 
 /** Spherical cap from the sphere radius R and rise h: 2π·R·h (the zone formula). */
@@ -38,5 +46,8 @@ export function measureSphericalCapFromSphere(
   if (h > R) {
     throw new DomainInputError(`${field}.rise`, 'The rise cannot be more than the sphere radius (that would be more than a hemisphere).');
   }
-  return measureResult({ isCeiling: true, isCurved: true, gross: 2 * Math.PI * R * h, formula: '2π·R·h', topHeight: topFrom(s.elevation, h, field) }, field);
+  return measureResult(
+    { isCeiling: true, isCurved: true, gross: 2 * Math.PI * R * h, formula: '2π·R·h', topHeight: topFrom(s.elevation, h, field) },
+    field,
+  );
 }

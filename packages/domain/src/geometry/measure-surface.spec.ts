@@ -3,8 +3,7 @@ import { expectInputError } from '../errors/expect-input-error';
 import { convertMeasure, measureSurface } from './measure-surface';
 import type { SurfaceShape } from './surface-shape';
 
-const area = (shape: SurfaceShape, minOpening = 0): number =>
-  measureSurface(shape, { minDeductedOpeningArea: minOpening }).quantity;
+const area = (shape: SurfaceShape, minOpening = 0): number => measureSurface(shape, { minDeductedOpeningArea: minOpening }).quantity;
 
 describe('textbook checks', () => {
   it('cone r 3, h 4: slant 5, lateral 15π ≈ 47.12', () => {
@@ -57,12 +56,27 @@ describe('project checks (DOMAIN.md §3.7 [D], formulas as named)', () => {
     ['groin vault side 10 → (π − 2)·100 (MathWorld "Vault")', { kind: 'groinVault', side: 10 }, (Math.PI - 2) * 100, 10],
     ['cloister vault side 10 → 200 (MathWorld "Vault")', { kind: 'cloisterVault', side: 10 }, 200, 10],
     ['round room r 9, H 10, no openings → 180π', { kind: 'roundWalls', radius: 9, height: 10 }, 180 * Math.PI, 10],
-    ['curved wall r 9, 90°, H 10 → 45π (arc length r·θ)', { kind: 'curvedWall', radius: 9, angleDegrees: 90, height: 10 }, 45 * Math.PI, 10],
+    [
+      'curved wall r 9, 90°, H 10 → 45π (arc length r·θ)',
+      { kind: 'curvedWall', radius: 9, angleDegrees: 90, height: 10 },
+      45 * Math.PI,
+      10,
+    ],
     ['rect ceiling 12 × 14 (common practice, no source)', { kind: 'ceilingRect', length: 12, width: 14 }, 168, 12],
     ['gable b 20, h 8 (common practice, no source)', { kind: 'gable', base: 20, height: 8 }, 80, 12],
     ['trapezoid 10/6, h 4 (common practice, no source)', { kind: 'trapezoid', base1: 10, base2: 6, height: 4 }, 32, 12],
-    ['beams 3 × 16 ft, 8 in × 10 in faces → 3·16·(w+2d)', { kind: 'beams', count: 3, length: 16, width: 8 / 12, depth: 10 / 12 }, 3 * 16 * (8 / 12 + 20 / 12), 10],
-    ['coffers 6 × (p 12, d 0.5, A 9) → 6·(6 + 9) = 90', { kind: 'coffers', count: 6, innerPerimeter: 12, depth: 0.5, panelArea: 9 }, 90, 10],
+    [
+      'beams 3 × 16 ft, 8 in × 10 in faces → 3·16·(w+2d)',
+      { kind: 'beams', count: 3, length: 16, width: 8 / 12, depth: 10 / 12 },
+      3 * 16 * (8 / 12 + 20 / 12),
+      10,
+    ],
+    [
+      'coffers 6 × (p 12, d 0.5, A 9) → 6·(6 + 9) = 90',
+      { kind: 'coffers', count: 6, innerPerimeter: 12, depth: 0.5, panelArea: 9 },
+      90,
+      10,
+    ],
   ])('%s', (_name, shape, expected, decimals) => {
     expect(area(shape)).toBeCloseTo(expected, decimals);
   });
@@ -73,7 +87,14 @@ describe('project checks (DOMAIN.md §3.7 [D], formulas as named)', () => {
   });
 
   it('shoelace polygon: an L-shaped ceiling in either direction', () => {
-    const corners = [[0, 0], [10, 0], [10, 4], [4, 4], [4, 8], [0, 8]] as const;
+    const corners = [
+      [0, 0],
+      [10, 0],
+      [10, 4],
+      [4, 4],
+      [4, 8],
+      [0, 8],
+    ] as const;
     expect(area({ kind: 'ceilingPolygon', corners })).toBe(56);
     expect(area({ kind: 'ceilingPolygon', corners: [...corners].reverse() })).toBe(56);
   });
@@ -83,7 +104,10 @@ describe('project checks (DOMAIN.md §3.7 [D], formulas as named)', () => {
       kind: 'roundWalls',
       radius: 9,
       height: 10,
-      openings: [{ width: 3, height: 7 }, { width: 4, height: 5, count: 2 }],
+      openings: [
+        { width: 3, height: 7 },
+        { width: 4, height: 5, count: 2 },
+      ],
     });
     expect(walls.gross).toBeCloseTo(565.49, 2);
     expect(walls.deductions).toBe(61);
@@ -107,7 +131,10 @@ describe('openings and settings', () => {
       kind: 'walls',
       perimeter: 40,
       height: 8,
-      openings: [{ width: 3, height: 7 }, { width: 1, height: 1.5 }],
+      openings: [
+        { width: 3, height: 7 },
+        { width: 1, height: 1.5 },
+      ],
     };
     expect(area(shape, 0)).toBe(320 - 21 - 1.5);
     expect(area(shape, 2)).toBe(320 - 21);
@@ -149,8 +176,29 @@ describe('bad inputs name their field', () => {
     [{ kind: 'segmentalVault', span: 12, rise: 7, length: 20 }, 'shape.rise', /half its span/],
     [{ kind: 'pyramid', sides: 2, sideLength: 4, rise: 6 }, 'shape.sides', /at least 3/],
     [{ kind: 'curvedWall', radius: 9, angleDegrees: 400, height: 10 }, 'shape.angleDegrees', /360/],
-    [{ kind: 'ceilingPolygon', corners: [[0, 0], [1, 1]] }, 'shape.corners', /three corners/],
-    [{ kind: 'ceilingPolygon', corners: [[0, 0], [1, 1], [2, 2]] }, 'shape.corners', /no area/],
+    [
+      {
+        kind: 'ceilingPolygon',
+        corners: [
+          [0, 0],
+          [1, 1],
+        ],
+      },
+      'shape.corners',
+      /three corners/,
+    ],
+    [
+      {
+        kind: 'ceilingPolygon',
+        corners: [
+          [0, 0],
+          [1, 1],
+          [2, 2],
+        ],
+      },
+      'shape.corners',
+      /no area/,
+    ],
     [{ kind: 'cone', radius: Number.NaN, rise: 3 }, 'shape.radius', /finite/],
     [{ kind: 'gable', base: 4, height: 3, elevation: -1 }, 'shape.elevation', /negative/],
     [{ kind: 'dodecahedron' } as unknown as SurfaceShape, 'shape.kind', /not a shape/],

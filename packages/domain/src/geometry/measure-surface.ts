@@ -16,16 +16,8 @@ export const DEFAULT_TAKEOFF_SETTINGS: TakeoffSettings = { minDeductedOpeningAre
  * Measures one takeoff shape. All dimensions and results are in the caller's length unit
  * (areas in that unit squared); `field` prefixes error paths, e.g. `rooms[0].surfaces[2].shape`.
  */
-export function measureSurface(
-  shape: SurfaceShape,
-  settings: TakeoffSettings = DEFAULT_TAKEOFF_SETTINGS,
-  field = 'shape',
-): SurfaceMeasure {
-  const minOpening = requireNonNegative(
-    settings.minDeductedOpeningArea,
-    'settings.minDeductedOpeningArea',
-    'smallest deducted opening',
-  );
+export function measureSurface(shape: SurfaceShape, settings: TakeoffSettings = DEFAULT_TAKEOFF_SETTINGS, field = 'shape'): SurfaceMeasure {
+  const minOpening = requireNonNegative(settings.minDeductedOpeningArea, 'settings.minDeductedOpeningArea', 'smallest deducted opening');
   switch (shape.kind) {
     case 'walls':
       return measureWalls(shape, minOpening, field);

@@ -2,21 +2,36 @@ import { requireInteger, requireNonNegative, requirePositive } from '../errors/i
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
-
 export function measureCrownStraight(s: { length: number; elevation?: number }, field: string): SurfaceMeasure {
   const l = requirePositive(s.length, `${field}.length`, 'length');
-  return measureResult({ measure: 'length', isCeiling: false, isCurved: false, gross: l, formula: 'L', topHeight: topFrom(s.elevation, 0, field) }, field);
+  return measureResult(
+    { measure: 'length', isCeiling: false, isCurved: false, gross: l, formula: 'L', topHeight: topFrom(s.elevation, 0, field) },
+    field,
+  );
 }
 
 /** Crown around a round room, measured at the wall line: 2π·r. */
 export function measureCrownCircular(s: { radius: number; elevation?: number }, field: string): SurfaceMeasure {
   const r = requirePositive(s.radius, `${field}.radius`, 'radius');
-  return measureResult({ measure: 'length', isCeiling: false, isCurved: true, gross: 2 * Math.PI * r, formula: '2π·r', topHeight: topFrom(s.elevation, 0, field) }, field);
+  return measureResult(
+    {
+      measure: 'length',
+      isCeiling: false,
+      isCurved: true,
+      gross: 2 * Math.PI * r,
+      formula: '2π·r',
+      topHeight: topFrom(s.elevation, 0, field),
+    },
+    field,
+  );
 }
 
 export function measureBorder(s: { length: number; elevation?: number }, field: string): SurfaceMeasure {
   const l = requirePositive(s.length, `${field}.length`, 'length');
-  return measureResult({ measure: 'length', isCeiling: false, isCurved: false, gross: l, formula: 'L', topHeight: topFrom(s.elevation, 0, field) }, field);
+  return measureResult(
+    { measure: 'length', isCeiling: false, isCurved: false, gross: l, formula: 'L', topHeight: topFrom(s.elevation, 0, field) },
+    field,
+  );
 }
 
 /** Faux beams with three exposed faces: n·L·(w + 2d) of area, or n·L of length. */
@@ -48,7 +63,14 @@ export function measureCoffers(
   const d = requireNonNegative(s.depth, `${field}.depth`, 'depth');
   const a = requirePositive(s.panelArea, `${field}.panelArea`, 'panel area');
   return measureResult(
-    { measure: 'area', isCeiling: true, isCurved: false, gross: n * (p * d + a), formula: 'n·(p·d + A)', topHeight: topFrom(s.elevation, d, field) },
+    {
+      measure: 'area',
+      isCeiling: true,
+      isCurved: false,
+      gross: n * (p * d + a),
+      formula: 'n·(p·d + A)',
+      topHeight: topFrom(s.elevation, d, field),
+    },
     field,
   );
 }

@@ -22,10 +22,7 @@ export function measureCone(s: { radius: number; rise: number; elevation?: numbe
  * Regular n-gon pyramid ceiling (octagonal turret): n·b·s/2, slant height to the middle of a
  * side s = √(a² + h²), apothem a = b / (2·tan(π/n)). Flat faces, so not curved.
  */
-export function measurePyramid(
-  s: { sides: number; sideLength: number; rise: number; elevation?: number },
-  field: string,
-): SurfaceMeasure {
+export function measurePyramid(s: { sides: number; sideLength: number; rise: number; elevation?: number }, field: string): SurfaceMeasure {
   const n = requireInteger(s.sides, `${field}.sides`, 3, 'number of sides');
   const b = requirePositive(s.sideLength, `${field}.sideLength`, 'side length');
   const h = requirePositive(s.rise, `${field}.rise`, 'rise');

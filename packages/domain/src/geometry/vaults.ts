@@ -3,15 +3,14 @@ import { requirePositive } from '../errors/input-checks';
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
-
 /** Semicircular barrel vault: half a cylinder, π·r·L. */
-export function measureBarrelVault(
-  s: { radius: number; length: number; elevation?: number },
-  field: string,
-): SurfaceMeasure {
+export function measureBarrelVault(s: { radius: number; length: number; elevation?: number }, field: string): SurfaceMeasure {
   const r = requirePositive(s.radius, `${field}.radius`, 'radius');
   const l = requirePositive(s.length, `${field}.length`, 'length');
-  return measureResult({ isCeiling: true, isCurved: true, gross: Math.PI * r * l, formula: 'π·r·L', topHeight: topFrom(s.elevation, r, field) }, field);
+  return measureResult(
+    { isCeiling: true, isCurved: true, gross: Math.PI * r * l, formula: 'π·r·L', topHeight: topFrom(s.elevation, r, field) },
+    field,
+  );
 }
 
 /**
@@ -28,10 +27,16 @@ export function measureSegmentalVault(
   if (h > c / 2) {
     throw new DomainInputError(`${field}.rise`, 'The rise of a segmental vault cannot exceed half its span.');
   }
-  const R = (c * c / 4 + h * h) / (2 * h);
+  const R = ((c * c) / 4 + h * h) / (2 * h);
   const theta = 2 * Math.asin(Math.min(1, c / (2 * R)));
   return measureResult(
-    { isCeiling: true, isCurved: true, gross: R * theta * l, formula: 'R·θ·L, R = (c²/4+h²)/(2h), θ = 2·asin(c/2R)', topHeight: topFrom(s.elevation, h, field) },
+    {
+      isCeiling: true,
+      isCurved: true,
+      gross: R * theta * l,
+      formula: 'R·θ·L, R = (c²/4+h²)/(2h), θ = 2·asin(c/2R)',
+      topHeight: topFrom(s.elevation, h, field),
+    },
     field,
   );
 }
@@ -40,7 +45,13 @@ export function measureSegmentalVault(
 export function measureGroinVault(s: { side: number; elevation?: number }, field: string): SurfaceMeasure {
   const side = requirePositive(s.side, `${field}.side`, 'bay side');
   return measureResult(
-    { isCeiling: true, isCurved: true, gross: (Math.PI - 2) * side * side, formula: '(π − 2)·s²', topHeight: topFrom(s.elevation, side / 2, field) },
+    {
+      isCeiling: true,
+      isCurved: true,
+      gross: (Math.PI - 2) * side * side,
+      formula: '(π − 2)·s²',
+      topHeight: topFrom(s.elevation, side / 2, field),
+    },
     field,
   );
 }

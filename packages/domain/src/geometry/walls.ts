@@ -3,11 +3,7 @@ import { measureResult, topFrom } from './measure-result';
 import type { Opening, SurfaceMeasure } from './surface-shape';
 
 /** Σ w·h·count of the openings at least `minArea` large; smaller ones stay in the area. */
-export function openingDeductions(
-  openings: readonly Opening[] | undefined,
-  minArea: number,
-  field: string,
-): number {
+export function openingDeductions(openings: readonly Opening[] | undefined, minArea: number, field: string): number {
   let total = 0;
   (openings ?? []).forEach((o, i) => {
     const at = `${field}.openings[${i}]`;
@@ -50,10 +46,7 @@ export function measureGable(s: { base: number; height: number; elevation?: numb
   );
 }
 
-export function measureTrapezoid(
-  s: { base1: number; base2: number; height: number; elevation?: number },
-  field: string,
-): SurfaceMeasure {
+export function measureTrapezoid(s: { base1: number; base2: number; height: number; elevation?: number }, field: string): SurfaceMeasure {
   const b1 = requirePositive(s.base1, `${field}.base1`, 'first base');
   const b2 = requirePositive(s.base2, `${field}.base2`, 'second base');
   const h = requirePositive(s.height, `${field}.height`, 'height');

@@ -23,7 +23,10 @@ describe('labour hours per layer', () => {
   it('dome: ceiling 1.5 × curved 1.25 = 1.875; base 2.65 h + glaze 1.59 h = 4.24 h', () => {
     const base = layerHours(DOME, layer('base', 200), domeConditions, firm);
     const glaze = layerHours(DOME, DOME_GLAZE, domeConditions, firm);
-    expect(base.chain).toEqual([{ name: 'ceiling', factor: 1.5 }, { name: 'curvedCeiling', factor: 1.25 }]);
+    expect(base.chain).toEqual([
+      { name: 'ceiling', factor: 1.5 },
+      { name: 'curvedCeiling', factor: 1.25 },
+    ]);
     expect(base.hours).toBeCloseTo(2.65, 2);
     expect(glaze.baseHours).toBeCloseTo(84.82 / 100, 4);
     expect(glaze.hours).toBeCloseTo(1.59, 2);
@@ -33,7 +36,10 @@ describe('labour hours per layer', () => {
   it('applies height and occupied once each; a layer override wins over the firm default', () => {
     const high = { ...wallConditions, topHeight: 14, isOccupied: true, isCurved: false };
     const h = layerHours({ quantity: 100, measure: 'area', unit: 'ft' }, { ...layer('x', 100), multipliers: { height: 1.3 } }, high, firm);
-    expect(h.chain).toEqual([{ name: 'height', factor: 1.3 }, { name: 'occupied', factor: 1.1 }]);
+    expect(h.chain).toEqual([
+      { name: 'height', factor: 1.3 },
+      { name: 'occupied', factor: 1.1 },
+    ]);
     expect(h.hours).toBeCloseTo(1.43, 12);
   });
 
@@ -46,7 +52,11 @@ describe('labour hours per layer', () => {
 
   it.each([
     [() => layerHours(WALLS, layer('x', 0), wallConditions, firm), 'layer.productionRate.surfacePerHour', /greater than zero/],
-    [() => layerHours(WALLS, { ...layer('x', 10), multipliers: { curvedWall: -1 } }, wallConditions, firm), 'layer.multipliers.curvedWall', /greater than zero/],
+    [
+      () => layerHours(WALLS, { ...layer('x', 10), multipliers: { curvedWall: -1 } }, wallConditions, firm),
+      'layer.multipliers.curvedWall',
+      /greater than zero/,
+    ],
     [() => crewTime(10, 1, 1, 0, 7), 'settings.crewSize', /at least 1/],
     [() => crewTime(10, -1, 1, 2, 7), 'settings.setupHours', /negative/],
   ])('bad input %# names its field', (call, field, message) => {

@@ -66,21 +66,34 @@ export function prepareLayerHours(layer: FinishLayer, surfaceUnit: LengthUnit, f
  * The multipliers that apply under these conditions, checked. Layer multipliers override the
  * firm's defaults key by key; each applies at most once, in a fixed order.
  */
-export function multiplierSteps(p: PreparedLayerHours, conditions: SurfaceConditions, firmMultipliers: LabourMultipliers): MultiplierStep[] {
+export function multiplierSteps(
+  p: PreparedLayerHours,
+  conditions: SurfaceConditions,
+  firmMultipliers: LabourMultipliers,
+): MultiplierStep[] {
   const { layer, field } = p;
   const chain: MultiplierStep[] = [];
   for (const name of ORDER) {
     if (!applies(name, conditions)) continue;
     const factor = layer.multipliers?.[name] ?? firmMultipliers[name];
     if (factor === undefined || factor === 1) continue;
-    requirePositive(factor, layer.multipliers?.[name] !== undefined ? `${field}.multipliers.${name}` : `settings.multipliers.${name}`, 'multiplier');
+    requirePositive(
+      factor,
+      layer.multipliers?.[name] !== undefined ? `${field}.multipliers.${name}` : `settings.multipliers.${name}`,
+      'multiplier',
+    );
     chain.push({ name, factor });
   }
   return chain;
 }
 
 /** Hours of a prepared layer on one surface (quantity in the unit it was prepared for). */
-export function applyLayerHours(p: PreparedLayerHours, quantity: number, measure: SurfaceAmount['measure'], steps: readonly MultiplierStep[]): LayerHours {
+export function applyLayerHours(
+  p: PreparedLayerHours,
+  quantity: number,
+  measure: SurfaceAmount['measure'],
+  steps: readonly MultiplierStep[],
+): LayerHours {
   const counted = measure === 'area' ? scaleArea(quantity, p.scale) : scaleLength(quantity, p.scale);
   const baseHours = (counted * p.share * p.coats) / p.rate;
   // A fresh chain per surface (callers may keep or change one surface's result), sized up front.

@@ -7,12 +7,7 @@ import { requireNonEmpty, toDecimal } from '../errors/input-checks';
  * (`digits` decimals), summing exactly to `total`: largest-remainder method. Remainder
  * units go to the largest fractional parts; ties go to the earlier part so results are stable.
  */
-export function allocateByWeights(
-  total: Decimal.Value,
-  weights: readonly Decimal.Value[],
-  digits: number,
-  field = 'weights',
-): Decimal[] {
+export function allocateByWeights(total: Decimal.Value, weights: readonly Decimal.Value[], digits: number, field = 'weights'): Decimal[] {
   requireNonEmpty(weights, field, 'list of weights');
   const amount = toDecimal(total, 'total');
   const unit = new Decimal(10).pow(-digits);
@@ -33,9 +28,7 @@ export function allocateByWeights(
   const exact = w.map((x) => absUnits.times(x).div(weightSum));
   const floors = exact.map((x) => x.floor());
   let left = absUnits.minus(floors.reduce((a, b) => a.plus(b), new Decimal(0))).toNumber();
-  const order = exact
-    .map((x, i) => ({ i, rem: x.minus(floors[i]) }))
-    .sort((a, b) => b.rem.comparedTo(a.rem) || a.i - b.i);
+  const order = exact.map((x, i) => ({ i, rem: x.minus(floors[i]) })).sort((a, b) => b.rem.comparedTo(a.rem) || a.i - b.i);
   for (const { i } of order) {
     if (left <= 0) break;
     floors[i] = floors[i].plus(1);
@@ -48,5 +41,9 @@ export function splitEvenly(total: Decimal.Value, parts: number, digits: number)
   if (!Number.isInteger(parts) || parts < 1) {
     throw new DomainInputError('parts', 'The number of parts must be a whole number of at least 1.');
   }
-  return allocateByWeights(total, Array.from({ length: parts }, () => 1), digits);
+  return allocateByWeights(
+    total,
+    Array.from({ length: parts }, () => 1),
+    digits,
+  );
 }

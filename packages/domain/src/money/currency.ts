@@ -21,9 +21,7 @@ const BY_EXPONENT: Readonly<Record<number, string>> = {
 };
 
 const EXPONENTS: ReadonlyMap<string, number> = new Map(
-  Object.entries(BY_EXPONENT).flatMap(([exponent, codes]) =>
-    codes.split(' ').map((code) => [code, Number(exponent)] as const),
-  ),
+  Object.entries(BY_EXPONENT).flatMap(([exponent, codes]) => codes.split(' ').map((code) => [code, Number(exponent)] as const)),
 );
 
 export function isKnownCurrency(code: string): boolean {

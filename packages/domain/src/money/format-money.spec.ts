@@ -42,9 +42,7 @@ describe('formatMoney', () => {
   });
 
   it('takes a Decimal as exactly as a string', () => {
-    expect(formatMoney(new Decimal('98765432109876543.21'), 'USD', 'en-US')).toBe(
-      '$98,765,432,109,876,543.21',
-    );
+    expect(formatMoney(new Decimal('98765432109876543.21'), 'USD', 'en-US')).toBe('$98,765,432,109,876,543.21');
     expect(formatMoney(new Decimal('1e-7'), 'USD', 'en-US')).toBe('$0.00');
   });
 

@@ -7,7 +7,22 @@ import { minorUnitDigits } from './currency';
  * (Stripe Docs "Supported currencies"). Re-read that page at each release: the lists change.
  */
 const ZERO_DECIMAL = new Set([
-  'BIF', 'CLP', 'DJF', 'GNF', 'JPY', 'KMF', 'KRW', 'MGA', 'PYG', 'RWF', 'UGX', 'VND', 'VUV', 'XAF', 'XOF', 'XPF',
+  'BIF',
+  'CLP',
+  'DJF',
+  'GNF',
+  'JPY',
+  'KMF',
+  'KRW',
+  'MGA',
+  'PYG',
+  'RWF',
+  'UGX',
+  'VND',
+  'VUV',
+  'XAF',
+  'XOF',
+  'XPF',
 ]);
 
 /** Zero-decimal in practice, but still sent ×100 for backward compatibility (so amounts end in 00). */

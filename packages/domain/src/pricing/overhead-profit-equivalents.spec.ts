@@ -19,6 +19,10 @@ describe('overheadProfitEquivalents', () => {
   });
 
   it('refuses margins that leave nothing for the work', () => {
-    expectInputError(() => overheadProfitEquivalents({ method: 'margin', overhead: '0.6', profit: '0.4' }), 'overheadProfit.profit', /less than 100 %/);
+    expectInputError(
+      () => overheadProfitEquivalents({ method: 'margin', overhead: '0.6', profit: '0.4' }),
+      'overheadProfit.profit',
+      /less than 100 %/,
+    );
   });
 });

@@ -53,7 +53,13 @@ describe('pricing', () => {
   ] as const)('tax mode %s on a $10,000 job with a $1,500 materials line at 8 %%', (mode, tax, total) => {
     const p = priceJob({
       ...BASE,
-      direct: { labourHours: 0, labourRate: '0', materialsCost: '1200.00', materialsMarkup: 0.25, sundries: [{ label: 'rest', amount: '5000.00' }] },
+      direct: {
+        labourHours: 0,
+        labourRate: '0',
+        materialsCost: '1200.00',
+        materialsMarkup: 0.25,
+        sundries: [{ label: 'rest', amount: '5000.00' }],
+      },
       overheadProfit: { method: 'margin', overhead: 0, profit: 0 },
       minimumCharge: '10000.00',
       tax: { mode, rate: 0.08 },
@@ -88,7 +94,11 @@ describe('pricing', () => {
   });
 
   it.each([
-    [{ ...BASE, overheadProfit: { method: 'margin' as const, overhead: 0.6, profit: 0.4 } }, 'pricing.overheadProfit.profit', /less than 100 %/],
+    [
+      { ...BASE, overheadProfit: { method: 'margin' as const, overhead: 0.6, profit: 0.4 } },
+      'pricing.overheadProfit.profit',
+      /less than 100 %/,
+    ],
     [{ ...BASE, direct: { ...BASE.direct, labourRate: 45 as unknown as string } }, 'pricing.direct.labourRate', /not a float/],
     [{ ...BASE, direct: { ...BASE.direct, materialsCost: '-1' } }, 'pricing.direct.materialsCost', /negative/],
     [{ ...BASE, tax: { mode: 'wholeJob' as const, rate: 1.5 } }, 'pricing.tax.rate', /more than 100 %/],

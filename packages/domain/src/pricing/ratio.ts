@@ -11,6 +11,7 @@ export type Ratio = string | number | Decimal;
 export function toRatio(value: Ratio, field: string, label = 'rate', max = 1): Decimal {
   const r = toDecimal(value, field, label);
   if (r.isNegative()) throw new DomainInputError(field, `The ${label} cannot be negative.`);
-  if (r.greaterThan(max)) throw new DomainInputError(field, `The ${label} cannot be more than ${new Decimal(max).times(100).toString()} %.`);
+  if (r.greaterThan(max))
+    throw new DomainInputError(field, `The ${label} cannot be more than ${new Decimal(max).times(100).toString()} %.`);
   return r;
 }

@@ -23,7 +23,11 @@ describe('receivables aging', () => {
       ['e', 122, '90+'],
     ]);
     expect(Object.fromEntries(Object.entries(report.buckets).map(([k, v]) => [k, v.toFixed(2)]))).toEqual({
-      current: '2000.00', '1-30': '1500.00', '31-60': '3000.00', '61-90': '800.00', '90+': '1200.00',
+      current: '2000.00',
+      '1-30': '1500.00',
+      '31-60': '3000.00',
+      '61-90': '800.00',
+      '90+': '1200.00',
     });
     expect(report.total.toFixed(2)).toBe('8500.00');
   });
@@ -45,7 +49,10 @@ describe('receivables aging', () => {
 
   it('names bad fields', () => {
     expectInputError(() => ageReceivables([{ id: 'x', dueDate: 'June 1', amount: '1.00' }], '2025-06-30'), 'invoices[0].dueDate');
-    expectInputError(() => ageReceivables([{ id: 'x', dueDate: '2025-06-01', amount: '1.00', payments: ['-2'] }], '2025-06-30'), 'invoices[0].payments[0]');
+    expectInputError(
+      () => ageReceivables([{ id: 'x', dueDate: '2025-06-01', amount: '1.00', payments: ['-2'] }], '2025-06-30'),
+      'invoices[0].payments[0]',
+    );
     expectInputError(() => ageReceivables([], 'today'), 'asOf');
   });
 });

@@ -18,7 +18,16 @@ describe('cash forecast by ISO week (common practice, DOMAIN.md §2.14)', () => 
   });
 
   it('buckets receipts into weeks starting Monday; overdue money lands in the first week', () => {
-    expect(forecast.weeks.map((w) => [w.weekStart, w.isoWeek, w.invoices.toFixed(2), w.milestones.toFixed(2), w.pipeline.toFixed(2), w.total.toFixed(2)])).toEqual([
+    expect(
+      forecast.weeks.map((w) => [
+        w.weekStart,
+        w.isoWeek,
+        w.invoices.toFixed(2),
+        w.milestones.toFixed(2),
+        w.pipeline.toFixed(2),
+        w.total.toFixed(2),
+      ]),
+    ).toEqual([
       ['2025-06-30', '2025-W27', '3000.00', '0.00', '700.00', '3700.00'],
       ['2025-07-07', '2025-W28', '2000.00', '0.00', '0.00', '2000.00'],
       ['2025-07-14', '2025-W29', '0.00', '4000.00', '0.00', '4000.00'],
@@ -33,7 +42,15 @@ describe('cash forecast by ISO week (common practice, DOMAIN.md §2.14)', () => 
       'weeks',
     );
     expectInputError(
-      () => cashForecast({ asOf: '2025-06-30', weeks: 2, currency: 'USD', openInvoices: [], milestones: [{ id: 'm', date: '2025-07-01', amount: '5', probability: 2 }], pipelineDeposits: [] }),
+      () =>
+        cashForecast({
+          asOf: '2025-06-30',
+          weeks: 2,
+          currency: 'USD',
+          openInvoices: [],
+          milestones: [{ id: 'm', date: '2025-07-01', amount: '5', probability: 2 }],
+          pipelineDeposits: [],
+        }),
       'milestones[0].probability',
     );
   });

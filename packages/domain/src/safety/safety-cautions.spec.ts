@@ -13,10 +13,31 @@ describe('safety cautions from job facts', () => {
     // 40 CFR 745.83 minor repair and maintenance: ≤ 6 ft² per room interior, ≤ 20 ft² exterior;
     // target housing built before 1978, 15 U.S.C. 2681(17)
     [1975, [{ roomId: 'r1', isExterior: false, area: 6 }], []],
-    [1975, [{ roomId: 'r1', isExterior: false, area: 4 }, { roomId: 'r1', isExterior: false, area: 3 }], ['lead-safe-work']],
-    [1975, [{ roomId: 'r1', isExterior: false, area: 4 }, { roomId: 'r2', isExterior: false, area: 3 }], []],
+    [
+      1975,
+      [
+        { roomId: 'r1', isExterior: false, area: 4 },
+        { roomId: 'r1', isExterior: false, area: 3 },
+      ],
+      ['lead-safe-work'],
+    ],
+    [
+      1975,
+      [
+        { roomId: 'r1', isExterior: false, area: 4 },
+        { roomId: 'r2', isExterior: false, area: 3 },
+      ],
+      [],
+    ],
     [1975, [{ roomId: 'x', isExterior: true, area: 20 }], []],
-    [1975, [{ roomId: 'x', isExterior: true, area: 12 }, { roomId: 'y', isExterior: true, area: 9 }], ['lead-safe-work']],
+    [
+      1975,
+      [
+        { roomId: 'x', isExterior: true, area: 12 },
+        { roomId: 'y', isExterior: true, area: 9 },
+      ],
+      ['lead-safe-work'],
+    ],
     [1978, [{ roomId: 'r1', isExterior: false, area: 100 }], []],
   ])('built %d, disturbed %j', (yearBuilt, disturbedPaint, expected) => {
     expect(ids({ yearBuilt, disturbedPaint })).toEqual(expected);
@@ -24,7 +45,9 @@ describe('safety cautions from job facts', () => {
 
   it('converts metric disturbed areas: 0.6 m² is 6.46 ft², over the 6 ft² room limit', () => {
     // 40 CFR 745.83; ft² factor NIST SP 811 App. B.8
-    expect(ids({ lengthUnit: 'm', yearBuilt: 1960, disturbedPaint: [{ roomId: 'r', isExterior: false, area: 0.6 }] })).toEqual(['lead-safe-work']);
+    expect(ids({ lengthUnit: 'm', yearBuilt: 1960, disturbedPaint: [{ roomId: 'r', isExterior: false, area: 0.6 }] })).toEqual([
+      'lead-safe-work',
+    ]);
   });
 
   it.each([
@@ -56,7 +79,10 @@ describe('safety cautions from job facts', () => {
       yearBuilt: 1950,
       disturbedPaint: [{ roomId: 'r', isExterior: false, area: 50 }],
       workingLevel: 14,
-      products: [{ name: 'Isopropyl alcohol', flashPointC: 12 }, { name: 'Lime putty', isLime: true }],
+      products: [
+        { name: 'Isopropyl alcohol', flashPointC: 12 },
+        { name: 'Lime putty', isLime: true },
+      ],
       sandsPlaster: true,
     });
     expect(all.map((c) => [c.id, c.rule])).toEqual([
@@ -75,7 +101,10 @@ describe('safety cautions from job facts', () => {
   });
 
   it('names bad fields', () => {
-    expectInputError(() => safetyCautions({ ...QUIET, yearBuilt: 1975, disturbedPaint: [{ roomId: 'r', isExterior: false, area: -1 }] }), 'disturbedPaint[0].area');
+    expectInputError(
+      () => safetyCautions({ ...QUIET, yearBuilt: 1975, disturbedPaint: [{ roomId: 'r', isExterior: false, area: -1 }] }),
+      'disturbedPaint[0].area',
+    );
     expectInputError(() => safetyCautions({ ...QUIET, workingLevel: Number.NaN }), 'workingLevel');
   });
 });

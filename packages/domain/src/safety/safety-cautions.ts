@@ -2,12 +2,7 @@ import { requireFiniteNumber, requireInteger, requireNonNegative } from '../erro
 import { type LengthUnit, convertArea, convertLength } from '../units/length';
 
 export type CautionId =
-  | 'lead-safe-work'
-  | 'scaffold-fall-protection'
-  | 'edge-fall-protection'
-  | 'flammable-liquid'
-  | 'lime-alkali'
-  | 'plaster-dust-silica';
+  'lead-safe-work' | 'scaffold-fall-protection' | 'edge-fall-protection' | 'flammable-liquid' | 'lime-alkali' | 'plaster-dust-silica';
 
 export interface Caution {
   /** stable, for translation in the apps */

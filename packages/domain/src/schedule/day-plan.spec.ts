@@ -27,7 +27,12 @@ const day = (date: string, workingDay: number) => ({ date, workingDay, crewHours
 describe('planDays', () => {
   const schedule: PlannedSchedule = {
     days: [day('2025-06-05', 1), day('2025-06-06', 2)],
-    steps: [step('setup', '2025-06-05', 8, 10), step('walls:0', '2025-06-05', 10, 15), step('walls:0', '2025-06-06', 8, 9), step('walls:1', '2025-06-06', 9, 12)],
+    steps: [
+      step('setup', '2025-06-05', 8, 10),
+      step('walls:0', '2025-06-05', 10, 15),
+      step('walls:0', '2025-06-06', 8, 9),
+      step('walls:1', '2025-06-06', 9, 12),
+    ],
     waits: [wait('walls:0', '2025-06-06', '2025-06-06', 13), wait('walls:1', '2025-06-06', '2025-06-07', 4.5)],
   };
   const plan = planDays(schedule);

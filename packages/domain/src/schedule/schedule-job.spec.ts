@@ -216,7 +216,9 @@ describe('dry-time-aware schedule', () => {
     fc.assert(
       fc.property(inputArb, (x) => {
         const input = build(x);
-        const layerStarts = scheduleJob(input).tasks.filter((task) => task.chainId !== null).map((task) => task.start);
+        const layerStarts = scheduleJob(input)
+          .tasks.filter((task) => task.chainId !== null)
+          .map((task) => task.start);
         const expected = referenceStarts(input);
         expect(layerStarts).toHaveLength(expected.length);
         layerStarts.forEach((s, i) => expect(s).toBeCloseTo(expected[i], 6));
@@ -232,7 +234,10 @@ describe('dry-time-aware schedule', () => {
     [{ ...DINING_ROOM, calendar: { ...WEEKDAYS, workingWeekdays: [8] } }, 'calendar.workingWeekdays[0]'],
     [{ ...DINING_ROOM, calendar: { ...WEEKDAYS, dayStartHour: 20 } }, 'calendar.productiveHoursPerDay'],
     [{ ...DINING_ROOM, calendar: { ...WEEKDAYS, holidays: ['soon'] } }, 'calendar.holidays[0]'],
-    [{ ...DINING_ROOM, chains: [{ id: 'a', label: 'A', steps: [{ layerId: 'x', label: 'X', crewHours: -1, waitHoursAfter: 0 }] }] }, 'chains[0].steps[0].crewHours'],
+    [
+      { ...DINING_ROOM, chains: [{ id: 'a', label: 'A', steps: [{ layerId: 'x', label: 'X', crewHours: -1, waitHoursAfter: 0 }] }] },
+      'chains[0].steps[0].crewHours',
+    ],
   ])('bad input %# names its field', (input, field) => {
     expectInputError(() => scheduleJob(input), field);
   });

@@ -246,7 +246,9 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
       const firstReady = ready.first();
       const waitingWins =
         top >= 0 &&
-        (firstReady < 0 || startWhenReady[top] < nextDayStart - EPS || (Math.abs(startWhenReady[top] - nextDayStart) <= EPS && top < firstReady));
+        (firstReady < 0 ||
+          startWhenReady[top] < nextDayStart - EPS ||
+          (Math.abs(startWhenReady[top] - nextDayStart) <= EPS && top < firstReady));
       if (waitingWins) {
         bestChain = waiting.pop();
         start = startWhenReady[bestChain];
@@ -272,7 +274,15 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
         const until = readyAt[bestChain];
         const untilDay = Math.floor(until / 24);
         const date = tasks[tasks.length - 1].endDate;
-        waits.push({ taskId, chainId: chain.id, layerId: step.layerId, label, date, untilDate: dateOf(untilDay), untilHour: until - untilDay * 24 });
+        waits.push({
+          taskId,
+          chainId: chain.id,
+          layerId: step.layerId,
+          label,
+          date,
+          untilDate: dateOf(untilDay),
+          untilHour: until - untilDay * 24,
+        });
       }
     }
   }

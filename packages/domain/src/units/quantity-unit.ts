@@ -3,20 +3,7 @@ import { DomainInputError } from '../errors/domain-input-error';
 import { requireFiniteNumber } from '../errors/input-checks';
 
 /** US customary kitchen and trade volumes, cubic units, and metric volumes. */
-export type VolumeUnit =
-  | 'mL'
-  | 'L'
-  | 'cm3'
-  | 'm3'
-  | 'in3'
-  | 'ft3'
-  | 'tsp'
-  | 'tbsp'
-  | 'floz'
-  | 'cup'
-  | 'pint'
-  | 'quart'
-  | 'gallon';
+export type VolumeUnit = 'mL' | 'L' | 'cm3' | 'm3' | 'in3' | 'ft3' | 'tsp' | 'tbsp' | 'floz' | 'cup' | 'pint' | 'quart' | 'gallon';
 
 export type MassUnit = 'g' | 'kg' | 'oz' | 'lb';
 
@@ -55,9 +42,9 @@ const GRAMS_PER: Readonly<Record<MassUnit, string>> = {
 };
 
 const BASE_PER: Readonly<Record<QuantityUnit, string>> = { ...MILLILITRES_PER, ...GRAMS_PER };
-const BASE_PER_NUMBER = Object.fromEntries(
-  Object.entries(BASE_PER).map(([unit, factor]) => [unit, Number(factor)]),
-) as Readonly<Record<QuantityUnit, number>>;
+const BASE_PER_NUMBER = Object.fromEntries(Object.entries(BASE_PER).map(([unit, factor]) => [unit, Number(factor)])) as Readonly<
+  Record<QuantityUnit, number>
+>;
 
 export function isVolumeUnit(unit: string): unit is VolumeUnit {
   return Object.prototype.hasOwnProperty.call(MILLILITRES_PER, unit);

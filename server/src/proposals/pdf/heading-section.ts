@@ -6,13 +6,28 @@ import { COLOURS, contentWidth, type Doc, MARGIN } from './page';
 export function headingSection(doc: Doc, s: ProposalSnapshot, f: Formats, reference: string): void {
   const width = contentWidth(doc);
   const top = MARGIN;
-  doc.font('heading').fontSize(20).fillColor(COLOURS.umber).text(s.firm.name, MARGIN, top, { width: width * 0.6 });
-  doc.font('text').fontSize(9.5).fillColor(COLOURS.muted).text([...s.firm.addressLines, s.firm.phone].filter(Boolean).join('\n'), { width: width * 0.6 });
+  doc
+    .font('heading')
+    .fontSize(20)
+    .fillColor(COLOURS.umber)
+    .text(s.firm.name, MARGIN, top, { width: width * 0.6 });
+  doc
+    .font('text')
+    .fontSize(9.5)
+    .fillColor(COLOURS.muted)
+    .text([...s.firm.addressLines, s.firm.phone].filter(Boolean).join('\n'), { width: width * 0.6 });
   const leftBottom = doc.y;
 
   const right = MARGIN + width * 0.6;
-  doc.font('strong').fontSize(10).fillColor(COLOURS.verdigris).text('PROPOSAL', right, top + 4, { width: width * 0.4, align: 'right', characterSpacing: 1.5 });
-  doc.font('text').fontSize(9.5).fillColor(COLOURS.ink)
+  doc
+    .font('strong')
+    .fontSize(10)
+    .fillColor(COLOURS.verdigris)
+    .text('PROPOSAL', right, top + 4, { width: width * 0.4, align: 'right', characterSpacing: 1.5 });
+  doc
+    .font('text')
+    .fontSize(9.5)
+    .fillColor(COLOURS.ink)
     .text(`Date: ${f.date(s.issuedOn)}`, right, doc.y + 2, { width: width * 0.4, align: 'right' })
     .text(`Valid until: ${f.date(s.expiresOn)}`, { width: width * 0.4, align: 'right' })
     .fillColor(COLOURS.muted)
@@ -25,9 +40,17 @@ export function headingSection(doc: Doc, s: ProposalSnapshot, f: Formats, refere
   const half = width / 2 - 8;
   const y = doc.y;
   doc.font('strong').fontSize(9).fillColor(COLOURS.umber).text('PREPARED FOR', MARGIN, y, { width: half, characterSpacing: 1 });
-  doc.font('text').fontSize(10).fillColor(COLOURS.ink).text([s.client.name, s.client.email, s.client.phone].filter(Boolean).join('\n'), { width: half });
+  doc
+    .font('text')
+    .fontSize(10)
+    .fillColor(COLOURS.ink)
+    .text([s.client.name, s.client.email, s.client.phone].filter(Boolean).join('\n'), { width: half });
   const clientBottom = doc.y;
-  doc.font('strong').fontSize(9).fillColor(COLOURS.umber).text('WORK AT', MARGIN + half + 16, y, { width: half, characterSpacing: 1 });
+  doc
+    .font('strong')
+    .fontSize(9)
+    .fillColor(COLOURS.umber)
+    .text('WORK AT', MARGIN + half + 16, y, { width: half, characterSpacing: 1 });
   const siteLines = [s.site.label, ...s.site.addressLines, s.site.yearBuilt ? `Built ${s.site.yearBuilt}` : ''].filter(Boolean);
   doc.font('text').fontSize(10).fillColor(COLOURS.ink).text(siteLines.join('\n'), { width: half });
   doc.x = MARGIN;

@@ -34,9 +34,20 @@ export function paintBackground(doc: Doc): void {
 export function sectionHeading(doc: Doc, title: string): void {
   ensureSpace(doc, 60);
   doc.moveDown(0.8);
-  doc.font('heading').fontSize(15).fillColor(COLOURS.umber).text(title, MARGIN, doc.y, { width: contentWidth(doc) });
+  doc
+    .font('heading')
+    .fontSize(15)
+    .fillColor(COLOURS.umber)
+    .text(title, MARGIN, doc.y, { width: contentWidth(doc) });
   const y = doc.y + 3;
-  doc.save().moveTo(MARGIN, y).lineTo(MARGIN + contentWidth(doc), y).lineWidth(0.75).strokeColor(COLOURS.rule).stroke().restore();
+  doc
+    .save()
+    .moveTo(MARGIN, y)
+    .lineTo(MARGIN + contentWidth(doc), y)
+    .lineWidth(0.75)
+    .strokeColor(COLOURS.rule)
+    .stroke()
+    .restore();
   doc.y = y + 8;
   doc.fillColor(COLOURS.ink);
 }
@@ -44,7 +55,11 @@ export function sectionHeading(doc: Doc, title: string): void {
 export function subHeading(doc: Doc, title: string): void {
   ensureSpace(doc, 40);
   doc.moveDown(0.4);
-  doc.font('strong').fontSize(11.5).fillColor(COLOURS.verdigris).text(title, MARGIN, doc.y, { width: contentWidth(doc) });
+  doc
+    .font('strong')
+    .fontSize(11.5)
+    .fillColor(COLOURS.verdigris)
+    .text(title, MARGIN, doc.y, { width: contentWidth(doc) });
   doc.moveDown(0.2);
   doc.fillColor(COLOURS.ink);
 }
@@ -83,17 +98,33 @@ export function row(doc: Doc, cells: readonly Cell[], opts: { shaded?: boolean; 
   const pad = 4;
   const total = contentWidth(doc);
   const widths = cells.map((c) => c.share * total);
-  const heights = cells.map((c, i) => doc.font(c.font ?? 'text').fontSize(size).heightOfString(c.text || ' ', { width: widths[i]! - pad * 2 }));
+  const heights = cells.map((c, i) =>
+    doc
+      .font(c.font ?? 'text')
+      .fontSize(size)
+      .heightOfString(c.text || ' ', { width: widths[i]! - pad * 2 }),
+  );
   const height = Math.max(...heights) + pad * 2;
   ensureSpace(doc, height);
   const top = doc.y;
   if (opts.shaded) doc.save().rect(MARGIN, top, total, height).fill(COLOURS.band).restore();
   let x = MARGIN;
   cells.forEach((c, i) => {
-    doc.font(c.font ?? 'text').fontSize(size).fillColor(COLOURS.ink).text(c.text, x + pad, top + pad, { width: widths[i]! - pad * 2, align: c.align ?? 'left' });
+    doc
+      .font(c.font ?? 'text')
+      .fontSize(size)
+      .fillColor(COLOURS.ink)
+      .text(c.text, x + pad, top + pad, { width: widths[i]! - pad * 2, align: c.align ?? 'left' });
     x += widths[i]!;
   });
-  doc.save().moveTo(MARGIN, top + height).lineTo(MARGIN + total, top + height).lineWidth(0.5).strokeColor(COLOURS.rule).stroke().restore();
+  doc
+    .save()
+    .moveTo(MARGIN, top + height)
+    .lineTo(MARGIN + total, top + height)
+    .lineWidth(0.5)
+    .strokeColor(COLOURS.rule)
+    .stroke()
+    .restore();
   doc.x = MARGIN;
   doc.y = top + height;
 }
@@ -105,8 +136,15 @@ export function footers(doc: Doc, line: string): void {
     doc.switchToPage(i);
     const keep = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;
-    doc.font('text').fontSize(8.5).fillColor(COLOURS.muted)
-      .text(`${line} · page ${i - range.start + 1} of ${range.count}`, MARGIN, doc.page.height - MARGIN - 10, { width: contentWidth(doc), align: 'center', lineBreak: false });
+    doc
+      .font('text')
+      .fontSize(8.5)
+      .fillColor(COLOURS.muted)
+      .text(`${line} · page ${i - range.start + 1} of ${range.count}`, MARGIN, doc.page.height - MARGIN - 10, {
+        width: contentWidth(doc),
+        align: 'center',
+        lineBreak: false,
+      });
     doc.page.margins.bottom = keep;
   }
 }

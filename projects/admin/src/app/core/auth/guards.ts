@@ -31,7 +31,5 @@ export function roleGuard(needed: StaffRole): CanActivateFn {
 
 /** Only same-site paths are followed after sign-in, so a crafted link cannot send people away. */
 export function safeNextUrl(next: string | null | undefined): string {
-  return next && next.startsWith('/') && !next.startsWith('//') && !next.startsWith('/\\')
-    ? next
-    : HOME_URL;
+  return next && next.startsWith('/') && !next.startsWith('//') && !next.startsWith('/\\') ? next : HOME_URL;
 }

@@ -49,9 +49,7 @@ export class Shell {
     { initialValue: false },
   );
   protected readonly isNavOpen = signal(false);
-  protected readonly navItems = computed(() =>
-    NAV_ITEMS.filter((item) => this.session.hasRole(item.minRole)),
-  );
+  protected readonly navItems = computed(() => NAV_ITEMS.filter((item) => this.session.hasRole(item.minRole)));
 
   protected toggleNav(): void {
     this.isNavOpen.update((open) => !open);

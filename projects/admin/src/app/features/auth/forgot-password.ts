@@ -17,16 +17,7 @@ import { StaffAuth } from './staff-auth';
 
 @Component({
   selector: 'lb-forgot-password',
-  imports: [
-    AuthFrame,
-    FormAlert,
-    MatButtonModule,
-    MatFormFieldModule,
-    MatIconModule,
-    MatInputModule,
-    ReactiveFormsModule,
-    RouterLink,
-  ],
+  imports: [AuthFrame, FormAlert, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, ReactiveFormsModule, RouterLink],
   templateUrl: './forgot-password.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

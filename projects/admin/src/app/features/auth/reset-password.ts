@@ -18,16 +18,7 @@ import { StaffAuth } from './staff-auth';
 
 @Component({
   selector: 'lb-reset-password',
-  imports: [
-    AuthFrame,
-    FormAlert,
-    MatButtonModule,
-    MatFormFieldModule,
-    MatInputModule,
-    ReactiveFormsModule,
-    RevealPassword,
-    RouterLink,
-  ],
+  imports: [AuthFrame, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, RevealPassword, RouterLink],
   templateUrl: './reset-password.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -18,16 +18,7 @@ import { StaffAuth } from './staff-auth';
 
 @Component({
   selector: 'lb-sign-in',
-  imports: [
-    AuthFrame,
-    FormAlert,
-    MatButtonModule,
-    MatFormFieldModule,
-    MatInputModule,
-    ReactiveFormsModule,
-    RevealPassword,
-    RouterLink,
-  ],
+  imports: [AuthFrame, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, RevealPassword, RouterLink],
   templateUrl: './sign-in.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

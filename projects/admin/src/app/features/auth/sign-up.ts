@@ -25,16 +25,7 @@ import { StaffAuth } from './staff-auth';
 
 @Component({
   selector: 'lb-sign-up',
-  imports: [
-    AuthFrame,
-    FormAlert,
-    MatButtonModule,
-    MatFormFieldModule,
-    MatInputModule,
-    ReactiveFormsModule,
-    RevealPassword,
-    RouterLink,
-  ],
+  imports: [AuthFrame, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, RevealPassword, RouterLink],
   templateUrl: './sign-up.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

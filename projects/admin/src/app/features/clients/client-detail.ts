@@ -19,17 +19,7 @@ type SiteEditing = 'new' | string | null;
 
 @Component({
   selector: 'lb-client-detail',
-  imports: [
-    ClientForm,
-    ContactForm,
-    DatePipe,
-    LeadSafetyNote,
-    MatButtonModule,
-    MatIconModule,
-    MatProgressBarModule,
-    RouterLink,
-    SiteForm,
-  ],
+  imports: [ClientForm, ContactForm, DatePipe, LeadSafetyNote, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, SiteForm],
   templateUrl: './client-detail.html',
   styleUrl: './client-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

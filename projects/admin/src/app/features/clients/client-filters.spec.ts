@@ -1,11 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  NO_CLIENT_FILTERS,
-  clientFiltersFromParams,
-  clientFiltersToParams,
-  clientListParams,
-  sameClientFilters,
-} from './client-filters';
+import { NO_CLIENT_FILTERS, clientFiltersFromParams, clientFiltersToParams, clientListParams, sameClientFilters } from './client-filters';
 
 describe('clientFiltersFromParams', () => {
   it.each([
@@ -22,7 +16,12 @@ describe('clientFiltersToParams and clientListParams', () => {
   it.each([
     ['no filters', NO_CLIENT_FILTERS, { q: null, kind: null }, { limit: 50 }],
     ['a padded search', { q: '  ash ', kind: null }, { q: 'ash', kind: null }, { limit: 50, q: 'ash' }],
-    ['a kind', { q: '', kind: 'general_contractor' } as const, { q: null, kind: 'general_contractor' }, { limit: 50, kind: 'general_contractor' }],
+    [
+      'a kind',
+      { q: '', kind: 'general_contractor' } as const,
+      { q: null, kind: 'general_contractor' },
+      { limit: 50, kind: 'general_contractor' },
+    ],
   ])('writes %s', (_case, filters, address, query) => {
     expect(clientFiltersToParams(filters)).toEqual(address);
     expect(clientListParams(filters)).toEqual(query);

@@ -27,15 +27,7 @@ import { ClientApi } from './client-api';
 /** Adds a client, or edits one when given it. */
 @Component({
   selector: 'lb-client-form',
-  imports: [
-    FormAlert,
-    MatButtonModule,
-    MatCheckboxModule,
-    MatFormFieldModule,
-    MatInputModule,
-    MatSelectModule,
-    ReactiveFormsModule,
-  ],
+  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   template: `
     <form [formGroup]="form" (ngSubmit)="saveClient()" novalidate [attr.aria-label]="isNew() ? 'New client' : 'Edit client'">
       <fieldset class="lb-gate fields" [disabled]="!isHydrated()">

@@ -9,13 +9,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import {
-  CLIENT_KINDS,
-  CLIENT_KIND_LABELS,
-  SEARCH_MAX_LENGTH,
-  type ClientKind,
-  type ClientSummary,
-} from '@layerbook/contracts/types';
+import { CLIENT_KINDS, CLIENT_KIND_LABELS, SEARCH_MAX_LENGTH, type ClientKind, type ClientSummary } from '@layerbook/contracts/types';
 import { debounceTime, distinctUntilChanged, map, tap } from 'rxjs';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { keysetList } from '../../shared/forms/keyset-list';
@@ -77,9 +71,7 @@ export class ClientList {
     this.search.valueChanges
       .pipe(debounceTime(SEARCH_PAUSE_MS), distinctUntilChanged(), takeUntilDestroyed(destroyRef))
       .subscribe((q) => this.applyFilters({ ...this.filters(), q }));
-    this.kind.valueChanges
-      .pipe(takeUntilDestroyed(destroyRef))
-      .subscribe((kind) => this.applyFilters({ ...this.filters(), kind }));
+    this.kind.valueChanges.pipe(takeUntilDestroyed(destroyRef)).subscribe((kind) => this.applyFilters({ ...this.filters(), kind }));
   }
 
   private applyFilters(filters: ClientFilters): void {

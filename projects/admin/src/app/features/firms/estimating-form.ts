@@ -82,7 +82,11 @@ export function readForm(form: EstimatingFormGroup): EstimatingSettings {
   return {
     labourRate: v.labourRate.trim(),
     materialsMarkupPercent: n(v.materialsMarkupPercent),
-    overheadProfit: { method: v.overheadProfit.method, overheadPercent: n(v.overheadProfit.overheadPercent), profitPercent: n(v.overheadProfit.profitPercent) },
+    overheadProfit: {
+      method: v.overheadProfit.method,
+      overheadPercent: n(v.overheadProfit.overheadPercent),
+      profitPercent: n(v.overheadProfit.profitPercent),
+    },
     minimumCharge: v.minimumCharge.trim() || null,
     tax: { mode: v.tax.mode, ratePercent: n(v.tax.ratePercent) },
     rounding: v.rounding.kind === 'nearest' ? { kind: 'nearest', increment: v.rounding.increment.trim() } : { kind: 'minorUnit' },

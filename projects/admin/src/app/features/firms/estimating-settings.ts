@@ -37,7 +37,16 @@ import { FirmApi } from './firm-api';
  */
 @Component({
   selector: 'lb-estimating-settings',
-  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, MatRadioModule, MatSelectModule, ReactiveFormsModule],
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatRadioModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+  ],
   templateUrl: './estimating-settings.html',
   styleUrl: './estimating-settings.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -75,7 +84,9 @@ export class EstimatingSettingsForm {
     const op = this.overheadProfit();
     return op ? methodInWords(op.method, op.overheadPercent ?? 0, op.profitPercent ?? 0) : '';
   });
-  protected readonly roundingKind = toSignal(this.form.controls.rounding.controls.kind.valueChanges, { initialValue: 'minorUnit' as const });
+  protected readonly roundingKind = toSignal(this.form.controls.rounding.controls.kind.valueChanges, {
+    initialValue: 'minorUnit' as const,
+  });
 
   constructor() {
     fillWhenLoaded(this.estimating, (view) => {

@@ -36,8 +36,8 @@ type LikelihoodControls = Record<InquiryStage, FormControl<number | null>>;
       <fieldset class="lb-gate" [disabled]="!isHydrated()">
         <h2 id="likelihood-heading">Chance of winning by stage</h2>
         <p class="lead">
-          Each open inquiry's estimated value is multiplied by its stage's chance to give the weighted
-          pipeline. Set these from your own record, for example how many sample boards turn into jobs.
+          Each open inquiry's estimated value is multiplied by its stage's chance to give the weighted pipeline. Set these from your own
+          record, for example how many sample boards turn into jobs.
         </p>
         <lb-form-alert [message]="message()" />
         @if (hasLoaded()) {

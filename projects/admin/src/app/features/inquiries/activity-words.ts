@@ -47,11 +47,7 @@ export function describeActivity(
     case 'follow_up': {
       const to = typeof data['to'] === 'string' ? formatDate(data['to']) : null;
       const from = typeof data['from'] === 'string' ? formatDate(data['from']) : null;
-      const title = to
-        ? from
-          ? `Follow-up moved from ${from} to ${to}`
-          : `Follow-up set for ${to}`
-        : 'Follow-up date cleared';
+      const title = to ? (from ? `Follow-up moved from ${from} to ${to}` : `Follow-up set for ${to}`) : 'Follow-up date cleared';
       return { icon: 'event', title, body: '' };
     }
     case 'converted':

@@ -4,11 +4,7 @@ import type { BoardColumn, InquiryStage, InquirySummary } from '@layerbook/contr
  * The board after one card moves: it leaves its column and goes on top of the new one, and both
  * counts follow. Pure, so the board can show a move at once and put it back if the server refuses.
  */
-export function moveCard(
-  columns: readonly BoardColumn[],
-  card: InquirySummary,
-  stage: InquiryStage,
-): BoardColumn[] {
+export function moveCard(columns: readonly BoardColumn[], card: InquirySummary, stage: InquiryStage): BoardColumn[] {
   const moved: InquirySummary = { ...card, stage };
   return columns.map((column) => {
     const without = column.items.filter((item) => item.id !== card.id);

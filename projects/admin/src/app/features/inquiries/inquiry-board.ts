@@ -1,15 +1,6 @@
 import { CdkDrag, CdkDragDrop, CdkDropList, CdkDropListGroup } from '@angular/cdk/drag-drop';
 import { httpResource } from '@angular/common/http';
-import {
-  ChangeDetectionStrategy,
-  Component,
-  ElementRef,
-  Injector,
-  afterNextRender,
-  computed,
-  inject,
-  signal,
-} from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, Injector, afterNextRender, computed, inject, signal } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
@@ -26,17 +17,7 @@ import { STAGE_ICONS } from './stage-icons';
 
 @Component({
   selector: 'lb-inquiry-board',
-  imports: [
-    CdkDrag,
-    CdkDropList,
-    CdkDropListGroup,
-    FormAlert,
-    InquiryCard,
-    InquiryViews,
-    MatIconModule,
-    MatProgressBarModule,
-    RouterLink,
-  ],
+  imports: [CdkDrag, CdkDropList, CdkDropListGroup, FormAlert, InquiryCard, InquiryViews, MatIconModule, MatProgressBarModule, RouterLink],
   templateUrl: './inquiry-board.html',
   styleUrl: './inquiry-board.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

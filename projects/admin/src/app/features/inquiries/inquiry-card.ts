@@ -30,9 +30,7 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
       </button>
       <mat-menu #moveMenu="matMenu" xPosition="before">
         @for (stage of otherStages(); track stage) {
-          <button mat-menu-item type="button" (click)="chooseStage(stage)">
-            Move to {{ stageLabels[stage] }}
-          </button>
+          <button mat-menu-item type="button" (click)="chooseStage(stage)">Move to {{ stageLabels[stage] }}</button>
         }
       </mat-menu>
     </div>
@@ -66,9 +64,7 @@ export class InquiryCard {
   protected readonly stageLabels = STAGE_LABELS;
   /** After a move the board focuses the card in its new column; otherwise focus goes back here. */
   private hasChosen = false;
-  protected readonly otherStages = computed(() =>
-    INQUIRY_STAGES.filter((stage) => stage !== this.inquiry().stage),
-  );
+  protected readonly otherStages = computed(() => INQUIRY_STAGES.filter((stage) => stage !== this.inquiry().stage));
 
   protected chooseStage(stage: InquiryStage): void {
     this.hasChosen = true;

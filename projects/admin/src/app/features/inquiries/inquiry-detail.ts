@@ -127,7 +127,9 @@ export class InquiryDetailPage {
       await change();
     } catch (error) {
       // A refused change names its fields, but this page has none to put them beside.
-      const fieldWords = toProblem(error).errors?.map((e) => e.message).join(' ');
+      const fieldWords = toProblem(error)
+        .errors?.map((e) => e.message)
+        .join(' ');
       this.message.set(fieldWords || problemMessage(error));
     } finally {
       this.isBusy.set(false);

@@ -43,15 +43,7 @@ type InquiryDetails = Omit<InquiryCreate, 'estimatedValue' | 'assigneeUserId' | 
  */
 @Component({
   selector: 'lb-inquiry-form',
-  imports: [
-    FormAlert,
-    MatButtonModule,
-    MatDatepickerModule,
-    MatFormFieldModule,
-    MatInputModule,
-    MatSelectModule,
-    ReactiveFormsModule,
-  ],
+  imports: [FormAlert, MatButtonModule, MatDatepickerModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   providers: [provideNativeDateAdapter()],
   templateUrl: './inquiry-form.html',
   styleUrl: './inquiry-form.scss',

@@ -17,12 +17,7 @@ import { RouterLink, RouterLinkActive } from '@angular/router';
     </div>
     <p class="lb-lead">Every prospect from first call to won or lost, with what the work may be worth.</p>
     <nav class="views" aria-label="Inquiry views">
-      <a
-        routerLink="/inquiries"
-        routerLinkActive="is-current"
-        [routerLinkActiveOptions]="{ exact: true }"
-        ariaCurrentWhenActive="page"
-      >
+      <a routerLink="/inquiries" routerLinkActive="is-current" [routerLinkActiveOptions]="{ exact: true }" ariaCurrentWhenActive="page">
         <mat-icon aria-hidden="true">view_week</mat-icon>Board
       </a>
       <a routerLink="/inquiries/list" routerLinkActive="is-current" ariaCurrentWhenActive="page">

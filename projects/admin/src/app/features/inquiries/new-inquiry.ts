@@ -13,8 +13,8 @@ import { InquiryForm } from './inquiry-form';
       <p><a routerLink="/inquiries">Back to inquiries</a></p>
       <h1>Log an inquiry</h1>
       <p class="lb-lead">
-        For a phone call, a referral or a chat at the showroom. Only the name and where it came from are
-        needed now; fill in the rest as you learn it.
+        For a phone call, a referral or a chat at the showroom. Only the name and where it came from are needed now; fill in the rest as you
+        learn it.
       </p>
       <lb-inquiry-form (saved)="openInquiry($event)" (cancelled)="goBack()" />
     </section>

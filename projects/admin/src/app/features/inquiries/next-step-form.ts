@@ -20,15 +20,7 @@ import { InquiryApi } from './inquiry-api';
 /** What the inquiry may be worth, who has it, and when to call back. */
 @Component({
   selector: 'lb-next-step-form',
-  imports: [
-    FormAlert,
-    MatButtonModule,
-    MatDatepickerModule,
-    MatFormFieldModule,
-    MatInputModule,
-    MatSelectModule,
-    ReactiveFormsModule,
-  ],
+  imports: [FormAlert, MatButtonModule, MatDatepickerModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   providers: [provideNativeDateAdapter()],
   template: `
     <form [formGroup]="form" (ngSubmit)="saveNextStep()" novalidate aria-labelledby="next-step-heading">

@@ -42,12 +42,17 @@ import { jobStatus } from './job-words';
             @for (j of items(); track j.id) {
               @let look = statusLook(j.status);
               <tr>
-                <th scope="row"><a [routerLink]="['/jobs', j.id]">{{ j.title }}</a></th>
+                <th scope="row">
+                  <a [routerLink]="['/jobs', j.id]">{{ j.title }}</a>
+                </th>
                 <td>{{ j.clientName }}</td>
                 <td>{{ j.optionLabel }}</td>
                 <td class="num">{{ j.contractSum | money: j.currency }}</td>
                 <td>
-                  <span class="status"><mat-icon aria-hidden="true">{{ look.icon }}</mat-icon>{{ look.word }}</span>
+                  <span class="status"
+                    ><mat-icon aria-hidden="true">{{ look.icon }}</mat-icon
+                    >{{ look.word }}</span
+                  >
                 </td>
                 <td>
                   @if (j.startDate) {

@@ -26,7 +26,10 @@ const PAYMENT_ICONS: Readonly<Record<PaymentLineStatus, string>> = {
 };
 
 export const jobStatus = (status: JobStatus): StatusLook => ({ word: JOB_STATUS_LABELS[status], icon: JOB_ICONS[status] });
-export const paymentStatus = (status: PaymentLineStatus): StatusLook => ({ word: PAYMENT_LINE_STATUS_LABELS[status], icon: PAYMENT_ICONS[status] });
+export const paymentStatus = (status: PaymentLineStatus): StatusLook => ({
+  word: PAYMENT_LINE_STATUS_LABELS[status],
+  icon: PAYMENT_ICONS[status],
+});
 
 /** When a payment falls due, in trade words, from what the proposal said triggers it. */
 export function paymentWhen(payment: Pick<PaymentScheduleLineView, 'trigger'>): string {

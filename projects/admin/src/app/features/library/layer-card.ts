@@ -27,7 +27,17 @@ const NUMBER = { required: 'Enter a number.', positive: 'Enter a number above ze
 /** One layer of a finish system, its fields grouped the way a finisher thinks about them. */
 @Component({
   selector: 'lb-layer-card',
-  imports: [CdkDragHandle, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, MatRadioModule, MatSelectModule, ReactiveFormsModule],
+  imports: [
+    CdkDragHandle,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatRadioModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+  ],
   templateUrl: './layer-card.html',
   styleUrl: './layer-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -58,19 +68,30 @@ export class LayerCard {
     product: { required: 'Choose a product, or give a mix recipe.' },
     amount: { required: 'Enter how far the product goes.', positive: 'Coverage must be more than zero.' },
     parts: { required: 'Enter the parts.', positive: 'Parts must be more than zero.' },
-    coats: { required: 'Enter the number of coats.', min: 'A layer has at least one coat.', max: `Use at most ${L.coatsMax} coats.`, pattern: 'Coats are whole numbers.' },
-    share: { required: 'Enter the share of the surface.', positive: 'The share must be more than 0 %.', max: 'The share is at most 100 %.' },
+    coats: {
+      required: 'Enter the number of coats.',
+      min: 'A layer has at least one coat.',
+      max: `Use at most ${L.coatsMax} coats.`,
+      pattern: 'Coats are whole numbers.',
+    },
+    share: {
+      required: 'Enter the share of the surface.',
+      positive: 'The share must be more than 0 %.',
+      max: 'The share is at most 100 %.',
+    },
     dilution: { min: 'The dilution cannot be negative.', max: 'Dilution must be under 100 %.' },
     waste: { required: 'Enter the waste (0 for none).', min: 'Waste cannot be negative.', max: 'Waste must be under 100 %.' },
     rate: { ...NUMBER, positive: 'The production rate must be more than zero.' },
     multiplier: { min: 'A multiplier is at least 1 (no extra time).', max: 'A multiplier above 5 is surely a typo.' },
-    wait: { required: 'Enter the wait in hours (0 for none).', min: 'The wait cannot be negative.', max: `Use at most 90 days (${L.waitHoursMax} hours).` },
+    wait: {
+      required: 'Enter the wait in hours (0 for none).',
+      min: 'The wait cannot be negative.',
+      max: `Use at most 90 days (${L.waitHoursMax} hours).`,
+    },
   };
 
   /** Re-read on every change of the layer, so labels and the summary line follow what is typed. */
-  private readonly value = toSignal(
-    toObservable(this.layer).pipe(switchMap((g) => g.valueChanges.pipe(startWith(g.getRawValue())))),
-  );
+  private readonly value = toSignal(toObservable(this.layer).pipe(switchMap((g) => g.valueChanges.pipe(startWith(g.getRawValue())))));
   protected readonly heading = computed(() => {
     this.value();
     const name = this.layer().controls.name.value.trim();

@@ -49,14 +49,20 @@ type Coverage = FinishLayerInput['coverage'];
 export function coverageGroup(fb: NonNullableFormBuilder, c?: Coverage): CoverageGroup {
   return fb.group({
     kind: fb.control<CoverageKind>(c?.kind ?? 'spreadRate', Validators.required),
-    amount: fb.control<number | null>(c ? (c.kind === 'spreadRate' ? c.surfacePerUnit : c.unitPerSurface) : null, [Validators.required, positive]),
+    amount: fb.control<number | null>(c ? (c.kind === 'spreadRate' ? c.surfacePerUnit : c.unitPerSurface) : null, [
+      Validators.required,
+      positive,
+    ]),
     unit: fb.control<QuantityUnit>(c?.unit ?? 'gallon', Validators.required),
     lengthUnit: fb.control<LengthUnit>(c?.lengthUnit ?? 'ft', Validators.required),
   });
 }
 
 function componentGroup(fb: NonNullableFormBuilder, productId = '', parts: number | null = 1): ComponentGroup {
-  return fb.group({ productId: fb.control(productId, Validators.required), parts: fb.control<number | null>(parts, [Validators.required, positive]) });
+  return fb.group({
+    productId: fb.control(productId, Validators.required),
+    parts: fb.control<number | null>(parts, [Validators.required, positive]),
+  });
 }
 
 /**
@@ -64,7 +70,8 @@ function componentGroup(fb: NonNullableFormBuilder, productId = '', parts: numbe
  * hour and a 4 h recoat wait (DOMAIN.md §3.6 ranges; common practice, no source).
  */
 export function layerGroup(fb: NonNullableFormBuilder, layer?: FinishLayerInput) {
-  const multiplier = (name: MultiplierName) => fb.control<number | null>(layer?.multipliers?.[name] ?? null, [Validators.min(L.multiplierMin), Validators.max(L.multiplierMax)]);
+  const multiplier = (name: MultiplierName) =>
+    fb.control<number | null>(layer?.multipliers?.[name] ?? null, [Validators.min(L.multiplierMin), Validators.max(L.multiplierMax)]);
   const recipe = layer?.recipe;
   const group = fb.group({
     id: fb.control(layer?.id ?? newLayerId()),
@@ -75,15 +82,25 @@ export function layerGroup(fb: NonNullableFormBuilder, layer?: FinishLayerInput)
     recipe: fb.group({
       by: fb.control<RecipeBasis>(recipe?.by ?? 'volume', Validators.required),
       baseProductId: fb.control(recipe?.baseProductId ?? '', Validators.required),
-      components: fb.array(recipe ? recipe.components.map((c) => componentGroup(fb, c.productId, c.parts)) : [componentGroup(fb), componentGroup(fb, '', 4)]),
+      components: fb.array(
+        recipe ? recipe.components.map((c) => componentGroup(fb, c.productId, c.parts)) : [componentGroup(fb), componentGroup(fb, '', 4)],
+      ),
     }),
     coverage: coverageGroup(fb, layer?.coverage ?? { kind: 'spreadRate', surfacePerUnit: 350, unit: 'gallon', lengthUnit: 'ft' }),
-    coats: fb.control<number | null>(layer?.coats ?? 1, [Validators.required, Validators.min(1), Validators.max(L.coatsMax), Validators.pattern(/^\d+$/)]),
+    coats: fb.control<number | null>(layer?.coats ?? 1, [
+      Validators.required,
+      Validators.min(1),
+      Validators.max(L.coatsMax),
+      Validators.pattern(/^\d+$/),
+    ]),
     isPerCoat: fb.control(!!layer?.coatCoverages),
     coatCoverages: fb.array((layer?.coatCoverages ?? []).map((c) => coverageGroup(fb, c))),
     coverageShare: fb.control<number | null>(toPercent(layer?.coverageShare ?? 1), [Validators.required, positive, Validators.max(100)]),
     dilution: fb.group({
-      share: fb.control<number | null>(layer?.dilution ? toPercent(layer.dilution.share) : null, [Validators.min(0), Validators.max(99.999)]),
+      share: fb.control<number | null>(layer?.dilution ? toPercent(layer.dilution.share) : null, [
+        Validators.min(0),
+        Validators.max(99.999),
+      ]),
       convention: fb.control<DilutionConvention>(layer?.dilution?.convention ?? 'ofConcentrate'),
     }),
     waste: fb.control<number | null>(toPercent(layer?.waste ?? 0.1), [Validators.required, Validators.min(0), Validators.max(99.999)]),
@@ -91,8 +108,14 @@ export function layerGroup(fb: NonNullableFormBuilder, layer?: FinishLayerInput)
       surfacePerHour: fb.control<number | null>(layer?.productionRate.surfacePerHour ?? 250, [Validators.required, positive]),
       lengthUnit: fb.control<LengthUnit>(layer?.productionRate.lengthUnit ?? 'ft', Validators.required),
     }),
-    multipliers: fb.group(Object.fromEntries(MULTIPLIER_NAMES.map((name) => [name, multiplier(name)])) as Record<MultiplierName, FormControl<number | null>>),
-    waitHoursAfter: fb.control<number | null>(layer?.waitHoursAfter ?? 4, [Validators.required, Validators.min(0), Validators.max(L.waitHoursMax)]),
+    multipliers: fb.group(
+      Object.fromEntries(MULTIPLIER_NAMES.map((name) => [name, multiplier(name)])) as Record<MultiplierName, FormControl<number | null>>,
+    ),
+    waitHoursAfter: fb.control<number | null>(layer?.waitHoursAfter ?? 4, [
+      Validators.required,
+      Validators.min(0),
+      Validators.max(L.waitHoursMax),
+    ]),
   });
 
   // Only the chosen source (one product, or a mix) and, when asked for, per-coat coverages count
@@ -156,7 +179,13 @@ export function toLayer(group: LayerGroup): FinishLayerInput {
     name: v.name.trim(),
     method: v.method,
     ...(v.source === 'recipe'
-      ? { recipe: { by: v.recipe.by, baseProductId: v.recipe.baseProductId, components: v.recipe.components.map((c) => ({ productId: c.productId, parts: num(c.parts) })) } }
+      ? {
+          recipe: {
+            by: v.recipe.by,
+            baseProductId: v.recipe.baseProductId,
+            components: v.recipe.components.map((c) => ({ productId: c.productId, parts: num(c.parts) })),
+          },
+        }
       : { productId: v.productId }),
     coverage: fromCoverageValue(v.coverage),
     coats: num(v.coats),

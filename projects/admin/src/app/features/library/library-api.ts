@@ -38,7 +38,9 @@ export class LibraryApi {
   }
 
   setProductArchived(productId: string, isArchived: boolean): Promise<ProductView> {
-    return firstValueFrom(this.http.post<ProductView>(`${LIBRARY_URLS.products}/${id(productId)}/${isArchived ? 'archive' : 'unarchive'}`, {}));
+    return firstValueFrom(
+      this.http.post<ProductView>(`${LIBRARY_URLS.products}/${id(productId)}/${isArchived ? 'archive' : 'unarchive'}`, {}),
+    );
   }
 
   /** The current products, for the layer editor's pickers. */

@@ -17,7 +17,10 @@ import {
 } from '@layerbook/contracts/types';
 
 /** A pick-list from one of the contract's lists and its labels, in the list's order. */
-function choices<V extends string>(values: readonly V[], labels: Readonly<Record<V, string>>): readonly { readonly value: V; readonly label: string }[] {
+function choices<V extends string>(
+  values: readonly V[],
+  labels: Readonly<Record<V, string>>,
+): readonly { readonly value: V; readonly label: string }[] {
   return values.map((value) => ({ value, label: labels[value] }));
 }
 

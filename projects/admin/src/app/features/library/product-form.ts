@@ -25,7 +25,16 @@ const FLASH_POINT_RANGE = `Check the flash point: it should be between −${-L.f
 /** Adds a product, or edits the one it is given: containers with prices, hazards from the SDS. */
 @Component({
   selector: 'lb-product-form',
-  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+  ],
   templateUrl: './product-form.html',
   styleUrl: './product-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -33,9 +33,12 @@ export class ProductList {
   protected readonly currency = this.firmCurrency.code;
   protected readonly isHydrated = hydratedSignal();
   protected readonly showArchived = signal(false);
-  private readonly list = httpResource<ItemList<ProductView>>(() => ({ url: LIBRARY_URLS.products, params: archivedParam(this.showArchived()) }), {
-    defaultValue: { items: [] },
-  });
+  private readonly list = httpResource<ItemList<ProductView>>(
+    () => ({ url: LIBRARY_URLS.products, params: archivedParam(this.showArchived()) }),
+    {
+      defaultValue: { items: [] },
+    },
+  );
   protected readonly products = computed(() => (this.list.hasValue() ? this.list.value().items : []));
   protected readonly isLoading = this.list.isLoading;
   protected readonly isBusy = signal(false);

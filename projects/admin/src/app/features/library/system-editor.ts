@@ -27,7 +27,19 @@ import { LibraryApi } from './library-api';
 /** One finish system: its layers in order, edited as a whole and saved in one request (nothing half-saved). */
 @Component({
   selector: 'lb-system-editor',
-  imports: [CdkDrag, CdkDropList, FormAlert, LayerCard, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, ReactiveFormsModule, RouterLink],
+  imports: [
+    CdkDrag,
+    CdkDropList,
+    FormAlert,
+    LayerCard,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatProgressBarModule,
+    ReactiveFormsModule,
+    RouterLink,
+  ],
   templateUrl: './system-editor.html',
   styleUrl: './system-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -62,10 +74,17 @@ export class SystemEditor {
     layers: this.fb.array<LayerGroup>([]),
   });
 
-  private readonly formValue = toSignal(this.form.valueChanges.pipe(startWith(null), map(() => this.form.getRawValue())));
+  private readonly formValue = toSignal(
+    this.form.valueChanges.pipe(
+      startWith(null),
+      map(() => this.form.getRawValue()),
+    ),
+  );
   protected readonly layerCount = computed(() => this.formValue()?.layers.length ?? 0);
   /** The same sum the library shows for a saved system, over the layers as typed (a blank wait counts as none). */
-  protected readonly totalWait = computed(() => waitText(totalWaitHours((this.formValue()?.layers ?? []).map((l) => ({ waitHoursAfter: l.waitHoursAfter ?? 0 })))));
+  protected readonly totalWait = computed(() =>
+    waitText(totalWaitHours((this.formValue()?.layers ?? []).map((l) => ({ waitHoursAfter: l.waitHoursAfter ?? 0 })))),
+  );
   protected readonly isNew = computed(() => this.system() === null);
 
   /** Current products, plus any archived one this system still names, so its select shows a name. */

@@ -25,7 +25,9 @@ import { LIBRARY_URLS, LibraryApi, archivedParam } from './library-api';
           New finish system
         </a>
       }
-      <mat-checkbox [checked]="showArchived()" (change)="toggleArchived($event.checked)" [disabled]="!isHydrated()">Show archived systems</mat-checkbox>
+      <mat-checkbox [checked]="showArchived()" (change)="toggleArchived($event.checked)" [disabled]="!isHydrated()"
+        >Show archived systems</mat-checkbox
+      >
     </div>
     <lb-form-alert [message]="message()" />
     @if (isLoading()) {
@@ -58,14 +60,24 @@ import { LIBRARY_URLS, LibraryApi, archivedParam } from './library-api';
               <td>{{ productNames(system) }}</td>
               @if (canEdit()) {
                 <td class="actions">
-                  <button mat-button type="button" (click)="duplicate(system)" [disabled]="isBusy() || !isHydrated()" [attr.aria-label]="'Copy ' + system.name">Copy</button>
+                  <button
+                    mat-button
+                    type="button"
+                    (click)="duplicate(system)"
+                    [disabled]="isBusy() || !isHydrated()"
+                    [attr.aria-label]="'Copy ' + system.name"
+                  >
+                    Copy
+                  </button>
                 </td>
               }
             </tr>
           } @empty {
             @if (!isLoading()) {
               <tr>
-                <td [attr.colspan]="canEdit() ? 5 : 4" class="none">No finish systems yet.{{ canEdit() ? ' Add the products first, then build the layers.' : '' }}</td>
+                <td [attr.colspan]="canEdit() ? 5 : 4" class="none">
+                  No finish systems yet.{{ canEdit() ? ' Add the products first, then build the layers.' : '' }}
+                </td>
               </tr>
             }
           }
@@ -84,9 +96,12 @@ export class SystemList {
   protected readonly canEdit = computed(() => this.session.hasRole('office') && !!this.session.user());
   protected readonly isHydrated = hydratedSignal();
   protected readonly showArchived = signal(false);
-  private readonly list = httpResource<ItemList<FinishSystemSummary>>(() => ({ url: LIBRARY_URLS.systems, params: archivedParam(this.showArchived()) }), {
-    defaultValue: { items: [] },
-  });
+  private readonly list = httpResource<ItemList<FinishSystemSummary>>(
+    () => ({ url: LIBRARY_URLS.systems, params: archivedParam(this.showArchived()) }),
+    {
+      defaultValue: { items: [] },
+    },
+  );
   protected readonly systems = computed(() => (this.list.hasValue() ? this.list.value().items : []));
   protected readonly isLoading = this.list.isLoading;
   protected readonly isBusy = signal(false);

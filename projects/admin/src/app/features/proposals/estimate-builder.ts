@@ -1,4 +1,15 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, LOCALE_ID, OnInit, computed, inject, input, linkedSignal, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  DestroyRef,
+  LOCALE_ID,
+  OnInit,
+  computed,
+  inject,
+  input,
+  linkedSignal,
+  signal,
+} from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -147,9 +158,7 @@ export class EstimateBuilder implements OnInit {
     },
   });
 
-  private readonly savedResult = computed(
-    () => this.view()?.result?.variants.find((v) => v.id === this.currentOptionId())?.result ?? null,
-  );
+  private readonly savedResult = computed(() => this.view()?.result?.variants.find((v) => v.id === this.currentOptionId())?.result ?? null);
 
   protected readonly shown = computed<Shown | null>(() => {
     const saved = this.savedResult();
@@ -157,7 +166,8 @@ export class EstimateBuilder implements OnInit {
     const attempt = this.attempt();
     if (!attempt) return null;
     if (attempt.kind === 'ok') return { source: 'live', result: attempt.result };
-    const message = attempt.kind === 'refused' && attempt.target.kind === 'top' ? `${attempt.target.prefix}${attempt.message}` : attempt.message;
+    const message =
+      attempt.kind === 'refused' && attempt.target.kind === 'top' ? `${attempt.target.prefix}${attempt.message}` : attempt.message;
     return { source: 'stale', result: this.lastGood()?.result ?? saved, message };
   });
 

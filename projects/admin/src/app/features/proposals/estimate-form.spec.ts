@@ -4,7 +4,15 @@ import { estimateForm, fillForm, nextAddOnId, nextOptionId, readInputs } from '.
 
 const context = {
   rooms: [
-    { id: 'r1', name: 'Dining room', isExterior: false, surfaces: [{ id: 's1', name: 'Walls', shape: { kind: 'ceilingRect', length: 1, width: 1 }, disturbedPaintedArea: null }, { id: 's2', name: 'Ceiling', shape: { kind: 'ceilingRect', length: 1, width: 1 }, disturbedPaintedArea: null }] },
+    {
+      id: 'r1',
+      name: 'Dining room',
+      isExterior: false,
+      surfaces: [
+        { id: 's1', name: 'Walls', shape: { kind: 'ceilingRect', length: 1, width: 1 }, disturbedPaintedArea: null },
+        { id: 's2', name: 'Ceiling', shape: { kind: 'ceilingRect', length: 1, width: 1 }, disturbedPaintedArea: null },
+      ],
+    },
   ],
   finishSystems: [{ id: 'f1', name: 'Limewash', layers: [] }],
 } as unknown as EstimateContext;
@@ -29,9 +37,21 @@ describe('estimate form', () => {
     expect(readInputs(form, context)).toEqual(inputs);
   });
 
-  it('lists a variant\'s surfaces in takeoff order and leaves out surfaces with no finish', () => {
+  it("lists a variant's surfaces in takeoff order and leaves out surfaces with no finish", () => {
     const form = estimateForm();
-    fillForm(form, context, { ...inputs, variants: [{ id: 'A', label: 'A', surfaces: [{ surfaceId: 's2', finishSystemId: 'f1' }, { surfaceId: 's1', finishSystemId: 'f1' }] }] });
+    fillForm(form, context, {
+      ...inputs,
+      variants: [
+        {
+          id: 'A',
+          label: 'A',
+          surfaces: [
+            { surfaceId: 's2', finishSystemId: 'f1' },
+            { surfaceId: 's1', finishSystemId: 'f1' },
+          ],
+        },
+      ],
+    });
     expect(readInputs(form, context).variants[0]?.surfaces.map((s) => s.surfaceId)).toEqual(['s1', 's2']);
   });
 

@@ -1,5 +1,11 @@
 import { AbstractControl, FormArray, FormControl, FormGroup, FormRecord, ValidationErrors, Validators } from '@angular/forms';
-import { COST_LINE_KINDS, ESTIMATE_INPUT_LIMITS as L, type CostLineKind, type EstimateContext, type EstimateInputs } from '@layerbook/contracts/types';
+import {
+  COST_LINE_KINDS,
+  ESTIMATE_INPUT_LIMITS as L,
+  type CostLineKind,
+  type EstimateContext,
+  type EstimateInputs,
+} from '@layerbook/contracts/types';
 import { amountText, toAmount } from '../../shared/forms/money-input';
 import { fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -38,7 +44,8 @@ function percentText(control: AbstractControl<string>): ValidationErrors | null 
   return Number.isFinite(n) && n > 0 && n <= L.discountPercentMax ? null : { percent: true };
 }
 
-const text = (value: string, max: number) => new FormControl(value, { nonNullable: true, validators: [requiredText, Validators.maxLength(max)] });
+const text = (value: string, max: number) =>
+  new FormControl(value, { nonNullable: true, validators: [requiredText, Validators.maxLength(max)] });
 const amount = (value: string) => new FormControl(value, { nonNullable: true, validators: [Validators.required, amountText] });
 
 export type OptionGroup = FormGroup<{
@@ -115,7 +122,9 @@ export function fillForm(form: EstimateForm, context: EstimateContext, inputs: E
   const c = form.controls;
   c.variants.clear({ emitEvent: false });
   for (const v of inputs.variants) {
-    c.variants.push(optionGroup(context, v.id, v.label, Object.fromEntries(v.surfaces.map((s) => [s.surfaceId, s.finishSystemId]))), { emitEvent: false });
+    c.variants.push(optionGroup(context, v.id, v.label, Object.fromEntries(v.surfaces.map((s) => [s.surfaceId, s.finishSystemId]))), {
+      emitEvent: false,
+    });
   }
   c.addOns.clear({ emitEvent: false });
   for (const a of inputs.addOns) c.addOns.push(addOnGroup(a.id, a.label, String(a.labourHours), a.materialsCost), { emitEvent: false });
@@ -125,7 +134,11 @@ export function fillForm(form: EstimateForm, context: EstimateContext, inputs: E
   }
   for (const key of Object.keys(c.perAreaRates.controls)) c.perAreaRates.removeControl(key, { emitEvent: false });
   for (const system of context.finishSystems) {
-    c.perAreaRates.addControl(system.id, new FormControl(inputs.perAreaRates[system.id] ?? '', { nonNullable: true, validators: amountText }), { emitEvent: false });
+    c.perAreaRates.addControl(
+      system.id,
+      new FormControl(inputs.perAreaRates[system.id] ?? '', { nonNullable: true, validators: amountText }),
+      { emitEvent: false },
+    );
   }
   const discount = inputs.discount;
   const kind: DiscountKind = discount?.kind ?? 'none';
@@ -157,9 +170,16 @@ export function readInputs(form: EstimateForm, context: EstimateContext): Estima
     variants: v.variants.map((o) => ({
       id: o.id,
       label: o.label.trim(),
-      surfaces: surfaceOrder.filter((id) => (o.finishes[id] ?? '') !== '').map((id) => ({ surfaceId: id, finishSystemId: o.finishes[id]! })),
+      surfaces: surfaceOrder
+        .filter((id) => (o.finishes[id] ?? '') !== '')
+        .map((id) => ({ surfaceId: id, finishSystemId: o.finishes[id]! })),
     })),
-    addOns: v.addOns.map((a) => ({ id: a.id, label: a.label.trim(), labourHours: Number(a.labourHours.trim() || '0'), materialsCost: toAmount(a.materialsCost) ?? '0' })),
+    addOns: v.addOns.map((a) => ({
+      id: a.id,
+      label: a.label.trim(),
+      labourHours: Number(a.labourHours.trim() || '0'),
+      materialsCost: toAmount(a.materialsCost) ?? '0',
+    })),
     equipment: v.equipment.map(costLine),
     subcontracts: v.subcontracts.map(costLine),
     sundries: v.sundries.map(costLine),

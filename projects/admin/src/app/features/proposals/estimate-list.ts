@@ -51,7 +51,9 @@ const PAGE_SIZE = 50;
           <tbody>
             @for (e of items(); track e.id) {
               <tr>
-                <th scope="row"><a [routerLink]="['/estimates', e.id]">{{ e.title }}</a></th>
+                <th scope="row">
+                  <a [routerLink]="['/estimates', e.id]">{{ e.title }}</a>
+                </th>
                 <td>{{ e.clientName }}</td>
                 <td class="num">
                   @if (e.price !== null) {
@@ -74,7 +76,9 @@ const PAGE_SIZE = 50;
         </table>
       </div>
       @if (nextCursor(); as cursor) {
-        <button mat-stroked-button type="button" class="more" (click)="showMore(cursor)" [disabled]="isLoading()">Show more estimates</button>
+        <button mat-stroked-button type="button" class="more" (click)="showMore(cursor)" [disabled]="isLoading()">
+          Show more estimates
+        </button>
       }
     </section>
   `,

@@ -12,7 +12,13 @@ describe('estimate words', () => {
   it.each([
     [[], 'no extra time'],
     [[{ name: 'ceiling' as const, factor: 1.25 }], 'ceiling ×1.25'],
-    [[{ name: 'curvedCeiling' as const, factor: 1.5 }, { name: 'occupied' as const, factor: 1.1 }], 'dome or vault ×1.5 · occupied home ×1.1'],
+    [
+      [
+        { name: 'curvedCeiling' as const, factor: 1.5 },
+        { name: 'occupied' as const, factor: 1.1 },
+      ],
+      'dome or vault ×1.5 · occupied home ×1.1',
+    ],
     [[{ name: 'height' as const, factor: 1.33333 }], 'high work ×1.333'],
   ])('multiplierChain(%j) is %s', (chain, text) => expect(multiplierChain(chain)).toBe(text));
 
@@ -33,7 +39,7 @@ describe('estimate words', () => {
     [12.875, '12:53 PM'],
   ])('clockText(%d) is %s', (hour, text) => expect(clockText(hour, 'en-US')).toBe(text));
 
-  it('writes a calendar day without shifting it by the viewer\'s time zone', () => {
+  it("writes a calendar day without shifting it by the viewer's time zone", () => {
     expect(dayWords('2025-06-10', 'en-US')).toBe('Tuesday, Jun 10');
     expect(dayAndClock('2025-06-11', 8.25, 'en-US')).toBe('Wed, Jun 11, 8:15 AM');
   });

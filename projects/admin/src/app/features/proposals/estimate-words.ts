@@ -30,11 +30,15 @@ export function clockText(hourOfDay: number, locale: string): string {
 
 /** "Tue, Jun 10, 8:00 AM" for a calendar date and an hour of that day. */
 export function dayAndClock(isoDate: string, hourOfDay: number, locale: string): string {
-  const day = new Intl.DateTimeFormat(locale, { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`));
+  const day = new Intl.DateTimeFormat(locale, { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(
+    new Date(`${isoDate}T00:00:00Z`),
+  );
   return `${day}, ${clockText(hourOfDay, locale)}`;
 }
 
 /** "Tuesday, Jun 10". */
 export function dayWords(isoDate: string, locale: string): string {
-  return new Intl.DateTimeFormat(locale, { weekday: 'long', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`));
+  return new Intl.DateTimeFormat(locale, { weekday: 'long', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(
+    new Date(`${isoDate}T00:00:00Z`),
+  );
 }

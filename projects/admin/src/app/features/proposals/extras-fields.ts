@@ -28,8 +28,20 @@ interface CostLineWords {
 }
 
 const COST_LINES: readonly CostLineWords[] = [
-  { kind: 'equipment', heading: 'Equipment and rentals', row: 'Equipment line', add: 'Add equipment or a rental', hint: 'Scaffold rental, lift, dehumidifier.' },
-  { kind: 'subcontracts', heading: 'Subcontracts', row: 'Subcontract', add: 'Add a subcontract', hint: 'Drywall repair, electrician to drop fixtures.' },
+  {
+    kind: 'equipment',
+    heading: 'Equipment and rentals',
+    row: 'Equipment line',
+    add: 'Add equipment or a rental',
+    hint: 'Scaffold rental, lift, dehumidifier.',
+  },
+  {
+    kind: 'subcontracts',
+    heading: 'Subcontracts',
+    row: 'Subcontract',
+    add: 'Add a subcontract',
+    hint: 'Drywall repair, electrician to drop fixtures.',
+  },
   { kind: 'sundries', heading: 'Sundries', row: 'Sundry', add: 'Add a sundry', hint: 'Tape, plastic, rags, sanding pads.' },
 ];
 

@@ -37,11 +37,26 @@ import { multiplierChain } from './estimate-words';
     <h3 id="crew-heading">Crew time</h3>
     <table aria-labelledby="crew-heading">
       <tbody>
-        <tr><th scope="row">Layers</th><td class="num">{{ hours(t.layerHours) }}</td></tr>
-        <tr><th scope="row">Setup, masking and protection</th><td class="num">{{ hours(t.setupHours) }}</td></tr>
-        <tr><th scope="row">Demasking and clean-up</th><td class="num">{{ hours(t.cleanupHours) }}</td></tr>
-        <tr class="sum"><th scope="row">Crew-hours</th><td class="num">{{ hours(t.totalCrewHours) }}</td></tr>
-        <tr><th scope="row">Crew-days</th><td class="num">{{ days(t.crewDays) }}</td></tr>
+        <tr>
+          <th scope="row">Layers</th>
+          <td class="num">{{ hours(t.layerHours) }}</td>
+        </tr>
+        <tr>
+          <th scope="row">Setup, masking and protection</th>
+          <td class="num">{{ hours(t.setupHours) }}</td>
+        </tr>
+        <tr>
+          <th scope="row">Demasking and clean-up</th>
+          <td class="num">{{ hours(t.cleanupHours) }}</td>
+        </tr>
+        <tr class="sum">
+          <th scope="row">Crew-hours</th>
+          <td class="num">{{ hours(t.totalCrewHours) }}</td>
+        </tr>
+        <tr>
+          <th scope="row">Crew-days</th>
+          <td class="num">{{ days(t.crewDays) }}</td>
+        </tr>
       </tbody>
     </table>
   `,

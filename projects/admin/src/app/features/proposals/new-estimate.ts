@@ -92,7 +92,14 @@ export class NewEstimate {
         map((q) => q.trim()),
         debounceTime(SEARCH_PAUSE_MS),
         distinctUntilChanged(),
-        switchMap((q) => (q.length === 0 ? of([]) : this.api.findClients(q).pipe(map((page) => page.items), catchError(() => of([]))))),
+        switchMap((q) =>
+          q.length === 0
+            ? of([])
+            : this.api.findClients(q).pipe(
+                map((page) => page.items),
+                catchError(() => of([])),
+              ),
+        ),
         takeUntilDestroyed(inject(DestroyRef)),
       )
       .subscribe((items) => this.matches.set(items));
@@ -134,7 +141,12 @@ export class NewEstimate {
     const v = this.form.getRawValue();
     this.isBusy.set(true);
     try {
-      const made = await this.api.create({ siteId: v.siteId, inquiryId: null, title: v.title.trim(), startDate: toIsoDate(v.startDate) ?? '' });
+      const made = await this.api.create({
+        siteId: v.siteId,
+        inquiryId: null,
+        title: v.title.trim(),
+        startDate: toIsoDate(v.startDate) ?? '',
+      });
       await this.router.navigate(['/estimates', made.id]);
     } catch (error) {
       this.formMessage.set(applyProblem(this.form, toProblem(error)));

@@ -31,9 +31,19 @@ describe('the proposal form', () => {
 
   it('puts a draft back into the form', () => {
     const form = proposalForm();
-    const snapshot = { expiresOn: '2027-01-15', terms: { depositPercent: 10, progressPercent: 40, text: 'T' }, exclusions: ['A', 'B'], notes: 'N' } as Partial<ProposalSnapshot>;
+    const snapshot = {
+      expiresOn: '2027-01-15',
+      terms: { depositPercent: 10, progressPercent: 40, text: 'T' },
+      exclusions: ['A', 'B'],
+      notes: 'N',
+    } as Partial<ProposalSnapshot>;
     fillProposal(form, snapshot as ProposalSnapshot);
-    expect(readProposal(form)).toEqual({ expiresOn: '2027-01-15', terms: { depositPercent: 10, progressPercent: 40, text: 'T' }, exclusions: ['A', 'B'], notes: 'N' });
+    expect(readProposal(form)).toEqual({
+      expiresOn: '2027-01-15',
+      terms: { depositPercent: 10, progressPercent: 40, text: 'T' },
+      exclusions: ['A', 'B'],
+      notes: 'N',
+    });
   });
 
   it('marks the progress payment when the two payments pass 100 %, and clears it again', () => {

@@ -34,7 +34,17 @@ const READ_IN_FULL: ReadonlySet<ProposalVersionStatus> = new Set(['draft', 'acce
  */
 @Component({
   selector: 'lb-proposal-versions',
-  imports: [CalendarDatePipe, DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, MoneyPipe, ProposalEditor, RouterLink],
+  imports: [
+    CalendarDatePipe,
+    DatePipe,
+    FormAlert,
+    MatButtonModule,
+    MatIconModule,
+    MatProgressBarModule,
+    MoneyPipe,
+    ProposalEditor,
+    RouterLink,
+  ],
   templateUrl: './proposal-versions.html',
   styleUrl: './proposal-versions.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -65,8 +75,12 @@ export class ProposalVersions {
 
   protected readonly estimate = computed(() => (this.loadedEstimate.hasValue() ? this.loadedEstimate.value() : null));
   protected readonly clientEmail = computed(() => (this.client.hasValue() ? this.client.value().email : null));
-  protected readonly versions = computed<readonly ProposalVersionSummary[]>(() => (this.loadedVersions.hasValue() ? this.loadedVersions.value().items : []));
-  private readonly details = computed(() => (this.loadedVersions.hasValue() ? this.loadedVersions.value().details : new Map<string, ProposalVersionView>()));
+  protected readonly versions = computed<readonly ProposalVersionSummary[]>(() =>
+    this.loadedVersions.hasValue() ? this.loadedVersions.value().items : [],
+  );
+  private readonly details = computed(() =>
+    this.loadedVersions.hasValue() ? this.loadedVersions.value().details : new Map<string, ProposalVersionView>(),
+  );
   protected readonly isLoading = computed(() => this.loadedEstimate.isLoading() || this.loadedVersions.isLoading());
   protected readonly loadMessage = computed(() => {
     const error = this.loadedEstimate.error() ?? this.loadedVersions.error();
@@ -136,7 +150,8 @@ export class ProposalVersions {
       const errors = problem.errors ?? [];
       const needsClientEmail = errors.some((e) => e.field === 'client.email');
       const detail = problem.detail ?? problem.title;
-      const text = errors.length > 0 ? [detail, ...errors.map((e) => e.message)].filter((t, i, all) => all.indexOf(t) === i).join(' ') : detail;
+      const text =
+        errors.length > 0 ? [detail, ...errors.map((e) => e.message)].filter((t, i, all) => all.indexOf(t) === i).join(' ') : detail;
       this.versionMessage.set({ id: version.id, text, needsClientEmail });
     } finally {
       this.busyId.set(null);

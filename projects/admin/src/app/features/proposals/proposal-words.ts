@@ -21,8 +21,7 @@ export function versionStatus(status: ProposalVersionStatus): StatusLook {
 }
 
 /** The terms wording a new proposal starts from; the office edits it freely. */
-export const DEFAULT_TERMS_TEXT =
-  'Deposit due on acceptance; progress payment when the base coats are done; the balance on completion.';
+export const DEFAULT_TERMS_TEXT = 'Deposit due on acceptance; progress payment when the base coats are done; the balance on completion.';
 
 export const DEFAULT_EXCLUSIONS = ['Repairs to the plaster beneath', 'Moving furniture'];
 

@@ -11,8 +11,7 @@ import { clockText, dayAndClock, dayWords } from './estimate-words';
     @let s = result().schedule;
     <h2 id="schedule-heading">Schedule</h2>
     <p>
-      Finishes <strong>{{ day(s.finishDate) }}</strong> after {{ s.workingDays }} working
-      {{ s.workingDays === 1 ? 'day' : 'days' }}.
+      Finishes <strong>{{ day(s.finishDate) }}</strong> after {{ s.workingDays }} working {{ s.workingDays === 1 ? 'day' : 'days' }}.
     </p>
 
     <h3 id="milestones-heading">Milestones</h3>
@@ -39,7 +38,8 @@ import { clockText, dayAndClock, dayWords } from './estimate-words';
             }
             @for (wait of d.waits; track wait.key) {
               <li class="wait">
-                <mat-icon aria-hidden="true">hourglass_top</mat-icon> {{ wait.label }}: drying until {{ at(wait.untilDate, wait.untilHour) }}
+                <mat-icon aria-hidden="true">hourglass_top</mat-icon> {{ wait.label }}: drying until
+                {{ at(wait.untilDate, wait.untilHour) }}
               </li>
             }
           </ul>

@@ -35,10 +35,14 @@ import { finishOutlineText } from './estimate-words';
               <mat-label>Finish for {{ surface.name }}</mat-label>
               <mat-select [formControl]="option().controls.finishes.controls[surface.id]!">
                 <!-- The closed select shows the name only; the open list adds each finish's summary. -->
-                <mat-select-trigger>{{ names().get(option().controls.finishes.controls[surface.id]!.value) ?? 'Not in this option' }}</mat-select-trigger>
+                <mat-select-trigger>{{
+                  names().get(option().controls.finishes.controls[surface.id]!.value) ?? 'Not in this option'
+                }}</mat-select-trigger>
                 <mat-option value="">Not in this option</mat-option>
                 @for (system of finishSystems(); track system.id) {
-                  <mat-option [value]="system.id">{{ system.name }} <span class="outline">· {{ outlines().get(system.id) }}</span></mat-option>
+                  <mat-option [value]="system.id"
+                    >{{ system.name }} <span class="outline">· {{ outlines().get(system.id) }}</span></mat-option
+                  >
                 }
               </mat-select>
               <mat-hint>{{ measures().get(surface.id) }}</mat-hint>
@@ -104,7 +108,12 @@ export class SurfaceFinishes {
   constructor() {
     toObservable(this.option)
       .pipe(
-        switchMap((option) => option.controls.finishes.valueChanges.pipe(startWith(null), map(() => option.controls.finishes.getRawValue()))),
+        switchMap((option) =>
+          option.controls.finishes.valueChanges.pipe(
+            startWith(null),
+            map(() => option.controls.finishes.getRawValue()),
+          ),
+        ),
         takeUntilDestroyed(),
       )
       .subscribe((finishes) => {

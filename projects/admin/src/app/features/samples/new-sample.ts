@@ -9,7 +9,15 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import { SAMPLE_LABEL_MAX, SAMPLE_NOTES_MAX, type ClientDetail, type ClientSummary, type FinishSystemSummary, type ItemList, type SiteView } from '@layerbook/contracts/types';
+import {
+  SAMPLE_LABEL_MAX,
+  SAMPLE_NOTES_MAX,
+  type ClientDetail,
+  type ClientSummary,
+  type FinishSystemSummary,
+  type ItemList,
+  type SiteView,
+} from '@layerbook/contracts/types';
 import { siteLine } from '@layerbook/domain';
 import { catchError, debounceTime, distinctUntilChanged, filter, map, of, switchMap } from 'rxjs';
 import { applyProblem } from '../../core/errors/apply-problem';
@@ -23,12 +31,23 @@ import { FINISH_SYSTEMS_URL, SampleApi } from './sample-api';
 /** A new board: whose it is (client, optional site), which finish it shows, a label and notes. */
 @Component({
   selector: 'lb-new-sample',
-  imports: [FormAlert, MatAutocompleteModule, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule, RouterLink],
+  imports: [
+    FormAlert,
+    MatAutocompleteModule,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+    RouterLink,
+  ],
   template: `
     <section class="lb-page">
       <p><a routerLink="/samples">Back to sample boards</a></p>
       <h1>New sample board</h1>
-      <p class="lb-lead">The finish is copied onto the board as it is in your library today, so the record stays true if the library changes.</p>
+      <p class="lb-lead">
+        The finish is copied onto the board as it is in your library today, so the record stays true if the library changes.
+      </p>
 
       <form [formGroup]="form" (ngSubmit)="save()" novalidate>
         <fieldset class="lb-gate" [disabled]="!isHydrated()">
@@ -100,9 +119,23 @@ import { FINISH_SYSTEMS_URL, SampleApi } from './sample-api';
     </section>
   `,
   styles: `
-    fieldset { display: grid; gap: 0.75rem; max-width: 36rem; border: 0; padding: 0; margin: 0; }
-    .actions { display: flex; gap: 0.75rem; }
-    .field-error { color: var(--mat-sys-error, #8c1d18); margin: -0.5rem 0 0; font-size: 0.875rem; }
+    fieldset {
+      display: grid;
+      gap: 0.75rem;
+      max-width: 36rem;
+      border: 0;
+      padding: 0;
+      margin: 0;
+    }
+    .actions {
+      display: flex;
+      gap: 0.75rem;
+    }
+    .field-error {
+      color: var(--mat-sys-error, #8c1d18);
+      margin: -0.5rem 0 0;
+      font-size: 0.875rem;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -124,7 +157,9 @@ export class NewSample {
   private readonly systemList = httpResource<ItemList<FinishSystemSummary>>(() => FINISH_SYSTEMS_URL);
   // A failed look-up leaves the choice empty: the board can still be made without a site or finish.
   protected readonly sites = computed<readonly SiteView[]>(() => (this.chosenClient.hasValue() ? this.chosenClient.value().sites : []));
-  protected readonly systems = computed<readonly FinishSystemSummary[]>(() => (this.systemList.hasValue() ? this.systemList.value().items : []));
+  protected readonly systems = computed<readonly FinishSystemSummary[]>(() =>
+    this.systemList.hasValue() ? this.systemList.value().items : [],
+  );
   protected readonly labelMax = SAMPLE_LABEL_MAX;
   protected readonly notesMax = SAMPLE_NOTES_MAX;
   protected readonly message = signal<string | null>(null);
@@ -147,7 +182,14 @@ export class NewSample {
         map((v) => v.trim()),
         debounceTime(250),
         distinctUntilChanged(),
-        switchMap((q) => (q.length < 2 ? of([]) : this.api.searchClients(q).pipe(map((page) => page.items), catchError(() => of([]))))),
+        switchMap((q) =>
+          q.length < 2
+            ? of([])
+            : this.api.searchClients(q).pipe(
+                map((page) => page.items),
+                catchError(() => of([])),
+              ),
+        ),
         takeUntilDestroyed(this.destroyRef),
       )
       .subscribe((items) => this.clientOptions.set(items));

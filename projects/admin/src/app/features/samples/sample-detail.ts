@@ -47,12 +47,16 @@ import { STATUS_WORDS } from './status-words';
         @if (b.status === 'approved') {
           <p class="decision" role="status">
             <mat-icon aria-hidden="true">verified</mat-icon>
-            Approved by {{ b.decidedByName ?? 'the client' }} on {{ b.decidedAt | date: 'medium' }}. This board is the control sample for the work.
+            Approved by {{ b.decidedByName ?? 'the client' }} on {{ b.decidedAt | date: 'medium' }}. This board is the control sample for
+            the work.
           </p>
         }
         @if (b.status === 'changes_requested') {
           <div class="decision" role="status">
-            <p><mat-icon aria-hidden="true">edit_note</mat-icon> {{ b.decidedByName ?? 'The client' }} asked for changes on {{ b.decidedAt | date: 'medium' }}:</p>
+            <p>
+              <mat-icon aria-hidden="true">edit_note</mat-icon> {{ b.decidedByName ?? 'The client' }} asked for changes on
+              {{ b.decidedAt | date: 'medium' }}:
+            </p>
             <blockquote>{{ b.clientComment }}</blockquote>
           </div>
         }
@@ -121,18 +125,51 @@ import { STATUS_WORDS } from './status-words';
     </section>
   `,
   styles: `
-    .status { display: flex; align-items: center; gap: 0.4rem; }
-    .facts { display: grid; grid-template-columns: max-content 1fr; gap: 0.25rem 1rem; }
-    .facts dt { font-weight: 600; }
-    .facts dd { margin: 0; }
-    .decision { border-left: 4px solid currentColor; padding: 0.5rem 1rem; margin: 1rem 0; }
-    .decision mat-icon { vertical-align: middle; }
-    blockquote { margin: 0.5rem 0 0; white-space: pre-line; }
-    .actions { display: flex; gap: 0.75rem; margin: 1rem 0; }
-    .layers li { margin-bottom: 0.4rem; }
-    .layers li span { display: block; }
-    .notes { white-space: pre-line; }
-    .muted { opacity: 0.8; }
+    .status {
+      display: flex;
+      align-items: center;
+      gap: 0.4rem;
+    }
+    .facts {
+      display: grid;
+      grid-template-columns: max-content 1fr;
+      gap: 0.25rem 1rem;
+    }
+    .facts dt {
+      font-weight: 600;
+    }
+    .facts dd {
+      margin: 0;
+    }
+    .decision {
+      border-left: 4px solid currentColor;
+      padding: 0.5rem 1rem;
+      margin: 1rem 0;
+    }
+    .decision mat-icon {
+      vertical-align: middle;
+    }
+    blockquote {
+      margin: 0.5rem 0 0;
+      white-space: pre-line;
+    }
+    .actions {
+      display: flex;
+      gap: 0.75rem;
+      margin: 1rem 0;
+    }
+    .layers li {
+      margin-bottom: 0.4rem;
+    }
+    .layers li span {
+      display: block;
+    }
+    .notes {
+      white-space: pre-line;
+    }
+    .muted {
+      opacity: 0.8;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

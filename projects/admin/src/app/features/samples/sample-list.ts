@@ -51,12 +51,21 @@ import { STATUS_WORDS } from './status-words';
               <tr>
                 <td class="thumb">
                   @if (board.coverThumbnailUrl) {
-                    <img [src]="board.coverThumbnailUrl" [alt]="'Photo of ' + board.label" width="64" height="48" loading="lazy" decoding="async" />
+                    <img
+                      [src]="board.coverThumbnailUrl"
+                      [alt]="'Photo of ' + board.label"
+                      width="64"
+                      height="48"
+                      loading="lazy"
+                      decoding="async"
+                    />
                   } @else {
                     <mat-icon aria-hidden="true" class="no-photo">photo_camera</mat-icon>
                   }
                 </td>
-                <th scope="row"><a [routerLink]="['/samples', board.id]">{{ board.label }}</a></th>
+                <th scope="row">
+                  <a [routerLink]="['/samples', board.id]">{{ board.label }}</a>
+                </th>
                 <td>{{ board.clientName }}</td>
                 <td>{{ board.round }}</td>
                 <td>
@@ -69,7 +78,9 @@ import { STATUS_WORDS } from './status-words';
               </tr>
             } @empty {
               @if (!isLoading()) {
-                <tr><td colspan="6" class="none">No sample boards yet.</td></tr>
+                <tr>
+                  <td colspan="6" class="none">No sample boards yet.</td>
+                </tr>
               }
             }
           </tbody>
@@ -78,14 +89,43 @@ import { STATUS_WORDS } from './status-words';
     </section>
   `,
   styles: `
-    .heading { display: flex; align-items: center; justify-content: space-between; gap: 1rem; flex-wrap: wrap; }
-    .table-wrap { overflow-x: auto; }
-    table { width: 100%; border-collapse: collapse; }
-    th, td { text-align: left; padding: 0.5rem; border-bottom: 1px solid var(--lb-line, #d9cfbf); vertical-align: middle; }
-    .thumb img { display: block; object-fit: cover; border-radius: 4px; }
-    .no-photo { opacity: 0.5; }
-    .status { display: inline-flex; align-items: center; gap: 0.35rem; }
-    .none { padding: 1.5rem 0.5rem; }
+    .heading {
+      display: flex;
+      align-items: center;
+      justify-content: space-between;
+      gap: 1rem;
+      flex-wrap: wrap;
+    }
+    .table-wrap {
+      overflow-x: auto;
+    }
+    table {
+      width: 100%;
+      border-collapse: collapse;
+    }
+    th,
+    td {
+      text-align: left;
+      padding: 0.5rem;
+      border-bottom: 1px solid var(--lb-line, #d9cfbf);
+      vertical-align: middle;
+    }
+    .thumb img {
+      display: block;
+      object-fit: cover;
+      border-radius: 4px;
+    }
+    .no-photo {
+      opacity: 0.5;
+    }
+    .status {
+      display: inline-flex;
+      align-items: center;
+      gap: 0.35rem;
+    }
+    .none {
+      padding: 1.5rem 0.5rem;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -10,6 +10,10 @@ describe('measureLive', () => {
 
   it('names a refused field in the API path style, so the form finds its control', () => {
     const live = measureLive({ kind: 'walls', perimeter: 4, height: 2, openings: [{ width: 5, height: 5 }] });
-    expect(live).toMatchObject({ state: 'refused', field: 'shape.openings', message: 'The openings add up to more than the surface itself.' });
+    expect(live).toMatchObject({
+      state: 'refused',
+      field: 'shape.openings',
+      message: 'The openings add up to more than the surface itself.',
+    });
   });
 });

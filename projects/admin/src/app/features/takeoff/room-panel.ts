@@ -86,7 +86,11 @@ export class RoomPanel implements OnInit {
   }
 
   protected async deleteSurface(surface: SurfaceView): Promise<void> {
-    const ok = await this.confirm({ title: `Delete ${surface.name}?`, message: 'Its sizes and notes will be gone.', confirmLabel: 'Delete surface' });
+    const ok = await this.confirm({
+      title: `Delete ${surface.name}?`,
+      message: 'Its sizes and notes will be gone.',
+      confirmLabel: 'Delete surface',
+    });
     if (ok) await this.run(() => this.api.deleteSurface(surface.id), `${surface.name} deleted.`);
   }
 

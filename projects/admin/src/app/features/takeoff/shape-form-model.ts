@@ -1,5 +1,15 @@
 import { AbstractControl, FormArray, FormControl, FormGroup, ValidationErrors, ValidatorFn } from '@angular/forms';
-import { DIM_KEYS, DIM_WORDS, ELEVATION_NOUN, OPENING_FIELDS, shapeChoice, type DimKey, type DimRule, type SurfaceView, type TakeoffLengthUnit } from '@layerbook/contracts/types';
+import {
+  DIM_KEYS,
+  DIM_WORDS,
+  ELEVATION_NOUN,
+  OPENING_FIELDS,
+  shapeChoice,
+  type DimKey,
+  type DimRule,
+  type SurfaceView,
+  type TakeoffLengthUnit,
+} from '@layerbook/contracts/types';
 import type { SurfaceKind } from '@layerbook/domain';
 import { readNumber } from './number-text';
 import { dimMessage, optionalNonNegativeMessage, shapeFormValue } from './shape-reading';
@@ -46,19 +56,30 @@ export function openingGroup(width = '', height = '', count = '1'): OpeningGroup
 }
 
 export function cornerArray(x = '', y = ''): CornerArray {
-  return new FormArray([new FormControl(x, { nonNullable: true, validators: anyNumber }), new FormControl(y, { nonNullable: true, validators: anyNumber })]);
+  return new FormArray([
+    new FormControl(x, { nonNullable: true, validators: anyNumber }),
+    new FormControl(y, { nonNullable: true, validators: anyNumber }),
+  ]);
 }
 
 export function shapeGroup(): FormGroup<ShapeGroupControls> {
   const kind = new FormControl<SurfaceKind>('walls', { nonNullable: true });
   // Counts start at one: most beams and coffers are counted, but one is the usual first entry.
-  const dims = Object.fromEntries(DIM_KEYS.map((key) => [key, new FormControl(key === 'count' ? '1' : '', { nonNullable: true, validators: dimValidator(key, () => kind.value) })])) as {
+  const dims = Object.fromEntries(
+    DIM_KEYS.map((key) => [
+      key,
+      new FormControl(key === 'count' ? '1' : '', { nonNullable: true, validators: dimValidator(key, () => kind.value) }),
+    ]),
+  ) as {
     [K in DimKey]: FormControl<string>;
   };
   return new FormGroup<ShapeGroupControls>({
     ...dims,
     kind,
-    elevation: new FormControl('', { nonNullable: true, validators: (c: AbstractControl<string>) => asErrors(optionalNonNegativeMessage(ELEVATION_NOUN, readNumber(c.value))) }),
+    elevation: new FormControl('', {
+      nonNullable: true,
+      validators: (c: AbstractControl<string>) => asErrors(optionalNonNegativeMessage(ELEVATION_NOUN, readNumber(c.value))),
+    }),
     measureBy: new FormControl<'faces' | 'length'>('faces', { nonNullable: true }),
     openings: new FormArray<OpeningGroup>([]),
     // A rectangle's four corners to start from: most odd ceilings are a rectangle with a corner cut.

@@ -30,22 +30,42 @@ describe('shape reading', () => {
     [null, null],
     [0, null],
     [Number.NaN, 'Enter the height above the floor, 0 or more, or leave it empty.'],
-  ])('optionalNonNegativeMessage(%s)', (value, message) => expect(optionalNonNegativeMessage('height above the floor', value)).toBe(message));
+  ])('optionalNonNegativeMessage(%s)', (value, message) =>
+    expect(optionalNonNegativeMessage('height above the floor', value)).toBe(message),
+  );
 
-  it('reads only the chosen shape\'s fields, with its openings', () => {
-    const reading = readShape(blank({ kind: 'walls', perimeter: '40', height: '9', radius: 'junk', openings: [{ width: '3', height: '7', count: '2' }] }));
+  it("reads only the chosen shape's fields, with its openings", () => {
+    const reading = readShape(
+      blank({ kind: 'walls', perimeter: '40', height: '9', radius: 'junk', openings: [{ width: '3', height: '7', count: '2' }] }),
+    );
     expect(reading).toEqual({ shape: { kind: 'walls', perimeter: 40, height: 9, openings: [{ width: 3, height: 7, count: 2 }] } });
   });
 
   it.each([
     ['an empty field', blank({ kind: 'cone', radius: '8' })],
     ['a negative elevation', blank({ kind: 'cone', radius: '8', rise: '6', elevation: '-1' })],
-    ['a corner not yet a number', blank({ kind: 'ceilingPolygon', corners: [['0', '0'], ['4', ''], ['4', '3']] })],
+    [
+      'a corner not yet a number',
+      blank({
+        kind: 'ceilingPolygon',
+        corners: [
+          ['0', '0'],
+          ['4', ''],
+          ['4', '3'],
+        ],
+      }),
+    ],
   ])('waits while there is %s', (_what, raw) => expect(readShape(raw)).toEqual({ missing: true }));
 
   it('puts a surface saved in feet into a metric form, exactly enough to measure the same', () => {
     const value = shapeFormValue({ kind: 'walls', perimeter: 10, height: 8, openings: [{ width: 3, height: 7 }] }, 'ft', 'm');
-    expect(value).toEqual({ kind: 'walls', perimeter: '3.048', height: '2.4384', elevation: '', openings: [{ width: '0.9144', height: '2.1336', count: '1' }] });
+    expect(value).toEqual({
+      kind: 'walls',
+      perimeter: '3.048',
+      height: '2.4384',
+      elevation: '',
+      openings: [{ width: '0.9144', height: '2.1336', count: '1' }],
+    });
   });
 
   it('starts a beam count at one when none was saved', () => {

@@ -60,7 +60,12 @@ export function readShape(raw: ShapeFormValue): ShapeReading {
       const width = readNumber(o.width);
       const height = readNumber(o.height);
       const count = readNumber(o.count);
-      if (dimMessage('length', '', width) || dimMessage('length', '', height) || dimMessage({ whole: [1, SHAPE_LIMITS.openingCountMax] }, '', count)) return { missing: true };
+      if (
+        dimMessage('length', '', width) ||
+        dimMessage('length', '', height) ||
+        dimMessage({ whole: [1, SHAPE_LIMITS.openingCountMax] }, '', count)
+      )
+        return { missing: true };
       openings.push({ width: width!, height: height!, count: count! });
     }
     out['openings'] = openings;
@@ -86,7 +91,11 @@ const typed = (value: number | undefined) => (value === undefined ? '' : plainNu
  * A saved shape as the form types it, in the unit the firm measures in now: a surface saved in
  * feet before the firm went metric is shown (and saved again) in metres.
  */
-export function shapeFormValue(saved: SurfaceShape, from: TakeoffLengthUnit, to: TakeoffLengthUnit): Partial<ShapeFormValue> & { kind: SurfaceKind } {
+export function shapeFormValue(
+  saved: SurfaceShape,
+  from: TakeoffLengthUnit,
+  to: TakeoffLengthUnit,
+): Partial<ShapeFormValue> & { kind: SurfaceKind } {
   const shape = convertShape(saved, from, to);
   const values = shape as unknown as Readonly<Record<string, unknown>>;
   const out: Partial<ShapeFormValue> & { kind: SurfaceKind } = { kind: shape.kind };

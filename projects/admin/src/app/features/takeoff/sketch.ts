@@ -49,7 +49,12 @@ function frame(points: readonly Pt[]) {
 const round = (n: number) => Math.round(n * 10) / 10;
 const poly = (pts: readonly Pt[], close = true) => `M ${pts.map((p) => `${p[0]} ${p[1]}`).join(' L ')}${close ? ' Z' : ''}`;
 const line = (a: Pt, b: Pt) => `M ${a[0]} ${a[1]} L ${b[0]} ${b[1]}`;
-const label = (p: Pt, text: string, anchor: SketchLabel['anchor'] = 'middle', dx = 0, dy = 0): SketchLabel => ({ x: round(p[0] + dx), y: round(p[1] + dy), text, anchor });
+const label = (p: Pt, text: string, anchor: SketchLabel['anchor'] = 'middle', dx = 0, dy = 0): SketchLabel => ({
+  x: round(p[0] + dx),
+  y: round(p[1] + dy),
+  text,
+  anchor,
+});
 const mid = (a: Pt, b: Pt): Pt => [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
 
 /** An arc through a chord from `a` to `b` bulging up by `rise` (drawing units), as a path segment. */
@@ -66,8 +71,18 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
     case 'roundWalls':
     case 'curvedWall': {
       // Walls unrolled flat: the run along the bottom, the height up the side, openings as boxes.
-      const run = shape.kind === 'walls' ? shape.perimeter : shape.kind === 'roundWalls' ? 2 * Math.PI * shape.radius : (shape.radius * shape.angleDegrees * Math.PI) / 180;
-      const box: Pt[] = [[PAD, 30], [SKETCH_WIDTH - PAD, 30], [SKETCH_WIDTH - PAD, 112], [PAD, 112]];
+      const run =
+        shape.kind === 'walls'
+          ? shape.perimeter
+          : shape.kind === 'roundWalls'
+            ? 2 * Math.PI * shape.radius
+            : (shape.radius * shape.angleDegrees * Math.PI) / 180;
+      const box: Pt[] = [
+        [PAD, 30],
+        [SKETCH_WIDTH - PAD, 30],
+        [SKETCH_WIDTH - PAD, 112],
+        [PAD, 112],
+      ];
       const openings = (shape.openings ?? []).flatMap((o) => Array.from({ length: Math.min(o.count ?? 1, 6) }, () => o));
       const shown = openings.slice(0, 6);
       const slot = (SKETCH_WIDTH - 2 * PAD) / (shown.length + 1);
@@ -75,14 +90,31 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
         const w = Math.min(slot * 0.6, 18 + o.width);
         const h = Math.min(60, (o.height / shape.height) * 82);
         const x = PAD + slot * (i + 1) - w / 2;
-        return poly([[x, 112], [x, 112 - h], [x + w, 112 - h], [x + w, 112]].map((p) => [round(p[0]), round(p[1])] as Pt), false);
+        return poly(
+          [
+            [x, 112],
+            [x, 112 - h],
+            [x + w, 112 - h],
+            [x + w, 112],
+          ].map((p) => [round(p[0]), round(p[1])] as Pt),
+          false,
+        );
       });
-      const runWords = shape.kind === 'walls' ? `perimeter ${u(shape.perimeter)}` : shape.kind === 'roundWalls' ? `round, radius ${u(shape.radius)}` : `radius ${u(shape.radius)}, ${shortNumber(shape.angleDegrees)}°`;
+      const runWords =
+        shape.kind === 'walls'
+          ? `perimeter ${u(shape.perimeter)}`
+          : shape.kind === 'roundWalls'
+            ? `round, radius ${u(shape.radius)}`
+            : `radius ${u(shape.radius)}, ${shortNumber(shape.angleDegrees)}°`;
       const count = openings.length === 0 ? 'no openings' : `${(shape.openings ?? []).reduce((n, o) => n + (o.count ?? 1), 0)} openings`;
       return {
         lines: [poly(box), ...boxes],
         guides: [],
-        labels: [label([SKETCH_WIDTH / 2, 112], runWords, 'middle', 0, 16), label([PAD, 71], `H ${u(shape.height)}`, 'start', 4, 4), label([SKETCH_WIDTH / 2, 30], count, 'middle', 0, -8)],
+        labels: [
+          label([SKETCH_WIDTH / 2, 112], runWords, 'middle', 0, 16),
+          label([PAD, 71], `H ${u(shape.height)}`, 'start', 4, 4),
+          label([SKETCH_WIDTH / 2, 30], count, 'middle', 0, -8),
+        ],
         isToScale: false,
         description: `Walls laid out flat: ${runWords}, height ${u(shape.height)}, ${count}.`,
       };
@@ -91,28 +123,52 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
     case 'trapezoid': {
       const b1 = shape.kind === 'gable' ? shape.base : shape.base1;
       const b2 = shape.kind === 'gable' ? 0 : shape.base2;
-      const pts: Pt[] = [[0, 0], [b1, 0], [(b1 + b2) / 2, shape.height], [(b1 - b2) / 2, shape.height]];
+      const pts: Pt[] = [
+        [0, 0],
+        [b1, 0],
+        [(b1 + b2) / 2, shape.height],
+        [(b1 - b2) / 2, shape.height],
+      ];
       const { at } = frame(pts);
       const d = pts.map(at);
       const foot = at([b1 / 2, 0]);
       const top = at([b1 / 2, shape.height]);
-      const labels = [label(mid(d[0], d[1]), `${shape.kind === 'gable' ? 'base' : 'bottom'} ${u(b1)}`, 'middle', 0, 14), label(mid(foot, top), `h ${u(shape.height)}`, 'start', 4, 0)];
+      const labels = [
+        label(mid(d[0], d[1]), `${shape.kind === 'gable' ? 'base' : 'bottom'} ${u(b1)}`, 'middle', 0, 14),
+        label(mid(foot, top), `h ${u(shape.height)}`, 'start', 4, 0),
+      ];
       if (shape.kind === 'trapezoid') labels.push(label(mid(d[2], d[3]), `top ${u(b2)}`, 'middle', 0, -6));
       return {
         lines: [poly(shape.kind === 'gable' ? [d[0], d[1], d[2]] : d)],
         guides: [line(foot, top)],
         labels,
         isToScale: true,
-        description: shape.kind === 'gable' ? `Triangle wall, base ${u(b1)}, height ${u(shape.height)}.` : `Trapezoid wall, bottom ${u(b1)}, top ${u(b2)}, height ${u(shape.height)}.`,
+        description:
+          shape.kind === 'gable'
+            ? `Triangle wall, base ${u(b1)}, height ${u(shape.height)}.`
+            : `Trapezoid wall, bottom ${u(b1)}, top ${u(b2)}, height ${u(shape.height)}.`,
       };
     }
     case 'ceilingRect': {
-      const { at } = frame([[0, 0], [shape.length, shape.width]]);
-      const d = ([[0, 0], [shape.length, 0], [shape.length, shape.width], [0, shape.width]] as Pt[]).map(at);
+      const { at } = frame([
+        [0, 0],
+        [shape.length, shape.width],
+      ]);
+      const d = (
+        [
+          [0, 0],
+          [shape.length, 0],
+          [shape.length, shape.width],
+          [0, shape.width],
+        ] as Pt[]
+      ).map(at);
       return {
         lines: [poly(d)],
         guides: [],
-        labels: [label(mid(d[0], d[1]), `L ${u(shape.length)}`, 'middle', 0, 14), label(mid(d[1], d[2]), `W ${u(shape.width)}`, 'start', 4, 0)],
+        labels: [
+          label(mid(d[0], d[1]), `L ${u(shape.length)}`, 'middle', 0, 14),
+          label(mid(d[1], d[2]), `W ${u(shape.width)}`, 'start', 4, 0),
+        ],
         isToScale: true,
         description: `Flat ceiling seen from below, ${u(shape.length)} by ${u(shape.width)}.`,
       };
@@ -134,7 +190,12 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
       // Plan of a circle with its radius drawn in.
       const c: Pt = [SKETCH_WIDTH / 2, SKETCH_HEIGHT / 2];
       const r = SKETCH_HEIGHT / 2 - 18;
-      const what = shape.kind === 'ceilingCircle' ? 'Round flat ceiling' : shape.kind === 'hemisphere' ? 'Half-sphere dome, seen from below' : 'Crown running around a round room';
+      const what =
+        shape.kind === 'ceilingCircle'
+          ? 'Round flat ceiling'
+          : shape.kind === 'hemisphere'
+            ? 'Half-sphere dome, seen from below'
+            : 'Crown running around a round room';
       return {
         lines: [`M ${c[0] - r} ${c[1]} A ${r} ${r} 0 1 1 ${c[0] + r} ${c[1]} A ${r} ${r} 0 1 1 ${c[0] - r} ${c[1]}`],
         guides: [line(c, [c[0] + r, c[1]])],
@@ -147,11 +208,24 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
     case 'pyramid': {
       // Section through the peak: the rise against the half-width shows the pitch.
       const half = shape.kind === 'cone' ? shape.radius : shape.sideLength / (2 * Math.tan(Math.PI / shape.sides));
-      const pts: Pt[] = [[-half, 0], [half, 0], [0, shape.rise]];
+      const pts: Pt[] = [
+        [-half, 0],
+        [half, 0],
+        [0, shape.rise],
+      ];
       const { at } = frame(pts);
       const d = pts.map(at);
       const base = at([0, 0]);
-      const labels = [label(mid(base, d[1]), shape.kind === 'cone' ? `r ${u(shape.radius)}` : `${shape.sides} sides of ${u(shape.sideLength)}`, 'middle', 0, 14), label(mid(base, d[2]), `rise ${u(shape.rise)}`, 'start', 4, 0)];
+      const labels = [
+        label(
+          mid(base, d[1]),
+          shape.kind === 'cone' ? `r ${u(shape.radius)}` : `${shape.sides} sides of ${u(shape.sideLength)}`,
+          'middle',
+          0,
+          14,
+        ),
+        label(mid(base, d[2]), `rise ${u(shape.rise)}`, 'start', 4, 0),
+      ];
       return {
         lines: [poly(d, false)],
         guides: [line(base, d[2]), line(d[0], d[1])],
@@ -169,17 +243,34 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
     case 'segmentalVault': {
       // Section across the arc: chord along the springing line, rise to the crown.
       const half =
-        shape.kind === 'sphericalCap' ? shape.baseRadius : shape.kind === 'sphericalCapFromSphere' ? Math.sqrt(Math.max(0, 2 * shape.sphereRadius * shape.rise - shape.rise ** 2)) : shape.kind === 'barrelVault' ? shape.radius : shape.span / 2;
+        shape.kind === 'sphericalCap'
+          ? shape.baseRadius
+          : shape.kind === 'sphericalCapFromSphere'
+            ? Math.sqrt(Math.max(0, 2 * shape.sphereRadius * shape.rise - shape.rise ** 2))
+            : shape.kind === 'barrelVault'
+              ? shape.radius
+              : shape.span / 2;
       const rise = shape.kind === 'barrelVault' ? shape.radius : shape.rise;
-      const { at, scale } = frame([[-half, 0], [half, 0], [0, rise]]);
+      const { at, scale } = frame([
+        [-half, 0],
+        [half, 0],
+        [0, rise],
+      ]);
       const a = at([-half, 0]);
       const b = at([half, 0]);
       const crown = at([0, rise]);
       const base = at([0, 0]);
-      const chordWords = shape.kind === 'segmentalVault' ? `span ${u(shape.span)}` : shape.kind === 'barrelVault' ? `r ${u(shape.radius)}` : `base radius ${u(half)}`;
+      const chordWords =
+        shape.kind === 'segmentalVault'
+          ? `span ${u(shape.span)}`
+          : shape.kind === 'barrelVault'
+            ? `r ${u(shape.radius)}`
+            : `base radius ${u(half)}`;
       const labels = [label(mid(a, b), chordWords, 'middle', 0, 14), label(mid(base, crown), `rise ${u(rise)}`, 'start', 4, 0)];
-      if (shape.kind === 'barrelVault' || shape.kind === 'segmentalVault') labels.push(label(crown, `length ${u(shape.length)}`, 'middle', 0, -8));
-      const noun = shape.kind === 'barrelVault' ? 'Half-round barrel vault' : shape.kind === 'segmentalVault' ? 'Segmental vault' : 'Shallow dome';
+      if (shape.kind === 'barrelVault' || shape.kind === 'segmentalVault')
+        labels.push(label(crown, `length ${u(shape.length)}`, 'middle', 0, -8));
+      const noun =
+        shape.kind === 'barrelVault' ? 'Half-round barrel vault' : shape.kind === 'segmentalVault' ? 'Segmental vault' : 'Shallow dome';
       return {
         lines: [arcPath(a, b, 2 * half * scale, rise * scale)],
         guides: [line(a, b), line(base, crown)],
@@ -190,8 +281,18 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
     }
     case 'groinVault':
     case 'cloisterVault': {
-      const { at } = frame([[0, 0], [shape.side, shape.side]]);
-      const d = ([[0, 0], [shape.side, 0], [shape.side, shape.side], [0, shape.side]] as Pt[]).map(at);
+      const { at } = frame([
+        [0, 0],
+        [shape.side, shape.side],
+      ]);
+      const d = (
+        [
+          [0, 0],
+          [shape.side, 0],
+          [shape.side, shape.side],
+          [0, shape.side],
+        ] as Pt[]
+      ).map(at);
       const noun = shape.kind === 'groinVault' ? 'Groin vault' : 'Cloister vault';
       return {
         lines: [poly(d)],
@@ -207,7 +308,14 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
         for (let col = 0; col < 3; col++) {
           const x = 60 + col * 42;
           const y = 30 + row * 42;
-          cells.push(poly([[x, y], [x + 34, y], [x + 34, y + 34], [x, y + 34]]));
+          cells.push(
+            poly([
+              [x, y],
+              [x + 34, y],
+              [x + 34, y + 34],
+              [x, y + 34],
+            ]),
+          );
         }
       }
       return {
@@ -220,13 +328,29 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
     }
     case 'beams': {
       // One beam in section: the two sides and the bottom are finished.
-      const { at } = frame([[0, 0], [shape.width, shape.depth], [-shape.width, 0], [2 * shape.width, 0]]);
-      const d = ([[0, shape.depth], [0, 0], [shape.width, 0], [shape.width, shape.depth]] as Pt[]).map(at);
+      const { at } = frame([
+        [0, 0],
+        [shape.width, shape.depth],
+        [-shape.width, 0],
+        [2 * shape.width, 0],
+      ]);
+      const d = (
+        [
+          [0, shape.depth],
+          [0, 0],
+          [shape.width, 0],
+          [shape.width, shape.depth],
+        ] as Pt[]
+      ).map(at);
       const n = shape.count ?? 1;
       return {
         lines: [poly(d, false)],
         guides: [line(at([-shape.width, shape.depth]), at([2 * shape.width, shape.depth]))],
-        labels: [label(mid(d[1], d[2]), `w ${u(shape.width)}`, 'middle', 0, 14), label(mid(d[2], d[3]), `d ${u(shape.depth)}`, 'start', 4, 0), label(at([shape.width / 2, shape.depth]), `${n} × ${u(shape.length)} long`, 'middle', 0, -6)],
+        labels: [
+          label(mid(d[1], d[2]), `w ${u(shape.width)}`, 'middle', 0, 14),
+          label(mid(d[2], d[3]), `d ${u(shape.depth)}`, 'start', 4, 0),
+          label(at([shape.width / 2, shape.depth]), `${n} × ${u(shape.length)} long`, 'middle', 0, -6),
+        ],
         isToScale: true,
         description: `${n} beam${n === 1 ? '' : 's'} ${u(shape.length)} long, ${u(shape.width)} wide, ${u(shape.depth)} deep, in section.`,
       };

@@ -7,7 +7,17 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import { DIM_WORDS, DISTURBED_AREA_NOUN, SHAPE_GROUPS, TAKEOFF_LIMITS as L, shapeChoice, type DimField, type SurfaceInput, type SurfaceView, type TakeoffLengthUnit } from '@layerbook/contracts/types';
+import {
+  DIM_WORDS,
+  DISTURBED_AREA_NOUN,
+  SHAPE_GROUPS,
+  TAKEOFF_LIMITS as L,
+  shapeChoice,
+  type DimField,
+  type SurfaceInput,
+  type SurfaceView,
+  type TakeoffLengthUnit,
+} from '@layerbook/contracts/types';
 import { measureText, plainNumber, workingText } from '@layerbook/domain';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
@@ -24,7 +34,16 @@ import { TakeoffApi } from './takeoff-api';
 /** Adds a surface to a room or edits one: choose a shape, type its sizes, watch the area, save. */
 @Component({
   selector: 'lb-surface-form',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule, ShapeSketch],
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+    ShapeSketch,
+  ],
   // Messages appear while typing, not only after leaving the field: a phone user rarely tabs out.
   providers: [{ provide: ErrorStateMatcher, useClass: ShowOnDirtyErrorStateMatcher }],
   templateUrl: './surface-form.html',
@@ -135,7 +154,9 @@ export class SurfaceForm implements OnInit {
     if (this.form.invalid || 'missing' in reading) {
       this.form.markAllAsTouched();
       for (const control of Object.values(this.shape.controls)) control.markAsDirty();
-      this.formMessage.set(this.live().state === 'refused' ? null : 'Some sizes are missing or need a look; see the messages beside the fields.');
+      this.formMessage.set(
+        this.live().state === 'refused' ? null : 'Some sizes are missing or need a look; see the messages beside the fields.',
+      );
       return;
     }
     const v = this.form.getRawValue();
@@ -183,7 +204,6 @@ export class SurfaceForm implements OnInit {
     control.markAsDirty();
     this.marked.push(control);
   }
-
 }
 
 /** The same range and words as the API (contracts: takeoff.ts). */

@@ -27,15 +27,7 @@ import { TeamApi } from './team-api';
 
 @Component({
   selector: 'lb-team',
-  imports: [
-    DatePipe,
-    FormAlert,
-    InviteForm,
-    MatButtonModule,
-    MatIconModule,
-    MatProgressBarModule,
-    MatSelectModule,
-  ],
+  imports: [DatePipe, FormAlert, InviteForm, MatButtonModule, MatIconModule, MatProgressBarModule, MatSelectModule],
   templateUrl: './team.html',
   styleUrl: './team.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,9 +1,4 @@
-import {
-  EMAIL_MAX_LENGTH,
-  PASSWORD_MAX_LENGTH,
-  PASSWORD_MIN_LENGTH,
-  PERSON_NAME_MAX_LENGTH,
-} from '@layerbook/contracts/types';
+import { EMAIL_MAX_LENGTH, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, PERSON_NAME_MAX_LENGTH } from '@layerbook/contracts/types';
 import { ErrorWords } from './error-text';
 
 /** Messages that match the API's zod schemas (packages/contracts), so both sides say the same. */

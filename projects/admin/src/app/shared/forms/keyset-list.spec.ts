@@ -21,7 +21,9 @@ describe('keysetList', () => {
     TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting()] });
     http = TestBed.inject(HttpTestingController);
     q.set('');
-    list = runInInjectionContext(TestBed.inject(Injector), () => keysetList<Row>('/api/rows', () => ({ limit: 2, ...(q() ? { q: q() } : {}) })));
+    list = runInInjectionContext(TestBed.inject(Injector), () =>
+      keysetList<Row>('/api/rows', () => ({ limit: 2, ...(q() ? { q: q() } : {}) })),
+    );
     settle();
   });
 
@@ -57,10 +59,12 @@ describe('keysetList', () => {
     http.expectOne('/api/rows?limit=2').flush({ items: [{ id: 'a' }], nextCursor: 'c1' });
     await TestBed.inject(ApplicationRef).whenStable();
     const more = list.loadMore();
-    http.expectOne('/api/rows?limit=2&after=c1').flush(
-      { type: 'about:blank', title: 'Bad input', status: 400, errors: [{ field: 'after', message: 'Start again.' }] },
-      { status: 400, statusText: 'Bad Request' },
-    );
+    http
+      .expectOne('/api/rows?limit=2&after=c1')
+      .flush(
+        { type: 'about:blank', title: 'Bad input', status: 400, errors: [{ field: 'after', message: 'Start again.' }] },
+        { status: 400, statusText: 'Bad Request' },
+      );
     await more;
     expect(list.message()).toBe('Bad input');
     expect(list.items().map((r) => r.id)).toEqual(['a']);

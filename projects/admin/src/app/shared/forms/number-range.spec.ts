@@ -2,8 +2,7 @@ import { FormControl } from '@angular/forms';
 import { describe, expect, it } from 'vitest';
 import { inRange } from './number-range';
 
-const check = (value: number | null, range: Parameters<typeof inRange>[0]) =>
-  new FormControl<number | null>(value, inRange(range)).errors;
+const check = (value: number | null, range: Parameters<typeof inRange>[0]) => new FormControl<number | null>(value, inRange(range)).errors;
 
 describe('inRange', () => {
   it.each([

@@ -18,8 +18,8 @@ const LEAD_BAN_YEAR = 1978;
       <p class="lb-notice" role="note">
         <mat-icon aria-hidden="true">warning</mat-icon>
         <span>
-          Built before 1978: lead-safe work rules (EPA RRP, 40 CFR 745) may apply if painted surfaces
-          are disturbed. Follow local codes and licensed practice.
+          Built before 1978: lead-safe work rules (EPA RRP, 40 CFR 745) may apply if painted surfaces are disturbed. Follow local codes and
+          licensed practice.
         </span>
       </p>
     }

@@ -7,13 +7,7 @@ import { MatIconModule } from '@angular/material/icon';
   selector: 'lb-reveal-password',
   imports: [MatButtonModule, MatIconModule],
   template: `
-    <button
-      mat-icon-button
-      type="button"
-      aria-label="Show password"
-      [attr.aria-pressed]="isShown()"
-      (click)="toggle()"
-    >
+    <button mat-icon-button type="button" aria-label="Show password" [attr.aria-pressed]="isShown()" (click)="toggle()">
       <mat-icon aria-hidden="true">{{ isShown() ? 'visibility_off' : 'visibility' }}</mat-icon>
     </button>
   `,

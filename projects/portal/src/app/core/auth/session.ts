@@ -37,8 +37,6 @@ export class Session {
   }
 
   async signOut(): Promise<void> {
-    this.accept(
-      await firstValueFrom(this.http.post<PortalSession>('/api/portal/auth/signout', {})),
-    );
+    this.accept(await firstValueFrom(this.http.post<PortalSession>('/api/portal/auth/signout', {})));
   }
 }

@@ -13,16 +13,11 @@ describe('portal API settings', () => {
     },
   );
 
-  it.each([['/api/portal/session'], ['/api/portal/auth/link'], ['/api/portal/auth/redeem']])(
-    'treats %s as a session call',
-    (url) => {
-      expect(API_SETTINGS.sessionCalls.some((prefix) => url.startsWith(prefix))).toBe(true);
-    },
-  );
+  it.each([['/api/portal/session'], ['/api/portal/auth/link'], ['/api/portal/auth/redeem']])('treats %s as a session call', (url) => {
+    expect(API_SETTINGS.sessionCalls.some((prefix) => url.startsWith(prefix))).toBe(true);
+  });
 
   it('does not treat the client data calls as session calls', () => {
-    expect(
-      API_SETTINGS.sessionCalls.some((prefix) => '/api/portal/proposals'.startsWith(prefix)),
-    ).toBe(false);
+    expect(API_SETTINGS.sessionCalls.some((prefix) => '/api/portal/proposals'.startsWith(prefix))).toBe(false);
   });
 });

@@ -11,15 +11,7 @@ import { Wordmark } from '../../shared/ui/wordmark';
 /** The frame around a signed-in client's pages: whose portal this is, and a way out. */
 @Component({
   selector: 'lb-portal-shell',
-  imports: [
-    FormAlert,
-    MatButtonModule,
-    MatIconModule,
-    MatToolbarModule,
-    RouterLink,
-    RouterOutlet,
-    Wordmark,
-  ],
+  imports: [FormAlert, MatButtonModule, MatIconModule, MatToolbarModule, RouterLink, RouterOutlet, Wordmark],
   template: `
     <header>
       <mat-toolbar class="lb-toolbar">

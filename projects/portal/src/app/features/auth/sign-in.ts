@@ -16,15 +16,7 @@ import { PortalAuth } from './portal-auth';
 
 @Component({
   selector: 'lb-sign-in',
-  imports: [
-    AuthFrame,
-    FormAlert,
-    MatButtonModule,
-    MatFormFieldModule,
-    MatIconModule,
-    MatInputModule,
-    ReactiveFormsModule,
-  ],
+  imports: [AuthFrame, FormAlert, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, ReactiveFormsModule],
   templateUrl: './sign-in.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -52,15 +52,7 @@ const REPLAYED = 101;
  */
 @Component({
   selector: 'lb-inquiry-page',
-  imports: [
-    FormAlert,
-    MatButtonModule,
-    MatCheckboxModule,
-    MatFormFieldModule,
-    MatInputModule,
-    PublicFrame,
-    ReactiveFormsModule,
-  ],
+  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, PublicFrame, ReactiveFormsModule],
   templateUrl: './inquiry-page.html',
   styleUrl: './inquiry-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -15,14 +15,16 @@ import { PublicFrame } from './public-frame';
       <div class="lb-success" role="status">
         <mat-icon aria-hidden="true">mark_email_read</mat-icon>
         <p>
-          {{ firmName ?? 'The firm' }} has your inquiry and will be in touch soon. A confirmation
-          e-mail is on its way to you; if it has not arrived in a few minutes, look in your spam folder.
+          {{ firmName ?? 'The firm' }} has your inquiry and will be in touch soon. A confirmation e-mail is on its way to you; if it has not
+          arrived in a few minutes, look in your spam folder.
         </p>
       </div>
     </lb-public-frame>
   `,
   styles: `
-    .lb-success p { margin: 0; }
+    .lb-success p {
+      margin: 0;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -8,7 +8,12 @@ describe('readRefusal', () => {
     ['a refusal that is not an object', { inquiryForm: 'nope' }, null],
     [
       'a refusal, keeping only strings',
-      { inquiryForm: { values: { name: 'Ada', consent: true, rooms: 'Hall' }, errors: [{ field: 'email', message: 'Enter an e-mail address.', extra: 1 }, { field: 3 }, 'x'] } },
+      {
+        inquiryForm: {
+          values: { name: 'Ada', consent: true, rooms: 'Hall' },
+          errors: [{ field: 'email', message: 'Enter an e-mail address.', extra: 1 }, { field: 3 }, 'x'],
+        },
+      },
       { values: { name: 'Ada', rooms: 'Hall' }, errors: [{ field: 'email', message: 'Enter an e-mail address.' }] },
     ],
     ['a refusal with nothing usable', { inquiryForm: { values: [], errors: {} } }, { values: {}, errors: [] }],

@@ -52,8 +52,7 @@ export function readRefusal(context: unknown): PostedRefusal | null {
   }
   const cleanErrors = Array.isArray(errors)
     ? errors.filter(
-        (item: unknown): item is FieldProblem =>
-          isRecord(item) && typeof item['field'] === 'string' && typeof item['message'] === 'string',
+        (item: unknown): item is FieldProblem => isRecord(item) && typeof item['field'] === 'string' && typeof item['message'] === 'string',
       )
     : [];
   return { values: cleanValues, errors: cleanErrors.map(({ field, message }) => ({ field, message })) };

@@ -21,8 +21,7 @@ import { ChangeDetectionStrategy, Component } from '@angular/core';
       box-sizing: border-box;
       background:
         linear-gradient(175deg, transparent 0 62%, rgb(63 143 127 / 8%) 62% 70%, transparent 70%),
-        linear-gradient(178deg, transparent 0 74%, rgb(200 150 46 / 10%) 74% 84%, rgb(107 74 47 / 8%) 84%),
-        var(--lb-ivory);
+        linear-gradient(178deg, transparent 0 74%, rgb(200 150 46 / 10%) 74% 84%, rgb(107 74 47 / 8%) 84%), var(--lb-ivory);
     }
     .card {
       width: min(100%, 40rem);
@@ -39,8 +38,12 @@ import { ChangeDetectionStrategy, Component } from '@angular/core';
       font-size: 0.9rem;
     }
     @media (min-width: 600px) {
-      .frame { padding: 3rem 1rem; }
-      .card { padding: 2rem 2.25rem; }
+      .frame {
+        padding: 3rem 1rem;
+      }
+      .card {
+        padding: 2rem 2.25rem;
+      }
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,

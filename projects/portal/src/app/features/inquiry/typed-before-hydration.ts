@@ -25,10 +25,7 @@ export function typedBeforeHydration(formId: string): Record<string, string> | n
   }
   const typed: Record<string, string> = {};
   for (const field of Array.from(form.elements)) {
-    const isField =
-      field instanceof HTMLInputElement ||
-      field instanceof HTMLTextAreaElement ||
-      field instanceof HTMLSelectElement;
+    const isField = field instanceof HTMLInputElement || field instanceof HTMLTextAreaElement || field instanceof HTMLSelectElement;
     if (isField && field.name && !UNTYPED.has(field.type)) {
       typed[field.name] = field.value;
     }

@@ -27,7 +27,8 @@ const WORDS = {
 } as const;
 
 /** Trimmed length, as the server counts it. */
-const trimmedMin = (min: number) => (c: { value: string }) => (c.value.trim().length > 0 && c.value.trim().length < min ? { minlength: true } : null);
+const trimmedMin = (min: number) => (c: { value: string }) =>
+  c.value.trim().length > 0 && c.value.trim().length < min ? { minlength: true } : null;
 
 /** The typed signature: one option, the client's full name, and a ticked box. */
 @Component({
@@ -40,8 +41,12 @@ const trimmedMin = (min: number) => (c: { value: string }) => (c.value.trim().le
         <lb-form-alert [message]="formMessage()" />
         <div>
           <p id="choose-label" class="group-label">Choose an option</p>
-          <mat-radio-group formControlName="variantId" aria-labelledby="choose-label" class="choices"
-            [attr.aria-describedby]="showError('variantId') ? 'variant-error' : null">
+          <mat-radio-group
+            formControlName="variantId"
+            aria-labelledby="choose-label"
+            class="choices"
+            [attr.aria-describedby]="showError('variantId') ? 'variant-error' : null"
+          >
             @for (option of options(); track option.id) {
               <mat-radio-button [value]="option.id">{{ option.text }}</mat-radio-button>
             }
@@ -71,10 +76,24 @@ const trimmedMin = (min: number) => (c: { value: string }) => (c.value.trim().le
     </form>
   `,
   styles: `
-    h2 { font-family: var(--lb-serif); margin: 0 0 0.75rem; }
-    .group-label { font-weight: 600; margin: 0 0 0.25rem; }
-    .choices { display: flex; flex-direction: column; align-items: flex-start; }
-    .field-error { color: var(--mat-sys-error); margin: 0.25rem 0 0; font-size: 0.9rem; }
+    h2 {
+      font-family: var(--lb-serif);
+      margin: 0 0 0.75rem;
+    }
+    .group-label {
+      font-weight: 600;
+      margin: 0 0 0.25rem;
+    }
+    .choices {
+      display: flex;
+      flex-direction: column;
+      align-items: flex-start;
+    }
+    .field-error {
+      color: var(--mat-sys-error);
+      margin: 0.25rem 0 0;
+      font-size: 0.9rem;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

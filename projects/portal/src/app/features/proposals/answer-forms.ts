@@ -20,8 +20,18 @@ type Mode = 'changes' | 'decline' | null;
   imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
   template: `
     <div class="lb-form-actions">
-      <button mat-stroked-button type="button" [disabled]="!isHydrated()" [attr.aria-expanded]="mode() === 'changes'" (click)="open('changes')">Ask for changes</button>
-      <button mat-button type="button" [disabled]="!isHydrated()" [attr.aria-expanded]="mode() === 'decline'" (click)="open('decline')">Decline</button>
+      <button
+        mat-stroked-button
+        type="button"
+        [disabled]="!isHydrated()"
+        [attr.aria-expanded]="mode() === 'changes'"
+        (click)="open('changes')"
+      >
+        Ask for changes
+      </button>
+      <button mat-button type="button" [disabled]="!isHydrated()" [attr.aria-expanded]="mode() === 'decline'" (click)="open('decline')">
+        Decline
+      </button>
     </div>
     @if (mode() === 'changes') {
       <form [formGroup]="changes" (ngSubmit)="sendChanges()" novalidate class="panel" aria-label="Ask for changes">
@@ -55,7 +65,10 @@ type Mode = 'changes' | 'decline' | null;
     }
   `,
   styles: `
-    .panel { margin-top: 1rem; max-width: 40rem; }
+    .panel {
+      margin-top: 1rem;
+      max-width: 40rem;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -82,7 +95,9 @@ export class AnswerForms {
   }
 
   protected sendChanges(): Promise<void> {
-    return this.send(this.changes, () => this.api.requestChanges(this.proposal().id, { comment: this.changes.getRawValue().comment.trim() }));
+    return this.send(this.changes, () =>
+      this.api.requestChanges(this.proposal().id, { comment: this.changes.getRawValue().comment.trim() }),
+    );
   }
 
   protected sendDecline(): Promise<void> {

@@ -26,8 +26,7 @@ import { PROPOSALS_URL } from './proposal-api';
       <div class="empty">
         <mat-icon aria-hidden="true">folder_open</mat-icon>
         <p>
-          Nothing here yet. When your firm sends you a proposal or an invoice, it will appear on
-          this page and you will get an e-mail too.
+          Nothing here yet. When your firm sends you a proposal or an invoice, it will appear on this page and you will get an e-mail too.
         </p>
       </div>
     } @else {
@@ -43,7 +42,9 @@ import { PROPOSALS_URL } from './proposal-api';
                 · the offer stands until {{ day(project.latest.expiresOn) }}
               }
             </p>
-            <a [routerLink]="['/proposals', project.latest.id]">Read the proposal<span class="lb-visually-hidden"> for {{ project.title }}</span></a>
+            <a [routerLink]="['/proposals', project.latest.id]"
+              >Read the proposal<span class="lb-visually-hidden"> for {{ project.title }}</span></a
+            >
           </li>
         }
       </ul>
@@ -60,13 +61,37 @@ import { PROPOSALS_URL } from './proposal-api';
       border-radius: 12px;
       background: var(--mat-sys-surface-container-lowest);
     }
-    .empty p { margin: 0; }
-    .empty mat-icon { color: var(--lb-verdigris); }
-    .list { list-style: none; margin: 0; padding: 0; display: grid; gap: 1rem; max-width: 48rem; }
-    .project { padding: 1rem 1.25rem; border: 1px solid var(--mat-sys-outline-variant); border-radius: 12px; background: var(--mat-sys-surface-container-lowest); }
-    .project h2 { font-family: var(--lb-serif); margin: 0 0 0.25rem; font-size: 1.25rem; }
-    .project p { margin: 0 0 0.5rem; }
-    .site { color: var(--mat-sys-on-surface-variant); }
+    .empty p {
+      margin: 0;
+    }
+    .empty mat-icon {
+      color: var(--lb-verdigris);
+    }
+    .list {
+      list-style: none;
+      margin: 0;
+      padding: 0;
+      display: grid;
+      gap: 1rem;
+      max-width: 48rem;
+    }
+    .project {
+      padding: 1rem 1.25rem;
+      border: 1px solid var(--mat-sys-outline-variant);
+      border-radius: 12px;
+      background: var(--mat-sys-surface-container-lowest);
+    }
+    .project h2 {
+      font-family: var(--lb-serif);
+      margin: 0 0 0.25rem;
+      font-size: 1.25rem;
+    }
+    .project p {
+      margin: 0 0 0.5rem;
+    }
+    .site {
+      color: var(--mat-sys-on-surface-variant);
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -19,11 +19,32 @@ import { ProposalDocument } from './proposal-document';
   imports: [AcceptanceForm, AnswerForms, MatIconModule, MatProgressBarModule, ProposalDocument, RouterLink],
   templateUrl: './proposal-page.html',
   styles: `
-    .heading { display: flex; flex-wrap: wrap; gap: 0.5rem 1rem; align-items: baseline; justify-content: space-between; }
-    .heading h1 { margin: 0; }
-    .meta { color: var(--mat-sys-on-surface-variant); margin: 0.25rem 0 1rem; }
-    .pdf { display: inline-flex; gap: 0.25rem; align-items: center; }
-    .answer { margin: 2rem 0 0; padding: 1.25rem; border-radius: 12px; border: 1px solid var(--mat-sys-outline-variant); background: var(--mat-sys-surface-container-low); }
+    .heading {
+      display: flex;
+      flex-wrap: wrap;
+      gap: 0.5rem 1rem;
+      align-items: baseline;
+      justify-content: space-between;
+    }
+    .heading h1 {
+      margin: 0;
+    }
+    .meta {
+      color: var(--mat-sys-on-surface-variant);
+      margin: 0.25rem 0 1rem;
+    }
+    .pdf {
+      display: inline-flex;
+      gap: 0.25rem;
+      align-items: center;
+    }
+    .answer {
+      margin: 2rem 0 0;
+      padding: 1.25rem;
+      border-radius: 12px;
+      border: 1px solid var(--mat-sys-outline-variant);
+      background: var(--mat-sys-surface-container-low);
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -48,7 +69,9 @@ export class ProposalPage {
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return this.isMissing() ? 'We could not find this proposal. Open it from your projects or from the e-mail the firm sent.' : problemMessage(error);
+    return this.isMissing()
+      ? 'We could not find this proposal. Open it from your projects or from the e-mail the firm sent.'
+      : problemMessage(error);
   });
   protected readonly statusWords = PROPOSAL_CLIENT_STATUS_LABELS;
 

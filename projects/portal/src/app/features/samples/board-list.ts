@@ -15,7 +15,9 @@ import { BOARD_STATUS_WORDS } from './board-words';
   template: `
     <section class="lb-page">
       <h1>Your sample boards</h1>
-      <p class="lead">A sample board shows your finish made with the real products and colours. Look at each one, then approve it or ask for changes.</p>
+      <p class="lead">
+        A sample board shows your finish made with the real products and colours. Look at each one, then approve it or ask for changes.
+      </p>
       @if (isLoading()) {
         <mat-progress-bar mode="indeterminate" aria-label="Loading your sample boards" />
       } @else if (message()) {
@@ -50,13 +52,46 @@ import { BOARD_STATUS_WORDS } from './board-words';
     </section>
   `,
   styles: `
-    .lead { color: var(--mat-sys-on-surface-variant); }
-    .boards { list-style: none; padding: 0; display: grid; gap: 1rem; }
-    .board { display: flex; gap: 1rem; align-items: center; padding: 0.75rem; border: 1px solid var(--mat-sys-outline-variant); border-radius: 12px; text-decoration: none; color: inherit; }
-    .board img { border-radius: 8px; object-fit: cover; }
-    .no-photo { width: 160px; height: 120px; display: grid; place-items: center; border-radius: 8px; background: var(--mat-sys-surface-container); }
-    .text { display: grid; gap: 0.25rem; }
-    .status { display: inline-flex; gap: 0.3rem; align-items: center; }
+    .lead {
+      color: var(--mat-sys-on-surface-variant);
+    }
+    .boards {
+      list-style: none;
+      padding: 0;
+      display: grid;
+      gap: 1rem;
+    }
+    .board {
+      display: flex;
+      gap: 1rem;
+      align-items: center;
+      padding: 0.75rem;
+      border: 1px solid var(--mat-sys-outline-variant);
+      border-radius: 12px;
+      text-decoration: none;
+      color: inherit;
+    }
+    .board img {
+      border-radius: 8px;
+      object-fit: cover;
+    }
+    .no-photo {
+      width: 160px;
+      height: 120px;
+      display: grid;
+      place-items: center;
+      border-radius: 8px;
+      background: var(--mat-sys-surface-container);
+    }
+    .text {
+      display: grid;
+      gap: 0.25rem;
+    }
+    .status {
+      display: inline-flex;
+      gap: 0.3rem;
+      align-items: center;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

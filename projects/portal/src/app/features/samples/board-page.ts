@@ -21,14 +21,27 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
 /** One sample board: its photos and finish in plain words, then approve it or ask for changes (once). */
 @Component({
   selector: 'lb-board-page',
-  imports: [DatePipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoGallery, ReactiveFormsModule, RouterLink],
+  imports: [
+    DatePipe,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatProgressBarModule,
+    PhotoGallery,
+    ReactiveFormsModule,
+    RouterLink,
+  ],
   template: `
     <section class="lb-page">
       <p><a routerLink="/boards">All your sample boards</a></p>
       @if (board(); as b) {
         <h1>{{ b.label }}</h1>
         <p class="meta">
-          From {{ b.firmName }}@if (b.round > 1) {<span>, round {{ b.round }}</span>}
+          From {{ b.firmName }}
+          @if (b.round > 1) {
+            <span>, round {{ b.round }}</span>
+          }
         </p>
 
         @switch (b.status) {
@@ -40,12 +53,17 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
           }
           @case ('changes_requested') {
             <div class="decided" role="status">
-              <p><mat-icon aria-hidden="true">edit_note</mat-icon> You asked for changes on {{ b.decidedAt | date: 'longDate' }}. {{ b.firmName }} will make a new board for you to see.</p>
+              <p>
+                <mat-icon aria-hidden="true">edit_note</mat-icon> You asked for changes on {{ b.decidedAt | date: 'longDate' }}.
+                {{ b.firmName }} will make a new board for you to see.
+              </p>
               <p class="comment">You wrote: “{{ b.clientComment }}”</p>
             </div>
           }
           @default {
-            <p class="status"><mat-icon aria-hidden="true">{{ words.shown.icon }}</mat-icon> {{ words.shown.text }}</p>
+            <p class="status">
+              <mat-icon aria-hidden="true">{{ words.shown.icon }}</mat-icon> {{ words.shown.text }}
+            </p>
           }
         }
 
@@ -71,7 +89,9 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
             <p role="alert" class="error">{{ message() }}</p>
             @if (isConfirming()) {
               <div class="confirm" role="group" aria-labelledby="confirm-text">
-                <p id="confirm-text">Approve "{{ b.label }}"? The finished work will be matched to this board. You cannot change your answer here afterwards.</p>
+                <p id="confirm-text">
+                  Approve "{{ b.label }}"? The finished work will be matched to this board. You cannot change your answer here afterwards.
+                </p>
                 <button mat-flat-button type="button" [disabled]="isBusy()" (click)="approve(b)">Yes, approve this board</button>
                 <button mat-button type="button" [disabled]="isBusy()" (click)="isConfirming.set(false)">Not yet</button>
               </div>
@@ -111,16 +131,52 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
     </section>
   `,
   styles: `
-    .meta { color: var(--mat-sys-on-surface-variant); margin-top: 0; }
-    .status, .decided p:first-child { display: flex; gap: 0.4rem; align-items: center; }
-    .decided { padding: 1rem 1.25rem; border-radius: 12px; border: 1px solid var(--mat-sys-outline-variant); background: var(--mat-sys-surface-container-low); }
-    .comment { white-space: pre-line; }
-    .answer { margin: 2rem 0 0; padding: 1.25rem; border-radius: 12px; border: 1px solid var(--mat-sys-outline-variant); background: var(--mat-sys-surface-container-low); }
-    .buttons, .confirm { display: flex; flex-wrap: wrap; gap: 0.75rem; align-items: center; }
-    .confirm p { flex-basis: 100%; margin: 0; }
-    .wide { width: 100%; }
-    .error:empty { display: none; }
-    .error { color: var(--mat-sys-error); }
+    .meta {
+      color: var(--mat-sys-on-surface-variant);
+      margin-top: 0;
+    }
+    .status,
+    .decided p:first-child {
+      display: flex;
+      gap: 0.4rem;
+      align-items: center;
+    }
+    .decided {
+      padding: 1rem 1.25rem;
+      border-radius: 12px;
+      border: 1px solid var(--mat-sys-outline-variant);
+      background: var(--mat-sys-surface-container-low);
+    }
+    .comment {
+      white-space: pre-line;
+    }
+    .answer {
+      margin: 2rem 0 0;
+      padding: 1.25rem;
+      border-radius: 12px;
+      border: 1px solid var(--mat-sys-outline-variant);
+      background: var(--mat-sys-surface-container-low);
+    }
+    .buttons,
+    .confirm {
+      display: flex;
+      flex-wrap: wrap;
+      gap: 0.75rem;
+      align-items: center;
+    }
+    .confirm p {
+      flex-basis: 100%;
+      margin: 0;
+    }
+    .wide {
+      width: 100%;
+    }
+    .error:empty {
+      display: none;
+    }
+    .error {
+      color: var(--mat-sys-error);
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -139,7 +195,9 @@ export class BoardPage {
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return toProblem(error).status === 404 ? 'This sample board is not here. It may not have been shown to you yet.' : problemMessage(error);
+    return toProblem(error).status === 404
+      ? 'This sample board is not here. It may not have been shown to you yet.'
+      : problemMessage(error);
   });
   protected readonly isBusy = signal(false);
   protected readonly isConfirming = signal(false);

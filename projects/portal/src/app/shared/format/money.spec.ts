@@ -12,9 +12,7 @@ describe('portal formatting', () => {
   });
 
   it('shows a moment with its date and time', () => {
-    expect(formatMoment('2026-06-15T12:00:00Z', 'en-US')).toMatch(
-      /June 1[45], 2026 at \d{1,2}:\d{2}/,
-    );
+    expect(formatMoment('2026-06-15T12:00:00Z', 'en-US')).toMatch(/June 1[45], 2026 at \d{1,2}:\d{2}/);
   });
 
   it('formats money with the one shared formatter (exact decimal strings)', () => {

@@ -36,7 +36,12 @@ describe('Submission', () => {
   it.each([
     [
       'a field error, beside its field',
-      refusal({ type: 'about:blank', title: 'Bad input', status: 400, errors: [{ field: 'name', message: 'Use at most 120 characters.' }] }),
+      refusal({
+        type: 'about:blank',
+        title: 'Bad input',
+        status: 400,
+        errors: [{ field: 'name', message: 'Use at most 120 characters.' }],
+      }),
       null,
       { server: 'Use at most 120 characters.' },
     ],
