@@ -1,6 +1,2 @@
-import { AbstractControl, ValidationErrors } from '@angular/forms';
-
-/** Like Validators.required, but spaces alone do not count: the server trims before it checks. */
-export function requiredText(control: AbstractControl<string>): ValidationErrors | null {
-  return typeof control.value === 'string' && control.value.trim().length > 0 ? null : { required: true };
-}
+// Shared by both apps: projects/shared/forms/text-validators.ts
+export * from '../../../../../shared/forms/text-validators';
