@@ -1,10 +1,2 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
-import { RouterOutlet } from '@angular/router';
-
-@Component({
-  selector: 'lb-root',
-  imports: [RouterOutlet],
-  template: '<router-outlet />',
-  changeDetection: ChangeDetectionStrategy.OnPush,
-})
-export class App {}
+// Shared by both apps: projects/shared/app/root.ts
+export { App } from '../../../shared/app/root';

@@ -1,0 +1,62 @@
+import { ChangeDetectionStrategy, Component, inject, input, output } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { EMAIL_MAX_LENGTH } from '@layerbook/contracts/types';
+import { errorText } from '../forms/error-text';
+import { EMAIL_WORDS } from '../forms/field-words';
+import { hydratedSignal } from '../forms/hydrated';
+import { Submission } from '../forms/submission';
+import { requiredText } from '../forms/text-validators';
+import { FormAlert } from './form-alert';
+
+/**
+ * "E-mail me a link": one address field and a button, used where a person gets a one-time link
+ * (a password reset in admin, a sign-in link in the portal). The page says what the link is for
+ * and what happens once it is sent; this form only asks, shows the server's refusal beside the
+ * field, and tells the page the address it went to.
+ */
+@Component({
+  selector: 'lb-email-link-form',
+  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  template: `
+    <form [formGroup]="form" (ngSubmit)="requestLink()" novalidate>
+      <fieldset class="lb-gate lb-form" [disabled]="!isHydrated()">
+        <lb-form-alert [message]="submission.message()" />
+        <mat-form-field>
+          <mat-label>E-mail</mat-label>
+          <input matInput type="email" formControlName="email" autocomplete="email" required />
+          <mat-error>{{ errorText(form.controls.email, emailWords) }}</mat-error>
+        </mat-form-field>
+        <div class="lb-form-actions">
+          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">{{ buttonLabel() }}</button>
+        </div>
+      </fieldset>
+    </form>
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class EmailLinkForm {
+  readonly buttonLabel = input.required<string>();
+  /** Asks the server for the link; a rejection is shown on the form. */
+  readonly send = input.required<(email: string) => Promise<unknown>>();
+  readonly sent = output<string>();
+
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    email: ['', [requiredText, Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
+  });
+  protected readonly submission = new Submission();
+  protected readonly errorText = errorText;
+  protected readonly emailWords = EMAIL_WORDS;
+  protected readonly isHydrated = hydratedSignal();
+
+  protected async requestLink(): Promise<void> {
+    const email = this.form.getRawValue().email.trim();
+    const isSent = await this.submission.send(this.form, async () => {
+      await this.send()(email);
+      return true;
+    });
+    if (isSent) this.sent.emit(email);
+  }
+}
