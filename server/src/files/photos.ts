@@ -117,7 +117,7 @@ export async function deletePhoto(
   album: PhotoAlbum,
   actor: Actor,
   photoId: string,
-  check: (ownerId: string) => Promise<void> = async () => undefined,
+  check: (ownerId: string) => Promise<void> = () => Promise.resolve(),
 ): Promise<ObjectKeys> {
   const photo = await findPhoto(tx, album, photoId);
   await check(photo.ownerId);

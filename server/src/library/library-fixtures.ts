@@ -1,4 +1,4 @@
-import type { FinishLayerInput, ProductInput } from '@layerbook/contracts';
+import type { FinishLayerInput, ProductInput, ProductView } from '@layerbook/contracts';
 import { linkIn } from '../testing/inbox';
 import { newAgent, signUpFirm, TestServer, uniqueEmail } from '../testing/harness';
 
@@ -57,7 +57,7 @@ export const TINT: ProductInput = {
 export async function addProduct(firm: Firm, body: ProductInput): Promise<string> {
   const res = await firm.agent.post('/api/library/products').set('x-csrf-token', firm.csrf()).send(body);
   if (res.status !== 201) throw new Error(`product not made: ${res.status} ${JSON.stringify(res.body)}`);
-  return res.body.id as string;
+  return (res.body as ProductView).id;
 }
 
 export const primerLayer = (productId: string): FinishLayerInput => ({

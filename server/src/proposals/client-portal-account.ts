@@ -1,6 +1,14 @@
 import type { TenantTx } from '@layerbook/db';
 import { badRequest, conflict } from '../http/problem';
 
+interface PortalUserRow {
+  id: string;
+  client_id: string | null;
+  status: 'active' | 'disabled';
+  name: string;
+  email: string;
+}
+
 /**
  * The client's portal sign-in, made on first send: one portal user per e-mail per firm, tied to
  * this client. 400 naming `client.email` when the client has none; 409 when the address already
@@ -21,11 +29,11 @@ export async function ensurePortalAccount(
     [tx.tenantId, client.id, email, client.name],
   );
   const row = (
-    await tx.client.query(`select id, client_id, status, name, email from portal_users where tenant_id = $1 and email = $2 for update`, [
-      tx.tenantId,
-      email,
-    ])
-  ).rows[0]!;
+    await tx.client.query<PortalUserRow>(
+      `select id, client_id, status, name, email from portal_users where tenant_id = $1 and email = $2 for update`,
+      [tx.tenantId, email],
+    )
+  ).rows[0];
   if (row.client_id === null)
     await tx.client.query(`update portal_users set client_id = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, row.id, client.id]);
   else if (row.client_id !== client.id)

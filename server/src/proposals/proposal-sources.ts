@@ -1,3 +1,4 @@
+import type { EstimateStatus } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import type { Caution } from '@layerbook/domain';
 import { conflict, notFound } from '../http/problem';
@@ -43,7 +44,53 @@ export interface ProposalSources {
   readonly finishNames: ReadonlyMap<string, string>;
 }
 
-const addressLines = (r: { address_line1: string; address_line2: string; city: string; region: string; postal_code: string }) =>
+/** The address columns firms and sites share. */
+interface AddressColumns {
+  address_line1: string;
+  address_line2: string;
+  city: string;
+  region: string;
+  postal_code: string;
+}
+
+interface EstimateRow {
+  id: string;
+  title: string;
+  status: EstimateStatus;
+  start_date: string;
+  site_id: string;
+  client_id: string;
+  result: { variants?: StoredVariant[] } | null;
+}
+
+interface FirmRow extends AddressColumns {
+  name: string;
+  country: string;
+  phone: string;
+  time_zone: string;
+  currency: string;
+  units: 'imperial' | 'metric';
+}
+
+interface ClientRow {
+  id: string;
+  name: string;
+  email: string;
+  phone: string;
+}
+
+interface SiteRow extends AddressColumns {
+  label: string;
+  year_built: number | null;
+}
+
+/** A room or finish system: only its name is read. */
+interface NamedRow {
+  id: string;
+  name: string;
+}
+
+const addressLines = (r: AddressColumns) =>
   [r.address_line1, r.address_line2, [r.city, [r.region, r.postal_code].filter(Boolean).join(' ')].filter(Boolean).join(', ')].filter(
     (l) => l.trim() !== '',
   );
@@ -53,30 +100,33 @@ const addressLines = (r: { address_line1: string; address_line2: string; city: s
  * locked, so version numbers are handed out one at a time. 409 when the estimate has no saved numbers.
  */
 export async function loadProposalSources(tx: TenantTx, estimateId: string): Promise<ProposalSources> {
-  const est = (
-    await tx.client.query(
+  const est: EstimateRow | undefined = (
+    await tx.client.query<EstimateRow>(
       `select id, title, status, start_date::text as start_date, site_id, client_id, result from estimates where tenant_id = $1 and id = $2 for update`,
       [tx.tenantId, estimateId],
     )
   ).rows[0];
   if (!est) throw notFound('estimate');
-  const variants = (est.result as { variants?: StoredVariant[] } | null)?.variants ?? [];
+  const variants = est.result?.variants ?? [];
   if (!variants.length)
     throw conflict('This estimate has no saved prices yet. Choose finishes and save the estimate first.', [
       { field: 'estimateId', message: 'Save the estimate with prices first.' },
     ]);
 
   const firm = (
-    await tx.client.query(
+    await tx.client.query<FirmRow>(
       `select name, address_line1, address_line2, city, region, postal_code, country, phone, time_zone, currency, units from firms where id = $1`,
       [tx.tenantId],
     )
   ).rows[0];
   const client = (
-    await tx.client.query(`select id, name, email, phone from clients where tenant_id = $1 and id = $2`, [tx.tenantId, est.client_id])
+    await tx.client.query<ClientRow>(`select id, name, email, phone from clients where tenant_id = $1 and id = $2`, [
+      tx.tenantId,
+      est.client_id,
+    ])
   ).rows[0];
   const site = (
-    await tx.client.query(
+    await tx.client.query<SiteRow>(
       `select label, address_line1, address_line2, city, region, postal_code, year_built from sites where tenant_id = $1 and id = $2`,
       [tx.tenantId, est.site_id],
     )
@@ -85,13 +135,16 @@ export async function loadProposalSources(tx: TenantTx, estimateId: string): Pro
   const systemIds = [...new Set(variants.flatMap((v) => v.result.surfaces.map((s) => s.finishSystemId)))];
   // Archived finish systems and rooms still name what was priced.
   const rooms = (
-    await tx.client.query(`select id, name from rooms where tenant_id = $1 and id = any($2::uuid[]) order by position, created_at`, [
-      tx.tenantId,
-      roomIds,
-    ])
+    await tx.client.query<NamedRow>(
+      `select id, name from rooms where tenant_id = $1 and id = any($2::uuid[]) order by position, created_at`,
+      [tx.tenantId, roomIds],
+    )
   ).rows;
   const systems = (
-    await tx.client.query(`select id, name from finish_systems where tenant_id = $1 and id = any($2::uuid[])`, [tx.tenantId, systemIds])
+    await tx.client.query<NamedRow>(`select id, name from finish_systems where tenant_id = $1 and id = any($2::uuid[])`, [
+      tx.tenantId,
+      systemIds,
+    ])
   ).rows;
   return {
     estimate: { id: est.id, title: est.title, status: est.status, startDate: est.start_date, variants },
@@ -106,7 +159,7 @@ export async function loadProposalSources(tx: TenantTx, estimateId: string): Pro
     },
     client: { id: client.id, name: client.name, email: client.email, phone: client.phone },
     site: { label: site.label, addressLines: addressLines(site), yearBuilt: site.year_built },
-    roomNames: new Map(rooms.map((r, i) => [r.id as string, { name: r.name as string, position: i }])),
-    finishNames: new Map(systems.map((s) => [s.id as string, s.name as string])),
+    roomNames: new Map(rooms.map((r, i) => [r.id, { name: r.name, position: i }])),
+    finishNames: new Map(systems.map((s) => [s.id, s.name])),
   };
 }

@@ -25,17 +25,25 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
       `Version ${version.version} is ${version.status.replace('_', ' ')}; only a draft can be sent. Make a new version instead.`,
     );
   const est = (
-    await tx.client.query(`select client_id from estimates where tenant_id = $1 and id = $2 for update`, [tx.tenantId, version.estimateId])
-  ).rows[0]!;
-  const firm = (await tx.client.query(`select name, time_zone from firms where id = $1`, [tx.tenantId])).rows[0]!;
+    await tx.client.query<{ client_id: string }>(`select client_id from estimates where tenant_id = $1 and id = $2 for update`, [
+      tx.tenantId,
+      version.estimateId,
+    ])
+  ).rows[0];
+  const firm = (
+    await tx.client.query<{ name: string; time_zone: string }>(`select name, time_zone from firms where id = $1`, [tx.tenantId])
+  ).rows[0];
   const today = localDate(firm.time_zone, ctx.now());
   if (version.expiresOn <= today)
     throw conflict('The offer would expire before it is read. Choose a later expiry date.', [
       { field: 'expiresOn', message: `Choose a day after today (${today}).` },
     ]);
   const client = (
-    await tx.client.query(`select id, name, email from clients where tenant_id = $1 and id = $2`, [tx.tenantId, est.client_id])
-  ).rows[0]!;
+    await tx.client.query<{ id: string; name: string; email: string }>(
+      `select id, name, email from clients where tenant_id = $1 and id = $2`,
+      [tx.tenantId, est.client_id],
+    )
+  ).rows[0];
   const account = await ensurePortalAccount(tx, client);
 
   const sentAt = ctx.now();

@@ -1,6 +1,6 @@
 import { withTenant } from '@layerbook/db';
 import { newAgent, startTestServer, TestServer } from '../testing/harness';
-import { addClient, firmWithFinish, joinAs, makeBoard, post, signInClient, uploadBoardPhoto } from './sample-fixtures';
+import { addClient, firmWithFinish, makeBoard, post, signInClient, uploadBoardPhoto } from './sample-fixtures';
 
 let t: TestServer;
 beforeAll(async () => {

@@ -1,3 +1,4 @@
+import type { ClientSummary, FinishSystemView, SiteView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { addProduct, glazeLayer, joinAs, MEDIUM, primerLayer, PRIMER, TINT } from '../library/library-fixtures';
 import { jpegImage } from '../files/test-images';
@@ -22,18 +23,26 @@ export async function firmWithFinish(t: TestServer, firmName = 'Ochre Lane Finis
     .send({ name: 'Antiqued glaze over primer', description: 'Warm umber glaze', layers: [primerLayer(primer), glazeLayer(tint, medium)] });
   if (system.status !== 201) throw new Error(`system not made: ${system.status} ${JSON.stringify(system.body)}`);
   const { clientId, siteId, email } = await addClient(o, 'Wren Halloway');
-  return { ...o, systemId: system.body.id as string, productIds: { primer, tint, medium }, clientId, siteId, clientEmail: email };
+  return {
+    ...o,
+    systemId: (system.body as FinishSystemView).id,
+    productIds: { primer, tint, medium },
+    clientId,
+    siteId,
+    clientEmail: email,
+  };
 }
 
 export async function addClient(o: Agent, name: string) {
   const email = uniqueEmail('client');
   const client = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name, email });
   if (client.status !== 201) throw new Error(`client not made: ${client.status} ${JSON.stringify(client.body)}`);
+  const clientId = (client.body as ClientSummary).id;
   const site = await o.agent
-    .post(`/api/clients/${client.body.id}/sites`)
+    .post(`/api/clients/${clientId}/sites`)
     .set('x-csrf-token', o.csrf())
     .send({ addressLine1: '14 Kiln Row', city: 'Ashford Vale' });
-  return { clientId: client.body.id as string, siteId: site.body.id as string, email };
+  return { clientId, siteId: (site.body as SiteView).id, email };
 }
 
 /** Gives the client record a portal login and signs it in by the e-mailed one-time link. */

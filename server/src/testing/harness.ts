@@ -1,15 +1,16 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import type { PortalSession, StaffSession } from '@layerbook/contracts';
 import type { Express } from 'express';
 import { Pool } from 'pg';
-import pino from 'pino';
 import request from 'supertest';
 import { createApp } from '../app';
 import { Config, loadConfig } from '../config';
 import type { AppContext } from '../context';
 import { openObjectStore } from '../files/object-store';
 import { startS3Fake } from '../files/s3-fake';
+import { createLogger } from '../http/logger';
 import { startQueue, StartedQueue } from '../queue/job-queue';
 import { startWorkers, Workers } from '../queue/workers';
 import { Inbox, startInbox } from './inbox';
@@ -37,13 +38,14 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
     SMTP_PORT: String(inbox.port),
     PUBLIC_URL: 'http://localhost:4300',
     ROOT_DIR: path.resolve(__dirname, '../../..'),
-    LOG_LEVEL: 'silent',
+    // Quiet unless asked for (LB_TEST_LOG=debug); the same logger, with its redaction, as the server.
+    LOG_LEVEL: process.env['LB_TEST_LOG'] ?? 'silent',
     SIGN_IN_RATE_LIMIT: '1000',
     PUBLIC_FORM_RATE_LIMIT: '1000',
     S3_ENDPOINT: s3.endpoint,
     ...overrides,
   });
-  const logger = pino({ level: process.env['LB_TEST_LOG'] ?? 'silent' });
+  const logger = createLogger(config);
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: 5 });
   const queue = await startQueue(config, logger);
   let fixedNow: Date | null = null;
@@ -79,7 +81,7 @@ export async function newAgent(
   let token = '';
   const refresh = async () => {
     const res = await agent.get(area === 'auth' ? '/api/auth/session' : '/api/portal/session');
-    token = res.body.csrfToken;
+    token = (res.body as StaffSession | PortalSession).csrfToken;
   };
   await refresh();
   return { agent, csrf: () => token, refresh };
@@ -95,6 +97,8 @@ export async function signUpFirm(app: Express, firmName = 'Test Plaster Studio')
   const password = 'trowel-and-lime-2026';
   const res = await agent.post('/api/auth/signup').set('x-csrf-token', csrf()).send({ firmName, name: 'Olive Owner', email, password });
   if (res.status !== 201) throw new Error(`signup failed: ${res.status} ${JSON.stringify(res.body)}`);
+  const { user } = res.body as StaffSession;
+  if (!user) throw new Error('signup answered without a signed-in user');
   await refresh();
-  return { agent, csrf, email, password, firmId: res.body.user.firmId as string, userId: res.body.user.id as string };
+  return { agent, csrf, email, password, firmId: user.firmId, userId: user.id };
 }

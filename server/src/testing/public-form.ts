@@ -1,3 +1,4 @@
+import type { PublicFirm } from '@layerbook/contracts';
 import type { Express } from 'express';
 import request from 'supertest';
 
@@ -18,7 +19,7 @@ export async function publicInquiryBody(app: Express, slug: string, overrides: R
     referrerName: 'Ottoline Marsh Interiors',
     consent: true,
     website: '',
-    startedAt: firm.body.formStamp as string,
+    startedAt: (firm.body as PublicFirm).formStamp,
     ...overrides,
   };
 }
