@@ -3,7 +3,7 @@ import path from 'node:path';
 import { E2E } from './env';
 
 /** Stops what global-setup started, by PID. */
-export default async function globalTeardown(): Promise<void> {
+export default function globalTeardown(): void {
   const dir = path.resolve(__dirname, '../..', E2E.stateDir);
   for (const name of ['server', 'maildev', 's3']) {
     const file = path.join(dir, `${name}.pid`);

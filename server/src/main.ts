@@ -22,9 +22,9 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: config.DB_POOL_MAX, application_name: `layerbook-${mode}` });
   await assertRlsBoundRole(pool);
   const queue = await startQueue(config, logger);
-  const workers = mode === 'worker' || config.RUN_WORKERS ? await startWorkers(config, queue, logger) : undefined;
   const storage = await openObjectStore(config);
   const ctx: AppContext = { config, pool, queue, logger, storage, now: () => new Date() };
+  const workers = mode === 'worker' || config.RUN_WORKERS ? await startWorkers(config, queue, logger, ctx.now) : undefined;
 
   let server: import('node:http').Server | undefined;
   if (mode === 'web') {

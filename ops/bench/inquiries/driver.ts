@@ -19,15 +19,18 @@ interface Job {
 }
 
 function percentile(sorted: number[], p: number): number {
-  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))]!;
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
 }
 
 async function run(job: Job): Promise<{ rps: number; p50: number; p95: number }> {
   let call: () => Promise<void>;
-  let close = async () => undefined as void;
+  let close: () => Promise<void>;
   if (job.mode === 'http') {
     const agent = new http.Agent({ keepAlive: true, maxSockets: job.concurrency });
-    close = async () => agent.destroy();
+    close = () => {
+      agent.destroy();
+      return Promise.resolve();
+    };
     call = () =>
       new Promise((resolve, reject) => {
         http

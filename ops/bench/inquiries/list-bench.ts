@@ -33,7 +33,7 @@ async function seed(ownerUrl: string): Promise<string> {
     const client = await owner.connect();
     try {
       await client.query('begin');
-      const id = (await client.query(`select gen_random_uuid() as id`)).rows[0].id as string;
+      const id = (await client.query<{ id: string }>(`select gen_random_uuid() as id`)).rows[0].id;
       await client.query(`select set_config('app.tenant_id', $1, true)`, [id]);
       await client.query(`insert into firms (id, name, slug) values ($1, $2, $3)`, [id, `Bench Firm ${f}`, `bench-${f}-${id.slice(0, 8)}`]);
       const n = f === 0 ? BIG : PER_OTHER;
@@ -54,31 +54,16 @@ async function seed(ownerUrl: string): Promise<string> {
   }
   await owner.query('analyze');
   await owner.end();
-  return firmIds[0]!;
+  return firmIds[0];
 }
 
-function percentile(sorted: number[], p: number): number {
-  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))]!;
+/** What driver.ts posts back: ops/s and latencies (ms), or why it failed. */
+interface Measured {
+  rps: number;
+  p50: number;
+  p95: number;
 }
-
-/** Runs `total` calls with `concurrency` in flight; returns ops/s and latencies (ms). */
-async function drive(total: number, concurrency: number, call: () => Promise<void>): Promise<{ rps: number; p50: number; p95: number }> {
-  const latencies: number[] = [];
-  let next = 0;
-  const start = process.hrtime.bigint();
-  await Promise.all(
-    Array.from({ length: concurrency }, async () => {
-      while (next++ < total) {
-        const t0 = process.hrtime.bigint();
-        await call();
-        latencies.push(Number(process.hrtime.bigint() - t0) / 1e6);
-      }
-    }),
-  );
-  const seconds = Number(process.hrtime.bigint() - start) / 1e9;
-  latencies.sort((a, b) => a - b);
-  return { rps: total / seconds, p50: percentile(latencies, 50), p95: percentile(latencies, 95) };
-}
+type DriverMessage = Measured | { error: string };
 
 async function main(): Promise<void> {
   execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: 'inherit' });
@@ -114,7 +99,7 @@ async function main(): Promise<void> {
   // A staff member of the big firm, signed in through the API.
   const jobsPool = new Pool({ connectionString: config.DATABASE_OWNER_URL, max: 1 });
   const signUp = await fetch(`http://127.0.0.1:${port}/api/auth/session`);
-  const cookie0 = signUp.headers.get('set-cookie')!.split(';')[0]!;
+  const cookie0 = signUp.headers.get('set-cookie')!.split(';')[0];
   const csrf = ((await signUp.json()) as { csrfToken: string }).csrfToken;
   const made = await fetch(`http://127.0.0.1:${port}/api/auth/signup`, {
     method: 'POST',
@@ -126,7 +111,7 @@ async function main(): Promise<void> {
       password: 'bench-password-2026',
     }),
   });
-  const cookie = made.headers.get('set-cookie')!.split(';')[0]!;
+  const cookie = made.headers.get('set-cookie')!.split(';')[0];
   const user = ((await made.json()) as { user: { id: string; firmId: string } }).user;
   // Move the signed-up owner into the big firm so the API reads its 20,000 rows.
   const c = await jobsPool.connect();
@@ -147,7 +132,7 @@ async function main(): Promise<void> {
     headers: { 'content-type': 'application/json', cookie, 'x-csrf-token': csrf2 },
     body: JSON.stringify({ email: 'bench@example.test', password: 'bench-password-2026' }),
   });
-  const session = signedIn.headers.get('set-cookie')!.split(';')[0]!;
+  const session = signedIn.headers.get('set-cookie')!.split(';')[0];
 
   const get = (url: string) =>
     new Promise<string>((resolve, reject) => {
@@ -166,11 +151,11 @@ async function main(): Promise<void> {
     after = (JSON.parse(await get(`/api/inquiries?limit=100${after ? `&after=${after}` : ''}`)) as { nextCursor: string }).nextCursor;
 
   const measure = (job: Record<string, unknown>) =>
-    new Promise<{ rps: number; p50: number; p95: number }>((resolve, reject) => {
+    new Promise<Measured>((resolve, reject) => {
       // The driver is TypeScript: register tsx's CommonJS hook inside the worker, then load it.
       const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, 'driver.ts'))});`;
       const worker = new Worker(source, { eval: true, workerData: { concurrency: CONNECTIONS, ...job } });
-      worker.once('message', (m) => (m.error ? reject(new Error(m.error)) : resolve(m)));
+      worker.once('message', (m: DriverMessage) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
       worker.once('error', reject);
     });
 

@@ -71,7 +71,7 @@ export async function acceptInvitation(ctx: AppContext, input: InvitationAccept)
         .insert(users)
         .values({ email: inv.email, name: input.name, passwordHash: passwordHash! })
         .returning({ id: users.id });
-      id = created!.id;
+      id = created.id;
     }
     const already = await tx.db
       .select()

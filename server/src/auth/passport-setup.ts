@@ -3,6 +3,7 @@ import type { Request, RequestHandler } from 'express';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { AppContext } from '../context';
+import { asError } from '../http/errors';
 import type { Principal, SessionPrincipal } from '../http/principal';
 import { ABSOLUTE_MS } from '../http/session';
 import { parse } from '../http/validate';
@@ -14,9 +15,12 @@ declare module 'express-session' {
   }
 }
 
+/** Passport with its middleware typed: `initialize`, `session` and `authenticate` answer request handlers. */
+export type AppPassport = passport.Authenticator<RequestHandler, RequestHandler>;
+
 /** One Passport instance per app (tests build several apps in one process). */
-export function createPassport(ctx: AppContext): passport.PassportStatic {
-  const instance = new passport.Passport() as passport.PassportStatic;
+export function createPassport(ctx: AppContext): AppPassport {
+  const instance = new passport.Passport() as AppPassport;
   instance.use(
     'staff-password',
     new LocalStrategy({ usernameField: 'email', passwordField: 'password', session: true }, (email, password, done) => {
@@ -38,7 +42,7 @@ export function createPassport(ctx: AppContext): passport.PassportStatic {
 export function logIn(req: Request, principal: Principal, now: Date): Promise<void> {
   return new Promise((resolve, reject) => {
     req.logIn(principal, (err) => {
-      if (err) return reject(err);
+      if (err) return reject(asError(err));
       req.session.signedInAt = now.getTime();
       resolve();
     });
@@ -46,7 +50,12 @@ export function logIn(req: Request, principal: Principal, now: Date): Promise<vo
 }
 
 export function logOut(req: Request): Promise<void> {
-  return new Promise((resolve, reject) => req.logOut((err) => (err ? reject(err) : resolve())));
+  return new Promise((resolve, reject) => req.logOut((err) => (err ? reject(asError(err)) : resolve())));
+}
+
+/** A fresh, empty session (after signing out, so nothing of the last one carries over). */
+export function regenerateSession(req: Request): Promise<void> {
+  return new Promise((resolve, reject) => req.session.regenerate((err) => (err ? reject(asError(err)) : resolve())));
 }
 
 /** Absolute session timeout: a week after sign-in the session ends however active it has been. */

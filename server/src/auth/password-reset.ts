@@ -42,7 +42,7 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
       .returning({ id: passwordResets.id });
     const url = `${ctx.config.PUBLIC_URL}/reset-password?token=${token}`;
     await enqueueMail(tx, ctx.queue, {
-      purposeKey: `password-reset:${reset!.id}`,
+      purposeKey: `password-reset:${reset.id}`,
       tenantId,
       to: user.email,
       ...passwordResetMail({ name: user.name, url, minutes: RESET_MINUTES }),

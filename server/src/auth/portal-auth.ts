@@ -50,7 +50,7 @@ export async function createPortalLink(
     .insert(portalLinks)
     .values({ tenantId: tx.tenantId, portalUserId, tokenHash: hash, expiresAt: minutesFromNow(now, minutes) })
     .returning({ id: portalLinks.id });
-  return { id: link!.id, token };
+  return { id: link.id, token };
 }
 
 export async function redeemPortalLink(ctx: AppContext, token: string): Promise<ClientPrincipal> {

@@ -3,7 +3,7 @@ import { Request, RequestHandler, Router } from 'express';
 import type { AppContext } from '../context';
 import { csrf } from '../http/csrf';
 import { parse } from '../http/validate';
-import { logIn, logOut } from './passport-setup';
+import { logIn, logOut, regenerateSession } from './passport-setup';
 import { loadClientPrincipal, redeemPortalLink, requestPortalLink } from './portal-auth';
 
 async function portalSession(ctx: AppContext, req: Request, fresh = false): Promise<PortalSession> {
@@ -37,7 +37,7 @@ export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): 
 
   router.post('/auth/signout', async (req, res) => {
     await logOut(req);
-    await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+    await regenerateSession(req);
     res.json(await portalSession(ctx, req, true));
   });
 

@@ -10,15 +10,15 @@ import {
   type StaffSession,
 } from '@layerbook/contracts';
 import { Request, Response, Router } from 'express';
-import type passport from 'passport';
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { csrf } from '../http/csrf';
+import { asError } from '../http/errors';
 import type { Principal } from '../http/principal';
 import { loadStaffPrincipal } from './staff-principal';
 import { parse } from '../http/validate';
 import { acceptInvitation, previewInvitation } from './invitations';
-import { logIn, logOut } from './passport-setup';
+import { logIn, logOut, regenerateSession, type AppPassport } from './passport-setup';
 import { completePasswordReset, requestPasswordReset } from './password-reset';
 import { signUp } from './staff-auth';
 
@@ -38,7 +38,7 @@ async function signInAndAnswer(ctx: AppContext, req: Request, res: Response, pri
   res.status(status).json(await staffSession(ctx, req, true));
 }
 
-export function authRoutes(ctx: AppContext, pass: passport.PassportStatic, signInLimiter: import('express').RequestHandler): Router {
+export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: import('express').RequestHandler): Router {
   const router = Router();
 
   router.get('/session', async (req, res) => {
@@ -54,7 +54,7 @@ export function authRoutes(ctx: AppContext, pass: passport.PassportStatic, signI
     parse(signInRequest, req.body);
     const principal = await new Promise<Principal>((resolve, reject) => {
       pass.authenticate('staff-password', { session: false }, (err: unknown, user: Principal | false) => {
-        if (err) return reject(err);
+        if (err) return reject(asError(err));
         if (!user) return reject(new Error('sign-in produced no user'));
         resolve(user);
       })(req, res, reject);
@@ -64,7 +64,7 @@ export function authRoutes(ctx: AppContext, pass: passport.PassportStatic, signI
 
   router.post('/signout', async (req, res) => {
     await logOut(req);
-    await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+    await regenerateSession(req);
     res.json(await staffSession(ctx, req, true));
   });
 

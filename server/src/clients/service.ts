@@ -55,8 +55,8 @@ export async function createClient(tx: TenantTx, actor: Actor, input: ClientCrea
     .values({ ...input, tenantId: tx.tenantId })
     .returning();
   const actorUserId = actor.kind === 'staff' ? actor.userId : null;
-  await recordAudit(tx, { actorUserId, actorKind: actor.kind, action: 'client.created', entity: 'client', entityId: row!.id });
-  return toSummary(row!);
+  await recordAudit(tx, { actorUserId, actorKind: actor.kind, action: 'client.created', entity: 'client', entityId: row.id });
+  return toSummary(row);
 }
 
 export async function updateClient(tx: TenantTx, id: string, patch: ClientUpdate, now: Date): Promise<ClientSummary> {
@@ -169,7 +169,7 @@ export async function addContact(tx: TenantTx, clientId: string, input: ContactC
     .insert(clientContacts)
     .values({ ...input, clientId, tenantId: tx.tenantId })
     .returning();
-  return toContact(row!);
+  return toContact(row);
 }
 
 export async function addSite(tx: TenantTx, clientId: string, input: SiteCreate): Promise<SiteView> {
@@ -178,7 +178,7 @@ export async function addSite(tx: TenantTx, clientId: string, input: SiteCreate)
     .insert(sites)
     .values({ ...input, clientId, tenantId: tx.tenantId })
     .returning();
-  return toSite(row!);
+  return toSite(row);
 }
 
 export async function updateSite(tx: TenantTx, siteId: string, patch: SiteUpdate): Promise<SiteView> {

@@ -73,7 +73,7 @@ export async function insertImageRow(tx: TenantTx, stored: StoredImage, purpose:
       uploadedBy,
     })
     .returning();
-  return rows[0]!;
+  return rows[0];
 }
 
 export async function findFile(tx: TenantTx, fileId: string): Promise<FileRow> {

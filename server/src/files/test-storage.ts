@@ -22,7 +22,7 @@ export async function storedFor(ctx: AppContext, tenantId: string): Promise<{ ke
             .select({ n: sql<number>`count(*)::int` })
             .from(files)
             .where(eq(files.tenantId, tenantId))
-        )[0]!.n,
+        )[0].n,
     );
     return { keys: (listed.Contents ?? []).map((o) => o.Key ?? '').sort(), rows };
   } finally {

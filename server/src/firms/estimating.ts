@@ -4,7 +4,7 @@ import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 
 export async function getEstimatingSettings(tx: TenantTx): Promise<EstimatingSettingsView> {
-  const firm = (await tx.db.select({ units: firms.units, currency: firms.currency }).from(firms).where(eq(firms.id, tx.tenantId)))[0]!;
+  const firm = (await tx.db.select({ units: firms.units, currency: firms.currency }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
   const row = (await tx.db.select().from(firmEstimatingSettings).where(eq(firmEstimatingSettings.tenantId, tx.tenantId)))[0];
   return {
     // The column holds what estimatingSettings parsed when it was saved.

@@ -49,5 +49,5 @@ export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettings
       data: { changed },
     });
   }
-  return toSettings(updated!);
+  return toSettings(updated);
 }

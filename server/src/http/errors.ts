@@ -36,5 +36,10 @@ export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
   res
     .status(error.status)
     .type(PROBLEM_CONTENT_TYPE)
-    .send(JSON.stringify(error.toProblem(String(req.id ?? ''))));
+    .send(JSON.stringify(error.toProblem(typeof req.id === 'string' ? req.id : '')));
 };
+
+/** A callback's error as an Error (Node-style callbacks type it `any`), for rejecting a promise. */
+export function asError(value: unknown): Error {
+  return value instanceof Error ? value : new Error(String(value));
+}

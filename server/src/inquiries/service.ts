@@ -41,8 +41,8 @@ export async function createInquiry(tx: TenantTx, actor: Actor, input: InquiryCr
     .insert(inquiries)
     .values({ ...input, tenantId: tx.tenantId, consentToContact: input.consentToContact ?? false })
     .returning({ id: inquiries.id });
-  await logActivity(tx, actor, row!.id, 'created', '', { source: input.source });
-  return row!.id;
+  await logActivity(tx, actor, row.id, 'created', '', { source: input.source });
+  return row.id;
 }
 
 /** The inquiry's row, locked for the change about to be made. */

@@ -49,7 +49,7 @@ export async function createJobFromAcceptance(tx: TenantTx, work: AcceptedWork):
       option.schedule.finishDate,
     ],
   );
-  const jobId = rows[0]!.id;
+  const jobId = rows[0].id;
   for (const [position, p] of option.payments.entries()) {
     await tx.client.query(
       `insert into payment_schedule_lines (tenant_id, job_id, position, label, role, trigger, percent, amount, expected_on) values ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,

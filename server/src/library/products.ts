@@ -55,10 +55,10 @@ export async function createProduct(tx: TenantTx, actor: Actor, input: ProductIn
     ...auditedBy(actor),
     action: 'product.created',
     entity: 'product',
-    entityId: row!.id,
+    entityId: row.id,
     data: { name: input.name },
   });
-  return toProductView(row!, canSeeMoney(actor));
+  return toProductView(row, canSeeMoney(actor));
 }
 
 export async function updateProduct(tx: TenantTx, actor: Actor, id: string, patch: ProductUpdate, now: Date): Promise<ProductView> {
@@ -88,7 +88,7 @@ export async function updateProduct(tx: TenantTx, actor: Actor, id: string, patc
     entityId: id,
     data: { changed: Object.keys(patch) },
   });
-  return toProductView(row!, canSeeMoney(actor));
+  return toProductView(row, canSeeMoney(actor));
 }
 
 /** Names of the firm's active systems whose layers use the product. A firm has few systems, so they are read whole. */
@@ -140,5 +140,5 @@ export async function setProductArchived(tx: TenantTx, actor: Actor, id: string,
     entity: 'product',
     entityId: id,
   });
-  return toProductView(row!, canSeeMoney(actor));
+  return toProductView(row, canSeeMoney(actor));
 }

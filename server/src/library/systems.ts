@@ -71,10 +71,10 @@ export async function createSystem(tx: TenantTx, actor: Actor, input: FinishSyst
     ...auditedBy(actor),
     action: 'finish_system.created',
     entity: 'finish_system',
-    entityId: row!.id,
+    entityId: row.id,
     data: { name: input.name, layers: input.layers.length },
   });
-  return view(tx, row!);
+  return view(tx, row);
 }
 
 export async function updateSystem(
@@ -100,7 +100,7 @@ export async function updateSystem(
     entityId: id,
     data: { changed: Object.keys(patch) },
   });
-  return view(tx, row!);
+  return view(tx, row);
 }
 
 /** Field problems from a stored system (no form to show them beside) become one 409 sentence. */
@@ -130,7 +130,7 @@ export async function setSystemArchived(tx: TenantTx, actor: Actor, id: string, 
     entity: 'finish_system',
     entityId: id,
   });
-  return view(tx, row!);
+  return view(tx, row);
 }
 
 /** A starting point for a variant ("same, with a darker glaze"): a new active system with the same layers. */
@@ -146,8 +146,8 @@ export async function duplicateSystem(tx: TenantTx, actor: Actor, id: string): P
     ...auditedBy(actor),
     action: 'finish_system.created',
     entity: 'finish_system',
-    entityId: row!.id,
+    entityId: row.id,
     data: { name, copiedFrom: id },
   });
-  return view(tx, row!);
+  return view(tx, row);
 }

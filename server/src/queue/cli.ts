@@ -1,5 +1,5 @@
-import pino from 'pino';
 import { loadConfig } from '../config';
+import { createLogger } from '../http/logger';
 import { startQueue } from './job-queue';
 import { QUEUES } from './queues';
 
@@ -9,7 +9,7 @@ import { QUEUES } from './queues';
  */
 async function run(command: string | undefined): Promise<void> {
   const config = loadConfig();
-  const queue = await startQueue(config, pino({ level: 'warn' }));
+  const queue = await startQueue(config, createLogger({ NODE_ENV: config.NODE_ENV, LOG_LEVEL: 'warn' }));
   try {
     if (command === 'follow-ups') {
       await queue.boss.send(QUEUES.followUpSweep, { force: true });

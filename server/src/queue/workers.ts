@@ -29,13 +29,11 @@ async function workEach<T extends object>(
   }
 }
 
-/** Registers every job handler. Runs in the web process by default, or alone in `worker` mode. */
-export async function startWorkers(
-  config: Config,
-  queue: StartedQueue,
-  logger: Logger,
-  now: () => Date = () => new Date(),
-): Promise<Workers> {
+/**
+ * Registers every job handler. Runs in the web process by default, or alone in `worker` mode.
+ * `now` is the caller's clock (the app context's), so tests can move time for the jobs too.
+ */
+export async function startWorkers(config: Config, queue: StartedQueue, logger: Logger, now: () => Date): Promise<Workers> {
   const pool = new Pool({ connectionString: config.DATABASE_JOBS_URL, max: 4, application_name: 'layerbook-worker' });
   const transport = nodemailer.createTransport({ host: config.SMTP_HOST, port: config.SMTP_PORT, secure: false, ignoreTLS: true });
   const { boss } = queue;

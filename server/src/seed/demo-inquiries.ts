@@ -117,21 +117,21 @@ export async function seedDemoInquiries(tx: TenantTx, today: string, ownerUserId
     if (p.stage === 'visit_booked' || p.stage === 'samples' || p.stage === 'proposal_sent' || p.stage === 'won') {
       const [client] = await tx.db
         .insert(clients)
-        .values({ tenantId: tx.tenantId, kind: 'homeowner', name: p.name, email: `${p.name.split(' ')[0]!.toLowerCase()}@example.test` })
+        .values({ tenantId: tx.tenantId, kind: 'homeowner', name: p.name, email: `${p.name.split(' ')[0].toLowerCase()}@example.test` })
         .returning({ id: clients.id });
-      clientId = client!.id;
+      clientId = client.id;
       const [site] = await tx.db
         .insert(sites)
         .values({ tenantId: tx.tenantId, clientId, addressLine1: p.address, yearBuilt: p.year })
         .returning({ id: sites.id });
-      siteId = site!.id;
+      siteId = site.id;
     }
     const [row] = await tx.db
       .insert(inquiries)
       .values({
         tenantId: tx.tenantId,
         contactName: p.name,
-        email: `${p.name.split(' ')[0]!.toLowerCase()}@example.test`,
+        email: `${p.name.split(' ')[0].toLowerCase()}@example.test`,
         siteAddress: p.address,
         yearBuilt: p.year,
         rooms: p.rooms,
@@ -150,6 +150,6 @@ export async function seedDemoInquiries(tx: TenantTx, today: string, ownerUserId
       .returning({ id: inquiries.id });
     await tx.db
       .insert(inquiryActivities)
-      .values({ tenantId: tx.tenantId, inquiryId: row!.id, kind: 'created', data: { source: p.source } });
+      .values({ tenantId: tx.tenantId, inquiryId: row.id, kind: 'created', data: { source: p.source } });
   }
 }

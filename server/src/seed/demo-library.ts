@@ -345,7 +345,7 @@ export async function seedDemoLibrary(tx: TenantTx): Promise<DemoLibrary> {
       .insert(products)
       .values({ ...parse(productInput, input), tenantId: tx.tenantId })
       .returning({ id: products.id });
-    productIds[key] = row!.id;
+    productIds[key] = row.id;
   }
   const addSystem = async (name: string, description: string, layers: FinishLayerInput[]) => {
     const system = parse(finishSystemInput, { name, description, layers });
@@ -354,7 +354,7 @@ export async function seedDemoLibrary(tx: TenantTx): Promise<DemoLibrary> {
       .insert(finishSystems)
       .values({ ...system, tenantId: tx.tenantId })
       .returning({ id: finishSystems.id });
-    return row!.id;
+    return row.id;
   };
   return {
     productIds,

@@ -54,7 +54,7 @@ export async function seedDemoTakeoff(tx: TenantTx, siteId: string): Promise<voi
       measureSurface(surface.shape);
       await tx.db.insert(surfaces).values({
         tenantId: tx.tenantId,
-        roomId: row!.id,
+        roomId: row.id,
         name: surface.name,
         position,
         shape: surface.shape,

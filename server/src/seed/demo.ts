@@ -42,8 +42,8 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
     const userIds: string[] = [];
     for (const person of DEMO.people) {
       const [user] = await tx.db.insert(users).values({ email: person.email, name: person.name, passwordHash }).returning({ id: users.id });
-      await tx.db.insert(memberships).values({ tenantId: firmId, userId: user!.id, role: person.role });
-      userIds.push(user!.id);
+      await tx.db.insert(memberships).values({ tenantId: firmId, userId: user.id, role: person.role });
+      userIds.push(user.id);
     }
     const [client] = await tx.db
       .insert(clients)
@@ -53,7 +53,7 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
       .insert(sites)
       .values({
         tenantId: firmId,
-        clientId: client!.id,
+        clientId: client.id,
         label: 'Home',
         addressLine1: '24 Thistledown Lane',
         city: 'Marrowby',
@@ -63,10 +63,10 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
         accessNotes: 'Stair hall ceiling 17 ft; round sitting room with a turret ceiling',
       })
       .returning({ id: sites.id });
-    await tx.db.insert(portalUsers).values({ tenantId: firmId, clientId: client!.id, email: DEMO.client.email, name: DEMO.client.name });
-    await seedDemoInquiries(tx, localDate(DEMO.firm.timeZone, now), userIds[0]!);
+    await tx.db.insert(portalUsers).values({ tenantId: firmId, clientId: client.id, email: DEMO.client.email, name: DEMO.client.name });
+    await seedDemoInquiries(tx, localDate(DEMO.firm.timeZone, now), userIds[0]);
     await seedDemoLibrary(tx);
-    await seedDemoTakeoff(tx, site!.id);
+    await seedDemoTakeoff(tx, site.id);
     await tx.db.insert(auditLog).values({ tenantId: firmId, actorKind: 'system', action: 'demo.seeded', entity: 'firm', entityId: firmId });
   });
   return 'created';

@@ -22,7 +22,7 @@ export const ROOM_PHOTOS: PhotoAlbum = {
         .insert(roomPhotos)
         .values({ tenantId: tx.tenantId, roomId: row.ownerId, fileId: row.fileId, caption: row.caption })
         .returning({ id: roomPhotos.id, createdAt: roomPhotos.createdAt })
-    )[0]!,
+    )[0],
   purpose: 'room_photo',
   audit: { entity: 'room_photo', area: 'takeoff', ownerKey: 'roomId' },
 };

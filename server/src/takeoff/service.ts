@@ -145,10 +145,10 @@ export async function addRoom(tx: TenantTx, actor: Actor, siteId: string, input:
     ...auditedBy(actor),
     action: 'takeoff.room_created',
     entity: 'room',
-    entityId: row!.id,
-    data: { siteId, name: row!.name },
+    entityId: row.id,
+    data: { siteId, name: row.name },
   });
-  return toRoomView(row!, [], await firmUnit(tx));
+  return toRoomView(row, [], await firmUnit(tx));
 }
 
 export async function updateRoom(tx: TenantTx, roomId: string, patch: RoomUpdate, now: Date): Promise<RoomView> {
@@ -244,10 +244,10 @@ export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, inp
     ...auditedBy(actor),
     action: 'takeoff.surface_created',
     entity: 'surface',
-    entityId: row!.id,
+    entityId: row.id,
     data: { roomId, kind: input.shape.kind },
   });
-  return toSurfaceView(row!);
+  return toSurfaceView(row);
 }
 
 /**
@@ -273,7 +273,7 @@ export async function updateSurface(tx: TenantTx, surfaceId: string, patch: Surf
     })
     .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)))
     .returning();
-  return toSurfaceView(row!);
+  return toSurfaceView(row);
 }
 
 export async function deleteSurface(tx: TenantTx, actor: Actor, surfaceId: string): Promise<void> {
@@ -312,10 +312,10 @@ export async function duplicateSurface(tx: TenantTx, actor: Actor, surfaceId: st
     ...auditedBy(actor),
     action: 'takeoff.surface_created',
     entity: 'surface',
-    entityId: row!.id,
+    entityId: row.id,
     data: { roomId: original.roomId, copyOf: surfaceId },
   });
-  return toSurfaceView(row!);
+  return toSurfaceView(row);
 }
 
 /** "North wall" → "North wall (copy)"; names stay within the 120-character limit. */

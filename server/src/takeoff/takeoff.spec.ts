@@ -127,9 +127,9 @@ describe('site takeoff', () => {
     ['a house of unknown age', null, [40], null],
   ])('answers the lead-safe reminder with the takeoff: %s', async (_what, yearBuilt, disturbed, caution) => {
     const o = await signUpFirm(t.app);
-    const siteId = await makeSite(o, yearBuilt as number | null);
+    const siteId = await makeSite(o, yearBuilt);
     const roomId = await makeRoom(o, siteId, 'Parlour');
-    for (const [i, area] of (disturbed as number[]).entries()) {
+    for (const [i, area] of (disturbed).entries()) {
       expect(
         (
           await addSurface(o, roomId, {
@@ -142,7 +142,7 @@ describe('site takeoff', () => {
     }
     const view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
     expect(view.leadCaution?.id ?? null).toBe(caution);
-    expect(view.rooms[0].totals.disturbedPaintedArea).toBe((disturbed as number[]).reduce((sum, x) => sum + x, 0));
+    expect(view.rooms[0].totals.disturbedPaintedArea).toBe((disturbed).reduce((sum, x) => sum + x, 0));
   });
 
   it('refuses impossible geometry naming the field, and saves nothing', async () => {
@@ -313,7 +313,7 @@ describe('site takeoff', () => {
           string,
           (p: string) => { set: (k: string, v: string) => { send: (b: object) => Promise<{ status: number }> } }
         >
-      )[method]!(path)
+      )[method](path)
         .set('x-csrf-token', crew.csrf())
         .send(body);
       expect({ method, path, status: res.status }).toEqual({ method, path, status: 403 });
@@ -346,7 +346,7 @@ describe('site takeoff', () => {
           string,
           (p: string) => { set: (k: string, v: string) => { send: (x: object) => Promise<{ status: number }> } }
         >
-      )[method]!(path)
+      )[method](path)
         .set('x-csrf-token', b.csrf())
         .send(body);
       expect({ method, path, status: res.status }).toEqual({ method, path, status: 404 });

@@ -97,7 +97,7 @@ export async function invite(ctx: AppContext, tx: TenantTx, actor: StaffPrincipa
     .returning();
   const firm = (await tx.db.select({ name: firms.name }).from(firms))[0];
   await enqueueMail(tx, ctx.queue, {
-    purposeKey: `invitation:${inv!.id}`,
+    purposeKey: `invitation:${inv.id}`,
     tenantId: tx.tenantId,
     to: input.email,
     ...invitationMail({
@@ -113,10 +113,10 @@ export async function invite(ctx: AppContext, tx: TenantTx, actor: StaffPrincipa
     actorKind: 'staff',
     action: 'invitation.sent',
     entity: 'invitation',
-    entityId: inv!.id,
+    entityId: inv.id,
     data: { email: input.email, role: input.role },
   });
-  return toInvitation(inv!, now);
+  return toInvitation(inv, now);
 }
 
 export async function revokeInvitation(ctx: AppContext, tx: TenantTx, actor: StaffPrincipal, id: string): Promise<void> {

@@ -9,7 +9,7 @@ import { toEngineSettings } from './settings';
  * Surfaces without a finish in this option are left out; rooms left empty are dropped.
  */
 export function assembleEstimateInput(context: EstimateContext, inputs: EstimateInputs, variantId: string): EstimateInput {
-  const variant = inputs.variants.find((v) => v.id === variantId) ?? inputs.variants[0]!;
+  const variant = inputs.variants.find((v) => v.id === variantId) ?? inputs.variants[0];
   const finishBySurface = new Map(variant.surfaces.map((s) => [s.surfaceId, s.finishSystemId]));
   const rooms = context.rooms
     .map((room) => ({

@@ -15,7 +15,7 @@ export type { EstimatingSettings } from './estimating-types';
 const percent = (label: string, range: { min: number; max: number }) =>
   z
     .number({ error: `Enter ${label} as a number.` })
-    .min(range.min, { error: `${label[0]!.toUpperCase()}${label.slice(1)} cannot be negative.` })
+    .min(range.min, { error: `${label[0].toUpperCase()}${label.slice(1)} cannot be negative.` })
     .max(range.max, { error: `Use at most ${range.max} %.` });
 
 const hours = (range: { min: number; max: number }) =>
@@ -33,7 +33,7 @@ const weekday = z
   .number()
   .int()
   .min(ISO_WEEKDAYS[0])
-  .max(ISO_WEEKDAYS[ISO_WEEKDAYS.length - 1]!);
+  .max(ISO_WEEKDAYS[ISO_WEEKDAYS.length - 1]);
 
 /**
  * How a firm prices and schedules work. Percentages are whole percents here (20 = 20 %); the

@@ -73,7 +73,12 @@ type MissingLength = Exclude<LengthUnit, (typeof LENGTH_UNITS)[number]>;
 type MissingMethod = Exclude<ApplicationMethod, (typeof APPLICATION_METHODS)[number]>;
 type MissingCoverage = Exclude<Coverage['kind'], CoverageKind>;
 type MissingMultiplier = Exclude<keyof LabourMultipliers, MultiplierName>;
-export const ALL_LIBRARY_UNITS_LISTED: [MissingQuantity | MissingLength | MissingMethod | MissingCoverage | MissingMultiplier] extends [
+// One tuple slot per check: in a union the `never`s would merge and hide which list fell behind.
+export const ALL_LIBRARY_UNITS_LISTED: [MissingQuantity, MissingLength, MissingMethod, MissingCoverage, MissingMultiplier] extends [
+  never,
+  never,
+  never,
+  never,
   never,
 ]
   ? true

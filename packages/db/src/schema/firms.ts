@@ -56,5 +56,5 @@ export const firmEstimatingSettings = pgTable(
     settings: jsonb('settings').notNull(),
     updatedAt: updatedAt(),
   },
-  (t) => [tenantPolicy('firm_estimating_settings')],
+  () => [tenantPolicy('firm_estimating_settings')],
 );

@@ -25,6 +25,6 @@ export interface ScheduleTotals {
 export function scheduleTotals(lines: readonly ScheduledAmount[], contractSum: MoneyInput): ScheduleTotals {
   const amount = sumMoney(lines.map((l, i) => toMoney(l.amount, `paymentSchedule[${i}].amount`)));
   const percents = lines.map((l, i) => (l.percent === null ? null : toMoney(l.percent, `paymentSchedule[${i}].percent`, 'percentage')));
-  const percent = percents.length > 0 && percents.every((p) => p !== null) ? sumMoney(percents as Decimal[]) : null;
+  const percent = percents.length > 0 && percents.every((p) => p !== null) ? sumMoney(percents) : null;
   return { amount, percent, isContractSum: amount.equals(toMoney(contractSum, 'contractSum', 'contract sum')) };
 }

@@ -44,8 +44,13 @@ export function requireFraction(value: number, field: string, label = 'share'): 
   return value;
 }
 
+/** `Array.isArray` without its narrowing, which turns a readonly array's type into `any[]`. */
+export function isArray(value: unknown): boolean {
+  return Array.isArray(value);
+}
+
 export function requireNonEmpty<T>(list: readonly T[], field: string, label = 'list'): readonly T[] {
-  if (!Array.isArray(list) || list.length === 0) {
+  if (!isArray(list) || list.length === 0) {
     throw new DomainInputError(field, `The ${label} cannot be empty.`);
   }
   return list;

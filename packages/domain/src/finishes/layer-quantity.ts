@@ -150,7 +150,7 @@ export function applyLayerQuantity(p: PreparedLayerQuantity, quantity: number, m
     mix += amount;
   }
   const concentrate = mix * p.concentrateShare;
-  const products: LayerQuantity['products'] = new Array(p.products.length);
+  const products = new Array<LayerQuantity['products'][number]>(p.products.length);
   for (let i = 0; i < p.products.length; i++) {
     const x = p.products[i];
     products[i] = { productId: x.productId, amount: x.share === null ? concentrate : concentrate * x.share };

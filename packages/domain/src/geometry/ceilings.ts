@@ -1,5 +1,5 @@
 import { DomainInputError } from '../errors/domain-input-error';
-import { requireFiniteNumber, requirePositive } from '../errors/input-checks';
+import { isArray, requireFiniteNumber, requirePositive } from '../errors/input-checks';
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
@@ -22,7 +22,7 @@ export function measureCeilingCircle(s: { radius: number; elevation?: number }, 
 
 /** Shoelace formula over the corners in order (either direction); the outline must not cross itself. */
 export function shoelaceArea(corners: ReadonlyArray<readonly [number, number]>, field: string): number {
-  if (!Array.isArray(corners) || corners.length < 3) {
+  if (!isArray(corners) || corners.length < 3) {
     throw new DomainInputError(`${field}.corners`, 'A polygon needs at least three corners.');
   }
   let twice = 0;

@@ -97,7 +97,7 @@ export function applyLayerHours(
   const counted = measure === 'area' ? scaleArea(quantity, p.scale) : scaleLength(quantity, p.scale);
   const baseHours = (counted * p.share * p.coats) / p.rate;
   // A fresh chain per surface (callers may keep or change one surface's result), sized up front.
-  const chain: MultiplierStep[] = new Array(steps.length);
+  const chain = new Array<MultiplierStep>(steps.length);
   let hours = baseHours;
   for (let i = 0; i < steps.length; i++) {
     chain[i] = { name: steps[i].name, factor: steps[i].factor };

@@ -4,7 +4,7 @@ import type { ScheduleStep, ScheduleWait } from './schedule-job';
 // A day-by-day plan only regroups what the scheduler decided (DOMAIN.md §2.7; common practice, no source).
 const step = (taskId: string, date: string, startHour: number, endHour: number): ScheduleStep => ({
   taskId,
-  chainId: taskId.includes(':') ? taskId.split(':')[0]! : null,
+  chainId: taskId.includes(':') ? taskId.split(':')[0] : null,
   layerId: null,
   label: `Task ${taskId}`,
   date,
@@ -15,7 +15,7 @@ const step = (taskId: string, date: string, startHour: number, endHour: number):
 });
 const wait = (taskId: string, date: string, untilDate: string, untilHour: number): ScheduleWait => ({
   taskId,
-  chainId: taskId.split(':')[0]!,
+  chainId: taskId.split(':')[0],
   layerId: 'l',
   label: `Drying ${taskId}`,
   date,
@@ -51,7 +51,7 @@ describe('planDays', () => {
       [1, 7, 14],
       [2, 7, 14],
     ]);
-    expect(plan[1]!.waits[1]).toEqual({ key: 'walls:1', label: 'Drying walls:1', untilDate: '2025-06-07', untilHour: 4.5 });
+    expect(plan[1].waits[1]).toEqual({ key: 'walls:1', label: 'Drying walls:1', untilDate: '2025-06-07', untilHour: 4.5 });
   });
 
   it('shows no waits for a result saved before waits were part of the schedule', () => {

@@ -1,5 +1,4 @@
 import { type IsoDate, fromDayNumber, toDayNumber } from '../calendar/local-date';
-import { DomainInputError } from '../errors/domain-input-error';
 import { isNonNegativeNumber, requireInteger, requireNonNegative } from '../errors/input-checks';
 import { ReadySet } from './ready-set';
 import { ScheduleTally } from './schedule-tally';

@@ -14,8 +14,8 @@ import { ClientForm } from './client-form';
 import { ContactForm } from './contact-form';
 import { SiteForm } from './site-form';
 
-/** Which site form is open: a new one, one site's, or none (one at a time keeps labels unique). */
-type SiteEditing = 'new' | string | null;
+/** Which site form is open: `'new'`, a site's id, or none (one at a time keeps labels unique). */
+type SiteEditing = string | null;
 
 @Component({
   selector: 'lb-client-detail',

@@ -172,7 +172,7 @@ export function readInputs(form: EstimateForm, context: EstimateContext): Estima
       label: o.label.trim(),
       surfaces: surfaceOrder
         .filter((id) => (o.finishes[id] ?? '') !== '')
-        .map((id) => ({ surfaceId: id, finishSystemId: o.finishes[id]! })),
+        .map((id) => ({ surfaceId: id, finishSystemId: o.finishes[id] })),
     })),
     addOns: v.addOns.map((a) => ({
       id: a.id,

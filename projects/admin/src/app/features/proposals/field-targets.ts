@@ -60,7 +60,7 @@ function controlPath(field: string, context: EstimateContext, sent: EstimateInpu
   const m = /^variants\.(\d+)\.(.*)$/.exec(field);
   if (!m) return { kind: 'control', path: field };
   const i = Number(m[1]);
-  const rest = m[2]!;
+  const rest = m[2];
   const variant = sent.variants[i];
   const listed = /^surfaces\.(\d+)\.(finishSystemId|surfaceId)$/.exec(rest);
   if (listed && variant) {

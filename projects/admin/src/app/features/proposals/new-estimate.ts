@@ -121,7 +121,7 @@ export class NewEstimate {
     try {
       const detail = await this.api.client(client.id);
       this.sites.set(detail.sites);
-      if (detail.sites.length === 1) this.form.controls.siteId.setValue(detail.sites[0]!.id);
+      if (detail.sites.length === 1) this.form.controls.siteId.setValue(detail.sites[0].id);
     } catch (error) {
       this.formMessage.set(toProblem(error).title);
     }

@@ -52,7 +52,7 @@ function exclusionLines(control: AbstractControl<string>): ValidationErrors | nu
 }
 
 /** Deposit plus progress payment may not pass 100 %: marked on the progress field, as the server does. */
-function withinWhole(group: AbstractControl): ValidationErrors | null {
+function withinWhole(group: AbstractControl<{ depositPercent: number | null; progressPercent: number | null }>): ValidationErrors | null {
   const progress = group.get('progressPercent');
   const sum = (group.get('depositPercent')?.value ?? 0) + (progress?.value ?? 0);
   if (!progress) return null;

@@ -69,7 +69,7 @@ export class ProposalVersions {
     loader: async ({ params }) => {
       const { items } = await this.api.list(params);
       const views = await Promise.all(items.filter((v) => READ_IN_FULL.has(v.status)).map((v) => this.api.get(v.id)));
-      return { items, details: new Map(views.map((v) => [v.id, v])) as ReadonlyMap<string, ProposalVersionView> };
+      return { items, details: new Map(views.map((v) => [v.id, v])) };
     },
   });
 

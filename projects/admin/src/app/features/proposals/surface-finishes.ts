@@ -119,7 +119,7 @@ export class SurfaceFinishes {
       .subscribe((finishes) => {
         for (const room of this.rooms()) {
           const values = new Set(room.surfaces.map((s) => finishes[s.id] ?? ''));
-          this.roomControl(room.id).setValue(values.size === 1 ? [...values][0]! : null, { emitEvent: false });
+          this.roomControl(room.id).setValue(values.size === 1 ? [...values][0] : null, { emitEvent: false });
         }
       });
   }

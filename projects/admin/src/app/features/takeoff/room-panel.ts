@@ -14,8 +14,8 @@ import { RoomPhotos } from './room-photos';
 import { SurfaceForm } from './surface-form';
 import { TakeoffApi } from './takeoff-api';
 
-/** Which form is open in the room: renaming it, a new surface, one surface's, or none. */
-type Editing = 'room' | 'new' | string | null;
+/** Which form is open in the room: `'room'` (renaming it), `'new'` (a surface), a surface's id, or none. */
+type Editing = string | null;
 
 /** One room as an expandable panel: its surfaces with their numbers and sketches, and the edits. */
 @Component({

@@ -71,12 +71,6 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
     case 'roundWalls':
     case 'curvedWall': {
       // Walls unrolled flat: the run along the bottom, the height up the side, openings as boxes.
-      const run =
-        shape.kind === 'walls'
-          ? shape.perimeter
-          : shape.kind === 'roundWalls'
-            ? 2 * Math.PI * shape.radius
-            : (shape.radius * shape.angleDegrees * Math.PI) / 180;
       const box: Pt[] = [
         [PAD, 30],
         [SKETCH_WIDTH - PAD, 30],

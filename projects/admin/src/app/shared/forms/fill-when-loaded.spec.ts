@@ -9,7 +9,9 @@ describe('fillWhenLoaded and loadMessage', () => {
     const filled: string[] = [];
     const injector = TestBed.inject(Injector);
     const source = signal('first');
-    const loaded = runInInjectionContext(injector, () => resource({ params: () => source(), loader: async ({ params }) => params }));
+    const loaded = runInInjectionContext(injector, () =>
+      resource({ params: () => source(), loader: ({ params }) => Promise.resolve(params) }),
+    );
     runInInjectionContext(injector, () => fillWhenLoaded(loaded, (value) => filled.push(value)));
     const message = runInInjectionContext(injector, () => loadMessage(loaded));
     const app = TestBed.inject(ApplicationRef);
