@@ -148,8 +148,6 @@ export async function seedDemoInquiries(tx: TenantTx, today: string, ownerUserId
         siteId,
       })
       .returning({ id: inquiries.id });
-    await tx.db
-      .insert(inquiryActivities)
-      .values({ tenantId: tx.tenantId, inquiryId: row.id, kind: 'created', data: { source: p.source } });
+    await tx.db.insert(inquiryActivities).values({ tenantId: tx.tenantId, inquiryId: row.id, kind: 'created', data: { source: p.source } });
   }
 }

@@ -10,6 +10,11 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 type Owner = Awaited<ReturnType<typeof signUpFirm>>;
+/** A supertest agent called by the method name a table of routes holds. */
+type AgentByMethod = Record<
+  string,
+  (path: string) => { set: (k: string, v: string) => { send: (body: object) => Promise<{ status: number }> } }
+>;
 
 async function makeSite(o: Owner, yearBuilt: number | null = 1924): Promise<string> {
   const client = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: 'Perpetua Vane' });
@@ -129,7 +134,7 @@ describe('site takeoff', () => {
     const o = await signUpFirm(t.app);
     const siteId = await makeSite(o, yearBuilt);
     const roomId = await makeRoom(o, siteId, 'Parlour');
-    for (const [i, area] of (disturbed).entries()) {
+    for (const [i, area] of disturbed.entries()) {
       expect(
         (
           await addSurface(o, roomId, {
@@ -142,7 +147,7 @@ describe('site takeoff', () => {
     }
     const view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
     expect(view.leadCaution?.id ?? null).toBe(caution);
-    expect(view.rooms[0].totals.disturbedPaintedArea).toBe((disturbed).reduce((sum, x) => sum + x, 0));
+    expect(view.rooms[0].totals.disturbedPaintedArea).toBe(disturbed.reduce((sum, x) => sum + x, 0));
   });
 
   it('refuses impossible geometry naming the field, and saves nothing', async () => {
@@ -308,14 +313,7 @@ describe('site takeoff', () => {
       ['post', `/api/takeoff/surfaces/${surface.body.id}/move`, { to: 'x' }],
     ];
     for (const [method, path, body] of writes) {
-      const res = await (
-        crew.agent as unknown as Record<
-          string,
-          (p: string) => { set: (k: string, v: string) => { send: (b: object) => Promise<{ status: number }> } }
-        >
-      )[method](path)
-        .set('x-csrf-token', crew.csrf())
-        .send(body);
+      const res = await (crew.agent as unknown as AgentByMethod)[method](path).set('x-csrf-token', crew.csrf()).send(body);
       expect({ method, path, status: res.status }).toEqual({ method, path, status: 403 });
     }
     expect((await o.agent.get(`/api/takeoff/sites/${siteId}`)).body.rooms[0].surfaces).toHaveLength(1);
@@ -341,14 +339,7 @@ describe('site takeoff', () => {
       ['post', `/api/takeoff/surfaces/${surfaceId}/move`, { to: 0 }],
     ];
     for (const [method, path, body] of calls) {
-      const res = await (
-        b.agent as unknown as Record<
-          string,
-          (p: string) => { set: (k: string, v: string) => { send: (x: object) => Promise<{ status: number }> } }
-        >
-      )[method](path)
-        .set('x-csrf-token', b.csrf())
-        .send(body);
+      const res = await (b.agent as unknown as AgentByMethod)[method](path).set('x-csrf-token', b.csrf()).send(body);
       expect({ method, path, status: res.status }).toEqual({ method, path, status: 404 });
     }
     const still = (await a.agent.get(`/api/takeoff/sites/${siteId}`)).body;

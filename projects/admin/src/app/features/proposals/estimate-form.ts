@@ -170,9 +170,7 @@ export function readInputs(form: EstimateForm, context: EstimateContext): Estima
     variants: v.variants.map((o) => ({
       id: o.id,
       label: o.label.trim(),
-      surfaces: surfaceOrder
-        .filter((id) => (o.finishes[id] ?? '') !== '')
-        .map((id) => ({ surfaceId: id, finishSystemId: o.finishes[id] })),
+      surfaces: surfaceOrder.filter((id) => (o.finishes[id] ?? '') !== '').map((id) => ({ surfaceId: id, finishSystemId: o.finishes[id] })),
     })),
     addOns: v.addOns.map((a) => ({
       id: a.id,
