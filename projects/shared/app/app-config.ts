@@ -21,6 +21,9 @@ export function appConfigFor(settings: ApiSettings, routes: Routes): Application
       provideClientHydration(
         withEventReplay(),
         withHttpTransferCacheOptions({
+          // While rendering, API calls carry the visitor's cookie; their answers go back only inside
+          // that visitor's own no-store page, so the browser may reuse them (api-interceptor.ts).
+          includeRequestsWithAuthHeaders: true,
           // Session answers carry a CSRF token bound to the browser's own cookie: never replay them.
           filter: (req) => !isSessionCall(req.url, settings),
         }),

@@ -12,7 +12,7 @@ const refusal = (body: unknown, status = 400) => new HttpErrorResponse({ status,
 describe('Submission', () => {
   it('sends a valid form and answers what the call gave', async () => {
     const submission = new Submission();
-    expect(await submission.send(nameForm(), async () => 'saved')).toBe('saved');
+    expect(await submission.send(nameForm(), () => Promise.resolve('saved'))).toBe('saved');
     expect(submission.isBusy()).toBe(false);
     expect(submission.message()).toBeNull();
   });
@@ -21,7 +21,7 @@ describe('Submission', () => {
     const submission = new Submission();
     const form = nameForm('');
     let isCalled = false;
-    expect(await submission.send(form, async () => (isCalled = true))).toBeUndefined();
+    expect(await submission.send(form, () => Promise.resolve((isCalled = true)))).toBeUndefined();
     expect(isCalled).toBe(false);
     expect(form.controls.name.touched).toBe(true);
   });
@@ -29,7 +29,7 @@ describe('Submission', () => {
   it('is busy while the call runs', async () => {
     const submission = new Submission();
     let busyDuring = false;
-    await submission.send(nameForm(), async () => (busyDuring = submission.isBusy()));
+    await submission.send(nameForm(), () => Promise.resolve((busyDuring = submission.isBusy())));
     expect(busyDuring).toBe(true);
   });
 
@@ -55,7 +55,7 @@ describe('Submission', () => {
   ])('puts %s', async (_case, error, message, fieldErrors) => {
     const submission = new Submission();
     const form = nameForm();
-    expect(await submission.send(form, () => Promise.reject(error))).toBeUndefined();
+    expect(await submission.send(form, () => Promise.reject(error as Error))).toBeUndefined();
     expect(submission.message()).toBe(message);
     expect(form.controls.name.errors).toEqual(fieldErrors);
     expect(submission.isBusy()).toBe(false);
@@ -64,7 +64,7 @@ describe('Submission', () => {
   it('clears the last message when sent again', async () => {
     const submission = new Submission();
     submission.say('Could not load.');
-    await submission.send(nameForm(), async () => 1);
+    await submission.send(nameForm(), () => Promise.resolve(1));
     expect(submission.message()).toBeNull();
   });
 });

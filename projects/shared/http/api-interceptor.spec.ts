@@ -1,11 +1,11 @@
-import { HttpClient, HttpErrorResponse, provideHttpClient, withInterceptors } from '@angular/common/http';
+import { HttpClient, HttpErrorResponse, HttpHeaders, HttpResponse, provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ApplicationRef, Component, Injectable } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { Router, provideRouter } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { apiInterceptorFor } from './api-interceptor';
+import { apiInterceptorFor, transferable } from './api-interceptor';
 import type { ApiSettings } from './api-settings';
 
 @Component({ template: '' })
@@ -126,10 +126,10 @@ describe('apiInterceptorFor', () => {
     let api: HttpTestingController;
     beforeEach(() => ({ http, api } = setUp(ADMIN_LIKE)));
 
-    it('sends the token from the last session answer on writes, with the cookie', async () => {
+    it('sends the token from the last session answer on writes (same-origin: the browser adds the cookie)', async () => {
       const probe = firstValueFrom(http.get('/api/auth/session'));
       const read = api.expectOne('/api/auth/session');
-      expect(read.request.withCredentials).toBe(true);
+      expect(read.request.withCredentials).toBe(false);
       expect(read.request.headers.has('x-csrf-token')).toBe(false);
       read.flush({ user: null, csrfToken: 'token-1' });
       await probe;
@@ -137,7 +137,7 @@ describe('apiInterceptorFor', () => {
       const write = firstValueFrom(http.post('/api/jobs', { name: 'Hall' }));
       const sent = api.expectOne('/api/jobs');
       expect(sent.request.headers.get('x-csrf-token')).toBe('token-1');
-      expect(sent.request.withCredentials).toBe(true);
+      expect(sent.request.withCredentials).toBe(false);
       sent.flush({ id: 'j1' });
       await write;
     });
@@ -162,5 +162,20 @@ describe('apiInterceptorFor', () => {
         await read;
       },
     );
+  });
+});
+
+describe('answers fetched while rendering on the server', () => {
+  it('lose no-store and set-cookie so the browser reuses them from the page', () => {
+    const answer = new HttpResponse({
+      status: 200,
+      body: { items: [] },
+      headers: new HttpHeaders({ 'cache-control': 'no-store', 'set-cookie': 'lb.sid=abc', 'content-type': 'application/json' }),
+    });
+    const kept = transferable(answer) as HttpResponse<unknown>;
+    expect(kept.headers.has('cache-control')).toBe(false);
+    expect(kept.headers.has('set-cookie')).toBe(false);
+    expect(kept.headers.get('content-type')).toBe('application/json');
+    expect(kept.body).toEqual({ items: [] });
   });
 });

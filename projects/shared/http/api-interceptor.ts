@@ -12,7 +12,7 @@ const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 /**
  * The one interceptor for calls to our own API, set up per app by its settings.
  * Server (SSR): relative URLs have no origin there, and the API only knows the visitor by the
- * session cookie, so the URL is made absolute against the incoming request and its cookie forwarded.
+ * session cookie, so its cookie is forwarded (the server platform makes the URL absolute).
  * Browser: same-origin cookies plus the CSRF token from the last session answer on writes; the
  * anonymous public API goes out as it is; a 401 means the session ended, so the person is sent to
  * sign in and brought back afterwards.
@@ -38,12 +38,12 @@ export function apiInterceptorFor(settings: ApiSettings): HttpInterceptorFn {
         }
       },
     });
-    const request = req.clone({ withCredentials: true });
-
+    // Same-origin calls carry the session cookie by themselves (fetch's default); asking for
+    // credentials as well would keep Angular from reusing the answers the page was rendered with.
     if (SAFE_METHODS.has(req.method)) {
-      return next(request).pipe(watch);
+      return next(req).pipe(watch);
     }
-    const send = () => next(request.clone({ setHeaders: { 'x-csrf-token': csrf.value() } })).pipe(watch);
+    const send = () => next(req.clone({ setHeaders: { 'x-csrf-token': csrf.value() } })).pipe(watch);
     if (csrf.value()) {
       return send();
     }
@@ -71,18 +71,29 @@ function sessionEnder(settings: ApiSettings): () => void {
 }
 
 function forServer(req: HttpRequest<unknown>, incoming: Request | null): HttpRequest<unknown> {
-  if (!incoming) {
-    return req;
+  // The URL stays relative: Angular's server platform resolves it against the incoming request,
+  // after the transfer cache has keyed it the way the browser will ask for it.
+  const cookie = incoming?.headers.get('cookie');
+  return cookie ? req.clone({ setHeaders: { cookie } }) : req;
+}
+
+/**
+ * Angular's HTTP transfer cache skips answers marked `no-store` or carrying `set-cookie`, and our
+ * API marks every answer so (for browsers and proxies). During server rendering the answer goes no
+ * further than the page being rendered, which is itself `no-store` and goes only to the same
+ * visitor (see ssr/ssr-app.ts), so the browser may reuse it instead of fetching it again and
+ * blanking the rendered content while it waits. Applied by the server's HTTP backend
+ * (app/server-config.ts); session answers are never cached (app-config.ts).
+ */
+export function transferable(event: HttpEvent<unknown>): HttpEvent<unknown> {
+  if (!(event instanceof HttpResponse)) {
+    return event;
   }
-  const cookie = incoming.headers.get('cookie');
-  return req.clone({
-    url: new URL(req.url, incoming.url).href,
-    setHeaders: cookie ? { cookie } : {},
-  });
+  return event.clone({ headers: event.headers.delete('cache-control').delete('set-cookie') });
 }
 
 function fetchSession(next: HttpHandlerFn, sessionUrl: string): Observable<HttpResponse<unknown>> {
-  return next(new HttpRequest('GET', sessionUrl, { withCredentials: true })).pipe(
+  return next(new HttpRequest('GET', sessionUrl)).pipe(
     filter((event): event is HttpResponse<unknown> => event instanceof HttpResponse),
     take(1),
   );

@@ -30,6 +30,7 @@ export interface SsrAppOptions {
 /** One app's server-side rendering: static files, then Angular pages carrying the host's CSP nonce. */
 export function createSsrApp(options: SsrAppOptions): Express {
   const app = express();
+  app.disable('x-powered-by');
   const angularApp = new AngularNodeAppEngine();
   app.use(
     express.static(options.browserDistFolder, {
@@ -110,6 +111,8 @@ async function sendWithNonce(response: Response, res: ExpressResponse, answer: H
       res.setHeader(key, value);
     }
   });
+  // A rendered page holds the visitor's own data (and the API answers it was drawn from).
+  res.setHeader('cache-control', 'no-store');
   const cookies = response.headers.getSetCookie();
   if (cookies.length > 0) {
     res.setHeader('set-cookie', cookies);
