@@ -100,7 +100,7 @@ export function buildSnapshot(src: ProposalSources, choice: ProposalChoice): Pro
   const currency = src.firm.currency;
   const digits = minorUnitDigits(currency);
   const lengthUnit = src.firm.units === 'metric' ? 'm' : 'ft';
-  const first = src.estimate.variants[0]!;
+  const first = src.estimate.variants[0];
   return {
     schemaVersion: 1,
     title: src.estimate.title,

@@ -18,7 +18,7 @@ export async function clientIdOf(tx: TenantTx, client: ClientPrincipal): Promise
 
 export async function firmToday(tx: TenantTx, now: Date): Promise<string> {
   const { rows } = await tx.client.query<{ time_zone: string }>(`select time_zone from firms where id = $1`, [tx.tenantId]);
-  return localDate(rows[0]!.time_zone, now);
+  return localDate(rows[0].time_zone, now);
 }
 
 export interface ClientVersionRow {

@@ -52,8 +52,8 @@ export async function createEstimate(tx: TenantTx, actor: Actor, input: Estimate
       inputs: blankInputs(input.title, input.startDate),
     })
     .returning({ id: estimates.id });
-  await recordAudit(tx, { ...auditedBy(actor), action: 'estimate.created', entity: 'estimate', entityId: row!.id });
-  return row!.id;
+  await recordAudit(tx, { ...auditedBy(actor), action: 'estimate.created', entity: 'estimate', entityId: row.id });
+  return row.id;
 }
 
 export async function getEstimate(tx: TenantTx, id: string): Promise<EstimateView> {
@@ -134,7 +134,7 @@ export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string,
       title: inputs.title,
       startDate: inputs.startDate,
       result: { variants },
-      price: prices[0]!.price,
+      price: prices[0].price,
       computedAt: now,
       updatedAt: now,
     })

@@ -25,7 +25,7 @@ export function optionPayments(
   capRule: DepositCapRule,
 ) {
   const n = facts.layerMilestones.length;
-  const base = n > 1 ? facts.layerMilestones[Math.floor((n - 1) / 2)]! : null;
+  const base = n > 1 ? facts.layerMilestones[Math.floor((n - 1) / 2)] : null;
   const share = (p: number) => new Decimal(p).div(100);
   const lines: Array<PaymentLineInput & { percent: number | null; expectedOn: string | null }> = [];
   if (terms.depositPercent > 0) {
@@ -68,7 +68,7 @@ export function optionPayments(
     if (!check.isWithinCap && check.cap) {
       isDepositCapped = true;
       const at = lines.findIndex((l) => l.role === 'deposit');
-      lines[at] = { ...lines[at]!, basis: { kind: 'amount', amount: check.cap.toFixed(digits) }, percent: null };
+      lines[at] = { ...lines[at], basis: { kind: 'amount', amount: check.cap.toFixed(digits) }, percent: null };
       built = buildPaymentSchedule(total, lines, currency, 'terms');
     }
   }
@@ -82,9 +82,9 @@ export function optionPayments(
         : l.trigger.kind === 'acceptance'
           ? { kind: 'acceptance' }
           : { kind: 'walkthrough' },
-    percent: lines[i]!.percent,
+    percent: lines[i].percent,
     amount: l.amount.toFixed(digits),
-    expectedOn: lines[i]!.expectedOn,
+    expectedOn: lines[i].expectedOn,
   }));
   return { payments, isDepositCapped };
 }

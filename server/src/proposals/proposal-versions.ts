@@ -149,7 +149,7 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
      returning id, version`,
     [tx.tenantId, input.estimateId, JSON.stringify(snapshot), hash, input.expiresOn, actorUserId],
   );
-  const made = rows[0]!;
+  const made = rows[0];
   await recordAudit(tx, {
     actorUserId,
     actorKind: 'staff',

@@ -23,7 +23,7 @@ export const BOARD_PHOTOS: PhotoAlbum = {
         .insert(sampleBoardPhotos)
         .values({ tenantId: tx.tenantId, boardId: row.ownerId, fileId: row.fileId, caption: row.caption })
         .returning({ id: sampleBoardPhotos.id, createdAt: sampleBoardPhotos.createdAt })
-    )[0]!,
+    )[0],
   purpose: 'sample_board_photo',
   audit: { entity: 'sample_board_photo', area: 'samples', ownerKey: 'boardId' },
 };

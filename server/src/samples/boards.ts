@@ -164,7 +164,7 @@ export async function createBoard(tx: TenantTx, actor: Actor, input: SampleBoard
         notes: input.notes,
       })
       .returning()
-  )[0]!;
+  )[0];
   await recordAudit(tx, {
     actorUserId: actor.userId,
     actorKind: actor.kind,
@@ -270,7 +270,7 @@ export async function startNextRound(tx: TenantTx, actor: Actor, boardId: string
         notes: board.notes,
       })
       .returning()
-  )[0]!;
+  )[0];
   await recordAudit(tx, {
     actorUserId: actor.userId,
     actorKind: actor.kind,

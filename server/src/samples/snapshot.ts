@@ -45,7 +45,7 @@ export async function snapshotFinish(tx: TenantTx, finishSystemId: string, now: 
       ...(l.coverageShare !== undefined ? { coverageShare: l.coverageShare } : {}),
       ...(l.dilution ? { dilution: { share: l.dilution.share, convention: l.dilution.convention } } : {}),
       waitHoursAfter: l.waitHoursAfter,
-      layer: { ...l } as Record<string, unknown>,
+      layer: { ...l },
     })),
   };
 }

@@ -102,7 +102,7 @@ export function row(doc: Doc, cells: readonly Cell[], opts: { shaded?: boolean; 
     doc
       .font(c.font ?? 'text')
       .fontSize(size)
-      .heightOfString(c.text || ' ', { width: widths[i]! - pad * 2 }),
+      .heightOfString(c.text || ' ', { width: widths[i] - pad * 2 }),
   );
   const height = Math.max(...heights) + pad * 2;
   ensureSpace(doc, height);
@@ -114,8 +114,8 @@ export function row(doc: Doc, cells: readonly Cell[], opts: { shaded?: boolean; 
       .font(c.font ?? 'text')
       .fontSize(size)
       .fillColor(COLOURS.ink)
-      .text(c.text, x + pad, top + pad, { width: widths[i]! - pad * 2, align: c.align ?? 'left' });
-    x += widths[i]!;
+      .text(c.text, x + pad, top + pad, { width: widths[i] - pad * 2, align: c.align ?? 'left' });
+    x += widths[i];
   });
   doc
     .save()
