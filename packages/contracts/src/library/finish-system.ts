@@ -78,11 +78,9 @@ const multiplier = numberField('Enter the multiplier as a number, like 1.25.')
 export const finishLayerInput = z
   .strictObject({
     /** made by the browser (a uuid or short id); keeps a layer's identity across reorders */
-    id: z
-      .string({ error: 'Each layer needs an id.' })
-      .regex(new RegExp(`^[A-Za-z0-9_-]{1,${L.layerIdMax}}$`), {
-        error: `A layer id uses letters, digits, - and _ (at most ${L.layerIdMax}).`,
-      }),
+    id: z.string({ error: 'Each layer needs an id.' }).regex(new RegExp(`^[A-Za-z0-9_-]{1,${L.layerIdMax}}$`), {
+      error: `A layer id uses letters, digits, - and _ (at most ${L.layerIdMax}).`,
+    }),
     name: requiredText(L.layerNameMax, 'Name the layer, like "Scratch coat" or "Glaze".'),
     method: applicationMethod,
     productId: uuid('product').optional(),
