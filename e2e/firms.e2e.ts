@@ -62,7 +62,7 @@ test('the owner changes the firm name, address, time zone and pricing rates, and
   await expect(page.getByRole('banner')).toContainText('Quarry Lane Lime & Plaster');
 
   const { phone, context } = await onPhone(browser, page);
-  await openLiveOnPhone(phone, '/settings', '/api/firm/estimating');
+  await openLiveOnPhone(phone, '/settings');
   await expect(phone.getByRole('group', { name: 'Firm' }).getByLabel('Firm name')).toHaveValue('Quarry Lane Lime & Plaster');
   await phone.screenshot({ path: 'e2e/.artifacts/phone-settings.png' });
   await phone.getByRole('heading', { name: 'Pricing and schedule' }).scrollIntoViewIfNeeded();

@@ -96,7 +96,7 @@ test('the office adds a product with container sizes and prices, then a three-la
   await page.screenshot({ path: 'e2e/.artifacts/library-systems.png', fullPage: true });
 
   const { phone, context } = await onPhone(browser, page);
-  await openLiveOnPhone(phone, '/library', '/api/library/systems');
+  await openLiveOnPhone(phone, '/library');
   const phoneRow = phone.getByRole('table', { name: 'Finish systems' }).getByRole('row', { name: new RegExp(SYSTEM) });
   await expect(phoneRow).toBeVisible();
   await phone.screenshot({ path: 'e2e/.artifacts/phone-library.png' });

@@ -2,7 +2,7 @@ import { expect, test } from '@playwright/test';
 import { boardPhotoPng } from './support/images';
 import { pathFrom, waitForMail } from './support/inbox';
 import { DEMO, navLink, signIn } from './support/people';
-import { onPhone, openLiveOnPhone, PHONE } from './support/phone';
+import { onPhone, openLive, openLiveOnPhone, PHONE } from './support/phone';
 
 const LABEL = 'Stair hall glaze, board A';
 
@@ -51,11 +51,8 @@ test('the office makes a sample board with a photo and shows it; the client sign
   await portal.goto(pathFrom(signInMail));
   await expect(portal.getByRole('heading', { name: 'Your projects' })).toBeVisible();
 
-  // The server-rendered page is not live yet: act once the browser has loaded the board itself.
-  const boardPath = pathFrom(shown);
-  const live = portal.waitForResponse((r) => new URL(r.url()).pathname === `/api${boardPath}` && r.request().method() === 'GET');
-  await portal.goto(boardPath);
-  expect((await live).ok()).toBe(true);
+  // Act once the browser has taken over the server-rendered page.
+  await openLive(portal, pathFrom(shown));
   await expect(portal.getByRole('heading', { name: LABEL })).toBeVisible();
   await expect(portal.getByRole('img', { name: `Photo 1 of ${LABEL}` })).toBeVisible();
   await expect(portal.getByText('Antiqued umber glaze on a sealed base, in the order it goes on:')).toBeVisible();
@@ -79,7 +76,7 @@ test('the office makes a sample board with a photo and shows it; the client sign
   await expect(row.getByRole('img', { name: `Photo of ${LABEL}` })).toBeVisible();
 
   const { phone, context } = await onPhone(browser, page);
-  await openLiveOnPhone(phone, new URL(boardUrl).pathname, `/api${new URL(boardUrl).pathname}`);
+  await openLiveOnPhone(phone, new URL(boardUrl).pathname);
   await expect(phone.getByRole('img', { name: `Photo 1 of ${LABEL}` })).toBeVisible();
   await phone.screenshot({ path: 'e2e/.artifacts/phone-sample-board.png' });
   await context.close();

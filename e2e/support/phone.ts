@@ -11,15 +11,18 @@ export async function onPhone(browser: Browser, page: Page): Promise<{ phone: Pa
   return { phone: await context.newPage(), context };
 }
 
+/** Opens a page and waits until the browser has taken it over from the server-rendered copy. */
+export async function openLive(page: Page, path: string): Promise<void> {
+  await page.goto(path);
+  await expect(page.locator('lb-root[data-live]')).toBeAttached();
+}
+
 /**
- * Opens an admin page on the phone and waits until it is live: the browser has read `api` itself
- * (the server-rendered copy is replaced once the app starts) and the shell has folded its
+ * Opens an admin page on the phone and waits until it is live and the shell has folded its
  * navigation behind the menu button (the server renders it open, not knowing the screen size).
  */
-export async function openLiveOnPhone(phone: Page, path: string, api: string): Promise<void> {
-  const read = phone.waitForResponse((r) => new URL(r.url()).pathname === api && r.request().method() === 'GET');
-  await phone.goto(path);
-  expect((await read).ok()).toBe(true);
+export async function openLiveOnPhone(phone: Page, path: string): Promise<void> {
+  await openLive(phone, path);
   await expect(phone.getByRole('button', { name: 'Open navigation' })).toBeVisible();
   await expect(phone.getByRole('navigation', { name: 'Main' })).toBeHidden();
 }
