@@ -148,6 +148,129 @@ describe('payment application arithmetic', () => {
     );
   });
 
+  it('the line retainage adds up to the summary retainage, split by largest remainder (common practice, no source)', () => {
+    // three lines of $33.35 at 10 %: each exact share is $3.335; the summary is 10 % of $100.05 = $10.01
+    // (half up), so rounding each line alone would print $3.34 three times = $10.02
+    const line = (id: string) => ({
+      id,
+      label: id,
+      scheduledValue: '33.35',
+      previousWork: '0',
+      thisPeriodWork: '33.35',
+      storedMaterials: '0',
+    });
+    const a = computePayApplication({
+      ...APP2,
+      originalContractSum: '100.05',
+      changeOrders: [],
+      lines: [line('a'), line('b'), line('c')],
+      previousCertified: '0',
+    });
+    expect(a.summary.retainage.toFixed(2)).toBe('10.01');
+    expect(a.lines.map((l) => l.retainage.toFixed(2))).toEqual(['3.34', '3.34', '3.33']);
+    expect(a.totals.retainage.toFixed(2)).toBe('10.01');
+  });
+
+  it('line retainage always sums to the summary retainage (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(fc.integer({ min: 1, max: 1_000_000 }), fc.integer({ min: 0, max: 100 }), fc.integer({ min: 0, max: 100 })), {
+          minLength: 1,
+          maxLength: 8,
+        }),
+        fc.integer({ min: 0, max: 100 }),
+        fc.integer({ min: 0, max: 100 }),
+        (parts, work, stored) => {
+          const lines = parts.map(([cents, donePct, storedPct], i) => {
+            const c = new Decimal(cents).div(100);
+            const done = c.times(donePct).div(100).toDecimalPlaces(2, Decimal.ROUND_DOWN);
+            const kept = Decimal.min(c.times(storedPct).div(100).toDecimalPlaces(2, Decimal.ROUND_DOWN), c.minus(done));
+            return { id: `l${i}`, label: `Line ${i}`, scheduledValue: c, previousWork: '0', thisPeriodWork: done, storedMaterials: kept };
+          });
+          const sum = lines.reduce((t, l) => t.plus(l.scheduledValue), new Decimal(0));
+          const a = computePayApplication({
+            ...APP2,
+            originalContractSum: sum,
+            changeOrders: [],
+            lines,
+            retainage: { work: work / 100, stored: stored / 100 },
+            previousCertified: '0',
+          });
+          const lineSum = a.lines.reduce((t, l) => t.plus(l.retainage), new Decimal(0));
+          expect(lineSum.equals(a.summary.retainage)).toBe(true);
+          expect(a.totals.retainage.equals(a.summary.retainage)).toBe(true);
+        },
+      ),
+    );
+  });
+
+  it.each([
+    // previously certified, current due, flagged (common practice, no source: an over-certified
+    // application owes money back and must say so rather than show zero)
+    ['13320.00', '17010.00', false],
+    ['30330.00', '0.00', false],
+    ['31000.00', '-670.00', true],
+  ])('after %s certified the amount due is %s, over-certified %s', (previousCertified, due, flagged) => {
+    const a = computePayApplication({ ...APP2, previousCertified });
+    expect(a.summary.currentDue.toFixed(2)).toBe(due);
+    expect(a.summary.isOverCertified).toBe(flagged);
+  });
+
+  describe('retainage that stops at a chosen share complete (common contract term; common practice, no source)', () => {
+    // one $10,000 line, 10 % retainage, retainage stops at 50 % complete
+    const one = (previous: string, now: string, stored = '0'): PayApplicationInput => ({
+      currency: 'USD',
+      originalContractSum: '10000.00',
+      changeOrders: [],
+      retainage: { work: 0.1, stored: 0.1, stopAtShareComplete: 0.5 },
+      previousCertified: '0',
+      lines: [
+        { id: 'walls', label: 'Walls', scheduledValue: '10000', previousWork: previous, thisPeriodWork: now, storedMaterials: stored },
+      ],
+    });
+    it.each([
+      // previous work, this period, stored, retainage held, stopped
+      ['0', '3000', '0', '300.00', false],
+      ['3000', '1999', '0', '499.90', false],
+      ['3000', '2000', '0', '500.00', true],
+      ['3000', '4000', '0', '500.00', true],
+      ['7000', '3000', '0', '500.00', true],
+      ['3000', '0', '4000', '500.00', true],
+      ['4000', '0', '500', '450.00', false],
+    ])('previous %s + this period %s + stored %s → retainage %s (stopped %s)', (previous, now, stored, held, stopped) => {
+      const a = computePayApplication(one(previous, now, stored));
+      expect(a.summary.retainage.toFixed(2)).toBe(held);
+      expect(a.lines[0].retainage.toFixed(2)).toBe(held);
+      expect(a.summary.isRetainageStopped).toBe(stopped);
+    });
+
+    it('never releases what was held as the job goes on (property)', () => {
+      fc.assert(
+        fc.property(fc.array(fc.integer({ min: 0, max: 3000 }), { minLength: 1, maxLength: 8 }), (steps) => {
+          let previous = new Decimal(0);
+          let held = new Decimal(0);
+          for (const step of steps) {
+            const now = Decimal.min(new Decimal(step), new Decimal(10000).minus(previous));
+            const a = computePayApplication(one(previous.toString(), now.toString()));
+            expect(a.summary.retainage.greaterThanOrEqualTo(held)).toBe(true);
+            expect(a.summary.retainage.lessThanOrEqualTo('500')).toBe(true);
+            held = a.summary.retainage;
+            previous = previous.plus(now);
+          }
+        }),
+      );
+    });
+
+    it('keeps the worked example unchanged without a stop, and caps it at 50 % of the contract with one', () => {
+      const capped = computePayApplication({ ...APP2, retainage: { work: 0.1, stored: 0.1, stopAtShareComplete: 0.5 } });
+      // 50 % of $51,200 = $25,600 of work carries 10 %; the stored frieze is past the stop
+      expect([capped.summary.retainageOnWork.toFixed(2), capped.summary.retainageOnStored.toFixed(2)]).toEqual(['2560.00', '0.00']);
+      expect(capped.lines.reduce((t, l) => t.plus(l.retainage), new Decimal(0)).toFixed(2)).toBe('2560.00');
+      expect(capped.summary.isRetainageStopped).toBe(true);
+      expect(s.isRetainageStopped).toBe(false);
+    });
+  });
+
   it.each([
     [{ ...APP2, originalContractSum: '47000.00' }, 'lines', /not the contract sum to date/],
     [
@@ -158,6 +281,7 @@ describe('payment application arithmetic', () => {
     [{ ...APP2, lines: [{ ...APP2.lines[0], storedMaterials: '-5' }, ...APP2.lines.slice(1)] }, 'lines[0].storedMaterials', /negative/],
     [{ ...APP2, retainage: { work: 1.2, stored: 0.1 } }, 'retainage.work', /more than 100 %/],
     [{ ...APP2, lines: [] }, 'lines', /empty/],
+    [{ ...APP2, retainage: { work: 0.1, stored: 0.1, stopAtShareComplete: 1.5 } }, 'retainage.stopAtShareComplete', /more than 100 %/],
   ])('bad input %# names its field', (input, field, message) => {
     expectInputError(() => computePayApplication(input), field, message);
   });

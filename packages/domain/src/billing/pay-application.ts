@@ -1,6 +1,8 @@
 import Decimal from 'decimal.js';
 import { DomainInputError } from '../errors/domain-input-error';
 import { requireNonEmpty, toNonNegativeMoney } from '../errors/input-checks';
+import { allocateByWeights } from '../money/allocate';
+import { minorUnitDigits } from '../money/currency';
 import { roundToCurrency } from '../money/money';
 import type { MoneyInput } from '../money/money';
 import { type Ratio, toRatio } from '../pricing/ratio';
@@ -23,8 +25,12 @@ export interface PayApplicationInput {
   originalContractSum: MoneyInput;
   changeOrders: readonly ChangeOrder[];
   lines: readonly ValueLineInput[];
-  /** retainage rates on work completed and on stored materials, e.g. 0.10 */
-  retainage: { work: Ratio; stored: Ratio };
+  /**
+   * Retainage rates on work completed and on stored materials, e.g. 0.10. `stopAtShareComplete`
+   * (optional, e.g. 0.5): no retainage on completed and stored value beyond that share of the
+   * contract sum to date; what was held up to it stays held (a common contract term).
+   */
+  retainage: { work: Ratio; stored: Ratio; stopAtShareComplete?: Ratio };
   /** earned less retainage on the previous application (0 on the first) */
   previousCertified: MoneyInput;
 }
@@ -53,7 +59,12 @@ export interface PayApplicationSummary {
   retainage: Decimal;
   earnedLessRetainage: Decimal;
   previousCertified: Decimal;
+  /** negative when more was certified before than is earned now (see `isOverCertified`) */
   currentDue: Decimal;
+  /** true when the current amount due is negative: earlier certificates paid more than is earned */
+  isOverCertified: boolean;
+  /** true when retainage has stopped growing because the job reached `stopAtShareComplete` */
+  isRetainageStopped: boolean;
   balanceToFinishWithRetainage: Decimal;
 }
 
@@ -68,6 +79,8 @@ export interface PayApplication {
  * completed & stored = previous + this period + stored, balance = scheduled − that; retainage
  * = work rate × Σ(previous + this period) + stored rate × Σ stored; current due = earned less
  * retainage − previously certified. Σ scheduled values must equal the contract sum to date.
+ * Line retainage is the summary retainage split over the lines by largest remainder, so the
+ * lines always add up to it exactly. A negative amount due is kept and flagged, never clamped.
  */
 export function computePayApplication(input: PayApplicationInput): PayApplication {
   const { currency } = input;
@@ -110,7 +123,8 @@ export function computePayApplication(input: PayApplicationInput): PayApplicatio
       completedAndStored: g,
       shareComplete: c.isZero() ? zero : g.div(c),
       balanceToFinish: c.minus(g),
-      retainage: roundToCurrency(d.plus(e).times(rWork).plus(f.times(rStored)), currency),
+      // unrounded share of the retainage; replaced below by its exact allocation
+      retainage: d.plus(e).times(rWork).plus(f.times(rStored)),
     };
     totals.scheduledValue = totals.scheduledValue.plus(c);
     totals.previousWork = totals.previousWork.plus(d);
@@ -118,7 +132,6 @@ export function computePayApplication(input: PayApplicationInput): PayApplicatio
     totals.storedMaterials = totals.storedMaterials.plus(f);
     totals.completedAndStored = totals.completedAndStored.plus(g);
     totals.balanceToFinish = totals.balanceToFinish.plus(c.minus(g));
-    totals.retainage = totals.retainage.plus(line.retainage);
     return line;
   });
   if (!totals.scheduledValue.equals(toDate)) {
@@ -128,9 +141,28 @@ export function computePayApplication(input: PayApplicationInput): PayApplicatio
     );
   }
   totals.shareComplete = toDate.isZero() ? zero : totals.completedAndStored.div(toDate);
-  const retainageOnWork = roundToCurrency(totals.previousWork.plus(totals.thisPeriodWork).times(rWork), currency);
-  const retainageOnStored = roundToCurrency(totals.storedMaterials.times(rStored), currency);
+  const workToDate = totals.previousWork.plus(totals.thisPeriodWork);
+  let workBase = workToDate;
+  let storedBase = totals.storedMaterials;
+  let isRetainageStopped = false;
+  if (input.retainage.stopAtShareComplete !== undefined) {
+    const stop = toRatio(input.retainage.stopAtShareComplete, 'retainage.stopAtShareComplete', 'share complete');
+    // Only the first `stop` share of the contract carries retainage, installed work counted first:
+    // as completed and stored value only grows, the amount held never drops when the stop is reached.
+    const cap = toDate.times(stop);
+    workBase = Decimal.min(workToDate, cap);
+    storedBase = Decimal.min(totals.storedMaterials, Decimal.max(cap.minus(workBase), 0));
+    isRetainageStopped = totals.completedAndStored.greaterThanOrEqualTo(cap);
+  }
+  const retainageOnWork = roundToCurrency(workBase.times(rWork), currency);
+  const retainageOnStored = roundToCurrency(storedBase.times(rStored), currency);
   const retainage = retainageOnWork.plus(retainageOnStored);
+  const weights = lines.map((l) => l.retainage);
+  const shares = weights.some((w) => w.greaterThan(0))
+    ? allocateByWeights(retainage, weights, minorUnitDigits(currency), 'lines')
+    : weights.map(() => zero);
+  lines.forEach((l, i) => (l.retainage = shares[i]));
+  totals.retainage = retainage;
   const earned = totals.completedAndStored.minus(retainage);
   const previousCertified = toNonNegativeMoney(input.previousCertified, 'previousCertified', 'previously certified amount');
   return {
@@ -147,6 +179,8 @@ export function computePayApplication(input: PayApplicationInput): PayApplicatio
       earnedLessRetainage: earned,
       previousCertified,
       currentDue: earned.minus(previousCertified),
+      isOverCertified: earned.lessThan(previousCertified),
+      isRetainageStopped,
       balanceToFinishWithRetainage: toDate.minus(earned),
     },
   };
