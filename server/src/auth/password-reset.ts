@@ -1,6 +1,7 @@
 import {
   and,
   asc,
+  type Db,
   eq,
   isNull,
   memberships as membershipsTable,
@@ -35,6 +36,8 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
   const tenantId = memberships[0]?.tenantId;
   if (!tenantId) return;
   await withTenant(ctx.pool, tenantId, async (tx) => {
+    // Only the newest link works: asking again voids every earlier one still open.
+    await voidOpenResets(tx.db, user.id, ctx.now());
     const { token, hash } = newToken();
     const [reset] = await tx.db
       .insert(passwordResets)
@@ -62,12 +65,10 @@ export async function completePasswordReset(ctx: AppContext, token: string, pass
         .for('update')
     )[0];
     if (!reset) throw notFound('reset link');
-    if (reset.usedAt) throw gone('This reset link was already used. Ask for a new one.');
+    if (reset.usedAt) throw gone('This reset link was already used or a newer one was sent. Ask for a new one.');
     if (reset.expiresAt <= ctx.now()) throw gone('This reset link has expired. Ask for a new one.');
-    await tx.db
-      .update(passwordResets)
-      .set({ usedAt: ctx.now() })
-      .where(and(eq(passwordResets.id, reset.id), isNull(passwordResets.usedAt)));
+    // This link and any other still open for the person: a completed reset leaves none usable.
+    await voidOpenResets(tx.db, reset.userId, ctx.now());
     await tx.db.update(users).set({ passwordHash, failedSignIns: 0, lockedUntil: null }).where(eq(users.id, reset.userId));
     // Whoever held a session (perhaps the reason for the reset) is signed out everywhere.
     await tx.client.query(
@@ -77,4 +78,14 @@ export async function completePasswordReset(ctx: AppContext, token: string, pass
     return reset.userId;
   });
   return firstActivePrincipal(ctx, userId);
+}
+
+type ResetWriter = Pick<Db, 'update'>;
+
+/** Marks every unused reset link of a person as used (spent or voided alike). */
+async function voidOpenResets(db: ResetWriter, userId: string, now: Date): Promise<void> {
+  await db
+    .update(passwordResets)
+    .set({ usedAt: now })
+    .where(and(eq(passwordResets.userId, userId), isNull(passwordResets.usedAt)));
 }
