@@ -47,7 +47,7 @@ describe('password reset links: only the newest works, and a completed reset voi
       const [user] = await tx.db.select({ id: users.id }).from(users).where(eq(users.email, email));
       await tx.db
         .insert(passwordResets)
-        .values({ userId: user!.id, tokenHash: other.hash, expiresAt: minutesFromNow(t.ctx.now(), RESET_MINUTES) });
+        .values({ userId: user.id, tokenHash: other.hash, expiresAt: minutesFromNow(t.ctx.now(), RESET_MINUTES) });
     });
 
     expect((await completeReset(token, 'a-brand-new-pass-42')).status).toBe(200);
