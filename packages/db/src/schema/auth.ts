@@ -1,4 +1,4 @@
-import { index, json, pgTable, text, timestamp, uniqueIndex, uuid, varchar } from 'drizzle-orm/pg-core';
+import { index, integer, json, pgTable, text, timestamp, uniqueIndex, uuid, varchar } from 'drizzle-orm/pg-core';
 import { createdAt, id } from './columns';
 import { users } from './team';
 
@@ -31,3 +31,14 @@ export const sessions = pgTable(
   },
   (t) => [index('IDX_session_expire').on(t.expire)],
 );
+
+/**
+ * Failed sign-ins counted per key (an account's e-mail, and that e-mail from one address), each
+ * in a fixed window: sign-in is slowed for that key, never locked, and the answer is the same
+ * whether the account exists or not. Keys are SHA-256 hashes, so no e-mail is stored here.
+ */
+export const signInThrottle = pgTable('sign_in_throttle', {
+  key: text('key').primaryKey(),
+  failures: integer('failures').notNull().default(0),
+  windowStartedAt: timestamp('window_started_at', { withTimezone: true }).notNull(),
+});
