@@ -19,6 +19,10 @@ export const mailOutbox = pgTable(
     subject: text('subject').notNull(),
     html: text('html').notNull(),
     text: text('text').notNull(),
+    /** Display name of the sender (the firm, for mail to its clients); null sends as Layerbook. */
+    fromName: text('from_name'),
+    /** Where replies go (the firm, for mail to its clients); null sets no Reply-To. */
+    replyTo: text('reply_to'),
     status: text('status', { enum: ['pending', 'sent', 'failed'] })
       .notNull()
       .default('pending'),
