@@ -3,7 +3,7 @@ import sharp from 'sharp';
 import { signUpFirm, startTestServer, TestServer } from '../testing/harness';
 import { checkImage } from './image';
 import { insertImageRow, storeImageThen } from './stored-files';
-import { HTML, jpegImage, noisyPng, pngImage, SVG, TEXT } from './test-images';
+import { HTML, jpegImage, jpegWithGps, noisyPng, pngImage, SVG, TEXT } from './test-images';
 import { storedFor } from './test-storage';
 
 // A small per-file limit so the oversized case needs only a few hundred kilobytes.
@@ -52,7 +52,12 @@ describe('files: upload, storage and download', () => {
     expect(download.headers['content-type']).toBe('image/png');
     expect(download.headers['content-disposition']).toBe('attachment; filename="evil name.png"');
     expect(download.headers['x-content-type-options']).toBe('nosniff');
-    expect(Buffer.compare(download.body as Buffer, png)).toBe(0);
+    // Re-encoded without metadata, losslessly: the same pixels come back.
+    expect(
+      await sharp(download.body as Buffer)
+        .raw()
+        .toBuffer(),
+    ).toEqual(await sharp(png).raw().toBuffer());
 
     const jpegDownload = await o.agent.get(jpegRes.body.downloadUrl);
     expect(jpegDownload.headers['content-type']).toBe('image/jpeg');
@@ -63,6 +68,20 @@ describe('files: upload, storage and download', () => {
     expect(thumb.headers['content-type']).toBe('image/webp');
     expect(thumb.headers['x-content-type-options']).toBe('nosniff');
     expect((await sharp(thumb.body as Buffer).metadata()).format).toBe('webp');
+  });
+
+  it('stores a camera photo without its EXIF or GPS position', async () => {
+    const o = await signUpFirm(t.app);
+    const roomId = await makeRoom(o);
+    const res = await upload(o, roomId, await jpegWithGps(), 'on-site.jpg');
+    expect(res.status).toBe(201);
+    const download = await o.agent.get(res.body.downloadUrl);
+    expect(download.status).toBe(200);
+    const stored = download.body as Buffer;
+    const meta = await sharp(stored).metadata();
+    expect(meta.format).toBe('jpeg');
+    expect(meta.exif).toBeUndefined();
+    expect(stored.includes(Buffer.from('Trowelcam'))).toBe(false);
   });
 
   it.each([

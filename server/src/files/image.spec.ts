@@ -1,7 +1,7 @@
 import sharp from 'sharp';
 import { HttpError } from '../http/problem';
 import { checkImage, safeName, THUMBNAIL_WIDTH } from './image';
-import { HTML, jpegImage, pngImage, SVG, TEXT } from './test-images';
+import { HTML, jpegImage, jpegWithGps, pngImage, SVG, TEXT } from './test-images';
 
 async function refusal(buffer: Buffer, originalname: string): Promise<{ status: number; fields: string[]; message: string }> {
   try {
@@ -32,6 +32,27 @@ describe('checkImage', () => {
 
     const big = await checkImage({ buffer: await pngImage(1200, 900), originalname: 'wide.png' });
     expect((await sharp(big.thumbnail).metadata()).width).toBe(THUMBNAIL_WIDTH);
+  });
+
+  it('keeps the original without its EXIF (GPS included), in its own format, with the rotation applied', async () => {
+    const camera = await jpegWithGps();
+    const before = await sharp(camera).metadata();
+    // 0x8825 is the GPS IFD pointer (Exif 2.32, CIPA DC-008, §4.6.3), little-endian in an "II" file.
+    expect(before.exif?.includes(Buffer.from([0x25, 0x88]))).toBe(true);
+
+    const kept = await checkImage({ buffer: camera, originalname: 'site.jpg' });
+    const after = await sharp(kept.bytes).metadata();
+    expect(after.format).toBe('jpeg');
+    expect({ exif: after.exif, xmp: after.xmp, iptc: after.iptc }).toEqual({ exif: undefined, xmp: undefined, iptc: undefined });
+    expect(kept.bytes.includes(Buffer.from('Trowelcam'))).toBe(false);
+
+    const turned = await checkImage({ buffer: await jpegImage(64, 32, 6), originalname: 'portrait.jpg' });
+    const shown = await sharp(turned.bytes).metadata();
+    expect({ width: shown.width, height: shown.height, orientation: shown.orientation }).toEqual({
+      width: 32,
+      height: 64,
+      orientation: undefined,
+    });
   });
 
   it.each([

@@ -69,11 +69,12 @@ export async function checkImage(file: ReceivedFile | undefined, field = 'file')
     );
   }
 
+  let bytes: Buffer;
   let thumbnail: Buffer;
   try {
     // Decoding the whole image here also catches files whose header is fine but whose data is cut short.
-    thumbnail = await sharp(file.buffer, { limitInputPixels: MAX_PIXELS, failOn: 'error' })
-      .autoOrient()
+    bytes = await withoutMetadata(file.buffer, format);
+    thumbnail = await sharp(bytes, { limitInputPixels: MAX_PIXELS, failOn: 'error' })
       .resize({ width: THUMBNAIL_WIDTH, withoutEnlargement: true })
       .webp({ quality: 78 })
       .toBuffer();
@@ -81,13 +82,25 @@ export async function checkImage(file: ReceivedFile | undefined, field = 'file')
     throw refuse(field, `This image is damaged or incomplete. Upload ${ACCEPTED_WORDS}.`);
   }
   return {
-    bytes: file.buffer,
+    bytes,
     contentType: allowed.contentType,
     originalName: safeName(file.originalname, allowed.extensions[0]),
     width: metadata.autoOrient.width,
     height: metadata.autoOrient.height,
     thumbnail,
   };
+}
+
+/**
+ * The original as we keep it: re-encoded in its own format with the EXIF rotation applied and no
+ * metadata written back (sharp drops EXIF, GPS, XMP and IPTC unless told to keep them), so a photo
+ * taken on site never carries the camera's location or serial number to whoever downloads it.
+ */
+async function withoutMetadata(buffer: Buffer, format: AllowedFormat): Promise<Buffer> {
+  const image = sharp(buffer, { limitInputPixels: MAX_PIXELS, failOn: 'error' }).autoOrient();
+  if (format === 'jpeg') return image.jpeg({ quality: 90 }).toBuffer();
+  if (format === 'webp') return image.webp({ quality: 90 }).toBuffer();
+  return image.png().toBuffer();
 }
 
 /**

@@ -25,3 +25,13 @@ export const SVG = Buffer.from(
 );
 export const HTML = Buffer.from('<!doctype html><html><body><script>alert(document.cookie)</script></body></html>');
 export const TEXT = Buffer.from('Ceiling: two coats of lime, one of wax.\n');
+
+/** A JPEG as a phone camera writes it: EXIF with the maker, an orientation and a GPS position. */
+export const jpegWithGps = (width = 64, height = 32) =>
+  sharp({ create: { width, height, channels: 3, background: '#8a6d96' } })
+    .jpeg()
+    .withExif({
+      IFD0: { Make: 'Trowelcam', Model: 'TC-1', Orientation: '6' },
+      IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '40/1 44/1 5412/100', GPSLongitudeRef: 'W', GPSLongitude: '73/1 59/1 1176/100' },
+    })
+    .toBuffer();
