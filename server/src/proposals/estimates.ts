@@ -12,7 +12,7 @@ import { and, clients, desc, eq, estimates, sql, TenantTx } from '@layerbook/db'
 import { computeEstimate, DomainInputError, toResultJson } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
-import { badRequest, notFound } from '../http/problem';
+import { badRequest, conflict, notFound } from '../http/problem';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
 import { loadEstimateContext } from './estimate-context';
 
@@ -97,9 +97,23 @@ function checkReferences(context: EstimateContext, inputs: EstimateInputs): void
   if (problems.length) throw badRequest(problems);
 }
 
+/** What an accepted estimate answers to every write: the job holds its contract sum now. */
+export const ACCEPTED_ESTIMATE_IS_READ_ONLY =
+  'This estimate was accepted and is now read-only: its price is the job’s contract sum. Changes go through a change order.';
+
+/** 409 when the estimate was accepted: every write to it, its options or its proposal versions stops here. */
+export async function assertEstimateOpen(tx: TenantTx, estimateId: string): Promise<void> {
+  const [row] = await tx.db
+    .select({ status: estimates.status })
+    .from(estimates)
+    .where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, estimateId)));
+  if (row?.status === 'accepted') throw conflict(ACCEPTED_ESTIMATE_IS_READ_ONLY);
+}
+
 /**
  * Saves the office's choices and recomputes every option with the engine — the stored numbers are
  * the server's, whatever the browser showed. An engine refusal becomes a 400 naming its field.
+ * An accepted estimate takes no change (409), so its total cannot drift from the job's contract sum.
  */
 export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string, inputs: EstimateInputs, now: Date): Promise<EstimateView> {
   const row = (
@@ -110,6 +124,7 @@ export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string,
       .for('update')
   )[0];
   if (!row) throw notFound('estimate');
+  if (row.status === 'accepted') throw conflict(ACCEPTED_ESTIMATE_IS_READ_ONLY);
   const context = await loadEstimateContext(tx, row.siteId);
   checkReferences(context, inputs);
   const computed = inputs.variants.map((v, i) => {

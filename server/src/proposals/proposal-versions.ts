@@ -14,6 +14,7 @@ import { type DepositCapRule, DomainInputError } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
 import { localDate } from '../firms/local-date';
 import { badRequest, conflict, notFound } from '../http/problem';
+import { ACCEPTED_ESTIMATE_IS_READ_ONLY, assertEstimateOpen } from './estimates';
 import { buildSnapshot, type ProposalChoice } from './build-snapshot';
 import { loadProposalSources, type ProposalSources } from './proposal-sources';
 import { snapshotHash } from './snapshot-hash';
@@ -130,7 +131,7 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
     `select 1 from proposal_versions where tenant_id = $1 and estimate_id = $2 and status = 'accepted'`,
     [tx.tenantId, input.estimateId],
   );
-  if (accepted.rowCount) throw conflict('A version of this proposal was accepted. Changes now go through a change order.');
+  if (accepted.rowCount) throw conflict(ACCEPTED_ESTIMATE_IS_READ_ONLY);
   const terms = mergeTerms(DEFAULT_PROPOSAL_TERMS, input.terms);
   const { snapshot, hash } = snapshotFor(sources, {
     issuedOn: today,
@@ -173,6 +174,7 @@ export async function updateDraft(
   now: Date,
 ): Promise<ProposalVersionView> {
   const current = await getVersion(tx, id, true);
+  await assertEstimateOpen(tx, current.estimateId);
   if (current.status !== 'draft')
     throw conflict(`Version ${current.version} is ${current.status.replace('_', ' ')} and cannot change. Make a new version instead.`);
   const sources = await loadProposalSources(tx, current.estimateId);

@@ -8,6 +8,7 @@ import { conflict } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
 import { proposalSentMail } from '../mail/proposal-templates';
 import { ensurePortalAccount } from './client-portal-account';
+import { assertEstimateOpen } from './estimates';
 import { getVersion } from './proposal-versions';
 
 /** A proposal e-mail may sit unread for a while, so its sign-in link lasts longer than a requested one. */
@@ -20,6 +21,7 @@ export const PROPOSAL_LINK_DAYS = 3;
  */
 export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: string, id: string): Promise<ProposalVersionView> {
   const version = await getVersion(tx, id, true);
+  await assertEstimateOpen(tx, version.estimateId);
   if (version.status !== 'draft')
     throw conflict(
       `Version ${version.version} is ${version.status.replace('_', ' ')}; only a draft can be sent. Make a new version instead.`,
@@ -67,6 +69,7 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
     purposeKey: `proposal-sent:${id}`,
     tenantId: tx.tenantId,
     to: account.email,
+    sender: 'firm',
     ...proposalSentMail({
       firmName: snap.firm.name,
       clientName: client.name,

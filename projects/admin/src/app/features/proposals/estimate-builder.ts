@@ -31,7 +31,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { AddOnsSection } from './addons-section';
 import { EstimateApi } from './estimate-api';
 import { MAX_OPTIONS, WORDS, estimateForm, fillForm, nextOptionId, optionGroup, readInputs } from './estimate-form';
-import { statusWord } from './estimate-words';
+import { readOnlyReason, statusWord } from './estimate-words';
 import { ExtrasFields } from './extras-fields';
 import { applySaveProblem, targetKey } from './field-targets';
 import { LabourSection } from './labour-section';
@@ -104,6 +104,11 @@ export class EstimateBuilder implements OnInit {
   private readonly baseline = signal('');
 
   protected readonly context = computed(() => this.view()?.context ?? null);
+  /** An accepted estimate opens read-only, saying why (the server refuses changes too). */
+  protected readonly readOnlyReason = computed(() => {
+    const view = this.view();
+    return view ? readOnlyReason(view.status) : null;
+  });
   protected readonly options = computed(() => {
     this.revision();
     return [...this.form.controls.variants.controls];
@@ -241,7 +246,7 @@ export class EstimateBuilder implements OnInit {
 
   protected async save(): Promise<void> {
     const view = this.view();
-    if (!view) return;
+    if (!view || this.readOnlyReason()) return;
     this.formMessage.set(null);
     this.justSaved.set(false);
     if (this.form.invalid) {
@@ -276,6 +281,7 @@ export class EstimateBuilder implements OnInit {
   /** Shows what the server holds: its inputs in the form, its numbers on the right. */
   private show(view: EstimateView): void {
     fillForm(this.form, view.context, view.inputs);
+    if (readOnlyReason(view.status)) this.form.disable({ emitEvent: false });
     this.baseline.set(JSON.stringify(this.form.getRawValue()));
     this.view.set(view);
     this.currentIndex.update((i) => Math.min(i, this.form.controls.variants.length - 1));

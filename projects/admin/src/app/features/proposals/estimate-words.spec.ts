@@ -1,6 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import type { FinishLayer } from '@layerbook/domain';
-import { clockText, dayAndClock, dayWords, finishOutlineText, multiplierChain, percentText, statusWord } from './estimate-words';
+import {
+  clockText,
+  dayAndClock,
+  dayWords,
+  finishOutlineText,
+  multiplierChain,
+  percentText,
+  readOnlyReason,
+  statusWord,
+} from './estimate-words';
 
 const layer = (waitHoursAfter: number) => ({ productId: 'p', waitHoursAfter }) as FinishLayer;
 
@@ -8,6 +17,13 @@ describe('estimate words', () => {
   it('names statuses with the contract labels', () => {
     expect(statusWord('proposed')).toBe('Proposal sent');
   });
+
+  it.each([
+    ['draft' as const, null],
+    ['proposed' as const, null],
+    ['declined' as const, null],
+    ['accepted' as const, expect.stringContaining('Changes go through a change order.')],
+  ])('an estimate that is %s is read-only: %s', (status, reason) => expect(readOnlyReason(status)).toEqual(reason));
 
   it.each([
     [[], 'no extra time'],

@@ -3,6 +3,13 @@ import { outlineFinish, roundedNumber, waitText, type FinishLayer } from '@layer
 
 export const statusWord = (status: EstimateStatus): string => ESTIMATE_STATUS_LABELS[status];
 
+/** Why the builder opens read-only (the API answers 409 to any change), or null while it can change. */
+export function readOnlyReason(status: EstimateStatus): string | null {
+  return status === 'accepted'
+    ? 'The client accepted this estimate, so it is read-only: its price is the job’s contract sum. Changes go through a change order.'
+    : null;
+}
+
 /** "ceiling ×1.25 · dome or vault ×1.5", or "no extra time"; the names are the library's. */
 export function multiplierChain(chain: ReadonlyArray<{ name: MultiplierName; factor: number }>): string {
   if (chain.length === 0) return 'no extra time';

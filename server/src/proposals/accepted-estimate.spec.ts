@@ -1,0 +1,57 @@
+import type { EstimateView, ProposalVersionView } from '@layerbook/contracts';
+import { withTenant } from '@layerbook/db';
+import { startTestServer, TestServer } from '../testing/harness';
+import { sentProposal } from './portal-fixtures';
+
+let t: TestServer;
+beforeAll(async () => {
+  t = await startTestServer();
+  t.setNow(new Date('2026-12-01T15:00:00Z'));
+});
+afterAll(() => t.stop());
+
+const WHY = 'This estimate was accepted and is now read-only: its price is the job’s contract sum. Changes go through a change order.';
+
+describe('an accepted estimate is read-only', () => {
+  it('answers 409 naming the change order to every write, and its total stays the job’s contract sum', async () => {
+    const p = await sentProposal(t, 'Settled Sum Plaster');
+    const accepted = await p.client.agent
+      .post(`/api/portal/proposals/${p.version.id}/accept`)
+      .set('x-csrf-token', p.client.csrf())
+      .send({ variantId: 'A', signedName: 'Edwina Marl', consent: true });
+    expect(accepted.status).toBe(200);
+    const before = (await p.agent.get(`/api/estimates/${p.estimateId}`)).body as EstimateView;
+    expect(before.status).toBe('accepted');
+
+    const expectRefused = (res: { status: number; headers: Record<string, string>; body: { detail?: string } }) => {
+      expect(res.status).toBe(409);
+      expect(res.headers['content-type']).toContain('application/problem+json');
+      expect(res.body.detail).toBe(WHY);
+    };
+    // an option dropped, an add-on priced higher: both would change the total
+    const edited = {
+      ...before.inputs,
+      variants: before.inputs.variants.slice(0, 1),
+      addOns: [{ id: 'stencil', label: 'Stencilled border', labourHours: 60, materialsCost: '400.00' }],
+    };
+    expectRefused(await p.agent.put(`/api/estimates/${p.estimateId}/inputs`).set('x-csrf-token', p.csrf()).send(edited));
+    expectRefused(
+      await p.agent.post('/api/proposals').set('x-csrf-token', p.csrf()).send({ estimateId: p.estimateId, expiresOn: '2026-12-30' }),
+    );
+    expectRefused(await p.agent.patch(`/api/proposals/${p.version.id}`).set('x-csrf-token', p.csrf()).send({ notes: 'A late note' }));
+    expectRefused(await p.agent.post(`/api/proposals/${p.version.id}/send`).set('x-csrf-token', p.csrf()).send({}));
+
+    const after = (await p.agent.get(`/api/estimates/${p.estimateId}`)).body as EstimateView;
+    expect(after.inputs).toEqual(before.inputs);
+    expect(after.price).toBe(before.price);
+    const version = (await p.agent.get(`/api/proposals/${p.version.id}`)).body as ProposalVersionView;
+    expect(version.snapshotHash).toBe(p.version.snapshotHash);
+    const listed = (await p.agent.get('/api/estimates')).body as { items: Array<{ id: string; price: string | null }> };
+    const job = await withTenant(t.ctx.pool, p.firmId, (tx) =>
+      tx.client.query<{ contract_sum: string }>(`select contract_sum::text from jobs where estimate_id = $1`, [p.estimateId]),
+    );
+    const optionA = p.version.snapshot.options.find((o) => o.id === 'A')!;
+    expect(job.rows[0].contract_sum).toBe(optionA.total);
+    expect(listed.items.find((i) => i.id === p.estimateId)?.price).toBe(before.price);
+  });
+});
