@@ -117,6 +117,8 @@ export { cashForecast } from './receivables/cash-forecast';
 // safety
 export type { Caution, CautionId, SafetyFacts } from './safety/safety-cautions';
 export { STANDING_LINE, safetyCautions } from './safety/safety-cautions';
+export type { FlammableCategory, FlammableClass } from './safety/flammable';
+export { FLAMMABLE_FLASH_MAX_C, flammableClass } from './safety/flammable';
 
 // the whole estimate
 export type { EstimateInput, EstimateOption, EstimateRoom, EstimateSurface, FirmSettings } from './estimate/estimate-input';

@@ -36,6 +36,10 @@ describe('demo library', () => {
 
     const ipa = products.find((p) => p.name === 'Isopropyl alcohol') as unknown as { isFlammable: boolean };
     expect(ipa.isFlammable).toBe(true);
+    // the demo's drying-oil and silica flags, which raise the oily-rags and silica cautions
+    const flags = (name: string) => (products.find((p) => p.name === name) as Product).hazards;
+    expect(flags('Paste wax')).toEqual({ containsDryingOil: true });
+    expect(flags('Sanded bonding primer')).toEqual({ containsSilica: true });
     // Every demo system passes the API's own checks again.
     for (const s of systems) {
       const detail = (await o.agent.get(`/api/library/systems/${s.id}`)).body;

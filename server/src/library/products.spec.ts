@@ -41,7 +41,7 @@ describe('library products', () => {
     expect((await o.agent.get('/api/library/products')).body.items.map((p: { name: string }) => p.name)).toEqual(['Bonding primer']);
   });
 
-  it('derives "flammable" from the flash point (below 23 °C, 29 CFR 1910.106) and keeps lime and silica flags', async () => {
+  it('derives "flammable" and its category from the flash point (at or below 93 °C, 29 CFR 1910.106(a)(19)) and keeps lime and silica flags', async () => {
     const o = await signUpFirm(t.app);
     const ipa = await o.agent
       .post('/api/library/products')
@@ -54,17 +54,28 @@ describe('library products', () => {
         containers: [{ label: '1 L', size: 1, unit: 'L', price: '9.50' }],
         hazards: { flashPointC: 12 },
       });
-    expect(ipa.body).toMatchObject({ isFlammable: true, hazards: { flashPointC: 12 } });
+    expect(ipa.body).toMatchObject({ isFlammable: true, flammableCategories: [1, 2], hazards: { flashPointC: 12 } });
     const sealer = await o.agent
       .post('/api/library/products')
       .set('x-csrf-token', o.csrf())
       .send({ ...PRIMER, name: 'Oil sealer', hazards: { flashPointC: 40 } });
-    expect(sealer.body.isFlammable).toBe(false);
+    // mineral-spirits based, about 40 °C: category 3 (29 CFR 1910.106(a)(19)(iii)), still flammable
+    expect(sealer.body).toMatchObject({ isFlammable: true, flammableCategories: [3] });
+    const wax = await o.agent
+      .post('/api/library/products')
+      .set('x-csrf-token', o.csrf())
+      .send({ ...PRIMER, name: 'Hard wax', hazards: { flashPointC: 120 } });
+    expect(wax.body).toMatchObject({ isFlammable: false, flammableCategories: [] });
     const marble = await o.agent
       .post('/api/library/products')
       .set('x-csrf-token', o.csrf())
       .send({ ...LIME, name: 'Marble dust plaster', hazards: { isLime: true, containsSilica: true } });
     expect(marble.body.hazards).toEqual({ isLime: true, containsSilica: true });
+    const oil = await o.agent
+      .post('/api/library/products')
+      .set('x-csrf-token', o.csrf())
+      .send({ ...PRIMER, name: 'Linseed oil', hazards: { flashPointC: 200, containsDryingOil: true } });
+    expect(oil.body).toMatchObject({ isFlammable: false, hazards: { flashPointC: 200, containsDryingOil: true } });
   });
 
   it('answers 400 naming each bad field (missing price, no containers, mixed units) and saves nothing', async () => {
@@ -89,10 +100,10 @@ describe('library products', () => {
       kind: 'varnish',
       unit: 'bucket',
       colour: 'red',
-      hazards: { flashPointC: 'low' },
+      hazards: { flashPointC: 'low', containsDryingOil: 'yes' },
       sdsUrl: 'javascript:alert(1)',
     });
-    expect(fields(junk.body)).toEqual(['colour', 'hazards.flashPointC', 'kind', 'name', 'sdsUrl', 'unit']);
+    expect(fields(junk.body)).toEqual(['colour', 'hazards.containsDryingOil', 'hazards.flashPointC', 'kind', 'name', 'sdsUrl', 'unit']);
     expect((await o.agent.get('/api/library/products')).body.items).toEqual([]);
     const id = await addProduct(o, PRIMER);
     const badPatch = await o.agent.patch(`/api/library/products/${id}`).set('x-csrf-token', o.csrf()).send({ unit: 'kg' });

@@ -1,5 +1,4 @@
 import {
-  FLAMMABLE_BELOW_C,
   type ContainerInput,
   type FinishLayerInput,
   type FinishSystemSummary,
@@ -9,7 +8,7 @@ import {
   type UsedProduct,
 } from '@layerbook/contracts';
 import type { finishSystems, products } from '@layerbook/db';
-import { outlineFinish } from '@layerbook/domain';
+import { flammableClass, outlineFinish } from '@layerbook/domain';
 
 export type ProductRow = typeof products.$inferSelect;
 export type SystemRow = typeof finishSystems.$inferSelect;
@@ -21,6 +20,7 @@ export const layersOf = (row: SystemRow) => row.layers as FinishLayerInput[];
 
 export function toProductView(row: ProductRow, showPrices: boolean): ProductView {
   const hazards = hazardsOf(row);
+  const flammable = flammableClass(hazards.flashPointC, hazards.boilingPointC);
   return {
     id: row.id,
     name: row.name,
@@ -28,7 +28,8 @@ export function toProductView(row: ProductRow, showPrices: boolean): ProductView
     unit: row.unit as ProductView['unit'],
     containers: containersOf(row).map((c) => ({ ...c, price: showPrices ? c.price : null })),
     hazards,
-    isFlammable: hazards.flashPointC !== undefined && hazards.flashPointC < FLAMMABLE_BELOW_C,
+    isFlammable: flammable !== null,
+    flammableCategories: flammable?.categories ?? [],
     sdsUrl: row.sdsUrl,
     notes: row.notes,
     archivedAt: row.archivedAt?.toISOString() ?? null,

@@ -64,7 +64,8 @@ const PRODUCTS = {
     sdsUrl: '',
     notes: '',
     containers: [{ label: '1 lb tin', size: 1, unit: 'lb', price: '24.00' }],
-    hazards: {},
+    // invented demo product: beeswax let down with linseed oil, so its rags self-heat (oily-rags caution)
+    hazards: { containsDryingOil: true },
   },
   basePaint: {
     name: 'Eggshell base paint',

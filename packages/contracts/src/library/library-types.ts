@@ -1,6 +1,7 @@
 import type {
   ApplicationMethod,
   Coverage,
+  FlammableCategory,
   FinishLayer,
   LabourMultipliers,
   LengthUnit,
@@ -170,8 +171,12 @@ export const MULTIPLIER_LABELS: Readonly<Record<MultiplierName, string>> = {
   occupied: 'Occupied home',
 };
 
-/** 29 CFR 1910.106(a)(19): a liquid with a flash point below 73.4 °F (23 °C) counts as flammable (categories 1 and 2). */
-export const FLAMMABLE_BELOW_C = 23;
+/**
+ * 29 CFR 1910.106(a)(19): a liquid with a flash point at or below 93 °C (199.4 °F) is flammable, in four
+ * categories (below 23 °C: 1 or 2 by boiling point; 23–60 °C: 3; above 60 up to 93 °C: 4). The domain's
+ * `flammableClass` decides the category; apps and server both call it.
+ */
+export { FLAMMABLE_FLASH_MAX_C } from '@layerbook/domain';
 
 export const PRODUCT_LIMITS = {
   nameMax: 120,
@@ -181,6 +186,8 @@ export const PRODUCT_LIMITS = {
   containersMax: 12,
   flashPointMinC: -100,
   flashPointMaxC: 400,
+  boilingPointMinC: -100,
+  boilingPointMaxC: 600,
 } as const;
 
 export const FINISH_SYSTEM_LIMITS = {
@@ -252,8 +259,10 @@ export interface ProductView {
   readonly unit: QuantityUnit;
   readonly containers: readonly ContainerView[];
   readonly hazards: ProductHazardsInput;
-  /** derived from the flash point (below FLAMMABLE_BELOW_C) */
+  /** derived from the flash point: at or below FLAMMABLE_FLASH_MAX_C (93 °C), 29 CFR 1910.106(a)(19) */
   readonly isFlammable: boolean;
+  /** the flammable-liquid categories (one, or 1 and 2 when the boiling point is unknown); empty when not flammable */
+  readonly flammableCategories: readonly FlammableCategory[];
   readonly sdsUrl: string;
   readonly notes: string;
   readonly archivedAt: string | null;

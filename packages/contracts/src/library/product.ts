@@ -14,6 +14,7 @@ import {
 import { numberField, quantityUnit } from './units';
 
 const L = PRODUCT_LIMITS;
+const boilingPointRange = `Check the boiling point: it should be between −${-L.boilingPointMinC} and ${L.boilingPointMaxC} °C.`;
 const flashPointRange = `Check the flash point: it should be between −${-L.flashPointMinC} and ${L.flashPointMaxC} °C.`;
 
 export const containerInput = requestSchema<ContainerInput>()(
@@ -32,8 +33,14 @@ export const productHazards = requestSchema<ProductHazardsInput>()(
       .min(L.flashPointMinC, { error: flashPointRange })
       .max(L.flashPointMaxC, { error: flashPointRange })
       .optional(),
+    /** initial boiling point from the SDS; only splits categories 1 and 2 below 23 °C (29 CFR 1910.106(a)(19)) */
+    boilingPointC: numberField('Enter the boiling point in °C as a number.')
+      .min(L.boilingPointMinC, { error: boilingPointRange })
+      .max(L.boilingPointMaxC, { error: boilingPointRange })
+      .optional(),
     isLime: z.boolean({ error: 'Say whether the product contains lime.' }).optional(),
     containsSilica: z.boolean({ error: 'Say whether the SDS lists crystalline silica.' }).optional(),
+    containsDryingOil: z.boolean({ error: 'Say whether the product contains a drying oil (linseed, tung, oil glaze).' }).optional(),
   }),
 );
 

@@ -88,10 +88,14 @@ export interface Container {
 export interface ProductHazards {
   /** closed-cup flash point in °C, from the SDS */
   flashPointC?: number;
+  /** initial boiling point in °C, from the SDS; splits flammable categories 1 and 2 (29 CFR 1910.106(a)(19)) */
+  boilingPointC?: number;
   /** hydrated lime, lime putty, lime-based plasters and washes */
   isLime?: boolean;
   /** SDS section 3 lists crystalline silica */
   containsSilica?: boolean;
+  /** drying oils (linseed, tung; oil glazes, waxes with drying oils): soaked rags self-heat */
+  containsDryingOil?: boolean;
 }
 
 export interface Product {

@@ -61,12 +61,57 @@ describe('safety cautions from job facts', () => {
   });
 
   it.each([
-    // 29 CFR 1910.106(a)(19): flammable liquid, flash point below 73.4 °F (23 °C)
+    // 29 CFR 1910.106(a)(19): flammable liquid, flash point at or below 93 °C (199.4 °F)
     [12, ['flammable-liquid']], // isopropyl alcohol closed-cup flash point 12 °C (supplier SDS)
     [22.9, ['flammable-liquid']],
-    [23, []],
+    [23, ['flammable-liquid']], // (a)(19)(iii): category 3 starts at 23 °C
+    [40, ['flammable-liquid']], // mineral spirits, about 40 °C (DOMAIN.md §3.5)
+    [93, ['flammable-liquid']], // (a)(19)(iv): category 4 up to 93 °C
+    [93.5, []],
   ])('flash point %d °C', (flashPointC, expected) => {
-    expect(ids({ products: [{ name: 'Isopropyl alcohol', flashPointC }] })).toEqual(expected);
+    expect(ids({ products: [{ name: 'Solvent', flashPointC }] })).toEqual(expected);
+  });
+
+  it('names the category of each flammable product (29 CFR 1910.106(a)(19)(i)–(iv))', () => {
+    const [c] = safetyCautions({
+      ...QUIET,
+      products: [
+        { name: 'Isopropyl alcohol', flashPointC: 12 },
+        { name: 'Mineral spirits', flashPointC: 40 },
+        { name: 'Oil glaze', flashPointC: 70 },
+      ],
+    });
+    expect(c?.bullets[0]).toBe(
+      'Flammable: Isopropyl alcohol (category 1 or 2, flash point 12 °C), Mineral spirits (category 3, flash point 40 °C), Oil glaze (category 4, flash point 70 °C).',
+    );
+  });
+
+  it.each([
+    // 29 CFR 1926.1153: silica dust from any product flagged as containing it (dry mixing), or from sanding plaster
+    [{ products: [{ name: 'Marble dust plaster', containsSilica: true }] }, ['plaster-dust-silica']],
+    [{ sandsPlaster: true }, ['plaster-dust-silica']],
+    [{ products: [{ name: 'Acrylic primer' }] }, []],
+    // drying oils self-heat whatever their flash point (DOMAIN.md §3.5, from memory; manufacturers' SDS)
+    [{ products: [{ name: 'Boiled linseed oil', flashPointC: 120, containsDryingOil: true }] }, ['oily-rags']],
+    [{ products: [{ name: 'Oil glaze', flashPointC: 40, containsDryingOil: true }] }, ['flammable-liquid', 'oily-rags']],
+    [{ products: [{ name: 'Isopropyl alcohol', flashPointC: 12 }] }, ['flammable-liquid']],
+  ] as [Partial<SafetyFacts>, string[]][])('%j', (facts, expected) => {
+    expect(ids(facts)).toEqual(expected);
+  });
+
+  it('names the silica products and the drying oils', () => {
+    const all = safetyCautions({
+      ...QUIET,
+      products: [
+        { name: 'Tung oil', containsDryingOil: true },
+        { name: 'Marble dust plaster', containsSilica: true },
+      ],
+    });
+    expect(all.map((c) => c.bullets[0])).toEqual([
+      'Drying oils: Tung oil.',
+      'Crystalline silica: Marble dust plaster. Dry mixing, cutting and sanding raise the dust.',
+    ]);
+    expect(all.find((c) => c.id === 'flammable-liquid')).toBeUndefined();
   });
 
   it('lime (ICSC 0408) and sanding plaster (29 CFR 1926.1153)', () => {
@@ -89,7 +134,7 @@ describe('safety cautions from job facts', () => {
       ['lead-safe-work', '40 CFR 745 subpart E (EPA Renovation, Repair and Painting)'],
       ['scaffold-fall-protection', '29 CFR 1926.451(g)(1)'],
       ['edge-fall-protection', '29 CFR 1926.501(b)(1); 29 CFR 1926.1053(b)(1)'],
-      ['flammable-liquid', '29 CFR 1910.106 (flash point below 73.4 °F / 23 °C)'],
+      ['flammable-liquid', '29 CFR 1910.106(a)(19) (flash point at or below 93 °C / 199.4 °F)'],
       ['lime-alkali', 'ICSC 0408 (calcium hydroxide)'],
       ['plaster-dust-silica', '29 CFR 1926.1153 (respirable crystalline silica)'],
     ]);

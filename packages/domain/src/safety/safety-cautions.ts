@@ -1,8 +1,15 @@
 import { requireFiniteNumber, requireInteger, requireNonNegative } from '../errors/input-checks';
 import { type LengthUnit, convertArea, convertLength } from '../units/length';
+import { type FlammableClass, flammableClass } from './flammable';
 
 export type CautionId =
-  'lead-safe-work' | 'scaffold-fall-protection' | 'edge-fall-protection' | 'flammable-liquid' | 'lime-alkali' | 'plaster-dust-silica';
+  | 'lead-safe-work'
+  | 'scaffold-fall-protection'
+  | 'edge-fall-protection'
+  | 'flammable-liquid'
+  | 'lime-alkali'
+  | 'plaster-dust-silica'
+  | 'oily-rags';
 
 export interface Caution {
   /** stable, for translation in the apps */
@@ -24,7 +31,15 @@ export interface SafetyFacts {
   disturbedPaint: ReadonlyArray<{ roomId: string; isExterior: boolean; area: number }>;
   /** highest standing or platform level the work needs, in `lengthUnit` */
   workingLevel: number;
-  products: ReadonlyArray<{ name: string; flashPointC?: number; isLime?: boolean; containsSilica?: boolean }>;
+  products: ReadonlyArray<{
+    name: string;
+    flashPointC?: number;
+    boilingPointC?: number;
+    isLime?: boolean;
+    containsSilica?: boolean;
+    containsDryingOil?: boolean;
+  }>;
+  /** a layer sands plaster (dust whether or not the product list says silica) */
   sandsPlaster: boolean;
 }
 
@@ -37,8 +52,6 @@ const EXTERIOR_FT2 = 20;
 const SCAFFOLD_FT = 10;
 /** 29 CFR 1926.501(b)(1): unprotected side or edge 6 ft or more above a lower level. */
 const EDGE_FT = 6;
-/** 29 CFR 1910.106(a)(19): flammable liquid, flash point below 73.4 °F (23 °C). */
-const FLAMMABLE_FLASH_C = 23;
 
 function caution(id: CautionId, title: string, rule: string, bullets: string[]): Caution {
   return { id, title, bullets, rule, standing: STANDING_LINE };
@@ -90,16 +103,15 @@ export function safetyCautions(facts: SafetyFacts): Caution[] {
     );
   }
 
-  const flammable = facts.products.filter((p, i) => {
-    if (p.flashPointC === undefined) return false;
-    return requireFiniteNumber(p.flashPointC, `products[${i}].flashPointC`, 'flash point') < FLAMMABLE_FLASH_C;
+  const flammable = facts.products.flatMap((p, i) => {
+    const cls: FlammableClass | null = flammableClass(p.flashPointC, p.boilingPointC, `products[${i}].flashPointC`);
+    return cls ? [`${p.name} (${cls.label}, flash point ${p.flashPointC} °C)`] : [];
   });
   if (flammable.length > 0) {
     out.push(
-      caution('flammable-liquid', 'Flammable liquids in the mix', '29 CFR 1910.106 (flash point below 73.4 °F / 23 °C)', [
-        `Flammable: ${flammable.map((p) => p.name).join(', ')}.`,
+      caution('flammable-liquid', 'Flammable liquids in the mix', '29 CFR 1910.106(a)(19) (flash point at or below 93 °C / 199.4 °F)', [
+        `Flammable: ${flammable.join(', ')}.`,
         'No open flames, pilot lights or sparks; ventilate; keep containers closed. Vapours can be heavier than air and travel to an ignition source.',
-        'Lay oily rags flat to dry or keep them in water in a closed metal can.',
       ]),
     );
   }
@@ -115,14 +127,38 @@ export function safetyCautions(facts: SafetyFacts): Caution[] {
     );
   }
 
-  if (facts.sandsPlaster) {
+  const oily = facts.products.filter((p) => p.containsDryingOil === true);
+  if (oily.length > 0) {
     out.push(
-      caution('plaster-dust-silica', 'Dust from sanding plaster', '29 CFR 1926.1153 (respirable crystalline silica)', [
-        "Check section 3 of each product's safety data sheet for crystalline silica; the standard applies unless exposure stays below 25 µg/m³.",
-        'Prefer wet methods and HEPA vacuums to dry sweeping or compressed air.',
-        'Respirators need a written program, medical clearance and fit testing.',
-      ]),
+      // drying oils self-heat as they cure, whatever their flash point (DOMAIN.md §3.5: from memory; manufacturers' SDS)
+      caution(
+        'oily-rags',
+        'Oily rags can catch fire by themselves',
+        "The product's safety data sheet (drying oils self-heat as they cure)",
+        [
+          `Drying oils: ${oily.map((p) => p.name).join(', ')}.`,
+          'Rags, pads and paper soaked in drying oils heat up as the oil cures and can ignite hours later with no flame nearby.',
+          'Lay them flat outdoors to dry, or keep them under water in a closed metal can; never bunch them in a bin or leave them in the house overnight.',
+        ],
+      ),
     );
+  }
+
+  const silica = facts.products.filter((p) => p.containsSilica === true);
+  if (facts.sandsPlaster || silica.length > 0) {
+    const bullets: string[] = [];
+    if (silica.length > 0) {
+      bullets.push(`Crystalline silica: ${silica.map((p) => p.name).join(', ')}. Dry mixing, cutting and sanding raise the dust.`);
+    }
+    if (facts.sandsPlaster) {
+      bullets.push("A layer sands plaster: check section 3 of each product's safety data sheet for crystalline silica.");
+    }
+    bullets.push(
+      'The standard applies unless exposure stays below 25 µg/m³ (8-hour average) under any foreseeable conditions.',
+      'Wet the mix or use a low-speed paddle with local exhaust; prefer wet methods and HEPA vacuums to dry sweeping or compressed air.',
+      'Respirators need a written program, medical clearance and fit testing.',
+    );
+    out.push(caution('plaster-dust-silica', 'Crystalline silica dust', '29 CFR 1926.1153 (respirable crystalline silica)', bullets));
   }
   return out;
 }

@@ -8,10 +8,15 @@ describe('library words', () => {
     expect(DILUTION_CHOICES.map((d) => d.value)).toEqual(['ofConcentrate', 'ofMix']);
   });
 
-  // 29 CFR 1910.106(a)(19): flash point below 23 °C (73.4 °F) is a flammable liquid.
+  // 29 CFR 1910.106(a)(19): flash point at or below 93 °C (199.4 °F) is a flammable liquid, categories 1–4.
   it.each([
-    [{ flashPointC: 12 }, ['Flammable (flash point 12 °C)']],
-    [{ flashPointC: 23 }, []],
+    [{ flashPointC: 12 }, ['Flammable, category 1 or 2 (flash point 12 °C)']],
+    [{ flashPointC: 12, boilingPointC: 82 }, ['Flammable, category 2 (flash point 12 °C)']],
+    [{ flashPointC: 23 }, ['Flammable, category 3 (flash point 23 °C)']],
+    [{ flashPointC: 40 }, ['Flammable, category 3 (flash point 40 °C)']], // mineral spirits
+    [{ flashPointC: 93 }, ['Flammable, category 4 (flash point 93 °C)']],
+    [{ flashPointC: 94 }, []],
+    [{ containsDryingOil: true }, ['Oily rags self-heat (drying oil)']],
     [{ isLime: true, containsSilica: true }, ['Caustic (lime)', 'Contains silica']],
     [{}, []],
   ])('hazardWords(%j)', (hazards, texts) => {
@@ -19,8 +24,17 @@ describe('library words', () => {
   });
 
   it.each([
-    [null, 'Leave empty if it does not burn. Below 23 °C it counts as flammable (29 CFR 1910.106).'],
-    [12, 'Flammable: 12 °C is below 23 °C (29 CFR 1910.106). Crew sheets will carry the fire cautions.'],
-    [23, 'Not flammable under 29 CFR 1910.106: 23 °C is 23 °C or above. Still keep it away from flames.'],
+    [null, 'Leave empty if it does not burn. At or below 93 °C it counts as flammable (29 CFR 1910.106(a)(19)).'],
+    [12, 'Flammable, category 1 or 2: 12 °C is at or below 93 °C (29 CFR 1910.106(a)(19)). Crew sheets will carry the fire cautions.'],
+    [40, 'Flammable, category 3: 40 °C is at or below 93 °C (29 CFR 1910.106(a)(19)). Crew sheets will carry the fire cautions.'],
+    [120, 'Above 93 °C, so not a flammable liquid under 29 CFR 1910.106(a)(19); it can still burn. Keep it away from flames.'],
   ])('flammableNote(%s)', (c, note) => expect(flammableNote(c)).toBe(note));
+
+  it('never says "not flammable" at or below 93 °C', () => {
+    for (let c = -50; c <= 93; c += 0.5) expect(flammableNote(c)).not.toMatch(/not (a )?flammable/i);
+  });
+
+  it('splits categories 1 and 2 by the boiling point when known', () => {
+    expect(flammableNote(12, 30)).toMatch(/^Flammable, category 1:/);
+  });
 });

@@ -4,7 +4,7 @@ import {
   AREA_UNIT_SYMBOLS,
   DILUTION_CONVENTION_LABELS,
   DILUTION_CONVENTIONS,
-  FLAMMABLE_BELOW_C,
+  FLAMMABLE_FLASH_MAX_C,
   LENGTH_UNITS,
   MASS_UNITS,
   MULTIPLIER_LABELS,
@@ -15,6 +15,7 @@ import {
   VOLUME_UNITS,
   type ProductHazardsInput,
 } from '@layerbook/contracts/types';
+import { flammableClass } from '@layerbook/domain';
 
 /** A pick-list from one of the contract's lists and its labels, in the list's order. */
 function choices<V extends string>(
@@ -49,23 +50,28 @@ export interface HazardWord {
   readonly text: string;
 }
 
-/** Hazard flags in words with an icon (never colour alone); flammable as 29 CFR 1910.106 defines it. */
+/** Hazard flags in words with an icon (never colour alone); flammable as 29 CFR 1910.106(a)(19) defines it. */
 export function hazardWords(h: ProductHazardsInput): HazardWord[] {
   const words: HazardWord[] = [];
-  if (h.flashPointC !== undefined && h.flashPointC < FLAMMABLE_BELOW_C) {
-    words.push({ icon: 'local_fire_department', text: `Flammable (flash point ${h.flashPointC} °C)` });
+  const flammable = flammableClass(h.flashPointC, h.boilingPointC);
+  if (flammable) {
+    words.push({ icon: 'local_fire_department', text: `Flammable, ${flammable.label} (flash point ${h.flashPointC} °C)` });
   }
+  if (h.containsDryingOil) words.push({ icon: 'whatshot', text: 'Oily rags self-heat (drying oil)' });
   if (h.isLime) words.push({ icon: 'science', text: 'Caustic (lime)' });
   if (h.containsSilica) words.push({ icon: 'masks', text: 'Contains silica' });
   return words;
 }
 
+const isNumber = (n: number | null | undefined): n is number => typeof n === 'number' && Number.isFinite(n);
+
 /** Shown beside the flash point as it is typed, so the rule is visible rather than hidden in the server. */
-export function flammableNote(flashPointC: number | null | undefined): string {
-  if (flashPointC === null || flashPointC === undefined || Number.isNaN(flashPointC)) {
-    return `Leave empty if it does not burn. Below ${FLAMMABLE_BELOW_C} °C it counts as flammable (29 CFR 1910.106).`;
+export function flammableNote(flashPointC: number | null | undefined, boilingPointC?: number | null): string {
+  if (!isNumber(flashPointC)) {
+    return `Leave empty if it does not burn. At or below ${FLAMMABLE_FLASH_MAX_C} °C it counts as flammable (29 CFR 1910.106(a)(19)).`;
   }
-  return flashPointC < FLAMMABLE_BELOW_C
-    ? `Flammable: ${flashPointC} °C is below ${FLAMMABLE_BELOW_C} °C (29 CFR 1910.106). Crew sheets will carry the fire cautions.`
-    : `Not flammable under 29 CFR 1910.106: ${flashPointC} °C is ${FLAMMABLE_BELOW_C} °C or above. Still keep it away from flames.`;
+  const flammable = flammableClass(flashPointC, isNumber(boilingPointC) ? boilingPointC : undefined);
+  return flammable
+    ? `Flammable, ${flammable.label}: ${flashPointC} °C is at or below ${FLAMMABLE_FLASH_MAX_C} °C (29 CFR 1910.106(a)(19)). Crew sheets will carry the fire cautions.`
+    : `Above ${FLAMMABLE_FLASH_MAX_C} °C, so not a flammable liquid under 29 CFR 1910.106(a)(19); it can still burn. Keep it away from flames.`;
 }

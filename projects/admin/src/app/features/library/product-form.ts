@@ -21,6 +21,7 @@ import { PRODUCT_KIND_CHOICES, UNIT_GROUPS, flammableNote } from './library-word
 
 const TOO_LONG = { maxlength: 'That is too long for this field.' };
 const FLASH_POINT_RANGE = `Check the flash point: it should be between −${-L.flashPointMinC} and ${L.flashPointMaxC} °C.`;
+const BOILING_POINT_RANGE = `Check the boiling point: it should be between −${-L.boilingPointMinC} and ${L.boilingPointMaxC} °C.`;
 
 /** Adds a product, or edits the one it is given: containers with prices, hazards from the SDS. */
 @Component({
@@ -63,6 +64,7 @@ export class ProductForm implements OnInit {
     size: { required: 'Enter the container size.', min: 'The container size must be more than zero.' },
     price: { required: 'Enter the price of this container, like 45.00.', ...AMOUNT_WORDS },
     flashPoint: { min: FLASH_POINT_RANGE, max: FLASH_POINT_RANGE },
+    boilingPoint: { min: BOILING_POINT_RANGE, max: BOILING_POINT_RANGE },
     url: { pattern: 'Enter a web address starting with https://.', ...TOO_LONG },
     line: TOO_LONG,
     containers: { required: 'Add at least one container with its price.' },
@@ -75,8 +77,10 @@ export class ProductForm implements OnInit {
     containers: this.fb.array([this.containerGroup()]),
     hazards: this.fb.group({
       flashPointC: this.fb.control<number | null>(null, [Validators.min(L.flashPointMinC), Validators.max(L.flashPointMaxC)]),
+      boilingPointC: this.fb.control<number | null>(null, [Validators.min(L.boilingPointMinC), Validators.max(L.boilingPointMaxC)]),
       isLime: [false],
       containsSilica: [false],
+      containsDryingOil: [false],
     }),
     sdsUrl: ['', [Validators.maxLength(L.sdsUrlMax), Validators.pattern(/^\s*(https?:\/\/\S+)?\s*$/)]],
     notes: ['', Validators.maxLength(L.notesMax)],
@@ -84,7 +88,8 @@ export class ProductForm implements OnInit {
 
   private readonly flashPoint = toSignal(this.form.controls.hazards.controls.flashPointC.valueChanges, { initialValue: null });
   /** Shown live beside the flash point so the rule is visible, not hidden in the server. */
-  protected readonly flammableNote = computed(() => flammableNote(this.flashPoint()));
+  private readonly boilingPoint = toSignal(this.form.controls.hazards.controls.boilingPointC.valueChanges, { initialValue: null });
+  protected readonly flammableNote = computed(() => flammableNote(this.flashPoint(), this.boilingPoint()));
 
   ngOnInit(): void {
     const p = this.product();
@@ -95,7 +100,13 @@ export class ProductForm implements OnInit {
       name: p.name,
       kind: p.kind,
       unit: p.unit,
-      hazards: { flashPointC: p.hazards.flashPointC ?? null, isLime: !!p.hazards.isLime, containsSilica: !!p.hazards.containsSilica },
+      hazards: {
+        flashPointC: p.hazards.flashPointC ?? null,
+        boilingPointC: p.hazards.boilingPointC ?? null,
+        isLime: !!p.hazards.isLime,
+        containsSilica: !!p.hazards.containsSilica,
+        containsDryingOil: !!p.hazards.containsDryingOil,
+      },
       sdsUrl: p.sdsUrl,
       notes: p.notes,
     });
@@ -144,8 +155,10 @@ export class ProductForm implements OnInit {
     const v = this.form.getRawValue();
     const hazards: ProductInput['hazards'] = {};
     if (v.hazards.flashPointC !== null) hazards.flashPointC = v.hazards.flashPointC;
+    if (v.hazards.boilingPointC !== null) hazards.boilingPointC = v.hazards.boilingPointC;
     if (v.hazards.isLime) hazards.isLime = true;
     if (v.hazards.containsSilica) hazards.containsSilica = true;
+    if (v.hazards.containsDryingOil) hazards.containsDryingOil = true;
     return {
       name: v.name.trim(),
       kind: v.kind,
