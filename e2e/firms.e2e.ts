@@ -12,7 +12,7 @@ async function saveBy(page: Page, button: string, path: string) {
 // Journey (firms): a new firm's owner sets the firm up; everything is still there after a reload.
 // A firm of its own, so the demo firm the other journeys read stays as seeded.
 test('the owner changes the firm name, address, time zone and pricing rates, and they stick after a reload', async ({ page, browser }) => {
-  const firm = newFirm('Quarry Lane Limewash', 'Tobias Wrenfield', 'kiln-and-quarry-2026');
+  const firm = newFirm('Quarry Lane Limewash', 'Tobias Wrenfield', 'kiln-and-ochre-2026');
   await signUp(page, firm);
   await navLink(page, 'Settings').click();
   await expect(page.getByRole('heading', { level: 1, name: 'Settings' })).toBeVisible();

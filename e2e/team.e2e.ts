@@ -27,7 +27,7 @@ test('owner invites an office manager who sets a password and signs in', async (
   await office.goto(linkFrom(mail));
   await expect(office.getByTestId('invitation-firm')).toContainText('Fernhollow Plaster & Glaze');
   await office.getByLabel('Name').fill('Ines Ledger');
-  await office.getByLabel('Password', { exact: true }).fill('ledger-and-lime-2026');
+  await office.getByLabel('Password', { exact: true }).fill('beeswax-and-lime-2026');
   await office.getByRole('button', { name: 'Join the team' }).click();
   await expect(office).toHaveURL(/\/today$/);
 
@@ -35,7 +35,7 @@ test('owner invites an office manager who sets a password and signs in', async (
   await office.getByRole('menuitem', { name: 'Sign out' }).click();
   await expect(office).toHaveURL(/\/sign-in/);
   await office.getByLabel('E-mail').fill(email);
-  await office.getByLabel('Password', { exact: true }).fill('ledger-and-lime-2026');
+  await office.getByLabel('Password', { exact: true }).fill('beeswax-and-lime-2026');
   await office.getByRole('button', { name: 'Sign in' }).click();
   await expect(office).toHaveURL(/\/today$/);
   await expect(office.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Billing' })).toBeVisible();

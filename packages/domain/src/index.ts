@@ -81,6 +81,7 @@ export { scheduleJob } from './schedule/schedule-job';
 export type { PlanDay, PlannedSchedule, PlanStep, PlanWait } from './schedule/day-plan';
 export { planDays } from './schedule/day-plan';
 export { hoursText, waitText } from './schedule/hours-text';
+export { usFederalHolidays, usFederalHolidaysAhead } from './schedule/us-federal-holidays';
 
 // pricing
 export type { Ratio } from './pricing/ratio';

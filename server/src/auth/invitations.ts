@@ -6,7 +6,7 @@ import { conflict, gone, notFound } from '../http/problem';
 import { recordAudit } from '../audit/record';
 import { loadStaffPrincipal } from './staff-principal';
 import { assertNotLocked, countFailure } from './staff-auth';
-import { assertNotCommonPassword, hashPassword, verifyPassword } from './passwords';
+import { assertAcceptablePassword, hashPassword, verifyPassword } from './passwords';
 import { hashToken } from './tokens';
 
 type InvitationRow = typeof invitations.$inferSelect;
@@ -58,7 +58,8 @@ export async function acceptInvitation(ctx: AppContext, input: InvitationAccept)
       ]);
     }
   } else {
-    assertNotCommonPassword(input.password);
+    const firm = await withTenant(ctx.pool, found.tenantId, async (tx) => (await tx.db.select({ name: firms.name }).from(firms))[0]);
+    assertAcceptablePassword(input.password, { email: found.email, name: input.name, firmNames: firm ? [firm.name] : [] });
     passwordHash = await hashPassword(input.password);
   }
   const userId = await withTenant(ctx.pool, found.tenantId, async (tx) => {

@@ -16,7 +16,7 @@ import type { StaffPrincipal } from '../http/principal';
 import { gone, notFound } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
 import { passwordResetMail } from '../mail/templates';
-import { assertNotCommonPassword, hashPassword } from './passwords';
+import { assertAcceptablePassword, hashPassword } from './passwords';
 import { firstActivePrincipal } from './staff-auth';
 import { hashToken, minutesFromNow, newToken } from './tokens';
 
@@ -54,7 +54,7 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
 }
 
 export async function completePasswordReset(ctx: AppContext, token: string, password: string): Promise<StaffPrincipal> {
-  assertNotCommonPassword(password);
+  assertAcceptablePassword(password, await resetHolder(ctx, token));
   const passwordHash = await hashPassword(password);
   const userId = await withGlobal(ctx.pool, async (tx) => {
     const reset = (
@@ -88,4 +88,22 @@ async function voidOpenResets(db: ResetWriter, userId: string, now: Date): Promi
     .update(passwordResets)
     .set({ usedAt: now })
     .where(and(eq(passwordResets.userId, userId), isNull(passwordResets.usedAt)));
+}
+
+/** Who a reset link belongs to, as the password's context words need them (nobody: the reset answers 404 next). */
+async function resetHolder(ctx: AppContext, token: string): Promise<{ email: string; name: string; firmNames: string[] }> {
+  const holder = await withGlobal(
+    ctx.pool,
+    async (tx) =>
+      (
+        await tx.db
+          .select({ id: users.id, email: users.email, name: users.name })
+          .from(passwordResets)
+          .innerJoin(users, eq(users.id, passwordResets.userId))
+          .where(eq(passwordResets.tokenHash, hashToken(token)))
+      )[0],
+  );
+  if (!holder) return { email: '', name: '', firmNames: [] };
+  const principal = await firstActivePrincipal(ctx, holder.id).catch(() => null);
+  return { email: holder.email, name: holder.name, firmNames: principal ? [principal.firmName] : [] };
 }

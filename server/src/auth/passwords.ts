@@ -25,3 +25,34 @@ export function assertNotCommonPassword(password: string, field = 'password'): v
     throw badRequest([{ field, message: 'This password is on a list of common passwords; choose another.' }]);
   }
 }
+
+/** Words shorter than this are too common inside passwords to refuse ("ann", "co", "art"). */
+const CONTEXT_WORD_MIN = 4;
+
+/**
+ * The words a guesser tries first for this person (OWASP ASVS 5.0 §6.2: refuse context-specific
+ * words): the e-mail's local part whole and in pieces, and each word of their name and firm name.
+ */
+export function contextWords(context: {
+  readonly email: string;
+  readonly name?: string;
+  readonly firmNames?: readonly string[];
+}): string[] {
+  const local = context.email.split('@')[0] ?? '';
+  const words = [local, ...[local, context.name ?? '', ...(context.firmNames ?? [])].flatMap((s) => s.split(/[^\p{L}\p{N}]+/u))];
+  return [...new Set(words.map((w) => w.toLowerCase()).filter((w) => [...w].length >= CONTEXT_WORD_MIN))];
+}
+
+/** Refuses a password that is or contains the person's e-mail, name or firm name, ignoring case. */
+export function assertNoContextWords(password: string, context: Parameters<typeof contextWords>[0], field = 'password'): void {
+  const lowered = password.toLowerCase();
+  if (contextWords(context).some((word) => lowered.includes(word))) {
+    throw badRequest([{ field, message: 'Choose a password that does not contain your name, your e-mail or your firm’s name.' }]);
+  }
+}
+
+/** Every check a new password must pass before it is hashed. */
+export function assertAcceptablePassword(password: string, context: Parameters<typeof contextWords>[0], field = 'password'): void {
+  assertNotCommonPassword(password, field);
+  assertNoContextWords(password, context, field);
+}

@@ -8,7 +8,7 @@ import { recordAudit } from '../audit/record';
 import { isSlugTaken, slugCandidates } from '../firms/slug';
 import { isUniqueViolation } from '../http/pg-errors';
 import { loadStaffPrincipal } from './staff-principal';
-import { assertNotCommonPassword, decoyPasswordHash, hashPassword, verifyPassword } from './passwords';
+import { assertAcceptablePassword, decoyPasswordHash, hashPassword, verifyPassword } from './passwords';
 
 const WRONG = () => new HttpError(401, 'Sign-in failed', 'E-mail or password is not right.');
 const LOCK_AFTER = 5;
@@ -19,7 +19,7 @@ const emailTaken = () =>
 
 /** Creates a firm and its owner in one transaction, and returns the owner, signed in. */
 export async function signUp(ctx: AppContext, input: SignUpRequest): Promise<StaffPrincipal> {
-  assertNotCommonPassword(input.password);
+  assertAcceptablePassword(input.password, { email: input.email, name: input.name, firmNames: [input.firmName] });
   const passwordHash = await hashPassword(input.password);
   const firmId = randomUUID();
   const userId = randomUUID();

@@ -106,7 +106,7 @@ describe('clients, contacts and sites', () => {
     await crew.agent
       .post('/api/auth/invitations/accept')
       .set('x-csrf-token', crew.csrf())
-      .send({ token, name: 'Crew', password: 'crew-password-2026' });
+      .send({ token, name: 'Crew', password: 'scaffold-pass-2026' });
     await crew.refresh();
     for (const path of ['/api/clients', '/api/inquiries', '/api/inquiries/board', '/api/inquiries/today']) {
       expect({ path, status: (await crew.agent.get(path)).status }).toEqual({ path, status: 403 });

@@ -1,5 +1,19 @@
 import { randomUUID } from 'node:crypto';
-import { auditLog, clients, eq, firms, memberships, portalUsers, sites, users, withGlobal, withTenant } from '@layerbook/db';
+import { defaultEstimatingSettings } from '@layerbook/contracts';
+import {
+  auditLog,
+  clients,
+  eq,
+  firmEstimatingSettings,
+  firms,
+  memberships,
+  portalUsers,
+  sites,
+  users,
+  withGlobal,
+  withTenant,
+} from '@layerbook/db';
+import { usFederalHolidaysAhead } from '@layerbook/domain';
 import { localDate } from '../firms/local-date';
 import { seedDemoInquiries } from './demo-inquiries';
 import { seedDemoLibrary } from './demo-library';
@@ -39,6 +53,12 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
   const firmId = randomUUID();
   await withTenant(pool, firmId, async (tx) => {
     await tx.db.insert(firms).values({ id: firmId, ...DEMO.firm });
+    // A US firm: its days off are the federal holidays of the coming year (5 U.S.C. 6103(a), as observed).
+    const today = localDate(DEMO.firm.timeZone, now);
+    const settings = defaultEstimatingSettings('imperial');
+    await tx.db
+      .insert(firmEstimatingSettings)
+      .values({ tenantId: firmId, settings: { ...settings, calendar: { ...settings.calendar, holidays: usFederalHolidaysAhead(today) } } });
     const userIds: string[] = [];
     for (const person of DEMO.people) {
       const [user] = await tx.db.insert(users).values({ email: person.email, name: person.name, passwordHash }).returning({ id: users.id });
@@ -64,7 +84,7 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
       })
       .returning({ id: sites.id });
     await tx.db.insert(portalUsers).values({ tenantId: firmId, clientId: client.id, email: DEMO.client.email, name: DEMO.client.name });
-    await seedDemoInquiries(tx, localDate(DEMO.firm.timeZone, now), userIds[0]);
+    await seedDemoInquiries(tx, today, userIds[0]);
     await seedDemoLibrary(tx);
     await seedDemoTakeoff(tx, site.id);
     await tx.db.insert(auditLog).values({ tenantId: firmId, actorKind: 'system', action: 'demo.seeded', entity: 'firm', entityId: firmId });

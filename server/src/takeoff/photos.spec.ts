@@ -39,7 +39,7 @@ async function crewOf(o: Owner): Promise<Agent> {
   await crew.agent
     .post('/api/auth/invitations/accept')
     .set('x-csrf-token', crew.csrf())
-    .send({ token, name: 'Crew', password: 'crew-password-2026' });
+    .send({ token, name: 'Crew', password: 'scaffold-pass-2026' });
   await crew.refresh();
   return crew;
 }

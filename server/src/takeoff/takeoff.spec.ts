@@ -295,7 +295,7 @@ describe('site takeoff', () => {
     await crew.agent
       .post('/api/auth/invitations/accept')
       .set('x-csrf-token', crew.csrf())
-      .send({ token, name: 'Crew', password: 'crew-password-2026' });
+      .send({ token, name: 'Crew', password: 'scaffold-pass-2026' });
     await crew.refresh();
 
     const read = await crew.agent.get(`/api/takeoff/sites/${siteId}`);

@@ -12,20 +12,20 @@ const tokenFrom = (url: string) => new URL(url).searchParams.get('token')!;
 
 describe('invitations, end to end through the e-mail', () => {
   it('owner invites an office manager, who sets a password from the e-mailed link and signs in', async () => {
-    const owner = await signUpFirm(t.app, 'Millbrook Lime Works');
+    const owner = await signUpFirm(t.app, 'Millbrook Wax Works');
     const email = uniqueEmail('office');
     const sent = await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email, role: 'office' });
     expect(sent.status).toBe(201);
     expect(sent.body).toMatchObject({ email, role: 'office', status: 'pending' });
 
     const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email));
-    expect(mail.subject).toContain('Millbrook Lime Works');
+    expect(mail.subject).toContain('Millbrook Wax Works');
     expect(mail.text).toContain('/accept-invitation?token=');
     const token = tokenFrom(linkIn(mail));
 
     const guest = await newAgent(t.app);
     const preview = await guest.agent.get(`/api/auth/invitations/${token}`);
-    expect(preview.body).toEqual({ firmName: 'Millbrook Lime Works', email, role: 'office' });
+    expect(preview.body).toEqual({ firmName: 'Millbrook Wax Works', email, role: 'office' });
 
     const accepted = await guest.agent
       .post('/api/auth/invitations/accept')
@@ -66,7 +66,7 @@ describe('invitations, end to end through the e-mail', () => {
     expect(t.inbox.messages.filter((m) => JSON.stringify(m.to).includes(email))).toHaveLength(1);
   });
 
-  it('locks out password guessing through an invitation to an existing account', async () => {
+  it('throttles password guessing through an invitation to an existing account (429, no lock)', async () => {
     const existing = await signUpFirm(t.app, 'Existing Account Plaster');
     const inviter = await signUpFirm(t.app, 'Inviting Plaster');
     await inviter.agent.post('/api/team/invitations').set('x-csrf-token', inviter.csrf()).send({ email: existing.email, role: 'crew' });
@@ -85,12 +85,12 @@ describe('invitations, end to end through the e-mail', () => {
         ).status,
       );
     }
-    expect(statuses).toEqual([409, 409, 409, 409, 409, 423]);
+    expect(statuses).toEqual([409, 409, 409, 409, 409, 429]);
     const right = await guest.agent
       .post('/api/auth/invitations/accept')
       .set('x-csrf-token', guest.csrf())
       .send({ token, name: 'X', password: existing.password });
-    expect(right.status).toBe(423);
+    expect(right.status).toBe(429);
   });
 
   it('refuses a second invitation to a pending or existing e-mail, naming the field', async () => {
@@ -149,7 +149,7 @@ describe('roles', () => {
     const res = await member.agent
       .post('/api/auth/invitations/accept')
       .set('x-csrf-token', member.csrf())
-      .send({ token, name: 'Member', password: 'member-pass-2026' });
+      .send({ token, name: 'Member', password: 'gilder-pass-2026' });
     await member.refresh();
     return { owner, member, membershipId: '', userId: res.body.user.id as string };
   }

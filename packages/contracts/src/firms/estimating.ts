@@ -72,7 +72,10 @@ export const estimatingSettings = requestSchema<EstimatingSettings>()(
           .number({ error: 'Enter hours per day.' })
           .gt(L.productiveHoursPerDay.above, { error: 'More than 0 hours.' })
           .max(L.productiveHoursPerDay.max, { error: `At most ${L.productiveHoursPerDay.max} hours.` }),
-        holidays: z.array(isoDate).max(HOLIDAYS_MAX),
+        holidays: z
+          .array(isoDate)
+          .max(HOLIDAYS_MAX, { error: `At most ${HOLIDAYS_MAX} days off.` })
+          .refine((d) => new Set(d).size === d.length, { error: 'Each day off once.' }),
         minimumBlockHours: hours(L.minimumBlockHours),
       }),
       crewSize: z

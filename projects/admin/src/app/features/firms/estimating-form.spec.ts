@@ -43,7 +43,7 @@ describe('fillForm and readForm', () => {
   it('read rounding to the nearest amount, days off and a missing minimum charge', () => {
     const form = estimatingForm();
     fillForm(form, { ...defaultSettings, minimumCharge: null, rounding: { kind: 'nearest', increment: '5.00' } });
-    form.controls.calendar.controls.holidays.setValue('2026-12-25, 2026-12-26\n2027-01-01');
+    form.controls.calendar.controls.holidays.setValue(['2026-12-25', '2026-12-26', '2027-01-01']);
     const read = readForm(form);
     expect(read.minimumCharge).toBeNull();
     expect(read.rounding).toEqual({ kind: 'nearest', increment: '5.00' });

@@ -42,7 +42,8 @@ export function estimatingForm() {
       workingWeekdays: new FormArray(ISO_WEEKDAYS.map(() => new FormControl<boolean>(false, { nonNullable: true }))),
       dayStartHour: num(L.dayStartHour),
       productiveHoursPerDay: num(L.productiveHoursPerDay),
-      holidays: new FormControl<string>('', { nonNullable: true }),
+      /** days off, YYYY-MM-DD in date order; the settings page adds and removes them one at a time */
+      holidays: new FormControl<string[]>([], { nonNullable: true }),
       minimumBlockHours: num(L.minimumBlockHours),
     }),
     crewSize: num(L.crewSize),
@@ -71,7 +72,7 @@ export function fillForm(form: EstimatingFormGroup, s: EstimatingSettings): void
     calendar: {
       ...s.calendar,
       workingWeekdays: ISO_WEEKDAYS.map((day) => s.calendar.workingWeekdays.includes(day)),
-      holidays: s.calendar.holidays.join('\n'),
+      holidays: [...s.calendar.holidays].sort(),
     },
   });
 }
@@ -94,7 +95,7 @@ export function readForm(form: EstimatingFormGroup): EstimatingSettings {
       workingWeekdays: ISO_WEEKDAYS.filter((_, i) => v.calendar.workingWeekdays[i]),
       dayStartHour: n(v.calendar.dayStartHour),
       productiveHoursPerDay: n(v.calendar.productiveHoursPerDay),
-      holidays: v.calendar.holidays.split(/[\s,]+/).filter(Boolean),
+      holidays: [...v.calendar.holidays],
       minimumBlockHours: n(v.calendar.minimumBlockHours),
     },
     crewSize: n(v.crewSize),

@@ -1,7 +1,7 @@
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
-import { ReactiveFormsModule } from '@angular/forms';
+import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -30,6 +30,7 @@ import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { estimatingForm, fillForm, methodInWords, readForm } from './estimating-form';
 import { FirmApi } from './firm-api';
+import { readHoliday, withHoliday, withoutHoliday } from './holidays';
 
 /**
  * The numbers every estimate is built from: labour rate, overhead and profit, minimum charge, tax,
@@ -73,6 +74,10 @@ export class EstimatingSettingsForm {
   protected readonly roundingKindLabels = ROUNDING_KIND_LABELS;
   protected readonly words = { required: 'Enter a value.', min: 'Too small.', max: 'Too large.', pattern: 'Enter an amount like 55.00.' };
   protected readonly form = estimatingForm();
+  /** the day being added to the days off; not part of the settings until added */
+  protected readonly newHoliday = new FormControl('', { nonNullable: true });
+  private readonly holidayList = this.form.controls.calendar.controls.holidays;
+  protected readonly holidays = toSignal(this.holidayList.valueChanges, { initialValue: this.holidayList.value });
 
   private readonly overheadProfit = toSignal(
     this.form.controls.overheadProfit.valueChanges.pipe(
@@ -93,7 +98,26 @@ export class EstimatingSettingsForm {
       fillForm(this.form, view.settings);
       if (this.isOwner()) this.form.enable();
       else this.form.disable();
+      if (this.isOwner()) this.newHoliday.enable();
+      else this.newHoliday.disable();
     });
+  }
+
+  protected addHoliday(): void {
+    const reading = readHoliday(this.newHoliday.value, this.holidayList.value);
+    if ('error' in reading) {
+      this.newHoliday.setErrors({ holiday: reading.error });
+      this.newHoliday.markAsTouched();
+      return;
+    }
+    this.holidayList.setValue(withHoliday(this.holidayList.value, reading.date));
+    this.holidayList.markAsDirty();
+    this.newHoliday.reset('');
+  }
+
+  protected removeHoliday(date: string): void {
+    this.holidayList.setValue(withoutHoliday(this.holidayList.value, date));
+    this.holidayList.markAsDirty();
   }
 
   protected async saveEstimating(): Promise<void> {
