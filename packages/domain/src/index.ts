@@ -14,6 +14,8 @@ export { convertQuantity, convertQuantityExact, dimensionOf, fromBase, isMassUni
 export type { KitchenVolume } from './units/kitchen-display';
 export { formatKitchenVolume, formatMetricMass, formatMetricVolume } from './units/kitchen-display';
 export { fixedNumber, plainNumber, roundedNumber } from './units/number-text';
+export type { DecimalMark } from './units/typed-length';
+export { decimalMarkOf, readTypedLength, readTypedNumber } from './units/typed-length';
 
 // calendar dates
 export type { IsoDate } from './calendar/local-date';

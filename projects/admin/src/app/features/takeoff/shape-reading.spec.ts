@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DIM_KEYS } from '@layerbook/contracts/types';
-import { dimMessage, optionalNonNegativeMessage, readShape, shapeFormValue, type ShapeFormValue } from './shape-reading';
+import { bannerAfterEdit, dimMessage, optionalNonNegativeMessage, readShape, shapeFormValue, type ShapeFormValue } from './shape-reading';
 
 const blank = (over: Partial<ShapeFormValue>): ShapeFormValue => ({
   ...(Object.fromEntries(DIM_KEYS.map((k) => [k, ''])) as { [K in (typeof DIM_KEYS)[number]]: string }),
@@ -37,6 +37,7 @@ describe('shape reading', () => {
   it("reads only the chosen shape's fields, with its openings", () => {
     const reading = readShape(
       blank({ kind: 'walls', perimeter: '40', height: '9', radius: 'junk', openings: [{ width: '3', height: '7', count: '2' }] }),
+      'ft',
     );
     expect(reading).toEqual({ shape: { kind: 'walls', perimeter: 40, height: 9, openings: [{ width: 3, height: 7, count: 2 }] } });
   });
@@ -55,7 +56,7 @@ describe('shape reading', () => {
         ],
       }),
     ],
-  ])('waits while there is %s', (_what, raw) => expect(readShape(raw)).toEqual({ missing: true }));
+  ])('waits while there is %s', (_what, raw) => expect(readShape(raw, 'ft')).toEqual({ missing: true }));
 
   it('puts a surface saved in feet into a metric form, exactly enough to measure the same', () => {
     const value = shapeFormValue({ kind: 'walls', perimeter: 10, height: 8, openings: [{ width: 3, height: 7 }] }, 'ft', 'm');
@@ -71,4 +72,37 @@ describe('shape reading', () => {
   it('starts a beam count at one when none was saved', () => {
     expect(shapeFormValue({ kind: 'beams', length: 12, width: 1, depth: 1 }, 'ft', 'ft')).toMatchObject({ count: '1', measureBy: 'faces' });
   });
+
+  it("reads lengths typed in feet and inches in the form's unit, counts as plain numbers", () => {
+    const raw = blank({ kind: 'walls', perimeter: '40\' 6"', height: '9 ft', openings: [{ width: "3'", height: '6\' 8"', count: '2' }] });
+    expect(readShape(raw, 'ft')).toEqual({
+      shape: { kind: 'walls', perimeter: 40.5, height: 9, openings: [{ width: 3, height: 6 + 8 / 12, count: 2 }] },
+    });
+    expect(
+      readShape(blank({ kind: 'walls', perimeter: '40', height: '9', openings: [{ width: '3', height: '7', count: "2'" }] }), 'ft'),
+    ).toEqual({
+      missing: true,
+    });
+  });
+
+  it.each([
+    [
+      'clears the banner once the form is corrected',
+      'Some sizes are missing',
+      true,
+      { shape: { kind: 'gable', base: 8, height: 4 } },
+      null,
+    ],
+    [
+      'keeps it while a field is still in error',
+      'Some sizes are missing',
+      false,
+      { shape: { kind: 'gable', base: 8, height: 4 } },
+      'Some sizes are missing',
+    ],
+    ['keeps it while a size is missing', 'Some sizes are missing', true, { missing: true }, 'Some sizes are missing'],
+    ['shows nothing when there was nothing', null, true, { missing: true }, null],
+  ] as const)('bannerAfterEdit %s', (_what, banner, isValid, reading, after) =>
+    expect(bannerAfterEdit(banner, isValid, reading as Parameters<typeof bannerAfterEdit>[2])).toBe(after),
+  );
 });

@@ -1,6 +1,6 @@
 import { DIM_WORDS, type DimKey, type DimRule, SHAPE_LIMITS, type TakeoffLengthUnit, shapeChoice } from '@layerbook/contracts/types';
 import { convertShape, plainNumber, type SurfaceKind, type SurfaceShape } from '@layerbook/domain';
-import { readNumber } from './number-text';
+import { readLength, readNumber } from './number-text';
 
 /** The shape form's raw value: every dimension as typed, whatever the chosen shape uses. */
 export type ShapeFormValue = { [K in DimKey]: string } & {
@@ -35,20 +35,26 @@ export function optionalNonNegativeMessage(noun: string, value: number | null): 
 
 export type ShapeReading = { readonly shape: SurfaceShape } | { readonly missing: true };
 
+/** A field as typed: lengths may be feet and inches ("6' 6\""), counts, areas and angles are plain numbers. */
+export function readDim(rule: DimRule, typed: string, unit: TakeoffLengthUnit): number | null {
+  return rule === 'length' || rule === 'depth0' ? readLength(typed, unit) : readNumber(typed);
+}
+
 /**
  * The shape as the engine wants it, or `missing` while any field of the chosen shape is empty or
  * not yet a valid number. Geometry that does not fit together is left for the engine to judge.
+ * Lengths are read in `unit`, the unit the form measures in.
  */
-export function readShape(raw: ShapeFormValue): ShapeReading {
+export function readShape(raw: ShapeFormValue, unit: TakeoffLengthUnit): ShapeReading {
   const c = shapeChoice(raw.kind);
   const out: Record<string, unknown> = { kind: raw.kind };
   for (const field of c.fields) {
-    const value = readNumber(raw[field.key]);
+    const value = readDim(field.rule, raw[field.key], unit);
     if (dimMessage(field.rule, field.noun, value) !== null) return { missing: true };
     out[field.key] = value;
   }
   if (c.hasElevation) {
-    const elevation = readNumber(raw.elevation);
+    const elevation = readLength(raw.elevation, unit);
     if (elevation !== null) {
       if (Number.isNaN(elevation) || elevation < 0) return { missing: true };
       out['elevation'] = elevation;
@@ -57,8 +63,8 @@ export function readShape(raw: ShapeFormValue): ShapeReading {
   if (c.hasOpenings) {
     const openings = [];
     for (const o of raw.openings) {
-      const width = readNumber(o.width);
-      const height = readNumber(o.height);
+      const width = readLength(o.width, unit);
+      const height = readLength(o.height, unit);
       const count = readNumber(o.count);
       if (
         dimMessage('length', '', width) ||
@@ -73,8 +79,8 @@ export function readShape(raw: ShapeFormValue): ShapeReading {
   if (c.hasCorners) {
     const corners: [number, number][] = [];
     for (const [x, y] of raw.corners) {
-      const nx = readNumber(x);
-      const ny = readNumber(y);
+      const nx = readLength(x, unit);
+      const ny = readLength(y, unit);
       if (nx === null || ny === null || Number.isNaN(nx) || Number.isNaN(ny)) return { missing: true };
       corners.push([nx, ny]);
     }
@@ -82,6 +88,14 @@ export function readShape(raw: ShapeFormValue): ShapeReading {
   }
   if (c.hasMeasureBy) out['measureBy'] = raw.measureBy;
   return { shape: out as unknown as SurfaceShape };
+}
+
+/**
+ * The form's banner after an edit: once every field reads and none is in error the banner has
+ * said its piece and goes; while something is still wrong it stays.
+ */
+export function bannerAfterEdit(banner: string | null, isFormValid: boolean, reading: ShapeReading): string | null {
+  return banner !== null && isFormValid && !('missing' in reading) ? null : banner;
 }
 
 /** Four decimals keep a converted 10 ft (3.048 m) exact enough to measure the same again. */

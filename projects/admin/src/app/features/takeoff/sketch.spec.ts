@@ -31,6 +31,25 @@ describe('sketchShape', () => {
     expect(sketch.lines.length).toBeGreaterThan(0);
   });
 
+  it('draws a cone in section with both slopes up to the peak, the span between the eaves as a guide', () => {
+    const sketch = sketchShape({ kind: 'cone', radius: 8, rise: 6 }, 'ft');
+    const points = [...sketch.lines[0].matchAll(/(-?[\d.]+) (-?[\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
+    expect(points).toHaveLength(3);
+    const [left, peak, right] = points;
+    expect(peak[1]).toBeLessThan(left[1]);
+    expect(left[1]).toBe(right[1]);
+    expect(left[0]).toBeLessThan(peak[0]);
+    expect(right[0]).toBeGreaterThan(peak[0]);
+  });
+
+  it('draws a half-sphere dome in section: a half circle on its springing line, rise equal to the radius', () => {
+    const sketch = sketchShape({ kind: 'hemisphere', radius: 9 }, 'ft');
+    expect(sketch.description).toBe('Half-sphere dome in section: r 9 ft, rise 9 ft.');
+    expect(sketch.isToScale).toBe(true);
+    expect(sketch.lines[0]).toMatch(/ A /);
+    expect(sketch.guides).toHaveLength(2);
+  });
+
   it('draws every shape the catalogue offers', () => {
     const sizes = {
       perimeter: 40,

@@ -179,17 +179,11 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
       };
     }
     case 'ceilingCircle':
-    case 'hemisphere':
     case 'crownCircular': {
       // Plan of a circle with its radius drawn in.
       const c: Pt = [SKETCH_WIDTH / 2, SKETCH_HEIGHT / 2];
       const r = SKETCH_HEIGHT / 2 - 18;
-      const what =
-        shape.kind === 'ceilingCircle'
-          ? 'Round flat ceiling'
-          : shape.kind === 'hemisphere'
-            ? 'Half-sphere dome, seen from below'
-            : 'Crown running around a round room';
+      const what = shape.kind === 'ceilingCircle' ? 'Round flat ceiling' : 'Crown running around a round room';
       return {
         lines: [`M ${c[0] - r} ${c[1]} A ${r} ${r} 0 1 1 ${c[0] + r} ${c[1]} A ${r} ${r} 0 1 1 ${c[0] - r} ${c[1]}`],
         guides: [line(c, [c[0] + r, c[1]])],
@@ -220,8 +214,9 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
         ),
         label(mid(base, d[2]), `rise ${u(shape.rise)}`, 'start', 4, 0),
       ];
+      // Both slopes from the eaves up to the peak; the span between the eaves is a guide.
       return {
-        lines: [poly(d, false)],
+        lines: [poly([d[0], d[2], d[1]], false)],
         guides: [line(base, d[2]), line(d[0], d[1])],
         labels,
         isToScale: true,
@@ -231,20 +226,23 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
             : `Turret ceiling with ${shape.sides} flat sides of ${u(shape.sideLength)}, rise ${u(shape.rise)}, in section.`,
       };
     }
+    case 'hemisphere':
     case 'sphericalCap':
     case 'sphericalCapFromSphere':
     case 'barrelVault':
     case 'segmentalVault': {
       // Section across the arc: chord along the springing line, rise to the crown.
       const half =
-        shape.kind === 'sphericalCap'
-          ? shape.baseRadius
-          : shape.kind === 'sphericalCapFromSphere'
-            ? Math.sqrt(Math.max(0, 2 * shape.sphereRadius * shape.rise - shape.rise ** 2))
-            : shape.kind === 'barrelVault'
-              ? shape.radius
-              : shape.span / 2;
-      const rise = shape.kind === 'barrelVault' ? shape.radius : shape.rise;
+        shape.kind === 'hemisphere'
+          ? shape.radius
+          : shape.kind === 'sphericalCap'
+            ? shape.baseRadius
+            : shape.kind === 'sphericalCapFromSphere'
+              ? Math.sqrt(Math.max(0, 2 * shape.sphereRadius * shape.rise - shape.rise ** 2))
+              : shape.kind === 'barrelVault'
+                ? shape.radius
+                : shape.span / 2;
+      const rise = shape.kind === 'barrelVault' || shape.kind === 'hemisphere' ? shape.radius : shape.rise;
       const { at, scale } = frame([
         [-half, 0],
         [half, 0],
@@ -257,14 +255,20 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
       const chordWords =
         shape.kind === 'segmentalVault'
           ? `span ${u(shape.span)}`
-          : shape.kind === 'barrelVault'
+          : shape.kind === 'barrelVault' || shape.kind === 'hemisphere'
             ? `r ${u(shape.radius)}`
             : `base radius ${u(half)}`;
       const labels = [label(mid(a, b), chordWords, 'middle', 0, 14), label(mid(base, crown), `rise ${u(rise)}`, 'start', 4, 0)];
       if (shape.kind === 'barrelVault' || shape.kind === 'segmentalVault')
         labels.push(label(crown, `length ${u(shape.length)}`, 'middle', 0, -8));
       const noun =
-        shape.kind === 'barrelVault' ? 'Half-round barrel vault' : shape.kind === 'segmentalVault' ? 'Segmental vault' : 'Shallow dome';
+        shape.kind === 'hemisphere'
+          ? 'Half-sphere dome'
+          : shape.kind === 'barrelVault'
+            ? 'Half-round barrel vault'
+            : shape.kind === 'segmentalVault'
+              ? 'Segmental vault'
+              : 'Shallow dome';
       return {
         lines: [arcPath(a, b, 2 * half * scale, rise * scale)],
         guides: [line(a, b), line(base, crown)],

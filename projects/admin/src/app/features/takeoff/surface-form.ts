@@ -27,7 +27,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { type LiveMeasure, measureLive } from './live-measure';
 import { readNumber } from './number-text';
 import { cornerArray, enableFor, loadShape, openingGroup, shapeGroup } from './shape-form-model';
-import { readShape } from './shape-reading';
+import { bannerAfterEdit, readShape } from './shape-reading';
 import { ShapeSketch } from './shape-sketch';
 import { TakeoffApi } from './takeoff-api';
 
@@ -78,7 +78,7 @@ export class SurfaceForm implements OnInit {
 
   protected readonly form = new FormGroup({
     name: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(L.surfaceNameMax)] }),
-    shape: shapeGroup(),
+    shape: shapeGroup(() => this.unit()),
     disturbedPaintedArea: new FormControl('', { nonNullable: true, validators: disturbedRule }),
     notes: new FormControl('', { nonNullable: true, validators: Validators.maxLength(L.notesMax) }),
   });
@@ -128,12 +128,16 @@ export class SurfaceForm implements OnInit {
     return '';
   }
 
+  /** Lengths in feet take a full keyboard, for the foot and inch marks ("6' 6\""); other numbers a number pad. */
   protected inputMode(field: DimField): string {
+    if (field.rule === 'length' || field.rule === 'depth0') return this.lengthMode();
     return typeof field.rule === 'object' ? 'numeric' : 'decimal';
   }
 
+  protected readonly lengthMode = computed(() => (this.unit() === 'ft' ? 'text' : 'decimal'));
+
   protected addOpening(): void {
-    this.shape.controls.openings.push(openingGroup());
+    this.shape.controls.openings.push(openingGroup(() => this.unit()));
   }
 
   protected removeOpening(index: number): void {
@@ -141,7 +145,7 @@ export class SurfaceForm implements OnInit {
   }
 
   protected addCorner(): void {
-    this.shape.controls.corners.push(cornerArray());
+    this.shape.controls.corners.push(cornerArray(() => this.unit()));
   }
 
   protected removeCorner(index: number): void {
@@ -150,7 +154,7 @@ export class SurfaceForm implements OnInit {
 
   protected async saveSurface(): Promise<void> {
     this.formMessage.set(null);
-    const reading = readShape(this.shape.getRawValue());
+    const reading = readShape(this.shape.getRawValue(), this.unit());
     if (this.form.invalid || 'missing' in reading) {
       this.form.markAllAsTouched();
       for (const control of Object.values(this.shape.controls)) control.markAsDirty();
@@ -181,7 +185,8 @@ export class SurfaceForm implements OnInit {
   private remeasure(): void {
     for (const control of this.marked) control.updateValueAndValidity({ emitEvent: false });
     this.marked = [];
-    const reading = readShape(this.shape.getRawValue());
+    const reading = readShape(this.shape.getRawValue(), this.unit());
+    this.formMessage.update((banner) => bannerAfterEdit(banner, this.form.valid, reading));
     if ('missing' in reading) {
       this.live.set({ state: 'missing' });
       return;
