@@ -16,6 +16,7 @@ export * from './common/notice';
 export * from './auth/auth-types';
 export * from './team/team-types';
 export * from './firms/firm-types';
+export * from './firms/countries';
 export * from './firms/estimating-types';
 export * from './inquiries/inquiry-types';
 export * from './clients/client-types';

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { FIRM_NAME_MAX_LENGTH, FIRM_NAME_MIN_LENGTH } from '../auth/auth-types';
-import { COUNTRY_CODE_PATTERN, CURRENCY_CODE_PATTERN, PHONE_MAX_LENGTH } from '../common/field-limits';
+import { CURRENCY_CODE_PATTERN, PHONE_MAX_LENGTH } from '../common/field-limits';
 import { requestSchema } from '../common/schema-check';
+import { isCountryCode } from './countries';
 import { FIRM_PROFILE_LIMITS, LANGUAGES, UNIT_SYSTEMS, type FirmSettingsUpdate } from './firm-types';
 
 /** ISO 4217 code: three capital letters. The server checks it is a currency it can bill in. */
@@ -37,7 +38,10 @@ export const firmSettingsUpdate = requestSchema<FirmSettingsUpdate>()(
     city: line('town or city', FIRM_PROFILE_LIMITS.city),
     region: line('state, province or region', FIRM_PROFILE_LIMITS.region),
     postalCode: line('postal code', FIRM_PROFILE_LIMITS.postalCode),
-    country: z.string().trim().regex(COUNTRY_CODE_PATTERN, { error: 'Use a two-letter country code, like US.' }),
+    country: z
+      .string({ error: 'Choose a country.' })
+      .trim()
+      .refine((code): boolean => isCountryCode(code), { error: 'Choose a country from the list (an ISO 3166-1 code, like US).' }),
     phone: line('phone number', PHONE_MAX_LENGTH),
     timeZone,
     currency,

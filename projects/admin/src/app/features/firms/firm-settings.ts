@@ -11,11 +11,10 @@ import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import {
   COMMON_CURRENCIES,
+  COUNTRIES,
   FIRM_NAME_MAX_LENGTH,
   FIRM_NAME_MIN_LENGTH,
   FIRM_PROFILE_LIMITS as L,
-  LANGUAGES,
-  LANGUAGE_LABELS,
   PHONE_MAX_LENGTH,
   UNIT_SYSTEMS,
   UNIT_SYSTEM_LABELS,
@@ -38,8 +37,8 @@ import { FirmApi } from './firm-api';
 import { StageLikelihoodsForm } from './stage-likelihoods';
 import { timeZoneChoices } from './time-zones';
 
-/** Two letters, any case, spaces around allowed: the form sends it trimmed in capitals. */
-const TYPED_COUNTRY = /^\s*[A-Za-z]{2}\s*$/;
+/** ISO 3166-1 alpha-2 countries, offered by name in the reader's alphabetical order. */
+const COUNTRY_CHOICES = [...COUNTRIES].sort((a, b) => a.name.localeCompare(b.name));
 
 @Component({
   selector: 'lb-firm-settings',
@@ -72,8 +71,7 @@ export class FirmSettingsPage {
   protected readonly currencies = COMMON_CURRENCIES;
   protected readonly unitSystems = UNIT_SYSTEMS;
   protected readonly unitLabels = UNIT_SYSTEM_LABELS;
-  protected readonly languages = LANGUAGES;
-  protected readonly languageLabels = LANGUAGE_LABELS;
+  protected readonly countries = COUNTRY_CHOICES;
   protected readonly firm = httpResource<FirmSettings>(() => '/api/firm');
   protected readonly isLoading = computed(() => !this.firm.hasValue() && this.firm.isLoading());
   protected readonly loadMessage = loadMessage(this.firm);
@@ -89,7 +87,7 @@ export class FirmSettingsPage {
     city: ['', Validators.maxLength(L.city)],
     region: ['', Validators.maxLength(L.region)],
     postalCode: ['', Validators.maxLength(L.postalCode)],
-    country: ['', [Validators.required, Validators.pattern(TYPED_COUNTRY)]],
+    country: ['', Validators.required],
     phone: ['', Validators.maxLength(PHONE_MAX_LENGTH)],
     timeZone: ['', Validators.required],
     currency: ['', Validators.required],
@@ -105,10 +103,7 @@ export class FirmSettingsPage {
     city: tooLong(L.city),
     region: tooLong(L.region),
     postalCode: tooLong(L.postalCode),
-    country: {
-      required: 'Enter a two-letter country code, like US.',
-      pattern: 'Use a two-letter country code, like US.',
-    },
+    country: { required: 'Choose a country.' },
     timeZone: { required: 'Choose a time zone.' },
     currency: { required: 'Choose a currency.' },
   };
@@ -128,6 +123,7 @@ export class FirmSettingsPage {
   private show(settings: FirmSettings): void {
     const { name, addressLine1, addressLine2, city, region, postalCode, country, phone, timeZone, currency, units, language } = settings;
     this.form.reset({ name, addressLine1, addressLine2, city, region, postalCode, country, phone, timeZone, currency, units, language });
+    // The language is kept as it is and sent back unchanged: the choice is hidden until Spanish works.
     // Only owners may change settings; the server refuses the rest with 403 anyway.
     if (this.isOwner()) {
       this.form.enable();
@@ -137,7 +133,6 @@ export class FirmSettingsPage {
   }
 
   private toUpdate(): FirmSettingsUpdate {
-    const value = this.form.getRawValue();
-    return { ...value, country: value.country.trim().toUpperCase() };
+    return this.form.getRawValue();
   }
 }
