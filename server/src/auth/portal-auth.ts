@@ -27,6 +27,7 @@ export async function requestPortalLink(ctx: AppContext, email: string): Promise
         purposeKey: `portal-link:${linkId}`,
         tenantId: tx.tenantId,
         to: user.email,
+        sender: 'firm',
         ...portalLinkMail({
           name: user.name,
           firmName: firm.name,

@@ -36,8 +36,12 @@ describe('public inquiry form', () => {
     expect(res.status).toBe(201);
     const ack = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(body.email));
     expect(ack.subject).toContain('Willowmere Plaster');
+    // The prospect's copy comes from the firm's name at our address, and a reply reaches the firm.
+    expect(ack.from?.value).toEqual([{ name: 'Willowmere Plaster', address: 'no-reply@layerbook.local' }]);
+    expect(ack.replyTo?.value).toEqual([{ name: '', address: a.email }]);
     const notice = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(a.email) && /New inquiry/.test(m.subject ?? ''));
     expect(notice.text).toContain('Della Hawthorne');
+    expect(notice.replyTo).toBeUndefined();
     const listA = await a.agent.get('/api/inquiries');
     expect(listA.body.items).toHaveLength(1);
     expect(listA.body.items[0]).toMatchObject({

@@ -85,6 +85,7 @@ export async function submitPublicInquiry(ctx: AppContext, slug: string, input: 
       purposeKey: `inquiry-ack:${id}`,
       tenantId: tx.tenantId,
       to: input.email,
+      sender: 'firm',
       ...inquiryAcknowledgementMail({ firmName: firm.name, name: input.name }),
     });
     const staff = await tx.db

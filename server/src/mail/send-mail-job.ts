@@ -3,6 +3,16 @@ import type { Transporter } from 'nodemailer';
 import type { Logger } from 'pino';
 import type { MailSendJob } from '../queue/queues';
 
+/** The configured sending address without its display name ("Layerbook <a@b>" → "a@b"). */
+export function sendingAddress(configured: string): string {
+  return /<([^<>]+)>\s*$/.exec(configured)?.[1]?.trim() ?? configured.trim();
+}
+
+/** From: the configured sender, or a firm's name at our sending address (we never send as the firm's own domain). */
+export function fromHeader(configured: string, fromName: string | null): string | { name: string; address: string } {
+  return fromName ? { name: fromName, address: sendingAddress(configured) } : configured;
+}
+
 /**
  * Sends one outbox row. Safe to run twice: the row is locked, and a row already sent is skipped.
  * The Message-ID is stable per row, so a resend after a crash can be recognised downstream.
@@ -11,16 +21,29 @@ export async function sendOutboxMail(pool: Pool, transport: Transporter, from: s
   const client = await pool.connect();
   try {
     await client.query('begin');
-    const { rows } = await client.query(`select id, to_address, subject, html, text, status from mail_outbox where id = $1 for update`, [
-      job.outboxId,
-    ]);
-    const row = rows[0] as { id: string; to_address: string; subject: string; html: string; text: string; status: string } | undefined;
+    const { rows } = await client.query(
+      `select id, to_address, subject, html, text, status, from_name, reply_to from mail_outbox where id = $1 for update`,
+      [job.outboxId],
+    );
+    const row = rows[0] as
+      | {
+          id: string;
+          to_address: string;
+          subject: string;
+          html: string;
+          text: string;
+          status: string;
+          from_name: string | null;
+          reply_to: string | null;
+        }
+      | undefined;
     if (!row || row.status === 'sent') {
       await client.query('commit');
       return;
     }
     await transport.sendMail({
-      from,
+      from: fromHeader(from, row.from_name),
+      ...(row.reply_to ? { replyTo: row.reply_to } : {}),
       to: row.to_address,
       subject: row.subject,
       html: row.html,

@@ -3,6 +3,7 @@ import type { TenantTx } from '@layerbook/db';
 import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
 import { proposalAcceptedClientMail, proposalAcceptedMail, proposalAnsweredMail } from '../mail/acceptance-templates';
+import { firmDateTime, firmTimeZone } from '../mail/firm-time';
 import { enqueueMail } from '../mail/outbox';
 import type { ClientVersionRow } from './client-proposals';
 
@@ -20,9 +21,6 @@ const money = (locale: string, currency: string, amount: string) =>
   // Intl accepts a decimal string and formats it exactly; no float arithmetic happens here.
   new Intl.NumberFormat(locale, { style: 'currency', currency }).format(amount as unknown as number);
 
-const signedOn = (locale: string, at: Date) =>
-  new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }).format(at) + ' UTC';
-
 export async function mailAcceptance(
   tx: TenantTx,
   ctx: AppContext,
@@ -38,7 +36,7 @@ export async function mailAcceptance(
     optionLabel: p.option.label,
     total: money(snap.locale, snap.currency, p.option.total),
     signedName: p.signedName,
-    signedOn: signedOn(snap.locale, p.signedAt),
+    signedOn: firmDateTime(p.signedAt, snap.locale, await firmTimeZone(tx, tx.tenantId)),
   };
   for (const staff of await officeRecipients(tx)) {
     await enqueueMail(tx, ctx.queue, {
@@ -52,6 +50,7 @@ export async function mailAcceptance(
     purposeKey: `proposal-accepted-client:${p.row.id}`,
     tenantId: tx.tenantId,
     to: p.client.email,
+    sender: 'firm',
     ...proposalAcceptedClientMail({ ...common, reference: p.row.snapshot_hash.slice(0, 12), url: `${base}/portal/proposals/${p.row.id}` }),
   });
 }

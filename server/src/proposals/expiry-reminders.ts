@@ -57,6 +57,7 @@ export async function sendProposalReminders(
         purposeKey,
         tenantId: tx.tenantId,
         to: v.email,
+        sender: 'firm',
         ...render(
           `Reminder: your proposal from ${v.firm_name} is open until ${v.expires_on}`,
           `Your proposal is open until ${v.expires_on}`,

@@ -139,6 +139,11 @@ describe('a client reads and accepts a proposal in the portal', () => {
     await t.inbox.waitFor((m) => to(officeEmail)(m) && /accepted/.test(m.subject ?? ''));
     const clientMail = await t.inbox.waitFor((m) => to(p.clientEmail)(m) && /You accepted/.test(m.subject ?? ''));
     expect(clientMail.subject).toBe('You accepted the proposal from Gesso & Glaze Studio: Dining room plaster');
+    // Times in the firm's zone (New York by default), never UTC; the client's copy answers to the firm.
+    expect(ownerMail.text).toMatch(/ E[SD]T\./);
+    expect(`${ownerMail.text}${clientMail.text}`).not.toContain('UTC');
+    expect(clientMail.from?.value[0]?.name).toBe('Gesso & Glaze Studio');
+    expect(clientMail.replyTo?.value).toEqual([{ name: '', address: p.email }]);
 
     // Accepting again: 409, nothing new written or sent.
     const again = await accept(p.client, p.version.id);

@@ -59,6 +59,7 @@ export async function mailBoardShown(tx: TenantTx, ctx: AppContext, p: { board: 
       purposeKey: `sample-shown:${p.board.id}:${user.id}`,
       tenantId: tx.tenantId,
       to: user.email,
+      sender: 'firm',
       ...boardShownMail({
         firmName: p.firmName,
         name: user.name,
