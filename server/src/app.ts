@@ -4,7 +4,7 @@ import { absoluteTimeout, createPassport } from './auth/passport-setup';
 import type { AppContext } from './context';
 import { fileRoutes } from './files/routes';
 import { firmRoutes } from './firms/routes';
-import { csrf } from './http/csrf';
+import { csrfProtection } from './http/csrf';
 import { apiNotFound, problemHandler } from './http/errors';
 import { requestLogging } from './http/logger';
 import { refuseUndecodablePath } from './http/bad-path';
@@ -66,7 +66,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use(pass.initialize());
   router.use(pass.session());
   router.use(absoluteTimeout(ctx));
-  router.use(csrf.csrfSynchronisedProtection);
+  router.use(csrfProtection(ctx.config));
   router.use('/auth', authRoutes(ctx, pass, limiter));
   router.use('/portal/boards', portalSampleRoutes(ctx));
   router.use('/portal/proposals', portalProposalRoutes(ctx));

@@ -78,13 +78,21 @@ describe('sign-up, sign-in and sign-out', () => {
     expect(wrong.body.detail).toBe(unknown.body.detail);
   });
 
-  it('locks an account after repeated failures', async () => {
+  it('throttles repeated failures for an e-mail alike whether or not it has an account (no lock, no 423)', async () => {
     const { email, password } = await signUpFirm(t.app);
+    const unknown = uniqueEmail();
     const { agent, csrf } = await newAgent(t.app);
-    for (let i = 0; i < 5; i++)
-      await agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email, password: 'wrong-password-x' });
-    const locked = await agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email, password });
-    expect(locked.status).toBe(423);
+    const attempt = (e: string, p: string) => agent.post('/api/auth/signin').set('x-csrf-token', csrf()).send({ email: e, password: p });
+    for (let i = 0; i < 5; i++) {
+      const known = await attempt(email, 'wrong-password-x');
+      const none = await attempt(unknown, 'wrong-password-x');
+      expect([known.status, none.status]).toEqual([401, 401]);
+      expect(known.body).toEqual({ ...none.body, requestId: known.body.requestId });
+    }
+    const knownThrottled = await attempt(email, password);
+    const unknownThrottled = await attempt(unknown, 'wrong-password-x');
+    expect([knownThrottled.status, unknownThrottled.status]).toEqual([429, 429]);
+    expect(knownThrottled.body).toEqual({ ...unknownThrottled.body, requestId: knownThrottled.body.requestId });
   });
 
   it('refuses a state-changing request without the CSRF token', async () => {

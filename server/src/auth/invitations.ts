@@ -5,7 +5,8 @@ import type { StaffPrincipal } from '../http/principal';
 import { conflict, gone, notFound } from '../http/problem';
 import { recordAudit } from '../audit/record';
 import { loadStaffPrincipal } from './staff-principal';
-import { assertNotLocked, countFailure } from './staff-auth';
+import { passwordHashOf } from './password-store';
+import { assertNotThrottled, countFailedSignIn } from './throttle';
 import { assertAcceptablePassword, hashPassword, verifyPassword } from './passwords';
 import { hashToken } from './tokens';
 
@@ -39,20 +40,20 @@ export async function previewInvitation(ctx: AppContext, token: string): Promise
  * Joins the firm: a new person sets their password here; someone who already has a Layerbook
  * account proves it is theirs with their existing password.
  */
-export async function acceptInvitation(ctx: AppContext, input: InvitationAccept): Promise<StaffPrincipal> {
+export async function acceptInvitation(ctx: AppContext, input: InvitationAccept, address: string): Promise<StaffPrincipal> {
   const found = await findByToken(ctx, input.token);
   assertUsable(found, ctx.now());
   const existing = await withTenant(
     ctx.pool,
     found.tenantId,
-    async (tx) => (await tx.db.select().from(users).where(eq(users.email, found.email)))[0],
+    async (tx) => (await tx.db.select({ id: users.id }).from(users).where(eq(users.email, found.email)))[0],
   );
   let passwordHash: string | null = null;
   if (existing) {
-    // The same lockout as sign-in: an invitation link must not become a way to guess a password.
-    assertNotLocked(existing.lockedUntil, ctx.now());
-    if (!(await verifyPassword(existing.passwordHash, input.password))) {
-      await countFailure(ctx, existing.id, ctx.now());
+    // The same throttle as sign-in: an invitation link must not become a way to guess a password.
+    await assertNotThrottled(ctx, found.email, address);
+    if (!(await verifyPassword((await passwordHashOf(ctx.pool, existing.id)) ?? '', input.password))) {
+      await countFailedSignIn(ctx, found.email, address);
       throw conflict('This e-mail already has a Layerbook account.', [
         { field: 'password', message: 'This e-mail already has an account: enter its current password to join.' },
       ]);

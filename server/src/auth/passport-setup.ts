@@ -1,11 +1,12 @@
 import { signInRequest } from '@layerbook/contracts';
-import type { Request, RequestHandler } from 'express';
+import type { Request, RequestHandler, Response } from 'express';
+import type { Config } from '../config';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { AppContext } from '../context';
 import { asError } from '../http/errors';
 import type { Principal, SessionPrincipal } from '../http/principal';
-import { ABSOLUTE_MS } from '../http/session';
+import { ABSOLUTE_MS, sessionCookieName } from '../http/session';
 import { parse } from '../http/validate';
 import { signIn } from './staff-auth';
 
@@ -23,11 +24,14 @@ export function createPassport(ctx: AppContext): AppPassport {
   const instance = new passport.Passport() as AppPassport;
   instance.use(
     'staff-password',
-    new LocalStrategy({ usernameField: 'email', passwordField: 'password', session: true }, (email, password, done) => {
-      signIn(ctx, parse(signInRequest, { email, password }))
-        .then((principal) => done(null, principal))
-        .catch((error) => done(error));
-    }),
+    new LocalStrategy(
+      { usernameField: 'email', passwordField: 'password', session: true, passReqToCallback: true },
+      (req, email, password, done) => {
+        signIn(ctx, parse(signInRequest, { email, password }), req.ip ?? '')
+          .then((principal) => done(null, principal))
+          .catch((error) => done(error));
+      },
+    ),
   );
   instance.serializeUser((user, done) => {
     const stored: SessionPrincipal = { kind: user.kind, id: user.id, tenantId: user.tenantId };
@@ -53,9 +57,15 @@ export function logOut(req: Request): Promise<void> {
   return new Promise((resolve, reject) => req.logOut((err) => (err ? reject(asError(err)) : resolve())));
 }
 
-/** A fresh, empty session (after signing out, so nothing of the last one carries over). */
-export function regenerateSession(req: Request): Promise<void> {
-  return new Promise((resolve, reject) => req.session.regenerate((err) => (err ? reject(asError(err)) : resolve())));
+/** After signing out: the session row is deleted and its cookie cleared; nothing is written in its place. */
+export function endSession(config: Config, req: Request, res: Response): Promise<void> {
+  return new Promise((resolve, reject) =>
+    req.session.destroy((err) => {
+      if (err) return reject(asError(err));
+      res.clearCookie(sessionCookieName(config), { path: '/' });
+      resolve();
+    }),
+  );
 }
 
 /** Absolute session timeout: a week after sign-in the session ends however active it has been. */

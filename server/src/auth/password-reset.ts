@@ -17,6 +17,7 @@ import { gone, notFound } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
 import { passwordResetMail } from '../mail/templates';
 import { assertAcceptablePassword, hashPassword } from './passwords';
+import { endStaffSessions, setPasswordHash } from './password-store';
 import { firstActivePrincipal } from './staff-auth';
 import { hashToken, minutesFromNow, newToken } from './tokens';
 
@@ -24,7 +25,10 @@ export const RESET_MINUTES = 30;
 
 /** Always succeeds from the caller's point of view, so it never reveals which e-mails have accounts. */
 export async function requestPasswordReset(ctx: AppContext, email: string): Promise<void> {
-  const user = await withGlobal(ctx.pool, async (tx) => (await tx.db.select().from(users).where(eq(users.email, email)))[0]);
+  const user = await withGlobal(
+    ctx.pool,
+    async (tx) => (await tx.db.select({ id: users.id, email: users.email, name: users.name }).from(users).where(eq(users.email, email)))[0],
+  );
   if (!user) return;
   const memberships = await withLookup(ctx.pool, { userId: user.id }, (tx) =>
     tx.db
@@ -69,12 +73,9 @@ export async function completePasswordReset(ctx: AppContext, token: string, pass
     if (reset.expiresAt <= ctx.now()) throw gone('This reset link has expired. Ask for a new one.');
     // This link and any other still open for the person: a completed reset leaves none usable.
     await voidOpenResets(tx.db, reset.userId, ctx.now());
-    await tx.db.update(users).set({ passwordHash, failedSignIns: 0, lockedUntil: null }).where(eq(users.id, reset.userId));
+    await setPasswordHash(tx.client, reset.userId, passwordHash);
     // Whoever held a session (perhaps the reason for the reset) is signed out everywhere.
-    await tx.client.query(
-      `delete from session where sess->'passport'->'user'->>'kind' = 'staff' and sess->'passport'->'user'->>'id' = $1`,
-      [reset.userId],
-    );
+    await endStaffSessions(tx.client, reset.userId);
     return reset.userId;
   });
   return firstActivePrincipal(ctx, userId);

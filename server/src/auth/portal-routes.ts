@@ -1,17 +1,17 @@
 import { portalLinkRequest, portalRedeemRequest, type Notice, type PortalSession } from '@layerbook/contracts';
-import { Request, RequestHandler, Router } from 'express';
+import { Request, RequestHandler, Response, Router } from 'express';
 import type { AppContext } from '../context';
-import { csrf } from '../http/csrf';
+import { csrfToken } from '../http/csrf';
 import { parse } from '../http/validate';
-import { logIn, logOut, regenerateSession } from './passport-setup';
+import { endSession, logIn, logOut } from './passport-setup';
 import { loadClientPrincipal, redeemPortalLink, requestPortalLink } from './portal-auth';
 
-async function portalSession(ctx: AppContext, req: Request, fresh = false): Promise<PortalSession> {
+async function portalSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<PortalSession> {
   const claim = req.user?.kind === 'client' ? req.user : null;
   const client = claim ? await loadClientPrincipal(ctx.pool, claim.id, claim.tenantId) : null;
   return {
     client: client ? { id: client.id, name: client.name, email: client.email, firmId: client.tenantId, firmName: client.firmName } : null,
-    csrfToken: csrf.generateToken(req, fresh),
+    csrfToken: csrfToken(ctx.config, req, res, fresh),
   };
 }
 
@@ -20,7 +20,7 @@ export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): 
   const router = Router();
 
   router.get('/session', async (req, res) => {
-    res.set('cache-control', 'no-store').json(await portalSession(ctx, req));
+    res.set('cache-control', 'no-store').json(await portalSession(ctx, req, res));
   });
 
   router.post('/auth/link', linkLimiter, async (req, res) => {
@@ -32,13 +32,13 @@ export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): 
     const { token } = parse(portalRedeemRequest, req.body);
     const principal = await redeemPortalLink(ctx, token);
     await logIn(req, principal, ctx.now());
-    res.json(await portalSession(ctx, req, true));
+    res.json(await portalSession(ctx, req, res, true));
   });
 
   router.post('/auth/signout', async (req, res) => {
     await logOut(req);
-    await regenerateSession(req);
-    res.json(await portalSession(ctx, req, true));
+    await endSession(ctx.config, req, res);
+    res.json(await portalSession(ctx, req, res, true));
   });
 
   return router;

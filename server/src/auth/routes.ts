@@ -12,37 +12,37 @@ import {
 import { Request, Response, Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
-import { csrf } from '../http/csrf';
+import { csrfToken } from '../http/csrf';
 import { asError } from '../http/errors';
 import type { Principal } from '../http/principal';
 import { loadStaffPrincipal } from './staff-principal';
 import { parse } from '../http/validate';
 import { acceptInvitation, previewInvitation } from './invitations';
-import { logIn, logOut, regenerateSession, type AppPassport } from './passport-setup';
+import { endSession, logIn, logOut, type AppPassport } from './passport-setup';
 import { completePasswordReset, requestPasswordReset } from './password-reset';
 import { signUp } from './staff-auth';
 
-export async function staffSession(ctx: AppContext, req: Request, fresh = false): Promise<StaffSession> {
+export async function staffSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<StaffSession> {
   const claim = req.user?.kind === 'staff' ? req.user : null;
   const user = claim ? await loadStaffPrincipal(ctx.pool, claim.id, claim.tenantId) : null;
   return {
     user: user
       ? { id: user.id, name: user.name, email: user.email, role: user.role, firmId: user.tenantId, firmName: user.firmName }
       : null,
-    csrfToken: csrf.generateToken(req, fresh),
+    csrfToken: csrfToken(ctx.config, req, res, fresh),
   };
 }
 
 async function signInAndAnswer(ctx: AppContext, req: Request, res: Response, principal: Principal, status = 200) {
   await logIn(req, principal, ctx.now());
-  res.status(status).json(await staffSession(ctx, req, true));
+  res.status(status).json(await staffSession(ctx, req, res, true));
 }
 
 export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: import('express').RequestHandler): Router {
   const router = Router();
 
   router.get('/session', async (req, res) => {
-    res.set('cache-control', 'no-store').json((await staffSession(ctx, req)) satisfies StaffSession);
+    res.set('cache-control', 'no-store').json((await staffSession(ctx, req, res)) satisfies StaffSession);
   });
 
   router.post('/signup', signInLimiter, async (req, res) => {
@@ -64,8 +64,8 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
 
   router.post('/signout', async (req, res) => {
     await logOut(req);
-    await regenerateSession(req);
-    res.json(await staffSession(ctx, req, true));
+    await endSession(ctx.config, req, res);
+    res.json(await staffSession(ctx, req, res, true));
   });
 
   router.post('/password-reset', signInLimiter, async (req, res) => {
@@ -84,7 +84,7 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
   });
 
   router.post('/invitations/accept', signInLimiter, async (req, res) => {
-    await signInAndAnswer(ctx, req, res, await acceptInvitation(ctx, parse(invitationAccept, req.body)));
+    await signInAndAnswer(ctx, req, res, await acceptInvitation(ctx, parse(invitationAccept, req.body), req.ip ?? ''));
   });
 
   return router;

@@ -7,11 +7,12 @@ import { conflict, HttpError } from '../http/problem';
 import { recordAudit } from '../audit/record';
 import { isSlugTaken, slugCandidates } from '../firms/slug';
 import { isUniqueViolation } from '../http/pg-errors';
+import { passwordHashOf } from './password-store';
 import { loadStaffPrincipal } from './staff-principal';
+import { assertNotThrottled, clearFailedSignIns, countFailedSignIn } from './throttle';
 import { assertAcceptablePassword, decoyPasswordHash, hashPassword, verifyPassword } from './passwords';
 
 const WRONG = () => new HttpError(401, 'Sign-in failed', 'E-mail or password is not right.');
-const LOCK_AFTER = 5;
 const emailTaken = () =>
   conflict('An account with this e-mail already exists.', [
     { field: 'email', message: 'An account with this e-mail already exists; sign in instead.' },
@@ -53,52 +54,25 @@ async function createFirmWithOwner(
   });
 }
 
-/** Checks a password with per-account lockout and back-off; failures never say which part was wrong. */
-export async function signIn(ctx: AppContext, input: SignInRequest): Promise<StaffPrincipal> {
-  const now = ctx.now();
-  const user = await withGlobal(ctx.pool, async (tx) => (await tx.db.select().from(users).where(eq(users.email, input.email)))[0]);
-  if (!user) {
-    await verifyPassword(await decoyPasswordHash(), input.password);
-    throw WRONG();
-  }
-  assertNotLocked(user.lockedUntil, now);
-  if (!(await verifyPassword(user.passwordHash, input.password))) {
-    await countFailure(ctx, user.id, now);
-    throw WRONG();
-  }
-  if (user.failedSignIns || user.lockedUntil) {
-    await withGlobal(ctx.pool, (tx) => tx.db.update(users).set({ failedSignIns: 0, lockedUntil: null }).where(eq(users.id, user.id)));
-  }
-  return firstActivePrincipal(ctx, user.id);
-}
-
-/** An account locked by repeated failures answers 423 wherever its password is checked. */
-export function assertNotLocked(lockedUntil: Date | null, now: Date): void {
-  if (lockedUntil && lockedUntil > now) {
-    const minutes = Math.ceil((lockedUntil.getTime() - now.getTime()) / 60_000);
-    throw new HttpError(
-      423,
-      'Account locked for now',
-      `Too many failed attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`,
-    );
-  }
-}
-
 /**
- * Counts a failed attempt in one statement, so parallel guesses each count. Back-off doubles from
- * one minute after the fifth failure, capped at an hour.
+ * Checks a password. Every failure answers the same 401 (an unknown e-mail is verified against a
+ * decoy hash, so it takes as long); repeated failures are throttled per e-mail and address, never
+ * locked (throttle.ts). The hash is read through a security-definer function (password-store.ts).
  */
-export async function countFailure(ctx: AppContext, userId: string, now: Date): Promise<void> {
-  await withGlobal(ctx.pool, (tx) =>
-    tx.client.query(
-      `update users set failed_sign_ins = failed_sign_ins + 1,
-              locked_until = case when failed_sign_ins + 1 >= $2
-                                  then $3::timestamptz + make_interval(mins => least(power(2, failed_sign_ins + 1 - $2)::int, 60))
-                                  else locked_until end
-        where id = $1`,
-      [userId, LOCK_AFTER, now.toISOString()],
-    ),
+export async function signIn(ctx: AppContext, input: SignInRequest, address: string): Promise<StaffPrincipal> {
+  await assertNotThrottled(ctx, input.email, address);
+  const user = await withGlobal(
+    ctx.pool,
+    async (tx) => (await tx.db.select({ id: users.id }).from(users).where(eq(users.email, input.email)))[0],
   );
+  const passwordHash = user ? await passwordHashOf(ctx.pool, user.id) : null;
+  if (!user || !passwordHash || !(await verifyPassword(passwordHash, input.password))) {
+    if (!passwordHash) await verifyPassword(await decoyPasswordHash(), input.password);
+    await countFailedSignIn(ctx, input.email, address);
+    throw WRONG();
+  }
+  await clearFailedSignIns(ctx, input.email, address);
+  return firstActivePrincipal(ctx, user.id);
 }
 
 /** A person may belong to several firms; they enter the one they joined first. */

@@ -3,7 +3,7 @@ import { rateLimit } from 'express-rate-limit';
 import { HttpError } from './problem';
 
 /**
- * Per-IP limit for sign-in and one-time-link routes (per-account lockout is in staff-auth).
+ * Per-IP limit for sign-in and one-time-link routes (per e-mail throttling is in auth/throttle.ts).
  * The counter lives in this process; with several web processes each counts on its own.
  */
 export function signInRateLimit(limit: number): RequestHandler {

@@ -7,6 +7,8 @@ export const QUEUES = {
   followUpSweep: 'follow-up-sweep',
   followUpDigest: 'follow-up-digest',
   followUpDead: 'follow-up-dead',
+  pruneExpired: 'prune-expired',
+  pruneDead: 'prune-dead',
 } as const;
 
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
@@ -15,6 +17,11 @@ export const QUEUE_OPTIONS: ReadonlyArray<{ name: QueueName; options: Omit<PgBos
   // The dead-letter queue first: a queue may only name one that exists.
   { name: QUEUES.mailDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
   { name: QUEUES.followUpDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
+  { name: QUEUES.pruneDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
+  {
+    name: QUEUES.pruneExpired,
+    options: { retryLimit: 3, retryDelay: 60, retryBackoff: true, expireInSeconds: 300, retentionDays: 3, deadLetter: QUEUES.pruneDead },
+  },
   {
     name: QUEUES.followUpSweep,
     options: { retryLimit: 2, retryDelay: 60, retryBackoff: true, expireInSeconds: 300, retentionDays: 3, deadLetter: QUEUES.followUpDead },
@@ -48,3 +55,6 @@ export interface FollowUpDigestJob {
 /** Hourly, on the hour plus five (UTC); each firm's digest goes out at FOLLOW_UP_LOCAL_HOUR its time. */
 export const FOLLOW_UP_SWEEP_CRON = '5 * * * *';
 export const FOLLOW_UP_LOCAL_HOUR = 7;
+
+/** Hourly at twenty past (UTC): expired sessions, old form stamps and sign-in throttle windows go. */
+export const PRUNE_EXPIRED_CRON = '20 * * * *';

@@ -6,7 +6,8 @@ import { sendOutboxMail } from '../mail/send-mail-job';
 import { sendProposalReminders } from '../proposals/expiry-reminders';
 import { sendFollowUpDigest, sweepFollowUps } from './follow-ups';
 import type { StartedQueue } from './job-queue';
-import { FOLLOW_UP_SWEEP_CRON, FollowUpDigestJob, FollowUpSweepJob, MailSendJob, QUEUES } from './queues';
+import { pruneExpired } from './prune';
+import { FOLLOW_UP_SWEEP_CRON, FollowUpDigestJob, FollowUpSweepJob, MailSendJob, PRUNE_EXPIRED_CRON, QUEUES } from './queues';
 
 export interface Workers {
   stop(): Promise<void>;
@@ -44,8 +45,10 @@ export async function startWorkers(config: Config, queue: StartedQueue, logger: 
     await sendFollowUpDigest(pool, queue, config, data, logger);
     await sendProposalReminders(pool, queue, config, data, logger, now());
   });
+  await workEach<object>(boss, QUEUES.pruneExpired, 1, async () => logger.info(await pruneExpired(pool, now()), 'pruned expired rows'));
   // Declared once; pg-boss keeps one schedule per queue however many processes call this.
   await boss.schedule(QUEUES.followUpSweep, FOLLOW_UP_SWEEP_CRON, {}, { tz: 'UTC' });
+  await boss.schedule(QUEUES.pruneExpired, PRUNE_EXPIRED_CRON, {}, { tz: 'UTC' });
   return {
     async stop() {
       // Workers stop with the queue (boss.stop); here only what the workers opened.

@@ -47,7 +47,10 @@ export const DEMO = {
 } as const;
 
 export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'created' | 'present'> {
-  const existing = await withGlobal(pool, async (tx) => (await tx.db.select().from(users).where(eq(users.email, DEMO.people[0].email)))[0]);
+  const existing = await withGlobal(
+    pool,
+    async (tx) => (await tx.db.select({ id: users.id }).from(users).where(eq(users.email, DEMO.people[0].email)))[0],
+  );
   if (existing) return 'present';
   const passwordHash = await hashPassword(DEMO.password);
   const firmId = randomUUID();
