@@ -34,10 +34,10 @@ type LikelihoodControls = Record<InquiryStage, FormControl<number | null>>;
   template: `
     <form [formGroup]="form" (ngSubmit)="saveLikelihoods()" novalidate aria-labelledby="likelihood-heading">
       <fieldset class="lb-gate" [disabled]="!isHydrated()">
-        <h2 id="likelihood-heading">Chance of winning by stage</h2>
+        <h2 id="likelihood-heading">Stage odds</h2>
         <p class="lead">
-          Each open inquiry's estimated value is multiplied by its stage's chance to give the weighted pipeline. Set these from your own
-          record, for example how many sample boards turn into jobs.
+          Out of 100 inquiries at each stage, how many usually turn into work. Today counts the likely work from these; set them from your
+          own record, for example how many sample boards turn into jobs.
         </p>
         <lb-form-alert [message]="message()" />
         @if (hasLoaded()) {
@@ -133,7 +133,7 @@ export class StageLikelihoodsForm {
     const saved = await this.submission.send(this.form, () => this.api.saveStageLikelihoods(body));
     if (saved) {
       this.likelihoods.set(saved);
-      this.snackBar.open('Chances of winning saved.', 'Close', { duration: 4000 });
+      this.snackBar.open('Stage odds saved.', 'Close', { duration: 4000 });
     }
   }
 }

@@ -3,6 +3,7 @@ import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, ElementRef, Injector, afterNextRender, computed, inject, signal } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatTooltipModule } from '@angular/material/tooltip';
 import { RouterLink } from '@angular/router';
 import type { BoardColumn, InquiryStage, InquirySummary, ItemList } from '@layerbook/contracts/types';
 import { FirmCurrency } from '../../core/firm/firm-currency';
@@ -14,10 +15,22 @@ import { InquiryCard } from './inquiry-card';
 import { InquiryViews } from './inquiry-views';
 import { StageMover } from './stage-mover';
 import { STAGE_ICONS } from './stage-icons';
+import { stageOddsTip } from './stage-odds';
 
 @Component({
   selector: 'lb-inquiry-board',
-  imports: [CdkDrag, CdkDropList, CdkDropListGroup, FormAlert, InquiryCard, InquiryViews, MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [
+    CdkDrag,
+    CdkDropList,
+    CdkDropListGroup,
+    FormAlert,
+    InquiryCard,
+    InquiryViews,
+    MatIconModule,
+    MatProgressBarModule,
+    MatTooltipModule,
+    RouterLink,
+  ],
   templateUrl: './inquiry-board.html',
   styleUrl: './inquiry-board.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -35,6 +48,7 @@ export class InquiryBoard {
   protected readonly message = computed(() => this.boardMessage() ?? this.moveMessage());
   protected readonly currency = this.firmCurrency.code;
   protected readonly stageIcons = STAGE_ICONS;
+  protected readonly oddsTip = stageOddsTip;
   /** On touch screens a swipe should scroll the board; a press-and-hold picks a card up. */
   protected readonly dragDelay = { touch: 300, mouse: 0 };
 

@@ -8,6 +8,7 @@ import { Session } from '../../core/auth/session';
 import { loadMessage } from '../../shared/forms/load-message';
 import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
+import { LIKELY_WORK_WORDS } from '../inquiries/stage-odds';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 
 /** What needs the office today: follow-ups that are late or due, and where the pipeline stands. */
@@ -19,6 +20,7 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class Today {
+  protected readonly words = LIKELY_WORK_WORDS;
   /** Crew never see money figures, and the server refuses them this view anyway. */
   protected readonly seesInquiries = inject(Session).hasRole('office');
   protected readonly summary = httpResource<TodayView>(() => (this.seesInquiries ? '/api/inquiries/today' : undefined));
