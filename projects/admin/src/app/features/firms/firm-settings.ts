@@ -34,6 +34,7 @@ import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { EstimatingSettingsForm } from './estimating-settings';
 import { FirmApi } from './firm-api';
+import { InquiryFormLink } from './inquiry-form-link';
 import { StageLikelihoodsForm } from './stage-likelihoods';
 import { timeZoneChoices } from './time-zones';
 
@@ -45,6 +46,7 @@ const COUNTRY_CHOICES = [...COUNTRIES].sort((a, b) => a.name.localeCompare(b.nam
   imports: [
     EstimatingSettingsForm,
     FormAlert,
+    InquiryFormLink,
     MatButtonModule,
     MatFormFieldModule,
     MatIconModule,
