@@ -17,7 +17,7 @@ import { Router } from 'express';
 import type { AppContext } from '../context';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
-import { parse } from '../http/validate';
+import { parse, parseChanges } from '../http/validate';
 import { addContact, addSite, createClient, getClient, listClients, updateClient, updateSite } from './service';
 
 export function clientRoutes(ctx: AppContext): Router {
@@ -40,7 +40,7 @@ export function clientRoutes(ctx: AppContext): Router {
 
   router.patch('/:id', async (req, res) => {
     const updated = await withStaff(ctx, req, 'office', (tx) =>
-      updateClient(tx, parse(clientIdParam, req.params).id, parse(clientUpdate, req.body), ctx.now()),
+      updateClient(tx, parse(clientIdParam, req.params).id, parseChanges(clientUpdate, req.body), ctx.now()),
     );
     res.json(updated satisfies ClientSummary);
   });
@@ -65,7 +65,7 @@ export function siteRoutes(ctx: AppContext): Router {
   const router = Router();
   router.patch('/:id', async (req, res) => {
     const site = await withStaff(ctx, req, 'office', (tx) =>
-      updateSite(tx, parse(siteIdParam, req.params).id, parse(siteUpdate, req.body)),
+      updateSite(tx, parse(siteIdParam, req.params).id, parseChanges(siteUpdate, req.body)),
     );
     res.json(site satisfies SiteView);
   });

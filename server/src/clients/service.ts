@@ -104,7 +104,7 @@ export async function listClients(tx: TenantTx, q: ClientListQuery): Promise<Key
     where.push(`(name ilike ${like} or email ilike ${like} or phone ilike ${like})`);
   }
   if (q.after) {
-    const c = decodeCursor(q.after);
+    const c = decodeCursor(q.after, 'timestamptz');
     where.push(`(created_at, id) < (${add(c.sortValue)}::timestamptz, ${add(c.id)}::uuid)`);
   }
   const { rows } = await tx.client.query<ClientListRow>(

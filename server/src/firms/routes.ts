@@ -4,7 +4,7 @@ import type { AppContext } from '../context';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
 import { badRequest } from '../http/problem';
-import { parse } from '../http/validate';
+import { parse, parseChanges } from '../http/validate';
 import { isKnownCurrency } from './currencies';
 import { getEstimatingSettings, saveEstimatingSettings } from './estimating';
 import { getFirm, updateFirm } from './service';
@@ -20,7 +20,7 @@ export function firmRoutes(ctx: AppContext): Router {
 
   router.patch('/', async (req, res) => {
     const firm = await withStaff(ctx, req, 'owner', (tx, staff) => {
-      const input = parse(firmSettingsUpdate, req.body);
+      const input = parseChanges(firmSettingsUpdate, req.body);
       if (!isKnownCurrency(input.currency)) throw badRequest([{ field: 'currency', message: 'Choose a currency from the list.' }]);
       return updateFirm(tx, staffActor(staff), input, ctx.now());
     });

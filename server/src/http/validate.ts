@@ -25,3 +25,15 @@ export function fieldProblems(error: z.ZodError): FieldProblem[] {
   }
   return problems;
 }
+
+/**
+ * A PATCH body: parsed like any other, and refused alike on every route when it names nothing to
+ * change (an empty object), rather than reaching an UPDATE with no columns.
+ */
+export function parseChanges<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
+  const changes: unknown = parse(schema, input);
+  if (typeof changes === 'object' && changes !== null && Object.values(changes).every((v) => v === undefined)) {
+    throw badRequest([{ field: '(body)', message: 'Nothing to change: send at least one field.' }]);
+  }
+  return changes as z.infer<S>;
+}

@@ -34,7 +34,7 @@ export function buildListQuery(tenantId: string, q: InquiryListQuery): { text: s
     where.push(`(i.contact_name ilike ${like} or i.email ilike ${like} or i.site_address ilike ${like} or i.phone ilike ${like})`);
   }
   if (q.after) {
-    const c = decodeCursor(q.after);
+    const c = decodeCursor(q.after, sort.cast);
     where.push(`(${sort.key}, i.id) ${sort.dir === 'desc' ? '<' : '>'} (${add(c.sortValue)}::${sort.cast}, ${add(c.id)}::uuid)`);
   }
   const text = `select ${SUMMARY_COLUMNS}, (${sort.key})::text as sort_value ${SUMMARY_FROM}

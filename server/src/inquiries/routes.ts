@@ -22,7 +22,7 @@ import type { AppContext } from '../context';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
 import type { StaffPrincipal } from '../http/principal';
-import { parse } from '../http/validate';
+import { parse, parseChanges } from '../http/validate';
 import { staffClock } from './clock';
 import { convertInquiry } from './convert';
 import { getInquiry } from './detail';
@@ -80,7 +80,7 @@ export function inquiryRoutes(ctx: AppContext): Router {
   router.patch('/:id', async (req, res) => {
     const updated = await withStaff(ctx, req, 'office', async (tx, staff) => {
       const { id } = parse(inquiryIdParam, req.params);
-      await updateInquiry(tx, staffActor(staff), id, parse(inquiryUpdate, req.body), ctx.now());
+      await updateInquiry(tx, staffActor(staff), id, parseChanges(inquiryUpdate, req.body), ctx.now());
       return getInquiry(tx, id, today(staff));
     });
     res.json(updated satisfies InquiryDetail);

@@ -16,7 +16,7 @@ import { z } from 'zod';
 import type { AppContext } from '../context';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
-import { parse } from '../http/validate';
+import { parse, parseChanges } from '../http/validate';
 import { createProduct, getProduct, listProducts, setProductArchived, updateProduct } from './products';
 import { createSystem, duplicateSystem, getSystem, listSystems, setSystemArchived, updateSystem } from './systems';
 
@@ -46,7 +46,7 @@ export function libraryRoutes(ctx: AppContext): Router {
   });
   router.patch('/products/:id', async (req, res) => {
     const saved = await withStaff(ctx, req, 'office', (tx, staff) =>
-      updateProduct(tx, staffActor(staff), parse(productParam, req.params).id, parse(productUpdate, req.body), ctx.now()),
+      updateProduct(tx, staffActor(staff), parse(productParam, req.params).id, parseChanges(productUpdate, req.body), ctx.now()),
     );
     res.json(saved satisfies ProductView);
   });
@@ -78,7 +78,7 @@ export function libraryRoutes(ctx: AppContext): Router {
   });
   router.patch('/systems/:id', async (req, res) => {
     const saved = await withStaff(ctx, req, 'office', (tx, staff) =>
-      updateSystem(tx, staffActor(staff), parse(systemParam, req.params).id, parse(finishSystemUpdate, req.body), ctx.now()),
+      updateSystem(tx, staffActor(staff), parse(systemParam, req.params).id, parseChanges(finishSystemUpdate, req.body), ctx.now()),
     );
     res.json(saved satisfies FinishSystemView);
   });

@@ -166,7 +166,7 @@ export interface EstimateListQuery {
 
 /** Newest first, keyset over (created_at, id) — the index the table has — so a deep page costs the same as the first. */
 export async function listEstimates(tx: TenantTx, q: EstimateListQuery): Promise<KeysetPage<EstimateListItem>> {
-  const after = q.after ? decodeCursor(q.after) : null;
+  const after = q.after ? decodeCursor(q.after, 'timestamptz') : null;
   const rows = await tx.db
     .select({
       id: estimates.id,

@@ -11,7 +11,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { withStaff } from '../http/guards';
-import { parse } from '../http/validate';
+import { parse, parseChanges } from '../http/validate';
 import { proposalFilename } from './pdf/filename';
 import { renderProposalPdf } from './pdf/render-proposal';
 import { createVersion, getVersion, listVersions, updateDraft } from './proposal-versions';
@@ -48,7 +48,7 @@ export function proposalRoutes(ctx: AppContext): Router {
   router.patch('/:id', async (req, res) => {
     res.json(
       (await withStaff(ctx, req, 'office', (tx, staff) =>
-        updateDraft(tx, staff.id, parse(idParam, req.params).id, parse(proposalUpdate, req.body), ctx.now()),
+        updateDraft(tx, staff.id, parse(idParam, req.params).id, parseChanges(proposalUpdate, req.body), ctx.now()),
       )) satisfies ProposalVersionView,
     );
   });

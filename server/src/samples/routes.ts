@@ -13,7 +13,7 @@ import type { AppContext } from '../context';
 import { mountPhotoRoutes } from '../files/photo-routes';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
-import { parse } from '../http/validate';
+import { parse, parseChanges } from '../http/validate';
 import { addBoardPhoto, deleteBoardPhoto, listBoardPhotos } from './board-photos';
 import { createBoard, findBoard, getBoard, listBoards, showBoard, startNextRound, updateBoard } from './boards';
 
@@ -57,7 +57,7 @@ export function sampleRoutes(ctx: AppContext): Router {
 
   router.patch('/:id', async (req, res) => {
     const board = await withStaff(ctx, req, 'office', (tx, staff) =>
-      updateBoard(tx, staffActor(staff), parse(boardParam, req.params).id, parse(sampleBoardUpdate, req.body), ctx.now()),
+      updateBoard(tx, staffActor(staff), parse(boardParam, req.params).id, parseChanges(sampleBoardUpdate, req.body), ctx.now()),
     );
     res.json(board satisfies SampleBoardView);
   });

@@ -15,7 +15,7 @@ import type { AppContext } from '../context';
 import { discardObjects } from '../files/stored-files';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
-import { parse } from '../http/validate';
+import { parse, parseChanges } from '../http/validate';
 import { roomPhotoRoutes } from './photo-routes';
 import {
   addRoom,
@@ -57,7 +57,7 @@ export function takeoffRoutes(ctx: AppContext): Router {
 
   router.patch('/rooms/:id', async (req, res) => {
     const room = await withStaff(ctx, req, 'office', (tx) =>
-      updateRoom(tx, parse(roomParam, req.params).id, parse(roomUpdate, req.body), ctx.now()),
+      updateRoom(tx, parse(roomParam, req.params).id, parseChanges(roomUpdate, req.body), ctx.now()),
     );
     res.json(room satisfies RoomView);
   });
@@ -84,7 +84,7 @@ export function takeoffRoutes(ctx: AppContext): Router {
 
   router.patch('/surfaces/:id', async (req, res) => {
     const surface = await withStaff(ctx, req, 'office', (tx) =>
-      updateSurface(tx, parse(surfaceParam, req.params).id, parse(surfaceUpdate, req.body), ctx.now()),
+      updateSurface(tx, parse(surfaceParam, req.params).id, parseChanges(surfaceUpdate, req.body), ctx.now()),
     );
     res.json(surface satisfies SurfaceView);
   });

@@ -9,6 +9,13 @@ export const MONEY_AMOUNT_PATTERN = /^\d{1,12}(\.\d{1,2})?$/;
 /** A calendar day as the API sends and takes it: "2026-03-14". */
 export const ISO_DATE_PATTERN = /^\d{4}-\d{2}-\d{2}$/;
 
+/**
+ * Years a calendar day may fall in. Outside them a date is a typing slip (0026 for 2026), and year
+ * 0000 does not exist in PostgreSQL's calendar at all.
+ */
+export const DATE_YEAR_MIN = 1900;
+export const DATE_YEAR_MAX = 2999;
+
 /** ISO 3166-1 alpha-2, as typed in capitals: "US". */
 export const COUNTRY_CODE_PATTERN = /^[A-Z]{2}$/;
 
