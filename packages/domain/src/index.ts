@@ -51,11 +51,11 @@ export type {
   ProductHazards,
   ProductionRate,
 } from './finishes/finish-system';
-export { concentrateShare, splitDilutedMix } from './finishes/dilution';
+export { DILUTION_OF_CONCENTRATE_MAX, concentrateShare, splitDilutedMix } from './finishes/dilution';
 export type { RecipeShare } from './finishes/mix-recipe';
 export { recipeShares } from './finishes/mix-recipe';
 export type { LayerQuantity, SurfaceAmount } from './finishes/layer-quantity';
-export { layerQuantity } from './finishes/layer-quantity';
+export { WASTE_MAX, layerQuantity } from './finishes/layer-quantity';
 export type { ContainerPack, PackLine } from './finishes/container-pack';
 export { chooseContainers } from './finishes/container-pack';
 export type { BatchLine, PerBaseRecipe } from './finishes/mix-batch';

@@ -68,6 +68,18 @@ describe('finish systems', () => {
     expect((await o.agent.get('/api/library/systems').query({ archived: 'include' })).body.items).toHaveLength(2);
   });
 
+  it('accepts 1:1 and 2:1 washes: water 100 % and 200 % of the product', async () => {
+    const { o, tint, medium } = await firmWithProducts();
+    for (const share of [1, 2]) {
+      const res = await o.agent
+        .post('/api/library/systems')
+        .set('x-csrf-token', o.csrf())
+        .send({ name: `Wash ${share}:1`, layers: [{ ...glazeLayer(tint, medium), dilution: { share, convention: 'ofConcentrate' } }] });
+      expect(res.status).toBe(201);
+      expect(res.body.layers[0].dilution).toEqual({ share, convention: 'ofConcentrate' });
+    }
+  });
+
   it('names the exact layer field for bad input and saves nothing', async () => {
     const { o, primer, lime, tint, medium } = await firmWithProducts();
     const send = (layers: unknown, name = 'Bad') =>
@@ -86,7 +98,18 @@ describe('finish systems', () => {
     expect(fields(zero.body)).toEqual(['layers.1.coverage.surfacePerUnit']);
 
     const diluted = await send([{ ...glazeLayer(tint, medium), dilution: { share: 1, convention: 'ofMix' } }]);
-    expect(diluted.body.errors).toEqual([{ field: 'layers.0.dilution.share', message: 'Dilution must be under 100 %.' }]);
+    expect(diluted.body.errors).toEqual([
+      { field: 'layers.0.dilution.share', message: 'Water as a share of the final mix must be under 100 %.' },
+    ]);
+    // 20:1 is refused naming the field (a 2:1 wash is accepted: see below)
+    const flood = await send([{ ...glazeLayer(tint, medium), dilution: { share: 20, convention: 'ofConcentrate' } }]);
+    expect(flood.body.errors).toEqual([
+      { field: 'layers.0.dilution.share', message: 'Water as a share of the product is at most 1000 % (10 parts water to 1).' },
+    ]);
+    const wasteful = await send([{ ...p, waste: 1.5 }]);
+    expect(wasteful.body.errors).toEqual([
+      { field: 'layers.0.waste', message: 'Waste above 100 % is refused: enter it as a share, like 0.1 for 10 %.' },
+    ]);
 
     const coats = await send([{ ...limeLayer(lime), coats: 3 }]);
     expect(coats.body.errors).toEqual([{ field: 'layers.0.coatCoverages', message: 'Give one coverage per coat: 3 coats, 2 given.' }]);

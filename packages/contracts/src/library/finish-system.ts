@@ -38,12 +38,25 @@ export const coverageInput = z.discriminatedUnion(
   { error: 'Choose spread rate (surface per unit) or consumption (product per surface).' },
 );
 
-export const dilutionInput = z.strictObject({
-  share: numberField('Enter the dilution as a share, like 0.1 for 10 %.')
-    .min(0, { error: 'The dilution cannot be negative.' })
-    .lt(1, { error: 'Dilution must be under 100 %.' }),
-  convention: z.enum(DILUTION_CONVENTIONS, { error: 'Say whether the water is a share of the product or of the final mix.' }),
-});
+const concentrateMaxPercent = L.dilutionOfConcentrateMax * 100;
+/** Water as a share of the product may pass 100 % (a 1:1 wash is 100 %, 2:1 is 200 %); as a share of the mix it may not. */
+export const dilutionInput = z
+  .strictObject({
+    share: numberField('Enter the dilution as a share, like 0.1 for 10 %.').min(0, { error: 'The dilution cannot be negative.' }),
+    convention: z.enum(DILUTION_CONVENTIONS, { error: 'Say whether the water is a share of the product or of the final mix.' }),
+  })
+  .superRefine((d, ctx) => {
+    if (d.convention === 'ofMix' && d.share >= 1) {
+      ctx.addIssue({ code: 'custom', path: ['share'], message: 'Water as a share of the final mix must be under 100 %.' });
+    }
+    if (d.convention === 'ofConcentrate' && d.share > L.dilutionOfConcentrateMax) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['share'],
+        message: `Water as a share of the product is at most ${concentrateMaxPercent} % (${L.dilutionOfConcentrateMax} parts water to 1).`,
+      });
+    }
+  });
 
 export const mixRecipeInput = z
   .strictObject({
@@ -98,7 +111,7 @@ export const finishLayerInput = z
     dilution: dilutionInput.optional(),
     waste: numberField('Enter the waste as a share, like 0.1 for 10 %.')
       .min(0, { error: 'Waste cannot be negative.' })
-      .lt(1, { error: 'Waste must be under 100 %.' }),
+      .max(L.wasteMax, { error: 'Waste above 100 % is refused: enter it as a share, like 0.1 for 10 %.' }),
     productionRate: z.strictObject({
       surfacePerHour: positive('Enter how much surface one worker finishes in an hour.', 'The production rate must be more than zero.'),
       lengthUnit,

@@ -177,6 +177,7 @@ export const MULTIPLIER_LABELS: Readonly<Record<MultiplierName, string>> = {
  * `flammableClass` decides the category; apps and server both call it.
  */
 export { FLAMMABLE_FLASH_MAX_C } from '@layerbook/domain';
+import { DILUTION_OF_CONCENTRATE_MAX, WASTE_MAX } from '@layerbook/domain';
 
 export const PRODUCT_LIMITS = {
   nameMax: 120,
@@ -204,6 +205,10 @@ export const FINISH_SYSTEM_LIMITS = {
   multiplierMax: 5,
   recipeProductsMin: 2,
   recipeProductsMax: 8,
+  /** water as a share of the product: up to 10 parts to 1 (the domain's DILUTION_OF_CONCENTRATE_MAX) */
+  dilutionOfConcentrateMax: DILUTION_OF_CONCENTRATE_MAX,
+  /** the domain's WASTE_MAX: 100 % */
+  wasteMax: WASTE_MAX,
 } as const;
 
 /* Request bodies, as the apps send them; the zod schemas in product.ts and finish-system.ts are checked against these. */

@@ -43,6 +43,26 @@ describe('layer quantities (DOMAIN.md §2.3 [D]; qty = area × share × coats / 
     expect(ofConc.concentrate / ofConc.mix).toBeCloseTo(1 / 1.1, 12);
   });
 
+  it.each([
+    // water as a share of the concentrate: 1:1 wash = 100 %, 2:1 = 200 % (common practice, no source)
+    [1, 1 / 2],
+    [2, 1 / 3],
+    [10, 1 / 11],
+  ])('a %d:1 wash is accepted; concentrate is %d of the mix', (share, concentrate) => {
+    const q = layerQuantity(DOME, { ...DOME_GLAZE, dilution: { share, convention: 'ofConcentrate' } }, productMap());
+    expect(q.concentrate / q.mix).toBeCloseTo(concentrate, 12);
+  });
+
+  it('waste of exactly 100 % doubles the amount (the limit itself is accepted)', () => {
+    const none = layerQuantity(WALLS, { ...PRIMER, waste: 0 }, productMap());
+    const full = layerQuantity(WALLS, { ...PRIMER, waste: 1 }, productMap());
+    expect(full.mix / none.mix).toBeCloseTo(2, 12);
+  });
+
+  it.each([Number.NaN, Number.POSITIVE_INFINITY, '12' as unknown as number])('a surface quantity of %p is refused', (quantity) => {
+    expectInputError(() => layerQuantity({ ...WALLS, quantity }, PRIMER, productMap()), 'surface.quantity', /finite/);
+  });
+
   it('wet film check: 1 gal over 400 ft² is 4.0 mils (1604 rule, paintcenter.org Ask the Expert Dec 2007)', () => {
     // 1 US gal over 1 ft² = 231 in³ / 144 in² = 1.604 in = 1604 mils (NIST Handbook 44 App. C)
     const milsPerGallonPerFt2 = (convertQuantity(1, 'gallon', 'in3') / 144) * 1000;
@@ -52,7 +72,10 @@ describe('layer quantities (DOMAIN.md §2.3 [D]; qty = area × share × coats / 
 
   it.each([
     [{ ...PRIMER, coverage: { ...PRIMER.coverage, surfacePerUnit: 0 } }, 'layer.coverage.surfacePerUnit', /greater than zero/],
-    [{ ...DOME_GLAZE, dilution: { share: 1, convention: 'ofMix' as const } }, 'layer.dilution.share', /100 %/],
+    [{ ...DOME_GLAZE, dilution: { share: 1, convention: 'ofMix' as const } }, 'layer.dilution.share', /final mix must be under 100 %/],
+    [{ ...DOME_GLAZE, dilution: { share: 10.5, convention: 'ofConcentrate' as const } }, 'layer.dilution.share', /at most 1000 %/],
+    [{ ...PRIMER, waste: 1.01 }, 'layer.waste', /above 100 %/],
+    [{ ...PRIMER, waste: Number.NaN }, 'layer.waste', /finite/],
     [{ ...DOME_GLAZE, dilution: { share: -0.1, convention: 'ofMix' as const } }, 'layer.dilution.share', /negative/],
     [{ ...PRIMER, coats: 0 }, 'layer.coats', /at least 1/],
     [{ ...PRIMER, coverageShare: 1.3 }, 'layer.coverageShare', /between 0 and 1/],

@@ -78,6 +78,9 @@ function prepareCoat(surfaceUnit: LengthUnit, c: Coverage, field: string): Prepa
   throw new DomainInputError(`${field}.kind`, `"${String(unknown.kind)}" is not a coverage kind.`);
 }
 
+/** Waste is at most 100 % of what goes on the surface (common practice, no source). */
+export const WASTE_MAX = 1;
+
 /** Every check `layerQuantity` makes that does not depend on the surface, in the same order. */
 export function prepareLayerQuantity(
   layer: FinishLayer,
@@ -88,6 +91,9 @@ export function prepareLayerQuantity(
   const coats = requireInteger(layer.coats, `${field}.coats`, 1, 'number of coats');
   const share = layer.coverageShare === undefined ? 1 : requireFraction(layer.coverageShare, `${field}.coverageShare`, 'coverage share');
   const waste = requireNonNegative(layer.waste, `${field}.waste`, 'waste');
+  // common practice, no source: waste is a share of what goes on the wall; more than 100 % is a typo
+  if (waste > WASTE_MAX)
+    throw new DomainInputError(`${field}.waste`, 'Waste above 100 % is refused: enter it as a share, like 0.1 for 10 %.');
   if (layer.coatCoverages && layer.coatCoverages.length !== coats) {
     throw new DomainInputError(`${field}.coatCoverages`, `Give one coverage per coat (${coats}).`);
   }

@@ -1,6 +1,6 @@
 import Decimal from 'decimal.js';
 import { DomainInputError } from '../errors/domain-input-error';
-import { requireFiniteNumber } from '../errors/input-checks';
+import { requireFiniteNumber, toDecimal } from '../errors/input-checks';
 
 export type LengthUnit = 'mm' | 'cm' | 'm' | 'in' | 'ft' | 'yd';
 
@@ -80,12 +80,12 @@ export function convertArea(value: number, from: LengthUnit, to: LengthUnit): nu
 export function convertLengthExact(value: Decimal.Value, from: LengthUnit, to: LengthUnit): Decimal {
   requireLengthUnit(from, 'from');
   requireLengthUnit(to, 'to');
-  return new Decimal(value).times(METRES_PER[from]).div(METRES_PER[to]);
+  return toDecimal(value, 'value', 'value').times(METRES_PER[from]).div(METRES_PER[to]);
 }
 
 export function convertAreaExact(value: Decimal.Value, from: LengthUnit, to: LengthUnit): Decimal {
   requireLengthUnit(from, 'from');
   requireLengthUnit(to, 'to');
   const ratio = new Decimal(METRES_PER[from]).div(METRES_PER[to]);
-  return new Decimal(value).times(ratio).times(ratio);
+  return toDecimal(value, 'value', 'value').times(ratio).times(ratio);
 }

@@ -1,5 +1,7 @@
 import { DomainInputError } from '../errors/domain-input-error';
-import { convertQuantity, convertQuantityExact } from './quantity-unit';
+import { expectInputError } from '../errors/expect-input-error';
+import { convertArea, convertAreaExact, convertLength, convertLengthExact } from './length';
+import { convertQuantity, convertQuantityExact, fromBase, toBase } from './quantity-unit';
 
 describe('volume and mass conversion', () => {
   it.each([
@@ -37,5 +39,19 @@ describe('volume and mass conversion', () => {
 
   it('will not turn fluid ounces into ounces without a density', () => {
     expect(() => convertQuantity(1, 'floz', 'oz')).toThrow(DomainInputError);
+  });
+});
+
+describe('conversions refuse what is not a number with DomainInputError', () => {
+  const bad = [Number.NaN, Number.POSITIVE_INFINITY, 'abc', undefined, {}] as unknown as number[];
+  it.each(bad)('%p', (value) => {
+    expectInputError(() => convertQuantity(value, 'gallon', 'L'), 'value');
+    expectInputError(() => convertQuantityExact(value, 'gallon', 'L'), 'value');
+    expectInputError(() => toBase(value, 'gallon'), 'value');
+    expectInputError(() => fromBase(value, 'gallon'), 'value');
+    expectInputError(() => convertLength(value, 'ft', 'm'), 'value');
+    expectInputError(() => convertArea(value, 'ft', 'm'), 'value');
+    expectInputError(() => convertLengthExact(value, 'ft', 'm'), 'value');
+    expectInputError(() => convertAreaExact(value, 'ft', 'm'), 'value');
   });
 });

@@ -1,6 +1,6 @@
 import Decimal from 'decimal.js';
 import { DomainInputError } from '../errors/domain-input-error';
-import { requireFiniteNumber } from '../errors/input-checks';
+import { requireFiniteNumber, toDecimal } from '../errors/input-checks';
 
 /** US customary kitchen and trade volumes, cubic units, and metric volumes. */
 export type VolumeUnit = 'mL' | 'L' | 'cm3' | 'm3' | 'in3' | 'ft3' | 'tsp' | 'tbsp' | 'floz' | 'cup' | 'pint' | 'quart' | 'gallon';
@@ -62,11 +62,13 @@ export function dimensionOf(unit: QuantityUnit, field = 'unit'): Dimension {
 
 /** Base unit of each dimension: millilitres for volume, grams for mass. */
 export function toBase(value: number, unit: QuantityUnit, field = 'unit'): number {
+  requireFiniteNumber(value, 'value');
   dimensionOf(unit, field);
   return value * BASE_PER_NUMBER[unit];
 }
 
 export function fromBase(value: number, unit: QuantityUnit, field = 'unit'): number {
+  requireFiniteNumber(value, 'value');
   dimensionOf(unit, field);
   return value / BASE_PER_NUMBER[unit];
 }
@@ -87,6 +89,7 @@ export function convertQuantity(value: number, from: QuantityUnit, to: QuantityU
 
 /** Exact decimal conversion, for recipes and audits. */
 export function convertQuantityExact(value: Decimal.Value, from: QuantityUnit, to: QuantityUnit): Decimal {
+  const exact = toDecimal(value, 'value', 'value');
   requireSameDimension(from, to);
-  return new Decimal(value).times(BASE_PER[from]).div(BASE_PER[to]);
+  return exact.times(BASE_PER[from]).div(BASE_PER[to]);
 }

@@ -79,8 +79,12 @@ export class LayerCard {
       positive: 'The share must be more than 0 %.',
       max: 'The share is at most 100 %.',
     },
-    dilution: { min: 'The dilution cannot be negative.', max: 'Dilution must be under 100 %.' },
-    waste: { required: 'Enter the waste (0 for none).', min: 'Waste cannot be negative.', max: 'Waste must be under 100 %.' },
+    dilution: {
+      min: 'The dilution cannot be negative.',
+      ofMixMax: 'Water as a share of the final mix must be under 100 %.',
+      ofConcentrateMax: `Water as a share of the product is at most ${L.dilutionOfConcentrateMax * 100} % (${L.dilutionOfConcentrateMax} parts water to 1).`,
+    },
+    waste: { required: 'Enter the waste (0 for none).', min: 'Waste cannot be negative.', max: 'Waste above 100 % is refused.' },
     rate: { ...NUMBER, positive: 'The production rate must be more than zero.' },
     multiplier: { min: 'A multiplier is at least 1 (no extra time).', max: 'A multiplier above 5 is surely a typo.' },
     wait: {

@@ -40,6 +40,19 @@ export function newLayerId(): string {
   return typeof c?.randomUUID === 'function' ? c.randomUUID() : `l${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}`;
 }
 
+/**
+ * The dilution typed in percent, checked against its convention as the API checks it: water as a
+ * share of the product may pass 100 % (a 1:1 wash is 100 %, 2:1 is 200 %) up to the contract's
+ * limit; water as a share of the final mix stays under 100 %.
+ */
+export function dilutionShareLimit(control: AbstractControl): ValidationErrors | null {
+  const share: unknown = control.value;
+  if (typeof share !== 'number' || !Number.isFinite(share)) return null;
+  const convention = control.parent?.get('convention')?.value as DilutionConvention | undefined;
+  if (convention === 'ofMix') return share >= 100 ? { ofMixMax: true } : null;
+  return share > L.dilutionOfConcentrateMax * 100 ? { ofConcentrateMax: true } : null;
+}
+
 const toPercent = (share: number) => Math.round(share * 100 * 1e6) / 1e6;
 /** A blank number becomes NaN, which the API refuses by name; the form's own validators catch it first. */
 const num = (v: number | null) => v ?? Number.NaN;
@@ -97,13 +110,14 @@ export function layerGroup(fb: NonNullableFormBuilder, layer?: FinishLayerInput)
     coatCoverages: fb.array((layer?.coatCoverages ?? []).map((c) => coverageGroup(fb, c))),
     coverageShare: fb.control<number | null>(toPercent(layer?.coverageShare ?? 1), [Validators.required, positive, Validators.max(100)]),
     dilution: fb.group({
-      share: fb.control<number | null>(layer?.dilution ? toPercent(layer.dilution.share) : null, [
-        Validators.min(0),
-        Validators.max(99.999),
-      ]),
+      share: fb.control<number | null>(layer?.dilution ? toPercent(layer.dilution.share) : null, [Validators.min(0), dilutionShareLimit]),
       convention: fb.control<DilutionConvention>(layer?.dilution?.convention ?? 'ofConcentrate'),
     }),
-    waste: fb.control<number | null>(toPercent(layer?.waste ?? 0.1), [Validators.required, Validators.min(0), Validators.max(99.999)]),
+    waste: fb.control<number | null>(toPercent(layer?.waste ?? 0.1), [
+      Validators.required,
+      Validators.min(0),
+      Validators.max(L.wasteMax * 100),
+    ]),
     productionRate: fb.group({
       surfacePerHour: fb.control<number | null>(layer?.productionRate.surfacePerHour ?? 250, [Validators.required, positive]),
       lengthUnit: fb.control<LengthUnit>(layer?.productionRate.lengthUnit ?? 'ft', Validators.required),
@@ -140,6 +154,9 @@ export function layerGroup(fb: NonNullableFormBuilder, layer?: FinishLayerInput)
     while (list.length > wanted) list.removeAt(list.length - 1);
     toggle(list, true);
   };
+  const dilution = group.controls.dilution.controls;
+  dilution.convention.valueChanges.subscribe(() => dilution.share.updateValueAndValidity());
+  dilution.share.updateValueAndValidity({ emitEvent: false });
   group.controls.source.valueChanges.subscribe(syncSource);
   group.controls.isPerCoat.valueChanges.subscribe(syncCoats);
   group.controls.coats.valueChanges.subscribe(syncCoats);
