@@ -55,7 +55,7 @@ export function hazardWords(h: ProductHazardsInput): HazardWord[] {
   const words: HazardWord[] = [];
   const flammable = flammableClass(h.flashPointC, h.boilingPointC);
   if (flammable) {
-    words.push({ icon: 'local_fire_department', text: `Flammable, ${flammable.label} (flash point ${h.flashPointC} °C)` });
+    words.push({ icon: 'local_fire_department', text: `Flammable, ${flammable.label} (flash point ${h.flashPointC}\u00a0°C)` });
   }
   if (h.containsDryingOil) words.push({ icon: 'whatshot', text: 'Oily rags self-heat (drying oil)' });
   if (h.isLime) words.push({ icon: 'science', text: 'Caustic (lime)' });
@@ -68,10 +68,10 @@ const isNumber = (n: number | null | undefined): n is number => typeof n === 'nu
 /** Shown beside the flash point as it is typed, so the rule is visible rather than hidden in the server. */
 export function flammableNote(flashPointC: number | null | undefined, boilingPointC?: number | null): string {
   if (!isNumber(flashPointC)) {
-    return `Leave empty if it does not burn. At or below ${FLAMMABLE_FLASH_MAX_C} °C it counts as flammable (29 CFR 1910.106(a)(19)).`;
+    return `Leave empty if it does not burn. At or below ${FLAMMABLE_FLASH_MAX_C}\u00a0°C it counts as flammable (29 CFR 1910.106(a)(19)).`;
   }
   const flammable = flammableClass(flashPointC, isNumber(boilingPointC) ? boilingPointC : undefined);
   return flammable
-    ? `Flammable, ${flammable.label}: ${flashPointC} °C is at or below ${FLAMMABLE_FLASH_MAX_C} °C (29 CFR 1910.106(a)(19)). Crew sheets will carry the fire cautions.`
-    : `Above ${FLAMMABLE_FLASH_MAX_C} °C, so not a flammable liquid under 29 CFR 1910.106(a)(19); it can still burn. Keep it away from flames.`;
+    ? `Flammable, ${flammable.label}: ${flashPointC}\u00a0°C is at or below ${FLAMMABLE_FLASH_MAX_C}\u00a0°C (29 CFR 1910.106(a)(19)). Crew sheets will carry the fire cautions.`
+    : `Above ${FLAMMABLE_FLASH_MAX_C}\u00a0°C, so not a flammable liquid under 29 CFR 1910.106(a)(19); it can still burn. Keep it away from flames.`;
 }
