@@ -25,7 +25,10 @@ describe('library words', () => {
 
   it.each([
     [null, 'Leave empty if it does not burn. At or below 93\u00a0°C it counts as flammable (29 CFR 1910.106(a)(19)).'],
-    [12, 'Flammable, category 1 or 2: 12\u00a0°C is at or below 93\u00a0°C (29 CFR 1910.106(a)(19)). Crew sheets will carry the fire cautions.'],
+    [
+      12,
+      'Flammable, category 1 or 2: 12\u00a0°C is at or below 93\u00a0°C (29 CFR 1910.106(a)(19)). Crew sheets will carry the fire cautions.',
+    ],
     [40, 'Flammable, category 3: 40\u00a0°C is at or below 93\u00a0°C (29 CFR 1910.106(a)(19)). Crew sheets will carry the fire cautions.'],
     [120, 'Above 93\u00a0°C, so not a flammable liquid under 29 CFR 1910.106(a)(19); it can still burn. Keep it away from flames.'],
   ])('flammableNote(%s)', (c, note) => expect(flammableNote(c)).toBe(note));
