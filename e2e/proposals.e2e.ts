@@ -74,7 +74,7 @@ test('the office measures a round room with a turret ceiling and builds an estim
   await page.getByRole('tabpanel').getByRole('group', { name: 'Turret study' }).getByLabel('Same finish for the whole room').click();
   await page.getByRole('option', { name: 'Two-coat limewash' }).click();
   await page.getByRole('button', { name: 'Save estimate' }).click();
-  await expect(page.getByText("Saved — these are the server's numbers.")).toBeVisible();
+  await expect(page.getByText('Saved — these are the figures on record.')).toBeVisible();
   await expect(page.getByText('All changes saved')).toBeVisible();
   await page.screenshot({ path: 'e2e/.artifacts/estimate-builder.png', fullPage: true });
 

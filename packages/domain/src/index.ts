@@ -101,7 +101,7 @@ export { perAreaCheck, perAreaGap } from './pricing/per-area-check';
 
 // billing
 export type { PaymentBasis, PaymentLine, PaymentLineInput, PaymentTrigger } from './billing/payment-schedule';
-export { buildPaymentSchedule } from './billing/payment-schedule';
+export { buildPaymentSchedule, paymentLabel } from './billing/payment-schedule';
 export type { DepositCapRule, DepositCheck } from './billing/deposit-cap';
 export { checkDeposit, depositCap } from './billing/deposit-cap';
 export type { ChangeOrder } from './billing/change-orders';
@@ -127,6 +127,8 @@ export { FLAMMABLE_FLASH_MAX_C, flammableClass } from './safety/flammable';
 export type { EstimateInput, EstimateOption, EstimateRoom, EstimateSurface, FirmSettings } from './estimate/estimate-input';
 export type { EstimateResult, LayerLine, ProductTotal, SurfaceResult } from './estimate/compute-estimate';
 export { computeEstimate } from './estimate/compute-estimate';
+export type { OptionCaution } from './estimate/merge-cautions';
+export { mergeCautions } from './estimate/merge-cautions';
 export type { EstimateResultJson, Jsonified } from './estimate/result-json';
 export { toResultJson } from './estimate/result-json';
 

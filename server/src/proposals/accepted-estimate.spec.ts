@@ -55,3 +55,22 @@ describe('an accepted estimate is read-only', () => {
     expect(listed.items.find((i) => i.id === p.estimateId)?.price).toBe(before.price);
   });
 });
+
+describe('after acceptance', () => {
+  it('the office e-mail’s "Open the job" opens the job the acceptance made', async () => {
+    const p = await sentProposal(t, 'Open Job Stucco');
+    const ownerEmail = (await p.agent.get('/api/auth/session')).body.user.email as string;
+    const accepted = await p.client.agent
+      .post(`/api/portal/proposals/${p.version.id}/accept`)
+      .set('x-csrf-token', p.client.csrf())
+      .send({ variantId: 'B', signedName: 'Edwina Marl', consent: true });
+    expect(accepted.status).toBe(200);
+    const job = await withTenant(t.ctx.pool, p.firmId, (tx) =>
+      tx.client.query<{ id: string }>(`select id from jobs where estimate_id = $1`, [p.estimateId]),
+    );
+    const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(ownerEmail) && /accepted/.test(m.subject ?? ''));
+    expect(mail.text).toContain(`Open the job`);
+    expect(mail.text).toContain(`/jobs/${job.rows[0].id}`);
+    expect(mail.text).not.toContain('/estimates/');
+  });
+});

@@ -1,5 +1,5 @@
 import type { ProposalSnapshot, ProposalTerms, SnapshotCaution, SnapshotOption, SnapshotRoom } from '@layerbook/contracts';
-import { type DepositCapRule, minorUnitDigits, STANDING_LINE } from '@layerbook/domain';
+import { type DepositCapRule, mergeCautions, minorUnitDigits, STANDING_LINE } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { optionPayments } from './payment-plan';
 import type { ProposalSources, StoredVariant } from './proposal-sources';
@@ -47,17 +47,9 @@ function scopeByRoom(src: ProposalSources, unit: 'ft' | 'm'): SnapshotRoom[] {
     .map((r) => ({ id: r.id, name: r.name, surfaces: [...r.surfaces.values()] }));
 }
 
-/** The engine's cautions across all options, once each, bullets merged in order. */
+/** The engine's cautions across all options, once each, each line once (the domain merges them). */
 function safetyNotes(variants: readonly StoredVariant[]): SnapshotCaution[] {
-  const byId = new Map<string, { id: string; title: string; bullets: string[]; rule: string; standing: string }>();
-  for (const v of variants) {
-    for (const c of v.result.cautions) {
-      const seen = byId.get(c.id);
-      if (!seen) byId.set(c.id, { id: c.id, title: c.title, bullets: [...c.bullets], rule: c.rule, standing: c.standing });
-      else for (const b of c.bullets) if (!seen.bullets.includes(b)) seen.bullets.push(b);
-    }
-  }
-  return [...byId.values()];
+  return mergeCautions(variants.map((v) => v.result.cautions)).map((c) => ({ ...c, bullets: [...c.bullets] }));
 }
 
 function option(v: StoredVariant, currency: string, digits: number, choice: ProposalChoice): SnapshotOption {

@@ -43,7 +43,8 @@ export async function mailAcceptance(
       purposeKey: `proposal-accepted:${p.row.id}:${staff.id}`,
       tenantId: tx.tenantId,
       to: staff.email,
-      ...proposalAcceptedMail({ ...common, url: `${base}/estimates/${p.row.estimate_id}` }),
+      // "Open the job" opens the job the acceptance made, where the payment schedule is checked
+      ...proposalAcceptedMail({ ...common, url: `${base}/jobs/${p.jobId}` }),
     });
   }
   await enqueueMail(tx, ctx.queue, {

@@ -1,5 +1,5 @@
 import type { ProposalTerms, SnapshotPayment } from '@layerbook/contracts';
-import { buildPaymentSchedule, checkDeposit, type DepositCapRule, type PaymentLineInput } from '@layerbook/domain';
+import { buildPaymentSchedule, checkDeposit, paymentLabel, type DepositCapRule, type PaymentLineInput } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 
 export interface ScheduleFacts {
@@ -31,7 +31,7 @@ export function optionPayments(
   if (terms.depositPercent > 0) {
     lines.push({
       id: 'deposit',
-      label: 'Deposit on acceptance',
+      label: paymentLabel('deposit', { kind: 'acceptance' }),
       role: 'deposit',
       basis: { kind: 'share', share: share(terms.depositPercent) },
       trigger: { kind: 'acceptance' },
@@ -42,7 +42,7 @@ export function optionPayments(
   if (base && terms.progressPercent > 0) {
     lines.push({
       id: 'progress',
-      label: `Progress payment: ${base.label} complete`,
+      label: paymentLabel('milestone', { kind: 'layerComplete', layerId: base.layerId }, base.label),
       role: 'milestone',
       basis: { kind: 'share', share: share(terms.progressPercent) },
       trigger: { kind: 'layerComplete', layerId: base.layerId },
@@ -52,7 +52,7 @@ export function optionPayments(
   }
   lines.push({
     id: 'final',
-    label: 'Final payment on completion',
+    label: paymentLabel('final', { kind: 'walkthrough' }),
     role: 'final',
     basis: { kind: 'remainder' },
     trigger: { kind: 'walkthrough' },

@@ -95,7 +95,8 @@ describe('proposal versions', () => {
       ['final', null],
     ]);
     expect(a.payments[1]).toMatchObject({
-      label: 'Progress payment: Primer complete',
+      // named from its trigger, the layer the schedule waits for (not a "base coats" the terms guessed)
+      label: 'Progress payment when Primer is finished on every surface',
       trigger: { kind: 'layerComplete', layerId: 'prime' },
     });
     // 30 % and 40 % of the total, split to the cent by largest remainder (the domain's rule).

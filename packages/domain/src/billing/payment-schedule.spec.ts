@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { expectInputError } from '../errors/expect-input-error';
 import { respreadSchedule } from './change-orders';
 import { checkDeposit, depositCap } from './deposit-cap';
-import { type PaymentLineInput, buildPaymentSchedule } from './payment-schedule';
+import { type PaymentLineInput, buildPaymentSchedule, paymentLabel } from './payment-schedule';
 
 const acceptance = { kind: 'acceptance' } as const;
 const thirds: PaymentLineInput[] = [
@@ -18,6 +18,26 @@ const thirds: PaymentLineInput[] = [
   { id: 'final', label: 'Final', role: 'final', basis: { kind: 'remainder' }, trigger: { kind: 'walkthrough' } },
 ];
 const amounts = (lines: Array<{ amount: Decimal }>): string[] => lines.map((l) => l.amount.toFixed(2));
+
+describe('payment labels say what makes each payment due (common practice, no source)', () => {
+  it.each([
+    ['deposit' as const, acceptance, undefined, 'Deposit on acceptance'],
+    [
+      'milestone' as const,
+      { kind: 'layerComplete' as const, layerId: 'base' },
+      'Base coat',
+      'Progress payment when Base coat is finished on every surface',
+    ],
+    [
+      'milestone' as const,
+      { kind: 'layerComplete' as const, layerId: 'base' },
+      '  ',
+      'Progress payment when the chosen layer is finished on every surface',
+    ],
+    ['milestone' as const, { kind: 'date' as const, date: '2026-12-14' }, undefined, 'Progress payment due 2026-12-14'],
+    ['final' as const, { kind: 'walkthrough' as const }, undefined, 'Final payment on completion, after the walkthrough'],
+  ])('%s on %j (layer %j) is "%s"', (role, trigger, layerName, label) => expect(paymentLabel(role, trigger, layerName)).toBe(label));
+});
 
 describe('payment schedule (common practice, DOMAIN.md §2.11)', () => {
   it('thirds with the rest on the final payment', () => {

@@ -12,6 +12,26 @@ export type PaymentBasis = { kind: 'share'; share: Ratio } | { kind: 'amount'; a
 export type PaymentTrigger =
   { kind: 'acceptance' } | { kind: 'date'; date: IsoDate } | { kind: 'layerComplete'; layerId: string } | { kind: 'walkthrough' };
 
+const ROLE_WORDS: Record<PaymentLineInput['role'], string> = { deposit: 'Deposit', milestone: 'Progress payment', final: 'Final payment' };
+
+/**
+ * A payment line's name, said from what makes it due, so the schedule, the terms and the job all
+ * read the same event: "Progress payment when Base coat is finished on every surface", never
+ * "Primer complete" beside terms that speak of other coats. `layerName` names a layerComplete trigger.
+ */
+export function paymentLabel(role: PaymentLineInput['role'], trigger: PaymentTrigger, layerName?: string): string {
+  switch (trigger.kind) {
+    case 'acceptance':
+      return `${ROLE_WORDS[role]} on acceptance`;
+    case 'date':
+      return `${ROLE_WORDS[role]} due ${trigger.date}`;
+    case 'layerComplete':
+      return `${ROLE_WORDS[role]} when ${layerName?.trim() || 'the chosen layer'} is finished on every surface`;
+    case 'walkthrough':
+      return `${ROLE_WORDS[role]} on completion, after the walkthrough`;
+  }
+}
+
 export interface PaymentLineInput {
   id: string;
   label: string;

@@ -31,7 +31,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { AddOnsSection } from './addons-section';
 import { EstimateApi } from './estimate-api';
 import { MAX_OPTIONS, WORDS, estimateForm, fillForm, nextOptionId, optionGroup, readInputs } from './estimate-form';
-import { readOnlyReason, statusWord } from './estimate-words';
+import { SAVED_WORDS, readOnlyReason, statusWord } from './estimate-words';
 import { ExtrasFields } from './extras-fields';
 import { applySaveProblem, targetKey } from './field-targets';
 import { LabourSection } from './labour-section';
@@ -99,6 +99,7 @@ export class EstimateBuilder implements OnInit {
   protected readonly words = WORDS;
   protected readonly errorText = errorText;
   protected readonly statusWord = statusWord;
+  protected readonly savedWords = SAVED_WORDS;
   /** bumps on every value or status change of the form: the signals below read the form through it */
   protected readonly revision = signal(0);
   private readonly baseline = signal('');

@@ -8,6 +8,7 @@ import {
   multiplierChain,
   percentText,
   readOnlyReason,
+  SAVED_WORDS,
   statusWord,
 } from './estimate-words';
 
@@ -16,6 +17,10 @@ const layer = (waitHoursAfter: number) => ({ productId: 'p', waitHoursAfter }) a
 describe('estimate words', () => {
   it('names statuses with the contract labels', () => {
     expect(statusWord('proposed')).toBe('Proposal sent');
+  });
+
+  it('says a save keeps the figures on record, not "the server\'s numbers"', () => {
+    expect(SAVED_WORDS).toBe('Saved — these are the figures on record.');
   });
 
   it.each([

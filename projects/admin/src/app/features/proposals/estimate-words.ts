@@ -3,6 +3,9 @@ import { outlineFinish, roundedNumber, waitText, type FinishLayer } from '@layer
 
 export const statusWord = (status: EstimateStatus): string => ESTIMATE_STATUS_LABELS[status];
 
+/** Said once a save comes back: the stored figures, in the office's words (not the machine's). */
+export const SAVED_WORDS = 'Saved — these are the figures on record.';
+
 /** Why the builder opens read-only (the API answers 409 to any change), or null while it can change. */
 export function readOnlyReason(status: EstimateStatus): string | null {
   return status === 'accepted'

@@ -13,6 +13,7 @@ import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ProposalApi } from './proposal-api';
+import { PROGRESS_PAYMENT_HINT } from './proposal-words';
 import { MAX_EXCLUSIONS, MAX_TEXT, PROPOSAL_WORDS, fillProposal, placeExclusionErrors, proposalForm, readProposal } from './proposal-form';
 
 /**
@@ -48,7 +49,7 @@ import { MAX_EXCLUSIONS, MAX_TEXT, PROPOSAL_WORDS, fillProposal, placeExclusionE
             <mat-form-field class="pct">
               <mat-label>Progress payment (%)</mat-label>
               <input matInput type="number" inputmode="numeric" min="0" max="100" step="1" formControlName="progressPercent" required />
-              <mat-hint>When the base coats are done. The rest is due on completion.</mat-hint>
+              <mat-hint>{{ progressHint }}</mat-hint>
               <mat-error>{{ errorText(form.controls.terms.controls.progressPercent, words.percent) }}</mat-error>
             </mat-form-field>
           </ng-container>
@@ -125,6 +126,7 @@ export class ProposalEditor implements OnInit {
   protected readonly isSaving = signal(false);
   protected readonly message = signal<string | null>(null);
   protected readonly words = PROPOSAL_WORDS;
+  protected readonly progressHint = PROGRESS_PAYMENT_HINT;
   protected readonly errorText = errorText;
   protected readonly maxExclusions = MAX_EXCLUSIONS;
   protected readonly maxText = MAX_TEXT;

@@ -20,8 +20,15 @@ export function versionStatus(status: ProposalVersionStatus): StatusLook {
   return { word: PROPOSAL_VERSION_STATUS_LABELS[status], icon: VERSION_ICONS[status] };
 }
 
-/** The terms wording a new proposal starts from; the office edits it freely. */
-export const DEFAULT_TERMS_TEXT = 'Deposit due on acceptance; progress payment when the base coats are done; the balance on completion.';
+/**
+ * The terms wording a new proposal starts from; the office edits it freely. The progress payment
+ * is said as its payment line says it (the layer the schedule waits for), not as "the base coats".
+ */
+export const DEFAULT_TERMS_TEXT =
+  'Deposit due on acceptance; progress payment when the layer named in the payment schedule is finished on every surface; the balance on completion.';
+
+/** The hint beside the progress payment field, in the same words as the payment line. */
+export const PROGRESS_PAYMENT_HINT = 'When the layer named in each payment schedule is finished everywhere. The rest is due on completion.';
 
 export const DEFAULT_EXCLUSIONS = ['Repairs to the plaster beneath', 'Moving furniture'];
 

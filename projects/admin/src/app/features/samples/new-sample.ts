@@ -26,6 +26,7 @@ import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
+import { finishChoiceText } from './finish-words';
 import { FINISH_SYSTEMS_URL, SampleApi } from './sample-api';
 
 /** A new board: whose it is (client, optional site), which finish it shows, a label and notes. */
@@ -83,7 +84,7 @@ import { FINISH_SYSTEMS_URL, SampleApi } from './sample-api';
             <mat-select formControlName="finishSystemId">
               <mat-option [value]="''">Not chosen yet</mat-option>
               @for (f of systems(); track f.id) {
-                <mat-option [value]="f.id">{{ f.name }} ({{ f.layerCount }} layers)</mat-option>
+                <mat-option [value]="f.id">{{ finishChoiceText(f.name, f.layerCount) }}</mat-option>
               }
             </mat-select>
             @if (form.controls.finishSystemId.invalid) {
@@ -147,6 +148,7 @@ export class NewSample {
 
   protected readonly isHydrated = hydratedSignal();
   protected readonly siteWords = siteLine;
+  protected readonly finishChoiceText = finishChoiceText;
   protected readonly clientOptions = signal<readonly ClientSummary[]>([]);
   /** the client chosen from the search, whose sites the form offers */
   private readonly chosenClientId = signal<string | null>(null);

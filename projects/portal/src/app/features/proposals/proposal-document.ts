@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import { MatIconModule } from '@angular/material/icon';
 import type { ProposalSnapshot, SnapshotOption } from '@layerbook/contracts/types';
 import { formatDay, formatMoney } from '../../shared/format/money';
+import { paymentTermsSentence } from './terms-words';
 
 /** The proposal as sent, drawn only from its frozen snapshot: what the PDF says, on the page. */
 @Component({
@@ -16,6 +17,7 @@ export class ProposalDocument {
   /** the option the client accepted, shown as chosen */
   readonly chosenOptionId = input<string | null>(null);
 
+  protected readonly termsSentence = paymentTermsSentence;
   protected readonly optionLabels = computed(() => new Map(this.snapshot().options.map((o) => [o.id, o.label])));
 
   protected money(amount: string): string {

@@ -1,0 +1,40 @@
+import { mergeCautions, type OptionCaution } from './merge-cautions';
+
+// Merging is presentation, not a rule: common practice, no source. The wording merged is the engine's own.
+const lime = (names: string): OptionCaution => ({
+  id: 'lime-alkali',
+  title: 'Lime is caustic',
+  rule: 'ICSC 0408 (calcium hydroxide)',
+  standing: 's',
+  bullets: [`Lime products: ${names}.`, 'Keep eyewash on site; flush eyes or skin with water for at least 15 minutes.'],
+});
+
+describe('mergeCautions: one document, each caution and each line once', () => {
+  it.each([
+    ['the same lime in both options', [[lime('Lime putty')], [lime('Lime putty')]], 'Lime products: Lime putty.'],
+    ['another lime in option B', [[lime('Lime putty')], [lime('Marmorino')]], 'Lime products: Lime putty, Marmorino.'],
+    [
+      'overlapping lists',
+      [[lime('Lime putty, Marmorino')], [lime('Marmorino, Limewash')]],
+      'Lime products: Lime putty, Marmorino, Limewash.',
+    ],
+  ])('%s gives one "Lime products" line', (_, perOption, line) => {
+    const [merged, ...others] = mergeCautions(perOption);
+    expect(others).toEqual([]);
+    expect(merged.bullets).toEqual([line, 'Keep eyewash on site; flush eyes or skin with water for at least 15 minutes.']);
+    expect(merged.bullets.filter((b) => b.startsWith('Lime products'))).toHaveLength(1);
+  });
+
+  it('keeps cautions in first-seen order and sentences that are not lists as they are', () => {
+    const height: OptionCaution = {
+      id: 'height',
+      title: 'Work at height',
+      rule: 'r',
+      standing: 's',
+      bullets: ['Use a guardrail: always.'],
+    };
+    const merged = mergeCautions([[height], [lime('Lime putty'), { ...height, bullets: ['Use a guardrail: always.', 'Check the base.'] }]]);
+    expect(merged.map((c) => c.id)).toEqual(['height', 'lime-alkali']);
+    expect(merged[0].bullets).toEqual(['Use a guardrail: always.', 'Check the base.']);
+  });
+});
