@@ -94,7 +94,8 @@ export const uniqueEmail = (prefix = 'person') => `${prefix}.${Date.now().toStri
 export async function signUpFirm(app: Express, firmName = 'Test Plaster Studio') {
   const { agent, csrf, refresh } = await newAgent(app);
   const email = uniqueEmail('owner');
-  const password = 'trowel-and-lime-2026';
+  // No word of four letters or more, so no firm name a spec picks can make it a context word.
+  const password = 'qz7-xRv4-mn2W-p9k';
   const res = await agent.post('/api/auth/signup').set('x-csrf-token', csrf()).send({ firmName, name: 'Olive Owner', email, password });
   if (res.status !== 201) throw new Error(`signup failed: ${res.status} ${JSON.stringify(res.body)}`);
   const { user } = res.body as StaffSession;
