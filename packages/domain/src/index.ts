@@ -35,6 +35,7 @@ export type { Opening, SurfaceKind, SurfaceMeasure, SurfaceShape, TakeoffSetting
 export { DEFAULT_TAKEOFF_SETTINGS, convertMeasure, measureSurface } from './geometry/measure-surface';
 export { convertShape } from './geometry/convert-shape';
 export { shoelaceArea } from './geometry/ceilings';
+export { roomWallHeight, withCeilingElevation } from './geometry/ceiling-elevation';
 export { measureText, totalsText, workingText } from './geometry/measure-text';
 
 // finishes

@@ -1,4 +1,4 @@
-import type { EstimateInput } from '@layerbook/domain';
+import { roomWallHeight, withCeilingElevation, type EstimateInput } from '@layerbook/domain';
 import type { EstimateInputs } from '../proposals/estimate-types';
 import type { EstimateContext } from './context';
 import { toEngineSettings } from './settings';
@@ -6,13 +6,15 @@ import { toEngineSettings } from './settings';
 /**
  * The engine input for one option (variant) of an estimate. The browser runs this on every
  * keystroke and the server on save, so both compute from exactly the same input.
- * Surfaces without a finish in this option are left out; rooms left empty are dropped.
+ * Surfaces without a finish in this option are left out; rooms left empty are dropped. A ceiling
+ * measured without its elevation starts at the room's wall height (all its walls, finished or not).
  */
 export function assembleEstimateInput(context: EstimateContext, inputs: EstimateInputs, variantId: string): EstimateInput {
   const variant = inputs.variants.find((v) => v.id === variantId) ?? inputs.variants[0];
   const finishBySurface = new Map(variant.surfaces.map((s) => [s.surfaceId, s.finishSystemId]));
   const rooms = context.rooms
-    .map((room) => ({
+    .map((room) => ({ room, wallHeight: roomWallHeight(room.surfaces.map((s) => s.shape)) }))
+    .map(({ room, wallHeight }) => ({
       id: room.id,
       name: room.name,
       isExterior: room.isExterior,
@@ -21,7 +23,7 @@ export function assembleEstimateInput(context: EstimateContext, inputs: Estimate
         .map((s) => ({
           id: s.id,
           name: s.name,
-          shape: s.shape,
+          shape: withCeilingElevation(s.shape, wallHeight),
           finishSystemId: finishBySurface.get(s.id)!,
           ...(s.disturbedPaintedArea !== null ? { disturbedPaintedArea: Number(s.disturbedPaintedArea) } : {}),
         })),
@@ -30,6 +32,7 @@ export function assembleEstimateInput(context: EstimateContext, inputs: Estimate
   const usedSystems = new Set(finishBySurface.values());
   return {
     settings: toEngineSettings(context.settings, context.lengthUnit, context.currency),
+    ...(context.firmCountry !== undefined ? { firmCountry: context.firmCountry } : {}),
     startDate: inputs.startDate,
     property: { ...(context.yearBuilt !== null ? { yearBuilt: context.yearBuilt } : {}), isOccupied: inputs.isOccupied },
     rooms,
