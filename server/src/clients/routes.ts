@@ -2,14 +2,17 @@ import {
   clientCreate,
   clientIdParam,
   clientListQuery,
+  clientMerge,
   clientUpdate,
   contactCreate,
   siteCreate,
   siteIdParam,
   siteUpdate,
   type ClientDetail,
+  type ClientMatch,
   type ClientSummary,
   type ContactView,
+  type ItemList,
   type KeysetPage,
   type SiteView,
 } from '@layerbook/contracts';
@@ -18,6 +21,7 @@ import type { AppContext } from '../context';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
 import { parse, parseChanges } from '../http/validate';
+import { matchesOfClient, mergeClient } from './merge';
 import { addContact, addSite, createClient, getClient, listClients, updateClient, updateSite } from './service';
 
 export function clientRoutes(ctx: AppContext): Router {
@@ -43,6 +47,19 @@ export function clientRoutes(ctx: AppContext): Router {
       updateClient(tx, parse(clientIdParam, req.params).id, parseChanges(clientUpdate, req.body), ctx.now()),
     );
     res.json(updated satisfies ClientSummary);
+  });
+
+  router.get('/:id/matches', async (req, res) => {
+    const items = await withStaff(ctx, req, 'office', (tx) => matchesOfClient(tx, parse(clientIdParam, req.params).id));
+    res.json({ items } satisfies ItemList<ClientMatch>);
+  });
+
+  /** Merges this client into another (the one kept); this one is gone afterwards. */
+  router.post('/:id/merge', async (req, res) => {
+    const kept = await withStaff(ctx, req, 'office', (tx, staff) =>
+      mergeClient(tx, staffActor(staff), parse(clientIdParam, req.params).id, parse(clientMerge, req.body).intoClientId),
+    );
+    res.json(kept satisfies ClientDetail);
   });
 
   router.post('/:id/contacts', async (req, res) => {

@@ -9,6 +9,7 @@ import {
   stageMove,
   STAGES_THAT_FILE_A_CLIENT,
   type BoardColumn,
+  type ClientMatch,
   type InquiryConversion,
   type InquiryDetail,
   type InquirySummary,
@@ -23,6 +24,7 @@ import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
 import type { StaffPrincipal } from '../http/principal';
 import { parse, parseChanges } from '../http/validate';
+import { clientMatchesOfInquiry } from './client-matches';
 import { staffClock } from './clock';
 import { convertInquiry } from './convert';
 import { getInquiry } from './detail';
@@ -108,6 +110,12 @@ export function inquiryRoutes(ctx: AppContext): Router {
       return getInquiry(tx, id, today(staff));
     });
     res.status(201).json(logged satisfies InquiryDetail);
+  });
+
+  /** Clients that may already be this prospect (same e-mail, phone or name), offered before filing a new one. */
+  router.get('/:id/client-matches', async (req, res) => {
+    const items = await withStaff(ctx, req, 'office', (tx) => clientMatchesOfInquiry(tx, parse(inquiryIdParam, req.params).id));
+    res.json({ items } satisfies ItemList<ClientMatch>);
   });
 
   router.post('/:id/convert', async (req, res) => {

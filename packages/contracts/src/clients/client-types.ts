@@ -106,3 +106,22 @@ export interface ClientDetail extends ClientSummary {
   readonly sites: readonly SiteView[];
   readonly inquiries: readonly ClientInquiry[];
 }
+
+/** Why a client may be the same person as the one at hand: the same e-mail, phone number or name. */
+export const CLIENT_MATCH_REASONS = ['email', 'phone', 'name'] as const;
+export type ClientMatchReason = (typeof CLIENT_MATCH_REASONS)[number];
+export const CLIENT_MATCH_REASON_LABELS: Readonly<Record<ClientMatchReason, string>> = {
+  email: 'same e-mail',
+  phone: 'same phone',
+  name: 'same name',
+};
+
+/** GET /api/inquiries/:id/client-matches and GET /api/clients/:id/matches: clients that may be the same. */
+export interface ClientMatch extends ClientSummary {
+  readonly matchedOn: readonly ClientMatchReason[];
+}
+
+/** POST /api/clients/:id/merge: everything of this client moves to `intoClientId`, then this one goes. */
+export interface ClientMerge {
+  readonly intoClientId: string;
+}

@@ -9,6 +9,7 @@ import {
   CLIENT_LIMITS as L,
   DEFAULT_COUNTRY,
   type ClientCreate,
+  type ClientMerge,
   type ClientUpdate,
   type ContactCreate,
   type SiteCreate,
@@ -81,3 +82,5 @@ export type ClientListQuery = z.infer<typeof clientListQuery>;
 
 export const clientIdParam = z.strictObject({ id: uuid('client id') });
 export const siteIdParam = z.strictObject({ id: uuid('site id') });
+
+export const clientMerge = requestSchema<ClientMerge>()(z.strictObject({ intoClientId: uuid('client to keep') }));

@@ -1,0 +1,111 @@
+import type { ClientDetail, ClientMatch, ClientMatchReason } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import { recordAudit } from '../audit/record';
+import type { Actor } from '../http/actor';
+import { badRequest, notFound } from '../http/problem';
+import { getClient } from './service';
+
+/** Digits only, so "(555) 010-0100" and "555.010.0100" compare equal; too short to tell people apart: none. */
+export function phoneDigits(phone: string): string {
+  const digits = phone.replace(/\D/g, '');
+  return digits.length >= 7 ? digits : '';
+}
+
+interface MatchRow {
+  id: string;
+  kind: ClientMatch['kind'];
+  is_company: boolean;
+  name: string;
+  email: string;
+  phone: string;
+  created_at: Date;
+  by_email: boolean;
+  by_phone: boolean;
+  by_name: boolean;
+}
+
+/**
+ * Clients of the firm that may be the same person: the same e-mail (any case), the same phone
+ * digits or the same name (any case, spaces squeezed). Blank values match nothing.
+ */
+export async function findClientMatches(
+  tx: TenantTx,
+  who: { email: string; phone: string; name: string },
+  exceptId: string | null = null,
+): Promise<ClientMatch[]> {
+  const email = who.email.trim().toLowerCase();
+  const phone = phoneDigits(who.phone);
+  const name = who.name.trim().replace(/\s+/g, ' ').toLowerCase();
+  if (!email && !phone && !name) return [];
+  const { rows } = await tx.client.query<MatchRow>(
+    `select * from (
+       select id, kind, is_company, name, email, phone, created_at,
+              ($2 <> '' and lower(trim(email)) = $2) as by_email,
+              ($3 <> '' and regexp_replace(phone, '\\D', '', 'g') = $3) as by_phone,
+              ($4 <> '' and lower(regexp_replace(trim(name), '\\s+', ' ', 'g')) = $4) as by_name
+         from clients where tenant_id = $1 and ($5::uuid is null or id <> $5::uuid)
+     ) c where by_email or by_phone or by_name
+     order by by_email desc, by_phone desc, created_at, id limit 20`,
+    [tx.tenantId, email, phone, name, exceptId],
+  );
+  return rows.map((r) => ({
+    id: r.id,
+    kind: r.kind,
+    isCompany: r.is_company,
+    name: r.name,
+    email: r.email,
+    phone: r.phone,
+    createdAt: r.created_at.toISOString(),
+    matchedOn: (['email', 'phone', 'name'] as const).filter((k) => r[`by_${k}`]) satisfies ClientMatchReason[],
+  }));
+}
+
+/** Clients that may be the same as this one (the client page offers them to merge into). */
+export async function matchesOfClient(tx: TenantTx, id: string): Promise<ClientMatch[]> {
+  const { rows } = await tx.client.query<{ email: string; phone: string; name: string }>(
+    `select email, phone, name from clients where tenant_id = $1 and id = $2`,
+    [tx.tenantId, id],
+  );
+  const client = rows[0];
+  if (!client) throw notFound('client');
+  return findClientMatches(tx, client, id);
+}
+
+/** Every table that points at a client, in the order they are moved. */
+const CLIENT_TABLES = ['client_contacts', 'sites', 'inquiries', 'estimates', 'jobs', 'sample_boards', 'portal_users'] as const;
+
+/**
+ * Merges a duplicate into the client to keep, in the caller's transaction: contacts, sites,
+ * inquiries, estimates, jobs, sample boards and portal access move to the kept client, the
+ * duplicate is deleted, and the audit log records what moved. Another firm's id answers 404.
+ */
+export async function mergeClient(tx: TenantTx, actor: Actor, id: string, intoClientId: string): Promise<ClientDetail> {
+  if (id === intoClientId) throw badRequest([{ field: 'intoClientId', message: 'Choose another client to keep.' }]);
+  const { rows } = await tx.client.query<{ id: string; name: string }>(
+    `select id, name from clients where tenant_id = $1 and id = any($2::uuid[]) order by id for update`,
+    [tx.tenantId, [id, intoClientId]],
+  );
+  const merged = rows.find((r) => r.id === id);
+  const kept = rows.find((r) => r.id === intoClientId);
+  if (!merged) throw notFound('client');
+  if (!kept) throw notFound('client to keep');
+  const moved: Record<string, number> = {};
+  for (const table of CLIENT_TABLES) {
+    const res = await tx.client.query(`update ${table} set client_id = $3 where tenant_id = $1 and client_id = $2`, [
+      tx.tenantId,
+      id,
+      intoClientId,
+    ]);
+    moved[table] = res.rowCount ?? 0;
+  }
+  await tx.client.query(`delete from clients where tenant_id = $1 and id = $2`, [tx.tenantId, id]);
+  await recordAudit(tx, {
+    actorUserId: actor.kind === 'staff' ? actor.userId : null,
+    actorKind: actor.kind,
+    action: 'client.merged',
+    entity: 'client',
+    entityId: intoClientId,
+    data: { mergedClientId: id, mergedName: merged.name, moved },
+  });
+  return getClient(tx, intoClientId);
+}
