@@ -61,6 +61,10 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
     async stop() {
       await workers.stop();
       await queue.stop();
+      // pg-boss's stop resolves while a loop it started (offWork) still checks, once a second, that
+      // every worker has stopped; that check loads a Node module, which fails once jest has torn the
+      // test file down ("Cannot destructure property 'setTimeout'"). Outlive that one last check.
+      await new Promise((resolve) => setTimeout(resolve, 1_100));
       await pool.end();
       await inbox.close();
       storage.close();
