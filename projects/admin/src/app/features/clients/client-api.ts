@@ -3,6 +3,8 @@ import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import type {
   ClientCreate,
+  ClientDetail,
+  ClientMerge,
   ClientSummary,
   ClientUpdate,
   ContactCreate,
@@ -23,6 +25,11 @@ export class ClientApi {
 
   update(id: string, body: ClientUpdate): Promise<ClientSummary> {
     return firstValueFrom(this.http.patch<ClientSummary>(clientUrl(id), body));
+  }
+
+  /** Moves everything of this client to `intoClientId` and removes this one; answers the kept client. */
+  merge(id: string, body: ClientMerge): Promise<ClientDetail> {
+    return firstValueFrom(this.http.post<ClientDetail>(`${clientUrl(id)}/merge`, body));
   }
 
   addContact(clientId: string, body: ContactCreate): Promise<ContactView> {

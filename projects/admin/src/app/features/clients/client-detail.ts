@@ -11,6 +11,7 @@ import { loadMessage } from '../../shared/forms/load-message';
 import { LeadSafetyNote } from '../../shared/ui/lead-safety-note';
 import { clientUrl } from './client-api';
 import { ClientForm } from './client-form';
+import { ClientMerge } from './client-merge';
 import { ContactForm } from './contact-form';
 import { SiteForm } from './site-form';
 
@@ -19,7 +20,18 @@ type SiteEditing = string | null;
 
 @Component({
   selector: 'lb-client-detail',
-  imports: [ClientForm, ContactForm, DatePipe, LeadSafetyNote, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, SiteForm],
+  imports: [
+    ClientForm,
+    ClientMerge,
+    ContactForm,
+    DatePipe,
+    LeadSafetyNote,
+    MatButtonModule,
+    MatIconModule,
+    MatProgressBarModule,
+    RouterLink,
+    SiteForm,
+  ],
   templateUrl: './client-detail.html',
   styleUrl: './client-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

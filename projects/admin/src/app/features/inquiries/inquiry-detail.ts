@@ -14,8 +14,10 @@ import {
   SOURCE_LABELS,
   STAGE_LABELS,
   isReferralSource,
+  type ClientMatch,
   type InquiryDetail,
   type InquiryStage,
+  type ItemList,
 } from '@layerbook/contracts/types';
 import { problemMessage, toProblem } from '../../core/errors/problem';
 import { FirmCurrency } from '../../core/firm/firm-currency';
@@ -31,6 +33,7 @@ import { InquiryForm } from './inquiry-form';
 import { NextStepForm } from './next-step-form';
 import { StageMover } from './stage-mover';
 import { STAGE_ICONS } from './stage-icons';
+import { matchLabel, matchWords } from '../clients/client-match-words';
 
 @Component({
   selector: 'lb-inquiry-detail',
@@ -68,6 +71,14 @@ export class InquiryDetailPage {
   protected readonly detail = httpResource<InquiryDetail>(() => inquiryUrl(this.id()));
   protected readonly inquiry = computed(() => (this.detail.hasValue() ? this.detail.value() : null));
   protected readonly loadMessage = loadMessage(this.detail);
+  /** Until it is filed: clients that may already be this prospect (same e-mail, phone or name). */
+  protected readonly clientMatches = httpResource<ItemList<ClientMatch>>(() => {
+    const current = this.inquiry();
+    return current && !current.clientId ? `${inquiryUrl(current.id)}/client-matches` : undefined;
+  });
+  protected readonly candidates = computed(() => (this.clientMatches.hasValue() ? this.clientMatches.value().items : []));
+  protected readonly matchLabel = matchLabel;
+  protected readonly matchWords = matchWords;
   protected readonly isEditing = signal(false);
   protected readonly isBusy = signal(false);
   protected readonly message = signal<string | null>(null);
@@ -101,15 +112,17 @@ export class InquiryDetailPage {
     });
   }
 
-  protected async fileAsClient(): Promise<void> {
+  /** Files the prospect as a new client, or under an existing one (`match`) so no duplicate is made. */
+  protected async fileAsClient(match?: ClientMatch): Promise<void> {
     const current = this.inquiry();
     if (!current) {
       return;
     }
     await this.act(async () => {
-      await this.api.convert(current.id, {});
+      await this.api.convert(current.id, match ? { clientId: match.id } : {});
       this.detail.reload();
-      this.snackBar.open(`${current.contactName} is filed as a client.`, 'Close', { duration: 5000 });
+      const words = match ? `${current.contactName} is filed under ${match.name}.` : `${current.contactName} is filed as a new client.`;
+      this.snackBar.open(words, 'Close', { duration: 5000 });
     });
   }
 
