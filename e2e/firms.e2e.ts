@@ -26,7 +26,9 @@ test('the owner changes the firm name, address, time zone and pricing rates, and
   await address.getByLabel('Town or city').fill('Ebbsfold');
   await address.getByLabel('State, province or region').fill('CO');
   await address.getByLabel('Postal code').fill('80999');
-  await address.getByLabel('Country').fill('US');
+  // Chosen by name and stored as its ISO 3166-1 code (typing "United States" once stored "UN").
+  await address.getByRole('combobox', { name: 'Country' }).click();
+  await page.getByRole('option', { name: 'United States', exact: true }).click();
   await page.getByRole('combobox', { name: 'Time zone' }).click();
   await page.getByRole('option', { name: 'America/Denver', exact: true }).click();
   await saveBy(page, 'Save settings', '/api/firm');
@@ -49,6 +51,7 @@ test('the owner changes the firm name, address, time zone and pricing rates, and
   await expect(page.getByRole('group', { name: 'Firm' }).getByLabel('Phone')).toHaveValue('555-0163');
   await expect(page.getByRole('group', { name: 'Address' }).getByLabel('Town or city')).toHaveValue('Ebbsfold');
   await expect(page.getByRole('combobox', { name: 'Time zone' })).toContainText('America/Denver');
+  await expect(page.getByRole('group', { name: 'Address' }).getByRole('combobox', { name: 'Country' })).toContainText('United States');
   const reloaded = page.getByRole('form', { name: 'Pricing and schedule' });
   await expect(reloaded.getByLabel('Labour rate per crew-hour')).toHaveValue('72.50');
   await expect(reloaded.getByLabel('Crew size')).toHaveValue('3');
