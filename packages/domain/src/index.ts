@@ -120,7 +120,8 @@ export { cashForecast } from './receivables/cash-forecast';
 
 // safety
 export type { Caution, CautionId, SafetyFacts } from './safety/safety-cautions';
-export { STANDING_LINE, safetyCautions } from './safety/safety-cautions';
+export { OUTSIDE_US_LINE, STANDING_LINE, jurisdictionLine, safetyCautions } from './safety/safety-cautions';
+export { unpricedScaffoldWarning } from './safety/scaffold-pricing';
 export type { FlammableCategory, FlammableClass } from './safety/flammable';
 export { FLAMMABLE_FLASH_MAX_C, flammableClass } from './safety/flammable';
 

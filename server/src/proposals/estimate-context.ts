@@ -20,6 +20,8 @@ export async function loadEstimateContext(tx: TenantTx, siteId: string): Promise
   ).rows[0];
   if (!site) throw notFound('site');
   const { settings, lengthUnit, currency } = await getEstimatingSettings(tx);
+  const firmCountry = (await tx.client.query<{ country: string }>(`select country from firms where id = $1`, [tx.tenantId])).rows[0]
+    ?.country;
   const { rows: roomRows } = await tx.client.query<{ id: string; name: string; is_exterior: boolean }>(
     `select id, name, is_exterior from rooms where tenant_id = $1 and site_id = $2 order by position, created_at`,
     [tx.tenantId, siteId],
@@ -70,6 +72,7 @@ export async function loadEstimateContext(tx: TenantTx, siteId: string): Promise
     settings,
     lengthUnit,
     currency,
+    ...(firmCountry !== undefined ? { firmCountry } : {}),
     yearBuilt: site.year_built,
     rooms,
     finishSystems: systemRows.map((f) => ({ id: f.id, name: f.name, layers: f.layers })),

@@ -19,6 +19,8 @@ export interface EstimateContext {
   readonly settings: EstimatingSettings;
   readonly lengthUnit: 'ft' | 'm';
   readonly currency: string;
+  /** the firm's country (ISO 3166-1 alpha-2); the engine's safety cautions say when US federal rules may not apply */
+  readonly firmCountry?: string;
   readonly yearBuilt: number | null;
   readonly rooms: readonly EngineRoom[];
   readonly finishSystems: readonly FinishSystem[];

@@ -171,6 +171,15 @@ describe('computeEstimate: the round dining room', () => {
     expect(e.cautions.map((c) => c.id)).toEqual(['edge-fall-protection', 'lime-alkali']);
   });
 
+  it("passes the firm's country to the cautions: outside the US they point to national or provincial rules", () => {
+    const abroad = computeEstimate({ ...copyJob(), firmCountry: 'CA' });
+    expect(abroad.cautions.map((c) => c.jurisdiction)).toEqual([
+      'A US federal rule. Outside the US, check your national or provincial rules.',
+      'Guidance, not a regulation. Outside the US, check your national or provincial rules.',
+    ]);
+    expect(e.cautions[0]?.jurisdiction).toBe('A US federal rule.');
+  });
+
   it('names the field of a bad input deep in the job', () => {
     const bad = copyJob();
     bad.rooms[0].surfaces[1].shape = { kind: 'sphericalCap', baseRadius: 9, rise: 12 };

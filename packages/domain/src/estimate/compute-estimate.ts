@@ -204,6 +204,7 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
       return { name: p.name, ...p.hazards };
     }),
     sandsPlaster,
+    ...(input.firmCountry !== undefined ? { firmCountry: input.firmCountry } : {}),
   });
 
   return {

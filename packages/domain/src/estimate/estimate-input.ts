@@ -64,6 +64,8 @@ export interface EstimateOption {
 
 export interface EstimateInput {
   settings: FirmSettings;
+  /** the firm's country (ISO 3166-1 alpha-2): safety cautions cite US federal rules and say so */
+  firmCountry?: string;
   /** first working day is this date or the next working day after it */
   startDate: IsoDate;
   property?: { yearBuilt?: number; isOccupied?: boolean };

@@ -1,5 +1,5 @@
 import { expectInputError } from '../errors/expect-input-error';
-import { STANDING_LINE, type SafetyFacts, safetyCautions } from './safety-cautions';
+import { OUTSIDE_US_LINE, STANDING_LINE, type SafetyFacts, safetyCautions } from './safety-cautions';
 
 const QUIET: SafetyFacts = { lengthUnit: 'ft', disturbedPaint: [], workingLevel: 0, products: [], sandsPlaster: false };
 const ids = (facts: Partial<SafetyFacts>): string[] => safetyCautions({ ...QUIET, ...facts }).map((c) => c.id);
@@ -143,6 +143,28 @@ describe('safety cautions from job facts', () => {
       expect(c.bullets.length).toBeGreaterThan(0);
     }
     expect(STANDING_LINE).toMatch(/local codes.*safety data sheet.*licensed or qualified.*not legal or safety advice/);
+  });
+
+  it.each([
+    // the cited rules are US federal (29 CFR, 40 CFR); lime and oily rags are guidance, not regulation
+    [undefined, 'A US federal rule.', 'Guidance, not a regulation.'],
+    ['US', 'A US federal rule.', 'Guidance, not a regulation.'],
+    ['CA', `A US federal rule. ${OUTSIDE_US_LINE}`, `Guidance, not a regulation. ${OUTSIDE_US_LINE}`],
+    ['GB', `A US federal rule. ${OUTSIDE_US_LINE}`, `Guidance, not a regulation. ${OUTSIDE_US_LINE}`],
+  ])('firm in %s: each caution says whose rule it is', (firmCountry, federal, guidance) => {
+    const all = safetyCautions({
+      ...QUIET,
+      firmCountry,
+      workingLevel: 14,
+      products: [{ name: 'Lime putty', isLime: true, flashPointC: 40 }],
+    });
+    expect(all.map((c) => [c.id, c.jurisdiction])).toEqual([
+      ['scaffold-fall-protection', federal],
+      ['edge-fall-protection', federal],
+      ['flammable-liquid', federal],
+      ['lime-alkali', guidance],
+    ]);
+    expect(OUTSIDE_US_LINE).toBe('Outside the US, check your national or provincial rules.');
   });
 
   it('names bad fields', () => {

@@ -18,6 +18,8 @@ export interface Caution {
   bullets: string[];
   /** the rule the caution points to */
   rule: string;
+  /** whose rule it is (US federal, or guidance) and, for a firm outside the US, to check its own rules */
+  jurisdiction: string;
   standing: string;
 }
 
@@ -41,6 +43,8 @@ export interface SafetyFacts {
   }>;
   /** a layer sands plaster (dust whether or not the product list says silica) */
   sandsPlaster: boolean;
+  /** the firm's country, ISO 3166-1 alpha-2; the cited rules are US federal */
+  firmCountry?: string;
 }
 
 /** Target housing: built before 1978 (15 U.S.C. 2681(17)). */
@@ -53,14 +57,38 @@ const SCAFFOLD_FT = 10;
 /** 29 CFR 1926.501(b)(1): unprotected side or edge 6 ft or more above a lower level. */
 const EDGE_FT = 6;
 
-function caution(id: CautionId, title: string, rule: string, bullets: string[]): Caution {
-  return { id, title, bullets, rule, standing: STANDING_LINE };
+/** Where each caution's rule comes from: US federal regulations, or guidance that is no regulation. */
+const RULE_SOURCE: Readonly<Record<CautionId, 'us-federal' | 'guidance'>> = {
+  'lead-safe-work': 'us-federal', // 40 CFR 745 (EPA)
+  'scaffold-fall-protection': 'us-federal', // 29 CFR 1926 (OSHA)
+  'edge-fall-protection': 'us-federal', // 29 CFR 1926 (OSHA)
+  'flammable-liquid': 'us-federal', // 29 CFR 1910 (OSHA)
+  'plaster-dust-silica': 'us-federal', // 29 CFR 1926 (OSHA)
+  'lime-alkali': 'guidance', // ICSC 0408, an international chemical safety card
+  'oily-rags': 'guidance', // safety data sheets
+};
+
+export const OUTSIDE_US_LINE = 'Outside the US, check your national or provincial rules.';
+
+/** "US federal rule." or "Guidance, not a regulation.", plus the outside-US line for a firm elsewhere. */
+export function jurisdictionLine(id: CautionId, firmCountry: string | undefined): string {
+  const source = RULE_SOURCE[id] === 'us-federal' ? 'A US federal rule.' : 'Guidance, not a regulation.';
+  const isOutsideUs = firmCountry !== undefined && firmCountry.trim().toUpperCase() !== 'US';
+  return isOutsideUs ? `${source} ${OUTSIDE_US_LINE}` : source;
 }
 
 /** Reminders drawn from job facts; English text, stable ids for the apps to translate. */
 export function safetyCautions(facts: SafetyFacts): Caution[] {
   const out: Caution[] = [];
   const unit = facts.lengthUnit;
+  const caution = (id: CautionId, title: string, rule: string, bullets: string[]): Caution => ({
+    id,
+    title,
+    bullets,
+    rule,
+    jurisdiction: jurisdictionLine(id, facts.firmCountry),
+    standing: STANDING_LINE,
+  });
 
   if (facts.yearBuilt !== undefined) requireInteger(facts.yearBuilt, 'yearBuilt', 1000, 'year built');
   if (facts.yearBuilt !== undefined && facts.yearBuilt < LEAD_YEAR) {

@@ -190,6 +190,13 @@ export class EstimateBuilder implements OnInit {
     return at ? new Intl.DateTimeFormat(this.locale, { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(at)) : '';
   });
 
+  /** The equipment lines as typed, for the safety section's scaffold warning. */
+  protected readonly equipment = computed(() => {
+    this.revision();
+    const context = this.context();
+    return context ? readInputs(this.form, context).equipment : [];
+  });
+
   protected readonly perAreaRates = computed(() => {
     this.revision();
     const context = this.context();
