@@ -59,20 +59,17 @@ describe('duplicate clients', () => {
       .post(`/api/clients/${dup}/contacts`)
       .set('x-csrf-token', o.csrf())
       .send({ name: 'Ivo Marsh', email: '', phone: '', roleTitle: '' });
-    await o.agent
-      .post(`/api/clients/${dup}/sites`)
-      .set('x-csrf-token', o.csrf())
-      .send({
-        label: 'Cottage',
-        addressLine1: '4 Weir Lane',
-        addressLine2: '',
-        city: 'Ashbury',
-        region: 'VT',
-        postalCode: '05001',
-        country: 'US',
-        yearBuilt: 1990,
-        accessNotes: '',
-      });
+    await o.agent.post(`/api/clients/${dup}/sites`).set('x-csrf-token', o.csrf()).send({
+      label: 'Cottage',
+      addressLine1: '4 Weir Lane',
+      addressLine2: '',
+      city: 'Ashbury',
+      region: 'VT',
+      postalCode: '05001',
+      country: 'US',
+      yearBuilt: 1990,
+      accessNotes: '',
+    });
     const inq = await inquiry(o, { contactName: 'Ida Marsh', email });
     await o.agent.post(`/api/inquiries/${inq}/convert`).set('x-csrf-token', o.csrf()).send({ clientId: dup });
     await withTenant(t.ctx.pool, o.firmId, (tx) =>
