@@ -129,6 +129,8 @@ export { FLAMMABLE_FLASH_MAX_C, flammableClass } from './safety/flammable';
 export type { EstimateInput, EstimateOption, EstimateRoom, EstimateSurface, FirmSettings } from './estimate/estimate-input';
 export type { EstimateResult, LayerLine, ProductTotal, SurfaceResult } from './estimate/compute-estimate';
 export { computeEstimate } from './estimate/compute-estimate';
+export type { LeadNotice, LeadStatus } from './estimate/lead-status';
+export { ASK_FOR_YEAR, TARGET_HOUSING_BEFORE, isTreatedAsTargetHousing, leadNotice, leadStatus } from './estimate/lead-status';
 export type { OptionCaution } from './estimate/merge-cautions';
 export { mergeCautions } from './estimate/merge-cautions';
 export type { EstimateResultJson, Jsonified } from './estimate/result-json';

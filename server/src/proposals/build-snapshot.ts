@@ -1,5 +1,5 @@
 import type { ProposalSnapshot, ProposalTerms, SnapshotCaution, SnapshotOption, SnapshotRoom } from '@layerbook/contracts';
-import { type DepositCapRule, mergeCautions, minorUnitDigits, STANDING_LINE } from '@layerbook/domain';
+import { type DepositCapRule, leadNotice, leadStatus, mergeCautions, minorUnitDigits, STANDING_LINE } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { optionPayments } from './payment-plan';
 import type { ProposalSources, StoredVariant } from './proposal-sources';
@@ -118,5 +118,12 @@ export function buildSnapshot(src: ProposalSources, choice: ProposalChoice): Pro
     notes: choice.notes,
     terms: choice.terms,
     safety: { standing: STANDING_LINE, cautions: safetyNotes(src.estimate.variants) },
+    // A pre-1978 home carries the notice whatever the options disturb; an unknown year does once paint is disturbed.
+    leadNotice: leadNotice(
+      leadStatus(
+        src.site.yearBuilt,
+        src.estimate.variants.some((v) => v.result.lead === 'assumed-target-housing'),
+      ),
+    ),
   };
 }

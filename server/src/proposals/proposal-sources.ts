@@ -1,6 +1,6 @@
 import type { EstimateStatus } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import type { Caution } from '@layerbook/domain';
+import type { Caution, LeadStatus } from '@layerbook/domain';
 import { conflict, notFound } from '../http/problem';
 
 /** The parts of a saved estimate result a proposal reads (Decimals were stored as strings). */
@@ -24,6 +24,8 @@ export interface StoredVariant {
     readonly price: { price: string; tax: string; total: string };
     readonly options: ReadonlyArray<{ id: string; label: string; price: { price: string; tax: string; total: string } }>;
     readonly cautions: readonly Caution[];
+    /** absent from results saved before the engine said it */
+    readonly lead?: LeadStatus;
   };
 }
 

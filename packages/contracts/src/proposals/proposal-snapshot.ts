@@ -24,6 +24,17 @@ export interface ProposalSnapshot {
   readonly notes: string;
   readonly terms: ProposalTerms;
   readonly safety: { readonly standing: string; readonly cautions: readonly SnapshotCaution[] };
+  /**
+   * The lead-safe notice of a home built before 1978, or of one whose year is unknown while the
+   * work disturbs paint (40 CFR 745); null when neither. Absent from snapshots made before it existed.
+   */
+  readonly leadNotice?: SnapshotLeadNotice | null;
+}
+
+export interface SnapshotLeadNotice {
+  readonly title: string;
+  readonly bullets: readonly string[];
+  readonly rule: string;
 }
 
 export interface SnapshotRoom {

@@ -10,6 +10,7 @@ import { type CrewTime, type LayerHours, applyLayerHours, crewTime } from '../la
 import { perAreaCheck } from '../pricing/per-area-check';
 import { type PriceBreakdown, priceJob } from '../pricing/price-job';
 import { type Caution, safetyCautions } from '../safety/safety-cautions';
+import { ASK_FOR_YEAR, type LeadStatus, leadRuleYear, leadStatus } from './lead-status';
 import { type JobSchedule, type WorkChain, scheduleJob } from '../schedule/schedule-job';
 import { type Dimension, dimensionOf, fromBase } from '../units/quantity-unit';
 import type { EstimateInput } from './estimate-input';
@@ -52,6 +53,8 @@ export interface EstimateResult {
   options: Array<{ id: string; label: string; price: PriceBreakdown }>;
   perAreaCheck: { total: Decimal; lines: Array<{ surfaceId: string; amount: Decimal }> } | null;
   cautions: Caution[];
+  /** where the home stands under the lead rules; `assumed-target-housing` asks for the year built */
+  lead: LeadStatus;
   totals: { area: number; length: number; materialsCost: Decimal };
 }
 
@@ -194,9 +197,13 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
     perArea = { total: check.total, lines: priced.map((x, i) => ({ surfaceId: x.surfaceId, amount: check.lines[i] })) };
   }
 
+  // An unknown year with paint disturbed counts as before 1978 until the year is recorded (40 CFR 745).
+  const disturbsPaint = disturbedPaint.some((d) => d.area > 0);
+  const lead = leadStatus(input.property?.yearBuilt, disturbsPaint);
+  const ruleYear = leadRuleYear(input.property?.yearBuilt, disturbsPaint);
   const cautions = safetyCautions({
     lengthUnit: s.lengthUnit,
-    yearBuilt: input.property?.yearBuilt,
+    ...(ruleYear !== undefined ? { yearBuilt: ruleYear } : {}),
     disturbedPaint,
     workingLevel: Math.max(0, highestTop - s.workingReach),
     products: plan.needIds.map((id) => {
@@ -206,6 +213,14 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
     sandsPlaster,
     ...(input.firmCountry !== undefined ? { firmCountry: input.firmCountry } : {}),
   });
+  if (lead === 'assumed-target-housing') {
+    const leadSafe = cautions.find((c) => c.id === 'lead-safe-work');
+    if (leadSafe)
+      leadSafe.bullets = [
+        ASK_FOR_YEAR,
+        ...leadSafe.bullets.map((b) => b.replace(/^Built before 1978 and/, 'Treated as built before 1978, and')),
+      ];
+  }
 
   return {
     surfaces,
@@ -216,6 +231,7 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
     options,
     perAreaCheck: perArea,
     cautions,
+    lead,
     totals: { area, length, materialsCost },
   };
 }

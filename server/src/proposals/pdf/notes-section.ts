@@ -19,6 +19,11 @@ export function termsSection(doc: Doc, s: ProposalSnapshot): void {
 
 /** The cautions the job's facts triggered, each with its rule, and the standing line always. */
 export function safetySection(doc: Doc, s: ProposalSnapshot): void {
+  if (s.leadNotice) {
+    sectionHeading(doc, s.leadNotice.title);
+    bullets(doc, s.leadNotice.bullets, 9.5);
+    paragraph(doc, `Rule: ${s.leadNotice.rule}`, 'italic', COLOURS.muted, 9);
+  }
   sectionHeading(doc, 'Safety and compliance notes');
   if (!s.safety.cautions.length) paragraph(doc, 'No particular hazard was flagged for this work.', 'text', COLOURS.muted);
   for (const c of s.safety.cautions) {

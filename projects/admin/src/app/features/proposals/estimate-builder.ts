@@ -22,7 +22,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import type { EstimateView } from '@layerbook/contracts/types';
-import { DomainInputError, measureSurface, measureText, type EstimateResultJson } from '@layerbook/domain';
+import { ASK_FOR_YEAR, DomainInputError, measureSurface, measureText, type EstimateResultJson } from '@layerbook/domain';
 import { merge } from 'rxjs';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
@@ -100,6 +100,8 @@ export class EstimateBuilder implements OnInit {
   protected readonly errorText = errorText;
   protected readonly statusWord = statusWord;
   protected readonly savedWords = SAVED_WORDS;
+  /** an unknown year with paint disturbed is treated as pre-1978 until the site records it */
+  protected readonly askForYear = ASK_FOR_YEAR;
   /** bumps on every value or status change of the form: the signals below read the form through it */
   protected readonly revision = signal(0);
   private readonly baseline = signal('');
