@@ -50,6 +50,22 @@ describe('duplicate clients', () => {
     expect(list.body.items).toHaveLength(3);
   });
 
+  it('a stage that files the client by itself joins the client with the same e-mail; "new client" still makes one', async () => {
+    const o = await signUpFirm(t.app, 'Auto File Plaster');
+    const email = uniqueEmail('nell');
+    const existing = await client(o, { name: 'Nell Ashdown', email });
+    const id = await inquiry(o, { contactName: 'Nell Ashdown', email: ` ${email.toUpperCase()}` });
+    const moved = await o.agent.post(`/api/inquiries/${id}/stage`).set('x-csrf-token', o.csrf()).send({ stage: 'visit_booked' });
+    expect(moved.body.clientId).toBe(existing);
+    const other = await inquiry(o, { contactName: 'Nell Ashdown', email });
+    const fresh = await o.agent
+      .post(`/api/inquiries/${other}/convert`)
+      .set('x-csrf-token', o.csrf())
+      .send({ client: { kind: 'homeowner', isCompany: false, name: 'Nell Ashdown', email, phone: '', notes: '' } });
+    expect(fresh.body.clientId).not.toBe(existing);
+    expect((await o.agent.get('/api/clients?limit=50')).body.items).toHaveLength(2);
+  });
+
   it('merges a duplicate into the client kept: everything moves in one transaction, audited, and the duplicate is gone', async () => {
     const o = await signUpFirm(t.app, 'Merge Plaster');
     const email = uniqueEmail('ida');

@@ -19,7 +19,9 @@ export async function convertInquiry(tx: TenantTx, actor: Actor, id: string, inp
   )[0];
   if (!inq) throw notFound('inquiry');
 
-  let clientId = input.clientId ?? inq.clientId ?? null;
+  // Filed without a choice (a bare convert, or a stage that files by itself): a client with the same
+  // e-mail is the same person, so the inquiry joins that client instead of making a second one.
+  let clientId = input.clientId ?? inq.clientId ?? (input.client ? null : await soleClientWithEmail(tx, inq.email));
   if (clientId) {
     const found = await tx.db
       .select({ id: clients.id })
@@ -74,4 +76,15 @@ export async function convertInquiry(tx: TenantTx, actor: Actor, id: string, inp
     .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
   await logActivity(tx, actor, id, 'converted', '', { clientId, siteId });
   return { clientId, siteId };
+}
+
+/** The one client of the firm with this e-mail (any case), or null when there is none or several. */
+async function soleClientWithEmail(tx: TenantTx, email: string): Promise<string | null> {
+  const wanted = email.trim().toLowerCase();
+  if (!wanted) return null;
+  const { rows } = await tx.client.query<{ id: string }>(
+    `select id from clients where tenant_id = $1 and lower(trim(email)) = $2 limit 2`,
+    [tx.tenantId, wanted],
+  );
+  return rows.length === 1 && rows[0] ? rows[0].id : null;
 }

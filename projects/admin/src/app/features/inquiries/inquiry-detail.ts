@@ -119,7 +119,16 @@ export class InquiryDetailPage {
       return;
     }
     await this.act(async () => {
-      await this.api.convert(current.id, match ? { clientId: match.id } : {});
+      // "New" says so: a bare convert would join a client with the same e-mail.
+      const newClient = {
+        kind: 'homeowner',
+        isCompany: false,
+        name: current.contactName,
+        email: current.email,
+        phone: current.phone,
+        notes: '',
+      } as const;
+      await this.api.convert(current.id, match ? { clientId: match.id } : { client: newClient });
       this.detail.reload();
       const words = match ? `${current.contactName} is filed under ${match.name}.` : `${current.contactName} is filed as a new client.`;
       this.snackBar.open(words, 'Close', { duration: 5000 });
