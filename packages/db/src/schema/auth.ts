@@ -42,3 +42,25 @@ export const signInThrottle = pgTable('sign_in_throttle', {
   failures: integer('failures').notNull().default(0),
   windowStartedAt: timestamp('window_started_at', { withTimezone: true }).notNull(),
 });
+
+/**
+ * Sign-ups waiting for their e-mail to be confirmed. Not firm data (the firm does not exist yet):
+ * like a reset link, only the token's hash is kept; the link is single-use and expires. The firm
+ * id is chosen up front so the confirmation mail can be filed under it in the outbox.
+ */
+export const pendingSignUps = pgTable(
+  'pending_sign_ups',
+  {
+    id: id(),
+    tokenHash: text('token_hash').notNull(),
+    firmId: uuid('firm_id').notNull(),
+    email: text('email').notNull(),
+    name: text('name').notNull(),
+    firmName: text('firm_name').notNull(),
+    passwordHash: text('password_hash').notNull(),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    usedAt: timestamp('used_at', { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('pending_sign_ups_token_hash_key').on(t.tokenHash)],
+);
