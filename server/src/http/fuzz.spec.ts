@@ -124,6 +124,8 @@ describe('the routes of one firm never answer 5xx to generated bodies, queries a
     const site = await post(`/api/clients/${client}/sites`, { addressLine1: '2 Kiln Yard', city: 'Hobb' });
     const room = await post(`/api/takeoff/sites/${site}/rooms`, { name: 'Hall' });
     const inquiry = await post('/api/inquiries', { contactName: 'Fenella Drage', source: 'phone' });
+    const estimate = await post('/api/estimates', { siteId: site, title: 'Hall plaster', startDate: '2027-01-04' });
+    const board = await post('/api/samples', { clientId: client, label: 'Hall colours' });
     const firm = (await o.agent.get('/api/firm')).body as { slug: string };
     routes = [
       { method: 'post', path: '/api/clients', schema: contracts.clientCreate, base: { kind: 'homeowner', name: 'Fuzz' } },
@@ -145,6 +147,10 @@ describe('the routes of one firm never answer 5xx to generated bodies, queries a
       { method: 'put', path: '/api/firm/estimating', schema: contracts.estimatingSettings },
       { method: 'post', path: '/api/estimates', schema: contracts.estimateCreate, base: { siteId: site } },
       { method: 'post', path: '/api/samples', schema: contracts.sampleBoardInput, base: { clientId: client } },
+      { method: 'patch', path: `/api/samples/${board}`, schema: contracts.sampleBoardUpdate },
+      { method: 'put', path: `/api/estimates/${estimate}/inputs`, schema: contracts.estimateInputs },
+      { method: 'post', path: '/api/proposals', schema: contracts.proposalCreate, base: { estimateId: estimate } },
+      { method: 'post', path: `/api/inquiries/${inquiry}/convert`, schema: contracts.inquiryConvert },
       { method: 'post', path: `/api/public/firms/${firm.slug}/inquiries`, schema: contracts.publicInquiryRequest },
     ];
   });
