@@ -16,6 +16,7 @@ import { getClientProposal, listClientProposals, loadClientVersion } from './cli
 import { acceptProposal, answerProposal } from './decide-proposal';
 import { proposalFilename } from './pdf/filename';
 import { renderProposalPdf } from './pdf/render-proposal';
+import { loadSignedCopy } from './signed-copy';
 
 const idParam = z.strictObject({ id: uuid('proposal id') });
 
@@ -43,6 +44,19 @@ export function portalProposalRoutes(ctx: AppContext): Router {
     res.set({
       'content-type': 'application/pdf',
       'content-disposition': `attachment; filename="${proposalFilename(row.snapshot.title, row.version)}"`,
+      'x-content-type-options': 'nosniff',
+      'content-length': String(pdf.length),
+    });
+    res.end(pdf);
+  });
+
+  // The signed copy: the same document with the acceptance record on its last page.
+  router.get('/:id/signed-pdf', async (req, res) => {
+    const { row, signature } = await withClient(ctx, req, (tx, client) => loadSignedCopy(tx, client, parse(idParam, req.params).id));
+    const pdf = await renderProposalPdf(row.snapshot, { version: row.version, snapshotHash: row.snapshot_hash, signature });
+    res.set({
+      'content-type': 'application/pdf',
+      'content-disposition': `attachment; filename="${proposalFilename(row.snapshot.title, row.version, true)}"`,
       'x-content-type-options': 'nosniff',
       'content-length': String(pdf.length),
     });

@@ -1,5 +1,5 @@
-/** `proposal-<title>-v<N>.pdf` with the title reduced to safe ASCII for a Content-Disposition header. */
-export function proposalFilename(title: string, version: number): string {
+/** `proposal-<title>-v<N>.pdf` (`-signed` before `.pdf` for the signed copy) with the title reduced to safe ASCII for a Content-Disposition header. */
+export function proposalFilename(title: string, version: number, isSigned = false): string {
   const slug = title
     .normalize('NFKD')
     .replace(/[\u0300-\u036f]/g, '')
@@ -8,5 +8,5 @@ export function proposalFilename(title: string, version: number): string {
     .replace(/^-+|-+$/g, '')
     .slice(0, 60)
     .replace(/-+$/, '');
-  return `proposal-${slug || 'untitled'}-v${version}.pdf`;
+  return `proposal-${slug || 'untitled'}-v${version}${isSigned ? '-signed' : ''}.pdf`;
 }

@@ -27,4 +27,9 @@ export class ProposalApi {
   pdfUrl(id: string): string {
     return `${proposalUrl(id)}/pdf`;
   }
+
+  /** The signed copy (the PDF with the acceptance record), once the proposal is accepted. */
+  signedPdfUrl(id: string): string {
+    return `${proposalUrl(id)}/signed-pdf`;
+  }
 }

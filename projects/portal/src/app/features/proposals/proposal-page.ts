@@ -81,6 +81,7 @@ export class ProposalPage {
     return !!p && p.status === 'sent' && p.isLatest && !p.isExpired;
   });
   protected readonly pdfUrl = computed(() => this.api.pdfUrl(this.id()));
+  protected readonly signedPdfUrl = computed(() => this.api.signedPdfUrl(this.id()));
 
   constructor() {
     effect(() => {
