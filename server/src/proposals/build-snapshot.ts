@@ -47,9 +47,12 @@ function scopeByRoom(src: ProposalSources, unit: 'ft' | 'm'): SnapshotRoom[] {
     .map((r) => ({ id: r.id, name: r.name, surfaces: [...r.surfaces.values()] }));
 }
 
-/** The engine's cautions across all options, once each, each line once (the domain merges them). */
+/** The engine's cautions across all options, once each, each line once, without the office's own reminders. */
 function safetyNotes(variants: readonly StoredVariant[]): SnapshotCaution[] {
-  return mergeCautions(variants.map((v) => v.result.cautions)).map((c) => ({ ...c, bullets: [...c.bullets] }));
+  return mergeCautions(
+    variants.map((v) => v.result.cautions),
+    'client',
+  ).map((c) => ({ ...c, bullets: [...c.bullets] }));
 }
 
 function option(v: StoredVariant, currency: string, digits: number, choice: ProposalChoice): SnapshotOption {

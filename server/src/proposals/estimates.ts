@@ -29,6 +29,8 @@ export function blankInputs(title: string, startDate: string): EstimateInputs {
     sundries: [],
     discount: null,
     perAreaRates: {},
+    internalNotes: '',
+    clientNotes: '',
   };
 }
 

@@ -30,7 +30,15 @@ export interface StoredVariant {
 }
 
 export interface ProposalSources {
-  readonly estimate: { id: string; title: string; status: string; startDate: string; variants: readonly StoredVariant[] };
+  readonly estimate: {
+    id: string;
+    title: string;
+    status: string;
+    startDate: string;
+    variants: readonly StoredVariant[];
+    /** the estimate's notes for the client (its internal notes are never read here) */
+    clientNotes: string;
+  };
   readonly firm: {
     name: string;
     addressLines: string[];
@@ -63,6 +71,7 @@ interface EstimateRow {
   site_id: string;
   client_id: string;
   result: { variants?: StoredVariant[] } | null;
+  client_notes: string | null;
 }
 
 interface FirmRow extends AddressColumns {
@@ -104,7 +113,8 @@ const addressLines = (r: AddressColumns) =>
 export async function loadProposalSources(tx: TenantTx, estimateId: string): Promise<ProposalSources> {
   const est: EstimateRow | undefined = (
     await tx.client.query<EstimateRow>(
-      `select id, title, status, start_date::text as start_date, site_id, client_id, result from estimates where tenant_id = $1 and id = $2 for update`,
+      `select id, title, status, start_date::text as start_date, site_id, client_id, result, inputs->>'clientNotes' as client_notes
+         from estimates where tenant_id = $1 and id = $2 for update`,
       [tx.tenantId, estimateId],
     )
   ).rows[0];
@@ -149,7 +159,14 @@ export async function loadProposalSources(tx: TenantTx, estimateId: string): Pro
     ])
   ).rows;
   return {
-    estimate: { id: est.id, title: est.title, status: est.status, startDate: est.start_date, variants },
+    estimate: {
+      id: est.id,
+      title: est.title,
+      status: est.status,
+      startDate: est.start_date,
+      variants,
+      clientNotes: est.client_notes ?? '',
+    },
     firm: {
       name: firm.name,
       addressLines: addressLines(firm),

@@ -138,7 +138,8 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
     expiresOn: input.expiresOn,
     terms,
     exclusions: input.exclusions ?? [],
-    notes: input.notes ?? '',
+    // the estimate's notes for the client, unless the office wrote the proposal's own; internal notes never
+    notes: input.notes ?? sources.estimate.clientNotes,
   });
   await tx.client.query(
     `update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status = 'draft'`,

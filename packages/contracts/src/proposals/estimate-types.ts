@@ -32,6 +32,8 @@ export const ESTIMATE_INPUT_LIMITS = {
   /** option and add-on ids: letters, digits, - and _ */
   shortIdMax: 40,
   discountPercentMax: 100,
+  /** internal notes and notes for the client, each */
+  notesMax: 4000,
 } as const;
 
 /** The pattern of option and add-on ids ("A", "addon-2"). */
@@ -78,6 +80,10 @@ export interface EstimateInputs {
   discount: EstimateDiscountInput | null;
   /** price per unit² by finish system id, for the per-area comparison */
   perAreaRates: Record<string, string>;
+  /** for the office only (pricing reminders, access, suppliers): never reaches a proposal, its PDF or the portal */
+  internalNotes?: string;
+  /** for the client: a new proposal's notes start from these */
+  clientNotes?: string;
 }
 
 /** POST /api/estimates. */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDate, moneyAmount, pageQuery, requiredText, uuid } from '../common/fields';
+import { isoDate, moneyAmount, pageQuery, requiredText, text, uuid } from '../common/fields';
 import { requestSchema } from '../common/schema-check';
 import { ESTIMATE_INPUT_LIMITS as L, ESTIMATE_SHORT_ID_PATTERN, type EstimateCreate, type EstimateInputs } from './estimate-types';
 
@@ -50,6 +50,8 @@ export const estimateInputs = requestSchema<EstimateInputs>()(
         .nullable(),
       /** price per unit² by finish system id, for the per-area comparison */
       perAreaRates: z.record(z.uuid(), moneyAmount),
+      internalNotes: text(L.notesMax, 'Internal notes').optional(),
+      clientNotes: text(L.notesMax, 'Notes for the client').optional(),
     })
     .superRefine((v, ctx) => {
       const ids = new Set<string>();

@@ -1,3 +1,4 @@
+import { SCAFFOLD_PRICING_NOTE } from '../safety/safety-cautions';
 import { mergeCautions, type OptionCaution } from './merge-cautions';
 
 // Merging is presentation, not a rule: common practice, no source. The wording merged is the engine's own.
@@ -36,5 +37,19 @@ describe('mergeCautions: one document, each caution and each line once', () => {
     const merged = mergeCautions([[height], [lime('Lime putty'), { ...height, bullets: ['Use a guardrail: always.', 'Check the base.'] }]]);
     expect(merged.map((c) => c.id)).toEqual(['height', 'lime-alkali']);
     expect(merged[0].bullets).toEqual(['Use a guardrail: always.', 'Check the base.']);
+  });
+
+  it('leaves the estimator’s pricing reminder out of what the client reads, and keeps it for the office', () => {
+    const scaffold: OptionCaution = {
+      id: 'scaffold-fall-protection',
+      title: 'Scaffold fall protection',
+      rule: '29 CFR 1926.451(g)(1)',
+      standing: 's',
+      bullets: ['Work on a scaffold more than 10 ft above a lower level needs guardrails.', SCAFFOLD_PRICING_NOTE],
+    };
+    expect(mergeCautions([[scaffold]], 'client')[0].bullets).toEqual([
+      'Work on a scaffold more than 10 ft above a lower level needs guardrails.',
+    ]);
+    expect(mergeCautions([[scaffold]])[0].bullets).toContain(SCAFFOLD_PRICING_NOTE);
   });
 });

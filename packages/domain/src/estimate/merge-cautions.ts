@@ -1,3 +1,5 @@
+import { OFFICE_ONLY_LINES } from '../safety/safety-cautions';
+
 /** A caution as each option's result carries it (the engine's `Caution`, ids as plain strings). */
 export interface OptionCaution {
   readonly id: string;
@@ -17,14 +19,18 @@ function listBullet(bullet: string): { label: string; names: string[] } | null {
  * The cautions of every option of an estimate, once each, for one document. Bullets are merged in
  * order without repeats, and a list bullet ("Lime products: …") appears once with the names of
  * every option, so two options with different lime products do not print "Lime products" twice.
+ * For the client, lines meant for the office alone (pricing reminders) are left out.
  */
-export function mergeCautions(perOption: ReadonlyArray<readonly OptionCaution[]>): OptionCaution[] {
+export function mergeCautions(
+  perOption: ReadonlyArray<readonly OptionCaution[]>,
+  audience: 'office' | 'client' = 'office',
+): OptionCaution[] {
   const byId = new Map<string, OptionCaution & { bullets: string[] }>();
   for (const cautions of perOption) {
     for (const c of cautions) {
       let into = byId.get(c.id);
       if (!into) byId.set(c.id, (into = { ...c, bullets: [] }));
-      for (const b of c.bullets) addBullet(into.bullets, b);
+      for (const b of c.bullets) if (audience === 'office' || !OFFICE_ONLY_LINES.has(b)) addBullet(into.bullets, b);
     }
   }
   return [...byId.values()];

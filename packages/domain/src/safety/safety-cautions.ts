@@ -68,6 +68,12 @@ const RULE_SOURCE: Readonly<Record<CautionId, 'us-federal' | 'guidance'>> = {
   'oily-rags': 'guidance', // safety data sheets
 };
 
+/** A reminder for the estimator, shown in the builder and never printed for the client (see OFFICE_ONLY_LINES). */
+export const SCAFFOLD_PRICING_NOTE = 'Price the scaffold rental and the time to put it up and take it down.';
+
+/** Caution lines meant for the office alone: a proposal, its PDF and the portal leave them out. */
+export const OFFICE_ONLY_LINES: ReadonlySet<string> = new Set([SCAFFOLD_PRICING_NOTE]);
+
 export const OUTSIDE_US_LINE = 'Outside the US, check your national or provincial rules.';
 
 /** "US federal rule." or "Guidance, not a regulation.", plus the outside-US line for a firm elsewhere. */
@@ -118,7 +124,7 @@ export function safetyCautions(facts: SafetyFacts): Caution[] {
       caution('scaffold-fall-protection', 'Scaffold fall protection', '29 CFR 1926.451(g)(1)', [
         'Work on a scaffold more than 10 ft above a lower level needs guardrails or personal fall arrest, depending on the scaffold type.',
         'Have a competent person erect and inspect the scaffold; lock the casters on rolling towers.',
-        'Price the scaffold rental and the time to put it up and take it down.',
+        SCAFFOLD_PRICING_NOTE,
       ]),
     );
   }

@@ -30,7 +30,7 @@ import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { AddOnsSection } from './addons-section';
 import { EstimateApi } from './estimate-api';
-import { MAX_OPTIONS, WORDS, estimateForm, fillForm, nextOptionId, optionGroup, readInputs } from './estimate-form';
+import { MAX_OPTIONS, NOTES_MAX, WORDS, estimateForm, fillForm, nextOptionId, optionGroup, readInputs } from './estimate-form';
 import { SAVED_WORDS, readOnlyReason, statusWord } from './estimate-words';
 import { ExtrasFields } from './extras-fields';
 import { applySaveProblem, targetKey } from './field-targets';
@@ -95,6 +95,7 @@ export class EstimateBuilder implements OnInit {
   protected readonly justSaved = signal(false);
   protected readonly currentIndex = signal(0);
   protected readonly maxOptions = MAX_OPTIONS;
+  protected readonly notesMax = NOTES_MAX;
   protected readonly noNotes: ReadonlyMap<string, string> = new Map();
   protected readonly words = WORDS;
   protected readonly errorText = errorText;

@@ -28,9 +28,21 @@ const inputs: EstimateInputs = {
   sundries: [],
   discount: { kind: 'percent', percent: 5 },
   perAreaRates: { f1: '2.50' },
+  internalNotes: 'Price the scaffold rental from the yard on Mill Road.',
+  clientNotes: 'We cover the floors and furniture every day.',
 };
 
 describe('estimate form', () => {
+  it('keeps internal notes and notes for the client in their own fields', () => {
+    const form = estimateForm();
+    fillForm(form, context, inputs);
+    const read = readInputs(form, context);
+    expect(read.internalNotes).toBe('Price the scaffold rental from the yard on Mill Road.');
+    expect(read.clientNotes).toBe('We cover the floors and furniture every day.');
+    fillForm(form, context, { ...inputs, internalNotes: undefined, clientNotes: undefined });
+    expect(readInputs(form, context)).toMatchObject({ internalNotes: '', clientNotes: '' });
+  });
+
   it('gives back exactly the inputs it was filled with', () => {
     const form = estimateForm();
     fillForm(form, context, inputs);

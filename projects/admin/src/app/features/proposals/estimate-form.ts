@@ -11,6 +11,7 @@ import { fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { requiredText } from '../../shared/forms/text-validators';
 
 export const MAX_OPTIONS = L.optionsMax;
+export const NOTES_MAX = L.notesMax;
 /** Add-ons and each kind of cost line have the same cap. */
 export const MAX_LINES = Math.min(L.addOnsMax, L.costLinesMax);
 
@@ -19,6 +20,7 @@ const atMost = (max: number) => `Use at most ${max} characters.`;
 /** Mirrors the contracts' schema (proposals/estimate.ts) so both sides say the same. */
 export const WORDS = {
   title: { required: 'Give the estimate a title.', maxlength: atMost(L.titleMax) },
+  notes: { maxlength: atMost(L.notesMax) },
   startDate: { required: 'Enter a date.', matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.' },
   optionLabel: { required: 'Name this option.', maxlength: atMost(L.optionLabelMax) },
   addOnLabel: { required: 'Name this add-on.', maxlength: atMost(L.addOnLabelMax) },
@@ -46,6 +48,7 @@ function percentText(control: AbstractControl<string>): ValidationErrors | null 
 
 const text = (value: string, max: number) =>
   new FormControl(value, { nonNullable: true, validators: [requiredText, Validators.maxLength(max)] });
+const notes = () => new FormControl('', { nonNullable: true, validators: [Validators.maxLength(L.notesMax)] });
 const amount = (value: string) => new FormControl(value, { nonNullable: true, validators: [Validators.required, amountText] });
 
 export type OptionGroup = FormGroup<{
@@ -104,6 +107,10 @@ export function estimateForm() {
     }),
     /** finish system id → price per unit²; blank = no comparison rate */
     perAreaRates: new FormRecord<FormControl<string>>({}),
+    /** for the office only: never reaches the client */
+    internalNotes: notes(),
+    /** for the client: a new proposal's notes start from these */
+    clientNotes: notes(),
   });
 }
 export type EstimateForm = ReturnType<typeof estimateForm>;
@@ -147,6 +154,8 @@ export function fillForm(form: EstimateForm, context: EstimateContext, inputs: E
     title: inputs.title,
     startDate: fromIsoDate(inputs.startDate),
     isOccupied: inputs.isOccupied,
+    internalNotes: inputs.internalNotes ?? '',
+    clientNotes: inputs.clientNotes ?? '',
     discount: {
       kind,
       percent: discount?.kind === 'percent' ? String(discount.percent) : '',
@@ -192,6 +201,8 @@ export function readInputs(form: EstimateForm, context: EstimateContext): Estima
         .map(([id, rate]) => [id, toAmount(rate)] as const)
         .filter((entry): entry is readonly [string, string] => entry[1] !== null),
     ),
+    internalNotes: v.internalNotes.trim(),
+    clientNotes: v.clientNotes.trim(),
   };
 }
 
