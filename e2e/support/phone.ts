@@ -18,8 +18,9 @@ export async function openLive(page: Page, path: string): Promise<void> {
 }
 
 /**
- * Opens an admin page on the phone and waits until it is live and the shell has folded its
- * navigation behind the menu button (the server renders it open, not knowing the screen size).
+ * Opens an admin page on the phone and waits until it is live with its navigation folded behind
+ * the menu button (the server renders the wide layout; the stylesheet hides its side navigation on
+ * a phone until the app turns it into an overlay).
  */
 export async function openLiveOnPhone(phone: Page, path: string): Promise<void> {
   await openLive(phone, path);

@@ -26,6 +26,7 @@ import { Wordmark } from './wordmark';
         linear-gradient(178deg, transparent 0 74%, rgb(200 150 46 / 10%) 74% 84%, rgb(107 74 47 / 8%) 84%), var(--lb-ivory);
     }
     .card {
+      box-sizing: border-box;
       width: min(100%, 26rem);
       padding: 2rem 1.75rem;
       border-radius: 12px;

@@ -73,11 +73,12 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
           <h2 id="finish-heading">The finish</h2>
           @if (b.finishName) {
             <p>{{ b.finishName }}, in the order it goes on:</p>
-            <ul class="steps">
+            <!-- Each step carries its number in its words ("1. Base coat: …"), so the list draws no marker of its own. -->
+            <ol class="steps">
               @for (step of b.finishSteps; track $index) {
                 <li>{{ step }}</li>
               }
-            </ul>
+            </ol>
           } @else {
             <p>{{ b.firmName }} will tell you about the finish on this board.</p>
           }
@@ -131,6 +132,13 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
     </section>
   `,
   styles: `
+    .steps {
+      list-style: none;
+      padding-left: 0;
+    }
+    .steps li + li {
+      margin-top: 0.35rem;
+    }
     .meta {
       color: var(--mat-sys-on-surface-variant);
       margin-top: 0;
