@@ -1,4 +1,5 @@
 import { expect, type Page } from '@playwright/test';
+import { pathFrom, waitForMail } from './inbox';
 
 /** The demo firm's shared password (server/src/seed/demo.ts). */
 export const DEMO_PASSWORD = 'limewash-demo-2026';
@@ -44,7 +45,10 @@ export function newFirm(firmName: string, name: string, password: string): NewFi
   return { firmName, name, email: `owner.${Date.now()}@${slug}.example`, password };
 }
 
-/** Starts a new firm through the sign-up page; its owner lands signed in on Today. */
+/**
+ * Starts a new firm through the sign-up page, follows the confirmation link e-mailed to the owner,
+ * and opens the firm; its owner lands signed in on Today.
+ */
 export async function signUp(page: Page, firm: NewFirm): Promise<void> {
   await page.goto('/sign-up');
   await page.getByLabel('Firm name').fill(firm.firmName);
@@ -52,6 +56,10 @@ export async function signUp(page: Page, firm: NewFirm): Promise<void> {
   await page.getByLabel('E-mail').fill(firm.email);
   await page.getByLabel('Password', { exact: true }).fill(firm.password);
   await page.getByRole('button', { name: 'Create firm' }).click();
+  await expect(page.getByRole('status')).toContainText('Check your inbox to finish');
+  const mail = await waitForMail(firm.email, /^Finish opening /);
+  await page.goto(pathFrom(mail));
+  await page.getByRole('button', { name: 'Open my firm' }).click();
   await expect(page).toHaveURL(/\/today$/);
 }
 

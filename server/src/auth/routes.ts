@@ -3,7 +3,9 @@ import {
   passwordResetComplete,
   passwordResetRequest,
   signInRequest,
+  signUpConfirm,
   signUpRequest,
+  SIGN_UP_SENT_DETAIL,
   token as tokenField,
   type InvitationPreview,
   type Notice,
@@ -20,7 +22,7 @@ import { parse } from '../http/validate';
 import { acceptInvitation, previewInvitation } from './invitations';
 import { endSession, logIn, logOut, type AppPassport } from './passport-setup';
 import { completePasswordReset, requestPasswordReset } from './password-reset';
-import { signUp } from './staff-auth';
+import { confirmSignUp, requestSignUp } from './staff-auth';
 
 export async function staffSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<StaffSession> {
   const claim = req.user?.kind === 'staff' ? req.user : null;
@@ -45,8 +47,14 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
     res.set('cache-control', 'no-store').json((await staffSession(ctx, req, res)) satisfies StaffSession);
   });
 
+  // The same 202 and words for a new and a known e-mail; the e-mail says which (staff-auth.ts).
   router.post('/signup', signInLimiter, async (req, res) => {
-    const principal = await signUp(ctx, parse(signUpRequest, req.body));
+    await requestSignUp(ctx, parse(signUpRequest, req.body));
+    res.status(202).json({ detail: SIGN_UP_SENT_DETAIL } satisfies Notice);
+  });
+
+  router.post('/signup/confirm', signInLimiter, async (req, res) => {
+    const principal = await confirmSignUp(ctx, parse(signUpConfirm, req.body).token);
     await signInAndAnswer(ctx, req, res, principal, 201);
   });
 

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import type { SignInRequest, SignUpRequest } from '@layerbook/contracts';
-import { asc, eq, firms, memberships, users, withGlobal, withLookup, withTenant } from '@layerbook/db';
+import { asc, eq, firms, memberships, pendingSignUps, users, withGlobal, withLookup, withTenant } from '@layerbook/db';
 import type { AppContext } from '../context';
 import type { StaffPrincipal } from '../http/principal';
 import { conflict, HttpError } from '../http/problem';
@@ -9,40 +9,132 @@ import { isSlugTaken, slugCandidates } from '../firms/slug';
 import { isUniqueViolation } from '../http/pg-errors';
 import { passwordHashOf } from './password-store';
 import { loadStaffPrincipal } from './staff-principal';
+import { enqueueMail } from '../mail/outbox';
+import { signUpConfirmMail, signUpKnownAddressMail } from '../mail/sign-up-templates';
+import { hashToken, minutesFromNow, newToken } from './tokens';
 import { assertNotThrottled, clearFailedSignIns, countFailedSignIn } from './throttle';
 import { assertAcceptablePassword, decoyPasswordHash, hashPassword, verifyPassword } from './passwords';
 
 const WRONG = () => new HttpError(401, 'Sign-in failed', 'E-mail or password is not right.');
 const emailTaken = () =>
   conflict('An account with this e-mail already exists.', [
-    { field: 'email', message: 'An account with this e-mail already exists; sign in instead.' },
+    { field: 'token', message: 'An account with this e-mail already exists; sign in instead.' },
   ]);
 
-/** Creates a firm and its owner in one transaction, and returns the owner, signed in. */
-export async function signUp(ctx: AppContext, input: SignUpRequest): Promise<StaffPrincipal> {
+export const SIGN_UP_HOURS = 24;
+
+/**
+ * Starts a sign-up. It answers the same whether the e-mail is new or already has an account (so
+ * accounts cannot be discovered), and hashes the password either way so both take as long. A new
+ * address gets a confirmation link (the firm is created only when it is followed); a known one is
+ * told that someone tried, and nothing is created.
+ */
+export async function requestSignUp(ctx: AppContext, input: SignUpRequest): Promise<void> {
   assertAcceptablePassword(input.password, { email: input.email, name: input.name, firmNames: [input.firmName] });
   const passwordHash = await hashPassword(input.password);
+  const known = await withGlobal(
+    ctx.pool,
+    async (tx) => (await tx.db.select({ id: users.id, name: users.name }).from(users).where(eq(users.email, input.email)))[0],
+  );
+  if (known) return tellKnownAddress(ctx, input.email, known);
   const firmId = randomUUID();
+  const { token, hash } = newToken();
+  await withTenant(ctx.pool, firmId, async (tx) => {
+    const [pending] = await tx.db
+      .insert(pendingSignUps)
+      .values({
+        tokenHash: hash,
+        firmId,
+        email: input.email,
+        name: input.name,
+        firmName: input.firmName,
+        passwordHash,
+        expiresAt: minutesFromNow(ctx.now(), SIGN_UP_HOURS * 60),
+      })
+      .returning({ id: pendingSignUps.id });
+    // Filed under the firm-to-be: the outbox keeps every mail under a firm id.
+    await enqueueMail(tx, ctx.queue, {
+      purposeKey: `sign-up:${pending.id}`,
+      tenantId: firmId,
+      to: input.email,
+      ...signUpConfirmMail({
+        name: input.name,
+        firmName: input.firmName,
+        url: `${ctx.config.PUBLIC_URL}/sign-up/confirm?token=${token}`,
+        hours: SIGN_UP_HOURS,
+      }),
+    });
+  });
+}
+
+async function tellKnownAddress(ctx: AppContext, email: string, user: { id: string; name: string }): Promise<void> {
+  const rows = await withLookup(ctx.pool, { userId: user.id }, (tx) =>
+    tx.db
+      .select({ tenantId: memberships.tenantId })
+      .from(memberships)
+      .where(eq(memberships.userId, user.id))
+      .orderBy(asc(memberships.createdAt)),
+  );
+  const tenantId = rows[0]?.tenantId;
+  if (!tenantId) return;
+  await withTenant(ctx.pool, tenantId, (tx) =>
+    enqueueMail(tx, ctx.queue, {
+      purposeKey: `sign-up-known:${randomUUID()}`,
+      tenantId,
+      to: email,
+      ...signUpKnownAddressMail({
+        name: user.name,
+        signInUrl: `${ctx.config.PUBLIC_URL}/sign-in`,
+        resetUrl: `${ctx.config.PUBLIC_URL}/forgot-password`,
+      }),
+    }),
+  );
+}
+
+const linkProblem = (detail: string) => new HttpError(410, 'No longer valid', detail, [{ field: 'token', message: detail }]);
+
+/** Follows a confirmation link: once, before it expires, it creates the firm and its owner (one transaction). */
+export async function confirmSignUp(ctx: AppContext, token: string): Promise<StaffPrincipal> {
+  const tokenHash = hashToken(token);
+  const pending = await withGlobal(
+    ctx.pool,
+    async (tx) => (await tx.db.select().from(pendingSignUps).where(eq(pendingSignUps.tokenHash, tokenHash)))[0],
+  );
+  if (!pending) throw linkProblem('This sign-up link is not known. Start the sign-up again.');
   const userId = randomUUID();
-  for (const slug of slugCandidates(input.firmName)) {
+  for (const slug of slugCandidates(pending.firmName)) {
     try {
-      await createFirmWithOwner(ctx, { ...input, firmId, userId, slug, passwordHash });
+      await createFirmWithOwner(ctx, { ...pending, firmId: pending.firmId, userId, slug, tokenHash });
       break;
     } catch (error) {
       if (isUniqueViolation(error, 'users_email_key')) throw emailTaken();
       if (!isSlugTaken(error)) throw error;
     }
   }
-  const principal = await loadStaffPrincipal(ctx.pool, userId, firmId);
+  const principal = await loadStaffPrincipal(ctx.pool, userId, pending.firmId);
   if (!principal) throw new Error('new owner not found');
   return principal;
 }
 
 async function createFirmWithOwner(
   ctx: AppContext,
-  p: SignUpRequest & { firmId: string; userId: string; slug: string; passwordHash: string },
+  p: {
+    firmId: string;
+    userId: string;
+    slug: string;
+    tokenHash: string;
+    email: string;
+    name: string;
+    firmName: string;
+    passwordHash: string;
+  },
 ): Promise<void> {
   await withTenant(ctx.pool, p.firmId, async (tx) => {
+    // The link is spent in the same transaction that opens the firm: both happen, or neither.
+    const [link] = await tx.db.select().from(pendingSignUps).where(eq(pendingSignUps.tokenHash, p.tokenHash)).for('update');
+    if (!link || link.usedAt) throw linkProblem('This sign-up link was already used. Sign in instead.');
+    if (link.expiresAt <= ctx.now()) throw linkProblem('This sign-up link has expired. Start the sign-up again.');
+    await tx.db.update(pendingSignUps).set({ usedAt: ctx.now() }).where(eq(pendingSignUps.id, link.id));
     const taken = await tx.db.select({ id: users.id }).from(users).where(eq(users.email, p.email));
     if (taken.length) {
       throw emailTaken();

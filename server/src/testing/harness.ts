@@ -13,7 +13,8 @@ import { startS3Fake } from '../files/s3-fake';
 import { createLogger } from '../http/logger';
 import { startQueue, StartedQueue } from '../queue/job-queue';
 import { startWorkers, Workers } from '../queue/workers';
-import { Inbox, startInbox } from './inbox';
+import type { ParsedMail } from 'mailparser';
+import { Inbox, linkIn, startInbox } from './inbox';
 import { testDatabaseUrls } from './test-env';
 
 export interface TestServer {
@@ -25,6 +26,12 @@ export interface TestServer {
   setNow(date: Date | null): void;
   stop(): Promise<void>;
 }
+
+/**
+ * The inboxes of the test servers running in this file, by app, so signUpFirm(app) can follow the
+ * sign-up's e-mailed link. Servers share one queue, so any server's worker may send the mail.
+ */
+const inboxes = new Map<Express, Inbox>();
 
 export async function startTestServer(overrides: Partial<Record<keyof Config, string>> = {}): Promise<TestServer> {
   const inbox = await startInbox();
@@ -52,8 +59,10 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
   const workers: Workers = await startWorkers(config, queue, logger, () => fixedNow ?? new Date());
   const storage = await openObjectStore(config);
   const ctx: AppContext = { config, pool, queue, logger, storage, now: () => fixedNow ?? new Date() };
+  const app = createApp(ctx);
+  inboxes.set(app, inbox);
   return {
-    app: createApp(ctx),
+    app,
     ctx,
     inbox,
     queue,
@@ -66,6 +75,7 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
       // test file down ("Cannot destructure property 'setTimeout'"). Outlive that one last check.
       await new Promise((resolve) => setTimeout(resolve, 1_100));
       await pool.end();
+      inboxes.delete(app);
       await inbox.close();
       storage.close();
       await s3.stop();
@@ -94,16 +104,33 @@ export async function newAgent(
 let counter = 0;
 export const uniqueEmail = (prefix = 'person') => `${prefix}.${Date.now().toString(36)}.${++counter}@example.test`;
 
-/** Signs up a new firm through the API and returns a signed-in owner agent. */
+/** Signs up a new firm through the API (sign-up, then the e-mailed confirmation link) and returns a signed-in owner agent. */
 export async function signUpFirm(app: Express, firmName = 'Test Plaster Studio') {
   const { agent, csrf, refresh } = await newAgent(app);
   const email = uniqueEmail('owner');
   // No word of four letters or more, so no firm name a spec picks can make it a context word.
   const password = 'qz7-xRv4-mn2W-p9k';
   const res = await agent.post('/api/auth/signup').set('x-csrf-token', csrf()).send({ firmName, name: 'Olive Owner', email, password });
-  if (res.status !== 201) throw new Error(`signup failed: ${res.status} ${JSON.stringify(res.body)}`);
-  const { user } = res.body as StaffSession;
+  if (res.status !== 202) throw new Error(`signup failed: ${res.status} ${JSON.stringify(res.body)}`);
+  const token = await signUpTokenFor(app, email);
+  const confirmed = await agent.post('/api/auth/signup/confirm').set('x-csrf-token', csrf()).send({ token });
+  if (confirmed.status !== 201) throw new Error(`signup confirm failed: ${confirmed.status} ${JSON.stringify(confirmed.body)}`);
+  const { user } = confirmed.body as StaffSession;
   if (!user) throw new Error('signup answered without a signed-in user');
   await refresh();
   return { agent, csrf, email, password, firmId: user.firmId, userId: user.id };
 }
+
+/** The token of the sign-up confirmation link e-mailed to `email` (read from the test server's inbox). */
+export async function signUpTokenFor(app: Express, email: string): Promise<string> {
+  if (!inboxes.has(app)) throw new Error('signUpFirm needs an app from startTestServer (the inboxes hold the link)');
+  const match = (m: ParsedMail) => JSON.stringify(m.to ?? '').includes(email) && linkInOrEmpty(m).includes('/sign-up/confirm?');
+  // Looks in every inbox (no waiter is left behind on the ones the mail does not reach).
+  for (const deadline = Date.now() + 15_000; Date.now() < deadline; await new Promise((r) => setTimeout(r, 50))) {
+    const mail = [...inboxes.values()].flatMap((inbox) => inbox.messages).find(match);
+    if (mail) return new URL(linkIn(mail)).searchParams.get('token')!;
+  }
+  throw new Error(`no sign-up link arrived for ${email}`);
+}
+
+const linkInOrEmpty = (m: ParsedMail) => m.text?.match(/https?:\/\/\S+/)?.[0] ?? '';

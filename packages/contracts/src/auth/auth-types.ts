@@ -56,6 +56,12 @@ export interface SignUpRequest {
   readonly email: string;
   readonly password: string;
 }
+/** POST /api/auth/signup/confirm: the code from the e-mailed confirmation link. */
+export interface SignUpConfirm {
+  readonly token: string;
+}
+/** POST /api/auth/signup answers this alike for a new and a known e-mail (202). */
+export const SIGN_UP_SENT_DETAIL = 'Check your inbox to finish: we sent a link to that e-mail address.';
 export interface PasswordResetRequest {
   readonly email: string;
 }

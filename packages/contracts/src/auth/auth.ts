@@ -10,6 +10,7 @@ import {
   type PortalLinkRequest,
   type PortalRedeemRequest,
   type SignInRequest,
+  type SignUpConfirm,
   type SignUpRequest,
 } from './auth-types';
 import { email, newPassword, personName, token } from './fields';
@@ -35,6 +36,8 @@ export const signUpRequest = requestSchema<SignUpRequest>()(
 );
 
 export const passwordResetRequest = requestSchema<PasswordResetRequest>()(z.strictObject({ email }));
+
+export const signUpConfirm = requestSchema<SignUpConfirm>()(z.strictObject({ token }));
 
 export const passwordResetComplete = requestSchema<PasswordResetComplete>()(z.strictObject({ token, password: newPassword }));
 

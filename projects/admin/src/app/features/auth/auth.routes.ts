@@ -15,6 +15,12 @@ const routes: Routes = [
     loadComponent: () => import('./sign-up').then((m) => m.SignUp),
   },
   {
+    path: 'sign-up/confirm',
+    title: 'Open your firm · Layerbook',
+    canActivate: [signedOutGuard],
+    loadComponent: () => import('./confirm-sign-up').then((m) => m.ConfirmSignUp),
+  },
+  {
     path: 'forgot-password',
     title: 'Reset your password · Layerbook',
     loadComponent: () => import('./forgot-password').then((m) => m.ForgotPassword),

@@ -1,9 +1,10 @@
-import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { Router, RouterLink } from '@angular/router';
+import { RouterLink } from '@angular/router';
 import {
   EMAIL_MAX_LENGTH,
   FIRM_NAME_MAX_LENGTH,
@@ -12,7 +13,6 @@ import {
   PASSWORD_MIN_LENGTH,
   PERSON_NAME_MAX_LENGTH,
 } from '@layerbook/contracts/types';
-import { HOME_URL } from '../../core/auth/guards';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
 import { errorText } from '../../shared/forms/error-text';
@@ -25,13 +25,25 @@ import { StaffAuth } from './staff-auth';
 
 @Component({
   selector: 'lb-sign-up',
-  imports: [AuthFrame, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, RevealPassword, RouterLink],
+  imports: [
+    AuthFrame,
+    FormAlert,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    ReactiveFormsModule,
+    RevealPassword,
+    RouterLink,
+  ],
   templateUrl: './sign-up.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class SignUp {
   private readonly auth = inject(StaffAuth);
-  private readonly router = inject(Router);
+
+  /** The address the confirmation link went to; set once the request is accepted. */
+  protected readonly sentTo = signal<string | null>(null);
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     firmName: ['', [requiredText, Validators.minLength(FIRM_NAME_MIN_LENGTH), Validators.maxLength(FIRM_NAME_MAX_LENGTH)]],
@@ -55,10 +67,9 @@ export class SignUp {
 
   protected async createFirm(): Promise<void> {
     const { firmName, name, email, password } = this.form.getRawValue();
-    // Busy until the next page is open, so a second click cannot send it twice.
     await this.submission.send(this.form, async () => {
       await this.auth.signUp({ firmName: firmName.trim(), name: name.trim(), email: email.trim(), password });
-      await this.router.navigateByUrl(HOME_URL);
+      this.sentTo.set(email.trim());
     });
   }
 }

@@ -6,6 +6,7 @@ import type {
   PasswordResetComplete,
   PasswordResetRequest,
   SignInRequest,
+  SignUpConfirm,
   SignUpRequest,
   StaffSession,
 } from '@layerbook/contracts/types';
@@ -21,8 +22,13 @@ export class StaffAuth {
     return this.signedIn(this.http.post<StaffSession>('/api/auth/signin', body));
   }
 
-  signUp(body: SignUpRequest): Promise<void> {
-    return this.signedIn(this.http.post<StaffSession>('/api/auth/signup', body));
+  /** Sends the confirmation e-mail; the firm is opened by `confirmSignUp` with the link's code. */
+  async signUp(body: SignUpRequest): Promise<void> {
+    await firstValueFrom(this.http.post('/api/auth/signup', body));
+  }
+
+  confirmSignUp(body: SignUpConfirm): Promise<void> {
+    return this.signedIn(this.http.post<StaffSession>('/api/auth/signup/confirm', body));
   }
 
   async requestPasswordReset(body: PasswordResetRequest): Promise<void> {
