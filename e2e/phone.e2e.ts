@@ -122,6 +122,14 @@ test('the client reads a proposal from the e-mail on a phone and accepts it; eve
   await page.getByRole('button', { name: 'Save estimate' }).click();
   await expect(page.getByText('All changes saved')).toBeVisible();
   const estimateUrl = page.url();
+  const found: Record<string, string[]> = {};
+  {
+    const { phone: builder, context } = await onPhone(browser, page);
+    await openLiveOnPhone(builder, new URL(estimateUrl).pathname);
+    await builder.waitForLoadState('networkidle');
+    await look(builder, 'estimate-builder', found);
+    await context.close();
+  }
   // A sample board shown to the client, so the portal's board page is walked too.
   await navLink(page, 'Sample boards').click();
   await page.getByRole('link', { name: 'New sample board' }).click();
@@ -147,7 +155,6 @@ test('the client reads a proposal from the e-mail on a phone and accepts it; eve
   const mail = await waitForMail(DEMO.client, /sent you a proposal/, { text: 'Stair hall on a phone' });
   const client = await browser.newContext({ viewport: PHONE });
   const portal = await client.newPage();
-  const found: Record<string, string[]> = {};
   await openLive(portal, pathFrom(mail));
   await expect(portal).toHaveURL(/\/portal\/proposals\/[0-9a-f-]+$/);
   await expect(portal.getByRole('heading', { name: 'Stair hall on a phone' }).first()).toBeVisible();
