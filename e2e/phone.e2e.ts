@@ -128,6 +128,11 @@ test('the client reads a proposal from the e-mail on a phone and accepts it; eve
     await openLiveOnPhone(builder, new URL(estimateUrl).pathname);
     await builder.waitForLoadState('networkidle');
     await look(builder, 'estimate-builder', found);
+    // A long label is not cut short beside its suffix ("Price per ft² for Antiqued um… USD").
+    const rate = builder.getByLabel(/Price per ft² for Antiqued umber glaze/);
+    await rate.scrollIntoViewIfNeeded();
+    const label = builder.locator('mat-form-field', { has: rate }).locator('label').first();
+    expect(await label.evaluate((el) => el.scrollWidth <= el.clientWidth + 1)).toBe(true);
     await context.close();
   }
   // A sample board shown to the client, so the portal's board page is walked too.
