@@ -21,7 +21,7 @@ export const passwordResets = pgTable(
   (t) => [uniqueIndex('password_resets_token_hash_key').on(t.tokenHash), index('password_resets_user_idx').on(t.userId)],
 );
 
-/** connect-pg-simple's table, declared here so drizzle-kit owns the migration. */
+/** The session table (rows read and written through security-definer functions by server/src/http/session.ts). */
 export const sessions = pgTable(
   'session',
   {
