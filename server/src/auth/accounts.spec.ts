@@ -92,6 +92,33 @@ describe('prune-expired queue job', () => {
     expect(await left('sign_in_throttle', 'key')).toEqual([`${tag}-live`]);
   });
 
+  it('deletes sign-up links used or expired more than a day ago, and keeps the rest', async () => {
+    const now = new Date('2031-05-02T12:00:00Z');
+    const tag = `prune-signup-${Date.now()}`;
+    const rows: [string, string, string | null][] = [
+      // [token hash suffix, expires_at offset, used_at offset]
+      ['expired-old', "- interval '25 hours'", null],
+      ['used-old', "+ interval '1 hour'", "- interval '25 hours'"],
+      ['expired-recent', "- interval '1 hour'", null],
+      ['used-recent', "+ interval '1 hour'", "- interval '2 hours'"],
+      ['open', "+ interval '23 hours'", null],
+    ];
+    for (const [suffix, expires, used] of rows) {
+      await owner.query(
+        `insert into pending_sign_ups (token_hash, firm_id, email, name, firm_name, password_hash, expires_at, used_at)
+         values ($1, gen_random_uuid(), $1 || '@example.test', 'Prune Test', 'Prune Firm', 'x',
+                 $2::timestamptz ${expires}, ${used ? `$2::timestamptz ${used}` : 'null'})`,
+        [`${tag}-${suffix}`, now.toISOString()],
+      );
+    }
+    const result = await pruneExpired(jobs, now);
+    expect(result.pendingSignUps).toBeGreaterThanOrEqual(2);
+    const left = await owner.query<{ k: string }>(`select token_hash as k from pending_sign_ups where token_hash like $1 order by 1`, [
+      `${tag}%`,
+    ]);
+    expect(left.rows.map((r) => r.k)).toEqual([`${tag}-expired-recent`, `${tag}-open`, `${tag}-used-recent`]);
+  });
+
   it('is scheduled', async () => {
     const schedules = await t.queue.boss.getSchedules();
     expect(schedules.map((s) => s.name)).toContain('prune-expired');

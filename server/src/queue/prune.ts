@@ -3,16 +3,20 @@ import { THROTTLE_WINDOW_MINUTES } from '../auth/throttle';
 
 /** A public-form stamp is refused after two hours (inquiries/public-form.ts); its used nonce is kept a day. */
 export const USED_STAMP_KEEP_HOURS = 24;
+/** A sign-up link, once used or past its expiry, is kept a day and then deleted. */
+export const PENDING_SIGN_UP_KEEP_HOURS = 24;
 
 export interface PruneResult {
   readonly sessions: number;
   readonly formStamps: number;
   readonly throttleWindows: number;
+  readonly pendingSignUps: number;
 }
 
 /**
  * The `prune-expired` queue job: deletes sessions past their expiry, used form stamps too old to
- * be replayed, and sign-in throttle windows that have run out. Runs as the jobs role.
+ * be replayed, sign-in throttle windows that have run out, and sign-up links used or expired more than a
+ * day ago. Runs as the jobs role.
  */
 export async function pruneExpired(pool: Pool, now: Date): Promise<PruneResult> {
   const at = now.toISOString();
@@ -25,5 +29,15 @@ export async function pruneExpired(pool: Pool, now: Date): Promise<PruneResult> 
     at,
     THROTTLE_WINDOW_MINUTES,
   ]);
-  return { sessions: sessions.rowCount ?? 0, formStamps: formStamps.rowCount ?? 0, throttleWindows: throttle.rowCount ?? 0 };
+  const signUps = await pool.query(
+    `delete from pending_sign_ups
+      where coalesce(least(used_at, expires_at), expires_at) < $1::timestamptz - make_interval(hours => $2)`,
+    [at, PENDING_SIGN_UP_KEEP_HOURS],
+  );
+  return {
+    sessions: sessions.rowCount ?? 0,
+    formStamps: formStamps.rowCount ?? 0,
+    throttleWindows: throttle.rowCount ?? 0,
+    pendingSignUps: signUps.rowCount ?? 0,
+  };
 }
