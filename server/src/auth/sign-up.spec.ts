@@ -52,6 +52,28 @@ describe('sign-up answers alike for a new and a known e-mail, and the e-mail say
     expect((await signIn(owner.email, owner.password)).status).toBe(200);
   });
 
+  it('tells a known address at most once an hour, however often the form is sent, and answers alike each time', async () => {
+    const owner = await signUpFirm(t.app);
+    const notices = async () => {
+      const sql = `select count(*)::int as n from mail_outbox where to_address = $1 and purpose_key like 'sign-up-known:%'`;
+      const { rows } = await t.queue.boss.getDb().executeSql(sql, [owner.email]);
+      return (rows[0] as { n: number }).n;
+    };
+    try {
+      t.setNow(new Date('2031-06-01T10:05:00Z'));
+      const first = await askToSignUp(owner.email);
+      for (let i = 0; i < 4; i++) expect((await askToSignUp(owner.email)).body).toEqual(first.body);
+      t.setNow(new Date('2031-06-01T10:55:00Z'));
+      expect((await askToSignUp(owner.email)).status).toBe(202);
+      expect(await notices()).toBe(1);
+      t.setNow(new Date('2031-06-01T11:10:00Z'));
+      expect((await askToSignUp(owner.email)).status).toBe(202);
+      expect(await notices()).toBe(2);
+    } finally {
+      t.setNow(null);
+    }
+  });
+
   it('creates the firm only when the link is followed, signs the owner in, and the link works once', async () => {
     const email = uniqueEmail('iris');
     await askToSignUp(email);

@@ -24,10 +24,18 @@ const emailTaken = () =>
 export const SIGN_UP_HOURS = 24;
 
 /**
+ * The purpose key of the "someone tried to sign up with your address" notice: one per person per
+ * clock hour (the outbox sends a purpose once), so the sign-up form cannot flood an owner's inbox.
+ */
+export function knownAddressNoticeKey(userId: string, now: Date): string {
+  return `sign-up-known:${userId}:${now.toISOString().slice(0, 13)}`;
+}
+
+/**
  * Starts a sign-up. It answers the same whether the e-mail is new or already has an account (so
  * accounts cannot be discovered), and hashes the password either way so both take as long. A new
  * address gets a confirmation link (the firm is created only when it is followed); a known one is
- * told that someone tried, and nothing is created.
+ * told that someone tried (at most once an hour), and nothing is created.
  */
 export async function requestSignUp(ctx: AppContext, input: SignUpRequest): Promise<void> {
   assertAcceptablePassword(input.password, { email: input.email, name: input.name, firmNames: [input.firmName] });
@@ -79,7 +87,7 @@ async function tellKnownAddress(ctx: AppContext, email: string, user: { id: stri
   if (!tenantId) return;
   await withTenant(ctx.pool, tenantId, (tx) =>
     enqueueMail(tx, ctx.queue, {
-      purposeKey: `sign-up-known:${randomUUID()}`,
+      purposeKey: knownAddressNoticeKey(user.id, ctx.now()),
       tenantId,
       to: email,
       ...signUpKnownAddressMail({
