@@ -64,6 +64,13 @@ describe('accepted work (jobs) for the office', () => {
       [3, 'final', null],
     ]);
     expect(lines.map((l) => l.amount)).toEqual(optionA.payments.map((pay) => pay.amount));
+    // The progress payment names the layer it waits for, as the accepted option's schedule does.
+    const progress = optionA.payments.find((pay) => pay.trigger.kind === 'layerComplete')!;
+    const layerId = progress.trigger.kind === 'layerComplete' ? progress.trigger.layerId : '';
+    const layerName = optionA.schedule.milestones.find((m) => m.id === `layer:${layerId}`)!.label;
+    expect(layerName).toBeTruthy();
+    expect(detail.body.paymentSchedule.map((l: { layerName: string | null }) => l.layerName)).toEqual([null, layerName, null]);
+    expect(progress.label).toContain(layerName);
 
     const office = await joinAs(t, p, 'office');
     expect((await office.agent.get(`/api/jobs/${job.id}`)).status).toBe(200);

@@ -64,12 +64,16 @@ const toSummary = (r: SummaryRow): JobSummary => ({
   createdAt: r.created_at.toISOString(),
 });
 
-const toLine = (l: LineRow): PaymentScheduleLineView => ({
+/** Layer names by layer id, from the accepted option's schedule milestones (`layer:<id>`). */
+type LayerNames = ReadonlyMap<string, string>;
+
+const toLine = (l: LineRow, layers: LayerNames): PaymentScheduleLineView => ({
   id: l.id,
   position: l.position,
   label: l.label,
   role: l.role,
   trigger: l.trigger,
+  layerName: l.trigger.kind === 'layerComplete' ? (layers.get(l.trigger.layerId) ?? null) : null,
   percent: l.percent,
   amount: l.amount,
   expectedOn: l.expected_on,
@@ -103,6 +107,15 @@ export async function getJob(tx: TenantTx, id: string): Promise<JobDetail> {
        from payment_schedule_lines where tenant_id = $1 and job_id = $2 order by position`,
     [tx.tenantId, id],
   );
+  const milestones = await tx.client.query<{ id: string; label: string }>(
+    `select m->>'id' as id, m->>'label' as label
+       from proposal_versions v,
+            jsonb_array_elements(v.snapshot->'options') o,
+            jsonb_array_elements(coalesce(o->'schedule'->'milestones', '[]'::jsonb)) m
+      where v.tenant_id = $1 and v.id = $2 and o->>'id' = $3 and m->>'id' like 'layer:%'`,
+    [tx.tenantId, r.proposal_version_id, r.accepted_variant_id],
+  );
+  const layers: LayerNames = new Map(milestones.rows.map((m) => [m.id.slice('layer:'.length), m.label]));
   return {
     ...toSummary(r),
     estimateId: r.estimate_id,
@@ -111,6 +124,6 @@ export async function getJob(tx: TenantTx, id: string): Promise<JobDetail> {
     siteAddress: r.site_address ?? '',
     inquiryId: r.inquiry_id,
     acceptedVariantId: r.accepted_variant_id,
-    paymentSchedule: lines.rows.map(toLine),
+    paymentSchedule: lines.rows.map((l) => toLine(l, layers)),
   };
 }

@@ -4,3 +4,4 @@
  */
 export * from './settings';
 export * from './assemble';
+export { paymentLabel } from '@layerbook/domain';

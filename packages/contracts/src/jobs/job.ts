@@ -44,6 +44,8 @@ export interface PaymentScheduleLineView {
   readonly label: string;
   readonly role: PaymentLineRole;
   readonly trigger: SnapshotPaymentTrigger;
+  /** the layer a layerComplete trigger waits for, as the accepted option's schedule names it; null otherwise */
+  readonly layerName: string | null;
   /** a decimal string ("30" or "33.5"); null for a fixed amount or the rest of the sum */
   readonly percent: string | null;
   readonly amount: string;

@@ -9,7 +9,7 @@ import { problemMessage } from '../../core/errors/problem';
 import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { jobStatus, paymentStatus, paymentWhen } from './job-words';
+import { jobStatus, paymentLine, paymentStatus } from './job-words';
 
 /** One accepted job: what was signed, for how much, and the payments to ask for. */
 @Component({
@@ -33,7 +33,7 @@ export class JobDetail {
   });
   protected readonly jobStatus = jobStatus;
   protected readonly paymentStatus = paymentStatus;
-  protected readonly paymentWhen = paymentWhen;
+  protected readonly paymentLine = paymentLine;
 
   /** The schedule added exactly (packages/domain); it should come to the contract sum. */
   protected readonly totals = computed(() => {

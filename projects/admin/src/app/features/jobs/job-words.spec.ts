@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { jobStatus, paymentStatus, paymentWhen } from './job-words';
+import { jobStatus, paymentLine, paymentStatus } from './job-words';
 
 describe('job words', () => {
   it.each([
@@ -20,10 +20,17 @@ describe('job words', () => {
   });
 
   it.each([
-    [{ kind: 'acceptance' }, 'On acceptance'],
-    [{ kind: 'layerComplete', layerId: 'base' }, 'When the base coats are done'],
-    [{ kind: 'walkthrough' }, 'On completion, after the walk-through'],
-  ] as const)('a payment triggered by %j falls due "%s"', (trigger, words) => {
-    expect(paymentWhen({ trigger })).toBe(words);
+    ['deposit', { kind: 'acceptance' }, null, 'Deposit on acceptance'],
+    ['milestone', { kind: 'layerComplete', layerId: 'base' }, 'Base coat', 'Progress payment when Base coat is finished on every surface'],
+    ['milestone', { kind: 'layerComplete', layerId: 'gone' }, null, 'Progress payment when the chosen layer is finished on every surface'],
+    ['final', { kind: 'walkthrough' }, null, 'Final payment on completion, after the walkthrough'],
+  ] as const)('a %s payment triggered by %j (layer %j) is named "%s", as the proposal names it', (role, trigger, layerName, words) => {
+    expect(paymentLine({ role, trigger, layerName })).toBe(words);
+  });
+
+  it('never speaks of "base coats" when the trigger names another layer', () => {
+    const words = paymentLine({ role: 'milestone', trigger: { kind: 'layerComplete', layerId: 'primer' }, layerName: 'Primer' });
+    expect(words).not.toMatch(/base coats/i);
+    expect(words).toContain('Primer');
   });
 });

@@ -1,3 +1,4 @@
+import { paymentLabel } from '@layerbook/contracts/engine';
 import {
   JOB_STATUS_LABELS,
   PAYMENT_LINE_STATUS_LABELS,
@@ -31,14 +32,10 @@ export const paymentStatus = (status: PaymentLineStatus): StatusLook => ({
   icon: PAYMENT_ICONS[status],
 });
 
-/** When a payment falls due, in trade words, from what the proposal said triggers it. */
-export function paymentWhen(payment: Pick<PaymentScheduleLineView, 'trigger'>): string {
-  switch (payment.trigger.kind) {
-    case 'acceptance':
-      return 'On acceptance';
-    case 'layerComplete':
-      return 'When the base coats are done';
-    case 'walkthrough':
-      return 'On completion, after the walk-through';
-  }
+/**
+ * A payment line's name, said from its trigger as the proposal says it ("Progress payment when Base
+ * coat is finished on every surface"), whatever older wording the line was stored with.
+ */
+export function paymentLine(payment: Pick<PaymentScheduleLineView, 'role' | 'trigger' | 'layerName'>): string {
+  return paymentLabel(payment.role, payment.trigger, payment.layerName ?? undefined);
 }
