@@ -15,6 +15,8 @@ export const ISO_DATE_PATTERN = /^\d{4}-\d{2}-\d{2}$/;
  */
 export const DATE_YEAR_MIN = 1900;
 export const DATE_YEAR_MAX = 2999;
+/** What the API and the apps say of a day outside those years. */
+export const DATE_YEAR_MESSAGE = `Enter a date between ${DATE_YEAR_MIN} and ${DATE_YEAR_MAX}.`;
 
 /** ISO 3166-1 alpha-2, as typed in capitals: "US". */
 export const COUNTRY_CODE_PATTERN = /^[A-Z]{2}$/;

@@ -1,5 +1,13 @@
 import { z } from 'zod';
-import { DATE_YEAR_MAX, DATE_YEAR_MIN, ISO_DATE_PATTERN, MONEY_AMOUNT_PATTERN, YEAR_BUILT_MAX, YEAR_BUILT_MIN } from './field-limits';
+import {
+  DATE_YEAR_MAX,
+  DATE_YEAR_MESSAGE,
+  DATE_YEAR_MIN,
+  ISO_DATE_PATTERN,
+  MONEY_AMOUNT_PATTERN,
+  YEAR_BUILT_MAX,
+  YEAR_BUILT_MIN,
+} from './field-limits';
 import { CURSOR_MAX_LENGTH, PAGE_SIZE_DEFAULT, PAGE_SIZE_MAX } from './lists';
 
 /** Trimmed text with a length cap; empty allowed unless `min` says otherwise. */
@@ -26,7 +34,7 @@ export const isoDate = z
   .string({ error: 'Enter a date.' })
   .regex(ISO_DATE_PATTERN, { error: 'Enter a date as YYYY-MM-DD.', abort: true })
   .refine((d) => Number(d.slice(0, 4)) >= DATE_YEAR_MIN && Number(d.slice(0, 4)) <= DATE_YEAR_MAX, {
-    error: `Enter a date between ${DATE_YEAR_MIN} and ${DATE_YEAR_MAX}.`,
+    error: DATE_YEAR_MESSAGE,
     abort: true,
   })
   .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d), {

@@ -12,7 +12,13 @@ describe('readHoliday', () => {
     ['2026-02-30', [], { error: 'That date does not exist.' }],
     ['2027-02-29', [], { error: 'That date does not exist.' }],
     ['2026-13-01', [], { error: 'That date does not exist.' }],
-    ['0000-01-01', [], { error: 'That date does not exist.' }],
+    // the API's years and words (DATE_YEAR_MIN / DATE_YEAR_MAX)
+    ['0000-01-01', [], { error: 'Enter a date between 1900 and 2999.' }],
+    ['1899-12-31', [], { error: 'Enter a date between 1900 and 2999.' }],
+    ['0026-12-25', [], { error: 'Enter a date between 1900 and 2999.' }],
+    ['3000-01-01', [], { error: 'Enter a date between 1900 and 2999.' }],
+    ['1900-01-01', [], { date: '1900-01-01' }],
+    ['2999-12-31', [], { date: '2999-12-31' }],
     ['2026-12-25', ['2026-12-25'], { error: 'That day is already off.' }],
   ])('reads %j (days off %j)', (text, current, reading) => {
     expect(readHoliday(text, current)).toEqual(reading);

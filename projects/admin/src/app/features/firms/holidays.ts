@@ -1,4 +1,5 @@
-import { HOLIDAYS_MAX, ISO_DATE_PATTERN } from '@layerbook/contracts/types';
+import { DATE_YEAR_MESSAGE, HOLIDAYS_MAX, ISO_DATE_PATTERN } from '@layerbook/contracts/types';
+import { isDateYearAllowed } from '../../shared/forms/iso-date';
 
 /** One day off as typed into settings: a calendar day, or what is wrong with it (the API's words). */
 export type HolidayReading = { readonly date: string } | { readonly error: string };
@@ -8,8 +9,10 @@ export function readHoliday(text: string, current: readonly string[]): HolidayRe
   const date = text.trim();
   if (!ISO_DATE_PATTERN.test(date)) return { error: 'Enter a date as YYYY-MM-DD, like 2026-12-25.' };
   const [year, month, day] = date.split('-').map(Number);
+  // Before the calendar check, as the API does (Date.UTC reads the years 0–99 as 1900–1999).
+  if (!isDateYearAllowed(year)) return { error: DATE_YEAR_MESSAGE };
   const asUtc = new Date(Date.UTC(year, month - 1, day));
-  if (year < 1 || asUtc.getUTCFullYear() !== year || asUtc.getUTCMonth() !== month - 1 || asUtc.getUTCDate() !== day) {
+  if (asUtc.getUTCFullYear() !== year || asUtc.getUTCMonth() !== month - 1 || asUtc.getUTCDate() !== day) {
     return { error: 'That date does not exist.' };
   }
   if (current.includes(date)) return { error: 'That day is already off.' };

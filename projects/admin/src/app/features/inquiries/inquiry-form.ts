@@ -25,7 +25,7 @@ import { FirmCurrency } from '../../core/firm/firm-currency';
 import { errorText } from '../../shared/forms/error-text';
 import { EMAIL_WORDS, tooLong } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
-import { toIsoDate } from '../../shared/forms/iso-date';
+import { DATE_YEAR_WORDS, dateYearInRange, toIsoDate } from '../../shared/forms/iso-date';
 import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
 import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -83,7 +83,7 @@ export class InquiryForm implements OnInit {
     referrerName: ['', Validators.maxLength(L.referrerName)],
     estimatedValue: ['', amountText],
     assigneeUserId: this.fb.control<string | null>(null),
-    nextFollowUp: this.fb.control<Date | null>(null),
+    nextFollowUp: this.fb.control<Date | null>(null, dateYearInRange),
   });
 
   private readonly source = toSignal(this.form.controls.source.valueChanges, { initialValue: '' as const });
@@ -101,7 +101,7 @@ export class InquiryForm implements OnInit {
     year: YEAR_WORDS,
     source: { required: 'Choose where the inquiry came from.' },
     amount: AMOUNT_WORDS,
-    date: { matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.' },
+    date: { matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.', ...DATE_YEAR_WORDS },
   };
 
   constructor() {

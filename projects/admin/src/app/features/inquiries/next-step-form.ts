@@ -10,7 +10,7 @@ import type { InquiryDetail, InquiryUpdate } from '@layerbook/contracts/types';
 import { FirmCurrency } from '../../core/firm/firm-currency';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
-import { fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
+import { DATE_YEAR_WORDS, dateYearInRange, fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
 import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
@@ -86,13 +86,13 @@ export class NextStepForm implements OnInit {
   protected readonly errorText = errorText;
   protected readonly words = {
     amount: AMOUNT_WORDS,
-    date: { matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.' },
+    date: { matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.', ...DATE_YEAR_WORDS },
   };
 
   protected readonly form = this.fb.group({
     estimatedValue: ['', amountText],
     assigneeUserId: this.fb.control<string | null>(null),
-    nextFollowUp: this.fb.control<Date | null>(null),
+    nextFollowUp: this.fb.control<Date | null>(null, dateYearInRange),
   });
 
   ngOnInit(): void {

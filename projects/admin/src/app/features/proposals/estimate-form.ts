@@ -7,7 +7,7 @@ import {
   type EstimateInputs,
 } from '@layerbook/contracts/types';
 import { amountText, toAmount } from '../../shared/forms/money-input';
-import { fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
+import { DATE_YEAR_WORDS, dateYearInRange, fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { requiredText } from '../../shared/forms/text-validators';
 
 export const MAX_OPTIONS = L.optionsMax;
@@ -21,7 +21,7 @@ const atMost = (max: number) => `Use at most ${max} characters.`;
 export const WORDS = {
   title: { required: 'Give the estimate a title.', maxlength: atMost(L.titleMax) },
   notes: { maxlength: atMost(L.notesMax) },
-  startDate: { required: 'Enter a date.', matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.' },
+  startDate: { required: 'Enter a date.', matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.', ...DATE_YEAR_WORDS },
   optionLabel: { required: 'Name this option.', maxlength: atMost(L.optionLabelMax) },
   addOnLabel: { required: 'Name this add-on.', maxlength: atMost(L.addOnLabelMax) },
   costLabel: { required: 'Name this cost.', maxlength: atMost(L.costLabelMax) },
@@ -93,7 +93,7 @@ export function costLineGroup(label = '', value = ''): CostLineGroup {
 export function estimateForm() {
   return new FormGroup({
     title: text('', L.titleMax),
-    startDate: new FormControl<Date | null>(null, Validators.required),
+    startDate: new FormControl<Date | null>(null, [Validators.required, dateYearInRange]),
     isOccupied: new FormControl(false, { nonNullable: true }),
     variants: new FormArray<OptionGroup>([]),
     addOns: new FormArray<AddOnGroup>([]),

@@ -15,7 +15,7 @@ import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
-import { toIsoDate } from '../../shared/forms/iso-date';
+import { dateYearInRange, toIsoDate } from '../../shared/forms/iso-date';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { EstimateApi } from './estimate-api';
@@ -82,7 +82,7 @@ export class NewEstimate {
     siteId: new FormControl('', { nonNullable: true, validators: Validators.required }),
     title: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(ESTIMATE_INPUT_LIMITS.titleMax)] }),
     // Most estimates are for work starting soon; the office changes it when the date is known.
-    startDate: new FormControl<Date | null>(new Date(), Validators.required),
+    startDate: new FormControl<Date | null>(new Date(), [Validators.required, dateYearInRange]),
   });
 
   constructor() {

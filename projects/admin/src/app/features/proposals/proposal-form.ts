@@ -7,7 +7,7 @@ import {
   type ProposalSnapshot,
   type ProposalUpdate,
 } from '@layerbook/contracts/types';
-import { fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
+import { DATE_YEAR_WORDS, dateYearInRange, fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { DEFAULT_EXCLUSIONS, DEFAULT_TERMS_TEXT, DEFAULT_VALID_DAYS } from './proposal-words';
 
 export const MAX_EXCLUSIONS = PROPOSAL_EXCLUSIONS_MAX;
@@ -20,6 +20,7 @@ export const PROPOSAL_WORDS = {
     required: 'Enter the last day the offer stands.',
     matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.',
     afterToday: 'Choose a day after today.',
+    ...DATE_YEAR_WORDS,
   },
   percent: {
     required: 'Enter a whole percentage.',
@@ -72,7 +73,7 @@ export function proposalForm() {
   const expires = new Date();
   expires.setDate(expires.getDate() + DEFAULT_VALID_DAYS);
   return new FormGroup({
-    expiresOn: new FormControl<Date | null>(expires, { validators: [Validators.required, afterToday] }),
+    expiresOn: new FormControl<Date | null>(expires, { validators: [Validators.required, dateYearInRange, afterToday] }),
     terms: new FormGroup(
       {
         depositPercent: percent(30),

@@ -1,5 +1,7 @@
+import { FormControl } from '@angular/forms';
 import { describe, expect, it } from 'vitest';
-import { fromIsoDate, toIsoDate } from './iso-date';
+import { errorText } from './error-text';
+import { DATE_YEAR_WORDS, dateYearInRange, fromIsoDate, toIsoDate } from './iso-date';
 
 describe('toIsoDate', () => {
   it.each([
@@ -25,5 +27,32 @@ describe('fromIsoDate', () => {
 
   it('round-trips with toIsoDate', () => {
     expect(toIsoDate(fromIsoDate('2027-01-01'))).toBe('2027-01-01');
+  });
+});
+
+describe('dateYearInRange (the API takes years 1900 to 2999)', () => {
+  // new Date(26, …) means 1926; a datepicker reading "3/14/0026" holds the year 26 itself.
+  const typed0026 = new Date(2026, 2, 14);
+  typed0026.setFullYear(26);
+  it.each([
+    ['a day this century', new Date(2026, 2, 14), true],
+    ['the first day of 1900', new Date(1900, 0, 1), true],
+    ['the last day of 2999', new Date(2999, 11, 31), true],
+    ['a typed 0026 for 2026', typed0026, false],
+    ['a day in 1899', new Date(1899, 11, 31), false],
+    ['a day in 3000', new Date(3000, 0, 1), false],
+    ['the text 2026-03-14', '2026-03-14', true],
+    ['the text 0000-01-01', '0000-01-01', false],
+    ['the text 3000-01-01', '3000-01-01', false],
+    ['nothing', null, true],
+    ['an unreadable date', new Date('not a date'), true],
+  ])('%s is %s', (_case, value, ok) => {
+    const control = new FormControl<Date | string | null>(value, dateYearInRange);
+    expect(control.valid).toBe(ok);
+  });
+
+  it("says what the API says: 'Enter a date between 1900 and 2999.'", () => {
+    const control = new FormControl<Date | null>(new Date(3000, 0, 1), dateYearInRange);
+    expect(errorText(control, { required: 'Enter a date.', ...DATE_YEAR_WORDS })).toBe('Enter a date between 1900 and 2999.');
   });
 });
