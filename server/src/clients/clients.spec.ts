@@ -97,6 +97,27 @@ describe('clients, contacts and sites', () => {
     expect((await o.agent.get(`/api/clients/${made.body.id}`)).body.sites).toHaveLength(0);
   });
 
+  it('takes a site country only from the ISO 3166-1 list, as the firm’s, on create and on change', async () => {
+    const o = await signUpFirm(t.app);
+    const made = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: 'Country Check' });
+    const sites = `/api/clients/${made.body.id}/sites`;
+    for (const country of ['UN', 'XX', 'UK', 'EU', 'us', 'United States']) {
+      const res = await o.agent.post(sites).set('x-csrf-token', o.csrf()).send({ addressLine1: '1 Lime Row', country });
+      expect(res.status).toBe(400);
+      expect(res.body.errors).toEqual([{ field: 'country', message: 'Choose a country from the list (an ISO 3166-1 code, like US).' }]);
+    }
+    expect((await o.agent.get(`/api/clients/${made.body.id}`)).body.sites).toHaveLength(0);
+    const site = await o.agent.post(sites).set('x-csrf-token', o.csrf()).send({ addressLine1: '1 Lime Row', country: 'GB' });
+    expect(site.status).toBe(201);
+    expect(site.body.country).toBe('GB');
+    const change = await o.agent.patch(`/api/sites/${site.body.id}`).set('x-csrf-token', o.csrf()).send({ country: 'UN' });
+    expect(change.status).toBe(400);
+    expect(change.body.errors.map((e: { field: string }) => e.field)).toEqual(['country']);
+    const ok = await o.agent.patch(`/api/sites/${site.body.id}`).set('x-csrf-token', o.csrf()).send({ country: 'CA' });
+    expect(ok.status).toBe(200);
+    expect(ok.body.country).toBe('CA');
+  });
+
   it('keeps crew out of clients and inquiries (no contact or money figures for crew here)', async () => {
     const o = await signUpFirm(t.app);
     const email = uniqueEmail('crew');

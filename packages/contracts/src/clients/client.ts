@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { email } from '../auth/fields';
-import { COUNTRY_CODE_PATTERN, PHONE_MAX_LENGTH } from '../common/field-limits';
+import { PHONE_MAX_LENGTH } from '../common/field-limits';
+import { isCountryCode } from '../firms/countries';
 import { pageQuery, requiredText, text, uuid, yearBuilt } from '../common/fields';
 import { SEARCH_MAX_LENGTH } from '../common/lists';
 import { requestSchema } from '../common/schema-check';
@@ -26,7 +27,11 @@ const siteFields = {
   city: text(L.city),
   region: text(L.region),
   postalCode: text(L.postalCode),
-  country: z.string().trim().regex(COUNTRY_CODE_PATTERN, { error: 'Use a two-letter country code, like US.' }),
+  // The same ISO 3166-1 list as the firm's country (firms/countries.ts): "UN" or "XX" are refused.
+  country: z
+    .string({ error: 'Choose a country.' })
+    .trim()
+    .refine((code): boolean => isCountryCode(code), { error: 'Choose a country from the list (an ISO 3166-1 code, like US).' }),
   yearBuilt: yearBuilt.nullable(),
   accessNotes: text(L.accessNotes),
 };

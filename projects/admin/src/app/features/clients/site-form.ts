@@ -3,7 +3,9 @@ import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angula
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
 import { CLIENT_LIMITS as L, DEFAULT_COUNTRY, type SiteCreate, type SiteView } from '@layerbook/contracts/types';
+import { COUNTRY_CHOICES } from '../../shared/forms/country-choices';
 import { errorText } from '../../shared/forms/error-text';
 import { tooLong } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
@@ -13,13 +15,10 @@ import { YEAR_WORDS, toYear, yearText } from '../../shared/forms/year-input';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ClientApi } from './client-api';
 
-/** Two letters, any case, spaces around allowed: the form sends it trimmed in capitals. */
-const TYPED_COUNTRY = /^\s*[A-Za-z]{2}\s*$/;
-
 /** A place where work happens; adds one to a client, or edits the one it is given. */
 @Component({
   selector: 'lb-site-form',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   templateUrl: './site-form.html',
   styleUrl: './site-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -45,11 +44,10 @@ export class SiteForm implements OnInit {
     postalCode: tooLong(L.postalCode),
     accessNotes: tooLong(L.accessNotes),
     year: YEAR_WORDS,
-    country: {
-      required: 'Enter a two-letter country code, like US.',
-      pattern: 'Use a two-letter country code, like US.',
-    },
+    country: { required: 'Choose a country.' },
   };
+  /** The firm's list (ISO 3166-1), by name; the API takes only these codes. */
+  protected readonly countries = COUNTRY_CHOICES;
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     label: ['', Validators.maxLength(L.siteLabel)],
@@ -58,7 +56,7 @@ export class SiteForm implements OnInit {
     city: ['', Validators.maxLength(L.city)],
     region: ['', Validators.maxLength(L.region)],
     postalCode: ['', Validators.maxLength(L.postalCode)],
-    country: [DEFAULT_COUNTRY, [Validators.required, Validators.pattern(TYPED_COUNTRY)]],
+    country: [DEFAULT_COUNTRY, Validators.required],
     yearBuilt: ['', yearText],
     accessNotes: ['', Validators.maxLength(L.accessNotes)],
   });
@@ -73,7 +71,8 @@ export class SiteForm implements OnInit {
         city: site.city,
         region: site.region,
         postalCode: site.postalCode,
-        country: site.country,
+        // A code from before the list was enforced is not offered: the office chooses again.
+        country: COUNTRY_CHOICES.some((c) => c.code === site.country) ? site.country : '',
         yearBuilt: site.yearBuilt === null ? '' : String(site.yearBuilt),
         accessNotes: site.accessNotes,
       });
@@ -100,7 +99,7 @@ export class SiteForm implements OnInit {
       city: v.city.trim(),
       region: v.region.trim(),
       postalCode: v.postalCode.trim(),
-      country: v.country.trim().toUpperCase(),
+      country: v.country,
       yearBuilt: toYear(v.yearBuilt),
       accessNotes: v.accessNotes.trim(),
     };

@@ -11,7 +11,6 @@ import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import {
   COMMON_CURRENCIES,
-  COUNTRIES,
   FIRM_NAME_MAX_LENGTH,
   FIRM_NAME_MIN_LENGTH,
   FIRM_PROFILE_LIMITS as L,
@@ -24,6 +23,7 @@ import {
   type UnitSystem,
 } from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
+import { COUNTRY_CHOICES } from '../../shared/forms/country-choices';
 import { errorText } from '../../shared/forms/error-text';
 import { tooLong } from '../../shared/forms/field-words';
 import { fillWhenLoaded } from '../../shared/forms/fill-when-loaded';
@@ -37,9 +37,6 @@ import { FirmApi } from './firm-api';
 import { InquiryFormLink } from './inquiry-form-link';
 import { StageLikelihoodsForm } from './stage-likelihoods';
 import { timeZoneChoices } from './time-zones';
-
-/** ISO 3166-1 alpha-2 countries, offered by name in the reader's alphabetical order. */
-const COUNTRY_CHOICES = [...COUNTRIES].sort((a, b) => a.name.localeCompare(b.name));
 
 @Component({
   selector: 'lb-firm-settings',
