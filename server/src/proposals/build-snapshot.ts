@@ -1,5 +1,14 @@
 import type { ProposalSnapshot, ProposalTerms, SnapshotCaution, SnapshotOption, SnapshotRoom } from '@layerbook/contracts';
-import { type DepositCapRule, leadNotice, leadStatus, mergeCautions, minorUnitDigits, STANDING_LINE } from '@layerbook/domain';
+import {
+  type CautionId,
+  type DepositCapRule,
+  jurisdictionLine,
+  leadNotice,
+  leadStatus,
+  mergeCautions,
+  minorUnitDigits,
+  STANDING_LINE,
+} from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { optionPayments } from './payment-plan';
 import type { ProposalSources, StoredVariant } from './proposal-sources';
@@ -47,12 +56,15 @@ function scopeByRoom(src: ProposalSources, unit: 'ft' | 'm'): SnapshotRoom[] {
     .map((r) => ({ id: r.id, name: r.name, surfaces: [...r.surfaces.values()] }));
 }
 
-/** The engine's cautions across all options, once each, each line once, without the office's own reminders. */
-function safetyNotes(variants: readonly StoredVariant[]): SnapshotCaution[] {
+/**
+ * The engine's cautions across all options, once each, each line once, without the office's own
+ * reminders; each says whose rule it is (a result saved before the engine said so gets it here).
+ */
+function safetyNotes(variants: readonly StoredVariant[], firmCountry: string): SnapshotCaution[] {
   return mergeCautions(
     variants.map((v) => v.result.cautions),
     'client',
-  ).map((c) => ({ ...c, bullets: [...c.bullets] }));
+  ).map((c) => ({ ...c, bullets: [...c.bullets], jurisdiction: c.jurisdiction ?? jurisdictionLine(c.id as CautionId, firmCountry) }));
 }
 
 function option(v: StoredVariant, currency: string, digits: number, choice: ProposalChoice): SnapshotOption {
@@ -120,13 +132,14 @@ export function buildSnapshot(src: ProposalSources, choice: ProposalChoice): Pro
     exclusions: [...choice.exclusions],
     notes: choice.notes,
     terms: choice.terms,
-    safety: { standing: STANDING_LINE, cautions: safetyNotes(src.estimate.variants) },
+    safety: { standing: STANDING_LINE, cautions: safetyNotes(src.estimate.variants, src.firm.country) },
     // A pre-1978 home carries the notice whatever the options disturb; an unknown year does once paint is disturbed.
     leadNotice: leadNotice(
       leadStatus(
         src.site.yearBuilt,
         src.estimate.variants.some((v) => v.result.lead === 'assumed-target-housing'),
       ),
+      src.firm.country,
     ),
   };
 }

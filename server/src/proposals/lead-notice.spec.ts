@@ -1,9 +1,10 @@
 import type { EstimateView, ProposalVersionView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
-import { ASK_FOR_YEAR, leadNotice } from '@layerbook/domain';
+import { ASK_FOR_YEAR, leadNotice, OUTSIDE_US_LINE } from '@layerbook/domain';
 import { newAgent, startTestServer, TestServer } from '../testing/harness';
 import { makeAndSend, signInByLink } from './portal-fixtures';
 import { pdfText } from './pdf/pdf-text';
+import { renderProposalPdf } from './pdf/render-proposal';
 import { firmWithPricedEstimate } from './proposal-fixtures';
 
 let t: TestServer;
@@ -86,5 +87,55 @@ describe('the lead-safe notice on a proposal (40 CFR 745; target housing, 15 U.S
       await f.agent.post('/api/proposals').set('x-csrf-token', f.csrf()).send({ estimateId: f.estimateId, expiresOn: '2026-12-31' })
     ).body as ProposalVersionView;
     expect(again.snapshot.leadNotice).toBeNull();
+  });
+});
+
+describe('each caution says whose rule it is, in the snapshot, the portal and the PDF', () => {
+  it('a firm outside the US: "A US federal rule." with the line to check its own rules, on every caution and the lead notice', async () => {
+    const f = await firmWithPricedEstimate(t, 'Maple Lime Works');
+    await withTenant(t.ctx.pool, f.firmId, (tx) => tx.client.query(`update firms set country = 'CA' where id = $1`, [tx.tenantId]));
+    await siteFacts(f, 1950, 40);
+    const sent = await makeAndSend(t, f);
+    const cautions = sent.snapshot.safety.cautions;
+    const lead = cautions.find((c) => c.id === 'lead-safe-work');
+    expect(lead?.jurisdiction).toBe(`A US federal rule. ${OUTSIDE_US_LINE}`);
+    for (const c of cautions) expect(c.jurisdiction).toMatch(/^(A US federal rule\.|Guidance, not a regulation\.) Outside the US, check/);
+    expect(sent.snapshot.leadNotice?.jurisdiction).toBe(`A US federal rule. ${OUTSIDE_US_LINE}`);
+
+    const client = await newAgent(t.app, 'portal');
+    await signInByLink(client, sent.link);
+    const read = await client.agent.get(`/api/portal/proposals/${sent.id}`);
+    expect(read.body.snapshot.safety.cautions.map((c: { jurisdiction?: string }) => c.jurisdiction)).toEqual(
+      cautions.map((c) => c.jurisdiction),
+    );
+    const text = await pdfOf(f, sent.id);
+    // once under the lead notice and once under each caution
+    expect(text.split('check your national or provincial rules').length - 1).toBe(cautions.length + 1);
+    expect(text).toContain('A US federal rule.');
+  });
+
+  it('a US firm: the rule is said to be US federal, with no outside-US line', async () => {
+    const f = await firmWithPricedEstimate(t, 'Home Lime Works');
+    await siteFacts(f, 1950, 40);
+    const sent = await makeAndSend(t, f);
+    expect(sent.snapshot.safety.cautions.find((c) => c.id === 'lead-safe-work')?.jurisdiction).toBe('A US federal rule.');
+    expect(sent.snapshot.leadNotice?.jurisdiction).toBe('A US federal rule.');
+    const text = await pdfOf(f, sent.id);
+    expect(text).toContain('A US federal rule.');
+    expect(text).not.toContain('provincial');
+  });
+
+  it('a snapshot made before cautions said so still renders, without the line', async () => {
+    const f = await firmWithPricedEstimate(t, 'Old Snapshot Lime');
+    await siteFacts(f, 1950, 40);
+    const sent = await makeAndSend(t, f);
+    const old = {
+      ...sent.snapshot,
+      safety: { ...sent.snapshot.safety, cautions: sent.snapshot.safety.cautions.map(({ jurisdiction: _j, ...c }) => c) },
+      leadNotice: sent.snapshot.leadNotice ? { ...sent.snapshot.leadNotice, jurisdiction: undefined } : null,
+    };
+    const text = pdfText(await renderProposalPdf(old, { version: 1, snapshotHash: 'a'.repeat(64) })).replace(/\s+/g, ' ');
+    expect(text).toContain('Lead-safe work');
+    expect(text).not.toContain('A US federal rule.');
   });
 });

@@ -49,15 +49,29 @@ export const unitOfSystem = (units: 'imperial' | 'metric'): TakeoffLengthUnit =>
 
 /**
  * The lead-safe reminder for the takeoff: the domain's safety rules (40 CFR 745.83 thresholds,
- * target housing before 1978) over the disturbed painted areas measured so far, in `unit`.
+ * target housing before 1978) over the disturbed painted areas measured so far, in `unit`; it says
+ * whose rule it is for the firm's country.
  */
-export function leadCaution(rooms: readonly RoomView[], yearBuilt: number | null, unit: TakeoffLengthUnit): Caution | null {
+export function leadCaution(
+  rooms: readonly RoomView[],
+  yearBuilt: number | null,
+  unit: TakeoffLengthUnit,
+  firmCountry?: string,
+): Caution | null {
   if (yearBuilt === null) return null;
   const disturbedPaint = rooms.flatMap((room) =>
     room.surfaces
       .filter((s) => s.disturbedPaintedArea !== null && s.disturbedPaintedArea > 0)
       .map((s) => ({ roomId: room.id, isExterior: room.isExterior, area: convertArea(s.disturbedPaintedArea ?? 0, s.lengthUnit, unit) })),
   );
-  const cautions = safetyCautions({ lengthUnit: unit, yearBuilt, disturbedPaint, workingLevel: 0, products: [], sandsPlaster: false });
+  const cautions = safetyCautions({
+    lengthUnit: unit,
+    yearBuilt,
+    disturbedPaint,
+    workingLevel: 0,
+    products: [],
+    sandsPlaster: false,
+    ...(firmCountry !== undefined ? { firmCountry } : {}),
+  });
   return cautions.find((c) => c.id === 'lead-safe-work') ?? null;
 }

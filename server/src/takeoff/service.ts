@@ -24,9 +24,13 @@ type RoomRow = typeof rooms.$inferSelect;
 const auditedBy = (actor: Actor) => ({ actorUserId: actor.userId, actorKind: actor.kind });
 
 async function firmUnit(tx: TenantTx): Promise<TakeoffLengthUnit> {
-  const firm = (await tx.db.select({ units: firms.units }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
+  return (await firmFacts(tx)).unit;
+}
+
+async function firmFacts(tx: TenantTx): Promise<{ unit: TakeoffLengthUnit; country: string }> {
+  const firm = (await tx.db.select({ units: firms.units, country: firms.country }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
   if (!firm) throw notFound('firm');
-  return unitOfSystem(firm.units);
+  return { unit: unitOfSystem(firm.units), country: firm.country };
 }
 
 // Every lookup filters on tenant_id as well as relying on RLS: the index leads with it, and a
@@ -67,7 +71,7 @@ async function findSurface(tx: TenantTx, surfaceId: string): Promise<SurfaceRow>
 
 export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffView> {
   const { site, clientName } = await findSite(tx, siteId);
-  const unit = await firmUnit(tx);
+  const { unit, country } = await firmFacts(tx);
   const roomRows = await tx.db
     .select()
     .from(rooms)
@@ -105,7 +109,7 @@ export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffV
       roomViews.flatMap((r) => r.surfaces),
       unit,
     ),
-    leadCaution: leadCaution(roomViews, site.yearBuilt, unit),
+    leadCaution: leadCaution(roomViews, site.yearBuilt, unit, country),
   };
 }
 

@@ -150,6 +150,20 @@ describe('site takeoff', () => {
     expect(view.rooms[0].totals.disturbedPaintedArea).toBe(disturbed.reduce((sum, x) => sum + x, 0));
   });
 
+  it.each([
+    ['US', 'A US federal rule.'],
+    ['CA', 'A US federal rule. Outside the US, check your national or provincial rules.'],
+  ])('the lead-safe reminder of a firm in %s says whose rule it is: "%s"', async (country, line) => {
+    const o = await signUpFirm(t.app);
+    await withTenant(t.ctx.pool, o.firmId, (tx) => tx.client.query(`update firms set country = $2 where id = $1`, [tx.tenantId, country]));
+    const siteId = await makeSite(o, 1924);
+    const roomId = await makeRoom(o, siteId, 'Parlour');
+    await addSurface(o, roomId, { name: 'Wall', shape: { kind: 'walls', perimeter: 12, height: 10 }, disturbedPaintedArea: 40 });
+    const view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
+    expect(view.leadCaution.id).toBe('lead-safe-work');
+    expect(view.leadCaution.jurisdiction).toBe(line);
+  });
+
   it('refuses impossible geometry naming the field, and saves nothing', async () => {
     const o = await signUpFirm(t.app);
     const siteId = await makeSite(o);

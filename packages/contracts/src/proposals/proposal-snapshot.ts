@@ -35,6 +35,8 @@ export interface SnapshotLeadNotice {
   readonly title: string;
   readonly bullets: readonly string[];
   readonly rule: string;
+  /** "A US federal rule.", and for a firm outside the US to check its own rules; absent from older snapshots */
+  readonly jurisdiction?: string;
 }
 
 export interface SnapshotRoom {
@@ -91,6 +93,8 @@ export interface SnapshotCaution {
   readonly title: string;
   readonly bullets: readonly string[];
   readonly rule: string;
+  /** "A US federal rule." or "Guidance, not a regulation.", plus the outside-US line; absent from older snapshots */
+  readonly jurisdiction?: string;
   readonly standing: string;
 }
 

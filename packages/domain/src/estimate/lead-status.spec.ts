@@ -30,6 +30,15 @@ describe('lead status of a home (40 CFR 745; target housing is built before 1978
     expect(notice?.rule).toContain('40 CFR 745');
   });
 
+  it.each([
+    [undefined, 'A US federal rule.'],
+    ['US', 'A US federal rule.'],
+    // 40 CFR 745 is a US federal rule (EPA); elsewhere the firm checks its own rules
+    ['CA', 'A US federal rule. Outside the US, check your national or provincial rules.'],
+  ])('says whose rule it is for a firm in %s: "%s"', (country, line) => {
+    expect(leadNotice('target-housing', country)?.jurisdiction).toBe(line);
+  });
+
   it('asks for the year in words the office can act on', () => {
     expect(ASK_FOR_YEAR).toMatch(/enter the year on the site/);
   });

@@ -1,3 +1,5 @@
+import { jurisdictionLine } from '../safety/safety-cautions';
+
 /** Target housing: built before 1978 (15 U.S.C. 2681(17)). */
 export const TARGET_HOUSING_BEFORE = 1978;
 
@@ -32,6 +34,8 @@ export interface LeadNotice {
   readonly title: string;
   readonly bullets: readonly string[];
   readonly rule: string;
+  /** whose rule it is (US federal) and, for a firm outside the US, to check its own rules */
+  readonly jurisdiction: string;
 }
 
 /**
@@ -39,7 +43,7 @@ export interface LeadNotice {
  * paint is disturbed), in words for the client. Figures from 40 CFR 745.83 (minor repair: 6 ft² per
  * room, 20 ft² outside) and 745.84 (the "Renovate Right" pamphlet before work starts). Null otherwise.
  */
-export function leadNotice(status: LeadStatus): LeadNotice | null {
+export function leadNotice(status: LeadStatus, firmCountry?: string): LeadNotice | null {
   if (!isTreatedAsTargetHousing(status)) return null;
   return {
     title: 'Lead-safe work in a home built before 1978',
@@ -52,5 +56,6 @@ export function leadNotice(status: LeadStatus): LeadNotice | null {
       'Some states and cities have stricter rules.',
     ],
     rule: '40 CFR 745 subpart E (EPA Renovation, Repair and Painting); target housing, 15 U.S.C. 2681(17)',
+    jurisdiction: jurisdictionLine('lead-safe-work', firmCountry),
   };
 }

@@ -26,6 +26,12 @@ describe('mergeCautions: one document, each caution and each line once', () => {
     expect(merged.bullets.filter((b) => b.startsWith('Lime products'))).toHaveLength(1);
   });
 
+  it('keeps each caution’s jurisdiction line, and leaves it out where an older result had none', () => {
+    const said = { ...lime('Lime putty'), jurisdiction: 'Guidance, not a regulation.' };
+    expect(mergeCautions([[said], [lime('Marmorino')]])[0].jurisdiction).toBe('Guidance, not a regulation.');
+    expect(mergeCautions([[lime('Lime putty')]])[0]).not.toHaveProperty('jurisdiction');
+  });
+
   it('keeps cautions in first-seen order and sentences that are not lists as they are', () => {
     const height: OptionCaution = {
       id: 'height',

@@ -6,6 +6,8 @@ export interface OptionCaution {
   readonly title: string;
   readonly bullets: readonly string[];
   readonly rule: string;
+  /** whose rule it is; absent from results computed before the engine said so */
+  readonly jurisdiction?: string;
   readonly standing: string;
 }
 

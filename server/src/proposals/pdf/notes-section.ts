@@ -23,6 +23,7 @@ export function safetySection(doc: Doc, s: ProposalSnapshot): void {
     sectionHeading(doc, s.leadNotice.title);
     bullets(doc, s.leadNotice.bullets, 9.5);
     paragraph(doc, `Rule: ${s.leadNotice.rule}`, 'italic', COLOURS.muted, 9);
+    if (s.leadNotice.jurisdiction) paragraph(doc, s.leadNotice.jurisdiction, 'italic', COLOURS.muted, 9);
   }
   sectionHeading(doc, 'Safety and compliance notes');
   if (!s.safety.cautions.length) paragraph(doc, 'No particular hazard was flagged for this work.', 'text', COLOURS.muted);
@@ -30,6 +31,8 @@ export function safetySection(doc: Doc, s: ProposalSnapshot): void {
     subHeading(doc, c.title);
     bullets(doc, c.bullets, 9.5);
     paragraph(doc, `Rule: ${c.rule}`, 'italic', COLOURS.muted, 9);
+    // Snapshots made before cautions said whose rule it is have no such line.
+    if (c.jurisdiction) paragraph(doc, c.jurisdiction, 'italic', COLOURS.muted, 9);
   }
   doc.moveDown(0.5);
   paragraph(doc, s.safety.standing, 'strong', COLOURS.ochre, 9.5);

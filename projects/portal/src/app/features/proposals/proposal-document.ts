@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import { MatIconModule } from '@angular/material/icon';
 import type { ProposalSnapshot, SnapshotOption } from '@layerbook/contracts/types';
 import { formatDay, formatMoney } from '../../shared/format/money';
+import { cautionFootnotes } from './caution-words';
 import { paymentTermsSentence } from './terms-words';
 
 /** The proposal as sent, drawn only from its frozen snapshot: what the PDF says, on the page. */
@@ -18,6 +19,7 @@ export class ProposalDocument {
   readonly chosenOptionId = input<string | null>(null);
 
   protected readonly termsSentence = paymentTermsSentence;
+  protected readonly footnotes = cautionFootnotes;
   protected readonly optionLabels = computed(() => new Map(this.snapshot().options.map((o) => [o.id, o.label])));
 
   protected money(amount: string): string {
