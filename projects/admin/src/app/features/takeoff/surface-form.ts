@@ -76,9 +76,16 @@ export class SurfaceForm implements OnInit {
   protected readonly workingText = workingText;
   protected readonly shortNumber = plainNumber;
 
+  /**
+   * The unit the length rules read. Angular runs validators as each control is made, before inputs
+   * are set (reading the required `unit` then throws), so the rules start in feet and switch to the
+   * firm's unit in ngOnInit, before any value is loaded or typed.
+   */
+  private rulesUnit: TakeoffLengthUnit = 'ft';
+
   protected readonly form = new FormGroup({
     name: new FormControl('', { nonNullable: true, validators: [requiredText, Validators.maxLength(L.surfaceNameMax)] }),
-    shape: shapeGroup(() => this.unit()),
+    shape: shapeGroup(() => this.rulesUnit),
     disturbedPaintedArea: new FormControl('', { nonNullable: true, validators: disturbedRule }),
     notes: new FormControl('', { nonNullable: true, validators: Validators.maxLength(L.notesMax) }),
   });
@@ -87,6 +94,7 @@ export class SurfaceForm implements OnInit {
   private marked: AbstractControl[] = [];
 
   ngOnInit(): void {
+    this.rulesUnit = this.unit();
     const surface = this.surface();
     if (surface) {
       loadShape(this.shape, surface, this.unit());
