@@ -2,11 +2,11 @@ import { expect, type Page, test } from '@playwright/test';
 import { pathFrom, waitForMail } from './support/inbox';
 import { DEMO, navLink, signIn } from './support/people';
 import { PHONE, onPhone, openLive, openLiveOnPhone } from './support/phone';
-import { phoneProblems } from './support/phone-checks';
+import { pageProblems } from './support/phone-checks';
 
-// Phone-sized journeys (390 × 844). axe-core is not installed, so each page goes through our own
-// check instead (support/phone-checks.ts): images with alt text, named controls and buttons,
-// nothing running off the right edge outside a region that scrolls on its own.
+// Phone-sized journeys (390 × 844). Each page goes through axe-core's WCAG 2.1 A and AA rules and
+// our own layout checks (support/phone-checks.ts): nothing running off the right edge outside a
+// region that scrolls on its own, no label on the field above, no list marker beside a number.
 
 const SHOTS = 'e2e/.artifacts/phone';
 const CREW = 'crew@fernhollow.example';
@@ -14,7 +14,7 @@ const CREW = 'crew@fernhollow.example';
 /** Screenshot and check one page; problems are collected so one run reports every page. */
 async function look(page: Page, name: string, found: Record<string, string[]>): Promise<void> {
   await page.screenshot({ path: `${SHOTS}/${name}.png`, fullPage: true });
-  const problems = await phoneProblems(page);
+  const problems = await pageProblems(page);
   if (problems.length > 0) found[name] = problems;
 }
 

@@ -1,10 +1,26 @@
+import { AxeBuilder } from '@axe-core/playwright';
 import { expect, type Page } from '@playwright/test';
 
+/** The WCAG 2.1 level A and AA rules of axe-core. */
+export const WCAG_21_AA = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'];
+
 /**
- * A small accessibility and layout check of our own for phone-sized pages (axe-core is not
- * installed): every image has alt text, every form control and button has a name, and nothing
- * runs off the right edge unless it sits in a region that scrolls on its own (a wide table).
- * It answers a list of what is wrong, empty when the page passes.
+ * axe-core's WCAG 2.1 A and AA check of the page as it stands, one line per violation: the rule,
+ * its impact, what it asks and the selectors of the elements that break it. Empty when it passes.
+ */
+export async function axeProblems(page: Page): Promise<string[]> {
+  const { violations } = await new AxeBuilder({ page }).withTags(WCAG_21_AA).analyze();
+  return violations.map((v) => {
+    const targets = v.nodes.map((node) => node.target.map((part) => (Array.isArray(part) ? part.join(' >>> ') : part)).join(' '));
+    return `${v.id} (${v.impact ?? 'unknown'}): ${v.help} — ${targets.join(' | ')}`;
+  });
+}
+
+/**
+ * The layout checks axe does not make, for phone-sized pages: nothing runs off the right edge
+ * unless it sits in a region that scrolls on its own (a wide table), no floating label sits on the
+ * field above it, and no list item shows a marker beside its own number. It answers a list of what
+ * is wrong, empty when the page passes.
  */
 export async function phoneProblems(page: Page): Promise<string[]> {
   return page.evaluate(() => {
@@ -21,46 +37,6 @@ export async function phoneProblems(page: Page): Promise<string[]> {
       const style = getComputedStyle(el);
       return box.width > 0 && box.height > 0 && style.visibility !== 'hidden' && style.display !== 'none';
     };
-    /** The text a screen reader would read, leaving out what is hidden from it (icons). */
-    const spokenText = (el: Element): string => {
-      let out = '';
-      for (const node of Array.from(el.childNodes)) {
-        if (node.nodeType === Node.TEXT_NODE) out += node.textContent ?? '';
-        else if (node instanceof Element && node.getAttribute('aria-hidden') !== 'true') {
-          out += node.getAttribute('aria-label') ?? node.getAttribute('alt') ?? spokenText(node);
-        }
-      }
-      return out.trim();
-    };
-    const named = (el: Element) => {
-      if (el.getAttribute('aria-label')?.trim()) return true;
-      const by = el.getAttribute('aria-labelledby');
-      if (by && by.split(/\s+/).some((id) => (document.getElementById(id)?.textContent ?? '').trim() !== '')) return true;
-      if ((el as HTMLInputElement).labels?.length) {
-        return Array.from((el as HTMLInputElement).labels ?? []).some((l) => (l.textContent ?? '').trim() !== '');
-      }
-      return Boolean(el.getAttribute('title')?.trim());
-    };
-
-    // WCAG 2.2 SC 1.1.1 (non-text content): images carry a text alternative (empty when decorative).
-    for (const img of Array.from(document.querySelectorAll('img'))) {
-      if (!img.hasAttribute('alt')) problems.push(`image without alt: ${img.getAttribute('src') ?? ''}`);
-    }
-    for (const svg of Array.from(document.querySelectorAll('svg[role="img"]'))) {
-      if (!named(svg)) problems.push(`drawing without a name: ${describe(svg)}`);
-    }
-    // WCAG 2.2 SC 4.1.2 (name, role, value): form controls and buttons have a name.
-    const controls = document.querySelectorAll(
-      'input:not([type="hidden"]), select, textarea, [role="combobox"], [role="checkbox"], [role="radio"], [role="switch"], [role="slider"]',
-    );
-    for (const control of Array.from(controls)) {
-      if (control.closest('[aria-hidden="true"], [inert]')) continue;
-      if (!named(control) && !spokenText(control)) problems.push(`form control without a name: ${describe(control)}`);
-    }
-    for (const button of Array.from(document.querySelectorAll('button, [role="button"], a[href]'))) {
-      if (!isShown(button) || button.closest('[aria-hidden="true"], [inert]')) continue;
-      if (!named(button) && !spokenText(button)) problems.push(`button or link without a name: ${describe(button)}`);
-    }
     // WCAG 2.2 SC 1.4.10 (reflow): at 320 CSS px nothing needs scrolling sideways; we check the phone's width.
     if (document.documentElement.scrollWidth > vw)
       problems.push(`the page scrolls sideways: ${document.documentElement.scrollWidth} > ${vw}`);
@@ -79,11 +55,38 @@ export async function phoneProblems(page: Page): Promise<string[]> {
       if (up?.matches('main *, .lb-toolbar *') && up.getBoundingClientRect().right > vw + 1 && !scrollsOnItsOwn(up)) continue;
       problems.push(`runs off the right edge (${Math.round(box.right)} > ${vw}): ${describe(el)}`);
     }
+    // Fields stacked on a phone keep apart: a floating label (drawn above its outline) must not touch
+    // the outline of the field before it.
+    const outlines = Array.from(document.querySelectorAll('main .mat-mdc-text-field-wrapper')).filter(isShown);
+    for (const label of Array.from(document.querySelectorAll('main .mdc-floating-label--float-above')).filter(isShown)) {
+      const own = label.closest('.mat-mdc-text-field-wrapper');
+      const l = label.getBoundingClientRect();
+      for (const other of outlines) {
+        if (other === own) continue;
+        const o = other.getBoundingClientRect();
+        if (l.left < o.right && l.right > o.left && l.top < o.bottom + 2 && l.bottom > o.top) {
+          problems.push(`a field's label touches the field above: ${describe(label)} on ${describe(other)}`);
+        }
+      }
+    }
+    // An item that carries its number in its words ("1. Base coat", "Layer 1: Primer") draws no marker too.
+    for (const li of Array.from(document.querySelectorAll('main li')).filter(isShown)) {
+      const style = getComputedStyle(li);
+      const text = (li.textContent ?? '').trim();
+      if (style.display === 'list-item' && style.listStyleType !== 'none' && /^(\d+\.|(layer|step|coat) \d+)/i.test(text)) {
+        problems.push(`a list item shows a marker and its own number: ${describe(li)}`);
+      }
+    }
     return problems;
   });
 }
 
+/** Both checks together: axe's WCAG 2.1 A/AA rules, then nothing off the right edge. */
+export async function pageProblems(page: Page): Promise<string[]> {
+  return [...(await axeProblems(page)), ...(await phoneProblems(page))];
+}
+
 /** Fails with the list of problems, so a report names each one. */
 export async function expectFitsPhone(page: Page, what: string): Promise<void> {
-  expect(await phoneProblems(page), what).toEqual([]);
+  expect(await pageProblems(page), what).toEqual([]);
 }

@@ -26,7 +26,7 @@ import { jobStatus } from './job-words';
       @if (isLoading()) {
         <mat-progress-bar mode="indeterminate" aria-label="Loading jobs" />
       }
-      <div class="table-wrap">
+      <div class="table-wrap" tabindex="0" role="region" aria-label="Accepted jobs">
         <table aria-label="Accepted jobs">
           <thead>
             <tr>

@@ -33,7 +33,7 @@ import { LIBRARY_URLS, LibraryApi, archivedParam } from './library-api';
     @if (isLoading()) {
       <mat-progress-bar mode="indeterminate" aria-label="Loading finish systems" />
     }
-    <div class="table-wrap">
+    <div class="table-wrap" tabindex="0" role="region" aria-label="Finish systems">
       <table aria-label="Finish systems">
         <thead>
           <tr>

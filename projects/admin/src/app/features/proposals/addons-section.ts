@@ -9,7 +9,7 @@ import type { EstimateResultJson } from '@layerbook/domain';
   template: `
     <h2 id="addons-heading">Add-ons</h2>
     @if (result().options.length > 0) {
-      <div class="table-wrap">
+      <div class="table-wrap" tabindex="0" role="region" aria-labelledby="addons-heading">
         <table aria-labelledby="addons-heading">
           <thead>
             <tr>

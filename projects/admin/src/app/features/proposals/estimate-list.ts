@@ -37,7 +37,7 @@ const PAGE_SIZE = 50;
       @if (isLoading()) {
         <mat-progress-bar mode="indeterminate" aria-label="Loading estimates" />
       }
-      <div class="table-wrap">
+      <div class="table-wrap" tabindex="0" role="region" aria-label="Estimates">
         <table aria-label="Estimates">
           <thead>
             <tr>

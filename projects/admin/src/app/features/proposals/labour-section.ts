@@ -10,7 +10,7 @@ import { multiplierChain } from './estimate-words';
     <h2 id="labour-heading">Labour</h2>
     @for (s of surfaces(); track s.surfaceId) {
       <h3 [id]="'labour-' + s.surfaceId">{{ s.title }}</h3>
-      <div class="table-wrap">
+      <div class="table-wrap" tabindex="0" role="region" [attr.aria-labelledby]="'labour-' + s.surfaceId">
         <table [attr.aria-labelledby]="'labour-' + s.surfaceId">
           <thead>
             <tr>

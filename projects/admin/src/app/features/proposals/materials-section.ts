@@ -9,7 +9,7 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
   imports: [MoneyPipe],
   template: `
     <h2 id="materials-heading">Materials to buy</h2>
-    <div class="table-wrap">
+    <div class="table-wrap" tabindex="0" role="region" aria-labelledby="materials-heading">
       <table aria-labelledby="materials-heading">
         <thead>
           <tr>
@@ -48,7 +48,7 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
     <p class="hint">Totals are for the whole job, so tinted products can be bought at once and boxed.</p>
 
     <h3 id="mix-heading">Mix per layer</h3>
-    <div class="table-wrap">
+    <div class="table-wrap" tabindex="0" role="region" aria-labelledby="mix-heading">
       <table aria-labelledby="mix-heading">
         <thead>
           <tr>

@@ -11,7 +11,7 @@ import { percentText } from './estimate-words';
   template: `
     @let p = result().price;
     <h2 id="price-heading">Price</h2>
-    <div class="table-wrap">
+    <div class="table-wrap" tabindex="0" role="region" aria-labelledby="price-heading">
       <table aria-labelledby="price-heading">
         <tbody>
           <tr>
@@ -105,7 +105,7 @@ import { percentText } from './estimate-words';
     <h3 id="per-area-heading">Per-area check</h3>
     @if (result().perAreaCheck; as check) {
       @if (check.lines.length > 0) {
-        <div class="table-wrap">
+        <div class="table-wrap" tabindex="0" role="region" aria-labelledby="per-area-heading">
           <table aria-labelledby="per-area-heading">
             <thead>
               <tr>

@@ -34,7 +34,7 @@ import { STATUS_WORDS } from './status-words';
         <mat-progress-bar mode="indeterminate" aria-label="Loading sample boards" />
       }
 
-      <div class="table-wrap">
+      <div class="table-wrap" tabindex="0" role="region" aria-label="Sample boards">
         <table aria-label="Sample boards">
           <thead>
             <tr>
