@@ -3,6 +3,7 @@ import type { TenantTx } from '@layerbook/db';
 import { localDate } from '../firms/local-date';
 import type { ClientPrincipal } from '../http/principal';
 import { notFound } from '../http/problem';
+import type { VersionRow } from './proposal-versions';
 
 /**
  * What a signed-in client may read: versions that were sent (never drafts) of estimates for the
@@ -21,19 +22,7 @@ export async function firmToday(tx: TenantTx, now: Date): Promise<string> {
   return localDate(rows[0].time_zone, now);
 }
 
-export interface ClientVersionRow {
-  id: string;
-  estimate_id: string;
-  version: number;
-  status: ProposalVersionStatus;
-  snapshot: ProposalSnapshot;
-  snapshot_hash: string;
-  expires_on: string;
-  sent_at: Date | null;
-  decided_at: Date | null;
-  accepted_variant_id: string | null;
-  signed_name: string | null;
-  client_comment: string;
+export interface ClientVersionRow extends Omit<VersionRow, 'created_at'> {
   /** the highest version number sent for the same estimate */
   newest_sent: number;
   client_id: string;

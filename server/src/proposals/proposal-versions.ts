@@ -30,8 +30,8 @@ export function depositCapRule(_sources: ProposalSources): DepositCapRule {
 const COLUMNS = `id, estimate_id, version, status, snapshot, snapshot_hash, expires_on::text as expires_on, sent_at, decided_at,
   accepted_variant_id, signed_name, client_comment, created_at`;
 
-/** The columns COLUMNS selects, as PostgreSQL hands them over. */
-interface Row {
+/** The columns COLUMNS selects, as PostgreSQL hands them over (the client's reads add to it). */
+export interface VersionRow {
   id: string;
   estimate_id: string;
   version: number;
@@ -47,7 +47,7 @@ interface Row {
   created_at: Date;
 }
 
-function summary(r: Row): ProposalVersionSummary {
+function summary(r: VersionRow): ProposalVersionSummary {
   return {
     id: r.id,
     estimateId: r.estimate_id,
@@ -62,7 +62,7 @@ function summary(r: Row): ProposalVersionSummary {
   };
 }
 
-const view = (r: Row): ProposalVersionView => ({
+const view = (r: VersionRow): ProposalVersionView => ({
   ...summary(r),
   snapshot: r.snapshot,
   acceptedVariantId: r.accepted_variant_id,
@@ -71,7 +71,7 @@ const view = (r: Row): ProposalVersionView => ({
 });
 
 export async function getVersion(tx: TenantTx, id: string, lock = false): Promise<ProposalVersionView> {
-  const { rows } = await tx.client.query<Row>(
+  const { rows } = await tx.client.query<VersionRow>(
     `select ${COLUMNS} from proposal_versions where tenant_id = $1 and id = $2 ${lock ? 'for update' : ''}`,
     [tx.tenantId, id],
   );
@@ -80,7 +80,7 @@ export async function getVersion(tx: TenantTx, id: string, lock = false): Promis
 }
 
 export async function listVersions(tx: TenantTx, estimateId?: string): Promise<ItemList<ProposalVersionSummary>> {
-  const { rows } = await tx.client.query<Row>(
+  const { rows } = await tx.client.query<VersionRow>(
     `select ${COLUMNS} from proposal_versions where tenant_id = $1 ${estimateId ? 'and estimate_id = $2 order by version desc' : 'order by created_at desc'} limit 200`,
     estimateId ? [tx.tenantId, estimateId] : [tx.tenantId],
   );
