@@ -31,8 +31,8 @@ export async function createJobFromAcceptance(tx: TenantTx, work: AcceptedWork):
     throw new Error(`payment schedule of option ${option.id} sums to ${totals.amount.toFixed(2)}, not ${option.total}`);
   }
   const { rows } = await tx.client.query<{ id: string }>(
-    `insert into jobs (tenant_id, estimate_id, proposal_version_id, client_id, site_id, inquiry_id, title, accepted_variant_id, option_label, currency, contract_sum, start_date, finish_date)
-     values ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13) returning id`,
+    `insert into jobs (tenant_id, estimate_id, proposal_version_id, client_id, site_id, inquiry_id, title, accepted_variant_id, option_label, currency, contract_sum, original_contract_sum, contract_tax, start_date, finish_date)
+     values ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $11, $12, $13, $14) returning id`,
     [
       tx.tenantId,
       work.estimateId,
@@ -45,6 +45,7 @@ export async function createJobFromAcceptance(tx: TenantTx, work: AcceptedWork):
       option.label,
       work.currency,
       option.total,
+      option.tax,
       option.schedule.startDate,
       option.schedule.finishDate,
     ],

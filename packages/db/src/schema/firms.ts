@@ -16,6 +16,10 @@ export const firms = pgTable(
     postalCode: text('postal_code').notNull().default(''),
     country: text('country').notNull().default('US'),
     phone: text('phone').notNull().default(''),
+    /** the firm's tax registration (VAT, GST, EIN…) printed on invoices; '' when none */
+    taxId: text('tax_id').notNull().default(''),
+    /** the logo printed on proposals, invoices and credit notes (a `files` row) */
+    logoFileId: uuid('logo_file_id'),
     timeZone: text('time_zone').notNull().default('America/New_York'),
     currency: text('currency').notNull().default('USD'),
     units: text('units', { enum: ['imperial', 'metric'] })

@@ -8,6 +8,7 @@ export * from './library';
 export * from './takeoff';
 export * from './proposals';
 export * from './jobs';
+export * from './billing';
 export * from './samples';
 export * from './audit';
 export * from './mail';
