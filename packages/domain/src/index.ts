@@ -109,6 +109,8 @@ export type { ChangeOrder } from './billing/change-orders';
 export { contractSumToDate, respreadSchedule } from './billing/change-orders';
 export type { PayApplication, PayApplicationInput, PayApplicationSummary, ValueLine, ValueLineInput } from './billing/pay-application';
 export { carryForward, computePayApplication, retainageRateFor } from './billing/pay-application';
+export type { IncludedTaxInput } from './billing/invoice-tax';
+export { includedTax } from './billing/invoice-tax';
 
 // receivables
 export type { AgedReceivable, AgingBucket, AgingReport, ReceivableInput } from './receivables/aging';
