@@ -111,6 +111,9 @@ export type { PayApplication, PayApplicationInput, PayApplicationSummary, ValueL
 export { carryForward, computePayApplication, retainageRateFor } from './billing/pay-application';
 export type { IncludedTaxInput } from './billing/invoice-tax';
 export { includedTax } from './billing/invoice-tax';
+export type { PaymentTerms } from './billing/due-date';
+export { NET_DAYS_MAX, dueDate, termsText } from './billing/due-date';
+export { documentNumber } from './billing/document-number';
 
 // receivables
 export type { AgedReceivable, AgingBucket, AgingReport, ReceivableInput } from './receivables/aging';
