@@ -25,3 +25,8 @@ export * from './takeoff/takeoff-types';
 export * from './takeoff/shape-catalog';
 export * from './engine/context';
 export * from './proposals/estimate-types';
+export * from './billing/billing-settings-types';
+export * from './billing/job-billing-types';
+export * from './billing/invoice-types';
+export * from './billing/change-order-types';
+export * from './billing/portal-billing-types';

@@ -1,0 +1,107 @@
+/**
+ * How a firm bills, without zod: the deposit limit it chose for its jurisdiction (with the rule's
+ * name, printed on screen and on invoices), payment terms, retainage for progress billing, how a
+ * deposit is credited on progress invoices, the reminder cadence and the number prefixes.
+ * GET /api/firm/billing (owner, office), PUT (owner).
+ */
+
+/** A deposit limit as data. Percents are whole percents (10 = 10 %); amounts decimal strings. */
+export type DepositCapSetting =
+  | { readonly kind: 'none' }
+  | { readonly kind: 'amount'; readonly amount: string }
+  | { readonly kind: 'share'; readonly percent: number }
+  | { readonly kind: 'lesserOf'; readonly amount: string; readonly percent: number };
+
+export const DEPOSIT_CAP_KINDS = ['none', 'amount', 'share', 'lesserOf'] as const;
+export type DepositCapKind = (typeof DEPOSIT_CAP_KINDS)[number];
+export const DEPOSIT_CAP_KIND_LABELS: Readonly<Record<DepositCapKind, string>> = {
+  none: 'No limit',
+  amount: 'At most a fixed amount',
+  share: 'At most a share of the contract',
+  lesserOf: 'The lesser of an amount and a share of the contract',
+};
+
+/** Ready-made rules the settings form offers; the firm can still type its own. */
+export const DEPOSIT_CAP_PRESETS: ReadonlyArray<{ readonly name: string; readonly rule: DepositCapSetting }> = [
+  { name: 'No deposit limit', rule: { kind: 'none' } },
+  {
+    // California Business and Professions Code §7159 (deposit on a home improvement contract): the lesser of $1,000 or 10 % of the contract price.
+    name: 'California home improvement contracts (Bus. & Prof. Code §7159): the lesser of $1,000 or 10 %',
+    rule: { kind: 'lesserOf', amount: '1000.00', percent: 10 },
+  },
+];
+
+export type PaymentTermsSetting = { readonly kind: 'onReceipt' } | { readonly kind: 'net'; readonly days: number };
+
+/** Progress billing: how the deposit (an advance) comes off later progress invoices. */
+export const DEPOSIT_CREDIT_RULES = ['prorata', 'next'] as const;
+export type DepositCreditRuleSetting = (typeof DEPOSIT_CREDIT_RULES)[number];
+export const DEPOSIT_CREDIT_RULE_LABELS: Readonly<Record<DepositCreditRuleSetting, string>> = {
+  prorata: 'A share of the deposit off each progress invoice, in step with the work billed',
+  next: 'The whole deposit off the next progress invoices until it is used up',
+};
+
+export interface RetainageSetting {
+  /** held on work done, whole percent (0 = none) */
+  readonly workPercent: number;
+  /** held on materials stored on site */
+  readonly storedPercent: number;
+  /** stop holding more once the job is this far complete (null: hold to the end) */
+  readonly stopAtPercentComplete: number | null;
+}
+
+export interface ReminderCadenceSetting {
+  readonly isOn: boolean;
+  /** a friendly note this many days before the due date (null: none) */
+  readonly daysBefore: number | null;
+  readonly onDueDate: boolean;
+  /** then every N days after the due date (null: none) */
+  readonly everyDaysAfter: number | null;
+  /** at most this many reminders after the due date */
+  readonly maxAfter: number;
+}
+
+export interface BillingSettings {
+  readonly depositCap: DepositCapSetting;
+  /** the rule's name as the firm wants it printed ("No deposit limit" for none) */
+  readonly depositCapName: string;
+  readonly terms: PaymentTermsSetting;
+  readonly retainage: RetainageSetting;
+  readonly depositCredit: DepositCreditRuleSetting;
+  readonly reminders: ReminderCadenceSetting;
+  /** "INV-" → INV-0001 */
+  readonly invoicePrefix: string;
+  /** "CN-" → CN-0001 */
+  readonly creditNotePrefix: string;
+  /** printed at the foot of every invoice (bank details, thanks…) */
+  readonly invoiceFooter: string;
+}
+
+export const BILLING_LIMITS = {
+  termsDays: { min: 1, max: 365 },
+  percent: { min: 0, max: 100 },
+  reminderDays: { min: 1, max: 90 },
+  maxAfter: { min: 0, max: 12 },
+  prefixMaxLength: 12,
+  depositCapNameMaxLength: 200,
+  footerMaxLength: 1000,
+} as const;
+
+export const DEFAULT_BILLING_SETTINGS: BillingSettings = {
+  depositCap: { kind: 'none' },
+  depositCapName: 'No deposit limit',
+  terms: { kind: 'net', days: 14 },
+  retainage: { workPercent: 0, storedPercent: 0, stopAtPercentComplete: null },
+  depositCredit: 'prorata',
+  reminders: { isOn: true, daysBefore: 3, onDueDate: true, everyDaysAfter: 7, maxAfter: 3 },
+  invoicePrefix: 'INV-',
+  creditNotePrefix: 'CN-',
+  invoiceFooter: '',
+};
+
+export interface BillingSettingsView {
+  readonly settings: BillingSettings;
+  /** true until the owner saves the firm's own values */
+  readonly isDefault: boolean;
+  readonly currency: string;
+}

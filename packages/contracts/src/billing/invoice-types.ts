@@ -1,0 +1,231 @@
+/**
+ * Invoices and credit notes, without zod. A draft has no number; issuing takes the next number of
+ * the firm's series and freezes the document; voiding an issued invoice makes a numbered credit
+ * note. Money: decimal strings in `currency`.
+ */
+
+export const INVOICE_KINDS = ['deposit', 'milestone', 'progress', 'retainage', 'final'] as const;
+export type InvoiceKind = (typeof INVOICE_KINDS)[number];
+export const INVOICE_KIND_LABELS: Readonly<Record<InvoiceKind, string>> = {
+  deposit: 'Deposit',
+  milestone: 'Stage payment',
+  progress: 'Progress invoice',
+  retainage: 'Retainage release',
+  final: 'Final invoice',
+};
+
+export const INVOICE_STATUSES = ['draft', 'issued', 'part_paid', 'paid', 'void'] as const;
+export type InvoiceStatus = (typeof INVOICE_STATUSES)[number];
+export const INVOICE_STATUS_LABELS: Readonly<Record<InvoiceStatus, string>> = {
+  draft: 'Draft — not sent',
+  issued: 'Open',
+  part_paid: 'Part paid',
+  paid: 'Paid',
+  void: 'Void',
+};
+
+/** One line of a deposit, stage, retainage or final invoice. */
+export interface InvoiceLine {
+  readonly label: string;
+  readonly amount: string;
+  readonly note?: string;
+}
+
+/** A progress invoice's schedule of values, as billed (our own columns, in words). */
+export interface ProgressTableLine {
+  readonly valueLineId: string;
+  readonly label: string;
+  readonly scheduledValue: string;
+  readonly previousWork: string;
+  readonly thisPeriodWork: string;
+  readonly storedMaterials: string;
+  readonly completedToDate: string;
+  /** "80" = 80 % */
+  readonly percentComplete: string;
+  readonly balanceToFinish: string;
+  readonly retainage: string;
+}
+
+export interface ProgressTable {
+  readonly periodEnd: string;
+  readonly lines: readonly ProgressTableLine[];
+  readonly retainageRates: { readonly workPercent: number; readonly storedPercent: number; readonly stopAtPercentComplete: number | null };
+  readonly summary: {
+    readonly originalContractSum: string;
+    readonly changeOrders: string;
+    readonly contractSumToDate: string;
+    readonly completedToDate: string;
+    readonly retainage: string;
+    readonly earnedLessRetainage: string;
+    readonly previouslyBilled: string;
+    readonly dueThisPeriod: string;
+    readonly balanceToFinishWithRetainage: string;
+  };
+}
+
+/** What an issued invoice prints, frozen at issue. */
+export interface InvoiceDocument {
+  readonly firm: {
+    readonly name: string;
+    readonly addressLines: readonly string[];
+    readonly phone: string;
+    readonly taxId: string;
+    readonly logoFileId: string | null;
+  };
+  readonly client: { readonly name: string; readonly email: string; readonly addressLines: readonly string[] };
+  readonly site: { readonly label: string; readonly addressLines: readonly string[] };
+  readonly jobTitle: string;
+  /** "Net 14 (due 14 days after the invoice date)" */
+  readonly termsText: string;
+  /** the firm's deposit rule, by name ("No deposit limit" included) */
+  readonly depositCapName: string;
+  readonly footer: string;
+  readonly locale: string;
+}
+
+export interface InvoiceSummary {
+  readonly id: string;
+  /** "INV-0007"; null for a draft */
+  readonly number: string | null;
+  readonly kind: InvoiceKind;
+  readonly status: InvoiceStatus;
+  /** open or part paid, and past its due date in the firm's time zone */
+  readonly isOverdue: boolean;
+  readonly jobId: string;
+  readonly jobTitle: string;
+  readonly clientId: string;
+  readonly clientName: string;
+  readonly issuedOn: string | null;
+  readonly dueOn: string | null;
+  readonly currency: string;
+  readonly total: string;
+  /** total − paid − credited (0 for a void invoice) */
+  readonly amountDue: string;
+  /** "queue" when the trigger drafted it, for the office to review */
+  readonly origin: 'office' | 'queue';
+  readonly createdAt: string;
+}
+
+export interface AuditTrailEntry {
+  readonly at: string;
+  readonly who: string;
+  readonly action: string;
+  /** "Issued as INV-0007", "Voided: billed twice" */
+  readonly text: string;
+}
+
+export interface CreditNoteView {
+  readonly id: string;
+  readonly number: string;
+  readonly invoiceId: string;
+  readonly issuedOn: string;
+  readonly amount: string;
+  readonly currency: string;
+  readonly reason: string;
+}
+
+export interface InvoiceReminderView {
+  readonly step: string;
+  /** "3 days before the due date", "On the due date", "7 days after the due date" */
+  readonly label: string;
+  readonly sentOn: string;
+}
+
+export interface PaymentView {
+  readonly id: string;
+  readonly method: 'card' | 'cheque' | 'transfer' | 'cash';
+  readonly amount: string;
+  readonly receivedOn: string;
+  readonly reference: string;
+}
+
+export interface InvoiceDetail extends InvoiceSummary {
+  readonly scheduleLineId: string | null;
+  readonly periodEnd: string | null;
+  readonly subtotal: string;
+  readonly depositCredit: string;
+  readonly retainageHeld: string;
+  readonly taxIncluded: string;
+  readonly amountPaid: string;
+  readonly amountCredited: string;
+  readonly lines: readonly InvoiceLine[];
+  readonly progress: ProgressTable | null;
+  /** frozen at issue; for a draft, what it would print today */
+  readonly document: InvoiceDocument;
+  readonly notes: string;
+  /** what drafted it, in words ("Base coat finished on every surface on 2026-12-10") */
+  readonly triggerText: string | null;
+  readonly sentAt: string | null;
+  readonly voidReason: string | null;
+  readonly creditNote: CreditNoteView | null;
+  readonly payments: readonly PaymentView[];
+  readonly reminders: readonly InvoiceReminderView[];
+  readonly auditTrail: readonly AuditTrailEntry[];
+}
+
+/** POST /api/jobs/:id/invoices — a draft the office asks for (progress or retainage release). */
+export type InvoiceDraftCreate =
+  | { readonly kind: 'progress'; readonly periodEnd: string }
+  | { readonly kind: 'retainage' }
+  | { readonly kind: 'line'; readonly scheduleLineId: string };
+
+/** PATCH /api/invoices/:id — drafts only. */
+export interface InvoiceDraftUpdate {
+  readonly notes?: string;
+  /** progress drafts: this period per value line, as an amount or a percent complete to date */
+  readonly progressLines?: ReadonlyArray<{
+    readonly valueLineId: string;
+    readonly workToDate: { readonly percent: number } | { readonly amount: string };
+    readonly storedMaterials: string;
+  }>;
+  readonly periodEnd?: string;
+}
+
+/** POST /api/invoices/:id/issue — `issuedOn` defaults to today in the firm's zone; `send` e-mails it. */
+export interface InvoiceIssue {
+  readonly issuedOn?: string;
+  readonly send: boolean;
+}
+
+/** POST /api/invoices/:id/void */
+export interface InvoiceVoid {
+  readonly reason: string;
+}
+
+/** POST /api/invoices/:id/payments — an offline payment (cheque, transfer, cash). */
+export interface OfflinePaymentCreate {
+  readonly method: 'cheque' | 'transfer' | 'cash';
+  readonly amount: string;
+  readonly receivedOn: string;
+  readonly reference: string;
+}
+
+export const INVOICE_LIST_FILTERS = ['all', 'drafts', 'open', 'overdue', 'paid', 'void'] as const;
+export type InvoiceListFilter = (typeof INVOICE_LIST_FILTERS)[number];
+export const INVOICE_LIST_FILTER_LABELS: Readonly<Record<InvoiceListFilter, string>> = {
+  all: 'All',
+  drafts: 'To review',
+  open: 'Open',
+  overdue: 'Overdue',
+  paid: 'Paid',
+  void: 'Void',
+};
+
+export const INVOICE_LIMITS = { notesMaxLength: 2000, reasonMaxLength: 500, referenceMaxLength: 120 } as const;
+
+/** GET /api/billing/today — the money part of Today (owner, office). */
+export interface BillingToday {
+  /** drafts waiting for a person: queue-drafted first, oldest first */
+  readonly readyToBill: readonly InvoiceSummary[];
+  readonly overdue: readonly InvoiceSummary[];
+  readonly changeOrdersWaiting: ReadonlyArray<{
+    readonly id: string;
+    readonly jobId: string;
+    readonly jobTitle: string;
+    readonly number: number;
+    readonly title: string;
+    readonly amount: string;
+    readonly currency: string;
+    readonly sentAt: string;
+  }>;
+}

@@ -1,0 +1,62 @@
+import type { ChangeOrderView } from './change-order-types';
+import type { InvoiceDocument, InvoiceKind, InvoiceLine, InvoiceStatus, ProgressTable } from './invoice-types';
+
+/**
+ * What a client reads of billing in the portal: only their own issued invoices (never drafts),
+ * credit notes, a statement per job, and change orders sent to them. Money: decimal strings.
+ */
+
+export interface PortalInvoiceSummary {
+  readonly id: string;
+  readonly number: string;
+  readonly kind: InvoiceKind;
+  readonly status: InvoiceStatus;
+  readonly isOverdue: boolean;
+  readonly jobId: string;
+  readonly jobTitle: string;
+  readonly issuedOn: string;
+  readonly dueOn: string;
+  readonly currency: string;
+  readonly total: string;
+  readonly amountDue: string;
+}
+
+export interface PortalInvoiceDetail extends PortalInvoiceSummary {
+  readonly lines: readonly InvoiceLine[];
+  readonly progress: ProgressTable | null;
+  readonly depositCredit: string;
+  readonly taxIncluded: string;
+  readonly amountPaid: string;
+  readonly amountCredited: string;
+  readonly document: InvoiceDocument;
+  readonly creditNote: { readonly id: string; readonly number: string; readonly issuedOn: string; readonly amount: string } | null;
+  /** false until the payments issue: the portal leaves the place for a pay button */
+  readonly canPayOnline: boolean;
+}
+
+export interface PortalStatementLine {
+  readonly on: string;
+  readonly kind: 'invoice' | 'creditNote' | 'payment';
+  /** "INV-0007 Deposit", "CN-0002", "Payment by cheque 1042" */
+  readonly text: string;
+  readonly charge: string;
+  readonly credit: string;
+  readonly balance: string;
+}
+
+/** GET /api/portal/jobs/:id/statement */
+export interface PortalStatement {
+  readonly jobId: string;
+  readonly jobTitle: string;
+  readonly currency: string;
+  readonly contractSum: string;
+  readonly lines: readonly PortalStatementLine[];
+  readonly invoiced: string;
+  readonly credited: string;
+  readonly paid: string;
+  readonly balanceDue: string;
+  readonly unbilled: string;
+}
+
+/** GET /api/portal/change-orders/:id */
+export type PortalChangeOrder = ChangeOrderView;
