@@ -114,6 +114,8 @@ export { includedTax } from './billing/invoice-tax';
 export type { PaymentTerms } from './billing/due-date';
 export { NET_DAYS_MAX, dueDate, termsText } from './billing/due-date';
 export { documentNumber } from './billing/document-number';
+export type { ReminderCadence, ReminderDue, ReminderStep, RemindersDueInput } from './billing/reminder-steps';
+export { reminderSteps, remindersDue } from './billing/reminder-steps';
 
 // receivables
 export type { AgedReceivable, AgingBucket, AgingReport, ReceivableInput } from './receivables/aging';
