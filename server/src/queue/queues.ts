@@ -9,6 +9,10 @@ export const QUEUES = {
   followUpDead: 'follow-up-dead',
   pruneExpired: 'prune-expired',
   pruneDead: 'prune-dead',
+  billingEvaluate: 'billing-evaluate',
+  billingSweep: 'billing-sweep',
+  billingDaily: 'billing-daily',
+  billingDead: 'billing-dead',
 } as const;
 
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
@@ -18,6 +22,19 @@ export const QUEUE_OPTIONS: ReadonlyArray<{ name: QueueName; options: Omit<PgBos
   { name: QUEUES.mailDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
   { name: QUEUES.followUpDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
   { name: QUEUES.pruneDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
+  { name: QUEUES.billingDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
+  {
+    name: QUEUES.billingEvaluate,
+    options: { retryLimit: 5, retryDelay: 10, retryBackoff: true, expireInSeconds: 120, retentionDays: 7, deadLetter: QUEUES.billingDead },
+  },
+  {
+    name: QUEUES.billingSweep,
+    options: { retryLimit: 2, retryDelay: 60, retryBackoff: true, expireInSeconds: 300, retentionDays: 3, deadLetter: QUEUES.billingDead },
+  },
+  {
+    name: QUEUES.billingDaily,
+    options: { retryLimit: 5, retryDelay: 30, retryBackoff: true, expireInSeconds: 600, retentionDays: 7, deadLetter: QUEUES.billingDead },
+  },
   {
     name: QUEUES.pruneExpired,
     options: { retryLimit: 3, retryDelay: 60, retryBackoff: true, expireInSeconds: 300, retentionDays: 3, deadLetter: QUEUES.pruneDead },
@@ -58,3 +75,25 @@ export const FOLLOW_UP_LOCAL_HOUR = 7;
 
 /** Hourly at twenty past (UTC): expired sessions, old form stamps and sign-in throttle windows go. */
 export const PRUNE_EXPIRED_CRON = '20 * * * *';
+
+/** A job's billing triggers to check now (after a progress mark, billing start, an approved change order). */
+export interface BillingEvaluateJob {
+  readonly tenantId: string;
+  readonly jobId: string;
+}
+
+/** Like FollowUpSweepJob: force / tenantIds for tests and operators. */
+export interface BillingSweepJob {
+  readonly force?: boolean;
+  readonly tenantIds?: readonly string[];
+}
+
+/** One firm's day: date triggers met and invoice reminders due, on `localDate` in its zone. */
+export interface BillingDailyJob {
+  readonly tenantId: string;
+  readonly localDate: string;
+}
+
+/** Hourly at ten past (UTC); each firm's billing day runs at BILLING_LOCAL_HOUR its time. */
+export const BILLING_SWEEP_CRON = '10 * * * *';
+export const BILLING_LOCAL_HOUR = 8;

@@ -1,0 +1,13 @@
+import type { TenantTx } from '@layerbook/db';
+import type { JobQueue } from '../../queue/job-queue';
+import { type BillingEvaluateJob, QUEUES } from '../../queue/queues';
+
+/**
+ * Asks the queue to check a job's billing triggers, in the caller's transaction: the check runs
+ * only if the write that may have met a trigger (a progress mark, billing start, an approved change
+ * order) commits. The check itself is idempotent, so an extra one costs nothing.
+ */
+export async function enqueueBillingCheck(tx: TenantTx, queue: JobQueue, jobId: string): Promise<void> {
+  const data: BillingEvaluateJob = { tenantId: tx.tenantId, jobId };
+  await queue.send(QUEUES.billingEvaluate, data, tx);
+}
