@@ -116,6 +116,8 @@ export { NET_DAYS_MAX, dueDate, termsText } from './billing/due-date';
 export { documentNumber } from './billing/document-number';
 export type { ReminderCadence, ReminderDue, ReminderStep, RemindersDueInput } from './billing/reminder-steps';
 export { reminderSteps, remindersDue } from './billing/reminder-steps';
+export type { DepositCreditInput, DepositCreditRule } from './billing/deposit-credit';
+export { depositCredit } from './billing/deposit-credit';
 
 // receivables
 export type { AgedReceivable, AgingBucket, AgingReport, ReceivableInput } from './receivables/aging';
