@@ -118,6 +118,8 @@ export type { ReminderCadence, ReminderDue, ReminderStep, RemindersDueInput } fr
 export { reminderSteps, remindersDue } from './billing/reminder-steps';
 export type { DepositCreditInput, DepositCreditRule } from './billing/deposit-credit';
 export { depositCredit } from './billing/deposit-credit';
+export type { LayerCompletion, LayerItem, ValueLineWorkInput } from './billing/layer-progress';
+export { layerCompletion, valueLineWork } from './billing/layer-progress';
 
 // receivables
 export type { AgedReceivable, AgingBucket, AgingReport, ReceivableInput } from './receivables/aging';
