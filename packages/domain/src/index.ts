@@ -120,6 +120,8 @@ export type { DepositCreditInput, DepositCreditRule } from './billing/deposit-cr
 export { depositCredit } from './billing/deposit-credit';
 export type { LayerCompletion, LayerItem, ValueLineWorkInput } from './billing/layer-progress';
 export { layerCompletion, valueLineWork } from './billing/layer-progress';
+export type { JobStatement, JobStatementInput, StatementEntry, StatementEntryKind, StatementLine } from './billing/statement';
+export { jobStatement } from './billing/statement';
 
 // receivables
 export type { AgedReceivable, AgingBucket, AgingReport, ReceivableInput } from './receivables/aging';
