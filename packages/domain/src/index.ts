@@ -122,6 +122,8 @@ export type { LayerCompletion, LayerItem, ValueLineWorkInput } from './billing/l
 export { layerCompletion, valueLineWork } from './billing/layer-progress';
 export type { JobStatement, JobStatementInput, StatementEntry, StatementEntryKind, StatementLine } from './billing/statement';
 export { jobStatement } from './billing/statement';
+export type { BillingLineRole, BillingScheduleInput, BillingScheduleLine, ScheduleProblem } from './billing/schedule-check';
+export { checkBillingSchedule } from './billing/schedule-check';
 
 // receivables
 export type { AgedReceivable, AgingBucket, AgingReport, ReceivableInput } from './receivables/aging';
