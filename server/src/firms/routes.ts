@@ -1,13 +1,23 @@
-import { estimatingSettings, firmSettingsUpdate, type EstimatingSettingsView, type FirmSettings } from '@layerbook/contracts';
+import {
+  estimatingSettings,
+  FIRM_LOGO_FIELD,
+  firmSettingsUpdate,
+  type EstimatingSettingsView,
+  type FirmSettings,
+} from '@layerbook/contracts';
 import { Router } from 'express';
 import type { AppContext } from '../context';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
-import { badRequest } from '../http/problem';
 import { parse, parseChanges } from '../http/validate';
 import { isKnownCurrency } from './currencies';
 import { getEstimatingSettings, saveEstimatingSettings } from './estimating';
 import { getFirm, updateFirm } from './service';
+import { checkImage } from '../files/image';
+import { discardObjects, storeImageThen } from '../files/stored-files';
+import { receiveOneFile } from '../files/upload';
+import { badRequest, unauthorized } from '../http/problem';
+import { removeFirmLogo, setFirmLogo } from './logo';
 
 /** Every route authorises first (inside its firm transaction), then parses, so a wrong role never learns the schema. */
 export function firmRoutes(ctx: AppContext): Router {
@@ -38,6 +48,34 @@ export function firmRoutes(ctx: AppContext): Router {
       saveEstimatingSettings(tx, staffActor(staff), parse(estimatingSettings, req.body), ctx.now()),
     );
     res.json(view satisfies EstimatingSettingsView);
+  });
+
+  // The logo: the role is checked before the body is read (a crew member hears 403, not a 400 about
+  // the file); the image is decoded outside any transaction, stored, then the row written; the old
+  // logo's objects go once the change has committed.
+  router.post(
+    '/logo',
+    async (req, _res, next) => {
+      await withStaff(ctx, req, 'owner', (tx) => getFirm(tx));
+      next();
+    },
+    receiveOneFile(ctx.config, FIRM_LOGO_FIELD),
+    async (req, res) => {
+      const image = await checkImage(req.file, FIRM_LOGO_FIELD);
+      const tenantId = req.user?.tenantId;
+      if (!tenantId) throw unauthorized();
+      const change = await storeImageThen(ctx.storage, ctx.logger, tenantId, image, (stored) =>
+        withStaff(ctx, req, 'owner', (tx, staff) => setFirmLogo(tx, staffActor(staff), stored, ctx.now())),
+      );
+      await discardObjects(ctx.storage, ctx.logger, change.discarded);
+      res.json(change.firm satisfies FirmSettings);
+    },
+  );
+
+  router.delete('/logo', async (req, res) => {
+    const change = await withStaff(ctx, req, 'owner', (tx, staff) => removeFirmLogo(tx, staffActor(staff), ctx.now()));
+    await discardObjects(ctx.storage, ctx.logger, change.discarded);
+    res.json(change.firm satisfies FirmSettings);
   });
 
   return router;

@@ -3,10 +3,11 @@ import { eq, firms, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { notFound } from '../http/problem';
+import { fileUrls } from '../files/stored-files';
 
-type FirmRow = typeof firms.$inferSelect;
+export type FirmRow = typeof firms.$inferSelect;
 
-const toSettings = (f: FirmRow): FirmSettings => ({
+export const toSettings = (f: FirmRow): FirmSettings => ({
   id: f.id,
   slug: f.slug,
   name: f.name,
@@ -17,6 +18,8 @@ const toSettings = (f: FirmRow): FirmSettings => ({
   postalCode: f.postalCode,
   country: f.country,
   phone: f.phone,
+  taxId: f.taxId,
+  logoUrl: f.logoFileId ? fileUrls(f.logoFileId).downloadUrl : null,
   timeZone: f.timeZone,
   currency: f.currency,
   units: f.units,
@@ -25,9 +28,14 @@ const toSettings = (f: FirmRow): FirmSettings => ({
 });
 
 export async function getFirm(tx: TenantTx): Promise<FirmSettings> {
-  const firm = (await tx.db.select().from(firms).where(eq(firms.id, tx.tenantId)))[0];
+  return toSettings(await firmRow(tx));
+}
+
+export async function firmRow(tx: TenantTx, lock = false): Promise<FirmRow> {
+  const query = tx.db.select().from(firms).where(eq(firms.id, tx.tenantId));
+  const firm = (await (lock ? query.for('update') : query))[0];
   if (!firm) throw notFound('firm');
-  return toSettings(firm);
+  return firm;
 }
 
 export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettingsUpdate, now: Date): Promise<FirmSettings> {

@@ -18,7 +18,7 @@ export async function firmWithPricedEstimate(t: TestServer, name: string, opts: 
   const o = await signUpFirm(t.app, name);
   const csrf = () => o.csrf();
   const firm = (await o.agent.get('/api/firm')).body as FirmSettings;
-  const { id: _id, slug: _slug, updatedAt: _u, ...profile } = firm;
+  const { id: _id, slug: _slug, updatedAt: _u, logoUrl: _logo, ...profile } = firm;
   await o.agent
     .patch('/api/firm')
     .set('x-csrf-token', csrf())

@@ -104,7 +104,7 @@ describe('site takeoff', () => {
     expect(cone.body.measure.quantity).toBeCloseTo(251.33, 2);
 
     const firm = (await o.agent.get('/api/firm')).body;
-    const { id: _id, slug: _slug, updatedAt: _at, ...settings } = firm;
+    const { id: _id, slug: _slug, updatedAt: _at, logoUrl: _logo, ...settings } = firm;
     expect(
       (
         await o.agent

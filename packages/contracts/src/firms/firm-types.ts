@@ -28,6 +28,8 @@ export const FIRM_PROFILE_LIMITS = {
   city: 80,
   region: 80,
   postalCode: 20,
+  /** VAT, GST, EIN… as printed on invoices */
+  taxId: 40,
 } as const;
 
 // What the owner sends (PATCH /api/firm).
@@ -44,11 +46,19 @@ export interface FirmSettingsUpdate {
   readonly currency: string;
   readonly units: UnitSystem;
   readonly language: Language;
+  /** the firm's tax registration printed on invoices ('' for none); left as it is when not sent */
+  readonly taxId?: string;
 }
 
 /** GET and PATCH /api/firm. */
 export interface FirmSettings extends FirmSettingsUpdate {
   readonly id: string;
   readonly slug: string;
+  readonly taxId: string;
+  /** the logo printed on invoices (the files route), null when none; set by POST /api/firm/logo, removed by DELETE */
+  readonly logoUrl: string | null;
   readonly updatedAt: string;
 }
+
+/** The logo's form field in POST /api/firm/logo (multipart, one image). */
+export const FIRM_LOGO_FIELD = 'file';

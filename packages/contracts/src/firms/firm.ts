@@ -47,5 +47,6 @@ export const firmSettingsUpdate = requestSchema<FirmSettingsUpdate>()(
     currency,
     units: z.enum(UNIT_SYSTEMS, { error: 'Choose imperial or metric.' }),
     language: z.enum(LANGUAGES, { error: 'Choose English or Spanish.' }),
+    taxId: line('tax number', FIRM_PROFILE_LIMITS.taxId).optional(),
   }),
 );

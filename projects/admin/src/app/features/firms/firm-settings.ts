@@ -34,6 +34,7 @@ import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { EstimatingSettingsForm } from './estimating-settings';
 import { FirmApi } from './firm-api';
+import { FirmLogo } from './firm-logo';
 import { InquiryFormLink } from './inquiry-form-link';
 import { StageLikelihoodsForm } from './stage-likelihoods';
 import { timeZoneChoices } from './time-zones';
@@ -42,6 +43,7 @@ import { timeZoneChoices } from './time-zones';
   selector: 'lb-firm-settings',
   imports: [
     EstimatingSettingsForm,
+    FirmLogo,
     FormAlert,
     InquiryFormLink,
     MatButtonModule,
@@ -88,6 +90,7 @@ export class FirmSettingsPage {
     postalCode: ['', Validators.maxLength(L.postalCode)],
     country: ['', Validators.required],
     phone: ['', Validators.maxLength(PHONE_MAX_LENGTH)],
+    taxId: ['', Validators.maxLength(L.taxId)],
     timeZone: ['', Validators.required],
     currency: ['', Validators.required],
     units: this.fb.control<UnitSystem>('imperial'),
@@ -97,6 +100,7 @@ export class FirmSettingsPage {
   protected readonly words = {
     name: { required: 'Enter the firm name.', minlength: 'Enter the firm name.', ...tooLong(FIRM_NAME_MAX_LENGTH) },
     phone: tooLong(PHONE_MAX_LENGTH),
+    taxId: tooLong(L.taxId),
     addressLine1: tooLong(L.addressLine1),
     addressLine2: tooLong(L.addressLine2),
     city: tooLong(L.city),
@@ -120,8 +124,23 @@ export class FirmSettingsPage {
   }
 
   private show(settings: FirmSettings): void {
-    const { name, addressLine1, addressLine2, city, region, postalCode, country, phone, timeZone, currency, units, language } = settings;
-    this.form.reset({ name, addressLine1, addressLine2, city, region, postalCode, country, phone, timeZone, currency, units, language });
+    const { name, addressLine1, addressLine2, city, region, postalCode, country, phone, taxId, timeZone, currency, units, language } =
+      settings;
+    this.form.reset({
+      name,
+      addressLine1,
+      addressLine2,
+      city,
+      region,
+      postalCode,
+      country,
+      phone,
+      taxId,
+      timeZone,
+      currency,
+      units,
+      language,
+    });
     // The language is kept as it is and sent back unchanged: the choice is hidden until Spanish works.
     // Only owners may change settings; the server refuses the rest with 403 anyway.
     if (this.isOwner()) {
