@@ -21,6 +21,7 @@ import { estimateRoutes } from './proposals/routes';
 import { proposalRoutes } from './proposals/proposal-routes';
 import { portalProposalRoutes } from './proposals/portal-routes';
 import { jobRoutes } from './jobs/routes';
+import { progressRoutes } from './billing/progress-routes';
 import { sampleRoutes } from './samples/routes';
 import { portalSampleRoutes } from './samples/portal-routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
@@ -82,6 +83,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/estimates', estimateRoutes(ctx));
   router.use('/proposals', proposalRoutes(ctx));
   router.use('/jobs', jobRoutes(ctx));
+  router.use('/jobs', progressRoutes(ctx));
   router.use('/samples', sampleRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });

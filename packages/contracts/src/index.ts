@@ -21,3 +21,4 @@ export * from './proposals/portal-decisions';
 export * from './proposals/portal-views';
 export * from './samples/samples';
 export * from './files/photo-fields';
+export * from './billing/progress';

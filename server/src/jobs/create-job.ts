@@ -2,6 +2,7 @@ import type { SnapshotOption } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { scheduleTotals } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
+import { ensureJobWork } from '../billing/work-items';
 
 export interface AcceptedWork {
   readonly proposalVersionId: string;
@@ -19,7 +20,8 @@ export interface AcceptedWork {
 /**
  * The job an acceptance makes, in the acceptance's transaction: the contract sum is the chosen
  * option's total and the draft payment schedule is the option's payments exactly as the client
- * read them. They must add up to the total to the cent, or nothing is written.
+ * read them. They must add up to the total to the cent, or nothing is written. The job's work items
+ * and default schedule of values are made with it.
  */
 export async function createJobFromAcceptance(tx: TenantTx, work: AcceptedWork): Promise<string> {
   const { option } = work;
@@ -57,6 +59,8 @@ export async function createJobFromAcceptance(tx: TenantTx, work: AcceptedWork):
       [tx.tenantId, jobId, position + 1, p.label, p.role, JSON.stringify(p.trigger), p.percent, p.amount, p.expectedOn],
     );
   }
+  // What the crew marks done (each layer on each surface) and the default schedule of values.
+  await ensureJobWork(tx, jobId);
   await recordAudit(tx, {
     actorUserId: null,
     actorKind: 'client',

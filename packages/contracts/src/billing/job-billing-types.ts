@@ -143,6 +143,24 @@ export type ProgressMark =
 export const PROGRESS_KINDS = ['layerDone', 'layerReopened', 'valuePercent', 'storedMaterials', 'walkthrough'] as const;
 export type ProgressKind = (typeof PROGRESS_KINDS)[number];
 
+/** Limits of a progress mark: a phone's own key for the mark (so a mark sent twice counts once), and its note. */
+export const PROGRESS_LIMITS = { clientKeyMaxLength: 100, noteMaxLength: 500 } as const;
+
+/**
+ * GET /api/jobs/:id/progress and the answer of POST (owner, office, crew): the work to mark and how
+ * far it is, without money (crew read it), so value lines carry their label and percent only.
+ */
+export interface JobProgressView {
+  readonly workItems: readonly WorkItemView[];
+  readonly walkthroughOn: string | null;
+  readonly valueLines: ReadonlyArray<{
+    readonly id: string;
+    readonly position: number;
+    readonly label: string;
+    readonly percentComplete: string;
+  }>;
+}
+
 /** One entry of the job's history: progress, schedule changes, invoices, change orders. */
 export interface JobHistoryEntry {
   readonly at: string;

@@ -1,0 +1,209 @@
+import type { JobProgressView, ProgressMark } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import { addDays, DomainInputError, valueLineWork } from '@layerbook/domain';
+import { recordAudit } from '../audit/record';
+import { localDate } from '../firms/local-date';
+import type { Actor } from '../http/actor';
+import { badRequest, conflict, forbidden, notFound } from '../http/problem';
+import type { JobQueue } from '../queue/job-queue';
+import { enqueueBillingCheck } from './triggers/enqueue';
+import { ensureJobWork, loadWorkItems } from './work-items';
+
+interface JobRow {
+  id: string;
+  status: string;
+  currency: string;
+  walkthrough_on: string | null;
+  accepted_on: string;
+  today: string;
+}
+
+/** The job with the firm's today and its acceptance day, both in the firm's zone; 404 when another firm's or none. */
+async function loadJob(tx: TenantTx, jobId: string, now: Date, lock: boolean): Promise<JobRow> {
+  const { rows } = await tx.client.query<Omit<JobRow, 'today' | 'accepted_on'> & { time_zone: string; created_at: Date }>(
+    `select j.id, j.status, j.currency, j.walkthrough_on::text as walkthrough_on, j.created_at, f.time_zone
+       from jobs j join firms f on f.id = j.tenant_id where j.tenant_id = $1 and j.id = $2 ${lock ? 'for update of j' : ''}`,
+    [tx.tenantId, jobId],
+  );
+  const row = rows[0];
+  if (!row) throw notFound('job');
+  return { ...row, accepted_on: localDate(row.time_zone, row.created_at), today: localDate(row.time_zone, now) };
+}
+
+/** One calendar year before a day (29 February → 28 February). */
+function yearBefore(day: string): string {
+  const y = Number(day.slice(0, 4)) - 1;
+  const md = day.slice(5) === '02-29' ? '02-28' : day.slice(5);
+  return `${String(y).padStart(4, '0')}-${md}`;
+}
+
+/** The work to mark and how far it is, without money (crew read it). */
+export async function loadProgress(tx: TenantTx, jobId: string, now: Date): Promise<JobProgressView> {
+  const job = await loadJob(tx, jobId, now, false);
+  await ensureJobWork(tx, jobId);
+  return progressView(tx, job.id);
+}
+
+async function progressView(tx: TenantTx, jobId: string): Promise<JobProgressView> {
+  const { rows: job } = await tx.client.query<{ walkthrough_on: string | null }>(
+    `select walkthrough_on::text as walkthrough_on from jobs where tenant_id = $1 and id = $2`,
+    [tx.tenantId, jobId],
+  );
+  const { rows: valueLines } = await tx.client.query<JobProgressView['valueLines'][number]>(
+    `select id, position, label, trim_scale(percent_complete)::text as "percentComplete"
+       from job_value_lines where tenant_id = $1 and job_id = $2 order by position, created_at`,
+    [tx.tenantId, jobId],
+  );
+  return { workItems: await loadWorkItems(tx, jobId), walkthroughOn: job[0]?.walkthrough_on ?? null, valueLines };
+}
+
+/** Work billed so far on a value line: the sum of this-period work on the job's issued, not voided, progress invoices. */
+async function billedWork(tx: TenantTx, jobId: string, valueLineId: string): Promise<string> {
+  const { rows } = await tx.client.query<{ billed: string }>(
+    `select coalesce(sum((l->>'thisPeriodWork')::numeric), 0)::text as billed
+       from invoices i cross join lateral jsonb_array_elements(coalesce(i.progress->'lines', '[]'::jsonb)) l
+      where i.tenant_id = $1 and i.job_id = $2 and i.kind = 'progress' and i.status in ('issued', 'part_paid', 'paid')
+        and l->>'valueLineId' = $3`,
+    [tx.tenantId, jobId, valueLineId],
+  );
+  return rows[0]?.billed ?? '0';
+}
+
+async function valueLine(tx: TenantTx, jobId: string, id: string): Promise<{ id: string; label: string; scheduled_value: string }> {
+  const { rows } = await tx.client.query<{ id: string; label: string; scheduled_value: string }>(
+    `select id, label, scheduled_value::text as scheduled_value from job_value_lines where tenant_id = $1 and job_id = $2 and id = $3`,
+    [tx.tenantId, jobId, id],
+  );
+  if (!rows[0]) throw badRequest([{ field: 'valueLineId', message: 'Choose a line of this job’s schedule of values.' }]);
+  return rows[0];
+}
+
+async function workItem(tx: TenantTx, jobId: string, id: string): Promise<{ id: string }> {
+  const { rows } = await tx.client.query<{ id: string }>(`select id from job_work_items where tenant_id = $1 and job_id = $2 and id = $3`, [
+    tx.tenantId,
+    jobId,
+    id,
+  ]);
+  if (!rows[0]) throw badRequest([{ field: 'workItemId', message: 'Choose a layer on a surface of this job.' }]);
+  return rows[0];
+}
+
+/**
+ * Records one mark from the work and applies it: a layer done or reopened on a surface, a
+ * percent complete or materials stored on a value line, the walkthrough held. The history row,
+ * the change and the request to check billing triggers commit together. A mark sent again with
+ * the same `clientKey` (a phone back online) changes nothing and answers the same.
+ */
+export async function recordProgress(
+  tx: TenantTx,
+  queue: JobQueue,
+  actor: Actor,
+  jobId: string,
+  mark: ProgressMark,
+  now: Date,
+): Promise<JobProgressView> {
+  const job = await loadJob(tx, jobId, now, true);
+  if (actor.kind === 'staff' && actor.role === 'crew' && mark.kind === 'storedMaterials') {
+    throw forbidden('Stored materials are an amount of money: the office records them.');
+  }
+  if (job.status === 'cancelled') throw conflict('This job is cancelled: its progress can no longer change.');
+  const latest = addDays(job.today, 1);
+  const earliest = yearBefore(job.accepted_on);
+  if (mark.on > latest) throw badRequest([{ field: 'on', message: `The day cannot be later than ${latest}.` }]);
+  if (mark.on < earliest)
+    throw badRequest([{ field: 'on', message: `The day cannot be earlier than ${earliest}, a year before the job was accepted.` }]);
+  await ensureJobWork(tx, jobId);
+
+  const line = mark.kind === 'valuePercent' || mark.kind === 'storedMaterials' ? await valueLine(tx, jobId, mark.valueLineId) : null;
+  const target = {
+    workItemId: mark.kind === 'layerDone' || mark.kind === 'layerReopened' ? (await workItem(tx, jobId, mark.workItemId)).id : null,
+    valueLineId: line?.id ?? null,
+  };
+  const value = mark.kind === 'valuePercent' ? String(mark.percentComplete) : mark.kind === 'storedMaterials' ? mark.amount : null;
+
+  if (mark.kind === 'valuePercent' && line) {
+    // Billed work never goes down: the percent may not fall below what issued progress invoices billed.
+    try {
+      valueLineWork({
+        scheduledValue: line.scheduled_value,
+        percentToDate: mark.percentComplete,
+        previousWork: await billedWork(tx, jobId, line.id),
+        currency: job.currency,
+      });
+    } catch (error) {
+      if (!(error instanceof DomainInputError)) throw error;
+      throw badRequest([{ field: 'percentComplete', message: error.message }]);
+    }
+  }
+
+  // The history row first: a repeated client key stops here, having changed nothing.
+  const inserted = await tx.client.query<{ id: string }>(
+    `insert into job_progress (tenant_id, job_id, kind, work_item_id, value_line_id, value, happened_on, actor_user_id, note, client_key)
+     values ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10)
+     on conflict (tenant_id, client_key) where client_key is not null do nothing returning id`,
+    [
+      tx.tenantId,
+      jobId,
+      mark.kind,
+      target.workItemId,
+      target.valueLineId,
+      value,
+      mark.on,
+      actor.kind === 'staff' ? actor.userId : null,
+      mark.note ?? '',
+      mark.clientKey ?? null,
+    ],
+  );
+  if (!inserted.rows[0]) return progressView(tx, jobId);
+
+  switch (mark.kind) {
+    case 'layerDone':
+      await tx.client.query(`update job_work_items set done_on = $3, done_by = $4 where tenant_id = $1 and id = $2`, [
+        tx.tenantId,
+        target.workItemId,
+        mark.on,
+        actor.kind === 'staff' ? actor.userId : null,
+      ]);
+      break;
+    case 'layerReopened':
+      await tx.client.query(`update job_work_items set done_on = null, done_by = null where tenant_id = $1 and id = $2`, [
+        tx.tenantId,
+        target.workItemId,
+      ]);
+      break;
+    case 'valuePercent':
+      await tx.client.query(`update job_value_lines set percent_complete = $3, updated_at = $4 where tenant_id = $1 and id = $2`, [
+        tx.tenantId,
+        target.valueLineId,
+        value,
+        now,
+      ]);
+      break;
+    case 'storedMaterials':
+      await tx.client.query(`update job_value_lines set stored_materials = $3, updated_at = $4 where tenant_id = $1 and id = $2`, [
+        tx.tenantId,
+        target.valueLineId,
+        value,
+        now,
+      ]);
+      break;
+    case 'walkthrough':
+      await tx.client.query(`update jobs set walkthrough_on = $3, updated_at = $4 where tenant_id = $1 and id = $2`, [
+        tx.tenantId,
+        jobId,
+        mark.on,
+        now,
+      ]);
+      break;
+  }
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'progress.marked',
+    entity: 'job',
+    entityId: jobId,
+    data: { progressId: inserted.rows[0].id, kind: mark.kind, on: mark.on, ...target, ...(value !== null ? { value } : {}) },
+  });
+  await enqueueBillingCheck(tx, queue, jobId);
+  return progressView(tx, jobId);
+}
