@@ -21,6 +21,8 @@ import { estimateRoutes } from './proposals/routes';
 import { proposalRoutes } from './proposals/proposal-routes';
 import { portalProposalRoutes } from './proposals/portal-routes';
 import { jobRoutes } from './jobs/routes';
+import { changeOrderRoutes, jobChangeOrderRoutes } from './billing/change-orders/routes';
+import { portalChangeOrderRoutes } from './billing/change-orders/portal-routes';
 import { progressRoutes } from './billing/progress-routes';
 import { sampleRoutes } from './samples/routes';
 import { portalSampleRoutes } from './samples/portal-routes';
@@ -71,6 +73,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/auth', authRoutes(ctx, pass, limiter));
   router.use('/portal/boards', portalSampleRoutes(ctx));
   router.use('/portal/proposals', portalProposalRoutes(ctx));
+  router.use('/portal/change-orders', portalChangeOrderRoutes(ctx));
   router.use('/portal', portalAuthRoutes(ctx, limiter));
   router.use('/firm', firmRoutes(ctx));
   router.use('/team', teamRoutes(ctx));
@@ -83,6 +86,8 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/estimates', estimateRoutes(ctx));
   router.use('/proposals', proposalRoutes(ctx));
   router.use('/jobs', jobRoutes(ctx));
+  router.use('/jobs/:id/change-orders', jobChangeOrderRoutes(ctx));
+  router.use('/change-orders', changeOrderRoutes(ctx));
   router.use('/jobs', progressRoutes(ctx));
   router.use('/samples', sampleRoutes(ctx));
   router.get('/health', (_req, res) => {

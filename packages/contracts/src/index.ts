@@ -22,3 +22,4 @@ export * from './proposals/portal-views';
 export * from './samples/samples';
 export * from './files/photo-fields';
 export * from './billing/progress';
+export * from './billing/change-orders';

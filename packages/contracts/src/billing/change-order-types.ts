@@ -27,6 +27,9 @@ export interface ChangeOrderCreate {
   readonly pricing: ChangeOrderPricing;
 }
 
+/** PATCH /api/change-orders/:id — any of the create fields; a new `pricing` is priced again. */
+export type ChangeOrderUpdate = Partial<ChangeOrderCreate>;
+
 export interface ChangeOrderSummary {
   readonly id: string;
   readonly jobId: string;
@@ -60,11 +63,16 @@ export interface ChangeOrderView extends ChangeOrderSummary {
   /** the contract sum before and after approval, for the reader */
   readonly contractSumBefore: string;
   readonly contractSumAfter: string;
+  /** why a lump sum carries no tax under the firm's tax mode (materials only, or none); null otherwise */
+  readonly taxNote: string | null;
 }
 
 /** POST /api/portal/change-orders/:id/decision */
 export type ChangeOrderDecision =
-  | { readonly decision: 'approve'; readonly signedName: string; readonly comment?: string }
+  | { readonly decision: 'approve'; readonly signedName: string; readonly consent: true; readonly comment?: string }
   | { readonly decision: 'decline'; readonly comment?: string };
 
-export const CHANGE_ORDER_LIMITS = { titleMaxLength: 160, descriptionMaxLength: 4000, surfacesMax: 200 } as const;
+export const CHANGE_ORDER_LIMITS = { titleMaxLength: 160, descriptionMaxLength: 4000, surfacesMax: 200, commentMaxLength: 2000 } as const;
+
+/** A signed amount with at most two decimals: "-250.00" deducts (the currency's own minor units are checked by the server). */
+export const SIGNED_MONEY_PATTERN = /^-?\d{1,12}(\.\d{1,2})?$/;

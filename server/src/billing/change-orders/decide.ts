@@ -1,0 +1,226 @@
+import type { ChangeOrderDecision, PortalChangeOrder } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import { DomainInputError, formatMoney, minorUnitDigits, respreadSchedule, type PaymentLine } from '@layerbook/domain';
+import Decimal from 'decimal.js';
+import { recordAudit } from '../../audit/record';
+import type { AppContext } from '../../context';
+import type { ClientPrincipal } from '../../http/principal';
+import { conflict, notFound } from '../../http/problem';
+import { enqueueMail } from '../../mail/outbox';
+import { clientIdOf } from '../../proposals/client-proposals';
+import { enqueueBillingCheck } from '../triggers/enqueue';
+import { changeOrderAnsweredMail } from './change-order-mail';
+import type { StoredDetail } from './pricing';
+import { loadChangeOrder, toView, type ChangeOrderRow } from './read';
+
+/** A change order the client may read: one of their own jobs', sent or decided (never a draft); 404 otherwise. */
+async function loadClientChangeOrder(tx: TenantTx, client: ClientPrincipal, id: string, lock = false): Promise<ChangeOrderRow> {
+  const clientId = await clientIdOf(tx, client);
+  if (!clientId) throw notFound('change order');
+  const row = await loadChangeOrder(tx, id, lock);
+  if (row.client_id !== clientId || row.status === 'draft') throw notFound('change order');
+  return row;
+}
+
+export async function getClientChangeOrder(tx: TenantTx, client: ClientPrincipal, id: string): Promise<PortalChangeOrder> {
+  return toView(await loadClientChangeOrder(tx, client, id));
+}
+
+interface LineRow {
+  id: string;
+  position: number;
+  label: string;
+  role: PaymentLine['role'];
+  trigger: PaymentLine['trigger'];
+  amount: string;
+  status: 'draft' | 'scheduled' | 'ready' | 'invoiced';
+}
+
+/** Lines with a drafted or issued invoice are billed: a re-spread never touches them. */
+const isBilled = (l: LineRow) => l.status === 'ready' || l.status === 'invoiced';
+
+/**
+ * The client approves (typed signature) or declines a sent change order. Approval moves the money
+ * in one transaction: the job's contract sum and contained tax, the unbilled schedule lines spread
+ * again to the new sum (a new line when every line is billed), a schedule-of-values line, the
+ * change order's own record, the billing check, the audit row and the office's e-mail. A decline
+ * only closes the change order. Answering twice is a 409.
+ */
+export async function decideChangeOrder(
+  tx: TenantTx,
+  ctx: AppContext,
+  client: ClientPrincipal,
+  id: string,
+  parseBody: () => ChangeOrderDecision,
+): Promise<PortalChangeOrder> {
+  const row = await loadClientChangeOrder(tx, client, id, true);
+  const input = parseBody();
+  if (row.status !== 'sent') throw conflict(`You already ${row.status} this change order.`);
+  const now = ctx.now();
+  const comment = input.comment ?? '';
+  if (input.decision === 'approve') {
+    const sums = await applyApproval(tx, ctx, row, now);
+    await tx.client.query(
+      `update change_orders set status = 'approved', decided_at = $3, signed_name = $4, client_comment = $5, detail = detail || $6::jsonb, updated_at = $3
+        where tenant_id = $1 and id = $2 and status = 'sent'`,
+      [tx.tenantId, id, now, input.signedName, comment, JSON.stringify(sums satisfies StoredDetail)],
+    );
+  } else {
+    await tx.client.query(
+      `update change_orders set status = 'declined', decided_at = $3, client_comment = $4, updated_at = $3 where tenant_id = $1 and id = $2 and status = 'sent'`,
+      [tx.tenantId, id, now, comment],
+    );
+  }
+  const isApproved = input.decision === 'approve';
+  await recordAudit(tx, {
+    actorUserId: null,
+    actorKind: 'client',
+    action: isApproved ? 'change_order.approved' : 'change_order.declined',
+    entity: 'change_order',
+    entityId: id,
+    data: {
+      number: row.number,
+      amount: row.amount,
+      jobId: row.job_id,
+      comment,
+      portalUserId: client.id,
+      ...(isApproved ? { signedName: input.signedName } : {}),
+    },
+  });
+  await mailOffice(tx, ctx, row, { isApproved, signedName: isApproved ? input.signedName : null, comment, clientName: client.name });
+  return toView(await loadChangeOrder(tx, id));
+}
+
+interface JobMoneyRow {
+  contract_sum: string;
+  contract_tax: string;
+  currency: string;
+  billing_method: 'schedule' | 'progress';
+  billing_started_at: Date | null;
+  finish_date: string | null;
+}
+
+/** The money side of an approval; answers the sums before and after, to freeze on the change order. */
+async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow, now: Date): Promise<StoredDetail> {
+  const job = (
+    await tx.client.query<JobMoneyRow>(
+      `select contract_sum::text as contract_sum, contract_tax::text as contract_tax, currency, billing_method, billing_started_at,
+              finish_date::text as finish_date
+         from jobs where tenant_id = $1 and id = $2 for update`,
+      [tx.tenantId, row.job_id],
+    )
+  ).rows[0];
+  const digits = minorUnitDigits(job.currency);
+  const before = new Decimal(job.contract_sum);
+  const after = before.plus(row.amount);
+  if (after.lessThanOrEqualTo(0)) throw conflict('This change would take the contract sum to zero or below; ask the firm.');
+  // Progress billing keeps only its deposit in the schedule; the work is billed from the schedule of values.
+  if (job.billing_method === 'schedule') await respreadLines(tx, row, job, after, now);
+  await tx.client.query(
+    `update jobs set contract_sum = $3, contract_tax = contract_tax + $4::numeric, updated_at = $5 where tenant_id = $1 and id = $2`,
+    [tx.tenantId, row.job_id, after.toFixed(digits), row.tax, now],
+  );
+  await tx.client.query(
+    `insert into job_value_lines (tenant_id, job_id, position, label, scheduled_value, change_order_id)
+     values ($1, $2, (select coalesce(max(position), 0) + 1 from job_value_lines where tenant_id = $1 and job_id = $2), $3, $4, $5)`,
+    [tx.tenantId, row.job_id, lineLabel(row), row.amount, row.id],
+  );
+  await enqueueBillingCheck(tx, ctx.queue, row.job_id);
+  return { contractSumBefore: before.toFixed(digits), contractSumAfter: after.toFixed(digits) };
+}
+
+const lineLabel = (row: ChangeOrderRow) => `Change order #${row.number}: ${row.title}`;
+
+/**
+ * Spreads the new contract sum over the unbilled lines in proportion (billed lines never move);
+ * when every line is billed, the change order becomes its own stage payment at the walkthrough,
+ * placed before the final line so the final payment stays last.
+ */
+async function respreadLines(tx: TenantTx, row: ChangeOrderRow, job: JobMoneyRow, after: Decimal, now: Date): Promise<void> {
+  const { rows: lines } = await tx.client.query<LineRow>(
+    `select id, position, label, role, trigger, amount::text as amount, status from payment_schedule_lines
+      where tenant_id = $1 and job_id = $2 order by position for update`,
+    [tx.tenantId, row.job_id],
+  );
+  const digits = minorUnitDigits(job.currency);
+  if (lines.length > 0 && lines.every(isBilled)) {
+    if (new Decimal(row.amount).isNegative())
+      throw conflict('Every payment of this job is already billed, so a deduction cannot be spread; ask the firm for a credit.');
+    const final = lines.find((l) => l.role === 'final');
+    const position = final ? final.position : Math.max(...lines.map((l) => l.position)) + 1;
+    if (final)
+      await tx.client.query(
+        `update payment_schedule_lines set position = position + 1 where tenant_id = $1 and job_id = $2 and position >= $3`,
+        [tx.tenantId, row.job_id, position],
+      );
+    await tx.client.query(
+      `insert into payment_schedule_lines (tenant_id, job_id, position, label, role, trigger, amount, expected_on, status)
+       values ($1, $2, $3, $4, 'milestone', '{"kind":"walkthrough"}', $5, $6, $7)`,
+      [tx.tenantId, row.job_id, position, lineLabel(row), row.amount, job.finish_date, job.billing_started_at ? 'scheduled' : 'draft'],
+    );
+    return;
+  }
+  let spread: PaymentLine[];
+  try {
+    spread = respreadSchedule(
+      lines.map((l) => ({
+        id: l.id,
+        label: l.label,
+        role: l.role,
+        trigger: l.trigger,
+        amount: new Decimal(l.amount),
+        isBilled: isBilled(l),
+      })),
+      after,
+      job.currency,
+    );
+  } catch (error) {
+    if (error instanceof DomainInputError) throw conflict(`This change cannot be spread over the payments: ${error.message}`);
+    throw error;
+  }
+  for (const [i, line] of spread.entries()) {
+    if (line.amount.equals(lines[i].amount)) continue;
+    // The percent asked for at acceptance no longer describes the amount: the amount stands alone.
+    await tx.client.query(
+      `update payment_schedule_lines set amount = $3, percent = null, updated_at = $4 where tenant_id = $1 and id = $2`,
+      [tx.tenantId, line.id, line.amount.toFixed(digits), now],
+    );
+  }
+}
+
+async function mailOffice(
+  tx: TenantTx,
+  ctx: AppContext,
+  row: ChangeOrderRow,
+  p: { isApproved: boolean; signedName: string | null; comment: string; clientName: string },
+): Promise<void> {
+  const firm = (await tx.client.query<{ name: string; country: string }>(`select name, country from firms where id = $1`, [tx.tenantId]))
+    .rows[0];
+  const job = (
+    await tx.client.query<{ title: string }>(`select title from jobs where tenant_id = $1 and id = $2`, [tx.tenantId, row.job_id])
+  ).rows[0];
+  const { rows: people } = await tx.client.query<{ id: string; email: string }>(
+    `select u.id, u.email from memberships m join users u on u.id = m.user_id
+      where m.tenant_id = $1 and m.status = 'active' and m.role in ('owner', 'office') order by u.id`,
+    [tx.tenantId],
+  );
+  const mail = changeOrderAnsweredMail({
+    firmName: firm.name,
+    clientName: p.clientName,
+    jobTitle: job.title,
+    number: row.number,
+    title: row.title,
+    isApproved: p.isApproved,
+    signedName: p.signedName,
+    amount: formatMoney(row.amount, row.currency, `en-${firm.country}`),
+    comment: p.comment,
+    url: `${ctx.config.PUBLIC_URL}/jobs/${row.job_id}`,
+  });
+  for (const person of people)
+    await enqueueMail(tx, ctx.queue, {
+      purposeKey: `change-order-answer:${row.id}:${person.id}`,
+      tenantId: tx.tenantId,
+      to: person.email,
+      ...mail,
+    });
+}
