@@ -23,6 +23,7 @@ import { portalProposalRoutes } from './proposals/portal-routes';
 import { jobRoutes } from './jobs/routes';
 import { changeOrderRoutes, jobChangeOrderRoutes } from './billing/change-orders/routes';
 import { portalChangeOrderRoutes } from './billing/change-orders/portal-routes';
+import { billingSettingsRoutes } from './billing/routes';
 import { progressRoutes } from './billing/progress-routes';
 import { sampleRoutes } from './samples/routes';
 import { portalSampleRoutes } from './samples/portal-routes';
@@ -75,6 +76,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/portal/proposals', portalProposalRoutes(ctx));
   router.use('/portal/change-orders', portalChangeOrderRoutes(ctx));
   router.use('/portal', portalAuthRoutes(ctx, limiter));
+  router.use('/firm/billing', billingSettingsRoutes(ctx));
   router.use('/firm', firmRoutes(ctx));
   router.use('/team', teamRoutes(ctx));
   router.use('/inquiries', inquiryRoutes(ctx));

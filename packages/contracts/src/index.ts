@@ -23,3 +23,4 @@ export * from './samples/samples';
 export * from './files/photo-fields';
 export * from './billing/progress';
 export * from './billing/change-orders';
+export * from './billing/settings';

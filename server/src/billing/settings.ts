@@ -1,10 +1,17 @@
-import { type BillingSettings, DEFAULT_BILLING_SETTINGS } from '@layerbook/contracts';
+import {
+  type BillingSettings,
+  type BillingSettingsView,
+  type BillingTerms,
+  type DepositCapSetting,
+  DEFAULT_BILLING_SETTINGS,
+} from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
+import { type DepositCapRule, depositCap, minorUnitDigits } from '@layerbook/domain';
+import Decimal from 'decimal.js';
+import { recordAudit } from '../audit/record';
+import type { Actor } from '../http/actor';
 
-/**
- * The firm's billing settings, or the defaults when the owner has not saved any.
- * OWNER: helper H2 (adds the view, the update and its routes beside this).
- */
+/** The firm's billing settings, or the defaults when the owner has not saved any. */
 export async function loadBillingSettings(tx: TenantTx): Promise<{ settings: BillingSettings; isDefault: boolean }> {
   const { rows } = await tx.client.query<{ settings: BillingSettings }>(`select settings from firm_billing_settings where tenant_id = $1`, [
     tx.tenantId,
@@ -12,4 +19,56 @@ export async function loadBillingSettings(tx: TenantTx): Promise<{ settings: Bil
   return rows[0]
     ? { settings: { ...DEFAULT_BILLING_SETTINGS, ...rows[0].settings }, isDefault: false }
     : { settings: DEFAULT_BILLING_SETTINGS, isDefault: true };
+}
+
+/** The settings' deposit limit as the domain takes it: whole percents become shares (10 → 0.1), in decimal. */
+export function toDepositCapRule(cap: DepositCapSetting): DepositCapRule {
+  switch (cap.kind) {
+    case 'none':
+      return { kind: 'none' };
+    case 'amount':
+      return { kind: 'amount', amount: cap.amount };
+    case 'share':
+      return { kind: 'share', share: new Decimal(cap.percent).div(100) };
+    case 'lesserOf':
+      return { kind: 'lesserOf', amount: cap.amount, share: new Decimal(cap.percent).div(100) };
+  }
+}
+
+/** GET /api/firm/billing */
+export async function getBillingSettings(tx: TenantTx): Promise<BillingSettingsView> {
+  const { settings, isDefault } = await loadBillingSettings(tx);
+  const { rows } = await tx.client.query<{ currency: string }>(`select currency from firms where id = $1`, [tx.tenantId]);
+  return { settings, isDefault, currency: rows[0].currency };
+}
+
+/** PUT /api/firm/billing: the owner's whole settings; running jobs keep the terms copied when their billing started. */
+export async function saveBillingSettings(tx: TenantTx, actor: Actor, settings: BillingSettings, now: Date): Promise<BillingSettingsView> {
+  await tx.client.query(
+    `insert into firm_billing_settings (tenant_id, settings, updated_at) values ($1, $2, $3)
+     on conflict (tenant_id) do update set settings = excluded.settings, updated_at = excluded.updated_at`,
+    [tx.tenantId, JSON.stringify(settings), now],
+  );
+  // Deposit limits and terms decide what clients are asked to pay: every change is kept.
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'firm.billing_settings_changed',
+    entity: 'firm',
+    entityId: tx.tenantId,
+    data: { settings },
+  });
+  return getBillingSettings(tx);
+}
+
+/** The firm's settings as a job keeps them (BillingTerms): the deposit cap in money for this contract sum. */
+export function billingTermsFor(settings: BillingSettings, contractSum: string, currency: string): BillingTerms {
+  const cap = depositCap(toDepositCapRule(settings.depositCap), contractSum, currency);
+  return {
+    depositCapName: settings.depositCapName,
+    depositCap: cap === null ? null : cap.toFixed(minorUnitDigits(currency)),
+    terms: settings.terms,
+    retainage: settings.retainage,
+    depositCredit: settings.depositCredit,
+  };
 }

@@ -1,6 +1,7 @@
-import type { EstimateStatus } from '@layerbook/contracts';
+import type { DepositCapSetting, EstimateStatus } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import type { Caution, LeadStatus } from '@layerbook/domain';
+import { loadBillingSettings } from '../billing/settings';
 import { conflict, notFound } from '../http/problem';
 
 /** The parts of a saved estimate result a proposal reads (Decimals were stored as strings). */
@@ -52,6 +53,8 @@ export interface ProposalSources {
   readonly site: { label: string; addressLines: string[]; yearBuilt: number | null };
   readonly roomNames: ReadonlyMap<string, { name: string; position: number }>;
   readonly finishNames: ReadonlyMap<string, string>;
+  /** the deposit limit the firm chose in its billing settings */
+  readonly depositCap: DepositCapSetting;
 }
 
 /** The address columns firms and sites share. */
@@ -158,6 +161,7 @@ export async function loadProposalSources(tx: TenantTx, estimateId: string): Pro
       systemIds,
     ])
   ).rows;
+  const billing = await loadBillingSettings(tx);
   return {
     estimate: {
       id: est.id,
@@ -180,5 +184,6 @@ export async function loadProposalSources(tx: TenantTx, estimateId: string): Pro
     site: { label: site.label, addressLines: addressLines(site), yearBuilt: site.year_built },
     roomNames: new Map(rooms.map((r, i) => [r.id, { name: r.name, position: i }])),
     finishNames: new Map(systems.map((s) => [s.id, s.name])),
+    depositCap: billing.settings.depositCap,
   };
 }

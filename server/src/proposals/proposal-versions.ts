@@ -12,6 +12,7 @@ import {
 import type { TenantTx } from '@layerbook/db';
 import { type DepositCapRule, DomainInputError } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
+import { toDepositCapRule } from '../billing/settings';
 import { localDate } from '../firms/local-date';
 import { badRequest, conflict, notFound } from '../http/problem';
 import { ACCEPTED_ESTIMATE_IS_READ_ONLY, assertEstimateOpen } from './estimates';
@@ -20,11 +21,11 @@ import { loadProposalSources, type ProposalSources } from './proposal-sources';
 import { snapshotHash } from './snapshot-hash';
 
 /**
- * The firm's limit on deposits. Jurisdiction rules (e.g. California's lesser of $1,000 or 10 %)
- * will come from firm settings; until then there is no cap, but every schedule passes through here.
+ * The firm's limit on deposits, as it chose it in its billing settings for its jurisdiction
+ * (e.g. California's lesser of $1,000 or 10 %; "none" is a choice). Every schedule passes through here.
  */
-export function depositCapRule(_sources: ProposalSources): DepositCapRule {
-  return { kind: 'none' };
+export function depositCapRule(sources: ProposalSources): DepositCapRule {
+  return toDepositCapRule(sources.depositCap);
 }
 
 const COLUMNS = `id, estimate_id, version, status, snapshot, snapshot_hash, expires_on::text as expires_on, sent_at, decided_at,
