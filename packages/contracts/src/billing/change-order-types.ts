@@ -57,6 +57,8 @@ export interface ChangeOrderEngineDetail {
 export interface ChangeOrderView extends ChangeOrderSummary {
   readonly description: string;
   readonly pricingKind: 'lumpSum' | 'engine';
+  /** how the office priced it (the lump sum, or the surfaces and finish), to change a draft */
+  readonly pricing: ChangeOrderPricing;
   readonly engine: ChangeOrderEngineDetail | null;
   readonly signedName: string | null;
   readonly clientComment: string;

@@ -60,7 +60,7 @@ describe('change orders for the office', () => {
     expect(up.contractSumAfter).toBe(new Decimal(contractSum).plus('1082.50').toFixed(2));
     const down = await addChangeOrder(f, lump('Leave out the hall', '-200.05'));
     // −200.05 × 8.25 % = −16.504125 → −16.50 (half away from zero)
-    expect(down).toMatchObject({ price: '-200.05', tax: '-16.50', amount: '-216.55' });
+    expect(down).toMatchObject({ price: '-200.05', tax: '-16.50', amount: '-216.55', pricing: { kind: 'lumpSum', price: '-200.05' } });
 
     const estimating = (await f.agent.get('/api/firm/estimating')).body.settings;
     await f.agent
@@ -98,6 +98,7 @@ describe('change orders for the office', () => {
     });
     expect(made).toMatchObject({
       pricingKind: 'engine',
+      pricing: { kind: 'engine', surfaceIds: [f.surfaceId], finishSystemId: f.simpleId },
       price: expected.price.price.toFixed(2),
       tax: expected.price.tax.toFixed(2),
       amount: expected.price.total.toFixed(2),

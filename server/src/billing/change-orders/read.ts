@@ -72,6 +72,10 @@ export function toView(r: ChangeOrderRow): ChangeOrderView {
     ...toSummary(r),
     description: r.description,
     pricingKind: r.pricing,
+    pricing:
+      r.pricing === 'lumpSum'
+        ? { kind: 'lumpSum', price: r.price }
+        : { kind: 'engine', surfaceIds: d.surfaceIds ?? [], finishSystemId: d.finishSystemId ?? '' },
     engine: d.engine ?? null,
     signedName: r.signed_name,
     clientComment: r.client_comment,
