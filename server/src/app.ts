@@ -21,6 +21,8 @@ import { estimateRoutes } from './proposals/routes';
 import { proposalRoutes } from './proposals/proposal-routes';
 import { portalProposalRoutes } from './proposals/portal-routes';
 import { jobRoutes } from './jobs/routes';
+import { billingPdfRoutes } from './billing/pdf-routes';
+import { portalBillingRoutes } from './billing/portal-routes';
 import { changeOrderRoutes, jobChangeOrderRoutes } from './billing/change-orders/routes';
 import { portalChangeOrderRoutes } from './billing/change-orders/portal-routes';
 import { billingSettingsRoutes } from './billing/routes';
@@ -75,6 +77,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/portal/boards', portalSampleRoutes(ctx));
   router.use('/portal/proposals', portalProposalRoutes(ctx));
   router.use('/portal/change-orders', portalChangeOrderRoutes(ctx));
+  router.use('/portal', portalBillingRoutes(ctx));
   router.use('/portal', portalAuthRoutes(ctx, limiter));
   router.use('/firm/billing', billingSettingsRoutes(ctx));
   router.use('/firm', firmRoutes(ctx));
@@ -91,6 +94,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/jobs/:id/change-orders', jobChangeOrderRoutes(ctx));
   router.use('/change-orders', changeOrderRoutes(ctx));
   router.use('/jobs', progressRoutes(ctx));
+  router.use(billingPdfRoutes(ctx));
   router.use('/samples', sampleRoutes(ctx));
   router.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
