@@ -5,3 +5,5 @@
 export * from './settings';
 export * from './assemble';
 export { paymentLabel } from '@layerbook/domain';
+// Billing in the browser: a progress line's work to date as % or amount, money compared or added exactly, days overdue.
+export { DomainInputError, daysBetween, minorUnitDigits, roundToCurrency, roundsToZero, sumMoney, valueLineWork } from '@layerbook/domain';

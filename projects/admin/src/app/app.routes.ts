@@ -36,9 +36,8 @@ export const routes: Routes = [
       },
       {
         path: 'billing',
-        title: 'Billing · Layerbook',
         canActivate: [roleGuard('office')],
-        loadComponent: () => import('./features/billing/billing').then((m) => m.Billing),
+        loadChildren: () => import('./features/billing/billing.routes'),
       },
       {
         path: 'cash',
@@ -63,6 +62,12 @@ export const routes: Routes = [
         path: 'team',
         title: 'Team · Layerbook',
         loadComponent: () => import('./features/team/team').then((m) => m.Team),
+      },
+      {
+        path: 'settings/billing',
+        title: 'Billing settings · Layerbook',
+        canActivate: [roleGuard('office')],
+        loadComponent: () => import('./features/firms/billing-settings').then((m) => m.BillingSettingsPage),
       },
       {
         path: 'settings',

@@ -1,0 +1,95 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { ApplicationRef } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import { provideRouter } from '@angular/router';
+import type { InvoiceDetail } from '@layerbook/contracts/types';
+import { afterEach, describe, expect, it } from 'vitest';
+import { InvoiceDetailPage } from './invoice-detail';
+import { issuedSummary, progressDraft } from './invoice-fixtures';
+
+async function render(invoice: InvoiceDetail) {
+  TestBed.configureTestingModule({
+    providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([]), provideNoopAnimations()],
+  });
+  const fixture = TestBed.createComponent(InvoiceDetailPage);
+  fixture.componentRef.setInput('id', invoice.id);
+  TestBed.inject(ApplicationRef).tick();
+  const http = TestBed.inject(HttpTestingController);
+  http.expectOne(`/api/invoices/${invoice.id}`).flush(invoice);
+  await fixture.whenStable();
+  fixture.detectChanges();
+  const html = fixture.nativeElement as HTMLElement;
+  return { fixture, html, http, text: () => html.textContent ?? '' };
+}
+
+const buttons = (html: HTMLElement): string[] =>
+  [...html.querySelectorAll('button, a[mat-stroked-button]')].map((b) => (b.textContent ?? '').trim());
+
+describe('the invoice page', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('shows a queue-drafted progress draft for review: what drafted it, the work as an amount to date, Issue and Delete', async () => {
+    const { html, text } = await render(progressDraft);
+    expect(html.querySelector('h1')?.textContent).toBe('Draft — not sent');
+    expect(text()).toContain('Drafted by the schedule when Base coat finished on every surface on 2026-11-28');
+    expect(buttons(html)).toEqual(expect.arrayContaining([expect.stringContaining('Issue…'), expect.stringContaining('Delete draft')]));
+    expect(buttons(html).some((b) => b.includes('Record a payment'))).toBe(false);
+    const work = html.querySelector<HTMLInputElement>('input[aria-label="Amount done to date for Walls, base coat"]');
+    expect(work?.value).toBe('3500.00');
+    expect(text()).toContain('Due this period');
+    expect(text()).toContain('10 % of work, 10 % of stored materials');
+  });
+
+  it('says beside the field why work to date cannot go below what was billed, and sends nothing', async () => {
+    const { fixture, html, http } = await render(progressDraft);
+    const work = html.querySelector<HTMLInputElement>('input[aria-label="Amount done to date for Walls, base coat"]')!;
+    work.value = '1500';
+    work.dispatchEvent(new Event('input'));
+    work.dispatchEvent(new Event('blur'));
+    html.querySelector<HTMLFormElement>('form[aria-labelledby="progress-heading"]')!.dispatchEvent(new Event('submit'));
+    fixture.detectChanges();
+    expect(html.querySelector('mat-error')?.textContent).toContain('is less than the 2000.00 already billed');
+    http.expectNone({ method: 'PATCH' });
+  });
+
+  it('saves the progress as the API takes it', async () => {
+    const { fixture, html, http } = await render(progressDraft);
+    const work = html.querySelector<HTMLInputElement>('input[aria-label="Amount done to date for Walls, base coat"]')!;
+    work.value = '5,000';
+    work.dispatchEvent(new Event('input'));
+    fixture.detectChanges();
+    expect(html.textContent).toContain('$3,000.00'); // this period: 5,000 to date − 2,000 billed before
+    html.querySelector<HTMLFormElement>('form[aria-labelledby="progress-heading"]')!.dispatchEvent(new Event('submit'));
+    const patch = http.expectOne({ method: 'PATCH', url: '/api/invoices/inv-2' });
+    expect(patch.request.body).toEqual({
+      periodEnd: '2026-11-30',
+      progressLines: [{ valueLineId: 'vl-1', workToDate: { amount: '5000' }, storedMaterials: '0.00' }],
+    });
+    patch.flush(progressDraft);
+  });
+
+  it('offers the PDF, a payment and Void on an open invoice, and says overdue in words', async () => {
+    const issued: InvoiceDetail = {
+      ...progressDraft,
+      ...issuedSummary,
+      progress: null,
+      lines: [{ label: 'Stage payment', amount: '4200.00' }],
+    };
+    const { html, text } = await render(issued);
+    expect(html.querySelector('h1')?.textContent).toBe('INV-0007');
+    expect(html.querySelector('.status')?.textContent).toContain('Overdue');
+    expect(html.querySelector('.status mat-icon')?.textContent).toBe('alarm');
+    expect(html.querySelector<HTMLAnchorElement>('a[href="/api/invoices/inv-1/pdf"]')).not.toBeNull();
+    expect(buttons(html)).toEqual(expect.arrayContaining([expect.stringContaining('Record a payment'), expect.stringContaining('Void…')]));
+    expect(text()).not.toContain('Drafted by the schedule');
+  });
+
+  it('does not offer Void once money came in', async () => {
+    const partPaid: InvoiceDetail = { ...progressDraft, ...issuedSummary, status: 'part_paid', amountPaid: '200.00', progress: null };
+    const { html, text } = await render(partPaid);
+    expect(buttons(html).some((b) => b.includes('Void'))).toBe(false);
+    expect(text()).toContain('To void it, refund the payments first.');
+  });
+});

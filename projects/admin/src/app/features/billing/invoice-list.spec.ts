@@ -1,0 +1,52 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { ApplicationRef } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import { afterEach, describe, expect, it } from 'vitest';
+import { issuedSummary } from './invoice-fixtures';
+import { InvoiceList } from './invoice-list';
+
+const draft = { ...issuedSummary, id: 'inv-2', number: null, status: 'draft' as const, isOverdue: false, origin: 'queue' as const };
+
+async function render(hasDrafts: boolean) {
+  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])] });
+  const fixture = TestBed.createComponent(InvoiceList);
+  TestBed.inject(ApplicationRef).tick();
+  const http = TestBed.inject(HttpTestingController);
+  http.expectOne('/api/invoices?filter=all&limit=50').flush({ items: [issuedSummary, draft], nextCursor: 'c1' });
+  http.expectOne('/api/invoices?filter=drafts&limit=1').flush({ items: hasDrafts ? [draft] : [], nextCursor: null });
+  await fixture.whenStable();
+  fixture.detectChanges();
+  return { html: fixture.nativeElement as HTMLElement, http };
+}
+
+describe('the invoice list', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('leads with "To review" while drafts wait', async () => {
+    const chips = async (hasDrafts: boolean) =>
+      [...(await render(hasDrafts)).html.querySelectorAll('mat-chip-option')].map((c) => c.textContent?.trim());
+    expect(await chips(true)).toEqual(['To review', 'All', 'Open', 'Overdue', 'Paid', 'Void']);
+    TestBed.resetTestingModule();
+    expect(await chips(false)).toEqual(['All', 'To review', 'Open', 'Overdue', 'Paid', 'Void']);
+  });
+
+  it('shows numbers or "Draft", overdue in words with an icon, in a named keyboard-reachable region, and offers more', async () => {
+    const { html } = await render(true);
+    const region = html.querySelector('.table-wrap');
+    expect(region?.getAttribute('role')).toBe('region');
+    expect(region?.getAttribute('tabindex')).toBe('0');
+    expect(region?.getAttribute('aria-label')).toBe('Invoices');
+    const rows = [...html.querySelectorAll('tbody tr')].map((r) => r.textContent?.replace(/\s+/g, ' ').trim());
+    expect(rows[0]).toContain('INV-0007');
+    expect(rows[0]).toContain('alarmOverdue');
+    expect(rows[0]).toContain('Stage payment');
+    expect(rows[0]).toContain('$4,200.00');
+    expect(rows[1]).toContain('Draft');
+    expect(rows[1]).toContain('Drafted by the schedule');
+    expect(html.querySelector('a[href="/billing/invoices/inv-1"]')).not.toBeNull();
+    expect(html.querySelectorAll('.cards li').length).toBe(2);
+    expect([...html.querySelectorAll('button')].map((b) => b.textContent?.trim())).toContain('Show more invoices');
+  });
+});

@@ -1,0 +1,55 @@
+import { describe, expect, it } from 'vitest';
+import { filterOrder, invoiceNumber, invoiceStatus, kindWord, retainageWords, takesPayments } from './invoice-words';
+
+describe('invoice words', () => {
+  it.each([
+    [{ status: 'draft', isOverdue: false }, 'Draft — not sent', 'edit_note'],
+    [{ status: 'issued', isOverdue: false }, 'Open', 'schedule'],
+    [{ status: 'issued', isOverdue: true }, 'Overdue', 'alarm'],
+    [{ status: 'part_paid', isOverdue: false }, 'Part paid', 'hourglass_bottom'],
+    [{ status: 'part_paid', isOverdue: true }, 'Overdue — part paid', 'alarm'],
+    [{ status: 'paid', isOverdue: false }, 'Paid', 'task_alt'],
+    // a paid or void invoice is never overdue, whatever the flag says
+    [{ status: 'paid', isOverdue: true }, 'Paid', 'task_alt'],
+    [{ status: 'void', isOverdue: true }, 'Void', 'block'],
+  ] as const)('%o reads "%s" with the %s icon', (invoice, word, icon) => {
+    const look = invoiceStatus(invoice);
+    expect(look.word).toBe(word);
+    expect(look.icon).toBe(icon);
+    expect(look.isOverdue).toBe(icon === 'alarm');
+  });
+
+  it('names kinds in our words', () => {
+    expect(kindWord('milestone')).toBe('Stage payment');
+    expect(kindWord('retainage')).toBe('Retainage release');
+  });
+
+  it('shows "Draft" until a number is taken', () => {
+    expect(invoiceNumber({ number: null })).toBe('Draft');
+    expect(invoiceNumber({ number: 'INV-0007' })).toBe('INV-0007');
+  });
+
+  it('puts "To review" first only while there are drafts', () => {
+    expect(filterOrder(true)).toEqual(['drafts', 'all', 'open', 'overdue', 'paid', 'void']);
+    expect(filterOrder(false)).toEqual(['all', 'drafts', 'open', 'overdue', 'paid', 'void']);
+  });
+
+  it('takes payments only on open invoices', () => {
+    expect(['draft', 'issued', 'part_paid', 'paid', 'void'].map((s) => takesPayments(s as never))).toEqual([
+      false,
+      true,
+      true,
+      false,
+      false,
+    ]);
+  });
+
+  it('says the retainage rates in words', () => {
+    expect(retainageWords({ workPercent: 10, storedPercent: 5, stopAtPercentComplete: null })).toBe(
+      '10 % of work, 5 % of stored materials',
+    );
+    expect(retainageWords({ workPercent: 10, storedPercent: 10, stopAtPercentComplete: 50 })).toBe(
+      '10 % of work, 10 % of stored materials, until 50 % complete',
+    );
+  });
+});

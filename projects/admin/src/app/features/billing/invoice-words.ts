@@ -1,0 +1,61 @@
+import {
+  INVOICE_KIND_LABELS,
+  INVOICE_LIST_FILTERS,
+  INVOICE_STATUS_LABELS,
+  type InvoiceKind,
+  type InvoiceListFilter,
+  type InvoiceStatus,
+  type InvoiceSummary,
+  type PaymentView,
+  type ProgressTable,
+} from '@layerbook/contracts/types';
+
+export interface StatusLook {
+  readonly word: string;
+  /** an icon beside the word, so a status never reads by colour alone */
+  readonly icon: string;
+  readonly isOverdue: boolean;
+}
+
+const STATUS_ICONS: Readonly<Record<InvoiceStatus, string>> = {
+  draft: 'edit_note',
+  issued: 'schedule',
+  part_paid: 'hourglass_bottom',
+  paid: 'task_alt',
+  void: 'block',
+};
+
+/** An invoice's status in words with its icon; an overdue one says so first ("Overdue — part paid"). */
+export function invoiceStatus(invoice: Pick<InvoiceSummary, 'status' | 'isOverdue'>): StatusLook {
+  const isOverdue = invoice.isOverdue && (invoice.status === 'issued' || invoice.status === 'part_paid');
+  if (isOverdue) {
+    return { word: invoice.status === 'part_paid' ? 'Overdue — part paid' : 'Overdue', icon: 'alarm', isOverdue };
+  }
+  return { word: INVOICE_STATUS_LABELS[invoice.status], icon: STATUS_ICONS[invoice.status], isOverdue };
+}
+
+export const kindWord = (kind: InvoiceKind): string => INVOICE_KIND_LABELS[kind];
+
+/** The invoice's number, or "Draft" while it has none (a number is taken only at issue). */
+export const invoiceNumber = (invoice: Pick<InvoiceSummary, 'number'>): string => invoice.number ?? 'Draft';
+
+/** The list's filter chips: "To review" leads while drafts wait for someone, otherwise the usual order. */
+export function filterOrder(hasDrafts: boolean): readonly InvoiceListFilter[] {
+  return hasDrafts ? ['drafts', ...INVOICE_LIST_FILTERS.filter((f) => f !== 'drafts')] : INVOICE_LIST_FILTERS;
+}
+
+/** Whether payments may be recorded against the invoice (issued and not settled or voided). */
+export const takesPayments = (status: InvoiceStatus): boolean => status === 'issued' || status === 'part_paid';
+
+/** "10 % of work, 5 % of stored materials, until 50 % complete" */
+export function retainageWords(rates: ProgressTable['retainageRates']): string {
+  const words = `${rates.workPercent} % of work, ${rates.storedPercent} % of stored materials`;
+  return rates.stopAtPercentComplete === null ? words : `${words}, until ${rates.stopAtPercentComplete} % complete`;
+}
+
+export const PAYMENT_METHOD_LABELS: Readonly<Record<PaymentView['method'], string>> = {
+  card: 'Card',
+  cheque: 'Cheque',
+  transfer: 'Bank transfer',
+  cash: 'Cash',
+};

@@ -1,0 +1,67 @@
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { INVOICE_LIMITS, type InvoiceDetail } from '@layerbook/contracts/types';
+import { errorText } from '../../shared/forms/error-text';
+import { Submission } from '../../shared/forms/submission';
+import { requiredText } from '../../shared/forms/text-validators';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { InvoiceApi } from './invoice-api';
+
+export interface VoidDialogData {
+  readonly invoice: InvoiceDetail;
+}
+
+/** Voids an issued invoice with a reason; a numbered credit note cancels it. Closes with the voided invoice, or nothing. */
+@Component({
+  selector: 'lb-void-dialog',
+  imports: [FormAlert, MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, MoneyPipe, ReactiveFormsModule],
+  template: `
+    <h2 mat-dialog-title>Void {{ data.invoice.number }}?</h2>
+    <form [formGroup]="form" (ngSubmit)="voidInvoice()" novalidate>
+      <mat-dialog-content>
+        <lb-form-alert [message]="submission.message()" />
+        <p>
+          A credit note for {{ data.invoice.total | money: data.invoice.currency }} cancels it, with the next credit note number. The
+          invoice keeps its number and stays on record as void.
+        </p>
+        <mat-form-field class="lb-full">
+          <mat-label>Why it is voided</mat-label>
+          <textarea matInput formControlName="reason" rows="3" required cdkFocusInitial></textarea>
+          <mat-hint>Printed on the credit note, like “billed twice” or “wrong amount”.</mat-hint>
+          <mat-error>{{ errorText(form.controls.reason, words) }}</mat-error>
+        </mat-form-field>
+      </mat-dialog-content>
+      <mat-dialog-actions align="end">
+        <button mat-button type="button" [mat-dialog-close]="undefined" [disabled]="submission.isBusy()">Cancel</button>
+        <button mat-flat-button type="submit" [disabled]="submission.isBusy()">Void and make a credit note</button>
+      </mat-dialog-actions>
+    </form>
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class VoidDialog {
+  protected readonly data = inject<VoidDialogData>(MAT_DIALOG_DATA);
+  private readonly ref = inject<MatDialogRef<VoidDialog, InvoiceDetail>>(MatDialogRef);
+  private readonly api = inject(InvoiceApi);
+
+  protected readonly submission = new Submission();
+  protected readonly errorText = errorText;
+  protected readonly words = {
+    required: 'Say why it is voided; the client reads it on the credit note.',
+    maxlength: `Use at most ${INVOICE_LIMITS.reasonMaxLength} characters.`,
+  };
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    reason: ['', [requiredText, Validators.maxLength(INVOICE_LIMITS.reasonMaxLength)]],
+  });
+
+  protected async voidInvoice(): Promise<void> {
+    const reason = this.form.controls.reason.value.trim();
+    const voided = await this.submission.send(this.form, () => this.api.void(this.data.invoice.id, { reason }));
+    if (voided) this.ref.close(voided);
+  }
+}
