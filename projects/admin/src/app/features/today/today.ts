@@ -10,18 +10,19 @@ import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LIKELY_WORK_WORDS } from '../inquiries/stage-odds';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { TodayMoney } from './today-money';
 
-/** What needs the office today: follow-ups that are late or due, and where the pipeline stands. */
+/** What needs the office today: follow-ups that are late or due, where the pipeline stands, and the money to bill and collect. */
 @Component({
   selector: 'lb-today',
-  imports: [CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
+  imports: [CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink, TodayMoney],
   templateUrl: './today.html',
   styleUrl: './today.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class Today {
   protected readonly words = LIKELY_WORK_WORDS;
-  /** Crew never see money figures, and the server refuses them this view anyway. */
+  /** Crew never see money figures (the pipeline, Today's money), and the server refuses them those views anyway. */
   protected readonly seesInquiries = inject(Session).hasRole('office');
   protected readonly summary = httpResource<TodayView>(() => (this.seesInquiries ? '/api/inquiries/today' : undefined));
   protected readonly view = computed(() => (this.summary.hasValue() ? this.summary.value() : null));

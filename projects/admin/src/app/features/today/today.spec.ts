@@ -1,0 +1,101 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { ApplicationRef } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import type { BillingToday, InvoiceSummary, StaffRole, TodayView } from '@layerbook/contracts/types';
+import { afterEach, describe, expect, it } from 'vitest';
+import { Session } from '../../core/auth/session';
+import { Today } from './today';
+
+const overdueInvoice: InvoiceSummary = {
+  id: 'inv-1',
+  number: 'INV-0007',
+  kind: 'milestone',
+  status: 'issued',
+  isOverdue: true,
+  jobId: 'job-1',
+  jobTitle: 'Hall in lime plaster',
+  clientId: 'client-1',
+  clientName: 'Ada Ward',
+  issuedOn: '2026-11-06',
+  dueOn: '2026-11-20',
+  currency: 'USD',
+  total: '4200.00',
+  amountDue: '4200.00',
+  origin: 'office',
+  createdAt: '2026-11-06T10:00:00.000Z',
+};
+const money: BillingToday = {
+  readyToBill: [{ ...overdueInvoice, id: 'inv-2', number: null, status: 'draft', isOverdue: false, kind: 'deposit', origin: 'queue' }],
+  overdue: [overdueInvoice],
+  changeOrdersWaiting: [
+    {
+      id: 'co-1',
+      jobId: 'job-1',
+      jobTitle: 'Hall in lime plaster',
+      number: 2,
+      title: 'Stair wall',
+      amount: '860.00',
+      currency: 'USD',
+      sentAt: '2026-11-30T09:00:00.000Z',
+    },
+  ],
+};
+const inquiries: TodayView = {
+  localDate: '2026-12-02',
+  overdue: [],
+  dueToday: [],
+  pipeline: { unweighted: '0.00', weighted: '0.00', openCount: 0, currency: 'USD' },
+};
+
+function render(role: StaffRole): { text: () => string; html: () => HTMLElement; http: HttpTestingController } {
+  TestBed.configureTestingModule({
+    providers: [
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      provideRouter([]),
+      { provide: Session, useValue: { hasRole: (needed: StaffRole) => needed === 'crew' || role !== 'crew' } },
+    ],
+  });
+  const fixture = TestBed.createComponent(Today);
+  // Resources send their requests on the next change detection; whenStable would wait for their answers.
+  TestBed.inject(ApplicationRef).tick();
+  const html = (): HTMLElement => fixture.nativeElement as HTMLElement;
+  return { text: () => html().textContent ?? '', html, http: TestBed.inject(HttpTestingController) };
+}
+
+async function settle(): Promise<void> {
+  TestBed.inject(ApplicationRef).tick();
+  await TestBed.inject(ApplicationRef).whenStable();
+}
+
+describe('Today', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('never asks for money for the crew', () => {
+    const { text, http } = render('crew');
+    http.expectNone('/api/billing/today');
+    http.expectNone('/api/inquiries/today');
+    expect(text()).toContain('Your job sheets');
+    expect(text()).not.toContain('Money');
+  });
+
+  it('shows the office what to bill, what is overdue in days and the change orders waiting', async () => {
+    const { text, html, http } = render('office');
+    http.expectOne('/api/inquiries/today').flush(inquiries);
+    http.expectOne('/api/billing/today').flush(money);
+    await settle();
+    expect(text()).toContain('Ready to bill (1)');
+    expect(text()).toContain('Deposit for Ada Ward');
+    expect(text()).toContain('12 days overdue');
+    expect(text()).toContain('Change order 2: Stair wall');
+    const links = [...html().querySelectorAll('a')].map((a) => a.getAttribute('href'));
+    expect(links).toContain('/billing/invoices/inv-2');
+    expect(links).toContain('/billing/invoices/inv-1');
+    // overdue is said in words with an icon, never by colour alone
+    const flag = html().querySelector('.flag');
+    expect(flag?.querySelector('mat-icon')?.textContent).toContain('alarm');
+    expect(flag?.textContent).toContain('overdue');
+  });
+});
