@@ -55,6 +55,8 @@ export interface ChangeOrderEngineDetail {
 }
 
 export interface ChangeOrderView extends ChangeOrderSummary {
+  /** the job it changes, for the reader */
+  readonly jobTitle: string;
   readonly description: string;
   readonly pricingKind: 'lumpSum' | 'engine';
   /** how the office priced it (the lump sum, or the surfaces and finish), to change a draft */

@@ -45,6 +45,8 @@ export const routes: Routes = [
         title: 'Proposal · Layerbook client portal',
         loadComponent: () => import('./features/proposals/proposal-page').then((m) => m.ProposalPage),
       },
+      // The client's billing: change orders to approve (and invoices, statements).
+      { path: '', loadChildren: () => import('./features/billing/billing.routes') },
     ],
   },
   {

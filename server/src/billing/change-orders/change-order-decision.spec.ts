@@ -28,6 +28,7 @@ describe('change orders in the portal', () => {
     expect(read.status).toBe(200);
     expect(read.body).toMatchObject({
       number: 1,
+      jobTitle: 'Dining room plaster',
       status: 'sent',
       amount: '1082.50',
       contractSumBefore: before.contract_sum,

@@ -25,11 +25,12 @@ export interface ChangeOrderRow {
   currency: string;
   contract_sum: string;
   client_id: string;
+  job_title: string;
 }
 
 const COLUMNS = `co.id, co.job_id, co.number, co.title, co.description, co.pricing, co.price::text as price, co.tax::text as tax,
   co.amount::text as amount, co.detail, co.status, co.sent_at, co.decided_at, co.signed_name, co.client_comment,
-  j.currency, j.contract_sum::text as contract_sum, j.client_id`;
+  j.currency, j.contract_sum::text as contract_sum, j.client_id, j.title as job_title`;
 const FROM = `from change_orders co join jobs j on j.tenant_id = co.tenant_id and j.id = co.job_id`;
 
 /** One change order of this firm (optionally locked with its job), or 404. */
@@ -70,6 +71,7 @@ export function toView(r: ChangeOrderRow): ChangeOrderView {
   const after = isFrozen ? new Decimal(d.contractSumAfter) : before.plus(r.amount);
   return {
     ...toSummary(r),
+    jobTitle: r.job_title,
     description: r.description,
     pricingKind: r.pricing,
     pricing:

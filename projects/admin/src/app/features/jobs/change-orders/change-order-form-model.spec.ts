@@ -31,6 +31,7 @@ function draft(over: Partial<ChangeOrderView>): ChangeOrderView {
     clientComment: '',
     contractSumBefore: '10000.00',
     contractSumAfter: '11082.50',
+    jobTitle: 'Dining room plaster',
     taxNote: null,
     ...over,
   };

@@ -1,0 +1,178 @@
+import { DOCUMENT } from '@angular/common';
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, RESPONSE_INIT, computed, effect, inject, input } from '@angular/core';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { Title } from '@angular/platform-browser';
+import { RouterLink } from '@angular/router';
+import type { PortalChangeOrder } from '@layerbook/contracts/types';
+import { problemMessage, toProblem } from '../../core/errors/problem';
+import { formatMoment, formatMoney } from '../../shared/format/money';
+import { changeOrderUrl } from './change-order-api';
+import { ChangeOrderDecisionForm } from './change-order-decision-form';
+import { contractChangeWords } from './change-order-words';
+
+/** One change order the firm sent: what changes, what it costs, the contract sum before and after; approve or decline. */
+@Component({
+  selector: 'lb-change-order-page',
+  imports: [ChangeOrderDecisionForm, MatIconModule, MatProgressBarModule, RouterLink],
+  template: `
+    @if (isLoading()) {
+      <mat-progress-bar mode="indeterminate" aria-label="Loading the change order" />
+    } @else if (loadMessage(); as message) {
+      <p class="lb-form-alert" role="alert">
+        <mat-icon aria-hidden="true">error</mat-icon><span>{{ message }}</span>
+      </p>
+      <p><a routerLink="/projects">Back to your projects</a></p>
+    } @else if (changeOrder(); as co) {
+      <h1>Change order #{{ co.number }}: {{ co.title }}</h1>
+      <p class="meta">For {{ co.jobTitle }}</p>
+
+      @if (co.status === 'approved') {
+        <div class="lb-success" role="status">
+          <mat-icon aria-hidden="true">verified</mat-icon>
+          <p>Approved by {{ co.signedName }} on {{ moment(co.decidedAt) }}.</p>
+        </div>
+      } @else if (co.status === 'declined') {
+        <div class="lb-notice" role="status">
+          <mat-icon aria-hidden="true">do_not_disturb_on</mat-icon>
+          <p>
+            You declined this change on {{ moment(co.decidedAt) }}; nothing about your job changed.
+            @if (co.clientComment) {
+              You wrote: “{{ co.clientComment }}”
+            }
+          </p>
+        </div>
+      } @else {
+        <p class="lb-lead">Read the change below. Nothing changes until you approve it.</p>
+      }
+
+      @if (co.description) {
+        <p class="description">{{ co.description }}</p>
+      }
+      @if (co.engine; as e) {
+        <h2 id="co-work-heading">The work</h2>
+        <p>{{ e.finishName }} on:</p>
+        <ul aria-labelledby="co-work-heading">
+          @for (s of e.surfaces; track $index) {
+            <li>{{ s.room }} · {{ s.surface }}: {{ s.quantity }}</li>
+          }
+        </ul>
+        <p class="meta">
+          About {{ e.labourHours }} crew-hours over {{ e.workingDays }} working {{ e.workingDays === 1 ? 'day' : 'days' }}.
+        </p>
+      }
+
+      <h2 id="co-price-heading">The price</h2>
+      <dl class="figures" aria-labelledby="co-price-heading">
+        <dt>Price</dt>
+        <dd>{{ money(co.price, co.currency) }}</dd>
+        <dt>Tax</dt>
+        <dd>{{ money(co.tax, co.currency) }}</dd>
+        <dt>Change to your contract</dt>
+        <dd class="total">{{ money(co.amount, co.currency) }}</dd>
+        <dt>Contract sum</dt>
+        <dd>{{ money(co.contractSumBefore, co.currency) }} → {{ money(co.contractSumAfter, co.currency) }}</dd>
+      </dl>
+      @if (co.taxNote) {
+        <p class="meta">{{ co.taxNote }}</p>
+      }
+      <p>{{ sumWords() }}</p>
+
+      @if (co.status === 'sent') {
+        <section class="answer" aria-label="Your answer">
+          <lb-change-order-decision [changeOrder]="co" (decided)="show($event)" />
+        </section>
+      }
+    }
+  `,
+  styles: `
+    h1 {
+      margin: 0;
+    }
+    .meta {
+      color: var(--mat-sys-on-surface-variant);
+      margin: 0.25rem 0 1rem;
+    }
+    .description {
+      white-space: pre-line;
+    }
+    .figures {
+      display: grid;
+      grid-template-columns: max-content auto;
+      gap: 0.35rem 1.5rem;
+      max-width: 32rem;
+    }
+    .figures dt {
+      color: var(--mat-sys-on-surface-variant);
+    }
+    .figures dd {
+      margin: 0;
+      font-variant-numeric: tabular-nums;
+    }
+    .total {
+      font-weight: 600;
+    }
+    .answer {
+      margin: 2rem 0 0;
+      padding: 1.25rem;
+      border-radius: 12px;
+      border: 1px solid var(--mat-sys-outline-variant);
+      background: var(--mat-sys-surface-container-low);
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ChangeOrderPage {
+  private readonly title = inject(Title);
+  private readonly response = inject(RESPONSE_INIT, { optional: true });
+  private readonly document = inject(DOCUMENT);
+  private readonly locale = inject(LOCALE_ID);
+
+  /** route parameter */
+  readonly id = input.required<string>();
+
+  private readonly loaded = httpResource<PortalChangeOrder>(() => changeOrderUrl(this.id()));
+
+  protected readonly changeOrder = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
+  protected readonly isLoading = this.loaded.isLoading;
+  /** 404 and a malformed id read the same: the link is wrong, or the change order is not theirs. */
+  private readonly isMissing = computed(() => {
+    const error = this.loaded.error();
+    return error !== undefined && [400, 404].includes(toProblem(error).status);
+  });
+  protected readonly loadMessage = computed(() => {
+    const error = this.loaded.error();
+    if (!error) return null;
+    return this.isMissing() ? 'We could not find this change order. Open it from the e-mail the firm sent.' : problemMessage(error);
+  });
+  protected readonly sumWords = computed(() => {
+    const co = this.changeOrder();
+    return co ? contractChangeWords(co, this.locale) : '';
+  });
+
+  constructor() {
+    effect(() => {
+      const co = this.changeOrder();
+      if (co) this.title.setTitle(`Change order #${co.number}: ${co.title} · Layerbook client portal`);
+    });
+    // Tells crawlers and the host's logs the truth while rendering on the server.
+    effect(() => {
+      if (this.isMissing() && this.response) this.response.status = 404;
+    });
+  }
+
+  protected money(amount: string, currency: string): string {
+    return formatMoney(amount, currency, this.locale);
+  }
+
+  protected moment(iso: string | null): string {
+    return iso ? formatMoment(iso, this.locale) : '';
+  }
+
+  /** After an answer the form goes away; bring the reader back to the message at the top. */
+  protected show(answer: PortalChangeOrder): void {
+    this.loaded.set(answer);
+    this.document.querySelector('h1')?.scrollIntoView();
+  }
+}
