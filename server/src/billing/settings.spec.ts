@@ -94,5 +94,7 @@ describe('firm billing settings', () => {
     const fivePercent = roundToCurrency(new Decimal(option.total).times('0.05'), 'USD').toFixed(2);
     expect(option.isDepositCapped).toBe(true);
     expect(deposit.amount).toBe(fivePercent);
+    // the rule is named where the client reads the schedule (snapshot → portal page and PDF)
+    expect((made.body as ProposalVersionView).snapshot.depositRule).toBe('Five percent');
   });
 });

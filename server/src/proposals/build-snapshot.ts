@@ -132,6 +132,7 @@ export function buildSnapshot(src: ProposalSources, choice: ProposalChoice): Pro
     exclusions: [...choice.exclusions],
     notes: choice.notes,
     terms: choice.terms,
+    depositRule: src.depositCapName,
     safety: { standing: STANDING_LINE, cautions: safetyNotes(src.estimate.variants, src.firm.country) },
     // A pre-1978 home carries the notice whatever the options disturb; an unknown year does once paint is disturbed.
     leadNotice: leadNotice(

@@ -55,6 +55,8 @@ export interface ProposalSources {
   readonly finishNames: ReadonlyMap<string, string>;
   /** the deposit limit the firm chose in its billing settings */
   readonly depositCap: DepositCapSetting;
+  /** that limit's name, as the firm wants it printed */
+  readonly depositCapName: string;
 }
 
 /** The address columns firms and sites share. */
@@ -185,5 +187,6 @@ export async function loadProposalSources(tx: TenantTx, estimateId: string): Pro
     roomNames: new Map(rooms.map((r, i) => [r.id, { name: r.name, position: i }])),
     finishNames: new Map(systems.map((s) => [s.id, s.name])),
     depositCap: billing.settings.depositCap,
+    depositCapName: billing.settings.depositCapName,
   };
 }

@@ -23,6 +23,8 @@ export interface ProposalSnapshot {
   readonly exclusions: readonly string[];
   readonly notes: string;
   readonly terms: ProposalTerms;
+  /** the deposit rule the firm chose for its jurisdiction, by name ("No deposit limit" too); absent from older snapshots */
+  readonly depositRule?: string;
   readonly safety: { readonly standing: string; readonly cautions: readonly SnapshotCaution[] };
   /**
    * The lead-safe notice of a home built before 1978, or of one whose year is unknown while the

@@ -113,4 +113,5 @@ export function scheduleAndPaymentsSection(doc: Doc, s: ProposalSnapshot, f: For
     subHeading(doc, s.options.length === 1 ? 'Payment schedule' : `${o.label}: payment schedule`);
     paymentsOf(doc, o, f);
   }
+  if (s.depositRule) paragraph(doc, `Deposit rule: ${s.depositRule}.`, 'italic', COLOURS.ochre, 9);
 }
