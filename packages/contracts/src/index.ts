@@ -24,3 +24,5 @@ export * from './files/photo-fields';
 export * from './billing/progress';
 export * from './billing/change-orders';
 export * from './billing/settings';
+export * from './billing/schedule';
+export * from './billing/invoices';

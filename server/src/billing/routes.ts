@@ -1,10 +1,32 @@
-import { billingSettings, type BillingSettingsView } from '@layerbook/contracts';
+import {
+  billingSettings,
+  invoiceDraftUpdate,
+  invoiceIssue,
+  invoiceListQuery,
+  invoiceVoid,
+  offlinePaymentCreate,
+  uuid,
+  type BillingSettingsView,
+  type BillingToday,
+  type InvoiceDetail,
+  type InvoiceSummary,
+  type KeysetPage,
+} from '@layerbook/contracts';
 import { Router } from 'express';
+import { z } from 'zod';
 import type { AppContext } from '../context';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
-import { parse } from '../http/validate';
+import { parse, parseChanges } from '../http/validate';
+import { deleteDraft, updateDraft } from './draft-edits';
+import { getInvoice, listInvoices } from './invoice-read';
+import { issueInvoice } from './issue';
+import { recordOfflinePayment } from './offline-payments';
 import { getBillingSettings, saveBillingSettings } from './settings';
+import { billingToday } from './today';
+import { voidInvoice } from './void';
+
+const idParam = z.strictObject({ id: uuid('invoice id') });
 
 /** /api/firm/billing: money rules — office reads, the owner sets, crew never sees them. */
 export function billingSettingsRoutes(ctx: AppContext): Router {
@@ -21,5 +43,73 @@ export function billingSettingsRoutes(ctx: AppContext): Router {
     res.json(view satisfies BillingSettingsView);
   });
 
+  return router;
+}
+
+/** /api/invoices: owner and office (crew 403 before any parsing); another firm's invoice is 404 (RLS). */
+export function invoiceRoutes(ctx: AppContext): Router {
+  const router = Router();
+  const deps = { queue: ctx.queue, config: ctx.config };
+
+  router.get('/', async (req, res) => {
+    const page = await withStaff(ctx, req, 'office', (tx) => listInvoices(tx, parse(invoiceListQuery, req.query), ctx.now()));
+    res.json(page satisfies KeysetPage<InvoiceSummary>);
+  });
+
+  router.get('/:id', async (req, res) => {
+    const detail = await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, parse(idParam, req.params).id, ctx.now()));
+    res.json(detail satisfies InvoiceDetail);
+  });
+
+  router.patch('/:id', async (req, res) => {
+    const detail = await withStaff(ctx, req, 'office', async (tx, staff) => {
+      const { id } = parse(idParam, req.params);
+      await updateDraft(tx, staffActor(staff), id, parseChanges(invoiceDraftUpdate, req.body), ctx.now());
+      return getInvoice(tx, id, ctx.now());
+    });
+    res.json(detail satisfies InvoiceDetail);
+  });
+
+  router.delete('/:id', async (req, res) => {
+    await withStaff(ctx, req, 'office', (tx, staff) => deleteDraft(tx, staffActor(staff), parse(idParam, req.params).id, ctx.now()));
+    res.status(204).end();
+  });
+
+  router.post('/:id/issue', async (req, res) => {
+    const detail = await withStaff(ctx, req, 'office', async (tx, staff) => {
+      const { id } = parse(idParam, req.params);
+      await issueInvoice(tx, deps, staffActor(staff), id, parse(invoiceIssue, req.body), ctx.now());
+      return getInvoice(tx, id, ctx.now());
+    });
+    res.json(detail satisfies InvoiceDetail);
+  });
+
+  router.post('/:id/void', async (req, res) => {
+    const detail = await withStaff(ctx, req, 'office', async (tx, staff) => {
+      const { id } = parse(idParam, req.params);
+      await voidInvoice(tx, deps, staffActor(staff), id, parse(invoiceVoid, req.body).reason, ctx.now());
+      return getInvoice(tx, id, ctx.now());
+    });
+    res.json(detail satisfies InvoiceDetail);
+  });
+
+  router.post('/:id/payments', async (req, res) => {
+    const detail = await withStaff(ctx, req, 'office', async (tx, staff) => {
+      const { id } = parse(idParam, req.params);
+      await recordOfflinePayment(tx, staffActor(staff), id, parse(offlinePaymentCreate, req.body));
+      return getInvoice(tx, id, ctx.now());
+    });
+    res.json(detail satisfies InvoiceDetail);
+  });
+
+  return router;
+}
+
+/** /api/billing/today: the money part of Today (owner, office). */
+export function billingTodayRoutes(ctx: AppContext): Router {
+  const router = Router();
+  router.get('/today', async (req, res) => {
+    res.json((await withStaff(ctx, req, 'office', (tx) => billingToday(tx, ctx.now()))) satisfies BillingToday);
+  });
   return router;
 }

@@ -80,6 +80,26 @@ const toLine = (l: LineRow, layers: LayerNames): PaymentScheduleLineView => ({
   status: l.status,
 });
 
+/**
+ * The accepted option's layer milestones by layer id (`layer:<id>` in its schedule): the layer's
+ * name and the day the engine expects it done. Billing reuses it for its lines' names and dates.
+ */
+export async function layerMilestones(
+  tx: TenantTx,
+  proposalVersionId: string,
+  variantId: string,
+): Promise<ReadonlyMap<string, { label: string; date: string | null }>> {
+  const { rows } = await tx.client.query<{ id: string; label: string; date: string | null }>(
+    `select m->>'id' as id, m->>'label' as label, m->>'date' as date
+       from proposal_versions v,
+            jsonb_array_elements(v.snapshot->'options') o,
+            jsonb_array_elements(coalesce(o->'schedule'->'milestones', '[]'::jsonb)) m
+      where v.tenant_id = $1 and v.id = $2 and o->>'id' = $3 and m->>'id' like 'layer:%'`,
+    [tx.tenantId, proposalVersionId, variantId],
+  );
+  return new Map(rows.map((m) => [m.id.slice('layer:'.length), { label: m.label, date: m.date }]));
+}
+
 /** Newest first. A firm of this size has tens of jobs a year; 200 is a page nobody reaches yet. */
 export async function listJobs(tx: TenantTx): Promise<ItemList<JobSummary>> {
   const { rows } = await tx.client.query<SummaryRow>(
@@ -107,15 +127,8 @@ export async function getJob(tx: TenantTx, id: string): Promise<JobDetail> {
        from payment_schedule_lines where tenant_id = $1 and job_id = $2 order by position`,
     [tx.tenantId, id],
   );
-  const milestones = await tx.client.query<{ id: string; label: string }>(
-    `select m->>'id' as id, m->>'label' as label
-       from proposal_versions v,
-            jsonb_array_elements(v.snapshot->'options') o,
-            jsonb_array_elements(coalesce(o->'schedule'->'milestones', '[]'::jsonb)) m
-      where v.tenant_id = $1 and v.id = $2 and o->>'id' = $3 and m->>'id' like 'layer:%'`,
-    [tx.tenantId, r.proposal_version_id, r.accepted_variant_id],
-  );
-  const layers: LayerNames = new Map(milestones.rows.map((m) => [m.id.slice('layer:'.length), m.label]));
+  const milestones = await layerMilestones(tx, r.proposal_version_id, r.accepted_variant_id);
+  const layers: LayerNames = new Map([...milestones].map(([id, m]) => [id, m.label]));
   return {
     ...toSummary(r),
     estimateId: r.estimate_id,

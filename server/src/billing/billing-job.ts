@@ -1,0 +1,88 @@
+import type { BillingMethod, BillingTerms } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import { includedTax } from '@layerbook/domain';
+import type Decimal from 'decimal.js';
+import { localDate } from '../firms/local-date';
+import { conflict, notFound } from '../http/problem';
+import { billingTermsFor, loadBillingSettings } from './settings';
+
+/** A job's row as billing reads it, with its firm's time zone. */
+export interface BillingJob {
+  id: string;
+  client_id: string;
+  site_id: string;
+  title: string;
+  currency: string;
+  contract_sum: string;
+  original_contract_sum: string;
+  contract_tax: string;
+  billing_method: BillingMethod;
+  billing_terms: BillingTerms | null;
+  billing_started_at: Date | null;
+  walkthrough_on: string | null;
+  finish_date: string | null;
+  proposal_version_id: string;
+  accepted_variant_id: string;
+  time_zone: string;
+}
+
+/** Loads a job (404 when it is not this firm's); `lock` takes its row lock, so billing writes on one job go one at a time. */
+export async function loadBillingJob(tx: TenantTx, jobId: string, lock = false): Promise<BillingJob> {
+  const { rows } = await tx.client.query<BillingJob>(
+    `select j.id, j.client_id, j.site_id, j.title, j.currency, j.contract_sum::text as contract_sum,
+            j.original_contract_sum::text as original_contract_sum, j.contract_tax::text as contract_tax, j.billing_method,
+            j.billing_terms, j.billing_started_at, j.walkthrough_on::text as walkthrough_on, j.finish_date::text as finish_date,
+            j.proposal_version_id, j.accepted_variant_id, f.time_zone
+       from jobs j join firms f on f.id = j.tenant_id
+      where j.tenant_id = $1 and j.id = $2 ${lock ? 'for update of j' : ''}`,
+    [tx.tenantId, jobId],
+  );
+  if (!rows[0]) throw notFound('job');
+  return rows[0];
+}
+
+/** The terms a job bills by: its own copy once billing started, the firm's current ones before. */
+export async function termsOf(tx: TenantTx, job: BillingJob): Promise<BillingTerms> {
+  if (job.billing_terms) return job.billing_terms;
+  const { settings } = await loadBillingSettings(tx);
+  return billingTermsFor(settings, job.contract_sum, job.currency);
+}
+
+/** A job whose billing has started: it carries its own terms. */
+export type StartedJob = BillingJob & { billing_terms: BillingTerms };
+
+export function assertBillingStarted(job: BillingJob): asserts job is StartedJob {
+  if (!job.billing_started_at || !job.billing_terms) {
+    throw conflict('Start billing for this job first (confirm its schedule).');
+  }
+}
+
+export const firmToday = (job: Pick<BillingJob, 'time_zone'>, now: Date): string => localDate(job.time_zone, now);
+
+/** Issued invoices of the job that still count (not drafts, not void). */
+export const LIVE_ISSUED = `status in ('issued', 'part_paid', 'paid')`;
+
+/**
+ * The tax inside `amount` (contract sums include tax): the invoice's share of the contract's tax,
+ * the invoice that closes the contract taking the rest, over the job's issued non-void invoices.
+ */
+export async function invoiceTax(
+  tx: TenantTx,
+  job: BillingJob,
+  amount: Decimal | string,
+  exceptInvoiceId: string | null,
+): Promise<Decimal> {
+  const { rows } = await tx.client.query<{ billed: string; tax: string }>(
+    `select coalesce(sum(total), 0)::text as billed, coalesce(sum(tax_included), 0)::text as tax
+       from invoices where tenant_id = $1 and job_id = $2 and ${LIVE_ISSUED} and id is distinct from $3`,
+    [tx.tenantId, job.id, exceptInvoiceId],
+  );
+  return includedTax({
+    amount,
+    contractSum: job.contract_sum,
+    contractTax: job.contract_tax,
+    billedBefore: rows[0].billed,
+    taxBilledBefore: rows[0].tax,
+    currency: job.currency,
+  });
+}

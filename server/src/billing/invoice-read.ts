@@ -1,0 +1,267 @@
+import type {
+  AuditTrailEntry,
+  CreditNoteView,
+  InvoiceDetail,
+  InvoiceDocument,
+  InvoiceKind,
+  InvoiceLine,
+  InvoiceReminderView,
+  InvoiceStatus,
+  InvoiceSummary,
+  KeysetPage,
+  PaymentView,
+  ProgressTable,
+} from '@layerbook/contracts';
+import type { InvoiceListQuery } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import { decodeCursor, encodeCursor } from '../inquiries/cursor';
+import { notFound } from '../http/problem';
+import { loadBillingJob, termsOf } from './billing-job';
+import { invoiceDocument } from './document';
+import { moneyOut } from './money';
+import { loadBillingSettings } from './settings';
+
+/**
+ * An invoice summary's columns; `$today` is the firm-local day the query is given, so whether an
+ * invoice is overdue is decided in the same statement.
+ */
+export const summaryColumns = (today: string) => `i.id, i.number_text, i.kind, i.status, i.job_id, j.title as job_title, i.client_id,
+  c.name as client_name, i.issued_on::text as issued_on, i.due_on::text as due_on, i.currency, i.total::text as total,
+  (case when i.status = 'void' then 0 else i.total - i.amount_paid - i.amount_credited end)::text as amount_due, i.origin, i.created_at,
+  (i.status in ('issued', 'part_paid') and i.due_on < ${today}::date) as is_overdue`;
+
+export const SUMMARY_FROM = `from invoices i join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id
+  join clients c on c.tenant_id = i.tenant_id and c.id = i.client_id`;
+
+export interface SummaryRow {
+  id: string;
+  number_text: string | null;
+  kind: InvoiceKind;
+  status: InvoiceStatus;
+  job_id: string;
+  job_title: string;
+  client_id: string;
+  client_name: string;
+  issued_on: string | null;
+  due_on: string | null;
+  currency: string;
+  total: string;
+  amount_due: string;
+  origin: 'office' | 'queue';
+  created_at: Date;
+  is_overdue: boolean;
+}
+
+export const toSummary = (r: SummaryRow): InvoiceSummary => ({
+  id: r.id,
+  number: r.number_text,
+  kind: r.kind,
+  status: r.status,
+  isOverdue: r.is_overdue,
+  jobId: r.job_id,
+  jobTitle: r.job_title,
+  clientId: r.client_id,
+  clientName: r.client_name,
+  issuedOn: r.issued_on,
+  dueOn: r.due_on,
+  currency: r.currency,
+  total: moneyOut(r.total, r.currency),
+  amountDue: moneyOut(r.amount_due, r.currency),
+  origin: r.origin,
+  createdAt: r.created_at.toISOString(),
+});
+
+const FILTERS: Record<InvoiceListQuery['filter'], string> = {
+  all: '',
+  drafts: `and i.status = 'draft'`,
+  open: `and i.status in ('issued', 'part_paid')`,
+  overdue: `and i.status in ('issued', 'part_paid') and i.due_on < (select today from clock)`,
+  paid: `and i.status = 'paid'`,
+  void: `and i.status = 'void'`,
+};
+
+type ListRow = SummaryRow & { created_at_text: string };
+
+/**
+ * The firm's invoices, newest first, keyset over (created_at, id) on invoices_tenant_created_idx:
+ * one statement (the firm-local day computed inside it from the firm's zone and the given clock),
+ * so a deep page of 100k invoices costs what the first does.
+ */
+export function buildInvoiceListQuery(tenantId: string, q: InvoiceListQuery, now: Date): { text: string; values: unknown[] } {
+  const values: unknown[] = [tenantId, now];
+  const add = (v: unknown) => `$${values.push(v)}`;
+  const where: string[] = [FILTERS[q.filter]];
+  if (q.q) {
+    const like = add(`%${q.q.replace(/[\\%_]/g, (ch) => `\\${ch}`)}%`);
+    where.push(`and (i.number_text ilike ${like} or c.name ilike ${like})`);
+  }
+  if (q.after) {
+    const cursor = decodeCursor(q.after, 'timestamptz');
+    where.push(`and (i.created_at, i.id) < (${add(cursor.sortValue)}::timestamptz, ${add(cursor.id)}::uuid)`);
+  }
+  const text = `with clock as materialized (select ($2::timestamptz at time zone f.time_zone)::date as today from firms f where f.id = $1)
+    select ${summaryColumns('(select today from clock)')}, i.created_at::text as created_at_text
+    ${SUMMARY_FROM}
+    where i.tenant_id = $1 ${where.join(' ')}
+    order by i.created_at desc, i.id desc limit ${add(q.limit + 1)}`;
+  return { text, values };
+}
+
+export async function listInvoices(tx: TenantTx, q: InvoiceListQuery, now: Date): Promise<KeysetPage<InvoiceSummary>> {
+  const { text, values } = buildInvoiceListQuery(tx.tenantId, q, now);
+  const { rows } = await tx.client.query<ListRow>(text, values);
+  const page = rows.slice(0, q.limit);
+  const last = page[page.length - 1];
+  return { items: page.map(toSummary), nextCursor: rows.length > q.limit && last ? encodeCursor(last.created_at_text, last.id) : null };
+}
+
+/** Summaries of one job's invoices, newest first. */
+export async function jobInvoices(tx: TenantTx, jobId: string, today: string): Promise<InvoiceSummary[]> {
+  const { rows } = await tx.client.query<SummaryRow>(
+    `select ${summaryColumns('$3')} ${SUMMARY_FROM} where i.tenant_id = $1 and i.job_id = $2 order by i.created_at desc, i.id desc`,
+    [tx.tenantId, jobId, today],
+  );
+  return rows.map(toSummary);
+}
+
+interface DetailRow extends SummaryRow {
+  schedule_line_id: string | null;
+  period_end: string | null;
+  subtotal: string;
+  deposit_credit: string;
+  retainage_held: string;
+  tax_included: string;
+  amount_paid: string;
+  amount_credited: string;
+  lines: InvoiceLine[];
+  progress: ProgressTable | null;
+  document: InvoiceDocument | null;
+  notes: string;
+  trigger: { text?: string | null } | null;
+  sent_at: Date | null;
+  void_reason: string | null;
+  time_zone: string;
+}
+
+/** "3 days before the due date", "On the due date", "7 days after the due date". */
+export function reminderLabel(step: string): string {
+  if (step === 'due') return 'On the due date';
+  const [side, days] = step.split(':');
+  const n = Number(days);
+  const d = `${n} ${n === 1 ? 'day' : 'days'}`;
+  return side === 'before' ? `${d} before the due date` : `${d} after the due date`;
+}
+
+type AuditData = Record<string, string | number | null | undefined>;
+
+function trailText(action: string, data: AuditData): string {
+  switch (action) {
+    case 'invoice.drafted':
+      return data['origin'] === 'queue' ? 'Drafted when its trigger was met' : 'Drafted';
+    case 'invoice.updated':
+      return 'Draft changed';
+    case 'invoice.issued':
+      return `Issued as ${String(data['number'])}`;
+    case 'invoice.sent':
+      return 'E-mailed to the client';
+    case 'invoice.voided':
+      return `Voided: ${String(data['reason'] ?? '')}`;
+    case 'credit_note.issued':
+      return `Credit note ${String(data['number'])} made`;
+    case 'invoice.payment_recorded':
+      return `Payment of ${String(data['amount'])} received (${String(data['method'])})`;
+    case 'invoice.reminded':
+      return `Reminder sent: ${reminderLabel(String(data['step'] ?? 'due'))}`;
+    default:
+      return action;
+  }
+}
+
+/** GET /api/invoices/:id: the invoice with its credit note, payments, reminders and trail. */
+export async function getInvoice(tx: TenantTx, id: string, now: Date): Promise<InvoiceDetail> {
+  const { rows } = await tx.client.query<DetailRow>(
+    `with clock as (select ($3::timestamptz at time zone f.time_zone)::date as today, f.time_zone from firms f where f.id = $1)
+     select ${summaryColumns('(select today from clock)')}, i.schedule_line_id, i.period_end::text as period_end, i.subtotal::text as subtotal,
+            i.deposit_credit::text as deposit_credit, i.retainage_held::text as retainage_held, i.tax_included::text as tax_included,
+            i.amount_paid::text as amount_paid, i.amount_credited::text as amount_credited, i.lines, i.progress, i.document, i.notes,
+            i.trigger, i.sent_at, i.void_reason
+       ${SUMMARY_FROM} where i.tenant_id = $1 and i.id = $2`,
+    [tx.tenantId, id, now],
+  );
+  const r = rows[0];
+  if (!r) throw notFound('invoice');
+  const m = (v: string) => moneyOut(v, r.currency);
+  const credit = (
+    await tx.client.query<{ id: string; number_text: string; issued_on: string; amount: string; reason: string }>(
+      `select id, number_text, issued_on::text as issued_on, amount::text as amount, reason from credit_notes where tenant_id = $1 and invoice_id = $2`,
+      [tx.tenantId, id],
+    )
+  ).rows[0];
+  const creditNote: CreditNoteView | null = credit
+    ? {
+        id: credit.id,
+        number: credit.number_text,
+        invoiceId: id,
+        issuedOn: credit.issued_on,
+        amount: m(credit.amount),
+        currency: r.currency,
+        reason: credit.reason,
+      }
+    : null;
+  const payments = (
+    await tx.client.query<{ id: string; method: PaymentView['method']; amount: string; received_on: string; reference: string }>(
+      `select id, method, amount::text as amount, received_on::text as received_on, reference from payments
+        where tenant_id = $1 and invoice_id = $2 order by received_on, created_at`,
+      [tx.tenantId, id],
+    )
+  ).rows.map((p): PaymentView => ({ id: p.id, method: p.method, amount: m(p.amount), receivedOn: p.received_on, reference: p.reference }));
+  const reminders = (
+    await tx.client.query<{ step: string; sent_on: string }>(
+      `select step, sent_on::text as sent_on from invoice_reminders where tenant_id = $1 and invoice_id = $2 order by sent_on, created_at`,
+      [tx.tenantId, id],
+    )
+  ).rows.map((x): InvoiceReminderView => ({ step: x.step, label: reminderLabel(x.step), sentOn: x.sent_on }));
+  const trail = (
+    await tx.client.query<{ created_at: Date; action: string; data: AuditData; actor_kind: string; who: string | null }>(
+      `select a.created_at, a.action, a.data, a.actor_kind, coalesce(u.name, pu.name) as who
+         from audit_log a
+         left join users u on a.actor_kind = 'staff' and u.id = a.actor_user_id
+         left join portal_users pu on a.actor_kind = 'client' and pu.tenant_id = a.tenant_id and pu.id = a.actor_user_id
+        where a.tenant_id = $1 and ((a.entity = 'invoice' and a.entity_id = $2) or (a.entity = 'credit_note' and a.entity_id = $3))
+        order by a.created_at, a.id`,
+      [tx.tenantId, id, credit?.id ?? null],
+    )
+  ).rows.map((a): AuditTrailEntry => ({
+    at: a.created_at.toISOString(),
+    who: a.who ?? (a.actor_kind === 'system' ? 'Automatic' : 'Someone'),
+    action: a.action,
+    text: trailText(a.action, a.data),
+  }));
+  let document = r.document;
+  if (!document) {
+    const job = await loadBillingJob(tx, r.job_id);
+    document = await invoiceDocument(tx, r.job_id, await termsOf(tx, job), (await loadBillingSettings(tx)).settings);
+  }
+  return {
+    ...toSummary(r),
+    scheduleLineId: r.schedule_line_id,
+    periodEnd: r.period_end,
+    subtotal: m(r.subtotal),
+    depositCredit: m(r.deposit_credit),
+    retainageHeld: m(r.retainage_held),
+    taxIncluded: m(r.tax_included),
+    amountPaid: m(r.amount_paid),
+    amountCredited: m(r.amount_credited),
+    lines: r.lines,
+    progress: r.progress,
+    document,
+    notes: r.notes,
+    triggerText: r.trigger?.text ?? null,
+    sentAt: r.sent_at?.toISOString() ?? null,
+    voidReason: r.void_reason,
+    creditNote,
+    payments,
+    reminders,
+    auditTrail: trail,
+  };
+}

@@ -1,0 +1,105 @@
+import type { InvoiceIssue, InvoiceLine, ProgressTable } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import { documentNumber, dueDate } from '@layerbook/domain';
+import Decimal from 'decimal.js';
+import { recordAudit } from '../audit/record';
+import type { Config } from '../config';
+import type { Actor } from '../http/actor';
+import { conflict, notFound } from '../http/problem';
+import type { JobQueue } from '../queue/job-queue';
+import { assertBillingStarted, firmToday, invoiceTax, loadBillingJob } from './billing-job';
+import { invoiceDocument } from './document';
+import { progressDepositCredit } from './drafts';
+import { enqueueInvoiceMail } from './invoice-mail';
+import { nextDocumentNumber } from './numbering';
+import { loadBillingSettings } from './settings';
+
+interface LockedInvoice {
+  id: string;
+  job_id: string;
+  kind: string;
+  status: string;
+  schedule_line_id: string | null;
+  subtotal: string;
+  lines: InvoiceLine[];
+  progress: ProgressTable | null;
+}
+
+export interface IssueDeps {
+  readonly queue: JobQueue;
+  readonly config: Config;
+}
+
+/**
+ * POST /api/invoices/:id/issue — in ONE transaction: lock the draft, recompute what depends on
+ * other invoices (the deposit credit, the tax inside), take the next number of the firm's invoice
+ * series (the counter row stays locked until commit; a failure anywhere rolls the number back),
+ * date it and its due date by the job's terms, freeze the document, mark its line invoiced, audit,
+ * and e-mail it when asked. Issued twice: 409.
+ */
+export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, body: InvoiceIssue, now: Date): Promise<void> {
+  const inv = (
+    await tx.client.query<LockedInvoice>(
+      `select id, job_id, kind, status, schedule_line_id, subtotal::text as subtotal, lines, progress
+         from invoices where tenant_id = $1 and id = $2 for update`,
+      [tx.tenantId, id],
+    )
+  ).rows[0];
+  if (!inv) throw notFound('invoice');
+  if (inv.status !== 'draft') throw conflict('This invoice is already issued.');
+  const job = await loadBillingJob(tx, inv.job_id);
+  assertBillingStarted(job);
+  const subtotal = new Decimal(inv.subtotal);
+  const isProgressJob = job.billing_method === 'progress' && (inv.kind === 'progress' || inv.kind === 'retainage');
+  const credit = isProgressJob ? await progressDepositCredit(tx, job, subtotal, inv.kind === 'retainage', inv.id) : new Decimal(0);
+  const total = subtotal.minus(credit);
+  if (total.isNegative()) {
+    throw conflict('This invoice comes to less than nothing: earlier invoices billed more than is earned. Correct the readings first.');
+  }
+  const tax = await invoiceTax(tx, job, total, inv.id);
+  const { settings } = await loadBillingSettings(tx);
+  const issuedOn = body.issuedOn ?? firmToday(job, now);
+  const dueOn = dueDate(issuedOn, job.billing_terms.terms);
+  const document = await invoiceDocument(tx, job.id, job.billing_terms, settings);
+  const n = await nextDocumentNumber(tx, 'invoice');
+  const numberText = documentNumber(settings.invoicePrefix, n);
+  await tx.client.query(
+    `update invoices set status = 'issued', number = $3, number_text = $4, issued_on = $5, due_on = $6, document = $7, deposit_credit = $8,
+            total = $9, tax_included = $10, issued_by = $11, issued_at = $12, updated_at = $12
+      where tenant_id = $1 and id = $2`,
+    [
+      tx.tenantId,
+      id,
+      n,
+      numberText,
+      issuedOn,
+      dueOn,
+      JSON.stringify(document),
+      credit.toFixed(2),
+      total.toFixed(2),
+      tax.toFixed(2),
+      actor.userId,
+      now,
+    ],
+  );
+  if (inv.schedule_line_id) {
+    await tx.client.query(`update payment_schedule_lines set status = 'invoiced', updated_at = $3 where tenant_id = $1 and id = $2`, [
+      tx.tenantId,
+      inv.schedule_line_id,
+      now,
+    ]);
+  }
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'invoice.issued',
+    entity: 'invoice',
+    entityId: id,
+    data: { number: numberText, issuedOn, dueOn, total: total.toFixed(2) },
+  });
+  if (body.send) {
+    await enqueueInvoiceMail(tx, deps.queue, deps.config, id, { kind: 'issued' });
+    await tx.client.query(`update invoices set sent_at = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, id, now]);
+    await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'invoice.sent', entity: 'invoice', entityId: id });
+  }
+}
