@@ -66,8 +66,10 @@ function progressText(r: ProgressRow, currency: string): string {
 }
 
 function auditText(r: AuditRow): string | null {
-  const invoice = `${INVOICE_KIND_LABELS[r.invoice_kind ?? 'milestone'] ?? 'Invoice'}${r.invoice_number ? ` ${r.invoice_number}` : ''}`;
-  const draft = INVOICE_KIND_LABELS[r.invoice_kind ?? 'milestone'] ?? 'Invoice';
+  // A deleted draft's row is gone: its audit row still says what kind it was.
+  const kind = r.invoice_kind ?? (typeof r.data['kind'] === 'string' ? (r.data['kind'] as InvoiceKind) : null);
+  const draft = (kind && INVOICE_KIND_LABELS[kind]) || 'Invoice';
+  const invoice = `${draft}${r.invoice_number ? ` ${r.invoice_number}` : ''}`;
   const order = `Change order${r.change_order_number !== null ? ` ${r.change_order_number}` : ''}${r.change_order_title ? ` (${r.change_order_title})` : ''}`;
   const step = typeof r.data['step'] === 'string' ? r.data['step'] : '';
   switch (r.action) {

@@ -204,6 +204,6 @@ export async function recordProgress(
     entityId: jobId,
     data: { progressId: inserted.rows[0].id, kind: mark.kind, on: mark.on, ...target, ...(value !== null ? { value } : {}) },
   });
-  await enqueueBillingCheck(tx, queue, jobId);
+  await enqueueBillingCheck(tx, queue, jobId, { progressMarked: mark.kind === 'valuePercent' || mark.kind === 'storedMaterials' });
   return progressView(tx, jobId);
 }

@@ -80,6 +80,8 @@ export const PRUNE_EXPIRED_CRON = '20 * * * *';
 export interface BillingEvaluateJob {
   readonly tenantId: string;
   readonly jobId: string;
+  /** a percent complete or stored materials was marked: a progress-billed job's open application is drafted or refreshed */
+  readonly progressMarked?: boolean;
 }
 
 /** Like FollowUpSweepJob: force / tenantIds for tests and operators. */

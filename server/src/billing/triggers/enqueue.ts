@@ -5,9 +5,15 @@ import { type BillingEvaluateJob, QUEUES } from '../../queue/queues';
 /**
  * Asks the queue to check a job's billing triggers, in the caller's transaction: the check runs
  * only if the write that may have met a trigger (a progress mark, billing start, an approved change
- * order) commits. The check itself is idempotent, so an extra one costs nothing.
+ * order) commits. The check itself is idempotent, so an extra one costs nothing. `progressMarked`:
+ * a percent complete or stored materials was marked (a progress-billed job's application is drafted).
  */
-export async function enqueueBillingCheck(tx: TenantTx, queue: JobQueue, jobId: string): Promise<void> {
-  const data: BillingEvaluateJob = { tenantId: tx.tenantId, jobId };
+export async function enqueueBillingCheck(
+  tx: TenantTx,
+  queue: JobQueue,
+  jobId: string,
+  opts: { progressMarked?: boolean } = {},
+): Promise<void> {
+  const data: BillingEvaluateJob = { tenantId: tx.tenantId, jobId, ...(opts.progressMarked ? { progressMarked: true } : {}) };
   await queue.send(QUEUES.billingEvaluate, data, tx);
 }
