@@ -34,11 +34,13 @@ interface SummaryRow {
   currency: string;
   total: string;
   amount_due: string;
+  locale: string;
 }
 
 const SUMMARY_COLUMNS = `i.id, i.number_text, i.kind, i.status, (i.status in ('issued', 'part_paid') and i.due_on < $3::date) as is_overdue,
   i.job_id, j.title as job_title, i.issued_on::text, i.due_on::text, i.currency, i.total::text,
-  (case when i.status = 'void' then 0 else i.total - i.amount_paid - i.amount_credited end)::numeric(14, 2)::text as amount_due`;
+  (case when i.status = 'void' then 0 else i.total - i.amount_paid - i.amount_credited end)::numeric(14, 2)::text as amount_due,
+  i.document->>'locale' as locale`;
 
 const toSummary = (r: SummaryRow): PortalInvoiceSummary => ({
   id: r.id,
@@ -53,6 +55,7 @@ const toSummary = (r: SummaryRow): PortalInvoiceSummary => ({
   currency: r.currency,
   total: moneyOut(r.total, r.currency),
   amountDue: moneyOut(r.amount_due, r.currency),
+  locale: r.locale,
 });
 
 async function requireClientId(tx: TenantTx, client: ClientPrincipal, what: string): Promise<string> {
@@ -129,8 +132,9 @@ interface EntryRow {
 export async function getClientStatement(tx: TenantTx, client: ClientPrincipal, jobId: string): Promise<PortalStatement> {
   const clientId = await requireClientId(tx, client, 'job');
   const job = (
-    await tx.client.query<{ id: string; title: string; currency: string; contract_sum: string }>(
-      `select id, title, currency, contract_sum::text from jobs where tenant_id = $1 and id = $2 and client_id = $3`,
+    await tx.client.query<{ id: string; title: string; currency: string; contract_sum: string; locale: string }>(
+      `select j.id, j.title, j.currency, j.contract_sum::text, f.language || '-' || f.country as locale
+         from jobs j join firms f on f.id = j.tenant_id where j.tenant_id = $1 and j.id = $2 and j.client_id = $3`,
       [tx.tenantId, jobId, clientId],
     )
   ).rows[0];
@@ -156,6 +160,7 @@ export async function getClientStatement(tx: TenantTx, client: ClientPrincipal, 
     jobId: job.id,
     jobTitle: job.title,
     currency: job.currency,
+    locale: job.locale,
     contractSum: moneyOut(job.contract_sum, job.currency),
     lines: s.lines.map((l) => ({
       on: l.on,

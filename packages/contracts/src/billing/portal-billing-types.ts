@@ -19,6 +19,8 @@ export interface PortalInvoiceSummary {
   readonly currency: string;
   readonly total: string;
   readonly amountDue: string;
+  /** the firm's locale the invoice prints in ("en-US"): the portal formats money and dates with it */
+  readonly locale: string;
 }
 
 export interface PortalInvoiceDetail extends PortalInvoiceSummary {
@@ -49,6 +51,8 @@ export interface PortalStatement {
   readonly jobId: string;
   readonly jobTitle: string;
   readonly currency: string;
+  /** the firm's locale ("en-US") */
+  readonly locale: string;
   readonly contractSum: string;
   readonly lines: readonly PortalStatementLine[];
   readonly invoiced: string;
