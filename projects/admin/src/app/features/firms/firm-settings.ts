@@ -9,6 +9,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatRadioModule } from '@angular/material/radio';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
+import { RouterLink } from '@angular/router';
 import {
   COMMON_CURRENCIES,
   FIRM_NAME_MAX_LENGTH,
@@ -54,6 +55,7 @@ import { timeZoneChoices } from './time-zones';
     MatRadioModule,
     MatSelectModule,
     ReactiveFormsModule,
+    RouterLink,
     StageLikelihoodsForm,
   ],
   templateUrl: './firm-settings.html',
