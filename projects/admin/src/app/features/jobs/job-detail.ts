@@ -4,17 +4,17 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import type { JobDetail as JobView } from '@layerbook/contracts/types';
-import { scheduleTotals } from '@layerbook/domain';
 import { problemMessage } from '../../core/errors/problem';
 import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { jobStatus, paymentLine, paymentStatus } from './job-words';
+import { JobBilling } from './billing/job-billing';
+import { jobStatus } from './job-words';
 
-/** One accepted job: what was signed, for how much, and the payments to ask for. */
+/** One accepted job: what was signed, for how much, and its billing (sections in ./billing). */
 @Component({
   selector: 'lb-job-detail',
-  imports: [CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
+  imports: [CalendarDatePipe, FormAlert, JobBilling, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
   templateUrl: './job-detail.html',
   styleUrl: './job-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -32,12 +32,4 @@ export class JobDetail {
     return error ? problemMessage(error) : null;
   });
   protected readonly jobStatus = jobStatus;
-  protected readonly paymentStatus = paymentStatus;
-  protected readonly paymentLine = paymentLine;
-
-  /** The schedule added exactly (packages/domain); it should come to the contract sum. */
-  protected readonly totals = computed(() => {
-    const job = this.job();
-    return job ? scheduleTotals(job.paymentSchedule, job.contractSum) : null;
-  });
 }
