@@ -1,0 +1,179 @@
+import { DEFAULT_BILLING_SETTINGS, type InvoiceDetail, type JobBillingView } from '@layerbook/contracts';
+import { withTenant } from '@layerbook/db';
+import { sumMoney } from '@layerbook/domain';
+import Decimal from 'decimal.js';
+import { startTestServer, TestServer } from '../testing/harness';
+import { billingJob } from './billing-fixtures';
+
+let t: TestServer;
+beforeAll(async () => {
+  t = await startTestServer();
+  t.setNow(new Date('2026-12-01T15:00:00Z'));
+});
+afterAll(() => t.stop());
+
+describe('progress billing through the API', () => {
+  // DOMAIN.md §2.10 worked example (AIA G702/G703 arithmetic summaries): original contract 48,000,
+  // change order #1 +3,200, retainage 10 % on work and on stored materials; application #1 certifies
+  // 14,800 of work (13,320 after retainage); application #2 is due 17,010 with 3,370 held.
+  it('reproduces the worked example: application #1, then #2 after a change order, line retainage adding up to the summary', async () => {
+    const f = await billingJob(t, 'Progress Example Plaster');
+    const settings = { ...DEFAULT_BILLING_SETTINGS, retainage: { workPercent: 10, storedPercent: 10, stopAtPercentComplete: null } };
+    expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
+    // The example's contract: 48,000 with no tax inside (the accepted option's own total is set aside).
+    await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(
+        `update jobs set contract_sum = 48000, original_contract_sum = 48000, contract_tax = 0 where tenant_id = $1 and id = $2`,
+        [tx.tenantId, f.jobId],
+      ),
+    );
+    const method = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, { method: 'progress', lines: [] });
+    expect(method.status).toBe(200);
+    const notSum = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
+      lines: [{ label: 'All work', scheduledValue: '47999.99' }],
+    });
+    expect(notSum.status).toBe(400);
+    expect(notSum.body.errors).toEqual([{ field: 'lines', message: expect.stringContaining('0.01 short of the contract sum') }]);
+    const values = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
+      lines: [
+        { label: 'Mobilization, protection, prep', scheduledValue: '6000.00' },
+        { label: 'Venetian plaster, walls', scheduledValue: '22000.00' },
+        { label: 'Dome: lime plaster + glaze', scheduledValue: '14000.00' },
+        { label: 'Stenciled frieze', scheduledValue: '6000.00' },
+      ],
+    });
+    expect(values.status).toBe(200);
+    const [prep, walls, dome, frieze] = (values.body as JobBillingView).valueLines.map((v) => v.id);
+    expect((await f.send('post', `/api/jobs/${f.jobId}/billing/start`)).status).toBe(200);
+
+    // Application #1: prep done (as an amount), walls 40 % (as a percent).
+    const first = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-31' });
+    expect(first.status).toBe(201);
+    expect(first.body).toMatchObject({ kind: 'progress', status: 'draft', number: null, total: '0.00' });
+    const app1 = await f.send('patch', `/api/invoices/${first.body.id}`, {
+      progressLines: [
+        { valueLineId: prep, workToDate: { amount: '6000.00' }, storedMaterials: '0' },
+        { valueLineId: walls, workToDate: { percent: 40 }, storedMaterials: '0' },
+      ],
+    });
+    expect(app1.status).toBe(200);
+    expect((app1.body as InvoiceDetail).progress!.summary).toMatchObject({
+      completedToDate: '14800.00',
+      retainage: '1480.00',
+      earnedLessRetainage: '13320.00',
+      previouslyBilled: '0.00',
+      dueThisPeriod: '13320.00',
+    });
+    expect((await f.issue(first.body.id)).number).toBe('INV-0001');
+
+    // Change order #1, approved: +3,200, its own line in the schedule of values.
+    await withTenant(t.ctx.pool, f.firmId, async (tx) => {
+      const co = await tx.client.query<{ id: string }>(
+        `insert into change_orders (tenant_id, job_id, number, title, pricing, price, amount, status, decided_at)
+         values ($1, $2, 1, 'Faux beams', 'lumpSum', 3200, 3200, 'approved', now()) returning id`,
+        [tx.tenantId, f.jobId],
+      );
+      await tx.client.query(`update jobs set contract_sum = 51200 where tenant_id = $1 and id = $2`, [tx.tenantId, f.jobId]);
+      await tx.client.query(
+        `insert into job_value_lines (tenant_id, job_id, position, label, scheduled_value, change_order_id) values ($1, $2, 5, 'CO #1 faux beams', 3200, $3)`,
+        [tx.tenantId, f.jobId, co.rows[0].id],
+      );
+    });
+    const beams = (await f.billing()).valueLines[4].id;
+
+    // Application #2: walls 80 %, dome 50 %, frieze materials stored 1,500, beams 50 %.
+    const second = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2027-01-31' });
+    expect(second.status).toBe(201);
+    // Work billed never goes down; stored materials never pass what is left of the line: 400 naming each, nothing written.
+    const wrong = await f.send('patch', `/api/invoices/${second.body.id}`, {
+      progressLines: [
+        { valueLineId: walls, workToDate: { percent: 30 }, storedMaterials: '0' },
+        { valueLineId: frieze, workToDate: { amount: '0' }, storedMaterials: '6000.01' },
+      ],
+    });
+    expect(wrong.status).toBe(400);
+    expect(wrong.body.errors.map((e: { field: string }) => e.field)).toEqual([
+      'progressLines[0].workToDate',
+      'progressLines[1].storedMaterials',
+    ]);
+    expect((await f.billing()).valueLines.map((v) => [v.percentComplete, v.storedMaterials])).toEqual([
+      ['100', '0.00'],
+      ['40', '0.00'],
+      ['0', '0.00'],
+      ['0', '0.00'],
+      ['0', '0.00'],
+    ]);
+    const app2 = await f.send('patch', `/api/invoices/${second.body.id}`, {
+      progressLines: [
+        { valueLineId: walls, workToDate: { percent: 80 }, storedMaterials: '0' },
+        { valueLineId: dome, workToDate: { amount: '7000.00' }, storedMaterials: '0' },
+        { valueLineId: frieze, workToDate: { percent: 0 }, storedMaterials: '1500.00' },
+        { valueLineId: beams, workToDate: { percent: 50 }, storedMaterials: '0' },
+      ],
+    });
+    expect(app2.status).toBe(200);
+    const table = (app2.body as InvoiceDetail).progress!;
+    expect(
+      table.lines.map((l) => [
+        l.scheduledValue,
+        l.previousWork,
+        l.thisPeriodWork,
+        l.storedMaterials,
+        l.completedToDate,
+        l.percentComplete,
+        l.balanceToFinish,
+        l.retainage,
+      ]),
+    ).toEqual([
+      ['6000.00', '6000.00', '0.00', '0.00', '6000.00', '100', '0.00', '600.00'],
+      ['22000.00', '8800.00', '8800.00', '0.00', '17600.00', '80', '4400.00', '1760.00'],
+      ['14000.00', '0.00', '7000.00', '0.00', '7000.00', '50', '7000.00', '700.00'],
+      ['6000.00', '0.00', '0.00', '1500.00', '1500.00', '25', '4500.00', '150.00'],
+      ['3200.00', '0.00', '1600.00', '0.00', '1600.00', '50', '1600.00', '160.00'],
+    ]);
+    expect(table.summary).toEqual({
+      originalContractSum: '48000.00',
+      changeOrders: '3200.00',
+      contractSumToDate: '51200.00',
+      completedToDate: '33700.00',
+      retainage: '3370.00',
+      earnedLessRetainage: '30330.00',
+      previouslyBilled: '13320.00',
+      dueThisPeriod: '17010.00',
+      balanceToFinishWithRetainage: '20870.00',
+    });
+    expect(sumMoney(table.lines.map((l) => new Decimal(l.retainage))).toFixed(2)).toBe(table.summary.retainage);
+    const issued = await f.issue(second.body.id);
+    expect(issued).toMatchObject({
+      number: 'INV-0002',
+      total: '17010.00',
+      subtotal: '17010.00',
+      retainageHeld: '3370.00',
+      depositCredit: '0.00',
+    });
+
+    const after = await f.billing();
+    expect(after.valueLines.map((v) => v.billedWork)).toEqual(['6000.00', '17600.00', '7000.00', '0.00', '1600.00']);
+    expect(after.totals).toMatchObject({ invoiced: '30330.00', retainageHeld: '3370.00', unbilled: '20870.00' });
+    // The marks are kept in the job's history.
+    const marks = await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(`select kind from job_progress where tenant_id = $1 and job_id = $2`, [tx.tenantId, f.jobId]),
+    );
+    // prep and walls on #1; walls, dome and beams on #2 (the frieze's 0 % did not change)
+    expect(marks.rows.filter((r) => r.kind === 'valuePercent')).toHaveLength(5);
+    expect(marks.rows.filter((r) => r.kind === 'storedMaterials')).toHaveLength(1);
+
+    // Retainage release bills what is held.
+    const release = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'retainage' });
+    expect(release.status).toBe(201);
+    expect(release.body).toMatchObject({
+      kind: 'retainage',
+      total: '3370.00',
+      lines: [{ label: 'Retainage released', amount: '3370.00' }],
+    });
+    // A schedule-method job has no progress applications.
+    const other = await billingJob(t, 'Progress Refused Plaster');
+    expect((await other.send('post', `/api/jobs/${other.jobId}/billing/start`)).status).toBe(200);
+    expect((await other.send('post', `/api/jobs/${other.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-31' })).status).toBe(409);
+  });
+});
