@@ -55,6 +55,18 @@ describe('change orders in the portal', () => {
     expect(sum(after.lines.slice(1).map((l) => l.amount))).toBe(
       new Decimal(sum(before.lines.slice(1).map((l) => l.amount))).plus('1082.50').toFixed(2),
     );
+    // The progress payment was asked for as 40 %: it now shows its share of the new sum; the final stays "the rest".
+    const percents = await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query<{ percent: string | null }>(
+        `select trim_scale(percent)::text as percent from payment_schedule_lines where tenant_id = $1 and job_id = $2 order by position`,
+        [tx.tenantId, f.jobId],
+      ),
+    );
+    expect(percents.rows.map((r) => r.percent)).toEqual([
+      '30',
+      new Decimal(after.lines[1].amount).div(newSum).times(100).toDecimalPlaces(2).toFixed(),
+      null,
+    ]);
     expect(after.valueLines.at(-1)).toEqual({
       label: 'Change order #1: Venetian niche',
       scheduled_value: '1082.50',

@@ -10,7 +10,7 @@ import { enqueueMail } from '../../mail/outbox';
 import { clientIdOf } from '../../proposals/client-proposals';
 import { enqueueBillingCheck } from '../triggers/enqueue';
 import { changeOrderAnsweredMail } from './change-order-mail';
-import type { StoredDetail } from './pricing';
+import { MONEY_COLUMN_LIMIT, type StoredDetail } from './pricing';
 import { loadChangeOrder, toView, type ChangeOrderRow } from './read';
 
 /** A change order the client may read: one of their own jobs', sent or decided (never a draft); 404 otherwise. */
@@ -33,6 +33,7 @@ interface LineRow {
   role: PaymentLine['role'];
   trigger: PaymentLine['trigger'];
   amount: string;
+  percent: string | null;
   status: 'draft' | 'scheduled' | 'ready' | 'invoiced';
 }
 
@@ -114,6 +115,8 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
   const before = new Decimal(job.contract_sum);
   const after = before.plus(row.amount);
   if (after.lessThanOrEqualTo(0)) throw conflict('This change would take the contract sum to zero or below; ask the firm.');
+  if (after.greaterThanOrEqualTo(MONEY_COLUMN_LIMIT))
+    throw conflict('This change would take the contract sum past what can be recorded; ask the firm.');
   // Progress billing keeps only its deposit in the schedule; the work is billed from the schedule of values.
   if (job.billing_method === 'schedule') await respreadLines(tx, row, job, after, now);
   await tx.client.query(
@@ -138,7 +141,7 @@ const lineLabel = (row: ChangeOrderRow) => `Change order #${row.number}: ${row.t
  */
 async function respreadLines(tx: TenantTx, row: ChangeOrderRow, job: JobMoneyRow, after: Decimal, now: Date): Promise<void> {
   const { rows: lines } = await tx.client.query<LineRow>(
-    `select id, position, label, role, trigger, amount::text as amount, status from payment_schedule_lines
+    `select id, position, label, role, trigger, amount::text as amount, trim_scale(percent)::text as percent, status from payment_schedule_lines
       where tenant_id = $1 and job_id = $2 order by position for update`,
     [tx.tenantId, row.job_id],
   );
@@ -180,11 +183,15 @@ async function respreadLines(tx: TenantTx, row: ChangeOrderRow, job: JobMoneyRow
   }
   for (const [i, line] of spread.entries()) {
     if (line.amount.equals(lines[i].amount)) continue;
-    // The percent asked for at acceptance no longer describes the amount: the amount stands alone.
-    await tx.client.query(
-      `update payment_schedule_lines set amount = $3, percent = null, updated_at = $4 where tenant_id = $1 and id = $2`,
-      [tx.tenantId, line.id, line.amount.toFixed(digits), now],
-    );
+    // A line asked for as a share of the contract shows its share of the new sum; "the rest" stays the rest.
+    const percent = lines[i].percent === null ? null : line.amount.div(after).times(100).toDecimalPlaces(2).toFixed();
+    await tx.client.query(`update payment_schedule_lines set amount = $3, percent = $4, updated_at = $5 where tenant_id = $1 and id = $2`, [
+      tx.tenantId,
+      line.id,
+      line.amount.toFixed(digits),
+      percent,
+      now,
+    ]);
   }
 }
 

@@ -142,6 +142,11 @@ export function changeOrderInputs(
   };
 }
 
+/** What a money column (numeric(14, 2)) holds: less than a trillion either way. */
+export const MONEY_COLUMN_LIMIT = new Decimal('1e12');
+
 function money(kind: ChangeOrderPricing['kind'], price: Decimal, tax: Decimal, digits: number, detail: StoredDetail): PricedChangeOrder {
+  if (price.plus(tax).abs().greaterThanOrEqualTo(MONEY_COLUMN_LIMIT))
+    throw badRequest([{ field: kind === 'lumpSum' ? 'pricing.price' : 'pricing', message: 'The amount with its tax is too large.' }]);
   return { pricing: kind, price: price.toFixed(digits), tax: tax.toFixed(digits), amount: price.plus(tax).toFixed(digits), detail };
 }
