@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, effect, inject, input, output, untracked } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, output, untracked } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -48,8 +48,10 @@ export class DraftNotes {
   });
 
   constructor() {
+    // Only a change of the saved notes refills the field: saving the progress keeps notes typed here.
+    const savedNotes = computed(() => this.invoice().notes);
     effect(() => {
-      const notes = this.invoice().notes;
+      const notes = savedNotes();
       untracked(() => this.form.reset({ notes }));
     });
   }

@@ -70,6 +70,46 @@ describe('the invoice page', () => {
     patch.flush(progressDraft);
   });
 
+  it('puts the server’s refusal beside the line’s field it names', async () => {
+    const { fixture, html, http } = await render(progressDraft);
+    const stored = html.querySelector<HTMLInputElement>('input[aria-label="Materials stored on site for Walls, base coat"]')!;
+    stored.value = '7000';
+    stored.dispatchEvent(new Event('input'));
+    html.querySelector<HTMLFormElement>('form[aria-labelledby="progress-heading"]')!.dispatchEvent(new Event('submit'));
+    const message = 'Work to date and stored materials come to more than the scheduled value 10000.00.';
+    http.expectOne({ method: 'PATCH', url: '/api/invoices/inv-2' }).flush(
+      {
+        type: 'about:blank',
+        title: 'Check the highlighted fields.',
+        status: 400,
+        errors: [{ field: 'progressLines[0].storedMaterials', message }],
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(stored.closest('mat-form-field')?.querySelector('mat-error')?.textContent).toContain(message);
+  });
+
+  it('keeps progress typed but not saved when the notes are saved', async () => {
+    const { fixture, html, http } = await render(progressDraft);
+    const work = html.querySelector<HTMLInputElement>('input[aria-label="Amount done to date for Walls, base coat"]')!;
+    work.value = '5,000';
+    work.dispatchEvent(new Event('input'));
+    const notes = html.querySelector<HTMLTextAreaElement>('textarea')!;
+    notes.value = 'Thank you for the prompt access.';
+    notes.dispatchEvent(new Event('input'));
+    fixture.detectChanges();
+    html.querySelector<HTMLFormElement>('form[aria-label="Notes on the invoice"]')!.dispatchEvent(new Event('submit'));
+    const patch = http.expectOne({ method: 'PATCH', url: '/api/invoices/inv-2' });
+    expect(patch.request.body).toEqual({ notes: 'Thank you for the prompt access.' });
+    patch.flush({ ...progressDraft, notes: 'Thank you for the prompt access.' });
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(html.querySelector<HTMLInputElement>('input[aria-label="Amount done to date for Walls, base coat"]')?.value).toBe('5,000');
+    expect(html.textContent).toContain('Notes saved.');
+  });
+
   it('offers the PDF, a payment and Void on an open invoice, and says overdue in words', async () => {
     const issued: InvoiceDetail = {
       ...progressDraft,

@@ -116,7 +116,7 @@ export class InvoiceDetailPage {
     const confirmed = await this.confirm({
       title: 'Delete this draft?',
       message: invoice.scheduleLineId
-        ? 'Its payment goes back to waiting in the job’s schedule, and is drafted again when you ask or its trigger is met.'
+        ? 'Nothing was sent. Its payment goes back to waiting in the job’s schedule.'
         : 'Nothing was sent; the work it billed stays unbilled.',
       confirmLabel: 'Delete the draft',
     });

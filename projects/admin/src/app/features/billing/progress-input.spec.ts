@@ -80,6 +80,8 @@ describe('progress line input', () => {
     expect(formFieldOf('progressLines.2.workToDate.amount')).toBe('progressLines.2.workToDate');
     expect(formFieldOf('progressLines.0.workToDate.percent')).toBe('progressLines.0.workToDate');
     expect(formFieldOf('progressLines.1.storedMaterials')).toBe('progressLines.1.storedMaterials');
+    expect(formFieldOf('progressLines[3].workToDate')).toBe('progressLines.3.workToDate');
+    expect(formFieldOf('progressLines[12].storedMaterials')).toBe('progressLines.12.storedMaterials');
     expect(formFieldOf('notes')).toBe('notes');
   });
 });

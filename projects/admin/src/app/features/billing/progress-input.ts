@@ -91,9 +91,10 @@ export function progressLinesUpdate(values: readonly ProgressLineValue[]): NonNu
 }
 
 /**
- * The server names a line's field by its path in the body ("progressLines.2.workToDate.amount");
- * the form has one field for either kind of work, so the last part goes.
+ * The server names a line's field by its path in the body, as its schema does
+ * ("progressLines.2.workToDate.amount") or as its checks do ("progressLines[2].storedMaterials");
+ * the form's path uses dots, and has one field for either kind of work, so the last part goes.
  */
 export function formFieldOf(field: string): string {
-  return field.replace(/^(progressLines\.\d+\.workToDate)\.(amount|percent)$/, '$1');
+  return field.replace(/^progressLines\[(\d+)\]/, 'progressLines.$1').replace(/^(progressLines\.\d+\.workToDate)\.(amount|percent)$/, '$1');
 }

@@ -97,9 +97,15 @@ export class ProgressTable {
     progressLines: this.fb.array<LineGroup>([]),
   });
 
+  /** The invoice, changing only when what this form shows does: saving the notes keeps progress typed here. */
+  private readonly shown = computed(() => this.invoice(), {
+    equal: (a, b) =>
+      a.id === b.id && a.status === b.status && a.periodEnd === b.periodEnd && JSON.stringify(a.progress) === JSON.stringify(b.progress),
+  });
+
   constructor() {
     effect(() => {
-      const invoice = this.invoice();
+      const invoice = this.shown();
       untracked(() => this.show(invoice));
     });
   }
