@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/cor
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatToolbarModule } from '@angular/material/toolbar';
-import { Router, RouterLink, RouterOutlet } from '@angular/router';
+import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 import { Session } from '../auth/session';
 import { toProblem } from '../errors/problem';
 import { FormAlert } from '../../shared/ui/form-alert';
@@ -11,7 +11,7 @@ import { Wordmark } from '../../shared/ui/wordmark';
 /** The frame around a signed-in client's pages: whose portal this is, and a way out. */
 @Component({
   selector: 'lb-portal-shell',
-  imports: [FormAlert, MatButtonModule, MatIconModule, MatToolbarModule, RouterLink, RouterOutlet, Wordmark],
+  imports: [FormAlert, MatButtonModule, MatIconModule, MatToolbarModule, RouterLink, RouterLinkActive, RouterOutlet, Wordmark],
   template: `
     <header>
       <mat-toolbar class="lb-toolbar">
@@ -28,6 +28,12 @@ import { Wordmark } from '../../shared/ui/wordmark';
           </button>
         }
       </mat-toolbar>
+      @if (client()) {
+        <nav class="sections" aria-label="Your pages">
+          <a routerLink="/projects" routerLinkActive="active" ariaCurrentWhenActive="page">Your projects</a>
+          <a routerLink="/invoices" routerLinkActive="active" ariaCurrentWhenActive="page">Your invoices</a>
+        </nav>
+      }
     </header>
     <main class="lb-page">
       <lb-form-alert [message]="message()" />
@@ -45,6 +51,26 @@ import { Wordmark } from '../../shared/ui/wordmark';
       overflow: hidden;
       text-overflow: ellipsis;
       white-space: nowrap;
+    }
+    .sections {
+      display: flex;
+      flex-wrap: wrap;
+      gap: 0.25rem 1.5rem;
+      padding: 0.5rem 1rem 0;
+      border-bottom: 1px solid var(--mat-sys-outline-variant);
+    }
+    .sections a {
+      padding: 0.5rem 0.25rem;
+      border-bottom: 3px solid transparent;
+      color: inherit;
+      text-decoration: none;
+    }
+    .sections a:hover {
+      text-decoration: underline;
+    }
+    .sections a.active {
+      border-bottom-color: var(--lb-umber);
+      font-weight: 600;
     }
     .spacer {
       flex: 1;

@@ -1,0 +1,49 @@
+import { INVOICE_STATUS_LABELS, type InvoiceStatus, type PortalInvoiceSummary, type PortalStatementLine } from '@layerbook/contracts/types';
+
+/** Where an invoice stands for the client, in words and an icon (never colour alone). */
+export interface StatusWords {
+  readonly text: string;
+  readonly icon: string;
+  /** needs the client's attention: open and past its due date */
+  readonly isUrgent: boolean;
+}
+
+const CLIENT_STATUS: Readonly<Record<Exclude<InvoiceStatus, 'draft'>, StatusWords>> = {
+  issued: { text: 'To pay', icon: 'receipt_long', isUrgent: false },
+  part_paid: { text: `${INVOICE_STATUS_LABELS.part_paid}, the rest to pay`, icon: 'pending', isUrgent: false },
+  paid: { text: INVOICE_STATUS_LABELS.paid, icon: 'task_alt', isUrgent: false },
+  void: { text: 'Cancelled by a credit note', icon: 'block', isUrgent: false },
+};
+
+/**
+ * The status a client reads: overdue (open or part paid, past its due date in the firm's zone, as
+ * the server says) comes before the rest. A client never sees a draft; one would read "To pay".
+ */
+export function invoiceStatusWords(inv: Pick<PortalInvoiceSummary, 'status' | 'isOverdue'>): StatusWords {
+  if (inv.isOverdue && (inv.status === 'issued' || inv.status === 'part_paid')) {
+    return { text: inv.status === 'part_paid' ? 'Overdue, part paid' : 'Overdue', icon: 'warning', isUrgent: true };
+  }
+  return CLIENT_STATUS[inv.status === 'draft' ? 'issued' : inv.status];
+}
+
+/** What a statement line is, for a screen reader's column and the line's icon. */
+export const STATEMENT_KIND_WORDS: Readonly<Record<PortalStatementLine['kind'], { readonly text: string; readonly icon: string }>> = {
+  invoice: { text: 'Invoice', icon: 'receipt_long' },
+  creditNote: { text: 'Credit note', icon: 'block' },
+  payment: { text: 'Payment', icon: 'payments' },
+};
+
+/** The columns of a progress invoice, in the same words as its PDF. */
+export const PROGRESS_COLUMN_WORDS = [
+  'Scheduled value',
+  'Done before',
+  'Done this period',
+  'Stored on site',
+  'Done to date',
+  '%',
+  'Left to do',
+  'Retainage held',
+] as const;
+
+/** A decimal string that is zero ("0", "0.00", "-0.00"), read without arithmetic. */
+export const isZeroAmount = (amount: string): boolean => /^-?0*(\.0*)?$/.test(amount.trim());

@@ -1,0 +1,192 @@
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, RESPONSE_INIT, computed, effect, inject, input } from '@angular/core';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { Title } from '@angular/platform-browser';
+import { RouterLink } from '@angular/router';
+import type { PortalStatement } from '@layerbook/contracts/types';
+import { problemMessage, toProblem } from '../../core/errors/problem';
+import { formatDay, formatMoney } from '../../shared/format/money';
+import { statementUrl } from './invoice-api';
+import { isZeroAmount, STATEMENT_KIND_WORDS } from './invoice-words';
+
+/** One job's statement: every invoice, credit note and payment by date with the running balance, and the totals. */
+@Component({
+  selector: 'lb-statement-page',
+  imports: [MatIconModule, MatProgressBarModule, RouterLink],
+  template: `
+    @if (isLoading()) {
+      <mat-progress-bar mode="indeterminate" aria-label="Loading the statement" />
+    } @else if (loadMessage(); as message) {
+      <p class="lb-form-alert" role="alert">
+        <mat-icon aria-hidden="true">error</mat-icon><span>{{ message }}</span>
+      </p>
+      <p><a routerLink="/invoices">Back to your invoices</a></p>
+    } @else if (statement(); as s) {
+      <h1>Statement: {{ s.jobTitle }}</h1>
+      <p class="lb-lead">Everything invoiced, credited and paid on this job, by date.</p>
+      <dl class="totals">
+        <div>
+          <dt>Contract sum</dt>
+          <dd>{{ money(s.contractSum) }}</dd>
+        </div>
+        <div>
+          <dt>Invoiced</dt>
+          <dd>{{ money(s.invoiced) }}</dd>
+        </div>
+        @if (!isZero(s.credited)) {
+          <div>
+            <dt>Credited</dt>
+            <dd>{{ money(s.credited) }}</dd>
+          </div>
+        }
+        <div>
+          <dt>Paid</dt>
+          <dd>{{ money(s.paid) }}</dd>
+        </div>
+        <div class="strong">
+          <dt>Balance due</dt>
+          <dd>{{ money(s.balanceDue) }}</dd>
+        </div>
+        <div>
+          <dt>Still to be invoiced</dt>
+          <dd>{{ money(s.unbilled) }}</dd>
+        </div>
+      </dl>
+      @if (s.lines.length === 0) {
+        <p>Nothing invoiced on this job yet.</p>
+      } @else {
+        <div class="table-wrap" tabindex="0" role="region" aria-label="Statement lines">
+          <table class="lb-table">
+            <thead>
+              <tr>
+                <th scope="col">Date</th>
+                <th scope="col">What</th>
+                <th scope="col" class="num">Charged</th>
+                <th scope="col" class="num">Paid or credited</th>
+                <th scope="col" class="num">Balance</th>
+              </tr>
+            </thead>
+            <tbody>
+              @for (l of s.lines; track $index) {
+                <tr>
+                  <td>{{ day(l.on) }}</td>
+                  <th scope="row">
+                    <span class="what">
+                      <mat-icon aria-hidden="true">{{ kinds[l.kind].icon }}</mat-icon>
+                      <span class="lb-visually-hidden">{{ kinds[l.kind].text }}: </span>{{ l.text }}
+                    </span>
+                  </th>
+                  <td class="num">{{ isZero(l.charge) ? '' : money(l.charge) }}</td>
+                  <td class="num">{{ isZero(l.credit) ? '' : money(l.credit) }}</td>
+                  <td class="num">{{ money(l.balance) }}</td>
+                </tr>
+              }
+            </tbody>
+          </table>
+        </div>
+      }
+      <p><a routerLink="/invoices">All your invoices</a></p>
+    }
+  `,
+  styles: `
+    :host {
+      display: block;
+      max-width: 56rem;
+    }
+    .totals {
+      display: flex;
+      flex-wrap: wrap;
+      gap: 0.75rem 2rem;
+      margin: 1rem 0 1.5rem;
+    }
+    .totals dt {
+      font-size: 0.85rem;
+      color: var(--mat-sys-on-surface-variant);
+    }
+    .totals dd {
+      margin: 0;
+      font-variant-numeric: tabular-nums;
+    }
+    .strong dd {
+      font-weight: 600;
+    }
+    .table-wrap {
+      overflow-x: auto;
+    }
+    .lb-table {
+      width: 100%;
+      border-collapse: collapse;
+      margin: 0 0 1rem;
+    }
+    .lb-table th,
+    .lb-table td {
+      text-align: left;
+      padding: 0.4rem 0.5rem;
+      border-bottom: 1px solid var(--mat-sys-outline-variant);
+      vertical-align: top;
+    }
+    .lb-table thead th {
+      font-weight: 600;
+    }
+    .lb-table tbody th {
+      font-weight: 400;
+    }
+    .what {
+      display: inline-flex;
+      gap: 0.3rem;
+      align-items: center;
+    }
+    .what mat-icon {
+      flex: none;
+    }
+    .num {
+      text-align: right !important;
+      font-variant-numeric: tabular-nums;
+      white-space: nowrap;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class StatementPage {
+  private readonly title = inject(Title);
+  private readonly response = inject(RESPONSE_INIT, { optional: true });
+
+  /** route parameter: the job */
+  readonly id = input.required<string>();
+
+  private readonly loaded = httpResource<PortalStatement>(() => statementUrl(this.id()));
+
+  protected readonly statement = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
+  protected readonly isLoading = computed(() => !this.loaded.hasValue() && this.loaded.isLoading());
+  private readonly isMissing = computed(() => {
+    const error = this.loaded.error();
+    return error !== undefined && [400, 404].includes(toProblem(error).status);
+  });
+  protected readonly loadMessage = computed(() => {
+    const error = this.loaded.error();
+    if (!error) return null;
+    return this.isMissing() ? 'We could not find this job. Open its statement from your invoices.' : problemMessage(error);
+  });
+  protected readonly kinds = STATEMENT_KIND_WORDS;
+  protected readonly isZero = isZeroAmount;
+
+  constructor() {
+    effect(() => {
+      const s = this.statement();
+      if (s) this.title.setTitle(`Statement: ${s.jobTitle} · Layerbook client portal`);
+    });
+    effect(() => {
+      if (this.isMissing() && this.response) this.response.status = 404;
+    });
+  }
+
+  protected money(amount: string): string {
+    const s = this.statement();
+    return s ? formatMoney(amount, s.currency, s.locale) : '';
+  }
+
+  protected day(isoDay: string): string {
+    return formatDay(isoDay, this.statement()?.locale ?? 'en-US');
+  }
+}
