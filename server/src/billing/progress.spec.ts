@@ -88,7 +88,7 @@ describe('the work of an accepted job', () => {
     const job = await acceptedJob(t, 'Old Job Studio');
     await rows(job, `delete from job_work_items where tenant_id = $1 and job_id = $2`);
     await rows(job, `delete from job_value_lines where tenant_id = $1 and job_id = $2`);
-    await Promise.all([1, 2, 3].map(() => withTenant(t.ctx.pool, job.firmId, (tx) => ensureJobWork(tx, job.job.id))));
+    await Promise.all([1, 2, 3, 4, 5].map(() => withTenant(t.ctx.pool, job.firmId, (tx) => ensureJobWork(tx, job.job.id))));
     const res = await job.agent.get(`/api/jobs/${job.job.id}/progress`);
     expect((res.body as JobProgressView).workItems).toHaveLength(6);
     expect(await rows(job, `select count(*)::int as n from job_value_lines where tenant_id = $1 and job_id = $2`)).toEqual([{ n: 2 }]);

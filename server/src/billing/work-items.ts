@@ -108,7 +108,7 @@ export function defaultValueLines(
   return weighted.map((r, i) => ({ label: r.label, amount: amounts[i].toFixed(digits) }));
 }
 
-async function loadSource(tx: TenantTx, jobId: string, lock: boolean): Promise<JobSource | undefined> {
+async function loadSource(tx: TenantTx, jobId: string): Promise<JobSource | undefined> {
   const { rows } = await tx.client.query<JobSource>(
     `select j.contract_sum::text as contract_sum, j.currency, j.accepted_variant_id as variant_id, e.result, pv.snapshot->'scope' as scope,
             (select count(*)::int from job_work_items w where w.tenant_id = j.tenant_id and w.job_id = j.id) as work_items,
@@ -116,7 +116,7 @@ async function loadSource(tx: TenantTx, jobId: string, lock: boolean): Promise<J
        from jobs j
        join estimates e on e.tenant_id = j.tenant_id and e.id = j.estimate_id
        join proposal_versions pv on pv.tenant_id = j.tenant_id and pv.id = j.proposal_version_id
-      where j.tenant_id = $1 and j.id = $2 ${lock ? 'for update of j' : ''}`,
+      where j.tenant_id = $1 and j.id = $2`,
     [tx.tenantId, jobId],
   );
   return rows[0];
@@ -129,9 +129,12 @@ async function loadSource(tx: TenantTx, jobId: string, lock: boolean): Promise<J
  * the second waits on the job row and finds them made.
  */
 export async function ensureJobWork(tx: TenantTx, jobId: string): Promise<void> {
-  const first = await loadSource(tx, jobId, false);
+  const first = await loadSource(tx, jobId);
   if (!first || (first.work_items > 0 && first.value_lines > 0)) return;
-  const src = await loadSource(tx, jobId, true);
+  // Lock, then count again in a statement of its own: a statement that waited for the lock would
+  // still count with the snapshot it started with (READ COMMITTED), and make the work twice.
+  await tx.client.query(`select 1 from jobs where tenant_id = $1 and id = $2 for update`, [tx.tenantId, jobId]);
+  const src = await loadSource(tx, jobId);
   if (!src || (src.work_items > 0 && src.value_lines > 0)) return;
   const variant = src.result?.variants?.find((v) => v.id === src.variant_id);
   const surfaces = variant?.result?.surfaces ?? [];
