@@ -83,9 +83,11 @@ const FILTERS: Record<InvoiceListQuery['filter'], string> = {
 type ListRow = SummaryRow & { created_at_text: string };
 
 /**
- * The firm's invoices, newest first, keyset over (created_at, id) on invoices_tenant_created_idx:
- * one statement (the firm-local day computed inside it from the firm's zone and the given clock),
- * so a deep page of 100k invoices costs what the first does.
+ * The firm's invoices, newest first, keyset over (created_at, id): one statement. The page is cut
+ * from invoices alone first (a backward walk of invoices_tenant_created_idx, stopping at the limit;
+ * a name search matches the firm's few clients once, as a hashed set), and only the page's rows are
+ * joined to their job and client, so a deep page of 100k invoices costs what the first does. The
+ * firm-local day (for overdue) is computed inside it from the firm's zone and the given clock.
  */
 export function buildInvoiceListQuery(tenantId: string, q: InvoiceListQuery, now: Date): { text: string; values: unknown[] } {
   const values: unknown[] = [tenantId, now];
@@ -93,17 +95,22 @@ export function buildInvoiceListQuery(tenantId: string, q: InvoiceListQuery, now
   const where: string[] = [FILTERS[q.filter]];
   if (q.q) {
     const like = add(`%${q.q.replace(/[\\%_]/g, (ch) => `\\${ch}`)}%`);
-    where.push(`and (i.number_text ilike ${like} or c.name ilike ${like})`);
+    where.push(
+      `and (i.number_text ilike ${like} or i.client_id in (select c.id from clients c where c.tenant_id = $1 and c.name ilike ${like}))`,
+    );
   }
   if (q.after) {
     const cursor = decodeCursor(q.after, 'timestamptz');
     where.push(`and (i.created_at, i.id) < (${add(cursor.sortValue)}::timestamptz, ${add(cursor.id)}::uuid)`);
   }
-  const text = `with clock as materialized (select ($2::timestamptz at time zone f.time_zone)::date as today from firms f where f.id = $1)
+  const text = `with clock as materialized (select ($2::timestamptz at time zone f.time_zone)::date as today from firms f where f.id = $1),
+    page as materialized (select i.tenant_id, i.id, i.number_text, i.kind, i.status, i.job_id, i.client_id, i.issued_on, i.due_on, i.currency,
+        i.total, i.amount_paid, i.amount_credited, i.origin, i.created_at from invoices i where i.tenant_id = $1 ${where.join(' ')}
+      order by i.created_at desc, i.id desc limit ${add(q.limit + 1)})
     select ${summaryColumns('(select today from clock)')}, i.created_at::text as created_at_text
-    ${SUMMARY_FROM}
-    where i.tenant_id = $1 ${where.join(' ')}
-    order by i.created_at desc, i.id desc limit ${add(q.limit + 1)}`;
+      from page i join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id
+      join clients c on c.tenant_id = i.tenant_id and c.id = i.client_id
+     order by i.created_at desc, i.id desc`;
   return { text, values };
 }
 
@@ -151,6 +158,18 @@ export function reminderLabel(step: string): string {
   const d = `${n} ${n === 1 ? 'day' : 'days'}`;
   return side === 'before' ? `${d} before the due date` : `${d} after the due date`;
 }
+
+/** One transaction writes several rows at one instant (issued and sent, voided and its credit note): their order in the trail. */
+const TRAIL_ORDER = [
+  'invoice.drafted',
+  'invoice.updated',
+  'invoice.issued',
+  'invoice.sent',
+  'invoice.reminded',
+  'invoice.payment_recorded',
+  'invoice.voided',
+  'credit_note.issued',
+];
 
 type AuditData = Record<string, string | number | null | undefined>;
 
@@ -228,8 +247,8 @@ export async function getInvoice(tx: TenantTx, id: string, now: Date): Promise<I
          left join users u on a.actor_kind = 'staff' and u.id = a.actor_user_id
          left join portal_users pu on a.actor_kind = 'client' and pu.tenant_id = a.tenant_id and pu.id = a.actor_user_id
         where a.tenant_id = $1 and ((a.entity = 'invoice' and a.entity_id = $2) or (a.entity = 'credit_note' and a.entity_id = $3))
-        order by a.created_at, a.id`,
-      [tx.tenantId, id, credit?.id ?? null],
+        order by a.created_at, array_position($4::text[], a.action), a.id`,
+      [tx.tenantId, id, credit?.id ?? null, TRAIL_ORDER],
     )
   ).rows.map((a): AuditTrailEntry => ({
     at: a.created_at.toISOString(),
