@@ -1,0 +1,54 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { MAT_DIALOG_DATA, MatDialogRef } from '@angular/material/dialog';
+import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import type { InvoiceDetail } from '@layerbook/contracts/types';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { progressDraft } from './invoice-fixtures';
+import { IssueDialog } from './issue-dialog';
+
+function render(invoice: InvoiceDetail) {
+  const close = vi.fn();
+  TestBed.configureTestingModule({
+    providers: [
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      provideNoopAnimations(),
+      { provide: MAT_DIALOG_DATA, useValue: { invoice } },
+      { provide: MatDialogRef, useValue: { close } },
+    ],
+  });
+  const fixture = TestBed.createComponent(IssueDialog);
+  fixture.detectChanges();
+  const html = fixture.nativeElement as HTMLElement;
+  const submit = () => html.querySelector('form')!.dispatchEvent(new Event('submit'));
+  return { fixture, html, submit, close, http: TestBed.inject(HttpTestingController) };
+}
+
+describe('the issue dialog', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('issues dated today in the firm’s zone (no date sent) and e-mailed, then closes with the number taken', async () => {
+    const { fixture, html, submit, close, http } = render(progressDraft);
+    expect(html.textContent).toContain('E-mail it to the client (ada@example.com)');
+    submit();
+    const issue = http.expectOne({ method: 'POST', url: '/api/invoices/inv-2/issue' });
+    expect(issue.request.body).toEqual({ send: true });
+    const issued = { ...progressDraft, number: 'INV-0008', status: 'issued' as const };
+    issue.flush(issued);
+    await fixture.whenStable();
+    expect(close).toHaveBeenCalledWith({ invoice: issued, isEmailed: true });
+  });
+
+  it('does not offer the e-mail when the client has no address', () => {
+    const noEmail = { ...progressDraft, document: { ...progressDraft.document, client: { ...progressDraft.document.client, email: '' } } };
+    const { html, submit, http } = render(noEmail);
+    expect(html.querySelector('mat-checkbox')).toBeNull();
+    expect(html.textContent).toContain('The client has no e-mail address on file');
+    submit();
+    const issue = http.expectOne({ method: 'POST', url: '/api/invoices/inv-2/issue' });
+    expect(issue.request.body).toEqual({ send: false });
+    issue.flush(progressDraft);
+  });
+});
