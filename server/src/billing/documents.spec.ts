@@ -246,3 +246,24 @@ describe('the client’s invoices in the portal', () => {
     });
   });
 });
+
+describe('odd ids', () => {
+  it('answer 400 or 404, never 5xx, on every document and portal route', async () => {
+    const f = await acceptedJob(t, 'Odd Ids Plaster');
+    const ids = ['nope', '%zz', '..', '00000000-0000-0000-0000-000000000000', 'a'.repeat(300), "1' or '1'='1"];
+    for (const id of ids) {
+      const segment = encodeURIComponent(id);
+      for (const [agent, path] of [
+        [f.agent, `/api/invoices/${segment}/pdf`],
+        [f.agent, `/api/credit-notes/${segment}/pdf`],
+        [f.client.agent, `/api/portal/invoices/${segment}`],
+        [f.client.agent, `/api/portal/invoices/${segment}/pdf`],
+        [f.client.agent, `/api/portal/credit-notes/${segment}/pdf`],
+        [f.client.agent, `/api/portal/jobs/${segment}/statement`],
+      ] as const) {
+        const res = await agent.get(path);
+        expect([path, [400, 404].includes(res.status)]).toEqual([path, true]);
+      }
+    }
+  });
+});
