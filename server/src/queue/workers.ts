@@ -4,10 +4,24 @@ import type { Logger } from 'pino';
 import type { Config } from '../config';
 import { sendOutboxMail } from '../mail/send-mail-job';
 import { sendProposalReminders } from '../proposals/expiry-reminders';
+import { runBillingDaily } from '../billing/triggers/daily';
+import { runBillingEvaluate } from '../billing/triggers/evaluate';
+import { sweepBilling } from '../billing/triggers/sweep';
 import { sendFollowUpDigest, sweepFollowUps } from './follow-ups';
 import type { StartedQueue } from './job-queue';
 import { pruneExpired } from './prune';
-import { FOLLOW_UP_SWEEP_CRON, FollowUpDigestJob, FollowUpSweepJob, MailSendJob, PRUNE_EXPIRED_CRON, QUEUES } from './queues';
+import {
+  BILLING_SWEEP_CRON,
+  BillingDailyJob,
+  BillingEvaluateJob,
+  BillingSweepJob,
+  FOLLOW_UP_SWEEP_CRON,
+  FollowUpDigestJob,
+  FollowUpSweepJob,
+  MailSendJob,
+  PRUNE_EXPIRED_CRON,
+  QUEUES,
+} from './queues';
 
 export interface Workers {
   stop(): Promise<void>;
@@ -45,10 +59,15 @@ export async function startWorkers(config: Config, queue: StartedQueue, logger: 
     await sendFollowUpDigest(pool, queue, config, data, logger);
     await sendProposalReminders(pool, queue, config, data, logger, now());
   });
+  // Billing: a job's triggers after a mark; hourly, each firm's billing day at its local hour (date triggers, reminders).
+  await workEach<BillingEvaluateJob>(boss, QUEUES.billingEvaluate, 2, (data) => runBillingEvaluate(pool, data, now()));
+  await workEach<BillingSweepJob>(boss, QUEUES.billingSweep, 1, (data) => sweepBilling(pool, queue, data ?? {}, now()));
+  await workEach<BillingDailyJob>(boss, QUEUES.billingDaily, 2, (data) => runBillingDaily(pool, queue, config, data, logger, now()));
   await workEach<object>(boss, QUEUES.pruneExpired, 1, async () => logger.info(await pruneExpired(pool, now()), 'pruned expired rows'));
   // Declared once; pg-boss keeps one schedule per queue however many processes call this.
   await boss.schedule(QUEUES.followUpSweep, FOLLOW_UP_SWEEP_CRON, {}, { tz: 'UTC' });
   await boss.schedule(QUEUES.pruneExpired, PRUNE_EXPIRED_CRON, {}, { tz: 'UTC' });
+  await boss.schedule(QUEUES.billingSweep, BILLING_SWEEP_CRON, {}, { tz: 'UTC' });
   return {
     async stop() {
       // Workers stop with the queue (boss.stop); here only what the workers opened.

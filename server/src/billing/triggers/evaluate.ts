@@ -1,0 +1,110 @@
+import type { BillingTrigger } from '@layerbook/contracts';
+import { withTenant, type TenantTx } from '@layerbook/db';
+import { layerCompletion } from '@layerbook/domain';
+import type { Pool } from 'pg';
+import { localDate } from '../../firms/local-date';
+import { type Actor, SYSTEM_ACTOR } from '../../http/actor';
+import type { BillingEvaluateJob } from '../../queue/queues';
+import { draftLineInvoice } from '../drafts';
+import { draftProgressInvoice } from '../progress-invoice';
+
+interface JobRow {
+  billing_started_at: Date | null;
+  billing_method: 'schedule' | 'progress';
+  status: string;
+  walkthrough_on: string | null;
+}
+
+interface LineRow {
+  id: string;
+  trigger: BillingTrigger;
+}
+
+interface ItemRow {
+  layer_id: string;
+  layer_name: string;
+  done_on: string | null;
+}
+
+/**
+ * Whether a billing-schedule line's trigger is met today, and in words what met it (kept on the
+ * invoice for the office to read); null when it is not met yet.
+ */
+export function triggerMet(
+  trigger: BillingTrigger,
+  job: { walkthroughOn: string | null },
+  items: readonly ItemRow[],
+  today: string,
+): string | null {
+  switch (trigger.kind) {
+    case 'acceptance':
+      return 'Due on acceptance: billing started';
+    case 'date':
+      return trigger.date <= today ? `Billing date ${trigger.date} reached` : null;
+    case 'layerComplete': {
+      const done = layerCompletion(
+        items.map((i) => ({ layerId: i.layer_id, doneOn: i.done_on })),
+        trigger.layerId,
+      );
+      if (!done.isComplete) return null;
+      const name = items.find((i) => i.layer_id === trigger.layerId)?.layer_name ?? 'The layer';
+      const surfaces = done.total === 1 ? 'the one surface it covers' : `all ${done.total} surfaces it covers`;
+      return `${name} finished on ${surfaces} on ${done.completedOn}`;
+    }
+    case 'walkthrough':
+      return job.walkthroughOn ? `Final walkthrough held on ${job.walkthroughOn}` : null;
+  }
+}
+
+/**
+ * Checks a started job's billing triggers and drafts the invoice of every scheduled line whose
+ * trigger is met (the queue drafts, a person issues). Idempotent: a line with a live invoice is
+ * 'ready', not 'scheduled', and draftLineInvoice drafts once per line however often it is asked.
+ * With `progressMarked` (a percent or stored materials was just marked) a progress-billed job's one
+ * open application is drafted, or refreshed, to the period ending today. Returns how many invoices
+ * it drafted.
+ */
+export async function evaluateJobBilling(
+  tx: TenantTx,
+  jobId: string,
+  today: string,
+  actor: Actor,
+  opts: { progressMarked?: boolean } = {},
+): Promise<number> {
+  const { rows: jobs } = await tx.client.query<JobRow>(
+    `select billing_started_at, billing_method, status, walkthrough_on::text as walkthrough_on from jobs where tenant_id = $1 and id = $2`,
+    [tx.tenantId, jobId],
+  );
+  const job = jobs[0];
+  if (!job || !job.billing_started_at || job.status === 'cancelled') return 0;
+  let drafted = 0;
+  if (opts.progressMarked && job.billing_method === 'progress') {
+    const { isNew } = await draftProgressInvoice(tx, { jobId, periodEnd: today, origin: 'queue', actor });
+    if (isNew) drafted++;
+  }
+  const { rows: lines } = await tx.client.query<LineRow>(
+    `select id, trigger from payment_schedule_lines where tenant_id = $1 and job_id = $2 and status = 'scheduled' order by position`,
+    [tx.tenantId, jobId],
+  );
+  if (!lines.length) return drafted;
+  const { rows: items } = await tx.client.query<ItemRow>(
+    `select layer_id, layer_name, done_on::text as done_on from job_work_items where tenant_id = $1 and job_id = $2 order by position`,
+    [tx.tenantId, jobId],
+  );
+  for (const line of lines) {
+    const triggerText = triggerMet(line.trigger, { walkthroughOn: job.walkthrough_on }, items, today);
+    if (triggerText === null) continue;
+    const { isNew } = await draftLineInvoice(tx, { lineId: line.id, origin: 'queue', actor, today, triggerText });
+    if (isNew) drafted++;
+  }
+  return drafted;
+}
+
+/** The billing-evaluate worker: one job's triggers, on the firm's today. */
+export async function runBillingEvaluate(pool: Pool, data: BillingEvaluateJob, now: Date): Promise<number> {
+  return withTenant(pool, data.tenantId, async (tx) => {
+    const { rows } = await tx.client.query<{ time_zone: string }>(`select time_zone from firms where id = $1`, [tx.tenantId]);
+    if (!rows[0]) return 0;
+    return evaluateJobBilling(tx, data.jobId, localDate(rows[0].time_zone, now), SYSTEM_ACTOR, { progressMarked: data.progressMarked });
+  });
+}
