@@ -1,4 +1,4 @@
-import { FormControl, FormGroup } from '@angular/forms';
+import { FormArray, FormControl, FormGroup } from '@angular/forms';
 import { describe, expect, it } from 'vitest';
 import { applyProblem } from './apply-problem';
 
@@ -24,6 +24,24 @@ describe('applyProblem', () => {
     expect(form.get('email')?.errors).toEqual({ server: 'Enter an e-mail address.' });
     expect(form.get('email')?.touched).toBe(true);
     expect(form.get('address.postalCode')?.errors).toEqual({ server: 'Enter a postal code.' });
+  });
+
+  it('finds a field in a list however the path is written (lines.1.amount or lines[1].amount)', () => {
+    const form = new FormGroup({
+      lines: new FormArray([new FormGroup({ amount: new FormControl('') }), new FormGroup({ amount: new FormControl('') })]),
+    });
+    const left = applyProblem(form, {
+      type: 'about:blank',
+      title: 'Check the highlighted fields.',
+      status: 400,
+      errors: [
+        { field: 'lines[1].amount', message: 'This line is already invoiced and cannot change.' },
+        { field: 'lines.0.amount', message: 'Enter an amount.' },
+      ],
+    });
+    expect(left).toBeNull();
+    expect(form.get('lines.1.amount')?.errors).toEqual({ server: 'This line is already invoiced and cannot change.' });
+    expect(form.get('lines.0.amount')?.errors).toEqual({ server: 'Enter an amount.' });
   });
 
   it('says on top what no field can carry', () => {

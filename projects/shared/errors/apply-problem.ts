@@ -8,7 +8,8 @@ import type { Problem } from '@layerbook/contracts/types';
 export function applyProblem(form: AbstractControl, problem: Problem): string | null {
   const unplaced: string[] = [];
   for (const { field, message } of problem.errors ?? []) {
-    const control = field ? form.get(field) : null;
+    // Dotted paths (`lines.2.amount`, as zod names them) or the engine's (`lines[2].amount`): the same field.
+    const control = field ? form.get(field.replace(/\[(\d+)\]/g, '.$1')) : null;
     if (control && control !== form) {
       control.setErrors({ ...control.errors, server: message });
       control.markAsTouched();
