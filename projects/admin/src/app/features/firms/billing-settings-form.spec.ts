@@ -57,6 +57,13 @@ describe('billing settings form ↔ BillingSettings', () => {
     expect(days.valid).toBe(true);
     form.controls.invoicePrefix.setValue('A-VERY-LONG-PREFIX');
     expect(form.controls.invoicePrefix.hasError('maxlength')).toBe(true);
+    form.controls.invoicePrefix.setValue('INV#');
+    expect(form.controls.invoicePrefix.hasError('pattern')).toBe(true);
+    form.controls.invoicePrefix.setValue('2027/INV_');
+    expect(form.controls.invoicePrefix.valid).toBe(true);
+    // The API takes a percent with decimals (7.5 %), so the form does too.
+    form.controls.retainage.controls.workPercent.setValue(7.5);
+    expect(form.controls.retainage.controls.workPercent.valid).toBe(true);
   });
 
   it('sends a share rule as a whole percent and an amount without separators', () => {

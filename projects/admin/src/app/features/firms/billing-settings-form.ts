@@ -11,7 +11,7 @@ import {
 import { amountText, toAmount } from '../../shared/forms/money-input';
 import { requiredText } from '../../shared/forms/text-validators';
 
-/** A whole number (the API takes whole percents and whole days); blank is left to `required`. */
+/** A whole number (the API takes whole days and a whole count of reminders); blank is left to `required`. */
 function whole(control: AbstractControl): ValidationErrors | null {
   const value: unknown = control.value;
   if (value === null || value === undefined || value === '') return null;
@@ -37,7 +37,11 @@ function recheck(on: AbstractControl, dependents: readonly AbstractControl[]): v
 }
 
 const percent = (validators: ValidatorFn[] = [Validators.required]) =>
-  new FormControl<number | null>(null, [...validators, Validators.min(L.percent.min), Validators.max(L.percent.max), whole]);
+  new FormControl<number | null>(null, [...validators, Validators.min(L.percent.min), Validators.max(L.percent.max)]);
+/** The API's prefix characters (packages/contracts billing settings schema). */
+export const PREFIX_PATTERN = /^[A-Za-z0-9 ./_-]*$/;
+const prefix = () =>
+  new FormControl('', { nonNullable: true, validators: [Validators.maxLength(L.prefixMaxLength), Validators.pattern(PREFIX_PATTERN)] });
 const days = (range: { min: number; max: number }, validators: ValidatorFn[]) =>
   new FormControl<number | null>(null, [...validators, Validators.min(range.min), Validators.max(range.max), whole]);
 
@@ -85,8 +89,8 @@ export function billingSettingsForm() {
     retainage,
     depositCredit: new FormControl<DepositCreditRuleSetting>('prorata', { nonNullable: true }),
     reminders,
-    invoicePrefix: new FormControl('', { nonNullable: true, validators: Validators.maxLength(L.prefixMaxLength) }),
-    creditNotePrefix: new FormControl('', { nonNullable: true, validators: Validators.maxLength(L.prefixMaxLength) }),
+    invoicePrefix: prefix(),
+    creditNotePrefix: prefix(),
     invoiceFooter: new FormControl('', { nonNullable: true, validators: Validators.maxLength(L.footerMaxLength) }),
   });
 }
@@ -169,9 +173,9 @@ export function readBillingForm(form: BillingSettingsFormGroup): BillingSettings
 
 /** "1000", "1000.0" and "1000.00" are one amount (compared as text: money is never a float here). */
 function plainAmount(amount: string): string {
-  const [whole, fraction = ''] = amount.trim().split('.');
+  const [units, fraction = ''] = amount.trim().split('.');
   const digits = fraction.replace(/0+$/, '');
-  return digits ? `${whole}.${digits}` : whole;
+  return digits ? `${units}.${digits}` : units;
 }
 
 function sameCap(a: DepositCapSetting, b: DepositCapSetting): boolean {

@@ -85,12 +85,12 @@ export class BillingSettingsPage {
   protected readonly creditLabels = DEPOSIT_CREDIT_RULE_LABELS;
   protected readonly words = {
     amount: { required: 'Enter the amount.', ...AMOUNT_WORDS },
-    percent: { required: 'Enter a percent.', min: 'At least 0 %.', max: 'At most 100 %.', whole: 'A whole percent, like 10.' },
+    percent: { required: 'Enter a percent.', min: 'Cannot be negative.', max: 'At most 100 %.' },
     termsDays: range(L.termsDays.min, L.termsDays.max, 'days'),
     reminderDays: range(L.reminderDays.min, L.reminderDays.max, 'days'),
     maxAfter: range(L.maxAfter.min, L.maxAfter.max, 'reminders'),
     ruleName: { required: 'Name the rule as it should be printed.', ...tooLong(L.depositCapNameMaxLength) },
-    prefix: tooLong(L.prefixMaxLength),
+    prefix: { ...tooLong(L.prefixMaxLength), pattern: 'Use letters, digits, spaces and . / _ - only.' },
     footer: tooLong(L.footerMaxLength),
   };
 

@@ -5,6 +5,7 @@ import type {
   InvoiceDetail,
   InvoiceDraftCreate,
   JobBillingView,
+  JobProgressView,
   ProgressMark,
   ValueLinesUpdate,
 } from '@layerbook/contracts/types';
@@ -19,8 +20,8 @@ export class JobBillingApi {
     return `/api/jobs/${encodeURIComponent(jobId)}/${rest}`;
   }
 
-  saveSchedule(jobId: string, update: BillingScheduleUpdate): Promise<unknown> {
-    return firstValueFrom(this.http.put<unknown>(this.url(jobId, 'billing/schedule'), update));
+  saveSchedule(jobId: string, update: BillingScheduleUpdate): Promise<JobBillingView> {
+    return firstValueFrom(this.http.put<JobBillingView>(this.url(jobId, 'billing/schedule'), update));
   }
 
   startBilling(jobId: string): Promise<JobBillingView> {
@@ -31,9 +32,9 @@ export class JobBillingApi {
     return firstValueFrom(this.http.put<JobBillingView>(this.url(jobId, 'billing/value-lines'), update));
   }
 
-  /** One mark from the work; the answer is the work items again, so callers reload the billing view. */
-  markProgress(jobId: string, mark: ProgressMark): Promise<unknown> {
-    return firstValueFrom(this.http.post<unknown>(this.url(jobId, 'progress'), mark));
+  /** One mark from the work; the answer carries no money, so callers read the billing view again. */
+  markProgress(jobId: string, mark: ProgressMark): Promise<JobProgressView> {
+    return firstValueFrom(this.http.post<JobProgressView>(this.url(jobId, 'progress'), mark));
   }
 
   draftInvoice(jobId: string, draft: InvoiceDraftCreate): Promise<InvoiceDetail> {

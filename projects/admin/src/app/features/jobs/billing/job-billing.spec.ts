@@ -119,7 +119,8 @@ async function render(v: JobBillingView) {
   return { fixture, http, host: fixture.nativeElement as HTMLElement };
 }
 
-describe('JobBilling (the job page billing sections)', () => {
+// Rendering every section (Material fields, datepickers) takes seconds in jsdom on a busy machine.
+describe('JobBilling (the job page billing sections)', { timeout: 30_000 }, () => {
   afterEach(() => TestBed.inject(HttpTestingController).verify());
 
   it('shows the totals, the terms by the rule name, the ready count and the checks in words', async () => {

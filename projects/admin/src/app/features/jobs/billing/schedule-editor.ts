@@ -192,9 +192,9 @@ export class ScheduleEditor {
       return;
     }
     const saved = await this.submission.send(this.form, () => this.api.saveSchedule(this.view().jobId, readScheduleForm(this.form)));
-    if (saved !== undefined) {
+    if (saved) {
       this.form.markAsPristine();
-      this.changed.emit(null);
+      this.changed.emit(saved);
     }
   }
 

@@ -53,11 +53,15 @@ describe('progressMarks (only what changed, each with its own key)', () => {
     expect(progressMarks(v, { percentComplete: 80, storedMaterials: '1500' }, '2026-12-10', 'USD', key)).toEqual([]);
   });
 
-  it('refuses a percent over 100 or below 0 beside the field', () => {
+  it('refuses a percent over 100, below 0 or with more than two decimals, as the API does', () => {
     const reading = progressGroup(line('v1', 1, 'Prep', '6000.00'));
     reading.controls.percentComplete.setValue(101);
     expect(reading.controls.percentComplete.hasError('max')).toBe(true);
     reading.controls.percentComplete.setValue(-1);
     expect(reading.controls.percentComplete.hasError('min')).toBe(true);
+    reading.controls.percentComplete.setValue(40.125);
+    expect(reading.controls.percentComplete.hasError('decimals')).toBe(true);
+    reading.controls.percentComplete.setValue(40.25);
+    expect(reading.controls.percentComplete.valid).toBe(true);
   });
 });

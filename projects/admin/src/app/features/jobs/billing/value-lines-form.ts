@@ -1,9 +1,17 @@
-import { FormArray, FormControl, FormGroup, Validators } from '@angular/forms';
+import { AbstractControl, FormArray, FormControl, FormGroup, ValidationErrors, Validators } from '@angular/forms';
 import type { ProgressMark, ValueLineView, ValueLinesUpdate } from '@layerbook/contracts/types';
 import { toMinorUnits } from '@layerbook/domain';
 import { amountText, toAmount } from '../../../shared/forms/money-input';
 import { requiredText } from '../../../shared/forms/text-validators';
 import { LINE_LABEL_MAX_LENGTH } from './schedule-form';
+
+/** The API takes a percent complete with at most two decimals (40.25). */
+function twoDecimals(control: AbstractControl): ValidationErrors | null {
+  const value: unknown = control.value;
+  if (typeof value !== 'number' && typeof value !== 'string') return null;
+  if (value === '') return null;
+  return /^\d+(\.\d{1,2})?$/.test(String(value)) ? null : { decimals: true };
+}
 
 /** One schedule-of-values line being edited; names follow the API's paths (`lines.1.scheduledValue`). */
 export function valueLineGroup(line?: Pick<ValueLineView, 'id' | 'label' | 'scheduledValue'>) {
@@ -44,6 +52,7 @@ export function progressGroup(line: Pick<ValueLineView, 'percentComplete' | 'sto
       Validators.required,
       Validators.min(0),
       Validators.max(100),
+      twoDecimals,
     ]),
     storedMaterials: new FormControl(line.storedMaterials, { nonNullable: true, validators: [Validators.required, amountText] }),
   });

@@ -55,7 +55,12 @@ export class ValueLines {
   protected readonly words = {
     label: { required: 'Give the line a name.', ...tooLong(LINE_LABEL_MAX_LENGTH) },
     amount: { required: 'Enter an amount.', ...AMOUNT_WORDS },
-    percent: { required: 'Enter how far the work is, 0 to 100.', min: 'At least 0 %.', max: 'At most 100 %.' },
+    percent: {
+      required: 'Enter how far the work is, 0 to 100.',
+      min: 'At least 0 %.',
+      max: 'At most 100 %.',
+      decimals: 'Use at most two decimals.',
+    },
     date: { required: 'Choose the day.', matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.', ...DATE_YEAR_WORDS },
   };
 
