@@ -26,11 +26,11 @@ export function invoiceStatusWords(inv: Pick<PortalInvoiceSummary, 'status' | 'i
   return CLIENT_STATUS[inv.status === 'draft' ? 'issued' : inv.status];
 }
 
-/** What a statement line is, for a screen reader's column and the line's icon. */
+/** What a statement line is, for a screen reader (a payment's own text already says so) and the line's icon. */
 export const STATEMENT_KIND_WORDS: Readonly<Record<PortalStatementLine['kind'], { readonly text: string; readonly icon: string }>> = {
   invoice: { text: 'Invoice', icon: 'receipt_long' },
   creditNote: { text: 'Credit note', icon: 'block' },
-  payment: { text: 'Payment', icon: 'payments' },
+  payment: { text: '', icon: 'payments' },
 };
 
 /** The columns of a progress invoice, in the same words as its PDF. */

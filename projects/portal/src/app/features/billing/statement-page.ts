@@ -74,7 +74,10 @@ import { isZeroAmount, STATEMENT_KIND_WORDS } from './invoice-words';
                   <th scope="row">
                     <span class="what">
                       <mat-icon aria-hidden="true">{{ kinds[l.kind].icon }}</mat-icon>
-                      <span class="lb-visually-hidden">{{ kinds[l.kind].text }}: </span>{{ l.text }}
+                      @if (kinds[l.kind].text; as kind) {
+                        <span class="lb-visually-hidden">{{ kind }}: </span>
+                      }
+                      {{ l.text }}
                     </span>
                   </th>
                   <td class="num">{{ isZero(l.charge) ? '' : money(l.charge) }}</td>
