@@ -21,10 +21,11 @@ const tax = (over: Partial<IncludedTaxInput>): string => {
 // Tax inside a tax-inclusive price is price × tax ÷ (price + tax), rounded to the cent (common practice, no source).
 describe('tax contained in an invoice when the contract sum includes tax', () => {
   it.each([
-    // thirds of 100.00 with 7.00 tax inside: 33.33 × 7 / 100 = 2.3331 → 2.33; the last third takes the rest
+    // thirds of 100.00 with 7.00 tax inside, rounded on the running total: 33.33 × 7 / 100 = 2.3331 → 2.33;
+    // 66.66 × 7 / 100 = 4.6662 → 4.67, less 2.33 = 2.34; the last third takes the rest, 7.00 − 4.67
     ['first third', { amount: '33.33' }, '2.33'],
-    ['second third', { amount: '33.33', billedBefore: '33.33', taxBilledBefore: '2.33' }, '2.33'],
-    ['last third closes the contract and takes 7.00 − 4.66', { amount: '33.34', billedBefore: '66.66', taxBilledBefore: '4.66' }, '2.34'],
+    ['second third', { amount: '33.33', billedBefore: '33.33', taxBilledBefore: '2.33' }, '2.34'],
+    ['last third closes the contract and takes 7.00 − 4.67', { amount: '33.34', billedBefore: '66.66', taxBilledBefore: '4.67' }, '2.33'],
     // 10,000 + 8.25 % = 10,825.00 with 825.00 tax; a 2,500.00 deposit holds 2,500 × 825 / 10,825 = 190.5311… → 190.53
     ['a deposit on a taxed contract', { amount: '2500.00', contractSum: '10825.00', contractTax: '825.00' }, '190.53'],
     ['half-cent rounds away from zero', { amount: '50.00', contractSum: '100.00', contractTax: '0.01' }, '0.01'],

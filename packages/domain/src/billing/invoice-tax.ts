@@ -19,8 +19,9 @@ export interface IncludedTaxInput {
 }
 
 /**
- * The tax contained in an invoice amount when the contract sum already includes tax: the
- * invoice's share of the contract's tax, rounded half up to the currency's minor unit. The
+ * The tax contained in an invoice amount when the contract sum already includes tax: the tax share
+ * of everything billed so far, rounded half up to the currency's minor unit, less the tax earlier
+ * invoices carried. The
  * invoice that brings the billed total to the contract sum exactly takes the rest of the tax, so
  * the invoices' tax adds up to the contract's tax to the cent however the rounding fell
  * (common practice, no source).
@@ -36,6 +37,9 @@ export function includedTax(input: IncludedTaxInput): Decimal {
     throw new DomainInputError('contractTax', 'The tax cannot be more than the contract sum that includes it.');
   }
   if (contractSum.isZero()) return new Decimal(0);
-  if (billedBefore.plus(amount).equals(contractSum)) return contractTax.minus(taxBilledBefore);
-  return amount.times(contractTax).div(contractSum).toDecimalPlaces(digits, Decimal.ROUND_HALF_UP);
+  // Rounded on the running total, not per invoice: each invoice's tax is at most its amount, and
+  // the invoice that reaches the contract sum lands on the contract's tax exactly.
+  const billedAfter = billedBefore.plus(amount);
+  if (billedAfter.equals(contractSum)) return contractTax.minus(taxBilledBefore);
+  return billedAfter.times(contractTax).div(contractSum).toDecimalPlaces(digits, Decimal.ROUND_HALF_UP).minus(taxBilledBefore);
 }
