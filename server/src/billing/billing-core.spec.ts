@@ -345,4 +345,29 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     const office = await joinAs(t, f, 'office');
     expect((await office.agent.get(`/api/invoices/${invoiceId}`)).status).toBe(200);
   });
+
+  it('refuses amounts finer than the currency allows (yen has no cents): 400 naming the field', async () => {
+    await withTenant(t.ctx.pool, other.firmId, (tx) =>
+      tx.client.query(
+        `update jobs set currency = 'JPY', contract_sum = 480000, original_contract_sum = 480000, contract_tax = 0 where tenant_id = $1 and id = $2`,
+        [tx.tenantId, other.jobId],
+      ),
+    );
+    const res = await other.send('put', `/api/jobs/${other.jobId}/billing/value-lines`, {
+      lines: [
+        { label: 'Walls', scheduledValue: '240000.50' },
+        { label: 'Ceiling', scheduledValue: '239999.50' },
+      ],
+    });
+    expect(res.status).toBe(400);
+    expect(res.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines[0].scheduledValue', 'lines[1].scheduledValue']);
+    const deposit = await other.send('put', `/api/jobs/${other.jobId}/billing/schedule`, {
+      method: 'progress',
+      lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '1000.50' }],
+    });
+    expect(deposit.status).toBe(400);
+    expect(deposit.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines[0].amount']);
+    const view = await other.billing();
+    expect(view).toMatchObject({ currency: 'JPY', contractSum: '480000', method: 'schedule' });
+  });
 });

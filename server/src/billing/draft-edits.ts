@@ -7,6 +7,7 @@ import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
 import { firmToday, loadBillingJob } from './billing-job';
 import { draftLineInvoice, draftRetainageInvoice } from './drafts';
+import { fitsCurrency } from './money';
 import { billedWorkByLine, draftProgressInvoice, loadValueLines, percentOf } from './progress-invoice';
 
 /** POST /api/jobs/:id/invoices: a draft the office asks for (a schedule line, a progress application, a retainage release). */
@@ -109,6 +110,12 @@ export async function updateDraft(tx: TenantTx, actor: Actor, id: string, body: 
         } catch (e) {
           if (!(e instanceof DomainInputError)) throw e;
           return problems.push({ field: `${at}.workToDate`, message: e.message });
+        }
+        if (!fitsCurrency(p.storedMaterials, job.currency)) {
+          return problems.push({
+            field: `${at}.storedMaterials`,
+            message: `Amounts in ${job.currency} have no more decimals than its smallest coin.`,
+          });
         }
         if (work.plus(p.storedMaterials).greaterThan(line.scheduled_value)) {
           return problems.push({

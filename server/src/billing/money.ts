@@ -12,3 +12,9 @@ export function moneyOut(value: string | Decimal, currency: string): string {
   if (typeof value === 'string' && digits === 2 && TWO_DECIMALS.test(value)) return value;
   return new Decimal(value).toFixed(digits);
 }
+
+/** Whether an amount typed for this currency has no more decimals than its minor units allow ("10.50" is not yen). */
+export function fitsCurrency(amount: string, currency: string): boolean {
+  const decimals = amount.split('.')[1]?.replace(/0+$/, '').length ?? 0;
+  return decimals <= minorUnitDigits(currency);
+}

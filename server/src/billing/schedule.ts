@@ -16,6 +16,7 @@ import { layerMilestones } from '../jobs/jobs';
 import type { JobQueue } from '../queue/job-queue';
 import { type BillingJob, loadBillingJob } from './billing-job';
 import { getJobBilling, loadScheduleLines, type ScheduleLineRow } from './job-billing';
+import { fitsCurrency } from './money';
 import { billedWorkByLine, loadValueLines } from './progress-invoice';
 import { billingTermsFor, loadBillingSettings, toDepositCapRule } from './settings';
 import { enqueueBillingCheck } from './triggers/enqueue';
@@ -40,6 +41,10 @@ function progressScheduleProblems(body: BillingScheduleUpdate, job: BillingJob, 
   if (body.lines.length > 1) problems.push({ field: 'lines', message: 'A job billed by progress has at most one deposit line.' });
   body.lines.forEach((l, i) => {
     if (l.role !== 'deposit') return;
+    if (!fitsCurrency(l.amount, job.currency)) {
+      problems.push({ field: `lines[${i}].amount`, message: `Amounts in ${job.currency} have no more decimals than its smallest coin.` });
+      return;
+    }
     const check = checkDeposit(l.amount, rule, job.contract_sum, job.currency);
     if (!check.isWithinCap) {
       problems.push({ field: `lines[${i}].amount`, message: `The deposit is over the cap of ${check.cap?.toFixed(2)} for this contract.` });
@@ -277,6 +282,12 @@ export async function updateValueLines(
   const billed = await billedWorkByLine(tx, job.id);
   const problems: FieldProblem[] = [];
   body.lines.forEach((l, i) => {
+    if (!fitsCurrency(l.scheduledValue, job.currency)) {
+      problems.push({
+        field: `lines[${i}].scheduledValue`,
+        message: `Amounts in ${job.currency} have no more decimals than its smallest coin.`,
+      });
+    }
     if (l.id === undefined) return;
     if (!byId.has(l.id)) problems.push({ field: `lines[${i}].id`, message: 'No such line on this job.' });
     const done = billed.get(l.id);
