@@ -70,6 +70,25 @@ describe('the invoice page', () => {
     patch.flush(progressDraft);
   });
 
+  it('takes the work as a percent, shows what it comes to, and sends the percent', async () => {
+    const { fixture, html, http } = await render(progressDraft);
+    const percentToggle = [...html.querySelectorAll<HTMLButtonElement>('mat-button-toggle button')].find(
+      (b) => b.textContent?.trim() === '%',
+    )!;
+    percentToggle.click();
+    fixture.detectChanges();
+    const work = html.querySelector<HTMLInputElement>('input[aria-label="Percent done to date for Walls, base coat"]')!;
+    expect(work.value).toBe('35'); // nothing stored, so the percent complete is the work's own
+    work.value = '62.5';
+    work.dispatchEvent(new Event('input'));
+    fixture.detectChanges();
+    expect(work.closest('mat-form-field')?.textContent).toContain('$6,250.00 to date');
+    html.querySelector<HTMLFormElement>('form[aria-labelledby="progress-heading"]')!.dispatchEvent(new Event('submit'));
+    const patch = http.expectOne({ method: 'PATCH', url: '/api/invoices/inv-2' });
+    expect(patch.request.body.progressLines).toEqual([{ valueLineId: 'vl-1', workToDate: { percent: 62.5 }, storedMaterials: '0.00' }]);
+    patch.flush(progressDraft);
+  });
+
   it('puts the server’s refusal beside the line’s field it names', async () => {
     const { fixture, html, http } = await render(progressDraft);
     const stored = html.querySelector<HTMLInputElement>('input[aria-label="Materials stored on site for Walls, base coat"]')!;

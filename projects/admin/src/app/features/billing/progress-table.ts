@@ -128,6 +128,13 @@ export class ProgressTable {
     return preview.isValid ? preview.thisPeriod : null;
   }
 
+  /** The amount a typed percent comes to, to date (the domain rounds it to the currency). */
+  protected amountToDate(line: ProgressTableLine, index: number): string | null {
+    const { mode, workToDate } = this.lineGroup(index).getRawValue();
+    const preview = previewLine(line, mode, workToDate, this.currency());
+    return preview?.isValid ? preview.toDate : null;
+  }
+
   protected switchMode(line: ProgressTableLine, index: number, change: MatButtonToggleChange): void {
     const group = this.lineGroup(index);
     const mode = change.value as WorkMode;
