@@ -47,7 +47,14 @@ interface DraftRow {
   schedule_line_id: string | null;
 }
 
+/** Locks the draft's job, then the draft (the order issuing and drafting take them in, so they never deadlock). */
 async function lockDraft(tx: TenantTx, id: string): Promise<DraftRow> {
+  const owner = await tx.client.query<{ job_id: string }>(`select job_id from invoices where tenant_id = $1 and id = $2`, [
+    tx.tenantId,
+    id,
+  ]);
+  if (!owner.rows[0]) throw notFound('invoice');
+  await loadBillingJob(tx, owner.rows[0].job_id, true);
   const { rows } = await tx.client.query<DraftRow>(
     `select id, job_id, kind, status, period_end::text as period_end, schedule_line_id from invoices where tenant_id = $1 and id = $2 for update`,
     [tx.tenantId, id],

@@ -38,6 +38,14 @@ export interface IssueDeps {
  * and e-mail it when asked. Issued twice: 409.
  */
 export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, body: InvoiceIssue, now: Date): Promise<void> {
+  // The job first, then the invoice (the order drafting takes them in): issues on one job go one at
+  // a time, so each one's tax and deposit credit see the others.
+  const owner = await tx.client.query<{ job_id: string }>(`select job_id from invoices where tenant_id = $1 and id = $2`, [
+    tx.tenantId,
+    id,
+  ]);
+  if (!owner.rows[0]) throw notFound('invoice');
+  const job = await loadBillingJob(tx, owner.rows[0].job_id, true);
   const inv = (
     await tx.client.query<LockedInvoice>(
       `select id, job_id, kind, status, schedule_line_id, subtotal::text as subtotal, lines, progress
@@ -47,7 +55,6 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
   ).rows[0];
   if (!inv) throw notFound('invoice');
   if (inv.status !== 'draft') throw conflict('This invoice is already issued.');
-  const job = await loadBillingJob(tx, inv.job_id);
   assertBillingStarted(job);
   const subtotal = new Decimal(inv.subtotal);
   const isProgressJob = job.billing_method === 'progress' && (inv.kind === 'progress' || inv.kind === 'retainage');

@@ -75,22 +75,24 @@ export function invoiceRoutes(ctx: AppContext): Router {
     res.status(204).end();
   });
 
+  // Issuing holds the firm's counter row until it commits: the page is read in a second transaction
+  // so other issuers wait only for the issue itself.
   router.post('/:id/issue', async (req, res) => {
-    const detail = await withStaff(ctx, req, 'office', async (tx, staff) => {
+    const id = await withStaff(ctx, req, 'office', async (tx, staff) => {
       const { id } = parse(idParam, req.params);
       await issueInvoice(tx, deps, staffActor(staff), id, parse(invoiceIssue, req.body), ctx.now());
-      return getInvoice(tx, id, ctx.now());
+      return id;
     });
-    res.json(detail satisfies InvoiceDetail);
+    res.json((await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, id, ctx.now()))) satisfies InvoiceDetail);
   });
 
   router.post('/:id/void', async (req, res) => {
-    const detail = await withStaff(ctx, req, 'office', async (tx, staff) => {
+    const id = await withStaff(ctx, req, 'office', async (tx, staff) => {
       const { id } = parse(idParam, req.params);
       await voidInvoice(tx, deps, staffActor(staff), id, parse(invoiceVoid, req.body).reason, ctx.now());
-      return getInvoice(tx, id, ctx.now());
+      return id;
     });
-    res.json(detail satisfies InvoiceDetail);
+    res.json((await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, id, ctx.now()))) satisfies InvoiceDetail);
   });
 
   router.post('/:id/payments', async (req, res) => {
