@@ -16,5 +16,10 @@ export const auditLog = pgTable(
     data: jsonb('data').notNull().default({}),
     createdAt: createdAt(),
   },
-  (t) => [index('audit_log_tenant_created_idx').on(t.tenantId, t.createdAt, t.id), tenantPolicy('audit_log')],
+  (t) => [
+    index('audit_log_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
+    // a record's trail (an invoice page, a job's history) without reading the firm's whole log
+    index('audit_log_entity_idx').on(t.tenantId, t.entityId, t.createdAt),
+    tenantPolicy('audit_log'),
+  ],
 );

@@ -1,0 +1,1 @@
+CREATE INDEX "audit_log_entity_idx" ON "audit_log" USING btree ("tenant_id","entity_id","created_at");
