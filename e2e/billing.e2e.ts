@@ -124,6 +124,14 @@ test('the office bills the deposit, marks the first layers done and issues the d
 }) => {
   const jobPath = `/jobs/${jobId}`;
   await signIn(page, DEMO.office);
+  // The demo firm's own billing (server/src/seed/demo-billing.ts): Today's money and the invoice list.
+  const money = page.getByRole('region', { name: 'Money' });
+  await expect(money).toContainText('INV-0002');
+  await money.screenshot({ path: 'e2e/.artifacts/billing-today.png' });
+  await openLive(page, '/billing');
+  const list = page.getByRole('region', { name: 'Invoices' });
+  await expect(list.getByRole('link', { name: 'INV-0001' })).toBeVisible();
+  await list.screenshot({ path: 'e2e/.artifacts/billing-list.png' });
   await openLive(page, jobPath);
   await expect(page.getByRole('heading', { level: 1, name: TITLE })).toBeVisible();
 
@@ -171,13 +179,13 @@ test('the office bills the deposit, marks the first layers done and issues the d
   await expect(portal.getByRole('heading', { name: 'Your projects' })).toBeVisible();
   await portal.getByRole('link', { name: 'Your invoices' }).click();
   await expect(portal.getByRole('heading', { level: 1, name: 'Your invoices' })).toBeVisible();
-  const list = portal.getByRole('region', { name: 'Your invoices' });
+  const yours = portal.getByRole('region', { name: 'Your invoices' });
   for (const number of [depositNumber, stageNumber]) {
-    await expect(list.getByRole('row').filter({ has: portal.getByRole('link', { name: number, exact: true }) })).toContainText(TITLE);
+    await expect(yours.getByRole('row').filter({ has: portal.getByRole('link', { name: number, exact: true }) })).toContainText(TITLE);
   }
   await portal.screenshot({ path: 'e2e/.artifacts/billing-portal-invoices.png', fullPage: true });
 
-  await list.getByRole('link', { name: stageNumber, exact: true }).click();
+  await yours.getByRole('link', { name: stageNumber, exact: true }).click();
   await expect(portal.getByRole('heading', { level: 1, name: `Invoice ${stageNumber}` })).toBeVisible();
   await expect(portal.getByRole('heading', { name: 'Pay online — coming soon' })).toBeVisible();
   await portal.screenshot({ path: 'e2e/.artifacts/billing-portal-invoice.png', fullPage: true });
