@@ -5,6 +5,7 @@ import {
   invoiceWords,
   lineStatus,
   retainageWords,
+  serverSaid,
   sumDifferenceWords,
   triggerWords,
 } from './billing-words';
@@ -117,5 +118,15 @@ describe('retainageWords', () => {
     ],
   ])('%j reads "%s"', (r, words) => {
     expect(retainageWords(r)).toBe(words);
+  });
+});
+
+describe('serverSaid (a server error on a control no field shows)', () => {
+  it('answers the server words, or null', () => {
+    expect(serverSaid({ errors: { server: 'A job billed by progress has at most one deposit line.' } })).toBe(
+      'A job billed by progress has at most one deposit line.',
+    );
+    expect(serverSaid({ errors: { required: true } })).toBeNull();
+    expect(serverSaid({ errors: null })).toBeNull();
   });
 });

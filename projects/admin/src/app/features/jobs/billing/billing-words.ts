@@ -147,3 +147,9 @@ export function retainageWords(r: RetainageSetting): string {
     ? `${held}, held to the end of the job`
     : `${held}, no more held once the job is ${r.stopAtPercentComplete} % complete`;
 }
+
+/** What the server said about a control no field shows (the method, the list of lines), if anything. */
+export function serverSaid(control: { readonly errors: Record<string, unknown> | null }): string | null {
+  const said = control.errors?.['server'];
+  return typeof said === 'string' ? said : null;
+}

@@ -174,4 +174,27 @@ describe('JobBilling (the job page billing sections)', { timeout: 30_000 }, () =
     http.expectOne(`/api/jobs/${JOB}/history`).flush({ items: [] });
     await fixture.whenStable();
   });
+
+  it('shows what the server refuses beside the field, or under the lines when no field carries it', async () => {
+    const { fixture, http, host } = await render(view());
+    const save = Array.from(host.querySelectorAll('button')).find((b) => b.textContent?.trim() === 'Save the schedule');
+    save?.click();
+    const sent = http.expectOne({ method: 'PUT', url: `/api/jobs/${JOB}/billing/schedule` });
+    expect((sent.request.body as { lines: unknown[] }).lines).toHaveLength(3);
+    sent.flush(
+      {
+        type: 'about:blank',
+        title: 'Check the highlighted fields.',
+        status: 400,
+        errors: [
+          { field: 'lines', message: 'Keep that line.' },
+          { field: 'lines[1].amount', message: 'Enter the amount as the contract allows.' },
+        ],
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
+    await fixture.whenStable();
+    expect(host.textContent).toContain('Keep that line.');
+    expect(host.textContent).toContain('Enter the amount as the contract allows.');
+  });
 });

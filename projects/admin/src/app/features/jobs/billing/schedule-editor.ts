@@ -30,7 +30,7 @@ import { Submission } from '../../../shared/forms/submission';
 import { CalendarDatePipe } from '../../../shared/ui/calendar-date-pipe';
 import { ConfirmDialog, type ConfirmDialogData } from '../../../shared/ui/confirm-dialog';
 import { FormAlert } from '../../../shared/ui/form-alert';
-import { LINE_ROLE_LABELS, depositCapWords, lineStatus, sumDifferenceWords, type ScheduleLineRole } from './billing-words';
+import { LINE_ROLE_LABELS, depositCapWords, lineStatus, serverSaid, sumDifferenceWords, type ScheduleLineRole } from './billing-words';
 import { JobBillingApi } from './job-billing-api';
 import {
   LINE_LABEL_MAX_LENGTH,
@@ -88,6 +88,7 @@ export class ScheduleEditor {
   protected readonly roles: readonly ScheduleLineRole[] = ['deposit', 'milestone', 'final'];
   protected readonly roleLabels = LINE_ROLE_LABELS;
   protected readonly lineStatus = lineStatus;
+  protected readonly serverSaid = serverSaid;
   protected readonly words = {
     label: { required: 'Give the line a name, as the client will read it.', ...tooLong(LINE_LABEL_MAX_LENGTH) },
     amount: { required: 'Enter an amount.', ...AMOUNT_WORDS },

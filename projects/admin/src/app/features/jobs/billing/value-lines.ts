@@ -18,7 +18,7 @@ import { AMOUNT_WORDS } from '../../../shared/forms/money-input';
 import { Submission } from '../../../shared/forms/submission';
 import { FormAlert } from '../../../shared/ui/form-alert';
 import { MoneyPipe } from '../../../shared/ui/money-pipe';
-import { sumDifferenceWords } from './billing-words';
+import { serverSaid, sumDifferenceWords } from './billing-words';
 import { JobBillingApi, newClientKey } from './job-billing-api';
 import { LINE_LABEL_MAX_LENGTH } from './schedule-form';
 import { type ValueLinesFormGroup, progressGroup, progressMarks, readValueLines, valueLineGroup, valueLinesForm } from './value-lines-form';
@@ -52,6 +52,7 @@ export class ValueLines {
   protected readonly isHydrated = hydratedSignal();
   protected readonly submission = new Submission();
   protected readonly errorText = errorText;
+  protected readonly serverSaid = serverSaid;
   protected readonly words = {
     label: { required: 'Give the line a name.', ...tooLong(LINE_LABEL_MAX_LENGTH) },
     amount: { required: 'Enter an amount.', ...AMOUNT_WORDS },
