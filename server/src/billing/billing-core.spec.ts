@@ -1,5 +1,6 @@
 import type { BillingScheduleUpdate, InvoiceDetail, JobBillingView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
+import { sumMoney } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { joinAs } from '../proposals/proposal-fixtures';
 import { startTestServer, TestServer } from '../testing/harness';
@@ -39,7 +40,14 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
   });
 
   it("shows the job's billing before it starts, with the firm's terms and each line's trigger in words", async () => {
+    // A job made before work items and a schedule of values existed gets them on its first read.
+    await withTenant(t.ctx.pool, f.firmId, async (tx) => {
+      await tx.client.query(`delete from job_work_items where tenant_id = $1 and job_id = $2`, [tx.tenantId, f.jobId]);
+      await tx.client.query(`delete from job_value_lines where tenant_id = $1 and job_id = $2`, [tx.tenantId, f.jobId]);
+    });
     const b = await f.billing();
+    expect(b.workItems.length).toBeGreaterThan(0);
+    expect(sumMoney(b.valueLines.map((v) => new Decimal(v.scheduledValue))).toFixed(2)).toBe(b.contractSum);
     expect(b.billingStartedAt).toBeNull();
     expect(b.method).toBe('schedule');
     expect(b.terms).toMatchObject({ depositCapName: 'No deposit limit', depositCap: null, terms: { kind: 'net', days: 14 } });

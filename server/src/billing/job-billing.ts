@@ -16,7 +16,7 @@ import { retainageHeld } from './drafts';
 import { jobInvoices } from './invoice-read';
 import { moneyOut } from './money';
 import { billedWorkByLine, loadValueLines } from './progress-invoice';
-import { loadWorkItems } from './work-items';
+import { ensureJobWork, loadWorkItems } from './work-items';
 
 export interface ScheduleLineRow {
   id: string;
@@ -65,6 +65,8 @@ export function triggerProgress(
 /** GET /api/jobs/:id/billing (owner, office). */
 export async function getJobBilling(tx: TenantTx, jobId: string, now: Date): Promise<JobBillingView> {
   const job = await loadBillingJob(tx, jobId);
+  // a job made before work items and value lines existed gets them on first read
+  await ensureJobWork(tx, job.id);
   const today = firmToday(job, now);
   const money = (v: string | Decimal) => moneyOut(v, job.currency);
   const [terms, lineRows, workItems, valueRows, billed, invoices, milestones] = [
