@@ -83,6 +83,14 @@ describe('the invoice page', () => {
     work.dispatchEvent(new Event('input'));
     fixture.detectChanges();
     expect(work.closest('mat-form-field')?.textContent).toContain('$6,250.00 to date');
+    // back to an amount: what was typed carries over as its amount
+    [...html.querySelectorAll<HTMLButtonElement>('mat-button-toggle button')].find((b) => b.textContent?.trim() === 'Amount')!.click();
+    fixture.detectChanges();
+    expect(html.querySelector<HTMLInputElement>('input[aria-label="Amount done to date for Walls, base coat"]')?.value).toBe('6250.00');
+    percentToggle.click();
+    fixture.detectChanges();
+    work.value = '62.5';
+    work.dispatchEvent(new Event('input'));
     html.querySelector<HTMLFormElement>('form[aria-labelledby="progress-heading"]')!.dispatchEvent(new Event('submit'));
     const patch = http.expectOne({ method: 'PATCH', url: '/api/invoices/inv-2' });
     expect(patch.request.body.progressLines).toEqual([{ valueLineId: 'vl-1', workToDate: { percent: 62.5 }, storedMaterials: '0.00' }]);
