@@ -149,8 +149,12 @@ test('the office bills the deposit, marks the first layers done and issues the d
   await openLive(page, jobPath);
   for (const surface of SURFACES) {
     for (const layer of FIRST_LAYERS) {
-      await page.getByRole('button', { name: `Mark ${layer} done on Stair hall · ${surface}` }).click();
-      await expect(page.getByRole('button', { name: `Reopen ${layer} on Stair hall · ${surface}` })).toBeVisible();
+      const item = page
+        .getByRole('group', { name: `Stair hall · ${surface}` })
+        .getByRole('listitem')
+        .filter({ hasText: layer });
+      await item.getByRole('button', { name: /^Mark done/ }).click();
+      await expect(item.getByRole('button', { name: /^Reopen/ })).toBeVisible();
     }
   }
   // The stage payment waits for the first limewash coat on every surface: now met, the queue drafts it.
