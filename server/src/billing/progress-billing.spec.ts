@@ -176,4 +176,50 @@ describe('progress billing through the API', () => {
     expect((await other.send('post', `/api/jobs/${other.jobId}/billing/start`)).status).toBe(200);
     expect((await other.send('post', `/api/jobs/${other.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-31' })).status).toBe(409);
   });
+
+  it("takes the deposit off progress invoices by the firm's rule (pro rata: the deposit's share of what the invoice earns)", async () => {
+    const f = await billingJob(t, 'Progress Deposit Plaster');
+    const settings = {
+      ...DEFAULT_BILLING_SETTINGS,
+      retainage: { workPercent: 10, storedPercent: 10, stopAtPercentComplete: null },
+      depositCredit: 'prorata',
+    };
+    expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
+    await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(
+        `update jobs set contract_sum = 48000, original_contract_sum = 48000, contract_tax = 0 where tenant_id = $1 and id = $2`,
+        [tx.tenantId, f.jobId],
+      ),
+    );
+    const onlyMilestone = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
+      method: 'progress',
+      lines: [{ label: 'Stage payment', role: 'milestone', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
+    });
+    expect(onlyMilestone.status).toBe(400);
+    expect(onlyMilestone.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines[0].role']);
+    const schedule = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
+      method: 'progress',
+      lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
+    });
+    expect(schedule.status).toBe(200);
+    const values = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
+      lines: [{ label: 'All the plaster work', scheduledValue: '48000.00' }],
+    });
+    expect(values.status).toBe(200);
+    const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
+    expect(started.status).toBe(200);
+    const depositId = await f.lineDraft((started.body as JobBillingView).lines[0].id);
+    expect((await f.issue(depositId)).total).toBe('4800.00');
+
+    const draft = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-31' });
+    const lineId = (values.body as JobBillingView).valueLines[0].id;
+    const half = await f.send('patch', `/api/invoices/${draft.body.id}`, {
+      progressLines: [{ valueLineId: lineId, workToDate: { percent: 50 }, storedMaterials: '0' }],
+    });
+    // 24,000 done less 10 % retainage = 21,600 earned; the deposit's share: 4,800 × 21,600 ÷ 48,000 = 2,160.
+    expect(half.body).toMatchObject({ subtotal: '21600.00', depositCredit: '2160.00', total: '19440.00', retainageHeld: '2400.00' });
+    const issued = await f.issue(draft.body.id);
+    expect(issued).toMatchObject({ number: 'INV-0002', depositCredit: '2160.00', total: '19440.00', amountDue: '19440.00' });
+    expect((await f.billing()).totals).toMatchObject({ invoiced: '24240.00', unbilled: '23760.00', retainageHeld: '2400.00' });
+  });
 });
