@@ -28,3 +28,48 @@ describe('demo seed', () => {
     expect(holidays.at(-1)).toBe('2027-11-25');
   });
 });
+
+describe('demo billing', () => {
+  const firmOf = async () =>
+    (await t.queue.boss.getDb().executeSql(`select id from firms where slug = $1`, [DEMO.firm.slug])).rows[0].id as string;
+
+  it('gives the demo firm two billed jobs with an invoice in every state, a void one with its credit note, and change orders', async () => {
+    const firmId = await firmOf();
+    const found = await withTenant(t.ctx.pool, firmId, async (tx) => {
+      const jobs = await tx.client.query<{ title: string; billing_started_at: Date | null }>(
+        `select title, billing_started_at from jobs order by created_at`,
+      );
+      // seeded on 1 December 2026 (America/New_York): overdue = open or part paid and due before that day
+      const invoices = await tx.client.query<{ status: string; origin: string; number_text: string | null; overdue: boolean }>(
+        `select status, origin, number_text, (status in ('issued', 'part_paid') and due_on < '2026-12-01') as overdue from invoices order by created_at`,
+      );
+      const credit = await tx.client.query<{ number_text: string; status: string }>(
+        `select c.number_text, i.status from credit_notes c join invoices i on i.id = c.invoice_id`,
+      );
+      const orders = await tx.client.query<{ status: string }>(`select status from change_orders order by status`);
+      const marks = await tx.client.query<{ n: number }>(`select count(*)::int as n from job_progress where kind = 'layerDone'`);
+      const payments = await tx.client.query<{ n: number }>(`select count(*)::int as n from payments`);
+      return {
+        jobs: jobs.rows,
+        invoices: invoices.rows,
+        credit: credit.rows,
+        orders: orders.rows,
+        marks: marks.rows[0].n,
+        payments: payments.rows[0].n,
+      };
+    });
+    expect(found.jobs.map((j) => j.title)).toEqual(['Stair hall lime plaster', 'Turret room limewash']);
+    expect(found.jobs.every((j) => j.billing_started_at)).toBe(true);
+    const states = found.invoices.map((i) => (i.overdue ? 'overdue' : i.status));
+    for (const state of ['draft', 'issued', 'part_paid', 'paid', 'overdue', 'void']) expect(states).toContain(state);
+    // the draft waiting for review was made by the queue's trigger check, and has no number
+    expect(found.invoices.filter((i) => i.status === 'draft').every((i) => i.origin === 'queue' && i.number_text === null)).toBe(true);
+    // numbers without a gap nor a duplicate (a void invoice keeps its number)
+    const numbers = found.invoices.filter((i) => i.number_text).map((i) => i.number_text!);
+    expect([...numbers].sort()).toEqual(numbers.map((_, i) => `INV-${String(i + 1).padStart(4, '0')}`));
+    expect(found.credit).toEqual([{ number_text: 'CN-0001', status: 'void' }]);
+    expect(found.orders.map((o) => o.status)).toEqual(['approved', 'sent']);
+    expect(found.marks).toBeGreaterThan(0);
+    expect(found.payments).toBeGreaterThanOrEqual(2);
+  });
+});

@@ -15,6 +15,7 @@ import {
 } from '@layerbook/db';
 import { usFederalHolidaysAhead } from '@layerbook/domain';
 import { localDate } from '../firms/local-date';
+import { seedDemoBilling } from './demo-billing';
 import { seedDemoInquiries } from './demo-inquiries';
 import { seedDemoLibrary } from './demo-library';
 import { seedDemoTakeoff } from './demo-takeoff';
@@ -90,6 +91,8 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
     await seedDemoInquiries(tx, today, userIds[0]);
     await seedDemoLibrary(tx);
     await seedDemoTakeoff(tx, site.id);
+    const [ownerId, officeId, crewId] = userIds;
+    await seedDemoBilling(tx, pool, { ownerId, officeId, crewId, clientId: client.id, siteId: site.id }, now);
     await tx.db.insert(auditLog).values({ tenantId: firmId, actorKind: 'system', action: 'demo.seeded', entity: 'firm', entityId: firmId });
   });
   return 'created';
