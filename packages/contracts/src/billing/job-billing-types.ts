@@ -199,3 +199,6 @@ export interface JobBillingView {
 export interface JobHistory {
   readonly items: readonly JobHistoryEntry[];
 }
+
+/** Limits of the schedule and schedule-of-values editors (the API refuses more). */
+export const BILLING_SCHEDULE_LIMITS = { labelMaxLength: 160, linesMax: 60 } as const;

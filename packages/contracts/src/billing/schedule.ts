@@ -1,12 +1,17 @@
 import { z } from 'zod';
 import { isoDate, moneyAmount, requiredText, uuid } from '../common/fields';
 import { requestSchema } from '../common/schema-check';
-import { BILLING_METHODS, type BillingScheduleUpdate, type BillingTrigger, type ValueLinesUpdate } from './job-billing-types';
+import {
+  BILLING_METHODS,
+  BILLING_SCHEDULE_LIMITS,
+  type BillingScheduleUpdate,
+  type BillingTrigger,
+  type ValueLinesUpdate,
+} from './job-billing-types';
 
-/** Longest label of a schedule line or a schedule-of-values line. */
-export const BILLING_LINE_LABEL_MAX = 160;
-/** Most lines a schedule or a schedule of values takes. */
-export const BILLING_LINES_MAX = 60;
+/** Longest label of a schedule line or a schedule-of-values line; most lines either takes. */
+export const BILLING_LINE_LABEL_MAX = BILLING_SCHEDULE_LIMITS.labelMaxLength;
+export const BILLING_LINES_MAX = BILLING_SCHEDULE_LIMITS.linesMax;
 
 const billingTrigger: z.ZodType<BillingTrigger> = z.discriminatedUnion(
   'kind',
