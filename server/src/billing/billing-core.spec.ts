@@ -221,6 +221,30 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     expect(res.body.errors).toEqual([{ field: 'lines[0].amount', message: 'This line is billed and cannot change.' }]);
   });
 
+  it('drafts a line once however often it is asked at the same time; bad draft requests are 400 naming the field', async () => {
+    const final = started.lines[3];
+    const asks = await Promise.all(
+      Array.from({ length: 4 }, () => f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'line', scheduleLineId: final.id })),
+    );
+    expect(asks.map((r) => r.status).sort()).toEqual([201, 409, 409, 409]);
+    const live = await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(`select id from invoices where tenant_id = $1 and schedule_line_id = $2`, [tx.tenantId, final.id]),
+    );
+    expect(live.rowCount).toBe(1);
+    expect((await f.send('delete', `/api/invoices/${live.rows[0].id}`)).status).toBe(204);
+
+    const badKind = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'credit' });
+    expect(badKind.status).toBe(400);
+    expect(badKind.body.errors.map((e: { field: string }) => e.field)).toEqual(['kind']);
+    const badLine = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'line', scheduleLineId: 'not-a-line' });
+    expect(badLine.body.errors.map((e: { field: string }) => e.field)).toEqual(['scheduleLineId']);
+    const otherLine = (await other.billing()).lines[0].id;
+    const foreign = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'line', scheduleLineId: otherLine });
+    expect(foreign.status).toBe(400);
+    expect(foreign.body.errors.map((e: { field: string }) => e.field)).toEqual(['scheduleLineId']);
+    expect((await f.billing()).lines[3]).toMatchObject({ status: 'scheduled', invoiceId: null });
+  });
+
   it('records offline payments up to the amount due, then voids only what is unpaid, with credit note CN-0001', async () => {
     const b = await f.billing();
     const [depositId, stageId] = [b.lines[0].invoiceId!, b.lines[1].invoiceId!];
