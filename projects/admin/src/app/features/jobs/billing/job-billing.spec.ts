@@ -197,4 +197,18 @@ describe('JobBilling (the job page billing sections)', { timeout: 30_000 }, () =
     expect(host.textContent).toContain('Keep that line.');
     expect(host.textContent).toContain('Enter the amount as the contract allows.');
   });
+
+  it('switching to progress billing asks to keep only the deposit, and does it on request', async () => {
+    const { fixture, host } = await render(view());
+    const progress = host.querySelector<HTMLInputElement>('input[type="radio"][value="progress"]');
+    progress?.click();
+    await fixture.whenStable();
+    expect(host.textContent).toContain('Billing by progress keeps only the deposit in this schedule');
+    Array.from(host.querySelectorAll('button'))
+      .find((b) => b.textContent?.trim() === 'Keep only the deposit')
+      ?.click();
+    await fixture.whenStable();
+    expect(host.textContent).not.toContain('Billing by progress keeps only the deposit in this schedule');
+    expect(host.querySelectorAll('input[formcontrolname="amount"]')).toHaveLength(1);
+  });
 });

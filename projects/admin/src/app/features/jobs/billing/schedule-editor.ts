@@ -180,6 +180,16 @@ export class ScheduleEditor {
     this.form.markAsDirty();
   }
 
+  /** Progress billing keeps only the deposit: drop the other lines that are not billed yet. */
+  protected keepOnlyDeposit(): void {
+    const lines = this.form.controls.lines;
+    for (let i = lines.length - 1; i >= 0; i--) {
+      const line = lines.at(i);
+      if (line.getRawValue().role !== 'deposit' && !this.isLocked(line.controls.id.value)) lines.removeAt(i);
+    }
+    this.form.markAsDirty();
+  }
+
   protected undoChanges(): void {
     this.submission.say(null);
     fillScheduleForm(this.form, this.view());
