@@ -1,0 +1,161 @@
+/**
+ * Billing API figures, in one run: the invoice list of a firm with 100,000 invoices (and 20 other
+ * firms) against a raw node-postgres loop running the same query (buildInvoiceListQuery) in the same
+ * tenant transaction — throughput ratio and p95 at 10 connections, first page and a deep page — and
+ * issuing invoices, p95 with 10 issuers at once. Figures, not a test.
+ *   npx tsx ops/bench/billing/billing-bench.ts        (PostgreSQL must be up: bash ops/pg-start.sh)
+ */
+import { execFileSync } from 'node:child_process';
+import http from 'node:http';
+import os from 'node:os';
+import path from 'node:path';
+import { Worker } from 'node:worker_threads';
+import { migrateDatabase } from '@layerbook/db';
+import { Pool } from 'pg';
+import pino from 'pino';
+import { createApp } from '../../../server/src/app';
+import { buildInvoiceListQuery } from '../../../server/src/billing/invoice-read';
+import { loadConfig } from '../../../server/src/config';
+import type { ObjectStore } from '../../../server/src/files/object-store';
+import { startQueue } from '../../../server/src/queue/job-queue';
+import { DEMO, seedDemo } from '../../../server/src/seed/demo';
+import { testDatabaseUrls } from '../../../server/src/testing/test-env';
+import { INVOICES, JOBS, loadBillingBench, makeIssueDrafts } from './load';
+
+const root = path.resolve(__dirname, '../../..');
+const DB = 'layerbook_bench_billing';
+const CONNECTIONS = 10;
+const REQUESTS = 2_000;
+const ISSUES = 1_000;
+
+/** What driver.ts posts back: ops/s and latencies (ms), or why it failed. */
+interface Measured {
+  rps: number;
+  p50: number;
+  p95: number;
+}
+type DriverMessage = Measured | { error: string };
+
+const measure = (job: Record<string, unknown>) =>
+  new Promise<Measured>((resolve, reject) => {
+    // The driver is TypeScript: register tsx's CommonJS hook inside the worker, then load it.
+    const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, 'driver.ts'))});`;
+    const worker = new Worker(source, { eval: true, workerData: { concurrency: CONNECTIONS, ...job } });
+    worker.once('message', (m: DriverMessage) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
+    worker.once('error', reject);
+  });
+
+async function main(): Promise<void> {
+  execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: 'inherit' });
+  const urls = testDatabaseUrls(DB);
+  await migrateDatabase(urls.DATABASE_OWNER_URL, path.join(root, 'migrations'));
+  const config = loadConfig({
+    ...urls,
+    NODE_ENV: 'production',
+    SESSION_SECRET: 'bench-session-secret-that-is-long-enough',
+    ROOT_DIR: root,
+    LOG_LEVEL: 'silent',
+    PUBLIC_URL: 'http://localhost',
+    DB_POOL_MAX: String(CONNECTIONS),
+  });
+  const logger = pino({ level: 'silent' });
+  const pool = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
+  const queue = await startQueue(config, logger);
+
+  // The demo firm, made through the services (its jobs and invoices are real), then 100,000 invoices around it.
+  const loadStart = Date.now();
+  await seedDemo(pool);
+  const firms = (await queue.boss.getDb().executeSql(`select id from firms where slug = $1`, [DEMO.firm.slug])).rows as Array<{
+    id: string;
+  }>;
+  const firmId = firms[0].id;
+  await loadBillingBench(config.DATABASE_OWNER_URL, firmId);
+  const drafts = await makeIssueDrafts(config.DATABASE_OWNER_URL, firmId, ISSUES + 100);
+  const loadSeconds = ((Date.now() - loadStart) / 1000).toFixed(0);
+
+  // The list bench stores no files: a store that refuses uploads keeps the context complete.
+  const storage: ObjectStore = {
+    put: () => Promise.reject(new Error('This bench stores no files.')),
+    get: () => Promise.resolve(null),
+    delete: () => Promise.resolve(),
+    close: () => undefined,
+  };
+  const app = createApp({ config: { ...config, NODE_ENV: 'development' }, pool, queue, logger, storage, now: () => new Date() });
+  const server = app.listen(0, '127.0.0.1');
+  await new Promise((r) => server.once('listening', r));
+  const port = (server.address() as { port: number }).port;
+  const base = `http://127.0.0.1:${port}`;
+
+  // The demo office manager, signed in through the API.
+  const first = await fetch(`${base}/api/auth/session`);
+  const cookie0 = first.headers.get('set-cookie')!.split(';')[0];
+  const csrf0 = ((await first.json()) as { csrfToken: string }).csrfToken;
+  const signedIn = await fetch(`${base}/api/auth/signin`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', cookie: cookie0, 'x-csrf-token': csrf0 },
+    body: JSON.stringify({ email: DEMO.people[1].email, password: DEMO.password }),
+  });
+  if (signedIn.status !== 200) throw new Error(`sign-in failed: ${signedIn.status} ${await signedIn.text()}`);
+  const session = signedIn.headers.get('set-cookie')!.split(';')[0];
+  const csrf = ((await (await fetch(`${base}/api/auth/session`, { headers: { cookie: session } })).json()) as { csrfToken: string })
+    .csrfToken;
+
+  const agent = new http.Agent({ keepAlive: true, maxSockets: CONNECTIONS });
+  const get = (url: string) =>
+    new Promise<string>((resolve, reject) => {
+      http
+        .get({ host: '127.0.0.1', port, path: url, agent, headers: { cookie: session } }, (res) => {
+          let body = '';
+          res.on('data', (d: Buffer) => (body += d.toString()));
+          res.on('end', () => (res.statusCode === 200 ? resolve(body) : reject(new Error(`${res.statusCode} ${body}`))));
+        })
+        .on('error', reject);
+    });
+  // A deep cursor: walk ~15,000 invoices in once.
+  let after: string | null = null;
+  for (let i = 0; i < 150; i++)
+    after = (JSON.parse(await get(`/api/invoices?limit=100${after ? `&after=${after}` : ''}`)) as { nextCursor: string }).nextCursor;
+
+  console.log(
+    `billing: ${INVOICES.toLocaleString('en-US')} invoices over ${JOBS.toLocaleString('en-US')} jobs in the demo firm, 20 other firms × 1,000 (loaded in ${loadSeconds} s); ` +
+      `${REQUESTS} requests, ${CONNECTIONS} connections; load from a worker thread; ` +
+      `machine: ${os.cpus().length} cores, load average ${os.loadavg()[0].toFixed(1)} at the start`,
+  );
+  for (const [label, cursor, filter] of [
+    ['invoice list, first page', null, 'all'],
+    ['deep page (~15,000 in)', after, 'all'],
+    ['overdue filter', null, 'overdue'],
+  ] as const) {
+    const url = `/api/invoices?limit=50${filter === 'all' ? '' : `&filter=${filter}`}${cursor ? `&after=${cursor}` : ''}`;
+    const sqlQuery = buildInvoiceListQuery(firmId, { filter, limit: 50, ...(cursor ? { after: cursor } : {}) }, new Date());
+    const httpJob = { mode: 'get', port, path: url, cookie: session };
+    const pgJob = { mode: 'pg', databaseUrl: config.DATABASE_URL, tenantId: firmId, sql: sqlQuery };
+    await measure({ ...httpJob, total: 300 }); // warm-up
+    await measure({ ...pgJob, total: 300 });
+    const api = await measure({ ...httpJob, total: REQUESTS });
+    const raw = await measure({ ...pgJob, total: REQUESTS });
+    console.log(
+      `  ${label.padEnd(26)} API ${api.rps.toFixed(0)} req/s (p50 ${api.p50.toFixed(1)} ms, p95 ${api.p95.toFixed(1)} ms) | ` +
+        `raw pg ${raw.rps.toFixed(0)} q/s (p95 ${raw.p95.toFixed(1)} ms) | ratio ${(api.rps / raw.rps).toFixed(2)}  (goals: ratio ≥ 0.7, p95 ≤ 25 ms)`,
+    );
+  }
+
+  // Issuing: each call issues another draft (one firm, one counter: every issuer waits its turn on it).
+  const body = JSON.stringify({ send: false });
+  const issueJob = { mode: 'post', port, cookie: session, csrf, body };
+  await measure({ ...issueJob, total: 100, paths: drafts.slice(0, 100).map((id) => `/api/invoices/${id}/issue`) }); // warm-up
+  const issued = await measure({ ...issueJob, total: ISSUES, paths: drafts.slice(100).map((id) => `/api/invoices/${id}/issue`) });
+  console.log(
+    `  ${'issue an invoice'.padEnd(26)} ${issued.rps.toFixed(0)} issues/s (p50 ${issued.p50.toFixed(1)} ms, p95 ${issued.p95.toFixed(1)} ms), ` +
+      `${CONNECTIONS} issuers at once, ${ISSUES} issues  (goal: p95 ≤ 50 ms)`,
+  );
+  agent.destroy();
+  server.close();
+  await queue.stop();
+  await pool.end();
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});

@@ -1,0 +1,90 @@
+/**
+ * Load driver, run in a worker thread so the measuring client never shares the server's event loop.
+ * `get`: GETs one URL with a session cookie; `post`: POSTs the same body to each path in turn (one
+ * path per call, e.g. one draft invoice per issue); `pg`: the same list query in a tenant transaction.
+ */
+import http from 'node:http';
+import { parentPort, workerData } from 'node:worker_threads';
+import { Pool } from 'pg';
+
+interface Job {
+  mode: 'get' | 'post' | 'pg';
+  total: number;
+  concurrency: number;
+  port?: number;
+  path?: string;
+  paths?: string[];
+  body?: string;
+  cookie?: string;
+  csrf?: string;
+  databaseUrl?: string;
+  tenantId?: string;
+  sql?: { text: string; values: unknown[] };
+}
+
+function percentile(sorted: number[], p: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+}
+
+async function run(job: Job): Promise<{ rps: number; p50: number; p95: number }> {
+  let call: (i: number) => Promise<void>;
+  let close: () => Promise<void>;
+  if (job.mode === 'get' || job.mode === 'post') {
+    const agent = new http.Agent({ keepAlive: true, maxSockets: job.concurrency });
+    close = () => {
+      agent.destroy();
+      return Promise.resolve();
+    };
+    call = (i) =>
+      new Promise((resolve, reject) => {
+        const post = job.mode === 'post';
+        const headers: http.OutgoingHttpHeaders = { cookie: job.cookie };
+        if (post) Object.assign(headers, { 'content-type': 'application/json', 'x-csrf-token': job.csrf });
+        const req = http.request(
+          { host: '127.0.0.1', port: job.port, path: post ? job.paths![i] : job.path, method: post ? 'POST' : 'GET', agent, headers },
+          (res) => {
+            let body = '';
+            res.on('data', (d: Buffer) => (body += d.toString()));
+            res.on('end', () => (res.statusCode === 200 ? resolve() : reject(new Error(`HTTP ${res.statusCode} ${body.slice(0, 300)}`))));
+          },
+        );
+        req.on('error', reject);
+        req.end(post ? job.body : undefined);
+      });
+  } else {
+    const pool = new Pool({ connectionString: job.databaseUrl, max: job.concurrency });
+    close = () => pool.end();
+    call = async () => {
+      const client = await pool.connect();
+      try {
+        await client.query('begin');
+        await client.query(`select set_config('app.tenant_id', $1, true)`, [job.tenantId]);
+        await client.query(job.sql!.text, job.sql!.values);
+        await client.query('commit');
+      } finally {
+        client.release();
+      }
+    };
+  }
+  const latencies: number[] = [];
+  let next = 0;
+  const start = process.hrtime.bigint();
+  await Promise.all(
+    Array.from({ length: job.concurrency }, async () => {
+      for (let i = next++; i < job.total; i = next++) {
+        const t0 = process.hrtime.bigint();
+        await call(i);
+        latencies.push(Number(process.hrtime.bigint() - t0) / 1e6);
+      }
+    }),
+  );
+  const seconds = Number(process.hrtime.bigint() - start) / 1e9;
+  await close();
+  latencies.sort((a, b) => a - b);
+  return { rps: job.total / seconds, p50: percentile(latencies, 50), p95: percentile(latencies, 95) };
+}
+
+run(workerData as Job).then(
+  (result) => parentPort!.postMessage(result),
+  (error) => parentPort!.postMessage({ error: String(error) }),
+);
