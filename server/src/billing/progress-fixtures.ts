@@ -70,3 +70,19 @@ export async function acceptedJob(t: TestServer, firmName: string, opts: { timeZ
   const option = version.snapshot.options.find((o) => o.id === 'A')!;
   return { ...f, ...hall, version, client, job, option };
 }
+
+/** Waits until the queue has no billing work left for these firms (checks and billing days), failing on a dead one. */
+export async function billingQueueSettled(t: TestServer, firmIds: readonly string[]): Promise<void> {
+  for (const deadline = Date.now() + 20_000; Date.now() < deadline; await new Promise((r) => setTimeout(r, 100))) {
+    const { rows } = await t.ctx.pool.query<{ state: string; n: number }>(
+      `select state, count(*)::int as n from pgboss.job
+        where name in ('billing-evaluate', 'billing-sweep', 'billing-daily') and (data->>'tenantId' = any($1) or name = 'billing-sweep')
+        group by state`,
+      [firmIds],
+    );
+    const failed = rows.find((r) => r.state === 'failed');
+    if (failed) throw new Error('a billing queue job failed');
+    if (!rows.some((r) => ['created', 'retry', 'active'].includes(r.state))) return;
+  }
+  throw new Error('the billing queue did not settle');
+}

@@ -3,7 +3,7 @@ import { withTenant } from '@layerbook/db';
 import { addDays } from '@layerbook/domain';
 import { startTestServer, type TestServer } from '../../testing/harness';
 import * as invoiceMail from '../invoice-mail';
-import { acceptedJob } from '../progress-fixtures';
+import { acceptedJob, billingQueueSettled } from '../progress-fixtures';
 import { runBillingDaily } from '../triggers/daily';
 
 let t: TestServer;
@@ -99,5 +99,58 @@ describe('invoice reminders', () => {
     for (day = '2027-02-01'; day <= '2027-02-28'; day = addDays(day, 1)) await run();
     expect(steps(later)).toEqual([]);
     t.setNow(new Date('2026-12-01T15:00:00Z'));
+    jest.restoreAllMocks();
+  });
+
+  it('reach the client by e-mail from the firm’s billing day in the queue, once however often the day runs, and stop once the invoice is paid', async () => {
+    const job = await acceptedJob(t, 'Mailed Reminder Studio');
+    expect((await job.agent.post(`/api/jobs/${job.job.id}/billing/start`).set('x-csrf-token', job.csrf()).send({})).status).toBe(200);
+    await billingQueueSettled(t, [job.firmId]);
+    const [deposit] = await query<{ id: string }>(
+      job,
+      `select id from invoices where tenant_id = $1 and job_id = $2 and kind = 'deposit'`,
+      [job.job.id],
+    );
+    const issued = await job.agent
+      .post(`/api/invoices/${deposit.id}/issue`)
+      .set('x-csrf-token', job.csrf())
+      .send({ issuedOn: '2026-12-01', send: false });
+    expect(issued.status).toBe(200);
+    expect(issued.body).toMatchObject({ status: 'issued', dueOn: '2026-12-15' });
+    const billingDay = async (localDate: string) => {
+      await Promise.all([1, 2].map(() => t.queue.boss.send('billing-daily', { tenantId: job.firmId, localDate })));
+      await billingQueueSettled(t, [job.firmId]);
+    };
+    // The web role reads only the outbox's purpose keys (its own firm's rows).
+    const reminderKeys = () =>
+      withTenant(t.ctx.pool, job.firmId, async (tx) =>
+        (
+          await tx.client.query<{ purpose_key: string }>(`select purpose_key from mail_outbox where purpose_key like $1`, [
+            `invoice:${deposit.id}:reminder:%`,
+          ])
+        ).rows.map((r) => r.purpose_key),
+      );
+
+    await billingDay('2026-12-12');
+    const mail = await t.inbox.waitFor(
+      (m) => JSON.stringify(m.to).includes(job.clientEmail) && (m.text ?? '').includes(`/portal/invoices/${deposit.id}`),
+    );
+    expect(mail.text).toContain('Edwina Marl');
+    expect(await reminderKeys()).toEqual([`invoice:${deposit.id}:reminder:before:3`]);
+
+    const paid = await job.agent
+      .post(`/api/invoices/${deposit.id}/payments`)
+      .set('x-csrf-token', job.csrf())
+      .send({ method: 'cheque', amount: issued.body.amountDue, receivedOn: '2026-12-13', reference: 'Cheque 1041' });
+    expect(paid.status).toBe(200);
+    expect(paid.body.status).toBe('paid');
+    await billingDay('2026-12-15');
+    await billingDay('2026-12-22');
+    expect(await reminderKeys()).toHaveLength(1);
+    const history = (await job.agent.get(`/api/jobs/${job.job.id}/history`)).body as { items: Array<{ text: string; who: string }> };
+    const reminded = history.items.filter((e) => e.text.startsWith('Reminder for'));
+    expect(reminded.map((e) => [e.text, e.who])).toEqual([
+      [`Reminder for Deposit ${issued.body.number} sent, 3 days before the due date`, 'Automatic (billing)'],
+    ]);
   });
 });

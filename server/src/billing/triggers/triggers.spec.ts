@@ -2,7 +2,7 @@ import type { JobProgressView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { joinAs } from '../../proposals/proposal-fixtures';
 import { startTestServer, type TestServer } from '../../testing/harness';
-import { acceptedJob } from '../progress-fixtures';
+import { acceptedJob, billingQueueSettled } from '../progress-fixtures';
 import { startBilling } from '../schedule';
 import { evaluateJobBilling } from './evaluate';
 import { SYSTEM_ACTOR } from '../../http/actor';
@@ -19,21 +19,7 @@ type Job = Awaited<ReturnType<typeof acceptedJob>>;
 const query = <R extends object = Record<string, unknown>>(job: Job, sql: string, params: unknown[] = []) =>
   withTenant(t.ctx.pool, job.firmId, async (tx) => (await tx.client.query<R>(sql, [tx.tenantId, job.job.id, ...params])).rows);
 
-/** Waits until the queue has no billing work left for these firms (checks and billing days), failing on a dead one. */
-async function queueSettled(firmIds: readonly string[]): Promise<void> {
-  for (const deadline = Date.now() + 20_000; Date.now() < deadline; await new Promise((r) => setTimeout(r, 100))) {
-    const { rows } = await t.ctx.pool.query<{ state: string; n: number }>(
-      `select state, count(*)::int as n from pgboss.job
-        where name in ('billing-evaluate', 'billing-sweep', 'billing-daily') and (data->>'tenantId' = any($1) or name = 'billing-sweep')
-        group by state`,
-      [firmIds],
-    );
-    const failed = rows.find((r) => r.state === 'failed');
-    if (failed) throw new Error('a billing queue job failed');
-    if (!rows.some((r) => ['created', 'retry', 'active'].includes(r.state))) return;
-  }
-  throw new Error('the billing queue did not settle');
-}
+const queueSettled = (firmIds: readonly string[]) => billingQueueSettled(t, firmIds);
 
 async function start(job: Job): Promise<void> {
   await withTenant(t.ctx.pool, job.firmId, (tx) =>
