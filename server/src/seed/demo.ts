@@ -55,7 +55,7 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
   if (existing) return 'present';
   const passwordHash = await hashPassword(DEMO.password);
   const firmId = randomUUID();
-  await withTenant(pool, firmId, async (tx) => {
+  const people = await withTenant(pool, firmId, async (tx) => {
     await tx.db.insert(firms).values({ id: firmId, ...DEMO.firm });
     // A US firm: its days off are the federal holidays of the coming year (5 U.S.C. 6103(a), as observed).
     const today = localDate(DEMO.firm.timeZone, now);
@@ -91,9 +91,10 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
     await seedDemoInquiries(tx, today, userIds[0]);
     await seedDemoLibrary(tx);
     await seedDemoTakeoff(tx, site.id);
-    const [ownerId, officeId, crewId] = userIds;
-    await seedDemoBilling(tx, pool, { ownerId, officeId, crewId, clientId: client.id, siteId: site.id }, now);
     await tx.db.insert(auditLog).values({ tenantId: firmId, actorKind: 'system', action: 'demo.seeded', entity: 'firm', entityId: firmId });
+    return { ownerId: userIds[0], officeId: userIds[1], crewId: userIds[2], clientId: client.id, siteId: site.id };
   });
+  // Billing comes after, step by step (each in its own transaction), as the office and the client would do it.
+  await seedDemoBilling(pool, firmId, people, now);
   return 'created';
 }
