@@ -87,13 +87,13 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
       lines: update.lines.map((l, i) => (i === 1 ? { ...l, trigger: { kind: 'layerComplete', layerId: 'nope' } } : l)),
     });
     expect(badLayer.status).toBe(400);
-    expect(badLayer.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines[1].trigger.layerId']);
+    expect(badLayer.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines.1.trigger.layerId']);
     const finalFirst = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
       ...update,
       lines: [update.lines[2], update.lines[0], update.lines[1]],
     });
     expect(finalFirst.status).toBe(400);
-    expect(finalFirst.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines[0].role']);
+    expect(finalFirst.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines.0.role']);
     expect(await f.billing()).toEqual(before);
 
     // One dollar moves from the stage payment to the final; a new dated stage payment comes from the final too.
@@ -218,7 +218,7 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
       ),
     });
     expect(res.status).toBe(409);
-    expect(res.body.errors).toEqual([{ field: 'lines[0].amount', message: 'This line is billed and cannot change.' }]);
+    expect(res.body.errors).toEqual([{ field: 'lines.0.amount', message: 'This line is billed and cannot change.' }]);
   });
 
   it('drafts a line once however often it is asked at the same time; bad draft requests are 400 naming the field', async () => {
@@ -392,13 +392,13 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
       ],
     });
     expect(res.status).toBe(400);
-    expect(res.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines[0].scheduledValue', 'lines[1].scheduledValue']);
+    expect(res.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines.0.scheduledValue', 'lines.1.scheduledValue']);
     const deposit = await other.send('put', `/api/jobs/${other.jobId}/billing/schedule`, {
       method: 'progress',
       lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '1000.50' }],
     });
     expect(deposit.status).toBe(400);
-    expect(deposit.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines[0].amount']);
+    expect(deposit.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines.0.amount']);
     const view = await other.billing();
     expect(view).toMatchObject({ currency: 'JPY', contractSum: '480000', method: 'schedule' });
   });

@@ -93,8 +93,8 @@ describe('progress billing through the API', () => {
     });
     expect(wrong.status).toBe(400);
     expect(wrong.body.errors.map((e: { field: string }) => e.field)).toEqual([
-      'progressLines[0].workToDate',
-      'progressLines[1].storedMaterials',
+      'progressLines.0.workToDate',
+      'progressLines.1.storedMaterials',
     ]);
     expect((await f.billing()).valueLines.map((v) => [v.percentComplete, v.storedMaterials])).toEqual([
       ['100', '0.00'],
@@ -196,7 +196,7 @@ describe('progress billing through the API', () => {
       lines: [{ label: 'Stage payment', role: 'milestone', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
     });
     expect(onlyMilestone.status).toBe(400);
-    expect(onlyMilestone.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines[0].role']);
+    expect(onlyMilestone.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines.0.role']);
     const schedule = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
       method: 'progress',
       lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '4800.00' }],

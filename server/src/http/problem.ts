@@ -1,4 +1,5 @@
 import type { FieldProblem, Problem } from '@layerbook/contracts';
+import { dottedPath } from '@layerbook/domain';
 
 /** The one typed error of the server. The error middleware turns it into problem+json. */
 export class HttpError extends Error {
@@ -17,7 +18,8 @@ export class HttpError extends Error {
       title: this.title,
       status: this.status,
       ...(this.detail ? { detail: this.detail } : {}),
-      ...(this.errors?.length ? { errors: this.errors } : {}),
+      // one path style on the wire, whoever named the field (zod's dots, the engine's `lines[2].amount`)
+      ...(this.errors?.length ? { errors: this.errors.map((e) => ({ ...e, field: dottedPath(e.field) })) } : {}),
       ...(requestId ? { requestId } : {}),
     };
   }
