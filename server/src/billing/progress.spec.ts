@@ -243,6 +243,43 @@ describe('progress marks', () => {
     expect((await mark(job, { kind: 'valuePercent', valueLineId: line.id, percentComplete: 50, on: '2026-12-01' })).status).toBe(201);
   });
 
+  it('keeps work done plus materials stored within the line’s value; a mark sent again still answers 201 when it would now be refused', async () => {
+    const line = ((await job.agent.get(`/api/jobs/${job.job.id}/progress`)).body as JobProgressView).valueLines[0];
+    const [value] = await rows(
+      job,
+      `select scheduled_value::text as v from job_value_lines where tenant_id = $1 and job_id = $2 and id = $3`,
+      [line.id],
+    );
+    const scheduled = Number(value.v);
+    const stored = (amount: string, clientKey?: string) =>
+      mark(job, { kind: 'storedMaterials', valueLineId: line.id, amount, on: '2026-12-01', ...(clientKey ? { clientKey } : {}) });
+    // 37.5 % done (the test above): at most 62.5 % of the value can be stored.
+    const room = (Math.round(scheduled * 62.5) / 100).toFixed(2);
+    const over = await stored((Number(room) + 0.01).toFixed(2));
+    expect([over.status, over.body.errors?.[0]?.field]).toEqual([400, 'amount']);
+    expect((await stored('999999999999.99')).status).toBe(400);
+    expect((await stored(room, 'office:stored-1')).status).toBe(201);
+    const more = await mark(job, { kind: 'valuePercent', valueLineId: line.id, percentComplete: 40, on: '2026-12-01' });
+    expect([more.status, more.body.errors?.[0]?.field]).toEqual([400, 'percentComplete']);
+    expect((await stored('0.00')).status).toBe(201);
+    // The first stored mark again, from a phone that was offline: counted once already, so 201 and nothing changes.
+    const again = await stored(room, 'office:stored-1');
+    expect(again.status).toBe(201);
+    const [now] = await rows(
+      job,
+      `select stored_materials::text as s from job_value_lines where tenant_id = $1 and job_id = $2 and id = $3`,
+      [line.id],
+    );
+    expect(now.s).toBe('0.00');
+    const other = await acceptedJob(t, 'Key Reuse Studio');
+    const reused = await other.agent
+      .post(`/api/jobs/${other.job.id}/progress`)
+      .set('x-csrf-token', other.csrf())
+      .send({ kind: 'walkthrough', on: '2026-12-01', clientKey: 'office:stored-1' });
+    // Keys are per firm: another firm's same key is its own.
+    expect(reused.status).toBe(201);
+  });
+
   it('another firm gets 404 on the job; a client 401', async () => {
     const other = await acceptedJob(t, 'Other Marking Studio');
     expect((await other.agent.get(`/api/jobs/${job.job.id}/progress`)).status).toBe(404);

@@ -1,6 +1,7 @@
 import type { JobProgressView, ProgressMark } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { addDays, DomainInputError, valueLineWork } from '@layerbook/domain';
+import { addDays, DomainInputError, minorUnitDigits, valueLineWork } from '@layerbook/domain';
+import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import { localDate } from '../firms/local-date';
 import type { Actor } from '../http/actor';
@@ -69,9 +70,19 @@ async function billedWork(tx: TenantTx, jobId: string, valueLineId: string): Pro
   return rows[0]?.billed ?? '0';
 }
 
-async function valueLine(tx: TenantTx, jobId: string, id: string): Promise<{ id: string; label: string; scheduled_value: string }> {
-  const { rows } = await tx.client.query<{ id: string; label: string; scheduled_value: string }>(
-    `select id, label, scheduled_value::text as scheduled_value from job_value_lines where tenant_id = $1 and job_id = $2 and id = $3`,
+interface ValueLineRow {
+  id: string;
+  label: string;
+  scheduled_value: string;
+  percent_complete: string;
+  stored_materials: string;
+}
+
+async function valueLine(tx: TenantTx, jobId: string, id: string): Promise<ValueLineRow> {
+  const { rows } = await tx.client.query<ValueLineRow>(
+    `select id, label, scheduled_value::text as scheduled_value, trim_scale(percent_complete)::text as percent_complete,
+            stored_materials::text as stored_materials
+       from job_value_lines where tenant_id = $1 and job_id = $2 and id = $3`,
     [tx.tenantId, jobId, id],
   );
   if (!rows[0]) throw badRequest([{ field: 'valueLineId', message: 'Choose a line of this job’s schedule of values.' }]);
@@ -86,6 +97,47 @@ async function workItem(tx: TenantTx, jobId: string, id: string): Promise<{ id: 
   ]);
   if (!rows[0]) throw badRequest([{ field: 'workItemId', message: 'Choose a layer on a surface of this job.' }]);
   return rows[0];
+}
+
+/**
+ * A reading on a value line must leave the line billable: billed work never goes down (the percent
+ * may not fall below what issued progress invoices billed), and work done plus materials stored
+ * never passes the line's scheduled value (DOMAIN.md §2.10: G ≤ C; more is a change order).
+ */
+function checkValueLine(
+  mark: ProgressMark,
+  line: { scheduled_value: string; percent_complete: string; stored_materials: string },
+  billed: string,
+  currency: string,
+): void {
+  const digits = minorUnitDigits(currency);
+  const scheduled = new Decimal(line.scheduled_value);
+  const workAt = (percent: number | string) =>
+    valueLineWork({ scheduledValue: line.scheduled_value, percentToDate: percent, previousWork: '0', currency });
+  if (mark.kind === 'valuePercent') {
+    try {
+      valueLineWork({ scheduledValue: line.scheduled_value, percentToDate: mark.percentComplete, previousWork: billed, currency });
+    } catch (error) {
+      if (!(error instanceof DomainInputError)) throw error;
+      throw badRequest([{ field: 'percentComplete', message: error.message }]);
+    }
+    const stored = new Decimal(line.stored_materials);
+    if (workAt(mark.percentComplete).plus(stored).greaterThan(scheduled)) {
+      throw badRequest([
+        {
+          field: 'percentComplete',
+          message: `With ${stored.toFixed(digits)} of materials stored, work done and stored would pass the line's value ${scheduled.toFixed(digits)}: lower the stored materials first.`,
+        },
+      ]);
+    }
+  } else if (mark.kind === 'storedMaterials') {
+    const room = scheduled.minus(workAt(line.percent_complete));
+    if (new Decimal(mark.amount).greaterThan(room)) {
+      throw badRequest([
+        { field: 'amount', message: `At most ${room.toFixed(digits)} can be stored on this line: its value less the work done.` },
+      ]);
+    }
+  }
 }
 
 /**
@@ -106,6 +158,20 @@ export async function recordProgress(
   if (actor.kind === 'staff' && actor.role === 'crew' && mark.kind === 'storedMaterials') {
     throw forbidden('Stored materials are an amount of money: the office records them.');
   }
+  if (mark.clientKey !== undefined) {
+    // Sent again (a phone back online): the first one counted; answer the same, whatever changed since.
+    // The job's row lock above makes a second copy wait here until the first has committed.
+    const { rows: seen } = await tx.client.query<{ job_id: string }>(
+      `select job_id from job_progress where tenant_id = $1 and client_key = $2`,
+      [tx.tenantId, mark.clientKey],
+    );
+    if (seen[0] && seen[0].job_id !== jobId) {
+      throw conflict('This mark’s key was already used for another job.', [
+        { field: 'clientKey', message: 'Use a new key for each mark.' },
+      ]);
+    }
+    if (seen[0]) return progressView(tx, jobId);
+  }
   if (job.status === 'cancelled') throw conflict('This job is cancelled: its progress can no longer change.');
   const latest = addDays(job.today, 1);
   const earliest = yearBefore(job.accepted_on);
@@ -121,20 +187,7 @@ export async function recordProgress(
   };
   const value = mark.kind === 'valuePercent' ? String(mark.percentComplete) : mark.kind === 'storedMaterials' ? mark.amount : null;
 
-  if (mark.kind === 'valuePercent' && line) {
-    // Billed work never goes down: the percent may not fall below what issued progress invoices billed.
-    try {
-      valueLineWork({
-        scheduledValue: line.scheduled_value,
-        percentToDate: mark.percentComplete,
-        previousWork: await billedWork(tx, jobId, line.id),
-        currency: job.currency,
-      });
-    } catch (error) {
-      if (!(error instanceof DomainInputError)) throw error;
-      throw badRequest([{ field: 'percentComplete', message: error.message }]);
-    }
-  }
+  if (line) checkValueLine(mark, line, await billedWork(tx, jobId, line.id), job.currency);
 
   // The history row first: a repeated client key stops here, having changed nothing.
   const inserted = await tx.client.query<{ id: string }>(

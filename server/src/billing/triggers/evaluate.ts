@@ -4,6 +4,7 @@ import { layerCompletion } from '@layerbook/domain';
 import type { Pool } from 'pg';
 import { localDate } from '../../firms/local-date';
 import { type Actor, SYSTEM_ACTOR } from '../../http/actor';
+import { HttpError } from '../../http/problem';
 import type { BillingEvaluateJob } from '../../queue/queues';
 import { draftLineInvoice } from '../drafts';
 import { draftProgressInvoice } from '../progress-invoice';
@@ -79,8 +80,17 @@ export async function evaluateJobBilling(
   if (!job || !job.billing_started_at || job.status === 'cancelled') return 0;
   let drafted = 0;
   if (opts.progressMarked && job.billing_method === 'progress') {
-    const { isNew } = await draftProgressInvoice(tx, { jobId, periodEnd: today, origin: 'queue', actor });
-    if (isNew) drafted++;
+    // A schedule of values that does not tie out (say, after a change order) is the office's to fix
+    // and a retry cannot: the draft is left for a person (who sees why on drafting), not retried.
+    await tx.client.query('savepoint progress_draft');
+    try {
+      const { isNew } = await draftProgressInvoice(tx, { jobId, periodEnd: today, origin: 'queue', actor });
+      if (isNew) drafted++;
+      await tx.client.query('release savepoint progress_draft');
+    } catch (error) {
+      if (!(error instanceof HttpError) || error.status >= 500) throw error;
+      await tx.client.query('rollback to savepoint progress_draft');
+    }
   }
   const { rows: lines } = await tx.client.query<LineRow>(
     `select id, trigger from payment_schedule_lines where tenant_id = $1 and job_id = $2 and status = 'scheduled' order by position`,

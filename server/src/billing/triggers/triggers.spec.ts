@@ -123,6 +123,18 @@ describe('billing triggers from the work', () => {
     }>(job, `select status, origin, progress from invoices where tenant_id = $1 and job_id = $2 and kind = 'progress'`);
     expect(progress.map((p) => [p.status, p.origin])).toEqual([['draft', 'queue']]);
     expect(progress[0].progress.lines.find((l) => l.valueLineId === lines[0].id)?.percentComplete).toBe('40');
+
+    // A schedule of values that no longer ties out is the office's to fix: the check leaves the draft alone and does not fail.
+    await query(job, `update job_value_lines set scheduled_value = scheduled_value + 1 where tenant_id = $1 and job_id = $2 and id = $3`, [
+      lines[1].id,
+    ]);
+    expect((await percent(45)).status).toBe(201);
+    await queueSettled([job.firmId]);
+    const [draft] = await query<{ progress: { lines: Array<{ valueLineId: string; percentComplete: string }> } }>(
+      job,
+      `select progress from invoices where tenant_id = $1 and job_id = $2 and kind = 'progress'`,
+    );
+    expect(draft.progress.lines.find((l) => l.valueLineId === lines[0].id)?.percentComplete).toBe('40');
   });
 });
 
