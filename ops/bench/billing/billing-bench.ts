@@ -138,6 +138,15 @@ async function main(): Promise<void> {
       `  ${label.padEnd(26)} API ${api.rps.toFixed(0)} req/s (p50 ${api.p50.toFixed(1)} ms, p95 ${api.p95.toFixed(1)} ms) | ` +
         `raw pg ${raw.rps.toFixed(0)} q/s (p95 ${raw.p95.toFixed(1)} ms) | ratio ${(api.rps / raw.rps).toFixed(2)}  (goals: ratio ≥ 0.7, p95 ≤ 25 ms)`,
     );
+    if (label === 'invoice list, first page') {
+      // One at a time, nothing queued: what a request costs on its own, beside the same query alone.
+      const apiAlone = await measure({ ...httpJob, total: 500, concurrency: 1 });
+      const rawAlone = await measure({ ...pgJob, total: 500, concurrency: 1 });
+      console.log(
+        `  ${'  the same, 1 connection'.padEnd(26)} API p50 ${apiAlone.p50.toFixed(1)} ms, p95 ${apiAlone.p95.toFixed(1)} ms | ` +
+          `raw pg p50 ${rawAlone.p50.toFixed(1)} ms, p95 ${rawAlone.p95.toFixed(1)} ms | ratio ${(apiAlone.rps / rawAlone.rps).toFixed(2)}`,
+      );
+    }
   }
 
   // Issuing: each call issues another draft (one firm, one counter: every issuer waits its turn on it).
