@@ -232,7 +232,7 @@ describe('estimates', () => {
       .set('x-csrf-token', f.csrf())
       .send(inputsFor(f.surfaceId, f.systemId));
     expect(res.status).toBe(400);
-    expect(res.body.errors[0].field).toMatch(/^variants\.0\.rooms\[0\]\.surfaces\[0\]\.shape/);
+    expect(res.body.errors[0].field).toMatch(/^variants\.0\.rooms\.0\.surfaces\.0\.shape/);
   });
 
   it('keeps crew out (prices) and another firm out (404)', async () => {

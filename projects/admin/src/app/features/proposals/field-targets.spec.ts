@@ -11,6 +11,9 @@ const input = {
 describe('engineTarget', () => {
   it.each([
     ['rooms[0].surfaces[1].shape.rise', { kind: 'surface', surfaceId: 's2' }],
+    // the server's problem+json names the same path with dots
+    ['rooms.0.surfaces.1.shape.rise', { kind: 'surface', surfaceId: 's2' }],
+    ['pricing.direct.sundries.3.amount', { kind: 'control', path: 'sundries.3.amount' }],
     ['finishSystems[0].layers[2].coverage', { kind: 'top', prefix: 'Finish system “Limewash” in the library: ' }],
     ['products[0].containers', { kind: 'top', prefix: 'Product “Lime putty” in the library: ' }],
     ['options[2].materialsCost', { kind: 'control', path: 'addOns.2.materialsCost' }],

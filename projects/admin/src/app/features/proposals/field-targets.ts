@@ -7,10 +7,12 @@ import type { EstimateForm } from './estimate-form';
 export type FieldTarget = { kind: 'surface'; surfaceId: string } | { kind: 'control'; path: string } | { kind: 'top'; prefix: string };
 
 /**
- * Turns a path the engine names (`rooms[0].surfaces[1].shape.rise`, `pricing.discount.amount`,
+ * Turns a path the engine names (`rooms[0].surfaces[1].shape.rise` or `rooms.0.surfaces.1.shape.rise`, `pricing.discount.amount`,
  * `options[2].materialsCost`) into the builder's field for it, using the input it was given.
  */
-export function engineTarget(field: string, input: EstimateInput): FieldTarget {
+export function engineTarget(path: string, input: EstimateInput): FieldTarget {
+  // The browser's engine names `rooms[0]`; the server's problem+json says `rooms.0`: read both.
+  const field = path.replace(/\.(\d+)(?=\.|$)/g, '[$1]');
   let m = /^rooms\[(\d+)\]\.surfaces\[(\d+)\]/.exec(field);
   if (m) {
     const surface = input.rooms[Number(m[1])]?.surfaces[Number(m[2])];
