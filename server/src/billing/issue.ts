@@ -71,7 +71,7 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
   const n = await nextDocumentNumber(tx, 'invoice');
   const numberText = documentNumber(settings.invoicePrefix, n);
   await tx.client.query(
-    `update invoices set status = 'issued', number = $3, number_text = $4, issued_on = $5, due_on = $6, document = $7, deposit_credit = $8,
+    `update invoices set status = $13, number = $3, number_text = $4, issued_on = $5, due_on = $6, document = $7, deposit_credit = $8,
             total = $9, tax_included = $10, issued_by = $11, issued_at = $12, updated_at = $12
       where tenant_id = $1 and id = $2`,
     [
@@ -87,6 +87,9 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
       tax.toFixed(2),
       actor.userId,
       now,
+      // Nothing due (no work this period, or all of it taken by the deposit credit): no payment can
+      // follow, so it is paid as issued, never overdue nor reminded.
+      total.isZero() ? 'paid' : 'issued',
     ],
   );
   if (inv.schedule_line_id) {

@@ -222,4 +222,15 @@ describe('progress billing through the API', () => {
     expect(issued).toMatchObject({ number: 'INV-0002', depositCredit: '2160.00', total: '19440.00', amountDue: '19440.00' });
     expect((await f.billing()).totals).toMatchObject({ invoiced: '24240.00', unbilled: '23760.00', retainageHeld: '2400.00' });
   });
+
+  it('an invoice issued for nothing due (no work this period, or all of it taken by the deposit credit) is paid, never overdue', async () => {
+    const f = await billingJob(t, 'Zero Application Plaster');
+    expect((await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, { method: 'progress', lines: [] })).status).toBe(200);
+    expect((await f.send('post', `/api/jobs/${f.jobId}/billing/start`)).status).toBe(200);
+    const draft = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-01' });
+    expect(draft.body).toMatchObject({ status: 'draft', total: '0.00' });
+    const issued = await f.issue(draft.body.id, { issuedOn: '2026-10-01', send: false });
+    // Left 'issued', it could never be paid (a payment is more than nothing) and stayed overdue with reminders.
+    expect(issued).toMatchObject({ number: 'INV-0001', status: 'paid', total: '0.00', amountDue: '0.00', isOverdue: false });
+  });
 });
