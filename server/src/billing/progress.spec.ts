@@ -240,6 +240,10 @@ describe('progress marks', () => {
     const low = await mark(job, { kind: 'valuePercent', valueLineId: line.id, percentComplete: 40, on: '2026-12-01' });
     expect(low.status).toBe(400);
     expect(low.body.errors[0].field).toBe('percentComplete');
+    // The crew may mark a percent, but a refusal tells them no amounts (what is billed is money).
+    const crewLow = await mark(crew, { kind: 'valuePercent', valueLineId: line.id, percentComplete: 40, on: '2026-12-01' });
+    expect([crewLow.status, crewLow.body.errors?.[0]?.field]).toEqual([400, 'percentComplete']);
+    expect(JSON.stringify(crewLow.body)).not.toMatch(/\d\.\d\d/);
     expect((await mark(job, { kind: 'valuePercent', valueLineId: line.id, percentComplete: 50, on: '2026-12-01' })).status).toBe(201);
   });
 
@@ -261,6 +265,9 @@ describe('progress marks', () => {
     expect((await stored(room, 'office:stored-1')).status).toBe(201);
     const more = await mark(job, { kind: 'valuePercent', valueLineId: line.id, percentComplete: 40, on: '2026-12-01' });
     expect([more.status, more.body.errors?.[0]?.field]).toEqual([400, 'percentComplete']);
+    const crewMore = await mark(crew, { kind: 'valuePercent', valueLineId: line.id, percentComplete: 40, on: '2026-12-01' });
+    expect([crewMore.status, crewMore.body.errors?.[0]?.field]).toEqual([400, 'percentComplete']);
+    expect(JSON.stringify(crewMore.body)).not.toMatch(/\d\.\d\d/);
     expect((await stored('0.00')).status).toBe(201);
     // The first stored mark again, from a phone that was offline: counted once already, so 201 and nothing changes.
     const again = await stored(room, 'office:stored-1');

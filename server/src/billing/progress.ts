@@ -109,6 +109,7 @@ function checkValueLine(
   line: { scheduled_value: string; percent_complete: string; stored_materials: string },
   billed: string,
   currency: string,
+  showsMoney: boolean,
 ): void {
   const digits = minorUnitDigits(currency);
   const scheduled = new Decimal(line.scheduled_value);
@@ -119,14 +120,18 @@ function checkValueLine(
       valueLineWork({ scheduledValue: line.scheduled_value, percentToDate: mark.percentComplete, previousWork: billed, currency });
     } catch (error) {
       if (!(error instanceof DomainInputError)) throw error;
-      throw badRequest([{ field: 'percentComplete', message: error.message }]);
+      // The crew may mark a percent but never read amounts: the domain's words name what is billed.
+      const message = showsMoney ? error.message : 'This is less than is already billed on this line; billed work never goes down.';
+      throw badRequest([{ field: 'percentComplete', message }]);
     }
     const stored = new Decimal(line.stored_materials);
     if (workAt(mark.percentComplete).plus(stored).greaterThan(scheduled)) {
       throw badRequest([
         {
           field: 'percentComplete',
-          message: `With ${stored.toFixed(digits)} of materials stored, work done and stored would pass the line's value ${scheduled.toFixed(digits)}: lower the stored materials first.`,
+          message: showsMoney
+            ? `With ${stored.toFixed(digits)} of materials stored, work done and stored would pass the line's value ${scheduled.toFixed(digits)}: lower the stored materials first.`
+            : "With the materials stored on this line, work done and stored would pass the line's value: the office lowers the stored materials first.",
         },
       ]);
     }
@@ -187,7 +192,10 @@ export async function recordProgress(
   };
   const value = mark.kind === 'valuePercent' ? String(mark.percentComplete) : mark.kind === 'storedMaterials' ? mark.amount : null;
 
-  if (line) checkValueLine(mark, line, await billedWork(tx, jobId, line.id), job.currency);
+  if (line) {
+    const showsMoney = !(actor.kind === 'staff' && actor.role === 'crew');
+    checkValueLine(mark, line, await billedWork(tx, jobId, line.id), job.currency, showsMoney);
+  }
 
   // The history row first: a repeated client key stops here, having changed nothing.
   const inserted = await tx.client.query<{ id: string }>(
