@@ -9,7 +9,7 @@ import { conflict, notFound } from '../http/problem';
 import type { JobQueue } from '../queue/job-queue';
 import { assertBillingStarted, firmToday, invoiceTax, loadBillingJob } from './billing-job';
 import { invoiceDocument } from './document';
-import { progressDepositCredit } from './drafts';
+import { progressDepositCredit, retainageHeld } from './drafts';
 import { enqueueInvoiceMail } from './invoice-mail';
 import { nextDocumentNumber } from './numbering';
 import { loadBillingSettings } from './settings';
@@ -57,6 +57,10 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
   if (inv.status !== 'draft') throw conflict('This invoice is already issued.');
   assertBillingStarted(job);
   const subtotal = new Decimal(inv.subtotal);
+  // A release drafted before its application was voided would bill retainage no longer held.
+  if (inv.kind === 'retainage' && subtotal.greaterThan(await retainageHeld(tx, job.id, inv.id))) {
+    throw conflict('Less retainage is held now than this release bills: delete it and draft the release again.');
+  }
   const isProgressJob = job.billing_method === 'progress' && (inv.kind === 'progress' || inv.kind === 'retainage');
   const credit = isProgressJob ? await progressDepositCredit(tx, job, subtotal, inv.kind === 'retainage', inv.id) : new Decimal(0);
   const total = subtotal.minus(credit);

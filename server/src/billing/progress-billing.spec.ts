@@ -233,4 +233,26 @@ describe('progress billing through the API', () => {
     // Left 'issued', it could never be paid (a payment is more than nothing) and stayed overdue with reminders.
     expect(issued).toMatchObject({ number: 'INV-0001', status: 'paid', total: '0.00', amountDue: '0.00', isOverdue: false });
   });
+
+  it('never issues a retainage release for more than is still held (its application voided after the release was drafted)', async () => {
+    const f = await billingJob(t, 'Stale Release Plaster');
+    const settings = { ...DEFAULT_BILLING_SETTINGS, retainage: { workPercent: 10, storedPercent: 10, stopAtPercentComplete: null } };
+    expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
+    expect((await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, { method: 'progress', lines: [] })).status).toBe(200);
+    const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
+    expect(started.status).toBe(200);
+    const lineId = (started.body as JobBillingView).valueLines[0].id;
+    const app = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-01' });
+    const half = await f.send('patch', `/api/invoices/${app.body.id}`, {
+      progressLines: [{ valueLineId: lineId, workToDate: { percent: 50 }, storedMaterials: '0' }],
+    });
+    expect(new Decimal((half.body as InvoiceDetail).retainageHeld).isPositive()).toBe(true);
+    await f.issue(app.body.id);
+    const release = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'retainage' });
+    expect(release.status).toBe(201);
+    expect((await f.send('post', `/api/invoices/${app.body.id}/void`, { reason: 'Wrong percent' })).status).toBe(200);
+    const refused = await f.send('post', `/api/invoices/${release.body.id}/issue`, { send: false });
+    expect(refused.status).toBe(409);
+    expect((await f.billing()).totals.retainageHeld).toBe('0.00');
+  });
 });
