@@ -12,6 +12,7 @@ import { enqueueBillingCheck } from '../triggers/enqueue';
 import { changeOrderAnsweredMail } from './change-order-mail';
 import { MONEY_COLUMN_LIMIT, type StoredDetail } from './pricing';
 import { loadChangeOrder, toView, type ChangeOrderRow } from './read';
+import { changeValueLines } from './value-lines';
 
 /** A change order the client may read: one of their own jobs', sent or decided (never a draft); 404 otherwise. */
 async function loadClientChangeOrder(tx: TenantTx, client: ClientPrincipal, id: string, lock = false): Promise<ChangeOrderRow> {
@@ -123,10 +124,17 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
     `update jobs set contract_sum = $3, contract_tax = contract_tax + $4::numeric, updated_at = $5 where tenant_id = $1 and id = $2`,
     [tx.tenantId, row.job_id, after.toFixed(digits), row.tax, now],
   );
-  await tx.client.query(
-    `insert into job_value_lines (tenant_id, job_id, position, label, scheduled_value, change_order_id)
-     values ($1, $2, (select coalesce(max(position), 0) + 1 from job_value_lines where tenant_id = $1 and job_id = $2), $3, $4, $5)`,
-    [tx.tenantId, row.job_id, lineLabel(row), row.amount, row.id],
+  await changeValueLines(
+    tx,
+    {
+      id: row.id,
+      jobId: row.job_id,
+      label: lineLabel(row),
+      amount: row.amount,
+      currency: job.currency,
+      isProgressBilled: job.billing_method === 'progress',
+    },
+    now,
   );
   await enqueueBillingCheck(tx, ctx.queue, row.job_id);
   return { contractSumBefore: before.toFixed(digits), contractSumAfter: after.toFixed(digits) };
