@@ -1,4 +1,5 @@
 import { readFile } from 'node:fs/promises';
+import { PDFParse } from 'pdf-parse';
 import { expect, request, test, type APIRequestContext, type Locator, type Page } from '@playwright/test';
 import { E2E } from './support/env';
 import { pathFrom, waitForMail } from './support/inbox';
@@ -195,7 +196,14 @@ test('the office bills the deposit, marks the first layers done and issues the d
   await portal.screenshot({ path: 'e2e/.artifacts/billing-portal-invoice.png', fullPage: true });
   const downloading = portal.waitForEvent('download');
   await portal.getByRole('link', { name: 'Download the PDF' }).click();
-  const pdf = await readFile(await (await downloading).path());
+  const download = await downloading;
+  const pdf = await readFile(await download.path());
+  await download.saveAs('e2e/.artifacts/billing-invoice.pdf');
   expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+  const parser = new PDFParse({ data: pdf });
+  const { text } = await parser.getText();
+  await parser.destroy();
+  expect(text).toContain(`Number: ${stageNumber}`);
+  expect(text).toContain(TITLE);
   await client.close();
 });
