@@ -167,7 +167,7 @@ test('the office bills the deposit, marks the first layers done and issues the d
   await page.getByRole('form', { name: 'Work done' }).screenshot({ path: 'e2e/.artifacts/billing-work-done.png' });
   await invoices().screenshot({ path: 'e2e/.artifacts/billing-job-invoices.png' });
   await review().click();
-  await expect(page.getByText(/Limewash, first coat finished on all 2 surfaces/)).toBeVisible();
+  await expect(page.getByText(/Limewash, first coat finished on both surfaces it covers/)).toBeVisible();
   await expect(page.getByRole('table', { name: 'What it bills' })).toContainText('Limewash, first coat');
   await page.screenshot({ path: 'e2e/.artifacts/billing-draft-review.png', fullPage: true });
   const stageNumber = await issueOpenDraft(page);

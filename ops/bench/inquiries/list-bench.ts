@@ -12,6 +12,7 @@ import { migrateDatabase } from '@layerbook/db';
 import { Pool } from 'pg';
 import pino from 'pino';
 import { createApp } from '../../../server/src/app';
+import { hashPassword } from '../../../server/src/auth/passwords';
 import { loadConfig } from '../../../server/src/config';
 import type { ObjectStore } from '../../../server/src/files/object-store';
 import { buildListQuery } from '../../../server/src/inquiries/list';
@@ -96,42 +97,30 @@ async function main(): Promise<void> {
   const port = (server.address() as { port: number }).port;
   const agent = new http.Agent({ keepAlive: true, maxSockets: CONNECTIONS });
 
-  // A staff member of the big firm, signed in through the API.
+  // A staff member of the big firm, made straight in the database (sign-up now confirms by e-mail,
+  // which a bench has no inbox for), then signed in through the API.
   const jobsPool = new Pool({ connectionString: config.DATABASE_OWNER_URL, max: 1 });
-  const signUp = await fetch(`http://127.0.0.1:${port}/api/auth/session`);
-  const cookie0 = signUp.headers.get('set-cookie')!.split(';')[0];
-  const csrf = ((await signUp.json()) as { csrfToken: string }).csrfToken;
-  const made = await fetch(`http://127.0.0.1:${port}/api/auth/signup`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', cookie: cookie0, 'x-csrf-token': csrf },
-    body: JSON.stringify({
-      firmName: 'Bench Owner Firm',
-      name: 'Bench Owner',
-      email: 'bench@example.test',
-      password: 'bench-password-2026',
-    }),
-  });
-  const cookie = made.headers.get('set-cookie')!.split(';')[0];
-  const user = ((await made.json()) as { user: { id: string; firmId: string } }).user;
-  // Move the signed-up owner into the big firm so the API reads its 20,000 rows.
   const c = await jobsPool.connect();
+  const passwordHash = await hashPassword('bench-password-2026');
   await c.query('begin');
+  const { rows } = await c.query<{ id: string }>(
+    `insert into users (email, name, password_hash) values ('bench@example.test', 'Bench Owner', $1) returning id`,
+    [passwordHash],
+  );
   await c.query(`select set_config('app.tenant_id', $1, true)`, [firmId]);
-  await c.query(`insert into memberships (tenant_id, user_id, role) values ($1, $2, 'owner')`, [firmId, user.id]);
-  await c.query('commit');
-  await c.query('begin');
-  await c.query(`select set_config('app.tenant_id', $1, true)`, [user.firmId]);
-  await c.query(`update memberships set status = 'deactivated' where user_id = $1`, [user.id]);
+  await c.query(`insert into memberships (tenant_id, user_id, role) values ($1, $2, 'owner')`, [firmId, rows[0].id]);
   await c.query('commit');
   c.release();
   await jobsPool.end();
-  const relogin = await fetch(`http://127.0.0.1:${port}/api/auth/session`, { headers: { cookie } });
-  const csrf2 = ((await relogin.json()) as { csrfToken: string }).csrfToken;
+  const first = await fetch(`http://127.0.0.1:${port}/api/auth/session`);
+  const cookie = first.headers.get('set-cookie')!.split(';')[0];
+  const csrf = ((await first.json()) as { csrfToken: string }).csrfToken;
   const signedIn = await fetch(`http://127.0.0.1:${port}/api/auth/signin`, {
     method: 'POST',
-    headers: { 'content-type': 'application/json', cookie, 'x-csrf-token': csrf2 },
+    headers: { 'content-type': 'application/json', cookie, 'x-csrf-token': csrf },
     body: JSON.stringify({ email: 'bench@example.test', password: 'bench-password-2026' }),
   });
+  if (signedIn.status !== 200) throw new Error(`sign-in failed: ${signedIn.status} ${await signedIn.text()}`);
   const session = signedIn.headers.get('set-cookie')!.split(';')[0];
 
   const get = (url: string) =>

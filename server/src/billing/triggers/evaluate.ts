@@ -49,7 +49,12 @@ export function triggerMet(
       );
       if (!done.isComplete) return null;
       const name = items.find((i) => i.layer_id === trigger.layerId)?.layer_name ?? 'The layer';
-      const surfaces = done.total === 1 ? 'the one surface it covers' : `all ${done.total} surfaces it covers`;
+      const surfaces =
+        done.total === 1
+          ? 'the one surface it covers'
+          : done.total === 2
+            ? 'both surfaces it covers'
+            : `all ${done.total} surfaces it covers`;
       return `${name} finished on ${surfaces} on ${done.completedOn}`;
     }
     case 'walkthrough':

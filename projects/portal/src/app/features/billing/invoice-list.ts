@@ -45,7 +45,7 @@ import { invoiceStatusWords } from './invoice-words';
                   <a [routerLink]="['/invoices', inv.id]">{{ inv.number }}</a>
                 </th>
                 <td>{{ inv.jobTitle }}</td>
-                <td>{{ day(inv.dueOn, inv.locale) }}</td>
+                <td>{{ inv.status === 'void' ? '—' : day(inv.dueOn, inv.locale) }}</td>
                 <td class="num">{{ money(inv.amountDue, inv) }}</td>
                 <td>
                   <span class="status" [class.urgent]="words.isUrgent">

@@ -1,3 +1,4 @@
+import { DatePipe } from '@angular/common';
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
@@ -8,7 +9,6 @@ import type { ChangeOrderSummary, ChangeOrderView, ItemList } from '@layerbook/c
 import { firstValueFrom } from 'rxjs';
 import { problemMessage } from '../../../core/errors/problem';
 import { loadMessage } from '../../../shared/forms/load-message';
-import { CalendarDatePipe } from '../../../shared/ui/calendar-date-pipe';
 import { ConfirmDialog, type ConfirmDialogData } from '../../../shared/ui/confirm-dialog';
 import { FormAlert } from '../../../shared/ui/form-alert';
 import { ChangeOrderApi, changeOrdersUrl } from './change-order-api';
@@ -22,7 +22,7 @@ import { changeOrderStatus, signedMoney } from './change-order-words';
  */
 @Component({
   selector: 'lb-change-orders',
-  imports: [CalendarDatePipe, ChangeOrderForm, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule],
+  imports: [DatePipe, ChangeOrderForm, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule],
   template: `
     <h2 id="change-orders-heading">Change orders</h2>
     <p class="hint">
@@ -63,9 +63,9 @@ import { changeOrderStatus, signedMoney } from './change-order-words';
                   >{{ s.word }}</span
                 >
                 @if (co.decidedAt) {
-                  <span class="small">{{ co.decidedAt | calendarDate }}</span>
+                  <span class="small">{{ co.decidedAt | date: 'mediumDate' }}</span>
                 } @else if (co.sentAt) {
-                  <span class="small">Sent {{ co.sentAt | calendarDate }}</span>
+                  <span class="small">Sent {{ co.sentAt | date: 'mediumDate' }}</span>
                 }
               </td>
               <td>
