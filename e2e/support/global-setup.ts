@@ -60,6 +60,9 @@ export function e2eEnv(): NodeJS.ProcessEnv {
     DATABASE_JOBS_URL: `postgres://layerbook_jobs:${pw('LB_JOBS_PASSWORD', 'layerbook-jobs-local')}@127.0.0.1:${port}/${E2E.db}`,
     // The fill-time bot check is covered by API tests; a browser test fills forms faster than a person.
     PUBLIC_FORM_MIN_FILL_MS: '0',
+    // Every journey signs in from 127.0.0.1: the per-address sign-in limit (30 in 15 minutes, checked by
+    // API tests) would refuse the later journeys of one run, not a person.
+    SIGN_IN_RATE_LIMIT: '1000',
   };
   return env;
 }
