@@ -39,7 +39,7 @@ type DriverMessage = Measured | { error: string };
 const measure = (job: Record<string, unknown>) =>
   new Promise<Measured>((resolve, reject) => {
     // The driver is TypeScript: register tsx's CommonJS hook inside the worker, then load it.
-    const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, 'driver.ts'))});`;
+    const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, '..', 'driver.ts'))});`;
     const worker = new Worker(source, { eval: true, workerData: { concurrency: CONNECTIONS, ...job } });
     worker.once('message', (m: DriverMessage) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
     worker.once('error', reject);

@@ -142,7 +142,7 @@ async function main(): Promise<void> {
   const measure = (job: Record<string, unknown>) =>
     new Promise<Measured>((resolve, reject) => {
       // The driver is TypeScript: register tsx's CommonJS hook inside the worker, then load it.
-      const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, 'driver.ts'))});`;
+      const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, '..', 'driver.ts'))});`;
       const worker = new Worker(source, { eval: true, workerData: { concurrency: CONNECTIONS, ...job } });
       worker.once('message', (m: DriverMessage) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
       worker.once('error', reject);
@@ -157,7 +157,7 @@ async function main(): Promise<void> {
   ] as const) {
     const url = `/api/inquiries?limit=50${cursor ? `&after=${cursor}` : ''}`;
     const sqlQuery = buildListQuery(firmId, { sort: 'newest', limit: 50, ...(cursor ? { after: cursor } : {}) });
-    const httpJob = { mode: 'http', port, path: url, cookie: session };
+    const httpJob = { mode: 'get', port, path: url, cookie: session };
     const pgJob = { mode: 'pg', databaseUrl: config.DATABASE_URL, tenantId: firmId, sql: sqlQuery };
     await measure({ ...httpJob, total: 300 }); // warm-up
     await measure({ ...pgJob, total: 300 });
