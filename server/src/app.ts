@@ -28,6 +28,9 @@ import { portalChangeOrderRoutes } from './billing/change-orders/portal-routes';
 import { billingSettingsRoutes, billingTodayRoutes, invoiceRoutes } from './billing/routes';
 import { jobBillingRoutes } from './billing/job-routes';
 import { progressRoutes } from './billing/progress-routes';
+import { portalPaymentRoutes } from './payments/portal-routes';
+import { paymentRoutes } from './payments/routes';
+import { paymentWebhookRoutes } from './payments/webhook-routes';
 import { sampleRoutes } from './samples/routes';
 import { portalSampleRoutes } from './samples/portal-routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
@@ -66,6 +69,8 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
     res.set('cache-control', 'no-store');
     next();
   });
+  // The processor signs the raw body: its webhook comes before the JSON parser, sessions and CSRF.
+  router.use('/payments/webhook', paymentWebhookRoutes(ctx));
   router.use(express.json({ limit: '100kb' }));
   // Anonymous public pages carry no session, so they need no CSRF token; they are rate limited instead.
   router.use('/public', publicRoutes(ctx, inquiryLimiter));
@@ -79,6 +84,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/portal/proposals', portalProposalRoutes(ctx));
   router.use('/portal/change-orders', portalChangeOrderRoutes(ctx));
   router.use('/portal', portalBillingRoutes(ctx));
+  router.use('/portal', portalPaymentRoutes(ctx));
   router.use('/portal', portalAuthRoutes(ctx, limiter));
   router.use('/firm/billing', billingSettingsRoutes(ctx));
   router.use('/firm', firmRoutes(ctx));
@@ -95,6 +101,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/jobs', jobBillingRoutes(ctx));
   router.use('/invoices', invoiceRoutes(ctx));
   router.use('/billing', billingTodayRoutes(ctx));
+  router.use('/payments', paymentRoutes(ctx));
   router.use('/jobs/:id/change-orders', jobChangeOrderRoutes(ctx));
   router.use('/change-orders', changeOrderRoutes(ctx));
   router.use('/jobs', progressRoutes(ctx));

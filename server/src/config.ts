@@ -3,42 +3,55 @@ import { z } from 'zod';
 
 const flag = z.enum(['true', 'false']).transform((v) => v === 'true');
 
-const schema = z.object({
-  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
-  HOST: z.string().default('127.0.0.1'),
-  PORT: z.coerce.number().int().min(0).max(65535).default(4300),
-  PUBLIC_URL: z.url().default('http://localhost:4300'),
-  DATABASE_URL: z.string().min(1),
-  DATABASE_OWNER_URL: z.string().min(1),
-  DATABASE_JOBS_URL: z.string().min(1),
-  SESSION_SECRET: z.string().min(32, { error: 'SESSION_SECRET must have at least 32 characters' }),
-  SMTP_HOST: z.string().default('127.0.0.1'),
-  SMTP_PORT: z.coerce.number().int().default(1025),
-  MAIL_FROM: z.string().default('Layerbook <no-reply@layerbook.local>'),
-  ROOT_DIR: z.string().default(path.resolve(__dirname, '../..')),
-  RUN_WORKERS: flag.default(true),
-  RUN_MIGRATIONS: flag.default(true),
-  SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
-  PUBLIC_FORM_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
-  /** A public form sent sooner than this after it was shown is taken for a bot (0 in browser tests). */
-  PUBLIC_FORM_MIN_FILL_MS: z.coerce.number().int().min(0).default(3000),
-  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
-  DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
-  // Object storage: any S3-compatible service; the defaults point at the local fake (ops/start.sh).
-  S3_ENDPOINT: z.url().default('http://127.0.0.1:4569'),
-  S3_BUCKET: z.string().min(3).default('layerbook'),
-  S3_REGION: z.string().default('us-east-1'),
-  S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
-  S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
-  /** Path-style URLs (`endpoint/bucket/key`): what local fakes and most S3-compatible services expect. */
-  S3_FORCE_PATH_STYLE: flag.default(true),
-  /** Largest upload accepted, per file; a phone photo is 3–12 MB. */
-  FILE_MAX_BYTES: z.coerce
-    .number()
-    .int()
-    .min(1)
-    .default(15 * 1024 * 1024),
-});
+const schema = z
+  .object({
+    NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+    HOST: z.string().default('127.0.0.1'),
+    PORT: z.coerce.number().int().min(0).max(65535).default(4300),
+    PUBLIC_URL: z.url().default('http://localhost:4300'),
+    DATABASE_URL: z.string().min(1),
+    DATABASE_OWNER_URL: z.string().min(1),
+    DATABASE_JOBS_URL: z.string().min(1),
+    SESSION_SECRET: z.string().min(32, { error: 'SESSION_SECRET must have at least 32 characters' }),
+    SMTP_HOST: z.string().default('127.0.0.1'),
+    SMTP_PORT: z.coerce.number().int().default(1025),
+    MAIL_FROM: z.string().default('Layerbook <no-reply@layerbook.local>'),
+    ROOT_DIR: z.string().default(path.resolve(__dirname, '../..')),
+    RUN_WORKERS: flag.default(true),
+    RUN_MIGRATIONS: flag.default(true),
+    SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
+    PUBLIC_FORM_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+    /** A public form sent sooner than this after it was shown is taken for a bot (0 in browser tests). */
+    PUBLIC_FORM_MIN_FILL_MS: z.coerce.number().int().min(0).default(3000),
+    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+    DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
+    // Object storage: any S3-compatible service; the defaults point at the local fake (ops/start.sh).
+    S3_ENDPOINT: z.url().default('http://127.0.0.1:4569'),
+    S3_BUCKET: z.string().min(3).default('layerbook'),
+    S3_REGION: z.string().default('us-east-1'),
+    S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
+    S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
+    /** Path-style URLs (`endpoint/bucket/key`): what local fakes and most S3-compatible services expect. */
+    S3_FORCE_PATH_STYLE: flag.default(true),
+    // Card payments through Stripe (or the local stand-in, packages/stripe-fake): no key, no online payments.
+    STRIPE_SECRET_KEY: z.string().startsWith('sk_', { error: 'STRIPE_SECRET_KEY starts with sk_' }).optional(),
+    /** The webhook endpoint's signing secret (whsec_…); required with a key. */
+    STRIPE_WEBHOOK_SECRET: z.string().min(1).optional(),
+    /** Where the Stripe API is: unset for Stripe itself, http://127.0.0.1:12111 for the local stand-in. */
+    STRIPE_API_BASE: z.url().optional(),
+    /** How often the reconciliation job lists the processor's events (cron, UTC). */
+    PAYMENTS_RECONCILE_CRON: z.string().default('*/10 * * * *'),
+    /** Largest upload accepted, per file; a phone photo is 3–12 MB. */
+    FILE_MAX_BYTES: z.coerce
+      .number()
+      .int()
+      .min(1)
+      .default(15 * 1024 * 1024),
+  })
+  .refine((c) => !c.STRIPE_SECRET_KEY || c.STRIPE_WEBHOOK_SECRET, {
+    path: ['STRIPE_WEBHOOK_SECRET'],
+    error: 'STRIPE_WEBHOOK_SECRET is needed with STRIPE_SECRET_KEY',
+  });
 
 export type Config = z.infer<typeof schema>;
 

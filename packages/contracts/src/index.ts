@@ -26,3 +26,4 @@ export * from './billing/change-orders';
 export * from './billing/settings';
 export * from './billing/schedule';
 export * from './billing/invoices';
+export * from './payments/payments';

@@ -30,3 +30,4 @@ export * from './billing/job-billing-types';
 export * from './billing/invoice-types';
 export * from './billing/change-order-types';
 export * from './billing/portal-billing-types';
+export * from './payments/payment-types';

@@ -26,7 +26,7 @@ export type { MoneyInput } from './money/money';
 export { fromMinorUnits, roundToCurrency, roundsToZero, sumMoney, toMinorUnits } from './money/money';
 export { isKnownCurrency, knownCurrencies, minorUnitDigits } from './money/currency';
 export type { ProcessorCurrencyRule } from './money/stripe-amount';
-export { fromProcessorAmount, processorCurrencyRule, toProcessorAmount } from './money/stripe-amount';
+export { fromProcessorAmount, processorCurrencyRule, processorMinimumCharge, toProcessorAmount } from './money/stripe-amount';
 export { allocateByWeights, splitEvenly } from './money/allocate';
 export { formatMoney } from './money/format-money';
 

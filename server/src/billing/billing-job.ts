@@ -60,7 +60,7 @@ export function assertBillingStarted(job: BillingJob): asserts job is StartedJob
 export const firmToday = (job: Pick<BillingJob, 'time_zone'>, now: Date): string => localDate(job.time_zone, now);
 
 /** Issued invoices of the job that still count (not drafts, not void). */
-export const LIVE_ISSUED = `status in ('issued', 'part_paid', 'paid')`;
+export const LIVE_ISSUED = `status in ('issued', 'part_paid', 'paid', 'refunded')`;
 
 /**
  * The tax inside `amount` (contract sums include tax): the invoice's share of the contract's tax,

@@ -9,13 +9,13 @@ import type {
   InvoiceStatus,
   InvoiceSummary,
   KeysetPage,
-  PaymentView,
   ProgressTable,
 } from '@layerbook/contracts';
 import type { InvoiceListQuery } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
 import { notFound } from '../http/problem';
+import { listInvoiceCredits, listInvoicePayments } from '../payments/payment-read';
 import { loadBillingJob, termsOf } from './billing-job';
 import { invoiceDocument } from './document';
 import { moneyOut } from './money';
@@ -227,13 +227,8 @@ export async function getInvoice(tx: TenantTx, id: string, now: Date): Promise<I
         reason: credit.reason,
       }
     : null;
-  const payments = (
-    await tx.client.query<{ id: string; method: PaymentView['method']; amount: string; received_on: string; reference: string }>(
-      `select id, method, amount::text as amount, received_on::text as received_on, reference from payments
-        where tenant_id = $1 and invoice_id = $2 order by received_on, created_at`,
-      [tx.tenantId, id],
-    )
-  ).rows.map((p): PaymentView => ({ id: p.id, method: p.method, amount: m(p.amount), receivedOn: p.received_on, reference: p.reference }));
+  const payments = await listInvoicePayments(tx, id);
+  const clientCredits = await listInvoiceCredits(tx, id);
   const reminders = (
     await tx.client.query<{ step: string; sent_on: string }>(
       `select step, sent_on::text as sent_on from invoice_reminders where tenant_id = $1 and invoice_id = $2 order by sent_on, created_at`,
@@ -280,6 +275,7 @@ export async function getInvoice(tx: TenantTx, id: string, now: Date): Promise<I
     voidReason: r.void_reason,
     creditNote,
     payments,
+    clientCredits,
     reminders,
     auditTrail: trail,
   };

@@ -1,14 +1,14 @@
 import type { OfflinePaymentCreate } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import Decimal from 'decimal.js';
-import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
+import { recordPayment } from '../payments/record-payment';
 import { fitsCurrency } from './money';
 
 /**
  * POST /api/invoices/:id/payments — a cheque, transfer or cash received against an open invoice:
- * at most the amount due (400 naming amount), then the invoice is part paid or paid.
+ * at most the amount due (400 naming amount), then the invoice is part paid or paid, with a numbered receipt (recordPayment).
  */
 export async function recordOfflinePayment(tx: TenantTx, actor: Actor, id: string, body: OfflinePaymentCreate): Promise<void> {
   const inv = (
@@ -30,22 +30,12 @@ export async function recordOfflinePayment(tx: TenantTx, actor: Actor, id: strin
   }
   if (amount.lessThanOrEqualTo(0)) throw badRequest([{ field: 'amount', message: 'Enter the amount received.' }]);
   if (amount.greaterThan(due)) throw badRequest([{ field: 'amount', message: `At most the amount due, ${due.toFixed(2)}.` }]);
-  const paidInFull = amount.equals(due);
-  await tx.client.query(
-    `insert into payments (tenant_id, invoice_id, client_id, method, amount, currency, received_on, reference, created_by)
-     values ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
-    [tx.tenantId, id, inv.client_id, body.method, body.amount, inv.currency, body.receivedOn, body.reference, actor.userId],
-  );
-  await tx.client.query(
-    `update invoices set amount_paid = amount_paid + $3::numeric, status = $4, updated_at = now() where tenant_id = $1 and id = $2`,
-    [tx.tenantId, id, body.amount, paidInFull ? 'paid' : 'part_paid'],
-  );
-  await recordAudit(tx, {
-    actorUserId: actor.userId,
-    actorKind: actor.kind,
-    action: 'invoice.payment_recorded',
-    entity: 'invoice',
-    entityId: id,
-    data: { amount: body.amount, method: body.method, receivedOn: body.receivedOn, reference: body.reference },
+  await recordPayment(tx, actor, {
+    invoiceId: id,
+    method: body.method,
+    amount: body.amount,
+    currency: inv.currency,
+    receivedOn: body.receivedOn,
+    reference: body.reference,
   });
 }

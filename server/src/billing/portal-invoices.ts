@@ -2,7 +2,7 @@ import {
   INVOICE_KIND_LABELS,
   type InvoiceKind,
   type InvoiceStatus,
-  type PaymentView,
+  type PaymentMethod,
   type PortalInvoiceDetail,
   type PortalInvoiceSummary,
   type PortalStatement,
@@ -106,12 +106,14 @@ export async function getClientInvoice(tx: TenantTx, client: ClientPrincipal, id
     creditNote: note
       ? { id: note.id, number: note.number_text, issuedOn: note.issued_on, amount: moneyOut(note.amount, inv.currency) }
       : null,
-    // Paying online comes with the payments issue; the portal leaves the place for it.
+    // The payments area fills these in (server/src/payments/portal-pay.ts).
     canPayOnline: false,
+    payOnlineNote: null,
+    receipts: [],
   };
 }
 
-const PAYMENT_WORDS: Readonly<Record<PaymentView['method'], string>> = {
+const PAYMENT_WORDS: Readonly<Record<PaymentMethod, string>> = {
   card: 'Payment by card',
   cheque: 'Payment by cheque',
   transfer: 'Payment by bank transfer',
@@ -124,7 +126,7 @@ interface EntryRow {
   /** the document's number, or the payment's reference */
   text: string;
   invoice_kind: InvoiceKind | null;
-  method: PaymentView['method'] | null;
+  method: PaymentMethod | null;
   amount: string;
 }
 

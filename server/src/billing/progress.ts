@@ -63,7 +63,7 @@ async function billedWork(tx: TenantTx, jobId: string, valueLineId: string): Pro
   const { rows } = await tx.client.query<{ billed: string }>(
     `select coalesce(sum((l->>'thisPeriodWork')::numeric), 0)::text as billed
        from invoices i cross join lateral jsonb_array_elements(coalesce(i.progress->'lines', '[]'::jsonb)) l
-      where i.tenant_id = $1 and i.job_id = $2 and i.kind = 'progress' and i.status in ('issued', 'part_paid', 'paid')
+      where i.tenant_id = $1 and i.job_id = $2 and i.kind = 'progress' and i.status in ('issued', 'part_paid', 'paid', 'refunded')
         and l->>'valueLineId' = $3`,
     [tx.tenantId, jobId, valueLineId],
   );

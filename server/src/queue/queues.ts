@@ -13,6 +13,9 @@ export const QUEUES = {
   billingSweep: 'billing-sweep',
   billingDaily: 'billing-daily',
   billingDead: 'billing-dead',
+  paymentsApply: 'payments-apply',
+  paymentsReconcile: 'payments-reconcile',
+  paymentsDead: 'payments-dead',
 } as const;
 
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
@@ -23,6 +26,15 @@ export const QUEUE_OPTIONS: ReadonlyArray<{ name: QueueName; options: Omit<PgBos
   { name: QUEUES.followUpDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
   { name: QUEUES.pruneDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
   { name: QUEUES.billingDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
+  { name: QUEUES.paymentsDead, options: { retryLimit: 0, expireInSeconds: 60, retentionDays: 30 } },
+  {
+    name: QUEUES.paymentsApply,
+    options: { retryLimit: 8, retryDelay: 5, retryBackoff: true, expireInSeconds: 120, retentionDays: 14, deadLetter: QUEUES.paymentsDead },
+  },
+  {
+    name: QUEUES.paymentsReconcile,
+    options: { retryLimit: 2, retryDelay: 60, retryBackoff: true, expireInSeconds: 300, retentionDays: 3, deadLetter: QUEUES.paymentsDead },
+  },
   {
     name: QUEUES.billingEvaluate,
     options: { retryLimit: 5, retryDelay: 10, retryBackoff: true, expireInSeconds: 120, retentionDays: 7, deadLetter: QUEUES.billingDead },
@@ -99,3 +111,12 @@ export interface BillingDailyJob {
 /** Hourly at ten past (UTC); each firm's billing day runs at BILLING_LOCAL_HOUR its time. */
 export const BILLING_SWEEP_CRON = '10 * * * *';
 export const BILLING_LOCAL_HOUR = 8;
+
+/** Apply one stored processor event (webhook or reconciliation stored it under its firm). */
+export interface PaymentsApplyJob {
+  readonly tenantId: string;
+  readonly eventId: string;
+}
+
+/** List the processor's events since the last one seen and store and apply what is missing. */
+export type PaymentsReconcileJob = Record<string, never>;

@@ -4,6 +4,8 @@
  * note. Money: decimal strings in `currency`.
  */
 
+import type { ClientCreditView, PaymentDetail } from '../payments/payment-types';
+
 export const INVOICE_KINDS = ['deposit', 'milestone', 'progress', 'retainage', 'final'] as const;
 export type InvoiceKind = (typeof INVOICE_KINDS)[number];
 export const INVOICE_KIND_LABELS: Readonly<Record<InvoiceKind, string>> = {
@@ -14,13 +16,15 @@ export const INVOICE_KIND_LABELS: Readonly<Record<InvoiceKind, string>> = {
   final: 'Final invoice',
 };
 
-export const INVOICE_STATUSES = ['draft', 'issued', 'part_paid', 'paid', 'void'] as const;
+export const INVOICE_STATUSES = ['draft', 'issued', 'part_paid', 'paid', 'refunded', 'void'] as const;
 export type InvoiceStatus = (typeof INVOICE_STATUSES)[number];
 export const INVOICE_STATUS_LABELS: Readonly<Record<InvoiceStatus, string>> = {
   draft: 'Draft — not sent',
   issued: 'Open',
   part_paid: 'Part paid',
   paid: 'Paid',
+  /** every payment on it was given back */
+  refunded: 'Refunded',
   void: 'Void',
 };
 
@@ -131,14 +135,6 @@ export interface InvoiceReminderView {
   readonly sentOn: string;
 }
 
-export interface PaymentView {
-  readonly id: string;
-  readonly method: 'card' | 'cheque' | 'transfer' | 'cash';
-  readonly amount: string;
-  readonly receivedOn: string;
-  readonly reference: string;
-}
-
 export interface InvoiceDetail extends InvoiceSummary {
   readonly scheduleLineId: string | null;
   readonly periodEnd: string | null;
@@ -158,7 +154,9 @@ export interface InvoiceDetail extends InvoiceSummary {
   readonly sentAt: string | null;
   readonly voidReason: string | null;
   readonly creditNote: CreditNoteView | null;
-  readonly payments: readonly PaymentView[];
+  readonly payments: readonly PaymentDetail[];
+  /** overpayments on this invoice kept as the client's credit */
+  readonly clientCredits: readonly ClientCreditView[];
   readonly reminders: readonly InvoiceReminderView[];
   readonly auditTrail: readonly AuditTrailEntry[];
 }

@@ -1,3 +1,4 @@
+import type { PortalReceipt } from '../payments/payment-types';
 import type { ChangeOrderView } from './change-order-types';
 import type { InvoiceDocument, InvoiceKind, InvoiceLine, InvoiceStatus, ProgressTable } from './invoice-types';
 
@@ -32,13 +33,17 @@ export interface PortalInvoiceDetail extends PortalInvoiceSummary {
   readonly amountCredited: string;
   readonly document: InvoiceDocument;
   readonly creditNote: { readonly id: string; readonly number: string; readonly issuedOn: string; readonly amount: string } | null;
-  /** false until the payments issue: the portal leaves the place for a pay button */
+  /** open or part paid, online payments configured, and the amount due at least the processor's minimum */
   readonly canPayOnline: boolean;
+  /** why there is no pay button when the invoice is open ("Below the smallest card payment, 0.50 USD"); null otherwise */
+  readonly payOnlineNote: string | null;
+  /** receipts for its payments and refunds, newest last */
+  readonly receipts: readonly PortalReceipt[];
 }
 
 export interface PortalStatementLine {
   readonly on: string;
-  readonly kind: 'invoice' | 'creditNote' | 'payment';
+  readonly kind: 'invoice' | 'creditNote' | 'payment' | 'refund';
   /** "INV-0007 Deposit", "CN-0002", "Payment by cheque 1042" */
   readonly text: string;
   readonly charge: string;

@@ -78,7 +78,7 @@ export const changeOrders = pgTable(
 );
 
 export const INVOICE_KINDS_DB = ['deposit', 'milestone', 'progress', 'retainage', 'final'] as const;
-export const INVOICE_STATUSES_DB = ['draft', 'issued', 'part_paid', 'paid', 'void'] as const;
+export const INVOICE_STATUSES_DB = ['draft', 'issued', 'part_paid', 'paid', 'refunded', 'void'] as const;
 
 /**
  * An invoice. A draft has no number and may change; issuing takes the next number from the firm's
@@ -193,34 +193,4 @@ export const invoiceReminders = pgTable(
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex('invoice_reminders_step_key').on(t.tenantId, t.invoiceId, t.step), tenantPolicy('invoice_reminders')],
-);
-
-/**
- * Money received against an invoice. Billing records offline payments (cheque, transfer, cash);
- * the payments issue adds card payments through the processor, receipts and refunds.
- */
-export const payments = pgTable(
-  'payments',
-  {
-    id: id(),
-    tenantId: tenantId().references(() => firms.id),
-    invoiceId: uuid('invoice_id')
-      .notNull()
-      .references(() => invoices.id),
-    clientId: uuid('client_id')
-      .notNull()
-      .references(() => clients.id),
-    method: text('method', { enum: ['card', 'cheque', 'transfer', 'cash'] }).notNull(),
-    amount: money('amount').notNull(),
-    currency: text('currency').notNull(),
-    receivedOn: date('received_on').notNull(),
-    reference: text('reference').notNull().default(''),
-    createdBy: uuid('created_by').references(() => users.id),
-    createdAt: createdAt(),
-  },
-  (t) => [
-    index('payments_invoice_idx').on(t.tenantId, t.invoiceId),
-    index('payments_received_idx').on(t.tenantId, t.receivedOn),
-    tenantPolicy('payments'),
-  ],
 );

@@ -12,3 +12,4 @@ export * from './billing';
 export * from './samples';
 export * from './audit';
 export * from './mail';
+export * from './payments';

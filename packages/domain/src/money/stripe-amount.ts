@@ -63,3 +63,12 @@ export function fromProcessorAmount(sent: number, currency: string, field = 'amo
   if (!Number.isSafeInteger(sent)) throw new DomainInputError(field, 'The processor amount must be a whole number.');
   return new Decimal(sent).div(new Decimal(10).pow(processorCurrencyRule(currency).apiExponent));
 }
+
+/**
+ * The processor's smallest card charge in this currency, in major units ("0.50" USD), or null
+ * when the processor does not publish one for it (then a card payment is not offered).
+ * Placeholder: filled with the processor's published table and its checks.
+ */
+export function processorMinimumCharge(currency: string): Decimal | null {
+  return currency === 'USD' ? new Decimal('0.50') : null;
+}

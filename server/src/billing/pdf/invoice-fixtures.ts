@@ -147,8 +147,8 @@ export async function insertPayment(
 ): Promise<void> {
   await withTenant(t.ctx.pool, firmId, (tx) =>
     tx.client.query(
-      `insert into payments (tenant_id, invoice_id, client_id, method, amount, currency, received_on, reference)
-       select i.tenant_id, i.id, i.client_id, $3, $4, i.currency, $5, $6 from invoices i where i.tenant_id = $1 and i.id = $2`,
+      `insert into payments (tenant_id, invoice_id, client_id, method, amount, amount_applied, currency, received_on, reference)
+       select i.tenant_id, i.id, i.client_id, $3, $4, $4, i.currency, $5, $6 from invoices i where i.tenant_id = $1 and i.id = $2`,
       [tx.tenantId, invoiceId, p.method, p.amount, p.receivedOn, p.reference],
     ),
   );

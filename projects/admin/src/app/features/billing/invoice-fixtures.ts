@@ -86,6 +86,7 @@ export const progressDraft: InvoiceDetail = {
   voidReason: null,
   creditNote: null,
   payments: [],
+  clientCredits: [],
   reminders: [],
   auditTrail: [
     { at: '2026-11-28T18:00:00.000Z', who: 'The schedule', action: 'invoice.drafted', text: 'Drafted when the base coat was finished' },

@@ -6,7 +6,7 @@ import {
   type InvoiceListFilter,
   type InvoiceStatus,
   type InvoiceSummary,
-  type PaymentView,
+  type PaymentMethod,
   type ProgressTable,
 } from '@layerbook/contracts/types';
 
@@ -22,6 +22,7 @@ const STATUS_ICONS: Readonly<Record<InvoiceStatus, string>> = {
   issued: 'schedule',
   part_paid: 'hourglass_bottom',
   paid: 'task_alt',
+  refunded: 'undo',
   void: 'block',
 };
 
@@ -53,7 +54,7 @@ export function retainageWords(rates: ProgressTable['retainageRates']): string {
   return rates.stopAtPercentComplete === null ? words : `${words}, until ${rates.stopAtPercentComplete} % complete`;
 }
 
-export const PAYMENT_METHOD_LABELS: Readonly<Record<PaymentView['method'], string>> = {
+export const PAYMENT_METHOD_LABELS: Readonly<Record<PaymentMethod, string>> = {
   card: 'Card',
   cheque: 'Cheque',
   transfer: 'Bank transfer',

@@ -12,6 +12,7 @@ const CLIENT_STATUS: Readonly<Record<Exclude<InvoiceStatus, 'draft'>, StatusWord
   issued: { text: 'To pay', icon: 'receipt_long', isUrgent: false },
   part_paid: { text: `${INVOICE_STATUS_LABELS.part_paid}, the rest to pay`, icon: 'pending', isUrgent: false },
   paid: { text: INVOICE_STATUS_LABELS.paid, icon: 'task_alt', isUrgent: false },
+  refunded: { text: 'Refunded to you', icon: 'undo', isUrgent: false },
   void: { text: 'Cancelled by a credit note', icon: 'block', isUrgent: false },
 };
 
@@ -31,6 +32,7 @@ export const STATEMENT_KIND_WORDS: Readonly<Record<PortalStatementLine['kind'], 
   invoice: { text: 'Invoice', icon: 'receipt_long' },
   creditNote: { text: 'Credit note', icon: 'block' },
   payment: { text: '', icon: 'payments' },
+  refund: { text: '', icon: 'undo' },
 };
 
 /** The columns of a progress invoice, in the same words as its PDF. */

@@ -1,0 +1,110 @@
+/**
+ * Payments, refunds, receipts and online checkout, without zod. Money: decimal strings in
+ * `currency` (major units); the processor's integer amounts never leave the server.
+ */
+
+export const PAYMENT_METHODS = ['card', 'cheque', 'transfer', 'cash'] as const;
+export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
+export const PAYMENT_METHOD_LABELS: Readonly<Record<PaymentMethod, string>> = {
+  card: 'Card (online)',
+  cheque: 'Cheque',
+  transfer: 'Bank transfer',
+  cash: 'Cash',
+};
+
+export const REFUND_STATUSES = ['pending', 'succeeded', 'failed'] as const;
+export type RefundStatus = (typeof REFUND_STATUSES)[number];
+export const REFUND_STATUS_LABELS: Readonly<Record<RefundStatus, string>> = {
+  pending: 'Being sent back',
+  succeeded: 'Refunded',
+  failed: 'Refund failed',
+};
+
+export interface RefundView {
+  readonly id: string;
+  readonly paymentId: string;
+  readonly method: PaymentMethod;
+  readonly status: RefundStatus;
+  readonly amount: string;
+  readonly currency: string;
+  readonly refundedOn: string;
+  readonly reason: string;
+  readonly reference: string;
+  /** "RCT-0012"; null until the refund has succeeded */
+  readonly receiptNumber: string | null;
+  readonly failureMessage: string | null;
+}
+
+/** One payment as the office sees it on the invoice (and the client in the portal, without `createdBy`). */
+export interface PaymentDetail {
+  readonly id: string;
+  readonly invoiceId: string;
+  readonly method: PaymentMethod;
+  readonly amount: string;
+  /** the part that went on the invoice; amount − applied is a credit on the client's account */
+  readonly amountApplied: string;
+  readonly amountRefunded: string;
+  /** amount − refunded − pending refunds: what a refund may still give back */
+  readonly refundable: string;
+  readonly currency: string;
+  readonly receivedOn: string;
+  readonly reference: string;
+  /** "RCT-0007"; null only for payments recorded before receipts existed */
+  readonly receiptNumber: string | null;
+  readonly refunds: readonly RefundView[];
+}
+
+/** POST /api/payments/:id/refunds — online (back to the card, only for a card payment) or recorded offline. */
+export interface RefundCreate {
+  readonly method: PaymentMethod;
+  readonly amount: string;
+  readonly reason: string;
+  /** offline refunds: the day the money went back (defaults to today in the firm's zone) */
+  readonly refundedOn?: string;
+  /** offline refunds: cheque number, transfer reference */
+  readonly reference?: string;
+}
+
+/** A client's money kept beyond an invoice's amount due (an overpayment). */
+export interface ClientCreditView {
+  readonly id: string;
+  readonly paymentId: string;
+  readonly amount: string;
+  readonly currency: string;
+  readonly note: string;
+  readonly createdAt: string;
+  readonly usedOnInvoiceId: string | null;
+}
+
+/** POST /api/portal/invoices/:id/checkout — answer: where to send the browser. */
+export interface CheckoutStart {
+  readonly url: string;
+  readonly checkoutId: string;
+}
+
+/**
+ * GET /api/portal/invoices/:id/checkout/:checkoutId — what the success page shows while the
+ * processor's confirmation is on its way: `confirming` until the payment is recorded.
+ */
+export interface CheckoutStatus {
+  readonly checkoutId: string;
+  readonly state: 'open' | 'confirming' | 'paid' | 'expired';
+  readonly amount: string;
+  readonly currency: string;
+  /** the receipt, once the payment is recorded */
+  readonly paymentId: string | null;
+  readonly receiptNumber: string | null;
+}
+
+/** A receipt line in the portal (payments and refunds of one invoice). */
+export interface PortalReceipt {
+  readonly id: string;
+  readonly kind: 'payment' | 'refund';
+  readonly number: string;
+  readonly on: string;
+  readonly method: PaymentMethod;
+  readonly amount: string;
+  readonly currency: string;
+}
+
+export const PAYMENT_LIMITS = { reasonMaxLength: 500, referenceMaxLength: 120 } as const;

@@ -1,0 +1,111 @@
+import type { ClientCreditView, PaymentDetail, PaymentMethod, RefundStatus, RefundView } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import { documentNumber } from '@layerbook/domain';
+import Decimal from 'decimal.js';
+import { moneyOut } from '../billing/money';
+
+/** The prefix of the firm's receipt series (payments and refunds share it). */
+export const RECEIPT_PREFIX = 'RCT-';
+
+export const receiptNumber = (n: number | null): string | null => (n === null ? null : documentNumber(RECEIPT_PREFIX, n));
+
+interface PaymentRow {
+  id: string;
+  invoice_id: string;
+  method: PaymentMethod;
+  amount: string;
+  amount_applied: string;
+  amount_refunded: string;
+  pending_refunds: string;
+  currency: string;
+  received_on: string;
+  reference: string;
+  receipt_no: number | null;
+}
+
+interface RefundRow {
+  id: string;
+  payment_id: string;
+  method: PaymentMethod;
+  status: RefundStatus;
+  amount: string;
+  currency: string;
+  refunded_on: string;
+  reason: string;
+  reference: string;
+  receipt_no: number | null;
+  failure_message: string | null;
+}
+
+/** An invoice's payments, oldest first, each with its refunds and what may still be refunded. */
+export async function listInvoicePayments(tx: TenantTx, invoiceId: string): Promise<PaymentDetail[]> {
+  const payments = await tx.client.query<PaymentRow>(
+    `select p.id, p.invoice_id, p.method, p.amount::text as amount, p.amount_applied::text as amount_applied,
+            p.amount_refunded::text as amount_refunded, p.currency, p.received_on::text as received_on, p.reference, p.receipt_no,
+            coalesce((select sum(r.amount) from refunds r where r.tenant_id = p.tenant_id and r.payment_id = p.id and r.status = 'pending'), 0)::text
+              as pending_refunds
+       from payments p where p.tenant_id = $1 and p.invoice_id = $2 order by p.received_on, p.created_at`,
+    [tx.tenantId, invoiceId],
+  );
+  const refunds = await tx.client.query<RefundRow>(
+    `select id, payment_id, method, status, amount::text as amount, currency, refunded_on::text as refunded_on, reason, reference,
+            receipt_no, failure_message
+       from refunds where tenant_id = $1 and invoice_id = $2 order by created_at`,
+    [tx.tenantId, invoiceId],
+  );
+  return payments.rows.map((p) => ({
+    id: p.id,
+    invoiceId: p.invoice_id,
+    method: p.method,
+    amount: moneyOut(p.amount, p.currency),
+    amountApplied: moneyOut(p.amount_applied, p.currency),
+    amountRefunded: moneyOut(p.amount_refunded, p.currency),
+    refundable: moneyOut(new Decimal(p.amount).minus(p.amount_refunded).minus(p.pending_refunds).toString(), p.currency),
+    currency: p.currency,
+    receivedOn: p.received_on,
+    reference: p.reference,
+    receiptNumber: receiptNumber(p.receipt_no),
+    refunds: refunds.rows.filter((r) => r.payment_id === p.id).map(toRefundView),
+  }));
+}
+
+export const toRefundView = (r: RefundRow): RefundView => ({
+  id: r.id,
+  paymentId: r.payment_id,
+  method: r.method,
+  status: r.status,
+  amount: moneyOut(r.amount, r.currency),
+  currency: r.currency,
+  refundedOn: r.refunded_on,
+  reason: r.reason,
+  reference: r.reference,
+  receiptNumber: receiptNumber(r.receipt_no),
+  failureMessage: r.failure_message,
+});
+
+/** Overpayments made on this invoice, kept as the client's credit. */
+export async function listInvoiceCredits(tx: TenantTx, invoiceId: string): Promise<ClientCreditView[]> {
+  const { rows } = await tx.client.query<{
+    id: string;
+    payment_id: string;
+    amount: string;
+    currency: string;
+    note: string;
+    created_at: Date;
+    used_on_invoice_id: string | null;
+  }>(
+    `select c.id, c.payment_id, c.amount::text as amount, c.currency, c.note, c.created_at, c.used_on_invoice_id
+       from client_credits c join payments p on p.tenant_id = c.tenant_id and p.id = c.payment_id
+      where c.tenant_id = $1 and p.invoice_id = $2 order by c.created_at`,
+    [tx.tenantId, invoiceId],
+  );
+  return rows.map((c) => ({
+    id: c.id,
+    paymentId: c.payment_id,
+    amount: moneyOut(c.amount, c.currency),
+    currency: c.currency,
+    note: c.note,
+    createdAt: c.created_at.toISOString(),
+    usedOnInvoiceId: c.used_on_invoice_id,
+  }));
+}
