@@ -4,7 +4,8 @@ import { minorUnitDigits } from './currency';
 
 /**
  * The processor's "smallest currency unit" differs from ISO 4217 for some currencies
- * (Stripe Docs "Supported currencies"). Re-read that page at each release: the lists change.
+ * (Stripe Docs "Supported currencies", docs.stripe.com/currencies). Re-read that page at each
+ * release: the lists change.
  */
 const ZERO_DECIMAL = new Set([
   'BIF',
@@ -28,6 +29,45 @@ const ZERO_DECIMAL = new Set([
 /** Zero-decimal in practice, but still sent ×100 for backward compatibility (so amounts end in 00). */
 const SENT_TIMES_HUNDRED = new Set(['ISK', 'UGX']);
 
+/**
+ * Sent in thousandths, but the last digit must be 0 ("Three-decimal currencies"): a charge in
+ * these can only be made in whole hundredths (5.120 KWD → 5120; 5.124 KWD is refused).
+ */
+const THREE_DECIMAL = new Set(['BHD', 'JOD', 'KWD', 'OMR', 'TND']);
+
+/**
+ * Smallest charge per settlement currency ("Minimum and maximum charge amounts"), in major
+ * units. We charge in the firm's own currency and assume it settles in that currency; a firm
+ * settling in another currency must meet that currency's minimum after conversion, which the
+ * processor then refuses with its own message.
+ */
+const MINIMUM_CHARGE: Readonly<Record<string, string>> = {
+  USD: '0.50',
+  AED: '2.00',
+  AUD: '0.50',
+  BGN: '1.00',
+  BRL: '0.50',
+  CAD: '0.50',
+  CHF: '0.50',
+  CZK: '15.00',
+  DKK: '2.50',
+  EUR: '0.50',
+  GBP: '0.30',
+  HKD: '4.00',
+  HUF: '175.00',
+  INR: '0.50',
+  JPY: '50',
+  MXN: '10',
+  MYR: '2',
+  NOK: '3.00',
+  NZD: '0.50',
+  PLN: '2.00',
+  RON: '2.00',
+  SEK: '3.00',
+  SGD: '0.50',
+  THB: '10',
+};
+
 export interface ProcessorCurrencyRule {
   /** decimals the customer can actually be charged in */
   chargeableDigits: number;
@@ -35,10 +75,15 @@ export interface ProcessorCurrencyRule {
   apiExponent: number;
 }
 
-export function processorCurrencyRule(currency: string): ProcessorCurrencyRule {
-  const iso = minorUnitDigits(currency);
+export function processorCurrencyRule(currency: string, field = 'currency'): ProcessorCurrencyRule {
+  const iso = minorUnitDigits(currency, field);
   if (SENT_TIMES_HUNDRED.has(currency)) return { chargeableDigits: 0, apiExponent: 2 };
   if (ZERO_DECIMAL.has(currency)) return { chargeableDigits: 0, apiExponent: 0 };
+  if (THREE_DECIMAL.has(currency)) return { chargeableDigits: 2, apiExponent: 3 };
+  if (iso > 2) {
+    // Three- and four-decimal ISO currencies outside the processor's three-decimal list (IQD, LYD, CLF…)
+    throw new DomainInputError(field, `Card payments cannot be taken in ${currency}.`);
+  }
   return { chargeableDigits: iso, apiExponent: iso };
 }
 
@@ -50,7 +95,7 @@ export function toProcessorAmount(amount: Decimal.Value, currency: string, field
   if (value.decimalPlaces() > rule.chargeableDigits) {
     throw new DomainInputError(
       field,
-      `${currency} can only be charged in whole multiples of ${new Decimal(1).div(new Decimal(10).pow(rule.chargeableDigits)).toString()}.`,
+      `${currency} can only be charged in whole multiples of ${new Decimal(1).div(new Decimal(10).pow(rule.chargeableDigits)).toFixed(rule.chargeableDigits)}.`,
     );
   }
   const sent = value.times(new Decimal(10).pow(rule.apiExponent));
@@ -67,8 +112,8 @@ export function fromProcessorAmount(sent: number, currency: string, field = 'amo
 /**
  * The processor's smallest card charge in this currency, in major units ("0.50" USD), or null
  * when the processor does not publish one for it (then a card payment is not offered).
- * Placeholder: filled with the processor's published table and its checks.
  */
 export function processorMinimumCharge(currency: string): Decimal | null {
-  return currency === 'USD' ? new Decimal('0.50') : null;
+  const minimum = MINIMUM_CHARGE[currency];
+  return minimum === undefined ? null : new Decimal(minimum);
 }
