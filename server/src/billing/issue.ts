@@ -1,6 +1,6 @@
 import type { InvoiceIssue, InvoiceLine, ProgressTable } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { documentNumber, dueDate } from '@layerbook/domain';
+import { dueDate } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Config } from '../config';
@@ -11,7 +11,7 @@ import { assertBillingStarted, firmToday, invoiceTax, loadBillingJob } from './b
 import { invoiceDocument } from './document';
 import { progressDepositCredit, retainageHeld } from './drafts';
 import { enqueueInvoiceMail } from './invoice-mail';
-import { nextDocumentNumber } from './numbering';
+import { takeInvoiceNumber } from './numbering';
 import { loadBillingSettings } from './settings';
 
 interface LockedInvoice {
@@ -72,17 +72,13 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
   const issuedOn = body.issuedOn ?? firmToday(job, now);
   const dueOn = dueDate(issuedOn, job.billing_terms.terms);
   const document = await invoiceDocument(tx, job.id, job.billing_terms, settings);
-  const n = await nextDocumentNumber(tx, 'invoice');
-  const numberText = documentNumber(settings.invoicePrefix, n);
   await tx.client.query(
-    `update invoices set status = $13, number = $3, number_text = $4, issued_on = $5, due_on = $6, document = $7, deposit_credit = $8,
-            total = $9, tax_included = $10, issued_by = $11, issued_at = $12, updated_at = $12
+    `update invoices set status = $11, issued_on = $3, due_on = $4, document = $5, deposit_credit = $6,
+            total = $7, tax_included = $8, issued_by = $9, issued_at = $10, updated_at = $10
       where tenant_id = $1 and id = $2`,
     [
       tx.tenantId,
       id,
-      n,
-      numberText,
       issuedOn,
       dueOn,
       JSON.stringify(document),
@@ -103,6 +99,8 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
       now,
     ]);
   }
+  // The number last: every issuer of the firm waits on the counter from here to commit.
+  const { text: numberText } = await takeInvoiceNumber(tx, id, settings.invoicePrefix);
   await recordAudit(tx, {
     actorUserId: actor.userId,
     actorKind: actor.kind,

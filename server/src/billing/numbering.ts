@@ -1,4 +1,8 @@
 import type { TenantTx } from '@layerbook/db';
+import { documentNumber } from '@layerbook/domain';
+
+/** Digits a document number is padded to ("INV-0007"). */
+const NUMBER_WIDTH = 4;
 
 export type DocumentSeries = 'invoice' | 'credit_note' | 'receipt';
 
@@ -15,4 +19,28 @@ export async function nextDocumentNumber(tx: TenantTx, series: DocumentSeries): 
     [tx.tenantId, series],
   );
   return rows[0].n;
+}
+
+/**
+ * Issuing's last write before its audit entry: takes the next invoice number AND stamps it on the
+ * invoice in one statement, so the counter row — which every issuer of the firm waits on until
+ * commit — is held for as short a time as possible (the heavy document write happens before).
+ * The text is made in SQL from the prefix's head and checked against documentNumber().
+ */
+export async function takeInvoiceNumber(tx: TenantTx, invoiceId: string, prefix: string): Promise<{ n: number; text: string }> {
+  const head = documentNumber(prefix, 1, 1).slice(0, -1);
+  const { rows } = await tx.client.query<{ n: number; text: string }>(
+    `with counter as (
+       insert into document_counters (tenant_id, series, next_no) values ($1, 'invoice', 2)
+       on conflict (tenant_id, series) do update set next_no = document_counters.next_no + 1
+       returning next_no - 1 as n)
+     update invoices i set number = counter.n, number_text = $3 || lpad(counter.n::text, greatest($4, length(counter.n::text)), '0')
+       from counter where i.tenant_id = $1 and i.id = $2
+     returning counter.n as n, i.number_text as text`,
+    [tx.tenantId, invoiceId, head, NUMBER_WIDTH],
+  );
+  const taken = rows[0];
+  if (!taken || taken.text !== documentNumber(prefix, taken.n, NUMBER_WIDTH))
+    throw new Error('The invoice number was not taken as printed.');
+  return taken;
 }
