@@ -40,6 +40,31 @@ describe('job statement', () => {
     });
   });
 
+  it('a refund gives back part of a payment: a negative credit, the balance owed rises, paid is payments less refunds', () => {
+    // common practice, no source: money returned to a customer reverses part of their payment on the account
+    const s = jobStatement({
+      contractSum: '3000.00',
+      currency: 'USD',
+      entries: [
+        { kind: 'refund', on: '2027-05-10', ref: 'Refund to card', amount: '250.00' },
+        { kind: 'invoice', on: '2027-05-01', ref: 'INV-0001', amount: '1000.00' },
+        { kind: 'payment', on: '2027-05-02', ref: 'Card', amount: '1000.00' },
+      ],
+    });
+    expect(text(s)).toEqual({
+      lines: [
+        '2027-05-01 invoice INV-0001 +1000.00 −0.00 = 1000.00',
+        '2027-05-02 payment Card +0.00 −1000.00 = 0.00',
+        '2027-05-10 refund Refund to card +0.00 −-250.00 = 250.00',
+      ],
+      invoiced: '1000.00',
+      credited: '0.00',
+      paid: '750.00',
+      balanceDue: '250.00',
+      unbilled: '2000.00',
+    });
+  });
+
   it('an empty statement owes nothing and has the whole contract to bill', () => {
     expect(text(jobStatement({ contractSum: '5000.00', currency: 'USD', entries: [] }))).toMatchObject({
       balanceDue: '0.00',
@@ -75,7 +100,7 @@ describe('job statement', () => {
     const ok: StatementEntry = { kind: 'invoice', on: '2027-04-01', ref: 'INV-0001', amount: '1000.00' };
     const call = (e: Partial<StatementEntry>) => () =>
       jobStatement({ contractSum: '1000.00', currency: 'USD', entries: [ok, { ...ok, ...e }] });
-    expectInputError(call({ kind: 'refund' as StatementEntry['kind'] }), 'entries[1].kind');
+    expectInputError(call({ kind: 'rebate' as StatementEntry['kind'] }), 'entries[1].kind');
     expectInputError(call({ on: '2027-04-31' }), 'entries[1].on');
     expectInputError(call({ amount: '-5.00' }), 'entries[1].amount', /negative/);
     expectInputError(call({ amount: '5.001' }), 'entries[1].amount', /decimal places/);
