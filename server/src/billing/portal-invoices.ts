@@ -13,6 +13,10 @@ import type Decimal from 'decimal.js';
 import type { ClientPrincipal } from '../http/principal';
 import { notFound } from '../http/problem';
 import { clientIdOf, firmToday } from '../proposals/client-proposals';
+import type { Config } from '../config';
+import { payOnlineFor } from '../payments/portal-pay';
+import { processorFor } from '../payments/processor';
+import { listPortalReceipts } from '../payments/receipts/receipt-read';
 import { moneyOut } from './money';
 import { loadPrintableInvoice } from './pdf/printable';
 
@@ -78,7 +82,17 @@ export async function listClientInvoices(tx: TenantTx, client: ClientPrincipal, 
   return rows.map(toSummary);
 }
 
-export async function getClientInvoice(tx: TenantTx, client: ClientPrincipal, id: string, now: Date): Promise<PortalInvoiceDetail> {
+/**
+ * One invoice of the client's, with whether it can be paid by card now (and why not, when open) and
+ * its receipts. `config` says whether online payments are on; without it the invoice offers none.
+ */
+export async function getClientInvoice(
+  tx: TenantTx,
+  client: ClientPrincipal,
+  id: string,
+  now: Date,
+  config?: Config,
+): Promise<PortalInvoiceDetail> {
   const clientId = await requireClientId(tx, client, 'invoice');
   const { rows } = await tx.client.query<SummaryRow>(
     `select ${SUMMARY_COLUMNS}
@@ -94,8 +108,10 @@ export async function getClientInvoice(tx: TenantTx, client: ClientPrincipal, id
       [tx.tenantId, id],
     )
   ).rows[0];
+  const summary = toSummary(rows[0]);
+  const online = payOnlineFor(config ? processorFor(config) !== null : false, summary);
   return {
-    ...toSummary(rows[0]),
+    ...summary,
     lines: inv.lines,
     progress: inv.progress,
     depositCredit: inv.depositCredit,
@@ -106,10 +122,9 @@ export async function getClientInvoice(tx: TenantTx, client: ClientPrincipal, id
     creditNote: note
       ? { id: note.id, number: note.number_text, issuedOn: note.issued_on, amount: moneyOut(note.amount, inv.currency) }
       : null,
-    // The payments area fills these in (server/src/payments/portal-pay.ts).
-    canPayOnline: false,
-    payOnlineNote: null,
-    receipts: [],
+    canPayOnline: online.canPayOnline,
+    payOnlineNote: online.payOnlineNote,
+    receipts: await listPortalReceipts(tx, id),
   };
 }
 
@@ -120,8 +135,15 @@ const PAYMENT_WORDS: Readonly<Record<PaymentMethod, string>> = {
   cash: 'Payment in cash',
 };
 
+const REFUND_WORDS: Readonly<Record<PaymentMethod, string>> = {
+  card: 'Refund to card',
+  cheque: 'Refund by cheque',
+  transfer: 'Refund by bank transfer',
+  cash: 'Refund in cash',
+};
+
 interface EntryRow {
-  kind: 'invoice' | 'creditNote' | 'payment';
+  kind: 'invoice' | 'creditNote' | 'payment' | 'refund';
   on: string;
   /** the document's number, or the payment's reference */
   text: string;
@@ -130,7 +152,10 @@ interface EntryRow {
   amount: string;
 }
 
-/** One job of this client: its invoices (issued, never drafts), credit notes and payments with the running balance. */
+/**
+ * One job of this client: its invoices (issued, never drafts), credit notes, payments and the
+ * refunds that went through (a negative credit: the balance owed goes back up), with the running balance.
+ */
 export async function getClientStatement(tx: TenantTx, client: ClientPrincipal, jobId: string): Promise<PortalStatement> {
   const clientId = await requireClientId(tx, client, 'job');
   const job = (
@@ -152,6 +177,10 @@ export async function getClientStatement(tx: TenantTx, client: ClientPrincipal, 
      select 'payment', p.received_on::text, p.reference, null, p.amount::text, p.method, null
        from payments p join invoices i on i.tenant_id = p.tenant_id and i.id = p.invoice_id
       where p.tenant_id = $1 and i.job_id = $2
+     union all
+     select 'refund', r.refunded_on::text, r.reference, null, r.amount::text, r.method, null
+       from refunds r join invoices i on i.tenant_id = r.tenant_id and i.id = r.invoice_id
+      where r.tenant_id = $1 and i.job_id = $2 and r.status = 'succeeded'
      order by 2, 7 nulls last`,
     [tx.tenantId, jobId],
   );
@@ -180,10 +209,10 @@ export async function getClientStatement(tx: TenantTx, client: ClientPrincipal, 
   };
 }
 
-/** "INV-0007 Deposit", "CN-0002 for INV-0007", "Payment by cheque 1042". */
+/** "INV-0007 Deposit", "CN-0002 for INV-0007", "Payment by cheque 1042", "Refund to card". */
 function entryText(r: EntryRow): string {
-  if (r.kind === 'payment') {
-    const words = r.method ? PAYMENT_WORDS[r.method] : 'Payment';
+  if (r.kind === 'payment' || r.kind === 'refund') {
+    const words = r.method ? (r.kind === 'payment' ? PAYMENT_WORDS : REFUND_WORDS)[r.method] : 'Payment';
     return r.text ? `${words} ${r.text}` : words;
   }
   if (r.kind === 'invoice' && r.invoice_kind) return `${r.text} ${INVOICE_KIND_LABELS[r.invoice_kind]}`;

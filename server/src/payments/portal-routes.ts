@@ -1,5 +1,13 @@
+import { uuid, type CheckoutStart, type CheckoutStatus } from '@layerbook/contracts';
 import { Router } from 'express';
+import { z } from 'zod';
 import type { AppContext } from '../context';
+import { parse } from '../http/validate';
+import { startCheckout } from './checkout';
+import { checkoutStatus } from './checkout-status';
+
+const invoiceParam = z.strictObject({ id: uuid('invoice id') });
+const checkoutParam = z.strictObject({ id: uuid('invoice id'), checkoutId: uuid('payment id') });
 
 /**
  * The client's side of payments, mounted at /api/portal: start a checkout for an invoice's amount
@@ -7,6 +15,16 @@ import type { AppContext } from '../context';
  */
 export function portalPaymentRoutes(ctx: AppContext): Router {
   const router = Router();
-  void ctx;
+
+  router.post('/invoices/:id/checkout', async (req, res) => {
+    const started = await startCheckout(ctx, req, parse(invoiceParam, req.params).id);
+    res.status(201).json(started satisfies CheckoutStart);
+  });
+
+  router.get('/invoices/:id/checkout/:checkoutId', async (req, res) => {
+    const { id, checkoutId } = parse(checkoutParam, req.params);
+    res.json((await checkoutStatus(ctx, req, id, checkoutId)) satisfies CheckoutStatus);
+  });
+
   return router;
 }

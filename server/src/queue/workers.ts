@@ -7,6 +7,9 @@ import { sendProposalReminders } from '../proposals/expiry-reminders';
 import { runBillingDaily } from '../billing/triggers/daily';
 import { runBillingEvaluate } from '../billing/triggers/evaluate';
 import { sweepBilling } from '../billing/triggers/sweep';
+import { applyStoredEvent } from '../payments/apply-event';
+import { processorFor } from '../payments/processor';
+import { reconcileEvents } from '../payments/reconcile';
 import { sendFollowUpDigest, sweepFollowUps } from './follow-ups';
 import type { StartedQueue } from './job-queue';
 import { pruneExpired } from './prune';
@@ -19,6 +22,7 @@ import {
   FollowUpDigestJob,
   FollowUpSweepJob,
   MailSendJob,
+  PaymentsApplyJob,
   PRUNE_EXPIRED_CRON,
   QUEUES,
 } from './queues';
@@ -63,11 +67,20 @@ export async function startWorkers(config: Config, queue: StartedQueue, logger: 
   await workEach<BillingEvaluateJob>(boss, QUEUES.billingEvaluate, 2, (data) => runBillingEvaluate(pool, data, now()));
   await workEach<BillingSweepJob>(boss, QUEUES.billingSweep, 1, (data) => sweepBilling(pool, queue, data ?? {}, now()));
   await workEach<BillingDailyJob>(boss, QUEUES.billingDaily, 2, (data) => runBillingDaily(pool, queue, config, data, logger, now()));
+  // Payments: each stored processor event applied exactly once (several at a time); the reconciliation
+  // fetches what the webhook missed and queues again what was never applied.
+  const stripe = processorFor(config);
+  const paymentDeps = { queue, config };
+  await workEach<PaymentsApplyJob>(boss, QUEUES.paymentsApply, 3, (data) => applyStoredEvent(pool, paymentDeps, data, now()));
+  await workEach<object>(boss, QUEUES.paymentsReconcile, 1, async () => {
+    if (stripe) await reconcileEvents(pool, queue, stripe, now(), logger);
+  });
   await workEach<object>(boss, QUEUES.pruneExpired, 1, async () => logger.info(await pruneExpired(pool, now()), 'pruned expired rows'));
   // Declared once; pg-boss keeps one schedule per queue however many processes call this.
   await boss.schedule(QUEUES.followUpSweep, FOLLOW_UP_SWEEP_CRON, {}, { tz: 'UTC' });
   await boss.schedule(QUEUES.pruneExpired, PRUNE_EXPIRED_CRON, {}, { tz: 'UTC' });
   await boss.schedule(QUEUES.billingSweep, BILLING_SWEEP_CRON, {}, { tz: 'UTC' });
+  if (stripe) await boss.schedule(QUEUES.paymentsReconcile, config.PAYMENTS_RECONCILE_CRON, {}, { tz: 'UTC' });
   return {
     async stop() {
       // Workers stop with the queue (boss.stop); here only what the workers opened.

@@ -1,0 +1,70 @@
+import { withTenant, type TenantTx } from '@layerbook/db';
+import type { Pool } from 'pg';
+import type Stripe from 'stripe';
+import type { PaymentsApplyJob } from '../queue/queues';
+import { expireCheckoutSession, fulfilCheckoutSession } from './fulfil';
+import type { ReceiptMailDeps } from './receipt-mail';
+import { applyProcessorRefund } from './refund-events';
+
+export interface ApplyDeps extends ReceiptMailDeps {
+  /**
+   * Called after the event's effect is written and before it is marked applied, still inside the
+   * transaction. Only the worker-kill test sets it (to stall there); nothing else should.
+   */
+  readonly afterEffect?: (eventId: string) => Promise<void>;
+}
+
+/** What one event does, in words; throwing rolls the whole application back and the queue retries it. */
+async function dispatch(tx: TenantTx, deps: ReceiptMailDeps, event: Stripe.Event, now: Date): Promise<string> {
+  switch (event.type) {
+    case 'checkout.session.completed':
+    case 'checkout.session.async_payment_succeeded':
+      return (await fulfilCheckoutSession(tx, deps, event.data.object, new Date(event.created * 1000), now)).outcome;
+    case 'checkout.session.async_payment_failed':
+      return `The payment for checkout ${event.data.object.id} did not clear; nothing recorded`;
+    case 'checkout.session.expired':
+      return expireCheckoutSession(tx, event.data.object);
+    case 'refund.created':
+    case 'refund.updated':
+    case 'refund.failed':
+      return applyProcessorRefund(tx, deps, event.data.object, now);
+    case 'charge.refunded': {
+      const refunds = event.data.object.refunds?.data ?? [];
+      if (!refunds.length) return 'Ignored: the refunds come with their own events';
+      const done: string[] = [];
+      for (const refund of refunds) done.push(await applyProcessorRefund(tx, deps, refund, now));
+      return done.join('; ');
+    }
+    default:
+      return `Ignored: ${event.type}`;
+  }
+}
+
+/**
+ * The payments-apply job: applies one stored event exactly once. The event row is locked, an event
+ * already applied is skipped, and `applied_at` with the outcome is written in the same transaction
+ * as the effect — a crash anywhere before the commit leaves neither, so a retry (or the
+ * reconciliation's re-queue) applies it once. The order events arrive in does not matter: each
+ * effect checks the state it finds (an expiry after the payment changes nothing; a refund before
+ * its payment throws, and the queue retries it later). Returns the outcome, or null for no such event.
+ */
+export async function applyStoredEvent(pool: Pool, deps: ApplyDeps, job: PaymentsApplyJob, now: Date): Promise<string | null> {
+  return withTenant(pool, job.tenantId, async (tx) => {
+    const { rows } = await tx.client.query<{ payload: Stripe.Event; applied_at: Date | null; outcome: string | null }>(
+      `select payload, applied_at, outcome from processor_events where tenant_id = $1 and id = $2 for update`,
+      [tx.tenantId, job.eventId],
+    );
+    const row = rows[0];
+    if (!row) return null;
+    if (row.applied_at) return row.outcome;
+    const outcome = await dispatch(tx, deps, row.payload, now);
+    await deps.afterEffect?.(job.eventId);
+    await tx.client.query(`update processor_events set applied_at = $3, outcome = $4 where tenant_id = $1 and id = $2`, [
+      tx.tenantId,
+      job.eventId,
+      now,
+      outcome,
+    ]);
+    return outcome;
+  });
+}

@@ -1,0 +1,131 @@
+import { randomUUID } from 'node:crypto';
+import { type CheckoutStart, INVOICE_KIND_LABELS, type InvoiceKind, type InvoiceStatus } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import { toProcessorAmount } from '@layerbook/domain';
+import type { Request } from 'express';
+import type Stripe from 'stripe';
+import { moneyOut } from '../billing/money';
+import type { AppContext } from '../context';
+import { withClient } from '../http/guards';
+import type { ClientPrincipal } from '../http/principal';
+import { conflict, HttpError, notFound } from '../http/problem';
+import { clientIdOf } from '../proposals/client-proposals';
+import { payOnlineFor } from './portal-pay';
+import { processorFor } from './processor';
+
+/** How long the processor keeps a checkout open (Stripe allows 30 minutes to 24 hours). */
+export const CHECKOUT_LIFETIME_SECONDS = 60 * 60;
+/** An open checkout is offered again only while it has this long left, so the client is not sent to a page about to lapse. */
+const REUSE_MARGIN_SECONDS = 10 * 60;
+
+interface PayableInvoice {
+  id: string;
+  client_id: string;
+  status: InvoiceStatus;
+  kind: InvoiceKind;
+  number_text: string;
+  currency: string;
+  due: string;
+  job_title: string;
+  client_email: string;
+}
+
+/** The signed-in client's own invoice (never a draft), with what is due; 404 for anyone else's. */
+export async function loadPayableInvoice(tx: TenantTx, client: ClientPrincipal, invoiceId: string, lock = false): Promise<PayableInvoice> {
+  const clientId = await clientIdOf(tx, client);
+  if (!clientId) throw notFound('invoice');
+  const { rows } = await tx.client.query<PayableInvoice>(
+    `select i.id, i.client_id, i.status, i.kind, i.number_text, i.currency,
+            (i.total - i.amount_paid - i.amount_credited)::numeric(14, 2)::text as due, j.title as job_title, c.email as client_email
+       from invoices i join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id
+       join clients c on c.tenant_id = i.tenant_id and c.id = i.client_id
+      where i.tenant_id = $1 and i.id = $2 and i.client_id = $3 and i.status <> 'draft'${lock ? ' for update of i' : ''}`,
+    [tx.tenantId, invoiceId, clientId],
+  );
+  if (!rows[0]) throw notFound('invoice');
+  return rows[0];
+}
+
+/** 409 with the same words the portal shows instead of the pay button. */
+function refuseUnpayable(isOnline: boolean, inv: PayableInvoice): void {
+  if (!isOnline) throw conflict('This firm takes no card payments online; the invoice says how to pay.');
+  if (inv.status === 'paid' || inv.status === 'refunded') throw conflict(`Invoice ${inv.number_text} is already paid.`);
+  if (inv.status === 'void') throw conflict(`Invoice ${inv.number_text} is void: there is nothing to pay.`);
+  const pay = payOnlineFor(isOnline, { status: inv.status, currency: inv.currency, amountDue: inv.due });
+  if (!pay.canPayOnline) {
+    throw conflict(pay.payOnlineNote ?? `Nothing is due on invoice ${inv.number_text}.`, [
+      { field: 'amount', message: pay.payOnlineNote ?? 'Nothing is due.' },
+    ]);
+  }
+}
+
+const processorDown = () =>
+  new HttpError(
+    502,
+    'The card processor did not answer',
+    'The card payment page could not be opened. Nothing was charged; try again in a moment.',
+  );
+
+/**
+ * POST /api/portal/invoices/:id/checkout — sends the client to the processor's hosted page for the
+ * invoice's amount due. An open checkout of the same amount with time left is offered again; else
+ * a new Checkout Session is created (idempotency key = our checkout's id, so a retried call opens
+ * one) and our checkout row keeps what was asked, to check the processor's answer against.
+ * The processor is called between two transactions, never inside one.
+ */
+export async function startCheckout(ctx: AppContext, req: Request, invoiceId: string): Promise<CheckoutStart> {
+  const stripe = processorFor(ctx.config);
+  const now = ctx.now();
+  const plan = await withClient(ctx, req, async (tx, client) => {
+    const inv = await loadPayableInvoice(tx, client, invoiceId);
+    refuseUnpayable(stripe !== null, inv);
+    const { rows } = await tx.client.query<{ id: string; url: string }>(
+      `select id, url from checkout_sessions
+        where tenant_id = $1 and invoice_id = $2 and status = 'open' and amount = $3::numeric and currency = $4
+          and created_at > $5::timestamptz - make_interval(secs => $6) order by created_at desc limit 1`,
+      [tx.tenantId, inv.id, inv.due, inv.currency, now, CHECKOUT_LIFETIME_SECONDS - REUSE_MARGIN_SECONDS],
+    );
+    return { inv, reuse: rows[0] ?? null };
+  });
+  if (plan.reuse) return { url: plan.reuse.url, checkoutId: plan.reuse.id };
+  const { inv } = plan;
+  const checkoutId = randomUUID();
+  const base = ctx.config.PUBLIC_URL.replace(/\/$/, '');
+  const metadata = { tenant_id: req.user!.tenantId, invoice_id: inv.id, checkout_id: checkoutId };
+  const params: Stripe.Checkout.SessionCreateParams = {
+    mode: 'payment',
+    line_items: [
+      {
+        quantity: 1,
+        price_data: {
+          currency: inv.currency.toLowerCase(),
+          unit_amount: toProcessorAmount(inv.due, inv.currency),
+          product_data: { name: `${inv.number_text} ${INVOICE_KIND_LABELS[inv.kind]} — ${inv.job_title}` },
+        },
+      },
+    ],
+    ...(inv.client_email ? { customer_email: inv.client_email } : {}),
+    success_url: `${base}/portal/invoices/${inv.id}/payment/${checkoutId}`,
+    cancel_url: `${base}/portal/invoices/${inv.id}?payment=cancelled`,
+    expires_at: Math.floor(now.getTime() / 1000) + CHECKOUT_LIFETIME_SECONDS,
+    metadata,
+    payment_intent_data: { metadata },
+  };
+  let session: Stripe.Checkout.Session;
+  try {
+    session = await stripe!.checkout.sessions.create(params, { idempotencyKey: checkoutId });
+  } catch (error) {
+    req.log?.error({ err: error, invoiceId: inv.id }, 'checkout session not created');
+    throw processorDown();
+  }
+  if (!session.url) throw processorDown();
+  const url = session.url;
+  await withClient(ctx, req, (tx) =>
+    tx.client.query(
+      `insert into checkout_sessions (id, tenant_id, invoice_id, client_id, processor_session_id, amount, currency, url, created_at)
+       values ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
+      [checkoutId, tx.tenantId, inv.id, inv.client_id, session.id, moneyOut(inv.due, inv.currency), inv.currency, url, now],
+    ),
+  );
+  return { url, checkoutId };
+}

@@ -1,0 +1,114 @@
+import type { TenantTx } from '@layerbook/db';
+import { fromProcessorAmount, toProcessorAmount } from '@layerbook/domain';
+import type Decimal from 'decimal.js';
+import type Stripe from 'stripe';
+import { localDate } from '../firms/local-date';
+import { SYSTEM_ACTOR } from '../http/actor';
+import { enqueueReceiptMail, type ReceiptMailDeps } from './receipt-mail';
+import { recordPayment } from './record-payment';
+
+export interface Fulfilment {
+  /** what happened, in words, kept as the event's outcome */
+  readonly outcome: string;
+  readonly paymentId: string | null;
+  readonly receiptNumber: string | null;
+}
+
+interface CheckoutRow {
+  id: string;
+  invoice_id: string;
+  amount: string;
+  currency: string;
+  status: 'open' | 'complete' | 'expired';
+}
+
+/** Our checkout for a processor session, locked for the rest of the transaction; null when it is not ours. */
+async function lockCheckout(tx: TenantTx, sessionId: string): Promise<CheckoutRow | null> {
+  const { rows } = await tx.client.query<CheckoutRow>(
+    `select id, invoice_id, amount::text as amount, currency, status from checkout_sessions
+      where tenant_id = $1 and processor_session_id = $2 for update`,
+    [tx.tenantId, sessionId],
+  );
+  return rows[0] ?? null;
+}
+
+const paymentIntentId = (session: Stripe.Checkout.Session): string | null =>
+  typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
+
+/** The processor's amount in major units, or null when it names a currency we cannot read. */
+function paidAmount(session: Stripe.Checkout.Session): { amount: Decimal; currency: string } | null {
+  if (session.amount_total === null || !session.currency) return null;
+  const currency = session.currency.toUpperCase();
+  try {
+    return { amount: fromProcessorAmount(session.amount_total, currency), currency };
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * Records the payment of a paid Checkout Session, in the caller's transaction — whoever asks: the
+ * webhook's event, the client's return from the processor's page, or the reconciliation. Idempotent:
+ * recordPayment finds a payment already recorded for the session and writes nothing. What was really
+ * paid (the processor's amount_total and currency) is what is recorded; when it differs from what
+ * our checkout asked, the payment is still recorded (a different currency stays whole as the client's
+ * credit) and the outcome says it needs attention. The receipt e-mail is queued in the same transaction.
+ * `paidAt` dates the payment in the firm's zone.
+ */
+export async function fulfilCheckoutSession(
+  tx: TenantTx,
+  deps: ReceiptMailDeps,
+  session: Stripe.Checkout.Session,
+  paidAt: Date,
+  now: Date,
+): Promise<Fulfilment> {
+  const checkout = await lockCheckout(tx, session.id);
+  if (!checkout) return { outcome: `Ignored: no checkout of ours for ${session.id}`, paymentId: null, receiptNumber: null };
+  if (session.payment_status !== 'paid') {
+    return { outcome: `Waiting: the payment for checkout ${session.id} has not cleared`, paymentId: null, receiptNumber: null };
+  }
+  const paid = paidAmount(session);
+  if (!paid) {
+    return {
+      outcome: `Needs attention: checkout ${session.id} is paid but the processor gave no amount we can read`,
+      paymentId: null,
+      receiptNumber: null,
+    };
+  }
+  const asked = toProcessorAmount(checkout.amount, checkout.currency);
+  const matches = paid.currency === checkout.currency && session.amount_total === asked;
+  const zone = (await tx.client.query<{ time_zone: string }>(`select time_zone from firms where id = $1`, [tx.tenantId])).rows[0];
+  const intent = paymentIntentId(session);
+  const recorded = await recordPayment(tx, SYSTEM_ACTOR, {
+    invoiceId: checkout.invoice_id,
+    method: 'card',
+    amount: paid.amount.toFixed(),
+    currency: paid.currency,
+    receivedOn: localDate(zone.time_zone, paidAt),
+    reference: intent ?? session.id,
+    processorSessionId: session.id,
+    processorPaymentIntentId: intent ?? undefined,
+  });
+  if (!recorded.alreadyRecorded) await enqueueReceiptMail(tx, deps, { kind: 'payment', id: recorded.paymentId });
+  await tx.client.query(
+    `update checkout_sessions set status = 'complete', completed_at = coalesce(completed_at, $3) where tenant_id = $1 and id = $2`,
+    [tx.tenantId, checkout.id, now],
+  );
+  const words = `${paid.amount.toFixed()} ${paid.currency}`;
+  const outcome = recorded.alreadyRecorded
+    ? `Payment ${recorded.receiptNumber} already recorded`
+    : matches
+      ? `Payment ${recorded.receiptNumber} recorded: ${words}` + (recorded.credit !== '0.00' ? `, ${recorded.credit} kept as credit` : '')
+      : `Needs attention: paid ${words} where the checkout asked ${checkout.amount} ${checkout.currency}; ` +
+        `payment ${recorded.receiptNumber} recorded, ${recorded.applied} on the invoice, ${recorded.credit} kept as credit`;
+  return { outcome, paymentId: recorded.paymentId, receiptNumber: recorded.receiptNumber };
+}
+
+/** A checkout the processor let lapse: ours is marked expired unless it was paid meanwhile (then nothing changes). */
+export async function expireCheckoutSession(tx: TenantTx, session: Stripe.Checkout.Session): Promise<string> {
+  const checkout = await lockCheckout(tx, session.id);
+  if (!checkout) return `Ignored: no checkout of ours for ${session.id}`;
+  if (checkout.status !== 'open') return `Checkout ${session.id} already ${checkout.status}; nothing changed`;
+  await tx.client.query(`update checkout_sessions set status = 'expired' where tenant_id = $1 and id = $2`, [tx.tenantId, checkout.id]);
+  return `Checkout ${session.id} expired unpaid`;
+}
