@@ -1,0 +1,177 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { MAT_DIALOG_DATA, MatDialogRef } from '@angular/material/dialog';
+import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import type { PaymentDetail } from '@layerbook/contracts/types';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { cardOverpayment, cardRefundPending, chequeRefund, transferPayment } from './payment-fixtures';
+import { RefundDialog, type RefundDialogData } from './refund-dialog';
+
+function render(payment: PaymentDetail) {
+  const close = vi.fn();
+  const data: RefundDialogData = { payment, invoiceNumber: 'INV-0007', clientName: 'Hattie Brambleton' };
+  TestBed.configureTestingModule({
+    providers: [
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      provideNoopAnimations(),
+      { provide: MAT_DIALOG_DATA, useValue: data },
+      { provide: MatDialogRef, useValue: { close } },
+    ],
+  });
+  const fixture = TestBed.createComponent(RefundDialog);
+  fixture.detectChanges();
+  const html = fixture.nativeElement as HTMLElement;
+  const field = (label: string): HTMLInputElement | HTMLTextAreaElement => {
+    const formField = [...html.querySelectorAll('mat-form-field')].find((f) => f.querySelector('mat-label')?.textContent?.trim() === label);
+    return formField!.querySelector<HTMLInputElement | HTMLTextAreaElement>('input, textarea')!;
+  };
+  const type = (label: string, value: string): void => {
+    const input = field(label);
+    input.value = value;
+    input.dispatchEvent(new Event('input'));
+    fixture.detectChanges();
+  };
+  const choose = (words: string): void => {
+    const radio = [...html.querySelectorAll('mat-radio-button')].find((r) => r.textContent?.trim() === words);
+    radio!.querySelector('input')!.click();
+    fixture.detectChanges();
+  };
+  const submit = async (): Promise<void> => {
+    html.querySelector('form')!.dispatchEvent(new Event('submit'));
+    fixture.detectChanges();
+    await fixture.whenStable();
+  };
+  const errorOf = (label: string): string => field(label).closest('mat-form-field')?.querySelector('mat-error')?.textContent?.trim() ?? '';
+  const component = fixture.componentInstance;
+  return { fixture, html, field, type, choose, submit, errorOf, close, component, http: TestBed.inject(HttpTestingController) };
+}
+
+describe('the refund dialog', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('offers the card first for a card payment, with what can still be given back already filled in', () => {
+    const { html, field } = render(cardOverpayment);
+    const choices = [...html.querySelectorAll('mat-radio-button')].map((r) => r.textContent?.trim());
+    expect(choices).toEqual([
+      'Back to the card, online',
+      'Bank transfer (already sent)',
+      'Cheque (already written)',
+      'Cash (already handed back)',
+    ]);
+    expect(html.querySelector('mat-radio-button.mat-mdc-radio-checked')?.textContent?.trim()).toBe('Back to the card, online');
+    expect(field('Amount to give back').value).toBe('450.00');
+    expect(html.textContent).toContain('$450.00 of it can still be given back.');
+    // a card refund is dated by the processor: no day or reference to fill in
+    expect([...html.querySelectorAll('mat-label')].map((l) => l.textContent?.trim())).not.toContain('Given back on');
+    // 70.00 of credit left (120.00 kept − 50.00 given back), the rest off the invoice
+    expect(html.querySelector('.split')?.textContent?.trim()).toBe(
+      '$70.00 comes out of the credit kept for Hattie Brambleton, and $380.00 off what was paid on INV-0007, which then has $380.00 more due.',
+    );
+  });
+
+  it('sends a card refund back to the card with the amount and reason only, and closes with it', async () => {
+    const { type, submit, close, http, component } = render(cardOverpayment);
+    type('Amount to give back', '70');
+    type('Why the money goes back', '  Less plaster needed ');
+    await submit();
+    const post = http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' });
+    expect(post.request.body).toEqual({ method: 'card', amount: '70', reason: 'Less plaster needed' });
+    post.flush(cardRefundPending, { status: 201, statusText: 'Created' });
+    await new Promise((resolve) => setTimeout(resolve));
+    expect(close).toHaveBeenCalledWith(cardRefundPending);
+    expect(component.wasSent()).toBe(true);
+  });
+
+  it('records a refund by hand with its day and reference', async () => {
+    const { html, type, choose, submit, http, field } = render(cardOverpayment);
+    choose('Cheque (already written)');
+    expect(html.textContent).toContain('Record money you have already given back. Nothing is sent from here.');
+    const day = field('Given back on') as HTMLInputElement;
+    day.value = '11/26/2026';
+    day.dispatchEvent(new Event('input'));
+    type('Reference', 'Chq 000231');
+    type('Amount to give back', '50.00');
+    type('Why the money goes back', 'Paid twice');
+    await submit();
+    const post = http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' });
+    expect(post.request.body).toEqual({
+      method: 'cheque',
+      amount: '50.00',
+      reason: 'Paid twice',
+      refundedOn: '2026-11-26',
+      reference: 'Chq 000231',
+    });
+    post.flush(chequeRefund, { status: 201, statusText: 'Created' });
+  });
+
+  it('does not offer the card for a payment made by hand', () => {
+    const { html } = render(transferPayment);
+    const choices = [...html.querySelectorAll('mat-radio-button')].map((r) => r.textContent?.trim());
+    expect(choices).toEqual(['Bank transfer (already sent)', 'Cheque (already written)', 'Cash (already handed back)']);
+    expect(html.querySelector('mat-radio-button.mat-mdc-radio-checked')?.textContent?.trim()).toBe('Bank transfer (already sent)');
+    expect(html.querySelector('.split')?.textContent?.trim()).toBe(
+      'It comes off what was paid on INV-0007, which then has $1,000.00 more due.',
+    );
+  });
+
+  it('says beside the field when the amount is more than can be given back, and sends nothing', async () => {
+    const { type, submit, errorOf, http } = render(cardOverpayment);
+    type('Amount to give back', '450.01');
+    type('Why the money goes back', 'Job cancelled');
+    await submit();
+    expect(errorOf('Amount to give back')).toBe('This is more than the 450.00 USD that can still be given back.');
+    http.expectNone({ method: 'POST' });
+  });
+
+  it('asks for a reason before sending', async () => {
+    const { submit, errorOf, http } = render(cardOverpayment);
+    await submit();
+    expect(errorOf('Why the money goes back')).toBe('Say why the money goes back, like “job cancelled” or “paid twice”.');
+    http.expectNone({ method: 'POST' });
+  });
+
+  it('puts the server’s refusal beside the field it names', async () => {
+    const { fixture, type, choose, submit, errorOf, http, close } = render(cardOverpayment);
+    choose('Bank transfer (already sent)');
+    type('Reference', 'x'.repeat(20));
+    type('Why the money goes back', 'Paid twice');
+    await submit();
+    const message = 'Someone refunded part of this payment a moment ago: at most 380.00 can still be given back.';
+    http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' }).flush(
+      {
+        type: 'about:blank',
+        title: 'Check the highlighted fields.',
+        status: 400,
+        errors: [
+          { field: 'amount', message },
+          { field: 'reference', message: 'The bank’s reference has at most 18 characters.' },
+        ],
+      },
+      { status: 400, statusText: 'Bad Request', headers: { 'Content-Type': 'application/problem+json' } },
+    );
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(errorOf('Amount to give back')).toBe(message);
+    expect(errorOf('Reference')).toBe('The bank’s reference has at most 18 characters.');
+    expect(close).not.toHaveBeenCalled();
+  });
+
+  it('says at the top when the card processor refuses, and stays open', async () => {
+    const { fixture, html, type, submit, http, close, component } = render(cardOverpayment);
+    type('Why the money goes back', 'Job cancelled');
+    await submit();
+    http
+      .expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' })
+      .flush(
+        { type: 'about:blank', title: 'The card processor refused the refund.', status: 502, detail: 'The card was closed by its bank.' },
+        { status: 502, statusText: 'Bad Gateway' },
+      );
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(html.querySelector('lb-form-alert')?.textContent).toContain('The card was closed by its bank.');
+    expect(close).not.toHaveBeenCalled();
+    expect(component.wasSent()).toBe(true);
+  });
+});
