@@ -11,6 +11,12 @@ export default [
     title: 'Invoice · Layerbook client portal',
     loadComponent: () => import('./invoice-page').then((m) => m.InvoicePage),
   },
+  // The card page sends the client back here after paying.
+  {
+    path: 'invoices/:id/payment/:checkoutId',
+    title: 'Your payment · Layerbook client portal',
+    loadComponent: () => import('../payments/payment-return-page').then((m) => m.PaymentReturnPage),
+  },
   {
     path: 'jobs/:id/statement',
     title: 'Statement · Layerbook client portal',

@@ -6,14 +6,16 @@ import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 import { INVOICE_KIND_LABELS, type PortalInvoiceDetail } from '@layerbook/contracts/types';
 import { problemMessage, toProblem } from '../../core/errors/problem';
+import { PayByCard } from '../payments/pay-by-card';
+import { ReceiptList } from '../payments/receipt-list';
 import { formatDay, formatMoney } from '../../shared/format/money';
 import { creditNotePdfUrl, invoicePdfUrl, invoiceUrl } from './invoice-api';
 import { PROGRESS_COLUMN_WORDS, invoiceStatusWords, isZeroAmount } from './invoice-words';
 
-/** One invoice as the client reads it: the document, its PDF, where paying online will be, and its credit note when void. */
+/** One invoice as the client reads it: the document, its PDF, how to pay it (by card online when open for it), its receipts, and its credit note when void. */
 @Component({
   selector: 'lb-invoice-page',
-  imports: [MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [MatIconModule, MatProgressBarModule, PayByCard, ReceiptList, RouterLink],
   templateUrl: './invoice-page.html',
   styleUrl: './invoice-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -24,6 +26,8 @@ export class InvoicePage {
 
   /** route parameter */
   readonly id = input.required<string>();
+  /** query parameter: `cancelled` when the client came back from the card page without paying */
+  readonly payment = input<string>();
 
   private readonly loaded = httpResource<PortalInvoiceDetail>(() => invoiceUrl(this.id()));
 
@@ -49,6 +53,7 @@ export class InvoicePage {
   protected readonly progressColumns = PROGRESS_COLUMN_WORDS;
   protected readonly pdfUrl = computed(() => invoicePdfUrl(this.id()));
   protected readonly isZero = isZeroAmount;
+  protected readonly wasCancelled = computed(() => this.payment() === 'cancelled');
 
   constructor() {
     effect(() => {

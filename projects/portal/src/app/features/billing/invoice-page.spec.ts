@@ -1,0 +1,69 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { ApplicationRef } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import type { PortalInvoiceDetail } from '@layerbook/contracts/types';
+import { afterEach, describe, expect, it } from 'vitest';
+import { openDeposit, paidDeposit } from '../payments/payment-fixtures';
+import { InvoicePage } from './invoice-page';
+
+async function render(invoice: PortalInvoiceDetail, payment?: string) {
+  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])] });
+  const fixture = TestBed.createComponent(InvoicePage);
+  fixture.componentRef.setInput('id', invoice.id);
+  if (payment) fixture.componentRef.setInput('payment', payment);
+  TestBed.inject(ApplicationRef).tick();
+  TestBed.inject(HttpTestingController).expectOne(`/api/portal/invoices/${invoice.id}`).flush(invoice);
+  await fixture.whenStable();
+  fixture.detectChanges();
+  const html = fixture.nativeElement as HTMLElement;
+  return { html, text: () => html.textContent ?? '' };
+}
+
+describe('the client’s invoice page', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('an open invoice offers to pay its amount due by card; no receipts yet', async () => {
+    const { html, text } = await render(openDeposit);
+    expect(html.querySelector('lb-pay-by-card button')?.textContent).toContain('Pay $1,200.00 by card');
+    expect(html.querySelector('lb-receipt-list')).toBeNull();
+    expect(text()).not.toContain('nothing was charged');
+  });
+
+  it('back from the card page without paying, it says nothing was charged', async () => {
+    const { text } = await render(openDeposit, 'cancelled');
+    expect(text()).toContain('The payment was not completed and nothing was charged. You can try again.');
+  });
+
+  it('a paid invoice: paid in words, no pay button, its receipt to download', async () => {
+    const { html, text } = await render(paidDeposit);
+    expect(text()).toContain('Paid in full. Thank you.');
+    expect(html.querySelector('lb-pay-by-card')).toBeNull();
+    const row = html.querySelector('lb-receipt-list tbody tr');
+    expect(row?.querySelector('th')?.textContent?.trim()).toBe('RCT-0007');
+    expect(row?.textContent).toContain('Paid by card online');
+    expect(row?.textContent).toContain('$1,200.00');
+    expect(row?.textContent).toContain('November 22, 2026');
+    const link = row?.querySelector('a[download]');
+    expect(link?.getAttribute('href')).toBe('/api/portal/payments/pay-1/receipt.pdf');
+    expect(link?.textContent).toContain('Download receipt RCT-0007 (PDF)');
+  });
+
+  it('a refunded invoice says so, with the refund’s receipt beside the payment’s', async () => {
+    const { html, text } = await render({
+      ...paidDeposit,
+      status: 'refunded',
+      amountPaid: '0.00',
+      receipts: [
+        ...paidDeposit.receipts,
+        { id: 'ref-1', kind: 'refund', number: 'RCT-0009', on: '2026-11-25', method: 'card', amount: '1200.00', currency: 'USD' },
+      ],
+    });
+    expect(text()).toContain('Refunded to you: what you paid on this invoice was given back to you.');
+    expect(html.querySelector('lb-pay-by-card')).toBeNull();
+    const links = [...html.querySelectorAll('lb-receipt-list a[download]')].map((a) => a.getAttribute('href'));
+    expect(links).toEqual(['/api/portal/payments/pay-1/receipt.pdf', '/api/portal/refunds/ref-1/receipt.pdf']);
+    expect(html.querySelector('lb-receipt-list')?.textContent).toContain('Refunded to your card');
+  });
+});

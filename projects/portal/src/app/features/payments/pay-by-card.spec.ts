@@ -1,0 +1,79 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import type { PortalInvoiceDetail } from '@layerbook/contracts/types';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { PayByCard } from './pay-by-card';
+import { LEAVE_FOR } from './payment-api';
+import { openDeposit } from './payment-fixtures';
+
+async function render(invoice: PortalInvoiceDetail, wasCancelled = false) {
+  const leaveFor = vi.fn<(url: string) => void>();
+  TestBed.configureTestingModule({
+    providers: [provideHttpClient(), provideHttpClientTesting(), { provide: LEAVE_FOR, useValue: leaveFor }],
+  });
+  const fixture = TestBed.createComponent(PayByCard);
+  fixture.componentRef.setInput('invoice', invoice);
+  fixture.componentRef.setInput('wasCancelled', wasCancelled);
+  await fixture.whenStable();
+  fixture.detectChanges();
+  const html = fixture.nativeElement as HTMLElement;
+  return { fixture, html, leaveFor, http: TestBed.inject(HttpTestingController), button: () => html.querySelector('button') };
+}
+
+describe('paying an invoice by card', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('names the amount due on the button, opens a checkout and sends the browser to the card page', async () => {
+    const { fixture, html, http, leaveFor, button } = await render(openDeposit);
+    expect(html.querySelector('h2')?.textContent).toBe('Pay online');
+    expect(button()?.textContent?.trim()).toContain('Pay $1,200.00 by card');
+    button()!.click();
+    fixture.detectChanges();
+    expect(button()?.disabled).toBe(true);
+    expect(html.textContent).toContain('Opening the payment page');
+    const post = http.expectOne({ method: 'POST', url: '/api/portal/invoices/inv-1/checkout' });
+    post.flush({ url: 'http://127.0.0.1:12111/pay/cs_test_1', checkoutId: 'co-1' });
+    await fixture.whenStable();
+    expect(leaveFor).toHaveBeenCalledWith('http://127.0.0.1:12111/pay/cs_test_1');
+  });
+
+  it('shows the server’s refusal in words and lets the client try again', async () => {
+    const { fixture, html, http, leaveFor, button } = await render({ ...openDeposit, amountDue: '0.30' });
+    expect(button()?.textContent).toContain('Pay $0.30 by card');
+    button()!.click();
+    const detail = 'A card payment must be at least 0.50 USD.';
+    http
+      .expectOne({ method: 'POST', url: '/api/portal/invoices/inv-1/checkout' })
+      .flush({ type: 'about:blank', title: 'Conflict', status: 409, detail }, { status: 409, statusText: 'Conflict' });
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(html.querySelector('[role="alert"]')?.textContent).toContain(detail);
+    expect(button()?.disabled).toBe(false);
+    expect(leaveFor).not.toHaveBeenCalled();
+  });
+
+  it('back from the card page without paying: says nothing was charged, with the button still there', async () => {
+    const { html, button } = await render(openDeposit, true);
+    expect(html.querySelector('[role="status"]')?.textContent).toContain('The payment was not completed and nothing was charged.');
+    expect(button()).not.toBeNull();
+  });
+
+  it('when paying online is not open: no button, the reason, and the firm’s own way', async () => {
+    const { html, button } = await render({
+      ...openDeposit,
+      canPayOnline: false,
+      payOnlineNote: 'Below the smallest card payment, 0.50 USD.',
+    });
+    expect(button()).toBeNull();
+    expect(html.querySelector('h2')?.textContent).toBe('How to pay');
+    expect(html.textContent).toContain('Below the smallest card payment, 0.50 USD.');
+    expect(html.textContent).toContain('Pay Quillfeather Finishes the way the invoice says, and quote INV-0007.');
+  });
+
+  it('when online payments are off altogether: only the firm’s own way', async () => {
+    const { html } = await render({ ...openDeposit, canPayOnline: false, payOnlineNote: null });
+    expect(html.textContent).not.toContain('not available');
+    expect(html.textContent).toContain('quote INV-0007');
+  });
+});

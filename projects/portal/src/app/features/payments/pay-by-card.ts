@@ -1,0 +1,112 @@
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import type { PortalInvoiceDetail } from '@layerbook/contracts/types';
+import { problemMessage } from '../../core/errors/problem';
+import { hydratedSignal } from '../../shared/forms/hydrated';
+import { formatMoney } from '../../shared/format/money';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { LEAVE_FOR, PaymentApi } from './payment-api';
+import { CANCELLED_WORDS, payButtonLabel } from './payment-words';
+
+/**
+ * How to pay an open invoice: by card on the processor's payment page (the server opens a checkout,
+ * the browser goes there and comes back to the return page), or, when paying online is not open for
+ * it, the firm's own way with the reason why.
+ */
+@Component({
+  selector: 'lb-pay-by-card',
+  imports: [FormAlert, MatButtonModule, MatIconModule],
+  template: `
+    @let inv = invoice();
+    <section class="pay" aria-labelledby="pay-heading">
+      @if (inv.canPayOnline) {
+        <h2 id="pay-heading">Pay online</h2>
+        @if (wasCancelled()) {
+          <p class="cancelled" role="status">
+            <mat-icon aria-hidden="true">info</mat-icon><span>{{ cancelledWords }}</span>
+          </p>
+        }
+        <p>You pay on a secure card payment page and come back here when it is done. Your receipt follows by e-mail.</p>
+        <lb-form-alert [message]="message()" />
+        <button mat-flat-button type="button" [disabled]="!isHydrated() || isBusy()" (click)="pay()">
+          <mat-icon aria-hidden="true">credit_card</mat-icon>
+          {{ label() }}
+        </button>
+        @if (isBusy()) {
+          <p class="small" role="status">Opening the payment page…</p>
+        }
+      } @else {
+        <h2 id="pay-heading">How to pay</h2>
+        @if (inv.payOnlineNote; as note) {
+          <p class="note">
+            <mat-icon aria-hidden="true">info</mat-icon><span>Card payment online is not available for this invoice. {{ note }}</span>
+          </p>
+        }
+        <p>Pay {{ inv.document.firm.name }} the way the invoice says, and quote {{ inv.number }}.</p>
+      }
+    </section>
+  `,
+  styles: `
+    .pay {
+      padding: 1rem 1.25rem;
+      border: 1px solid var(--mat-sys-outline-variant);
+      border-radius: 12px;
+      background: var(--mat-sys-surface-container-low);
+    }
+    h2 {
+      font-family: var(--lb-serif);
+      font-size: 1.15rem;
+      margin: 0 0 0.5rem;
+    }
+    p {
+      margin: 0 0 0.75rem;
+    }
+    .cancelled,
+    .note {
+      display: flex;
+      gap: 0.5rem;
+      align-items: flex-start;
+    }
+    .cancelled mat-icon,
+    .note mat-icon {
+      flex: none;
+    }
+    .small {
+      margin: 0.5rem 0 0;
+      font-size: 0.9rem;
+      color: var(--mat-sys-on-surface-variant);
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class PayByCard {
+  private readonly api = inject(PaymentApi);
+  private readonly leaveFor = inject(LEAVE_FOR);
+
+  readonly invoice = input.required<PortalInvoiceDetail>();
+  /** back from the card page without paying */
+  readonly wasCancelled = input(false);
+
+  protected readonly label = computed(() => {
+    const inv = this.invoice();
+    return payButtonLabel(formatMoney(inv.amountDue, inv.currency, inv.locale));
+  });
+  protected readonly cancelledWords = CANCELLED_WORDS;
+  protected readonly isBusy = signal(false);
+  protected readonly message = signal<string | null>(null);
+  protected readonly isHydrated = hydratedSignal();
+
+  /** Opens a checkout for the amount due and sends the browser to the processor's page; stays busy while it leaves. */
+  protected async pay(): Promise<void> {
+    this.message.set(null);
+    this.isBusy.set(true);
+    try {
+      const start = await this.api.startCheckout(this.invoice().id);
+      this.leaveFor(start.url);
+    } catch (error) {
+      this.message.set(problemMessage(error));
+      this.isBusy.set(false);
+    }
+  }
+}

@@ -1,0 +1,112 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { ApplicationRef } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import type { CheckoutStatus } from '@layerbook/contracts/types';
+import { afterEach, describe, expect, it } from 'vitest';
+import { checkout, openDeposit, paidDeposit } from './payment-fixtures';
+import { CHECKOUT_POLL, PaymentReturnPage } from './payment-return-page';
+
+const STATUS_URL = '/api/portal/invoices/inv-1/checkout/co-1';
+const INVOICE_URL = '/api/portal/invoices/inv-1';
+const pause = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+async function render(first: CheckoutStatus, poll = { everyMs: 5, forMs: 60_000 }) {
+  TestBed.configureTestingModule({
+    providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([]), { provide: CHECKOUT_POLL, useValue: poll }],
+  });
+  const fixture = TestBed.createComponent(PaymentReturnPage);
+  fixture.componentRef.setInput('id', 'inv-1');
+  fixture.componentRef.setInput('checkoutId', 'co-1');
+  TestBed.inject(ApplicationRef).tick();
+  const http = TestBed.inject(HttpTestingController);
+  http.expectOne(STATUS_URL).flush(first);
+  http.expectOne(INVOICE_URL).flush(openDeposit);
+  const html = fixture.nativeElement as HTMLElement;
+  const appRef = TestBed.inject(ApplicationRef);
+  // Not whenStable: a read in flight (the page asking again) keeps the app busy until it is answered.
+  const settle = async () => {
+    await pause(0);
+    appRef.tick();
+    fixture.detectChanges();
+  };
+  await settle();
+  return { fixture, html, http, settle, state: () => html.querySelector('[role="status"]')?.textContent ?? '' };
+}
+
+/** The page asks again after its interval: answers the next ask. */
+async function answerNext(http: HttpTestingController, settle: () => Promise<void>, status: CheckoutStatus): Promise<void> {
+  let asks = http.match(STATUS_URL);
+  for (let i = 0; i < 50 && asks.length === 0; i++) {
+    await pause(5);
+    await settle();
+    asks = http.match(STATUS_URL);
+  }
+  expect(asks.length).toBe(1);
+  asks[0].flush(status);
+  await settle();
+}
+
+describe('the page the card page sends the client back to', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('says the payment is being confirmed, asks again, then shows it paid with its receipt', async () => {
+    const { html, http, settle, state } = await render(checkout('confirming'));
+    expect(html.querySelector('h1')?.textContent).toBe('Payment for invoice INV-0007');
+    expect(state()).toContain('Payment received — being confirmed');
+    expect(state()).toContain('Amount: $1,200.00');
+    expect(html.querySelector('mat-progress-bar[aria-label="Checking the payment"]')).not.toBeNull();
+
+    await answerNext(http, settle, checkout('confirming'));
+    expect(state()).toContain('being confirmed');
+    await answerNext(http, settle, checkout('paid', true));
+    // paid: the invoice is read again for what is left to pay
+    http.expectOne(INVOICE_URL).flush(paidDeposit);
+    await settle();
+    expect(state()).toContain('Paid — receipt RCT-0007');
+    const receipt = html.querySelector<HTMLAnchorElement>('a[download]');
+    expect(receipt?.textContent).toContain('Download receipt RCT-0007 (PDF)');
+    expect(receipt?.getAttribute('href')).toBe('/api/portal/payments/pay-1/receipt.pdf');
+    expect(html.textContent).toContain('Invoice INV-0007 is paid in full.');
+    expect(html.querySelector('mat-progress-bar')).toBeNull();
+    // nothing more is asked once paid
+    await pause(30);
+    await settle();
+    http.expectNone(STATUS_URL);
+  });
+
+  it('a partial payment tells what is still to pay', async () => {
+    const { html, http, settle } = await render(checkout('paid', true));
+    http.expectOne(INVOICE_URL).flush({ ...openDeposit, status: 'part_paid', amountPaid: '1000.00', amountDue: '200.00' });
+    await settle();
+    expect(html.textContent).toContain('Still to pay on invoice INV-0007: $200.00.');
+  });
+
+  it('stops asking after its time, never suggests paying again, and checks again when asked', async () => {
+    const { html, http, settle, state } = await render(checkout('confirming'), { everyMs: 5, forMs: 0 });
+    await pause(30);
+    await settle();
+    await settle();
+    http.expectNone(STATUS_URL);
+    expect(state()).toContain('Payment received — still being confirmed');
+    expect(state()).toContain('Please do not pay again');
+    const again = [...html.querySelectorAll('button')].find((b) => b.textContent?.includes('Check again'))!;
+    again.click();
+    await settle();
+    http.expectOne(STATUS_URL).flush(checkout('paid', true));
+    await settle();
+    http.expectOne(INVOICE_URL).flush(paidDeposit);
+    await settle();
+    expect(state()).toContain('Paid — receipt RCT-0007');
+  });
+
+  it('a card page that closed unpaid: nothing was charged, and the way back to the invoice', async () => {
+    const { html, http, settle, state } = await render(checkout('expired'));
+    expect(state()).toContain('nothing was charged');
+    expect(html.querySelector('a[href="/invoices/inv-1"]')?.textContent).toBe('Back to the invoice');
+    await pause(30);
+    await settle();
+    http.expectNone(STATUS_URL);
+  });
+});

@@ -1,0 +1,51 @@
+import { describe, expect, it } from 'vitest';
+import { CANCELLED_WORDS, checkoutWords, payButtonLabel, receiptWhat } from './payment-words';
+
+// Our own words throughout — common practice, no source.
+describe('checkoutWords', () => {
+  it.each([
+    ['open', false, 'Checking your payment', true],
+    ['confirming', false, 'Payment received — being confirmed', true],
+    ['paid', false, 'Paid — receipt RCT-0007', false],
+    ['expired', false, 'This payment was not completed', false],
+    // the page stopped asking: no more waiting, and never a hint to pay again
+    ['open', true, 'We have not heard about this payment yet', false],
+    ['confirming', true, 'Payment received — still being confirmed', false],
+    ['paid', true, 'Paid — receipt RCT-0007', false],
+  ] as const)('%s (stopped asking %s) reads "%s"', (state, gaveUp, heading, isWaiting) => {
+    const words = checkoutWords({ state, receiptNumber: state === 'paid' ? 'RCT-0007' : null }, gaveUp);
+    expect(words.heading).toBe(heading);
+    expect(words.isWaiting).toBe(isWaiting);
+    expect(words.icon).toBeTruthy();
+    if (gaveUp && state !== 'paid') expect(words.text).toContain('do not pay again');
+  });
+
+  it('says nothing was charged when the card page closed', () => {
+    expect(checkoutWords({ state: 'expired', receiptNumber: null }, false).text).toContain('nothing was charged');
+  });
+
+  it('reads "Paid" without a receipt number while none is given', () => {
+    expect(checkoutWords({ state: 'paid', receiptNumber: null }, false).heading).toBe('Paid');
+  });
+});
+
+describe('payment words', () => {
+  it('names the amount on the button', () => {
+    expect(payButtonLabel('$1,200.00')).toBe('Pay $1,200.00 by card');
+  });
+
+  it('tells a client back from the card page that nothing was charged', () => {
+    expect(CANCELLED_WORDS).toMatch(/^The payment was not completed and nothing was charged\. You can try again\./);
+  });
+
+  it.each([
+    ['payment', 'card', 'Paid by card online'],
+    ['payment', 'cheque', 'Paid by cheque'],
+    ['payment', 'transfer', 'Paid by bank transfer'],
+    ['payment', 'cash', 'Paid in cash'],
+    ['refund', 'card', 'Refunded to your card'],
+    ['refund', 'cheque', 'Refunded by cheque'],
+  ] as const)('a %s by %s reads "%s"', (kind, method, text) => {
+    expect(receiptWhat({ kind, method })).toBe(text);
+  });
+});
