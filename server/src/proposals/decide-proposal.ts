@@ -1,6 +1,13 @@
-import type { PortalProposal, ProposalAcceptance, ProposalChangeRequest, ProposalDecline } from '@layerbook/contracts';
+import type {
+  PortalProposal,
+  PortalProposalAccepted,
+  ProposalAcceptance,
+  ProposalChangeRequest,
+  ProposalDecline,
+} from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
+import { depositAtAcceptance } from '../billing/deposit-at-acceptance';
 import type { AppContext } from '../context';
 import { clientActor } from '../http/actor';
 import type { ClientPrincipal } from '../http/principal';
@@ -35,7 +42,8 @@ function refusal(row: ClientVersionRow, today: string, checkExpiry: boolean): Ht
 /**
  * The client accepts one option with a typed signature. One transaction: the version is signed
  * (name, time, IP, browser), the job and its draft payment schedule are made from the snapshot,
- * the estimate and its inquiry are won, the audit log and the outbox get their rows.
+ * the estimate and its inquiry are won, the audit log and the outbox get their rows; with the firm's
+ * "issue and send" setting the deposit invoice is issued and e-mailed too (its id in the answer).
  */
 export async function acceptProposal(
   tx: TenantTx,
@@ -44,7 +52,7 @@ export async function acceptProposal(
   id: string,
   parseBody: () => ProposalAcceptance,
   signing: SigningContext,
-): Promise<PortalProposal> {
+): Promise<PortalProposalAccepted> {
   const row = await loadClientVersion(tx, client, id, true);
   const input = parseBody();
   const option = row.snapshot.options.find((o) => o.id === input.variantId);
@@ -104,7 +112,9 @@ export async function acceptProposal(
     },
   });
   await mailAcceptance(tx, ctx, { row, option, signedName: input.signedName, signedAt: now, client, jobId });
-  return toPortalProposal(await loadClientVersion(tx, client, id), today);
+  // Last: issuing holds the firm's invoice counter until this transaction commits.
+  const depositInvoiceId = await depositAtAcceptance(tx, ctx, jobId, today, now);
+  return { ...toPortalProposal(await loadClientVersion(tx, client, id), today), depositInvoiceId };
 }
 
 /** The client declines, or asks for changes: the version closes and the office hears of it. */

@@ -41,6 +41,19 @@ export const DEPOSIT_CREDIT_RULE_LABELS: Readonly<Record<DepositCreditRuleSettin
   next: 'The whole deposit off the next progress invoices until it is used up',
 };
 
+/**
+ * What happens to a deposit due on acceptance when the client accepts: `draft` — the queue drafts
+ * its invoice for the office to check and issue (billing starts when the office starts it);
+ * `issueAndSend` — billing starts on the schedule as signed and the deposit invoice is issued with
+ * its number and e-mailed in the acceptance itself, so the client can pay it at once.
+ */
+export const DEPOSIT_AT_ACCEPTANCE = ['draft', 'issueAndSend'] as const;
+export type DepositAtAcceptanceSetting = (typeof DEPOSIT_AT_ACCEPTANCE)[number];
+export const DEPOSIT_AT_ACCEPTANCE_LABELS: Readonly<Record<DepositAtAcceptanceSetting, string>> = {
+  draft: 'Draft the deposit invoice for the office to check and issue',
+  issueAndSend: 'Issue the deposit invoice and e-mail it to the client as soon as they accept',
+};
+
 export interface RetainageSetting {
   /** held on work done, whole percent (0 = none) */
   readonly workPercent: number;
@@ -68,6 +81,8 @@ export interface BillingSettings {
   readonly terms: PaymentTermsSetting;
   readonly retainage: RetainageSetting;
   readonly depositCredit: DepositCreditRuleSetting;
+  /** the deposit due on acceptance: drafted for the office, or issued and e-mailed at once */
+  readonly depositAtAcceptance: DepositAtAcceptanceSetting;
   readonly reminders: ReminderCadenceSetting;
   /** "INV-" → INV-0001 */
   readonly invoicePrefix: string;
@@ -93,6 +108,7 @@ export const DEFAULT_BILLING_SETTINGS: BillingSettings = {
   terms: { kind: 'net', days: 14 },
   retainage: { workPercent: 0, storedPercent: 0, stopAtPercentComplete: null },
   depositCredit: 'prorata',
+  depositAtAcceptance: 'draft',
   reminders: { isOn: true, daysBefore: 3, onDueDate: true, everyDaysAfter: 7, maxAfter: 3 },
   invoicePrefix: 'INV-',
   creditNotePrefix: 'CN-',

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { moneyAmount, text } from '../common/fields';
 import { requestSchema } from '../common/schema-check';
-import { BILLING_LIMITS as L, DEPOSIT_CREDIT_RULES, type BillingSettings } from './billing-settings-types';
+import { BILLING_LIMITS as L, DEPOSIT_AT_ACCEPTANCE, DEPOSIT_CREDIT_RULES, type BillingSettings } from './billing-settings-types';
 
 const percent = (label: string) =>
   z
@@ -68,6 +68,10 @@ export const billingSettings = requestSchema<BillingSettings>()(
       stopAtPercentComplete: percent('the stop').nullable(),
     }),
     depositCredit: z.enum(DEPOSIT_CREDIT_RULES, { error: 'Choose how the deposit is credited.' }),
+    // Settings saved before this choice existed keep today's behaviour.
+    depositAtAcceptance: z
+      .enum(DEPOSIT_AT_ACCEPTANCE, { error: 'Choose whether the deposit is drafted or issued and e-mailed at acceptance.' })
+      .default('draft'),
     reminders: z.strictObject({
       isOn: z.boolean({ error: 'Say whether reminders are on.' }),
       daysBefore: reminderDays('the days before'),

@@ -34,3 +34,12 @@ export interface PortalProposal {
   readonly signedName: string | null;
   readonly clientComment: string;
 }
+
+/**
+ * POST /api/portal/proposals/:id/accept: the signed version, and the deposit invoice issued and
+ * e-mailed in the acceptance (the firm's billing setting "issue and send" and a deposit due on
+ * acceptance) for the client to pay now; null when the firm drafts it for the office first.
+ */
+export interface PortalProposalAccepted extends PortalProposal {
+  readonly depositInvoiceId: string | null;
+}

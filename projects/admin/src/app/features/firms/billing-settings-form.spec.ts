@@ -8,6 +8,7 @@ const california: BillingSettings = {
   terms: { kind: 'onReceipt' },
   retainage: { workPercent: 10, storedPercent: 5, stopAtPercentComplete: 50 },
   depositCredit: 'next',
+  depositAtAcceptance: 'issueAndSend',
   reminders: { isOn: true, daysBefore: null, onDueDate: true, everyDaysAfter: 7, maxAfter: 3 },
   invoicePrefix: 'INV-',
   creditNotePrefix: 'CN-',

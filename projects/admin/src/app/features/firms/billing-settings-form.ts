@@ -4,6 +4,7 @@ import {
   DEPOSIT_CAP_PRESETS,
   type BillingSettings,
   type DepositCapKind,
+  type DepositAtAcceptanceSetting,
   type DepositCapSetting,
   type DepositCreditRuleSetting,
   type PaymentTermsSetting,
@@ -88,6 +89,7 @@ export function billingSettingsForm() {
     terms,
     retainage,
     depositCredit: new FormControl<DepositCreditRuleSetting>('prorata', { nonNullable: true }),
+    depositAtAcceptance: new FormControl<DepositAtAcceptanceSetting>('draft', { nonNullable: true }),
     reminders,
     invoicePrefix: prefix(),
     creditNotePrefix: prefix(),
@@ -114,6 +116,7 @@ export function fillBillingForm(form: BillingSettingsFormGroup, s: BillingSettin
       stopAtPercentComplete: s.retainage.stopAtPercentComplete,
     },
     depositCredit: s.depositCredit,
+    depositAtAcceptance: s.depositAtAcceptance,
     reminders: {
       isOn: s.reminders.isOn,
       hasDaysBefore: s.reminders.daysBefore !== null,
@@ -158,6 +161,7 @@ export function readBillingForm(form: BillingSettingsFormGroup): BillingSettings
       stopAtPercentComplete: v.retainage.stops ? v.retainage.stopAtPercentComplete : null,
     },
     depositCredit: v.depositCredit,
+    depositAtAcceptance: v.depositAtAcceptance,
     reminders: {
       isOn: r.isOn,
       daysBefore: r.hasDaysBefore ? r.daysBefore : null,

@@ -3,7 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { provideZonelessChangeDetection } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
-import { DEFAULT_BILLING_SETTINGS, type BillingSettingsView, type StaffRole } from '@layerbook/contracts/types';
+import { DEFAULT_BILLING_SETTINGS, type BillingSettings, type BillingSettingsView, type StaffRole } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { Session } from '../../core/auth/session';
 import { BillingSettingsPage } from './billing-settings';
@@ -39,6 +39,26 @@ describe('BillingSettingsPage', { timeout: 30_000 }, () => {
     expect(host.querySelector<HTMLInputElement>('input[formcontrolname="depositCapName"]')?.value).toBe('No deposit limit');
     expect(host.querySelector<HTMLInputElement>('input[formcontrolname="days"]')?.value).toBe('14');
     expect(text).toContain('Save billing settings');
+  });
+
+  it('drafts the deposit at acceptance by default; the owner can have it issued and e-mailed at once instead', async () => {
+    const { fixture, http, host } = await render('owner');
+    const group = host.querySelector('mat-radio-group[formcontrolname="depositAtAcceptance"]');
+    expect(group?.textContent).toContain('Draft the deposit invoice for the office to check and issue');
+    expect(group?.textContent).toContain('Issue the deposit invoice and e-mail it to the client as soon as they accept');
+    const radios = [...(group?.querySelectorAll<HTMLInputElement>('input[type="radio"]') ?? [])];
+    expect(radios.map((r) => r.checked)).toEqual([true, false]);
+    expect(host.textContent).not.toContain('pay the deposit online straight away');
+
+    radios[1].click();
+    fixture.detectChanges();
+    await fixture.whenStable();
+    expect(host.textContent).toContain('the client can pay the deposit online straight away');
+    host.querySelector<HTMLButtonElement>('button[type="submit"]')?.click();
+    const put = http.expectOne({ method: 'PUT', url: '/api/firm/billing' });
+    expect((put.request.body as BillingSettings).depositAtAcceptance).toBe('issueAndSend');
+    put.flush({ ...VIEW, settings: put.request.body as BillingSettings, isDefault: false });
+    await fixture.whenStable();
   });
 
   it('lets the office read but not change', async () => {

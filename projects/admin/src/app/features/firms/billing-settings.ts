@@ -13,6 +13,8 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
 import {
   BILLING_LIMITS as L,
+  DEPOSIT_AT_ACCEPTANCE,
+  DEPOSIT_AT_ACCEPTANCE_LABELS,
   DEPOSIT_CAP_KINDS,
   DEPOSIT_CAP_KIND_LABELS,
   DEPOSIT_CAP_PRESETS,
@@ -43,7 +45,8 @@ const range = (min: number, max: number, unit: string) => ({
 
 /**
  * How the firm bills: its deposit rule (a ready-made one or its own, with the name printed on
- * screen and invoices), payment terms, retainage, deposit credit, reminders, numbers and footer.
+ * screen and invoices), what happens to the deposit when the client accepts, payment terms,
+ * retainage, deposit credit, reminders, numbers and footer.
  * The owner edits; office reads.
  */
 @Component({
@@ -83,6 +86,8 @@ export class BillingSettingsPage {
   protected readonly capKindLabels = DEPOSIT_CAP_KIND_LABELS;
   protected readonly creditRules = DEPOSIT_CREDIT_RULES;
   protected readonly creditLabels = DEPOSIT_CREDIT_RULE_LABELS;
+  protected readonly acceptanceChoices = DEPOSIT_AT_ACCEPTANCE;
+  protected readonly acceptanceLabels = DEPOSIT_AT_ACCEPTANCE_LABELS;
   protected readonly words = {
     amount: { required: 'Enter the amount.', ...AMOUNT_WORDS },
     percent: { required: 'Enter a percent.', min: 'Cannot be negative.', max: 'At most 100 %.' },
