@@ -2,16 +2,25 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ApplicationRef } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
+import { MatDialog } from '@angular/material/dialog';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter } from '@angular/router';
 import type { InvoiceDetail } from '@layerbook/contracts/types';
-import { afterEach, describe, expect, it } from 'vitest';
+import { of } from 'rxjs';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { cardOverpayment, cardRefundPending } from '../payments/payment-fixtures';
 import { InvoiceDetailPage } from './invoice-detail';
 import { issuedSummary, progressDraft } from './invoice-fixtures';
 
-async function render(invoice: InvoiceDetail) {
+async function render(invoice: InvoiceDetail, dialog?: object) {
   TestBed.configureTestingModule({
-    providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([]), provideNoopAnimations()],
+    providers: [
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      provideRouter([]),
+      provideNoopAnimations(),
+      ...(dialog ? [{ provide: MatDialog, useValue: dialog }] : []),
+    ],
   });
   const fixture = TestBed.createComponent(InvoiceDetailPage);
   fixture.componentRef.setInput('id', invoice.id);
@@ -158,5 +167,38 @@ describe('the invoice page', () => {
     const { html, text } = await render(partPaid);
     expect(buttons(html).some((b) => b.includes('Void'))).toBe(false);
     expect(text()).toContain('To void it, refund the payments first.');
+  });
+
+  it('says a refunded invoice is refunded, in words and with its icon, and offers Void but no payment', async () => {
+    const refunded: InvoiceDetail = { ...progressDraft, ...issuedSummary, isOverdue: false, status: 'refunded', progress: null };
+    const { html, text } = await render(refunded);
+    expect(html.querySelector('.status')?.textContent).toContain('Refunded');
+    expect(html.querySelector('.status mat-icon')?.textContent).toBe('undo');
+    expect(text()).toContain('Everything paid on this invoice was given back');
+    expect(buttons(html)).toEqual(expect.arrayContaining([expect.stringContaining('Void…')]));
+    expect(buttons(html).some((b) => b.includes('Record a payment'))).toBe(false);
+  });
+
+  it('reads the invoice again after a refund and says what it did', async () => {
+    const partPaid: InvoiceDetail = {
+      ...progressDraft,
+      ...issuedSummary,
+      status: 'part_paid',
+      amountPaid: '380.00',
+      amountDue: '3820.00',
+      progress: null,
+      payments: [cardOverpayment],
+    };
+    const open = vi.fn(() => ({ afterClosed: () => of(cardRefundPending), componentInstance: { wasSent: () => true } }));
+    const { fixture, html, http } = await render(partPaid, { open });
+    [...html.querySelectorAll<HTMLButtonElement>('button')].find((b) => b.textContent?.includes('Refund…'))!.click();
+    await Promise.resolve();
+    TestBed.inject(ApplicationRef).tick();
+    const after = { ...partPaid, payments: [{ ...cardOverpayment, refundable: '380.00', refunds: [cardRefundPending] }] };
+    http.expectOne('/api/invoices/inv-1').flush(after);
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(html.querySelector('[role="status"]')?.textContent).toContain('$70.00 is on its way back to the card.');
+    expect(html.querySelector('li.refund .refund-status')?.textContent).toContain('Being sent back');
   });
 });

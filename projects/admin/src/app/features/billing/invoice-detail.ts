@@ -18,7 +18,8 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { DraftNotes } from './draft-notes';
 import { INVOICES_URL, InvoiceApi, creditNotePdfHref, invoicePdfHref } from './invoice-api';
-import { PAYMENT_METHOD_LABELS, invoiceStatus, kindWord, takesPayments } from './invoice-words';
+import { invoiceStatus, kindWord, takesPayments } from './invoice-words';
+import { InvoicePayments, type RefundOutcome } from '../payments/invoice-payments';
 import { IssueDialog, type IssueDialogData, type IssueResult } from './issue-dialog';
 import { PaymentForm } from './payment-form';
 import { ProgressTable } from './progress-table';
@@ -32,6 +33,7 @@ import { VoidDialog, type VoidDialogData } from './void-dialog';
     DatePipe,
     DraftNotes,
     FormAlert,
+    InvoicePayments,
     MatButtonModule,
     MatIconModule,
     MatProgressBarModule,
@@ -71,14 +73,15 @@ export class InvoiceDetailPage {
     const invoice = this.invoice();
     return !!invoice && takesPayments(invoice.status) && !roundsToZero(invoice.amountDue, invoice.currency);
   });
-  /** Voiding is refused once money came in ("Refund the payments first"), so it is offered only before. */
+  /** Voiding is refused while money is kept on it ("Refund the payments first"), so it is offered only before or after. */
   protected readonly canVoid = computed(() => {
     const invoice = this.invoice();
-    return !!invoice && invoice.status === 'issued' && roundsToZero(invoice.amountPaid, invoice.currency);
+    return (
+      !!invoice && (invoice.status === 'issued' || invoice.status === 'refunded') && roundsToZero(invoice.amountPaid, invoice.currency)
+    );
   });
 
   protected readonly kindWord = kindWord;
-  protected readonly methodLabels = PAYMENT_METHOD_LABELS;
   protected readonly pdfHref = invoicePdfHref;
   protected readonly creditNotePdfHref = creditNotePdfHref;
   protected readonly isZero = (amount: string, currency: string): boolean => roundsToZero(amount, currency);
@@ -110,6 +113,18 @@ export class InvoiceDetailPage {
   protected paymentRecorded(invoice: InvoiceDetail): void {
     this.isRecordingPayment.set(false);
     this.show(invoice, invoice.status === 'paid' ? 'Payment recorded: the invoice is paid.' : 'Payment recorded.');
+  }
+
+  /** A refund changes the payment, the invoice's amounts and perhaps its status: read it again. */
+  protected refundDone(outcome: RefundOutcome): void {
+    this.actionMessage.set(null);
+    this.done.set(outcome.words);
+    this.loaded.reload();
+  }
+
+  protected readAgain(): void {
+    this.done.set(null);
+    this.loaded.reload();
   }
 
   protected async deleteDraft(invoice: InvoiceDetail): Promise<void> {

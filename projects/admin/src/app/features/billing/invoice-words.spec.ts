@@ -12,6 +12,8 @@ describe('invoice words', () => {
     // a paid or void invoice is never overdue, whatever the flag says
     [{ status: 'paid', isOverdue: true }, 'Paid', 'task_alt'],
     [{ status: 'void', isOverdue: true }, 'Void', 'block'],
+    // every payment given back: said in words with its own icon, never overdue
+    [{ status: 'refunded', isOverdue: true }, 'Refunded', 'undo'],
   ] as const)('%o reads "%s" with the %s icon', (invoice, word, icon) => {
     const look = invoiceStatus(invoice);
     expect(look.word).toBe(word);
@@ -35,10 +37,11 @@ describe('invoice words', () => {
   });
 
   it('takes payments only on open invoices', () => {
-    expect(['draft', 'issued', 'part_paid', 'paid', 'void'].map((s) => takesPayments(s as never))).toEqual([
+    expect(['draft', 'issued', 'part_paid', 'paid', 'refunded', 'void'].map((s) => takesPayments(s as never))).toEqual([
       false,
       true,
       true,
+      false,
       false,
       false,
     ]);

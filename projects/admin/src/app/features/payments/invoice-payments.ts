@@ -1,0 +1,74 @@
+import { DatePipe, LowerCasePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input, output } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
+import { MatIconModule } from '@angular/material/icon';
+import { RouterLink } from '@angular/router';
+import { roundsToZero } from '@layerbook/contracts/engine';
+import type { InvoiceDetail, PaymentDetail, RefundView } from '@layerbook/contracts/types';
+import { formatMoney } from '@layerbook/domain';
+import { firstValueFrom } from 'rxjs';
+import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { PAYMENT_METHOD_LABELS } from '../billing/invoice-words';
+import { paymentReceiptHref, refundReceiptHref } from './payment-api';
+import { creditKept, paymentParts } from './payment-money';
+import { REFUND_METHOD_WORDS, refundDoneWords, refundStatusLook } from './payment-words';
+import { RefundDialog, type RefundDialogData } from './refund-dialog';
+
+/** What a refund did, for the page to say once and show the invoice as it is now. */
+export interface RefundOutcome {
+  readonly refund: RefundView | null;
+  readonly words: string | null;
+}
+
+/**
+ * An invoice's payments as the office sees them: each with its receipt, what went on the invoice and
+ * what was kept as credit, its refunds and their receipts, and a Refund… action; then the client's credit.
+ */
+@Component({
+  selector: 'lb-invoice-payments',
+  imports: [CalendarDatePipe, DatePipe, LowerCasePipe, MatButtonModule, MatIconModule, MoneyPipe, RouterLink],
+  templateUrl: './invoice-payments.html',
+  styleUrl: './invoice-payments.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class InvoicePayments {
+  private readonly dialog = inject(MatDialog);
+  private readonly locale = inject(LOCALE_ID);
+
+  readonly invoice = input.required<InvoiceDetail>();
+  /** after a refund was asked for (done, on its way, or refused by the processor): the invoice should be read again */
+  readonly refunded = output<RefundOutcome>();
+  /** "Check again" while a refund is on its way back to a card */
+  readonly checkAgain = output();
+
+  protected readonly rows = computed(() => this.invoice().payments.map((payment) => ({ payment, parts: paymentParts(payment) })));
+  protected readonly hasPending = computed(() => this.invoice().payments.some((p) => p.refunds.some((r) => r.status === 'pending')));
+  protected readonly kept = computed(() => creditKept(this.invoice().clientCredits));
+
+  protected readonly methodLabels = PAYMENT_METHOD_LABELS;
+  protected readonly refundMethodWords = REFUND_METHOD_WORDS;
+  protected readonly statusLook = refundStatusLook;
+  protected readonly receiptHref = paymentReceiptHref;
+  protected readonly refundReceiptHref = refundReceiptHref;
+  protected readonly isZero = (amount: string, currency: string): boolean => roundsToZero(amount, currency);
+  protected readonly isNegative = (amount: string): boolean => amount.trim().startsWith('-');
+  protected readonly withoutSign = (amount: string): string => amount.trim().replace(/^-/, '');
+
+  protected async openRefund(payment: PaymentDetail): Promise<void> {
+    const invoice = this.invoice();
+    const ref = this.dialog.open<RefundDialog, RefundDialogData, RefundView>(RefundDialog, {
+      data: { payment, invoiceNumber: invoice.number ?? 'the invoice', clientName: invoice.clientName },
+      width: '34rem',
+      autoFocus: 'first-tabbable',
+    });
+    const refund = await firstValueFrom(ref.afterClosed());
+    if (refund) {
+      const money = (amount: string): string => formatMoney(amount, refund.currency, this.locale);
+      this.refunded.emit({ refund, words: refundDoneWords(refund, money) });
+    } else if (ref.componentInstance?.wasSent()) {
+      this.refunded.emit({ refund: null, words: null });
+    }
+  }
+}
