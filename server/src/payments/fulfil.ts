@@ -1,6 +1,5 @@
 import type { TenantTx } from '@layerbook/db';
-import { fromProcessorAmount, toProcessorAmount } from '@layerbook/domain';
-import type Decimal from 'decimal.js';
+import { fromProcessorAmount, minorUnitDigits, toProcessorAmount } from '@layerbook/domain';
 import type Stripe from 'stripe';
 import { localDate } from '../firms/local-date';
 import { SYSTEM_ACTOR } from '../http/actor';
@@ -36,11 +35,11 @@ const paymentIntentId = (session: Stripe.Checkout.Session): string | null =>
   typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
 
 /** The processor's amount in major units, or null when it names a currency we cannot read. */
-function paidAmount(session: Stripe.Checkout.Session): { amount: Decimal; currency: string } | null {
+function paidAmount(session: Stripe.Checkout.Session): { amount: string; currency: string } | null {
   if (session.amount_total === null || !session.currency) return null;
   const currency = session.currency.toUpperCase();
   try {
-    return { amount: fromProcessorAmount(session.amount_total, currency), currency };
+    return { amount: fromProcessorAmount(session.amount_total, currency).toFixed(minorUnitDigits(currency)), currency };
   } catch {
     return null;
   }
@@ -82,7 +81,7 @@ export async function fulfilCheckoutSession(
   const recorded = await recordPayment(tx, SYSTEM_ACTOR, {
     invoiceId: checkout.invoice_id,
     method: 'card',
-    amount: paid.amount.toFixed(),
+    amount: paid.amount,
     currency: paid.currency,
     receivedOn: localDate(zone.time_zone, paidAt),
     reference: intent ?? session.id,
@@ -94,7 +93,7 @@ export async function fulfilCheckoutSession(
     `update checkout_sessions set status = 'complete', completed_at = coalesce(completed_at, $3) where tenant_id = $1 and id = $2`,
     [tx.tenantId, checkout.id, now],
   );
-  const words = `${paid.amount.toFixed()} ${paid.currency}`;
+  const words = `${paid.amount} ${paid.currency}`;
   const outcome = recorded.alreadyRecorded
     ? `Payment ${recorded.receiptNumber} already recorded`
     : matches

@@ -1,0 +1,148 @@
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import type { CheckoutStart, CheckoutStatus } from '@layerbook/contracts';
+import { withTenant } from '@layerbook/db';
+import { startStripeFake, type StripeFake } from '@layerbook/stripe-fake';
+import { Pool } from 'pg';
+import { acceptedJob, insertInvoice, type InvoiceSpec } from '../billing/pdf/invoice-fixtures';
+import { startTestServer, type TestServer } from '../testing/harness';
+import { testDatabaseUrls } from '../testing/test-env';
+import { processorFor } from './processor';
+import { reconcileEvents } from './reconcile';
+
+/**
+ * Test set-up for the online payment specs (no spec of its own): a test server that talks to the
+ * local Stripe stand-in, listening on a port so the stand-in's signed webhooks reach it, and a
+ * client's issued invoice with helpers to start, pay and follow a checkout through the API.
+ */
+
+export const WEBHOOK_SECRET = 'whsec_layerbook_payments_spec';
+
+export interface PaymentsServer {
+  readonly t: TestServer;
+  readonly fake: StripeFake;
+  readonly webhookUrl: string;
+  /** the jobs role's pool, for what only the queue's role may touch (the reconciliation cursor) */
+  readonly jobsPool: Pool;
+  /** runs the reconciliation now, as its job would */
+  reconcile(now?: Date): ReturnType<typeof reconcileEvents>;
+  stop(): Promise<void>;
+}
+
+export async function startPaymentsServer(): Promise<PaymentsServer> {
+  const fake = await startStripeFake({ port: 0, webhookSecret: WEBHOOK_SECRET, retryDelaysMs: [50, 100, 200] });
+  const t = await startTestServer({
+    STRIPE_SECRET_KEY: 'sk_test_layerbook_payments_spec',
+    STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
+    STRIPE_API_BASE: fake.baseUrl,
+  });
+  const server: Server = await new Promise((resolve) => {
+    const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
+  });
+  const webhookUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/payments/webhook`;
+  fake.controls.setWebhookUrls([webhookUrl]);
+  const jobsPool = new Pool({ connectionString: testDatabaseUrls().DATABASE_JOBS_URL, max: 3 });
+  return {
+    t,
+    fake,
+    webhookUrl,
+    jobsPool,
+    reconcile: (now = t.ctx.now()) => reconcileEvents(jobsPool, t.queue, processorFor(t.ctx.config)!, now),
+    async stop() {
+      await fake.stop();
+      await new Promise((resolve) => server.close(resolve));
+      await jobsPool.end();
+      await t.stop();
+    },
+  };
+}
+
+/** A firm's client signed in to the portal with one issued invoice of theirs (a 250.00 deposit unless told). */
+export async function clientInvoice(t: TestServer, firmName: string, spec: Partial<InvoiceSpec> = {}) {
+  const f = await acceptedJob(t, firmName);
+  const invoiceId = await insertInvoice(t, f.firmId, f.jobId, {
+    kind: 'deposit',
+    status: 'issued',
+    number: 1,
+    total: '250.00',
+    lines: [{ label: 'Deposit on acceptance', amount: '250.00' }],
+    ...spec,
+  });
+  const start = (id = invoiceId) =>
+    f.client.agent.post(`/api/portal/invoices/${id}/checkout`).set('x-csrf-token', f.client.csrf()).send({});
+  const started = async (id = invoiceId): Promise<CheckoutStart & { sessionId: string }> => {
+    const res = await start(id);
+    if (res.status !== 201) throw new Error(`checkout not started: ${res.status} ${JSON.stringify(res.body)}`);
+    const body = res.body as CheckoutStart;
+    return { ...body, sessionId: await sessionOf(t, f.firmId, body.checkoutId) };
+  };
+  const status = async (checkoutId: string, id = invoiceId): Promise<CheckoutStatus> => {
+    const res = await f.client.agent.get(`/api/portal/invoices/${id}/checkout/${checkoutId}`);
+    if (res.status !== 200) throw new Error(`status not read: ${res.status} ${JSON.stringify(res.body)}`);
+    return res.body as CheckoutStatus;
+  };
+  return { ...f, invoiceId, start, started, status };
+}
+
+/** The processor's session id of one of our checkouts. */
+export async function sessionOf(t: TestServer, firmId: string, checkoutId: string): Promise<string> {
+  return withTenant(t.ctx.pool, firmId, async (tx) => {
+    const { rows } = await tx.client.query<{ processor_session_id: string }>(
+      `select processor_session_id from checkout_sessions where tenant_id = $1 and id = $2`,
+      [tx.tenantId, checkoutId],
+    );
+    return rows[0].processor_session_id;
+  });
+}
+
+/** What the books say of one invoice: its payments, receipts, credits and status. */
+export async function invoiceBooks(t: TestServer, firmId: string, invoiceId: string) {
+  return withTenant(t.ctx.pool, firmId, async (tx) => {
+    const inv = (
+      await tx.client.query<{ status: string; amount_paid: string }>(
+        `select status, amount_paid::text as amount_paid from invoices where tenant_id = $1 and id = $2`,
+        [tx.tenantId, invoiceId],
+      )
+    ).rows[0];
+    const payments = (
+      await tx.client.query<{ id: string; amount: string; amount_applied: string; currency: string; receipt_no: number | null }>(
+        `select id, amount::text as amount, amount_applied::text as amount_applied, currency, receipt_no from payments
+          where tenant_id = $1 and invoice_id = $2 order by created_at`,
+        [tx.tenantId, invoiceId],
+      )
+    ).rows;
+    const credits = (
+      await tx.client.query<{ amount: string; currency: string; note: string }>(
+        `select c.amount::text as amount, c.currency, c.note from client_credits c join payments p on p.tenant_id = c.tenant_id and p.id = c.payment_id
+          where c.tenant_id = $1 and p.invoice_id = $2`,
+        [tx.tenantId, invoiceId],
+      )
+    ).rows;
+    return { status: inv.status, amountPaid: inv.amount_paid, payments, credits };
+  });
+}
+
+/** The firm's stored processor events: how many, and how many applied, with their outcomes. */
+export async function storedEvents(t: TestServer, firmId: string) {
+  return withTenant(t.ctx.pool, firmId, async (tx) => {
+    const { rows } = await tx.client.query<{
+      id: string;
+      type: string;
+      received_via: string;
+      applied_at: Date | null;
+      outcome: string | null;
+    }>(`select id, type, received_via, applied_at, outcome from processor_events where tenant_id = $1 order by received_at`, [tx.tenantId]);
+    return rows;
+  });
+}
+
+/** Polls until `check` returns something truthy (the queue applies events on its own time). */
+export async function eventually<T>(check: () => Promise<T>, what: string, timeoutMs = 15_000): Promise<NonNullable<T>> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const value = await check();
+    if (value) return value;
+    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+}
