@@ -5,7 +5,7 @@ import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
-import { SIGNED_NAME_MAX, SIGNED_NAME_MIN, type PortalProposal } from '@layerbook/contracts/types';
+import { SIGNED_NAME_MAX, SIGNED_NAME_MIN, type PortalProposal, type PortalProposalAccepted } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
@@ -101,7 +101,7 @@ export class AcceptanceForm {
   private readonly api = inject(ProposalApi);
 
   readonly proposal = input.required<PortalProposal>();
-  readonly decided = output<PortalProposal>();
+  readonly decided = output<PortalProposalAccepted>();
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     variantId: ['', requiredText],

@@ -1,7 +1,13 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { PortalProposal, ProposalAcceptance, ProposalChangeRequest, ProposalDecline } from '@layerbook/contracts/types';
+import type {
+  PortalProposal,
+  PortalProposalAccepted,
+  ProposalAcceptance,
+  ProposalChangeRequest,
+  ProposalDecline,
+} from '@layerbook/contracts/types';
 
 /** The client's proposals (GET, `{ items }`) and one of them, for the pages' httpResource reads. */
 export const PROPOSALS_URL = '/api/portal/proposals';
@@ -12,8 +18,9 @@ export const proposalUrl = (id: string) => `${PROPOSALS_URL}/${encodeURIComponen
 export class ProposalApi {
   private readonly http = inject(HttpClient);
 
-  accept(id: string, body: ProposalAcceptance): Promise<PortalProposal> {
-    return firstValueFrom(this.http.post<PortalProposal>(`${proposalUrl(id)}/accept`, body));
+  /** The signed version, with the deposit invoice when the firm issues it at acceptance. */
+  accept(id: string, body: ProposalAcceptance): Promise<PortalProposalAccepted> {
+    return firstValueFrom(this.http.post<PortalProposalAccepted>(`${proposalUrl(id)}/accept`, body));
   }
 
   requestChanges(id: string, body: ProposalChangeRequest): Promise<PortalProposal> {

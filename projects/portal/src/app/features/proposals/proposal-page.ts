@@ -1,22 +1,23 @@
 import { DOCUMENT } from '@angular/common';
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, RESPONSE_INIT, computed, effect, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, RESPONSE_INIT, computed, effect, inject, input, signal } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
-import { PROPOSAL_CLIENT_STATUS_LABELS, type PortalProposal } from '@layerbook/contracts/types';
+import { PROPOSAL_CLIENT_STATUS_LABELS, type PortalProposal, type PortalProposalAccepted } from '@layerbook/contracts/types';
 import { problemMessage, toProblem } from '../../core/errors/problem';
 import { formatDay, formatMoment } from '../../shared/format/money';
 import { AcceptanceForm } from './acceptance-form';
 import { AnswerForms } from './answer-forms';
+import { DepositReady } from './deposit-ready';
 import { ProposalApi, proposalUrl } from './proposal-api';
 import { ProposalDocument } from './proposal-document';
 
 /** One proposal version for the signed-in client: read it, then accept, ask for changes or decline. */
 @Component({
   selector: 'lb-proposal-page',
-  imports: [AcceptanceForm, AnswerForms, MatIconModule, MatProgressBarModule, ProposalDocument, RouterLink],
+  imports: [AcceptanceForm, AnswerForms, DepositReady, MatIconModule, MatProgressBarModule, ProposalDocument, RouterLink],
   templateUrl: './proposal-page.html',
   styles: `
     .heading {
@@ -74,6 +75,8 @@ export class ProposalPage {
       : problemMessage(error);
   });
   protected readonly statusWords = PROPOSAL_CLIENT_STATUS_LABELS;
+  /** the deposit invoice issued in the acceptance just made (the answer says; a later visit finds it under the invoices) */
+  protected readonly depositInvoiceId = signal<string | null>(null);
 
   /** Open for an answer: sent, the newest version, and not past its expiry day. */
   protected readonly isOpen = computed(() => {
@@ -104,6 +107,12 @@ export class ProposalPage {
 
   protected optionLabel(p: PortalProposal): string {
     return p.snapshot.options.find((o) => o.id === p.acceptedVariantId)?.label ?? '';
+  }
+
+  /** Accepted: the deposit invoice to pay now, when the firm issued it in the same step. */
+  protected accepted(answer: PortalProposalAccepted): void {
+    this.depositInvoiceId.set(answer.depositInvoiceId);
+    this.show(answer);
   }
 
   /** After an answer the forms go away; bring the reader back to the message at the top. */

@@ -1,0 +1,47 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { ApplicationRef } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import type { PortalStatement } from '@layerbook/contracts/types';
+import { describe, expect, it } from 'vitest';
+import { StatementPage } from './statement-page';
+
+/** An invented job: a deposit paid by card, then 200.00 of it given back to the card. */
+const statement: PortalStatement = {
+  jobId: 'job-1',
+  jobTitle: 'Morning room, polished plaster',
+  currency: 'USD',
+  locale: 'en-US',
+  contractSum: '4000.00',
+  lines: [
+    { on: '2026-11-20', kind: 'invoice', text: 'INV-0007 Deposit', charge: '1200.00', credit: '0.00', balance: '1200.00' },
+    { on: '2026-11-22', kind: 'payment', text: 'Payment by card', charge: '0.00', credit: '1200.00', balance: '0.00' },
+    { on: '2026-11-25', kind: 'refund', text: 'Refund to card', charge: '0.00', credit: '-200.00', balance: '200.00' },
+  ],
+  invoiced: '1200.00',
+  credited: '0.00',
+  paid: '1000.00',
+  balanceDue: '200.00',
+  unbilled: '2800.00',
+};
+
+describe('the statement', () => {
+  it('shows money given back as its own line that raises the balance', async () => {
+    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])] });
+    const fixture = TestBed.createComponent(StatementPage);
+    fixture.componentRef.setInput('id', 'job-1');
+    TestBed.inject(ApplicationRef).tick();
+    const http = TestBed.inject(HttpTestingController);
+    http.expectOne('/api/portal/jobs/job-1/statement').flush(statement);
+    await fixture.whenStable();
+    fixture.detectChanges();
+    const rows = [...(fixture.nativeElement as HTMLElement).querySelectorAll('tbody tr')];
+    const refund = rows[2];
+    expect(refund.querySelector('th')?.textContent).toContain('Refund to card');
+    expect(refund.querySelector('mat-icon')?.textContent).toBe('undo');
+    const cells = [...refund.querySelectorAll('td')].map((c) => c.textContent?.trim());
+    expect(cells).toEqual(['November 25, 2026', '', '-$200.00', '$200.00']);
+    http.verify();
+  });
+});
