@@ -1,5 +1,7 @@
 import {
   DEFAULT_BILLING_SETTINGS,
+  type EstimateInputs,
+  type EstimateView,
   type BillingSettings,
   type BillingSettingsView,
   type InvoiceDetail,
@@ -9,7 +11,7 @@ import {
 } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { formatMoney } from '@layerbook/domain';
-import { sentProposal } from '../proposals/portal-fixtures';
+import { makeAndSend, sentProposal } from '../proposals/portal-fixtures';
 import { startTestServer, type TestServer } from '../testing/harness';
 import { billingQueueSettled } from './progress-fixtures';
 import { ISSUED_AT_ACCEPTANCE } from './deposit-at-acceptance';
@@ -158,5 +160,56 @@ describe('deposit at acceptance (firm billing setting)', () => {
       async (tx) => (await tx.client.query(`select series from document_counters where tenant_id = $1`, [tx.tenantId])).rows,
     );
     expect(counters).toEqual([]);
+  });
+
+  it('two acceptances at once in one firm: each deposit is issued once, numbered INV-0001 and INV-0002', async () => {
+    const p = await sentProposal(t, 'Twin Deposit Plaster');
+    await saveSettings(p, { depositAtAcceptance: 'issueAndSend' });
+    // A second proposal for the same client: another estimate with option B's work, sent.
+    const first = (await p.agent.get(`/api/estimates/${p.estimateId}`)).body as EstimateView;
+    const made = (
+      await p.agent
+        .post('/api/estimates')
+        .set('x-csrf-token', p.csrf())
+        .send({ siteId: first.siteId, title: 'Hall limewash', startDate: '2026-12-14' })
+    ).body as EstimateView;
+    const inputs: EstimateInputs = {
+      ...first.inputs,
+      title: 'Hall limewash',
+      startDate: '2026-12-14',
+      variants: [first.inputs.variants[1]],
+    };
+    expect((await p.agent.put(`/api/estimates/${made.id}/inputs`).set('x-csrf-token', p.csrf()).send(inputs)).status).toBe(200);
+    const second = await makeAndSend(t, { ...p, estimateId: made.id });
+
+    const answers = await Promise.all(
+      [
+        { id: p.version.id, variantId: 'A' },
+        { id: second.id, variantId: second.snapshot.options[0].id },
+      ].map(({ id, variantId }) =>
+        p.client.agent
+          .post(`/api/portal/proposals/${id}/accept`)
+          .set('x-csrf-token', p.client.csrf())
+          .send({ variantId, signedName: 'Edwina Marl', consent: true }),
+      ),
+    );
+    expect(answers.map((a) => a.status)).toEqual([200, 200]);
+    const ids = answers.map((a) => (a.body as PortalProposalAccepted).depositInvoiceId);
+    expect(new Set(ids).size).toBe(2);
+    const numbers = await Promise.all(ids.map(async (id) => ((await p.agent.get(`/api/invoices/${id!}`)).body as InvoiceDetail).number));
+    expect(numbers.sort()).toEqual(['INV-0001', 'INV-0002']);
+    await billingQueueSettled(t, [p.firmId]);
+    const deposits = await withTenant(
+      t.ctx.pool,
+      p.firmId,
+      async (tx) =>
+        (
+          await tx.client.query<{ status: string; n: number }>(
+            `select status, count(*)::int as n from invoices where tenant_id = $1 and kind = 'deposit' group by status`,
+            [tx.tenantId],
+          )
+        ).rows,
+    );
+    expect(deposits).toEqual([{ status: 'issued', n: 2 }]);
   });
 });
