@@ -1,10 +1,11 @@
-import { and, eq, firms, isNull, portalLinks, portalUsers, TenantTx, withLookup, withTenant } from '@layerbook/db';
+import { and, eq, firms, isNull, isUuid, portalLinks, portalUsers, TenantTx, withLookup, withTenant } from '@layerbook/db';
 import type { Pool } from 'pg';
 import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
 import { gone, notFound } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
 import { portalLinkMail } from '../mail/templates';
+import { sessionLiveSql } from './staff-principal';
 import { hashToken, minutesFromNow, newToken } from './tokens';
 
 export const PORTAL_LINK_MINUTES = 20;
@@ -80,6 +81,26 @@ export async function redeemPortalLink(ctx: AppContext, token: string): Promise<
 
 export function loadClientPrincipal(pool: Pool, portalUserId: string, tenantId: string): Promise<ClientPrincipal | null> {
   return withTenant(pool, tenantId, (tx) => loadClientInTx(tx, portalUserId));
+}
+
+interface ClientRow {
+  name: string;
+  email: string;
+  status: string;
+  firm_name: string;
+  session_live: boolean;
+}
+
+/** The client's row as literal SQL for the first round trip of a request's transaction (see staffRowSql). */
+export function clientRowSql(tenantId: string, portalUserId: string, sessionId: string | null): string {
+  if (!isUuid(tenantId) || !isUuid(portalUserId)) throw new Error('clientRowSql needs ids');
+  return `select p.name, p.email, p.status, f.name as firm_name, ${sessionLiveSql(sessionId, portalUserId)} as session_live
+            from portal_users p join firms f on f.id = p.tenant_id where p.tenant_id = '${tenantId}' and p.id = '${portalUserId}'`;
+}
+
+export function toClientPrincipal(tenantId: string, portalUserId: string, row: ClientRow | undefined): ClientPrincipal | null {
+  if (!row || row.status !== 'active' || !row.session_live) return null;
+  return { kind: 'client', id: portalUserId, tenantId, name: row.name, email: row.email, firmName: row.firm_name };
 }
 
 /** Loads a portal client inside the request's firm transaction (see loadStaffInTx). */

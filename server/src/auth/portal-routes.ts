@@ -2,13 +2,13 @@ import { portalLinkRequest, portalRedeemRequest, type Notice, type PortalSession
 import { Request, RequestHandler, Response, Router } from 'express';
 import type { AppContext } from '../context';
 import { csrfToken } from '../http/csrf';
+import { signedInClient } from '../http/guards';
 import { parse } from '../http/validate';
 import { endSession, logIn, logOut } from './passport-setup';
-import { loadClientPrincipal, redeemPortalLink, requestPortalLink } from './portal-auth';
+import { redeemPortalLink, requestPortalLink } from './portal-auth';
 
 async function portalSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<PortalSession> {
-  const claim = req.user?.kind === 'client' ? req.user : null;
-  const client = claim ? await loadClientPrincipal(ctx.pool, claim.id, claim.tenantId) : null;
+  const client = await signedInClient(ctx, req);
   return {
     client: client ? { id: client.id, name: client.name, email: client.email, firmId: client.tenantId, firmName: client.firmName } : null,
     csrfToken: csrfToken(ctx.config, req, res, fresh),

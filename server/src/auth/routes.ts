@@ -17,7 +17,7 @@ import type { AppContext } from '../context';
 import { csrfToken } from '../http/csrf';
 import { asError } from '../http/errors';
 import type { Principal } from '../http/principal';
-import { loadStaffPrincipal } from './staff-principal';
+import { signedInStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { acceptInvitation, previewInvitation } from './invitations';
 import { endSession, logIn, logOut, type AppPassport } from './passport-setup';
@@ -25,8 +25,7 @@ import { completePasswordReset, requestPasswordReset } from './password-reset';
 import { confirmSignUp, requestSignUp } from './staff-auth';
 
 export async function staffSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<StaffSession> {
-  const claim = req.user?.kind === 'staff' ? req.user : null;
-  const user = claim ? await loadStaffPrincipal(ctx.pool, claim.id, claim.tenantId) : null;
+  const user = await signedInStaff(ctx, req);
   return {
     user: user
       ? { id: user.id, name: user.name, email: user.email, role: user.role, firmId: user.tenantId, firmName: user.firmName }

@@ -1,6 +1,7 @@
 import { isUuid, withTenant, TenantTx } from '@layerbook/db';
 import type { Pool } from 'pg';
 import type { StaffPrincipal } from '../http/principal';
+import { isSessionId } from '../http/session';
 
 /**
  * Loads a staff member inside the request's own firm transaction, so a deactivation or role change
@@ -15,21 +16,33 @@ interface StaffRow {
   firm_name: string;
   time_zone: string;
   currency: string;
+  /** false when the request's session has ended in the database (signed out or expired elsewhere) */
+  session_live?: boolean;
 }
 
 /**
  * The staff member's row as literal SQL for the first round trip of a request's transaction
- * (withTenantAndFirst). Both ids are checked UUIDs, so inlining them is safe.
+ * (withTenantAndFirst), with whether the request's session is still live (`sessionId`; null when
+ * there is none to check). Ids are checked UUIDs and the session id is checked base64url, so
+ * inlining them is safe.
  */
-export function staffRowSql(tenantId: string, userId: string): string {
+export function staffRowSql(tenantId: string, userId: string, sessionId: string | null = null): string {
   if (!isUuid(tenantId) || !isUuid(userId)) throw new Error('staffRowSql needs ids');
-  return `select m.id as membership_id, m.role, m.status, u.name, u.email, f.name as firm_name, f.time_zone, f.currency
+  return `select m.id as membership_id, m.role, m.status, u.name, u.email, f.name as firm_name, f.time_zone, f.currency,
+                 ${sessionLiveSql(sessionId, userId)} as session_live
             from memberships m join users u on u.id = m.user_id join firms f on f.id = m.tenant_id
            where m.tenant_id = '${tenantId}' and m.user_id = '${userId}'`;
 }
 
+/** `auth_session_live(…)` for the first round trip, or `true` when no session is to be checked. */
+export function sessionLiveSql(sessionId: string | null, userId: string): string {
+  if (sessionId === null) return 'true';
+  if (!isSessionId(sessionId) || !isUuid(userId)) throw new Error('sessionLiveSql needs ids');
+  return `auth_session_live('${sessionId}', '${userId}')`;
+}
+
 export function toStaffPrincipal(tenantId: string, userId: string, row: StaffRow | undefined): StaffPrincipal | null {
-  if (!row || row.status !== 'active') return null;
+  if (!row || row.status !== 'active' || row.session_live === false) return null;
   return {
     kind: 'staff',
     id: userId,

@@ -21,13 +21,17 @@ import { invoiceDocument } from './document';
 import { moneyOut } from './money';
 import { loadBillingSettings } from './settings';
 
+/** created_at as the ISO text the API answers (what Date#toISOString prints), made by PostgreSQL: no Date per row. */
+const ISO_CREATED_AT = `to_char(i.created_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`;
+
 /**
  * An invoice summary's columns; `$today` is the firm-local day the query is given, so whether an
  * invoice is overdue is decided in the same statement.
  */
 export const summaryColumns = (today: string) => `i.id, i.number_text, i.kind, i.status, i.job_id, j.title as job_title, i.client_id,
   c.name as client_name, i.issued_on::text as issued_on, i.due_on::text as due_on, i.currency, i.total::text as total,
-  (case when i.status = 'void' then 0 else i.total - i.amount_paid - i.amount_credited end)::text as amount_due, i.origin, i.created_at,
+  (case when i.status = 'void' then 0 else i.total - i.amount_paid - i.amount_credited end)::text as amount_due, i.origin,
+  ${ISO_CREATED_AT} as created_at,
   (i.status in ('issued', 'part_paid') and i.due_on < ${today}::date) as is_overdue`;
 
 export const SUMMARY_FROM = `from invoices i join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id
@@ -48,7 +52,8 @@ export interface SummaryRow {
   total: string;
   amount_due: string;
   origin: 'office' | 'queue';
-  created_at: Date;
+  /** ISO 8601, UTC */
+  created_at: string;
   is_overdue: boolean;
 }
 
@@ -68,7 +73,7 @@ export const toSummary = (r: SummaryRow): InvoiceSummary => ({
   total: moneyOut(r.total, r.currency),
   amountDue: moneyOut(r.amount_due, r.currency),
   origin: r.origin,
-  createdAt: r.created_at.toISOString(),
+  createdAt: r.created_at,
 });
 
 const FILTERS: Record<InvoiceListQuery['filter'], string> = {

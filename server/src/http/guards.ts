@@ -1,11 +1,21 @@
 import { roleAtLeast, StaffRole } from '@layerbook/contracts';
-import { TenantTx, withTenant, withTenantAndFirst } from '@layerbook/db';
+import { TenantTx, withTenantAndFirst } from '@layerbook/db';
 import type { Request } from 'express';
-import { loadClientInTx } from '../auth/portal-auth';
+import { clientRowSql, toClientPrincipal } from '../auth/portal-auth';
 import { staffRowSql, toStaffPrincipal } from '../auth/staff-principal';
 import type { AppContext } from '../context';
 import type { ClientPrincipal, StaffPrincipal } from './principal';
 import { forbidden, unauthorized } from './problem';
+import { forgetSession, isSessionId } from './session';
+
+/** The request's session id, when it has one express-session made (checked before it is inlined in SQL). */
+const sessionIdOf = (req: Request): string | null => (isSessionId(req.sessionID) ? req.sessionID : null);
+
+/** A session found ended in the database: this process's copy goes too, so the next request reads the truth. */
+function ended(req: Request): void {
+  const sid = sessionIdOf(req);
+  if (sid) forgetSession(sid);
+}
 
 /**
  * Function-level and record-level authorisation in one step: opens the signed-in person's firm
@@ -20,9 +30,12 @@ export async function withStaff<T>(
 ): Promise<T> {
   const claim = req.user;
   if (!claim || claim.kind !== 'staff') throw unauthorized();
-  return withTenantAndFirst(ctx.pool, claim.tenantId, staffRowSql(claim.tenantId, claim.id), async (tx, rows) => {
+  return withTenantAndFirst(ctx.pool, claim.tenantId, staffRowSql(claim.tenantId, claim.id, sessionIdOf(req)), async (tx, rows) => {
     const staff = toStaffPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toStaffPrincipal>[2]);
-    if (!staff) throw unauthorized('Your access has ended. Sign in again, or ask the owner.');
+    if (!staff) {
+      ended(req);
+      throw unauthorized('Your access has ended. Sign in again, or ask the owner.');
+    }
     if (!roleAtLeast(staff.role, needed)) throw forbidden();
     return fn(tx, staff);
   });
@@ -31,9 +44,34 @@ export async function withStaff<T>(
 export async function withClient<T>(ctx: AppContext, req: Request, fn: (tx: TenantTx, client: ClientPrincipal) => Promise<T>): Promise<T> {
   const claim = req.user;
   if (!claim || claim.kind !== 'client') throw unauthorized('Sign in with the link we e-mail you.');
-  return withTenant(ctx.pool, claim.tenantId, async (tx) => {
-    const client = await loadClientInTx(tx, claim.id);
-    if (!client) throw unauthorized('This client account is no longer active.');
+  return withTenantAndFirst(ctx.pool, claim.tenantId, clientRowSql(claim.tenantId, claim.id, sessionIdOf(req)), async (tx, rows) => {
+    const client = toClientPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toClientPrincipal>[2]);
+    if (!client) {
+      ended(req);
+      throw unauthorized('This client account is no longer active.');
+    }
     return fn(tx, client);
   });
+}
+
+/** The signed-in staff member for the session answer: null when not signed in, no longer a member, or the session ended. */
+export async function signedInStaff(ctx: AppContext, req: Request): Promise<StaffPrincipal | null> {
+  const claim = req.user;
+  if (!claim || claim.kind !== 'staff') return null;
+  const staff = await withTenantAndFirst(ctx.pool, claim.tenantId, staffRowSql(claim.tenantId, claim.id, sessionIdOf(req)), (_tx, rows) =>
+    Promise.resolve(toStaffPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toStaffPrincipal>[2])),
+  );
+  if (!staff) ended(req);
+  return staff;
+}
+
+/** The signed-in client for the portal's session answer (see signedInStaff). */
+export async function signedInClient(ctx: AppContext, req: Request): Promise<ClientPrincipal | null> {
+  const claim = req.user;
+  if (!claim || claim.kind !== 'client') return null;
+  const client = await withTenantAndFirst(ctx.pool, claim.tenantId, clientRowSql(claim.tenantId, claim.id, sessionIdOf(req)), (_tx, rows) =>
+    Promise.resolve(toClientPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toClientPrincipal>[2])),
+  );
+  if (!client) ended(req);
+  return client;
 }
