@@ -13,6 +13,7 @@ const TSCONFIGS = [
   'packages/contracts/tsconfig.json',
   'packages/db/tsconfig.json',
   'packages/domain/tsconfig.json',
+  'packages/stripe-fake/tsconfig.json',
   'ops/bench/domain/tsconfig.json',
   'e2e/tsconfig.json',
   'projects/admin/tsconfig.app.json',
