@@ -3,12 +3,13 @@ import { PDFParse } from 'pdf-parse';
 import { expect, test, type Page } from '@playwright/test';
 import type { PortalInvoiceSummary } from '@layerbook/contracts/types';
 import { pathFrom, waitForMail } from './support/inbox';
-import { issuedDeposit } from './support/payment-setup';
+import { issuedDeposit, sentProposal, setDepositAtAcceptance } from './support/payment-setup';
 import { DEMO } from './support/people';
 import { axeProblems } from './support/phone-checks';
 import { openLive } from './support/phone';
 
 const TITLE = 'Stair hall limewash, paid by card';
+const TITLE_AT_ACCEPTANCE = 'Stair hall limewash, deposit paid at signing';
 
 /** Stripe's published test cards (Stripe Docs "Testing" — test card numbers): one pays, one is declined. */
 const CARDS = { pays: '4242 4242 4242 4242', declined: '4000 0000 0000 0002' } as const;
@@ -117,4 +118,36 @@ test('the client pays the e-mailed deposit by card, sees it paid, gets the recei
   await page.screenshot({ path: 'e2e/.artifacts/payments-cancelled.png', fullPage: true });
   await expectAccessible(page);
   await context.close();
+});
+
+// Journey (portal): a firm that issues the deposit in the acceptance — the client signs in the portal,
+// is offered the deposit at once, and pays it by card. The demo firm's setting is put back after.
+test('right after accepting, the client pays the deposit the firm issued in the acceptance', async ({ browser }) => {
+  await setDepositAtAcceptance('issueAndSend');
+  try {
+    const versionId = await sentProposal(TITLE_AT_ACCEPTANCE);
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    const mail = await waitForMail(DEMO.client, /sent you a proposal/, { text: `/portal/proposals/${versionId}` });
+    await openLive(page, pathFrom(mail));
+    await expect(page).toHaveURL(new RegExp(`/portal/proposals/${versionId}$`));
+    await page.getByRole('radio', { name: /^Limewash — / }).check();
+    await page.getByLabel('Your full name').fill('Hattie Brambleton');
+    await page.getByLabel('I accept this proposal and its terms.').check();
+    await page.getByRole('button', { name: 'Accept this proposal' }).click();
+    await expect(page.getByText(/Accepted by Hattie Brambleton/)).toBeVisible();
+
+    const ready = page.getByRole('region', { name: 'Your deposit invoice is ready' });
+    await expect(ready).toBeVisible();
+    await ready.screenshot({ path: 'e2e/.artifacts/payments-deposit-ready.png' });
+    await ready.getByRole('link', { name: 'Pay the deposit now' }).click();
+    await expect(page.getByRole('heading', { level: 1, name: /^Invoice INV-\d+$/ })).toBeVisible();
+    await expect(page.getByText(/^Deposit from /)).toBeVisible();
+    await page.getByRole('button', { name: /^Pay .+ by card$/ }).click();
+    await payOnCardPage(page, CARDS.pays);
+    await expect(page.getByRole('heading', { level: 2, name: /^Paid — receipt RCT-\d+$/ })).toBeVisible({ timeout: 45_000 });
+    await context.close();
+  } finally {
+    await setDepositAtAcceptance('draft');
+  }
 });

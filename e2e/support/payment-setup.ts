@@ -1,5 +1,5 @@
 import { expect, request, type APIRequestContext, type APIResponse } from '@playwright/test';
-import type { InvoiceDetail, JobBillingView } from '@layerbook/contracts/types';
+import type { BillingSettings, InvoiceDetail, JobBillingView } from '@layerbook/contracts/types';
 import { E2E } from './env';
 import { pathFrom, waitForMail } from './inbox';
 import { DEMO, DEMO_PASSWORD } from './people';
@@ -9,12 +9,12 @@ interface Listed {
   readonly name: string;
 }
 
-/** A signed-in office API client (session cookie + CSRF token), as the admin app talks to the server. */
-async function officeApi(): Promise<{ api: APIRequestContext; headers: () => Promise<Record<string, string>> }> {
+/** A signed-in staff API client (session cookie + CSRF token), as the admin app talks to the server. */
+async function staffApi(email: string = DEMO.office): Promise<{ api: APIRequestContext; headers: () => Promise<Record<string, string>> }> {
   const api = await request.newContext({ baseURL: E2E.baseUrl });
   const csrf = async () => ((await (await api.get('/api/auth/session')).json()) as { csrfToken: string }).csrfToken;
   const signedIn = await api.post('/api/auth/signin', {
-    data: { email: DEMO.office, password: DEMO_PASSWORD },
+    data: { email, password: DEMO_PASSWORD },
     headers: { 'x-csrf-token': await csrf() },
   });
   expect(signedIn.status()).toBe(200);
@@ -28,12 +28,11 @@ async function ok<T>(answer: Promise<APIResponse>): Promise<T> {
 }
 
 /**
- * The journey's data, made through the API as the office and the client would: a proposal for the
- * demo client's stair hall (limewash on two surfaces) sent and accepted in the portal, billing
- * started, and the deposit the queue drafts issued and e-mailed to the client. Answers the deposit.
+ * The office's proposal for the demo client's stair hall (limewash on two surfaces, one option "A"
+ * labelled "Limewash"), made and sent through the API. Answers the version's id.
  */
-export async function issuedDeposit(title: string): Promise<{ readonly id: string; readonly number: string }> {
-  const { api, headers } = await officeApi();
+export async function sentProposal(title: string): Promise<string> {
+  const { api, headers } = await staffApi();
   const clients = await ok<{ items: Listed[] }>(api.get('/api/clients', { params: { q: 'Hattie Brambleton' } }));
   const client = await ok<{ sites: Array<{ id: string }> }>(api.get(`/api/clients/${clients.items[0].id}`));
   const siteId = client.sites[0].id;
@@ -68,15 +67,26 @@ export async function issuedDeposit(title: string): Promise<{ readonly id: strin
     api.post('/api/proposals', { data: { estimateId: estimate.id, expiresOn: inDays(20) }, headers: await headers() }),
   );
   await ok(api.post(`/api/proposals/${version.id}/send`, { data: {}, headers: await headers() }));
+  await api.dispose();
+  return version.id;
+}
+
+/**
+ * The journey's data, made through the API as the office and the client would: a proposal sent and
+ * accepted in the portal, billing started, and the deposit the queue drafts issued and e-mailed to
+ * the client. Answers the deposit.
+ */
+export async function issuedDeposit(title: string): Promise<{ readonly id: string; readonly number: string }> {
+  const versionId = await sentProposal(title);
 
   // The client accepts through the portal's API, signed in by the proposal e-mail's link.
-  const mail = await waitForMail(DEMO.client, /sent you a proposal/, { text: `/portal/proposals/${version.id}` });
+  const mail = await waitForMail(DEMO.client, /sent you a proposal/, { text: `/portal/proposals/${versionId}` });
   const portal = await request.newContext({ baseURL: E2E.baseUrl });
   const portalCsrf = async () => ((await (await portal.get('/api/portal/session')).json()) as { csrfToken: string }).csrfToken;
   const token = new URL(pathFrom(mail), E2E.baseUrl).searchParams.get('token');
   await ok(portal.post('/api/portal/auth/redeem', { data: { token }, headers: { 'x-csrf-token': await portalCsrf() } }));
   await ok(
-    portal.post(`/api/portal/proposals/${version.id}/accept`, {
+    portal.post(`/api/portal/proposals/${versionId}/accept`, {
       data: { variantId: 'A', signedName: 'Hattie Brambleton', consent: true },
       headers: { 'x-csrf-token': await portalCsrf() },
     }),
@@ -84,10 +94,11 @@ export async function issuedDeposit(title: string): Promise<{ readonly id: strin
   await portal.dispose();
 
   // The office starts billing; the deposit's trigger (acceptance) is met, so the queue drafts it.
+  const { api, headers } = await staffApi();
   const jobs = await ok<{ items: Array<{ id: string; title: string }> }>(api.get('/api/jobs'));
   const jobId = jobs.items.find((j) => j.title === title)!.id;
-  const started = await ok<JobBillingView>(api.post(`/api/jobs/${jobId}/billing/start`, { data: {}, headers: await headers() }));
-  let draftId = started.invoices.find((i) => i.kind === 'deposit' && i.status === 'draft')?.id;
+  await ok<JobBillingView>(api.post(`/api/jobs/${jobId}/billing/start`, { data: {}, headers: await headers() }));
+  let draftId: string | undefined;
   await expect
     .poll(
       async () => {
@@ -101,4 +112,24 @@ export async function issuedDeposit(title: string): Promise<{ readonly id: strin
   const issued = await ok<InvoiceDetail>(api.post(`/api/invoices/${draftId}/issue`, { data: { send: true }, headers: await headers() }));
   await api.dispose();
   return { id: issued.id, number: issued.number! };
+}
+
+/** The demo firm's deposit at acceptance (set by the owner): drafted for the office, or issued and e-mailed at once. */
+export async function setDepositAtAcceptance(value: BillingSettings['depositAtAcceptance']): Promise<void> {
+  const { api, headers } = await staffApi(DEMO.owner);
+  const current = await ok<BillingSettings>(api.get('/api/firm/billing'));
+  const settings: BillingSettings = {
+    depositCap: current.depositCap,
+    depositCapName: current.depositCapName,
+    terms: current.terms,
+    retainage: current.retainage,
+    depositCredit: current.depositCredit,
+    depositAtAcceptance: value,
+    reminders: current.reminders,
+    invoicePrefix: current.invoicePrefix,
+    creditNotePrefix: current.creditNotePrefix,
+    invoiceFooter: current.invoiceFooter,
+  };
+  await ok(api.put('/api/firm/billing', { data: settings, headers: await headers() }));
+  await api.dispose();
 }
