@@ -113,6 +113,25 @@ describe('offline refunds', () => {
   });
 });
 
+describe('card payments without online payments set up', () => {
+  it('refuses a refund back to the card (400 naming method) and records one by cheque', async () => {
+    const f = await issuedInvoice(t, 'Key Less Plaster');
+    const paid = await f.payDirect({
+      method: 'card',
+      amount: '100.00',
+      processorSessionId: 'cs_keyless',
+      processorPaymentIntentId: 'pi_keyless',
+    });
+    const res = await f.refund(paid.paymentId, { method: 'card', amount: '10.00' });
+    expect([res.status, fieldOf(res.body), messageOf(res.body)]).toEqual([
+      400,
+      'method',
+      'Online payments are not set up: record the refund as cheque, transfer or cash.',
+    ]);
+    expect((await f.refund(paid.paymentId, { method: 'cheque', amount: '10.00' })).status).toBe(201);
+  });
+});
+
 describe('concurrent refunds of one payment', () => {
   it('ten refunds of 30.00 asked at once on a 100.00 payment: at most three go through, never more than was paid', async () => {
     const f = await issuedInvoice(t, 'Ten At Once Plaster');
