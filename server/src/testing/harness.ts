@@ -1,7 +1,10 @@
 import { mkdtempSync, rmSync } from 'node:fs';
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import type { PortalSession, StaffSession } from '@layerbook/contracts';
+import { startStripeFake, type StripeFake } from '@layerbook/stripe-fake';
 import type { Express } from 'express';
 import { Pool } from 'pg';
 import request from 'supertest';
@@ -22,6 +25,15 @@ export interface TestServer {
   readonly ctx: AppContext;
   readonly inbox: Inbox;
   readonly queue: StartedQueue;
+  /**
+   * This server's own Stripe stand-in (packages/stripe-fake), posting its signed webhooks to this
+   * server's /api/payments/webhook, on the server's clock; the server's processor with
+   * `{ onlinePayments: true }`. `stripe.controls` pays sessions and replays, delays or spoils
+   * deliveries (see the package's README).
+   */
+  readonly stripe: StripeFake;
+  /** Where this server listens (loopback, a free port): the stand-in's webhooks arrive here. */
+  readonly baseUrl: string;
   /** Moves the injected clock; every service reads time through ctx.now. */
   setNow(date: Date | null): void;
   stop(): Promise<void>;
@@ -33,11 +45,35 @@ export interface TestServer {
  */
 const inboxes = new Map<Express, Inbox>();
 
-export async function startTestServer(overrides: Partial<Record<keyof Config, string>> = {}): Promise<TestServer> {
+/** The stand-in's key and webhook secret in API tests (any sk_test_ key would do). */
+export const TEST_STRIPE = { secretKey: 'sk_test_layerbook_api_tests', webhookSecret: 'whsec_layerbook_api_tests' } as const;
+
+export interface TestServerOptions {
+  /**
+   * Card payments through this server's own stand-in (`server.stripe`): STRIPE_SECRET_KEY,
+   * STRIPE_WEBHOOK_SECRET and STRIPE_API_BASE point at it. Off by default (no key: no online payments).
+   */
+  onlinePayments?: boolean;
+}
+
+/** A server on a real database with its own inbox, S3 fake and Stripe stand-in (used when `onlinePayments`). */
+export async function startTestServer(
+  overrides: Partial<Record<keyof Config, string>> = {},
+  options: TestServerOptions = {},
+): Promise<TestServer> {
   const inbox = await startInbox();
   // Each test server gets its own S3 fake on a free port with a throwaway folder.
   const s3Dir = mkdtempSync(path.join(os.tmpdir(), 'layerbook-s3-'));
   const s3 = await startS3Fake({ directory: s3Dir, port: 0 });
+  let fixedNow: Date | null = null;
+  // Retries within a test's time (the real schedule waits up to a minute); timestamps on the server's clock.
+  const stripe = await startStripeFake({
+    port: 0,
+    secretKey: TEST_STRIPE.secretKey,
+    webhookSecret: TEST_STRIPE.webhookSecret,
+    retryDelaysMs: [100, 200, 400, 800],
+    now: () => fixedNow ?? new Date(),
+  });
   const config = loadConfig({
     NODE_ENV: 'test',
     ...testDatabaseUrls(),
@@ -50,24 +86,37 @@ export async function startTestServer(overrides: Partial<Record<keyof Config, st
     SIGN_IN_RATE_LIMIT: '1000',
     PUBLIC_FORM_RATE_LIMIT: '1000',
     S3_ENDPOINT: s3.endpoint,
+    ...(options.onlinePayments
+      ? { STRIPE_SECRET_KEY: TEST_STRIPE.secretKey, STRIPE_WEBHOOK_SECRET: TEST_STRIPE.webhookSecret, STRIPE_API_BASE: stripe.baseUrl }
+      : {}),
     ...overrides,
   });
   const logger = createLogger(config);
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: 5 });
   const queue = await startQueue(config, logger);
-  let fixedNow: Date | null = null;
   const workers: Workers = await startWorkers(config, queue, logger, () => fixedNow ?? new Date());
   const storage = await openObjectStore(config);
   const ctx: AppContext = { config, pool, queue, logger, storage, now: () => fixedNow ?? new Date() };
   const app = createApp(ctx);
   inboxes.set(app, inbox);
+  // Listening for real: the stand-in posts its webhooks over HTTP, as Stripe does.
+  const listener = await new Promise<Server>((resolve, reject) => {
+    const server = app.listen(0, '127.0.0.1', () => resolve(server)).once('error', reject);
+  });
+  const baseUrl = `http://127.0.0.1:${(listener.address() as AddressInfo).port}`;
+  stripe.controls.setWebhookUrls([`${baseUrl}/api/payments/webhook`]);
   return {
     app,
     ctx,
     inbox,
     queue,
+    stripe,
+    baseUrl,
     setNow: (d) => (fixedNow = d),
     async stop() {
+      await stripe.stop();
+      listener.closeAllConnections();
+      await new Promise<void>((resolve) => listener.close(() => resolve()));
       await workers.stop();
       await queue.stop();
       // pg-boss's stop resolves while a loop it started (offWork) still checks, once a second, that
