@@ -192,7 +192,8 @@ test('the office bills the deposit, marks the first layers done and issues the d
 
   await yours.getByRole('link', { name: stageNumber, exact: true }).click();
   await expect(portal.getByRole('heading', { level: 1, name: `Invoice ${stageNumber}` })).toBeVisible();
-  await expect(portal.getByRole('heading', { name: 'Pay online — coming soon' })).toBeVisible();
+  await expect(portal.getByRole('heading', { level: 2, name: 'Pay online' })).toBeVisible();
+  await expect(portal.getByRole('button', { name: /^Pay .+ by card$/ })).toBeVisible();
   await portal.screenshot({ path: 'e2e/.artifacts/billing-portal-invoice.png', fullPage: true });
   const downloading = portal.waitForEvent('download');
   await portal.getByRole('link', { name: 'Download the PDF' }).click();

@@ -22,6 +22,7 @@ import { deleteDraft, updateDraft } from './draft-edits';
 import { getInvoice, listInvoices } from './invoice-read';
 import { issueInvoice } from './issue';
 import { recordOfflinePayment } from './offline-payments';
+import { enqueueReceiptMail } from '../payments/receipt-mail';
 import { getBillingSettings, saveBillingSettings } from './settings';
 import { billingToday } from './today';
 import { voidInvoice } from './void';
@@ -98,7 +99,9 @@ export function invoiceRoutes(ctx: AppContext): Router {
   router.post('/:id/payments', async (req, res) => {
     const detail = await withStaff(ctx, req, 'office', async (tx, staff) => {
       const { id } = parse(idParam, req.params);
-      await recordOfflinePayment(tx, staffActor(staff), id, parse(offlinePaymentCreate, req.body));
+      const recorded = await recordOfflinePayment(tx, staffActor(staff), id, parse(offlinePaymentCreate, req.body));
+      // The client's receipt goes out through the outbox with the payment (a client without an e-mail gets none).
+      await enqueueReceiptMail(tx, deps, { kind: 'payment', id: recorded.paymentId });
       return getInvoice(tx, id, ctx.now());
     });
     res.json(detail satisfies InvoiceDetail);
