@@ -24,6 +24,16 @@ describe('processor smallest currency unit', () => {
     expect(fromProcessorAmount(sent, currency).equals(amount)).toBe(true);
   });
 
+  it.each(['BIF', 'CLP', 'DJF', 'GNF', 'JPY', 'KMF', 'KRW', 'MGA', 'PYG', 'RWF', 'VND', 'VUV', 'XAF', 'XOF', 'XPF'])(
+    '%s is zero-decimal: 500 is sent as 500',
+    (currency) => {
+      // Stripe Docs "Supported currencies" — Zero-decimal currencies, the whole published list
+      // (UGX is on it too but sent ×100 by its "Special cases" row, checked above)
+      expect(toProcessorAmount('500', currency)).toBe(500);
+      expect(() => toProcessorAmount('500.5', currency)).toThrow(DomainInputError);
+    },
+  );
+
   it('refuses fractions of a zero-decimal currency, ISK included', () => {
     // Stripe Docs "Supported currencies": ISK amounts must end in 00
     expect(() => toProcessorAmount('10.50', 'ISK')).toThrow(DomainInputError);
