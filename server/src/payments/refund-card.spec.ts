@@ -1,0 +1,192 @@
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import type { Problem, RefundView } from '@layerbook/contracts';
+import { withTenant } from '@layerbook/db';
+import { startStripeFake, type StripeFake } from '@layerbook/stripe-fake';
+import type Stripe from 'stripe';
+import { startTestServer, type TestServer } from '../testing/harness';
+import { processorFor } from './processor';
+import { issuedInvoice } from './refund-fixtures';
+
+const WEBHOOK_SECRET = 'whsec_layerbook_refund_spec';
+let t: TestServer;
+let fake: StripeFake;
+let server: Server;
+let stripe: Stripe;
+
+beforeAll(async () => {
+  // The stand-in signs its webhooks on the server's clock, or the signature check would find them stale.
+  fake = await startStripeFake({
+    port: 0,
+    webhookSecret: WEBHOOK_SECRET,
+    retryDelaysMs: [50, 100, 200],
+    now: () => (t ? t.ctx.now() : new Date()),
+  });
+  t = await startTestServer({
+    STRIPE_SECRET_KEY: 'sk_test_layerbook_refund_spec',
+    STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
+    STRIPE_API_BASE: fake.baseUrl,
+  });
+  t.setNow(new Date('2026-12-20T15:00:00Z'));
+  server = await new Promise((resolve) => {
+    const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
+  });
+  // The stand-in's refund events reach the server's webhook, so they race the route's own settling.
+  fake.controls.setWebhookUrls([`http://127.0.0.1:${(server.address() as AddressInfo).port}/api/payments/webhook`]);
+  stripe = processorFor(t.ctx.config)!;
+});
+afterAll(async () => {
+  // Nothing left on its way to the webhook, so no queue job is still running when the workers stop.
+  await fake.controls.idle();
+  await fake.stop();
+  await new Promise((resolve) => server.close(resolve));
+  await t.stop();
+});
+
+/** Polls until `check` holds (the queue applies the processor's events on its own time). */
+async function eventually(check: () => Promise<boolean>, what: string, timeoutMs = 15_000): Promise<void> {
+  for (const deadline = Date.now() + timeoutMs; Date.now() < deadline; await new Promise((r) => setTimeout(r, 100))) {
+    if (await check()) return;
+  }
+  throw new Error(`timed out waiting for ${what}`);
+}
+
+/**
+ * INV-0001 for 100.00 paid in full by card at the stand-in (test card 4242…): the session has no
+ * firm in its metadata, so the webhook files none of its events, and the payment is recorded here
+ * as fulfilment would record it, with the processor's payment intent.
+ */
+async function cardPaid(name: string) {
+  const f = await issuedInvoice(t, name);
+  const session = await stripe.checkout.sessions.create({
+    mode: 'payment',
+    line_items: [{ quantity: 1, price_data: { currency: 'usd', unit_amount: 10000, product_data: { name: 'INV-0001 Deposit' } } }],
+    success_url: 'http://localhost:4300/done/{CHECKOUT_SESSION_ID}',
+    cancel_url: 'http://localhost:4300/cancelled',
+  });
+  const paid = fake.controls.pay(session.id);
+  if (!paid.ok) throw new Error(`not paid: ${paid.message}`);
+  const pi = paid.paymentIntent.id;
+  const payment = await f.payDirect({ method: 'card', amount: '100.00', processorSessionId: session.id, processorPaymentIntentId: pi });
+  /** The refunds the processor made for this payment (as created; the stand-in lists them through its events). */
+  const atProcessor = async () =>
+    Promise.all(
+      fake.controls
+        .events('refund.created')
+        .map((e) => e.data.object as Stripe.Refund)
+        .filter((r) => r.payment_intent === pi)
+        .map((r) => stripe.refunds.retrieve(r.id)),
+    );
+  const refundEvents = () =>
+    withTenant(t.ctx.pool, f.firmId, async (tx) => {
+      const { rows } = await tx.client.query<{ type: string; applied_at: Date | null; outcome: string | null }>(
+        `select type, applied_at, outcome from processor_events where tenant_id = $1 and type like 'refund.%' order by received_at`,
+        [tx.tenantId],
+      );
+      return rows;
+    });
+  return { ...f, pi, paymentId: payment.paymentId, atProcessor, refundEvents };
+}
+
+describe('card refunds through the processor', () => {
+  it('gives 30.00 back to the card: one processor refund keyed by our refund, a receipt, and its events change nothing more', async () => {
+    const f = await cardPaid('Card Back Plaster');
+    const res = await f.refund(f.paymentId, { method: 'card', amount: '30.00', reason: 'One wall left plain' });
+    expect(res.status).toBe(201);
+    const view = res.body as RefundView;
+    expect(view).toMatchObject({
+      method: 'card',
+      status: 'succeeded',
+      amount: '30.00',
+      refundedOn: '2026-12-20',
+      receiptNumber: 'RCT-0002',
+    });
+    const [sent] = await f.atProcessor();
+    // 30.00 USD → 3000 in the smallest unit (Stripe Docs "Supported currencies": USD is not zero-decimal)
+    expect(sent).toMatchObject({
+      amount: 3000,
+      currency: 'usd',
+      status: 'succeeded',
+      metadata: { tenant_id: f.firmId, refund_id: view.id },
+    });
+
+    await eventually(async () => {
+      const events = await f.refundEvents();
+      return events.length > 0 && events.every((e) => e.applied_at !== null);
+    }, 'the refund events applied');
+    expect((await f.refundEvents()).map((e) => e.outcome)).toContain(`Refund ${sent.id}: Refund already recorded`);
+    expect(await f.money(f.paymentId)).toMatchObject({ status: 'part_paid', amountPaid: '70.00', refunded: '30.00' });
+    expect(await f.atProcessor()).toHaveLength(1);
+  });
+
+  it('answers 502 in words when the processor refuses, marks the refund failed and frees its amount', async () => {
+    const f = await cardPaid('Refused Refund Glaze');
+    fake.controls.failNext({
+      method: 'POST',
+      path: '/v1/refunds',
+      status: 402,
+      error: { type: 'invalid_request_error', code: 'charge_disputed', message: 'This charge is disputed and cannot be refunded.' },
+    });
+    const res = await f.refund(f.paymentId, { method: 'card', amount: '100.00' });
+    expect(res.status).toBe(502);
+    expect((res.body as Problem).detail).toBe('The processor refused the refund: This charge is disputed and cannot be refunded.');
+    const [row] = (await f.agent.get(`/api/invoices/${f.invoiceId}`)).body.payments[0].refunds as RefundView[];
+    expect(row).toMatchObject({
+      status: 'failed',
+      receiptNumber: null,
+      failureMessage: 'The processor refused the refund: This charge is disputed and cannot be refunded.',
+    });
+    expect(await f.money(f.paymentId)).toMatchObject({ status: 'paid', refunded: '0.00' });
+    expect((await f.refund(f.paymentId, { method: 'card', amount: '100.00' })).status).toBe(201);
+    expect(await f.money(f.paymentId)).toMatchObject({ status: 'refunded', amountPaid: '0.00', refunded: '100.00' });
+  });
+
+  it('sends again with the same idempotency key when the processor fails once: refunded once', async () => {
+    const f = await cardPaid('Retry Once Lime');
+    fake.controls.failNext({
+      method: 'POST',
+      path: '/v1/refunds',
+      status: 500,
+      error: { type: 'api_error', message: 'Something went wrong.' },
+    });
+    const res = await f.refund(f.paymentId, { method: 'card', amount: '45.50' });
+    expect(res.status).toBe(201);
+    expect((await f.atProcessor()).map((r) => r.amount)).toEqual([4550]);
+  });
+
+  it('keeps a refund the processor has not finished as being sent back, and settles it from the processor’s event', async () => {
+    const f = await cardPaid('Pending Card Render');
+    fake.controls.refundsStayPending(true);
+    try {
+      const res = await f.refund(f.paymentId, { method: 'card', amount: '20.00' });
+      expect(res.status).toBe(201);
+      expect(res.body).toMatchObject({ status: 'pending', receiptNumber: null });
+      const [sent] = await f.atProcessor();
+      fake.controls.settleRefund(sent.id, 'succeeded');
+      await eventually(async () => (await f.money(f.paymentId)).refunded === '20.00', 'the pending refund settled by its event');
+      const [row] = (await f.agent.get(`/api/invoices/${f.invoiceId}`)).body.payments[0].refunds as RefundView[];
+      expect(row).toMatchObject({ status: 'succeeded', receiptNumber: 'RCT-0002' });
+    } finally {
+      fake.controls.refundsStayPending(false);
+    }
+  });
+
+  it('ten card refunds of 30.00 at once on a 100.00 payment: three reach the processor, 90.00 in all', async () => {
+    const f = await cardPaid('Ten Cards Plaster');
+    const answers = await Promise.all(Array.from({ length: 10 }, () => f.refund(f.paymentId, { method: 'card', amount: '30.00' })));
+    const statuses = answers.map((a) => a.status);
+    const sent = await f.atProcessor();
+    console.log(
+      [
+        'concurrent card refunds of one 100.00 payment (10 × 30.00)',
+        `  201: ${statuses.filter((s) => s === 201).length}, 400: ${statuses.filter((s) => s === 400).length}, other: ${statuses.filter((s) => s !== 201 && s !== 400).length}`,
+        `  at the processor: ${sent.length} refunds, ${sent.reduce((sum, r) => sum + r.amount, 0)} cents`,
+      ].join('\n'),
+    );
+    // 3 × 3000 = 9000 ≤ 10000 cents; a fourth would be 12000 (common practice, no source: never refund more than was paid)
+    expect(statuses.filter((s) => s === 201)).toHaveLength(3);
+    expect(statuses.filter((s) => s === 400)).toHaveLength(7);
+    expect(sent.map((r) => r.amount)).toEqual([3000, 3000, 3000]);
+    expect(await f.money(f.paymentId)).toMatchObject({ refunded: '90.00', amountPaid: '10.00' });
+  });
+});
