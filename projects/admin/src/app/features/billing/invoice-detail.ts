@@ -18,7 +18,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { DraftNotes } from './draft-notes';
 import { INVOICES_URL, InvoiceApi, creditNotePdfHref, invoicePdfHref } from './invoice-api';
-import { invoiceStatus, kindWord, takesPayments } from './invoice-words';
+import { invoiceStatus, kindWord, paymentRecordedWords, takesPayments } from './invoice-words';
 import { InvoicePayments, type RefundOutcome } from '../payments/invoice-payments';
 import { IssueDialog, type IssueDialogData, type IssueResult } from './issue-dialog';
 import { PaymentForm } from './payment-form';
@@ -112,7 +112,7 @@ export class InvoiceDetailPage {
 
   protected paymentRecorded(invoice: InvoiceDetail): void {
     this.isRecordingPayment.set(false);
-    this.show(invoice, invoice.status === 'paid' ? 'Payment recorded: the invoice is paid.' : 'Payment recorded.');
+    this.show(invoice, paymentRecordedWords(this.invoice()?.payments ?? [], invoice));
   }
 
   /** A refund changes the payment, the invoice's amounts and perhaps its status: read it again. */

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { filterOrder, invoiceNumber, invoiceStatus, kindWord, retainageWords, takesPayments } from './invoice-words';
+import { transferPayment } from '../payments/payment-fixtures';
+import { filterOrder, invoiceNumber, invoiceStatus, kindWord, paymentRecordedWords, retainageWords, takesPayments } from './invoice-words';
 
 describe('invoice words', () => {
   it.each([
@@ -54,5 +55,14 @@ describe('invoice words', () => {
     expect(retainageWords({ workPercent: 10, storedPercent: 10, stopAtPercentComplete: 50 })).toBe(
       '10 % of work, 10 % of stored materials, until 50 % complete',
     );
+  });
+
+  it('names the new payment’s receipt once it is recorded', () => {
+    const second = { ...transferPayment, id: 'pay-9', receiptNumber: 'RCT-0010' };
+    expect(paymentRecordedWords([transferPayment], { status: 'paid', payments: [transferPayment, second] })).toBe(
+      'Payment recorded as receipt RCT-0010: the invoice is paid.',
+    );
+    expect(paymentRecordedWords([], { status: 'part_paid', payments: [second] })).toBe('Payment recorded as receipt RCT-0010.');
+    expect(paymentRecordedWords([], { status: 'part_paid', payments: [{ ...second, receiptNumber: null }] })).toBe('Payment recorded.');
   });
 });

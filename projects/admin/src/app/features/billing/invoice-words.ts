@@ -5,7 +5,9 @@ import {
   type InvoiceKind,
   type InvoiceListFilter,
   type InvoiceStatus,
+  type InvoiceDetail,
   type InvoiceSummary,
+  type PaymentDetail,
   type PaymentMethod,
   type ProgressTable,
 } from '@layerbook/contracts/types';
@@ -60,3 +62,14 @@ export const PAYMENT_METHOD_LABELS: Readonly<Record<PaymentMethod, string>> = {
   transfer: 'Bank transfer',
   cash: 'Cash',
 };
+
+/** What the page says once a payment was recorded: its receipt number, and whether the invoice is now paid. */
+export function paymentRecordedWords(
+  before: readonly Pick<PaymentDetail, 'id'>[],
+  after: Pick<InvoiceDetail, 'status' | 'payments'>,
+): string {
+  const known = new Set(before.map((p) => p.id));
+  const receipt = after.payments.find((p) => !known.has(p.id))?.receiptNumber;
+  const recorded = receipt ? `Payment recorded as receipt ${receipt}` : 'Payment recorded';
+  return after.status === 'paid' ? `${recorded}: the invoice is paid.` : `${recorded}.`;
+}
