@@ -97,6 +97,14 @@ function auditText(r: AuditRow): string | null {
       return `Reminder for ${invoice} sent${step ? `, ${reminderStepWords(step)}` : ''}`;
     case 'invoice.payment_recorded':
       return `Payment recorded on ${invoice}`;
+    case 'invoice.refund_recorded':
+      return `Refund given back on ${invoice}`;
+    case 'invoice.refund_failed':
+      return `Refund on ${invoice} failed`;
+    case 'invoice.refund_needs_attention':
+      return `A refund on ${invoice} needs checking`;
+    case 'billing.deposit_left_for_office':
+      return 'Deposit not issued at acceptance: the billing schedule needs the office first';
     case 'credit_note.issued':
       return `Credit note${r.credit_note_number ? ` ${r.credit_note_number}` : ''} issued`;
     case 'change_order.created':

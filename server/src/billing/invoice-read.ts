@@ -172,6 +172,10 @@ const TRAIL_ORDER = [
   'invoice.sent',
   'invoice.reminded',
   'invoice.payment_recorded',
+  'invoice.refund_requested',
+  'invoice.refund_recorded',
+  'invoice.refund_failed',
+  'invoice.refund_needs_attention',
   'invoice.voided',
   'credit_note.issued',
 ];
@@ -193,7 +197,15 @@ function trailText(action: string, data: AuditData): string {
     case 'credit_note.issued':
       return `Credit note ${String(data['number'])} made`;
     case 'invoice.payment_recorded':
-      return `Payment of ${String(data['amount'])} received (${String(data['method'])})`;
+      return `Payment of ${String(data['amount'])} received (${String(data['method'])})${data['receipt'] ? `, receipt ${String(data['receipt'])}` : ''}`;
+    case 'invoice.refund_requested':
+      return `Refund of ${String(data['amount'])} asked for (${String(data['method'])})`;
+    case 'invoice.refund_recorded':
+      return `Refund of ${String(data['amount'])} given back${data['receipt'] ? `, receipt ${String(data['receipt'])}` : ''}`;
+    case 'invoice.refund_failed':
+      return `Refund of ${String(data['amount'])} failed: ${String(data['message'] ?? '')}`;
+    case 'invoice.refund_needs_attention':
+      return `A refund at the card processor needs checking: ${String(data['why'] ?? '')}`;
     case 'invoice.reminded':
       return `Reminder sent: ${reminderLabel(String(data['step'] ?? 'due'))}`;
     default:
