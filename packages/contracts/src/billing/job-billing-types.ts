@@ -180,7 +180,7 @@ export interface JobBillingView {
   readonly originalContractSum: string;
   readonly contractSum: string;
   readonly contractTax: string;
-  /** null until the office starts billing (the schedule is still the acceptance draft) */
+  /** null until billing starts: the office starts it, or acceptance does when the firm issues the deposit at acceptance (until then the schedule is the acceptance draft) */
   readonly billingStartedAt: string | null;
   /** the firm's current rule before billing starts, the job's copy after */
   readonly terms: BillingTerms;
