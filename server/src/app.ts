@@ -28,6 +28,8 @@ import { portalChangeOrderRoutes } from './billing/change-orders/portal-routes';
 import { billingSettingsRoutes, billingTodayRoutes, invoiceRoutes } from './billing/routes';
 import { jobBillingRoutes } from './billing/job-routes';
 import { progressRoutes } from './billing/progress-routes';
+import { cashExportRoutes } from './cash/exports/routes';
+import { cashRoutes } from './cash/routes';
 import { portalPaymentRoutes } from './payments/portal-routes';
 import { paymentRoutes } from './payments/routes';
 import { paymentWebhookRoutes } from './payments/webhook-routes';
@@ -102,6 +104,8 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/invoices', invoiceRoutes(ctx));
   router.use('/billing', billingTodayRoutes(ctx));
   router.use('/payments', paymentRoutes(ctx));
+  router.use('/cash/exports', cashExportRoutes(ctx));
+  router.use('/cash', cashRoutes(ctx));
   router.use('/jobs/:id/change-orders', jobChangeOrderRoutes(ctx));
   router.use('/change-orders', changeOrderRoutes(ctx));
   router.use('/jobs', progressRoutes(ctx));
