@@ -47,8 +47,8 @@ export function filterOrder(hasDrafts: boolean): readonly InvoiceListFilter[] {
   return hasDrafts ? ['drafts', ...INVOICE_LIST_FILTERS.filter((f) => f !== 'drafts')] : INVOICE_LIST_FILTERS;
 }
 
-/** Whether payments may be recorded against the invoice (issued and not settled or voided). */
-export const takesPayments = (status: InvoiceStatus): boolean => status === 'issued' || status === 'part_paid';
+/** Whether payments may be recorded against the invoice: issued and not settled or voided (a refunded one is owed again). */
+export const takesPayments = (status: InvoiceStatus): boolean => status === 'issued' || status === 'part_paid' || status === 'refunded';
 
 /** "10 % of work, 5 % of stored materials, until 50 % complete" */
 export function retainageWords(rates: ProgressTable['retainageRates']): string {

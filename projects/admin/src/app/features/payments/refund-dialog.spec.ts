@@ -125,6 +125,18 @@ describe('the refund dialog', () => {
     http.expectNone({ method: 'POST' });
   });
 
+  it('refuses a day before the payment was received, beside the field', async () => {
+    const { choose, field, type, submit, errorOf, http } = render(cardOverpayment);
+    choose('Cash (already handed back)');
+    const day = field('Given back on') as HTMLInputElement;
+    day.value = '11/23/2026'; // the payment came in on 2026-11-24
+    day.dispatchEvent(new Event('input'));
+    type('Why the money goes back', 'Paid twice');
+    await submit();
+    expect(errorOf('Given back on')).toBe('A refund cannot be dated before the payment was received.');
+    http.expectNone({ method: 'POST' });
+  });
+
   it('asks for a reason before sending', async () => {
     const { submit, errorOf, http } = render(cardOverpayment);
     await submit();
@@ -133,7 +145,7 @@ describe('the refund dialog', () => {
   });
 
   it('puts the server’s refusal beside the field it names', async () => {
-    const { fixture, type, choose, submit, errorOf, http, close } = render(cardOverpayment);
+    const { fixture, html, type, choose, submit, errorOf, http, close } = render(cardOverpayment);
     choose('Bank transfer (already sent)');
     type('Reference', 'x'.repeat(20));
     type('Why the money goes back', 'Paid twice');
@@ -145,6 +157,7 @@ describe('the refund dialog', () => {
         title: 'Check the highlighted fields.',
         status: 400,
         errors: [
+          { field: 'method', message: 'Online payments are not set up: record the refund as cheque, transfer or cash.' },
           { field: 'amount', message },
           { field: 'reference', message: 'The bank’s reference has at most 18 characters.' },
         ],
@@ -154,6 +167,9 @@ describe('the refund dialog', () => {
     await fixture.whenStable();
     fixture.detectChanges();
     expect(errorOf('Amount to give back')).toBe(message);
+    expect(html.querySelector('.how [role="alert"]')?.textContent?.trim()).toBe(
+      'Online payments are not set up: record the refund as cheque, transfer or cash.',
+    );
     expect(errorOf('Reference')).toBe('The bank’s reference has at most 18 characters.');
     expect(close).not.toHaveBeenCalled();
   });

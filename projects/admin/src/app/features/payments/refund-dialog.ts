@@ -12,7 +12,7 @@ import { MatRadioModule } from '@angular/material/radio';
 import { PAYMENT_LIMITS, type PaymentDetail, type PaymentMethod, type RefundCreate, type RefundView } from '@layerbook/contracts/types';
 import { formatMoney } from '@layerbook/domain';
 import { errorText } from '../../shared/forms/error-text';
-import { DATE_YEAR_WORDS, dateYearInRange, toIsoDate } from '../../shared/forms/iso-date';
+import { DATE_YEAR_WORDS, dateYearInRange, fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
 import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -68,6 +68,9 @@ export class RefundDialog {
   protected readonly methods = refundMethods(this.payment);
   protected readonly choiceWords = REFUND_CHOICE_WORDS;
   protected readonly methodLabels = PAYMENT_METHOD_LABELS;
+  /** a refund by hand is dated between the payment's day and today (the API checks the same in the firm's zone) */
+  protected readonly receivedOn = fromIsoDate(this.payment.receivedOn);
+  protected readonly today = new Date();
   protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   private readonly sent = signal(false);
@@ -113,6 +116,8 @@ export class RefundDialog {
     refundedOn: {
       required: 'Enter the day the money went back.',
       matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.',
+      matDatepickerMin: 'A refund cannot be dated before the payment was received.',
+      matDatepickerMax: 'A refund cannot be dated after today.',
       ...DATE_YEAR_WORDS,
     },
     reference: { maxlength: `Use at most ${PAYMENT_LIMITS.referenceMaxLength} characters.` },
