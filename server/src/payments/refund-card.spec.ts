@@ -154,6 +154,31 @@ describe('card refunds through the processor', () => {
     expect((await f.atProcessor()).map((r) => r.amount)).toEqual([4550]);
   });
 
+  it('keeps a refund the processor never answered as being sent back (502), and sending it again refunds once', async () => {
+    const f = await cardPaid('No Answer Glaze');
+    // the SDK tries three times (maxNetworkRetries 2), each answered 500
+    for (let i = 0; i < 3; i++) {
+      fake.controls.failNext({
+        method: 'POST',
+        path: '/v1/refunds',
+        status: 500,
+        error: { type: 'api_error', message: 'Something went wrong.' },
+      });
+    }
+    const res = await f.refund(f.paymentId, { method: 'card', amount: '25.00' });
+    expect([res.status, (res.body as Problem).title]).toEqual([502, 'The payment processor did not answer']);
+    const [pending] = (await f.agent.get(`/api/invoices/${f.invoiceId}`)).body.payments[0].refunds as RefundView[];
+    expect(pending).toMatchObject({ status: 'pending', amount: '25.00' });
+    expect(await f.atProcessor()).toHaveLength(0);
+
+    const again = await f.post(`/api/payments/refunds/${pending.id}/send`, {});
+    expect(again.status).toBe(200);
+    expect(again.body).toMatchObject({ id: pending.id, status: 'succeeded', receiptNumber: 'RCT-0002' });
+    expect((await f.atProcessor()).map((r) => r.amount)).toEqual([2500]);
+    expect((await f.post(`/api/payments/refunds/${pending.id}/send`, {})).status).toBe(409);
+    expect(await f.money(f.paymentId)).toMatchObject({ refunded: '25.00', amountPaid: '75.00' });
+  });
+
   it('keeps a refund the processor has not finished as being sent back, and settles it from the processor’s event', async () => {
     const f = await cardPaid('Pending Card Render');
     fake.controls.refundsStayPending(true);

@@ -32,6 +32,24 @@ export async function sendCardRefund(stripe: Stripe, tenantId: string, refund: C
   }
 }
 
+/**
+ * A pending card refund asked about again: the processor's refund read back when we know its id,
+ * else sent again with the same idempotency key (the processor answers with the refund it already
+ * made, if it made one, rather than making a second).
+ */
+export async function askAgain(
+  stripe: Stripe,
+  tenantId: string,
+  refund: CardRefundToSend & { readonly processorRefundId: string | null },
+): Promise<CardRefundAnswer> {
+  if (!refund.processorRefundId) return sendCardRefund(stripe, tenantId, refund);
+  try {
+    return { kind: 'answered', outcome: outcomeOf(await stripe.refunds.retrieve(refund.processorRefundId)) };
+  } catch (error) {
+    return { kind: 'unknown', message: error instanceof Error ? error.message : String(error) };
+  }
+}
+
 /** A processor refund object as our outcome: succeeded, failed (or canceled), or still on its way. */
 export function outcomeOf(refund: Stripe.Refund): RefundOutcome {
   switch (refund.status) {

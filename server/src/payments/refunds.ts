@@ -6,7 +6,7 @@ import { recordAudit } from '../audit/record';
 import { fitsCurrency, moneyOut } from '../billing/money';
 import { localDate } from '../firms/local-date';
 import type { Actor } from '../http/actor';
-import { badRequest, notFound } from '../http/problem';
+import { badRequest, conflict, notFound } from '../http/problem';
 import { toRefundView } from './payment-read';
 import type { ReceiptMailDeps } from './receipt-mail';
 import { settleRefund } from './refund-settle';
@@ -99,15 +99,18 @@ export async function startRefund(
     ],
   );
   const refundId = inserted.rows[0].id;
-  await recordAudit(tx, {
-    actorUserId: actor.userId,
-    actorKind: actor.kind,
-    action: 'invoice.refund_requested',
-    entity: 'invoice',
-    entityId: p.invoice_id,
-    data: { refundId, paymentId, amount: body.amount, method: body.method, reason: body.reason },
-  });
-  if (isCard) return { kind: 'card', send: { refundId, paymentIntentId: p.processor_payment_intent_id as string, processorAmount } };
+  if (isCard) {
+    // Asked of the processor now, settled when it answers (or by its event): the trail shows both steps.
+    await recordAudit(tx, {
+      actorUserId: actor.userId,
+      actorKind: actor.kind,
+      action: 'invoice.refund_requested',
+      entity: 'invoice',
+      entityId: p.invoice_id,
+      data: { refundId, paymentId, amount: new Decimal(body.amount).toFixed(2), method: body.method, reason: body.reason },
+    });
+    return { kind: 'card', send: { refundId, paymentIntentId: p.processor_payment_intent_id as string, processorAmount } };
+  }
   await settleRefund(tx, deps, actor, refundId, { status: 'succeeded' }, now);
   return { kind: 'recorded', view: await readRefund(tx, refundId) };
 }
@@ -166,4 +169,34 @@ export async function readRefund(tx: TenantTx, refundId: string): Promise<Refund
   );
   if (!rows[0]) throw notFound('refund');
   return toRefundView(rows[0]);
+}
+
+/** A pending card refund as it is sent again: by its own id (the same idempotency key), or looked up by the processor's id once known. */
+export async function pendingCardRefund(
+  tx: TenantTx,
+  refundId: string,
+): Promise<CardRefundToSend & { readonly processorRefundId: string | null }> {
+  const { rows } = await tx.client.query<{
+    status: string;
+    method: PaymentMethod;
+    amount: string;
+    currency: string;
+    processor_refund_id: string | null;
+    processor_payment_intent_id: string | null;
+  }>(
+    `select r.status, r.method, r.amount::text as amount, r.currency, r.processor_refund_id, p.processor_payment_intent_id
+       from refunds r join payments p on p.tenant_id = r.tenant_id and p.id = r.payment_id
+      where r.tenant_id = $1 and r.id = $2`,
+    [tx.tenantId, refundId],
+  );
+  const r = rows[0];
+  if (!r) throw notFound('refund');
+  if (r.status !== 'pending') throw conflict(`This refund is already ${r.status === 'succeeded' ? 'recorded' : 'marked failed'}.`);
+  if (r.method !== 'card' || !r.processor_payment_intent_id) throw conflict('Only a card refund is sent to the processor.');
+  return {
+    refundId,
+    paymentIntentId: r.processor_payment_intent_id,
+    processorAmount: toProcessorAmount(r.amount, r.currency),
+    processorRefundId: r.processor_refund_id,
+  };
 }
