@@ -95,8 +95,11 @@ export async function sessionOf(t: TestServer, firmId: string, checkoutId: strin
   });
 }
 
+/** A test server, or anything with its pool. */
+export type PoolHolder = { readonly ctx: { readonly pool: Pool } };
+
 /** What the books say of one invoice: its payments, receipts, credits and status. */
-export async function invoiceBooks(t: TestServer, firmId: string, invoiceId: string) {
+export async function invoiceBooks(t: PoolHolder, firmId: string, invoiceId: string) {
   return withTenant(t.ctx.pool, firmId, async (tx) => {
     const inv = (
       await tx.client.query<{ status: string; amount_paid: string }>(
@@ -123,7 +126,7 @@ export async function invoiceBooks(t: TestServer, firmId: string, invoiceId: str
 }
 
 /** The firm's stored processor events: how many, and how many applied, with their outcomes. */
-export async function storedEvents(t: TestServer, firmId: string) {
+export async function storedEvents(t: PoolHolder, firmId: string) {
   return withTenant(t.ctx.pool, firmId, async (tx) => {
     const { rows } = await tx.client.query<{
       id: string;

@@ -83,7 +83,7 @@ export async function reconcileEvents(
 }
 
 /** Queues again, firm by firm, each stored event not applied REQUEUE_AFTER_SECONDS after it arrived. */
-async function requeueUnapplied(pool: Pool, queue: JobQueue, now: Date): Promise<number> {
+export async function requeueUnapplied(pool: Pool, queue: JobQueue, now: Date): Promise<number> {
   const { rows: firms } = await pool.query<{ id: string }>(`select id from firms`);
   let requeued = 0;
   for (const firm of firms) {
