@@ -3,6 +3,7 @@ module.exports = {
   projects: [
     '<rootDir>/packages/domain/jest.config.cjs',
     '<rootDir>/packages/contracts/jest.config.cjs',
+    '<rootDir>/packages/stripe-fake/jest.config.cjs',
     '<rootDir>/server/jest.config.cjs',
   ],
   // A global option (ignored inside project configs): API tests wait for e-mails through real jobs.

@@ -19,3 +19,7 @@ externals=$(node -e "const p=require('./package.json');console.log(Object.keys({
 # shellcheck disable=SC2086
 npx esbuild server/src/main.ts server/src/seed/run.ts server/src/queue/cli.ts server/src/files/s3-fake-cli.ts --bundle --platform=node --target=node20 --format=cjs \
   $externals --outdir=server/dist --log-level=warning
+# The local Stripe stand-in's process (npm start and the e2e setup run it by PID).
+# shellcheck disable=SC2086
+npx esbuild packages/stripe-fake/src/cli.ts --bundle --platform=node --target=node20 --format=cjs \
+  $externals --outfile=packages/stripe-fake/dist/cli.js --log-level=warning

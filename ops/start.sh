@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
-# `npm start`: install what is missing, start PostgreSQL, the mail catcher and the S3 fake, migrate, seed the
-# demo firm, build, and serve both apps. Safe to run twice. Stop with `npm stop` (or Ctrl+C).
+# `npm start`: install what is missing, start PostgreSQL, the mail catcher, the S3 fake and the Stripe
+# stand-in, migrate, seed the demo firm, build, and serve both apps. Safe to run twice. Stop with `npm stop` (or Ctrl+C).
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
 cd "$LB_ROOT"
@@ -16,6 +16,16 @@ export PUBLIC_URL="${PUBLIC_URL:-http://localhost:$PORT}"
 if [ ! -s "$LB_DATA/session-secret" ]; then head -c 48 /dev/urandom | base64 | tr -d '\n/+=' > "$LB_DATA/session-secret"; fi
 export SESSION_SECRET="${SESSION_SECRET:-$(cat "$LB_DATA/session-secret")}"
 export NODE_ENV="${NODE_ENV:-development}" ROOT_DIR="$LB_ROOT"
+# Card payments go to the local Stripe stand-in (packages/stripe-fake) unless a real key is given:
+# set STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET and STRIPE_API_BASE (empty for Stripe itself) to change that.
+STRIPE_FAKE_PORT="${STRIPE_FAKE_PORT:-12111}"
+if [ -z "${STRIPE_SECRET_KEY:-}" ]; then
+  STRIPE_FAKE=1
+  export STRIPE_SECRET_KEY="sk_test_layerbook_local" STRIPE_WEBHOOK_SECRET="whsec_layerbook_local"
+  export STRIPE_API_BASE="http://127.0.0.1:$STRIPE_FAKE_PORT"
+else
+  STRIPE_FAKE=0
+fi
 
 # Mail catcher with a web inbox; started by PID, stopped by PID.
 if ! { [ -f "$LB_DATA/run/maildev.pid" ] && kill -0 "$(cat "$LB_DATA/run/maildev.pid")" 2>/dev/null; }; then
@@ -33,6 +43,14 @@ if ! { [ -f "$LB_DATA/run/s3.pid" ] && kill -0 "$(cat "$LB_DATA/run/s3.pid")" 2>
   for _ in $(seq 1 50); do curl -s -o /dev/null "$S3_ENDPOINT" && break; sleep 0.1; done
 fi
 
+# Stripe stand-in: Checkout's card page and signed webhooks to this server; started by PID, stopped by PID.
+if [ "$STRIPE_FAKE" = 1 ] && ! { [ -f "$LB_DATA/run/stripe.pid" ] && kill -0 "$(cat "$LB_DATA/run/stripe.pid")" 2>/dev/null; }; then
+  STRIPE_FAKE_WEBHOOK_URL="http://127.0.0.1:$PORT/api/payments/webhook" \
+    nohup node packages/stripe-fake/dist/cli.js --port "$STRIPE_FAKE_PORT" >"$LB_DATA/run/stripe.log" 2>&1 &
+  echo $! > "$LB_DATA/run/stripe.pid"
+  for _ in $(seq 1 50); do curl -s -o /dev/null "$STRIPE_API_BASE/_test/health" && break; sleep 0.1; done
+fi
+
 node server/dist/seed/run.js
 
 if [ -f "$LB_DATA/run/server.pid" ] && kill -0 "$(cat "$LB_DATA/run/server.pid")" 2>/dev/null; then
@@ -45,6 +63,7 @@ cat <<INFO
     client portal                 $PUBLIC_URL/portal/sign-in
     mail inbox (every e-mail)     http://localhost:$MAIL_WEB_PORT
     S3 fake (uploaded files)      $S3_ENDPOINT  (objects in .data/s3)
+$(if [ "$STRIPE_FAKE" = 1 ]; then printf '    Stripe stand-in (card pay)    %s  (card 4242 4242 4242 4242 pays, any future expiry and CVC;\n                                  4000 0000 0000 0002 is declined; log in .data/run/stripe.log)' "$STRIPE_API_BASE"; else printf '    card payments                 Stripe itself (STRIPE_SECRET_KEY is set)'; fi)
   Demo firm "Fernhollow Plaster & Glaze", password for every demo login: limewash-demo-2026
     owner   owner@fernhollow.example
     office  office@fernhollow.example

@@ -17,6 +17,7 @@ CHECKS=(
   "packages/contracts|npx tsc -p packages/contracts/tsconfig.json --noEmit"
   "packages/db|npx tsc -p packages/db/tsconfig.json --noEmit"
   "packages/domain|npx tsc -p packages/domain/tsconfig.json --noEmit"
+  "packages/stripe-fake|npx tsc -p packages/stripe-fake/tsconfig.json --noEmit"
   "domain bench|npx tsc -p ops/bench/domain/tsconfig.json --noEmit"
 )
 

@@ -54,6 +54,10 @@ export function e2eEnv(): NodeJS.ProcessEnv {
     SESSION_SECRET: 'e2e-session-secret-that-is-long-enough-0123',
     SMTP_PORT: String(E2E.smtpPort),
     S3_ENDPOINT: `http://127.0.0.1:${E2E.s3Port}`,
+    // Card payments through the local Stripe stand-in, started below on its own port.
+    STRIPE_SECRET_KEY: E2E.stripeSecretKey,
+    STRIPE_WEBHOOK_SECRET: E2E.stripeWebhookSecret,
+    STRIPE_API_BASE: `http://127.0.0.1:${E2E.stripePort}`,
     LOG_LEVEL: 'warn',
     DATABASE_URL: `postgres://layerbook_app:${pw('LB_APP_PASSWORD', 'layerbook-app-local')}@127.0.0.1:${port}/${E2E.db}`,
     DATABASE_OWNER_URL: `postgres://layerbook_owner:${pw('LB_OWNER_PASSWORD', 'layerbook-owner-local')}@127.0.0.1:${port}/${E2E.db}`,
@@ -67,7 +71,7 @@ export function e2eEnv(): NodeJS.ProcessEnv {
   return env;
 }
 
-/** Fresh database, demo seed, a mail catcher, the S3 fake and the built server — each started by PID. */
+/** Fresh database, demo seed, a mail catcher, the S3 fake, the Stripe stand-in and the built server — each started by PID. */
 export default async function globalSetup(): Promise<void> {
   execFileSync('bash', ['ops/pg-start.sh'], { cwd: root, stdio: 'inherit' });
   execFileSync('bash', ['ops/pg-createdb.sh', E2E.db, '--fresh'], { cwd: root, stdio: 'inherit' });
@@ -92,6 +96,27 @@ export default async function globalSetup(): Promise<void> {
   const s3Dir = path.join(root, E2E.stateDir, 's3');
   rmSync(s3Dir, { recursive: true, force: true });
   startByPid('s3', 'node', ['server/dist/files/s3-fake-cli.js', s3Dir, String(E2E.s3Port)], env);
+  // The stand-in keeps its sessions in memory: each run starts with none. Its CLI is bundled here so a
+  // run of one spec file does not need `npm run build` first.
+  const cli = 'packages/stripe-fake/dist/cli.js';
+  execFileSync(
+    'npx',
+    [
+      'esbuild',
+      'packages/stripe-fake/src/cli.ts',
+      '--bundle',
+      '--platform=node',
+      '--target=node20',
+      '--format=cjs',
+      '--packages=external',
+      `--outfile=${cli}`,
+    ],
+    { cwd: root, stdio: 'inherit' },
+  );
+  startByPid('stripe', 'node', [cli, '--port', String(E2E.stripePort)], {
+    ...env,
+    STRIPE_FAKE_WEBHOOK_URL: `http://127.0.0.1:${E2E.port}/api/payments/webhook`,
+  });
   execFileSync('node', ['server/dist/seed/run.js'], { cwd: root, env, stdio: 'inherit' });
   // The server creates its bucket at start-up, so the fake must answer first.
   await waitForAnswer(`http://127.0.0.1:${E2E.s3Port}/`, 15_000);
@@ -100,4 +125,5 @@ export default async function globalSetup(): Promise<void> {
     waitFor(`http://127.0.0.1:${E2E.mailWebPort}/`, 5_000),
   );
   await waitFor(`${E2E.baseUrl}/api/health`, 60_000);
+  await waitFor(`http://127.0.0.1:${E2E.stripePort}/_test/health`, 15_000);
 }

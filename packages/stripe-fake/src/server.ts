@@ -12,7 +12,7 @@ import { eventRoutes } from './routes/events';
 import { paymentRoutes } from './routes/payments';
 import { testControlRoutes } from './routes/test-controls';
 import { FakeState } from './state';
-import { DEFAULT_RETRY_DELAYS_MS, WebhookSender } from './webhooks';
+import { DEFAULT_RETRY_DELAYS_MS, type DeliveryAttempt, WebhookSender } from './webhooks';
 
 export interface StripeFakeOptions {
   /** 0 (the default) picks a free port. */
@@ -32,6 +32,8 @@ export interface StripeFakeOptions {
   publicBaseUrl?: string;
   /** The clock of created, expires_at and signature timestamps (tests pass the server's). */
   now?: () => Date;
+  /** Told of every webhook delivery attempt (the CLI logs them). */
+  onDeliveryAttempt?: (attempt: DeliveryAttempt) => void;
 }
 
 export interface StripeFake {
@@ -52,6 +54,7 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
     urls: [...(options.webhookUrls ?? [])],
     retryDelaysMs: options.retryDelaysMs ?? DEFAULT_RETRY_DELAYS_MS,
     timeoutMs: options.webhookTimeoutMs ?? 10_000,
+    onAttempt: options.onDeliveryAttempt,
   });
   const controls = createControls({ state, webhooks, refunds, failures });
   const host = options.host ?? '127.0.0.1';

@@ -27,6 +27,7 @@ export interface WebhookOptions {
   /** Waits before each retry; a failed delivery is tried 1 + retryDelaysMs.length times. */
   retryDelaysMs: number[];
   timeoutMs: number;
+  onAttempt?: (attempt: DeliveryAttempt) => void;
 }
 
 export const DEFAULT_RETRY_DELAYS_MS = [1_000, 2_000, 4_000, 8_000, 16_000, 32_000, 64_000];
@@ -148,6 +149,7 @@ export class WebhookSender {
       this.inFlight--;
     }
     this.attempts.push(record);
+    this.options.onAttempt?.(record);
     return record;
   }
 
