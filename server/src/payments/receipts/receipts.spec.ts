@@ -142,6 +142,15 @@ describe('receipt e-mails', () => {
     expect(await outbox(f.firmId, `receipt:refund:${f.refundId}`)).toHaveLength(1);
   });
 
+  it('e-mails the receipt of a cheque the office records', async () => {
+    const f = await receiptsJob('Office Cheque Lime');
+    const [mail] = await outbox(f.firmId, `receipt:payment:${f.cheque}`);
+    expect(mail.subject).toBe('Receipt RCT-0001 — Office Cheque Lime');
+    // 250.00 − 100.00 = 150.00 due right after the cheque; the mail is written then
+    expect(mail.text).toContain(`received ${usd('100.00')} from you by cheque 1042 on December 4, 2026 for invoice INV-0001`);
+    expect(mail.text).toContain(`${usd('150.00')} is still due on invoice INV-0001.`);
+  });
+
   it('e-mails a payment’s receipt with the credit kept and what is still due', async () => {
     const f = await receiptsJob('Payment Mail Glaze');
     await withTenant(t.ctx.pool, f.firmId, (tx) => enqueueReceiptMail(tx, t.ctx, { kind: 'payment', id: f.transfer }));
