@@ -27,3 +27,4 @@ export * from './billing/settings';
 export * from './billing/schedule';
 export * from './billing/invoices';
 export * from './payments/payments';
+export * from './cash/cash';

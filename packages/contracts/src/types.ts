@@ -31,3 +31,4 @@ export * from './billing/invoice-types';
 export * from './billing/change-order-types';
 export * from './billing/portal-billing-types';
 export * from './payments/payment-types';
+export * from './cash/cash-types';

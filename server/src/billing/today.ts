@@ -1,9 +1,23 @@
-import type { BillingToday } from '@layerbook/contracts';
+import type { BillingToday, PaymentMethod } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { SUMMARY_FROM, summaryColumns, type SummaryRow, toSummary } from './invoice-read';
+import { receiptNumber } from '../payments/payment-read';
 import { moneyOut } from './money';
 
 const LIMIT = 50;
+
+interface ReceivedRow {
+  id: string;
+  receipt_no: number | null;
+  client_id: string;
+  client_name: string;
+  invoice_id: string;
+  number_text: string | null;
+  amount: string;
+  currency: string;
+  method: PaymentMethod;
+  received_on: string;
+}
 
 /** GET /api/billing/today — drafts to review (queue-drafted first, oldest first), overdue invoices, change orders waiting for the client. */
 export async function billingToday(tx: TenantTx, now: Date): Promise<BillingToday> {
@@ -34,6 +48,15 @@ export async function billingToday(tx: TenantTx, now: Date): Promise<BillingToda
       where co.tenant_id = $1 and co.status = 'sent' order by co.sent_at limit ${LIMIT}`,
     [tx.tenantId],
   );
+  const received = await tx.client.query<ReceivedRow>(
+    `${clock} select p.id, p.receipt_no, p.client_id, c.name as client_name, p.invoice_id, i.number_text, p.amount::text as amount,
+            p.currency, p.method, p.received_on::text as received_on
+       from payments p join clients c on c.tenant_id = p.tenant_id and c.id = p.client_id
+       join invoices i on i.tenant_id = p.tenant_id and i.id = p.invoice_id
+      where p.tenant_id = $1 and p.received_on >= (select today from clock) - 1
+      order by p.received_on desc, p.created_at desc limit ${LIMIT}`,
+    [tx.tenantId, now],
+  );
   return {
     readyToBill: ready.rows.map(toSummary),
     overdue: overdue.rows.map(toSummary),
@@ -46,6 +69,18 @@ export async function billingToday(tx: TenantTx, now: Date): Promise<BillingToda
       amount: moneyOut(c.amount, c.currency),
       currency: c.currency,
       sentAt: c.sent_at.toISOString(),
+    })),
+    paymentsReceived: received.rows.map((p) => ({
+      paymentId: p.id,
+      receiptNumber: receiptNumber(p.receipt_no),
+      clientId: p.client_id,
+      clientName: p.client_name,
+      invoiceId: p.invoice_id,
+      invoiceNumber: p.number_text,
+      amount: moneyOut(p.amount, p.currency),
+      currency: p.currency,
+      method: p.method,
+      receivedOn: p.received_on,
     })),
   };
 }

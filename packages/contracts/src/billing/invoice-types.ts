@@ -4,6 +4,7 @@
  * note. Money: decimal strings in `currency`.
  */
 
+import type { PaymentReceivedToday } from '../cash/cash-types';
 import type { ClientCreditView, PaymentDetail } from '../payments/payment-types';
 
 export const INVOICE_KINDS = ['deposit', 'milestone', 'progress', 'retainage', 'final'] as const;
@@ -226,4 +227,6 @@ export interface BillingToday {
     readonly currency: string;
     readonly sentAt: string;
   }>;
+  /** payments received yesterday or today in the firm's zone, newest first */
+  readonly paymentsReceived: readonly PaymentReceivedToday[];
 }
