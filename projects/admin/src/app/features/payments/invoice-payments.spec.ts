@@ -55,7 +55,7 @@ describe('the payments on an invoice', () => {
     const { payment, facts } = render(paidInvoice);
     const first = payment(0);
     expect(first.querySelector('h3')?.textContent?.trim()).toBe('$1,000.00 by bank transfer, Nov 20, 2026');
-    expect(facts(first)).toEqual(['Receipt: RCT-0007', 'Reference: BACS 4471', 'On this invoice: $1,000.00']);
+    expect(facts(first)).toEqual(['Receipt: RCT-0007', 'Reference: BACS 4471', 'Went on this invoice: $1,000.00']);
     const receipt = first.querySelector<HTMLAnchorElement>('a[href="/api/payments/pay-1/receipt.pdf"]');
     expect(receipt?.textContent).toContain('Receipt RCT-0007 (PDF)');
     expect(receipt?.querySelector('mat-icon')?.getAttribute('aria-hidden')).toBe('true');
@@ -67,7 +67,7 @@ describe('the payments on an invoice', () => {
     const second = payment(1);
     expect(facts(second)).toEqual([
       'Receipt: RCT-0008',
-      'On this invoice: $380.00',
+      'Went on this invoice: $380.00',
       'Kept as credit: $120.00 for Hattie Brambleton',
       'Refunded: $50.00',
       'Can still be refunded: $450.00',
