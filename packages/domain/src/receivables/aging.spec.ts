@@ -1,5 +1,5 @@
 import { expectInputError } from '../errors/expect-input-error';
-import { ageReceivables } from './aging';
+import { ageReceivables, bucketFor } from './aging';
 
 /** DOMAIN.md §2.12 [D]; buckets by days past due are an accounting convention (common practice). */
 describe('receivables aging', () => {
@@ -45,6 +45,10 @@ describe('receivables aging', () => {
     expect(r.invoices[1].bucket).toBe('1-30'); // 30 days past due is still 1–30
     expect(r.retainage.toFixed(2)).toBe('1890.00');
     expect(r.total.toFixed(2)).toBe('7110.00');
+  });
+
+  it('30 days past due is the last day of 1–30; 31 opens 31–60; the due day itself is current (common practice, no source)', () => {
+    expect([0, 1, 30, 31, 60, 61, 90, 91].map(bucketFor)).toEqual(['current', '1-30', '1-30', '31-60', '31-60', '61-90', '61-90', '90+']);
   });
 
   it('names bad fields', () => {

@@ -34,6 +34,7 @@ describe('cash forecast by ISO week (common practice, DOMAIN.md §2.14)', () => 
       ['2025-07-21', '2025-W30', '0.00', '0.00', '0.00', '0.00'],
     ]);
     expect(forecast.beyondHorizon.toFixed(2)).toBe('500.00');
+    expect(Object.values(forecast.beyond).map((d) => d.toFixed(2))).toEqual(['0.00', '0.00', '500.00']);
   });
 
   it('names bad fields', () => {

@@ -35,14 +35,20 @@ export interface ForecastWeek {
   total: Decimal;
 }
 
-type Stream = 'invoices' | 'milestones' | 'pipeline';
+export type ForecastStream = 'invoices' | 'milestones' | 'pipeline';
+type Stream = ForecastStream;
 
 /**
  * Cash expected per ISO week (Monday start) from the as-of week on: open invoices at their due
  * dates, milestones at their dates, pipeline deposits weighted by probability. Amounts past the
  * horizon are totalled apart; weekly figures are rounded to the currency's minor unit.
  */
-export function cashForecast(input: CashForecastInput): { weeks: ForecastWeek[]; beyondHorizon: Decimal } {
+export function cashForecast(input: CashForecastInput): {
+  weeks: ForecastWeek[];
+  /** Σ beyond, by stream, each rounded to the currency */
+  beyond: Record<Stream, Decimal>;
+  beyondHorizon: Decimal;
+} {
   const count = requireInteger(input.weeks, 'weeks', 1, 'number of weeks');
   const firstMonday = mondayOf(toDayNumber(input.asOf, 'asOf'));
   const sums: Record<Stream, Decimal[]> = {
@@ -50,7 +56,7 @@ export function cashForecast(input: CashForecastInput): { weeks: ForecastWeek[];
     milestones: Array.from({ length: count }, () => new Decimal(0)),
     pipeline: Array.from({ length: count }, () => new Decimal(0)),
   };
-  let beyond = new Decimal(0);
+  const beyondSums: Record<Stream, Decimal> = { invoices: new Decimal(0), milestones: new Decimal(0), pipeline: new Decimal(0) };
   // Most receipts share a handful of probabilities: parse each once. Only values that passed
   // are kept, so a bad one still fails at its first receipt, naming that receipt's field.
   const ratios = new Map<Ratio, Decimal>();
@@ -70,7 +76,7 @@ export function cashForecast(input: CashForecastInput): { weeks: ForecastWeek[];
       const amount = toNonNegativeMoney(r.amount, `${at}.amount`);
       const expected = r.probability === undefined ? amount : amount.times(ratioOf(r.probability, `${at}.probability`));
       const week = Math.max(0, Math.floor((toDayNumber(r.date, `${at}.date`) - firstMonday) / 7));
-      if (week >= count) beyond = beyond.plus(expected);
+      if (week >= count) beyondSums[stream] = beyondSums[stream].plus(expected);
       else sums[stream][week] = sums[stream][week].plus(expected);
     });
   };
@@ -92,5 +98,10 @@ export function cashForecast(input: CashForecastInput): { weeks: ForecastWeek[];
       total: invoices.plus(milestones).plus(pipeline),
     });
   }
-  return { weeks, beyondHorizon: roundToCurrency(beyond, input.currency) };
+  const beyond = {
+    invoices: roundToCurrency(beyondSums.invoices, input.currency),
+    milestones: roundToCurrency(beyondSums.milestones, input.currency),
+    pipeline: roundToCurrency(beyondSums.pipeline, input.currency),
+  };
+  return { weeks, beyond, beyondHorizon: beyond.invoices.plus(beyond.milestones).plus(beyond.pipeline) };
 }
