@@ -1,22 +1,20 @@
-import type { Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import type { CheckoutStart, CheckoutStatus } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
-import { startStripeFake, type StripeFake } from '@layerbook/stripe-fake';
+import type { StripeFake } from '@layerbook/stripe-fake';
 import { Pool } from 'pg';
 import { acceptedJob, insertInvoice, type InvoiceSpec } from '../billing/pdf/invoice-fixtures';
-import { startTestServer, type TestServer } from '../testing/harness';
+import { startTestServer, TEST_STRIPE, type TestServer } from '../testing/harness';
 import { testDatabaseUrls } from '../testing/test-env';
 import { processorFor } from './processor';
 import { reconcileEvents } from './reconcile';
 
 /**
- * Test set-up for the online payment specs (no spec of its own): a test server that talks to the
- * local Stripe stand-in, listening on a port so the stand-in's signed webhooks reach it, and a
+ * Test set-up for the online payment specs (no spec of its own): a test server that talks to its
+ * local Stripe stand-in, whose signed webhooks reach the server's port, and a
  * client's issued invoice with helpers to start, pay and follow a checkout through the API.
  */
 
-export const WEBHOOK_SECRET = 'whsec_layerbook_payments_spec';
+export const WEBHOOK_SECRET = TEST_STRIPE.webhookSecret;
 
 export interface PaymentsServer {
   readonly t: TestServer;
@@ -29,28 +27,17 @@ export interface PaymentsServer {
   stop(): Promise<void>;
 }
 
+/** A test server with online payments on, through its own Stripe stand-in (the harness's). */
 export async function startPaymentsServer(): Promise<PaymentsServer> {
-  const fake = await startStripeFake({ port: 0, webhookSecret: WEBHOOK_SECRET, retryDelaysMs: [50, 100, 200] });
-  const t = await startTestServer({
-    STRIPE_SECRET_KEY: 'sk_test_layerbook_payments_spec',
-    STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
-    STRIPE_API_BASE: fake.baseUrl,
-  });
-  const server: Server = await new Promise((resolve) => {
-    const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
-  });
-  const webhookUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/payments/webhook`;
-  fake.controls.setWebhookUrls([webhookUrl]);
+  const t = await startTestServer({}, { onlinePayments: true });
   const jobsPool = new Pool({ connectionString: testDatabaseUrls().DATABASE_JOBS_URL, max: 3 });
   return {
     t,
-    fake,
-    webhookUrl,
+    fake: t.stripe,
+    webhookUrl: `${t.baseUrl}/api/payments/webhook`,
     jobsPool,
     reconcile: (now = t.ctx.now()) => reconcileEvents(jobsPool, t.queue, processorFor(t.ctx.config)!, now),
     async stop() {
-      await fake.stop();
-      await new Promise((resolve) => server.close(resolve));
       await jobsPool.end();
       await t.stop();
     },

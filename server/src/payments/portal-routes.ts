@@ -5,6 +5,7 @@ import type { AppContext } from '../context';
 import { parse } from '../http/validate';
 import { startCheckout } from './checkout';
 import { checkoutStatus } from './checkout-status';
+import { mountPortalReceiptRoutes } from './receipts/receipt-routes';
 
 const invoiceParam = z.strictObject({ id: uuid('invoice id') });
 const checkoutParam = z.strictObject({ id: uuid('invoice id'), checkoutId: uuid('payment id') });
@@ -26,5 +27,6 @@ export function portalPaymentRoutes(ctx: AppContext): Router {
     res.json((await checkoutStatus(ctx, req, id, checkoutId)) satisfies CheckoutStatus);
   });
 
+  mountPortalReceiptRoutes(router, ctx);
   return router;
 }
