@@ -113,6 +113,21 @@ describe('receipt PDFs', () => {
     expect((await other.agent.get(`/api/payments/refunds/${f.refundId}/receipt.pdf`)).status).toBe(404);
   });
 
+  it('gives the signed-in client their own receipt PDFs in the portal, and another client a 404', async () => {
+    const f = await receiptsJob('Portal Receipts Plaster');
+    const payment = await binary(f.client.agent, `/api/portal/payments/${f.cheque}/receipt.pdf`);
+    expect(payment.status).toBe(200);
+    expect(textOf(payment.body)).toContain('Receipt RCT-0001');
+    const refund = await binary(f.client.agent, `/api/portal/refunds/${f.refundId}/receipt.pdf`);
+    expect(refund.status).toBe(200);
+    expect(textOf(refund.body)).toContain('Refund RCT-0002');
+    const neighbour = await otherClientOf(t, f);
+    expect((await neighbour.agent.get(`/api/portal/payments/${f.cheque}/receipt.pdf`)).status).toBe(404);
+    expect((await neighbour.agent.get(`/api/portal/refunds/${f.refundId}/receipt.pdf`)).status).toBe(404);
+    // staff sessions do not open the portal's copies, nor a client the office's
+    expect((await f.client.agent.get(`/api/payments/${f.cheque}/receipt.pdf`)).status).toBe(401);
+  });
+
   it('lists an invoice’s receipts for the portal in number order, refunds beside payments', async () => {
     const f = await receiptsJob('Listed Receipts Co');
     const list = await withTenant(t.ctx.pool, f.firmId, (tx) => listPortalReceipts(tx, f.invoiceId));
