@@ -14,6 +14,10 @@ export interface FailNext {
   path: string;
   status: number;
   error: StripeErrorBody;
+  /** How many matching calls fail (1 by default): the SDK retries a 409 or 5xx by itself. */
+  times?: number;
+  /** Sent as Stripe-Should-Retry, which the SDK obeys (Stripe sends false when a retry cannot help). */
+  shouldRetry?: boolean;
 }
 
 /** Test controls: pay without a browser, and make webhooks arrive twice, late, badly signed or out of order. */
@@ -49,7 +53,7 @@ export interface StripeFakeControls {
   refundsStayPending(pending: boolean): void;
   /** Finishes a pending refund: succeeded (refund.updated, charge.refund.updated) or failed (refund.failed). */
   settleRefund(refundId: string, outcome: 'succeeded' | 'failed'): Stripe.Refund;
-  /** The next API call matching method and path answers this error once (e.g. a 402 on POST /v1/refunds). */
+  /** The next API call(s) matching method and path answer this error (e.g. a 402 on POST /v1/refunds). */
   failNext(failure: FailNext): void;
 }
 

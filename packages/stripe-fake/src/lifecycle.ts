@@ -129,7 +129,7 @@ export function cardEntry(input: {
   let expMonth = Number(input.exp_month ?? NaN);
   let expYear = Number(input.exp_year ?? NaN);
   if (typeof input.expiry === 'string') {
-    const m = /^\s*(\d{1,2})\s*\/\s*(\d{2}|\d{4})\s*$/.exec(input.expiry);
+    const m = /^\s*(\d{1,2})\s*[/\s-]?\s*(\d{2}|\d{4})\s*$/.exec(input.expiry);
     expMonth = m ? Number(m[1]) : NaN;
     expYear = m ? Number(m[2]) : NaN;
   }

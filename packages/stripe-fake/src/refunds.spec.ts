@@ -1,5 +1,5 @@
 import Stripe from 'stripe';
-import { createSession, type Rig, startRig } from './spec-helpers';
+import { createSession, type Rig, SECRET_KEY, startRig } from './spec-helpers';
 
 // Refunds, customers and events through the real stripe SDK, as the server calls them.
 describe('refunds, customers and events through the stripe SDK', () => {
@@ -93,7 +93,17 @@ describe('refunds, customers and events through the stripe SDK', () => {
       error: { type: 'card_error', code: 'expired_card', message: 'The card this payment was made with has expired.' },
     });
     await expect(rig.stripe.refunds.create({ payment_intent: pi })).rejects.toBeInstanceOf(Stripe.errors.StripeCardError);
-    expect((await rig.stripe.refunds.create({ payment_intent: pi })).status).toBe('succeeded');
+    // A server error the SDK would retry (maxNetworkRetries 2) fails every try when told so.
+    rig.fake.controls.failNext({
+      method: 'POST',
+      path: '/v1/refunds',
+      status: 500,
+      times: 3,
+      error: { type: 'api_error', message: 'Down.' },
+    });
+    const retrying = new Stripe(SECRET_KEY, { host: '127.0.0.1', port: rig.fake.port, protocol: 'http', maxNetworkRetries: 2 });
+    await expect(retrying.refunds.create({ payment_intent: pi })).rejects.toBeInstanceOf(Stripe.errors.StripeAPIError);
+    expect((await retrying.refunds.create({ payment_intent: pi })).status).toBe('succeeded');
   });
 
   it('creates and retrieves customers, and opens a session for one', async () => {

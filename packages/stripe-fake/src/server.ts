@@ -65,10 +65,12 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
   app.set('query parser', (query: string) => decodeForm(query));
   app.use(browserRoutes(state));
   app.use(testControlRoutes(controls));
-  app.use('/v1', plumbing(), authenticate(options.secretKey), (req, _res, next) => {
-    const at = failures.findIndex((f) => f.method.toUpperCase() === req.method && f.path === `/v1${req.path}`);
-    if (at < 0) return next();
-    const [failure] = failures.splice(at, 1);
+  app.use('/v1', plumbing(), authenticate(options.secretKey), (req, res, next) => {
+    const failure = failures.find((f) => f.method.toUpperCase() === req.method && f.path === `/v1${req.path}`);
+    if (!failure) return next();
+    failure.times = (failure.times ?? 1) - 1;
+    if (failure.times <= 0) failures.splice(failures.indexOf(failure), 1);
+    if (failure.shouldRetry !== undefined) res.set('stripe-should-retry', String(failure.shouldRetry));
     next(new StripeFakeError(failure.status, failure.error));
   });
   app.use(checkoutRoutes(state, store, () => options.publicBaseUrl ?? baseUrl));
