@@ -122,8 +122,8 @@ export class InvoiceDetailPage {
     this.loaded.reload();
   }
 
+  /** while a refund is on its way back to a card: what was said stays said */
   protected readAgain(): void {
-    this.done.set(null);
     this.loaded.reload();
   }
 

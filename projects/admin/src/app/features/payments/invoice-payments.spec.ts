@@ -8,7 +8,7 @@ import type { InvoiceDetail, RefundView } from '@layerbook/contracts/types';
 import { of } from 'rxjs';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { progressDraft } from '../billing/invoice-fixtures';
-import { type RefundOutcome, InvoicePayments } from './invoice-payments';
+import { type RefundOutcome, InvoicePayments, PENDING_CHECKS, PENDING_CHECK_MS } from './invoice-payments';
 import { cardOverpayment, cardRefundPending, chequeRefund, creditGivenBack, overpaymentCredit, transferPayment } from './payment-fixtures';
 
 const paidInvoice: InvoiceDetail = {
@@ -115,6 +115,37 @@ describe('the payments on an invoice', () => {
     fixture.componentInstance.checkAgain.subscribe(checks);
     html.querySelector<HTMLButtonElement>('.lb-notice button')!.click();
     expect(checks).toHaveBeenCalled();
+  });
+
+  it('reads the invoice again by itself every few seconds while a refund is on its way, for about a minute', () => {
+    vi.useFakeTimers();
+    try {
+      const onItsWay = { ...paidInvoice, payments: [{ ...cardOverpayment, refunds: [cardRefundPending] }] };
+      const { fixture } = render(onItsWay);
+      const checks = vi.fn();
+      fixture.componentInstance.checkAgain.subscribe(checks);
+      vi.advanceTimersByTime(PENDING_CHECK_MS);
+      expect(checks).toHaveBeenCalledTimes(1);
+      // each answer still pending asks again, up to the limit
+      for (let i = 0; i < PENDING_CHECKS + 3; i++) {
+        fixture.componentRef.setInput('invoice', { ...onItsWay });
+        fixture.detectChanges();
+        vi.advanceTimersByTime(PENDING_CHECK_MS);
+      }
+      expect(checks).toHaveBeenCalledTimes(PENDING_CHECKS);
+      // settled: no more asking
+      checks.mockClear();
+      TestBed.resetTestingModule();
+      const settled = render({
+        ...paidInvoice,
+        payments: [{ ...cardOverpayment, refunds: [{ ...cardRefundPending, status: 'succeeded' }] }],
+      });
+      settled.fixture.componentInstance.checkAgain.subscribe(checks);
+      vi.advanceTimersByTime(PENDING_CHECK_MS * 3);
+      expect(checks).not.toHaveBeenCalled();
+    } finally {
+      vi.useRealTimers();
+    }
   });
 
   it('says a failed refund failed, in words and with its reason', () => {

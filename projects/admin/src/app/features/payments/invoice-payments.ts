@@ -1,5 +1,5 @@
-import { DatePipe, LowerCasePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input, output } from '@angular/core';
+import { DatePipe, LowerCasePipe, isPlatformBrowser } from '@angular/common';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, PLATFORM_ID, computed, effect, inject, input, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
@@ -15,6 +15,10 @@ import { paymentReceiptHref, refundReceiptHref } from './payment-api';
 import { creditKept, paymentParts } from './payment-money';
 import { REFUND_METHOD_WORDS, refundDoneWords, refundStatusLook } from './payment-words';
 import { RefundDialog, type RefundDialogData } from './refund-dialog';
+
+/** While a refund is on its way back to a card, the invoice is read again this often, this many times (about a minute). */
+export const PENDING_CHECK_MS = 5000;
+export const PENDING_CHECKS = 12;
 
 /** What a refund did, for the page to say once and show the invoice as it is now. */
 export interface RefundOutcome {
@@ -40,7 +44,7 @@ export class InvoicePayments {
   readonly invoice = input.required<InvoiceDetail>();
   /** after a refund was asked for (done, on its way, or refused by the processor): the invoice should be read again */
   readonly refunded = output<RefundOutcome>();
-  /** "Check again" while a refund is on its way back to a card */
+  /** "Check again" while a refund is on its way back to a card (also asked by itself every few seconds for a minute) */
   readonly checkAgain = output();
 
   protected readonly rows = computed(() => this.invoice().payments.map((payment) => ({ payment, parts: paymentParts(payment) })));
@@ -55,6 +59,22 @@ export class InvoicePayments {
   protected readonly isZero = (amount: string, currency: string): boolean => roundsToZero(amount, currency);
   protected readonly isNegative = (amount: string): boolean => amount.trim().startsWith('-');
   protected readonly withoutSign = (amount: string): string => amount.trim().replace(/^-/, '');
+
+  private checksLeft = PENDING_CHECKS;
+
+  constructor() {
+    const inBrowser = isPlatformBrowser(inject(PLATFORM_ID));
+    // Each answer is a new invoice: while a refund is still pending, ask once more a little later.
+    effect((onCleanup) => {
+      this.invoice();
+      if (!inBrowser || !this.hasPending() || this.checksLeft <= 0) return;
+      const timer = setTimeout(() => {
+        this.checksLeft -= 1;
+        this.checkAgain.emit();
+      }, PENDING_CHECK_MS);
+      onCleanup(() => clearTimeout(timer));
+    });
+  }
 
   protected async openRefund(payment: PaymentDetail): Promise<void> {
     const invoice = this.invoice();
