@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { overdueWords } from './money-words';
+import { overdueWords, receivedWords } from './money-words';
 
 describe('overdueWords', () => {
   it.each([
@@ -14,5 +14,18 @@ describe('overdueWords', () => {
     ['2026-12-01', null, null],
   ])('due %s, today %s: %s', (dueOn, today, expected) => {
     expect(overdueWords(dueOn, today)).toBe(expected);
+  });
+});
+
+describe('receivedWords', () => {
+  it.each([
+    ['2026-12-02', '2026-12-02', 'today'],
+    ['2026-12-01', '2026-12-02', 'yesterday'],
+    // across a month end: calendar days in the firm's zone, never hours
+    ['2026-11-30', '2026-12-01', 'yesterday'],
+    ['2026-11-30', '2026-12-02', null],
+    ['2026-12-01', null, null],
+  ])('received %s, today %s: %s', (receivedOn, today, expected) => {
+    expect(receivedWords(receivedOn, today)).toBe(expected);
   });
 });

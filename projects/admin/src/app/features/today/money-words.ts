@@ -10,3 +10,11 @@ export function overdueWords(dueOn: string | null, today: string | null): string
   if (days <= 0) return null;
   return days === 1 ? '1 day overdue' : `${days} days overdue`;
 }
+
+/** A payment's day said against the firm's today: "today", "yesterday", or null for any other day (then shown as a date). */
+export function receivedWords(receivedOn: string, today: string | null): 'today' | 'yesterday' | null {
+  const days = today ? daysBetween(receivedOn, today) : null;
+  if (days === 0) return 'today';
+  if (days === 1) return 'yesterday';
+  return null;
+}

@@ -4,16 +4,17 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { INVOICE_KIND_LABELS, type BillingToday } from '@layerbook/contracts/types';
+import { INVOICE_KIND_LABELS, PAYMENT_METHOD_LABELS, type BillingToday } from '@layerbook/contracts/types';
 import { loadMessage } from '../../shared/forms/load-message';
 import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { overdueWords } from './money-words';
+import { overdueWords, receivedWords } from './money-words';
 
 /**
  * Today's money, for owners and the office (Today never shows it to the crew, and the API refuses
- * them): drafts ready to bill, invoices past due, change orders waiting for the client.
+ * them): drafts ready to bill, invoices past due, payments received since yesterday, change orders
+ * waiting for the client.
  */
 @Component({
   selector: 'lb-today-money',
@@ -31,4 +32,6 @@ export class TodayMoney {
   protected readonly message = loadMessage(this.money);
   protected readonly kindLabels = INVOICE_KIND_LABELS;
   protected readonly overdueWords = overdueWords;
+  protected readonly receivedWords = receivedWords;
+  protected readonly methodLabels = PAYMENT_METHOD_LABELS;
 }

@@ -41,6 +41,20 @@ const money: BillingToday = {
       sentAt: '2026-11-30T09:00:00.000Z',
     },
   ],
+  paymentsReceived: [
+    {
+      paymentId: 'pay-1',
+      receiptNumber: 'R-0012',
+      clientId: 'client-1',
+      clientName: 'Ada Ward',
+      invoiceId: 'inv-1',
+      invoiceNumber: 'INV-0007',
+      amount: '1500.00',
+      currency: 'USD',
+      method: 'cheque',
+      receivedOn: '2026-12-01',
+    },
+  ],
 };
 const inquiries: TodayView = {
   localDate: '2026-12-02',
@@ -90,6 +104,10 @@ describe('Today', () => {
     expect(text()).toContain('Deposit for Ada Ward');
     expect(text()).toContain('12 days overdue');
     expect(text()).toContain('Change order 2: Stair wall');
+    expect(text()).toContain('Payments received since yesterday (1)');
+    expect(text()).toContain('Receipt R-0012 · Ada Ward');
+    expect(text()).toContain('$1,500.00 Cheque');
+    expect(text()).toContain('for INV-0007 · received yesterday');
     const links = [...html().querySelectorAll('a')].map((a) => a.getAttribute('href'));
     expect(links).toContain('/billing/invoices/inv-2');
     expect(links).toContain('/billing/invoices/inv-1');
