@@ -1,45 +1,25 @@
-import type { Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import type { Problem, RefundView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
-import { startStripeFake, type StripeFake } from '@layerbook/stripe-fake';
+import type { StripeFake } from '@layerbook/stripe-fake';
 import type Stripe from 'stripe';
 import { startTestServer, type TestServer } from '../testing/harness';
 import { processorFor } from './processor';
 import { issuedInvoice } from './refund-fixtures';
 
-const WEBHOOK_SECRET = 'whsec_layerbook_refund_spec';
 let t: TestServer;
 let fake: StripeFake;
-let server: Server;
 let stripe: Stripe;
 
 beforeAll(async () => {
-  // The stand-in signs its webhooks on the server's clock, or the signature check would find them stale.
-  fake = await startStripeFake({
-    port: 0,
-    webhookSecret: WEBHOOK_SECRET,
-    retryDelaysMs: [50, 100, 200],
-    now: () => (t ? t.ctx.now() : new Date()),
-  });
-  t = await startTestServer({
-    STRIPE_SECRET_KEY: 'sk_test_layerbook_refund_spec',
-    STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
-    STRIPE_API_BASE: fake.baseUrl,
-  });
+  // The server's own stand-in: its refund events reach the server's webhook, so they race the route's own settling.
+  t = await startTestServer({}, { onlinePayments: true });
   t.setNow(new Date('2026-12-20T15:00:00Z'));
-  server = await new Promise((resolve) => {
-    const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
-  });
-  // The stand-in's refund events reach the server's webhook, so they race the route's own settling.
-  fake.controls.setWebhookUrls([`http://127.0.0.1:${(server.address() as AddressInfo).port}/api/payments/webhook`]);
+  fake = t.stripe;
   stripe = processorFor(t.ctx.config)!;
 });
 afterAll(async () => {
   // Nothing left on its way to the webhook, so no queue job is still running when the workers stop.
   await fake.controls.idle();
-  await fake.stop();
-  await new Promise((resolve) => server.close(resolve));
   await t.stop();
 });
 
