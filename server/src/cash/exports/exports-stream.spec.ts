@@ -1,0 +1,73 @@
+import { parse } from 'csv-parse/sync';
+import Decimal from 'decimal.js';
+import type { IncomingMessage } from 'node:http';
+import { startTestServer, type TestServer } from '../../testing/harness';
+import { EXPORT_BATCH_ROWS } from './csv-stream';
+import { exportFirm } from './export-fixtures';
+
+let t: TestServer;
+let f: Awaited<ReturnType<typeof exportFirm>>;
+const COUNT = 20_000;
+
+beforeAll(async () => {
+  t = await startTestServer();
+  t.setNow(new Date('2026-12-20T15:00:00Z'));
+  f = await exportFirm(t, 'Big Batch Finishes');
+  await f.manyPayments(await f.invoice(1, '2026-01-02', '2000000.00'), COUNT);
+}, 120_000);
+afterAll(() => t.stop());
+
+/** The export's own transaction, seen from PostgreSQL while the download waits: its state and last statement. */
+async function exportSession(): Promise<{ state: string; query: string } | undefined> {
+  const { rows } = await t.ctx.pool.query<{ state: string; query: string }>(
+    `select state, query from pg_stat_activity where query like 'fetch forward % from cash_export' and pid <> pg_backend_pid()`,
+  );
+  return rows[0];
+}
+
+describe('a large export is streamed', () => {
+  it(`${COUNT} payments: sent in chunks while the reader is slow, fetched ${EXPORT_BATCH_ROWS} rows at a time, adding up to the table`, async () => {
+    let whilePaused: { received: number; session: Awaited<ReturnType<typeof exportSession>> } | undefined;
+    const res = await f.agent
+      .get('/api/cash/exports/payments.csv?from=2026-01-01&to=2026-12-31')
+      .buffer(true)
+      .parse((response, done) => {
+        // supertest hands the node response over as its own type: it is the IncomingMessage stream
+        const stream = response as unknown as IncomingMessage;
+        const chunks: Buffer[] = [];
+        let received = 0;
+        stream.on('data', (chunk: Buffer) => {
+          chunks.push(chunk);
+          received += chunk.length;
+          if (whilePaused) return;
+          // The reader stops after its first chunk: the server must wait for it, in the middle of its cursor.
+          stream.pause();
+          whilePaused = { received, session: undefined };
+          setTimeout(() => {
+            void exportSession().then((session) => {
+              whilePaused = { received, session };
+              stream.resume();
+            });
+          }, 300);
+        });
+        stream.on('end', () => done(null, Buffer.concat(chunks)));
+      });
+
+    expect(res.status).toBe(200);
+    // No length announced up front: the body is chunked as it is written (RFC 9112 §7.1)
+    expect(res.headers['content-length']).toBeUndefined();
+    expect(res.headers['transfer-encoding']).toBe('chunked');
+    const text = (res.body as Buffer).toString('utf8');
+    // While the reader waited, the export had sent only part of the file and still held its cursor open
+    expect(whilePaused?.received).toBeLessThan(Buffer.byteLength(text) / 2);
+    expect(whilePaused?.session).toEqual({ state: 'idle in transaction', query: `fetch forward ${EXPORT_BATCH_ROWS} from cash_export` });
+
+    const rows = parse<Record<string, string>>(text, { columns: true, bom: true });
+    expect(rows).toHaveLength(COUNT);
+    const total = rows.reduce((s, r) => s.plus(r.Amount), new Decimal(0)).toFixed(2);
+    expect(total).toBe(await f.dbSum('amount', 'payments', `received_on between '2026-01-01' and '2026-12-31'`));
+    // Rows in date order, then receipt order
+    expect(rows[0]['Received on']).toBe('2026-01-01');
+    expect(rows[COUNT - 1]['Received on']).toBe('2026-12-31');
+  });
+});
