@@ -49,7 +49,7 @@ export async function loadPayableInvoice(tx: TenantTx, client: ClientPrincipal, 
 /** 409 with the same words the portal shows instead of the pay button. */
 function refuseUnpayable(isOnline: boolean, inv: PayableInvoice): void {
   if (!isOnline) throw conflict('This firm takes no card payments online; the invoice says how to pay.');
-  if (inv.status === 'paid' || inv.status === 'refunded') throw conflict(`Invoice ${inv.number_text} is already paid.`);
+  if (inv.status === 'paid') throw conflict(`Invoice ${inv.number_text} is already paid.`);
   if (inv.status === 'void') throw conflict(`Invoice ${inv.number_text} is void: there is nothing to pay.`);
   const pay = payOnlineFor(isOnline, { status: inv.status, currency: inv.currency, amountDue: inv.due });
   if (!pay.canPayOnline) {

@@ -18,14 +18,15 @@ const NO: PayOnline = { canPayOnline: false, payOnlineNote: null };
 
 /**
  * Whether the client may pay this invoice's amount due by card: online payments are on, the
- * invoice is open or part paid with something due, the processor charges cards in its currency,
+ * invoice is open, part paid or refunded (owed again) with something due, the processor charges cards in its currency,
  * and the amount due is at least the processor's smallest charge there (Stripe Docs "Supported
  * currencies" — minimum charge amounts, via processorMinimumCharge). The portal shows the note
  * where the button would be; starting a checkout refuses with the same words.
  */
 export function payOnlineFor(isOnline: boolean, invoice: PayOnlineInvoice): PayOnline {
   if (!isOnline) return NO;
-  if (invoice.status !== 'issued' && invoice.status !== 'part_paid') return NO;
+  // A refunded invoice is owed again (as recordPayment and the office's payments take it).
+  if (invoice.status !== 'issued' && invoice.status !== 'part_paid' && invoice.status !== 'refunded') return NO;
   const due = new Decimal(invoice.amountDue);
   if (due.lessThanOrEqualTo(0)) return NO;
   const minimum = processorMinimumCharge(invoice.currency);
