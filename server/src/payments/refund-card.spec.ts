@@ -23,6 +23,9 @@ afterAll(async () => {
   await t.stop();
 });
 
+// 100.00 USD is 10000 in the smallest unit (Stripe Docs "Supported currencies": USD is not a zero-decimal currency)
+const USD_100 = { total: '100.00', currency: 'USD', processorAmount: 10000 };
+
 /** Polls until `check` holds (the queue applies the processor's events on its own time). */
 async function eventually(check: () => Promise<boolean>, what: string, timeoutMs = 15_000): Promise<void> {
   for (const deadline = Date.now() + timeoutMs; Date.now() < deadline; await new Promise((r) => setTimeout(r, 100))) {
@@ -36,18 +39,27 @@ async function eventually(check: () => Promise<boolean>, what: string, timeoutMs
  * firm in its metadata, so the webhook files none of its events, and the payment is recorded here
  * as fulfilment would record it, with the processor's payment intent.
  */
-async function cardPaid(name: string) {
-  const f = await issuedInvoice(t, name);
+async function cardPaid(name: string, money: { total: string; currency: string; processorAmount: number } = USD_100) {
+  const f = await issuedInvoice(t, name, money.total, money.currency);
   const session = await stripe.checkout.sessions.create({
     mode: 'payment',
-    line_items: [{ quantity: 1, price_data: { currency: 'usd', unit_amount: 10000, product_data: { name: 'INV-0001 Deposit' } } }],
+    line_items: [
+      {
+        quantity: 1,
+        price_data: {
+          currency: money.currency.toLowerCase(),
+          unit_amount: money.processorAmount,
+          product_data: { name: 'INV-0001 Deposit' },
+        },
+      },
+    ],
     success_url: 'http://localhost:4300/done/{CHECKOUT_SESSION_ID}',
     cancel_url: 'http://localhost:4300/cancelled',
   });
   const paid = fake.controls.pay(session.id);
   if (!paid.ok) throw new Error(`not paid: ${paid.message}`);
   const pi = paid.paymentIntent.id;
-  const payment = await f.payDirect({ method: 'card', amount: '100.00', processorSessionId: session.id, processorPaymentIntentId: pi });
+  const payment = await f.payDirect({ method: 'card', amount: money.total, processorSessionId: session.id, processorPaymentIntentId: pi });
   /** The refunds the processor made for this payment (as created; the stand-in lists them through its events). */
   const atProcessor = async () =>
     Promise.all(
@@ -174,6 +186,19 @@ describe('card refunds through the processor', () => {
     } finally {
       fake.controls.refundsStayPending(false);
     }
+  });
+
+  it('sends a zero-decimal currency as it is: ¥1,200 back of ¥5,000 is 1200 to the processor', async () => {
+    // Stripe Docs "Supported currencies" — zero-decimal currencies: JPY is charged in whole yen, amount 5000 = ¥5,000
+    const f = await cardPaid('Yen Back Plaster', { total: '5000', currency: 'JPY', processorAmount: 5000 });
+    const res = await f.refund(f.paymentId, { method: 'card', amount: '1200' });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ status: 'succeeded', amount: '1200', currency: 'JPY' });
+    expect((await f.atProcessor()).map((r) => [r.amount, r.currency])).toEqual([[1200, 'jpy']]);
+    const half = await f.refund(f.paymentId, { method: 'card', amount: '10.50' });
+    expect(half.body).toMatchObject({
+      errors: [{ field: 'amount', message: 'Amounts in JPY have no more decimals than its smallest coin.' }],
+    });
   });
 
   it('ten card refunds of 30.00 at once on a 100.00 payment: three reach the processor, 90.00 in all', async () => {

@@ -7,11 +7,16 @@ import { recordPayment, type PaymentInput } from './record-payment';
 
 /**
  * Test set-up for the refund and receipt specs (no spec of its own): an accepted job (the portal
- * fixture's client, signed in) with an issued deposit invoice INV-0001 for `total`, and helpers to
+ * fixture's client, signed in) with an issued deposit invoice INV-0001 for `total` in `currency`, and helpers to
  * record payments, ask for refunds and read the money back from the tables.
  */
-export async function issuedInvoice(t: TestServer, firmName: string, total = '100.00') {
+export async function issuedInvoice(t: TestServer, firmName: string, total = '100.00', currency = 'USD') {
   const f = await acceptedJob(t, firmName);
+  if (currency !== 'USD') {
+    await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(`update jobs set currency = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, f.jobId, currency]),
+    );
+  }
   const invoiceId = await insertInvoice(t, f.firmId, f.jobId, {
     kind: 'deposit',
     status: 'issued',
@@ -37,7 +42,7 @@ export async function issuedInvoice(t: TestServer, firmName: string, total = '10
       recordPayment(tx, staffActor({ id: f.userId, role: 'owner' }), {
         invoiceId,
         method: 'transfer',
-        currency: 'USD',
+        currency,
         receivedOn: '2026-12-10',
         reference: '',
         ...input,

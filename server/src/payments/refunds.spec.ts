@@ -1,4 +1,5 @@
 import type { InvoiceDetail, Problem, RefundView } from '@layerbook/contracts';
+import { voidWithCreditNote } from '../billing/pdf/invoice-fixtures';
 import { joinAs } from '../proposals/proposal-fixtures';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
 import { issuedInvoice } from './refund-fixtures';
@@ -78,6 +79,16 @@ describe('offline refunds', () => {
       ['50.00', 'Paid beyond the amount due on INV-0001.'],
       ['-50.00', 'Refunded to the client'],
     ]);
+  });
+
+  it('gives back money paid after the invoice was voided (all of it credit), and the invoice stays void', async () => {
+    const f = await issuedInvoice(t, 'Void Credit Lime');
+    await voidWithCreditNote(t, f.firmId, f.invoiceId, 1, 'Billed the wrong client');
+    const paid = await f.payDirect({ amount: '40.00' });
+    expect(paid).toMatchObject({ applied: '0.00', credit: '40.00' });
+    const res = await f.refund(paid.paymentId, { amount: '40.00', method: 'transfer', reference: 'TRF-9' });
+    expect(res.status).toBe(201);
+    expect(await f.money(paid.paymentId)).toMatchObject({ status: 'void', amountPaid: '0.00', refunded: '40.00', credit: '0.00' });
   });
 
   it('refuses what it cannot do, naming the field, and writes nothing', async () => {
