@@ -65,6 +65,11 @@ describe('starting a card payment from the portal', () => {
     expect((await invoiceBooks(p.t, f.firmId, f.invoiceId)).payments).toHaveLength(1);
     const after = (await f.client.agent.get(`/api/portal/invoices/${f.invoiceId}`)).body as PortalInvoiceDetail;
     expect(after).toMatchObject({ status: 'paid', canPayOnline: false, payOnlineNote: null });
+    expect(after.receipts.map((r) => [r.kind, r.number, r.method, r.amount])).toEqual([['payment', 'RCT-0001', 'card', '600.00']]);
+    // The receipt e-mail, queued with the payment, reaches the client once.
+    const mail = await p.t.inbox.waitFor((m) => m.subject === 'Receipt RCT-0001 — Checkout Start Plaster');
+    expect(mail.text).toContain(`/portal/invoices/${f.invoiceId}`);
+    expect(p.t.inbox.messages.filter((m) => m.subject === mail.subject)).toHaveLength(1);
   });
 
   it('refuses a void or paid invoice, an amount below the smallest card payment, and another client’s invoice', async () => {
