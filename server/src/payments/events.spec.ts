@@ -1,6 +1,7 @@
 import type { DeliveryAttempt } from '@layerbook/stripe-fake';
 import Stripe from 'stripe';
 import { insertInvoice } from '../billing/pdf/invoice-fixtures';
+import { QUEUES } from '../queue/queues';
 import {
   WEBHOOK_SECRET,
   clientInvoice,
@@ -109,6 +110,23 @@ describe('webhook: exactly once', () => {
     await eventually(() => allApplied(f.firmId, events.length), 'all applied');
     const books = await invoiceBooks(p.t, f.firmId, f.invoiceId);
     expect([books.status, books.payments.length]).toEqual(['paid', 1]);
+  });
+
+  it('the reconciliation job on the queue finds a payment whose deliveries are held back', async () => {
+    const f = await clientInvoice(p.t, 'Queued Reconcile Plaster');
+    const checkout = await f.started();
+    p.fake.controls.hold();
+    p.fake.controls.pay(checkout.sessionId);
+    const completed = p.fake.controls.lastEvent('checkout.session.completed')!;
+    await p.t.queue.boss.send(QUEUES.paymentsReconcile, {});
+    const events = await eventually(async () => {
+      const stored = await storedEvents(p.t, f.firmId);
+      return stored.find((e) => e.id === completed.id && e.applied_at) ? stored : null;
+    }, 'the reconciled payment applied');
+    expect(events.find((e) => e.id === completed.id)?.received_via).toBe('reconcile');
+    await p.fake.controls.release();
+    await p.fake.controls.idle();
+    expect((await invoiceBooks(p.t, f.firmId, f.invoiceId)).payments).toHaveLength(1);
   });
 
   it('the return page, the webhook and the reconciliation fulfilling at once record one payment', async () => {
