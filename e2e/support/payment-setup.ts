@@ -1,5 +1,5 @@
 import { expect, request, type APIRequestContext, type APIResponse } from '@playwright/test';
-import type { BillingSettings, InvoiceDetail, JobBillingView } from '@layerbook/contracts/types';
+import type { BillingSettings, BillingSettingsView, InvoiceDetail, JobBillingView } from '@layerbook/contracts/types';
 import { E2E } from './env';
 import { pathFrom, waitForMail } from './inbox';
 import { DEMO, DEMO_PASSWORD } from './people';
@@ -117,7 +117,7 @@ export async function issuedDeposit(title: string): Promise<{ readonly id: strin
 /** The demo firm's deposit at acceptance (set by the owner): drafted for the office, or issued and e-mailed at once. */
 export async function setDepositAtAcceptance(value: BillingSettings['depositAtAcceptance']): Promise<void> {
   const { api, headers } = await staffApi(DEMO.owner);
-  const current = await ok<BillingSettings>(api.get('/api/firm/billing'));
+  const { settings: current } = await ok<BillingSettingsView>(api.get('/api/firm/billing'));
   const settings: BillingSettings = {
     depositCap: current.depositCap,
     depositCapName: current.depositCapName,

@@ -41,7 +41,8 @@ export class PaymentReturnPage {
   readonly checkoutId = input.required<string>();
 
   private readonly loaded = httpResource<CheckoutStatus>(() => checkoutStatusUrl(this.id(), this.checkoutId()));
-  private readonly invoiceLoaded = httpResource<PortalInvoiceDetail>(() => invoiceUrl(this.id()));
+  /** read after the checkout's state, so a payment the state's read just recorded is in it */
+  private readonly invoiceLoaded = httpResource<PortalInvoiceDetail>(() => (this.loaded.hasValue() ? invoiceUrl(this.id()) : undefined));
   private startedAt = Date.now();
   /** the page stopped asking: about a minute went by without the payment recorded */
   private readonly gaveUp = signal(false);
@@ -86,13 +87,12 @@ export class PaymentReturnPage {
       const timer = setTimeout(() => this.loaded.reload(), this.poll.everyMs);
       onCleanup(() => clearTimeout(timer));
     });
-    // Once paid, the invoice below reads its new amount due.
-    let sawPaid = false;
+    // Paid while the page was open: the invoice is read again for its new amount due.
+    let lastState: CheckoutStatus['state'] | null = null;
     effect(() => {
-      if (this.status()?.state === 'paid' && !sawPaid && this.isBrowser) {
-        sawPaid = true;
-        this.invoiceLoaded.reload();
-      }
+      const state = this.status()?.state ?? null;
+      if (state === 'paid' && lastState !== null && lastState !== 'paid') this.invoiceLoaded.reload();
+      lastState = state;
     });
   }
 
