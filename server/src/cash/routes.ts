@@ -1,9 +1,55 @@
+import {
+  cashEmptyQuery,
+  cashReceivablesQuery,
+  type CashForecast,
+  type CashJobs,
+  type CashReceivables,
+  type CashReceived,
+} from '@layerbook/contracts';
 import { Router } from 'express';
 import type { AppContext } from '../context';
+import { withStaff } from '../http/guards';
+import { parse } from '../http/validate';
+import { cashForecastView } from './forecast';
+import { cashJobs } from './jobs';
+import { cashReceivables } from './receivables';
+import { cashReceived } from './received';
 
-/** The owner's cash, mounted at /api/cash: receivables by age, cash by month, the 13-week forecast, jobs. */
+/**
+ * The owner's cash, mounted at /api/cash: receivables by age, cash by month, the 13-week forecast,
+ * jobs. Owner and office (crew 403 before any parsing); margins for the owner only.
+ */
 export function cashRoutes(ctx: AppContext): Router {
   const router = Router();
-  void ctx;
+
+  router.get('/receivables', async (req, res) => {
+    const view = await withStaff(ctx, req, 'office', (tx) => cashReceivables(tx, ctx.now(), parse(cashReceivablesQuery, req.query).asOf));
+    res.json(view satisfies CashReceivables);
+  });
+
+  router.get('/received', async (req, res) => {
+    const view = await withStaff(ctx, req, 'office', (tx) => {
+      parse(cashEmptyQuery, req.query);
+      return cashReceived(tx, ctx.now());
+    });
+    res.json(view satisfies CashReceived);
+  });
+
+  router.get('/forecast', async (req, res) => {
+    const view = await withStaff(ctx, req, 'office', (tx) => {
+      parse(cashEmptyQuery, req.query);
+      return cashForecastView(tx, ctx.now());
+    });
+    res.json(view satisfies CashForecast);
+  });
+
+  router.get('/jobs', async (req, res) => {
+    const view = await withStaff(ctx, req, 'office', (tx, staff) => {
+      parse(cashEmptyQuery, req.query);
+      return cashJobs(tx, ctx.now(), staff.role === 'owner');
+    });
+    res.json(view satisfies CashJobs);
+  });
+
   return router;
 }

@@ -175,7 +175,9 @@ export interface CashJobs {
   readonly averageJobSize: string | null;
   /** false for the office: no row carries `margin` */
   readonly marginsShown: boolean;
-  /** newest first */
+  /** jobs not cancelled (the average's base); the list holds the newest 200 */
+  readonly jobCount: number;
+  /** newest first, at most 200 */
   readonly jobs: readonly CashJobRow[];
 }
 

@@ -1,0 +1,47 @@
+import type { CashReceived } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import type Decimal from 'decimal.js';
+import { moneyOut } from '../billing/money';
+import { cashReceivedByMonth, type DatedAmount } from './domain';
+import { firmClock } from './firm-clock';
+
+const MONTHS = 12;
+
+/** First day of the month `back` months before the month of `today` (YYYY-MM-DD). */
+function monthStart(today: string, back: number): string {
+  const n = Number(today.slice(0, 4)) * 12 + Number(today.slice(5, 7)) - 1 - back;
+  return `${String(Math.floor(n / 12)).padStart(4, '0')}-${String((n % 12) + 1).padStart(2, '0')}-01`;
+}
+
+/**
+ * GET /api/cash/received: payments by their received date less refunds that went through by their
+ * refund date (both firm-local dates), summed per day in SQL and per month by packages/domain.
+ */
+export async function cashReceived(tx: TenantTx, now: Date): Promise<CashReceived> {
+  const clock = await firmClock(tx, now);
+  const from = monthStart(clock.today, MONTHS - 1);
+  const { rows } = await tx.client.query<{ kind: 'p' | 'r'; day: string; amount: string; n: number }>(
+    `select 'p' as kind, received_on::text as day, sum(amount)::text as amount, count(*)::int as n from payments
+      where tenant_id = $1 and received_on >= $2::date group by received_on
+     union all
+     select 'r', refunded_on::text, sum(amount)::text, count(*)::int from refunds
+      where tenant_id = $1 and status = 'succeeded' and refunded_on >= $2::date group by refunded_on`,
+    [tx.tenantId, from],
+  );
+  const of = (kind: 'p' | 'r'): DatedAmount[] =>
+    rows.filter((r) => r.kind === kind).map((r) => ({ date: r.day, amount: r.amount, count: r.n }));
+  const result = cashReceivedByMonth({ endMonth: clock.today.slice(0, 7), months: MONTHS, payments: of('p'), refunds: of('r') });
+  const money = (d: Decimal) => moneyOut(d, clock.currency);
+  return {
+    currency: clock.currency,
+    months: result.months.map((m) => ({
+      month: m.month,
+      received: money(m.received),
+      paymentCount: m.paymentCount,
+      refunded: money(m.refunded),
+      refundCount: m.refundCount,
+      net: money(m.net),
+    })),
+    totals: { received: money(result.totals.received), refunded: money(result.totals.refunded), net: money(result.totals.net) },
+  };
+}
