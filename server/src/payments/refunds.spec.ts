@@ -1,6 +1,7 @@
 import type { InvoiceDetail, Problem, RefundView } from '@layerbook/contracts';
 import { voidWithCreditNote } from '../billing/pdf/invoice-fixtures';
 import { joinAs } from '../proposals/proposal-fixtures';
+import Decimal from 'decimal.js';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
 import { issuedInvoice } from './refund-fixtures';
 
@@ -168,5 +169,38 @@ describe('concurrent refunds of one payment', () => {
     expect(money).toMatchObject({ refunded: '90.00', amountPaid: '10.00', status: 'part_paid' });
     const receipts = answers.filter((a) => a.status === 201).map((a) => (a.body as RefundView).receiptNumber);
     expect(new Set(receipts).size).toBe(3);
+  });
+});
+
+describe('refunds and payments at once on one invoice', () => {
+  it('five refunds and five cheques together: no deadlock, the books add up and the receipt numbers have no gap', async () => {
+    const f = await issuedInvoice(t, 'Busy Counter Plaster', '300.00');
+    const first = await f.payOffline('100.00');
+    const answers = await Promise.all([
+      ...Array.from({ length: 5 }, () => f.refund(first, { amount: '30.00', method: 'cash' })),
+      ...Array.from({ length: 5 }, (_, i) =>
+        f.post(`/api/invoices/${f.invoiceId}/payments`, {
+          method: 'cheque',
+          amount: '50.00',
+          receivedOn: '2026-12-11',
+          reference: `C${i}`,
+        }),
+      ),
+    ]);
+    // every answer is a success or a refusal naming amount: none waited on another forever (a deadlock is a 500)
+    expect(answers.every((a) => [200, 201, 400].includes(a.status))).toBe(true);
+    const detail = (await f.agent.get(`/api/invoices/${f.invoiceId}`)).body as InvoiceDetail;
+    const sum = (values: string[]) => values.reduce((total, v) => total.plus(v), new Decimal(0));
+    const applied = sum(detail.payments.map((p) => p.amountApplied));
+    const refunded = sum(detail.payments.map((p) => p.amountRefunded));
+    // amount paid = applied − refunded (no payment here kept credit: each cheque was at most the amount due)
+    expect(detail.amountPaid).toBe(applied.minus(refunded).toFixed(2));
+    expect(new Decimal(detail.amountPaid).lessThanOrEqualTo(300)).toBe(true);
+    expect(new Decimal(detail.payments[0].amountRefunded).lessThanOrEqualTo(100)).toBe(true);
+    const numbers = [
+      ...detail.payments.map((p) => p.receiptNumber),
+      ...detail.payments.flatMap((p) => p.refunds.map((r) => r.receiptNumber)),
+    ].sort();
+    expect(numbers).toEqual(numbers.map((_, i) => `RCT-${String(i + 1).padStart(4, '0')}`));
   });
 });
