@@ -117,7 +117,7 @@ export class InvoiceDetailPage {
 
   /** A refund changes the payment, the invoice's amounts and perhaps its status: read it again. */
   protected refundDone(outcome: RefundOutcome): void {
-    this.actionMessage.set(null);
+    this.actionMessage.set(outcome.problem ?? null);
     this.done.set(outcome.words);
     this.loaded.reload();
   }

@@ -148,6 +148,63 @@ describe('the payments on an invoice', () => {
     }
   });
 
+  it('asks the card processor again about a refund left pending, and passes on its answer', async () => {
+    const { fixture, payment, outcomes } = render({ ...paidInvoice, payments: [{ ...cardOverpayment, refunds: [cardRefundPending] }] });
+    const http = TestBed.inject(HttpTestingController);
+    const ask = () =>
+      [...payment(0).querySelectorAll<HTMLButtonElement>('li.refund button')].find((b) => b.textContent?.includes('again'))!;
+    ask().click();
+    fixture.detectChanges();
+    expect(ask().disabled).toBe(true);
+    const post = http.expectOne({ method: 'POST', url: '/api/payments/refunds/ref-2/send' });
+    expect(post.request.body).toEqual({});
+    post.flush({ ...cardRefundPending, status: 'succeeded', receiptNumber: 'RCT-0011' });
+    await fixture.whenStable();
+    expect(outcomes).toEqual([
+      {
+        refund: { ...cardRefundPending, status: 'succeeded', receiptNumber: 'RCT-0011' },
+        words: '$70.00 refunded to the card. Refund receipt RCT-0011.',
+      },
+    ]);
+
+    fixture.detectChanges();
+    ask().click();
+    http.expectOne({ method: 'POST', url: '/api/payments/refunds/ref-2/send' }).flush(
+      {
+        type: 'about:blank',
+        title: 'The payment processor did not answer',
+        status: 502,
+        detail:
+          'The refund is kept as being sent back: it is settled when the processor confirms it, or send it again — nothing is refunded twice.',
+      },
+      { status: 502, statusText: 'Bad Gateway' },
+    );
+    await fixture.whenStable();
+    expect(outcomes[1]).toEqual({
+      refund: null,
+      words: null,
+      problem:
+        'The refund is kept as being sent back: it is settled when the processor confirms it, or send it again — nothing is refunded twice.',
+    });
+
+    // settled meanwhile: nothing to say, the invoice read again says how
+    fixture.detectChanges();
+    ask().click();
+    http
+      .expectOne({ method: 'POST', url: '/api/payments/refunds/ref-2/send' })
+      .flush({ type: 'about:blank', title: 'This refund is already settled.', status: 409 }, { status: 409, statusText: 'Conflict' });
+    await fixture.whenStable();
+    expect(outcomes[2]).toEqual({ refund: null, words: null });
+  });
+
+  it('offers to ask again only for a card refund still pending', () => {
+    const { payment } = render({
+      ...paidInvoice,
+      payments: [{ ...cardOverpayment, refunds: [chequeRefund, { ...cardRefundPending, status: 'failed' }] }],
+    });
+    expect(payment(0).querySelectorAll('li.refund button')).toHaveLength(0);
+  });
+
   it('says a failed refund failed, in words and with its reason', () => {
     const failed = { ...cardRefundPending, status: 'failed' as const, failureMessage: 'The card was closed by its bank.' };
     const { payment } = render({ ...paidInvoice, payments: [{ ...cardOverpayment, refunds: [failed] }] });

@@ -1,5 +1,5 @@
 import { DatePipe, LowerCasePipe, isPlatformBrowser } from '@angular/common';
-import { ChangeDetectionStrategy, Component, LOCALE_ID, PLATFORM_ID, computed, effect, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, PLATFORM_ID, computed, effect, inject, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
@@ -8,10 +8,11 @@ import { roundsToZero } from '@layerbook/contracts/engine';
 import type { InvoiceDetail, PaymentDetail, RefundView } from '@layerbook/contracts/types';
 import { formatMoney } from '@layerbook/domain';
 import { firstValueFrom } from 'rxjs';
+import { toProblem } from '../../core/errors/problem';
 import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { PAYMENT_METHOD_LABELS } from '../billing/invoice-words';
-import { paymentReceiptHref, refundReceiptHref } from './payment-api';
+import { PaymentApi, paymentReceiptHref, refundReceiptHref } from './payment-api';
 import { creditKept, paymentParts } from './payment-money';
 import { REFUND_METHOD_WORDS, refundDoneWords, refundStatusLook } from './payment-words';
 import { RefundDialog, type RefundDialogData } from './refund-dialog';
@@ -24,6 +25,8 @@ export const PENDING_CHECKS = 12;
 export interface RefundOutcome {
   readonly refund: RefundView | null;
   readonly words: string | null;
+  /** what went wrong, when the page should say so as a problem */
+  readonly problem?: string;
 }
 
 /**
@@ -40,6 +43,7 @@ export interface RefundOutcome {
 export class InvoicePayments {
   private readonly dialog = inject(MatDialog);
   private readonly locale = inject(LOCALE_ID);
+  private readonly api = inject(PaymentApi);
 
   readonly invoice = input.required<InvoiceDetail>();
   /** after a refund was asked for (done, on its way, or refused by the processor): the invoice should be read again */
@@ -60,6 +64,8 @@ export class InvoicePayments {
   protected readonly isNegative = (amount: string): boolean => amount.trim().startsWith('-');
   protected readonly withoutSign = (amount: string): string => amount.trim().replace(/^-/, '');
 
+  /** the refund being asked about again, if any */
+  protected readonly askingAbout = signal<string | null>(null);
   private checksLeft = PENDING_CHECKS;
 
   constructor() {
@@ -89,6 +95,23 @@ export class InvoicePayments {
       this.refunded.emit({ refund, words: refundDoneWords(refund, money) });
     } else if (ref.componentInstance?.wasSent()) {
       this.refunded.emit({ refund: null, words: null });
+    }
+  }
+
+  /** A card refund left pending (the processor did not answer): ask the processor about it again. */
+  protected async sendAgain(refund: RefundView): Promise<void> {
+    this.askingAbout.set(refund.id);
+    try {
+      const answer = await this.api.sendAgain(refund.id);
+      this.refunded.emit({ refund: answer, words: refundDoneWords(answer, (amount) => formatMoney(amount, answer.currency, this.locale)) });
+    } catch (error) {
+      const problem = toProblem(error);
+      // 409: settled meanwhile (by the processor's own message); the invoice as it is now says how.
+      this.refunded.emit(
+        problem.status === 409 ? { refund: null, words: null } : { refund: null, words: null, problem: problem.detail ?? problem.title },
+      );
+    } finally {
+      this.askingAbout.set(null);
     }
   }
 }

@@ -15,6 +15,11 @@ export class PaymentApi {
   refund(paymentId: string, body: RefundCreate): Promise<RefundView> {
     return firstValueFrom(this.http.post<RefundView>(`${paymentUrl(paymentId)}/refunds`, body));
   }
+
+  /** A card refund still being sent back: the card processor is asked about it again (the same refund, never a second one). */
+  sendAgain(refundId: string): Promise<RefundView> {
+    return firstValueFrom(this.http.post<RefundView>(`${PAYMENTS_URL}/refunds/${encodeURIComponent(refundId)}/send`, {}));
+  }
 }
 
 /** Plain links: the browser downloads the receipt with the session cookie. */
