@@ -1,0 +1,50 @@
+import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import type { ChartOptions } from 'chart.js';
+import { BaseChartDirective } from 'ng2-charts';
+import type { BarData } from './cash-charts';
+
+/**
+ * A bar chart with its figures beside it. The canvas is one picture to assistive technology (its
+ * summary says what it shows); the table projected beside it carries every number, and all the
+ * keyboard-usable parts (drill-down buttons, links) are in that table.
+ */
+@Component({
+  selector: 'lb-cash-chart',
+  imports: [BaseChartDirective],
+  host: { class: 'lb-cash-chart' },
+  template: `
+    <div class="canvas-box">
+      <canvas baseChart type="bar" [data]="data()" [options]="options()" role="img" [attr.aria-label]="summary()"></canvas>
+    </div>
+    <div class="figures">
+      <ng-content />
+    </div>
+  `,
+  styles: `
+    :host {
+      display: grid;
+      grid-template-columns: minmax(0, 3fr) minmax(0, 2fr);
+      gap: 1rem 1.5rem;
+      align-items: start;
+    }
+    @media (max-width: 900px) {
+      :host {
+        grid-template-columns: minmax(0, 1fr);
+      }
+    }
+    .canvas-box {
+      position: relative;
+      height: 18rem;
+    }
+    .figures {
+      overflow-x: auto;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class CashChart {
+  readonly data = input.required<BarData>();
+  readonly options = input.required<ChartOptions<'bar'>>();
+  /** what the chart shows, in one sentence, for screen readers */
+  readonly summary = input.required<string>();
+}

@@ -1,0 +1,103 @@
+import type { ChartData, ChartOptions } from 'chart.js';
+import { barHeight, CHART_COLOURS, seriesFill } from './chart-look';
+import {
+  CASH_AGING_BUCKETS,
+  CASH_AGING_BUCKET_LABELS,
+  type CashForecast,
+  type CashReceivables,
+  type CashReceived,
+} from '@layerbook/contracts/types';
+import { monthLabel, weekLabel } from './cash-words';
+
+export type BarData = ChartData<'bar', number[], string>;
+
+/** The forecast's three parts, in the order they stack, with the words used in the legend and the table. */
+export const FORECAST_PARTS = [
+  {
+    key: 'invoices',
+    label: 'Invoices sent, by due date',
+    short: 'Invoices sent',
+    explain: 'What clients owe on invoices already sent, in the week each is due; anything already late is counted in the first week.',
+    colour: CHART_COLOURS.umber,
+    pattern: 'solid',
+  },
+  {
+    key: 'scheduled',
+    label: 'Still to bill, by the work schedule',
+    short: 'Still to bill',
+    explain: "Payments in each job's billing plan not invoiced yet, in the week the work schedule says they fall due.",
+    colour: CHART_COLOURS.verdigris,
+    pattern: 'stripes',
+  },
+  {
+    key: 'pipeline',
+    label: 'Deposits from open inquiries, at stage odds',
+    short: 'Likely deposits',
+    explain: 'Deposits that open inquiries would bring if they turn into jobs, counted at the odds of their stage.',
+    colour: CHART_COLOURS.ochre,
+    pattern: 'dots',
+  },
+] as const;
+
+const AGE_COLOURS = [CHART_COLOURS.verdigris, CHART_COLOURS.ochre, CHART_COLOURS.umber, CHART_COLOURS.rust, CHART_COLOURS.slate];
+
+/** Money owed by age: one bar per age, each named on its axis. */
+export function agingChart(receivables: CashReceivables): BarData {
+  return {
+    labels: CASH_AGING_BUCKETS.map((bucket) => CASH_AGING_BUCKET_LABELS[bucket]),
+    datasets: [
+      {
+        label: 'Owed',
+        data: CASH_AGING_BUCKETS.map((bucket) => barHeight(receivables.buckets[bucket])),
+        backgroundColor: AGE_COLOURS,
+      },
+    ],
+  };
+}
+
+/** Cash received by month, less refunds given in that month. */
+export function receivedChart(received: CashReceived): BarData {
+  return {
+    labels: received.months.map((month) => monthLabel(month.month)),
+    datasets: [
+      {
+        label: 'Received, less refunds',
+        data: received.months.map((month) => barHeight(month.net)),
+        backgroundColor: CHART_COLOURS.verdigris,
+      },
+    ],
+  };
+}
+
+/** Cash expected by week, its three parts stacked and each filled its own way. */
+export function forecastChart(forecast: CashForecast): BarData {
+  return {
+    labels: forecast.weeks.map((week) => weekLabel(week.weekStart)),
+    datasets: FORECAST_PARTS.map((part) => ({
+      label: part.label,
+      data: forecast.weeks.map((week) => barHeight(week[part.key])),
+      backgroundColor: seriesFill(part.colour, part.pattern),
+      borderColor: part.colour,
+      borderWidth: 1,
+      stack: 'expected',
+    })),
+  };
+}
+
+/** Options shared by the cash charts: amounts on the value axis in the firm's currency, legend only when there are several series. */
+export function barOptions(currency: string, locale: string, options: { stacked?: boolean; legend?: boolean } = {}): ChartOptions<'bar'> {
+  const money = new Intl.NumberFormat(locale, { style: 'currency', currency, maximumFractionDigits: 0 });
+  return {
+    responsive: true,
+    maintainAspectRatio: false,
+    animation: false,
+    scales: {
+      x: { stacked: options.stacked ?? false, grid: { display: false } },
+      y: { stacked: options.stacked ?? false, beginAtZero: true, ticks: { callback: (value) => money.format(Number(value)) } },
+    },
+    plugins: {
+      legend: { display: options.legend ?? false, position: 'bottom' },
+      tooltip: { callbacks: { label: (item) => `${item.dataset.label ?? ''}: ${money.format(item.parsed.y ?? 0)}` } },
+    },
+  };
+}

@@ -1,0 +1,94 @@
+import { ChangeDetectionStrategy, Component, computed, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { toIsoDate } from '../../shared/forms/iso-date';
+import { EXPORT_KINDS, defaultExportRange, exportHref, exportRangeProblem } from './export-range';
+
+/** Spreadsheet files (CSV) for the accountant: invoices, payments, refunds, credit notes and clients for a range of days. */
+@Component({
+  selector: 'lb-cash-exports',
+  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  template: `
+    <section class="cash-section" aria-labelledby="exports-heading">
+      <h2 id="exports-heading">Files for your accountant</h2>
+      <p class="note">
+        Spreadsheet files (CSV) in your firm's currency, with dates as your firm's days. Invoices by the day they were issued, payments by
+        the day received, refunds and credit notes by their day, clients by the day they were added.
+      </p>
+      <div class="range" role="group" aria-label="Days to include">
+        <mat-form-field subscriptSizing="dynamic">
+          <mat-label>First day</mat-label>
+          <input
+            matInput
+            type="date"
+            [value]="from()"
+            (change)="from.set($any($event.target).value)"
+            [attr.aria-invalid]="problem()?.field === 'from'"
+          />
+          @if (problem()?.field === 'from') {
+            <mat-hint class="field-error">{{ problem()?.message }}</mat-hint>
+          }
+        </mat-form-field>
+        <mat-form-field subscriptSizing="dynamic">
+          <mat-label>Last day</mat-label>
+          <input
+            matInput
+            type="date"
+            [value]="to()"
+            (change)="to.set($any($event.target).value)"
+            [attr.aria-invalid]="problem()?.field === 'to'"
+          />
+          @if (problem()?.field === 'to') {
+            <mat-hint class="field-error">{{ problem()?.message }}</mat-hint>
+          }
+        </mat-form-field>
+      </div>
+      <div class="downloads">
+        @for (choice of kinds; track choice.kind) {
+          @if (problem()) {
+            <button mat-stroked-button type="button" disabled>
+              <mat-icon aria-hidden="true">download</mat-icon>
+              {{ choice.label }}
+            </button>
+          } @else {
+            <a mat-stroked-button [href]="href(choice.kind)" download>
+              <mat-icon aria-hidden="true">download</mat-icon>
+              {{ choice.label }}<span class="lb-visually-hidden"> (CSV file)</span>
+            </a>
+          }
+        }
+      </div>
+    </section>
+  `,
+  styleUrl: './cash-section.scss',
+  styles: `
+    .range {
+      display: flex;
+      flex-wrap: wrap;
+      gap: 0.5rem 1rem;
+      margin: 0.5rem 0 1rem;
+    }
+    .downloads {
+      display: flex;
+      flex-wrap: wrap;
+      gap: 0.5rem;
+    }
+    .field-error {
+      color: #7a2418;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class CashExports {
+  protected readonly kinds = EXPORT_KINDS;
+  private readonly initial = defaultExportRange(toIsoDate(new Date()) ?? '2026-01-01');
+  protected readonly from = signal(this.initial.from);
+  protected readonly to = signal(this.initial.to);
+  protected readonly problem = computed(() => exportRangeProblem(this.from(), this.to()));
+
+  protected href(kind: (typeof EXPORT_KINDS)[number]['kind']): string {
+    return exportHref(kind, this.from(), this.to());
+  }
+}

@@ -1,0 +1,120 @@
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject } from '@angular/core';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { loadMessage } from '../../shared/forms/load-message';
+import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { CashChart } from './cash-chart';
+import { FORECAST_PARTS, barOptions, forecastChart } from './cash-charts';
+import type { CashForecast as CashForecastView } from '@layerbook/contracts/types';
+
+export const FORECAST_URL = '/api/cash/forecast';
+
+/** Cash expected week by week for the next 13 weeks, its three sources kept apart. */
+@Component({
+  selector: 'lb-cash-forecast',
+  imports: [CalendarDatePipe, CashChart, FormAlert, MatProgressBarModule, MoneyPipe],
+  template: `
+    <section class="cash-section" aria-labelledby="expected-heading">
+      <h2 id="expected-heading">Cash expected, next 13 weeks</h2>
+      <lb-form-alert [message]="message()" />
+      @if (forecast.isLoading()) {
+        <mat-progress-bar mode="indeterminate" aria-label="Loading cash expected" />
+      }
+      @if (view(); as f) {
+        @if (chart(); as c) {
+          <lb-cash-chart
+            [data]="c.data"
+            [options]="c.options"
+            summary="Stacked bar chart of cash expected in each of the next 13 weeks, in three parts: invoices sent, work still to bill and deposits from open inquiries; its figures are in the table beside it."
+          >
+            <table class="figures-table">
+              <caption>
+                Expected by week
+              </caption>
+              <thead>
+                <tr>
+                  <th scope="col">Week of</th>
+                  @for (part of parts; track part.key) {
+                    <th scope="col" class="num">{{ part.short }}</th>
+                  }
+                  <th scope="col" class="num">Total</th>
+                </tr>
+              </thead>
+              <tbody>
+                @for (week of f.weeks; track week.weekStart) {
+                  <tr>
+                    <th scope="row">{{ week.weekStart | calendarDate }}</th>
+                    @for (part of parts; track part.key) {
+                      <td class="num">{{ week[part.key] | money: f.currency }}</td>
+                    }
+                    <td class="num">{{ week.total | money: f.currency }}</td>
+                  </tr>
+                }
+              </tbody>
+              <tfoot>
+                <tr>
+                  <th scope="row">Later than 13 weeks</th>
+                  @for (part of parts; track part.key) {
+                    <td class="num">{{ f.beyondHorizon[part.key] | money: f.currency }}</td>
+                  }
+                  <td class="num">{{ f.beyondHorizon.total | money: f.currency }}</td>
+                </tr>
+              </tfoot>
+            </table>
+          </lb-cash-chart>
+        }
+        <dl class="parts">
+          @for (part of parts; track part.key) {
+            <div>
+              <dt><span class="swatch" [class]="'swatch ' + part.pattern" aria-hidden="true"></span>{{ part.short }}</dt>
+              <dd>{{ part.explain }}</dd>
+            </div>
+          }
+        </dl>
+        @for (note of f.notes; track $index) {
+          <p class="note">{{ note }}</p>
+        }
+        @if (f.odds.length > 0) {
+          <table class="odds">
+            <caption>
+              Odds used for open inquiries
+            </caption>
+            <thead>
+              <tr>
+                <th scope="col">Stage</th>
+                <th scope="col" class="num">Open</th>
+                <th scope="col" class="num">Odds</th>
+                <th scope="col">From</th>
+              </tr>
+            </thead>
+            <tbody>
+              @for (stage of f.odds; track stage.stage) {
+                <tr>
+                  <th scope="row">{{ stage.label }}</th>
+                  <td class="num">{{ stage.openCount }}</td>
+                  <td class="num">{{ stage.percent }} in 100</td>
+                  <td>{{ stage.source === 'firm' ? 'Your own odds for this stage' : 'A usual figure (your firm has set none)' }}</td>
+                </tr>
+              }
+            </tbody>
+          </table>
+        }
+      }
+    </section>
+  `,
+  styleUrls: ['./cash-section.scss', './cash-forecast.scss'],
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class CashForecast {
+  private readonly locale = inject(LOCALE_ID);
+  protected readonly parts = FORECAST_PARTS;
+  protected readonly forecast = httpResource<CashForecastView>(() => FORECAST_URL);
+  protected readonly view = computed(() => (this.forecast.hasValue() ? this.forecast.value() : null));
+  protected readonly message = loadMessage(this.forecast);
+  protected readonly chart = computed(() => {
+    const view = this.view();
+    return view ? { data: forecastChart(view), options: barOptions(view.currency, this.locale, { stacked: true, legend: true }) } : null;
+  });
+}

@@ -1,0 +1,27 @@
+import { describe, expect, it } from 'vitest';
+import { RECEIVABLES } from './cash-fixtures';
+import { drillFromParams, drillHeading, drillToParams, drilledInvoices } from './receivable-drill';
+
+describe('receivable drill-down', () => {
+  it('reads the age, client and day from the address and ignores what it does not know', () => {
+    expect(drillFromParams({ age: '31-60', client: 'c-1', asOf: '2026-11-30' })).toEqual({
+      age: '31-60',
+      clientId: 'c-1',
+      asOf: '2026-11-30',
+    });
+    expect(drillFromParams({ age: '100+', client: '', asOf: '30/11/2026' })).toEqual({ age: null, clientId: null, asOf: null });
+    expect(drillToParams({ age: '90+', clientId: null, asOf: null })).toEqual({ age: '90+', client: null, asOf: null });
+  });
+
+  it('lists the invoices of one age, or of one client most overdue first', () => {
+    expect(drilledInvoices(RECEIVABLES, { age: '31-60', clientId: null, asOf: null }).map((i) => i.number)).toEqual(['INV-0007']);
+    expect(drilledInvoices(RECEIVABLES, { age: null, clientId: 'c-2', asOf: null }).map((i) => i.number)).toEqual(['INV-0009', 'INV-0012']);
+    expect(drilledInvoices(RECEIVABLES, { age: '61-90', clientId: null, asOf: null })).toEqual([]);
+  });
+
+  it('says what the list holds', () => {
+    expect(drillHeading(RECEIVABLES, { age: '31-60', clientId: null, asOf: null })).toBe('Invoices 31–60 days late');
+    expect(drillHeading(RECEIVABLES, { age: 'current', clientId: null, asOf: null })).toBe('Invoices not yet due');
+    expect(drillHeading(RECEIVABLES, { age: null, clientId: 'c-1', asOf: null })).toBe('Open invoices for Ada Ward');
+  });
+});

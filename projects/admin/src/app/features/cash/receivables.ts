@@ -1,0 +1,101 @@
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { map } from 'rxjs';
+import { loadMessage } from '../../shared/forms/load-message';
+import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { CashChart } from './cash-chart';
+import { agingChart, barOptions } from './cash-charts';
+import { CASH_AGING_BUCKETS, CASH_AGING_BUCKET_LABELS, type CashAgingBucket, type CashReceivables } from '@layerbook/contracts/types';
+import { lateWords } from './cash-words';
+import { drillFromParams, drillHeading, drillToParams, drilledInvoices, type ReceivableDrill } from './receivable-drill';
+
+export const RECEIVABLES_URL = '/api/cash/receivables';
+
+/** Money owed to the firm by age as of a chosen day, with the invoices and clients behind each figure. */
+@Component({
+  selector: 'lb-receivables',
+  imports: [
+    CalendarDatePipe,
+    CashChart,
+    FormAlert,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatProgressBarModule,
+    MoneyPipe,
+    RouterLink,
+  ],
+  templateUrl: './receivables.html',
+  styleUrl: './cash-section.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class Receivables {
+  private readonly router = inject(Router);
+  private readonly route = inject(ActivatedRoute);
+  private readonly locale = inject(LOCALE_ID);
+
+  protected readonly buckets = CASH_AGING_BUCKETS;
+  protected readonly bucketLabels = CASH_AGING_BUCKET_LABELS;
+  protected readonly lateWords = lateWords;
+
+  /** The address bar holds the day and the drill-down, so a drilled view can be bookmarked or shared. */
+  protected readonly drill = toSignal(this.route.queryParams.pipe(map(drillFromParams)), {
+    initialValue: drillFromParams(this.route.snapshot.queryParams),
+  });
+  /** Apart from the drill-down, so opening a list never asks the server again. */
+  private readonly asOf = computed(() => this.drill().asOf);
+  protected readonly receivables = httpResource<CashReceivables>(() => {
+    const asOf = this.asOf();
+    return { url: RECEIVABLES_URL, ...(asOf ? { params: { asOf } } : {}) };
+  });
+  protected readonly view = computed(() => (this.receivables.hasValue() ? this.receivables.value() : null));
+  protected readonly message = loadMessage(this.receivables);
+  protected readonly chart = computed(() => {
+    const view = this.view();
+    return view ? { data: agingChart(view), options: barOptions(view.currency, this.locale) } : null;
+  });
+  protected readonly isDrilled = computed(() => this.drill().age !== null || this.drill().clientId !== null);
+  protected readonly invoices = computed(() => {
+    const view = this.view();
+    return view && this.isDrilled() ? drilledInvoices(view, this.drill()) : [];
+  });
+  protected readonly heading = computed(() => {
+    const view = this.view();
+    return view ? drillHeading(view, this.drill()) : '';
+  });
+
+  protected chooseDay(value: string): void {
+    this.go({ ...this.drill(), asOf: /^\d{4}-\d{2}-\d{2}$/.test(value) ? value : null });
+  }
+
+  protected showAge(age: CashAgingBucket): void {
+    this.go({ ...this.drill(), age, clientId: null });
+  }
+
+  protected showClient(clientId: string): void {
+    this.go({ ...this.drill(), age: null, clientId });
+  }
+
+  protected closeDrill(): void {
+    this.go({ ...this.drill(), age: null, clientId: null });
+  }
+
+  private go(drill: ReceivableDrill): void {
+    void this.router.navigate([], {
+      relativeTo: this.route,
+      queryParams: drillToParams(drill),
+      queryParamsHandling: 'merge',
+      replaceUrl: true,
+    });
+  }
+}

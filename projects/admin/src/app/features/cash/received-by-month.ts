@@ -1,0 +1,93 @@
+import { httpResource } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject } from '@angular/core';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { loadMessage } from '../../shared/forms/load-message';
+import { FormAlert } from '../../shared/ui/form-alert';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { CashChart } from './cash-chart';
+import { barOptions, receivedChart } from './cash-charts';
+import type { CashReceived } from '@layerbook/contracts/types';
+import { monthLabel } from './cash-words';
+
+export const RECEIVED_URL = '/api/cash/received';
+
+/** Cash that came in, month by month for the last twelve months, less the refunds given. */
+@Component({
+  selector: 'lb-received-by-month',
+  imports: [CashChart, FormAlert, MatProgressBarModule, MoneyPipe],
+  template: `
+    <section class="cash-section" aria-labelledby="received-heading">
+      <h2 id="received-heading">Cash received, by month</h2>
+      <lb-form-alert [message]="message()" />
+      @if (received.isLoading()) {
+        <mat-progress-bar mode="indeterminate" aria-label="Loading cash received" />
+      }
+      @if (view(); as r) {
+        @if (chart(); as c) {
+          <lb-cash-chart
+            [data]="c.data"
+            [options]="c.options"
+            summary="Bar chart of cash received in each of the last twelve months, less refunds; its figures are in the table beside it."
+          >
+            <table class="figures-table">
+              <caption>
+                Received in the last 12 months
+              </caption>
+              <thead>
+                <tr>
+                  <th scope="col">Month</th>
+                  <th scope="col" class="num">Payments</th>
+                  <th scope="col" class="num">Refunds</th>
+                  <th scope="col" class="num">Received</th>
+                </tr>
+              </thead>
+              <tbody>
+                @for (month of r.months; track month.month) {
+                  <tr>
+                    <th scope="row">{{ monthLabel(month.month) }}</th>
+                    <td class="num">
+                      {{ month.received | money: r.currency }} <span class="muted">({{ month.paymentCount }})</span>
+                    </td>
+                    <td class="num">
+                      @if (month.refundCount > 0) {
+                        −{{ month.refunded | money: r.currency }} <span class="muted">({{ month.refundCount }})</span>
+                      } @else {
+                        <span class="muted">none</span>
+                      }
+                    </td>
+                    <td class="num">{{ month.net | money: r.currency }}</td>
+                  </tr>
+                }
+              </tbody>
+              <tfoot>
+                <tr>
+                  <th scope="row">Twelve months</th>
+                  <td class="num">{{ r.totals.received | money: r.currency }}</td>
+                  <td class="num">−{{ r.totals.refunded | money: r.currency }}</td>
+                  <td class="num">{{ r.totals.net | money: r.currency }}</td>
+                </tr>
+              </tfoot>
+            </table>
+          </lb-cash-chart>
+          <p class="note">
+            Payments are counted on the day they were received and refunds on the day they were given back. The number of each is in
+            brackets.
+          </p>
+        }
+      }
+    </section>
+  `,
+  styleUrl: './cash-section.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ReceivedByMonth {
+  private readonly locale = inject(LOCALE_ID);
+  protected readonly monthLabel = monthLabel;
+  protected readonly received = httpResource<CashReceived>(() => RECEIVED_URL);
+  protected readonly view = computed(() => (this.received.hasValue() ? this.received.value() : null));
+  protected readonly message = loadMessage(this.received);
+  protected readonly chart = computed(() => {
+    const view = this.view();
+    return view ? { data: receivedChart(view), options: barOptions(view.currency, this.locale) } : null;
+  });
+}
