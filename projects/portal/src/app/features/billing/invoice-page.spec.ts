@@ -32,12 +32,19 @@ describe('the client’s invoice page', () => {
   });
 
   it('back from the card page without paying, it says nothing was charged', async () => {
-    const { text } = await render(openDeposit, 'cancelled');
-    expect(text()).toContain('The payment was not completed and nothing was charged. You can try again.');
+    const { html } = await render(openDeposit, 'cancelled');
+    const notice = html.querySelector('.cancelled[role="status"]');
+    expect(notice?.textContent).toContain('The payment was not completed and nothing was charged. You can try again.');
+    expect(notice?.querySelector('mat-icon')?.textContent).toBe('info');
+    // said before the invoice itself, where the client lands
+    expect(notice?.compareDocumentPosition(html.querySelector('article')!)).toBe(Node.DOCUMENT_POSITION_FOLLOWING);
+    expect(html.querySelector('lb-pay-by-card button')).not.toBeNull();
   });
 
   it('a paid invoice: paid in words, no pay button, its receipt to download', async () => {
-    const { html, text } = await render(paidDeposit);
+    const { html, text } = await render(paidDeposit, 'cancelled');
+    // a payment that went through after all: no word of one not completed
+    expect(text()).not.toContain('not completed');
     expect(text()).toContain('Paid in full. Thank you.');
     expect(html.querySelector('lb-pay-by-card')).toBeNull();
     const row = html.querySelector('lb-receipt-list tbody tr');

@@ -7,6 +7,7 @@ import { RouterLink } from '@angular/router';
 import { INVOICE_KIND_LABELS, type PortalInvoiceDetail } from '@layerbook/contracts/types';
 import { problemMessage, toProblem } from '../../core/errors/problem';
 import { PayByCard } from '../payments/pay-by-card';
+import { CANCELLED_WORDS } from '../payments/payment-words';
 import { ReceiptList } from '../payments/receipt-list';
 import { formatDay, formatMoney } from '../../shared/format/money';
 import { creditNotePdfUrl, invoicePdfUrl, invoiceUrl } from './invoice-api';
@@ -53,7 +54,9 @@ export class InvoicePage {
   protected readonly progressColumns = PROGRESS_COLUMN_WORDS;
   protected readonly pdfUrl = computed(() => invoicePdfUrl(this.id()));
   protected readonly isZero = isZeroAmount;
+  /** back from the card page without paying: said at the top, where the client lands */
   protected readonly wasCancelled = computed(() => this.payment() === 'cancelled');
+  protected readonly cancelledWords = CANCELLED_WORDS;
 
   constructor() {
     effect(() => {

@@ -7,14 +7,13 @@ import { PayByCard } from './pay-by-card';
 import { LEAVE_FOR } from './payment-api';
 import { openDeposit } from './payment-fixtures';
 
-async function render(invoice: PortalInvoiceDetail, wasCancelled = false) {
+async function render(invoice: PortalInvoiceDetail) {
   const leaveFor = vi.fn<(url: string) => void>();
   TestBed.configureTestingModule({
     providers: [provideHttpClient(), provideHttpClientTesting(), { provide: LEAVE_FOR, useValue: leaveFor }],
   });
   const fixture = TestBed.createComponent(PayByCard);
   fixture.componentRef.setInput('invoice', invoice);
-  fixture.componentRef.setInput('wasCancelled', wasCancelled);
   await fixture.whenStable();
   fixture.detectChanges();
   const html = fixture.nativeElement as HTMLElement;
@@ -51,12 +50,6 @@ describe('paying an invoice by card', () => {
     expect(html.querySelector('[role="alert"]')?.textContent).toContain(detail);
     expect(button()?.disabled).toBe(false);
     expect(leaveFor).not.toHaveBeenCalled();
-  });
-
-  it('back from the card page without paying: says nothing was charged, with the button still there', async () => {
-    const { html, button } = await render(openDeposit, true);
-    expect(html.querySelector('[role="status"]')?.textContent).toContain('The payment was not completed and nothing was charged.');
-    expect(button()).not.toBeNull();
   });
 
   it('when paying online is not open: no button, the reason, and the firm’s own way', async () => {

@@ -7,7 +7,7 @@ import { hydratedSignal } from '../../shared/forms/hydrated';
 import { formatMoney } from '../../shared/format/money';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LEAVE_FOR, PaymentApi } from './payment-api';
-import { CANCELLED_WORDS, payButtonLabel } from './payment-words';
+import { payButtonLabel } from './payment-words';
 
 /**
  * How to pay an open invoice: by card on the processor's payment page (the server opens a checkout,
@@ -22,11 +22,6 @@ import { CANCELLED_WORDS, payButtonLabel } from './payment-words';
     <section class="pay" aria-labelledby="pay-heading">
       @if (inv.canPayOnline) {
         <h2 id="pay-heading">Pay online</h2>
-        @if (wasCancelled()) {
-          <p class="cancelled" role="status">
-            <mat-icon aria-hidden="true">info</mat-icon><span>{{ cancelledWords }}</span>
-          </p>
-        }
         <p>You pay on a secure card payment page and come back here when it is done. Your receipt follows by e-mail.</p>
         <lb-form-alert [message]="message()" />
         <button mat-flat-button type="button" [disabled]="!isHydrated() || isBusy()" (click)="pay()">
@@ -62,13 +57,11 @@ import { CANCELLED_WORDS, payButtonLabel } from './payment-words';
     p {
       margin: 0 0 0.75rem;
     }
-    .cancelled,
     .note {
       display: flex;
       gap: 0.5rem;
       align-items: flex-start;
     }
-    .cancelled mat-icon,
     .note mat-icon {
       flex: none;
     }
@@ -85,14 +78,11 @@ export class PayByCard {
   private readonly leaveFor = inject(LEAVE_FOR);
 
   readonly invoice = input.required<PortalInvoiceDetail>();
-  /** back from the card page without paying */
-  readonly wasCancelled = input(false);
 
   protected readonly label = computed(() => {
     const inv = this.invoice();
     return payButtonLabel(formatMoney(inv.amountDue, inv.currency, inv.locale));
   });
-  protected readonly cancelledWords = CANCELLED_WORDS;
   protected readonly isBusy = signal(false);
   protected readonly message = signal<string | null>(null);
   protected readonly isHydrated = hydratedSignal();
