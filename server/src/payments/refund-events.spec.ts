@@ -126,6 +126,11 @@ describe('applyProcessorRefund', () => {
     });
     expect(await f.apply(failed)).toBe('Refund re_fail_1: Refund failed: The refund did not go through: lost or stolen card.');
     expect(await f.money(f.paymentId)).toMatchObject({ status: 'paid', amountPaid: '100.00', refunded: '0.00' });
+    // told later that it went through after all: not recorded on its own, left for a person
+    expect(await f.apply({ ...failed, status: 'succeeded' })).toBe(
+      'Refund re_fail_1: needs attention: the processor says a refund we had marked failed succeeded; nothing recorded',
+    );
+    expect(await f.audit('invoice.refund_needs_attention')).toHaveLength(1);
     const again = await f.refund(f.paymentId, { amount: '100.00', method: 'cheque' });
     expect(again.status).toBe(201);
   });

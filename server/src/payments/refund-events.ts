@@ -34,7 +34,11 @@ const idOf = (value: string | { id: string } | null | undefined): string | null 
  */
 export async function applyProcessorRefund(tx: TenantTx, deps: ReceiptMailDeps, refund: Stripe.Refund, now: Date): Promise<string> {
   const ours = await findOurRefund(tx, refund);
-  if (ours) return `Refund ${refund.id}: ${await settleRefund(tx, deps, SYSTEM_ACTOR, ours, outcomeOf(refund), now)}`;
+  if (ours?.status === 'failed' && refund.status === 'succeeded') {
+    // We were told it failed (and freed its amount), yet the money went back: a person must look.
+    return `Refund ${refund.id}: ${await needsAttention(tx, ours.invoiceId, refund, 'the processor says a refund we had marked failed succeeded')}`;
+  }
+  if (ours) return `Refund ${refund.id}: ${await settleRefund(tx, deps, SYSTEM_ACTOR, ours.id, outcomeOf(refund), now)}`;
   if (refund.status !== 'succeeded')
     return `Refund ${refund.id}: not ours and not succeeded (${refund.status ?? 'no status'}); nothing recorded`;
   const paymentIntentId = idOf(refund.payment_intent);
@@ -42,14 +46,14 @@ export async function applyProcessorRefund(tx: TenantTx, deps: ReceiptMailDeps, 
   return `Refund ${refund.id}: ${await recordDashboardRefund(tx, deps, refund, paymentIntentId, now)}`;
 }
 
-async function findOurRefund(tx: TenantTx, refund: Stripe.Refund): Promise<string | null> {
+async function findOurRefund(tx: TenantTx, refund: Stripe.Refund): Promise<{ id: string; status: string; invoiceId: string } | null> {
   const ourId = refund.metadata?.['refund_id'];
-  const { rows } = await tx.client.query<{ id: string }>(
-    `select id from refunds where tenant_id = $1 and (processor_refund_id = $2 or ($3::text is not null and id::text = $3::text))
+  const { rows } = await tx.client.query<{ id: string; status: string; invoiceId: string }>(
+    `select id, status, invoice_id as "invoiceId" from refunds where tenant_id = $1 and (processor_refund_id = $2 or ($3::text is not null and id::text = $3::text))
       order by (processor_refund_id = $2) desc limit 1`,
     [tx.tenantId, refund.id, ourId ?? null],
   );
-  return rows[0]?.id ?? null;
+  return rows[0] ?? null;
 }
 
 /** A refund made at the processor's dashboard: recorded (succeeded) against our card payment, if it fits what is left. */
