@@ -103,7 +103,7 @@ export function createControls({ state, webhooks, refunds, failures }: ControlDe
     lastEvent: (type) => state.events.filter((e) => e.type === type).at(-1),
     async deliverAgain(eventId, { times = 1, concurrently = false, url } = {}) {
       const event = eventById(state, eventId);
-      const sends = targets(url).flatMap((u) => Array.from({ length: times }, () => () => webhooks.send(event, u, 'again')));
+      const sends = targets(url).flatMap((u) => Array.from({ length: times }, () => () => webhooks.sendExtra(event, u, 'again')));
       if (concurrently) return Promise.all(sends.map((s) => s()));
       const results: DeliveryAttempt[] = [];
       for (const s of sends) results.push(await s());
@@ -112,14 +112,14 @@ export function createControls({ state, webhooks, refunds, failures }: ControlDe
     async deliverStale(eventId, { ageSeconds = 600, url } = {}) {
       const event = eventById(state, eventId);
       const results = await Promise.all(
-        targets(url).map((u) => webhooks.send(event, u, 'stale', 1, { timestamp: state.now() - ageSeconds })),
+        targets(url).map((u) => webhooks.sendExtra(event, u, 'stale', { timestamp: state.now() - ageSeconds })),
       );
       return results[0];
     },
     async deliverBadlySigned(eventId, { url } = {}) {
       const event = eventById(state, eventId);
       const results = await Promise.all(
-        targets(url).map((u) => webhooks.send(event, u, 'badSignature', 1, { secret: 'whsec_not_this_endpoints_secret' })),
+        targets(url).map((u) => webhooks.sendExtra(event, u, 'badSignature', { secret: 'whsec_not_this_endpoints_secret' })),
       );
       return results[0];
     },

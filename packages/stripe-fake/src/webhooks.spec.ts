@@ -85,6 +85,16 @@ describe('webhook deliveries', () => {
     expect(() => verified(before + 6)).toThrow(/No signatures found matching the expected signature/);
   });
 
+  it('waits in idle() for deliveries a control started', async () => {
+    const session = await createSession(rig.stripe);
+    rig.fake.controls.pay(session.id);
+    await rig.fake.controls.idle();
+    const completed = rig.fake.controls.lastEvent('checkout.session.completed')!;
+    void rig.fake.controls.deliverAgain(completed.id, { times: 3, concurrently: true });
+    await rig.fake.controls.idle();
+    expect(rig.fake.controls.attempts(completed.id).map((a) => a.kind)).toEqual(['first', 'again', 'again', 'again']);
+  });
+
   it('holds deliveries and releases them newest first (out of order)', async () => {
     rig.fake.controls.hold();
     const session = await createSession(rig.stripe);

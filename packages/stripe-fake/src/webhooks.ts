@@ -103,8 +103,22 @@ export class WebhookSender {
     return result;
   }
 
+  /** A delivery a test control asks for (no retries); idle() waits for it too. */
+  async sendExtra(
+    event: Stripe.Event,
+    url: string,
+    kind: DeliveryKind,
+    sign: { secret?: string; timestamp?: number } = {},
+  ): Promise<DeliveryAttempt> {
+    try {
+      return await this.send(event, url, kind, 1, sign);
+    } finally {
+      this.settle();
+    }
+  }
+
   /** Posts the event as Stripe does and records the attempt. */
-  async send(
+  private async send(
     event: Stripe.Event,
     url: string,
     kind: DeliveryKind,
