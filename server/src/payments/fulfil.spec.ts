@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { withTenant } from '@layerbook/db';
 import type Stripe from 'stripe';
 import { clientInvoice, invoiceBooks, type PaymentsServer, startPaymentsServer } from './checkout-fixtures';
@@ -38,6 +39,18 @@ const fulfil = (firmId: string, session: Stripe.Checkout.Session) =>
   withTenant(p.t.ctx.pool, firmId, (tx) => fulfilCheckoutSession(tx, deps(), session, p.t.ctx.now(), p.t.ctx.now()));
 
 describe('fulfilling a paid checkout', () => {
+  it('records a paid session whose checkout row was never written, from the invoice its metadata names', async () => {
+    const f = await clientInvoice(p.t, 'Lost Row Plaster');
+    const checkoutId = randomUUID();
+    const session = {
+      ...paidSession('cs_test_lost_row', 25000, 'usd'),
+      metadata: { tenant_id: f.firmId, invoice_id: f.invoiceId, checkout_id: checkoutId },
+    } as Stripe.Checkout.Session;
+    expect((await fulfil(f.firmId, session)).outcome).toBe('Payment RCT-0001 recorded: 250.00 USD');
+    expect(await f.status(checkoutId)).toMatchObject({ state: 'paid', amount: '250.00', receiptNumber: 'RCT-0001' });
+    expect((await invoiceBooks(p.t, f.firmId, f.invoiceId)).status).toBe('paid');
+  });
+
   it('keeps what a card pays beyond the amount due as the client’s credit (a cheque came in meanwhile)', async () => {
     const f = await clientInvoice(p.t, 'Overpaid Plaster');
     const checkout = await f.started();

@@ -1,4 +1,4 @@
-import type { TenantTx } from '@layerbook/db';
+import { isUuid, type TenantTx } from '@layerbook/db';
 import { fromProcessorAmount, minorUnitDigits, toProcessorAmount } from '@layerbook/domain';
 import type Stripe from 'stripe';
 import { localDate } from '../firms/local-date';
@@ -31,6 +31,26 @@ async function lockCheckout(tx: TenantTx, sessionId: string): Promise<CheckoutRo
   return rows[0] ?? null;
 }
 
+/**
+ * A session we created whose checkout row was never written (the server stopped between the
+ * processor's answer and our insert): its metadata names our invoice and checkout, so the row is
+ * written now from what the session asked — the payment is recorded, never lost. Null when the
+ * metadata names no invoice of this firm.
+ */
+async function adoptCheckout(tx: TenantTx, session: Stripe.Checkout.Session): Promise<CheckoutRow | null> {
+  const invoiceId = session.metadata?.['invoice_id'];
+  const checkoutId = session.metadata?.['checkout_id'];
+  const asked = paidAmount(session);
+  if (!invoiceId || !isUuid(invoiceId) || !checkoutId || !isUuid(checkoutId) || !asked) return null;
+  const { rowCount } = await tx.client.query(
+    `insert into checkout_sessions (id, tenant_id, invoice_id, client_id, processor_session_id, amount, currency, url)
+     select $3, i.tenant_id, i.id, i.client_id, $4, $5, $6, $7 from invoices i where i.tenant_id = $1 and i.id = $2
+     on conflict do nothing`,
+    [tx.tenantId, invoiceId, checkoutId, session.id, asked.amount, asked.currency, session.url ?? ''],
+  );
+  return rowCount ? lockCheckout(tx, session.id) : null;
+}
+
 const paymentIntentId = (session: Stripe.Checkout.Session): string | null =>
   typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
 
@@ -61,7 +81,7 @@ export async function fulfilCheckoutSession(
   paidAt: Date,
   now: Date,
 ): Promise<Fulfilment> {
-  const checkout = await lockCheckout(tx, session.id);
+  const checkout = (await lockCheckout(tx, session.id)) ?? (await adoptCheckout(tx, session));
   if (!checkout) return { outcome: `Ignored: no checkout of ours for ${session.id}`, paymentId: null, receiptNumber: null };
   if (session.payment_status !== 'paid') {
     return { outcome: `Waiting: the payment for checkout ${session.id} has not cleared`, paymentId: null, receiptNumber: null };
