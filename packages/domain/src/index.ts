@@ -132,6 +132,15 @@ export type { Opportunity } from './receivables/weighted-pipeline';
 export { weightedPipeline } from './receivables/weighted-pipeline';
 export type { CashForecastInput, ExpectedReceipt, ForecastWeek } from './receivables/cash-forecast';
 export { cashForecast } from './receivables/cash-forecast';
+export type { ClientAging } from './receivables/aging-by-client';
+export { agingByClient } from './receivables/aging-by-client';
+export type { DatedAmount, ReceivedMonth } from './receivables/cash-received';
+export { cashReceivedByMonth, monthsEnding } from './receivables/cash-received';
+export type { ForecastStream } from './receivables/cash-forecast';
+export type { OddsSource } from './receivables/pipeline-deposits';
+export { expectedDeposit, stageOdds } from './receivables/pipeline-deposits';
+export type { EstimatedCosts, Margin } from './receivables/job-money';
+export { averageJobSize, grossMargin, jobMoney, winRate } from './receivables/job-money';
 
 // safety
 export type { Caution, CautionId, SafetyFacts } from './safety/safety-cautions';

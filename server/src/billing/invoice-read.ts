@@ -82,6 +82,7 @@ const FILTERS: Record<InvoiceListQuery['filter'], string> = {
   open: `and i.status in ('issued', 'part_paid')`,
   overdue: `and i.status in ('issued', 'part_paid') and i.due_on < (select today from clock)`,
   paid: `and i.status = 'paid'`,
+  refunded: `and i.status = 'refunded'`,
   void: `and i.status = 'void'`,
 };
 

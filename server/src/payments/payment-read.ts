@@ -17,6 +17,8 @@ interface PaymentRow {
   amount_applied: string;
   amount_refunded: string;
   pending_refunds: string;
+  /** this payment's credit already used on another invoice: no longer the client's to take back */
+  credit_used: string;
   currency: string;
   received_on: string;
   reference: string;
@@ -43,7 +45,9 @@ export async function listInvoicePayments(tx: TenantTx, invoiceId: string): Prom
     `select p.id, p.invoice_id, p.method, p.amount::text as amount, p.amount_applied::text as amount_applied,
             p.amount_refunded::text as amount_refunded, p.currency, p.received_on::text as received_on, p.reference, p.receipt_no,
             coalesce((select sum(r.amount) from refunds r where r.tenant_id = p.tenant_id and r.payment_id = p.id and r.status = 'pending'), 0)::text
-              as pending_refunds
+              as pending_refunds,
+            coalesce((select sum(c.amount) from client_credits c where c.tenant_id = p.tenant_id and c.payment_id = p.id
+                        and c.used_on_invoice_id is not null), 0)::text as credit_used
        from payments p where p.tenant_id = $1 and p.invoice_id = $2 order by p.received_on, p.created_at`,
     [tx.tenantId, invoiceId],
   );
@@ -60,7 +64,10 @@ export async function listInvoicePayments(tx: TenantTx, invoiceId: string): Prom
     amount: moneyOut(p.amount, p.currency),
     amountApplied: moneyOut(p.amount_applied, p.currency),
     amountRefunded: moneyOut(p.amount_refunded, p.currency),
-    refundable: moneyOut(new Decimal(p.amount).minus(p.amount_refunded).minus(p.pending_refunds).toString(), p.currency),
+    refundable: moneyOut(
+      Decimal.max(0, new Decimal(p.amount).minus(p.amount_refunded).minus(p.pending_refunds).minus(p.credit_used)).toString(),
+      p.currency,
+    ),
     currency: p.currency,
     receivedOn: p.received_on,
     reference: p.reference,

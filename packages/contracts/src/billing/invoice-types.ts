@@ -199,7 +199,7 @@ export interface OfflinePaymentCreate {
   readonly reference: string;
 }
 
-export const INVOICE_LIST_FILTERS = ['all', 'drafts', 'open', 'overdue', 'paid', 'void'] as const;
+export const INVOICE_LIST_FILTERS = ['all', 'drafts', 'open', 'overdue', 'paid', 'refunded', 'void'] as const;
 export type InvoiceListFilter = (typeof INVOICE_LIST_FILTERS)[number];
 export const INVOICE_LIST_FILTER_LABELS: Readonly<Record<InvoiceListFilter, string>> = {
   all: 'All',
@@ -207,6 +207,7 @@ export const INVOICE_LIST_FILTER_LABELS: Readonly<Record<InvoiceListFilter, stri
   open: 'Open',
   overdue: 'Overdue',
   paid: 'Paid',
+  refunded: 'Refunded',
   void: 'Void',
 };
 
