@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { type CheckoutStart, INVOICE_KIND_LABELS, type InvoiceKind, type InvoiceStatus } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { toProcessorAmount } from '@layerbook/domain';
+import { DomainInputError, toProcessorAmount } from '@layerbook/domain';
 import type { Request } from 'express';
 import type Stripe from 'stripe';
 import { moneyOut } from '../billing/money';
@@ -59,6 +59,16 @@ function refuseUnpayable(isOnline: boolean, inv: PayableInvoice): void {
   }
 }
 
+/** The amount due in the processor's integer units; an amount it cannot charge is a 409 naming amount. */
+function processorAmount(due: string, currency: string): number {
+  try {
+    return toProcessorAmount(due, currency);
+  } catch (error) {
+    if (!(error instanceof DomainInputError)) throw error;
+    throw conflict(`This amount cannot be paid by card: ${error.message}`, [{ field: 'amount', message: error.message }]);
+  }
+}
+
 const processorDown = () =>
   new HttpError(
     502,
@@ -89,6 +99,7 @@ export async function startCheckout(ctx: AppContext, req: Request, invoiceId: st
   });
   if (plan.reuse) return { url: plan.reuse.url, checkoutId: plan.reuse.id };
   const { inv } = plan;
+  const unitAmount = processorAmount(inv.due, inv.currency);
   const checkoutId = randomUUID();
   const base = ctx.config.PUBLIC_URL.replace(/\/$/, '');
   const metadata = { tenant_id: req.user!.tenantId, invoice_id: inv.id, checkout_id: checkoutId };
@@ -99,7 +110,7 @@ export async function startCheckout(ctx: AppContext, req: Request, invoiceId: st
         quantity: 1,
         price_data: {
           currency: inv.currency.toLowerCase(),
-          unit_amount: toProcessorAmount(inv.due, inv.currency),
+          unit_amount: unitAmount,
           product_data: { name: `${inv.number_text} ${INVOICE_KIND_LABELS[inv.kind]} — ${inv.job_title}` },
         },
       },
