@@ -3,6 +3,7 @@ import Decimal from 'decimal.js';
 import type { IncomingMessage } from 'node:http';
 import { startTestServer, type TestServer } from '../../testing/harness';
 import { EXPORT_BATCH_ROWS } from './csv-stream';
+import { eventually } from '../../payments/checkout-fixtures';
 import { exportFirm } from './export-fixtures';
 
 let t: TestServer;
@@ -40,15 +41,17 @@ describe('a large export is streamed', () => {
           chunks.push(chunk);
           received += chunk.length;
           if (whilePaused) return;
-          // The reader stops after its first chunk: the server must wait for it, in the middle of its cursor.
+          // The reader stops after its first chunk: the server must come to wait for it, in the middle of its cursor
+          // (a server that read everything first would commit instead, and never be found waiting).
           stream.pause();
           whilePaused = { received, session: undefined };
-          setTimeout(() => {
-            void exportSession().then((session) => {
-              whilePaused = { received, session };
-              stream.resume();
-            });
-          }, 300);
+          void eventually(async () => (await exportSession())?.state === 'idle in transaction', 'the export to wait for its reader')
+            .then(async () => {
+              // still waiting a moment later, with nothing more sent
+              await new Promise((resolve) => setTimeout(resolve, 300));
+              whilePaused = { received, session: await exportSession() };
+            })
+            .finally(() => stream.resume());
         });
         stream.on('end', () => done(null, Buffer.concat(chunks)));
       });
@@ -69,5 +72,35 @@ describe('a large export is streamed', () => {
     // Rows in date order, then receipt order
     expect(rows[0]['Received on']).toBe('2026-01-01');
     expect(rows[COUNT - 1]['Received on']).toBe('2026-12-31');
+  });
+
+  it('a reader that goes away mid-file ends the export: its transaction is rolled back and its connection is free again', async () => {
+    const res = await f.agent
+      .get('/api/cash/exports/payments.csv?from=2026-01-01&to=2026-12-31')
+      .buffer(true)
+      .parse((response, done) => {
+        const stream = response as unknown as IncomingMessage;
+        let received = 0;
+        stream.on('data', (chunk: Buffer) => {
+          received += chunk.length;
+          // well into the rows (past the header): the export is reading its cursor
+          if (received < 64 * 1024 || stream.destroyed) return;
+          stream.destroy();
+          done(null, Buffer.alloc(0));
+        });
+      });
+    expect(res.status).toBe(200);
+    const settled = async () => {
+      const busy = t.ctx.pool.totalCount - t.ctx.pool.idleCount;
+      const { rows } = await t.ctx.pool.query<{ n: number }>(
+        `select count(*)::int as n from pg_stat_activity where datname = current_database() and usename = current_user
+            and state like 'idle in transaction%'`,
+      );
+      return busy === 0 && rows[0].n === 0;
+    };
+    await eventually(settled, 'the export to let go of its connection');
+    // and the next export runs to its end
+    const again = await f.agent.get('/api/cash/exports/credit-notes.csv?from=2026-01-01&to=2026-12-31').buffer(true);
+    expect(again.status).toBe(200);
   });
 });
