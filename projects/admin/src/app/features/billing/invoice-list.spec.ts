@@ -3,6 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { ApplicationRef } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
+import { INVOICE_LIST_FILTERS, INVOICE_LIST_FILTER_LABELS } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { issuedSummary } from './invoice-fixtures';
 import { InvoiceList } from './invoice-list';
@@ -27,9 +28,16 @@ describe('the invoice list', () => {
   it('leads with "To review" while drafts wait', async () => {
     const chips = async (hasDrafts: boolean) =>
       [...(await render(hasDrafts)).html.querySelectorAll('mat-chip-option')].map((c) => c.textContent?.trim());
-    expect(await chips(true)).toEqual(['To review', 'All', 'Open', 'Overdue', 'Paid', 'Void']);
+    // the contract's filters in its order ('Refunded' among them once the API lists refunded invoices apart)
+    const labels = INVOICE_LIST_FILTERS.map((f) => INVOICE_LIST_FILTER_LABELS[f]);
+    const withDrafts = await chips(true);
+    expect(withDrafts).toEqual(['To review', ...labels.filter((l) => l !== 'To review')]);
+    expect(withDrafts.slice(0, 5)).toEqual(['To review', 'All', 'Open', 'Overdue', 'Paid']);
     TestBed.resetTestingModule();
-    expect(await chips(false)).toEqual(['All', 'To review', 'Open', 'Overdue', 'Paid', 'Void']);
+    const without = await chips(false);
+    expect(without).toEqual(labels);
+    expect(without.slice(0, 2)).toEqual(['All', 'To review']);
+    expect(without.at(-1)).toBe('Void');
   });
 
   it('shows numbers or "Draft", overdue in words with an icon, in a named keyboard-reachable region, and offers more', async () => {
