@@ -5,8 +5,8 @@ import type { PortalInvoiceSummary } from '@layerbook/contracts/types';
 import { pathFrom, waitForMail } from './support/inbox';
 import { issuedDeposit, sentProposal, setDepositAtAcceptance } from './support/payment-setup';
 import { DEMO } from './support/people';
-import { axeProblems } from './support/phone-checks';
-import { openLive } from './support/phone';
+import { axeProblems, phoneProblems } from './support/phone-checks';
+import { onPhone, openLive } from './support/phone';
 
 const TITLE = 'Stair hall limewash, paid by card';
 const TITLE_AT_ACCEPTANCE = 'Stair hall limewash, deposit paid at signing';
@@ -67,6 +67,7 @@ test('the client pays the e-mailed deposit by card, sees it paid, gets the recei
   const paid = page.getByRole('heading', { level: 2, name: /^Paid — receipt RCT-\d+$/ });
   await expect(paid).toBeVisible({ timeout: 45_000 });
   const receiptNumber = (await paid.textContent())!.replace('Paid — receipt ', '').trim();
+  const returnPath = new URL(page.url()).pathname;
   await expect(page.getByText(`Invoice ${deposit.number} is paid in full.`)).toBeVisible();
   await page.screenshot({ path: 'e2e/.artifacts/payments-paid.png', fullPage: true });
   await expectAccessible(page);
@@ -75,8 +76,8 @@ test('the client pays the e-mailed deposit by card, sees it paid, gets the recei
   await page.getByRole('link', { name: 'Back to the invoice' }).click();
   await expect(page.getByText('Paid in full. Thank you.')).toBeVisible();
   await expect(page.getByRole('button', { name: /by card$/ })).toHaveCount(0);
-  const receipts = page.getByRole('region', { name: 'Receipts for this invoice' });
-  await expect(receipts.getByRole('row').filter({ hasText: receiptNumber })).toContainText('Paid by card online');
+  const receipts = page.getByRole('region', { name: 'Receipts' });
+  await expect(receipts.getByRole('listitem').filter({ hasText: `Receipt ${receiptNumber}` })).toContainText('Paid by card online');
   await expectAccessible(page);
 
   // The receipt e-mail names it and links to the invoice in the portal.
@@ -117,6 +118,21 @@ test('the client pays the e-mailed deposit by card, sees it paid, gets the recei
   await expect(page.getByRole('button', { name: /^Pay .+ by card$/ })).toBeEnabled();
   await page.screenshot({ path: 'e2e/.artifacts/payments-cancelled.png', fullPage: true });
   await expectAccessible(page);
+
+  // The same pages on a phone: axe's rules and our layout checks.
+  const { phone, context: phoneContext } = await onPhone(browser, page);
+  for (const [path, name] of [
+    [`/portal/invoices/${deposit.id}`, 'receipts'],
+    [returnPath, 'paid'],
+    [`/portal/invoices/${other!.id}?payment=cancelled`, 'cancelled'],
+  ] as const) {
+    await openLive(phone, path);
+    await expect(phone.getByRole('heading', { level: 1 })).toBeVisible();
+    await phone.screenshot({ path: `e2e/.artifacts/payments-phone-${name}.png`, fullPage: true });
+    expect(await phoneProblems(phone), path).toEqual([]);
+    expect(await axeProblems(phone), path).toEqual([]);
+  }
+  await phoneContext.close();
   await context.close();
 });
 

@@ -47,11 +47,11 @@ describe('the client’s invoice page', () => {
     expect(text()).not.toContain('not completed');
     expect(text()).toContain('Paid in full. Thank you.');
     expect(html.querySelector('lb-pay-by-card')).toBeNull();
-    const row = html.querySelector('lb-receipt-list tbody tr');
-    expect(row?.querySelector('th')?.textContent?.trim()).toBe('RCT-0007');
-    expect(row?.textContent).toContain('Paid by card online');
+    const row = html.querySelector('lb-receipt-list li');
+    expect(row?.querySelector('strong')?.textContent?.trim()).toBe('Receipt RCT-0007');
+    expect(row?.textContent).toContain('Paid by card online, November 22, 2026');
     expect(row?.textContent).toContain('$1,200.00');
-    expect(row?.textContent).toContain('November 22, 2026');
+    expect(row?.querySelector('mat-icon')?.textContent).toBe('payments');
     const link = row?.querySelector('a[download]');
     expect(link?.getAttribute('href')).toBe('/api/portal/payments/pay-1/receipt.pdf');
     expect(link?.textContent).toContain('Download receipt RCT-0007 (PDF)');

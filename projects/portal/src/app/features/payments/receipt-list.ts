@@ -12,40 +12,23 @@ import { receiptWhat } from './payment-words';
   template: `
     <section aria-labelledby="receipts-heading">
       <h2 id="receipts-heading">Receipts</h2>
-      <div class="table-wrap" tabindex="0" role="region" aria-label="Receipts for this invoice">
-        <table class="lb-table">
-          <thead>
-            <tr>
-              <th scope="col">Receipt</th>
-              <th scope="col">Date</th>
-              <th scope="col">What</th>
-              <th scope="col" class="num">Amount</th>
-              <th scope="col"><span class="lb-visually-hidden">Download</span></th>
-            </tr>
-          </thead>
-          <tbody>
-            @for (r of receipts(); track r.id) {
-              <tr>
-                <th scope="row">{{ r.number }}</th>
-                <td>{{ day(r.on) }}</td>
-                <td>
-                  <span class="what">
-                    <mat-icon aria-hidden="true">{{ r.kind === 'refund' ? 'undo' : 'payments' }}</mat-icon>
-                    {{ what(r) }}
-                  </span>
-                </td>
-                <td class="num">{{ money(r) }}</td>
-                <td>
-                  <a class="pdf" [href]="pdfUrl(r)" download>
-                    <mat-icon aria-hidden="true">download</mat-icon>
-                    Download receipt {{ r.number }} (PDF)
-                  </a>
-                </td>
-              </tr>
-            }
-          </tbody>
-        </table>
-      </div>
+      <ul class="receipts">
+        @for (r of receipts(); track r.id) {
+          <li>
+            <mat-icon aria-hidden="true">{{ r.kind === 'refund' ? 'undo' : 'payments' }}</mat-icon>
+            <div>
+              <p class="head">
+                <strong>Receipt {{ r.number }}</strong> <span class="amount">{{ money(r) }}</span>
+              </p>
+              <p class="what">{{ what(r) }}, {{ day(r.on) }}</p>
+              <a class="pdf" [href]="pdfUrl(r)" download>
+                <mat-icon aria-hidden="true">download</mat-icon>
+                Download receipt {{ r.number }} (PDF)
+              </a>
+            </div>
+          </li>
+        }
+      </ul>
     </section>
   `,
   styles: `
@@ -54,40 +37,46 @@ import { receiptWhat } from './payment-words';
       font-size: 1.15rem;
       margin: 1.5rem 0 0.5rem;
     }
-    .table-wrap {
-      overflow-x: auto;
+    .receipts {
+      list-style: none;
+      margin: 0;
+      padding: 0;
+      max-width: 36rem;
     }
-    .lb-table {
-      width: 100%;
-      border-collapse: collapse;
-    }
-    .lb-table th,
-    .lb-table td {
-      text-align: left;
-      padding: 0.4rem 0.5rem;
+    li {
+      display: flex;
+      gap: 0.75rem;
+      align-items: flex-start;
+      padding: 0.6rem 0;
       border-bottom: 1px solid var(--mat-sys-outline-variant);
-      vertical-align: top;
     }
-    .lb-table thead th {
-      font-weight: 600;
-    }
-    .lb-table tbody th {
-      font-weight: 400;
-      white-space: nowrap;
-    }
-    .what,
-    .pdf {
-      display: inline-flex;
-      gap: 0.3rem;
-      align-items: center;
-    }
-    mat-icon {
+    li mat-icon,
+    .pdf mat-icon {
       flex: none;
     }
-    .num {
-      text-align: right !important;
+    li > div {
+      flex: 1;
+      min-width: 0;
+    }
+    p {
+      margin: 0 0 0.2rem;
+    }
+    .head {
+      display: flex;
+      flex-wrap: wrap;
+      justify-content: space-between;
+      gap: 0 1rem;
+    }
+    .amount {
       font-variant-numeric: tabular-nums;
-      white-space: nowrap;
+    }
+    .what {
+      color: var(--mat-sys-on-surface-variant);
+    }
+    .pdf {
+      display: inline-flex;
+      gap: 0.25rem;
+      align-items: center;
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
