@@ -27,6 +27,8 @@ export async function cashFirm(t: TestServer, firmName: string) {
       issuedOn,
       retainageHeld ?? '0',
     ]);
+    // a progress application means the job is billed by progress (retainage is held on such jobs)
+    if (spec.kind === 'progress') await sql(`update jobs set billing_method = 'progress' where tenant_id = $1 and id = $2`, [f.jobId]);
     return id;
   };
 

@@ -13,6 +13,14 @@ export const DEFAULT_DEPOSIT_SHARE = '0.1';
 /** Days until an open inquiry with no follow-up date is expected to sign (common practice, no source). */
 export const DEFAULT_SIGNING_DAYS = 14;
 
+/** Open invoices' amounts owed by due date, and unbilled schedule lines by expected date; $1 tenant. */
+export const OWED = `select 'i' as kind, i.id, i.due_on::text as date, (i.total - i.amount_paid - i.amount_credited)::text as amount from invoices i
+      where i.tenant_id = $1 and i.status in ('issued', 'part_paid', 'refunded') and i.total - i.amount_paid - i.amount_credited > 0
+     union all
+     select 's', l.id, l.expected_on::text, l.amount::text from payment_schedule_lines l
+       join jobs j on j.tenant_id = l.tenant_id and j.id = l.job_id
+      where l.tenant_id = $1 and l.status in ('draft', 'scheduled', 'ready') and j.status <> 'cancelled' and l.amount > 0`;
+
 export interface Receipt {
   id: string;
   date: string | null;
@@ -23,15 +31,7 @@ export interface Receipt {
 
 /** Open invoices (amount still owed, by due date) and unbilled schedule lines (by the engine's expected date). */
 export async function loadOwed(tx: TenantTx): Promise<{ invoices: Receipt[]; scheduled: Receipt[] }> {
-  const { rows } = await tx.client.query<{ kind: 'i' | 's'; id: string; date: string | null; amount: string }>(
-    `select 'i' as kind, i.id, i.due_on::text as date, (i.total - i.amount_paid - i.amount_credited)::text as amount from invoices i
-      where i.tenant_id = $1 and i.status in ('issued', 'part_paid', 'refunded') and i.total - i.amount_paid - i.amount_credited > 0
-     union all
-     select 's', l.id, l.expected_on::text, l.amount::text from payment_schedule_lines l
-       join jobs j on j.tenant_id = l.tenant_id and j.id = l.job_id
-      where l.tenant_id = $1 and l.status in ('draft', 'scheduled', 'ready') and j.status <> 'cancelled' and l.amount > 0`,
-    [tx.tenantId],
-  );
+  const { rows } = await tx.client.query<{ kind: 'i' | 's'; id: string; date: string | null; amount: string }>(OWED, [tx.tenantId]);
   const pick = (kind: 'i' | 's') => rows.filter((r) => r.kind === kind).map(({ id, date, amount }) => ({ id, date, amount }));
   return { invoices: pick('i'), scheduled: pick('s') };
 }

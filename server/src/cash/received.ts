@@ -7,6 +7,13 @@ import { firmClock } from './firm-clock';
 
 const MONTHS = 12;
 
+/** Payments by received day and refunds that went through by refund day, since $2; $1 tenant. */
+export const RECEIVED_BY_DAY = `select 'p' as kind, received_on::text as day, sum(amount)::text as amount, count(*)::int as n from payments
+      where tenant_id = $1 and received_on >= $2::date group by received_on
+     union all
+     select 'r', refunded_on::text, sum(amount)::text, count(*)::int from refunds
+      where tenant_id = $1 and status = 'succeeded' and refunded_on >= $2::date group by refunded_on`;
+
 /** First day of the month `back` months before the month of `today` (YYYY-MM-DD). */
 function monthStart(today: string, back: number): string {
   const n = Number(today.slice(0, 4)) * 12 + Number(today.slice(5, 7)) - 1 - back;
@@ -20,14 +27,7 @@ function monthStart(today: string, back: number): string {
 export async function cashReceived(tx: TenantTx, now: Date): Promise<CashReceived> {
   const clock = await firmClock(tx, now);
   const from = monthStart(clock.today, MONTHS - 1);
-  const { rows } = await tx.client.query<{ kind: 'p' | 'r'; day: string; amount: string; n: number }>(
-    `select 'p' as kind, received_on::text as day, sum(amount)::text as amount, count(*)::int as n from payments
-      where tenant_id = $1 and received_on >= $2::date group by received_on
-     union all
-     select 'r', refunded_on::text, sum(amount)::text, count(*)::int from refunds
-      where tenant_id = $1 and status = 'succeeded' and refunded_on >= $2::date group by refunded_on`,
-    [tx.tenantId, from],
-  );
+  const { rows } = await tx.client.query<{ kind: 'p' | 'r'; day: string; amount: string; n: number }>(RECEIVED_BY_DAY, [tx.tenantId, from]);
   const of = (kind: 'p' | 'r'): DatedAmount[] =>
     rows.filter((r) => r.kind === kind).map((r) => ({ date: r.day, amount: r.amount, count: r.n }));
   const result = cashReceivedByMonth({ endMonth: clock.today.slice(0, 7), months: MONTHS, payments: of('p'), refunds: of('r') });

@@ -1,0 +1,149 @@
+/**
+ * Cash page API figures: the four /api/cash reads for a firm with 100,000 invoices (the billing
+ * bench's loader) and 20,000 payments, at 10 connections — p95, and the throughput ratio to the
+ * same aggregate query run raw in one tenant transaction (the endpoint's main query; the API also
+ * reads the firm's clock and settings and computes with packages/domain). Figures, not a test.
+ *   npx tsx ops/bench/cash/cash-bench.ts        (PostgreSQL must be up: bash ops/pg-start.sh)
+ */
+import { execFileSync } from 'node:child_process';
+import os from 'node:os';
+import path from 'node:path';
+import { Worker } from 'node:worker_threads';
+import { migrateDatabase } from '@layerbook/db';
+import { Pool } from 'pg';
+import pino from 'pino';
+import { createApp } from '../../../server/src/app';
+import { OWED } from '../../../server/src/cash/forecast-inputs';
+import { JOB_MONEY } from '../../../server/src/cash/jobs-sql';
+import { RECEIVABLES_NOW } from '../../../server/src/cash/receivables-sql';
+import { RECEIVED_BY_DAY } from '../../../server/src/cash/received';
+import { loadConfig } from '../../../server/src/config';
+import type { ObjectStore } from '../../../server/src/files/object-store';
+import { localDate } from '../../../server/src/firms/local-date';
+import { startQueue } from '../../../server/src/queue/job-queue';
+import { DEMO, seedDemo } from '../../../server/src/seed/demo';
+import { testDatabaseUrls } from '../../../server/src/testing/test-env';
+import { INVOICES, loadBillingBench } from '../billing/load';
+import { loadCashBench, PAYMENTS } from './load-payments';
+
+const root = path.resolve(__dirname, '../../..');
+const DB = 'layerbook_bench_cash';
+const CONNECTIONS = 10;
+const REQUESTS = Number(process.env['CASH_BENCH_REQUESTS'] ?? 1_000);
+
+interface Measured {
+  rps: number;
+  p50: number;
+  p95: number;
+}
+type DriverMessage = Measured | { error: string };
+
+const measure = (job: Record<string, unknown>) =>
+  new Promise<Measured>((resolve, reject) => {
+    const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, '..', 'driver.ts'))});`;
+    const worker = new Worker(source, { eval: true, workerData: { concurrency: CONNECTIONS, ...job } });
+    worker.once('message', (m: DriverMessage) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
+    worker.once('error', reject);
+  });
+
+async function main(): Promise<void> {
+  execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: 'inherit' });
+  const urls = testDatabaseUrls(DB);
+  await migrateDatabase(urls.DATABASE_OWNER_URL, path.join(root, 'migrations'));
+  const config = loadConfig({
+    ...urls,
+    NODE_ENV: 'production',
+    SESSION_SECRET: 'bench-session-secret-that-is-long-enough',
+    ROOT_DIR: root,
+    LOG_LEVEL: 'silent',
+    PUBLIC_URL: 'http://localhost',
+    DB_POOL_MAX: String(CONNECTIONS),
+  });
+  const logger = pino({ level: 'silent' });
+  const pool = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
+  const queue = await startQueue(config, logger);
+
+  const loadStart = Date.now();
+  await seedDemo(pool);
+  const firm = (await queue.boss.getDb().executeSql(`select id, time_zone from firms where slug = $1`, [DEMO.firm.slug])).rows as Array<{
+    id: string;
+    time_zone: string;
+  }>;
+  const firmId = firm[0].id;
+  await loadBillingBench(config.DATABASE_OWNER_URL, firmId);
+  await loadCashBench(config.DATABASE_OWNER_URL, firmId);
+  const loadSeconds = ((Date.now() - loadStart) / 1000).toFixed(0);
+
+  const storage: ObjectStore = {
+    put: () => Promise.reject(new Error('This bench stores no files.')),
+    get: () => Promise.resolve(null),
+    delete: () => Promise.resolve(),
+    close: () => undefined,
+  };
+  const now = () => new Date();
+  const app = createApp({ config: { ...config, NODE_ENV: 'development' }, pool, queue, logger, storage, now });
+  const server = app.listen(0, '127.0.0.1');
+  await new Promise((r) => server.once('listening', r));
+  const port = (server.address() as { port: number }).port;
+  const base = `http://127.0.0.1:${port}`;
+
+  // The demo owner (margins included), signed in through the API.
+  const first = await fetch(`${base}/api/auth/session`);
+  const cookie0 = first.headers.get('set-cookie')!.split(';')[0];
+  const csrf0 = ((await first.json()) as { csrfToken: string }).csrfToken;
+  const signedIn = await fetch(`${base}/api/auth/signin`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', cookie: cookie0, 'x-csrf-token': csrf0 },
+    body: JSON.stringify({ email: DEMO.people[0].email, password: DEMO.password }),
+  });
+  if (signedIn.status !== 200) throw new Error(`sign-in failed: ${signedIn.status} ${await signedIn.text()}`);
+  const session = signedIn.headers.get('set-cookie')!.split(';')[0];
+
+  const today = localDate(firm[0].time_zone, now());
+  const yearAgo = `${Number(today.slice(0, 4)) - 1}-${today.slice(5, 7)}-01`;
+  // Counted in the firm's tenant transaction (row-level security sees nothing without it).
+  const tx = await pool.connect();
+  await tx.query('begin');
+  await tx.query(`select set_config('app.tenant_id', $1, true)`, [firmId]);
+  const counts = (
+    await tx.query<{ open: string; payments: string }>(
+      `select (select count(*) from invoices where tenant_id = $1 and status in ('issued', 'part_paid', 'refunded'))::text as open,
+              (select count(*) from payments where tenant_id = $1)::text as payments`,
+      [firmId],
+    )
+  ).rows[0];
+  await tx.query('commit');
+  tx.release();
+  console.log(
+    `cash: ${INVOICES.toLocaleString('en-US')} invoices (${Number(counts.open).toLocaleString('en-US')} open) and ` +
+      `${Number(counts.payments).toLocaleString('en-US')} payments (${PAYMENTS.toLocaleString('en-US')} asked) in the demo firm, ` +
+      `20 other firms × 1,000 invoices (loaded in ${loadSeconds} s); ${REQUESTS} requests, ${CONNECTIONS} connections; ` +
+      `machine: ${os.cpus().length} cores, load average ${os.loadavg()[0].toFixed(1)} at the start`,
+  );
+  const cases: Array<[string, string, { text: string; values: unknown[] }]> = [
+    ['receivables by age', '/api/cash/receivables', { text: RECEIVABLES_NOW, values: [firmId, today] }],
+    ['cash by month', '/api/cash/received', { text: RECEIVED_BY_DAY, values: [firmId, yearAgo] }],
+    ['13-week forecast', '/api/cash/forecast', { text: OWED, values: [firmId] }],
+    ['jobs and margins', '/api/cash/jobs', { text: JOB_MONEY, values: [firmId, 200] }],
+  ];
+  for (const [label, url, sql] of cases) {
+    const httpJob = { mode: 'get', port, path: url, cookie: session };
+    const pgJob = { mode: 'pg', databaseUrl: config.DATABASE_URL, tenantId: firmId, sql };
+    await measure({ ...httpJob, total: 200 }); // warm-up
+    await measure({ ...pgJob, total: 200 });
+    const api = await measure({ ...httpJob, total: REQUESTS });
+    const raw = await measure({ ...pgJob, total: REQUESTS });
+    console.log(
+      `  ${label.padEnd(20)} API ${api.rps.toFixed(0)} req/s (p50 ${api.p50.toFixed(1)} ms, p95 ${api.p95.toFixed(1)} ms) | ` +
+        `raw pg ${raw.rps.toFixed(0)} q/s (p95 ${raw.p95.toFixed(1)} ms) | ratio ${(api.rps / raw.rps).toFixed(2)}  (goal: p95 ≤ 100 ms)`,
+    );
+  }
+  server.close();
+  await queue.stop();
+  await pool.end();
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});
