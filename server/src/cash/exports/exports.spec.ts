@@ -1,4 +1,11 @@
-import type { FirmSettings, InvoiceSummary, KeysetPage } from '@layerbook/contracts';
+import {
+  CASH_AGING_BUCKET_LABELS,
+  CASH_AGING_BUCKETS,
+  type CashReceivables,
+  type FirmSettings,
+  type InvoiceSummary,
+  type KeysetPage,
+} from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { parse } from 'csv-parse/sync';
 import Decimal from 'decimal.js';
@@ -215,5 +222,31 @@ describe('CSV exports for the accountant', () => {
       expect(text).not.toContain('Orla Ochre');
       expect(text).not.toContain('INV-0003');
     }
+  });
+
+  it('receivables as of a day: the same aging as the receivables page, bucket by bucket', async () => {
+    const res = await a.agent.get('/api/cash/exports/receivables.csv?asOf=2026-12-20').buffer(true);
+    expect(res.status).toBe(200);
+    const slug = ((await a.agent.get('/api/firm')).body as FirmSettings).slug;
+    expect(res.headers['content-disposition']).toBe(`attachment; filename="${slug}-receivables-2026-12-20.csv"`);
+    const rows = rowsOf(res);
+    const page = (await a.agent.get('/api/cash/receivables?asOf=2026-12-20')).body as CashReceivables;
+    expect(rows.map((r) => [r['Invoice number'], r['Days past due'], r.Age, r['Amount due']])).toEqual(
+      page.invoices.map((i) => [i.number, String(i.daysPastDue), CASH_AGING_BUCKET_LABELS[i.bucket], i.amountDue]),
+    );
+    // INV-0001: due 3 November, 600.00 open on 20 December — 47 days late (accounting glossaries; common practice)
+    expect(rows.find((r) => r['Invoice number'] === 'INV-0001')).toMatchObject({ 'Days past due': '47', 'Amount due': '600.00' });
+    for (const bucket of CASH_AGING_BUCKETS) {
+      const label = CASH_AGING_BUCKET_LABELS[bucket];
+      expect(sumOf(rows, 'Amount due', (r) => r.Age === label)).toBe(new Decimal(page.buckets[bucket]).toFixed(2));
+    }
+    expect(sumOf(rows, 'Amount due')).toBe(new Decimal(page.total).toFixed(2));
+    expect(sumOf(rows, 'Retainage held')).toBe(new Decimal(page.retainage).toFixed(2));
+
+    const crew = await joinAs(t, a, 'crew');
+    expect((await crew.agent.get('/api/cash/exports/receivables.csv?asOf=nope')).status).toBe(403);
+    const bad = await a.agent.get('/api/cash/exports/receivables.csv?asOf=2026-02-30');
+    expect(bad.status).toBe(400);
+    expect((bad.body as { errors: Array<{ field: string }> }).errors[0].field).toBe('asOf');
   });
 });

@@ -1,35 +1,51 @@
+import { cashReceivablesQuery } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { Router } from 'express';
 import type { AppContext } from '../../context';
 import { withStaff } from '../../http/guards';
+import { parse } from '../../http/validate';
+import { cashReceivables } from '../receivables';
 import { streamCsv } from './csv-stream';
 import { EXPORTS } from './export-kinds';
-import { type ExportRequest, parseExportRequest } from './export-query';
+import { parseExportRequest } from './export-query';
+import { receivablesCsv } from './receivables-csv';
 
-/** `<firm-slug>-<kind>-<from>-<to>.csv`; the slug is kept to the characters a file name may hold everywhere. */
-async function fileName(tx: TenantTx, q: ExportRequest): Promise<string> {
+/** `<firm-slug>-<what>.csv`; the slug is kept to the characters a file name may hold everywhere. */
+async function fileName(tx: TenantTx, what: string): Promise<string> {
   const { rows } = await tx.client.query<{ slug: string }>(`select slug from firms where id = $1`, [tx.tenantId]);
   const slug = (rows[0]?.slug ?? 'firm').replace(/[^a-z0-9-]/gi, '') || 'firm';
-  return `${slug}-${q.kind}-${q.from}-${q.to}.csv`;
+  return `${slug}-${what}.csv`;
 }
+
+const csvHeaders = (name: string) => ({
+  'content-type': 'text/csv; charset=utf-8',
+  'content-disposition': `attachment; filename="${name}"`,
+  'cache-control': 'no-store',
+});
 
 /**
  * CSV exports for the accountant, mounted at /api/cash/exports: `GET /:kind.csv?from=&to=` for
- * invoices, payments, refunds, credit-notes and clients. Owner and office (crew 403 before any
- * parsing); the firm's rows only (its tenant transaction); streamed from one snapshot.
+ * invoices, payments, refunds, credit-notes and clients (streamed from one snapshot), and
+ * `GET /receivables.csv?asOf=` (the receivables page's aging). Owner and office (crew 403 before
+ * any parsing); the firm's rows only (its tenant transaction).
  */
 export function cashExportRoutes(ctx: AppContext): Router {
   const router = Router();
+
+  // The receivables page's aging as of a day (default today in the firm's zone), as the page shows it.
+  router.get('/receivables.csv', async (req, res) => {
+    const file = await withStaff(ctx, req, 'office', async (tx) => {
+      const view = await cashReceivables(tx, ctx.now(), parse(cashReceivablesQuery, req.query).asOf);
+      return { name: await fileName(tx, `receivables-${view.asOf}`), text: receivablesCsv(view) };
+    });
+    res.status(200).set(csvHeaders(file.name)).send(file.text);
+  });
 
   router.get('/:kind.csv', async (req, res) => {
     try {
       await withStaff(ctx, req, 'office', async (tx) => {
         const q = parseExportRequest(req.params, req.query);
-        res.status(200).set({
-          'content-type': 'text/csv; charset=utf-8',
-          'content-disposition': `attachment; filename="${await fileName(tx, q)}"`,
-          'cache-control': 'no-store',
-        });
+        res.status(200).set(csvHeaders(await fileName(tx, `${q.kind}-${q.from}-${q.to}`)));
         await streamCsv(tx, EXPORTS[q.kind], [tx.tenantId, q.from, q.to], res);
       });
     } catch (error) {
