@@ -7,7 +7,7 @@ import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
 import { firmToday, loadBillingJob } from './billing-job';
 import { draftLineInvoice, draftRetainageInvoice } from './drafts';
-import { fitsCurrency } from './money';
+import { decimalsMessage, fitsCurrency } from './money';
 import { billedWorkByLine, draftProgressInvoice, loadValueLines, percentOf } from './progress-invoice';
 
 /** POST /api/jobs/:id/invoices: a draft the office asks for (a schedule line, a progress application, a retainage release). */
@@ -121,7 +121,7 @@ export async function updateDraft(tx: TenantTx, actor: Actor, id: string, body: 
         if (!fitsCurrency(p.storedMaterials, job.currency)) {
           return problems.push({
             field: `${at}.storedMaterials`,
-            message: `Amounts in ${job.currency} have no more decimals than its smallest coin.`,
+            message: decimalsMessage(job.currency),
           });
         }
         if (work.plus(p.storedMaterials).greaterThan(line.scheduled_value)) {

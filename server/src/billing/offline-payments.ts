@@ -4,7 +4,7 @@ import Decimal from 'decimal.js';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
 import { recordPayment, type RecordedPayment } from '../payments/record-payment';
-import { fitsCurrency } from './money';
+import { decimalsMessage, fitsCurrency, moneyOut } from './money';
 
 /**
  * POST /api/invoices/:id/payments — a cheque, transfer or cash received against an open invoice:
@@ -27,10 +27,10 @@ export async function recordOfflinePayment(tx: TenantTx, actor: Actor, id: strin
   const amount = new Decimal(body.amount);
   const due = new Decimal(inv.due);
   if (!fitsCurrency(body.amount, inv.currency)) {
-    throw badRequest([{ field: 'amount', message: `Amounts in ${inv.currency} have no more decimals than its smallest coin.` }]);
+    throw badRequest([{ field: 'amount', message: decimalsMessage(inv.currency) }]);
   }
   if (amount.lessThanOrEqualTo(0)) throw badRequest([{ field: 'amount', message: 'Enter the amount received.' }]);
-  if (amount.greaterThan(due)) throw badRequest([{ field: 'amount', message: `At most the amount due, ${due.toFixed(2)}.` }]);
+  if (amount.greaterThan(due)) throw badRequest([{ field: 'amount', message: `At most the amount due, ${moneyOut(due, inv.currency)}.` }]);
   return recordPayment(tx, actor, {
     invoiceId: id,
     method: body.method,

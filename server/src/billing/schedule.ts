@@ -16,7 +16,7 @@ import { layerMilestones } from '../jobs/jobs';
 import type { JobQueue } from '../queue/job-queue';
 import { type BillingJob, loadBillingJob } from './billing-job';
 import { getJobBilling, loadScheduleLines, type ScheduleLineRow } from './job-billing';
-import { fitsCurrency } from './money';
+import { decimalsMessage, fitsCurrency } from './money';
 import { billedWorkByLine, loadValueLines } from './progress-invoice';
 import { billingTermsFor, loadBillingSettings, toDepositCapRule } from './settings';
 import { enqueueBillingCheck } from './triggers/enqueue';
@@ -42,7 +42,7 @@ function progressScheduleProblems(body: BillingScheduleUpdate, job: BillingJob, 
   body.lines.forEach((l, i) => {
     if (l.role !== 'deposit') return;
     if (!fitsCurrency(l.amount, job.currency)) {
-      problems.push({ field: `lines[${i}].amount`, message: `Amounts in ${job.currency} have no more decimals than its smallest coin.` });
+      problems.push({ field: `lines[${i}].amount`, message: decimalsMessage(job.currency) });
       return;
     }
     const check = checkDeposit(l.amount, rule, job.contract_sum, job.currency);
@@ -285,7 +285,7 @@ export async function updateValueLines(
     if (!fitsCurrency(l.scheduledValue, job.currency)) {
       problems.push({
         field: `lines[${i}].scheduledValue`,
-        message: `Amounts in ${job.currency} have no more decimals than its smallest coin.`,
+        message: decimalsMessage(job.currency),
       });
     }
     if (l.id === undefined) return;

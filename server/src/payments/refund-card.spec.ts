@@ -197,7 +197,7 @@ describe('card refunds through the processor', () => {
     expect((await f.atProcessor()).map((r) => [r.amount, r.currency])).toEqual([[1200, 'jpy']]);
     const half = await f.refund(f.paymentId, { method: 'card', amount: '10.50' });
     expect(half.body).toMatchObject({
-      errors: [{ field: 'amount', message: 'Amounts in JPY have no more decimals than its smallest coin.' }],
+      errors: [{ field: 'amount', message: 'Use whole amounts in JPY.' }],
     });
   });
 

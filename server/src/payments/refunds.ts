@@ -3,7 +3,7 @@ import type { TenantTx } from '@layerbook/db';
 import { DomainInputError, toProcessorAmount } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
-import { fitsCurrency, moneyOut } from '../billing/money';
+import { decimalsMessage, fitsCurrency, moneyOut } from '../billing/money';
 import { localDate } from '../firms/local-date';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
@@ -127,7 +127,7 @@ function checkMethod(p: LockedPayment, method: PaymentMethod, onlinePayments: bo
 /** 400 naming amount: positive, in the currency's coins (and the processor's, for a card), at most what may still be given back. */
 function checkAmount(p: LockedPayment, raw: string, isCard: boolean): number {
   const problem = (message: string) => badRequest([{ field: 'amount', message }]);
-  if (!fitsCurrency(raw, p.currency)) throw problem(`Amounts in ${p.currency} have no more decimals than its smallest coin.`);
+  if (!fitsCurrency(raw, p.currency)) throw problem(decimalsMessage(p.currency));
   const amount = new Decimal(raw);
   if (amount.lessThanOrEqualTo(0)) throw problem('Enter the amount to refund.');
   const refundable = new Decimal(p.amount).minus(p.amount_refunded).minus(p.pending).minus(p.credit_used);
