@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
 import type { ChartOptions } from 'chart.js';
 import { BaseChartDirective } from 'ng2-charts';
 import type { BarData } from './cash-charts';
@@ -14,7 +14,15 @@ import type { BarData } from './cash-charts';
   host: { class: 'lb-cash-chart' },
   template: `
     <div class="canvas-box">
-      <canvas baseChart type="bar" [data]="data()" [options]="options()" role="img" [attr.aria-label]="summary()"></canvas>
+      <canvas
+        baseChart
+        type="bar"
+        [data]="data()"
+        [options]="options()"
+        role="img"
+        [attr.aria-label]="summary()"
+        (chartClick)="chooseBar($event.active)"
+      ></canvas>
     </div>
     <div class="figures">
       <ng-content />
@@ -47,4 +55,11 @@ export class CashChart {
   readonly options = input.required<ChartOptions<'bar'>>();
   /** what the chart shows, in one sentence, for screen readers */
   readonly summary = input.required<string>();
+  /** the index of a bar clicked with the mouse; the table beside offers the same choice by keyboard */
+  readonly barChosen = output<number>();
+
+  protected chooseBar(active: readonly object[] | undefined): void {
+    const first: unknown = active?.[0];
+    if (first && typeof first === 'object' && 'index' in first && typeof first.index === 'number') this.barChosen.emit(first.index);
+  }
 }

@@ -82,6 +82,12 @@ export class Receivables {
     this.go({ ...this.drill(), age, clientId: null });
   }
 
+  /** A bar clicked on the chart: the same list as the age's button in the table. */
+  protected showAgeAt(index: number): void {
+    const age = CASH_AGING_BUCKETS[index];
+    if (age) this.showAge(age);
+  }
+
   protected showClient(clientId: string): void {
     this.go({ ...this.drill(), age: null, clientId });
   }
