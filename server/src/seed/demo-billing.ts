@@ -324,6 +324,8 @@ export async function seedDemoBilling(pool: Pool, firmId: string, people: DemoBi
   await pay(64, hallDeposit, 'cheque', 'all', 'Cheque 1184');
   const hallLayer = await stageLayer(hall);
   await markLayers(hall, 1, hallLayer, 54);
+  // Left unpaid: issued 49 days ago at net 14 it is 35 days late, the cash page's "31–60 days late"
+  // age (e2e/cash.e2e.ts drills into it).
   await issue(49, await lineInvoice(hall, 'milestone'));
   const niche = await changeOrder(
     hall,
