@@ -17,6 +17,8 @@ export async function cashReceivables(tx: TenantTx, now: Date, asOfAsked: string
   const { rows } = await tx.client.query<ReceivableRow>(asOf >= clock.today ? RECEIVABLES_NOW : RECEIVABLES_AS_OF, [tx.tenantId, asOf]);
   // The amount owed is the due part; retainage is carried beside it so the domain keeps it apart.
   const inputs: ReceivableInput[] = rows.map((r) => {
+    if (r.retainage === '0' || r.retainage === '0.00')
+      return { id: r.id, dueDate: r.due_on, amount: r.owed.startsWith('-') ? '0' : r.owed };
     const owed = Decimal.max(new Decimal(r.owed), 0);
     return { id: r.id, dueDate: r.due_on, amount: owed.plus(r.retainage), retainageHeld: r.retainage };
   });

@@ -48,6 +48,7 @@ export function ageReceivables(invoices: readonly ReceivableInput[], asOf: IsoDa
   const today = toDayNumber(asOf, 'asOf');
   const buckets = Object.fromEntries(AGING_BUCKETS.map((b) => [b, new Decimal(0)])) as Record<AgingBucket, Decimal>;
   let retainageTotal = new Decimal(0);
+  const dueDays = new Map<IsoDate, number>();
   const aged = invoices.map((inv, i) => {
     const at = `invoices[${i}]`;
     const amount = toNonNegativeMoney(inv.amount, `${at}.amount`);
@@ -60,7 +61,13 @@ export function ageReceivables(invoices: readonly ReceivableInput[], asOf: IsoDa
     const open = Decimal.max(duePart.minus(paid), 0);
     const overpaid = Decimal.max(paid.minus(duePart), 0);
     const retainageOpen = Decimal.max(retainage.minus(overpaid), 0);
-    const daysPastDue = today - toDayNumber(inv.dueDate, `${at}.dueDate`);
+    // Many invoices share a due date: read each date once (a bad one still fails at its first invoice).
+    let due = dueDays.get(inv.dueDate);
+    if (due === undefined) {
+      due = toDayNumber(inv.dueDate, `${at}.dueDate`);
+      dueDays.set(inv.dueDate, due);
+    }
+    const daysPastDue = today - due;
     const bucket = bucketFor(daysPastDue);
     buckets[bucket] = buckets[bucket].plus(open);
     retainageTotal = retainageTotal.plus(retainageOpen);
