@@ -43,6 +43,11 @@ function expandPath(state: FakeState, target: Json, segments: string[], whole: s
     };
     return;
   }
+  if (field === 'refunds' && target['object'] === 'charge') {
+    const refunds = [...state.refunds.values()].filter((r) => r.charge === target['id']).sort(state.compareNewestFirst);
+    target['refunds'] = { object: 'list', data: refunds, has_more: false, url: `/v1/charges/${String(target['id'])}/refunds` };
+    return;
+  }
   if (!(field in target)) throw invalidRequest(`This property cannot be expanded (${whole}).`, 'expand');
   let value = target[field];
   if (typeof value === 'string') {

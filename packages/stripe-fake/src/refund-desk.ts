@@ -74,13 +74,15 @@ export class RefundDesk {
     return refund;
   }
 
-  /** The charge shows what succeeded refunds took back; charge.refunded says so. */
+  /**
+   * The charge shows what succeeded refunds took back; charge.refunded says so. As Stripe since API
+   * 2022-11-15, the charge does not embed its refunds (only with `expand[]=refunds`): list them.
+   */
   private applyToCharge(charge: Stripe.Charge, cause: EventCause | null): void {
     const previous = { amount_refunded: charge.amount_refunded, refunded: charge.refunded };
     const succeeded = [...this.state.refunds.values()].filter((r) => r.charge === charge.id && r.status === 'succeeded');
     charge.amount_refunded = succeeded.reduce((sum, r) => sum + r.amount, 0);
     charge.refunded = charge.amount_refunded >= charge.amount;
-    charge.refunds = { object: 'list', data: succeeded, has_more: false, url: `/v1/charges/${charge.id}/refunds` };
     this.state.emit('charge.refunded', charge, cause, previous);
   }
 

@@ -44,6 +44,35 @@ describe('refunds, customers and events through the stripe SDK', () => {
     expect(types.filter((t) => t === 'charge.refunded')).toHaveLength(2);
   });
 
+  it('lists refunds by charge or payment_intent, newest first, and does not embed them in the charge', async () => {
+    const pi = await paidIntent();
+    const other = await paidIntent();
+    const first = await rig.stripe.refunds.create({ payment_intent: pi, amount: 10_000 });
+    const second = await rig.stripe.refunds.create({ payment_intent: pi, amount: 20_000, metadata: { refund_id: 'ours-2' } });
+    await rig.stripe.refunds.create({ payment_intent: other, amount: 5_000 });
+    const byIntent: Stripe.ApiList<Stripe.Refund> = await rig.stripe.refunds.list({ payment_intent: pi });
+    expect(byIntent.data.map((r) => r.id)).toEqual([second.id, first.id]);
+    const chargeId = first.charge as string;
+    const page1 = await rig.stripe.refunds.list({ charge: chargeId, limit: 1 });
+    expect(page1).toMatchObject({ has_more: true, data: [{ id: second.id }] });
+    const page2 = await rig.stripe.refunds.list({ charge: chargeId, limit: 1, starting_after: second.id });
+    expect(page2).toMatchObject({ has_more: false, data: [{ id: first.id, metadata: {} }] });
+    await expect(rig.stripe.refunds.list({ payment_intent: 'pi_nobody' })).rejects.toMatchObject({ code: 'resource_missing' });
+
+    // Stripe API 2022-11-15 and later: a Charge carries its PaymentIntent's metadata but no `refunds` list unless expanded.
+    const refunded = rig.fake.controls.lastEvent('charge.refunded')?.data.object as Stripe.Charge;
+    expect(refunded.id).not.toBe(chargeId); // the last one is the other payment's
+    const event = rig.fake.controls
+      .events()
+      .filter((e) => e.type === 'charge.refunded' && e.data.object.id === chargeId)
+      .pop()!;
+    const charge = event.data.object as Stripe.Charge;
+    expect(charge.refunds).toBeUndefined();
+    expect(charge).toMatchObject({ amount_refunded: 30_000, metadata: { tenant_id: 'tenant-1', invoice_id: 'invoice-7' } });
+    const expanded = (await rig.stripe.refunds.retrieve(first.id, { expand: ['charge.refunds'] })).charge as Stripe.Charge;
+    expect(expanded.refunds?.data.map((r) => r.id)).toEqual([second.id, first.id]);
+  });
+
   it('keeps a refund pending until it is settled, counting it against what can be refunded', async () => {
     const pi = await paidIntent();
     rig.fake.controls.refundsStayPending(true);

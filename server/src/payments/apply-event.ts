@@ -4,6 +4,7 @@ import type Stripe from 'stripe';
 import type { PaymentsApplyJob } from '../queue/queues';
 import { expireCheckoutSession, fulfilCheckoutSession } from './fulfil';
 import type { ReceiptMailDeps } from './receipt-mail';
+import { processorFor } from './processor';
 import { applyProcessorRefund } from './refund-events';
 
 export interface ApplyDeps extends ReceiptMailDeps {
@@ -12,6 +13,22 @@ export interface ApplyDeps extends ReceiptMailDeps {
    * transaction. Only the worker-kill test sets it (to stall there); nothing else should.
    */
   readonly afterEffect?: (eventId: string) => Promise<void>;
+}
+
+/**
+ * A charge's refunds, each applied as its own refund event would be. The charge names its firm (it
+ * carries the PaymentIntent's metadata), while a refund made at the processor's dashboard does not,
+ * so its own events are not stored: this is how such a refund is recorded. Since Stripe's API
+ * 2022-11-15 a charge no longer embeds its refunds, so they are listed from the processor.
+ */
+async function applyChargeRefunds(tx: TenantTx, deps: ReceiptMailDeps, charge: Stripe.Charge, now: Date): Promise<string> {
+  const stripe = processorFor(deps.config);
+  if (!stripe) return 'Ignored: online payments are off, so the charge’s refunds cannot be read';
+  const done: string[] = [];
+  for await (const refund of stripe.refunds.list({ charge: charge.id, limit: 100 })) {
+    done.push(await applyProcessorRefund(tx, deps, refund, now));
+  }
+  return done.length ? done.join('; ') : `Ignored: no refunds listed for ${charge.id}`;
 }
 
 /** What one event does, in words; throwing rolls the whole application back and the queue retries it. */
@@ -28,13 +45,8 @@ async function dispatch(tx: TenantTx, deps: ReceiptMailDeps, event: Stripe.Event
     case 'refund.updated':
     case 'refund.failed':
       return applyProcessorRefund(tx, deps, event.data.object, now);
-    case 'charge.refunded': {
-      const refunds = event.data.object.refunds?.data ?? [];
-      if (!refunds.length) return 'Ignored: the refunds come with their own events';
-      const done: string[] = [];
-      for (const refund of refunds) done.push(await applyProcessorRefund(tx, deps, refund, now));
-      return done.join('; ');
-    }
+    case 'charge.refunded':
+      return applyChargeRefunds(tx, deps, event.data.object, now);
     default:
       return `Ignored: ${event.type}`;
   }

@@ -148,7 +148,6 @@ export function newCharge(input: ChargeInput, created: number): Stripe.Charge {
     receipt_number: null,
     receipt_url: null,
     refunded: false,
-    refunds: { object: 'list', data: [], has_more: false, url: `/v1/charges/${id}/refunds` },
     review: null,
     shipping: null,
     source: null,

@@ -2,6 +2,7 @@ import express from 'express';
 import { api, type IdempotencyStore } from '../api';
 import { invalidRequest, resourceMissing } from '../errors';
 import { expand } from '../expand';
+import { createdFilter, paginate } from '../list';
 import { newCustomer } from '../objects/customer';
 import { expandList, int, metadata, onlyKnown, str } from '../params';
 import type { RefundDesk } from '../refund-desk';
@@ -9,7 +10,7 @@ import type { FakeState } from '../state';
 
 const REASONS = ['duplicate', 'fraudulent', 'requested_by_customer'];
 
-/** Customers (create, retrieve), PaymentIntents (retrieve), refunds (create, retrieve). */
+/** Customers (create, retrieve), PaymentIntents (retrieve), refunds (create, retrieve, list by charge or payment_intent). */
 export function paymentRoutes(state: FakeState, store: IdempotencyStore, refunds: RefundDesk) {
   const router = express.Router();
   router.post(
@@ -68,6 +69,22 @@ export function paymentRoutes(state: FakeState, store: IdempotencyStore, refunds
         cause,
       );
       return { body: expand(state, refund, expandList(params)) };
+    }),
+  );
+  router.get(
+    '/v1/refunds',
+    api(store, ({ params }) => {
+      onlyKnown(params, ['charge', 'payment_intent', 'created', 'limit', 'starting_after', 'ending_before', 'expand']);
+      const charge = str(params, 'charge');
+      const paymentIntent = str(params, 'payment_intent');
+      if (charge && !state.charges.has(charge)) throw resourceMissing('charge', charge, 'charge');
+      if (paymentIntent && !state.paymentIntents.has(paymentIntent))
+        throw resourceMissing('payment_intent', paymentIntent, 'payment_intent');
+      const created = createdFilter(params);
+      const all = [...state.refunds.values()]
+        .filter((r) => (!charge || r.charge === charge) && (!paymentIntent || r.payment_intent === paymentIntent) && created(r.created))
+        .sort(state.compareNewestFirst);
+      return { body: expand(state, paginate(all, params, '/v1/refunds', 'refund'), expandList(params)) };
     }),
   );
   router.get(
