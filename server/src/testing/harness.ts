@@ -121,14 +121,16 @@ export async function startTestServer(
       await queue.stop();
       // pg-boss's stop resolves while a loop it started (offWork) still checks, once a second, that
       // every worker has stopped; that check loads a Node module, which fails once jest has torn the
-      // test file down ("Cannot destructure property 'setTimeout'"). Outlive that one last check.
-      await new Promise((resolve) => setTimeout(resolve, 1_100));
+      // test file down ("Cannot destructure property 'setTimeout'"). On a loaded machine a worker
+      // caught mid-fetch needs a second check: outlive two, while the rest closes.
+      const outlive = new Promise((resolve) => setTimeout(resolve, 2_100));
       await pool.end();
       inboxes.delete(app);
       await inbox.close();
       storage.close();
       await s3.stop();
       rmSync(s3Dir, { recursive: true, force: true });
+      await outlive;
     },
   };
 }
