@@ -1,8 +1,9 @@
 import type { PortalInvoiceDetail } from '@layerbook/contracts';
 import request from 'supertest';
 import { insertInvoice } from '../billing/pdf/invoice-fixtures';
-import { otherClientOf } from '../proposals/portal-fixtures';
-import { startTestServer, type TestServer } from '../testing/harness';
+import { otherClientOf, signInByLink } from '../proposals/portal-fixtures';
+import { linkIn } from '../testing/inbox';
+import { newAgent, startTestServer, type TestServer } from '../testing/harness';
 import { clientInvoice, eventually, invoiceBooks, type PaymentsServer, startPaymentsServer, storedEvents } from './checkout-fixtures';
 import { processorFor } from './processor';
 
@@ -72,6 +73,36 @@ describe('starting a card payment from the portal', () => {
     const mail = await p.t.inbox.waitFor((m) => m.subject === 'Receipt RCT-0001 — Checkout Start Plaster');
     expect(mail.text).toContain(`/portal/invoices/${f.invoiceId}`);
     expect(p.t.inbox.messages.filter((m) => m.subject === mail.subject)).toHaveLength(1);
+  });
+
+  it('two starts at once (a double click, a second tab) open one processor session', async () => {
+    const f = await clientInvoice(p.t, 'Checkout Twice Plaster');
+    // A second tab with its own sign-in (requests of one session may queue behind each other).
+    const tab = await newAgent(p.t.app, 'portal');
+    const seen = new Set(p.t.inbox.messages);
+    await tab.agent.post('/api/portal/auth/link').set('x-csrf-token', tab.csrf()).send({ email: f.clientEmail });
+    const mail = await p.t.inbox.waitFor(
+      (m) => !seen.has(m) && JSON.stringify(m.to).includes(f.clientEmail) && /token=/.test(m.text ?? ''),
+    );
+    await signInByLink(tab, linkIn(mail));
+    const fromTab = () => tab.agent.post(`/api/portal/invoices/${f.invoiceId}/checkout`).set('x-csrf-token', tab.csrf()).send({});
+    // The processor is slow to open the first (one failed try, which the SDK retries after a pause): the others arrive meanwhile.
+    p.fake.controls.failNext({
+      method: 'POST',
+      path: '/v1/checkout/sessions',
+      status: 500,
+      shouldRetry: true,
+      error: { type: 'api_error', message: 'Slow.' },
+    });
+    const first = f.start();
+    await new Promise((resolve) => setTimeout(resolve, 150));
+    const answers = await Promise.all([first, fromTab(), f.start(), fromTab()]);
+    expect(answers.map((a) => a.status)).toEqual([201, 201, 201, 201]);
+    const ids = new Set(answers.map((a) => (a.body as { checkoutId: string }).checkoutId));
+    expect(ids.size).toBe(1);
+    const stripe = processorFor(p.t.ctx.config)!;
+    const sessions = (await stripe.checkout.sessions.list({ limit: 100 })).data.filter((s) => s.metadata?.['invoice_id'] === f.invoiceId);
+    expect(sessions).toHaveLength(1);
   });
 
   it('refuses a void or paid invoice, an amount below the smallest card payment, and another client’s invoice', async () => {

@@ -81,13 +81,17 @@ const processorDown = () =>
  * invoice's amount due. An open checkout of the same amount with time left is offered again; else
  * a new Checkout Session is created (idempotency key = our checkout's id, so a retried call opens
  * one) and our checkout row keeps what was asked, to check the processor's answer against.
- * The processor is called between two transactions, never inside one.
+ * The invoice row stays locked from the reuse lookup until the new row is written, so two quick
+ * starts (a double click, a second tab) wait for each other and the second reuses the first's
+ * session. That holds the lock across the processor call, on this invoice only; if the call
+ * fails nothing is written (a session made but not recorded simply expires unpaid, and one paid
+ * anyway is recorded from its event by its metadata).
  */
 export async function startCheckout(ctx: AppContext, req: Request, invoiceId: string): Promise<CheckoutStart> {
   const stripe = processorFor(ctx.config);
   const now = ctx.now();
-  const plan = await withClient(ctx, req, async (tx, client) => {
-    const inv = await loadPayableInvoice(tx, client, invoiceId);
+  return withClient(ctx, req, async (tx, client) => {
+    const inv = await loadPayableInvoice(tx, client, invoiceId, true);
     refuseUnpayable(stripe !== null, inv);
     const { rows } = await tx.client.query<{ id: string; url: string }>(
       `select id, url from checkout_sessions
@@ -95,13 +99,29 @@ export async function startCheckout(ctx: AppContext, req: Request, invoiceId: st
           and created_at > $5::timestamptz - make_interval(secs => $6) order by created_at desc limit 1`,
       [tx.tenantId, inv.id, inv.due, inv.currency, now, CHECKOUT_LIFETIME_SECONDS - REUSE_MARGIN_SECONDS],
     );
-    return { inv, reuse: rows[0] ?? null };
+    if (rows[0]) return { url: rows[0].url, checkoutId: rows[0].id };
+    const checkoutId = randomUUID();
+    const session = await createSession(stripe!, req, inv, checkoutId, ctx.config.PUBLIC_URL, now);
+    await tx.client.query(
+      `insert into checkout_sessions (id, tenant_id, invoice_id, client_id, processor_session_id, amount, currency, url, created_at)
+       values ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
+      [checkoutId, tx.tenantId, inv.id, inv.client_id, session.id, moneyOut(inv.due, inv.currency), inv.currency, session.url, now],
+    );
+    return { url: session.url, checkoutId };
   });
-  if (plan.reuse) return { url: plan.reuse.url, checkoutId: plan.reuse.id };
-  const { inv } = plan;
+}
+
+/** The processor's Checkout Session for the amount due (idempotency key = our checkout id); 502 when it does not answer. */
+async function createSession(
+  stripe: Stripe,
+  req: Request,
+  inv: PayableInvoice,
+  checkoutId: string,
+  publicUrl: string,
+  now: Date,
+): Promise<Stripe.Checkout.Session & { url: string }> {
   const unitAmount = processorAmount(inv.due, inv.currency);
-  const checkoutId = randomUUID();
-  const base = ctx.config.PUBLIC_URL.replace(/\/$/, '');
+  const base = publicUrl.replace(/\/$/, '');
   const metadata = { tenant_id: req.user!.tenantId, invoice_id: inv.id, checkout_id: checkoutId };
   const params: Stripe.Checkout.SessionCreateParams = {
     mode: 'payment',
@@ -124,19 +144,11 @@ export async function startCheckout(ctx: AppContext, req: Request, invoiceId: st
   };
   let session: Stripe.Checkout.Session;
   try {
-    session = await stripe!.checkout.sessions.create(params, { idempotencyKey: checkoutId });
+    session = await stripe.checkout.sessions.create(params, { idempotencyKey: checkoutId });
   } catch (error) {
     req.log?.error({ err: error, invoiceId: inv.id }, 'checkout session not created');
     throw processorDown();
   }
   if (!session.url) throw processorDown();
-  const url = session.url;
-  await withClient(ctx, req, (tx) =>
-    tx.client.query(
-      `insert into checkout_sessions (id, tenant_id, invoice_id, client_id, processor_session_id, amount, currency, url, created_at)
-       values ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
-      [checkoutId, tx.tenantId, inv.id, inv.client_id, session.id, moneyOut(inv.due, inv.currency), inv.currency, url, now],
-    ),
-  );
-  return { url, checkoutId };
+  return { ...session, url: session.url };
 }
