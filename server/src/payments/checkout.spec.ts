@@ -121,6 +121,18 @@ describe('starting a card payment from the portal', () => {
     expect((await f.start(paid)).status).toBe(409);
     expect((await f.start(paid)).body.detail).toBe('Invoice INV-0002 is already paid.');
 
+    // Refunded: the firm gave the money back, so the portal does not chase it.
+    const refunded = await insertInvoice(p.t, f.firmId, f.jobId, { kind: 'milestone', status: 'refunded', number: 5, total: '300.00' });
+    const refusedRefunded = await f.start(refunded);
+    expect([refusedRefunded.status, refusedRefunded.body.detail]).toEqual([
+      409,
+      'The firm gave back what was paid on this invoice, so it is not paid by card here. Please ask the firm.',
+    ]);
+    expect((await f.client.agent.get(`/api/portal/invoices/${refunded}`)).body).toMatchObject({
+      canPayOnline: false,
+      payOnlineNote: 'The firm gave back what was paid on this invoice, so it is not paid by card here. Please ask the firm.',
+    });
+
     // Stripe Docs "Supported currencies" — minimum charge amounts: USD 0.50.
     const small = await insertInvoice(p.t, f.firmId, f.jobId, { kind: 'milestone', status: 'issued', number: 3, total: '0.40' });
     const below = await f.start(small);

@@ -10,7 +10,7 @@ import { withClient } from '../http/guards';
 import type { ClientPrincipal } from '../http/principal';
 import { conflict, HttpError, notFound } from '../http/problem';
 import { clientIdOf } from '../proposals/client-proposals';
-import { payOnlineFor } from './portal-pay';
+import { payOnlineFor, REFUNDED_NOTE } from './portal-pay';
 import { processorFor } from './processor';
 
 /** How long the processor keeps a checkout open (Stripe allows 30 minutes to 24 hours). */
@@ -51,6 +51,7 @@ function refuseUnpayable(isOnline: boolean, inv: PayableInvoice): void {
   if (!isOnline) throw conflict('This firm takes no card payments online; the invoice says how to pay.');
   if (inv.status === 'paid') throw conflict(`Invoice ${inv.number_text} is already paid.`);
   if (inv.status === 'void') throw conflict(`Invoice ${inv.number_text} is void: there is nothing to pay.`);
+  if (inv.status === 'refunded') throw conflict(REFUNDED_NOTE);
   const pay = payOnlineFor(isOnline, { status: inv.status, currency: inv.currency, amountDue: inv.due });
   if (!pay.canPayOnline) {
     throw conflict(pay.payOnlineNote ?? `Nothing is due on invoice ${inv.number_text}.`, [

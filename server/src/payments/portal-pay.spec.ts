@@ -8,8 +8,6 @@ describe('payOnlineFor', () => {
   it('offers a card payment for an open or part-paid invoice with something due, at least the smallest charge', () => {
     expect(payOnlineFor(true, open)).toEqual({ canPayOnline: true, payOnlineNote: null });
     expect(payOnlineFor(true, { ...open, status: 'part_paid' }).canPayOnline).toBe(true);
-    // Refunded: owed again.
-    expect(payOnlineFor(true, { ...open, status: 'refunded' }).canPayOnline).toBe(true);
     // Stripe Docs "Supported currencies" — minimum charge amounts: USD 0.50, JPY ¥50, GBP 0.30.
     expect(payOnlineFor(true, { ...open, amountDue: '0.50' }).canPayOnline).toBe(true);
     expect(payOnlineFor(true, { ...open, currency: 'JPY', amountDue: '50' }).canPayOnline).toBe(true);
@@ -28,6 +26,14 @@ describe('payOnlineFor', () => {
     expect(payOnlineFor(true, { ...open, currency: 'XOF', amountDue: '50000' }).payOnlineNote).toBe(
       'Card payment is not offered in XOF; please pay another way.',
     );
+  });
+
+  it('does not offer a refunded invoice (the firm gave the money back), and says to ask the firm', () => {
+    expect(payOnlineFor(true, { ...open, status: 'refunded' })).toEqual({
+      canPayOnline: false,
+      payOnlineNote: 'The firm gave back what was paid on this invoice, so it is not paid by card here. Please ask the firm.',
+    });
+    expect(payOnlineFor(false, { ...open, status: 'refunded' })).toEqual({ canPayOnline: false, payOnlineNote: null });
   });
 
   it('is silent when online payments are off, nothing is due, or the invoice is not open', () => {

@@ -17,16 +17,22 @@ export type PayOnline =
 const NO: PayOnline = { canPayOnline: false, payOnlineNote: null };
 
 /**
+ * Why a refunded invoice is not offered for card payment: the firm gave the money back (usually
+ * because the work is off), so the portal does not chase it; the office may still record a payment.
+ */
+export const REFUNDED_NOTE = 'The firm gave back what was paid on this invoice, so it is not paid by card here. Please ask the firm.';
+
+/**
  * Whether the client may pay this invoice's amount due by card: online payments are on, the
- * invoice is open, part paid or refunded (owed again) with something due, the processor charges cards in its currency,
+ * invoice is open or part paid with something due (not refunded: see REFUNDED_NOTE), the processor charges cards in its currency,
  * and the amount due is at least the processor's smallest charge there (Stripe Docs "Supported
  * currencies" — minimum charge amounts, via processorMinimumCharge). The portal shows the note
  * where the button would be; starting a checkout refuses with the same words.
  */
 export function payOnlineFor(isOnline: boolean, invoice: PayOnlineInvoice): PayOnline {
   if (!isOnline) return NO;
-  // A refunded invoice is owed again (as recordPayment and the office's payments take it).
-  if (invoice.status !== 'issued' && invoice.status !== 'part_paid' && invoice.status !== 'refunded') return NO;
+  if (invoice.status === 'refunded') return { canPayOnline: false, payOnlineNote: REFUNDED_NOTE };
+  if (invoice.status !== 'issued' && invoice.status !== 'part_paid') return NO;
   const due = new Decimal(invoice.amountDue);
   if (due.lessThanOrEqualTo(0)) return NO;
   const minimum = processorMinimumCharge(invoice.currency);
