@@ -4,12 +4,11 @@ import { withTenant } from '@layerbook/db';
 import { Pool } from 'pg';
 import PgBoss from 'pg-boss';
 import type Stripe from 'stripe';
-import type { JobQueue } from '../queue/job-queue';
 import { startTestServer, type TestServer } from '../testing/harness';
 import { testDatabaseUrls } from '../testing/test-env';
 import { clientInvoice, eventually, invoiceBooks, storedEvents } from './checkout-fixtures';
 import { storeEvent } from './events';
-import { requeueUnapplied } from './reconcile';
+import { type ReconcileQueue, requeueUnapplied } from './reconcile';
 
 // Kill the worker while it applies an event: the payment it wrote dies with its transaction, and
 // the event, still unapplied, is applied once by the next worker.
@@ -76,7 +75,8 @@ it('a worker killed inside the apply transaction leaves no payment; the next wor
   // From here on only the spawned workers apply events: this server's own workers stop.
   await t.stop();
   const db = { ctx: { pool } };
-  const queue: JobQueue = {
+  const queue: ReconcileQueue = {
+    boss,
     send: async (name, data, tx) =>
       void (await boss.send(name, data, { db: { executeSql: (text, values) => tx.client.query(text, values) } })),
   };

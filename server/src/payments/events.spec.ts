@@ -2,6 +2,8 @@ import type { DeliveryAttempt } from '@layerbook/stripe-fake';
 import Stripe from 'stripe';
 import { insertInvoice } from '../billing/pdf/invoice-fixtures';
 import { QUEUES } from '../queue/queues';
+import { storeEvent } from './events';
+import { requeueUnapplied } from './reconcile';
 import {
   WEBHOOK_SECRET,
   clientInvoice,
@@ -150,6 +152,37 @@ describe('webhook: exactly once', () => {
       const books = await invoiceBooks(p.t, f.firmId, invoiceId);
       expect([books.status, books.payments.length]).toEqual(['paid', 1]);
     }
+  });
+
+  it('queues an event that cannot apply yet again at most once per slot, however often the reconciliation runs', async () => {
+    const f = await clientInvoice(p.t, 'Requeue Once Plaster');
+    // A refund of a payment never recorded here: its application fails and is retried, the event stays unapplied.
+    const event = {
+      id: `evt_stuck_${Date.now()}`,
+      object: 'event',
+      type: 'refund.created',
+      created: Math.floor(Date.now() / 1000),
+      data: {
+        object: {
+          id: `re_stuck_${Date.now()}`,
+          object: 'refund',
+          status: 'succeeded',
+          amount: 100,
+          currency: 'usd',
+          payment_intent: 'pi_never',
+          metadata: { tenant_id: f.firmId },
+        },
+      },
+    } as unknown as Stripe.Event;
+    expect(await storeEvent(p.t.ctx.pool, p.t.queue, f.firmId, event, 'webhook')).toBe('stored');
+    const later = new Date(Date.now() + 120_000);
+    for (let run = 0; run < 3; run++) expect(await requeueUnapplied(p.jobsPool, p.t.queue, later)).toBeGreaterThanOrEqual(1);
+    const { rows } = await p.jobsPool.query<{ n: string }>(
+      `select count(*)::text as n from pgboss.job where name = $1 and singleton_key = $2`,
+      [QUEUES.paymentsApply, `apply:${event.id}`],
+    );
+    expect(rows[0].n).toBe('1');
+    expect((await storedEvents(p.t, f.firmId)).find((e) => e.id === event.id)?.applied_at).toBeNull();
   });
 
   it('answers 400 to a missing signature and 200 (not stored) to an event of no firm of ours', async () => {

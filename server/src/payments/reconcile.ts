@@ -2,8 +2,10 @@ import { withGlobal, withTenant } from '@layerbook/db';
 import type { Pool } from 'pg';
 import type { Logger } from 'pino';
 import type Stripe from 'stripe';
+import type PgBoss from 'pg-boss';
 import type { JobQueue } from '../queue/job-queue';
-import { enqueueApply, eventTenant, storeEvent } from './events';
+import { type PaymentsApplyJob, QUEUES } from '../queue/queues';
+import { eventTenant, storeEvent } from './events';
 
 /** The one processor account this server talks to (processor_sync keeps one row per account). */
 export const SYNC_ACCOUNT = 'stripe';
@@ -11,6 +13,15 @@ export const SYNC_ACCOUNT = 'stripe';
 export const RECONCILE_OVERLAP_SECONDS = 300;
 /** A stored event still unapplied this long after it arrived is queued again (its job was lost, or its worker died). */
 export const REQUEUE_AFTER_SECONDS = 60;
+/**
+ * An event is queued again at most once per this many seconds (pg-boss throttles sends with the
+ * same singletonKey to one per slot), so an event that cannot apply yet, or a worker outage, does
+ * not pile a new job (and its retries) onto the queue at every run.
+ */
+export const REQUEUE_SLOT_SECONDS = 60 * 60;
+
+/** The queue, with its pg-boss for the re-queue's throttled send. */
+export type ReconcileQueue = JobQueue & { readonly boss: Pick<PgBoss, 'send'> };
 
 /** The event types whose effects we apply; the rest are not listed. */
 export const APPLIED_EVENT_TYPES = [
@@ -39,7 +50,7 @@ export interface ReconcileReport {
  */
 export async function reconcileEvents(
   pool: Pool,
-  queue: JobQueue,
+  queue: ReconcileQueue,
   stripe: Stripe,
   now: Date,
   logger?: Pick<Logger, 'info' | 'warn'>,
@@ -82,8 +93,12 @@ export async function reconcileEvents(
   return report;
 }
 
-/** Queues again, firm by firm, each stored event not applied REQUEUE_AFTER_SECONDS after it arrived. */
-export async function requeueUnapplied(pool: Pool, queue: JobQueue, now: Date): Promise<number> {
+/**
+ * Queues again, firm by firm, each stored event not applied REQUEUE_AFTER_SECONDS after it arrived,
+ * in the firm's transaction, at most once per event per REQUEUE_SLOT_SECONDS (singletonKey per event).
+ * Returns how many events were due (a throttled send queues nothing).
+ */
+export async function requeueUnapplied(pool: Pool, queue: ReconcileQueue, now: Date): Promise<number> {
   const { rows: firms } = await pool.query<{ id: string }>(`select id from firms`);
   let requeued = 0;
   for (const firm of firms) {
@@ -93,7 +108,14 @@ export async function requeueUnapplied(pool: Pool, queue: JobQueue, now: Date): 
           where tenant_id = $1 and applied_at is null and received_at < $2::timestamptz - make_interval(secs => $3)`,
         [tx.tenantId, now, REQUEUE_AFTER_SECONDS],
       );
-      for (const event of rows) await enqueueApply(tx, queue, event.id);
+      for (const event of rows) {
+        const data: PaymentsApplyJob = { tenantId: tx.tenantId, eventId: event.id };
+        await queue.boss.send(QUEUES.paymentsApply, data, {
+          singletonKey: `apply:${event.id}`,
+          singletonSeconds: REQUEUE_SLOT_SECONDS,
+          db: { executeSql: (text, values) => tx.client.query(text, values) },
+        });
+      }
       return rows.length;
     });
   }
