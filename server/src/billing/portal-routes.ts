@@ -23,7 +23,9 @@ export function portalBillingRoutes(ctx: AppContext): Router {
   });
 
   router.get('/invoices/:id', async (req, res) => {
-    const invoice = await withClient(ctx, req, (tx, client) => getClientInvoice(tx, client, parse(invoiceParam, req.params).id, ctx.now(), ctx.config));
+    const invoice = await withClient(ctx, req, (tx, client) =>
+      getClientInvoice(tx, client, parse(invoiceParam, req.params).id, ctx.now(), ctx.config),
+    );
     res.json(invoice satisfies PortalInvoiceDetail);
   });
 
