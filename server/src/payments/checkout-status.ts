@@ -11,6 +11,22 @@ import { loadPayableInvoice } from './checkout';
 import { expireCheckoutSession, fulfilCheckoutSession } from './fulfil';
 import { processorFor } from './processor';
 
+/** The return page polls every ~1.5 s; the processor is asked about one checkout at most this often (one rate limit for all firms). */
+export const ASK_PROCESSOR_EVERY_MS = 10_000;
+/** When each checkout last asked the processor, in this process (a few servers each ask at most this often). */
+const lastAsked = new Map<string, number>();
+
+/** True (and remembered) when the processor may be asked about this checkout now. */
+function mayAskProcessor(checkoutId: string, nowMs: number): boolean {
+  const last = lastAsked.get(checkoutId);
+  if (last !== undefined && nowMs - last < ASK_PROCESSOR_EVERY_MS && nowMs >= last) return false;
+  lastAsked.set(checkoutId, nowMs);
+  if (lastAsked.size > 5_000) {
+    for (const [id, at] of lastAsked) if (nowMs - at >= ASK_PROCESSOR_EVERY_MS) lastAsked.delete(id);
+  }
+  return true;
+}
+
 interface CheckoutRow {
   id: string;
   processor_session_id: string;
@@ -44,7 +60,8 @@ async function loadCheckout(tx: TenantTx, invoiceId: string, checkoutId: string)
 
 /**
  * GET /api/portal/invoices/:id/checkout/:checkoutId — where the client's payment stands, for the
- * page the processor sends them back to. While our checkout is open it asks the processor once:
+ * page the processor sends them back to. While our checkout is open it asks the processor (at most
+ * once per ASK_PROCESSOR_EVERY_MS per checkout; between asks it answers from our rows):
  * a paid session is fulfilled here and now (the same idempotent fulfilment as the webhook's), a
  * lapsed one is marked expired. `confirming` while the processor has completed the session but the
  * payment is not recorded yet (it has not cleared, or the processor could not be asked).
@@ -55,7 +72,9 @@ export async function checkoutStatus(ctx: AppContext, req: Request, invoiceId: s
     return loadCheckout(tx, invoiceId, checkoutId);
   });
   const stripe = processorFor(ctx.config);
-  if (row.status !== 'open' || !stripe) return withClient(ctx, req, (tx) => readStatus(tx, row));
+  if (row.status !== 'open' || !stripe || !mayAskProcessor(row.id, ctx.now().getTime())) {
+    return withClient(ctx, req, (tx) => readStatus(tx, row));
+  }
   let session: Stripe.Checkout.Session;
   try {
     session = await stripe.checkout.sessions.retrieve(row.processor_session_id);

@@ -52,9 +52,21 @@ describe('starting a card payment from the portal', () => {
     // Nothing is paid while the page is open; the client pays with Stripe's success test card.
     p.fake.controls.hold();
     expect(p.fake.controls.pay(first.sessionId, '4242424242424242').ok).toBe(true);
-    // Back from the processor (the webhook held): the return page's status records the payment itself.
-    const back = await f.status(first.checkoutId);
-    expect(back).toMatchObject({ state: 'paid', receiptNumber: 'RCT-0001' });
+    // The return page polls every 1.5 s: the processor is asked about a checkout at most once per 10 s
+    // (common practice, no source: one account-wide rate limit), in between our rows answer.
+    const asked = jest.spyOn(stripe.checkout.sessions, 'retrieve');
+    expect(await f.status(first.checkoutId)).toMatchObject({ state: 'open' });
+    expect(asked).not.toHaveBeenCalled();
+    // Back from the processor (the webhook held), 11 s on: the return page's status records the payment itself.
+    p.t.setNow(new Date(Date.now() + 11_000));
+    try {
+      const back = await f.status(first.checkoutId);
+      expect(back).toMatchObject({ state: 'paid', receiptNumber: 'RCT-0001' });
+      expect(asked).toHaveBeenCalledTimes(1);
+    } finally {
+      p.t.setNow(null);
+      asked.mockRestore();
+    }
     const books = await invoiceBooks(p.t, f.firmId, f.invoiceId);
     expect(books).toMatchObject({ status: 'paid', amountPaid: '1000.00' });
     expect(books.payments.map((x) => [x.amount, x.amount_applied, x.currency])).toEqual([['600.00', '600.00', 'USD']]);
