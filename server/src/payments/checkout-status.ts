@@ -77,7 +77,7 @@ export async function checkoutStatus(ctx: AppContext, req: Request, invoiceId: s
   }
   let session: Stripe.Checkout.Session;
   try {
-    session = await stripe.checkout.sessions.retrieve(row.processor_session_id);
+    session = await stripe.checkout.sessions.retrieve(row.processor_session_id, { expand: ['payment_intent.latest_charge'] });
   } catch (error) {
     req.log?.warn({ err: error, checkoutId }, 'checkout session not read from the processor');
     return withClient(ctx, req, (tx) => readStatus(tx, row));
@@ -85,6 +85,7 @@ export async function checkoutStatus(ctx: AppContext, req: Request, invoiceId: s
   const tenantId = req.user!.tenantId;
   const deps = { queue: ctx.queue, config: ctx.config };
   if (session.status === 'complete' && session.payment_status === 'paid') {
+    // Dated by when the processor took the money (the expanded charge), not by this poll.
     await withTenant(ctx.pool, tenantId, (tx) => fulfilCheckoutSession(tx, deps, session, ctx.now(), ctx.now()));
   } else if (session.status === 'expired') {
     await withTenant(ctx.pool, tenantId, (tx) => expireCheckoutSession(tx, session));

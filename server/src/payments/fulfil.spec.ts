@@ -73,6 +73,32 @@ describe('fulfilling a paid checkout', () => {
     expect(books.credits).toEqual([{ amount: '100.00', currency: 'USD', note: 'Paid beyond the amount due on INV-0001.' }]);
   });
 
+  it('dates a card payment by when the processor took it, and keeps its PaymentIntent id apart from the reference', async () => {
+    // 15:00 UTC is 10:00 in New York: the same day in the firm's zone.
+    p.t.setNow(new Date('2026-12-05T15:00:00Z'));
+    try {
+      const f = await clientInvoice(p.t, 'Dated Card Plaster');
+      const checkout = await f.started();
+      p.fake.controls.hold();
+      const paid = p.fake.controls.pay(checkout.sessionId);
+      if (!paid.ok) throw new Error(paid.message);
+      // The client comes back two days later: the payment is still dated the day the card was charged.
+      p.t.setNow(new Date('2026-12-07T15:00:00Z'));
+      expect(await f.status(checkout.checkoutId)).toMatchObject({ state: 'paid', receiptNumber: 'RCT-0001' });
+      await p.fake.controls.release();
+      const rows = await withTenant(p.t.ctx.pool, f.firmId, async (tx) => {
+        const { rows } = await tx.client.query<{ received_on: string; reference: string; processor_payment_intent_id: string }>(
+          `select received_on::text as received_on, reference, processor_payment_intent_id from payments where tenant_id = $1 and invoice_id = $2`,
+          [tx.tenantId, f.invoiceId],
+        );
+        return rows;
+      });
+      expect(rows).toEqual([{ received_on: '2026-12-05', reference: '', processor_payment_intent_id: paid.paymentIntent.id }]);
+    } finally {
+      p.t.setNow(null);
+    }
+  });
+
   it('records what was really paid when it differs from the checkout, and says it needs attention', async () => {
     const f = await clientInvoice(p.t, 'Mismatch Plaster', { total: '1000.00' });
     // Less than asked, in the invoice's currency: applied as paid, the invoice part paid.

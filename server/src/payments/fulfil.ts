@@ -54,6 +54,18 @@ async function adoptCheckout(tx: TenantTx, session: Stripe.Checkout.Session): Pr
 const paymentIntentId = (session: Stripe.Checkout.Session): string | null =>
   typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
 
+/**
+ * When the processor took the money: the charge's `created`, or the PaymentIntent's when the
+ * charge is not expanded; `fallback` (the event's time) when the session names only the
+ * PaymentIntent's id — as a webhook's session does.
+ */
+function takenAt(session: Stripe.Checkout.Session, fallback: Date): Date {
+  const intent = session.payment_intent;
+  if (!intent || typeof intent === 'string') return fallback;
+  const charge = intent.latest_charge;
+  return new Date((charge && typeof charge !== 'string' ? charge.created : intent.created) * 1000);
+}
+
 /** The processor's amount in major units, or null when it names a currency we cannot read. */
 function paidAmount(session: Stripe.Checkout.Session): { amount: string; currency: string } | null {
   if (session.amount_total === null || !session.currency) return null;
@@ -72,7 +84,9 @@ function paidAmount(session: Stripe.Checkout.Session): { amount: string; currenc
  * paid (the processor's amount_total and currency) is what is recorded; when it differs from what
  * our checkout asked, the payment is still recorded (a different currency stays whole as the client's
  * credit) and the outcome says it needs attention. The receipt e-mail is queued in the same transaction.
- * `paidAt` dates the payment in the firm's zone.
+ * The payment is dated in the firm's zone by when the processor took it (takenAt; `paidAt` when the
+ * session does not say). A card payment's reference stays empty: the client reads "Payment by card"
+ * and the receipt number, and the processor's PaymentIntent id is kept apart for the office.
  */
 export async function fulfilCheckoutSession(
   tx: TenantTx,
@@ -103,8 +117,8 @@ export async function fulfilCheckoutSession(
     method: 'card',
     amount: paid.amount,
     currency: paid.currency,
-    receivedOn: localDate(zone.time_zone, paidAt),
-    reference: intent ?? session.id,
+    receivedOn: localDate(zone.time_zone, takenAt(session, paidAt)),
+    reference: '',
     processorSessionId: session.id,
     processorPaymentIntentId: intent ?? undefined,
   });
