@@ -60,15 +60,8 @@ async function cardPaid(name: string, money: { total: string; currency: string; 
   if (!paid.ok) throw new Error(`not paid: ${paid.message}`);
   const pi = paid.paymentIntent.id;
   const payment = await f.payDirect({ method: 'card', amount: money.total, processorSessionId: session.id, processorPaymentIntentId: pi });
-  /** The refunds the processor made for this payment (as created; the stand-in lists them through its events). */
-  const atProcessor = async () =>
-    Promise.all(
-      fake.controls
-        .events('refund.created')
-        .map((e) => e.data.object as Stripe.Refund)
-        .filter((r) => r.payment_intent === pi)
-        .map((r) => stripe.refunds.retrieve(r.id)),
-    );
+  /** The refunds the processor made for this payment, oldest first (it lists them newest first). */
+  const atProcessor = async () => (await stripe.refunds.list({ payment_intent: pi, limit: 100 })).data.reverse();
   const refundEvents = () =>
     withTenant(t.ctx.pool, f.firmId, async (tx) => {
       const { rows } = await tx.client.query<{ type: string; applied_at: Date | null; outcome: string | null }>(
@@ -168,6 +161,24 @@ describe('card refunds through the processor', () => {
     expect(again.body).toMatchObject({ id: pending.id, status: 'succeeded', receiptNumber: 'RCT-0002' });
     expect((await f.atProcessor()).map((r) => r.amount)).toEqual([2500]);
     expect((await f.post(`/api/payments/refunds/${pending.id}/send`, {})).status).toBe(409);
+    expect(await f.money(f.paymentId)).toMatchObject({ refunded: '25.00', amountPaid: '75.00' });
+  });
+
+  it('sending again a day later finds the refund the processor made from our first send, rather than making a second', async () => {
+    const f = await cardPaid('Lost Answer Plaster');
+    for (let i = 0; i < 3; i++) {
+      fake.controls.failNext({ method: 'POST', path: '/v1/refunds', status: 500, error: { type: 'api_error', message: 'Down.' } });
+    }
+    const res = await f.refund(f.paymentId, { method: 'card', amount: '25.00' });
+    expect(res.status).toBe(502);
+    const [pending] = (await f.agent.get(`/api/invoices/${f.invoiceId}`)).body.payments[0].refunds as RefundView[];
+    // As if the first send had reached the processor and only its answer was lost; a day on, the processor has
+    // forgotten the idempotency key (Stripe Docs "Idempotent requests": keys are removed after 24 hours).
+    // (No firm in its metadata here, so its events are not filed and cannot settle it first.)
+    const made = await stripe.refunds.create({ payment_intent: f.pi, amount: 2500, metadata: { refund_id: pending.id } });
+    const again = await f.post(`/api/payments/refunds/${pending.id}/send`, {});
+    expect(again.body).toMatchObject({ id: pending.id, status: 'succeeded' });
+    expect((await f.atProcessor()).map((r) => [r.id, r.amount])).toEqual([[made.id, 2500]]);
     expect(await f.money(f.paymentId)).toMatchObject({ refunded: '25.00', amountPaid: '75.00' });
   });
 

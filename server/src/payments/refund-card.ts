@@ -33,21 +33,26 @@ export async function sendCardRefund(stripe: Stripe, tenantId: string, refund: C
 }
 
 /**
- * A pending card refund asked about again: the processor's refund read back when we know its id,
- * else sent again with the same idempotency key (the processor answers with the refund it already
- * made, if it made one, rather than making a second).
+ * A pending card refund asked about again: the processor's refund read back when we know its id;
+ * else the payment's refunds at the processor are listed and the one carrying our refund id in its
+ * metadata is taken; only when none does is it sent again (same idempotency key). Listing first
+ * matters because the processor forgets an idempotency key after 24 hours (Stripe Docs
+ * "Idempotent requests"), so a second send a day later would make a second refund.
  */
 export async function askAgain(
   stripe: Stripe,
   tenantId: string,
   refund: CardRefundToSend & { readonly processorRefundId: string | null },
 ): Promise<CardRefundAnswer> {
-  if (!refund.processorRefundId) return sendCardRefund(stripe, tenantId, refund);
   try {
-    return { kind: 'answered', outcome: outcomeOf(await stripe.refunds.retrieve(refund.processorRefundId)) };
+    if (refund.processorRefundId) return { kind: 'answered', outcome: outcomeOf(await stripe.refunds.retrieve(refund.processorRefundId)) };
+    for await (const made of stripe.refunds.list({ payment_intent: refund.paymentIntentId, limit: 100 })) {
+      if (made.metadata?.['refund_id'] === refund.refundId) return { kind: 'answered', outcome: outcomeOf(made) };
+    }
   } catch (error) {
     return { kind: 'unknown', message: error instanceof Error ? error.message : String(error) };
   }
+  return sendCardRefund(stripe, tenantId, refund);
 }
 
 /** A processor refund object as our outcome: succeeded, failed (or canceled), or still on its way. */
