@@ -114,7 +114,6 @@ export async function startTestServer(
     baseUrl,
     setNow: (d) => (fixedNow = d),
     async stop() {
-      await stripe.stop();
       listener.closeAllConnections();
       await new Promise<void>((resolve) => listener.close(() => resolve()));
       await workers.stop();
@@ -124,6 +123,9 @@ export async function startTestServer(
       // test file down ("Cannot destructure property 'setTimeout'"). On a loaded machine a worker
       // caught mid-fetch needs a second check: outlive two, while the rest closes.
       const outlive = new Promise((resolve) => setTimeout(resolve, 2_100));
+      // The stand-in goes after the queue: a job still talking to it (a refund, a session read) finishes
+      // instead of retrying against a closed port while pg-boss waits for it.
+      await stripe.stop();
       await pool.end();
       inboxes.delete(app);
       await inbox.close();
