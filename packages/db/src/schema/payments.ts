@@ -15,7 +15,7 @@ export const PAYMENT_METHODS_DB = ['card', 'cheque', 'transfer', 'cash'] as cons
  * card through the payment processor's hosted checkout. `amount` is what the client paid;
  * `amount_applied` the part that went on the invoice (at most its amount due) — the rest of an
  * overpayment is a client credit (client_credits), never lost. Each payment has a receipt number
- * from the firm's gapless 'receipt' series, taken in the recording transaction.
+ * from the firm's gapless 'receipt' series, taken in the same transaction that writes the payment.
  * A card payment is unique per checkout session, so fulfilment can run any number of times.
  */
 export const payments = pgTable(
