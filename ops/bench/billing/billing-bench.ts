@@ -5,62 +5,22 @@
  * issuing invoices, p95 with 10 issuers at once. Figures, not a test.
  *   npx tsx ops/bench/billing/billing-bench.ts        (PostgreSQL must be up: bash ops/pg-start.sh)
  */
-import { execFileSync } from 'node:child_process';
 import http from 'node:http';
 import os from 'node:os';
-import path from 'node:path';
-import { Worker } from 'node:worker_threads';
-import { migrateDatabase } from '@layerbook/db';
-import { Pool } from 'pg';
-import pino from 'pino';
-import { createApp } from '../../../server/src/app';
 import { buildInvoiceListQuery } from '../../../server/src/billing/invoice-read';
-import { loadConfig } from '../../../server/src/config';
-import type { ObjectStore } from '../../../server/src/files/object-store';
-import { startQueue } from '../../../server/src/queue/job-queue';
 import { DEMO, seedDemo } from '../../../server/src/seed/demo';
-import { testDatabaseUrls } from '../../../server/src/testing/test-env';
+import { benchDatabase, benchServices, listenBenchApp, measure as measureAt, signInForBench } from '../bench-server';
 import { INVOICES, JOBS, loadBillingBench, makeIssueDrafts } from './load';
 
-const root = path.resolve(__dirname, '../../..');
 const DB = 'layerbook_bench_billing';
 const CONNECTIONS = 10;
 const REQUESTS = 2_000;
 const ISSUES = 1_000;
-
-/** What driver.ts posts back: ops/s and latencies (ms), or why it failed. */
-interface Measured {
-  rps: number;
-  p50: number;
-  p95: number;
-}
-type DriverMessage = Measured | { error: string };
-
-const measure = (job: Record<string, unknown>) =>
-  new Promise<Measured>((resolve, reject) => {
-    // The driver is TypeScript: register tsx's CommonJS hook inside the worker, then load it.
-    const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, '..', 'driver.ts'))});`;
-    const worker = new Worker(source, { eval: true, workerData: { concurrency: CONNECTIONS, ...job } });
-    worker.once('message', (m: DriverMessage) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
-    worker.once('error', reject);
-  });
+const measure = (job: Record<string, unknown>) => measureAt(CONNECTIONS, job);
 
 async function main(): Promise<void> {
-  execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: 'inherit' });
-  const urls = testDatabaseUrls(DB);
-  await migrateDatabase(urls.DATABASE_OWNER_URL, path.join(root, 'migrations'));
-  const config = loadConfig({
-    ...urls,
-    NODE_ENV: 'production',
-    SESSION_SECRET: 'bench-session-secret-that-is-long-enough',
-    ROOT_DIR: root,
-    LOG_LEVEL: 'silent',
-    PUBLIC_URL: 'http://localhost',
-    DB_POOL_MAX: String(CONNECTIONS),
-  });
-  const logger = pino({ level: 'silent' });
-  const pool = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
-  const queue = await startQueue(config, logger);
+  const config = await benchDatabase(DB, CONNECTIONS);
+  const { pool, queue } = await benchServices(config, CONNECTIONS);
 
   // The demo firm, made through the services (its jobs and invoices are real), then 100,000 invoices around it.
   const loadStart = Date.now();
@@ -73,32 +33,9 @@ async function main(): Promise<void> {
   const drafts = await makeIssueDrafts(config.DATABASE_OWNER_URL, firmId, ISSUES + 100);
   const loadSeconds = ((Date.now() - loadStart) / 1000).toFixed(0);
 
-  // The list bench stores no files: a store that refuses uploads keeps the context complete.
-  const storage: ObjectStore = {
-    put: () => Promise.reject(new Error('This bench stores no files.')),
-    get: () => Promise.resolve(null),
-    delete: () => Promise.resolve(),
-    close: () => undefined,
-  };
-  const app = createApp({ config: { ...config, NODE_ENV: 'development' }, pool, queue, logger, storage, now: () => new Date() });
-  const server = app.listen(0, '127.0.0.1');
-  await new Promise((r) => server.once('listening', r));
-  const port = (server.address() as { port: number }).port;
-  const base = `http://127.0.0.1:${port}`;
-
+  const { server, port } = await listenBenchApp(config, { pool, queue });
   // The demo office manager, signed in through the API.
-  const first = await fetch(`${base}/api/auth/session`);
-  const cookie0 = first.headers.get('set-cookie')!.split(';')[0];
-  const csrf0 = ((await first.json()) as { csrfToken: string }).csrfToken;
-  const signedIn = await fetch(`${base}/api/auth/signin`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', cookie: cookie0, 'x-csrf-token': csrf0 },
-    body: JSON.stringify({ email: DEMO.people[1].email, password: DEMO.password }),
-  });
-  if (signedIn.status !== 200) throw new Error(`sign-in failed: ${signedIn.status} ${await signedIn.text()}`);
-  const session = signedIn.headers.get('set-cookie')!.split(';')[0];
-  const csrf = ((await (await fetch(`${base}/api/auth/session`, { headers: { cookie: session } })).json()) as { csrfToken: string })
-    .csrfToken;
+  const { cookie: session, csrf } = await signInForBench(`http://127.0.0.1:${port}`, DEMO.people[1].email, DEMO.password);
 
   const agent = new http.Agent({ keepAlive: true, maxSockets: CONNECTIONS });
   const get = (url: string) =>

@@ -5,63 +5,25 @@
  * reads the firm's clock and settings and computes with packages/domain). Figures, not a test.
  *   npx tsx ops/bench/cash/cash-bench.ts        (PostgreSQL must be up: bash ops/pg-start.sh)
  */
-import { execFileSync } from 'node:child_process';
 import os from 'node:os';
-import path from 'node:path';
-import { Worker } from 'node:worker_threads';
-import { migrateDatabase } from '@layerbook/db';
-import { Pool } from 'pg';
-import pino from 'pino';
-import { createApp } from '../../../server/src/app';
 import { OWED } from '../../../server/src/cash/forecast-inputs';
 import { JOB_MONEY } from '../../../server/src/cash/jobs-sql';
 import { RECEIVABLES_NOW } from '../../../server/src/cash/receivables-sql';
 import { RECEIVED_BY_DAY } from '../../../server/src/cash/received';
-import { loadConfig } from '../../../server/src/config';
-import type { ObjectStore } from '../../../server/src/files/object-store';
 import { localDate } from '../../../server/src/firms/local-date';
-import { startQueue } from '../../../server/src/queue/job-queue';
 import { DEMO, seedDemo } from '../../../server/src/seed/demo';
-import { testDatabaseUrls } from '../../../server/src/testing/test-env';
+import { benchDatabase, benchServices, listenBenchApp, measure as measureAt, signInForBench } from '../bench-server';
 import { INVOICES, loadBillingBench } from '../billing/load';
 import { loadCashBench, PAYMENTS } from './load-payments';
 
-const root = path.resolve(__dirname, '../../..');
 const DB = 'layerbook_bench_cash';
 const CONNECTIONS = 10;
 const REQUESTS = Number(process.env['CASH_BENCH_REQUESTS'] ?? 1_000);
-
-interface Measured {
-  rps: number;
-  p50: number;
-  p95: number;
-}
-type DriverMessage = Measured | { error: string };
-
-const measure = (job: Record<string, unknown>) =>
-  new Promise<Measured>((resolve, reject) => {
-    const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, '..', 'driver.ts'))});`;
-    const worker = new Worker(source, { eval: true, workerData: { concurrency: CONNECTIONS, ...job } });
-    worker.once('message', (m: DriverMessage) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
-    worker.once('error', reject);
-  });
+const measure = (job: Record<string, unknown>) => measureAt(CONNECTIONS, job);
 
 async function main(): Promise<void> {
-  execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: 'inherit' });
-  const urls = testDatabaseUrls(DB);
-  await migrateDatabase(urls.DATABASE_OWNER_URL, path.join(root, 'migrations'));
-  const config = loadConfig({
-    ...urls,
-    NODE_ENV: 'production',
-    SESSION_SECRET: 'bench-session-secret-that-is-long-enough',
-    ROOT_DIR: root,
-    LOG_LEVEL: 'silent',
-    PUBLIC_URL: 'http://localhost',
-    DB_POOL_MAX: String(CONNECTIONS),
-  });
-  const logger = pino({ level: 'silent' });
-  const pool = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
-  const queue = await startQueue(config, logger);
+  const config = await benchDatabase(DB, CONNECTIONS);
+  const { pool, queue } = await benchServices(config, CONNECTIONS);
 
   const loadStart = Date.now();
   await seedDemo(pool);
@@ -74,30 +36,10 @@ async function main(): Promise<void> {
   await loadCashBench(config.DATABASE_OWNER_URL, firmId);
   const loadSeconds = ((Date.now() - loadStart) / 1000).toFixed(0);
 
-  const storage: ObjectStore = {
-    put: () => Promise.reject(new Error('This bench stores no files.')),
-    get: () => Promise.resolve(null),
-    delete: () => Promise.resolve(),
-    close: () => undefined,
-  };
   const now = () => new Date();
-  const app = createApp({ config: { ...config, NODE_ENV: 'development' }, pool, queue, logger, storage, now });
-  const server = app.listen(0, '127.0.0.1');
-  await new Promise((r) => server.once('listening', r));
-  const port = (server.address() as { port: number }).port;
-  const base = `http://127.0.0.1:${port}`;
-
+  const { server, port, base } = await listenBenchApp(config, { pool, queue });
   // The demo owner (margins included), signed in through the API.
-  const first = await fetch(`${base}/api/auth/session`);
-  const cookie0 = first.headers.get('set-cookie')!.split(';')[0];
-  const csrf0 = ((await first.json()) as { csrfToken: string }).csrfToken;
-  const signedIn = await fetch(`${base}/api/auth/signin`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', cookie: cookie0, 'x-csrf-token': csrf0 },
-    body: JSON.stringify({ email: DEMO.people[0].email, password: DEMO.password }),
-  });
-  if (signedIn.status !== 200) throw new Error(`sign-in failed: ${signedIn.status} ${await signedIn.text()}`);
-  const session = signedIn.headers.get('set-cookie')!.split(';')[0];
+  const session = (await signInForBench(base, DEMO.people[0].email, DEMO.password)).cookie;
 
   const today = localDate(firm[0].time_zone, now());
   const yearAgo = `${Number(today.slice(0, 4)) - 1}-${today.slice(5, 7)}-01`;

@@ -4,22 +4,12 @@
  * ratio, and p95 latency at 10 connections, for the first page and a deep page. Figures, not a test.
  *   npx tsx ops/bench/inquiries/list-bench.ts        (PostgreSQL must be up: bash ops/pg-start.sh)
  */
-import { execFileSync } from 'node:child_process';
 import http from 'node:http';
-import { Worker } from 'node:worker_threads';
-import path from 'node:path';
-import { migrateDatabase } from '@layerbook/db';
 import { Pool } from 'pg';
-import pino from 'pino';
-import { createApp } from '../../../server/src/app';
 import { hashPassword } from '../../../server/src/auth/passwords';
-import { loadConfig } from '../../../server/src/config';
-import type { ObjectStore } from '../../../server/src/files/object-store';
 import { buildListQuery } from '../../../server/src/inquiries/list';
-import { startQueue } from '../../../server/src/queue/job-queue';
-import { testDatabaseUrls } from '../../../server/src/testing/test-env';
+import { benchDatabase, benchServices, listenBenchApp, measure as measureAt, signInForBench } from '../bench-server';
 
-const root = path.resolve(__dirname, '../../..');
 const DB = 'layerbook_bench';
 const BIG = 20_000;
 const OTHERS = 20;
@@ -58,43 +48,11 @@ async function seed(ownerUrl: string): Promise<string> {
   return firmIds[0];
 }
 
-/** What driver.ts posts back: ops/s and latencies (ms), or why it failed. */
-interface Measured {
-  rps: number;
-  p50: number;
-  p95: number;
-}
-type DriverMessage = Measured | { error: string };
-
 async function main(): Promise<void> {
-  execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: 'inherit' });
-  const urls = testDatabaseUrls(DB);
-  await migrateDatabase(urls.DATABASE_OWNER_URL, path.join(root, 'migrations'));
-  const firmId = await seed(urls.DATABASE_OWNER_URL);
-
-  const config = loadConfig({
-    ...urls,
-    NODE_ENV: 'production',
-    SESSION_SECRET: 'bench-session-secret-that-is-long-enough',
-    ROOT_DIR: root,
-    LOG_LEVEL: 'silent',
-    PUBLIC_URL: 'http://localhost',
-    DB_POOL_MAX: String(CONNECTIONS),
-  });
-  const logger = pino({ level: 'silent' });
-  const pool = new Pool({ connectionString: config.DATABASE_URL, max: CONNECTIONS });
-  const queue = await startQueue(config, logger);
-  // The list bench stores no files: a store that refuses uploads keeps the context complete.
-  const storage: ObjectStore = {
-    put: () => Promise.reject(new Error('This bench stores no files.')),
-    get: () => Promise.resolve(null),
-    delete: () => Promise.resolve(),
-    close: () => undefined,
-  };
-  const app = createApp({ config: { ...config, NODE_ENV: 'development' }, pool, queue, logger, storage, now: () => new Date() });
-  const server = app.listen(0, '127.0.0.1');
-  await new Promise((r) => server.once('listening', r));
-  const port = (server.address() as { port: number }).port;
+  const config = await benchDatabase(DB, CONNECTIONS);
+  const firmId = await seed(config.DATABASE_OWNER_URL);
+  const { pool, queue } = await benchServices(config, CONNECTIONS);
+  const { server, port, base: origin } = await listenBenchApp(config, { pool, queue });
   const agent = new http.Agent({ keepAlive: true, maxSockets: CONNECTIONS });
 
   // A staff member of the big firm, made straight in the database (sign-up now confirms by e-mail,
@@ -112,16 +70,7 @@ async function main(): Promise<void> {
   await c.query('commit');
   c.release();
   await jobsPool.end();
-  const first = await fetch(`http://127.0.0.1:${port}/api/auth/session`);
-  const cookie = first.headers.get('set-cookie')!.split(';')[0];
-  const csrf = ((await first.json()) as { csrfToken: string }).csrfToken;
-  const signedIn = await fetch(`http://127.0.0.1:${port}/api/auth/signin`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', cookie, 'x-csrf-token': csrf },
-    body: JSON.stringify({ email: 'bench@example.test', password: 'bench-password-2026' }),
-  });
-  if (signedIn.status !== 200) throw new Error(`sign-in failed: ${signedIn.status} ${await signedIn.text()}`);
-  const session = signedIn.headers.get('set-cookie')!.split(';')[0];
+  const session = (await signInForBench(origin, 'bench@example.test', 'bench-password-2026')).cookie;
 
   const get = (url: string) =>
     new Promise<string>((resolve, reject) => {
@@ -139,14 +88,7 @@ async function main(): Promise<void> {
   for (let i = 0; i < 150; i++)
     after = (JSON.parse(await get(`/api/inquiries?limit=100${after ? `&after=${after}` : ''}`)) as { nextCursor: string }).nextCursor;
 
-  const measure = (job: Record<string, unknown>) =>
-    new Promise<Measured>((resolve, reject) => {
-      // The driver is TypeScript: register tsx's CommonJS hook inside the worker, then load it.
-      const source = `require('tsx/cjs'); require(${JSON.stringify(path.join(__dirname, '..', 'driver.ts'))});`;
-      const worker = new Worker(source, { eval: true, workerData: { concurrency: CONNECTIONS, ...job } });
-      worker.once('message', (m: DriverMessage) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
-      worker.once('error', reject);
-    });
+  const measure = (job: Record<string, unknown>) => measureAt(CONNECTIONS, job);
 
   console.log(
     `inquiries list: ${BIG} in one firm, ${OTHERS} other firms × ${PER_OTHER}; ${REQUESTS} requests, ${CONNECTIONS} connections; load from a worker thread`,
