@@ -24,7 +24,8 @@ import type { BarData } from './cash-charts';
         (chartClick)="chooseBar($event.active)"
       ></canvas>
     </div>
-    <div class="figures">
+    <!-- a wide table scrolls sideways on a phone: the box takes focus so a keyboard can scroll it -->
+    <div class="figures" tabindex="0" role="region" [attr.aria-label]="'Figures: ' + summary()">
       <ng-content />
     </div>
   `,

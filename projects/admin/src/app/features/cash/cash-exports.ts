@@ -67,7 +67,7 @@ import { EXPORT_KINDS, defaultExportRange, exportHref, exportRangeProblem } from
     .range {
       display: flex;
       flex-wrap: wrap;
-      gap: 0.5rem 1rem;
+      gap: 1.25rem 1rem;
       margin: 0.5rem 0 1rem;
     }
     .downloads {

@@ -77,29 +77,31 @@ export const FORECAST_URL = '/api/cash/forecast';
           <p class="note">{{ note }}</p>
         }
         @if (f.odds.length > 0) {
-          <table class="odds">
-            <caption>
-              Odds used for open inquiries
-            </caption>
-            <thead>
-              <tr>
-                <th scope="col">Stage</th>
-                <th scope="col" class="num">Open</th>
-                <th scope="col" class="num">Odds</th>
-                <th scope="col">From</th>
-              </tr>
-            </thead>
-            <tbody>
-              @for (stage of f.odds; track stage.stage) {
+          <div class="odds-box" tabindex="0" role="region" aria-label="Odds used for open inquiries">
+            <table class="odds">
+              <caption>
+                Odds used for open inquiries
+              </caption>
+              <thead>
                 <tr>
-                  <th scope="row">{{ stage.label }}</th>
-                  <td class="num">{{ stage.openCount }}</td>
-                  <td class="num">{{ stage.percent }} in 100</td>
-                  <td>{{ stage.source === 'firm' ? 'Your own odds for this stage' : 'A usual figure (your firm has set none)' }}</td>
+                  <th scope="col">Stage</th>
+                  <th scope="col" class="num">Open</th>
+                  <th scope="col" class="num">Odds</th>
+                  <th scope="col">From</th>
                 </tr>
-              }
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                @for (stage of f.odds; track stage.stage) {
+                  <tr>
+                    <th scope="row">{{ stage.label }}</th>
+                    <td class="num">{{ stage.openCount }}</td>
+                    <td class="num">{{ stage.percent }} in 100</td>
+                    <td>{{ stage.source === 'firm' ? 'Your own odds for this stage' : 'A usual figure (your firm has set none)' }}</td>
+                  </tr>
+                }
+              </tbody>
+            </table>
+          </div>
         }
       }
     </section>
