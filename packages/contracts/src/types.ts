@@ -32,3 +32,4 @@ export * from './billing/change-order-types';
 export * from './billing/portal-billing-types';
 export * from './payments/payment-types';
 export * from './cash/cash-types';
+export * from './jobs/sheet-types';

@@ -1,15 +1,26 @@
 import { APP_BASE_HREF } from '@angular/common';
 import { provideHttpClient, withFetch, withInterceptors } from '@angular/common/http';
-import { ApplicationConfig, provideBrowserGlobalErrorListeners, provideZonelessChangeDetection } from '@angular/core';
+import {
+  ApplicationConfig,
+  type EnvironmentProviders,
+  type Provider,
+  provideBrowserGlobalErrorListeners,
+  provideZonelessChangeDetection,
+} from '@angular/core';
 import { MAT_FORM_FIELD_DEFAULT_OPTIONS } from '@angular/material/form-field';
 import { MAT_ICON_DEFAULT_OPTIONS } from '@angular/material/icon';
 import { provideClientHydration, withEventReplay, withHttpTransferCacheOptions } from '@angular/platform-browser';
 import { Routes, provideRouter, withComponentInputBinding } from '@angular/router';
 import { apiInterceptorFor } from '../http/api-interceptor';
 import { ApiSettings, isSessionCall } from '../http/api-settings';
+import { provideI18n } from '../i18n/i18n-providers';
 
 /** Both apps' browser configuration: the same providers, told apart by their API settings. */
-export function appConfigFor(settings: ApiSettings, routes: Routes): ApplicationConfig {
+export function appConfigFor(
+  settings: ApiSettings,
+  routes: Routes,
+  appProviders: Array<Provider | EnvironmentProviders> = [],
+): ApplicationConfig {
   return {
     providers: [
       provideBrowserGlobalErrorListeners(),
@@ -33,6 +44,8 @@ export function appConfigFor(settings: ApiSettings, routes: Routes): Application
         provide: MAT_FORM_FIELD_DEFAULT_OPTIONS,
         useValue: { appearance: 'outline', subscriptSizing: 'dynamic' },
       },
+      provideI18n(),
+      ...appProviders,
     ],
   };
 }

@@ -2,7 +2,32 @@ import { FetchBackend, HttpBackend } from '@angular/common/http';
 import { ApplicationConfig, inject, mergeApplicationConfig } from '@angular/core';
 import { RenderMode, ServerRoute, provideServerRendering, withRoutes } from '@angular/ssr';
 import { map } from 'rxjs';
+import { readFile } from 'node:fs/promises';
 import { transferable } from '../http/api-interceptor';
+import { TRANSLATION_FILES } from '../i18n/translation-loader';
+
+/**
+ * The app's merged words beside its browser files (`dist/<app>/browser/i18n/<lang>.json`; this code
+ * runs from `dist/<app>/server/`), read once per process.
+ */
+const wordsByLanguage = new Map<string, Promise<Record<string, unknown>>>();
+function translationFiles(language: string): Promise<Record<string, unknown>> {
+  if (!/^[a-z]{2}$/.test(language)) return Promise.resolve({});
+  let words = wordsByLanguage.get(language);
+  if (!words) {
+    words = readFile(new URL(`../browser/i18n/${language}.json`, import.meta.url), 'utf8').then(
+      (text) => JSON.parse(text) as Record<string, unknown>,
+      // The build's route extraction runs the app away from dist/; a missing file shows keys, never a failed page.
+      (error: unknown) => {
+        console.error(`Words for "${language}" could not be read`, error);
+        wordsByLanguage.delete(language);
+        return {};
+      },
+    );
+    wordsByLanguage.set(language, words);
+  }
+  return words;
+}
 
 /** Every page depends on who is signed in, so each is rendered per request. */
 const SERVER_ROUTES: ServerRoute[] = [{ path: '**', renderMode: RenderMode.Server }];
@@ -20,6 +45,10 @@ function transferableBackend(): HttpBackend {
 /** An app's browser configuration plus server rendering of its routes. */
 export function serverConfigFor(appConfig: ApplicationConfig): ApplicationConfig {
   return mergeApplicationConfig(appConfig, {
-    providers: [provideServerRendering(withRoutes(SERVER_ROUTES)), { provide: HttpBackend, useFactory: transferableBackend }],
+    providers: [
+      provideServerRendering(withRoutes(SERVER_ROUTES)),
+      { provide: HttpBackend, useFactory: transferableBackend },
+      { provide: TRANSLATION_FILES, useValue: translationFiles },
+    ],
   });
 }

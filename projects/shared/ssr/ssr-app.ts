@@ -32,6 +32,8 @@ export function createSsrApp(options: SsrAppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
   const angularApp = new AngularNodeAppEngine();
+  // Words change with each release under the same name: revalidated (ETag) rather than kept a year.
+  app.use('/i18n', express.static(`${options.browserDistFolder}/i18n`, { maxAge: 0, index: false, redirect: false }));
   app.use(
     express.static(options.browserDistFolder, {
       maxAge: '1y',

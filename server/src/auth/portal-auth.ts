@@ -1,4 +1,5 @@
-import { and, eq, firms, isNull, isUuid, portalLinks, portalUsers, TenantTx, withLookup, withTenant } from '@layerbook/db';
+import type { Language } from '@layerbook/contracts';
+import { and, clients, eq, firms, isNull, isUuid, portalLinks, portalUsers, sql, TenantTx, withLookup, withTenant } from '@layerbook/db';
 import type { Pool } from 'pg';
 import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
@@ -88,31 +89,60 @@ interface ClientRow {
   email: string;
   status: string;
   firm_name: string;
+  language: Language;
+  country: string;
   session_live: boolean;
 }
 
 /** The client's row as literal SQL for the first round trip of a request's transaction (see staffRowSql). */
 export function clientRowSql(tenantId: string, portalUserId: string, sessionId: string | null): string {
   if (!isUuid(tenantId) || !isUuid(portalUserId)) throw new Error('clientRowSql needs ids');
-  return `select p.name, p.email, p.status, f.name as firm_name, ${sessionLiveSql(sessionId, portalUserId)} as session_live
-            from portal_users p join firms f on f.id = p.tenant_id where p.tenant_id = '${tenantId}' and p.id = '${portalUserId}'`;
+  return `select p.name, p.email, p.status, f.name as firm_name, coalesce(c.language, f.language) as language, f.country,
+                 ${sessionLiveSql(sessionId, portalUserId)} as session_live
+            from portal_users p join firms f on f.id = p.tenant_id left join clients c on c.id = p.client_id where p.tenant_id = '${tenantId}' and p.id = '${portalUserId}'`;
 }
 
 export function toClientPrincipal(tenantId: string, portalUserId: string, row: ClientRow | undefined): ClientPrincipal | null {
   if (!row || row.status !== 'active' || !row.session_live) return null;
-  return { kind: 'client', id: portalUserId, tenantId, name: row.name, email: row.email, firmName: row.firm_name };
+  return {
+    kind: 'client',
+    id: portalUserId,
+    tenantId,
+    name: row.name,
+    email: row.email,
+    firmName: row.firm_name,
+    language: row.language,
+    country: row.country,
+  };
 }
 
 /** Loads a portal client inside the request's firm transaction (see loadStaffInTx). */
 export async function loadClientInTx(tx: TenantTx, portalUserId: string): Promise<ClientPrincipal | null> {
   {
     const rows = await tx.db
-      .select({ name: portalUsers.name, email: portalUsers.email, status: portalUsers.status, firmName: firms.name })
+      .select({
+        name: portalUsers.name,
+        email: portalUsers.email,
+        status: portalUsers.status,
+        firmName: firms.name,
+        language: sql<Language>`coalesce(${clients.language}, ${firms.language})`,
+        country: firms.country,
+      })
       .from(portalUsers)
       .innerJoin(firms, eq(firms.id, portalUsers.tenantId))
+      .leftJoin(clients, eq(clients.id, portalUsers.clientId))
       .where(and(eq(portalUsers.tenantId, tx.tenantId), eq(portalUsers.id, portalUserId)));
     const row = rows[0];
     if (!row || row.status !== 'active') return null;
-    return { kind: 'client', id: portalUserId, tenantId: tx.tenantId, name: row.name, email: row.email, firmName: row.firmName };
+    return {
+      kind: 'client',
+      id: portalUserId,
+      tenantId: tx.tenantId,
+      name: row.name,
+      email: row.email,
+      firmName: row.firmName,
+      language: row.language,
+      country: row.country,
+    };
   }
 }

@@ -10,7 +10,17 @@ import { redeemPortalLink, requestPortalLink } from './portal-auth';
 async function portalSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<PortalSession> {
   const client = await signedInClient(ctx, req);
   return {
-    client: client ? { id: client.id, name: client.name, email: client.email, firmId: client.tenantId, firmName: client.firmName } : null,
+    client: client
+      ? {
+          id: client.id,
+          name: client.name,
+          email: client.email,
+          firmId: client.tenantId,
+          firmName: client.firmName,
+          language: client.language,
+          country: client.country,
+        }
+      : null,
     csrfToken: csrfToken(ctx.config, req, res, fresh),
   };
 }

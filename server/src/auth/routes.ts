@@ -28,7 +28,18 @@ export async function staffSession(ctx: AppContext, req: Request, res: Response,
   const user = await signedInStaff(ctx, req);
   return {
     user: user
-      ? { id: user.id, name: user.name, email: user.email, role: user.role, firmId: user.tenantId, firmName: user.firmName }
+      ? {
+          id: user.id,
+          name: user.name,
+          email: user.email,
+          role: user.role,
+          firmId: user.tenantId,
+          firmName: user.firmName,
+          language: user.language,
+          ownLanguage: user.ownLanguage,
+          units: user.units,
+          country: user.country,
+        }
       : null,
     csrfToken: csrfToken(ctx.config, req, res, fresh),
   };

@@ -1,5 +1,6 @@
 import { isUuid, withTenant, TenantTx } from '@layerbook/db';
 import type { Pool } from 'pg';
+import type { Language, UnitSystem } from '@layerbook/contracts';
 import type { StaffPrincipal } from '../http/principal';
 import { isSessionId } from '../http/session';
 
@@ -16,6 +17,10 @@ interface StaffRow {
   firm_name: string;
   time_zone: string;
   currency: string;
+  language: Language;
+  own_language: Language | null;
+  units: UnitSystem;
+  country: string;
   /** false when the request's session has ended in the database (signed out or expired elsewhere) */
   session_live?: boolean;
 }
@@ -29,6 +34,7 @@ interface StaffRow {
 export function staffRowSql(tenantId: string, userId: string, sessionId: string | null = null): string {
   if (!isUuid(tenantId) || !isUuid(userId)) throw new Error('staffRowSql needs ids');
   return `select m.id as membership_id, m.role, m.status, u.name, u.email, f.name as firm_name, f.time_zone, f.currency,
+                 coalesce(m.language, f.language) as language, m.language as own_language, f.units, f.country,
                  ${sessionLiveSql(sessionId, userId)} as session_live
             from memberships m join users u on u.id = m.user_id join firms f on f.id = m.tenant_id
            where m.tenant_id = '${tenantId}' and m.user_id = '${userId}'`;
@@ -54,6 +60,10 @@ export function toStaffPrincipal(tenantId: string, userId: string, row: StaffRow
     firmName: row.firm_name,
     timeZone: row.time_zone,
     currency: row.currency,
+    language: row.language,
+    ownLanguage: row.own_language,
+    units: row.units,
+    country: row.country,
   };
 }
 
@@ -72,6 +82,10 @@ export async function loadStaffInTx(tx: TenantTx, userId: string): Promise<Staff
     firmName: row.firm_name,
     timeZone: row.time_zone,
     currency: row.currency,
+    language: row.language,
+    ownLanguage: row.own_language,
+    units: row.units,
+    country: row.country,
   };
 }
 

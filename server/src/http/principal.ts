@@ -1,4 +1,4 @@
-import type { StaffRole } from '@layerbook/contracts';
+import type { Language, StaffRole, UnitSystem } from '@layerbook/contracts';
 
 /** A firm's staff member (admin app), as loaded inside a request's firm transaction. */
 export interface StaffPrincipal {
@@ -13,6 +13,13 @@ export interface StaffPrincipal {
   /** The firm's calendar and money, loaded with the principal so routes need no extra query. */
   readonly timeZone: string;
   readonly currency: string;
+  /** what this person reads in: their own choice, else the firm's language */
+  readonly language: Language;
+  /** their own choice; null follows the firm */
+  readonly ownLanguage: Language | null;
+  /** the firm's units */
+  readonly units: UnitSystem;
+  readonly country: string;
 }
 
 /** A firm's client (portal). */
@@ -23,6 +30,9 @@ export interface ClientPrincipal {
   readonly name: string;
   readonly email: string;
   readonly firmName: string;
+  /** the client's language (portal, e-mails, PDFs): the client's own, else the firm's */
+  readonly language: Language;
+  readonly country: string;
 }
 
 export type Principal = StaffPrincipal | ClientPrincipal;

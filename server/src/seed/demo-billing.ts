@@ -118,12 +118,29 @@ type InFirm = <T>(work: (tx: TenantTx) => Promise<T>) => Promise<T>;
 
 /** The demo client's portal account, as the portal's routes see a signed-in client. */
 async function demoClient(tx: TenantTx, people: DemoBillingPeople): Promise<ClientPrincipal> {
-  const { rows } = await tx.client.query<{ id: string; name: string; email: string; firm_name: string }>(
-    `select p.id, p.name, p.email, f.name as firm_name from portal_users p join firms f on f.id = p.tenant_id
+  const { rows } = await tx.client.query<{
+    id: string;
+    name: string;
+    email: string;
+    firm_name: string;
+    language: 'en' | 'es';
+    country: string;
+  }>(
+    `select p.id, p.name, p.email, f.name as firm_name, coalesce(c.language, f.language) as language, f.country
+       from portal_users p join firms f on f.id = p.tenant_id join clients c on c.id = p.client_id
       where p.tenant_id = $1 and p.client_id = $2`,
     [tx.tenantId, people.clientId],
   );
-  return { kind: 'client', id: rows[0].id, tenantId: tx.tenantId, name: rows[0].name, email: rows[0].email, firmName: rows[0].firm_name };
+  return {
+    kind: 'client',
+    id: rows[0].id,
+    tenantId: tx.tenantId,
+    name: rows[0].name,
+    email: rows[0].email,
+    firmName: rows[0].firm_name,
+    language: rows[0].language,
+    country: rows[0].country,
+  };
 }
 
 /** An estimate on the demo house, a proposal version sent to the demo client and accepted in the portal: the job. */

@@ -2,6 +2,7 @@
  * Sign-in, sessions and roles without zod: roles with their words, field limits, what the apps
  * send and what the auth routes answer. The zod schemas (auth.ts, fields.ts) are built from these.
  */
+import type { Language, UnitSystem } from '../firms/firm-types';
 
 /** Staff roles of a firm, from most to least trusted. Clients use the portal only. */
 export const STAFF_ROLES = ['owner', 'office', 'crew'] as const;
@@ -89,6 +90,14 @@ export interface StaffUser {
   readonly role: StaffRole;
   readonly firmId: string;
   readonly firmName: string;
+  /** the language this person reads in: their own choice, else the firm's */
+  readonly language: Language;
+  /** the person's own choice (null = follow the firm's language) */
+  readonly ownLanguage: Language | null;
+  /** the firm's units, for what the crew reads */
+  readonly units: UnitSystem;
+  /** the firm's country (ISO 3166-1 alpha-2), for number and date conventions */
+  readonly country: string;
 }
 
 /** What the admin app knows about who is signed in (every /api/auth answer that signs in or out). */
@@ -110,10 +119,19 @@ export interface PortalClient {
   readonly email: string;
   readonly firmId: string;
   readonly firmName: string;
+  /** the language of the client's portal, e-mails and PDFs: the client's own, else the firm's */
+  readonly language: Language;
+  /** the firm's country (ISO 3166-1 alpha-2) */
+  readonly country: string;
 }
 
 /** Portal (client) session: signed in by an e-mailed one-time link. */
 export interface PortalSession {
   readonly client: PortalClient | null;
   readonly csrfToken: string;
+}
+
+/** PATCH /api/auth/me/language (staff, for themselves) and /api/portal/me/language (the client): null follows the firm. */
+export interface LanguageChoice {
+  readonly language: Language | null;
 }

@@ -16,6 +16,8 @@ export const clients = pgTable(
     email: text('email').notNull().default(''),
     phone: text('phone').notNull().default(''),
     notes: text('notes').notNull().default(''),
+    /** the language of the client's portal, e-mails and PDFs; null = the firm's language */
+    language: text('language', { enum: ['en', 'es'] }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },

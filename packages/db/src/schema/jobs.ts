@@ -5,6 +5,7 @@ import { clients, sites } from './clients';
 import { firms } from './firms';
 import { inquiries } from './inquiries';
 import { estimates, proposalVersions } from './proposals';
+import { files } from './files';
 import { users } from './team';
 
 /** Accepted work: made when a client accepts a proposal version, with the option they chose. */
@@ -173,4 +174,24 @@ export const jobProgress = pgTable(
       .where(sql`client_key is not null`),
     tenantPolicy('job_progress'),
   ],
+);
+
+/** A progress photo from the field: the job, optionally the layer on a surface it shows, and a caption. */
+export const jobPhotos = pgTable(
+  'job_photos',
+  {
+    id: id(),
+    tenantId: tenantId().references(() => firms.id),
+    jobId: uuid('job_id')
+      .notNull()
+      .references(() => jobs.id),
+    workItemId: uuid('work_item_id').references(() => jobWorkItems.id),
+    fileId: uuid('file_id')
+      .notNull()
+      .references(() => files.id),
+    caption: text('caption').notNull().default(''),
+    createdBy: uuid('created_by').references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (t) => [index('job_photos_job_idx').on(t.tenantId, t.jobId, t.createdAt), tenantPolicy('job_photos')],
 );

@@ -35,6 +35,8 @@ export const memberships = pgTable(
     status: text('status', { enum: ['active', 'deactivated'] })
       .notNull()
       .default('active'),
+    /** the language this person reads Layerbook in at this firm; null = the firm's language */
+    language: text('language', { enum: ['en', 'es'] }),
     createdAt: createdAt(),
   },
   (t) => [

@@ -46,6 +46,10 @@ export const routes: Routes = [
         loadComponent: () => import('./features/cash/cash').then((m) => m.Cash),
       },
       {
+        path: 'sheets',
+        loadChildren: () => import('./features/jobs/sheet/sheet.routes'),
+      },
+      {
         path: 'samples',
         loadChildren: () => import('./features/samples/samples.routes'),
       },

@@ -1,6 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
+import { Language } from '../../../../../shared/i18n/language';
 import { type StaffRole, type StaffSession, roleAtLeast } from '@layerbook/contracts/types';
 
 export type StaffUser = NonNullable<StaffSession['user']>;
@@ -9,6 +10,7 @@ export type StaffUser = NonNullable<StaffSession['user']>;
 @Injectable({ providedIn: 'root' })
 export class Session {
   private readonly http = inject(HttpClient);
+  private readonly language = inject(Language);
   private readonly current = signal<StaffUser | null | undefined>(undefined);
   private pending: Promise<StaffUser | null> | null = null;
 
@@ -34,6 +36,7 @@ export class Session {
   accept(session: StaffSession | null): StaffUser | null {
     const user = session?.user ?? null;
     this.current.set(user);
+    this.follow(user);
     return user;
   }
 
@@ -45,5 +48,12 @@ export class Session {
   async signOut(): Promise<void> {
     const session = await firstValueFrom(this.http.post<StaffSession>('/api/auth/signout', {}));
     this.accept(session);
+  }
+
+  /** The words follow the signed-in person's language (a sign-in or a change of it switches them). */
+  private follow(who: { language: 'en' | 'es'; country: string } | null): void {
+    if (!who) return;
+    this.language.setRegion(who.country);
+    if (who.language !== this.language.current()) void this.language.use(who.language);
   }
 }

@@ -10,6 +10,7 @@ export interface NavItem {
 
 export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Today', icon: 'wb_sunny', path: '/today', minRole: 'crew' },
+  { label: 'Job sheets', icon: 'assignment', path: '/sheets', minRole: 'crew' },
   { label: 'Inquiries', icon: 'call', path: '/inquiries', minRole: 'office' },
   { label: 'Clients', icon: 'group', path: '/clients', minRole: 'office' },
   { label: 'Estimates', icon: 'request_quote', path: '/estimates', minRole: 'office' },

@@ -1,6 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
+import { Language } from '../../../../../shared/i18n/language';
 import type { PortalSession } from '@layerbook/contracts/types';
 
 export type PortalClient = NonNullable<PortalSession['client']>;
@@ -9,6 +10,7 @@ export type PortalClient = NonNullable<PortalSession['client']>;
 @Injectable({ providedIn: 'root' })
 export class Session {
   private readonly http = inject(HttpClient);
+  private readonly language = inject(Language);
   private readonly current = signal<PortalClient | null | undefined>(undefined);
   private pending: Promise<PortalClient | null> | null = null;
 
@@ -33,10 +35,18 @@ export class Session {
   accept(session: PortalSession | null): PortalClient | null {
     const client = session?.client ?? null;
     this.current.set(client);
+    this.follow(client);
     return client;
   }
 
   async signOut(): Promise<void> {
     this.accept(await firstValueFrom(this.http.post<PortalSession>('/api/portal/auth/signout', {})));
+  }
+
+  /** The words follow the signed-in person's language (a sign-in or a change of it switches them). */
+  private follow(who: { language: 'en' | 'es'; country: string } | null): void {
+    if (!who) return;
+    this.language.setRegion(who.country);
+    if (who.language !== this.language.current()) void this.language.use(who.language);
   }
 }
