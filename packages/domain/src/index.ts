@@ -143,8 +143,17 @@ export type { EstimatedCosts, Margin } from './receivables/job-money';
 export { averageJobSize, grossMargin, jobMoney, winRate } from './receivables/job-money';
 
 // safety
-export type { Caution, CautionId, SafetyFacts } from './safety/safety-cautions';
-export { OUTSIDE_US_LINE, STANDING_LINE, jurisdictionLine, safetyCautions } from './safety/safety-cautions';
+export type { Caution, CautionId, JurisdictionKey, SafetyFacts } from './safety/safety-cautions';
+export {
+  OFFICE_ONLY_LINES,
+  OUTSIDE_US_LINE,
+  STANDING_LINE,
+  jurisdictionKeys,
+  jurisdictionLine,
+  safetyCautions,
+} from './safety/safety-cautions';
+export type { CautionLine, CautionWordKey } from './safety/caution-words';
+export { CAUTION_WORDS, cautionLineOf, cautionText } from './safety/caution-words';
 export { unpricedScaffoldWarning } from './safety/scaffold-pricing';
 export type { FlammableCategory, FlammableClass } from './safety/flammable';
 export { FLAMMABLE_FLASH_MAX_C, flammableClass } from './safety/flammable';

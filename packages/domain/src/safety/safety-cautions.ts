@@ -1,5 +1,6 @@
 import { requireFiniteNumber, requireInteger, requireNonNegative } from '../errors/input-checks';
 import { type LengthUnit, convertArea, convertLength } from '../units/length';
+import { CAUTION_WORDS, type CautionLine, type CautionWordKey, cautionText } from './caution-words';
 import { type FlammableClass, flammableClass } from './flammable';
 
 export type CautionId =
@@ -21,10 +22,19 @@ export interface Caution {
   /** whose rule it is (US federal, or guidance) and, for a firm outside the US, to check its own rules */
   jurisdiction: string;
   standing: string;
+  /** keys of the words above (CAUTION_WORDS), for a translation: `title`, `rule`, each bullet, jurisdiction, standing */
+  titleKey: CautionWordKey;
+  ruleKey: CautionWordKey;
+  /** parallel to `bullets`: each bullet's key and the words it inserts */
+  lines: CautionLine[];
+  /** the jurisdiction line's sentences in order */
+  jurisdictionKeys: JurisdictionKey[];
+  standingKey: 'standing';
 }
 
-export const STANDING_LINE =
-  "Follow local codes, the product's safety data sheet and licensed or qualified practice. This reminder is not legal or safety advice.";
+export type JurisdictionKey = 'jurisdiction.usFederal' | 'jurisdiction.guidance' | 'jurisdiction.outsideUs';
+
+export const STANDING_LINE: string = CAUTION_WORDS.standing;
 
 export interface SafetyFacts {
   lengthUnit: LengthUnit;
@@ -69,32 +79,50 @@ const RULE_SOURCE: Readonly<Record<CautionId, 'us-federal' | 'guidance'>> = {
 };
 
 /** A reminder for the estimator, shown in the builder and never printed for the client (see OFFICE_ONLY_LINES). */
-export const SCAFFOLD_PRICING_NOTE = 'Price the scaffold rental and the time to put it up and take it down.';
+export const SCAFFOLD_PRICING_NOTE: string = CAUTION_WORDS['scaffold-fall-protection.pricingNote'];
 
 /** Caution lines meant for the office alone: a proposal, its PDF and the portal leave them out. */
 export const OFFICE_ONLY_LINES: ReadonlySet<string> = new Set([SCAFFOLD_PRICING_NOTE]);
 
-export const OUTSIDE_US_LINE = 'Outside the US, check your national or provincial rules.';
+export const OUTSIDE_US_LINE: string = CAUTION_WORDS['jurisdiction.outsideUs'];
 
-/** "US federal rule." or "Guidance, not a regulation.", plus the outside-US line for a firm elsewhere. */
-export function jurisdictionLine(id: CautionId, firmCountry: string | undefined): string {
-  const source = RULE_SOURCE[id] === 'us-federal' ? 'A US federal rule.' : 'Guidance, not a regulation.';
+/** The jurisdiction line's sentences: whose rule it is, plus the outside-US line for a firm elsewhere. */
+export function jurisdictionKeys(id: CautionId, firmCountry: string | undefined): JurisdictionKey[] {
+  const source: JurisdictionKey = RULE_SOURCE[id] === 'us-federal' ? 'jurisdiction.usFederal' : 'jurisdiction.guidance';
   const isOutsideUs = firmCountry !== undefined && firmCountry.trim().toUpperCase() !== 'US';
-  return isOutsideUs ? `${source} ${OUTSIDE_US_LINE}` : source;
+  return isOutsideUs ? [source, 'jurisdiction.outsideUs'] : [source];
 }
+
+/** "A US federal rule." or "Guidance, not a regulation.", plus the outside-US line for a firm elsewhere. */
+export function jurisdictionLine(id: CautionId, firmCountry: string | undefined): string {
+  return jurisdictionKeys(id, firmCountry)
+    .map((k) => CAUTION_WORDS[k])
+    .join(' ');
+}
+
+const line = (key: CautionWordKey, params: Record<string, string> = {}): CautionLine => ({ key, params });
 
 /** Reminders drawn from job facts; English text, stable ids for the apps to translate. */
 export function safetyCautions(facts: SafetyFacts): Caution[] {
   const out: Caution[] = [];
   const unit = facts.lengthUnit;
-  const caution = (id: CautionId, title: string, rule: string, bullets: string[]): Caution => ({
-    id,
-    title,
-    bullets,
-    rule,
-    jurisdiction: jurisdictionLine(id, facts.firmCountry),
-    standing: STANDING_LINE,
-  });
+  const caution = (id: CautionId, lines: CautionLine[]): Caution => {
+    const titleKey = `${id}.title` as CautionWordKey;
+    const ruleKey = `${id}.rule` as CautionWordKey;
+    return {
+      id,
+      title: CAUTION_WORDS[titleKey],
+      bullets: lines.map(cautionText),
+      rule: CAUTION_WORDS[ruleKey],
+      jurisdiction: jurisdictionLine(id, facts.firmCountry),
+      standing: STANDING_LINE,
+      titleKey,
+      ruleKey,
+      lines,
+      jurisdictionKeys: jurisdictionKeys(id, facts.firmCountry),
+      standingKey: 'standing',
+    };
+  };
 
   if (facts.yearBuilt !== undefined) requireInteger(facts.yearBuilt, 'yearBuilt', 1000, 'year built');
   if (facts.yearBuilt !== undefined && facts.yearBuilt < LEAD_YEAR) {
@@ -108,11 +136,11 @@ export function safetyCautions(facts: SafetyFacts): Caution[] {
     const overInside = [...perRoom.values()].some((a) => a > INTERIOR_FT2);
     if (overInside || exterior > EXTERIOR_FT2) {
       out.push(
-        caution('lead-safe-work', 'Lead-safe work practices', '40 CFR 745 subpart E (EPA Renovation, Repair and Painting)', [
-          `Built before ${LEAD_YEAR} and the work disturbs more painted surface than the minor-repair limits (more than 6 ft² in a room or 20 ft² outside).`,
-          'Use a certified firm with a certified renovator assigned, and record delivery of the lead pamphlet before work starts.',
-          'Contain the work area and clean and verify under the rule; avoid the practices it prohibits.',
-          'Keep the records for three years and give the compliance record with the final invoice.',
+        caution('lead-safe-work', [
+          line('lead-safe-work.builtBefore', { year: String(LEAD_YEAR) }),
+          line('lead-safe-work.certifiedFirm'),
+          line('lead-safe-work.containAndClean'),
+          line('lead-safe-work.keepRecords'),
         ]),
       );
     }
@@ -121,20 +149,15 @@ export function safetyCautions(facts: SafetyFacts): Caution[] {
   const levelFt = convertLength(requireFiniteNumber(facts.workingLevel, 'workingLevel', 'working level'), unit, 'ft');
   if (levelFt > SCAFFOLD_FT) {
     out.push(
-      caution('scaffold-fall-protection', 'Scaffold fall protection', '29 CFR 1926.451(g)(1)', [
-        'Work on a scaffold more than 10 ft above a lower level needs guardrails or personal fall arrest, depending on the scaffold type.',
-        'Have a competent person erect and inspect the scaffold; lock the casters on rolling towers.',
-        SCAFFOLD_PRICING_NOTE,
+      caution('scaffold-fall-protection', [
+        line('scaffold-fall-protection.guardrails'),
+        line('scaffold-fall-protection.competentPerson'),
+        line('scaffold-fall-protection.pricingNote'),
       ]),
     );
   }
   if (levelFt >= EDGE_FT) {
-    out.push(
-      caution('edge-fall-protection', 'Unprotected edges and ladders', '29 CFR 1926.501(b)(1); 29 CFR 1926.1053(b)(1)', [
-        'Protect sides and edges 6 ft or more above a lower level.',
-        'Ladders to an upper landing extend at least 3 ft above it, or are secured with a grab device.',
-      ]),
-    );
+    out.push(caution('edge-fall-protection', [line('edge-fall-protection.protectEdges'), line('edge-fall-protection.ladders')]));
   }
 
   const flammable = facts.products.flatMap((p, i) => {
@@ -143,56 +166,40 @@ export function safetyCautions(facts: SafetyFacts): Caution[] {
   });
   if (flammable.length > 0) {
     out.push(
-      caution('flammable-liquid', 'Flammable liquids in the mix', '29 CFR 1910.106(a)(19) (flash point at or below 93 °C / 199.4 °F)', [
-        `Flammable: ${flammable.join(', ')}.`,
-        'No open flames, pilot lights or sparks; ventilate; keep containers closed. Vapours can be heavier than air and travel to an ignition source.',
+      caution('flammable-liquid', [
+        line('flammable-liquid.products', { products: flammable.join(', ') }),
+        line('flammable-liquid.noFlames'),
       ]),
     );
   }
 
+  const names = (list: ReadonlyArray<{ name: string }>): string => list.map((p) => p.name).join(', ');
   const lime = facts.products.filter((p) => p.isLime === true);
   if (lime.length > 0) {
     out.push(
-      caution('lime-alkali', 'Lime is caustic', 'ICSC 0408 (calcium hydroxide)', [
-        `Lime products: ${lime.map((p) => p.name).join(', ')}.`,
-        'Strongly alkaline: can burn eyes and skin. Wear goggles or a face shield, alkali-resistant gloves and covered skin.',
-        'Keep eyewash on site; flush eyes or skin with water for at least 15 minutes.',
+      caution('lime-alkali', [
+        line('lime-alkali.products', { products: names(lime) }),
+        line('lime-alkali.protect'),
+        line('lime-alkali.eyewash'),
       ]),
     );
   }
 
   const oily = facts.products.filter((p) => p.containsDryingOil === true);
   if (oily.length > 0) {
+    // drying oils self-heat as they cure, whatever their flash point (DOMAIN.md §3.5: from memory; manufacturers' SDS)
     out.push(
-      // drying oils self-heat as they cure, whatever their flash point (DOMAIN.md §3.5: from memory; manufacturers' SDS)
-      caution(
-        'oily-rags',
-        'Oily rags can catch fire by themselves',
-        "The product's safety data sheet (drying oils self-heat as they cure)",
-        [
-          `Drying oils: ${oily.map((p) => p.name).join(', ')}.`,
-          'Rags, pads and paper soaked in drying oils heat up as the oil cures and can ignite hours later with no flame nearby.',
-          'Lay them flat outdoors to dry, or keep them under water in a closed metal can; never bunch them in a bin or leave them in the house overnight.',
-        ],
-      ),
+      caution('oily-rags', [line('oily-rags.products', { products: names(oily) }), line('oily-rags.selfHeat'), line('oily-rags.layFlat')]),
     );
   }
 
   const silica = facts.products.filter((p) => p.containsSilica === true);
   if (facts.sandsPlaster || silica.length > 0) {
-    const bullets: string[] = [];
-    if (silica.length > 0) {
-      bullets.push(`Crystalline silica: ${silica.map((p) => p.name).join(', ')}. Dry mixing, cutting and sanding raise the dust.`);
-    }
-    if (facts.sandsPlaster) {
-      bullets.push("A layer sands plaster: check section 3 of each product's safety data sheet for crystalline silica.");
-    }
-    bullets.push(
-      'The standard applies unless exposure stays below 25 µg/m³ (8-hour average) under any foreseeable conditions.',
-      'Wet the mix or use a low-speed paddle with local exhaust; prefer wet methods and HEPA vacuums to dry sweeping or compressed air.',
-      'Respirators need a written program, medical clearance and fit testing.',
-    );
-    out.push(caution('plaster-dust-silica', 'Crystalline silica dust', '29 CFR 1926.1153 (respirable crystalline silica)', bullets));
+    const lines: CautionLine[] = [];
+    if (silica.length > 0) lines.push(line('plaster-dust-silica.products', { products: names(silica) }));
+    if (facts.sandsPlaster) lines.push(line('plaster-dust-silica.sandsPlaster'));
+    lines.push(line('plaster-dust-silica.exposureLimit'), line('plaster-dust-silica.wetMethods'), line('plaster-dust-silica.respirators'));
+    out.push(caution('plaster-dust-silica', lines));
   }
   return out;
 }

@@ -1,0 +1,92 @@
+import { mergeCautions } from '../estimate/merge-cautions';
+import { ASK_FOR_YEAR } from '../estimate/lead-status';
+import { CAUTION_WORDS, type CautionWordKey, cautionLineOf, cautionText } from './caution-words';
+import { OFFICE_ONLY_LINES, OUTSIDE_US_LINE, STANDING_LINE, type SafetyFacts, jurisdictionKeys, safetyCautions } from './safety-cautions';
+
+const EVERYTHING: SafetyFacts = {
+  lengthUnit: 'ft',
+  yearBuilt: 1950,
+  disturbedPaint: [{ roomId: 'r', isExterior: false, area: 50 }],
+  workingLevel: 14,
+  products: [
+    { name: 'Isopropyl alcohol', flashPointC: 12 },
+    { name: 'Lime putty', isLime: true },
+    { name: 'Tung oil', containsDryingOil: true },
+    { name: 'Marble dust plaster', containsSilica: true },
+  ],
+  sandsPlaster: true,
+  firmCountry: 'CA',
+};
+
+describe('caution words by key', () => {
+  const all = safetyCautions(EVERYTHING);
+
+  it('raises every caution for a job with every hazard', () => {
+    expect(all.map((c) => c.id)).toEqual([
+      'lead-safe-work',
+      'scaffold-fall-protection',
+      'edge-fall-protection',
+      'flammable-liquid',
+      'lime-alkali',
+      'oily-rags',
+      'plaster-dust-silica',
+    ]);
+  });
+
+  it('each English field is its key rendered, so a translation by key says the same thing', () => {
+    for (const c of all) {
+      expect(c.title).toBe(CAUTION_WORDS[c.titleKey]);
+      expect(c.rule).toBe(CAUTION_WORDS[c.ruleKey]);
+      expect(c.bullets).toEqual(c.lines.map(cautionText));
+      expect(c.jurisdiction).toBe(c.jurisdictionKeys.map((k) => CAUTION_WORDS[k]).join(' '));
+      expect(c.standing).toBe(CAUTION_WORDS[c.standingKey]);
+      expect(c.standing).toBe(STANDING_LINE);
+    }
+  });
+
+  it('product lists and the year travel as params', () => {
+    const byId = new Map(all.map((c) => [c.id, c]));
+    expect(byId.get('lead-safe-work')?.lines[0]).toEqual({ key: 'lead-safe-work.builtBefore', params: { year: '1978' } }); // 15 U.S.C. 2681(17)
+    expect(byId.get('lime-alkali')?.lines[0]).toEqual({ key: 'lime-alkali.products', params: { products: 'Lime putty' } });
+    expect(byId.get('flammable-liquid')?.lines[0]).toEqual({
+      key: 'flammable-liquid.products',
+      params: { products: 'Isopropyl alcohol (category 1 or 2, flash point 12 °C)' }, // 29 CFR 1910.106(a)(19)(i)–(ii)
+    });
+  });
+
+  it.each([
+    // the cited rules are US federal (29 CFR, 40 CFR); lime and oily rags are guidance, not regulation
+    ['US', 'lead-safe-work', ['jurisdiction.usFederal']],
+    [undefined, 'oily-rags', ['jurisdiction.guidance']],
+    ['MX', 'lime-alkali', ['jurisdiction.guidance', 'jurisdiction.outsideUs']],
+    ['CA', 'scaffold-fall-protection', ['jurisdiction.usFederal', 'jurisdiction.outsideUs']],
+  ] as const)('firm in %s, %s: %j', (country, id, keys) => {
+    expect(jurisdictionKeys(id, country)).toEqual(keys);
+    expect(CAUTION_WORDS['jurisdiction.outsideUs']).toBe(OUTSIDE_US_LINE);
+  });
+
+  it('reads the key and params back from any English bullet the engine wrote', () => {
+    for (const c of all) expect(c.bullets.map(cautionLineOf)).toEqual(c.lines);
+  });
+
+  it('reads merged list bullets and the lines an unknown year adds', () => {
+    const other = safetyCautions({ ...EVERYTHING, products: [{ name: 'Hydrated lime', isLime: true }] });
+    const merged = mergeCautions([all, other], 'client').find((c) => c.id === 'lime-alkali');
+    expect(merged?.bullets.map(cautionLineOf)[0]).toEqual({
+      key: 'lime-alkali.products',
+      params: { products: 'Lime putty, Hydrated lime' },
+    });
+    expect(cautionLineOf(ASK_FOR_YEAR)).toEqual({ key: 'lead-safe-work.askYear', params: {} });
+    const treated = all[0].bullets[0].replace(/^Built before 1978 and/, 'Treated as built before 1978, and');
+    expect(cautionLineOf(treated)).toEqual({ key: 'lead-safe-work.treatedAsBuiltBefore', params: { year: '1978' } });
+  });
+
+  it('an unknown line has no key (shown as written)', () => {
+    expect(cautionLineOf('Bring the ladder.')).toBeNull();
+  });
+
+  it('the office-only line has a key too, so catalogs stay complete', () => {
+    const key: CautionWordKey = 'scaffold-fall-protection.pricingNote';
+    expect(OFFICE_ONLY_LINES.has(CAUTION_WORDS[key])).toBe(true);
+  });
+});
