@@ -11,7 +11,7 @@ export const routes: Routes = [
     children: [
       {
         path: 'today',
-        title: 'Today · Layerbook',
+        title: 'layout.titles.today',
         loadComponent: () => import('./features/today/today').then((m) => m.Today),
       },
       {
@@ -41,7 +41,7 @@ export const routes: Routes = [
       },
       {
         path: 'cash',
-        title: 'Cash · Layerbook',
+        title: 'layout.titles.cash',
         canActivate: [roleGuard('office')],
         loadComponent: () => import('./features/cash/cash').then((m) => m.Cash),
       },
@@ -64,25 +64,25 @@ export const routes: Routes = [
       },
       {
         path: 'team',
-        title: 'Team · Layerbook',
+        title: 'layout.titles.team',
         loadComponent: () => import('./features/team/team').then((m) => m.Team),
       },
       {
         path: 'settings/billing',
-        title: 'Billing settings · Layerbook',
+        title: 'layout.titles.billingSettings',
         canActivate: [roleGuard('office')],
         loadComponent: () => import('./features/firms/billing-settings').then((m) => m.BillingSettingsPage),
       },
       {
         path: 'settings',
-        title: 'Settings · Layerbook',
+        title: 'layout.titles.settings',
         loadComponent: () => import('./features/firms/firm-settings').then((m) => m.FirmSettingsPage),
       },
     ],
   },
   {
     path: '**',
-    title: 'Page not found · Layerbook',
+    title: 'layout.titles.notFound',
     loadComponent: () => import('./shared/ui/not-found').then((m) => m.NotFound),
   },
 ];

@@ -2,7 +2,13 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { Language } from '../../../../../shared/i18n/language';
-import { type StaffRole, type StaffSession, roleAtLeast } from '@layerbook/contracts/types';
+import {
+  type Language as LanguageCode,
+  type LanguageChoice,
+  type StaffRole,
+  type StaffSession,
+  roleAtLeast,
+} from '@layerbook/contracts/types';
 
 export type StaffUser = NonNullable<StaffSession['user']>;
 
@@ -47,6 +53,12 @@ export class Session {
 
   async signOut(): Promise<void> {
     const session = await firstValueFrom(this.http.post<StaffSession>('/api/auth/signout', {}));
+    this.accept(session);
+  }
+
+  /** The person's own language (null follows the firm's); the answer is the whole session, so the words switch with it. */
+  async chooseLanguage(language: LanguageCode | null): Promise<void> {
+    const session = await firstValueFrom(this.http.patch<StaffSession>('/api/auth/me/language', { language } satisfies LanguageChoice));
     this.accept(session);
   }
 

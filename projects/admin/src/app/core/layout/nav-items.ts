@@ -1,6 +1,7 @@
 import type { StaffRole } from '@layerbook/contracts/types';
 
 export interface NavItem {
+  /** translation key (layout.nav.*) */
   readonly label: string;
   readonly icon: string;
   readonly path: string;
@@ -9,16 +10,16 @@ export interface NavItem {
 }
 
 export const NAV_ITEMS: readonly NavItem[] = [
-  { label: 'Today', icon: 'wb_sunny', path: '/today', minRole: 'crew' },
-  { label: 'Job sheets', icon: 'assignment', path: '/sheets', minRole: 'crew' },
-  { label: 'Inquiries', icon: 'call', path: '/inquiries', minRole: 'office' },
-  { label: 'Clients', icon: 'group', path: '/clients', minRole: 'office' },
-  { label: 'Estimates', icon: 'request_quote', path: '/estimates', minRole: 'office' },
-  { label: 'Jobs', icon: 'format_paint', path: '/jobs', minRole: 'office' },
-  { label: 'Billing', icon: 'receipt_long', path: '/billing', minRole: 'office' },
-  { label: 'Cash', icon: 'savings', path: '/cash', minRole: 'office' },
-  { label: 'Sample boards', icon: 'palette', path: '/samples', minRole: 'crew' },
-  { label: 'Finish library', icon: 'layers', path: '/library', minRole: 'crew' },
-  { label: 'Team', icon: 'badge', path: '/team', minRole: 'crew' },
-  { label: 'Settings', icon: 'tune', path: '/settings', minRole: 'office' },
+  { label: 'layout.nav.today', icon: 'wb_sunny', path: '/today', minRole: 'crew' },
+  { label: 'layout.nav.jobSheets', icon: 'assignment', path: '/sheets', minRole: 'crew' },
+  { label: 'layout.nav.inquiries', icon: 'call', path: '/inquiries', minRole: 'office' },
+  { label: 'layout.nav.clients', icon: 'group', path: '/clients', minRole: 'office' },
+  { label: 'layout.nav.estimates', icon: 'request_quote', path: '/estimates', minRole: 'office' },
+  { label: 'layout.nav.jobs', icon: 'format_paint', path: '/jobs', minRole: 'office' },
+  { label: 'layout.nav.billing', icon: 'receipt_long', path: '/billing', minRole: 'office' },
+  { label: 'layout.nav.cash', icon: 'savings', path: '/cash', minRole: 'office' },
+  { label: 'layout.nav.samples', icon: 'palette', path: '/samples', minRole: 'crew' },
+  { label: 'layout.nav.library', icon: 'layers', path: '/library', minRole: 'crew' },
+  { label: 'layout.nav.team', icon: 'badge', path: '/team', minRole: 'crew' },
+  { label: 'layout.nav.settings', icon: 'tune', path: '/settings', minRole: 'office' },
 ];

@@ -9,6 +9,8 @@ import { MatSidenavModule } from '@angular/material/sidenav';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatToolbarModule } from '@angular/material/toolbar';
 import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import type { Language as LanguageCode } from '@layerbook/contracts/types';
 import { map } from 'rxjs';
 import { Session } from '../auth/session';
 import { toProblem } from '../errors/problem';
@@ -30,6 +32,7 @@ const NARROW = '(max-width: 959.98px)';
     RouterLink,
     RouterLinkActive,
     RouterOutlet,
+    TranslatePipe,
     Wordmark,
   ],
   templateUrl: './shell.html',
@@ -40,6 +43,7 @@ export class Shell {
   private readonly session = inject(Session);
   private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
 
   protected readonly user = this.session.user;
   protected readonly isNarrow = toSignal(
@@ -50,6 +54,13 @@ export class Shell {
   );
   protected readonly isNavOpen = signal(false);
   protected readonly navItems = computed(() => NAV_ITEMS.filter((item) => this.session.hasRole(item.minRole)));
+
+  /** The person's own language, or null to follow the firm's (names are each language's own, from common). */
+  protected readonly languageChoices: readonly { value: LanguageCode | null; label: string }[] = [
+    { value: null, label: 'layout.shell.firmLanguage' },
+    { value: 'en', label: 'common.languageNames.en' },
+    { value: 'es', label: 'common.languageNames.es' },
+  ];
 
   protected toggleNav(): void {
     this.isNavOpen.update((open) => !open);
@@ -66,7 +77,20 @@ export class Shell {
       await this.session.signOut();
       await this.router.navigateByUrl('/sign-in');
     } catch (error) {
-      this.snackBar.open(toProblem(error).title, 'Close', { duration: 6000 });
+      this.tell(toProblem(error).title);
     }
+  }
+
+  protected async chooseLanguage(language: LanguageCode | null): Promise<void> {
+    try {
+      await this.session.chooseLanguage(language);
+      this.tell(this.translate.instant('layout.shell.languageSaved') as string);
+    } catch (error) {
+      this.tell(toProblem(error).title);
+    }
+  }
+
+  private tell(message: string): void {
+    this.snackBar.open(message, this.translate.instant('layout.shell.close') as string, { duration: 6000 });
   }
 }

@@ -15,7 +15,18 @@ async function render(role: StaffRole) {
     providers: [provideZonelessChangeDetection(), provideHttpClient(), provideHttpClientTesting(), provideRouter([])],
   });
   TestBed.inject(Session).accept({
-    user: { id: 'u1', name: 'Ada', email: 'ada@example.com', role, firmId: 'f1', firmName: 'Fernhollow' },
+    user: {
+      id: 'u1',
+      name: 'Ada',
+      email: 'ada@example.com',
+      role,
+      firmId: 'f1',
+      firmName: 'Fernhollow',
+      language: 'en',
+      ownLanguage: null,
+      units: 'imperial',
+      country: 'US',
+    },
     csrfToken: 't',
   });
   const http = TestBed.inject(HttpTestingController);
