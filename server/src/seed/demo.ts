@@ -43,6 +43,8 @@ export const DEMO = {
     { role: 'owner', name: 'Wren Calloway', email: 'owner@fernhollow.example' },
     { role: 'office', name: 'Priya Ashdown', email: 'office@fernhollow.example' },
     { role: 'crew', name: 'Mateo Quill', email: 'crew@fernhollow.example' },
+    // A crew member who reads Layerbook in Spanish (the firm's own language stays English).
+    { role: 'crew', name: 'Lucía Ferrand', email: 'lucia@fernhollow.example', language: 'es' },
   ],
   client: { name: 'Hattie Brambleton', email: 'hattie@brambleton.example' },
 } as const;
@@ -66,7 +68,9 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
     const userIds: string[] = [];
     for (const person of DEMO.people) {
       const [user] = await tx.db.insert(users).values({ email: person.email, name: person.name, passwordHash }).returning({ id: users.id });
-      await tx.db.insert(memberships).values({ tenantId: firmId, userId: user.id, role: person.role });
+      await tx.db
+        .insert(memberships)
+        .values({ tenantId: firmId, userId: user.id, role: person.role, language: 'language' in person ? person.language : null });
       userIds.push(user.id);
     }
     const [client] = await tx.db
