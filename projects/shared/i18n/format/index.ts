@@ -1,0 +1,2 @@
+export { type DateStyle, formatAmount, formatCalendarDay, formatDate, formatInstant, formatNumber } from './format';
+export { LB_FORMAT_PIPES, LbDatePipe, LbMoneyPipe, LbNumberPipe } from './pipes';
