@@ -1,10 +1,11 @@
-import { portalLinkRequest, portalRedeemRequest, type Notice, type PortalSession } from '@layerbook/contracts';
+import { languageChoice, portalLinkRequest, portalRedeemRequest, type Notice, type PortalSession } from '@layerbook/contracts';
 import { Request, RequestHandler, Response, Router } from 'express';
 import type { AppContext } from '../context';
 import { csrfToken } from '../http/csrf';
-import { signedInClient } from '../http/guards';
+import { signedInClient, withClient } from '../http/guards';
 import { parse } from '../http/validate';
 import { endSession, logIn, logOut } from './passport-setup';
+import { setClientLanguage } from './language';
 import { redeemPortalLink, requestPortalLink } from './portal-auth';
 
 async function portalSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<PortalSession> {
@@ -43,6 +44,12 @@ export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): 
     const principal = await redeemPortalLink(ctx, token);
     await logIn(req, principal, ctx.now());
     res.json(await portalSession(ctx, req, res, true));
+  });
+
+  // The client's language for the portal, e-mails and PDFs; the answer is the whole session, in it.
+  router.patch('/me/language', async (req, res) => {
+    await withClient(ctx, req, (tx, client) => setClientLanguage(tx, client, parse(languageChoice, req.body).language));
+    res.json((await portalSession(ctx, req, res)) satisfies PortalSession);
   });
 
   router.post('/auth/signout', async (req, res) => {

@@ -1,5 +1,6 @@
 import {
   invitationAccept,
+  languageChoice,
   passwordResetComplete,
   passwordResetRequest,
   signInRequest,
@@ -17,9 +18,10 @@ import type { AppContext } from '../context';
 import { csrfToken } from '../http/csrf';
 import { asError } from '../http/errors';
 import type { Principal } from '../http/principal';
-import { signedInStaff } from '../http/guards';
+import { signedInStaff, withStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { acceptInvitation, previewInvitation } from './invitations';
+import { setOwnLanguage } from './language';
 import { endSession, logIn, logOut, type AppPassport } from './passport-setup';
 import { completePasswordReset, requestPasswordReset } from './password-reset';
 import { confirmSignUp, requestSignUp } from './staff-auth';
@@ -78,6 +80,12 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
       })(req, res, reject);
     });
     await signInAndAnswer(ctx, req, res, principal);
+  });
+
+  // Anyone signed in chooses the language they read in; the answer is the whole session, in it.
+  router.patch('/me/language', async (req, res) => {
+    await withStaff(ctx, req, 'crew', (tx, staff) => setOwnLanguage(tx, staff, parse(languageChoice, req.body).language));
+    res.json((await staffSession(ctx, req, res)) satisfies StaffSession);
   });
 
   router.post('/signout', async (req, res) => {

@@ -149,6 +149,7 @@ export async function getClient(tx: TenantTx, id: string): Promise<ClientDetail>
   return {
     ...toSummary(client),
     notes: client.notes,
+    language: client.language,
     contacts: contacts.map(toContact),
     sites: siteRows.map(toSite),
     inquiries: linked.map((i) => ({ ...i, createdAt: i.createdAt.toISOString() })),

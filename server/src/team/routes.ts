@@ -1,9 +1,17 @@
-import { idParam, invitationCreate, memberRoleUpdate, type ItemList, type TeamInvitation, type TeamMember } from '@layerbook/contracts';
+import {
+  idParam,
+  invitationCreate,
+  languageChoice,
+  memberRoleUpdate,
+  type ItemList,
+  type TeamInvitation,
+  type TeamMember,
+} from '@layerbook/contracts';
 import { Router } from 'express';
 import type { AppContext } from '../context';
 import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
-import { changeMember, invite, listInvitations, listMembers, revokeInvitation } from './service';
+import { changeMember, invite, listInvitations, listMembers, revokeInvitation, setMemberLanguage } from './service';
 
 /** Everyone on the team reads who is on it; only the owner invites, revokes and changes people. */
 export function teamRoutes(ctx: AppContext): Router {
@@ -33,6 +41,14 @@ export function teamRoutes(ctx: AppContext): Router {
     const member = await withStaff(ctx, req, 'owner', (tx, staff) => {
       const { id } = parse(idParam, req.params);
       return changeMember(tx, staff, id, { role: parse(memberRoleUpdate, req.body).role });
+    });
+    res.json(member satisfies TeamMember);
+  });
+
+  router.patch('/members/:id/language', async (req, res) => {
+    const member = await withStaff(ctx, req, 'owner', (tx, staff) => {
+      const { id } = parse(idParam, req.params);
+      return setMemberLanguage(tx, staff, id, parse(languageChoice, req.body).language);
     });
     res.json(member satisfies TeamMember);
   });

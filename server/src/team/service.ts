@@ -1,5 +1,5 @@
 import { INVITATION_DAYS } from '@layerbook/contracts';
-import type { InvitationCreate, ItemList, MemberStatus, StaffRole, TeamInvitation, TeamMember } from '@layerbook/contracts';
+import type { InvitationCreate, ItemList, Language, MemberStatus, StaffRole, TeamInvitation, TeamMember } from '@layerbook/contracts';
 import { and, desc, eq, firms, invitations, isNull, memberships, TenantTx, users } from '@layerbook/db';
 import type { AppContext } from '../context';
 import { recordAudit } from '../audit/record';
@@ -161,4 +161,30 @@ export async function changeMember(
     data: { from: { role: target.role, status: target.status }, to: change },
   });
   return { ...target, ...change };
+}
+
+/** The owner sets the language a member reads in (null = the firm's); the member may change it again themselves. */
+export async function setMemberLanguage(
+  tx: TenantTx,
+  actor: StaffPrincipal,
+  membershipId: string,
+  language: Language | null,
+): Promise<TeamMember> {
+  const target = (await members(tx, actor.id)).find((m) => m.id === membershipId);
+  if (!target) throw notFound('team member');
+  const [before] = await tx.db
+    .update(memberships)
+    .set({ language })
+    .where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.id, membershipId)))
+    .returning({ id: memberships.id });
+  if (!before) throw notFound('team member');
+  await recordAudit(tx, {
+    actorUserId: actor.id,
+    actorKind: 'staff',
+    action: 'member.language_changed',
+    entity: 'membership',
+    entityId: membershipId,
+    data: { to: language },
+  });
+  return target;
 }

@@ -5,6 +5,7 @@ import {
   FIRM_NAME_MIN_LENGTH,
   PASSWORD_MAX_LENGTH,
   type InvitationAccept,
+  type LanguageChoice,
   type PasswordResetComplete,
   type PasswordResetRequest,
   type PortalLinkRequest,
@@ -13,6 +14,7 @@ import {
   type SignUpConfirm,
   type SignUpRequest,
 } from './auth-types';
+import { LANGUAGES } from '../firms/firm-types';
 import { email, newPassword, personName, token } from './fields';
 
 export const signInRequest = requestSchema<SignInRequest>()(
@@ -47,3 +49,10 @@ export const invitationAccept = requestSchema<InvitationAccept>()(z.strictObject
 export const portalLinkRequest = requestSchema<PortalLinkRequest>()(z.strictObject({ email }));
 
 export const portalRedeemRequest = requestSchema<PortalRedeemRequest>()(z.strictObject({ token }));
+
+/** PATCH /api/auth/me/language, /api/portal/me/language, /api/team/members/:id/language: null follows the firm. */
+export const languageChoice = requestSchema<LanguageChoice>()(
+  z.strictObject({
+    language: z.enum(LANGUAGES, { error: 'Choose English or Spanish, or leave it to the firm.' }).nullable(),
+  }),
+);

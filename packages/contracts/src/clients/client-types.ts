@@ -2,6 +2,7 @@
  * Clients, their people and sites without zod: kinds with their words, field limits, what the
  * apps send and what the client and site routes answer. The zod schemas (client.ts) use these.
  */
+import type { Language } from '../firms/firm-types';
 import type { InquiryStage } from '../inquiries/inquiry-types';
 
 export const CLIENT_KINDS = ['homeowner', 'designer', 'general_contractor', 'other'] as const;
@@ -43,6 +44,8 @@ export interface ClientCreate {
   readonly email: string;
   readonly phone: string;
   readonly notes: string;
+  /** the language of the client's portal, e-mails and PDFs; null or left out = the firm's language */
+  readonly language?: Language | null;
 }
 /** PATCH /api/clients/:id changes only what it names. */
 export type ClientUpdate = Partial<ClientCreate>;
@@ -102,6 +105,8 @@ export interface ClientInquiry {
 /** GET /api/clients/:id. */
 export interface ClientDetail extends ClientSummary {
   readonly notes: string;
+  /** the client's own language choice; null = the firm's language */
+  readonly language: Language | null;
   readonly contacts: readonly ContactView[];
   readonly sites: readonly SiteView[];
   readonly inquiries: readonly ClientInquiry[];

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { email } from '../auth/fields';
 import { PHONE_MAX_LENGTH } from '../common/field-limits';
 import { isCountryCode } from '../firms/countries';
+import { LANGUAGES } from '../firms/firm-types';
 import { pageQuery, requiredText, text, uuid, yearBuilt } from '../common/fields';
 import { SEARCH_MAX_LENGTH } from '../common/lists';
 import { requestSchema } from '../common/schema-check';
@@ -66,6 +67,8 @@ const clientFields = {
   email: optionalEmail,
   phone: text(PHONE_MAX_LENGTH),
   notes: text(L.notes),
+  // null = the firm's language; left out on create = null
+  language: z.enum(LANGUAGES, { error: 'Choose English or Spanish, or leave it to the firm.' }).nullable().optional(),
 };
 export const clientCreate = requestSchema<ClientCreate>()(
   z.strictObject({
