@@ -6,6 +6,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { CLIENT_KIND_LABELS, STAGE_LABELS, type ClientDetail } from '@layerbook/contracts/types';
 import { loadMessage } from '../../shared/forms/load-message';
 import { LeadSafetyNote } from '../../shared/ui/lead-safety-note';
@@ -31,6 +32,7 @@ type SiteEditing = string | null;
     MatProgressBarModule,
     RouterLink,
     SiteForm,
+    TranslatePipe,
   ],
   templateUrl: './client-detail.html',
   styleUrl: './client-detail.scss',
@@ -38,6 +40,7 @@ type SiteEditing = string | null;
 })
 export class ClientDetailPage {
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
 
   /** From the route (withComponentInputBinding). */
   readonly id = input.required<string>();
@@ -50,11 +53,11 @@ export class ClientDetailPage {
   protected readonly kindLabels = CLIENT_KIND_LABELS;
   protected readonly stageLabels = STAGE_LABELS;
 
-  /** Each form answers with its own part only, so the page reads the whole client again. */
-  protected afterSave(what: string): void {
+  /** Each form answers (`whatKey` is the snack bar's words) with its own part only, so the page reads the whole client again. */
+  protected afterSave(whatKey: string): void {
     this.isEditing.set(false);
     this.siteEditing.set(null);
-    this.snackBar.open(what, 'Close', { duration: 4000 });
+    this.snackBar.open(String(this.translate.instant(whatKey)), String(this.translate.instant('clients.close')), { duration: 4000 });
     this.detail.reload();
   }
 }

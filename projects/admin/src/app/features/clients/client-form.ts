@@ -5,6 +5,7 @@ import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
+import { TranslatePipe } from '@ngx-translate/core';
 import {
   CLIENT_KINDS,
   CLIENT_KIND_LABELS,
@@ -27,19 +28,33 @@ import { ClientApi } from './client-api';
 /** Adds a client, or edits one when given it. */
 @Component({
   selector: 'lb-client-form',
-  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+    TranslatePipe,
+  ],
   template: `
-    <form [formGroup]="form" (ngSubmit)="saveClient()" novalidate [attr.aria-label]="isNew() ? 'New client' : 'Edit client'">
+    <form
+      [formGroup]="form"
+      (ngSubmit)="saveClient()"
+      novalidate
+      [attr.aria-label]="(isNew() ? 'clients.clientForm.newClient' : 'clients.clientForm.editClient') | translate"
+    >
       <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
         <lb-form-alert [message]="submission.message()" />
         <mat-form-field class="wide">
-          <mat-label>Client name</mat-label>
+          <mat-label>{{ 'clients.clientForm.clientName' | translate }}</mat-label>
           <input matInput formControlName="name" autocomplete="off" required />
-          <mat-hint>A person, or a design studio or building firm.</mat-hint>
+          <mat-hint>{{ 'clients.clientForm.clientNameHint' | translate }}</mat-hint>
           <mat-error>{{ errorText(form.controls.name, words.name) }}</mat-error>
         </mat-form-field>
         <mat-form-field>
-          <mat-label>Kind of client</mat-label>
+          <mat-label>{{ 'clients.clientForm.kindOfClient' | translate }}</mat-label>
           <mat-select formControlName="kind" required>
             @for (kind of kinds; track kind) {
               <mat-option [value]="kind">{{ kindLabels[kind] }}</mat-option>
@@ -47,26 +62,28 @@ import { ClientApi } from './client-api';
           </mat-select>
           <mat-error>{{ errorText(form.controls.kind, words.kind) }}</mat-error>
         </mat-form-field>
-        <mat-checkbox formControlName="isCompany">This is a company</mat-checkbox>
+        <mat-checkbox formControlName="isCompany">{{ 'clients.clientForm.isCompany' | translate }}</mat-checkbox>
         <mat-form-field>
-          <mat-label>E-mail</mat-label>
+          <mat-label>{{ 'clients.clientForm.email' | translate }}</mat-label>
           <input matInput type="email" formControlName="email" autocomplete="off" />
           <mat-error>{{ errorText(form.controls.email, words.email) }}</mat-error>
         </mat-form-field>
         <mat-form-field>
-          <mat-label>Phone</mat-label>
+          <mat-label>{{ 'clients.clientForm.phone' | translate }}</mat-label>
           <input matInput type="tel" formControlName="phone" autocomplete="off" />
           <mat-error>{{ errorText(form.controls.phone, words.phone) }}</mat-error>
         </mat-form-field>
         <mat-form-field class="wide">
-          <mat-label>Notes</mat-label>
+          <mat-label>{{ 'clients.clientForm.notes' | translate }}</mat-label>
           <textarea matInput formControlName="notes" rows="3"></textarea>
-          <mat-hint>Gate codes go with the site; this is for the client: how they like to be reached, pets…</mat-hint>
+          <mat-hint>{{ 'clients.clientForm.notesHint' | translate }}</mat-hint>
           <mat-error>{{ errorText(form.controls.notes, words.notes) }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions wide">
-          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">{{ isNew() ? 'Add client' : 'Save client' }}</button>
-          <button mat-button type="button" (click)="cancelled.emit()">Cancel</button>
+          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">
+            {{ (isNew() ? 'clients.clientForm.addClient' : 'clients.clientForm.saveClient') | translate }}
+          </button>
+          <button mat-button type="button" (click)="cancelled.emit()">{{ 'clients.cancel' | translate }}</button>
         </div>
       </fieldset>
     </form>

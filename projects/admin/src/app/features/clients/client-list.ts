@@ -9,6 +9,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
 import { CLIENT_KINDS, CLIENT_KIND_LABELS, SEARCH_MAX_LENGTH, type ClientKind, type ClientSummary } from '@layerbook/contracts/types';
 import { debounceTime, distinctUntilChanged, map, tap } from 'rxjs';
 import { hydratedSignal } from '../../shared/forms/hydrated';
@@ -38,6 +39,7 @@ const SEARCH_PAUSE_MS = 300;
     MatSelectModule,
     ReactiveFormsModule,
     RouterLink,
+    TranslatePipe,
   ],
   templateUrl: './client-list.html',
   styleUrl: './client-list.scss',

@@ -5,6 +5,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { ClientMatch, ItemList } from '@layerbook/contracts/types';
 import { problemMessage } from '../../core/errors/problem';
 import { FormAlert } from '../../shared/ui/form-alert';
@@ -17,18 +18,15 @@ import { matchLabel, matchWords } from './client-match-words';
  */
 @Component({
   selector: 'lb-client-merge',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatSelectModule],
+  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatSelectModule, TranslatePipe],
   template: `
     @if (candidates().length > 0) {
       <section class="panel" aria-labelledby="merge-heading">
-        <h2 id="merge-heading">Merge into…</h2>
-        <p class="muted">
-          These records may be the same person. Merging moves this record's contacts, sites, inquiries, estimates, jobs, sample boards and
-          portal access to the one you keep, then removes this record.
-        </p>
+        <h2 id="merge-heading">{{ 'clients.clientMerge.heading' | translate }}</h2>
+        <p class="muted">{{ 'clients.clientMerge.explain' | translate }}</p>
         <lb-form-alert [message]="message()" />
         <mat-form-field>
-          <mat-label>Client to keep</mat-label>
+          <mat-label>{{ 'clients.clientMerge.clientToKeep' | translate }}</mat-label>
           <mat-select [value]="chosen()" (valueChange)="chosen.set($event)">
             @for (match of candidates(); track match.id) {
               <mat-option [value]="match.id">{{ label(match) }} — {{ words(match) }}</mat-option>
@@ -36,7 +34,9 @@ import { matchLabel, matchWords } from './client-match-words';
           </mat-select>
         </mat-form-field>
         <p>
-          <button mat-stroked-button type="button" [disabled]="!chosen() || isBusy()" (click)="merge()">Merge {{ name() }} into it</button>
+          <button mat-stroked-button type="button" [disabled]="!chosen() || isBusy()" (click)="merge()">
+            {{ 'clients.clientMerge.merge' | translate: { name: name() } }}
+          </button>
         </p>
       </section>
     }
@@ -47,6 +47,7 @@ export class ClientMerge {
   private readonly api = inject(ClientApi);
   private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
 
   readonly clientId = input.required<string>();
   readonly name = input.required<string>();
@@ -68,7 +69,11 @@ export class ClientMerge {
     this.message.set(null);
     try {
       await this.api.merge(this.clientId(), { intoClientId: into.id });
-      this.snackBar.open(`${this.name()} is merged into ${into.name}.`, 'Close', { duration: 5000 });
+      this.snackBar.open(
+        String(this.translate.instant('clients.clientMerge.merged', { name: this.name(), into: into.name })),
+        String(this.translate.instant('clients.close')),
+        { duration: 5000 },
+      );
       await this.router.navigate(['/clients', into.id]);
     } catch (error) {
       this.message.set(problemMessage(error));

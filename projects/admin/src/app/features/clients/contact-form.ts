@@ -3,6 +3,7 @@ import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Valida
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { TranslatePipe } from '@ngx-translate/core';
 import { CLIENT_LIMITS as L, EMAIL_MAX_LENGTH, PHONE_MAX_LENGTH, type ContactView } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
 import { EMAIL_WORDS, tooLong } from '../../shared/forms/field-words';
@@ -15,34 +16,40 @@ import { ClientApi } from './client-api';
 /** Another person at the client: a partner, the designer's project lead, a site super. */
 @Component({
   selector: 'lb-contact-form',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, TranslatePipe],
   template: `
-    <form [formGroup]="form" #formDir="ngForm" (ngSubmit)="addContact(formDir)" novalidate aria-label="Add a contact">
+    <form
+      [formGroup]="form"
+      #formDir="ngForm"
+      (ngSubmit)="addContact(formDir)"
+      novalidate
+      [attr.aria-label]="'clients.contactForm.form' | translate"
+    >
       <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
         <lb-form-alert [message]="submission.message()" />
         <mat-form-field>
-          <mat-label>Contact name</mat-label>
+          <mat-label>{{ 'clients.contactForm.name' | translate }}</mat-label>
           <input matInput formControlName="name" autocomplete="off" required />
           <mat-error>{{ errorText(form.controls.name, words.name) }}</mat-error>
         </mat-form-field>
         <mat-form-field>
-          <mat-label>Role or title</mat-label>
+          <mat-label>{{ 'clients.contactForm.roleTitle' | translate }}</mat-label>
           <input matInput formControlName="roleTitle" autocomplete="off" />
-          <mat-hint>Like "project designer" or "site super".</mat-hint>
+          <mat-hint>{{ 'clients.contactForm.roleTitleHint' | translate }}</mat-hint>
           <mat-error>{{ errorText(form.controls.roleTitle, words.roleTitle) }}</mat-error>
         </mat-form-field>
         <mat-form-field>
-          <mat-label>Contact e-mail</mat-label>
+          <mat-label>{{ 'clients.contactForm.email' | translate }}</mat-label>
           <input matInput type="email" formControlName="email" autocomplete="off" />
           <mat-error>{{ errorText(form.controls.email, words.email) }}</mat-error>
         </mat-form-field>
         <mat-form-field>
-          <mat-label>Contact phone</mat-label>
+          <mat-label>{{ 'clients.contactForm.phone' | translate }}</mat-label>
           <input matInput type="tel" formControlName="phone" autocomplete="off" />
           <mat-error>{{ errorText(form.controls.phone, words.phone) }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions">
-          <button mat-stroked-button type="submit" [disabled]="submission.isBusy()">Add contact</button>
+          <button mat-stroked-button type="submit" [disabled]="submission.isBusy()">{{ 'clients.contactForm.add' | translate }}</button>
         </div>
       </fieldset>
     </form>

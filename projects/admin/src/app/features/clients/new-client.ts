@@ -1,17 +1,20 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { ClientSummary } from '@layerbook/contracts/types';
 import { ClientForm } from './client-form';
 
 @Component({
   selector: 'lb-new-client',
-  imports: [ClientForm, RouterLink],
+  imports: [ClientForm, RouterLink, TranslatePipe],
   template: `
     <section class="lb-page">
-      <p><a routerLink="/clients">Back to clients</a></p>
-      <h1>Add a client</h1>
-      <p class="lb-lead">Add their people and sites on the next page.</p>
+      <p>
+        <a routerLink="/clients">{{ 'clients.backToClients' | translate }}</a>
+      </p>
+      <h1>{{ 'clients.newClient.heading' | translate }}</h1>
+      <p class="lb-lead">{{ 'clients.newClient.lead' | translate }}</p>
       <lb-client-form (saved)="openClient($event)" (cancelled)="goBack()" />
     </section>
   `,
@@ -20,9 +23,16 @@ import { ClientForm } from './client-form';
 export class NewClient {
   private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
 
   protected async openClient(client: ClientSummary): Promise<void> {
-    this.snackBar.open(`${client.name} added.`, 'Close', { duration: 4000 });
+    this.snackBar.open(
+      String(this.translate.instant('clients.newClient.added', { name: client.name })),
+      String(this.translate.instant('clients.close')),
+      {
+        duration: 4000,
+      },
+    );
     await this.router.navigate(['/clients', client.id]);
   }
 

@@ -4,6 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
+import { TranslatePipe } from '@ngx-translate/core';
 import { CLIENT_LIMITS as L, DEFAULT_COUNTRY, type SiteCreate, type SiteView } from '@layerbook/contracts/types';
 import { COUNTRY_CHOICES } from '../../shared/forms/country-choices';
 import { errorText } from '../../shared/forms/error-text';
@@ -18,7 +19,7 @@ import { ClientApi } from './client-api';
 /** A place where work happens; adds one to a client, or edits the one it is given. */
 @Component({
   selector: 'lb-site-form',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule, TranslatePipe],
   templateUrl: './site-form.html',
   styleUrl: './site-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
