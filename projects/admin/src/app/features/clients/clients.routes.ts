@@ -4,17 +4,17 @@ export default [
   {
     path: '',
     pathMatch: 'full',
-    title: 'Clients · Layerbook',
+    title: 'clients.titles.list',
     loadComponent: () => import('./client-list').then((m) => m.ClientList),
   },
   {
     path: 'new',
-    title: 'New client · Layerbook',
+    title: 'clients.titles.new',
     loadComponent: () => import('./new-client').then((m) => m.NewClient),
   },
   {
     path: ':id',
-    title: 'Client · Layerbook',
+    title: 'clients.titles.detail',
     loadComponent: () => import('./client-detail').then((m) => m.ClientDetailPage),
   },
 ] satisfies Routes;
