@@ -17,6 +17,7 @@ export * from './engine';
 export * from './proposals/proposal';
 export * from './proposals/proposal-snapshot';
 export * from './jobs';
+export * from './jobs/sheet';
 export * from './proposals/portal-decisions';
 export * from './proposals/portal-views';
 export * from './samples/samples';

@@ -1,4 +1,15 @@
-import type { CautionId, Coverage, Dilution, LengthUnit, MixRecipe, PlanDay, ProductHazards, QuantityUnit } from '@layerbook/domain';
+import type {
+  CautionId,
+  CautionWordKey,
+  Coverage,
+  Dilution,
+  JurisdictionKey,
+  LengthUnit,
+  MixRecipe,
+  PlanDay,
+  ProductHazards,
+  QuantityUnit,
+} from '@layerbook/domain';
 import type { WorkItemView } from '../billing/job-billing-types';
 import type { PhotoView } from '../files/photo-types';
 import type { Language, UnitSystem } from '../firms/firm-types';
@@ -58,8 +69,8 @@ export interface SheetSurfaceLayer {
   readonly name: string;
   readonly workItemId: string | null;
   readonly doneOn: string | null;
-  /** product need for this surface in base units (mL or g), per product */
-  readonly products: ReadonlyArray<{ readonly productId: string; readonly amount: number }>;
+  /** product need for this surface in base units (mL or g), per product (a quantity, never money) */
+  readonly products: ReadonlyArray<{ readonly productId: string; readonly quantity: number }>;
   /** water in the mix, base units */
   readonly water: number;
 }
@@ -86,7 +97,21 @@ export interface SheetRoom {
   readonly surfaces: readonly SheetSurface[];
 }
 
-/** A caution the engine raised for this job; the apps translate it by `id` (English text kept as sent). */
+/**
+ * One line of a caution by key: the apps show `cautions.<key>` with `params` (words from the shared
+ * `cautions` area), or the English bullet at the same index when `key` is null (a line that is not
+ * one of the engine's) or the key has no words yet.
+ */
+export interface SheetCautionLine {
+  readonly key: CautionWordKey | null;
+  readonly params: Readonly<Record<string, string>>;
+}
+
+/**
+ * A caution the engine raised for this job (the accepted option's stored result, less the lines meant
+ * for the office). English text as sent, and beside each text its key for translation — keys have no
+ * area prefix: the apps read `cautions.<titleKey>`, `cautions.<lines[i].key>` and so on.
+ */
 export interface SheetCaution {
   readonly id: CautionId;
   readonly title: string;
@@ -94,8 +119,15 @@ export interface SheetCaution {
   readonly rule: string;
   readonly jurisdiction: string;
   readonly standing: string;
-  /** names the bullets insert (product lists, year), for translated text */
-  readonly params: Readonly<Record<string, string>>;
+  /** '<id>.title' */
+  readonly titleKey: CautionWordKey;
+  /** '<id>.rule' */
+  readonly ruleKey: CautionWordKey;
+  /** parallel to `bullets` */
+  readonly lines: readonly SheetCautionLine[];
+  /** the jurisdiction's sentences in order ('jurisdiction.usFederal' | 'jurisdiction.guidance', then 'jurisdiction.outsideUs') */
+  readonly jurisdictionKeys: readonly JurisdictionKey[];
+  readonly standingKey: 'standing';
 }
 
 export interface JobSheet {
@@ -127,4 +159,11 @@ export interface JobSheet {
 /** A progress photo: the shared photo view plus the work item it shows. */
 export interface JobPhotoView extends PhotoView {
   readonly workItemId: string | null;
+}
+
+/** The text sent beside a progress photo (multipart fields `caption`, `workItemId`). */
+export interface JobPhotoFields {
+  readonly caption?: string;
+  /** the layer on a surface the photo shows */
+  readonly workItemId?: string;
 }
