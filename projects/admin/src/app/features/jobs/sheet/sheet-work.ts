@@ -1,0 +1,265 @@
+import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import type { JobSheet, SheetRoom, SheetSurface, SheetSurfaceLayer } from '@layerbook/contracts/types';
+import { Language } from '../../../../../../shared/i18n/language';
+import { problemMessage } from '../../../core/errors/problem';
+import { FormAlert } from '../../../shared/ui/form-alert';
+import { formatDay, formatNumber, surfaceSizes, todayIn } from './sheet-format';
+import { type LayerMarkKind, SHEET_MARKS } from './sheet-marks';
+
+/**
+ * Rooms → surfaces with their measured sizes in the firm's units, and each layer on the surface
+ * with "Mark done" (or "Reopen") dated today where the firm works. A mark the phone keeps for
+ * later says so beside its layer.
+ */
+@Component({
+  selector: 'lb-sheet-work',
+  imports: [FormAlert, MatButtonModule, MatIconModule, TranslatePipe],
+  template: `
+    @let s = sheet();
+    <lb-form-alert [message]="message()" />
+    @for (room of s.rooms; track room.id) {
+      <section class="room" [attr.aria-labelledby]="'room-' + room.id">
+        <h3 [id]="'room-' + room.id">{{ room.name }}</h3>
+        @for (surface of room.surfaces; track surface.id) {
+          @let size = sizes(surface);
+          @let unit = 'sheet.units.' + size.unit | translate;
+          <div class="surface" role="group" [attr.aria-label]="room.name + ' · ' + surface.name">
+            <p class="surface-name">
+              <strong>{{ surface.name }}</strong>
+              <span class="muted">{{
+                'sheet.work.layersDone' | translate: { done: doneCount(surface), total: surface.layers.length }
+              }}</span>
+            </p>
+            <dl class="sizes">
+              <div>
+                <dt>{{ 'sheet.work.gross' | translate }}</dt>
+                <dd>{{ 'sheet.work.' + size.measure | translate: { value: number(size.gross), unit: unit } }}</dd>
+              </div>
+              <div>
+                <dt>{{ 'sheet.work.deductions' | translate }}</dt>
+                <dd>{{ 'sheet.work.' + size.measure | translate: { value: number(size.deductions), unit: unit } }}</dd>
+              </div>
+              <div>
+                <dt>{{ 'sheet.work.net' | translate }}</dt>
+                <dd>
+                  <strong>{{ 'sheet.work.' + size.measure | translate: { value: number(size.net), unit: unit } }}</strong>
+                </dd>
+              </div>
+            </dl>
+            @if (surface.isCeiling || surface.isCurved) {
+              <p class="tags">
+                @if (surface.isCeiling) {
+                  <span class="tag">{{ 'sheet.work.ceiling' | translate }}</span>
+                }
+                @if (surface.isCurved) {
+                  <span class="tag">{{ 'sheet.work.curved' | translate }}</span>
+                }
+              </p>
+            }
+            <ol class="layers">
+              @for (layer of surface.layers; track layer.layerId) {
+                @let label = layer.name + ', ' + room.name + ' · ' + surface.name;
+                @let waiting = pendingFor(layer.workItemId);
+                @let done = doneOn(layer);
+                <li>
+                  <span class="layer">
+                    <mat-icon aria-hidden="true">{{ done ? 'task_alt' : 'radio_button_unchecked' }}</mat-icon>
+                    <span>
+                      {{ layer.name }}
+                      <span class="small">
+                        @if (done) {
+                          {{ 'sheet.work.doneOn' | translate: { date: day(done) } }}
+                        } @else {
+                          {{ 'sheet.work.notDone' | translate }}
+                        }
+                      </span>
+                      @if (waiting) {
+                        <span class="small pending" role="status">
+                          <mat-icon aria-hidden="true">cloud_off</mat-icon>{{ 'sheet.work.pending' | translate }}
+                        </span>
+                      }
+                    </span>
+                  </span>
+                  @if (layer.workItemId) {
+                    @if (done) {
+                      <button
+                        mat-button
+                        type="button"
+                        [disabled]="sending() !== null"
+                        [attr.aria-label]="'sheet.work.reopenLabel' | translate: { what: label }"
+                        (click)="markLayer(room, surface, layer, 'layerReopened')"
+                      >
+                        {{ 'sheet.work.reopen' | translate }}
+                      </button>
+                    } @else {
+                      <button
+                        mat-flat-button
+                        type="button"
+                        [disabled]="sending() !== null"
+                        [attr.aria-label]="'sheet.work.markDoneLabel' | translate: { what: label }"
+                        (click)="markLayer(room, surface, layer, 'layerDone')"
+                      >
+                        {{ 'sheet.work.markDone' | translate }}
+                      </button>
+                    }
+                  }
+                </li>
+              }
+            </ol>
+          </div>
+        }
+      </section>
+    } @empty {
+      <p class="muted">{{ 'sheet.work.none' | translate }}</p>
+    }
+  `,
+  styles: `
+    h3 {
+      margin: 1rem 0 0.5rem;
+    }
+    .surface {
+      border: 1px solid var(--mat-sys-outline-variant);
+      border-radius: 12px;
+      padding: 0.75rem;
+      margin-bottom: 0.75rem;
+      background: var(--mat-sys-surface-container-lowest);
+    }
+    .surface-name {
+      display: flex;
+      justify-content: space-between;
+      flex-wrap: wrap;
+      gap: 0.25rem 1rem;
+      margin: 0 0 0.5rem;
+    }
+    .sizes {
+      display: grid;
+      grid-template-columns: repeat(3, minmax(0, 1fr));
+      gap: 0.5rem;
+      margin: 0 0 0.5rem;
+    }
+    dt {
+      font-size: 0.8rem;
+      color: var(--mat-sys-on-surface-variant);
+    }
+    dd {
+      margin: 0;
+      font-variant-numeric: tabular-nums;
+    }
+    .tags {
+      display: flex;
+      gap: 0.5rem;
+      margin: 0 0 0.5rem;
+    }
+    .tag {
+      padding: 0.1rem 0.6rem;
+      border-radius: 999px;
+      background: var(--mat-sys-tertiary-container);
+      color: var(--mat-sys-on-tertiary-container);
+      font-size: 0.85rem;
+    }
+    .layers {
+      list-style: none;
+      margin: 0;
+      padding: 0;
+    }
+    .layers li {
+      display: flex;
+      align-items: center;
+      justify-content: space-between;
+      gap: 0.5rem;
+      padding: 0.4rem 0;
+      min-height: 48px;
+      border-top: 1px solid var(--mat-sys-outline-variant);
+    }
+    .layer {
+      display: flex;
+      align-items: flex-start;
+      gap: 0.5rem;
+    }
+    .small {
+      display: block;
+      font-size: 0.85rem;
+      color: var(--mat-sys-on-surface-variant);
+    }
+    .pending {
+      display: flex;
+      align-items: center;
+      gap: 0.25rem;
+      color: var(--mat-sys-tertiary);
+    }
+    .pending mat-icon {
+      width: 16px;
+      height: 16px;
+      font-size: 16px;
+    }
+    .muted {
+      color: var(--mat-sys-on-surface-variant);
+    }
+    button {
+      flex: none;
+      min-height: 44px;
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class SheetWork {
+  private readonly language = inject(Language);
+  private readonly translate = inject(TranslateService);
+  private readonly marks = inject(SHEET_MARKS);
+
+  readonly sheet = input.required<JobSheet>();
+  /** a mark was sent or kept: the page reads the sheet again */
+  readonly marked = output<void>();
+
+  /** the work item whose mark is on its way, so the buttons wait */
+  protected readonly sending = signal<string | null>(null);
+  protected readonly message = signal<string | null>(null);
+  private readonly pending = computed(() => this.marks.pending(this.sheet().id)());
+
+  protected sizes(surface: SheetSurface) {
+    return surfaceSizes(surface, this.sheet().lengthUnit, this.sheet().units);
+  }
+
+  protected doneCount(surface: SheetSurface): number {
+    return surface.layers.filter((l) => this.doneOn(l) !== null).length;
+  }
+
+  protected pendingFor(workItemId: string | null): boolean {
+    return workItemId !== null && this.pending().some((p) => p.workItemId === workItemId);
+  }
+
+  /** the layer's done date as the crew last marked it: a mark still on the phone counts already */
+  protected doneOn(layer: SheetSurfaceLayer): string | null {
+    const last = this.pending()
+      .filter((p) => p.workItemId === layer.workItemId)
+      .at(-1);
+    if (!last) return layer.doneOn;
+    return last.kind === 'layerDone' ? last.on : null;
+  }
+
+  protected number(value: number): string {
+    return formatNumber(value, this.language.locale());
+  }
+
+  protected day(isoDate: string): string {
+    return formatDay(isoDate, this.language.locale());
+  }
+
+  protected async markLayer(room: SheetRoom, surface: SheetSurface, layer: SheetSurfaceLayer, kind: LayerMarkKind): Promise<void> {
+    if (!layer.workItemId) return;
+    this.sending.set(layer.workItemId);
+    this.message.set(null);
+    try {
+      await this.marks.mark(this.sheet().id, layer.workItemId, kind, todayIn(this.sheet().timeZone, new Date()));
+      this.marked.emit();
+    } catch (error) {
+      const what = `${layer.name}, ${room.name} · ${surface.name}`;
+      this.message.set(this.translate.instant('sheet.work.failed', { what, reason: problemMessage(error) }) as string);
+    } finally {
+      this.sending.set(null);
+    }
+  }
+}
