@@ -1,5 +1,6 @@
 import { EMAIL_MAX_LENGTH, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, PERSON_NAME_MAX_LENGTH } from '@layerbook/contracts/types';
 import { ErrorWords } from './error-text';
+import type { FieldErrorWords } from './field-error-pipe';
 
 /** Messages that match the API's zod schemas (packages/contracts), so both sides say the same. */
 export const EMAIL_WORDS: ErrorWords = {
@@ -22,4 +23,27 @@ export const NAME_WORDS: ErrorWords = {
 /** "Use at most 120 characters." for a field whose limit is `max`. */
 export function tooLong(max: number): ErrorWords {
   return { maxlength: `Use at most ${max} characters.` };
+}
+
+/** The same words as keys, for `lbFieldError` (shown in the reader's language). */
+export const EMAIL_ERRORS: FieldErrorWords = {
+  required: 'common.fieldErrors.emailRequired',
+  email: 'common.fieldErrors.emailInvalid',
+  maxlength: { key: 'common.fieldErrors.emailTooLong', params: { max: EMAIL_MAX_LENGTH } },
+};
+
+export const NEW_PASSWORD_ERRORS: FieldErrorWords = {
+  required: 'common.fieldErrors.passwordRequired',
+  minlength: { key: 'common.fieldErrors.passwordTooShort', params: { min: PASSWORD_MIN_LENGTH } },
+  maxlength: { key: 'common.fieldErrors.tooLong', params: { max: PASSWORD_MAX_LENGTH } },
+};
+
+export const NAME_ERRORS: FieldErrorWords = {
+  required: 'common.fieldErrors.nameRequired',
+  maxlength: { key: 'common.fieldErrors.tooLong', params: { max: PERSON_NAME_MAX_LENGTH } },
+};
+
+/** "Use at most 120 characters." for a field whose limit is `max`, as a key. */
+export function tooLongError(max: number): FieldErrorWords {
+  return { maxlength: { key: 'common.fieldErrors.tooLong', params: { max } } };
 }

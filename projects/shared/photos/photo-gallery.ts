@@ -16,7 +16,9 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { PHOTO_CONTENT_TYPES, PHOTO_UPLOAD_MAX_BYTES, type PhotoThumbnail } from '@layerbook/contracts/types';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { firstValueFrom } from 'rxjs';
+import type { KeyedWord } from '../forms/field-error-pipe';
 import { photoProblemText, screenPick, thumbnailWidth, uploadPercent } from './photo-picks';
 
 /** A photo as the gallery draws it: staff photos also carry their original to download. */
@@ -41,22 +43,28 @@ let nextGalleryId = 0;
  */
 @Component({
   selector: 'lb-photo-gallery',
-  imports: [MatButtonModule, MatIconModule, MatProgressBarModule],
+  imports: [MatButtonModule, MatIconModule, MatProgressBarModule, TranslatePipe],
   template: `
     @let name = subject();
     <section class="gallery" [attr.aria-labelledby]="headingId">
       @if (headingLevel() === 3) {
-        <h3 [id]="headingId">{{ heading() }}</h3>
+        <h3 [id]="headingId">{{ heading() | translate }}</h3>
       } @else {
-        <h2 [id]="headingId">{{ heading() }}</h2>
+        <h2 [id]="headingId">{{ heading() | translate }}</h2>
       }
       @if (photos().length > 0) {
-        <ul class="strip" [attr.aria-label]="'Photos of ' + name">
+        <ul class="strip" [attr.aria-label]="'common.photoGallery.photosOf' | translate: { name }">
           @for (p of photos(); track p.id; let i = $index) {
-            @let alt = p.caption || 'Photo ' + (i + 1) + ' of ' + name;
+            @let alt = p.caption || ('common.photoGallery.photoNumber' | translate: { number: i + 1, name });
             <li class="photo">
               @if (p.downloadUrl) {
-                <a [href]="p.downloadUrl" [attr.aria-label]="'Download ' + alt + (p.originalName ? ' (' + p.originalName + ')' : '')">
+                <a
+                  [href]="p.downloadUrl"
+                  [attr.aria-label]="
+                    (p.originalName ? 'common.photoGallery.downloadNamed' : 'common.photoGallery.download')
+                      | translate: { alt, file: p.originalName }
+                  "
+                >
                   <img [src]="p.thumbnailUrl" [alt]="alt" [width]="width(p)" [height]="thumbHeight()" loading="lazy" decoding="async" />
                 </a>
               } @else {
@@ -67,9 +75,13 @@ let nextGalleryId = 0;
               }
               @if (canDelete()) {
                 @if (confirming() === p.id) {
-                  <span class="confirm" role="group" [attr.aria-label]="'Delete photo ' + (i + 1) + '?'">
-                    <button mat-flat-button type="button" data-confirm [disabled]="isBusy()" (click)="deletePhoto(p)">Delete</button>
-                    <button mat-button type="button" [disabled]="isBusy()" (click)="confirming.set(null)">Keep</button>
+                  <span class="confirm" role="group" [attr.aria-label]="'common.photoGallery.deleteAsk' | translate: { number: i + 1 }">
+                    <button mat-flat-button type="button" data-confirm [disabled]="isBusy()" (click)="deletePhoto(p)">
+                      {{ 'common.photoGallery.delete' | translate }}
+                    </button>
+                    <button mat-button type="button" [disabled]="isBusy()" (click)="confirming.set(null)">
+                      {{ 'common.photoGallery.keep' | translate }}
+                    </button>
                   </span>
                 } @else {
                   <button
@@ -77,7 +89,7 @@ let nextGalleryId = 0;
                     type="button"
                     class="delete"
                     [disabled]="isBusy()"
-                    [attr.aria-label]="'Delete photo ' + (i + 1) + ' of ' + name"
+                    [attr.aria-label]="'common.photoGallery.deleteLabel' | translate: { number: i + 1, name }"
                     (click)="askToDelete(p)"
                   >
                     <mat-icon aria-hidden="true">delete</mat-icon>
@@ -88,7 +100,7 @@ let nextGalleryId = 0;
           }
         </ul>
       } @else if (isLoaded() && uploads().length === 0) {
-        <p class="muted">{{ emptyText() }}</p>
+        <p class="muted">{{ emptyText() | translate }}</p>
       }
 
       @for (u of uploads(); track u.key) {
@@ -97,7 +109,7 @@ let nextGalleryId = 0;
           <mat-progress-bar
             [mode]="u.percent === null ? 'indeterminate' : 'determinate'"
             [value]="u.percent ?? 0"
-            [attr.aria-label]="'Uploading ' + u.name"
+            [attr.aria-label]="'common.photoGallery.uploading' | translate: { name: u.name }"
           />
         </div>
       }
@@ -113,11 +125,11 @@ let nextGalleryId = 0;
               [attr.capture]="useCamera() ? 'environment' : null"
               multiple
               tabindex="-1"
-              [attr.aria-label]="'Photo files for ' + name"
+              [attr.aria-label]="'common.photoGallery.files' | translate: { name }"
               (change)="addPhotos(picker)"
             />
             <button mat-stroked-button type="button" (click)="picker.click()">
-              <mat-icon aria-hidden="true">add_a_photo</mat-icon>Add photos
+              <mat-icon aria-hidden="true">add_a_photo</mat-icon>{{ 'common.photoGallery.add' | translate }}
             </button>
           }
           @if (errors().length > 0) {
@@ -224,12 +236,14 @@ export class PhotoGallery {
   private readonly destroyRef = inject(DestroyRef);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly injector = inject(Injector);
+  private readonly translate = inject(TranslateService);
   private nextKey = 0;
 
   readonly photos = model.required<readonly GalleryPhoto[]>();
   /** what the photos show, for alt texts and labels: "Photo 2 of Stair hall, board A" */
   readonly subject = input.required<string>();
-  readonly heading = input('Photos');
+  /** a words key (or text shown as is) */
+  readonly heading = input('common.photoGallery.heading');
   readonly headingLevel = input<2 | 3>(2);
   /** where a new photo is posted (multipart field `file`); null: no upload */
   readonly uploadUrl = input<string | null>(null);
@@ -241,7 +255,8 @@ export class PhotoGallery {
   readonly useCamera = input(false);
   /** false while the host is still fetching the list, so "no photos" is not said too early */
   readonly isLoaded = input(true);
-  readonly emptyText = input('No photos yet.');
+  /** a words key (or text shown as is) */
+  readonly emptyText = input('common.photoGallery.empty');
   readonly thumbHeight = input(120);
   readonly maxBytes = input(PHOTO_UPLOAD_MAX_BYTES);
 
@@ -277,7 +292,7 @@ export class PhotoGallery {
     picker.value = '';
     if (files.length === 0) return;
     const { accepted, refusals } = screenPick(files, this.maxBytes());
-    this.errors.set(refusals);
+    this.errors.set(refusals.map((r) => this.say(r)));
     for (const file of accepted) await this.uploadOne(file);
   }
 
@@ -295,6 +310,10 @@ export class PhotoGallery {
       this.confirming.set(null);
       this.isBusy.set(false);
     }
+  }
+
+  private say(word: KeyedWord): string {
+    return this.translate.instant(word.key, word.params) as string;
   }
 
   private uploadOne(file: File): Promise<void> {

@@ -14,13 +14,13 @@ describe('screenPick', () => {
   it('names each file that is too large', () => {
     const picked = screenPick([file('big.jpg', 3 * 1024 * 1024), file('ok.jpg', 1)], 2.5 * 1024 * 1024);
     expect(picked.accepted.map((f) => f.name)).toEqual(['ok.jpg']);
-    expect(picked.refusals).toEqual(['big.jpg: larger than 2.5 MB. Choose a smaller photo.']);
+    expect(picked.refusals).toEqual([{ key: 'common.photoGallery.tooLarge', params: { name: 'big.jpg', size: '2.5 MB' } }]);
   });
 
   it('sends only the first few of a large pick and says so', () => {
     const picked = screenPick([file('1.jpg', 1), file('2.jpg', 1), file('3.jpg', 1)], 10, 2);
     expect(picked.accepted.map((f) => f.name)).toEqual(['1.jpg', '2.jpg']);
-    expect(picked.refusals).toEqual(['Choose up to 2 photos at a time; the first 2 are being added.']);
+    expect(picked.refusals).toEqual([{ key: 'common.photoGallery.tooMany', params: { count: 2 } }]);
   });
 });
 

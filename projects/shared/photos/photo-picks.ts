@@ -1,4 +1,5 @@
 import { toProblem } from '../errors/problem';
+import type { KeyedWord } from '../forms/field-error-pipe';
 
 /** Photos sent from one pick of the file chooser; more are refused with a word, not silently. */
 export const PHOTOS_PER_PICK = 10;
@@ -6,8 +7,8 @@ export const PHOTOS_PER_PICK = 10;
 export interface ScreenedPick {
   /** the files to send, in the order chosen */
   readonly accepted: readonly File[];
-  /** one sentence per file left out, and one if the pick was too large */
-  readonly refusals: readonly string[];
+  /** one sentence per file left out, and one if the pick was too large: words keys (common.photoGallery.*) with params */
+  readonly refusals: readonly KeyedWord[];
 }
 
 const megabytes = (bytes: number) => `${Math.round((bytes / (1024 * 1024)) * 10) / 10} MB`;
@@ -17,11 +18,11 @@ const megabytes = (bytes: number) => `${Math.round((bytes / (1024 * 1024)) * 10)
  * large. The server still decides (it decodes every file).
  */
 export function screenPick(files: readonly File[], maxBytes: number, perPick = PHOTOS_PER_PICK): ScreenedPick {
-  const refusals: string[] = [];
-  if (files.length > perPick) refusals.push(`Choose up to ${perPick} photos at a time; the first ${perPick} are being added.`);
+  const refusals: KeyedWord[] = [];
+  if (files.length > perPick) refusals.push({ key: 'common.photoGallery.tooMany', params: { count: perPick } });
   const accepted = files.slice(0, perPick).filter((file) => {
     if (file.size <= maxBytes) return true;
-    refusals.push(`${file.name}: larger than ${megabytes(maxBytes)}. Choose a smaller photo.`);
+    refusals.push({ key: 'common.photoGallery.tooLarge', params: { name: file.name, size: megabytes(maxBytes) } });
     return false;
   });
   return { accepted, refusals };

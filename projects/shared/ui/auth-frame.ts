@@ -1,15 +1,16 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { TranslatePipe } from '@ngx-translate/core';
 import { Wordmark } from './wordmark';
 
 /** The quiet frame around every signed-out page: mark, heading, one card. */
 @Component({
   selector: 'lb-auth-frame',
-  imports: [Wordmark],
+  imports: [TranslatePipe, Wordmark],
   template: `
     <main class="frame">
       <div class="card">
         <lb-wordmark />
-        <h1>{{ heading() }}</h1>
+        <h1>{{ heading() | translate }}</h1>
         <ng-content />
       </div>
     </main>
@@ -41,5 +42,6 @@ import { Wordmark } from './wordmark';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class AuthFrame {
+  /** a words key (or text shown as is) */
   readonly heading = input.required<string>();
 }

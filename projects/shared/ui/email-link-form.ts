@@ -4,11 +4,12 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { EMAIL_MAX_LENGTH } from '@layerbook/contracts/types';
-import { errorText } from '../forms/error-text';
-import { EMAIL_WORDS } from '../forms/field-words';
+import { FieldErrorPipe } from '../forms/field-error-pipe';
+import { EMAIL_ERRORS } from '../forms/field-words';
 import { hydratedSignal } from '../forms/hydrated';
 import { Submission } from '../forms/submission';
 import { requiredText } from '../forms/text-validators';
+import { TranslatePipe } from '@ngx-translate/core';
 import { FormAlert } from './form-alert';
 
 /**
@@ -19,18 +20,18 @@ import { FormAlert } from './form-alert';
  */
 @Component({
   selector: 'lb-email-link-form',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [FieldErrorPipe, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, TranslatePipe],
   template: `
     <form [formGroup]="form" (ngSubmit)="requestLink()" novalidate>
       <fieldset class="lb-gate lb-form" [disabled]="!isHydrated()">
         <lb-form-alert [message]="submission.message()" />
         <mat-form-field>
-          <mat-label>E-mail</mat-label>
+          <mat-label>{{ 'common.emailLinkForm.email' | translate }}</mat-label>
           <input matInput type="email" formControlName="email" autocomplete="email" required />
-          <mat-error>{{ errorText(form.controls.email, emailWords) }}</mat-error>
+          <mat-error>{{ form.controls.email | lbFieldError: emailErrors }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions">
-          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">{{ buttonLabel() }}</button>
+          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">{{ buttonLabel() | translate }}</button>
         </div>
       </fieldset>
     </form>
@@ -38,6 +39,7 @@ import { FormAlert } from './form-alert';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class EmailLinkForm {
+  /** a words key (or text shown as is) */
   readonly buttonLabel = input.required<string>();
   /** Asks the server for the link; a rejection is shown on the form. */
   readonly send = input.required<(email: string) => Promise<unknown>>();
@@ -47,8 +49,7 @@ export class EmailLinkForm {
     email: ['', [requiredText, Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
   });
   protected readonly submission = new Submission();
-  protected readonly errorText = errorText;
-  protected readonly emailWords = EMAIL_WORDS;
+  protected readonly emailErrors = EMAIL_ERRORS;
   protected readonly isHydrated = hydratedSignal();
 
   protected async requestLink(): Promise<void> {

@@ -1,14 +1,17 @@
 import { ChangeDetectionStrategy, Component, RESPONSE_INIT, inject } from '@angular/core';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
 
 @Component({
   selector: 'lb-not-found',
-  imports: [RouterLink],
+  imports: [RouterLink, TranslatePipe],
   template: `
     <main class="lb-page">
-      <h1>There is no page here</h1>
-      <p class="lb-lead">The address may be mistyped, or the page has moved.</p>
-      <p><a routerLink="/">Go to the start page</a></p>
+      <h1>{{ 'common.notFound.title' | translate }}</h1>
+      <p class="lb-lead">{{ 'common.notFound.lead' | translate }}</p>
+      <p>
+        <a routerLink="/">{{ 'common.notFound.home' | translate }}</a>
+      </p>
     </main>
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,

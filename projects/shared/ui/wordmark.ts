@@ -15,7 +15,7 @@ import { ChangeDetectionStrategy, Component, input } from '@angular/core';
       <path d="M4 23.5c4-2.2 8-2.2 12 0s8 2.2 12 0V28H4z" class="base" />
       <path d="M4 6.5c4-2.2 8-2.2 12 0s8 2.2 12 0" fill="none" class="line" stroke-width="1.6" />
     </svg>
-    <span aria-hidden="true">Layerbook</span>
+    <span aria-hidden="true" translate="no">Layerbook</span>
   `,
   styles: `
     :host {

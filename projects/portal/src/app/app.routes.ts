@@ -6,13 +6,13 @@ export const routes: Routes = [
   { path: '', pathMatch: 'full', redirectTo: 'projects' },
   {
     path: 'sign-in',
-    title: 'Sign in · Layerbook client portal',
+    title: 'layout.titles.signIn',
     canActivate: [signedOutGuard],
     loadComponent: () => import('./features/auth/sign-in').then((m) => m.SignIn),
   },
   {
     path: 'sign-in/link',
-    title: 'Signing you in · Layerbook client portal',
+    title: 'layout.titles.signingIn',
     loadComponent: () => import('./features/auth/sign-in-link').then((m) => m.SignInLink),
   },
   // A firm's public inquiry form: no sign-in; the page title names the firm (set by the page).
@@ -33,7 +33,7 @@ export const routes: Routes = [
     children: [
       {
         path: 'projects',
-        title: 'Your projects · Layerbook client portal',
+        title: 'layout.titles.projects',
         loadComponent: () => import('./features/proposals/proposal-list').then((m) => m.ProposalList),
       },
       {
@@ -42,7 +42,7 @@ export const routes: Routes = [
       },
       {
         path: 'proposals/:id',
-        title: 'Proposal · Layerbook client portal',
+        title: 'layout.titles.proposal',
         loadComponent: () => import('./features/proposals/proposal-page').then((m) => m.ProposalPage),
       },
       // The client's billing: change orders to approve (and invoices, statements).
@@ -51,7 +51,7 @@ export const routes: Routes = [
   },
   {
     path: '**',
-    title: 'Page not found · Layerbook client portal',
+    title: 'layout.titles.notFound',
     loadComponent: () => import('./shared/ui/not-found').then((m) => m.NotFound),
   },
 ];

@@ -2,7 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { Language } from '../../../../../shared/i18n/language';
-import type { PortalSession } from '@layerbook/contracts/types';
+import type { LanguageChoice, PortalSession } from '@layerbook/contracts/types';
 
 export type PortalClient = NonNullable<PortalSession['client']>;
 
@@ -37,6 +37,12 @@ export class Session {
     this.current.set(client);
     this.follow(client);
     return client;
+  }
+
+  /** The client's own language, or null to follow the firm's; the answer is the whole session. */
+  async chooseLanguage(language: LanguageChoice['language']): Promise<void> {
+    const body: LanguageChoice = { language };
+    this.accept(await firstValueFrom(this.http.patch<PortalSession>('/api/portal/me/language', body)));
   }
 
   async signOut(): Promise<void> {

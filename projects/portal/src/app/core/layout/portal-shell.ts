@@ -1,37 +1,70 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
+import { MatMenuModule } from '@angular/material/menu';
 import { MatToolbarModule } from '@angular/material/toolbar';
 import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
+import type { Language as LanguageCode } from '@layerbook/contracts/types';
+import { Language } from '../../../../../shared/i18n/language';
 import { Session } from '../auth/session';
-import { toProblem } from '../errors/problem';
+import { problemMessage, toProblem } from '../errors/problem';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { Wordmark } from '../../shared/ui/wordmark';
 
 /** The frame around a signed-in client's pages: whose portal this is, and a way out. */
 @Component({
   selector: 'lb-portal-shell',
-  imports: [FormAlert, MatButtonModule, MatIconModule, MatToolbarModule, RouterLink, RouterLinkActive, RouterOutlet, Wordmark],
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatIconModule,
+    MatMenuModule,
+    MatToolbarModule,
+    RouterLink,
+    RouterLinkActive,
+    RouterOutlet,
+    TranslatePipe,
+    Wordmark,
+  ],
   template: `
     <header>
       <mat-toolbar class="lb-toolbar">
-        <a routerLink="/projects" class="home" aria-label="Layerbook, go to your projects">
+        <a routerLink="/projects" class="home" [attr.aria-label]="'layout.shell.home' | translate">
           <lb-wordmark tone="dark" />
         </a>
         @if (client(); as me) {
           <span class="firm">{{ me.firmName }}</span>
           <span class="spacer"></span>
           <span class="me">{{ me.name }}</span>
-          <button mat-button type="button" class="sign-out" (click)="signOut()">
+          <button mat-button type="button" class="on-dark" [matMenuTriggerFor]="languageMenu">
+            <mat-icon aria-hidden="true">translate</mat-icon>
+            {{ 'common.languageNames.' + language.current() | translate }}
+          </button>
+          <mat-menu #languageMenu="matMenu" [aria-label]="'layout.shell.language' | translate">
+            @for (choice of languageChoices; track choice.value) {
+              <button
+                mat-menu-item
+                type="button"
+                role="menuitemradio"
+                [attr.aria-checked]="choice.value === language.current()"
+                (click)="chooseLanguage(choice.value)"
+              >
+                <mat-icon aria-hidden="true">{{ choice.value === language.current() ? 'check' : '' }}</mat-icon>
+                <span>{{ choice.label | translate }}</span>
+              </button>
+            }
+          </mat-menu>
+          <button mat-button type="button" class="on-dark" (click)="signOut()">
             <mat-icon aria-hidden="true">logout</mat-icon>
-            Sign out
+            {{ 'layout.shell.signOut' | translate }}
           </button>
         }
       </mat-toolbar>
       @if (client()) {
-        <nav class="sections" aria-label="Your pages">
-          <a routerLink="/projects" routerLinkActive="active" ariaCurrentWhenActive="page">Your projects</a>
-          <a routerLink="/invoices" routerLinkActive="active" ariaCurrentWhenActive="page">Your invoices</a>
+        <nav class="sections" [attr.aria-label]="'layout.shell.pages' | translate">
+          <a routerLink="/projects" routerLinkActive="active" ariaCurrentWhenActive="page">{{ 'layout.shell.projects' | translate }}</a>
+          <a routerLink="/invoices" routerLinkActive="active" ariaCurrentWhenActive="page">{{ 'layout.shell.invoices' | translate }}</a>
         </nav>
       }
     </header>
@@ -79,7 +112,7 @@ import { Wordmark } from '../../shared/ui/wordmark';
       font-size: 1rem;
       margin-right: 0.5rem;
     }
-    .sign-out {
+    .on-dark {
       --mat-button-text-label-text-color: var(--lb-ivory);
     }
     @media (max-width: 599.98px) {
@@ -95,8 +128,24 @@ export class PortalShell {
   private readonly session = inject(Session);
   private readonly router = inject(Router);
 
+  protected readonly language = inject(Language);
   protected readonly client = this.session.client;
+  /** The client's own language; the firm's is the one they had before choosing (null follows the firm again). */
+  protected readonly languageChoices: readonly { value: LanguageCode | null; label: string }[] = [
+    { value: 'en', label: 'common.languageNames.en' },
+    { value: 'es', label: 'common.languageNames.es' },
+    { value: null, label: 'layout.shell.firmLanguage' },
+  ];
   protected readonly message = signal<string | null>(null);
+
+  protected async chooseLanguage(language: LanguageCode | null): Promise<void> {
+    this.message.set(null);
+    try {
+      await this.session.chooseLanguage(language);
+    } catch (error) {
+      this.message.set(problemMessage(error));
+    }
+  }
 
   protected async signOut(): Promise<void> {
     this.message.set(null);

@@ -1,3 +1,5 @@
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { TranslatePipe } from '@ngx-translate/core';
 import { ChangeDetectionStrategy, Component, afterNextRender, inject, input, signal } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
@@ -16,7 +18,7 @@ type LinkState = 'working' | 'incomplete' | 'expired' | 'unknown' | 'failed';
  */
 @Component({
   selector: 'lb-sign-in-link',
-  imports: [AuthFrame, MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [AuthFrame, MatIconModule, MatProgressBarModule, RouterLink, TranslatePipe, SayPipe],
   templateUrl: './sign-in-link.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -1,3 +1,4 @@
+import { TranslatePipe } from '@ngx-translate/core';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -7,7 +8,7 @@ import { PortalAuth } from './portal-auth';
 
 @Component({
   selector: 'lb-sign-in',
-  imports: [AuthFrame, EmailLinkForm, MatButtonModule, MatIconModule],
+  imports: [AuthFrame, EmailLinkForm, MatButtonModule, MatIconModule, TranslatePipe],
   templateUrl: './sign-in.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

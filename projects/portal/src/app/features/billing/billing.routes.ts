@@ -3,28 +3,28 @@ import { Routes } from '@angular/router';
 export default [
   {
     path: 'invoices',
-    title: 'Your invoices · Layerbook client portal',
+    title: 'layout.titles.invoices',
     loadComponent: () => import('./invoice-list').then((m) => m.InvoiceList),
   },
   {
     path: 'invoices/:id',
-    title: 'Invoice · Layerbook client portal',
+    title: 'layout.titles.invoice',
     loadComponent: () => import('./invoice-page').then((m) => m.InvoicePage),
   },
   // The card page sends the client back here after paying.
   {
     path: 'invoices/:id/payment/:checkoutId',
-    title: 'Your payment · Layerbook client portal',
+    title: 'layout.titles.payment',
     loadComponent: () => import('../payments/payment-return-page').then((m) => m.PaymentReturnPage),
   },
   {
     path: 'jobs/:id/statement',
-    title: 'Statement · Layerbook client portal',
+    title: 'layout.titles.statement',
     loadComponent: () => import('./statement-page').then((m) => m.StatementPage),
   },
   {
     path: 'change-orders/:id',
-    title: 'Change order · Layerbook client portal',
+    title: 'layout.titles.changeOrder',
     loadComponent: () => import('./change-order-page').then((m) => m.ChangeOrderPage),
   },
 ] satisfies Routes;

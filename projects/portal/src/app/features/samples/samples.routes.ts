@@ -4,8 +4,8 @@ export default [
   {
     path: '',
     pathMatch: 'full',
-    title: 'Your sample boards · Layerbook client portal',
+    title: 'layout.titles.boards',
     loadComponent: () => import('./board-list').then((m) => m.BoardList),
   },
-  { path: ':id', title: 'Sample board · Layerbook client portal', loadComponent: () => import('./board-page').then((m) => m.BoardPage) },
+  { path: ':id', title: 'layout.titles.board', loadComponent: () => import('./board-page').then((m) => m.BoardPage) },
 ] satisfies Routes;
