@@ -35,6 +35,7 @@ async function members(tx: TenantTx, you: string): Promise<TeamMember[]> {
       email: users.email,
       role: memberships.role,
       status: memberships.status,
+      language: memberships.language,
     })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))

@@ -1,4 +1,5 @@
 import type { StaffRole } from '../auth/auth-types';
+import type { Language } from '../firms/firm-types';
 
 /** A member may sign in while active; a deactivated member keeps their history but not access. */
 export const MEMBER_STATUSES = ['active', 'deactivated'] as const;
@@ -39,6 +40,8 @@ export interface TeamMember {
   readonly role: StaffRole;
   readonly status: MemberStatus;
   readonly isYou: boolean;
+  /** the member's own language; null follows the firm's */
+  readonly language: Language | null;
 }
 
 /** GET /api/team/invitations (ItemList: those waiting or expired), and a new invitation. */
