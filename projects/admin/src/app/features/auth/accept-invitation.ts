@@ -10,8 +10,6 @@ import {
   PASSWORD_MAX_LENGTH,
   PASSWORD_MIN_LENGTH,
   PERSON_NAME_MAX_LENGTH,
-  STAFF_ROLE_LABELS,
-  STAFF_ROLE_SUMMARIES,
   isWellFormedLinkToken,
   type InvitationPreview,
 } from '@layerbook/contracts/types';
@@ -26,10 +24,12 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { RevealPassword } from '../../shared/ui/reveal-password';
 import { AuthFrame } from './auth-frame';
 import { StaffAuth } from './staff-auth';
+import { TranslatePipe } from '@ngx-translate/core';
 
 @Component({
   selector: 'lb-accept-invitation',
   imports: [
+    TranslatePipe,
     AuthFrame,
     FormAlert,
     MatButtonModule,
@@ -59,8 +59,6 @@ export class AcceptInvitation {
     const error = this.preview.error();
     return error ? toProblem(error) : null;
   });
-  protected readonly roleLabels = STAFF_ROLE_LABELS;
-  protected readonly roleSummaries = STAFF_ROLE_SUMMARIES;
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: ['', [requiredText, Validators.maxLength(PERSON_NAME_MAX_LENGTH)]],

@@ -4,35 +4,35 @@ import { signedOutGuard } from '../../core/auth/guards';
 const routes: Routes = [
   {
     path: 'sign-in',
-    title: 'Sign in · Layerbook',
+    title: 'auth.titles.signIn',
     canActivate: [signedOutGuard],
     loadComponent: () => import('./sign-in').then((m) => m.SignIn),
   },
   {
     path: 'sign-up',
-    title: 'Start a new firm · Layerbook',
+    title: 'auth.titles.signUp',
     canActivate: [signedOutGuard],
     loadComponent: () => import('./sign-up').then((m) => m.SignUp),
   },
   {
     path: 'sign-up/confirm',
-    title: 'Open your firm · Layerbook',
+    title: 'auth.titles.confirmSignUp',
     canActivate: [signedOutGuard],
     loadComponent: () => import('./confirm-sign-up').then((m) => m.ConfirmSignUp),
   },
   {
     path: 'forgot-password',
-    title: 'Reset your password · Layerbook',
+    title: 'auth.titles.forgotPassword',
     loadComponent: () => import('./forgot-password').then((m) => m.ForgotPassword),
   },
   {
     path: 'reset-password',
-    title: 'Choose a new password · Layerbook',
+    title: 'auth.titles.resetPassword',
     loadComponent: () => import('./reset-password').then((m) => m.ResetPassword),
   },
   {
     path: 'accept-invitation',
-    title: 'Join your team · Layerbook',
+    title: 'auth.titles.acceptInvitation',
     loadComponent: () => import('./accept-invitation').then((m) => m.AcceptInvitation),
   },
 ];

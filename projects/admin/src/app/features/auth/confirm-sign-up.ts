@@ -10,6 +10,7 @@ import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { AuthFrame } from './auth-frame';
 import { StaffAuth } from './staff-auth';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /**
  * The page the sign-up e-mail links to. It confirms on a click rather than on load, so a mail
@@ -17,7 +18,7 @@ import { StaffAuth } from './staff-auth';
  */
 @Component({
   selector: 'lb-confirm-sign-up',
-  imports: [AuthFrame, FormAlert, MatButtonModule, ReactiveFormsModule, RouterLink],
+  imports: [TranslatePipe, AuthFrame, FormAlert, MatButtonModule, ReactiveFormsModule, RouterLink],
   templateUrl: './confirm-sign-up.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

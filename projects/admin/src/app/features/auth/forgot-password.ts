@@ -4,10 +4,11 @@ import { RouterLink } from '@angular/router';
 import { EmailLinkForm } from '../../shared/ui/email-link-form';
 import { AuthFrame } from './auth-frame';
 import { StaffAuth } from './staff-auth';
+import { TranslatePipe } from '@ngx-translate/core';
 
 @Component({
   selector: 'lb-forgot-password',
-  imports: [AuthFrame, EmailLinkForm, MatIconModule, RouterLink],
+  imports: [TranslatePipe, AuthFrame, EmailLinkForm, MatIconModule, RouterLink],
   templateUrl: './forgot-password.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

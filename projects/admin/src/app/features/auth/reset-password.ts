@@ -15,10 +15,21 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { RevealPassword } from '../../shared/ui/reveal-password';
 import { AuthFrame } from './auth-frame';
 import { StaffAuth } from './staff-auth';
+import { TranslatePipe } from '@ngx-translate/core';
 
 @Component({
   selector: 'lb-reset-password',
-  imports: [AuthFrame, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, RevealPassword, RouterLink],
+  imports: [
+    TranslatePipe,
+    AuthFrame,
+    FormAlert,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatInputModule,
+    ReactiveFormsModule,
+    RevealPassword,
+    RouterLink,
+  ],
   templateUrl: './reset-password.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -15,10 +15,21 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { RevealPassword } from '../../shared/ui/reveal-password';
 import { AuthFrame } from './auth-frame';
 import { StaffAuth } from './staff-auth';
+import { TranslatePipe } from '@ngx-translate/core';
 
 @Component({
   selector: 'lb-sign-in',
-  imports: [AuthFrame, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, RevealPassword, RouterLink],
+  imports: [
+    TranslatePipe,
+    AuthFrame,
+    FormAlert,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatInputModule,
+    ReactiveFormsModule,
+    RevealPassword,
+    RouterLink,
+  ],
   templateUrl: './sign-in.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -38,8 +49,10 @@ export class SignIn {
   protected readonly isHydrated = hydratedSignal();
   protected readonly words = {
     email: EMAIL_WORDS,
-    password: { required: 'Enter your password.', maxlength: `Use at most ${PASSWORD_MAX_LENGTH} characters.` },
+    password: { required: 'auth.signIn.passwordRequired', maxlength: 'auth.fields.atMost' },
   };
+
+  protected readonly passwordMax = PASSWORD_MAX_LENGTH;
 
   protected async signIn(): Promise<void> {
     const { email, password } = this.form.getRawValue();

@@ -22,10 +22,12 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { RevealPassword } from '../../shared/ui/reveal-password';
 import { AuthFrame } from './auth-frame';
 import { StaffAuth } from './staff-auth';
+import { TranslatePipe } from '@ngx-translate/core';
 
 @Component({
   selector: 'lb-sign-up',
   imports: [
+    TranslatePipe,
     AuthFrame,
     FormAlert,
     MatButtonModule,
@@ -56,14 +58,16 @@ export class SignUp {
   protected readonly isHydrated = hydratedSignal();
   protected readonly words = {
     firmName: {
-      required: 'Enter the firm name.',
-      minlength: 'Enter the firm name.',
-      maxlength: `Use at most ${FIRM_NAME_MAX_LENGTH} characters.`,
+      required: 'auth.signUp.firmNameRequired',
+      minlength: 'auth.signUp.firmNameRequired',
+      maxlength: 'auth.fields.atMost',
     },
     name: NAME_WORDS,
     email: EMAIL_WORDS,
     password: NEW_PASSWORD_WORDS,
   };
+
+  protected readonly firmNameMax = FIRM_NAME_MAX_LENGTH;
 
   protected async createFirm(): Promise<void> {
     const { firmName, name, email, password } = this.form.getRawValue();

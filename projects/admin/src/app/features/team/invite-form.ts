@@ -4,15 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import {
-  EMAIL_MAX_LENGTH,
-  INVITATION_DAYS,
-  STAFF_ROLES,
-  STAFF_ROLE_LABELS,
-  STAFF_ROLE_SUMMARIES,
-  type StaffRole,
-  type TeamInvitation,
-} from '@layerbook/contracts/types';
+import { EMAIL_MAX_LENGTH, INVITATION_DAYS, STAFF_ROLES, type StaffRole, type TeamInvitation } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
 import { EMAIL_WORDS } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
@@ -20,10 +12,11 @@ import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { TeamApi } from './team-api';
+import { TranslatePipe } from '@ngx-translate/core';
 
 @Component({
   selector: 'lb-invite-form',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [TranslatePipe, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   templateUrl: './invite-form.html',
   styleUrl: './invite-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -35,8 +28,6 @@ export class InviteForm {
   readonly invited = output<TeamInvitation>();
 
   protected readonly roles = STAFF_ROLES;
-  protected readonly roleLabels = STAFF_ROLE_LABELS;
-  protected readonly roleSummaries = STAFF_ROLE_SUMMARIES;
   protected readonly invitationDays = INVITATION_DAYS;
   protected readonly form = this.fb.group({
     email: ['', [requiredText, Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
@@ -45,7 +36,7 @@ export class InviteForm {
   protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly words = { email: EMAIL_WORDS, role: { required: 'Choose a role.' } };
+  protected readonly words = { email: EMAIL_WORDS, role: { required: 'team.inviteForm.roleRequired' } };
 
   protected async sendInvitation(): Promise<void> {
     const { email, role } = this.form.getRawValue();

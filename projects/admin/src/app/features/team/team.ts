@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
@@ -7,16 +6,10 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import {
-  MEMBER_STATUS_LABELS,
-  STAFF_ROLES,
-  STAFF_ROLE_LABELS,
-  type ItemList,
-  type StaffRole,
-  type TeamInvitation,
-  type TeamMember,
-} from '@layerbook/contracts/types';
+import { STAFF_ROLES, type ItemList, type StaffRole, type TeamInvitation, type TeamMember } from '@layerbook/contracts/types';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { firstValueFrom } from 'rxjs';
+import { LbDatePipe } from '../../../../../shared/i18n/format';
 import { Session } from '../../core/auth/session';
 import { problemMessage } from '../../core/errors/problem';
 import { loadMessage } from '../../shared/forms/load-message';
@@ -27,7 +20,7 @@ import { TeamApi } from './team-api';
 
 @Component({
   selector: 'lb-team',
-  imports: [DatePipe, FormAlert, InviteForm, MatButtonModule, MatIconModule, MatProgressBarModule, MatSelectModule],
+  imports: [FormAlert, LbDatePipe, TranslatePipe, InviteForm, MatButtonModule, MatIconModule, MatProgressBarModule, MatSelectModule],
   templateUrl: './team.html',
   styleUrl: './team.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -36,11 +29,10 @@ export class Team {
   private readonly api = inject(TeamApi);
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
 
   protected readonly isOwner = inject(Session).isOwner;
   protected readonly roles = STAFF_ROLES;
-  protected readonly roleLabels = STAFF_ROLE_LABELS;
-  protected readonly statusLabels = MEMBER_STATUS_LABELS;
 
   private readonly memberList = httpResource<ItemList<TeamMember>>(() => '/api/team/members');
   private readonly invitationList = httpResource<ItemList<TeamInvitation>>(() => '/api/team/invitations');
@@ -56,7 +48,10 @@ export class Team {
   protected readonly pageMessage = computed(() => this.membersMessage() ?? this.invitationsMessage() ?? this.actionMessage());
 
   protected async changeRole(select: MatSelect, member: TeamMember, role: StaffRole): Promise<void> {
-    const changed = await this.act(() => this.api.changeRole(member.id, role), `${member.name} is now ${STAFF_ROLE_LABELS[role]}.`);
+    const changed = await this.act(
+      () => this.api.changeRole(member.id, role),
+      this.words('team.team.roleChanged', { name: member.name, role: this.roleLabel(role) }),
+    );
     if (!changed) {
       // The list reloads with the same role, which would leave the refused choice showing.
       select.writeValue(member.role);
@@ -65,39 +60,44 @@ export class Team {
 
   protected async deactivate(member: TeamMember): Promise<void> {
     const confirmed = await this.confirm({
-      title: `Deactivate ${member.name}?`,
-      message: `${member.name} will no longer be able to sign in. Their work stays in Layerbook, and you can reactivate them later.`,
-      confirmLabel: 'Deactivate',
+      title: 'team.team.deactivateTitle',
+      message: 'team.team.deactivateMessage',
+      confirmLabel: 'team.team.deactivate',
+      params: { name: member.name },
     });
     if (confirmed) {
-      await this.act(() => this.api.deactivate(member.id), `${member.name} is deactivated.`);
+      await this.act(() => this.api.deactivate(member.id), this.words('team.team.deactivated', { name: member.name }));
     }
   }
 
   protected async reactivate(member: TeamMember): Promise<void> {
     const confirmed = await this.confirm({
-      title: `Reactivate ${member.name}?`,
-      message: `${member.name} will be able to sign in again as ${STAFF_ROLE_LABELS[member.role]}.`,
-      confirmLabel: 'Reactivate',
+      title: 'team.team.reactivateTitle',
+      message: 'team.team.reactivateMessage',
+      confirmLabel: 'team.team.reactivate',
+      params: { name: member.name, role: this.roleLabel(member.role) },
     });
     if (confirmed) {
-      await this.act(() => this.api.reactivate(member.id), `${member.name} can sign in again.`);
+      await this.act(() => this.api.reactivate(member.id), this.words('team.team.reactivated', { name: member.name }));
     }
   }
 
   protected async revoke(invitation: TeamInvitation): Promise<void> {
     const confirmed = await this.confirm({
-      title: 'Revoke this invitation?',
-      message: `The link sent to ${invitation.email} will stop working. You can invite them again later.`,
-      confirmLabel: 'Revoke',
+      title: 'team.team.revokeTitle',
+      message: 'team.team.revokeMessage',
+      confirmLabel: 'team.team.revoke',
+      params: { email: invitation.email },
     });
     if (confirmed) {
-      await this.act(() => this.api.revoke(invitation.id), `Invitation to ${invitation.email} revoked.`);
+      await this.act(() => this.api.revoke(invitation.id), this.words('team.team.revoked', { email: invitation.email }));
     }
   }
 
   protected showInvitation(invitation: TeamInvitation): void {
-    this.snackBar.open(`Invitation sent to ${invitation.email}.`, 'Close', { duration: 5000 });
+    this.snackBar.open(this.words('team.team.invitationSent', { email: invitation.email }), this.words('team.team.close'), {
+      duration: 5000,
+    });
     this.invitationList.reload();
   }
 
@@ -107,7 +107,7 @@ export class Team {
     let isDone = false;
     try {
       await change();
-      this.snackBar.open(done, 'Close', { duration: 5000 });
+      this.snackBar.open(done, this.words('team.team.close'), { duration: 5000 });
       isDone = true;
     } catch (error) {
       this.actionMessage.set(problemMessage(error));
@@ -115,6 +115,14 @@ export class Team {
     this.memberList.reload();
     this.invitationList.reload();
     return isDone;
+  }
+
+  private words(key: string, params?: Record<string, string>): string {
+    return this.translate.instant(key, params) as string;
+  }
+
+  private roleLabel(role: StaffRole): string {
+    return this.words(`ui.roles.${role}.label`);
   }
 
   private async confirm(data: ConfirmDialogData): Promise<boolean> {

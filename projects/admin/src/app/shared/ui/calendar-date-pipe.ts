@@ -1,22 +1,15 @@
-import { LOCALE_ID, Pipe, PipeTransform, inject } from '@angular/core';
+import { Pipe, type PipeTransform } from '@angular/core';
+import { LbDatePipe, formatCalendarDay } from '../../../../../shared/i18n/format';
 
 /**
- * Shows a calendar date from the API ("2026-03-14") as words. It is read and written in UTC so
- * the day never shifts with the viewer's time zone: a follow-up date is a day, not an instant.
+ * `{{ day | calendarDate }}`: a calendar date from the API ("2026-03-14") as words in the reader's
+ * language. It is read and written in UTC so the day never shifts with the viewer's time zone: a
+ * follow-up date is a day, not an instant (the shared `lbDate`, under the name admin templates use).
  */
-@Pipe({ name: 'calendarDate' })
-export class CalendarDatePipe implements PipeTransform {
-  private readonly locale = inject(LOCALE_ID);
+@Pipe({ name: 'calendarDate', pure: false })
+export class CalendarDatePipe extends LbDatePipe implements PipeTransform {}
 
-  transform(isoDate: string | null | undefined, style: 'medium' | 'full' = 'medium'): string {
-    return isoDate ? formatCalendarDate(isoDate, this.locale, style) : '';
-  }
-}
-
+/** For words built in code: pass `inject(Language).locale()`. */
 export function formatCalendarDate(isoDate: string, locale: string, style: 'medium' | 'full' = 'medium'): string {
-  const date = new Date(`${isoDate}T00:00:00Z`);
-  if (Number.isNaN(date.getTime())) {
-    return isoDate;
-  }
-  return new Intl.DateTimeFormat(locale, { dateStyle: style, timeZone: 'UTC' }).format(date);
+  return formatCalendarDay(isoDate, locale, style);
 }

@@ -1,17 +1,18 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** Stands in for an area that is not built yet, saying plainly what it will hold. */
 @Component({
   selector: 'lb-coming-soon',
-  imports: [MatIconModule],
+  imports: [TranslatePipe, MatIconModule],
   template: `
     <section class="lb-page">
-      <h1>{{ heading() }}</h1>
-      <p class="lb-lead">{{ summary() }}</p>
+      <h1>{{ heading() | translate }}</h1>
+      <p class="lb-lead">{{ summary() | translate }}</p>
       <p class="later">
         <mat-icon aria-hidden="true">construction</mat-icon>
-        <span>This page is being built.</span>
+        <span>{{ 'ui.comingSoon.beingBuilt' | translate }}</span>
       </p>
     </section>
   `,

@@ -1,23 +1,26 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { CalendarDatePipe } from './calendar-date-pipe';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** The next follow-up date, with an icon and the word "Overdue" when it has passed. */
 @Component({
   selector: 'lb-follow-up-date',
-  imports: [CalendarDatePipe, MatIconModule],
+  imports: [TranslatePipe, CalendarDatePipe, MatIconModule],
   host: { class: 'lb-follow-up', '[class.is-overdue]': 'isOverdue()' },
   template: `
     @if (date(); as day) {
       @if (isOverdue()) {
         <mat-icon aria-hidden="true">alarm</mat-icon>
-        <span><strong>Overdue</strong> · {{ day | calendarDate }}</span>
+        <span
+          ><strong>{{ 'ui.followUp.overdue' | translate }}</strong> · {{ day | calendarDate }}</span
+        >
       } @else {
         <mat-icon aria-hidden="true">event</mat-icon>
         <span>{{ day | calendarDate }}</span>
       }
     } @else {
-      <span class="none">No follow-up set</span>
+      <span class="none">{{ 'ui.followUp.none' | translate }}</span>
     }
   `,
   styles: `
