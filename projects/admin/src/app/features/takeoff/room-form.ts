@@ -4,6 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { TranslatePipe } from '@ngx-translate/core';
 import { TAKEOFF_LIMITS as L, type RoomView } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
@@ -16,26 +17,35 @@ import { TakeoffApi } from './takeoff-api';
 /** Adds a room (or an outside elevation) to a site, or renames the one it is given. */
 @Component({
   selector: 'lb-room-form',
-  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, TranslatePipe],
   template: `
-    <form [formGroup]="form" (ngSubmit)="saveRoom()" novalidate [attr.aria-label]="isNew() ? 'Add a room' : 'Edit room ' + room()?.name">
+    <form
+      [formGroup]="form"
+      (ngSubmit)="saveRoom()"
+      novalidate
+      [attr.aria-label]="
+        isNew() ? ('takeoff.roomForm.addForm' | translate) : ('takeoff.roomForm.editForm' | translate: { name: room()?.name })
+      "
+    >
       <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
         <lb-form-alert [message]="formMessage()" />
         <mat-form-field>
-          <mat-label>Room name</mat-label>
+          <mat-label>{{ 'takeoff.roomForm.name' | translate }}</mat-label>
           <input matInput formControlName="name" autocomplete="off" required />
-          <mat-hint>Like "Stair hall" or "South elevation".</mat-hint>
+          <mat-hint>{{ 'takeoff.roomForm.nameHint' | translate }}</mat-hint>
           <mat-error>{{ errorText(form.controls.name, words.name) }}</mat-error>
         </mat-form-field>
-        <mat-checkbox formControlName="isExterior">Outside (an exterior wall or elevation)</mat-checkbox>
+        <mat-checkbox formControlName="isExterior">{{ 'takeoff.roomForm.isExterior' | translate }}</mat-checkbox>
         <mat-form-field class="wide">
-          <mat-label>Room notes</mat-label>
+          <mat-label>{{ 'takeoff.roomForm.notes' | translate }}</mat-label>
           <textarea matInput formControlName="notes" rows="2"></textarea>
           <mat-error>{{ errorText(form.controls.notes, words.notes) }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions">
-          <button mat-flat-button type="submit" [disabled]="isBusy()">{{ isNew() ? 'Add room' : 'Save room' }}</button>
-          <button mat-button type="button" (click)="cancelled.emit()">Cancel</button>
+          <button mat-flat-button type="submit" [disabled]="isBusy()">
+            {{ (isNew() ? 'takeoff.roomForm.add' : 'takeoff.roomForm.save') | translate }}
+          </button>
+          <button mat-button type="button" (click)="cancelled.emit()">{{ 'takeoff.cancel' | translate }}</button>
         </div>
       </fieldset>
     </form>

@@ -3,6 +3,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatExpansionModule } from '@angular/material/expansion';
 import { MatIconModule } from '@angular/material/icon';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { firstValueFrom } from 'rxjs';
 import { shapeChoice, type RoomView, type SurfaceView, type TakeoffLengthUnit } from '@layerbook/contracts/types';
 import { fixedNumber, measureText, plainNumber, totalsText, workingText } from '@layerbook/domain';
@@ -20,7 +21,7 @@ type Editing = string | null;
 /** One room as an expandable panel: its surfaces with their numbers and sketches, and the edits. */
 @Component({
   selector: 'lb-room-panel',
-  imports: [MatButtonModule, MatExpansionModule, MatIconModule, RoomForm, RoomPhotos, ShapeSketch, SurfaceForm],
+  imports: [MatButtonModule, MatExpansionModule, MatIconModule, RoomForm, RoomPhotos, ShapeSketch, SurfaceForm, TranslatePipe],
   templateUrl: './room-panel.html',
   styleUrl: './room-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -28,6 +29,7 @@ type Editing = string | null;
 export class RoomPanel implements OnInit {
   private readonly api = inject(TakeoffApi);
   private readonly dialog = inject(MatDialog);
+  private readonly translate = inject(TranslateService);
 
   readonly room = input.required<RoomView>();
   readonly siteId = input.required<string>();
@@ -57,41 +59,45 @@ export class RoomPanel implements OnInit {
     return shapeChoice(surface.shape.kind).label;
   }
 
-  protected done(message: string): void {
+  /** A form saved: `key` is the message's words, `name` what it names. */
+  protected done(key: string, name?: string): void {
     this.editing.set(null);
-    this.changed.emit(message);
+    this.changed.emit(this.words(key, { name }));
   }
 
   protected moveRoom(by: -1 | 1): Promise<void> {
-    return this.run(() => this.api.moveRoom(this.room().id, this.index() + by), 'Room moved.');
+    return this.run(() => this.api.moveRoom(this.room().id, this.index() + by), this.words('takeoff.roomPanel.roomMoved'));
   }
 
   protected async deleteRoom(): Promise<void> {
     const room = this.room();
     const n = room.surfaces.length;
     const ok = await this.confirm({
-      title: `Delete ${room.name}?`,
-      message: `${n === 0 ? 'The room has no surfaces yet.' : `Its ${n} measured surface${n === 1 ? '' : 's'} will be deleted with it.`} Its photos go too.`,
-      confirmLabel: 'Delete room',
+      title: this.words('takeoff.roomPanel.deleteTitle', { name: room.name }),
+      message: this.words(
+        n === 0 ? 'takeoff.roomPanel.deleteRoomEmpty' : n === 1 ? 'takeoff.roomPanel.deleteRoomOne' : 'takeoff.roomPanel.deleteRoomMany',
+        { count: n },
+      ),
+      confirmLabel: this.words('takeoff.roomPanel.deleteRoom'),
     });
-    if (ok) await this.run(() => this.api.deleteRoom(room.id), `${room.name} deleted.`);
+    if (ok) await this.run(() => this.api.deleteRoom(room.id), this.words('takeoff.roomPanel.deleted', { name: room.name }));
   }
 
   protected duplicateSurface(surface: SurfaceView): Promise<void> {
-    return this.run(() => this.api.duplicateSurface(surface.id), `${surface.name} copied.`);
+    return this.run(() => this.api.duplicateSurface(surface.id), this.words('takeoff.roomPanel.copied', { name: surface.name }));
   }
 
   protected moveSurface(surface: SurfaceView, index: number, by: -1 | 1): Promise<void> {
-    return this.run(() => this.api.moveSurface(surface.id, index + by), 'Surface moved.');
+    return this.run(() => this.api.moveSurface(surface.id, index + by), this.words('takeoff.roomPanel.surfaceMoved'));
   }
 
   protected async deleteSurface(surface: SurfaceView): Promise<void> {
     const ok = await this.confirm({
-      title: `Delete ${surface.name}?`,
-      message: 'Its sizes and notes will be gone.',
-      confirmLabel: 'Delete surface',
+      title: this.words('takeoff.roomPanel.deleteTitle', { name: surface.name }),
+      message: this.words('takeoff.roomPanel.deleteSurfaceMessage'),
+      confirmLabel: this.words('takeoff.roomPanel.deleteSurfaceConfirm'),
     });
-    if (ok) await this.run(() => this.api.deleteSurface(surface.id), `${surface.name} deleted.`);
+    if (ok) await this.run(() => this.api.deleteSurface(surface.id), this.words('takeoff.roomPanel.deleted', { name: surface.name }));
   }
 
   private async run(action: () => Promise<unknown>, message: string): Promise<void> {
@@ -104,6 +110,10 @@ export class RoomPanel implements OnInit {
     } finally {
       this.isBusy.set(false);
     }
+  }
+
+  private words(key: string, params?: Record<string, unknown>): string {
+    return String(this.translate.instant(key, params));
   }
 
   private confirm(data: ConfirmDialogData): Promise<boolean | undefined> {

@@ -1,6 +1,7 @@
 import { isPlatformBrowser } from '@angular/common';
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, PLATFORM_ID, computed, inject, input, linkedSignal } from '@angular/core';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { ItemList, RoomPhotoView } from '@layerbook/contracts/types';
 import { PhotoGallery, type GalleryPhoto } from '../../../../../shared/photos/photo-gallery';
 import { Session } from '../../core/auth/session';
@@ -15,7 +16,7 @@ const roomPhotosUrl = (roomId: string) => `/api/takeoff/rooms/${encodeURICompone
  */
 @Component({
   selector: 'lb-room-photos',
-  imports: [FormAlert, PhotoGallery],
+  imports: [FormAlert, PhotoGallery, TranslatePipe],
   template: `
     <lb-photo-gallery
       [subject]="roomName()"
@@ -26,7 +27,7 @@ const roomPhotosUrl = (roomId: string) => `/api/takeoff/rooms/${encodeURICompone
       [deleteBase]="canDelete() ? '/api/takeoff/photos' : null"
       [useCamera]="true"
       [thumbHeight]="96"
-      emptyText="No photos of this room yet."
+      [emptyText]="'takeoff.roomPhotos.empty' | translate"
     />
     <lb-form-alert [message]="loadMessage()" />
   `,
@@ -34,6 +35,7 @@ const roomPhotosUrl = (roomId: string) => `/api/takeoff/rooms/${encodeURICompone
 })
 export class RoomPhotos {
   private readonly session = inject(Session);
+  private readonly translate = inject(TranslateService);
   private readonly isBrowser = isPlatformBrowser(inject(PLATFORM_ID));
 
   readonly roomId = input.required<string>();
@@ -48,7 +50,7 @@ export class RoomPhotos {
   protected readonly uploadUrl = computed(() => roomPhotosUrl(this.roomId()));
   protected readonly loadMessage = computed(() => {
     const error = this.list.error();
-    return error ? `Photos could not be loaded: ${problemMessage(error)}` : null;
+    return error ? String(this.translate.instant('takeoff.roomPhotos.loadFailed', { problem: problemMessage(error) })) : null;
   });
   protected readonly canDelete = () => this.session.hasRole('office');
 }

@@ -1,10 +1,12 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { SurfaceShape } from '@layerbook/domain';
 import { SKETCH_HEIGHT, SKETCH_WIDTH, sketchShape } from './sketch';
 
 /** A small line drawing of one shape with its sizes written on it (see sketch.ts). */
 @Component({
   selector: 'lb-shape-sketch',
+  imports: [TranslatePipe],
   template: `
     @if (sketch(); as s) {
       <figure>
@@ -19,7 +21,7 @@ import { SKETCH_HEIGHT, SKETCH_WIDTH, sketchShape } from './sketch';
             <text [attr.x]="l.x" [attr.y]="l.y" [attr.text-anchor]="l.anchor">{{ l.text }}</text>
           }
         </svg>
-        <figcaption>{{ s.isToScale ? 'Drawn to scale' : 'Diagram, not to scale' }}</figcaption>
+        <figcaption>{{ (s.isToScale ? 'takeoff.shapeSketch.toScale' : 'takeoff.shapeSketch.notToScale') | translate }}</figcaption>
       </figure>
     }
   `,

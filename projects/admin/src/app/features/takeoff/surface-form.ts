@@ -7,6 +7,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import {
   DIM_WORDS,
   DISTURBED_AREA_NOUN,
@@ -43,6 +44,7 @@ import { TakeoffApi } from './takeoff-api';
     MatSelectModule,
     ReactiveFormsModule,
     ShapeSketch,
+    TranslatePipe,
   ],
   // Messages appear while typing, not only after leaving the field: a phone user rarely tabs out.
   providers: [{ provide: ErrorStateMatcher, useClass: ShowOnDirtyErrorStateMatcher }],
@@ -53,6 +55,7 @@ import { TakeoffApi } from './takeoff-api';
 export class SurfaceForm implements OnInit {
   private readonly api = inject(TakeoffApi);
   private readonly destroyRef = inject(DestroyRef);
+  private readonly translate = inject(TranslateService);
 
   readonly roomId = input.required<string>();
   readonly roomName = input.required<string>();
@@ -124,9 +127,9 @@ export class SurfaceForm implements OnInit {
       const text: unknown = errors[key];
       if (typeof text === 'string') return text;
     }
-    if (errors['required']) return 'Enter a name for the surface, like "North wall".';
-    if (errors['maxlength']) return 'That is too long for this field.';
-    return 'Check this field.';
+    if (errors['required']) return this.words('takeoff.surfaceForm.nameRequired');
+    if (errors['maxlength']) return this.words('takeoff.surfaceForm.tooLong');
+    return this.words('takeoff.surfaceForm.checkField');
   }
 
   protected suffix(field: DimField): string {
@@ -166,9 +169,7 @@ export class SurfaceForm implements OnInit {
     if (this.form.invalid || 'missing' in reading) {
       this.form.markAllAsTouched();
       for (const control of Object.values(this.shape.controls)) control.markAsDirty();
-      this.formMessage.set(
-        this.live().state === 'refused' ? null : 'Some sizes are missing or need a look; see the messages beside the fields.',
-      );
+      this.formMessage.set(this.live().state === 'refused' ? null : this.words('takeoff.surfaceForm.someSizesMissing'));
       return;
     }
     const v = this.form.getRawValue();
@@ -206,9 +207,13 @@ export class SurfaceForm implements OnInit {
     } else if (live.state === 'measured' && live.measure.measure === 'area') {
       const disturbed = readNumber(this.form.controls.disturbedPaintedArea.value);
       if (disturbed !== null && disturbed > live.measure.gross) {
-        this.mark(this.form.controls.disturbedPaintedArea, 'The disturbed painted area cannot be more than the surface itself.');
+        this.mark(this.form.controls.disturbedPaintedArea, this.words('takeoff.surfaceForm.disturbedTooBig'));
       }
     }
+  }
+
+  private words(key: string): string {
+    return String(this.translate.instant(key));
   }
 
   private mark(control: AbstractControl | null, message: string): void {

@@ -6,6 +6,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { RoomView, TakeoffView } from '@layerbook/contracts/types';
 import { totalsText } from '@layerbook/domain';
 import { loadMessage } from '../../shared/forms/load-message';
@@ -17,13 +18,24 @@ import { takeoffUrl } from './takeoff-api';
 /** Site takeoff: the rooms of one site, each with its measured surfaces; built to be used on a phone on site. */
 @Component({
   selector: 'lb-takeoff-page',
-  imports: [LeadSafetyNote, MatButtonModule, MatExpansionModule, MatIconModule, MatProgressBarModule, RoomForm, RoomPanel, RouterLink],
+  imports: [
+    LeadSafetyNote,
+    MatButtonModule,
+    MatExpansionModule,
+    MatIconModule,
+    MatProgressBarModule,
+    RoomForm,
+    RoomPanel,
+    RouterLink,
+    TranslatePipe,
+  ],
   templateUrl: './takeoff-page.html',
   styleUrl: './takeoff-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class TakeoffPage {
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
 
   /** From the route (withComponentInputBinding; inherited from `sites/:siteId/takeoff`). */
   readonly siteId = input.required<string>();
@@ -40,16 +52,16 @@ export class TakeoffPage {
   protected roomAdded(room: RoomView): void {
     this.isAddingRoom.set(false);
     this.newRoomId.set(room.id);
-    this.changed(`${room.name} added.`);
+    this.changed(String(this.translate.instant('takeoff.takeoffPage.roomAdded', { name: room.name })));
   }
 
   protected changed(message: string): void {
-    this.snackBar.open(message, 'Close', { duration: 4000 });
+    this.snackBar.open(message, String(this.translate.instant('takeoff.close')), { duration: 4000 });
     this.takeoff.reload();
   }
 
   protected failed(message: string): void {
-    this.snackBar.open(message, 'Close', { duration: 8000 });
+    this.snackBar.open(message, String(this.translate.instant('takeoff.close')), { duration: 8000 });
     this.takeoff.reload();
   }
 }

@@ -4,7 +4,7 @@ export default [
   {
     path: '',
     pathMatch: 'full',
-    title: 'Measure rooms · Layerbook',
+    title: 'takeoff.titles.page',
     loadComponent: () => import('./takeoff-page').then((m) => m.TakeoffPage),
   },
 ] satisfies Routes;
