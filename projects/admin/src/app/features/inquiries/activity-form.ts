@@ -4,6 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
+import { TranslatePipe } from '@ngx-translate/core';
 import {
   INQUIRY_LIMITS,
   LOGGED_ACTIVITY_KINDS,
@@ -21,13 +22,19 @@ import { InquiryApi } from './inquiry-api';
 /** Adds a note, a call or an e-mail to an inquiry's log. */
 @Component({
   selector: 'lb-activity-form',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule, TranslatePipe],
   template: `
-    <form [formGroup]="form" #formDir="ngForm" (ngSubmit)="addToLog(formDir)" novalidate aria-label="Add to the log">
+    <form
+      [formGroup]="form"
+      #formDir="ngForm"
+      (ngSubmit)="addToLog(formDir)"
+      novalidate
+      [attr.aria-label]="'inquiries.activityForm.label' | translate"
+    >
       <fieldset class="lb-gate fields" [disabled]="!isHydrated()">
         <lb-form-alert [message]="submission.message()" />
         <mat-form-field class="kind">
-          <mat-label>Kind</mat-label>
+          <mat-label>{{ 'inquiries.activityForm.kind' | translate }}</mat-label>
           <mat-select formControlName="kind" required>
             @for (kind of kinds; track kind) {
               <mat-option [value]="kind">{{ kindLabels[kind] }}</mat-option>
@@ -36,12 +43,12 @@ import { InquiryApi } from './inquiry-api';
           <mat-error>{{ errorText(form.controls.kind, words.kind) }}</mat-error>
         </mat-form-field>
         <mat-form-field class="body">
-          <mat-label>What happened</mat-label>
+          <mat-label>{{ 'inquiries.activityForm.body' | translate }}</mat-label>
           <textarea matInput formControlName="body" rows="3" required></textarea>
           <mat-error>{{ errorText(form.controls.body, words.body) }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions">
-          <button mat-stroked-button type="submit" [disabled]="submission.isBusy()">Add to log</button>
+          <button mat-stroked-button type="submit" [disabled]="submission.isBusy()">{{ 'inquiries.activityForm.add' | translate }}</button>
         </div>
       </fieldset>
     </form>

@@ -1,6 +1,7 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { InquiryActivity } from '@layerbook/contracts/types';
 import { formatCalendarDate } from '../../shared/ui/calendar-date-pipe';
 import { describeActivity } from './activity-words';
@@ -9,9 +10,9 @@ import { Assignees } from './assignees';
 /** Who did what and when, newest first. */
 @Component({
   selector: 'lb-activity-log',
-  imports: [DatePipe, MatIconModule],
+  imports: [DatePipe, MatIconModule, TranslatePipe],
   template: `
-    <ol class="log" aria-label="Activity log">
+    <ol class="log" [attr.aria-label]="'inquiries.activityLog.label' | translate">
       @for (entry of entries(); track entry.id) {
         <li>
           <mat-icon aria-hidden="true">{{ entry.line.icon }}</mat-icon>
@@ -21,13 +22,13 @@ import { Assignees } from './assignees';
               <p class="body">{{ entry.line.body }}</p>
             }
             <p class="meta">
-              {{ entry.actorName ?? 'Public inquiry form' }} ·
+              {{ entry.actorName ?? ('inquiries.activityLog.publicForm' | translate) }} ·
               <time [attr.datetime]="entry.createdAt">{{ entry.createdAt | date: 'medium' }}</time>
             </p>
           </div>
         </li>
       } @empty {
-        <li class="empty">Nothing logged yet.</li>
+        <li class="empty">{{ 'inquiries.activityLog.empty' | translate }}</li>
       }
     </ol>
   `,

@@ -5,22 +5,22 @@ export default [
   {
     path: '',
     pathMatch: 'full',
-    title: 'Inquiries · Layerbook',
+    title: 'inquiries.titles.board',
     loadComponent: () => import('./inquiry-board').then((m) => m.InquiryBoard),
   },
   {
     path: 'list',
-    title: 'Inquiries table · Layerbook',
+    title: 'inquiries.titles.table',
     loadComponent: () => import('./inquiry-table').then((m) => m.InquiryTable),
   },
   {
     path: 'new',
-    title: 'Log an inquiry · Layerbook',
+    title: 'inquiries.titles.new',
     loadComponent: () => import('./new-inquiry').then((m) => m.NewInquiry),
   },
   {
     path: ':id',
-    title: 'Inquiry · Layerbook',
+    title: 'inquiries.titles.detail',
     loadComponent: () => import('./inquiry-detail').then((m) => m.InquiryDetailPage),
   },
 ] satisfies Routes;

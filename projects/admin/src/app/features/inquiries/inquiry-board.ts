@@ -5,6 +5,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatTooltipModule } from '@angular/material/tooltip';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { BoardColumn, InquiryStage, InquirySummary, ItemList } from '@layerbook/contracts/types';
 import { FirmCurrency } from '../../core/firm/firm-currency';
 import { problemMessage } from '../../core/errors/problem';
@@ -15,7 +16,6 @@ import { InquiryCard } from './inquiry-card';
 import { InquiryViews } from './inquiry-views';
 import { StageMover } from './stage-mover';
 import { STAGE_ICONS } from './stage-icons';
-import { stageOddsTip } from './stage-odds';
 
 @Component({
   selector: 'lb-inquiry-board',
@@ -30,6 +30,7 @@ import { stageOddsTip } from './stage-odds';
     MatProgressBarModule,
     MatTooltipModule,
     RouterLink,
+    TranslatePipe,
   ],
   templateUrl: './inquiry-board.html',
   styleUrl: './inquiry-board.scss',
@@ -37,6 +38,7 @@ import { stageOddsTip } from './stage-odds';
 })
 export class InquiryBoard {
   private readonly mover = inject(StageMover);
+  private readonly translate = inject(TranslateService);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly injector = inject(Injector);
   private readonly firmCurrency = inject(FirmCurrency);
@@ -48,7 +50,6 @@ export class InquiryBoard {
   protected readonly message = computed(() => this.boardMessage() ?? this.moveMessage());
   protected readonly currency = this.firmCurrency.code;
   protected readonly stageIcons = STAGE_ICONS;
-  protected readonly oddsTip = stageOddsTip;
   /** On touch screens a swipe should scroll the board; a press-and-hold picks a card up. */
   protected readonly dragDelay = { touch: 300, mouse: 0 };
 
@@ -72,7 +73,9 @@ export class InquiryBoard {
       this.board.set({ items: saved ? replaceCard(this.columns(), saved) : before });
     } catch (error) {
       this.board.set({ items: before });
-      this.moveMessage.set(`${card.contactName} was not moved. ${problemMessage(error)}`);
+      this.moveMessage.set(
+        String(this.translate.instant('inquiries.board.notMoved', { name: card.contactName, problem: problemMessage(error) })),
+      );
     }
     this.focusMoveButton(card.id);
   }

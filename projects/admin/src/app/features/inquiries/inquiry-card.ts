@@ -3,6 +3,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule, MatMenuTrigger } from '@angular/material/menu';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
 import { INQUIRY_STAGES, STAGE_LABELS, type InquiryStage, type InquirySummary } from '@layerbook/contracts/types';
 import { FollowUpDate } from '../../shared/ui/follow-up-date';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
@@ -10,7 +11,7 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
 /** One inquiry on the board, with a menu that moves it without dragging (keyboard, switch access). */
 @Component({
   selector: 'lb-inquiry-card',
-  imports: [FollowUpDate, MatButtonModule, MatIconModule, MatMenuModule, MoneyPipe, RouterLink],
+  imports: [FollowUpDate, MatButtonModule, MatIconModule, MatMenuModule, MoneyPipe, RouterLink, TranslatePipe],
   host: { '[attr.data-inquiry-id]': 'inquiry().id' },
   template: `
     @let item = inquiry();
@@ -20,7 +21,7 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
         mat-icon-button
         type="button"
         class="move"
-        [attr.aria-label]="'Move ' + item.contactName"
+        [attr.aria-label]="'inquiries.card.move' | translate: { name: item.contactName }"
         [matMenuTriggerFor]="moveMenu"
         [matMenuTriggerRestoreFocus]="false"
         (menuClosed)="returnFocus(trigger)"
@@ -30,7 +31,9 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
       </button>
       <mat-menu #moveMenu="matMenu" xPosition="before">
         @for (stage of otherStages(); track stage) {
-          <button mat-menu-item type="button" (click)="chooseStage(stage)">Move to {{ stageLabels[stage] }}</button>
+          <button mat-menu-item type="button" (click)="chooseStage(stage)">
+            {{ 'inquiries.card.moveTo' | translate: { stage: stageLabels[stage] } }}
+          </button>
         }
       </mat-menu>
     </div>
@@ -44,13 +47,13 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
       @if (item.estimatedValue) {
         <span>{{ item.estimatedValue | money: currency() }}</span>
       } @else {
-        <span class="muted">No estimate yet</span>
+        <span class="muted">{{ 'inquiries.card.noEstimate' | translate }}</span>
       }
     </p>
     <lb-follow-up-date class="line" [date]="item.nextFollowUp" [isOverdue]="item.isFollowUpOverdue" />
     <p class="line">
       <mat-icon aria-hidden="true">person</mat-icon>
-      <span [class.muted]="!item.assigneeName">{{ item.assigneeName ?? 'Not assigned' }}</span>
+      <span [class.muted]="!item.assigneeName">{{ item.assigneeName ?? ('inquiries.card.notAssigned' | translate) }}</span>
     </p>
   `,
   styleUrl: './inquiry-card.scss',

@@ -8,6 +8,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import {
   BUDGET_LABELS,
   INQUIRY_STAGES,
@@ -53,12 +54,14 @@ import { matchLabel, matchWords } from '../clients/client-match-words';
     MoneyPipe,
     NextStepForm,
     RouterLink,
+    TranslatePipe,
   ],
   templateUrl: './inquiry-detail.html',
   styleUrl: './inquiry-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class InquiryDetailPage {
+  private readonly translate = inject(TranslateService);
   private readonly api = inject(InquiryApi);
   private readonly mover = inject(StageMover);
   private readonly snackBar = inject(MatSnackBar);
@@ -130,15 +133,18 @@ export class InquiryDetailPage {
       } as const;
       await this.api.convert(current.id, match ? { clientId: match.id } : { client: newClient });
       this.detail.reload();
-      const words = match ? `${current.contactName} is filed under ${match.name}.` : `${current.contactName} is filed as a new client.`;
-      this.snackBar.open(words, 'Close', { duration: 5000 });
+      const words: unknown = match
+        ? this.translate.instant('inquiries.detail.filedUnder', { name: current.contactName, client: match.name })
+        : this.translate.instant('inquiries.detail.filedAsNew', { name: current.contactName });
+      this.snackBar.open(String(words), String(this.translate.instant('inquiries.close')), { duration: 5000 });
     });
   }
 
-  protected showSaved(saved: InquiryDetail, what: string): void {
+  /** `whatKey`: the snack bar's words. */
+  protected showSaved(saved: InquiryDetail, whatKey: string): void {
     this.detail.set(saved);
     this.isEditing.set(false);
-    this.snackBar.open(what, 'Close', { duration: 4000 });
+    this.snackBar.open(String(this.translate.instant(whatKey)), String(this.translate.instant('inquiries.close')), { duration: 4000 });
   }
 
   /** One change from the page's own buttons: busy while it runs, the server's words if it fails. */

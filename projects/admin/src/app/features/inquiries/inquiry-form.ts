@@ -7,6 +7,7 @@ import { MatDatepickerModule } from '@angular/material/datepicker';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
+import { TranslatePipe } from '@ngx-translate/core';
 import {
   BUDGET_LABELS,
   BUDGET_RANGES,
@@ -43,7 +44,16 @@ type InquiryDetails = Omit<InquiryCreate, 'estimatedValue' | 'assigneeUserId' | 
  */
 @Component({
   selector: 'lb-inquiry-form',
-  imports: [FormAlert, MatButtonModule, MatDatepickerModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatDatepickerModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+    TranslatePipe,
+  ],
   providers: [provideNativeDateAdapter()],
   templateUrl: './inquiry-form.html',
   styleUrl: './inquiry-form.scss',

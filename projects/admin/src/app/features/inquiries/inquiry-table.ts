@@ -10,6 +10,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatTableModule } from '@angular/material/table';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
 import {
   INQUIRY_SORTS,
   INQUIRY_SORT_LABELS,
@@ -63,6 +64,7 @@ const SEARCH_PAUSE_MS = 300;
     MoneyPipe,
     ReactiveFormsModule,
     RouterLink,
+    TranslatePipe,
   ],
   templateUrl: './inquiry-table.html',
   styleUrl: './inquiry-table.scss',

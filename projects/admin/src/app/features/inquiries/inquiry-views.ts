@@ -2,26 +2,27 @@ import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink, RouterLinkActive } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** The heading row of both inquiry views: switch Board | Table, and log a new one. */
 @Component({
   selector: 'lb-inquiry-views',
-  imports: [MatButtonModule, MatIconModule, RouterLink, RouterLinkActive],
+  imports: [MatButtonModule, MatIconModule, RouterLink, RouterLinkActive, TranslatePipe],
   template: `
     <div class="heading">
-      <h1>Inquiries</h1>
+      <h1>{{ 'inquiries.views.heading' | translate }}</h1>
       <a mat-flat-button routerLink="/inquiries/new">
         <mat-icon aria-hidden="true">add_call</mat-icon>
-        Log an inquiry
+        {{ 'inquiries.views.logInquiry' | translate }}
       </a>
     </div>
-    <p class="lb-lead">Every prospect from first call to won or lost, with what the work may be worth.</p>
-    <nav class="views" aria-label="Inquiry views">
+    <p class="lb-lead">{{ 'inquiries.views.lead' | translate }}</p>
+    <nav class="views" [attr.aria-label]="'inquiries.views.label' | translate">
       <a routerLink="/inquiries" routerLinkActive="is-current" [routerLinkActiveOptions]="{ exact: true }" ariaCurrentWhenActive="page">
-        <mat-icon aria-hidden="true">view_week</mat-icon>Board
+        <mat-icon aria-hidden="true">view_week</mat-icon>{{ 'inquiries.views.board' | translate }}
       </a>
       <a routerLink="/inquiries/list" routerLinkActive="is-current" ariaCurrentWhenActive="page">
-        <mat-icon aria-hidden="true">table_rows</mat-icon>Table
+        <mat-icon aria-hidden="true">table_rows</mat-icon>{{ 'inquiries.views.table' | translate }}
       </a>
     </nav>
   `,

@@ -4,6 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { TranslatePipe } from '@ngx-translate/core';
 import { INQUIRY_LIMITS } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -15,21 +16,21 @@ export interface LostReasonData {
 /** Asks why an inquiry was lost before it is marked so; closes with the reason, or nothing. */
 @Component({
   selector: 'lb-lost-reason-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, TranslatePipe],
   template: `
-    <h2 mat-dialog-title id="lost-title">Why was {{ data.contactName }} lost?</h2>
+    <h2 mat-dialog-title id="lost-title">{{ 'inquiries.lostDialog.title' | translate: { name: data.contactName } }}</h2>
     <form [formGroup]="form" (ngSubmit)="markLost()" novalidate>
       <mat-dialog-content>
-        <p>A word on why helps with pricing and follow-up later: price, timing, went with someone else…</p>
+        <p>{{ 'inquiries.lostDialog.explain' | translate }}</p>
         <mat-form-field class="lb-full">
-          <mat-label>Reason it was lost</mat-label>
+          <mat-label>{{ 'inquiries.lostDialog.reason' | translate }}</mat-label>
           <textarea matInput formControlName="reason" rows="3" required cdkFocusInitial></textarea>
           <mat-error>{{ errorText(form.controls.reason, words) }}</mat-error>
         </mat-form-field>
       </mat-dialog-content>
       <mat-dialog-actions align="end">
-        <button mat-button type="button" [mat-dialog-close]="undefined">Cancel</button>
-        <button mat-flat-button type="submit">Mark as lost</button>
+        <button mat-button type="button" [mat-dialog-close]="undefined">{{ 'inquiries.cancel' | translate }}</button>
+        <button mat-flat-button type="submit">{{ 'inquiries.lostDialog.markLost' | translate }}</button>
       </mat-dialog-actions>
     </form>
   `,

@@ -6,6 +6,7 @@ import { MatDatepickerModule } from '@angular/material/datepicker';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { InquiryDetail, InquiryUpdate } from '@layerbook/contracts/types';
 import { FirmCurrency } from '../../core/firm/firm-currency';
 import { errorText } from '../../shared/forms/error-text';
@@ -20,7 +21,16 @@ import { InquiryApi } from './inquiry-api';
 /** What the inquiry may be worth, who has it, and when to call back. */
 @Component({
   selector: 'lb-next-step-form',
-  imports: [FormAlert, MatButtonModule, MatDatepickerModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatDatepickerModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+    TranslatePipe,
+  ],
   providers: [provideNativeDateAdapter()],
   template: `
     <form [formGroup]="form" (ngSubmit)="saveNextStep()" novalidate aria-labelledby="next-step-heading">
@@ -28,18 +38,18 @@ import { InquiryApi } from './inquiry-api';
         <lb-form-alert [message]="submission.message()" />
         <div class="fields">
           <mat-form-field>
-            <mat-label>Estimated value</mat-label>
+            <mat-label>{{ 'inquiries.form.estimatedValue' | translate }}</mat-label>
             <input matInput formControlName="estimatedValue" inputmode="decimal" autocomplete="off" />
             @if (currency(); as code) {
               <span matTextSuffix>&nbsp;{{ code }}</span>
             }
-            <mat-hint>Like 12500; empty if too early to say.</mat-hint>
+            <mat-hint>{{ 'inquiries.nextStep.valueHint' | translate }}</mat-hint>
             <mat-error>{{ errorText(form.controls.estimatedValue, words.amount) }}</mat-error>
           </mat-form-field>
           <mat-form-field>
-            <mat-label>Assigned to</mat-label>
+            <mat-label>{{ 'inquiries.form.assignedTo' | translate }}</mat-label>
             <mat-select formControlName="assigneeUserId">
-              <mat-option [value]="null">Nobody yet</mat-option>
+              <mat-option [value]="null">{{ 'inquiries.form.nobodyYet' | translate }}</mat-option>
               @for (person of people(); track person.userId) {
                 <mat-option [value]="person.userId">{{ person.name }}</mat-option>
               }
@@ -47,16 +57,16 @@ import { InquiryApi } from './inquiry-api';
             <mat-error>{{ errorText(form.controls.assigneeUserId, {}) }}</mat-error>
           </mat-form-field>
           <mat-form-field>
-            <mat-label>Next follow-up</mat-label>
+            <mat-label>{{ 'inquiries.form.nextFollowUp' | translate }}</mat-label>
             <input matInput [matDatepicker]="picker" formControlName="nextFollowUp" autocomplete="off" />
             <mat-datepicker-toggle matIconSuffix [for]="picker" />
             <mat-datepicker #picker />
-            <mat-hint>Empty means no call-back planned.</mat-hint>
+            <mat-hint>{{ 'inquiries.nextStep.followUpHint' | translate }}</mat-hint>
             <mat-error>{{ errorText(form.controls.nextFollowUp, words.date) }}</mat-error>
           </mat-form-field>
         </div>
         <div class="lb-form-actions">
-          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">Save</button>
+          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">{{ 'inquiries.nextStep.save' | translate }}</button>
         </div>
       </fieldset>
     </form>

@@ -1,6 +1,7 @@
 import { LiveAnnouncer } from '@angular/cdk/a11y';
 import { Injectable, inject } from '@angular/core';
 import { MatDialog } from '@angular/material/dialog';
+import { TranslateService } from '@ngx-translate/core';
 import { firstValueFrom } from 'rxjs';
 import { STAGE_LABELS, type InquiryDetail, type InquiryStage, type InquirySummary } from '@layerbook/contracts/types';
 import { InquiryApi } from './inquiry-api';
@@ -12,6 +13,7 @@ import { LostReasonDialog, type LostReasonData } from './lost-reason-dialog';
  */
 @Injectable({ providedIn: 'root' })
 export class StageMover {
+  private readonly translate = inject(TranslateService);
   private readonly api = inject(InquiryApi);
   private readonly dialog = inject(MatDialog);
   private readonly announcer = inject(LiveAnnouncer);
@@ -22,12 +24,14 @@ export class StageMover {
     if (stage === 'lost') {
       lostReason = await this.askWhyLost(inquiry.contactName);
       if (!lostReason) {
-        void this.announcer.announce(`${inquiry.contactName} was not moved.`);
+        void this.announcer.announce(String(this.translate.instant('inquiries.mover.notMoved', { name: inquiry.contactName })));
         return null;
       }
     }
     const saved = await this.api.moveStage(inquiry.id, stage, lostReason);
-    void this.announcer.announce(`Moved ${inquiry.contactName} to ${STAGE_LABELS[stage]}.`);
+    void this.announcer.announce(
+      String(this.translate.instant('inquiries.mover.moved', { name: inquiry.contactName, stage: STAGE_LABELS[stage] })),
+    );
     return saved;
   }
 

@@ -10,8 +10,3 @@ export const LIKELY_WORK_WORDS = {
   explain:
     "Likely work counts each open inquiry's estimated value at the odds that an inquiry at its stage turns into a job. The odds per stage are yours to set in",
 } as const;
-
-/** The tooltip on a board column: the stage's odds, in the trade's words. */
-export function stageOddsTip(label: string, likelihoodPercent: number): string {
-  return `${label}: about ${likelihoodPercent} in 100 inquiries at this stage turn into work (stage odds, set in Settings).`;
-}
