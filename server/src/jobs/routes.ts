@@ -5,12 +5,15 @@ import type { AppContext } from '../context';
 import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { getJob, listJobs } from './jobs';
+import { sheetRoutes } from './sheet/routes';
 
 const idParam = z.strictObject({ id: uuid('job id') });
 
 /** Accepted work carries the contract sum: owner and office only (crew get their job sheet elsewhere). */
 export function jobRoutes(ctx: AppContext): Router {
   const router = Router();
+  // before '/:id', which would take 'sheets' for a job id
+  router.use(sheetRoutes(ctx));
 
   router.get('/', async (req, res) => {
     res.json((await withStaff(ctx, req, 'office', (tx) => listJobs(tx))) satisfies ItemList<JobSummary>);

@@ -1,0 +1,106 @@
+import type { JobStatus, ProposalSnapshot } from '@layerbook/contracts';
+import type { TenantTx } from '@layerbook/db';
+import type { EstimateResultJson, FinishLayer, Product } from '@layerbook/domain';
+import { notFound } from '../../http/problem';
+
+/**
+ * What a job sheet is built from, read in one tenant transaction: the job and its site, the firm's
+ * units, zone and country, the accepted option's stored result and the proposal's room order, and
+ * the finish systems and products that result names (archived ones too: the job was sold with
+ * them). No price, cost or total is selected.
+ */
+export interface SheetSource {
+  readonly job: {
+    readonly id: string;
+    readonly title: string;
+    readonly status: JobStatus;
+    readonly startDate: string | null;
+    readonly finishDate: string | null;
+    readonly siteAddress: string;
+  };
+  readonly firm: { readonly units: 'imperial' | 'metric'; readonly timeZone: string; readonly country: string };
+  /** the unit the stored sizes are in (the proposal's) */
+  readonly lengthUnit: 'ft' | 'm';
+  /** the accepted option's stored result (only the parts the sheet reads are relied on) */
+  readonly result: Pick<EstimateResultJson, 'surfaces' | 'schedule' | 'cautions'> | null;
+  readonly scope: ProposalSnapshot['scope'];
+  readonly roomNames: ReadonlyMap<string, string>;
+  readonly finishSystems: ReadonlyArray<{ readonly id: string; readonly name: string; readonly layers: readonly FinishLayer[] }>;
+  readonly products: ReadonlyArray<Pick<Product, 'id' | 'name' | 'unit' | 'hazards'>>;
+}
+
+interface JobRow {
+  id: string;
+  title: string;
+  status: JobStatus;
+  start_date: string | null;
+  finish_date: string | null;
+  site_address: string;
+  units: 'imperial' | 'metric';
+  time_zone: string;
+  country: string;
+  length_unit: 'ft' | 'm' | null;
+  scope: ProposalSnapshot['scope'] | null;
+  result: Pick<EstimateResultJson, 'surfaces' | 'schedule' | 'cautions'> | null;
+}
+
+/** The product ids a layer uses: the product applied as is, or its recipe's components. */
+export const layerProductIds = (layer: Pick<FinishLayer, 'productId' | 'recipe'>): string[] =>
+  layer.recipe ? layer.recipe.components.map((c) => c.productId) : layer.productId ? [layer.productId] : [];
+
+export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<SheetSource> {
+  const { rows } = await tx.client.query<JobRow>(
+    `select j.id, j.title, j.status, j.start_date::text as start_date, j.finish_date::text as finish_date,
+            concat_ws(', ', nullif(s.address_line1, ''), nullif(s.city, '')) as site_address,
+            f.units, f.time_zone, f.country,
+            pv.snapshot->>'lengthUnit' as length_unit, pv.snapshot->'scope' as scope,
+            (select v->'result' from jsonb_array_elements(coalesce(e.result->'variants', '[]'::jsonb)) v
+              where v->>'id' = j.accepted_variant_id limit 1) as result
+       from jobs j
+       join sites s on s.tenant_id = j.tenant_id and s.id = j.site_id
+       join firms f on f.id = j.tenant_id
+       join estimates e on e.tenant_id = j.tenant_id and e.id = j.estimate_id
+       join proposal_versions pv on pv.tenant_id = j.tenant_id and pv.id = j.proposal_version_id
+      where j.tenant_id = $1 and j.id = $2`,
+    [tx.tenantId, jobId],
+  );
+  const r = rows[0];
+  if (!r) throw notFound('job');
+  const surfaces = r.result?.surfaces ?? [];
+
+  const systemIds = [...new Set(surfaces.map((s) => s.finishSystemId))];
+  const { rows: finishSystems } = await tx.client.query<{ id: string; name: string; layers: FinishLayer[] }>(
+    `select id, name, layers from finish_systems where tenant_id = $1 and id::text = any($2::text[])`,
+    [tx.tenantId, systemIds],
+  );
+  const productIds = new Set<string>();
+  for (const f of finishSystems) for (const layer of f.layers) for (const id of layerProductIds(layer)) productIds.add(id);
+  for (const s of surfaces) for (const layer of s.layers) for (const p of layer.quantity.products) productIds.add(p.productId);
+  const { rows: products } = await tx.client.query<{ id: string; name: string; unit: Product['unit']; hazards: Product['hazards'] | null }>(
+    `select id, name, unit, hazards from products where tenant_id = $1 and id::text = any($2::text[]) order by name, id`,
+    [tx.tenantId, [...productIds]],
+  );
+  const roomIds = [...new Set(surfaces.map((s) => s.roomId))];
+  const { rows: rooms } = await tx.client.query<{ id: string; name: string }>(
+    `select id, name from rooms where tenant_id = $1 and id::text = any($2::text[])`,
+    [tx.tenantId, roomIds],
+  );
+
+  return {
+    job: {
+      id: r.id,
+      title: r.title,
+      status: r.status,
+      startDate: r.start_date,
+      finishDate: r.finish_date,
+      siteAddress: r.site_address,
+    },
+    firm: { units: r.units, timeZone: r.time_zone, country: r.country },
+    lengthUnit: r.length_unit ?? (r.units === 'metric' ? 'm' : 'ft'),
+    result: r.result,
+    scope: r.scope ?? [],
+    roomNames: new Map(rooms.map((room) => [room.id, room.name])),
+    finishSystems,
+    products: products.map((p) => ({ id: p.id, name: p.name, unit: p.unit, hazards: p.hazards ?? {} })),
+  };
+}
