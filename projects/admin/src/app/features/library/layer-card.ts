@@ -10,19 +10,29 @@ import { MatInputModule } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
 import { MatSelectModule } from '@angular/material/select';
 import { toObservable } from '@angular/core/rxjs-interop';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { FINISH_SYSTEM_LIMITS as L } from '@layerbook/contracts/types';
-import { waitText } from '@layerbook/domain';
+import { Language } from '../../../../../shared/i18n/language';
 import { startWith, switchMap } from 'rxjs';
 import { errorText } from '../../shared/forms/error-text';
 import { type LayerGroup, addComponent } from './layer-form';
-import { AREA_UNIT_CHOICES, DILUTION_CHOICES, METHOD_CHOICES, MULTIPLIER_CHOICES, UNIT_GROUPS, WAIT_PICKS } from './library-words';
+import {
+  AREA_UNIT_CHOICES,
+  DILUTION_CHOICES,
+  METHOD_CHOICES,
+  MULTIPLIER_CHOICES,
+  UNIT_GROUPS,
+  WAIT_PICKS,
+  type Words,
+  waitWords,
+} from './library-words';
 
 export interface ProductChoice {
   readonly id: string;
   readonly label: string;
 }
 
-const NUMBER = { required: 'Enter a number.', positive: 'Enter a number above zero.' };
+const E = 'library.layerCard.errors.';
 
 /** One layer of a finish system, its fields grouped the way a finisher thinks about them. */
 @Component({
@@ -37,6 +47,7 @@ const NUMBER = { required: 'Enter a number.', positive: 'Enter a number above ze
     MatRadioModule,
     MatSelectModule,
     ReactiveFormsModule,
+    TranslatePipe,
   ],
   templateUrl: './layer-card.html',
   styleUrl: './layer-card.scss',
@@ -44,6 +55,8 @@ const NUMBER = { required: 'Enter a number.', positive: 'Enter a number above ze
 })
 export class LayerCard {
   private readonly fb = inject(NonNullableFormBuilder);
+  private readonly language = inject(Language);
+  private readonly translate = inject(TranslateService);
 
   readonly layer = input.required<LayerGroup>();
   readonly index = input.required<number>();
@@ -60,46 +73,39 @@ export class LayerCard {
   protected readonly dilutions = DILUTION_CHOICES;
   protected readonly multipliers = MULTIPLIER_CHOICES;
   protected readonly waitPicks = WAIT_PICKS;
-  protected readonly waitText = waitText;
   protected readonly errorText = errorText;
+  /** Keys of the library's words per validator; `limits` gives the numbers they name. */
   protected readonly words = {
-    name: { required: 'Name the layer, like "Scratch coat" or "Glaze".', maxlength: `Use at most ${L.layerNameMax} characters.` },
-    choose: { required: 'Choose from the list.' },
-    product: { required: 'Choose a product, or give a mix recipe.' },
-    amount: { required: 'Enter how far the product goes.', positive: 'Coverage must be more than zero.' },
-    parts: { required: 'Enter the parts.', positive: 'Parts must be more than zero.' },
-    coats: {
-      required: 'Enter the number of coats.',
-      min: 'A layer has at least one coat.',
-      max: `Use at most ${L.coatsMax} coats.`,
-      pattern: 'Coats are whole numbers.',
-    },
-    share: {
-      required: 'Enter the share of the surface.',
-      positive: 'The share must be more than 0 %.',
-      max: 'The share is at most 100 %.',
-    },
-    dilution: {
-      min: 'The dilution cannot be negative.',
-      ofMixMax: 'Water as a share of the final mix must be under 100 %.',
-      ofConcentrateMax: `Water as a share of the product is at most ${L.dilutionOfConcentrateMax * 100} % (${L.dilutionOfConcentrateMax} parts water to 1).`,
-    },
-    waste: { required: 'Enter the waste (0 for none).', min: 'Waste cannot be negative.', max: 'Waste above 100 % is refused.' },
-    rate: { ...NUMBER, positive: 'The production rate must be more than zero.' },
-    multiplier: { min: 'A multiplier is at least 1 (no extra time).', max: 'A multiplier above 5 is surely a typo.' },
-    wait: {
-      required: 'Enter the wait in hours (0 for none).',
-      min: 'The wait cannot be negative.',
-      max: `Use at most 90 days (${L.waitHoursMax} hours).`,
-    },
+    name: { required: `${E}nameRequired`, maxlength: 'library.common.atMostChars' },
+    choose: { required: 'library.common.chooseFromList' },
+    product: { required: `${E}productRequired` },
+    amount: { required: `${E}amountRequired`, positive: `${E}amountPositive` },
+    parts: { required: `${E}partsRequired`, positive: `${E}partsPositive` },
+    coats: { required: `${E}coatsRequired`, min: `${E}coatsMin`, max: `${E}coatsMax`, pattern: `${E}coatsWhole` },
+    share: { required: `${E}shareRequired`, positive: `${E}sharePositive`, max: `${E}shareMax` },
+    dilution: { min: `${E}dilutionMin`, ofMixMax: `${E}ofMixMax`, ofConcentrateMax: `${E}ofConcentrateMax` },
+    waste: { required: `${E}wasteRequired`, min: `${E}wasteMin`, max: `${E}wasteMax` },
+    rate: { required: `${E}numberRequired`, positive: `${E}ratePositive` },
+    multiplier: { min: `${E}multiplierMin`, max: `${E}multiplierMax` },
+    wait: { required: `${E}waitRequired`, min: `${E}waitMin`, max: `${E}waitMax` },
+  };
+  /** One set of params for every error word: each names only its own (the name's length, coats, dilution, wait). */
+  protected readonly limits = {
+    max: L.layerNameMax,
+    coatsMax: L.coatsMax,
+    percent: L.dilutionOfConcentrateMax * 100,
+    parts: L.dilutionOfConcentrateMax,
+    waitMax: L.waitHoursMax,
   };
 
   /** Re-read on every change of the layer, so labels and the summary line follow what is typed. */
   private readonly value = toSignal(toObservable(this.layer).pipe(switchMap((g) => g.valueChanges.pipe(startWith(g.getRawValue())))));
   protected readonly heading = computed(() => {
     this.value();
+    this.language.current(); // the heading follows a language switch
     const name = this.layer().controls.name.value.trim();
-    return `Layer ${this.index() + 1}${name ? `: ${name}` : ''}`;
+    const n = this.index() + 1;
+    return this.translate.instant(name ? 'library.layerCard.headingNamed' : 'library.layerCard.heading', { n, name }) as string;
   });
   protected readonly isRecipe = computed(() => {
     this.value();
@@ -112,17 +118,17 @@ export class LayerCard {
   protected readonly dilutionExplain = computed(() => {
     this.value();
     const convention = this.layer().controls.dilution.controls.convention.value;
-    return DILUTION_CHOICES.find((d) => d.value === convention)?.explain ?? '';
+    return DILUTION_CHOICES.find((d) => d.value === convention)?.explainKey ?? '';
   });
-  protected readonly waitNow = computed(() => {
+  protected readonly waitNow = computed<Words | null>(() => {
     this.value();
     const hours = this.layer().controls.waitHoursAfter.value;
-    return hours === null ? '' : waitText(hours);
+    return hours === null ? null : waitWords(hours, this.language.locale());
   });
   protected readonly anchor = computed(() => `layer-${this.layer().controls.id.value}`);
 
   protected coverageWord(kind: string): string {
-    return kind === 'spreadRate' ? 'Surface one unit covers' : 'Product per unit of surface';
+    return kind === 'spreadRate' ? 'library.layerCard.spreadRateAmount' : 'library.layerCard.consumptionAmount';
   }
 
   protected pickWait(hours: number): void {

@@ -1,10 +1,21 @@
 import { describe, expect, it } from 'vitest';
-import { DILUTION_CHOICES, PRODUCT_KIND_CHOICES, UNIT_GROUPS, flammableNote, hazardWords } from './library-words';
+import library from '../../../i18n/library/en.json';
+import { DILUTION_CHOICES, PRODUCT_KIND_CHOICES, UNIT_GROUPS, type Words, flammableNote, hazardWords, waitWords } from './library-words';
+
+/** The English the translate pipe would show for these words (key without `library.`, `{{param}}` filled in). */
+function english(w: Words): string {
+  let at: unknown = { library };
+  for (const part of w.key.split('.')) at = (at as Record<string, unknown>)[part];
+  if (typeof at !== 'string') throw new Error(`no English words for ${w.key}`);
+  return at.replace(/\{\{\s*(\w+)\s*\}\}/g, (_, name: string) => String(w.params?.[name]));
+}
 
 describe('library words', () => {
   it('offers every product kind and unit the API takes, in the contract order', () => {
-    expect(PRODUCT_KIND_CHOICES[0]).toEqual({ value: 'primer', label: 'Primer' });
+    expect(english(PRODUCT_KIND_CHOICES[0])).toBe('Primer');
+    expect(PRODUCT_KIND_CHOICES[0]?.value).toBe('primer');
     expect(UNIT_GROUPS.map((g) => g.units[0]?.value)).toEqual(['gallon', 'lb']);
+    expect(english(UNIT_GROUPS[0].units[0])).toBe('gallon (gal)');
     expect(DILUTION_CHOICES.map((d) => d.value)).toEqual(['ofConcentrate', 'ofMix']);
   });
 
@@ -20,7 +31,15 @@ describe('library words', () => {
     [{ isLime: true, containsSilica: true }, ['Caustic (lime)', 'Contains silica']],
     [{}, []],
   ])('hazardWords(%j)', (hazards, texts) => {
-    expect(hazardWords(hazards).map((w) => w.text)).toEqual(texts);
+    expect(hazardWords(hazards, 'en-US').map(english)).toEqual(texts);
+  });
+
+  // Unicode CLDR number symbols: es-US writes 38.5, es-CO 38,5.
+  it.each([
+    ['es-US', '38.5'],
+    ['es-CO', '38,5'],
+  ])('writes the flash point in the reader’s numbers (%s)', (locale, flash) => {
+    expect(hazardWords({ flashPointC: 38.5 }, locale)[0]?.params?.['flash']).toBe(flash);
   });
 
   it.each([
@@ -31,13 +50,22 @@ describe('library words', () => {
     ],
     [40, 'Flammable, category 3: 40\u00a0°C is at or below 93\u00a0°C (29 CFR 1910.106(a)(19)). Crew sheets will carry the fire cautions.'],
     [120, 'Above 93\u00a0°C, so not a flammable liquid under 29 CFR 1910.106(a)(19); it can still burn. Keep it away from flames.'],
-  ])('flammableNote(%s)', (c, note) => expect(flammableNote(c)).toBe(note));
+  ])('flammableNote(%s)', (c, note) => expect(english(flammableNote(c, null, 'en-US'))).toBe(note));
 
   it('never says "not flammable" at or below 93 °C', () => {
-    for (let c = -50; c <= 93; c += 0.5) expect(flammableNote(c)).not.toMatch(/not (a )?flammable/i);
+    for (let c = -50; c <= 93; c += 0.5) expect(english(flammableNote(c, null, 'en-US'))).not.toMatch(/not (a )?flammable/i);
   });
 
   it('splits categories 1 and 2 by the boiling point when known', () => {
-    expect(flammableNote(12, 30)).toMatch(/^Flammable, category 1:/);
+    expect(english(flammableNote(12, 30, 'en-US'))).toMatch(/^Flammable, category 1:/);
   });
+
+  // Same words as the domain's waitText (packages/domain/src/schedule/hours-text.ts).
+  it.each([
+    [0, 'no wait'],
+    [16, '16 h'],
+    [6.5, '6.5 h'],
+    [72, '72 h (3 days)'],
+    [100, '100 h (4 days 4 h)'],
+  ])('waitWords(%d)', (hours, text) => expect(english(waitWords(hours, 'en-US'))).toBe(text));
 });

@@ -4,24 +4,24 @@ export default [
   {
     path: '',
     pathMatch: 'full',
-    title: 'Finish library · Layerbook',
+    title: 'library.titles.systems',
     data: { tab: 'systems' },
     loadComponent: () => import('./library-page').then((m) => m.LibraryPage),
   },
   {
     path: 'products',
-    title: 'Products · Finish library · Layerbook',
+    title: 'library.titles.products',
     data: { tab: 'products' },
     loadComponent: () => import('./library-page').then((m) => m.LibraryPage),
   },
   {
     path: 'systems/new',
-    title: 'New finish system · Layerbook',
+    title: 'library.titles.newSystem',
     loadComponent: () => import('./system-editor').then((m) => m.SystemEditor),
   },
   {
     path: 'systems/:id',
-    title: 'Finish system · Layerbook',
+    title: 'library.titles.system',
     loadComponent: () => import('./system-editor').then((m) => m.SystemEditor),
   },
 ] satisfies Routes;

@@ -7,21 +7,22 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { PRODUCT_LIMITS as L, type ContainerView, type ProductInput, type ProductKind, type ProductView } from '@layerbook/contracts/types';
 import type { QuantityUnit } from '@layerbook/domain';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
-import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
+import { amountText, toAmount } from '../../shared/forms/money-input';
+import { Language } from '../../../../../shared/i18n/language';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LibraryApi } from './library-api';
 import { PRODUCT_KIND_CHOICES, UNIT_GROUPS, flammableNote } from './library-words';
 
-const TOO_LONG = { maxlength: 'That is too long for this field.' };
-const FLASH_POINT_RANGE = `Check the flash point: it should be between −${-L.flashPointMinC} and ${L.flashPointMaxC} °C.`;
-const BOILING_POINT_RANGE = `Check the boiling point: it should be between −${-L.boilingPointMinC} and ${L.boilingPointMaxC} °C.`;
+const TOO_LONG = { maxlength: 'library.common.tooLong' };
+const E = 'library.productForm.errors.';
 
 /** Adds a product, or edits the one it is given: containers with prices, hazards from the SDS. */
 @Component({
@@ -35,6 +36,7 @@ const BOILING_POINT_RANGE = `Check the boiling point: it should be between −${
     MatInputModule,
     MatSelectModule,
     ReactiveFormsModule,
+    TranslatePipe,
   ],
   templateUrl: './product-form.html',
   styleUrl: './product-form.scss',
@@ -43,6 +45,8 @@ const BOILING_POINT_RANGE = `Check the boiling point: it should be between −${
 export class ProductForm implements OnInit {
   private readonly api = inject(LibraryApi);
   private readonly fb = inject(NonNullableFormBuilder);
+  private readonly language = inject(Language);
+  private readonly translate = inject(TranslateService);
 
   readonly product = input<ProductView | null>(null);
   readonly saved = output<ProductView>();
@@ -56,18 +60,25 @@ export class ProductForm implements OnInit {
   protected readonly isBusy = signal(false);
   protected readonly formMessage = signal<string | null>(null);
   protected readonly errorText = errorText;
+  /** Keys of the library's words per validator; the server's own message, when it has one, shows as sent. */
   protected readonly words = {
-    name: { required: 'Enter the product name.', ...TOO_LONG },
-    kind: { required: 'Choose what kind of product this is.' },
-    unit: { required: 'Choose the unit the product is counted in.' },
-    label: { required: 'Name the container, like "1 gal" or "20 kg pail".', ...TOO_LONG },
-    size: { required: 'Enter the container size.', min: 'The container size must be more than zero.' },
-    price: { required: 'Enter the price of this container, like 45.00.', ...AMOUNT_WORDS },
-    flashPoint: { min: FLASH_POINT_RANGE, max: FLASH_POINT_RANGE },
-    boilingPoint: { min: BOILING_POINT_RANGE, max: BOILING_POINT_RANGE },
-    url: { pattern: 'Enter a web address starting with https://.', ...TOO_LONG },
+    name: { required: `${E}nameRequired`, ...TOO_LONG },
+    kind: { required: `${E}kindRequired` },
+    unit: { required: `${E}unitRequired` },
+    label: { required: `${E}labelRequired`, ...TOO_LONG },
+    size: { required: `${E}sizeRequired`, min: `${E}sizeMin` },
+    price: { required: `${E}priceRequired`, amount: `${E}amount` },
+    flashPoint: { min: `${E}flashPointRange`, max: `${E}flashPointRange` },
+    boilingPoint: { min: `${E}boilingPointRange`, max: `${E}boilingPointRange` },
+    url: { pattern: `${E}url`, ...TOO_LONG },
     line: TOO_LONG,
-    containers: { required: 'Add at least one container with its price.' },
+  };
+  /** The params the error words name; each range message picks its own (the translate pipe ignores the rest). */
+  protected readonly limits = {
+    flashMin: -L.flashPointMinC,
+    flashMax: L.flashPointMaxC,
+    boilMin: -L.boilingPointMinC,
+    boilMax: L.boilingPointMaxC,
   };
 
   protected readonly form = this.fb.group({
@@ -89,7 +100,7 @@ export class ProductForm implements OnInit {
   private readonly flashPoint = toSignal(this.form.controls.hazards.controls.flashPointC.valueChanges, { initialValue: null });
   /** Shown live beside the flash point so the rule is visible, not hidden in the server. */
   private readonly boilingPoint = toSignal(this.form.controls.hazards.controls.boilingPointC.valueChanges, { initialValue: null });
-  protected readonly flammableNote = computed(() => flammableNote(this.flashPoint(), this.boilingPoint()));
+  protected readonly flammableNote = computed(() => flammableNote(this.flashPoint(), this.boilingPoint(), this.language.locale()));
 
   ngOnInit(): void {
     const p = this.product();
@@ -123,7 +134,7 @@ export class ProductForm implements OnInit {
   protected async saveProduct(): Promise<void> {
     this.formMessage.set(null);
     if (this.form.controls.containers.length === 0) {
-      this.formMessage.set(this.words.containers.required);
+      this.formMessage.set(this.translate.instant(`${E}containersRequired`) as string);
       return;
     }
     if (this.form.invalid) {

@@ -4,7 +4,9 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { PRODUCT_KIND_LABELS, QUANTITY_UNIT_SYMBOLS, type ItemList, type ProductView } from '@layerbook/contracts/types';
+import { TranslatePipe } from '@ngx-translate/core';
+import type { ItemList, ProductHazardsInput, ProductView } from '@layerbook/contracts/types';
+import { Language } from '../../../../../shared/i18n/language';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
 import { FirmCurrency } from '../../core/firm/firm-currency';
@@ -19,7 +21,7 @@ import { ProductForm } from './product-form';
 /** Products the firm buys, with container prices (hidden from crew by the server) and hazards in words. */
 @Component({
   selector: 'lb-product-list',
-  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatIconModule, MatProgressBarModule, MoneyPipe, ProductForm],
+  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatIconModule, MatProgressBarModule, MoneyPipe, ProductForm, TranslatePipe],
   templateUrl: './product-list.html',
   styleUrl: './library-table.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -28,6 +30,7 @@ export class ProductList {
   private readonly api = inject(LibraryApi);
   private readonly session = inject(Session);
   private readonly firmCurrency = inject(FirmCurrency);
+  private readonly language = inject(Language);
 
   protected readonly canEdit = computed(() => this.session.hasRole('office'));
   protected readonly currency = this.firmCurrency.code;
@@ -48,9 +51,7 @@ export class ProductList {
   /** 'new', a product id being edited, or null */
   protected readonly editing = signal<string | null>(null);
   protected readonly editingProduct = computed(() => this.products().find((p) => p.id === this.editing()) ?? null);
-  protected readonly hazardWords = hazardWords;
-  protected readonly kindLabel = (kind: ProductView['kind']) => PRODUCT_KIND_LABELS[kind];
-  protected readonly unitShort = QUANTITY_UNIT_SYMBOLS;
+  protected readonly hazardWords = (hazards: ProductHazardsInput) => hazardWords(hazards, this.language.locale());
 
   constructor() {
     void this.firmCurrency.load();

@@ -10,8 +10,10 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import { FINISH_SYSTEM_LIMITS as L, QUANTITY_UNIT_SYMBOLS, type FinishSystemView, type ProductView } from '@layerbook/contracts/types';
-import { totalWaitHours, waitText } from '@layerbook/domain';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import { FINISH_SYSTEM_LIMITS as L, type FinishSystemView, type ProductView } from '@layerbook/contracts/types';
+import { totalWaitHours } from '@layerbook/domain';
+import { Language } from '../../../../../shared/i18n/language';
 import { map, startWith } from 'rxjs';
 import { Session } from '../../core/auth/session';
 import { applyProblem } from '../../core/errors/apply-problem';
@@ -23,6 +25,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { LayerCard, type ProductChoice } from './layer-card';
 import { type LayerGroup, layerGroup, problemForForm, toLayer } from './layer-form';
 import { LibraryApi } from './library-api';
+import { waitWords } from './library-words';
 
 /** One finish system: its layers in order, edited as a whole and saved in one request (nothing half-saved). */
 @Component({
@@ -39,6 +42,7 @@ import { LibraryApi } from './library-api';
     MatProgressBarModule,
     ReactiveFormsModule,
     RouterLink,
+    TranslatePipe,
   ],
   templateUrl: './system-editor.html',
   styleUrl: './system-editor.scss',
@@ -52,6 +56,8 @@ export class SystemEditor {
   private readonly announcer = inject(LiveAnnouncer);
   private readonly injector = inject(Injector);
   private readonly document = inject(DOCUMENT);
+  private readonly language = inject(Language);
+  private readonly translate = inject(TranslateService);
 
   protected readonly isReadOnly = computed(() => !this.session.hasRole('office'));
   protected readonly isHydrated = hydratedSignal();
@@ -62,10 +68,13 @@ export class SystemEditor {
   protected readonly system = signal<FinishSystemView | null>(null);
   protected readonly products = signal<readonly ProductView[]>([]);
   protected readonly errorText = errorText;
+  /** Keys of the library's words per validator, with the params they name. */
   protected readonly words = {
-    name: { required: 'Name the finish system.', maxlength: `Use at most ${L.nameMax} characters.` },
-    description: { maxlength: `Use at most ${L.descriptionMax} characters.` },
+    name: { required: 'library.systemEditor.errors.nameRequired', maxlength: 'library.common.atMostChars' },
+    description: { maxlength: 'library.common.atMostChars' },
   };
+  protected readonly limits = { max: L.nameMax };
+  protected readonly descriptionLimits = { max: L.descriptionMax };
   protected readonly dragDelay = { touch: 300, mouse: 0 };
 
   protected readonly form = this.fb.group({
@@ -82,16 +91,24 @@ export class SystemEditor {
   );
   protected readonly layerCount = computed(() => this.formValue()?.layers.length ?? 0);
   /** The same sum the library shows for a saved system, over the layers as typed (a blank wait counts as none). */
-  protected readonly totalWait = computed(() =>
-    waitText(totalWaitHours((this.formValue()?.layers ?? []).map((l) => ({ waitHoursAfter: l.waitHoursAfter ?? 0 })))),
-  );
+  protected readonly totalWait = computed(() => {
+    const hours = totalWaitHours((this.formValue()?.layers ?? []).map((l) => ({ waitHoursAfter: l.waitHoursAfter ?? 0 })));
+    const words = waitWords(hours, this.language.locale());
+    return this.text(words.key, words.params);
+  });
   protected readonly isNew = computed(() => this.system() === null);
 
   /** Current products, plus any archived one this system still names, so its select shows a name. */
   protected readonly productChoices = computed<ProductChoice[]>(() => {
-    const choices: ProductChoice[] = this.products().map((p) => ({ id: p.id, label: `${p.name} (${QUANTITY_UNIT_SYMBOLS[p.unit]})` }));
+    this.language.current(); // the labels follow a language switch
+    const choices: ProductChoice[] = this.products().map((p) => ({
+      id: p.id,
+      label: this.text('library.systemEditor.productChoice', { name: p.name, unit: this.text(`library.unitSymbols.${p.unit}`) }),
+    }));
     for (const used of this.system()?.usesProducts ?? []) {
-      if (!choices.some((c) => c.id === used.id)) choices.push({ id: used.id, label: `${used.name} (archived)` });
+      if (!choices.some((c) => c.id === used.id)) {
+        choices.push({ id: used.id, label: this.text('library.systemEditor.archivedProduct', { name: used.name }) });
+      }
     }
     return choices;
   });
@@ -109,9 +126,9 @@ export class SystemEditor {
   }
 
   protected removeLayer(index: number): void {
-    const name = this.form.controls.layers.at(index).controls.name.value || `Layer ${index + 1}`;
+    const name = this.form.controls.layers.at(index).controls.name.value || this.text('library.systemEditor.layerN', { n: index + 1 });
     this.form.controls.layers.removeAt(index);
-    void this.announcer.announce(`Removed ${name}.`);
+    void this.announcer.announce(this.text('library.systemEditor.removed', { name }));
   }
 
   protected dropLayer(event: CdkDragDrop<unknown>): void {
@@ -125,8 +142,8 @@ export class SystemEditor {
     const group = layers.at(from);
     layers.removeAt(from, { emitEvent: false });
     layers.insert(to, group);
-    const name = group.controls.name.value || 'The layer';
-    void this.announcer.announce(`${name} is now layer ${to + 1} of ${layers.length}.`);
+    const name = group.controls.name.value || this.text('library.systemEditor.theLayer');
+    void this.announcer.announce(this.text('library.systemEditor.moved', { name, n: to + 1, count: layers.length }));
     if (via) {
       const id = group.controls.id.value;
       const atEnd = (via === 'up' && to === 0) || (via === 'down' && to === layers.length - 1);
@@ -138,12 +155,12 @@ export class SystemEditor {
     this.formMessage.set(null);
     this.savedNote.set(null);
     if (this.form.controls.layers.length === 0) {
-      this.formMessage.set('A finish system needs at least one layer.');
+      this.formMessage.set(this.text('library.systemEditor.needsLayer'));
       return;
     }
     if (this.form.invalid) {
       this.form.markAllAsTouched();
-      this.formMessage.set('Some fields need attention; each says what is wrong.');
+      this.formMessage.set(this.text('library.systemEditor.needsAttention'));
       return;
     }
     this.isBusy.set(true);
@@ -152,7 +169,7 @@ export class SystemEditor {
       const body = { name: v.name.trim(), description: v.description.trim(), layers: this.form.controls.layers.controls.map(toLayer) };
       const current = this.system();
       const saved = current ? await this.api.updateSystem(current.id, body) : await this.api.createSystem(body);
-      this.savedNote.set(`Saved ${saved.name}.`);
+      this.savedNote.set(this.text('library.systemEditor.saved', { name: saved.name }));
       if (!current) {
         await this.router.navigate(['/library/systems', saved.id], { replaceUrl: true });
       } else {
@@ -170,7 +187,7 @@ export class SystemEditor {
     if (!current) return;
     await this.runAction(async () => {
       this.show(await this.api.setSystemArchived(current.id, isArchived));
-      this.savedNote.set(isArchived ? 'Archived. It no longer appears when pricing new work.' : 'Back in the library.');
+      this.savedNote.set(this.text(isArchived ? 'library.systemEditor.archivedNote' : 'library.systemEditor.backNote'));
     });
   }
 
@@ -231,6 +248,11 @@ export class SystemEditor {
       layer.controls.source.setValue(layer.controls.source.value);
       layer.controls.isPerCoat.setValue(layer.controls.isPerCoat.value);
     }
+  }
+
+  /** Words for text made here (announcements, notes, pick-list labels) in the current language. */
+  private text(key: string, params?: Record<string, unknown>): string {
+    return this.translate.instant(key, params) as string;
   }
 
   private focusLater(elementId: string): void {

@@ -5,44 +5,48 @@ import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { FinishSystemSummary, ItemList } from '@layerbook/contracts/types';
-import { waitText } from '@layerbook/domain';
+import { Language } from '../../../../../shared/i18n/language';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { loadMessage } from '../../shared/forms/load-message';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LIBRARY_URLS, LibraryApi, archivedParam } from './library-api';
+import { waitWords } from './library-words';
 
 @Component({
   selector: 'lb-system-list',
-  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatIconModule, MatProgressBarModule, RouterLink, TranslatePipe],
   template: `
     <div class="bar">
       @if (canEdit()) {
         <a mat-flat-button routerLink="/library/systems/new">
           <mat-icon aria-hidden="true">add</mat-icon>
-          New finish system
+          {{ 'library.systemList.new' | translate }}
         </a>
       }
-      <mat-checkbox [checked]="showArchived()" (change)="toggleArchived($event.checked)" [disabled]="!isHydrated()"
-        >Show archived systems</mat-checkbox
-      >
+      <mat-checkbox [checked]="showArchived()" (change)="toggleArchived($event.checked)" [disabled]="!isHydrated()">{{
+        'library.systemList.showArchived' | translate
+      }}</mat-checkbox>
     </div>
     <lb-form-alert [message]="message()" />
     @if (isLoading()) {
-      <mat-progress-bar mode="indeterminate" aria-label="Loading finish systems" />
+      <mat-progress-bar mode="indeterminate" [attr.aria-label]="'library.systemList.loading' | translate" />
     }
-    <div class="table-wrap" tabindex="0" role="region" aria-label="Finish systems">
-      <table aria-label="Finish systems">
+    <div class="table-wrap" tabindex="0" role="region" [attr.aria-label]="'library.systemList.table' | translate">
+      <table [attr.aria-label]="'library.systemList.table' | translate">
         <thead>
           <tr>
-            <th scope="col">Name</th>
-            <th scope="col">Layers</th>
-            <th scope="col">Total wait</th>
-            <th scope="col">Products</th>
+            <th scope="col">{{ 'library.common.name' | translate }}</th>
+            <th scope="col">{{ 'library.systemList.layers' | translate }}</th>
+            <th scope="col">{{ 'library.systemList.totalWait' | translate }}</th>
+            <th scope="col">{{ 'library.systemList.products' | translate }}</th>
             @if (canEdit()) {
-              <th scope="col"><span class="lb-visually-hidden">Actions</span></th>
+              <th scope="col">
+                <span class="lb-visually-hidden">{{ 'library.common.actions' | translate }}</span>
+              </th>
             }
           </tr>
         </thead>
@@ -52,11 +56,13 @@ import { LIBRARY_URLS, LibraryApi, archivedParam } from './library-api';
               <th scope="row">
                 <a [routerLink]="['/library/systems', system.id]">{{ system.name }}</a>
                 @if (system.archivedAt) {
-                  <span class="tag"><mat-icon aria-hidden="true" inline>inventory_2</mat-icon> Archived</span>
+                  <span class="tag"
+                    ><mat-icon aria-hidden="true" inline>inventory_2</mat-icon> {{ 'library.common.archived' | translate }}</span
+                  >
                 }
               </th>
               <td>{{ system.layerCount }}</td>
-              <td>{{ waitText(system.totalWaitHours) }}</td>
+              <td>{{ waitText(system.totalWaitHours).key | translate: waitText(system.totalWaitHours).params }}</td>
               <td>{{ productNames(system) }}</td>
               @if (canEdit()) {
                 <td class="actions">
@@ -65,9 +71,9 @@ import { LIBRARY_URLS, LibraryApi, archivedParam } from './library-api';
                     type="button"
                     (click)="duplicate(system)"
                     [disabled]="isBusy() || !isHydrated()"
-                    [attr.aria-label]="'Copy ' + system.name"
+                    [attr.aria-label]="'library.systemList.copyNamed' | translate: { name: system.name }"
                   >
-                    Copy
+                    {{ 'library.systemList.copy' | translate }}
                   </button>
                 </td>
               }
@@ -76,7 +82,10 @@ import { LIBRARY_URLS, LibraryApi, archivedParam } from './library-api';
             @if (!isLoading()) {
               <tr>
                 <td [attr.colspan]="canEdit() ? 5 : 4" class="none">
-                  No finish systems yet.{{ canEdit() ? ' Add the products first, then build the layers.' : '' }}
+                  {{ 'library.systemList.empty' | translate }}
+                  @if (canEdit()) {
+                    {{ 'library.systemList.emptyHint' | translate }}
+                  }
                 </td>
               </tr>
             }
@@ -92,6 +101,7 @@ export class SystemList {
   private readonly api = inject(LibraryApi);
   private readonly router = inject(Router);
   private readonly session = inject(Session);
+  private readonly language = inject(Language);
 
   protected readonly canEdit = computed(() => this.session.hasRole('office') && !!this.session.user());
   protected readonly isHydrated = hydratedSignal();
@@ -108,7 +118,7 @@ export class SystemList {
   private readonly actionMessage = signal<string | null>(null);
   private readonly loadFailure = loadMessage(this.list);
   protected readonly message = computed(() => this.actionMessage() ?? this.loadFailure());
-  protected readonly waitText = waitText;
+  protected readonly waitText = (hours: number) => waitWords(hours, this.language.locale());
 
   protected productNames(system: FinishSystemSummary): string {
     return system.usesProducts.map((p) => p.name).join(', ');

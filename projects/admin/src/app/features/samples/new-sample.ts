@@ -9,6 +9,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import {
   SAMPLE_LABEL_MAX,
   SAMPLE_NOTES_MAX,
@@ -26,7 +27,7 @@ import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
-import { finishChoiceText } from './finish-words';
+import { finishChoiceWords } from './finish-words';
 import { FINISH_SYSTEMS_URL, SampleApi } from './sample-api';
 
 /** A new board: whose it is (client, optional site), which finish it shows, a label and notes. */
@@ -41,79 +42,81 @@ import { FINISH_SYSTEMS_URL, SampleApi } from './sample-api';
     MatSelectModule,
     ReactiveFormsModule,
     RouterLink,
+    TranslatePipe,
   ],
   template: `
     <section class="lb-page">
-      <p><a routerLink="/samples">Back to sample boards</a></p>
-      <h1>New sample board</h1>
-      <p class="lb-lead">
-        The finish is copied onto the board as it is in your library today, so the record stays true if the library changes.
+      <p>
+        <a routerLink="/samples">{{ 'samples.common.back' | translate }}</a>
       </p>
+      <h1>{{ 'samples.newBoard.title' | translate }}</h1>
+      <p class="lb-lead">{{ 'samples.newBoard.lead' | translate }}</p>
 
       <form [formGroup]="form" (ngSubmit)="save()" novalidate>
         <fieldset class="lb-gate" [disabled]="!isHydrated()">
           <mat-form-field>
-            <mat-label>Client</mat-label>
+            <mat-label>{{ 'samples.newBoard.client' | translate }}</mat-label>
             <input matInput type="search" [formControl]="clientSearch" [matAutocomplete]="clients" autocomplete="off" maxlength="100" />
             <mat-autocomplete #clients="matAutocomplete" (optionSelected)="chooseClient($event)">
               @for (c of clientOptions(); track c.id) {
                 <mat-option [value]="c">{{ c.name }}</mat-option>
               }
             </mat-autocomplete>
-            <mat-hint>Type a name, e-mail or phone, then choose</mat-hint>
+            <mat-hint>{{ 'samples.newBoard.clientHint' | translate }}</mat-hint>
           </mat-form-field>
           @if (form.controls.clientId.invalid && form.controls.clientId.touched) {
-            <p class="field-error" role="alert">{{ fieldError('clientId') }}</p>
+            <p class="field-error" role="alert">{{ fieldError('clientId') | translate }}</p>
           }
 
           <mat-form-field>
-            <mat-label>Site</mat-label>
+            <mat-label>{{ 'samples.newBoard.site' | translate }}</mat-label>
             <mat-select formControlName="siteId">
-              <mat-option [value]="''">No particular site</mat-option>
+              <mat-option [value]="''">{{ 'samples.newBoard.noSite' | translate }}</mat-option>
               @for (s of sites(); track s.id) {
                 <mat-option [value]="s.id">{{ siteWords(s) }}</mat-option>
               }
             </mat-select>
             @if (form.controls.siteId.invalid) {
-              <mat-error>{{ fieldError('siteId') }}</mat-error>
+              <mat-error>{{ fieldError('siteId') | translate }}</mat-error>
             }
           </mat-form-field>
 
           <mat-form-field>
-            <mat-label>Finish system</mat-label>
+            <mat-label>{{ 'samples.newBoard.finish' | translate }}</mat-label>
             <mat-select formControlName="finishSystemId">
-              <mat-option [value]="''">Not chosen yet</mat-option>
+              <mat-option [value]="''">{{ 'samples.newBoard.notChosen' | translate }}</mat-option>
               @for (f of systems(); track f.id) {
-                <mat-option [value]="f.id">{{ finishChoiceText(f.name, f.layerCount) }}</mat-option>
+                @let choice = finishChoice(f.name, f.layerCount);
+                <mat-option [value]="f.id">{{ choice.key | translate: choice.params }}</mat-option>
               }
             </mat-select>
             @if (form.controls.finishSystemId.invalid) {
-              <mat-error>{{ fieldError('finishSystemId') }}</mat-error>
+              <mat-error>{{ fieldError('finishSystemId') | translate }}</mat-error>
             }
           </mat-form-field>
 
           <mat-form-field>
-            <mat-label>Label</mat-label>
+            <mat-label>{{ 'samples.newBoard.label' | translate }}</mat-label>
             <input matInput formControlName="label" [maxlength]="labelMax" />
-            <mat-hint>Written on the back of the board, like "Stair hall, board A"</mat-hint>
+            <mat-hint>{{ 'samples.newBoard.labelHint' | translate }}</mat-hint>
             @if (form.controls.label.invalid) {
-              <mat-error>{{ fieldError('label') }}</mat-error>
+              <mat-error>{{ fieldError('label') | translate }}</mat-error>
             }
           </mat-form-field>
 
           <mat-form-field>
-            <mat-label>Notes</mat-label>
+            <mat-label>{{ 'samples.newBoard.notes' | translate }}</mat-label>
             <textarea matInput formControlName="notes" rows="4" [maxlength]="notesMax"></textarea>
-            <mat-hint>Product lots, tint formulas, tools — what the crew need to make it again</mat-hint>
+            <mat-hint>{{ 'samples.newBoard.notesHint' | translate }}</mat-hint>
             @if (form.controls.notes.invalid) {
-              <mat-error>{{ fieldError('notes') }}</mat-error>
+              <mat-error>{{ fieldError('notes') | translate }}</mat-error>
             }
           </mat-form-field>
 
           <lb-form-alert [message]="message()" />
           <div class="actions">
-            <button mat-flat-button type="submit" [disabled]="isSaving()">Make the board</button>
-            <a mat-button routerLink="/samples">Cancel</a>
+            <button mat-flat-button type="submit" [disabled]="isSaving()">{{ 'samples.newBoard.make' | translate }}</button>
+            <a mat-button routerLink="/samples">{{ 'samples.newBoard.cancel' | translate }}</a>
           </div>
         </fieldset>
       </form>
@@ -145,10 +148,11 @@ export class NewSample {
   private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
   private readonly destroyRef = inject(DestroyRef);
+  private readonly translate = inject(TranslateService);
 
   protected readonly isHydrated = hydratedSignal();
   protected readonly siteWords = siteLine;
-  protected readonly finishChoiceText = finishChoiceText;
+  protected readonly finishChoice = finishChoiceWords;
   protected readonly clientOptions = signal<readonly ClientSummary[]>([]);
   /** the client chosen from the search, whose sites the form offers */
   private readonly chosenClientId = signal<string | null>(null);
@@ -199,8 +203,8 @@ export class NewSample {
 
   protected fieldError(name: keyof typeof this.form.controls): string {
     return errorText(this.form.controls[name], {
-      required: name === 'clientId' ? 'Choose the client from the list.' : 'Give the board a label, like "Stair hall, board A".',
-      maxlength: 'This is too long.',
+      required: name === 'clientId' ? 'samples.newBoard.clientRequired' : 'samples.newBoard.labelRequired',
+      maxlength: 'samples.newBoard.tooLong',
     });
   }
 
@@ -225,7 +229,13 @@ export class NewSample {
         ...(v.siteId ? { siteId: v.siteId } : {}),
         ...(v.finishSystemId ? { finishSystemId: v.finishSystemId } : {}),
       });
-      this.snackBar.open(`${board.label} added.`, 'Close', { duration: 4000 });
+      this.snackBar.open(
+        this.translate.instant('samples.newBoard.added', { label: board.label }) as string,
+        this.translate.instant('samples.common.close') as string,
+        {
+          duration: 4000,
+        },
+      );
       await this.router.navigate(['/samples', board.id]);
     } catch (error) {
       this.message.set(applyProblem(this.form, toProblem(error)));

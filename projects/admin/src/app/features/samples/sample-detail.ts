@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject, input, linkedSignal, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
@@ -7,55 +6,66 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { SampleBoardView } from '@layerbook/contracts/types';
-import { crewLayerNote } from '@layerbook/domain';
 import { firstValueFrom } from 'rxjs';
+import { LbDatePipe } from '../../../../../shared/i18n/format';
+import { Language } from '../../../../../shared/i18n/language';
 import { PhotoGallery, type GalleryPhoto } from '../../../../../shared/photos/photo-gallery';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
 import { ConfirmDialog, type ConfirmDialogData } from '../../shared/ui/confirm-dialog';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { BOARD_PHOTO_BASE, SampleApi, boardPhotosUrl, boardUrl } from './sample-api';
+import { layerNote } from './layer-note';
 import { STATUS_WORDS } from './status-words';
 
 /** One board: its finish as made (layers in order), photos, and where it stands with the client. */
 @Component({
   selector: 'lb-sample-detail',
-  imports: [DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, PhotoGallery, RouterLink],
+  imports: [FormAlert, LbDatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, PhotoGallery, RouterLink, TranslatePipe],
   template: `
     <section class="lb-page">
-      <p><a routerLink="/samples">Back to sample boards</a></p>
+      <p>
+        <a routerLink="/samples">{{ 'samples.common.back' | translate }}</a>
+      </p>
       @if (board(); as b) {
         <h1>{{ b.label }}</h1>
         <p class="status">
           <mat-icon aria-hidden="true">{{ words[b.status].icon }}</mat-icon>
-          <span>{{ words[b.status].text }}</span>
+          <span>{{ words[b.status].key | translate }}</span>
           <span aria-hidden="true">·</span>
-          <span>Round {{ b.round }}</span>
+          <span>{{ 'samples.detail.round' | translate: { round: b.round } }}</span>
         </p>
         <dl class="facts">
-          <dt>Client</dt>
+          <dt>{{ 'samples.detail.client' | translate }}</dt>
           <dd>{{ b.clientName }}</dd>
           @if (b.siteAddress) {
-            <dt>Site</dt>
+            <dt>{{ 'samples.detail.site' | translate }}</dt>
             <dd>{{ b.siteAddress }}</dd>
           }
-          <dt>Made</dt>
-          <dd>{{ b.createdAt | date: 'mediumDate' }}</dd>
+          <dt>{{ 'samples.detail.made' | translate }}</dt>
+          <dd>{{ b.createdAt | lbDate: 'medium' : null }}</dd>
         </dl>
 
         @if (b.status === 'approved') {
           <p class="decision" role="status">
             <mat-icon aria-hidden="true">verified</mat-icon>
-            Approved by {{ b.decidedByName ?? 'the client' }} on {{ b.decidedAt | date: 'medium' }}. This board is the control sample for
-            the work.
+            {{
+              'samples.detail.approvedBy'
+                | translate: { name: b.decidedByName ?? ('samples.detail.theClient' | translate), date: (b.decidedAt | lbDate: 'medium') }
+            }}
           </p>
         }
         @if (b.status === 'changes_requested') {
           <div class="decision" role="status">
             <p>
-              <mat-icon aria-hidden="true">edit_note</mat-icon> {{ b.decidedByName ?? 'The client' }} asked for changes on
-              {{ b.decidedAt | date: 'medium' }}:
+              <mat-icon aria-hidden="true">edit_note</mat-icon>
+              {{
+                'samples.detail.changesAsked'
+                  | translate
+                    : { name: b.decidedByName ?? ('samples.detail.theClientStart' | translate), date: (b.decidedAt | lbDate: 'medium') }
+              }}
             </p>
             <blockquote>{{ b.clientComment }}</blockquote>
           </div>
@@ -66,22 +76,22 @@ import { STATUS_WORDS } from './status-words';
           <div class="actions">
             @if (b.status === 'draft') {
               <button mat-flat-button type="button" [disabled]="isBusy()" (click)="showToClient()">
-                <mat-icon aria-hidden="true">send</mat-icon>Show to the client
+                <mat-icon aria-hidden="true">send</mat-icon>{{ 'samples.detail.showToClient' | translate }}
               </button>
             }
             @if (b.status === 'changes_requested' && !b.hasNextRound) {
               <button mat-flat-button type="button" [disabled]="isBusy()" (click)="startNextRound()">
-                <mat-icon aria-hidden="true">replay</mat-icon>Start the next round
+                <mat-icon aria-hidden="true">replay</mat-icon>{{ 'samples.detail.startNextRound' | translate }}
               </button>
             }
           </div>
         }
         @if (b.status === 'shown') {
-          <p class="muted">The client can see this board in their portal and will approve it or ask for changes.</p>
+          <p class="muted">{{ 'samples.detail.withClientNote' | translate }}</p>
         }
 
         <section aria-labelledby="finish-heading">
-          <h2 id="finish-heading">The finish</h2>
+          <h2 id="finish-heading">{{ 'samples.detail.finish' | translate }}</h2>
           @if (b.finish; as finish) {
             <p>
               <strong>{{ finish.systemName }}</strong>
@@ -89,8 +99,8 @@ import { STATUS_WORDS } from './status-words';
                 — {{ finish.description }}
               }
             </p>
-            <p class="muted">As it was in the library on {{ finish.takenAt | date: 'mediumDate' }}.</p>
-            <ol class="layers" aria-label="Layers, in the order they go on">
+            <p class="muted">{{ 'samples.detail.takenAt' | translate: { date: (finish.takenAt | lbDate: 'medium' : null) } }}</p>
+            <ol class="layers" [attr.aria-label]="'samples.detail.layers' | translate">
               @for (layer of finish.layers; track layer.position) {
                 <li>
                   <strong>{{ layer.name }}</strong>
@@ -99,13 +109,13 @@ import { STATUS_WORDS } from './status-words';
               }
             </ol>
           } @else {
-            <p class="muted">No finish system was chosen for this board.</p>
+            <p class="muted">{{ 'samples.detail.noFinish' | translate }}</p>
           }
         </section>
 
         @if (b.notes) {
           <section aria-labelledby="notes-heading">
-            <h2 id="notes-heading">Notes</h2>
+            <h2 id="notes-heading">{{ 'samples.detail.notes' | translate }}</h2>
             <p class="notes">{{ b.notes }}</p>
           </section>
         }
@@ -115,10 +125,10 @@ import { STATUS_WORDS } from './status-words';
           [(photos)]="photos"
           [uploadUrl]="b.status === 'approved' ? null : photosUrl(b.id)"
           [deleteBase]="canWrite() && b.status !== 'approved' ? photoBase : null"
-          emptyText="No photos yet. Photograph the board in the room's own light if you can."
+          emptyText="samples.detail.noPhotos"
         />
       } @else if (isLoading()) {
-        <mat-progress-bar mode="indeterminate" aria-label="Loading the sample board" />
+        <mat-progress-bar mode="indeterminate" [attr.aria-label]="'samples.detail.loading' | translate" />
       } @else {
         <lb-form-alert [message]="loadMessage()" />
       }
@@ -179,6 +189,8 @@ export class SampleDetail {
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly session = inject(Session);
+  private readonly translate = inject(TranslateService);
+  private readonly language = inject(Language);
 
   /** from the route (withComponentInputBinding) */
   readonly id = input.required<string>();
@@ -188,7 +200,10 @@ export class SampleDetail {
   protected readonly words = STATUS_WORDS;
   protected readonly photoBase = BOARD_PHOTO_BASE;
   protected readonly photosUrl = boardPhotosUrl;
-  protected readonly layerNote = crewLayerNote;
+  protected readonly layerNote = (layer: Parameters<typeof layerNote>[0]) => {
+    this.language.current(); // the note follows a language switch
+    return layerNote(layer, (key, params) => this.say(key, params));
+  };
   protected readonly board = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
   /** the gallery adds and removes photos without reloading the board */
   protected readonly photos = linkedSignal<readonly GalleryPhoto[]>(() => this.board()?.photos ?? []);
@@ -196,7 +211,7 @@ export class SampleDetail {
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return toProblem(error).status === 404 ? 'This sample board does not exist, or is not one of yours.' : describe(error);
+    return toProblem(error).status === 404 ? this.say('samples.detail.notFound') : describe(error);
   });
   protected readonly isBusy = signal(false);
   protected readonly actionMessage = signal<string | null>(null);
@@ -206,15 +221,15 @@ export class SampleDetail {
     const b = this.board();
     if (!b) return;
     const ok = await this.confirm({
-      title: `Show "${b.label}" to ${b.clientName}?`,
-      message: 'They will see it in their portal and get an e-mail, and the finish on this board will no longer change.',
-      confirmLabel: 'Show to the client',
+      title: this.say('samples.detail.confirmShowTitle', { label: b.label, client: b.clientName }),
+      message: this.say('samples.detail.confirmShowMessage'),
+      confirmLabel: this.say('samples.detail.showToClient'),
     });
     if (!ok) return;
     const shown = await this.act(() => this.api.show(b.id));
     if (shown) {
       this.loaded.set(shown);
-      this.snackBar.open('The client can now see this board.', 'Close', { duration: 4000 });
+      this.snackBar.open(this.say('samples.detail.shownNote'), this.say('samples.common.close'), { duration: 4000 });
     }
   }
 
@@ -223,7 +238,9 @@ export class SampleDetail {
     if (!b) return;
     const next = await this.act(() => this.api.startNextRound(b.id));
     if (next) {
-      this.snackBar.open(`Round ${next.round} started.`, 'Close', { duration: 4000 });
+      this.snackBar.open(this.say('samples.detail.roundStarted', { round: next.round }), this.say('samples.common.close'), {
+        duration: 4000,
+      });
       await this.router.navigate(['/samples', next.id]);
     }
   }
@@ -240,6 +257,11 @@ export class SampleDetail {
     } finally {
       this.isBusy.set(false);
     }
+  }
+
+  /** Words made here (dialog, snack bar, notes) in the current language. */
+  private say(key: string, params?: Record<string, unknown>): string {
+    return this.translate.instant(key, params) as string;
   }
 
   private confirm(data: ConfirmDialogData): Promise<boolean | undefined> {

@@ -1,11 +1,12 @@
-import { DatePipe } from '@angular/common';
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { ItemList, SampleBoardListItem } from '@layerbook/contracts/types';
+import { LbDatePipe } from '../../../../../shared/i18n/format';
 import { Session } from '../../core/auth/session';
 import { problemMessage } from '../../core/errors/problem';
 import { FormAlert } from '../../shared/ui/form-alert';
@@ -15,35 +16,37 @@ import { STATUS_WORDS } from './status-words';
 /** Every sample board of the firm, newest first, with its status in words and a first photo. */
 @Component({
   selector: 'lb-sample-list',
-  imports: [DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [FormAlert, LbDatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, TranslatePipe],
   template: `
     <section class="lb-page">
       <div class="heading">
-        <h1>Sample boards</h1>
+        <h1>{{ 'samples.list.title' | translate }}</h1>
         @if (canWrite()) {
           <a mat-flat-button routerLink="/samples/new">
             <mat-icon aria-hidden="true">add</mat-icon>
-            New sample board
+            {{ 'samples.list.new' | translate }}
           </a>
         }
       </div>
-      <p class="lb-lead">Boards made for clients to approve. The approved board is the control sample the crew match on site.</p>
+      <p class="lb-lead">{{ 'samples.list.lead' | translate }}</p>
 
       <lb-form-alert [message]="message()" />
       @if (isLoading()) {
-        <mat-progress-bar mode="indeterminate" aria-label="Loading sample boards" />
+        <mat-progress-bar mode="indeterminate" [attr.aria-label]="'samples.list.loading' | translate" />
       }
 
-      <div class="table-wrap" tabindex="0" role="region" aria-label="Sample boards">
-        <table aria-label="Sample boards">
+      <div class="table-wrap" tabindex="0" role="region" [attr.aria-label]="'samples.list.table' | translate">
+        <table [attr.aria-label]="'samples.list.table' | translate">
           <thead>
             <tr>
-              <th scope="col"><span class="cdk-visually-hidden">Photo</span></th>
-              <th scope="col">Label</th>
-              <th scope="col">Client</th>
-              <th scope="col">Round</th>
-              <th scope="col">Status</th>
-              <th scope="col">Made</th>
+              <th scope="col">
+                <span class="cdk-visually-hidden">{{ 'samples.list.photo' | translate }}</span>
+              </th>
+              <th scope="col">{{ 'samples.list.label' | translate }}</th>
+              <th scope="col">{{ 'samples.list.client' | translate }}</th>
+              <th scope="col">{{ 'samples.list.round' | translate }}</th>
+              <th scope="col">{{ 'samples.list.status' | translate }}</th>
+              <th scope="col">{{ 'samples.list.made' | translate }}</th>
             </tr>
           </thead>
           <tbody>
@@ -53,7 +56,7 @@ import { STATUS_WORDS } from './status-words';
                   @if (board.coverThumbnailUrl) {
                     <img
                       [src]="board.coverThumbnailUrl"
-                      [alt]="'Photo of ' + board.label"
+                      [alt]="'samples.list.photoOf' | translate: { label: board.label }"
                       width="64"
                       height="48"
                       loading="lazy"
@@ -71,15 +74,15 @@ import { STATUS_WORDS } from './status-words';
                 <td>
                   <span class="status">
                     <mat-icon aria-hidden="true">{{ words[board.status].icon }}</mat-icon>
-                    {{ words[board.status].text }}
+                    {{ words[board.status].key | translate }}
                   </span>
                 </td>
-                <td>{{ board.createdAt | date: 'mediumDate' }}</td>
+                <td>{{ board.createdAt | lbDate: 'medium' : null }}</td>
               </tr>
             } @empty {
               @if (!isLoading()) {
                 <tr>
-                  <td colspan="6" class="none">No sample boards yet.</td>
+                  <td colspan="6" class="none">{{ 'samples.list.empty' | translate }}</td>
                 </tr>
               }
             }

@@ -4,9 +4,9 @@ export default [
   {
     path: '',
     pathMatch: 'full',
-    title: 'Sample boards · Layerbook',
+    title: 'samples.titles.list',
     loadComponent: () => import('./sample-list').then((m) => m.SampleList),
   },
-  { path: 'new', title: 'New sample board · Layerbook', loadComponent: () => import('./new-sample').then((m) => m.NewSample) },
-  { path: ':id', title: 'Sample board · Layerbook', loadComponent: () => import('./sample-detail').then((m) => m.SampleDetail) },
+  { path: 'new', title: 'samples.titles.new', loadComponent: () => import('./new-sample').then((m) => m.NewSample) },
+  { path: ':id', title: 'samples.titles.board', loadComponent: () => import('./sample-detail').then((m) => m.SampleDetail) },
 ] satisfies Routes;
