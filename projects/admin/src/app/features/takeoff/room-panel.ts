@@ -73,12 +73,11 @@ export class RoomPanel implements OnInit {
     const room = this.room();
     const n = room.surfaces.length;
     const ok = await this.confirm({
-      title: this.words('takeoff.roomPanel.deleteTitle', { name: room.name }),
-      message: this.words(
+      title: 'takeoff.roomPanel.deleteTitle',
+      message:
         n === 0 ? 'takeoff.roomPanel.deleteRoomEmpty' : n === 1 ? 'takeoff.roomPanel.deleteRoomOne' : 'takeoff.roomPanel.deleteRoomMany',
-        { count: n },
-      ),
-      confirmLabel: this.words('takeoff.roomPanel.deleteRoom'),
+      confirmLabel: 'takeoff.roomPanel.deleteRoom',
+      params: { name: room.name, count: n },
     });
     if (ok) await this.run(() => this.api.deleteRoom(room.id), this.words('takeoff.roomPanel.deleted', { name: room.name }));
   }
@@ -93,9 +92,10 @@ export class RoomPanel implements OnInit {
 
   protected async deleteSurface(surface: SurfaceView): Promise<void> {
     const ok = await this.confirm({
-      title: this.words('takeoff.roomPanel.deleteTitle', { name: surface.name }),
-      message: this.words('takeoff.roomPanel.deleteSurfaceMessage'),
-      confirmLabel: this.words('takeoff.roomPanel.deleteSurfaceConfirm'),
+      title: 'takeoff.roomPanel.deleteTitle',
+      message: 'takeoff.roomPanel.deleteSurfaceMessage',
+      confirmLabel: 'takeoff.roomPanel.deleteSurfaceConfirm',
+      params: { name: surface.name },
     });
     if (ok) await this.run(() => this.api.deleteSurface(surface.id), this.words('takeoff.roomPanel.deleted', { name: surface.name }));
   }
