@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
+import today from '../../../i18n/today/en.json';
 import { overdueWords, receivedWords } from './money-words';
+
+/** The English words for a today.* key, with its params filled in. */
+function english(key: string, params: Readonly<Record<string, unknown>> = {}): string {
+  const [, group, name] = key.split('.');
+  const text = (today as Record<string, Record<string, string>>)[group][name];
+  return text.replace(/\{\{(\w+)\}\}/g, (_, param: string) => String(params[param]));
+}
 
 describe('overdueWords', () => {
   it.each([
@@ -13,7 +21,8 @@ describe('overdueWords', () => {
     [null, '2026-12-02', null],
     ['2026-12-01', null, null],
   ])('due %s, today %s: %s', (dueOn, today, expected) => {
-    expect(overdueWords(dueOn, today)).toBe(expected);
+    const words = overdueWords(dueOn, today);
+    expect(words ? english(words.key, words.params) : null).toBe(expected);
   });
 });
 

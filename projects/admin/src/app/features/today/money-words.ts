@@ -1,14 +1,20 @@
 import { daysBetween } from '@layerbook/contracts/engine';
 
+/** Words to translate: a key and its params. */
+export interface Words {
+  readonly key: string;
+  readonly params?: Readonly<Record<string, unknown>>;
+}
+
 /**
- * How late an invoice is, in words, counted in calendar days from its due date to the firm's
+ * How late an invoice is, as words, counted in calendar days from its due date to the firm's
  * today ("1 day overdue", "12 days overdue"); null when either day is missing or not past due.
  */
-export function overdueWords(dueOn: string | null, today: string | null): string | null {
+export function overdueWords(dueOn: string | null, today: string | null): Words | null {
   if (!dueOn || !today) return null;
   const days = daysBetween(dueOn, today);
   if (days <= 0) return null;
-  return days === 1 ? '1 day overdue' : `${days} days overdue`;
+  return days === 1 ? { key: 'today.money.dayOverdue' } : { key: 'today.money.daysOverdue', params: { count: days } };
 }
 
 /** A payment's day said against the firm's today: "today", "yesterday", or null for any other day (then shown as a date). */

@@ -1,12 +1,14 @@
-import { DatePipe } from '@angular/common';
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { INVOICE_KIND_LABELS, PAYMENT_METHOD_LABELS, type BillingToday } from '@layerbook/contracts/types';
+import { type BillingToday } from '@layerbook/contracts/types';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import { Language } from '../../../../../shared/i18n/language';
+import { LbDatePipe } from '../../../../../shared/i18n/format';
 import { loadMessage } from '../../shared/forms/load-message';
-import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
+import { CalendarDatePipe, formatCalendarDate } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { overdueWords, receivedWords } from './money-words';
@@ -18,7 +20,7 @@ import { overdueWords, receivedWords } from './money-words';
  */
 @Component({
   selector: 'lb-today-money',
-  imports: [CalendarDatePipe, DatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
+  imports: [CalendarDatePipe, FormAlert, LbDatePipe, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink, TranslatePipe],
   templateUrl: './today-money.html',
   styleUrl: './today-money.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -30,8 +32,13 @@ export class TodayMoney {
   protected readonly money = httpResource<BillingToday>(() => '/api/billing/today');
   protected readonly view = computed(() => (this.money.hasValue() ? this.money.value() : null));
   protected readonly message = loadMessage(this.money);
-  protected readonly kindLabels = INVOICE_KIND_LABELS;
   protected readonly overdueWords = overdueWords;
-  protected readonly receivedWords = receivedWords;
-  protected readonly methodLabels = PAYMENT_METHOD_LABELS;
+  private readonly translate = inject(TranslateService);
+  private readonly language = inject(Language);
+
+  /** "today", "yesterday" or the date, in the reader's language. */
+  protected receivedWhen(receivedOn: string): string {
+    const word = receivedWords(receivedOn, this.localDate());
+    return word ? (this.translate.instant(`today.money.${word}`) as string) : formatCalendarDate(receivedOn, this.language.locale());
+  }
 }

@@ -7,6 +7,10 @@ import type { BillingToday, InvoiceSummary, StaffRole, TodayView } from '@layerb
 import { afterEach, describe, expect, it } from 'vitest';
 import { Session } from '../../core/auth/session';
 import { Today } from './today';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import today from '../../../i18n/today/en.json';
+import billing from '../../../i18n/billing/en.json';
+import payments from '../../../i18n/payments/en.json';
 
 const overdueInvoice: InvoiceSummary = {
   id: 'inv-1',
@@ -69,6 +73,7 @@ function render(role: StaffRole): { text: () => string; html: () => HTMLElement;
       provideHttpClient(),
       provideHttpClientTesting(),
       provideRouter([]),
+      provideTestI18n({ today, billing, payments }),
       { provide: Session, useValue: { hasRole: (needed: StaffRole) => needed === 'crew' || role !== 'crew' } },
     ],
   });

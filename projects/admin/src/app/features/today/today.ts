@@ -11,11 +11,12 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { LIKELY_WORK_WORDS } from '../inquiries/stage-odds';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { TodayMoney } from './today-money';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** What needs the office today: follow-ups that are late or due, where the pipeline stands, and the money to bill and collect. */
 @Component({
   selector: 'lb-today',
-  imports: [CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink, TodayMoney],
+  imports: [CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink, TodayMoney, TranslatePipe],
   templateUrl: './today.html',
   styleUrl: './today.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
