@@ -1,14 +1,5 @@
 import type { SheetCaution, SheetProduct } from '@layerbook/contracts/types';
 
-/** The keys the engine puts beside a caution's English words (read when the contract carries them). */
-interface CautionKeys {
-  readonly titleKey?: string;
-  readonly ruleKey?: string;
-  readonly lines?: ReadonlyArray<{ readonly key: string; readonly params: Readonly<Record<string, string>> }>;
-  readonly jurisdictionKeys?: readonly string[];
-  readonly standingKey?: string;
-}
-
 /** One sentence to show: its key in the shared `cautions` words (null: none) and the English as sent. */
 export interface CautionText {
   readonly key: string | null;
@@ -26,7 +17,7 @@ export interface CautionView {
   readonly standing: CautionText;
 }
 
-const words = (key: string | undefined, english: string, params: Readonly<Record<string, string>> = {}): CautionText => ({
+const words = (key: string | null | undefined, english: string, params: Readonly<Record<string, string>> = {}): CautionText => ({
   key: key ? `cautions.${key}` : null,
   params,
   english,
@@ -44,16 +35,14 @@ function sentencesOf(english: string, keys: readonly string[]): CautionText[] {
  * English as sent to fall back on. Nothing is dropped: a bullet without a key shows as written.
  */
 export function cautionView(caution: SheetCaution): CautionView {
-  const keyed = caution as SheetCaution & CautionKeys;
-  const lines = keyed.lines && keyed.lines.length === caution.bullets.length ? keyed.lines : null;
-  const jurisdictionKeys = keyed.jurisdictionKeys ?? [];
+  const lines = caution.lines.length === caution.bullets.length ? caution.lines : null;
   return {
     id: caution.id,
-    title: words(keyed.titleKey, caution.title),
-    rule: words(keyed.ruleKey, caution.rule),
+    title: words(caution.titleKey, caution.title),
+    rule: words(caution.ruleKey, caution.rule),
     bullets: caution.bullets.map((bullet, i) => words(lines?.[i]?.key, bullet, lines?.[i]?.params)),
-    jurisdiction: sentencesOf(caution.jurisdiction, jurisdictionKeys),
-    standing: words(keyed.standingKey, caution.standing),
+    jurisdiction: sentencesOf(caution.jurisdiction, caution.jurisdictionKeys),
+    standing: words(caution.standingKey, caution.standing),
   };
 }
 

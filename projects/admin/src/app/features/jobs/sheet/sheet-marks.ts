@@ -5,11 +5,14 @@ import { firstValueFrom } from 'rxjs';
 
 export type LayerMarkKind = 'layerDone' | 'layerReopened';
 
-/** A mark the phone holds until it reaches the server. */
+/** A mark the phone holds until the server counts it; `refused` ones stay (with the server's words) until dismissed. */
 export interface PendingMark {
+  readonly clientKey: string;
   readonly workItemId: string;
   readonly kind: LayerMarkKind;
   readonly on: string;
+  readonly state: 'waiting' | 'refused';
+  readonly problem?: string;
 }
 
 /**
@@ -20,6 +23,8 @@ export interface SheetMarks {
   /** resolves once the mark is sent or safely kept on the phone */
   mark(jobId: string, workItemId: string, kind: LayerMarkKind, on: string): Promise<void>;
   pending(jobId: string): Signal<readonly PendingMark[]>;
+  /** forgets a refused mark once read */
+  dismiss(clientKey: string): void;
   readonly online: Signal<boolean>;
 }
 
@@ -38,6 +43,10 @@ export class DirectMarks implements SheetMarks {
 
   pending(): Signal<readonly PendingMark[]> {
     return this.none.asReadonly();
+  }
+
+  dismiss(): void {
+    // Nothing is kept: a refused mark was reported when it was made.
   }
 }
 

@@ -1,3 +1,4 @@
+import { HttpErrorResponse } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -7,7 +8,14 @@ import { Language } from '../../../../../../shared/i18n/language';
 import { problemMessage } from '../../../core/errors/problem';
 import { FormAlert } from '../../../shared/ui/form-alert';
 import { formatDay, formatNumber, surfaceSizes, todayIn } from './sheet-format';
-import { type LayerMarkKind, SHEET_MARKS } from './sheet-marks';
+import { type LayerMarkKind, type PendingMark, SHEET_MARKS } from './sheet-marks';
+
+/** The server's words for a refused mark, or why the phone could not keep it. */
+function markProblem(error: unknown): string {
+  if (error instanceof HttpErrorResponse) return problemMessage(error);
+  if (typeof error === 'object' && error !== null && 'problem' in error && typeof error.problem === 'string') return error.problem;
+  return error instanceof Error && error.message ? error.message : problemMessage(error);
+}
 
 /**
  * Rooms → surfaces with their measured sizes in the firm's units, and each layer on the surface
@@ -62,7 +70,8 @@ import { type LayerMarkKind, SHEET_MARKS } from './sheet-marks';
             <ol class="layers">
               @for (layer of surface.layers; track layer.layerId) {
                 @let label = layer.name + ', ' + room.name + ' · ' + surface.name;
-                @let waiting = pendingFor(layer.workItemId);
+                @let waiting = waitingFor(layer.workItemId);
+                @let refused = refusedFor(layer.workItemId);
                 @let done = doneOn(layer);
                 <li>
                   <span class="layer">
@@ -79,6 +88,14 @@ import { type LayerMarkKind, SHEET_MARKS } from './sheet-marks';
                       @if (waiting) {
                         <span class="small pending" role="status">
                           <mat-icon aria-hidden="true">cloud_off</mat-icon>{{ 'sheet.work.pending' | translate }}
+                        </span>
+                      }
+                      @for (r of refused; track r.clientKey) {
+                        <span class="small refused" role="alert">
+                          {{ 'sheet.work.refused' | translate: { reason: r.problem ?? '' } }}
+                          <button mat-button type="button" class="dismiss" (click)="marks.dismiss(r.clientKey)">
+                            {{ 'sheet.work.dismiss' | translate }}
+                          </button>
                         </span>
                       }
                     </span>
@@ -190,6 +207,12 @@ import { type LayerMarkKind, SHEET_MARKS } from './sheet-marks';
       gap: 0.25rem;
       color: var(--mat-sys-tertiary);
     }
+    .refused {
+      color: var(--mat-sys-error);
+    }
+    .refused .dismiss {
+      min-height: 32px;
+    }
     .pending mat-icon {
       width: 16px;
       height: 16px;
@@ -208,7 +231,7 @@ import { type LayerMarkKind, SHEET_MARKS } from './sheet-marks';
 export class SheetWork {
   private readonly language = inject(Language);
   private readonly translate = inject(TranslateService);
-  private readonly marks = inject(SHEET_MARKS);
+  protected readonly marks = inject(SHEET_MARKS);
 
   readonly sheet = input.required<JobSheet>();
   /** a mark was sent or kept: the page reads the sheet again */
@@ -218,6 +241,7 @@ export class SheetWork {
   protected readonly sending = signal<string | null>(null);
   protected readonly message = signal<string | null>(null);
   private readonly pending = computed(() => this.marks.pending(this.sheet().id)());
+  private readonly waiting = computed(() => this.pending().filter((p) => p.state === 'waiting'));
 
   protected sizes(surface: SheetSurface) {
     return surfaceSizes(surface, this.sheet().lengthUnit, this.sheet().units);
@@ -227,13 +251,17 @@ export class SheetWork {
     return surface.layers.filter((l) => this.doneOn(l) !== null).length;
   }
 
-  protected pendingFor(workItemId: string | null): boolean {
-    return workItemId !== null && this.pending().some((p) => p.workItemId === workItemId);
+  protected waitingFor(workItemId: string | null): boolean {
+    return this.waiting().some((p) => p.workItemId === workItemId);
   }
 
-  /** the layer's done date as the crew last marked it: a mark still on the phone counts already */
+  protected refusedFor(workItemId: string | null): readonly PendingMark[] {
+    return this.pending().filter((p) => p.state === 'refused' && p.workItemId === workItemId);
+  }
+
+  /** the layer's done date as the crew last marked it: a mark still waiting on the phone counts already */
   protected doneOn(layer: SheetSurfaceLayer): string | null {
-    const last = this.pending()
+    const last = this.waiting()
       .filter((p) => p.workItemId === layer.workItemId)
       .at(-1);
     if (!last) return layer.doneOn;
@@ -257,7 +285,7 @@ export class SheetWork {
       this.marked.emit();
     } catch (error) {
       const what = `${layer.name}, ${room.name} · ${surface.name}`;
-      this.message.set(this.translate.instant('sheet.work.failed', { what, reason: problemMessage(error) }) as string);
+      this.message.set(this.translate.instant('sheet.work.failed', { what, reason: markProblem(error) }) as string);
     } finally {
       this.sending.set(null);
     }
