@@ -23,7 +23,8 @@ stage() { # $1 = title; the rest = command
 stage "type check (server, packages, e2e, both apps with templates)" npm run --silent typecheck
 stage "lint (ESLint, zero warnings)" npm run --silent lint
 stage "format (Prettier)" npm run --silent format:check
-stage "words (i18n): both languages, used keys exist, no literal text in templates" node ops/i18n/check.mjs
+stage "words (i18n): both languages, used keys exist, no literal text in templates" \
+  bash -c "node --test --test-reporter=dot ops/i18n/check.spec.mjs && node ops/i18n/check.mjs"
 bash ops/pg-start.sh
 stage "unit and API tests (jest)" npx jest --runInBand --ci
 stage "app unit specs (Vitest, jsdom)" npm run --silent test:apps
