@@ -151,6 +151,7 @@ export {
   jurisdictionKeys,
   jurisdictionLine,
   safetyCautions,
+  treatedAsTargetHousing,
 } from './safety/safety-cautions';
 export type { CautionLine, CautionWordKey } from './safety/caution-words';
 export { CAUTION_WORDS, cautionLineOf, cautionText } from './safety/caution-words';

@@ -1,7 +1,15 @@
 import { mergeCautions } from '../estimate/merge-cautions';
 import { ASK_FOR_YEAR } from '../estimate/lead-status';
 import { CAUTION_WORDS, type CautionWordKey, cautionLineOf, cautionText } from './caution-words';
-import { OFFICE_ONLY_LINES, OUTSIDE_US_LINE, STANDING_LINE, type SafetyFacts, jurisdictionKeys, safetyCautions } from './safety-cautions';
+import {
+  OFFICE_ONLY_LINES,
+  OUTSIDE_US_LINE,
+  STANDING_LINE,
+  type SafetyFacts,
+  jurisdictionKeys,
+  safetyCautions,
+  treatedAsTargetHousing,
+} from './safety-cautions';
 
 const EVERYTHING: SafetyFacts = {
   lengthUnit: 'ft',
@@ -79,6 +87,20 @@ describe('caution words by key', () => {
     expect(cautionLineOf(ASK_FOR_YEAR)).toEqual({ key: 'lead-safe-work.askYear', params: {} });
     const treated = all[0].bullets[0].replace(/^Built before 1978 and/, 'Treated as built before 1978, and');
     expect(cautionLineOf(treated)).toEqual({ key: 'lead-safe-work.treatedAsBuiltBefore', params: { year: '1978' } });
+  });
+
+  it('a home treated as built before 1978 asks for the year first, bullets and keys parallel', () => {
+    const treated = treatedAsTargetHousing(all[0]);
+    expect(treated.bullets[0]).toBe(ASK_FOR_YEAR);
+    expect(treated.bullets[1]).toBe(all[0].bullets[0].replace(/^Built before 1978 and/, 'Treated as built before 1978, and'));
+    expect(treated.lines.map((l) => l.key)).toEqual([
+      'lead-safe-work.askYear',
+      'lead-safe-work.treatedAsBuiltBefore',
+      'lead-safe-work.certifiedFirm',
+      'lead-safe-work.containAndClean',
+      'lead-safe-work.keepRecords',
+    ]);
+    expect(treated.bullets).toEqual(treated.lines.map(cautionText));
   });
 
   it('an unknown line has no key (shown as written)', () => {

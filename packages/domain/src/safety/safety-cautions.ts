@@ -203,3 +203,16 @@ export function safetyCautions(facts: SafetyFacts): Caution[] {
   }
   return out;
 }
+
+/**
+ * The lead-safe caution for a home whose year is not recorded while paint is disturbed (treated as
+ * built before 1978 until someone records it, 40 CFR 745): the line asking for the year first, and
+ * the first line saying "treated as"; bullets and their keys stay parallel.
+ */
+export function treatedAsTargetHousing(c: Caution): Caution {
+  const lines = [
+    line('lead-safe-work.askYear'),
+    ...c.lines.map((l) => (l.key === 'lead-safe-work.builtBefore' ? line('lead-safe-work.treatedAsBuiltBefore', l.params) : l)),
+  ];
+  return { ...c, lines, bullets: lines.map(cautionText) };
+}
