@@ -1,4 +1,13 @@
-import { expect, request, test, type APIRequestContext, type APIResponse, type Page } from '@playwright/test';
+import {
+  expect,
+  request,
+  test,
+  type APIRequestContext,
+  type APIResponse,
+  type Browser,
+  type BrowserContext,
+  type Page,
+} from '@playwright/test';
 import type { JobHistory } from '@layerbook/contracts/types';
 import { E2E } from './support/env';
 import { pathFrom, waitForMail } from './support/inbox';
@@ -108,15 +117,11 @@ test.beforeAll(async () => {
 const layerButton = (page: Page, verb: 'Marcar terminada' | 'Reabrir') =>
   page.getByRole('button', { name: `${verb}: ${LAYER}, ${ROOM} · ${SURFACE}` });
 
-test('a Spanish-reading crew member scales a mix, marks a layer done without a signal, and the office sees it done once', async ({
-  page,
-  browser,
-}) => {
-  test.setTimeout(180_000);
+/** Lucía's phone: a phone-sized context signed in as her, on her job sheet (opened from the menu as she would). */
+async function openSheetOnPhone(page: Page, browser: Browser): Promise<{ phone: Page; context: BrowserContext }> {
   await signIn(page, LUCIA);
   const context = await browser.newContext({ viewport: PHONE, storageState: await page.context().storageState() });
   const phone = await context.newPage();
-
   // Her language comes from her own setting: the server renders Spanish, the browser keeps it.
   await openLive(phone, '/today');
   await expect(phone.locator('html')).toHaveAttribute('lang', 'es');
@@ -125,13 +130,18 @@ test('a Spanish-reading crew member scales a mix, marks a layer done without a s
   await expect(phone.getByRole('heading', { level: 1, name: 'Hojas de obra' })).toBeVisible();
   await phone.getByRole('link', { name: new RegExp(TITLE) }).click();
   await expect(phone.getByRole('heading', { level: 1, name: TITLE })).toBeVisible();
+  return { phone, context };
+}
+
+test('a Spanish-reading crew member scales a mix, marks a layer done without a signal, and the office sees it done once', async ({
+  page,
+  browser,
+}) => {
+  test.setTimeout(180_000);
+  const { phone, context } = await openSheetOnPhone(page, browser);
   for (const part of ['Seguridad', 'Superficies', 'Acabados y mezclas', 'Plan del día']) {
     await expect(phone.getByRole('heading', { level: 2, name: part })).toBeVisible();
   }
-  // The sheet must be readable offline later: wait until the service worker runs the page, then load it once through it.
-  await phone.evaluate(() => navigator.serviceWorker.ready.then(() => true));
-  await phone.reload();
-  await expect(phone.getByRole('heading', { level: 1, name: TITLE })).toBeVisible();
   await phone.screenshot({ path: `${SHOTS}/crew-sheet-es.png`, fullPage: true });
 
   // Mix card: one gallon of the first limewash coat, thinned 30 % of the final mix. NIST Handbook 44,
@@ -143,10 +153,9 @@ test('a Spanish-reading crew member scales a mix, marks a layer done without a s
   await expect(card.getByRole('row', { name: /Limewash concentrate/ })).toContainText(/2[.,]65 L/);
   await card.screenshot({ path: `${SHOTS}/crew-sheet-mix-card-es.png` });
 
-  // No signal: the sheet still opens (the service worker's copy), and a mark is kept on the phone.
+  // No signal: the mark is kept on the phone and the sheet says so.
   await context.setOffline(true);
-  await phone.reload();
-  await expect(phone.getByRole('heading', { level: 1, name: TITLE })).toBeVisible();
+  await expect(phone.getByRole('status').filter({ hasText: 'Sin conexión' })).toBeVisible();
   await layerButton(phone, 'Marcar terminada').click();
   const kept = phone.getByRole('status').filter({ hasText: 'Guardado en este teléfono — se enviará cuando haya conexión' });
   await expect(kept).toBeVisible();
@@ -180,4 +189,20 @@ test('a Spanish-reading crew member scales a mix, marks a layer done without a s
   await entries.first().scrollIntoViewIfNeeded();
   await office.screenshot({ path: `${SHOTS}/crew-sheet-office-history.png`, fullPage: true });
   await officeContext.close();
+});
+
+test('the job sheet, once opened, opens again on the phone without a signal', async ({ page, browser }) => {
+  test.setTimeout(120_000);
+  const { phone, context } = await openSheetOnPhone(page, browser);
+  // The service worker takes the page on its next load; that load also keeps the sheet's answer for later.
+  await phone.evaluate(() => navigator.serviceWorker.ready.then(() => true));
+  await phone.reload();
+  await expect(phone.getByRole('heading', { level: 1, name: TITLE })).toBeVisible();
+  await context.setOffline(true);
+  await phone.reload();
+  await expect(phone.getByRole('heading', { level: 1, name: TITLE })).toBeVisible();
+  await expect(phone.getByRole('status').filter({ hasText: 'Sin conexión' })).toBeVisible();
+  await expect(phone.getByRole('group', { name: `Tarjeta de mezcla: ${MIXED}` })).toBeVisible();
+  await phone.screenshot({ path: `${SHOTS}/crew-sheet-reopened-offline-es.png`, fullPage: true });
+  await context.close();
 });
