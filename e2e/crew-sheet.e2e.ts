@@ -206,3 +206,26 @@ test('the job sheet, once opened, opens again on the phone without a signal', as
   await phone.screenshot({ path: `${SHOTS}/crew-sheet-reopened-offline-es.png`, fullPage: true });
   await context.close();
 });
+
+test('the crew member reads the finish library and the sample boards in Spanish', async ({ page, browser }) => {
+  await signIn(page, LUCIA);
+  const context = await browser.newContext({ viewport: PHONE, storageState: await page.context().storageState() });
+  const phone = await context.newPage();
+  await openLive(phone, '/library');
+  await expect(phone.getByRole('heading', { level: 1, name: 'Biblioteca de acabados' })).toBeVisible();
+  const systems = phone.getByRole('table', { name: 'Sistemas de acabado' });
+  await expect(systems.getByRole('columnheader', { name: 'Espera total' })).toBeVisible();
+  await phone.screenshot({ path: `${SHOTS}/crew-library-es.png`, fullPage: true });
+  await systems.getByRole('link', { name: SYSTEM }).click();
+  await expect(phone.getByRole('heading', { level: 1, name: SYSTEM })).toBeVisible();
+  await expect(phone.getByText('Puede leer este sistema de acabado; el dueño o la oficina lo cambian.')).toBeVisible();
+  await expect(phone.getByRole('heading', { level: 2, name: `Capa 2: ${MIXED}` })).toBeVisible();
+  await phone.screenshot({ path: `${SHOTS}/crew-library-system-es.png`, fullPage: true });
+  await openLive(phone, '/library/products');
+  await expect(phone.getByRole('table', { name: 'Productos' }).getByRole('cell', { name: 'Cal (pasta, lechada)' }).first()).toBeVisible();
+  await phone.screenshot({ path: `${SHOTS}/crew-library-products-es.png`, fullPage: true });
+  await openLive(phone, '/samples');
+  await expect(phone.getByRole('heading', { level: 1, name: 'Tableros de muestra' })).toBeVisible();
+  await phone.screenshot({ path: `${SHOTS}/crew-samples-es.png`, fullPage: true });
+  await context.close();
+});
