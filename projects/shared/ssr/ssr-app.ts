@@ -15,6 +15,12 @@ const BASE_ELEMENT = /<base href="[^"]*"\s*\/?>/i;
  * against the page's own path, and break on any deeper page (/portal/f/:slug/inquiry).
  */
 const INLINED_MEDIA_URL = /url\((['"]?)\.\/media\//g;
+/**
+ * Files whose name stays the same from one release to the next: the service worker's script, its
+ * manifest and helpers (admin), and the offline page it keeps (`index.csr.html`). Revalidated on
+ * every use (ETag), so a release reaches the phones at once rather than in a year.
+ */
+const REVALIDATED = /[\\/](?:ngsw\.json|ngsw-worker\.js|safety-worker\.js|worker-basic\.min\.js|index\.csr\.html)$/;
 
 export interface SsrAppOptions {
   /** The built browser files (`dist/<app>/browser`), served as they are. */
@@ -39,6 +45,10 @@ export function createSsrApp(options: SsrAppOptions): Express {
       maxAge: '1y',
       index: false,
       redirect: false,
+      // Hashed file names are kept a year; these keep their names from one release to the next.
+      setHeaders: (res, path) => {
+        if (REVALIDATED.test(path)) res.setHeader('cache-control', 'no-cache');
+      },
     }),
   );
   app.use((req, res, next) => {

@@ -10,15 +10,29 @@ export const cspNonce: RequestHandler = (_req, res, next) => {
   next();
 };
 
+/**
+ * The admin app's offline page: the app without server rendering, which the service worker keeps
+ * and serves when a page cannot be fetched (projects/admin/ngsw-config.json). The worker checks it
+ * against the build's hash, so it is served exactly as built: no nonce can be written into it, and
+ * its own policy allows our script files only and inline styles (Angular adds component styles as
+ * <style> elements; on the other pages they carry the nonce).
+ */
+export const OFFLINE_PAGE = '/index.csr.html';
+
 export function securityHeaders(config: Config): RequestHandler {
-  const nonce = (_req: unknown, res: unknown) => `'nonce-${(res as { locals: Record<string, string> }).locals['cspNonce']}'`;
+  const nonceOf = (res: unknown) => `'nonce-${(res as { locals: Record<string, string> }).locals['cspNonce']}'`;
+  const offlinePage = (req: unknown) => (req as { path: string }).path === OFFLINE_PAGE;
+  const scriptNonce = (req: unknown, res: unknown) => (offlinePage(req) ? "'self'" : nonceOf(res));
+  const styleNonce = (req: unknown, res: unknown) => (offlinePage(req) ? "'unsafe-inline'" : nonceOf(res));
   return helmet({
     contentSecurityPolicy: {
       useDefaults: false,
       directives: {
         defaultSrc: ["'self'"],
-        scriptSrc: ["'self'", nonce],
-        styleSrc: ["'self'", nonce],
+        scriptSrc: ["'self'", scriptNonce],
+        styleSrc: ["'self'", styleNonce],
+        // The service worker (admin: /ngsw-worker.js) is a script of our own, from our own origin.
+        workerSrc: ["'self'"],
         // Material and SSR output set a few style attributes; attributes cannot carry a nonce.
         styleSrcAttr: ["'unsafe-inline'"],
         imgSrc: ["'self'", 'data:', 'blob:'],

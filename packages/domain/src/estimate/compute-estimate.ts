@@ -9,8 +9,8 @@ import type { SurfaceMeasure } from '../geometry/surface-shape';
 import { type CrewTime, type LayerHours, applyLayerHours, crewTime } from '../labour/layer-hours';
 import { perAreaCheck } from '../pricing/per-area-check';
 import { type PriceBreakdown, priceJob } from '../pricing/price-job';
-import { type Caution, safetyCautions } from '../safety/safety-cautions';
-import { ASK_FOR_YEAR, type LeadStatus, leadRuleYear, leadStatus } from './lead-status';
+import { type Caution, safetyCautions, treatedAsTargetHousing } from '../safety/safety-cautions';
+import { type LeadStatus, leadRuleYear, leadStatus } from './lead-status';
 import { type JobSchedule, type WorkChain, scheduleJob } from '../schedule/schedule-job';
 import { type Dimension, dimensionOf, fromBase } from '../units/quantity-unit';
 import type { EstimateInput } from './estimate-input';
@@ -214,12 +214,8 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
     ...(input.firmCountry !== undefined ? { firmCountry: input.firmCountry } : {}),
   });
   if (lead === 'assumed-target-housing') {
-    const leadSafe = cautions.find((c) => c.id === 'lead-safe-work');
-    if (leadSafe)
-      leadSafe.bullets = [
-        ASK_FOR_YEAR,
-        ...leadSafe.bullets.map((b) => b.replace(/^Built before 1978 and/, 'Treated as built before 1978, and')),
-      ];
+    const at = cautions.findIndex((c) => c.id === 'lead-safe-work');
+    if (at >= 0) cautions[at] = treatedAsTargetHousing(cautions[at]);
   }
 
   return {
