@@ -7,22 +7,23 @@ import { MatInputModule } from '@angular/material/input';
 import { CHANGE_ORDER_LIMITS, SIGNED_NAME_MAX, SIGNED_NAME_MIN, type PortalChangeOrder } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
-import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ChangeOrderApi } from './change-order-api';
+import { TranslatePipe } from '@ngx-translate/core';
+import { FieldErrorPipe, type FieldErrorWords } from '../../../../../shared/forms/field-error-pipe';
 
 /** Mirrors `changeOrderDecision` in @layerbook/contracts. */
 const WORDS = {
   signedName: {
-    required: 'Type your full name to sign.',
-    minlength: `Type your full name to sign (at least ${SIGNED_NAME_MIN} characters).`,
-    maxlength: `Use at most ${SIGNED_NAME_MAX} characters.`,
+    required: 'proposals.acceptance.nameRequired',
+    minlength: { key: 'proposals.acceptance.nameTooShort', params: { min: SIGNED_NAME_MIN } },
+    maxlength: { key: 'proposals.acceptance.tooLong', params: { max: SIGNED_NAME_MAX } },
   },
-  consent: { required: 'Tick the box to confirm you approve this change.' },
-  comment: { maxlength: `Use at most ${CHANGE_ORDER_LIMITS.commentMaxLength} characters.` },
-} as const;
+  consent: { required: 'billing.decision.consentRequired' },
+  comment: { maxlength: { key: 'proposals.acceptance.tooLong', params: { max: CHANGE_ORDER_LIMITS.commentMaxLength } } },
+} as const satisfies Record<string, FieldErrorWords>;
 
 /** Trimmed length, as the server counts it. */
 const trimmedMin = (min: number) => (c: { value: string }) =>
@@ -31,51 +32,66 @@ const trimmedMin = (min: number) => (c: { value: string }) =>
 /** The client's answer: approve with a typed signature and a ticked box, or decline with an optional comment. */
 @Component({
   selector: 'lb-change-order-decision',
-  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [
+    FieldErrorPipe,
+    FormAlert,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatInputModule,
+    ReactiveFormsModule,
+    TranslatePipe,
+  ],
   template: `
     <form [formGroup]="approval" (ngSubmit)="approve()" novalidate aria-labelledby="approve-heading">
-      <h2 id="approve-heading">Approve this change</h2>
+      <h2 id="approve-heading">{{ 'billing.decision.heading' | translate }}</h2>
       <fieldset class="lb-gate lb-form" [disabled]="!isHydrated() || isBusy()">
         <lb-form-alert [message]="approveMessage()" />
         <mat-form-field>
-          <mat-label>Your full name</mat-label>
+          <mat-label>{{ 'proposals.acceptance.fullName' | translate }}</mat-label>
           <input matInput formControlName="signedName" autocomplete="name" required [maxlength]="signedNameMax" />
-          <mat-hint>Typing your name is your signature.</mat-hint>
-          <mat-error>{{ errorText(approval.controls.signedName, words.signedName) }}</mat-error>
+          <mat-hint>{{ 'proposals.acceptance.signatureHint' | translate }}</mat-hint>
+          <mat-error>{{ approval.controls.signedName | lbFieldError: words.signedName }}</mat-error>
         </mat-form-field>
         <div>
           <mat-checkbox formControlName="consent" [attr.aria-describedby]="showConsentError() ? 'co-consent-error' : null">
-            I approve this change order and the new contract sum.
+            {{ 'billing.decision.consent' | translate }}
           </mat-checkbox>
           @if (showConsentError()) {
-            <p class="field-error" id="co-consent-error">{{ errorText(approval.controls.consent, words.consent) }}</p>
+            <p class="field-error" id="co-consent-error">{{ approval.controls.consent | lbFieldError: words.consent }}</p>
           }
         </div>
         <div class="lb-form-actions">
-          <button mat-flat-button type="submit" [disabled]="isBusy()">Approve the change</button>
+          <button mat-flat-button type="submit" [disabled]="isBusy()">{{ 'billing.decision.approve' | translate }}</button>
         </div>
       </fieldset>
     </form>
 
-    <h2>Not for you?</h2>
+    <h2>{{ 'billing.decision.notForYou' | translate }}</h2>
     @if (!isDeclining()) {
       <div class="lb-form-actions">
         <button mat-button type="button" [disabled]="!isHydrated()" [attr.aria-expanded]="false" (click)="isDeclining.set(true)">
-          Decline
+          {{ 'proposals.answers.decline' | translate }}
         </button>
       </div>
     } @else {
-      <form [formGroup]="decline" (ngSubmit)="sendDecline()" novalidate class="panel" aria-label="Decline this change order">
+      <form
+        [formGroup]="decline"
+        (ngSubmit)="sendDecline()"
+        novalidate
+        class="panel"
+        [attr.aria-label]="'billing.decision.declineLabel' | translate"
+      >
         <fieldset class="lb-gate lb-form" [disabled]="isBusy()">
           <lb-form-alert [message]="declineMessage()" />
           <mat-form-field>
-            <mat-label>Anything the firm should know? (optional)</mat-label>
+            <mat-label>{{ 'proposals.answers.declineComment' | translate }}</mat-label>
             <textarea matInput formControlName="comment" rows="3" [maxlength]="commentMax"></textarea>
-            <mat-error>{{ errorText(decline.controls.comment, words.comment) }}</mat-error>
+            <mat-error>{{ decline.controls.comment | lbFieldError: words.comment }}</mat-error>
           </mat-form-field>
           <div class="lb-form-actions">
-            <button mat-stroked-button type="submit">Decline the change</button>
-            <button mat-button type="button" (click)="isDeclining.set(false)">Cancel</button>
+            <button mat-stroked-button type="submit">{{ 'billing.decision.decline' | translate }}</button>
+            <button mat-button type="button" (click)="isDeclining.set(false)">{{ 'billing.decision.cancel' | translate }}</button>
           </div>
         </fieldset>
       </form>
@@ -120,7 +136,6 @@ export class ChangeOrderDecisionForm {
   protected readonly approveMessage = signal<string | null>(null);
   protected readonly declineMessage = signal<string | null>(null);
   protected readonly isHydrated = hydratedSignal();
-  protected readonly errorText = errorText;
   protected readonly words = WORDS;
   /** bumped on submit so the checkbox error (outside mat-form-field) re-checks under OnPush */
   private readonly submitted = signal(0);

@@ -1,77 +1,85 @@
 import { DOCUMENT } from '@angular/common';
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, LOCALE_ID, RESPONSE_INIT, computed, effect, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, RESPONSE_INIT, computed, effect, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 import type { PortalChangeOrder } from '@layerbook/contracts/types';
 import { problemMessage, toProblem } from '../../core/errors/problem';
-import { formatMoment, formatMoney } from '../../shared/format/money';
 import { changeOrderUrl } from './change-order-api';
 import { ChangeOrderDecisionForm } from './change-order-decision-form';
 import { contractChangeWords } from './change-order-words';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { Language } from '../../../../../shared/i18n/language';
+import { LbDatePipe, LbNumberPipe, formatAmount } from '../../../../../shared/i18n/format';
 
 /** One change order the firm sent: what changes, what it costs, the contract sum before and after; approve or decline. */
 @Component({
   selector: 'lb-change-order-page',
-  imports: [ChangeOrderDecisionForm, MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [ChangeOrderDecisionForm, LbDatePipe, LbNumberPipe, MatIconModule, MatProgressBarModule, RouterLink, SayPipe, TranslatePipe],
   template: `
     @if (isLoading()) {
-      <mat-progress-bar mode="indeterminate" aria-label="Loading the change order" />
+      <mat-progress-bar mode="indeterminate" [attr.aria-label]="'billing.changeOrder.loading' | translate" />
     } @else if (loadMessage(); as message) {
       <p class="lb-form-alert" role="alert">
-        <mat-icon aria-hidden="true">error</mat-icon><span>{{ message }}</span>
+        <mat-icon aria-hidden="true">error</mat-icon><span>{{ message | lbSay }}</span>
       </p>
-      <p><a routerLink="/projects">Back to your projects</a></p>
+      <p>
+        <a routerLink="/projects">{{ 'proposals.page.back' | translate }}</a>
+      </p>
     } @else if (changeOrder(); as co) {
-      <h1>Change order #{{ co.number }}: {{ co.title }}</h1>
-      <p class="meta">For {{ co.jobTitle }}</p>
+      <h1>{{ 'billing.changeOrder.title' | translate: { number: co.number, title: co.title } }}</h1>
+      <p class="meta">{{ 'billing.changeOrder.for' | translate: { job: co.jobTitle } }}</p>
 
       @if (co.status === 'approved') {
         <div class="lb-success" role="status">
           <mat-icon aria-hidden="true">verified</mat-icon>
-          <p>Approved by {{ co.signedName }} on {{ moment(co.decidedAt) }}.</p>
+          <p>{{ 'billing.changeOrder.approved' | translate: { name: co.signedName, when: co.decidedAt | lbDate: 'long' : 'short' } }}</p>
         </div>
       } @else if (co.status === 'declined') {
         <div class="lb-notice" role="status">
           <mat-icon aria-hidden="true">do_not_disturb_on</mat-icon>
           <p>
-            You declined this change on {{ moment(co.decidedAt) }}; nothing about your job changed.
+            {{ 'billing.changeOrder.declined' | translate: { when: co.decidedAt | lbDate: 'long' : 'short' } }}
             @if (co.clientComment) {
-              You wrote: “{{ co.clientComment }}”
+              {{ 'proposals.page.youWrote' | translate: { comment: co.clientComment } }}
             }
           </p>
         </div>
       } @else {
-        <p class="lb-lead">Read the change below. Nothing changes until you approve it.</p>
+        <p class="lb-lead">{{ 'billing.changeOrder.readBelow' | translate }}</p>
       }
 
       @if (co.description) {
         <p class="description">{{ co.description }}</p>
       }
       @if (co.engine; as e) {
-        <h2 id="co-work-heading">The work</h2>
-        <p>{{ e.finishName }} on:</p>
+        <h2 id="co-work-heading">{{ 'billing.changeOrder.work' | translate }}</h2>
+        <p>{{ 'billing.changeOrder.finishOn' | translate: { finish: e.finishName } }}</p>
         <ul aria-labelledby="co-work-heading">
           @for (s of e.surfaces; track $index) {
             <li>{{ s.room }} · {{ s.surface }}: {{ s.quantity }}</li>
           }
         </ul>
         <p class="meta">
-          About {{ e.labourHours }} crew-hours over {{ e.workingDays }} working {{ e.workingDays === 1 ? 'day' : 'days' }}.
+          {{
+            (e.workingDays === 1 ? 'billing.changeOrder.effortOneDay' : 'billing.changeOrder.effort')
+              | translate: { hours: e.labourHours | lbNumber, days: e.workingDays }
+          }}
         </p>
       }
 
-      <h2 id="co-price-heading">The price</h2>
+      <h2 id="co-price-heading">{{ 'billing.changeOrder.price' | translate }}</h2>
       <dl class="figures" aria-labelledby="co-price-heading">
-        <dt>Price</dt>
+        <dt>{{ 'proposals.document.price' | translate }}</dt>
         <dd>{{ money(co.price, co.currency) }}</dd>
-        <dt>Tax</dt>
+        <dt>{{ 'proposals.document.tax' | translate }}</dt>
         <dd>{{ money(co.tax, co.currency) }}</dd>
-        <dt>Change to your contract</dt>
+        <dt>{{ 'billing.changeOrder.change' | translate }}</dt>
         <dd class="total">{{ money(co.amount, co.currency) }}</dd>
-        <dt>Contract sum</dt>
+        <dt>{{ 'billing.statement.contractSum' | translate }}</dt>
         <dd>{{ money(co.contractSumBefore, co.currency) }} → {{ money(co.contractSumAfter, co.currency) }}</dd>
       </dl>
       @if (co.taxNote) {
@@ -80,7 +88,7 @@ import { contractChangeWords } from './change-order-words';
       <p>{{ sumWords() }}</p>
 
       @if (co.status === 'sent') {
-        <section class="answer" aria-label="Your answer">
+        <section class="answer" [attr.aria-label]="'proposals.page.answer' | translate">
           <lb-change-order-decision [changeOrder]="co" (decided)="show($event)" />
         </section>
       }
@@ -127,7 +135,8 @@ export class ChangeOrderPage {
   private readonly title = inject(Title);
   private readonly response = inject(RESPONSE_INIT, { optional: true });
   private readonly document = inject(DOCUMENT);
-  private readonly locale = inject(LOCALE_ID);
+  private readonly translate = inject(TranslateService);
+  private readonly language = inject(Language);
 
   /** route parameter */
   readonly id = input.required<string>();
@@ -144,17 +153,22 @@ export class ChangeOrderPage {
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return this.isMissing() ? 'We could not find this change order. Open it from the e-mail the firm sent.' : problemMessage(error);
+    return this.isMissing() ? 'billing.changeOrder.missing' : problemMessage(error);
   });
   protected readonly sumWords = computed(() => {
     const co = this.changeOrder();
-    return co ? contractChangeWords(co, this.locale) : '';
+    this.language.current();
+    return co
+      ? contractChangeWords(co, this.language.locale(), (key, params) => this.translate.instant(`billing.${key}`, params) as string)
+      : '';
   });
 
   constructor() {
     effect(() => {
       const co = this.changeOrder();
-      if (co) this.title.setTitle(`Change order #${co.number}: ${co.title} · Layerbook client portal`);
+      this.language.current();
+      if (co)
+        this.title.setTitle(this.translate.instant('layout.titles.changeOrderNumber', { number: co.number, title: co.title }) as string);
     });
     // Tells crawlers and the host's logs the truth while rendering on the server.
     effect(() => {
@@ -163,11 +177,7 @@ export class ChangeOrderPage {
   }
 
   protected money(amount: string, currency: string): string {
-    return formatMoney(amount, currency, this.locale);
-  }
-
-  protected moment(iso: string | null): string {
-    return iso ? formatMoment(iso, this.locale) : '';
+    return formatAmount(amount, currency, this.language.locale());
   }
 
   /** After an answer the form goes away; bring the reader back to the message at the top. */

@@ -1,5 +1,8 @@
 import type { PortalChangeOrder } from '@layerbook/contracts/types';
-import { formatMoney } from '../../shared/format/money';
+import { formatMoney } from '@layerbook/domain';
+
+/** Words of the `billing` area by key (without the area), params filled. */
+export type BillingSay = (key: string, params?: Readonly<Record<string, unknown>>) => string;
 
 /**
  * What the change does to the contract, in one sentence the client can check: "Your contract sum
@@ -9,11 +12,18 @@ import { formatMoney } from '../../shared/format/money';
 export function contractChangeWords(
   co: Pick<PortalChangeOrder, 'amount' | 'currency' | 'contractSumBefore' | 'contractSumAfter' | 'status'>,
   locale: string,
+  say: BillingSay,
 ): string {
   const money = (amount: string) => formatMoney(amount, co.currency, locale);
   const isDown = co.amount.trim().startsWith('-');
-  const by = `${isDown ? 'down' : 'up'} ${money(co.amount.trim().replace(/^-/, ''))}, tax included`;
-  const verb = co.status === 'approved' ? 'went' : co.status === 'declined' ? 'would have gone' : 'goes';
-  const when = co.status === 'sent' || co.status === 'draft' ? ' once you approve' : '';
-  return `Your contract sum ${verb} from ${money(co.contractSumBefore)} to ${money(co.contractSumAfter)}${when} (${by}).`;
+  const by = say(isDown ? 'changeOrder.down' : 'changeOrder.up', { amount: money(co.amount.trim().replace(/^-/, '')) });
+  const sentence =
+    co.status === 'approved'
+      ? 'changeOrder.sumWent'
+      : co.status === 'declined'
+        ? 'changeOrder.sumWouldHave'
+        : co.status === 'sent' || co.status === 'draft'
+          ? 'changeOrder.sumOnceApproved'
+          : 'changeOrder.sumGoes';
+  return say(sentence, { before: money(co.contractSumBefore), after: money(co.contractSumAfter), by });
 }

@@ -5,36 +5,38 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import type { ItemList, PortalInvoiceSummary } from '@layerbook/contracts/types';
 import { problemMessage } from '../../core/errors/problem';
-import { formatDay, formatMoney } from '../../shared/format/money';
 import { INVOICES_URL } from './invoice-api';
 import { invoiceStatusWords } from './invoice-words';
+import { TranslatePipe } from '@ngx-translate/core';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
 
 /** "Your invoices": every invoice the firm has issued to this client, with what is due and by when, and a statement per job. */
 @Component({
   selector: 'lb-invoice-list',
-  imports: [MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [LbDatePipe, LbMoneyPipe, MatIconModule, MatProgressBarModule, RouterLink, SayPipe, TranslatePipe],
   template: `
-    <h1>Your invoices</h1>
-    <p class="lb-lead">What you owe, by when, and what you have paid. Open an invoice to read it or download its PDF.</p>
+    <h1>{{ 'billing.list.title' | translate }}</h1>
+    <p class="lb-lead">{{ 'billing.list.lead' | translate }}</p>
     @if (isLoading()) {
-      <mat-progress-bar mode="indeterminate" aria-label="Loading your invoices" />
+      <mat-progress-bar mode="indeterminate" [attr.aria-label]="'billing.list.loading' | translate" />
     } @else if (loadMessage(); as message) {
-      <p class="lb-form-alert" role="alert">{{ message }}</p>
+      <p class="lb-form-alert" role="alert">{{ message | lbSay }}</p>
     } @else if (invoices().length === 0) {
       <div class="empty">
         <mat-icon aria-hidden="true">receipt_long</mat-icon>
-        <p>No invoices yet. When your firm sends you one, it appears here and you get an e-mail too.</p>
+        <p>{{ 'billing.list.empty' | translate }}</p>
       </div>
     } @else {
-      <div class="table-wrap" tabindex="0" role="region" aria-label="Your invoices">
+      <div class="table-wrap" tabindex="0" role="region" [attr.aria-label]="'billing.list.title' | translate">
         <table class="lb-table">
           <thead>
             <tr>
-              <th scope="col">Invoice</th>
-              <th scope="col">Job</th>
-              <th scope="col">Due</th>
-              <th scope="col" class="num">Amount due</th>
-              <th scope="col">Status</th>
+              <th scope="col">{{ 'billing.list.invoice' | translate }}</th>
+              <th scope="col">{{ 'billing.list.job' | translate }}</th>
+              <th scope="col">{{ 'billing.list.due' | translate }}</th>
+              <th scope="col" class="num">{{ 'billing.list.amountDue' | translate }}</th>
+              <th scope="col">{{ 'billing.list.status' | translate }}</th>
             </tr>
           </thead>
           <tbody>
@@ -45,12 +47,12 @@ import { invoiceStatusWords } from './invoice-words';
                   <a [routerLink]="['/invoices', inv.id]">{{ inv.number }}</a>
                 </th>
                 <td>{{ inv.jobTitle }}</td>
-                <td>{{ inv.status === 'void' ? '—' : day(inv.dueOn, inv.locale) }}</td>
-                <td class="num">{{ money(inv.amountDue, inv) }}</td>
+                <td>{{ inv.status === 'void' ? '—' : (inv.dueOn | lbDate: 'long') }}</td>
+                <td class="num">{{ inv.amountDue | lbMoney: inv.currency }}</td>
                 <td>
                   <span class="status" [class.urgent]="words.isUrgent">
                     <mat-icon aria-hidden="true">{{ words.icon }}</mat-icon>
-                    {{ words.text }}
+                    {{ words.text | translate }}
                   </span>
                 </td>
               </tr>
@@ -58,11 +60,11 @@ import { invoiceStatusWords } from './invoice-words';
           </tbody>
         </table>
       </div>
-      <h2>Statements</h2>
+      <h2>{{ 'billing.list.statements' | translate }}</h2>
       <ul class="jobs">
         @for (job of jobs(); track job.id) {
           <li>
-            <a [routerLink]="['/jobs', job.id, 'statement']">Statement for {{ job.title }}</a>
+            <a [routerLink]="['/jobs', job.id, 'statement']">{{ 'billing.list.statementFor' | translate: { job: job.title } }}</a>
           </li>
         }
       </ul>
@@ -152,12 +154,4 @@ export class InvoiceList {
     return error ? problemMessage(error) : null;
   });
   protected readonly status = invoiceStatusWords;
-
-  protected day(isoDay: string, locale: string): string {
-    return formatDay(isoDay, locale);
-  }
-
-  protected money(amount: string, inv: PortalInvoiceSummary): string {
-    return formatMoney(amount, inv.currency, inv.locale);
-  }
 }

@@ -1,3 +1,8 @@
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import billing from '../../../i18n/billing/en.json';
+import payments from '../../../i18n/payments/en.json';
+import proposals from '../../../i18n/proposals/en.json';
+import common from '../../../../../shared/i18n/words/common/en.json';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ApplicationRef } from '@angular/core';
@@ -9,7 +14,14 @@ import { openDeposit, paidDeposit } from '../payments/payment-fixtures';
 import { InvoicePage } from './invoice-page';
 
 async function render(invoice: PortalInvoiceDetail, payment?: string) {
-  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])] });
+  TestBed.configureTestingModule({
+    providers: [
+      provideTestI18n({ billing, payments, proposals, common }),
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      provideRouter([]),
+    ],
+  });
   const fixture = TestBed.createComponent(InvoicePage);
   fixture.componentRef.setInput('id', invoice.id);
   if (payment) fixture.componentRef.setInput('payment', payment);

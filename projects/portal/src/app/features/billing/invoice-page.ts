@@ -4,19 +4,22 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
-import { INVOICE_KIND_LABELS, type PortalInvoiceDetail } from '@layerbook/contracts/types';
+import type { PortalInvoiceDetail } from '@layerbook/contracts/types';
 import { problemMessage, toProblem } from '../../core/errors/problem';
 import { PayByCard } from '../payments/pay-by-card';
 import { CANCELLED_WORDS } from '../payments/payment-words';
 import { ReceiptList } from '../payments/receipt-list';
-import { formatDay, formatMoney } from '../../shared/format/money';
 import { creditNotePdfUrl, invoicePdfUrl, invoiceUrl } from './invoice-api';
 import { PROGRESS_COLUMN_WORDS, invoiceStatusWords, isZeroAmount } from './invoice-words';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { Language } from '../../../../../shared/i18n/language';
+import { LbNumberPipe, formatAmount, formatCalendarDay } from '../../../../../shared/i18n/format';
 
 /** One invoice as the client reads it: the document, its PDF, how to pay it (by card online when open for it), its receipts, and its credit note when void. */
 @Component({
   selector: 'lb-invoice-page',
-  imports: [MatIconModule, MatProgressBarModule, PayByCard, ReceiptList, RouterLink],
+  imports: [LbNumberPipe, MatIconModule, MatProgressBarModule, PayByCard, ReceiptList, RouterLink, SayPipe, TranslatePipe],
   templateUrl: './invoice-page.html',
   styleUrl: './invoice-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -24,6 +27,8 @@ import { PROGRESS_COLUMN_WORDS, invoiceStatusWords, isZeroAmount } from './invoi
 export class InvoicePage {
   private readonly title = inject(Title);
   private readonly response = inject(RESPONSE_INIT, { optional: true });
+  private readonly translate = inject(TranslateService);
+  private readonly language = inject(Language);
 
   /** route parameter */
   readonly id = input.required<string>();
@@ -42,15 +47,12 @@ export class InvoicePage {
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return this.isMissing()
-      ? 'We could not find this invoice. Open it from your invoices or from the e-mail the firm sent.'
-      : problemMessage(error);
+    return this.isMissing() ? 'billing.invoice.missing' : problemMessage(error);
   });
   protected readonly statusWords = computed(() => {
     const inv = this.invoice();
     return inv ? invoiceStatusWords(inv) : null;
   });
-  protected readonly kindLabels = INVOICE_KIND_LABELS;
   protected readonly progressColumns = PROGRESS_COLUMN_WORDS;
   protected readonly pdfUrl = computed(() => invoicePdfUrl(this.id()));
   protected readonly isZero = isZeroAmount;
@@ -61,7 +63,8 @@ export class InvoicePage {
   constructor() {
     effect(() => {
       const inv = this.invoice();
-      if (inv) this.title.setTitle(`Invoice ${inv.number} · Layerbook client portal`);
+      this.language.current();
+      if (inv) this.title.setTitle(this.translate.instant('layout.titles.invoiceNumber', { number: inv.number }) as string);
     });
     // Tells crawlers and the host's logs the truth while rendering on the server.
     effect(() => {
@@ -71,11 +74,11 @@ export class InvoicePage {
 
   protected money(amount: string): string {
     const inv = this.invoice();
-    return inv ? formatMoney(amount, inv.currency, inv.locale) : '';
+    return inv ? formatAmount(amount, inv.currency, this.language.locale()) : '';
   }
 
   protected day(isoDay: string): string {
-    return formatDay(isoDay, this.invoice()?.locale ?? 'en-US');
+    return formatCalendarDay(isoDay, this.language.locale(), 'long');
   }
 
   protected creditNotePdf(creditNoteId: string): string {

@@ -1,3 +1,5 @@
+import billing from '../../../i18n/billing/en.json';
+import { wordsAt } from '../../testing/words';
 import { describe, expect, it } from 'vitest';
 import { invoiceStatusWords, isZeroAmount } from './invoice-words';
 
@@ -15,7 +17,7 @@ describe('invoiceStatusWords', () => {
     ['draft', false, 'To pay', false],
   ] as const)('%s (overdue %s) reads "%s"', (status, isOverdue, text, isUrgent) => {
     const words = invoiceStatusWords({ status, isOverdue });
-    expect(words.text).toBe(text);
+    expect(wordsAt({ billing }, words.text)).toBe(text);
     expect(words.isUrgent).toBe(isUrgent);
     expect(words.icon).toBeTruthy();
   });

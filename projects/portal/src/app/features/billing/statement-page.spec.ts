@@ -1,3 +1,8 @@
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import billing from '../../../i18n/billing/en.json';
+import payments from '../../../i18n/payments/en.json';
+import proposals from '../../../i18n/proposals/en.json';
+import common from '../../../../../shared/i18n/words/common/en.json';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ApplicationRef } from '@angular/core';
@@ -28,7 +33,14 @@ const statement: PortalStatement = {
 
 describe('the statement', () => {
   it('shows money given back as its own line that raises the balance', async () => {
-    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])] });
+    TestBed.configureTestingModule({
+      providers: [
+        provideTestI18n({ billing, payments, proposals, common }),
+        provideHttpClient(),
+        provideHttpClientTesting(),
+        provideRouter([]),
+      ],
+    });
     const fixture = TestBed.createComponent(StatementPage);
     fixture.componentRef.setInput('id', 'job-1');
     TestBed.inject(ApplicationRef).tick();

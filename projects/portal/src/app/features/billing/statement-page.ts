@@ -6,65 +6,70 @@ import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 import type { PortalStatement } from '@layerbook/contracts/types';
 import { problemMessage, toProblem } from '../../core/errors/problem';
-import { formatDay, formatMoney } from '../../shared/format/money';
 import { statementUrl } from './invoice-api';
 import { isZeroAmount, STATEMENT_KIND_WORDS } from './invoice-words';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { Language } from '../../../../../shared/i18n/language';
+import { formatAmount, formatCalendarDay } from '../../../../../shared/i18n/format';
 
 /** One job's statement: every invoice, credit note and payment by date with the running balance, and the totals. */
 @Component({
   selector: 'lb-statement-page',
-  imports: [MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [MatIconModule, MatProgressBarModule, RouterLink, SayPipe, TranslatePipe],
   template: `
     @if (isLoading()) {
-      <mat-progress-bar mode="indeterminate" aria-label="Loading the statement" />
+      <mat-progress-bar mode="indeterminate" [attr.aria-label]="'billing.statement.loading' | translate" />
     } @else if (loadMessage(); as message) {
       <p class="lb-form-alert" role="alert">
-        <mat-icon aria-hidden="true">error</mat-icon><span>{{ message }}</span>
+        <mat-icon aria-hidden="true">error</mat-icon><span>{{ message | lbSay }}</span>
       </p>
-      <p><a routerLink="/invoices">Back to your invoices</a></p>
+      <p>
+        <a routerLink="/invoices">{{ 'billing.invoice.back' | translate }}</a>
+      </p>
     } @else if (statement(); as s) {
-      <h1>Statement: {{ s.jobTitle }}</h1>
-      <p class="lb-lead">Everything invoiced, credited and paid on this job, by date.</p>
+      <h1>{{ 'billing.statement.title' | translate: { job: s.jobTitle } }}</h1>
+      <p class="lb-lead">{{ 'billing.statement.lead' | translate }}</p>
       <dl class="totals">
         <div>
-          <dt>Contract sum</dt>
+          <dt>{{ 'billing.statement.contractSum' | translate }}</dt>
           <dd>{{ money(s.contractSum) }}</dd>
         </div>
         <div>
-          <dt>Invoiced</dt>
+          <dt>{{ 'billing.statement.invoiced' | translate }}</dt>
           <dd>{{ money(s.invoiced) }}</dd>
         </div>
         @if (!isZero(s.credited)) {
           <div>
-            <dt>Credited</dt>
+            <dt>{{ 'billing.invoice.credited' | translate }}</dt>
             <dd>{{ money(s.credited) }}</dd>
           </div>
         }
         <div>
-          <dt>Paid</dt>
+          <dt>{{ 'billing.invoice.amountPaid' | translate }}</dt>
           <dd>{{ money(s.paid) }}</dd>
         </div>
         <div class="strong">
-          <dt>Balance due</dt>
+          <dt>{{ 'billing.statement.balanceDue' | translate }}</dt>
           <dd>{{ money(s.balanceDue) }}</dd>
         </div>
         <div>
-          <dt>Still to be invoiced</dt>
+          <dt>{{ 'billing.statement.unbilled' | translate }}</dt>
           <dd>{{ money(s.unbilled) }}</dd>
         </div>
       </dl>
       @if (s.lines.length === 0) {
-        <p>Nothing invoiced on this job yet.</p>
+        <p>{{ 'billing.statement.empty' | translate }}</p>
       } @else {
-        <div class="table-wrap" tabindex="0" role="region" aria-label="Statement lines">
+        <div class="table-wrap" tabindex="0" role="region" [attr.aria-label]="'billing.statement.lines' | translate">
           <table class="lb-table">
             <thead>
               <tr>
-                <th scope="col">Date</th>
-                <th scope="col">What</th>
-                <th scope="col" class="num">Charged</th>
-                <th scope="col" class="num">Paid or credited</th>
-                <th scope="col" class="num">Balance</th>
+                <th scope="col">{{ 'billing.invoice.date' | translate }}</th>
+                <th scope="col">{{ 'billing.statement.what' | translate }}</th>
+                <th scope="col" class="num">{{ 'billing.statement.charged' | translate }}</th>
+                <th scope="col" class="num">{{ 'billing.statement.paidOrCredited' | translate }}</th>
+                <th scope="col" class="num">{{ 'billing.statement.balance' | translate }}</th>
               </tr>
             </thead>
             <tbody>
@@ -75,7 +80,7 @@ import { isZeroAmount, STATEMENT_KIND_WORDS } from './invoice-words';
                     <span class="what">
                       <mat-icon aria-hidden="true">{{ kinds[l.kind].icon }}</mat-icon>
                       @if (kinds[l.kind].text; as kind) {
-                        <span class="lb-visually-hidden">{{ kind }}: </span>
+                        <span class="lb-visually-hidden">{{ 'billing.statement.kindLabel' | translate: { kind: kind | translate } }}</span>
                       }
                       {{ l.text }}
                     </span>
@@ -89,7 +94,9 @@ import { isZeroAmount, STATEMENT_KIND_WORDS } from './invoice-words';
           </table>
         </div>
       }
-      <p><a routerLink="/invoices">All your invoices</a></p>
+      <p>
+        <a routerLink="/invoices">{{ 'billing.invoice.all' | translate }}</a>
+      </p>
     }
   `,
   styles: `
@@ -154,6 +161,8 @@ import { isZeroAmount, STATEMENT_KIND_WORDS } from './invoice-words';
 export class StatementPage {
   private readonly title = inject(Title);
   private readonly response = inject(RESPONSE_INIT, { optional: true });
+  private readonly translate = inject(TranslateService);
+  private readonly language = inject(Language);
 
   /** route parameter: the job */
   readonly id = input.required<string>();
@@ -169,7 +178,7 @@ export class StatementPage {
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return this.isMissing() ? 'We could not find this job. Open its statement from your invoices.' : problemMessage(error);
+    return this.isMissing() ? 'billing.statement.missing' : problemMessage(error);
   });
   protected readonly kinds = STATEMENT_KIND_WORDS;
   protected readonly isZero = isZeroAmount;
@@ -177,7 +186,8 @@ export class StatementPage {
   constructor() {
     effect(() => {
       const s = this.statement();
-      if (s) this.title.setTitle(`Statement: ${s.jobTitle} · Layerbook client portal`);
+      this.language.current();
+      if (s) this.title.setTitle(this.translate.instant('layout.titles.statementFor', { job: s.jobTitle }) as string);
     });
     effect(() => {
       if (this.isMissing() && this.response) this.response.status = 404;
@@ -186,10 +196,10 @@ export class StatementPage {
 
   protected money(amount: string): string {
     const s = this.statement();
-    return s ? formatMoney(amount, s.currency, s.locale) : '';
+    return s ? formatAmount(amount, s.currency, this.language.locale()) : '';
   }
 
   protected day(isoDay: string): string {
-    return formatDay(isoDay, this.statement()?.locale ?? 'en-US');
+    return formatCalendarDay(isoDay, this.language.locale(), 'long');
   }
 }

@@ -1,3 +1,8 @@
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import billing from '../../../i18n/billing/en.json';
+import payments from '../../../i18n/payments/en.json';
+import proposals from '../../../i18n/proposals/en.json';
+import common from '../../../../../shared/i18n/words/common/en.json';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
@@ -10,7 +15,12 @@ import { openDeposit } from './payment-fixtures';
 async function render(invoice: PortalInvoiceDetail) {
   const leaveFor = vi.fn<(url: string) => void>();
   TestBed.configureTestingModule({
-    providers: [provideHttpClient(), provideHttpClientTesting(), { provide: LEAVE_FOR, useValue: leaveFor }],
+    providers: [
+      provideTestI18n({ billing, payments, proposals, common }),
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      { provide: LEAVE_FOR, useValue: leaveFor },
+    ],
   });
   const fixture = TestBed.createComponent(PayByCard);
   fixture.componentRef.setInput('invoice', invoice);

@@ -4,10 +4,12 @@ import { MatIconModule } from '@angular/material/icon';
 import type { PortalInvoiceDetail } from '@layerbook/contracts/types';
 import { problemMessage } from '../../core/errors/problem';
 import { hydratedSignal } from '../../shared/forms/hydrated';
-import { formatMoney } from '../../shared/format/money';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LEAVE_FOR, PaymentApi } from './payment-api';
 import { payButtonLabel } from './payment-words';
+import { TranslatePipe } from '@ngx-translate/core';
+import { Language } from '../../../../../shared/i18n/language';
+import { formatAmount } from '../../../../../shared/i18n/format';
 
 /**
  * How to pay an open invoice: by card on the processor's payment page (the server opens a checkout,
@@ -16,29 +18,29 @@ import { payButtonLabel } from './payment-words';
  */
 @Component({
   selector: 'lb-pay-by-card',
-  imports: [FormAlert, MatButtonModule, MatIconModule],
+  imports: [FormAlert, MatButtonModule, MatIconModule, TranslatePipe],
   template: `
     @let inv = invoice();
     <section class="pay" aria-labelledby="pay-heading">
       @if (inv.canPayOnline) {
-        <h2 id="pay-heading">Pay online</h2>
-        <p>You pay on a secure card payment page and come back here when it is done. Your receipt follows by e-mail.</p>
+        <h2 id="pay-heading">{{ 'payments.pay.online' | translate }}</h2>
+        <p>{{ 'payments.pay.onlineText' | translate }}</p>
         <lb-form-alert [message]="message()" />
         <button mat-flat-button type="button" [disabled]="!isHydrated() || isBusy()" (click)="pay()">
           <mat-icon aria-hidden="true">credit_card</mat-icon>
-          {{ label() }}
+          {{ label().key | translate: label().params }}
         </button>
         @if (isBusy()) {
-          <p class="small" role="status">Opening the payment page…</p>
+          <p class="small" role="status">{{ 'payments.pay.opening' | translate }}</p>
         }
       } @else {
-        <h2 id="pay-heading">How to pay</h2>
+        <h2 id="pay-heading">{{ 'payments.pay.how' | translate }}</h2>
         @if (inv.payOnlineNote; as note) {
           <p class="note">
-            <mat-icon aria-hidden="true">info</mat-icon><span>Card payment online is not available for this invoice. {{ note }}</span>
+            <mat-icon aria-hidden="true">info</mat-icon><span>{{ 'payments.pay.notAvailable' | translate: { note } }}</span>
           </p>
         }
-        <p>Pay {{ inv.document.firm.name }} the way the invoice says, and quote {{ inv.number }}.</p>
+        <p>{{ 'payments.pay.otherWay' | translate: { firm: inv.document.firm.name, number: inv.number } }}</p>
       }
     </section>
   `,
@@ -76,12 +78,13 @@ import { payButtonLabel } from './payment-words';
 export class PayByCard {
   private readonly api = inject(PaymentApi);
   private readonly leaveFor = inject(LEAVE_FOR);
+  private readonly language = inject(Language);
 
   readonly invoice = input.required<PortalInvoiceDetail>();
 
   protected readonly label = computed(() => {
     const inv = this.invoice();
-    return payButtonLabel(formatMoney(inv.amountDue, inv.currency, inv.locale));
+    return payButtonLabel(formatAmount(inv.amountDue, inv.currency, this.language.locale()));
   });
   protected readonly isBusy = signal(false);
   protected readonly message = signal<string | null>(null);

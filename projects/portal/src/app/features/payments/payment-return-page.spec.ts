@@ -1,3 +1,8 @@
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import billing from '../../../i18n/billing/en.json';
+import payments from '../../../i18n/payments/en.json';
+import proposals from '../../../i18n/proposals/en.json';
+import common from '../../../../../shared/i18n/words/common/en.json';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ApplicationRef } from '@angular/core';
@@ -14,7 +19,13 @@ const pause = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 async function render(first: CheckoutStatus, poll = { everyMs: 5, forMs: 60_000 }, invoice: PortalInvoiceDetail = openDeposit) {
   TestBed.configureTestingModule({
-    providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([]), { provide: CHECKOUT_POLL, useValue: poll }],
+    providers: [
+      provideTestI18n({ billing, payments, proposals, common }),
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      provideRouter([]),
+      { provide: CHECKOUT_POLL, useValue: poll },
+    ],
   });
   const fixture = TestBed.createComponent(PaymentReturnPage);
   fixture.componentRef.setInput('id', 'inv-1');
@@ -55,7 +66,7 @@ describe('the page the card page sends the client back to', () => {
 
   it('says the payment is being confirmed, asks again, then shows it paid with its receipt', async () => {
     const { html, http, settle, state } = await render(checkout('confirming'));
-    expect(html.querySelector('h1')?.textContent).toBe('Payment for invoice INV-0007');
+    expect(html.querySelector('h1')?.textContent?.trim()).toBe('Payment for invoice INV-0007');
     expect(state()).toContain('Payment received — being confirmed');
     expect(state()).toContain('Amount: $1,200.00');
     expect(html.querySelector('mat-progress-bar[aria-label="Checking the payment"]')).not.toBeNull();

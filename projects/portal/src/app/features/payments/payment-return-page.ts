@@ -8,10 +8,13 @@ import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 import type { CheckoutStatus, PortalInvoiceDetail } from '@layerbook/contracts/types';
 import { problemMessage, toProblem } from '../../core/errors/problem';
-import { formatMoney } from '../../shared/format/money';
 import { invoiceUrl } from '../billing/invoice-api';
 import { checkoutStatusUrl, paymentReceiptUrl } from './payment-api';
 import { checkoutWords } from './payment-words';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { Language } from '../../../../../shared/i18n/language';
+import { formatAmount } from '../../../../../shared/i18n/format';
 
 /** How often the return page asks again, and for how long, before it says it stopped checking. */
 export const CHECKOUT_POLL = new InjectionToken<{ readonly everyMs: number; readonly forMs: number }>('CHECKOUT_POLL', {
@@ -26,13 +29,15 @@ export const CHECKOUT_POLL = new InjectionToken<{ readonly everyMs: number; read
  */
 @Component({
   selector: 'lb-payment-return-page',
-  imports: [MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, SayPipe, TranslatePipe],
   templateUrl: './payment-return-page.html',
   styleUrl: './payment-return-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class PaymentReturnPage {
   private readonly title = inject(Title);
+  private readonly translate = inject(TranslateService);
+  private readonly language = inject(Language);
   private readonly poll = inject(CHECKOUT_POLL);
   private readonly isBrowser = isPlatformBrowser(inject(PLATFORM_ID));
 
@@ -53,9 +58,7 @@ export class PaymentReturnPage {
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return [400, 404].includes(toProblem(error).status)
-      ? 'We could not find this payment. Open the invoice from your invoices to see where it stands.'
-      : problemMessage(error);
+    return [400, 404].includes(toProblem(error).status) ? 'payments.return.missing' : problemMessage(error);
   });
   protected readonly words = computed(() => {
     const s = this.status();
@@ -63,7 +66,7 @@ export class PaymentReturnPage {
   });
   protected readonly amount = computed(() => {
     const s = this.status();
-    return s ? formatMoney(s.amount, s.currency, this.invoice()?.locale ?? 'en-US') : '';
+    return s ? formatAmount(s.amount, s.currency, this.language.locale()) : '';
   });
   protected readonly receiptUrl = computed(() => {
     const id = this.status()?.paymentId;
@@ -73,7 +76,13 @@ export class PaymentReturnPage {
   constructor() {
     effect(() => {
       const inv = this.invoice();
-      this.title.setTitle(inv ? `Payment for invoice ${inv.number} · Layerbook client portal` : 'Your payment · Layerbook client portal');
+      this.language.current();
+      this.title.setTitle(
+        this.translate.instant(
+          inv ? 'layout.titles.paymentFor' : 'layout.titles.payment',
+          inv ? { number: inv.number } : undefined,
+        ) as string,
+      );
     });
     // Asks again while the payment is not recorded (only in the browser: a server render answers at once).
     effect((onCleanup) => {
@@ -97,7 +106,7 @@ export class PaymentReturnPage {
   }
 
   protected money(amount: string, inv: PortalInvoiceDetail): string {
-    return formatMoney(amount, inv.currency, inv.locale);
+    return formatAmount(amount, inv.currency, this.language.locale());
   }
 
   /** After the page stopped asking: one more ask, and it keeps asking for another while. */

@@ -1,5 +1,9 @@
+import payments from '../../../i18n/payments/en.json';
+import { wordsAt } from '../../testing/words';
 import { describe, expect, it } from 'vitest';
 import { CANCELLED_WORDS, checkoutWords, payButtonLabel, receiptWhat } from './payment-words';
+
+const say = (key: string, params?: Readonly<Record<string, unknown>>) => wordsAt({ payments }, key, params);
 
 // Our own words throughout — common practice, no source.
 describe('checkoutWords', () => {
@@ -14,28 +18,29 @@ describe('checkoutWords', () => {
     ['paid', true, 'Paid — receipt RCT-0007', false],
   ] as const)('%s (stopped asking %s) reads "%s"', (state, gaveUp, heading, isWaiting) => {
     const words = checkoutWords({ state, receiptNumber: state === 'paid' ? 'RCT-0007' : null }, gaveUp);
-    expect(words.heading).toBe(heading);
+    expect(say(words.heading, words.headingParams)).toBe(heading);
     expect(words.isWaiting).toBe(isWaiting);
     expect(words.icon).toBeTruthy();
-    if (gaveUp && state !== 'paid') expect(words.text).toContain('do not pay again');
+    if (gaveUp && state !== 'paid') expect(say(words.text)).toContain('do not pay again');
   });
 
   it('says nothing was charged when the card page closed', () => {
-    expect(checkoutWords({ state: 'expired', receiptNumber: null }, false).text).toContain('nothing was charged');
+    expect(say(checkoutWords({ state: 'expired', receiptNumber: null }, false).text)).toContain('nothing was charged');
   });
 
   it('reads "Paid" without a receipt number while none is given', () => {
-    expect(checkoutWords({ state: 'paid', receiptNumber: null }, false).heading).toBe('Paid');
+    expect(say(checkoutWords({ state: 'paid', receiptNumber: null }, false).heading)).toBe('Paid');
   });
 });
 
 describe('payment words', () => {
   it('names the amount on the button', () => {
-    expect(payButtonLabel('$1,200.00')).toBe('Pay $1,200.00 by card');
+    const label = payButtonLabel('$1,200.00');
+    expect(say(label.key, label.params)).toBe('Pay $1,200.00 by card');
   });
 
   it('tells a client back from the card page that nothing was charged', () => {
-    expect(CANCELLED_WORDS).toMatch(/^The payment was not completed and nothing was charged\. You can try again\./);
+    expect(say(CANCELLED_WORDS)).toMatch(/^The payment was not completed and nothing was charged\. You can try again\./);
   });
 
   it.each([
@@ -46,6 +51,6 @@ describe('payment words', () => {
     ['refund', 'card', 'Refunded to your card'],
     ['refund', 'cheque', 'Refunded by cheque'],
   ] as const)('a %s by %s reads "%s"', (kind, method, text) => {
-    expect(receiptWhat({ kind, method })).toBe(text);
+    expect(say(receiptWhat({ kind, method }))).toBe(text);
   });
 });

@@ -1,15 +1,16 @@
 import type { CheckoutStatus, PaymentMethod, PortalReceipt } from '@layerbook/contracts/types';
 
 /** Back from the card page without paying (`?payment=cancelled`): the client's money did not move. */
-export const CANCELLED_WORDS =
-  'The payment was not completed and nothing was charged. You can try again. If your card was declined, try another card or ask your bank.';
+export const CANCELLED_WORDS = 'payments.cancelled';
 
-/** The pay button, naming what will be charged. */
-export const payButtonLabel = (amountDue: string): string => `Pay ${amountDue} by card`;
+/** The pay button, naming what will be charged: its words key and params. */
+export const payButtonLabel = (amountDue: string) => ({ key: 'payments.pay.button', params: { amount: amountDue } }) as const;
 
 /** What the return page says while the processor's word is on its way, and once it has come (never colour alone: an icon and words). */
 export interface CheckoutWords {
+  /** words keys (payments.checkout.*); the heading may name the receipt number */
   readonly heading: string;
+  readonly headingParams?: Readonly<Record<string, string>>;
   readonly text: string;
   readonly icon: string;
   /** still checking by itself */
@@ -25,16 +26,17 @@ export function checkoutWords(status: Pick<CheckoutStatus, 'state' | 'receiptNum
   switch (status.state) {
     case 'paid':
       return {
-        heading: status.receiptNumber ? `Paid — receipt ${status.receiptNumber}` : 'Paid',
-        text: 'Thank you. Your payment is recorded on the invoice, and the receipt is on its way to you by e-mail.',
+        heading: status.receiptNumber ? 'payments.checkout.paidReceipt' : 'payments.checkout.paid',
+        ...(status.receiptNumber ? { headingParams: { number: status.receiptNumber } } : {}),
+        text: 'payments.checkout.paidText',
         icon: 'task_alt',
         isWaiting: false,
         tone: 'done',
       };
     case 'expired':
       return {
-        heading: 'This payment was not completed',
-        text: 'The card payment page closed before a payment was made, and nothing was charged. You can start again from the invoice.',
+        heading: 'payments.checkout.expired',
+        text: 'payments.checkout.expiredText',
         icon: 'info',
         isWaiting: false,
         tone: 'notice',
@@ -42,15 +44,15 @@ export function checkoutWords(status: Pick<CheckoutStatus, 'state' | 'receiptNum
     case 'confirming':
       return gaveUp
         ? {
-            heading: 'Payment received — still being confirmed',
-            text: 'Your card payment went through, but recording it is taking longer than usual. Please do not pay again: it will show on the invoice and you will get a receipt by e-mail.',
+            heading: 'payments.checkout.confirmingLong',
+            text: 'payments.checkout.confirmingLongText',
             icon: 'schedule',
             isWaiting: false,
             tone: 'notice',
           }
         : {
-            heading: 'Payment received — being confirmed',
-            text: 'Your card payment went through. We are recording it on the invoice; this usually takes a few seconds and this page updates by itself.',
+            heading: 'payments.checkout.confirming',
+            text: 'payments.checkout.confirmingText',
             icon: 'hourglass_top',
             isWaiting: true,
             tone: 'waiting',
@@ -58,15 +60,15 @@ export function checkoutWords(status: Pick<CheckoutStatus, 'state' | 'receiptNum
     case 'open':
       return gaveUp
         ? {
-            heading: 'We have not heard about this payment yet',
-            text: 'If you completed the payment, it will show on the invoice shortly and you will get a receipt by e-mail; please do not pay again. If you left the payment page without paying, nothing was charged.',
+            heading: 'payments.checkout.notHeard',
+            text: 'payments.checkout.notHeardText',
             icon: 'schedule',
             isWaiting: false,
             tone: 'notice',
           }
         : {
-            heading: 'Checking your payment',
-            text: 'We are waiting for the card processor to tell us that your payment went through. This page updates by itself.',
+            heading: 'payments.checkout.checking',
+            text: 'payments.checkout.checkingText',
             icon: 'hourglass_top',
             isWaiting: true,
             tone: 'waiting',
@@ -75,18 +77,18 @@ export function checkoutWords(status: Pick<CheckoutStatus, 'state' | 'receiptNum
 }
 
 const PAID_BY: Readonly<Record<PaymentMethod, string>> = {
-  card: 'Paid by card online',
-  cheque: 'Paid by cheque',
-  transfer: 'Paid by bank transfer',
-  cash: 'Paid in cash',
+  card: 'payments.paidBy.card',
+  cheque: 'payments.paidBy.cheque',
+  transfer: 'payments.paidBy.transfer',
+  cash: 'payments.paidBy.cash',
 };
 const REFUNDED_BY: Readonly<Record<PaymentMethod, string>> = {
-  card: 'Refunded to your card',
-  cheque: 'Refunded by cheque',
-  transfer: 'Refunded by bank transfer',
-  cash: 'Refunded in cash',
+  card: 'payments.refundedBy.card',
+  cheque: 'payments.refundedBy.cheque',
+  transfer: 'payments.refundedBy.transfer',
+  cash: 'payments.refundedBy.cash',
 };
 
-/** What a receipt is for, in the client's words. */
+/** What a receipt is for, in the client's words (a words key). */
 export const receiptWhat = (receipt: Pick<PortalReceipt, 'kind' | 'method'>): string =>
   (receipt.kind === 'refund' ? REFUNDED_BY : PAID_BY)[receipt.method];

@@ -1,29 +1,33 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import type { PortalReceipt } from '@layerbook/contracts/types';
-import { formatDay, formatMoney } from '../../shared/format/money';
 import { paymentReceiptUrl, refundReceiptUrl } from './payment-api';
 import { receiptWhat } from './payment-words';
+import { TranslatePipe } from '@ngx-translate/core';
+import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
 
 /** An invoice's receipts — one per payment and per refund — each with its PDF. */
 @Component({
   selector: 'lb-receipt-list',
-  imports: [MatIconModule],
+  imports: [LbDatePipe, LbMoneyPipe, MatIconModule, TranslatePipe],
   template: `
     <section aria-labelledby="receipts-heading">
-      <h2 id="receipts-heading">Receipts</h2>
+      <h2 id="receipts-heading">{{ 'payments.receipts.heading' | translate }}</h2>
       <ul class="receipts">
         @for (r of receipts(); track r.id) {
           <li>
             <mat-icon aria-hidden="true">{{ r.kind === 'refund' ? 'undo' : 'payments' }}</mat-icon>
             <div>
               <p class="head">
-                <strong>Receipt {{ r.number }}</strong> <span class="amount">{{ money(r) }}</span>
+                <strong>{{ 'payments.receipts.receipt' | translate: { number: r.number } }}</strong>
+                <span class="amount">{{ r.amount | lbMoney: r.currency }}</span>
               </p>
-              <p class="what">{{ what(r) }}, {{ day(r.on) }}</p>
+              <p class="what">
+                {{ 'payments.receipts.what' | translate: { what: what(r) | translate, day: r.on.slice(0, 10) | lbDate: 'long' } }}
+              </p>
               <a class="pdf" [href]="pdfUrl(r)" download>
                 <mat-icon aria-hidden="true">download</mat-icon>
-                Download receipt {{ r.number }} (PDF)
+                {{ 'payments.receipts.download' | translate: { number: r.number } }}
               </a>
             </div>
           </li>
@@ -83,18 +87,8 @@ import { receiptWhat } from './payment-words';
 })
 export class ReceiptList {
   readonly receipts = input.required<readonly PortalReceipt[]>();
-  /** the firm's locale ("en-US"), as the invoice prints */
-  readonly locale = input.required<string>();
 
   protected readonly what = receiptWhat;
-
-  protected day(isoDay: string): string {
-    return formatDay(isoDay.slice(0, 10), this.locale());
-  }
-
-  protected money(r: PortalReceipt): string {
-    return formatMoney(r.amount, r.currency, this.locale());
-  }
 
   protected pdfUrl(r: PortalReceipt): string {
     return r.kind === 'refund' ? refundReceiptUrl(r.id) : paymentReceiptUrl(r.id);

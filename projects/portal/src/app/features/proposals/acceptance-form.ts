@@ -8,23 +8,24 @@ import { MatRadioModule } from '@angular/material/radio';
 import { SIGNED_NAME_MAX, SIGNED_NAME_MIN, type PortalProposal, type PortalProposalAccepted } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
-import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { requiredText } from '../../shared/forms/text-validators';
-import { formatMoney } from '../../shared/format/money';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ProposalApi } from './proposal-api';
+import { TranslatePipe } from '@ngx-translate/core';
+import { FieldErrorPipe, type FieldErrorWords } from '../../../../../shared/forms/field-error-pipe';
+import { LbMoneyPipe } from '../../../../../shared/i18n/format';
 
 /** Mirrors `proposalAcceptance` in @layerbook/contracts. */
 const WORDS = {
-  variantId: { required: 'Choose an option.' },
+  variantId: { required: 'proposals.acceptance.chooseRequired' },
   signedName: {
-    required: 'Type your full name to sign.',
-    minlength: `Type your full name to sign (at least ${SIGNED_NAME_MIN} characters).`,
-    maxlength: `Use at most ${SIGNED_NAME_MAX} characters.`,
+    required: 'proposals.acceptance.nameRequired',
+    minlength: { key: 'proposals.acceptance.nameTooShort', params: { min: SIGNED_NAME_MIN } },
+    maxlength: { key: 'proposals.acceptance.tooLong', params: { max: SIGNED_NAME_MAX } },
   },
-  consent: { required: 'Tick the box to confirm you accept this proposal.' },
-} as const;
+  consent: { required: 'proposals.acceptance.consentRequired' },
+} as const satisfies Record<string, FieldErrorWords>;
 
 /** Trimmed length, as the server counts it. */
 const trimmedMin = (min: number) => (c: { value: string }) =>
@@ -33,14 +34,25 @@ const trimmedMin = (min: number) => (c: { value: string }) =>
 /** The typed signature: one option, the client's full name, and a ticked box. */
 @Component({
   selector: 'lb-acceptance-form',
-  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, MatRadioModule, ReactiveFormsModule],
+  imports: [
+    FieldErrorPipe,
+    FormAlert,
+    LbMoneyPipe,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatRadioModule,
+    ReactiveFormsModule,
+    TranslatePipe,
+  ],
   template: `
     <form [formGroup]="form" (ngSubmit)="acceptProposal()" novalidate aria-labelledby="accept-heading">
-      <h2 id="accept-heading">Accept this proposal</h2>
+      <h2 id="accept-heading">{{ 'proposals.acceptance.heading' | translate }}</h2>
       <fieldset class="lb-gate lb-form" [disabled]="!isHydrated() || isBusy()">
         <lb-form-alert [message]="formMessage()" />
         <div>
-          <p id="choose-label" class="group-label">Choose an option</p>
+          <p id="choose-label" class="group-label">{{ 'proposals.acceptance.choose' | translate }}</p>
           <mat-radio-group
             formControlName="variantId"
             aria-labelledby="choose-label"
@@ -48,29 +60,31 @@ const trimmedMin = (min: number) => (c: { value: string }) =>
             [attr.aria-describedby]="showError('variantId') ? 'variant-error' : null"
           >
             @for (option of options(); track option.id) {
-              <mat-radio-button [value]="option.id">{{ option.text }}</mat-radio-button>
+              <mat-radio-button [value]="option.id">{{
+                'proposals.acceptance.option' | translate: { label: option.label, total: option.total | lbMoney: currency() }
+              }}</mat-radio-button>
             }
           </mat-radio-group>
           @if (showError('variantId')) {
-            <p class="field-error" id="variant-error">{{ errorText(form.controls.variantId, words.variantId) }}</p>
+            <p class="field-error" id="variant-error">{{ form.controls.variantId | lbFieldError: words.variantId }}</p>
           }
         </div>
         <mat-form-field>
-          <mat-label>Your full name</mat-label>
+          <mat-label>{{ 'proposals.acceptance.fullName' | translate }}</mat-label>
           <input matInput formControlName="signedName" autocomplete="name" required [maxlength]="signedNameMax" />
-          <mat-hint>Typing your name is your signature.</mat-hint>
-          <mat-error>{{ errorText(form.controls.signedName, words.signedName) }}</mat-error>
+          <mat-hint>{{ 'proposals.acceptance.signatureHint' | translate }}</mat-hint>
+          <mat-error>{{ form.controls.signedName | lbFieldError: words.signedName }}</mat-error>
         </mat-form-field>
         <div>
           <mat-checkbox formControlName="consent" [attr.aria-describedby]="showError('consent') ? 'consent-error' : null">
-            I accept this proposal and its terms.
+            {{ 'proposals.acceptance.consent' | translate }}
           </mat-checkbox>
           @if (showError('consent')) {
-            <p class="field-error" id="consent-error">{{ errorText(form.controls.consent, words.consent) }}</p>
+            <p class="field-error" id="consent-error">{{ form.controls.consent | lbFieldError: words.consent }}</p>
           }
         </div>
         <div class="lb-form-actions">
-          <button mat-flat-button type="submit" [disabled]="isBusy()">Accept this proposal</button>
+          <button mat-flat-button type="submit" [disabled]="isBusy()">{{ 'proposals.acceptance.submit' | translate }}</button>
         </div>
       </fieldset>
     </form>
@@ -109,14 +123,11 @@ export class AcceptanceForm {
     consent: [false, Validators.requiredTrue],
   });
   protected readonly signedNameMax = SIGNED_NAME_MAX;
-  protected readonly options = computed(() => {
-    const s = this.proposal().snapshot;
-    return s.options.map((o) => ({ id: o.id, text: `${o.label} — ${formatMoney(o.total, s.currency, s.locale)}` }));
-  });
+  protected readonly options = computed(() => this.proposal().snapshot.options);
+  protected readonly currency = computed(() => this.proposal().snapshot.currency);
   protected readonly isBusy = signal(false);
   protected readonly formMessage = signal<string | null>(null);
   protected readonly isHydrated = hydratedSignal();
-  protected readonly errorText = errorText;
   protected readonly words = WORDS;
   /** bumped on submit so the radio and checkbox errors (outside mat-form-field) re-check under OnPush */
   private readonly submitted = signal(0);

@@ -6,18 +6,19 @@ import { MatInputModule } from '@angular/material/input';
 import { PROPOSAL_COMMENT_MAX, type PortalProposal } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
-import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ProposalApi } from './proposal-api';
+import { TranslatePipe } from '@ngx-translate/core';
+import { FieldErrorPipe, type FieldErrorWords } from '../../../../../shared/forms/field-error-pipe';
 
 type Mode = 'changes' | 'decline' | null;
 
 /** The other answers: ask for changes (a comment is needed) or decline (a comment is optional). */
 @Component({
   selector: 'lb-answer-forms',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [FieldErrorPipe, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, TranslatePipe],
   template: `
     <div class="lb-form-actions">
       <button
@@ -27,38 +28,50 @@ type Mode = 'changes' | 'decline' | null;
         [attr.aria-expanded]="mode() === 'changes'"
         (click)="open('changes')"
       >
-        Ask for changes
+        {{ 'proposals.answers.askChanges' | translate }}
       </button>
       <button mat-button type="button" [disabled]="!isHydrated()" [attr.aria-expanded]="mode() === 'decline'" (click)="open('decline')">
-        Decline
+        {{ 'proposals.answers.decline' | translate }}
       </button>
     </div>
     @if (mode() === 'changes') {
-      <form [formGroup]="changes" (ngSubmit)="sendChanges()" novalidate class="panel" aria-label="Ask for changes">
+      <form
+        [formGroup]="changes"
+        (ngSubmit)="sendChanges()"
+        novalidate
+        class="panel"
+        [attr.aria-label]="'proposals.answers.askChanges' | translate"
+      >
         <fieldset class="lb-gate lb-form" [disabled]="isBusy()">
           <lb-form-alert [message]="formMessage()" />
           <mat-form-field>
-            <mat-label>What would you like changed?</mat-label>
+            <mat-label>{{ 'proposals.answers.changesLabel' | translate }}</mat-label>
             <textarea matInput formControlName="comment" rows="4" [maxlength]="commentMax" required></textarea>
-            <mat-error>{{ errorText(changes.controls.comment, words) }}</mat-error>
+            <mat-error>{{ changes.controls.comment | lbFieldError: words }}</mat-error>
           </mat-form-field>
           <div class="lb-form-actions">
-            <button mat-flat-button type="submit">Send my request</button>
+            <button mat-flat-button type="submit">{{ 'proposals.answers.send' | translate }}</button>
           </div>
         </fieldset>
       </form>
     }
     @if (mode() === 'decline') {
-      <form [formGroup]="decline" (ngSubmit)="sendDecline()" novalidate class="panel" aria-label="Decline this proposal">
+      <form
+        [formGroup]="decline"
+        (ngSubmit)="sendDecline()"
+        novalidate
+        class="panel"
+        [attr.aria-label]="'proposals.answers.declineLabel' | translate"
+      >
         <fieldset class="lb-gate lb-form" [disabled]="isBusy()">
           <lb-form-alert [message]="formMessage()" />
           <mat-form-field>
-            <mat-label>Anything the firm should know? (optional)</mat-label>
+            <mat-label>{{ 'proposals.answers.declineComment' | translate }}</mat-label>
             <textarea matInput formControlName="comment" rows="3" [maxlength]="commentMax"></textarea>
-            <mat-error>{{ errorText(decline.controls.comment, words) }}</mat-error>
+            <mat-error>{{ decline.controls.comment | lbFieldError: words }}</mat-error>
           </mat-form-field>
           <div class="lb-form-actions">
-            <button mat-flat-button type="submit">Decline the proposal</button>
+            <button mat-flat-button type="submit">{{ 'proposals.answers.declineSubmit' | translate }}</button>
           </div>
         </fieldset>
       </form>
@@ -85,8 +98,10 @@ export class AnswerForms {
   protected readonly isBusy = signal(false);
   protected readonly formMessage = signal<string | null>(null);
   protected readonly isHydrated = hydratedSignal();
-  protected readonly errorText = errorText;
-  protected readonly words = { required: 'Say what you would like changed.', maxlength: `Use at most ${PROPOSAL_COMMENT_MAX} characters.` };
+  protected readonly words: FieldErrorWords = {
+    required: 'proposals.answers.changesRequired',
+    maxlength: { key: 'proposals.answers.tooLong', params: { max: PROPOSAL_COMMENT_MAX } },
+  };
   protected readonly commentMax = PROPOSAL_COMMENT_MAX;
 
   protected open(mode: Mode): void {

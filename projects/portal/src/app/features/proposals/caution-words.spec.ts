@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { cautionFootnotes } from './caution-words';
+import { cautionFootnotes, cautionView } from './caution-words';
 
 describe('cautionFootnotes', () => {
   it.each([
@@ -13,5 +13,31 @@ describe('cautionFootnotes', () => {
     ['nothing to say', { rule: ' ', jurisdiction: '' }, []],
   ])('%s', (_case, caution, lines) => {
     expect(cautionFootnotes(caution)).toEqual(lines);
+  });
+});
+
+describe('cautionView', () => {
+  const spanish: Record<string, string> = {
+    'lime-alkali.title': 'La cal es cáustica',
+    'lime-alkali.products': 'Productos de cal: {{products}}.',
+    'jurisdiction.guidance': 'Orientación, no un reglamento.',
+  };
+  const say = (key: string, params: Readonly<Record<string, string>> = {}) =>
+    spanish[key]?.replace(/\{\{(\w+)\}\}/g, (_, name: string) => params[name] ?? '') ?? null;
+
+  it('translates by key and keeps the English where the words have no key', () => {
+    const view = cautionView(
+      'lime-alkali',
+      {
+        title: 'Lime is caustic',
+        bullets: ['Lime products: Estuco A, Estuco B.', 'A line the engine never wrote.'],
+        rule: 'ICSC 0408 (calcium hydroxide)',
+        jurisdiction: 'Guidance, not a regulation.',
+      },
+      say,
+    );
+    expect(view.title).toBe('La cal es cáustica');
+    expect(view.bullets).toEqual(['Productos de cal: Estuco A, Estuco B.', 'A line the engine never wrote.']);
+    expect(view.footnotes).toEqual(['ICSC 0408 (calcium hydroxide)', 'Orientación, no un reglamento.']);
   });
 });

@@ -1,3 +1,4 @@
+import { CAUTION_WORDS, cautionLineOf } from '@layerbook/domain';
 import type { SnapshotCaution } from '@layerbook/contracts/types';
 
 /**
@@ -7,4 +8,53 @@ import type { SnapshotCaution } from '@layerbook/contracts/types';
  */
 export function cautionFootnotes(caution: Pick<SnapshotCaution, 'rule' | 'jurisdiction'>): string[] {
   return [caution.rule, caution.jurisdiction ?? ''].map((line) => line.trim()).filter((line) => line !== '');
+}
+
+/** Words of the `cautions` area by key (without the area), or null when the reader's words lack it. */
+export type CautionSay = (key: string, params?: Readonly<Record<string, string>>) => string | null;
+
+/** A caution as the reader sees it: title, bullets and footnotes in their language. */
+export interface CautionView {
+  readonly title: string;
+  readonly bullets: readonly string[];
+  readonly footnotes: readonly string[];
+}
+
+const JURISDICTION_KEYS = ['jurisdiction.usFederal', 'jurisdiction.guidance', 'jurisdiction.outsideUs'] as const;
+
+/**
+ * A caution (or the lead-safe notice, id 'lead-safe-work') in the reader's language by its stable
+ * keys: title and rule by id, each English bullet read back to its key and params, the jurisdiction
+ * sentences one by one. Whatever has no key or no words shows in the English the snapshot holds —
+ * never dropped, never softened.
+ */
+export function cautionView(
+  id: string,
+  caution: Pick<SnapshotCaution, 'title' | 'bullets' | 'rule' | 'jurisdiction'>,
+  say: CautionSay,
+): CautionView {
+  const known = (key: string, english: string) =>
+    key in CAUTION_WORDS && CAUTION_WORDS[key as keyof typeof CAUTION_WORDS] === english ? say(key) : null;
+  const title = known(`${id}.title`, caution.title) ?? caution.title;
+  const bullets = caution.bullets.map((bullet) => {
+    const line = cautionLineOf(bullet);
+    return (line && say(line.key, line.params)) ?? bullet;
+  });
+  const rule = known(`${id}.rule`, caution.rule.trim()) ?? caution.rule;
+  let jurisdiction = (caution.jurisdiction ?? '').trim();
+  const said: string[] = [];
+  for (const key of JURISDICTION_KEYS) {
+    const english = CAUTION_WORDS[key];
+    if (jurisdiction.includes(english)) {
+      said.push(say(key) ?? english);
+      jurisdiction = jurisdiction.replace(english, '').trim();
+    }
+  }
+  if (jurisdiction) said.push(jurisdiction);
+  return { title, bullets, footnotes: cautionFootnotes({ rule, jurisdiction: said.join(' ') }) };
+}
+
+/** The standing line under the cautions in the reader's language when it is the engine's own. */
+export function standingView(standing: string, say: CautionSay): string {
+  return (standing.trim() === CAUTION_WORDS.standing && say('standing')) || standing;
 }

@@ -1,3 +1,5 @@
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import proposals from '../../../i18n/proposals/en.json';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import { describe, expect, it } from 'vitest';
@@ -5,7 +7,7 @@ import { DepositReady } from './deposit-ready';
 
 describe('the deposit invoice right after accepting', () => {
   it('links to the invoice to pay it now', async () => {
-    TestBed.configureTestingModule({ providers: [provideRouter([])] });
+    TestBed.configureTestingModule({ providers: [provideTestI18n({ proposals }), provideRouter([])] });
     const fixture = TestBed.createComponent(DepositReady);
     fixture.componentRef.setInput('invoiceId', 'inv-1');
     fixture.componentRef.setInput('firmName', 'Quillfeather Finishes');

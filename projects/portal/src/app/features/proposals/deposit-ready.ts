@@ -1,3 +1,4 @@
+import { TranslatePipe } from '@ngx-translate/core';
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -6,14 +7,14 @@ import { RouterLink } from '@angular/router';
 /** Right after accepting, when the firm issued the deposit invoice in the same step: the way to pay it now. */
 @Component({
   selector: 'lb-deposit-ready',
-  imports: [MatButtonModule, MatIconModule, RouterLink],
+  imports: [MatButtonModule, MatIconModule, RouterLink, TranslatePipe],
   template: `
     <section class="deposit" aria-labelledby="deposit-heading">
-      <h2 id="deposit-heading">Your deposit invoice is ready</h2>
-      <p>{{ firmName() }} has sent you the deposit invoice by e-mail. You can pay it by card now, or later from your invoices.</p>
+      <h2 id="deposit-heading">{{ 'proposals.deposit.heading' | translate }}</h2>
+      <p>{{ 'proposals.deposit.text' | translate: { firm: firmName() } }}</p>
       <a mat-flat-button [routerLink]="['/invoices', invoiceId()]">
         <mat-icon aria-hidden="true">credit_card</mat-icon>
-        Pay the deposit now
+        {{ 'proposals.deposit.pay' | translate }}
       </a>
     </section>
   `,

@@ -1,35 +1,52 @@
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { ProposalSnapshot, SnapshotOption } from '@layerbook/contracts/types';
-import { formatDay, formatMoney } from '../../shared/format/money';
-import { cautionFootnotes } from './caution-words';
+import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
+import { Language } from '../../../../../shared/i18n/language';
+import { type CautionSay, cautionView, standingView } from './caution-words';
 import { paymentTermsSentence } from './terms-words';
 
 /** The proposal as sent, drawn only from its frozen snapshot: what the PDF says, on the page. */
 @Component({
   selector: 'lb-proposal-document',
-  imports: [MatIconModule],
+  imports: [LbDatePipe, LbMoneyPipe, MatIconModule, TranslatePipe],
   templateUrl: './proposal-document.html',
   styleUrl: './proposal-document.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ProposalDocument {
+  private readonly translate = inject(TranslateService);
+  private readonly language = inject(Language);
+
   readonly snapshot = input.required<ProposalSnapshot>();
   /** the option the client accepted, shown as chosen */
   readonly chosenOptionId = input<string | null>(null);
 
-  protected readonly termsSentence = paymentTermsSentence;
-  protected readonly footnotes = cautionFootnotes;
   protected readonly optionLabels = computed(() => new Map(this.snapshot().options.map((o) => [o.id, o.label])));
 
-  protected money(amount: string): string {
-    const s = this.snapshot();
-    return formatMoney(amount, s.currency, s.locale);
-  }
+  /** Words of the shared `cautions` area; null when the reader's words lack the key (the English stays). */
+  private readonly sayCaution: CautionSay = (key, params) => {
+    const full = `cautions.${key}`;
+    const text = this.translate.instant(full, params) as string;
+    return text === full ? null : text;
+  };
 
-  protected day(isoDay: string | null): string {
-    return isoDay ? formatDay(isoDay, this.snapshot().locale) : 'On acceptance';
-  }
+  /** Cautions and terms in the reader's language (recomputed on a language switch). */
+  protected readonly words = computed(() => {
+    this.language.current();
+    const s = this.snapshot();
+    return {
+      terms: paymentTermsSentence(
+        s.terms,
+        (key, params) => this.translate.instant(`proposals.${key}`, params) as string,
+        this.language.locale(),
+      ),
+      lead: s.leadNotice ? cautionView('lead-safe-work', s.leadNotice, this.sayCaution) : null,
+      cautions: s.safety.cautions.map((c) => ({ id: c.id, ...cautionView(c.id, c, this.sayCaution) })),
+      standing: standingView(s.safety.standing, this.sayCaution),
+    };
+  });
 
   protected isChosen(option: SnapshotOption): boolean {
     return option.id === this.chosenOptionId();

@@ -3,31 +3,33 @@ import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/c
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { PROPOSAL_CLIENT_STATUS_LABELS, type ItemList, type PortalProposalSummary } from '@layerbook/contracts/types';
+import { TranslatePipe } from '@ngx-translate/core';
+import type { ItemList, PortalProposalSummary } from '@layerbook/contracts/types';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { LbDatePipe } from '../../../../../shared/i18n/format';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
-import { formatDay } from '../../shared/format/money';
 import { PROPOSALS_URL } from './proposal-api';
 
 @Component({
   selector: 'lb-proposal-list',
-  imports: [MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [LbDatePipe, MatIconModule, MatProgressBarModule, RouterLink, SayPipe, TranslatePipe],
   template: `
-    <h1>Your projects</h1>
+    <h1>{{ 'proposals.list.title' | translate }}</h1>
     @if (client(); as me) {
-      <p class="lb-lead">Proposals, sample boards, invoices and receipts from {{ me.firmName }}.</p>
-      <p><a routerLink="/boards">See your sample boards</a></p>
+      <p class="lb-lead">{{ 'proposals.list.lead' | translate: { firm: me.firmName } }}</p>
+      <p>
+        <a routerLink="/boards">{{ 'proposals.list.boards' | translate }}</a>
+      </p>
     }
     @if (isLoading()) {
-      <mat-progress-bar mode="indeterminate" aria-label="Loading your projects" />
+      <mat-progress-bar mode="indeterminate" [attr.aria-label]="'proposals.list.loading' | translate" />
     } @else if (loadMessage(); as message) {
-      <p class="lb-form-alert" role="alert">{{ message }}</p>
+      <p class="lb-form-alert" role="alert">{{ message | lbSay }}</p>
     } @else if (projects().length === 0) {
       <div class="empty">
         <mat-icon aria-hidden="true">folder_open</mat-icon>
-        <p>
-          Nothing here yet. When your firm sends you a proposal or an invoice, it will appear on this page and you will get an e-mail too.
-        </p>
+        <p>{{ 'proposals.list.empty' | translate }}</p>
       </div>
     } @else {
       <ul class="list">
@@ -36,14 +38,15 @@ import { PROPOSALS_URL } from './proposal-api';
             <h2>{{ project.title }}</h2>
             <p class="site">{{ project.siteAddress }}</p>
             <p>
-              Proposal, version {{ project.latest.version }}:
-              <strong>{{ statusWords[project.latest.status] }}</strong>
+              {{ 'proposals.list.version' | translate: { version: project.latest.version } }}
+              <strong>{{ 'proposals.status.' + project.latest.status | translate }}</strong>
               @if (project.latest.status === 'sent') {
-                · the offer stands until {{ day(project.latest.expiresOn) }}
+                {{ 'proposals.list.standsUntil' | translate: { day: project.latest.expiresOn | lbDate: 'long' } }}
               }
             </p>
             <a [routerLink]="['/proposals', project.latest.id]"
-              >Read the proposal<span class="lb-visually-hidden"> for {{ project.title }}</span></a
+              >{{ 'proposals.list.read' | translate
+              }}<span class="lb-visually-hidden">{{ 'proposals.list.readFor' | translate: { title: project.title } }}</span></a
             >
           </li>
         }
@@ -106,9 +109,4 @@ export class ProposalList {
     const error = this.list.error();
     return error ? toProblem(error).title : null;
   });
-  protected readonly statusWords = PROPOSAL_CLIENT_STATUS_LABELS;
-
-  protected day(isoDay: string): string {
-    return formatDay(isoDay, 'en-US');
-  }
 }

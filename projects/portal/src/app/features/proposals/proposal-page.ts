@@ -5,9 +5,12 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
-import { PROPOSAL_CLIENT_STATUS_LABELS, type PortalProposal, type PortalProposalAccepted } from '@layerbook/contracts/types';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import type { PortalProposal, PortalProposalAccepted } from '@layerbook/contracts/types';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { LbDatePipe } from '../../../../../shared/i18n/format';
+import { Language } from '../../../../../shared/i18n/language';
 import { problemMessage, toProblem } from '../../core/errors/problem';
-import { formatDay, formatMoment } from '../../shared/format/money';
 import { AcceptanceForm } from './acceptance-form';
 import { AnswerForms } from './answer-forms';
 import { DepositReady } from './deposit-ready';
@@ -17,7 +20,18 @@ import { ProposalDocument } from './proposal-document';
 /** One proposal version for the signed-in client: read it, then accept, ask for changes or decline. */
 @Component({
   selector: 'lb-proposal-page',
-  imports: [AcceptanceForm, AnswerForms, DepositReady, MatIconModule, MatProgressBarModule, ProposalDocument, RouterLink],
+  imports: [
+    AcceptanceForm,
+    AnswerForms,
+    DepositReady,
+    LbDatePipe,
+    MatIconModule,
+    MatProgressBarModule,
+    ProposalDocument,
+    RouterLink,
+    SayPipe,
+    TranslatePipe,
+  ],
   templateUrl: './proposal-page.html',
   styles: `
     .heading {
@@ -54,6 +68,8 @@ export class ProposalPage {
   private readonly title = inject(Title);
   private readonly response = inject(RESPONSE_INIT, { optional: true });
   private readonly document = inject(DOCUMENT);
+  private readonly translate = inject(TranslateService);
+  private readonly language = inject(Language);
 
   /** route parameter */
   readonly id = input.required<string>();
@@ -70,11 +86,8 @@ export class ProposalPage {
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return this.isMissing()
-      ? 'We could not find this proposal. Open it from your projects or from the e-mail the firm sent.'
-      : problemMessage(error);
+    return this.isMissing() ? 'proposals.page.missing' : problemMessage(error);
   });
-  protected readonly statusWords = PROPOSAL_CLIENT_STATUS_LABELS;
   /** the deposit invoice issued in the acceptance just made (the answer says; a later visit finds it under the invoices) */
   protected readonly depositInvoiceId = signal<string | null>(null);
 
@@ -89,20 +102,13 @@ export class ProposalPage {
   constructor() {
     effect(() => {
       const p = this.proposal();
-      if (p) this.title.setTitle(`${p.snapshot.title} · Layerbook client portal`);
+      this.language.current();
+      if (p) this.title.setTitle(this.translate.instant('layout.titles.named', { name: p.snapshot.title }) as string);
     });
     // Tells crawlers and the host's logs the truth while rendering on the server.
     effect(() => {
       if (this.isMissing() && this.response) this.response.status = 404;
     });
-  }
-
-  protected day(isoDay: string): string {
-    return formatDay(isoDay, this.proposal()?.snapshot.locale ?? 'en-US');
-  }
-
-  protected moment(iso: string | null): string {
-    return iso ? formatMoment(iso, this.proposal()?.snapshot.locale ?? 'en-US') : '';
   }
 
   protected optionLabel(p: PortalProposal): string {
