@@ -1,7 +1,6 @@
-import { HttpClient } from '@angular/common/http';
-import { Injectable, InjectionToken, type Signal, computed, inject, signal } from '@angular/core';
-import type { ProgressMark } from '@layerbook/contracts/types';
-import { firstValueFrom } from 'rxjs';
+import { InjectionToken, type Signal, inject } from '@angular/core';
+import type { JobProgressView } from '@layerbook/contracts/types';
+import { OfflineMarks } from './offline/offline-marks';
 
 export type LayerMarkKind = 'layerDone' | 'layerReopened';
 
@@ -16,38 +15,18 @@ export interface PendingMark {
 }
 
 /**
- * How the sheet marks a layer done or reopens it. The offline service (offline/) keeps marks made
- * without a connection and sends them later; until it is provided, marks go straight to the API.
+ * How the sheet marks a layer done or reopens it: what it needs of the offline service (offline/),
+ * which keeps marks made without a connection and sends them later. Specs give a fake.
  */
 export interface SheetMarks {
-  /** resolves once the mark is sent or safely kept on the phone */
+  /** resolves once the mark is counted or safely kept on the phone */
   mark(jobId: string, workItemId: string, kind: LayerMarkKind, on: string): Promise<void>;
   pending(jobId: string): Signal<readonly PendingMark[]>;
+  /** the server's answer to the last mark it counted from this phone (null before any) */
+  progress(jobId: string): Signal<JobProgressView | null>;
   /** forgets a refused mark once read */
   dismiss(clientKey: string): void;
   readonly online: Signal<boolean>;
 }
 
-/** Straight to POST /api/jobs/:id/progress, one fresh clientKey per mark so a resent request counts once. */
-@Injectable({ providedIn: 'root' })
-export class DirectMarks implements SheetMarks {
-  private readonly http = inject(HttpClient);
-  private readonly none = signal<readonly PendingMark[]>([]);
-
-  readonly online = computed(() => true);
-
-  async mark(jobId: string, workItemId: string, kind: LayerMarkKind, on: string): Promise<void> {
-    const mark: ProgressMark = { kind, workItemId, on, clientKey: crypto.randomUUID() };
-    await firstValueFrom(this.http.post(`/api/jobs/${encodeURIComponent(jobId)}/progress`, mark));
-  }
-
-  pending(): Signal<readonly PendingMark[]> {
-    return this.none.asReadonly();
-  }
-
-  dismiss(): void {
-    // Nothing is kept: a refused mark was reported when it was made.
-  }
-}
-
-export const SHEET_MARKS = new InjectionToken<SheetMarks>('SHEET_MARKS', { providedIn: 'root', factory: () => inject(DirectMarks) });
+export const SHEET_MARKS = new InjectionToken<SheetMarks>('SHEET_MARKS', { providedIn: 'root', factory: () => inject(OfflineMarks) });

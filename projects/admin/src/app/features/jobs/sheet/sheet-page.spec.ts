@@ -2,6 +2,7 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
+import type { JobProgressView } from '@layerbook/contracts/types';
 import { provideRouter } from '@angular/router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { Language } from '../../../../../../shared/i18n/language';
@@ -21,10 +22,18 @@ const MONEY =
 class FakeMarks implements SheetMarks {
   readonly waiting = signal<readonly PendingMark[]>([]);
   readonly online = signal(true);
-  readonly mark = vi.fn(() => Promise.resolve());
+  readonly answer = signal<JobProgressView | null>(null);
+  /** like the offline service: a mark the server counts gives a new progress answer */
+  readonly mark = vi.fn(() => {
+    this.answer.set({ workItems: [], walkthroughOn: null, valueLines: [] });
+    return Promise.resolve();
+  });
   readonly dismiss = vi.fn();
   pending() {
     return this.waiting.asReadonly();
+  }
+  progress() {
+    return this.answer.asReadonly();
   }
 }
 
@@ -103,6 +112,14 @@ describe('SheetPage', () => {
     expect(text()).toContain('Done on Dec 8, 2026');
     expect(button('Reopen: Glaze coat, Dining room · Walls')).not.toBeNull();
     expect(text()).toContain('Not marked: The day is too late.');
+  });
+
+  it('reads the sheet again when a mark kept on the phone is counted later (back online)', async () => {
+    const { fixture, http, marks } = await render();
+    marks.answer.set({ workItems: [], walkthroughOn: null, valueLines: [] });
+    fixture.detectChanges();
+    await vi.waitFor(() => http.expectOne('/api/jobs/job-1/sheet').flush(sheet));
+    await fixture.whenStable();
   });
 
   it('tells the crew when the phone is offline', async () => {

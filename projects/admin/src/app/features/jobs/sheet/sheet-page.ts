@@ -1,5 +1,5 @@
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input, linkedSignal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, computed, effect, inject, input, linkedSignal, untracked } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
@@ -77,7 +77,7 @@ const jobUrl = (id: string, rest: string) => `/api/jobs/${encodeURIComponent(id)
         <section aria-labelledby="sheet-work">
           <h2 id="sheet-work">{{ 'sheet.work.heading' | translate }}</h2>
           <p class="muted">{{ 'sheet.work.hint' | translate }}</p>
-          <lb-sheet-work [sheet]="s" (marked)="sheet.reload()" />
+          <lb-sheet-work [sheet]="s" />
         </section>
 
         <section aria-labelledby="sheet-finishes">
@@ -93,13 +93,13 @@ const jobUrl = (id: string, rest: string) => `/api/jobs/${encodeURIComponent(id)
         <section id="sheet-photos">
           <lb-photo-gallery
             [subject]="s.title"
-            [heading]="'sheet.photos.heading' | translate"
+            heading="sheet.photos.heading"
             [(photos)]="photos"
             [uploadUrl]="photosUrl()"
             [deleteBase]="photosUrl()"
             [useCamera]="true"
             [thumbHeight]="96"
-            [emptyText]="'sheet.photos.empty' | translate"
+            emptyText="sheet.photos.empty"
           />
         </section>
       }
@@ -199,6 +199,16 @@ export class SheetPage {
     const error = this.sheet.error();
     return error ? problemMessage(error) : null;
   });
+
+  constructor() {
+    // Each mark the server counts (at once, or later from the phone's queue) reads the sheet again.
+    let seen: unknown = null;
+    effect(() => {
+      const answer = this.marks.progress(this.id())();
+      if (answer && answer !== seen) untracked(() => this.sheet.reload());
+      seen = answer;
+    });
+  }
 
   protected readonly jumps = [
     { id: 'sheet-safety', words: 'sheet.safety.heading' },

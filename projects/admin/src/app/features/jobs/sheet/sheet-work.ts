@@ -1,5 +1,5 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { TranslatePipe, TranslateService } from '@ngx-translate/core';
@@ -234,8 +234,6 @@ export class SheetWork {
   protected readonly marks = inject(SHEET_MARKS);
 
   readonly sheet = input.required<JobSheet>();
-  /** a mark was sent or kept: the page reads the sheet again */
-  readonly marked = output<void>();
 
   /** the work item whose mark is on its way, so the buttons wait */
   protected readonly sending = signal<string | null>(null);
@@ -282,7 +280,6 @@ export class SheetWork {
     this.message.set(null);
     try {
       await this.marks.mark(this.sheet().id, layer.workItemId, kind, todayIn(this.sheet().timeZone, new Date()));
-      this.marked.emit();
     } catch (error) {
       const what = `${layer.name}, ${room.name} · ${surface.name}`;
       this.message.set(this.translate.instant('sheet.work.failed', { what, reason: markProblem(error) }) as string);
