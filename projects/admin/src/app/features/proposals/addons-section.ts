@@ -1,22 +1,23 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { TranslatePipe } from '@ngx-translate/core';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import type { EstimateResultJson } from '@layerbook/domain';
 
 /** Alternates the client may add, each priced on its own (no minimum charge). */
 @Component({
   selector: 'lb-addons-section',
-  imports: [MoneyPipe],
+  imports: [MoneyPipe, TranslatePipe],
   template: `
-    <h2 id="addons-heading">Add-ons</h2>
+    <h2 id="addons-heading">{{ 'proposals.addons.heading' | translate }}</h2>
     @if (result().options.length > 0) {
       <div class="table-wrap" tabindex="0" role="region" aria-labelledby="addons-heading">
         <table aria-labelledby="addons-heading">
           <thead>
             <tr>
-              <th scope="col">Add-on</th>
-              <th scope="col" class="num">Price</th>
-              <th scope="col" class="num">Tax</th>
-              <th scope="col" class="num">Total</th>
+              <th scope="col">{{ 'proposals.addons.addOn' | translate }}</th>
+              <th scope="col" class="num">{{ 'proposals.addons.price' | translate }}</th>
+              <th scope="col" class="num">{{ 'proposals.addons.tax' | translate }}</th>
+              <th scope="col" class="num">{{ 'proposals.addons.total' | translate }}</th>
             </tr>
           </thead>
           <tbody>
@@ -31,9 +32,9 @@ import type { EstimateResultJson } from '@layerbook/domain';
           </tbody>
         </table>
       </div>
-      <p class="hint">Priced separately, not in the price above.</p>
+      <p class="hint">{{ 'proposals.addons.separate' | translate }}</p>
     } @else {
-      <p class="hint">No add-ons. Add one under Extras to price it separately.</p>
+      <p class="hint">{{ 'proposals.addons.none' | translate }}</p>
     }
   `,
   styleUrl: './result-section.scss',

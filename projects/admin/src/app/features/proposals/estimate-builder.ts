@@ -21,6 +21,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { EstimateView } from '@layerbook/contracts/types';
 import { ASK_FOR_YEAR, DomainInputError, measureSurface, measureText, type EstimateResultJson } from '@layerbook/domain';
 import { merge } from 'rxjs';
@@ -72,6 +73,7 @@ type Shown =
     SafetySection,
     ScheduleSection,
     SurfaceFinishes,
+    TranslatePipe,
   ],
   providers: [provideNativeDateAdapter()],
   templateUrl: './estimate-builder.html',
@@ -79,6 +81,7 @@ type Shown =
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class EstimateBuilder implements OnInit {
+  private readonly translate = inject(TranslateService);
   private readonly api = inject(EstimateApi);
   private readonly locale = inject(LOCALE_ID);
 
@@ -138,10 +141,10 @@ export class EstimateBuilder implements OnInit {
       for (const s of room.surfaces) {
         try {
           const m = measureSurface(s.shape, takeoff);
-          out.set(s.id, `Measured ${measureText(m, context.lengthUnit)}`);
+          out.set(s.id, this.say('proposals.builder.measured', { measure: measureText(m, context.lengthUnit) }));
         } catch (error) {
           if (!(error instanceof DomainInputError)) throw error;
-          out.set(s.id, `Cannot be measured: ${error.message}`);
+          out.set(s.id, this.say('proposals.builder.cannotMeasure', { message: error.message }));
         }
       }
     }
@@ -153,7 +156,7 @@ export class EstimateBuilder implements OnInit {
     const context = this.context();
     if (!context) return null;
     const variantId = this.currentOptionId();
-    if (this.form.invalid) return { kind: 'waiting', variantId, message: 'Fix the marked fields to see new numbers.' };
+    if (this.form.invalid) return { kind: 'waiting', variantId, message: this.say('proposals.builder.fixFields') };
     return computeLive(context, readInputs(this.form, context), variantId);
   });
 
@@ -263,7 +266,7 @@ export class EstimateBuilder implements OnInit {
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       this.revision.update((n) => n + 1);
-      this.formMessage.set('Some fields need attention; the messages are beside them.');
+      this.formMessage.set(this.say('proposals.builder.needsAttentionBanner'));
       return;
     }
     const sent = readInputs(this.form, view.context);
@@ -277,6 +280,10 @@ export class EstimateBuilder implements OnInit {
     } finally {
       this.isSaving.set(false);
     }
+  }
+
+  private say(key: string, params?: Record<string, unknown>): string {
+    return String(this.translate.instant(key, params));
   }
 
   private async load(): Promise<void> {

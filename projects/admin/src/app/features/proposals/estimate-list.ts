@@ -5,6 +5,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { EstimateListItem, KeysetPage } from '@layerbook/contracts/types';
 import { FirmCurrency } from '../../core/firm/firm-currency';
 import { loadMessage } from '../../shared/forms/load-message';
@@ -18,34 +19,34 @@ const PAGE_SIZE = 50;
 /** Estimates: every estimate of the firm, newest first, a page at a time. */
 @Component({
   selector: 'lb-estimate-list',
-  imports: [DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
+  imports: [DatePipe, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink, TranslatePipe],
   template: `
     <section class="lb-page">
-      <nav class="switch" aria-label="Jobs and proposals">
-        <a routerLink="/estimates" aria-current="page">Estimates</a>
-        <a routerLink="/jobs">Accepted jobs</a>
+      <nav class="switch" [attr.aria-label]="'proposals.list.switch' | translate">
+        <a routerLink="/estimates" aria-current="page">{{ 'proposals.list.estimates' | translate }}</a>
+        <a routerLink="/jobs">{{ 'proposals.list.acceptedJobs' | translate }}</a>
       </nav>
       <div class="heading">
-        <h1>Jobs &amp; proposals</h1>
+        <h1>{{ 'proposals.list.heading' | translate }}</h1>
         <a mat-flat-button routerLink="/estimates/new">
           <mat-icon aria-hidden="true">add</mat-icon>
-          New estimate
+          {{ 'proposals.list.newEstimate' | translate }}
         </a>
       </div>
-      <p class="lb-lead">Estimates priced from measured rooms and your finish systems, with their options and add-ons.</p>
+      <p class="lb-lead">{{ 'proposals.list.lead' | translate }}</p>
       <lb-form-alert [message]="message()" />
       @if (isLoading()) {
-        <mat-progress-bar mode="indeterminate" aria-label="Loading estimates" />
+        <mat-progress-bar mode="indeterminate" [attr.aria-label]="'proposals.list.loading' | translate" />
       }
-      <div class="table-wrap" tabindex="0" role="region" aria-label="Estimates">
-        <table aria-label="Estimates">
+      <div class="table-wrap" tabindex="0" role="region" [attr.aria-label]="'proposals.list.estimates' | translate">
+        <table [attr.aria-label]="'proposals.list.estimates' | translate">
           <thead>
             <tr>
-              <th scope="col">Estimate</th>
-              <th scope="col">Client</th>
-              <th scope="col" class="num">Price</th>
-              <th scope="col">Status</th>
-              <th scope="col">Updated</th>
+              <th scope="col">{{ 'proposals.list.estimate' | translate }}</th>
+              <th scope="col">{{ 'proposals.list.client' | translate }}</th>
+              <th scope="col" class="num">{{ 'proposals.list.price' | translate }}</th>
+              <th scope="col">{{ 'proposals.list.status' | translate }}</th>
+              <th scope="col">{{ 'proposals.list.updated' | translate }}</th>
             </tr>
           </thead>
           <tbody>
@@ -59,7 +60,7 @@ const PAGE_SIZE = 50;
                   @if (e.price !== null) {
                     {{ e.price | money: currency.code() }}
                   } @else {
-                    <span class="muted">Not priced yet</span>
+                    <span class="muted">{{ 'proposals.list.notPriced' | translate }}</span>
                   }
                 </td>
                 <td>{{ statusWord(e.status) }}</td>
@@ -68,7 +69,7 @@ const PAGE_SIZE = 50;
             } @empty {
               @if (!isLoading()) {
                 <tr>
-                  <td colspan="5" class="none">No estimates yet. Start one with “New estimate”.</td>
+                  <td colspan="5" class="none">{{ 'proposals.list.none' | translate }}</td>
                 </tr>
               }
             }
@@ -77,7 +78,7 @@ const PAGE_SIZE = 50;
       </div>
       @if (nextCursor(); as cursor) {
         <button mat-stroked-button type="button" class="more" (click)="showMore(cursor)" [disabled]="isLoading()">
-          Show more estimates
+          {{ 'proposals.list.more' | translate }}
         </button>
       }
     </section>

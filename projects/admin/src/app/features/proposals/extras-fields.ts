@@ -5,6 +5,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatRadioChange, MatRadioModule } from '@angular/material/radio';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { FinishSystem } from '@layerbook/domain';
 import { errorText } from '../../shared/forms/error-text';
 import {
@@ -19,36 +20,13 @@ import {
   showDiscountKind,
 } from './estimate-form';
 
-interface CostLineWords {
-  readonly kind: CostLineKind;
-  readonly heading: string;
-  readonly row: string;
-  readonly add: string;
-  readonly hint: string;
-}
-
-const COST_LINES: readonly CostLineWords[] = [
-  {
-    kind: 'equipment',
-    heading: 'Equipment and rentals',
-    row: 'Equipment line',
-    add: 'Add equipment or a rental',
-    hint: 'Scaffold rental, lift, dehumidifier.',
-  },
-  {
-    kind: 'subcontracts',
-    heading: 'Subcontracts',
-    row: 'Subcontract',
-    add: 'Add a subcontract',
-    hint: 'Drywall repair, electrician to drop fixtures.',
-  },
-  { kind: 'sundries', heading: 'Sundries', row: 'Sundry', add: 'Add a sundry', hint: 'Tape, plastic, rags, sanding pads.' },
-];
+/** Each kind's words are under `proposals.extras.<kind>` (heading, row, remove, add, hint). */
+const COST_LINES: readonly CostLineKind[] = ['equipment', 'subcontracts', 'sundries'];
 
 /** The extras of an estimate: add-ons, cost lines, discount and the per-area comparison rates. */
 @Component({
   selector: 'lb-extras-fields',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatRadioModule, ReactiveFormsModule],
+  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatRadioModule, ReactiveFormsModule, TranslatePipe],
   templateUrl: './extras-fields.html',
   styleUrl: './extras-fields.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

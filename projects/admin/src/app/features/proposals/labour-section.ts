@@ -1,4 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { EngineRoom } from '@layerbook/contracts/types';
 import { hoursText, measureText, roundedNumber, type EstimateResultJson } from '@layerbook/domain';
 import { multiplierChain } from './estimate-words';
@@ -6,18 +7,19 @@ import { multiplierChain } from './estimate-words';
 /** Hours per surface and layer, with each multiplier that applied, then the crew's time. */
 @Component({
   selector: 'lb-labour-section',
+  imports: [TranslatePipe],
   template: `
-    <h2 id="labour-heading">Labour</h2>
+    <h2 id="labour-heading">{{ 'proposals.labour.heading' | translate }}</h2>
     @for (s of surfaces(); track s.surfaceId) {
       <h3 [id]="'labour-' + s.surfaceId">{{ s.title }}</h3>
       <div class="table-wrap" tabindex="0" role="region" [attr.aria-labelledby]="'labour-' + s.surfaceId">
         <table [attr.aria-labelledby]="'labour-' + s.surfaceId">
           <thead>
             <tr>
-              <th scope="col">Layer</th>
-              <th scope="col" class="num">Base</th>
-              <th scope="col">Extra time for</th>
-              <th scope="col" class="num">Hours</th>
+              <th scope="col">{{ 'proposals.labour.layer' | translate }}</th>
+              <th scope="col" class="num">{{ 'proposals.labour.base' | translate }}</th>
+              <th scope="col">{{ 'proposals.labour.extraTime' | translate }}</th>
+              <th scope="col" class="num">{{ 'proposals.labour.hours' | translate }}</th>
             </tr>
           </thead>
           <tbody>
@@ -34,27 +36,27 @@ import { multiplierChain } from './estimate-words';
       </div>
     }
     @let t = result().labour;
-    <h3 id="crew-heading">Crew time</h3>
+    <h3 id="crew-heading">{{ 'proposals.labour.crewTime' | translate }}</h3>
     <table aria-labelledby="crew-heading">
       <tbody>
         <tr>
-          <th scope="row">Layers</th>
+          <th scope="row">{{ 'proposals.labour.layers' | translate }}</th>
           <td class="num">{{ hours(t.layerHours) }}</td>
         </tr>
         <tr>
-          <th scope="row">Setup, masking and protection</th>
+          <th scope="row">{{ 'proposals.labour.setup' | translate }}</th>
           <td class="num">{{ hours(t.setupHours) }}</td>
         </tr>
         <tr>
-          <th scope="row">Demasking and clean-up</th>
+          <th scope="row">{{ 'proposals.labour.cleanup' | translate }}</th>
           <td class="num">{{ hours(t.cleanupHours) }}</td>
         </tr>
         <tr class="sum">
-          <th scope="row">Crew-hours</th>
+          <th scope="row">{{ 'proposals.labour.crewHours' | translate }}</th>
           <td class="num">{{ hours(t.totalCrewHours) }}</td>
         </tr>
         <tr>
-          <th scope="row">Crew-days</th>
+          <th scope="row">{{ 'proposals.labour.crewDays' | translate }}</th>
           <td class="num">{{ days(t.crewDays) }}</td>
         </tr>
       </tbody>

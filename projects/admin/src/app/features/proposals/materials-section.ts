@@ -1,4 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { TranslatePipe } from '@ngx-translate/core';
 import { QUANTITY_UNIT_SYMBOLS, type EngineRoom } from '@layerbook/contracts/types';
 import { formatKitchenVolume, formatMetricMass, fromBase, roundedNumber, type EstimateResultJson } from '@layerbook/domain';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
@@ -6,18 +7,18 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
 /** What to buy (whole-job totals rounded up to the containers sold) and what to mix per layer. */
 @Component({
   selector: 'lb-materials-section',
-  imports: [MoneyPipe],
+  imports: [MoneyPipe, TranslatePipe],
   template: `
-    <h2 id="materials-heading">Materials to buy</h2>
+    <h2 id="materials-heading">{{ 'proposals.materials.heading' | translate }}</h2>
     <div class="table-wrap" tabindex="0" role="region" aria-labelledby="materials-heading">
       <table aria-labelledby="materials-heading">
         <thead>
           <tr>
-            <th scope="col">Product</th>
-            <th scope="col" class="num">Need</th>
-            <th scope="col">Buy</th>
-            <th scope="col" class="num">Cost</th>
-            <th scope="col" class="num">Left over</th>
+            <th scope="col">{{ 'proposals.materials.product' | translate }}</th>
+            <th scope="col" class="num">{{ 'proposals.materials.need' | translate }}</th>
+            <th scope="col">{{ 'proposals.materials.buy' | translate }}</th>
+            <th scope="col" class="num">{{ 'proposals.materials.cost' | translate }}</th>
+            <th scope="col" class="num">{{ 'proposals.materials.leftOver' | translate }}</th>
           </tr>
         </thead>
         <tbody>
@@ -28,7 +29,12 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
               <td>
                 <ul class="plain">
                   @for (line of p.lines; track line.label) {
-                    <li>{{ line.count }} × {{ line.label }} at {{ line.unitPrice | money: currency() }}</li>
+                    <li>
+                      {{
+                        'proposals.materials.buyLine'
+                          | translate: { count: line.count, label: line.label, price: (line.unitPrice | money: currency()) }
+                      }}
+                    </li>
                   }
                 </ul>
               </td>
@@ -37,7 +43,7 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
             </tr>
           }
           <tr class="sum">
-            <th scope="row">Materials at cost</th>
+            <th scope="row">{{ 'proposals.materials.atCost' | translate }}</th>
             <td colspan="2"></td>
             <td class="num">{{ result().totals.materialsCost | money: currency() }}</td>
             <td></td>
@@ -45,16 +51,16 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
         </tbody>
       </table>
     </div>
-    <p class="hint">Totals are for the whole job, so tinted products can be bought at once and boxed.</p>
+    <p class="hint">{{ 'proposals.materials.hint' | translate }}</p>
 
-    <h3 id="mix-heading">Mix per layer</h3>
+    <h3 id="mix-heading">{{ 'proposals.materials.mixHeading' | translate }}</h3>
     <div class="table-wrap" tabindex="0" role="region" aria-labelledby="mix-heading">
       <table aria-labelledby="mix-heading">
         <thead>
           <tr>
-            <th scope="col">Surface and layer</th>
-            <th scope="col">Mixed amount</th>
-            <th scope="col">Of which water</th>
+            <th scope="col">{{ 'proposals.materials.surfaceAndLayer' | translate }}</th>
+            <th scope="col">{{ 'proposals.materials.mixed' | translate }}</th>
+            <th scope="col">{{ 'proposals.materials.water' | translate }}</th>
           </tr>
         </thead>
         <tbody>

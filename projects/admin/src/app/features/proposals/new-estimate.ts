@@ -9,6 +9,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { Router, RouterLink } from '@angular/router';
+import { TranslatePipe } from '@ngx-translate/core';
 import { ESTIMATE_INPUT_LIMITS, type ClientSummary, type SiteView } from '@layerbook/contracts/types';
 import { catchError, debounceTime, distinctUntilChanged, filter, map, of, switchMap } from 'rxjs';
 import { applyProblem } from '../../core/errors/apply-problem';
@@ -40,6 +41,7 @@ function chosenClient(control: AbstractControl<string | ClientSummary | null>): 
     MatSelectModule,
     ReactiveFormsModule,
     RouterLink,
+    TranslatePipe,
   ],
   providers: [provideNativeDateAdapter()],
   templateUrl: './new-estimate.html',

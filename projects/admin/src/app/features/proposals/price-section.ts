@@ -1,4 +1,5 @@
 import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input } from '@angular/core';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { EstimatingSettings } from '@layerbook/contracts/types';
 import { measureText, perAreaGap, roundedNumber, roundsToZero, type EstimateResultJson } from '@layerbook/domain';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
@@ -7,91 +8,101 @@ import { percentText } from './estimate-words';
 /** The price build-up, bottom-up, with the owner's per-area check beside it. */
 @Component({
   selector: 'lb-price-section',
-  imports: [MoneyPipe],
+  imports: [MoneyPipe, TranslatePipe],
   template: `
     @let p = result().price;
-    <h2 id="price-heading">Price</h2>
+    <h2 id="price-heading">{{ 'proposals.price.heading' | translate }}</h2>
     <div class="table-wrap" tabindex="0" role="region" aria-labelledby="price-heading">
       <table aria-labelledby="price-heading">
         <tbody>
           <tr>
-            <th scope="row">Labour</th>
-            <td class="muted">{{ hours(p.labourHours) }} crew-hours × {{ settings().labourRate | money: currency() }}</td>
+            <th scope="row">{{ 'proposals.price.labour' | translate }}</th>
+            <td class="muted">
+              {{
+                'proposals.price.labourWorking'
+                  | translate: { hours: hours(p.labourHours), rate: (settings().labourRate | money: currency()) }
+              }}
+            </td>
             <td class="num">{{ p.labour | money: currency() }}</td>
           </tr>
           <tr>
-            <th scope="row">Materials</th>
-            <td class="muted">{{ p.materialsCost | money: currency() }} at cost + {{ settings().materialsMarkupPercent }} % markup</td>
+            <th scope="row">{{ 'proposals.price.materials' | translate }}</th>
+            <td class="muted">
+              {{
+                'proposals.price.materialsWorking'
+                  | translate: { cost: (p.materialsCost | money: currency()), markup: settings().materialsMarkupPercent }
+              }}
+            </td>
             <td class="num">{{ p.materials | money: currency() }}</td>
           </tr>
           <tr>
-            <th scope="row">Equipment and rentals</th>
+            <th scope="row">{{ 'proposals.price.equipment' | translate }}</th>
             <td></td>
             <td class="num">{{ p.equipment | money: currency() }}</td>
           </tr>
           <tr>
-            <th scope="row">Subcontracts</th>
+            <th scope="row">{{ 'proposals.price.subcontracts' | translate }}</th>
             <td></td>
             <td class="num">{{ p.subcontracts | money: currency() }}</td>
           </tr>
           <tr>
-            <th scope="row">Sundries</th>
+            <th scope="row">{{ 'proposals.price.sundries' | translate }}</th>
             <td></td>
             <td class="num">{{ p.sundries | money: currency() }}</td>
           </tr>
           <tr class="sum">
-            <th scope="row">Direct cost</th>
+            <th scope="row">{{ 'proposals.price.direct' | translate }}</th>
             <td></td>
             <td class="num">{{ p.direct | money: currency() }}</td>
           </tr>
           <tr>
-            <th scope="row">Overhead</th>
+            <th scope="row">{{ 'proposals.price.overhead' | translate }}</th>
             <td class="muted">{{ methodWords() }}</td>
             <td class="num">{{ p.overhead | money: currency() }}</td>
           </tr>
           <tr>
-            <th scope="row">Profit</th>
+            <th scope="row">{{ 'proposals.price.profit' | translate }}</th>
             <td></td>
             <td class="num">{{ p.profit | money: currency() }}</td>
           </tr>
           @if (!roundsToZero(p.discount)) {
             <tr>
-              <th scope="row">Discount</th>
+              <th scope="row">{{ 'proposals.price.discount' | translate }}</th>
               <td></td>
               <td class="num">− {{ p.discount | money: currency() }}</td>
             </tr>
           }
           <tr>
-            <th scope="row">Minimum charge</th>
+            <th scope="row">{{ 'proposals.price.minimum' | translate }}</th>
             <td colspan="2">
               @if (p.isMinimumApplied) {
-                Applied: the work came to less than the firm’s minimum of {{ settings().minimumCharge | money: currency() }}.
+                {{ 'proposals.price.minimumApplied' | translate: { minimum: (settings().minimumCharge | money: currency()) } }}
               } @else if (settings().minimumCharge) {
-                Not needed (minimum {{ settings().minimumCharge | money: currency() }}).
+                {{ 'proposals.price.minimumNotNeeded' | translate: { minimum: (settings().minimumCharge | money: currency()) } }}
               } @else {
-                None set.
+                {{ 'proposals.price.minimumNone' | translate }}
               }
             </td>
           </tr>
           @if (!roundsToZero(p.roundingAdjustment)) {
             <tr>
-              <th scope="row">Rounding</th>
+              <th scope="row">{{ 'proposals.price.rounding' | translate }}</th>
               <td></td>
               <td class="num">{{ p.roundingAdjustment | money: currency() }}</td>
             </tr>
           }
           <tr class="sum">
-            <th scope="row">Price</th>
-            <td class="muted">before tax</td>
+            <th scope="row">{{ 'proposals.price.price' | translate }}</th>
+            <td class="muted">{{ 'proposals.price.beforeTax' | translate }}</td>
             <td class="num" data-testid="price">{{ p.price | money: currency() }}</td>
           </tr>
           <tr>
-            <th scope="row">Tax</th>
+            <th scope="row">{{ 'proposals.price.tax' | translate }}</th>
             <td class="muted">{{ taxWords() }}</td>
             <td class="num">{{ p.tax | money: currency() }}</td>
           </tr>
           <tr class="sum">
-            <th scope="row">Total</th>
+            <th scope="row">{{ 'proposals.price.total' | translate }}</th>
             <td></td>
             <td class="num">{{ p.total | money: currency() }}</td>
           </tr>
@@ -99,20 +110,20 @@ import { percentText } from './estimate-words';
       </table>
     </div>
     <p class="hint">
-      Effective markup on cost {{ percent(p.effectiveMarkup) }} · effective margin (share of the price) {{ percent(p.effectiveMargin) }}
+      {{ 'proposals.price.effective' | translate: { markup: percent(p.effectiveMarkup), margin: percent(p.effectiveMargin) } }}
     </p>
 
-    <h3 id="per-area-heading">Per-area check</h3>
+    <h3 id="per-area-heading">{{ 'proposals.price.perAreaCheck' | translate }}</h3>
     @if (result().perAreaCheck; as check) {
       @if (check.lines.length > 0) {
         <div class="table-wrap" tabindex="0" role="region" aria-labelledby="per-area-heading">
           <table aria-labelledby="per-area-heading">
             <thead>
               <tr>
-                <th scope="col">Surface</th>
-                <th scope="col" class="num">Measured</th>
-                <th scope="col" class="num">Rate</th>
-                <th scope="col" class="num">Amount</th>
+                <th scope="col">{{ 'proposals.price.surface' | translate }}</th>
+                <th scope="col" class="num">{{ 'proposals.price.measured' | translate }}</th>
+                <th scope="col" class="num">{{ 'proposals.price.rate' | translate }}</th>
+                <th scope="col" class="num">{{ 'proposals.price.amount' | translate }}</th>
               </tr>
             </thead>
             <tbody>
@@ -125,17 +136,17 @@ import { percentText } from './estimate-words';
                 </tr>
               }
               <tr class="sum">
-                <th scope="row">By the area</th>
+                <th scope="row">{{ 'proposals.price.byArea' | translate }}</th>
                 <td colspan="2"></td>
                 <td class="num">{{ check.total | money: currency() }}</td>
               </tr>
               <tr>
-                <th scope="row">Bottom-up price</th>
+                <th scope="row">{{ 'proposals.price.bottomUp' | translate }}</th>
                 <td colspan="2"></td>
                 <td class="num">{{ p.price | money: currency() }}</td>
               </tr>
               <tr>
-                <th scope="row">{{ gap().isAbove ? 'Bottom-up is higher by' : 'Bottom-up is lower by' }}</th>
+                <th scope="row">{{ (gap().isAbove ? 'proposals.price.higherBy' : 'proposals.price.lowerBy') | translate }}</th>
                 <td colspan="2"></td>
                 <td class="num">{{ gap().amount | money: currency() }}</td>
               </tr>
@@ -143,10 +154,10 @@ import { percentText } from './estimate-words';
           </table>
         </div>
       } @else {
-        <p class="hint">None of the finishes in this option has a rate per {{ unit() }} yet. Add one under Extras.</p>
+        <p class="hint">{{ 'proposals.price.noRates' | translate: { unit: unit() } }}</p>
       }
     } @else {
-      <p class="hint">Add a price per {{ unit() }} for a finish under Extras to compare.</p>
+      <p class="hint">{{ 'proposals.price.addRate' | translate: { unit: unit() } }}</p>
     }
   `,
   styleUrl: './result-section.scss',

@@ -6,6 +6,7 @@ import { MatDatepickerModule } from '@angular/material/datepicker';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { ProposalVersionView } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
@@ -22,32 +23,45 @@ import { MAX_EXCLUSIONS, MAX_TEXT, PROPOSAL_WORDS, fillProposal, placeExclusionE
  */
 @Component({
   selector: 'lb-proposal-editor',
-  imports: [FormAlert, MatButtonModule, MatDatepickerModule, MatFormFieldModule, MatIconModule, MatInputModule, ReactiveFormsModule],
+  imports: [
+    FormAlert,
+    MatButtonModule,
+    MatDatepickerModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    ReactiveFormsModule,
+    TranslatePipe,
+  ],
   providers: [provideNativeDateAdapter()],
   template: `
     <form class="editor" [formGroup]="form" (ngSubmit)="save()" novalidate [attr.aria-labelledby]="headingId()">
-      <h3 [id]="headingId()">{{ draft() ? 'Change version ' + draft()!.version : 'New proposal version' }}</h3>
-      <p class="hint">The prices come from the estimate as last saved. Only a draft can change; once sent it is frozen.</p>
+      <h3 [id]="headingId()">
+        {{
+          draft() ? ('proposals.editor.changeVersion' | translate: { n: draft()!.version }) : ('proposals.editor.newVersion' | translate)
+        }}
+      </h3>
+      <p class="hint">{{ 'proposals.editor.hint' | translate }}</p>
       <lb-form-alert [message]="message()" />
       <fieldset class="lb-gate" [disabled]="!isHydrated() || isSaving()">
         <div class="row">
           <mat-form-field>
-            <mat-label>Valid until</mat-label>
+            <mat-label>{{ 'proposals.editor.validUntil' | translate }}</mat-label>
             <input matInput [matDatepicker]="picker" formControlName="expiresOn" autocomplete="off" required />
             <mat-datepicker-toggle matIconSuffix [for]="picker" />
             <mat-datepicker #picker />
-            <mat-hint>The last day the client can accept this offer.</mat-hint>
+            <mat-hint>{{ 'proposals.editor.validUntilHint' | translate }}</mat-hint>
             <mat-error>{{ errorText(form.controls.expiresOn, words.expiresOn) }}</mat-error>
           </mat-form-field>
           <ng-container formGroupName="terms">
             <mat-form-field class="pct">
-              <mat-label>Deposit (%)</mat-label>
+              <mat-label>{{ 'proposals.editor.deposit' | translate }}</mat-label>
               <input matInput type="number" inputmode="numeric" min="0" max="100" step="1" formControlName="depositPercent" required />
-              <mat-hint>Due on acceptance.</mat-hint>
+              <mat-hint>{{ 'proposals.editor.depositHint' | translate }}</mat-hint>
               <mat-error>{{ errorText(form.controls.terms.controls.depositPercent, words.percent) }}</mat-error>
             </mat-form-field>
             <mat-form-field class="pct">
-              <mat-label>Progress payment (%)</mat-label>
+              <mat-label>{{ 'proposals.editor.progress' | translate }}</mat-label>
               <input matInput type="number" inputmode="numeric" min="0" max="100" step="1" formControlName="progressPercent" required />
               <mat-hint>{{ progressHint }}</mat-hint>
               <mat-error>{{ errorText(form.controls.terms.controls.progressPercent, words.percent) }}</mat-error>
@@ -55,29 +69,29 @@ import { MAX_EXCLUSIONS, MAX_TEXT, PROPOSAL_WORDS, fillProposal, placeExclusionE
           </ng-container>
         </div>
         <mat-form-field class="lb-full" formGroupName="terms">
-          <mat-label>Terms</mat-label>
+          <mat-label>{{ 'proposals.editor.terms' | translate }}</mat-label>
           <textarea matInput formControlName="text" rows="3" [maxlength]="maxText"></textarea>
-          <mat-hint>Printed under “Terms”: when payments fall due, cancellation, warranty.</mat-hint>
+          <mat-hint>{{ 'proposals.editor.termsHint' | translate }}</mat-hint>
           <mat-error>{{ errorText(form.controls.terms.controls.text, words.text) }}</mat-error>
         </mat-form-field>
         <mat-form-field class="lb-full">
-          <mat-label>Exclusions</mat-label>
+          <mat-label>{{ 'proposals.editor.exclusions' | translate }}</mat-label>
           <textarea matInput formControlName="exclusions" rows="4"></textarea>
-          <mat-hint>One per line, at most {{ maxExclusions }}: what this price does not cover.</mat-hint>
+          <mat-hint>{{ 'proposals.editor.exclusionsHint' | translate: { max: maxExclusions } }}</mat-hint>
           <mat-error>{{ errorText(form.controls.exclusions, words.exclusions) }}</mat-error>
         </mat-form-field>
         <mat-form-field class="lb-full">
-          <mat-label>Notes</mat-label>
+          <mat-label>{{ 'proposals.editor.notes' | translate }}</mat-label>
           <textarea matInput formControlName="notes" rows="3" [maxlength]="maxText"></textarea>
-          <mat-hint>Anything else the client should read with the offer.</mat-hint>
+          <mat-hint>{{ 'proposals.editor.notesHint' | translate }}</mat-hint>
           <mat-error>{{ errorText(form.controls.notes, words.text) }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions">
           <button mat-flat-button type="submit">
             <mat-icon aria-hidden="true">{{ draft() ? 'save' : 'note_add' }}</mat-icon>
-            {{ draft() ? 'Save changes' : 'Create version' }}
+            {{ (draft() ? 'proposals.editor.save' : 'proposals.editor.create') | translate }}
           </button>
-          <button mat-button type="button" (click)="cancelled.emit()">Cancel</button>
+          <button mat-button type="button" (click)="cancelled.emit()">{{ 'proposals.cancel' | translate }}</button>
         </div>
       </fieldset>
     </form>

@@ -5,6 +5,7 @@ import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { ProposalVersionStatus, ProposalVersionSummary, ProposalVersionView } from '@layerbook/contracts/types';
 import { firstValueFrom } from 'rxjs';
 import { problemMessage, toProblem } from '../../core/errors/problem';
@@ -44,12 +45,14 @@ const READ_IN_FULL: ReadonlySet<ProposalVersionStatus> = new Set(['draft', 'acce
     MoneyPipe,
     ProposalEditor,
     RouterLink,
+    TranslatePipe,
   ],
   templateUrl: './proposal-versions.html',
   styleUrl: './proposal-versions.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ProposalVersions {
+  private readonly translate = inject(TranslateService);
   private readonly estimates = inject(EstimateApi);
   protected readonly api = inject(ProposalApi);
   private readonly dialog = inject(MatDialog);
@@ -124,7 +127,7 @@ export class ProposalVersions {
 
   protected saved(view: ProposalVersionView, wasNew: boolean): void {
     this.editing.set(null);
-    this.notice.set(wasNew ? `Version ${view.version} made as a draft. Check the PDF, then send it.` : `Version ${view.version} saved.`);
+    this.notice.set(this.words(wasNew ? 'proposals.versions.madeDraft' : 'proposals.versions.saved', { n: view.version }));
     this.loadedVersions.reload();
   }
 
@@ -133,17 +136,21 @@ export class ProposalVersions {
     this.versionMessage.set(null);
     const email = this.clientEmail() || this.detail(version.id)?.snapshot.client.email || '';
     const isSure = await this.confirm({
-      title: 'Send the proposal?',
-      message: email
-        ? `Send version ${version.version} to ${email}? Once sent, this version cannot change.`
-        : `Send version ${version.version} to the client? Once sent, this version cannot change.`,
-      confirmLabel: 'Send',
+      title: 'proposals.versions.sendTitle',
+      message: email ? 'proposals.versions.sendTo' : 'proposals.versions.sendToClient',
+      confirmLabel: 'proposals.versions.sendConfirm',
+      params: { n: version.version, email },
     });
     if (!isSure) return;
     this.busyId.set(version.id);
     try {
       const sent = await this.api.send(version.id);
-      this.notice.set(`Version ${sent.version} sent${email ? ` to ${email}` : ''}. The client gets a link to read and accept it.`);
+      this.notice.set(
+        this.words(email ? 'proposals.versions.sentTo' : 'proposals.versions.sentNoEmail', {
+          n: sent.version,
+          email,
+        }),
+      );
       this.loadedVersions.reload();
     } catch (error) {
       const problem = toProblem(error);
@@ -156,6 +163,10 @@ export class ProposalVersions {
     } finally {
       this.busyId.set(null);
     }
+  }
+
+  private words(key: string, params: Record<string, unknown>): string {
+    return String(this.translate.instant(key, params));
   }
 
   private confirm(data: ConfirmDialogData): Promise<boolean> {

@@ -4,22 +4,22 @@ export default [
   {
     path: '',
     pathMatch: 'full',
-    title: 'Estimates · Layerbook',
+    title: 'proposals.titles.estimates',
     loadComponent: () => import('./estimate-list').then((m) => m.EstimateList),
   },
   {
     path: 'new',
-    title: 'New estimate · Layerbook',
+    title: 'proposals.titles.newEstimate',
     loadComponent: () => import('./new-estimate').then((m) => m.NewEstimate),
   },
   {
     path: ':id',
-    title: 'Estimate · Layerbook',
+    title: 'proposals.titles.estimate',
     loadComponent: () => import('./estimate-builder').then((m) => m.EstimateBuilder),
   },
   {
     path: ':id/proposals',
-    title: 'Proposals · Layerbook',
+    title: 'proposals.titles.proposals',
     loadComponent: () => import('./proposal-versions').then((m) => m.ProposalVersions),
   },
 ] satisfies Routes;

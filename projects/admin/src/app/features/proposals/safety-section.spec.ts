@@ -1,5 +1,7 @@
 import { TestBed } from '@angular/core/testing';
-import { describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import proposals from '../../../i18n/proposals/en.json';
 import { SafetySection } from './safety-section';
 
 const scaffold = {
@@ -20,6 +22,8 @@ function render(equipment: Array<{ label: string; amount: string }>): string {
 }
 
 describe('the builder safety section', () => {
+  beforeEach(() => TestBed.configureTestingModule({ providers: [provideTestI18n({ proposals })] }));
+
   it('warns when the scaffold caution is raised and no equipment is priced (29 CFR 1926.451(g)(1))', () => {
     expect(render([])).toContain('no equipment is priced: add the scaffold rental');
     expect(render([{ label: 'Scaffold tower, 2 weeks', amount: '420.00' }])).not.toContain('no equipment is priced');

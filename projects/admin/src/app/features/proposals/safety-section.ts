@@ -1,11 +1,13 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { TranslatePipe } from '@ngx-translate/core';
 import { DomainInputError, unpricedScaffoldWarning, type EstimateResultJson } from '@layerbook/domain';
 
 /** The engine's cautions for this job's facts, each with the rule it points to. */
 @Component({
   selector: 'lb-safety-section',
+  imports: [TranslatePipe],
   template: `
-    <h2 id="safety-heading">Safety</h2>
+    <h2 id="safety-heading">{{ 'proposals.safety.heading' | translate }}</h2>
     @if (scaffoldWarning(); as warning) {
       <p class="warning" role="status"><span aria-hidden="true">⚠</span> {{ warning }}</p>
     }
@@ -17,14 +19,14 @@ import { DomainInputError, unpricedScaffoldWarning, type EstimateResultJson } fr
             <li>{{ b }}</li>
           }
         </ul>
-        <p class="rule">Rule: {{ c.rule }}</p>
+        <p class="rule">{{ 'proposals.safety.rule' | translate: { rule: c.rule } }}</p>
         @if (c.jurisdiction) {
           <p class="jurisdiction">{{ c.jurisdiction }}</p>
         }
         <p class="hint">{{ c.standing }}</p>
       </article>
     } @empty {
-      <p class="hint">No cautions from this job’s facts (age of the building, heights, products, sanding).</p>
+      <p class="hint">{{ 'proposals.safety.none' | translate }}</p>
     }
   `,
   styleUrl: './result-section.scss',

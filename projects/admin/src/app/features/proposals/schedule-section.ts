@@ -1,36 +1,44 @@
 import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
+import { TranslatePipe } from '@ngx-translate/core';
 import { hoursText, planDays, type EstimateResultJson } from '@layerbook/domain';
 import { clockText, dayAndClock, dayWords } from './estimate-words';
 
 /** The dated plan: each working day's work, what is drying and until when, and the milestones. */
 @Component({
   selector: 'lb-schedule-section',
-  imports: [MatIconModule],
+  imports: [MatIconModule, TranslatePipe],
   template: `
     @let s = result().schedule;
-    <h2 id="schedule-heading">Schedule</h2>
+    <h2 id="schedule-heading">{{ 'proposals.schedule.heading' | translate }}</h2>
     <p>
-      Finishes <strong>{{ day(s.finishDate) }}</strong> after {{ s.workingDays }} working {{ s.workingDays === 1 ? 'day' : 'days' }}.
+      {{ 'proposals.schedule.finishes' | translate }} <strong>{{ day(s.finishDate) }}</strong>
+      {{ (s.workingDays === 1 ? 'proposals.schedule.afterDay' : 'proposals.schedule.afterDays') | translate: { n: s.workingDays } }}
     </p>
 
-    <h3 id="milestones-heading">Milestones</h3>
+    <h3 id="milestones-heading">{{ 'proposals.schedule.milestones' | translate }}</h3>
     <ul aria-labelledby="milestones-heading">
       @for (m of s.milestones; track m.id) {
         <li>
-          {{ m.id === 'job' ? 'Job complete' : m.label + ' done on every surface' }}:
+          {{
+            m.id === 'job'
+              ? ('proposals.schedule.jobComplete' | translate)
+              : ('proposals.schedule.layerDone' | translate: { layer: m.label })
+          }}:
           {{ at(m.date, m.hour) }}
         </li>
       }
     </ul>
 
-    <h3 id="days-heading">Day by day</h3>
+    <h3 id="days-heading">{{ 'proposals.schedule.dayByDay' | translate }}</h3>
     <ol class="days" aria-labelledby="days-heading">
       @for (d of days(); track d.date) {
         <li>
           <p class="day-title">
-            <strong>Day {{ d.workingDay }} · {{ day(d.date) }}</strong>
-            <span class="muted"> — {{ hours(d.crewHours) }} of {{ hours(d.capacity) }} crew-hours</span>
+            <strong>{{ 'proposals.schedule.dayN' | translate: { n: d.workingDay } }} · {{ day(d.date) }}</strong>
+            <span class="muted">
+              — {{ 'proposals.schedule.crewHoursOf' | translate: { hours: hours(d.crewHours), capacity: hours(d.capacity) } }}</span
+            >
           </p>
           <ul class="plain">
             @for (step of d.steps; track step.key) {
@@ -38,8 +46,8 @@ import { clockText, dayAndClock, dayWords } from './estimate-words';
             }
             @for (wait of d.waits; track wait.key) {
               <li class="wait">
-                <mat-icon aria-hidden="true">hourglass_top</mat-icon> {{ wait.label }}: drying until
-                {{ at(wait.untilDate, wait.untilHour) }}
+                <mat-icon aria-hidden="true">hourglass_top</mat-icon>
+                {{ 'proposals.schedule.dryingUntil' | translate: { layer: wait.label, until: at(wait.untilDate, wait.untilHour) } }}
               </li>
             }
           </ul>

@@ -3,6 +3,7 @@ import { takeUntilDestroyed, toObservable } from '@angular/core/rxjs-interop';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectChange, MatSelectModule } from '@angular/material/select';
+import { TranslatePipe } from '@ngx-translate/core';
 import type { EngineRoom } from '@layerbook/contracts/types';
 import type { FinishSystem } from '@layerbook/domain';
 import { map, startWith, switchMap } from 'rxjs';
@@ -13,16 +14,16 @@ import { finishOutlineText } from './estimate-words';
 /** Which finish goes on each measured surface in one option, room by room. */
 @Component({
   selector: 'lb-surface-finishes',
-  imports: [MatFormFieldModule, MatSelectModule, ReactiveFormsModule],
+  imports: [MatFormFieldModule, MatSelectModule, ReactiveFormsModule, TranslatePipe],
   template: `
     @for (room of rooms(); track room.id) {
       <fieldset class="room" [attr.aria-labelledby]="'room-' + room.id">
-        <legend [id]="'room-' + room.id">{{ room.name }}{{ room.isExterior ? ' (outside)' : '' }}</legend>
+        <legend [id]="'room-' + room.id">{{ room.name }}{{ room.isExterior ? ('proposals.finishes.outside' | translate) : '' }}</legend>
         @if (room.surfaces.length > 1) {
           <mat-form-field class="whole-room">
-            <mat-label>Same finish for the whole room</mat-label>
+            <mat-label>{{ 'proposals.finishes.wholeRoom' | translate }}</mat-label>
             <mat-select [formControl]="roomControl(room.id)" (selectionChange)="finishWholeRoom(room, $event)">
-              <mat-option value="">Not in this option</mat-option>
+              <mat-option value="">{{ 'proposals.finishes.notInOption' | translate }}</mat-option>
               @for (system of finishSystems(); track system.id) {
                 <mat-option [value]="system.id">{{ system.name }}</mat-option>
               }
@@ -32,13 +33,13 @@ import { finishOutlineText } from './estimate-words';
         @for (surface of room.surfaces; track surface.id) {
           <div class="surface">
             <mat-form-field>
-              <mat-label>Finish for {{ surface.name }}</mat-label>
+              <mat-label>{{ 'proposals.finishes.finishFor' | translate: { name: surface.name } }}</mat-label>
               <mat-select [formControl]="option().controls.finishes.controls[surface.id]!">
                 <!-- The closed select shows the name only; the open list adds each finish's summary. -->
                 <mat-select-trigger>{{
-                  names().get(option().controls.finishes.controls[surface.id]!.value) ?? 'Not in this option'
+                  names().get(option().controls.finishes.controls[surface.id]!.value) ?? ('proposals.finishes.notInOption' | translate)
                 }}</mat-select-trigger>
-                <mat-option value="">Not in this option</mat-option>
+                <mat-option value="">{{ 'proposals.finishes.notInOption' | translate }}</mat-option>
                 @for (system of finishSystems(); track system.id) {
                   <mat-option [value]="system.id"
                     >{{ system.name }} <span class="outline">· {{ outlines().get(system.id) }}</span></mat-option
