@@ -49,6 +49,6 @@ async function lookUp(api: InquiryApi, slug: string): Promise<FirmLookup> {
     if (problem.status === 404 || problem.status === 400) {
       return { kind: 'missing' };
     }
-    return { kind: 'failed', message: 'This form cannot be opened just now. Please try again in a few minutes.' };
+    return { kind: 'failed', message: 'inquiry.page.cannotOpen' };
   }
 }

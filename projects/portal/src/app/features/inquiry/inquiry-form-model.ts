@@ -9,8 +9,8 @@ import {
   type BudgetRange,
   type PublicSource,
 } from '@layerbook/contracts/types';
-import { ErrorWords } from '../../shared/forms/error-text';
-import { EMAIL_WORDS, tooLong } from '../../shared/forms/field-words';
+import type { FieldErrorWords } from '../../../../../shared/forms/field-error-pipe';
+import { EMAIL_ERRORS, tooLongError } from '../../shared/forms/field-words';
 import { requiredText } from '../../shared/forms/text-validators';
 import type { InquiryBody } from './inquiry-api';
 
@@ -49,24 +49,24 @@ type FieldName = keyof InquiryFormValue;
 
 const CHECKBOXES = ['yearBuiltUnknown', 'consent'] as const satisfies readonly FieldName[];
 
-/** Words beside each field, matching the API's messages (packages/contracts, publicInquiryRequest). */
+/** Words keys beside each field, matching the API's messages (packages/contracts, publicInquiryRequest). */
 export const INQUIRY_WORDS = {
-  name: { required: 'Enter your name.', ...tooLong(L.contactName) },
-  email: EMAIL_WORDS,
-  phone: tooLong(PHONE_MAX_LENGTH),
-  siteAddress: { required: 'Enter the address of the place to be finished.', ...tooLong(L.siteAddress) },
+  name: { required: 'inquiry.errors.nameRequired', ...tooLongError(L.contactName) },
+  email: EMAIL_ERRORS,
+  phone: tooLongError(PHONE_MAX_LENGTH),
+  siteAddress: { required: 'inquiry.errors.siteAddressRequired', ...tooLongError(L.siteAddress) },
   yearBuilt: {
-    required: 'Enter the year the building was built, or tick "Not sure".',
-    year: 'Enter a year like 1925.',
-    yearRange: `Enter a year between ${YEAR_BUILT_MIN} and ${YEAR_BUILT_MAX}.`,
+    required: 'inquiry.errors.yearRequired',
+    year: 'inquiry.errors.year',
+    yearRange: { key: 'inquiry.errors.yearRange', params: { min: YEAR_BUILT_MIN, max: YEAR_BUILT_MAX } },
   },
-  rooms: { required: 'Tell us which rooms and surfaces.', ...tooLong(L.rooms) },
-  finishIdea: tooLong(L.finishIdea),
-  timeline: tooLong(L.timeline),
-  heardFrom: { required: 'Choose how you heard of us.' },
-  referrerName: { required: 'Tell us who referred you, so we can thank them.', ...tooLong(L.referrerName) },
-  consent: { required: 'Tick the box so we may contact you about this inquiry.' },
-} as const satisfies Partial<Record<FieldName, ErrorWords>>;
+  rooms: { required: 'inquiry.errors.roomsRequired', ...tooLongError(L.rooms) },
+  finishIdea: tooLongError(L.finishIdea),
+  timeline: tooLongError(L.timeline),
+  heardFrom: { required: 'inquiry.errors.heardFromRequired' },
+  referrerName: { required: 'inquiry.errors.referrerRequired', ...tooLongError(L.referrerName) },
+  consent: { required: 'inquiry.errors.consentRequired' },
+} as const satisfies Partial<Record<FieldName, FieldErrorWords>>;
 
 function yearBuiltUnlessUnknown(control: AbstractControl): ValidationErrors | null {
   const year = String(control.value ?? '').trim();

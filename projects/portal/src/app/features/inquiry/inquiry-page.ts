@@ -18,18 +18,9 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Title } from '@angular/platform-browser';
 import { ActivatedRoute, Router } from '@angular/router';
-import {
-  BUDGET_RANGES,
-  PUBLIC_BUDGET_LABELS,
-  PUBLIC_SOURCES,
-  PUBLIC_SOURCE_LABELS,
-  isReferralSource,
-  type FieldProblem,
-  type Problem,
-} from '@layerbook/contracts/types';
+import { BUDGET_RANGES, PUBLIC_SOURCES, isReferralSource, type FieldProblem, type Problem } from '@layerbook/contracts/types';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
-import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import type { FirmLookup } from './firm-lookup';
@@ -38,11 +29,13 @@ import { INQUIRY_WORDS, fromPosted, inquiryForm, linkDependentFields, refusedAsS
 import { postedRefusal, type PostedRefusal } from './posted-refusal';
 import { PublicFrame } from './public-frame';
 import { typedBeforeHydration } from './typed-before-hydration';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
 
 const FORM_ID = 'inquiry-form';
-const CHECK_FIELDS = 'Please check the fields marked below.';
-const STALE_FORM =
-  'This form had been open for a long time, so it was not sent. It is ready again: check your details and send it once more.';
+const CHECK_FIELDS = 'inquiry.page.checkFields';
+const STALE_FORM = 'inquiry.page.staleForm';
 /** `Event.eventPhase` of an event Angular replays after hydration (EventPhase.REPLAY). */
 const REPLAYED = 101;
 
@@ -52,7 +45,18 @@ const REPLAYED = 101;
  */
 @Component({
   selector: 'lb-inquiry-page',
-  imports: [FormAlert, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, PublicFrame, ReactiveFormsModule],
+  imports: [
+    FieldErrorPipe,
+    FormAlert,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatInputModule,
+    PublicFrame,
+    ReactiveFormsModule,
+    SayPipe,
+    TranslatePipe,
+  ],
   templateUrl: './inquiry-page.html',
   styleUrl: './inquiry-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -63,6 +67,7 @@ export class InquiryPage {
   private readonly injector = inject(Injector);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly route = inject(ActivatedRoute).snapshot;
+  private readonly translate = inject(TranslateService);
 
   protected readonly slug = this.route.paramMap.get('slug') ?? '';
   protected readonly lookup = this.route.data['lookup'] as FirmLookup;
@@ -73,10 +78,7 @@ export class InquiryPage {
   protected readonly form = inquiryForm(this.firm?.formStamp ?? '');
   protected readonly words = INQUIRY_WORDS;
   protected readonly budgets = BUDGET_RANGES;
-  protected readonly budgetLabels = PUBLIC_BUDGET_LABELS;
   protected readonly sources = PUBLIC_SOURCES;
-  protected readonly sourceLabels = PUBLIC_SOURCE_LABELS;
-  protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
   protected readonly isBusy = signal(false);
   protected readonly formMessage = signal<string | null>(null);
@@ -89,7 +91,8 @@ export class InquiryPage {
   protected readonly showReferrer: Signal<boolean>;
 
   constructor() {
-    inject(Title).setTitle(pageTitle(this.lookup));
+    const title = pageTitle(this.lookup);
+    inject(Title).setTitle(this.translate.instant(title.key, title.params) as string);
     const refusal = postedRefusal();
     const typed = typedBeforeHydration(FORM_ID);
     let value = this.form.getRawValue();
@@ -139,7 +142,7 @@ export class InquiryPage {
     this.formMessage.set(null);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
-      this.formMessage.set(CHECK_FIELDS);
+      this.formMessage.set(this.say(CHECK_FIELDS));
       this.focusFirstProblem();
       return;
     }
@@ -183,7 +186,7 @@ export class InquiryPage {
       control.markAsTouched();
       placedAny = true;
     }
-    this.formMessage.set(summary(placedAny, unplaced.join(' '), refusal.errors.some(isStampProblem)));
+    this.formMessage.set(this.summary(placedAny, unplaced.join(' '), refusal.errors.some(isStampProblem)));
   }
 
   /** An answer to a JSON send: messages beside fields until the visitor edits them. */
@@ -192,20 +195,32 @@ export class InquiryPage {
     const fieldErrors = errors.filter((item) => !isStampProblem(item));
     const isStale = fieldErrors.length < errors.length;
     if (isStale && fieldErrors.length === 0) {
-      this.formMessage.set(summary(false, null, true));
+      this.formMessage.set(this.summary(false, null, true));
       return;
     }
     const placedAny = fieldErrors.some(({ field }) => field in this.form.controls);
     const unplaced = applyProblem(this.form, { ...problem, errors: fieldErrors });
-    this.formMessage.set(summary(placedAny, unplaced, isStale));
+    this.formMessage.set(this.summary(placedAny, unplaced, isStale));
   }
 
   private async renewStamp(): Promise<void> {
     try {
       this.form.controls.startedAt.setValue((await this.api.firm(this.slug)).formStamp);
     } catch {
-      this.formMessage.set('This form has expired. Reload the page, check your details and send it again.');
+      this.formMessage.set(this.say('inquiry.page.expired'));
     }
+  }
+
+  private say(key: string): string {
+    return this.translate.instant(key) as string;
+  }
+
+  /** What the alert at the top says: where to look, what no field shows, and a renewed form. */
+  private summary(placedAny: boolean, unplaced: string | null, isStale: boolean): string | null {
+    const parts = [placedAny ? this.say(CHECK_FIELDS) : '', unplaced ?? '', isStale ? this.say(STALE_FORM) : ''].filter(
+      (part) => part !== '',
+    );
+    return parts.length > 0 ? parts.join(' ') : null;
   }
 
   private focusFirstProblem(): void {
@@ -221,17 +236,11 @@ export class InquiryPage {
   }
 }
 
-function pageTitle(lookup: FirmLookup): string {
+function pageTitle(lookup: FirmLookup): { key: string; params?: Record<string, string> } {
   if (lookup.kind === 'found') {
-    return `Tell ${lookup.firm.name} about your project`;
+    return { key: 'inquiry.page.title', params: { firm: lookup.firm.name } };
   }
-  return lookup.kind === 'missing' ? 'Inquiry form not found' : 'Inquiry form';
-}
-
-/** What the alert at the top says: where to look, what no field shows, and a renewed form. */
-function summary(placedAny: boolean, unplaced: string | null, isStale: boolean): string | null {
-  const parts = [placedAny ? CHECK_FIELDS : '', unplaced ?? '', isStale ? STALE_FORM : ''].filter((part) => part !== '');
-  return parts.length > 0 ? parts.join(' ') : null;
+  return { key: lookup.kind === 'missing' ? 'inquiry.page.titleMissing' : 'inquiry.page.titleForm' };
 }
 
 /** The form stamp is a hidden field: its problem is said at the top, not beside a field. */

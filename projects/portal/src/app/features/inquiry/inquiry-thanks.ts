@@ -4,20 +4,18 @@ import { Title } from '@angular/platform-browser';
 import { ActivatedRoute } from '@angular/router';
 import type { FirmLookup } from './firm-lookup';
 import { PublicFrame } from './public-frame';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 
 /** Where both the hydrated form and the plain post (303 from the host) land once it is filed. */
 @Component({
   selector: 'lb-inquiry-thanks',
-  imports: [MatIconModule, PublicFrame],
+  imports: [MatIconModule, PublicFrame, TranslatePipe],
   template: `
     <lb-public-frame>
-      <h1>Thank you</h1>
+      <h1>{{ 'inquiry.thanks.title' | translate }}</h1>
       <div class="lb-success" role="status">
         <mat-icon aria-hidden="true">mark_email_read</mat-icon>
-        <p>
-          {{ firmName ?? 'The firm' }} has your inquiry and will be in touch soon. A confirmation e-mail is on its way to you; if it has not
-          arrived in a few minutes, look in your spam folder.
-        </p>
+        <p>{{ (firmName ? 'inquiry.thanks.text' : 'inquiry.thanks.textNoFirm') | translate: { firm: firmName } }}</p>
       </div>
     </lb-public-frame>
   `,
@@ -34,6 +32,9 @@ export class InquiryThanks {
   protected readonly firmName = this.lookup?.kind === 'found' ? this.lookup.firm.name : null;
 
   constructor() {
-    inject(Title).setTitle(this.firmName ? `Thank you · ${this.firmName}` : 'Thank you');
+    const translate = inject(TranslateService);
+    inject(Title).setTitle(
+      translate.instant(this.firmName ? 'inquiry.thanks.titleFor' : 'inquiry.thanks.title', { firm: this.firmName }) as string,
+    );
   }
 }

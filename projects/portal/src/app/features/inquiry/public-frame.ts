@@ -1,14 +1,16 @@
 import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** The frame around a firm's public pages: the firm's words in one card, a quiet credit below. */
 @Component({
   selector: 'lb-public-frame',
+  imports: [TranslatePipe],
   template: `
     <main class="frame">
       <div class="card">
         <ng-content />
       </div>
-      <p class="credit">Inquiry form by Layerbook</p>
+      <p class="credit">{{ 'inquiry.page.credit' | translate }}</p>
     </main>
   `,
   styles: `

@@ -7,23 +7,23 @@ import type { ClientBoardView, ItemList } from '@layerbook/contracts/types';
 import { problemMessage } from '../../core/errors/problem';
 import { BOARDS_URL } from './board-api';
 import { BOARD_STATUS_WORDS } from './board-words';
+import { TranslatePipe } from '@ngx-translate/core';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
 
 /** The boards the firm has shown this client, each with its first photo and where it stands. */
 @Component({
   selector: 'lb-board-list',
-  imports: [MatIconModule, MatProgressBarModule, RouterLink],
+  imports: [MatIconModule, MatProgressBarModule, RouterLink, SayPipe, TranslatePipe],
   template: `
     <section class="lb-page">
-      <h1>Your sample boards</h1>
-      <p class="lead">
-        A sample board shows your finish made with the real products and colours. Look at each one, then approve it or ask for changes.
-      </p>
+      <h1>{{ 'samples.list.title' | translate }}</h1>
+      <p class="lead">{{ 'samples.list.lead' | translate }}</p>
       @if (isLoading()) {
-        <mat-progress-bar mode="indeterminate" aria-label="Loading your sample boards" />
+        <mat-progress-bar mode="indeterminate" [attr.aria-label]="'samples.list.loading' | translate" />
       } @else if (message()) {
-        <p role="alert">{{ message() }}</p>
+        <p role="alert">{{ message() | lbSay }}</p>
       } @else {
-        <ul class="boards" aria-label="Sample boards">
+        <ul class="boards" [attr.aria-label]="'samples.list.boards' | translate">
           @for (b of boards(); track b.id) {
             <li>
               <a [routerLink]="['/boards', b.id]" class="board">
@@ -35,17 +35,17 @@ import { BOARD_STATUS_WORDS } from './board-words';
                 <span class="text">
                   <strong>{{ b.label }}</strong>
                   @if (b.round > 1) {
-                    <span>Round {{ b.round }}</span>
+                    <span>{{ 'samples.list.round' | translate: { round: b.round } }}</span>
                   }
                   <span class="status">
                     <mat-icon aria-hidden="true">{{ words[b.status].icon }}</mat-icon>
-                    {{ words[b.status].text }}
+                    {{ words[b.status].text | translate }}
                   </span>
                 </span>
               </a>
             </li>
           } @empty {
-            <li class="none">No sample boards yet. When your finisher shows you one, it appears here.</li>
+            <li class="none">{{ 'samples.list.empty' | translate }}</li>
           }
         </ul>
       }

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { AbstractControl, FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
@@ -14,6 +13,11 @@ import { PhotoGallery } from '../../../../../shared/photos/photo-gallery';
 import { problemMessage, toProblem } from '../../core/errors/problem';
 import { BoardApi, boardUrl } from './board-api';
 import { BOARD_STATUS_WORDS } from './board-words';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
+import { SayPipe } from '../../../../../shared/errors/say-pipe';
+import { Language } from '../../../../../shared/i18n/language';
+import { FieldErrorPipe, type FieldErrorWords } from '../../../../../shared/forms/field-error-pipe';
+import { LbDatePipe } from '../../../../../shared/i18n/format';
 
 /** Spaces alone are not a request; the server trims before it checks. */
 const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' && c.value.trim() ? null : { required: true });
@@ -22,7 +26,8 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
 @Component({
   selector: 'lb-board-page',
   imports: [
-    DatePipe,
+    FieldErrorPipe,
+    LbDatePipe,
     MatButtonModule,
     MatFormFieldModule,
     MatIconModule,
@@ -31,16 +36,20 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
     PhotoGallery,
     ReactiveFormsModule,
     RouterLink,
+    SayPipe,
+    TranslatePipe,
   ],
   template: `
     <section class="lb-page">
-      <p><a routerLink="/boards">All your sample boards</a></p>
+      <p>
+        <a routerLink="/boards">{{ 'samples.board.all' | translate }}</a>
+      </p>
       @if (board(); as b) {
         <h1>{{ b.label }}</h1>
         <p class="meta">
-          From {{ b.firmName }}
+          {{ 'samples.board.from' | translate: { firm: b.firmName } }}
           @if (b.round > 1) {
-            <span>, round {{ b.round }}</span>
+            <span>{{ 'samples.board.round' | translate: { round: b.round } }}</span>
           }
         </p>
 
@@ -48,21 +57,21 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
           @case ('approved') {
             <p class="decided" role="status">
               <mat-icon aria-hidden="true">verified</mat-icon>
-              You approved this board on {{ b.decidedAt | date: 'longDate' }}. {{ b.firmName }} will match the work to it.
+              {{ 'samples.board.approved' | translate: { day: b.decidedAt | lbDate: 'long' : null, firm: b.firmName } }}
             </p>
           }
           @case ('changes_requested') {
             <div class="decided" role="status">
               <p>
-                <mat-icon aria-hidden="true">edit_note</mat-icon> You asked for changes on {{ b.decidedAt | date: 'longDate' }}.
-                {{ b.firmName }} will make a new board for you to see.
+                <mat-icon aria-hidden="true">edit_note</mat-icon>
+                {{ 'samples.board.changes' | translate: { day: b.decidedAt | lbDate: 'long' : null, firm: b.firmName } }}
               </p>
-              <p class="comment">You wrote: “{{ b.clientComment }}”</p>
+              <p class="comment">{{ 'proposals.page.youWrote' | translate: { comment: b.clientComment } }}</p>
             </div>
           }
           @default {
             <p class="status">
-              <mat-icon aria-hidden="true">{{ words.shown.icon }}</mat-icon> {{ words.shown.text }}
+              <mat-icon aria-hidden="true">{{ words.shown.icon }}</mat-icon> {{ words.shown.text | translate }}
             </p>
           }
         }
@@ -70,9 +79,9 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
         <lb-photo-gallery [subject]="b.label" [photos]="b.photos" [readOnly]="true" [thumbHeight]="180" />
 
         <section aria-labelledby="finish-heading">
-          <h2 id="finish-heading">The finish</h2>
+          <h2 id="finish-heading">{{ 'samples.board.finish' | translate }}</h2>
           @if (b.finishName) {
-            <p>{{ b.finishName }}, in the order it goes on:</p>
+            <p>{{ 'samples.board.inOrder' | translate: { finish: b.finishName } }}</p>
             <!-- Each step carries its number in its words ("1. Base coat: …"), so the list draws no marker of its own. -->
             <ol class="steps">
               @for (step of b.finishSteps; track $index) {
@@ -80,54 +89,58 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
               }
             </ol>
           } @else {
-            <p>{{ b.firmName }} will tell you about the finish on this board.</p>
+            <p>{{ 'samples.board.finishLater' | translate: { firm: b.firmName } }}</p>
           }
         </section>
 
         @if (b.status === 'shown') {
           <section class="answer" aria-labelledby="answer-heading">
-            <h2 id="answer-heading">Your answer</h2>
-            <p role="alert" class="error">{{ message() }}</p>
+            <h2 id="answer-heading">{{ 'proposals.page.answer' | translate }}</h2>
+            <p role="alert" class="error">{{ message() | lbSay }}</p>
             @if (isConfirming()) {
               <div class="confirm" role="group" aria-labelledby="confirm-text">
-                <p id="confirm-text">
-                  Approve "{{ b.label }}"? The finished work will be matched to this board. You cannot change your answer here afterwards.
-                </p>
-                <button mat-flat-button type="button" [disabled]="isBusy()" (click)="approve(b)">Yes, approve this board</button>
-                <button mat-button type="button" [disabled]="isBusy()" (click)="isConfirming.set(false)">Not yet</button>
+                <p id="confirm-text">{{ 'samples.board.confirm' | translate: { label: b.label } }}</p>
+                <button mat-flat-button type="button" [disabled]="isBusy()" (click)="approve(b)">
+                  {{ 'samples.board.yes' | translate }}
+                </button>
+                <button mat-button type="button" [disabled]="isBusy()" (click)="isConfirming.set(false)">
+                  {{ 'samples.board.notYet' | translate }}
+                </button>
               </div>
             } @else if (!isAsking()) {
               <div class="buttons">
                 <button mat-flat-button type="button" (click)="isConfirming.set(true)">
-                  <mat-icon aria-hidden="true">check</mat-icon>Approve this board
+                  <mat-icon aria-hidden="true">check</mat-icon>{{ 'samples.board.approve' | translate }}
                 </button>
                 <button mat-stroked-button type="button" (click)="isAsking.set(true)">
-                  <mat-icon aria-hidden="true">edit_note</mat-icon>Ask for changes
+                  <mat-icon aria-hidden="true">edit_note</mat-icon>{{ 'proposals.answers.askChanges' | translate }}
                 </button>
               </div>
             }
             @if (isAsking()) {
               <form (ngSubmit)="requestChanges(b)" novalidate>
                 <mat-form-field class="wide">
-                  <mat-label>What would you like changed?</mat-label>
+                  <mat-label>{{ 'proposals.answers.changesLabel' | translate }}</mat-label>
                   <textarea matInput [formControl]="comment" rows="4" [maxlength]="commentMax"></textarea>
-                  <mat-hint>For example: a little darker, less shine, softer movement</mat-hint>
+                  <mat-hint>{{ 'samples.board.hint' | translate }}</mat-hint>
                   @if (comment.invalid) {
-                    <mat-error>{{ commentError() }}</mat-error>
+                    <mat-error>{{ comment | lbFieldError: commentWords }}</mat-error>
                   }
                 </mat-form-field>
                 <div class="buttons">
-                  <button mat-flat-button type="submit" [disabled]="isBusy()">Send my request</button>
-                  <button mat-button type="button" [disabled]="isBusy()" (click)="isAsking.set(false)">Cancel</button>
+                  <button mat-flat-button type="submit" [disabled]="isBusy()">{{ 'proposals.answers.send' | translate }}</button>
+                  <button mat-button type="button" [disabled]="isBusy()" (click)="isAsking.set(false)">
+                    {{ 'billing.decision.cancel' | translate }}
+                  </button>
                 </div>
               </form>
             }
           </section>
         }
       } @else if (isLoading()) {
-        <mat-progress-bar mode="indeterminate" aria-label="Loading the sample board" />
+        <mat-progress-bar mode="indeterminate" [attr.aria-label]="'samples.board.loading' | translate" />
       } @else {
-        <p role="alert">{{ loadMessage() }}</p>
+        <p role="alert">{{ loadMessage() | lbSay }}</p>
       }
     </section>
   `,
@@ -191,6 +204,8 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
 export class BoardPage {
   private readonly api = inject(BoardApi);
   private readonly title = inject(Title);
+  private readonly translate = inject(TranslateService);
+  private readonly language = inject(Language);
 
   /** route parameter */
   readonly id = input.required<string>();
@@ -203,9 +218,7 @@ export class BoardPage {
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return toProblem(error).status === 404
-      ? 'This sample board is not here. It may not have been shown to you yet.'
-      : problemMessage(error);
+    return toProblem(error).status === 404 ? 'samples.board.missing' : problemMessage(error);
   });
   protected readonly isBusy = signal(false);
   protected readonly isConfirming = signal(false);
@@ -218,16 +231,15 @@ export class BoardPage {
   constructor() {
     effect(() => {
       const b = this.board();
-      if (b) this.title.setTitle(`${b.label} · Layerbook client portal`);
+      this.language.current();
+      if (b) this.title.setTitle(this.translate.instant('layout.titles.named', { name: b.label }) as string);
     });
   }
 
-  protected commentError(): string {
-    const errors = this.comment.errors ?? {};
-    if (typeof errors['server'] === 'string') return errors['server'];
-    if (errors['maxlength']) return `Please keep it under ${SAMPLE_COMMENT_MAX} characters.`;
-    return 'Tell us what you would like changed.';
-  }
+  protected readonly commentWords: FieldErrorWords = {
+    maxlength: { key: 'samples.board.tooLong', params: { max: SAMPLE_COMMENT_MAX } },
+    required: 'samples.board.commentRequired',
+  };
 
   protected async approve(b: ClientBoardView): Promise<void> {
     await this.answer(() => this.api.approve(b.id));

@@ -1,4 +1,4 @@
-import { CLIENT_BOARD_STATUS_LABELS, type ClientBoardStatus } from '@layerbook/contracts/types';
+import { type ClientBoardStatus } from '@layerbook/contracts/types';
 
 const ICONS: Readonly<Record<ClientBoardStatus, string>> = {
   shown: 'hourglass_top',
@@ -6,9 +6,9 @@ const ICONS: Readonly<Record<ClientBoardStatus, string>> = {
   changes_requested: 'edit_note',
 };
 
-/** Where a board stands, in the contract's words and an icon (never colour alone). */
+/** Where a board stands, as a words key (samples.status.*, the contract's words) and an icon (never colour alone). */
 export const BOARD_STATUS_WORDS: Readonly<Record<ClientBoardStatus, { readonly text: string; readonly icon: string }>> = {
-  shown: { text: CLIENT_BOARD_STATUS_LABELS.shown, icon: ICONS.shown },
-  approved: { text: CLIENT_BOARD_STATUS_LABELS.approved, icon: ICONS.approved },
-  changes_requested: { text: CLIENT_BOARD_STATUS_LABELS.changes_requested, icon: ICONS.changes_requested },
+  shown: { text: 'samples.status.shown', icon: ICONS.shown },
+  approved: { text: 'samples.status.approved', icon: ICONS.approved },
+  changes_requested: { text: 'samples.status.changesRequested', icon: ICONS.changes_requested },
 };
