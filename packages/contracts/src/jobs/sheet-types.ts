@@ -51,6 +51,8 @@ export interface SheetLayer {
   readonly dilution: Dilution | null;
   readonly coats: number;
   readonly coverage: Coverage;
+  /** per-coat coverage when the coats differ (a first coat on a porous wall goes less far); one per coat */
+  readonly coatCoverages?: readonly Coverage[];
   /** share of the surface this layer covers, 0–1 */
   readonly coverageShare: number;
   /** calendar hours to wait after this layer before the next one on the same surface */
