@@ -5,12 +5,12 @@ export default [
   {
     path: '',
     pathMatch: 'full',
-    title: 'Invoices · Layerbook',
+    title: 'billing.titles.list',
     loadComponent: () => import('./invoice-list').then((m) => m.InvoiceList),
   },
   {
     path: 'invoices/:id',
-    title: 'Invoice · Layerbook',
+    title: 'billing.titles.detail',
     loadComponent: () => import('./invoice-detail').then((m) => m.InvoiceDetailPage),
   },
 ] satisfies Routes;

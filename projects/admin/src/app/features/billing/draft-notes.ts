@@ -10,23 +10,26 @@ import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { InvoiceApi } from './invoice-api';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** A draft's notes to the client, printed on the invoice. */
 @Component({
   selector: 'lb-draft-notes',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [TranslatePipe, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
   template: `
-    <form [formGroup]="form" (ngSubmit)="saveNotes()" novalidate aria-label="Notes on the invoice">
+    <form [formGroup]="form" (ngSubmit)="saveNotes()" novalidate [attr.aria-label]="'billing.draftNotes.notesOnTheInvoice' | translate">
       <fieldset class="lb-gate" [disabled]="!isHydrated()">
         <lb-form-alert [message]="submission.message()" />
         <mat-form-field class="lb-full">
-          <mat-label>Notes on the invoice</mat-label>
+          <mat-label>{{ 'billing.draftNotes.notesOnTheInvoice' | translate }}</mat-label>
           <textarea matInput formControlName="notes" rows="3"></textarea>
-          <mat-hint>The client reads these on the invoice, above the footer.</mat-hint>
+          <mat-hint>{{ 'billing.draftNotes.theClientReadsThese' | translate }}</mat-hint>
           <mat-error>{{ errorText(form.controls.notes, words) }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions">
-          <button mat-stroked-button type="submit" [disabled]="submission.isBusy() || form.pristine">Save the notes</button>
+          <button mat-stroked-button type="submit" [disabled]="submission.isBusy() || form.pristine">
+            {{ 'billing.draftNotes.saveTheNotes' | translate }}
+          </button>
         </div>
       </fieldset>
     </form>

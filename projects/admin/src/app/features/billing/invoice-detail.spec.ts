@@ -11,10 +11,13 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cardOverpayment, cardRefundPending } from '../payments/payment-fixtures';
 import { InvoiceDetailPage } from './invoice-detail';
 import { issuedSummary, progressDraft } from './invoice-fixtures';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { officeWords } from '../../shared/testing/office-words';
 
 async function render(invoice: InvoiceDetail, dialog?: object) {
   TestBed.configureTestingModule({
     providers: [
+      provideTestI18n(officeWords),
       provideHttpClient(),
       provideHttpClientTesting(),
       provideRouter([]),

@@ -24,11 +24,13 @@ import { IssueDialog, type IssueDialogData, type IssueResult } from './issue-dia
 import { PaymentForm } from './payment-form';
 import { ProgressTable } from './progress-table';
 import { VoidDialog, type VoidDialogData } from './void-dialog';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** One invoice: review and issue a draft; for an issued one, its PDF, payments, reminders, void and history. */
 @Component({
   selector: 'lb-invoice-detail',
   imports: [
+    TranslatePipe,
     CalendarDatePipe,
     DatePipe,
     DraftNotes,

@@ -7,11 +7,15 @@ import { INVOICE_LIST_FILTERS, INVOICE_LIST_FILTER_LABELS } from '@layerbook/con
 import { afterEach, describe, expect, it } from 'vitest';
 import { issuedSummary } from './invoice-fixtures';
 import { InvoiceList } from './invoice-list';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { officeWords } from '../../shared/testing/office-words';
 
 const draft = { ...issuedSummary, id: 'inv-2', number: null, status: 'draft' as const, isOverdue: false, origin: 'queue' as const };
 
 async function render(hasDrafts: boolean) {
-  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])] });
+  TestBed.configureTestingModule({
+    providers: [provideTestI18n(officeWords), provideHttpClient(), provideHttpClientTesting(), provideRouter([])],
+  });
   const fixture = TestBed.createComponent(InvoiceList);
   TestBed.inject(ApplicationRef).tick();
   const http = TestBed.inject(HttpTestingController);

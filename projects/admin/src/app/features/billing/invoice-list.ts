@@ -33,6 +33,7 @@ import {
   type InvoiceFilters,
 } from './invoice-filters';
 import { filterOrder, invoiceNumber, invoiceStatus, kindWord } from './invoice-words';
+import { TranslatePipe } from '@ngx-translate/core';
 
 const SEARCH_PAUSE_MS = 300;
 
@@ -40,6 +41,7 @@ const SEARCH_PAUSE_MS = 300;
 @Component({
   selector: 'lb-invoice-list',
   imports: [
+    TranslatePipe,
     CalendarDatePipe,
     FormAlert,
     MatButtonModule,

@@ -7,11 +7,14 @@ import type { InvoiceDetail } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { progressDraft } from './invoice-fixtures';
 import { IssueDialog } from './issue-dialog';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { officeWords } from '../../shared/testing/office-words';
 
 function render(invoice: InvoiceDetail) {
   const close = vi.fn();
   TestBed.configureTestingModule({
     providers: [
+      provideTestI18n(officeWords),
       provideHttpClient(),
       provideHttpClientTesting(),
       provideNoopAnimations(),

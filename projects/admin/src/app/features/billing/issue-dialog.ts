@@ -14,6 +14,7 @@ import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { InvoiceApi } from './invoice-api';
+import { TranslatePipe } from '@ngx-translate/core';
 
 export interface IssueDialogData {
   readonly invoice: InvoiceDetail;
@@ -29,6 +30,7 @@ export interface IssueResult {
 @Component({
   selector: 'lb-issue-dialog',
   imports: [
+    TranslatePipe,
     FormAlert,
     MatButtonModule,
     MatCheckboxModule,
@@ -41,16 +43,18 @@ export interface IssueResult {
   ],
   providers: [provideNativeDateAdapter()],
   template: `
-    <h2 mat-dialog-title>Issue this invoice?</h2>
+    <h2 mat-dialog-title>{{ 'billing.issueDialog.issueThisInvoice' | translate }}</h2>
     <form [formGroup]="form" (ngSubmit)="issue()" novalidate>
       <mat-dialog-content>
         <lb-form-alert [message]="submission.message()" />
         <p>
-          {{ data.invoice.clientName }} will owe {{ data.invoice.total | money: data.invoice.currency }}. The invoice takes the next number
-          and can no longer be changed; a mistake is put right by voiding it, which makes a credit note.
+          {{
+            'billing.issueDialog.willOweTheInvoice'
+              | translate: { clientName: data.invoice.clientName, total: (data.invoice.total | money: data.invoice.currency) }
+          }}
         </p>
         <mat-form-field class="lb-full">
-          <mat-label>Invoice date</mat-label>
+          <mat-label>{{ 'billing.issueDialog.invoiceDate' | translate }}</mat-label>
           <input matInput [matDatepicker]="picker" formControlName="issuedOn" autocomplete="off" required />
           <mat-datepicker-toggle matIconSuffix [for]="picker" />
           <mat-datepicker #picker />
@@ -58,14 +62,20 @@ export interface IssueResult {
           <mat-error>{{ errorText(form.controls.issuedOn, words.issuedOn) }}</mat-error>
         </mat-form-field>
         @if (clientEmail) {
-          <mat-checkbox formControlName="send">E-mail it to the client ({{ clientEmail }})</mat-checkbox>
+          <mat-checkbox formControlName="send">{{
+            'billing.issueDialog.eMailItTo' | translate: { clientEmail: clientEmail }
+          }}</mat-checkbox>
         } @else {
-          <p class="muted">The client has no e-mail address on file, so the invoice is not e-mailed. Download its PDF after issuing.</p>
+          <p class="muted">{{ 'billing.issueDialog.theClientHasNo' | translate }}</p>
         }
       </mat-dialog-content>
       <mat-dialog-actions align="end">
-        <button mat-button type="button" [mat-dialog-close]="undefined" [disabled]="submission.isBusy()">Cancel</button>
-        <button mat-flat-button type="submit" [disabled]="submission.isBusy()">Issue the invoice</button>
+        <button mat-button type="button" [mat-dialog-close]="undefined" [disabled]="submission.isBusy()">
+          {{ 'billing.issueDialog.cancel' | translate }}
+        </button>
+        <button mat-flat-button type="submit" [disabled]="submission.isBusy()">
+          {{ 'billing.issueDialog.issueTheInvoice' | translate }}
+        </button>
       </mat-dialog-actions>
     </form>
   `,

@@ -18,11 +18,13 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { InvoiceApi } from './invoice-api';
 import { PAYMENT_METHOD_LABELS } from './invoice-words';
 import { OFFLINE_PAYMENT_METHODS, paymentAmountCheck } from './payment-input';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** Records a cheque, transfer or cash received against an issued invoice. */
 @Component({
   selector: 'lb-payment-form',
   imports: [
+    TranslatePipe,
     FormAlert,
     MatButtonModule,
     MatDatepickerModule,
@@ -36,11 +38,11 @@ import { OFFLINE_PAYMENT_METHODS, paymentAmountCheck } from './payment-input';
   template: `
     <form [formGroup]="form" (ngSubmit)="recordPayment()" novalidate aria-labelledby="payment-form-heading">
       <fieldset class="lb-gate" [disabled]="!isHydrated()">
-        <h3 id="payment-form-heading">Record a payment</h3>
+        <h3 id="payment-form-heading">{{ 'billing.paymentForm.recordAPayment' | translate }}</h3>
         <lb-form-alert [message]="submission.message()" />
         <div class="fields">
           <mat-form-field>
-            <mat-label>Paid by</mat-label>
+            <mat-label>{{ 'billing.paymentForm.paidBy' | translate }}</mat-label>
             <mat-select formControlName="method">
               @for (method of methods; track method) {
                 <mat-option [value]="method">{{ methodLabels[method] }}</mat-option>
@@ -49,29 +51,33 @@ import { OFFLINE_PAYMENT_METHODS, paymentAmountCheck } from './payment-input';
             <mat-error>{{ errorText(form.controls.method, {}) }}</mat-error>
           </mat-form-field>
           <mat-form-field>
-            <mat-label>Amount</mat-label>
+            <mat-label>{{ 'billing.paymentForm.amount' | translate }}</mat-label>
             <input matInput formControlName="amount" inputmode="decimal" autocomplete="off" required />
             <span matTextSuffix>&nbsp;{{ invoice().currency }}</span>
-            <mat-hint>At most {{ invoice().amountDue | money: invoice().currency }}, the amount due</mat-hint>
+            <mat-hint>{{
+              'billing.paymentForm.atMostTheAmount' | translate: { amountDue: (invoice().amountDue | money: invoice().currency) }
+            }}</mat-hint>
             <mat-error>{{ errorText(form.controls.amount, amountWords()) }}</mat-error>
           </mat-form-field>
           <mat-form-field>
-            <mat-label>Received on</mat-label>
+            <mat-label>{{ 'billing.paymentForm.receivedOn' | translate }}</mat-label>
             <input matInput [matDatepicker]="picker" formControlName="receivedOn" autocomplete="off" required />
             <mat-datepicker-toggle matIconSuffix [for]="picker" />
             <mat-datepicker #picker />
             <mat-error>{{ errorText(form.controls.receivedOn, words.receivedOn) }}</mat-error>
           </mat-form-field>
           <mat-form-field>
-            <mat-label>Reference</mat-label>
+            <mat-label>{{ 'billing.paymentForm.reference' | translate }}</mat-label>
             <input matInput formControlName="reference" autocomplete="off" />
-            <mat-hint>Cheque number or transfer reference</mat-hint>
+            <mat-hint>{{ 'billing.paymentForm.chequeNumberOrTransfer' | translate }}</mat-hint>
             <mat-error>{{ errorText(form.controls.reference, words.reference) }}</mat-error>
           </mat-form-field>
         </div>
         <div class="lb-form-actions">
-          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">Record the payment</button>
-          <button mat-button type="button" (click)="cancelled.emit()">Cancel</button>
+          <button mat-flat-button type="submit" [disabled]="submission.isBusy()">
+            {{ 'billing.paymentForm.recordThePayment' | translate }}
+          </button>
+          <button mat-button type="button" (click)="cancelled.emit()">{{ 'billing.paymentForm.cancel' | translate }}</button>
         </div>
       </fieldset>
     </form>

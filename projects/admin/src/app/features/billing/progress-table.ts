@@ -27,6 +27,7 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { InvoiceApi } from './invoice-api';
 import { retainageWords } from './invoice-words';
 import { formFieldOf, previewLine, progressLinesUpdate, startingWork, type WorkMode } from './progress-input';
+import { TranslatePipe } from '@ngx-translate/core';
 
 type LineGroup = FormGroup<{
   valueLineId: FormControl<string>;
@@ -53,6 +54,7 @@ function workToDateCheck(line: ProgressTableLine, currency: string): ValidatorFn
 @Component({
   selector: 'lb-progress-table',
   imports: [
+    TranslatePipe,
     FormAlert,
     MatButtonModule,
     MatButtonToggleModule,

@@ -11,6 +11,7 @@ import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { InvoiceApi } from './invoice-api';
+import { TranslatePipe } from '@ngx-translate/core';
 
 export interface VoidDialogData {
   readonly invoice: InvoiceDetail;
@@ -19,26 +20,27 @@ export interface VoidDialogData {
 /** Voids an issued invoice with a reason; a numbered credit note cancels it. Closes with the voided invoice, or nothing. */
 @Component({
   selector: 'lb-void-dialog',
-  imports: [FormAlert, MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, MoneyPipe, ReactiveFormsModule],
+  imports: [TranslatePipe, FormAlert, MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, MoneyPipe, ReactiveFormsModule],
   template: `
-    <h2 mat-dialog-title>Void {{ data.invoice.number }}?</h2>
+    <h2 mat-dialog-title>{{ 'billing.voidDialog.void' | translate: { number: data.invoice.number } }}</h2>
     <form [formGroup]="form" (ngSubmit)="voidInvoice()" novalidate>
       <mat-dialog-content>
         <lb-form-alert [message]="submission.message()" />
         <p>
-          A credit note for {{ data.invoice.total | money: data.invoice.currency }} cancels it, with the next credit note number. The
-          invoice keeps its number and stays on record as void.
+          {{ 'billing.voidDialog.aCreditNoteFor' | translate: { total: (data.invoice.total | money: data.invoice.currency) } }}
         </p>
         <mat-form-field class="lb-full">
-          <mat-label>Why it is voided</mat-label>
+          <mat-label>{{ 'billing.voidDialog.whyItIsVoided' | translate }}</mat-label>
           <textarea matInput formControlName="reason" rows="3" required cdkFocusInitial></textarea>
-          <mat-hint>Printed on the credit note, like “billed twice” or “wrong amount”.</mat-hint>
+          <mat-hint>{{ 'billing.voidDialog.printedOnTheCredit' | translate }}</mat-hint>
           <mat-error>{{ errorText(form.controls.reason, words) }}</mat-error>
         </mat-form-field>
       </mat-dialog-content>
       <mat-dialog-actions align="end">
-        <button mat-button type="button" [mat-dialog-close]="undefined" [disabled]="submission.isBusy()">Cancel</button>
-        <button mat-flat-button type="submit" [disabled]="submission.isBusy()">Void and make a credit note</button>
+        <button mat-button type="button" [mat-dialog-close]="undefined" [disabled]="submission.isBusy()">
+          {{ 'billing.voidDialog.cancel' | translate }}
+        </button>
+        <button mat-flat-button type="submit" [disabled]="submission.isBusy()">{{ 'billing.voidDialog.voidAndMakeA' | translate }}</button>
       </mat-dialog-actions>
     </form>
   `,

@@ -5,21 +5,21 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { toIsoDate } from '../../shared/forms/iso-date';
 import { EXPORT_KINDS, defaultExportRange, exportHref, exportRangeProblem } from './export-range';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** Spreadsheet files (CSV) for the accountant: invoices, payments, refunds, credit notes and clients for a range of days. */
 @Component({
   selector: 'lb-cash-exports',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  imports: [TranslatePipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
   template: `
     <section class="cash-section" aria-labelledby="exports-heading">
-      <h2 id="exports-heading">Files for your accountant</h2>
+      <h2 id="exports-heading">{{ 'cash.cashExports.filesForYourAccountant' | translate }}</h2>
       <p class="note">
-        Spreadsheet files (CSV) in your firm's currency, with dates as your firm's days. Invoices by the day they were issued, payments by
-        the day received, refunds and credit notes by their day, clients by the day they were added.
+        {{ 'cash.cashExports.spreadsheetFilesCsvIn' | translate }}
       </p>
-      <div class="range" role="group" aria-label="Days to include">
+      <div class="range" role="group" [attr.aria-label]="'cash.cashExports.daysToInclude' | translate">
         <mat-form-field subscriptSizing="dynamic">
-          <mat-label>First day</mat-label>
+          <mat-label>{{ 'cash.cashExports.firstDay' | translate }}</mat-label>
           <input
             matInput
             type="date"
@@ -32,7 +32,7 @@ import { EXPORT_KINDS, defaultExportRange, exportHref, exportRangeProblem } from
           }
         </mat-form-field>
         <mat-form-field subscriptSizing="dynamic">
-          <mat-label>Last day</mat-label>
+          <mat-label>{{ 'cash.cashExports.lastDay' | translate }}</mat-label>
           <input
             matInput
             type="date"
@@ -55,7 +55,7 @@ import { EXPORT_KINDS, defaultExportRange, exportHref, exportRangeProblem } from
           } @else {
             <a mat-stroked-button [href]="href(choice.kind)" download>
               <mat-icon aria-hidden="true">download</mat-icon>
-              {{ choice.label }}<span class="lb-visually-hidden"> (CSV file)</span>
+              {{ choice.label }}<span class="lb-visually-hidden"> {{ 'cash.cashExports.csvFile' | translate }}</span>
             </a>
           }
         }

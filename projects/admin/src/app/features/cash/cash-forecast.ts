@@ -8,38 +8,37 @@ import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { CashChart } from './cash-chart';
 import { FORECAST_PARTS, barOptions, forecastChart } from './cash-charts';
 import type { CashForecast as CashForecastView } from '@layerbook/contracts/types';
+import { TranslatePipe } from '@ngx-translate/core';
 
 export const FORECAST_URL = '/api/cash/forecast';
 
 /** Cash expected week by week for the next 13 weeks, its three sources kept apart. */
 @Component({
   selector: 'lb-cash-forecast',
-  imports: [CalendarDatePipe, CashChart, FormAlert, MatProgressBarModule, MoneyPipe],
+  imports: [TranslatePipe, CalendarDatePipe, CashChart, FormAlert, MatProgressBarModule, MoneyPipe],
   template: `
     <section class="cash-section" aria-labelledby="expected-heading">
-      <h2 id="expected-heading">Cash expected, next 13 weeks</h2>
+      <h2 id="expected-heading">{{ 'cash.cashForecast.cashExpectedNext13' | translate }}</h2>
       <lb-form-alert [message]="message()" />
       @if (forecast.isLoading()) {
-        <mat-progress-bar mode="indeterminate" aria-label="Loading cash expected" />
+        <mat-progress-bar mode="indeterminate" [aria-label]="'cash.cashForecast.loadingCashExpected' | translate" />
       }
       @if (view(); as f) {
         @if (chart(); as c) {
-          <lb-cash-chart
-            [data]="c.data"
-            [options]="c.options"
-            summary="Stacked bar chart of cash expected in each of the next 13 weeks, in three parts: invoices sent, work still to bill and deposits from open inquiries; its figures are in the table beside it."
-          >
+          <lb-cash-chart [data]="c.data" [options]="c.options" [summary]="'cash.cashForecast.stackedBarChartOf' | translate">
             <table class="figures-table">
               <caption>
-                Expected by week
+                {{
+                  'cash.cashForecast.expectedByWeek' | translate
+                }}
               </caption>
               <thead>
                 <tr>
-                  <th scope="col">Week of</th>
+                  <th scope="col">{{ 'cash.cashForecast.weekOf' | translate }}</th>
                   @for (part of parts; track part.key) {
                     <th scope="col" class="num">{{ part.short }}</th>
                   }
-                  <th scope="col" class="num">Total</th>
+                  <th scope="col" class="num">{{ 'cash.cashForecast.total' | translate }}</th>
                 </tr>
               </thead>
               <tbody>
@@ -55,7 +54,7 @@ export const FORECAST_URL = '/api/cash/forecast';
               </tbody>
               <tfoot>
                 <tr>
-                  <th scope="row">Later than 13 weeks</th>
+                  <th scope="row">{{ 'cash.cashForecast.laterThan13Weeks' | translate }}</th>
                   @for (part of parts; track part.key) {
                     <td class="num">{{ f.beyondHorizon[part.key] | money: f.currency }}</td>
                   }
@@ -77,17 +76,19 @@ export const FORECAST_URL = '/api/cash/forecast';
           <p class="note">{{ note }}</p>
         }
         @if (f.odds.length > 0) {
-          <div class="odds-box" tabindex="0" role="region" aria-label="Odds used for open inquiries">
+          <div class="odds-box" tabindex="0" role="region" [attr.aria-label]="'cash.cashForecast.oddsUsedForOpen' | translate">
             <table class="odds">
               <caption>
-                Odds used for open inquiries
+                {{
+                  'cash.cashForecast.oddsUsedForOpen' | translate
+                }}
               </caption>
               <thead>
                 <tr>
-                  <th scope="col">Stage</th>
-                  <th scope="col" class="num">Open</th>
-                  <th scope="col" class="num">Odds</th>
-                  <th scope="col">From</th>
+                  <th scope="col">{{ 'cash.cashForecast.stage' | translate }}</th>
+                  <th scope="col" class="num">{{ 'cash.cashForecast.open' | translate }}</th>
+                  <th scope="col" class="num">{{ 'cash.cashForecast.odds' | translate }}</th>
+                  <th scope="col">{{ 'cash.cashForecast.from' | translate }}</th>
                 </tr>
               </thead>
               <tbody>
@@ -95,8 +96,14 @@ export const FORECAST_URL = '/api/cash/forecast';
                   <tr>
                     <th scope="row">{{ stage.label }}</th>
                     <td class="num">{{ stage.openCount }}</td>
-                    <td class="num">{{ stage.percent }} in 100</td>
-                    <td>{{ stage.source === 'firm' ? 'Your own odds for this stage' : 'A usual figure (your firm has set none)' }}</td>
+                    <td class="num">{{ 'cash.cashForecast.in100' | translate: { percent: stage.percent } }}</td>
+                    <td>
+                      {{
+                        stage.source === 'firm'
+                          ? ('cash.cashForecast.yourOwnOddsFor' | translate)
+                          : ('cash.cashForecast.aUsualFigureYour' | translate)
+                      }}
+                    </td>
                   </tr>
                 }
               </tbody>

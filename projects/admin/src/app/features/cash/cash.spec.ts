@@ -8,6 +8,8 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { Session } from '../../core/auth/session';
 import { Cash } from './cash';
 import { FORECAST, OFFICE_JOBS, OWNER_JOBS, RECEIVABLES, RECEIVED } from './cash-fixtures';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { officeWords } from '../../shared/testing/office-words';
 
 async function open(
   url: string,
@@ -16,6 +18,7 @@ async function open(
 ): Promise<{ http: HttpTestingController; html: () => HTMLElement; asOfSent: string | null }> {
   TestBed.configureTestingModule({
     providers: [
+      provideTestI18n(officeWords),
       provideHttpClient(),
       provideHttpClientTesting(),
       provideRouter([]),

@@ -7,6 +7,7 @@ import { CashForecast } from './cash-forecast';
 import { JobMoney } from './job-money';
 import { ReceivedByMonth } from './received-by-month';
 import { Receivables } from './receivables';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /**
  * The owner's cash: who owes what and how late, what came in each month, what is expected in the
@@ -16,15 +17,15 @@ import { Receivables } from './receivables';
  */
 @Component({
   selector: 'lb-cash',
-  imports: [CashExports, CashForecast, JobMoney, ReceivedByMonth, Receivables],
+  imports: [TranslatePipe, CashExports, CashForecast, JobMoney, ReceivedByMonth, Receivables],
   providers: [provideCharts({ registerables: [BarController, BarElement, CategoryScale, LinearScale, Legend, Tooltip] })],
   template: `
     <section class="lb-page wide-page">
-      <h1>Cash</h1>
+      <h1>{{ 'cash.cash.cash' | translate }}</h1>
       <p class="lb-lead">
-        Who owes you and how late, what came in each month and what should come in over the next three months.
+        {{ 'cash.cash.whoOwesYouAnd' | translate }}
         @if (isOwner) {
-          What each job brought in, with its margin where the costs are known.
+          {{ 'cash.cash.whatEachJobBrought' | translate }}
         }
       </p>
       <lb-receivables />

@@ -7,6 +7,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import type { CashJobs } from '@layerbook/contracts/types';
 import { percentWords } from './cash-words';
+import { TranslatePipe } from '@ngx-translate/core';
 
 export const JOBS_URL = '/api/cash/jobs';
 
@@ -21,7 +22,7 @@ export function hasMargins(jobs: CashJobs): boolean {
 /** How estimates turn into work and what each job brought in: win rate, average job size, and money per job. */
 @Component({
   selector: 'lb-job-money',
-  imports: [FormAlert, MatProgressBarModule, MoneyPipe, RouterLink],
+  imports: [TranslatePipe, FormAlert, MatProgressBarModule, MoneyPipe, RouterLink],
   templateUrl: './job-money.html',
   styleUrl: './cash-section.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

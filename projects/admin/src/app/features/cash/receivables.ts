@@ -17,6 +17,7 @@ import { agingChart, barOptions } from './cash-charts';
 import { CASH_AGING_BUCKETS, CASH_AGING_BUCKET_LABELS, type CashAgingBucket, type CashReceivables } from '@layerbook/contracts/types';
 import { lateWords } from './cash-words';
 import { drillFromParams, drillHeading, drillToParams, drilledInvoices, type ReceivableDrill } from './receivable-drill';
+import { TranslatePipe } from '@ngx-translate/core';
 
 export const RECEIVABLES_URL = '/api/cash/receivables';
 
@@ -24,6 +25,7 @@ export const RECEIVABLES_URL = '/api/cash/receivables';
 @Component({
   selector: 'lb-receivables',
   imports: [
+    TranslatePipe,
     CalendarDatePipe,
     CashChart,
     FormAlert,

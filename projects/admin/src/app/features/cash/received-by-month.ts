@@ -8,37 +8,36 @@ import { CashChart } from './cash-chart';
 import { barOptions, receivedChart } from './cash-charts';
 import type { CashReceived } from '@layerbook/contracts/types';
 import { monthLabel } from './cash-words';
+import { TranslatePipe } from '@ngx-translate/core';
 
 export const RECEIVED_URL = '/api/cash/received';
 
 /** Cash that came in, month by month for the last twelve months, less the refunds given. */
 @Component({
   selector: 'lb-received-by-month',
-  imports: [CashChart, FormAlert, MatProgressBarModule, MoneyPipe],
+  imports: [TranslatePipe, CashChart, FormAlert, MatProgressBarModule, MoneyPipe],
   template: `
     <section class="cash-section" aria-labelledby="received-heading">
-      <h2 id="received-heading">Cash received, by month</h2>
+      <h2 id="received-heading">{{ 'cash.receivedByMonth.cashReceivedByMonth' | translate }}</h2>
       <lb-form-alert [message]="message()" />
       @if (received.isLoading()) {
-        <mat-progress-bar mode="indeterminate" aria-label="Loading cash received" />
+        <mat-progress-bar mode="indeterminate" [aria-label]="'cash.receivedByMonth.loadingCashReceived' | translate" />
       }
       @if (view(); as r) {
         @if (chart(); as c) {
-          <lb-cash-chart
-            [data]="c.data"
-            [options]="c.options"
-            summary="Bar chart of cash received in each of the last twelve months, less refunds; its figures are in the table beside it."
-          >
+          <lb-cash-chart [data]="c.data" [options]="c.options" [summary]="'cash.receivedByMonth.barChartOfCash' | translate">
             <table class="figures-table">
               <caption>
-                Received in the last 12 months
+                {{
+                  'cash.receivedByMonth.receivedInTheLast' | translate
+                }}
               </caption>
               <thead>
                 <tr>
-                  <th scope="col">Month</th>
-                  <th scope="col" class="num">Payments</th>
-                  <th scope="col" class="num">Refunds</th>
-                  <th scope="col" class="num">Received</th>
+                  <th scope="col">{{ 'cash.receivedByMonth.month' | translate }}</th>
+                  <th scope="col" class="num">{{ 'cash.receivedByMonth.payments' | translate }}</th>
+                  <th scope="col" class="num">{{ 'cash.receivedByMonth.refunds' | translate }}</th>
+                  <th scope="col" class="num">{{ 'cash.receivedByMonth.received' | translate }}</th>
                 </tr>
               </thead>
               <tbody>
@@ -52,7 +51,7 @@ export const RECEIVED_URL = '/api/cash/received';
                       @if (month.refundCount > 0) {
                         −{{ month.refunded | money: r.currency }} <span class="muted">({{ month.refundCount }})</span>
                       } @else {
-                        <span class="muted">none</span>
+                        <span class="muted">{{ 'cash.receivedByMonth.none' | translate }}</span>
                       }
                     </td>
                     <td class="num">{{ month.net | money: r.currency }}</td>
@@ -61,7 +60,7 @@ export const RECEIVED_URL = '/api/cash/received';
               </tbody>
               <tfoot>
                 <tr>
-                  <th scope="row">Twelve months</th>
+                  <th scope="row">{{ 'cash.receivedByMonth.twelveMonths' | translate }}</th>
                   <td class="num">{{ r.totals.received | money: r.currency }}</td>
                   <td class="num">−{{ r.totals.refunded | money: r.currency }}</td>
                   <td class="num">{{ r.totals.net | money: r.currency }}</td>
@@ -70,8 +69,7 @@ export const RECEIVED_URL = '/api/cash/received';
             </table>
           </lb-cash-chart>
           <p class="note">
-            Payments are counted on the day they were received and refunds on the day they were given back. The number of each is in
-            brackets.
+            {{ 'cash.receivedByMonth.paymentsAreCountedOn' | translate }}
           </p>
         }
       }

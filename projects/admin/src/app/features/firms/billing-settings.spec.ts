@@ -7,12 +7,20 @@ import { DEFAULT_BILLING_SETTINGS, type BillingSettings, type BillingSettingsVie
 import { afterEach, describe, expect, it } from 'vitest';
 import { Session } from '../../core/auth/session';
 import { BillingSettingsPage } from './billing-settings';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { officeWords } from '../../shared/testing/office-words';
 
 const VIEW: BillingSettingsView = { settings: DEFAULT_BILLING_SETTINGS, isDefault: true, currency: 'USD' };
 
 async function render(role: StaffRole) {
   TestBed.configureTestingModule({
-    providers: [provideZonelessChangeDetection(), provideHttpClient(), provideHttpClientTesting(), provideRouter([])],
+    providers: [
+      provideTestI18n(officeWords),
+      provideZonelessChangeDetection(),
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      provideRouter([]),
+    ],
   });
   TestBed.inject(Session).accept({
     user: {

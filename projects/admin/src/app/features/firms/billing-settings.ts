@@ -35,6 +35,7 @@ import { AMOUNT_WORDS } from '../../shared/forms/money-input';
 import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { applyPreset, billingSettingsForm, fillBillingForm, presetOf, readBillingForm } from './billing-settings-form';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 
 const range = (min: number, max: number, unit: string) => ({
   required: `Enter a number of ${unit}.`,
@@ -52,6 +53,7 @@ const range = (min: number, max: number, unit: string) => ({
 @Component({
   selector: 'lb-billing-settings',
   imports: [
+    TranslatePipe,
     FormAlert,
     MatButtonModule,
     MatCheckboxModule,
@@ -70,6 +72,7 @@ const range = (min: number, max: number, unit: string) => ({
 export class BillingSettingsPage {
   private readonly http = inject(HttpClient);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
 
   protected readonly isOwner = inject(Session).isOwner;
   protected readonly isHydrated = hydratedSignal();
@@ -137,7 +140,9 @@ export class BillingSettingsPage {
     );
     if (saved) {
       this.billing.set(saved);
-      this.snackBar.open('Billing settings saved.', 'Close', { duration: 4000 });
+      this.snackBar.open(this.translate.instant('firms.snack.billingSaved') as string, this.translate.instant('ui.snack.close') as string, {
+        duration: 4000,
+      });
     }
   }
 

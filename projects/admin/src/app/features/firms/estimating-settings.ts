@@ -31,6 +31,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { estimatingForm, fillForm, methodInWords, readForm } from './estimating-form';
 import { FirmApi } from './firm-api';
 import { readHoliday, withHoliday, withoutHoliday } from './holidays';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 
 /**
  * The numbers every estimate is built from: labour rate, overhead and profit, minimum charge, tax,
@@ -39,6 +40,7 @@ import { readHoliday, withHoliday, withoutHoliday } from './holidays';
 @Component({
   selector: 'lb-estimating-settings',
   imports: [
+    TranslatePipe,
     FormAlert,
     MatButtonModule,
     MatCheckboxModule,
@@ -55,6 +57,7 @@ import { readHoliday, withHoliday, withoutHoliday } from './holidays';
 export class EstimatingSettingsForm {
   private readonly api = inject(FirmApi);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
 
   protected readonly isOwner = inject(Session).isOwner;
   protected readonly isHydrated = hydratedSignal();
@@ -124,7 +127,11 @@ export class EstimatingSettingsForm {
     const saved = await this.submission.send(this.form, () => this.api.saveEstimating(readForm(this.form)));
     if (saved) {
       this.estimating.set(saved);
-      this.snackBar.open('Pricing and schedule settings saved.', 'Close', { duration: 4000 });
+      this.snackBar.open(
+        this.translate.instant('firms.snack.estimatingSaved') as string,
+        this.translate.instant('ui.snack.close') as string,
+        { duration: 4000 },
+      );
     }
   }
 }

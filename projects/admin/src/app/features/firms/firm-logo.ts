@@ -6,6 +6,7 @@ import { PHOTO_CONTENT_TYPES, PHOTO_UPLOAD_MAX_BYTES, type FirmSettings } from '
 import { photoProblemText } from '../../../../../shared/photos/photo-picks';
 import { FirmApi } from './firm-api';
 import { logoPickProblem } from './logo-pick';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /**
  * The firm's logo, printed top left on invoices and credit notes: a preview of the one saved (or
@@ -14,20 +15,20 @@ import { logoPickProblem } from './logo-pick';
  */
 @Component({
   selector: 'lb-firm-logo',
-  imports: [MatButtonModule, MatIconModule, MatProgressBarModule],
+  imports: [TranslatePipe, MatButtonModule, MatIconModule, MatProgressBarModule],
   template: `
     <div class="logo-picker" role="group" aria-labelledby="logo-label">
-      <span class="label" id="logo-label">Logo</span>
+      <span class="label" id="logo-label">{{ 'firms.firmLogo.logo' | translate }}</span>
       <div class="preview">
         @if (previewUrl() ?? logoUrl(); as src) {
-          <img [src]="src" alt="Your firm's logo" />
+          <img [src]="src" [alt]="'firms.firmLogo.yourFirmSLogo' | translate" />
         } @else {
           <mat-icon aria-hidden="true">image</mat-icon>
-          <span>No logo yet: invoices print your firm name alone.</span>
+          <span>{{ 'firms.firmLogo.noLogoYetInvoices' | translate }}</span>
         }
       </div>
       @if (isBusy()) {
-        <mat-progress-bar mode="indeterminate" aria-label="Saving the logo" />
+        <mat-progress-bar mode="indeterminate" [aria-label]="'firms.firmLogo.savingTheLogo' | translate" />
       }
       @if (problem(); as message) {
         <p class="lb-form-alert" role="alert">{{ message }}</p>
@@ -37,13 +38,15 @@ import { logoPickProblem } from './logo-pick';
           <input #picker type="file" hidden [accept]="accept" (change)="uploadLogo(picker)" />
           <button mat-stroked-button type="button" [disabled]="isBusy()" (click)="picker.click()">
             <mat-icon aria-hidden="true">upload</mat-icon>
-            {{ logoUrl() ? 'Choose another logo' : 'Choose a logo' }}
+            {{ logoUrl() ? ('firms.firmLogo.chooseAnotherLogo' | translate) : ('firms.firmLogo.chooseALogo' | translate) }}
           </button>
           @if (logoUrl()) {
-            <button mat-button type="button" [disabled]="isBusy()" (click)="removeLogo()">Remove the logo</button>
+            <button mat-button type="button" [disabled]="isBusy()" (click)="removeLogo()">
+              {{ 'firms.firmLogo.removeTheLogo' | translate }}
+            </button>
           }
         </div>
-        <span class="hint">A JPEG, PNG or WebP image; a wide one on a plain background prints best.</span>
+        <span class="hint">{{ 'firms.firmLogo.aJpegPngOr' | translate }}</span>
       }
     </div>
   `,

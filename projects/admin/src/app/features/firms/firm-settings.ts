@@ -39,10 +39,12 @@ import { FirmLogo } from './firm-logo';
 import { InquiryFormLink } from './inquiry-form-link';
 import { StageLikelihoodsForm } from './stage-likelihoods';
 import { timeZoneChoices } from './time-zones';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 
 @Component({
   selector: 'lb-firm-settings',
   imports: [
+    TranslatePipe,
     EstimatingSettingsForm,
     FirmLogo,
     FormAlert,
@@ -65,6 +67,7 @@ import { timeZoneChoices } from './time-zones';
 export class FirmSettingsPage {
   private readonly api = inject(FirmApi);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
   private readonly fb = inject(NonNullableFormBuilder);
   private readonly session = inject(Session);
 
@@ -121,7 +124,11 @@ export class FirmSettingsPage {
     const saved = await this.submission.send(this.form, () => this.api.saveProfile(this.toUpdate()));
     if (saved) {
       this.firm.set(saved);
-      this.snackBar.open('Settings saved.', 'Close', { duration: 4000 });
+      this.snackBar.open(
+        this.translate.instant('firms.snack.settingsSaved') as string,
+        this.translate.instant('ui.snack.close') as string,
+        { duration: 4000 },
+      );
     }
   }
 

@@ -6,31 +6,37 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatSnackBar } from '@angular/material/snack-bar';
 
 import { inquiryFormSnippet, inquiryFormUrl } from './inquiry-form-address';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 
 /** Settings: where prospects send inquiries, with copy buttons for the address and a website link. */
 @Component({
   selector: 'lb-inquiry-form-link',
-  imports: [CdkCopyToClipboard, MatButtonModule, MatIconModule],
+  imports: [TranslatePipe, CdkCopyToClipboard, MatButtonModule, MatIconModule],
   template: `
     <section class="inquiry-form" aria-labelledby="inquiry-form-heading">
-      <h2 id="inquiry-form-heading">Your inquiry form</h2>
-      <p class="lead">Prospects describe their work here; each one lands on the inquiries board as New.</p>
+      <h2 id="inquiry-form-heading">{{ 'firms.inquiryFormLink.yourInquiryForm' | translate }}</h2>
+      <p class="lead">{{ 'firms.inquiryFormLink.prospectsDescribeTheirWork' | translate }}</p>
       <p class="row">
         <a class="url" [href]="url()" target="_blank" rel="noopener">{{ url() }}</a>
-        <button mat-stroked-button type="button" [cdkCopyToClipboard]="url()" (cdkCopyToClipboardCopied)="copied($event, 'Address')">
-          <mat-icon aria-hidden="true">content_copy</mat-icon>Copy address
+        <button
+          mat-stroked-button
+          type="button"
+          [cdkCopyToClipboard]="url()"
+          (cdkCopyToClipboardCopied)="copied($event, 'firms.snack.address')"
+        >
+          <mat-icon aria-hidden="true">content_copy</mat-icon>{{ 'firms.inquiryFormLink.copyAddress' | translate }}
         </button>
       </p>
-      <label for="inquiry-form-snippet">Link for your website (paste into its HTML)</label>
+      <label for="inquiry-form-snippet">{{ 'firms.inquiryFormLink.linkForYourWebsite' | translate }}</label>
       <textarea id="inquiry-form-snippet" readonly rows="3">{{ snippet() }}</textarea>
       <p class="row">
         <button
           mat-stroked-button
           type="button"
           [cdkCopyToClipboard]="snippet()"
-          (cdkCopyToClipboardCopied)="copied($event, 'Website link')"
+          (cdkCopyToClipboardCopied)="copied($event, 'firms.snack.websiteLink')"
         >
-          <mat-icon aria-hidden="true">code</mat-icon>Copy website link
+          <mat-icon aria-hidden="true">code</mat-icon>{{ 'firms.inquiryFormLink.copyWebsiteLink' | translate }}
         </button>
       </p>
     </section>
@@ -61,6 +67,7 @@ import { inquiryFormSnippet, inquiryFormUrl } from './inquiry-form-address';
 })
 export class InquiryFormLink {
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
   private readonly origin = inject(DOCUMENT).location?.origin ?? '';
   readonly slug = input.required<string>();
   readonly firmName = input.required<string>();
@@ -68,6 +75,9 @@ export class InquiryFormLink {
   protected readonly snippet = computed(() => inquiryFormSnippet(this.url(), this.firmName()));
 
   protected copied(ok: boolean, what: string): void {
-    this.snackBar.open(ok ? `${what} copied.` : 'Copying did not work: select the text and copy it.', 'Close', { duration: 4000 });
+    const words: string = ok
+      ? (this.translate.instant('firms.snack.copied', { what: this.translate.instant(what) as string }) as string)
+      : (this.translate.instant('firms.snack.copyFailed') as string);
+    this.snackBar.open(words, this.translate.instant('ui.snack.close') as string, { duration: 4000 });
   }
 }

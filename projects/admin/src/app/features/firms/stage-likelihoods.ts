@@ -21,6 +21,7 @@ import { loadMessage } from '../../shared/forms/load-message';
 import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { FirmApi } from './firm-api';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 
 type LikelihoodControls = Record<InquiryStage, FormControl<number | null>>;
 
@@ -30,14 +31,13 @@ type LikelihoodControls = Record<InquiryStage, FormControl<number | null>>;
  */
 @Component({
   selector: 'lb-stage-likelihoods',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [TranslatePipe, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule],
   template: `
     <form [formGroup]="form" (ngSubmit)="saveLikelihoods()" novalidate aria-labelledby="likelihood-heading">
       <fieldset class="lb-gate" [disabled]="!isHydrated()">
-        <h2 id="likelihood-heading">Stage odds</h2>
+        <h2 id="likelihood-heading">{{ 'firms.stageLikelihoods.stageOdds' | translate }}</h2>
         <p class="lead">
-          Out of 100 inquiries at each stage, how many usually turn into work. Today counts the likely work from these; set them from your
-          own record, for example how many sample boards turn into jobs.
+          {{ 'firms.stageLikelihoods.outOf100Inquiries' | translate }}
         </p>
         <lb-form-alert [message]="message()" />
         @if (hasLoaded()) {
@@ -53,7 +53,9 @@ type LikelihoodControls = Record<InquiryStage, FormControl<number | null>>;
           </div>
           @if (isOwner()) {
             <div class="lb-form-actions">
-              <button mat-flat-button type="submit" [disabled]="submission.isBusy()">Save likelihoods</button>
+              <button mat-flat-button type="submit" [disabled]="submission.isBusy()">
+                {{ 'firms.stageLikelihoods.saveLikelihoods' | translate }}
+              </button>
             </div>
           }
         }
@@ -87,6 +89,7 @@ type LikelihoodControls = Record<InquiryStage, FormControl<number | null>>;
 export class StageLikelihoodsForm {
   private readonly api = inject(FirmApi);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly translate = inject(TranslateService);
 
   protected readonly isOwner = inject(Session).isOwner;
   protected readonly stages = INQUIRY_STAGES;
@@ -133,7 +136,9 @@ export class StageLikelihoodsForm {
     const saved = await this.submission.send(this.form, () => this.api.saveStageLikelihoods(body));
     if (saved) {
       this.likelihoods.set(saved);
-      this.snackBar.open('Stage odds saved.', 'Close', { duration: 4000 });
+      this.snackBar.open(this.translate.instant('firms.snack.oddsSaved') as string, this.translate.instant('ui.snack.close') as string, {
+        duration: 4000,
+      });
     }
   }
 }

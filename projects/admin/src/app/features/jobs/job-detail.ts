@@ -10,11 +10,12 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { JobBilling } from './billing/job-billing';
 import { jobStatus } from './job-words';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** One accepted job: what was signed, for how much, and its billing (sections in ./billing). */
 @Component({
   selector: 'lb-job-detail',
-  imports: [CalendarDatePipe, FormAlert, JobBilling, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
+  imports: [TranslatePipe, CalendarDatePipe, FormAlert, JobBilling, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
   templateUrl: './job-detail.html',
   styleUrl: './job-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

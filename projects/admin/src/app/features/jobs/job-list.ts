@@ -9,33 +9,34 @@ import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { jobStatus } from './job-words';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** Accepted jobs: every proposal a client signed, newest first. */
 @Component({
   selector: 'lb-job-list',
-  imports: [CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
+  imports: [TranslatePipe, CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
   template: `
     <section class="lb-page">
-      <nav class="switch" aria-label="Jobs and proposals">
-        <a routerLink="/estimates">Estimates</a>
-        <a routerLink="/jobs" aria-current="page">Accepted jobs</a>
+      <nav class="switch" [attr.aria-label]="'jobs.jobList.jobsAndProposals' | translate">
+        <a routerLink="/estimates">{{ 'jobs.jobList.estimates' | translate }}</a>
+        <a routerLink="/jobs" aria-current="page">{{ 'jobs.jobList.acceptedJobs' | translate }}</a>
       </nav>
-      <h1>Accepted jobs</h1>
-      <p class="lb-lead">Work the client accepted: the option they signed, the contract sum and the payments to ask for.</p>
+      <h1>{{ 'jobs.jobList.acceptedJobs' | translate }}</h1>
+      <p class="lb-lead">{{ 'jobs.jobList.workTheClientAccepted' | translate }}</p>
       <lb-form-alert [message]="message()" />
       @if (isLoading()) {
-        <mat-progress-bar mode="indeterminate" aria-label="Loading jobs" />
+        <mat-progress-bar mode="indeterminate" [aria-label]="'jobs.jobList.loadingJobs' | translate" />
       }
-      <div class="table-wrap" tabindex="0" role="region" aria-label="Accepted jobs">
-        <table aria-label="Accepted jobs">
+      <div class="table-wrap" tabindex="0" role="region" [attr.aria-label]="'jobs.jobList.acceptedJobs' | translate">
+        <table [attr.aria-label]="'jobs.jobList.acceptedJobs' | translate">
           <thead>
             <tr>
-              <th scope="col">Job</th>
-              <th scope="col">Client</th>
-              <th scope="col">Option</th>
-              <th scope="col" class="num">Contract sum</th>
-              <th scope="col">Status</th>
-              <th scope="col">Starts</th>
+              <th scope="col">{{ 'jobs.jobList.job' | translate }}</th>
+              <th scope="col">{{ 'jobs.jobList.client' | translate }}</th>
+              <th scope="col">{{ 'jobs.jobList.option' | translate }}</th>
+              <th scope="col" class="num">{{ 'jobs.jobList.contractSum' | translate }}</th>
+              <th scope="col">{{ 'jobs.jobList.status' | translate }}</th>
+              <th scope="col">{{ 'jobs.jobList.starts' | translate }}</th>
             </tr>
           </thead>
           <tbody>
@@ -58,14 +59,14 @@ import { jobStatus } from './job-words';
                   @if (j.startDate) {
                     {{ j.startDate | calendarDate }}
                   } @else {
-                    <span class="muted">Not set</span>
+                    <span class="muted">{{ 'jobs.jobList.notSet' | translate }}</span>
                   }
                 </td>
               </tr>
             } @empty {
               @if (!isLoading()) {
                 <tr>
-                  <td colspan="6" class="none">No accepted jobs yet. They appear here when a client accepts a proposal.</td>
+                  <td colspan="6" class="none">{{ 'jobs.jobList.noAcceptedJobsYet' | translate }}</td>
                 </tr>
               }
             }

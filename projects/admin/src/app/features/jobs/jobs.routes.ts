@@ -5,12 +5,12 @@ export default [
   {
     path: '',
     pathMatch: 'full',
-    title: 'Accepted jobs · Layerbook',
+    title: 'jobs.titles.list',
     loadComponent: () => import('./job-list').then((m) => m.JobList),
   },
   {
     path: ':id',
-    title: 'Job · Layerbook',
+    title: 'jobs.titles.detail',
     loadComponent: () => import('./job-detail').then((m) => m.JobDetail),
   },
 ] satisfies Routes;

@@ -10,6 +10,8 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { progressDraft } from '../billing/invoice-fixtures';
 import { type RefundOutcome, InvoicePayments, PENDING_CHECKS, PENDING_CHECK_MS } from './invoice-payments';
 import { cardOverpayment, cardRefundPending, chequeRefund, creditGivenBack, overpaymentCredit, transferPayment } from './payment-fixtures';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { officeWords } from '../../shared/testing/office-words';
 
 const paidInvoice: InvoiceDetail = {
   ...progressDraft,
@@ -29,6 +31,7 @@ function render(invoice: InvoiceDetail, dialogAnswer?: { refund?: RefundView; wa
   }));
   TestBed.configureTestingModule({
     providers: [
+      provideTestI18n(officeWords),
       provideHttpClient(),
       provideHttpClientTesting(),
       provideRouter([]),

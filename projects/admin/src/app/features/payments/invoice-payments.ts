@@ -16,6 +16,7 @@ import { PaymentApi, paymentReceiptHref, refundReceiptHref } from './payment-api
 import { creditKept, paymentParts } from './payment-money';
 import { REFUND_METHOD_WORDS, refundDoneWords, refundStatusLook } from './payment-words';
 import { RefundDialog, type RefundDialogData } from './refund-dialog';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** While a refund is on its way back to a card, the invoice is read again this often, this many times (about a minute). */
 export const PENDING_CHECK_MS = 5000;
@@ -35,7 +36,7 @@ export interface RefundOutcome {
  */
 @Component({
   selector: 'lb-invoice-payments',
-  imports: [CalendarDatePipe, DatePipe, LowerCasePipe, MatButtonModule, MatIconModule, MoneyPipe, RouterLink],
+  imports: [TranslatePipe, CalendarDatePipe, DatePipe, LowerCasePipe, MatButtonModule, MatIconModule, MoneyPipe, RouterLink],
   templateUrl: './invoice-payments.html',
   styleUrl: './invoice-payments.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -7,12 +7,15 @@ import type { PaymentDetail } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cardOverpayment, cardRefundPending, chequeRefund, transferPayment } from './payment-fixtures';
 import { RefundDialog, type RefundDialogData } from './refund-dialog';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { officeWords } from '../../shared/testing/office-words';
 
 function render(payment: PaymentDetail) {
   const close = vi.fn();
   const data: RefundDialogData = { payment, invoiceNumber: 'INV-0007', clientName: 'Hattie Brambleton' };
   TestBed.configureTestingModule({
     providers: [
+      provideTestI18n(officeWords),
       provideHttpClient(),
       provideHttpClientTesting(),
       provideNoopAnimations(),

@@ -24,6 +24,7 @@ import { PaymentApi } from './payment-api';
 import { paymentParts, refundSplit } from './payment-money';
 import { REFUND_CHOICE_WORDS, refundSplitWords } from './payment-words';
 import { defaultRefundMethod, refundAmountCheck, refundMethods } from './refund-input';
+import { TranslatePipe } from '@ngx-translate/core';
 
 export interface RefundDialogData {
   readonly payment: PaymentDetail;
@@ -39,6 +40,7 @@ export interface RefundDialogData {
 @Component({
   selector: 'lb-refund-dialog',
   imports: [
+    TranslatePipe,
     CalendarDatePipe,
     FormAlert,
     LowerCasePipe,

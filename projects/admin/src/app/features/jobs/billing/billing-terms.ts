@@ -5,37 +5,41 @@ import { DEPOSIT_CREDIT_RULE_LABELS, type JobBillingView } from '@layerbook/cont
 import { termsText } from '@layerbook/domain';
 import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { retainageWords } from './billing-words';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** The terms the job is billed on: the deposit rule by name, payment terms, retainage, deposit credit. */
 @Component({
   selector: 'lb-billing-terms',
-  imports: [MatIconModule, MoneyPipe, RouterLink],
+  imports: [TranslatePipe, MatIconModule, MoneyPipe, RouterLink],
   template: `
     @let v = view();
-    <h2 id="terms-heading">Billing terms</h2>
+    <h2 id="terms-heading">{{ 'jobs.billingTerms.billingTerms' | translate }}</h2>
     @if (!v.billingStartedAt) {
       <p class="hint">
         <mat-icon aria-hidden="true">info</mat-icon>
         <span
-          >Billing has not started: these are the firm's current terms (<a routerLink="/settings/billing">billing settings</a>). They are
-          copied onto the job when billing starts and stay with it after.</span
+          >{{ 'jobs.billingTerms.billingHasNotStarted' | translate
+          }}<a routerLink="/settings/billing">{{ 'jobs.billingTerms.billingSettings' | translate }}</a
+          >{{ 'jobs.billingTerms.theyAreCopiedOnto' | translate }}</span
         >
       </p>
     }
     <dl class="lb-facts" aria-labelledby="terms-heading">
-      <dt>Deposit rule</dt>
+      <dt>{{ 'jobs.billingTerms.depositRule' | translate }}</dt>
       <dd>
         {{ v.terms.depositCapName }}
         @if (v.terms.depositCap !== null) {
-          <span class="small">At most {{ v.terms.depositCap | money: v.currency }} on this job.</span>
+          <span class="small">{{
+            'jobs.billingTerms.atMostOnThis' | translate: { depositCap: (v.terms.depositCap | money: v.currency) }
+          }}</span>
         }
       </dd>
-      <dt>Payment terms</dt>
+      <dt>{{ 'jobs.billingTerms.paymentTerms' | translate }}</dt>
       <dd>{{ paymentTerms() }}</dd>
-      <dt>Retainage</dt>
+      <dt>{{ 'jobs.billingTerms.retainage' | translate }}</dt>
       <dd>{{ retainage() }}</dd>
       @if (v.method === 'progress') {
-        <dt>Deposit credit</dt>
+        <dt>{{ 'jobs.billingTerms.depositCredit' | translate }}</dt>
         <dd>{{ creditLabels[v.terms.depositCredit] }}</dd>
       }
     </dl>

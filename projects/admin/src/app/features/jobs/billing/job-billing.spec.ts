@@ -6,6 +6,8 @@ import { provideRouter } from '@angular/router';
 import type { JobBillingView } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { JobBilling } from './job-billing';
+import { provideTestI18n } from '../../../../../../shared/i18n/testing';
+import { officeWords } from '../../../shared/testing/office-words';
 
 const JOB = '00000000-0000-4000-8000-000000000001';
 const CAP_NAME = 'California home improvement contracts (Bus. & Prof. Code §7159): the lesser of $1,000 or 10 %';
@@ -103,7 +105,13 @@ function view(over: Partial<JobBillingView> = {}): JobBillingView {
 
 async function render(v: JobBillingView) {
   TestBed.configureTestingModule({
-    providers: [provideZonelessChangeDetection(), provideHttpClient(), provideHttpClientTesting(), provideRouter([])],
+    providers: [
+      provideTestI18n(officeWords),
+      provideZonelessChangeDetection(),
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      provideRouter([]),
+    ],
   });
   const http = TestBed.inject(HttpTestingController);
   const fixture = TestBed.createComponent(JobBilling);

@@ -12,6 +12,7 @@ import { JobInvoices } from './job-invoices';
 import { ScheduleEditor } from './schedule-editor';
 import { ValueLines } from './value-lines';
 import { WorkDone } from './work-done';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /**
  * The job page's billing: totals, terms, the payment schedule, the work done, the schedule of
@@ -21,6 +22,7 @@ import { WorkDone } from './work-done';
 @Component({
   selector: 'lb-job-billing',
   imports: [
+    TranslatePipe,
     BillingTerms,
     BillingTotals,
     ChangeOrders,
@@ -34,7 +36,7 @@ import { WorkDone } from './work-done';
   ],
   template: `
     @if (billing.isLoading() && !billing.hasValue()) {
-      <mat-progress-bar mode="indeterminate" aria-label="Loading the job's billing" />
+      <mat-progress-bar mode="indeterminate" [aria-label]="'jobs.jobBilling.loadingTheJobS' | translate" />
     }
     <lb-form-alert [message]="failure()" />
     @if (view(); as v) {

@@ -6,15 +6,16 @@ import type { JobHistory as JobHistoryView } from '@layerbook/contracts/types';
 import { loadMessage } from '../../../shared/forms/load-message';
 import { CalendarDatePipe } from '../../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../../shared/ui/form-alert';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** What happened on the job, newest first: marks from the work, schedule changes, invoices, change orders. */
 @Component({
   selector: 'lb-job-history',
-  imports: [CalendarDatePipe, DatePipe, FormAlert, MatProgressBarModule],
+  imports: [TranslatePipe, CalendarDatePipe, DatePipe, FormAlert, MatProgressBarModule],
   template: `
-    <h2 id="history-heading">History</h2>
+    <h2 id="history-heading">{{ 'jobs.jobHistory.history' | translate }}</h2>
     @if (history.isLoading() && !history.hasValue()) {
-      <mat-progress-bar mode="indeterminate" aria-label="Loading the job's history" />
+      <mat-progress-bar mode="indeterminate" [aria-label]="'jobs.jobHistory.loadingTheJobS' | translate" />
     }
     <lb-form-alert [message]="failure()" />
     <ol class="history" aria-labelledby="history-heading">
@@ -24,13 +25,14 @@ import { FormAlert } from '../../../shared/ui/form-alert';
           <span>
             {{ entry.text }}
             <span class="small"
-              >{{ entry.who }} · recorded <time [attr.datetime]="entry.at">{{ entry.at | date: 'medium' }}</time></span
+              >{{ 'jobs.jobHistory.recorded' | translate: { who: entry.who } }}
+              <time [attr.datetime]="entry.at">{{ entry.at | date: 'medium' }}</time></span
             >
           </span>
         </li>
       } @empty {
         @if (history.hasValue()) {
-          <li class="muted">Nothing recorded yet.</li>
+          <li class="muted">{{ 'jobs.jobHistory.nothingRecordedYet' | translate }}</li>
         }
       }
     </ol>

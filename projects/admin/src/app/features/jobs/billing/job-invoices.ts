@@ -5,23 +5,24 @@ import type { InvoiceSummary } from '@layerbook/contracts/types';
 import { CalendarDatePipe } from '../../../shared/ui/calendar-date-pipe';
 import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { invoiceWords } from './billing-words';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** The job's invoices, drafts included, each linking to its page in Billing. */
 @Component({
   selector: 'lb-job-invoices',
-  imports: [CalendarDatePipe, MatIconModule, MoneyPipe, RouterLink],
+  imports: [TranslatePipe, CalendarDatePipe, MatIconModule, MoneyPipe, RouterLink],
   template: `
-    <h2 id="job-invoices-heading">Invoices</h2>
+    <h2 id="job-invoices-heading">{{ 'jobs.jobInvoices.invoices' | translate }}</h2>
     <div class="table-wrap" tabindex="0" role="region" aria-labelledby="job-invoices-heading">
       <table aria-labelledby="job-invoices-heading">
         <thead>
           <tr>
-            <th scope="col">Invoice</th>
-            <th scope="col">Kind</th>
-            <th scope="col">Status</th>
-            <th scope="col">Due</th>
-            <th scope="col" class="num">Total</th>
-            <th scope="col" class="num">Amount due</th>
+            <th scope="col">{{ 'jobs.jobInvoices.invoice' | translate }}</th>
+            <th scope="col">{{ 'jobs.jobInvoices.kind' | translate }}</th>
+            <th scope="col">{{ 'jobs.jobInvoices.status' | translate }}</th>
+            <th scope="col">{{ 'jobs.jobInvoices.due' | translate }}</th>
+            <th scope="col" class="num">{{ 'jobs.jobInvoices.total' | translate }}</th>
+            <th scope="col" class="num">{{ 'jobs.jobInvoices.amountDue' | translate }}</th>
           </tr>
         </thead>
         <tbody>
@@ -31,7 +32,7 @@ import { invoiceWords } from './billing-words';
               <th scope="row">
                 <a [routerLink]="['/billing/invoices', invoice.id]">{{ w.number }}</a>
                 @if (invoice.origin === 'queue' && invoice.status === 'draft') {
-                  <span class="small">Drafted when its trigger was met</span>
+                  <span class="small">{{ 'jobs.jobInvoices.draftedWhenItsTrigger' | translate }}</span>
                 }
               </th>
               <td>{{ w.kind }}</td>
@@ -56,7 +57,7 @@ import { invoiceWords } from './billing-words';
           } @empty {
             <tr>
               <td colspan="6" class="muted">
-                No invoices yet. They are drafted as the schedule’s triggers are met, or from the schedule of values.
+                {{ 'jobs.jobInvoices.noInvoicesYetThey' | translate }}
               </td>
             </tr>
           }

@@ -41,6 +41,7 @@ import {
   scheduleForm,
   scheduleLineGroup,
 } from './schedule-form';
+import { TranslatePipe } from '@ngx-translate/core';
 
 const START_MESSAGE =
   'From now on the queue watches each line’s trigger (the date, the layer finished on every surface, the walkthrough) and drafts its invoice when the trigger is met. ' +
@@ -51,6 +52,7 @@ const START_MESSAGE =
 @Component({
   selector: 'lb-schedule-editor',
   imports: [
+    TranslatePipe,
     CalendarDatePipe,
     DatePipe,
     FormAlert,

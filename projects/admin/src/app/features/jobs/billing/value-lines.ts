@@ -22,11 +22,13 @@ import { serverSaid, sumDifferenceWords } from './billing-words';
 import { JobBillingApi, newClientKey } from './job-billing-api';
 import { LINE_LABEL_MAX_LENGTH } from './schedule-form';
 import { type ValueLinesFormGroup, progressGroup, progressMarks, readValueLines, valueLineGroup, valueLinesForm } from './value-lines-form';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** Progress billing: the schedule of values, each line's reading from the site, and the drafts it bills. */
 @Component({
   selector: 'lb-value-lines',
   imports: [
+    TranslatePipe,
     FormAlert,
     MatButtonModule,
     MatDatepickerModule,

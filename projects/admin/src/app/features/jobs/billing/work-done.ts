@@ -15,11 +15,13 @@ import { CalendarDatePipe } from '../../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../../shared/ui/form-alert';
 import { JobBillingApi, newClientKey } from './job-billing-api';
 import { groupWork } from './work-groups';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /** Work done: each layer on each surface marked done on a day (or reopened), and the walkthrough. */
 @Component({
   selector: 'lb-work-done',
   imports: [
+    TranslatePipe,
     CalendarDatePipe,
     FormAlert,
     MatButtonModule,

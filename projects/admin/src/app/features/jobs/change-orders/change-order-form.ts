@@ -32,6 +32,7 @@ import {
   surfaceGroups,
   type PricingKind,
 } from './change-order-form-model';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /**
  * Adds a change order to a job, or changes a draft: a title, what changes, and its price — a lump
@@ -40,6 +41,7 @@ import {
 @Component({
   selector: 'lb-change-order-form',
   imports: [
+    TranslatePipe,
     FormAlert,
     MatButtonModule,
     MatFormFieldModule,
@@ -51,41 +53,45 @@ import {
   ],
   template: `
     <form class="panel" [formGroup]="form" (ngSubmit)="save()" novalidate [attr.aria-labelledby]="headingId()">
-      <h3 [id]="headingId()">{{ draft() ? 'Change order #' + draft()!.number : 'New change order' }}</h3>
+      <h3 [id]="headingId()">
+        {{
+          draft() ? ('jobs.changeOrderForm.changeOrder' | translate) + draft()!.number : ('jobs.changeOrderForm.newChangeOrder' | translate)
+        }}
+      </h3>
       <lb-form-alert [message]="message() ?? loadFailure()" />
       <fieldset class="lb-gate form" [disabled]="!isHydrated() || isSaving()">
         <mat-form-field>
-          <mat-label>Title</mat-label>
+          <mat-label>{{ 'jobs.changeOrderForm.title' | translate }}</mat-label>
           <input matInput formControlName="title" required [maxlength]="titleMax" />
-          <mat-hint>What the client will see first, like “Venetian plaster in the stair niche”.</mat-hint>
+          <mat-hint>{{ 'jobs.changeOrderForm.whatTheClientWill' | translate }}</mat-hint>
           <mat-error>{{ errorText(form.controls.title, words.title) }}</mat-error>
         </mat-form-field>
         <mat-form-field>
-          <mat-label>What changes</mat-label>
+          <mat-label>{{ 'jobs.changeOrderForm.whatChanges' | translate }}</mat-label>
           <textarea matInput formControlName="description" rows="3"></textarea>
           <mat-error>{{ errorText(form.controls.description, words.description) }}</mat-error>
         </mat-form-field>
         <ng-container formGroupName="pricing">
-          <p [id]="headingId() + '-kind'" class="group-label">How to price it</p>
+          <p [id]="headingId() + '-kind'" class="group-label">{{ 'jobs.changeOrderForm.howToPriceIt' | translate }}</p>
           <mat-radio-group
             formControlName="kind"
             [attr.aria-labelledby]="headingId() + '-kind'"
             class="choices"
             (change)="choosePricing($event.value)"
           >
-            <mat-radio-button value="lumpSum">A lump sum</mat-radio-button>
-            <mat-radio-button value="engine">Price it from surfaces</mat-radio-button>
+            <mat-radio-button value="lumpSum">{{ 'jobs.changeOrderForm.aLumpSum' | translate }}</mat-radio-button>
+            <mat-radio-button value="engine">{{ 'jobs.changeOrderForm.priceItFromSurfaces' | translate }}</mat-radio-button>
           </mat-radio-group>
           @if (kind() === 'lumpSum') {
             <mat-form-field>
-              <mat-label>Price before tax</mat-label>
+              <mat-label>{{ 'jobs.changeOrderForm.priceBeforeTax' | translate }}</mat-label>
               <input matInput formControlName="price" inputmode="decimal" autocomplete="off" required />
-              <mat-hint>Negative to deduct, like -250.00. Tax is added by the firm’s tax setting.</mat-hint>
+              <mat-hint>{{ 'jobs.changeOrderForm.negativeToDeductLike' | translate }}</mat-hint>
               <mat-error>{{ errorText(form.controls.pricing.controls.price, words.price) }}</mat-error>
             </mat-form-field>
           } @else {
             <mat-form-field>
-              <mat-label>Surfaces</mat-label>
+              <mat-label>{{ 'jobs.changeOrderForm.surfaces' | translate }}</mat-label>
               <mat-select formControlName="surfaceIds" multiple required>
                 @for (group of surfaces(); track group.room) {
                   <mat-optgroup [label]="group.room">
@@ -95,17 +101,17 @@ import {
                   </mat-optgroup>
                 }
               </mat-select>
-              <mat-hint>Measured surfaces of the job’s site; measure new ones in the takeoff first.</mat-hint>
+              <mat-hint>{{ 'jobs.changeOrderForm.measuredSurfacesOfThe' | translate }}</mat-hint>
               <mat-error>{{ errorText(form.controls.pricing.controls.surfaceIds, words.surfaceIds) }}</mat-error>
             </mat-form-field>
             <mat-form-field>
-              <mat-label>Finish system</mat-label>
+              <mat-label>{{ 'jobs.changeOrderForm.finishSystem' | translate }}</mat-label>
               <mat-select formControlName="finishSystemId" required>
                 @for (f of systems(); track f.id) {
                   <mat-option [value]="f.id">{{ f.name }}</mat-option>
                 }
               </mat-select>
-              <mat-hint>Priced by the same engine as estimates, with today’s settings.</mat-hint>
+              <mat-hint>{{ 'jobs.changeOrderForm.pricedByTheSame' | translate }}</mat-hint>
               <mat-error>{{ errorText(form.controls.pricing.controls.finishSystemId, words.finishSystemId) }}</mat-error>
             </mat-form-field>
           }
@@ -113,9 +119,9 @@ import {
         <div class="actions">
           <button mat-flat-button type="submit">
             <mat-icon aria-hidden="true">{{ draft() ? 'save' : 'note_add' }}</mat-icon>
-            {{ draft() ? 'Save changes' : 'Add the change order' }}
+            {{ draft() ? ('jobs.changeOrderForm.saveChanges' | translate) : ('jobs.changeOrderForm.addTheChangeOrder' | translate) }}
           </button>
-          <button mat-button type="button" (click)="cancelled.emit()">Cancel</button>
+          <button mat-button type="button" (click)="cancelled.emit()">{{ 'jobs.changeOrderForm.cancel' | translate }}</button>
         </div>
       </fieldset>
     </form>

@@ -14,6 +14,7 @@ import { FormAlert } from '../../../shared/ui/form-alert';
 import { ChangeOrderApi, changeOrdersUrl } from './change-order-api';
 import { ChangeOrderForm } from './change-order-form';
 import { changeOrderStatus, signedMoney } from './change-order-words';
+import { TranslatePipe } from '@ngx-translate/core';
 
 /**
  * The job's change orders: each with its number, title, signed amount and where it stands; add
@@ -22,18 +23,15 @@ import { changeOrderStatus, signedMoney } from './change-order-words';
  */
 @Component({
   selector: 'lb-change-orders',
-  imports: [DatePipe, ChangeOrderForm, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule],
+  imports: [TranslatePipe, DatePipe, ChangeOrderForm, FormAlert, MatButtonModule, MatIconModule, MatProgressBarModule],
   template: `
-    <h2 id="change-orders-heading">Change orders</h2>
+    <h2 id="change-orders-heading">{{ 'jobs.changeOrders.changeOrders' | translate }}</h2>
     <p class="hint">
       <mat-icon aria-hidden="true">info</mat-icon>
-      <span
-        >Sent to the client to approve with their typed name. Only an approved one changes the contract sum; the unbilled payments then
-        follow it.</span
-      >
+      <span>{{ 'jobs.changeOrders.sentToTheClient' | translate }}</span>
     </p>
     @if (list.isLoading() && !list.hasValue()) {
-      <mat-progress-bar mode="indeterminate" aria-label="Loading the change orders" />
+      <mat-progress-bar mode="indeterminate" [aria-label]="'jobs.changeOrders.loadingTheChangeOrders' | translate" />
     }
     <lb-form-alert [message]="failure() ?? actionMessage()" />
     @if (notice(); as text) {
@@ -43,11 +41,13 @@ import { changeOrderStatus, signedMoney } from './change-order-words';
       <table aria-labelledby="change-orders-heading">
         <thead>
           <tr>
-            <th scope="col">No.</th>
-            <th scope="col">Title</th>
-            <th scope="col" class="num">Amount</th>
-            <th scope="col">Status</th>
-            <th scope="col"><span class="cdk-visually-hidden">Actions</span></th>
+            <th scope="col">{{ 'jobs.changeOrders.no' | translate }}</th>
+            <th scope="col">{{ 'jobs.changeOrders.title' | translate }}</th>
+            <th scope="col" class="num">{{ 'jobs.changeOrders.amount' | translate }}</th>
+            <th scope="col">{{ 'jobs.changeOrders.status' | translate }}</th>
+            <th scope="col">
+              <span class="cdk-visually-hidden">{{ 'jobs.changeOrders.actions' | translate }}</span>
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -65,15 +65,17 @@ import { changeOrderStatus, signedMoney } from './change-order-words';
                 @if (co.decidedAt) {
                   <span class="small">{{ co.decidedAt | date: 'mediumDate' }}</span>
                 } @else if (co.sentAt) {
-                  <span class="small">Sent {{ co.sentAt | date: 'mediumDate' }}</span>
+                  <span class="small">{{ 'jobs.changeOrders.sent' | translate: { sentAt: (co.sentAt | date: 'mediumDate') } }}</span>
                 }
               </td>
               <td>
                 @if (co.status === 'draft') {
                   <div class="row-actions">
-                    <button mat-button type="button" (click)="startEdit(co)" [disabled]="busyId() === co.id">Change</button>
+                    <button mat-button type="button" (click)="startEdit(co)" [disabled]="busyId() === co.id">
+                      {{ 'jobs.changeOrders.change' | translate }}
+                    </button>
                     <button mat-stroked-button type="button" (click)="sendToClient(co)" [disabled]="busyId() === co.id">
-                      <mat-icon aria-hidden="true">send</mat-icon>Send to client
+                      <mat-icon aria-hidden="true">send</mat-icon>{{ 'jobs.changeOrders.sendToClient' | translate }}
                     </button>
                   </div>
                 }
@@ -81,7 +83,7 @@ import { changeOrderStatus, signedMoney } from './change-order-words';
             </tr>
           } @empty {
             <tr>
-              <td colspan="5" class="muted">No change orders on this job.</td>
+              <td colspan="5" class="muted">{{ 'jobs.changeOrders.noChangeOrdersOn' | translate }}</td>
             </tr>
           }
         </tbody>
@@ -96,7 +98,9 @@ import { changeOrderStatus, signedMoney } from './change-order-words';
       />
     } @else {
       <div class="actions">
-        <button mat-stroked-button type="button" (click)="startNew()"><mat-icon aria-hidden="true">add</mat-icon>Add a change order</button>
+        <button mat-stroked-button type="button" (click)="startNew()">
+          <mat-icon aria-hidden="true">add</mat-icon>{{ 'jobs.changeOrders.addAChangeOrder' | translate }}
+        </button>
       </div>
     }
   `,
