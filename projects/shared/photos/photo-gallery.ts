@@ -259,6 +259,8 @@ export class PhotoGallery {
   readonly emptyText = input('common.photoGallery.empty');
   readonly thumbHeight = input(120);
   readonly maxBytes = input(PHOTO_UPLOAD_MAX_BYTES);
+  /** more multipart fields sent with each photo after `file` (e.g. { caption, workItemId }); empty values are left out */
+  readonly uploadFields = input<Readonly<Record<string, string>>>({});
 
   protected readonly headingId = `lb-photos-${nextGalleryId++}`;
   protected readonly accept = PHOTO_CONTENT_TYPES.join(',');
@@ -324,6 +326,7 @@ export class PhotoGallery {
     const setPercent = (percent: number | null) => this.uploads.update((list) => list.map((u) => (u.key === key ? { ...u, percent } : u)));
     const form = new FormData();
     form.append('file', file, file.name);
+    for (const [name, value] of Object.entries(this.uploadFields())) if (value) form.append(name, value);
     return new Promise<void>((resolve) => {
       const done = () => {
         this.uploads.update((list) => list.filter((u) => u.key !== key));
