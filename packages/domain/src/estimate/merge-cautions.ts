@@ -31,7 +31,12 @@ export function mergeCautions(
   for (const cautions of perOption) {
     for (const c of cautions) {
       let into = byId.get(c.id);
-      if (!into) byId.set(c.id, (into = { ...c, bullets: [] }));
+      // Only the document's fields: the engine's keyed lines would no longer be parallel to the merged bullets
+      // (readers find a bullet's key with cautionLineOf).
+      if (!into) {
+        const { id, title, rule, standing, jurisdiction } = c;
+        byId.set(id, (into = { id, title, rule, standing, ...(jurisdiction !== undefined ? { jurisdiction } : {}), bullets: [] }));
+      }
       for (const b of c.bullets) if (audience === 'office' || !OFFICE_ONLY_LINES.has(b)) addBullet(into.bullets, b);
     }
   }
