@@ -18,6 +18,7 @@ import { enqueueMail } from '../mail/outbox';
 import { passwordResetMail } from '../mail/templates';
 import { assertAcceptablePassword, hashPassword } from './passwords';
 import { endStaffSessions, setPasswordHash } from './password-store';
+import { memberReader } from '../i18n/reader';
 import { firstActivePrincipal } from './staff-auth';
 import { hashToken, minutesFromNow, newToken } from './tokens';
 
@@ -52,7 +53,8 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
       purposeKey: `password-reset:${reset.id}`,
       tenantId,
       to: user.email,
-      ...passwordResetMail({ name: user.name, url, minutes: RESET_MINUTES }),
+      // In the language the person reads this firm in (their first firm's, where the link is sent from).
+      ...passwordResetMail({ name: user.name, url, minutes: RESET_MINUTES, language: (await memberReader(tx, user.id)).language }),
     });
   });
 }

@@ -5,6 +5,7 @@ import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
 import { gone, notFound } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
+import { portalUserReader } from '../i18n/reader';
 import { portalLinkMail } from '../mail/templates';
 import { sessionLiveSql } from './staff-principal';
 import { hashToken, minutesFromNow, newToken } from './tokens';
@@ -35,6 +36,7 @@ export async function requestPortalLink(ctx: AppContext, email: string): Promise
           firmName: firm.name,
           url: `${ctx.config.PUBLIC_URL}/portal/sign-in/link?token=${token}`,
           minutes: PORTAL_LINK_MINUTES,
+          language: (await portalUserReader(tx, user.id)).language,
         }),
       });
     });

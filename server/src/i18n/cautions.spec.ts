@@ -1,7 +1,15 @@
-import { CAUTION_WORDS, cautionText, OFFICE_ONLY_LINES, safetyCautions, type CautionWordKey, type SafetyFacts } from '@layerbook/domain';
+import {
+  CAUTION_WORDS,
+  cautionText,
+  leadNotice,
+  OFFICE_ONLY_LINES,
+  safetyCautions,
+  type CautionWordKey,
+  type SafetyFacts,
+} from '@layerbook/domain';
 import cautionsEn from '../../../projects/shared/i18n/words/cautions/en.json';
 import cautionsEs from '../../../projects/shared/i18n/words/cautions/es.json';
-import { cautionIn } from './cautions';
+import { cautionIn, leadNoticeIn } from './cautions';
 import { translator, type Words } from './catalog';
 
 /** The apps' file shape flattened back to the domain's keys: nested at the first dot ("lead-safe-work" → "title"). */
@@ -95,6 +103,21 @@ describe('caution words (projects/shared/i18n/words/cautions)', () => {
     expect(es.bullets[2]).toBe('A line the office typed.');
   });
 
+  it('a snapshot caution (English only, with its id) reads in Spanish: title, rule, lines, jurisdiction and standing', () => {
+    for (const c of safetyCautions({ ...EVERYTHING, firmCountry: 'CA' })) {
+      const snapshot = { id: c.id, title: c.title, bullets: c.bullets, rule: c.rule, jurisdiction: c.jurisdiction, standing: c.standing };
+      expect(cautionIn('es', snapshot)).toEqual(cautionIn('es', c));
+      expect(cautionIn('en', snapshot)).toEqual(cautionIn('en', c));
+    }
+    expect(cautionIn('es', { title: 'Our own note', bullets: ['Mind the cat.'], rule: 'House rule' })).toEqual({
+      title: 'Our own note',
+      bullets: ['Mind the cat.'],
+      rule: 'House rule',
+      jurisdiction: '',
+      standing: '',
+    });
+  });
+
   it('in Spanish every caution keeps all its lines, translated (none dropped, none left in English)', () => {
     for (const c of safetyCautions({ ...EVERYTHING, firmCountry: 'US' })) {
       const es = cautionIn('es', c);
@@ -105,4 +128,17 @@ describe('caution words (projects/shared/i18n/words/cautions)', () => {
       expect(Object.values(cautionsEs.jurisdiction)).toContain(es.jurisdiction);
     }
   });
+
+  it.each(['target-housing', 'assumed-target-housing'] as const)(
+    'the lead-safe notice (%s) reads the domain’s English exactly, and every sentence in Spanish',
+    (status) => {
+      const n = leadNotice(status, 'US')!;
+      expect(leadNoticeIn('en', n)).toEqual({ ...n, bullets: [...n.bullets], standing: '' });
+      const es = leadNoticeIn('es', n);
+      expect(es.title).not.toBe(n.title);
+      expect(es.rule).not.toBe(n.rule);
+      es.bullets.forEach((b, i) => expect(b).not.toBe(n.bullets[i]));
+      expect(es.jurisdiction).toBe(cautionsEs.jurisdiction.usFederal);
+    },
+  );
 });

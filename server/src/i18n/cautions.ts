@@ -1,14 +1,16 @@
 import type { Language } from '@layerbook/contracts';
 import { CAUTION_WORDS, cautionLineOf, cautionText, type CautionWordKey } from '@layerbook/domain';
-import { translator } from './catalog';
+import { CATALOG, lookup, translator } from './catalog';
 
 /** A caution as stored in a snapshot or result: the English text, with its keys when the engine gave them. */
 export interface KeyedCaution {
+  /** the caution's id ("lime-alkali"), which names its title and rule keys */
+  readonly id?: string;
   readonly title: string;
   readonly bullets: readonly string[];
   readonly rule: string;
-  readonly jurisdiction: string;
-  readonly standing: string;
+  readonly jurisdiction?: string;
+  readonly standing?: string;
   readonly titleKey?: string;
   readonly ruleKey?: string;
   readonly lines?: ReadonlyArray<{ readonly key: string; readonly params: Readonly<Record<string, string>> }>;
@@ -21,7 +23,9 @@ export interface CautionWordsOut {
   readonly title: string;
   readonly bullets: string[];
   readonly rule: string;
+  /** '' when the stored caution had none */
   readonly jurisdiction: string;
+  /** '' when the stored caution had none */
   readonly standing: string;
 }
 
@@ -37,13 +41,42 @@ export function cautionIn(language: Language, c: KeyedCaution): CautionWordsOut 
     const line = keyedLine(c.lines?.[i], bullet) ?? cautionLineOf(bullet);
     return line ? t(cautionKey(line.key), line.params) : bullet;
   });
-  return {
-    title: c.titleKey ? t(cautionKey(c.titleKey)) : c.title,
-    bullets,
-    rule: c.ruleKey ? t(cautionKey(c.ruleKey)) : c.rule,
-    jurisdiction: c.jurisdictionKeys?.length ? c.jurisdictionKeys.map((k) => t(cautionKey(k))).join(' ') : c.jurisdiction,
-    standing: c.standingKey ? t(cautionKey(c.standingKey)) : c.standing,
+  const own = (key: string | undefined, english: string): string => {
+    const found = key ?? keyOfText(english);
+    return found ? t(cautionKey(found)) : english;
   };
+  const jurisdictionKeys = c.jurisdictionKeys?.length ? c.jurisdictionKeys : jurisdictionKeysOf(c.jurisdiction ?? '');
+  return {
+    title: own(c.titleKey ?? idKey(c.id, 'title', c.title), c.title),
+    bullets,
+    rule: own(c.ruleKey ?? idKey(c.id, 'rule', c.rule), c.rule),
+    // A copy made before cautions said whose rule it is has no such line: none is added.
+    jurisdiction: !c.jurisdiction ? '' : jurisdictionKeys ? jurisdictionKeys.map((k) => t(cautionKey(k))).join(' ') : c.jurisdiction,
+    standing: c.standing === undefined && !c.standingKey ? '' : own(c.standingKey, c.standing ?? ''),
+  };
+}
+
+/** `<id>.title` or `<id>.rule` when its English is exactly the stored text (copies made before the keys). */
+function idKey(id: string | undefined, part: 'title' | 'rule', english: string): string | undefined {
+  const key = `${id}.${part}`;
+  return id && isWordKey(key) && CAUTION_WORDS[key] === english ? key : undefined;
+}
+
+/** The fixed sentence (no params) whose English is exactly this text: the standing line, a jurisdiction sentence. */
+function keyOfText(english: string): string | undefined {
+  if (english === CAUTION_WORDS.standing) return 'standing';
+  return undefined;
+}
+
+const JURISDICTION_KEYS = ['jurisdiction.usFederal', 'jurisdiction.guidance', 'jurisdiction.outsideUs'] as const;
+
+/** The jurisdiction sentences a stored English line is made of, in order; undefined when it is anything else. */
+function jurisdictionKeysOf(english: string): string[] | undefined {
+  if (!english) return undefined;
+  const found = JURISDICTION_KEYS.filter((k) => english.includes(CAUTION_WORDS[k])).sort(
+    (a, b) => english.indexOf(CAUTION_WORDS[a]) - english.indexOf(CAUTION_WORDS[b]),
+  );
+  return found.map((k) => CAUTION_WORDS[k]).join(' ') === english ? found : undefined;
 }
 
 const isWordKey = (key: string): key is CautionWordKey => Object.hasOwn(CAUTION_WORDS, key);
@@ -59,4 +92,25 @@ function keyedLine(
 ): { key: string; params: Readonly<Record<string, string>> } | null {
   if (!line || !isWordKey(line.key)) return null;
   return cautionText({ key: line.key, params: line.params }) === bullet ? line : null;
+}
+
+/** The lead-safe notice's fixed English sentences (the domain's leadNotice), by their keys under pdf.leadNotice. */
+const LEAD_NOTICE_KEYS = ['title', 'targetHousing', 'unknownYear', 'certifiedFirm', 'pamphlet', 'stricter', 'rule'] as const;
+
+/**
+ * The lead-safe notice of a proposal in the reader's language: each sentence that is the domain's own
+ * English is translated; anything else (and the jurisdiction, by its sentences) as the caution lines are.
+ */
+export function leadNoticeIn(
+  language: Language,
+  n: { readonly title: string; readonly bullets: readonly string[]; readonly rule: string; readonly jurisdiction?: string },
+): CautionWordsOut {
+  const t = translator(language);
+  const byEnglish = new Map(LEAD_NOTICE_KEYS.map((k) => [lookup(CATALOG.en, `pdf.leadNotice.${k}`), `pdf.leadNotice.${k}`]));
+  const say = (english: string) => {
+    const key = byEnglish.get(english);
+    return key ? t(key) : english;
+  };
+  const jurisdiction = cautionIn(language, { title: '', bullets: [], rule: '', jurisdiction: n.jurisdiction }).jurisdiction;
+  return { title: say(n.title), bullets: n.bullets.map(say), rule: say(n.rule), jurisdiction, standing: '' };
 }

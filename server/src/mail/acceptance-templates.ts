@@ -1,3 +1,5 @@
+import type { Language } from '@layerbook/contracts';
+import { translator } from '../i18n/catalog';
 import { render, RenderedMail } from './templates';
 
 /** To each owner and office member: a client accepted; the job and its draft payment schedule exist. */
@@ -25,7 +27,7 @@ export function proposalAcceptedMail(p: {
   );
 }
 
-/** To the client: a copy of what they accepted. */
+/** To the client, in their language (`language`; English when the caller does not say): a copy of what they accepted. */
 export function proposalAcceptedClientMail(p: {
   firmName: string;
   clientName: string;
@@ -37,18 +39,23 @@ export function proposalAcceptedClientMail(p: {
   signedOn: string;
   reference: string;
   url: string;
+  language?: Language;
 }): RenderedMail {
+  const language = p.language ?? 'en';
+  const t = translator(language);
+  const firm = p.firmName;
   return render(
-    `You accepted the proposal from ${p.firmName}: ${p.title}`,
-    'Thank you — your acceptance is recorded',
+    t('mail.proposalAccepted.subject', { firm, title: p.title }),
+    t('mail.proposalAccepted.heading'),
     [
-      `Hello ${p.clientName},`,
-      `You accepted version ${p.version} of "${p.title}" from ${p.firmName}, choosing "${p.optionLabel}" for ${p.total}.`,
-      `Signed as "${p.signedName}" on ${p.signedOn}. Proposal reference: ${p.reference}.`,
-      `${p.firmName} will be in touch about the deposit and the start date. You can read the proposal and download it as a PDF in your client portal at any time.`,
+      t('mail.hello', { name: p.clientName }),
+      t('mail.proposalAccepted.accepted', { version: p.version, title: p.title, firm, option: p.optionLabel, total: p.total }),
+      t('mail.proposalAccepted.signed', { signedName: p.signedName, signedOn: p.signedOn, reference: p.reference }),
+      t('mail.proposalAccepted.next', { firm }),
     ],
-    { label: 'See the proposal', url: p.url },
-    `You are receiving this because you accepted a proposal from ${p.firmName}. If this was not you, reply to the firm at once.`,
+    { label: t('mail.proposalAccepted.action'), url: p.url },
+    t('mail.proposalAccepted.footer', { firm }),
+    language,
   );
 }
 

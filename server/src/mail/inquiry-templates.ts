@@ -1,15 +1,19 @@
+import type { Language } from '@layerbook/contracts';
+import { translator } from '../i18n/catalog';
 import { render, RenderedMail } from './templates';
 
-export function inquiryAcknowledgementMail(p: { firmName: string; name: string }): RenderedMail {
+/** To the person who asked, in the firm's language (`language`; English when the caller does not say). */
+export function inquiryAcknowledgementMail(p: { firmName: string; name: string; language?: Language }): RenderedMail {
+  const language = p.language ?? 'en';
+  const t = translator(language);
+  const firm = p.firmName;
   return render(
-    `${p.firmName} received your inquiry`,
-    'Thank you — we have your inquiry',
-    [
-      `Hello ${p.name},`,
-      `${p.firmName} has your request and will be in touch soon to talk about the work and, if it helps, to arrange a visit.`,
-    ],
+    t('mail.inquiryReceived.subject', { firm }),
+    t('mail.inquiryReceived.heading'),
+    [t('mail.hello', { name: p.name }), t('mail.inquiryReceived.body', { firm })],
     null,
-    `You are receiving this because you sent an inquiry to ${p.firmName}.`,
+    t('mail.inquiryReceived.footer', { firm }),
+    language,
   );
 }
 

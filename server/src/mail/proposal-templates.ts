@@ -1,5 +1,8 @@
+import type { Language } from '@layerbook/contracts';
+import { translator } from '../i18n/catalog';
 import { render, RenderedMail } from './templates';
 
+/** To the client, in their language (`language`; English when the caller does not say). */
 export function proposalSentMail(p: {
   firmName: string;
   clientName: string;
@@ -9,17 +12,22 @@ export function proposalSentMail(p: {
   url: string;
   linkDays: number;
   portalUrl: string;
+  language?: Language;
 }): RenderedMail {
+  const language = p.language ?? 'en';
+  const t = translator(language);
+  const firm = p.firmName;
   return render(
-    `${p.firmName} sent you a proposal: ${p.title}`,
-    `A proposal from ${p.firmName}`,
+    t('mail.proposalSent.subject', { firm, title: p.title }),
+    t('mail.proposalSent.heading', { firm }),
     [
-      `Hello ${p.clientName},`,
-      `${p.firmName} has sent you a proposal for "${p.title}" (version ${p.version}). It sets out the scope room by room, the options with their prices, the schedule and the payment schedule.`,
-      `You can read it, download it as a PDF, accept an option or ask for changes in your client portal. The offer stands until ${p.expiresOn}.`,
-      `The button signs you in once, within ${p.linkDays} days.`,
+      t('mail.hello', { name: p.clientName }),
+      t('mail.proposalSent.sent', { firm, title: p.title, version: p.version }),
+      t('mail.proposalSent.howTo', { expiresOn: p.expiresOn }),
+      t('mail.proposalSent.linkOnce', { days: p.linkDays }),
     ],
-    { label: 'Read the proposal', url: p.url },
-    `Link used or expired? Ask for a new one at ${p.portalUrl}. You are receiving this because ${p.firmName} prepared a proposal for you.`,
+    { label: t('mail.proposalSent.action'), url: p.url },
+    t('mail.proposalSent.footer', { firm, portalUrl: p.portalUrl }),
+    language,
   );
 }

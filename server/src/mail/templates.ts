@@ -1,3 +1,6 @@
+import type { Language } from '@layerbook/contracts';
+import { translator } from '../i18n/catalog';
+
 /** Plain, readable e-mails: every message has an HTML and a plain-text part. */
 export interface RenderedMail {
   readonly subject: string;
@@ -10,9 +13,9 @@ const escape = (s: string) =>
 
 type Action = { label: string; url: string } | null;
 
-function layout(heading: string, paragraphs: string[], action: Action, footer: string): string {
+function layout(heading: string, paragraphs: string[], action: Action, footer: string, language: Language): string {
   const body = paragraphs.map((p) => `<p style="margin:0 0 14px">${escape(p)}</p>`).join('');
-  return `<!doctype html><html><body style="margin:0;background:#f6f1e7;font-family:Georgia,serif;color:#2f2419">
+  return `<!doctype html><html lang="${language}"><body style="margin:0;background:#f6f1e7;font-family:Georgia,serif;color:#2f2419">
 <div style="max-width:560px;margin:0 auto;padding:28px 24px">
 <p style="font-size:13px;letter-spacing:.08em;text-transform:uppercase;color:#6b4a2f;margin:0 0 18px">Layerbook</p>
 <h1 style="font-size:22px;font-weight:600;margin:0 0 16px">${escape(heading)}</h1>
@@ -20,7 +23,7 @@ function layout(heading: string, paragraphs: string[], action: Action, footer: s
 ${
   action
     ? `<p style="margin:22px 0"><a href="${escape(action.url)}" style="background:#6b4a2f;color:#fff;padding:11px 18px;border-radius:6px;text-decoration:none;display:inline-block">${escape(action.label)}</a></p>
-<p style="font-size:13px;color:#5d5246">If the button does not work, paste this address into your browser:<br>${escape(action.url)}</p>`
+<p style="font-size:13px;color:#5d5246">${escape(translator(language)('mail.layout.buttonFallback'))}<br>${escape(action.url)}</p>`
     : ''
 }
 <p style="font-size:13px;color:#5d5246;margin-top:24px">${escape(footer)}</p></div></div></body></html>`;
@@ -32,50 +35,65 @@ function plain(heading: string, paragraphs: string[], action: Action, footer: st
   );
 }
 
-export function render(subject: string, heading: string, paragraphs: string[], action: Action, footer: string): RenderedMail {
-  return { subject, html: layout(heading, paragraphs, action, footer), text: plain(heading, paragraphs, action, footer) };
+/** One e-mail; `language` is the reader's (the words passed in are already theirs; the layout's own words follow it). */
+export function render(
+  subject: string,
+  heading: string,
+  paragraphs: string[],
+  action: Action,
+  footer: string,
+  language: Language = 'en',
+): RenderedMail {
+  return { subject, html: layout(heading, paragraphs, action, footer, language), text: plain(heading, paragraphs, action, footer) };
 }
 
-const ROLE_WORDS = { owner: 'an owner', office: 'the office', crew: 'the crew' } as const;
-
+/** The invitee is not a member yet, so the invitation goes out in the firm's language. */
 export function invitationMail(p: {
   firmName: string;
   inviterName: string;
-  role: keyof typeof ROLE_WORDS;
+  role: 'owner' | 'office' | 'crew';
   url: string;
   days: number;
+  language?: Language;
 }): RenderedMail {
+  const language = p.language ?? 'en';
+  const t = translator(language);
+  const names = { inviter: p.inviterName, firm: p.firmName };
   return render(
-    `${p.inviterName} invited you to ${p.firmName} on Layerbook`,
-    `Join ${p.firmName} on Layerbook`,
+    t('mail.invitation.subject', names),
+    t('mail.invitation.heading', names),
     [
-      `${p.inviterName} has invited you to join ${p.firmName} as ${ROLE_WORDS[p.role]}.`,
-      `The invitation is good for ${p.days} days and works once.`,
+      t('mail.invitation.invited', { ...names, role: t(`mail.invitation.roles.${p.role}`) }),
+      t('mail.invitation.goodFor', { days: p.days }),
     ],
-    { label: 'Accept the invitation', url: p.url },
-    'If you were not expecting this, you can ignore this e-mail.',
+    { label: t('mail.invitation.action'), url: p.url },
+    t('mail.invitation.footer'),
+    language,
   );
 }
 
-export function passwordResetMail(p: { name: string; url: string; minutes: number }): RenderedMail {
+export function passwordResetMail(p: { name: string; url: string; minutes: number; language?: Language }): RenderedMail {
+  const language = p.language ?? 'en';
+  const t = translator(language);
   return render(
-    'Reset your Layerbook password',
-    'Choose a new password',
-    [
-      `Hello ${p.name},`,
-      `Someone (hopefully you) asked to reset the password of this Layerbook account. The link works once, within ${p.minutes} minutes.`,
-    ],
-    { label: 'Choose a new password', url: p.url },
-    'If you did not ask for this, ignore this e-mail: your password stays as it is.',
+    t('mail.passwordReset.subject'),
+    t('mail.passwordReset.heading'),
+    [t('mail.hello', { name: p.name }), t('mail.passwordReset.body', { minutes: p.minutes })],
+    { label: t('mail.passwordReset.action'), url: p.url },
+    t('mail.passwordReset.footer'),
+    language,
   );
 }
 
-export function portalLinkMail(p: { name: string; firmName: string; url: string; minutes: number }): RenderedMail {
+export function portalLinkMail(p: { name: string; firmName: string; url: string; minutes: number; language?: Language }): RenderedMail {
+  const language = p.language ?? 'en';
+  const t = translator(language);
   return render(
-    `Your sign-in link for ${p.firmName}`,
-    `Sign in to your projects with ${p.firmName}`,
-    [`Hello ${p.name},`, `Use this link to see your proposals, sample boards and invoices. It works once, within ${p.minutes} minutes.`],
-    { label: 'Sign in', url: p.url },
-    'If you did not ask for this, ignore this e-mail.',
+    t('mail.portalLink.subject', { firm: p.firmName }),
+    t('mail.portalLink.heading', { firm: p.firmName }),
+    [t('mail.hello', { name: p.name }), t('mail.portalLink.body', { minutes: p.minutes })],
+    { label: t('mail.portalLink.action'), url: p.url },
+    t('mail.portalLink.footer'),
+    language,
   );
 }

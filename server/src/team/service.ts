@@ -96,7 +96,7 @@ export async function invite(ctx: AppContext, tx: TenantTx, actor: StaffPrincipa
       expiresAt: minutesFromNow(now, INVITATION_DAYS * 24 * 60),
     })
     .returning();
-  const firm = (await tx.db.select({ name: firms.name }).from(firms))[0];
+  const firm = (await tx.db.select({ name: firms.name, language: firms.language }).from(firms))[0];
   await enqueueMail(tx, ctx.queue, {
     purposeKey: `invitation:${inv.id}`,
     tenantId: tx.tenantId,
@@ -107,6 +107,7 @@ export async function invite(ctx: AppContext, tx: TenantTx, actor: StaffPrincipa
       role: input.role,
       url: `${ctx.config.PUBLIC_URL}/accept-invitation?token=${token}`,
       days: INVITATION_DAYS,
+      language: firm?.language ?? 'en',
     }),
   });
   await recordAudit(tx, {

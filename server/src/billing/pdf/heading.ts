@@ -1,4 +1,5 @@
 import type { InvoiceDocument } from '@layerbook/contracts';
+import { translator, type Translate } from '../../i18n/catalog';
 import { COLOURS, contentWidth, type Doc, MARGIN } from '../../proposals/pdf/page';
 
 const LOGO_FIT: [number, number] = [150, 60];
@@ -13,7 +14,13 @@ export interface HeadingFacts {
  * Logo top left, the firm's name, address, phone and tax number under it; the document's name and
  * facts on the right; then who it is for, where the work is and the job.
  */
-export function documentHeading(doc: Doc, d: InvoiceDocument, logo: Buffer | null, heading: HeadingFacts): void {
+export function documentHeading(
+  doc: Doc,
+  d: InvoiceDocument,
+  logo: Buffer | null,
+  heading: HeadingFacts,
+  t: Translate = translator('en'),
+): void {
   const width = contentWidth(doc);
   const left = width * 0.58;
   let y = MARGIN;
@@ -22,7 +29,7 @@ export function documentHeading(doc: Doc, d: InvoiceDocument, logo: Buffer | nul
     y += LOGO_FIT[1] + 8;
   }
   doc.font('heading').fontSize(18).fillColor(COLOURS.umber).text(d.firm.name, MARGIN, y, { width: left });
-  const firmLines = [...d.firm.addressLines, d.firm.phone, d.firm.taxId ? `Tax number: ${d.firm.taxId}` : ''].filter(Boolean);
+  const firmLines = [...d.firm.addressLines, d.firm.phone, d.firm.taxId ? t('pdf.taxNumber', { taxId: d.firm.taxId }) : ''].filter(Boolean);
   doc.font('text').fontSize(9.5).fillColor(COLOURS.muted).text(firmLines.join('\n'), { width: left });
   const leftBottom = doc.y;
 
@@ -50,9 +57,9 @@ export function documentHeading(doc: Doc, d: InvoiceDocument, logo: Buffer | nul
     return doc.y;
   };
   const bottoms = [
-    block(MARGIN, 'BILL TO', [d.client.name, d.client.email, ...d.client.addressLines]),
-    block(MARGIN + third + 12, 'WORK AT', [d.site.label, ...d.site.addressLines]),
-    block(MARGIN + (third + 12) * 2, 'JOB', [d.jobTitle]),
+    block(MARGIN, t('pdf.billTo'), [d.client.name, d.client.email, ...d.client.addressLines]),
+    block(MARGIN + third + 12, t('pdf.workAt'), [d.site.label, ...d.site.addressLines]),
+    block(MARGIN + (third + 12) * 2, t('pdf.job'), [d.jobTitle]),
   ];
   doc.x = MARGIN;
   doc.y = Math.max(...bottoms) + 4;

@@ -1,32 +1,24 @@
 import type { InvoiceLine, ProgressTable } from '@layerbook/contracts';
 import { type Cell, COLOURS, paragraph, row, sectionHeading, type Doc } from '../../proposals/pdf/page';
+import { translator, type Translate } from '../../i18n/catalog';
 import type { BillingFormats } from './formats';
 import type { PrintableInvoice } from './printable';
 
 const strong = { font: 'strong' as const };
 
-/** The columns of a progress invoice, in our own words, after the work's name. */
-export const PROGRESS_COLUMNS = [
-  'Scheduled value',
-  'Done before',
-  'Done this period',
-  'Stored on site',
-  'Done to date',
-  '%',
-  'Left to do',
-  'Retainage held',
-] as const;
+/** The columns of a progress invoice, in our own words, after the work's name (keys under pdf.invoice.progress.columns). */
+const PROGRESS_COLUMNS = ['scheduledValue', 'previousWork', 'thisPeriod', 'stored', 'toDate', 'percent', 'leftToDo', 'retainage'] as const;
 
 const LABEL_SHARE = 0.18;
 const NUMBER_SHARES = [0.11, 0.1, 0.1, 0.1, 0.11, 0.08, 0.11, 0.11] as const;
 
 /** A deposit, stage, retainage or final invoice: what it bills, line by line. */
-export function linesSection(doc: Doc, lines: readonly InvoiceLine[], f: BillingFormats): void {
+export function linesSection(doc: Doc, lines: readonly InvoiceLine[], f: BillingFormats, t: Translate = translator('en')): void {
   row(
     doc,
     [
-      { text: 'Description', share: 0.75, ...strong },
-      { text: 'Amount', share: 0.25, align: 'right', ...strong },
+      { text: t('pdf.invoice.description'), share: 0.75, ...strong },
+      { text: t('pdf.invoice.amount'), share: 0.25, align: 'right', ...strong },
     ],
     { shaded: true },
   );
@@ -48,8 +40,14 @@ function progressRow(doc: Doc, label: string, values: readonly string[], opts: {
 }
 
 /** A progress invoice: the schedule of values as billed to the period's end, then how the amount due comes about. */
-export function progressSection(doc: Doc, p: ProgressTable, f: BillingFormats): void {
-  progressRow(doc, 'Work', PROGRESS_COLUMNS, { shaded: true, bold: true });
+export function progressSection(doc: Doc, p: ProgressTable, f: BillingFormats, t: Translate = translator('en')): void {
+  const w = (key: string, params?: Record<string, string | number>) => t(`pdf.invoice.progress.${key}`, params);
+  progressRow(
+    doc,
+    w('work'),
+    PROGRESS_COLUMNS.map((c) => w(`columns.${c}`)),
+    { shaded: true, bold: true },
+  );
   for (const l of p.lines) {
     progressRow(doc, l.label, [
       f.money(l.scheduledValue),
@@ -63,22 +61,22 @@ export function progressSection(doc: Doc, p: ProgressTable, f: BillingFormats): 
     ]);
   }
   const rates = p.retainageRates;
-  const held = [`Retainage: ${rates.workPercent} % of work done`, `${rates.storedPercent} % of materials stored on site`];
-  if (rates.stopAtPercentComplete !== null) held.push(`no more held once the job is ${rates.stopAtPercentComplete} % done`);
+  const held = [w('retainageRates', { work: rates.workPercent }), w('storedRate', { stored: rates.storedPercent })];
+  if (rates.stopAtPercentComplete !== null) held.push(w('stopAt', { percent: rates.stopAtPercentComplete }));
   paragraph(doc, `${held.join(', ')}.`, 'italic', COLOURS.muted, 8.5);
 
-  sectionHeading(doc, 'How this period adds up');
+  sectionHeading(doc, w('addsUp'));
   const s = p.summary;
   summaryRows(doc, [
-    ['Original contract sum', f.money(s.originalContractSum)],
-    ['Change orders approved', f.money(s.changeOrders)],
-    ['Contract sum to date', f.money(s.contractSumToDate)],
-    ['Done to date, with materials stored on site', f.money(s.completedToDate)],
-    ['Retainage held', f.money(s.retainage)],
-    ['Earned, less retainage', f.money(s.earnedLessRetainage)],
-    ['Billed before', f.money(s.previouslyBilled)],
-    ['Due this period', f.money(s.dueThisPeriod)],
-    ['Left to finish, retainage included', f.money(s.balanceToFinishWithRetainage)],
+    [w('originalContractSum'), f.money(s.originalContractSum)],
+    [w('changeOrders'), f.money(s.changeOrders)],
+    [w('contractSumToDate'), f.money(s.contractSumToDate)],
+    [w('completedToDate'), f.money(s.completedToDate)],
+    [w('retainage'), f.money(s.retainage)],
+    [w('earnedLessRetainage'), f.money(s.earnedLessRetainage)],
+    [w('previouslyBilled'), f.money(s.previouslyBilled)],
+    [w('dueThisPeriod'), f.money(s.dueThisPeriod)],
+    [w('balanceToFinish'), f.money(s.balanceToFinishWithRetainage)],
   ]);
 }
 
@@ -98,17 +96,16 @@ export function summaryRows(doc: Doc, rows: ReadonlyArray<readonly [string, stri
 }
 
 /** The invoice's own totals: what it bills, the deposit taken off, the tax inside, what was paid or credited, and what is due. */
-export function totalsSection(doc: Doc, inv: PrintableInvoice, f: BillingFormats): void {
-  sectionHeading(doc, 'Summary');
-  const rows: Array<readonly [string, string]> = [
-    [inv.progress ? 'Earned this period, less retainage' : 'Subtotal', f.money(inv.subtotal)],
-  ];
-  if (!isZero(inv.depositCredit)) rows.push(['Deposit credit', f.minus(inv.depositCredit)]);
-  rows.push(['Invoice total', f.money(inv.total)]);
-  rows.push(['Tax included in the total', f.money(inv.taxIncluded)]);
-  if (!isZero(inv.amountPaid)) rows.push(['Paid', f.minus(inv.amountPaid)]);
-  if (!isZero(inv.amountCredited)) rows.push(['Credited', f.minus(inv.amountCredited)]);
-  rows.push(['Amount due', f.money(inv.amountDue)]);
+export function totalsSection(doc: Doc, inv: PrintableInvoice, f: BillingFormats, t: Translate = translator('en')): void {
+  const w = (key: string) => t(`pdf.invoice.totals.${key}`);
+  sectionHeading(doc, w('heading'));
+  const rows: Array<readonly [string, string]> = [[inv.progress ? w('earned') : w('subtotal'), f.money(inv.subtotal)]];
+  if (!isZero(inv.depositCredit)) rows.push([w('depositCredit'), f.minus(inv.depositCredit)]);
+  rows.push([w('total'), f.money(inv.total)]);
+  rows.push([w('taxIncluded'), f.money(inv.taxIncluded)]);
+  if (!isZero(inv.amountPaid)) rows.push([w('paid'), f.minus(inv.amountPaid)]);
+  if (!isZero(inv.amountCredited)) rows.push([w('credited'), f.minus(inv.amountCredited)]);
+  rows.push([w('due'), f.money(inv.amountDue)]);
   summaryRows(doc, rows, true);
 }
 

@@ -1,4 +1,4 @@
-import type { BillingTerms, InvoiceDocument, InvoiceKind, InvoiceLine, InvoiceStatus, ProgressTable } from '@layerbook/contracts';
+import type { BillingTerms, InvoiceDocument, InvoiceKind, InvoiceLine, InvoiceStatus, Language, ProgressTable } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { notFound } from '../../http/problem';
 import { invoiceDocument } from '../document';
@@ -33,6 +33,10 @@ export interface PrintableInvoice {
   readonly notes: string;
   /** the logo's object in the store (null: none, or replaced since the invoice was issued) */
   readonly logoKey: string | null;
+  /** the client's language (theirs, else the firm's): the PDF is printed in it, for the office too */
+  readonly language: Language;
+  /** the firm's country, for number and date conventions with the language */
+  readonly country: string;
 }
 
 /** A credit note with the invoice it cancels. */
@@ -46,6 +50,8 @@ export interface PrintableCreditNote {
   readonly invoice: { readonly id: string; readonly number: string; readonly issuedOn: string | null; readonly kind: InvoiceKind };
   readonly document: InvoiceDocument;
   readonly logoKey: string | null;
+  readonly language: Language;
+  readonly country: string;
 }
 
 /** Who may read: the office sees every invoice of the firm (drafts included); a client only their own issued ones. */
@@ -74,7 +80,13 @@ interface InvoiceRow {
   document: InvoiceDocument | null;
   notes: string;
   billing_terms: BillingTerms | null;
+  language: Language;
+  country: string;
 }
+
+/** The invoice's client reads the PDF: their language, else the firm's, with the firm's country (joins on `i`). */
+const READER_SQL = `coalesce(rc.language, rf.language) as language, rf.country`;
+const READER_JOINS = `join firms rf on rf.id = i.tenant_id left join clients rc on rc.tenant_id = i.tenant_id and rc.id = i.client_id`;
 
 /** The reader's filter as SQL after `where i.tenant_id = $1 and i.id = $2`, with its parameters from $3. */
 function readerFilter(reader: Reader): { sql: string; params: unknown[] } {
@@ -113,8 +125,8 @@ export async function loadPrintableInvoice(tx: TenantTx, id: string, reader: Rea
             i.subtotal::text, i.deposit_credit::text, i.retainage_held::text, i.tax_included::text, i.total::text,
             i.amount_paid::text, i.amount_credited::text,
             (case when i.status = 'void' then 0 else i.total - i.amount_paid - i.amount_credited end)::numeric(14, 2)::text as amount_due,
-            i.lines, i.progress, i.document, i.notes, j.billing_terms
-       from invoices i join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id
+            i.lines, i.progress, i.document, i.notes, j.billing_terms, ${READER_SQL}
+       from invoices i join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id ${READER_JOINS}
       where i.tenant_id = $1 and i.id = $2 ${filter.sql}`,
     [tx.tenantId, id, ...filter.params],
   );
@@ -145,6 +157,8 @@ export async function loadPrintableInvoice(tx: TenantTx, id: string, reader: Rea
     document,
     notes: r.notes,
     logoKey: await logoKey(tx, document.firm.logoFileId),
+    language: r.language,
+    country: r.country,
   };
 }
 
@@ -162,6 +176,8 @@ interface CreditNoteRow {
   job_id: string;
   invoice_document: InvoiceDocument | null;
   billing_terms: BillingTerms | null;
+  language: Language;
+  country: string;
 }
 
 export async function loadPrintableCreditNote(tx: TenantTx, id: string, reader: Reader): Promise<PrintableCreditNote> {
@@ -169,10 +185,10 @@ export async function loadPrintableCreditNote(tx: TenantTx, id: string, reader: 
   const { rows } = await tx.client.query<CreditNoteRow>(
     `select n.id, n.number_text, n.issued_on::text, n.currency, n.amount::text, n.reason, i.id as invoice_id,
             i.number_text as invoice_number, i.issued_on::text as invoice_issued_on, i.kind as invoice_kind, i.job_id,
-            i.document as invoice_document, j.billing_terms
+            i.document as invoice_document, j.billing_terms, ${READER_SQL}
        from credit_notes n
        join invoices i on i.tenant_id = n.tenant_id and i.id = n.invoice_id
-       join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id
+       join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id ${READER_JOINS}
       where n.tenant_id = $1 and n.id = $2 ${filter.sql}`,
     [tx.tenantId, id, ...filter.params],
   );
@@ -190,5 +206,7 @@ export async function loadPrintableCreditNote(tx: TenantTx, id: string, reader: 
     invoice: { id: r.invoice_id, number: r.invoice_number ?? '', issuedOn: r.invoice_issued_on, kind: r.invoice_kind },
     document,
     logoKey: await logoKey(tx, document.firm.logoFileId),
+    language: r.language,
+    country: r.country,
   };
 }

@@ -1,5 +1,4 @@
-import { INVOICE_KIND_LABELS, PAYMENT_METHOD_LABELS, type PaymentMethod } from '@layerbook/contracts';
-import { billingFormats } from '../../billing/pdf/formats';
+import { printingFor } from '../../billing/pdf/formats';
 import { documentHeading } from '../../billing/pdf/heading';
 import { summaryRows } from '../../billing/pdf/invoice-sections';
 import { startDocument } from '../../billing/pdf/render-invoice';
@@ -14,73 +13,88 @@ export function receiptFilename(number: string, jobTitle: string): string {
 
 const isZero = (amount: string) => /^-?0*(\.0*)?$/.test(amount);
 
-/** "Cheque 1042", "Card (online)", "Bank transfer TRF-88". */
-const methodWords = (method: PaymentMethod, reference: string) => `${PAYMENT_METHOD_LABELS[method]}${reference ? ` ${reference}` : ''}`;
+const capitalised = (s: string) => `${s.charAt(0).toUpperCase()}${s.slice(1)}`;
+const withReference = (words: string, reference: string) => `${words}${reference ? ` ${reference}` : ''}`;
 
 /**
- * A receipt PDF under the firm's heading (as its invoices): for a payment, what was received, how,
- * what went on the invoice and what was kept as credit; for a refund, what was given back and how;
- * both end with what is still due on the invoice on the day the receipt is printed.
+ * A receipt PDF under the firm's heading (as its invoices), in the client's language: for a payment,
+ * what was received, how, what went on the invoice and what was kept as credit; for a refund, what
+ * was given back and how; both end with what is still due on the invoice on the day it is printed.
  */
 export function renderReceiptPdf(r: PrintableReceipt, logo: Buffer | null): Promise<Buffer> {
   const inv = r.invoice;
   const d = inv.document;
-  const f = billingFormats(d.locale, r.currency);
+  const { t, f } = printingFor(inv, r.currency);
+  const w = (key: string, params?: Record<string, string>) => t(`pdf.receipt.${key}`, params);
   const isRefund = r.kind === 'refund';
-  const invoiceNumber = inv.number ?? 'the invoice';
-  const { doc, done } = startDocument(`${isRefund ? 'Refund receipt' : 'Receipt'} ${r.number} — ${d.jobTitle}`, d.firm.name);
+  const invoiceNumber = inv.number ?? w('theInvoice');
+  const { doc, done } = startDocument(
+    `${isRefund ? w('refundName', { number: r.number }) : w('name', { number: r.number })} — ${d.jobTitle}`,
+    d.firm.name,
+  );
   const facts: Array<readonly [string, string]> = [
-    ['Number', r.number],
-    ['Date', f.date(r.on)],
-    ['For invoice', invoiceNumber],
+    [t('pdf.number'), r.number],
+    [t('pdf.date'), f.date(r.on)],
+    [t('pdf.forInvoice'), invoiceNumber],
   ];
-  if (isRefund && r.payment.number) facts.push(['Payment', r.payment.number]);
-  documentHeading(doc, d, logo, { title: isRefund ? 'REFUND RECEIPT' : 'RECEIPT', facts });
+  if (isRefund && r.payment.number) facts.push([t('pdf.payment'), r.payment.number]);
+  documentHeading(doc, d, logo, { title: isRefund ? w('refundTitle') : w('title'), facts }, t);
 
-  const invoiceWords = `invoice ${invoiceNumber} (${INVOICE_KIND_LABELS[inv.kind]})`;
+  const invoiceWords = w('invoiceWords', { number: invoiceNumber, kind: t(`pdf.invoice.kinds.${inv.kind}`) });
+  const stillDue: readonly [string, string] = [
+    w('stillDue', { invoice: invoiceNumber, date: f.date(r.printedOn) }),
+    f.money(inv.amountDue),
+  ];
   if (isRefund) {
-    sectionHeading(doc, `Refund ${r.number}`);
-    const how =
-      r.method === 'card'
-        ? 'back to the card it was paid with'
-        : `by ${PAYMENT_METHOD_LABELS[r.method].toLowerCase()}${r.reference ? ` ${r.reference}` : ''}`;
-    const paid = r.payment.number ? `payment ${r.payment.number}` : 'the payment';
+    sectionHeading(doc, w('refundHeading', { number: r.number }));
+    const how = r.method === 'card' ? w('backToCard') : withReference(w(`refundBy.${r.method}`), r.reference);
+    const paid = r.payment.number ? w('paymentNumber', { number: r.payment.number }) : w('thePayment');
     row(doc, [
-      { text: `Given back on ${f.date(r.on)} ${how}, from ${paid} of ${f.date(r.payment.receivedOn)} on ${invoiceWords}`, share: 0.7 },
+      {
+        text: w('givenBackLine', { date: f.date(r.on), how, payment: paid, paidOn: f.date(r.payment.receivedOn), invoice: invoiceWords }),
+        share: 0.7,
+      },
       { text: f.minus(r.amount), share: 0.3, align: 'right' },
     ]);
     summaryRows(
       doc,
       [
-        ['Given back', f.money(r.amount)],
-        [`${paid[0].toUpperCase()}${paid.slice(1)} received`, f.money(r.payment.amount)],
-        ['Refunded on that payment in all', f.money(r.payment.refunded)],
-        [`Still due on ${invoiceNumber} on ${f.date(r.printedOn)}`, f.money(inv.amountDue)],
+        [w('givenBack'), f.money(r.amount)],
+        [capitalised(w('paymentReceived', { payment: paid })), f.money(r.payment.amount)],
+        [w('refundedAll'), f.money(r.payment.refunded)],
+        stillDue,
       ],
       true,
     );
     doc.moveDown(0.6);
-    if (r.reason) paragraph(doc, `Reason: ${r.reason}`);
+    if (r.reason) paragraph(doc, t('pdf.reason', { reason: r.reason }));
   } else {
-    sectionHeading(doc, `Receipt ${r.number}`);
+    sectionHeading(doc, w('heading', { number: r.number }));
     row(doc, [
-      { text: `${methodWords(r.method, r.reference)}, received ${f.date(r.on)}, for ${invoiceWords}`, share: 0.7 },
+      {
+        text: w('receivedLine', {
+          method: withReference(w(`methods.${r.method}`), r.reference),
+          date: f.date(r.on),
+          invoice: invoiceWords,
+        }),
+        share: 0.7,
+      },
       { text: f.money(r.amount), share: 0.3, align: 'right' },
     ]);
-    const rows: Array<readonly [string, string]> = [['Received', f.money(r.amount)]];
-    rows.push([`Applied to ${invoiceNumber}`, f.money(r.payment.applied)]);
-    if (!isZero(r.payment.credit)) rows.push([`Kept as credit for ${d.client.name}`, f.money(r.payment.credit)]);
-    if (!isZero(r.payment.refunded)) rows.push(['Refunded since', f.minus(r.payment.refunded)]);
-    rows.push([`Still due on ${invoiceNumber} on ${f.date(r.printedOn)}`, f.money(inv.amountDue)]);
+    const rows: Array<readonly [string, string]> = [[w('received'), f.money(r.amount)]];
+    rows.push([w('appliedTo', { invoice: invoiceNumber }), f.money(r.payment.applied)]);
+    if (!isZero(r.payment.credit)) rows.push([w('keptAsCredit', { client: d.client.name }), f.money(r.payment.credit)]);
+    if (!isZero(r.payment.refunded)) rows.push([w('refundedSince'), f.minus(r.payment.refunded)]);
+    rows.push(stillDue);
     summaryRows(doc, rows, true);
     doc.moveDown(0.6);
-    paragraph(doc, 'Thank you for your payment.', 'strong', COLOURS.ink, 10.5);
+    paragraph(doc, w('thanks'), 'strong', COLOURS.ink, 10.5);
   }
   if (d.footer) {
     doc.moveDown(0.6);
     paragraph(doc, d.footer, 'text', COLOURS.muted, 9);
   }
-  footers(doc, `${d.firm.name} · ${r.number}`);
+  footers(doc, `${d.firm.name} · ${r.number}`, t);
   doc.end();
   return done;
 }

@@ -1,9 +1,10 @@
 import type { ProposalSnapshot } from '@layerbook/contracts';
+import type { Translate } from '../../i18n/catalog';
 import type { Formats } from './format';
 import { COLOURS, contentWidth, type Doc, MARGIN } from './page';
 
 /** Firm on the left, the document's dates on the right, then who it is for and where. */
-export function headingSection(doc: Doc, s: ProposalSnapshot, f: Formats, reference: string): void {
+export function headingSection(doc: Doc, s: ProposalSnapshot, f: Formats, reference: string, t: Translate): void {
   const width = contentWidth(doc);
   const top = MARGIN;
   doc
@@ -23,13 +24,13 @@ export function headingSection(doc: Doc, s: ProposalSnapshot, f: Formats, refere
     .font('strong')
     .fontSize(10)
     .fillColor(COLOURS.verdigris)
-    .text('PROPOSAL', right, top + 4, { width: width * 0.4, align: 'right', characterSpacing: 1.5 });
+    .text(t('pdf.proposal.title'), right, top + 4, { width: width * 0.4, align: 'right', characterSpacing: 1.5 });
   doc
     .font('text')
     .fontSize(9.5)
     .fillColor(COLOURS.ink)
-    .text(`Date: ${f.date(s.issuedOn)}`, right, doc.y + 2, { width: width * 0.4, align: 'right' })
-    .text(`Valid until: ${f.date(s.expiresOn)}`, { width: width * 0.4, align: 'right' })
+    .text(t('pdf.proposal.date', { date: f.date(s.issuedOn) }), right, doc.y + 2, { width: width * 0.4, align: 'right' })
+    .text(t('pdf.proposal.validUntil', { date: f.date(s.expiresOn) }), { width: width * 0.4, align: 'right' })
     .fillColor(COLOURS.muted)
     .text(reference, { width: width * 0.4, align: 'right' });
   doc.y = Math.max(leftBottom, doc.y) + 18;
@@ -39,7 +40,11 @@ export function headingSection(doc: Doc, s: ProposalSnapshot, f: Formats, refere
 
   const half = width / 2 - 8;
   const y = doc.y;
-  doc.font('strong').fontSize(9).fillColor(COLOURS.umber).text('PREPARED FOR', MARGIN, y, { width: half, characterSpacing: 1 });
+  doc
+    .font('strong')
+    .fontSize(9)
+    .fillColor(COLOURS.umber)
+    .text(t('pdf.proposal.preparedFor'), MARGIN, y, { width: half, characterSpacing: 1 });
   doc
     .font('text')
     .fontSize(10)
@@ -50,8 +55,12 @@ export function headingSection(doc: Doc, s: ProposalSnapshot, f: Formats, refere
     .font('strong')
     .fontSize(9)
     .fillColor(COLOURS.umber)
-    .text('WORK AT', MARGIN + half + 16, y, { width: half, characterSpacing: 1 });
-  const siteLines = [s.site.label, ...s.site.addressLines, s.site.yearBuilt ? `Built ${s.site.yearBuilt}` : ''].filter(Boolean);
+    .text(t('pdf.proposal.workAt'), MARGIN + half + 16, y, { width: half, characterSpacing: 1 });
+  const siteLines = [
+    s.site.label,
+    ...s.site.addressLines,
+    s.site.yearBuilt ? t('pdf.proposal.built', { year: s.site.yearBuilt }) : '',
+  ].filter(Boolean);
   doc.font('text').fontSize(10).fillColor(COLOURS.ink).text(siteLines.join('\n'), { width: half });
   doc.x = MARGIN;
   doc.y = Math.max(clientBottom, doc.y) + 6;

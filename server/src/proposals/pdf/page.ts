@@ -1,3 +1,4 @@
+import { translator, type Translate } from '../../i18n/catalog';
 import type PDFDocument from 'pdfkit';
 import type { FontName } from './fonts';
 
@@ -129,8 +130,8 @@ export function row(doc: Doc, cells: readonly Cell[], opts: { shaded?: boolean; 
   doc.y = top + height;
 }
 
-/** Writes the reference line at the foot of every page once the content is laid out. */
-export function footers(doc: Doc, line: string): void {
+/** Writes the reference line at the foot of every page once the content is laid out ("page 2 of 3" in the reader's words). */
+export function footers(doc: Doc, line: string, t: Translate = translator('en')): void {
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
@@ -140,7 +141,7 @@ export function footers(doc: Doc, line: string): void {
       .font('text')
       .fontSize(8.5)
       .fillColor(COLOURS.muted)
-      .text(`${line} · page ${i - range.start + 1} of ${range.count}`, MARGIN, doc.page.height - MARGIN - 10, {
+      .text(`${line} · ${t('pdf.page', { n: i - range.start + 1, total: range.count })}`, MARGIN, doc.page.height - MARGIN - 10, {
         width: contentWidth(doc),
         align: 'center',
         lineBreak: false,

@@ -1,4 +1,5 @@
 import type { ProposalSnapshot } from '@layerbook/contracts';
+import type { Translate } from '../../i18n/catalog';
 import type { Formats } from './format';
 import { COLOURS, type Doc, paragraph, row, sectionHeading } from './page';
 
@@ -13,17 +14,17 @@ export interface SignatureRecord {
 }
 
 /** The acceptance record: who typed their name, when, for which option, from where, and the document's fingerprint. */
-export function signatureSection(doc: Doc, s: ProposalSnapshot, sig: SignatureRecord, f: Formats): void {
+export function signatureSection(doc: Doc, s: ProposalSnapshot, sig: SignatureRecord, f: Formats, t: Translate): void {
   doc.addPage();
-  sectionHeading(doc, 'Signed copy: acceptance record');
-  paragraph(doc, `${s.client.name || sig.signedName} accepted this proposal from ${s.firm.name} by typing their name, as recorded below.`);
+  sectionHeading(doc, t('pdf.proposal.signedHeading'));
+  paragraph(doc, t('pdf.proposal.signedAccepted', { client: s.client.name || sig.signedName, firm: s.firm.name }));
   doc.moveDown(0.4);
   const option = s.options.find((o) => o.id === sig.optionId);
   const lines: Array<[string, string]> = [
-    ['Typed name', sig.signedName],
-    ['Signed at', sig.signedAt],
-    ['Option chosen', option ? `${option.label}: ${f.money(option.total)}` : sig.optionId],
-    ['IP address', sig.ip || 'not recorded'],
+    [t('pdf.proposal.typedName'), sig.signedName],
+    [t('pdf.proposal.signedAt'), sig.signedAt],
+    [t('pdf.proposal.optionChosen'), option ? `${option.label}: ${f.money(option.total)}` : sig.optionId],
+    [t('pdf.proposal.ip'), sig.ip || t('pdf.proposal.ipNone')],
   ];
   lines.forEach(([label, value], i) =>
     row(
@@ -36,14 +37,8 @@ export function signatureSection(doc: Doc, s: ProposalSnapshot, sig: SignatureRe
     ),
   );
   doc.moveDown(0.6);
-  paragraph(doc, 'Document fingerprint (SHA-256 of the proposal as sent and signed):', 'strong', COLOURS.ink, 9.5);
+  paragraph(doc, t('pdf.proposal.fingerprint'), 'strong', COLOURS.ink, 9.5);
   paragraph(doc, sig.snapshotHash, 'text', COLOURS.ink, 9);
   doc.moveDown(0.3);
-  paragraph(
-    doc,
-    'The same fingerprint is kept with the firm’s record of the acceptance; any change to the proposal would give a different one.',
-    'italic',
-    COLOURS.muted,
-    9,
-  );
+  paragraph(doc, t('pdf.proposal.fingerprintNote'), 'italic', COLOURS.muted, 9);
 }
