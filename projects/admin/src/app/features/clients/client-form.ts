@@ -11,10 +11,12 @@ import {
   CLIENT_KIND_LABELS,
   CLIENT_LIMITS as L,
   EMAIL_MAX_LENGTH,
+  LANGUAGES,
   PHONE_MAX_LENGTH,
   type ClientCreate,
   type ClientDetail,
   type ClientKind,
+  type Language,
   type ClientSummary,
 } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
@@ -73,6 +75,17 @@ import { ClientApi } from './client-api';
           <input matInput type="tel" formControlName="phone" autocomplete="off" />
           <mat-error>{{ errorText(form.controls.phone, words.phone) }}</mat-error>
         </mat-form-field>
+        <mat-form-field>
+          <mat-label>{{ 'clients.clientForm.language' | translate }}</mat-label>
+          <mat-select formControlName="language">
+            <mat-option [value]="null">{{ 'clients.clientForm.firmLanguage' | translate }}</mat-option>
+            @for (language of languages; track language) {
+              <mat-option [value]="language">{{ 'common.languageNames.' + language | translate }}</mat-option>
+            }
+          </mat-select>
+          <mat-hint>{{ 'clients.clientForm.languageHint' | translate }}</mat-hint>
+          <mat-error>{{ errorText(form.controls.language, {}) }}</mat-error>
+        </mat-form-field>
         <mat-form-field class="wide">
           <mat-label>{{ 'clients.clientForm.notes' | translate }}</mat-label>
           <textarea matInput formControlName="notes" rows="3"></textarea>
@@ -113,6 +126,7 @@ export class ClientForm implements OnInit {
   protected readonly isNew = computed(() => this.client() === null);
   protected readonly kinds = CLIENT_KINDS;
   protected readonly kindLabels = CLIENT_KIND_LABELS;
+  protected readonly languages = LANGUAGES;
   protected readonly isHydrated = hydratedSignal();
   protected readonly submission = new Submission();
   protected readonly errorText = errorText;
@@ -131,13 +145,15 @@ export class ClientForm implements OnInit {
     email: ['', [Validators.email, Validators.maxLength(EMAIL_MAX_LENGTH)]],
     phone: ['', Validators.maxLength(PHONE_MAX_LENGTH)],
     notes: ['', Validators.maxLength(L.notes)],
+    /** null = the firm's language */
+    language: this.fb.control<Language | null>(null),
   });
 
   ngOnInit(): void {
     const client = this.client();
     if (client) {
-      const { name, kind, isCompany, email, phone, notes } = client;
-      this.form.reset({ name, kind, isCompany, email, phone, notes });
+      const { name, kind, isCompany, email, phone, notes, language } = client;
+      this.form.reset({ name, kind, isCompany, email, phone, notes, language });
     }
   }
 
@@ -160,6 +176,7 @@ export class ClientForm implements OnInit {
       email: v.email.trim(),
       phone: v.phone.trim(),
       notes: v.notes.trim(),
+      language: v.language,
     };
   }
 }
