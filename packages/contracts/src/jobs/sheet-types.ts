@@ -107,6 +107,11 @@ export interface SheetRoom {
 export interface SheetCautionLine {
   readonly key: CautionWordKey | null;
   readonly params: Readonly<Record<string, string>>;
+  /**
+   * a list whose entries have words of their own (each flammable product with its category and flash
+   * point): translate each item, join them with ", " and use that as the list param (`products`)
+   */
+  readonly items?: readonly SheetCautionLine[];
 }
 
 /**

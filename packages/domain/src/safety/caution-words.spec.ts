@@ -59,7 +59,35 @@ describe('caution words by key', () => {
     expect(byId.get('flammable-liquid')?.lines[0]).toEqual({
       key: 'flammable-liquid.products',
       params: { products: 'Isopropyl alcohol (category 1 or 2, flash point 12 °C)' }, // 29 CFR 1910.106(a)(19)(i)–(ii)
+      items: [
+        { key: 'flammable-liquid.productCategories', params: { name: 'Isopropyl alcohol', first: '1', second: '2', flashPoint: '12' } },
+      ],
     });
+  });
+
+  it('each flammable product is an item with its own words, joined into the English list', () => {
+    const [c] = safetyCautions({
+      ...EVERYTHING,
+      yearBuilt: undefined,
+      workingLevel: 0,
+      sandsPlaster: false,
+      products: [
+        { name: 'Thinner, fast', flashPointC: 12, boilingPointC: 30 }, // category 1: boils at or below 35 °C, 29 CFR 1910.106(a)(19)(i)
+        { name: 'Mineral spirits', flashPointC: 40 }, // category 3: 23–60 °C, (a)(19)(iii)
+        { name: 'Oil glaze', flashPointC: 70.5 }, // category 4: above 60 up to 93 °C, (a)(19)(iv)
+      ],
+    });
+    const items = c.lines[0].items ?? [];
+    expect(items.map((i) => [i.key, i.params])).toEqual([
+      ['flammable-liquid.product', { name: 'Thinner, fast', category: '1', flashPoint: '12' }],
+      ['flammable-liquid.product', { name: 'Mineral spirits', category: '3', flashPoint: '40' }],
+      ['flammable-liquid.product', { name: 'Oil glaze', category: '4', flashPoint: '70.5' }],
+    ]);
+    expect(c.lines[0].params['products']).toBe(items.map(cautionText).join(', '));
+    expect(c.bullets[0]).toBe(
+      'Flammable: Thinner, fast (category 1, flash point 12 °C), Mineral spirits (category 3, flash point 40 °C), Oil glaze (category 4, flash point 70.5 °C).',
+    );
+    expect(cautionLineOf(c.bullets[0])).toEqual(c.lines[0]);
   });
 
   it.each([

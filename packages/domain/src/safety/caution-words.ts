@@ -36,8 +36,12 @@ export const CAUTION_WORDS = {
 
   'flammable-liquid.title': 'Flammable liquids in the mix',
   'flammable-liquid.rule': '29 CFR 1910.106(a)(19) (flash point at or below 93 °C / 199.4 °F)',
-  /** products: "Isopropyl alcohol (category 1 or 2, flash point 12 °C), …" */
+  /** products: "Isopropyl alcohol (category 1 or 2, flash point 12 °C), …" — each item below, joined by ", " */
   'flammable-liquid.products': 'Flammable: {{products}}.',
+  /** one product of that list (an item of the line, not a line) */
+  'flammable-liquid.product': '{{name}} (category {{category}}, flash point {{flashPoint}} °C)',
+  /** one product whose boiling point is unknown below 23 °C: category 1 or 2 (29 CFR 1910.106(a)(19)(i)–(ii)) */
+  'flammable-liquid.productCategories': '{{name}} (category {{first}} or {{second}}, flash point {{flashPoint}} °C)',
   'flammable-liquid.noFlames':
     'No open flames, pilot lights or sparks; ventilate; keep containers closed. Vapours can be heavier than air and travel to an ignition source.',
 
@@ -75,11 +79,20 @@ export const CAUTION_WORDS = {
 
 export type CautionWordKey = keyof typeof CAUTION_WORDS;
 
-/** One line of a caution as a key and the words it inserts (product lists, a year). */
+/**
+ * One line of a caution as a key and the words it inserts (product lists, a year). A list whose
+ * entries have words of their own (the flammable products, each with its category and flash point)
+ * also gives them as `items`: a translation renders each item and joins them with ", " as the list
+ * param (`products`); the English param is exactly that join in English.
+ */
 export interface CautionLine {
   key: CautionWordKey;
   params: Record<string, string>;
+  items?: CautionLine[];
 }
+
+/** Keys of list items: words inside a line, never a line by themselves. */
+const ITEM_KEYS: ReadonlySet<CautionWordKey> = new Set(['flammable-liquid.product', 'flammable-liquid.productCategories']);
 
 /** The English text of a line: its template with each `{{param}}` replaced. */
 export function cautionText(line: { readonly key: CautionWordKey; readonly params: Readonly<Record<string, string>> }): string {
@@ -92,7 +105,7 @@ const escapeRegExp = (s: string): string => s.replace(/[.*+?^${}()|[\]\\]/g, '\\
 const LINE_PATTERNS: ReadonlyArray<{ key: CautionWordKey; pattern: RegExp; names: string[] }> = (
   Object.keys(CAUTION_WORDS) as CautionWordKey[]
 )
-  .filter((key) => !/\.(title|rule)$/.test(key) && !key.startsWith('jurisdiction.') && key !== 'standing')
+  .filter((key) => !/\.(title|rule)$/.test(key) && !key.startsWith('jurisdiction.') && key !== 'standing' && !ITEM_KEYS.has(key))
   .map((key) => {
     const names: string[] = [];
     const source = CAUTION_WORDS[key]
@@ -115,7 +128,41 @@ const LINE_PATTERNS: ReadonlyArray<{ key: CautionWordKey; pattern: RegExp; names
 export function cautionLineOf(bullet: string): CautionLine | null {
   for (const { key, pattern, names } of LINE_PATTERNS) {
     const m = pattern.exec(bullet);
-    if (m) return { key, params: Object.fromEntries(names.map((n, i) => [n, m[i + 1]])) };
+    if (!m) continue;
+    const params = Object.fromEntries(names.map((n, i) => [n, m[i + 1]]));
+    const items = key === 'flammable-liquid.products' ? flammableItemsOf(params['products']) : null;
+    return items ? { key, params, items } : { key, params };
   }
   return null;
+}
+
+/** One entry of the English list, read from where the last one ended (a name may hold commas). */
+const FLAMMABLE_ITEM = /(.+?) \(category (\d)(?: or (\d))?, flash point (-?\d+(?:\.\d+)?) °C\)(?:, |$)/sy;
+
+/** The flammable products of an English list, or null when an entry is not in the engine's words. */
+function flammableItemsOf(list: string): CautionLine[] | null {
+  const items: CautionLine[] = [];
+  const pattern = new RegExp(FLAMMABLE_ITEM);
+  while (pattern.lastIndex < list.length) {
+    const m = pattern.exec(list);
+    if (!m) return null;
+    const [, name, first, second, flashPoint] = m;
+    items.push(
+      second === undefined
+        ? { key: 'flammable-liquid.product', params: { name, category: first, flashPoint } }
+        : { key: 'flammable-liquid.productCategories', params: { name, first, second, flashPoint } },
+    );
+  }
+  return items.length > 0 ? items : null;
+}
+
+/** A flammable product as a list item: its category (or the two it may be) and its flash point. */
+export function flammableItem(name: string, categories: readonly number[], flashPointC: number): CautionLine {
+  const flashPoint = String(flashPointC);
+  return categories.length === 2
+    ? {
+        key: 'flammable-liquid.productCategories',
+        params: { name, first: String(categories[0]), second: String(categories[1]), flashPoint },
+      }
+    : { key: 'flammable-liquid.product', params: { name, category: String(categories[0]), flashPoint } };
 }

@@ -1,6 +1,6 @@
 import { requireFiniteNumber, requireInteger, requireNonNegative } from '../errors/input-checks';
 import { type LengthUnit, convertArea, convertLength } from '../units/length';
-import { CAUTION_WORDS, type CautionLine, type CautionWordKey, cautionText } from './caution-words';
+import { CAUTION_WORDS, type CautionLine, type CautionWordKey, cautionText, flammableItem } from './caution-words';
 import { type FlammableClass, flammableClass } from './flammable';
 
 export type CautionId =
@@ -162,12 +162,13 @@ export function safetyCautions(facts: SafetyFacts): Caution[] {
 
   const flammable = facts.products.flatMap((p, i) => {
     const cls: FlammableClass | null = flammableClass(p.flashPointC, p.boilingPointC, `products[${i}].flashPointC`);
-    return cls ? [`${p.name} (${cls.label}, flash point ${p.flashPointC} °C)`] : [];
+    return cls && p.flashPointC !== undefined ? [flammableItem(p.name, cls.categories, p.flashPointC)] : [];
   });
   if (flammable.length > 0) {
+    const products = flammable.map(cautionText).join(', ');
     out.push(
       caution('flammable-liquid', [
-        line('flammable-liquid.products', { products: flammable.join(', ') }),
+        { ...line('flammable-liquid.products', { products }), items: flammable },
         line('flammable-liquid.noFlames'),
       ]),
     );
