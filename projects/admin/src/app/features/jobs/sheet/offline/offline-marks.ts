@@ -1,8 +1,6 @@
-import { HttpClient, HttpErrorResponse } from '@angular/common/http';
 import { isPlatformBrowser } from '@angular/common';
 import { DestroyRef, Injectable, Injector, PLATFORM_ID, type Signal, computed, effect, inject, signal } from '@angular/core';
-import type { JobProgressView, ProgressMark, StaffSession } from '@layerbook/contracts/types';
-import { firstValueFrom } from 'rxjs';
+import type { JobProgressView } from '@layerbook/contracts/types';
 import { Session } from '../../../../core/auth/session';
 import {
   type LayerMarkKind,
@@ -16,6 +14,8 @@ import {
   refuse,
   withoutMark,
 } from './mark-queue';
+import { listenAll } from './listen';
+import { isProgressView, MarkSender } from './mark-sender';
 import { MarkStore } from './mark-store';
 import { OfflineCopies } from './offline-copies';
 
@@ -40,7 +40,7 @@ export class MarkRefused extends Error {
  */
 @Injectable({ providedIn: 'root' })
 export class OfflineMarks {
-  private readonly http = inject(HttpClient);
+  private readonly sender = inject(MarkSender);
   private readonly session = inject(Session);
   private readonly store = inject(MarkStore);
   private readonly copies = inject(OfflineCopies);
@@ -104,9 +104,9 @@ export class OfflineMarks {
     if (!owner) throw new Error('Sign in to mark progress.');
     const { queue, mark } = addMark(this.queue(), { owner, jobId, workItemId, kind, on }, { clientKey: newClientKey(), madeAt: nowIso() });
     if (queue !== this.queue()) {
-      this.setQueue(queue);
+      this.queue.set(queue);
       if (this.browser && !this.store.write(queue) && !this.connected()) {
-        this.setQueue(withoutMark(queue, mark.clientKey));
+        this.queue.set(withoutMark(queue, mark.clientKey));
         throw new Error('This phone could not keep the mark: free some space and try again.');
       }
     }
@@ -139,18 +139,22 @@ export class OfflineMarks {
       this.retries = 0;
       void this.flush();
     };
-    const offline = () => this.connected.set(false);
     const visible = () => {
       if (document.visibilityState === 'visible' && this.connected()) void this.flush();
     };
-    window.addEventListener('online', online);
-    window.addEventListener('offline', offline);
-    document.addEventListener('visibilitychange', visible);
+    // The service worker took charge of the page (first visit): have it keep what the page read before.
+    const controlled = () => {
+      if (this.owner()) void this.copies.warm(location.pathname);
+    };
+    const unlisten = listenAll([
+      [window, 'online', online],
+      [window, 'offline', () => this.connected.set(false)],
+      [document, 'visibilitychange', visible],
+      ['serviceWorker' in navigator ? navigator.serviceWorker : null, 'controllerchange', controlled],
+    ]);
     const unwatch = this.store.watch((queue) => this.queue.set(queue));
     this.injector.get(DestroyRef).onDestroy(() => {
-      window.removeEventListener('online', online);
-      window.removeEventListener('offline', offline);
-      document.removeEventListener('visibilitychange', visible);
+      unlisten();
       unwatch();
       this.clearRetry();
     });
@@ -173,7 +177,8 @@ export class OfflineMarks {
       const owner = this.owner();
       const next = owner ? nextToSend(this.queue(), owner) : undefined;
       if (!next || !this.connected()) return;
-      const { status, body } = await this.send(next);
+      const { status, body } = await this.sender.post(next);
+      if (status === 0) this.connected.set(navigator.onLine);
       const outcome = outcomeOf(status);
       if (outcome === 'sent') {
         this.retries = 0;
@@ -191,31 +196,15 @@ export class OfflineMarks {
     }
   }
 
-  private async send(mark: QueuedMark): Promise<{ status: number; body: unknown }> {
-    const body: ProgressMark = { kind: mark.kind, workItemId: mark.workItemId, on: mark.on, clientKey: mark.clientKey };
-    try {
-      const res = await firstValueFrom(
-        this.http.post<JobProgressView>(`/api/jobs/${encodeURIComponent(mark.jobId)}/progress`, body, { observe: 'response' }),
-      );
-      return { status: res.status, body: res.body };
-    } catch (error) {
-      if (error instanceof HttpErrorResponse) {
-        if (error.status === 0) this.connected.set(typeof navigator === 'undefined' ? false : navigator.onLine);
-        return { status: error.status, body: error.error };
-      }
-      return { status: 0, body: null };
-    }
-  }
-
-  /** A fresh session answer (and with it a fresh CSRF token, kept by the API interceptor). */
+  /** A fresh session answer, with a fresh CSRF token; false when nobody is signed in or no answer came. */
   private async refreshSession(): Promise<boolean> {
-    try {
-      this.session.accept(await firstValueFrom(this.http.get<StaffSession>('/api/auth/session')));
-      return this.owner() !== null;
-    } catch {
+    const session = await this.sender.session();
+    if (!session) {
       this.retryLater();
       return false;
     }
+    this.session.accept(session);
+    return this.owner() !== null;
   }
 
   private retryLater(): void {
@@ -235,12 +224,8 @@ export class OfflineMarks {
   }
 
   private update(queue: readonly QueuedMark[]): void {
-    this.setQueue(queue);
-    if (this.browser) this.store.write(queue);
-  }
-
-  private setQueue(queue: readonly QueuedMark[]): void {
     this.queue.set(queue);
+    if (this.browser) this.store.write(queue);
   }
 }
 
@@ -250,8 +235,4 @@ function nowIso(): string {
 
 function sameMarks(a: readonly QueuedMark[], b: readonly QueuedMark[]): boolean {
   return a.length === b.length && a.every((mark, i) => mark === b[i]);
-}
-
-function isProgressView(body: unknown): body is JobProgressView {
-  return typeof body === 'object' && body !== null && Array.isArray((body as { workItems?: unknown }).workItems);
 }
