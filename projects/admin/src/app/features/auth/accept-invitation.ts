@@ -17,8 +17,8 @@ import { toProblem } from '../../core/errors/problem';
 import { HOME_URL } from '../../core/auth/guards';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
-import { errorText } from '../../shared/forms/error-text';
-import { NAME_WORDS, NEW_PASSWORD_WORDS } from '../../shared/forms/field-words';
+import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
+import { NAME_ERRORS, NEW_PASSWORD_ERRORS } from '../../shared/forms/field-words';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { RevealPassword } from '../../shared/ui/reveal-password';
@@ -29,6 +29,7 @@ import { TranslatePipe } from '@ngx-translate/core';
 @Component({
   selector: 'lb-accept-invitation',
   imports: [
+    FieldErrorPipe,
     TranslatePipe,
     AuthFrame,
     FormAlert,
@@ -65,9 +66,8 @@ export class AcceptInvitation {
     password: ['', [Validators.required, Validators.minLength(PASSWORD_MIN_LENGTH), Validators.maxLength(PASSWORD_MAX_LENGTH)]],
   });
   protected readonly submission = new Submission();
-  protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly words = { name: NAME_WORDS, password: NEW_PASSWORD_WORDS };
+  protected readonly words = { name: NAME_ERRORS, password: NEW_PASSWORD_ERRORS };
 
   protected async joinTeam(): Promise<void> {
     const token = this.token();

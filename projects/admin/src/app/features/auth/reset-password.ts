@@ -9,8 +9,8 @@ import { toProblem } from '../../core/errors/problem';
 import { HOME_URL } from '../../core/auth/guards';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
-import { errorText } from '../../shared/forms/error-text';
-import { NEW_PASSWORD_WORDS } from '../../shared/forms/field-words';
+import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
+import { NEW_PASSWORD_ERRORS } from '../../shared/forms/field-words';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { RevealPassword } from '../../shared/ui/reveal-password';
 import { AuthFrame } from './auth-frame';
@@ -20,6 +20,7 @@ import { TranslatePipe } from '@ngx-translate/core';
 @Component({
   selector: 'lb-reset-password',
   imports: [
+    FieldErrorPipe,
     TranslatePipe,
     AuthFrame,
     FormAlert,
@@ -47,9 +48,8 @@ export class ResetPassword {
   protected readonly submission = new Submission();
   /** Expired, used or unknown links cannot be fixed on this page; offer a new one instead. */
   protected readonly isLinkDead = signal(false);
-  protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly words = { password: NEW_PASSWORD_WORDS };
+  protected readonly words = { password: NEW_PASSWORD_ERRORS };
 
   protected async saveNewPassword(): Promise<void> {
     const token = this.token();

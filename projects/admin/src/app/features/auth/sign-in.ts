@@ -8,8 +8,8 @@ import { EMAIL_MAX_LENGTH, PASSWORD_MAX_LENGTH } from '@layerbook/contracts/type
 import { safeNextUrl } from '../../core/auth/guards';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
-import { errorText } from '../../shared/forms/error-text';
-import { EMAIL_WORDS } from '../../shared/forms/field-words';
+import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
+import { EMAIL_ERRORS } from '../../shared/forms/field-words';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { RevealPassword } from '../../shared/ui/reveal-password';
@@ -20,6 +20,7 @@ import { TranslatePipe } from '@ngx-translate/core';
 @Component({
   selector: 'lb-sign-in',
   imports: [
+    FieldErrorPipe,
     TranslatePipe,
     AuthFrame,
     FormAlert,
@@ -45,14 +46,11 @@ export class SignIn {
     password: ['', [Validators.required, Validators.maxLength(PASSWORD_MAX_LENGTH)]],
   });
   protected readonly submission = new Submission();
-  protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
   protected readonly words = {
-    email: EMAIL_WORDS,
-    password: { required: 'auth.signIn.passwordRequired', maxlength: 'auth.fields.atMost' },
+    email: EMAIL_ERRORS,
+    password: { required: 'auth.signIn.passwordRequired', maxlength: { key: 'auth.fields.atMost', params: { max: PASSWORD_MAX_LENGTH } } },
   };
-
-  protected readonly passwordMax = PASSWORD_MAX_LENGTH;
 
   protected async signIn(): Promise<void> {
     const { email, password } = this.form.getRawValue();

@@ -15,8 +15,8 @@ import {
 } from '@layerbook/contracts/types';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
-import { errorText } from '../../shared/forms/error-text';
-import { EMAIL_WORDS, NAME_WORDS, NEW_PASSWORD_WORDS } from '../../shared/forms/field-words';
+import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
+import { EMAIL_ERRORS, NAME_ERRORS, NEW_PASSWORD_ERRORS } from '../../shared/forms/field-words';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { RevealPassword } from '../../shared/ui/reveal-password';
@@ -27,6 +27,7 @@ import { TranslatePipe } from '@ngx-translate/core';
 @Component({
   selector: 'lb-sign-up',
   imports: [
+    FieldErrorPipe,
     TranslatePipe,
     AuthFrame,
     FormAlert,
@@ -54,20 +55,17 @@ export class SignUp {
     password: ['', [Validators.required, Validators.minLength(PASSWORD_MIN_LENGTH), Validators.maxLength(PASSWORD_MAX_LENGTH)]],
   });
   protected readonly submission = new Submission();
-  protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
   protected readonly words = {
     firmName: {
       required: 'auth.signUp.firmNameRequired',
       minlength: 'auth.signUp.firmNameRequired',
-      maxlength: 'auth.fields.atMost',
+      maxlength: { key: 'auth.fields.atMost', params: { max: FIRM_NAME_MAX_LENGTH } },
     },
-    name: NAME_WORDS,
-    email: EMAIL_WORDS,
-    password: NEW_PASSWORD_WORDS,
+    name: NAME_ERRORS,
+    email: EMAIL_ERRORS,
+    password: NEW_PASSWORD_ERRORS,
   };
-
-  protected readonly firmNameMax = FIRM_NAME_MAX_LENGTH;
 
   protected async createFirm(): Promise<void> {
     const { firmName, name, email, password } = this.form.getRawValue();

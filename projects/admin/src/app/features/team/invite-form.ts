@@ -5,8 +5,8 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { EMAIL_MAX_LENGTH, INVITATION_DAYS, STAFF_ROLES, type StaffRole, type TeamInvitation } from '@layerbook/contracts/types';
-import { errorText } from '../../shared/forms/error-text';
-import { EMAIL_WORDS } from '../../shared/forms/field-words';
+import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
+import { EMAIL_ERRORS } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -16,7 +16,16 @@ import { TranslatePipe } from '@ngx-translate/core';
 
 @Component({
   selector: 'lb-invite-form',
-  imports: [TranslatePipe, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [
+    FieldErrorPipe,
+    TranslatePipe,
+    FormAlert,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+  ],
   templateUrl: './invite-form.html',
   styleUrl: './invite-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -34,9 +43,8 @@ export class InviteForm {
     role: this.fb.control<StaffRole>('crew', Validators.required),
   });
   protected readonly submission = new Submission();
-  protected readonly errorText = errorText;
   protected readonly isHydrated = hydratedSignal();
-  protected readonly words = { email: EMAIL_WORDS, role: { required: 'team.inviteForm.roleRequired' } };
+  protected readonly words = { email: EMAIL_ERRORS, role: { required: 'team.inviteForm.roleRequired' } };
 
   protected async sendInvitation(): Promise<void> {
     const { email, role } = this.form.getRawValue();

@@ -1,7 +1,15 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { InvitationCreate, MemberRoleUpdate, StaffRole, TeamInvitation, TeamMember } from '@layerbook/contracts/types';
+import type {
+  InvitationCreate,
+  Language,
+  LanguageChoice,
+  MemberRoleUpdate,
+  StaffRole,
+  TeamInvitation,
+  TeamMember,
+} from '@layerbook/contracts/types';
 
 /** The owner's changes to the team; the lists are resources in the team page. */
 @Injectable({ providedIn: 'root' })
@@ -19,6 +27,12 @@ export class TeamApi {
   changeRole(memberId: string, role: StaffRole): Promise<TeamMember> {
     const body: MemberRoleUpdate = { role };
     return firstValueFrom(this.http.patch<TeamMember>(memberUrl(memberId), body));
+  }
+
+  /** The member's e-mails and screens in this language; null follows the firm's (owner only). */
+  changeLanguage(memberId: string, language: Language | null): Promise<TeamMember> {
+    const body: LanguageChoice = { language };
+    return firstValueFrom(this.http.patch<TeamMember>(`${memberUrl(memberId)}/language`, body));
   }
 
   deactivate(memberId: string): Promise<TeamMember> {

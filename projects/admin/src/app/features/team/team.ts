@@ -6,7 +6,14 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { STAFF_ROLES, type ItemList, type StaffRole, type TeamInvitation, type TeamMember } from '@layerbook/contracts/types';
+import {
+  STAFF_ROLES,
+  type ItemList,
+  type Language as LanguageCode,
+  type StaffRole,
+  type TeamInvitation,
+  type TeamMember,
+} from '@layerbook/contracts/types';
 import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { firstValueFrom } from 'rxjs';
 import { LbDatePipe } from '../../../../../shared/i18n/format';
@@ -33,6 +40,12 @@ export class Team {
 
   protected readonly isOwner = inject(Session).isOwner;
   protected readonly roles = STAFF_ROLES;
+  /** A member's own language, or null to follow the firm's (language names are each language's own). */
+  protected readonly languageChoices: readonly { value: LanguageCode | null; label: string }[] = [
+    { value: null, label: 'team.team.firmLanguage' },
+    { value: 'en', label: 'common.languageNames.en' },
+    { value: 'es', label: 'common.languageNames.es' },
+  ];
 
   private readonly memberList = httpResource<ItemList<TeamMember>>(() => '/api/team/members');
   private readonly invitationList = httpResource<ItemList<TeamInvitation>>(() => '/api/team/invitations');
@@ -56,6 +69,14 @@ export class Team {
       // The list reloads with the same role, which would leave the refused choice showing.
       select.writeValue(member.role);
     }
+  }
+
+  protected async changeLanguage(select: MatSelect, member: TeamMember, language: LanguageCode | null): Promise<void> {
+    const changed = await this.act(
+      () => this.api.changeLanguage(member.id, language),
+      this.words('team.team.languageChanged', { name: member.name }),
+    );
+    if (!changed) select.writeValue(member.language);
   }
 
   protected async deactivate(member: TeamMember): Promise<void> {
