@@ -153,8 +153,8 @@ export {
   safetyCautions,
   treatedAsTargetHousing,
 } from './safety/safety-cautions';
-export type { CautionLine, CautionWordKey } from './safety/caution-words';
-export { CAUTION_WORDS, cautionLineOf, cautionText } from './safety/caution-words';
+export type { CautionItem, CautionItemKey, CautionLine, CautionWordKey } from './safety/caution-words';
+export { CAUTION_ITEM_WORDS, CAUTION_WORDS, cautionLineOf, cautionText } from './safety/caution-words';
 export { unpricedScaffoldWarning } from './safety/scaffold-pricing';
 export type { FlammableCategory, FlammableClass } from './safety/flammable';
 export { FLAMMABLE_FLASH_MAX_C, flammableClass } from './safety/flammable';

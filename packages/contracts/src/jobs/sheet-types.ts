@@ -1,5 +1,6 @@
 import type {
   CautionId,
+  CautionItemKey,
   CautionWordKey,
   Coverage,
   Dilution,
@@ -111,7 +112,7 @@ export interface SheetCautionLine {
    * a list whose entries have words of their own (each flammable product with its category and flash
    * point): translate each item, join them with ", " and use that as the list param (`products`)
    */
-  readonly items?: readonly SheetCautionLine[];
+  readonly items?: ReadonlyArray<{ readonly key: CautionItemKey; readonly params: Readonly<Record<string, string>> }>;
 }
 
 /**

@@ -38,10 +38,6 @@ export const CAUTION_WORDS = {
   'flammable-liquid.rule': '29 CFR 1910.106(a)(19) (flash point at or below 93 °C / 199.4 °F)',
   /** products: "Isopropyl alcohol (category 1 or 2, flash point 12 °C), …" — each item below, joined by ", " */
   'flammable-liquid.products': 'Flammable: {{products}}.',
-  /** one product of that list (an item of the line, not a line) */
-  'flammable-liquid.product': '{{name}} (category {{category}}, flash point {{flashPoint}} °C)',
-  /** one product whose boiling point is unknown below 23 °C: category 1 or 2 (29 CFR 1910.106(a)(19)(i)–(ii)) */
-  'flammable-liquid.productCategories': '{{name}} (category {{first}} or {{second}}, flash point {{flashPoint}} °C)',
   'flammable-liquid.noFlames':
     'No open flames, pilot lights or sparks; ventilate; keep containers closed. Vapours can be heavier than air and travel to an ignition source.',
 
@@ -80,6 +76,25 @@ export const CAUTION_WORDS = {
 export type CautionWordKey = keyof typeof CAUTION_WORDS;
 
 /**
+ * Words of list entries inside a line (never a line by themselves), kept apart from CAUTION_WORDS so
+ * that table stays exactly the lines' words; a catalog may add them under the same keys.
+ */
+export const CAUTION_ITEM_WORDS = {
+  /** one flammable product: its category and flash point (29 CFR 1910.106(a)(19)) */
+  'flammable-liquid.product': '{{name}} (category {{category}}, flash point {{flashPoint}} °C)',
+  /** one flammable product whose boiling point is unknown below 23 °C: category 1 or 2 ((a)(19)(i)–(ii)) */
+  'flammable-liquid.productCategories': '{{name}} (category {{first}} or {{second}}, flash point {{flashPoint}} °C)',
+} as const;
+
+export type CautionItemKey = keyof typeof CAUTION_ITEM_WORDS;
+
+/** One entry of a list inside a line. */
+export interface CautionItem {
+  key: CautionItemKey;
+  params: Record<string, string>;
+}
+
+/**
  * One line of a caution as a key and the words it inserts (product lists, a year). A list whose
  * entries have words of their own (the flammable products, each with its category and flash point)
  * also gives them as `items`: a translation renders each item and joins them with ", " as the list
@@ -88,15 +103,17 @@ export type CautionWordKey = keyof typeof CAUTION_WORDS;
 export interface CautionLine {
   key: CautionWordKey;
   params: Record<string, string>;
-  items?: CautionLine[];
+  items?: CautionItem[];
 }
 
-/** Keys of list items: words inside a line, never a line by themselves. */
-const ITEM_KEYS: ReadonlySet<CautionWordKey> = new Set(['flammable-liquid.product', 'flammable-liquid.productCategories']);
-
 /** The English text of a line: its template with each `{{param}}` replaced. */
-export function cautionText(line: { readonly key: CautionWordKey; readonly params: Readonly<Record<string, string>> }): string {
-  return CAUTION_WORDS[line.key].replace(/\{\{(\w+)\}\}/g, (_, name: string) => line.params[name] ?? '');
+export function cautionText(line: {
+  readonly key: CautionWordKey | CautionItemKey;
+  readonly params: Readonly<Record<string, string>>;
+}): string {
+  const words: string =
+    line.key in CAUTION_ITEM_WORDS ? CAUTION_ITEM_WORDS[line.key as CautionItemKey] : CAUTION_WORDS[line.key as CautionWordKey];
+  return words.replace(/\{\{(\w+)\}\}/g, (_, name: string) => line.params[name] ?? '');
 }
 
 const escapeRegExp = (s: string): string => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
@@ -105,7 +122,7 @@ const escapeRegExp = (s: string): string => s.replace(/[.*+?^${}()|[\]\\]/g, '\\
 const LINE_PATTERNS: ReadonlyArray<{ key: CautionWordKey; pattern: RegExp; names: string[] }> = (
   Object.keys(CAUTION_WORDS) as CautionWordKey[]
 )
-  .filter((key) => !/\.(title|rule)$/.test(key) && !key.startsWith('jurisdiction.') && key !== 'standing' && !ITEM_KEYS.has(key))
+  .filter((key) => !/\.(title|rule)$/.test(key) && !key.startsWith('jurisdiction.') && key !== 'standing')
   .map((key) => {
     const names: string[] = [];
     const source = CAUTION_WORDS[key]
@@ -140,8 +157,8 @@ export function cautionLineOf(bullet: string): CautionLine | null {
 const FLAMMABLE_ITEM = /(.+?) \(category (\d)(?: or (\d))?, flash point (-?\d+(?:\.\d+)?) °C\)(?:, |$)/sy;
 
 /** The flammable products of an English list, or null when an entry is not in the engine's words. */
-function flammableItemsOf(list: string): CautionLine[] | null {
-  const items: CautionLine[] = [];
+function flammableItemsOf(list: string): CautionItem[] | null {
+  const items: CautionItem[] = [];
   const pattern = new RegExp(FLAMMABLE_ITEM);
   while (pattern.lastIndex < list.length) {
     const m = pattern.exec(list);
@@ -157,7 +174,7 @@ function flammableItemsOf(list: string): CautionLine[] | null {
 }
 
 /** A flammable product as a list item: its category (or the two it may be) and its flash point. */
-export function flammableItem(name: string, categories: readonly number[], flashPointC: number): CautionLine {
+export function flammableItem(name: string, categories: readonly number[], flashPointC: number): CautionItem {
   const flashPoint = String(flashPointC);
   return categories.length === 2
     ? {
