@@ -6,12 +6,12 @@ import { RouterLink } from '@angular/router';
 import { TranslatePipe } from '@ngx-translate/core';
 import type { JobSheet } from '@layerbook/contracts/types';
 import { Language } from '../../../../../../shared/i18n/language';
-import { PhotoGallery, type GalleryPhoto } from '../../../../../../shared/photos/photo-gallery';
 import { problemMessage } from '../../../core/errors/problem';
 import { FormAlert } from '../../../shared/ui/form-alert';
 import { formatDay } from './sheet-format';
 import { SheetFinishes } from './sheet-finishes';
 import { SHEET_MARKS } from './sheet-marks';
+import { SheetPhotos } from './sheet-photos';
 import { SheetPlan } from './sheet-plan';
 import { SheetSafety } from './sheet-safety';
 import { SheetWork } from './sheet-work';
@@ -28,9 +28,9 @@ const jobUrl = (id: string, rest: string) => `/api/jobs/${encodeURIComponent(id)
     FormAlert,
     MatIconModule,
     MatProgressBarModule,
-    PhotoGallery,
     RouterLink,
     SheetFinishes,
+    SheetPhotos,
     SheetPlan,
     SheetSafety,
     SheetWork,
@@ -91,16 +91,7 @@ const jobUrl = (id: string, rest: string) => `/api/jobs/${encodeURIComponent(id)
         </section>
 
         <section id="sheet-photos">
-          <lb-photo-gallery
-            [subject]="s.title"
-            heading="sheet.photos.heading"
-            [(photos)]="photos"
-            [uploadUrl]="photosUrl()"
-            [deleteBase]="photosUrl()"
-            [useCamera]="true"
-            [thumbHeight]="96"
-            emptyText="sheet.photos.empty"
-          />
+          <lb-sheet-photos [sheet]="s" />
         </section>
       }
     </section>
@@ -193,8 +184,6 @@ export class SheetPage {
     source: () => (this.sheet.hasValue() ? this.sheet.value() : null),
     computation: (next, previous) => next ?? previous?.value ?? null,
   });
-  protected readonly photos = linkedSignal<readonly GalleryPhoto[]>(() => this.view()?.photos ?? []);
-  protected readonly photosUrl = computed(() => jobUrl(this.id(), 'photos'));
   protected readonly message = computed(() => {
     const error = this.sheet.error();
     return error ? problemMessage(error) : null;
