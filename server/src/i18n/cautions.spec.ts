@@ -42,8 +42,14 @@ const EVERYTHING: SafetyFacts = {
 };
 
 describe('caution words (projects/shared/i18n/words/cautions)', () => {
-  it('the English file is exactly the domain table, key for key and word for word', () => {
-    expect(flatten(cautionsEn)).toEqual({ ...CAUTION_WORDS });
+  it('the English file is exactly the domain’s words, key for key and word for word (lines, and the entries of a list)', () => {
+    const en = flatten(cautionsEn);
+    for (const key of Object.keys(CAUTION_WORDS)) expect(Object.keys(en)).toContain(key);
+    // Each template rendered with its own placeholders gives itself back: cautionText knows the key and says exactly this.
+    for (const [key, words] of Object.entries(en)) {
+      const params = Object.fromEntries(placeholders(words).map((p) => [p, `{{${p}}}`]));
+      expect([key, cautionText({ key: key as Parameters<typeof cautionText>[0]['key'], params })]).toEqual([key, words]);
+    }
   });
 
   it('the Spanish file has every key, with the same placeholders, and no extra keys', () => {
@@ -62,6 +68,10 @@ describe('caution words (projects/shared/i18n/words/cautions)', () => {
     for (const key of Object.keys(CAUTION_WORDS) as CautionWordKey[]) {
       expect(t(`cautions.${key}`, params)).toBe(cautionText({ key, params }));
     }
+    const flammable = safetyCautions(EVERYTHING).find((c) => c.id === 'flammable-liquid')!;
+    expect(cautionIn('es', flammable).bullets[0]).toMatch(
+      /^Inflamables: Solvent wash \(categoría \d(?: o \d)?, punto de inflamación 12 °C\)\.$/,
+    );
   });
 
   it.each(['US', 'CA'])('every caution the engine raises (firm in %s) renders in English exactly as the engine wrote it', (firmCountry) => {

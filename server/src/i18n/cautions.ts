@@ -13,9 +13,16 @@ export interface KeyedCaution {
   readonly standing?: string;
   readonly titleKey?: string;
   readonly ruleKey?: string;
-  readonly lines?: ReadonlyArray<{ readonly key: string; readonly params: Readonly<Record<string, string>> }>;
+  readonly lines?: ReadonlyArray<KeyedLine>;
   readonly jurisdictionKeys?: readonly string[];
   readonly standingKey?: string;
+}
+
+/** One line by key; a list inside it whose entries have words of their own (flammable products) also gives `items`. */
+interface KeyedLine {
+  readonly key: string;
+  readonly params: Readonly<Record<string, string>>;
+  readonly items?: ReadonlyArray<{ readonly key: string; readonly params: Readonly<Record<string, string>> }>;
 }
 
 /** The words of a caution as a reader sees them. */
@@ -38,8 +45,11 @@ export function cautionIn(language: Language, c: KeyedCaution): CautionWordsOut 
   const t = translator(language);
   const cautionKey = (key: string) => `cautions.${key}`;
   const bullets = c.bullets.map((bullet, i) => {
-    const line = keyedLine(c.lines?.[i], bullet) ?? cautionLineOf(bullet);
-    return line ? t(cautionKey(line.key), line.params) : bullet;
+    const line: KeyedLine | null = keyedLine(c.lines?.[i], bullet) ?? cautionLineOf(bullet);
+    if (!line) return bullet;
+    // Each list entry in the reader's words, joined as the English list is (", ").
+    const products = line.items?.map((item) => t(cautionKey(item.key), item.params)).join(', ');
+    return t(cautionKey(line.key), products === undefined ? line.params : { ...line.params, products });
   });
   const own = (key: string | undefined, english: string): string => {
     const found = key ?? keyOfText(english);
@@ -86,10 +96,7 @@ const isWordKey = (key: string): key is CautionWordKey => Object.hasOwn(CAUTION_
  * out office lines or merged options' bullets no longer lines up with its keys, and then each bullet
  * is read back on its own.
  */
-function keyedLine(
-  line: { readonly key: string; readonly params: Readonly<Record<string, string>> } | undefined,
-  bullet: string,
-): { key: string; params: Readonly<Record<string, string>> } | null {
+function keyedLine(line: KeyedLine | undefined, bullet: string): KeyedLine | null {
   if (!line || !isWordKey(line.key)) return null;
   return cautionText({ key: line.key, params: line.params }) === bullet ? line : null;
 }

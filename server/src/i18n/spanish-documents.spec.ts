@@ -64,7 +64,7 @@ describe('documents in the client’s language', () => {
         'FACTURA',
         'Número: INV-0001',
         'FACTURAR A',
-        'OBRA EN',
+        'TRABAJO EN',
         'Resumen',
         `Total de la factura ${usdEs('250.00')}`,
         `Pagado \u2212 ${usdEs('100.00')}`,
@@ -166,7 +166,7 @@ describe('e-mails in the reader’s language', () => {
     await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email: invitee, role: 'crew' });
     const invitation = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(invitee));
     expect(invitation.subject).toBe('Olive Owner le invitó a Llana Fina en Layerbook');
-    expect(invitation.text).toContain('Olive Owner le invitó a unirse a Llana Fina como parte del equipo de obra.');
+    expect(invitation.text).toContain('Olive Owner le invitó a unirse a Llana Fina como parte de la cuadrilla.');
     expect(invitation.text).toContain('Aceptar la invitación');
   });
 });
