@@ -11,6 +11,7 @@ import { provideTestI18n } from '../../../../../shared/i18n/testing';
 import today from '../../../i18n/today/en.json';
 import billing from '../../../i18n/billing/en.json';
 import payments from '../../../i18n/payments/en.json';
+import sheet from '../../../i18n/sheet/en.json';
 
 const overdueInvoice: InvoiceSummary = {
   id: 'inv-1',
@@ -73,7 +74,7 @@ function render(role: StaffRole): { text: () => string; html: () => HTMLElement;
       provideHttpClient(),
       provideHttpClientTesting(),
       provideRouter([]),
-      provideTestI18n({ today, billing, payments }),
+      provideTestI18n({ today, billing, payments, sheet }),
       { provide: Session, useValue: { hasRole: (needed: StaffRole) => needed === 'crew' || role !== 'crew' } },
     ],
   });
