@@ -48,4 +48,13 @@ describe('ClientForm language', () => {
     const request = TestBed.inject(HttpTestingController).expectOne('/api/clients');
     expect(request.request.body).toMatchObject({ name: 'Ida Marsh', language: sent });
   });
+
+  it('says what a field needs in the words of the area and the shared field errors', async () => {
+    const { fixture, host } = await render();
+    formOf(fixture.componentInstance).patchValue({ name: '', email: 'not-an-address' });
+    host.querySelector('form')!.dispatchEvent(new Event('submit'));
+    await fixture.whenStable();
+    expect(host.textContent).toContain('Enter the client name.');
+    expect(host.textContent).toContain('Enter a valid e-mail address, like name@example.com.');
+  });
 });

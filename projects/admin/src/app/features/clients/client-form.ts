@@ -19,8 +19,8 @@ import {
   type Language,
   type ClientSummary,
 } from '@layerbook/contracts/types';
-import { errorText } from '../../shared/forms/error-text';
-import { EMAIL_WORDS, tooLong } from '../../shared/forms/field-words';
+import { FieldErrorPipe, type FieldErrorWords } from '../../../../../shared/forms/field-error-pipe';
+import { EMAIL_ERRORS, tooLongError } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -31,6 +31,7 @@ import { ClientApi } from './client-api';
 @Component({
   selector: 'lb-client-form',
   imports: [
+    FieldErrorPipe,
     FormAlert,
     MatButtonModule,
     MatCheckboxModule,
@@ -53,7 +54,7 @@ import { ClientApi } from './client-api';
           <mat-label>{{ 'clients.clientForm.clientName' | translate }}</mat-label>
           <input matInput formControlName="name" autocomplete="off" required />
           <mat-hint>{{ 'clients.clientForm.clientNameHint' | translate }}</mat-hint>
-          <mat-error>{{ errorText(form.controls.name, words.name) }}</mat-error>
+          <mat-error>{{ form.controls.name | lbFieldError: words.name }}</mat-error>
         </mat-form-field>
         <mat-form-field>
           <mat-label>{{ 'clients.clientForm.kindOfClient' | translate }}</mat-label>
@@ -62,18 +63,18 @@ import { ClientApi } from './client-api';
               <mat-option [value]="kind">{{ kindLabels[kind] }}</mat-option>
             }
           </mat-select>
-          <mat-error>{{ errorText(form.controls.kind, words.kind) }}</mat-error>
+          <mat-error>{{ form.controls.kind | lbFieldError: words.kind }}</mat-error>
         </mat-form-field>
         <mat-checkbox formControlName="isCompany">{{ 'clients.clientForm.isCompany' | translate }}</mat-checkbox>
         <mat-form-field>
           <mat-label>{{ 'clients.clientForm.email' | translate }}</mat-label>
           <input matInput type="email" formControlName="email" autocomplete="off" />
-          <mat-error>{{ errorText(form.controls.email, words.email) }}</mat-error>
+          <mat-error>{{ form.controls.email | lbFieldError: words.email }}</mat-error>
         </mat-form-field>
         <mat-form-field>
           <mat-label>{{ 'clients.clientForm.phone' | translate }}</mat-label>
           <input matInput type="tel" formControlName="phone" autocomplete="off" />
-          <mat-error>{{ errorText(form.controls.phone, words.phone) }}</mat-error>
+          <mat-error>{{ form.controls.phone | lbFieldError: words.phone }}</mat-error>
         </mat-form-field>
         <mat-form-field>
           <mat-label>{{ 'clients.clientForm.language' | translate }}</mat-label>
@@ -84,13 +85,13 @@ import { ClientApi } from './client-api';
             }
           </mat-select>
           <mat-hint>{{ 'clients.clientForm.languageHint' | translate }}</mat-hint>
-          <mat-error>{{ errorText(form.controls.language, {}) }}</mat-error>
+          <mat-error>{{ form.controls.language | lbFieldError: {} }}</mat-error>
         </mat-form-field>
         <mat-form-field class="wide">
           <mat-label>{{ 'clients.clientForm.notes' | translate }}</mat-label>
           <textarea matInput formControlName="notes" rows="3"></textarea>
           <mat-hint>{{ 'clients.clientForm.notesHint' | translate }}</mat-hint>
-          <mat-error>{{ errorText(form.controls.notes, words.notes) }}</mat-error>
+          <mat-error>{{ form.controls.notes | lbFieldError: words.notes }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions wide">
           <button mat-flat-button type="submit" [disabled]="submission.isBusy()">
@@ -129,14 +130,13 @@ export class ClientForm implements OnInit {
   protected readonly languages = LANGUAGES;
   protected readonly isHydrated = hydratedSignal();
   protected readonly submission = new Submission();
-  protected readonly errorText = errorText;
   protected readonly words = {
-    name: { required: 'Enter the client name.', ...tooLong(L.name) },
-    kind: { required: 'Choose homeowner, designer, general contractor or other.' },
-    email: EMAIL_WORDS,
-    phone: tooLong(PHONE_MAX_LENGTH),
-    notes: tooLong(L.notes),
-  };
+    name: { required: 'clients.clientForm.errors.nameRequired', ...tooLongError(L.name) },
+    kind: { required: 'clients.clientForm.errors.kindRequired' },
+    email: EMAIL_ERRORS,
+    phone: tooLongError(PHONE_MAX_LENGTH),
+    notes: tooLongError(L.notes),
+  } satisfies Record<string, FieldErrorWords>;
 
   protected readonly form = this.fb.group({
     name: ['', [requiredText, Validators.maxLength(L.name)]],

@@ -5,8 +5,8 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { TranslatePipe } from '@ngx-translate/core';
 import { CLIENT_LIMITS as L, EMAIL_MAX_LENGTH, PHONE_MAX_LENGTH, type ContactView } from '@layerbook/contracts/types';
-import { errorText } from '../../shared/forms/error-text';
-import { EMAIL_WORDS, tooLong } from '../../shared/forms/field-words';
+import { FieldErrorPipe, type FieldErrorWords } from '../../../../../shared/forms/field-error-pipe';
+import { EMAIL_ERRORS, tooLongError } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -16,7 +16,7 @@ import { ClientApi } from './client-api';
 /** Another person at the client: a partner, the designer's project lead, a site super. */
 @Component({
   selector: 'lb-contact-form',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, TranslatePipe],
+  imports: [FieldErrorPipe, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, TranslatePipe],
   template: `
     <form
       [formGroup]="form"
@@ -30,23 +30,23 @@ import { ClientApi } from './client-api';
         <mat-form-field>
           <mat-label>{{ 'clients.contactForm.name' | translate }}</mat-label>
           <input matInput formControlName="name" autocomplete="off" required />
-          <mat-error>{{ errorText(form.controls.name, words.name) }}</mat-error>
+          <mat-error>{{ form.controls.name | lbFieldError: words.name }}</mat-error>
         </mat-form-field>
         <mat-form-field>
           <mat-label>{{ 'clients.contactForm.roleTitle' | translate }}</mat-label>
           <input matInput formControlName="roleTitle" autocomplete="off" />
           <mat-hint>{{ 'clients.contactForm.roleTitleHint' | translate }}</mat-hint>
-          <mat-error>{{ errorText(form.controls.roleTitle, words.roleTitle) }}</mat-error>
+          <mat-error>{{ form.controls.roleTitle | lbFieldError: words.roleTitle }}</mat-error>
         </mat-form-field>
         <mat-form-field>
           <mat-label>{{ 'clients.contactForm.email' | translate }}</mat-label>
           <input matInput type="email" formControlName="email" autocomplete="off" />
-          <mat-error>{{ errorText(form.controls.email, words.email) }}</mat-error>
+          <mat-error>{{ form.controls.email | lbFieldError: words.email }}</mat-error>
         </mat-form-field>
         <mat-form-field>
           <mat-label>{{ 'clients.contactForm.phone' | translate }}</mat-label>
           <input matInput type="tel" formControlName="phone" autocomplete="off" />
-          <mat-error>{{ errorText(form.controls.phone, words.phone) }}</mat-error>
+          <mat-error>{{ form.controls.phone | lbFieldError: words.phone }}</mat-error>
         </mat-form-field>
         <div class="lb-form-actions">
           <button mat-stroked-button type="submit" [disabled]="submission.isBusy()">{{ 'clients.contactForm.add' | translate }}</button>
@@ -82,13 +82,12 @@ export class ContactForm {
   });
   protected readonly isHydrated = hydratedSignal();
   protected readonly submission = new Submission();
-  protected readonly errorText = errorText;
   protected readonly words = {
-    name: { required: 'Enter the contact name.', ...tooLong(L.contactName) },
-    email: EMAIL_WORDS,
-    roleTitle: tooLong(L.roleTitle),
-    phone: tooLong(PHONE_MAX_LENGTH),
-  };
+    name: { required: 'clients.contactForm.errors.nameRequired', ...tooLongError(L.contactName) },
+    email: EMAIL_ERRORS,
+    roleTitle: tooLongError(L.roleTitle),
+    phone: tooLongError(PHONE_MAX_LENGTH),
+  } satisfies Record<string, FieldErrorWords>;
 
   protected async addContact(formDir: FormGroupDirective): Promise<void> {
     const v = this.form.getRawValue();

@@ -7,8 +7,8 @@ import { MatSelectModule } from '@angular/material/select';
 import { TranslatePipe } from '@ngx-translate/core';
 import { CLIENT_LIMITS as L, DEFAULT_COUNTRY, type SiteCreate, type SiteView } from '@layerbook/contracts/types';
 import { COUNTRY_CHOICES } from '../../shared/forms/country-choices';
-import { errorText } from '../../shared/forms/error-text';
-import { tooLong } from '../../shared/forms/field-words';
+import { FieldErrorPipe, type FieldErrorWords } from '../../../../../shared/forms/field-error-pipe';
+import { tooLongError } from '../../shared/forms/field-words';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -19,7 +19,16 @@ import { ClientApi } from './client-api';
 /** A place where work happens; adds one to a client, or edits the one it is given. */
 @Component({
   selector: 'lb-site-form',
-  imports: [FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule, TranslatePipe],
+  imports: [
+    FieldErrorPipe,
+    FormAlert,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+    TranslatePipe,
+  ],
   templateUrl: './site-form.html',
   styleUrl: './site-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -35,18 +44,17 @@ export class SiteForm implements OnInit {
   protected readonly isNew = computed(() => this.site() === null);
   protected readonly isHydrated = hydratedSignal();
   protected readonly submission = new Submission();
-  protected readonly errorText = errorText;
   protected readonly words = {
-    label: tooLong(L.siteLabel),
-    street: { required: 'Enter the street address.', ...tooLong(L.addressLine1) },
-    addressLine2: tooLong(L.addressLine2),
-    city: tooLong(L.city),
-    region: tooLong(L.region),
-    postalCode: tooLong(L.postalCode),
-    accessNotes: tooLong(L.accessNotes),
+    label: tooLongError(L.siteLabel),
+    street: { required: 'clients.siteForm.errors.streetRequired', ...tooLongError(L.addressLine1) },
+    addressLine2: tooLongError(L.addressLine2),
+    city: tooLongError(L.city),
+    region: tooLongError(L.region),
+    postalCode: tooLongError(L.postalCode),
+    accessNotes: tooLongError(L.accessNotes),
     year: YEAR_WORDS,
-    country: { required: 'Choose a country.' },
-  };
+    country: { required: 'clients.siteForm.errors.countryRequired' },
+  } satisfies Record<string, FieldErrorWords>;
   /** The firm's list (ISO 3166-1), by name; the API takes only these codes. */
   protected readonly countries = COUNTRY_CHOICES;
 
