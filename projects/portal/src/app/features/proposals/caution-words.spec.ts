@@ -21,6 +21,8 @@ describe('cautionView', () => {
     'lime-alkali.title': 'La cal es cáustica',
     'lime-alkali.products': 'Productos de cal: {{products}}.',
     'jurisdiction.guidance': 'Orientación, no un reglamento.',
+    'flammable-liquid.products': 'Inflamables: {{products}}.',
+    'flammable-liquid.product': '{{name}} (categoría {{category}}, punto de inflamación {{flashPoint}} °C)',
   };
   const say = (key: string, params: Readonly<Record<string, string>> = {}) =>
     spanish[key]?.replace(/\{\{(\w+)\}\}/g, (_, name: string) => params[name] ?? '') ?? null;
@@ -39,5 +41,20 @@ describe('cautionView', () => {
     expect(view.title).toBe('La cal es cáustica');
     expect(view.bullets).toEqual(['Productos de cal: Estuco A, Estuco B.', 'A line the engine never wrote.']);
     expect(view.footnotes).toEqual(['ICSC 0408 (calcium hydroxide)', 'Orientación, no un reglamento.']);
+  });
+
+  it('says each flammable product in the reader’s words and joins them as the English does', () => {
+    const view = cautionView(
+      'flammable-liquid',
+      {
+        title: 'Flammable liquids in the mix',
+        bullets: ['Flammable: Oil glaze (category 3, flash point 40 °C), Thinner, odourless (category 2, flash point 12 °C).'],
+        rule: '',
+      },
+      say,
+    );
+    expect(view.bullets).toEqual([
+      'Inflamables: Oil glaze (categoría 3, punto de inflamación 40 °C), Thinner, odourless (categoría 2, punto de inflamación 12 °C).',
+    ]);
   });
 });

@@ -1,4 +1,4 @@
-import { CAUTION_WORDS, cautionLineOf } from '@layerbook/domain';
+import { CAUTION_WORDS, cautionLineOf, cautionText } from '@layerbook/domain';
 import type { SnapshotCaution } from '@layerbook/contracts/types';
 
 /**
@@ -38,7 +38,10 @@ export function cautionView(
   const title = known(`${id}.title`, caution.title) ?? caution.title;
   const bullets = caution.bullets.map((bullet) => {
     const line = cautionLineOf(bullet);
-    return (line && say(line.key, line.params)) ?? bullet;
+    if (!line) return bullet;
+    // A list whose entries have words of their own (flammable products) is said entry by entry, joined as the English does.
+    const products = line.items?.map((item) => say(item.key, item.params) ?? cautionText(item)).join(', ');
+    return say(line.key, products === undefined ? line.params : { ...line.params, products }) ?? bullet;
   });
   const rule = known(`${id}.rule`, caution.rule.trim()) ?? caution.rule;
   let jurisdiction = (caution.jurisdiction ?? '').trim();
