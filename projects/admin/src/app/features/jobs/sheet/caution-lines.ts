@@ -5,6 +5,8 @@ export interface CautionText {
   readonly key: string | null;
   readonly params: Readonly<Record<string, string>>;
   readonly english: string;
+  /** list entries with words of their own (keys in `cautions`), joined with ", " into the `products` param */
+  readonly items?: ReadonlyArray<{ readonly key: string; readonly params: Readonly<Record<string, string>> }>;
 }
 
 export interface CautionView {
@@ -40,7 +42,11 @@ export function cautionView(caution: SheetCaution): CautionView {
     id: caution.id,
     title: words(caution.titleKey, caution.title),
     rule: words(caution.ruleKey, caution.rule),
-    bullets: caution.bullets.map((bullet, i) => words(lines?.[i]?.key, bullet, lines?.[i]?.params)),
+    bullets: caution.bullets.map((bullet, i) => {
+      const line = lines?.[i];
+      const text = words(line?.key, bullet, line?.params);
+      return line?.items ? { ...text, items: line.items.map((item) => ({ key: `cautions.${item.key}`, params: item.params })) } : text;
+    }),
     jurisdiction: sentencesOf(caution.jurisdiction, caution.jurisdictionKeys),
     standing: words(caution.standingKey, caution.standing),
   };

@@ -73,6 +73,30 @@ export const limeCaution: SheetCaution = {
   standingKey: 'standing',
 };
 
+export const flammableCaution: SheetCaution = {
+  id: 'flammable-liquid',
+  title: 'Flammable liquids in the mix',
+  bullets: [
+    'Flammable: Oil glazing medium (category 3, flash point 40 °C).',
+    'No open flames, pilot lights or sparks; ventilate; keep containers closed. Vapours can be heavier than air and travel to an ignition source.',
+  ],
+  rule: '29 CFR 1910.106(a)(19) (flash point at or below 93 °C / 199.4 °F)',
+  jurisdiction: 'A US federal rule. Outside the US, check your national or provincial rules.',
+  standing: limeCaution.standing,
+  titleKey: 'flammable-liquid.title',
+  ruleKey: 'flammable-liquid.rule',
+  lines: [
+    {
+      key: 'flammable-liquid.products',
+      params: { products: 'Oil glazing medium (category 3, flash point 40 °C)' },
+      items: [{ key: 'flammable-liquid.product', params: { name: 'Oil glazing medium', category: '3', flashPoint: '40' } }],
+    },
+    { key: 'flammable-liquid.noFlames', params: {} },
+  ],
+  jurisdictionKeys: ['jurisdiction.usFederal', 'jurisdiction.outsideUs'],
+  standingKey: 'standing',
+};
+
 export const sheet: JobSheet = {
   id: 'job-1',
   title: 'Dining room in lime plaster',
@@ -121,7 +145,7 @@ export const sheet: JobSheet = {
       waits: [{ key: 't-1', label: 'Dining room – Walls: Lime base coat', untilDate: '2026-12-10', untilHour: 9 }],
     },
   ],
-  cautions: [limeCaution],
+  cautions: [limeCaution, flammableCaution],
   workItems: [],
   photos: [],
   sourceLanguage: 'en',

@@ -85,6 +85,7 @@ describe('SheetPage', () => {
     expect(text()).toContain('Guidance, not a regulation. Outside the US, check your national or provincial rules.');
     expect(text()).toContain("Follow local codes, the product's safety data sheet and licensed or qualified practice.");
     expect(text()).toContain('Flammable: flash point 40 °C (104 °F)');
+    expect(text()).toContain('Flammable: Oil glazing medium (category 3, flash point 40 °C).');
   });
 
   it('shows no money anywhere on the sheet', async () => {
@@ -137,6 +138,8 @@ describe('SheetPage', () => {
     expect(text()).toContain(cautionsEs['lime-alkali'].eyewash);
     expect(text()).toContain(cautionsEs.standing);
     expect(text()).not.toContain('Lime is caustic');
+    // a listed product has words of its own: its category and flash point said in Spanish
+    expect(text()).toContain('Inflamables: Oil glazing medium (categoría 3, punto de inflamación 40 °C).');
     expect(text()).not.toMatch(MONEY);
   });
 });

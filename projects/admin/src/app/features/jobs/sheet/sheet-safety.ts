@@ -1,9 +1,9 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
-import { TranslatePipe } from '@ngx-translate/core';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { SheetCaution, SheetProduct } from '@layerbook/contracts/types';
 import { Language } from '../../../../../../shared/i18n/language';
-import { cautionView, hazardFlags } from './caution-lines';
+import { type CautionText, cautionView, hazardFlags } from './caution-lines';
 import { formatNumber } from './sheet-format';
 import { TranslateOrPipe } from './translate-or-pipe';
 
@@ -149,16 +149,31 @@ import { TranslateOrPipe } from './translate-or-pipe';
 })
 export class SheetSafety {
   private readonly language = inject(Language);
+  private readonly translate = inject(TranslateService);
 
   readonly sheetCautions = input.required<readonly SheetCaution[]>();
   readonly products = input.required<readonly SheetProduct[]>();
 
-  protected readonly cautions = computed(() => this.sheetCautions().map(cautionView));
+  protected readonly cautions = computed(() => {
+    this.language.current(); // list items are joined in the reader's language: again when it changes
+    return this.sheetCautions().map((caution) => {
+      const view = cautionView(caution);
+      return { ...view, bullets: view.bullets.map((b) => this.withItems(b)) };
+    });
+  });
   protected readonly flagged = computed(() =>
     this.products()
       .map((product) => ({ product, flags: hazardFlags(product) }))
       .filter((p) => p.flags.length > 0),
   );
+
+  /** A line listing items (flammable products) gets its list param in the reader's words; any item without words: the English line. */
+  private withItems(text: CautionText): CautionText {
+    if (!text.items || !text.key) return text;
+    const said = text.items.map((item) => this.translate.instant(item.key, item.params) as unknown);
+    if (said.some((s, i) => typeof s !== 'string' || s === text.items![i].key)) return { ...text, key: null };
+    return { ...text, params: { ...text.params, products: said.join(', ') } };
+  }
 
   protected number(value: number): string {
     return formatNumber(value, this.language.locale());
