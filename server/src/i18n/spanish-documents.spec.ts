@@ -97,7 +97,8 @@ describe('documents in the client’s language', () => {
       'Gracias por su pago.',
     ]);
     expect(receipt).not.toContain('Thank you for your payment.');
-  });
+    // Five PDFs drawn and read back by a child process each: more than the default 30 s on a loaded machine.
+  }, 120_000);
 
   it('prints the proposal in Spanish — our words and every caution by its keys — and unchanged in English', async () => {
     const f = await spanishClientJob('Veladura Sur');
@@ -122,7 +123,7 @@ describe('documents in the client’s language', () => {
     }
     const en = textOf(await renderProposalPdf(row.snapshot, meta));
     expectAll(en, ['Valid until:', 'Scope of work', 'Safety and compliance notes', row.snapshot.safety.standing.slice(0, 40)]);
-  });
+  }, 120_000);
 });
 
 describe('e-mails in the reader’s language', () => {
