@@ -1,3 +1,4 @@
+import { DOCUMENT } from '@angular/common';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { TranslateService } from '@ngx-translate/core';
 import { type Language as LanguageCode, LANGUAGES } from '@layerbook/contracts/types';
@@ -38,6 +39,7 @@ export function languageFromAcceptHeader(header: string | null | undefined): Lan
 @Injectable({ providedIn: 'root' })
 export class Language {
   private readonly translate = inject(TranslateService);
+  private readonly document = inject(DOCUMENT);
   private readonly code = signal<LanguageCode>('en');
   private readonly region = signal<string>('US');
 
@@ -49,6 +51,8 @@ export class Language {
   async use(language: LanguageCode): Promise<void> {
     await firstValueFrom(this.translate.use(language));
     this.code.set(language);
+    // Screen readers pick their voice from it; the server wrote the first one, a switch changes it here.
+    this.document.documentElement.lang = language;
   }
 
   /** The firm's country (ISO 3166-1 alpha-2) for number and date conventions. */

@@ -39,8 +39,11 @@ export function portalProposalRoutes(ctx: AppContext): Router {
 
   // Drawn from the stored snapshot after the transaction ends: a GET with no side effects.
   router.get('/:id/pdf', async (req, res) => {
-    const row = await withClient(ctx, req, (tx, client) => loadClientVersion(tx, client, parse(idParam, req.params).id));
-    const pdf = await renderProposalPdf(row.snapshot, { version: row.version, snapshotHash: row.snapshot_hash });
+    const { row, language } = await withClient(ctx, req, async (tx, client) => ({
+      row: await loadClientVersion(tx, client, parse(idParam, req.params).id),
+      language: client.language,
+    }));
+    const pdf = await renderProposalPdf(row.snapshot, { version: row.version, snapshotHash: row.snapshot_hash, language });
     res.set({
       'content-type': 'application/pdf',
       'content-disposition': `attachment; filename="${proposalFilename(row.snapshot.title, row.version)}"`,
@@ -52,8 +55,11 @@ export function portalProposalRoutes(ctx: AppContext): Router {
 
   // The signed copy: the same document with the acceptance record on its last page.
   router.get('/:id/signed-pdf', async (req, res) => {
-    const { row, signature } = await withClient(ctx, req, (tx, client) => loadSignedCopy(tx, client, parse(idParam, req.params).id));
-    const pdf = await renderProposalPdf(row.snapshot, { version: row.version, snapshotHash: row.snapshot_hash, signature });
+    const { row, signature, language } = await withClient(ctx, req, async (tx, client) => ({
+      ...(await loadSignedCopy(tx, client, parse(idParam, req.params).id)),
+      language: client.language,
+    }));
+    const pdf = await renderProposalPdf(row.snapshot, { version: row.version, snapshotHash: row.snapshot_hash, signature, language });
     res.set({
       'content-type': 'application/pdf',
       'content-disposition': `attachment; filename="${proposalFilename(row.snapshot.title, row.version, true)}"`,

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { cautionFootnotes, cautionView } from './caution-words';
+import { leadNotice } from '@layerbook/domain';
+import es from '../../../i18n/proposals/es.json';
+import { cautionFootnotes, cautionView, leadNoticeView } from './caution-words';
 
 describe('cautionFootnotes', () => {
   it.each([
@@ -56,5 +58,36 @@ describe('cautionView', () => {
     expect(view.bullets).toEqual([
       'Inflamables: Oil glaze (categoría 3, punto de inflamación 40 °C), Thinner, odourless (categoría 2, punto de inflamación 12 °C).',
     ]);
+  });
+});
+
+describe('leadNoticeView', () => {
+  const words: Record<string, string> = es.leadNotice;
+  const sayLead = (key: string) => words[key] ?? null;
+  const say = (key: string) => (key === 'jurisdiction.usFederal' ? 'Una norma federal de EE. UU.' : null);
+
+  it('says every line of the notice the engine writes in Spanish, for a known and an unknown year', () => {
+    for (const status of ['target-housing', 'assumed-target-housing'] as const) {
+      const notice = leadNotice(status);
+      if (!notice) throw new Error('a pre-1978 home has a notice');
+      const view = leadNoticeView(notice, say, sayLead);
+      expect(view.title).toBe(words['title']);
+      expect(view.bullets).toEqual([
+        status === 'target-housing' ? words['targetHousing'] : words['unknownYear'],
+        words['certifiedFirm'],
+        words['pamphlet'],
+        words['stricter'],
+      ]);
+      expect(view.footnotes).toEqual([words['rule'], 'Una norma federal de EE. UU.']);
+    }
+  });
+
+  it('keeps a line it has no words for in the English the snapshot holds', () => {
+    const notice = { title: 'Lead notice', bullets: ['A line of our own.'], rule: '40 CFR 745', jurisdiction: '' };
+    expect(leadNoticeView(notice, say, sayLead)).toEqual({
+      title: 'Lead notice',
+      bullets: ['A line of our own.'],
+      footnotes: ['40 CFR 745'],
+    });
   });
 });

@@ -1,4 +1,4 @@
-import { CAUTION_WORDS, cautionLineOf, cautionText } from '@layerbook/domain';
+import { CAUTION_WORDS, cautionLineOf, cautionText, leadNotice } from '@layerbook/domain';
 import type { SnapshotCaution } from '@layerbook/contracts/types';
 
 /**
@@ -60,4 +60,42 @@ export function cautionView(
 /** The standing line under the cautions in the reader's language when it is the engine's own. */
 export function standingView(standing: string, say: CautionSay): string {
   return (standing.trim() === CAUTION_WORDS.standing && say('standing')) || standing;
+}
+
+/** The lead-safe notice's English lines (both wordings of its first line) and their keys under `proposals.leadNotice`. */
+const LEAD_NOTICE_KEYS: ReadonlyMap<string, string> = (() => {
+  const known = leadNotice('target-housing');
+  const assumed = leadNotice('assumed-target-housing');
+  if (!known || !assumed) return new Map<string, string>();
+  return new Map([
+    [known.title, 'title'],
+    [known.bullets[0], 'targetHousing'],
+    [assumed.bullets[0], 'unknownYear'],
+    [known.bullets[1], 'certifiedFirm'],
+    [known.bullets[2], 'pamphlet'],
+    [known.bullets[3], 'stricter'],
+    [known.rule, 'rule'],
+  ]);
+})();
+
+/**
+ * The lead-safe notice in the reader's language: each line the engine wrote is said by its key under
+ * `proposals.leadNotice` (`sayLead`), the jurisdiction sentences as for a caution; a line without
+ * words stays in the English the snapshot holds.
+ */
+export function leadNoticeView(
+  notice: Pick<SnapshotCaution, 'title' | 'bullets' | 'rule' | 'jurisdiction'>,
+  say: CautionSay,
+  sayLead: (key: string) => string | null,
+): CautionView {
+  const lead = (english: string) => {
+    const key = LEAD_NOTICE_KEYS.get(english.trim());
+    return (key && sayLead(key)) || english;
+  };
+  const asCaution = cautionView('lead-safe-work', notice, say);
+  return {
+    title: lead(notice.title),
+    bullets: notice.bullets.map(lead),
+    footnotes: [lead(notice.rule), ...asCaution.footnotes.slice(notice.rule.trim() === '' ? 0 : 1)].filter((line) => line.trim() !== ''),
+  };
 }

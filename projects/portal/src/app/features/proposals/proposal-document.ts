@@ -4,7 +4,7 @@ import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { ProposalSnapshot, SnapshotOption } from '@layerbook/contracts/types';
 import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
 import { Language } from '../../../../../shared/i18n/language';
-import { type CautionSay, cautionView, standingView } from './caution-words';
+import { type CautionSay, cautionView, leadNoticeView, standingView } from './caution-words';
 import { paymentTermsSentence } from './terms-words';
 
 /** The proposal as sent, drawn only from its frozen snapshot: what the PDF says, on the page. */
@@ -32,6 +32,13 @@ export class ProposalDocument {
     return text === full ? null : text;
   };
 
+  /** The lead-safe notice's own words (`proposals.leadNotice.<key>`), or null when the reader's words lack one. */
+  private readonly sayLead = (key: string): string | null => {
+    const full = `proposals.leadNotice.${key}`;
+    const text = String(this.translate.instant(full));
+    return text === full ? null : text;
+  };
+
   /** Cautions and terms in the reader's language (recomputed on a language switch). */
   protected readonly words = computed(() => {
     this.language.current();
@@ -42,7 +49,7 @@ export class ProposalDocument {
         (key, params) => this.translate.instant(`proposals.${key}`, params) as string,
         this.language.locale(),
       ),
-      lead: s.leadNotice ? cautionView('lead-safe-work', s.leadNotice, this.sayCaution) : null,
+      lead: s.leadNotice ? leadNoticeView(s.leadNotice, this.sayCaution, this.sayLead) : null,
       cautions: s.safety.cautions.map((c) => ({ id: c.id, ...cautionView(c.id, c, this.sayCaution) })),
       standing: standingView(s.safety.standing, this.sayCaution),
     };
