@@ -106,4 +106,25 @@ describe('invoice e-mails', () => {
     await send(f.firmId, other, { kind: 'reminder', step: 'due' });
     expect(await outbox(f.firmId, `invoice:${other}:reminder:due`)).toEqual([]);
   });
+
+  it("words the issued invoice and a reminder in the client's language (Spanish), with money and dates for it", async () => {
+    const f = await issuedInvoice('Casa Cal Estucos');
+    const patched = await f.agent.patch(`/api/clients/${f.clientId}`).set('x-csrf-token', f.csrf()).send({ language: 'es' });
+    expect(patched.status).toBe(200);
+    await send(f.firmId, f.invoiceId, { kind: 'issued' });
+    await send(f.firmId, f.invoiceId, { kind: 'reminder', step: 'due' });
+    // Intl (ICU) for es-US: the reference formatting of money and dates for a Spanish reader in the US
+    const amount = formatMoney('1000.00', 'USD', 'es-US');
+    const dueOn = new Intl.DateTimeFormat('es-US', { dateStyle: 'long', timeZone: 'UTC' }).format(new Date('2026-12-15T00:00:00Z'));
+    const issued = await t.inbox.waitFor(
+      (m) => JSON.stringify(m.to).includes(f.clientEmail) && (m.subject ?? '').startsWith('Factura INV-0007'),
+    );
+    expect(issued.subject).toBe(`Factura INV-0007 de Casa Cal Estucos: ${amount} con vencimiento el ${dueOn}`);
+    expect(issued.text).toContain('le ha enviado la factura INV-0007 (Anticipo)');
+    expect(issued.text).toContain(`Importe a pagar: ${amount}, a más tardar el ${dueOn}.`);
+    expect(issued.html).toContain('lang="es"');
+    const reminder = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(f.clientEmail) && (m.subject ?? '').includes('vence hoy'));
+    expect(reminder.text).toContain('Su factura vence hoy');
+    expect(reminder.text).not.toContain('Hello');
+  });
 });

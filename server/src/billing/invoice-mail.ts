@@ -1,9 +1,11 @@
-import { INVOICE_KIND_LABELS, type InvoiceDocument, type InvoiceKind, type InvoiceStatus } from '@layerbook/contracts';
+import { type InvoiceDocument, type InvoiceKind, type InvoiceStatus } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { formatMoney } from '@layerbook/domain';
 import { createPortalLink } from '../auth/portal-auth';
 import type { Config } from '../config';
 import { HttpError, conflict, notFound } from '../http/problem';
+import { localeOf, translator } from '../i18n/catalog';
+import { clientReader } from '../i18n/reader';
 import { firmDateTime } from '../mail/firm-time';
 import { enqueueMail } from '../mail/outbox';
 import { ensurePortalAccount } from '../proposals/client-portal-account';
@@ -88,19 +90,23 @@ export async function enqueueInvoiceMail(
   const base = config.PUBLIC_URL;
   const next = `/portal/invoices/${invoiceId}`;
   const link = account.isActive ? await createPortalLink(tx, account.id, clock, INVOICE_LINK_DAYS * 24 * 60) : null;
-  const money = (amount: string) => formatMoney(moneyOut(amount, row.currency), row.currency, doc.locale);
+  // In the client's language (theirs, else the firm's), numbers and dates for it in the firm's country.
+  const reader = await clientReader(tx, row.client_id);
+  const locale = localeOf(reader.language, reader.country);
+  const money = (amount: string) => formatMoney(moneyOut(amount, row.currency), row.currency, locale);
   const facts: InvoiceMailFacts = {
     firmName: doc.firm.name,
     clientName: row.client_name,
     number: row.number_text,
-    kindLabel: INVOICE_KIND_LABELS[row.kind],
+    kindLabel: translator(reader.language)(`pdf.invoice.kinds.${row.kind}`),
     jobTitle: doc.jobTitle,
     amountDue: money(row.amount_due),
-    dueOn: formatsFor(doc.locale, row.currency).date(row.due_on),
+    dueOn: formatsFor(locale, row.currency).date(row.due_on),
     termsText: doc.termsText,
     url: link ? `${base}/portal/sign-in/link?token=${link.token}&next=${next}` : `${base}${next}`,
     linkDays: link ? INVOICE_LINK_DAYS : null,
     portalUrl: `${base}/portal/sign-in`,
+    language: reader.language,
   };
 
   let mail;
@@ -119,7 +125,7 @@ export async function enqueueInvoiceMail(
       creditNoteNumber: note.number_text,
       amount: money(note.amount),
       reason: note.reason,
-      voidedAt: firmDateTime(row.voided_at ?? clock, doc.locale, row.time_zone),
+      voidedAt: firmDateTime(row.voided_at ?? clock, locale, row.time_zone),
     });
   }
   await enqueueMail(tx, queue, {

@@ -1,6 +1,8 @@
+import type { Language } from '@layerbook/contracts';
+import { translator } from '../i18n/catalog';
 import { render, type RenderedMail } from '../mail/templates';
 
-/** What every invoice e-mail names: formatted already (money through formatMoney, dates in the firm's locale). */
+/** What every invoice e-mail names: formatted already (money through formatMoney, dates for the client's language and the firm's country). */
 export interface InvoiceMailFacts {
   readonly firmName: string;
   readonly clientName: string;
@@ -20,64 +22,68 @@ export interface InvoiceMailFacts {
   readonly linkDays: number | null;
   /** where the client asks for a new sign-in link */
   readonly portalUrl: string;
+  /** the client's language (theirs, else the firm's); English when left out */
+  readonly language?: Language;
 }
+
+const wordsOf = (p: InvoiceMailFacts) => translator(p.language ?? 'en');
 
 function linkWords(p: InvoiceMailFacts): string[] {
-  return p.linkDays === null
-    ? ['Sign in to your client portal to read it and download the PDF.']
-    : [`The button signs you in once, within ${p.linkDays} days, and opens the invoice; you can download the PDF there.`];
+  const t = wordsOf(p);
+  return [p.linkDays === null ? t('mail.invoice.linkSignIn') : t('mail.invoice.linkOnce', { days: p.linkDays })];
 }
 
-const footer = (p: InvoiceMailFacts) =>
-  `Link used or expired? Ask for a new one at ${p.portalUrl}. You are receiving this because ${p.firmName} is doing work for you.`;
+const footer = (p: InvoiceMailFacts) => wordsOf(p)('mail.invoice.footer', { portalUrl: p.portalUrl, firm: p.firmName });
 
 /** The invoice, just issued: "Invoice INV-0007 from Kiln Lane Plaster: $1,000.00 due December 15, 2026". */
 export function invoiceIssuedMail(p: InvoiceMailFacts): RenderedMail {
+  const t = wordsOf(p);
+  const names = { number: p.number, firm: p.firmName, amount: p.amountDue, dueOn: p.dueOn };
   return render(
-    `Invoice ${p.number} from ${p.firmName}: ${p.amountDue} due ${p.dueOn}`,
-    `Invoice ${p.number} from ${p.firmName}`,
+    t('mail.invoice.issued.subject', names),
+    t('mail.invoice.issued.heading', names),
     [
-      `Hello ${p.clientName},`,
-      `${p.firmName} has sent you invoice ${p.number} (${p.kindLabel}) for "${p.jobTitle}".`,
-      `Amount due: ${p.amountDue}, by ${p.dueOn}. Terms: ${p.termsText}.`,
+      t('mail.hello', { name: p.clientName }),
+      t('mail.invoice.issued.sent', { ...names, kind: p.kindLabel, job: p.jobTitle }),
+      t('mail.invoice.issued.amountDue', { ...names, terms: p.termsText }),
       ...linkWords(p),
     ],
-    { label: 'Open the invoice', url: p.url },
+    { label: t('mail.invoice.open'), url: p.url },
     footer(p),
+    p.language ?? 'en',
   );
 }
 
 /** A reminder's words by its step: a few days before, on the day, or after the due date. */
-export function reminderWords(step: string, p: Pick<InvoiceMailFacts, 'number' | 'firmName' | 'amountDue' | 'dueOn'>) {
-  if (step.startsWith('before:')) {
-    return {
-      subject: `Reminder: invoice ${p.number} from ${p.firmName} is due ${p.dueOn}`,
-      heading: 'A friendly reminder',
-      lead: `Invoice ${p.number} for ${p.amountDue} is due on ${p.dueOn}. If you have already paid, thank you, and please ignore this note.`,
-    };
-  }
-  if (step === 'due') {
-    return {
-      subject: `Invoice ${p.number} from ${p.firmName} is due today: ${p.amountDue}`,
-      heading: 'Your invoice is due today',
-      lead: `Invoice ${p.number} for ${p.amountDue} is due today, ${p.dueOn}. If you have already paid, thank you, and please ignore this note.`,
-    };
-  }
+export function reminderWords(
+  step: string,
+  p: Pick<InvoiceMailFacts, 'number' | 'firmName' | 'amountDue' | 'dueOn' | 'language'>,
+): { subject: string; heading: string; lead: string } {
+  const t = translator(p.language ?? 'en');
+  const when = step.startsWith('before:') ? 'before' : step === 'due' ? 'due' : 'after';
+  const names = { number: p.number, firm: p.firmName, amount: p.amountDue, dueOn: p.dueOn };
   return {
-    subject: `Invoice ${p.number} from ${p.firmName} was due ${p.dueOn}: ${p.amountDue} still open`,
-    heading: 'Your invoice is past its due date',
-    lead: `Invoice ${p.number} was due on ${p.dueOn} and ${p.amountDue} is still open. If your payment is on its way, thank you; if something is wrong with the invoice, reply to this e-mail and ${p.firmName} will look at it.`,
+    subject: t(`mail.invoice.reminder.${when}.subject`, names),
+    heading: t(`mail.invoice.reminder.${when}.heading`, names),
+    lead: t(`mail.invoice.reminder.${when}.lead`, names),
   };
 }
 
 export function invoiceReminderMail(p: InvoiceMailFacts, step: string): RenderedMail {
+  const t = wordsOf(p);
   const words = reminderWords(step, p);
   return render(
     words.subject,
     words.heading,
-    [`Hello ${p.clientName},`, words.lead, `The invoice is for "${p.jobTitle}" (${p.kindLabel}).`, ...linkWords(p)],
-    { label: 'Open the invoice', url: p.url },
+    [
+      t('mail.hello', { name: p.clientName }),
+      words.lead,
+      t('mail.invoice.reminder.forJob', { job: p.jobTitle, kind: p.kindLabel }),
+      ...linkWords(p),
+    ],
+    { label: t('mail.invoice.open'), url: p.url },
     footer(p),
+    p.language ?? 'en',
   );
 }
 
@@ -93,16 +99,19 @@ export interface CreditNoteMailFacts extends InvoiceMailFacts {
 
 /** The invoice was voided: its credit note, why, and that nothing is owed on it. */
 export function creditNoteMail(p: CreditNoteMailFacts): RenderedMail {
+  const t = wordsOf(p);
+  const names = { creditNote: p.creditNoteNumber, firm: p.firmName, number: p.number };
   return render(
-    `Credit note ${p.creditNoteNumber} from ${p.firmName}: invoice ${p.number} is cancelled`,
-    `Invoice ${p.number} is cancelled`,
+    t('mail.invoice.creditNote.subject', names),
+    t('mail.invoice.creditNote.heading', names),
     [
-      `Hello ${p.clientName},`,
-      `${p.firmName} cancelled invoice ${p.number} for "${p.jobTitle}" on ${p.voidedAt} with credit note ${p.creditNoteNumber} for ${p.amount}.`,
-      `Reason: ${p.reason}`,
-      `You owe nothing on invoice ${p.number}. ${p.linkDays === null ? 'Sign in to your client portal' : 'Open your client portal'} to see the credit note and your statement.`,
+      t('mail.hello', { name: p.clientName }),
+      t('mail.invoice.creditNote.cancelled', { ...names, job: p.jobTitle, voidedAt: p.voidedAt, amount: p.amount }),
+      t('mail.invoice.creditNote.reason', { reason: p.reason }),
+      t(p.linkDays === null ? 'mail.invoice.creditNote.owesNothingSignIn' : 'mail.invoice.creditNote.owesNothingOpen', names),
     ],
-    { label: 'See the credit note', url: p.url },
+    { label: t('mail.invoice.creditNote.action'), url: p.url },
     footer(p),
+    p.language ?? 'en',
   );
 }

@@ -1,8 +1,10 @@
-import { PAYMENT_METHOD_LABELS, type InvoiceDocument, type PaymentMethod } from '@layerbook/contracts';
+import { type InvoiceDocument, type PaymentMethod } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { formatMoney } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { moneyOut } from '../billing/money';
+import { localeOf, translator } from '../i18n/catalog';
+import { clientReader } from '../i18n/reader';
 import type { Config } from '../config';
 import { enqueueMail } from '../mail/outbox';
 import { formatsFor } from '../proposals/pdf/format';
@@ -31,6 +33,7 @@ interface ReceiptRow {
   amount_due: string;
   document: InvoiceDocument | null;
   firm_name: string;
+  client_id: string;
   client_name: string;
   client_email: string;
 }
@@ -38,7 +41,7 @@ interface ReceiptRow {
 const INVOICE_AND_CLIENT = `join invoices i on i.tenant_id = p.tenant_id and i.id = p.invoice_id
   join clients c on c.tenant_id = i.tenant_id and c.id = i.client_id join firms f on f.id = i.tenant_id`;
 const INVOICE_FACTS = `i.number_text as invoice_number, i.currency as invoice_currency, i.document, f.name as firm_name,
-  c.name as client_name, c.email as client_email,
+  c.id as client_id, c.name as client_name, c.email as client_email,
   (case when i.status = 'void' then 0 else greatest(i.total - i.amount_paid - i.amount_credited, 0) end)::numeric(14, 2)::text as amount_due`;
 
 /**
@@ -64,20 +67,25 @@ export async function enqueueReceiptMail(
   const row = (await tx.client.query<ReceiptRow>(sql, [tx.tenantId, receipt.id])).rows[0];
   const to = row?.client_email.trim().toLowerCase();
   if (!row || row.receipt_no === null || !to) return;
-  const locale = row.document?.locale ?? 'en-US';
+  // In the client's language (theirs, else the firm's), numbers and dates for it in the firm's country.
+  const reader = await clientReader(tx, row.client_id);
+  const locale = localeOf(reader.language, reader.country);
+  const t = translator(reader.language);
   const money = (amount: string, currency: string) => formatMoney(moneyOut(amount, currency), currency, locale);
   const number = receiptNumber(row.receipt_no) as string;
-  const label = PAYMENT_METHOD_LABELS[row.method].toLowerCase();
-  const how =
-    receipt.kind === 'refund' && row.method === 'card'
-      ? 'back to your card'
-      : `by ${row.method === 'card' ? 'card' : label}${row.reference && row.method !== 'card' ? ` ${row.reference}` : ''}`;
+  const toCard = receipt.kind === 'refund' && row.method === 'card';
+  const by = t(`mail.receipt.how.${row.method}`);
+  const how = toCard
+    ? t('mail.receipt.how.backToCard')
+    : row.reference && row.method !== 'card'
+      ? t('mail.receipt.how.withReference', { how: by, reference: row.reference })
+      : by;
   const mail = receiptMail({
     kind: receipt.kind,
     firmName: row.document?.firm.name ?? row.firm_name,
     clientName: row.client_name,
     number,
-    invoiceNumber: row.invoice_number ?? 'the invoice',
+    invoiceNumber: row.invoice_number ?? t('mail.receipt.theInvoice'),
     jobTitle: row.document?.jobTitle ?? '',
     amount: money(row.amount, row.currency),
     how,
@@ -87,6 +95,8 @@ export async function enqueueReceiptMail(
     paymentNumber: receiptNumber(row.payment_receipt_no),
     reason: row.reason,
     url: `${deps.config.PUBLIC_URL}/portal/invoices/${row.invoice_id}`,
+    toCard,
+    language: reader.language,
   });
   await enqueueMail(tx, deps.queue, {
     purposeKey: `receipt:${receipt.kind}:${receipt.id}`,

@@ -1,6 +1,8 @@
+import type { Language } from '@layerbook/contracts';
+import { translator } from '../../i18n/catalog';
 import { render, type RenderedMail } from '../../mail/templates';
 
-/** What a receipt e-mail names, formatted already (money through formatMoney, dates in the firm's locale). */
+/** What a receipt e-mail names, formatted already (money through formatMoney, dates for the client's language and the firm's country). */
 export interface ReceiptMailFacts {
   readonly kind: 'payment' | 'refund';
   readonly firmName: string;
@@ -23,35 +25,35 @@ export interface ReceiptMailFacts {
   readonly reason: string;
   /** the invoice in the portal, where the receipt downloads */
   readonly url: string;
+  /** a refund that went back to a card (it takes days to show) */
+  readonly toCard: boolean;
+  /** the client's language; English when left out */
+  readonly language?: Language;
 }
 
 /** "Receipt RCT-0007 — Kiln Lane Plaster": a payment received or a refund given back, and where the PDF is. */
 export function receiptMail(p: ReceiptMailFacts): RenderedMail {
+  const language = p.language ?? 'en';
+  const t = translator(language);
+  const names = { firm: p.firmName, amount: p.amount, how: p.how, on: p.on, invoice: p.invoiceNumber, job: p.jobTitle };
   const due = p.amountDue
-    ? `${p.amountDue} is still due on invoice ${p.invoiceNumber}.`
-    : `Nothing is due on invoice ${p.invoiceNumber} now.`;
+    ? t('mail.receipt.stillDue', { amount: p.amountDue, invoice: p.invoiceNumber })
+    : t('mail.receipt.nothingDue', { invoice: p.invoiceNumber });
   const lines =
     p.kind === 'payment'
-      ? [
-          `${p.firmName} received ${p.amount} from you ${p.how} on ${p.on} for invoice ${p.invoiceNumber} ("${p.jobTitle}"). Thank you.`,
-          ...(p.credit ? [`${p.credit} of it was more than the invoice asked and is kept as credit on your account.`] : []),
-          due,
-        ]
+      ? [t('mail.receipt.received', names), ...(p.credit ? [t('mail.receipt.credit', { credit: p.credit })] : []), due]
       : [
-          `${p.firmName} gave back ${p.amount} ${p.how} on ${p.on}${p.paymentNumber ? `, from your payment ${p.paymentNumber}` : ''} on invoice ${p.invoiceNumber} ("${p.jobTitle}").`,
-          ...(p.reason ? [`Reason: ${p.reason}`] : []),
-          ...(p.how.includes('card') ? ['A refund to a card can take several business days to show on your statement.'] : []),
+          p.paymentNumber ? t('mail.receipt.givenBackFrom', { ...names, payment: p.paymentNumber }) : t('mail.receipt.givenBack', names),
+          ...(p.reason ? [t('mail.receipt.reason', { reason: p.reason })] : []),
+          ...(p.toCard ? [t('mail.receipt.cardDelay')] : []),
           due,
         ];
   return render(
-    `Receipt ${p.number} — ${p.firmName}`,
-    p.kind === 'payment' ? `Payment received: receipt ${p.number}` : `Refund sent: receipt ${p.number}`,
-    [
-      `Hello ${p.clientName},`,
-      ...lines,
-      `Your receipt ${p.number} is on the invoice's page in your client portal, ready to download as a PDF.`,
-    ],
-    { label: 'See the receipt', url: p.url },
-    `You are receiving this because ${p.firmName} is doing work for you. Sign in to your client portal to open the link.`,
+    t('mail.receipt.subject', { number: p.number, firm: p.firmName }),
+    t(p.kind === 'payment' ? 'mail.receipt.headingPayment' : 'mail.receipt.headingRefund', { number: p.number }),
+    [t('mail.hello', { name: p.clientName }), ...lines, t('mail.receipt.onPortal', { number: p.number })],
+    { label: t('mail.receipt.action'), url: p.url },
+    t('mail.receipt.footer', { firm: p.firmName }),
+    language,
   );
 }

@@ -175,4 +175,17 @@ describe('receipt e-mails', () => {
     expect(mail.text).toContain(`${usd('20.00')} of it was more than the invoice asked and is kept as credit on your account.`);
     expect(mail.text).toContain('Nothing is due on invoice INV-0001 now.');
   });
+
+  it("words a receipt in the client's language (Spanish), with money and dates for it", async () => {
+    const f = await receiptsJob('Recibo Cal y Arena');
+    expect((await f.agent.patch(`/api/clients/${f.clientId}`).set('x-csrf-token', f.csrf()).send({ language: 'es' })).status).toBe(200);
+    await withTenant(t.ctx.pool, f.firmId, (tx) => enqueueReceiptMail(tx, t.ctx, { kind: 'payment', id: f.transfer }));
+    const [mail] = await outbox(f.firmId, `receipt:payment:${f.transfer}`);
+    // Intl (ICU) for es-US: the reference formatting of money and dates for a Spanish reader in the US
+    const amount = formatMoney('200.00', 'USD', 'es-US');
+    const on = new Intl.DateTimeFormat('es-US', { dateStyle: 'long', timeZone: 'UTC' }).format(new Date('2026-12-12T00:00:00Z'));
+    expect(mail.subject).toBe('Recibo RCT-0003 — Recibo Cal y Arena');
+    expect(mail.text).toContain(`recibió ${amount} de usted por transferencia bancaria TRF-88 el ${on} por la factura INV-0001`);
+    expect(mail.text).toContain('queda como saldo a favor en su cuenta');
+  });
 });
