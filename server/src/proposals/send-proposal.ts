@@ -10,6 +10,8 @@ import { proposalSentMail } from '../mail/proposal-templates';
 import { ensurePortalAccount } from './client-portal-account';
 import { assertEstimateOpen } from './estimates';
 import { getVersion } from './proposal-versions';
+import { localeOf } from '../i18n/catalog';
+import { clientReader } from '../i18n/reader';
 
 /** A proposal e-mail may sit unread for a while, so its sign-in link lasts longer than a requested one. */
 export const PROPOSAL_LINK_DAYS = 3;
@@ -65,6 +67,8 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
   const { token } = await createPortalLink(tx, account.id, sentAt, PROPOSAL_LINK_DAYS * 24 * 60);
   const base = ctx.config.PUBLIC_URL;
   const snap = version.snapshot;
+  // In the client's language (theirs, else the firm's), the date for it in the firm's country.
+  const reader = await clientReader(tx, client.id);
   await enqueueMail(tx, ctx.queue, {
     purposeKey: `proposal-sent:${id}`,
     tenantId: tx.tenantId,
@@ -75,12 +79,13 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
       clientName: client.name,
       title: snap.title,
       version: version.version,
-      expiresOn: new Intl.DateTimeFormat(snap.locale, { dateStyle: 'long', timeZone: 'UTC' }).format(
+      expiresOn: new Intl.DateTimeFormat(localeOf(reader.language, reader.country), { dateStyle: 'long', timeZone: 'UTC' }).format(
         new Date(`${snap.expiresOn}T00:00:00Z`),
       ),
       url: `${base}/portal/sign-in/link?token=${token}&next=/portal/proposals/${id}`,
       linkDays: PROPOSAL_LINK_DAYS,
       portalUrl: `${base}/portal/sign-in`,
+      language: reader.language,
     }),
   });
   await recordAudit(tx, {
