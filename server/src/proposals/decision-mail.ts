@@ -2,6 +2,7 @@ import type { SnapshotOption } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
+import { localeOf } from '../i18n/catalog';
 import { proposalAcceptedClientMail, proposalAcceptedMail, proposalAnsweredMail } from '../mail/acceptance-templates';
 import { firmDateTime, firmTimeZone } from '../mail/firm-time';
 import { enqueueMail } from '../mail/outbox';
@@ -28,6 +29,7 @@ export async function mailAcceptance(
 ): Promise<void> {
   const snap = p.row.snapshot;
   const base = ctx.config.PUBLIC_URL;
+  const timeZone = await firmTimeZone(tx, tx.tenantId);
   const common = {
     firmName: snap.firm.name,
     clientName: snap.client.name || p.client.name,
@@ -36,8 +38,9 @@ export async function mailAcceptance(
     optionLabel: p.option.label,
     total: money(snap.locale, snap.currency, p.option.total),
     signedName: p.signedName,
-    signedOn: firmDateTime(p.signedAt, snap.locale, await firmTimeZone(tx, tx.tenantId)),
+    signedOn: firmDateTime(p.signedAt, snap.locale, timeZone),
   };
+  const clientLocale = localeOf(p.client.language, p.client.country);
   for (const staff of await officeRecipients(tx)) {
     await enqueueMail(tx, ctx.queue, {
       purposeKey: `proposal-accepted:${p.row.id}:${staff.id}`,
@@ -52,7 +55,15 @@ export async function mailAcceptance(
     tenantId: tx.tenantId,
     to: p.client.email,
     sender: 'firm',
-    ...proposalAcceptedClientMail({ ...common, reference: p.row.snapshot_hash.slice(0, 12), url: `${base}/portal/proposals/${p.row.id}` }),
+    // The client's copy in their language (the principal carries it), money and dates for it in the firm's country.
+    ...proposalAcceptedClientMail({
+      ...common,
+      total: money(clientLocale, snap.currency, p.option.total),
+      signedOn: firmDateTime(p.signedAt, clientLocale, timeZone),
+      reference: p.row.snapshot_hash.slice(0, 12),
+      url: `${base}/portal/proposals/${p.row.id}`,
+      language: p.client.language,
+    }),
   });
 }
 
