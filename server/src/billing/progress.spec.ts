@@ -143,6 +143,8 @@ describe('progress marks', () => {
     }
     const history = await rows(job, `select kind, actor_user_id, note from job_progress where tenant_id = $1 and job_id = $2`);
     expect(history).toHaveLength(1);
+    // the first layer done puts a scheduled job under way
+    expect(await rows(job, `select status from jobs where tenant_id = $1 and id = $2`)).toEqual([{ status: 'in_progress' }]);
     const [doneBy] = await rows(job, `select done_by from job_work_items where tenant_id = $1 and job_id = $2 and id = $3`, [items[0].id]);
     expect(doneBy.done_by).toBe(history[0].actor_user_id);
     // Each mark asks the queue to check the job's billing triggers, in the same transaction.

@@ -216,6 +216,13 @@ export async function recordProgress(
     ],
   );
   if (!inserted.rows[0]) return progressView(tx, jobId);
+  // The first layer done means the work has started: a scheduled job is now under way.
+  if (mark.kind === 'layerDone') {
+    await tx.client.query(
+      `update jobs set status = 'in_progress', updated_at = $3 where tenant_id = $1 and id = $2 and status = 'scheduled'`,
+      [tx.tenantId, jobId, now],
+    );
+  }
 
   switch (mark.kind) {
     case 'layerDone':
