@@ -1,6 +1,8 @@
+import type { Language } from '@layerbook/contracts';
+import { translator } from '../../i18n/catalog';
 import { render, type RenderedMail } from '../../mail/templates';
 
-/** To the client: a change order to read and approve (or decline) in the portal. */
+/** To the client, in their language (English when the caller does not say): a change order to read and approve (or decline) in the portal. */
 export function changeOrderSentMail(p: {
   firmName: string;
   clientName: string;
@@ -11,18 +13,23 @@ export function changeOrderSentMail(p: {
   url: string;
   linkDays: number;
   portalUrl: string;
+  language?: Language;
 }): RenderedMail {
+  const language = p.language ?? 'en';
+  const t = translator(language);
+  const firm = p.firmName;
   return render(
-    `${p.firmName} sent you change order #${p.number}: ${p.title}`,
-    `A change to your job with ${p.firmName}`,
+    t('mail.changeOrderSent.subject', { firm, number: p.number, title: p.title }),
+    t('mail.changeOrderSent.heading', { firm }),
     [
-      `Hello ${p.clientName},`,
-      `${p.firmName} has written up change order #${p.number}, "${p.title}", for "${p.jobTitle}". It changes the contract sum by ${p.amount}.`,
-      `You can read it in your client portal and approve it with your typed name, or decline it. Nothing changes until you approve.`,
-      `The button signs you in once, within ${p.linkDays} days.`,
+      t('mail.hello', { name: p.clientName }),
+      t('mail.changeOrderSent.written', { firm, number: p.number, title: p.title, job: p.jobTitle, amount: p.amount }),
+      t('mail.changeOrderSent.howTo'),
+      t('mail.changeOrderSent.linkOnce', { days: p.linkDays }),
     ],
-    { label: 'Read the change order', url: p.url },
-    `Link used or expired? Ask for a new one at ${p.portalUrl}. You are receiving this because ${p.firmName} is working for you.`,
+    { label: t('mail.changeOrderSent.action'), url: p.url },
+    t('mail.changeOrderSent.footer', { firm, portalUrl: p.portalUrl }),
+    language,
   );
 }
 

@@ -12,6 +12,8 @@ import { ensurePortalAccount } from '../../proposals/client-portal-account';
 import { changeOrderSentMail } from './change-order-mail';
 import { priceChangeOrder, type PricingJob } from './pricing';
 import { loadChangeOrder, toView } from './read';
+import { localeOf } from '../../i18n/catalog';
+import { clientReader } from '../../i18n/reader';
 
 /** A change order e-mail may wait a few days to be read, like a proposal's. */
 export const CHANGE_ORDER_LINK_DAYS = 3;
@@ -167,6 +169,8 @@ export async function sendChangeOrder(tx: TenantTx, ctx: AppContext, actor: Acto
   ]);
   const { token } = await createPortalLink(tx, account.id, sentAt, CHANGE_ORDER_LINK_DAYS * 24 * 60);
   const base = ctx.config.PUBLIC_URL;
+  // In the client's language (theirs, else the firm's), the amount formatted for it in the firm's country.
+  const reader = await clientReader(tx, client.id);
   await enqueueMail(tx, ctx.queue, {
     purposeKey: `change-order:${id}`,
     tenantId: tx.tenantId,
@@ -178,10 +182,11 @@ export async function sendChangeOrder(tx: TenantTx, ctx: AppContext, actor: Acto
       jobTitle: job.title,
       number: row.number,
       title: row.title,
-      amount: formatMoney(row.amount, row.currency, `en-${firm.country}`),
+      amount: formatMoney(row.amount, row.currency, localeOf(reader.language, firm.country)),
       url: `${base}/portal/sign-in/link?token=${token}&next=/portal/change-orders/${id}`,
       linkDays: CHANGE_ORDER_LINK_DAYS,
       portalUrl: `${base}/portal/sign-in`,
+      language: reader.language,
     }),
   });
   await recordAudit(tx, {
