@@ -5,6 +5,7 @@ import type { AppContext } from '../context';
 import { SYSTEM_ACTOR } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
+import { firmReader } from '../i18n/reader';
 import { inquiryAcknowledgementMail, inquiryNotificationMail } from '../mail/inquiry-templates';
 import { createInquiry } from './service';
 
@@ -86,7 +87,8 @@ export async function submitPublicInquiry(ctx: AppContext, slug: string, input: 
       tenantId: tx.tenantId,
       to: input.email,
       sender: 'firm',
-      ...inquiryAcknowledgementMail({ firmName: firm.name, name: input.name }),
+      // The visitor is no client yet: the firm's own language.
+      ...inquiryAcknowledgementMail({ firmName: firm.name, name: input.name, language: (await firmReader(tx)).language }),
     });
     const staff = await tx.db
       .select({ userId: users.id, email: users.email, name: users.name })
