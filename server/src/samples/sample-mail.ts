@@ -1,19 +1,34 @@
+import type { Language } from '@layerbook/contracts';
 import { TenantTx } from '@layerbook/db';
 import type { AppContext } from '../context';
+import { translator } from '../i18n/catalog';
+import { clientReader } from '../i18n/reader';
 import { enqueueMail } from '../mail/outbox';
 import { render, RenderedMail } from '../mail/templates';
 import type { BoardRow } from './boards';
 
-export function boardShownMail(p: { firmName: string; name: string; label: string; round: number; url: string }): RenderedMail {
+/** To the client, in their language (English when the caller does not say): a board to look at in the portal. */
+export function boardShownMail(p: {
+  firmName: string;
+  name: string;
+  label: string;
+  round: number;
+  url: string;
+  language?: Language;
+}): RenderedMail {
+  const language = p.language ?? 'en';
+  const t = translator(language);
+  const firm = p.firmName;
   return render(
-    `${p.firmName} has a sample board for you to look at`,
-    `A sample board from ${p.firmName}`,
+    t('mail.boardShown.subject', { firm }),
+    t('mail.boardShown.heading', { firm }),
     [
-      `Hello ${p.name},`,
-      `${p.firmName} has made a sample board of your finish: "${p.label}"${p.round > 1 ? ` (round ${p.round})` : ''}. You can see its photos and the finish it shows, then approve it or ask for changes.`,
+      t('mail.hello', { name: p.name }),
+      t(p.round > 1 ? 'mail.boardShown.madeRound' : 'mail.boardShown.made', { firm, label: p.label, round: p.round }),
     ],
-    { label: 'See the sample board', url: p.url },
-    'Sign in with your e-mail address if the portal asks; we send you a one-time link.',
+    { label: t('mail.boardShown.action'), url: p.url },
+    t('mail.boardShown.footer'),
+    language,
   );
 }
 
@@ -53,6 +68,8 @@ export async function mailBoardShown(tx: TenantTx, ctx: AppContext, p: { board: 
     `select id, email, name from portal_users where tenant_id = $1 and client_id = $2 and status = 'active' order by id`,
     [tx.tenantId, p.board.clientId],
   );
+  // In the client's language (theirs, else the firm's).
+  const { language } = await clientReader(tx, p.board.clientId);
   for (const user of rows) {
     await enqueueMail(tx, ctx.queue, {
       // One e-mail per board and person, even if the request is retried.
@@ -66,6 +83,7 @@ export async function mailBoardShown(tx: TenantTx, ctx: AppContext, p: { board: 
         label: p.board.label,
         round: p.board.round,
         url: `${ctx.config.PUBLIC_URL}/portal/boards/${p.board.id}`,
+        language,
       }),
     });
   }
