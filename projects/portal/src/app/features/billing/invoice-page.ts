@@ -53,6 +53,14 @@ export class InvoicePage {
     const inv = this.invoice();
     return inv ? invoiceStatusWords(inv) : null;
   });
+  /** "Deposit from Kiln Lane Plaster for Hall limewash", in the reader's language. */
+  protected readonly meta = computed(() => {
+    this.language.current();
+    const inv = this.invoice();
+    if (!inv) return '';
+    const kind = String(this.translate.instant(`billing.kind.${inv.kind}`));
+    return String(this.translate.instant('billing.invoice.meta', { kind, firm: inv.document.firm.name, job: inv.jobTitle }));
+  });
   protected readonly progressColumns = PROGRESS_COLUMN_WORDS;
   protected readonly pdfUrl = computed(() => invoicePdfUrl(this.id()));
   protected readonly isZero = isZeroAmount;
