@@ -213,10 +213,10 @@ test("the crew's pages work on a phone: named controls, images with alt text, no
   await openLiveOnPhone(phone, '/today');
   await phone.getByRole('button', { name: 'Open navigation' }).click();
   const nav = phone.getByRole('navigation', { name: 'Main' });
-  for (const name of ['Today', 'Sample boards', 'Finish library', 'Team']) await expect(navLink(phone, name)).toBeVisible();
-  await expect(nav.getByRole('link')).toHaveCount(4);
+  for (const name of ['Today', 'Job sheets', 'Sample boards', 'Finish library', 'Team']) await expect(navLink(phone, name)).toBeVisible();
+  await expect(nav.getByRole('link')).toHaveCount(5);
   await phone.keyboard.press('Escape');
-  for (const path of ['/today', '/samples', '/library', '/team']) {
+  for (const path of ['/today', '/sheets', '/samples', '/library', '/team']) {
     await openLiveOnPhone(phone, path);
     await phone.waitForLoadState('networkidle');
     await look(phone, `crew-${path.slice(1)}`, found);

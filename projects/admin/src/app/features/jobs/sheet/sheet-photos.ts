@@ -48,7 +48,8 @@ const photosUrl = (jobId: string) => `/api/jobs/${encodeURIComponent(jobId)}/pho
     .fields {
       display: grid;
       grid-template-columns: repeat(auto-fit, minmax(min(100%, 14rem), 1fr));
-      gap: 0.5rem;
+      /* outlined fields float their label above the box: a row gap that leaves it clear of the field above */
+      gap: 1.25rem 0.75rem;
       margin-top: 0.5rem;
     }
   `,
