@@ -5,7 +5,6 @@ import { VISITOR_LANGUAGE } from '../../../shared/i18n/i18n-providers';
 import { routes } from './app.routes';
 import { Session } from './core/auth/session';
 import { API_SETTINGS } from './core/http/api-settings';
-import { provideTranslatedTitles } from './core/layout/translated-title';
 import { OfflineMarks } from './features/jobs/sheet/offline/offline-marks';
 
 export const appConfig = appConfigFor(API_SETTINGS, routes, [
@@ -16,7 +15,6 @@ export const appConfig = appConfigFor(API_SETTINGS, routes, [
       return () => session.load();
     },
   },
-  ...provideTranslatedTitles(),
   // A job sheet once opened stays readable without a connection (ngsw-config.json). Browser only
   // (the initializer does nothing while rendering on the server), from the site root whatever the
   // first page (the served HTML has no <base>), once the app is stable or after 30 s at most.

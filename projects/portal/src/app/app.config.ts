@@ -3,11 +3,9 @@ import { appConfigFor } from '../../../shared/app/app-config';
 import { VISITOR_LANGUAGE } from '../../../shared/i18n/i18n-providers';
 import { routes } from './app.routes';
 import { Session } from './core/auth/session';
-import { provideTranslatedTitles } from './core/layout/translated-title';
 import { API_SETTINGS } from './core/http/api-settings';
 
 export const appConfig = appConfigFor(API_SETTINGS, routes, [
-  ...provideTranslatedTitles(),
   {
     provide: VISITOR_LANGUAGE,
     useFactory: () => {

@@ -3,7 +3,7 @@ import { TestBed } from '@angular/core/testing';
 import { Title } from '@angular/platform-browser';
 import { Router, provideRouter } from '@angular/router';
 import { TranslateService } from '@ngx-translate/core';
-import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { provideTestI18n } from './testing';
 import { provideTranslatedTitles } from './translated-title';
 
 @Component({ template: '' })
