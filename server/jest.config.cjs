@@ -5,6 +5,5 @@ module.exports = {
   roots: ['<rootDir>/src'],
   transform: { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json' }] },
   globalSetup: '<rootDir>/src/testing/global-setup.ts',
-  setupFiles: ['<rootDir>/src/testing/pg-boss-delay.ts'],
   testTimeout: 30000,
 };
