@@ -45,18 +45,11 @@ describe('a large export is streamed', () => {
           // (a server that read everything first would commit instead, and never be found waiting).
           stream.pause();
           whilePaused = { received, session: undefined };
-          // Socket buffers take a few more batches before the server has to wait: found idle between two
-          // fetches is not yet waiting. Waiting = idle in its transaction, and still so 300 ms later.
-          let session: Awaited<ReturnType<typeof exportSession>>;
-          const idle = async () => (await exportSession())?.state === 'idle in transaction';
-          void eventually(async () => {
-            if (!(await idle())) return false;
-            await new Promise((resolve) => setTimeout(resolve, 300));
-            session = await exportSession();
-            return session?.state === 'idle in transaction';
-          }, 'the export to wait for its reader')
-            .then(() => {
-              whilePaused = { received, session };
+          void eventually(async () => (await exportSession())?.state === 'idle in transaction', 'the export to wait for its reader')
+            .then(async () => {
+              // still waiting a moment later, with nothing more sent
+              await new Promise((resolve) => setTimeout(resolve, 300));
+              whilePaused = { received, session: await exportSession() };
             })
             .finally(() => stream.resume());
         });
