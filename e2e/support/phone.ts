@@ -7,7 +7,9 @@ export const PHONE = { width: 390, height: 844 } as const;
  * the layout is the one a phone loads (not a desktop window squeezed mid-animation).
  */
 export async function onPhone(browser: Browser, page: Page): Promise<{ phone: Page; context: BrowserContext }> {
-  const context = await browser.newContext({ viewport: PHONE, storageState: await page.context().storageState() });
+  // The admin's service worker fetches the whole app once installed, so the network would never go idle
+  // while these journeys walk every page; the offline journey (crew-sheet.e2e.ts) runs with it.
+  const context = await browser.newContext({ viewport: PHONE, storageState: await page.context().storageState(), serviceWorkers: 'block' });
   return { phone: await context.newPage(), context };
 }
 
