@@ -36,6 +36,30 @@ export async function startQueue(config: Config, logger: Logger): Promise<Starte
     async send(name, data, tx) {
       await boss.send(name, data, { db: { executeSql: (text, values) => tx.client.query(text, values) } });
     },
-    stop: () => boss.stop({ graceful: true, timeout: 10_000, wait: true }),
+    stop: () => stopBoss(boss),
   };
+}
+
+interface PoolLike {
+  waitingCount: number;
+  idleCount: number;
+  totalCount: number;
+}
+
+/**
+ * pg-boss closes its pool as soon as no job is running, but a worker whose fetch is still queued for
+ * one of the pool's connections then waits forever (a pool that has ended never serves its queue), and
+ * pg-boss's own loop checking that its workers stopped keeps ticking. So the pool is closed here, once
+ * every fetch has come back and each worker has seen that it should stop.
+ */
+async function stopBoss(boss: PgBoss): Promise<void> {
+  await boss.stop({ graceful: true, timeout: 10_000, wait: true, close: false });
+  const db = boss.getDb() as unknown as { pool?: PoolLike; close(): Promise<void> };
+  const settled = (pool: PoolLike) => pool.waitingCount === 0 && pool.idleCount === pool.totalCount;
+  for (let waited = 0; db.pool && !settled(db.pool) && waited < 15_000; waited += 25) {
+    await new Promise((resolve) => setTimeout(resolve, 25));
+  }
+  // One more turn lets the last fetch's worker read its answer and mark itself stopped.
+  await new Promise((resolve) => setTimeout(resolve, 25));
+  await db.close();
 }

@@ -118,11 +118,6 @@ export async function startTestServer(
       await new Promise<void>((resolve) => listener.close(() => resolve()));
       await workers.stop();
       await queue.stop();
-      // pg-boss's stop resolves while a loop it started (offWork) still checks, once a second, that
-      // every worker has stopped; that check loads a Node module, which fails once jest has torn the
-      // test file down ("Cannot destructure property 'setTimeout'"). On a loaded machine a worker
-      // caught mid-fetch needs a second check: outlive two, while the rest closes.
-      const outlive = new Promise((resolve) => setTimeout(resolve, 2_100));
       // The stand-in goes after the queue: a job still talking to it (a refund, a session read) finishes
       // instead of retrying against a closed port while pg-boss waits for it.
       await stripe.stop();
@@ -132,7 +127,6 @@ export async function startTestServer(
       storage.close();
       await s3.stop();
       rmSync(s3Dir, { recursive: true, force: true });
-      await outlive;
     },
   };
 }
