@@ -1,7 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import { parse } from 'csv-parse/sync';
 import { expect, test } from '@playwright/test';
-import type { CashReceivables } from '@layerbook/contracts/types';
+import type { CashReceivableInvoices, CashReceivables } from '@layerbook/contracts/types';
 import { DEMO, signIn } from './support/people';
 import { openLive } from './support/phone';
 
@@ -21,7 +21,8 @@ test('the owner reads money owed by age, drills into an invoice 31–60 days lat
 
   // The figures the page shows come from the API; the same answer tells the journey what to expect.
   const owed = (await (await page.request.get('/api/cash/receivables')).json()) as CashReceivables;
-  const late = owed.invoices.find((invoice) => invoice.bucket === '31-60');
+  const older = (await (await page.request.get('/api/cash/receivables/invoices?age=31-60')).json()) as CashReceivableInvoices;
+  const late = older.invoices[0];
   expect(late, 'the demo seed should leave an invoice 31–60 days late').toBeDefined();
   if (!late) return;
   const money = new Intl.NumberFormat('en-US', { style: 'currency', currency: owed.currency });

@@ -42,8 +42,8 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
     const force = setTimeout(() => process.exit(1), 15_000).unref();
     await new Promise<void>((resolve) => (server ? server.close(() => resolve()) : resolve()));
     server?.closeAllConnections?.();
-    await workers?.stop();
     await queue.stop();
+    await workers?.stop();
     await pool.end();
     storage.close();
     clearTimeout(force);

@@ -8,7 +8,8 @@
 import os from 'node:os';
 import { OWED } from '../../../server/src/cash/forecast-inputs';
 import { JOB_MONEY } from '../../../server/src/cash/jobs-sql';
-import { RECEIVABLES_NOW } from '../../../server/src/cash/receivables-sql';
+import { AGING_BUCKETS, bucketDueDates } from '@layerbook/domain';
+import { RECEIVABLES_NOW, receivableInvoices } from '../../../server/src/cash/receivables-sql';
 import { RECEIVED_BY_DAY } from '../../../server/src/cash/received';
 import { localDate } from '../../../server/src/firms/local-date';
 import { DEMO, seedDemo } from '../../../server/src/seed/demo';
@@ -63,12 +64,23 @@ async function main(): Promise<void> {
       `machine: ${os.cpus().length} cores, load average ${os.loadavg()[0].toFixed(1)} at the start`,
   );
   const cases: Array<[string, string, { text: string; values: unknown[] }]> = [
-    ['receivables by age', '/api/cash/receivables', { text: RECEIVABLES_NOW, values: [firmId, today] }],
+    [
+      'receivables by age',
+      '/api/cash/receivables',
+      { text: RECEIVABLES_NOW, values: [firmId, today, ...AGING_BUCKETS.slice(0, 4).map((b) => bucketDueDates(b, today).from)] },
+    ],
     ['cash by month', '/api/cash/received', { text: RECEIVED_BY_DAY, values: [firmId, yearAgo] }],
     ['13-week forecast', '/api/cash/forecast', { text: OWED, values: [firmId] }],
     ['jobs and margins', '/api/cash/jobs', { text: JOB_MONEY, values: [firmId, 200] }],
   ];
-  for (const [label, url, sql] of cases) {
+  // Opening one age (a drill-down, not part of the page's first load): the 31–60 days' invoices.
+  const older = bucketDueDates('31-60', today);
+  const drill: (typeof cases)[number] = [
+    'drill-down 31–60',
+    '/api/cash/receivables/invoices?age=31-60',
+    { text: receivableInvoices(false), values: [firmId, today, null, older.from, older.to] },
+  ];
+  for (const [label, url, sql] of [...cases, drill]) {
     const httpJob = { mode: 'get', port, path: url, cookie: session };
     const pgJob = { mode: 'pg', databaseUrl: config.DATABASE_URL, tenantId: firmId, sql };
     await measure({ ...httpJob, total: 200 }); // warm-up

@@ -127,7 +127,7 @@ export { checkBillingSchedule } from './billing/schedule-check';
 
 // receivables
 export type { AgedReceivable, AgingBucket, AgingReport, ReceivableInput } from './receivables/aging';
-export { AGING_BUCKETS, ageReceivables, bucketFor } from './receivables/aging';
+export { AGING_BUCKETS, ageReceivables, bucketDueDates, bucketFor } from './receivables/aging';
 export type { Opportunity } from './receivables/weighted-pipeline';
 export { weightedPipeline } from './receivables/weighted-pipeline';
 export type { CashForecastInput, ExpectedReceipt, ForecastWeek } from './receivables/cash-forecast';

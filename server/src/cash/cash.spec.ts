@@ -1,5 +1,5 @@
-import type { BillingToday, CashForecast, CashJobs, CashReceivables, CashReceived } from '@layerbook/contracts';
-import { DEFAULT_BILLING_SETTINGS } from '@layerbook/contracts';
+import type { BillingToday, CashForecast, CashJobs, CashReceivableInvoices, CashReceivables, CashReceived } from '@layerbook/contracts';
+import { CASH_AGING_BUCKETS, DEFAULT_BILLING_SETTINGS } from '@layerbook/contracts';
 import Decimal from 'decimal.js';
 import { joinAs } from '../proposals/proposal-fixtures';
 import { toDepositCapRule } from '../billing/settings';
@@ -59,13 +59,50 @@ describe('receivables by age', () => {
     expect(body.asOf).toBe('2026-12-20');
     expect(body.buckets).toEqual({ current: '600.00', '1-30': '300.00', '31-60': '410.00', '61-90': '50.00', '90+': '75.00' });
     expect([body.total, body.retainage]).toEqual(['1435.00', '250.00']);
-    const row = (id: string) => body.invoices.find((i) => i.invoiceId === id);
+    expect(body.invoiceCount).toBe(5);
+    const list = await get<CashReceivableInvoices>(a.agent, '/api/cash/receivables/invoices');
+    expect(list.status).toBe(200);
+    const row = (id: string) => list.body.invoices.find((i) => i.invoiceId === id);
     expect([row(ids.i1)?.daysPastDue, row(ids.i1)?.bucket]).toEqual([30, '1-30']);
     expect([row(ids.i2)?.daysPastDue, row(ids.i2)?.bucket]).toEqual([31, '31-60']);
     expect(row(ids.i4)).toMatchObject({ number: 'INV-0004', amountDue: '50.00', retainage: '250.00', bucket: '61-90' });
     expect(row(ids.i6)).toBeUndefined(); // voided by its credit note
+    expect(list.body.invoices).toHaveLength(5);
     expect(body.clients).toHaveLength(1);
     expect(body.clients[0]).toMatchObject({ total: '1435.00', retainage: '250.00', invoiceCount: 5, clientId: row(ids.i1)?.clientId });
+  });
+
+  it('drills into one age and one client: the invoices whose sum the age shows, aged the same', async () => {
+    const summary = (await get<CashReceivables>(a.agent, '/api/cash/receivables')).body;
+    const clientId = summary.clients[0].clientId;
+    for (const age of CASH_AGING_BUCKETS) {
+      const { status, body } = await get<CashReceivableInvoices>(
+        a.agent,
+        `/api/cash/receivables/invoices?age=${encodeURIComponent(age)}&client=${clientId}`,
+      );
+      expect(status).toBe(200);
+      expect([body.age, body.clientId]).toEqual([age, clientId]);
+      expect(body.invoices.every((i) => i.bucket === age)).toBe(true);
+      const sum = body.invoices.reduce((s, i) => s.plus(i.amountDue), new Decimal(0)).toFixed(2);
+      expect([age, sum]).toEqual([age, summary.buckets[age]]);
+    }
+    // 31–60 on 20 December: due 20 October to 19 November — the invoice 31 days late, the first of them
+    const older = (await get<CashReceivableInvoices>(a.agent, '/api/cash/receivables/invoices?age=31-60')).body;
+    expect(older.invoices.map((i) => i.invoiceId)).toContain(ids.i2);
+    const past = (await get<CashReceivableInvoices>(a.agent, '/api/cash/receivables/invoices?asOf=2026-12-01&age=1-30')).body;
+    expect(past.invoices.reduce((s, i) => s.plus(i.amountDue), new Decimal(0)).toFixed(2)).toBe('1210.00');
+  });
+
+  it('names a bad age or client in the drill-down', async () => {
+    for (const [query, field] of [
+      ['age=45', 'age'],
+      ['client=nobody', 'client'],
+      ['colour=red', 'colour'],
+    ]) {
+      const res = await a.agent.get(`/api/cash/receivables/invoices?${query}`);
+      expect(res.status).toBe(400);
+      expect(JSON.stringify(res.body)).toContain(field);
+    }
   });
 
   it('a day later the 30-day invoice moves to 31–60', async () => {
@@ -181,7 +218,13 @@ describe('jobs and margins', () => {
   });
 
   it('crew gets 403 everywhere in /api/cash', async () => {
-    for (const url of ['/api/cash/receivables', '/api/cash/received', '/api/cash/forecast', '/api/cash/jobs']) {
+    for (const url of [
+      '/api/cash/receivables',
+      '/api/cash/receivables/invoices',
+      '/api/cash/received',
+      '/api/cash/forecast',
+      '/api/cash/jobs',
+    ]) {
       expect((await crew.agent.get(url)).status).toBe(403);
     }
   });
@@ -190,7 +233,8 @@ describe('jobs and margins', () => {
 describe('isolation and Today', () => {
   it('another firm’s invoices and payments never appear', async () => {
     const rec = (await get<CashReceivables>(b.agent, '/api/cash/receivables')).body;
-    expect(rec.invoices).toHaveLength(0);
+    expect(rec.clients).toHaveLength(0);
+    expect((await get<CashReceivableInvoices>(b.agent, '/api/cash/receivables/invoices')).body.invoices).toHaveLength(0);
     expect(rec.total).toBe('0.00');
     const received = (await get<CashReceived>(b.agent, '/api/cash/received')).body;
     expect(received.totals.received).toBe('900.00');

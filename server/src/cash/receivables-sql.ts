@@ -1,7 +1,8 @@
 /**
  * The open invoices as of a date, with the retainage still held on each progress-billed job (kept on
  * its last issued progress application, apart from what is due: held there less releases billed,
- * as billing's retainageHeld reads it). $1 tenant, $2 the as-of date.
+ * as billing's retainageHeld reads it). Each query below starts from `owed_rows` (id, client_id,
+ * job_id, due_on, owed ≥ 0, retainage ≥ 0): $1 tenant, $2 the as-of date.
  */
 const LIVE = `('issued', 'part_paid', 'paid', 'refunded')`;
 const OPEN = `('issued', 'part_paid', 'refunded')`;
@@ -19,25 +20,24 @@ const RETAINAGE = (issuedBy: string) => `held as (
   retainage as (
     select h.id, greatest(h.retainage_held - coalesce(r.amount, 0), 0) as amount from held h left join released r on r.job_id = h.job_id)`;
 
-const COLUMNS = `i.id, i.number_text, i.client_id, c.name as client_name, i.job_id, j.title as job_title, i.due_on::text as due_on`;
-const JOINS = `join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id join clients c on c.tenant_id = i.tenant_id and c.id = i.client_id`;
-
 /** As of today or later: the invoices' own running figures (index on status and due date). */
-export const RECEIVABLES_NOW = `with ${RETAINAGE('')}
-  select ${COLUMNS}, (i.total - i.amount_paid - i.amount_credited)::text as owed, coalesce(r.amount, 0)::text as retainage
-    from invoices i ${JOINS} left join retainage r on r.id = i.id
-   where i.tenant_id = $1 and i.status in ${OPEN} and i.due_on is not null and $2::date is not null
-     and (i.total - i.amount_paid - i.amount_credited > 0 or r.amount > 0)
-  union all
-  select ${COLUMNS}, '0', r.amount::text
-    from retainage r join invoices i on i.tenant_id = $1 and i.id = r.id ${JOINS}
-   where i.status not in ${OPEN} and i.due_on is not null and r.amount > 0`;
+const OWED_NOW = `with ${RETAINAGE('')},
+  owed_rows as (
+    select i.id, i.client_id, i.job_id, i.due_on, greatest(i.total - i.amount_paid - i.amount_credited, 0) as owed,
+           coalesce(r.amount, 0) as retainage
+      from invoices i left join retainage r on r.id = i.id
+     where i.tenant_id = $1 and i.status in ${OPEN} and i.due_on is not null and $2::date is not null
+       and (i.total - i.amount_paid - i.amount_credited > 0 or r.amount > 0)
+    union all
+    select i.id, i.client_id, i.job_id, i.due_on, 0, r.amount
+      from retainage r join invoices i on i.tenant_id = $1 and i.id = r.id
+     where i.status not in ${OPEN} and i.due_on is not null and r.amount > 0)`;
 
 /**
  * As of a past date: invoices issued by then, less payments received by then, refunds given by then
  * (succeeded) and credit notes issued by then.
  */
-export const RECEIVABLES_AS_OF = `with ${RETAINAGE('and i.issued_on <= $2::date')},
+const OWED_AS_OF = `with ${RETAINAGE('and i.issued_on <= $2::date')},
   paid as (select p.invoice_id, sum(p.amount_applied) as amount from payments p
             where p.tenant_id = $1 and p.received_on <= $2::date group by p.invoice_id),
   refunded as (select f.invoice_id, sum(f.amount) as amount from refunds f
@@ -45,14 +45,51 @@ export const RECEIVABLES_AS_OF = `with ${RETAINAGE('and i.issued_on <= $2::date'
   credited as (select n.invoice_id, sum(n.amount) as amount from credit_notes n
             where n.tenant_id = $1 and n.issued_on <= $2::date group by n.invoice_id),
   balances as (
-    select i.id, i.total - greatest(coalesce(p.amount, 0) - coalesce(f.amount, 0), 0) - coalesce(n.amount, 0) as owed
+    select i.id, i.client_id, i.job_id, i.due_on,
+           i.total - greatest(coalesce(p.amount, 0) - coalesce(f.amount, 0), 0) - coalesce(n.amount, 0) as owed
       from invoices i left join paid p on p.invoice_id = i.id left join refunded f on f.invoice_id = i.id
       left join credited n on n.invoice_id = i.id
-     where i.tenant_id = $1 and i.status <> 'draft' and i.issued_on <= $2::date)
-  select ${COLUMNS}, b.owed::text as owed, coalesce(r.amount, 0)::text as retainage
-    from balances b join invoices i on i.tenant_id = $1 and i.id = b.id ${JOINS}
-    left join retainage r on r.id = i.id
-   where i.due_on is not null and (b.owed > 0 or r.amount > 0)`;
+     where i.tenant_id = $1 and i.status <> 'draft' and i.issued_on <= $2::date and i.due_on is not null),
+  owed_rows as (
+    select b.id, b.client_id, b.job_id, b.due_on, greatest(b.owed, 0) as owed, coalesce(r.amount, 0) as retainage
+      from balances b left join retainage r on r.id = b.id
+     where b.owed > 0 or r.amount > 0)`;
+
+const owed = (past: boolean) => (past ? OWED_AS_OF : OWED_NOW);
+
+/**
+ * Per client and age, summed: $3–$6 the first due date of the ages 'current', '1-30', '31-60' and
+ * '61-90' (packages/domain's bucketDueDates); anything older is '90+'. The latest due date in each
+ * sum stands for it (every date in one age ages the same).
+ */
+export const receivablesByClientAge = (past: boolean) => `${owed(past)}
+  select o.client_id, c.name as client_name, max(o.due_on)::text as due_on, sum(o.owed)::text as owed,
+         sum(o.retainage)::text as retainage, count(*)::int as invoice_count
+    from owed_rows o join clients c on c.tenant_id = $1 and c.id = o.client_id
+   group by o.client_id, c.name,
+            case when o.due_on >= $3::date then 0 when o.due_on >= $4::date then 1 when o.due_on >= $5::date then 2
+                 when o.due_on >= $6::date then 3 else 4 end`;
+
+/** One row per open invoice: $3 a client or null, $4–$5 due dates from and to (either null: no bound). */
+export const receivableInvoices = (past: boolean) => `${owed(past)}
+  select o.id, i.number_text, o.client_id, c.name as client_name, o.job_id, j.title as job_title, o.due_on::text as due_on,
+         o.owed::text as owed, o.retainage::text as retainage
+    from owed_rows o join invoices i on i.tenant_id = $1 and i.id = o.id
+    join jobs j on j.tenant_id = $1 and j.id = o.job_id join clients c on c.tenant_id = $1 and c.id = o.client_id
+   where ($3::uuid is null or o.client_id = $3::uuid) and ($4::date is null or o.due_on >= $4::date)
+     and ($5::date is null or o.due_on <= $5::date)`;
+
+/** What the benchmark runs raw: the page's summary as of today. */
+export const RECEIVABLES_NOW = receivablesByClientAge(false);
+
+export interface ReceivableSumRow {
+  client_id: string;
+  client_name: string;
+  due_on: string;
+  owed: string;
+  retainage: string;
+  invoice_count: number;
+}
 
 export interface ReceivableRow {
   id: string;

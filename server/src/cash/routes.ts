@@ -1,6 +1,8 @@
 import {
   cashEmptyQuery,
+  cashReceivableInvoicesQuery,
   cashReceivablesQuery,
+  type CashReceivableInvoices,
   type CashForecast,
   type CashJobs,
   type CashReceivables,
@@ -12,11 +14,11 @@ import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { cashForecastView } from './forecast';
 import { cashJobs } from './jobs';
-import { cashReceivables } from './receivables';
+import { cashReceivableInvoices, cashReceivables } from './receivables';
 import { cashReceived } from './received';
 
 /**
- * The owner's cash, mounted at /api/cash: receivables by age, cash by month, the 13-week forecast,
+ * The owner's cash, mounted at /api/cash: receivables by age (and the invoices behind a figure), cash by month, the 13-week forecast,
  * jobs. Owner and office (crew 403 before any parsing); margins for the owner only.
  */
 export function cashRoutes(ctx: AppContext): Router {
@@ -25,6 +27,13 @@ export function cashRoutes(ctx: AppContext): Router {
   router.get('/receivables', async (req, res) => {
     const view = await withStaff(ctx, req, 'office', (tx) => cashReceivables(tx, ctx.now(), parse(cashReceivablesQuery, req.query).asOf));
     res.json(view satisfies CashReceivables);
+  });
+
+  router.get('/receivables/invoices', async (req, res) => {
+    const view = await withStaff(ctx, req, 'office', (tx) =>
+      cashReceivableInvoices(tx, ctx.now(), parse(cashReceivableInvoicesQuery, req.query)),
+    );
+    res.json(view satisfies CashReceivableInvoices);
   });
 
   router.get('/received', async (req, res) => {

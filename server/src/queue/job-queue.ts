@@ -11,6 +11,9 @@ export interface JobQueue {
 
 export interface StartedQueue extends JobQueue {
   readonly boss: PgBoss;
+  /** One job at a time per call, polled every half second; counted, so `stop` can wait for the handler. */
+  work<T extends object>(name: string, handle: (data: T) => Promise<unknown>): Promise<void>;
+  /** Takes no more jobs, lets the ones running finish and record their outcome, then closes pg-boss's pool. */
   stop(): Promise<void>;
 }
 
@@ -31,12 +34,24 @@ export async function startQueue(config: Config, logger: Logger): Promise<Starte
      GRANT INSERT ON pgboss.job TO layerbook_app;`,
     [],
   );
+  let running = 0;
   return {
     boss,
+    async work<T extends object>(name: string, handle: (data: T) => Promise<unknown>) {
+      await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: 0.5 }, async ([job]) => {
+        if (!job) return;
+        running += 1;
+        try {
+          await handle(job.data);
+        } finally {
+          running -= 1;
+        }
+      });
+    },
     async send(name, data, tx) {
       await boss.send(name, data, { db: { executeSql: (text, values) => tx.client.query(text, values) } });
     },
-    stop: () => stopBoss(boss),
+    stop: () => stopBoss(boss, () => running === 0),
   };
 }
 
@@ -47,19 +62,26 @@ interface PoolLike {
 }
 
 /**
- * pg-boss closes its pool as soon as no job is running, but a worker whose fetch is still queued for
- * one of the pool's connections then waits forever (a pool that has ended never serves its queue), and
- * pg-boss's own loop checking that its workers stopped keeps ticking. So the pool is closed here, once
- * every fetch has come back and each worker has seen that it should stop.
+ * pg-boss closes its pool as soon as no job is running, but a worker whose fetch is still on its way
+ * then either waits forever (an ended pool never serves its queue; pg-boss's own loop checking that
+ * its workers stopped keeps ticking) or takes a job it can no longer mark done (left active until it
+ * expires). So the pool is closed here, once no fetch or handler is under way and each worker has
+ * read that it should stop: a quiet moment seen after a timer turn (the steps of a worker's loop
+ * follow each other without one).
  */
-async function stopBoss(boss: PgBoss): Promise<void> {
+async function stopBoss(boss: PgBoss, handlersIdle: () => boolean): Promise<void> {
   await boss.stop({ graceful: true, timeout: 10_000, wait: true, close: false });
   const db = boss.getDb() as unknown as { pool?: PoolLike; close(): Promise<void> };
-  const settled = (pool: PoolLike) => pool.waitingCount === 0 && pool.idleCount === pool.totalCount;
-  for (let waited = 0; db.pool && !settled(db.pool) && waited < 15_000; waited += 25) {
+  const quiet = () => handlersIdle() && (!db.pool || (db.pool.waitingCount === 0 && db.pool.idleCount === db.pool.totalCount));
+  for (let waited = 0, quietTurns = 0; quietTurns < 2 && waited < 15_000; waited += 25) {
     await new Promise((resolve) => setTimeout(resolve, 25));
+    quietTurns = quiet() ? quietTurns + 1 : 0;
   }
-  // One more turn lets the last fetch's worker read its answer and mark itself stopped.
-  await new Promise((resolve) => setTimeout(resolve, 25));
   await db.close();
+}
+
+interface PoolLike {
+  waitingCount: number;
+  idleCount: number;
+  totalCount: number;
 }

@@ -36,16 +36,12 @@ export interface Workers {
  * process give concurrency, each handling one job so a failure retries only that job.
  */
 async function workEach<T extends object>(
-  boss: StartedQueue['boss'],
+  queue: StartedQueue,
   name: string,
   workers: number,
   handle: (data: T) => Promise<unknown>,
 ): Promise<void> {
-  for (let i = 0; i < workers; i++) {
-    await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: 0.5 }, async ([job]) => {
-      if (job) await handle(job.data);
-    });
-  }
+  for (let i = 0; i < workers; i++) await queue.work<T>(name, handle);
 }
 
 /**
@@ -56,26 +52,26 @@ export async function startWorkers(config: Config, queue: StartedQueue, logger: 
   const pool = new Pool({ connectionString: config.DATABASE_JOBS_URL, max: 4, application_name: 'layerbook-worker' });
   const transport = nodemailer.createTransport({ host: config.SMTP_HOST, port: config.SMTP_PORT, secure: false, ignoreTLS: true });
   const { boss } = queue;
-  await workEach<MailSendJob>(boss, QUEUES.mailSend, 4, (data) => sendOutboxMail(pool, transport, config.MAIL_FROM, data, logger));
-  await workEach<FollowUpSweepJob>(boss, QUEUES.followUpSweep, 1, (data) => sweepFollowUps(pool, queue, data ?? {}, now()));
+  await workEach<MailSendJob>(queue, QUEUES.mailSend, 4, (data) => sendOutboxMail(pool, transport, config.MAIL_FROM, data, logger));
+  await workEach<FollowUpSweepJob>(queue, QUEUES.followUpSweep, 1, (data) => sweepFollowUps(pool, queue, data ?? {}, now()));
   // Each firm's morning job: the follow-up digest for the staff, then reminders of proposals about to lapse.
-  await workEach<FollowUpDigestJob>(boss, QUEUES.followUpDigest, 2, async (data) => {
+  await workEach<FollowUpDigestJob>(queue, QUEUES.followUpDigest, 2, async (data) => {
     await sendFollowUpDigest(pool, queue, config, data, logger);
     await sendProposalReminders(pool, queue, config, data, logger, now());
   });
   // Billing: a job's triggers after a mark; hourly, each firm's billing day at its local hour (date triggers, reminders).
-  await workEach<BillingEvaluateJob>(boss, QUEUES.billingEvaluate, 2, (data) => runBillingEvaluate(pool, data, now()));
-  await workEach<BillingSweepJob>(boss, QUEUES.billingSweep, 1, (data) => sweepBilling(pool, queue, data ?? {}, now()));
-  await workEach<BillingDailyJob>(boss, QUEUES.billingDaily, 2, (data) => runBillingDaily(pool, queue, config, data, logger, now()));
+  await workEach<BillingEvaluateJob>(queue, QUEUES.billingEvaluate, 2, (data) => runBillingEvaluate(pool, data, now()));
+  await workEach<BillingSweepJob>(queue, QUEUES.billingSweep, 1, (data) => sweepBilling(pool, queue, data ?? {}, now()));
+  await workEach<BillingDailyJob>(queue, QUEUES.billingDaily, 2, (data) => runBillingDaily(pool, queue, config, data, logger, now()));
   // Payments: each stored processor event applied exactly once (several at a time); the reconciliation
   // fetches what the webhook missed and queues again what was never applied.
   const stripe = processorFor(config);
   const paymentDeps = { queue, config };
-  await workEach<PaymentsApplyJob>(boss, QUEUES.paymentsApply, 3, (data) => applyStoredEvent(pool, paymentDeps, data, now()));
-  await workEach<object>(boss, QUEUES.paymentsReconcile, 1, async () => {
+  await workEach<PaymentsApplyJob>(queue, QUEUES.paymentsApply, 3, (data) => applyStoredEvent(pool, paymentDeps, data, now()));
+  await workEach<object>(queue, QUEUES.paymentsReconcile, 1, async () => {
     if (stripe) await reconcileEvents(pool, queue, stripe, now(), logger);
   });
-  await workEach<object>(boss, QUEUES.pruneExpired, 1, async () => logger.info(await pruneExpired(pool, now()), 'pruned expired rows'));
+  await workEach<object>(queue, QUEUES.pruneExpired, 1, async () => logger.info(await pruneExpired(pool, now()), 'pruned expired rows'));
   // Declared once; pg-boss keeps one schedule per queue however many processes call this.
   await boss.schedule(QUEUES.followUpSweep, FOLLOW_UP_SWEEP_CRON, {}, { tz: 'UTC' });
   await boss.schedule(QUEUES.pruneExpired, PRUNE_EXPIRED_CRON, {}, { tz: 'UTC' });
@@ -83,7 +79,7 @@ export async function startWorkers(config: Config, queue: StartedQueue, logger: 
   if (stripe) await boss.schedule(QUEUES.paymentsReconcile, config.PAYMENTS_RECONCILE_CRON, {}, { tz: 'UTC' });
   return {
     async stop() {
-      // Workers stop with the queue (boss.stop); here only what the workers opened.
+      // The queue stops first (no more jobs, the running ones finished); here only what the workers opened.
       transport.close();
       await pool.end();
     },

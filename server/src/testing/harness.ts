@@ -116,8 +116,8 @@ export async function startTestServer(
     async stop() {
       listener.closeAllConnections();
       await new Promise<void>((resolve) => listener.close(() => resolve()));
-      await workers.stop();
       await queue.stop();
+      await workers.stop();
       // The stand-in goes after the queue: a job still talking to it (a refund, a session read) finishes
       // instead of retrying against a closed port while pg-boss waits for it.
       await stripe.stop();

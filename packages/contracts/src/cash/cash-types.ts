@@ -59,9 +59,19 @@ export interface CashReceivables {
   readonly total: string;
   /** retainage held, apart from the buckets */
   readonly retainage: string;
+  /** how many open invoices (or invoices with retainage still held) make up the figures */
+  readonly invoiceCount: number;
   /** largest total first */
   readonly clients: readonly CashReceivableClient[];
-  /** most days past due first */
+}
+
+/** GET /api/cash/receivables/invoices?asOf&age&client: the invoices behind a figure (the drill-down). */
+export interface CashReceivableInvoices {
+  readonly asOf: string;
+  readonly currency: string;
+  readonly age: CashAgingBucket | null;
+  readonly clientId: string | null;
+  /** most days past due first, then by number */
   readonly invoices: readonly CashReceivableInvoice[];
 }
 

@@ -1,9 +1,18 @@
 import { z } from 'zod';
-import { isoDate } from '../common/fields';
+import { isoDate, uuid } from '../common/fields';
+import { CASH_AGING_BUCKETS } from './cash-types';
 
 /** GET /api/cash/receivables: the aging date; absent = today in the firm's zone. */
 export const cashReceivablesQuery = z.strictObject({ asOf: isoDate.optional() });
 export type CashReceivablesQuery = z.infer<typeof cashReceivablesQuery>;
+
+/** GET /api/cash/receivables/invoices: the drill-down — one age, one client, both or neither. */
+export const cashReceivableInvoicesQuery = z.strictObject({
+  asOf: isoDate.optional(),
+  age: z.enum(CASH_AGING_BUCKETS, { error: `An age is one of ${CASH_AGING_BUCKETS.join(', ')}.` }).optional(),
+  client: uuid('client').optional(),
+});
+export type CashReceivableInvoicesQuery = z.infer<typeof cashReceivableInvoicesQuery>;
 
 /** GET /api/cash/received, /forecast and /jobs take no query. */
 export const cashEmptyQuery = z.strictObject({});

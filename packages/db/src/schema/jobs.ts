@@ -57,6 +57,10 @@ export const jobs = pgTable(
   (t) => [
     uniqueIndex('jobs_proposal_version_key').on(t.tenantId, t.proposalVersionId),
     index('jobs_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
+    // the cash page looks for retainage held on progress-billed jobs only
+    index('jobs_progress_idx')
+      .on(t.tenantId)
+      .where(sql`billing_method = 'progress'`),
     tenantPolicy('jobs'),
   ],
 );

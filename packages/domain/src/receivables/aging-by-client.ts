@@ -27,7 +27,7 @@ export function agingByClient(aged: readonly AgedReceivable[], clientOf: (invoic
     row.buckets[inv.bucket] = row.buckets[inv.bucket].plus(inv.open);
     row.total = row.total.plus(inv.open);
     row.retainage = row.retainage.plus(inv.retainage);
-    row.invoiceCount += 1;
+    row.invoiceCount += inv.invoiceCount;
   }
   return [...byClient.values()].sort(
     (a, b) => b.total.comparedTo(a.total) || (a.clientId < b.clientId ? -1 : a.clientId > b.clientId ? 1 : 0),

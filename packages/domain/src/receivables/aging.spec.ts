@@ -1,5 +1,6 @@
 import { expectInputError } from '../errors/expect-input-error';
-import { ageReceivables, bucketFor } from './aging';
+import { AGING_BUCKETS, ageReceivables, bucketDueDates, bucketFor } from './aging';
+import { agingByClient } from './aging-by-client';
 
 /** DOMAIN.md §2.12 [D]; buckets by days past due are an accounting convention (common practice). */
 describe('receivables aging', () => {
@@ -58,5 +59,52 @@ describe('receivables aging', () => {
       'invoices[0].payments[0]',
     );
     expectInputError(() => ageReceivables([], 'today'), 'asOf');
+  });
+});
+
+describe('an age as due dates', () => {
+  const asOf = '2025-06-30';
+
+  it('gives each age the due dates whose days past due fall in it, ends included (common practice, no source)', () => {
+    expect(bucketDueDates('current', asOf)).toEqual({ from: '2025-06-30', to: null });
+    expect(bucketDueDates('1-30', asOf)).toEqual({ from: '2025-05-31', to: '2025-06-29' });
+    expect(bucketDueDates('31-60', asOf)).toEqual({ from: '2025-05-01', to: '2025-05-30' });
+    expect(bucketDueDates('61-90', asOf)).toEqual({ from: '2025-04-01', to: '2025-04-30' });
+    expect(bucketDueDates('90+', asOf)).toEqual({ from: null, to: '2025-03-31' });
+  });
+
+  it('agrees with the aging for every due date a year either side', () => {
+    const due = (offset: number) => new Date(Date.UTC(2025, 5, 30 - offset)).toISOString().slice(0, 10);
+    for (let days = -365; days <= 365; days++) {
+      const [aged] = ageReceivables([{ id: 'x', dueDate: due(days), amount: '1.00' }], asOf).invoices;
+      for (const bucket of AGING_BUCKETS) {
+        const { from, to } = bucketDueDates(bucket, asOf);
+        const inside = (from === null || due(days) >= from) && (to === null || due(days) <= to);
+        expect([days, bucket, inside]).toEqual([days, bucket, aged.bucket === bucket]);
+      }
+    }
+  });
+});
+
+describe('invoices due the same day summed first', () => {
+  it('ages and counts the same as the invoices one by one', () => {
+    const one = ageReceivables(
+      [
+        { id: 'a', dueDate: '2025-05-15', amount: '1000.00', retainageHeld: '100.00' },
+        { id: 'b', dueDate: '2025-05-15', amount: '250.00' },
+      ],
+      '2025-06-30',
+    );
+    const summed = ageReceivables(
+      [{ id: 'ab', dueDate: '2025-05-15', amount: '1250.00', retainageHeld: '100.00', invoiceCount: 2 }],
+      '2025-06-30',
+    );
+    expect(summed.buckets['31-60'].toFixed(2)).toBe(one.buckets['31-60'].toFixed(2));
+    expect(summed.retainage.toFixed(2)).toBe(one.retainage.toFixed(2));
+    expect(agingByClient(summed.invoices, () => 'c')[0].invoiceCount).toBe(2);
+    expectInputError(
+      () => ageReceivables([{ id: 'x', dueDate: '2025-05-15', amount: '1.00', invoiceCount: 0 }], '2025-06-30'),
+      'invoices[0].invoiceCount',
+    );
   });
 });

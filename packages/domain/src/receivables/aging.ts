@@ -1,5 +1,6 @@
 import Decimal from 'decimal.js';
-import { type IsoDate, toDayNumber } from '../calendar/local-date';
+import { fromDayNumber, type IsoDate, toDayNumber } from '../calendar/local-date';
+import { DomainInputError } from '../errors/domain-input-error';
 import { toNonNegativeMoney } from '../errors/input-checks';
 import type { MoneyInput } from '../money/money';
 
@@ -14,6 +15,11 @@ export interface ReceivableInput {
   payments?: readonly MoneyInput[];
   /** part of `amount` not due until retainage is released */
   retainageHeld?: MoneyInput;
+  /**
+   * How many invoices this line stands for (default 1): invoices due the same day can be summed
+   * first, since the age depends on the due date alone and each sum adds up the same.
+   */
+  invoiceCount?: number;
 }
 
 export interface AgedReceivable {
@@ -23,6 +29,7 @@ export interface AgedReceivable {
   /** due now: amount − retainage − payments (payments go to the due part first) */
   open: Decimal;
   retainage: Decimal;
+  invoiceCount: number;
 }
 
 export interface AgingReport {
@@ -41,6 +48,28 @@ export function bucketFor(daysPastDue: number): AgingBucket {
   if (daysPastDue <= 60) return '31-60';
   if (daysPastDue <= 90) return '61-90';
   return '90+';
+}
+
+/** The days past due that make up each age, first and last (null: open-ended). */
+const BUCKET_DAYS: Readonly<Record<AgingBucket, readonly [number | null, number | null]>> = {
+  current: [null, 0],
+  '1-30': [1, 30],
+  '31-60': [31, 60],
+  '61-90': [61, 90],
+  '90+': [91, null],
+};
+
+/**
+ * The due dates whose invoices fall in an age as of a day, both ends included (null: no bound), so
+ * a drill-down can ask for one age's invoices and still age them here.
+ */
+export function bucketDueDates(bucket: AgingBucket, asOf: IsoDate): { from: IsoDate | null; to: IsoDate | null } {
+  const today = toDayNumber(asOf, 'asOf');
+  const [fewest, most] = BUCKET_DAYS[bucket];
+  return {
+    from: most === null ? null : fromDayNumber(today - most),
+    to: fewest === null ? null : fromDayNumber(today - fewest),
+  };
 }
 
 /** Ages open receivables by days past due as of a date (accounting glossaries; common practice). */
@@ -71,7 +100,10 @@ export function ageReceivables(invoices: readonly ReceivableInput[], asOf: IsoDa
     const bucket = bucketFor(daysPastDue);
     buckets[bucket] = buckets[bucket].plus(open);
     retainageTotal = retainageTotal.plus(retainageOpen);
-    return { id: inv.id, daysPastDue, bucket, open, retainage: retainageOpen };
+    const invoiceCount = inv.invoiceCount ?? 1;
+    if (!Number.isInteger(invoiceCount) || invoiceCount < 1)
+      throw new DomainInputError(`${at}.invoiceCount`, 'The invoice count must be a whole number of 1 or more.');
+    return { id: inv.id, daysPastDue, bucket, open, retainage: retainageOpen, invoiceCount };
   });
   const total = AGING_BUCKETS.reduce((a, b) => a.plus(buckets[b]), new Decimal(0));
   return { asOf, basis: 'daysPastDue', buckets, retainage: retainageTotal, total, invoices: aged };

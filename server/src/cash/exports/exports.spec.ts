@@ -1,6 +1,7 @@
 import {
   CASH_AGING_BUCKET_LABELS,
   CASH_AGING_BUCKETS,
+  type CashReceivableInvoices,
   type CashReceivables,
   type FirmSettings,
   type InvoiceSummary,
@@ -231,8 +232,9 @@ describe('CSV exports for the accountant', () => {
     expect(res.headers['content-disposition']).toBe(`attachment; filename="${slug}-receivables-2026-12-20.csv"`);
     const rows = rowsOf(res);
     const page = (await a.agent.get('/api/cash/receivables?asOf=2026-12-20')).body as CashReceivables;
+    const list = (await a.agent.get('/api/cash/receivables/invoices?asOf=2026-12-20')).body as CashReceivableInvoices;
     expect(rows.map((r) => [r['Invoice number'], r['Days past due'], r.Age, r['Amount due']])).toEqual(
-      page.invoices.map((i) => [i.number, String(i.daysPastDue), CASH_AGING_BUCKET_LABELS[i.bucket], i.amountDue]),
+      list.invoices.map((i) => [i.number, String(i.daysPastDue), CASH_AGING_BUCKET_LABELS[i.bucket], i.amountDue]),
     );
     // INV-0001: due 3 November, 600.00 open on 20 December — 47 days late (accounting glossaries; common practice)
     expect(rows.find((r) => r['Invoice number'] === 'INV-0001')).toMatchObject({ 'Days past due': '47', 'Amount due': '600.00' });

@@ -1,4 +1,4 @@
-import { CASH_AGING_BUCKET_LABELS, type CashReceivables } from '@layerbook/contracts';
+import { CASH_AGING_BUCKET_LABELS, type CashReceivableInvoices } from '@layerbook/contracts';
 import { stringify } from 'csv-stringify/sync';
 import { neutralise } from './neutralise';
 
@@ -8,9 +8,9 @@ const HEADER = ['Invoice number', 'Client', 'Job', 'Due on', 'Days past due', 'A
  * The receivables page as a file: the same aging (packages/domain, through the cash API's own
  * service), one row per open invoice, so every bucket and the retainage add up to what the page
  * shows for that day. Days past due is negative before the due date: ours, a plain number.
- * It is as long as the page's drill-down (the open invoices), so it is written in one piece.
+ * It is as long as the page's full drill-down (the open invoices), so it is written in one piece.
  */
-export function receivablesCsv(view: CashReceivables): string {
+export function receivablesCsv(view: CashReceivableInvoices): string {
   const rows = view.invoices.map((i) => [
     neutralise(i.number),
     neutralise(i.clientName),

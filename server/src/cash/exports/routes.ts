@@ -4,7 +4,7 @@ import { Router } from 'express';
 import type { AppContext } from '../../context';
 import { withStaff } from '../../http/guards';
 import { parse } from '../../http/validate';
-import { cashReceivables } from '../receivables';
+import { cashReceivableInvoices } from '../receivables';
 import { streamCsv } from './csv-stream';
 import { EXPORTS } from './export-kinds';
 import { parseExportRequest } from './export-query';
@@ -35,7 +35,7 @@ export function cashExportRoutes(ctx: AppContext): Router {
   // The receivables page's aging as of a day (default today in the firm's zone), as the page shows it.
   router.get('/receivables.csv', async (req, res) => {
     const file = await withStaff(ctx, req, 'office', async (tx) => {
-      const view = await cashReceivables(tx, ctx.now(), parse(cashReceivablesQuery, req.query).asOf);
+      const view = await cashReceivableInvoices(tx, ctx.now(), parse(cashReceivablesQuery, req.query));
       return { name: await fileName(tx, `receivables-${view.asOf}`), text: receivablesCsv(view) };
     });
     res.status(200).set(csvHeaders(file.name)).send(file.text);

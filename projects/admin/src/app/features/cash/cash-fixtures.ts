@@ -1,4 +1,12 @@
-import type { CashForecast, CashJobs, CashReceivables, CashReceived } from '@layerbook/contracts/types';
+import type {
+  CashForecast,
+  CashJobs,
+  CashReceivableInvoice,
+  CashReceivableInvoices,
+  CashReceivables,
+  CashReceived,
+} from '@layerbook/contracts/types';
+import type { ReceivableDrill } from './receivable-drill';
 
 /** Answers of the cash API for the specs: one firm in dollars, as of 2 December 2026. */
 const zero = { current: '0.00', '1-30': '0.00', '31-60': '0.00', '61-90': '0.00', '90+': '0.00' } as const;
@@ -27,48 +35,64 @@ export const RECEIVABLES: CashReceivables = {
       invoiceCount: 2,
     },
   ],
-  invoices: [
-    {
-      invoiceId: 'inv-9',
-      number: 'INV-0009',
-      clientId: 'c-2',
-      clientName: 'Hollis Tea Rooms',
-      jobId: 'job-2',
-      jobTitle: 'Tea room stencils',
-      dueOn: '2026-08-20',
-      daysPastDue: 104,
-      bucket: '90+',
-      amountDue: '300.00',
-      retainage: '0.00',
-    },
-    {
-      invoiceId: 'inv-7',
-      number: 'INV-0007',
-      clientId: 'c-1',
-      clientName: 'Ada Ward',
-      jobId: 'job-1',
-      jobTitle: 'Hall in lime plaster',
-      dueOn: '2026-10-28',
-      daysPastDue: 35,
-      bucket: '31-60',
-      amountDue: '2450.00',
-      retainage: '640.00',
-    },
-    {
-      invoiceId: 'inv-12',
-      number: 'INV-0012',
-      clientId: 'c-2',
-      clientName: 'Hollis Tea Rooms',
-      jobId: 'job-2',
-      jobTitle: 'Tea room stencils',
-      dueOn: '2026-12-16',
-      daysPastDue: -14,
-      bucket: 'current',
-      amountDue: '1200.00',
-      retainage: '0.00',
-    },
-  ],
+  invoiceCount: 3,
 };
+
+/** The open invoices behind RECEIVABLES (the drill-down's answers are cut from them). */
+export const OPEN_INVOICES: readonly CashReceivableInvoice[] = [
+  {
+    invoiceId: 'inv-9',
+    number: 'INV-0009',
+    clientId: 'c-2',
+    clientName: 'Hollis Tea Rooms',
+    jobId: 'job-2',
+    jobTitle: 'Tea room stencils',
+    dueOn: '2026-08-20',
+    daysPastDue: 104,
+    bucket: '90+',
+    amountDue: '300.00',
+    retainage: '0.00',
+  },
+  {
+    invoiceId: 'inv-7',
+    number: 'INV-0007',
+    clientId: 'c-1',
+    clientName: 'Ada Ward',
+    jobId: 'job-1',
+    jobTitle: 'Hall in lime plaster',
+    dueOn: '2026-10-28',
+    daysPastDue: 35,
+    bucket: '31-60',
+    amountDue: '2450.00',
+    retainage: '640.00',
+  },
+  {
+    invoiceId: 'inv-12',
+    number: 'INV-0012',
+    clientId: 'c-2',
+    clientName: 'Hollis Tea Rooms',
+    jobId: 'job-2',
+    jobTitle: 'Tea room stencils',
+    dueOn: '2026-12-16',
+    daysPastDue: -14,
+    bucket: 'current',
+    amountDue: '1200.00',
+    retainage: '0.00',
+  },
+];
+
+/** What the server answers for a drill-down: the invoices of that age and client, most overdue first. */
+export function drillAnswer(drill: ReceivableDrill): CashReceivableInvoices {
+  return {
+    asOf: drill.asOf ?? RECEIVABLES.asOf,
+    currency: 'USD',
+    age: drill.age,
+    clientId: drill.clientId,
+    invoices: OPEN_INVOICES.filter(
+      (i) => (drill.age === null || i.bucket === drill.age) && (drill.clientId === null || i.clientId === drill.clientId),
+    ),
+  };
+}
 
 const months = [
   '2026-01',

@@ -7,7 +7,8 @@ import type { CashJobs } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { Session } from '../../core/auth/session';
 import { Cash } from './cash';
-import { FORECAST, OFFICE_JOBS, OWNER_JOBS, RECEIVABLES, RECEIVED } from './cash-fixtures';
+import { FORECAST, OFFICE_JOBS, OWNER_JOBS, RECEIVABLES, RECEIVED, drillAnswer } from './cash-fixtures';
+import { RECEIVABLE_INVOICES_URL, drillFromParams } from './receivable-drill';
 import { provideTestI18n } from '../../../../../shared/i18n/testing';
 import { officeWords } from '../../shared/testing/office-words';
 
@@ -36,8 +37,17 @@ async function open(
   http.expectOne('/api/cash/received').flush(RECEIVED);
   http.expectOne('/api/cash/forecast').flush(FORECAST);
   http.expectOne('/api/cash/jobs').flush(jobs);
+  answerDrill(http);
   await settle();
   return { http, html: () => fixture.nativeElement as HTMLElement, asOfSent };
+}
+
+/** Answers a drill-down request, if one was sent, as the server would (the fixtures' invoices, filtered). */
+function answerDrill(http: HttpTestingController): void {
+  for (const request of http.match((r) => r.url.startsWith(RECEIVABLE_INVOICES_URL))) {
+    const query = Object.fromEntries(new URL(request.request.url, 'http://x').searchParams);
+    request.flush(drillAnswer(drillFromParams(query)));
+  }
 }
 
 async function settle(): Promise<void> {
@@ -87,9 +97,14 @@ describe('Cash', { timeout: 20_000 }, () => {
     );
     expect(button).toBeDefined();
     button?.click();
-    await settle();
-    // the drill-down lists what was already loaded: no second request
+    await new Promise((resolve) => setTimeout(resolve)); // the address bar changes, then the request goes
+    TestBed.inject(ApplicationRef).tick();
+    // the drill-down asks for that age's invoices only; the figures are not asked for again
     http.expectNone((request) => request.url === '/api/cash/receivables');
+    const asked = http.expectOne((request) => request.url.startsWith(RECEIVABLE_INVOICES_URL));
+    expect(asked.request.url).toBe('/api/cash/receivables/invoices?age=31-60');
+    asked.flush(drillAnswer({ age: '31-60', clientId: null, asOf: null }));
+    await settle();
     expect(html().querySelector('#drill-heading')?.textContent).toContain('Invoices 31–60 days late (1)');
     const drill = html().querySelector('.drill');
     const links = [...(drill?.querySelectorAll('a') ?? [])].map((a) => a.getAttribute('href'));

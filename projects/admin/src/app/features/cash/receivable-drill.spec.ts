@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { RECEIVABLES } from './cash-fixtures';
-import { drillFromParams, drillHeading, drillToParams, drilledInvoices } from './receivable-drill';
+import { drillFromParams, drillHeading, drillToParams, drillUrl } from './receivable-drill';
 
 describe('receivable drill-down', () => {
   it('reads the age, client and day from the address and ignores what it does not know', () => {
@@ -13,10 +13,12 @@ describe('receivable drill-down', () => {
     expect(drillToParams({ age: '90+', clientId: null, asOf: null })).toEqual({ age: '90+', client: null, asOf: null });
   });
 
-  it('lists the invoices of one age, or of one client most overdue first', () => {
-    expect(drilledInvoices(RECEIVABLES, { age: '31-60', clientId: null, asOf: null }).map((i) => i.number)).toEqual(['INV-0007']);
-    expect(drilledInvoices(RECEIVABLES, { age: null, clientId: 'c-2', asOf: null }).map((i) => i.number)).toEqual(['INV-0009', 'INV-0012']);
-    expect(drilledInvoices(RECEIVABLES, { age: '61-90', clientId: null, asOf: null })).toEqual([]);
+  it('asks the server for one age, one client or both, with a "+" sent as itself', () => {
+    expect(drillUrl({ age: '31-60', clientId: null, asOf: null })).toBe('/api/cash/receivables/invoices?age=31-60');
+    expect(drillUrl({ age: '90+', clientId: 'c-2', asOf: '2026-11-30' })).toBe(
+      '/api/cash/receivables/invoices?asOf=2026-11-30&age=90%2B&client=c-2',
+    );
+    expect(drillUrl({ age: null, clientId: null, asOf: null })).toBe('/api/cash/receivables/invoices');
   });
 
   it('says what the list holds', () => {

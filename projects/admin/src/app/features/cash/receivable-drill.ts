@@ -1,10 +1,4 @@
-import {
-  CASH_AGING_BUCKETS,
-  CASH_AGING_BUCKET_LABELS,
-  type CashAgingBucket,
-  type CashReceivableInvoice,
-  type CashReceivables,
-} from '@layerbook/contracts/types';
+import { CASH_AGING_BUCKETS, CASH_AGING_BUCKET_LABELS, type CashAgingBucket, type CashReceivables } from '@layerbook/contracts/types';
 
 /** What the owner drilled into: one age, one client, both or neither; kept in the address bar. */
 export interface ReceivableDrill {
@@ -30,13 +24,19 @@ export function drillToParams(drill: ReceivableDrill): Record<string, string | n
   return { age: drill.age, client: drill.clientId, asOf: drill.asOf };
 }
 
-/** The invoices behind the drill-down, most overdue first. */
-export function drilledInvoices(receivables: CashReceivables, drill: ReceivableDrill): CashReceivableInvoice[] {
-  return receivables.invoices
-    .filter(
-      (invoice) => (drill.age === null || invoice.bucket === drill.age) && (drill.clientId === null || invoice.clientId === drill.clientId),
-    )
-    .sort((a, b) => b.daysPastDue - a.daysPastDue || a.number.localeCompare(b.number));
+export const RECEIVABLE_INVOICES_URL = '/api/cash/receivables/invoices';
+
+/**
+ * The server's list of the invoices behind the drill-down. Written out with URLSearchParams: Angular's
+ * HttpParams leaves a "+" as it is, which a server reads as a space (the age "90+").
+ */
+export function drillUrl(drill: ReceivableDrill): string {
+  const query = new URLSearchParams();
+  if (drill.asOf) query.set('asOf', drill.asOf);
+  if (drill.age) query.set('age', drill.age);
+  if (drill.clientId) query.set('client', drill.clientId);
+  const text = query.toString();
+  return text ? `${RECEIVABLE_INVOICES_URL}?${text}` : RECEIVABLE_INVOICES_URL;
 }
 
 /** The heading over the drilled invoices: "Invoices 31–60 days late for Ada Ward". */

@@ -14,14 +14,20 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { CashChart } from './cash-chart';
 import { agingChart, barOptions } from './cash-charts';
-import { CASH_AGING_BUCKETS, CASH_AGING_BUCKET_LABELS, type CashAgingBucket, type CashReceivables } from '@layerbook/contracts/types';
+import {
+  CASH_AGING_BUCKETS,
+  CASH_AGING_BUCKET_LABELS,
+  type CashAgingBucket,
+  type CashReceivableInvoices,
+  type CashReceivables,
+} from '@layerbook/contracts/types';
 import { lateWords } from './cash-words';
-import { drillFromParams, drillHeading, drillToParams, drilledInvoices, type ReceivableDrill } from './receivable-drill';
+import { drillFromParams, drillHeading, drillToParams, drillUrl, type ReceivableDrill } from './receivable-drill';
 import { TranslatePipe } from '@ngx-translate/core';
 
 export const RECEIVABLES_URL = '/api/cash/receivables';
 
-/** Money owed to the firm by age as of a chosen day, with the invoices and clients behind each figure. */
+/** Money owed to the firm by age as of a chosen day, per client, with the invoices behind each figure on request. */
 @Component({
   selector: 'lb-receivables',
   imports: [
@@ -54,7 +60,7 @@ export class Receivables {
   protected readonly drill = toSignal(this.route.queryParams.pipe(map(drillFromParams)), {
     initialValue: drillFromParams(this.route.snapshot.queryParams),
   });
-  /** Apart from the drill-down, so opening a list never asks the server again. */
+  /** Apart from the drill-down, so opening a list never asks for the figures again. */
   private readonly asOf = computed(() => this.drill().asOf);
   protected readonly receivables = httpResource<CashReceivables>(() => {
     const asOf = this.asOf();
@@ -67,10 +73,10 @@ export class Receivables {
     return view ? { data: agingChart(view), options: barOptions(view.currency, this.locale) } : null;
   });
   protected readonly isDrilled = computed(() => this.drill().age !== null || this.drill().clientId !== null);
-  protected readonly invoices = computed(() => {
-    const view = this.view();
-    return view && this.isDrilled() ? drilledInvoices(view, this.drill()) : [];
-  });
+  /** The invoices behind a figure, asked for when the owner opens one (an age, a client, both). */
+  protected readonly drilled = httpResource<CashReceivableInvoices>(() => (this.isDrilled() ? drillUrl(this.drill()) : undefined));
+  protected readonly drillMessage = loadMessage(this.drilled);
+  protected readonly invoices = computed(() => (this.isDrilled() && this.drilled.hasValue() ? this.drilled.value().invoices : []));
   protected readonly heading = computed(() => {
     const view = this.view();
     return view ? drillHeading(view, this.drill()) : '';

@@ -1,0 +1,1 @@
+CREATE INDEX "jobs_progress_idx" ON "jobs" USING btree ("tenant_id") WHERE billing_method = 'progress';
