@@ -9,8 +9,8 @@ const TWO_DECIMALS = /\.\d\d$/;
  */
 export function moneyOut(value: string | Decimal, currency: string): string {
   const digits = minorUnitDigits(currency);
-  if (typeof value === 'string' && digits === 2 && TWO_DECIMALS.test(value)) return value;
-  return new Decimal(value).toFixed(digits);
+  if (typeof value === 'string') return digits === 2 && TWO_DECIMALS.test(value) ? value : new Decimal(value).toFixed(digits);
+  return value.toFixed(digits);
 }
 
 /** Decimals a money column keeps (numeric(14,2)): a third decimal of KWD or BHD would be rounded away on save. */

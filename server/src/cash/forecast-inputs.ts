@@ -13,13 +13,18 @@ export const DEFAULT_DEPOSIT_SHARE = '0.1';
 /** Days until an open inquiry with no follow-up date is expected to sign (common practice, no source). */
 export const DEFAULT_SIGNING_DAYS = 14;
 
-/** Open invoices' amounts owed by due date, and unbilled schedule lines by expected date; $1 tenant. */
-export const OWED = `select 'i' as kind, i.id, i.due_on::text as date, (i.total - i.amount_paid - i.amount_credited)::text as amount from invoices i
+/**
+ * Open invoices' amounts owed and unbilled schedule lines, each summed per date (the forecast adds
+ * them up per week, so a day's sum counts the same as its rows); $1 tenant.
+ */
+export const OWED = `select 'i' as kind, i.due_on::text as date, sum(i.total - i.amount_paid - i.amount_credited)::text as amount from invoices i
       where i.tenant_id = $1 and i.status in ('issued', 'part_paid', 'refunded') and i.total - i.amount_paid - i.amount_credited > 0
+      group by i.due_on
      union all
-     select 's', l.id, l.expected_on::text, l.amount::text from payment_schedule_lines l
+     select 's', l.expected_on::text, sum(l.amount)::text from payment_schedule_lines l
        join jobs j on j.tenant_id = l.tenant_id and j.id = l.job_id
-      where l.tenant_id = $1 and l.status in ('draft', 'scheduled', 'ready') and j.status <> 'cancelled' and l.amount > 0`;
+      where l.tenant_id = $1 and l.status in ('draft', 'scheduled', 'ready') and j.status <> 'cancelled' and l.amount > 0
+      group by l.expected_on`;
 
 export interface Receipt {
   id: string;
@@ -29,10 +34,11 @@ export interface Receipt {
   probability?: string;
 }
 
-/** Open invoices (amount still owed, by due date) and unbilled schedule lines (by the engine's expected date). */
+/** Open invoices (amount still owed, by due date) and unbilled schedule lines (by the engine's expected date), per date. */
 export async function loadOwed(tx: TenantTx): Promise<{ invoices: Receipt[]; scheduled: Receipt[] }> {
-  const { rows } = await tx.client.query<{ kind: 'i' | 's'; id: string; date: string | null; amount: string }>(OWED, [tx.tenantId]);
-  const pick = (kind: 'i' | 's') => rows.filter((r) => r.kind === kind).map(({ id, date, amount }) => ({ id, date, amount }));
+  const { rows } = await tx.client.query<{ kind: 'i' | 's'; date: string | null; amount: string }>(OWED, [tx.tenantId]);
+  const pick = (kind: 'i' | 's') =>
+    rows.filter((r) => r.kind === kind).map(({ date, amount }) => ({ id: `${kind}:${date ?? 'undated'}`, date, amount }));
   return { invoices: pick('i'), scheduled: pick('s') };
 }
 

@@ -1,5 +1,5 @@
 /** Each job's money, newest first, with the accepted option's stored price breakdown; $1 tenant, $2 row limit. */
-export const JOB_MONEY = `with listed as (select * from jobs where tenant_id = $1 order by created_at desc, id limit $2),
+export const JOB_MONEY = `with listed as (select * from jobs where tenant_id = $1 order by created_at desc, id desc limit $2),
   -- each estimate's option read once, however many jobs share it
   prices as (
     select p.estimate_id, p.variant_id,
@@ -15,7 +15,7 @@ export const JOB_MONEY = `with listed as (select * from jobs where tenant_id = $
     cross join lateral (select sum(o.amount) as amount from change_orders o
                          where o.tenant_id = $1 and o.job_id = j.id and o.status = 'approved') co
     left join prices pr on pr.estimate_id = j.estimate_id and pr.variant_id = j.accepted_variant_id
-   order by j.created_at desc, j.id`;
+   order by j.created_at desc, j.id desc`;
 
 /** Σ contract sums of the jobs not cancelled (for the average), and the decided proposals. */
 export const JOB_TOTALS = `select

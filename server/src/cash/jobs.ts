@@ -6,8 +6,8 @@ import { averageJobSize, grossMargin, jobMoney, winRate } from './domain';
 import { firmClock } from './firm-clock';
 import { JOB_MONEY, JOB_TOTALS, type JobMoneyRow, type StoredPrice } from './jobs-sql';
 
-/** The newest jobs listed; the win rate and average cover every job. */
-export const JOBS_LISTED = 200;
+/** The newest jobs listed (a page of them: the jobs list holds them all); the win rate and average cover every job. */
+export const JOBS_LISTED = 50;
 
 export const NO_ACTUAL_COSTS = 'Actual costs (hours worked, materials bought) are not recorded yet, so only the estimated margin is known.';
 

@@ -72,6 +72,20 @@ export function bucketDueDates(bucket: AgingBucket, asOf: IsoDate): { from: IsoD
   };
 }
 
+const ZERO = new Decimal(0);
+
+/** What is due now and what retainage stays held: payments go to the due part first. */
+function splitDue(inv: ReceivableInput, amount: Decimal, at: string): { open: Decimal; retainageOpen: Decimal } {
+  const retainage = inv.retainageHeld === undefined ? ZERO : toNonNegativeMoney(inv.retainageHeld, `${at}.retainageHeld`);
+  let paid = ZERO;
+  (inv.payments ?? []).forEach((p, k) => {
+    paid = paid.plus(toNonNegativeMoney(p, `${at}.payments[${k}]`, 'payment'));
+  });
+  const duePart = Decimal.max(amount.minus(retainage), 0);
+  const overpaid = Decimal.max(paid.minus(duePart), 0);
+  return { open: Decimal.max(duePart.minus(paid), 0), retainageOpen: Decimal.max(retainage.minus(overpaid), 0) };
+}
+
 /** Ages open receivables by days past due as of a date (accounting glossaries; common practice). */
 export function ageReceivables(invoices: readonly ReceivableInput[], asOf: IsoDate): AgingReport {
   const today = toDayNumber(asOf, 'asOf');
@@ -81,15 +95,10 @@ export function ageReceivables(invoices: readonly ReceivableInput[], asOf: IsoDa
   const aged = invoices.map((inv, i) => {
     const at = `invoices[${i}]`;
     const amount = toNonNegativeMoney(inv.amount, `${at}.amount`);
-    const retainage = inv.retainageHeld === undefined ? new Decimal(0) : toNonNegativeMoney(inv.retainageHeld, `${at}.retainageHeld`);
-    let paid = new Decimal(0);
-    (inv.payments ?? []).forEach((p, k) => {
-      paid = paid.plus(toNonNegativeMoney(p, `${at}.payments[${k}]`, 'payment'));
-    });
-    const duePart = Decimal.max(amount.minus(retainage), 0);
-    const open = Decimal.max(duePart.minus(paid), 0);
-    const overpaid = Decimal.max(paid.minus(duePart), 0);
-    const retainageOpen = Decimal.max(retainage.minus(overpaid), 0);
+    const { open, retainageOpen } =
+      inv.retainageHeld === undefined && (inv.payments ?? []).length === 0
+        ? { open: amount, retainageOpen: ZERO } // nothing held back, nothing paid: the whole amount is due (most rows)
+        : splitDue(inv, amount, at);
     // Many invoices share a due date: read each date once (a bad one still fails at its first invoice).
     let due = dueDays.get(inv.dueDate);
     if (due === undefined) {
@@ -99,7 +108,7 @@ export function ageReceivables(invoices: readonly ReceivableInput[], asOf: IsoDa
     const daysPastDue = today - due;
     const bucket = bucketFor(daysPastDue);
     buckets[bucket] = buckets[bucket].plus(open);
-    retainageTotal = retainageTotal.plus(retainageOpen);
+    if (!retainageOpen.isZero()) retainageTotal = retainageTotal.plus(retainageOpen);
     const invoiceCount = inv.invoiceCount ?? 1;
     if (!Number.isInteger(invoiceCount) || invoiceCount < 1)
       throw new DomainInputError(`${at}.invoiceCount`, 'The invoice count must be a whole number of 1 or more.');
