@@ -92,6 +92,8 @@ interface ClientRow {
   status: string;
   firm_name: string;
   language: Language;
+  own_language: Language | null;
+  firm_language: Language;
   country: string;
   session_live: boolean;
 }
@@ -99,7 +101,8 @@ interface ClientRow {
 /** The client's row as literal SQL for the first round trip of a request's transaction (see staffRowSql). */
 export function clientRowSql(tenantId: string, portalUserId: string, sessionId: string | null): string {
   if (!isUuid(tenantId) || !isUuid(portalUserId)) throw new Error('clientRowSql needs ids');
-  return `select p.name, p.email, p.status, f.name as firm_name, coalesce(c.language, f.language) as language, f.country,
+  return `select p.name, p.email, p.status, f.name as firm_name, coalesce(c.language, f.language) as language,
+                 c.language as own_language, f.language as firm_language, f.country,
                  ${sessionLiveSql(sessionId, portalUserId)} as session_live
             from portal_users p join firms f on f.id = p.tenant_id left join clients c on c.id = p.client_id where p.tenant_id = '${tenantId}' and p.id = '${portalUserId}'`;
 }
@@ -114,6 +117,8 @@ export function toClientPrincipal(tenantId: string, portalUserId: string, row: C
     email: row.email,
     firmName: row.firm_name,
     language: row.language,
+    ownLanguage: row.own_language,
+    firmLanguage: row.firm_language,
     country: row.country,
   };
 }
@@ -128,6 +133,8 @@ export async function loadClientInTx(tx: TenantTx, portalUserId: string): Promis
         status: portalUsers.status,
         firmName: firms.name,
         language: sql<Language>`coalesce(${clients.language}, ${firms.language})`,
+        ownLanguage: clients.language,
+        firmLanguage: firms.language,
         country: firms.country,
       })
       .from(portalUsers)
@@ -144,6 +151,8 @@ export async function loadClientInTx(tx: TenantTx, portalUserId: string): Promis
       email: row.email,
       firmName: row.firmName,
       language: row.language,
+      ownLanguage: row.ownLanguage,
+      firmLanguage: row.firmLanguage,
       country: row.country,
     };
   }

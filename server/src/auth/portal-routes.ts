@@ -19,6 +19,8 @@ async function portalSession(ctx: AppContext, req: Request, res: Response, fresh
           firmId: client.tenantId,
           firmName: client.firmName,
           language: client.language,
+          ownLanguage: client.ownLanguage ?? null,
+          firmLanguage: client.firmLanguage ?? client.language,
           country: client.country,
         }
       : null,

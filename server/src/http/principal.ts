@@ -32,6 +32,12 @@ export interface ClientPrincipal {
   readonly firmName: string;
   /** the client's language (portal, e-mails, PDFs): the client's own, else the firm's */
   readonly language: Language;
+  /**
+   * The client's own choice (null follows the firm) and the firm's language, loaded with the session
+   * so the portal's language menu can show which is chosen; absent where a principal is made by hand.
+   */
+  readonly ownLanguage?: Language | null;
+  readonly firmLanguage?: Language;
   readonly country: string;
 }
 

@@ -121,6 +121,10 @@ export interface PortalClient {
   readonly firmName: string;
   /** the language of the client's portal, e-mails and PDFs: the client's own, else the firm's */
   readonly language: Language;
+  /** the client's own choice (null = follow the firm's language) */
+  readonly ownLanguage: Language | null;
+  /** the firm's language, which the client reads in while they follow it */
+  readonly firmLanguage: Language;
   /** the firm's country (ISO 3166-1 alpha-2) */
   readonly country: string;
 }

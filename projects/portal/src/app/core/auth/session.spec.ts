@@ -8,7 +8,17 @@ import { provideTestI18n } from '../../../../../shared/i18n/testing';
 import { Session } from './session';
 
 const session = (language: 'en' | 'es'): PortalSession => ({
-  client: { id: 'c1', name: 'Ada', email: 'ada@example.com', firmId: 'f1', firmName: 'Quillfeather', language, country: 'MX' },
+  client: {
+    id: 'c1',
+    name: 'Ada',
+    email: 'ada@example.com',
+    firmId: 'f1',
+    firmName: 'Quillfeather',
+    language,
+    ownLanguage: language,
+    firmLanguage: 'en',
+    country: 'MX',
+  },
   csrfToken: 't',
 });
 

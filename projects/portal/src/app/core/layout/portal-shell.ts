@@ -1,16 +1,15 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
-import { MatMenuModule } from '@angular/material/menu';
 import { MatToolbarModule } from '@angular/material/toolbar';
 import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 import { TranslatePipe } from '@ngx-translate/core';
 import type { Language as LanguageCode } from '@layerbook/contracts/types';
-import { Language } from '../../../../../shared/i18n/language';
 import { Session } from '../auth/session';
 import { problemMessage, toProblem } from '../errors/problem';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { Wordmark } from '../../shared/ui/wordmark';
+import { LanguageMenu } from './language-menu';
 
 /** The frame around a signed-in client's pages: whose portal this is, and a way out. */
 @Component({
@@ -19,7 +18,7 @@ import { Wordmark } from '../../shared/ui/wordmark';
     FormAlert,
     MatButtonModule,
     MatIconModule,
-    MatMenuModule,
+    LanguageMenu,
     MatToolbarModule,
     RouterLink,
     RouterLinkActive,
@@ -37,24 +36,7 @@ import { Wordmark } from '../../shared/ui/wordmark';
           <span class="firm">{{ me.firmName }}</span>
           <span class="spacer"></span>
           <span class="me">{{ me.name }}</span>
-          <button mat-button type="button" class="on-dark" [matMenuTriggerFor]="languageMenu">
-            <mat-icon aria-hidden="true">translate</mat-icon>
-            {{ 'common.languageNames.' + language.current() | translate }}
-          </button>
-          <mat-menu #languageMenu="matMenu" [aria-label]="'layout.shell.language' | translate">
-            @for (choice of languageChoices; track choice.value) {
-              <button
-                mat-menu-item
-                type="button"
-                role="menuitemradio"
-                [attr.aria-checked]="choice.value === language.current()"
-                (click)="chooseLanguage(choice.value)"
-              >
-                <mat-icon aria-hidden="true">{{ choice.value === language.current() ? 'check' : '' }}</mat-icon>
-                <span>{{ choice.label | translate }}</span>
-              </button>
-            }
-          </mat-menu>
+          <lb-language-menu [client]="me" (choose)="chooseLanguage($event)" />
           <button mat-button type="button" class="on-dark" (click)="signOut()">
             <mat-icon aria-hidden="true">logout</mat-icon>
             {{ 'layout.shell.signOut' | translate }}
@@ -128,14 +110,7 @@ export class PortalShell {
   private readonly session = inject(Session);
   private readonly router = inject(Router);
 
-  protected readonly language = inject(Language);
   protected readonly client = this.session.client;
-  /** The client's own language; the firm's is the one they had before choosing (null follows the firm again). */
-  protected readonly languageChoices: readonly { value: LanguageCode | null; label: string }[] = [
-    { value: 'en', label: 'common.languageNames.en' },
-    { value: 'es', label: 'common.languageNames.es' },
-    { value: null, label: 'layout.shell.firmLanguage' },
-  ];
   protected readonly message = signal<string | null>(null);
 
   protected async chooseLanguage(language: LanguageCode | null): Promise<void> {
