@@ -113,6 +113,8 @@ export type { IncludedTaxInput } from './billing/invoice-tax';
 export { includedTax } from './billing/invoice-tax';
 export type { PaymentTerms } from './billing/due-date';
 export { NET_DAYS_MAX, dueDate, termsText } from './billing/due-date';
+export type { SystemWords } from './billing/invoice-words';
+export { paymentLabelWords, termsWords } from './billing/invoice-words';
 export { documentNumber } from './billing/document-number';
 export type { ReminderCadence, ReminderDue, ReminderStep, RemindersDueInput } from './billing/reminder-steps';
 export { reminderSteps, remindersDue } from './billing/reminder-steps';

@@ -1,6 +1,7 @@
 import type { BillingSettings, BillingTerms, InvoiceDocument } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { termsText } from '@layerbook/domain';
+import { documentWords } from './invoice-words';
 
 interface AddressColumns {
   address_line1: string;
@@ -60,6 +61,7 @@ export async function invoiceDocument(
     jobTitle: r.job_title,
     termsText: termsText(terms.terms),
     depositCapName: terms.depositCapName,
+    ...documentWords(terms),
     footer: settings.invoiceFooter,
     locale: `${r.firm.language}-${r.firm.country}`,
   };

@@ -5,6 +5,7 @@ import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { conflict, notFound } from '../http/problem';
+import { linesWithWords, RETAINAGE_RELEASED_LINE } from './invoice-words';
 import { assertBillingStarted, invoiceTax, LIVE_ISSUED, loadBillingJob, type StartedJob } from './billing-job';
 
 export interface LineDraftRequest {
@@ -53,7 +54,7 @@ export async function draftLineInvoice(tx: TenantTx, request: LineDraftRequest):
   const job = await loadBillingJob(tx, line.job_id);
   assertBillingStarted(job);
   const tax = await invoiceTax(tx, job, line.amount, null);
-  const lines: InvoiceLine[] = [{ label: line.label, amount: line.amount }];
+  const lines = linesWithWords([{ label: line.label, amount: line.amount }], line);
   const inserted = await tx.client.query<{ id: string }>(
     `insert into invoices (tenant_id, job_id, client_id, kind, schedule_line_id, currency, subtotal, tax_included, total, lines, origin, trigger, created_by)
      values ($1, $2, $3, $4, $5, $6, $7, $8, $7, $9, $10, $11, $12)
@@ -157,7 +158,7 @@ export async function draftRetainageInvoice(
   const credit = await progressDepositCredit(tx, job, held, true, null);
   const total = held.minus(credit);
   const tax = await invoiceTax(tx, job, total, null);
-  const lines: InvoiceLine[] = [{ label: 'Retainage released', amount: held.toFixed(2) }];
+  const lines: InvoiceLine[] = [{ ...RETAINAGE_RELEASED_LINE, amount: held.toFixed(2) }];
   const { rows } = await tx.client.query<{ id: string }>(
     `insert into invoices (tenant_id, job_id, client_id, kind, currency, subtotal, deposit_credit, tax_included, total, lines, origin, created_by)
      values ($1, $2, $3, 'retainage', $4, $5, $6, $7, $8, $9, $10, $11) returning id`,

@@ -13,6 +13,7 @@ import { PROPOSAL_LINK_DAYS } from '../proposals/send-proposal';
 import type { JobQueue } from '../queue/job-queue';
 import { formatsFor } from '../proposals/pdf/format';
 import { creditNoteMail, invoiceIssuedMail, invoiceReminderMail, type InvoiceMailFacts } from './invoice-templates';
+import { documentForReader } from './invoice-words';
 import { moneyOut } from './money';
 
 export type InvoiceMailPurpose =
@@ -102,7 +103,7 @@ export async function enqueueInvoiceMail(
     jobTitle: doc.jobTitle,
     amountDue: money(row.amount_due),
     dueOn: formatsFor(locale, row.currency).date(row.due_on),
-    termsText: doc.termsText,
+    termsText: documentForReader({ language: reader.language, locale }, doc).termsText,
     url: link ? `${base}/portal/sign-in/link?token=${link.token}&next=${next}` : `${base}${next}`,
     linkDays: link ? INVOICE_LINK_DAYS : null,
     portalUrl: `${base}/portal/sign-in`,

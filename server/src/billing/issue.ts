@@ -1,4 +1,4 @@
-import type { InvoiceIssue, InvoiceLine, ProgressTable } from '@layerbook/contracts';
+import type { BillingTrigger, InvoiceIssue, InvoiceLine, ProgressTable } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { dueDate } from '@layerbook/domain';
 import Decimal from 'decimal.js';
@@ -11,6 +11,7 @@ import { assertBillingStarted, firmToday, invoiceTax, loadBillingJob } from './b
 import { invoiceDocument } from './document';
 import { progressDepositCredit, retainageHeld } from './drafts';
 import { enqueueInvoiceMail } from './invoice-mail';
+import { linesWithWords, progressWithWords } from './invoice-words';
 import { takeInvoiceNumber } from './numbering';
 import { loadBillingSettings } from './settings';
 
@@ -72,9 +73,10 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
   const issuedOn = body.issuedOn ?? firmToday(job, now);
   const dueOn = dueDate(issuedOn, job.billing_terms.terms);
   const document = await invoiceDocument(tx, job.id, job.billing_terms, settings);
+  const words = await frozenWords(tx, inv);
   await tx.client.query(
     `update invoices set status = $11, issued_on = $3, due_on = $4, document = $5, deposit_credit = $6,
-            total = $7, tax_included = $8, issued_by = $9, issued_at = $10, updated_at = $10
+            total = $7, tax_included = $8, issued_by = $9, issued_at = $10, updated_at = $10, lines = $12, progress = $13
       where tenant_id = $1 and id = $2`,
     [
       tx.tenantId,
@@ -90,6 +92,8 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
       // Nothing due (no work this period, or all of it taken by the deposit credit): no payment can
       // follow, so it is paid as issued, never overdue nor reminded.
       total.isZero() ? 'paid' : 'issued',
+      JSON.stringify(words.lines),
+      words.progress === null ? null : JSON.stringify(words.progress),
     ],
   );
   if (inv.schedule_line_id) {
@@ -114,4 +118,20 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
     await tx.client.query(`update invoices set sent_at = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, id, now]);
     await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'invoice.sent', entity: 'invoice', entityId: id });
   }
+}
+
+/**
+ * The invoice's lines and progress table with the key of every label the system wrote, so each
+ * client reads them in their language (a draft made before words were kept gets them here).
+ */
+async function frozenWords(tx: TenantTx, inv: LockedInvoice): Promise<{ lines: InvoiceLine[]; progress: ProgressTable | null }> {
+  const line = inv.schedule_line_id
+    ? (
+        await tx.client.query<{ role: 'deposit' | 'milestone' | 'final'; trigger: BillingTrigger }>(
+          `select role, trigger from payment_schedule_lines where tenant_id = $1 and id = $2`,
+          [tx.tenantId, inv.schedule_line_id],
+        )
+      ).rows[0]
+    : undefined;
+  return { lines: linesWithWords(inv.lines, line ?? null), progress: progressWithWords(inv.progress) };
 }

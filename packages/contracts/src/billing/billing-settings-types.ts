@@ -22,9 +22,15 @@ export const DEPOSIT_CAP_KIND_LABELS: Readonly<Record<DepositCapKind, string>> =
 };
 
 /** Ready-made rules the settings form offers; the firm can still type its own. */
-export const DEPOSIT_CAP_PRESETS: ReadonlyArray<{ readonly name: string; readonly rule: DepositCapSetting }> = [
-  { name: 'No deposit limit', rule: { kind: 'none' } },
+export type DepositCapPresetId = 'none' | 'caHomeImprovement';
+export const DEPOSIT_CAP_PRESETS: ReadonlyArray<{
+  readonly id: DepositCapPresetId;
+  readonly name: string;
+  readonly rule: DepositCapSetting;
+}> = [
+  { id: 'none', name: 'No deposit limit', rule: { kind: 'none' } },
   {
+    id: 'caHomeImprovement',
     // California Business and Professions Code §7159 (deposit on a home improvement contract): the lesser of $1,000 or 10 % of the contract price.
     name: 'California home improvement contracts (Bus. & Prof. Code §7159): the lesser of $1,000 or 10 %',
     rule: { kind: 'lesserOf', amount: '1000.00', percent: 10 },

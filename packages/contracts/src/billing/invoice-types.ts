@@ -5,6 +5,7 @@
  */
 
 import type { PaymentReceivedToday } from '../cash/cash-types';
+import type { DepositCapPresetId, PaymentTermsSetting } from './billing-settings-types';
 import type { ClientCreditView, PaymentDetail } from '../payments/payment-types';
 
 export const INVOICE_KINDS = ['deposit', 'milestone', 'progress', 'retainage', 'final'] as const;
@@ -29,17 +30,38 @@ export const INVOICE_STATUS_LABELS: Readonly<Record<InvoiceStatus, string>> = {
   void: 'Void',
 };
 
+/**
+ * A param of words the system wrote: plain text or a number as it is, or a date or an amount the
+ * reader's locale formats.
+ */
+export type InvoiceWordsParam = string | number | { readonly date: string } | { readonly money: string; readonly currency: string };
+
+/**
+ * Words the system itself wrote into an invoice, by key (server words, area `invoiceWords`) and
+ * params, kept beside the English text so each reader reads them in their own language. Text a
+ * person typed has none: it prints as typed.
+ */
+export interface InvoiceWords {
+  readonly key: string;
+  readonly params?: Readonly<Record<string, InvoiceWordsParam>>;
+}
+
 /** One line of a deposit, stage, retainage or final invoice. */
 export interface InvoiceLine {
+  /** in English (the office's words), or as a person typed it */
   readonly label: string;
   readonly amount: string;
   readonly note?: string;
+  /** the label by key, when the system wrote it (kept at drafting and issue; none on invoices issued before words were kept) */
+  readonly words?: InvoiceWords;
 }
 
 /** A progress invoice's schedule of values, as billed (our own columns, in words). */
 export interface ProgressTableLine {
   readonly valueLineId: string;
   readonly label: string;
+  /** the label by key, when the system wrote it ("All the work") */
+  readonly words?: InvoiceWords;
   readonly scheduledValue: string;
   readonly previousWork: string;
   readonly thisPeriodWork: string;
@@ -84,6 +106,10 @@ export interface InvoiceDocument {
   readonly termsText: string;
   /** the firm's deposit rule, by name ("No deposit limit" included) */
   readonly depositCapName: string;
+  /** the terms themselves, so each reader reads `termsText` in their language (none on invoices issued before) */
+  readonly terms?: PaymentTermsSetting;
+  /** the ready-made deposit rule `depositCapName` names, if it is one (a rule the firm named itself has none) */
+  readonly depositRule?: DepositCapPresetId;
   readonly footer: string;
   readonly locale: string;
 }

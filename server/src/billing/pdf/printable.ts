@@ -3,6 +3,8 @@ import type { TenantTx } from '@layerbook/db';
 import { notFound } from '../../http/problem';
 import { invoiceDocument } from '../document';
 import { moneyOut } from '../money';
+import { localeOf } from '../../i18n/catalog';
+import { documentForReader, linesForReader, progressForReader, type WordsReader } from '../invoice-words';
 import { loadBillingSettings } from '../settings';
 
 /** Everything an invoice PDF prints, read in one firm transaction; money at the currency's minor units. */
@@ -132,7 +134,9 @@ export async function loadPrintableInvoice(tx: TenantTx, id: string, reader: Rea
   );
   const r = rows[0];
   if (!r) throw notFound('invoice');
-  const document = r.document ?? (await draftDocument(tx, r.job_id, r.billing_terms));
+  // The words the system wrote (line labels, terms, the deposit rule) in the client's language, as the rest of the PDF.
+  const words: WordsReader = { language: r.language, locale: localeOf(r.language, r.country) };
+  const document = documentForReader(words, r.document ?? (await draftDocument(tx, r.job_id, r.billing_terms)));
   const money = (v: string) => moneyOut(v, r.currency);
   return {
     id: r.id,
@@ -152,8 +156,8 @@ export async function loadPrintableInvoice(tx: TenantTx, id: string, reader: Rea
     amountPaid: money(r.amount_paid),
     amountCredited: money(r.amount_credited),
     amountDue: money(r.amount_due),
-    lines: r.lines,
-    progress: r.progress,
+    lines: linesForReader(words, r.lines),
+    progress: progressForReader(words, r.progress),
     document,
     notes: r.notes,
     logoKey: await logoKey(tx, document.firm.logoFileId),
@@ -195,7 +199,8 @@ export async function loadPrintableCreditNote(tx: TenantTx, id: string, reader: 
   const r = rows[0];
   if (!r) throw notFound('credit note');
   // The invoice's own document, frozen when it was issued: the credit note speaks to the same client.
-  const document = r.invoice_document ?? (await draftDocument(tx, r.job_id, r.billing_terms));
+  const words: WordsReader = { language: r.language, locale: localeOf(r.language, r.country) };
+  const document = documentForReader(words, r.invoice_document ?? (await draftDocument(tx, r.job_id, r.billing_terms)));
   return {
     id: r.id,
     number: r.number_text,

@@ -1,0 +1,142 @@
+import { DEFAULT_BILLING_SETTINGS, DEPOSIT_CAP_PRESETS, type InvoiceDetail, type JobBillingView } from '@layerbook/contracts';
+import { withTenant } from '@layerbook/db';
+import { formatMoney, paymentLabel } from '@layerbook/domain';
+import Decimal from 'decimal.js';
+import { translator } from '../i18n/catalog';
+import { pdfText } from '../proposals/pdf/pdf-text';
+import { type Agent, startTestServer, type TestServer } from '../testing/harness';
+import { billingJob } from './billing-fixtures';
+import { depositPresetOf, scheduleLineWords, systemText } from './invoice-words';
+import { insertInvoice } from './pdf/invoice-fixtures';
+
+let t: TestServer;
+beforeAll(async () => {
+  t = await startTestServer();
+  t.setNow(new Date('2026-12-01T15:00:00Z'));
+});
+afterAll(() => t.stop());
+
+const binary = (agent: Agent, url: string) =>
+  agent
+    .get(url)
+    .buffer(true)
+    .parse((r, done) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => done(null, Buffer.concat(chunks)));
+    });
+const textOf = (body: unknown) => pdfText(body as Buffer).replace(/\s+/g, ' ');
+
+const CALIFORNIA = DEPOSIT_CAP_PRESETS.find((p) => p.id === 'caHomeImprovement')!;
+// Intl.NumberFormat with the CLDR data Node ships: Spanish in the firm's country (es-US).
+const californiaEs = `Contratos de mejoras para el hogar en California (Bus. & Prof. Code §7159): lo que sea menor entre ${formatMoney('1000.00', 'USD', 'es-US')} y el 10 % del contrato`;
+const NET_14_EN = 'Net 14 (due 14 days after the invoice date)';
+const NET_14_ES = 'Pago a 14 días (vence 14 días después de la fecha de la factura)';
+
+describe('the words the system writes into an invoice, in the reader’s language', () => {
+  it('keys the English words exactly as they were written, and the catalog says them again word for word', () => {
+    const en = translator('en');
+    for (const role of ['deposit', 'milestone', 'final'] as const) {
+      for (const trigger of [{ kind: 'acceptance' }, { kind: 'walkthrough' }, { kind: 'layerComplete', layerId: 'l1' }] as const) {
+        const label = paymentLabel(role, trigger, 'Base coat');
+        const words = scheduleLineWords(label, role, trigger)!;
+        expect(en(words.key, words.params as Record<string, string>)).toBe(label);
+      }
+    }
+    expect(depositPresetOf(CALIFORNIA.name, true)).toBe('caHomeImprovement');
+    expect(depositPresetOf('No deposit limit', false)).toBe('none');
+    expect(depositPresetOf('Our own rule: 20 % at most', true)).toBeUndefined();
+    // A key the catalog does not have prints the stored text, never the key.
+    expect(systemText({ language: 'es', locale: 'es-US' }, 'Deposit on acceptance', { key: 'invoiceWords.line.gone' })).toBe(
+      'Deposit on acceptance',
+    );
+  });
+
+  it('prints a Spanish client’s invoice, e-mail and portal page in Spanish; the office reads English; typed and older words stay as they are', async () => {
+    const f = await billingJob(t, 'Estuco Palabras');
+    expect((await f.send('patch', `/api/clients/${f.clientId}`, { language: 'es' })).status).toBe(200);
+    const settings = { ...DEFAULT_BILLING_SETTINGS, depositCap: CALIFORNIA.rule, depositCapName: CALIFORNIA.name };
+    expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
+    // The final payment's label typed by the office: it prints as typed for every reader.
+    const before = await f.billing();
+    const typed = 'Last payment at hand-over of the keys';
+    // The deposit within the California rule (the lesser of 1,000 and 10 % of this contract), the rest on the stage payment.
+    const cap = Decimal.min(new Decimal(before.contractSum).times('0.1').toDecimalPlaces(2), 1000);
+    const over = new Decimal(before.lines[0].amount).minus(cap);
+    const amountOf = (l: JobBillingView['lines'][number]) =>
+      l.role === 'deposit' ? cap.toFixed(2) : l.role === 'milestone' ? over.plus(l.amount).toFixed(2) : l.amount;
+    const edited = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
+      method: before.method,
+      lines: before.lines.map((l) => ({
+        id: l.id,
+        label: l.role === 'final' ? typed : l.label,
+        role: l.role,
+        trigger: l.trigger,
+        amount: amountOf(l),
+      })),
+    });
+    expect(edited.status).toBe(200);
+    const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
+    expect(started.status).toBe(200);
+    const lines = (started.body as JobBillingView).lines;
+    const [deposit, stage, final] = [lines[0], lines.find((l) => l.role === 'milestone')!, lines.find((l) => l.role === 'final')!];
+    const layer = stage.label.match(/^Progress payment when (.+) is finished on every surface$/)![1];
+
+    const depositId = await f.lineDraft(deposit.id);
+    await f.issue(depositId, { send: true });
+    const stageId = await f.lineDraft(stage.id);
+    await f.issue(stageId);
+    const finalId = await f.lineDraft(final.id);
+    await f.issue(finalId);
+
+    // The office keeps English: the stored words, as issued.
+    const office = (await f.agent.get(`/api/invoices/${depositId}`)).body as InvoiceDetail;
+    expect(office.lines[0].label).toBe('Deposit on acceptance');
+    expect(office.document).toMatchObject({ termsText: NET_14_EN, depositCapName: CALIFORNIA.name });
+
+    // The portal: the client's language (Spanish), the firm's layer name as the firm wrote it.
+    const portal = async (id: string) => (await f.client.agent.get(`/api/portal/invoices/${id}`)).body as InvoiceDetail;
+    const portalDeposit = await portal(depositId);
+    expect(portalDeposit.lines[0].label).toBe('Anticipo al aceptar la propuesta');
+    expect(portalDeposit.document).toMatchObject({ termsText: NET_14_ES, depositCapName: californiaEs });
+    expect((await portal(stageId)).lines[0].label).toBe(`Pago de avance cuando la capa ${layer} esté terminada en todas las superficies`);
+    expect((await portal(finalId)).lines[0].label).toBe(typed);
+
+    // The PDF, for the client and for the office: printed in the client's language.
+    for (const agent of [f.client.agent, f.agent]) {
+      const prefix = agent === f.agent ? '/api' : '/api/portal';
+      const text = textOf((await binary(agent, `${prefix}/invoices/${depositId}/pdf`)).body);
+      expect(text).toContain('Anticipo al aceptar la propuesta');
+      expect(text).toContain(`Condiciones: ${NET_14_ES}`);
+      expect(text).toContain(`Regla del anticipo: ${californiaEs}`);
+      expect(text).not.toContain('Deposit on acceptance');
+      expect(text).not.toContain('Net 14');
+    }
+    expect(textOf((await binary(f.client.agent, `/api/portal/invoices/${finalId}/pdf`)).body)).toContain(typed);
+
+    // The e-mail: the terms in Spanish.
+    const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(f.clientEmail) && String(m.text).includes('Condiciones:'));
+    expect(mail.text).toContain(`Condiciones: ${NET_14_ES}.`);
+    expect(mail.text).not.toContain('Net 14');
+
+    // An invoice issued before words were kept has no keys: every reader reads the stored English.
+    const older = await insertInvoice(t, f.firmId, f.jobId, {
+      kind: 'milestone',
+      status: 'issued',
+      number: 40,
+      issuedOn: '2026-11-20',
+      dueOn: '2026-12-04',
+      total: '100.00',
+      lines: [{ label: 'Deposit on acceptance', amount: '100.00' }],
+    });
+    await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(`update invoices set document = document - 'terms' - 'depositRule' where tenant_id = $1 and id = $2`, [
+        tx.tenantId,
+        older,
+      ]),
+    );
+    const old = await portal(older);
+    expect(old.lines[0].label).toBe('Deposit on acceptance');
+    expect(old.document.termsText).toMatch(/^Net 14/);
+  }, 120_000);
+});
