@@ -15,7 +15,7 @@ import { findPhoto, listPhotos } from '../files/photos';
 import { BOARD_PHOTOS } from './board-photos';
 import type { BoardRow } from './boards';
 import { mailBoardDecision } from './sample-mail';
-import { describeFinish } from './snapshot';
+import { clientFinishStepsIn } from './step-words';
 
 /** What a client may see: boards of their own client record that the firm has shown. Drafts stay in the office. */
 const VISIBLE = CLIENT_BOARD_STATUSES;
@@ -76,7 +76,8 @@ const toClientView = (board: BoardRow, client: ClientPrincipal, photos: PhotoThu
     status: board.status as ClientBoardStatus,
     firmName: client.firmName,
     finishName: snapshot?.systemName ?? null,
-    finishSteps: describeFinish(snapshot),
+    // In the client's language: the system's words by key, the firm's names as typed.
+    finishSteps: snapshot ? clientFinishStepsIn(snapshot.layers, client.language) : [],
     clientComment: board.clientComment,
     decidedAt: board.decidedAt?.toISOString() ?? null,
     photos,

@@ -107,7 +107,10 @@ export interface ClientBoardView {
   readonly status: ClientBoardStatus;
   readonly firmName: string;
   readonly finishName: string | null;
-  /** the finish in plain words, one line per layer in the order it goes on */
+  /**
+   * the finish in plain words, one line per layer in the order it goes on, in the client's language
+   * (the system's words by key, samples.steps in the server's catalog; names as the firm typed them)
+   */
   readonly finishSteps: readonly string[];
   readonly clientComment: string;
   readonly decidedAt: string | null;

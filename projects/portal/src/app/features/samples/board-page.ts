@@ -210,7 +210,11 @@ export class BoardPage {
   /** route parameter */
   readonly id = input.required<string>();
 
-  private readonly loaded = httpResource<ClientBoardView>(() => boardUrl(this.id()));
+  /** The server writes the finish steps in the client's language: read again when it changes. */
+  private readonly loaded = httpResource<ClientBoardView>(() => {
+    this.language.current();
+    return boardUrl(this.id());
+  });
 
   protected readonly words = BOARD_STATUS_WORDS;
   protected readonly board = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
