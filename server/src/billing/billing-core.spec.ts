@@ -142,7 +142,8 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     const depositId = await f.lineDraft(deposit.id);
     const draft = (await f.agent.get(`/api/invoices/${depositId}`)).body as InvoiceDetail;
     expect(draft).toMatchObject({ status: 'draft', number: null, kind: 'deposit', total: deposit.amount, issuedOn: null, dueOn: null });
-    expect(draft.lines).toEqual([{ label: deposit.label, amount: deposit.amount }]);
+    // The label the schedule wrote, kept by key too, so a client reads it in their language.
+    expect(draft.lines).toEqual([{ label: deposit.label, amount: deposit.amount, words: { key: 'invoiceWords.line.deposit.acceptance' } }]);
     expect(draft.document.depositCapName).toBe('No deposit limit');
     expect((await f.billing()).lines[0]).toMatchObject({ status: 'ready', invoiceId: depositId });
     expect(new Decimal(draft.taxIncluded).greaterThan(0)).toBe(true);

@@ -1,4 +1,10 @@
-import { DEFAULT_BILLING_SETTINGS, DEPOSIT_CAP_PRESETS, type InvoiceDetail, type JobBillingView } from '@layerbook/contracts';
+import {
+  DEFAULT_BILLING_SETTINGS,
+  DEPOSIT_CAP_PRESETS,
+  type InvoiceDetail,
+  type InvoiceDocument,
+  type JobBillingView,
+} from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { formatMoney, paymentLabel } from '@layerbook/domain';
 import Decimal from 'decimal.js';
@@ -6,7 +12,7 @@ import { translator } from '../i18n/catalog';
 import { pdfText } from '../proposals/pdf/pdf-text';
 import { type Agent, startTestServer, type TestServer } from '../testing/harness';
 import { billingJob } from './billing-fixtures';
-import { depositPresetOf, scheduleLineWords, systemText } from './invoice-words';
+import { depositPresetOf, documentForReader, scheduleLineWords, systemText } from './invoice-words';
 import { insertInvoice } from './pdf/invoice-fixtures';
 
 let t: TestServer;
@@ -33,6 +39,20 @@ const californiaEs = `Contratos de mejoras para el hogar en California (Bus. & P
 const NET_14_EN = 'Net 14 (due 14 days after the invoice date)';
 const NET_14_ES = 'Pago a 14 días (vence 14 días después de la fecha de la factura)';
 
+/** Just the document's words: the terms (net 14) and a deposit rule by its name. */
+const depositRuleDocument = (name: string): InvoiceDocument => ({
+  firm: { name: 'Firm', addressLines: [], phone: '', taxId: '', logoFileId: null },
+  client: { name: 'Client', email: '', addressLines: [] },
+  site: { label: '', addressLines: [] },
+  jobTitle: 'Job',
+  termsText: NET_14_EN,
+  depositCapName: name,
+  terms: { kind: 'net', days: 14 },
+  depositRule: depositPresetOf(name, true),
+  footer: '',
+  locale: 'en-US',
+});
+
 describe('the words the system writes into an invoice, in the reader’s language', () => {
   it('keys the English words exactly as they were written, and the catalog says them again word for word', () => {
     const en = translator('en');
@@ -46,6 +66,10 @@ describe('the words the system writes into an invoice, in the reader’s languag
     expect(depositPresetOf(CALIFORNIA.name, true)).toBe('caHomeImprovement');
     expect(depositPresetOf('No deposit limit', false)).toBe('none');
     expect(depositPresetOf('Our own rule: 20 % at most', true)).toBeUndefined();
+    // An English reader reads the stored words as issued ("$1,000", not the catalog's figures formatted again).
+    const rule = depositRuleDocument(CALIFORNIA.name);
+    expect(documentForReader({ language: 'en', locale: 'en-US' }, rule).depositCapName).toBe(CALIFORNIA.name);
+    expect(documentForReader({ language: 'es', locale: 'es-US' }, rule).depositCapName).toBe(californiaEs);
     // A key the catalog does not have prints the stored text, never the key.
     expect(systemText({ language: 'es', locale: 'es-US' }, 'Deposit on acceptance', { key: 'invoiceWords.line.gone' })).toBe(
       'Deposit on acceptance',
