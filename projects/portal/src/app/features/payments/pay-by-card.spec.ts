@@ -2,6 +2,7 @@ import { provideTestI18n } from '../../../../../shared/i18n/testing';
 import billing from '../../../i18n/billing/en.json';
 import payments from '../../../i18n/payments/en.json';
 import proposals from '../../../i18n/proposals/en.json';
+import problems from '../../../i18n/problems/en.json';
 import common from '../../../../../shared/i18n/words/common/en.json';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
@@ -16,7 +17,7 @@ async function render(invoice: PortalInvoiceDetail) {
   const leaveFor = vi.fn<(url: string) => void>();
   TestBed.configureTestingModule({
     providers: [
-      provideTestI18n({ billing, payments, proposals, common }),
+      provideTestI18n({ billing, payments, proposals, problems, common }),
       provideHttpClient(),
       provideHttpClientTesting(),
       { provide: LEAVE_FOR, useValue: leaveFor },
@@ -51,13 +52,23 @@ describe('paying an invoice by card', () => {
     const { fixture, html, http, leaveFor, button } = await render({ ...openDeposit, amountDue: '0.30' });
     expect(button()?.textContent).toContain('Pay $0.30 by card');
     button()!.click();
-    const detail = 'A card payment must be at least 0.50 USD.';
+    // The server's refusal (server/src/payments/checkout.ts): a 409 naming the amount. The portal says it in its own words.
+    const detail = 'This amount cannot be paid by card: A card payment must be at least 0.50 USD.';
     http
       .expectOne({ method: 'POST', url: '/api/portal/invoices/inv-1/checkout' })
-      .flush({ type: 'about:blank', title: 'Conflict', status: 409, detail }, { status: 409, statusText: 'Conflict' });
+      .flush(
+        {
+          type: 'about:blank',
+          title: 'Conflict',
+          status: 409,
+          detail,
+          errors: [{ field: 'amount', message: 'A card payment must be at least 0.50 USD.' }],
+        },
+        { status: 409, statusText: 'Conflict' },
+      );
     await fixture.whenStable();
     fixture.detectChanges();
-    expect(html.querySelector('[role="alert"]')?.textContent).toContain(detail);
+    expect(html.querySelector('[role="alert"]')?.textContent).toContain(problems.belowMinimum);
     expect(button()?.disabled).toBe(false);
     expect(leaveFor).not.toHaveBeenCalled();
   });
