@@ -4,6 +4,7 @@ import {
   type InvoiceDetail,
   type InvoiceDocument,
   type JobBillingView,
+  type PortalStatement,
 } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { formatMoney, paymentLabel } from '@layerbook/domain';
@@ -142,6 +143,25 @@ describe('the words the system writes into an invoice, in the reader’s languag
     const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(f.clientEmail) && String(m.text).includes('Condiciones:'));
     expect(mail.text).toContain(`Condiciones: ${NET_14_ES}.`);
     expect(mail.text).not.toContain('Net 14');
+
+    // The statement names each invoice by its kind in Spanish too, and a payment by how it came (same day: invoices first).
+    expect(
+      (
+        await f.send('post', `/api/invoices/${depositId}/payments`, {
+          method: 'cheque',
+          amount: '100.00',
+          receivedOn: '2026-12-01',
+          reference: '1042',
+        })
+      ).status,
+    ).toBe(200);
+    const statement = (await f.client.agent.get(`/api/portal/jobs/${f.jobId}/statement`)).body as PortalStatement;
+    expect(statement.lines.map((l) => l.text)).toEqual([
+      'INV-0001 Anticipo',
+      'INV-0002 Pago por etapa',
+      'INV-0003 Factura final',
+      'Pago con cheque 1042',
+    ]);
 
     // An invoice issued before words were kept has no keys: every reader reads the stored English.
     const older = await insertInvoice(t, f.firmId, f.jobId, {

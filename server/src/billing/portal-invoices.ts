@@ -1,5 +1,4 @@
 import {
-  INVOICE_KIND_LABELS,
   type InvoiceKind,
   type InvoiceStatus,
   type PaymentMethod,
@@ -17,6 +16,8 @@ import type { Config } from '../config';
 import { payOnlineFor } from '../payments/portal-pay';
 import { processorFor } from '../payments/processor';
 import { listPortalReceipts } from '../payments/receipts/receipt-read';
+import { translator, type Translate } from '../i18n/catalog';
+import { clientReader } from '../i18n/reader';
 import { moneyOut } from './money';
 import { loadPrintableInvoice } from './pdf/printable';
 
@@ -128,25 +129,13 @@ export async function getClientInvoice(
   };
 }
 
-const PAYMENT_WORDS: Readonly<Record<PaymentMethod, string>> = {
-  card: 'Payment by card',
-  cheque: 'Payment by cheque',
-  transfer: 'Payment by bank transfer',
-  cash: 'Payment in cash',
-};
-
-const REFUND_WORDS: Readonly<Record<PaymentMethod, string>> = {
-  card: 'Refund to card',
-  cheque: 'Refund by cheque',
-  transfer: 'Refund by bank transfer',
-  cash: 'Refund in cash',
-};
-
 interface EntryRow {
   kind: 'invoice' | 'creditNote' | 'payment' | 'refund';
   on: string;
   /** the document's number, or the payment's reference */
   text: string;
+  /** a credit note's invoice number */
+  of_number: string | null;
   invoice_kind: InvoiceKind | null;
   method: PaymentMethod | null;
   amount: string;
@@ -167,24 +156,26 @@ export async function getClientStatement(tx: TenantTx, client: ClientPrincipal, 
   ).rows[0];
   if (!job) throw notFound('job');
   const { rows } = await tx.client.query<EntryRow>(
-    `select 'invoice' as kind, i.issued_on::text as on, i.number_text as text, i.kind as invoice_kind, i.total::text as amount, null as method, i.number as seq
+    `select 'invoice' as kind, i.issued_on::text as on, i.number_text as text, i.kind as invoice_kind, i.total::text as amount, null as method,
+            i.number as seq, null as of_number
        from invoices i where i.tenant_id = $1 and i.job_id = $2 and i.status <> 'draft'
      union all
-     select 'creditNote', n.issued_on::text, n.number_text || ' for ' || i.number_text, null, n.amount::text, null, n.number
+     select 'creditNote', n.issued_on::text, n.number_text, null, n.amount::text, null, n.number, i.number_text
        from credit_notes n join invoices i on i.tenant_id = n.tenant_id and i.id = n.invoice_id
       where n.tenant_id = $1 and i.job_id = $2
      union all
-     select 'payment', p.received_on::text, p.reference, null, p.amount::text, p.method, null
+     select 'payment', p.received_on::text, p.reference, null, p.amount::text, p.method, null, null
        from payments p join invoices i on i.tenant_id = p.tenant_id and i.id = p.invoice_id
       where p.tenant_id = $1 and i.job_id = $2
      union all
-     select 'refund', r.refunded_on::text, r.reference, null, r.amount::text, r.method, null
+     select 'refund', r.refunded_on::text, r.reference, null, r.amount::text, r.method, null, null
        from refunds r join invoices i on i.tenant_id = r.tenant_id and i.id = r.invoice_id
       where r.tenant_id = $1 and i.job_id = $2 and r.status = 'succeeded'
      order by 2, 7 nulls last`,
     [tx.tenantId, jobId],
   );
-  const entries: StatementEntry[] = rows.map((r) => ({ kind: r.kind, on: r.on, ref: entryText(r), amount: r.amount }));
+  const t = translator((await clientReader(tx, clientId)).language);
+  const entries: StatementEntry[] = rows.map((r) => ({ kind: r.kind, on: r.on, ref: entryText(r, t), amount: r.amount }));
   const s = jobStatement({ contractSum: job.contract_sum, currency: job.currency, entries });
   const money = (d: Decimal) => moneyOut(d, job.currency);
   return {
@@ -209,12 +200,14 @@ export async function getClientStatement(tx: TenantTx, client: ClientPrincipal, 
   };
 }
 
-/** "INV-0007 Deposit", "CN-0002 for INV-0007", "Payment by cheque 1042", "Refund to card". */
-function entryText(r: EntryRow): string {
+/** "INV-0007 Deposit", "CN-0002 for INV-0007", "Payment by cheque 1042", "Refund to card": in the client's language. */
+function entryText(r: EntryRow, t: Translate): string {
+  const w = (key: string, params?: Record<string, string>) => t(`invoiceWords.statement.${key}`, params);
   if (r.kind === 'payment' || r.kind === 'refund') {
-    const words = r.method ? (r.kind === 'payment' ? PAYMENT_WORDS : REFUND_WORDS)[r.method] : 'Payment';
-    return r.text ? `${words} ${r.text}` : words;
+    const words = w(`${r.kind}.${r.method ?? 'other'}`);
+    return r.text ? w('withReference', { words, reference: r.text }) : words;
   }
-  if (r.kind === 'invoice' && r.invoice_kind) return `${r.text} ${INVOICE_KIND_LABELS[r.invoice_kind]}`;
+  if (r.kind === 'invoice' && r.invoice_kind) return w('invoice', { number: r.text, kind: t(`pdf.invoice.kinds.${r.invoice_kind}`) });
+  if (r.kind === 'creditNote' && r.of_number) return w('creditNote', { creditNote: r.text, number: r.of_number });
   return r.text;
 }
