@@ -4,7 +4,7 @@ import { notFound } from '../../http/problem';
 import { invoiceDocument } from '../document';
 import { moneyOut } from '../money';
 import { localeOf } from '../../i18n/catalog';
-import { documentForReader, linesForReader, progressForReader, type WordsReader } from '../invoice-words';
+import { documentForReader, linesForReader, progressForReader, progressWithWords, type WordsReader } from '../invoice-words';
 import { loadBillingSettings } from '../settings';
 
 /** Everything an invoice PDF prints, read in one firm transaction; money at the currency's minor units. */
@@ -157,7 +157,8 @@ export async function loadPrintableInvoice(tx: TenantTx, id: string, reader: Rea
     amountCredited: money(r.amount_credited),
     amountDue: money(r.amount_due),
     lines: linesForReader(words, r.lines),
-    progress: progressForReader(words, r.progress),
+    // A draft is a preview: its default value line reads in the client's words before issue keeps the key.
+    progress: progressForReader(words, r.status === 'draft' ? progressWithWords(r.progress) : r.progress),
     document,
     notes: r.notes,
     logoKey: await logoKey(tx, document.firm.logoFileId),
