@@ -1,0 +1,91 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { ApplicationRef } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import type { ClientBoardView } from '@layerbook/contracts/types';
+import { describe, expect, it } from 'vitest';
+import common from '../../../../../shared/i18n/words/common/en.json';
+import { Language } from '../../../../../shared/i18n/language';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import billing from '../../../i18n/billing/en.json';
+import layout from '../../../i18n/layout/en.json';
+import problems from '../../../i18n/problems/en.json';
+import proposals from '../../../i18n/proposals/en.json';
+import samples from '../../../i18n/samples/en.json';
+import { BoardPage } from './board-page';
+
+/** An invented board as the API answers it; the server writes its steps in the client's language. */
+const board = (finishSteps: string[]): ClientBoardView => ({
+  id: 'b-1',
+  label: 'Stair hall, board A',
+  round: 1,
+  status: 'shown',
+  firmName: 'Ochre Lane Finishes',
+  finishName: 'Antiqued glaze over primer',
+  finishSteps,
+  clientComment: '',
+  decidedAt: null,
+  photos: [],
+});
+
+function render() {
+  TestBed.configureTestingModule({
+    providers: [
+      provideTestI18n({ samples, proposals, billing, layout, problems, common }),
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      provideRouter([]),
+    ],
+  });
+  const fixture = TestBed.createComponent(BoardPage);
+  fixture.componentRef.setInput('id', 'b-1');
+  TestBed.inject(ApplicationRef).tick();
+  const http = TestBed.inject(HttpTestingController);
+  const html = fixture.nativeElement as HTMLElement;
+  const steps = () => [...html.querySelectorAll('ol.steps li')].map((li) => li.textContent?.trim());
+  return { fixture, http, html, steps };
+}
+
+describe('a sample board in the portal', () => {
+  it('shows the steps as the server wrote them, and reads them again when the client’s language changes', async () => {
+    const { fixture, http, steps } = render();
+    http.expectOne('/api/portal/boards/b-1').flush(board(['1. Primer: Acrylic primer, rolled on, one coat.']));
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(steps()).toEqual(['1. Primer: Acrylic primer, rolled on, one coat.']);
+
+    await TestBed.inject(Language).use('es');
+    TestBed.inject(ApplicationRef).tick();
+    http.expectOne('/api/portal/boards/b-1').flush(board(['1. Primer: Acrylic primer, con rodillo, una mano.']));
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(steps()).toEqual(['1. Primer: Acrylic primer, con rodillo, una mano.']);
+    http.verify();
+  });
+
+  it('says an answer given elsewhere in the portal’s words, and shows the board as it now stands', async () => {
+    const { fixture, http, html } = render();
+    http.expectOne('/api/portal/boards/b-1').flush(board([]));
+    await fixture.whenStable();
+    fixture.detectChanges();
+    [...html.querySelectorAll('button')].find((b) => b.textContent?.includes('Approve this board'))!.click();
+    fixture.detectChanges();
+    [...html.querySelectorAll('button')].find((b) => b.textContent?.includes('Yes, approve this board'))!.click();
+    http
+      .expectOne({ method: 'POST', url: '/api/portal/boards/b-1/approve' })
+      .flush(
+        { type: 'https://layerbook.local/problems/409', title: 'Conflict', status: 409, detail: 'You have already approved this board.' },
+        { status: 409, statusText: 'Conflict' },
+      );
+    // The refusal is handled once the rejected call settles; the page then reads the board again.
+    await new Promise((resolve) => setTimeout(resolve));
+    TestBed.inject(ApplicationRef).tick();
+    expect(html.querySelector('.error[role="alert"]')?.textContent).toBe(problems.boardDecided);
+    http.expectOne('/api/portal/boards/b-1').flush({ ...board([]), status: 'approved', decidedAt: '2026-03-04T15:30:00Z' });
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(html.textContent).toContain('You approved this board on');
+    http.verify();
+  });
+});
