@@ -5,6 +5,7 @@ import {
   type InvoiceDocument,
   type JobBillingView,
   type PortalStatement,
+  type ProgressTable,
 } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { formatMoney, paymentLabel } from '@layerbook/domain';
@@ -13,7 +14,16 @@ import { translator } from '../i18n/catalog';
 import { pdfText } from '../proposals/pdf/pdf-text';
 import { type Agent, startTestServer, type TestServer } from '../testing/harness';
 import { billingJob } from './billing-fixtures';
-import { depositPresetOf, documentForReader, scheduleLineWords, systemText } from './invoice-words';
+import {
+  depositPresetOf,
+  documentForReader,
+  linesForReader,
+  linesWithWords,
+  progressForReader,
+  progressWithWords,
+  scheduleLineWords,
+  systemText,
+} from './invoice-words';
 import { insertInvoice } from './pdf/invoice-fixtures';
 
 let t: TestServer;
@@ -54,6 +64,38 @@ const depositRuleDocument = (name: string): InvoiceDocument => ({
   locale: 'en-US',
 });
 
+/** A progress table with these value lines (the figures do not matter here). */
+const progressTable = (labels: readonly string[]): ProgressTable => {
+  const zero = '0.00';
+  return {
+    periodEnd: '2026-12-31',
+    lines: labels.map((label, i) => ({
+      valueLineId: `v${i}`,
+      label,
+      scheduledValue: zero,
+      previousWork: zero,
+      thisPeriodWork: zero,
+      storedMaterials: zero,
+      completedToDate: zero,
+      percentComplete: '0',
+      balanceToFinish: zero,
+      retainage: zero,
+    })),
+    retainageRates: { workPercent: 0, storedPercent: 0, stopAtPercentComplete: null },
+    summary: {
+      originalContractSum: zero,
+      changeOrders: zero,
+      contractSumToDate: zero,
+      completedToDate: zero,
+      retainage: zero,
+      earnedLessRetainage: zero,
+      previouslyBilled: zero,
+      dueThisPeriod: zero,
+      balanceToFinishWithRetainage: zero,
+    },
+  };
+};
+
 describe('the words the system writes into an invoice, in the reader’s language', () => {
   it('keys the English words exactly as they were written, and the catalog says them again word for word', () => {
     const en = translator('en');
@@ -67,6 +109,24 @@ describe('the words the system writes into an invoice, in the reader’s languag
     expect(depositPresetOf(CALIFORNIA.name, true)).toBe('caHomeImprovement');
     expect(depositPresetOf('No deposit limit', false)).toBe('none');
     expect(depositPresetOf('Our own rule: 20 % at most', true)).toBeUndefined();
+    // The retainage release, a dated line and the default value line, as a Spanish client reads them (CLDR es long dates).
+    const es = { language: 'es', locale: 'es-US' } as const;
+    const dated = paymentLabel('final', { kind: 'date', date: '2026-12-10' });
+    const lines = linesWithWords(
+      [
+        { label: 'Retainage released', amount: '10.00' },
+        { label: dated, amount: '5.00' },
+      ],
+      { role: 'final', trigger: { kind: 'date', date: '2026-12-10' } },
+    );
+    expect(linesForReader(es, lines).map((l) => l.label)).toEqual([
+      'Liberación de la retención',
+      'Pago final con vencimiento el 10 de diciembre de 2026',
+    ]);
+    expect(linesForReader({ language: 'en', locale: 'en-US' }, lines).map((l) => l.label)).toEqual(['Retainage released', dated]);
+    const table = progressWithWords(progressTable(['All the work', 'Dining room']));
+    expect(progressForReader(es, table)!.lines.map((l) => l.label)).toEqual(['Todo el trabajo', 'Dining room']);
+
     // An English reader reads the stored words as issued ("$1,000", not the catalog's figures formatted again).
     const rule = depositRuleDocument(CALIFORNIA.name);
     expect(documentForReader({ language: 'en', locale: 'en-US' }, rule).depositCapName).toBe(CALIFORNIA.name);
