@@ -12,6 +12,7 @@ import type { PortalInvoiceDetail } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { openDeposit, paidDeposit } from '../payments/payment-fixtures';
 import { InvoicePage } from './invoice-page';
+import { Language } from '../../../../../shared/i18n/language';
 
 async function render(invoice: PortalInvoiceDetail, payment?: string) {
   TestBed.configureTestingModule({
@@ -84,5 +85,23 @@ describe('the client’s invoice page', () => {
     const links = [...html.querySelectorAll('lb-receipt-list a[download]')].map((a) => a.getAttribute('href'));
     expect(links).toEqual(['/api/portal/payments/pay-1/receipt.pdf', '/api/portal/refunds/ref-1/receipt.pdf']);
     expect(html.querySelector('lb-receipt-list')?.textContent).toContain('Refunded to your card');
+  });
+
+  it('shows the invoice’s own words as the server wrote them, and reads them again when the client’s language changes', async () => {
+    const { html } = await render(openDeposit);
+    expect(html.textContent).toContain('Net 14');
+    await TestBed.inject(Language).use('es');
+    TestBed.inject(ApplicationRef).tick();
+    const spanish: PortalInvoiceDetail = {
+      ...openDeposit,
+      lines: [{ label: 'Anticipo al aceptar la propuesta', amount: '1200.00' }],
+      document: { ...openDeposit.document, termsText: 'Pago a 14 días', depositCapName: 'Sin límite de anticipo' },
+    };
+    TestBed.inject(HttpTestingController).expectOne(`/api/portal/invoices/${openDeposit.id}`).flush(spanish);
+    await TestBed.inject(ApplicationRef).whenStable();
+    TestBed.inject(ApplicationRef).tick();
+    expect(html.textContent).toContain('Anticipo al aceptar la propuesta');
+    expect(html.textContent).toContain('Pago a 14 días');
+    expect(html.textContent).toContain('Sin límite de anticipo');
   });
 });

@@ -35,7 +35,11 @@ export class InvoicePage {
   /** query parameter: `cancelled` when the client came back from the card page without paying */
   readonly payment = input<string>();
 
-  private readonly loaded = httpResource<PortalInvoiceDetail>(() => invoiceUrl(this.id()));
+  /** The server writes the invoice's own words (line labels, terms, deposit rule) in the client's language: read again when it changes. */
+  private readonly loaded = httpResource<PortalInvoiceDetail>(() => {
+    this.language.current();
+    return invoiceUrl(this.id());
+  });
 
   protected readonly invoice = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
   protected readonly isLoading = computed(() => !this.loaded.hasValue() && this.loaded.isLoading());

@@ -167,7 +167,11 @@ export class StatementPage {
   /** route parameter: the job */
   readonly id = input.required<string>();
 
-  private readonly loaded = httpResource<PortalStatement>(() => statementUrl(this.id()));
+  /** The server writes each line's words in the client's language: read again when it changes. */
+  private readonly loaded = httpResource<PortalStatement>(() => {
+    this.language.current();
+    return statementUrl(this.id());
+  });
 
   protected readonly statement = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
   protected readonly isLoading = computed(() => !this.loaded.hasValue() && this.loaded.isLoading());
