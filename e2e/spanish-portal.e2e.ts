@@ -84,8 +84,15 @@ test('the client chooses Spanish and reads a proposal and an invoice in Spanish,
 
     // Back to the firm's language from the same menu.
     await portal.getByRole('button', { name: 'Español' }).click();
-    await portal.getByRole('menuitemradio', { name: 'El idioma de la empresa' }).click();
+    await portal.getByRole('menuitemradio', { name: 'Igual que Fernhollow Plaster & Glaze (English)' }).click();
     await expect(portal.getByRole('heading', { level: 1, name: `Invoice ${number}` })).toBeVisible();
+    // and the menu marks that choice: following the firm, not English chosen
+    await portal.getByRole('button', { name: 'English' }).click();
+    await expect(portal.getByRole('menuitemradio', { name: 'Same as Fernhollow Plaster & Glaze (English)' })).toHaveAttribute(
+      'aria-checked',
+      'true',
+    );
+    await portal.keyboard.press('Escape');
   } finally {
     await firmLanguageAgain(portal);
     await context.close();

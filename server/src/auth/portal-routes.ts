@@ -19,8 +19,8 @@ async function portalSession(ctx: AppContext, req: Request, res: Response, fresh
           firmId: client.tenantId,
           firmName: client.firmName,
           language: client.language,
-          ownLanguage: client.ownLanguage ?? null,
-          firmLanguage: client.firmLanguage ?? client.language,
+          ownLanguage: client.ownLanguage,
+          firmLanguage: client.firmLanguage,
           country: client.country,
         }
       : null,

@@ -34,10 +34,10 @@ export interface ClientPrincipal {
   readonly language: Language;
   /**
    * The client's own choice (null follows the firm) and the firm's language, loaded with the session
-   * so the portal's language menu can show which is chosen; absent where a principal is made by hand.
+   * so the portal's language menu can show which is chosen.
    */
-  readonly ownLanguage?: Language | null;
-  readonly firmLanguage?: Language;
+  readonly ownLanguage: Language | null;
+  readonly firmLanguage: Language;
   readonly country: string;
 }
 

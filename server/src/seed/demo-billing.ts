@@ -124,9 +124,12 @@ async function demoClient(tx: TenantTx, people: DemoBillingPeople): Promise<Clie
     email: string;
     firm_name: string;
     language: 'en' | 'es';
+    own_language: 'en' | 'es' | null;
+    firm_language: 'en' | 'es';
     country: string;
   }>(
-    `select p.id, p.name, p.email, f.name as firm_name, coalesce(c.language, f.language) as language, f.country
+    `select p.id, p.name, p.email, f.name as firm_name, coalesce(c.language, f.language) as language, c.language as own_language,
+            f.language as firm_language, f.country
        from portal_users p join firms f on f.id = p.tenant_id join clients c on c.id = p.client_id
       where p.tenant_id = $1 and p.client_id = $2`,
     [tx.tenantId, people.clientId],
@@ -139,6 +142,8 @@ async function demoClient(tx: TenantTx, people: DemoBillingPeople): Promise<Clie
     email: rows[0].email,
     firmName: rows[0].firm_name,
     language: rows[0].language,
+    ownLanguage: rows[0].own_language,
+    firmLanguage: rows[0].firm_language,
     country: rows[0].country,
   };
 }
