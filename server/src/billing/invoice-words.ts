@@ -115,6 +115,11 @@ function depositRuleWords(id: DepositCapPresetId): InvoiceWords {
     : { key: `${AREA}.depositRule.${id}` };
 }
 
+/** A deposit rule's name for one reader: a ready-made rule (by its id) in their words, a named one as named. */
+export function depositRuleText(reader: WordsReader, english: string, id: DepositCapPresetId | undefined): string {
+  return systemText(reader, english, id ? depositRuleWords(id) : undefined);
+}
+
 /** The document's terms and deposit rule in the reader's words. */
 export function documentForReader(reader: WordsReader, d: InvoiceDocument): InvoiceDocument {
   if (reader.language === 'en') return d;

@@ -1,4 +1,11 @@
-import type { ProposalSnapshot, ProposalTerms, SnapshotCaution, SnapshotOption, SnapshotRoom } from '@layerbook/contracts';
+import type {
+  DepositCapPresetId,
+  ProposalSnapshot,
+  ProposalTerms,
+  SnapshotCaution,
+  SnapshotOption,
+  SnapshotRoom,
+} from '@layerbook/contracts';
 import {
   type CautionId,
   type DepositCapRule,
@@ -10,6 +17,7 @@ import {
   STANDING_LINE,
 } from '@layerbook/domain';
 import Decimal from 'decimal.js';
+import { depositPresetOf } from '../billing/invoice-words';
 import { optionPayments } from './payment-plan';
 import type { ProposalSources, StoredVariant } from './proposal-sources';
 
@@ -23,6 +31,9 @@ export interface ProposalChoice {
 }
 
 const round1 = (n: number) => Math.round(n * 10) / 10;
+
+/** The ready-made deposit rule's id beside its name, when the firm's rule is one. */
+const withPresetId = (id: DepositCapPresetId | undefined) => (id ? { depositRuleId: id } : {});
 
 /** Surfaces grouped by room in the site's order, each with the finish every option puts on it. */
 function scopeByRoom(src: ProposalSources, unit: 'ft' | 'm'): SnapshotRoom[] {
@@ -133,6 +144,7 @@ export function buildSnapshot(src: ProposalSources, choice: ProposalChoice): Pro
     notes: choice.notes,
     terms: choice.terms,
     depositRule: src.depositCapName,
+    ...withPresetId(depositPresetOf(src.depositCapName, src.depositCap.kind !== 'none')),
     safety: { standing: STANDING_LINE, cautions: safetyNotes(src.estimate.variants, src.firm.country) },
     // A pre-1978 home carries the notice whatever the options disturb; an unknown year does once paint is disturbed.
     leadNotice: leadNotice(

@@ -3,7 +3,10 @@ import type { TenantTx } from '@layerbook/db';
 import { localDate } from '../firms/local-date';
 import type { ClientPrincipal } from '../http/principal';
 import { notFound } from '../http/problem';
+import type { WordsReader } from '../billing/invoice-words';
+import { localeOf } from '../i18n/catalog';
 import type { VersionRow } from './proposal-versions';
+import { snapshotForReader } from './snapshot-words';
 
 /**
  * What a signed-in client may read: versions that were sent (never drafts) of estimates for the
@@ -49,7 +52,7 @@ export async function loadClientVersion(tx: TenantTx, client: ClientPrincipal, i
 
 export const isLatest = (row: ClientVersionRow): boolean => row.status !== 'superseded' && row.version >= row.newest_sent;
 
-export function toPortalProposal(row: ClientVersionRow, today: string): PortalProposal {
+export function toPortalProposal(row: ClientVersionRow, today: string, reader?: WordsReader): PortalProposal {
   return {
     id: row.id,
     version: row.version,
@@ -57,7 +60,7 @@ export function toPortalProposal(row: ClientVersionRow, today: string): PortalPr
     expiresOn: row.expires_on,
     isExpired: row.expires_on < today,
     isLatest: isLatest(row),
-    snapshot: row.snapshot,
+    snapshot: reader ? snapshotForReader(reader, row.snapshot) : row.snapshot,
     decidedAt: row.decided_at?.toISOString() ?? null,
     acceptedVariantId: row.accepted_variant_id,
     signedName: row.signed_name,
@@ -67,7 +70,7 @@ export function toPortalProposal(row: ClientVersionRow, today: string): PortalPr
 
 export async function getClientProposal(tx: TenantTx, client: ClientPrincipal, id: string, now: Date): Promise<PortalProposal> {
   const row = await loadClientVersion(tx, client, id);
-  return toPortalProposal(row, await firmToday(tx, now));
+  return toPortalProposal(row, await firmToday(tx, now), { language: client.language, locale: localeOf(client.language, client.country) });
 }
 
 /** Each estimate of this client that has a sent proposal, with its newest sent version. */

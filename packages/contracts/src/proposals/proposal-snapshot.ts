@@ -1,3 +1,4 @@
+import type { DepositCapPresetId } from '../billing/billing-settings-types';
 import type { ProposalTerms, ProposalVersionStatus } from './proposal-types';
 
 /**
@@ -25,6 +26,8 @@ export interface ProposalSnapshot {
   readonly terms: ProposalTerms;
   /** the deposit rule the firm chose for its jurisdiction, by name ("No deposit limit" too); absent from older snapshots */
   readonly depositRule?: string;
+  /** the ready-made rule it is, so a client reading another language reads its name in their words; absent for a rule the firm named */
+  readonly depositRuleId?: DepositCapPresetId;
   readonly safety: { readonly standing: string; readonly cautions: readonly SnapshotCaution[] };
   /**
    * The lead-safe notice of a home built before 1978, or of one whose year is unknown while the

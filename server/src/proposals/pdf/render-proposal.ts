@@ -1,6 +1,7 @@
 import type { Language, ProposalSnapshot } from '@layerbook/contracts';
 import PDFDocument from 'pdfkit';
 import { languageOfLocale, localeOf, translator, type Translate } from '../../i18n/catalog';
+import { snapshotForReader } from '../snapshot-words';
 import { registerFonts } from './fonts';
 import { formatsFor } from './format';
 import { headingSection } from './heading-section';
@@ -31,8 +32,9 @@ const countryOf = (locale: string) => locale.split('-')[1] ?? 'US';
  * record), in the client's language: our words and the cautions by their keys; numbers, dates and
  * money for the language with the firm's country. What the firm typed stays as typed.
  */
-export function renderProposalPdf(s: ProposalSnapshot, meta: PdfMeta): Promise<Buffer> {
-  const language = meta.language ?? languageOfLocale(s.locale);
+export function renderProposalPdf(stored: ProposalSnapshot, meta: PdfMeta): Promise<Buffer> {
+  const language = meta.language ?? languageOfLocale(stored.locale);
+  const s = snapshotForReader({ language, locale: localeOf(language, countryOf(stored.locale)) }, stored);
   const t = translator(language);
   const doc = new PDFDocument({
     size: 'LETTER',

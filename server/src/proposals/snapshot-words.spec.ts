@@ -1,0 +1,31 @@
+import { DEPOSIT_CAP_PRESETS, type ProposalSnapshot } from '@layerbook/contracts';
+import { formatMoney } from '@layerbook/domain';
+import { snapshotForReader } from './snapshot-words';
+
+const CALIFORNIA = DEPOSIT_CAP_PRESETS.find((p) => p.id === 'caHomeImprovement')!;
+// Only the fields the reader's words touch; the rest of a snapshot is passed through untouched.
+const snapshot = (depositRule: string, depositRuleId?: 'caHomeImprovement' | 'none') =>
+  ({ title: 'Hall', depositRule, ...(depositRuleId ? { depositRuleId } : {}) }) as unknown as ProposalSnapshot;
+
+describe('a proposal as its reader reads it', () => {
+  const es = { language: 'es', locale: 'es-US' } as const;
+
+  it('names a ready-made deposit rule in the client’s language, and leaves the stored snapshot as it was', () => {
+    const stored = snapshot(CALIFORNIA.name, 'caHomeImprovement');
+    const read = snapshotForReader(es, stored);
+    // the invoice's own words for the same rule (server/src/billing/invoice-words.spec.ts), amount formatted for es-US
+    expect(read.depositRule).toBe(
+      `Contratos de mejoras para el hogar en California (Bus. & Prof. Code §7159): lo que sea menor entre ${formatMoney('1000.00', 'USD', 'es-US')} y el 10 % del contrato`,
+    );
+    expect(stored.depositRule).toBe(CALIFORNIA.name);
+    expect(snapshotForReader(es, snapshot('No deposit limit', 'none')).depositRule).not.toBe('No deposit limit');
+  });
+
+  it('keeps English, a rule the firm named and an older snapshot without the id as stored', () => {
+    expect(snapshotForReader({ language: 'en', locale: 'en-US' }, snapshot(CALIFORNIA.name, 'caHomeImprovement')).depositRule).toBe(
+      CALIFORNIA.name,
+    );
+    expect(snapshotForReader(es, snapshot('Our own rule: 20 % at most')).depositRule).toBe('Our own rule: 20 % at most');
+    expect(snapshotForReader(es, snapshot(CALIFORNIA.name)).depositRule).toBe(CALIFORNIA.name);
+  });
+});
