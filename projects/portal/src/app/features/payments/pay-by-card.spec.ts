@@ -54,18 +54,16 @@ describe('paying an invoice by card', () => {
     button()!.click();
     // The server's refusal (server/src/payments/checkout.ts): a 409 naming the amount. The portal says it in its own words.
     const detail = 'This amount cannot be paid by card: A card payment must be at least 0.50 USD.';
-    http
-      .expectOne({ method: 'POST', url: '/api/portal/invoices/inv-1/checkout' })
-      .flush(
-        {
-          type: 'about:blank',
-          title: 'Conflict',
-          status: 409,
-          detail,
-          errors: [{ field: 'amount', message: 'A card payment must be at least 0.50 USD.' }],
-        },
-        { status: 409, statusText: 'Conflict' },
-      );
+    http.expectOne({ method: 'POST', url: '/api/portal/invoices/inv-1/checkout' }).flush(
+      {
+        type: 'about:blank',
+        title: 'Conflict',
+        status: 409,
+        detail,
+        errors: [{ field: 'amount', message: 'A card payment must be at least 0.50 USD.' }],
+      },
+      { status: 409, statusText: 'Conflict' },
+    );
     await fixture.whenStable();
     fixture.detectChanges();
     expect(html.querySelector('[role="alert"]')?.textContent).toContain(problems.belowMinimum);
