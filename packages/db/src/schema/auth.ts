@@ -1,5 +1,5 @@
-import { index, integer, json, pgTable, text, timestamp, uniqueIndex, uuid, varchar } from 'drizzle-orm/pg-core';
-import { createdAt, id } from './columns';
+import { bigint, index, integer, json, pgTable, text, timestamp, uniqueIndex, uuid, varchar } from 'drizzle-orm/pg-core';
+import { createdAt, id, updatedAt } from './columns';
 import { users } from './team';
 
 /**
@@ -63,4 +63,36 @@ export const pendingSignUps = pgTable(
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex('pending_sign_ups_token_hash_key').on(t.tokenHash)],
+);
+
+/**
+ * A person's second factor (TOTP, RFC 6238). Not firm data: it belongs to the person, like their
+ * password. The secret is kept encrypted (AES-256-GCM, server/src/auth/second-factor/secret-box.ts);
+ * `confirmed_at` is null while an enrolment waits for its first code. `last_used_step` is the time
+ * step of the last code accepted, so no code is accepted twice.
+ */
+export const userSecondFactors = pgTable('user_second_factors', {
+  userId: uuid('user_id')
+    .primaryKey()
+    .references(() => users.id),
+  secretSealed: text('secret_sealed').notNull(),
+  confirmedAt: timestamp('confirmed_at', { withTimezone: true }),
+  lastUsedStep: bigint('last_used_step', { mode: 'number' }),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+/** One-time recovery codes of a second factor: only a keyed hash of each is kept; each works once. */
+export const userRecoveryCodes = pgTable(
+  'user_recovery_codes',
+  {
+    id: id(),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id),
+    codeHash: text('code_hash').notNull(),
+    usedAt: timestamp('used_at', { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('user_recovery_codes_user_hash_key').on(t.userId, t.codeHash)],
 );

@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { jsonb, pgPolicy, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { boolean, jsonb, pgPolicy, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { createdAt, currentTenant, id, jobsRole, lookupPolicy, tenantPolicy, updatedAt } from './columns';
 
 /** The tenant. Its own id is its tenant id, so the policy compares `id`. */
@@ -28,6 +28,8 @@ export const firms = pgTable(
     language: text('language', { enum: ['en', 'es'] })
       .notNull()
       .default('en'),
+    /** owner and office must sign in with a second factor (auth/second-factor) */
+    secondFactorRequired: boolean('second_factor_required').notNull().default(false),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
