@@ -13,3 +13,4 @@ export * from './samples';
 export * from './audit';
 export * from './mail';
 export * from './payments';
+export * from './rate-limit';
