@@ -12,6 +12,11 @@ const schema = z
     DATABASE_URL: z.string().min(1),
     DATABASE_OWNER_URL: z.string().min(1),
     DATABASE_JOBS_URL: z.string().min(1),
+    /**
+     * A read replica (a streaming standby) for reports that only read: the cash figures and exports.
+     * Same app role as DATABASE_URL; unset, they read the primary.
+     */
+    DATABASE_READ_URL: z.preprocess((v) => (v === '' ? undefined : v), z.string().min(1).optional()),
     SESSION_SECRET: z.string().min(32, { error: 'SESSION_SECRET must have at least 32 characters' }),
     SMTP_HOST: z.string().default('127.0.0.1'),
     SMTP_PORT: z.coerce.number().int().default(1025),

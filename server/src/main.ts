@@ -3,7 +3,7 @@ import { migrateDatabase } from '@layerbook/db';
 import { Pool } from 'pg';
 import { createApp } from './app';
 import { loadConfig } from './config';
-import type { AppContext } from './context';
+import { openReadPool, type AppContext } from './context';
 import { assertRlsBoundRole } from './db-roles';
 import { createLogger } from './http/logger';
 import { openObjectStore } from './files/object-store';
@@ -21,9 +21,13 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
   if (config.RUN_MIGRATIONS) await migrateDatabase(config.DATABASE_OWNER_URL, path.join(config.ROOT_DIR, 'migrations'));
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: config.DB_POOL_MAX, application_name: `layerbook-${mode}` });
   await assertRlsBoundRole(pool);
+  // Reports that only read go to the read replica when there is one (DATABASE_READ_URL), under the same checked role.
+  const readPool = mode === 'web' ? openReadPool(config, `layerbook-${mode}`) : undefined;
+  readPool?.on('error', (err) => logger.warn({ dbError: err.message }, 'idle read-replica connection lost'));
+  if (readPool) await assertRlsBoundRole(readPool);
   const queue = await startQueue(config, logger);
   const storage = await openObjectStore(config);
-  const ctx: AppContext = { config, pool, queue, logger, storage, now: () => new Date() };
+  const ctx: AppContext = { config, pool, readPool, queue, logger, storage, now: () => new Date() };
   const workers = mode === 'worker' || config.RUN_WORKERS ? await startWorkers(config, queue, logger, ctx.now) : undefined;
 
   let server: import('node:http').Server | undefined;
@@ -45,6 +49,7 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
     await queue.stop();
     await workers?.stop();
     await pool.end();
+    await readPool?.end();
     storage.close();
     clearTimeout(force);
     process.exit(0);

@@ -2,8 +2,8 @@ import { cashReceivablesQuery } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { Router } from 'express';
 import type { AppContext } from '../../context';
-import { withStaff } from '../../http/guards';
 import { parse } from '../../http/validate';
+import { withStaffReport } from '../read-only';
 import { cashReceivableInvoices } from '../receivables';
 import { streamCsv } from './csv-stream';
 import { EXPORTS } from './export-kinds';
@@ -27,14 +27,14 @@ const csvHeaders = (name: string) => ({
  * CSV exports for the accountant, mounted at /api/cash/exports: `GET /:kind.csv?from=&to=` for
  * invoices, payments, refunds, credit-notes and clients (streamed from one snapshot), and
  * `GET /receivables.csv?asOf=` (the receivables page's aging). Owner and office (crew 403 before
- * any parsing); the firm's rows only (its tenant transaction).
+ * any parsing); the firm's rows only (its tenant transaction, read-only, on the read replica when there is one).
  */
 export function cashExportRoutes(ctx: AppContext): Router {
   const router = Router();
 
   // The receivables page's aging as of a day (default today in the firm's zone), as the page shows it.
   router.get('/receivables.csv', async (req, res) => {
-    const file = await withStaff(ctx, req, 'office', async (tx) => {
+    const file = await withStaffReport(ctx, req, 'office', async (tx) => {
       const view = await cashReceivableInvoices(tx, ctx.now(), parse(cashReceivablesQuery, req.query));
       return { name: await fileName(tx, `receivables-${view.asOf}`), text: receivablesCsv(view) };
     });
@@ -43,7 +43,7 @@ export function cashExportRoutes(ctx: AppContext): Router {
 
   router.get('/:kind.csv', async (req, res) => {
     try {
-      await withStaff(ctx, req, 'office', async (tx) => {
+      await withStaffReport(ctx, req, 'office', async (tx) => {
         const q = parseExportRequest(req.params, req.query);
         res.status(200).set(csvHeaders(await fileName(tx, `${q.kind}-${q.from}-${q.to}`)));
         await streamCsv(tx, EXPORTS[q.kind], [tx.tenantId, q.from, q.to], res);
