@@ -2,7 +2,9 @@
 module.exports = {
   displayName: 'server',
   testEnvironment: 'node',
-  roots: ['<rootDir>/src'],
+  // ops/backup holds the backup round trip (it drives ops/backup.sh and ops/restore.sh); nothing else under ops/ is a test.
+  roots: ['<rootDir>/src', '<rootDir>/../ops'],
+  testMatch: ['<rootDir>/src/**/*.spec.ts', '<rootDir>/../ops/backup/**/*.spec.ts'],
   transform: { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json' }] },
   globalSetup: '<rootDir>/src/testing/global-setup.ts',
   testTimeout: 30000,
