@@ -12,45 +12,20 @@ import {
   type Notice,
   type StaffSession,
 } from '@layerbook/contracts';
-import { Request, Response, Router } from 'express';
+import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
-import { csrfToken } from '../http/csrf';
 import { asError } from '../http/errors';
-import type { Principal } from '../http/principal';
-import { signedInStaff, withStaff } from '../http/guards';
+import type { StaffPrincipal } from '../http/principal';
+import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { acceptInvitation, previewInvitation } from './invitations';
 import { setOwnLanguage } from './language';
-import { endSession, logIn, logOut, type AppPassport } from './passport-setup';
+import { endSession, logOut, type AppPassport } from './passport-setup';
+import { secondFactorRoutes } from './second-factor/routes';
+import { answerPasswordStep, staffSession } from './session-answer';
 import { completePasswordReset, requestPasswordReset } from './password-reset';
 import { confirmSignUp, requestSignUp } from './staff-auth';
-
-export async function staffSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<StaffSession> {
-  const user = await signedInStaff(ctx, req);
-  return {
-    user: user
-      ? {
-          id: user.id,
-          name: user.name,
-          email: user.email,
-          role: user.role,
-          firmId: user.tenantId,
-          firmName: user.firmName,
-          language: user.language,
-          ownLanguage: user.ownLanguage,
-          units: user.units,
-          country: user.country,
-        }
-      : null,
-    csrfToken: csrfToken(ctx.config, req, res, fresh),
-  };
-}
-
-async function signInAndAnswer(ctx: AppContext, req: Request, res: Response, principal: Principal, status = 200) {
-  await logIn(req, principal, ctx.now());
-  res.status(status).json(await staffSession(ctx, req, res, true));
-}
 
 export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: import('express').RequestHandler): Router {
   const router = Router();
@@ -67,19 +42,19 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
 
   router.post('/signup/confirm', signInLimiter, async (req, res) => {
     const principal = await confirmSignUp(ctx, parse(signUpConfirm, req.body).token);
-    await signInAndAnswer(ctx, req, res, principal, 201);
+    await answerPasswordStep(ctx, req, res, principal, 201);
   });
 
   router.post('/signin', signInLimiter, async (req, res) => {
     parse(signInRequest, req.body);
-    const principal = await new Promise<Principal>((resolve, reject) => {
-      pass.authenticate('staff-password', { session: false }, (err: unknown, user: Principal | false) => {
+    const principal = await new Promise<StaffPrincipal>((resolve, reject) => {
+      pass.authenticate('staff-password', { session: false }, (err: unknown, user: StaffPrincipal | false) => {
         if (err) return reject(asError(err));
         if (!user) return reject(new Error('sign-in produced no user'));
         resolve(user);
       })(req, res, reject);
     });
-    await signInAndAnswer(ctx, req, res, principal);
+    await answerPasswordStep(ctx, req, res, principal);
   });
 
   // Anyone signed in chooses the language they read in; the answer is the whole session, in it.
@@ -87,6 +62,9 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
     await withStaff(ctx, req, 'crew', (tx, staff) => setOwnLanguage(tx, staff, parse(languageChoice, req.body).language));
     res.json((await staffSession(ctx, req, res)) satisfies StaffSession);
   });
+
+  // Owner and office: the code after the password, setting one up, turning it off, the firm's rule.
+  router.use('/second-factor', secondFactorRoutes(ctx, signInLimiter));
 
   router.post('/signout', async (req, res) => {
     await logOut(req);
@@ -101,7 +79,7 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
 
   router.post('/password-reset/complete', signInLimiter, async (req, res) => {
     const input = parse(passwordResetComplete, req.body);
-    await signInAndAnswer(ctx, req, res, await completePasswordReset(ctx, input.token, input.password));
+    await answerPasswordStep(ctx, req, res, await completePasswordReset(ctx, input.token, input.password));
   });
 
   router.get('/invitations/:token', async (req, res) => {
@@ -110,7 +88,7 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
   });
 
   router.post('/invitations/accept', signInLimiter, async (req, res) => {
-    await signInAndAnswer(ctx, req, res, await acceptInvitation(ctx, parse(invitationAccept, req.body), req.ip ?? ''));
+    await answerPasswordStep(ctx, req, res, await acceptInvitation(ctx, parse(invitationAccept, req.body), req.ip ?? ''));
   });
 
   return router;

@@ -104,6 +104,8 @@ export interface StaffUser {
 export interface StaffSession {
   readonly user: StaffUser | null;
   readonly csrfToken: string;
+  /** set between the password and the second factor (user is null meanwhile) */
+  readonly secondFactor?: SecondFactorPending | null;
 }
 
 /** GET /api/auth/invitations/:token: what the invited person is joining. */
@@ -138,4 +140,66 @@ export interface PortalSession {
 /** PATCH /api/auth/me/language (staff, for themselves) and /api/portal/me/language (the client): null follows the firm. */
 export interface LanguageChoice {
   readonly language: Language | null;
+}
+
+// A second factor (TOTP, RFC 6238) for owner and office staff, with one-time recovery codes.
+/** Digits of a code from an authenticator app. */
+export const TOTP_DIGITS = 6;
+/** How many recovery codes one enrolment (or renewal) hands out; each works once. */
+export const RECOVERY_CODE_COUNT = 10;
+/** The longest code the second-factor step reads (a recovery code with its dash and spaces). */
+export const SECOND_FACTOR_CODE_MAX_LENGTH = 32;
+
+/**
+ * After the password, before the person is signed in: `code` asks for a code (or a recovery code),
+ * `enrol` asks them to set up a second factor first (their firm requires one). Nothing of the firm
+ * is readable meanwhile; the step ends at `expiresAt`.
+ */
+export type SecondFactorStep = 'code' | 'enrol';
+export interface SecondFactorPending {
+  readonly step: SecondFactorStep;
+  readonly expiresAt: string;
+}
+
+/** POST /api/auth/second-factor: a code from the app (6 digits) or one recovery code. */
+export interface SecondFactorCheck {
+  readonly code: string;
+}
+/** POST /api/auth/second-factor/enrolment/confirm: the first code from the app. */
+export interface SecondFactorConfirm {
+  readonly code: string;
+}
+/** POST /api/auth/second-factor/turn-off: a current code (or a recovery code) or the password. */
+export interface SecondFactorTurnOff {
+  readonly code?: string;
+  readonly password?: string;
+}
+/** PUT /api/auth/second-factor/firm (owner): whether owner and office must use a second factor. */
+export interface FirmSecondFactor {
+  readonly required: boolean;
+}
+
+/** POST /api/auth/second-factor/enrolment: what the person adds to their authenticator app. */
+export interface SecondFactorEnrolment {
+  readonly otpauthUri: string;
+  /** the same URI as a QR code (PNG data URL) */
+  readonly qrDataUrl: string;
+  /** the secret in groups of four, for typing it in by hand */
+  readonly secretGroups: readonly string[];
+}
+/** Recovery codes, shown once (only their hashes are kept). */
+export interface RecoveryCodes {
+  readonly codes: readonly string[];
+}
+/**
+ * Confirming an enrolment answers the codes with the whole session (signed in when the enrolment
+ * finished a sign-in), so the apps pick up the new CSRF token as from any session answer.
+ */
+export interface SecondFactorEnrolled extends StaffSession, RecoveryCodes {}
+/** GET /api/auth/second-factor: the signed-in person's second factor and their firm's rule. */
+export interface SecondFactorStatus {
+  readonly enrolled: boolean;
+  readonly enrolledAt: string | null;
+  readonly recoveryCodesLeft: number;
+  readonly firmRequires: boolean;
 }

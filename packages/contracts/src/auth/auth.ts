@@ -4,12 +4,18 @@ import {
   FIRM_NAME_MAX_LENGTH,
   FIRM_NAME_MIN_LENGTH,
   PASSWORD_MAX_LENGTH,
+  SECOND_FACTOR_CODE_MAX_LENGTH,
+  TOTP_DIGITS,
+  type FirmSecondFactor,
   type InvitationAccept,
   type LanguageChoice,
   type PasswordResetComplete,
   type PasswordResetRequest,
   type PortalLinkRequest,
   type PortalRedeemRequest,
+  type SecondFactorCheck,
+  type SecondFactorConfirm,
+  type SecondFactorTurnOff,
   type SignInRequest,
   type SignUpConfirm,
   type SignUpRequest,
@@ -55,4 +61,36 @@ export const languageChoice = requestSchema<LanguageChoice>()(
   z.strictObject({
     language: z.enum(LANGUAGES, { error: 'Choose English or Spanish, or leave it to the firm.' }).nullable(),
   }),
+);
+
+/** A code from the app or a recovery code; the server tells them apart by shape. */
+const secondFactorCode = z
+  .string({ error: 'Enter the code from your app or a recovery code.' })
+  .trim()
+  .min(1, { error: 'Enter the code from your app or a recovery code.' })
+  .max(SECOND_FACTOR_CODE_MAX_LENGTH, { error: 'This is not a code from your app nor a recovery code.' });
+
+const appCode = z
+  .string({ error: `Enter the ${TOTP_DIGITS}-digit code from your app.` })
+  .trim()
+  .regex(new RegExp(`^[0-9]{${TOTP_DIGITS}}$`), { error: `Enter the ${TOTP_DIGITS}-digit code from your app.` });
+
+export const secondFactorCheck = requestSchema<SecondFactorCheck>()(z.strictObject({ code: secondFactorCode }));
+
+export const secondFactorConfirm = requestSchema<SecondFactorConfirm>()(z.strictObject({ code: appCode }));
+
+export const secondFactorTurnOff = requestSchema<SecondFactorTurnOff>()(
+  z
+    .strictObject({
+      code: secondFactorCode.optional(),
+      password: z.string().min(1, { error: 'Enter your password.' }).max(PASSWORD_MAX_LENGTH).optional(),
+    })
+    .refine((b) => b.code !== undefined || b.password !== undefined, {
+      path: ['code'],
+      error: 'Enter a code from your app, a recovery code or your password.',
+    }),
+);
+
+export const firmSecondFactor = requestSchema<FirmSecondFactor>()(
+  z.strictObject({ required: z.boolean({ error: 'Say whether a second factor is required.' }) }),
 );

@@ -1,0 +1,245 @@
+import type { SecondFactorEnrolment } from '@layerbook/contracts';
+import { signUpFirm, startTestServer, TestServer } from '../../testing/harness';
+import { auditOf, enrol, invite, passwordStep, stepClock } from './second-factor-fixtures';
+import { codeAt } from './totp';
+
+let t: TestServer;
+beforeAll(async () => {
+  t = await startTestServer();
+});
+afterEach(() => t.setNow(null));
+afterAll(() => t.stop());
+
+const sidOf = (res: { headers: Record<string, unknown> }) => {
+  const cookies = res.headers['set-cookie'];
+  return (Array.isArray(cookies) ? cookies.join(';') : '').match(/lb\.sid=([^;]+)/)?.[1];
+};
+
+describe('setting up a second factor', () => {
+  it('answers the URI, the QR code and the grouped secret, turns on with a right code and shows ten codes once', async () => {
+    const clock = stepClock(t);
+    const owner = await signUpFirm(t.app);
+    const status = await owner.agent.get('/api/auth/second-factor');
+    expect(status.body).toEqual({ enrolled: false, enrolledAt: null, recoveryCodesLeft: 0, firmRequires: false });
+
+    const started = await owner.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', owner.csrf()).send({});
+    expect(started.status).toBe(201);
+    const body = started.body as SecondFactorEnrolment;
+    const secret = body.secretGroups.join('');
+    expect(body.secretGroups.every((g) => /^[A-Z2-7]{4}$/.test(g))).toBe(true);
+    expect(body.otpauthUri).toBe(
+      `otpauth://totp/Layerbook:${encodeURIComponent(owner.email)}?secret=${secret}&period=30&digits=6&algorithm=SHA1&issuer=Layerbook`,
+    );
+    expect(body.qrDataUrl).toMatch(/^data:image\/png;base64,/);
+
+    const confirm = (code: string) =>
+      owner.agent.post('/api/auth/second-factor/enrolment/confirm').set('x-csrf-token', owner.csrf()).send({ code });
+    const wrong = await confirm(codeAt(secret, new Date(clock.now().getTime() - 5 * 60_000)));
+    expect(wrong.status).toBe(400);
+    expect(wrong.body.errors).toEqual([expect.objectContaining({ field: 'code' })]);
+    expect((await confirm('12ab56')).body.errors[0].field).toBe('code');
+
+    const right = await confirm(codeAt(secret, clock.now()));
+    expect(right.status).toBe(200);
+    expect(right.body.user.email).toBe(owner.email);
+    expect(right.body.codes).toHaveLength(10);
+    expect(new Set(right.body.codes).size).toBe(10);
+
+    // Kept sealed and hashed: neither the secret nor a code is in the database as given.
+    const { rows } = await t.ctx.pool.query<{ secret_sealed: string }>('select secret_sealed from user_second_factors where user_id = $1', [
+      owner.userId,
+    ]);
+    expect(rows[0].secret_sealed).not.toContain(secret);
+    const stored = await t.ctx.pool.query<{ code_hash: string }>('select code_hash from user_recovery_codes where user_id = $1', [
+      owner.userId,
+    ]);
+    expect(stored.rows).toHaveLength(10);
+    for (const code of right.body.codes as string[]) expect(stored.rows.map((r) => r.code_hash)).not.toContain(code.replace('-', ''));
+
+    const after = await owner.agent.get('/api/auth/second-factor');
+    expect(after.body).toMatchObject({ enrolled: true, recoveryCodesLeft: 10 });
+    expect(await auditOf(t, owner.firmId, 'staff.secondFactorEnrolled')).toEqual([
+      expect.objectContaining({ actor_user_id: owner.userId }),
+    ]);
+    // A second set-up waits until this one is turned off.
+    expect((await owner.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', owner.csrf()).send({})).status).toBe(409);
+  });
+});
+
+describe('signing in with a second factor', () => {
+  it('holds a half state that reads nothing, then signs in with a code on a new session id; a code works once', async () => {
+    const clock = stepClock(t);
+    const owner = await signUpFirm(t.app);
+    const { secret } = await enrol(owner, clock.now());
+    clock.advance();
+
+    const half = await passwordStep(t, owner.email, owner.password);
+    expect(half.res.status).toBe(200);
+    expect(half.res.body).toMatchObject({ user: null, secondFactor: { step: 'code' } });
+    expect(Date.parse(half.res.body.secondFactor.expiresAt) - clock.now().getTime()).toBe(5 * 60_000);
+    const halfSid = sidOf(half.res);
+    expect(halfSid).toBeTruthy();
+
+    const session = await half.agent.get('/api/auth/session');
+    expect(session.body).toMatchObject({ user: null, secondFactor: { step: 'code' } });
+    for (const path of ['/api/firm', '/api/clients', '/api/jobs', '/api/invoices', '/api/team/members', '/api/auth/second-factor']) {
+      expect([path, (await half.agent.get(path)).status]).toEqual([path, 401]);
+    }
+    expect((await half.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', half.csrf()).send({})).status).toBe(401);
+
+    const send = (code: string) => half.agent.post('/api/auth/second-factor').set('x-csrf-token', half.csrf()).send({ code });
+    const wrong = await send('000000');
+    expect(wrong.status).toBe(400);
+    expect(wrong.body.errors[0].field).toBe('code');
+    const code = codeAt(secret, clock.now());
+    const done = await send(code);
+    expect(done.status).toBe(200);
+    expect(done.body.user.email).toBe(owner.email);
+    expect(done.body.secondFactor).toBeNull();
+    expect(sidOf(done)).not.toBe(halfSid);
+    expect((await half.agent.get('/api/firm')).status).toBe(200);
+    const signIns = await auditOf(t, owner.firmId, 'staff.signedIn');
+    expect(signIns.at(-1)?.data).toEqual({ secondFactor: true, secondFactorBy: 'app' });
+
+    // The same code (the same step) is refused on the next sign-in; the next step's code works.
+    const again = await passwordStep(t, owner.email, owner.password);
+    const reused = await again.agent.post('/api/auth/second-factor').set('x-csrf-token', again.csrf()).send({ code });
+    expect(reused.status).toBe(400);
+    clock.advance();
+    const next = await again.agent
+      .post('/api/auth/second-factor')
+      .set('x-csrf-token', again.csrf())
+      .send({ code: codeAt(secret, clock.now()) });
+    expect(next.status).toBe(200);
+  });
+
+  it('takes a recovery code once, however it is typed', async () => {
+    const clock = stepClock(t);
+    const owner = await signUpFirm(t.app);
+    const { codes } = await enrol(owner, clock.now());
+    const typed = ` ${codes[3].toUpperCase().replace('-', ' ')} `;
+    const first = await passwordStep(t, owner.email, owner.password);
+    const used = await first.agent.post('/api/auth/second-factor').set('x-csrf-token', first.csrf()).send({ code: typed });
+    expect(used.status).toBe(200);
+    expect((await auditOf(t, owner.firmId, 'staff.signedIn')).at(-1)?.data).toEqual({ secondFactor: true, secondFactorBy: 'recoveryCode' });
+    expect((await first.agent.get('/api/auth/second-factor')).body.recoveryCodesLeft).toBe(9);
+
+    const second = await passwordStep(t, owner.email, owner.password);
+    expect((await second.agent.post('/api/auth/second-factor').set('x-csrf-token', second.csrf()).send({ code: typed })).status).toBe(400);
+
+    // New codes replace the old ones.
+    const renewed = await first.agent.post('/api/auth/second-factor/recovery-codes').set('x-csrf-token', used.body.csrfToken).send({});
+    expect(renewed.body.codes).toHaveLength(10);
+    expect((await second.agent.post('/api/auth/second-factor').set('x-csrf-token', second.csrf()).send({ code: codes[4] })).status).toBe(
+      400,
+    );
+    const fresh = await second.agent
+      .post('/api/auth/second-factor')
+      .set('x-csrf-token', second.csrf())
+      .send({ code: renewed.body.codes[0] });
+    expect(fresh.status).toBe(200);
+    expect(await auditOf(t, owner.firmId, 'staff.recoveryCodesRenewed')).toHaveLength(1);
+  });
+
+  it('ends the half state after five minutes and throttles wrong codes like passwords', async () => {
+    const clock = stepClock(t);
+    const owner = await signUpFirm(t.app);
+    const { secret } = await enrol(owner, clock.now());
+    clock.advance();
+    const late = await passwordStep(t, owner.email, owner.password);
+    clock.advance(5 * 60_000 + 1);
+    const expired = await late.agent
+      .post('/api/auth/second-factor')
+      .set('x-csrf-token', late.csrf())
+      .send({ code: codeAt(secret, clock.now()) });
+    expect(expired.status).toBe(401);
+    expect((await late.agent.get('/api/auth/session')).body.secondFactor).toBeNull();
+
+    const guess = await passwordStep(t, owner.email, owner.password);
+    for (let i = 0; i < 5; i++) {
+      expect(
+        (
+          await guess.agent
+            .post('/api/auth/second-factor')
+            .set('x-csrf-token', guess.csrf())
+            .send({ code: `12345${i}` })
+        ).status,
+      ).toBe(400);
+    }
+    const throttled = await guess.agent
+      .post('/api/auth/second-factor')
+      .set('x-csrf-token', guess.csrf())
+      .send({ code: codeAt(secret, clock.now()) });
+    expect(throttled.status).toBe(429);
+  });
+});
+
+describe("the firm's rule", () => {
+  it('is set by an owner with a second factor; office without one must set one up after the password; crew is not asked', async () => {
+    const clock = stepClock(t);
+    const owner = await signUpFirm(t.app);
+    const office = await invite(t, owner, 'office');
+    const crew = await invite(t, owner, 'crew');
+    const setRule = (required: boolean) =>
+      owner.agent.put('/api/auth/second-factor/firm').set('x-csrf-token', owner.csrf()).send({ required });
+    const early = await setRule(true);
+    expect(early.status).toBe(409);
+    expect(early.body.errors[0].field).toBe('required');
+    await enrol(owner, clock.now());
+    const on = await setRule(true);
+    expect(on.status).toBe(200);
+    expect(on.body.firmRequires).toBe(true);
+    expect((await auditOf(t, owner.firmId, 'firm.secondFactorRequired')).map((r) => r.data)).toEqual([{ required: true }]);
+
+    const crewIn = await passwordStep(t, crew.email, crew.password);
+    expect(crewIn.res.body).toMatchObject({ user: { role: 'crew' }, secondFactor: null });
+
+    const officeIn = await passwordStep(t, office.email, office.password);
+    expect(officeIn.res.body).toMatchObject({ user: null, secondFactor: { step: 'enrol' } });
+    expect((await officeIn.agent.get('/api/clients')).status).toBe(401);
+    expect(
+      (await officeIn.agent.post('/api/auth/second-factor').set('x-csrf-token', officeIn.csrf()).send({ code: '123456' })).status,
+    ).toBe(401);
+    const started = await officeIn.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', officeIn.csrf()).send({});
+    expect(started.status).toBe(201);
+    const secret = (started.body as SecondFactorEnrolment).secretGroups.join('');
+    clock.advance();
+    const confirmed = await officeIn.agent
+      .post('/api/auth/second-factor/enrolment/confirm')
+      .set('x-csrf-token', officeIn.csrf())
+      .send({ code: codeAt(secret, clock.now()) });
+    expect(confirmed.status).toBe(200);
+    expect(confirmed.body).toMatchObject({ user: { role: 'office', email: office.email } });
+    expect(confirmed.body.codes).toHaveLength(10);
+    expect((await officeIn.agent.get('/api/clients')).status).toBe(200);
+    expect(
+      (await officeIn.agent.put('/api/auth/second-factor/firm').set('x-csrf-token', confirmed.body.csrfToken).send({ required: false }))
+        .status,
+    ).toBe(403);
+
+    // Not turned off while the firm requires it; with the rule off, the password turns it off.
+    const member = { agent: officeIn.agent, csrf: () => String(confirmed.body.csrfToken) };
+    const turnOff = (body: object) => member.agent.post('/api/auth/second-factor/turn-off').set('x-csrf-token', member.csrf()).send(body);
+    expect((await turnOff({ password: office.password })).status).toBe(409);
+    expect((await setRule(false)).body.firmRequires).toBe(false);
+    const wrong = await turnOff({ password: 'not-my-password' });
+    expect(wrong.status).toBe(400);
+    expect(wrong.body.errors[0].field).toBe('password');
+    const off = await turnOff({ password: office.password });
+    expect(off.status).toBe(200);
+    expect(off.body.enrolled).toBe(false);
+    expect(await auditOf(t, owner.firmId, 'staff.secondFactorRemoved')).toHaveLength(1);
+    expect((await passwordStep(t, office.email, office.password)).res.body.user.role).toBe('office');
+  });
+
+  it('keeps the setting and status to owner and office', async () => {
+    const owner = await signUpFirm(t.app);
+    const crew = await invite(t, owner, 'crew');
+    const crewIn = await passwordStep(t, crew.email, crew.password);
+    expect((await crewIn.agent.get('/api/auth/second-factor')).status).toBe(403);
+    expect((await crewIn.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', crewIn.csrf()).send({})).status).toBe(403);
+    const bad = await owner.agent.put('/api/auth/second-factor/firm').set('x-csrf-token', owner.csrf()).send({ required: 'yes' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors[0].field).toBe('required');
+  });
+});
