@@ -8,6 +8,8 @@ import { csrfProtection } from './http/csrf';
 import { apiNotFound, problemHandler } from './http/errors';
 import { requestLogging } from './http/logger';
 import { refuseUndecodablePath } from './http/bad-path';
+import { healthRoutes } from './health/health-routes';
+import { observeRequests } from './health/request-metrics';
 import { signInRateLimit } from './http/rate-limit';
 import { cspNonce, securityHeaders } from './http/security';
 import { sessionMiddleware } from './http/session';
@@ -50,9 +52,12 @@ export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
   app.set('etag', false);
   app.set('trust proxy', ctx.config.NODE_ENV === 'production' ? 1 : false);
   app.use(requestLogging(ctx.logger));
+  app.use(observeRequests());
   app.use(cspNonce, securityHeaders(ctx.config));
   app.use(refuseUndecodablePath);
-  const inquiryLimiter = publicInquiryLimiter(ctx.config.PUBLIC_FORM_RATE_LIMIT);
+  // Probes outside /api: no session, no CSRF, not logged (health/health-routes.ts).
+  app.use(healthRoutes(ctx));
+  const inquiryLimiter = publicInquiryLimiter(ctx.config.PUBLIC_FORM_RATE_LIMIT, ctx.pool);
   app.use('/api', api(ctx, inquiryLimiter));
   if (ssr) {
     app.use('/portal', publicFormPost(ctx, inquiryLimiter, ssr.portal));
@@ -66,7 +71,7 @@ export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
 function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   const router = express.Router();
   const pass = createPassport(ctx);
-  const limiter = signInRateLimit(ctx.config.SIGN_IN_RATE_LIMIT);
+  const limiter = signInRateLimit(ctx.config.SIGN_IN_RATE_LIMIT, ctx.pool);
   router.use((_req, res, next) => {
     res.set('cache-control', 'no-store');
     next();

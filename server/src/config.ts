@@ -52,6 +52,10 @@ const schema = z
       .int()
       .min(1)
       .default(15 * 1024 * 1024),
+    /** Prometheus metrics on a listener of their own (server/src/health): unset or 0, none. Never the public port. */
+    METRICS_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+    /** Where the metrics listener binds: loopback unless a private interface is named (never a public one). */
+    METRICS_HOST: z.string().default('127.0.0.1'),
   })
   .refine((c) => !c.STRIPE_SECRET_KEY || c.STRIPE_WEBHOOK_SECRET, {
     path: ['STRIPE_WEBHOOK_SECRET'],

@@ -7,6 +7,7 @@ import { openReadPool, type AppContext } from './context';
 import { assertRlsBoundRole } from './db-roles';
 import { createLogger } from './http/logger';
 import { openObjectStore } from './files/object-store';
+import { metricsRegistry, startMetricsServer } from './health/metrics-server';
 import { startQueue } from './queue/job-queue';
 import { startWorkers } from './queue/workers';
 import { loadSsrHandlers } from './ssr/load';
@@ -29,6 +30,10 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
   const storage = await openObjectStore(config);
   const ctx: AppContext = { config, pool, readPool, queue, logger, storage, now: () => new Date() };
   const workers = mode === 'worker' || config.RUN_WORKERS ? await startWorkers(config, queue, logger, ctx.now) : undefined;
+  // Prometheus metrics on a loopback listener of their own (ops/README.md, "Health and metrics"); off when METRICS_PORT is unset.
+  const metrics = config.METRICS_PORT
+    ? await startMetricsServer(metricsRegistry({ role: mode, jobsDb: queue.boss.getDb() }), config.METRICS_PORT, config.METRICS_HOST, logger)
+    : undefined;
 
   let server: import('node:http').Server | undefined;
   if (mode === 'web') {
@@ -48,6 +53,7 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
     server?.closeAllConnections?.();
     await queue.stop();
     await workers?.stop();
+    await metrics?.close();
     await pool.end();
     await readPool?.end();
     storage.close();

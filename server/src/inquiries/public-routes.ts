@@ -1,23 +1,22 @@
 import { publicInquiryRequest, type Notice, type PublicFirm } from '@layerbook/contracts';
 import express, { RequestHandler, Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import type { Pool } from 'pg';
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { HttpError } from '../http/problem';
+import { sharedRateLimit } from '../http/rate-limit';
 import { fieldProblems, parse } from '../http/validate';
 import { formStamp, publicFirm, submitPublicInquiry } from './public-form';
 
 const slugParam = z.strictObject({ slug: z.string().regex(/^[a-z0-9-]{1,60}$/, { error: 'Not a valid firm address.' }) });
 
-export function publicInquiryLimiter(limit: number): RequestHandler {
-  return rateLimit({
-    windowMs: 60 * 60 * 1000,
-    limit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) =>
-      next(new HttpError(429, 'Too many inquiries', 'Too many inquiries from this address. Please call the firm instead, or try later.')),
-  });
+/** Per-address limit on inquiries, counted in PostgreSQL so it holds across web processes (http/rate-limit.ts). */
+export function publicInquiryLimiter(limit: number, pool: Pool): RequestHandler {
+  return sharedRateLimit(
+    pool,
+    { name: 'public-inquiry', limit, windowMs: 60 * 60 * 1000 },
+    new HttpError(429, 'Too many inquiries', 'Too many inquiries from this address. Please call the firm instead, or try later.'),
+  );
 }
 
 /** Anonymous, no session: the firm's public inquiry form (JSON for the app, form posts without scripts). */
