@@ -29,3 +29,4 @@ export * from './billing/schedule';
 export * from './billing/invoices';
 export * from './payments/payments';
 export * from './cash/cash';
+export * from './audit/audit';

@@ -33,3 +33,4 @@ export * from './billing/portal-billing-types';
 export * from './payments/payment-types';
 export * from './cash/cash-types';
 export * from './jobs/sheet-types';
+export * from './audit/audit-types';
