@@ -1,6 +1,6 @@
 import { execFile } from 'node:child_process';
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
-import { existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { Readable } from 'node:stream';
@@ -208,6 +208,11 @@ describe('ops/backup.sh and ops/restore.sh', () => {
     expect(written.map((d) => d.name)).toEqual([expect.stringMatching(/^layerbook-\d{8}T\d{6}Z$/)]);
     const backup = path.join(backups, written[0].name);
     expect(existsSync(path.join(backup, 'database.dump'))).toBe(true);
+    // Every object the files rows name was copied; the same bytes under two keys are kept once.
+    const manifest = JSON.parse(readFileSync(path.join(backup, 'manifest.json'), 'utf8'));
+    expect(manifest.store).toMatchObject({ count: 9, missing: [] });
+    expect(readdirSync(path.join(backup, 'objects'))).toHaveLength(8);
+    expect(manifest.database.rows['public.files']).toBe(3);
 
     const restored = await run('ops/restore.sh', ['--db', TARGET, backup], { S3_ENDPOINT: storeB.endpoint, S3_BUCKET: BUCKET });
     expect(restored).toMatchObject({ code: 0 });

@@ -23,6 +23,7 @@ async function backup(dir: string, name: string, db: string, pgDump: string[]): 
   await client.connect();
   let rows: Record<string, number>;
   let migrations: Manifest['app']['migrations'];
+  let named: string[];
   try {
     // One snapshot for the dump and the counts, so the counts describe exactly what was dumped.
     await client.query('begin isolation level repeatable read read only');
@@ -32,6 +33,7 @@ async function backup(dir: string, name: string, db: string, pgDump: string[]): 
     await dump(pgDump, snapshot, path.join(dir, 'database.dump'));
     rows = await countRows(client);
     migrations = await migrationLevel(client, ROOT);
+    named = await namedKeys(client);
     await client.query('commit');
   } finally {
     await client.end();
@@ -48,18 +50,31 @@ async function backup(dir: string, name: string, db: string, pgDump: string[]): 
     const objects = await inParallel(keys, COPY_WIDTH, (key, i) => downloadObject(s3, store.bucket, key, dir, i));
     const bytes = sum(objects.map((o) => o.size));
     console.log(`  store ${store.endpoint} bucket ${store.bucket}: ${objects.length} objects, ${bytes} bytes`);
+    const copied = new Set(keys);
+    const missing = named.filter((key) => !copied.has(key));
+    if (missing.length > 0)
+      console.warn(`  warning: ${missing.length} stored-file rows name an object the bucket does not have (manifest: store.missing)`);
     const manifest: Manifest = {
       format: FORMAT,
       name,
       createdAt: new Date().toISOString(),
       app: { ...(await appVersion()), migrations },
       database: { name: db, file: 'database.dump', format: 'custom', pgDump: pgDumpVersion(pgDump[0]), ...dumped, rows },
-      store: { endpoint: store.endpoint, bucket: store.bucket, count: objects.length, bytes, objects },
+      store: { endpoint: store.endpoint, bucket: store.bucket, count: objects.length, bytes, missing, objects },
     };
     await writeManifest(dir, manifest);
   } finally {
     s3.destroy();
   }
+}
+
+/** The object keys the app's `files` rows name (an upload and its thumbnail), sorted. */
+async function namedKeys(client: Client): Promise<string[]> {
+  if (!(await client.query<{ t: string | null }>(`select to_regclass('public.files')::text as t`)).rows[0].t) return [];
+  const res = await client.query<{ key: string }>(
+    `select storage_key as key from public.files union select thumbnail_key from public.files where thumbnail_key is not null order by 1`,
+  );
+  return res.rows.map((r) => r.key);
 }
 
 /** Runs pg_dump (custom format, from the exported snapshot) with its output going straight to `file`. */
@@ -100,6 +115,9 @@ async function verify(dir: string): Promise<Manifest> {
     `  ${manifest.name}: database ${d.name} (${Object.keys(d.rows).length} tables, ${sum(Object.values(d.rows))} rows), ` +
       `${s.count} objects (${s.bytes} bytes), app ${app.version} at migration ${app.migrations.latest ?? app.migrations.applied}: all checksums match`,
   );
+  const missing = manifest.store.missing ?? [];
+  if (missing.length > 0)
+    console.warn(`  warning: ${missing.length} stored-file rows name an object the backup does not hold: ${missing.join(', ')}`);
   return manifest;
 }
 

@@ -23,7 +23,15 @@ export interface Manifest {
     /** Rows per table (`schema.table`), counted in the snapshot the dump was taken from. */
     rows: Record<string, number>;
   };
-  store: { endpoint: string; bucket: string; count: number; bytes: number; objects: ObjectEntry[] };
+  store: {
+    endpoint: string;
+    bucket: string;
+    count: number;
+    bytes: number;
+    /** Keys the database's `files` rows name that the bucket did not hold when copied (none in a sound store). */
+    missing: string[];
+    objects: ObjectEntry[];
+  };
 }
 
 export const manifestPath = (dir: string) => path.join(dir, 'manifest.json');

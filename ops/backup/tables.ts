@@ -9,9 +9,10 @@ import { Client, ClientConfig, escapeIdentifier } from 'pg';
 export function adminConnection(db: string, env: NodeJS.ProcessEnv = process.env): ClientConfig {
   const url = env['DATABASE_ADMIN_URL'];
   if (url) {
-    const u = new URL(url);
-    u.pathname = `/${db}`;
-    return { connectionString: u.toString() };
+    // The same rewrite as url_with_db in common.sh (the URL may name no host: `postgres://u@/db?host=/run/socket`).
+    const match = /^([a-z]+:\/\/[^/?]*)(\/[^?]*)?(\?.*)?$/.exec(url);
+    if (!match) throw new Error('DATABASE_ADMIN_URL is not a postgres:// URL');
+    return { connectionString: `${match[1]}/${db}${match[3] ?? ''}` };
   }
   const root = path.resolve(__dirname, '../..');
   return {
