@@ -74,6 +74,12 @@ export const routes: Routes = [
         loadComponent: () => import('./features/firms/billing-settings').then((m) => m.BillingSettingsPage),
       },
       {
+        path: 'security',
+        title: 'auth.titles.security',
+        canActivate: [roleGuard('office')],
+        loadComponent: () => import('./features/auth/second-factor/security-page').then((m) => m.SecurityPage),
+      },
+      {
         path: 'settings',
         title: 'layout.titles.settings',
         loadComponent: () => import('./features/firms/firm-settings').then((m) => m.FirmSettingsPage),

@@ -14,7 +14,6 @@ import {
   type InvitationPreview,
 } from '@layerbook/contracts/types';
 import { toProblem } from '../../core/errors/problem';
-import { HOME_URL } from '../../core/auth/guards';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
 import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
@@ -78,8 +77,7 @@ export class AcceptInvitation {
     const { name, password } = this.form.getRawValue();
     // Busy until the next page is open, so a second click cannot send it twice.
     await this.submission.send(this.form, async () => {
-      await this.auth.acceptInvitation({ token, name: name.trim(), password });
-      await this.router.navigateByUrl(HOME_URL);
+      await this.router.navigateByUrl(await this.auth.acceptInvitation({ token, name: name.trim(), password }));
     });
   }
 }

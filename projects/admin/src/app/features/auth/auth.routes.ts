@@ -9,6 +9,18 @@ const routes: Routes = [
     loadComponent: () => import('./sign-in').then((m) => m.SignIn),
   },
   {
+    path: 'sign-in/code',
+    title: 'auth.titles.secondFactor',
+    canActivate: [signedOutGuard],
+    loadComponent: () => import('./second-factor/code-step').then((m) => m.SecondFactorCodeStep),
+  },
+  {
+    path: 'sign-in/set-up',
+    title: 'auth.titles.setUpSecondFactor',
+    canActivate: [signedOutGuard],
+    loadComponent: () => import('./second-factor/enrol-step').then((m) => m.SecondFactorEnrolStep),
+  },
+  {
     path: 'sign-up',
     title: 'auth.titles.signUp',
     canActivate: [signedOutGuard],

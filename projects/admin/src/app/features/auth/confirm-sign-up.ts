@@ -4,7 +4,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { Router, RouterLink } from '@angular/router';
 import { isWellFormedLinkToken } from '@layerbook/contracts/types';
 import { toProblem } from '../../core/errors/problem';
-import { HOME_URL } from '../../core/auth/guards';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
@@ -41,14 +40,15 @@ export class ConfirmSignUp {
     if (!isWellFormedLinkToken(token)) return;
     // Busy until Today is open, so a second click cannot send it twice.
     await this.submission.send(this.form, async () => {
+      let next: string;
       try {
-        await this.auth.confirmSignUp({ token });
+        next = await this.auth.confirmSignUp({ token });
       } catch (error) {
         const status = toProblem(error).status;
         this.isLinkDead.set(status === 400 || status === 404 || status === 410);
         throw error;
       }
-      await this.router.navigateByUrl(HOME_URL);
+      await this.router.navigateByUrl(next);
     });
   }
 }

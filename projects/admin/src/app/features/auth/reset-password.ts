@@ -6,7 +6,6 @@ import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, isWellFormedLinkToken } from '@layerbook/contracts/types';
 import { toProblem } from '../../core/errors/problem';
-import { HOME_URL } from '../../core/auth/guards';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Submission } from '../../shared/forms/submission';
 import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
@@ -58,14 +57,15 @@ export class ResetPassword {
       return;
     }
     await this.submission.send(this.form, async () => {
+      let next: string;
       try {
-        await this.auth.completePasswordReset({ token, password: this.form.getRawValue().password });
+        next = await this.auth.completePasswordReset({ token, password: this.form.getRawValue().password });
       } catch (error) {
         const status = toProblem(error).status;
         this.isLinkDead.set(status === 404 || status === 410);
         throw error;
       }
-      await this.router.navigateByUrl(HOME_URL);
+      await this.router.navigateByUrl(next);
     });
   }
 }

@@ -56,8 +56,7 @@ export class SignIn {
     const { email, password } = this.form.getRawValue();
     // Busy until the next page is open, so a second click cannot send it twice.
     await this.submission.send(this.form, async () => {
-      await this.auth.signIn({ email: email.trim(), password });
-      await this.router.navigateByUrl(safeNextUrl(this.next()));
+      await this.router.navigateByUrl(await this.auth.signIn({ email: email.trim(), password }, safeNextUrl(this.next())));
     });
   }
 }

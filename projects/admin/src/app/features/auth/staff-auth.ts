@@ -7,19 +7,40 @@ import type {
   PasswordResetRequest,
   SignInRequest,
   SignUpConfirm,
+  SecondFactorCheck,
   SignUpRequest,
   StaffSession,
 } from '@layerbook/contracts/types';
+import { HOME_URL } from '../../core/auth/guards';
 import { Session } from '../../core/auth/session';
 
-/** The staff sign-in calls. Each one that signs someone in hands the new session to `Session`. */
+/**
+ * Where to go after an answer that may sign in: the second-factor step when the server asks for one
+ * (a code, or setting one up because the firm requires it), carrying `next`; else `next` itself.
+ */
+export function urlAfterSignIn(session: StaffSession, next: string = HOME_URL): string {
+  const step = session.secondFactor?.step;
+  if (!step) return next;
+  const path = step === 'code' ? '/sign-in/code' : '/sign-in/set-up';
+  return next === HOME_URL ? path : `${path}?next=${encodeURIComponent(next)}`;
+}
+
+/**
+ * The staff sign-in calls. Each one that signs someone in hands the new session to `Session` and
+ * answers where to go next (the second-factor step when one is asked).
+ */
 @Injectable({ providedIn: 'root' })
 export class StaffAuth {
   private readonly http = inject(HttpClient);
   private readonly session = inject(Session);
 
-  signIn(body: SignInRequest): Promise<void> {
-    return this.signedIn(this.http.post<StaffSession>('/api/auth/signin', body));
+  signIn(body: SignInRequest, next?: string): Promise<string> {
+    return this.signedIn(this.http.post<StaffSession>('/api/auth/signin', body), next);
+  }
+
+  /** The code after the password: from the app, or a recovery code. */
+  checkSecondFactor(body: SecondFactorCheck, next?: string): Promise<string> {
+    return this.signedIn(this.http.post<StaffSession>('/api/auth/second-factor', body), next);
   }
 
   /** Sends the confirmation e-mail; the firm is opened by `confirmSignUp` with the link's code. */
@@ -27,7 +48,7 @@ export class StaffAuth {
     await firstValueFrom(this.http.post('/api/auth/signup', body));
   }
 
-  confirmSignUp(body: SignUpConfirm): Promise<void> {
+  confirmSignUp(body: SignUpConfirm): Promise<string> {
     return this.signedIn(this.http.post<StaffSession>('/api/auth/signup/confirm', body));
   }
 
@@ -35,15 +56,17 @@ export class StaffAuth {
     await firstValueFrom(this.http.post('/api/auth/password-reset', body));
   }
 
-  completePasswordReset(body: PasswordResetComplete): Promise<void> {
+  completePasswordReset(body: PasswordResetComplete): Promise<string> {
     return this.signedIn(this.http.post<StaffSession>('/api/auth/password-reset/complete', body));
   }
 
-  acceptInvitation(body: InvitationAccept): Promise<void> {
+  acceptInvitation(body: InvitationAccept): Promise<string> {
     return this.signedIn(this.http.post<StaffSession>('/api/auth/invitations/accept', body));
   }
 
-  private async signedIn(call: Observable<StaffSession>): Promise<void> {
-    this.session.accept(await firstValueFrom(call));
+  private async signedIn(call: Observable<StaffSession>, next?: string): Promise<string> {
+    const session = await firstValueFrom(call);
+    this.session.accept(session);
+    return urlAfterSignIn(session, next);
   }
 }

@@ -24,6 +24,7 @@ import {
   type UnitSystem,
 } from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
+import { FirmSecondFactor } from '../auth/second-factor/firm-second-factor';
 import { COUNTRY_CHOICES } from '../../shared/forms/country-choices';
 import { errorText } from '../../shared/forms/error-text';
 import { tooLong } from '../../shared/forms/field-words';
@@ -47,6 +48,7 @@ import { TranslatePipe, TranslateService } from '@ngx-translate/core';
     TranslatePipe,
     EstimatingSettingsForm,
     FirmLogo,
+    FirmSecondFactor,
     FormAlert,
     InquiryFormLink,
     MatButtonModule,

@@ -1,0 +1,45 @@
+import { HttpClient } from '@angular/common/http';
+import { Injectable, inject } from '@angular/core';
+import { firstValueFrom } from 'rxjs';
+import type {
+  FirmSecondFactor,
+  RecoveryCodes,
+  SecondFactorConfirm,
+  SecondFactorEnrolled,
+  SecondFactorEnrolment,
+  SecondFactorStatus,
+  SecondFactorTurnOff,
+} from '@layerbook/contracts/types';
+import { Session } from '../../../core/auth/session';
+
+export const SECOND_FACTOR_URL = '/api/auth/second-factor';
+
+/** Setting up, renewing and turning off a second factor, and the owner's rule for the firm. Reads go through httpResource. */
+@Injectable({ providedIn: 'root' })
+export class SecondFactorApi {
+  private readonly http = inject(HttpClient);
+  private readonly session = inject(Session);
+
+  start(): Promise<SecondFactorEnrolment> {
+    return firstValueFrom(this.http.post<SecondFactorEnrolment>(`${SECOND_FACTOR_URL}/enrolment`, {}));
+  }
+
+  /** The first code turns it on; the answer carries the recovery codes and the session (signed in after a set-up at sign-in). */
+  async confirm(body: SecondFactorConfirm): Promise<SecondFactorEnrolled> {
+    const answer = await firstValueFrom(this.http.post<SecondFactorEnrolled>(`${SECOND_FACTOR_URL}/enrolment/confirm`, body));
+    this.session.accept(answer);
+    return answer;
+  }
+
+  renewRecoveryCodes(): Promise<RecoveryCodes> {
+    return firstValueFrom(this.http.post<RecoveryCodes>(`${SECOND_FACTOR_URL}/recovery-codes`, {}));
+  }
+
+  turnOff(body: SecondFactorTurnOff): Promise<SecondFactorStatus> {
+    return firstValueFrom(this.http.post<SecondFactorStatus>(`${SECOND_FACTOR_URL}/turn-off`, body));
+  }
+
+  requireForFirm(body: FirmSecondFactor): Promise<SecondFactorStatus> {
+    return firstValueFrom(this.http.put<SecondFactorStatus>(`${SECOND_FACTOR_URL}/firm`, body));
+  }
+}

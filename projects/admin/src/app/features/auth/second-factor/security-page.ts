@@ -1,0 +1,93 @@
+import { httpResource } from '@angular/common/http';
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { TranslatePipe } from '@ngx-translate/core';
+import { PASSWORD_MAX_LENGTH, SECOND_FACTOR_CODE_MAX_LENGTH, type SecondFactorStatus } from '@layerbook/contracts/types';
+import { FieldErrorPipe } from '../../../../../../shared/forms/field-error-pipe';
+import { problemMessage } from '../../../core/errors/problem';
+import { loadMessage } from '../../../shared/forms/load-message';
+import { Submission } from '../../../shared/forms/submission';
+import { FormAlert } from '../../../shared/ui/form-alert';
+import { RECOVERY_CODE_ERRORS } from './code-field';
+import { EnrolPanel } from './enrol-panel';
+import { RecoveryCodeList } from './recovery-code-list';
+import { SECOND_FACTOR_URL, SecondFactorApi } from './second-factor-api';
+
+/** Sign-in and security for the signed-in owner or office member: their second factor and recovery codes. */
+@Component({
+  selector: 'lb-security-page',
+  imports: [
+    DatePipe,
+    EnrolPanel,
+    FieldErrorPipe,
+    FormAlert,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatProgressBarModule,
+    ReactiveFormsModule,
+    RecoveryCodeList,
+    TranslatePipe,
+  ],
+  templateUrl: './security-page.html',
+  styleUrl: './second-factor.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class SecurityPage {
+  private readonly api = inject(SecondFactorApi);
+
+  protected readonly status = httpResource<SecondFactorStatus>(() => SECOND_FACTOR_URL);
+  protected readonly loadMessage = loadMessage(this.status);
+  /** Setting up is under way. */
+  protected readonly settingUp = signal(false);
+  /** Recovery codes to show once (after setting up or renewing). */
+  protected readonly codes = signal<readonly string[] | null>(null);
+  protected readonly renewMessage = signal<string | null>(null);
+  protected readonly usesPassword = signal(false);
+  protected readonly offForm = inject(NonNullableFormBuilder).group({
+    proof: ['', [Validators.required, Validators.maxLength(PASSWORD_MAX_LENGTH)]],
+  });
+  protected readonly offSubmission = new Submission();
+  protected readonly words = {
+    code: { ...RECOVERY_CODE_ERRORS, required: 'auth.security.proofCodeRequired' },
+    password: { required: 'auth.signIn.passwordRequired', maxlength: { key: 'auth.fields.atMost', params: { max: PASSWORD_MAX_LENGTH } } },
+  };
+  protected readonly codeMax = SECOND_FACTOR_CODE_MAX_LENGTH;
+
+  protected enrolled(codes: readonly string[]): void {
+    this.settingUp.set(false);
+    this.codes.set(codes);
+    this.status.reload();
+  }
+
+  protected async renew(): Promise<void> {
+    this.renewMessage.set(null);
+    try {
+      this.codes.set((await this.api.renewRecoveryCodes()).codes);
+      this.status.reload();
+    } catch (error) {
+      this.renewMessage.set(problemMessage(error));
+    }
+  }
+
+  protected switchProof(): void {
+    this.usesPassword.update((p) => !p);
+    this.offForm.reset();
+  }
+
+  protected async turnOff(): Promise<void> {
+    const proof = this.offForm.getRawValue().proof;
+    const body = this.usesPassword() ? { password: proof } : { code: proof.trim() };
+    // The server names `code` or `password`; both land on the one field here.
+    const answer = await this.offSubmission.send(this.offForm, () => this.api.turnOff(body));
+    if (answer) {
+      this.offForm.reset();
+      this.status.set(answer);
+    }
+  }
+}
