@@ -7,10 +7,11 @@ import { loadConfig } from '../config';
 import { openReadPool, type AppContext } from '../context';
 import { newAgent, signUpFirm, startTestServer, type TestServer } from '../testing/harness';
 import { testDatabaseUrls } from '../testing/test-env';
+import { cashFirm } from './cash-fixtures';
 import { withStaffReport } from './read-only';
 
 let t: TestServer;
-let owner: Awaited<ReturnType<typeof signUpFirm>>;
+let owner: Awaited<ReturnType<typeof cashFirm>>;
 let other: Awaited<ReturnType<typeof signUpFirm>>;
 /** Stands in for the standby: a second pool on the same database whose connections name themselves. */
 let readPool: Pool;
@@ -18,7 +19,10 @@ const READ_APP_NAME = 'layerbook-test-read';
 
 beforeAll(async () => {
   t = await startTestServer();
-  owner = await signUpFirm(t.app, 'Replica Lime Works');
+  // Figures to compare: an invoice part paid, one payment received.
+  owner = await cashFirm(t, 'Replica Lime Works');
+  const invoiceId = await owner.invoice(1, '2026-11-02', '2026-11-16', '640.00', { status: 'part_paid', amountPaid: '240.00' });
+  await owner.payment(invoiceId, 1, '2026-11-10', '240.00');
   other = await signUpFirm(t.app, 'Other Stucco Shop');
   readPool = new Pool({ connectionString: t.ctx.config.DATABASE_URL, max: 2, application_name: READ_APP_NAME });
 }, 120_000);
@@ -108,11 +112,15 @@ describe('the cash routes with a read pool', () => {
     expect(signIn.status).toBe(200);
 
     const connect = jest.spyOn(readPool, 'connect');
+    const texts = new Map<string, string>();
     for (const url of reads) {
       const [replica, primary] = [await agent.get(url), await owner.agent.get(url)];
       expect({ url, status: replica.status }).toEqual({ url, status: 200 });
       expect(replica.text).toBe(primary.text);
+      texts.set(url, replica.text);
     }
+    expect(texts.get('/api/cash/exports/payments.csv?from=2026-01-01&to=2026-12-31')).toContain('240.00');
+    expect(texts.get('/api/cash/receivables')).toContain('400.00');
     expect(connect).toHaveBeenCalledTimes(reads.length);
 
     // Not signed in: refused before the read pool is touched.
