@@ -1,3 +1,4 @@
+import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { migrateDatabase } from '@layerbook/db';
 import { Pool } from 'pg';
@@ -21,6 +22,9 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
   const logger = createLogger(config);
   if (config.RUN_MIGRATIONS) await migrateDatabase(config.DATABASE_OWNER_URL, path.join(config.ROOT_DIR, 'migrations'));
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: config.DB_POOL_MAX, application_name: `layerbook-${mode}` });
+  // An idle connection PostgreSQL drops (a restart, a failover) is reported here; without a listener
+  // the process would crash. The pool has already discarded it and opens a new one when next asked.
+  pool.on('error', (err) => logger.warn({ dbError: err.message }, 'idle database connection lost'));
   await assertRlsBoundRole(pool);
   // Reports that only read go to the read replica when there is one (DATABASE_READ_URL), under the same checked role.
   const readPool = mode === 'web' ? openReadPool(config, `layerbook-${mode}`) : undefined;
@@ -37,22 +41,41 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
 
   let server: import('node:http').Server | undefined;
   if (mode === 'web') {
-    const app = createApp(ctx, await loadSsrHandlers(config.ROOT_DIR));
+    // Tests may start the server before the apps are built (npm test runs jest first): the API alone then.
+    const appsBuilt = existsSync(path.join(config.ROOT_DIR, 'dist', 'admin', 'server', 'server.mjs'));
+    const app = createApp(ctx, config.NODE_ENV === 'test' && !appsBuilt ? undefined : await loadSsrHandlers(config.ROOT_DIR));
     server = app.listen(config.PORT, config.HOST, () => logger.info({ url: config.PUBLIC_URL }, 'Layerbook is listening'));
   } else {
     logger.info('Layerbook worker started');
   }
 
+  /**
+   * SIGTERM (or SIGINT): stop accepting connections, let the requests under way finish (idle
+   * keep-alive connections are closed as they fall idle), then let the running jobs finish and
+   * record their outcome (queue.stop), then close the pools and exit 0. Past 25 s it exits 1 anyway.
+   */
   let stopping = false;
   const shutdown = async (signal: string) => {
     if (stopping) return;
     stopping = true;
+    // Stop accepting first: a connection made once this is logged is refused.
+    const http = server;
+    const closed = http ? new Promise<void>((resolve) => http.close(() => resolve())) : undefined;
     logger.info({ signal }, 'shutting down');
-    const force = setTimeout(() => process.exit(1), 15_000).unref();
-    await new Promise<void>((resolve) => (server ? server.close(() => resolve()) : resolve()));
-    server?.closeAllConnections?.();
+    const force = setTimeout(() => {
+      logger.error('shutdown took too long; exiting');
+      process.exit(1);
+    }, 25_000).unref();
+    if (http) {
+      // A keep-alive connection whose request has finished would otherwise hold close() for its idle timeout.
+      const idle = setInterval(() => http.closeIdleConnections(), 100);
+      await closed;
+      clearInterval(idle);
+      logger.info('requests under way finished');
+    }
     await queue.stop();
     await workers?.stop();
+    logger.info('jobs under way finished');
     await metrics?.close();
     await pool.end();
     await readPool?.end();
