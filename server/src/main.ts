@@ -36,7 +36,12 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
   const workers = mode === 'worker' || config.RUN_WORKERS ? await startWorkers(config, queue, logger, ctx.now) : undefined;
   // Prometheus metrics on a loopback listener of their own (ops/README.md, "Health and metrics"); off when METRICS_PORT is unset.
   const metrics = config.METRICS_PORT
-    ? await startMetricsServer(metricsRegistry({ role: mode, jobsDb: queue.boss.getDb() }), config.METRICS_PORT, config.METRICS_HOST, logger)
+    ? await startMetricsServer(
+        metricsRegistry({ role: mode, jobsDb: queue.boss.getDb() }),
+        config.METRICS_PORT,
+        config.METRICS_HOST,
+        logger,
+      )
     : undefined;
 
   let server: import('node:http').Server | undefined;
@@ -75,8 +80,8 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
     }
     await queue.stop();
     await workers?.stop();
-    logger.info('jobs under way finished');
     await metrics?.close();
+    logger.info('jobs under way finished');
     await pool.end();
     await readPool?.end();
     storage.close();
