@@ -1,8 +1,9 @@
 /**
  * The load run: 60 s of mixed reading and writing at 32 connections (autocannon, one instance per kind
- * of work) against the demo firm, on its own database (layerbook_bench_load, made and seeded here) and
- * a server process of its own on port 55520. Prints requests per second and latency per kind, the
- * errors, and the reconciliation of the database with the answers. Exits 1 on any error or mismatch.
+ * of work) against the demo firm, on its own database (layerbook_bench_load, made and seeded here) and a
+ * server process of its own (the first free port of 55520–55539). Prints requests per second and latency
+ * per kind, the errors, and the reconciliation of the database with the answers. Exits 1 on any error
+ * or mismatch.
  * Figures, not a test (not part of npm test):
  *   npx tsx ops/bench/load/load-run.ts        (PostgreSQL must be up: bash ops/pg-start.sh)
  * LOAD_SECONDS shortens or lengthens the window (60 by default).
@@ -10,9 +11,11 @@
  * The public form's limits are raised for the run (PUBLIC_FORM_RATE_LIMIT, PUBLIC_FORM_MIN_FILL_MS=0):
  * every post comes from one loopback address within a second of opening the form.
  */
-import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
+import { type ChildProcess, execFile, spawn } from 'node:child_process';
+import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { promisify } from 'node:util';
 import autocannon from 'autocannon';
 import { Pool } from 'pg';
 import { DEMO, seedDemo } from '../../../server/src/seed/demo';
@@ -23,7 +26,8 @@ import { loadKinds, type LoadPlan } from './scenarios';
 import { printFigures, Recorder } from './stats';
 
 const DB = 'layerbook_bench_load';
-const PORT = 55520;
+/** The run's own ports; the first free one serves (they lie in Linux's ephemeral range, so one may be taken for a while). */
+const PORTS = Array.from({ length: 20 }, (_, i) => 55520 + i);
 const CONNECTIONS = 32;
 const SERVER_POOL = 16;
 const WINDOW_SECONDS = Number(process.env['LOAD_SECONDS'] ?? 60);
@@ -37,33 +41,54 @@ const DRAIN_LIMIT_MS = 15_000;
 const root = path.resolve(__dirname, '../../..');
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-function machine(): string {
+/**
+ * The load average and what else is busy (top's second sample, half a second apart), leaving out this
+ * run's own processes (PostgreSQL's backends cannot be told apart: they are listed, ours among them).
+ */
+async function machine(own: ReadonlyArray<number | undefined>): Promise<string> {
   const [one, five] = os.loadavg();
-  const busiest = execFileSync('ps', ['-eo', 'pcpu=,comm=', '--sort=-pcpu'], { encoding: 'utf8' })
-    .split('\n')
-    .slice(0, 5)
-    .map((l) => l.trim().replace(/\s+/, '% '))
-    .filter(Boolean)
+  const sample = (await promisify(execFile)('top', ['-b', '-n', '2', '-d', '0.5', '-w', '200', '-o', '%CPU'], { encoding: 'utf8' })).stdout;
+  const rows = sample.slice(sample.lastIndexOf('PID USER')).split('\n').slice(1);
+  const busiest = rows
+    .map((l) => l.trim().split(/\s+/))
+    .filter((f) => f.length >= 12 && Number(f[8]) >= 5 && !own.includes(Number(f[0])) && !f[11].endsWith('top'))
+    .slice(0, 6)
+    .map((f) => `${f.slice(11).join(' ')} ${f[8]}%`)
     .join(', ');
-  return `load average ${one.toFixed(2)} (1 min), ${five.toFixed(2)} (5 min); busiest processes: ${busiest}`;
+  return `load average ${one.toFixed(2)} (1 min), ${five.toFixed(2)} (5 min); others busy: ${busiest || 'none above 5% CPU'}`;
 }
 
-async function startServer(env: NodeJS.ProcessEnv): Promise<ChildProcess> {
-  const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'load-server.ts')], {
-    cwd: root,
-    env: { ...process.env, ...env, NODE_ENV: 'production' },
-    stdio: ['ignore', 'inherit', 'inherit'],
+const isFree = (port: number) =>
+  new Promise<boolean>((resolve) => {
+    const probe = net.createServer();
+    probe.once('error', () => resolve(false));
+    probe.listen(port, '127.0.0.1', () => probe.close(() => resolve(true)));
   });
-  for (let i = 0; i < 120; i++) {
-    if (child.exitCode !== null) throw new Error(`the server stopped at start (exit ${child.exitCode})`);
-    const up = await fetch(`http://127.0.0.1:${PORT}/api/health`).then(
-      (r) => r.ok,
-      () => false,
-    );
-    if (up) return child;
-    await sleep(500);
+
+/** The server process on the first free port of the run's own; answers it and its port. */
+async function startServer(env: NodeJS.ProcessEnv): Promise<{ child: ChildProcess; port: number }> {
+  for (const port of PORTS) {
+    if (!(await isFree(port))) continue;
+    const child = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'load-server.ts')], {
+      cwd: root,
+      env: { ...process.env, ...env, PORT: String(port), NODE_ENV: 'production' },
+      stdio: ['ignore', 'inherit', 'inherit'],
+    });
+    for (let i = 0; i < 240 && child.exitCode === null; i++) {
+      const up = await fetch(`http://127.0.0.1:${port}/api/health`).then(
+        (r) => r.ok,
+        () => false,
+      );
+      if (up) return { child, port };
+      await sleep(500);
+    }
+    if (child.exitCode === null) {
+      await stopServer(child);
+      throw new Error(`the server did not answer on port ${port} within 120 s`);
+    }
+    // It stopped at start (the port taken between the probe and its listen): the next port.
   }
-  throw new Error('the server did not answer within 60 s');
+  throw new Error(`no free port in ${PORTS[0]}–${PORTS.at(-1)}`);
 }
 
 async function stopServer(child: ChildProcess): Promise<void> {
@@ -75,7 +100,7 @@ async function stopServer(child: ChildProcess): Promise<void> {
 }
 
 /** Runs every kind at once for the window, then lets each sequence finish the step it is in. */
-async function runLoad(rec: Recorder, plan: LoadPlan): Promise<number> {
+async function runLoad(rec: Recorder, plan: LoadPlan, port: number): Promise<number> {
   const kinds = loadKinds(rec, plan);
   if (kinds.reduce((n, k) => n + k.connections, 0) !== CONNECTIONS) throw new Error(`the kinds do not share ${CONNECTIONS} connections`);
   rec.startedAt = Date.now();
@@ -84,7 +109,7 @@ async function runLoad(rec: Recorder, plan: LoadPlan): Promise<number> {
     let settle: (error: Error | null) => void = () => undefined;
     const finished = new Promise<void>((resolve, reject) => (settle = (error) => (error ? reject(error) : resolve())));
     const instance = autocannon(
-      { url: `http://127.0.0.1:${PORT}`, connections: k.connections, duration: WINDOW_SECONDS + 120, timeout: 30, requests: k.requests },
+      { url: `http://127.0.0.1:${port}`, connections: k.connections, duration: WINDOW_SECONDS + 120, timeout: 30, requests: k.requests },
       (error: Error | null) => settle(error),
     );
     // The tracker's 'response' is (client, status, bytes, latency ms), right after the request's onResponse.
@@ -118,13 +143,12 @@ async function main(): Promise<void> {
     await seeding.pool.end();
     const lines = await makeBillableLines(owner, firmId, JOBS, LINES_PER_JOB);
 
-    server = await startServer({
+    const started = await startServer({
       DATABASE_URL: config.DATABASE_URL,
       DATABASE_OWNER_URL: config.DATABASE_OWNER_URL,
       DATABASE_JOBS_URL: config.DATABASE_JOBS_URL,
       SESSION_SECRET: config.SESSION_SECRET,
       HOST: '127.0.0.1',
-      PORT: String(PORT),
       PUBLIC_URL: config.PUBLIC_URL,
       ROOT_DIR: root,
       LOG_LEVEL: 'silent',
@@ -134,7 +158,8 @@ async function main(): Promise<void> {
       PUBLIC_FORM_RATE_LIMIT: '100000000',
       PUBLIC_FORM_MIN_FILL_MS: '0',
     });
-    const base = `http://127.0.0.1:${PORT}`;
+    server = started.child;
+    const base = `http://127.0.0.1:${started.port}`;
     const ownerSession = await signInForBench(base, DEMO.people[0].email, DEMO.password);
     const office = await signInForBench(base, DEMO.people[1].email, DEMO.password);
     const estimateIds = await makeLoadEstimates(base, ownerSession, ESTIMATES);
@@ -145,13 +170,16 @@ async function main(): Promise<void> {
 
     console.log(
       `load: ${WINDOW_SECONDS} s, ${CONNECTIONS} connections (autocannon 8, one instance per kind), ` +
-        `server process on :${PORT} with ${SERVER_POOL} database connections, no workers; demo firm + ${JOBS} jobs × ${LINES_PER_JOB} lines to bill, ` +
+        `server process on :${started.port} with ${SERVER_POOL} database connections, no workers; demo firm + ${JOBS} jobs × ${LINES_PER_JOB} lines to bill, ` +
         `${ESTIMATES} open estimates (prepared in ${prepSeconds} s); public form limits raised for the run (PUBLIC_FORM_RATE_LIMIT, PUBLIC_FORM_MIN_FILL_MS=0)`,
     );
-    console.log(`  machine: ${os.cpus().length} cores; before the run: ${machine()}`);
+    const own = [process.pid, server.pid];
+    console.log(`  machine: ${os.cpus().length} cores; before the run: ${await machine(own)}`);
     const rec = new Recorder();
-    const drained = await runLoad(rec, plan);
-    console.log(`  after the run: ${machine()}`);
+    const midway = sleep(WINDOW_SECONDS * 500).then(() => machine(own));
+    const drained = await runLoad(rec, plan, started.port);
+    console.log(`  halfway through the run: ${await midway}`);
+    console.log(`  after the run: ${await machine(own)}`);
     console.log(`  window ${WINDOW_SECONDS} s, then ${drained} ms for the last answers (sequences finish the step they are in)`);
     printFigures(rec, WINDOW_SECONDS);
     const reconciled = await reconcile(owner, firmId, estimateIds, before, rec);
