@@ -46,6 +46,12 @@ export const routes: Routes = [
         loadComponent: () => import('./features/cash/cash').then((m) => m.Cash),
       },
       {
+        path: 'activity',
+        title: 'audit.title',
+        canActivate: [roleGuard('owner')],
+        loadComponent: () => import('./features/audit/activity').then((m) => m.Activity),
+      },
+      {
         path: 'sheets',
         loadChildren: () => import('./features/jobs/sheet/sheet.routes'),
       },

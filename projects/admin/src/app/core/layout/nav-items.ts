@@ -22,5 +22,6 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'layout.nav.library', icon: 'layers', path: '/library', minRole: 'crew' },
   { label: 'layout.nav.team', icon: 'badge', path: '/team', minRole: 'crew' },
   { label: 'layout.nav.settings', icon: 'tune', path: '/settings', minRole: 'office' },
+  { label: 'audit.nav', icon: 'history', path: '/activity', minRole: 'owner' },
   { label: 'auth.nav.security', icon: 'shield', path: '/security', minRole: 'office' },
 ];
