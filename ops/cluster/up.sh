@@ -23,6 +23,10 @@ done
 # A second run restarts everything (the data stays).
 if compgen -G "$CL_RUN/*.pid" >/dev/null; then bash "$here/down.sh"; fi
 
+# Whatever fails on the way, what was started is stopped again (by PID).
+started_ok=0
+trap 'if [ "$started_ok" = 0 ]; then echo "ops/cluster/up.sh failed; stopping what it started." >&2; bash "$here/down.sh" >&2; fi' EXIT
+
 bash ops/deps.sh
 bash ops/pg-install.sh
 bash "$here/nginx-install.sh"
@@ -78,21 +82,18 @@ if [ "$replica" = 1 ]; then
   DATABASE_READ_URL="$(cl_url layerbook_app "$LB_APP_PASSWORD" "$CL_STANDBY_PORT")"
 fi
 
+# One process at a time, each once it is ready: on a fresh database, processes starting together race
+# to create pg-boss's queues and grant the web role its rights, and PostgreSQL may abort one of them
+# (deadlock, "tuple concurrently updated"). Nodes started later, one by one, are not affected.
 for i in $(seq 1 "$CL_WORKERS"); do
   start "worker-$i" node "$CL_BIN/main.js" worker
+  wait_for "grep -q 'worker started' '$CL_LOGS/worker-$i.log'" 60 || { echo "worker-$i did not start: $CL_LOGS/worker-$i.log" >&2; exit 1; }
 done
 i=0
 for port in $CL_WEB_PORTS; do
   i=$((i + 1))
   PORT="$port" HOST=127.0.0.1 RUN_WORKERS=false start "web-$i" node "$CL_BIN/main.js"
-done
-i=0
-for port in $CL_WEB_PORTS; do
-  i=$((i + 1))
   wait_for "curl -fs -o /dev/null http://127.0.0.1:$port/api/health" 90 || { echo "web-$i did not start: $CL_LOGS/web-$i.log" >&2; exit 1; }
-done
-for i in $(seq 1 "$CL_WORKERS"); do
-  wait_for "grep -q 'worker started' '$CL_LOGS/worker-$i.log'" 60 || { echo "worker-$i did not start: $CL_LOGS/worker-$i.log" >&2; exit 1; }
 done
 
 bash "$here/nginx-conf.sh" >"$CL_DIR/nginx/nginx.conf"
@@ -101,6 +102,7 @@ if [ "$(id -u)" = "0" ]; then chown -R www-data "$CL_DIR/nginx/tmp"; fi
 start nginx /usr/sbin/nginx -c "$CL_DIR/nginx/nginx.conf" -p "$CL_DIR/nginx/" -g "daemon off;"
 wait_for "curl -fs -o /dev/null --cacert '$CL_DIR/tls/cert.pem' $CL_PUBLIC_URL/api/health" 30 || { echo "nginx did not start: $CL_LOGS/nginx.log" >&2; exit 1; }
 
+started_ok=1
 cat <<INFO
 
   Layerbook, several nodes, at  $CL_PUBLIC_URL   (self-signed: $CL_DIR/tls/cert.pem)
