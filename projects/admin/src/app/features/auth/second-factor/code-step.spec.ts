@@ -46,6 +46,13 @@ async function render(next?: string) {
   return { fixture, navigate, http: TestBed.inject(HttpTestingController), host: fixture.nativeElement as HTMLElement };
 }
 
+/** Lets the answer's promise chain run (the HTTP answer, the session, the navigation) and redraws. */
+async function settle(fixture: Awaited<ReturnType<typeof render>>['fixture']) {
+  await new Promise((resolve) => setTimeout(resolve, 0));
+  fixture.detectChanges();
+  await fixture.whenStable();
+}
+
 async function typeAndSend(fixture: Awaited<ReturnType<typeof render>>['fixture'], host: HTMLElement, value: string) {
   const input = host.querySelector<HTMLInputElement>('input[formcontrolname="code"]')!;
   input.value = value;
@@ -83,7 +90,7 @@ describe('SecondFactorCodeStep', { timeout: 30_000 }, () => {
     const sent = http.expectOne({ method: 'POST', url: '/api/auth/second-factor' });
     expect(sent.request.body).toEqual({ code: '123456' });
     sent.flush(SIGNED_IN);
-    await fixture.whenStable();
+    await settle(fixture);
     expect(navigate).toHaveBeenCalledWith('/jobs/7');
   });
 
@@ -100,8 +107,7 @@ describe('SecondFactorCodeStep', { timeout: 30_000 }, () => {
         { type: 'about:blank', title: 'x', status: 400, errors: [{ field: 'code', message: 'That code is not right.' }] },
         { status: 400, statusText: 'Bad Request' },
       );
-    await fixture.whenStable();
-    fixture.detectChanges();
+    await settle(fixture);
     expect(host.textContent).toContain('That code is not right.');
   });
 
@@ -120,6 +126,6 @@ describe('SecondFactorCodeStep', { timeout: 30_000 }, () => {
     const sent = http.expectOne('/api/auth/second-factor');
     expect(sent.request.body).toEqual({ code: 'abcde-23456' });
     sent.flush(SIGNED_IN);
-    await fixture.whenStable();
+    await settle(fixture);
   });
 });
