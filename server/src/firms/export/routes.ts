@@ -10,8 +10,8 @@ import { writeFirmExport } from './write-export';
 
 /**
  * `GET /api/firm/export` (owner only): every piece of the firm's data as a zip. The owner's request
- * is checked and audited ('firm.exported') in its own transaction; the data is then read in a
- * read-only tenant transaction that sees that entry too.
+ * is checked and audited ('firm.exported') in its own transaction on the primary; the data is then
+ * read in a read-only tenant transaction (which, on the primary, sees that entry too).
  */
 export function firmExportRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -40,7 +40,8 @@ export function firmExportRoutes(ctx: AppContext): Router {
       'cache-control': 'no-store',
     });
     try {
-      await withTenant(ctx.pool, asked.tenantId, (tx) => writeFirmExport(tx, ctx.storage, now, res));
+      // A report that only reads: on the read replica when there is one (DATABASE_READ_URL), as the cash exports.
+      await withTenant(ctx.readPool ?? ctx.pool, asked.tenantId, (tx) => writeFirmExport(tx, ctx.storage, now, res));
     } catch (error) {
       if (!res.headersSent) {
         res.removeHeader('content-disposition');
