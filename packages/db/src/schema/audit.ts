@@ -20,6 +20,8 @@ export const auditLog = pgTable(
     index('audit_log_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
     // a record's trail (an invoice page, a job's history) without reading the firm's whole log
     index('audit_log_entity_idx').on(t.tenantId, t.entityId, t.createdAt),
+    // the owner's activity filtered by person (who signed in, who changed what), newest first
+    index('audit_log_actor_idx').on(t.tenantId, t.actorUserId, t.createdAt, t.id),
     tenantPolicy('audit_log'),
   ],
 );
