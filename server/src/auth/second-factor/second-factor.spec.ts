@@ -1,5 +1,6 @@
 import type { SecondFactorEnrolment } from '@layerbook/contracts';
-import { signUpFirm, startTestServer, TestServer } from '../../testing/harness';
+import { linkIn } from '../../testing/inbox';
+import { newAgent, signUpFirm, startTestServer, TestServer } from '../../testing/harness';
 import { auditOf, enrol, invite, passwordStep, stepClock } from './second-factor-fixtures';
 import { codeAt } from './totp';
 
@@ -171,6 +172,32 @@ describe('signing in with a second factor', () => {
       .set('x-csrf-token', guess.csrf())
       .send({ code: codeAt(secret, clock.now()) });
     expect(throttled.status).toBe(429);
+  });
+});
+
+describe('a password reset', () => {
+  it('still asks an enrolled person for the code before signing them in', async () => {
+    const clock = stepClock(t);
+    const owner = await signUpFirm(t.app);
+    const { secret } = await enrol(owner, clock.now());
+    const asked = await newAgent(t.app);
+    await asked.agent.post('/api/auth/password-reset').set('x-csrf-token', asked.csrf()).send({ email: owner.email });
+    const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to ?? '').includes(owner.email) && /reset/i.test(m.subject ?? ''));
+    const token = new URL(linkIn(mail)).searchParams.get('token')!;
+    const reset = await asked.agent
+      .post('/api/auth/password-reset/complete')
+      .set('x-csrf-token', asked.csrf())
+      .send({ token, password: 'a-brand-new-pass-42' });
+    expect(reset.status).toBe(200);
+    expect(reset.body).toMatchObject({ user: null, secondFactor: { step: 'code' } });
+    expect((await asked.agent.get('/api/firm')).status).toBe(401);
+    clock.advance();
+    const done = await asked.agent
+      .post('/api/auth/second-factor')
+      .set('x-csrf-token', String(reset.body.csrfToken))
+      .send({ code: codeAt(secret, clock.now()) });
+    expect(done.status).toBe(200);
+    expect(done.body.user.email).toBe(owner.email);
   });
 });
 
