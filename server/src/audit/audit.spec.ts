@@ -1,5 +1,6 @@
 import type { AuditEntry, AuditPage } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
+import fc from 'fast-check';
 import { PRIMER } from '../library/library-fixtures';
 import { joinAs } from '../proposals/proposal-fixtures';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
@@ -148,5 +149,28 @@ describe('GET /api/audit', () => {
     expect(mine.items.some((e) => theirIds.has(e.id))).toBe(false);
     expect((await list(`?record=${bClientId}`)).items).toEqual([]);
     expect((await list(`?person=${b.userId}`)).items).toEqual([]);
+  });
+
+  it('answers any mix of odd filter values with a page or a 400, never a 5xx', async () => {
+    const day = fc.oneof(
+      fc.constantFrom('2026-12-01', '1900-01-01', '2999-12-31', '0000-00-00', '2026-02-29'),
+      fc.string({ maxLength: 12 }),
+    );
+    const value = fc.oneof(
+      fc.string({ maxLength: 40 }),
+      day,
+      fc.uuid(),
+      fc.constantFrom('signIns', 'invoice.issued', 'x._', '%', '%25', '100', '-1'),
+    );
+    const query = fc
+      .array(fc.tuple(fc.constantFrom('person', 'kind', 'action', 'record', 'from', 'to', 'after', 'limit', 'q'), value), { maxLength: 5 })
+      .map((pairs) => pairs.map(([k, v]) => `${k}=${encodeURIComponent(v)}`).join('&'));
+    await fc.assert(
+      fc.asyncProperty(query, async (q) => {
+        const res = await a.agent.get(`/api/audit?${q}`);
+        expect({ q, status: res.status < 500 }).toEqual({ q, status: true });
+      }),
+      { numRuns: 60 },
+    );
   });
 });
