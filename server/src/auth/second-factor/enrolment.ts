@@ -1,10 +1,10 @@
 import type { RecoveryCodes, SecondFactorEnrolment, SecondFactorStatus } from '@layerbook/contracts';
-import { eq, firms, type TenantTx } from '@layerbook/db';
+import { eq, firms, memberships, type TenantTx } from '@layerbook/db';
 import QRCode from 'qrcode';
 import { recordAudit } from '../../audit/record';
 import type { AppContext } from '../../context';
 import type { StaffPrincipal } from '../../http/principal';
-import { conflict } from '../../http/problem';
+import { conflict, notFound } from '../../http/problem';
 import { newRecoveryCodes, normaliseRecoveryCode } from './recovery-codes';
 import { openSecret, recoveryCodeHash, sealSecret } from './secret-box';
 import { factorOf, keepPendingSecret, recoveryCodesLeft, removeFactor, replaceRecoveryCodes, takeStep } from './store';
@@ -93,4 +93,24 @@ export async function setFirmRequirement(tx: TenantTx, staff: StaffPrincipal, re
     entityId: tx.tenantId,
     data: { required },
   });
+}
+
+/**
+ * The owner clears a member's second factor (a lost phone and lost recovery codes): the member signs
+ * in with the password alone again, or sets one up at once when the firm requires it. Owners clear
+ * their own on Sign-in and security instead.
+ */
+export async function resetMemberFactor(tx: TenantTx, owner: StaffPrincipal, membershipId: string): Promise<void> {
+  const [member] = await tx.db.select({ userId: memberships.userId }).from(memberships).where(eq(memberships.id, membershipId));
+  if (!member) throw notFound('team member');
+  if (member.userId === owner.id) throw conflict('Turn your own second factor off on Sign-in and security.');
+  if (await removeFactor(tx, member.userId)) {
+    await recordAudit(tx, {
+      actorUserId: owner.id,
+      actorKind: 'staff',
+      action: 'staff.secondFactorReset',
+      entity: 'user',
+      entityId: member.userId,
+    });
+  }
 }

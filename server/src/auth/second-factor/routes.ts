@@ -1,5 +1,6 @@
 import {
   firmSecondFactor,
+  idParam,
   roleAtLeast,
   secondFactorCheck,
   secondFactorConfirm,
@@ -21,7 +22,15 @@ import { passwordHashOf } from '../password-store';
 import { verifyPassword } from '../passwords';
 import { finishSignIn, staffSession } from '../session-answer';
 import { loadStaffInTx } from '../staff-principal';
-import { confirmEnrolment, renewRecoveryCodes, secondFactorStatus, setFirmRequirement, startEnrolment, turnOff } from './enrolment';
+import {
+  confirmEnrolment,
+  renewRecoveryCodes,
+  resetMemberFactor,
+  secondFactorStatus,
+  setFirmRequirement,
+  startEnrolment,
+  turnOff,
+} from './enrolment';
 import { requireHalfState, type HalfState } from './half-state';
 import { throttledCheck, useCode, wrongPassword } from './verify';
 
@@ -114,6 +123,12 @@ export function secondFactorRoutes(ctx: AppContext, signInLimiter: RequestHandle
       return secondFactorStatus(tx, staff);
     });
     res.json(status satisfies SecondFactorStatus);
+  });
+
+  // The owner clears a member's second factor (by membership id, as the team page lists them).
+  router.post('/members/:id/reset', async (req, res) => {
+    await withStaff(ctx, req, 'owner', (tx, staff) => resetMemberFactor(tx, staff, parse(idParam, req.params).id));
+    res.status(204).end();
   });
 
   return router;
