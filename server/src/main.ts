@@ -2,6 +2,7 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { migrateDatabase } from '@layerbook/db';
 import { Pool } from 'pg';
+import type { Logger } from 'pino';
 import { createApp } from './app';
 import { loadConfig } from './config';
 import { openReadPool, type AppContext } from './context';
@@ -22,13 +23,11 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
   const logger = createLogger(config);
   if (config.RUN_MIGRATIONS) await migrateDatabase(config.DATABASE_OWNER_URL, path.join(config.ROOT_DIR, 'migrations'));
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: config.DB_POOL_MAX, application_name: `layerbook-${mode}` });
-  // An idle connection PostgreSQL drops (a restart, a failover) is reported here; without a listener
-  // the process would crash. The pool has already discarded it and opens a new one when next asked.
-  pool.on('error', (err) => logger.warn({ dbError: err.message }, 'idle database connection lost'));
+  survivesDroppedConnections(pool, logger);
   await assertRlsBoundRole(pool);
   // Reports that only read go to the read replica when there is one (DATABASE_READ_URL), under the same checked role.
   const readPool = mode === 'web' ? openReadPool(config, `layerbook-${mode}`) : undefined;
-  readPool?.on('error', (err) => logger.warn({ dbError: err.message }, 'idle read-replica connection lost'));
+  if (readPool) survivesDroppedConnections(readPool, logger);
   if (readPool) await assertRlsBoundRole(readPool);
   const queue = await startQueue(config, logger);
   const storage = await openObjectStore(config);
@@ -90,6 +89,19 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
   };
   process.on('SIGTERM', () => void shutdown('SIGTERM'));
   process.on('SIGINT', () => void shutdown('SIGINT'));
+}
+
+/**
+ * A connection PostgreSQL drops (a restart, a failover, an administrator's terminate) raises an
+ * 'error' event: on the pool while the connection is idle there, on the client while it is checked
+ * out between two queries (a transaction waiting on other work). With no listener either one crashes
+ * the process; with one, the query under way fails (the request answers 503), the pool discards the
+ * connection and opens a new one when next asked.
+ */
+function survivesDroppedConnections(pool: Pool, logger: Logger): void {
+  const lost = (err: Error) => logger.warn({ dbError: err.message }, 'database connection lost');
+  pool.on('error', lost);
+  pool.on('connect', (client) => client.on('error', lost));
 }
 
 main(process.argv[2] === 'worker' ? 'worker' : 'web').catch((error) => {

@@ -42,19 +42,27 @@ afterAll(async () => {
 it('PostgreSQL down for 10 s under load: 503 problems at once, nothing half-written, the server recovers by itself', async () => {
   const owner = await signUpOver(`http://127.0.0.1:${HTTP_PORT}`, catcher, 'Outage Plaster');
   const r = await stopDatabaseUnderLoad(cluster, app, owner, catcher, { connections: 8, outageMs: 10_000 });
-  // Every request answered: 200/201 or 503, never a 500 or a hang.
-  expect(r.unexpected).toEqual([]);
+  // The process survived: connections PostgreSQL dropped (in use or idle in any pool) are errors it handles.
+  // If it died, the lines of its last words that say why.
+  const why = (server.alive() ? '' : server.stderr())
+    .split('\n')
+    .filter((line) => /Error|Emitted|server\/src/.test(line))
+    .slice(0, 12);
+  expect({ alive: server.alive(), why }).toEqual({ alive: true, why: [] });
+  expect(r).toMatchObject({
+    // Every request answered: 200/201 or 503, never a 500 or a hang; during the outage 503 only.
+    unexpected: [],
+    clear503s: true,
+    // Each create is one transaction: a 201 has its row, a 503 has none.
+    writesMatchRows: true,
+  });
   expect(Object.keys(r.duringOutage)).toEqual(['503']);
   expect(r.duringOutage['503']).toBeGreaterThan(20);
-  expect(r.clear503s).toBe(true);
-  // Fail fast: a refused connection answers at once (a second is generous on a loaded machine).
+  // Fail fast: a refused connection answers at once (two seconds is generous on a loaded machine).
   expect(r.slowest503Ms).toBeLessThan(2_000);
-  // The pool reconnects on its own: requests succeed within seconds of PostgreSQL's return.
+  // The pools reconnect on their own: requests succeed within seconds of PostgreSQL's return, and
+  // pg-boss and the workers too: an e-mail queued afterwards is sent.
   expect(r.recoveredMs).not.toBeNull();
   expect(r.recoveredMs!).toBeLessThan(10_000);
-  // Each create is one transaction: a 201 has its row, a 503 has none.
-  expect(r.writesMatchRows).toBe(true);
-  // pg-boss and the workers reconnect: an e-mail queued afterwards is sent.
   expect(r.queueResumedMs).not.toBeNull();
-  expect(server.alive()).toBe(true);
 }, 120_000);
