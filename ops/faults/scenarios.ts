@@ -132,7 +132,11 @@ export async function runFaults(o: { pgPort: number; db: string; httpPorts: [num
     try {
       await server.logged('Layerbook is listening');
       const owner = await signUpOver(`http://127.0.0.1:${downPort}`, catcher, 'Outage Run Plaster');
-      rows.push(...dbDownRows(await stopDatabaseUnderLoad(cluster, db.app, owner, catcher, { connections: 8, outageMs: 10_000 })));
+      rows.push(
+        ...dbDownRows(
+          await stopDatabaseUnderLoad(cluster, db.app, owner, catcher, { connections: 8, outageMs: 10_000, jobBeforeStop: true }),
+        ),
+      );
       rows.push(['PostgreSQL down', 'server process still running', server.alive() ? 'yes' : 'no', server.alive()]);
     } catch (error) {
       rows.push(failed('PostgreSQL down', error));

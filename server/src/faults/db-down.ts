@@ -48,7 +48,14 @@ export async function stopDatabaseUnderLoad(
   app: Pool,
   owner: { agent: HttpAgent; csrf: () => string; firmId: string },
   catcher: MailCatcher,
-  options: { connections: number; outageMs: number },
+  options: {
+    connections: number;
+    outageMs: number;
+    /** send an e-mail just before the stop, so a worker's pool holds a connection when PostgreSQL goes */
+    jobBeforeStop: boolean;
+    /** called once PostgreSQL is back, before the queue is checked (e.g. to start a worker process) */
+    beforeQueueCheck?: () => Promise<void>;
+  },
 ): Promise<DbDownResult> {
   const samples: Sample[] = [];
   const tag = `Load ${Date.now().toString(36)}`;
@@ -83,10 +90,11 @@ export async function stopDatabaseUnderLoad(
   });
 
   await sleep(1_000);
-  // A job just before the stop, so the workers' own pool holds an idle connection when PostgreSQL goes.
-  const before = `fault.before.${Date.now().toString(36)}@example.test`;
-  await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email: before, role: 'crew' });
-  await catcher.waitFor((m) => m.to.includes(before), 15_000);
+  if (options.jobBeforeStop) {
+    const before = `fault.before.${Date.now().toString(36)}@example.test`;
+    await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email: before, role: 'crew' });
+    await catcher.waitFor((m) => m.to.includes(before), 15_000);
+  }
   await sleep(500);
   const stopAt = Date.now();
   await cluster.stop();
@@ -119,6 +127,7 @@ export async function stopDatabaseUnderLoad(
   });
 
   // The queue: an invitation's e-mail goes through pg-boss and a worker, both of which lost their connections.
+  await options.beforeQueueCheck?.();
   const invitedAt = Date.now();
   const email = `fault.after.${Date.now().toString(36)}@example.test`;
   const invited = await owner.agent
