@@ -54,8 +54,8 @@ export function paymentRows(r: KillPaymentResult, clock: string): Row[] {
   ];
 }
 
-export function dbDownRows(r: DbDownResult): Row[] {
-  const s = `PostgreSQL down ${seconds(r.outageMs)}`;
+export function dbDownRows(r: DbDownResult, what: string): Row[] {
+  const s = `PostgreSQL down ${seconds(r.outageMs)}, ${what}`;
   const during = Object.entries(r.duringOutage)
     .map(([status, n]) => `${n}×${status}`)
     .join(', ');
@@ -128,18 +128,44 @@ export async function runFaults(o: { pgPort: number; db: string; httpPorts: [num
     } finally {
       await ensureStopped(toStop);
     }
+    // A web node alone (RUN_WORKERS=false): a worker process sends the sign-up e-mail, then stops; another sends what is queued after.
+    const node = startServerProcess('web', { ...env, PORT: String(downPort), RUN_WORKERS: 'false' });
+    const helpers: Array<ReturnType<typeof startServerProcess>> = [];
+    const worker = async () => {
+      const w = startServerProcess('worker', env);
+      helpers.push(w);
+      await w.logged('Layerbook worker started');
+      return w;
+    };
+    try {
+      await node.logged('Layerbook is listening');
+      const first = await worker();
+      const owner = await signUpOver(`http://127.0.0.1:${downPort}`, catcher, 'Outage Node Run Plaster');
+      first.signal('SIGTERM');
+      await first.exited;
+      const r = await stopDatabaseUnderLoad(cluster, db.app, owner, catcher, {
+        connections: 8,
+        outageMs: 10_000,
+        jobBeforeStop: false,
+        beforeQueueCheck: () => worker().then(() => undefined),
+      });
+      rows.push(...dbDownRows(r, 'web node'));
+      rows.push(['PostgreSQL down, web node', 'web process still running', node.alive() ? 'yes' : 'no', node.alive()]);
+    } catch (error) {
+      rows.push(failed('PostgreSQL down, web node', error));
+    } finally {
+      for (const p of [node, ...helpers]) await ensureStopped(p);
+    }
+    // A web process with its workers, a job run just before the stop (its workers' pool holds a connection).
     const server = web(downPort);
     try {
       await server.logged('Layerbook is listening');
       const owner = await signUpOver(`http://127.0.0.1:${downPort}`, catcher, 'Outage Run Plaster');
-      rows.push(
-        ...dbDownRows(
-          await stopDatabaseUnderLoad(cluster, db.app, owner, catcher, { connections: 8, outageMs: 10_000, jobBeforeStop: true }),
-        ),
-      );
-      rows.push(['PostgreSQL down', 'server process still running', server.alive() ? 'yes' : 'no', server.alive()]);
+      const r = await stopDatabaseUnderLoad(cluster, db.app, owner, catcher, { connections: 8, outageMs: 10_000, jobBeforeStop: true });
+      rows.push(...dbDownRows(r, 'web with workers'));
+      rows.push(['PostgreSQL down, web with workers', 'process still running', server.alive() ? 'yes' : 'no', server.alive()]);
     } catch (error) {
-      rows.push(failed('PostgreSQL down', error));
+      rows.push(failed('PostgreSQL down, web with workers', error));
     } finally {
       server.signal('SIGTERM');
       await Promise.race([server.exited, new Promise((resolve) => setTimeout(resolve, 30_000))]);
