@@ -8,9 +8,8 @@ import { startObjectStore } from './processes';
 
 // Kill -9 a worker process (server/src/main.ts worker) mid-send, restart one, and count: nothing
 // lost, duplicates no more than the messages in flight. The killed jobs' expiry is brought forward
-// (db-waits.ts expireAndRetryNow); `ops/faults/run.ts --real-time` waits for it instead. The same
-// kill mid-payment (applied exactly once) runs in ops/faults/run.ts, to keep this set short; in jest
-// server/src/payments/apply-event-kill.spec.ts kills a payments-apply worker inside its transaction.
+// (db-waits.ts expireAndRetryNow); `ops/faults/run.ts --real-time` waits for it instead. The kill
+// mid-payment is payment-kill.spec.ts.
 
 let database: Awaited<ReturnType<typeof freshTestDatabase>>;
 let db: FaultDb;
