@@ -14,6 +14,8 @@ if stale dist/admin/server/server.mjs || stale dist/portal/server/server.mjs || 
   echo "Building the admin and portal apps…"
   npx ng build admin >/tmp/layerbook-build-admin.log 2>&1 || { cat /tmp/layerbook-build-admin.log; exit 1; }
   npx ng build portal >/tmp/layerbook-build-portal.log 2>&1 || { cat /tmp/layerbook-build-portal.log; exit 1; }
+  # Brotli and gzip copies of the static files, served as they are (projects/shared/ssr/ssr-app.ts).
+  node ops/build/compress-assets.mjs dist/admin dist/portal
   touch dist/admin/server/server.mjs dist/portal/server/server.mjs
 fi
 # npm packages stay external (argon2 is native); our own workspace packages are TypeScript, so they are bundled.

@@ -1,5 +1,6 @@
 import { AngularNodeAppEngine, createNodeRequestHandler, isMainModule, writeResponseToNodeResponse } from '@angular/ssr/node';
 import express, { type Express, type Response as ExpressResponse } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 import { randomBytes } from 'node:crypto';
 
 /** index.html carries this marker in `ngCspNonce`; every copy is swapped for the request's nonce. */
@@ -20,7 +21,7 @@ const INLINED_MEDIA_URL = /url\((['"]?)\.\/media\//g;
  * manifest and helpers (admin), and the offline page it keeps (`index.csr.html`). Revalidated on
  * every use (ETag), so a release reaches the phones at once rather than in a year.
  */
-const REVALIDATED = /[\\/](?:ngsw\.json|ngsw-worker\.js|safety-worker\.js|worker-basic\.min\.js|index\.csr\.html)$/;
+const REVALIDATED = /[\\/](?:ngsw\.json|ngsw-worker\.js|safety-worker\.js|worker-basic\.min\.js|index\.csr\.html)(?:\.br|\.gz)?$/;
 
 export interface SsrAppOptions {
   /** The built browser files (`dist/<app>/browser`), served as they are. */
@@ -38,11 +39,16 @@ export function createSsrApp(options: SsrAppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
   const angularApp = new AngularNodeAppEngine();
+  // The build leaves a brotli and a gzip copy beside each compressible file (ops/build/compress-assets.mjs):
+  // the browser gets the smallest it accepts, with no compressing per request.
+  const precompressed = (folder: string, serveStatic: expressStaticGzip.ExpressStaticGzipOptions['serveStatic']) =>
+    expressStaticGzip(folder, { enableBrotli: true, orderPreference: ['br', 'gzip'], index: false, serveStatic });
   // Words change with each release under the same name: revalidated (ETag) rather than kept a year.
-  app.use('/i18n', express.static(`${options.browserDistFolder}/i18n`, { maxAge: 0, index: false, redirect: false }));
+  app.use('/i18n', precompressed(`${options.browserDistFolder}/i18n`, { maxAge: 0, index: false, redirect: false }));
   app.use(
-    express.static(options.browserDistFolder, {
+    precompressed(options.browserDistFolder, {
       maxAge: '1y',
+      immutable: true,
       index: false,
       redirect: false,
       // Hashed file names are kept a year; these keep their names from one release to the next.
