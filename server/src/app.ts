@@ -5,6 +5,7 @@ import type { AppContext } from './context';
 import { fileRoutes } from './files/routes';
 import { firmRoutes } from './firms/routes';
 import { firmExportRoutes } from './firms/export/routes';
+import { compressAnswers } from './http/compression';
 import { csrfProtection } from './http/csrf';
 import { apiNotFound, problemHandler } from './http/errors';
 import { requestLogging } from './http/logger';
@@ -59,6 +60,7 @@ export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
   app.use(refuseUndecodablePath);
   // Probes outside /api: no session, no CSRF, not logged (health/health-routes.ts).
   app.use(healthRoutes(ctx));
+  app.use(compressAnswers());
   const inquiryLimiter = publicInquiryLimiter(ctx.config.PUBLIC_FORM_RATE_LIMIT, ctx.pool);
   app.use('/api', api(ctx, inquiryLimiter));
   if (ssr) {
