@@ -18,6 +18,8 @@ const schema = z
      */
     DATABASE_READ_URL: z.preprocess((v) => (v === '' ? undefined : v), z.string().min(1).optional()),
     SESSION_SECRET: z.string().min(32, { error: 'SESSION_SECRET must have at least 32 characters' }),
+    /** Seals second-factor secrets (an AES-256-GCM key derived from it); unset: derived from SESSION_SECRET. */
+    SECOND_FACTOR_KEY: z.string().min(32, { error: 'SECOND_FACTOR_KEY must have at least 32 characters' }).optional(),
     SMTP_HOST: z.string().default('127.0.0.1'),
     SMTP_PORT: z.coerce.number().int().default(1025),
     MAIL_FROM: z.string().default('Layerbook <no-reply@layerbook.local>'),

@@ -10,7 +10,18 @@ const REDACTED = '[redacted]';
 /** Headers that carry the session or the CSRF token: never in a log line. */
 const SECRET_HEADERS = new Set(['cookie', 'set-cookie', 'authorization', 'proxy-authorization', 'x-csrf-token']);
 /** Body and query fields that hold passwords or one-time tokens, at whatever depth they are logged. */
-const SECRET_FIELDS = ['password', 'newPassword', 'currentPassword', 'token', 'csrfToken', 'secret'];
+const SECRET_FIELDS = [
+  'password',
+  'newPassword',
+  'currentPassword',
+  'token',
+  'csrfToken',
+  'secret',
+  'codes',
+  'secretGroups',
+  'otpauthUri',
+  'qrDataUrl',
+];
 const SECRET_QUERY_NAME = /token|password|secret/i;
 /** Paths that carry a one-time token as a segment (an invitation preview; `accept` is a route). */
 const TOKEN_IN_PATH = /^(\/api\/auth\/invitations\/)(?!accept(?:$|[/?#]))[^/?#]+/;

@@ -1,4 +1,5 @@
 import type { Tx } from '@layerbook/db';
+import { Client } from 'pg';
 import PgBoss from 'pg-boss';
 import type { Logger } from 'pino';
 import type { Config } from '../config';
@@ -22,18 +23,20 @@ export async function startQueue(config: Config, logger: Logger): Promise<Starte
   const boss = new PgBoss({ connectionString: config.DATABASE_JOBS_URL, schema: 'pgboss', max: 4, application_name: 'layerbook-jobs' });
   boss.on('error', (err) => logger.error({ err }, 'job queue error'));
   await boss.start();
-  for (const { name, options } of QUEUE_OPTIONS) {
-    const existing = await boss.getQueue(name);
-    if (existing) await boss.updateQueue(name, { name, ...options });
-    else await boss.createQueue(name, { name, ...options });
-  }
-  // The web role enqueues inside its own transactions, so it needs to insert jobs (and read queue policy).
-  await boss.getDb().executeSql(
-    `GRANT USAGE ON SCHEMA pgboss TO layerbook_app;
-     GRANT SELECT ON ALL TABLES IN SCHEMA pgboss TO layerbook_app;
-     GRANT INSERT ON pgboss.job TO layerbook_app;`,
-    [],
-  );
+  await oneProcessAtATime(config, async () => {
+    for (const { name, options } of QUEUE_OPTIONS) {
+      const existing = await boss.getQueue(name);
+      if (existing) await boss.updateQueue(name, { name, ...options });
+      else await boss.createQueue(name, { name, ...options });
+    }
+    // The web role enqueues inside its own transactions, so it needs to insert jobs (and read queue policy).
+    await boss.getDb().executeSql(
+      `GRANT USAGE ON SCHEMA pgboss TO layerbook_app;
+       GRANT SELECT ON ALL TABLES IN SCHEMA pgboss TO layerbook_app;
+       GRANT INSERT ON pgboss.job TO layerbook_app;`,
+      [],
+    );
+  });
   let running = 0;
   return {
     boss,
@@ -84,4 +87,20 @@ interface PoolLike {
   waitingCount: number;
   idleCount: number;
   totalCount: number;
+}
+
+/**
+ * Several processes starting together on a fresh database would create the same queues (each a
+ * partition table) and grant at once, and deadlock; an advisory lock held on a connection of its own
+ * lets them set up one after another.
+ */
+async function oneProcessAtATime(config: Config, setUp: () => Promise<void>): Promise<void> {
+  const client = new Client({ connectionString: config.DATABASE_JOBS_URL, application_name: 'layerbook-queue-setup' });
+  await client.connect();
+  try {
+    await client.query(`select pg_advisory_lock(hashtext('layerbook-queue-setup'))`);
+    await setUp();
+  } finally {
+    await client.end();
+  }
 }

@@ -20,7 +20,7 @@ const cache = new WeakMap<Config, Keys>();
 function keysFor(config: Config): Keys {
   const known = cache.get(config);
   if (known) return known;
-  const root = (config as Config & { SECOND_FACTOR_KEY?: string }).SECOND_FACTOR_KEY ?? config.SESSION_SECRET;
+  const root = config.SECOND_FACTOR_KEY ?? config.SESSION_SECRET;
   const derive = (info: string) => Buffer.from(hkdfSync('sha256', root, 'layerbook', info, 32));
   const keys = { seal: derive('second-factor secret v1'), codes: derive('second-factor recovery codes v1') };
   cache.set(config, keys);
