@@ -33,4 +33,4 @@ for (const app of process.argv.slice(2)) {
   }
 }
 const kB = (n) => `${(n / 1024).toFixed(0)} kB`;
-console.log(`Compressed ${totals.files} files: ${kB(totals.raw)} raw, ${kB(totals.br)} brotli, ${kB(totals.gz)} gzip.`);
+process.stdout.write(`Compressed ${totals.files} files: ${kB(totals.raw)} raw, ${kB(totals.br)} brotli, ${kB(totals.gz)} gzip.\n`);
