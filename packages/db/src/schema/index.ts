@@ -14,3 +14,4 @@ export * from './audit';
 export * from './mail';
 export * from './payments';
 export * from './rate-limit';
+export * from './cash';
