@@ -148,6 +148,10 @@ export const invoices = pgTable(
     index('invoices_job_idx').on(t.tenantId, t.jobId),
     index('invoices_client_idx').on(t.tenantId, t.clientId),
     index('invoices_open_due_idx').on(t.tenantId, t.status, t.dueOn),
+    // the list's open and overdue filters, newest first, without stepping over paid and void ones
+    index('invoices_open_created_idx')
+      .on(t.tenantId, t.createdAt, t.id)
+      .where(sql`status in ('issued', 'part_paid')`),
     tenantPolicy('invoices'),
   ],
 );

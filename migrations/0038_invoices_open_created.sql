@@ -1,0 +1,1 @@
+CREATE INDEX "invoices_open_created_idx" ON "invoices" USING btree ("tenant_id","created_at","id") WHERE status in ('issued', 'part_paid');
