@@ -2,5 +2,6 @@ export * as schema from './schema';
 export * from './schema';
 export * from './client';
 export * from './tenant/scoped';
+export * from './tenant/one-trip';
 export * from './migrate';
 export { sql, eq, and, or, desc, asc, isNull, isNotNull, inArray, gt, lt, gte, lte } from 'drizzle-orm';

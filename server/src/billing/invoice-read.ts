@@ -86,7 +86,7 @@ const FILTERS: Record<InvoiceListQuery['filter'], string> = {
   void: `and i.status = 'void'`,
 };
 
-type ListRow = SummaryRow & { created_at_text: string };
+export type InvoiceListRow = SummaryRow & { created_at_text: string };
 
 /**
  * The firm's invoices, newest first, keyset over (created_at, id): one statement. The page is cut
@@ -120,12 +120,11 @@ export function buildInvoiceListQuery(tenantId: string, q: InvoiceListQuery, now
   return { text, values };
 }
 
-export async function listInvoices(tx: TenantTx, q: InvoiceListQuery, now: Date): Promise<KeysetPage<InvoiceSummary>> {
-  const { text, values } = buildInvoiceListQuery(tx.tenantId, q, now);
-  const { rows } = await tx.client.query<ListRow>(text, values);
-  const page = rows.slice(0, q.limit);
+/** The page the list query's rows make: it asks for one row more than the page, which says there is a next one. */
+export function invoicePage(rows: InvoiceListRow[], limit: number): KeysetPage<InvoiceSummary> {
+  const page = rows.slice(0, limit);
   const last = page[page.length - 1];
-  return { items: page.map(toSummary), nextCursor: rows.length > q.limit && last ? encodeCursor(last.created_at_text, last.id) : null };
+  return { items: page.map(toSummary), nextCursor: rows.length > limit && last ? encodeCursor(last.created_at_text, last.id) : null };
 }
 
 /** Summaries of one job's invoices, newest first. */

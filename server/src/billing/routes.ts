@@ -9,6 +9,7 @@ import {
   type BillingSettingsView,
   type BillingToday,
   type InvoiceDetail,
+  type InvoiceListQuery,
   type InvoiceSummary,
   type KeysetPage,
 } from '@layerbook/contracts';
@@ -16,10 +17,10 @@ import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { staffActor } from '../http/actor';
-import { withStaff } from '../http/guards';
+import { readAsStaff, withStaff } from '../http/guards';
 import { parse, parseChanges } from '../http/validate';
 import { deleteDraft, updateDraft } from './draft-edits';
-import { getInvoice, listInvoices } from './invoice-read';
+import { buildInvoiceListQuery, getInvoice, type InvoiceListRow, invoicePage } from './invoice-read';
 import { issueInvoice } from './issue';
 import { recordOfflinePayment } from './offline-payments';
 import { enqueueReceiptMail } from '../payments/receipt-mail';
@@ -53,8 +54,15 @@ export function invoiceRoutes(ctx: AppContext): Router {
   const deps = { queue: ctx.queue, config: ctx.config };
 
   router.get('/', async (req, res) => {
-    const page = await withStaff(ctx, req, 'office', (tx) => listInvoices(tx, parse(invoiceListQuery, req.query), ctx.now()));
-    res.json(page satisfies KeysetPage<InvoiceSummary>);
+    // The busiest read: the person's re-check and the page in one round trip.
+    const { input, rows } = await readAsStaff<InvoiceListQuery, InvoiceListRow>(
+      ctx,
+      req,
+      'office',
+      () => parse(invoiceListQuery, req.query),
+      (tenantId, q) => buildInvoiceListQuery(tenantId, q, ctx.now()),
+    );
+    res.json(invoicePage(rows, input.limit) satisfies KeysetPage<InvoiceSummary>);
   });
 
   router.get('/:id', async (req, res) => {

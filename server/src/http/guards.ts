@@ -1,5 +1,5 @@
 import { roleAtLeast, StaffRole } from '@layerbook/contracts';
-import { TenantTx, withTenantAndFirst } from '@layerbook/db';
+import { readInOneTrip, type SqlQuery, TenantTx, withTenantAndFirst } from '@layerbook/db';
 import type { Request } from 'express';
 import { clientRowSql, toClientPrincipal } from '../auth/portal-auth';
 import { staffRowSql, toStaffPrincipal } from '../auth/staff-principal';
@@ -39,6 +39,40 @@ export async function withStaff<T>(
     if (!roleAtLeast(staff.role, needed)) throw forbidden();
     return fn(tx, staff);
   });
+}
+
+/**
+ * withStaff for a plain read, in ONE round trip (readInOneTrip): the person's re-check and the query
+ * go together, and the rows are handed back only once the person checks out. `input` parses the
+ * request and `build` makes the query from it; what they throw (a 400 naming the field) still comes
+ * after the 401 or 403, as in withStaff.
+ */
+export async function readAsStaff<I, R = Record<string, unknown>>(
+  ctx: AppContext,
+  req: Request,
+  needed: StaffRole,
+  input: () => I,
+  build: (tenantId: string, input: I) => SqlQuery,
+): Promise<{ staff: StaffPrincipal; input: I; rows: R[] }> {
+  const claim = req.user;
+  if (!claim || claim.kind !== 'staff') throw unauthorized();
+  let parsed: I;
+  let read: SqlQuery;
+  try {
+    parsed = input();
+    read = build(claim.tenantId, parsed);
+  } catch (error) {
+    await withStaff(ctx, req, needed, () => Promise.resolve());
+    throw error;
+  }
+  const { first, rows } = await readInOneTrip(ctx.pool, claim.tenantId, staffRowSql(claim.tenantId, claim.id, sessionIdOf(req)), read);
+  const staff = toStaffPrincipal(claim.tenantId, claim.id, first[0] as unknown as Parameters<typeof toStaffPrincipal>[2]);
+  if (!staff) {
+    ended(req);
+    throw unauthorized('Your access has ended. Sign in again, or ask the owner.');
+  }
+  if (!roleAtLeast(staff.role, needed)) throw forbidden();
+  return { staff, input: parsed, rows: rows as R[] };
 }
 
 export async function withClient<T>(ctx: AppContext, req: Request, fn: (tx: TenantTx, client: ClientPrincipal) => Promise<T>): Promise<T> {

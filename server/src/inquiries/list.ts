@@ -42,9 +42,10 @@ export function buildListQuery(tenantId: string, q: InquiryListQuery): { text: s
   return { text, values };
 }
 
-export async function listInquiries(tx: TenantTx, q: InquiryListQuery, today: string): Promise<KeysetPage<InquirySummary>> {
-  const { text, values } = buildListQuery(tx.tenantId, q);
-  const { rows } = await tx.client.query<ListRow>(text, values);
+export type InquiryListRow = ListRow;
+
+/** The page the list query's rows make: it asks for one row more than the page, which says there is a next one. */
+export function inquiryPage(rows: InquiryListRow[], q: InquiryListQuery, today: string): KeysetPage<InquirySummary> {
   const page = rows.slice(0, q.limit);
   const last = page[page.length - 1];
   const sortKey = SORTS[q.sort].text;

@@ -12,6 +12,7 @@ import {
   type ClientMatch,
   type InquiryConversion,
   type InquiryDetail,
+  type InquiryListQuery,
   type InquirySummary,
   type ItemList,
   type KeysetPage,
@@ -21,14 +22,14 @@ import {
 import { Router } from 'express';
 import type { AppContext } from '../context';
 import { staffActor } from '../http/actor';
-import { withStaff } from '../http/guards';
+import { readAsStaff, withStaff } from '../http/guards';
 import type { StaffPrincipal } from '../http/principal';
 import { parse, parseChanges } from '../http/validate';
 import { clientMatchesOfInquiry } from './client-matches';
 import { staffClock } from './clock';
 import { convertInquiry } from './convert';
 import { getInquiry } from './detail';
-import { getBoard, getToday, listInquiries } from './list';
+import { buildListQuery, getBoard, getToday, type InquiryListRow, inquiryPage } from './list';
 import { addActivity, createInquiry, moveStage, updateInquiry } from './service';
 import { listStageLikelihoods, saveStageLikelihoods } from './stage-settings';
 
@@ -39,8 +40,15 @@ export function inquiryRoutes(ctx: AppContext): Router {
   const today = (staff: StaffPrincipal) => clock(staff).today;
 
   router.get('/', async (req, res) => {
-    const page = await withStaff(ctx, req, 'office', (tx, staff) => listInquiries(tx, parse(inquiryListQuery, req.query), today(staff)));
-    res.json(page satisfies KeysetPage<InquirySummary>);
+    // The busiest read: the person's re-check and the page in one round trip.
+    const { staff, input, rows } = await readAsStaff<InquiryListQuery, InquiryListRow>(
+      ctx,
+      req,
+      'office',
+      () => parse(inquiryListQuery, req.query),
+      buildListQuery,
+    );
+    res.json(inquiryPage(rows, input, today(staff)) satisfies KeysetPage<InquirySummary>);
   });
 
   router.get('/board', async (req, res) => {
