@@ -15,11 +15,13 @@ export const DEFAULT_SIGNING_DAYS = 14;
 
 /**
  * Open invoices' amounts owed and unbilled schedule lines, each summed per date (the forecast adds
- * them up per week, so a day's sum counts the same as its rows); $1 tenant.
+ * them up per week, so a day's sum counts the same as its rows); $1 tenant. What is owed comes from
+ * the open balances the database keeps per client and due date (cash_open_balances: issued, part
+ * paid or refunded invoices with total − paid − credited > 0; issuing always sets the due date).
  */
-export const OWED = `select 'i' as kind, i.due_on::text as date, sum(i.total - i.amount_paid - i.amount_credited)::text as amount from invoices i
-      where i.tenant_id = $1 and i.status in ('issued', 'part_paid', 'refunded') and i.total - i.amount_paid - i.amount_credited > 0
-      group by i.due_on
+export const OWED = `select 'i' as kind, b.due_on::text as date, sum(b.owed)::text as amount from cash_open_balances b
+      where b.tenant_id = $1
+      group by b.due_on
      union all
      select 's', l.expected_on::text, sum(l.amount)::text from payment_schedule_lines l
        join jobs j on j.tenant_id = l.tenant_id and j.id = l.job_id

@@ -57,18 +57,42 @@ const OWED_AS_OF = `with ${RETAINAGE('and i.issued_on <= $2::date')},
 
 const owed = (past: boolean) => (past ? OWED_AS_OF : OWED_NOW);
 
+/** The age of a due date: $3–$6 the first due date of the ages 'current', '1-30', '31-60' and '61-90'; anything older is '90+'. */
+const AGE = (due: string) =>
+  `case when ${due} >= $3::date then 0 when ${due} >= $4::date then 1 when ${due} >= $5::date then 2 when ${due} >= $6::date then 3 else 4 end`;
+
 /**
- * Per client and age, summed: $3–$6 the first due date of the ages 'current', '1-30', '31-60' and
- * '61-90' (packages/domain's bucketDueDates); anything older is '90+'. The latest due date in each
- * sum stands for it (every date in one age ages the same).
+ * As of a past date, per client and age, summed from the base tables: $3–$6 as in AGE (packages/domain's
+ * bucketDueDates). The latest due date in each sum stands for it (every date in one age ages the same).
  */
-export const receivablesByClientAge = (past: boolean) => `${owed(past)}
+const RECEIVABLES_AS_OF = `${OWED_AS_OF}
   select o.client_id, c.name as client_name, max(o.due_on)::text as due_on, sum(o.owed)::text as owed,
          sum(o.retainage)::text as retainage, count(*)::int as invoice_count
     from owed_rows o join clients c on c.tenant_id = $1 and c.id = o.client_id
-   group by o.client_id, c.name,
-            case when o.due_on >= $3::date then 0 when o.due_on >= $4::date then 1 when o.due_on >= $5::date then 2
-                 when o.due_on >= $6::date then 3 else 4 end`;
+   group by o.client_id, c.name, ${AGE('o.due_on')}`;
+
+/**
+ * As of today or later, the same sums from the open balances the database keeps per client and due
+ * date (cash_open_balances, kept by a trigger on invoices), plus the retainage still held, read from
+ * the progress jobs' invoices as above. An invoice holding retainage that is also owed on is already
+ * counted in its balance row (same client and due date, so the same sum); only the others add to the count.
+ */
+const RECEIVABLES_KEPT = `with ${RETAINAGE('')},
+  owed_rows as (
+    select b.client_id, b.due_on, b.owed, 0 as retainage, b.invoice_count from cash_open_balances b
+     where b.tenant_id = $1 and $2::date is not null
+    union all
+    select i.client_id, i.due_on, 0, r.amount,
+           case when i.status in ${OPEN} and i.total - i.amount_paid - i.amount_credited > 0 then 0 else 1 end
+      from retainage r join invoices i on i.tenant_id = $1 and i.id = r.id
+     where i.due_on is not null and r.amount > 0)
+  select o.client_id, c.name as client_name, max(o.due_on)::text as due_on, sum(o.owed)::text as owed,
+         sum(o.retainage)::text as retainage, sum(o.invoice_count)::int as invoice_count
+    from owed_rows o join clients c on c.tenant_id = $1 and c.id = o.client_id
+   group by o.client_id, c.name, ${AGE('o.due_on')}`;
+
+/** Per client and age, summed ($1 tenant, $2 as-of date, $3–$6 as in AGE). */
+export const receivablesByClientAge = (past: boolean) => (past ? RECEIVABLES_AS_OF : RECEIVABLES_KEPT);
 
 /** One row per open invoice: $3 a client or null, $4–$5 due dates from and to (either null: no bound). */
 export const receivableInvoices = (past: boolean) => `${owed(past)}
