@@ -74,24 +74,21 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
   const dueOn = dueDate(issuedOn, job.billing_terms.terms);
   const document = await invoiceDocument(tx, job.id, job.billing_terms, settings);
   const words = await frozenWords(tx, inv);
+  // Everything but what the firm's kept figures read (status, due date, total: cash's triggers), so
+  // the rows those triggers lock are taken only by the last statement below, with the number.
   await tx.client.query(
-    `update invoices set status = $11, issued_on = $3, due_on = $4, document = $5, deposit_credit = $6,
-            total = $7, tax_included = $8, issued_by = $9, issued_at = $10, updated_at = $10, lines = $12, progress = $13
+    `update invoices set issued_on = $3, document = $4, deposit_credit = $5, tax_included = $6, issued_by = $7, issued_at = $8,
+            updated_at = $8, lines = $9, progress = $10
       where tenant_id = $1 and id = $2`,
     [
       tx.tenantId,
       id,
       issuedOn,
-      dueOn,
       JSON.stringify(document),
       credit.toFixed(2),
-      total.toFixed(2),
       tax.toFixed(2),
       actor.userId,
       now,
-      // Nothing due (no work this period, or all of it taken by the deposit credit): no payment can
-      // follow, so it is paid as issued, never overdue nor reminded.
-      total.isZero() ? 'paid' : 'issued',
       JSON.stringify(words.lines),
       words.progress === null ? null : JSON.stringify(words.progress),
     ],
@@ -104,7 +101,13 @@ export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, 
     ]);
   }
   // The number last: every issuer of the firm waits on the counter from here to commit.
-  const { text: numberText } = await takeInvoiceNumber(tx, id, settings.invoicePrefix);
+  const { text: numberText } = await takeInvoiceNumber(tx, id, settings.invoicePrefix, {
+    // Nothing due (no work this period, or all of it taken by the deposit credit): no payment can
+    // follow, so it is paid as issued, never overdue nor reminded.
+    status: total.isZero() ? 'paid' : 'issued',
+    dueOn,
+    total: total.toFixed(2),
+  });
   await recordAudit(tx, {
     actorUserId: actor.userId,
     actorKind: actor.kind,
