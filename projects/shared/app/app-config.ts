@@ -7,8 +7,6 @@ import {
   provideBrowserGlobalErrorListeners,
   provideZonelessChangeDetection,
 } from '@angular/core';
-import { MAT_FORM_FIELD_DEFAULT_OPTIONS } from '@angular/material/form-field';
-import { MAT_ICON_DEFAULT_OPTIONS } from '@angular/material/icon';
 import { provideClientHydration, withEventReplay, withHttpTransferCacheOptions } from '@angular/platform-browser';
 import { Routes, provideRouter, withComponentInputBinding } from '@angular/router';
 import { apiInterceptorFor } from '../http/api-interceptor';
@@ -39,11 +37,9 @@ export function appConfigFor(
           filter: (req) => !isSessionCall(req.url, settings),
         }),
       ),
-      { provide: MAT_ICON_DEFAULT_OPTIONS, useValue: { fontSet: 'material-symbols-outlined' } },
-      {
-        provide: MAT_FORM_FIELD_DEFAULT_OPTIONS,
-        useValue: { appearance: 'outline', subscriptSizing: 'dynamic' },
-      },
+      // No Material defaults here: they would pull Material's code into the first load. Field
+      // defaults are provided where fields live (field-defaults.ts); icons need none, the global
+      // styles give Material's default icon class the bundled symbols font (_layerbook.scss).
       provideI18n(),
       ...appProviders,
     ],

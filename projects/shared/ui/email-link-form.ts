@@ -11,6 +11,7 @@ import { Submission } from '../forms/submission';
 import { requiredText } from '../forms/text-validators';
 import { TranslatePipe } from '@ngx-translate/core';
 import { FormAlert } from './form-alert';
+import { provideFieldDefaults } from '../app/field-defaults';
 
 /**
  * "E-mail me a link": one address field and a button, used where a person gets a one-time link
@@ -20,6 +21,7 @@ import { FormAlert } from './form-alert';
  */
 @Component({
   selector: 'lb-email-link-form',
+  providers: [provideFieldDefaults()],
   imports: [FieldErrorPipe, FormAlert, MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, TranslatePipe],
   template: `
     <form [formGroup]="form" (ngSubmit)="requestLink()" novalidate>

@@ -1,6 +1,22 @@
-import { Routes } from '@angular/router';
+import { EnvironmentInjector, inject, runInInjectionContext } from '@angular/core';
+import { ResolveFn, Routes } from '@angular/router';
 import { signedInGuard, signedOutGuard } from './core/auth/guards';
-import { firmLookupResolver, firmNameResolver } from './features/inquiry/firm-lookup';
+import type { FirmLookup } from './features/inquiry/firm-lookup';
+
+type FirmLookupModule = typeof import('./features/inquiry/firm-lookup');
+
+/** A resolver whose code loads with the page that needs it, not with every page's first load. */
+function lazyResolver(pick: (module: FirmLookupModule) => ResolveFn<FirmLookup>): ResolveFn<FirmLookup> {
+  return (route, state) => {
+    const injector = inject(EnvironmentInjector);
+    return import('./features/inquiry/firm-lookup').then((module) =>
+      // Both firm-lookup resolvers answer with a promise.
+      runInInjectionContext(injector, () => pick(module)(route, state) as Promise<FirmLookup>),
+    );
+  };
+}
+const firmLookupResolver = lazyResolver((module) => module.firmLookupResolver);
+const firmNameResolver = lazyResolver((module) => module.firmNameResolver);
 
 export const routes: Routes = [
   { path: '', pathMatch: 'full', redirectTo: 'projects' },

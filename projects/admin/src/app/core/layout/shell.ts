@@ -16,12 +16,14 @@ import { Session } from '../auth/session';
 import { toProblem } from '../errors/problem';
 import { Wordmark } from '../../shared/ui/wordmark';
 import { NAV_ITEMS } from './nav-items';
+import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 
 /** Phones and small tablets get the navigation as an overlay (crew read job sheets on site). */
 const NARROW = '(max-width: 959.98px)';
 
 @Component({
   selector: 'lb-shell',
+  providers: [provideFieldDefaults()],
   imports: [
     MatButtonModule,
     MatIconModule,

@@ -1,4 +1,5 @@
 import { Routes } from '@angular/router';
+import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 import { signedOutGuard } from '../../core/auth/guards';
 
 const routes: Routes = [
@@ -49,4 +50,5 @@ const routes: Routes = [
   },
 ];
 
-export default routes;
+// The signed-out pages sit outside the shell, which provides the field defaults to signed-in pages.
+export default [{ path: '', providers: [provideFieldDefaults()], children: routes }] satisfies Routes;

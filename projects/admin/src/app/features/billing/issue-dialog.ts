@@ -15,6 +15,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { InvoiceApi } from './invoice-api';
 import { TranslatePipe } from '@ngx-translate/core';
+import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 
 export interface IssueDialogData {
   readonly invoice: InvoiceDetail;
@@ -41,7 +42,7 @@ export interface IssueResult {
     MoneyPipe,
     ReactiveFormsModule,
   ],
-  providers: [provideNativeDateAdapter()],
+  providers: [provideNativeDateAdapter(), provideFieldDefaults()],
   template: `
     <h2 mat-dialog-title>{{ 'billing.issueDialog.issueThisInvoice' | translate }}</h2>
     <form [formGroup]="form" (ngSubmit)="issue()" novalidate>

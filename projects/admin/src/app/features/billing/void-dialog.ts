@@ -12,6 +12,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { InvoiceApi } from './invoice-api';
 import { TranslatePipe } from '@ngx-translate/core';
+import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 
 export interface VoidDialogData {
   readonly invoice: InvoiceDetail;
@@ -20,6 +21,7 @@ export interface VoidDialogData {
 /** Voids an issued invoice with a reason; a numbered credit note cancels it. Closes with the voided invoice, or nothing. */
 @Component({
   selector: 'lb-void-dialog',
+  providers: [provideFieldDefaults()],
   imports: [TranslatePipe, FormAlert, MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, MoneyPipe, ReactiveFormsModule],
   template: `
     <h2 mat-dialog-title>{{ 'billing.voidDialog.void' | translate: { number: data.invoice.number } }}</h2>

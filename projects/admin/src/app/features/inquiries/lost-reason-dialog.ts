@@ -8,6 +8,7 @@ import { TranslatePipe } from '@ngx-translate/core';
 import { INQUIRY_LIMITS } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
 import { requiredText } from '../../shared/forms/text-validators';
+import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 
 export interface LostReasonData {
   readonly contactName: string;
@@ -16,6 +17,7 @@ export interface LostReasonData {
 /** Asks why an inquiry was lost before it is marked so; closes with the reason, or nothing. */
 @Component({
   selector: 'lb-lost-reason-dialog',
+  providers: [provideFieldDefaults()],
   imports: [MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, TranslatePipe],
   template: `
     <h2 mat-dialog-title id="lost-title">{{ 'inquiries.lostDialog.title' | translate: { name: data.contactName } }}</h2>

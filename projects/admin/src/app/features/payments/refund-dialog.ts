@@ -25,6 +25,7 @@ import { paymentParts, refundSplit } from './payment-money';
 import { REFUND_CHOICE_WORDS, refundSplitWords } from './payment-words';
 import { defaultRefundMethod, refundAmountCheck, refundMethods } from './refund-input';
 import { TranslatePipe } from '@ngx-translate/core';
+import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 
 export interface RefundDialogData {
   readonly payment: PaymentDetail;
@@ -53,7 +54,7 @@ export interface RefundDialogData {
     MoneyPipe,
     ReactiveFormsModule,
   ],
-  providers: [provideNativeDateAdapter()],
+  providers: [provideNativeDateAdapter(), provideFieldDefaults()],
   templateUrl: './refund-dialog.html',
   styleUrl: './refund-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -10,10 +10,12 @@ import { problemMessage, toProblem } from '../errors/problem';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { Wordmark } from '../../shared/ui/wordmark';
 import { LanguageMenu } from './language-menu';
+import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 
 /** The frame around a signed-in client's pages: whose portal this is, and a way out. */
 @Component({
   selector: 'lb-portal-shell',
+  providers: [provideFieldDefaults()],
   imports: [
     FormAlert,
     MatButtonModule,

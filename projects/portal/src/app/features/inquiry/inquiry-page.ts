@@ -32,6 +32,7 @@ import { typedBeforeHydration } from './typed-before-hydration';
 import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { SayPipe } from '../../../../../shared/errors/say-pipe';
 import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
+import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 
 const FORM_ID = 'inquiry-form';
 const CHECK_FIELDS = 'inquiry.page.checkFields';
@@ -45,6 +46,7 @@ const REPLAYED = 101;
  */
 @Component({
   selector: 'lb-inquiry-page',
+  providers: [provideFieldDefaults()],
   imports: [
     FieldErrorPipe,
     FormAlert,
