@@ -6,6 +6,8 @@ source "$(dirname "$0")/env.sh"
 cd "$LB_ROOT"
 # Each app's words, merged per language for the build (projects/*/src/i18n, projects/shared/i18n/words).
 node ops/i18n/merge.mjs
+# The icon font cut to the icons the apps use (projects/shared-styles/fonts; unchanged unless the icons are).
+node ops/build/subset-icons.mjs
 stale() { # $1 = built file; stale when missing or older than any source it is built from
   [ ! -f "$1" ] && return 0
   [ -n "$(find projects packages/contracts packages/domain angular.json package-lock.json -newer "$1" -type f -print -quit 2>/dev/null)" ]

@@ -2,9 +2,10 @@
 module.exports = {
   displayName: 'server',
   testEnvironment: 'node',
-  // ops/backup holds the backup round trip (it drives ops/backup.sh and ops/restore.sh); nothing else under ops/ is a test.
+  // ops/backup holds the backup round trip (it drives ops/backup.sh and ops/restore.sh), ops/build the icon font's
+  // check (ops/build/subset-icons.spec.ts); nothing else under ops/ is a test.
   roots: ['<rootDir>/src', '<rootDir>/../ops'],
-  testMatch: ['<rootDir>/src/**/*.spec.ts', '<rootDir>/../ops/backup/**/*.spec.ts'],
+  testMatch: ['<rootDir>/src/**/*.spec.ts', '<rootDir>/../ops/backup/**/*.spec.ts', '<rootDir>/../ops/build/**/*.spec.ts'],
   transform: { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json' }] },
   globalSetup: '<rootDir>/src/testing/global-setup.ts',
   testTimeout: 30000,
