@@ -12,7 +12,7 @@ import type {
   ProgressTable,
 } from '@layerbook/contracts';
 import type { InvoiceListQuery } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
+import { isoUtcText, type TenantTx } from '@layerbook/db';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
 import { notFound } from '../http/problem';
 import { listInvoiceCredits, listInvoicePayments } from '../payments/payment-read';
@@ -21,9 +21,6 @@ import { invoiceDocument } from './document';
 import { moneyOut } from './money';
 import { loadBillingSettings } from './settings';
 
-/** created_at as the ISO text the API answers (what Date#toISOString prints), made by PostgreSQL: no Date per row. */
-const ISO_CREATED_AT = `to_char(i.created_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`;
-
 /**
  * An invoice summary's columns; `$today` is the firm-local day the query is given, so whether an
  * invoice is overdue is decided in the same statement.
@@ -31,7 +28,7 @@ const ISO_CREATED_AT = `to_char(i.created_at at time zone 'UTC', 'YYYY-MM-DD"T"H
 export const summaryColumns = (today: string) => `i.id, i.number_text, i.kind, i.status, i.job_id, j.title as job_title, i.client_id,
   c.name as client_name, i.issued_on::text as issued_on, i.due_on::text as due_on, i.currency, i.total::text as total,
   (case when i.status = 'void' then 0 else i.total - i.amount_paid - i.amount_credited end)::text as amount_due, i.origin,
-  ${ISO_CREATED_AT} as created_at,
+  ${isoUtcText('i.created_at')} as created_at,
   (i.status in ('issued', 'part_paid') and i.due_on < ${today}::date) as is_overdue`;
 
 export const SUMMARY_FROM = `from invoices i join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id

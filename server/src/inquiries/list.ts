@@ -65,8 +65,9 @@ export async function getBoard(tx: TenantTx, clock: FirmClock, perColumn = 50): 
   );
   const countOf = new Map(counts.map((c) => [c.stage, c.n]));
   const { rows } = await tx.client.query<SummaryRow>(
-    `select * from (select ${SUMMARY_COLUMNS}, row_number() over (partition by i.stage order by i.created_at desc, i.id desc) as rn
-       ${SUMMARY_FROM} where i.tenant_id = $1) ranked where rn <= $2 order by created_at desc, id desc`,
+    `select * from (select ${SUMMARY_COLUMNS}, i.created_at as board_at,
+                           row_number() over (partition by i.stage order by i.created_at desc, i.id desc) as rn
+       ${SUMMARY_FROM} where i.tenant_id = $1) ranked where rn <= $2 order by board_at desc, id desc`,
     [tx.tenantId, perColumn],
   );
   return {

@@ -1,9 +1,10 @@
+import { isoUtcText } from '@layerbook/db';
 import { isBudgetRange, isOpenStage, type InquiryDetail, type InquirySummary } from '@layerbook/contracts';
 
 /** Columns every inquiry listing selects (raw SQL, so the list stays one indexed query). */
 export const SUMMARY_COLUMNS = `i.id, i.contact_name, i.email, i.phone, i.site_address, i.stage, i.source, i.referrer_name,
   i.estimated_value::text as estimated_value, i.assignee_user_id, u.name as assignee_name,
-  i.next_follow_up::text as next_follow_up, i.created_at, i.created_at::text as created_at_text`;
+  i.next_follow_up::text as next_follow_up, ${isoUtcText('i.created_at')} as created_at, i.created_at::text as created_at_text`;
 
 export const SUMMARY_FROM = `from inquiries i left join users u on u.id = i.assignee_user_id`;
 
@@ -21,7 +22,8 @@ export interface SummaryRow {
   assignee_user_id: string | null;
   assignee_name: string | null;
   next_follow_up: string | null;
-  created_at: Date;
+  /** ISO 8601, UTC */
+  created_at: string;
   created_at_text: string;
 }
 
@@ -57,7 +59,7 @@ export function toSummary(r: SummaryRow, today: string): InquirySummary {
     assigneeName: r.assignee_name,
     nextFollowUp: r.next_follow_up,
     isFollowUpOverdue: isOpenStage(r.stage) && r.next_follow_up !== null && r.next_follow_up < today,
-    createdAt: r.created_at.toISOString(),
+    createdAt: r.created_at,
   };
 }
 
