@@ -1,10 +1,12 @@
 import { FetchBackend, HttpBackend } from '@angular/common/http';
-import { ApplicationConfig, inject, mergeApplicationConfig } from '@angular/core';
+import { ApplicationConfig, REQUEST_CONTEXT, inject, mergeApplicationConfig } from '@angular/core';
 import { RenderMode, ServerRoute, provideServerRendering, withRoutes } from '@angular/ssr';
 import { map } from 'rxjs';
 import { readFile } from 'node:fs/promises';
 import { transferable } from '../http/api-interceptor';
 import { TRANSLATION_FILES } from '../i18n/translation-loader';
+import { apiDispatchOf } from '../ssr/api-dispatch';
+import { InProcessBackend } from '../ssr/in-process-backend';
 
 /**
  * The app's merged words beside its browser files (`dist/<app>/browser/i18n/<lang>.json`; this code
@@ -36,10 +38,15 @@ const SERVER_ROUTES: ServerRoute[] = [{ path: '**', renderMode: RenderMode.Serve
  * The server's HTTP backend, seen before Angular's transfer cache looks at an answer (the cache
  * sits between the interceptors and the backend): answers lose the API's no-store and set-cookie,
  * so the page carries them to the browser instead of the browser fetching them again.
+ * When the host server gave a dispatcher (server/src/ssr/api-dispatch.ts), API calls go into its
+ * Express app in the same process (ssr/in-process-backend.ts); else over HTTP with fetch (the
+ * Angular CLI dev server, a bundle run on its own).
  */
 function transferableBackend(): HttpBackend {
   const fetchBackend = inject(FetchBackend);
-  return { handle: (req) => fetchBackend.handle(req).pipe(map(transferable)) };
+  const dispatch = apiDispatchOf(inject(REQUEST_CONTEXT, { optional: true }));
+  const backend = dispatch ? new InProcessBackend(dispatch, fetchBackend) : fetchBackend;
+  return { handle: (req) => backend.handle(req).pipe(map(transferable)) };
 }
 
 /** An app's browser configuration plus server rendering of its routes. */

@@ -2,6 +2,7 @@ import { AngularNodeAppEngine, createNodeRequestHandler, isMainModule, writeResp
 import express, { type Express, type Response as ExpressResponse } from 'express';
 import expressStaticGzip from 'express-static-gzip';
 import { randomBytes } from 'node:crypto';
+import { API_DISPATCH_KEY } from './api-dispatch';
 
 /** index.html carries this marker in `ngCspNonce`; every copy is swapped for the request's nonce. */
 const NONCE_PLACEHOLDER = '__LB_CSP_NONCE__';
@@ -60,7 +61,8 @@ export function createSsrApp(options: SsrAppOptions): Express {
   app.use((req, res, next) => {
     const cspNonce = nonceFor(res);
     angularApp
-      .handle(req, { ...options.requestContext?.(res), cspNonce })
+      // The host's in-process API dispatcher (see api-dispatch.ts), when it gave one.
+      .handle(req, { ...options.requestContext?.(res), cspNonce, [API_DISPATCH_KEY]: res.locals[API_DISPATCH_KEY] as unknown })
       .then((response) => {
         if (!response) {
           return next();

@@ -3,6 +3,7 @@ import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { RequestHandler } from 'express';
 import type { SsrHandlers } from '../app';
+import { withApiDispatch } from './api-dispatch';
 
 /** What each app's server.mjs exports for us. */
 interface SsrModule {
@@ -16,7 +17,8 @@ export async function loadSsrHandlers(rootDir: string): Promise<SsrHandlers> {
     if (!existsSync(file)) throw new Error(`${file} is missing: build the apps first (npm run build).`);
     // A real dynamic import (the Angular bundles are ES modules): node16 module resolution and esbuild's
     // CommonJS output both keep `import()` as it is for a path known only at run time.
-    return ((await import(pathToFileURL(file).href)) as SsrModule).reqHandler;
+    // Each render reaches the API in-process (api-dispatch.ts), not over loopback HTTP.
+    return withApiDispatch(((await import(pathToFileURL(file).href)) as SsrModule).reqHandler);
   };
   const [admin, portal] = await Promise.all([load('admin'), load('portal')]);
   return { admin, portal };

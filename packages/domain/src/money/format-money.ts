@@ -3,6 +3,7 @@
 // reference brings them to every program that compiles this file (apps and server target ES2022).
 import type Decimal from 'decimal.js';
 import { toMoney } from '../errors/input-checks';
+import { cachedNumberFormat } from '../units/intl-cache';
 import { minorUnitDigits } from './currency';
 
 /**
@@ -14,7 +15,7 @@ import { minorUnitDigits } from './currency';
 export function formatMoney(amount: string | Decimal, currency: string, locale: string): string {
   const digits = minorUnitDigits(currency);
   const exact = toMoney(amount, 'amount').toFixed() as Intl.StringNumericLiteral;
-  return new Intl.NumberFormat(locale, {
+  return cachedNumberFormat(locale, {
     style: 'currency',
     currency,
     minimumFractionDigits: digits,

@@ -1,4 +1,5 @@
 import { convertLength, type LengthUnit } from './length';
+import { cachedNumberFormat } from './intl-cache';
 
 /**
  * Numbers and lengths as people type them into the takeoff form: "9.5", "9,5" where the locale
@@ -17,7 +18,9 @@ export type DecimalMark = '.' | ',';
 /** The decimal mark of a BCP 47 locale ("de-DE" → ",", "en-US" → "."); unknown locales use the dot. */
 export function decimalMarkOf(locale: string | null | undefined): DecimalMark {
   try {
-    const part = new Intl.NumberFormat(locale ?? 'en-US').formatToParts(1.5).find((p) => p.type === 'decimal');
+    const part = cachedNumberFormat(locale ?? 'en-US')
+      .formatToParts(1.5)
+      .find((p) => p.type === 'decimal');
     return part?.value === ',' ? ',' : '.';
   } catch {
     return '.';

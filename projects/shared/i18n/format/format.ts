@@ -2,6 +2,7 @@
 // ES2023's Intl typings let NumberFormat take a numeric string (ECMA-402 NumberFormat v3), so a
 // decimal from the API is formatted exactly, never through a float.
 import { DomainInputError, formatMoney } from '@layerbook/domain';
+import { dateTimeFormat, numberFormat } from './intl-cache';
 
 export type DateStyle = 'short' | 'medium' | 'long' | 'full';
 
@@ -30,7 +31,7 @@ export function formatAmount(amount: string | null | undefined, currency: string
 export function formatCalendarDay(isoDay: string, locale: string, style: DateStyle = 'medium'): string {
   const date = CALENDAR_DAY.test(isoDay) ? new Date(`${isoDay}T00:00:00Z`) : new Date(Number.NaN);
   if (Number.isNaN(date.getTime())) return isoDay;
-  return new Intl.DateTimeFormat(locale, { dateStyle: style, timeZone: 'UTC' }).format(date);
+  return dateTimeFormat(locale, { dateStyle: style, timeZone: 'UTC' }).format(date);
 }
 
 /**
@@ -48,10 +49,10 @@ export function formatInstant(
   if (Number.isNaN(date.getTime())) return iso;
   const options: Intl.DateTimeFormatOptions = { dateStyle, ...(timeStyle ? { timeStyle } : {}), ...(timeZone ? { timeZone } : {}) };
   try {
-    return new Intl.DateTimeFormat(locale, options).format(date);
+    return dateTimeFormat(locale, options).format(date);
   } catch {
     // An unknown time zone name: the reader's own zone rather than a broken page.
-    return new Intl.DateTimeFormat(locale, { dateStyle, ...(timeStyle ? { timeStyle } : {}) }).format(date);
+    return dateTimeFormat(locale, { dateStyle, ...(timeStyle ? { timeStyle } : {}) }).format(date);
   }
 }
 
@@ -75,8 +76,8 @@ export function formatDate(
  */
 export function formatNumber(value: number | string | null | undefined, locale: string, options: Intl.NumberFormatOptions = {}): string {
   if (value === null || value === undefined || value === '') return '';
-  if (typeof value === 'number') return Number.isFinite(value) ? new Intl.NumberFormat(locale, options).format(value) : String(value);
+  if (typeof value === 'number') return Number.isFinite(value) ? numberFormat(locale, options).format(value) : String(value);
   const text = value.trim();
   if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(text)) return value;
-  return new Intl.NumberFormat(locale, options).format(text as Intl.StringNumericLiteral);
+  return numberFormat(locale, options).format(text as Intl.StringNumericLiteral);
 }

@@ -10,8 +10,11 @@ import { type DateStyle, formatAmount, formatDate, formatNumber } from './format
 export class LbMoneyPipe implements PipeTransform {
   private readonly language = inject(Language);
 
+  private readonly last = new LastAnswer();
+
   transform(amount: string | null | undefined, currency: string | null | undefined): string {
-    return formatAmount(amount, currency, this.language.locale());
+    const locale = this.language.locale();
+    return this.last.for([amount, currency, locale], () => formatAmount(amount, currency, locale));
   }
 }
 
@@ -24,8 +27,11 @@ export class LbMoneyPipe implements PipeTransform {
 export class LbDatePipe implements PipeTransform {
   private readonly language = inject(Language);
 
+  private readonly last = new LastAnswer();
+
   transform(value: string | null | undefined, style: DateStyle = 'medium', timeStyle?: DateStyle | null, timeZone?: string): string {
-    return formatDate(value, this.language.locale(), style, timeStyle, timeZone);
+    const locale = this.language.locale();
+    return this.last.for([value, style, timeStyle, timeZone, locale], () => formatDate(value, locale, style, timeStyle, timeZone));
   }
 }
 
@@ -37,8 +43,29 @@ export class LbDatePipe implements PipeTransform {
 export class LbNumberPipe implements PipeTransform {
   private readonly language = inject(Language);
 
+  private readonly last = new LastAnswer();
+
   transform(value: number | string | null | undefined, options?: Intl.NumberFormatOptions): string {
-    return formatNumber(value, this.language.locale(), options);
+    const locale = this.language.locale();
+    return this.last.for([value, options, locale], () => formatNumber(value, locale, options));
+  }
+}
+
+/**
+ * The pipes are impure (they follow a language switch), so they run on every check of their view:
+ * each keeps its last inputs and text and formats again only when one of them changed.
+ */
+class LastAnswer {
+  private inputs: readonly unknown[] | null = null;
+  private text = '';
+
+  for(inputs: readonly unknown[], format: () => string): string {
+    const previous = this.inputs;
+    if (previous === null || previous.length !== inputs.length || inputs.some((input, i) => !Object.is(input, previous[i]))) {
+      this.text = format();
+      this.inputs = inputs;
+    }
+    return this.text;
   }
 }
 

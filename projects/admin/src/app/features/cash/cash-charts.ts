@@ -8,6 +8,7 @@ import {
   type CashReceived,
 } from '@layerbook/contracts/types';
 import { monthLabel, weekLabel } from './cash-words';
+import { numberFormat } from '../../../../../shared/i18n/format/intl-cache';
 
 export type BarData = ChartData<'bar', number[], string>;
 
@@ -86,7 +87,7 @@ export function forecastChart(forecast: CashForecast): BarData {
 
 /** Options shared by the cash charts: amounts on the value axis in the firm's currency, legend only when there are several series. */
 export function barOptions(currency: string, locale: string, options: { stacked?: boolean; legend?: boolean } = {}): ChartOptions<'bar'> {
-  const money = new Intl.NumberFormat(locale, { style: 'currency', currency, maximumFractionDigits: 0 });
+  const money = numberFormat(locale, { style: 'currency', currency, maximumFractionDigits: 0 });
   return {
     responsive: true,
     maintainAspectRatio: false,

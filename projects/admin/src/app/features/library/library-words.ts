@@ -11,6 +11,7 @@ import {
   type ProductHazardsInput,
 } from '@layerbook/contracts/types';
 import { flammableClass } from '@layerbook/domain';
+import { numberFormat } from '../../../../../shared/i18n/format/intl-cache';
 
 /** Words to show: a key of the library's words (`library.…`) and its params, for `| translate: w.params`. */
 export interface Words {
@@ -49,7 +50,7 @@ export const WAIT_PICKS = [
 
 /** A number in the reader's language, at most two decimals ("6.5" / "6,5"). */
 export function numberText(n: number, locale: string): string {
-  return new Intl.NumberFormat(locale, { maximumFractionDigits: 2 }).format(n);
+  return numberFormat(locale, { maximumFractionDigits: 2 }).format(n);
 }
 
 /** A layer's wait, as the domain's waitText words it: "no wait", "16 h", "72 h (3 days)", "100 h (4 days 4 h)". */

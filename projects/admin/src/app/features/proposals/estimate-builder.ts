@@ -42,6 +42,7 @@ import { PriceSection } from './price-section';
 import { SafetySection } from './safety-section';
 import { ScheduleSection } from './schedule-section';
 import { SurfaceFinishes } from './surface-finishes';
+import { dateTimeFormat } from '../../../../../shared/i18n/format/intl-cache';
 
 type Shown =
   | { readonly source: 'server' | 'live'; readonly result: EstimateResultJson }
@@ -193,7 +194,7 @@ export class EstimateBuilder implements OnInit {
 
   protected readonly computedAt = computed(() => {
     const at = this.view()?.computedAt;
-    return at ? new Intl.DateTimeFormat(this.locale, { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(at)) : '';
+    return at ? dateTimeFormat(this.locale, { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(at)) : '';
   });
 
   /** The equipment lines as typed, for the safety section's scaffold warning. */

@@ -1,5 +1,6 @@
 import { ESTIMATE_STATUS_LABELS, MULTIPLIER_LABELS, type EstimateStatus, type MultiplierName } from '@layerbook/contracts/types';
 import { outlineFinish, roundedNumber, waitText, type FinishLayer } from '@layerbook/domain';
+import { dateTimeFormat, numberFormat } from '../../../../../shared/i18n/format/intl-cache';
 
 export const statusWord = (status: EstimateStatus): string => ESTIMATE_STATUS_LABELS[status];
 
@@ -28,19 +29,19 @@ export function finishOutlineText(layers: readonly FinishLayer[]): string {
 
 /** Ratios come as decimal strings ("0.5385"); Intl reads them exactly. */
 export function percentText(ratio: string, locale: string): string {
-  return new Intl.NumberFormat(locale, { style: 'percent', maximumFractionDigits: 1 }).format(ratio as unknown as number);
+  return numberFormat(locale, { style: 'percent', maximumFractionDigits: 1 }).format(ratio as unknown as number);
 }
 
 /** Hour of the day (8.5) as clock time in the viewer's locale ("8:30 AM"). */
 export function clockText(hourOfDay: number, locale: string): string {
   const minutes = Math.round(hourOfDay * 60);
   const date = new Date(Date.UTC(2000, 0, 1, 0, minutes));
-  return new Intl.DateTimeFormat(locale, { hour: 'numeric', minute: '2-digit', timeZone: 'UTC' }).format(date);
+  return dateTimeFormat(locale, { hour: 'numeric', minute: '2-digit', timeZone: 'UTC' }).format(date);
 }
 
 /** "Tue, Jun 10, 8:00 AM" for a calendar date and an hour of that day. */
 export function dayAndClock(isoDate: string, hourOfDay: number, locale: string): string {
-  const day = new Intl.DateTimeFormat(locale, { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(
+  const day = dateTimeFormat(locale, { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(
     new Date(`${isoDate}T00:00:00Z`),
   );
   return `${day}, ${clockText(hourOfDay, locale)}`;
@@ -48,7 +49,7 @@ export function dayAndClock(isoDate: string, hourOfDay: number, locale: string):
 
 /** "Tuesday, Jun 10". */
 export function dayWords(isoDate: string, locale: string): string {
-  return new Intl.DateTimeFormat(locale, { weekday: 'long', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(
+  return dateTimeFormat(locale, { weekday: 'long', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(
     new Date(`${isoDate}T00:00:00Z`),
   );
 }

@@ -1,4 +1,5 @@
 import type { ProposalTerms } from '@layerbook/contracts/types';
+import { listFormat } from '../../../../../shared/i18n/format/intl-cache';
 
 /** Words of the `proposals` area by key (without the area). */
 export type TermsSay = (key: string, params?: Readonly<Record<string, unknown>>) => string;
@@ -18,6 +19,6 @@ export function paymentTermsSentence(
   if (terms.depositPercent > 0) parts.push(say('terms.deposit', { percent: terms.depositPercent }));
   if (terms.progressPercent > 0) parts.push(say('terms.progress', { percent: terms.progressPercent }));
   parts.push(say(parts.length ? 'terms.rest' : 'terms.inFull'));
-  const list = new Intl.ListFormat(locale, { style: 'long', type: 'conjunction' }).format(parts);
+  const list = listFormat(locale, { style: 'long', type: 'conjunction' }).format(parts);
   return say('terms.sentence', { list: `${list.charAt(0).toLocaleUpperCase(locale)}${list.slice(1)}` });
 }

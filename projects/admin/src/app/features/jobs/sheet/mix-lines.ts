@@ -1,5 +1,6 @@
 import { dimensionOf, mixBatch } from '@layerbook/contracts/engine';
 import type { SheetLayer, SheetProduct, UnitSystem } from '@layerbook/contracts/types';
+import { numberFormat } from '../../../../../../shared/i18n/format/intl-cache';
 
 type MixRecipe = NonNullable<SheetLayer['recipe']>;
 
@@ -87,8 +88,6 @@ export function scaleMix(layer: SheetLayer, recipe: MixRecipe, batch: Batch, pro
 
 /** "1.42 L", "177.4 mL" in the reader's number format. */
 export function formatMetric(metric: MixLine['metric'], locale: string): string {
-  const number = new Intl.NumberFormat(locale, { minimumFractionDigits: metric.digits, maximumFractionDigits: metric.digits }).format(
-    metric.value,
-  );
+  const number = numberFormat(locale, { minimumFractionDigits: metric.digits, maximumFractionDigits: metric.digits }).format(metric.value);
   return `${number} ${metric.unit}`;
 }

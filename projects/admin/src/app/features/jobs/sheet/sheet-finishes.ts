@@ -4,6 +4,7 @@ import type { SheetFinish, SheetLayer, SheetProduct, UnitSystem } from '@layerbo
 import { Language } from '../../../../../../shared/i18n/language';
 import { MixCard } from './mix-card';
 import { formatNumber } from './sheet-format';
+import { numberFormat } from '../../../../../../shared/i18n/format/intl-cache';
 
 /** Each finish's layers in the order they go on: product, method, coats, coverage, share, wait, and a mix card. */
 @Component({
@@ -152,6 +153,6 @@ export class SheetFinishes {
   }
 
   protected percent(share: number): string {
-    return new Intl.NumberFormat(this.language.locale(), { style: 'percent', maximumFractionDigits: 1 }).format(share);
+    return numberFormat(this.language.locale(), { style: 'percent', maximumFractionDigits: 1 }).format(share);
   }
 }

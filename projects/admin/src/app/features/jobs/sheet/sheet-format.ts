@@ -1,5 +1,6 @@
 import { convertArea, convertLength } from '@layerbook/contracts/engine';
 import type { JobSheet, SheetSurface, UnitSystem } from '@layerbook/contracts/types';
+import { dateTimeFormat, numberFormat } from '../../../../../../shared/i18n/format/intl-cache';
 
 type LengthUnit = JobSheet['lengthUnit'];
 
@@ -10,7 +11,7 @@ export function displayLengthUnit(units: UnitSystem): LengthUnit {
 
 /** A number for people: the locale's separators, at most `digits` decimals. */
 export function formatNumber(value: number, locale: string, digits = 1): string {
-  return new Intl.NumberFormat(locale, { maximumFractionDigits: digits }).format(value);
+  return numberFormat(locale, { maximumFractionDigits: digits }).format(value);
 }
 
 export interface SurfaceSizes {
@@ -42,7 +43,7 @@ function wallClock(isoDate: string, hour: number): Date {
 
 /** "Tue 09:00": a day plan's time (firm-local already) in the reader's language. */
 export function formatPlanTime(isoDate: string, hour: number, locale: string): string {
-  return new Intl.DateTimeFormat(locale, {
+  return dateTimeFormat(locale, {
     weekday: 'short',
     hour: '2-digit',
     minute: '2-digit',
@@ -53,7 +54,7 @@ export function formatPlanTime(isoDate: string, hour: number, locale: string): s
 
 /** "09:30": an hour of the firm's working day. */
 export function formatHour(hour: number, locale: string): string {
-  return new Intl.DateTimeFormat(locale, { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone: 'UTC' }).format(
+  return dateTimeFormat(locale, { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone: 'UTC' }).format(
     wallClock('2000-01-01', hour),
   );
 }
@@ -62,13 +63,13 @@ export function formatHour(hour: number, locale: string): string {
 export function formatDay(isoDate: string, locale: string, style: 'medium' | 'full' = 'medium'): string {
   const date = new Date(`${isoDate}T00:00:00Z`);
   if (Number.isNaN(date.getTime())) return isoDate;
-  return new Intl.DateTimeFormat(locale, { dateStyle: style, timeZone: 'UTC' }).format(date);
+  return dateTimeFormat(locale, { dateStyle: style, timeZone: 'UTC' }).format(date);
 }
 
 /** Today's date where the firm works (a mark made at 23:30 on site is that day's, wherever the phone thinks it is). */
 export function todayIn(timeZone: string, now: Date): string {
   try {
-    const parts = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).formatToParts(now);
+    const parts = dateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).formatToParts(now);
     const part = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
     return `${part('year')}-${part('month')}-${part('day')}`;
   } catch {
