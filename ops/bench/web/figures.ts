@@ -11,7 +11,7 @@ export const kB = (bytes: number) => `${(bytes / 1000).toFixed(1)} kB`;
 export const ratio = (measured: number, goal: number) => `${(measured / goal).toFixed(2)}×`;
 
 /** A heading naming the bench, the time (UTC), the commit and the machine's load when it ran. */
-export function figuresHeader(root: string, what: string): string {
+export function figuresHeader(root: string, what: string, buildDir = root): string {
   let head = 'unknown';
   try {
     head = execFileSync('git', ['rev-parse', '--short', 'HEAD'], { cwd: root, encoding: 'utf8' }).trim();
@@ -27,8 +27,9 @@ export function figuresHeader(root: string, what: string): string {
     .loadavg()
     .map((l) => l.toFixed(2))
     .join(' ');
-  const index = path.join(root, 'dist/admin/browser/index.csr.html');
-  const built = existsSync(index) ? `, dist/ built ${statSync(index).mtime.toISOString().slice(0, 16)}Z` : '';
+  const index = path.join(buildDir, 'dist/admin/browser/index.csr.html');
+  const where = buildDir === root ? 'dist/' : `the build in ${buildDir}`;
+  const built = existsSync(index) ? `, ${where} built ${statSync(index).mtime.toISOString().slice(0, 16)}Z` : '';
   return `## ${what} — ${new Date().toISOString().slice(0, 16)}Z, HEAD ${head}${built}, load ${load} (${os.cpus().length} cores)`;
 }
 
@@ -36,4 +37,16 @@ export function figuresHeader(root: string, what: string): string {
 export function appendFigures(header: string, lines: string[]): void {
   const file = process.env.LB_WEB_FIGURES;
   if (file) appendFileSync(file, `\n${header}\n\n\`\`\`\n${lines.join('\n')}\n\`\`\`\n`);
+}
+
+/**
+ * With LB_BUILD_LOCK set (the folder a build holds while it writes dist/), waits until no build is
+ * under way, so the figures are of one whole build.
+ */
+export async function waitForBuilds(): Promise<void> {
+  const lock = process.env.LB_BUILD_LOCK;
+  while (lock && existsSync(lock)) {
+    process.stderr.write(`a build holds ${lock}; waiting…\n`);
+    await new Promise((r) => setTimeout(r, 15_000));
+  }
 }

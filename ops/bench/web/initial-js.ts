@@ -4,6 +4,7 @@
  * production build in dist/. Prints figures; it is not a test.
  *
  *   npx tsx ops/bench/web/initial-js.ts            # sizes from dist/; contributors if dist/<app>/stats.json is there
+ *   npx tsx ops/bench/web/initial-js.ts --build ../other-checkout   # another checkout's dist/, to compare
  *   npx tsx ops/bench/web/initial-js.ts --stats    # also builds each app with --stats-json into a temporary
  *                                                  # folder (not dist/, under the build lock) for the contributors
  *
@@ -19,9 +20,12 @@ import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
 import { buildWithStats, contributors, type Metafile } from './stats';
-import { appendFigures, figuresHeader, kB, ratio } from './figures';
+import { appendFigures, figuresHeader, kB, ratio, waitForBuilds } from './figures';
 
 const root = path.resolve(__dirname, '../../..');
+/** --build CHECKOUT: read another checkout's dist/ (an older commit's, to compare); default this one. */
+const buildIndex = process.argv.indexOf('--build');
+const buildDir = buildIndex >= 0 ? path.resolve(process.argv[buildIndex + 1]) : root;
 const GOALS_BR: Record<string, number> = { admin: 110_000, portal: 95_000 };
 
 interface Sizes {
@@ -96,7 +100,7 @@ function contributorLines(statsFile: string, mainScript: string, share: number):
 }
 
 function reportApp(app: string, statsFile: string | undefined): string[] {
-  const browserDir = path.join(root, 'dist', app, 'browser');
+  const browserDir = path.join(buildDir, 'dist', app, 'browser');
   const tags = indexTags(readFileSync(path.join(browserDir, 'index.csr.html'), 'utf8'));
   const files = staticClosure(browserDir, tags.scripts);
   const rows = files.map((f) => ({ file: f, ...sizesOf(path.join(browserDir, f)) }));
@@ -125,18 +129,22 @@ function reportApp(app: string, statsFile: string | undefined): string[] {
   return out;
 }
 
-function main(): void {
+async function main(): Promise<void> {
+  if (buildDir === root) await waitForBuilds();
   const withStats = process.argv.includes('--stats');
   const lines: string[] = [];
   for (const app of ['admin', 'portal']) {
-    const built = path.join(root, 'dist', app, 'browser', 'index.csr.html');
-    if (!existsSync(built)) throw new Error(`${path.relative(root, built)} is missing: build first (bash ops/build.sh)`);
-    const statsFile = withStats ? buildWithStats(root, app) : path.join(root, 'dist', app, 'stats.json');
+    const built = path.join(buildDir, 'dist', app, 'browser', 'index.csr.html');
+    if (!existsSync(built)) throw new Error(`${built} is missing: build first (bash ops/build.sh)`);
+    const statsFile = withStats ? buildWithStats(buildDir, app) : path.join(buildDir, 'dist', app, 'stats.json');
     lines.push(...reportApp(app, statsFile));
   }
-  const header = figuresHeader(root, 'initial JS (ops/bench/web/initial-js.ts)');
+  const header = figuresHeader(root, 'initial JS (ops/bench/web/initial-js.ts)', buildDir);
   process.stdout.write(`${header}\n${lines.join('\n')}\n`);
   appendFigures(header, lines);
 }
 
-main();
+main().catch((error: unknown) => {
+  process.stderr.write(`${error instanceof Error ? error.message : String(error)}\n`);
+  process.exit(1);
+});

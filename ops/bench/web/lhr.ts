@@ -8,6 +8,8 @@ interface LhrNode {
 
 interface LhrAudit {
   score: number | null;
+  scoreDisplayMode?: string;
+  errorMessage?: string;
   numericValue?: number;
   details?: { type?: string; items?: Array<Record<string, unknown>> };
 }
@@ -33,8 +35,10 @@ export interface PageFigures {
   scriptBytes: number;
   fontBytes: number;
   benchmarkIndex: number;
-  lcpElement: string;
-  clsCulprits: string[];
+  /** null when Lighthouse could not tell (its audit errored: elementsError says why) */
+  lcpElement: string | null;
+  clsCulprits: string[] | null;
+  elementsError?: string;
   failedAudits: string[];
   warnings: string[];
 }
@@ -82,6 +86,8 @@ function resources(lhr: Lhr, type: string): { bytes: number; count: number } {
   return { bytes: Number(row?.transferSize ?? NaN), count: Number(row?.requestCount ?? NaN) };
 }
 
+const errored = (lhr: Lhr, audit: string) => lhr.audits[audit]?.scoreDisplayMode === 'error' || !lhr.audits[audit];
+
 export function pageFigures(lhr: Lhr): PageFigures {
   const a11y = lhr.categories.accessibility?.auditRefs ?? [];
   const total = resources(lhr, 'total');
@@ -97,8 +103,11 @@ export function pageFigures(lhr: Lhr): PageFigures {
     scriptBytes: resources(lhr, 'script').bytes,
     fontBytes: resources(lhr, 'font').bytes,
     benchmarkIndex: lhr.environment?.benchmarkIndex ?? NaN,
-    lcpElement: describeNode(firstNode(lhr.audits['largest-contentful-paint-element']?.details)),
-    clsCulprits: culprits(lhr),
+    lcpElement: errored(lhr, 'largest-contentful-paint-element')
+      ? null
+      : describeNode(firstNode(lhr.audits['largest-contentful-paint-element']?.details)),
+    clsCulprits: errored(lhr, 'layout-shifts') ? null : culprits(lhr),
+    elementsError: lhr.audits['largest-contentful-paint-element']?.errorMessage ?? lhr.audits['layout-shifts']?.errorMessage,
     failedAudits: a11y.filter((r) => r.weight > 0 && lhr.audits[r.id]?.score === 0).map((r) => r.id),
     warnings: lhr.runWarnings ?? [],
   };

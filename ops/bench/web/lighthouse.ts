@@ -5,9 +5,10 @@
  * against the goals: performance ≥ 95, accessibility 100, LCP ≤ 1.5 s, CLS 0. Prints figures; it is
  * not a test. Needs a build (bash ops/build.sh) and Debian's Chromium (bash ops/deps.sh --browser).
  *
- *   npx tsx ops/bench/web/lighthouse.ts [--runs N] [--only sign-in,form,proposal,today] [--save DIR]
+ *   npx tsx ops/bench/web/lighthouse.ts [--runs N] [--only sign-in,form,proposal,today] [--save DIR] [--build CHECKOUT]
  *
  * --save keeps each run's whole report (DIR/<page>-<run>.json; open it in the Lighthouse viewer).
+ * --build serves the build of another checkout (its dist/ and server/dist/), e.g. an older commit's, to compare.
  *
  * It serves the build itself (web-server.ts: its own database, production mode, a port of 4450–4499,
  * stopped by PID). The signed-in pages get the session cookie as an extra request header, so
@@ -16,11 +17,12 @@
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { appendFigures, figuresHeader, kB, ratio } from './figures';
+import { observeElements, type PageElements } from './elements';
 import { type Lhr, type PageFigures, pageFigures, median } from './lhr';
 import { clientSession, root, staffCookie, startWebServer } from './web-server';
 
 const CHROMIUM = process.env.CHROME_PATH ?? '/usr/bin/chromium';
-const CHROME_FLAGS = ['--headless=new', '--no-sandbox', '--disable-gpu', '--disable-dev-shm-usage'];
+const CHROME_FLAGS = ['--no-sandbox', '--disable-gpu', '--disable-dev-shm-usage'];
 const GOALS = { performance: 95, accessibility: 100, lcpMs: 1500, cls: 0 };
 const DEMO = {
   owner: 'owner@fernhollow.example',
@@ -44,7 +46,7 @@ function option(name: string): string | undefined {
 const fmtS = (ms: number) => `${(ms / 1000).toFixed(2)} s`;
 
 /** The median figures of one page's runs, each against its goal (ratio = measured ÷ goal). */
-function describe(page: PageToRun, runs: PageFigures[]): string[] {
+function describe(page: PageToRun, runs: PageFigures[], seen: PageElements | undefined): string[] {
   const m = (f: (r: PageFigures) => number) => median(runs.map(f));
   const perf = m((r) => r.performance);
   const a11y = m((r) => r.accessibility);
@@ -62,10 +64,14 @@ function describe(page: PageToRun, runs: PageFigures[]): string[] {
     `  TBT ${Math.round(m((r) => r.tbtMs))} ms   FCP ${fmtS(m((r) => r.fcpMs))}   (no goals; Lighthouse's "good": TBT ≤ 200 ms, FCP ≤ 1.8 s)`,
     `  transferred ${kB(m((r) => r.transferBytes))} in ${m((r) => r.requests)} requests; ` +
       `of it script ${kB(m((r) => r.scriptBytes))}, fonts ${kB(m((r) => r.fontBytes))}; benchmark index ${Math.round(m((r) => r.benchmarkIndex))}`,
-    `  LCP element: ${typical.lcpElement}`,
-    `  CLS culprits: ${typical.clsCulprits.length === 0 ? 'none' : ''}`,
-    ...typical.clsCulprits.map((c) => `    ${c}`),
   ];
+  const lcpElement = typical.lcpElement ?? seen?.lcpElement ?? 'unknown';
+  const shifts = typical.clsCulprits ?? seen?.clsCulprits ?? [];
+  if (seen)
+    out.push(
+      `  (LCP element and shifts seen by the page in a throttled load of its own: Lighthouse's audits failed: ${typical.elementsError})`,
+    );
+  out.push(`  LCP element: ${lcpElement}`, `  CLS culprits:${shifts.length === 0 ? ' none' : ''}`, ...shifts.map((c) => `    ${c}`));
   const failed = [...new Set(runs.flatMap((r) => r.failedAudits))];
   if (failed.length > 0) out.push(`  accessibility audits failed: ${failed.join(', ')}`);
   const warnings = [...new Set(runs.flatMap((r) => r.warnings))];
@@ -82,7 +88,8 @@ async function main(): Promise<void> {
   const { default: lighthouse } = await import('lighthouse');
   const chromeLauncher = await import('chrome-launcher');
 
-  const server = await startWebServer();
+  const buildFrom = option('--build') ?? root;
+  const server = await startWebServer(buildFrom);
   let chrome: Awaited<ReturnType<typeof chromeLauncher.launch>> | undefined;
   const stopAll = async () => {
     chrome?.kill();
@@ -100,14 +107,14 @@ async function main(): Promise<void> {
       { key: 'today', label: 'admin Today', path: '/today', cookie: owner },
     ].filter((p) => !only || only.includes(p.key));
 
-    const lines: string[] = [];
-    for (const page of pages) {
-      const runs: PageFigures[] = [];
-      for (let i = 0; i < runsPerPage; i++) {
-        process.stderr.write(`${page.label}: run ${i + 1} of ${runsPerPage}…\n`);
-        // A new browser with an empty profile each run: Lighthouse's reset keeps cookies, and a cookie
-        // one page left (an anonymous session) would sit beside the signed-in one of the next.
-        chrome = await chromeLauncher.launch({ chromePath: CHROMIUM, chromeFlags: CHROME_FLAGS });
+    /**
+     * One Lighthouse run in a new browser with an empty profile (Lighthouse's reset keeps cookies, and
+     * a cookie one page left, an anonymous session, would sit beside the signed-in one of the next).
+     * A run whose trace Chromium failed to record (NO_NAVSTART and the like) is tried again, twice at most.
+     */
+    const runLighthouse = async (page: PageToRun, run: number): Promise<Lhr> => {
+      for (let attempt = 1; ; attempt++) {
+        chrome = await chromeLauncher.launch({ chromePath: CHROMIUM, chromeFlags: ['--headless=new', ...CHROME_FLAGS] });
         const result = await lighthouse(`${server.base}${page.path}`, {
           port: chrome.port,
           output: 'json',
@@ -118,22 +125,47 @@ async function main(): Promise<void> {
         chrome.kill();
         chrome = undefined;
         if (!result) throw new Error(`Lighthouse gave no result for ${page.path}`);
-        if (saveDir) writeFileSync(path.join(saveDir, `${page.key}-${i + 1}.json`), JSON.stringify(result.lhr));
+        if (saveDir) writeFileSync(path.join(saveDir, `${page.key}-${run}.json`), JSON.stringify(result.lhr));
         const lhr = result.lhr as unknown as Lhr;
-        if (lhr.runtimeError) throw new Error(`${page.path}: ${lhr.runtimeError.code} ${lhr.runtimeError.message}`);
+        if (lhr.runtimeError) {
+          const why = `${page.path}: ${lhr.runtimeError.code} ${lhr.runtimeError.message}`;
+          if (attempt === 3) throw new Error(why);
+          process.stderr.write(`  ${why}; trying again\n`);
+          continue;
+        }
         if (!lhr.finalDisplayedUrl.endsWith(page.path)) {
           throw new Error(`${page.path} ended at ${lhr.finalDisplayedUrl} (signed out, or moved?)`);
         }
-        runs.push(pageFigures(lhr));
+        return lhr;
       }
-      lines.push(...describe(page, runs));
-    }
-    const header = figuresHeader(root, 'Lighthouse mobile (ops/bench/web/lighthouse.ts)');
+    };
+
+    const header = figuresHeader(root, 'Lighthouse mobile (ops/bench/web/lighthouse.ts)', path.resolve(buildFrom));
     const version = (JSON.parse(readFileSync(path.join(root, 'node_modules/lighthouse/package.json'), 'utf8')) as { version: string })
       .version;
-    lines.unshift(`Lighthouse ${version} mobile (simulated throttling), ${CHROMIUM}; ratios are measured ÷ goal`);
-    process.stdout.write(`${header}\n${lines.join('\n')}\n`);
-    appendFigures(header, lines);
+    const lines = [`Lighthouse ${version} mobile (simulated throttling), ${CHROMIUM}; ratios are measured ÷ goal`];
+    process.stdout.write(`${header}\n${lines[0]}\n`);
+    // Each page's figures are printed as soon as they are in; a failure later keeps them (in the figures file too).
+    try {
+      for (const page of pages) {
+        const runs: PageFigures[] = [];
+        for (let i = 0; i < runsPerPage; i++) {
+          process.stderr.write(`${page.label}: run ${i + 1} of ${runsPerPage}…\n`);
+          runs.push(pageFigures(await runLighthouse(page, i + 1)));
+        }
+        // Lighthouse 12.2.3 cannot read the elements from newer Chromium traces: the page reports them itself then.
+        const needSeen = runs.some((r) => r.lcpElement === null || r.clsCulprits === null);
+        const seen = needSeen ? await observeElements(CHROMIUM, CHROME_FLAGS, `${server.base}${page.path}`, page.cookie) : undefined;
+        const described = describe(page, runs, seen);
+        process.stdout.write(`${described.join('\n')}\n`);
+        lines.push(...described);
+      }
+    } catch (error) {
+      lines.push(`stopped: ${error instanceof Error ? error.message : String(error)}`);
+      throw error;
+    } finally {
+      appendFigures(header, lines);
+    }
   } finally {
     await stopAll();
   }

@@ -9,6 +9,7 @@ import { cpSync, existsSync, mkdtempSync, rmSync, symlinkSync } from 'node:fs';
 import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { waitForBuilds } from './figures';
 import { startS3Fake } from '../../../server/src/files/s3-fake';
 import { type Inbox, linkIn, startInbox } from '../../../server/src/testing/inbox';
 import { testDatabaseUrls } from '../../../server/src/testing/test-env';
@@ -39,31 +40,19 @@ async function freePort(): Promise<number> {
 const BUILT = ['dist/admin/server/server.mjs', 'dist/portal/server/server.mjs', 'server/dist/main.js', 'server/dist/seed/run.js'];
 
 /**
- * With LB_BUILD_LOCK set (the folder a build holds while it writes dist/), waits until no build is
- * under way, so the figures are of one whole build.
- */
-export async function waitForBuilds(): Promise<void> {
-  const lock = process.env.LB_BUILD_LOCK;
-  while (lock && existsSync(lock)) {
-    process.stderr.write(`a build holds ${lock}; waiting…\n`);
-    await new Promise((r) => setTimeout(r, 15_000));
-  }
-}
-
-/**
  * A copy of the build (dist/ and server/dist/, ~15 MB) in a temporary folder the server runs from,
  * so a build started meanwhile in the checkout cannot swap files under a run; node_modules and
  * migrations are linked.
  */
-async function snapshotBuild(): Promise<string> {
-  await waitForBuilds();
+async function snapshotBuild(from: string): Promise<string> {
+  if (from === root) await waitForBuilds();
   for (const file of BUILT) {
-    if (!existsSync(path.join(root, file))) throw new Error(`${file} is missing: build first (bash ops/build.sh)`);
+    if (!existsSync(path.join(from, file))) throw new Error(`${path.join(from, file)} is missing: build first (bash ops/build.sh)`);
   }
   const copy = mkdtempSync(path.join(os.tmpdir(), 'layerbook-web-bench-'));
-  for (const dir of ['dist/admin', 'dist/portal', 'server/dist']) cpSync(path.join(root, dir), path.join(copy, dir), { recursive: true });
-  cpSync(path.join(root, 'server/package.json'), path.join(copy, 'server/package.json'));
-  for (const link of ['node_modules', 'migrations']) symlinkSync(path.join(root, link), path.join(copy, link));
+  for (const dir of ['dist/admin', 'dist/portal', 'server/dist']) cpSync(path.join(from, dir), path.join(copy, dir), { recursive: true });
+  cpSync(path.join(from, 'server/package.json'), path.join(copy, 'server/package.json'));
+  for (const link of ['node_modules', 'migrations']) symlinkSync(path.join(from, link), path.join(copy, link));
   return copy;
 }
 
@@ -81,9 +70,12 @@ async function waitUntilUp(base: string, child: ChildProcess): Promise<void> {
   throw new Error('the server did not answer /readyz within 60 s');
 }
 
-/** PostgreSQL up, a fresh seeded database, the built server listening; stop() ends it by PID. */
-export async function startWebServer(): Promise<WebServer> {
-  const build = await snapshotBuild();
+/**
+ * PostgreSQL up, a fresh seeded database, the built server listening; stop() ends it by PID.
+ * `from`: the checkout whose build is served (another one's, to compare; default this one).
+ */
+export async function startWebServer(from = root): Promise<WebServer> {
+  const build = await snapshotBuild(path.resolve(from));
   execFileSync('bash', [path.join(root, 'ops/pg-start.sh')], { stdio: ['ignore', 'ignore', 'inherit'] });
   execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: ['ignore', 'ignore', 'inherit'] });
   const inbox = await startInbox();
