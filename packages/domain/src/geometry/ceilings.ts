@@ -1,11 +1,12 @@
 import { DomainInputError } from '../errors/domain-input-error';
-import { isArray, requireFiniteNumber, requirePositive } from '../errors/input-checks';
+import { isArray, requireFiniteNumber } from '../errors/input-checks';
+import { positiveAt } from './dimension-checks';
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
 export function measureCeilingRect(s: { length: number; width: number; elevation?: number }, field: string): SurfaceMeasure {
-  const l = requirePositive(s.length, `${field}.length`, 'length');
-  const w = requirePositive(s.width, `${field}.width`, 'width');
+  const l = positiveAt(s.length, field, 'length', 'length');
+  const w = positiveAt(s.width, field, 'width', 'width');
   return measureResult(
     { isCeiling: true, isCurved: false, gross: l * w, formula: 'L·W', topHeight: topFrom(s.elevation, 0, field) },
     field,
@@ -13,7 +14,7 @@ export function measureCeilingRect(s: { length: number; width: number; elevation
 }
 
 export function measureCeilingCircle(s: { radius: number; elevation?: number }, field: string): SurfaceMeasure {
-  const r = requirePositive(s.radius, `${field}.radius`, 'radius');
+  const r = positiveAt(s.radius, field, 'radius', 'radius');
   return measureResult(
     { isCeiling: true, isCurved: false, gross: Math.PI * r * r, formula: 'π·r²', topHeight: topFrom(s.elevation, 0, field) },
     field,

@@ -1,5 +1,5 @@
 import { DomainInputError } from '../errors/domain-input-error';
-import { requirePositive } from '../errors/input-checks';
+import { positiveAt } from './dimension-checks';
 import { measureResult } from './measure-result';
 import type { Opening, SurfaceMeasure } from './surface-shape';
 import { openingDeductions } from './walls';
@@ -10,8 +10,8 @@ export function measureRoundWalls(
   minOpening: number,
   field: string,
 ): SurfaceMeasure {
-  const r = requirePositive(s.radius, `${field}.radius`, 'radius');
-  const h = requirePositive(s.height, `${field}.height`, 'wall height');
+  const r = positiveAt(s.radius, field, 'radius', 'radius');
+  const h = positiveAt(s.height, field, 'height', 'wall height');
   return measureResult(
     {
       gross: 2 * Math.PI * r * h,
@@ -31,10 +31,10 @@ export function measureCurvedWall(
   minOpening: number,
   field: string,
 ): SurfaceMeasure {
-  const r = requirePositive(s.radius, `${field}.radius`, 'radius');
-  const deg = requirePositive(s.angleDegrees, `${field}.angleDegrees`, 'angle');
+  const r = positiveAt(s.radius, field, 'radius', 'radius');
+  const deg = positiveAt(s.angleDegrees, field, 'angleDegrees', 'angle');
   if (deg > 360) throw new DomainInputError(`${field}.angleDegrees`, 'The angle of a wall segment cannot exceed 360°.');
-  const h = requirePositive(s.height, `${field}.height`, 'wall height');
+  const h = positiveAt(s.height, field, 'height', 'wall height');
   const theta = (deg * Math.PI) / 180;
   return measureResult(
     {

@@ -1,11 +1,11 @@
 import { DomainInputError } from '../errors/domain-input-error';
-import { requirePositive } from '../errors/input-checks';
+import { positiveAt } from './dimension-checks';
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
 /** Curved surface of a hemisphere, 2π·r². */
 export function measureHemisphere(s: { radius: number; elevation?: number }, field: string): SurfaceMeasure {
-  const r = requirePositive(s.radius, `${field}.radius`, 'radius');
+  const r = positiveAt(s.radius, field, 'radius', 'radius');
   return measureResult(
     { isCeiling: true, isCurved: true, gross: 2 * Math.PI * r * r, formula: '2π·r²', topHeight: topFrom(s.elevation, r, field) },
     field,
@@ -19,8 +19,8 @@ export function measureHemisphere(s: { radius: number; elevation?: number }, fie
  * ceiling springing from a wall cannot be.
  */
 export function measureSphericalCap(s: { baseRadius: number; rise: number; elevation?: number }, field: string): SurfaceMeasure {
-  const a = requirePositive(s.baseRadius, `${field}.baseRadius`, 'base radius');
-  const h = requirePositive(s.rise, `${field}.rise`, 'rise');
+  const a = positiveAt(s.baseRadius, field, 'baseRadius', 'base radius');
+  const h = positiveAt(s.rise, field, 'rise', 'rise');
   if (h > a) {
     throw new DomainInputError(`${field}.rise`, 'The rise cannot be more than the base radius (that would be more than a hemisphere).');
   }
@@ -41,8 +41,8 @@ export function measureSphericalCapFromSphere(
   s: { sphereRadius: number; rise: number; elevation?: number },
   field: string,
 ): SurfaceMeasure {
-  const R = requirePositive(s.sphereRadius, `${field}.sphereRadius`, 'sphere radius');
-  const h = requirePositive(s.rise, `${field}.rise`, 'rise');
+  const R = positiveAt(s.sphereRadius, field, 'sphereRadius', 'sphere radius');
+  const h = positiveAt(s.rise, field, 'rise', 'rise');
   if (h > R) {
     throw new DomainInputError(`${field}.rise`, 'The rise cannot be more than the sphere radius (that would be more than a hemisphere).');
   }

@@ -1,5 +1,5 @@
+import { nonNegativeAt } from './dimension-checks';
 import { DomainInputError } from '../errors/domain-input-error';
-import { requireNonNegative } from '../errors/input-checks';
 import type { SurfaceMeasure } from './surface-shape';
 
 export interface MeasureParts {
@@ -33,5 +33,5 @@ export function measureResult(parts: MeasureParts, field: string): SurfaceMeasur
 /** Top of a shape whose lowest edge sits at `elevation` (unknown when not given). */
 export function topFrom(elevation: number | undefined, rise: number, field: string): number | null {
   if (elevation === undefined) return null;
-  return requireNonNegative(elevation, `${field}.elevation`, 'elevation') + rise;
+  return nonNegativeAt(elevation, field, 'elevation', 'elevation') + rise;
 }

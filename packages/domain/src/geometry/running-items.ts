@@ -1,9 +1,9 @@
-import { requireInteger, requireNonNegative, requirePositive } from '../errors/input-checks';
+import { positiveAt, nonNegativeAt, integerAt } from './dimension-checks';
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
 export function measureCrownStraight(s: { length: number; elevation?: number }, field: string): SurfaceMeasure {
-  const l = requirePositive(s.length, `${field}.length`, 'length');
+  const l = positiveAt(s.length, field, 'length', 'length');
   return measureResult(
     { measure: 'length', isCeiling: false, isCurved: false, gross: l, formula: 'L', topHeight: topFrom(s.elevation, 0, field) },
     field,
@@ -12,7 +12,7 @@ export function measureCrownStraight(s: { length: number; elevation?: number }, 
 
 /** Crown around a round room, measured at the wall line: 2π·r. */
 export function measureCrownCircular(s: { radius: number; elevation?: number }, field: string): SurfaceMeasure {
-  const r = requirePositive(s.radius, `${field}.radius`, 'radius');
+  const r = positiveAt(s.radius, field, 'radius', 'radius');
   return measureResult(
     {
       measure: 'length',
@@ -27,7 +27,7 @@ export function measureCrownCircular(s: { radius: number; elevation?: number }, 
 }
 
 export function measureBorder(s: { length: number; elevation?: number }, field: string): SurfaceMeasure {
-  const l = requirePositive(s.length, `${field}.length`, 'length');
+  const l = positiveAt(s.length, field, 'length', 'length');
   return measureResult(
     { measure: 'length', isCeiling: false, isCurved: false, gross: l, formula: 'L', topHeight: topFrom(s.elevation, 0, field) },
     field,
@@ -39,10 +39,10 @@ export function measureBeams(
   s: { count?: number; length: number; width: number; depth: number; measureBy?: 'faces' | 'length'; elevation?: number },
   field: string,
 ): SurfaceMeasure {
-  const n = s.count === undefined ? 1 : requireInteger(s.count, `${field}.count`, 1, 'beam count');
-  const l = requirePositive(s.length, `${field}.length`, 'beam length');
-  const w = requirePositive(s.width, `${field}.width`, 'beam width');
-  const d = requirePositive(s.depth, `${field}.depth`, 'beam depth');
+  const n = s.count === undefined ? 1 : integerAt(s.count, field, 'count', 1, 'beam count');
+  const l = positiveAt(s.length, field, 'length', 'beam length');
+  const w = positiveAt(s.width, field, 'width', 'beam width');
+  const d = positiveAt(s.depth, field, 'depth', 'beam depth');
   const top = topFrom(s.elevation, 0, field);
   if (s.measureBy === 'length') {
     return measureResult({ measure: 'length', isCeiling: false, isCurved: false, gross: n * l, formula: 'n·L', topHeight: top }, field);
@@ -58,10 +58,10 @@ export function measureCoffers(
   s: { count: number; innerPerimeter: number; depth: number; panelArea: number; elevation?: number },
   field: string,
 ): SurfaceMeasure {
-  const n = requireInteger(s.count, `${field}.count`, 1, 'coffer count');
-  const p = requirePositive(s.innerPerimeter, `${field}.innerPerimeter`, 'inner perimeter');
-  const d = requireNonNegative(s.depth, `${field}.depth`, 'depth');
-  const a = requirePositive(s.panelArea, `${field}.panelArea`, 'panel area');
+  const n = integerAt(s.count, field, 'count', 1, 'coffer count');
+  const p = positiveAt(s.innerPerimeter, field, 'innerPerimeter', 'inner perimeter');
+  const d = nonNegativeAt(s.depth, field, 'depth', 'depth');
+  const a = positiveAt(s.panelArea, field, 'panelArea', 'panel area');
   return measureResult(
     {
       measure: 'area',

@@ -1,11 +1,11 @@
-import { requireInteger, requirePositive } from '../errors/input-checks';
+import { positiveAt, integerAt } from './dimension-checks';
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
 /** Conical ceiling: lateral area π·r·s with slant s = √(r² + h²). */
 export function measureCone(s: { radius: number; rise: number; elevation?: number }, field: string): SurfaceMeasure {
-  const r = requirePositive(s.radius, `${field}.radius`, 'radius');
-  const h = requirePositive(s.rise, `${field}.rise`, 'rise');
+  const r = positiveAt(s.radius, field, 'radius', 'radius');
+  const h = positiveAt(s.rise, field, 'rise', 'rise');
   return measureResult(
     {
       gross: Math.PI * r * Math.hypot(r, h),
@@ -23,9 +23,9 @@ export function measureCone(s: { radius: number; rise: number; elevation?: numbe
  * side s = √(a² + h²), apothem a = b / (2·tan(π/n)). Flat faces, so not curved.
  */
 export function measurePyramid(s: { sides: number; sideLength: number; rise: number; elevation?: number }, field: string): SurfaceMeasure {
-  const n = requireInteger(s.sides, `${field}.sides`, 3, 'number of sides');
-  const b = requirePositive(s.sideLength, `${field}.sideLength`, 'side length');
-  const h = requirePositive(s.rise, `${field}.rise`, 'rise');
+  const n = integerAt(s.sides, field, 'sides', 3, 'number of sides');
+  const b = positiveAt(s.sideLength, field, 'sideLength', 'side length');
+  const h = positiveAt(s.rise, field, 'rise', 'rise');
   const apothem = b / (2 * Math.tan(Math.PI / n));
   return measureResult(
     {

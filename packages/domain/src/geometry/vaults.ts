@@ -1,12 +1,12 @@
 import { DomainInputError } from '../errors/domain-input-error';
-import { requirePositive } from '../errors/input-checks';
+import { positiveAt } from './dimension-checks';
 import { measureResult, topFrom } from './measure-result';
 import type { SurfaceMeasure } from './surface-shape';
 
 /** Semicircular barrel vault: half a cylinder, π·r·L. */
 export function measureBarrelVault(s: { radius: number; length: number; elevation?: number }, field: string): SurfaceMeasure {
-  const r = requirePositive(s.radius, `${field}.radius`, 'radius');
-  const l = requirePositive(s.length, `${field}.length`, 'length');
+  const r = positiveAt(s.radius, field, 'radius', 'radius');
+  const l = positiveAt(s.length, field, 'length', 'length');
   return measureResult(
     { isCeiling: true, isCurved: true, gross: Math.PI * r * l, formula: 'π·r·L', topHeight: topFrom(s.elevation, r, field) },
     field,
@@ -21,9 +21,9 @@ export function measureSegmentalVault(
   s: { span: number; rise: number; length: number; elevation?: number },
   field: string,
 ): SurfaceMeasure {
-  const c = requirePositive(s.span, `${field}.span`, 'span');
-  const h = requirePositive(s.rise, `${field}.rise`, 'rise');
-  const l = requirePositive(s.length, `${field}.length`, 'length');
+  const c = positiveAt(s.span, field, 'span', 'span');
+  const h = positiveAt(s.rise, field, 'rise', 'rise');
+  const l = positiveAt(s.length, field, 'length', 'length');
   if (h > c / 2) {
     throw new DomainInputError(`${field}.rise`, 'The rise of a segmental vault cannot exceed half its span.');
   }
@@ -43,7 +43,7 @@ export function measureSegmentalVault(
 
 /** Two semicircular barrels crossing over a square bay of side s: (π − 2)·s². */
 export function measureGroinVault(s: { side: number; elevation?: number }, field: string): SurfaceMeasure {
-  const side = requirePositive(s.side, `${field}.side`, 'bay side');
+  const side = positiveAt(s.side, field, 'side', 'bay side');
   return measureResult(
     {
       isCeiling: true,
@@ -58,7 +58,7 @@ export function measureGroinVault(s: { side: number; elevation?: number }, field
 
 /** Cloister (domical) vault over a square bay of side s: 2·s². */
 export function measureCloisterVault(s: { side: number; elevation?: number }, field: string): SurfaceMeasure {
-  const side = requirePositive(s.side, `${field}.side`, 'bay side');
+  const side = positiveAt(s.side, field, 'side', 'bay side');
   return measureResult(
     { isCeiling: true, isCurved: true, gross: 2 * side * side, formula: '2·s²', topHeight: topFrom(s.elevation, side / 2, field) },
     field,
