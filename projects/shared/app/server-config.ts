@@ -1,5 +1,5 @@
 import { FetchBackend, HttpBackend } from '@angular/common/http';
-import { ApplicationConfig, REQUEST_CONTEXT, inject, mergeApplicationConfig } from '@angular/core';
+import { ApplicationConfig, NgZone, REQUEST_CONTEXT, inject, mergeApplicationConfig } from '@angular/core';
 import { RenderMode, ServerRoute, provideServerRendering, withRoutes } from '@angular/ssr';
 import { map } from 'rxjs';
 import { readFile } from 'node:fs/promises';
@@ -45,7 +45,7 @@ const SERVER_ROUTES: ServerRoute[] = [{ path: '**', renderMode: RenderMode.Serve
 function transferableBackend(): HttpBackend {
   const fetchBackend = inject(FetchBackend);
   const dispatch = apiDispatchOf(inject(REQUEST_CONTEXT, { optional: true }));
-  const backend = dispatch ? new InProcessBackend(dispatch, fetchBackend) : fetchBackend;
+  const backend = dispatch ? new InProcessBackend(dispatch, fetchBackend, inject(NgZone)) : fetchBackend;
   return { handle: (req) => backend.handle(req).pipe(map(transferable)) };
 }
 

@@ -7,6 +7,7 @@ import {
   type HttpRequest,
   HttpResponse,
 } from '@angular/common/http';
+import type { NgZone } from '@angular/core';
 import { Observable } from 'rxjs';
 import type { ApiDispatch, ApiDispatchAnswer } from './api-dispatch';
 
@@ -20,6 +21,7 @@ export class InProcessBackend implements HttpBackend {
   constructor(
     private readonly dispatch: ApiDispatch,
     private readonly fallback: HttpBackend,
+    private readonly zone: NgZone,
   ) {}
 
   handle(req: HttpRequest<unknown>): Observable<HttpEvent<unknown>> {
@@ -35,20 +37,27 @@ export class InProcessBackend implements HttpBackend {
     return new Observable<HttpEvent<unknown>>((observer) => {
       let open = true;
       observer.next({ type: HttpEventType.Sent });
-      this.dispatch({ method: req.method, url: target, headers, ...(body !== null ? { payload: body } : {}) }).then(
-        (answer) => {
-          if (!open) return;
-          const event = toEvent(req, answer);
-          if (event instanceof HttpErrorResponse) {
-            observer.error(event);
-          } else {
-            observer.next(event);
-            observer.complete();
-          }
-        },
-        (error: unknown) => {
-          if (open) observer.error(new HttpErrorResponse({ error, status: 0, statusText: 'Unknown Error', url: req.urlWithParams }));
-        },
+      // As Angular's FetchBackend does: the request's own steps (streams, immediates) run outside the
+      // zone, so they do not each trigger change detection of the whole page; the answer comes back in.
+      const answered = this.zone.runOutsideAngular(() =>
+        this.dispatch({ method: req.method, url: target, headers, ...(body !== null ? { payload: body } : {}) }),
+      );
+      answered.then(
+        (answer) =>
+          this.zone.run(() => {
+            if (!open) return;
+            const event = toEvent(req, answer);
+            if (event instanceof HttpErrorResponse) {
+              observer.error(event);
+            } else {
+              observer.next(event);
+              observer.complete();
+            }
+          }),
+        (error: unknown) =>
+          this.zone.run(() => {
+            if (open) observer.error(new HttpErrorResponse({ error, status: 0, statusText: 'Unknown Error', url: req.urlWithParams }));
+          }),
       );
       return () => {
         open = false;

@@ -39,6 +39,8 @@ export interface SsrAppOptions {
 export function createSsrApp(options: SsrAppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
+  // Pages are no-store and differ on every request (the nonce): hashing each for an ETag is wasted work.
+  app.set('etag', false);
   const angularApp = new AngularNodeAppEngine();
   // The build leaves a brotli and a gzip copy beside each compressible file (ops/build/compress-assets.mjs):
   // the browser gets the smallest it accepts, with no compressing per request.
