@@ -103,9 +103,6 @@ export const receivableInvoices = (past: boolean) => `${owed(past)}
    where ($3::uuid is null or o.client_id = $3::uuid) and ($4::date is null or o.due_on >= $4::date)
      and ($5::date is null or o.due_on <= $5::date)`;
 
-/** What the benchmark runs raw: the page's summary as of today. */
-export const RECEIVABLES_NOW = receivablesByClientAge(false);
-
 export interface ReceivableSumRow {
   client_id: string;
   client_name: string;
