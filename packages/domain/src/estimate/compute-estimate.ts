@@ -14,7 +14,7 @@ import { type LeadStatus, leadRuleYear, leadStatus } from './lead-status';
 import { type JobSchedule, type WorkChain, scheduleJob } from '../schedule/schedule-job';
 import { type Dimension, dimensionOf, fromBase } from '../units/quantity-unit';
 import type { EstimateInput } from './estimate-input';
-import { LayerPlan } from './layer-plan';
+import { LayerPlan, conditionMask } from './layer-plan';
 
 export interface LayerLine {
   layerId: string;
@@ -85,13 +85,15 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
   let area = 0;
   let length = 0;
 
-  input.rooms.forEach((room, r) => {
-    room.surfaces.forEach((surface, k) => {
-      const at = `rooms[${r}].surfaces[${k}]`;
+  for (let r = 0; r < input.rooms.length; r++) {
+    const room = input.rooms[r];
+    for (let k = 0; k < room.surfaces.length; k++) {
+      const surface = room.surfaces[k];
       const found = systems.get(surface.finishSystemId);
-      if (!found) throw new DomainInputError(`${at}.finishSystemId`, `No finish system with id "${surface.finishSystemId}".`);
+      if (!found)
+        throw new DomainInputError(`rooms[${r}].surfaces[${k}].finishSystemId`, `No finish system with id "${surface.finishSystemId}".`);
       const { system, index: systemIndex } = found;
-      const m = measureSurface(surface.shape, takeoff, `${at}.shape`);
+      const m = measureSurface(surface.shape, takeoff, `rooms[${r}].surfaces[${k}].shape`);
       if (m.measure === 'area') area += m.quantity;
       else length += m.quantity;
       if (m.topHeight !== null) highestTop = Math.max(highestTop, m.topHeight);
@@ -105,30 +107,28 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
         isOccupied,
         scaffoldHeight: s.scaffoldHeight,
       };
+      // The same for every layer of the surface: which multipliers apply.
+      const mask = conditionMask(conditions);
       // Checked here once rather than by each layer: it is the only per-surface input check.
       requireNonNegative(m.quantity, 'surface.quantity', 'surface');
-      const layers: LayerLine[] = system.layers.map((layer, li) => {
+      const layerCount = system.layers.length;
+      const layers = new Array<LayerLine>(layerCount);
+      const chainSteps = new Array<WorkChain['steps'][number]>(layerCount);
+      for (let li = 0; li < layerCount; li++) {
+        const layer = system.layers[li];
         const planned = plan.layer(systemIndex, layer, li);
         const quantity = applyLayerQuantity(planned.quantity, m.quantity, m.measure);
         plan.addNeeds(planned, quantity);
         if (layer.method === 'sand') sandsPlaster = true;
-        const labour = applyLayerHours(planned.hours, m.quantity, m.measure, plan.steps(planned, conditions));
+        const labour = applyLayerHours(planned.hours, m.quantity, m.measure, plan.steps(planned, conditions, mask));
         layerTotal += labour.hours;
-        return { layerId: layer.id, name: layer.name, quantity, labour };
-      });
+        layers[li] = { layerId: layer.id, name: layer.name, quantity, labour };
+        chainSteps[li] = { layerId: layer.id, label: layer.name, crewHours: labour.hours, waitHoursAfter: layer.waitHoursAfter };
+      }
       surfaces.push({ roomId: room.id, surfaceId: surface.id, name: surface.name, finishSystemId: system.id, measure: m, layers });
-      chains.push({
-        id: surface.id,
-        label: `${room.name} – ${surface.name}`,
-        steps: layers.map((l, li) => ({
-          layerId: l.layerId,
-          label: l.name,
-          crewHours: l.labour.hours,
-          waitHoursAfter: system.layers[li].waitHoursAfter,
-        })),
-      });
-    });
-  });
+      chains.push({ id: surface.id, label: `${room.name} – ${surface.name}`, steps: chainSteps });
+    }
+  }
 
   // Whole-job totals first, containers second: tinted products are bought once and boxed.
   let materialsCost = new Decimal(0);

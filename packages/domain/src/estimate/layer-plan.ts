@@ -20,7 +20,7 @@ export interface PlannedLayer {
 }
 
 /** The four facts that decide which multipliers apply; 16 combinations at most. */
-function conditionMask(c: SurfaceConditions): number {
+export function conditionMask(c: SurfaceConditions): number {
   const high = c.topHeight !== null && c.topHeight > c.scaffoldHeight;
   return (c.isCeiling ? 1 : 0) | (c.isCurved ? 2 : 0) | (high ? 4 : 0) | (c.isOccupied ? 8 : 0);
 }
@@ -83,9 +83,8 @@ export class LayerPlan {
     return slot;
   }
 
-  /** The multipliers for a surface's conditions, checked the first time they come up. */
-  steps(planned: PlannedLayer, conditions: SurfaceConditions): readonly MultiplierStep[] {
-    const mask = conditionMask(conditions);
+  /** The multipliers for a surface's conditions (`mask` is `conditionMask(conditions)`), checked the first time they come up. */
+  steps(planned: PlannedLayer, conditions: SurfaceConditions, mask: number): readonly MultiplierStep[] {
     let steps = planned.steps[mask];
     if (steps === undefined) {
       steps = multiplierSteps(planned.hours, conditions, this.firmMultipliers);

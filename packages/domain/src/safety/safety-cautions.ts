@@ -1,4 +1,4 @@
-import { requireFiniteNumber, requireInteger, requireNonNegative } from '../errors/input-checks';
+import { isNonNegativeNumber, requireFiniteNumber, requireInteger, requireNonNegative } from '../errors/input-checks';
 import { type LengthUnit, convertArea, convertLength } from '../units/length';
 import { CAUTION_WORDS, type CautionLine, type CautionWordKey, cautionText, flammableItem } from './caution-words';
 import { type FlammableClass, flammableClass } from './flammable';
@@ -129,7 +129,9 @@ export function safetyCautions(facts: SafetyFacts): Caution[] {
     const perRoom = new Map<string, number>();
     let exterior = 0;
     facts.disturbedPaint.forEach((d, i) => {
-      const ft2 = convertArea(requireNonNegative(d.area, `disturbedPaint[${i}].area`, 'disturbed area'), unit, 'ft');
+      // The field path is only built for a bad value: this runs for every surface.
+      const area = isNonNegativeNumber(d.area) ? d.area : requireNonNegative(d.area, `disturbedPaint[${i}].area`, 'disturbed area');
+      const ft2 = convertArea(area, unit, 'ft');
       if (d.isExterior) exterior += ft2;
       else perRoom.set(d.roomId, (perRoom.get(d.roomId) ?? 0) + ft2);
     });

@@ -54,6 +54,8 @@ export class ReadySet {
     t[i] = value;
     for (i >>= 1; i >= 1; i >>= 1) {
       const m = t[2 * i] < t[2 * i + 1] ? t[2 * i] : t[2 * i + 1];
+      // An unchanged minimum leaves every node above it unchanged too.
+      if (t[i] === m) return;
       t[i] = m;
     }
   }

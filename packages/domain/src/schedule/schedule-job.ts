@@ -148,6 +148,7 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
     chainId: string | null,
     layerId: string | null,
     label: string,
+    layerLabel: string | null,
     readyAt: number,
     start: number,
     duration: number,
@@ -195,14 +196,14 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
       endHour: cur - day * 24,
     };
     tasks.push(task);
-    tally.addTask(task);
+    tally.addTask(task, layerLabel);
     return cur;
   };
 
   let t = startDay * 24;
   const setupDuration = input.setupHours / crew;
   if (input.setupHours > 0) {
-    t = place('setup', null, null, 'Setup, masking and protection', t, time.earliestStart(t, setupDuration), setupDuration);
+    t = place('setup', null, null, 'Setup, masking and protection', null, t, time.earliestStart(t, setupDuration), setupDuration);
   }
   const next = new Array<number>(chainCount).fill(0);
   const readyAt = new Array<number>(chainCount).fill(t);
@@ -260,10 +261,9 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
     const chain = input.chains[bestChain];
     const i = next[bestChain];
     const step = chain.steps[i];
-    tally.labelLayer(step.layerId, step.label);
     const taskId = `${chain.id}:${i}`;
     const label = `${chain.label}: ${step.label}`;
-    t = place(taskId, chain.id, step.layerId, label, readyAt[bestChain], start, durations[bestChain][i]);
+    t = place(taskId, chain.id, step.layerId, label, step.label, readyAt[bestChain], start, durations[bestChain][i]);
     readyAt[bestChain] = t + step.waitHoursAfter;
     next[bestChain] = i + 1;
     if (next[bestChain] < durations[bestChain].length) {
@@ -287,7 +287,7 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
   }
   if (input.cleanupHours > 0) {
     const d = input.cleanupHours / crew;
-    t = place('cleanup', null, null, 'Demasking and clean-up', t, time.earliestStart(t, d), d);
+    t = place('cleanup', null, null, 'Demasking and clean-up', null, t, time.earliestStart(t, d), d);
   }
 
   return {

@@ -9,8 +9,8 @@ import type { Milestone, ScheduleDay, ScheduledTask } from './schedule-job';
 export class ScheduleTally {
   /** by working-day number − 1; days are numbered in the order they are first worked */
   readonly days: ScheduleDay[] = [];
-  private readonly labels = new Map<string, string>();
-  private readonly lastByLayer = new Map<string, ScheduledTask>();
+  /** per layer: its last-ending task so far and the label of the last step scheduled for it */
+  private readonly byLayer = new Map<string, { task: ScheduledTask; label: string }>();
   private last: ScheduledTask | null = null;
 
   constructor(private readonly capacity: number) {}
@@ -24,23 +24,27 @@ export class ScheduleTally {
     d.crewHours += crewHours;
   }
 
-  /** The layer's name for its milestone: the label of the last step scheduled for it. */
-  labelLayer(layerId: string, label: string): void {
-    this.labels.set(layerId, label);
-  }
-
-  addTask(task: ScheduledTask): void {
+  /**
+   * A task just placed; `layerLabel` is its layer's name, which names the layer's milestone
+   * (the label of the last one scheduled wins). One map look-up per task.
+   */
+  addTask(task: ScheduledTask, layerLabel: string | null): void {
     if (!this.last || task.end >= this.last.end) this.last = task;
     if (task.layerId === null) return;
-    const prev = this.lastByLayer.get(task.layerId);
-    if (!prev || task.end >= prev.end) this.lastByLayer.set(task.layerId, task);
+    const seen = this.byLayer.get(task.layerId);
+    if (seen === undefined) {
+      this.byLayer.set(task.layerId, { task, label: layerLabel ?? task.layerId });
+      return;
+    }
+    if (layerLabel !== null) seen.label = layerLabel;
+    if (task.end >= seen.task.end) seen.task = task;
   }
 
   /** A layer's milestone is reached when it is finished on every surface; the job at the last task's end. */
   milestones(): Milestone[] {
-    const out: Array<Milestone & { at: number }> = [...this.lastByLayer.entries()].map(([layerId, task]) => ({
+    const out: Array<Milestone & { at: number }> = [...this.byLayer.entries()].map(([layerId, { task, label }]) => ({
       id: `layer:${layerId}`,
-      label: this.labels.get(layerId) ?? layerId,
+      label,
       date: task.endDate,
       hour: task.endHour,
       at: task.end,
