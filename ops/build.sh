@@ -14,6 +14,10 @@ stale() { # $1 = built file; stale when missing or older than any source it is b
 }
 if stale dist/admin/server/server.mjs || stale dist/portal/server/server.mjs || [ "${1:-}" = "--force" ]; then
   echo "Building the admin and portal apps…"
+  # One initial script per app instead of a dozen small ones: Angular preloads at most 10 of an app's
+  # initial chunks, so the rest (the framework's largest, as it happened) came a round trip later.
+  # Chunks are merged after esbuild (Angular's chunk optimizer; the initial JS is also ~3 kB smaller).
+  export NG_BUILD_OPTIMIZE_CHUNKS=1
   npx ng build admin >/tmp/layerbook-build-admin.log 2>&1 || { cat /tmp/layerbook-build-admin.log; exit 1; }
   npx ng build portal >/tmp/layerbook-build-portal.log 2>&1 || { cat /tmp/layerbook-build-portal.log; exit 1; }
   # Brotli and gzip copies of the static files, served as they are (projects/shared/ssr/ssr-app.ts).

@@ -1,20 +1,26 @@
-// Prints the metric overrides of the heading font's fallback (`Fraunces fallback` in
-// projects/shared-styles/_layerbook.scss), so the fallback takes the room Fraunces will: nothing moves
-// when the web font swaps in. Run by hand when either font changes: node ops/build/fallback-metrics.mjs
+// Prints the metric overrides of a web font's local fallback (`Fraunces fallback`, `Source Sans 3 fallback`
+// in projects/shared-styles/_layerbook.scss), so the fallback takes the room the web font will: nothing
+// moves when the web font swaps in. Run by hand when a font changes:
+//   node ops/build/fallback-metrics.mjs                  Fraunces 600 over Liberation Serif Bold
+//   node ops/build/fallback-metrics.mjs <web> <local>    any pair (woff2/ttf paths; @fontsource/… resolves)
+// e.g. `@fontsource/source-sans-3/files/source-sans-3-latin-400-normal.woff2
+//       /usr/share/fonts/truetype/liberation/LiberationSans-Regular.ttf`.
 //
-// The fallback is Times New Roman Bold, or Liberation Serif Bold / Tinos Bold where it is missing (both
-// drawn to Times New Roman's metrics, the first ships with Linux, so Lighthouse's Chromium has it).
-// size-adjust scales the fallback so a line of English text is as wide as in Fraunces 600: the ratio of
+// The serif fallback is Times New Roman Bold, or Liberation Serif Bold / Tinos Bold where it is missing
+// (both drawn to Times New Roman's metrics; the first ships with Linux, so Lighthouse's Chromium has it);
+// the sans one is Arial, or Liberation Sans / Arimo (drawn to Arial's).
+// size-adjust scales the fallback so a line of English text is as wide as in the web font: the ratio of
 // the two fonts' average advance over a-z, A-Z and the space, weighted by how often each occurs in
 // English prose (the approach of Capsize / Next.js font fallbacks; common practice, no source beyond
-// those tools). The ascent, descent and line gap are Fraunces' own (hhea, what Chromium reads),
+// those tools). The ascent, descent and line gap are the web font's own (hhea, what Chromium reads),
 // divided by size-adjust because the overrides apply to the scaled font.
 import { createRequire } from 'node:module';
 import * as fontkit from 'fontkit';
 
 const require = createRequire(import.meta.url);
-const heading = fontkit.openSync(require.resolve('@fontsource/fraunces/files/fraunces-latin-600-normal.woff2'));
-const fallback = fontkit.openSync(process.argv[2] ?? '/usr/share/fonts/truetype/liberation/LiberationSerif-Bold.ttf');
+const open = (file) => fontkit.openSync(file.startsWith('@') ? require.resolve(file) : file);
+const heading = open(process.argv[2] ?? '@fontsource/fraunces/files/fraunces-latin-600-normal.woff2');
+const fallback = open(process.argv[3] ?? '/usr/share/fonts/truetype/liberation/LiberationSerif-Bold.ttf');
 
 // Letter frequencies of English text in percent (Lewand, "Cryptological Mathematics", 2000), the space
 // taken as one character in six; capitals weighted as a tenth of their small letter.
