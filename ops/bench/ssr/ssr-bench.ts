@@ -5,7 +5,8 @@
  * API, and render ÷ static file, with each figure against its limit. Figures, not a test.
  *   bash ops/build.sh            (a production build; take /tmp/lb/build.lock first when others build)
  *   npx tsx ops/bench/ssr/ssr-bench.ts      (PostgreSQL must be up: bash ops/pg-start.sh)
- * Environment: SSR_BENCH_PORT (default 4400), SSR_BENCH_RENDERS (default 200 per page).
+ * Environment: SSR_BENCH_PORT (default 4400), SSR_BENCH_RENDERS (default 200 per page), SSR_BENCH_ONLY
+ * (pages whose label contains it, e.g. `estimate`: for a profile with `node --cpu-prof --import tsx`).
  */
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import type { Server } from 'node:http';
@@ -26,6 +27,7 @@ const DB = 'layerbook_bench_ssr';
 const PORT = Number(process.env['SSR_BENCH_PORT'] ?? 4400);
 const RENDERS = Number(process.env['SSR_BENCH_RENDERS'] ?? 200);
 const CONNECTIONS = 4;
+const ONLY = process.env['SSR_BENCH_ONLY'] ?? '';
 
 interface Page {
   readonly label: string;
@@ -105,7 +107,7 @@ async function main(): Promise<void> {
     console.log(
       `server render, built apps, demo firm; ${RENDERS} renders per page, one at a time, from a worker thread; load average ${load}`,
     );
-    for (const page of pages) {
+    for (const page of pages.filter((p) => p.label.includes(ONLY))) {
       const pageCookie = page.owner ? cookie : 'lb.bench=anonymous';
       const get = (url: string, total: number): Promise<Measured> =>
         measure(1, { mode: 'get', port: PORT, path: url, cookie: pageCookie, total });
