@@ -40,9 +40,22 @@ export function toDayNumber(date: IsoDate, field = 'date'): number {
   return n;
 }
 
+/**
+ * Dates already written, by day number: an estimate recomputed on every keystroke writes the same
+ * few hundred dates each time. Bounded; strings never change, so sharing them is safe.
+ */
+const written = new Map<number, IsoDate>();
+const WRITTEN_LIMIT = 8192;
+
 export function fromDayNumber(days: number): IsoDate {
-  const [y, m, d] = civilFromDays(days);
-  return `${String(y).padStart(4, '0')}-${String(m).padStart(2, '0')}-${String(d).padStart(2, '0')}`;
+  let date = written.get(days);
+  if (date === undefined) {
+    const [y, m, d] = civilFromDays(days);
+    date = `${String(y).padStart(4, '0')}-${String(m).padStart(2, '0')}-${String(d).padStart(2, '0')}`;
+    if (written.size >= WRITTEN_LIMIT) written.clear();
+    written.set(days, date);
+  }
+  return date;
 }
 
 /** ISO weekday: 1 = Monday … 7 = Sunday (1970-01-01 was a Thursday). */
