@@ -87,6 +87,7 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
 
   for (let r = 0; r < input.rooms.length; r++) {
     const room = input.rooms[r];
+    const roomPrefix = `${room.name} – `;
     for (let k = 0; k < room.surfaces.length; k++) {
       const surface = room.surfaces[k];
       const found = systems.get(surface.finishSystemId);
@@ -126,7 +127,7 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
         chainSteps[li] = { layerId: layer.id, label: layer.name, crewHours: labour.hours, waitHoursAfter: layer.waitHoursAfter };
       }
       surfaces.push({ roomId: room.id, surfaceId: surface.id, name: surface.name, finishSystemId: system.id, measure: m, layers });
-      chains.push({ id: surface.id, label: `${room.name} – ${surface.name}`, steps: chainSteps });
+      chains.push({ id: surface.id, label: roomPrefix + surface.name, steps: chainSteps });
     }
   }
 

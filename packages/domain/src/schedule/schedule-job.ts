@@ -206,6 +206,8 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
     t = place('setup', null, null, 'Setup, masking and protection', null, t, time.earliestStart(t, setupDuration), setupDuration);
   }
   const next = new Array<number>(chainCount).fill(0);
+  const taskPrefix = new Array<string | undefined>(chainCount);
+  const labelPrefix = new Array<string>(chainCount);
   const readyAt = new Array<number>(chainCount).fill(t);
   // Earliest start of each chain's next layer, computed when the chain's wait begins. While it
   // lies ahead of the clock it stays exact (a layer that cannot start at its ready time cannot
@@ -261,8 +263,14 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
     const chain = input.chains[bestChain];
     const i = next[bestChain];
     const step = chain.steps[i];
-    const taskId = `${chain.id}:${i}`;
-    const label = `${chain.label}: ${step.label}`;
+    // Each chain's two prefixes are built once, not once per layer (strings are immutable; same text).
+    let prefix = taskPrefix[bestChain];
+    if (prefix === undefined) {
+      prefix = taskPrefix[bestChain] = `${chain.id}:`;
+      labelPrefix[bestChain] = `${chain.label}: `;
+    }
+    const taskId = prefix + String(i);
+    const label = labelPrefix[bestChain] + step.label;
     t = place(taskId, chain.id, step.layerId, label, step.label, readyAt[bestChain], start, durations[bestChain][i]);
     readyAt[bestChain] = t + step.waitHoursAfter;
     next[bestChain] = i + 1;
