@@ -82,7 +82,8 @@ export function multiplierSteps(
       layer.multipliers?.[name] !== undefined ? `${field}.multipliers.${name}` : `settings.multipliers.${name}`,
       'multiplier',
     );
-    chain.push({ name, factor });
+    // Frozen: every surface under the same conditions shares these steps (see applyLayerHours).
+    chain.push(Object.freeze({ name, factor }));
   }
   return chain;
 }
@@ -92,15 +93,16 @@ export function applyLayerHours(
   p: PreparedLayerHours,
   quantity: number,
   measure: SurfaceAmount['measure'],
-  steps: readonly MultiplierStep[],
+  steps: readonly Readonly<MultiplierStep>[],
 ): LayerHours {
   const counted = measure === 'area' ? scaleArea(quantity, p.scale) : scaleLength(quantity, p.scale);
   const baseHours = (counted * p.share * p.coats) / p.rate;
-  // A fresh chain per surface (callers may keep or change one surface's result), sized up front.
+  // A fresh chain per surface (callers may keep or reorder one surface's list), sized up front;
+  // the steps in it are the frozen ones `multiplierSteps` made, shared rather than copied.
   const chain = new Array<MultiplierStep>(steps.length);
   let hours = baseHours;
   for (let i = 0; i < steps.length; i++) {
-    chain[i] = { name: steps[i].name, factor: steps[i].factor };
+    chain[i] = steps[i];
     hours *= steps[i].factor;
   }
   return { layerId: p.layer.id, baseHours, chain, hours };
