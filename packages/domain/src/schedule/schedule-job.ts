@@ -106,14 +106,20 @@ export function scheduleJob(input: ScheduleInput): JobSchedule {
   requireNonNegative(input.cleanupHours, 'cleanupHours', 'clean-up hours');
   const startDay = toDayNumber(input.startDate, 'startDate');
   const chainCount = input.chains.length;
-  const durations: number[][] = input.chains.map((c, ci) =>
-    c.steps.map((s, si) => {
-      // The field path is only built for a bad value: this runs for every layer of every surface.
+  // Plain loops, no callbacks: this runs for every layer of every surface.
+  const durations = new Array<number[]>(chainCount);
+  for (let ci = 0; ci < chainCount; ci++) {
+    const chainSteps = input.chains[ci].steps;
+    const d = new Array<number>(chainSteps.length);
+    for (let si = 0; si < chainSteps.length; si++) {
+      const s = chainSteps[si];
+      // The field path is only built for a bad value.
       if (!isNonNegativeNumber(s.crewHours)) requireNonNegative(s.crewHours, `chains[${ci}].steps[${si}].crewHours`, 'crew hours');
       if (!isNonNegativeNumber(s.waitHoursAfter)) requireNonNegative(s.waitHoursAfter, `chains[${ci}].steps[${si}].waitHoursAfter`, 'wait');
-      return s.crewHours / crew;
-    }),
-  );
+      d[si] = s.crewHours / crew;
+    }
+    durations[ci] = d;
+  }
 
   const steps: ScheduleStep[] = [];
   const tasks: ScheduledTask[] = [];

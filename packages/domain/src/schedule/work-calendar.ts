@@ -21,7 +21,8 @@ const SEARCH_LIMIT_DAYS = 3660;
 
 /** Working-time arithmetic on absolute hours (day number × 24 + hour of day). */
 export class WorkingTime {
-  private readonly weekdays: ReadonlySet<number>;
+  /** bit d set when ISO weekday d is worked: a bit test rather than a set look-up per day */
+  private readonly weekdayBits: number;
   private readonly holidays: ReadonlySet<number>;
   /**
    * Next working day on or after a day, memoised: the scheduler asks the same days many times.
@@ -44,7 +45,7 @@ export class WorkingTime {
         throw new DomainInputError(`${field}.workingWeekdays[${i}]`, 'Weekdays are numbered 1 (Monday) to 7 (Sunday).');
       }
     });
-    this.weekdays = new Set(calendar.workingWeekdays);
+    this.weekdayBits = calendar.workingWeekdays.reduce((bits, d) => bits | (1 << d), 0);
     this.holidays = new Set((calendar.holidays ?? []).map((h, i) => toDayNumber(h, `${field}.holidays[${i}]`)));
     this.dayStart = requireNonNegative(calendar.dayStartHour, `${field}.dayStartHour`, 'day start hour');
     this.dayLength = requirePositive(calendar.productiveHoursPerDay, `${field}.productiveHoursPerDay`, 'productive hours per day');
@@ -58,7 +59,7 @@ export class WorkingTime {
   }
 
   isWorkingDay(day: number): boolean {
-    return this.weekdays.has(isoWeekday(day)) && !this.holidays.has(day);
+    return (this.weekdayBits & (1 << isoWeekday(day))) !== 0 && (this.holidays.size === 0 || !this.holidays.has(day));
   }
 
   nextWorkingDay(day: number): number {
