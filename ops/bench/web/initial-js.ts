@@ -85,7 +85,7 @@ function indexTags(html: string): IndexTags {
 
 /** The largest packages and modules of the initial files, from a stats.json (esbuild metafile). */
 function contributorLines(statsFile: string, mainScript: string, share: number): string[] {
-  if (!existsSync(statsFile)) return [`  contributors: no ${path.relative(root, statsFile)} (run with --stats to make one)`];
+  if (!existsSync(statsFile)) return [`  contributors: no ${statsFile} (run with --stats to make one)`];
   const meta = JSON.parse(readFileSync(statsFile, 'utf8')) as Metafile;
   const { files, modules, packages } = contributors(meta);
   const same = files.includes(mainScript)

@@ -5,13 +5,13 @@
  * catcher receives the client's sign-in link and the local S3 stand-in (in-process too) holds files. Sessions are made through the API, as the apps do.
  */
 import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
-import { cpSync, existsSync, mkdtempSync, rmSync, symlinkSync } from 'node:fs';
+import { cpSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { waitForBuilds } from './figures';
 import { startS3Fake } from '../../../server/src/files/s3-fake';
-import { type Inbox, linkIn, startInbox } from '../../../server/src/testing/inbox';
+import { type Catcher, firstLink, startCatcher } from './mail';
 import { testDatabaseUrls } from '../../../server/src/testing/test-env';
 
 export const root = path.resolve(__dirname, '../../..');
@@ -21,7 +21,7 @@ const PORTS = { from: 4450, to: 4499 };
 export interface WebServer {
   readonly base: string;
   readonly pid: number;
-  readonly inbox: Inbox;
+  readonly inbox: Catcher;
   stop(): Promise<void>;
 }
 
@@ -71,14 +71,55 @@ async function waitUntilUp(base: string, child: ChildProcess): Promise<void> {
 }
 
 /**
+ * One run at a time on this machine: two would share the database (each makes it afresh) and slow
+ * each other's figures. The lock is a folder holding the owner's PID; a dead owner's lock is taken over.
+ */
+const RUN_LOCK = path.join(os.tmpdir(), 'layerbook-bench-web.lock');
+
+async function takeRunLock(): Promise<void> {
+  for (;;) {
+    try {
+      mkdirSync(RUN_LOCK);
+      writeFileSync(path.join(RUN_LOCK, 'pid'), String(process.pid));
+      return;
+    } catch {
+      const owner = Number(existsSync(path.join(RUN_LOCK, 'pid')) ? readFileSync(path.join(RUN_LOCK, 'pid'), 'utf8') : NaN);
+      let alive = Number.isNaN(owner); // a lock being made has no PID yet
+      try {
+        if (!alive) alive = process.kill(owner, 0);
+      } catch {
+        alive = false;
+      }
+      if (!alive) rmSync(RUN_LOCK, { recursive: true, force: true });
+      else {
+        process.stderr.write(`another web bench (PID ${owner}) is running; waiting…\n`);
+        await new Promise((r) => setTimeout(r, 10_000));
+      }
+    }
+  }
+}
+
+const releaseRunLock = () => rmSync(RUN_LOCK, { recursive: true, force: true });
+
+/**
  * PostgreSQL up, a fresh seeded database, the built server listening; stop() ends it by PID.
  * `from`: the checkout whose build is served (another one's, to compare; default this one).
  */
 export async function startWebServer(from = root): Promise<WebServer> {
-  const build = await snapshotBuild(path.resolve(from));
-  execFileSync('bash', [path.join(root, 'ops/pg-start.sh')], { stdio: ['ignore', 'ignore', 'inherit'] });
-  execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: ['ignore', 'ignore', 'inherit'] });
-  const inbox = await startInbox();
+  await takeRunLock();
+  const build = await snapshotBuild(path.resolve(from)).catch((error: unknown) => {
+    releaseRunLock();
+    throw error;
+  });
+  try {
+    execFileSync('bash', [path.join(root, 'ops/pg-start.sh')], { stdio: ['ignore', 'ignore', 'inherit'] });
+    execFileSync('bash', [path.join(root, 'ops/pg-createdb.sh'), DB, '--fresh'], { stdio: ['ignore', 'ignore', 'inherit'] });
+  } catch (error) {
+    rmSync(build, { recursive: true, force: true });
+    releaseRunLock();
+    throw error;
+  }
+  const inbox = await startCatcher(await freePort());
   const s3Dir = mkdtempSync(path.join(os.tmpdir(), 'layerbook-web-bench-s3-'));
   const s3 = await startS3Fake({ directory: s3Dir, port: await freePort(), bucket: 'layerbook' });
   const port = await freePort();
@@ -100,13 +141,19 @@ export async function startWebServer(from = root): Promise<WebServer> {
     S3_ENDPOINT: s3.endpoint,
     S3_BUCKET: 'layerbook',
   };
-  execFileSync('node', [path.join(build, 'server/dist/seed/run.js')], { cwd: build, env, stdio: ['ignore', 'ignore', 'inherit'] });
   const closeHelpers = async () => {
     await inbox.close();
     await s3.stop();
     rmSync(s3Dir, { recursive: true, force: true });
     rmSync(build, { recursive: true, force: true });
+    releaseRunLock();
   };
+  try {
+    execFileSync('node', [path.join(build, 'server/dist/seed/run.js')], { cwd: build, env, stdio: ['ignore', 'ignore', 'inherit'] });
+  } catch (error) {
+    await closeHelpers();
+    throw error;
+  }
   const child = spawn('node', [path.join(build, 'server/dist/main.js')], { cwd: build, env, stdio: ['ignore', 'ignore', 'inherit'] });
   let stopped = false;
   const stop = async () => {
@@ -176,8 +223,8 @@ export async function clientSession(server: WebServer, email: string): Promise<{
   const first = await call(server.base, '/api/portal/session', '');
   const { csrfToken } = (await first.res.json()) as { csrfToken: string };
   await call(server.base, '/api/portal/auth/link', first.cookie, csrfToken, { email });
-  const mail = await server.inbox.waitFor((m) => (m.to && 'text' in m.to ? m.to.text : JSON.stringify(m.to ?? '')).includes(email), 30_000);
-  const token = new URL(linkIn(mail)).searchParams.get('token');
+  const mail = await server.inbox.waitFor(email, 30_000);
+  const token = new URL(firstLink(mail)).searchParams.get('token');
   if (!token) throw new Error(`the sign-in e-mail to ${email} carries no token`);
   const redeemed = await call(server.base, '/api/portal/auth/redeem', first.cookie, csrfToken, { token });
   const list = await call(server.base, '/api/portal/proposals', redeemed.cookie);
