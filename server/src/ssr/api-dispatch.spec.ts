@@ -1,4 +1,5 @@
-import type { RequestHandler } from 'express';
+import express, { type RequestHandler } from 'express';
+import { IncomingMessage, ServerResponse } from 'node:http';
 import { Pool } from 'pg';
 import request from 'supertest';
 import { createApp } from '../app';
@@ -83,6 +84,10 @@ describe('API calls of a server render, dispatched in-process', () => {
     expect(missing.statusCode).toBe(404);
     expect(String(missing.headers['content-type'])).toContain('application/problem+json');
     await expect(dispatch({ method: 'GET', url: '/today', headers: {} })).rejects.toThrow(/Only the API/);
+    // Express's shared prototypes stay Node's: real requests of the process are untouched.
+    expect(Object.getPrototypeOf(express.request)).toBe(IncomingMessage.prototype);
+    expect(Object.getPrototypeOf(express.response)).toBe(ServerResponse.prototype);
+    expect((await request(t.app).get('/api/health')).body).toEqual({ status: 'ok' });
   });
 
   it('an anonymous render writes no session row and sets no session cookie', async () => {
