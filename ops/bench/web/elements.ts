@@ -37,6 +37,8 @@ interface Seen {
 }
 
 export interface PageElements {
+  /** the sum of the load's shifts (no session windows: an upper bound of its CLS) */
+  shiftTotal: number;
   lcpElement: string;
   clsCulprits: string[];
 }
@@ -83,5 +85,5 @@ function describeSeen(seen: Seen): PageElements {
       const after = font && shift.time - font.end < 500 ? ` — ${Math.round(shift.time - font.end)} ms after font ${font.name} arrived` : '';
       return `${shift.value.toFixed(3)} at ${s(shift.time)}: ${shift.sources.join(', ') || 'no source named'}${after}`;
     });
-  return { lcpElement, clsCulprits };
+  return { shiftTotal: seen.shifts.reduce((sum, shift) => sum + shift.value, 0), lcpElement, clsCulprits };
 }

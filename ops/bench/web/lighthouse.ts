@@ -67,10 +67,13 @@ function describe(page: PageToRun, runs: PageFigures[], seen: PageElements | und
   ];
   const lcpElement = typical.lcpElement ?? seen?.lcpElement ?? 'unknown';
   const shifts = typical.clsCulprits ?? seen?.clsCulprits ?? [];
-  if (seen)
+  if (seen) {
+    const why = (typical.elementsError ?? '').slice(0, 140);
     out.push(
-      `  (LCP element and shifts seen by the page in a throttled load of its own: Lighthouse's audits failed: ${typical.elementsError})`,
+      `  LCP element and shifts below: seen by the page in a throttled load of its own (shifts there add up to ` +
+        `${seen.shiftTotal.toFixed(3)}), as Lighthouse could not name them: ${why}`,
     );
+  }
   out.push(`  LCP element: ${lcpElement}`, `  CLS culprits:${shifts.length === 0 ? ' none' : ''}`, ...shifts.map((c) => `    ${c}`));
   const failed = [...new Set(runs.flatMap((r) => r.failedAudits))];
   if (failed.length > 0) out.push(`  accessibility audits failed: ${failed.join(', ')}`);
