@@ -44,8 +44,10 @@ interface Page {
 const apiCallsSeen: string[] = [];
 const logSink = {
   write(line: string) {
-    const url = (JSON.parse(line) as { req?: { url?: string } }).req?.url;
-    if (url) apiCallsSeen.push(url);
+    const entry = JSON.parse(line) as { level?: number; req?: { url?: string } };
+    // Errors are always shown (the logger stays at "error" outside the one logged render).
+    if ((entry.level ?? 0) >= 50) process.stderr.write(line);
+    else if (entry.req?.url) apiCallsSeen.push(entry.req.url);
   },
 };
 
@@ -67,7 +69,7 @@ async function main(): Promise<void> {
   await seedDemo(seedPool);
   await seedPool.end();
 
-  const logger = pino({ level: 'silent' }, logSink);
+  const logger = pino({ level: 'error' }, logSink);
   const app = createApp(
     { config: { ...config, NODE_ENV: 'development' }, ...services, logger, storage: noFiles, now: () => new Date() },
     await loadSsrHandlers(root),
@@ -116,7 +118,7 @@ async function main(): Promise<void> {
       apiCallsSeen.length = 0;
       logger.level = 'info';
       const html = await (await fetch(`${origin}${page.url}`, { headers: { cookie: pageCookie } })).text();
-      logger.level = 'silent';
+      logger.level = 'error';
       const calls = [...new Set(apiCallsSeen)];
       const staticName = `${page.label.replaceAll(' ', '-')}.html`;
       writeFileSync(path.join(staticDir, staticName), 'x'.repeat(Buffer.byteLength(html)));
