@@ -84,18 +84,27 @@ function indexTags(html: string): IndexTags {
 }
 
 /** The largest packages and modules of the initial files, from a stats.json (esbuild metafile). */
-function contributorLines(statsFile: string, mainScript: string, share: number): string[] {
+function contributorLines(statsFile: string, mainFile: string, totalRaw: number, share: number): string[] {
   if (!existsSync(statsFile)) return [`  contributors: no ${statsFile} (run with --stats to make one)`];
   const meta = JSON.parse(readFileSync(statsFile, 'utf8')) as Metafile;
   const { files, modules, packages } = contributors(meta);
-  const same = files.includes(mainScript)
-    ? 'the same build as dist/'
-    : `another build than dist/ (its entry is ${files[0]}): sources changed since`;
+  // Compared by content: with the chunks merged after esbuild, a name no longer tells two builds apart.
+  const theirs = path.join(path.dirname(statsFile), 'browser', path.basename(mainFile));
+  const same =
+    existsSync(theirs) && readFileSync(theirs).equals(readFileSync(mainFile))
+      ? 'the same build as dist/'
+      : `another build than dist/ (the sources or the build settings changed since)`;
+  // The metafile counts bytes as esbuild wrote them; the chunk merge minifies again, so they are scaled to the files' size.
+  const scale = totalRaw / modules.reduce((sum, m) => sum + m.bytes, 0);
+  const row = (c: { name: string; bytes: number }) =>
+    `    ${kB(c.bytes * scale).padStart(9)}  ≈${kB(c.bytes * scale * share).padStart(8)} br  ${c.name}`;
   const out = [`  contributors from ${statsFile}, ${same}; ${files.length} initial files`];
-  out.push(`  top packages (raw bytes in the initial files; ≈brotli at the files' own ${(share * 100).toFixed(0)}% ratio):`);
-  for (const p of packages.slice(0, 12)) out.push(`    ${kB(p.bytes).padStart(9)}  ≈${kB(p.bytes * share).padStart(8)} br  ${p.name}`);
+  out.push(
+    `  top packages (raw, the metafile's bytes × ${scale.toFixed(2)} to add up to the files; ≈brotli at their ${(share * 100).toFixed(0)}% ratio):`,
+  );
+  for (const p of packages.slice(0, 12)) out.push(row(p));
   out.push('  top modules:');
-  for (const m of modules.slice(0, 20)) out.push(`    ${kB(m.bytes).padStart(9)}  ≈${kB(m.bytes * share).padStart(8)} br  ${m.name}`);
+  for (const m of modules.slice(0, 20)) out.push(row(m));
   return out;
 }
 
@@ -125,7 +134,7 @@ function reportApp(app: string, statsFile: string | undefined): string[] {
   for (const r of [...rows].sort((a, b) => b.br - a.br).slice(0, 6))
     out.push(`    ${kB(r.br).padStart(9)} / ${kB(r.raw).padStart(9)}  ${r.file}`);
 
-  if (statsFile) out.push(...contributorLines(statsFile, path.basename(tags.scripts[0]), total.br / total.raw));
+  if (statsFile) out.push(...contributorLines(statsFile, path.join(browserDir, tags.scripts[0]), total.raw, total.br / total.raw));
   return out;
 }
 

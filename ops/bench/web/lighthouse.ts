@@ -44,6 +44,8 @@ function option(name: string): string | undefined {
 }
 
 const fmtS = (ms: number) => `${(ms / 1000).toFixed(2)} s`;
+/** A shift too small for three decimals still misses a goal of 0: it is printed so it does not read as 0. */
+const fmtCls = (cls: number) => (cls === 0 || cls >= 0.001 ? cls.toFixed(3) : cls.toExponential(1));
 
 /** The median figures of one page's runs, each against its goal (ratio = measured ÷ goal). */
 function describe(page: PageToRun, runs: PageFigures[], seen: PageElements | undefined): string[] {
@@ -60,7 +62,7 @@ function describe(page: PageToRun, runs: PageFigures[], seen: PageElements | und
     `  performance ${perf} vs ≥ ${GOALS.performance}: ${ratio(perf, GOALS.performance)} ${meets(perf >= GOALS.performance)}` +
       `   accessibility ${a11y} vs ${GOALS.accessibility}: ${ratio(a11y, GOALS.accessibility)} ${meets(a11y >= GOALS.accessibility)}`,
     `  LCP ${fmtS(lcp)} vs ≤ ${fmtS(GOALS.lcpMs)}: ${ratio(lcp, GOALS.lcpMs)} ${meets(lcp <= GOALS.lcpMs)}` +
-      `   CLS ${cls.toFixed(3)} vs ${GOALS.cls}: ${cls === 0 ? 'meets' : `misses (${cls.toFixed(3)} over)`}`,
+      `   CLS ${fmtCls(cls)} vs ${GOALS.cls}: ${cls === 0 ? 'meets' : `misses (${fmtCls(cls)} over)`}`,
     `  TBT ${Math.round(m((r) => r.tbtMs))} ms   FCP ${fmtS(m((r) => r.fcpMs))}   (no goals; Lighthouse's "good": TBT ≤ 200 ms, FCP ≤ 1.8 s)`,
     `  transferred ${kB(m((r) => r.transferBytes))} in ${m((r) => r.requests)} requests; ` +
       `of it script ${kB(m((r) => r.scriptBytes))}, fonts ${kB(m((r) => r.fontBytes))}; benchmark index ${Math.round(m((r) => r.benchmarkIndex))}`,

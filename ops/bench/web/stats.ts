@@ -87,8 +87,10 @@ export function buildWithStats(root: string, app: string): string {
   }
   try {
     process.stderr.write(`building ${app} with --stats-json into ${out}…\n`);
+    // Chunks merged after esbuild, as ops/build.sh builds them.
     execFileSync('npx', ['ng', 'build', app, '--stats-json', `--output-path=${out}`], {
       cwd: root,
+      env: { ...process.env, NG_BUILD_OPTIMIZE_CHUNKS: '1' },
       stdio: ['ignore', 'ignore', 'inherit'],
     });
   } finally {
