@@ -22,7 +22,9 @@ const INLINED_MEDIA_URL = /url\((['"]?)\.\/media\//g;
  * manifest and helpers (admin), and the offline page it keeps (`index.csr.html`). Revalidated on
  * every use (ETag), so a release reaches the phones at once rather than in a year.
  */
-const REVALIDATED = /[\\/](?:ngsw\.json|ngsw-worker\.js|safety-worker\.js|worker-basic\.min\.js|index\.csr\.html)(?:\.br|\.gz)?$/;
+// main-*.js: the build merges the first-load chunks into it but keeps the pre-merge hashed name, so the same name can carry new code.
+const REVALIDATED =
+  /[\\/](?:main-[A-Z0-9]+\.js|ngsw\.json|ngsw-worker\.js|safety-worker\.js|worker-basic\.min\.js|index\.csr\.html)(?:\.br|\.gz)?$/;
 
 export interface SsrAppOptions {
   /** The built browser files (`dist/<app>/browser`), served as they are. */
