@@ -1,17 +1,19 @@
 /**
  * Cash page API figures: the four /api/cash reads for a firm with 100,000 invoices (the billing
  * bench's loader) and 20,000 payments, at 10 connections — p95 against the 100 ms limit, and the
- * ratio to the same queries run raw: each read's queries are recorded from the API's own functions
- * (firm clock, the kept figures and the rest, in order) and replayed in one read-only tenant
- * transaction (raw-queries.ts). The API adds the session check, packages/domain's arithmetic and
- * the JSON. Figures, not a test.
+ * ratio to the same queries run raw: each read's queries, made by the API's own plan for the demo
+ * owner (server/src/cash), replayed one by one in one read-only tenant transaction (raw-queries.ts).
+ * The API adds the session check (sent with BEGIN), packages/domain's arithmetic and the JSON, and
+ * sends its queries together with COMMIT. Figures, not a test.
  *   npx tsx ops/bench/cash/cash-bench.ts        (PostgreSQL must be up: bash ops/pg-start.sh)
+ *   CASH_BENCH_ONLY=receivables,jobs …          only the reads whose path has one of those words
  */
 import os from 'node:os';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
-import { withTenant, type TenantTx } from '@layerbook/db';
-import type { Pool } from 'pg';
+import { withTenant, type SqlQuery } from '@layerbook/db';
+import { staffRowSql, toStaffPrincipal } from '../../../server/src/auth/staff-principal';
+import type { StaffPrincipal } from '../../../server/src/http/principal';
 import { cashForecastView } from '../../../server/src/cash/forecast';
 import { cashJobs } from '../../../server/src/cash/jobs';
 import { cashReceivableInvoices, cashReceivables } from '../../../server/src/cash/receivables';
@@ -28,8 +30,6 @@ const LIMIT_MS = 100;
 const REQUESTS = Number(process.env['CASH_BENCH_REQUESTS'] ?? 1_000);
 const measure = (job: Record<string, unknown>) => measureAt(CONNECTIONS, job);
 
-type Query = { text: string; values: unknown[] };
-
 /** Runs one raw job (raw-queries.ts) in a worker thread, as measure() runs the shared driver. */
 const measureRaw = (job: Omit<RawJob, 'concurrency'>) =>
   new Promise<Measured>((resolve, reject) => {
@@ -38,25 +38,6 @@ const measureRaw = (job: Omit<RawJob, 'concurrency'>) =>
     worker.once('message', (m: Measured | { error: string }) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
     worker.once('error', reject);
   });
-
-/** The queries one read runs, in order: its function called once in the firm's transaction with each query recorded. */
-async function queriesOf(pool: Pool, firmId: string, read: (tx: TenantTx) => Promise<unknown>): Promise<Query[]> {
-  return withTenant(pool, firmId, async (tx) => {
-    const client = tx.client as unknown as { query: (text: string, values?: unknown[]) => Promise<unknown> };
-    const original = client.query.bind(client);
-    const seen: Query[] = [];
-    client.query = (text: string, values?: unknown[]) => {
-      seen.push({ text, values: values ?? [] });
-      return original(text, values);
-    };
-    try {
-      await read(tx);
-    } finally {
-      client.query = original;
-    }
-    return seen;
-  });
-}
 
 async function main(): Promise<void> {
   const config = await benchDatabase(DB, CONNECTIONS);
@@ -95,16 +76,30 @@ async function main(): Promise<void> {
       `20 other firms × 1,000 invoices (loaded in ${loadSeconds} s); ${REQUESTS} requests, ${CONNECTIONS} connections; ` +
       `machine: ${os.cpus().length} cores, load average ${os.loadavg()[0].toFixed(1)} at the start`,
   );
-  const cases: Array<[string, string, (tx: TenantTx) => Promise<unknown>]> = [
-    ['receivables by age', '/api/cash/receivables', (tx) => cashReceivables(tx, now(), undefined)],
-    ['cash by month', '/api/cash/received', (tx) => cashReceived(tx, now())],
-    ['13-week forecast', '/api/cash/forecast', (tx) => cashForecastView(tx, now())],
-    ['jobs and margins', '/api/cash/jobs', (tx) => cashJobs(tx, now(), true)],
+  // The demo owner as the API sees them once re-checked: each read's queries are made from it.
+  const ownerId = (
+    (await queue.boss.getDb().executeSql(`select id from users where email = $1`, [DEMO.people[0].email])).rows as Array<{ id: string }>
+  )[0].id;
+  const owner = await withTenant(pool, firmId, async (tx) =>
+    toStaffPrincipal(
+      firmId,
+      ownerId,
+      (await tx.client.query(staffRowSql(firmId, ownerId))).rows[0] as Parameters<typeof toStaffPrincipal>[2],
+    ),
+  );
+  if (!owner) throw new Error('The demo owner is not an active member.');
+  const cases: Array<[string, string, (staff: StaffPrincipal) => { queries: readonly SqlQuery[] }]> = [
+    ['receivables by age', '/api/cash/receivables', (staff) => cashReceivables(staff, now(), {})],
+    ['cash by month', '/api/cash/received', (staff) => cashReceived(staff, now())],
+    ['13-week forecast', '/api/cash/forecast', (staff) => cashForecastView(staff, now())],
+    ['jobs and margins', '/api/cash/jobs', (staff) => cashJobs(staff)],
     // Opening one age (a drill-down, not part of the page's first load): the 31–60 days' invoices, from the base tables.
-    ['drill-down 31–60', '/api/cash/receivables/invoices?age=31-60', (tx) => cashReceivableInvoices(tx, now(), { age: '31-60' })],
+    ['drill-down 31–60', '/api/cash/receivables/invoices?age=31-60', (staff) => cashReceivableInvoices(staff, now(), { age: '31-60' })],
   ];
-  for (const [label, url, read] of cases) {
-    const queries = await queriesOf(pool, firmId, read);
+  // CASH_BENCH_ONLY=receivables,jobs … measures only the reads whose path has one of those words.
+  const only = process.env['CASH_BENCH_ONLY']?.split(',');
+  for (const [label, url, plan] of cases.filter(([, url]) => !only || only.some((word) => url.includes(word)))) {
+    const queries = plan(owner).queries.map((q) => ({ ...q, values: [...q.values] }));
     const httpJob = { mode: 'get', port, path: url, cookie: session };
     const rawJob = { databaseUrl: config.DATABASE_URL, tenantId: firmId, queries };
     await measure({ ...httpJob, total: 200 }); // warm-up

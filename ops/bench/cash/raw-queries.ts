@@ -10,7 +10,7 @@ import { Pool } from 'pg';
 export interface RawJob {
   databaseUrl: string;
   tenantId: string;
-  queries: Array<{ text: string; values: unknown[] }>;
+  queries: Array<{ name?: string; text: string; values: unknown[] }>;
   concurrency: number;
   total: number;
 }
@@ -26,7 +26,9 @@ async function run(job: RawJob): Promise<{ rps: number; p50: number; p95: number
       await client.query('begin');
       await client.query(`select set_config('app.tenant_id', $1, true)`, [job.tenantId]);
       await client.query('set transaction read only');
-      for (const q of job.queries) await client.query(q.text, q.values);
+      // Named ones prepared per connection, as the API runs them (packages/db prepared-reads.ts).
+      for (const q of job.queries)
+        await client.query(q.name ? { name: q.name, text: q.text, values: q.values } : { text: q.text, values: q.values });
       await client.query('commit');
     } finally {
       client.release();

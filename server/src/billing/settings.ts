@@ -12,13 +12,19 @@ import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 
 /** The firm's billing settings, or the defaults when the owner has not saved any. */
-export async function loadBillingSettings(tx: TenantTx): Promise<{ settings: BillingSettings; isDefault: boolean }> {
-  const { rows } = await tx.client.query<{ settings: BillingSettings }>(`select settings from firm_billing_settings where tenant_id = $1`, [
-    tx.tenantId,
-  ]);
+/** The firm's stored billing settings ($1 tenant): no row until the owner saves them. */
+export const BILLING_SETTINGS_SQL = `select settings from firm_billing_settings where tenant_id = $1`;
+
+/** The settings from BILLING_SETTINGS_SQL's rows: the stored ones over the defaults (newer fields), or the defaults. */
+export function billingSettingsOf(rows: readonly { settings: BillingSettings }[]): { settings: BillingSettings; isDefault: boolean } {
   return rows[0]
     ? { settings: { ...DEFAULT_BILLING_SETTINGS, ...rows[0].settings }, isDefault: false }
     : { settings: DEFAULT_BILLING_SETTINGS, isDefault: true };
+}
+
+export async function loadBillingSettings(tx: TenantTx): Promise<{ settings: BillingSettings; isDefault: boolean }> {
+  const { rows } = await tx.client.query<{ settings: BillingSettings }>(BILLING_SETTINGS_SQL, [tx.tenantId]);
+  return billingSettingsOf(rows);
 }
 
 /** The settings' deposit limit as the domain takes it: whole percents become shares (10 → 0.1), in decimal. */

@@ -121,6 +121,38 @@ describe('receivables by age', () => {
     const res = await a.agent.get('/api/cash/receivables?asOf=20-12-2026');
     expect(res.status).toBe(400);
     expect(JSON.stringify(res.body)).toContain('asOf');
+    const which = await a.agent.get('/api/cash/receivables?clients=some');
+    expect(which.status).toBe(400);
+    expect(JSON.stringify(which.body)).toContain('clients');
+  });
+
+  it('lists the 25 clients owing most (largest first, ties by id), all of them on request, and counts them all', async () => {
+    const c = await cashFirm(t, 'Many Clients Plaster');
+    // 27 clients owing 100, 110 … 350 (the last two the same, to show the tie) on one due date each, none held back
+    for (let k = 0; k < 27; k++) {
+      const [client] = await c.sql<{ id: string }>(
+        `insert into clients (tenant_id, kind, name) values ($1, 'homeowner', $2) returning id`,
+        [`Client ${String(k).padStart(2, '0')}`],
+      );
+      const amount = (100 + 10 * Math.min(k, 25)).toFixed(2);
+      const id = await c.invoice(k + 1, '2026-11-01', k % 2 === 0 ? '2026-12-31' : '2026-11-05', amount);
+      await c.sql(`update invoices set client_id = $3 where tenant_id = $1 and id = $2`, [id, client.id]);
+    }
+    for (const asOf of ['', '?asOf=2026-12-20', '?asOf=2026-11-20']) {
+      const top = await get<CashReceivables>(c.agent, `/api/cash/receivables${asOf}`);
+      const all = await get<CashReceivables>(c.agent, `/api/cash/receivables${asOf}${asOf ? '&' : '?'}clients=all`);
+      expect([top.status, all.status]).toEqual([200, 200]);
+      expect([top.body.clientCount, all.body.clientCount, all.body.clients.length, top.body.clients.length]).toEqual([27, 27, 27, 25]);
+      expect(top.body.clients).toEqual(all.body.clients.slice(0, 25));
+      // the firm's figures cover every client either way: Σ 100 … 350 with 350 twice
+      expect([top.body.total, all.body.total, top.body.invoiceCount]).toEqual(['6200.00', '6200.00', 27]);
+      const totals = all.body.clients.map((x) => x.total);
+      expect(totals.slice(0, 3)).toEqual(['350.00', '350.00', '340.00']);
+      expect(all.body.clients[0].clientId < all.body.clients[1].clientId).toBe(true);
+      expect(totals.at(-1)).toBe('100.00');
+      const sum = (list: readonly { total: string }[]) => list.reduce((n, x) => n.plus(x.total), new Decimal(0)).toFixed(2);
+      expect(sum(all.body.clients)).toBe(all.body.total);
+    }
   });
 });
 

@@ -1,5 +1,5 @@
-import type { TenantTx } from '@layerbook/db';
 import { localDate } from '../firms/local-date';
+import type { StaffPrincipal } from '../http/principal';
 
 export interface FirmClock {
   /** today in the firm's zone */
@@ -8,11 +8,7 @@ export interface FirmClock {
   timeZone: string;
 }
 
-/** The firm's local date, currency and zone (one round trip). */
-export async function firmClock(tx: TenantTx, now: Date): Promise<FirmClock> {
-  const { rows } = await tx.client.query<{ currency: string; time_zone: string }>(`select currency, time_zone from firms where id = $1`, [
-    tx.tenantId,
-  ]);
-  const firm = rows[0];
-  return { today: localDate(firm.time_zone, now), currency: firm.currency, timeZone: firm.time_zone };
+/** The firm's local date, currency and zone, from the signed-in person's re-check (which reads them: no round trip of its own). */
+export function staffClock(staff: Pick<StaffPrincipal, 'timeZone' | 'currency'>, now: Date): FirmClock {
+  return { today: localDate(staff.timeZone, now), currency: staff.currency, timeZone: staff.timeZone };
 }

@@ -1,8 +1,8 @@
-import { DEFAULT_STAGE_LIKELIHOOD, INQUIRY_STAGES, type InquiryStage } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
+import { DEFAULT_STAGE_LIKELIHOOD, INQUIRY_STAGES, type BillingSettings, type InquiryStage } from '@layerbook/contracts';
+import type { SqlQuery } from '@layerbook/db';
 import { addDays } from '@layerbook/domain';
 import Decimal from 'decimal.js';
-import { loadBillingSettings, toDepositCapRule } from '../billing/settings';
+import { BILLING_SETTINGS_SQL, billingSettingsOf, toDepositCapRule } from '../billing/settings';
 import { expectedDeposit, stageOdds } from './domain';
 
 /** The stages an open inquiry can be at. */
@@ -16,12 +16,11 @@ export const DEFAULT_SIGNING_DAYS = 14;
 /**
  * Open invoices' amounts owed and unbilled schedule lines, each summed per date (the forecast adds
  * them up per week, so a day's sum counts the same as its rows); $1 tenant. What is owed comes from
- * the open balances the database keeps per client and due date (cash_open_balances: issued, part
- * paid or refunded invoices with total − paid − credited > 0; issuing always sets the due date).
+ * the open balances the database keeps per due date (cash_open_due_days: issued, part paid or
+ * refunded invoices with total − paid − credited > 0; issuing always sets the due date).
  */
-export const OWED = `select 'i' as kind, b.due_on::text as date, sum(b.owed)::text as amount from cash_open_balances b
-      where b.tenant_id = $1
-      group by b.due_on
+export const OWED = `select 'i' as kind, d.due_on::text as date, d.owed::text as amount from cash_open_due_days d
+      where d.tenant_id = $1
      union all
      select 's', l.expected_on::text, sum(l.amount)::text from payment_schedule_lines l
        join jobs j on j.tenant_id = l.tenant_id and j.id = l.job_id
@@ -36,9 +35,38 @@ export interface Receipt {
   probability?: string;
 }
 
+type Rows = Record<string, unknown>[];
+
+/** The stage odds the firm set in Inquiries. */
+const STAGE_SETTINGS = `select stage, likelihood_percent::text as percent from inquiry_stage_settings where tenant_id = $1`;
+
+/** The firm's own deposit share so far: Σ deposit lines ÷ Σ original contract sums of its jobs. */
+const DEPOSIT_HISTORY = `select sum(d.amount)::text as deposits, sum(j.original_contract_sum)::text as contracts
+       from jobs j join (select job_id, sum(amount) as amount from payment_schedule_lines where tenant_id = $1 and role = 'deposit' group by job_id) d
+         on d.job_id = j.id
+      where j.tenant_id = $1 and j.status <> 'cancelled' and j.original_contract_sum > 0`;
+
+/** Open inquiries with their value: the inquiry's estimated value, else its latest estimate's price. */
+const OPEN_INQUIRIES = `select q.id, q.stage, coalesce(q.estimated_value,
+              (select e.price from estimates e where e.tenant_id = q.tenant_id and e.inquiry_id = q.id and e.price is not null
+                order by e.created_at desc limit 1))::text as value, q.next_follow_up::text as follow_up
+       from inquiries q where q.tenant_id = $1 and q.stage not in ('won', 'lost')`;
+
+/** What the forecast reads, in order: owed (OWED), then the pipeline's four (see readPipeline); $1 tenant. */
+export const forecastQueries = (tenantId: string): SqlQuery[] =>
+  (
+    [
+      ['cash_forecast_owed', OWED],
+      ['cash_forecast_odds', STAGE_SETTINGS],
+      ['cash_forecast_deposit_history', DEPOSIT_HISTORY],
+      ['cash_forecast_billing_settings', BILLING_SETTINGS_SQL],
+      ['cash_forecast_inquiries', OPEN_INQUIRIES],
+    ] as const
+  ).map(([name, text]) => ({ name, text, values: [tenantId] }));
+
 /** Open invoices (amount still owed, by due date) and unbilled schedule lines (by the engine's expected date), per date. */
-export async function loadOwed(tx: TenantTx): Promise<{ invoices: Receipt[]; scheduled: Receipt[] }> {
-  const { rows } = await tx.client.query<{ kind: 'i' | 's'; date: string | null; amount: string }>(OWED, [tx.tenantId]);
+export function readOwed(owedRows: Rows): { invoices: Receipt[]; scheduled: Receipt[] } {
+  const rows = owedRows as Array<{ kind: 'i' | 's'; date: string | null; amount: string }>;
   const pick = (kind: 'i' | 's') =>
     rows.filter((r) => r.kind === kind).map(({ date, amount }) => ({ id: `${kind}:${date ?? 'undated'}`, date, amount }));
   return { invoices: pick('i'), scheduled: pick('s') };
@@ -47,32 +75,23 @@ export async function loadOwed(tx: TenantTx): Promise<{ invoices: Receipt[]; sch
 /**
  * Deposits of open inquiries, each weighted by its stage's odds. Value: the inquiry's estimated
  * value, else its latest estimate's price. Deposit share: the firm's own (deposit lines ÷ original
- * contract sums of its jobs) or the default, within the firm's deposit limit.
+ * contract sums of its jobs) or the default, within the firm's deposit limit. From the rows of
+ * forecastQueries' last four, in order.
  */
-export async function loadPipeline(
-  tx: TenantTx,
+export function readPipeline(
+  [settingRows, historyRows, billingRows, openRows]: Rows[],
   today: string,
   currency: string,
-): Promise<{
+): {
   deposits: Receipt[];
   odds: ReturnType<typeof stageOdds<InquiryStage>>;
   counts: Map<InquiryStage, number>;
   share: string;
   shareIsFirm: boolean;
-}> {
-  const settings = await tx.client.query<{ stage: InquiryStage; percent: string }>(
-    `select stage, likelihood_percent::text as percent from inquiry_stage_settings where tenant_id = $1`,
-    [tx.tenantId],
-  );
-  const odds = stageOdds(OPEN_STAGES, new Map(settings.rows.map((r) => [r.stage, Number(r.percent)])), DEFAULT_STAGE_LIKELIHOOD);
-  const history = await tx.client.query<{ deposits: string | null; contracts: string | null }>(
-    `select sum(d.amount)::text as deposits, sum(j.original_contract_sum)::text as contracts
-       from jobs j join (select job_id, sum(amount) as amount from payment_schedule_lines where tenant_id = $1 and role = 'deposit' group by job_id) d
-         on d.job_id = j.id
-      where j.tenant_id = $1 and j.status <> 'cancelled' and j.original_contract_sum > 0`,
-    [tx.tenantId],
-  );
-  const h = history.rows[0];
+} {
+  const settings = settingRows as Array<{ stage: InquiryStage; percent: string }>;
+  const odds = stageOdds(OPEN_STAGES, new Map(settings.map((r) => [r.stage, Number(r.percent)])), DEFAULT_STAGE_LIKELIHOOD);
+  const h = historyRows[0] as { deposits: string | null; contracts: string | null };
   const shareIsFirm = h.deposits !== null && h.contracts !== null;
   const share = shareIsFirm
     ? new Decimal(h.deposits as string)
@@ -80,19 +99,12 @@ export async function loadPipeline(
         .toDecimalPlaces(4)
         .toString()
     : DEFAULT_DEPOSIT_SHARE;
-  const cap = toDepositCapRule((await loadBillingSettings(tx)).settings.depositCap);
-  const open = await tx.client.query<{ id: string; stage: InquiryStage; value: string | null; follow_up: string | null }>(
-    `select q.id, q.stage, coalesce(q.estimated_value,
-              (select e.price from estimates e where e.tenant_id = q.tenant_id and e.inquiry_id = q.id and e.price is not null
-                order by e.created_at desc limit 1))::text as value, q.next_follow_up::text as follow_up
-       from inquiries q where q.tenant_id = $1 and q.stage not in ('won', 'lost')`,
-    [tx.tenantId],
-  );
+  const cap = toDepositCapRule(billingSettingsOf(billingRows as Array<{ settings: BillingSettings }>).settings.depositCap);
   const counts = new Map<InquiryStage, number>();
   const percent = new Map(odds.map((o) => [o.stage, o.percent]));
   const signing = addDays(today, DEFAULT_SIGNING_DAYS);
   const deposits: Receipt[] = [];
-  for (const q of open.rows) {
+  for (const q of openRows as Array<{ id: string; stage: InquiryStage; value: string | null; follow_up: string | null }>) {
     counts.set(q.stage, (counts.get(q.stage) ?? 0) + 1);
     if (q.value === null) continue;
     deposits.push({

@@ -1,11 +1,12 @@
 import { STAGE_LABELS, type CashForecast, type CashForecastAmounts } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
 import { addDays } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { moneyOut } from '../billing/money';
 import { cashForecast } from './domain';
-import { firmClock } from './firm-clock';
-import { DEFAULT_SIGNING_DAYS, loadOwed, loadPipeline, type Receipt } from './forecast-inputs';
+import type { StaffPrincipal } from '../http/principal';
+import { staffClock } from './firm-clock';
+import { DEFAULT_SIGNING_DAYS, forecastQueries, readOwed, readPipeline, type Receipt } from './forecast-inputs';
+import type { ReportPlan } from './read-only';
 
 export const FORECAST_WEEKS = 13;
 
@@ -13,10 +14,19 @@ export const FORECAST_WEEKS = 13;
  * GET /api/cash/forecast: 13 weeks from this week (firm zone), computed by packages/domain's
  * cashForecast from open invoices, unbilled schedule lines and weighted inquiry deposits.
  */
-export async function cashForecastView(tx: TenantTx, now: Date): Promise<CashForecast> {
-  const clock = await firmClock(tx, now);
-  const owed = await loadOwed(tx);
-  const pipeline = await loadPipeline(tx, clock.today, clock.currency);
+export function cashForecastView(staff: StaffPrincipal, now: Date): ReportPlan<CashForecast> {
+  const clock = staffClock(staff, now);
+  return {
+    queries: forecastQueries(staff.tenantId),
+    answer: ([owedRows, ...pipelineRows]) => forecastOf(clock, readOwed(owedRows), readPipeline(pipelineRows, clock.today, clock.currency)),
+  };
+}
+
+function forecastOf(
+  clock: { today: string; currency: string },
+  owed: ReturnType<typeof readOwed>,
+  pipeline: ReturnType<typeof readPipeline>,
+): CashForecast {
   // A line whose trigger has no date yet is counted beyond the horizon (the day after it).
   const undated = addDays(clock.today, 7 * FORECAST_WEEKS + 7);
   const dated = (list: readonly Receipt[]) => list.map((r) => ({ ...r, date: r.date ?? undated }));

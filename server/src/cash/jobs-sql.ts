@@ -18,11 +18,19 @@ export const JOB_MONEY = `with listed as materialized (select * from jobs where 
     left join prices pr on pr.estimate_id = j.estimate_id and pr.variant_id = j.accepted_variant_id
    order by j.created_at desc, j.id desc`;
 
-/** Σ contract sums of the jobs not cancelled (for the average), and the decided proposals. */
-export const JOB_TOTALS = `select
-    (select coalesce(array_agg(contract_sum::text), '{}') from jobs where tenant_id = $1 and status <> 'cancelled') as contracted,
-    (select count(*)::int from proposal_versions where tenant_id = $1 and status = 'accepted') as accepted,
-    (select count(*)::int from proposal_versions where tenant_id = $1 and status = 'declined') as declined`;
+/** Σ and count of the contract sums of the jobs not cancelled (for the average), and the decided proposals. */
+export const JOB_TOTALS = `select j.contracted_sum, j.contracted_count, p.accepted, p.declined
+    from (select coalesce(sum(contract_sum), 0)::text as contracted_sum, count(*)::int as contracted_count
+            from jobs where tenant_id = $1 and status <> 'cancelled') j,
+         (select count(*) filter (where status = 'accepted')::int as accepted, count(*) filter (where status = 'declined')::int as declined
+            from proposal_versions where tenant_id = $1 and status in ('accepted', 'declined')) p`;
+
+export interface JobTotalsRow {
+  contracted_sum: string;
+  contracted_count: number;
+  accepted: number;
+  declined: number;
+}
 
 /** The stored estimate's price breakdown (decimal strings). */
 export interface StoredPrice {

@@ -1,10 +1,10 @@
 import type { CashJobMargin, CashJobRow, CashJobs } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
 import type Decimal from 'decimal.js';
 import { moneyOut } from '../billing/money';
+import type { StaffPrincipal } from '../http/principal';
 import { averageJobSize, grossMargin, jobMoney, winRate } from './domain';
-import { firmClock } from './firm-clock';
-import { JOB_MONEY, JOB_TOTALS, type JobMoneyRow, type StoredPrice } from './jobs-sql';
+import { JOB_MONEY, JOB_TOTALS, type JobMoneyRow, type JobTotalsRow, type StoredPrice } from './jobs-sql';
+import type { ReportPlan } from './read-only';
 
 /** The newest jobs listed (a page of them: the jobs list holds them all); the win rate and average cover every job. */
 export const JOBS_LISTED = 50;
@@ -35,43 +35,51 @@ function marginOf(price: StoredPrice | null, money: (d: Decimal) => string): Cas
 }
 
 /** GET /api/cash/jobs: win rate, average job size and each job's money; margins for the owner only. */
-export async function cashJobs(tx: TenantTx, now: Date, showMargins: boolean): Promise<CashJobs> {
-  const clock = await firmClock(tx, now);
-  const money = (d: Decimal) => moneyOut(d, clock.currency);
-  const totals = (await tx.client.query<{ contracted: string[]; accepted: number; declined: number }>(JOB_TOTALS, [tx.tenantId])).rows[0];
-  const { rows } = await tx.client.query<JobMoneyRow>(JOB_MONEY, [tx.tenantId, JOBS_LISTED]);
-  const rate = winRate(totals.accepted, totals.declined);
-  const average = averageJobSize(totals.contracted);
-  const jobs: CashJobRow[] = rows.map((r) => {
-    const m = jobMoney({
-      originalContractSum: r.original,
-      approvedChangeOrders: r.change_orders,
-      issued: r.issued,
-      credited: r.credited,
-      // an invoice's amount paid is already less the refunds taken from it
-      paymentsApplied: r.paid,
-      refunded: '0',
-    });
-    const row: CashJobRow = {
-      jobId: r.id,
-      title: r.title,
-      clientId: r.client_id,
-      clientName: r.client_name,
-      status: r.status,
-      estimated: r.price?.total !== undefined ? moneyOut(r.price.total, clock.currency) : null,
-      contracted: money(m.contracted),
-      changeOrders: money(m.changeOrders),
-      invoiced: money(m.invoiced),
-      paid: money(m.paid),
-    };
-    return showMargins ? { ...row, margin: marginOf(r.price, money) } : row;
-  });
+export function cashJobs(staff: StaffPrincipal): ReportPlan<CashJobs> {
+  const showMargins = staff.role === 'owner';
+  const currency = staff.currency;
   return {
-    currency: clock.currency,
-    winRate: { accepted: rate.accepted, decided: rate.decided, percent: rate.percent ? rate.percent.toFixed(1) : null },
-    averageJobSize: average ? money(average) : null,
-    marginsShown: showMargins,
-    jobCount: totals.contracted.length,
-    jobs,
+    queries: [
+      { name: 'cash_job_totals', text: JOB_TOTALS, values: [staff.tenantId] },
+      { name: 'cash_job_money', text: JOB_MONEY, values: [staff.tenantId, JOBS_LISTED] },
+    ],
+    answer: ([totalRows, jobRows]) => {
+      const totals = totalRows[0] as unknown as JobTotalsRow;
+      const money = (d: Decimal) => moneyOut(d, currency);
+      const rate = winRate(totals.accepted, totals.declined);
+      const average = averageJobSize(totals.contracted_sum, totals.contracted_count);
+      const jobs: CashJobRow[] = (jobRows as unknown as JobMoneyRow[]).map((r) => {
+        const m = jobMoney({
+          originalContractSum: r.original,
+          approvedChangeOrders: r.change_orders,
+          issued: r.issued,
+          credited: r.credited,
+          // an invoice's amount paid is already less the refunds taken from it
+          paymentsApplied: r.paid,
+          refunded: '0',
+        });
+        const row: CashJobRow = {
+          jobId: r.id,
+          title: r.title,
+          clientId: r.client_id,
+          clientName: r.client_name,
+          status: r.status,
+          estimated: r.price?.total !== undefined ? moneyOut(r.price.total, currency) : null,
+          contracted: money(m.contracted),
+          changeOrders: money(m.changeOrders),
+          invoiced: money(m.invoiced),
+          paid: money(m.paid),
+        };
+        return showMargins ? { ...row, margin: marginOf(r.price, money) } : row;
+      });
+      return {
+        currency,
+        winRate: { accepted: rate.accepted, decided: rate.decided, percent: rate.percent ? rate.percent.toFixed(1) : null },
+        averageJobSize: average ? money(average) : null,
+        marginsShown: showMargins,
+        jobCount: totals.contracted_count,
+        jobs,
+      };
+    },
   };
 }

@@ -6,8 +6,9 @@ import { insertInvoice } from '../billing/pdf/invoice-fixtures';
 import { startTestServer, type TestServer } from '../testing/harness';
 
 /*
- * The figures the database keeps for the Cash page (cash_open_balances, cash_received_days,
- * cash_job_totals; triggers in the cash_figures_rls migration) against the same sums recomputed from
+ * The figures the database keeps for the Cash page (cash_open_balances and its rollups per due date
+ * and per client, cash_received_days, cash_job_totals; triggers in the cash_figures_rls and
+ * cash_open_rollups_rls migrations) against the same sums recomputed from
  * the base tables, after writes through the billing and payment API and straight into the tables.
  */
 
@@ -19,6 +20,8 @@ let b: Firm;
 /** The kept rows and the same sums from invoices, payments, refunds and change orders, as sorted text. */
 const KEPT = {
   balances: `select client_id || ' ' || due_on || ' ' || owed || ' ' || invoice_count as r from cash_open_balances where tenant_id = $1`,
+  dueDays: `select due_on || ' ' || owed || ' ' || invoice_count as r from cash_open_due_days where tenant_id = $1`,
+  clients: `select client_id || ' ' || owed || ' ' || invoice_count as r from cash_open_clients where tenant_id = $1`,
   received: `select kind || ' ' || day || ' ' || amount || ' ' || count as r from cash_received_days where tenant_id = $1`,
   jobs: `select job_id || ' ' || issued || ' ' || credited || ' ' || paid || ' ' || change_orders as r from cash_job_totals where tenant_id = $1`,
 };
@@ -27,6 +30,14 @@ const RECOMPUTED = {
               where tenant_id = $1 and status in ('issued', 'part_paid', 'refunded') and due_on is not null
                 and total - amount_paid - amount_credited > 0
               group by client_id, due_on`,
+  dueDays: `select due_on || ' ' || sum(total - amount_paid - amount_credited) || ' ' || count(*) as r from invoices
+              where tenant_id = $1 and status in ('issued', 'part_paid', 'refunded') and due_on is not null
+                and total - amount_paid - amount_credited > 0
+              group by due_on`,
+  clients: `select client_id || ' ' || sum(total - amount_paid - amount_credited) || ' ' || count(*) as r from invoices
+              where tenant_id = $1 and status in ('issued', 'part_paid', 'refunded') and due_on is not null
+                and total - amount_paid - amount_credited > 0
+              group by client_id`,
   received: `select 'payment ' || received_on || ' ' || sum(amount) || ' ' || count(*) as r from payments where tenant_id = $1 group by received_on
              union all
              select 'refund ' || refunded_on || ' ' || sum(amount) || ' ' || count(*) from refunds
@@ -46,7 +57,7 @@ const sql = (f: Firm, text: string, values: unknown[] = []) =>
   withTenant(t.ctx.pool, f.firmId, async (tx) => (await tx.client.query(text, [tx.tenantId, ...values])).rows);
 
 async function expectKeptEqualsRecomputed(f: Firm): Promise<void> {
-  for (const key of ['balances', 'received', 'jobs'] as const) {
+  for (const key of ['balances', 'dueDays', 'clients', 'received', 'jobs'] as const) {
     const kept = await rows(f, KEPT[key]);
     expect({ [key]: kept }).toEqual({ [key]: await rows(f, RECOMPUTED[key]) });
     expect(kept.length).toBeGreaterThan(0);
@@ -152,7 +163,7 @@ describe('figures kept by the database', () => {
       [a, b],
       [b, a],
     ] as const) {
-      for (const table of ['cash_open_balances', 'cash_received_days', 'cash_job_totals']) {
+      for (const table of ['cash_open_balances', 'cash_open_due_days', 'cash_open_clients', 'cash_received_days', 'cash_job_totals']) {
         const [seen] = await sql(f, `select count(*)::int as n, count(*) filter (where tenant_id <> $1)::int as others from ${table}`);
         expect([table, seen['others']]).toEqual([table, 0]);
         expect(seen['n']).toBeGreaterThan(0);

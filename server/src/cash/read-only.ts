@@ -1,8 +1,8 @@
 import type { StaffRole } from '@layerbook/contracts';
-import { withTenantAndFirst, type TenantTx } from '@layerbook/db';
+import { readManyInOneTrip, withTenantAndFirst, type SqlQuery, type TenantTx } from '@layerbook/db';
 import type { Request } from 'express';
 import type { AppContext } from '../context';
-import { withStaff } from '../http/guards';
+import { readAsStaffPlanned, withStaff } from '../http/guards';
 import type { StaffPrincipal } from '../http/principal';
 
 /**
@@ -38,4 +38,34 @@ export async function withStaffReport<T>(
   }
   const staff = await withStaff(ctx, req, needed, (_tx, s) => Promise.resolve(s));
   return withTenantAndFirst(replica, staff.tenantId, READ_ONLY, (tx) => fn(tx, staff));
+}
+
+type Rows = Record<string, unknown>[];
+
+/** A report's queries, made once who asks is known, and the answer made from their rows (in the same order). */
+export interface ReportPlan<T> {
+  readonly queries: readonly SqlQuery[];
+  readonly answer: (results: Rows[]) => T;
+}
+
+/**
+ * withStaffReport for reads that are a fixed set of queries: on the primary in two round trips (the
+ * person's re-check, then every query and COMMIT: readAsStaffPlanned); with a replica, the re-check on
+ * the primary and the queries on the replica in one. `plan` runs after the re-check, so a 400 from
+ * parsing the request still comes after a 401 or 403.
+ */
+export async function readReport<T>(
+  ctx: AppContext,
+  req: Request,
+  needed: StaffRole,
+  plan: (staff: StaffPrincipal) => ReportPlan<T>,
+): Promise<T> {
+  const replica = ctx.readPool;
+  if (!replica) {
+    const { planned, results } = await readAsStaffPlanned(ctx, req, needed, plan);
+    return planned.answer(results);
+  }
+  const staff = await withStaff(ctx, req, needed, (_tx, s) => Promise.resolve(s));
+  const planned = plan(staff);
+  return planned.answer(await readManyInOneTrip(replica, staff.tenantId, planned.queries));
 }

@@ -62,36 +62,63 @@ const AGE = (due: string) =>
   `case when ${due} >= $3::date then 0 when ${due} >= $4::date then 1 when ${due} >= $5::date then 2 when ${due} >= $6::date then 3 else 4 end`;
 
 /**
- * As of a past date, per client and age, summed from the base tables: $3–$6 as in AGE (packages/domain's
- * bucketDueDates). The latest due date in each sum stands for it (every date in one age ages the same).
+ * The answer from `owed_rows` (`count`: how many invoices one of its rows stands for): the firm's sums
+ * per age (part 'f', with how many clients owe anything), then the sums per age of the $7 clients
+ * owing most (part 'c'; largest total, retainage apart, then client id, as packages/domain's
+ * agingByClient orders them; $7 null: every client). The latest due date in each sum stands for it
+ * (every date in one age ages the same). Only the chosen clients' rows are split by age and named.
  */
-const RECEIVABLES_AS_OF = `${OWED_AS_OF}
-  select o.client_id, c.name as client_name, max(o.due_on)::text as due_on, sum(o.owed)::text as owed,
-         sum(o.retainage)::text as retainage, count(*)::int as invoice_count
-    from owed_rows o join clients c on c.tenant_id = $1 and c.id = o.client_id
+const FIRM_AND_CLIENTS = (count: string) => `owing as (select o.client_id, sum(o.owed) as total from owed_rows o group by o.client_id),
+  chosen as (select client_id from owing order by total desc, client_id limit $7::int)
+  select 'f' as part, null::uuid as client_id, null::text as client_name, max(o.due_on)::text as due_on, sum(o.owed)::text as owed,
+         sum(o.retainage)::text as retainage, ${count} as invoice_count, (select count(*) from owing)::int as client_count
+    from owed_rows o group by ${AGE('o.due_on')}
+  union all
+  select 'c', o.client_id, c.name, max(o.due_on)::text, sum(o.owed)::text, sum(o.retainage)::text, ${count}, null
+    from owed_rows o join chosen h on h.client_id = o.client_id join clients c on c.tenant_id = $1 and c.id = o.client_id
    group by o.client_id, c.name, ${AGE('o.due_on')}`;
+
+/** As of a past date, summed from the base tables ($3–$6 as in AGE: packages/domain's bucketDueDates; $7 as in FIRM_AND_CLIENTS). */
+const RECEIVABLES_AS_OF = `${OWED_AS_OF},
+  ${FIRM_AND_CLIENTS('count(*)::int')}`;
 
 /**
- * As of today or later, the same sums from the open balances the database keeps per client and due
- * date (cash_open_balances, kept by a trigger on invoices), plus the retainage still held, read from
- * the progress jobs' invoices as above. An invoice holding retainage that is also owed on is already
- * counted in its balance row (same client and due date, so the same sum); only the others add to the count.
+ * As of today or later, the same answer from the open balances the database keeps (kept by a trigger
+ * on invoices): the firm's ages from the sums per due date (cash_open_due_days), the clients owing
+ * most from the sums per client (cash_open_clients), and only those clients' sums per due date
+ * (cash_open_balances) split by age — plus the retainage still held, read from the progress jobs'
+ * invoices as above. An invoice holding retainage that is also owed on is already counted in its
+ * balance (same client and due date, so the same sum); only the others add to the count.
  */
 const RECEIVABLES_KEPT = `with ${RETAINAGE('')},
-  owed_rows as (
-    select b.client_id, b.due_on, b.owed, 0 as retainage, b.invoice_count from cash_open_balances b
-     where b.tenant_id = $1 and $2::date is not null
-    union all
-    select i.client_id, i.due_on, 0, r.amount,
-           case when i.status in ${OPEN} and i.total - i.amount_paid - i.amount_credited > 0 then 0 else 1 end
+  retained as (
+    select i.client_id, i.due_on, r.amount,
+           case when i.status in ${OPEN} and i.total - i.amount_paid - i.amount_credited > 0 then 0 else 1 end as extra
       from retainage r join invoices i on i.tenant_id = $1 and i.id = r.id
-     where i.due_on is not null and r.amount > 0)
-  select o.client_id, c.name as client_name, max(o.due_on)::text as due_on, sum(o.owed)::text as owed,
-         sum(o.retainage)::text as retainage, sum(o.invoice_count)::int as invoice_count
-    from owed_rows o join clients c on c.tenant_id = $1 and c.id = o.client_id
+     where i.due_on is not null and r.amount > 0),
+  owing as (
+    select x.client_id, sum(x.owed) as total from (
+        select o.client_id, o.owed from cash_open_clients o where o.tenant_id = $1 and $2::date is not null
+        union all
+        select r.client_id, 0 from retained r) x
+     group by x.client_id),
+  chosen as (select client_id from owing order by total desc, client_id limit $7::int)
+  select 'f' as part, null::uuid as client_id, null::text as client_name, max(f.due_on)::text as due_on, sum(f.owed)::text as owed,
+         sum(f.retainage)::text as retainage, sum(f.n)::int as invoice_count, (select count(*) from owing)::int as client_count
+    from (select d.due_on, d.owed, 0 as retainage, d.invoice_count as n from cash_open_due_days d where d.tenant_id = $1
+          union all
+          select r.due_on, 0, r.amount, r.extra from retained r) f
+   group by ${AGE('f.due_on')}
+  union all
+  select 'c', o.client_id, c.name, max(o.due_on)::text, sum(o.owed)::text, sum(o.retainage)::text, sum(o.n)::int, null
+    from (select b.client_id, b.due_on, b.owed, 0 as retainage, b.invoice_count as n
+            from chosen h join cash_open_balances b on b.tenant_id = $1 and b.client_id = h.client_id
+          union all
+          select r.client_id, r.due_on, 0, r.amount, r.extra from retained r join chosen h on h.client_id = r.client_id) o
+    join clients c on c.tenant_id = $1 and c.id = o.client_id
    group by o.client_id, c.name, ${AGE('o.due_on')}`;
 
-/** Per client and age, summed ($1 tenant, $2 as-of date, $3–$6 as in AGE). */
+/** The firm's and the chosen clients' sums per age ($1 tenant, $2 as-of date, $3–$6 as in AGE, $7 how many clients or null). */
 export const receivablesByClientAge = (past: boolean) => (past ? RECEIVABLES_AS_OF : RECEIVABLES_KEPT);
 
 /** One row per open invoice: $3 a client or null, $4–$5 due dates from and to (either null: no bound). */
@@ -104,12 +131,16 @@ export const receivableInvoices = (past: boolean) => `${owed(past)}
      and ($5::date is null or o.due_on <= $5::date)`;
 
 export interface ReceivableSumRow {
-  client_id: string;
-  client_name: string;
+  /** 'f': the firm's sum of one age; 'c': one chosen client's */
+  part: 'f' | 'c';
+  client_id: string | null;
+  client_name: string | null;
   due_on: string;
   owed: string;
   retainage: string;
   invoice_count: number;
+  /** on the firm's rows: how many clients owe anything (retainage included) */
+  client_count: number | null;
 }
 
 export interface ReceivableRow {

@@ -1,9 +1,10 @@
 import type { CashReceived } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
 import type Decimal from 'decimal.js';
 import { moneyOut } from '../billing/money';
+import type { StaffPrincipal } from '../http/principal';
 import { cashReceivedByMonth, type DatedAmount } from './domain';
-import { firmClock } from './firm-clock';
+import { staffClock } from './firm-clock';
+import type { ReportPlan } from './read-only';
 
 const MONTHS = 12;
 
@@ -20,28 +21,35 @@ function monthStart(today: string, back: number): string {
   return `${String(Math.floor(n / 12)).padStart(4, '0')}-${String((n % 12) + 1).padStart(2, '0')}-01`;
 }
 
+type DayRow = { kind: 'p' | 'r'; day: string; amount: string; n: number };
+
 /**
  * GET /api/cash/received: payments by their received date less refunds that went through by their
  * refund date (both firm-local dates), summed per day in SQL and per month by packages/domain.
  */
-export async function cashReceived(tx: TenantTx, now: Date): Promise<CashReceived> {
-  const clock = await firmClock(tx, now);
+export function cashReceived(staff: StaffPrincipal, now: Date): ReportPlan<CashReceived> {
+  const clock = staffClock(staff, now);
   const from = monthStart(clock.today, MONTHS - 1);
-  const { rows } = await tx.client.query<{ kind: 'p' | 'r'; day: string; amount: string; n: number }>(RECEIVED_BY_DAY, [tx.tenantId, from]);
-  const of = (kind: 'p' | 'r'): DatedAmount[] =>
-    rows.filter((r) => r.kind === kind).map((r) => ({ date: r.day, amount: r.amount, count: r.n }));
-  const result = cashReceivedByMonth({ endMonth: clock.today.slice(0, 7), months: MONTHS, payments: of('p'), refunds: of('r') });
-  const money = (d: Decimal) => moneyOut(d, clock.currency);
   return {
-    currency: clock.currency,
-    months: result.months.map((m) => ({
-      month: m.month,
-      received: money(m.received),
-      paymentCount: m.paymentCount,
-      refunded: money(m.refunded),
-      refundCount: m.refundCount,
-      net: money(m.net),
-    })),
-    totals: { received: money(result.totals.received), refunded: money(result.totals.refunded), net: money(result.totals.net) },
+    queries: [{ name: 'cash_received_days', text: RECEIVED_BY_DAY, values: [staff.tenantId, from] }],
+    answer: ([days]) => {
+      const rows = days as DayRow[];
+      const of = (kind: 'p' | 'r'): DatedAmount[] =>
+        rows.filter((r) => r.kind === kind).map((r) => ({ date: r.day, amount: r.amount, count: r.n }));
+      const result = cashReceivedByMonth({ endMonth: clock.today.slice(0, 7), months: MONTHS, payments: of('p'), refunds: of('r') });
+      const money = (d: Decimal) => moneyOut(d, clock.currency);
+      return {
+        currency: clock.currency,
+        months: result.months.map((m) => ({
+          month: m.month,
+          received: money(m.received),
+          paymentCount: m.paymentCount,
+          refunded: money(m.refunded),
+          refundCount: m.refundCount,
+          net: money(m.net),
+        })),
+        totals: { received: money(result.totals.received), refunded: money(result.totals.refunded), net: money(result.totals.net) },
+      };
+    },
   };
 }

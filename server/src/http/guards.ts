@@ -1,5 +1,5 @@
 import { roleAtLeast, StaffRole } from '@layerbook/contracts';
-import { readInOneTrip, type SqlQuery, TenantTx, withTenantAndFirst } from '@layerbook/db';
+import { readInOneTrip, readInTwoTrips, type SqlQuery, TenantTx, withTenantAndFirst } from '@layerbook/db';
 import type { Request } from 'express';
 import { clientRowSql, toClientPrincipal } from '../auth/portal-auth';
 import { staffRowSql, toStaffPrincipal } from '../auth/staff-principal';
@@ -73,6 +73,39 @@ export async function readAsStaff<I, R = Record<string, unknown>>(
   }
   if (!roleAtLeast(staff.role, needed)) throw forbidden();
   return { staff, input: parsed, rows: rows as R[] };
+}
+
+/**
+ * withStaff for a read whose queries depend on who asks (their firm's day, their role), in TWO round
+ * trips (readInTwoTrips): the person's re-check, then `build`'s queries and COMMIT, in one read-only
+ * transaction. `build` runs after the re-check, so what it throws (a 400 naming the field) comes after
+ * a 401 or 403.
+ */
+export async function readAsStaffPlanned<P extends { readonly queries: readonly SqlQuery[] }>(
+  ctx: AppContext,
+  req: Request,
+  needed: StaffRole,
+  build: (staff: StaffPrincipal) => P,
+): Promise<{ staff: StaffPrincipal; planned: P; results: Record<string, unknown>[][] }> {
+  const claim = req.user;
+  if (!claim || claim.kind !== 'staff') throw unauthorized();
+  let planned: P | undefined;
+  const { checked, results } = await readInTwoTrips(
+    ctx.pool,
+    claim.tenantId,
+    staffRowSql(claim.tenantId, claim.id, sessionIdOf(req)),
+    (first) => {
+      const staff = toStaffPrincipal(claim.tenantId, claim.id, first[0] as unknown as Parameters<typeof toStaffPrincipal>[2]);
+      if (!staff) {
+        ended(req);
+        throw unauthorized('Your access has ended. Sign in again, or ask the owner.');
+      }
+      if (!roleAtLeast(staff.role, needed)) throw forbidden();
+      return staff;
+    },
+    (staff) => (planned = build(staff)).queries,
+  );
+  return { staff: checked, planned: planned!, results };
 }
 
 export async function withClient<T>(ctx: AppContext, req: Request, fn: (tx: TenantTx, client: ClientPrincipal) => Promise<T>): Promise<T> {

@@ -61,7 +61,9 @@ export interface CashReceivables {
   readonly retainage: string;
   /** how many open invoices (or invoices with retainage still held) make up the figures */
   readonly invoiceCount: number;
-  /** largest total first */
+  /** how many clients owe anything (retainage included) */
+  readonly clientCount: number;
+  /** largest total first: the 25 owing most unless all were asked for (`clients=all`) */
   readonly clients: readonly CashReceivableClient[];
 }
 

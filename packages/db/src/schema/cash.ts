@@ -28,6 +28,33 @@ export const cashOpenBalances = pgTable(
   (t) => [primaryKey({ columns: [t.tenantId, t.clientId, t.dueOn] }), tenantPolicy('cash_open_balances')],
 );
 
+/**
+ * The same open balances rolled up per due date (the firm's aging and the forecast read these, a row
+ * per day rather than per client and day) and per client (the clients owing most). Kept by the same
+ * trigger function as cash_open_balances, in the same statement.
+ */
+export const cashOpenDueDays = pgTable(
+  'cash_open_due_days',
+  {
+    tenantId: tenantId().references(() => firms.id),
+    dueOn: date('due_on').notNull(),
+    owed: money('owed').notNull(),
+    invoiceCount: integer('invoice_count').notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.tenantId, t.dueOn] }), tenantPolicy('cash_open_due_days')],
+);
+
+export const cashOpenClients = pgTable(
+  'cash_open_clients',
+  {
+    tenantId: tenantId().references(() => firms.id),
+    clientId: uuid('client_id').notNull(),
+    owed: money('owed').notNull(),
+    invoiceCount: integer('invoice_count').notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.tenantId, t.clientId] }), tenantPolicy('cash_open_clients')],
+);
+
 /** Payments received (by received date) and refunds that went through (by refund date), per firm-local day. */
 export const cashReceivedDays = pgTable(
   'cash_received_days',

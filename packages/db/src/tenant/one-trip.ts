@@ -1,31 +1,11 @@
-import { escapeLiteral, type Pool } from 'pg';
+import type { Pool } from 'pg';
+import { runReads } from './prepared-reads';
 import { isUuid } from './scoped';
+import { inlineQuery, type SqlQuery } from './sql-literal';
 
-/** A parameterised query as node-postgres takes it. */
-export interface SqlQuery {
-  readonly text: string;
-  readonly values: readonly unknown[];
-}
+export { inlineQuery, type SqlQuery } from './sql-literal';
 
 type Rows = Record<string, unknown>[];
-
-/**
- * The query with its `$n` parameters written in as literals (strings through pg's escapeLiteral), for
- * the simple-query protocol, which takes no parameters. Only for texts this code builds: a `$n` inside
- * a quoted string or a dollar-quoted body of the text would be replaced too.
- */
-export function inlineQuery(query: SqlQuery): string {
-  return query.text.replace(/\$(\d+)/g, (_match, n: string) => literal(query.values[Number(n) - 1], n));
-}
-
-function literal(value: unknown, n: string): string {
-  if (value === null || value === undefined) return 'null';
-  if (typeof value === 'string') return escapeLiteral(value);
-  if (typeof value === 'number' && Number.isFinite(value)) return `(${value})`;
-  if (typeof value === 'boolean') return String(value);
-  if (value instanceof Date && !Number.isNaN(value.getTime())) return escapeLiteral(value.toISOString());
-  throw new Error(`inlineQuery: parameter $${n} cannot be written as a literal`);
-}
 
 /**
  * A firm's read in ONE round trip: BEGIN READ ONLY, the firm set transaction-locally, `firstSql` (a
@@ -43,6 +23,52 @@ export async function readInOneTrip(pool: Pool, tenantId: string, firstSql: stri
     return { first: results[2].rows, rows: results[3].rows };
   } catch (error) {
     // A failed statement leaves the transaction open and aborted: end it before the connection goes back.
+    await client.query('rollback').catch(() => undefined);
+    throw error;
+  } finally {
+    client.release();
+  }
+}
+
+/**
+ * A firm's read-only transaction in TWO round trips, for reads whose queries depend on who asks
+ * (their firm's day, their role): the first sends BEGIN READ ONLY, the firm set transaction-locally
+ * and `firstSql` (a trusted literal: the signed-in person's re-check); `check` decides from its rows
+ * (and may throw: a 401 or 403), `build` makes the queries from what it answered (and may throw: a
+ * 400); the second sends them all and COMMIT (named ones as prepared statements: prepared-reads.ts).
+ * Anything thrown rolls the transaction back. `results` holds each query's rows, in order.
+ */
+export async function readInTwoTrips<P>(
+  pool: Pool,
+  tenantId: string,
+  firstSql: string,
+  check: (first: Rows) => P,
+  build: (checked: P) => readonly SqlQuery[],
+): Promise<{ checked: P; results: Rows[] }> {
+  if (!isUuid(tenantId)) throw new Error('readInTwoTrips needs a firm id');
+  const client = await pool.connect();
+  try {
+    const opened = (await client.query(
+      `begin read only; select set_config('app.tenant_id', '${tenantId}', true); ${firstSql}`,
+    )) as unknown as Array<{ rows: Rows }>;
+    const checked = check(opened[2].rows);
+    const results = await runReads(client, [], build(checked), 'commit');
+    return { checked, results };
+  } catch (error) {
+    await client.query('rollback').catch(() => undefined);
+    throw error;
+  } finally {
+    client.release();
+  }
+}
+
+/** Several reads of one firm in ONE round trip (BEGIN READ ONLY, the firm, the reads, COMMIT): each one's rows, in order. */
+export async function readManyInOneTrip(pool: Pool, tenantId: string, reads: readonly SqlQuery[]): Promise<Rows[]> {
+  if (!isUuid(tenantId)) throw new Error('readManyInOneTrip needs a firm id');
+  const client = await pool.connect();
+  try {
+    return await runReads(client, ['begin read only', `select set_config('app.tenant_id', '${tenantId}', true)`], reads, 'commit');
+  } catch (error) {
     await client.query('rollback').catch(() => undefined);
     throw error;
   } finally {

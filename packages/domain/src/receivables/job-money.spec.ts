@@ -11,8 +11,9 @@ describe('job money', () => {
   });
 
   it('average job size is the mean contract sum (common practice, no source)', () => {
-    expect(averageJobSize(['10000.00', '5000.00', '2500.01'])?.toFixed(2)).toBe('5833.34');
-    expect(averageJobSize([])).toBeNull();
+    expect(averageJobSize('17500.01', 3)?.toFixed(2)).toBe('5833.34'); // 10000.00 + 5000.00 + 2500.01
+    expect(averageJobSize('0', 0)).toBeNull();
+    expectInputError(() => averageJobSize('100.00', 1.5), 'jobCount');
   });
 
   it('gross margin is price − cost, and ÷ price (margin, not markup; accounting glossaries)', () => {

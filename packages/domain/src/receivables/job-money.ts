@@ -10,11 +10,14 @@ export function winRate(accepted: number, declined: number): { accepted: number;
   return { accepted, decided, percent: decided === 0 ? null : new Decimal(accepted).times(100).dividedBy(decided).toDecimalPlaces(1) };
 }
 
-/** Average job size = Σ contracted ÷ number of jobs, to the cent; null with no jobs (common practice, no source). */
-export function averageJobSize(contracted: readonly MoneyInput[]): Decimal | null {
-  if (contracted.length === 0) return null;
-  const sum = contracted.reduce<Decimal>((a, c, i) => a.plus(toNonNegativeMoney(c, `contracted[${i}]`)), new Decimal(0));
-  return sum.dividedBy(contracted.length).toDecimalPlaces(2);
+/**
+ * Average job size = Σ contracted ÷ number of jobs, to the cent; null with no jobs (common practice,
+ * no source). Takes the sum and the count (the database sums a firm's jobs exactly in numeric).
+ */
+export function averageJobSize(contractedSum: MoneyInput, jobCount: number): Decimal | null {
+  requireInteger(jobCount, 'jobCount', 0, 'count');
+  if (jobCount === 0) return null;
+  return toNonNegativeMoney(contractedSum, 'contractedSum').dividedBy(jobCount).toDecimalPlaces(2);
 }
 
 /** The estimate's costs of the option sold: what the firm pays before overhead and profit. */

@@ -3,18 +3,24 @@ import type { TenantTx } from '@layerbook/db';
 import { Router } from 'express';
 import type { AppContext } from '../../context';
 import { parse } from '../../http/validate';
-import { withStaffReport } from '../read-only';
+import { readReport, withStaffReport } from '../read-only';
 import { cashReceivableInvoices } from '../receivables';
 import { streamCsv } from './csv-stream';
 import { EXPORTS } from './export-kinds';
 import { parseExportRequest } from './export-query';
 import { receivablesCsv } from './receivables-csv';
 
+const FIRM_SLUG = `select slug from firms where id = $1`;
+
 /** `<firm-slug>-<what>.csv`; the slug is kept to the characters a file name may hold everywhere. */
-async function fileName(tx: TenantTx, what: string): Promise<string> {
-  const { rows } = await tx.client.query<{ slug: string }>(`select slug from firms where id = $1`, [tx.tenantId]);
-  const slug = (rows[0]?.slug ?? 'firm').replace(/[^a-z0-9-]/gi, '') || 'firm';
+function fileNameOf(rows: readonly Record<string, unknown>[], what: string): string {
+  const found = rows[0]?.['slug'];
+  const slug = (typeof found === 'string' ? found : 'firm').replace(/[^a-z0-9-]/gi, '') || 'firm';
   return `${slug}-${what}.csv`;
+}
+
+async function fileName(tx: TenantTx, what: string): Promise<string> {
+  return fileNameOf((await tx.client.query(FIRM_SLUG, [tx.tenantId])).rows, what);
 }
 
 const csvHeaders = (name: string) => ({
@@ -34,9 +40,16 @@ export function cashExportRoutes(ctx: AppContext): Router {
 
   // The receivables page's aging as of a day (default today in the firm's zone), as the page shows it.
   router.get('/receivables.csv', async (req, res) => {
-    const file = await withStaffReport(ctx, req, 'office', async (tx) => {
-      const view = await cashReceivableInvoices(tx, ctx.now(), parse(cashReceivablesQuery, req.query));
-      return { name: await fileName(tx, `receivables-${view.asOf}`), text: receivablesCsv(view) };
+    const file = await readReport(ctx, req, 'office', (staff) => {
+      const { asOf } = parse(cashReceivablesQuery, req.query);
+      const drill = cashReceivableInvoices(staff, ctx.now(), asOf ? { asOf } : {});
+      return {
+        queries: [...drill.queries, { text: FIRM_SLUG, values: [staff.tenantId] }],
+        answer: ([found, slug]) => {
+          const view = drill.answer([found]);
+          return { name: fileNameOf(slug, `receivables-${view.asOf}`), text: receivablesCsv(view) };
+        },
+      };
     });
     res.status(200).set(csvHeaders(file.name)).send(file.text);
   });

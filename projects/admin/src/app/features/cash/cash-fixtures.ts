@@ -36,6 +36,7 @@ export const RECEIVABLES: CashReceivables = {
     },
   ],
   invoiceCount: 3,
+  clientCount: 2,
 };
 
 /** The open invoices behind RECEIVABLES (the drill-down's answers are cut from them). */

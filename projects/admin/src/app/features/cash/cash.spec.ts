@@ -3,7 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { ApplicationRef } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { Router, provideRouter } from '@angular/router';
-import type { CashJobs } from '@layerbook/contracts/types';
+import type { CashJobs, CashReceivables } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { Session } from '../../core/auth/session';
 import { Cash } from './cash';
@@ -16,6 +16,7 @@ async function open(
   url: string,
   jobs: CashJobs,
   isOwner = true,
+  receivables: CashReceivables = RECEIVABLES,
 ): Promise<{ http: HttpTestingController; html: () => HTMLElement; asOfSent: string | null }> {
   TestBed.configureTestingModule({
     providers: [
@@ -33,7 +34,7 @@ async function open(
   const http = TestBed.inject(HttpTestingController);
   const owed = http.expectOne((request) => request.url === '/api/cash/receivables');
   const asOfSent = owed.request.params.get('asOf');
-  owed.flush(RECEIVABLES);
+  owed.flush(receivables);
   http.expectOne('/api/cash/received').flush(RECEIVED);
   http.expectOne('/api/cash/forecast').flush(FORECAST);
   http.expectOne('/api/cash/jobs').flush(jobs);
@@ -111,6 +112,21 @@ describe('Cash', { timeout: 20_000 }, () => {
     expect(links).toEqual(['/billing/invoices/inv-7', '/clients/c-1', '/jobs/job-1']);
     expect(drill?.textContent).toContain('35 days late');
     expect(button?.getAttribute('aria-pressed')).toBe('true');
+  });
+
+  it('says when only the clients owing most are listed, and asks for all of them on request', async () => {
+    const { html, http } = await open('/', OWNER_JOBS, true, { ...RECEIVABLES, clientCount: 30 });
+    const more = html().querySelector('.clients-more');
+    expect(more?.textContent?.replace(/\s+/g, ' ')).toContain('The 2 clients who owe the most, of 30 who owe you.');
+    const showAll = [...(more?.querySelectorAll('button') ?? [])].find((b) => b.textContent?.includes('Show all 30 clients'));
+    expect(showAll).toBeDefined();
+    showAll?.click();
+    TestBed.inject(ApplicationRef).tick();
+    const asked = http.expectOne((request) => request.url === '/api/cash/receivables');
+    expect(asked.request.params.get('clients')).toBe('all');
+    asked.flush({ ...RECEIVABLES, clientCount: 2 });
+    await settle();
+    expect(html().querySelector('.clients-more')).toBeNull();
   });
 
   it('asks for the chosen day and opens a client drill-down from the address', async () => {

@@ -39,9 +39,12 @@ export function drillUrl(drill: ReceivableDrill): string {
   return text ? `${RECEIVABLE_INVOICES_URL}?${text}` : RECEIVABLE_INVOICES_URL;
 }
 
-/** The heading over the drilled invoices: "Invoices 31–60 days late for Ada Ward". */
-export function drillHeading(receivables: CashReceivables, drill: ReceivableDrill): string {
-  const client = drill.clientId === null ? null : receivables.clients.find((c) => c.clientId === drill.clientId);
+/**
+ * The heading over the drilled invoices: "Invoices 31–60 days late for Ada Ward". A client not among
+ * those listed (a shared link) is named from the drilled invoices (`drilledName`).
+ */
+export function drillHeading(receivables: CashReceivables, drill: ReceivableDrill, drilledName?: string): string {
+  const name = drill.clientId === null ? null : (receivables.clients.find((c) => c.clientId === drill.clientId)?.clientName ?? drilledName);
   const age = drill.age === null ? 'Open invoices' : `Invoices ${CASH_AGING_BUCKET_LABELS[drill.age].toLowerCase()}`;
-  return client ? `${age} for ${client.clientName}` : age;
+  return name ? `${age} for ${name}` : age;
 }

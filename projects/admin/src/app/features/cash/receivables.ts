@@ -1,5 +1,5 @@
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -26,6 +26,8 @@ import { drillFromParams, drillHeading, drillToParams, drillUrl, type Receivable
 import { TranslatePipe } from '@ngx-translate/core';
 
 export const RECEIVABLES_URL = '/api/cash/receivables';
+/** How many clients the server lists unless all are asked for (server/src/cash/receivables.ts). */
+export const CLIENTS_LISTED = 25;
 
 /** Money owed to the firm by age as of a chosen day, per client, with the invoices behind each figure on request. */
 @Component({
@@ -62,9 +64,13 @@ export class Receivables {
   });
   /** Apart from the drill-down, so opening a list never asks for the figures again. */
   private readonly asOf = computed(() => this.drill().asOf);
+  protected readonly clientsListed = CLIENTS_LISTED;
+  /** Every client who owes, or (the default) the 25 who owe most. */
+  protected readonly allClients = signal(false);
   protected readonly receivables = httpResource<CashReceivables>(() => {
     const asOf = this.asOf();
-    return { url: RECEIVABLES_URL, ...(asOf ? { params: { asOf } } : {}) };
+    const params = { ...(asOf ? { asOf } : {}), ...(this.allClients() ? { clients: 'all' } : {}) };
+    return { url: RECEIVABLES_URL, ...(Object.keys(params).length ? { params } : {}) };
   });
   protected readonly view = computed(() => (this.receivables.hasValue() ? this.receivables.value() : null));
   protected readonly message = loadMessage(this.receivables);
@@ -79,7 +85,7 @@ export class Receivables {
   protected readonly invoices = computed(() => (this.isDrilled() && this.drilled.hasValue() ? this.drilled.value().invoices : []));
   protected readonly heading = computed(() => {
     const view = this.view();
-    return view ? drillHeading(view, this.drill()) : '';
+    return view ? drillHeading(view, this.drill(), this.invoices()[0]?.clientName) : '';
   });
 
   protected chooseDay(value: string): void {
@@ -98,6 +104,10 @@ export class Receivables {
 
   protected showClient(clientId: string): void {
     this.go({ ...this.drill(), age: null, clientId });
+  }
+
+  protected showAllClients(all: boolean): void {
+    this.allClients.set(all);
   }
 
   protected closeDrill(): void {
