@@ -1,4 +1,4 @@
-import { inlineQuery, readInOneTrip } from '@layerbook/db';
+import { inlineQuery, readInOneTrip, readInTwoTrips } from '@layerbook/db';
 import { Pool } from 'pg';
 import { joinAs } from '../proposals/proposal-fixtures';
 import { newAgent, signUpFirm, startTestServer, TestServer } from '../testing/harness';
@@ -61,6 +61,69 @@ describe('readInOneTrip', () => {
         values: [firm.firmId],
       }),
     ).rejects.toThrow(/read-only/);
+  });
+});
+
+describe('readInTwoTrips: the re-check, then the reads (named ones prepared once per connection)', () => {
+  const prepared = (pool: Pool) =>
+    pool.query<{ name: string }>(`select name from pg_prepared_statements order by name`).then((r) => r.rows.map((x) => x.name));
+
+  it('prepares a named read once per connection, answers each read in order and leaves no transaction open', async () => {
+    const firm = await signUpFirm(t.app, 'Two Trip Plaster');
+    const pool = new Pool({ connectionString: t.ctx.config.DATABASE_URL, max: 1 });
+    try {
+      for (const n of [2, 3]) {
+        const { checked, results } = await readInTwoTrips(
+          pool,
+          firm.firmId,
+          `select 'me' as who`,
+          (first) => first[0]['who'],
+          (who) => [
+            { name: 'test_doubled', text: `select $1::int * 2 as v, $2::text as who`, values: [n, who] },
+            { text: `select current_setting('app.tenant_id') as firm`, values: [] },
+          ],
+        );
+        expect(checked).toBe('me');
+        expect(results).toEqual([[{ v: 2 * n, who: 'me' }], [{ firm: firm.firmId }]]);
+      }
+      expect(await prepared(pool)).toEqual(['test_doubled']);
+      expect((await pool.query(`select coalesce(current_setting('app.tenant_id', true), '') as firm`)).rows[0].firm).toBe('');
+    } finally {
+      await pool.end();
+    }
+  });
+
+  it('rolls back what the check or a read refuses, and a read that failed is prepared afresh next time', async () => {
+    const firm = await signUpFirm(t.app, 'Refused Trip Plaster');
+    const pool = new Pool({ connectionString: t.ctx.config.DATABASE_URL, max: 1 });
+    const read = (divisor: number) =>
+      readInTwoTrips(
+        pool,
+        firm.firmId,
+        'select 1',
+        () => null,
+        () => [{ name: 'test_divided', text: `select 10 / $1::int as v`, values: [divisor] }],
+      );
+    try {
+      await expect(
+        readInTwoTrips(
+          pool,
+          firm.firmId,
+          'select 1',
+          () => {
+            throw new Error('not you');
+          },
+          () => [],
+        ),
+      ).rejects.toThrow('not you');
+      await expect(read(0)).rejects.toThrow(/division by zero/);
+      expect(await prepared(pool)).toEqual([]);
+      expect((await read(5)).results).toEqual([[{ v: 2 }]]);
+      expect(await prepared(pool)).toEqual(['test_divided']);
+      expect((await pool.query(`select coalesce(current_setting('app.tenant_id', true), '') as firm`)).rows[0].firm).toBe('');
+    } finally {
+      await pool.end();
+    }
   });
 });
 
