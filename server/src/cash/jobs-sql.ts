@@ -1,9 +1,13 @@
+/** The newest jobs listed (a page of them: the jobs list holds them all); the win rate and average cover every job. */
+export const JOBS_LISTED = 50;
+
 /**
- * Each job's money, newest first, with the accepted option's stored price breakdown; $1 tenant, $2 row
- * limit. Invoiced, credited, paid and approved change orders come from the totals the database keeps
+ * Each job's money, the JOBS_LISTED newest first, with the accepted option's stored price breakdown;
+ * $1 tenant. The limit is written into the text (a constant): as a parameter it would keep
+ * PostgreSQL from settling on one plan for the prepared statement. Invoiced, credited, paid and approved change orders come from the totals the database keeps
  * per job (cash_job_totals, by triggers on invoices and change orders).
  */
-export const JOB_MONEY = `with listed as materialized (select * from jobs where tenant_id = $1 order by created_at desc, id desc limit $2),
+export const JOB_MONEY = `with listed as materialized (select * from jobs where tenant_id = $1 order by created_at desc, id desc limit ${JOBS_LISTED}),
   -- each estimate's option read once, however many jobs share it
   prices as materialized (
     select p.estimate_id, p.variant_id, x.v -> 'result' -> 'price' as price

@@ -6,9 +6,6 @@ import { averageJobSize, grossMargin, jobMoney, winRate } from './domain';
 import { JOB_MONEY, JOB_TOTALS, type JobMoneyRow, type JobTotalsRow, type StoredPrice } from './jobs-sql';
 import type { ReportPlan } from './read-only';
 
-/** The newest jobs listed (a page of them: the jobs list holds them all); the win rate and average cover every job. */
-export const JOBS_LISTED = 50;
-
 export const NO_ACTUAL_COSTS = 'Actual costs (hours worked, materials bought) are not recorded yet, so only the estimated margin is known.';
 
 /** Estimated margin from the estimate's cost lines; null figures when the estimate has no costs. */
@@ -41,7 +38,7 @@ export function cashJobs(staff: StaffPrincipal): ReportPlan<CashJobs> {
   return {
     queries: [
       { name: 'cash_job_totals', text: JOB_TOTALS, values: [staff.tenantId] },
-      { name: 'cash_job_money', text: JOB_MONEY, values: [staff.tenantId, JOBS_LISTED] },
+      { name: 'cash_job_money', text: JOB_MONEY, values: [staff.tenantId] },
     ],
     answer: ([totalRows, jobRows]) => {
       const totals = totalRows[0] as unknown as JobTotalsRow;

@@ -110,13 +110,14 @@ const RECEIVABLES_KEPT = `with ${RETAINAGE('')},
           select r.due_on, 0, r.amount, r.extra from retained r) f
    group by ${AGE('f.due_on')}
   union all
-  select 'c', o.client_id, c.name, max(o.due_on)::text, sum(o.owed)::text, sum(o.retainage)::text, sum(o.n)::int, null
-    from (select b.client_id, b.due_on, b.owed, 0 as retainage, b.invoice_count as n
-            from chosen h join cash_open_balances b on b.tenant_id = $1 and b.client_id = h.client_id
-          union all
-          select r.client_id, r.due_on, 0, r.amount, r.extra from retained r join chosen h on h.client_id = r.client_id) o
-    join clients c on c.tenant_id = $1 and c.id = o.client_id
-   group by o.client_id, c.name, ${AGE('o.due_on')}`;
+  select 'c', a.client_id, c.name, a.due_on::text, a.owed::text, a.retainage::text, a.n, null
+    from (select o.client_id, max(o.due_on) as due_on, sum(o.owed) as owed, sum(o.retainage) as retainage, sum(o.n)::int as n
+            from (select b.client_id, b.due_on, b.owed, 0 as retainage, b.invoice_count as n
+                    from chosen h join cash_open_balances b on b.tenant_id = $1 and b.client_id = h.client_id
+                  union all
+                  select r.client_id, r.due_on, 0, r.amount, r.extra from retained r join chosen h on h.client_id = r.client_id) o
+           group by o.client_id, ${AGE('o.due_on')}) a
+    join clients c on c.tenant_id = $1 and c.id = a.client_id`;
 
 /** The firm's and the chosen clients' sums per age ($1 tenant, $2 as-of date, $3–$6 as in AGE, $7 how many clients or null). */
 export const receivablesByClientAge = (past: boolean) => (past ? RECEIVABLES_AS_OF : RECEIVABLES_KEPT);
