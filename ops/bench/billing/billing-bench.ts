@@ -4,6 +4,7 @@
  * tenant transaction — throughput ratio and p95 at 10 connections, first page and a deep page — and
  * issuing invoices, p95 with 10 issuers at once. Figures, not a test.
  *   npx tsx ops/bench/billing/billing-bench.ts        (PostgreSQL must be up: bash ops/pg-start.sh)
+ *   BILLING_BENCH_ONLY=list (or issue) runs one half, e.g. under node --cpu-prof.
  */
 import http from 'node:http';
 import os from 'node:os';
@@ -17,6 +18,7 @@ const CONNECTIONS = 10;
 const REQUESTS = 2_000;
 const ISSUES = 1_000;
 const measure = (job: Record<string, unknown>) => measureAt(CONNECTIONS, job);
+const ONLY = process.env.BILLING_BENCH_ONLY;
 
 async function main(): Promise<void> {
   const config = await benchDatabase(DB, CONNECTIONS);
@@ -58,11 +60,12 @@ async function main(): Promise<void> {
       `${REQUESTS} requests, ${CONNECTIONS} connections; load from a worker thread; ` +
       `machine: ${os.cpus().length} cores, load average ${os.loadavg()[0].toFixed(1)} at the start`,
   );
-  for (const [label, cursor, filter] of [
+  const lists = [
     ['invoice list, first page', null, 'all'],
     ['deep page (~15,000 in)', after, 'all'],
     ['overdue filter', null, 'overdue'],
-  ] as const) {
+  ] as const;
+  for (const [label, cursor, filter] of ONLY === 'issue' ? [] : lists) {
     const url = `/api/invoices?limit=50${filter === 'all' ? '' : `&filter=${filter}`}${cursor ? `&after=${cursor}` : ''}`;
     const sqlQuery = buildInvoiceListQuery(firmId, { filter, limit: 50, ...(cursor ? { after: cursor } : {}) }, new Date());
     const httpJob = { mode: 'get', port, path: url, cookie: session };
@@ -89,16 +92,20 @@ async function main(): Promise<void> {
   // Issuing: each call issues another draft (one firm, one counter: every issuer waits its turn on it).
   const body = JSON.stringify({ send: false });
   const issueJob = { mode: 'post', port, cookie: session, csrf, body };
+  if (ONLY !== 'list') await issueAll(issueJob, drafts);
+  agent.destroy();
+  server.close();
+  await queue.stop();
+  await pool.end();
+}
+
+async function issueAll(issueJob: Record<string, unknown>, drafts: string[]): Promise<void> {
   await measure({ ...issueJob, total: 100, paths: drafts.slice(0, 100).map((id) => `/api/invoices/${id}/issue`) }); // warm-up
   const issued = await measure({ ...issueJob, total: ISSUES, paths: drafts.slice(100).map((id) => `/api/invoices/${id}/issue`) });
   console.log(
     `  ${'issue an invoice'.padEnd(26)} ${issued.rps.toFixed(0)} issues/s (p50 ${issued.p50.toFixed(1)} ms, p95 ${issued.p95.toFixed(1)} ms), ` +
       `${CONNECTIONS} issuers at once, ${ISSUES} issues  (goal: p95 ≤ 50 ms)`,
   );
-  agent.destroy();
-  server.close();
-  await queue.stop();
-  await pool.end();
 }
 
 main().catch((error) => {
