@@ -136,7 +136,7 @@ describe('deposit at acceptance (firm billing setting)', () => {
     await billingQueueSettled(t, [p.firmId]);
     const after = (await p.agent.get(`/api/jobs/${jobId}/billing`)).body as JobBillingView;
     expect(after.invoices.map((i) => [i.kind, i.status, i.number])).toEqual([['deposit', 'issued', 'INV-0001']]);
-  });
+  }, 120_000);
 
   it('"issueAndSend" with a deposit above the firm’s limit: the acceptance goes through and the deposit is left for the office', async () => {
     const p = await sentProposal(t, 'Capped Deposit Plaster');
@@ -214,5 +214,5 @@ describe('deposit at acceptance (firm billing setting)', () => {
         ).rows,
     );
     expect(deposits).toEqual([{ status: 'issued', n: 2 }]);
-  });
+  }, 120_000);
 });

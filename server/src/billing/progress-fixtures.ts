@@ -71,18 +71,24 @@ export async function acceptedJob(t: TestServer, firmName: string, opts: { timeZ
   return { ...f, ...hall, version, client, job, option };
 }
 
-/** Waits until the queue has no billing work left for these firms (checks and billing days), failing on a dead one. */
-export async function billingQueueSettled(t: TestServer, firmIds: readonly string[]): Promise<void> {
-  for (const deadline = Date.now() + 20_000; Date.now() < deadline; await new Promise((r) => setTimeout(r, 100))) {
-    const { rows } = await t.ctx.pool.query<{ state: string; n: number }>(
-      `select state, count(*)::int as n from pgboss.job
+/**
+ * Waits until the queue has no billing work left for these firms (checks and billing days), failing on a dead one.
+ * A job that failed once waits out its retry delay (10 s and more, by the queue's policy) before running again,
+ * so the wait allows for one retry on a busy machine (the specs that call it give themselves 2 minutes); when it
+ * gives up, it names the jobs still waiting.
+ */
+export async function billingQueueSettled(t: TestServer, firmIds: readonly string[], waitMs = 60_000): Promise<void> {
+  let waiting: Array<{ name: string; state: string; retry_count: number; output: unknown }> = [];
+  for (const deadline = Date.now() + waitMs; Date.now() < deadline; await new Promise((r) => setTimeout(r, 100))) {
+    const { rows } = await t.ctx.pool.query<{ name: string; state: string; retry_count: number; output: unknown }>(
+      `select name, state, retry_count, output from pgboss.job
         where name in ('billing-evaluate', 'billing-sweep', 'billing-daily') and (data->>'tenantId' = any($1) or name = 'billing-sweep')
-        group by state`,
+          and state in ('created', 'retry', 'active', 'failed')`,
       [firmIds],
     );
-    const failed = rows.find((r) => r.state === 'failed');
-    if (failed) throw new Error('a billing queue job failed');
-    if (!rows.some((r) => ['created', 'retry', 'active'].includes(r.state))) return;
+    if (rows.some((r) => r.state === 'failed')) throw new Error(`a billing queue job failed: ${JSON.stringify(rows)}`);
+    waiting = rows;
+    if (!rows.length) return;
   }
-  throw new Error('the billing queue did not settle');
+  throw new Error(`the billing queue did not settle: ${JSON.stringify(waiting)}`);
 }

@@ -100,7 +100,7 @@ describe('invoice reminders', () => {
     expect(steps(later)).toEqual([]);
     t.setNow(new Date('2026-12-01T15:00:00Z'));
     jest.restoreAllMocks();
-  });
+  }, 120_000);
 
   it('reach the client by e-mail from the firm’s billing day in the queue, once however often the day runs, and stop once the invoice is paid', async () => {
     const job = await acceptedJob(t, 'Mailed Reminder Studio');
@@ -152,5 +152,5 @@ describe('invoice reminders', () => {
     expect(reminded.map((e) => [e.text, e.who])).toEqual([
       [`Reminder for Deposit ${issued.body.number} sent, 3 days before the due date`, 'Automatic (billing)'],
     ]);
-  });
+  }, 120_000);
 });

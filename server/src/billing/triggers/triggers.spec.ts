@@ -80,7 +80,7 @@ describe('billing triggers from the work', () => {
     const history = (await job.agent.get(`/api/jobs/${job.job.id}/history`)).body as { items: Array<{ text: string; who: string }> };
     const drafted = history.items.filter((e) => e.text === 'Stage payment drafted');
     expect(drafted.map((e) => e.who)).toEqual(['Automatic (billing)']);
-  });
+  }, 120_000);
 
   it('drafts nothing before billing starts, and drafts the final invoice at the walkthrough', async () => {
     const job = await acceptedJob(t, 'Walkthrough Studio');
@@ -95,7 +95,7 @@ describe('billing triggers from the work', () => {
       ['deposit', 'Due on acceptance: billing started'],
       ['final', 'Final walkthrough held on 2026-12-01'],
     ]);
-  });
+  }, 120_000);
 
   it('drafts or refreshes one progress application after a percent is marked on a progress-billed job', async () => {
     const job = await acceptedJob(t, 'Progress Method Studio');
@@ -135,7 +135,7 @@ describe('billing triggers from the work', () => {
       `select progress from invoices where tenant_id = $1 and job_id = $2 and kind = 'progress'`,
     );
     expect(draft.progress.lines.find((l) => l.valueLineId === lines[0].id)?.percentComplete).toBe('40');
-  });
+  }, 120_000);
 });
 
 describe('the billing day', () => {
@@ -169,5 +169,5 @@ describe('the billing day', () => {
     } finally {
       t.setNow(new Date('2026-12-01T15:00:00Z'));
     }
-  });
+  }, 120_000);
 });
