@@ -77,8 +77,13 @@ export async function evaluateJobBilling(
   actor: Actor,
   opts: { progressMarked?: boolean } = {},
 ): Promise<number> {
+  // The job's row first, as issuing and drafting take it: two checks of one job (a progress mark's and
+  // billing start's, on two workers) go one after the other. Unlocked, they could deadlock: one drafting a
+  // line's invoice (whose foreign key share-locks the job) while the other held the job for a progress draft
+  // and waited on that line — the loser retried 10 s later (likely what left a spec's queue unsettled).
   const { rows: jobs } = await tx.client.query<JobRow>(
-    `select billing_started_at, billing_method, status, walkthrough_on::text as walkthrough_on from jobs where tenant_id = $1 and id = $2`,
+    `select billing_started_at, billing_method, status, walkthrough_on::text as walkthrough_on from jobs
+      where tenant_id = $1 and id = $2 for update`,
     [tx.tenantId, jobId],
   );
   const job = jobs[0];
