@@ -3,7 +3,6 @@ import express, { type Express, type Response as ExpressResponse } from 'express
 import expressStaticGzip from 'express-static-gzip';
 import { randomBytes } from 'node:crypto';
 import { API_DISPATCH_KEY } from './api-dispatch';
-import { withLowPriorityScripts } from './script-priority';
 
 /** index.html carries this marker in `ngCspNonce`; every copy is swapped for the request's nonce. */
 const NONCE_PLACEHOLDER = '__LB_CSP_NONCE__';
@@ -125,8 +124,9 @@ async function sendWithNonce(response: Response, res: ExpressResponse, answer: H
     await writeResponseToNodeResponse(response, res);
     return;
   }
-  const html = withLowPriorityScripts(
-    withRootedMedia((await response.text()).replaceAll(NONCE_PLACEHOLDER, answer.nonce).replace(BASE_ELEMENT, ''), answer.mediaRoot),
+  const html = withRootedMedia(
+    (await response.text()).replaceAll(NONCE_PLACEHOLDER, answer.nonce).replace(BASE_ELEMENT, ''),
+    answer.mediaRoot,
   );
   res.status(answer.status);
   response.headers.forEach((value, key) => {
