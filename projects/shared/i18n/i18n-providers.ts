@@ -8,23 +8,29 @@ import {
   inject,
   provideAppInitializer,
 } from '@angular/core';
-import { provideTranslateLoader, provideTranslateService } from '@ngx-translate/core';
+import { TranslateLoader, provideMissingTranslationHandler, provideTranslateService } from '@ngx-translate/core';
 import type { Language as LanguageCode } from '@layerbook/contracts/types';
 import { Language, knownLanguage, languageFromAcceptHeader } from './language';
-import { TransferTranslationLoader } from './translation-loader';
+import { TransferTranslationLoader, WaitForWholeWords } from './translation-loader';
 import { provideTranslatedTitles } from './translated-title';
 
 /** Who the visitor is, as far as language goes: the signed-in person's language, or null (each app provides it). */
 export const VISITOR_LANGUAGE = new InjectionToken<() => Promise<{ language: LanguageCode; country?: string } | null>>('VISITOR_LANGUAGE');
 
 /**
- * ngx-translate for one app (route titles included): English as the fallback, words from the transfer state or the app's
- * `i18n/` files, and the first language chosen before the first render — on the server from the
- * signed-in person (else Accept-Language), in the browser from the `lang` the server wrote.
+ * ngx-translate for one app (route titles included): English as the fallback, words from the
+ * transfer state (the page's part; the rest loaded when idle) or the app's `i18n/` files, and the
+ * first language chosen before the first render — on the server from the signed-in person (else
+ * Accept-Language), in the browser from the `lang` the server wrote.
  */
 export function provideI18n(): Array<Provider | EnvironmentProviders> {
   return [
-    provideTranslateService({ fallbackLang: 'en', loader: provideTranslateLoader(TransferTranslationLoader) }),
+    TransferTranslationLoader,
+    provideTranslateService({
+      fallbackLang: 'en',
+      loader: { provide: TranslateLoader, useExisting: TransferTranslationLoader },
+      missingTranslationHandler: provideMissingTranslationHandler(WaitForWholeWords),
+    }),
     // Route `title:`s are keys too, shown in the current language.
     ...provideTranslatedTitles(),
     provideAppInitializer(() => {

@@ -1,8 +1,15 @@
 import { HttpClient } from '@angular/common/http';
-import { Injectable, InjectionToken, TransferState, inject, makeStateKey } from '@angular/core';
+import { ApplicationRef, Injectable, InjectionToken, Injector, TransferState, inject, makeStateKey } from '@angular/core';
 import { APP_BASE_HREF } from '@angular/common';
-import { type TranslateLoader, type TranslationObject } from '@ngx-translate/core';
-import { Observable, from, of, tap } from 'rxjs';
+import {
+  type MissingTranslationHandler,
+  type MissingTranslationHandlerParams,
+  type TranslateLoader,
+  TranslateService,
+  type TranslationObject,
+} from '@ngx-translate/core';
+import { Observable, from, map, of } from 'rxjs';
+import { type UsedGroups, pickGroups, watchWordReads } from './used-words';
 
 /**
  * Where the server reads an app's merged words (`dist/<app>/browser/i18n/<lang>.json`); provided by
@@ -13,23 +20,86 @@ export const TRANSLATION_FILES = new InjectionToken<(language: string) => Promis
 const stateKey = (language: string) => makeStateKey<TranslationObject>(`lb-i18n-${language}`);
 
 /**
- * Words for a language: on the server from disk, put in the page's transfer state; in the browser
- * from that state when the page carried them (no flash of other words), else over HTTP.
+ * Words for a language. On the server from disk, watched: the page's transfer state carries only the
+ * groups the render read (used-words.ts). In the browser from that state when the page carried them
+ * (no flash of other words), the whole file loaded once the app is idle and merged in; else over HTTP.
  */
 @Injectable()
 export class TransferTranslationLoader implements TranslateLoader {
   private readonly state = inject(TransferState);
   private readonly files = inject(TRANSLATION_FILES, { optional: true });
   private readonly http = inject(HttpClient);
+  private readonly injector = inject(Injector);
   private readonly baseHref = inject(APP_BASE_HREF, { optional: true }) ?? '/';
+  /** Languages started from a page's part of the words, whose whole files are not in yet. */
+  private readonly partial = new Set<string>();
+  private completing = false;
 
   getTranslation(language: string): Observable<TranslationObject> {
     const key = stateKey(language);
     if (this.files) {
-      return from(this.files(language)).pipe(tap((words) => this.state.set(key, words)));
+      const used: UsedGroups = new Set();
+      return from(this.files(language)).pipe(
+        map((words) => {
+          this.state.onSerialize(key, () => pickGroups(words, used));
+          return watchWordReads(words, used);
+        }),
+      );
     }
     const carried = this.state.get(key, null);
-    if (carried) return of(carried);
+    if (!carried) return this.whole(language);
+    this.partial.add(language);
+    void this.injector
+      .get(ApplicationRef)
+      .whenStable()
+      .then(() => whenIdle(() => this.completeWords()));
+    return of(carried);
+  }
+
+  /** True while some words of the page's languages may still be on their way. */
+  get incomplete(): boolean {
+    return this.partial.size > 0;
+  }
+
+  /** Loads the whole files of the languages the page carried a part of, and merges them in (once). */
+  completeWords(): void {
+    if (this.completing || this.partial.size === 0) return;
+    this.completing = true;
+    const translate = this.injector.get(TranslateService);
+    for (const language of this.partial) {
+      this.whole(language).subscribe({
+        next: (words) => {
+          this.partial.delete(language);
+          translate.setTranslation(language, words, true);
+        },
+        // Offline or failing: the page keeps its words; the next missing word tries again.
+        error: () => (this.completing = false),
+      });
+    }
+  }
+
+  private whole(language: string): Observable<TranslationObject> {
     return this.http.get<TranslationObject>(`${this.baseHref}i18n/${language}.json`);
   }
+}
+
+/**
+ * A word the page did not carry, asked for before the whole words came in: start loading them now
+ * and show nothing until they are here (the translate pipe updates when they merge), rather than
+ * the key. Once all words are in, a missing word shows its key, as ngx-translate does.
+ */
+@Injectable()
+export class WaitForWholeWords implements MissingTranslationHandler {
+  private readonly loader = inject(TransferTranslationLoader);
+
+  handle(params: MissingTranslationHandlerParams): string {
+    if (!this.loader.incomplete) return params.key;
+    this.loader.completeWords();
+    return '';
+  }
+}
+
+function whenIdle(run: () => void): void {
+  if (typeof requestIdleCallback === 'function') requestIdleCallback(run, { timeout: 2000 });
+  else setTimeout(run, 0);
 }
