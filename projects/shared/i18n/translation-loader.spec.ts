@@ -26,7 +26,7 @@ describe('TransferTranslationLoader in the browser', () => {
       ],
     });
 
-  it('starts from the words the page carried, then merges the whole file in', async () => {
+  it('starts from the words the page carried, then takes the whole file in their place', async () => {
     start({ today: { title: 'Today' } });
     const translate = TestBed.inject(TranslateService);
     await firstValueFrom(translate.use('en'));

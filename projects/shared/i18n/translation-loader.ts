@@ -22,7 +22,7 @@ const stateKey = (language: string) => makeStateKey<TranslationObject>(`lb-i18n-
 /**
  * Words for a language. On the server from disk, watched: the page's transfer state carries only the
  * groups the render read (used-words.ts). In the browser from that state when the page carried them
- * (no flash of other words), the whole file loaded once the app is idle and merged in; else over HTTP.
+ * (no flash of other words), the whole file loaded once the app is idle, in their place; else over HTTP.
  */
 @Injectable()
 export class TransferTranslationLoader implements TranslateLoader {
@@ -61,7 +61,7 @@ export class TransferTranslationLoader implements TranslateLoader {
     return this.partial.size > 0;
   }
 
-  /** Loads the whole files of the languages the page carried a part of, and merges them in (once). */
+  /** Loads the whole files of the languages the page carried a part of, in place of those parts (once). */
   completeWords(): void {
     if (this.completing || this.partial.size === 0) return;
     this.completing = true;
@@ -70,7 +70,8 @@ export class TransferTranslationLoader implements TranslateLoader {
       this.whole(language).subscribe({
         next: (words) => {
           this.partial.delete(language);
-          translate.setTranslation(language, words, true);
+          // The whole file holds every carried word: it replaces them (merging would deep-copy both).
+          translate.setTranslation(language, words);
         },
         // Offline or failing: the page keeps its words; the next missing word tries again.
         error: () => (this.completing = false),
@@ -85,7 +86,7 @@ export class TransferTranslationLoader implements TranslateLoader {
 
 /**
  * A word the page did not carry, asked for before the whole words came in: start loading them now
- * and show nothing until they are here (the translate pipe updates when they merge), rather than
+ * and show nothing until they are here (the translate pipe updates when they arrive), rather than
  * the key. Once all words are in, a missing word shows its key, as ngx-translate does.
  */
 @Injectable()

@@ -3,7 +3,6 @@ import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@a
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
-import { MatListModule } from '@angular/material/list';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatSidenavModule } from '@angular/material/sidenav';
 import { MatSnackBar } from '@angular/material/snack-bar';
@@ -27,7 +26,6 @@ const NARROW = '(max-width: 959.98px)';
   imports: [
     MatButtonModule,
     MatIconModule,
-    MatListModule,
     MatMenuModule,
     MatSidenavModule,
     MatToolbarModule,
