@@ -1,5 +1,5 @@
 import type { BillingMethod, BillingTerms } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
+import type { SqlQuery, TenantTx } from '@layerbook/db';
 import { includedTax } from '@layerbook/domain';
 import type Decimal from 'decimal.js';
 import { localDate } from '../firms/local-date';
@@ -26,18 +26,33 @@ export interface BillingJob {
   time_zone: string;
 }
 
+const JOB_COLUMNS = `j.id, j.client_id, j.site_id, j.title, j.currency, j.contract_sum::text as contract_sum,
+            j.original_contract_sum::text as original_contract_sum, j.contract_tax::text as contract_tax, j.billing_method,
+            j.billing_terms, j.billing_started_at, j.walkthrough_on::text as walkthrough_on, j.finish_date::text as finish_date,
+            j.proposal_version_id, j.accepted_variant_id, f.time_zone`;
+
 /** Loads a job (404 when it is not this firm's); `lock` takes its row lock, so billing writes on one job go one at a time. */
 export async function loadBillingJob(tx: TenantTx, jobId: string, lock = false): Promise<BillingJob> {
   const { rows } = await tx.client.query<BillingJob>(
-    `select j.id, j.client_id, j.site_id, j.title, j.currency, j.contract_sum::text as contract_sum,
-            j.original_contract_sum::text as original_contract_sum, j.contract_tax::text as contract_tax, j.billing_method,
-            j.billing_terms, j.billing_started_at, j.walkthrough_on::text as walkthrough_on, j.finish_date::text as finish_date,
-            j.proposal_version_id, j.accepted_variant_id, f.time_zone
+    `select ${JOB_COLUMNS}
        from jobs j join firms f on f.id = j.tenant_id
       where j.tenant_id = $1 and j.id = $2 ${lock ? 'for update of j' : ''}`,
     [tx.tenantId, jobId],
   );
   if (!rows[0]) throw notFound('job');
+  return rows[0];
+}
+
+/** The job an invoice bills, with its row lock (loadBillingJob's, found through the invoice in the same statement); 404 names the invoice. */
+export async function lockJobOfInvoice(tx: TenantTx, invoiceId: string): Promise<BillingJob> {
+  const { rows } = await tx.client.query<BillingJob>(
+    `select ${JOB_COLUMNS}
+       from jobs j join firms f on f.id = j.tenant_id
+      where j.tenant_id = $1 and j.id = (select job_id from invoices where tenant_id = $1 and id = $2)
+        for update of j`,
+    [tx.tenantId, invoiceId],
+  );
+  if (!rows[0]) throw notFound('invoice');
   return rows[0];
 }
 
@@ -62,6 +77,25 @@ export const firmToday = (job: Pick<BillingJob, 'time_zone'>, now: Date): string
 /** Issued invoices of the job that still count (not drafts, not void). */
 export const LIVE_ISSUED = `status in ('issued', 'part_paid', 'paid', 'refunded')`;
 
+/** What the job's issued non-void invoices billed and the tax inside it, but for one invoice ($3, or null): read by invoiceTax. */
+export const billedBeforeRead = (tenantId: string, jobId: string, exceptInvoiceId: string | null): SqlQuery => ({
+  name: 'billing_job_billed_before',
+  text: `select coalesce(sum(total), 0)::text as billed, coalesce(sum(tax_included), 0)::text as tax
+       from invoices where tenant_id = $1 and job_id = $2 and ${LIVE_ISSUED} and id is distinct from $3::uuid`,
+  values: [tenantId, jobId, exceptInvoiceId],
+});
+
+/** The tax inside `amount` from billedBeforeRead's row (see invoiceTax). */
+export const taxInside = (job: BillingJob, amount: Decimal | string, billedBefore: { billed: string; tax: string }): Decimal =>
+  includedTax({
+    amount,
+    contractSum: job.contract_sum,
+    contractTax: job.contract_tax,
+    billedBefore: billedBefore.billed,
+    taxBilledBefore: billedBefore.tax,
+    currency: job.currency,
+  });
+
 /**
  * The tax inside `amount` (contract sums include tax): the invoice's share of the contract's tax,
  * the invoice that closes the contract taking the rest, over the job's issued non-void invoices.
@@ -72,17 +106,7 @@ export async function invoiceTax(
   amount: Decimal | string,
   exceptInvoiceId: string | null,
 ): Promise<Decimal> {
-  const { rows } = await tx.client.query<{ billed: string; tax: string }>(
-    `select coalesce(sum(total), 0)::text as billed, coalesce(sum(tax_included), 0)::text as tax
-       from invoices where tenant_id = $1 and job_id = $2 and ${LIVE_ISSUED} and id is distinct from $3`,
-    [tx.tenantId, job.id, exceptInvoiceId],
-  );
-  return includedTax({
-    amount,
-    contractSum: job.contract_sum,
-    contractTax: job.contract_tax,
-    billedBefore: rows[0].billed,
-    taxBilledBefore: rows[0].tax,
-    currency: job.currency,
-  });
+  const read = billedBeforeRead(tx.tenantId, job.id, exceptInvoiceId);
+  const { rows } = await tx.client.query<{ billed: string; tax: string }>(read.text, [...read.values]);
+  return taxInside(job, amount, rows[0]);
 }

@@ -1,5 +1,5 @@
 import type { BillingSettings, BillingTerms, InvoiceDocument } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
+import type { SqlQuery, TenantTx } from '@layerbook/db';
 import { termsText } from '@layerbook/domain';
 import { documentWords } from './invoice-words';
 
@@ -23,18 +23,10 @@ interface DocumentRow {
   job_title: string;
 }
 
-/**
- * What an invoice prints, from the firm, client, site and job rows as they are now: frozen into
- * the invoice at issue (a draft shows what it would print today). One query.
- */
-export async function invoiceDocument(
-  tx: TenantTx,
-  jobId: string,
-  terms: BillingTerms,
-  settings: BillingSettings,
-): Promise<InvoiceDocument> {
-  const { rows } = await tx.client.query<DocumentRow>(
-    `select json_build_object('name', f.name, 'phone', f.phone, 'tax_id', f.tax_id, 'logo_file_id', f.logo_file_id, 'language', f.language,
+/** The firm, client, site and job rows an invoice prints (documentFrom makes the document from its row). */
+export const documentRead = (tenantId: string, jobId: string): SqlQuery => ({
+  name: 'invoice_document_rows',
+  text: `select json_build_object('name', f.name, 'phone', f.phone, 'tax_id', f.tax_id, 'logo_file_id', f.logo_file_id, 'language', f.language,
               'country', f.country, 'address_line1', f.address_line1, 'address_line2', f.address_line2, 'city', f.city, 'region', f.region,
               'postal_code', f.postal_code) as firm,
             json_build_object('name', c.name, 'email', c.email) as client,
@@ -45,9 +37,27 @@ export async function invoiceDocument(
        join clients c on c.tenant_id = j.tenant_id and c.id = j.client_id
        join sites s on s.tenant_id = j.tenant_id and s.id = j.site_id
       where j.tenant_id = $1 and j.id = $2`,
-    [tx.tenantId, jobId],
-  );
-  const r = rows[0];
+  values: [tenantId, jobId],
+});
+
+/**
+ * What an invoice prints, from the firm, client, site and job rows as they are now: frozen into
+ * the invoice at issue (a draft shows what it would print today). One query.
+ */
+export async function invoiceDocument(
+  tx: TenantTx,
+  jobId: string,
+  terms: BillingTerms,
+  settings: BillingSettings,
+): Promise<InvoiceDocument> {
+  const read = documentRead(tx.tenantId, jobId);
+  const { rows } = await tx.client.query<Record<string, unknown>>(read.text, [...read.values]);
+  return documentFrom(rows[0], terms, settings);
+}
+
+/** The document from documentRead's row. */
+export function documentFrom(row: Record<string, unknown>, terms: BillingTerms, settings: BillingSettings): InvoiceDocument {
+  const r = row as unknown as DocumentRow;
   return {
     firm: {
       name: r.firm.name,

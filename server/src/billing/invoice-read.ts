@@ -12,10 +12,10 @@ import type {
   ProgressTable,
 } from '@layerbook/contracts';
 import type { InvoiceListQuery } from '@layerbook/contracts';
-import { isoUtcText, type TenantTx } from '@layerbook/db';
+import { isoUtcText, readAllInOneTrip, type SqlQuery, type TenantTx } from '@layerbook/db';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
 import { notFound } from '../http/problem';
-import { listInvoiceCredits, listInvoicePayments } from '../payments/payment-read';
+import { invoiceCreditsRead, invoiceCredits, invoicePaymentReads, invoicePayments } from '../payments/payment-read';
 import { loadBillingJob, termsOf } from './billing-job';
 import { invoiceDocument } from './document';
 import { moneyOut } from './money';
@@ -210,26 +210,63 @@ function trailText(action: string, data: AuditData): string {
   }
 }
 
-/** GET /api/invoices/:id: the invoice with its credit note, payments, reminders and trail. */
-export async function getInvoice(tx: TenantTx, id: string, now: Date): Promise<InvoiceDetail> {
-  const { rows } = await tx.client.query<DetailRow>(
-    `with clock as (select ($3::timestamptz at time zone f.time_zone)::date as today, f.time_zone from firms f where f.id = $1)
+const TRAIL_ORDER_SQL = `array[${TRAIL_ORDER.map((a) => `'${a}'`).join(', ')}]::text[]`;
+
+/**
+ * The reads of an invoice's page, run in one round trip (readAllInOneTrip): the invoice with its
+ * firm-local day ($3 is now), its credit note, payments and refunds, client credits, reminders
+ * and trail (the credit note's entries found through it).
+ */
+const detailReads = (tenantId: string, id: string, now: Date): SqlQuery[] => [
+  {
+    name: 'invoice_detail',
+    text: `with clock as (select ($3::timestamptz at time zone f.time_zone)::date as today, f.time_zone from firms f where f.id = $1)
      select ${summaryColumns('(select today from clock)')}, i.schedule_line_id, i.period_end::text as period_end, i.subtotal::text as subtotal,
             i.deposit_credit::text as deposit_credit, i.retainage_held::text as retainage_held, i.tax_included::text as tax_included,
             i.amount_paid::text as amount_paid, i.amount_credited::text as amount_credited, i.lines, i.progress, i.document, i.notes,
             i.trigger, i.sent_at, i.void_reason
        ${SUMMARY_FROM} where i.tenant_id = $1 and i.id = $2`,
-    [tx.tenantId, id, now],
+    values: [tenantId, id, now],
+  },
+  {
+    name: 'invoice_credit_note',
+    text: `select id, number_text, issued_on::text as issued_on, amount::text as amount, reason from credit_notes where tenant_id = $1 and invoice_id = $2`,
+    values: [tenantId, id],
+  },
+  ...invoicePaymentReads(tenantId, id),
+  invoiceCreditsRead(tenantId, id),
+  {
+    name: 'invoice_reminders_sent',
+    text: `select step, sent_on::text as sent_on from invoice_reminders where tenant_id = $1 and invoice_id = $2 order by sent_on, created_at`,
+    values: [tenantId, id],
+  },
+  {
+    name: 'invoice_trail',
+    text: `select a.created_at, a.action, a.data, a.actor_kind, coalesce(u.name, pu.name) as who
+         from audit_log a
+         left join users u on a.actor_kind = 'staff' and u.id = a.actor_user_id
+         left join portal_users pu on a.actor_kind = 'client' and pu.tenant_id = a.tenant_id and pu.id = a.actor_user_id
+        where a.tenant_id = $1 and ((a.entity = 'invoice' and a.entity_id = $2)
+              or (a.entity = 'credit_note' and a.entity_id in (select id from credit_notes where tenant_id = $1 and invoice_id = $2)))
+        order by a.created_at, array_position(${TRAIL_ORDER_SQL}, a.action), a.id`,
+    values: [tenantId, id],
+  },
+];
+
+type CreditNoteRow = { id: string; number_text: string; issued_on: string; amount: string; reason: string };
+type ReminderRow = { step: string; sent_on: string };
+type TrailRow = { created_at: Date; action: string; data: AuditData; actor_kind: string; who: string | null };
+
+/** GET /api/invoices/:id: the invoice with its credit note, payments, reminders and trail. */
+export async function getInvoice(tx: TenantTx, id: string, now: Date): Promise<InvoiceDetail> {
+  const [detailRows, creditRows, paymentRows, refundRows, clientCreditRows, reminderRows, trailRows] = await readAllInOneTrip(
+    tx,
+    detailReads(tx.tenantId, id, now),
   );
-  const r = rows[0];
+  const r = detailRows[0] as unknown as DetailRow | undefined;
   if (!r) throw notFound('invoice');
   const m = (v: string) => moneyOut(v, r.currency);
-  const credit = (
-    await tx.client.query<{ id: string; number_text: string; issued_on: string; amount: string; reason: string }>(
-      `select id, number_text, issued_on::text as issued_on, amount::text as amount, reason from credit_notes where tenant_id = $1 and invoice_id = $2`,
-      [tx.tenantId, id],
-    )
-  ).rows[0];
+  const credit = creditRows[0] as unknown as CreditNoteRow | undefined;
   const creditNote: CreditNoteView | null = credit
     ? {
         id: credit.id,
@@ -241,25 +278,14 @@ export async function getInvoice(tx: TenantTx, id: string, now: Date): Promise<I
         reason: credit.reason,
       }
     : null;
-  const payments = await listInvoicePayments(tx, id);
-  const clientCredits = await listInvoiceCredits(tx, id);
-  const reminders = (
-    await tx.client.query<{ step: string; sent_on: string }>(
-      `select step, sent_on::text as sent_on from invoice_reminders where tenant_id = $1 and invoice_id = $2 order by sent_on, created_at`,
-      [tx.tenantId, id],
-    )
-  ).rows.map((x): InvoiceReminderView => ({ step: x.step, label: reminderLabel(x.step), sentOn: x.sent_on }));
-  const trail = (
-    await tx.client.query<{ created_at: Date; action: string; data: AuditData; actor_kind: string; who: string | null }>(
-      `select a.created_at, a.action, a.data, a.actor_kind, coalesce(u.name, pu.name) as who
-         from audit_log a
-         left join users u on a.actor_kind = 'staff' and u.id = a.actor_user_id
-         left join portal_users pu on a.actor_kind = 'client' and pu.tenant_id = a.tenant_id and pu.id = a.actor_user_id
-        where a.tenant_id = $1 and ((a.entity = 'invoice' and a.entity_id = $2) or (a.entity = 'credit_note' and a.entity_id = $3))
-        order by a.created_at, array_position($4::text[], a.action), a.id`,
-      [tx.tenantId, id, credit?.id ?? null, TRAIL_ORDER],
-    )
-  ).rows.map((a): AuditTrailEntry => ({
+  const payments = invoicePayments(paymentRows, refundRows);
+  const clientCredits = invoiceCredits(clientCreditRows);
+  const reminders = (reminderRows as unknown as ReminderRow[]).map((x): InvoiceReminderView => ({
+    step: x.step,
+    label: reminderLabel(x.step),
+    sentOn: x.sent_on,
+  }));
+  const trail = (trailRows as unknown as TrailRow[]).map((a): AuditTrailEntry => ({
     at: a.created_at.toISOString(),
     who: a.who ?? (a.actor_kind === 'system' ? 'Automatic' : 'Someone'),
     action: a.action,

@@ -1,4 +1,4 @@
-import type { TenantTx } from '@layerbook/db';
+import { commitWith, type TenantTx } from '@layerbook/db';
 import { documentNumber } from '@layerbook/domain';
 
 /** Digits a document number is padded to ("INV-0007"). */
@@ -21,6 +21,17 @@ export async function nextDocumentNumber(tx: TenantTx, series: DocumentSeries): 
   return rows[0].n;
 }
 
+/**
+ * documentNumber() in SQL, for the number taken in the same statement: `head` is the prefix as
+ * documentNumber joins it (documentNumber(prefix, 1, 1) without its digit), `n` the number, `width`
+ * the padding — three SQL expressions. numbering.spec.ts checks the two agree.
+ */
+export const numberTextSql = (head: string, n: string, width: string) =>
+  `${head} || lpad(${n}::text, greatest(${width}, length(${n}::text)), '0')`;
+
+/** The head numberTextSql takes for a prefix. */
+export const numberHead = (prefix: string) => documentNumber(prefix, 1, 1).slice(0, -1);
+
 /** What issuing sets in the same statement as the number: the columns the firm's kept cash figures read. */
 export interface IssuedState {
   readonly status: 'issued' | 'paid';
@@ -28,33 +39,53 @@ export interface IssuedState {
   readonly total: string;
 }
 
+/** Who issues, for the audit entry written in the same statement. */
+export interface IssuedBy {
+  readonly actorUserId: string | null;
+  readonly actorKind: 'staff' | 'client' | 'system';
+}
+
 /**
- * Issuing's last write before its audit entry: takes the next invoice number AND stamps it on the
- * invoice with its issued state in one statement, so the counter row — which every issuer of the
- * firm waits on until commit — and the kept figures' rows the invoice's triggers update (cash) are
- * held for as short a time as possible (the heavy document write happens before).
- * The text is made in SQL from the prefix's head and checked against documentNumber().
+ * Issuing's last write: takes the next invoice number, stamps it on the invoice with its issued
+ * state (the columns the firm's kept cash figures read, so their triggers lock those rows only
+ * now) and writes the "invoice.issued" audit entry, all in one statement, so the counter row —
+ * which every issuer of the firm waits on until commit — is held as briefly as possible (the heavy
+ * document write happens before). With `commit` the statement and COMMIT go as one round trip
+ * (commitWith): nothing may follow it in the transaction.
+ * The text is made in SQL (numberTextSql).
  */
 export async function takeInvoiceNumber(
   tx: TenantTx,
   invoiceId: string,
   prefix: string,
   state: IssuedState,
+  by: IssuedBy,
+  options: { commit: boolean },
 ): Promise<{ n: number; text: string }> {
-  const head = documentNumber(prefix, 1, 1).slice(0, -1);
-  const { rows } = await tx.client.query<{ n: number; text: string }>(
-    `with counter as (
+  const head = numberHead(prefix);
+  const query = {
+    text: `with counter as (
        insert into document_counters (tenant_id, series, next_no) values ($1, 'invoice', 2)
        on conflict (tenant_id, series) do update set next_no = document_counters.next_no + 1
-       returning next_no - 1 as n)
-     update invoices i set number = counter.n, number_text = $3 || lpad(counter.n::text, greatest($4, length(counter.n::text)), '0'),
-            status = $5, due_on = $6, total = $7
-       from counter where i.tenant_id = $1 and i.id = $2
-     returning counter.n as n, i.number_text as text`,
-    [tx.tenantId, invoiceId, head, NUMBER_WIDTH, state.status, state.dueOn, state.total],
-  );
+       returning next_no - 1 as n),
+     numbered as (
+       update invoices i set number = counter.n, number_text = ${numberTextSql('$3', 'counter.n', '$4')},
+              status = $5, due_on = $6, total = $7
+         from counter where i.tenant_id = $1 and i.id = $2
+       returning counter.n as n, i.number_text as text, i.issued_on, i.due_on, i.total),
+     audit as (
+       insert into audit_log (tenant_id, actor_user_id, actor_kind, action, entity, entity_id, data)
+       select $1, $8, $9, 'invoice.issued', 'invoice', $2,
+              jsonb_build_object('number', text, 'issuedOn', issued_on::text, 'dueOn', due_on::text, 'total', total::text)
+         from numbered)
+     select n, text from numbered`,
+    values: [tx.tenantId, invoiceId, head, NUMBER_WIDTH, state.status, state.dueOn, state.total, by.actorUserId, by.actorKind],
+  };
+  const rows = (options.commit ? await commitWith(tx.client, query) : (await tx.client.query(query)).rows) as Array<{
+    n: number;
+    text: string;
+  }>;
   const taken = rows[0];
-  if (!taken || taken.text !== documentNumber(prefix, taken.n, NUMBER_WIDTH))
-    throw new Error('The invoice number was not taken as printed.');
+  if (!taken) throw new Error('The invoice to number was not found.');
   return taken;
 }

@@ -84,12 +84,12 @@ export function invoiceRoutes(ctx: AppContext): Router {
     res.status(204).end();
   });
 
-  // Issuing holds the firm's counter row until it commits: the page is read in a second transaction
-  // so other issuers wait only for the issue itself.
+  // Issuing holds the firm's counter row until it commits: issuing is this transaction's last step (it
+  // may commit with the number) and the page is read in a second one, so other issuers wait only for the issue itself.
   router.post('/:id/issue', async (req, res) => {
     const id = await withStaff(ctx, req, 'office', async (tx, staff) => {
       const { id } = parse(idParam, req.params);
-      await issueInvoice(tx, deps, staffActor(staff), id, parse(invoiceIssue, req.body), ctx.now());
+      await issueInvoice(tx, deps, staffActor(staff), id, parse(invoiceIssue, req.body), ctx.now(), { endsTransaction: true });
       return id;
     });
     res.json((await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, id, ctx.now()))) satisfies InvoiceDetail);

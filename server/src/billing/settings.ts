@@ -5,15 +5,21 @@ import {
   type DepositCapSetting,
   DEFAULT_BILLING_SETTINGS,
 } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
+import type { SqlQuery, TenantTx } from '@layerbook/db';
 import { type DepositCapRule, depositCap, minorUnitDigits } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 
-/** The firm's billing settings, or the defaults when the owner has not saved any. */
 /** The firm's stored billing settings ($1 tenant): no row until the owner saves them. */
 export const BILLING_SETTINGS_SQL = `select settings from firm_billing_settings where tenant_id = $1`;
+
+/** BILLING_SETTINGS_SQL for a batch of reads (readAllInOneTrip); billingSettingsOf makes the settings from its rows. */
+export const billingSettingsRead = (tenantId: string): SqlQuery => ({
+  name: 'firm_billing_settings',
+  text: BILLING_SETTINGS_SQL,
+  values: [tenantId],
+});
 
 /** The settings from BILLING_SETTINGS_SQL's rows: the stored ones over the defaults (newer fields), or the defaults. */
 export function billingSettingsOf(rows: readonly { settings: BillingSettings }[]): { settings: BillingSettings; isDefault: boolean } {
@@ -22,6 +28,7 @@ export function billingSettingsOf(rows: readonly { settings: BillingSettings }[]
     : { settings: DEFAULT_BILLING_SETTINGS, isDefault: true };
 }
 
+/** The firm's billing settings, or the defaults when the owner has not saved any. */
 export async function loadBillingSettings(tx: TenantTx): Promise<{ settings: BillingSettings; isDefault: boolean }> {
   const { rows } = await tx.client.query<{ settings: BillingSettings }>(BILLING_SETTINGS_SQL, [tx.tenantId]);
   return billingSettingsOf(rows);

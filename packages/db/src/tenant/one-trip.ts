@@ -1,6 +1,6 @@
 import type { Pool } from 'pg';
 import { runReads } from './prepared-reads';
-import { isUuid } from './scoped';
+import { isUuid, type Tx } from './scoped';
 import { inlineQuery, type SqlQuery } from './sql-literal';
 
 export { inlineQuery, type SqlQuery } from './sql-literal';
@@ -74,4 +74,12 @@ export async function readManyInOneTrip(pool: Pool, tenantId: string, reads: rea
   } finally {
     client.release();
   }
+}
+
+/**
+ * Several reads inside the caller's transaction in ONE round trip (no BEGIN or COMMIT of its own;
+ * named ones as prepared statements: prepared-reads.ts): each one's rows, in order.
+ */
+export function readAllInOneTrip(tx: Tx, reads: readonly SqlQuery[]): Promise<Rows[]> {
+  return runReads(tx.client, [], reads, null);
 }

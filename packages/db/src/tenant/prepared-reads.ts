@@ -9,14 +9,19 @@ const preparedOn = new WeakMap<PoolClient, Set<string>>();
 const NAME = /^[a-z_][a-z0-9_]{0,62}$/;
 
 /**
- * Sends `before` (statements whose results are skipped), the reads and `after` (COMMIT) as ONE simple query
+ * Sends `before` (statements whose results are skipped), the reads and `after` (COMMIT, or null) as ONE simple query
  * and answers each read's rows in order. A named read runs as EXECUTE of a statement prepared on that
  * connection — the PREPARE sent ahead of it the first time — so PostgreSQL plans it once per
  * connection (a generic plan after its first few runs) instead of on every call; its parameters are
  * written in as literals (inlineQuery's) and take the types PREPARE inferred. When the query fails,
  * the names it was preparing are dropped again, so a later call prepares them afresh.
  */
-export async function runReads(client: PoolClient, before: readonly string[], reads: readonly SqlQuery[], after: string): Promise<Rows[]> {
+export async function runReads(
+  client: PoolClient,
+  before: readonly string[],
+  reads: readonly SqlQuery[],
+  after: string | null,
+): Promise<Rows[]> {
   const held = preparedOn.get(client) ?? new Set<string>();
   const preparing: string[] = [];
   const parts: string[] = [];
@@ -37,7 +42,7 @@ export async function runReads(client: PoolClient, before: readonly string[], re
     const args = read.values.map((value, i) => literal(value, String(i + 1)));
     parts.push(args.length === 0 ? `execute ${read.name}` : `execute ${read.name}(${args.join(', ')})`);
   }
-  const text = [...before, ...parts, after].join('; ');
+  const text = [...before, ...parts, ...(after === null ? [] : [after])].join('; ');
   try {
     const answered = (await client.query(text)) as unknown as Array<{ rows: Rows }> | { rows: Rows };
     const results = Array.isArray(answered) ? answered : [answered];

@@ -1,5 +1,8 @@
 import { drizzle, NodePgDatabase } from 'drizzle-orm/node-postgres';
 import type { Pool, PoolClient } from 'pg';
+import { nameStatements, takeEnded } from './named-statements';
+
+export { commitWith } from './named-statements';
 
 /**
  * Query-builder only (no relational `db.query` API): building Drizzle's relational config from the
@@ -43,14 +46,15 @@ export interface LookupKeys {
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 async function inTransaction<T>(pool: Pool, begin: (client: PoolClient) => Promise<void>, fn: (tx: Tx) => Promise<T>): Promise<T> {
-  const client = await pool.connect();
+  const client = nameStatements(await pool.connect());
   try {
     await begin(client);
     const result = await fn({ client, db: drizzle(client, { casing: 'snake_case' }) });
-    await client.query('commit');
+    if (!takeEnded(client)) await client.query('commit');
     return result;
   } catch (error) {
-    await client.query('rollback').catch(() => undefined);
+    // After commitWith() there is nothing to roll back (and no query may be sent before this).
+    if (!takeEnded(client)) await client.query('rollback').catch(() => undefined);
     throw error;
   } finally {
     client.release();
