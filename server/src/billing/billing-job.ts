@@ -43,6 +43,15 @@ export async function loadBillingJob(tx: TenantTx, jobId: string, lock = false):
   return rows[0];
 }
 
+/** The job an invoice bills (loadBillingJob's row), for a batch of reads. */
+export const jobOfInvoiceRead = (tenantId: string, invoiceId: string): SqlQuery => ({
+  name: 'billing_job_of_invoice',
+  text: `select ${JOB_COLUMNS}
+       from jobs j join firms f on f.id = j.tenant_id
+      where j.tenant_id = $1 and j.id = (select job_id from invoices where tenant_id = $1 and id = $2)`,
+  values: [tenantId, invoiceId],
+});
+
 /** The job an invoice bills, with its row lock (loadBillingJob's, found through the invoice in the same statement); 404 names the invoice. */
 export async function lockJobOfInvoice(tx: TenantTx, invoiceId: string): Promise<BillingJob> {
   const { rows } = await tx.client.query<BillingJob>(

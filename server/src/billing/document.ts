@@ -23,10 +23,8 @@ interface DocumentRow {
   job_title: string;
 }
 
-/** The firm, client, site and job rows an invoice prints (documentFrom makes the document from its row). */
-export const documentRead = (tenantId: string, jobId: string): SqlQuery => ({
-  name: 'invoice_document_rows',
-  text: `select json_build_object('name', f.name, 'phone', f.phone, 'tax_id', f.tax_id, 'logo_file_id', f.logo_file_id, 'language', f.language,
+/** What an invoice prints is read from (the firm, client, site and job), without its where-clause. */
+const DOCUMENT_ROWS = `select json_build_object('name', f.name, 'phone', f.phone, 'tax_id', f.tax_id, 'logo_file_id', f.logo_file_id, 'language', f.language,
               'country', f.country, 'address_line1', f.address_line1, 'address_line2', f.address_line2, 'city', f.city, 'region', f.region,
               'postal_code', f.postal_code) as firm,
             json_build_object('name', c.name, 'email', c.email) as client,
@@ -35,9 +33,20 @@ export const documentRead = (tenantId: string, jobId: string): SqlQuery => ({
             j.title as job_title
        from jobs j join firms f on f.id = j.tenant_id
        join clients c on c.tenant_id = j.tenant_id and c.id = j.client_id
-       join sites s on s.tenant_id = j.tenant_id and s.id = j.site_id
-      where j.tenant_id = $1 and j.id = $2`,
+       join sites s on s.tenant_id = j.tenant_id and s.id = j.site_id`;
+
+/** The firm, client, site and job rows an invoice prints (documentFrom makes the document from its row). */
+export const documentRead = (tenantId: string, jobId: string): SqlQuery => ({
+  name: 'invoice_document_rows',
+  text: `${DOCUMENT_ROWS} where j.tenant_id = $1 and j.id = $2`,
   values: [tenantId, jobId],
+});
+
+/** documentRead through the invoice ($2) whose job it is. */
+export const documentReadOfInvoice = (tenantId: string, invoiceId: string): SqlQuery => ({
+  name: 'invoice_document_rows_of_invoice',
+  text: `${DOCUMENT_ROWS} where j.tenant_id = $1 and j.id = (select job_id from invoices where tenant_id = $1 and id = $2)`,
+  values: [tenantId, invoiceId],
 });
 
 /**

@@ -1,5 +1,6 @@
 import type {
   AuditTrailEntry,
+  BillingSettings,
   CreditNoteView,
   InvoiceDetail,
   InvoiceDocument,
@@ -16,10 +17,10 @@ import { isoUtcText, readAllInOneTrip, type SqlQuery, type TenantTx } from '@lay
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
 import { notFound } from '../http/problem';
 import { invoiceCreditsRead, invoiceCredits, invoicePaymentReads, invoicePayments } from '../payments/payment-read';
-import { loadBillingJob, termsOf } from './billing-job';
-import { invoiceDocument } from './document';
+import { type BillingJob, jobOfInvoiceRead } from './billing-job';
+import { documentFrom, documentReadOfInvoice } from './document';
 import { moneyOut } from './money';
-import { loadBillingSettings } from './settings';
+import { billingSettingsOf, billingSettingsRead, billingTermsFor } from './settings';
 
 /**
  * An invoice summary's columns; `$today` is the firm-local day the query is given, so whether an
@@ -214,8 +215,8 @@ const TRAIL_ORDER_SQL = `array[${TRAIL_ORDER.map((a) => `'${a}'`).join(', ')}]::
 
 /**
  * The reads of an invoice's page, run in one round trip (readAllInOneTrip): the invoice with its
- * firm-local day ($3 is now), its credit note, payments and refunds, client credits, reminders
- * and trail (the credit note's entries found through it).
+ * firm-local day ($3 is now), its credit note, payments and refunds, client credits, reminders,
+ * trail (the credit note's entries found through it), and the rows a draft's document is made from.
  */
 const detailReads = (tenantId: string, id: string, now: Date): SqlQuery[] => [
   {
@@ -251,18 +252,23 @@ const detailReads = (tenantId: string, id: string, now: Date): SqlQuery[] => [
         order by a.created_at, array_position(${TRAIL_ORDER_SQL}, a.action), a.id`,
     values: [tenantId, id],
   },
+  // What a draft would print today (an issued one keeps its frozen document).
+  jobOfInvoiceRead(tenantId, id),
+  billingSettingsRead(tenantId),
+  documentReadOfInvoice(tenantId, id),
 ];
 
 type CreditNoteRow = { id: string; number_text: string; issued_on: string; amount: string; reason: string };
 type ReminderRow = { step: string; sent_on: string };
 type TrailRow = { created_at: Date; action: string; data: AuditData; actor_kind: string; who: string | null };
 
-/** GET /api/invoices/:id: the invoice with its credit note, payments, reminders and trail. */
-export async function getInvoice(tx: TenantTx, id: string, now: Date): Promise<InvoiceDetail> {
-  const [detailRows, creditRows, paymentRows, refundRows, clientCreditRows, reminderRows, trailRows] = await readAllInOneTrip(
-    tx,
-    detailReads(tx.tenantId, id, now),
-  );
+/**
+ * GET /api/invoices/:id: the invoice with its credit note, payments, reminders and trail, in one
+ * round trip. `endsTransaction`: reading it is the caller's last step, so its COMMIT goes in that trip.
+ */
+export async function getInvoice(tx: TenantTx, id: string, now: Date, options: { endsTransaction?: boolean } = {}): Promise<InvoiceDetail> {
+  const [detailRows, creditRows, paymentRows, refundRows, clientCreditRows, reminderRows, trailRows, jobRows, settingsRows, documentRows] =
+    await readAllInOneTrip(tx, detailReads(tx.tenantId, id, now), { commit: options.endsTransaction === true });
   const r = detailRows[0] as unknown as DetailRow | undefined;
   if (!r) throw notFound('invoice');
   const m = (v: string) => moneyOut(v, r.currency);
@@ -293,8 +299,9 @@ export async function getInvoice(tx: TenantTx, id: string, now: Date): Promise<I
   }));
   let document = r.document;
   if (!document) {
-    const job = await loadBillingJob(tx, r.job_id);
-    document = await invoiceDocument(tx, r.job_id, await termsOf(tx, job), (await loadBillingSettings(tx)).settings);
+    const job = jobRows[0] as unknown as BillingJob;
+    const { settings } = billingSettingsOf(settingsRows as Array<{ settings: BillingSettings }>);
+    document = documentFrom(documentRows[0], job.billing_terms ?? billingTermsFor(settings, job.contract_sum, job.currency), settings);
   }
   return {
     ...toSummary(r),

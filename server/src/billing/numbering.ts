@@ -39,6 +39,9 @@ export interface IssuedState {
   readonly total: string;
 }
 
+/** The audit entry issuing writes with the number. */
+const ISSUED = { action: 'invoice.issued' } as const;
+
 /** Who issues, for the audit entry written in the same statement. */
 export interface IssuedBy {
   readonly actorUserId: string | null;
@@ -75,11 +78,22 @@ export async function takeInvoiceNumber(
        returning counter.n as n, i.number_text as text, i.issued_on, i.due_on, i.total),
      audit as (
        insert into audit_log (tenant_id, actor_user_id, actor_kind, action, entity, entity_id, data)
-       select $1, $8, $9, 'invoice.issued', 'invoice', $2,
+       select $1, $8, $9, $10, 'invoice', $2,
               jsonb_build_object('number', text, 'issuedOn', issued_on::text, 'dueOn', due_on::text, 'total', total::text)
          from numbered)
      select n, text from numbered`,
-    values: [tx.tenantId, invoiceId, head, NUMBER_WIDTH, state.status, state.dueOn, state.total, by.actorUserId, by.actorKind],
+    values: [
+      tx.tenantId,
+      invoiceId,
+      head,
+      NUMBER_WIDTH,
+      state.status,
+      state.dueOn,
+      state.total,
+      by.actorUserId,
+      by.actorKind,
+      ISSUED.action,
+    ],
   };
   const rows = (options.commit ? await commitWith(tx.client, query) : (await tx.client.query(query)).rows) as Array<{
     n: number;

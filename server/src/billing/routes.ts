@@ -66,7 +66,9 @@ export function invoiceRoutes(ctx: AppContext): Router {
   });
 
   router.get('/:id', async (req, res) => {
-    const detail = await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, parse(idParam, req.params).id, ctx.now()));
+    const detail = await withStaff(ctx, req, 'office', (tx) =>
+      getInvoice(tx, parse(idParam, req.params).id, ctx.now(), { endsTransaction: true }),
+    );
     res.json(detail satisfies InvoiceDetail);
   });
 
@@ -92,7 +94,9 @@ export function invoiceRoutes(ctx: AppContext): Router {
       await issueInvoice(tx, deps, staffActor(staff), id, parse(invoiceIssue, req.body), ctx.now(), { endsTransaction: true });
       return id;
     });
-    res.json((await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, id, ctx.now()))) satisfies InvoiceDetail);
+    res.json(
+      (await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, id, ctx.now(), { endsTransaction: true }))) satisfies InvoiceDetail,
+    );
   });
 
   router.post('/:id/void', async (req, res) => {
@@ -101,7 +105,9 @@ export function invoiceRoutes(ctx: AppContext): Router {
       await voidInvoice(tx, deps, staffActor(staff), id, parse(invoiceVoid, req.body).reason, ctx.now());
       return id;
     });
-    res.json((await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, id, ctx.now()))) satisfies InvoiceDetail);
+    res.json(
+      (await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, id, ctx.now(), { endsTransaction: true }))) satisfies InvoiceDetail,
+    );
   });
 
   router.post('/:id/payments', async (req, res) => {

@@ -72,6 +72,11 @@ export async function commitWith(client: PoolClient, last: SqlQuery): Promise<Re
   return answered[0].rows;
 }
 
+/** Notes that a query this package sent ended the connection's transaction with COMMIT (readAllInOneTrip's `commit`). */
+export function markEnded(client: PoolClient): void {
+  ended.add(client);
+}
+
 /** True once (and forgets it): whether commitWith() already committed this connection's transaction. */
 export function takeEnded(client: PoolClient): boolean {
   return ended.delete(client);

@@ -1,4 +1,5 @@
 import type { Pool } from 'pg';
+import { markEnded } from './named-statements';
 import { runReads } from './prepared-reads';
 import { isUuid, type Tx } from './scoped';
 import { inlineQuery, type SqlQuery } from './sql-literal';
@@ -77,9 +78,12 @@ export async function readManyInOneTrip(pool: Pool, tenantId: string, reads: rea
 }
 
 /**
- * Several reads inside the caller's transaction in ONE round trip (no BEGIN or COMMIT of its own;
- * named ones as prepared statements: prepared-reads.ts): each one's rows, in order.
+ * Several reads inside the caller's transaction in ONE round trip (no BEGIN of its own; named ones
+ * as prepared statements: prepared-reads.ts): each one's rows, in order. With `commit` the
+ * transaction's COMMIT goes in the same trip, as with commitWith(): it must be its last step.
  */
-export function readAllInOneTrip(tx: Tx, reads: readonly SqlQuery[]): Promise<Rows[]> {
-  return runReads(tx.client, [], reads, null);
+export async function readAllInOneTrip(tx: Tx, reads: readonly SqlQuery[], options: { commit?: boolean } = {}): Promise<Rows[]> {
+  const rows = await runReads(tx.client, [], reads, options.commit ? 'commit' : null);
+  if (options.commit) markEnded(tx.client);
+  return rows;
 }
