@@ -52,18 +52,18 @@ export const jobOfInvoiceRead = (tenantId: string, invoiceId: string): SqlQuery 
   values: [tenantId, invoiceId],
 });
 
-/** The job an invoice bills, with its row lock (loadBillingJob's, found through the invoice in the same statement); 404 names the invoice. */
-export async function lockJobOfInvoice(tx: TenantTx, invoiceId: string): Promise<BillingJob> {
-  const { rows } = await tx.client.query<BillingJob>(
-    `select ${JOB_COLUMNS}
+/**
+ * The job an invoice ($2) bills, taking the job's row lock (loadBillingJob's, found through the
+ * invoice in the same statement), for a batch of statements; no row: no such invoice.
+ */
+export const lockJobOfInvoiceRead = (tenantId: string, invoiceId: string): SqlQuery => ({
+  name: 'billing_lock_job_of_invoice',
+  text: `select ${JOB_COLUMNS}
        from jobs j join firms f on f.id = j.tenant_id
       where j.tenant_id = $1 and j.id = (select job_id from invoices where tenant_id = $1 and id = $2)
         for update of j`,
-    [tx.tenantId, invoiceId],
-  );
-  if (!rows[0]) throw notFound('invoice');
-  return rows[0];
-}
+  values: [tenantId, invoiceId],
+});
 
 /** The terms a job bills by: its own copy once billing started, the firm's current ones before. */
 export async function termsOf(tx: TenantTx, job: BillingJob): Promise<BillingTerms> {
@@ -92,6 +92,15 @@ export const billedBeforeRead = (tenantId: string, jobId: string, exceptInvoiceI
   text: `select coalesce(sum(total), 0)::text as billed, coalesce(sum(tax_included), 0)::text as tax
        from invoices where tenant_id = $1 and job_id = $2 and ${LIVE_ISSUED} and id is distinct from $3::uuid`,
   values: [tenantId, jobId, exceptInvoiceId],
+});
+
+/** billedBeforeRead for the job of the invoice ($2), leaving that invoice out. */
+export const billedBeforeReadOfInvoice = (tenantId: string, invoiceId: string): SqlQuery => ({
+  name: 'billing_job_billed_before_invoice',
+  text: `select coalesce(sum(total), 0)::text as billed, coalesce(sum(tax_included), 0)::text as tax
+       from invoices where tenant_id = $1 and job_id = (select job_id from invoices where tenant_id = $1 and id = $2)
+        and ${LIVE_ISSUED} and id <> $2`,
+  values: [tenantId, invoiceId],
 });
 
 /** The tax inside `amount` from billedBeforeRead's row (see invoiceTax). */

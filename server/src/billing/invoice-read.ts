@@ -218,7 +218,7 @@ const TRAIL_ORDER_SQL = `array[${TRAIL_ORDER.map((a) => `'${a}'`).join(', ')}]::
  * firm-local day ($3 is now), its credit note, payments and refunds, client credits, reminders,
  * trail (the credit note's entries found through it), and the rows a draft's document is made from.
  */
-const detailReads = (tenantId: string, id: string, now: Date): SqlQuery[] => [
+export const invoiceDetailReads = (tenantId: string, id: string, now: Date): SqlQuery[] => [
   {
     name: 'invoice_detail',
     text: `with clock as (select ($3::timestamptz at time zone f.time_zone)::date as today, f.time_zone from firms f where f.id = $1)
@@ -267,8 +267,16 @@ type TrailRow = { created_at: Date; action: string; data: AuditData; actor_kind:
  * round trip. `endsTransaction`: reading it is the caller's last step, so its COMMIT goes in that trip.
  */
 export async function getInvoice(tx: TenantTx, id: string, now: Date, options: { endsTransaction?: boolean } = {}): Promise<InvoiceDetail> {
+  return invoiceDetailFrom(
+    id,
+    await readAllInOneTrip(tx, invoiceDetailReads(tx.tenantId, id, now), { commit: options.endsTransaction === true }),
+  );
+}
+
+/** The invoice's page from invoiceDetailReads' rows, in their order; 404 when there is no such invoice. */
+export function invoiceDetailFrom(id: string, results: Record<string, unknown>[][]): InvoiceDetail {
   const [detailRows, creditRows, paymentRows, refundRows, clientCreditRows, reminderRows, trailRows, jobRows, settingsRows, documentRows] =
-    await readAllInOneTrip(tx, detailReads(tx.tenantId, id, now), { commit: options.endsTransaction === true });
+    results;
   const r = detailRows[0] as unknown as DetailRow | undefined;
   if (!r) throw notFound('invoice');
   const m = (v: string) => moneyOut(v, r.currency);

@@ -1,5 +1,5 @@
-import type { BillingSettings, BillingTrigger, InvoiceIssue, InvoiceLine, ProgressTable } from '@layerbook/contracts';
-import { readAllInOneTrip, type TenantTx } from '@layerbook/db';
+import type { BillingSettings, BillingTrigger, InvoiceDetail, InvoiceIssue, InvoiceLine, ProgressTable } from '@layerbook/contracts';
+import { commitThenRead, readAllInOneTrip, runInOneTrip, type SqlQuery, type TenantTx } from '@layerbook/db';
 import { dueDate } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
@@ -7,12 +7,20 @@ import type { Config } from '../config';
 import type { Actor } from '../http/actor';
 import { conflict, notFound } from '../http/problem';
 import type { JobQueue } from '../queue/job-queue';
-import { assertBillingStarted, billedBeforeRead, firmToday, lockJobOfInvoice, taxInside } from './billing-job';
-import { documentFrom, documentRead } from './document';
+import {
+  assertBillingStarted,
+  type BillingJob,
+  billedBeforeReadOfInvoice,
+  firmToday,
+  lockJobOfInvoiceRead,
+  taxInside,
+} from './billing-job';
+import { documentFrom, documentReadOfInvoice } from './document';
 import { progressDepositCredit, retainageHeld } from './drafts';
 import { enqueueInvoiceMail } from './invoice-mail';
 import { linesWithWords, progressWithWords } from './invoice-words';
-import { takeInvoiceNumber } from './numbering';
+import { invoiceDetailFrom, invoiceDetailReads } from './invoice-read';
+import { invoiceNumberQuery } from './numbering';
 import { billingSettingsOf, billingSettingsRead } from './settings';
 
 interface LockedInvoice {
@@ -38,31 +46,56 @@ export interface IssueDeps {
  * other invoices (the deposit credit, the tax inside), take the next number of the firm's invoice
  * series (the counter row stays locked until commit; a failure anywhere rolls the number back),
  * date it and its due date by the job's terms, freeze the document, mark its line invoiced, audit,
- * and e-mail it when asked. Issued twice: 409. `endsTransaction`: issuing is the caller's last step,
- * so without an e-mail the number goes with COMMIT in one round trip (takeInvoiceNumber).
+ * and e-mail it when asked. Issued twice: 409. For a caller whose transaction goes on (acceptance,
+ * the demo); the route uses issueAndRead.
  */
-export async function issueInvoice(
+export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, body: InvoiceIssue, now: Date): Promise<void> {
+  const { writes } = await prepareIssue(tx, actor, id, body, now);
+  await runInOneTrip(tx, writes);
+  if (body.send) await sendIssued(tx, deps, actor, id, now);
+}
+
+/**
+ * issueInvoice as a whole request's transaction, answering the invoice's page. On a busy firm
+ * every issuer waits on the counter row from the number's statement to COMMIT, so (without an
+ * e-mail, which shows the number) the writes, COMMIT and the page's reads go as one round trip
+ * (commitThenRead): the lock is held only while PostgreSQL runs the number's statement.
+ */
+export async function issueAndRead(
   tx: TenantTx,
   deps: IssueDeps,
   actor: Actor,
   id: string,
   body: InvoiceIssue,
   now: Date,
-  options: { endsTransaction?: boolean } = {},
-): Promise<void> {
-  // The job first, then the invoice (the order drafting takes them in): issues on one job go one at
-  // a time, so each one's tax and deposit credit see the others.
-  const job = await lockJobOfInvoice(tx, id);
-  const inv = (
-    await tx.client.query<LockedInvoice>(
-      `select i.id, i.job_id, i.kind, i.status, i.schedule_line_id, i.subtotal::text as subtotal, i.lines, i.progress,
-              l.role as line_role, l.trigger as line_trigger
-         from invoices i left join payment_schedule_lines l on l.tenant_id = i.tenant_id and l.id = i.schedule_line_id
-        where i.tenant_id = $1 and i.id = $2 for update of i`,
-      [tx.tenantId, id],
-    )
-  ).rows[0];
-  if (!inv) throw notFound('invoice');
+): Promise<InvoiceDetail> {
+  const { writes } = await prepareIssue(tx, actor, id, body, now);
+  if (body.send) {
+    await runInOneTrip(tx, writes);
+    await sendIssued(tx, deps, actor, id, now);
+  }
+  const { after } = await commitThenRead(tx, body.send ? [] : writes, invoiceDetailReads(tx.tenantId, id, now));
+  return invoiceDetailFrom(id, after);
+}
+
+/**
+ * Everything issuing decides, in at most three round trips for a stage payment: the job's and the
+ * invoice's locks (in drafting's order: the job first, so issues on one job go one at a time and
+ * each one's tax and deposit credit see the others) with the rows the tax, terms and document need;
+ * a progress job's credit and retainage; then the writes to send (the frozen invoice with its
+ * schedule line marked, then the number).
+ */
+async function prepareIssue(tx: TenantTx, actor: Actor, id: string, body: InvoiceIssue, now: Date): Promise<{ writes: SqlQuery[] }> {
+  const [jobRows, invoiceRows, billedRows, settingsRows, documentRows] = await readAllInOneTrip(tx, [
+    lockJobOfInvoiceRead(tx.tenantId, id),
+    lockInvoiceRead(tx.tenantId, id),
+    billedBeforeReadOfInvoice(tx.tenantId, id),
+    billingSettingsRead(tx.tenantId),
+    documentReadOfInvoice(tx.tenantId, id),
+  ]);
+  const job = jobRows[0] as unknown as BillingJob | undefined;
+  const inv = invoiceRows[0] as unknown as LockedInvoice | undefined;
+  if (!job || !inv) throw notFound('invoice');
   if (inv.status !== 'draft') throw conflict('This invoice is already issued.');
   assertBillingStarted(job);
   const subtotal = new Decimal(inv.subtotal);
@@ -76,12 +109,6 @@ export async function issueInvoice(
   if (total.isNegative()) {
     throw conflict('This invoice comes to less than nothing: earlier invoices billed more than is earned. Correct the readings first.');
   }
-  // What the tax, the terms and the frozen document need, in one round trip.
-  const [billedRows, settingsRows, documentRows] = await readAllInOneTrip(tx, [
-    billedBeforeRead(tx.tenantId, job.id, inv.id),
-    billingSettingsRead(tx.tenantId),
-    documentRead(tx.tenantId, job.id),
-  ]);
   const tax = taxInside(job, total, billedRows[0] as { billed: string; tax: string });
   const { settings } = billingSettingsOf(settingsRows as Array<{ settings: BillingSettings }>);
   const issuedOn = body.issuedOn ?? firmToday(job, now);
@@ -90,17 +117,17 @@ export async function issueInvoice(
   // The key of every label the system wrote, so each client reads the lines in their language (a
   // draft made before words were kept gets them here).
   const line = inv.line_role && inv.line_trigger ? { role: inv.line_role, trigger: inv.line_trigger } : null;
-  const lines = linesWithWords(inv.lines, line);
   const progress = progressWithWords(inv.progress);
-  // Everything but what the firm's kept figures read (status, due date, total: cash's triggers), so
-  // the rows those triggers lock are taken only by the number's statement below; its schedule line
-  // marked invoiced in the same statement.
-  await tx.client.query(
-    `with line as (update payment_schedule_lines set status = 'invoiced', updated_at = $8 where tenant_id = $1 and id = $11)
+  // First everything but what the firm's kept figures read (status, due date, total: cash's
+  // triggers), with its schedule line marked invoiced; the number's statement last, so the counter
+  // and the rows those triggers lock are taken only then.
+  const frozen: SqlQuery = {
+    name: 'invoice_issue_freeze',
+    text: `with line as (update payment_schedule_lines set status = 'invoiced', updated_at = $8 where tenant_id = $1 and id = $11)
      update invoices set issued_on = $3, document = $4, deposit_credit = $5, tax_included = $6, issued_by = $7, issued_at = $8,
             updated_at = $8, lines = $9, progress = $10
       where tenant_id = $1 and id = $2`,
-    [
+    values: [
       tx.tenantId,
       id,
       issuedOn,
@@ -109,26 +136,36 @@ export async function issueInvoice(
       tax.toFixed(2),
       actor.userId,
       now,
-      JSON.stringify(lines),
+      JSON.stringify(linesWithWords(inv.lines, line)),
       progress === null ? null : JSON.stringify(progress),
       inv.schedule_line_id,
     ],
-  );
-  // The number last: every issuer of the firm waits on the counter from here to commit. Without an
-  // e-mail to write (which shows the number) the number, its audit entry and COMMIT go as one trip.
-  await takeInvoiceNumber(
-    tx,
+  };
+  const number = invoiceNumberQuery(
+    tx.tenantId,
     id,
     settings.invoicePrefix,
     // Nothing due (no work this period, or all of it taken by the deposit credit): no payment can
     // follow, so it is paid as issued, never overdue nor reminded.
     { status: total.isZero() ? 'paid' : 'issued', dueOn, total: total.toFixed(2) },
     { actorUserId: actor.userId, actorKind: actor.kind },
-    { commit: options.endsTransaction === true && !body.send },
   );
-  if (body.send) {
-    await enqueueInvoiceMail(tx, deps.queue, deps.config, id, { kind: 'issued' });
-    await tx.client.query(`update invoices set sent_at = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, id, now]);
-    await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'invoice.sent', entity: 'invoice', entityId: id });
-  }
+  return { writes: [frozen, number] };
+}
+
+/** The invoice with the schedule line it bills, locked (for update of the invoice alone). */
+const lockInvoiceRead = (tenantId: string, id: string): SqlQuery => ({
+  name: 'invoice_issue_lock',
+  text: `select i.id, i.job_id, i.kind, i.status, i.schedule_line_id, i.subtotal::text as subtotal, i.lines, i.progress,
+              l.role as line_role, l.trigger as line_trigger
+         from invoices i left join payment_schedule_lines l on l.tenant_id = i.tenant_id and l.id = i.schedule_line_id
+        where i.tenant_id = $1 and i.id = $2 for update of i`,
+  values: [tenantId, id],
+});
+
+/** E-mails the just-numbered invoice through the outbox, with its audit entry. */
+async function sendIssued(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, now: Date): Promise<void> {
+  await enqueueInvoiceMail(tx, deps.queue, deps.config, id, { kind: 'issued' });
+  await tx.client.query(`update invoices set sent_at = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, id, now]);
+  await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'invoice.sent', entity: 'invoice', entityId: id });
 }

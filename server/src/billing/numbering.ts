@@ -1,4 +1,4 @@
-import { commitWith, type TenantTx } from '@layerbook/db';
+import type { SqlQuery, TenantTx } from '@layerbook/db';
 import { documentNumber } from '@layerbook/domain';
 
 /** Digits a document number is padded to ("INV-0007"). */
@@ -52,27 +52,19 @@ export interface IssuedBy {
  * Issuing's last write: takes the next invoice number, stamps it on the invoice with its issued
  * state (the columns the firm's kept cash figures read, so their triggers lock those rows only
  * now) and writes the "invoice.issued" audit entry, all in one statement, so the counter row —
- * which every issuer of the firm waits on until commit — is held as briefly as possible (the heavy
- * document write happens before). With `commit` the statement and COMMIT go as one round trip
- * (commitWith): nothing may follow it in the transaction.
+ * which every issuer of the firm waits on until commit — is held as briefly as possible: send it
+ * last, with COMMIT in the same round trip where the caller can (issue.ts). Answers `n` and `text`.
  * The text is made in SQL (numberTextSql).
  */
-export async function takeInvoiceNumber(
-  tx: TenantTx,
-  invoiceId: string,
-  prefix: string,
-  state: IssuedState,
-  by: IssuedBy,
-  options: { commit: boolean },
-): Promise<{ n: number; text: string }> {
-  const head = numberHead(prefix);
-  const query = {
+export function invoiceNumberQuery(tenantId: string, invoiceId: string, prefix: string, state: IssuedState, by: IssuedBy): SqlQuery {
+  return {
+    name: 'invoice_take_number',
     text: `with counter as (
        insert into document_counters (tenant_id, series, next_no) values ($1, 'invoice', 2)
        on conflict (tenant_id, series) do update set next_no = document_counters.next_no + 1
        returning next_no - 1 as n),
      numbered as (
-       update invoices i set number = counter.n, number_text = ${numberTextSql('$3', 'counter.n', '$4')},
+       update invoices i set number = counter.n, number_text = ${numberTextSql('$3::text', 'counter.n', '$4::int')},
               status = $5, due_on = $6, total = $7
          from counter where i.tenant_id = $1 and i.id = $2
        returning counter.n as n, i.number_text as text, i.issued_on, i.due_on, i.total),
@@ -83,9 +75,9 @@ export async function takeInvoiceNumber(
          from numbered)
      select n, text from numbered`,
     values: [
-      tx.tenantId,
+      tenantId,
       invoiceId,
-      head,
+      numberHead(prefix),
       NUMBER_WIDTH,
       state.status,
       state.dueOn,
@@ -95,11 +87,4 @@ export async function takeInvoiceNumber(
       ISSUED.action,
     ],
   };
-  const rows = (options.commit ? await commitWith(tx.client, query) : (await tx.client.query(query)).rows) as Array<{
-    n: number;
-    text: string;
-  }>;
-  const taken = rows[0];
-  if (!taken) throw new Error('The invoice to number was not found.');
-  return taken;
 }

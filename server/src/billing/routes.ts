@@ -21,7 +21,7 @@ import { readAsStaff, withStaff } from '../http/guards';
 import { parse, parseChanges } from '../http/validate';
 import { deleteDraft, updateDraft } from './draft-edits';
 import { buildInvoiceListQuery, getInvoice, type InvoiceListRow, invoicePage } from './invoice-read';
-import { issueInvoice } from './issue';
+import { issueAndRead } from './issue';
 import { recordOfflinePayment } from './offline-payments';
 import { enqueueReceiptMail } from '../payments/receipt-mail';
 import { getBillingSettings, saveBillingSettings } from './settings';
@@ -86,17 +86,13 @@ export function invoiceRoutes(ctx: AppContext): Router {
     res.status(204).end();
   });
 
-  // Issuing holds the firm's counter row until it commits: issuing is this transaction's last step (it
-  // may commit with the number) and the page is read in a second one, so other issuers wait only for the issue itself.
+  // Issuing holds the firm's counter row until it commits: the page is read after that COMMIT
+  // (issueAndRead), so other issuers wait only for the issue itself.
   router.post('/:id/issue', async (req, res) => {
-    const id = await withStaff(ctx, req, 'office', async (tx, staff) => {
-      const { id } = parse(idParam, req.params);
-      await issueInvoice(tx, deps, staffActor(staff), id, parse(invoiceIssue, req.body), ctx.now(), { endsTransaction: true });
-      return id;
-    });
-    res.json(
-      (await withStaff(ctx, req, 'office', (tx) => getInvoice(tx, id, ctx.now(), { endsTransaction: true }))) satisfies InvoiceDetail,
+    const detail = await withStaff(ctx, req, 'office', (tx, staff) =>
+      issueAndRead(tx, deps, staffActor(staff), parse(idParam, req.params).id, parse(invoiceIssue, req.body), ctx.now()),
     );
+    res.json(detail satisfies InvoiceDetail);
   });
 
   router.post('/:id/void', async (req, res) => {

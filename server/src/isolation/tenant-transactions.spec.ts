@@ -1,12 +1,12 @@
-import { commitWith, readAllInOneTrip, withTenant } from '@layerbook/db';
+import { commitThenRead, readAllInOneTrip, runInOneTrip, withTenant } from '@layerbook/db';
 import { Pool } from 'pg';
 import { signUpFirm, startTestServer, TestServer } from '../testing/harness';
 import { testDatabaseUrls } from '../testing/test-env';
 
 // withTenant's transactions (packages/db/src/tenant): parameterised queries run as statements
-// prepared once per connection, commitWith() ends a transaction with its last statement in one
-// round trip, and readAllInOneTrip() reads inside the caller's transaction. One connection in
-// the pool, so every transaction below runs on the same one.
+// prepared once per connection; a batch of statements goes in one round trip inside the caller's
+// transaction (readAllInOneTrip), with its COMMIT when asked, or commits and then reads
+// (commitThenRead). One connection in the pool, so every transaction below runs on the same one.
 let t: TestServer;
 let pool: Pool;
 let firmId: string;
@@ -56,31 +56,60 @@ describe('transactions of a firm', () => {
     await expect(notesTagged('nothing')).resolves.toBe(0);
   });
 
-  it('commitWith commits everything with its statement, refuses anything after it, and the connection goes on', async () => {
+  it('a batch sent with its COMMIT commits everything, refuses anything after it, and the connection goes on', async () => {
     const after = withTenant(pool, firmId, async (tx) => {
       await tx.client.query(note('early').text, note('early').values);
-      const rows = await commitWith(tx.client, {
-        text: `${note('early').text} returning data->>'tag' as tag`,
-        values: note('early').values,
-      });
+      const [rows] = await runInOneTrip(
+        tx,
+        [{ text: `${note('early').text} returning data->>'tag' as tag`, values: note('early').values }],
+        {
+          commit: true,
+        },
+      );
       expect(rows).toEqual([{ tag: 'early' }]);
       await tx.client.query('select 1');
     });
-    await expect(after).rejects.toThrow(/committed by commitWith/);
+    await expect(after).rejects.toThrow(/committed in its last round trip/);
     // Both rows stayed: the COMMIT went with the statement, and no ROLLBACK followed the refused query.
     await expect(notesTagged('early')).resolves.toBe(2);
   });
 
-  it('a commitWith that fails rolls the whole transaction back', async () => {
+  it('a batch that fails before its COMMIT rolls the whole transaction back', async () => {
     const failing = withTenant(pool, firmId, async (tx) => {
       await tx.client.query(note('rolled').text, note('rolled').values);
-      await commitWith(tx.client, {
-        text: `insert into audit_log (tenant_id, actor_kind, action, entity) values ($1, 'system', null, 'spec')`,
-        values: [firmId],
-      });
+      await runInOneTrip(
+        tx,
+        [
+          note('rolled'),
+          { text: `insert into audit_log (tenant_id, actor_kind, action, entity) values ($1, 'system', null, 'spec')`, values: [firmId] },
+        ],
+        {
+          commit: true,
+        },
+      );
     });
     await expect(failing).rejects.toThrow(/not-null constraint/);
     await expect(notesTagged('rolled')).resolves.toBe(0);
+  });
+
+  it('commitThenRead commits, then reads in a new read-only transaction of the firm, in one trip', async () => {
+    const { last, after } = await withTenant(pool, firmId, (tx) =>
+      commitThenRead(
+        tx,
+        [{ ...note('then'), text: `${note('then').text} returning 1 as one` }],
+        [
+          {
+            name: 'spec_then_count',
+            text: `select count(*)::int as n from audit_log where tenant_id = $1 and data->>'tag' = $2`,
+            values: [firmId, 'then'],
+          },
+          { text: `select current_setting('transaction_read_only') as ro, current_setting('app.tenant_id') as firm`, values: [] },
+        ],
+      ),
+    );
+    expect(last).toEqual([[{ one: 1 }]]);
+    expect(after).toEqual([[{ n: 1 }], [{ ro: 'on', firm: firmId }]]);
+    await expect(notesTagged('then')).resolves.toBe(1);
   });
 
   it('readAllInOneTrip reads inside the caller transaction, its own writes included', async () => {

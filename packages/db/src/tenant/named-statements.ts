@@ -1,6 +1,5 @@
 import { createHash } from 'node:crypto';
 import type { PoolClient } from 'pg';
-import { inlineQuery, type SqlQuery } from './sql-literal';
 
 /**
  * How many distinct query texts get a name. Texts are fixed in the code (Drizzle's and ours), so
@@ -10,7 +9,7 @@ import { inlineQuery, type SqlQuery } from './sql-literal';
 const MAX_NAMES = 2_000;
 const names = new Map<string, string>();
 const named = new WeakSet<PoolClient>();
-/** Connections whose transaction commitWith() ended: nothing may run on them until they go back to the pool. */
+/** Connections whose transaction ended with a batch's COMMIT (one-trip.ts): nothing may run on them until they go back to the pool. */
 const ended = new WeakSet<PoolClient>();
 
 type Query = PoolClient['query'];
@@ -38,7 +37,7 @@ export function nameStatements(client: PoolClient): PoolClient {
   named.add(client);
   const query = client.query.bind(client) as (...args: unknown[]) => unknown;
   const withName = (...args: unknown[]): unknown => {
-    if (ended.has(client)) throw new Error('This transaction was committed by commitWith(): nothing more may run in it.');
+    if (ended.has(client)) throw new Error('This transaction was committed in its last round trip: nothing more may run in it.');
     const [first, second] = args;
     if (typeof first === 'string' && hasValues(second)) {
       const name = nameOf(first);
@@ -56,28 +55,12 @@ export function nameStatements(client: PoolClient): PoolClient {
   return client;
 }
 
-/**
- * Sends `last` and COMMIT as ONE simple query (its parameters written in as literals) and answers
- * `last`'s rows: a transaction that takes a row lock every writer of the firm waits on (a numbering
- * counter) holds it only while PostgreSQL runs that statement and commits, not also for two trips
- * through a busy Node event loop. It must be the transaction's last step: withTenant() then sends no
- * COMMIT of its own, and any query after it throws. A failure rolls everything back as usual.
- */
-export async function commitWith(client: PoolClient, last: SqlQuery): Promise<Record<string, unknown>[]> {
-  if (!named.has(client)) throw new Error('commitWith needs a transaction of withTenant()');
-  const answered = (await client.query(`${inlineQuery(last).replace(/;\s*$/, '')}; commit`)) as unknown as Array<{
-    rows: Record<string, unknown>[];
-  }>;
-  ended.add(client);
-  return answered[0].rows;
-}
-
-/** Notes that a query this package sent ended the connection's transaction with COMMIT (readAllInOneTrip's `commit`). */
+/** Notes that a batch this package sent ended the connection's transaction with COMMIT (one-trip.ts). */
 export function markEnded(client: PoolClient): void {
   ended.add(client);
 }
 
-/** True once (and forgets it): whether commitWith() already committed this connection's transaction. */
+/** True once (and forgets it): whether a batch already committed this connection's transaction. */
 export function takeEnded(client: PoolClient): boolean {
   return ended.delete(client);
 }

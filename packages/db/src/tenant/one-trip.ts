@@ -1,7 +1,7 @@
 import type { Pool } from 'pg';
 import { markEnded } from './named-statements';
 import { runReads } from './prepared-reads';
-import { isUuid, type Tx } from './scoped';
+import { isUuid, type TenantTx, type Tx } from './scoped';
 import { inlineQuery, type SqlQuery } from './sql-literal';
 
 export { inlineQuery, type SqlQuery } from './sql-literal';
@@ -80,10 +80,40 @@ export async function readManyInOneTrip(pool: Pool, tenantId: string, reads: rea
 /**
  * Several reads inside the caller's transaction in ONE round trip (no BEGIN of its own; named ones
  * as prepared statements: prepared-reads.ts): each one's rows, in order. With `commit` the
- * transaction's COMMIT goes in the same trip, as with commitWith(): it must be its last step.
+ * transaction's COMMIT goes in the same trip: it must be its last step (withTenant then sends no COMMIT
+ * of its own, and any query after it throws).
  */
 export async function readAllInOneTrip(tx: Tx, reads: readonly SqlQuery[], options: { commit?: boolean } = {}): Promise<Rows[]> {
   const rows = await runReads(tx.client, [], reads, options.commit ? 'commit' : null);
   if (options.commit) markEnded(tx.client);
   return rows;
+}
+
+/** readAllInOneTrip for statements that write (their RETURNING rows, in order). */
+export const runInOneTrip = readAllInOneTrip;
+
+const COMMIT: SqlQuery = { text: 'commit', values: [] };
+
+/**
+ * Ends the caller's transaction and reads what it answers, in ONE round trip: `last` (its final
+ * statements), COMMIT, then `after` in a new read-only transaction of the same firm (BEGIN READ
+ * ONLY, the firm, the reads, COMMIT). Locks taken in the first are released at its COMMIT, before
+ * the reads run. As with readAllInOneTrip's `commit`, nothing may run in the transaction after it. A failure in
+ * `last` rolls it all back; one in `after` leaves the first committed (the caller's rollback then
+ * ends the read-only one).
+ */
+export async function commitThenRead(
+  tx: TenantTx,
+  last: readonly SqlQuery[],
+  after: readonly SqlQuery[],
+): Promise<{ last: Rows[]; after: Rows[] }> {
+  if (!isUuid(tx.tenantId)) throw new Error('commitThenRead needs a firm id');
+  const reopen: SqlQuery[] = [
+    COMMIT,
+    { text: 'begin read only', values: [] },
+    { text: `select set_config('app.tenant_id', '${tx.tenantId}', true)`, values: [] },
+  ];
+  const rows = await runReads(tx.client, [], [...last, ...reopen, ...after], 'commit');
+  markEnded(tx.client);
+  return { last: rows.slice(0, last.length), after: rows.slice(last.length + reopen.length) };
 }

@@ -2,8 +2,6 @@ import { drizzle, NodePgDatabase } from 'drizzle-orm/node-postgres';
 import type { Pool, PoolClient } from 'pg';
 import { nameStatements, takeEnded } from './named-statements';
 
-export { commitWith } from './named-statements';
-
 /**
  * Query-builder only (no relational `db.query` API): building Drizzle's relational config from the
  * schema on every transaction costs more than the queries of a typical request.
@@ -53,7 +51,7 @@ async function inTransaction<T>(pool: Pool, begin: (client: PoolClient) => Promi
     if (!takeEnded(client)) await client.query('commit');
     return result;
   } catch (error) {
-    // After commitWith() there is nothing to roll back (and no query may be sent before this).
+    // After a batch's own COMMIT (one-trip.ts) there is nothing to roll back, and nothing may be sent.
     if (!takeEnded(client)) await client.query('rollback').catch(() => undefined);
     throw error;
   } finally {
