@@ -7,8 +7,15 @@ import type { PoolClient } from 'pg';
  * on every call, and past the cap those simply run unnamed.
  */
 const MAX_NAMES = 2_000;
+/**
+ * How many statements one connection keeps prepared (each holds its plan in that PostgreSQL
+ * backend's memory): the first ones a connection runs, which are the busy ones; the rest of its
+ * queries run unnamed. Idle connections close after the pool's idle timeout, freeing them.
+ */
+const MAX_PER_CONNECTION = 300;
 const names = new Map<string, string>();
-const named = new WeakSet<PoolClient>();
+/** Per connection, the names it has sent to be prepared. */
+const named = new WeakMap<PoolClient, Set<string>>();
 /** Connections whose transaction ended with a batch's COMMIT (one-trip.ts): nothing may run on them until they go back to the pool. */
 const ended = new WeakSet<PoolClient>();
 
@@ -34,18 +41,26 @@ const hasValues = (values: unknown) => Array.isArray(values) && values.length > 
  */
 export function nameStatements(client: PoolClient): PoolClient {
   if (named.has(client)) return client;
-  named.add(client);
+  const held = new Set<string>();
+  named.set(client, held);
+  const nameHere = (text: string): string | undefined => {
+    const name = nameOf(text);
+    if (name === undefined || held.has(name)) return name;
+    if (held.size >= MAX_PER_CONNECTION) return undefined;
+    held.add(name);
+    return name;
+  };
   const query = client.query.bind(client) as (...args: unknown[]) => unknown;
   const withName = (...args: unknown[]): unknown => {
     if (ended.has(client)) throw new Error('This transaction was committed in its last round trip: nothing more may run in it.');
     const [first, second] = args;
     if (typeof first === 'string' && hasValues(second)) {
-      const name = nameOf(first);
+      const name = nameHere(first);
       if (name !== undefined) return query({ name, text: first, values: second }, ...args.slice(2));
     } else if (first !== null && typeof first === 'object') {
       const config = first as { name?: string; text?: unknown; values?: unknown; submit?: unknown };
       if (config.name === undefined && typeof config.submit !== 'function' && typeof config.text === 'string' && hasValues(config.values)) {
-        const name = nameOf(config.text);
+        const name = nameHere(config.text);
         if (name !== undefined) return query({ ...config, name }, ...args.slice(1));
       }
     }
