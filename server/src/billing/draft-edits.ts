@@ -12,7 +12,10 @@ import { billedWorkByLine, draftProgressInvoice, loadValueLines, percentOf } fro
 
 /** POST /api/jobs/:id/invoices: a draft the office asks for (a schedule line, a progress application, a retainage release). */
 export async function createDraft(tx: TenantTx, actor: Actor, jobId: string, body: InvoiceDraftCreate, now: Date): Promise<string> {
-  const job = await loadBillingJob(tx, jobId);
+  // The job's row lock first, the order the queue's trigger check and issuing take: a line drafted
+  // here while the queue drafted it too once deadlocked (this took the line, then its invoice's
+  // foreign key share-locked the job the queue held while it waited on the line).
+  const job = await loadBillingJob(tx, jobId, true);
   switch (body.kind) {
     case 'line': {
       const line = await tx.client.query<{ job_id: string }>(`select job_id from payment_schedule_lines where tenant_id = $1 and id = $2`, [

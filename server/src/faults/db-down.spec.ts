@@ -7,12 +7,14 @@ import { type OwnCluster, startOwnCluster } from './own-cluster';
 import { ensureStopped, type ServerProcess, startObjectStore, startServerProcess } from './processes';
 import { signUpOver } from './signed-in';
 
-// PostgreSQL stopped for 10 s under load (a cluster of this spec's own, port 55480; servers on
-// 55481): requests fail fast with a 503 problem, nothing is half-written, and the same process
-// serves again, and the queue runs again, once PostgreSQL is back.
+// PostgreSQL stopped for 10 s under load (a cluster of this spec's own, port 31480; servers on
+// 31481): requests fail fast with a 503 problem, nothing is half-written, and the same process
+// serves again, and the queue runs again, once PostgreSQL is back. The ports are below Linux's
+// ephemeral range (32768–60999): a port in it can be held by any outgoing connection of the
+// machine when the cluster restarts (a CI run once failed so: "Address already in use").
 
-const PG_PORT = 55480;
-const HTTP_PORT = 55481;
+const PG_PORT = 31480;
+const HTTP_PORT = 31481;
 const DB = 'layerbook_faults';
 
 /**

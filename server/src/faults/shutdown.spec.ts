@@ -6,9 +6,10 @@ import { shutdownWithWorkInFlight } from './shutdown';
 import { signUpOver } from './signed-in';
 
 // SIGTERM to a web process (with its workers, as `npm start` runs it) while a request and a job are
-// under way: it stops accepting, lets both finish, then exits 0. Port 55482, a database of its own.
+// under way: it stops accepting, lets both finish, then exits 0. Port 31482 (below the ephemeral
+// range, as db-down.spec.ts says why), a database of its own.
 
-const HTTP_PORT = 55482;
+const HTTP_PORT = 31482;
 
 let database: Awaited<ReturnType<typeof freshTestDatabase>>;
 let db: FaultDb;
