@@ -43,25 +43,15 @@ export async function loadBillingJob(tx: TenantTx, jobId: string, lock = false):
   return rows[0];
 }
 
-/** The job an invoice bills (loadBillingJob's row), for a batch of reads. */
-export const jobOfInvoiceRead = (tenantId: string, invoiceId: string): SqlQuery => ({
-  name: 'billing_job_of_invoice',
-  text: `select ${JOB_COLUMNS}
-       from jobs j join firms f on f.id = j.tenant_id
-      where j.tenant_id = $1 and j.id = (select job_id from invoices where tenant_id = $1 and id = $2)`,
-  values: [tenantId, invoiceId],
-});
-
 /**
- * The job an invoice ($2) bills, taking the job's row lock (loadBillingJob's, found through the
- * invoice in the same statement), for a batch of statements; no row: no such invoice.
+ * The job an invoice ($2) bills (loadBillingJob's row, found through the invoice in the same
+ * statement), for a batch of statements; `lock` takes the job's row lock. No row: no such invoice.
  */
-export const lockJobOfInvoiceRead = (tenantId: string, invoiceId: string): SqlQuery => ({
-  name: 'billing_lock_job_of_invoice',
+export const jobOfInvoiceRead = (tenantId: string, invoiceId: string, lock = false): SqlQuery => ({
+  name: lock ? 'billing_lock_job_of_invoice' : 'billing_job_of_invoice',
   text: `select ${JOB_COLUMNS}
        from jobs j join firms f on f.id = j.tenant_id
-      where j.tenant_id = $1 and j.id = (select job_id from invoices where tenant_id = $1 and id = $2)
-        for update of j`,
+      where j.tenant_id = $1 and j.id = (select job_id from invoices where tenant_id = $1 and id = $2) ${lock ? 'for update of j' : ''}`,
   values: [tenantId, invoiceId],
 });
 

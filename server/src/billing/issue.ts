@@ -7,14 +7,7 @@ import type { Config } from '../config';
 import type { Actor } from '../http/actor';
 import { conflict, notFound } from '../http/problem';
 import type { JobQueue } from '../queue/job-queue';
-import {
-  assertBillingStarted,
-  type BillingJob,
-  billedBeforeReadOfInvoice,
-  firmToday,
-  lockJobOfInvoiceRead,
-  taxInside,
-} from './billing-job';
+import { assertBillingStarted, type BillingJob, billedBeforeReadOfInvoice, firmToday, jobOfInvoiceRead, taxInside } from './billing-job';
 import { documentFrom, documentReadOfInvoice } from './document';
 import { progressDepositCredit, retainageHeld } from './drafts';
 import { enqueueInvoiceMail } from './invoice-mail';
@@ -87,7 +80,7 @@ export async function issueAndRead(
  */
 async function prepareIssue(tx: TenantTx, actor: Actor, id: string, body: InvoiceIssue, now: Date): Promise<{ writes: SqlQuery[] }> {
   const [jobRows, invoiceRows, billedRows, settingsRows, documentRows] = await readAllInOneTrip(tx, [
-    lockJobOfInvoiceRead(tx.tenantId, id),
+    jobOfInvoiceRead(tx.tenantId, id, true),
     lockInvoiceRead(tx.tenantId, id),
     billedBeforeReadOfInvoice(tx.tenantId, id),
     billingSettingsRead(tx.tenantId),
