@@ -1,6 +1,6 @@
 import express, { Express, RequestHandler } from 'express';
 import { authRoutes } from './auth/routes';
-import { absoluteTimeout, createPassport } from './auth/passport-setup';
+import { absoluteTimeout, createPassport, restoreSignedIn } from './auth/passport-setup';
 import type { AppContext } from './context';
 import { fileRoutes } from './files/routes';
 import { firmRoutes } from './firms/routes';
@@ -87,7 +87,7 @@ function api(ctx: AppContext, inquiryLimiter: RequestHandler): express.Router {
   router.use('/public', publicRoutes(ctx, inquiryLimiter));
   router.use(sessionMiddleware(ctx.config, ctx.pool));
   router.use(pass.initialize());
-  router.use(pass.session());
+  router.use(restoreSignedIn);
   router.use(absoluteTimeout(ctx));
   router.use(csrfProtection(ctx.config));
   router.use('/auth', authRoutes(ctx, pass, limiter));

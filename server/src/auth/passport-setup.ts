@@ -42,6 +42,25 @@ export function createPassport(ctx: AppContext): AppPassport {
   return instance;
 }
 
+/**
+ * Who is signed in, restored from the session on every request: what `passport.session()` does with
+ * the identity `deserializeUser` above (the principal Passport stored at `session.passport.user` by
+ * `logIn`, put on `req.user`), without building Passport's strategy machinery per request — that cost
+ * the server's thread about 0.07 ms per API read in the invoice-list benchmark. Passport
+ * still signs in and out (`logIn`, `logOut`); a stored value that is not a principal is ignored.
+ */
+export const restoreSignedIn: RequestHandler = (req, _res, next) => {
+  const stored = (req.session as { passport?: { user?: unknown } } | undefined)?.passport?.user;
+  if (isSessionPrincipal(stored)) req.user = stored;
+  next();
+};
+
+function isSessionPrincipal(value: unknown): value is SessionPrincipal {
+  if (typeof value !== 'object' || value === null) return false;
+  const { kind, id, tenantId } = value as Record<string, unknown>;
+  return (kind === 'staff' || kind === 'client') && typeof id === 'string' && typeof tenantId === 'string';
+}
+
 /** Signs the principal in on a fresh session id (Passport ≥ 0.6 regenerates it) and stamps the time. */
 export function logIn(req: Request, principal: Principal, now: Date): Promise<void> {
   return new Promise((resolve, reject) => {

@@ -1,8 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { IncomingHttpHeaders, OutgoingHttpHeaders } from 'node:http';
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import pino, { type DestinationStream, type Logger } from 'pino';
-import { pinoHttp } from 'pino-http';
 import type { Config } from '../config';
 
 const REDACTED = '[redacted]';
@@ -88,32 +87,55 @@ function text(value: unknown): string {
   return typeof value === 'string' || typeof value === 'number' ? String(value) : '';
 }
 
-/** One line per API request (id, method, URL without secrets, status, time); pages are not logged. */
+declare module 'http' {
+  interface IncomingMessage {
+    /** The request's id: the caller's X-Request-Id (first 64 characters) or a fresh UUID; answered back in the same header. */
+    id: string;
+    /** The process logger with this request's id bound (`reqId`), made on first use. */
+    log: Logger;
+  }
+}
+
+/**
+ * One line per API request when it is answered (id, method, URL without secrets, headers without
+ * secrets, status, time), `info` below 500 and `error` from 500; pages are not logged. The line is
+ * built only then, and only when the logger's level keeps it: a request that logs nothing by hand
+ * costs an id and a listener (pino-http serialised every request into a child logger up front, about
+ * 0.07 ms of the server's thread per API read in the invoice-list benchmark).
+ */
 export function requestLogging(logger: Logger): RequestHandler {
-  return pinoHttp({
-    logger,
-    genReqId: (req, res) => {
-      const id = (req.headers['x-request-id'] as string | undefined)?.slice(0, 64) || randomUUID();
-      res.setHeader('x-request-id', id);
-      return id;
-    },
-    autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-    // Lines logged while handling a request carry its id; the request itself is on its last line.
-    quietReqLogger: true,
-    serializers: {
-      req: (req: SerializedRequest) => ({
-        id: req.id,
-        method: req.method,
-        url: safeUrl(req.url ?? ''),
-        headers: safeHeaders(req.headers),
-        remoteAddress: req.remoteAddress,
-      }),
-      res: (res: SerializedResponse) => ({
-        statusCode: res.statusCode,
-        headers: safeHeaders(res.headers),
-      }),
-    },
-  });
+  return (req, res, next) => {
+    const id = (req.headers['x-request-id'] as string | undefined)?.slice(0, 64) || randomUUID();
+    req.id = id;
+    res.setHeader('x-request-id', id);
+    let bound: Logger | undefined;
+    Object.defineProperty(req, 'log', { configurable: true, enumerable: false, get: () => (bound ??= logger.child({ reqId: id })) });
+    if (req.url.startsWith('/api')) {
+      const started = Date.now();
+      res.once('finish', () => {
+        const failed = res.statusCode >= 500;
+        if (!logger.isLevelEnabled(failed ? 'error' : 'info')) return;
+        const line = {
+          req: requestLine(req),
+          res: { statusCode: res.statusCode, headers: safeHeaders(res.getHeaders()) },
+          responseTime: Date.now() - started,
+        };
+        if (failed) req.log.error(line, 'request errored');
+        else req.log.info(line, 'request completed');
+      });
+    }
+    next();
+  };
+}
+
+function requestLine(req: Request): SerializedRequest {
+  return {
+    id: req.id,
+    method: req.method,
+    url: safeUrl(req.originalUrl),
+    headers: safeHeaders(req.headers),
+    remoteAddress: req.socket?.remoteAddress,
+  };
 }
 
 interface SerializedRequest {
