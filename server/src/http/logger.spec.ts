@@ -94,6 +94,47 @@ describe('request logs', () => {
     expect(prettyLines[0]).toMatch(/^\[\d\d:\d\d:\d\d\.\d{3}\] (INFO|WARN)/);
     expect(pretty.text()).not.toContain('"level":');
   });
+
+  it('give every request an id, bind it to lines logged by hand, and log a failed answer as an error', async () => {
+    const log = memory();
+    const app = express();
+    app.use(requestLogging(createLogger({ NODE_ENV: 'production', LOG_LEVEL: 'info' }, log.stream)));
+    app.get('/api/broken', (req, res) => {
+      req.log.warn('about to fail');
+      res.status(503).json({ title: 'Down' });
+    });
+    app.get('/portal/page', (_req, res) => {
+      res.send('<p>page</p>');
+    });
+    const given = await request(app).get('/api/broken').set('x-request-id', 'trace-7');
+    expect(given.headers['x-request-id']).toBe('trace-7');
+    const fresh = await request(app).get('/portal/page');
+    expect(fresh.headers['x-request-id']).toMatch(/^[0-9a-f-]{36}$/);
+    const lines = log
+      .text()
+      .trim()
+      .split('\n')
+      .map(
+        (line) =>
+          JSON.parse(line) as {
+            level: number;
+            msg: string;
+            reqId?: string;
+            req?: { id: string; url: string };
+            res?: { statusCode: number };
+          },
+      );
+    // Pages are not logged: two lines, both from the API request.
+    expect(lines).toHaveLength(2);
+    expect(lines[0]).toMatchObject({ level: 40, msg: 'about to fail', reqId: 'trace-7' });
+    expect(lines[1]).toMatchObject({
+      level: 50,
+      msg: 'request errored',
+      reqId: 'trace-7',
+      req: { id: 'trace-7', url: '/api/broken' },
+      res: { statusCode: 503 },
+    });
+  });
 });
 
 describe('safeUrl', () => {
