@@ -135,6 +135,30 @@ describe('request logs', () => {
       res: { statusCode: 503 },
     });
   });
+
+  it('log a request the caller gave up on as aborted', async () => {
+    const log = memory();
+    const app = express();
+    app.use(requestLogging(createLogger({ NODE_ENV: 'production', LOG_LEVEL: 'info' }, log.stream)));
+    let answered: () => void = () => undefined;
+    const late = new Promise<void>((resolve) => (answered = resolve));
+    app.get('/api/slow', (_req, res) => {
+      setTimeout(() => {
+        res.json({ late: true });
+        answered();
+      }, 300);
+    });
+    await expect(request(app).get('/api/slow').timeout(50)).rejects.toThrow();
+    await late;
+    const lines = log
+      .text()
+      .trim()
+      .split('\n')
+      .map((line) => JSON.parse(line) as { level: number; msg: string; req?: { url: string } });
+    expect(lines).toEqual([
+      expect.objectContaining({ level: 40, msg: 'request aborted', req: expect.objectContaining({ url: '/api/slow' }) }),
+    ]);
+  });
 });
 
 describe('safeUrl', () => {

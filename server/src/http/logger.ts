@@ -98,7 +98,8 @@ declare module 'http' {
 
 /**
  * One line per API request when it is answered (id, method, URL without secrets, headers without
- * secrets, status, time), `info` below 500 and `error` from 500; pages are not logged. The line is
+ * secrets, status, time), `info` below 500, `error` from 500 and `warn` when the caller hung up first;
+ * pages are not logged. The line is
  * built only then, and only when the logger's level keeps it: a request that logs nothing by hand
  * costs an id and a listener (pino-http serialised every request into a child logger up front, about
  * 0.07 ms of the server's thread per API read in the invoice-list benchmark).
@@ -112,16 +113,20 @@ export function requestLogging(logger: Logger): RequestHandler {
     Object.defineProperty(req, 'log', { configurable: true, enumerable: false, get: () => (bound ??= logger.child({ reqId: id })) });
     if (req.url.startsWith('/api')) {
       const started = Date.now();
+      const line = () => ({
+        req: requestLine(req),
+        res: { statusCode: res.statusCode, headers: safeHeaders(res.getHeaders()) },
+        responseTime: Date.now() - started,
+      });
       res.once('finish', () => {
         const failed = res.statusCode >= 500;
         if (!logger.isLevelEnabled(failed ? 'error' : 'info')) return;
-        const line = {
-          req: requestLine(req),
-          res: { statusCode: res.statusCode, headers: safeHeaders(res.getHeaders()) },
-          responseTime: Date.now() - started,
-        };
-        if (failed) req.log.error(line, 'request errored');
-        else req.log.info(line, 'request completed');
+        if (failed) req.log.error(line(), 'request errored');
+        else req.log.info(line(), 'request completed');
+      });
+      // The caller hung up before the answer was written: say so, with how long it had waited.
+      res.once('close', () => {
+        if (!res.writableFinished && logger.isLevelEnabled('warn')) req.log.warn(line(), 'request aborted');
       });
     }
     next();
