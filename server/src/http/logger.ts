@@ -5,6 +5,7 @@ import pino, { type DestinationStream, type Logger } from 'pino';
 import type { Config } from '../config';
 
 const REDACTED = '[redacted]';
+const ABORTED = 'request aborted';
 
 /** Headers that carry the session or the CSRF token: never in a log line. */
 const SECRET_HEADERS = new Set(['cookie', 'set-cookie', 'authorization', 'proxy-authorization', 'x-csrf-token']);
@@ -80,7 +81,9 @@ function requestSummary(log: Record<string, unknown>): string | undefined {
   if (!req || !res) {
     return undefined;
   }
-  return `${req.method ?? ''} ${req.url ?? ''} ${res.statusCode ?? ''} ${text(log['responseTime'])}ms`;
+  // An aborted request was never answered: its status is only what the route had set so far.
+  const outcome = log['msg'] === ABORTED ? 'aborted after' : String(res.statusCode ?? '');
+  return `${req.method ?? ''} ${req.url ?? ''} ${outcome} ${text(log['responseTime'])}ms`;
 }
 
 function text(value: unknown): string {
@@ -126,7 +129,7 @@ export function requestLogging(logger: Logger): RequestHandler {
       });
       // The caller hung up before the answer was written: say so, with how long it had waited.
       res.once('close', () => {
-        if (!res.writableFinished && logger.isLevelEnabled('warn')) req.log.warn(line(), 'request aborted');
+        if (!res.writableFinished && logger.isLevelEnabled('warn')) req.log.warn(line(), ABORTED);
       });
     }
     next();
