@@ -7,7 +7,7 @@ import {
   provideBrowserGlobalErrorListeners,
   provideZonelessChangeDetection,
 } from '@angular/core';
-import { provideClientHydration, withEventReplay, withHttpTransferCacheOptions } from '@angular/platform-browser';
+import { provideClientHydration, withEventReplay, withHttpTransferCacheOptions, withIncrementalHydration } from '@angular/platform-browser';
 import { Routes, provideRouter, withComponentInputBinding } from '@angular/router';
 import { apiInterceptorFor } from '../http/api-interceptor';
 import { ApiSettings, isSessionCall } from '../http/api-settings';
@@ -29,6 +29,8 @@ export function appConfigFor(
       provideHttpClient(withFetch(), withInterceptors([apiInterceptorFor(settings)])),
       provideClientHydration(
         withEventReplay(),
+        // `@defer (hydrate …)` blocks: parts of a page that wake up later, or only when they must.
+        withIncrementalHydration(),
         withHttpTransferCacheOptions({
           // While rendering, API calls carry the visitor's cookie; their answers go back only inside
           // that visitor's own no-store page, so the browser may reuse them (api-interceptor.ts).

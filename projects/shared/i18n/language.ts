@@ -1,5 +1,5 @@
 import { DOCUMENT } from '@angular/common';
-import { Injectable, computed, inject, signal } from '@angular/core';
+import { Injectable, type Signal, computed, inject, signal } from '@angular/core';
 import { TranslateService } from '@ngx-translate/core';
 import { type Language as LanguageCode, LANGUAGES } from '@layerbook/contracts/types';
 import { firstValueFrom } from 'rxjs';
@@ -53,6 +53,15 @@ export class Language {
     this.code.set(language);
     // Screen readers pick their voice from it; the server wrote the first one, a switch changes it here.
     this.document.documentElement.lang = language;
+  }
+
+  /**
+   * Whether the words or number formats changed since now (the page being drawn): a part of a page
+   * left dehydrated (`@defer (hydrate when …)`) wakes up on it to redraw itself.
+   */
+  changedSinceNow(): Signal<boolean> {
+    const drawn = this.locale();
+    return computed(() => this.locale() !== drawn);
   }
 
   /** The firm's country (ISO 3166-1 alpha-2) for number and date conventions. */

@@ -3,6 +3,7 @@ import express, { type Express, type Response as ExpressResponse } from 'express
 import expressStaticGzip from 'express-static-gzip';
 import { randomBytes } from 'node:crypto';
 import { API_DISPATCH_KEY } from './api-dispatch';
+import { scriptAfterFirstPaint } from './script-after-paint';
 
 /** index.html carries this marker in `ngCspNonce`; every copy is swapped for the request's nonce. */
 const NONCE_PLACEHOLDER = '__LB_CSP_NONCE__';
@@ -124,9 +125,8 @@ async function sendWithNonce(response: Response, res: ExpressResponse, answer: H
     await writeResponseToNodeResponse(response, res);
     return;
   }
-  const html = withRootedMedia(
-    (await response.text()).replaceAll(NONCE_PLACEHOLDER, answer.nonce).replace(BASE_ELEMENT, ''),
-    answer.mediaRoot,
+  const html = scriptAfterFirstPaint(
+    withRootedMedia((await response.text()).replaceAll(NONCE_PLACEHOLDER, answer.nonce).replace(BASE_ELEMENT, ''), answer.mediaRoot),
   );
   res.status(answer.status);
   response.headers.forEach((value, key) => {

@@ -1,7 +1,7 @@
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ApplicationRef } from '@angular/core';
-import { TestBed } from '@angular/core/testing';
+import { type ComponentFixture, DeferBlockBehavior, DeferBlockState, TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import type { BillingToday, InvoiceSummary, StaffRole, TodayView } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
@@ -68,8 +68,18 @@ const inquiries: TodayView = {
   pipeline: { unweighted: '0.00', weighted: '0.00', openCount: 0, currency: 'USD' },
 };
 
-function render(role: StaffRole): { text: () => string; html: () => HTMLElement; http: HttpTestingController } {
+interface Rendered {
+  text: () => string;
+  html: () => HTMLElement;
+  http: HttpTestingController;
+  settle: () => Promise<void>;
+}
+
+async function render(role: StaffRole): Promise<Rendered> {
   TestBed.configureTestingModule({
+    // The panels are deferred blocks (hydrated later in the browser): drawn here when a test settles.
+    deferBlockBehavior: DeferBlockBehavior.Manual,
+    imports: [Today],
     providers: [
       provideHttpClient(),
       provideHttpClientTesting(),
@@ -78,23 +88,31 @@ function render(role: StaffRole): { text: () => string; html: () => HTMLElement;
       { provide: Session, useValue: { hasRole: (needed: StaffRole) => needed === 'crew' || role !== 'crew' } },
     ],
   });
+  await TestBed.compileComponents();
   const fixture = TestBed.createComponent(Today);
-  // Resources send their requests on the next change detection; whenStable would wait for their answers.
-  TestBed.inject(ApplicationRef).tick();
+  await drawDeferred(fixture);
   const html = (): HTMLElement => fixture.nativeElement as HTMLElement;
-  return { text: () => html().textContent ?? '', html, http: TestBed.inject(HttpTestingController) };
+  const settle = async () => {
+    await TestBed.inject(ApplicationRef).whenStable();
+    await drawDeferred(fixture);
+  };
+  return { text: () => html().textContent ?? '', html, http: TestBed.inject(HttpTestingController), settle };
 }
 
-async function settle(): Promise<void> {
+/** Draws the deferred blocks now on the page. Resources send their requests on the next change detection. */
+async function drawDeferred(fixture: ComponentFixture<Today>): Promise<void> {
   TestBed.inject(ApplicationRef).tick();
-  await TestBed.inject(ApplicationRef).whenStable();
+  for (const block of await fixture.getDeferBlocks()) {
+    await block.render(DeferBlockState.Complete);
+  }
+  TestBed.inject(ApplicationRef).tick();
 }
 
 describe('Today', () => {
   afterEach(() => TestBed.inject(HttpTestingController).verify());
 
-  it('never asks for money for the crew', () => {
-    const { text, http } = render('crew');
+  it('never asks for money for the crew', async () => {
+    const { text, http } = await render('crew');
     http.expectNone('/api/billing/today');
     http.expectNone('/api/inquiries/today');
     expect(text()).toContain('Your job sheets');
@@ -102,7 +120,7 @@ describe('Today', () => {
   });
 
   it('shows the office what to bill, what is overdue in days and the change orders waiting', async () => {
-    const { text, html, http } = render('office');
+    const { text, html, http, settle } = await render('office');
     http.expectOne('/api/inquiries/today').flush(inquiries);
     http.expectOne('/api/billing/today').flush(money);
     await settle();

@@ -12,6 +12,7 @@ import { LIKELY_WORK_WORDS } from '../inquiries/stage-odds';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { TodayMoney } from './today-money';
 import { TranslatePipe } from '@ngx-translate/core';
+import { Language } from '../../../../../shared/i18n/language';
 
 /** What needs the office today: follow-ups that are late or due, where the pipeline stands, and the money to bill and collect. */
 @Component({
@@ -29,4 +30,6 @@ export class Today {
   protected readonly view = computed(() => (this.summary.hasValue() ? this.summary.value() : null));
   protected readonly message = loadMessage(this.summary);
   protected readonly stageLabels = STAGE_LABELS;
+  /** The panels' hydration is deferred (today.html): they are links and figures, woken by a tap or a language switch. */
+  protected readonly isLanguageChanged = inject(Language).changedSinceNow();
 }

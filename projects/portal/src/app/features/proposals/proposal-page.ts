@@ -96,6 +96,14 @@ export class ProposalPage {
     const p = this.proposal();
     return !!p && p.status === 'sent' && p.isLatest && !p.isExpired;
   });
+  /** an answer given on this page (the loaded proposal replaced by the answer) */
+  private readonly isAnsweredHere = signal(false);
+  private readonly isLanguageChanged = this.language.changedSinceNow();
+  /**
+   * The document's hydration is deferred (proposal-page.html): it wakes up when what it shows
+   * changes — an answer given here (the chosen option), another language — or when tapped.
+   */
+  protected readonly mustRedrawDocument = computed(() => this.isAnsweredHere() || this.isLanguageChanged());
   protected readonly pdfUrl = computed(() => this.api.pdfUrl(this.id()));
   protected readonly signedPdfUrl = computed(() => this.api.signedPdfUrl(this.id()));
 
@@ -123,6 +131,7 @@ export class ProposalPage {
 
   /** After an answer the forms go away; bring the reader back to the message at the top. */
   protected show(answer: PortalProposal): void {
+    this.isAnsweredHere.set(true);
     this.loaded.set(answer);
     this.document.querySelector('h1')?.scrollIntoView();
   }
