@@ -86,6 +86,9 @@ test('the office sends a two-option proposal; the client accepts option B; the j
   await portal.screenshot({ path: 'e2e/.artifacts/portal-proposal.png', fullPage: true });
   await portal.getByRole('button', { name: 'Accept this proposal' }).click();
   await expect(portal.getByText(/Accepted by Hattie Brambleton/)).toBeVisible();
+  // The document above the form (left dehydrated while it was only read) wakes up to mark the choice.
+  await expect(portal.getByRole('article', { name: /Option B: limewash/ })).toContainText('Your choice');
+  await expect(portal.getByRole('article', { name: /Option A/ })).not.toContainText('Your choice');
   await client.close();
 
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
