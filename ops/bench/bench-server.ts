@@ -18,11 +18,13 @@ import { testDatabaseUrls } from '../../server/src/testing/test-env';
 
 const root = path.resolve(__dirname, '../..');
 
-/** What driver.ts posts back: ops/s and latencies (ms), or why it failed. */
+/** What driver.ts posts back: ops/s, latencies (ms, sorted) and the time it took, or why it failed. */
 export interface Measured {
   rps: number;
   p50: number;
   p95: number;
+  seconds: number;
+  latencies: number[];
 }
 type DriverMessage = Measured | { error: string };
 
@@ -35,6 +37,33 @@ export const measure = (concurrency: number, job: Record<string, unknown>) =>
     worker.once('message', (m: DriverMessage) => ('error' in m ? reject(new Error(m.error)) : resolve(m)));
     worker.once('error', reject);
   });
+
+const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+
+/**
+ * Two jobs measured in turns — `rounds` rounds of a, then b — and each one's rounds added up: its
+ * requests over its time, and its percentiles over all its latencies. A VM's speed drifts over
+ * seconds; taking the two sides in turns lets the drift fall on both instead of on whichever ran second.
+ */
+export async function measureInTurns(
+  concurrency: number,
+  a: Record<string, unknown>,
+  b: Record<string, unknown>,
+  rounds: number,
+  perRound: number,
+): Promise<[Measured, Measured]> {
+  const runs: [Measured[], Measured[]] = [[], []];
+  for (let round = 0; round < rounds; round++) {
+    runs[0].push(await measure(concurrency, { ...a, total: perRound }));
+    runs[1].push(await measure(concurrency, { ...b, total: perRound }));
+  }
+  const added = (ms: Measured[]): Measured => {
+    const latencies = ms.flatMap((m) => m.latencies).sort((x, y) => x - y);
+    const seconds = ms.reduce((sum, m) => sum + m.seconds, 0);
+    return { rps: latencies.length / seconds, p50: percentile(latencies, 50), p95: percentile(latencies, 95), seconds, latencies };
+  };
+  return [added(runs[0]), added(runs[1])];
+}
 
 /** Drops and makes database `name`, migrates it and answers the server's configuration for it. */
 export async function benchDatabase(name: string, connections: number): Promise<Config> {

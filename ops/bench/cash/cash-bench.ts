@@ -12,7 +12,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import { withTenant, type SqlQuery } from '@layerbook/db';
-import { staffRowSql, toStaffPrincipal } from '../../../server/src/auth/staff-principal';
+import { staffRowQuery, toStaffPrincipal } from '../../../server/src/auth/staff-principal';
 import type { StaffPrincipal } from '../../../server/src/http/principal';
 import { cashForecastView } from '../../../server/src/cash/forecast';
 import { cashJobs } from '../../../server/src/cash/jobs';
@@ -84,7 +84,7 @@ async function main(): Promise<void> {
     toStaffPrincipal(
       firmId,
       ownerId,
-      (await tx.client.query(staffRowSql(firmId, ownerId))).rows[0] as Parameters<typeof toStaffPrincipal>[2],
+      (await tx.client.query(staffRowQuery(firmId, ownerId).text, [firmId, ownerId])).rows[0] as Parameters<typeof toStaffPrincipal>[2],
     ),
   );
   if (!owner) throw new Error('The demo owner is not an active member.');

@@ -1,5 +1,19 @@
 import type { Language } from '@layerbook/contracts';
-import { and, clients, eq, firms, isNull, isUuid, portalLinks, portalUsers, sql, TenantTx, withLookup, withTenant } from '@layerbook/db';
+import {
+  and,
+  clients,
+  eq,
+  firms,
+  isNull,
+  isUuid,
+  portalLinks,
+  portalUsers,
+  sql,
+  type SqlQuery,
+  TenantTx,
+  withLookup,
+  withTenant,
+} from '@layerbook/db';
 import type { Pool } from 'pg';
 import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
@@ -7,7 +21,7 @@ import { gone, notFound } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
 import { portalUserReader } from '../i18n/reader';
 import { portalLinkMail } from '../mail/templates';
-import { sessionLiveSql } from './staff-principal';
+import { sessionLive } from './staff-principal';
 import { hashToken, minutesFromNow, newToken } from './tokens';
 
 export const PORTAL_LINK_MINUTES = 20;
@@ -98,13 +112,19 @@ interface ClientRow {
   session_live: boolean;
 }
 
-/** The client's row as literal SQL for the first round trip of a request's transaction (see staffRowSql). */
-export function clientRowSql(tenantId: string, portalUserId: string, sessionId: string | null): string {
-  if (!isUuid(tenantId) || !isUuid(portalUserId)) throw new Error('clientRowSql needs ids');
-  return `select p.name, p.email, p.status, f.name as firm_name, coalesce(c.language, f.language) as language,
+/** The client's row for the first round trip of a request's transaction, prepared once per connection (see staffRowQuery). */
+export function clientRowQuery(tenantId: string, portalUserId: string, sessionId: string | null): SqlQuery {
+  if (!isUuid(tenantId) || !isUuid(portalUserId)) throw new Error('clientRowQuery needs ids');
+  const live = sessionLive(sessionId, portalUserId, 3);
+  return {
+    name: `lb_client_row${live.suffix}`,
+    text: `select p.name, p.email, p.status, f.name as firm_name, coalesce(c.language, f.language) as language,
                  c.language as own_language, f.language as firm_language, f.country,
-                 ${sessionLiveSql(sessionId, portalUserId)} as session_live
-            from portal_users p join firms f on f.id = p.tenant_id left join clients c on c.id = p.client_id where p.tenant_id = '${tenantId}' and p.id = '${portalUserId}'`;
+                 ${live.sql} as session_live
+            from portal_users p join firms f on f.id = p.tenant_id left join clients c on c.id = p.client_id
+           where p.tenant_id = $1 and p.id = $2`,
+    values: [tenantId, portalUserId, ...live.values],
+  };
 }
 
 export function toClientPrincipal(tenantId: string, portalUserId: string, row: ClientRow | undefined): ClientPrincipal | null {

@@ -13,7 +13,7 @@ import type {
   ProgressTable,
 } from '@layerbook/contracts';
 import type { InvoiceListQuery } from '@layerbook/contracts';
-import { isoUtcText, readAllInOneTrip, type SqlQuery, type TenantTx } from '@layerbook/db';
+import { isoUtcText, readAllInOneTrip, type SqlQuery, statementName, type TenantTx } from '@layerbook/db';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
 import { notFound } from '../http/problem';
 import { invoiceCreditsRead, invoiceCredits, invoicePaymentReads, invoicePayments } from '../payments/payment-read';
@@ -93,7 +93,7 @@ export type InvoiceListRow = SummaryRow & { created_at_text: string };
  * joined to their job and client, so a deep page of 100k invoices costs what the first does. The
  * firm-local day (for overdue) is computed inside it from the firm's zone and the given clock.
  */
-export function buildInvoiceListQuery(tenantId: string, q: InvoiceListQuery, now: Date): { text: string; values: unknown[] } {
+export function buildInvoiceListQuery(tenantId: string, q: InvoiceListQuery, now: Date): SqlQuery & { values: unknown[] } {
   const values: unknown[] = [tenantId, now];
   const add = (v: unknown) => `$${values.push(v)}`;
   const where: string[] = [FILTERS[q.filter]];
@@ -115,7 +115,7 @@ export function buildInvoiceListQuery(tenantId: string, q: InvoiceListQuery, now
       from page i join jobs j on j.tenant_id = i.tenant_id and j.id = i.job_id
       join clients c on c.tenant_id = i.tenant_id and c.id = i.client_id
      order by i.created_at desc, i.id desc`;
-  return { text, values };
+  return { text, values, name: statementName('invoice_list', text) };
 }
 
 /** The page the list query's rows make: it asks for one row more than the page, which says there is a next one. */

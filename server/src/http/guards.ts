@@ -1,8 +1,8 @@
 import { roleAtLeast, StaffRole } from '@layerbook/contracts';
 import { readInOneTrip, readInTwoTrips, type SqlQuery, TenantTx, withTenantAndFirst } from '@layerbook/db';
 import type { Request } from 'express';
-import { clientRowSql, toClientPrincipal } from '../auth/portal-auth';
-import { staffRowSql, toStaffPrincipal } from '../auth/staff-principal';
+import { clientRowQuery, toClientPrincipal } from '../auth/portal-auth';
+import { staffRowQuery, toStaffPrincipal } from '../auth/staff-principal';
 import type { AppContext } from '../context';
 import type { ClientPrincipal, StaffPrincipal } from './principal';
 import { forbidden, unauthorized } from './problem';
@@ -30,7 +30,7 @@ export async function withStaff<T>(
 ): Promise<T> {
   const claim = req.user;
   if (!claim || claim.kind !== 'staff') throw unauthorized();
-  return withTenantAndFirst(ctx.pool, claim.tenantId, staffRowSql(claim.tenantId, claim.id, sessionIdOf(req)), async (tx, rows) => {
+  return withTenantAndFirst(ctx.pool, claim.tenantId, staffRowQuery(claim.tenantId, claim.id, sessionIdOf(req)), async (tx, rows) => {
     const staff = toStaffPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toStaffPrincipal>[2]);
     if (!staff) {
       ended(req);
@@ -65,7 +65,7 @@ export async function readAsStaff<I, R = Record<string, unknown>>(
     await withStaff(ctx, req, needed, () => Promise.resolve());
     throw error;
   }
-  const { first, rows } = await readInOneTrip(ctx.pool, claim.tenantId, staffRowSql(claim.tenantId, claim.id, sessionIdOf(req)), read);
+  const { first, rows } = await readInOneTrip(ctx.pool, claim.tenantId, staffRowQuery(claim.tenantId, claim.id, sessionIdOf(req)), read);
   const staff = toStaffPrincipal(claim.tenantId, claim.id, first[0] as unknown as Parameters<typeof toStaffPrincipal>[2]);
   if (!staff) {
     ended(req);
@@ -93,7 +93,7 @@ export async function readAsStaffPlanned<P extends { readonly queries: readonly 
   const { checked, results } = await readInTwoTrips(
     ctx.pool,
     claim.tenantId,
-    staffRowSql(claim.tenantId, claim.id, sessionIdOf(req)),
+    staffRowQuery(claim.tenantId, claim.id, sessionIdOf(req)),
     (first) => {
       const staff = toStaffPrincipal(claim.tenantId, claim.id, first[0] as unknown as Parameters<typeof toStaffPrincipal>[2]);
       if (!staff) {
@@ -111,7 +111,7 @@ export async function readAsStaffPlanned<P extends { readonly queries: readonly 
 export async function withClient<T>(ctx: AppContext, req: Request, fn: (tx: TenantTx, client: ClientPrincipal) => Promise<T>): Promise<T> {
   const claim = req.user;
   if (!claim || claim.kind !== 'client') throw unauthorized('Sign in with the link we e-mail you.');
-  return withTenantAndFirst(ctx.pool, claim.tenantId, clientRowSql(claim.tenantId, claim.id, sessionIdOf(req)), async (tx, rows) => {
+  return withTenantAndFirst(ctx.pool, claim.tenantId, clientRowQuery(claim.tenantId, claim.id, sessionIdOf(req)), async (tx, rows) => {
     const client = toClientPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toClientPrincipal>[2]);
     if (!client) {
       ended(req);
@@ -125,7 +125,7 @@ export async function withClient<T>(ctx: AppContext, req: Request, fn: (tx: Tena
 export async function signedInStaff(ctx: AppContext, req: Request): Promise<StaffPrincipal | null> {
   const claim = req.user;
   if (!claim || claim.kind !== 'staff') return null;
-  const staff = await withTenantAndFirst(ctx.pool, claim.tenantId, staffRowSql(claim.tenantId, claim.id, sessionIdOf(req)), (_tx, rows) =>
+  const staff = await withTenantAndFirst(ctx.pool, claim.tenantId, staffRowQuery(claim.tenantId, claim.id, sessionIdOf(req)), (_tx, rows) =>
     Promise.resolve(toStaffPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toStaffPrincipal>[2])),
   );
   if (!staff) ended(req);
@@ -136,8 +136,12 @@ export async function signedInStaff(ctx: AppContext, req: Request): Promise<Staf
 export async function signedInClient(ctx: AppContext, req: Request): Promise<ClientPrincipal | null> {
   const claim = req.user;
   if (!claim || claim.kind !== 'client') return null;
-  const client = await withTenantAndFirst(ctx.pool, claim.tenantId, clientRowSql(claim.tenantId, claim.id, sessionIdOf(req)), (_tx, rows) =>
-    Promise.resolve(toClientPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toClientPrincipal>[2])),
+  const client = await withTenantAndFirst(
+    ctx.pool,
+    claim.tenantId,
+    clientRowQuery(claim.tenantId, claim.id, sessionIdOf(req)),
+    (_tx, rows) =>
+      Promise.resolve(toClientPrincipal(claim.tenantId, claim.id, rows[0] as unknown as Parameters<typeof toClientPrincipal>[2])),
   );
   if (!client) ended(req);
   return client;

@@ -1,5 +1,7 @@
-import { inlineQuery, readInOneTrip, readInTwoTrips } from '@layerbook/db';
+import { inlineQuery, readInOneTrip, readInTwoTrips, withTenantAndFirst } from '@layerbook/db';
 import { Pool } from 'pg';
+import { staffRowQuery } from '../auth/staff-principal';
+import { buildInvoiceListQuery } from '../billing/invoice-read';
 import { joinAs } from '../proposals/proposal-fixtures';
 import { newAgent, signUpFirm, startTestServer, TestServer } from '../testing/harness';
 
@@ -121,6 +123,31 @@ describe('readInTwoTrips: the re-check, then the reads (named ones prepared once
       expect((await read(5)).results).toEqual([[{ v: 2 }]]);
       expect(await prepared(pool)).toEqual(['test_divided']);
       expect((await pool.query(`select coalesce(current_setting('app.tenant_id', true), '') as firm`)).rows[0].firm).toBe('');
+    } finally {
+      await pool.end();
+    }
+  });
+});
+
+describe('the signed-in person and a list, prepared once per connection', () => {
+  it('runs the re-check and the invoice list as prepared statements, the same rows each time', async () => {
+    const firm = await signUpFirm(t.app, 'Prepared Trip Plaster');
+    const pool = new Pool({ connectionString: t.ctx.config.DATABASE_URL, max: 1 });
+    try {
+      const list = buildInvoiceListQuery(firm.firmId, { filter: 'all', limit: 50 }, new Date('2026-12-01T15:00:00Z'));
+      expect(list.name).toMatch(/^invoice_list_[0-9a-f]{16}$/);
+      for (let i = 0; i < 2; i++) {
+        const { first, rows } = await readInOneTrip(pool, firm.firmId, staffRowQuery(firm.firmId, firm.userId), list);
+        expect(first).toEqual([expect.objectContaining({ role: 'owner', status: 'active', email: firm.email, session_live: true })]);
+        expect(rows).toEqual([]);
+        const again = await withTenantAndFirst(pool, firm.firmId, staffRowQuery(firm.firmId, firm.userId), (_tx, r) => Promise.resolve(r));
+        expect(again).toEqual(first);
+      }
+      const names = (await pool.query<{ name: string }>(`select name from pg_prepared_statements order by name`)).rows.map((r) => r.name);
+      expect(names).toEqual([list.name, 'lb_staff_row']);
+      // The same list asked again is the same statement: its text does not change with the values.
+      const later = buildInvoiceListQuery(firm.firmId, { filter: 'all', limit: 50 }, new Date('2026-12-02T15:00:00Z'));
+      expect(later.name).toBe(list.name);
     } finally {
       await pool.end();
     }

@@ -1,7 +1,7 @@
 import type { BoardColumn, InquiryListQuery, InquiryStage, InquirySummary, ItemList, KeysetPage, TodayView } from '@layerbook/contracts';
 import { INQUIRY_STAGES, STAGE_LABELS, UNASSIGNED } from '@layerbook/contracts';
 import { weightedPipeline } from '@layerbook/domain';
-import type { TenantTx } from '@layerbook/db';
+import { type SqlQuery, statementName, type TenantTx } from '@layerbook/db';
 import type { FirmClock } from './clock';
 import { decodeCursor, encodeCursor } from './cursor';
 import { SUMMARY_COLUMNS, SUMMARY_FROM, SummaryRow, toSummary } from './rows';
@@ -20,7 +20,7 @@ const SORTS = {
 
 type ListRow = SummaryRow & { sort_value: string };
 
-export function buildListQuery(tenantId: string, q: InquiryListQuery): { text: string; values: unknown[] } {
+export function buildListQuery(tenantId: string, q: InquiryListQuery): SqlQuery & { values: unknown[] } {
   const sort = SORTS[q.sort];
   const values: unknown[] = [tenantId];
   const where = ['i.tenant_id = $1'];
@@ -39,7 +39,7 @@ export function buildListQuery(tenantId: string, q: InquiryListQuery): { text: s
   }
   const text = `select ${SUMMARY_COLUMNS}, (${sort.key})::text as sort_value ${SUMMARY_FROM}
     where ${where.join(' and ')} order by ${sort.key} ${sort.dir}, i.id ${sort.dir} limit ${add(q.limit + 1)}`;
-  return { text, values };
+  return { text, values, name: statementName('inquiry_list', text) };
 }
 
 export type InquiryListRow = ListRow;

@@ -2,26 +2,36 @@ import type { Pool } from 'pg';
 import { markEnded } from './named-statements';
 import { runReads } from './prepared-reads';
 import { isUuid, type TenantTx, type Tx } from './scoped';
-import { inlineQuery, type SqlQuery } from './sql-literal';
+import { asQuery, type SqlQuery } from './sql-literal';
 
 export { inlineQuery, type SqlQuery } from './sql-literal';
+export { statementName } from './prepared-reads';
 
 type Rows = Record<string, unknown>[];
 
 /**
- * A firm's read in ONE round trip: BEGIN READ ONLY, the firm set transaction-locally, `firstSql` (a
- * trusted literal, e.g. the signed-in person's re-check), `read` and COMMIT, sent as one simple
- * query. The caller decides from `first` whether `rows` may be used; a read-only transaction can
- * have changed nothing either way. Saves two round trips against withTenantAndFirst + query + commit.
+ * A firm's read in ONE round trip: BEGIN READ ONLY, the firm set transaction-locally, `first` (e.g.
+ * the signed-in person's re-check), `read` and COMMIT, sent as one simple query (named ones run as
+ * statements prepared once per connection: prepared-reads.ts). The caller decides from `first`
+ * whether `rows` may be used; a read-only transaction can have changed nothing either way. Saves two
+ * round trips against withTenantAndFirst + query + commit.
  */
-export async function readInOneTrip(pool: Pool, tenantId: string, firstSql: string, read: SqlQuery): Promise<{ first: Rows; rows: Rows }> {
+export async function readInOneTrip(
+  pool: Pool,
+  tenantId: string,
+  first: string | SqlQuery,
+  read: SqlQuery,
+): Promise<{ first: Rows; rows: Rows }> {
   if (!isUuid(tenantId)) throw new Error('readInOneTrip needs a firm id');
   const client = await pool.connect();
   try {
-    const results = (await client.query(
-      `begin read only; select set_config('app.tenant_id', '${tenantId}', true); ${firstSql}; ${inlineQuery(read)}; commit`,
-    )) as unknown as Array<{ rows: Rows }>;
-    return { first: results[2].rows, rows: results[3].rows };
+    const [firstRows, rows] = await runReads(
+      client,
+      ['begin read only', `select set_config('app.tenant_id', '${tenantId}', true)`],
+      [asQuery(first), read],
+      'commit',
+    );
+    return { first: firstRows, rows };
   } catch (error) {
     // A failed statement leaves the transaction open and aborted: end it before the connection goes back.
     await client.query('rollback').catch(() => undefined);
@@ -34,7 +44,7 @@ export async function readInOneTrip(pool: Pool, tenantId: string, firstSql: stri
 /**
  * A firm's read-only transaction in TWO round trips, for reads whose queries depend on who asks
  * (their firm's day, their role): the first sends BEGIN READ ONLY, the firm set transaction-locally
- * and `firstSql` (a trusted literal: the signed-in person's re-check); `check` decides from its rows
+ * and `first` (the signed-in person's re-check, prepared when named); `check` decides from its rows
  * (and may throw: a 401 or 403), `build` makes the queries from what it answered (and may throw: a
  * 400); the second sends them all and COMMIT (named ones as prepared statements: prepared-reads.ts).
  * Anything thrown rolls the transaction back. `results` holds each query's rows, in order.
@@ -42,17 +52,20 @@ export async function readInOneTrip(pool: Pool, tenantId: string, firstSql: stri
 export async function readInTwoTrips<P>(
   pool: Pool,
   tenantId: string,
-  firstSql: string,
+  first: string | SqlQuery,
   check: (first: Rows) => P,
   build: (checked: P) => readonly SqlQuery[],
 ): Promise<{ checked: P; results: Rows[] }> {
   if (!isUuid(tenantId)) throw new Error('readInTwoTrips needs a firm id');
   const client = await pool.connect();
   try {
-    const opened = (await client.query(
-      `begin read only; select set_config('app.tenant_id', '${tenantId}', true); ${firstSql}`,
-    )) as unknown as Array<{ rows: Rows }>;
-    const checked = check(opened[2].rows);
+    const [firstRows] = await runReads(
+      client,
+      ['begin read only', `select set_config('app.tenant_id', '${tenantId}', true)`],
+      [asQuery(first)],
+      null,
+    );
+    const checked = check(firstRows);
     const results = await runReads(client, [], build(checked), 'commit');
     return { checked, results };
   } catch (error) {

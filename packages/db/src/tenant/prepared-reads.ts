@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import type { PoolClient } from 'pg';
 import { inlineQuery, literal, type SqlQuery } from './sql-literal';
 
@@ -56,4 +57,18 @@ export async function runReads(
     }
     throw error;
   }
+}
+
+const statementNames = new Map<string, string>();
+
+/**
+ * A prepared-statement name for a query text built from a few fixed variants (a list's filters,
+ * with or without a cursor): `prefix` and a hash of the text, the same on every call for the same text.
+ */
+export function statementName(prefix: string, text: string): string {
+  const known = statementNames.get(text);
+  if (known !== undefined) return known;
+  const name = `${prefix}_${createHash('sha1').update(text).digest('hex').slice(0, 16)}`;
+  if (statementNames.size < 1_000) statementNames.set(text, name);
+  return name;
 }

@@ -1,6 +1,8 @@
 import { drizzle, NodePgDatabase } from 'drizzle-orm/node-postgres';
 import type { Pool, PoolClient } from 'pg';
 import { nameStatements, takeEnded } from './named-statements';
+import { runReads } from './prepared-reads';
+import { asQuery, type SqlQuery } from './sql-literal';
 
 /**
  * Query-builder only (no relational `db.query` API): building Drizzle's relational config from the
@@ -73,14 +75,14 @@ export function withTenant<T>(pool: Pool, tenantId: string, fn: (tx: TenantTx) =
 }
 
 /**
- * withTenant whose first round trip also runs `firstSql` (a trusted literal built by the caller from
- * checked ids — the simple-query protocol takes no parameters), handing its rows to `fn`. Saves a
- * round trip on every request that must re-check the signed-in person first.
+ * withTenant whose first round trip also runs `first` (a trusted literal, or a query whose values are
+ * written in: prepared once per connection when it has a name, see prepared-reads.ts), handing its
+ * rows to `fn`. Saves a round trip on every request that must re-check the signed-in person first.
  */
 export function withTenantAndFirst<T>(
   pool: Pool,
   tenantId: string,
-  firstSql: string,
+  first: string | SqlQuery,
   fn: (tx: TenantTx, firstRows: Record<string, unknown>[]) => Promise<T>,
 ): Promise<T> {
   if (!UUID.test(tenantId)) return Promise.reject(new Error('withTenant needs a firm id'));
@@ -88,10 +90,7 @@ export function withTenantAndFirst<T>(
   return inTransaction(
     pool,
     async (client) => {
-      const results = (await client.query(
-        `begin; select set_config('app.tenant_id', '${tenantId}', true); ${firstSql}`,
-      )) as unknown as Array<{ rows: Record<string, unknown>[] }>;
-      firstRows = results[2]?.rows ?? [];
+      [firstRows] = await runReads(client, ['begin', `select set_config('app.tenant_id', '${tenantId}', true)`], [asQuery(first)], null);
     },
     (tx) => fn({ ...tx, tenantId } as TenantTx, firstRows),
   );

@@ -11,6 +11,9 @@ export interface SqlQuery {
   readonly name?: string;
 }
 
+/** A trusted literal statement (no parameters) as a query; a query as it is. */
+export const asQuery = (query: string | SqlQuery): SqlQuery => (typeof query === 'string' ? { text: query, values: [] } : query);
+
 /**
  * The query with its `$n` parameters written in as literals (strings through pg's escapeLiteral), for
  * the simple-query protocol, which takes no parameters. Only for texts this code builds: a `$n` inside
