@@ -47,6 +47,10 @@ test('the client pays the e-mailed deposit by card, sees it paid, gets the recei
   await openLive(page, pathFrom(invoiceMail));
   await expect(page).toHaveURL(new RegExp(`/portal/invoices/${deposit.id}$`));
   await expect(page.getByRole('heading', { level: 1, name: `Invoice ${deposit.number}` })).toBeVisible();
+  // An invoice's page is in the Invoices section: the portal's nav marks it as the current one.
+  const sections = page.getByRole('navigation', { name: 'Your pages' });
+  await expect(sections.getByRole('link', { name: 'Your invoices' })).toHaveAttribute('aria-current', 'page');
+  await expect(sections.getByRole('link', { name: 'Your projects' })).not.toHaveAttribute('aria-current');
   const pay = page.getByRole('button', { name: /^Pay .+ by card$/ });
   await expect(pay).toBeEnabled();
   const amount = (await pay.textContent())!.trim().replace(/^.*Pay (.+) by card$/s, '$1');

@@ -1,5 +1,5 @@
 import { APP_BASE_HREF } from '@angular/common';
-import { provideHttpClient, withFetch, withInterceptors } from '@angular/common/http';
+import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import {
   ApplicationConfig,
   type EnvironmentProviders,
@@ -26,7 +26,10 @@ export function appConfigFor(
       { provide: APP_BASE_HREF, useValue: settings.baseHref },
       provideZonelessChangeDetection(),
       provideRouter(routes, withComponentInputBinding()),
-      provideHttpClient(withFetch(), withInterceptors([apiInterceptorFor(settings)])),
+      // XMLHttpRequest in the browser (Angular's default backend, always in the bundle; it also
+      // reports upload progress): withFetch() would add a second backend to the first load. The
+      // server renders with fetch (server-config.ts).
+      provideHttpClient(withInterceptors([apiInterceptorFor(settings)])),
       provideClientHydration(
         withEventReplay(),
         // `@defer (hydrate …)` blocks: parts of a page that wake up later, or only when they must.

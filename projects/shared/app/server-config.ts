@@ -54,6 +54,7 @@ export function serverConfigFor(appConfig: ApplicationConfig): ApplicationConfig
   return mergeApplicationConfig(appConfig, {
     providers: [
       provideServerRendering(withRoutes(SERVER_ROUTES)),
+      FetchBackend,
       { provide: HttpBackend, useFactory: transferableBackend },
       { provide: TRANSLATION_FILES, useValue: translationFiles },
     ],

@@ -2,7 +2,8 @@ import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/cor
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatToolbarModule } from '@angular/material/toolbar';
-import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { NavigationEnd, Router, RouterLink, RouterOutlet } from '@angular/router';
 import { TranslatePipe } from '@ngx-translate/core';
 import type { Language as LanguageCode } from '@layerbook/contracts/types';
 import { Session } from '../auth/session';
@@ -16,18 +17,7 @@ import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 @Component({
   selector: 'lb-portal-shell',
   providers: [provideFieldDefaults()],
-  imports: [
-    FormAlert,
-    MatButtonModule,
-    MatIconModule,
-    LanguageMenu,
-    MatToolbarModule,
-    RouterLink,
-    RouterLinkActive,
-    RouterOutlet,
-    TranslatePipe,
-    Wordmark,
-  ],
+  imports: [FormAlert, MatButtonModule, MatIconModule, LanguageMenu, MatToolbarModule, RouterLink, RouterOutlet, TranslatePipe, Wordmark],
   template: `
     <header>
       <mat-toolbar class="lb-toolbar">
@@ -47,8 +37,18 @@ import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
       </mat-toolbar>
       @if (client()) {
         <nav class="sections" [attr.aria-label]="'layout.shell.pages' | translate">
-          <a routerLink="/projects" routerLinkActive="active" ariaCurrentWhenActive="page">{{ 'layout.shell.projects' | translate }}</a>
-          <a routerLink="/invoices" routerLinkActive="active" ariaCurrentWhenActive="page">{{ 'layout.shell.invoices' | translate }}</a>
+          <a
+            routerLink="/projects"
+            [class.active]="section() === 'projects'"
+            [attr.aria-current]="section() === 'projects' ? 'page' : null"
+            >{{ 'layout.shell.projects' | translate }}</a
+          >
+          <a
+            routerLink="/invoices"
+            [class.active]="section() === 'invoices'"
+            [attr.aria-current]="section() === 'invoices' ? 'page' : null"
+            >{{ 'layout.shell.invoices' | translate }}</a
+          >
         </nav>
       }
     </header>
@@ -114,6 +114,18 @@ export class PortalShell {
 
   protected readonly client = this.session.client;
   protected readonly message = signal<string | null>(null);
+  /**
+   * The first part of the page's path: its section is marked (and aria-current) on it and below it,
+   * e.g. an invoice of /invoices. Kept here rather than with RouterLinkActive, whose code would
+   * otherwise ride in every page's first load.
+   */
+  protected readonly section = signal(firstPart(this.router.url));
+
+  constructor() {
+    this.router.events.pipe(takeUntilDestroyed()).subscribe((event) => {
+      if (event instanceof NavigationEnd) this.section.set(firstPart(event.urlAfterRedirects));
+    });
+  }
 
   protected async chooseLanguage(language: LanguageCode | null): Promise<void> {
     this.message.set(null);
@@ -133,4 +145,9 @@ export class PortalShell {
       this.message.set(toProblem(error).title);
     }
   }
+}
+
+/** "/invoices/12?x=1#y" → "invoices". */
+function firstPart(url: string): string {
+  return url.split(/[?#]/)[0].split('/')[1] ?? '';
 }
