@@ -179,7 +179,12 @@ test('the client reads a proposal from the e-mail on a phone and accepts it; eve
   expect(await icon.evaluate((el) => getComputedStyle(el).fontFamily)).toContain('Material Symbols');
   await look(portal, 'portal-proposal-accepted', found);
 
-  for (const path of ['/portal/projects', '/portal/boards']) {
+  // On a phone each invoice is a card: its status is on screen, not in a table's column off to the side.
+  await openLive(portal, '/portal/invoices');
+  const firstInvoice = portal.getByRole('table').getByRole('row').nth(1);
+  const state = (await firstInvoice.getByRole('cell').last().boundingBox())!;
+  expect(state.x + state.width).toBeLessThanOrEqual(PHONE.width);
+  for (const path of ['/portal/projects', '/portal/invoices', '/portal/boards']) {
     await openLive(portal, path);
     await portal.waitForLoadState('networkidle');
     await look(portal, path.slice(1).replace(/\//g, '-'), found);

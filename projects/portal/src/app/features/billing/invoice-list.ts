@@ -29,27 +29,33 @@ import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
       </div>
     } @else {
       <div class="table-wrap" tabindex="0" role="region" [attr.aria-label]="'billing.list.title' | translate">
-        <table class="lb-table">
-          <thead>
-            <tr>
-              <th scope="col">{{ 'billing.list.invoice' | translate }}</th>
-              <th scope="col">{{ 'billing.list.job' | translate }}</th>
-              <th scope="col">{{ 'billing.list.due' | translate }}</th>
-              <th scope="col" class="num">{{ 'billing.list.amountDue' | translate }}</th>
-              <th scope="col">{{ 'billing.list.status' | translate }}</th>
+        <!-- Roles written out: on a phone the rows are drawn as cards, and some browsers drop a table's
+             meaning for screen readers once its parts are no longer displayed as table parts. -->
+        <table class="lb-table" role="table">
+          <thead role="rowgroup">
+            <tr role="row">
+              <th scope="col" role="columnheader">{{ 'billing.list.invoice' | translate }}</th>
+              <th scope="col" role="columnheader">{{ 'billing.list.job' | translate }}</th>
+              <th scope="col" role="columnheader">{{ 'billing.list.due' | translate }}</th>
+              <th scope="col" role="columnheader" class="num">{{ 'billing.list.amountDue' | translate }}</th>
+              <th scope="col" role="columnheader">{{ 'billing.list.status' | translate }}</th>
             </tr>
           </thead>
-          <tbody>
+          <tbody role="rowgroup">
             @for (inv of invoices(); track inv.id) {
               @let words = status(inv);
-              <tr>
-                <th scope="row">
+              <tr role="row">
+                <th scope="row" role="rowheader">
                   <a [routerLink]="['/invoices', inv.id]">{{ inv.number }}</a>
                 </th>
-                <td>{{ inv.jobTitle }}</td>
-                <td>{{ inv.status === 'void' ? '—' : (inv.dueOn | lbDate: 'long') }}</td>
-                <td class="num">{{ inv.amountDue | lbMoney: inv.currency }}</td>
-                <td>
+                <td role="cell">{{ inv.jobTitle }}</td>
+                <td role="cell" [attr.data-label]="'billing.list.due' | translate">
+                  {{ inv.status === 'void' ? '—' : (inv.dueOn | lbDate: 'long') }}
+                </td>
+                <td role="cell" class="num" [attr.data-label]="'billing.list.amountDue' | translate">
+                  {{ inv.amountDue | lbMoney: inv.currency }}
+                </td>
+                <td role="cell" class="state">
                   <span class="status" [class.urgent]="words.isUrgent">
                     <mat-icon aria-hidden="true">{{ words.icon }}</mat-icon>
                     {{ words.text | translate }}
@@ -121,6 +127,47 @@ import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
     }
     .status mat-icon {
       flex: none;
+    }
+    /* A phone: each invoice a card — its number and status on top, the job, then what is due and by when. */
+    @media (max-width: 599.98px) {
+      .lb-table thead {
+        position: absolute;
+        width: 1px;
+        height: 1px;
+        overflow: hidden;
+        clip-path: inset(50%);
+        white-space: nowrap;
+      }
+      .lb-table tbody tr {
+        display: grid;
+        grid-template-columns: 1fr auto;
+        gap: 0.25rem 1rem;
+        padding: 0.75rem 0;
+        border-bottom: 1px solid var(--mat-sys-outline-variant);
+      }
+      .lb-table tbody th,
+      .lb-table tbody td {
+        display: block;
+        padding: 0;
+        border: 0;
+      }
+      .lb-table tbody td {
+        grid-column: 1 / -1;
+      }
+      .lb-table tbody td.state {
+        grid-row: 1;
+        grid-column: 2;
+        justify-self: end;
+      }
+      .lb-table td[data-label]::before {
+        content: attr(data-label) ': ';
+        /* The column header already names the cell for a screen reader: the label is for the eye only. */
+        content: attr(data-label) ': ' / '';
+        color: var(--mat-sys-on-surface-variant);
+      }
+      .lb-table .num {
+        text-align: left !important;
+      }
     }
     .urgent {
       font-weight: 600;
