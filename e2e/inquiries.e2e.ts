@@ -94,3 +94,41 @@ test('the public form keeps what the prospect typed and names each field when it
   await form.screenshot({ path: 'e2e/.artifacts/public-form-refused.png', fullPage: true });
   await context.close();
 });
+
+// The form wakes in two steps (its lower part is a dehydrated block that wakes a task later): what a
+// prospect types before the app is up, in either part, is still there once both are awake, and is sent.
+test('the public form keeps what was typed before the app took over, in both of its parts', async ({ browser }) => {
+  const context = await browser.newContext();
+  const form = await context.newPage();
+  let release!: () => void;
+  const released = new Promise<void>((resolve) => (release = resolve));
+  await form.route(/\/portal\/main-[^/]+\.js$/, async (route) => {
+    await released;
+    await route.continue();
+  });
+  await form.goto('/portal/f/fernhollow/inquiry');
+  const email = `early.${Date.now()}@example.test`;
+  await form.getByLabel('Your name').fill('Isolde Varne');
+  await form.getByLabel('E-mail').fill(email);
+  await form.getByLabel('Address of the place to be finished').fill('4 Quillon Row, Marrowby');
+  await form.getByLabel('Year the building was built').fill('1931');
+  await form.getByLabel('Which rooms and surfaces?').fill('Dining room walls, polished plaster');
+  await form.getByLabel('How did you hear of us?').selectOption('showroom');
+  await expect(form.locator('form[data-hydrated="true"]')).toHaveCount(0);
+  release();
+  await expect(form.locator('form[data-hydrated="true"]')).toBeVisible();
+  // Typed into the lower part right after the page woke: kept whether or not that part is awake yet.
+  await form.getByLabel('When would you like the work done?').fill('Before spring');
+  await expect(form.getByLabel('Your name')).toHaveValue('Isolde Varne');
+  await expect(form.getByLabel('Address of the place to be finished')).toHaveValue('4 Quillon Row, Marrowby');
+  await expect(form.getByLabel('Which rooms and surfaces?')).toHaveValue('Dining room walls, polished plaster');
+  await expect(form.getByLabel('How did you hear of us?')).toHaveValue('showroom');
+  await expect(form.getByLabel('When would you like the work done?')).toHaveValue('Before spring');
+  // The lower part is awake: no referral chosen, so its referrer field (always there without scripts) has gone.
+  await expect(form.getByLabel('Who referred you?')).toHaveCount(0);
+  await form.getByLabel('You may contact me about this inquiry.').check();
+  await form.getByRole('button', { name: 'Send inquiry' }).click();
+  await expect(form.getByRole('heading', { name: 'Thank you' })).toBeVisible();
+  await waitForMail(email, /received your inquiry/);
+  await context.close();
+});

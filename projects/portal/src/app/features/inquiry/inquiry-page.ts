@@ -28,7 +28,7 @@ import { InquiryApi } from './inquiry-api';
 import { INQUIRY_WORDS, fromPosted, inquiryForm, linkDependentFields, refusedAsSent, toBody } from './inquiry-form-model';
 import { postedRefusal, type PostedRefusal } from './posted-refusal';
 import { PublicFrame } from './public-frame';
-import { typedBeforeHydration } from './typed-before-hydration';
+import { followTypingBeforeWaking, typedBeforeHydration } from './typed-before-hydration';
 import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { SayPipe } from '../../../../../shared/errors/say-pipe';
 import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
@@ -105,6 +105,7 @@ export class InquiryPage {
       value = fromPosted(typed, value, 'keep');
     }
     this.form.setValue(value);
+    followTypingBeforeWaking(this.host.nativeElement, this.form);
     if (refusal) {
       this.showRefusal(refusal);
     }

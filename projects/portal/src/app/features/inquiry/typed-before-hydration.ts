@@ -1,5 +1,6 @@
 import { DOCUMENT, isPlatformBrowser } from '@angular/common';
-import { PLATFORM_ID, inject } from '@angular/core';
+import { DestroyRef, PLATFORM_ID, inject } from '@angular/core';
+import type { FormGroup } from '@angular/forms';
 
 const UNTYPED = new Set(['checkbox', 'radio', 'submit', 'button', 'reset', 'file']);
 
@@ -31,4 +32,35 @@ export function typedBeforeHydration(formId: string): Record<string, string> | n
     }
   }
   return typed;
+}
+
+/**
+ * From hydration on, copies what the visitor types or chooses in a field that is not awake yet (in
+ * a part of the form still dehydrated, `@defer (hydrate …)`) into the form's model, so that when the
+ * part wakes, its controls write the same value back. A field that is awake has already set the
+ * value through its own listener, so nothing changes then. Tick boxes are left to event replay, as
+ * in typedBeforeHydration. Call from the component's constructor.
+ */
+export function followTypingBeforeWaking(host: HTMLElement, form: FormGroup): void {
+  if (!isPlatformBrowser(inject(PLATFORM_ID))) {
+    return;
+  }
+  const follow = (event: Event) => {
+    const field = event.target;
+    const isField = field instanceof HTMLInputElement || field instanceof HTMLTextAreaElement || field instanceof HTMLSelectElement;
+    if (!isField || !field.name || UNTYPED.has(field.type) || (event instanceof InputEvent && event.isComposing)) {
+      return;
+    }
+    const control = form.get(field.name);
+    if (control && typeof control.value === 'string' && control.value !== field.value) {
+      // The field already shows it: only the model learns it (nothing is written back mid-word).
+      control.setValue(field.value, { emitModelToViewChange: false });
+    }
+  };
+  host.addEventListener('input', follow);
+  host.addEventListener('change', follow);
+  inject(DestroyRef).onDestroy(() => {
+    host.removeEventListener('input', follow);
+    host.removeEventListener('change', follow);
+  });
 }
