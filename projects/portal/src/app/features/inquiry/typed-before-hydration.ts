@@ -4,6 +4,14 @@ import type { FormGroup } from '@angular/forms';
 
 const UNTYPED = new Set(['checkbox', 'radio', 'submit', 'button', 'reset', 'file']);
 
+type TypedField = HTMLInputElement | HTMLTextAreaElement | HTMLSelectElement;
+
+/** A named field whose value is words typed or an option chosen (not a tick box or a button). */
+function isTypedField(element: unknown): element is TypedField {
+  const isField = element instanceof HTMLInputElement || element instanceof HTMLTextAreaElement || element instanceof HTMLSelectElement;
+  return isField && element.name !== '' && !UNTYPED.has(element.type);
+}
+
 /**
  * What the visitor has already typed or chosen in the server-rendered form, read before hydration.
  *
@@ -26,8 +34,7 @@ export function typedBeforeHydration(formId: string): Record<string, string> | n
   }
   const typed: Record<string, string> = {};
   for (const field of Array.from(form.elements)) {
-    const isField = field instanceof HTMLInputElement || field instanceof HTMLTextAreaElement || field instanceof HTMLSelectElement;
-    if (isField && field.name && !UNTYPED.has(field.type)) {
+    if (isTypedField(field)) {
       typed[field.name] = field.value;
     }
   }
@@ -47,8 +54,7 @@ export function followTypingBeforeWaking(host: HTMLElement, form: FormGroup): vo
   }
   const follow = (event: Event) => {
     const field = event.target;
-    const isField = field instanceof HTMLInputElement || field instanceof HTMLTextAreaElement || field instanceof HTMLSelectElement;
-    if (!isField || !field.name || UNTYPED.has(field.type) || (event instanceof InputEvent && event.isComposing)) {
+    if (!isTypedField(field) || (event instanceof InputEvent && event.isComposing)) {
       return;
     }
     const control = form.get(field.name);
