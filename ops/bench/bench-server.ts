@@ -44,7 +44,11 @@ const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.lengt
  * Two jobs measured in turns — `rounds` rounds of a, then b — and each one's rounds added up: its
  * requests over its time, and its percentiles over all its latencies. A VM's speed drifts over
  * seconds; taking the two sides in turns lets the drift fall on both instead of on whichever ran second.
+ * Each turn is a new worker whose code starts cold: it makes WARM_CALLS untimed calls first, as a
+ * cold driver costs more per call on the side whose answers it parses most (50 rows from PostgreSQL).
  */
+const WARM_CALLS = 300;
+
 export async function measureInTurns(
   concurrency: number,
   a: Record<string, unknown>,
@@ -54,8 +58,8 @@ export async function measureInTurns(
 ): Promise<[Measured, Measured]> {
   const runs: [Measured[], Measured[]] = [[], []];
   for (let round = 0; round < rounds; round++) {
-    runs[0].push(await measure(concurrency, { ...a, total: perRound }));
-    runs[1].push(await measure(concurrency, { ...b, total: perRound }));
+    runs[0].push(await measure(concurrency, { ...a, total: perRound, warmCalls: WARM_CALLS }));
+    runs[1].push(await measure(concurrency, { ...b, total: perRound, warmCalls: WARM_CALLS }));
   }
   const added = (ms: Measured[]): Measured => {
     const latencies = ms.flatMap((m) => m.latencies).sort((x, y) => x - y);
