@@ -13,7 +13,8 @@ import { refuseUndecodablePath } from './http/bad-path';
 import { healthRoutes } from './health/health-routes';
 import { observeRequests } from './health/request-metrics';
 import { signInRateLimit } from './http/rate-limit';
-import { cspNonce, securityHeaders } from './http/security';
+import { useLeanJson } from './http/json-answer';
+import { securityHeadersFor } from './http/security';
 import { sessionMiddleware } from './http/session';
 import { portalAuthRoutes } from './auth/portal-routes';
 import { teamRoutes } from './team/routes';
@@ -53,10 +54,11 @@ export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
   app.disable('x-powered-by');
   // API answers are no-store; hashing every body for an ETag is wasted work.
   app.set('etag', false);
+  useLeanJson(app);
   app.set('trust proxy', ctx.config.NODE_ENV === 'production' ? 1 : false);
   app.use(requestLogging(ctx.logger));
   app.use(observeRequests());
-  app.use(cspNonce, securityHeaders(ctx.config));
+  app.use(securityHeadersFor(ctx.config));
   app.use(refuseUndecodablePath);
   // Probes outside /api: no session, no CSRF, not logged (health/health-routes.ts).
   app.use(healthRoutes(ctx));
