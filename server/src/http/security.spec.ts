@@ -30,7 +30,8 @@ describe('security headers', () => {
   });
 
   it('gives an API answer the same hardening as a page, and a policy that loads and frames nothing', async () => {
-    for (const env of [{}, { NODE_ENV: 'production', PUBLIC_URL: 'https://app.example' }]) {
+    const envs: Array<Record<string, string>> = [{}, { NODE_ENV: 'production', PUBLIC_URL: 'https://app.example' }];
+    for (const env of envs) {
       const page = await request(app(env)).get('/page');
       const api = await request(app(env)).get('/api/thing');
       expect(api.headers['content-security-policy']).toBe(API_CSP);
