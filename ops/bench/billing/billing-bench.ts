@@ -10,7 +10,15 @@ import http from 'node:http';
 import os from 'node:os';
 import { buildInvoiceListQuery } from '../../../server/src/billing/invoice-read';
 import { DEMO, seedDemo } from '../../../server/src/seed/demo';
-import { benchDatabase, benchServices, listenBenchApp, measure as measureAt, measureInTurns, signInForBench } from '../bench-server';
+import {
+  benchDatabase,
+  benchServices,
+  listenBenchApp,
+  measure as measureAt,
+  measureInTurns,
+  settleHeap,
+  signInForBench,
+} from '../bench-server';
 import { INVOICES, JOBS, loadBillingBench, makeIssueDrafts } from './load';
 
 const DB = 'layerbook_bench_billing';
@@ -75,9 +83,9 @@ async function main(): Promise<void> {
       { mode: 'pg', databaseUrl: config.DATABASE_URL, tenantId: firmId, sql: sqlQuery },
     ] as const;
   };
+  settleHeap();
   if (ONLY !== 'issue') {
-    // Warm-up before the first figure: the first list would otherwise also measure the server's JIT
-    // and the collection of what loading 100,000 invoices left in this process's heap.
+    // Warm-up before the first figure: the first list would otherwise also measure the server's JIT.
     const [httpJob, pgJob] = jobsOf(null, 'all');
     await measure({ ...httpJob, total: 1_000 });
     await measure({ ...pgJob, total: 1_000 });

@@ -8,7 +8,15 @@ import http from 'node:http';
 import { Pool } from 'pg';
 import { hashPassword } from '../../../server/src/auth/passwords';
 import { buildListQuery } from '../../../server/src/inquiries/list';
-import { benchDatabase, benchServices, listenBenchApp, measure as measureAt, measureInTurns, signInForBench } from '../bench-server';
+import {
+  benchDatabase,
+  benchServices,
+  listenBenchApp,
+  measure as measureAt,
+  measureInTurns,
+  settleHeap,
+  signInForBench,
+} from '../bench-server';
 
 const DB = 'layerbook_bench';
 const BIG = 20_000;
@@ -103,7 +111,8 @@ async function main(): Promise<void> {
       { mode: 'pg', databaseUrl: config.DATABASE_URL, tenantId: firmId, sql: sqlQuery },
     ] as const;
   };
-  // Warm-up before the first figure, as in the billing bench: the server's JIT and what seeding left in its heap.
+  // Before the first figure, as in the billing bench: what seeding left in the heap collected, and the server's JIT warmed.
+  settleHeap();
   const [firstHttp, firstPg] = jobsOf(null);
   await measure({ ...firstHttp, total: 1_000 });
   await measure({ ...firstPg, total: 1_000 });
