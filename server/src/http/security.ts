@@ -59,8 +59,8 @@ export const API_CSP = "default-src 'none'; frame-ancestors 'none'";
 /**
  * The headers `securityHeaders` writes, worked out once: helmet run on a stand-in answer, with the
  * API's fixed policy instead of the page one. They do not change from one answer to the next, so an
- * API answer gets the list written in a loop instead of a nonce and helmet's dozen steps (about a
- * twentieth of the server's time per read in the invoice-list benchmark).
+ * API answer gets the list written in a loop instead of a nonce and helmet's dozen steps (3–7 % more
+ * invoice-list reads a second in the list benchmark, measured in alternating turns).
  */
 export function apiSecurityHeaderList(config: Config): ReadonlyArray<readonly [string, string]> {
   const written: Array<[string, string]> = [];
