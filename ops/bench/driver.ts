@@ -16,6 +16,8 @@ interface Job {
   paths?: string[];
   body?: string;
   cookie?: string;
+  /** More request headers (get and post). */
+  headers?: Record<string, string>;
   csrf?: string;
   databaseUrl?: string;
   tenantId?: string;
@@ -43,7 +45,7 @@ async function run(job: Job): Promise<{ rps: number; p50: number; p95: number; s
     call = (i) =>
       new Promise((resolve, reject) => {
         const post = job.mode === 'post';
-        const headers: http.OutgoingHttpHeaders = { cookie: job.cookie };
+        const headers: http.OutgoingHttpHeaders = { ...job.headers, cookie: job.cookie };
         if (post) Object.assign(headers, { 'content-type': 'application/json', 'x-csrf-token': job.csrf });
         const req = http.request(
           { host: '127.0.0.1', port: job.port, path: post ? job.paths![i] : job.path, method: post ? 'POST' : 'GET', agent, headers },

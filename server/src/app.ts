@@ -42,6 +42,7 @@ import { paymentWebhookRoutes } from './payments/webhook-routes';
 import { sampleRoutes } from './samples/routes';
 import { portalSampleRoutes } from './samples/portal-routes';
 import { publicFormPost, publicInquiryLimiter, publicRoutes } from './inquiries/public-routes';
+import { anonymousPageCache } from './ssr/page-cache';
 
 export interface SsrHandlers {
   readonly admin: RequestHandler;
@@ -66,6 +67,7 @@ export function createApp(ctx: AppContext, ssr?: SsrHandlers): Express {
   const inquiryLimiter = publicInquiryLimiter(ctx.config.PUBLIC_FORM_RATE_LIMIT, ctx.pool);
   app.use('/api', api(ctx, inquiryLimiter));
   if (ssr) {
+    app.use(anonymousPageCache(ctx));
     app.use('/portal', publicFormPost(ctx, inquiryLimiter, ssr.portal));
     app.use('/portal', ssr.portal);
     app.use(ssr.admin);

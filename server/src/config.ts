@@ -30,6 +30,11 @@ const schema = z
     PUBLIC_FORM_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
     /** A public form sent sooner than this after it was shown is taken for a bot (0 in browser tests). */
     PUBLIC_FORM_MIN_FILL_MS: z.coerce.number().int().min(0).default(3000),
+    /**
+     * How long an anonymous visitor's sign-in page or public form is kept for the next one (0: never;
+     * server/src/ssr/page-cache.ts). A firm's change to its public details shows after at most this.
+     */
+    ANONYMOUS_PAGE_CACHE_MS: z.coerce.number().int().min(0).max(60_000).default(5000),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
     DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
     // Object storage: any S3-compatible service; the defaults point at the local fake (ops/start.sh).

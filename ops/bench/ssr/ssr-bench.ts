@@ -1,8 +1,10 @@
 /**
  * Server rendering against the API calls that feed each page and against a static file of the same
- * size, on the built apps with the demo firm. Prints, per page: render p50/p95, the p50 of each API
- * call the render makes (found by rendering once and reading the request log), their sum, render ÷
- * API, and render ÷ static file, with each figure against its limit. Figures, not a test.
+ * size, on the built apps with the demo firm. Prints, per page: the page's p50/p95 as a visitor gets
+ * it (anonymous pages: the page kept for the next visitor, server/src/ssr/page-cache.ts), a fresh
+ * render's (`Cache-Control: no-cache`), the p50 of each API call the render makes (found by rendering
+ * once and reading the request log), their sum, page ÷ API (and fresh render ÷ API for anonymous
+ * pages), and page ÷ static file, with each figure against its limit. Figures, not a test.
  *   bash ops/build.sh            (a production build; take /tmp/lb/build.lock first when others build)
  *   npx tsx ops/bench/ssr/ssr-bench.ts      (PostgreSQL must be up: bash ops/pg-start.sh)
  * Environment: SSR_BENCH_PORT (default 4400), SSR_BENCH_RENDERS (default 200 per page), SSR_BENCH_ONLY
@@ -28,6 +30,7 @@ const PORT = Number(process.env['SSR_BENCH_PORT'] ?? 4400);
 const RENDERS = Number(process.env['SSR_BENCH_RENDERS'] ?? 200);
 const CONNECTIONS = 4;
 const ONLY = process.env['SSR_BENCH_ONLY'] ?? '';
+const FRESH = { 'cache-control': 'no-cache' };
 
 interface Page {
   readonly label: string;
@@ -111,8 +114,8 @@ async function main(): Promise<void> {
     );
     for (const page of pages.filter((p) => p.label.includes(ONLY))) {
       const pageCookie = page.owner ? cookie : 'lb.bench=anonymous';
-      const get = (url: string, total: number): Promise<Measured> =>
-        measure(1, { mode: 'get', port: PORT, path: url, cookie: pageCookie, total });
+      const get = (url: string, total: number, headers: Record<string, string> = {}): Promise<Measured> =>
+        measure(1, { mode: 'get', port: PORT, path: url, cookie: pageCookie, total, headers });
 
       // One render with the request log on: which API calls feed this page.
       apiCallsSeen.length = 0;
@@ -123,11 +126,16 @@ async function main(): Promise<void> {
       const staticName = `${page.label.replaceAll(' ', '-')}.html`;
       writeFileSync(path.join(staticDir, staticName), 'x'.repeat(Buffer.byteLength(html)));
 
-      await get(page.url, Math.max(20, RENDERS / 5)); // warm-up
+      // Every render fresh (as a hard reload asks): anonymous pages are otherwise kept a few seconds
+      // for the next visitor (server/src/ssr/page-cache.ts), and the answer below is mostly that.
+      await get(page.url, Math.max(20, RENDERS / 5), FRESH); // warm-up
       // The server's event loop busy time per render: less swayed by other work on the machine than latency.
       const loopBefore = performance.eventLoopUtilization();
-      const render = await get(page.url, RENDERS);
+      const fresh = await get(page.url, RENDERS, FRESH);
       const busy = performance.eventLoopUtilization(loopBefore).active / RENDERS;
+      // What a visitor gets: the kept page for an anonymous one, a render for a signed-in one.
+      await get(page.url, 20);
+      const render = await get(page.url, RENDERS);
       const apis: { url: string; p50: number }[] = [];
       for (const url of calls) {
         await get(url, 50);
@@ -139,13 +147,15 @@ async function main(): Promise<void> {
 
       console.log(`\n${page.label}  ${page.url}  (${(Buffer.byteLength(html) / 1024).toFixed(0)} kB)`);
       console.log(
-        `  render p50 ${ms(render.p50)} (${ratio(render.p50, page.limitMs)} of ${page.limitMs} ms)  p95 ${ms(render.p95)}; server busy ${ms(busy)} a render`,
+        `  page p50 ${ms(render.p50)} (${ratio(render.p50, page.limitMs)} of ${page.limitMs} ms)  p95 ${ms(render.p95)}${page.owner ? '' : ' (the kept page: anonymous)'}`,
       );
+      console.log(`  fresh render p50 ${ms(fresh.p50)}  p95 ${ms(fresh.p95)}; server busy ${ms(busy)} a render`);
       for (const a of apis) console.log(`  API ${a.url}  p50 ${ms(a.p50)}`);
       if (apis.length > 0) {
         const times = render.p50 / apiSum;
         const against = page.ratioLimit ? ` (${ratio(times, page.ratioLimit)} of ${page.ratioLimit}×)` : ' (no limit set)';
-        console.log(`  render ÷ API (sum of p50s ${ms(apiSum)}) ${times.toFixed(2)}×${against}`);
+        console.log(`  page ÷ API (sum of p50s ${ms(apiSum)}) ${times.toFixed(2)}×${against}`);
+        if (!page.owner) console.log(`  fresh render ÷ API ${(fresh.p50 / apiSum).toFixed(2)}× (no limit set)`);
       } else {
         console.log('  no API call while rendering');
       }

@@ -3,10 +3,9 @@ import express, { type Express, type Response as ExpressResponse } from 'express
 import expressStaticGzip from 'express-static-gzip';
 import { randomBytes } from 'node:crypto';
 import { API_DISPATCH_KEY } from './api-dispatch';
+import { KEEP_RENDERED_PAGE_KEY, NONCE_PLACEHOLDER, type KeepRenderedPage } from './rendered-page';
 import { scriptAfterFirstPaint } from './script-after-paint';
 
-/** index.html carries this marker in `ngCspNonce`; every copy is swapped for the request's nonce. */
-const NONCE_PLACEHOLDER = '__LB_CSP_NONCE__';
 const NONCE_SHAPE = /^[A-Za-z0-9+/=_-]{8,128}$/;
 /**
  * The host's CSP has `base-uri 'none'`, so browsers refuse a <base> element (and log a violation).
@@ -77,6 +76,7 @@ export function createSsrApp(options: SsrAppOptions): Express {
           nonce: cspNonce,
           status,
           mediaRoot: options.mediaRoot,
+          keep: res.locals[KEEP_RENDERED_PAGE_KEY] as KeepRenderedPage | undefined,
         });
       })
       .catch(next);
@@ -117,6 +117,8 @@ interface HtmlAnswer {
   readonly nonce: string;
   readonly status: number;
   readonly mediaRoot: string;
+  /** The host's hook for keeping the page (an anonymous visitor's, see rendered-page.ts). */
+  readonly keep?: KeepRenderedPage;
 }
 
 async function sendWithNonce(response: Response, res: ExpressResponse, answer: HtmlAnswer): Promise<void> {
@@ -125,23 +127,27 @@ async function sendWithNonce(response: Response, res: ExpressResponse, answer: H
     await writeResponseToNodeResponse(response, res);
     return;
   }
-  const html = scriptAfterFirstPaint(
-    withRootedMedia((await response.text()).replaceAll(NONCE_PLACEHOLDER, answer.nonce).replace(BASE_ELEMENT, ''), answer.mediaRoot),
-  );
-  res.status(answer.status);
+  // Made with the nonce's placeholder, swapped last: a kept page serves any later answer.
+  const page = scriptAfterFirstPaint(withRootedMedia((await response.text()).replace(BASE_ELEMENT, ''), answer.mediaRoot));
+  const headers: [string, string][] = [];
   response.headers.forEach((value, key) => {
     // The body length changes with the nonce; cookies need their own list form.
     if (key !== 'content-length' && key !== 'set-cookie') {
-      res.setHeader(key, value);
+      headers.push([key, value]);
     }
   });
+  const cookies = response.headers.getSetCookie();
+  answer.keep?.({ status: answer.status, headers, setsCookie: cookies.length > 0, html: page });
+  res.status(answer.status);
+  for (const [key, value] of headers) {
+    res.setHeader(key, value);
+  }
   // A rendered page holds the visitor's own data (and the API answers it was drawn from).
   res.setHeader('cache-control', 'no-store');
-  const cookies = response.headers.getSetCookie();
   if (cookies.length > 0) {
     res.setHeader('set-cookie', cookies);
   }
-  res.send(html);
+  res.send(page.replaceAll(NONCE_PLACEHOLDER, answer.nonce));
 }
 
 /** Only the head is touched: the body may hold visitors' own words. */

@@ -24,12 +24,25 @@ export function formStamp(secret: string, now: Date): string {
   return `${t}.${nonce}.${createHmac('sha256', secret).update(`inquiry-form:${t}:${nonce}`).digest('base64url')}`;
 }
 
+/** Text shaped like a stamp (time in ms, nonce, signature), for finding stamps in a kept page. */
+export const FORM_STAMP_SHAPE = /\d{13}\.[A-Za-z0-9_-]{16}\.[A-Za-z0-9_-]{43}/g;
+
+/** Whether `text` is a stamp this server signed, of any age. */
+export function isFormStamp(secret: string, text: string): boolean {
+  return signedStamp(secret, text) !== null;
+}
+
 function readStamp(secret: string, stamp: string | undefined, now: Date): { age: number; nonce: string } | null {
+  const signed = signedStamp(secret, stamp);
+  return signed && { age: now.getTime() - signed.time, nonce: signed.nonce };
+}
+
+function signedStamp(secret: string, stamp: string | undefined): { time: number; nonce: string } | null {
   const [t, nonce, mac] = (stamp ?? '').split('.');
   if (!t || !nonce || !mac) return null;
   const expected = createHmac('sha256', secret).update(`inquiry-form:${t}:${nonce}`).digest('base64url');
   if (expected.length !== mac.length || !timingSafeEqual(Buffer.from(expected), Buffer.from(mac))) return null;
-  return { age: now.getTime() - Number(t), nonce };
+  return { time: Number(t), nonce };
 }
 
 /** Referrals keep their kind (they may be owed thanks or a fee); everything else is the web form. */
