@@ -95,7 +95,31 @@ test('the public form keeps what the prospect typed and names each field when it
   await context.close();
 });
 
-// The form wakes in two steps (its lower part is a dehydrated block that wakes a task later): what a
+// Waking the form's lower parts once left their fields unstyled for a frame, now and then, and the
+// page shifted on a phone (lbWakeTogether); a few loads catch it coming back.
+test('the public form does not move while it wakes on a phone', async ({ browser }) => {
+  for (let load = 0; load < 4; load++) {
+    const context = await browser.newContext({ viewport: { width: 412, height: 823 }, isMobile: true, hasTouch: true });
+    const form = await context.newPage();
+    await form.addInitScript(() => {
+      const shifts: string[] = [];
+      (window as unknown as { shifts: string[] }).shifts = shifts;
+      new PerformanceObserver((list) => {
+        for (const entry of list.getEntries())
+          shifts.push(`${Math.round(entry.startTime)} ms: ${(entry as unknown as { value: number }).value}`);
+      }).observe({ type: 'layout-shift', buffered: true });
+    });
+    await form.goto('/portal/f/fernhollow/inquiry');
+    await expect(form.locator('form[data-hydrated="true"]')).toBeVisible();
+    // Both lower parts awake: their fields have lost the server's marker class.
+    await expect(form.locator('.mat-input-server')).toHaveCount(0);
+    await form.waitForTimeout(300);
+    expect(await form.evaluate(() => (window as unknown as { shifts: string[] }).shifts)).toEqual([]);
+    await context.close();
+  }
+});
+
+// The form wakes in steps (its lower parts are dehydrated blocks that wake a task later): what a
 // prospect types before the app is up, in either part, is still there once both are awake, and is sent.
 test('the public form keeps what was typed before the app took over, in both of its parts', async ({ browser }) => {
   const context = await browser.newContext();
@@ -106,7 +130,9 @@ test('the public form keeps what was typed before the app took over, in both of 
     await released;
     await route.continue();
   });
-  await form.goto('/portal/f/fernhollow/inquiry');
+  // Not until "load": the page asks for its held script after the first paint, and when that comes
+  // before the load event (a page answered at once), the load event waits for the script.
+  await form.goto('/portal/f/fernhollow/inquiry', { waitUntil: 'domcontentloaded' });
   const email = `early.${Date.now()}@example.test`;
   await form.getByLabel('Your name').fill('Isolde Varne');
   await form.getByLabel('E-mail').fill(email);

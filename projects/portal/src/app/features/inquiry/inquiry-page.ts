@@ -33,6 +33,7 @@ import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { SayPipe } from '../../../../../shared/errors/say-pipe';
 import { FieldErrorPipe } from '../../../../../shared/forms/field-error-pipe';
 import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
+import { WakeTogether } from '../../../../../shared/hydration/wake-together';
 
 const FORM_ID = 'inquiry-form';
 const CHECK_FIELDS = 'inquiry.page.checkFields';
@@ -58,6 +59,7 @@ const REPLAYED = 101;
     ReactiveFormsModule,
     SayPipe,
     TranslatePipe,
+    WakeTogether,
   ],
   templateUrl: './inquiry-page.html',
   styleUrl: './inquiry-page.scss',
