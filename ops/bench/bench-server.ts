@@ -17,6 +17,7 @@ import { type Config, loadConfig } from '../../server/src/config';
 import type { ObjectStore } from '../../server/src/files/object-store';
 import { type StartedQueue, startQueue } from '../../server/src/queue/job-queue';
 import { testDatabaseUrls } from '../../server/src/testing/test-env';
+import { addShares, type CpuShare } from './cpu-share';
 
 const root = path.resolve(__dirname, '../..');
 
@@ -27,6 +28,8 @@ export interface Measured {
   p95: number;
   seconds: number;
   latencies: number[];
+  /** CPU milliseconds by party over the timed calls (cpu-share.ts), null without Linux's /proc. */
+  cpu: CpuShare | null;
 }
 type DriverMessage = Measured | { error: string };
 
@@ -66,7 +69,8 @@ export async function measureInTurns(
   const added = (ms: Measured[]): Measured => {
     const latencies = ms.flatMap((m) => m.latencies).sort((x, y) => x - y);
     const seconds = ms.reduce((sum, m) => sum + m.seconds, 0);
-    return { rps: latencies.length / seconds, p50: percentile(latencies, 50), p95: percentile(latencies, 95), seconds, latencies };
+    const cpu = addShares(ms.map((m) => m.cpu));
+    return { rps: latencies.length / seconds, p50: percentile(latencies, 50), p95: percentile(latencies, 95), seconds, latencies, cpu };
   };
   return [added(runs[0]), added(runs[1])];
 }

@@ -6,6 +6,7 @@
 import http from 'node:http';
 import { parentPort, workerData } from 'node:worker_threads';
 import { Pool } from 'pg';
+import { type CpuShare, cpuBetween, cpuSnapshot } from './cpu-share';
 
 interface Job {
   mode: 'get' | 'post' | 'pg';
@@ -30,7 +31,9 @@ function percentile(sorted: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
 }
 
-async function run(job: Job): Promise<{ rps: number; p50: number; p95: number; seconds: number; latencies: number[] }> {
+async function run(
+  job: Job,
+): Promise<{ rps: number; p50: number; p95: number; seconds: number; latencies: number[]; cpu: CpuShare | null }> {
   let call: (i: number) => Promise<void>;
   let close: () => Promise<void>;
   // Before the clock starts: every connection open (TCP, or PostgreSQL's sign-in and a backend that has
@@ -96,12 +99,14 @@ async function run(job: Job): Promise<{ rps: number; p50: number; p95: number; s
   // Each run is a new worker (a new V8 isolate): its own code starts cold. `warmCalls` untimed calls
   // first let it reach speed, so a short run does not charge the driver's JIT to the side it measures.
   if (job.mode !== 'post' && (job.warmCalls ?? 0) > 0) await runCalls(job.warmCalls!, false);
+  const before = cpuSnapshot();
   const start = process.hrtime.bigint();
   await runCalls(job.total, true);
   const seconds = Number(process.hrtime.bigint() - start) / 1e9;
+  const cpu = cpuBetween(before, cpuSnapshot());
   await close();
   latencies.sort((a, b) => a - b);
-  return { rps: job.total / seconds, p50: percentile(latencies, 50), p95: percentile(latencies, 95), seconds, latencies };
+  return { rps: job.total / seconds, p50: percentile(latencies, 50), p95: percentile(latencies, 95), seconds, latencies, cpu };
 }
 
 run(workerData as Job).then(

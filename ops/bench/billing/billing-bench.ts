@@ -19,6 +19,7 @@ import {
   settleHeap,
   signInForBench,
 } from '../bench-server';
+import { perRequest } from '../cpu-share';
 import { INVOICES, JOBS, loadBillingBench, makeIssueDrafts } from './load';
 
 const DB = 'layerbook_bench_billing';
@@ -98,6 +99,9 @@ async function main(): Promise<void> {
     console.log(
       `  ${label.padEnd(26)} API ${api.rps.toFixed(0)} req/s (p50 ${api.p50.toFixed(1)} ms, p95 ${api.p95.toFixed(1)} ms) | ` +
         `raw pg ${raw.rps.toFixed(0)} q/s (p95 ${raw.p95.toFixed(1)} ms) | ratio ${(api.rps / raw.rps).toFixed(2)}  (goals: ratio ≥ 0.7, p95 ≤ 25 ms)`,
+    );
+    console.log(
+      `  ${''.padEnd(26)} CPU per request, µs: API ${perRequest(api.cpu, api.latencies.length)} | raw ${perRequest(raw.cpu, raw.latencies.length)}`,
     );
     if (label === 'invoice list, first page') {
       // One at a time, nothing queued: what a request costs on its own, beside the same query alone.

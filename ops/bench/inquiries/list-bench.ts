@@ -17,6 +17,7 @@ import {
   settleHeap,
   signInForBench,
 } from '../bench-server';
+import { perRequest } from '../cpu-share';
 
 const DB = 'layerbook_bench';
 const BIG = 20_000;
@@ -127,6 +128,9 @@ async function main(): Promise<void> {
     console.log(
       `  ${label.padEnd(24)} API ${api.rps.toFixed(0)} req/s (p50 ${api.p50.toFixed(1)} ms, p95 ${api.p95.toFixed(1)} ms) | ` +
         `raw pg ${base.rps.toFixed(0)} q/s (p95 ${base.p95.toFixed(1)} ms) | ratio ${(api.rps / base.rps).toFixed(2)}  (goals: ratio ≥ 0.7, p95 ≤ 25 ms)`,
+    );
+    console.log(
+      `  ${''.padEnd(26)} CPU per request, µs: API ${perRequest(api.cpu, api.latencies.length)} | raw ${perRequest(base.cpu, base.latencies.length)}`,
     );
   }
   agent.destroy();
