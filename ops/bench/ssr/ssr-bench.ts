@@ -105,6 +105,8 @@ async function main(): Promise<void> {
       { label: 'public inquiry form', url: `/portal/f/${DEMO.firm.slug}/inquiry`, owner: false, limitMs: 25, ratioLimit: 3 },
       { label: 'admin Today', url: '/today', owner: true, limitMs: 25, ratioLimit: 3 },
       { label: 'admin estimate page', url: `/estimates/${estimateId}`, owner: true, limitMs: 50, ratioLimit: null },
+      // Not in the goals: the longest form an owner opens on a phone, held to the estimate page's limit.
+      { label: 'admin settings', url: '/settings', owner: true, limitMs: 50, ratioLimit: null },
     ];
     const load = loadavg()
       .map((l) => l.toFixed(2))
