@@ -75,7 +75,12 @@ export class EstimatingSettingsForm {
   protected readonly taxModeLabels = TAX_MODE_LABELS;
   protected readonly roundingKinds = ROUNDING_KINDS;
   protected readonly roundingKindLabels = ROUNDING_KIND_LABELS;
-  protected readonly words = { required: 'Enter a value.', min: 'Too small.', max: 'Too large.', pattern: 'Enter an amount like 55.00.' };
+  protected readonly words = {
+    required: 'Enter a value.',
+    min: 'At least {min}.',
+    max: 'At most {max}.',
+    pattern: 'Enter an amount like 55.00.',
+  };
   protected readonly form = estimatingForm();
   /** the day being added to the days off; not part of the settings until added */
   protected readonly newHoliday = new FormControl('', { nonNullable: true });
