@@ -1,7 +1,7 @@
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { provideZonelessChangeDetection } from '@angular/core';
-import { TestBed } from '@angular/core/testing';
+import { DeferBlockBehavior, DeferBlockState, TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import type { JobBillingView } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
@@ -105,6 +105,9 @@ function view(over: Partial<JobBillingView> = {}): JobBillingView {
 
 async function render(v: JobBillingView) {
   TestBed.configureTestingModule({
+    // The lower sections are deferred blocks (built in the browser once idle): drawn here at once.
+    deferBlockBehavior: DeferBlockBehavior.Manual,
+    imports: [JobBilling],
     providers: [
       provideTestI18n(officeWords),
       provideZonelessChangeDetection(),
@@ -113,11 +116,16 @@ async function render(v: JobBillingView) {
       provideRouter([]),
     ],
   });
+  await TestBed.compileComponents();
   const http = TestBed.inject(HttpTestingController);
   const fixture = TestBed.createComponent(JobBilling);
   fixture.componentRef.setInput('jobId', JOB);
   fixture.detectChanges();
   http.expectOne(`/api/jobs/${JOB}/billing`).flush(v);
+  await new Promise((resolve) => setTimeout(resolve));
+  TestBed.tick();
+  for (const block of await fixture.getDeferBlocks()) await block.render(DeferBlockState.Complete);
+  TestBed.tick();
   http.expectOne(`/api/jobs/${JOB}/history`).flush({ items: [] });
   await new Promise((resolve) => setTimeout(resolve));
   TestBed.tick();
