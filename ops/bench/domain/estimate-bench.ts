@@ -13,9 +13,6 @@
  */
 import {
   type CashForecastInput,
-  type EstimateInput,
-  type FinishLayer,
-  type SurfaceShape,
   type Container,
   addDays,
   cashForecast,
@@ -23,6 +20,7 @@ import {
   computeEstimate,
   toBase,
 } from '../../../packages/domain/src/index';
+import { benchJob } from '../../../packages/domain/src/estimate/large-estimate.fixture';
 import { runBundled } from './bundled-run';
 
 const ROOMS = 50;
@@ -43,118 +41,6 @@ const FIVE_SIZES_ONE_RATE: Container[] = [
 
 const vsGoal = (ms: number, goalMs: number): string =>
   `${(ms / goalMs).toFixed(2)}× the ${goalMs} ms goal (${ms <= goalMs ? 'met' : 'missed'})`;
-
-function layer(id: string, productId: string, rate: number, wait: number): FinishLayer {
-  return {
-    id,
-    name: id,
-    method: 'trowel',
-    productId,
-    coats: 1,
-    waste: 0.1,
-    coverage:
-      productId === 'lime'
-        ? { kind: 'consumption', unitPerSurface: 0.5, unit: 'kg', lengthUnit: 'm' }
-        : { kind: 'spreadRate', surfacePerUnit: 350, unit: 'gallon', lengthUnit: 'ft' },
-    productionRate: { surfacePerHour: rate, lengthUnit: 'ft' },
-    waitHoursAfter: wait,
-  };
-}
-
-function fiftyRoomJob(surfacesPerRoom: 2 | 4): EstimateInput {
-  const allShapes: SurfaceShape[] = [
-    {
-      kind: 'walls',
-      perimeter: 56,
-      height: 9,
-      openings: [
-        { width: 3, height: 7 },
-        { width: 4, height: 5, count: 2 },
-      ],
-    },
-    { kind: 'ceilingRect', length: 14, width: 14, elevation: 9 },
-    { kind: 'roundWalls', radius: 9, height: 10, openings: [{ width: 3, height: 7 }] },
-    { kind: 'sphericalCap', baseRadius: 9, rise: 3, elevation: 10 },
-  ];
-  const shapes = allShapes.slice(0, surfacesPerRoom);
-  return {
-    startDate: '2025-06-05',
-    property: { yearBuilt: 1965, isOccupied: true },
-    settings: {
-      currency: 'USD',
-      lengthUnit: 'ft',
-      minDeductedOpeningArea: 4,
-      labourRate: '45.00',
-      materialsMarkup: 0.2,
-      overheadProfit: { method: 'margin', overhead: 0.2, profit: 0.15 },
-      minimumCharge: '2500.00',
-      tax: { mode: 'materials', rate: 0.0825 },
-      rounding: { kind: 'nearest', increment: '5' },
-      calendar: {
-        workingWeekdays: [1, 2, 3, 4, 5],
-        dayStartHour: 8,
-        productiveHoursPerDay: 7,
-        minimumBlockHours: 3,
-        holidays: ['2025-07-04'],
-      },
-      crewSize: 3,
-      setupHours: 6,
-      cleanupHours: 4,
-      multipliers: { ceiling: 1.4, curvedWall: 1.15, curvedCeiling: 1.5, height: 1.2, occupied: 1.1 },
-      scaffoldHeight: 12,
-      workingReach: 6,
-    },
-    products: [
-      {
-        id: 'primer',
-        name: 'Primer',
-        unit: 'gallon',
-        containers: [
-          { label: '5 gal', size: 5, unit: 'gallon', price: '190.00' },
-          { label: '1 gal', size: 1, unit: 'gallon', price: '45.00' },
-          { label: '1 qt', size: 1, unit: 'quart', price: '16.00' },
-        ],
-      },
-      {
-        id: 'lime',
-        name: 'Lime plaster',
-        unit: 'kg',
-        hazards: { isLime: true },
-        containers: [
-          { label: '25 kg', size: 25, unit: 'kg', price: '110.00' },
-          { label: '20 kg', size: 20, unit: 'kg', price: '95.00' },
-          { label: '5 kg', size: 5, unit: 'kg', price: '28.00' },
-        ],
-      },
-      { id: 'sealer', name: 'Sealer', unit: 'gallon', containers: [{ label: '1 gal', size: 1, unit: 'gallon', price: '60.00' }] },
-    ],
-    finishSystems: [
-      {
-        id: 'venetian',
-        name: 'Venetian',
-        layers: [
-          layer('prime', 'primer', 250, 4),
-          layer('coat1', 'lime', 60, 16),
-          layer('coat2', 'lime', 40, 24),
-          layer('seal', 'sealer', 120, 0),
-        ],
-      },
-    ],
-    rooms: Array.from({ length: ROOMS }, (_, r) => ({
-      id: `room${r}`,
-      name: `Room ${r + 1}`,
-      surfaces: shapes.map((shape, s) => ({
-        id: `r${r}s${s}`,
-        name: shape.kind,
-        shape,
-        finishSystemId: 'venetian',
-        disturbedPaintedArea: 2,
-      })),
-    })),
-    perAreaRates: { venetian: '9.00' },
-    options: [{ id: 'beams', label: 'Faux beams', labourHours: 12, materialsCost: '180.00' }],
-  };
-}
 
 function fiveHundredInvoices(): CashForecastInput {
   const asOf = '2025-06-30';
@@ -199,7 +85,7 @@ console.log(isBundled ? '— bundled (esbuild --bundle, node) —' : '— tsx (T
 const forecastInput = fiveHundredInvoices();
 // Walls + ceiling per room is the usual job; round walls and a dome in every room is the heavy case.
 for (const surfacesPerRoom of [2, 4] as const) {
-  const job = fiftyRoomJob(surfacesPerRoom);
+  const job = benchJob(surfacesPerRoom, ROOMS);
   const sample = computeEstimate(job);
   const ms = median(() => computeEstimate(job), 400);
   console.log(
