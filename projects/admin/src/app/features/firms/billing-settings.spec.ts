@@ -5,6 +5,7 @@ import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import { DEFAULT_BILLING_SETTINGS, type BillingSettings, type BillingSettingsView, type StaffRole } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
+import { staffSession } from '../../shared/testing/staff-session';
 import { Session } from '../../core/auth/session';
 import { BillingSettingsPage } from './billing-settings';
 import { provideTestI18n } from '../../../../../shared/i18n/testing';
@@ -22,21 +23,7 @@ async function render(role: StaffRole) {
       provideRouter([]),
     ],
   });
-  TestBed.inject(Session).accept({
-    user: {
-      id: 'u1',
-      name: 'Ada',
-      email: 'ada@example.com',
-      role,
-      firmId: 'f1',
-      firmName: 'Fernhollow',
-      language: 'en',
-      ownLanguage: null,
-      units: 'imperial',
-      country: 'US',
-    },
-    csrfToken: 't',
-  });
+  TestBed.inject(Session).accept(staffSession(role));
   const http = TestBed.inject(HttpTestingController);
   const fixture = TestBed.createComponent(BillingSettingsPage);
   fixture.detectChanges();

@@ -7,25 +7,11 @@ import type { StaffSession } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { provideTestI18n } from '../../../../../../shared/i18n/testing';
 import auth from '../../../../i18n/auth/en.json';
+import { staffSession } from '../../../shared/testing/staff-session';
 import { urlAfterSignIn } from '../staff-auth';
 import { SecondFactorCodeStep } from './code-step';
 
-const SIGNED_IN: StaffSession = {
-  user: {
-    id: 'u1',
-    name: 'Ada',
-    email: 'ada@example.com',
-    role: 'owner',
-    firmId: 'f1',
-    firmName: 'Fernhollow',
-    language: 'en',
-    ownLanguage: null,
-    units: 'imperial',
-    country: 'US',
-  },
-  csrfToken: 't2',
-  secondFactor: null,
-};
+const SIGNED_IN: StaffSession = { ...staffSession('owner', 't2'), secondFactor: null };
 
 async function render(next?: string) {
   TestBed.configureTestingModule({
