@@ -88,4 +88,33 @@ describe('a sample board in the portal', () => {
     expect(html.textContent).toContain('You approved this board on');
     http.verify();
   });
+
+  it('sends a request for changes from its form without the browser posting the page, and refuses a blank one', async () => {
+    const { fixture, http, html } = render();
+    http.expectOne('/api/portal/boards/b-1').flush(board([]));
+    await fixture.whenStable();
+    fixture.detectChanges();
+    [...html.querySelectorAll('button')].find((b) => b.textContent?.includes(proposals.answers.askChanges))!.click();
+    fixture.detectChanges();
+    const form = html.querySelector('section.answer form') as HTMLFormElement;
+    const submit = () => {
+      // A form Angular does not own would be posted by the browser (the page reloads, the text is lost).
+      const event = new Event('submit', { cancelable: true });
+      form.dispatchEvent(event);
+      return event.defaultPrevented;
+    };
+    expect(submit()).toBe(true);
+    fixture.detectChanges();
+    expect(html.querySelector('mat-error')?.textContent).toContain(samples.board.commentRequired);
+    http.expectNone({ method: 'POST' });
+
+    const textarea = form.querySelector('textarea')!;
+    textarea.value = '  A little less gold in the glaze, please.  ';
+    textarea.dispatchEvent(new Event('input'));
+    expect(submit()).toBe(true);
+    const sent = http.expectOne({ method: 'POST', url: '/api/portal/boards/b-1/request-changes' });
+    expect(sent.request.body).toEqual({ comment: 'A little less gold in the glaze, please.' });
+    sent.flush({ ...board([]), status: 'changes_requested', clientComment: 'A little less gold in the glaze, please.' });
+    http.verify();
+  });
 });

@@ -1,6 +1,6 @@
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { AbstractControl, FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { AbstractControl, FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -118,7 +118,7 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
               </div>
             }
             @if (isAsking()) {
-              <form (ngSubmit)="requestChanges(b)" novalidate>
+              <form [formGroup]="answerForm" (ngSubmit)="requestChanges(b)" novalidate>
                 <mat-form-field class="wide">
                   <mat-label>{{ 'proposals.answers.changesLabel' | translate }}</mat-label>
                   <textarea matInput [formControl]="comment" rows="4" [maxlength]="commentMax"></textarea>
@@ -231,6 +231,8 @@ export class BoardPage {
   protected readonly message = signal<string | null>(null);
   protected readonly commentMax = SAMPLE_COMMENT_MAX;
   protected readonly comment = new FormControl('', { nonNullable: true, validators: [notBlank, Validators.maxLength(SAMPLE_COMMENT_MAX)] });
+  /** The form's group: its `ngSubmit` keeps the browser from posting the page (and losing the text) on Send. */
+  protected readonly answerForm = new FormGroup({ comment: this.comment });
 
   constructor() {
     effect(() => {
