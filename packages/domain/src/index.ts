@@ -148,6 +148,7 @@ export { averageJobSize, grossMargin, jobMoney, winRate } from './receivables/jo
 export type { Caution, CautionId, JurisdictionKey, SafetyFacts } from './safety/safety-cautions';
 export {
   OFFICE_ONLY_LINES,
+  crewLeadCaution,
   OUTSIDE_US_LINE,
   STANDING_LINE,
   jurisdictionKeys,

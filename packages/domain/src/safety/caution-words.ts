@@ -20,6 +20,15 @@ export const CAUTION_WORDS = {
     'Use a certified firm with a certified renovator assigned, and record delivery of the lead pamphlet before work starts.',
   'lead-safe-work.containAndClean': 'Contain the work area and clean and verify under the rule; avoid the practices it prohibits.',
   'lead-safe-work.keepRecords': 'Keep the records for three years and give the compliance record with the final invoice.',
+  /** the crew's reminder on a pre-1978 home whose planned work stays within minor repair (crewLeadCaution) */
+  'lead-safe-work.minorRepairBuiltBefore':
+    'Built before {{year}}: treat the painted surfaces as lead-based paint. The work as planned stays within the minor-repair limits (no more than 6 ft² in a room or 20 ft² outside).',
+  'lead-safe-work.minorRepairTreatedAs':
+    'Treated as built before {{year}} until the year is known: treat the painted surfaces as lead-based paint. The work as planned stays within the minor-repair limits (no more than 6 ft² in a room or 20 ft² outside).',
+  'lead-safe-work.stopBeyondMinor':
+    'If the work would disturb more painted surface than that, stop and call the office: lead-safe practices with a certified renovator then apply.',
+  'lead-safe-work.noProhibitedPractices':
+    'Never burn or torch paint, use a heat gun at 1100 °F or hotter, or power-sand or grind paint without a HEPA-exhaust shroud.',
 
   'scaffold-fall-protection.title': 'Scaffold fall protection',
   'scaffold-fall-protection.rule': '29 CFR 1926.451(g)(1)',

@@ -1,5 +1,6 @@
 import { expectInputError } from '../errors/expect-input-error';
-import { OUTSIDE_US_LINE, STANDING_LINE, type SafetyFacts, safetyCautions } from './safety-cautions';
+import { cautionLineOf } from './caution-words';
+import { OUTSIDE_US_LINE, STANDING_LINE, type SafetyFacts, crewLeadCaution, safetyCautions } from './safety-cautions';
 
 const QUIET: SafetyFacts = { lengthUnit: 'ft', disturbedPaint: [], workingLevel: 0, products: [], sandsPlaster: false };
 const ids = (facts: Partial<SafetyFacts>): string[] => safetyCautions({ ...QUIET, ...facts }).map((c) => c.id);
@@ -173,5 +174,20 @@ describe('safety cautions from job facts', () => {
       'disturbedPaint[0].area',
     );
     expectInputError(() => safetyCautions({ ...QUIET, workingLevel: Number.NaN }), 'workingLevel');
+  });
+});
+
+describe('the crew’s lead reminder within minor repair', () => {
+  it('names the 1978 line, the minor-repair limits and the prohibited practices, each line read back to its key', () => {
+    // 15 U.S.C. 2681(17) (before 1978); 40 CFR 745.83 (6 ft² a room, 20 ft² outside);
+    // 40 CFR 745.85(a)(3) (prohibited practices; from memory of the rule's text)
+    const known = crewLeadCaution(true);
+    expect(known.id).toBe('lead-safe-work');
+    expect(known.bullets[0]).toContain('Built before 1978');
+    expect(known.bullets[0]).toContain('6 ft² in a room or 20 ft² outside');
+    expect(known.bullets[2]).toContain('1100 °F');
+    expect(known.bullets.map(cautionLineOf)).toEqual(known.lines);
+    expect(crewLeadCaution(false).lines[0].key).toBe('lead-safe-work.minorRepairTreatedAs');
+    expect(crewLeadCaution(true, 'CA').jurisdiction).toContain(OUTSIDE_US_LINE);
   });
 });

@@ -102,27 +102,52 @@ export function jurisdictionLine(id: CautionId, firmCountry: string | undefined)
 
 const line = (key: CautionWordKey, params: Record<string, string> = {}): CautionLine => ({ key, params });
 
+/** A caution from its lines: the English words and the keys beside them, for a firm in `firmCountry`. */
+function cautionOf(id: CautionId, lines: CautionLine[], firmCountry: string | undefined): Caution {
+  const titleKey = `${id}.title` as CautionWordKey;
+  const ruleKey = `${id}.rule` as CautionWordKey;
+  return {
+    id,
+    title: CAUTION_WORDS[titleKey],
+    bullets: lines.map(cautionText),
+    rule: CAUTION_WORDS[ruleKey],
+    jurisdiction: jurisdictionLine(id, firmCountry),
+    standing: STANDING_LINE,
+    titleKey,
+    ruleKey,
+    lines,
+    jurisdictionKeys: jurisdictionKeys(id, firmCountry),
+    standingKey: 'standing',
+  };
+}
+
+/**
+ * The crew's lead reminder on a home treated as built before 1978 (`isYearKnown` false: the year is
+ * not recorded and paint is disturbed) whose planned work stays within minor repair, so the engine
+ * raised no lead-safe caution: treat the paint as lead-based, stop if the work grows past the
+ * limits, and never use the practices the rule prohibits. Limits: 40 CFR 745.83 (6 ft² a room,
+ * 20 ft² outside); prohibited practices: 40 CFR 745.85(a)(3) (open-flame burning or torching, heat
+ * guns at 1100 °F or above, high-speed sanding or grinding without HEPA exhaust control) — from
+ * memory of the rule's text, check it before relying on the figures.
+ */
+export function crewLeadCaution(isYearKnown: boolean, firmCountry?: string): Caution {
+  const year = String(LEAD_YEAR);
+  return cautionOf(
+    'lead-safe-work',
+    [
+      line(isYearKnown ? 'lead-safe-work.minorRepairBuiltBefore' : 'lead-safe-work.minorRepairTreatedAs', { year }),
+      line('lead-safe-work.stopBeyondMinor'),
+      line('lead-safe-work.noProhibitedPractices'),
+    ],
+    firmCountry,
+  );
+}
+
 /** Reminders drawn from job facts; English text, stable ids for the apps to translate. */
 export function safetyCautions(facts: SafetyFacts): Caution[] {
   const out: Caution[] = [];
   const unit = facts.lengthUnit;
-  const caution = (id: CautionId, lines: CautionLine[]): Caution => {
-    const titleKey = `${id}.title` as CautionWordKey;
-    const ruleKey = `${id}.rule` as CautionWordKey;
-    return {
-      id,
-      title: CAUTION_WORDS[titleKey],
-      bullets: lines.map(cautionText),
-      rule: CAUTION_WORDS[ruleKey],
-      jurisdiction: jurisdictionLine(id, facts.firmCountry),
-      standing: STANDING_LINE,
-      titleKey,
-      ruleKey,
-      lines,
-      jurisdictionKeys: jurisdictionKeys(id, facts.firmCountry),
-      standingKey: 'standing',
-    };
-  };
+  const caution = (id: CautionId, lines: CautionLine[]): Caution => cautionOf(id, lines, facts.firmCountry);
 
   if (facts.yearBuilt !== undefined) requireInteger(facts.yearBuilt, 'yearBuilt', 1000, 'year built');
   if (facts.yearBuilt !== undefined && facts.yearBuilt < LEAD_YEAR) {

@@ -1,7 +1,7 @@
 import type { JobPhotoView, JobSheet, SheetFinish, SheetProduct, SheetRoom, SheetSurface, WorkItemView } from '@layerbook/contracts';
 import { type PlannedSchedule, planDays } from '@layerbook/domain';
 import type { SheetSource } from './load-sheet';
-import { sheetCautions } from './sheet-cautions';
+import { sheetCautions, withCrewLead } from './sheet-cautions';
 
 /**
  * The crew's job sheet from what was sold: rooms and surfaces in the proposal's order with their
@@ -92,7 +92,7 @@ export function buildSheet(src: SheetSource, workItems: readonly WorkItemView[],
     finishes,
     products,
     dayPlan: schedule ? planDays(schedule) : [],
-    cautions: sheetCautions(src.result?.cautions ?? [], src.firm.country),
+    cautions: sheetCautions(withCrewLead(src.result?.cautions ?? [], src.result?.lead, src.firm.country), src.firm.country),
     workItems,
     photos,
     sourceLanguage: 'en',

@@ -22,7 +22,7 @@ export interface SheetSource {
   /** the unit the stored sizes are in (the proposal's) */
   readonly lengthUnit: 'ft' | 'm';
   /** the accepted option's stored result (only the parts the sheet reads are relied on) */
-  readonly result: Pick<EstimateResultJson, 'surfaces' | 'schedule' | 'cautions'> | null;
+  readonly result: Pick<EstimateResultJson, 'surfaces' | 'schedule' | 'cautions' | 'lead'> | null;
   readonly scope: ProposalSnapshot['scope'];
   readonly roomNames: ReadonlyMap<string, string>;
   readonly finishSystems: ReadonlyArray<{ readonly id: string; readonly name: string; readonly layers: readonly FinishLayer[] }>;
@@ -41,7 +41,7 @@ interface JobRow {
   country: string;
   length_unit: 'ft' | 'm' | null;
   scope: ProposalSnapshot['scope'] | null;
-  result: Pick<EstimateResultJson, 'surfaces' | 'schedule' | 'cautions'> | null;
+  result: Pick<EstimateResultJson, 'surfaces' | 'schedule' | 'cautions' | 'lead'> | null;
 }
 
 /** The product ids a layer uses: the product applied as is, or its recipe's components. */

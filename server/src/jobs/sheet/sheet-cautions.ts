@@ -6,9 +6,12 @@ import {
   OFFICE_ONLY_LINES,
   STANDING_LINE,
   cautionLineOf,
+  crewLeadCaution,
+  isTreatedAsTargetHousing,
   jurisdictionKeys,
   type JurisdictionKey,
   jurisdictionLine,
+  type LeadStatus,
 } from '@layerbook/domain';
 
 /** The jurisdiction sentences of a stored line as written then (a firm may since have moved), else as for the firm today. */
@@ -53,4 +56,19 @@ export function sheetCautions(stored: readonly StoredCaution[], firmCountry: str
       standingKey: 'standing',
     };
   });
+}
+
+/**
+ * The engine's cautions with the crew's lead reminder first where the home is treated as built
+ * before 1978 (`lead`, the accepted option's) and the engine raised no lead-safe caution because the
+ * planned work stays within minor repair: the proposal told the client about lead, and the crew are
+ * the ones who disturb the paint. Pure.
+ */
+export function withCrewLead(
+  stored: readonly StoredCaution[],
+  lead: LeadStatus | undefined,
+  firmCountry: string,
+): readonly StoredCaution[] {
+  if (lead === undefined || !isTreatedAsTargetHousing(lead) || stored.some((c) => c.id === 'lead-safe-work')) return stored;
+  return [crewLeadCaution(lead === 'target-housing', firmCountry), ...stored];
 }
