@@ -44,7 +44,7 @@ const asClient: Opener = (ctx, req, load) =>
  */
 function mountPdfRoutes(router: Router, ctx: AppContext, open: Opener): void {
   router.get('/invoices/:id/pdf', async (req, res) => {
-    const inv = await open(ctx, req, (tx, reader) => loadPrintableInvoice(tx, parse(invoiceParam, req.params).id, reader));
+    const inv = await open(ctx, req, (tx, reader) => loadPrintableInvoice(tx, parse(invoiceParam, req.params).id, reader, ctx.now()));
     const pdf = await renderInvoicePdf(inv, await logoPng(ctx.storage, ctx.logger, inv.logoKey));
     sendPdf(res, pdf, invoiceFilename(inv.number, inv.document.jobTitle));
   });

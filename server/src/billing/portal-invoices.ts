@@ -102,7 +102,7 @@ export async function getClientInvoice(
     [tx.tenantId, clientId, await firmToday(tx, now), id],
   );
   if (!rows[0]) throw notFound('invoice');
-  const inv = await loadPrintableInvoice(tx, id, { kind: 'client', clientId });
+  const inv = await loadPrintableInvoice(tx, id, { kind: 'client', clientId }, now);
   const note = (
     await tx.client.query<{ id: string; number_text: string; issued_on: string; amount: string }>(
       `select id, number_text, issued_on::text, amount::text from credit_notes where tenant_id = $1 and invoice_id = $2`,

@@ -1,5 +1,7 @@
 import type { BillingTerms, InvoiceDocument, InvoiceKind, InvoiceLine, InvoiceStatus, Language, ProgressTable } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
+import Decimal from 'decimal.js';
+import { localDate } from '../../firms/local-date';
 import { notFound } from '../../http/problem';
 import { invoiceDocument } from '../document';
 import { moneyOut } from '../money';
@@ -28,6 +30,8 @@ export interface PrintableInvoice {
   readonly amountCredited: string;
   /** total − paid − credited; 0 for a void invoice */
   readonly amountDue: string;
+  /** past its due date with money still due, on the firm's day the PDF is drawn (as the lists say "overdue") */
+  readonly isOverdue: boolean;
   readonly lines: readonly InvoiceLine[];
   readonly progress: ProgressTable | null;
   /** frozen at issue; for a draft, what it would print today */
@@ -84,10 +88,11 @@ interface InvoiceRow {
   billing_terms: BillingTerms | null;
   language: Language;
   country: string;
+  time_zone: string;
 }
 
 /** The invoice's client reads the PDF: their language, else the firm's, with the firm's country (joins on `i`). */
-const READER_SQL = `coalesce(rc.language, rf.language) as language, rf.country`;
+const READER_SQL = `coalesce(rc.language, rf.language) as language, rf.country, rf.time_zone`;
 const READER_JOINS = `join firms rf on rf.id = i.tenant_id left join clients rc on rc.tenant_id = i.tenant_id and rc.id = i.client_id`;
 
 /** The reader's filter as SQL after `where i.tenant_id = $1 and i.id = $2`, with its parameters from $3. */
@@ -120,7 +125,7 @@ async function logoKey(tx: TenantTx, fileId: string | null): Promise<string | nu
   return rows[0]?.storage_key ?? null;
 }
 
-export async function loadPrintableInvoice(tx: TenantTx, id: string, reader: Reader): Promise<PrintableInvoice> {
+export async function loadPrintableInvoice(tx: TenantTx, id: string, reader: Reader, now: Date): Promise<PrintableInvoice> {
   const filter = readerFilter(reader);
   const { rows } = await tx.client.query<InvoiceRow>(
     `select i.id, i.job_id, i.number_text, i.kind, i.status, i.issued_on::text, i.due_on::text, i.period_end::text, i.currency,
@@ -156,6 +161,11 @@ export async function loadPrintableInvoice(tx: TenantTx, id: string, reader: Rea
     amountPaid: money(r.amount_paid),
     amountCredited: money(r.amount_credited),
     amountDue: money(r.amount_due),
+    isOverdue:
+      (r.status === 'issued' || r.status === 'part_paid') &&
+      r.due_on !== null &&
+      r.due_on < localDate(r.time_zone, now) &&
+      new Decimal(r.amount_due).gt(0),
     lines: linesForReader(words, r.lines),
     // A draft is a preview: its default value line reads in the client's words before issue keeps the key.
     progress: progressForReader(words, r.status === 'draft' ? progressWithWords(r.progress) : r.progress),

@@ -48,7 +48,7 @@ export function renderInvoicePdf(inv: PrintableInvoice, logo: Buffer | null): Pr
   if (inv.issuedOn) facts.push([t('pdf.date'), f.date(inv.issuedOn)]);
   if (inv.dueOn) facts.push([t('pdf.invoice.due'), f.date(inv.dueOn)]);
   facts.push([t('pdf.invoice.terms'), d.termsText]);
-  if (!isDraft) facts.push([t('pdf.invoice.status'), t(`pdf.invoice.statuses.${inv.status}`)]);
+  if (!isDraft) facts.push([t('pdf.invoice.status'), t(`pdf.invoice.statuses.${inv.isOverdue ? 'overdue' : inv.status}`)]);
   documentHeading(doc, d, logo, { title: isDraft ? t('pdf.invoice.draftTitle') : t('pdf.invoice.title'), facts }, t);
   if (isDraft) draftMark(doc, mark);
 
@@ -59,8 +59,10 @@ export function renderInvoicePdf(inv: PrintableInvoice, logo: Buffer | null): Pr
   totalsSection(doc, inv, f, t);
 
   doc.moveDown(0.6);
-  if (inv.dueOn && inv.status !== 'void' && inv.status !== 'paid')
-    paragraph(doc, t('pdf.invoice.pleasePay', { amount: f.money(inv.amountDue), date: f.date(inv.dueOn) }), 'strong', COLOURS.ink, 10.5);
+  if (inv.dueOn && inv.status !== 'void' && inv.status !== 'paid') {
+    const pay = inv.isOverdue ? 'pdf.invoice.pleasePayOverdue' : 'pdf.invoice.pleasePay';
+    paragraph(doc, t(pay, { amount: f.money(inv.amountDue), date: f.date(inv.dueOn) }), 'strong', COLOURS.ink, 10.5);
+  }
   if (inv.status === 'void') paragraph(doc, t('pdf.invoice.void'), 'strong', COLOURS.ochre, 10.5);
   paragraph(doc, t('pdf.depositRule', { rule: d.depositCapName }), 'text', COLOURS.muted, 9);
   if (inv.notes) {

@@ -131,7 +131,7 @@ export async function loadPaymentReceipt(tx: TenantTx, id: string, reader: Reade
     reference: p.reference,
     reason: '',
     payment,
-    invoice: await loadPrintableInvoice(tx, p.invoice_id, reader),
+    invoice: await loadPrintableInvoice(tx, p.invoice_id, reader, now),
     printedOn: localDate(p.time_zone, now),
   };
 }
@@ -168,7 +168,7 @@ export async function loadRefundReceipt(tx: TenantTx, id: string, reader: Reader
     reference: r.reference,
     reason: r.reason,
     payment: toReceiptPayment(p),
-    invoice: await loadPrintableInvoice(tx, p.invoice_id, reader),
+    invoice: await loadPrintableInvoice(tx, p.invoice_id, reader, now),
     printedOn: localDate(p.time_zone, now),
   };
 }

@@ -70,7 +70,7 @@ describe('receipt PDFs', () => {
       // 250.00 − (100.00 − 30.00) = 180.00 due when the transfer came: 180.00 applied, 200.00 − 180.00 = 20.00 kept as credit
       `Applied to INV-0001 ${usd('180.00')}`,
       `Kept as credit for Edwina Marl ${usd('20.00')}`,
-      `Still due on INV-0001 on December 20, 2026 ${usd('0.00')}`,
+      `Still due on INV-0001 as of December 20, 2026 ${usd('0.00')}`,
     ]) {
       expect(text).toContain(words);
     }
