@@ -14,6 +14,15 @@ export const CHANGE_ORDER_STATUS_LABELS: Readonly<Record<ChangeOrderStatus, stri
   declined: 'Declined',
 };
 
+/** Why a lump-sum change order carries no tax: the firm taxes the materials line only (a lump sum has none), or adds no tax. */
+export type ChangeOrderTaxNote = 'materialsOnly' | 'noTax';
+
+/** The office's words for each (the portal says them in the client's language). */
+export const CHANGE_ORDER_TAX_NOTES: Readonly<Record<ChangeOrderTaxNote, string>> = {
+  materialsOnly: 'No tax: the firm charges tax on the materials line only, and a lump sum has no materials line.',
+  noTax: 'No tax: the firm adds no sales tax to its prices.',
+};
+
 export type ChangeOrderPricing =
   /** `price` before tax, negative to deduct; tax by the firm's mode */
   | { readonly kind: 'lumpSum'; readonly price: string }
@@ -67,8 +76,8 @@ export interface ChangeOrderView extends ChangeOrderSummary {
   /** the contract sum before and after approval, for the reader */
   readonly contractSumBefore: string;
   readonly contractSumAfter: string;
-  /** why a lump sum carries no tax under the firm's tax mode (materials only, or none); null otherwise */
-  readonly taxNote: string | null;
+  /** why a lump sum carries no tax under the firm's tax mode (CHANGE_ORDER_TAX_NOTES); null otherwise */
+  readonly taxNote: ChangeOrderTaxNote | null;
 }
 
 /** POST /api/portal/change-orders/:id/decision */

@@ -69,7 +69,7 @@ describe('change orders for the office', () => {
       .send({ ...estimating, tax: { mode: 'materials', ratePercent: 8.25 } });
     const untaxed = await addChangeOrder(f, lump('Extra coat', '300.00'));
     expect(untaxed).toMatchObject({ price: '300.00', tax: '0.00', amount: '300.00' });
-    expect(untaxed.taxNote).toBe('No tax: the firm charges tax on the materials line only, and a lump sum has no materials line.');
+    expect(untaxed.taxNote).toBe('materialsOnly');
   });
 
   it('prices added surfaces with the engine: the same figure the engine gives for those surfaces', async () => {

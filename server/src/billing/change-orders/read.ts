@@ -1,4 +1,4 @@
-import type { ChangeOrderStatus, ChangeOrderSummary, ChangeOrderView, ItemList } from '@layerbook/contracts';
+import type { ChangeOrderStatus, ChangeOrderSummary, ChangeOrderTaxNote, ChangeOrderView, ItemList } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { minorUnitDigits } from '@layerbook/domain';
 import Decimal from 'decimal.js';
@@ -87,12 +87,10 @@ export function toView(r: ChangeOrderRow): ChangeOrderView {
   };
 }
 
-function taxNote(r: ChangeOrderRow): string | null {
+function taxNote(r: ChangeOrderRow): ChangeOrderTaxNote | null {
   const mode = r.detail.taxMode;
   if (r.pricing !== 'lumpSum' || !mode || mode === 'wholeJob') return null;
-  return mode === 'materials'
-    ? 'No tax: the firm charges tax on the materials line only, and a lump sum has no materials line.'
-    : 'No tax: the firm adds no sales tax to its prices.';
+  return mode === 'materials' ? 'materialsOnly' : 'noTax';
 }
 
 /** The job's change orders by number (404 for a job this firm does not have). */

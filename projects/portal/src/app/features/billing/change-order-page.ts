@@ -83,7 +83,7 @@ import { LbDatePipe, LbNumberPipe, formatAmount } from '../../../../../shared/i1
         <dd>{{ money(co.contractSumBefore, co.currency) }} → {{ money(co.contractSumAfter, co.currency) }}</dd>
       </dl>
       @if (co.taxNote) {
-        <p class="meta">{{ co.taxNote }}</p>
+        <p class="meta">{{ 'billing.changeOrder.taxNotes.' + co.taxNote | translate }}</p>
       }
       <p>{{ sumWords() }}</p>
 

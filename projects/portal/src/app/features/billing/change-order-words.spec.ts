@@ -17,6 +17,8 @@ describe('contractChangeWords', () => {
       'Your contract sum went from $10,000.00 to $9,783.45 (down $216.55, tax included).',
     ],
     [co({ status: 'declined' }), 'Your contract sum would have gone from $10,000.00 to $11,082.50 (up $1,082.50, tax included).'],
+    // a lump sum the firm's tax mode leaves untaxed: its note says why, so no "tax included" here
+    [co({ taxNote: 'noTax' }), 'Your contract sum goes from $10,000.00 to $11,082.50 once you approve (up $1,082.50).'],
   ])('says the change before and after: %#', (input, words) => {
     expect(contractChangeWords(input, 'en-US', say)).toBe(words);
   });

@@ -10,13 +10,16 @@ export type BillingSay = (key: string, params?: Readonly<Record<string, unknown>
  * and are formatted by the domain's formatMoney, never through a float.
  */
 export function contractChangeWords(
-  co: Pick<PortalChangeOrder, 'amount' | 'currency' | 'contractSumBefore' | 'contractSumAfter' | 'status'>,
+  co: Pick<PortalChangeOrder, 'amount' | 'currency' | 'contractSumBefore' | 'contractSumAfter' | 'status'> &
+    Partial<Pick<PortalChangeOrder, 'taxNote'>>,
   locale: string,
   say: BillingSay,
 ): string {
   const money = (amount: string) => formatMoney(amount, co.currency, locale);
   const isDown = co.amount.trim().startsWith('-');
-  const by = say(isDown ? 'changeOrder.down' : 'changeOrder.up', { amount: money(co.amount.trim().replace(/^-/, '')) });
+  // A lump sum the firm's tax mode leaves untaxed says so in its own note: no "tax included" here.
+  const direction = `${isDown ? 'changeOrder.down' : 'changeOrder.up'}${co.taxNote ? 'Untaxed' : ''}`;
+  const by = say(direction, { amount: money(co.amount.trim().replace(/^-/, '')) });
   const sentence =
     co.status === 'approved'
       ? 'changeOrder.sumWent'

@@ -5,7 +5,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import type { ChangeOrderSummary, ChangeOrderView, ItemList } from '@layerbook/contracts/types';
+import { CHANGE_ORDER_TAX_NOTES, type ChangeOrderSummary, type ChangeOrderView, type ItemList } from '@layerbook/contracts/types';
 import { firstValueFrom } from 'rxjs';
 import { problemMessage } from '../../../core/errors/problem';
 import { loadMessage } from '../../../shared/forms/load-message';
@@ -161,7 +161,8 @@ export class ChangeOrders {
   protected saved(view: ChangeOrderView, wasNew: boolean): void {
     this.editing.set(null);
     const what = `Change order #${view.number} ${wasNew ? 'added as a draft' : 'saved'}: ${signedMoney(view.amount, view.currency, this.locale)}.`;
-    this.notice.set([what, view.taxNote, 'Send it to the client when it is ready.'].filter(Boolean).join(' '));
+    const untaxed = view.taxNote ? CHANGE_ORDER_TAX_NOTES[view.taxNote] : null;
+    this.notice.set([what, untaxed, 'Send it to the client when it is ready.'].filter(Boolean).join(' '));
     this.list.reload();
     this.changed.emit(view);
   }
