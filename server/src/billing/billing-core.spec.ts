@@ -175,6 +175,25 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     const badIssue = await f.send('post', `/api/invoices/${stageId}/issue`, { send: 'yes', issuedOn: '2026-13-01' });
     expect(badIssue.status).toBe(400);
     expect(badIssue.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['issuedOn', 'send']);
+    // Dated past tomorrow, or over a year before billing started on the job (the test's today, December 1): 400 naming the date.
+    for (const issuedOn of ['2026-12-03', '2025-11-30']) {
+      const misdated = await f.send('post', `/api/invoices/${stageId}/issue`, { send: false, issuedOn });
+      expect([issuedOn, misdated.status, misdated.body.errors?.[0]?.field]).toEqual([issuedOn, 400, 'issuedOn']);
+    }
+    // A draft that bills 0.00 is refused: numbered, it would read paid at once and could never be voided.
+    const setTotals = (subtotal: string, total: string) =>
+      withTenant(t.ctx.pool, f.firmId, (tx) =>
+        tx.client.query(`update invoices set subtotal = $3, total = $4 where tenant_id = $1 and id = $2`, [
+          tx.tenantId,
+          stageId,
+          subtotal,
+          total,
+        ]),
+      );
+    const kept = ((await f.agent.get(`/api/invoices/${stageId}`)).body as InvoiceDetail).total;
+    await setTotals('0', '0');
+    expect((await f.send('post', `/api/invoices/${stageId}/issue`, { send: false })).status).toBe(409);
+    await setTotals(kept, kept);
     expect(await counter(f, 'invoice')).toBe(2);
 
     const datedId = await f.lineDraft(dated.id);

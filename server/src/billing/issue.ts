@@ -1,11 +1,11 @@
 import type { BillingSettings, BillingTrigger, InvoiceDetail, InvoiceIssue, InvoiceLine, ProgressTable } from '@layerbook/contracts';
 import { commitThenRead, readAllInOneTrip, runInOneTrip, type SqlQuery, type TenantTx } from '@layerbook/db';
-import { dueDate } from '@layerbook/domain';
+import { addDays, dueDate } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Config } from '../config';
 import type { Actor } from '../http/actor';
-import { conflict, notFound } from '../http/problem';
+import { badRequest, conflict, notFound } from '../http/problem';
 import type { JobQueue } from '../queue/job-queue';
 import { assertBillingStarted, type BillingJob, billedBeforeReadOfInvoice, firmToday, jobOfInvoiceRead, taxInside } from './billing-job';
 import { documentFrom, documentReadOfInvoice } from './document';
@@ -92,6 +92,11 @@ async function prepareIssue(tx: TenantTx, actor: Actor, id: string, body: Invoic
   if (inv.status !== 'draft') throw conflict('This invoice is already issued.');
   assertBillingStarted(job);
   const subtotal = new Decimal(inv.subtotal);
+  // A deposit, stage or final payment of nothing would read as paid at once and could never be voided
+  // (nothing to refund); a progress invoice for a period with nothing due is a record of the period, kept.
+  if (subtotal.isZero() && inv.kind !== 'progress' && inv.kind !== 'retainage') {
+    throw conflict('This draft bills 0.00: there is nothing to issue. Change its line or delete the draft.');
+  }
   // A release drafted before its application was voided would bill retainage no longer held.
   if (inv.kind === 'retainage' && subtotal.greaterThan(await retainageHeld(tx, job.id, inv.id))) {
     throw conflict('Less retainage is held now than this release bills: delete it and draft the release again.');
@@ -104,7 +109,7 @@ async function prepareIssue(tx: TenantTx, actor: Actor, id: string, body: Invoic
   }
   const tax = taxInside(job, total, billedRows[0] as { billed: string; tax: string });
   const { settings } = billingSettingsOf(settingsRows as Array<{ settings: BillingSettings }>);
-  const issuedOn = body.issuedOn ?? firmToday(job, now);
+  const issuedOn = issueDate(job, body.issuedOn, now);
   const dueOn = dueDate(issuedOn, job.billing_terms.terms);
   const document = documentFrom(documentRows[0], job.billing_terms, settings);
   // The key of every label the system wrote, so each client reads the lines in their language (a
@@ -161,4 +166,24 @@ async function sendIssued(tx: TenantTx, deps: IssueDeps, actor: Actor, id: strin
   await enqueueInvoiceMail(tx, deps.queue, deps.config, id, { kind: 'issued' });
   await tx.client.query(`update invoices set sent_at = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, id, now]);
   await recordAudit(tx, { actorUserId: actor.userId, actorKind: actor.kind, action: 'invoice.sent', entity: 'invoice', entityId: id });
+}
+
+/**
+ * The invoice's date: the firm's today unless the office gives one, which may go back a year before
+ * billing started on the job (paperwork caught up, a job brought in from before) but not past
+ * tomorrow (as work marks): an invoice dated ahead would take its number out of date order.
+ */
+function issueDate(job: BillingJob, asked: string | undefined, now: Date): string {
+  const today = firmToday(job, now);
+  if (asked === undefined) return today;
+  const latest = addDays(today, 1);
+  const started = job.billing_started_at ? firmToday(job, job.billing_started_at) : today;
+  const earliest = `${String(Number(started.slice(0, 4)) - 1).padStart(4, '0')}-${started.slice(5) === '02-29' ? '02-28' : started.slice(5)}`;
+  if (asked > latest) throw badRequest([{ field: 'issuedOn', message: `The invoice date cannot be later than ${latest}.` }]);
+  if (asked < earliest) {
+    throw badRequest([
+      { field: 'issuedOn', message: `The invoice date cannot be earlier than ${earliest}, a year before billing started on this job.` },
+    ]);
+  }
+  return asked;
 }
