@@ -76,6 +76,8 @@ import { TranslatePipe } from '@ngx-translate/core';
     </section>
   `,
   styles: `
+    @use 'tables';
+
     .switch {
       display: flex;
       gap: 1rem;
@@ -90,35 +92,8 @@ import { TranslatePipe } from '@ngx-translate/core';
     h1 {
       margin: 0;
     }
-    .table-wrap {
-      overflow-x: auto;
-      border: 1px solid var(--mat-sys-outline-variant);
-      border-radius: 12px;
-      background: var(--mat-sys-surface-container-lowest);
-    }
-    table {
-      width: 100%;
-      min-width: 44rem;
-      border-collapse: collapse;
-    }
-    th,
-    td {
-      padding: 0.6rem 1rem;
-      text-align: left;
-      border-bottom: 1px solid var(--mat-sys-outline-variant);
-    }
-    thead th {
-      font-size: 0.9rem;
-      color: var(--mat-sys-on-surface-variant);
-      background: var(--mat-sys-surface-container-low);
-    }
-    tbody tr:last-child > * {
-      border-bottom: 0;
-    }
-    .num {
-      text-align: right;
-      font-variant-numeric: tabular-nums;
-    }
+    @include tables.data-table($min-width: 44rem, $align: middle);
+
     .status {
       display: inline-flex;
       align-items: center;
