@@ -120,6 +120,27 @@ describe('change orders in the portal', () => {
     expect(sum(grown.lines.map((l) => l.amount))).toBe(grown.contract_sum);
   });
 
+  it('is not sent when the client could not approve it: the sum to zero or below, or a deduction with every payment billed', async () => {
+    const f = await acceptedJob(t, 'Unsendable Plaster');
+    const whole = await jobMoney(t, f);
+    const send = (id: string) => f.agent.post(`/api/change-orders/${id}/send`).set('x-csrf-token', f.csrf()).send({});
+    const tooMuch = await addChangeOrder(f, lump('Leave it all out', `-${whole.contract_sum}`));
+    const refused = await send(tooMuch.id);
+    expect(refused.status).toBe(409);
+    expect(refused.body.detail).toContain('zero or below');
+    await markBilled(t, f, [1, 2, 3]);
+    const late = await addChangeOrder(f, lump('Leave out the border', '-100.00'));
+    expect((await send(late.id)).body.detail).toContain('already billed');
+    // neither went to the client: both are still drafts
+    const statuses = await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query<{ status: string }>(`select status from change_orders where tenant_id = $1 and job_id = $2 order by number`, [
+        tx.tenantId,
+        f.jobId,
+      ]),
+    );
+    expect(statuses.rows.map((r) => r.status)).toEqual(['draft', 'draft']);
+  });
+
   it('a decline changes nothing but the change order; a draft is not the client’s to read', async () => {
     const f = await acceptedJob(t, 'Decline Plaster');
     const draft = await addChangeOrder(f, lump('Gilded cornice', '900.00'));

@@ -10,6 +10,7 @@ import { conflict, notFound } from '../../http/problem';
 import { enqueueMail } from '../../mail/outbox';
 import { ensurePortalAccount } from '../../proposals/client-portal-account';
 import { changeOrderSentMail } from './change-order-mail';
+import { whyNotApprovable } from './decide';
 import { priceChangeOrder, type PricingJob } from './pricing';
 import { loadChangeOrder, toView } from './read';
 import { localeOf } from '../../i18n/catalog';
@@ -151,6 +152,9 @@ export async function updateChangeOrder(
 export async function sendChangeOrder(tx: TenantTx, ctx: AppContext, actor: Actor, id: string): Promise<ChangeOrderView> {
   const row = await loadChangeOrder(tx, id, true);
   if (row.status !== 'draft') throw conflict(`Change order #${row.number} was already sent.`);
+  const blocked = await whyNotApprovable(tx, row);
+  if (blocked)
+    throw conflict(`Not sent: the client could not approve change order #${row.number}, as ${blocked}. Change its amount first.`);
   const job = await loadJob(tx, row.job_id, false);
   const client = (
     await tx.client.query<{ id: string; name: string; email: string }>(

@@ -142,17 +142,57 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
 
 const lineLabel = (row: ChangeOrderRow) => `Change order #${row.number}: ${row.title}`;
 
+const LINES_SQL = `select id, position, label, role, trigger, amount::text as amount, trim_scale(percent)::text as percent, status
+                     from payment_schedule_lines where tenant_id = $1 and job_id = $2 order by position`;
+
+const toPaymentLine = (l: LineRow): PaymentLine => ({
+  id: l.id,
+  label: l.label,
+  role: l.role,
+  trigger: l.trigger,
+  amount: new Decimal(l.amount),
+  isBilled: isBilled(l),
+});
+
+/**
+ * Why the client could not approve this change order as the job stands now — the checks approval
+ * makes (applyApproval: the new contract sum, and the unbilled payments it is spread over), in the
+ * office's words — or null when they could. Sending checks it, so a client is never asked to approve
+ * what would be refused.
+ */
+export async function whyNotApprovable(tx: TenantTx, row: ChangeOrderRow): Promise<string | null> {
+  const job = (
+    await tx.client.query<Pick<JobMoneyRow, 'contract_sum' | 'currency' | 'billing_method'>>(
+      `select contract_sum::text as contract_sum, currency, billing_method from jobs where tenant_id = $1 and id = $2`,
+      [tx.tenantId, row.job_id],
+    )
+  ).rows[0];
+  const after = new Decimal(job.contract_sum).plus(row.amount);
+  if (after.lessThanOrEqualTo(0)) return 'it would take the contract sum to zero or below';
+  if (after.greaterThanOrEqualTo(MONEY_COLUMN_LIMIT)) return 'it would take the contract sum past what can be recorded';
+  if (job.billing_method !== 'schedule') return null;
+  const { rows: lines } = await tx.client.query<LineRow>(LINES_SQL, [tx.tenantId, row.job_id]);
+  if (lines.length > 0 && lines.every(isBilled)) {
+    return new Decimal(row.amount).isNegative()
+      ? 'every payment of this job is already billed, so a deduction cannot be spread (void or credit instead)'
+      : null;
+  }
+  try {
+    respreadSchedule(lines.map(toPaymentLine), after, job.currency);
+    return null;
+  } catch (error) {
+    if (error instanceof DomainInputError) return `it cannot be spread over the payments: ${error.message}`;
+    throw error;
+  }
+}
+
 /**
  * Spreads the new contract sum over the unbilled lines in proportion (billed lines never move);
  * when every line is billed, the change order becomes its own stage payment at the walkthrough,
  * placed before the final line so the final payment stays last.
  */
 async function respreadLines(tx: TenantTx, row: ChangeOrderRow, job: JobMoneyRow, after: Decimal, now: Date): Promise<void> {
-  const { rows: lines } = await tx.client.query<LineRow>(
-    `select id, position, label, role, trigger, amount::text as amount, trim_scale(percent)::text as percent, status from payment_schedule_lines
-      where tenant_id = $1 and job_id = $2 order by position for update`,
-    [tx.tenantId, row.job_id],
-  );
+  const { rows: lines } = await tx.client.query<LineRow>(`${LINES_SQL} for update`, [tx.tenantId, row.job_id]);
   const digits = minorUnitDigits(job.currency);
   if (lines.length > 0 && lines.every(isBilled)) {
     if (new Decimal(row.amount).isNegative())
@@ -173,18 +213,7 @@ async function respreadLines(tx: TenantTx, row: ChangeOrderRow, job: JobMoneyRow
   }
   let spread: PaymentLine[];
   try {
-    spread = respreadSchedule(
-      lines.map((l) => ({
-        id: l.id,
-        label: l.label,
-        role: l.role,
-        trigger: l.trigger,
-        amount: new Decimal(l.amount),
-        isBilled: isBilled(l),
-      })),
-      after,
-      job.currency,
-    );
+    spread = respreadSchedule(lines.map(toPaymentLine), after, job.currency);
   } catch (error) {
     if (error instanceof DomainInputError) throw conflict(`This change cannot be spread over the payments: ${error.message}`);
     throw error;
