@@ -129,6 +129,10 @@ test('the office bills the deposit, marks the first layers done and issues the d
   const money = page.getByRole('region', { name: 'Money' });
   await expect(money).toContainText('INV-0002');
   await money.screenshot({ path: 'e2e/.artifacts/billing-today.png' });
+  // Loaded afresh (server-rendered, its panels woken by a tap), one tap on a money link goes there.
+  await openLive(page, '/today');
+  await money.getByRole('link', { name: 'All overdue invoices' }).click();
+  await expect(page).toHaveURL(/\/billing\?filter=overdue$/);
   await openLive(page, '/billing');
   const list = page.getByRole('region', { name: 'Invoices' });
   await expect(list.getByRole('link', { name: 'INV-0001' })).toBeVisible();

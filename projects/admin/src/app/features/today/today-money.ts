@@ -1,4 +1,4 @@
-import { httpResource } from '@angular/common/http';
+import type { HttpResourceRef } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
@@ -29,9 +29,19 @@ export class TodayMoney {
   /** the firm's today ("2026-12-02"), to count days overdue; null until Today knows it */
   readonly localDate = input<string | null>(null);
 
-  protected readonly money = httpResource<BillingToday>(() => '/api/billing/today');
-  protected readonly view = computed(() => (this.money.hasValue() ? this.money.value() : null));
-  protected readonly message = loadMessage(this.money);
+  /**
+   * Today's money as Today loads it (`/api/billing/today`). Today asks for it while the page starts,
+   * not this panel: the panel wakes later (hydrated on a tap), when the server's answer in the page is
+   * no longer used — a request of its own then redrew the panel under the tap and the first tap on a
+   * link did nothing.
+   */
+  readonly money = input.required<HttpResourceRef<BillingToday | undefined>>();
+  protected readonly loading = computed(() => this.money().isLoading());
+  protected readonly view = computed(() => {
+    const money = this.money();
+    return money.hasValue() ? money.value() : null;
+  });
+  protected readonly message = loadMessage({ error: () => this.money().error() });
   protected readonly overdueWords = overdueWords;
   private readonly translate = inject(TranslateService);
   private readonly language = inject(Language);

@@ -3,7 +3,7 @@ import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/c
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { STAGE_LABELS, type TodayView } from '@layerbook/contracts/types';
+import { type BillingToday, STAGE_LABELS, type TodayView } from '@layerbook/contracts/types';
 import { Session } from '../../core/auth/session';
 import { loadMessage } from '../../shared/forms/load-message';
 import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
@@ -27,6 +27,8 @@ export class Today {
   /** Crew never see money figures (the pipeline, Today's money), and the server refuses them those views anyway. */
   protected readonly seesInquiries = inject(Session).hasRole('office');
   protected readonly summary = httpResource<TodayView>(() => (this.seesInquiries ? '/api/inquiries/today' : undefined));
+  /** The money panel's (TodayMoney): asked for here, while the page starts, so the server's answer in the page serves it. */
+  protected readonly money = httpResource<BillingToday>(() => (this.seesInquiries ? '/api/billing/today' : undefined));
   protected readonly view = computed(() => (this.summary.hasValue() ? this.summary.value() : null));
   protected readonly message = loadMessage(this.summary);
   protected readonly stageLabels = STAGE_LABELS;
