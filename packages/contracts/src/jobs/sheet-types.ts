@@ -138,6 +138,18 @@ export interface SheetCaution {
   readonly standingKey: 'standing';
 }
 
+/** An approved change order as the crew reads it: what changes in the work, never its price. */
+export interface SheetChange {
+  readonly number: number;
+  readonly title: string;
+  readonly description: string;
+  /** the firm's day the client approved it */
+  readonly approvedOn: string;
+  /** priced from surfaces and a finish: which finish on which surfaces, with the measured quantity */
+  readonly finishName: string | null;
+  readonly surfaces: ReadonlyArray<{ readonly room: string; readonly surface: string; readonly quantity: string }>;
+}
+
 export interface JobSheet {
   readonly id: string;
   readonly title: string;
@@ -158,6 +170,8 @@ export interface JobSheet {
   /** the dated day plan with drying waits */
   readonly dayPlan: readonly PlanDay[];
   readonly cautions: readonly SheetCaution[];
+  /** change orders the client approved, oldest first: extra or less work the crew must know of (no money) */
+  readonly changes: readonly SheetChange[];
   readonly workItems: readonly WorkItemView[];
   readonly photos: readonly JobPhotoView[];
   /** the language the sheet's English text was written in (always 'en'); the apps translate by id */

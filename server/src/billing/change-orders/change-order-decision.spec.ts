@@ -120,6 +120,29 @@ describe('change orders in the portal', () => {
     expect(sum(grown.lines.map((l) => l.amount))).toBe(grown.contract_sum);
   });
 
+  it('an approved change reaches the crew’s job sheet, without its price; a sent one does not yet', async () => {
+    const f = await acceptedJob(t, 'Sheet Change Plaster');
+    const made = await sendChangeOrder(
+      f,
+      (await addChangeOrder(f, { ...lump('Venetian niche', '1000.00'), description: 'Polished lime in the landing niche.' })).id,
+    );
+    const sheet = async () => (await f.agent.get(`/api/jobs/${f.jobId}/sheet`)).body as { changes: unknown[] };
+    expect((await sheet()).changes).toEqual([]);
+    await f.client.agent.post(`/api/portal/change-orders/${made.id}/decision`).set('x-csrf-token', f.client.csrf()).send(approve);
+    const read = await sheet();
+    expect(read.changes).toEqual([
+      {
+        number: 1,
+        title: 'Venetian niche',
+        description: 'Polished lime in the landing niche.',
+        approvedOn: '2026-12-01',
+        finishName: null,
+        surfaces: [],
+      },
+    ]);
+    expect(JSON.stringify(read.changes)).not.toMatch(/1000|1082/);
+  });
+
   it('is not sent when the client could not approve it: the sum to zero or below, or a deduction with every payment billed', async () => {
     const f = await acceptedJob(t, 'Unsendable Plaster');
     const whole = await jobMoney(t, f);

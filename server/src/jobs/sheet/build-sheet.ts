@@ -6,7 +6,7 @@ import { sheetCautions, withCrewLead } from './sheet-cautions';
 /**
  * The crew's job sheet from what was sold: rooms and surfaces in the proposal's order with their
  * measured sizes, each surface's layers with their work item and material need, the finishes' layers
- * in order, the products with their hazard flags, the dated day plan, and the cautions. The source
+ * in order, the products with their hazard flags, the dated day plan, the cautions and the approved change orders. The source
  * holds no money, and nothing here adds any. Pure.
  */
 export function buildSheet(src: SheetSource, workItems: readonly WorkItemView[], photos: readonly JobPhotoView[]): JobSheet {
@@ -93,6 +93,7 @@ export function buildSheet(src: SheetSource, workItems: readonly WorkItemView[],
     products,
     dayPlan: schedule ? planDays(schedule) : [],
     cautions: sheetCautions(withCrewLead(src.result?.cautions ?? [], src.result?.lead, src.firm.country), src.firm.country),
+    changes: src.changes,
     workItems,
     photos,
     sourceLanguage: 'en',

@@ -1,4 +1,4 @@
-import type { JobStatus, ProposalSnapshot } from '@layerbook/contracts';
+import type { JobStatus, ProposalSnapshot, SheetChange } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import type { EstimateResultJson, FinishLayer, Product } from '@layerbook/domain';
 import { notFound } from '../../http/problem';
@@ -27,6 +27,8 @@ export interface SheetSource {
   readonly roomNames: ReadonlyMap<string, string>;
   readonly finishSystems: ReadonlyArray<{ readonly id: string; readonly name: string; readonly layers: readonly FinishLayer[] }>;
   readonly products: ReadonlyArray<Pick<Product, 'id' | 'name' | 'unit' | 'hazards'>>;
+  /** the change orders the client approved, by number (no price is selected) */
+  readonly changes: readonly SheetChange[];
 }
 
 interface JobRow {
@@ -80,6 +82,19 @@ export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<Shee
     `select id, name, unit, hazards from products where tenant_id = $1 and id::text = any($2::text[]) order by name, id`,
     [tx.tenantId, [...productIds]],
   );
+  const { rows: changes } = await tx.client.query<{
+    number: number;
+    title: string;
+    description: string;
+    approved_on: string;
+    engine: { finishName: string; surfaces: SheetChange['surfaces'] } | null;
+  }>(
+    `select co.number, co.title, co.description, (co.decided_at at time zone f.time_zone)::date::text as approved_on,
+            co.detail->'engine' as engine
+       from change_orders co join firms f on f.id = co.tenant_id
+      where co.tenant_id = $1 and co.job_id = $2 and co.status = 'approved' order by co.number`,
+    [tx.tenantId, jobId],
+  );
   const roomIds = [...new Set(surfaces.map((s) => s.roomId))];
   const { rows: rooms } = await tx.client.query<{ id: string; name: string }>(
     `select id, name from rooms where tenant_id = $1 and id::text = any($2::text[])`,
@@ -102,5 +117,13 @@ export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<Shee
     roomNames: new Map(rooms.map((room) => [room.id, room.name])),
     finishSystems,
     products: products.map((p) => ({ id: p.id, name: p.name, unit: p.unit, hazards: p.hazards ?? {} })),
+    changes: changes.map((c) => ({
+      number: c.number,
+      title: c.title,
+      description: c.description,
+      approvedOn: c.approved_on,
+      finishName: c.engine?.finishName ?? null,
+      surfaces: (c.engine?.surfaces ?? []).map((s) => ({ room: s.room, surface: s.surface, quantity: s.quantity })),
+    })),
   };
 }

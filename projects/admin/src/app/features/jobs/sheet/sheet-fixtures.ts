@@ -145,6 +145,7 @@ export const sheet: JobSheet = {
       waits: [{ key: 't-1', label: 'Dining room – Walls: Lime base coat', untilDate: '2026-12-10', untilHour: 9 }],
     },
   ],
+  changes: [],
   cautions: [limeCaution, flammableCaution],
   workItems: [],
   photos: [],

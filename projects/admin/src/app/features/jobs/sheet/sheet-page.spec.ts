@@ -2,7 +2,7 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
-import type { JobProgressView } from '@layerbook/contracts/types';
+import type { JobProgressView, JobSheet } from '@layerbook/contracts/types';
 import { provideRouter } from '@angular/router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { Language } from '../../../../../../shared/i18n/language';
@@ -37,7 +37,7 @@ class FakeMarks implements SheetMarks {
   }
 }
 
-async function render(language: 'en' | 'es' = 'en') {
+async function render(language: 'en' | 'es' = 'en', answer: JobSheet = sheet) {
   const marks = new FakeMarks();
   TestBed.configureTestingModule({
     providers: [
@@ -53,7 +53,7 @@ async function render(language: 'en' | 'es' = 'en') {
   const fixture = TestBed.createComponent(SheetPage);
   fixture.componentRef.setInput('id', 'job-1');
   fixture.detectChanges();
-  http.expectOne('/api/jobs/job-1/sheet').flush(sheet);
+  http.expectOne('/api/jobs/job-1/sheet').flush(answer);
   await fixture.whenStable();
   const host = fixture.nativeElement as HTMLElement;
   const text = () => (host.textContent ?? '').replace(/\s+/g, ' ');
@@ -86,6 +86,28 @@ describe('SheetPage', () => {
     expect(text()).toContain("Follow local codes, the product's safety data sheet and licensed or qualified practice.");
     expect(text()).toContain('Flammable: flash point 40 °C (104 °F)');
     expect(text()).toContain('Flammable: Oil glazing medium (category 3, flash point 40 °C).');
+  });
+
+  it('shows the changes the client approved, without their price, and no such section when there are none', async () => {
+    expect((await render()).text()).not.toContain('Changes the client approved');
+    TestBed.resetTestingModule();
+    const changes: JobSheet['changes'] = [
+      {
+        number: 1,
+        title: 'Venetian niche',
+        description: 'Polished lime in the landing niche.',
+        approvedOn: '2026-12-01',
+        finishName: 'Polished lime',
+        surfaces: [{ room: 'Landing', surface: 'Niche', quantity: '12 ft²' }],
+      },
+    ];
+    const { text } = await render('en', { ...sheet, changes });
+    expect(text()).toContain('Changes the client approved');
+    expect(text()).toContain('Change 1: Venetian niche');
+    expect(text()).toContain('Approved Dec 1, 2026');
+    expect(text()).toContain('Polished lime on:');
+    expect(text()).toContain('Landing · Niche: 12 ft²');
+    expect(text()).not.toMatch(MONEY);
   });
 
   it('shows no money anywhere on the sheet', async () => {

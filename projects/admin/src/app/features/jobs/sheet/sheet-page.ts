@@ -9,6 +9,7 @@ import { Language } from '../../../../../../shared/i18n/language';
 import { problemMessage } from '../../../core/errors/problem';
 import { FormAlert } from '../../../shared/ui/form-alert';
 import { formatDay } from './sheet-format';
+import { SheetChanges } from './sheet-changes';
 import { SheetFinishes } from './sheet-finishes';
 import { SHEET_MARKS } from './sheet-marks';
 import { SheetPhotos } from './sheet-photos';
@@ -29,6 +30,7 @@ const jobUrl = (id: string, rest: string) => `/api/jobs/${encodeURIComponent(id)
     MatIconModule,
     MatProgressBarModule,
     RouterLink,
+    SheetChanges,
     SheetFinishes,
     SheetPhotos,
     SheetPlan,
@@ -73,6 +75,13 @@ const jobUrl = (id: string, rest: string) => `/api/jobs/${encodeURIComponent(id)
           <h2 id="sheet-safety">{{ 'sheet.safety.heading' | translate }}</h2>
           <lb-sheet-safety [sheetCautions]="s.cautions" [products]="s.products" />
         </section>
+
+        @if (s.changes.length > 0) {
+          <section aria-labelledby="sheet-changes">
+            <h2 id="sheet-changes">{{ 'sheet.changes.heading' | translate }}</h2>
+            <lb-sheet-changes [changes]="s.changes" />
+          </section>
+        }
 
         <section aria-labelledby="sheet-work">
           <h2 id="sheet-work">{{ 'sheet.work.heading' | translate }}</h2>
