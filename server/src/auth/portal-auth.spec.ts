@@ -60,6 +60,21 @@ describe('portal sign-in by e-mailed one-time link', () => {
     expect(used.body.detail).toMatch(/already used/);
   });
 
+  it('carries the page the client was sent from in the link (next), and refuses one outside the portal naming the field', async () => {
+    const firm = await signUpFirm(t.app, 'Next Page Plaster');
+    const email = uniqueEmail('client');
+    await clientOf(firm.firmId, email);
+    const c = await newAgent(t.app, 'portal');
+    const ask = (next: string) => c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email, next });
+    expect((await ask('/portal/invoices/0b6f2c1e-8d5a-4c3b-9e7f-1a2b3c4d5e6f')).status).toBe(202);
+    const url = new URL(linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(email))));
+    expect(url.searchParams.get('next')).toBe('/portal/invoices/0b6f2c1e-8d5a-4c3b-9e7f-1a2b3c4d5e6f');
+    for (const next of ['//elsewhere.example/portal', '/portal/../admin', 'https://elsewhere.example/portal/x', '/jobs']) {
+      const refused = await ask(next);
+      expect([next, refused.status, refused.body.errors?.[0]?.field]).toEqual([next, 400, 'next']);
+    }
+  });
+
   it('answers 202 for an unknown address and sends nothing; 400 for a malformed one', async () => {
     const c = await newAgent(t.app, 'portal');
     const email = uniqueEmail('nobody');

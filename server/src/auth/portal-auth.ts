@@ -27,7 +27,7 @@ import { hashToken, minutesFromNow, newToken } from './tokens';
 export const PORTAL_LINK_MINUTES = 20;
 
 /** E-mails a one-time link for every firm where this address is a client; silent otherwise. */
-export async function requestPortalLink(ctx: AppContext, email: string): Promise<void> {
+export async function requestPortalLink(ctx: AppContext, email: string, next?: string): Promise<void> {
   const accounts = await withLookup(ctx.pool, { email }, (tx) =>
     tx.db
       .select({ id: portalUsers.id, tenantId: portalUsers.tenantId })
@@ -48,7 +48,7 @@ export async function requestPortalLink(ctx: AppContext, email: string): Promise
         ...portalLinkMail({
           name: user.name,
           firmName: firm.name,
-          url: `${ctx.config.PUBLIC_URL}/portal/sign-in/link?token=${token}`,
+          url: `${ctx.config.PUBLIC_URL}/portal/sign-in/link?token=${token}${next ? `&next=${encodeURIComponent(next)}` : ''}`,
           minutes: PORTAL_LINK_MINUTES,
           language: (await portalUserReader(tx, user.id)).language,
         }),

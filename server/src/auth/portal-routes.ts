@@ -37,7 +37,8 @@ export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): 
   });
 
   router.post('/auth/link', linkLimiter, async (req, res) => {
-    await requestPortalLink(ctx, parse(portalLinkRequest, req.body).email);
+    const { email, next } = parse(portalLinkRequest, req.body);
+    await requestPortalLink(ctx, email, next);
     res.status(202).json({ detail: 'If that address belongs to a client, a sign-in link is on its way.' } satisfies Notice);
   });
 

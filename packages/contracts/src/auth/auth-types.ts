@@ -77,6 +77,8 @@ export interface InvitationAccept {
 }
 export interface PortalLinkRequest {
   readonly email: string;
+  /** the portal page to open once signed in (`/portal/invoices/…`); the link carries it */
+  readonly next?: string;
 }
 export interface PortalRedeemRequest {
   readonly token: string;

@@ -52,7 +52,12 @@ export const passwordResetComplete = requestSchema<PasswordResetComplete>()(z.st
 export const invitationAccept = requestSchema<InvitationAccept>()(z.strictObject({ token, name: personName, password: newPassword }));
 
 /** Portal (client) sign-in by e-mailed one-time link. */
-export const portalLinkRequest = requestSchema<PortalLinkRequest>()(z.strictObject({ email }));
+/** A page of the portal: `/portal/` and path segments of letters, digits, `-` and `_` (no query, no `..`). */
+const portalPath = z
+  .string()
+  .max(500, 'At most 500 characters.')
+  .regex(/^\/portal(\/[A-Za-z0-9_-]+)*\/?$/, 'A page of the portal, like /portal/invoices/….');
+export const portalLinkRequest = requestSchema<PortalLinkRequest>()(z.strictObject({ email, next: portalPath.optional() }));
 
 export const portalRedeemRequest = requestSchema<PortalRedeemRequest>()(z.strictObject({ token }));
 
