@@ -1,4 +1,4 @@
-import { isoDate } from './fields';
+import { isoDate, moneyAmount } from './fields';
 
 const messages = (input: unknown) => {
   const result = isoDate.safeParse(input);
@@ -22,5 +22,21 @@ describe('isoDate', () => {
     ['+02026-03-14', 'Enter a date as YYYY-MM-DD.'],
   ])('refuses %s with one message', (day, message) => {
     expect(messages(day)).toEqual([message]);
+  });
+});
+
+describe('moneyAmount', () => {
+  it.each([
+    ['-5', 'The amount cannot be negative.'],
+    ['-0.50', 'The amount cannot be negative.'],
+    ['12.345', 'Enter an amount with at most two decimals, like 1250.00.'],
+    ['twelve', 'Enter an amount with at most two decimals, like 1250.00.'],
+  ])('refuses %s with one message that says why', (amount, message) => {
+    const result = moneyAmount.safeParse(amount);
+    expect(result.success ? [] : result.error.issues.map((i) => i.message)).toEqual([message]);
+  });
+
+  it('keeps a good amount as typed, trimmed', () => {
+    expect(moneyAmount.parse(' 1250.50 ')).toBe('1250.50');
   });
 });

@@ -28,6 +28,7 @@ export const requiredText = (max: number, missing: string) =>
 export const moneyAmount = z
   .string({ error: 'Enter an amount, like 1250.00.' })
   .trim()
+  .refine((v) => !v.startsWith('-'), { error: 'The amount cannot be negative.', abort: true })
   .regex(MONEY_AMOUNT_PATTERN, { error: 'Enter an amount with at most two decimals, like 1250.00.' });
 
 export const isoDate = z

@@ -1,6 +1,6 @@
 import { DomainInputError, minorUnitDigits, roundToCurrency, roundsToZero, sumMoney, valueLineWork } from '@layerbook/contracts/engine';
 import { MONEY_AMOUNT_PATTERN, type InvoiceDraftUpdate, type ProgressTableLine } from '@layerbook/contracts/types';
-import { toAmount } from '../../shared/forms/money-input';
+import { AMOUNT_WORDS, toAmount } from '../../shared/forms/money-input';
 
 /** How the office gives a line's work done to date: a percent of its scheduled value, or an amount. */
 export type WorkMode = 'percent' | 'amount';
@@ -63,7 +63,7 @@ export function previewLine(line: Line, mode: WorkMode, typed: string, currency:
   if (plain === null) return null;
   const work = toWorkToDate(mode, typed);
   if (work === null) {
-    return { isValid: false, message: mode === 'percent' ? PERCENT_WORDS : 'Enter an amount with at most two decimals, like 12500.00.' };
+    return { isValid: false, message: mode === 'percent' ? PERCENT_WORDS : AMOUNT_WORDS.amount };
   }
   try {
     const thisPeriod = valueLineWork({

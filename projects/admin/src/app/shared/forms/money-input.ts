@@ -14,5 +14,5 @@ export function amountText(control: AbstractControl<string>): ValidationErrors |
 }
 
 export const AMOUNT_WORDS = {
-  amount: 'Enter an amount with at most two decimals, like 12500.00.',
+  amount: 'Enter an amount of zero or more with at most two decimals, like 12500.00.',
 } as const;
