@@ -77,6 +77,8 @@ import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
     }
   `,
   styles: `
+    @use 'tables';
+
     .empty {
       display: flex;
       gap: 1rem;
@@ -95,6 +97,7 @@ import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
     }
     .table-wrap {
       overflow-x: auto;
+      @include tables.scroll-shadows(var(--mat-sys-surface));
       max-width: 56rem;
     }
     .lb-table {

@@ -100,6 +100,8 @@ import { formatAmount, formatCalendarDay } from '../../../../../shared/i18n/form
     }
   `,
   styles: `
+    @use 'tables';
+
     :host {
       display: block;
       max-width: 56rem;
@@ -123,6 +125,7 @@ import { formatAmount, formatCalendarDay } from '../../../../../shared/i18n/form
     }
     .table-wrap {
       overflow-x: auto;
+      @include tables.scroll-shadows(var(--mat-sys-surface));
     }
     .lb-table {
       width: 100%;
