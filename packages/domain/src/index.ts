@@ -19,7 +19,7 @@ export { decimalMarkOf, readTypedLength, readTypedNumber } from './units/typed-l
 
 // calendar dates
 export type { IsoDate } from './calendar/local-date';
-export { addDays, daysBetween, fromDayNumber, isoWeekLabel, isoWeekday, mondayOf, toDayNumber } from './calendar/local-date';
+export { addDays, daysBetween, fromDayNumber, isoWeekLabel, isoWeekday, mondayOf, toDayNumber, yearBefore } from './calendar/local-date';
 
 // money
 export type { MoneyInput } from './money/money';

@@ -1,6 +1,6 @@
 import type { BillingSettings, BillingTrigger, InvoiceDetail, InvoiceIssue, InvoiceLine, ProgressTable } from '@layerbook/contracts';
 import { commitThenRead, readAllInOneTrip, runInOneTrip, type SqlQuery, type TenantTx } from '@layerbook/db';
-import { addDays, dueDate } from '@layerbook/domain';
+import { addDays, dueDate, yearBefore } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Config } from '../config';
@@ -177,8 +177,7 @@ function issueDate(job: BillingJob, asked: string | undefined, now: Date): strin
   const today = firmToday(job, now);
   if (asked === undefined) return today;
   const latest = addDays(today, 1);
-  const started = job.billing_started_at ? firmToday(job, job.billing_started_at) : today;
-  const earliest = `${String(Number(started.slice(0, 4)) - 1).padStart(4, '0')}-${started.slice(5) === '02-29' ? '02-28' : started.slice(5)}`;
+  const earliest = yearBefore(job.billing_started_at ? firmToday(job, job.billing_started_at) : today);
   if (asked > latest) throw badRequest([{ field: 'issuedOn', message: `The invoice date cannot be later than ${latest}.` }]);
   if (asked < earliest) {
     throw badRequest([

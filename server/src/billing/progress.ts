@@ -1,6 +1,6 @@
 import type { JobProgressView, ProgressMark } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { addDays, DomainInputError, minorUnitDigits, valueLineWork } from '@layerbook/domain';
+import { addDays, DomainInputError, minorUnitDigits, valueLineWork, yearBefore } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import { localDate } from '../firms/local-date';
@@ -29,13 +29,6 @@ async function loadJob(tx: TenantTx, jobId: string, now: Date, lock: boolean): P
   const row = rows[0];
   if (!row) throw notFound('job');
   return { ...row, accepted_on: localDate(row.time_zone, row.created_at), today: localDate(row.time_zone, now) };
-}
-
-/** One calendar year before a day (29 February → 28 February). */
-function yearBefore(day: string): string {
-  const y = Number(day.slice(0, 4)) - 1;
-  const md = day.slice(5) === '02-29' ? '02-28' : day.slice(5);
-  return `${String(y).padStart(4, '0')}-${md}`;
 }
 
 /** The work to mark and how far it is, without money (crew read it). */

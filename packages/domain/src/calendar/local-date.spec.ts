@@ -1,5 +1,5 @@
 import { expectInputError } from '../errors/expect-input-error';
-import { addDays, daysBetween, fromDayNumber, isoWeekLabel, isoWeekday, mondayOf, toDayNumber } from './local-date';
+import { addDays, daysBetween, fromDayNumber, isoWeekLabel, isoWeekday, mondayOf, toDayNumber, yearBefore } from './local-date';
 
 describe('local calendar dates', () => {
   it.each([
@@ -30,5 +30,13 @@ describe('local calendar dates', () => {
 
   it.each(['2025-02-30', '2025/01/01', '25-01-01'])('refuses %s', (bad) => {
     expectInputError(() => toDayNumber(bad), 'date');
+  });
+
+  it.each([
+    ['2026-12-04', '2025-12-04'],
+    ['2024-02-29', '2023-02-28'], // no 29 February in 2023 (Gregorian leap rule, ISO 8601)
+    ['2025-03-01', '2024-03-01'],
+  ])('a year before %s is %s', (date, earlier) => {
+    expect(yearBefore(date)).toBe(earlier);
   });
 });

@@ -67,6 +67,13 @@ export function addDays(date: IsoDate, n: number): IsoDate {
   return fromDayNumber(toDayNumber(date) + n);
 }
 
+/** The same day a year earlier; 29 February goes to 28 February. */
+export function yearBefore(date: IsoDate): IsoDate {
+  toDayNumber(date);
+  const md = date.slice(5) === '02-29' ? '02-28' : date.slice(5);
+  return `${String(Number(date.slice(0, 4)) - 1).padStart(4, '0')}-${md}`;
+}
+
 export function daysBetween(from: IsoDate, to: IsoDate): number {
   return toDayNumber(to, 'to') - toDayNumber(from, 'from');
 }
