@@ -28,8 +28,10 @@ export const requiredText = (max: number, missing: string) =>
 export const moneyAmount = z
   .string({ error: 'Enter an amount, like 1250.00.' })
   .trim()
-  .refine((v) => !v.startsWith('-'), { error: 'The amount cannot be negative.', abort: true })
-  .regex(MONEY_AMOUNT_PATTERN, { error: 'Enter an amount with at most two decimals, like 1250.00.' });
+  // Two checks that never both fire (one message, saying why); neither aborts, so a form's own checks
+  // across fields (margins, sums) still run and name their fields beside this one.
+  .refine((v) => !v.startsWith('-'), { error: 'The amount cannot be negative.' })
+  .refine((v) => v.startsWith('-') || MONEY_AMOUNT_PATTERN.test(v), { error: 'Enter an amount with at most two decimals, like 1250.00.' });
 
 export const isoDate = z
   .string({ error: 'Enter a date.' })
