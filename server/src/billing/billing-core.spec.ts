@@ -286,6 +286,17 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     });
     expect(badMethod.status).toBe(400);
     expect(badMethod.body.errors.map((e: { field: string }) => e.field)).toEqual(['method']);
+    // Received today or before (tomorrow allowed, as the invoice date), and not a year before the invoice's date.
+    for (const receivedOn of ['2026-12-03', '2025-11-30']) {
+      const badDay = await f.send('post', `/api/invoices/${depositId}/payments`, {
+        method: 'cash',
+        amount: '1.00',
+        receivedOn,
+        reference: '',
+      });
+      expect(badDay.status).toBe(400);
+      expect(badDay.body.errors.map((e: { field: string }) => e.field)).toEqual(['receivedOn']);
+    }
 
     const part = await f.send('post', `/api/invoices/${depositId}/payments`, {
       method: 'cheque',
@@ -302,7 +313,7 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     const rest = await f.send('post', `/api/invoices/${depositId}/payments`, {
       method: 'transfer',
       amount: part.body.amountDue,
-      receivedOn: '2026-12-03',
+      receivedOn: '2026-12-02',
       reference: 'Bank ref 77',
     });
     expect(rest.body).toMatchObject({ status: 'paid', amountDue: '0.00' });

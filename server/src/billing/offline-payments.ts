@@ -1,6 +1,8 @@
 import type { OfflinePaymentCreate } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
+import { addDays, yearBefore } from '@layerbook/domain';
 import Decimal from 'decimal.js';
+import { localDate } from '../firms/local-date';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
 import { recordPayment, type RecordedPayment } from '../payments/record-payment';
@@ -8,12 +10,30 @@ import { decimalsMessage, fitsCurrency, moneyOut } from './money';
 
 /**
  * POST /api/invoices/:id/payments — a cheque, transfer or cash received against an open invoice:
- * at most the amount due (400 naming amount), then the invoice is part paid or paid, with a numbered receipt (recordPayment).
+ * at most the amount due (400 naming amount), received on a day from a year before the invoice's
+ * date to the firm's tomorrow (400 naming receivedOn), then the invoice is part paid or paid, with a
+ * numbered receipt (recordPayment).
  */
-export async function recordOfflinePayment(tx: TenantTx, actor: Actor, id: string, body: OfflinePaymentCreate): Promise<RecordedPayment> {
+export async function recordOfflinePayment(
+  tx: TenantTx,
+  actor: Actor,
+  id: string,
+  body: OfflinePaymentCreate,
+  now: Date,
+): Promise<RecordedPayment> {
   const inv = (
-    await tx.client.query<{ status: string; client_id: string; currency: string; due: string }>(
-      `select status, client_id, currency, (total - amount_paid - amount_credited)::text as due from invoices where tenant_id = $1 and id = $2 for update`,
+    await tx.client.query<{
+      status: string;
+      client_id: string;
+      currency: string;
+      due: string;
+      issued_on: string | null;
+      time_zone: string;
+    }>(
+      `select i.status, i.client_id, i.currency, (i.total - i.amount_paid - i.amount_credited)::text as due,
+              i.issued_on::text as issued_on, f.time_zone
+         from invoices i join firms f on f.id = i.tenant_id
+        where i.tenant_id = $1 and i.id = $2 for update of i`,
       [tx.tenantId, id],
     )
   ).rows[0];
@@ -31,6 +51,7 @@ export async function recordOfflinePayment(tx: TenantTx, actor: Actor, id: strin
   }
   if (amount.lessThanOrEqualTo(0)) throw badRequest([{ field: 'amount', message: 'Enter the amount received.' }]);
   if (amount.greaterThan(due)) throw badRequest([{ field: 'amount', message: `At most the amount due, ${moneyOut(due, inv.currency)}.` }]);
+  checkReceivedOn(body.receivedOn, inv.issued_on, localDate(inv.time_zone, now));
   return recordPayment(tx, actor, {
     invoiceId: id,
     method: body.method,
@@ -39,4 +60,20 @@ export async function recordOfflinePayment(tx: TenantTx, actor: Actor, id: strin
     receivedOn: body.receivedOn,
     reference: body.reference,
   });
+}
+
+/**
+ * Money is received today or earlier — tomorrow is allowed for the office a time zone ahead (as
+ * the invoice date). A cheque handed over at signing may predate the invoice, but not by more than
+ * a year (a typed year is the usual slip).
+ */
+function checkReceivedOn(receivedOn: string, issuedOn: string | null, today: string): void {
+  const latest = addDays(today, 1);
+  if (receivedOn > latest) throw badRequest([{ field: 'receivedOn', message: `The day received cannot be later than ${latest}.` }]);
+  const earliest = yearBefore(issuedOn ?? today);
+  if (receivedOn < earliest) {
+    throw badRequest([
+      { field: 'receivedOn', message: `The day received cannot be earlier than ${earliest}, a year before the invoice's date.` },
+    ]);
+  }
 }

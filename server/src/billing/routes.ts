@@ -109,7 +109,7 @@ export function invoiceRoutes(ctx: AppContext): Router {
   router.post('/:id/payments', async (req, res) => {
     const detail = await withStaff(ctx, req, 'office', async (tx, staff) => {
       const { id } = parse(idParam, req.params);
-      const recorded = await recordOfflinePayment(tx, staffActor(staff), id, parse(offlinePaymentCreate, req.body));
+      const recorded = await recordOfflinePayment(tx, staffActor(staff), id, parse(offlinePaymentCreate, req.body), ctx.now());
       // The client's receipt goes out through the outbox with the payment (a client without an e-mail gets none).
       await enqueueReceiptMail(tx, deps, { kind: 'payment', id: recorded.paymentId });
       return getInvoice(tx, id, ctx.now());

@@ -300,7 +300,13 @@ export async function seedDemoBilling(pool: Pool, firmId: string, people: DemoBi
       );
       const due = new Decimal(rows[0].due);
       const amount = (share === 'all' ? due : due.div(2)).toDecimalPlaces(2, Decimal.ROUND_DOWN).toFixed(2);
-      await recordOfflinePayment(tx, office, id, parse(offlinePaymentCreate, { method, amount, receivedOn: day(daysAgo), reference }));
+      await recordOfflinePayment(
+        tx,
+        office,
+        id,
+        parse(offlinePaymentCreate, { method, amount, receivedOn: day(daysAgo), reference }),
+        clock.current,
+      );
     });
   /** The order (1 = first) of the layer the job's stage payment waits for. */
   const stageLayer = (jobId: string) =>

@@ -61,7 +61,7 @@ import { TranslatePipe } from '@ngx-translate/core';
           </mat-form-field>
           <mat-form-field>
             <mat-label>{{ 'billing.paymentForm.receivedOn' | translate }}</mat-label>
-            <input matInput [matDatepicker]="picker" formControlName="receivedOn" autocomplete="off" required />
+            <input matInput [matDatepicker]="picker" [max]="today" formControlName="receivedOn" autocomplete="off" required />
             <mat-datepicker-toggle matIconSuffix [for]="picker" />
             <mat-datepicker #picker />
             <mat-error>{{ errorText(form.controls.receivedOn, words.receivedOn) }}</mat-error>
@@ -110,9 +110,12 @@ export class PaymentForm {
   protected readonly isHydrated = hydratedSignal();
   protected readonly submission = new Submission();
   protected readonly errorText = errorText;
+  /** money is recorded once received (the API checks the same in the firm's zone, allowing its tomorrow) */
+  protected readonly today = new Date();
   protected readonly words = {
     receivedOn: {
       required: 'Enter the day it was received.',
+      matDatepickerMax: 'A payment cannot be received after today.',
       matDatepickerParse: 'Enter a date, like 3/14/2026, or pick one.',
       ...DATE_YEAR_WORDS,
     },

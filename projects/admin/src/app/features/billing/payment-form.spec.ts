@@ -1,0 +1,63 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import type { InvoiceDetail } from '@layerbook/contracts/types';
+import { afterEach, describe, expect, it } from 'vitest';
+import { progressDraft } from './invoice-fixtures';
+import { PaymentForm } from './payment-form';
+import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { officeWords } from '../../shared/testing/office-words';
+
+const issued: InvoiceDetail = { ...progressDraft, number: 'INV-0008', status: 'issued', issuedOn: '2026-11-20', amountDue: '800.00' };
+
+function render() {
+  TestBed.configureTestingModule({
+    providers: [provideTestI18n(officeWords), provideHttpClient(), provideHttpClientTesting(), provideNoopAnimations()],
+  });
+  const fixture = TestBed.createComponent(PaymentForm);
+  fixture.componentRef.setInput('invoice', issued);
+  fixture.detectChanges();
+  const html = fixture.nativeElement as HTMLElement;
+  const field = (label: string): HTMLInputElement => {
+    const formField = [...html.querySelectorAll('mat-form-field')].find((f) => f.querySelector('mat-label')?.textContent?.trim() === label);
+    return formField!.querySelector<HTMLInputElement>('input')!;
+  };
+  const type = (label: string, value: string): void => {
+    const input = field(label);
+    input.value = value;
+    input.dispatchEvent(new Event('input'));
+    fixture.detectChanges();
+  };
+  const submit = async (): Promise<void> => {
+    html.querySelector('form')!.dispatchEvent(new Event('submit'));
+    fixture.detectChanges();
+    await fixture.whenStable();
+  };
+  const errorOf = (label: string): string => field(label).closest('mat-form-field')?.querySelector('mat-error')?.textContent?.trim() ?? '';
+  return { type, submit, errorOf, http: TestBed.inject(HttpTestingController) };
+}
+
+describe('the payment form', () => {
+  afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('refuses a day after today beside the field, and sends nothing', async () => {
+    const { type, submit, errorOf, http } = render();
+    type('Amount', '200.00');
+    const later = new Date();
+    later.setDate(later.getDate() + 2);
+    type('Received on', `${later.getMonth() + 1}/${later.getDate()}/${later.getFullYear()}`);
+    await submit();
+    expect(errorOf('Received on')).toBe('A payment cannot be received after today.');
+    http.expectNone({ method: 'POST' });
+  });
+
+  it('records a payment received today', async () => {
+    const { type, submit, http } = render();
+    type('Amount', '200.00');
+    await submit();
+    const post = http.expectOne({ method: 'POST', url: '/api/invoices/inv-2/payments' });
+    expect(post.request.body).toMatchObject({ method: 'transfer', amount: '200.00', reference: '' });
+    post.flush(issued);
+  });
+});
