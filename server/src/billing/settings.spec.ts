@@ -77,6 +77,29 @@ describe('firm billing settings', () => {
       ].sort(),
     );
     expect((await f.agent.get('/api/firm/billing')).body.isDefault).toBe(true);
+
+    // Two kinds of document never print one number: the credit notes' prefix differs from the
+    // invoices' (in any case), and neither is the receipts'.
+    const clashes = [
+      [{ invoicePrefix: 'INV-', creditNotePrefix: ' inv- ' }, 'creditNotePrefix', 'Use a prefix other than the invoices’'],
+      [{ invoicePrefix: '', creditNotePrefix: '' }, 'creditNotePrefix', 'Use a prefix other than the invoices’'],
+      [{ invoicePrefix: 'rct-', creditNotePrefix: 'CN-' }, 'invoicePrefix', 'RCT- numbers the receipts'],
+      [{ invoicePrefix: 'INV-', creditNotePrefix: 'RCT-' }, 'creditNotePrefix', 'RCT- numbers the receipts'],
+    ] as const;
+    for (const [prefixes, field, message] of clashes) {
+      const clash = await f.agent
+        .put('/api/firm/billing')
+        .set('x-csrf-token', f.csrf())
+        .send({ ...DEFAULT_BILLING_SETTINGS, ...prefixes });
+      expect(clash.status).toBe(400);
+      expect(clash.body.errors).toEqual([{ field, message: expect.stringContaining(message) }]);
+    }
+    expect((await f.agent.get('/api/firm/billing')).body.isDefault).toBe(true);
+    const plain = await f.agent
+      .put('/api/firm/billing')
+      .set('x-csrf-token', f.csrf())
+      .send({ ...DEFAULT_BILLING_SETTINGS, invoicePrefix: '', creditNotePrefix: 'CR ' });
+    expect(plain.status).toBe(200);
   });
 
   it("a new proposal's deposit keeps within the firm's saved cap (percent as a share, in decimal)", async () => {

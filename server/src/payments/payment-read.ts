@@ -1,12 +1,17 @@
-import type { ClientCreditView, PaymentDetail, PaymentMethod, RefundStatus, RefundView } from '@layerbook/contracts';
+import {
+  RECEIPT_PREFIX,
+  type ClientCreditView,
+  type PaymentDetail,
+  type PaymentMethod,
+  type RefundStatus,
+  type RefundView,
+} from '@layerbook/contracts';
 import type { SqlQuery } from '@layerbook/db';
 import { documentNumber } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { moneyOut } from '../billing/money';
 
-/** The prefix of the firm's receipt series (payments and refunds share it). */
-export const RECEIPT_PREFIX = 'RCT-';
-
+/** A number of the firm's receipt series (payments and refunds share it; RECEIPT_PREFIX). */
 export const receiptNumber = (n: number | null): string | null => (n === null ? null : documentNumber(RECEIPT_PREFIX, n));
 
 interface PaymentRow {

@@ -98,6 +98,32 @@ export interface BillingSettings {
   readonly invoiceFooter: string;
 }
 
+/** Receipts are numbered RCT-0001…; the firm's own prefixes must differ from it and from each other. */
+export const RECEIPT_PREFIX = 'RCT-';
+
+/** What is wrong when two kinds of document would print one number (see prefixClash). */
+export const PREFIX_CLASH_WORDS = {
+  receipts: `${RECEIPT_PREFIX} numbers the receipts; use another prefix.`,
+  same: 'Use a prefix other than the invoices’, so a credit note’s number is never an invoice’s.',
+} as const;
+
+export type PrefixClash = keyof typeof PREFIX_CLASH_WORDS;
+
+/**
+ * Whether a pair of prefixes would print one number on two kinds of document (compared trimmed
+ * and without regard to case): the field to change and why, or null when they are apart.
+ */
+export function prefixClash(
+  invoicePrefix: string,
+  creditNotePrefix: string,
+): { readonly field: 'invoicePrefix' | 'creditNotePrefix'; readonly clash: PrefixClash } | null {
+  const same = (a: string, b: string) => a.trim().toUpperCase() === b.trim().toUpperCase();
+  if (same(invoicePrefix, RECEIPT_PREFIX)) return { field: 'invoicePrefix', clash: 'receipts' };
+  if (same(creditNotePrefix, RECEIPT_PREFIX)) return { field: 'creditNotePrefix', clash: 'receipts' };
+  if (same(invoicePrefix, creditNotePrefix)) return { field: 'creditNotePrefix', clash: 'same' };
+  return null;
+}
+
 export const BILLING_LIMITS = {
   termsDays: { min: 1, max: 365 },
   percent: { min: 0, max: 100 },

@@ -1,7 +1,14 @@
 import { z } from 'zod';
 import { moneyAmount, text } from '../common/fields';
 import { requestSchema } from '../common/schema-check';
-import { BILLING_LIMITS as L, DEPOSIT_AT_ACCEPTANCE, DEPOSIT_CREDIT_RULES, type BillingSettings } from './billing-settings-types';
+import {
+  BILLING_LIMITS as L,
+  DEPOSIT_AT_ACCEPTANCE,
+  DEPOSIT_CREDIT_RULES,
+  PREFIX_CLASH_WORDS,
+  prefixClash,
+  type BillingSettings,
+} from './billing-settings-types';
 
 const percent = (label: string) =>
   z
@@ -54,37 +61,42 @@ const terms = z.discriminatedUnion(
 
 /** PUT /api/firm/billing: the whole settings, every field named on a problem. */
 export const billingSettings = requestSchema<BillingSettings>()(
-  z.strictObject({
-    depositCap,
-    depositCapName: z
-      .string({ error: 'Name the deposit rule.' })
-      .trim()
-      .min(1, { error: 'Name the deposit rule (for example "No deposit limit").' })
-      .max(L.depositCapNameMaxLength, { error: `Use at most ${L.depositCapNameMaxLength} characters.` }),
-    terms,
-    retainage: z.strictObject({
-      workPercent: percent('retainage on work'),
-      storedPercent: percent('retainage on stored materials'),
-      stopAtPercentComplete: percent('the stop').nullable(),
+  z
+    .strictObject({
+      depositCap,
+      depositCapName: z
+        .string({ error: 'Name the deposit rule.' })
+        .trim()
+        .min(1, { error: 'Name the deposit rule (for example "No deposit limit").' })
+        .max(L.depositCapNameMaxLength, { error: `Use at most ${L.depositCapNameMaxLength} characters.` }),
+      terms,
+      retainage: z.strictObject({
+        workPercent: percent('retainage on work'),
+        storedPercent: percent('retainage on stored materials'),
+        stopAtPercentComplete: percent('the stop').nullable(),
+      }),
+      depositCredit: z.enum(DEPOSIT_CREDIT_RULES, { error: 'Choose how the deposit is credited.' }),
+      // Settings saved before this choice existed keep today's behaviour.
+      depositAtAcceptance: z
+        .enum(DEPOSIT_AT_ACCEPTANCE, { error: 'Choose whether the deposit is drafted or issued and e-mailed at acceptance.' })
+        .default('draft'),
+      reminders: z.strictObject({
+        isOn: z.boolean({ error: 'Say whether reminders are on.' }),
+        daysBefore: reminderDays('the days before'),
+        onDueDate: z.boolean({ error: 'Say whether to remind on the due date.' }),
+        everyDaysAfter: reminderDays('the days between reminders'),
+        maxAfter: z
+          .number({ error: 'Enter a number of reminders.' })
+          .int({ error: 'Use a whole number.' })
+          .min(L.maxAfter.min, { error: 'Cannot be negative.' })
+          .max(L.maxAfter.max, { error: `At most ${L.maxAfter.max}.` }),
+      }),
+      invoicePrefix: prefix('The invoice prefix'),
+      creditNotePrefix: prefix('The credit-note prefix'),
+      invoiceFooter: text(L.footerMaxLength, 'The footer'),
+    })
+    .superRefine((settings, check) => {
+      const clash = prefixClash(settings.invoicePrefix, settings.creditNotePrefix);
+      if (clash) check.addIssue({ code: 'custom', path: [clash.field], message: PREFIX_CLASH_WORDS[clash.clash] });
     }),
-    depositCredit: z.enum(DEPOSIT_CREDIT_RULES, { error: 'Choose how the deposit is credited.' }),
-    // Settings saved before this choice existed keep today's behaviour.
-    depositAtAcceptance: z
-      .enum(DEPOSIT_AT_ACCEPTANCE, { error: 'Choose whether the deposit is drafted or issued and e-mailed at acceptance.' })
-      .default('draft'),
-    reminders: z.strictObject({
-      isOn: z.boolean({ error: 'Say whether reminders are on.' }),
-      daysBefore: reminderDays('the days before'),
-      onDueDate: z.boolean({ error: 'Say whether to remind on the due date.' }),
-      everyDaysAfter: reminderDays('the days between reminders'),
-      maxAfter: z
-        .number({ error: 'Enter a number of reminders.' })
-        .int({ error: 'Use a whole number.' })
-        .min(L.maxAfter.min, { error: 'Cannot be negative.' })
-        .max(L.maxAfter.max, { error: `At most ${L.maxAfter.max}.` }),
-    }),
-    invoicePrefix: prefix('The invoice prefix'),
-    creditNotePrefix: prefix('The credit-note prefix'),
-    invoiceFooter: text(L.footerMaxLength, 'The footer'),
-  }),
 );

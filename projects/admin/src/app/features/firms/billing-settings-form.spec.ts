@@ -67,6 +67,20 @@ describe('billing settings form ↔ BillingSettings', () => {
     expect(form.controls.retainage.controls.workPercent.valid).toBe(true);
   });
 
+  it('keeps the credit notes’ prefix apart from the invoices’, and both from the receipts’ (the API’s prefixClash)', () => {
+    const form = billingSettingsForm();
+    fillBillingForm(form, DEFAULT_BILLING_SETTINGS);
+    const { invoicePrefix, creditNotePrefix } = form.controls;
+    creditNotePrefix.setValue(' inv- ');
+    expect(creditNotePrefix.hasError('prefix-same')).toBe(true);
+    expect(invoicePrefix.valid).toBe(true);
+    // Changing the other field clears it.
+    invoicePrefix.setValue('A-');
+    expect(creditNotePrefix.valid).toBe(true);
+    invoicePrefix.setValue('RCT-');
+    expect(invoicePrefix.hasError('prefix-receipts')).toBe(true);
+  });
+
   it('sends a share rule as a whole percent and an amount without separators', () => {
     const form = billingSettingsForm();
     fillBillingForm(form, DEFAULT_BILLING_SETTINGS);

@@ -8,6 +8,7 @@ import {
   type DepositCapSetting,
   type DepositCreditRuleSetting,
   type PaymentTermsSetting,
+  prefixClash,
 } from '@layerbook/contracts/types';
 import { amountText, toAmount } from '../../shared/forms/money-input';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -42,7 +43,18 @@ const percent = (validators: ValidatorFn[] = [Validators.required]) =>
 /** The API's prefix characters (packages/contracts billing settings schema). */
 export const PREFIX_PATTERN = /^[A-Za-z0-9 ./_-]*$/;
 const prefix = () =>
-  new FormControl('', { nonNullable: true, validators: [Validators.maxLength(L.prefixMaxLength), Validators.pattern(PREFIX_PATTERN)] });
+  new FormControl('', {
+    nonNullable: true,
+    validators: [Validators.maxLength(L.prefixMaxLength), Validators.pattern(PREFIX_PATTERN), apart],
+  });
+
+/** The prefixes must print different numbers from each other and the receipts' (the API's prefixClash). */
+function apart(control: AbstractControl): ValidationErrors | null {
+  const form = control.parent;
+  if (!form) return null;
+  const found = prefixClash(String(form.get('invoicePrefix')?.value ?? ''), String(form.get('creditNotePrefix')?.value ?? ''));
+  return found && form.get(found.field) === control ? { [`prefix-${found.clash}`]: true } : null;
+}
 const days = (range: { min: number; max: number }, validators: ValidatorFn[]) =>
   new FormControl<number | null>(null, [...validators, Validators.min(range.min), Validators.max(range.max), whole]);
 
@@ -80,7 +92,7 @@ export function billingSettingsForm() {
   });
   recheck(reminders.controls.hasDaysBefore, [reminders.controls.daysBefore]);
   recheck(reminders.controls.hasEveryDaysAfter, [reminders.controls.everyDaysAfter]);
-  return new FormGroup({
+  const form = new FormGroup({
     depositCap,
     depositCapName: new FormControl('', {
       nonNullable: true,
@@ -95,6 +107,10 @@ export function billingSettingsForm() {
     creditNotePrefix: prefix(),
     invoiceFooter: new FormControl('', { nonNullable: true, validators: Validators.maxLength(L.footerMaxLength) }),
   });
+  const { invoicePrefix, creditNotePrefix } = form.controls;
+  recheck(invoicePrefix, [creditNotePrefix]);
+  recheck(creditNotePrefix, [invoicePrefix]);
+  return form;
 }
 
 export type BillingSettingsFormGroup = ReturnType<typeof billingSettingsForm>;

@@ -20,6 +20,7 @@ import {
   DEPOSIT_CAP_PRESETS,
   DEPOSIT_CREDIT_RULES,
   DEPOSIT_CREDIT_RULE_LABELS,
+  PREFIX_CLASH_WORDS,
   type BillingSettings,
   type BillingSettingsView,
 } from '@layerbook/contracts/types';
@@ -98,7 +99,12 @@ export class BillingSettingsPage {
     reminderDays: range(L.reminderDays.min, L.reminderDays.max, 'days'),
     maxAfter: range(L.maxAfter.min, L.maxAfter.max, 'reminders'),
     ruleName: { required: 'Name the rule as it should be printed.', ...tooLong(L.depositCapNameMaxLength) },
-    prefix: { ...tooLong(L.prefixMaxLength), pattern: 'Use letters, digits, spaces and . / _ - only.' },
+    prefix: {
+      ...tooLong(L.prefixMaxLength),
+      pattern: 'Use letters, digits, spaces and . / _ - only.',
+      'prefix-receipts': PREFIX_CLASH_WORDS.receipts,
+      'prefix-same': PREFIX_CLASH_WORDS.same,
+    },
     footer: tooLong(L.footerMaxLength),
   };
 
