@@ -94,6 +94,13 @@ describe('firm billing settings', () => {
       expect(clash.status).toBe(400);
       expect(clash.body.errors).toEqual([{ field, message: expect.stringContaining(message) }]);
     }
+    // Reminders every week after the due date, but none of them, is a contradiction to resolve.
+    const noneAfter = await f.agent
+      .put('/api/firm/billing')
+      .set('x-csrf-token', f.csrf())
+      .send({ ...DEFAULT_BILLING_SETTINGS, reminders: { ...DEFAULT_BILLING_SETTINGS.reminders, everyDaysAfter: 7, maxAfter: 0 } });
+    expect(noneAfter.status).toBe(400);
+    expect(noneAfter.body.errors.map((e: { field: string }) => e.field)).toEqual(['reminders.maxAfter']);
     expect((await f.agent.get('/api/firm/billing')).body.isDefault).toBe(true);
     const plain = await f.agent
       .put('/api/firm/billing')

@@ -98,6 +98,9 @@ export interface BillingSettings {
   readonly invoiceFooter: string;
 }
 
+/** Reminders every so many days after the due date, but none of them: a contradiction the firm resolves. */
+export const NONE_AFTER_WORDS = 'Send at least one reminder after the due date, or untick “Then again after the due date”.';
+
 /** Receipts are numbered RCT-0001…; the firm's own prefixes must differ from it and from each other. */
 export const RECEIPT_PREFIX = 'RCT-';
 

@@ -5,6 +5,7 @@ import {
   BILLING_LIMITS as L,
   DEPOSIT_AT_ACCEPTANCE,
   DEPOSIT_CREDIT_RULES,
+  NONE_AFTER_WORDS,
   PREFIX_CLASH_WORDS,
   prefixClash,
   type BillingSettings,
@@ -80,17 +81,23 @@ export const billingSettings = requestSchema<BillingSettings>()(
       depositAtAcceptance: z
         .enum(DEPOSIT_AT_ACCEPTANCE, { error: 'Choose whether the deposit is drafted or issued and e-mailed at acceptance.' })
         .default('draft'),
-      reminders: z.strictObject({
-        isOn: z.boolean({ error: 'Say whether reminders are on.' }),
-        daysBefore: reminderDays('the days before'),
-        onDueDate: z.boolean({ error: 'Say whether to remind on the due date.' }),
-        everyDaysAfter: reminderDays('the days between reminders'),
-        maxAfter: z
-          .number({ error: 'Enter a number of reminders.' })
-          .int({ error: 'Use a whole number.' })
-          .min(L.maxAfter.min, { error: 'Cannot be negative.' })
-          .max(L.maxAfter.max, { error: `At most ${L.maxAfter.max}.` }),
-      }),
+      reminders: z
+        .strictObject({
+          isOn: z.boolean({ error: 'Say whether reminders are on.' }),
+          daysBefore: reminderDays('the days before'),
+          onDueDate: z.boolean({ error: 'Say whether to remind on the due date.' }),
+          everyDaysAfter: reminderDays('the days between reminders'),
+          maxAfter: z
+            .number({ error: 'Enter a number of reminders.' })
+            .int({ error: 'Use a whole number.' })
+            .min(L.maxAfter.min, { error: 'Cannot be negative.' })
+            .max(L.maxAfter.max, { error: `At most ${L.maxAfter.max}.` }),
+        })
+        .superRefine((reminders, check) => {
+          if (reminders.everyDaysAfter !== null && reminders.maxAfter === 0) {
+            check.addIssue({ code: 'custom', path: ['maxAfter'], message: NONE_AFTER_WORDS });
+          }
+        }),
       invoicePrefix: prefix('The invoice prefix'),
       creditNotePrefix: prefix('The credit-note prefix'),
       invoiceFooter: text(L.footerMaxLength, 'The footer'),

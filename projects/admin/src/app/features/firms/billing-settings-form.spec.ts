@@ -81,6 +81,16 @@ describe('billing settings form ↔ BillingSettings', () => {
     expect(invoicePrefix.hasError('prefix-receipts')).toBe(true);
   });
 
+  it('asks for at least one reminder after the due date while those are ticked', () => {
+    const form = billingSettingsForm();
+    fillBillingForm(form, DEFAULT_BILLING_SETTINGS);
+    const { hasEveryDaysAfter, maxAfter } = form.controls.reminders.controls;
+    maxAfter.setValue(0);
+    expect(maxAfter.hasError('noneAfter')).toBe(true);
+    hasEveryDaysAfter.setValue(false);
+    expect(maxAfter.valid).toBe(true);
+  });
+
   it('sends a share rule as a whole percent and an amount without separators', () => {
     const form = billingSettingsForm();
     fillBillingForm(form, DEFAULT_BILLING_SETTINGS);

@@ -30,6 +30,11 @@ function requiredWhen(sibling: string, isInUse: (value: unknown) => boolean): Va
   };
 }
 
+/** At least one while a sibling says the field is in use (reminders after the due date need a count). */
+function atLeastOneWhen(sibling: string): ValidatorFn {
+  return (control) => (control.parent?.get(sibling)?.value === true && control.value === 0 ? { noneAfter: true } : null);
+}
+
 /** Re-checks `dependent` when `on` changes (unless the form is being disabled). */
 function recheck(on: AbstractControl, dependents: readonly AbstractControl[]): void {
   on.valueChanges.subscribe(() => {
@@ -88,10 +93,10 @@ export function billingSettingsForm() {
     onDueDate: new FormControl(false, { nonNullable: true }),
     hasEveryDaysAfter: new FormControl(false, { nonNullable: true }),
     everyDaysAfter: days(L.reminderDays, [requiredWhen('hasEveryDaysAfter', (on) => on === true)]),
-    maxAfter: days(L.maxAfter, [Validators.required]),
+    maxAfter: days(L.maxAfter, [Validators.required, atLeastOneWhen('hasEveryDaysAfter')]),
   });
   recheck(reminders.controls.hasDaysBefore, [reminders.controls.daysBefore]);
-  recheck(reminders.controls.hasEveryDaysAfter, [reminders.controls.everyDaysAfter]);
+  recheck(reminders.controls.hasEveryDaysAfter, [reminders.controls.everyDaysAfter, reminders.controls.maxAfter]);
   const form = new FormGroup({
     depositCap,
     depositCapName: new FormControl('', {

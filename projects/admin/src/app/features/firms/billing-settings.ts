@@ -20,6 +20,7 @@ import {
   DEPOSIT_CAP_PRESETS,
   DEPOSIT_CREDIT_RULES,
   DEPOSIT_CREDIT_RULE_LABELS,
+  NONE_AFTER_WORDS,
   PREFIX_CLASH_WORDS,
   type BillingSettings,
   type BillingSettingsView,
@@ -97,7 +98,7 @@ export class BillingSettingsPage {
     percent: { required: 'Enter a percent.', min: 'Cannot be negative.', max: 'At most 100 %.' },
     termsDays: range(L.termsDays.min, L.termsDays.max, 'days'),
     reminderDays: range(L.reminderDays.min, L.reminderDays.max, 'days'),
-    maxAfter: range(L.maxAfter.min, L.maxAfter.max, 'reminders'),
+    maxAfter: { ...range(L.maxAfter.min, L.maxAfter.max, 'reminders'), noneAfter: NONE_AFTER_WORDS },
     ruleName: { required: 'Name the rule as it should be printed.', ...tooLong(L.depositCapNameMaxLength) },
     prefix: {
       ...tooLong(L.prefixMaxLength),
