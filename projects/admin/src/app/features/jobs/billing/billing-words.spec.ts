@@ -50,10 +50,10 @@ describe('depositCapWords (the deposit against the cap of the firm rule, by its 
     });
   });
 
-  it('says a rule without a cap sets no limit', () => {
+  it('says a rule without a cap sets none, once', () => {
     expect(depositCapWords(['5000'], null, 'No deposit limit', 'USD', 'en-US')).toEqual({
       isWithin: true,
-      text: 'Deposit rule: No deposit limit. It sets no limit.',
+      text: 'The deposit of $5,000.00 has no cap under “No deposit limit”.',
     });
   });
 

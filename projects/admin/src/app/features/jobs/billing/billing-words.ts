@@ -105,7 +105,7 @@ export function depositCapWords(
   const amounts = typedMinorUnits(typedDeposits, currency);
   if (amounts === null) return null;
   const deposit = amounts.reduce((a, b) => a + b, 0);
-  if (cap === null) return { isWithin: true, text: `Deposit rule: ${ruleName}. It sets no limit.` };
+  if (cap === null) return { isWithin: true, text: `The deposit of ${money(deposit, currency, locale)} has no cap under “${ruleName}”.` };
   const limit = toMinorUnits(cap, currency);
   const capText = money(limit, currency, locale);
   if (deposit <= limit) {
