@@ -14,6 +14,7 @@ import { enqueueInvoiceMail } from './invoice-mail';
 import { linesWithWords, progressWithWords } from './invoice-words';
 import { invoiceDetailFrom, invoiceDetailReads } from './invoice-read';
 import { invoiceNumberQuery } from './numbering';
+import { refreshOpenProgressDraft } from './progress-invoice';
 import { billingSettingsOf, billingSettingsRead } from './settings';
 
 interface LockedInvoice {
@@ -43,8 +44,9 @@ export interface IssueDeps {
  * the demo); the route uses issueAndRead.
  */
 export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, body: InvoiceIssue, now: Date): Promise<void> {
-  const { writes } = await prepareIssue(tx, actor, id, body, now);
+  const { writes, progressJobId } = await prepareIssue(tx, actor, id, body, now);
   await runInOneTrip(tx, writes);
+  if (progressJobId) await refreshOpenProgressDraft(tx, progressJobId, actor);
   if (body.send) await sendIssued(tx, deps, actor, id, now);
 }
 
@@ -62,12 +64,14 @@ export async function issueAndRead(
   body: InvoiceIssue,
   now: Date,
 ): Promise<InvoiceDetail> {
-  const { writes } = await prepareIssue(tx, actor, id, body, now);
-  if (body.send) {
+  const { writes, progressJobId } = await prepareIssue(tx, actor, id, body, now);
+  const sentAhead = body.send || progressJobId !== null;
+  if (sentAhead) {
     await runInOneTrip(tx, writes);
-    await sendIssued(tx, deps, actor, id, now);
+    if (progressJobId) await refreshOpenProgressDraft(tx, progressJobId, actor);
+    if (body.send) await sendIssued(tx, deps, actor, id, now);
   }
-  const { after } = await commitThenRead(tx, body.send ? [] : writes, invoiceDetailReads(tx.tenantId, id, now));
+  const { after } = await commitThenRead(tx, sentAhead ? [] : writes, invoiceDetailReads(tx.tenantId, id, now));
   return invoiceDetailFrom(id, after);
 }
 
@@ -78,7 +82,13 @@ export async function issueAndRead(
  * a progress job's credit and retainage; then the writes to send (the frozen invoice with its
  * schedule line marked, then the number).
  */
-async function prepareIssue(tx: TenantTx, actor: Actor, id: string, body: InvoiceIssue, now: Date): Promise<{ writes: SqlQuery[] }> {
+async function prepareIssue(
+  tx: TenantTx,
+  actor: Actor,
+  id: string,
+  body: InvoiceIssue,
+  now: Date,
+): Promise<{ writes: SqlQuery[]; progressJobId: string | null }> {
   const [jobRows, invoiceRows, billedRows, settingsRows, documentRows] = await readAllInOneTrip(tx, [
     jobOfInvoiceRead(tx.tenantId, id, true),
     lockInvoiceRead(tx.tenantId, id),
@@ -148,7 +158,9 @@ async function prepareIssue(tx: TenantTx, actor: Actor, id: string, body: Invoic
     { status: total.isZero() ? 'paid' : 'issued', dueOn, total: total.toFixed(2) },
     { actorUserId: actor.userId, actorKind: actor.kind },
   );
-  return { writes: [frozen, number] };
+  // A deposit (or a release) issued on a progress-billed job changes what its open progress draft credits.
+  const progressJobId = job.billing_method === 'progress' && inv.kind !== 'progress' ? job.id : null;
+  return { writes: [frozen, number], progressJobId };
 }
 
 /** The invoice with the schedule line it bills, locked (for update of the invoice alone). */

@@ -223,6 +223,43 @@ describe('progress billing through the API', () => {
     expect((await f.billing()).totals).toMatchObject({ invoiced: '24240.00', unbilled: '23760.00', retainageHeld: '2400.00' });
   });
 
+  it('refigures the open progress draft when a deposit is issued or voided after it was drafted', async () => {
+    const f = await billingJob(t, 'Late Deposit Plaster');
+    const settings = { ...DEFAULT_BILLING_SETTINGS, retainage: { workPercent: 10, storedPercent: 10, stopAtPercentComplete: null } };
+    expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
+    await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(
+        `update jobs set contract_sum = 48000, original_contract_sum = 48000, contract_tax = 0 where tenant_id = $1 and id = $2`,
+        [tx.tenantId, f.jobId],
+      ),
+    );
+    await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
+      method: 'progress',
+      lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
+    });
+    const values = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
+      lines: [{ label: 'All the plaster work', scheduledValue: '48000.00' }],
+    });
+    const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
+    const depositId = await f.lineDraft((started.body as JobBillingView).lines[0].id);
+    const draft = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-31' });
+    const lineId = (values.body as JobBillingView).valueLines[0].id;
+    const half = await f.send('patch', `/api/invoices/${draft.body.id}`, {
+      progressLines: [{ valueLineId: lineId, workToDate: { amount: '24000.00' }, storedMaterials: '0' }],
+    });
+    // No deposit issued yet: nothing to credit.
+    expect(half.body).toMatchObject({ subtotal: '21600.00', depositCredit: '0.00', total: '21600.00' });
+    const read = async () => (await f.agent.get(`/api/invoices/${draft.body.id}`)).body as InvoiceDetail;
+
+    await f.issue(depositId);
+    // The same pro-rata share as above (4,800 × 21,600 ÷ 48,000), the typed amount kept.
+    expect(await read()).toMatchObject({ subtotal: '21600.00', depositCredit: '2160.00', total: '19440.00', status: 'draft' });
+    expect((await read()).progress!.lines[0]).toMatchObject({ thisPeriodWork: '24000.00' });
+
+    expect((await f.send('post', `/api/invoices/${depositId}/void`, { reason: 'Wrong client' })).status).toBe(200);
+    expect(await read()).toMatchObject({ subtotal: '21600.00', depositCredit: '0.00', total: '21600.00', status: 'draft' });
+  });
+
   it('an invoice issued for nothing due (no work this period, or all of it taken by the deposit credit) is paid, never overdue', async () => {
     const f = await billingJob(t, 'Zero Application Plaster');
     expect((await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, { method: 'progress', lines: [] })).status).toBe(200);

@@ -4,7 +4,7 @@ import { computePayApplication, DomainInputError, minorUnitDigits, type PayAppli
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
-import { conflict } from '../http/problem';
+import { conflict, HttpError } from '../http/problem';
 import { assertBillingStarted, invoiceTax, LIVE_ISSUED, loadBillingJob, type StartedJob } from './billing-job';
 import { progressDepositCredit } from './drafts';
 
@@ -250,4 +250,25 @@ export async function draftProgressInvoice(tx: TenantTx, request: ProgressDraftR
     data: { origin: request.origin, kind: 'progress', periodEnd: request.periodEnd, total: f.total.toFixed(2) },
   });
   return { invoiceId: rows[0].id, isNew: true };
+}
+
+/**
+ * After another invoice of a progress-billed job is issued or voided — a deposit to credit, a period
+ * no longer billed — the open progress draft's figures follow at once, its period and typed amounts
+ * kept, so the office never reads a stale total. A schedule of values that no longer ties out leaves
+ * the draft as it was (issuing it says why).
+ */
+export async function refreshOpenProgressDraft(tx: TenantTx, jobId: string, actor: Actor): Promise<void> {
+  const open = (
+    await tx.client.query<{ period_end: string }>(
+      `select period_end::text as period_end from invoices where tenant_id = $1 and job_id = $2 and kind = 'progress' and status = 'draft'`,
+      [tx.tenantId, jobId],
+    )
+  ).rows[0];
+  if (!open) return;
+  try {
+    await draftProgressInvoice(tx, { jobId, periodEnd: open.period_end, origin: 'office', actor });
+  } catch (e) {
+    if (!(e instanceof HttpError && e.status === 409)) throw e;
+  }
 }
