@@ -69,7 +69,7 @@ const SAY: Readonly<Record<string, Say>> = {
   'invoice.drafted': (d) =>
     `Drafted a ${t(d, 'kind') || 'new'} invoice for ${t(d, 'total')}${d['origin'] === 'queue' ? ' (by the schedule)' : ''}`,
   'invoice.updated': (d) => `Changed a draft invoice${fieldsOf(d)}`,
-  'invoice.deleted': () => 'Deleted a draft invoice',
+  'invoice.deleted': (d) => (d['withdrawn'] ? `Withdrew a draft invoice${paren(t(d, 'withdrawn'))}` : 'Deleted a draft invoice'),
   'invoice.issued': (d) => `Issued invoice ${t(d, 'number')} for ${t(d, 'total')}, due ${t(d, 'dueOn')}`,
   'invoice.sent': () => 'E-mailed an invoice to the client',
   'invoice.reminded': (d) => `Reminded the client of an invoice${paren(t(d, 'step'))}`,

@@ -86,7 +86,7 @@ function auditText(r: AuditRow): string | null {
     case 'invoice.updated':
       return `${draft} draft changed`;
     case 'invoice.deleted':
-      return `${draft} draft deleted`;
+      return typeof r.data['withdrawn'] === 'string' ? `${draft} draft withdrawn: ${r.data['withdrawn']}` : `${draft} draft deleted`;
     case 'invoice.issued':
       return `${invoice} issued`;
     case 'invoice.sent':

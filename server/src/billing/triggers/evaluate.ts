@@ -6,6 +6,7 @@ import { localDate } from '../../firms/local-date';
 import { type Actor, SYSTEM_ACTOR } from '../../http/actor';
 import { HttpError } from '../../http/problem';
 import type { BillingEvaluateJob } from '../../queue/queues';
+import { recordAudit } from '../../audit/record';
 import { draftLineInvoice } from '../drafts';
 import { draftProgressInvoice } from '../progress-invoice';
 
@@ -64,7 +65,8 @@ export function triggerMet(
 
 /**
  * Checks a started job's billing triggers and drafts the invoice of every scheduled line whose
- * trigger is met (the queue drafts, a person issues). Idempotent: a line with a live invoice is
+ * trigger is met (the queue drafts, a person issues); a stage payment's untouched draft whose layer
+ * was reopened is withdrawn. Idempotent: a line with a live invoice is
  * 'ready', not 'scheduled', and draftLineInvoice drafts once per line however often it is asked.
  * With `progressMarked` (a percent or stored materials was just marked) a progress-billed job's one
  * open application is drafted, or refreshed, to the period ending today. Returns how many invoices
@@ -102,8 +104,12 @@ export async function evaluateJobBilling(
       await tx.client.query('rollback to savepoint progress_draft');
     }
   }
-  const { rows: lines } = await tx.client.query<LineRow>(
-    `select id, trigger from payment_schedule_lines where tenant_id = $1 and job_id = $2 and status = 'scheduled' order by position`,
+  const { rows: lines } = await tx.client.query<LineRow & { status: 'scheduled' | 'ready'; withdrawable: string | null }>(
+    `select l.id, l.trigger, l.status, i.id as withdrawable from payment_schedule_lines l
+       left join invoices i on i.tenant_id = l.tenant_id and i.schedule_line_id = l.id and i.status = 'draft' and i.origin = 'queue'
+                           and i.updated_at = i.created_at
+      where l.tenant_id = $1 and l.job_id = $2 and (l.status = 'scheduled' or (l.status = 'ready' and l.trigger->>'kind' = 'layerComplete'))
+      order by l.position`,
     [tx.tenantId, jobId],
   );
   if (!lines.length) return drafted;
@@ -113,11 +119,51 @@ export async function evaluateJobBilling(
   );
   for (const line of lines) {
     const triggerText = triggerMet(line.trigger, { walkthroughOn: job.walkthrough_on }, items, today);
+    if (line.status === 'ready') {
+      if (triggerText === null && line.withdrawable) await withdrawDraft(tx, line.withdrawable, line.id, line.trigger, jobId, items, actor);
+      continue;
+    }
     if (triggerText === null) continue;
     const { isNew } = await draftLineInvoice(tx, { lineId: line.id, origin: 'queue', actor, today, triggerText });
     if (isNew) drafted++;
   }
   return drafted;
+}
+
+/**
+ * A layer reopened after its stage payment was drafted: the draft the queue made, still untouched,
+ * goes (its line waits for the layer again, and the office reads why in the job's history). A draft
+ * the office has changed is theirs to keep or delete.
+ */
+async function withdrawDraft(
+  tx: TenantTx,
+  invoiceId: string,
+  lineId: string,
+  trigger: BillingTrigger,
+  jobId: string,
+  items: readonly ItemRow[],
+  actor: Actor,
+): Promise<void> {
+  const layerId = trigger.kind === 'layerComplete' ? trigger.layerId : '';
+  const layer = items.find((i) => i.layer_id === layerId)?.layer_name ?? 'The layer';
+  // Rechecked as it deletes: an edit committed meanwhile (the row re-read after its lock) keeps the draft.
+  const deleted = await tx.client.query(
+    `delete from invoices where tenant_id = $1 and id = $2 and status = 'draft' and updated_at = created_at returning id`,
+    [tx.tenantId, invoiceId],
+  );
+  if (!deleted.rowCount) return;
+  await tx.client.query(`update payment_schedule_lines set status = 'scheduled', updated_at = now() where tenant_id = $1 and id = $2`, [
+    tx.tenantId,
+    lineId,
+  ]);
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'invoice.deleted',
+    entity: 'invoice',
+    entityId: invoiceId,
+    data: { kind: 'milestone', jobId, withdrawn: `${layer} was reopened`, scheduleLineId: lineId },
+  });
 }
 
 /** The billing-evaluate worker: one job's triggers, on the firm's today. */

@@ -80,6 +80,43 @@ describe('billing triggers from the work', () => {
     const history = (await job.agent.get(`/api/jobs/${job.job.id}/history`)).body as { items: Array<{ text: string; who: string }> };
     const drafted = history.items.filter((e) => e.text === 'Stage payment drafted');
     expect(drafted.map((e) => e.who)).toEqual(['Automatic (billing)']);
+
+    // A surface reopened (the coat failed): the untouched stage draft goes, its line waits again.
+    const reopen = () =>
+      job.agent
+        .post(`/api/jobs/${job.job.id}/progress`)
+        .set('x-csrf-token', job.csrf())
+        .send({ kind: 'layerReopened', workItemId: items[1].id, on: '2026-12-01' });
+    expect((await reopen()).status).toBe(201);
+    await queueSettled([job.firmId]);
+    expect((await invoicesOf(job)).map((i) => [i.kind, i.line_status])).toEqual([['deposit', 'ready']]);
+    expect(
+      await query(job, `select status from payment_schedule_lines where tenant_id = $1 and job_id = $2 and role = 'milestone'`),
+    ).toEqual([{ status: 'scheduled' }]);
+    const after = (await job.agent.get(`/api/jobs/${job.job.id}/history`)).body as { items: Array<{ text: string; who: string }> };
+    expect(after.items.filter((e) => e.text.startsWith('Stage payment draft withdrawn'))).toEqual([
+      expect.objectContaining({ text: `Stage payment draft withdrawn: ${items[0].layerName} was reopened`, who: 'Automatic (billing)' }),
+    ]);
+
+    // Done again: drafted again. Once the office has changed that draft, a reopening leaves it to them.
+    expect((await mark(items[1].id, '2026-12-01')).status).toBe(201);
+    await queueSettled([job.firmId]);
+    const [, stageDraft] = await query<{ id: string }>(
+      job,
+      `select id from invoices where tenant_id = $1 and job_id = $2 and status = 'draft' order by created_at`,
+    );
+    expect(stageDraft).toBeDefined();
+    const noted = await job.agent
+      .patch(`/api/invoices/${stageDraft.id}`)
+      .set('x-csrf-token', job.csrf())
+      .send({ notes: 'Second coat checked on site' });
+    expect(noted.status).toBe(200);
+    expect((await reopen()).status).toBe(201);
+    await queueSettled([job.firmId]);
+    expect((await invoicesOf(job)).map((i) => [i.kind, i.status])).toEqual([
+      ['deposit', 'draft'],
+      ['milestone', 'draft'],
+    ]);
   }, 120_000);
 
   it('drafts nothing before billing starts, and drafts the final invoice at the walkthrough', async () => {
