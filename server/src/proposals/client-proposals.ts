@@ -1,4 +1,10 @@
-import type { PortalProposal, PortalProposalSummary, ProposalSnapshot, ProposalVersionStatus } from '@layerbook/contracts';
+import type {
+  PortalChangeOrderLink,
+  PortalProposal,
+  PortalProposalSummary,
+  ProposalSnapshot,
+  ProposalVersionStatus,
+} from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { localDate } from '../firms/local-date';
 import type { ClientPrincipal } from '../http/principal';
@@ -93,6 +99,7 @@ export async function listClientProposals(tx: TenantTx, client: ClientPrincipal)
       order by e.id, v.version desc`,
     [tx.tenantId, clientId],
   );
+  const changeOrders = await clientChangeOrders(tx, clientId);
   return rows
     .sort((a, b) => (b.sent_at?.getTime() ?? 0) - (a.sent_at?.getTime() ?? 0))
     .map((r) => ({
@@ -100,5 +107,20 @@ export async function listClientProposals(tx: TenantTx, client: ClientPrincipal)
       title: r.title,
       siteAddress: r.site.addressLines.join(', '),
       latest: { id: r.id, version: r.version, status: r.status, expiresOn: r.expires_on, sentAt: r.sent_at?.toISOString() ?? null },
+      changeOrders: changeOrders.get(r.estimate_id) ?? [],
     }));
+}
+
+/** The change orders sent on the client's jobs, by the estimate each job came from. */
+async function clientChangeOrders(tx: TenantTx, clientId: string): Promise<Map<string, PortalChangeOrderLink[]>> {
+  const { rows } = await tx.client.query<PortalChangeOrderLink & { estimate_id: string }>(
+    `select j.estimate_id, c.id, c.number, c.title, c.status, c.amount::text as amount, j.currency
+       from change_orders c join jobs j on j.tenant_id = c.tenant_id and j.id = c.job_id
+      where c.tenant_id = $1 and j.client_id = $2 and c.status <> 'draft'
+      order by c.status = 'sent' desc, c.number`,
+    [tx.tenantId, clientId],
+  );
+  const byEstimate = new Map<string, PortalChangeOrderLink[]>();
+  for (const { estimate_id, ...link } of rows) byEstimate.set(estimate_id, [...(byEstimate.get(estimate_id) ?? []), link]);
+  return byEstimate;
 }

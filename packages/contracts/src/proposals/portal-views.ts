@@ -10,12 +10,25 @@ export interface PortalLatestProposal {
   readonly sentAt: string | null;
 }
 
+/** A change order the firm sent on the project's job, as the projects list names it (never a draft). */
+export interface PortalChangeOrderLink {
+  readonly id: string;
+  readonly number: number;
+  readonly title: string;
+  readonly status: 'sent' | 'approved' | 'declined';
+  /** what the contract sum moves by, tax included; negative deducts */
+  readonly amount: string;
+  readonly currency: string;
+}
+
 /** One estimate of the client's with a sent proposal: the portal's list ("your projects"). */
 export interface PortalProposalSummary {
   readonly estimateId: string;
   readonly title: string;
   readonly siteAddress: string;
   readonly latest: PortalLatestProposal;
+  /** the accepted job's change orders, those awaiting an answer first, then by number */
+  readonly changeOrders: readonly PortalChangeOrderLink[];
 }
 
 /** A proposal version as its client reads it: the frozen snapshot plus where it stands. */

@@ -1,3 +1,4 @@
+import type { ItemList, PortalProposalSummary } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import Decimal from 'decimal.js';
 import { otherClientOf, sentProposal } from '../../proposals/portal-fixtures';
@@ -183,6 +184,16 @@ describe('change orders in the portal', () => {
       .send(approve);
     expect(again.status).toBe(409);
     expect(await jobMoney(t, f)).toEqual(before);
+
+    // The client's projects list names the sent ones on the job (one waiting first), never a draft.
+    const waiting = await sendChangeOrder(f, (await addChangeOrder(f, lump('Lime wash, hall', '300.00'))).id);
+    await addChangeOrder(f, lump('Not sent yet', '50.00'));
+    const projects = (await f.client.agent.get('/api/portal/proposals')).body as ItemList<PortalProposalSummary>;
+    expect(projects.items).toHaveLength(1);
+    expect(projects.items[0].changeOrders).toEqual([
+      { id: waiting.id, number: 2, title: 'Lime wash, hall', status: 'sent', amount: expect.any(String), currency: 'USD' },
+      { id: made.id, number: 1, title: 'Gilded cornice', status: 'declined', amount: expect.any(String), currency: 'USD' },
+    ]);
   });
 
   it('approval needs a typed signature (400 naming the field); other clients and other firms get 404', async () => {

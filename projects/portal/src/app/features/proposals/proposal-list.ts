@@ -4,16 +4,16 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import { TranslatePipe } from '@ngx-translate/core';
-import type { ItemList, PortalProposalSummary } from '@layerbook/contracts/types';
+import type { ItemList, PortalChangeOrderLink, PortalProposalSummary } from '@layerbook/contracts/types';
 import { SayPipe } from '../../../../../shared/errors/say-pipe';
-import { LbDatePipe } from '../../../../../shared/i18n/format';
+import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
 import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
 import { PROPOSALS_URL } from './proposal-api';
 
 @Component({
   selector: 'lb-proposal-list',
-  imports: [LbDatePipe, MatIconModule, MatProgressBarModule, RouterLink, SayPipe, TranslatePipe],
+  imports: [LbDatePipe, LbMoneyPipe, MatIconModule, MatProgressBarModule, RouterLink, SayPipe, TranslatePipe],
   template: `
     <h1>{{ 'proposals.list.title' | translate }}</h1>
     @if (client(); as me) {
@@ -48,6 +48,22 @@ import { PROPOSALS_URL } from './proposal-api';
               >{{ 'proposals.list.read' | translate
               }}<span class="lb-visually-hidden">{{ 'proposals.list.readFor' | translate: { title: project.title } }}</span></a
             >
+            @if (project.changeOrders.length) {
+              <h3>{{ 'proposals.list.changeOrders' | translate }}</h3>
+              <ul class="orders">
+                @for (order of project.changeOrders; track order.id) {
+                  <li>
+                    <a [routerLink]="['/change-orders', order.id]">{{
+                      'proposals.list.changeOrder' | translate: { number: order.number, title: order.title }
+                    }}</a>
+                    <span [class.waiting]="order.status === 'sent'">
+                      · {{ 'proposals.list.changeOrderStatus.' + order.status | translate }} ·
+                      {{ 'proposals.list.' + change(order).key | translate: { amount: (change(order).amount | lbMoney: order.currency) } }}
+                    </span>
+                  </li>
+                }
+              </ul>
+            }
           </li>
         }
       </ul>
@@ -95,6 +111,20 @@ import { PROPOSALS_URL } from './proposal-api';
     .site {
       color: var(--mat-sys-on-surface-variant);
     }
+    .project h3 {
+      margin: 1rem 0 0.25rem;
+      font-size: 1rem;
+    }
+    .orders {
+      margin: 0;
+      padding-left: 1.25rem;
+    }
+    .orders li {
+      margin-bottom: 0.25rem;
+    }
+    .waiting {
+      font-weight: 600;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -109,4 +139,10 @@ export class ProposalList {
     const error = this.list.error();
     return error ? toProblem(error).title : null;
   });
+
+  /** What a change order does to the contract: the words' key and the amount without its sign. */
+  protected change(order: PortalChangeOrderLink): { key: 'adds' | 'takesOff'; amount: string } {
+    const amount = order.amount.trim();
+    return amount.startsWith('-') ? { key: 'takesOff', amount: amount.slice(1) } : { key: 'adds', amount };
+  }
 }
