@@ -44,6 +44,12 @@ import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
             >{{ 'layout.shell.projects' | translate }}</a
           >
           <a
+            routerLink="/boards"
+            [class.active]="section() === 'boards'"
+            [attr.aria-current]="section() === 'boards' ? 'page' : null"
+            >{{ 'layout.shell.boards' | translate }}</a
+          >
+          <a
             routerLink="/invoices"
             [class.active]="section() === 'invoices'"
             [attr.aria-current]="section() === 'invoices' ? 'page' : null"
