@@ -1,9 +1,9 @@
 import {
   CLIENT_BOARD_STATUSES,
+  type ClientBoardPhoto,
   type ClientBoardStatus,
   type ClientBoardView,
   type FinishSnapshot,
-  type PhotoThumbnail,
 } from '@layerbook/contracts';
 import { and, asc, eq, inArray, portalUsers, sampleBoards, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
@@ -12,6 +12,7 @@ import { clientActor } from '../http/actor';
 import type { ClientPrincipal } from '../http/principal';
 import { conflict, notFound } from '../http/problem';
 import { findPhoto, listPhotos } from '../files/photos';
+import type { FileRow } from '../files/stored-files';
 import { BOARD_PHOTOS } from './board-photos';
 import type { BoardRow } from './boards';
 import { mailBoardDecision } from './sample-mail';
@@ -20,7 +21,7 @@ import { clientFinishStepsIn } from './step-words';
 /** What a client may see: boards of their own client record that the firm has shown. Drafts stay in the office. */
 const VISIBLE = CLIENT_BOARD_STATUSES;
 
-const portalThumbnail = (photoId: string) => `/api/portal/boards/photos/${photoId}/thumbnail`;
+const portalPhoto = (photoId: string) => `/api/portal/boards/photos/${photoId}`;
 
 /** The client record this portal login belongs to; a login with none sees no boards. */
 async function clientRecordOf(tx: TenantTx, client: ClientPrincipal): Promise<string | null> {
@@ -55,19 +56,26 @@ async function findClientBoard(tx: TenantTx, client: ClientPrincipal, boardId: s
   return row;
 }
 
-/** Thumbnails only, each served by the portal's own route (clients cannot use /api/files). */
-async function photosOf(tx: TenantTx, boardIds: readonly string[]): Promise<Map<string, PhotoThumbnail[]>> {
-  const byBoard = new Map<string, PhotoThumbnail[]>();
+/** Thumbnails and full photos, each served by the portal's own routes (clients cannot use /api/files). */
+async function photosOf(tx: TenantTx, boardIds: readonly string[]): Promise<Map<string, ClientBoardPhoto[]>> {
+  const byBoard = new Map<string, ClientBoardPhoto[]>();
   for (const [boardId, views] of await listPhotos(tx, BOARD_PHOTOS, boardIds)) {
     byBoard.set(
       boardId,
-      views.map((p) => ({ id: p.id, caption: p.caption, thumbnailUrl: portalThumbnail(p.id), width: p.width, height: p.height })),
+      views.map((p) => ({
+        id: p.id,
+        caption: p.caption,
+        thumbnailUrl: `${portalPhoto(p.id)}/thumbnail`,
+        downloadUrl: portalPhoto(p.id),
+        width: p.width,
+        height: p.height,
+      })),
     );
   }
   return byBoard;
 }
 
-const toClientView = (board: BoardRow, client: ClientPrincipal, photos: PhotoThumbnail[]): ClientBoardView => {
+const toClientView = (board: BoardRow, client: ClientPrincipal, photos: ClientBoardPhoto[]): ClientBoardView => {
   const snapshot = board.finishSnapshot as FinishSnapshot | null;
   return {
     id: board.id,
@@ -104,14 +112,13 @@ export async function getClientBoard(tx: TenantTx, client: ClientPrincipal, boar
   return toClientView(board, client, (await photosOf(tx, [board.id])).get(board.id) ?? []);
 }
 
-/** The stored thumbnail key of a photo on a board this client may see. */
-export async function clientPhotoThumbnailKey(tx: TenantTx, client: ClientPrincipal, photoId: string): Promise<string> {
+/** The stored file of a photo on a board this client may see (404 otherwise). */
+export async function clientBoardPhotoFile(tx: TenantTx, client: ClientPrincipal, photoId: string): Promise<FileRow> {
   const photo = await findPhoto(tx, BOARD_PHOTOS, photoId);
-  if (!photo.file.thumbnailKey) throw notFound('photo');
   await findClientBoard(tx, client, photo.ownerId).catch(() => {
     throw notFound('photo');
   });
-  return photo.file.thumbnailKey;
+  return photo.file;
 }
 
 const alreadyDecided = (board: BoardRow) =>

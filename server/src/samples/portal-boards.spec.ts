@@ -40,8 +40,22 @@ describe('sample boards in the client portal', () => {
     // No recipe details, no staff file URLs.
     expect(JSON.stringify(item)).not.toMatch(/surfacePerUnit|\/api\/files\//);
     expect(item.photos).toEqual([
-      { id: photo.id, caption: '', thumbnailUrl: `/api/portal/boards/photos/${photo.id}/thumbnail`, width: 64, height: 48 },
+      {
+        id: photo.id,
+        caption: '',
+        thumbnailUrl: `/api/portal/boards/photos/${photo.id}/thumbnail`,
+        downloadUrl: `/api/portal/boards/photos/${photo.id}`,
+        width: 64,
+        height: 48,
+      },
     ]);
+    // The full photo, to look closely at the finish: an attachment of the stored bytes.
+    const full = await client.agent.get(item.photos[0].downloadUrl).buffer(true);
+    expect(full.status).toBe(200);
+    expect(full.headers['content-disposition']).toMatch(/^attachment; filename=/);
+    expect(full.headers['x-content-type-options']).toBe('nosniff');
+    expect(full.headers['content-security-policy']).toBe("default-src 'none'; sandbox");
+    expect(Number(full.headers['content-length'])).toBeGreaterThan(0);
 
     const thumb = await client.agent.get(item.photos[0].thumbnailUrl);
     expect(thumb.status).toBe(200);
@@ -144,6 +158,8 @@ describe('sample boards in the client portal', () => {
       ['approve', () => post(other, `/api/portal/boards/${board.id}/approve`)],
       ['ask', () => post(other, `/api/portal/boards/${board.id}/request-changes`, { comment: 'Mine now' })],
       ['thumbnail', () => other.agent.get(`/api/portal/boards/photos/${photo.id}/thumbnail`)],
+      ['full photo', () => other.agent.get(`/api/portal/boards/photos/${photo.id}`)],
+      ['other firm full photo', () => g.client.agent.get(`/api/portal/boards/photos/${photo.id}`)],
       ['other firm', () => g.client.agent.get(`/api/portal/boards/${board.id}`)],
       ['other firm thumbnail', () => g.client.agent.get(`/api/portal/boards/photos/${photo.id}/thumbnail`)],
       ['other firm approve', () => post(g.client, `/api/portal/boards/${board.id}/approve`)],

@@ -1,12 +1,13 @@
+import type { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { sampleChangeRequest, uuid, type ClientBoardView, type ItemList } from '@layerbook/contracts';
-import { Router } from 'express';
+import { Router, type Response } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { withClient } from '../http/guards';
 import { notFound } from '../http/problem';
 import { parse } from '../http/validate';
-import { clientPhotoThumbnailKey, decideBoard, getClientBoard, listClientBoards } from './client-boards';
+import { clientBoardPhotoFile, decideBoard, getClientBoard, listClientBoards } from './client-boards';
 
 const boardParam = z.strictObject({ id: uuid('sample board id') });
 const photoParam = z.strictObject({ photoId: uuid('photo id') });
@@ -24,25 +25,25 @@ export function portalSampleRoutes(ctx: AppContext): Router {
     res.json({ items } satisfies ItemList<ClientBoardView>);
   });
 
-  // Clients cannot use the staff /api/files routes; this serves only thumbnails of boards they may see.
+  // Clients cannot use the staff /api/files routes; these serve only photos of boards they may see,
+  // streamed after the transaction has ended, so a slow phone holds no database connection.
   router.get('/photos/:photoId/thumbnail', async (req, res) => {
-    const key = await withClient(ctx, req, (tx, client) => clientPhotoThumbnailKey(tx, client, parse(photoParam, req.params).photoId));
-    // Streamed after the transaction has ended, so a slow phone holds no database connection.
-    const body = await ctx.storage.get(key);
+    const file = await withClient(ctx, req, (tx, client) => clientBoardPhotoFile(tx, client, parse(photoParam, req.params).photoId));
+    const body = file.thumbnailKey ? await ctx.storage.get(file.thumbnailKey) : null;
     if (!body) throw notFound('photo');
-    res.set({
-      'content-type': 'image/webp',
-      'content-disposition': 'inline; filename="sample-board.webp"',
-      'cache-control': 'private, max-age=3600',
-      'x-content-type-options': 'nosniff',
-      'content-security-policy': "default-src 'none'; sandbox",
-    });
-    try {
-      await pipeline(body, res);
-    } catch (err) {
-      ctx.logger.warn({ err }, 'board thumbnail interrupted');
-      res.destroy();
-    }
+    // Shown inline: the thumbnail is WebP that sharp wrote itself, not bytes from the uploader.
+    res.set({ 'content-type': 'image/webp', 'content-disposition': 'inline; filename="sample-board.webp"' });
+    await send(ctx, res, body);
+  });
+
+  // The full photo, to look closely at the finish: always an attachment, as the staff route.
+  router.get('/photos/:photoId', async (req, res) => {
+    const file = await withClient(ctx, req, (tx, client) => clientBoardPhotoFile(tx, client, parse(photoParam, req.params).photoId));
+    const body = await ctx.storage.get(file.storageKey);
+    if (!body) throw notFound('photo');
+    res.attachment(file.originalName);
+    res.set({ 'content-type': file.contentType, 'content-length': String(file.sizeBytes) });
+    await send(ctx, res, body);
   });
 
   router.get('/:id', async (req, res) => {
@@ -78,4 +79,19 @@ export function portalSampleRoutes(ctx: AppContext): Router {
   });
 
   return router;
+}
+
+/** A photo's bytes to a client: private, never sniffed, never run as markup in our origin. */
+async function send(ctx: AppContext, res: Response, body: Readable): Promise<void> {
+  res.set({
+    'cache-control': 'private, max-age=3600',
+    'x-content-type-options': 'nosniff',
+    'content-security-policy': "default-src 'none'; sandbox",
+  });
+  try {
+    await pipeline(body, res);
+  } catch (err) {
+    ctx.logger.warn({ err }, 'board photo interrupted');
+    res.destroy();
+  }
 }

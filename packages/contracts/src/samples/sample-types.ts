@@ -99,6 +99,11 @@ export interface SampleBoardView {
   readonly updatedAt: string;
 }
 
+/** A board's photo as its client sees it: the thumbnail, and the full photo to look closely at the finish. */
+export interface ClientBoardPhoto extends PhotoThumbnail {
+  readonly downloadUrl: string;
+}
+
 /** A board as its client reads it in the portal (GET /api/portal/boards items, …/:id). */
 export interface ClientBoardView {
   readonly id: string;
@@ -115,7 +120,8 @@ export interface ClientBoardView {
   readonly clientComment: string;
   readonly decidedAt: string | null;
   /** thumbnails only, served by the portal's own route */
-  readonly photos: readonly PhotoThumbnail[];
+  /** thumbnails, each with the full photo to open (the portal's own routes) */
+  readonly photos: readonly ClientBoardPhoto[];
 }
 
 /** POST /api/samples */
