@@ -18,9 +18,6 @@ import { PROPOSALS_URL } from './proposal-api';
     <h1>{{ 'proposals.list.title' | translate }}</h1>
     @if (client(); as me) {
       <p class="lb-lead">{{ 'proposals.list.lead' | translate: { firm: me.firmName } }}</p>
-      <p>
-        <a routerLink="/boards">{{ 'proposals.list.boards' | translate }}</a>
-      </p>
     }
     @if (isLoading()) {
       <mat-progress-bar mode="indeterminate" [attr.aria-label]="'proposals.list.loading' | translate" />
