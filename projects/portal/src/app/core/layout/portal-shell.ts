@@ -43,12 +43,9 @@ import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
             [attr.aria-current]="section() === 'projects' ? 'page' : null"
             >{{ 'layout.shell.projects' | translate }}</a
           >
-          <a
-            routerLink="/boards"
-            [class.active]="section() === 'boards'"
-            [attr.aria-current]="section() === 'boards' ? 'page' : null"
-            >{{ 'layout.shell.boards' | translate }}</a
-          >
+          <a routerLink="/boards" [class.active]="section() === 'boards'" [attr.aria-current]="section() === 'boards' ? 'page' : null">{{
+            'layout.shell.boards' | translate
+          }}</a>
           <a
             routerLink="/invoices"
             [class.active]="section() === 'invoices'"
