@@ -16,6 +16,7 @@ import { invoiceDetailFrom, invoiceDetailReads } from './invoice-read';
 import { invoiceNumberQuery } from './numbering';
 import { refreshOpenProgressDraft } from './progress-invoice';
 import { billingSettingsOf, billingSettingsRead } from './settings';
+import { longDate } from '../i18n/long-date';
 
 interface LockedInvoice {
   id: string;
@@ -190,10 +191,13 @@ function issueDate(job: BillingJob, asked: string | undefined, now: Date): strin
   if (asked === undefined) return today;
   const latest = addDays(today, 1);
   const earliest = yearBefore(job.billing_started_at ? firmToday(job, job.billing_started_at) : today);
-  if (asked > latest) throw badRequest([{ field: 'issuedOn', message: `The invoice date cannot be later than ${latest}.` }]);
+  if (asked > latest) throw badRequest([{ field: 'issuedOn', message: `The invoice date cannot be later than ${longDate(latest)}.` }]);
   if (asked < earliest) {
     throw badRequest([
-      { field: 'issuedOn', message: `The invoice date cannot be earlier than ${earliest}, a year before billing started on this job.` },
+      {
+        field: 'issuedOn',
+        message: `The invoice date cannot be earlier than ${longDate(earliest)}, a year before billing started on this job.`,
+      },
     ]);
   }
   return asked;

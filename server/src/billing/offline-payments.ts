@@ -7,6 +7,7 @@ import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
 import { recordPayment, type RecordedPayment } from '../payments/record-payment';
 import { decimalsMessage, fitsCurrency, moneyOut } from './money';
+import { longDate } from '../i18n/long-date';
 
 /**
  * POST /api/invoices/:id/payments — a cheque, transfer or cash received against an open invoice:
@@ -69,11 +70,12 @@ export async function recordOfflinePayment(
  */
 function checkReceivedOn(receivedOn: string, issuedOn: string | null, today: string): void {
   const latest = addDays(today, 1);
-  if (receivedOn > latest) throw badRequest([{ field: 'receivedOn', message: `The day received cannot be later than ${latest}.` }]);
+  if (receivedOn > latest)
+    throw badRequest([{ field: 'receivedOn', message: `The day received cannot be later than ${longDate(latest)}.` }]);
   const earliest = yearBefore(issuedOn ?? today);
   if (receivedOn < earliest) {
     throw badRequest([
-      { field: 'receivedOn', message: `The day received cannot be earlier than ${earliest}, a year before the invoice's date.` },
+      { field: 'receivedOn', message: `The day received cannot be earlier than ${longDate(earliest)}, a year before the invoice's date.` },
     ]);
   }
 }

@@ -9,6 +9,7 @@ import { badRequest, conflict, forbidden, notFound } from '../http/problem';
 import type { JobQueue } from '../queue/job-queue';
 import { enqueueBillingCheck } from './triggers/enqueue';
 import { ensureJobWork, loadWorkItems } from './work-items';
+import { longDate } from '../i18n/long-date';
 
 interface JobRow {
   id: string;
@@ -173,9 +174,11 @@ export async function recordProgress(
   if (job.status === 'cancelled') throw conflict('This job is cancelled: its progress can no longer change.');
   const latest = addDays(job.today, 1);
   const earliest = yearBefore(job.accepted_on);
-  if (mark.on > latest) throw badRequest([{ field: 'on', message: `The day cannot be later than ${latest}.` }]);
+  if (mark.on > latest) throw badRequest([{ field: 'on', message: `The day cannot be later than ${longDate(latest)}.` }]);
   if (mark.on < earliest)
-    throw badRequest([{ field: 'on', message: `The day cannot be earlier than ${earliest}, a year before the job was accepted.` }]);
+    throw badRequest([
+      { field: 'on', message: `The day cannot be earlier than ${longDate(earliest)}, a year before the job was accepted.` },
+    ]);
   await ensureJobWork(tx, jobId);
 
   const line = mark.kind === 'valuePercent' || mark.kind === 'storedMaterials' ? await valueLine(tx, jobId, mark.valueLineId) : null;

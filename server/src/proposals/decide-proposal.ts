@@ -17,15 +17,13 @@ import { snapshotHash } from './snapshot-hash';
 import { createJobFromAcceptance } from '../jobs/create-job';
 import { firmToday, isLatest, loadClientVersion, toPortalProposal, type ClientVersionRow } from './client-proposals';
 import { mailAcceptance, mailAnswer } from './decision-mail';
+import { longDate } from '../i18n/long-date';
 
 /** Where the signature came from, kept with it. */
 export interface SigningContext {
   readonly ip: string;
   readonly userAgent: string;
 }
-
-const longDate = (locale: string, isoDay: string) =>
-  new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeZone: 'UTC' }).format(new Date(`${isoDay}T00:00:00Z`));
 
 /** Why this version can take no answer now, as the client should read it (409), or null. */
 function refusal(row: ClientVersionRow, today: string, checkExpiry: boolean): HttpError | null {
@@ -35,7 +33,7 @@ function refusal(row: ClientVersionRow, today: string, checkExpiry: boolean): Ht
   if (row.status === 'changes_requested') return conflict('You asked for changes to this proposal; the firm will send a new version.');
   if (row.status !== 'sent') return conflict('This proposal cannot be answered.');
   if (checkExpiry && row.expires_on < today)
-    return conflict(`This proposal expired on ${longDate(row.snapshot.locale, row.expires_on)}; ask the firm for a new one.`);
+    return conflict(`This proposal expired on ${longDate(row.expires_on, row.snapshot.locale)}; ask the firm for a new one.`);
   return null;
 }
 
