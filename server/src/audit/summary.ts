@@ -68,7 +68,8 @@ const SAY: Readonly<Record<string, Say>> = {
   'change_order.declined': (d) => `Declined change order ${t(d, 'number')}`,
   'invoice.drafted': (d) =>
     `Drafted a ${t(d, 'kind') || 'new'} invoice for ${t(d, 'total')}${d['origin'] === 'queue' ? ' (by the schedule)' : ''}`,
-  'invoice.updated': (d) => `Changed a draft invoice${fieldsOf(d)}`,
+  'invoice.updated': (d) =>
+    d['refigured'] ? `Refigured a draft invoice to ${t(d, 'total')}${paren(t(d, 'refigured'))}` : `Changed a draft invoice${fieldsOf(d)}`,
   'invoice.deleted': (d) => (d['withdrawn'] ? `Withdrew a draft invoice${paren(t(d, 'withdrawn'))}` : 'Deleted a draft invoice'),
   'invoice.issued': (d) => `Issued invoice ${t(d, 'number')} for ${t(d, 'total')}, due ${t(d, 'dueOn')}`,
   'invoice.sent': () => 'E-mailed an invoice to the client',

@@ -84,7 +84,7 @@ function auditText(r: AuditRow): string | null {
     case 'invoice.drafted':
       return `${draft} drafted`;
     case 'invoice.updated':
-      return `${draft} draft changed`;
+      return typeof r.data['refigured'] === 'string' ? `${draft} draft refigured: ${r.data['refigured']}` : `${draft} draft changed`;
     case 'invoice.deleted':
       return typeof r.data['withdrawn'] === 'string' ? `${draft} draft withdrawn: ${r.data['withdrawn']}` : `${draft} draft deleted`;
     case 'invoice.issued':

@@ -14,8 +14,8 @@ import { enqueueInvoiceMail } from './invoice-mail';
 import { linesWithWords, progressWithWords } from './invoice-words';
 import { invoiceDetailFrom, invoiceDetailReads } from './invoice-read';
 import { invoiceNumberQuery } from './numbering';
-import { refreshOpenProgressDraft } from './progress-invoice';
 import { billingSettingsOf, billingSettingsRead } from './settings';
+import { enqueueBillingCheck } from './triggers/enqueue';
 import { longDate } from '../i18n/long-date';
 
 interface LockedInvoice {
@@ -45,9 +45,8 @@ export interface IssueDeps {
  * the demo); the route uses issueAndRead.
  */
 export async function issueInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, body: InvoiceIssue, now: Date): Promise<void> {
-  const { writes, progressJobId } = await prepareIssue(tx, actor, id, body, now);
+  const { writes } = await prepareIssue(tx, deps, actor, id, body, now);
   await runInOneTrip(tx, writes);
-  if (progressJobId) await refreshOpenProgressDraft(tx, progressJobId, actor);
   if (body.send) await sendIssued(tx, deps, actor, id, now);
 }
 
@@ -65,14 +64,12 @@ export async function issueAndRead(
   body: InvoiceIssue,
   now: Date,
 ): Promise<InvoiceDetail> {
-  const { writes, progressJobId } = await prepareIssue(tx, actor, id, body, now);
-  const sentAhead = body.send || progressJobId !== null;
-  if (sentAhead) {
+  const { writes } = await prepareIssue(tx, deps, actor, id, body, now);
+  if (body.send) {
     await runInOneTrip(tx, writes);
-    if (progressJobId) await refreshOpenProgressDraft(tx, progressJobId, actor);
-    if (body.send) await sendIssued(tx, deps, actor, id, now);
+    await sendIssued(tx, deps, actor, id, now);
   }
-  const { after } = await commitThenRead(tx, sentAhead ? [] : writes, invoiceDetailReads(tx.tenantId, id, now));
+  const { after } = await commitThenRead(tx, body.send ? [] : writes, invoiceDetailReads(tx.tenantId, id, now));
   return invoiceDetailFrom(id, after);
 }
 
@@ -85,11 +82,12 @@ export async function issueAndRead(
  */
 async function prepareIssue(
   tx: TenantTx,
+  deps: IssueDeps,
   actor: Actor,
   id: string,
   body: InvoiceIssue,
   now: Date,
-): Promise<{ writes: SqlQuery[]; progressJobId: string | null }> {
+): Promise<{ writes: SqlQuery[] }> {
   const [jobRows, invoiceRows, billedRows, settingsRows, documentRows] = await readAllInOneTrip(tx, [
     jobOfInvoiceRead(tx.tenantId, id, true),
     lockInvoiceRead(tx.tenantId, id),
@@ -159,9 +157,11 @@ async function prepareIssue(
     { status: total.isZero() ? 'paid' : 'issued', dueOn, total: total.toFixed(2) },
     { actorUserId: actor.userId, actorKind: actor.kind },
   );
-  // A deposit (or a release) issued on a progress-billed job changes what its open progress draft credits.
-  const progressJobId = job.billing_method === 'progress' && inv.kind !== 'progress' ? job.id : null;
-  return { writes: [frozen, number], progressJobId };
+  // A deposit (or a release) issued on a progress-billed job changes what its open progress draft
+  // credits: the queue refigures it once this commits (a trip only for those, before the counter is taken).
+  if (job.billing_method === 'progress' && inv.kind !== 'progress')
+    await enqueueBillingCheck(tx, deps.queue, job.id, { refreshDraft: true });
+  return { writes: [frozen, number] };
 }
 
 /** The invoice with the schedule line it bills, locked (for update of the invoice alone). */

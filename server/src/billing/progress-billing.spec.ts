@@ -4,6 +4,7 @@ import { sumMoney } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { startTestServer, TestServer } from '../testing/harness';
 import { billingJob } from './billing-fixtures';
+import { billingQueueSettled } from './progress-fixtures';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -223,7 +224,7 @@ describe('progress billing through the API', () => {
     expect((await f.billing()).totals).toMatchObject({ invoiced: '24240.00', unbilled: '23760.00', retainageHeld: '2400.00' });
   });
 
-  it('refigures the open progress draft when a deposit is issued or voided after it was drafted', async () => {
+  it('refigures the open progress draft (through the queue) when a deposit is issued or voided after it was drafted', async () => {
     const f = await billingJob(t, 'Late Deposit Plaster');
     const settings = { ...DEFAULT_BILLING_SETTINGS, retainage: { workPercent: 10, storedPercent: 10, stopAtPercentComplete: null } };
     expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
@@ -244,20 +245,36 @@ describe('progress billing through the API', () => {
     const depositId = await f.lineDraft((started.body as JobBillingView).lines[0].id);
     const draft = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-31' });
     const lineId = (values.body as JobBillingView).valueLines[0].id;
-    const half = await f.send('patch', `/api/invoices/${draft.body.id}`, {
-      progressLines: [{ valueLineId: lineId, workToDate: { amount: '24000.00' }, storedMaterials: '0' }],
+    // An amount its percent (four decimals) would not give back: the refigured draft must keep it as typed.
+    const typed = await f.send('patch', `/api/invoices/${draft.body.id}`, {
+      progressLines: [{ valueLineId: lineId, workToDate: { amount: '12345.67' }, storedMaterials: '0' }],
     });
+    const subtotal = (typed.body as InvoiceDetail).subtotal;
     // No deposit issued yet: nothing to credit.
-    expect(half.body).toMatchObject({ subtotal: '21600.00', depositCredit: '0.00', total: '21600.00' });
-    const read = async () => (await f.agent.get(`/api/invoices/${draft.body.id}`)).body as InvoiceDetail;
+    expect(typed.body).toMatchObject({ depositCredit: '0.00', total: subtotal });
+    const read = async () => {
+      await billingQueueSettled(t, [f.firmId]);
+      return (await f.agent.get(`/api/invoices/${draft.body.id}`)).body as InvoiceDetail;
+    };
 
     await f.issue(depositId);
-    // The same pro-rata share as above (4,800 × 21,600 ÷ 48,000), the typed amount kept.
-    expect(await read()).toMatchObject({ subtotal: '21600.00', depositCredit: '2160.00', total: '19440.00', status: 'draft' });
-    expect((await read()).progress!.lines[0]).toMatchObject({ thisPeriodWork: '24000.00' });
+    // Pro rata, as above: the deposit's share of what the invoice earns, 4,800 ÷ 48,000 of it.
+    const credit = new Decimal(subtotal).times(4800).div(48000).toDecimalPlaces(2, Decimal.ROUND_HALF_UP);
+    const refigured = await read();
+    expect(refigured).toMatchObject({
+      status: 'draft',
+      subtotal,
+      depositCredit: credit.toFixed(2),
+      total: new Decimal(subtotal).minus(credit).toFixed(2),
+    });
+    expect(refigured.progress!.lines[0]).toMatchObject({ thisPeriodWork: '12345.67' });
+    const history = (await f.agent.get(`/api/jobs/${f.jobId}/history`)).body as { items: Array<{ text: string; who: string }> };
+    expect(history.items.filter((e) => e.text.startsWith('Progress invoice draft refigured'))).toHaveLength(1);
 
     expect((await f.send('post', `/api/invoices/${depositId}/void`, { reason: 'Wrong client' })).status).toBe(200);
-    expect(await read()).toMatchObject({ subtotal: '21600.00', depositCredit: '0.00', total: '21600.00', status: 'draft' });
+    const back = await read();
+    expect(back).toMatchObject({ status: 'draft', subtotal, depositCredit: '0.00', total: subtotal });
+    expect(back.progress!.lines[0]).toMatchObject({ thisPeriodWork: '12345.67' });
   });
 
   it('an invoice issued for nothing due (no work this period, or all of it taken by the deposit credit) is paid, never overdue', async () => {

@@ -4,7 +4,7 @@ import { computePayApplication, DomainInputError, minorUnitDigits, type PayAppli
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
-import { conflict, HttpError } from '../http/problem';
+import { conflict } from '../http/problem';
 import { assertBillingStarted, invoiceTax, LIVE_ISSUED, loadBillingJob, type StartedJob } from './billing-job';
 import { progressDepositCredit } from './drafts';
 
@@ -254,21 +254,32 @@ export async function draftProgressInvoice(tx: TenantTx, request: ProgressDraftR
 
 /**
  * After another invoice of a progress-billed job is issued or voided — a deposit to credit, a period
- * no longer billed — the open progress draft's figures follow at once, its period and typed amounts
- * kept, so the office never reads a stale total. A schedule of values that no longer ties out leaves
- * the draft as it was (issuing it says why).
+ * no longer billed — the queue refigures the open progress draft (evaluateJobBilling's
+ * `refreshDraft`), its period and typed amounts kept, so the office never reads a stale total; a
+ * changed total is in the job's history. Throws as draftProgressInvoice does (a schedule of values
+ * that no longer ties out: 409, before anything is written).
  */
 export async function refreshOpenProgressDraft(tx: TenantTx, jobId: string, actor: Actor): Promise<void> {
   const open = (
-    await tx.client.query<{ period_end: string }>(
-      `select period_end::text as period_end from invoices where tenant_id = $1 and job_id = $2 and kind = 'progress' and status = 'draft'`,
+    await tx.client.query<{ id: string; period_end: string; total: string }>(
+      `select id, period_end::text as period_end, total::text as total from invoices
+        where tenant_id = $1 and job_id = $2 and kind = 'progress' and status = 'draft'`,
       [tx.tenantId, jobId],
     )
   ).rows[0];
   if (!open) return;
-  try {
-    await draftProgressInvoice(tx, { jobId, periodEnd: open.period_end, origin: 'office', actor });
-  } catch (e) {
-    if (!(e instanceof HttpError && e.status === 409)) throw e;
-  }
+  await draftProgressInvoice(tx, { jobId, periodEnd: open.period_end, origin: 'queue', actor });
+  const { rows } = await tx.client.query<{ total: string }>(`select total::text as total from invoices where tenant_id = $1 and id = $2`, [
+    tx.tenantId,
+    open.id,
+  ]);
+  if (rows[0].total === open.total) return;
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'invoice.updated',
+    entity: 'invoice',
+    entityId: open.id,
+    data: { kind: 'progress', refigured: 'another invoice of the job was issued or voided', totalBefore: open.total, total: rows[0].total },
+  });
 }

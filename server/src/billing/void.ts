@@ -8,14 +8,14 @@ import { firmToday, loadBillingJob } from './billing-job';
 import { enqueueInvoiceMail } from './invoice-mail';
 import type { IssueDeps } from './issue';
 import { nextDocumentNumber } from './numbering';
-import { refreshOpenProgressDraft } from './progress-invoice';
+import { enqueueBillingCheck } from './triggers/enqueue';
 import { loadBillingSettings } from './settings';
 
 /**
  * POST /api/invoices/:id/void — an issued invoice is never changed: voiding makes a credit note
  * numbered from the firm's credit-note series in the same transaction, for the whole total. Refused
  * (409) on a draft (delete it), a void invoice, or one with payments (refund them first). Its
- * schedule line waits for its trigger again; a progress-billed job's open draft is refigured. The client hears of it only if the invoice was e-mailed.
+ * schedule line waits for its trigger again; a progress-billed job's open draft is refigured (by the queue). The client hears of it only if the invoice was e-mailed.
  */
 export async function voidInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, reason: string, now: Date): Promise<void> {
   const inv = (
@@ -78,7 +78,8 @@ export async function voidInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, i
     entityId: creditNoteId,
     data: { number: numberText, invoiceId: id, amount: inv.total },
   });
-  // The open progress draft bills from what stays issued: the deposit it credits, the work billed before.
-  if (job.billing_method === 'progress') await refreshOpenProgressDraft(tx, job.id, actor);
+  // The open progress draft bills from what stays issued (the deposit it credits, the work billed
+  // before): the queue refigures it once this commits, taking the job's lock first as drafting does.
+  if (job.billing_method === 'progress') await enqueueBillingCheck(tx, deps.queue, job.id, { refreshDraft: true });
   if (inv.sent_at) await enqueueInvoiceMail(tx, deps.queue, deps.config, id, { kind: 'creditNote', creditNoteId });
 }

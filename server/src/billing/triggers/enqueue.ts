@@ -7,13 +7,19 @@ import { type BillingEvaluateJob, QUEUES } from '../../queue/queues';
  * only if the write that may have met a trigger (a progress mark, billing start, an approved change
  * order) commits. The check itself is idempotent, so an extra one costs nothing. `progressMarked`:
  * a percent complete or stored materials was marked (a progress-billed job's application is drafted).
+ * `refreshDraft`: another invoice of the job was issued or voided (its open application is refigured, its period kept).
  */
 export async function enqueueBillingCheck(
   tx: TenantTx,
   queue: JobQueue,
   jobId: string,
-  opts: { progressMarked?: boolean } = {},
+  opts: { progressMarked?: boolean; refreshDraft?: boolean } = {},
 ): Promise<void> {
-  const data: BillingEvaluateJob = { tenantId: tx.tenantId, jobId, ...(opts.progressMarked ? { progressMarked: true } : {}) };
+  const data: BillingEvaluateJob = {
+    tenantId: tx.tenantId,
+    jobId,
+    ...(opts.progressMarked ? { progressMarked: true } : {}),
+    ...(opts.refreshDraft ? { refreshDraft: true } : {}),
+  };
   await queue.send(QUEUES.billingEvaluate, data, tx);
 }

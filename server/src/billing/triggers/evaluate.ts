@@ -1,4 +1,4 @@
-import type { BillingTrigger } from '@layerbook/contracts';
+import type { BillingTrigger, InvoiceKind } from '@layerbook/contracts';
 import { withTenant, type TenantTx } from '@layerbook/db';
 import { layerCompletion } from '@layerbook/domain';
 import type { Pool } from 'pg';
@@ -8,7 +8,7 @@ import { HttpError } from '../../http/problem';
 import type { BillingEvaluateJob } from '../../queue/queues';
 import { recordAudit } from '../../audit/record';
 import { draftLineInvoice } from '../drafts';
-import { draftProgressInvoice } from '../progress-invoice';
+import { draftProgressInvoice, refreshOpenProgressDraft } from '../progress-invoice';
 
 interface JobRow {
   billing_started_at: Date | null;
@@ -69,7 +69,8 @@ export function triggerMet(
  * was reopened is withdrawn. Idempotent: a line with a live invoice is
  * 'ready', not 'scheduled', and draftLineInvoice drafts once per line however often it is asked.
  * With `progressMarked` (a percent or stored materials was just marked) a progress-billed job's one
- * open application is drafted, or refreshed, to the period ending today. Returns how many invoices
+ * open application is drafted, or refreshed, to the period ending today; with `refreshDraft` (another
+ * invoice of the job was issued or voided) the open one is refigured for its own period. Returns how many invoices
  * it drafted.
  */
 export async function evaluateJobBilling(
@@ -77,7 +78,7 @@ export async function evaluateJobBilling(
   jobId: string,
   today: string,
   actor: Actor,
-  opts: { progressMarked?: boolean } = {},
+  opts: { progressMarked?: boolean; refreshDraft?: boolean } = {},
 ): Promise<number> {
   // The job's row first, as issuing and drafting take it: two checks of one job (a progress mark's and
   // billing start's, on two workers) go one after the other. Unlocked, they could deadlock: one drafting a
@@ -91,21 +92,27 @@ export async function evaluateJobBilling(
   const job = jobs[0];
   if (!job || !job.billing_started_at || job.status === 'cancelled') return 0;
   let drafted = 0;
-  if (opts.progressMarked && job.billing_method === 'progress') {
+  if ((opts.progressMarked || opts.refreshDraft) && job.billing_method === 'progress') {
     // A schedule of values that does not tie out (say, after a change order) is the office's to fix
     // and a retry cannot: the draft is left for a person (who sees why on drafting), not retried.
     await tx.client.query('savepoint progress_draft');
     try {
-      const { isNew } = await draftProgressInvoice(tx, { jobId, periodEnd: today, origin: 'queue', actor });
-      if (isNew) drafted++;
+      if (opts.progressMarked) {
+        const { isNew } = await draftProgressInvoice(tx, { jobId, periodEnd: today, origin: 'queue', actor });
+        if (isNew) drafted++;
+      } else {
+        await refreshOpenProgressDraft(tx, jobId, actor);
+      }
       await tx.client.query('release savepoint progress_draft');
     } catch (error) {
       if (!(error instanceof HttpError) || error.status >= 500) throw error;
       await tx.client.query('rollback to savepoint progress_draft');
     }
   }
-  const { rows: lines } = await tx.client.query<LineRow & { status: 'scheduled' | 'ready'; withdrawable: string | null }>(
-    `select l.id, l.trigger, l.status, i.id as withdrawable from payment_schedule_lines l
+  const { rows: lines } = await tx.client.query<
+    LineRow & { status: 'scheduled' | 'ready'; withdrawable: string | null; withdrawable_kind: InvoiceKind | null }
+  >(
+    `select l.id, l.trigger, l.status, i.id as withdrawable, i.kind as withdrawable_kind from payment_schedule_lines l
        left join invoices i on i.tenant_id = l.tenant_id and i.schedule_line_id = l.id and i.status = 'draft' and i.origin = 'queue'
                            and i.updated_at = i.created_at
       where l.tenant_id = $1 and l.job_id = $2 and (l.status = 'scheduled' or (l.status = 'ready' and l.trigger->>'kind' = 'layerComplete'))
@@ -120,7 +127,15 @@ export async function evaluateJobBilling(
   for (const line of lines) {
     const triggerText = triggerMet(line.trigger, { walkthroughOn: job.walkthrough_on }, items, today);
     if (line.status === 'ready') {
-      if (triggerText === null && line.withdrawable) await withdrawDraft(tx, line.withdrawable, line.id, line.trigger, jobId, items, actor);
+      if (triggerText === null && line.withdrawable && line.withdrawable_kind) {
+        await withdrawDraft(
+          tx,
+          { id: line.withdrawable, kind: line.withdrawable_kind, lineId: line.id, trigger: line.trigger },
+          jobId,
+          items,
+          actor,
+        );
+      }
       continue;
     }
     if (triggerText === null) continue;
@@ -131,19 +146,18 @@ export async function evaluateJobBilling(
 }
 
 /**
- * A layer reopened after its stage payment was drafted: the draft the queue made, still untouched,
+ * A layer reopened after the payment waiting on it was drafted: the draft the queue made, still untouched,
  * goes (its line waits for the layer again, and the office reads why in the job's history). A draft
  * the office has changed is theirs to keep or delete.
  */
 async function withdrawDraft(
   tx: TenantTx,
-  invoiceId: string,
-  lineId: string,
-  trigger: BillingTrigger,
+  draft: { readonly id: string; readonly kind: InvoiceKind; readonly lineId: string; readonly trigger: BillingTrigger },
   jobId: string,
   items: readonly ItemRow[],
   actor: Actor,
 ): Promise<void> {
+  const { id: invoiceId, lineId, trigger } = draft;
   const layerId = trigger.kind === 'layerComplete' ? trigger.layerId : '';
   const layer = items.find((i) => i.layer_id === layerId)?.layer_name ?? 'The layer';
   // Rechecked as it deletes: an edit committed meanwhile (the row re-read after its lock) keeps the draft.
@@ -162,7 +176,7 @@ async function withdrawDraft(
     action: 'invoice.deleted',
     entity: 'invoice',
     entityId: invoiceId,
-    data: { kind: 'milestone', jobId, withdrawn: `${layer} was reopened`, scheduleLineId: lineId },
+    data: { kind: draft.kind, jobId, withdrawn: `${layer} was reopened`, scheduleLineId: lineId },
   });
 }
 
@@ -171,6 +185,9 @@ export async function runBillingEvaluate(pool: Pool, data: BillingEvaluateJob, n
   return withTenant(pool, data.tenantId, async (tx) => {
     const { rows } = await tx.client.query<{ time_zone: string }>(`select time_zone from firms where id = $1`, [tx.tenantId]);
     if (!rows[0]) return 0;
-    return evaluateJobBilling(tx, data.jobId, localDate(rows[0].time_zone, now), SYSTEM_ACTOR, { progressMarked: data.progressMarked });
+    return evaluateJobBilling(tx, data.jobId, localDate(rows[0].time_zone, now), SYSTEM_ACTOR, {
+      progressMarked: data.progressMarked,
+      refreshDraft: data.refreshDraft,
+    });
   });
 }
