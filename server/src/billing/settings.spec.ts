@@ -107,6 +107,13 @@ describe('firm billing settings', () => {
       .set('x-csrf-token', f.csrf())
       .send({ ...DEFAULT_BILLING_SETTINGS, invoicePrefix: '', creditNotePrefix: 'CR ' });
     expect(plain.status).toBe(200);
+    // With reminders off the count is not asked for (settings saved before the rule still save).
+    const off = {
+      ...DEFAULT_BILLING_SETTINGS,
+      reminders: { ...DEFAULT_BILLING_SETTINGS.reminders, isOn: false, everyDaysAfter: 7, maxAfter: 0 },
+    };
+    expect((await f.agent.put('/api/firm/billing').set('x-csrf-token', f.csrf()).send(off)).status).toBe(200);
+    expect((await f.agent.put('/api/firm/billing').set('x-csrf-token', f.csrf()).send(DEFAULT_BILLING_SETTINGS)).status).toBe(200);
   });
 
   it("a new proposal's deposit keeps within the firm's saved cap (percent as a share, in decimal)", async () => {

@@ -94,7 +94,7 @@ export const billingSettings = requestSchema<BillingSettings>()(
             .max(L.maxAfter.max, { error: `At most ${L.maxAfter.max}.` }),
         })
         .superRefine((reminders, check) => {
-          if (reminders.everyDaysAfter !== null && reminders.maxAfter === 0) {
+          if (reminders.isOn && reminders.everyDaysAfter !== null && reminders.maxAfter === 0) {
             check.addIssue({ code: 'custom', path: ['maxAfter'], message: NONE_AFTER_WORDS });
           }
         }),

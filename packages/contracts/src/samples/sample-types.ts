@@ -119,7 +119,6 @@ export interface ClientBoardView {
   readonly finishSteps: readonly string[];
   readonly clientComment: string;
   readonly decidedAt: string | null;
-  /** thumbnails only, served by the portal's own route */
   /** thumbnails, each with the full photo to open (the portal's own routes) */
   readonly photos: readonly ClientBoardPhoto[];
 }

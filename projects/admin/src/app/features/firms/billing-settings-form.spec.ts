@@ -89,6 +89,11 @@ describe('billing settings form ↔ BillingSettings', () => {
     expect(maxAfter.hasError('noneAfter')).toBe(true);
     hasEveryDaysAfter.setValue(false);
     expect(maxAfter.valid).toBe(true);
+    // Reminders switched off hide the count: it cannot then stop a save.
+    hasEveryDaysAfter.setValue(true);
+    expect(maxAfter.hasError('noneAfter')).toBe(true);
+    form.controls.reminders.controls.isOn.setValue(false);
+    expect(maxAfter.valid).toBe(true);
   });
 
   it('sends a share rule as a whole percent and an amount without separators', () => {

@@ -30,9 +30,10 @@ function requiredWhen(sibling: string, isInUse: (value: unknown) => boolean): Va
   };
 }
 
-/** At least one while a sibling says the field is in use (reminders after the due date need a count). */
-function atLeastOneWhen(sibling: string): ValidatorFn {
-  return (control) => (control.parent?.get(sibling)?.value === true && control.value === 0 ? { noneAfter: true } : null);
+/** At least one while the siblings say the field is in use (reminders on, and after the due date, need a count). */
+function atLeastOneWhen(...siblings: string[]): ValidatorFn {
+  return (control) =>
+    siblings.every((name) => control.parent?.get(name)?.value === true) && control.value === 0 ? { noneAfter: true } : null;
 }
 
 /** Re-checks `dependent` when `on` changes (unless the form is being disabled). */
@@ -93,10 +94,11 @@ export function billingSettingsForm() {
     onDueDate: new FormControl(false, { nonNullable: true }),
     hasEveryDaysAfter: new FormControl(false, { nonNullable: true }),
     everyDaysAfter: days(L.reminderDays, [requiredWhen('hasEveryDaysAfter', (on) => on === true)]),
-    maxAfter: days(L.maxAfter, [Validators.required, atLeastOneWhen('hasEveryDaysAfter')]),
+    maxAfter: days(L.maxAfter, [Validators.required, atLeastOneWhen('isOn', 'hasEveryDaysAfter')]),
   });
   recheck(reminders.controls.hasDaysBefore, [reminders.controls.daysBefore]);
   recheck(reminders.controls.hasEveryDaysAfter, [reminders.controls.everyDaysAfter, reminders.controls.maxAfter]);
+  recheck(reminders.controls.isOn, [reminders.controls.maxAfter]);
   const form = new FormGroup({
     depositCap,
     depositCapName: new FormControl('', {

@@ -60,9 +60,9 @@ describe('the queue of marks on the phone', () => {
   it('a refused mark stays to be read but is not sent again', () => {
     let q = addMark([], done('w1'), made('k1')).queue;
     q = addMark(q, done('w2'), made('k2')).queue;
-    q = refuse(q, 'k1', 'The day cannot be later than 2026-12-03.');
+    q = refuse(q, 'k1', 'The day cannot be later than December 3, 2026.');
     expect(nextToSend(q, A)?.clientKey).toBe('k2');
-    expect(marksFor(q, A, 'job-1')[0]).toMatchObject({ state: 'refused', problem: 'The day cannot be later than 2026-12-03.' });
+    expect(marksFor(q, A, 'job-1')[0]).toMatchObject({ state: 'refused', problem: 'The day cannot be later than December 3, 2026.' });
     // a new mark on a layer whose last mark was refused is a new mark
     expect(addMark(q, done('w1'), made('k3')).mark.clientKey).toBe('k3');
   });
@@ -89,9 +89,9 @@ describe('what an answer means for a mark', () => {
   });
 
   it('reads the server words from problem+json (RFC 9457): a field message, else detail, else title', () => {
-    expect(problemText({ title: 'Bad request', errors: [{ field: 'on', message: 'The day cannot be later than 2026-12-03.' }] })).toBe(
-      'The day cannot be later than 2026-12-03.',
-    );
+    expect(
+      problemText({ title: 'Bad request', errors: [{ field: 'on', message: 'The day cannot be later than December 3, 2026.' }] }),
+    ).toBe('The day cannot be later than December 3, 2026.');
     expect(problemText({ title: 'Conflict', detail: 'This job is cancelled: its progress can no longer change.' })).toBe(
       'This job is cancelled: its progress can no longer change.',
     );

@@ -124,10 +124,10 @@ describe('OfflineMarks', () => {
     http
       .expectOne(url)
       .flush(
-        { title: 'Bad request', status: 400, errors: [{ field: 'on', message: 'The day cannot be later than 2026-12-03.' }] },
+        { title: 'Bad request', status: 400, errors: [{ field: 'on', message: 'The day cannot be later than December 3, 2026.' }] },
         { status: 400, statusText: 'Bad Request' },
       );
-    await expect(made).rejects.toEqual(new MarkRefused('The day cannot be later than 2026-12-03.'));
+    await expect(made).rejects.toEqual(new MarkRefused('The day cannot be later than December 3, 2026.'));
     expect(marks.pending(JOB)()).toEqual([]);
   });
 
