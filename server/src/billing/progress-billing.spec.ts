@@ -13,21 +13,30 @@ beforeAll(async () => {
 });
 afterAll(() => t.stop());
 
+/**
+ * A job of the worked example's shape: 10 % retainage on work and stored materials (deposit credited
+ * pro rata, the default), and a 48,000 contract with no tax inside (the accepted option's own total is
+ * set aside).
+ */
+async function exampleJob(name: string) {
+  const f = await billingJob(t, name);
+  const settings = { ...DEFAULT_BILLING_SETTINGS, retainage: { workPercent: 10, storedPercent: 10, stopAtPercentComplete: null } };
+  expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
+  await withTenant(t.ctx.pool, f.firmId, (tx) =>
+    tx.client.query(
+      `update jobs set contract_sum = 48000, original_contract_sum = 48000, contract_tax = 0 where tenant_id = $1 and id = $2`,
+      [tx.tenantId, f.jobId],
+    ),
+  );
+  return f;
+}
+
 describe('progress billing through the API', () => {
   // DOMAIN.md §2.10 worked example (AIA G702/G703 arithmetic summaries): original contract 48,000,
   // change order #1 +3,200, retainage 10 % on work and on stored materials; application #1 certifies
   // 14,800 of work (13,320 after retainage); application #2 is due 17,010 with 3,370 held.
   it('reproduces the worked example: application #1, then #2 after a change order, line retainage adding up to the summary', async () => {
-    const f = await billingJob(t, 'Progress Example Plaster');
-    const settings = { ...DEFAULT_BILLING_SETTINGS, retainage: { workPercent: 10, storedPercent: 10, stopAtPercentComplete: null } };
-    expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
-    // The example's contract: 48,000 with no tax inside (the accepted option's own total is set aside).
-    await withTenant(t.ctx.pool, f.firmId, (tx) =>
-      tx.client.query(
-        `update jobs set contract_sum = 48000, original_contract_sum = 48000, contract_tax = 0 where tenant_id = $1 and id = $2`,
-        [tx.tenantId, f.jobId],
-      ),
-    );
+    const f = await exampleJob('Progress Example Plaster');
     const method = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, { method: 'progress', lines: [] });
     expect(method.status).toBe(200);
     const notSum = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
@@ -179,19 +188,7 @@ describe('progress billing through the API', () => {
   });
 
   it("takes the deposit off progress invoices by the firm's rule (pro rata: the deposit's share of what the invoice earns)", async () => {
-    const f = await billingJob(t, 'Progress Deposit Plaster');
-    const settings = {
-      ...DEFAULT_BILLING_SETTINGS,
-      retainage: { workPercent: 10, storedPercent: 10, stopAtPercentComplete: null },
-      depositCredit: 'prorata',
-    };
-    expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
-    await withTenant(t.ctx.pool, f.firmId, (tx) =>
-      tx.client.query(
-        `update jobs set contract_sum = 48000, original_contract_sum = 48000, contract_tax = 0 where tenant_id = $1 and id = $2`,
-        [tx.tenantId, f.jobId],
-      ),
-    );
+    const f = await exampleJob('Progress Deposit Plaster');
     const onlyMilestone = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
       method: 'progress',
       lines: [{ label: 'Stage payment', role: 'milestone', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
@@ -225,15 +222,7 @@ describe('progress billing through the API', () => {
   });
 
   it('refigures the open progress draft (through the queue) when a deposit is issued or voided after it was drafted', async () => {
-    const f = await billingJob(t, 'Late Deposit Plaster');
-    const settings = { ...DEFAULT_BILLING_SETTINGS, retainage: { workPercent: 10, storedPercent: 10, stopAtPercentComplete: null } };
-    expect((await f.send('put', '/api/firm/billing', settings)).status).toBe(200);
-    await withTenant(t.ctx.pool, f.firmId, (tx) =>
-      tx.client.query(
-        `update jobs set contract_sum = 48000, original_contract_sum = 48000, contract_tax = 0 where tenant_id = $1 and id = $2`,
-        [tx.tenantId, f.jobId],
-      ),
-    );
+    const f = await exampleJob('Late Deposit Plaster');
     await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
       method: 'progress',
       lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
