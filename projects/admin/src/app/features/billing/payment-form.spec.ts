@@ -7,6 +7,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { progressDraft } from './invoice-fixtures';
 import { PaymentForm } from './payment-form';
 import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { formByLabels } from '../../shared/testing/form-fields';
 import { officeWords } from '../../shared/testing/office-words';
 
 const issued: InvoiceDetail = { ...progressDraft, number: 'INV-0008', status: 'issued', issuedOn: '2026-11-20', amountDue: '800.00' };
@@ -18,23 +19,7 @@ function render() {
   const fixture = TestBed.createComponent(PaymentForm);
   fixture.componentRef.setInput('invoice', issued);
   fixture.detectChanges();
-  const html = fixture.nativeElement as HTMLElement;
-  const field = (label: string): HTMLInputElement => {
-    const formField = [...html.querySelectorAll('mat-form-field')].find((f) => f.querySelector('mat-label')?.textContent?.trim() === label);
-    return formField!.querySelector<HTMLInputElement>('input')!;
-  };
-  const type = (label: string, value: string): void => {
-    const input = field(label);
-    input.value = value;
-    input.dispatchEvent(new Event('input'));
-    fixture.detectChanges();
-  };
-  const submit = async (): Promise<void> => {
-    html.querySelector('form')!.dispatchEvent(new Event('submit'));
-    fixture.detectChanges();
-    await fixture.whenStable();
-  };
-  const errorOf = (label: string): string => field(label).closest('mat-form-field')?.querySelector('mat-error')?.textContent?.trim() ?? '';
+  const { type, submit, errorOf } = formByLabels(fixture);
   return { type, submit, errorOf, http: TestBed.inject(HttpTestingController) };
 }
 

@@ -8,6 +8,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cardOverpayment, cardRefundPending, chequeRefund, transferPayment } from './payment-fixtures';
 import { RefundDialog, type RefundDialogData } from './refund-dialog';
 import { provideTestI18n } from '../../../../../shared/i18n/testing';
+import { formByLabels } from '../../shared/testing/form-fields';
 import { officeWords } from '../../shared/testing/office-words';
 
 function render(payment: PaymentDetail) {
@@ -25,28 +26,12 @@ function render(payment: PaymentDetail) {
   });
   const fixture = TestBed.createComponent(RefundDialog);
   fixture.detectChanges();
-  const html = fixture.nativeElement as HTMLElement;
-  const field = (label: string): HTMLInputElement | HTMLTextAreaElement => {
-    const formField = [...html.querySelectorAll('mat-form-field')].find((f) => f.querySelector('mat-label')?.textContent?.trim() === label);
-    return formField!.querySelector<HTMLInputElement | HTMLTextAreaElement>('input, textarea')!;
-  };
-  const type = (label: string, value: string): void => {
-    const input = field(label);
-    input.value = value;
-    input.dispatchEvent(new Event('input'));
-    fixture.detectChanges();
-  };
+  const { html, field, type, submit, errorOf } = formByLabels(fixture);
   const choose = (words: string): void => {
     const radio = [...html.querySelectorAll('mat-radio-button')].find((r) => r.textContent?.trim() === words);
     radio!.querySelector('input')!.click();
     fixture.detectChanges();
   };
-  const submit = async (): Promise<void> => {
-    html.querySelector('form')!.dispatchEvent(new Event('submit'));
-    fixture.detectChanges();
-    await fixture.whenStable();
-  };
-  const errorOf = (label: string): string => field(label).closest('mat-form-field')?.querySelector('mat-error')?.textContent?.trim() ?? '';
   const component = fixture.componentInstance;
   return { fixture, html, field, type, choose, submit, errorOf, close, component, http: TestBed.inject(HttpTestingController) };
 }
