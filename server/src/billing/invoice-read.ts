@@ -148,6 +148,7 @@ interface DetailRow extends SummaryRow {
   document: InvoiceDocument | null;
   notes: string;
   trigger: { text?: string | null } | null;
+  reopened_layer: string | null;
   sent_at: Date | null;
   void_reason: string | null;
   time_zone: string;
@@ -225,7 +226,11 @@ export const invoiceDetailReads = (tenantId: string, id: string, now: Date): Sql
      select ${summaryColumns('(select today from clock)')}, i.schedule_line_id, i.period_end::text as period_end, i.subtotal::text as subtotal,
             i.deposit_credit::text as deposit_credit, i.retainage_held::text as retainage_held, i.tax_included::text as tax_included,
             i.amount_paid::text as amount_paid, i.amount_credited::text as amount_credited, i.lines, i.progress, i.document, i.notes,
-            i.trigger, i.sent_at, i.void_reason
+            i.trigger, i.sent_at, i.void_reason,
+            (select w.layer_name from job_work_items w
+              where i.status = 'draft' and i.trigger->>'kind' = 'layerComplete'
+                and w.tenant_id = i.tenant_id and w.job_id = i.job_id and w.layer_id = i.trigger->>'layerId' and w.done_on is null
+              limit 1) as reopened_layer
        ${SUMMARY_FROM} where i.tenant_id = $1 and i.id = $2`,
     values: [tenantId, id, now],
   },
@@ -326,6 +331,7 @@ export function invoiceDetailFrom(id: string, results: Record<string, unknown>[]
     document,
     notes: r.notes,
     triggerText: r.trigger?.text ?? null,
+    reopenedLayer: r.reopened_layer,
     sentAt: r.sent_at?.toISOString() ?? null,
     voidReason: r.void_reason,
     creditNote,

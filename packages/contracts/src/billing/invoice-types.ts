@@ -178,6 +178,11 @@ export interface InvoiceDetail extends InvoiceSummary {
   readonly notes: string;
   /** what drafted it, in words ("Base coat finished on every surface on 2026-12-10") */
   readonly triggerText: string | null;
+  /**
+   * A stage payment's draft whose layer was reopened after it was drafted (no longer finished on every
+   * surface it covers): that layer's name, for the office to check before issuing; null otherwise.
+   */
+  readonly reopenedLayer: string | null;
   readonly sentAt: string | null;
   readonly voidReason: string | null;
   readonly creditNote: CreditNoteView | null;

@@ -1,4 +1,4 @@
-import type { JobProgressView } from '@layerbook/contracts';
+import type { InvoiceDetail, JobProgressView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { joinAs } from '../../proposals/proposal-fixtures';
 import { startTestServer, type TestServer } from '../../testing/harness';
@@ -111,12 +111,18 @@ describe('billing triggers from the work', () => {
       .set('x-csrf-token', job.csrf())
       .send({ notes: 'Second coat checked on site' });
     expect(noted.status).toBe(200);
+    const reopenedLayer = async () => ((await job.agent.get(`/api/invoices/${stageDraft.id}`)).body as InvoiceDetail).reopenedLayer;
+    expect(await reopenedLayer()).toBeNull();
     expect((await reopen()).status).toBe(201);
     await queueSettled([job.firmId]);
     expect((await invoicesOf(job)).map((i) => [i.kind, i.status])).toEqual([
       ['deposit', 'draft'],
       ['milestone', 'draft'],
     ]);
+    // Kept, and its page says the layer is open again until it is done once more.
+    expect(await reopenedLayer()).toBe(items[0].layerName);
+    expect((await mark(items[1].id, '2026-12-01')).status).toBe(201);
+    expect(await reopenedLayer()).toBeNull();
   }, 120_000);
 
   it('drafts nothing before billing starts, and drafts the final invoice at the walkthrough', async () => {

@@ -54,6 +54,15 @@ describe('the invoice page', () => {
     expect(text()).toContain('10 % of work, 10 % of stored materials');
   });
 
+  it('warns on a stage payment’s draft whose layer was reopened after it was drafted', async () => {
+    const { html, text } = await render({ ...progressDraft, kind: 'milestone', progress: null, reopenedLayer: 'Lime base coat' });
+    expect(html.querySelector('[role="note"]')?.textContent).toContain(
+      'Lime base coat was reopened after this draft was made: it is no longer done on every surface it covers.',
+    );
+    expect(buttons(html)).toEqual(expect.arrayContaining([expect.stringContaining('Issue…'), expect.stringContaining('Delete draft')]));
+    expect(text()).not.toContain('undefined');
+  });
+
   it('says beside the field why work to date cannot go below what was billed, and sends nothing', async () => {
     const { fixture, html, http } = await render(progressDraft);
     const work = html.querySelector<HTMLInputElement>('input[aria-label="Amount done to date for Walls, base coat"]')!;

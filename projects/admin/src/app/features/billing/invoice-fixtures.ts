@@ -82,6 +82,7 @@ export const progressDraft: InvoiceDetail = {
   },
   notes: '',
   triggerText: 'Base coat finished on all 3 surfaces it covers on 2026-11-28',
+  reopenedLayer: null,
   sentAt: null,
   voidReason: null,
   creditNote: null,
