@@ -15,7 +15,9 @@ import { loadBillingSettings } from './settings';
  * POST /api/invoices/:id/void — an issued invoice is never changed: voiding makes a credit note
  * numbered from the firm's credit-note series in the same transaction, for the whole total. Refused
  * (409) on a draft (delete it), a void invoice, or one with payments (refund them first). Its
- * schedule line waits for its trigger again; a progress-billed job's open draft is refigured (by the queue). The client hears of it only if the invoice was e-mailed.
+ * schedule line waits for its trigger again, and the queue drafts it afresh if the trigger is still
+ * met; a progress-billed job's open draft is refigured (by the queue). The client hears of it only if
+ * the invoice was e-mailed.
  */
 export async function voidInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, reason: string, now: Date): Promise<void> {
   const inv = (
@@ -78,8 +80,11 @@ export async function voidInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, i
     entityId: creditNoteId,
     data: { number: numberText, invoiceId: id, amount: inv.total },
   });
-  // The open progress draft bills from what stays issued (the deposit it credits, the work billed
-  // before): the queue refigures it once this commits, taking the job's lock first as drafting does.
-  if (job.billing_method === 'progress') await enqueueBillingCheck(tx, deps.queue, job.id, { refreshDraft: true });
+  // Once this commits the queue checks the job, taking its lock first as drafting does: the line whose
+  // trigger is still met is drafted again for the office to review (as the daily check would the next
+  // morning), and the open progress draft is refigured from what stays issued (the deposit it credits,
+  // the work billed before).
+  const progress = job.billing_method === 'progress';
+  if (progress || inv.schedule_line_id) await enqueueBillingCheck(tx, deps.queue, job.id, { refreshDraft: progress });
   if (inv.sent_at) await enqueueInvoiceMail(tx, deps.queue, deps.config, id, { kind: 'creditNote', creditNoteId });
 }

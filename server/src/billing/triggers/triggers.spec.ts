@@ -138,6 +138,15 @@ describe('billing triggers from the work', () => {
       ['deposit', 'Due on acceptance: billing started'],
       ['final', 'Final walkthrough held on 2026-12-01'],
     ]);
+
+    // Issued, then voided: its line's trigger still met, the queue drafts it again for review at once.
+    const [, final] = await query<{ id: string }>(job, `select id from invoices where tenant_id = $1 and job_id = $2 order by created_at`);
+    const post = (path: string, body: object) => job.agent.post(path).set('x-csrf-token', job.csrf()).send(body);
+    expect((await post(`/api/invoices/${final.id}/issue`, { send: false })).status).toBe(200);
+    expect((await post(`/api/invoices/${final.id}/void`, { reason: 'Wrong walkthrough day' })).status).toBe(200);
+    await queueSettled([job.firmId]);
+    const rows = (await invoicesOf(job)).map((i) => [i.kind, i.status, i.origin, i.line_status].join(' '));
+    expect(rows.sort()).toEqual(['deposit draft queue ready', 'final draft queue ready', 'final void queue ready']);
   }, 120_000);
 
   it('drafts or refreshes one progress application after a percent is marked on a progress-billed job', async () => {
