@@ -12,7 +12,7 @@ import { enqueueBillingCheck } from '../triggers/enqueue';
 import { changeOrderAnsweredMail } from './change-order-mail';
 import { MONEY_COLUMN_LIMIT, type StoredDetail } from './pricing';
 import { loadChangeOrder, toView, type ChangeOrderRow } from './read';
-import { changeValueLines } from './value-lines';
+import { changeValueLines, deductionFitsUntouched } from './value-lines';
 
 /** A change order the client may read: one of their own jobs', sent or decided (never a draft); 404 otherwise. */
 async function loadClientChangeOrder(tx: TenantTx, client: ClientPrincipal, id: string, lock = false): Promise<ChangeOrderRow> {
@@ -136,7 +136,8 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
     },
     now,
   );
-  await enqueueBillingCheck(tx, ctx.queue, row.job_id);
+  // The open progress application is refigured on the new contract sum and lines (the schedule's lines are checked).
+  await enqueueBillingCheck(tx, ctx.queue, row.job_id, { refreshDraft: job.billing_method === 'progress' });
   return { contractSumBefore: before.toFixed(digits), contractSumAfter: after.toFixed(digits) };
 }
 
@@ -170,7 +171,12 @@ export async function whyNotApprovable(tx: TenantTx, row: ChangeOrderRow): Promi
   const after = new Decimal(job.contract_sum).plus(row.amount);
   if (after.lessThanOrEqualTo(0)) return 'it would take the contract sum to zero or below';
   if (after.greaterThanOrEqualTo(MONEY_COLUMN_LIMIT)) return 'it would take the contract sum past what can be recorded';
-  if (job.billing_method !== 'schedule') return null;
+  if (job.billing_method !== 'schedule') {
+    // Progress billing takes a deduction off the schedule-of-values lines no work has touched (changeValueLines).
+    if (new Decimal(row.amount).isNegative() && !(await deductionFitsUntouched(tx, row.job_id, row.amount)))
+      return 'it takes off more than the work not yet started on the schedule of values (credit the client instead)';
+    return null;
+  }
   const { rows: lines } = await tx.client.query<LineRow>(LINES_SQL, [tx.tenantId, row.job_id]);
   if (lines.length > 0 && lines.every(isBilled)) {
     return new Decimal(row.amount).isNegative()

@@ -45,10 +45,12 @@ describe('a deduction on a job billed by progress', () => {
     expect(draft.status).toBe(201);
   });
 
-  it('is refused when it is larger than the work not yet started, and nothing moves', async () => {
+  it('is not sent, or not approved, when it is larger than the work not yet started, and nothing moves', async () => {
     const f = await acceptedJob(t, 'Deduct Too Much Plaster');
     await f.agent.put(`/api/jobs/${f.jobId}/billing/schedule`).set('x-csrf-token', f.csrf()).send({ method: 'progress', lines: [] });
     await f.agent.post(`/api/jobs/${f.jobId}/billing/start`).set('x-csrf-token', f.csrf()).send({});
+    // Sent while no work was recorded, so it fitted then.
+    const down = await sendChangeOrder(f, (await addChangeOrder(f, lump('Leave out the border', '-100.00'))).id);
     const before = (await f.agent.get(`/api/jobs/${f.jobId}/billing`)).body as JobBillingView;
     for (const line of before.valueLines) {
       await f.agent
@@ -56,7 +58,11 @@ describe('a deduction on a job billed by progress', () => {
         .set('x-csrf-token', f.csrf())
         .send({ kind: 'valuePercent', valueLineId: line.id, percentComplete: 10, on: '2026-12-01' });
     }
-    const down = await sendChangeOrder(f, (await addChangeOrder(f, lump('Leave out the border', '-100.00'))).id);
+    // Now every line has work on it: a second deduction is not sent to be refused at approval.
+    const second = await addChangeOrder(f, lump('Leave out the frieze', '-50.00'));
+    const notSent = await f.agent.post(`/api/change-orders/${second.id}/send`).set('x-csrf-token', f.csrf()).send({});
+    expect(notSent.status).toBe(409);
+    expect(notSent.body.detail).toMatch(/takes off more than the work not yet started on the schedule of values/);
     const res = await f.client.agent
       .post(`/api/portal/change-orders/${down.id}/decision`)
       .set('x-csrf-token', f.client.csrf())

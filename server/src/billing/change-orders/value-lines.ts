@@ -47,6 +47,12 @@ export async function changeValueLines(
   }
 }
 
+/** Whether a deduction fits in the value lines no work has touched, as changeValueLines spreads it on a progress-billed job. */
+export async function deductionFitsUntouched(tx: TenantTx, jobId: string, amount: string): Promise<boolean> {
+  const { room } = await untouchedLines(tx, jobId);
+  return !new Decimal(amount).negated().greaterThan(room);
+}
+
 /** Value lines no work has touched: nothing billed, no percent recorded, nothing stored. */
 async function untouchedLines(tx: TenantTx, jobId: string) {
   const billed = await billedWorkByLine(tx, jobId);
