@@ -222,6 +222,16 @@ describe('progress marks', () => {
       expect(res.headers['content-type']).toContain('application/problem+json');
       expect((res.body as { errors: Array<{ field: string }> }).errors.map((e) => e.field)).toContain(field);
     }
+    // Stored materials in the job's currency's own units: no cents on a yen job.
+    const currency = async (c: string) => rows(job, `update jobs set currency = $3 where tenant_id = $1 and id = $2`, [c]);
+    await currency('JPY');
+    try {
+      const cents = await mark(job, { kind: 'storedMaterials', valueLineId: line.id, amount: '250.55', on: '2026-12-01' });
+      expect(cents.status).toBe(400);
+      expect((cents.body as { errors: Array<{ field: string }> }).errors.map((e) => e.field)).toEqual(['amount']);
+    } finally {
+      await currency('USD');
+    }
     expect(await rows(job, `select count(*)::int as n from job_progress where tenant_id = $1 and job_id = $2`)).toEqual(before);
   });
 

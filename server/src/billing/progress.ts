@@ -7,6 +7,7 @@ import { localDate } from '../firms/local-date';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, forbidden, notFound } from '../http/problem';
 import type { JobQueue } from '../queue/job-queue';
+import { decimalsMessage, fitsCurrency } from './money';
 import { enqueueBillingCheck } from './triggers/enqueue';
 import { ensureJobWork, loadWorkItems } from './work-items';
 import { longDate } from '../i18n/long-date';
@@ -130,6 +131,7 @@ function checkValueLine(
       ]);
     }
   } else if (mark.kind === 'storedMaterials') {
+    if (!fitsCurrency(mark.amount, currency)) throw badRequest([{ field: 'amount', message: decimalsMessage(currency) }]);
     const room = scheduled.minus(workAt(line.percent_complete));
     if (new Decimal(mark.amount).greaterThan(room)) {
       throw badRequest([
