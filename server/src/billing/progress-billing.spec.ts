@@ -266,6 +266,49 @@ describe('progress billing through the API', () => {
     expect(back.progress!.lines[0]).toMatchObject({ thisPeriodWork: '12345.67' });
   });
 
+  it('does not void what later invoices build on: a deposit they credit, an application before a later one', async () => {
+    const f = await exampleJob('Void Order Plaster');
+    await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
+      method: 'progress',
+      lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
+    });
+    const values = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
+      lines: [{ label: 'All the plaster work', scheduledValue: '48000.00' }],
+    });
+    const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
+    const depositId = await f.lineDraft((started.body as JobBillingView).lines[0].id);
+    await f.issue(depositId);
+    const lineId = (values.body as JobBillingView).valueLines[0].id;
+    const application = async (percent: number, periodEnd: string) => {
+      const draft = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd });
+      await f.send('patch', `/api/invoices/${draft.body.id}`, {
+        progressLines: [{ valueLineId: lineId, workToDate: { percent }, storedMaterials: '0' }],
+      });
+      return f.issue(draft.body.id);
+    };
+    const voidOf = (id: string) => f.send('post', `/api/invoices/${id}/void`, { reason: 'Billed in error' });
+    const first = await application(25, '2026-11-15');
+    expect(first).toMatchObject({ number: 'INV-0002', depositCredit: '1080.00' });
+    const second = await application(50, '2026-11-30');
+
+    // Voided, the deposit would leave 1,080 + 1,080 credited against nothing, billed by no invoice.
+    const deposit = await voidOf(depositId);
+    expect(deposit.status).toBe(409);
+    expect(deposit.body.detail).toBe(
+      'Later invoices take this deposit off as a credit (INV-0003 and INV-0002): void them first, newest first, then this deposit.',
+    );
+    // Application #2 bills work to date less #1's: voiding #1 under it would lose #1's amount.
+    const early = await voidOf(first.id);
+    expect(early.status).toBe(409);
+    expect(early.body.detail).toBe('INV-0003 was issued after this application and bills from it: void it before this one.');
+    const invoiced = (await f.billing()).totals.invoiced;
+
+    // Newest first, each goes.
+    for (const id of [second.id, first.id, depositId]) expect((await voidOf(id)).status).toBe(200);
+    expect(invoiced).toBe('24240.00');
+    expect((await f.billing()).totals).toMatchObject({ invoiced: '0.00', unbilled: '48000.00' });
+  });
+
   it('an invoice issued for nothing due (no work this period, or all of it taken by the deposit credit) is paid, never overdue', async () => {
     const f = await billingJob(t, 'Zero Application Plaster');
     expect((await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, { method: 'progress', lines: [] })).status).toBe(200);

@@ -1,10 +1,11 @@
+import type { InvoiceKind } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { documentNumber } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { conflict, notFound } from '../http/problem';
-import { firmToday, loadBillingJob } from './billing-job';
+import { firmToday, LIVE_ISSUED, loadBillingJob } from './billing-job';
 import { enqueueInvoiceMail } from './invoice-mail';
 import type { IssueDeps } from './issue';
 import { nextDocumentNumber } from './numbering';
@@ -20,19 +21,17 @@ import { loadBillingSettings } from './settings';
  * the invoice was e-mailed.
  */
 export async function voidInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, reason: string, now: Date): Promise<void> {
+  // The job's row first, as issuing and drafting take it: an issue crediting this deposit, or billing
+  // after this application, waits for the void (and the void for it).
+  const owner = (
+    await tx.client.query<{ job_id: string }>(`select job_id from invoices where tenant_id = $1 and id = $2`, [tx.tenantId, id])
+  ).rows[0];
+  if (!owner) throw notFound('invoice');
+  const job = await loadBillingJob(tx, owner.job_id, true);
   const inv = (
-    await tx.client.query<{
-      id: string;
-      job_id: string;
-      status: string;
-      total: string;
-      amount_paid: string;
-      currency: string;
-      document: unknown;
-      schedule_line_id: string | null;
-      sent_at: Date | null;
-    }>(
-      `select id, job_id, status, total::text as total, amount_paid::text as amount_paid, currency, document, schedule_line_id, sent_at
+    await tx.client.query<VoidedRow>(
+      `select id, job_id, kind, status, total::text as total, amount_paid::text as amount_paid, currency, document, schedule_line_id, sent_at,
+              issued_at, number
          from invoices where tenant_id = $1 and id = $2 for update`,
       [tx.tenantId, id],
     )
@@ -41,7 +40,7 @@ export async function voidInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, i
   if (inv.status === 'draft') throw conflict('A draft has no number: delete it instead of voiding it.');
   if (inv.status === 'void') throw conflict('This invoice is already void.');
   if (new Decimal(inv.amount_paid).greaterThan(0)) throw conflict('Refund the payments first: this invoice has payments recorded.');
-  const job = await loadBillingJob(tx, inv.job_id);
+  await refuseWhatLaterInvoicesRelyOn(tx, inv);
   const { settings } = await loadBillingSettings(tx);
   const issuedOn = firmToday(job, now);
   const n = await nextDocumentNumber(tx, 'credit_note');
@@ -88,3 +87,60 @@ export async function voidInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, i
   if (progress || inv.schedule_line_id) await enqueueBillingCheck(tx, deps.queue, job.id, { refreshDraft: progress });
   if (inv.sent_at) await enqueueInvoiceMail(tx, deps.queue, deps.config, id, { kind: 'creditNote', creditNoteId });
 }
+
+interface VoidedRow {
+  id: string;
+  job_id: string;
+  kind: InvoiceKind;
+  status: string;
+  total: string;
+  amount_paid: string;
+  currency: string;
+  document: unknown;
+  schedule_line_id: string | null;
+  sent_at: Date | null;
+  issued_at: Date;
+  number: number;
+}
+
+/**
+ * Later invoices of a progress-billed job build on earlier ones, so voiding one of those would lose
+ * money no invoice could bill again (409 naming them, newest first):
+ * - a deposit that later invoices took off as a credit, beyond what the job's other deposits cover;
+ * - a progress application with a later application or retainage release (each application bills
+ *   work to date less the previous one's, and a release the retainage the last one held).
+ */
+async function refuseWhatLaterInvoicesRelyOn(tx: TenantTx, inv: VoidedRow): Promise<void> {
+  if (inv.kind === 'deposit') {
+    const { rows } = await tx.client.query<{ others: string; credited: string; numbers: string[] | null }>(
+      `select coalesce(sum(total) filter (where kind = 'deposit' and id <> $3), 0)::text as others,
+              coalesce(sum(deposit_credit) filter (where kind <> 'deposit'), 0)::text as credited,
+              array_agg(number_text order by issued_at desc, number desc) filter (where kind <> 'deposit' and deposit_credit > 0) as numbers
+         from invoices where tenant_id = $1 and job_id = $2 and ${LIVE_ISSUED}`,
+      [tx.tenantId, inv.job_id, inv.id],
+    );
+    const r = rows[0];
+    if (new Decimal(r.credited).greaterThan(r.others)) {
+      throw conflict(
+        `Later invoices take this deposit off as a credit (${list(r.numbers ?? [])}): void them first, newest first, then this deposit.`,
+      );
+    }
+    return;
+  }
+  if (inv.kind !== 'progress') return;
+  const { rows } = await tx.client.query<{ number_text: string }>(
+    `select number_text from invoices
+      where tenant_id = $1 and job_id = $2 and kind in ('progress', 'retainage') and ${LIVE_ISSUED} and id <> $3
+        and (issued_at, number) > ($4, $5)
+      order by issued_at desc, number desc`,
+    [tx.tenantId, inv.job_id, inv.id, inv.issued_at, inv.number],
+  );
+  if (rows.length > 0) {
+    throw conflict(
+      `${list(rows.map((r) => r.number_text))} ${rows.length === 1 ? 'was' : 'were'} issued after this application and bill${rows.length === 1 ? 's' : ''} from it: void ${rows.length === 1 ? 'it' : 'them, newest first,'} before this one.`,
+    );
+  }
+}
+
+const list = (numbers: readonly string[]) =>
+  numbers.length <= 1 ? (numbers[0] ?? '') : `${numbers.slice(0, -1).join(', ')} and ${numbers[numbers.length - 1]}`;
