@@ -186,7 +186,9 @@ function trailText(action: string, data: AuditData): string {
     case 'invoice.drafted':
       return data['origin'] === 'queue' ? 'Drafted when its trigger was met' : 'Drafted';
     case 'invoice.updated':
-      return 'Draft changed';
+      return typeof data['refigured'] === 'string'
+        ? `Refigured from ${String(data['totalBefore'])} to ${String(data['total'])}: ${data['refigured']}`
+        : 'Draft changed';
     case 'invoice.issued':
       return `Issued as ${String(data['number'])}`;
     case 'invoice.sent':

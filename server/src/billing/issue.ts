@@ -10,6 +10,7 @@ import type { JobQueue } from '../queue/job-queue';
 import { assertBillingStarted, type BillingJob, billedBeforeReadOfInvoice, firmToday, jobOfInvoiceRead, taxInside } from './billing-job';
 import { documentFrom, documentReadOfInvoice } from './document';
 import { progressDepositCredit, retainageHeld } from './drafts';
+import { refigureDraftForIssue } from './progress-invoice';
 import { enqueueInvoiceMail } from './invoice-mail';
 import { linesWithWords, progressWithWords } from './invoice-words';
 import { invoiceDetailFrom, invoiceDetailReads } from './invoice-read';
@@ -27,6 +28,7 @@ interface LockedInvoice {
   subtotal: string;
   lines: InvoiceLine[];
   progress: ProgressTable | null;
+  period_end: string | null;
   line_role: 'deposit' | 'milestone' | 'final' | null;
   line_trigger: BillingTrigger | null;
 }
@@ -96,10 +98,16 @@ async function prepareIssue(
     documentReadOfInvoice(tx.tenantId, id),
   ]);
   const job = jobRows[0] as unknown as BillingJob | undefined;
-  const inv = invoiceRows[0] as unknown as LockedInvoice | undefined;
-  if (!job || !inv) throw notFound('invoice');
-  if (inv.status !== 'draft') throw conflict('This invoice is already issued.');
+  const locked = invoiceRows[0] as unknown as LockedInvoice | undefined;
+  if (!job || !locked) throw notFound('invoice');
+  if (locked.status !== 'draft') throw conflict('This invoice is already issued.');
   assertBillingStarted(job);
+  // An application is issued as it figures now (its period and typed work kept): its value lines, the
+  // contract sum or the invoices before it may have moved since it was drafted.
+  const inv =
+    locked.kind === 'progress' && job.billing_method === 'progress' && locked.period_end !== null
+      ? { ...locked, ...(await refigureDraftForIssue(tx, job.id, { id: locked.id, periodEnd: locked.period_end }, actor)) }
+      : locked;
   const subtotal = new Decimal(inv.subtotal);
   // A deposit, stage or final payment of nothing would read as paid at once and could never be voided
   // (nothing to refund); a progress invoice for a period with nothing due is a record of the period, kept.
@@ -167,7 +175,7 @@ async function prepareIssue(
 /** The invoice with the schedule line it bills, locked (for update of the invoice alone). */
 const lockInvoiceRead = (tenantId: string, id: string): SqlQuery => ({
   name: 'invoice_issue_lock',
-  text: `select i.id, i.job_id, i.kind, i.status, i.schedule_line_id, i.subtotal::text as subtotal, i.lines, i.progress,
+  text: `select i.id, i.job_id, i.kind, i.status, i.schedule_line_id, i.subtotal::text as subtotal, i.lines, i.progress, i.period_end::text as period_end,
               l.role as line_role, l.trigger as line_trigger
          from invoices i left join payment_schedule_lines l on l.tenant_id = i.tenant_id and l.id = i.schedule_line_id
         where i.tenant_id = $1 and i.id = $2 for update of i`,

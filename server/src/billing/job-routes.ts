@@ -46,7 +46,7 @@ export function jobBillingRoutes(ctx: AppContext): Router {
   router.put('/:id/billing/value-lines', async (req, res) => {
     const view = await withStaff(ctx, req, 'office', (tx, staff) => {
       const { id } = parse(idParam, req.params);
-      return updateValueLines(tx, staffActor(staff), id, parse(valueLinesUpdate, req.body), ctx.now());
+      return updateValueLines(tx, ctx.queue, staffActor(staff), id, parse(valueLinesUpdate, req.body), ctx.now());
     });
     res.json(view satisfies JobBillingView);
   });

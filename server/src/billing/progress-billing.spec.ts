@@ -266,6 +266,45 @@ describe('progress billing through the API', () => {
     expect(back.progress!.lines[0]).toMatchObject({ thisPeriodWork: '12345.67' });
   });
 
+  it('issues an application as it figures at issue, when its value lines changed under the draft', async () => {
+    const f = await exampleJob('Moved Lines Plaster');
+    await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, { method: 'progress', lines: [] });
+    const values = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
+      lines: [
+        { label: 'Walls', scheduledValue: '24000.00' },
+        { label: 'Ceilings', scheduledValue: '24000.00' },
+      ],
+    });
+    expect((await f.send('post', `/api/jobs/${f.jobId}/billing/start`)).status).toBe(200);
+    const [walls, ceilings] = (values.body as JobBillingView).valueLines;
+    const draft = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-11-30' });
+    const done = await f.send('patch', `/api/invoices/${draft.body.id}`, {
+      progressLines: [{ valueLineId: walls.id, workToDate: { percent: 100 }, storedMaterials: '0' }],
+    });
+    // 24,000 of work less 10 % retainage.
+    expect(done.body).toMatchObject({ subtotal: '21600.00' });
+    // The office moves value between the lines before issuing: the walls are worth 12,000 now.
+    const moved = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
+      lines: [
+        { id: walls.id, label: 'Walls', scheduledValue: '12000.00' },
+        { id: ceilings.id, label: 'Ceilings', scheduledValue: '36000.00' },
+      ],
+    });
+    expect(moved.status).toBe(200);
+    const issued = await f.issue(draft.body.id);
+    // All of the walls' 12,000 less 10 %: never the 24,000 the draft was figured on.
+    expect(issued).toMatchObject({ subtotal: '10800.00', total: '10800.00' });
+    expect(issued.progress!.lines.map((l) => [l.label, l.scheduledValue, l.thisPeriodWork])).toEqual([
+      ['Walls', '12000.00', '12000.00'],
+      ['Ceilings', '36000.00', '0.00'],
+    ]);
+    expect(issued.auditTrail.map((a) => a.text)).toContain('Refigured from 21600.00 to 10800.00: figured again as it was issued');
+    // The next period drafts, on a schedule of values that still ties out.
+    const next = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-31' });
+    expect(next.status).toBe(201);
+    expect((await f.billing()).totals).toMatchObject({ invoiced: '10800.00', retainageHeld: '1200.00' });
+  });
+
   it('does not void what later invoices build on: a deposit they credit, an application before a later one', async () => {
     const f = await exampleJob('Void Order Plaster');
     await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {

@@ -254,7 +254,7 @@ export async function draftProgressInvoice(tx: TenantTx, request: ProgressDraftR
 
 /**
  * After another invoice of a progress-billed job is issued or voided — a deposit to credit, a period
- * no longer billed — the queue refigures the open progress draft (evaluateJobBilling's
+ * no longer billed — or a change order or an edit moves its contract sum or value lines, the queue refigures the open progress draft (evaluateJobBilling's
  * `refreshDraft`), its period and typed amounts kept, so the office never reads a stale total; a
  * changed total is in the job's history. Throws as draftProgressInvoice does (a schedule of values
  * that no longer ties out: 409, before anything is written).
@@ -280,6 +280,45 @@ export async function refreshOpenProgressDraft(tx: TenantTx, jobId: string, acto
     action: 'invoice.updated',
     entity: 'invoice',
     entityId: open.id,
-    data: { kind: 'progress', refigured: 'another invoice of the job was issued or voided', totalBefore: open.total, total: rows[0].total },
+    data: {
+      kind: 'progress',
+      refigured: 'the job’s other invoices, contract sum or schedule of values changed',
+      totalBefore: open.total,
+      total: rows[0].total,
+    },
   });
+}
+
+/**
+ * A progress application about to be issued, figured afresh for its own period with its typed work
+ * kept (the issuer holds the job's lock): answers the subtotal and table to freeze. A changed total is
+ * in the invoice's trail, so the office can see why the issued figure differs from the draft it read.
+ */
+export async function refigureDraftForIssue(
+  tx: TenantTx,
+  jobId: string,
+  draft: { readonly id: string; readonly periodEnd: string },
+  actor: Actor,
+): Promise<{ subtotal: string; progress: ProgressTable | null }> {
+  const read = async () =>
+    (
+      await tx.client.query<{ subtotal: string; total: string; progress: ProgressTable | null }>(
+        `select subtotal::text as subtotal, total::text as total, progress from invoices where tenant_id = $1 and id = $2`,
+        [tx.tenantId, draft.id],
+      )
+    ).rows[0];
+  const before = await read();
+  await draftProgressInvoice(tx, { jobId, periodEnd: draft.periodEnd, origin: 'office', actor });
+  const after = await read();
+  if (after.total !== before.total) {
+    await recordAudit(tx, {
+      actorUserId: actor.userId,
+      actorKind: actor.kind,
+      action: 'invoice.updated',
+      entity: 'invoice',
+      entityId: draft.id,
+      data: { kind: 'progress', refigured: 'figured again as it was issued', totalBefore: before.total, total: after.total },
+    });
+  }
+  return { subtotal: after.subtotal, progress: after.progress };
 }

@@ -271,6 +271,7 @@ export async function startBilling(tx: TenantTx, queue: JobQueue, actor: Actor, 
  */
 export async function updateValueLines(
   tx: TenantTx,
+  queue: JobQueue,
   actor: Actor,
   jobId: string,
   body: ValueLinesUpdate,
@@ -347,5 +348,7 @@ export async function updateValueLines(
     entityId: job.id,
     data: { lines: body.lines.map((l) => ({ label: l.label, scheduledValue: l.scheduledValue })) },
   });
+  // The open progress application is refigured on the new lines once this commits (and again at issue).
+  if (job.billing_method === 'progress') await enqueueBillingCheck(tx, queue, job.id, { refreshDraft: true });
   return getJobBilling(tx, job.id, now);
 }

@@ -94,7 +94,7 @@ export interface BillingEvaluateJob {
   readonly jobId: string;
   /** a percent complete or stored materials was marked: a progress-billed job's open application is drafted or refreshed */
   readonly progressMarked?: boolean;
-  /** another invoice of the job was issued or voided: its open progress application is refigured for its own period */
+  /** another invoice of the job was issued or voided, or its contract sum or value lines changed: its open progress application is refigured for its own period */
   readonly refreshDraft?: boolean;
 }
 

@@ -7,7 +7,8 @@ import { type BillingEvaluateJob, QUEUES } from '../../queue/queues';
  * only if the write that may have met a trigger (a progress mark, billing start, an approved change
  * order) commits. The check itself is idempotent, so an extra one costs nothing. `progressMarked`:
  * a percent complete or stored materials was marked (a progress-billed job's application is drafted).
- * `refreshDraft`: another invoice of the job was issued or voided (its open application is refigured, its period kept).
+ * `refreshDraft`: another invoice of the job was issued or voided, or its contract sum or value lines changed (its
+ * open application is refigured, its period kept).
  */
 export async function enqueueBillingCheck(
   tx: TenantTx,
