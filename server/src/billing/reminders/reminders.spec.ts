@@ -102,6 +102,43 @@ describe('invoice reminders', () => {
     jest.restoreAllMocks();
   }, 120_000);
 
+  it('skip an invoice voided while the run goes (its list read before the void committed)', async () => {
+    const reminded: string[] = [];
+    jest.spyOn(invoiceMail, 'enqueueInvoiceMail').mockImplementation((_tx, _q, _c, invoiceId, purpose) => {
+      if (purpose.kind === 'reminder') reminded.push(invoiceId);
+      return Promise.resolve();
+    });
+    const job = await acceptedJob(t, 'Reminder Void Race Studio');
+    const id = await issuedInvoice(job, 'issued', '2026-12-15');
+    t.setNow(new Date('2026-12-15T16:00:00Z'));
+    let commitVoid!: () => void;
+    const voidMayCommit = new Promise<void>((resolve) => (commitVoid = resolve));
+    let voidWritten!: () => void;
+    const written = new Promise<void>((resolve) => (voidWritten = resolve));
+    // A void holding the invoice's row, not yet committed, as voidInvoice does.
+    const voiding = withTenant(t.ctx.pool, job.firmId, async (tx) => {
+      await tx.client.query(`update invoices set status = 'void' where tenant_id = $1 and id = $2`, [tx.tenantId, id]);
+      voidWritten();
+      await voidMayCommit;
+    });
+    await written;
+    const run = runBillingDaily(
+      t.ctx.pool,
+      t.ctx.queue,
+      t.ctx.config,
+      { tenantId: job.firmId, localDate: '2026-12-15' },
+      t.ctx.logger,
+      t.ctx.now(),
+    );
+    await new Promise((resolve) => setTimeout(resolve, 300));
+    commitVoid();
+    await Promise.all([voiding, run]);
+    expect(reminded).toEqual([]);
+    expect(await query(job, `select step from invoice_reminders where tenant_id = $1 and invoice_id = $2`, [id])).toEqual([]);
+    t.setNow(new Date('2026-12-01T15:00:00Z'));
+    jest.restoreAllMocks();
+  });
+
   it('reach the client by e-mail from the firm’s billing day in the queue, once however often the day runs, and stop once the invoice is paid', async () => {
     const job = await acceptedJob(t, 'Mailed Reminder Studio');
     expect((await job.agent.post(`/api/jobs/${job.job.id}/billing/start`).set('x-csrf-token', job.csrf()).send({})).status).toBe(200);

@@ -19,7 +19,8 @@ interface OpenInvoice {
  * step of the firm's current cadence that is due (remindersDue), never a step already sent for it.
  * The row in invoice_reminders is the claim: only the run whose insert lands sends the e-mail, so
  * two runs of one day (two workers, a retry) send it once, also after the cadence changed. Paid
- * and void invoices get none. `now` dates the e-mail's sign-in link. Returns the steps sent.
+ * and void invoices get none, also one voided or paid while the run goes. `now` dates the e-mail's
+ * sign-in link. Returns the steps sent.
  */
 export async function sendDueReminders(
   tx: TenantTx,
@@ -48,6 +49,13 @@ export async function sendDueReminders(
       sent: invoice.sent.map((step) => ({ step })),
     });
     if (!due) continue;
+    // Still open once a void or a payment being written on it has committed (the share lock waits for
+    // theirs, and the row is read again): the list above may be older than they are.
+    const open = await tx.client.query(
+      `select 1 from invoices where tenant_id = $1 and id = $2 and status in ('issued', 'part_paid') for share`,
+      [tx.tenantId, invoice.id],
+    );
+    if (!open.rowCount) continue;
     const claimed = await tx.client.query(
       `insert into invoice_reminders (tenant_id, invoice_id, step, sent_on) values ($1, $2, $3, $4)
        on conflict (tenant_id, invoice_id, step) do nothing returning id`,
