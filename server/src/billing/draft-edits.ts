@@ -1,11 +1,12 @@
 import type { FieldProblem, InvoiceDraftCreate, InvoiceDraftUpdate } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { DomainInputError, valueLineWork } from '@layerbook/domain';
+import { addDays, DomainInputError, valueLineWork, yearBefore } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
-import { firmToday, loadBillingJob } from './billing-job';
+import { type BillingJob, firmToday, LIVE_ISSUED, loadBillingJob } from './billing-job';
+import { longDate } from '../i18n/long-date';
 import { draftLineInvoice, draftRetainageInvoice } from './drafts';
 import { decimalsMessage, fitsCurrency } from './money';
 import { billedWorkByLine, draftProgressInvoice, loadValueLines, percentOf } from './progress-invoice';
@@ -35,10 +36,34 @@ export async function createDraft(tx: TenantTx, actor: Actor, jobId: string, bod
       return made.invoiceId;
     }
     case 'progress':
+      await checkPeriodEnd(tx, job, body.periodEnd, now);
       return (await draftProgressInvoice(tx, { jobId: job.id, periodEnd: body.periodEnd, origin: 'office', actor })).invoiceId;
     case 'retainage':
       return (await draftRetainageInvoice(tx, { jobId: job.id, origin: 'office', actor })).invoiceId;
   }
+}
+
+/**
+ * An application's period ends on or after the last issued one's (work is billed in order) and within
+ * a year either side of the firm's today; otherwise 400 naming periodEnd.
+ */
+async function checkPeriodEnd(tx: TenantTx, job: BillingJob, periodEnd: string, now: Date): Promise<void> {
+  const today = firmToday(job, now);
+  const { rows } = await tx.client.query<{ last: string | null }>(
+    `select max(period_end)::text as last from invoices where tenant_id = $1 and job_id = $2 and kind = 'progress' and ${LIVE_ISSUED}`,
+    [tx.tenantId, job.id],
+  );
+  const last = rows[0]?.last ?? null;
+  const latest = addDays(today, 366);
+  const message =
+    last !== null && periodEnd < last
+      ? `The last application billed work up to ${longDate(last)}: this period ends on that day or later.`
+      : periodEnd < yearBefore(today)
+        ? `A period ends within a year of today: not before ${longDate(yearBefore(today))}.`
+        : periodEnd > latest
+          ? `A period ends within a year of today: not after ${longDate(latest)}.`
+          : null;
+  if (message) throw badRequest([{ field: 'periodEnd', message }]);
 }
 
 interface DraftRow {
@@ -94,6 +119,7 @@ export async function updateDraft(tx: TenantTx, actor: Actor, id: string, body: 
   if (isProgress && (body.progressLines !== undefined || body.periodEnd !== undefined)) {
     const job = await loadBillingJob(tx, draft.job_id);
     const periodEnd = body.periodEnd ?? draft.period_end ?? firmToday(job, now);
+    if (body.periodEnd !== undefined) await checkPeriodEnd(tx, job, body.periodEnd, now);
     const toDate = new Map<string, Decimal>();
     if (body.progressLines) {
       const lines = new Map((await loadValueLines(tx, job.id)).map((l) => [l.id, l]));

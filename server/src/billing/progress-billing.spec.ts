@@ -329,6 +329,15 @@ describe('progress billing through the API', () => {
     const first = await application(25, '2026-11-15');
     expect(first).toMatchObject({ number: 'INV-0002', depositCredit: '1080.00' });
     const second = await application(50, '2026-11-30');
+    // Periods go forward, within a year of today (December 1, 2026).
+    for (const [periodEnd, message] of [
+      ['2026-11-20', 'The last application billed work up to November 30, 2026: this period ends on that day or later.'],
+      ['2999-01-01', 'A period ends within a year of today: not after December 2, 2027.'],
+    ]) {
+      const refused = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd });
+      expect(refused.status).toBe(400);
+      expect(refused.body.errors).toEqual([{ field: 'periodEnd', message }]);
+    }
 
     // Voided, the deposit would leave 1,080 + 1,080 credited against nothing, billed by no invoice.
     const deposit = await voidOf(depositId);
