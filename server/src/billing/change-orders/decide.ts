@@ -5,7 +5,7 @@ import Decimal from 'decimal.js';
 import { recordAudit } from '../../audit/record';
 import type { AppContext } from '../../context';
 import type { ClientPrincipal } from '../../http/principal';
-import { conflict, notFound } from '../../http/problem';
+import { conflict, HttpError, notFound } from '../../http/problem';
 import { enqueueMail } from '../../mail/outbox';
 import { clientIdOf } from '../../proposals/client-proposals';
 import { enqueueBillingCheck } from '../triggers/enqueue';
@@ -61,7 +61,15 @@ export async function decideChangeOrder(
   const now = ctx.now();
   const comment = input.comment ?? '';
   if (input.decision === 'approve') {
-    const sums = await applyApproval(tx, ctx, row, now);
+    const sums = await applyApproval(tx, ctx, row, now).catch((error: unknown) => {
+      // The job moved since it was sent (payments billed, work recorded): the refusal names the amount,
+      // which the portal words as "cannot be approved as the job stands; ask the firm" — not "already answered".
+      if (error instanceof HttpError && error.status === 409) {
+        const why = error.detail ?? error.title;
+        throw conflict(why, [{ field: 'amount', message: why }]);
+      }
+      throw error;
+    });
     await tx.client.query(
       `update change_orders set status = 'approved', decided_at = $3, signed_name = $4, client_comment = $5, detail = detail || $6::jsonb, updated_at = $3
         where tenant_id = $1 and id = $2 and status = 'sent'`,

@@ -69,6 +69,8 @@ describe('a deduction on a job billed by progress', () => {
       .send(approve);
     expect(res.status).toBe(409);
     expect(res.body.detail).toMatch(/larger than the work not yet started/);
+    // Named as the amount's: the portal says the job can no longer take it, not that it was answered.
+    expect(res.body.errors.map((e: { field: string }) => e.field)).toEqual(['amount']);
     const after = (await f.agent.get(`/api/jobs/${f.jobId}/billing`)).body as JobBillingView;
     expect(after.contractSum).toBe(before.contractSum);
     expect(after.valueLines.map((l) => l.scheduledValue)).toEqual(before.valueLines.map((l) => l.scheduledValue));

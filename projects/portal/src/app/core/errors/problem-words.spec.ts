@@ -63,6 +63,20 @@ describe('problems in the portal’s words, by call, status and field', () => {
       'problems.proposalDecided',
     ],
     [
+      'a change order already answered',
+      '/api/portal/change-orders/c/decision',
+      answer(409, 'You already declined this change order.'),
+      'problems.changeOrderDecided',
+    ],
+    [
+      'a change order the job can no longer take',
+      '/api/portal/change-orders/c/decision',
+      answer(409, 'This deduction is larger than the work not yet started.', [
+        { field: 'amount', message: 'This deduction is larger than the work not yet started.' },
+      ]),
+      'problems.changeOrderBlocked',
+    ],
+    [
       'a board already answered',
       '/api/portal/boards/b/approve',
       answer(409, 'You have already approved this board.'),

@@ -61,7 +61,7 @@ function sentenceFor(call: Call | null, problem: Problem): string | null {
       if (status === 409) return 'problems.proposalDecided';
       break;
     case 'changeOrderDecision':
-      if (status === 409) return 'problems.changeOrderDecided';
+      if (status === 409) return hasField('amount') ? 'problems.changeOrderBlocked' : 'problems.changeOrderDecided';
       break;
     case 'boardAnswer':
       if (status === 409) return 'problems.boardDecided';
@@ -96,6 +96,7 @@ const FIELD_WORDS: Readonly<Partial<Record<Call, Readonly<Record<string, string>
     signedName: 'proposals.acceptance.nameRequired',
     consent: 'problems.changeOrderConsent',
     comment: 'problems.commentTooLong',
+    amount: 'problems.changeOrderBlocked',
   },
   boardAnswer: { comment: 'samples.board.commentRequired' },
   checkout: { amount: 'problems.belowMinimum' },
