@@ -111,12 +111,31 @@ async function drawDeferred(fixture: ComponentFixture<Today>): Promise<void> {
 describe('Today', () => {
   afterEach(() => TestBed.inject(HttpTestingController).verify());
 
-  it('never asks for money for the crew', async () => {
-    const { text, http } = await render('crew');
+  it('shows the crew their jobs, each opening its sheet, and never asks for money', async () => {
+    const { text, html, http, settle } = await render('crew');
     http.expectNone('/api/billing/today');
     http.expectNone('/api/inquiries/today');
+    http.expectOne('/api/jobs/sheets').flush({
+      items: [
+        {
+          id: 'job-1',
+          title: 'Dining room in lime plaster',
+          siteAddress: '14 Orchard Lane, Millbrook',
+          status: 'in_progress',
+          startDate: '2026-12-07',
+          finishDate: '2026-12-11',
+          layersDone: 3,
+          layersTotal: 8,
+        },
+      ],
+    });
+    await settle();
     expect(text()).toContain('Your job sheets');
+    expect(text()).toContain('Dining room in lime plaster');
+    expect(text()).toContain('14 Orchard Lane, Millbrook');
+    expect(html().querySelector('a.job')?.getAttribute('href')).toBe('/sheets/job-1');
     expect(text()).not.toContain('Money');
+    expect(text()).not.toContain('$');
   });
 
   it('shows the office what to bill, what is overdue in days and the change orders waiting', async () => {

@@ -10,6 +10,7 @@ import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LIKELY_WORK_WORDS } from '../inquiries/stage-odds';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { SheetJobs } from '../jobs/sheet/sheet-jobs';
 import { TodayMoney } from './today-money';
 import { TranslatePipe } from '@ngx-translate/core';
 import { Language } from '../../../../../shared/i18n/language';
@@ -17,7 +18,7 @@ import { Language } from '../../../../../shared/i18n/language';
 /** What needs the office today: follow-ups that are late or due, where the pipeline stands, and the money to bill and collect. */
 @Component({
   selector: 'lb-today',
-  imports: [CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink, TodayMoney, TranslatePipe],
+  imports: [CalendarDatePipe, FormAlert, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink, SheetJobs, TodayMoney, TranslatePipe],
   templateUrl: './today.html',
   styleUrl: './today.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
