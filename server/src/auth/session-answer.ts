@@ -25,6 +25,7 @@ export async function staffSession(ctx: AppContext, req: Request, res: Response,
           ownLanguage: user.ownLanguage,
           units: user.units,
           country: user.country,
+          timeZone: user.timeZone,
         }
       : null,
     csrfToken: csrfToken(ctx.config, req, res, fresh),

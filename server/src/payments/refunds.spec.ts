@@ -92,6 +92,15 @@ describe('offline refunds', () => {
     expect(await f.money(paid.paymentId)).toMatchObject({ status: 'void', amountPaid: '0.00', refunded: '40.00', credit: '0.00' });
   });
 
+  it('gives back money received on the firm’s tomorrow that same day, dated as the payment when no day is given', async () => {
+    const f = await issuedInvoice(t, 'Tomorrow Refund Lime');
+    // Recorded by an office a time zone ahead: the firm's today is December 20.
+    const paymentId = await f.payOffline('60.00', 'early', '2026-12-21');
+    const res = await f.refund(paymentId, { amount: '60.00', method: 'cheque', reason: 'Paid twice' });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ refundedOn: '2026-12-21' });
+  });
+
   it('refuses what it cannot do, naming the field, and writes nothing', async () => {
     const f = await issuedInvoice(t, 'Refusing Render Co');
     const paymentId = await f.payOffline('100.00');
@@ -100,8 +109,13 @@ describe('offline refunds', () => {
       [{ amount: '10.123' }, 'amount', /at most two decimals/],
       [{ amount: '100.01' }, 'amount', 'At most 100.00 can be refunded of this 100.00 payment.'],
       [{ amount: '10.00', method: 'card' }, 'method', /Only a card payment can go back to the card/],
-      [{ amount: '10.00', refundedOn: '2026-12-21' }, 'refundedOn', 'A refund cannot be dated after today.'],
-      [{ amount: '10.00', refundedOn: '2026-12-09' }, 'refundedOn', 'A refund cannot be dated before the payment was received.'],
+      // The firm's today is December 20 (New York): its tomorrow is the latest day, as for the payment itself.
+      [{ amount: '10.00', refundedOn: '2026-12-22' }, 'refundedOn', 'A refund cannot be dated later than December 21, 2026.'],
+      [
+        { amount: '10.00', refundedOn: '2026-12-09' },
+        'refundedOn',
+        'A refund cannot be dated before the payment was received (December 10, 2026).',
+      ],
       [{ amount: '10.00', method: 'coins' }, 'method', /Choose card/],
     ];
     for (const [body, field, message] of cases) {

@@ -1,12 +1,13 @@
 import type { PaymentMethod, RefundCreate, RefundView } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { DomainInputError, toProcessorAmount } from '@layerbook/domain';
+import { addDays, DomainInputError, toProcessorAmount } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import { decimalsMessage, fitsCurrency, moneyOut } from '../billing/money';
 import { localDate } from '../firms/local-date';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
+import { longDate } from '../i18n/long-date';
 import { toRefundView } from './payment-read';
 import type { ReceiptMailDeps } from './receipt-mail';
 import { settleRefund } from './refund-settle';
@@ -79,7 +80,9 @@ export async function startRefund(
   const isCard = body.method === 'card';
   checkMethod(p, body.method, deps.onlinePayments);
   const processorAmount = checkAmount(p, body.amount, isCard);
-  if (!isCard) checkDate(p, body.refundedOn ?? today, today);
+  // Left out, a refund by hand is dated today, or the payment's own day when that is tomorrow.
+  const refundedOn = isCard ? today : (body.refundedOn ?? (p.received_on > today ? p.received_on : today));
+  if (!isCard) checkDate(p, refundedOn, today);
 
   const inserted = await tx.client.query<{ id: string }>(
     `insert into refunds (tenant_id, payment_id, invoice_id, client_id, method, status, amount, currency, refunded_on, reason, reference, created_by)
@@ -92,7 +95,7 @@ export async function startRefund(
       body.method,
       new Decimal(body.amount).toFixed(2),
       p.currency,
-      isCard ? today : (body.refundedOn ?? today),
+      refundedOn,
       body.reason,
       isCard ? '' : (body.reference ?? ''),
       actor.userId,
@@ -154,10 +157,15 @@ function checkAmount(p: LockedPayment, raw: string, isCard: boolean): number {
   }
 }
 
+/**
+ * A refund by hand is dated from the payment's day to the firm's tomorrow — the same latest day as the
+ * payment itself (for an office a time zone ahead), so money received can always be given back that day.
+ */
 function checkDate(p: LockedPayment, refundedOn: string, today: string): void {
   const problem = (message: string) => badRequest([{ field: 'refundedOn', message }]);
-  if (refundedOn > today) throw problem('A refund cannot be dated after today.');
-  if (refundedOn < p.received_on) throw problem('A refund cannot be dated before the payment was received.');
+  const latest = addDays(today, 1);
+  if (refundedOn > latest) throw problem(`A refund cannot be dated later than ${longDate(latest)}.`);
+  if (refundedOn < p.received_on) throw problem(`A refund cannot be dated before the payment was received (${longDate(p.received_on)}).`);
 }
 
 export async function readRefund(tx: TenantTx, refundId: string): Promise<RefundView> {

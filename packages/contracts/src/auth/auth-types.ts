@@ -100,6 +100,8 @@ export interface StaffUser {
   readonly units: UnitSystem;
   /** the firm's country (ISO 3166-1 alpha-2), for number and date conventions */
   readonly country: string;
+  /** the firm's time zone (IANA), so forms start from the firm's today, as the API dates things */
+  readonly timeZone: string;
 }
 
 /** What the admin app knows about who is signed in (every /api/auth answer that signs in or out). */

@@ -9,7 +9,8 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import type { InvoiceDetail, InvoiceIssue } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
-import { DATE_YEAR_WORDS, dateYearInRange, toIsoDate } from '../../shared/forms/iso-date';
+import { Session } from '../../core/auth/session';
+import { DATE_YEAR_WORDS, dateYearInRange, firmToday, toIsoDate } from '../../shared/forms/iso-date';
 import { Submission } from '../../shared/forms/submission';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
@@ -101,8 +102,8 @@ export class IssueDialog {
   };
 
   protected readonly form = this.fb.group({
-    // Shown as today; left as it is, the server dates it today in the firm's own time zone.
-    issuedOn: this.fb.control<Date | null>(new Date(), [Validators.required, dateYearInRange]),
+    // Shown as the firm's today; left as it is, the server dates it today in the firm's own time zone.
+    issuedOn: this.fb.control<Date | null>(firmToday(inject(Session).user()?.timeZone), [Validators.required, dateYearInRange]),
     send: this.fb.control(this.clientEmail !== ''),
   });
 

@@ -9,7 +9,8 @@ import { MatSelectModule } from '@angular/material/select';
 import { INVOICE_LIMITS, type InvoiceDetail, type OfflinePaymentCreate } from '@layerbook/contracts/types';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
-import { DATE_YEAR_WORDS, dateYearInRange, toIsoDate } from '../../shared/forms/iso-date';
+import { Session } from '../../core/auth/session';
+import { DATE_YEAR_WORDS, dateYearInRange, firmToday, toIsoDate } from '../../shared/forms/iso-date';
 import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
 import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -110,8 +111,8 @@ export class PaymentForm {
   protected readonly isHydrated = hydratedSignal();
   protected readonly submission = new Submission();
   protected readonly errorText = errorText;
-  /** money is recorded once received (the API checks the same in the firm's zone, allowing its tomorrow) */
-  protected readonly today = new Date();
+  /** money is recorded once received: the firm's today at the latest (the API allows its tomorrow too) */
+  protected readonly today = firmToday(inject(Session).user()?.timeZone);
   protected readonly words = {
     receivedOn: {
       required: 'Enter the day it was received.',
@@ -135,7 +136,7 @@ export class PaymentForm {
         ),
       ],
     ],
-    receivedOn: this.fb.control<Date | null>(new Date(), [Validators.required, dateYearInRange]),
+    receivedOn: this.fb.control<Date | null>(this.today, [Validators.required, dateYearInRange]),
     reference: ['', Validators.maxLength(INVOICE_LIMITS.referenceMaxLength)],
   });
 

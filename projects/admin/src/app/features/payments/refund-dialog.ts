@@ -12,7 +12,8 @@ import { MatRadioModule } from '@angular/material/radio';
 import { PAYMENT_LIMITS, type PaymentDetail, type PaymentMethod, type RefundCreate, type RefundView } from '@layerbook/contracts/types';
 import { formatMoney } from '@layerbook/domain';
 import { errorText } from '../../shared/forms/error-text';
-import { DATE_YEAR_WORDS, dateYearInRange, fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
+import { Session } from '../../core/auth/session';
+import { DATE_YEAR_WORDS, dateYearInRange, firmToday, fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
 import { AMOUNT_WORDS, amountText, toAmount } from '../../shared/forms/money-input';
 import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
@@ -71,9 +72,12 @@ export class RefundDialog {
   protected readonly methods = refundMethods(this.payment);
   protected readonly choiceWords = REFUND_CHOICE_WORDS;
   protected readonly methodLabels = PAYMENT_METHOD_LABELS;
-  /** a refund by hand is dated between the payment's day and today (the API checks the same in the firm's zone) */
+  /**
+   * A refund by hand is dated between the payment's day and the firm's today — or the payment's day when
+   * it was recorded on the firm's tomorrow (the API allows up to that tomorrow, as for the payment).
+   */
   protected readonly receivedOn = fromIsoDate(this.payment.receivedOn);
-  protected readonly today = new Date();
+  protected readonly today = latest(firmToday(inject(Session).user()?.timeZone), this.receivedOn);
   protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   private readonly sent = signal(false);
@@ -93,7 +97,7 @@ export class RefundDialog {
         ),
       ],
     ],
-    refundedOn: this.fb.control<Date | null>(new Date(), [Validators.required, dateYearInRange]),
+    refundedOn: this.fb.control<Date | null>(this.today, [Validators.required, dateYearInRange]),
     reference: ['', Validators.maxLength(PAYMENT_LIMITS.referenceMaxLength)],
     reason: ['', [requiredText, Validators.maxLength(PAYMENT_LIMITS.reasonMaxLength)]],
   });
@@ -157,3 +161,5 @@ export class RefundDialog {
     return { ...base, refundedOn: toIsoDate(refundedOn) ?? '', ...(ref ? { reference: ref } : {}) };
   }
 }
+
+const latest = (day: Date, other: Date | null): Date => (other && other > day ? other : day);

@@ -1,7 +1,7 @@
 import { FormControl } from '@angular/forms';
 import { describe, expect, it } from 'vitest';
 import { errorText } from './error-text';
-import { DATE_YEAR_WORDS, dateYearInRange, fromIsoDate, toIsoDate } from './iso-date';
+import { DATE_YEAR_WORDS, dateYearInRange, firmToday, fromIsoDate, toIsoDate } from './iso-date';
 
 describe('toIsoDate', () => {
   it.each([
@@ -27,6 +27,21 @@ describe('fromIsoDate', () => {
 
   it('round-trips with toIsoDate', () => {
     expect(toIsoDate(fromIsoDate('2027-01-01'))).toBe('2027-01-01');
+  });
+});
+
+describe('firmToday', () => {
+  it('is the calendar day in the firm’s zone, whatever the viewer’s', () => {
+    // 03:30 UTC on December 5 is still December 4 in Los Angeles, already December 5 in Auckland.
+    const now = new Date('2026-12-05T03:30:00Z');
+    expect(toIsoDate(firmToday('America/Los_Angeles', now))).toBe('2026-12-04');
+    expect(toIsoDate(firmToday('Pacific/Auckland', now))).toBe('2026-12-05');
+    expect(toIsoDate(firmToday('America/New_York', new Date('2026-12-31T23:30:00-05:00')))).toBe('2026-12-31');
+  });
+
+  it('is the viewer’s day when the zone is unknown', () => {
+    const now = new Date(2026, 2, 14, 23, 59);
+    expect(toIsoDate(firmToday(null, now))).toBe('2026-03-14');
   });
 });
 

@@ -19,6 +19,17 @@ export function fromIsoDate(isoDate: string | null | undefined): Date | null {
   return match ? new Date(Number(match[1]), Number(match[2]) - 1, Number(match[3])) : null;
 }
 
+/**
+ * The firm's today as a datepicker's local Date: the calendar day it is now in the firm's time zone
+ * (the day the API dates things by), not the viewer's; the viewer's when the zone is unknown.
+ */
+export function firmToday(timeZone: string | null | undefined, now = new Date()): Date {
+  if (!timeZone) return new Date(now.getFullYear(), now.getMonth(), now.getDate());
+  const parts = new Intl.DateTimeFormat('en-US', { timeZone, year: 'numeric', month: 'numeric', day: 'numeric' }).formatToParts(now);
+  const part = (type: string) => Number(parts.find((p) => p.type === type)?.value);
+  return new Date(part('year'), part('month') - 1, part('day'));
+}
+
 /** Whether a calendar day's year is one the API takes (DATE_YEAR_MIN to DATE_YEAR_MAX). */
 export function isDateYearAllowed(year: number): boolean {
   return Number.isInteger(year) && year >= DATE_YEAR_MIN && year <= DATE_YEAR_MAX;

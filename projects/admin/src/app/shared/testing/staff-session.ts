@@ -14,6 +14,7 @@ export function staffSession(role: StaffRole = 'owner', csrfToken = 't'): StaffS
       ownLanguage: null,
       units: 'imperial',
       country: 'US',
+      timeZone: 'America/New_York',
     },
     csrfToken,
   };
