@@ -78,12 +78,11 @@ export function paymentRoutes(ctx: AppContext): Router {
    * not answer, or has not finished) is asked about again; 409 once it is settled.
    */
   router.post('/refunds/:id/send', async (req, res) => {
-    const stripe = online();
-    const { refund, actor, tenantId } = await withStaff(ctx, req, 'office', async (tx, staff) => ({
-      refund: await pendingCardRefund(tx, parse(refundParam, req.params).id),
-      actor: staffActor(staff),
-      tenantId: tx.tenantId,
-    }));
+    // Who asks first (crew 403, a bad id 400), then whether there is a processor to ask (409).
+    const { refund, actor, tenantId, stripe } = await withStaff(ctx, req, 'office', async (tx, staff) => {
+      const id = parse(refundParam, req.params).id;
+      return { stripe: online(), refund: await pendingCardRefund(tx, id), actor: staffActor(staff), tenantId: tx.tenantId };
+    });
     res.json((await settleAnswer(req, actor, refund.refundId, await askAgain(stripe, tenantId, refund))) satisfies RefundView);
   });
 
