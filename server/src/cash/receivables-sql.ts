@@ -35,12 +35,15 @@ const OWED_NOW = `with ${RETAINAGE('')},
 
 /**
  * As of a past date: invoices issued by then, less payments received by then, refunds given by then
- * (succeeded) and credit notes issued by then.
+ * (succeeded; only the part that came off the invoice — the part taken from the client's credit, its
+ * negative client_credits row, was never the invoice's) and credit notes issued by then.
  */
 const OWED_AS_OF = `with ${RETAINAGE('and i.issued_on <= $2::date')},
   paid as (select p.invoice_id, sum(p.amount_applied) as amount from payments p
             where p.tenant_id = $1 and p.received_on <= $2::date group by p.invoice_id),
-  refunded as (select f.invoice_id, sum(f.amount) as amount from refunds f
+  refunded as (select f.invoice_id, sum(f.amount + coalesce(c.amount, 0)) as amount from refunds f
+              left join lateral (select sum(c.amount) as amount from client_credits c
+                                  where c.tenant_id = f.tenant_id and c.payment_id = f.payment_id and c.meta->>'refundId' = f.id::text) c on true
             where f.tenant_id = $1 and f.status = 'succeeded' and f.refunded_on <= $2::date group by f.invoice_id),
   credited as (select n.invoice_id, sum(n.amount) as amount from credit_notes n
             where n.tenant_id = $1 and n.issued_on <= $2::date group by n.invoice_id),

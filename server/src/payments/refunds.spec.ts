@@ -1,4 +1,4 @@
-import type { InvoiceDetail, Problem, RefundView } from '@layerbook/contracts';
+import type { CashReceivables, InvoiceDetail, Problem, RefundView } from '@layerbook/contracts';
 import { voidWithCreditNote } from '../billing/pdf/invoice-fixtures';
 import { joinAs } from '../proposals/proposal-fixtures';
 import Decimal from 'decimal.js';
@@ -69,10 +69,14 @@ describe('offline refunds', () => {
     const paid = await f.payDirect({ amount: '150.00' });
     expect(paid).toMatchObject({ applied: '100.00', credit: '50.00', invoiceStatus: 'paid' });
 
-    const res = await f.refund(paid.paymentId, { amount: '60.00', method: 'cash' });
+    const res = await f.refund(paid.paymentId, { amount: '60.00', method: 'cash', refundedOn: '2026-12-18' });
     expect(res.status).toBe(201);
     // 50.00 out of the credit (it comes to 0.00), 10.00 out of the applied part: 90.00 still paid, part paid
     expect(await f.money(paid.paymentId)).toMatchObject({ status: 'part_paid', amountPaid: '90.00', refunded: '60.00', credit: '0.00' });
+    // The cash view owes 10.00 again, today and as of any day since the refund: the credit's 50.00 was never the invoice's.
+    for (const query of ['', '?asOf=2026-12-19']) {
+      expect(((await f.agent.get(`/api/cash/receivables${query}`)).body as CashReceivables).total).toBe('10.00');
+    }
     const [entry] = await f.audit('invoice.refund_recorded');
     expect(entry).toMatchObject({ fromCredit: '50.00', fromApplied: '10.00' });
     const detail = (await f.agent.get(`/api/invoices/${f.invoiceId}`)).body as InvoiceDetail;
