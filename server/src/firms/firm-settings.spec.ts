@@ -1,5 +1,6 @@
 import { COUNTRIES } from '@layerbook/contracts';
-import { signUpFirm, startTestServer, TestServer } from '../testing/harness';
+import { issuedInvoice } from '../payments/refund-fixtures';
+import { type Agent, signUpFirm, startTestServer, TestServer } from '../testing/harness';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -29,4 +30,37 @@ describe('firm country (ISO 3166-1 alpha-2)', () => {
     expect(un.body.errors.map((e: { field: string }) => e.field)).toEqual(['country']);
     expect((await o.agent.get('/api/firm')).body.country).toBe(COUNTRIES[COUNTRIES.length - 1].code);
   }, 180_000);
+});
+
+describe('firm currency', () => {
+  const settingsOf = async (agent: Agent) => {
+    const {
+      id: _id,
+      slug: _slug,
+      updatedAt: _updatedAt,
+      logoUrl: _logo,
+      ...settings
+    } = (await agent.get('/api/firm')).body as Record<string, unknown>;
+    return settings;
+  };
+
+  it('changes while the firm sets up, and stays once an invoice is issued (409 naming it, nothing changed)', async () => {
+    const fresh = await signUpFirm(t.app);
+    const changed = await fresh.agent
+      .patch('/api/firm')
+      .set('x-csrf-token', fresh.csrf())
+      .send({ ...(await settingsOf(fresh.agent)), currency: 'CAD' });
+    expect([changed.status, changed.body.currency]).toEqual([200, 'CAD']);
+
+    const billed = await issuedInvoice(t, 'Kept Currency Lime');
+    const refused = await billed.agent
+      .patch('/api/firm')
+      .set('x-csrf-token', billed.csrf())
+      .send({ ...(await settingsOf(billed.agent)), currency: 'EUR', name: 'Renamed Lime' });
+    expect(refused.status).toBe(409);
+    expect(refused.body.errors).toEqual([
+      { field: 'currency', message: "Invoices and payments are already kept in USD: the firm's currency can no longer change." },
+    ]);
+    expect((await billed.agent.get('/api/firm')).body).toMatchObject({ currency: 'USD', name: 'Kept Currency Lime' });
+  });
 });

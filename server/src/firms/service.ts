@@ -2,7 +2,7 @@ import type { FirmSettings, FirmSettingsUpdate } from '@layerbook/contracts';
 import { eq, firms, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
-import { notFound } from '../http/problem';
+import { conflict, notFound } from '../http/problem';
 import { fileUrls } from '../files/stored-files';
 
 export type FirmRow = typeof firms.$inferSelect;
@@ -40,6 +40,7 @@ export async function firmRow(tx: TenantTx, lock = false): Promise<FirmRow> {
 
 export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettingsUpdate, now: Date): Promise<FirmSettings> {
   const before = await getFirm(tx);
+  if (input.currency !== undefined && input.currency !== before.currency) await refuseCurrencyChangeOnceBilled(tx, before.currency);
   const [updated] = await tx.db
     .update(firms)
     .set({ ...input, updatedAt: now })
@@ -58,4 +59,19 @@ export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettings
     });
   }
   return toSettings(updated);
+}
+
+/**
+ * The firm's money (its cash view, its reports) is kept in one currency: once an invoice is issued or
+ * a payment recorded, the currency stays (409 naming it). Before that — a firm setting up — it may change.
+ */
+async function refuseCurrencyChangeOnceBilled(tx: TenantTx, currency: string): Promise<void> {
+  const { rowCount } = await tx.client.query(
+    `select 1 where exists (select 1 from invoices where tenant_id = $1 and status <> 'draft')
+                 or exists (select 1 from payments where tenant_id = $1)`,
+    [tx.tenantId],
+  );
+  if (!rowCount) return;
+  const message = `Invoices and payments are already kept in ${currency}: the firm's currency can no longer change.`;
+  throw conflict(message, [{ field: 'currency', message }]);
 }
