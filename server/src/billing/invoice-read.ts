@@ -10,8 +10,11 @@ import type {
   InvoiceStatus,
   InvoiceSummary,
   KeysetPage,
+  PaymentMethod,
   ProgressTable,
 } from '@layerbook/contracts';
+import { PAYMENT_METHOD_LABELS } from '@layerbook/contracts';
+import { formatMoney } from '@layerbook/domain';
 import type { InvoiceListQuery } from '@layerbook/contracts';
 import { isoUtcText, readAllInOneTrip, type SqlQuery, statementName, type TenantTx } from '@layerbook/db';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
@@ -181,13 +184,30 @@ const TRAIL_ORDER = [
 
 type AuditData = Record<string, string | number | null | undefined>;
 
-function trailText(action: string, data: AuditData): string {
+/** The office reads amounts as everywhere else ("$2,721.65"), and how money moved in words ("Bank transfer"). */
+function trailWords(currency: string) {
+  const money = (value: unknown): string => {
+    try {
+      return formatMoney(String(value), currency, 'en-US');
+    } catch {
+      return String(value);
+    }
+  };
+  const method = (value: unknown): string =>
+    typeof value === 'string' && value in PAYMENT_METHOD_LABELS
+      ? PAYMENT_METHOD_LABELS[value as PaymentMethod].toLowerCase()
+      : String(value);
+  return { money, method };
+}
+
+function trailText(action: string, data: AuditData, currency: string): string {
+  const { money, method } = trailWords(currency);
   switch (action) {
     case 'invoice.drafted':
       return data['origin'] === 'queue' ? 'Drafted when its trigger was met' : 'Drafted';
     case 'invoice.updated':
       return typeof data['refigured'] === 'string'
-        ? `Refigured from ${String(data['totalBefore'])} to ${String(data['total'])}: ${data['refigured']}`
+        ? `Refigured from ${money(data['totalBefore'])} to ${money(data['total'])}: ${data['refigured']}`
         : 'Draft changed';
     case 'invoice.issued':
       return `Issued as ${String(data['number'])}`;
@@ -198,13 +218,13 @@ function trailText(action: string, data: AuditData): string {
     case 'credit_note.issued':
       return `Credit note ${String(data['number'])} made`;
     case 'invoice.payment_recorded':
-      return `Payment of ${String(data['amount'])} received (${String(data['method'])})${data['receipt'] ? `, receipt ${String(data['receipt'])}` : ''}`;
+      return `Payment of ${money(data['amount'])} received (${method(data['method'])})${data['receipt'] ? `, receipt ${String(data['receipt'])}` : ''}`;
     case 'invoice.refund_requested':
-      return `Refund of ${String(data['amount'])} asked for (${String(data['method'])})`;
+      return `Refund of ${money(data['amount'])} asked for (${method(data['method'])})`;
     case 'invoice.refund_recorded':
-      return `Refund of ${String(data['amount'])} given back${data['receipt'] ? `, receipt ${String(data['receipt'])}` : ''}`;
+      return `Refund of ${money(data['amount'])} given back${data['receipt'] ? `, receipt ${String(data['receipt'])}` : ''}`;
     case 'invoice.refund_failed':
-      return `Refund of ${String(data['amount'])} failed: ${String(data['message'] ?? '')}`;
+      return `Refund of ${money(data['amount'])} failed: ${String(data['message'] ?? '')}`;
     case 'invoice.refund_needs_attention':
       return `A refund at the card processor needs checking: ${String(data['why'] ?? '')}`;
     case 'invoice.reminded':
@@ -310,7 +330,7 @@ export function invoiceDetailFrom(id: string, results: Record<string, unknown>[]
     at: a.created_at.toISOString(),
     who: a.who ?? (a.actor_kind === 'system' ? 'Automatic' : 'Someone'),
     action: a.action,
-    text: trailText(a.action, a.data),
+    text: trailText(a.action, a.data, r.currency),
   }));
   let document = r.document;
   if (!document) {

@@ -298,7 +298,7 @@ describe('progress billing through the API', () => {
       ['Walls', '12000.00', '12000.00'],
       ['Ceilings', '36000.00', '0.00'],
     ]);
-    expect(issued.auditTrail.map((a) => a.text)).toContain('Refigured from 21600.00 to 10800.00: figured again as it was issued');
+    expect(issued.auditTrail.map((a) => a.text)).toContain('Refigured from $21,600.00 to $10,800.00: figured again as it was issued');
     // The next period drafts, on a schedule of values that still ties out.
     const next = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-31' });
     expect(next.status).toBe(201);
