@@ -115,7 +115,7 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     expect(ok.status).toBe(200);
     const after = ok.body as JobBillingView;
     expect(after.lines.map((l) => l.position)).toEqual([1, 2, 3, 4]);
-    expect(after.lines[2]).toMatchObject({ expectedOn: '2026-12-20', status: 'draft', triggerProgress: 'Due 2026-12-20' });
+    expect(after.lines[2]).toMatchObject({ expectedOn: '2026-12-20', status: 'draft', triggerProgress: 'Due December 20, 2026' });
     expect(after.lines[1].expectedOn).toBe(before.lines[1].expectedOn);
     expect(after.lines[1].amount).toBe(new Decimal(before.lines[1].amount).minus(1).toFixed(2));
   });

@@ -8,6 +8,7 @@ import type {
   WorkItemView,
 } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
+import { longDate } from '../i18n/long-date';
 import { layerCompletion } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { layerMilestones } from '../jobs/jobs';
@@ -38,7 +39,7 @@ export async function loadScheduleLines(tx: TenantTx, jobId: string): Promise<Sc
   return rows;
 }
 
-/** How far a line's trigger is, in words: "3 of 5 surfaces done", "Due 2026-12-14". */
+/** How far a line's trigger is, in words: "3 of 5 surfaces done", "Due December 14, 2026". */
 export function triggerProgress(
   trigger: BillingTrigger,
   facts: { today: string; isStarted: boolean; walkthroughOn: string | null; workItems: readonly WorkItemView[] },
@@ -47,18 +48,18 @@ export function triggerProgress(
     case 'acceptance':
       return facts.isStarted ? 'Met when billing started' : 'Met when billing starts';
     case 'date':
-      return trigger.date <= facts.today ? `Date reached (${trigger.date})` : `Due ${trigger.date}`;
+      return trigger.date <= facts.today ? `Date reached (${longDate(trigger.date)})` : `Due ${longDate(trigger.date)}`;
     case 'layerComplete': {
       const c = layerCompletion(
         facts.workItems.map((w) => ({ layerId: w.layerId, doneOn: w.doneOn })),
         trigger.layerId,
       );
       if (c.total === 0) return 'No surface takes this layer';
-      if (c.isComplete) return `Done on every surface (${c.total}) on ${c.completedOn}`;
+      if (c.isComplete) return `Done on every surface (${c.total}) on ${longDate(c.completedOn ?? facts.today)}`;
       return `${c.done} of ${c.total} ${c.total === 1 ? 'surface' : 'surfaces'} done`;
     }
     case 'walkthrough':
-      return facts.walkthroughOn ? `Walkthrough held on ${facts.walkthroughOn}` : 'Waiting for the final walkthrough';
+      return facts.walkthroughOn ? `Walkthrough held on ${longDate(facts.walkthroughOn)}` : 'Waiting for the final walkthrough';
   }
 }
 

@@ -1,4 +1,5 @@
 import type { BillingTrigger, InvoiceKind } from '@layerbook/contracts';
+import { longDate } from '../../i18n/long-date';
 import { withTenant, type TenantTx } from '@layerbook/db';
 import { layerCompletion } from '@layerbook/domain';
 import type { Pool } from 'pg';
@@ -42,7 +43,7 @@ export function triggerMet(
     case 'acceptance':
       return 'Due on acceptance: billing started';
     case 'date':
-      return trigger.date <= today ? `Billing date ${trigger.date} reached` : null;
+      return trigger.date <= today ? `Billing date ${longDate(trigger.date)} reached` : null;
     case 'layerComplete': {
       const done = layerCompletion(
         items.map((i) => ({ layerId: i.layer_id, doneOn: i.done_on })),
@@ -56,10 +57,10 @@ export function triggerMet(
           : done.total === 2
             ? 'both surfaces it covers'
             : `all ${done.total} surfaces it covers`;
-      return `${name} finished on ${surfaces} on ${done.completedOn}`;
+      return `${name} finished on ${surfaces} on ${longDate(done.completedOn ?? today)}`;
     }
     case 'walkthrough':
-      return job.walkthroughOn ? `Final walkthrough held on ${job.walkthroughOn}` : null;
+      return job.walkthroughOn ? `Final walkthrough held on ${longDate(job.walkthroughOn)}` : null;
   }
 }
 

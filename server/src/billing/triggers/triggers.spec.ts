@@ -69,7 +69,7 @@ describe('billing triggers from the work', () => {
       ['deposit', 'draft', 'queue', 'ready'],
       ['milestone', 'draft', 'queue', 'ready'],
     ]);
-    expect(invoices[1].trigger?.text).toBe(`${items[0].layerName} finished on all 3 surfaces it covers on 2026-12-01`);
+    expect(invoices[1].trigger?.text).toBe(`${items[0].layerName} finished on all 3 surfaces it covers on December 1, 2026`);
     expect(
       await query(job, `select count(*)::int as n from job_progress where tenant_id = $1 and job_id = $2 and client_key = 'phone:last'`),
     ).toEqual([{ n: 1 }]);
@@ -136,7 +136,7 @@ describe('billing triggers from the work', () => {
     await queueSettled([job.firmId]);
     expect((await invoicesOf(job)).map((i) => [i.kind, i.trigger?.text])).toEqual([
       ['deposit', 'Due on acceptance: billing started'],
-      ['final', 'Final walkthrough held on 2026-12-01'],
+      ['final', 'Final walkthrough held on December 1, 2026'],
     ]);
 
     // Issued, then voided: its line's trigger still met, the queue drafts it again for review at once.
@@ -212,7 +212,7 @@ describe('the billing day', () => {
     try {
       // 2026-12-09 19:30 UTC: 08:30 on the 10th in Auckland (NZDT, +13), 11:30 on the 9th in Los Angeles.
       await sweep('2026-12-09T19:30:00Z');
-      expect((await finals(auckland)).map((i) => i.trigger?.text)).toEqual(['Billing date 2026-12-10 reached']);
+      expect((await finals(auckland)).map((i) => i.trigger?.text)).toEqual(['Billing date December 10, 2026 reached']);
       expect(await finals(angeles)).toEqual([]);
       // 2026-12-10 16:00 UTC: 08:00 on the 10th in Los Angeles.
       await sweep('2026-12-10T16:00:00Z');

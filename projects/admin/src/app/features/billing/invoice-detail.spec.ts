@@ -45,7 +45,7 @@ describe('the invoice page', () => {
   it('shows a queue-drafted progress draft for review: what drafted it, the work as an amount to date, Issue and Delete', async () => {
     const { html, text } = await render(progressDraft);
     expect(html.querySelector('h1')?.textContent).toBe('Draft — not sent');
-    expect(text()).toContain('Drafted by the schedule: Base coat finished on all 3 surfaces it covers on 2026-11-28.');
+    expect(text()).toContain('Drafted by the schedule: Base coat finished on all 3 surfaces it covers on November 28, 2026.');
     expect(buttons(html)).toEqual(expect.arrayContaining([expect.stringContaining('Issue…'), expect.stringContaining('Delete draft')]));
     expect(buttons(html).some((b) => b.includes('Record a payment'))).toBe(false);
     const work = html.querySelector<HTMLInputElement>('input[aria-label="Amount done to date for Walls, base coat"]');

@@ -81,7 +81,7 @@ export const progressDraft: InvoiceDetail = {
     locale: 'en-US',
   },
   notes: '',
-  triggerText: 'Base coat finished on all 3 surfaces it covers on 2026-11-28',
+  triggerText: 'Base coat finished on all 3 surfaces it covers on November 28, 2026',
   reopenedLayer: null,
   sentAt: null,
   voidReason: null,
