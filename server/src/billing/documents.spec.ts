@@ -115,6 +115,8 @@ describe('invoice and credit-note PDFs', () => {
   it('prints a progress invoice with our own columns, every line, the deposit credit and the period summary', async () => {
     const f = await billedJob('Column Words Plaster');
     const text = textOf((await binary(f.agent, `/api/invoices/${f.progress}/pdf`)).body);
+    // The deposit cap is the deposit's: not repeated on the invoices after it.
+    expect(text).not.toContain('Deposit rule:');
     for (const column of [
       'Scheduled value',
       'Done before',

@@ -64,7 +64,8 @@ export function renderInvoicePdf(inv: PrintableInvoice, logo: Buffer | null): Pr
     paragraph(doc, t(pay, { amount: f.money(inv.amountDue), date: f.date(inv.dueOn) }), 'strong', COLOURS.ink, 10.5);
   }
   if (inv.status === 'void') paragraph(doc, t('pdf.invoice.void'), 'strong', COLOURS.ochre, 10.5);
-  paragraph(doc, t('pdf.depositRule', { rule: d.depositCapName }), 'text', COLOURS.muted, 9);
+  // The jurisdiction's cap on deposits, named where it applies: on the deposit itself.
+  if (inv.kind === 'deposit') paragraph(doc, t('pdf.depositRule', { rule: d.depositCapName }), 'text', COLOURS.muted, 9);
   if (inv.notes) {
     doc.moveDown(0.4);
     paragraph(doc, inv.notes);
