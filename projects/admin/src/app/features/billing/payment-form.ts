@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, inject, input, output } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { provideNativeDateAdapter } from '@angular/material/core';
@@ -7,6 +7,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { INVOICE_LIMITS, type InvoiceDetail, type OfflinePaymentCreate } from '@layerbook/contracts/types';
+import { formatMoney } from '@layerbook/domain';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Session } from '../../core/auth/session';
@@ -101,6 +102,7 @@ import { TranslatePipe } from '@ngx-translate/core';
 export class PaymentForm {
   private readonly api = inject(InvoiceApi);
   private readonly fb = inject(NonNullableFormBuilder);
+  private readonly locale = inject(LOCALE_ID);
 
   readonly invoice = input.required<InvoiceDetail>();
   readonly saved = output<InvoiceDetail>();
@@ -146,7 +148,7 @@ export class PaymentForm {
       required: 'Enter the amount received.',
       ...AMOUNT_WORDS,
       zero: 'Enter an amount more than zero.',
-      overDue: `This is more than the ${amountDue} ${currency} due; record at most the amount due.`,
+      overDue: `This is more than the ${formatMoney(amountDue, currency, this.locale)} due; record at most the amount due.`,
     };
   }
 

@@ -109,7 +109,7 @@ describe('the refund dialog', () => {
     type('Amount to give back', '450.01');
     type('Why the money goes back', 'Job cancelled');
     await submit();
-    expect(errorOf('Amount to give back')).toBe('This is more than the 450.00 USD that can still be given back.');
+    expect(errorOf('Amount to give back')).toBe('This is more than the $450.00 that can still be given back.');
     http.expectNone({ method: 'POST' });
   });
 

@@ -118,7 +118,7 @@ export class RefundDialog {
       required: 'Enter the amount to give back.',
       ...AMOUNT_WORDS,
       zero: 'Enter an amount more than zero.',
-      overRefundable: `This is more than the ${this.parts.refundable} ${this.payment.currency} that can still be given back.`,
+      overRefundable: `This is more than the ${formatMoney(this.parts.refundable, this.payment.currency, this.locale)} that can still be given back.`,
     },
     refundedOn: {
       required: 'Enter the day the money went back.',
