@@ -127,6 +127,8 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     expect(started.billingStartedAt).not.toBeNull();
     expect(started.lines.every((l) => l.status === 'scheduled' || l.status === 'ready')).toBe(true);
     expect(started.lines[0].triggerProgress).toBe('Met when billing started');
+    // Drafted in the same answer (the page shows it at once), not only after the queue's check.
+    expect(started.lines[0]).toMatchObject({ status: 'ready', invoiceId: expect.any(String) });
     expect((await f.send('post', `/api/jobs/${f.jobId}/billing/start`)).status).toBe(409);
     const audit = await withTenant(t.ctx.pool, f.firmId, (tx) =>
       tx.client.query(`select 1 from audit_log where tenant_id = $1 and action = 'billing.started' and entity_id = $2`, [

@@ -42,7 +42,7 @@ export async function depositAtAcceptance(
   if (!lineId) return null;
   await tx.client.query('savepoint deposit_at_acceptance');
   try {
-    await startBilling(tx, ctx.queue, SYSTEM_ACTOR, jobId, now);
+    await startBilling(tx, ctx.queue, SYSTEM_ACTOR, jobId, now, { draftNow: false });
     const { invoiceId } = await draftLineInvoice(tx, {
       lineId,
       origin: 'queue',

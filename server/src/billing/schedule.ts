@@ -10,11 +10,12 @@ import type { TenantTx } from '@layerbook/db';
 import { checkBillingSchedule, checkDeposit, type DepositCapRule, sumMoney } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
-import type { Actor } from '../http/actor';
+import { type Actor, SYSTEM_ACTOR } from '../http/actor';
 import { badRequest, conflict } from '../http/problem';
 import { layerMilestones } from '../jobs/jobs';
 import type { JobQueue } from '../queue/job-queue';
-import { type BillingJob, loadBillingJob } from './billing-job';
+import { type BillingJob, firmToday, loadBillingJob } from './billing-job';
+import { evaluateJobBilling } from './triggers/evaluate';
 import { getJobBilling, loadScheduleLines, type ScheduleLineRow } from './job-billing';
 import { decimalsMessage, fitsCurrency } from './money';
 import { billedWorkByLine, loadValueLines } from './progress-invoice';
@@ -216,9 +217,16 @@ export async function updateBillingSchedule(
 /**
  * POST /api/jobs/:id/billing/start: the office confirms the schedule. The firm's settings are
  * copied to the job (the deposit cap in money for this contract), lines become scheduled, and the
- * queue checks the triggers (a deposit on acceptance is drafted at once). Twice is 409.
+ * triggers already met are drafted at once (a deposit on acceptance). Twice is 409.
  */
-export async function startBilling(tx: TenantTx, queue: JobQueue, actor: Actor, jobId: string, now: Date): Promise<JobBillingView> {
+export async function startBilling(
+  tx: TenantTx,
+  queue: JobQueue,
+  actor: Actor,
+  jobId: string,
+  now: Date,
+  options: { draftNow?: boolean } = {},
+): Promise<JobBillingView> {
   const job = await loadBillingJob(tx, jobId, true);
   if (job.billing_started_at) throw conflict('Billing has already started for this job.');
   const { settings } = await loadBillingSettings(tx);
@@ -260,7 +268,11 @@ export async function startBilling(tx: TenantTx, queue: JobQueue, actor: Actor, 
     entityId: job.id,
     data: { terms, method: job.billing_method },
   });
-  await enqueueBillingCheck(tx, queue, job.id);
+  // The triggers met already (a deposit on acceptance, a date passed) are drafted now, in this
+  // transaction, so the office sees them on the answer; later ones are the queue's. Without
+  // `draftNow` (acceptance issuing the deposit itself) the queue checks them after commit.
+  if (options.draftNow === false) await enqueueBillingCheck(tx, queue, job.id);
+  else await evaluateJobBilling(tx, job.id, firmToday(job, now), SYSTEM_ACTOR);
   return getJobBilling(tx, job.id, now);
 }
 
