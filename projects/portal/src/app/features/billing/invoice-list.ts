@@ -11,7 +11,10 @@ import { TranslatePipe } from '@ngx-translate/core';
 import { SayPipe } from '../../../../../shared/errors/say-pipe';
 import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
 
-/** "Your invoices": every invoice the firm has issued to this client, with what is due and by when, and a statement per job. */
+/**
+ * "Your invoices": every invoice the firm has issued to this client — when, its total, what is still
+ * due and by when — and a statement per job.
+ */
 @Component({
   selector: 'lb-invoice-list',
   imports: [LbDatePipe, LbMoneyPipe, MatIconModule, MatProgressBarModule, RouterLink, SayPipe, TranslatePipe],
@@ -36,7 +39,9 @@ import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
             <tr role="row">
               <th scope="col" role="columnheader">{{ 'billing.list.invoice' | translate }}</th>
               <th scope="col" role="columnheader">{{ 'billing.list.job' | translate }}</th>
+              <th scope="col" role="columnheader">{{ 'billing.list.issued' | translate }}</th>
               <th scope="col" role="columnheader">{{ 'billing.list.due' | translate }}</th>
+              <th scope="col" role="columnheader" class="num">{{ 'billing.list.total' | translate }}</th>
               <th scope="col" role="columnheader" class="num">{{ 'billing.list.amountDue' | translate }}</th>
               <th scope="col" role="columnheader">{{ 'billing.list.status' | translate }}</th>
             </tr>
@@ -49,8 +54,18 @@ import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
                   <a [routerLink]="['/invoices', inv.id]">{{ inv.number }}</a>
                 </th>
                 <td role="cell">{{ inv.jobTitle }}</td>
-                <td role="cell" [attr.data-label]="'billing.list.due' | translate">
-                  {{ inv.status === 'void' ? '—' : (inv.dueOn | lbDate: 'long') }}
+                <td role="cell" [attr.data-label]="'billing.list.issued' | translate">{{ inv.issuedOn | lbDate: 'long' }}</td>
+                <td role="cell" class="due" [attr.data-label]="'billing.list.due' | translate">
+                  @if (inv.status === 'void') {
+                    <!-- A cancelled invoice is due never: a dash for the eye, words for a screen reader. -->
+                    <span aria-hidden="true">—</span>
+                    <span class="lb-visually-hidden">{{ 'billing.list.noDueDate' | translate }}</span>
+                  } @else {
+                    {{ inv.dueOn | lbDate: 'long' }}
+                  }
+                </td>
+                <td role="cell" class="num" [attr.data-label]="'billing.list.total' | translate">
+                  {{ inv.total | lbMoney: inv.currency }}
                 </td>
                 <td role="cell" class="num" [attr.data-label]="'billing.list.amountDue' | translate">
                   {{ inv.amountDue | lbMoney: inv.currency }}
@@ -131,8 +146,11 @@ import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
     .status mat-icon {
       flex: none;
     }
-    /* A phone: each invoice a card — its number and status on top, the job, then what is due and by when. */
-    @media (max-width: 599.98px) {
+    /*
+     * A phone or a narrow tablet (seven columns do not fit): each invoice a card — its number and status
+     * on top, the job, its dates, its total and what is still due.
+     */
+    @media (max-width: 767.98px) {
       .lb-table thead {
         position: absolute;
         width: 1px;

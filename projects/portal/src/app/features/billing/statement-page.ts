@@ -62,21 +62,23 @@ import { formatAmount, formatCalendarDay } from '../../../../../shared/i18n/form
         <p>{{ 'billing.statement.empty' | translate }}</p>
       } @else {
         <div class="table-wrap" tabindex="0" role="region" [attr.aria-label]="'billing.statement.lines' | translate">
-          <table class="lb-table">
-            <thead>
-              <tr>
-                <th scope="col">{{ 'billing.invoice.date' | translate }}</th>
-                <th scope="col">{{ 'billing.statement.what' | translate }}</th>
-                <th scope="col" class="num">{{ 'billing.statement.charged' | translate }}</th>
-                <th scope="col" class="num">{{ 'billing.statement.paidOrCredited' | translate }}</th>
-                <th scope="col" class="num">{{ 'billing.statement.balance' | translate }}</th>
+          <!-- Roles written out, as on the invoice list: on a phone each line is drawn as a card, and some
+               browsers drop a table's meaning for screen readers once its parts are not displayed as table parts. -->
+          <table class="lb-table" role="table">
+            <thead role="rowgroup">
+              <tr role="row">
+                <th scope="col" role="columnheader">{{ 'billing.invoice.date' | translate }}</th>
+                <th scope="col" role="columnheader">{{ 'billing.statement.what' | translate }}</th>
+                <th scope="col" role="columnheader" class="num">{{ 'billing.statement.charged' | translate }}</th>
+                <th scope="col" role="columnheader" class="num">{{ 'billing.statement.paidOrCredited' | translate }}</th>
+                <th scope="col" role="columnheader" class="num">{{ 'billing.statement.balance' | translate }}</th>
               </tr>
             </thead>
-            <tbody>
+            <tbody role="rowgroup">
               @for (l of s.lines; track $index) {
-                <tr>
-                  <td>{{ day(l.on) }}</td>
-                  <th scope="row">
+                <tr role="row">
+                  <td role="cell" class="on">{{ day(l.on) }}</td>
+                  <th scope="row" role="rowheader">
                     <span class="what">
                       <mat-icon aria-hidden="true">{{ kinds[l.kind].icon }}</mat-icon>
                       @if (kinds[l.kind].text; as kind) {
@@ -85,9 +87,20 @@ import { formatAmount, formatCalendarDay } from '../../../../../shared/i18n/form
                       {{ l.text }}
                     </span>
                   </th>
-                  <td class="num">{{ isZero(l.charge) ? '' : money(l.charge) }}</td>
-                  <td class="num">{{ isZero(l.credit) ? '' : money(l.credit) }}</td>
-                  <td class="num">{{ money(l.balance) }}</td>
+                  <td role="cell" class="num" [class.blank]="isZero(l.charge)" [attr.data-label]="'billing.statement.charged' | translate">
+                    {{ isZero(l.charge) ? '' : money(l.charge) }}
+                  </td>
+                  <td
+                    role="cell"
+                    class="num"
+                    [class.blank]="isZero(l.credit)"
+                    [attr.data-label]="'billing.statement.paidOrCredited' | translate"
+                  >
+                    {{ isZero(l.credit) ? '' : money(l.credit) }}
+                  </td>
+                  <td role="cell" class="num balance" [attr.data-label]="'billing.statement.balance' | translate">
+                    {{ money(l.balance) }}
+                  </td>
                 </tr>
               }
             </tbody>
@@ -157,6 +170,68 @@ import { formatAmount, formatCalendarDay } from '../../../../../shared/i18n/form
       text-align: right !important;
       font-variant-numeric: tabular-nums;
       white-space: nowrap;
+    }
+    /*
+     * A phone or a narrow tablet: each line a card, no sideways scrolling — its date, what it is, then
+     * each figure on a line of its own with its column's name beside it, the running balance last.
+     */
+    @media (max-width: 767.98px) {
+      .lb-table thead {
+        position: absolute;
+        width: 1px;
+        height: 1px;
+        overflow: hidden;
+        clip-path: inset(50%);
+        white-space: nowrap;
+      }
+      .lb-table tbody tr {
+        position: relative;
+        display: block;
+        padding: 0.75rem 0;
+        border-bottom: 1px solid var(--mat-sys-outline-variant);
+      }
+      .lb-table tbody th,
+      .lb-table tbody td {
+        display: block;
+        padding: 0;
+        border: 0;
+      }
+      .lb-table td.on {
+        font-size: 0.85rem;
+        color: var(--mat-sys-on-surface-variant);
+      }
+      .lb-table tbody th {
+        margin: 0.15rem 0 0.35rem;
+        font-weight: 600;
+        overflow-wrap: anywhere;
+      }
+      .lb-table td.num {
+        display: flex;
+        justify-content: space-between;
+        gap: 1rem;
+        padding: 0.1rem 0;
+      }
+      .lb-table td.num::before {
+        content: attr(data-label);
+        /* The column header already names the cell for a screen reader: the label is for the eye only. */
+        content: attr(data-label) / '';
+        color: var(--mat-sys-on-surface-variant);
+        white-space: normal;
+        text-align: left;
+      }
+      .lb-table td.balance {
+        margin-top: 0.2rem;
+        font-weight: 600;
+      }
+      /* Nothing charged or nothing paid: no line on the card, but the empty cell stays for screen
+         readers, so every later cell keeps its own column's name. */
+      .lb-table td.blank {
+        position: absolute;
+        width: 1px;
+        height: 1px;
+        overflow: hidden;
+        clip-path: inset(50%);
+      }
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
