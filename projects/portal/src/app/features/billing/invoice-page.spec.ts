@@ -44,6 +44,15 @@ describe('the client’s invoice page', () => {
     expect(text()).not.toContain('nothing was charged');
   });
 
+  it('names the deposit rule on a deposit only', async () => {
+    const deposit = await render(openDeposit);
+    expect(deposit.text()).toContain(`Deposit rule: ${openDeposit.document.depositCapName}`);
+    TestBed.inject(HttpTestingController).verify();
+    TestBed.resetTestingModule();
+    const stage = await render({ ...openDeposit, kind: 'milestone' });
+    expect(stage.text()).not.toContain('Deposit rule');
+  });
+
   it('back from the card page without paying, it says nothing was charged', async () => {
     const { html } = await render(openDeposit, 'cancelled');
     const notice = html.querySelector('.cancelled[role="status"]');
