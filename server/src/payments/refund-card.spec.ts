@@ -164,6 +164,27 @@ describe('card refunds through the processor', () => {
     expect(await f.money(f.paymentId)).toMatchObject({ refunded: '25.00', amountPaid: '75.00' });
   });
 
+  it('keeps a refund pending when the processor says its key is still in use (409), and sending again refunds once', async () => {
+    const f = await cardPaid('Key In Use Glaze');
+    // the SDK retries a 409 twice by itself; all three answered so
+    fake.controls.failNext({
+      method: 'POST',
+      path: '/v1/refunds',
+      status: 409,
+      error: { type: 'idempotency_error', code: 'idempotency_key_in_use', message: 'There is currently another in-progress request.' },
+      times: 3,
+    });
+    const res = await f.refund(f.paymentId, { method: 'card', amount: '20.00' });
+    expect(res.status).toBe(502);
+    const [pending] = (await f.agent.get(`/api/invoices/${f.invoiceId}`)).body.payments[0].refunds as RefundView[];
+    expect(pending).toMatchObject({ status: 'pending', amount: '20.00' });
+    // its amount stays reserved: no second refund of the whole payment meanwhile
+    expect((await f.refund(f.paymentId, { method: 'card', amount: '100.00' })).status).toBe(400);
+    const again = await f.post(`/api/payments/refunds/${pending.id}/send`, {});
+    expect(again.body).toMatchObject({ id: pending.id, status: 'succeeded' });
+    expect((await f.atProcessor()).map((r) => r.amount)).toEqual([2000]);
+  });
+
   it('sending again a day later finds the refund the processor made from our first send, rather than making a second', async () => {
     const f = await cardPaid('Lost Answer Plaster');
     for (let i = 0; i < 3; i++) {

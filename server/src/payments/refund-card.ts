@@ -11,7 +11,8 @@ export type CardRefundAnswer =
  * idempotency key is our refund's id, so the SDK's own retries and any later attempt with the same
  * refund never refund twice; the metadata lets the processor's refund events find our row.
  * A refusal (a 4xx answer: already refunded, amount too large…) is final and told in words; no
- * answer (network, the processor's 5xx) leaves the refund pending, for its event to settle.
+ * answer (network, the processor's 5xx, a 409 for the key in use or a 429 after the SDK's retries)
+ * leaves the refund pending, for its event or a later ask to settle.
  */
 export async function sendCardRefund(stripe: Stripe, tenantId: string, refund: CardRefundToSend): Promise<CardRefundAnswer> {
   try {
@@ -25,7 +26,15 @@ export async function sendCardRefund(stripe: Stripe, tenantId: string, refund: C
     );
     return { kind: 'answered', outcome: outcomeOf(answer) };
   } catch (error) {
-    if (error instanceof Stripe.errors.StripeError && error.statusCode !== undefined && error.statusCode < 500) {
+    // 409 (the same key still being worked on) and 429 (too many requests) are no answer yet: the first
+    // request may still refund, so the refund stays being sent back rather than freeing its amount.
+    const notYet = (status: number) => status === 409 || status === 429;
+    if (
+      error instanceof Stripe.errors.StripeError &&
+      error.statusCode !== undefined &&
+      error.statusCode < 500 &&
+      !notYet(error.statusCode)
+    ) {
       return { kind: 'answered', outcome: { status: 'failed', message: refusalWords(error) } };
     }
     return { kind: 'unknown', message: error instanceof Error ? error.message : String(error) };
