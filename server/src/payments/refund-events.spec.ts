@@ -71,7 +71,7 @@ describe('applyProcessorRefund', () => {
     ).rejects.toBeInstanceOf(RefundPaymentNotYetRecorded);
   });
 
-  it('settles a refund we asked for from its event: succeeded once, and a later failed event changes nothing', async () => {
+  it('settles a refund we asked for from its event: succeeded once; a later failed event changes no figure and is noted for a person', async () => {
     const f = await cardPaid('Pending Settles Render');
     const start = await withTenant(t.ctx.pool, f.firmId, (tx) =>
       startRefund(
@@ -97,8 +97,11 @@ describe('applyProcessorRefund', () => {
     expect(await f.apply(processorRefund({ ...ours, status: 'pending' }))).toBe('Refund re_ours_1: Refund still pending at the processor');
     expect(await f.apply(processorRefund({ ...ours, status: 'succeeded' }))).toBe('Refund re_ours_1: Refund RCT-0002 recorded');
     expect(await f.apply(processorRefund({ ...ours, status: 'failed', failure_reason: 'expired_or_canceled_card' }))).toBe(
-      'Refund re_ours_1: Refund already recorded',
+      'Refund re_ours_1: needs attention: the processor says a refund we recorded as given back failed afterwards; nothing recorded',
     );
+    expect(await f.audit('invoice.refund_needs_attention')).toEqual([
+      expect.objectContaining({ amount: '40.00', currency: 'USD', processorRefundId: 're_ours_1' }),
+    ]);
     expect(await f.refundRows()).toEqual([{ status: 'succeeded', amount: '40.00', receipt_no: 2, processor_refund_id: 're_ours_1' }]);
     expect(await f.money(f.paymentId)).toMatchObject({ status: 'part_paid', amountPaid: '60.00', refunded: '40.00' });
   });

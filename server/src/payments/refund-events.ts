@@ -1,5 +1,5 @@
 import type { TenantTx } from '@layerbook/db';
-import { fromProcessorAmount } from '@layerbook/domain';
+import { fromProcessorAmount, minorUnitDigits } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import type Stripe from 'stripe';
 import { recordAudit } from '../audit/record';
@@ -30,6 +30,8 @@ const idOf = (value: string | { id: string } | null | undefined): string | null 
  * - one made at the processor's dashboard (no refund of ours): once succeeded, it is recorded as a
  *   new card refund against the payment found by its payment_intent — never twice (the processor's
  *   refund id is unique on our refunds).
+ * A refund we recorded as succeeded that the processor later says failed (or one we marked failed that
+ * succeeded) changes no figure: it is noted for a person (`invoice.refund_needs_attention`).
  * Safe to call any number of times: only the pending → final step does anything. Returns what it did, in words.
  */
 export async function applyProcessorRefund(tx: TenantTx, deps: ReceiptMailDeps, refund: Stripe.Refund, now: Date): Promise<string> {
@@ -37,6 +39,11 @@ export async function applyProcessorRefund(tx: TenantTx, deps: ReceiptMailDeps, 
   if (ours?.status === 'failed' && refund.status === 'succeeded') {
     // We were told it failed (and freed its amount), yet the money went back: a person must look.
     return `Refund ${refund.id}: ${await needsAttention(tx, ours.invoiceId, refund, 'the processor says a refund we had marked failed succeeded')}`;
+  }
+  if (ours?.status === 'succeeded' && outcomeOf(refund).status === 'failed') {
+    // Recorded as given back (receipt made), yet the processor says it failed afterwards (a closed card,
+    // rarely): the money is back with the firm and the client may not have it. A person must look.
+    return `Refund ${refund.id}: ${await needsAttention(tx, ours.invoiceId, refund, 'the processor says a refund we recorded as given back failed afterwards')}`;
   }
   if (ours) return `Refund ${refund.id}: ${await settleRefund(tx, deps, SYSTEM_ACTOR, ours.id, outcomeOf(refund), now)}`;
   if (refund.status !== 'succeeded')
@@ -116,7 +123,17 @@ async function needsAttention(tx: TenantTx, invoiceId: string, refund: Stripe.Re
     action: 'invoice.refund_needs_attention',
     entity: 'invoice',
     entityId: invoiceId,
-    data: { processorRefundId: refund.id, amount: refund.amount, currency: refund.currency, why },
+    // In the currency's own units, as every other amount in the log (the processor counts its smallest unit).
+    data: { processorRefundId: refund.id, amount: processorAmountText(refund), currency: refund.currency?.toUpperCase(), why },
   });
   return `needs attention: ${why}; nothing recorded`;
+}
+
+function processorAmountText(refund: Stripe.Refund): string | number {
+  try {
+    const currency = refund.currency.toUpperCase();
+    return fromProcessorAmount(refund.amount, currency).toFixed(minorUnitDigits(currency));
+  } catch {
+    return refund.amount;
+  }
 }
