@@ -88,6 +88,14 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     });
     expect(badLayer.status).toBe(400);
     expect(badLayer.body.errors.map((e: { field: string }) => e.field)).toEqual(['lines.1.trigger.layerId']);
+    const farDate = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
+      ...update,
+      lines: update.lines.map((l, i) => (i === 1 ? { ...l, trigger: { kind: 'date', date: '2999-12-31' } } : l)),
+    });
+    expect(farDate.status).toBe(400);
+    expect(farDate.body.errors).toEqual([
+      { field: 'lines.1.trigger.date', message: expect.stringMatching(/^Choose a billing date from \w+ \d+, 2025 to \w+ \d+, 2031\.$/) },
+    ]);
     const finalFirst = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
       ...update,
       lines: [update.lines[2], update.lines[0], update.lines[1]],

@@ -7,9 +7,10 @@ import type {
   ValueLinesUpdate,
 } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { checkBillingSchedule, checkDeposit, type DepositCapRule, sumMoney } from '@layerbook/domain';
+import { addDays, checkBillingSchedule, checkDeposit, type DepositCapRule, sumMoney, yearBefore } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
+import { longDate } from '../i18n/long-date';
 import { type Actor, SYSTEM_ACTOR } from '../http/actor';
 import { badRequest, conflict } from '../http/problem';
 import { layerMilestones } from '../jobs/jobs';
@@ -82,6 +83,9 @@ function billedLineChanges(body: BillingScheduleUpdate, existing: readonly Sched
   return problems;
 }
 
+/** How far ahead a billing date may be set: five years (common practice, no source: longer than any finish job runs). */
+const DATE_TRIGGER_DAYS_AHEAD = 5 * 365;
+
 /**
  * PUT /api/jobs/:id/billing/schedule: the whole schedule. Lines add up to the contract sum exactly
  * and the deposit keeps within the cap (schedule method: the domain's checkBillingSchedule); a
@@ -115,9 +119,21 @@ export async function updateBillingSchedule(
       ])
     ).rows.map((r) => r.layer_id),
   ]);
+  const today = firmToday(job, now);
+  const [earliest, latest] = [yearBefore(today), addDays(today, DATE_TRIGGER_DAYS_AHEAD)];
   body.lines.forEach((l, i) => {
     if (l.trigger.kind === 'layerComplete' && !layers.has(l.trigger.layerId)) {
       unknown.push({ field: `lines[${i}].trigger.layerId`, message: 'This job has no such layer.' });
+    }
+    // A billing date the office sets or moves lies within a year back and five years ahead (a line
+    // kept as it was keeps its date, however old).
+    const before = l.id !== undefined ? byId.get(l.id)?.trigger : undefined;
+    const isKept = before?.kind === 'date' && l.trigger.kind === 'date' && before.date === l.trigger.date;
+    if (l.trigger.kind === 'date' && !isKept && (l.trigger.date < earliest || l.trigger.date > latest)) {
+      unknown.push({
+        field: `lines[${i}].trigger.date`,
+        message: `Choose a billing date from ${longDate(earliest)} to ${longDate(latest)}.`,
+      });
     }
   });
   if (unknown.length) throw badRequest(unknown);
