@@ -44,7 +44,7 @@ import {
 import { TranslatePipe } from '@ngx-translate/core';
 
 const START_MESSAGE =
-  'From now on the queue watches each line’s trigger (the date, the layer finished on every surface, the walkthrough) and drafts its invoice when the trigger is met. ' +
+  'From now on Layerbook watches each line’s trigger (the date, the layer finished on every surface, the walkthrough) and drafts its invoice when the trigger is met; a line already due, like a deposit on acceptance, is drafted right away. ' +
   'Drafts wait on the job and in Billing for someone to review them: nothing is sent to the client without a person. ' +
   'The firm’s terms and deposit rule are copied onto the job now.';
 
