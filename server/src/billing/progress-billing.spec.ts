@@ -31,6 +31,24 @@ async function exampleJob(name: string) {
   return f;
 }
 
+/**
+ * The example job billed by progress with a 4,800 deposit on acceptance and one value line for all
+ * 48,000 of the work, billing started: its deposit drafted (not issued) and the value line's id.
+ */
+async function withDepositDrafted(name: string) {
+  const f = await exampleJob(name);
+  await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
+    method: 'progress',
+    lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
+  });
+  const values = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
+    lines: [{ label: 'All the plaster work', scheduledValue: '48000.00' }],
+  });
+  const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
+  const depositId = await f.lineDraft((started.body as JobBillingView).lines[0].id);
+  return { f, depositId, lineId: (values.body as JobBillingView).valueLines[0].id };
+}
+
 describe('progress billing through the API', () => {
   // DOMAIN.md §2.10 worked example (AIA G702/G703 arithmetic summaries): original contract 48,000,
   // change order #1 +3,200, retainage 10 % on work and on stored materials; application #1 certifies
@@ -222,18 +240,8 @@ describe('progress billing through the API', () => {
   });
 
   it('refigures the open progress draft (through the queue) when a deposit is issued or voided after it was drafted', async () => {
-    const f = await exampleJob('Late Deposit Plaster');
-    await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
-      method: 'progress',
-      lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
-    });
-    const values = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
-      lines: [{ label: 'All the plaster work', scheduledValue: '48000.00' }],
-    });
-    const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
-    const depositId = await f.lineDraft((started.body as JobBillingView).lines[0].id);
+    const { f, depositId, lineId } = await withDepositDrafted('Late Deposit Plaster');
     const draft = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd: '2026-12-31' });
-    const lineId = (values.body as JobBillingView).valueLines[0].id;
     // An amount its percent (four decimals) would not give back: the refigured draft must keep it as typed.
     const typed = await f.send('patch', `/api/invoices/${draft.body.id}`, {
       progressLines: [{ valueLineId: lineId, workToDate: { amount: '12345.67' }, storedMaterials: '0' }],
@@ -306,18 +314,8 @@ describe('progress billing through the API', () => {
   });
 
   it('does not void what later invoices build on: a deposit they credit, an application before a later one', async () => {
-    const f = await exampleJob('Void Order Plaster');
-    await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
-      method: 'progress',
-      lines: [{ label: 'Deposit', role: 'deposit', trigger: { kind: 'acceptance' }, amount: '4800.00' }],
-    });
-    const values = await f.send('put', `/api/jobs/${f.jobId}/billing/value-lines`, {
-      lines: [{ label: 'All the plaster work', scheduledValue: '48000.00' }],
-    });
-    const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
-    const depositId = await f.lineDraft((started.body as JobBillingView).lines[0].id);
+    const { f, depositId, lineId } = await withDepositDrafted('Void Order Plaster');
     await f.issue(depositId);
-    const lineId = (values.body as JobBillingView).valueLines[0].id;
     const application = async (percent: number, periodEnd: string) => {
       const draft = await f.send('post', `/api/jobs/${f.jobId}/invoices`, { kind: 'progress', periodEnd });
       await f.send('patch', `/api/invoices/${draft.body.id}`, {

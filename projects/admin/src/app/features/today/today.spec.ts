@@ -6,6 +6,7 @@ import { provideRouter } from '@angular/router';
 import type { BillingToday, InvoiceSummary, StaffRole, TodayView } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { Session } from '../../core/auth/session';
+import { sheetSummaries } from '../jobs/sheet/sheet-fixtures';
 import { Today } from './today';
 import { provideTestI18n } from '../../../../../shared/i18n/testing';
 import today from '../../../i18n/today/en.json';
@@ -115,20 +116,7 @@ describe('Today', () => {
     const { text, html, http, settle } = await render('crew');
     http.expectNone('/api/billing/today');
     http.expectNone('/api/inquiries/today');
-    http.expectOne('/api/jobs/sheets').flush({
-      items: [
-        {
-          id: 'job-1',
-          title: 'Dining room in lime plaster',
-          siteAddress: '14 Orchard Lane, Millbrook',
-          status: 'in_progress',
-          startDate: '2026-12-07',
-          finishDate: '2026-12-11',
-          layersDone: 3,
-          layersTotal: 8,
-        },
-      ],
-    });
+    http.expectOne('/api/jobs/sheets').flush(sheetSummaries);
     await settle();
     expect(text()).toContain('Your job sheets');
     expect(text()).toContain('Dining room in lime plaster');

@@ -151,26 +151,13 @@ import { LbDatePipe, LbMoneyPipe } from '../../../../../shared/i18n/format';
      * on top, the job, its dates, its total and what is still due.
      */
     @media (max-width: 767.98px) {
-      .lb-table thead {
-        position: absolute;
-        width: 1px;
-        height: 1px;
-        overflow: hidden;
-        clip-path: inset(50%);
-        white-space: nowrap;
-      }
+      @include tables.rows-as-cards;
       .lb-table tbody tr {
         display: grid;
         grid-template-columns: 1fr auto;
         gap: 0.25rem 1rem;
         padding: 0.75rem 0;
         border-bottom: 1px solid var(--mat-sys-outline-variant);
-      }
-      .lb-table tbody th,
-      .lb-table tbody td {
-        display: block;
-        padding: 0;
-        border: 0;
       }
       .lb-table tbody td {
         grid-column: 1 / -1;

@@ -176,25 +176,12 @@ import { formatAmount, formatCalendarDay } from '../../../../../shared/i18n/form
      * each figure on a line of its own with its column's name beside it, the running balance last.
      */
     @media (max-width: 767.98px) {
-      .lb-table thead {
-        position: absolute;
-        width: 1px;
-        height: 1px;
-        overflow: hidden;
-        clip-path: inset(50%);
-        white-space: nowrap;
-      }
+      @include tables.rows-as-cards;
       .lb-table tbody tr {
         position: relative;
         display: block;
         padding: 0.75rem 0;
         border-bottom: 1px solid var(--mat-sys-outline-variant);
-      }
-      .lb-table tbody th,
-      .lb-table tbody td {
-        display: block;
-        padding: 0;
-        border: 0;
       }
       .lb-table td.on {
         font-size: 0.85rem;

@@ -1,4 +1,4 @@
-import type { JobSheet, SheetCaution, SheetLayer, SheetProduct } from '@layerbook/contracts/types';
+import type { ItemList, JobSheet, JobSheetSummary, SheetCaution, SheetLayer, SheetProduct } from '@layerbook/contracts/types';
 
 /** Invented demo data for the sheet's specs: a dining room in lime plaster and a glazed ceiling. */
 export const products: readonly SheetProduct[] = [
@@ -150,4 +150,30 @@ export const sheet: JobSheet = {
   workItems: [],
   photos: [],
   sourceLanguage: 'en',
+};
+
+/** The crew's jobs as GET /api/jobs/sheets answers them: one under way with dates, one not yet dated. */
+export const sheetSummaries: ItemList<JobSheetSummary> = {
+  items: [
+    {
+      id: 'job-1',
+      title: 'Dining room in lime plaster',
+      siteAddress: '14 Orchard Lane, Millbrook',
+      status: 'in_progress',
+      startDate: '2026-12-07',
+      finishDate: '2026-12-11',
+      layersDone: 3,
+      layersTotal: 8,
+    },
+    {
+      id: 'job-2',
+      title: 'Hall glaze',
+      siteAddress: '2 Mill Road',
+      status: 'scheduled',
+      startDate: null,
+      finishDate: null,
+      layersDone: 0,
+      layersTotal: 4,
+    },
+  ],
 };

@@ -7,31 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { provideTestI18n } from '../../../../../../shared/i18n/testing';
 import en from '../../../../i18n/sheet/en.json';
 import { SheetList } from './sheet-list';
-
-const jobs: ItemList<JobSheetSummary> = {
-  items: [
-    {
-      id: 'job-1',
-      title: 'Dining room in lime plaster',
-      siteAddress: '14 Orchard Lane, Millbrook',
-      status: 'in_progress',
-      startDate: '2026-12-07',
-      finishDate: '2026-12-11',
-      layersDone: 3,
-      layersTotal: 8,
-    },
-    {
-      id: 'job-2',
-      title: 'Hall glaze',
-      siteAddress: '2 Mill Road',
-      status: 'scheduled',
-      startDate: null,
-      finishDate: null,
-      layersDone: 0,
-      layersTotal: 4,
-    },
-  ],
-};
+import { sheetSummaries as jobs } from './sheet-fixtures';
 
 async function render(answer: ItemList<JobSheetSummary>) {
   TestBed.configureTestingModule({
