@@ -148,7 +148,14 @@ describe('change orders in the portal', () => {
     const f = await acceptedJob(t, 'Unsendable Plaster');
     const whole = await jobMoney(t, f);
     const send = (id: string) => f.agent.post(`/api/change-orders/${id}/send`).set('x-csrf-token', f.csrf()).send({});
-    const tooMuch = await addChangeOrder(f, lump('Leave it all out', `-${whole.contract_sum}`));
+    // Half the job out: a draft that still leaves a contract, until another change takes the sum down.
+    const tooMuch = await addChangeOrder(f, lump('Leave half out', `-${new Decimal(whole.contract_sum).div(2).toFixed(2)}`));
+    await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(`update jobs set contract_sum = round(contract_sum * 0.4, 2) where tenant_id = $1 and id = $2`, [
+        tx.tenantId,
+        f.jobId,
+      ]),
+    );
     const refused = await send(tooMuch.id);
     expect(refused.status).toBe(409);
     expect(refused.body.detail).toContain('zero or below');

@@ -6,7 +6,7 @@ import { joinAs } from '../../proposals/proposal-fixtures';
 import { loadEstimateContext } from '../../proposals/estimate-context';
 import { sentProposal } from '../../proposals/portal-fixtures';
 import { startTestServer, TestServer } from '../../testing/harness';
-import { acceptedJob, addChangeOrder, secondJob, sendChangeOrder } from './change-order-fixtures';
+import { acceptedJob, addChangeOrder, jobMoney, secondJob, sendChangeOrder } from './change-order-fixtures';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -156,6 +156,15 @@ describe('change orders for the office', () => {
     expect(await fields(lump('Niche', '10.005'))).toEqual(['pricing.price']);
     // 999,999,999,999.99 fits the column, but not with 8.25 % tax on top
     expect(await fields(lump('Niche', '999999999999.99'))).toEqual(['pricing.price']);
+    // a deduction of the whole job (and its tax) leaves no contract: refused as typed, not first when sent
+    const { contract_sum: sum } = await jobMoney(t, f);
+    const whole = await post(lump('Leave it all out', `-${sum}`));
+    expect(whole.body.errors).toEqual([
+      {
+        field: 'pricing.price',
+        message: expect.stringMatching(/^This takes off more than the contract sum of \$[\d,]+\.\d\d: the job would be worth nothing\.$/),
+      },
+    ]);
     expect(
       await fields({ title: 'Niche', description: '', pricing: { kind: 'engine', surfaceIds: ['nope'], finishSystemId: f.simpleId } }),
     ).toEqual(['pricing.surfaceIds.0']);

@@ -1,17 +1,18 @@
 import type { ChangeOrderCreate, ChangeOrderPricing, ChangeOrderUpdate, ChangeOrderView } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { formatMoney } from '@layerbook/domain';
+import Decimal from 'decimal.js';
 import { recordAudit } from '../../audit/record';
 import { createPortalLink } from '../../auth/portal-auth';
 import type { AppContext } from '../../context';
 import { localDate } from '../../firms/local-date';
 import type { Actor } from '../../http/actor';
-import { conflict, notFound } from '../../http/problem';
+import { badRequest, conflict, notFound } from '../../http/problem';
 import { enqueueMail } from '../../mail/outbox';
 import { ensurePortalAccount } from '../../proposals/client-portal-account';
 import { changeOrderSentMail } from './change-order-mail';
 import { whyNotApprovable } from './decide';
-import { priceChangeOrder, type PricingJob } from './pricing';
+import { type PricedChangeOrder, priceChangeOrder, type PricingJob } from './pricing';
 import { loadChangeOrder, toView } from './read';
 import { localeOf } from '../../i18n/catalog';
 import { clientReader } from '../../i18n/reader';
@@ -28,11 +29,13 @@ interface JobRow {
   start_date: string | null;
   client_id: string;
   title: string;
+  contract_sum: string;
 }
 
 async function loadJob(tx: TenantTx, jobId: string, lock: boolean): Promise<JobRow> {
   const { rows } = await tx.client.query<JobRow>(
-    `select site_id, estimate_id, currency, start_date::text as start_date, client_id, title from jobs where tenant_id = $1 and id = $2
+    `select site_id, estimate_id, currency, start_date::text as start_date, client_id, title, contract_sum::text as contract_sum
+       from jobs where tenant_id = $1 and id = $2
       ${lock ? 'for update' : ''}`,
     [tx.tenantId, jobId],
   );
@@ -46,6 +49,22 @@ const pricingJob = (j: JobRow): PricingJob => ({
   currency: j.currency,
   startDate: j.start_date,
 });
+
+/**
+ * A deduction that would leave the job's contract sum at nothing or below is refused as it is typed
+ * (400 naming the price), not first when it is sent. (Against today's sum: a change order approved
+ * later may still move it, and sending checks again.)
+ */
+function checkLeavesAContract(job: JobRow, priced: PricedChangeOrder): void {
+  if (new Decimal(job.contract_sum).plus(priced.amount).greaterThan(0)) return;
+  const sum = formatMoney(job.contract_sum, job.currency, 'en-US');
+  throw badRequest([
+    {
+      field: priced.pricing === 'lumpSum' ? 'pricing.price' : 'pricing',
+      message: `This takes off more than the contract sum of ${sum}: the job would be worth nothing.`,
+    },
+  ]);
+}
 
 async function firmToday(tx: TenantTx, now: Date): Promise<string> {
   const { rows } = await tx.client.query<{ time_zone: string }>(`select time_zone from firms where id = $1`, [tx.tenantId]);
@@ -66,6 +85,7 @@ export async function createChangeOrder(
   const job = await loadJob(tx, jobId, true);
   const input = parseBody();
   const priced = await priceChangeOrder(tx, pricingJob(job), input.pricing, await firmToday(tx, now));
+  checkLeavesAContract(job, priced);
   const { rows } = await tx.client.query<{ id: string; number: number }>(
     `insert into change_orders (tenant_id, job_id, number, title, description, pricing, price, tax, amount, detail, created_by)
      values ($1, $2, (select coalesce(max(number), 0) + 1 from change_orders where tenant_id = $1 and job_id = $2), $3, $4, $5, $6, $7, $8, $9, $10)
@@ -110,9 +130,9 @@ export async function updateChangeOrder(
   if (row.status !== 'draft') throw conflict(`Change order #${row.number} was sent to the client; only a draft can change.`);
   const input = parseBody();
   const pricing: ChangeOrderPricing | undefined = input.pricing;
-  const priced = pricing
-    ? await priceChangeOrder(tx, pricingJob(await loadJob(tx, row.job_id, false)), pricing, await firmToday(tx, now))
-    : null;
+  const job = pricing ? await loadJob(tx, row.job_id, false) : null;
+  const priced = pricing && job ? await priceChangeOrder(tx, pricingJob(job), pricing, await firmToday(tx, now)) : null;
+  if (job && priced) checkLeavesAContract(job, priced);
   await tx.client.query(
     `update change_orders set title = coalesce($3, title), description = coalesce($4, description),
             pricing = coalesce($5, pricing), price = coalesce($6, price), tax = coalesce($7, tax), amount = coalesce($8, amount),
