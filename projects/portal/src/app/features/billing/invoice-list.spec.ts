@@ -8,23 +8,14 @@ import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import type { ItemList, PortalInvoiceSummary } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
+import { openDeposit } from '../payments/payment-fixtures';
 import { InvoiceList } from './invoice-list';
 
 /** An invented client's invoices: a deposit paid in full and a stage payment cancelled by a credit note. */
 const paid: PortalInvoiceSummary = {
-  id: 'inv-1',
-  number: 'INV-0007',
-  kind: 'deposit',
+  ...openDeposit,
   status: 'paid',
-  isOverdue: false,
-  jobId: 'job-1',
-  jobTitle: 'Morning room, polished plaster',
-  issuedOn: '2026-11-20',
-  dueOn: '2026-12-04',
-  currency: 'USD',
-  total: '1200.00',
   amountDue: '0.00',
-  locale: 'en-US',
 };
 const cancelled: PortalInvoiceSummary = {
   ...paid,

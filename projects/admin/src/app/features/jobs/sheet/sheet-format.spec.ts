@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { displayLengthUnit, formatDay, formatHour, formatPlanTime, surfaceSizes, todayIn } from './sheet-format';
+import { displayLengthUnit, formatDay, formatHour, formatPlanTime, jobDatesWords, surfaceSizes, todayIn } from './sheet-format';
 import { sheet } from './sheet-fixtures';
 
 const walls = sheet.rooms[0].surfaces[0];
@@ -51,5 +51,19 @@ describe('dates and times on the sheet', () => {
     // 03:30 UTC on Dec 3 is 21:30 on Dec 2 in Chicago (UTC−6 in December, IANA tz database)
     expect(todayIn('America/Chicago', new Date('2026-12-03T03:30:00Z'))).toBe('2026-12-02');
     expect(todayIn('Europe/Madrid', new Date('2026-12-03T03:30:00Z'))).toBe('2026-12-03');
+  });
+});
+
+describe('jobDatesWords', () => {
+  it('says a job\u2019s dates as one of three sentences, days in the reader\u2019s locale', () => {
+    expect(jobDatesWords({ startDate: '2026-12-07', finishDate: '2026-12-11' }, 'en-US')).toEqual({
+      key: 'sheet.list.dates',
+      params: { start: 'Dec 7, 2026', finish: 'Dec 11, 2026' },
+    });
+    expect(jobDatesWords({ startDate: '2026-12-07', finishDate: null }, 'en-US')).toEqual({
+      key: 'sheet.list.from',
+      params: { date: 'Dec 7, 2026' },
+    });
+    expect(jobDatesWords({ startDate: null, finishDate: null }, 'en-US')).toEqual({ key: 'sheet.list.noDates', params: {} });
   });
 });

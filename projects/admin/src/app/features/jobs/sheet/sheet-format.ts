@@ -76,3 +76,14 @@ export function todayIn(timeZone: string, now: Date): string {
     return now.toISOString().slice(0, 10);
   }
 }
+
+/** A job's dates as words: the key of its sentence ("Dec 7 to Dec 11", "From Dec 7", "No dates yet") and its params. */
+export function jobDatesWords(
+  job: { readonly startDate: string | null; readonly finishDate: string | null },
+  locale: string,
+): { readonly key: string; readonly params: Readonly<Record<string, string>> } {
+  if (job.startDate && job.finishDate)
+    return { key: 'sheet.list.dates', params: { start: formatDay(job.startDate, locale), finish: formatDay(job.finishDate, locale) } };
+  if (job.startDate) return { key: 'sheet.list.from', params: { date: formatDay(job.startDate, locale) } };
+  return { key: 'sheet.list.noDates', params: {} };
+}

@@ -8,7 +8,7 @@ import type { ItemList, JobSheetSummary } from '@layerbook/contracts/types';
 import { Language } from '../../../../../../shared/i18n/language';
 import { problemMessage } from '../../../core/errors/problem';
 import { FormAlert } from '../../../shared/ui/form-alert';
-import { formatDay } from './sheet-format';
+import { jobDatesWords } from './sheet-format';
 
 /**
  * The crew's jobs (scheduled and in progress, by start date) as cards, each opening its sheet: on the
@@ -30,13 +30,8 @@ import { formatDay } from './sheet-format';
             <span class="line"><mat-icon aria-hidden="true">place</mat-icon>{{ job.siteAddress }}</span>
             <span class="line">
               <mat-icon aria-hidden="true">event</mat-icon>
-              @if (job.startDate && job.finishDate) {
-                {{ 'sheet.list.dates' | translate: { start: day(job.startDate), finish: day(job.finishDate) } }}
-              } @else if (job.startDate) {
-                {{ 'sheet.list.from' | translate: { date: day(job.startDate) } }}
-              } @else {
-                {{ 'sheet.list.noDates' | translate }}
-              }
+              @let when = dates(job);
+              {{ when.key | translate: when.params }}
             </span>
             <span class="line status">
               <span class="chip">{{ 'sheet.status.' + job.status | translate }}</span>
@@ -128,7 +123,7 @@ export class SheetJobs {
     return error ? problemMessage(error) : null;
   });
 
-  protected day(isoDate: string): string {
-    return formatDay(isoDate, this.language.locale());
+  protected dates(job: { readonly startDate: string | null; readonly finishDate: string | null }) {
+    return jobDatesWords(job, this.language.locale());
   }
 }

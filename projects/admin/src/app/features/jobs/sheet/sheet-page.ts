@@ -8,7 +8,7 @@ import type { JobSheet } from '@layerbook/contracts/types';
 import { Language } from '../../../../../../shared/i18n/language';
 import { problemMessage } from '../../../core/errors/problem';
 import { FormAlert } from '../../../shared/ui/form-alert';
-import { formatDay } from './sheet-format';
+import { jobDatesWords } from './sheet-format';
 import { SheetChanges } from './sheet-changes';
 import { SheetFinishes } from './sheet-finishes';
 import { SHEET_MARKS } from './sheet-marks';
@@ -51,13 +51,8 @@ const jobUrl = (id: string, rest: string) => `/api/jobs/${encodeURIComponent(id)
           <p class="line"><mat-icon aria-hidden="true">place</mat-icon>{{ s.siteAddress }}</p>
           <p class="line">
             <mat-icon aria-hidden="true">event</mat-icon>
-            @if (s.startDate && s.finishDate) {
-              {{ 'sheet.list.dates' | translate: { start: day(s.startDate), finish: day(s.finishDate) } }}
-            } @else if (s.startDate) {
-              {{ 'sheet.list.from' | translate: { date: day(s.startDate) } }}
-            } @else {
-              {{ 'sheet.list.noDates' | translate }}
-            }
+            @let when = dates(s);
+            {{ when.key | translate: when.params }}
             <span class="chip">{{ 'sheet.status.' + s.status | translate }}</span>
           </p>
           @if (!marks.online()) {
@@ -220,7 +215,7 @@ export class SheetPage {
     this.host.nativeElement.querySelector(`#${id}`)?.scrollIntoView({ behavior: 'smooth', block: 'start' });
   }
 
-  protected day(isoDate: string): string {
-    return formatDay(isoDate, this.language.locale());
+  protected dates(job: { readonly startDate: string | null; readonly finishDate: string | null }) {
+    return jobDatesWords(job, this.language.locale());
   }
 }
