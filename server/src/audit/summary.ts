@@ -81,6 +81,9 @@ const SAY: Readonly<Record<string, Say>> = {
   'invoice.refund_recorded': (d) => `Refunded ${t(d, 'amount')}${of(d, 'receipt', ', receipt')}`,
   'invoice.refund_failed': (d) => `A refund of ${t(d, 'amount')} failed${paren(t(d, 'message'))}`,
   'invoice.refund_needs_attention': (d) => `A card refund of ${t(d, 'amount')} needs checking${paren(t(d, 'why'))}`,
+  'invoice.payment_needs_attention': (d) =>
+    `A card payment of ${t(d, 'amount')} ${t(d, 'currency')} needs checking (the checkout asked ${t(d, 'asked')} ${t(d, 'askedCurrency')})`,
+  'invoice.attention_cleared': () => 'Marked a card payment or refund to check as dealt with',
   'billing.started': (d) => `Started billing${of(d, 'method', 'by')}`,
   'billing.schedule_updated': () => 'Changed the billing schedule',
   'billing.value_lines_updated': () => 'Changed the schedule of values',

@@ -103,6 +103,10 @@ function auditText(r: AuditRow): string | null {
       return `Refund on ${invoice} failed`;
     case 'invoice.refund_needs_attention':
       return `A refund on ${invoice} needs checking`;
+    case 'invoice.payment_needs_attention':
+      return `A card payment on ${invoice} needs checking`;
+    case 'invoice.attention_cleared':
+      return `A check on ${invoice} marked as dealt with`;
     case 'billing.deposit_left_for_office':
       return 'Deposit not issued at acceptance: the billing schedule needs the office first';
     case 'credit_note.issued':

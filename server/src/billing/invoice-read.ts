@@ -177,7 +177,9 @@ const TRAIL_ORDER = [
   'invoice.refund_requested',
   'invoice.refund_recorded',
   'invoice.refund_failed',
+  'invoice.payment_needs_attention',
   'invoice.refund_needs_attention',
+  'invoice.attention_cleared',
   'invoice.voided',
   'credit_note.issued',
 ];
@@ -198,6 +200,12 @@ function trailWords(currency: string) {
       ? PAYMENT_METHOD_LABELS[value as PaymentMethod].toLowerCase()
       : String(value);
   return { money, method };
+}
+
+/** "paid €30.00 where the checkout asked $25.00", each amount in its own currency. */
+export function paidOther(data: Readonly<Record<string, unknown>>): string {
+  const say = (amount: unknown, currency: unknown) => trailWords(typeof currency === 'string' ? currency : '').money(amount);
+  return `paid ${say(data['amount'], data['currency'])} where the checkout asked ${say(data['asked'], data['askedCurrency'])}`;
 }
 
 function trailText(action: string, data: AuditData, currency: string): string {
@@ -227,6 +235,10 @@ function trailText(action: string, data: AuditData, currency: string): string {
       return `Refund of ${money(data['amount'])} failed: ${String(data['message'] ?? '')}`;
     case 'invoice.refund_needs_attention':
       return `A refund at the card processor needs checking: ${String(data['why'] ?? '')}`;
+    case 'invoice.payment_needs_attention':
+      return `A card payment needs checking: ${paidOther(data)}`;
+    case 'invoice.attention_cleared':
+      return 'Marked as dealt with';
     case 'invoice.reminded':
       return `Reminder sent: ${reminderLabel(String(data['step'] ?? 'due'))}`;
     default:

@@ -23,6 +23,7 @@ import { deleteDraft, updateDraft } from './draft-edits';
 import { buildInvoiceListQuery, getInvoice, type InvoiceListRow, invoicePage } from './invoice-read';
 import { issueAndRead } from './issue';
 import { recordOfflinePayment } from './offline-payments';
+import { clearAttentionNote } from '../payments/attention';
 import { enqueueReceiptMail } from '../payments/receipt-mail';
 import { getBillingSettings, saveBillingSettings } from './settings';
 import { billingToday } from './today';
@@ -120,11 +121,17 @@ export function invoiceRoutes(ctx: AppContext): Router {
   return router;
 }
 
-/** /api/billing/today: the money part of Today (owner, office). */
+/** /api/billing: the money part of Today and its notes to check (owner, office). */
 export function billingTodayRoutes(ctx: AppContext): Router {
   const router = Router();
   router.get('/today', async (req, res) => {
     res.json((await withStaff(ctx, req, 'office', (tx) => billingToday(tx, ctx.now()))) satisfies BillingToday);
+  });
+  router.post('/attention/:id/clear', async (req, res) => {
+    await withStaff(ctx, req, 'office', (tx, staff) =>
+      clearAttentionNote(tx, staffActor(staff), parse(z.strictObject({ id: uuid('note id') }), req.params).id),
+    );
+    res.status(204).end();
   });
   return router;
 }

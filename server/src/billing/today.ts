@@ -1,6 +1,7 @@
 import type { BillingToday, PaymentMethod } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { SUMMARY_FROM, summaryColumns, type SummaryRow, toSummary } from './invoice-read';
+import { openAttentionNotes } from '../payments/attention';
 import { receiptNumber } from '../payments/payment-read';
 import { moneyOut } from './money';
 
@@ -19,7 +20,10 @@ interface ReceivedRow {
   received_on: string;
 }
 
-/** GET /api/billing/today — drafts to review (queue-drafted first, oldest first), overdue invoices, change orders waiting for the client. */
+/**
+ * GET /api/billing/today — drafts to review (queue-drafted first, oldest first), overdue invoices, change orders waiting for
+ * the client, payments of the last two days, and what the card processor left for a person to check.
+ */
 export async function billingToday(tx: TenantTx, now: Date): Promise<BillingToday> {
   const clock = `with clock as materialized (select ($2::timestamptz at time zone f.time_zone)::date as today from firms f where f.id = $1)`;
   const ready = await tx.client.query<SummaryRow>(
@@ -57,6 +61,7 @@ export async function billingToday(tx: TenantTx, now: Date): Promise<BillingToda
       order by p.received_on desc, p.created_at desc limit ${LIMIT}`,
     [tx.tenantId, now],
   );
+  const needsAttention = await openAttentionNotes(tx);
   return {
     readyToBill: ready.rows.map(toSummary),
     overdue: overdue.rows.map(toSummary),
@@ -82,5 +87,6 @@ export async function billingToday(tx: TenantTx, now: Date): Promise<BillingToda
       method: p.method,
       receivedOn: p.received_on,
     })),
+    needsAttention,
   };
 }

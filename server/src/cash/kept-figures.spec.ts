@@ -38,10 +38,14 @@ const RECOMPUTED = {
               where tenant_id = $1 and status in ('issued', 'part_paid', 'refunded') and due_on is not null
                 and total - amount_paid - amount_credited > 0
               group by client_id`,
-  received: `select 'payment ' || received_on || ' ' || sum(amount) || ' ' || count(*) as r from payments where tenant_id = $1 group by received_on
+  // money counts in its invoice's currency only: a card payment taken in another currency is the client's credit, noted for a person
+  received: `select 'payment ' || received_on || ' ' || sum(p.amount) || ' ' || count(*) as r from payments p
+               join invoices i on i.tenant_id = p.tenant_id and i.id = p.invoice_id and i.currency = p.currency
+              where p.tenant_id = $1 group by received_on
              union all
-             select 'refund ' || refunded_on || ' ' || sum(amount) || ' ' || count(*) from refunds
-              where tenant_id = $1 and status = 'succeeded' group by refunded_on`,
+             select 'refund ' || refunded_on || ' ' || sum(r.amount) || ' ' || count(*) from refunds r
+               join invoices i on i.tenant_id = r.tenant_id and i.id = r.invoice_id and i.currency = r.currency
+              where r.tenant_id = $1 and r.status = 'succeeded' group by refunded_on`,
   // a job with nothing billed or approved yet may have no row, or a row of zeros after a draft was issued and voided back to zero
   jobs: `select job_id || ' ' || sum(issued) || ' ' || sum(credited) || ' ' || sum(paid) || ' ' || sum(change_orders) as r from (
            select job_id, total as issued, amount_credited as credited, amount_paid as paid, 0 as change_orders from invoices
@@ -131,6 +135,19 @@ async function mixedWrites(f: Firm, scale: number): Promise<void> {
     [payment['id'], payment['invoice_id'], payment['client_id'], (2 * scale).toFixed(2)],
   );
   await sql(f, `update refunds set status = 'succeeded' where tenant_id = $1 and id = $2`, [pending['id']]);
+  // A card payment the processor took in euros on a dollar invoice, and a refund of part of it: neither is dollars received.
+  const [euros] = await sql(
+    f,
+    `insert into payments (tenant_id, invoice_id, client_id, method, amount, amount_applied, currency, received_on, receipt_no)
+     values ($1, $2, $3, 'card', $4, 0, 'EUR', '2026-12-10', 9000) returning id`,
+    [payment['invoice_id'], payment['client_id'], (30 * scale).toFixed(2)],
+  );
+  await sql(
+    f,
+    `insert into refunds (tenant_id, payment_id, invoice_id, client_id, method, status, amount, currency, refunded_on, reason)
+     values ($1, $2, $3, $4, 'card', 'succeeded', $5, 'EUR', '2026-12-11', 'Paid in the wrong currency')`,
+    [euros['id'], payment['invoice_id'], payment['client_id'], (10 * scale).toFixed(2)],
+  );
   // Change orders: drafted, then approved; another approved and declined again.
   await sql(
     f,
@@ -193,8 +210,8 @@ describe('figures kept by the database', () => {
 
       const [cash] = await sql(
         f,
-        `select (select sum(amount) from payments where tenant_id = $1)::text as received,
-                (select sum(amount) from refunds where tenant_id = $1 and status = 'succeeded')::text as refunded`,
+        `select (select sum(amount) from payments where tenant_id = $1 and currency = 'USD')::text as received,
+                (select sum(amount) from refunds where tenant_id = $1 and status = 'succeeded' and currency = 'USD')::text as refunded`,
       );
       const received = (await f.agent.get('/api/cash/received')).body as CashReceived;
       expect(received.totals).toMatchObject({ received: cash['received'], refunded: new Decimal(cash['refunded'] as string).toFixed(2) });

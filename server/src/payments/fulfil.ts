@@ -3,6 +3,7 @@ import { fromProcessorAmount, minorUnitDigits, toProcessorAmount } from '@layerb
 import type Stripe from 'stripe';
 import { localDate } from '../firms/local-date';
 import { SYSTEM_ACTOR } from '../http/actor';
+import { notePaymentMismatch } from './attention';
 import { enqueueReceiptMail, type ReceiptMailDeps } from './receipt-mail';
 import { recordPayment } from './record-payment';
 
@@ -83,7 +84,7 @@ function paidAmount(session: Stripe.Checkout.Session): { amount: string; currenc
  * recordPayment finds a payment already recorded for the session and writes nothing. What was really
  * paid (the processor's amount_total and currency) is what is recorded; when it differs from what
  * our checkout asked, the payment is still recorded (a different currency stays whole as the client's
- * credit) and the outcome says it needs attention. The receipt e-mail is queued in the same transaction.
+ * credit), the outcome says it needs attention and the invoice gets a note for Today (attention.ts). The receipt e-mail is queued in the same transaction.
  * The payment is dated in the firm's zone by when the processor took it (takenAt; `paidAt` when the
  * session does not say). A card payment's reference stays empty: the client reads "Payment by card"
  * and the receipt number, and the processor's PaymentIntent id is kept apart for the office.
@@ -123,6 +124,17 @@ export async function fulfilCheckoutSession(
     processorPaymentIntentId: intent ?? undefined,
   });
   if (!recorded.alreadyRecorded) await enqueueReceiptMail(tx, deps, { kind: 'payment', id: recorded.paymentId });
+  if (!recorded.alreadyRecorded && !matches) {
+    await notePaymentMismatch(tx, {
+      invoiceId: checkout.invoice_id,
+      paymentId: recorded.paymentId,
+      receiptNumber: recorded.receiptNumber,
+      amount: paid.amount,
+      currency: paid.currency,
+      asked: checkout.amount,
+      askedCurrency: checkout.currency,
+    });
+  }
   await tx.client.query(
     `update checkout_sessions set status = 'complete', completed_at = coalesce(completed_at, $3) where tenant_id = $1 and id = $2`,
     [tx.tenantId, checkout.id, now],

@@ -1,3 +1,4 @@
+import type { AttentionReason } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { fromProcessorAmount, minorUnitDigits } from '@layerbook/domain';
 import Decimal from 'decimal.js';
@@ -38,12 +39,12 @@ export async function applyProcessorRefund(tx: TenantTx, deps: ReceiptMailDeps, 
   const ours = await findOurRefund(tx, refund);
   if (ours?.status === 'failed' && refund.status === 'succeeded') {
     // We were told it failed (and freed its amount), yet the money went back: a person must look.
-    return `Refund ${refund.id}: ${await needsAttention(tx, ours.invoiceId, refund, 'the processor says a refund we had marked failed succeeded')}`;
+    return `Refund ${refund.id}: ${await needsAttention(tx, ours.invoiceId, refund, 'refundWentThroughAfter', 'the processor says a refund we had marked failed succeeded')}`;
   }
   if (ours?.status === 'succeeded' && outcomeOf(refund).status === 'failed') {
     // Recorded as given back (receipt made), yet the processor says it failed afterwards (a closed card,
     // rarely): the money is back with the firm and the client may not have it. A person must look.
-    return `Refund ${refund.id}: ${await needsAttention(tx, ours.invoiceId, refund, 'the processor says a refund we recorded as given back failed afterwards')}`;
+    return `Refund ${refund.id}: ${await needsAttention(tx, ours.invoiceId, refund, 'refundFailedAfter', 'the processor says a refund we recorded as given back failed afterwards')}`;
   }
   if (ours) return `Refund ${refund.id}: ${await settleRefund(tx, deps, SYSTEM_ACTOR, ours.id, outcomeOf(refund), now)}`;
   if (refund.status !== 'succeeded')
@@ -92,11 +93,23 @@ async function recordDashboardRefund(
   // Another event for the same refund may have recorded it while this one waited for the lock.
   if (await findOurRefund(tx, refund)) return 'already recorded';
   if (refund.currency.toUpperCase() !== payment.currency) {
-    return needsAttention(tx, payment.invoice_id, refund, `paid in ${payment.currency}, refunded in ${refund.currency.toUpperCase()}`);
+    return needsAttention(
+      tx,
+      payment.invoice_id,
+      refund,
+      'refundOtherCurrency',
+      `paid in ${payment.currency}, refunded in ${refund.currency.toUpperCase()}`,
+    );
   }
   const amount = fromProcessorAmount(refund.amount, payment.currency);
   if (amount.greaterThan(new Decimal(locked.refundable))) {
-    return needsAttention(tx, payment.invoice_id, refund, `${amount.toFixed(2)} is more than the ${locked.refundable} left on the payment`);
+    return needsAttention(
+      tx,
+      payment.invoice_id,
+      refund,
+      'refundMoreThanLeft',
+      `${amount.toFixed(2)} is more than the ${locked.refundable} left on the payment`,
+    );
   }
   const inserted = await tx.client.query<{ id: string }>(
     `insert into refunds (tenant_id, payment_id, invoice_id, client_id, method, status, amount, currency, refunded_on, reason, processor_refund_id)
@@ -116,7 +129,13 @@ async function recordDashboardRefund(
   return settleRefund(tx, deps, SYSTEM_ACTOR, inserted.rows[0].id, { status: 'succeeded', processorRefundId: refund.id }, now);
 }
 
-async function needsAttention(tx: TenantTx, invoiceId: string, refund: Stripe.Refund, why: string): Promise<string> {
+async function needsAttention(
+  tx: TenantTx,
+  invoiceId: string,
+  refund: Stripe.Refund,
+  reason: AttentionReason,
+  why: string,
+): Promise<string> {
   await recordAudit(tx, {
     actorUserId: null,
     actorKind: 'system',
@@ -124,7 +143,7 @@ async function needsAttention(tx: TenantTx, invoiceId: string, refund: Stripe.Re
     entity: 'invoice',
     entityId: invoiceId,
     // In the currency's own units, as every other amount in the log (the processor counts its smallest unit).
-    data: { processorRefundId: refund.id, amount: processorAmountText(refund), currency: refund.currency?.toUpperCase(), why },
+    data: { reason, processorRefundId: refund.id, amount: processorAmountText(refund), currency: refund.currency?.toUpperCase(), why },
   });
   return `needs attention: ${why}; nothing recorded`;
 }

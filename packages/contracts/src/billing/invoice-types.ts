@@ -6,7 +6,7 @@
 
 import type { PaymentReceivedToday } from '../cash/cash-types';
 import type { DepositCapPresetId, PaymentTermsSetting } from './billing-settings-types';
-import type { ClientCreditView, PaymentDetail } from '../payments/payment-types';
+import type { AttentionNote, ClientCreditView, PaymentDetail } from '../payments/payment-types';
 
 export const INVOICE_KINDS = ['deposit', 'milestone', 'progress', 'retainage', 'final'] as const;
 export type InvoiceKind = (typeof INVOICE_KINDS)[number];
@@ -261,4 +261,6 @@ export interface BillingToday {
   }>;
   /** payments received yesterday or today in the firm's zone, newest first */
   readonly paymentsReceived: readonly PaymentReceivedToday[];
+  /** what the card processor left for a person to check, oldest first, until marked dealt with */
+  readonly needsAttention: readonly AttentionNote[];
 }

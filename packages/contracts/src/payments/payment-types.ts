@@ -108,3 +108,36 @@ export interface PortalReceipt {
 }
 
 export const PAYMENT_LIMITS = { reasonMaxLength: 500, referenceMaxLength: 120 } as const;
+
+/**
+ * Why the card processor's word left something for a person: a payment taken in another amount or
+ * currency than the invoice asked; a refund the processor reported failed after we recorded it given
+ * back, or went through after we were told it failed; a refund made at the processor's dashboard we
+ * could not record (another currency, more than was left on the payment). `other` for older notes.
+ */
+export const ATTENTION_REASONS = [
+  'paidOtherAmount',
+  'refundFailedAfter',
+  'refundWentThroughAfter',
+  'refundOtherCurrency',
+  'refundMoreThanLeft',
+  'other',
+] as const;
+export type AttentionReason = (typeof ATTENTION_REASONS)[number];
+
+/** One note on Today's money panel until someone marks it dealt with (POST /api/billing/attention/:id/clear). */
+export interface AttentionNote {
+  /** the audit entry that made the note */
+  readonly id: string;
+  readonly reason: AttentionReason;
+  readonly invoiceId: string;
+  readonly invoiceNumber: string | null;
+  readonly clientName: string;
+  /** what the processor moved, in its own currency (null when it gave no amount we can read) */
+  readonly amount: string | null;
+  readonly currency: string | null;
+  /** what the checkout asked (a payment in another amount or currency only) */
+  readonly asked: string | null;
+  readonly askedCurrency: string | null;
+  readonly notedAt: string;
+}

@@ -1,3 +1,4 @@
+import { sql } from 'drizzle-orm';
 import { index, jsonb, pgTable, text, uuid } from 'drizzle-orm/pg-core';
 import { createdAt, id, tenantId, tenantPolicy } from './columns';
 import { firms } from './firms';
@@ -22,6 +23,10 @@ export const auditLog = pgTable(
     index('audit_log_entity_idx').on(t.tenantId, t.entityId, t.createdAt),
     // the owner's activity filtered by person (who signed in, who changed what), newest first
     index('audit_log_actor_idx').on(t.tenantId, t.actorUserId, t.createdAt, t.id),
+    // what the card processor left for a person (payments/attention.ts): Today finds the few without reading the log
+    index('audit_log_attention_idx')
+      .on(t.tenantId, t.createdAt)
+      .where(sql`action in ('invoice.payment_needs_attention', 'invoice.refund_needs_attention')`),
     tenantPolicy('audit_log'),
   ],
 );

@@ -1,3 +1,4 @@
+import type { AttentionReason } from '@layerbook/contracts/types';
 import { daysBetween } from '@layerbook/contracts/engine';
 
 /** Words to translate: a key and its params. */
@@ -24,3 +25,13 @@ export function receivedWords(receivedOn: string, today: string | null): 'today'
   if (days === 1) return 'yesterday';
   return null;
 }
+
+/** What each kind of note to check says (its amounts as params: `amount`, and `asked` for a payment). */
+export const ATTENTION_WORDS: Readonly<Record<AttentionReason, string>> = {
+  paidOtherAmount: 'today.money.attentionPaidOtherAmount',
+  refundFailedAfter: 'today.money.attentionRefundFailedAfter',
+  refundWentThroughAfter: 'today.money.attentionRefundWentThroughAfter',
+  refundOtherCurrency: 'today.money.attentionRefundOtherCurrency',
+  refundMoreThanLeft: 'today.money.attentionRefundMoreThanLeft',
+  other: 'today.money.attentionOther',
+};

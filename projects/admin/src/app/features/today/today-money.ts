@@ -1,26 +1,41 @@
 import type { HttpResourceRef } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { HttpClient } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { type BillingToday } from '@layerbook/contracts/types';
+import { type AttentionNote, type BillingToday } from '@layerbook/contracts/types';
+import { firstValueFrom } from 'rxjs';
 import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import { Language } from '../../../../../shared/i18n/language';
 import { LbDatePipe } from '../../../../../shared/i18n/format';
+import { toProblem } from '../../core/errors/problem';
 import { loadMessage } from '../../shared/forms/load-message';
 import { CalendarDatePipe, formatCalendarDate } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { overdueWords, receivedWords } from './money-words';
+import { ATTENTION_WORDS, overdueWords, receivedWords } from './money-words';
 
 /**
  * Today's money, for owners and the office (Today never shows it to the crew, and the API refuses
- * them): drafts ready to bill, invoices past due, payments received since yesterday, change orders
- * waiting for the client.
+ * them): what the card processor left for a person to check (first, and only when there is any),
+ * drafts ready to bill, invoices past due, payments received since yesterday, change orders waiting
+ * for the client.
  */
 @Component({
   selector: 'lb-today-money',
-  imports: [CalendarDatePipe, FormAlert, LbDatePipe, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink, TranslatePipe],
+  imports: [
+    CalendarDatePipe,
+    FormAlert,
+    LbDatePipe,
+    MatButtonModule,
+    MatIconModule,
+    MatProgressBarModule,
+    MoneyPipe,
+    RouterLink,
+    TranslatePipe,
+  ],
   templateUrl: './today-money.html',
   styleUrl: './today-money.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -43,8 +58,27 @@ export class TodayMoney {
   });
   protected readonly message = loadMessage({ error: () => this.money().error() });
   protected readonly overdueWords = overdueWords;
+  protected readonly attentionWords = ATTENTION_WORDS;
   private readonly translate = inject(TranslateService);
   private readonly language = inject(Language);
+  private readonly http = inject(HttpClient);
+  /** the note being marked dealt with, and what the server said when that failed */
+  protected readonly clearing = signal<string | null>(null);
+  protected readonly clearMessage = signal<string | null>(null);
+
+  /** Marks a note dealt with, then reloads the panel (the note leaves it; the invoice's trail keeps both). */
+  protected async clear(note: AttentionNote): Promise<void> {
+    this.clearing.set(note.id);
+    this.clearMessage.set(null);
+    try {
+      await firstValueFrom(this.http.post(`/api/billing/attention/${encodeURIComponent(note.id)}/clear`, {}));
+      this.money().reload();
+    } catch (error) {
+      this.clearMessage.set(toProblem(error).title);
+    } finally {
+      this.clearing.set(null);
+    }
+  }
 
   /** "today", "yesterday" or the date, in the reader's language. */
   protected receivedWhen(receivedOn: string): string {

@@ -3,7 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { ApplicationRef } from '@angular/core';
 import { type ComponentFixture, DeferBlockBehavior, DeferBlockState, TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
-import type { BillingToday, InvoiceSummary, StaffRole, TodayView } from '@layerbook/contracts/types';
+import type { AttentionNote, BillingToday, InvoiceSummary, StaffRole, TodayView } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { Session } from '../../core/auth/session';
 import { sheetSummaries } from '../jobs/sheet/sheet-fixtures';
@@ -61,6 +61,19 @@ const money: BillingToday = {
       receivedOn: '2026-12-01',
     },
   ],
+  needsAttention: [],
+};
+const euroPaid: AttentionNote = {
+  id: 'note-1',
+  reason: 'paidOtherAmount',
+  invoiceId: 'inv-1',
+  invoiceNumber: 'INV-0007',
+  clientName: 'Ada Ward',
+  amount: '800.00',
+  currency: 'EUR',
+  asked: '800.00',
+  askedCurrency: 'USD',
+  notedAt: '2026-12-01T16:00:00.000Z',
 };
 const inquiries: TodayView = {
   localDate: '2026-12-02',
@@ -146,5 +159,30 @@ describe('Today', () => {
     const flag = html().querySelector('.flag');
     expect(flag?.querySelector('mat-icon')?.textContent).toContain('alarm');
     expect(flag?.textContent).toContain('overdue');
+    // nothing to check: no heading for it at all
+    expect(text()).not.toContain('to check');
+  });
+
+  it('puts card payments to check first, each in its own currency, until marked dealt with', async () => {
+    const { text, html, http, settle } = await render('office');
+    http.expectOne('/api/inquiries/today').flush(inquiries);
+    http.expectOne('/api/billing/today').flush({ ...money, needsAttention: [euroPaid] });
+    await settle();
+    expect(text()).toContain('Card payments and refunds to check (1)');
+    expect(text()).toContain('INV-0007 · Ada Ward');
+    expect(text()).toContain('Paid €800.00 where the checkout asked $800.00.');
+    const headings = [...html().querySelectorAll('h3')].map((h) => h.textContent?.trim() ?? '');
+    expect(headings[0]).toContain('to check');
+    const button = [...html().querySelectorAll('button')].find((b) => b.textContent?.includes('Mark as dealt with'));
+    button!.click();
+    const cleared = http.expectOne('/api/billing/attention/note-1/clear');
+    expect(cleared.request.method).toBe('POST');
+    cleared.flush(null, { status: 204, statusText: 'No Content' });
+    // the panel asks again once the POST is answered (the reload is pending, so the app is not stable yet)
+    await new Promise((resolve) => setTimeout(resolve));
+    TestBed.inject(ApplicationRef).tick();
+    http.expectOne('/api/billing/today').flush(money);
+    await settle();
+    expect(text()).not.toContain('to check');
   });
 });

@@ -1,0 +1,1 @@
+CREATE INDEX "audit_log_attention_idx" ON "audit_log" USING btree ("tenant_id","created_at") WHERE action in ('invoice.payment_needs_attention', 'invoice.refund_needs_attention');
