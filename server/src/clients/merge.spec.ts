@@ -1,4 +1,7 @@
 import { withTenant } from '@layerbook/db';
+import type { ClientSummary, JobBillingView } from '@layerbook/contracts';
+import { billingJob } from '../billing/billing-fixtures';
+import { CLIENT_TABLES } from './merge';
 import { signUpFirm, startTestServer, TestServer, uniqueEmail } from '../testing/harness';
 
 let t: TestServer;
@@ -128,10 +131,51 @@ describe('duplicate clients', () => {
         data: {
           mergedClientId: dup,
           mergedName: 'Ida Marsh',
-          moved: { client_contacts: 1, sites: 1, inquiries: 1, estimates: 0, jobs: 0, sample_boards: 0, portal_users: 1 },
+          moved: {
+            client_contacts: 1,
+            sites: 1,
+            inquiries: 1,
+            estimates: 0,
+            jobs: 0,
+            sample_boards: 0,
+            portal_users: 1,
+            invoices: 0,
+            payments: 0,
+            refunds: 0,
+            client_credits: 0,
+            checkout_sessions: 0,
+          },
         },
       },
     ]);
+  });
+
+  it('moves a billed client whole: its job, invoices and what the cash figures owe by client go to the kept one', async () => {
+    const f = await billingJob(t, 'Merge Billed Plaster');
+    const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
+    expect(started.status).toBe(200);
+    const deposit = await f.lineDraft((started.body as JobBillingView).lines[0].id);
+    await f.issue(deposit, { send: false, issuedOn: '2026-12-01' });
+    const kept = (
+      await f.agent
+        .post('/api/clients')
+        .set('x-csrf-token', f.csrf())
+        .send({ kind: 'homeowner', name: 'Edwina Marl', email: uniqueEmail('kept') })
+    ).body as ClientSummary;
+    const merged = await f.agent.post(`/api/clients/${f.clientId}/merge`).set('x-csrf-token', f.csrf()).send({ intoClientId: kept.id });
+    expect(merged.status).toBe(200);
+    const after = await withTenant(t.ctx.pool, f.firmId, async (tx) => ({
+      invoices: (await tx.client.query(`select distinct client_id from invoices where tenant_id = $1`, [tx.tenantId])).rows,
+      owed: (await tx.client.query(`select client_id from cash_open_clients where tenant_id = $1`, [tx.tenantId])).rows,
+    }));
+    expect(after).toEqual({ invoices: [{ client_id: kept.id }], owed: [{ client_id: kept.id }] });
+  });
+
+  it('knows every table that points at a client (the foreign keys to clients)', async () => {
+    const { rows } = await t.ctx.pool.query<{ t: string }>(
+      `select distinct conrelid::regclass::text as t from pg_constraint where confrelid = 'clients'::regclass and contype = 'f'`,
+    );
+    expect(rows.map((r) => r.t).sort()).toEqual([...CLIENT_TABLES].sort());
   });
 
   it('refuses a merge into itself or a bad id naming the field, and moves nothing', async () => {

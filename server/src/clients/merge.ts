@@ -71,13 +71,30 @@ export async function matchesOfClient(tx: TenantTx, id: string): Promise<ClientM
   return findClientMatches(tx, client, id);
 }
 
-/** Every table that points at a client, in the order they are moved. */
-const CLIENT_TABLES = ['client_contacts', 'sites', 'inquiries', 'estimates', 'jobs', 'sample_boards', 'portal_users'] as const;
+/**
+ * Every table that points at a client, in the order they are moved (the merge spec checks the list
+ * against the database's foreign keys). An issued invoice's document keeps the name it was issued to.
+ */
+export const CLIENT_TABLES = [
+  'client_contacts',
+  'sites',
+  'inquiries',
+  'estimates',
+  'jobs',
+  'sample_boards',
+  'portal_users',
+  'invoices',
+  'payments',
+  'refunds',
+  'client_credits',
+  'checkout_sessions',
+] as const;
 
 /**
  * Merges a duplicate into the client to keep, in the caller's transaction: contacts, sites,
- * inquiries, estimates, jobs, sample boards and portal access move to the kept client, the
- * duplicate is deleted, and the audit log records what moved. Another firm's id answers 404.
+ * inquiries, estimates, jobs, sample boards, portal access and the billing (invoices, payments,
+ * refunds, credits, checkouts; the cash figures follow by their triggers) move to the kept client,
+ * the duplicate is deleted, and the audit log records what moved. Another firm's id answers 404.
  */
 export async function mergeClient(tx: TenantTx, actor: Actor, id: string, intoClientId: string): Promise<ClientDetail> {
   if (id === intoClientId) throw badRequest([{ field: 'intoClientId', message: 'Choose another client to keep.' }]);
