@@ -1,6 +1,7 @@
 import type { BoardColumn, InquiryListQuery, InquiryStage, InquirySummary, ItemList, KeysetPage, TodayView } from '@layerbook/contracts';
 import { INQUIRY_STAGES, STAGE_LABELS, UNASSIGNED } from '@layerbook/contracts';
 import { weightedPipeline } from '@layerbook/domain';
+import Decimal from 'decimal.js';
 import { type SqlQuery, statementName, type TenantTx } from '@layerbook/db';
 import type { FirmClock } from './clock';
 import { decodeCursor, encodeCursor } from './cursor';
@@ -97,7 +98,9 @@ export async function getToday(tx: TenantTx, clock: FirmClock, userId?: string):
        from inquiries where tenant_id = $1 and stage not in ('won', 'lost') group by stage`,
     [tx.tenantId],
   );
-  const pipeline = weightedPipeline(open.map((o) => ({ id: o.stage, value: o.value, probability: likelihood[o.stage] / 100 })));
+  const pipeline = weightedPipeline(
+    open.map((o) => ({ id: o.stage, value: o.value, probability: new Decimal(String(likelihood[o.stage])).div(100) })),
+  );
   return {
     localDate: clock.today,
     overdue: due.filter((d) => d.nextFollowUp! < clock.today),

@@ -131,10 +131,12 @@ export const inquiryListQuery = z.strictObject({
 });
 export type InquiryListQuery = z.infer<typeof inquiryListQuery>;
 
-const likelihood = z.coerce
+// A JSON number, never coerced (null, "" and false are not 0 %), with at most two decimals as the column keeps them.
+const likelihood = z
   .number({ error: 'Enter a percentage.' })
   .min(0, { error: 'Use 0 to 100.' })
-  .max(100, { error: 'Use 0 to 100.' });
+  .max(100, { error: 'Use 0 to 100.' })
+  .refine((v) => /^\d+(\.\d{1,2})?$/.test(String(v)), { error: 'Use at most two decimals.' });
 
 export const stageLikelihoodUpdate = requestSchema<StageLikelihoodUpdate>()(
   z.strictObject({
