@@ -251,7 +251,8 @@ async function findNextRound(tx: TenantTx, board: BoardRow): Promise<BoardRow | 
 
 /** After the client asked for changes: a new draft, round N+1, carrying the finish forward to be adjusted. Photos stay with the board they show. */
 export async function startNextRound(tx: TenantTx, actor: Actor, boardId: string): Promise<SampleBoardView> {
-  const board = await findBoard(tx, boardId);
+  // Locked: a second start (a double click) waits here and then finds the round this one made (409, not the unique index's 500).
+  const board = await findBoard(tx, boardId, true);
   if (board.status !== 'changes_requested') throw conflict('Start the next round once the client has asked for changes.');
   if (await findNextRound(tx, board)) throw conflict(`Round ${board.round + 1} of this board has already been started.`);
   const row = (
