@@ -6,7 +6,7 @@ import { conflict, gone, notFound } from '../http/problem';
 import { recordAudit } from '../audit/record';
 import { loadStaffPrincipal } from './staff-principal';
 import { passwordHashOf } from './password-store';
-import { assertNotThrottled, countFailedSignIn } from './throttle';
+import { passedSignIn, takeSignInAttempt } from './throttle';
 import { assertAcceptablePassword, hashPassword, verifyPassword } from './passwords';
 import { hashToken } from './tokens';
 
@@ -51,13 +51,13 @@ export async function acceptInvitation(ctx: AppContext, input: InvitationAccept,
   let passwordHash: string | null = null;
   if (existing) {
     // The same throttle as sign-in: an invitation link must not become a way to guess a password.
-    await assertNotThrottled(ctx, found.email, address);
+    await takeSignInAttempt(ctx, found.email, address);
     if (!(await verifyPassword((await passwordHashOf(ctx.pool, existing.id)) ?? '', input.password))) {
-      await countFailedSignIn(ctx, found.email, address);
       throw conflict('This e-mail already has a Layerbook account.', [
         { field: 'password', message: 'This e-mail already has an account: enter its current password to join.' },
       ]);
     }
+    await passedSignIn(ctx, found.email, address);
   } else {
     const firm = await withTenant(ctx.pool, found.tenantId, async (tx) => (await tx.db.select({ name: firms.name }).from(firms))[0]);
     assertAcceptablePassword(input.password, { email: found.email, name: input.name, firmNames: firm ? [firm.name] : [] });

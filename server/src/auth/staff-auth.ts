@@ -12,7 +12,7 @@ import { loadStaffPrincipal } from './staff-principal';
 import { enqueueMail } from '../mail/outbox';
 import { signUpConfirmMail, signUpKnownAddressMail } from '../mail/sign-up-templates';
 import { hashToken, minutesFromNow, newToken } from './tokens';
-import { assertNotThrottled, clearFailedSignIns, countFailedSignIn } from './throttle';
+import { passedSignIn, takeSignInAttempt } from './throttle';
 import { assertAcceptablePassword, decoyPasswordHash, hashPassword, verifyPassword } from './passwords';
 
 const WRONG = () => new HttpError(401, 'Sign-in failed', 'E-mail or password is not right.');
@@ -157,10 +157,10 @@ async function createFirmWithOwner(
 /**
  * Checks a password. Every failure answers the same 401 (an unknown e-mail is verified against a
  * decoy hash, so it takes as long); repeated failures are throttled per e-mail and address, never
- * locked (throttle.ts). The hash is read through a security-definer function (password-store.ts).
+ * locked (throttle.ts: each attempt is counted before the check, a right one given back). The hash is read through a security-definer function (password-store.ts).
  */
 export async function signIn(ctx: AppContext, input: SignInRequest, address: string): Promise<StaffPrincipal> {
-  await assertNotThrottled(ctx, input.email, address);
+  await takeSignInAttempt(ctx, input.email, address);
   const user = await withGlobal(
     ctx.pool,
     async (tx) => (await tx.db.select({ id: users.id }).from(users).where(eq(users.email, input.email)))[0],
@@ -168,10 +168,9 @@ export async function signIn(ctx: AppContext, input: SignInRequest, address: str
   const passwordHash = user ? await passwordHashOf(ctx.pool, user.id) : null;
   if (!user || !passwordHash || !(await verifyPassword(passwordHash, input.password))) {
     if (!passwordHash) await verifyPassword(await decoyPasswordHash(), input.password);
-    await countFailedSignIn(ctx, input.email, address);
     throw WRONG();
   }
-  await clearFailedSignIns(ctx, input.email, address);
+  await passedSignIn(ctx, input.email, address);
   return firstActivePrincipal(ctx, user.id);
 }
 

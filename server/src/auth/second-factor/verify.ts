@@ -4,7 +4,7 @@ import type { AppContext } from '../../context';
 import type { StaffPrincipal } from '../../http/principal';
 import { badRequest } from '../../http/problem';
 import { recordAudit } from '../../audit/record';
-import { assertKeysNotThrottled, countFailures, secondFactorKeys } from '../throttle';
+import { giveBackAttempt, secondFactorKeys, takeAttempt } from '../throttle';
 import { normaliseRecoveryCode } from './recovery-codes';
 import { openSecret, recoveryCodeHash } from './secret-box';
 import { factorOf, spendRecoveryCode, takeStep } from './store';
@@ -38,7 +38,8 @@ export async function useCode(ctx: AppContext, tx: Tx, userId: string, typed: st
 
 /**
  * Runs a code check throttled like passwords (per person and address, and per person): 429 when
- * spent; a wrong code counts one failure and answers 400 on `code`.
+ * spent; each attempt is counted before the check (so codes sent at once are each counted), a right
+ * one is given back, a wrong one answers 400 on `code`.
  */
 export const wrongPassword = () =>
   badRequest([{ field: 'password', message: 'That password is not right.' }], 'That password is not right.');
@@ -51,12 +52,10 @@ export async function throttledCheck<T>(
   wrong: () => Error = wrongCode,
 ): Promise<T> {
   const keys = secondFactorKeys(userId, address);
-  await assertKeysNotThrottled(ctx, keys);
+  await takeAttempt(ctx, keys);
   const result = await check();
-  if (result === null) {
-    await countFailures(ctx, keys);
-    throw wrong();
-  }
+  if (result === null) throw wrong();
+  await giveBackAttempt(ctx, keys);
   return result;
 }
 
