@@ -95,15 +95,36 @@ export async function setFirmRequirement(tx: TenantTx, staff: StaffPrincipal, re
   });
 }
 
+/** Whether this person also belongs to another firm (read through the memberships' look-up-by-person policy, then set back). */
+async function belongsElsewhere(tx: TenantTx, userId: string): Promise<boolean> {
+  await tx.client.query(`select set_config('app.user_id', $1, true)`, [userId]);
+  try {
+    const { rowCount } = await tx.client.query(`select 1 from memberships where user_id = $1 and tenant_id <> $2 limit 1`, [
+      userId,
+      tx.tenantId,
+    ]);
+    return (rowCount ?? 0) > 0;
+  } finally {
+    await tx.client.query(`select set_config('app.user_id', '', true)`);
+  }
+}
+
 /**
  * The owner clears a member's second factor (a lost phone and lost recovery codes): the member signs
  * in with the password alone again, or sets one up at once when the firm requires it. Owners clear
- * their own on Sign-in and security instead.
+ * their own on Sign-in and security instead. A person's factor guards every firm they belong to, so
+ * one firm's owner cannot clear it for someone who also belongs to another firm (409): they turn it
+ * off themselves with a recovery code.
  */
 export async function resetMemberFactor(tx: TenantTx, owner: StaffPrincipal, membershipId: string): Promise<void> {
   const [member] = await tx.db.select({ userId: memberships.userId }).from(memberships).where(eq(memberships.id, membershipId));
   if (!member) throw notFound('team member');
   if (member.userId === owner.id) throw conflict('Turn your own second factor off on Sign-in and security.');
+  if (await belongsElsewhere(tx, member.userId)) {
+    throw conflict(
+      'This person also belongs to another firm, and their second factor guards that firm too. They can turn it off themselves with a recovery code.',
+    );
+  }
   if (await removeFactor(tx, member.userId)) {
     await recordAudit(tx, {
       actorUserId: owner.id,
