@@ -90,26 +90,35 @@ export function secondFactorRoutes(ctx: AppContext, signInLimiter: RequestHandle
     res.set('cache-control', 'no-store').json({ ...(await staffSession(ctx, req, res, half)), codes } satisfies SecondFactorEnrolled);
   });
 
-  router.post('/recovery-codes', async (req, res) => {
-    const codes = await withStaff(ctx, req, 'office', (tx, staff) => renewRecoveryCodes(ctx, tx, staff));
+  // Proof that the person at the keyboard is the one signed in: a current code (or a recovery code) or the password.
+  const prove = async (tx: TenantTx, staff: StaffPrincipal, req: Request): Promise<void> => {
+    const proof = parse(secondFactorTurnOff, req.body);
+    if (proof.code !== undefined) {
+      await throttledCheck(ctx, staff.id, address(req), () => useCode(ctx, tx, staff.id, proof.code ?? ''));
+    } else {
+      await throttledCheck(
+        ctx,
+        staff.id,
+        address(req),
+        async () => ((await verifyPassword((await passwordHashOf(tx.client, staff.id)) ?? '', proof.password ?? '')) ? true : null),
+        wrongPassword,
+      );
+    }
+  };
+
+  // New recovery codes (the old ones stop working) need the same proof as turning it off: a session alone is not enough.
+  router.post('/recovery-codes', signInLimiter, async (req, res) => {
+    const codes = await withStaff(ctx, req, 'office', async (tx, staff) => {
+      await prove(tx, staff, req);
+      return renewRecoveryCodes(ctx, tx, staff);
+    });
     res.set('cache-control', 'no-store').json(codes satisfies RecoveryCodes);
   });
 
   // Turning it off needs a current code (or a recovery code) or the password.
   router.post('/turn-off', signInLimiter, async (req, res) => {
     const status = await withStaff(ctx, req, 'office', async (tx, staff) => {
-      const proof = parse(secondFactorTurnOff, req.body);
-      if (proof.code !== undefined) {
-        await throttledCheck(ctx, staff.id, address(req), () => useCode(ctx, tx, staff.id, proof.code ?? ''));
-      } else {
-        await throttledCheck(
-          ctx,
-          staff.id,
-          address(req),
-          async () => ((await verifyPassword((await passwordHashOf(tx.client, staff.id)) ?? '', proof.password ?? '')) ? true : null),
-          wrongPassword,
-        );
-      }
+      await prove(tx, staff, req);
       await turnOff(tx, staff);
       return secondFactorStatus(tx, staff);
     });

@@ -128,8 +128,14 @@ describe('signing in with a second factor', () => {
     const second = await passwordStep(t, owner.email, owner.password);
     expect((await second.agent.post('/api/auth/second-factor').set('x-csrf-token', second.csrf()).send({ code: typed })).status).toBe(400);
 
-    // New codes replace the old ones.
-    const renewed = await first.agent.post('/api/auth/second-factor/recovery-codes').set('x-csrf-token', used.body.csrfToken).send({});
+    // New codes need proof, not the session alone (ASVS 5.0 7.5.1: re-authenticate before changing an authentication factor)...
+    const renew = (body: object) =>
+      first.agent.post('/api/auth/second-factor/recovery-codes').set('x-csrf-token', used.body.csrfToken).send(body);
+    expect((await renew({})).status).toBe(400);
+    const wrong = await renew({ password: 'not-the-password' });
+    expect([wrong.status, wrong.body.errors?.[0]?.field]).toEqual([400, 'password']);
+    // ...and replace the old ones.
+    const renewed = await renew({ password: owner.password });
     expect(renewed.body.codes).toHaveLength(10);
     expect((await second.agent.post('/api/auth/second-factor').set('x-csrf-token', second.csrf()).send({ code: codes[4] })).status).toBe(
       400,

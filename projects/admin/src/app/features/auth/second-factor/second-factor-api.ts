@@ -31,8 +31,9 @@ export class SecondFactorApi {
     return answer;
   }
 
-  renewRecoveryCodes(): Promise<RecoveryCodes> {
-    return firstValueFrom(this.http.post<RecoveryCodes>(`${SECOND_FACTOR_URL}/recovery-codes`, {}));
+  /** New codes, proved like turning off (the password, a code or a recovery code). */
+  renewRecoveryCodes(proof: SecondFactorTurnOff): Promise<RecoveryCodes> {
+    return firstValueFrom(this.http.post<RecoveryCodes>(`${SECOND_FACTOR_URL}/recovery-codes`, proof));
   }
 
   turnOff(body: SecondFactorTurnOff): Promise<SecondFactorStatus> {

@@ -45,8 +45,17 @@ describe('SecurityPage', { timeout: 30_000 }, () => {
     const { http, host, settle } = await render(ON);
     expect(host.textContent).toContain('Second factor is on');
     expect(host.textContent).toContain('Recovery codes left: 7.');
+    // the password first: without it nothing is sent
     button(host, 'Make new recovery codes')!.click();
-    http.expectOne({ method: 'POST', url: '/api/auth/second-factor/recovery-codes' }).flush({ codes: ['abcde-23456', 'fghjk-78923'] });
+    http.expectNone({ method: 'POST', url: '/api/auth/second-factor/recovery-codes' });
+    const password = host.querySelector<HTMLInputElement>('input[formcontrolname="password"]')!;
+    expect(password.getAttribute('autocomplete')).toBe('current-password');
+    password.value = 'my-own-password';
+    password.dispatchEvent(new Event('input'));
+    button(host, 'Make new recovery codes')!.click();
+    const renew = http.expectOne({ method: 'POST', url: '/api/auth/second-factor/recovery-codes' });
+    expect(renew.request.body).toEqual({ password: 'my-own-password' });
+    renew.flush({ codes: ['abcde-23456', 'fghjk-78923'] });
     // The status is read again behind the codes (a pending read keeps the fixture from settling).
     await new Promise((resolve) => setTimeout(resolve, 0));
     http.expectOne('/api/auth/second-factor').flush({ ...ON, recoveryCodesLeft: 10 });
@@ -63,7 +72,7 @@ describe('SecurityPage', { timeout: 30_000 }, () => {
     expect(input.getAttribute('autocomplete')).toBe('current-password');
     input.value = 'my-own-password';
     input.dispatchEvent(new Event('input'));
-    host.querySelector('form')!.dispatchEvent(new Event('submit'));
+    host.querySelectorAll('form')[1]!.dispatchEvent(new Event('submit'));
     fixture.detectChanges();
     const off = http.expectOne({ method: 'POST', url: '/api/auth/second-factor/turn-off' });
     expect(off.request.body).toEqual({ password: 'my-own-password' });

@@ -9,7 +9,6 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { TranslatePipe } from '@ngx-translate/core';
 import { PASSWORD_MAX_LENGTH, SECOND_FACTOR_CODE_MAX_LENGTH, type SecondFactorStatus } from '@layerbook/contracts/types';
 import { FieldErrorPipe } from '../../../../../../shared/forms/field-error-pipe';
-import { problemMessage } from '../../../core/errors/problem';
 import { loadMessage } from '../../../shared/forms/load-message';
 import { Submission } from '../../../shared/forms/submission';
 import { FormAlert } from '../../../shared/ui/form-alert';
@@ -47,7 +46,11 @@ export class SecurityPage {
   protected readonly settingUp = signal(false);
   /** Recovery codes to show once (after setting up or renewing). */
   protected readonly codes = signal<readonly string[] | null>(null);
-  protected readonly renewMessage = signal<string | null>(null);
+  /** New codes need the password: a session alone is not enough (the old codes stop working). */
+  protected readonly renewForm = inject(NonNullableFormBuilder).group({
+    password: ['', [Validators.required, Validators.maxLength(PASSWORD_MAX_LENGTH)]],
+  });
+  protected readonly renewSubmission = new Submission();
   protected readonly usesPassword = signal(false);
   protected readonly offForm = inject(NonNullableFormBuilder).group({
     proof: ['', [Validators.required, Validators.maxLength(PASSWORD_MAX_LENGTH)]],
@@ -66,12 +69,12 @@ export class SecurityPage {
   }
 
   protected async renew(): Promise<void> {
-    this.renewMessage.set(null);
-    try {
-      this.codes.set((await this.api.renewRecoveryCodes()).codes);
+    const { password } = this.renewForm.getRawValue();
+    const answer = await this.renewSubmission.send(this.renewForm, () => this.api.renewRecoveryCodes({ password }));
+    if (answer) {
+      this.renewForm.reset();
+      this.codes.set(answer.codes);
       this.status.reload();
-    } catch (error) {
-      this.renewMessage.set(problemMessage(error));
     }
   }
 
