@@ -1,6 +1,6 @@
 import { INVITATION_DAYS } from '@layerbook/contracts';
 import type { InvitationCreate, ItemList, Language, MemberStatus, StaffRole, TeamInvitation, TeamMember } from '@layerbook/contracts';
-import { and, desc, eq, firms, invitations, isNull, memberships, TenantTx, users } from '@layerbook/db';
+import { and, desc, eq, firms, invitations, isNull, memberships, sql, TenantTx, users } from '@layerbook/db';
 import type { AppContext } from '../context';
 import { recordAudit } from '../audit/record';
 import { minutesFromNow, newToken } from '../auth/tokens';
@@ -133,13 +133,19 @@ export async function revokeInvitation(ctx: AppContext, tx: TenantTx, actor: Sta
   await recordAudit(tx, { actorUserId: actor.id, actorKind: 'staff', action: 'invitation.revoked', entity: 'invitation', entityId: id });
 }
 
-/** Changes a member's role or status, never leaving the firm without an active owner. */
+/**
+ * Changes a member's role or status, never leaving the firm without an active owner: the firm's
+ * memberships are locked first, so two owners removing each other at once cannot both pass the
+ * check. Someone deactivated, or no longer an owner, loses the invitations they sent that are still
+ * open (an owner could otherwise invite another address of theirs and come back through it).
+ */
 export async function changeMember(
   tx: TenantTx,
   actor: StaffPrincipal,
   membershipId: string,
   change: { role?: StaffRole; status?: MemberStatus },
 ): Promise<TeamMember> {
+  await tx.client.query(`select id from memberships where tenant_id = $1 order by id for update`, [tx.tenantId]);
   const all = await members(tx, actor.id);
   const target = all.find((m) => m.id === membershipId);
   if (!target) throw notFound('team member');
@@ -154,6 +160,20 @@ export async function changeMember(
     .update(memberships)
     .set(change)
     .where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.id, membershipId)));
+  const losesInviting = change.status === 'deactivated' || (change.role !== undefined && change.role !== 'owner');
+  if (losesInviting) {
+    await tx.db
+      .update(invitations)
+      .set({ revokedAt: sql`now()` })
+      .where(
+        and(
+          eq(invitations.tenantId, tx.tenantId),
+          eq(invitations.invitedBy, target.userId),
+          isNull(invitations.acceptedAt),
+          isNull(invitations.revokedAt),
+        ),
+      );
+  }
   await recordAudit(tx, {
     actorUserId: actor.id,
     actorKind: 'staff',
@@ -188,5 +208,5 @@ export async function setMemberLanguage(
     entityId: membershipId,
     data: { to: language },
   });
-  return target;
+  return { ...target, language };
 }
