@@ -165,6 +165,18 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
 }
 
 /**
+ * A version locked for a change, its estimate's row locked first: the order every writer of an
+ * estimate's versions takes (the client's acceptance locks the estimate with the version it decides,
+ * then marks the newer draft superseded). Locking the version first deadlocked a send against an
+ * acceptance of the older version.
+ */
+export async function lockVersion(tx: TenantTx, id: string): Promise<ProposalVersionView> {
+  const { estimateId } = await getVersion(tx, id);
+  await tx.client.query(`select 1 from estimates where tenant_id = $1 and id = $2 for update`, [tx.tenantId, estimateId]);
+  return getVersion(tx, id, true);
+}
+
+/**
  * Changes a draft: expiry, terms, exclusions, notes. The snapshot is rebuilt from the estimate's
  * current numbers. A sent (or decided) version is frozen: 409, make a new version instead.
  */
@@ -175,7 +187,7 @@ export async function updateDraft(
   change: ProposalUpdate,
   now: Date,
 ): Promise<ProposalVersionView> {
-  const current = await getVersion(tx, id, true);
+  const current = await lockVersion(tx, id);
   await assertEstimateOpen(tx, current.estimateId);
   if (current.status !== 'draft')
     throw conflict(`Version ${current.version} is ${current.status.replace('_', ' ')} and cannot change. Make a new version instead.`);

@@ -9,7 +9,7 @@ import { enqueueMail } from '../mail/outbox';
 import { proposalSentMail } from '../mail/proposal-templates';
 import { ensurePortalAccount } from './client-portal-account';
 import { assertEstimateOpen } from './estimates';
-import { getVersion } from './proposal-versions';
+import { getVersion, lockVersion } from './proposal-versions';
 import { localeOf } from '../i18n/catalog';
 import { clientReader } from '../i18n/reader';
 
@@ -22,7 +22,7 @@ export const PROPOSAL_LINK_DAYS = 3;
  * client gets a portal account if needed and the e-mail with a one-time sign-in link goes to the outbox.
  */
 export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: string, id: string): Promise<ProposalVersionView> {
-  const version = await getVersion(tx, id, true);
+  const version = await lockVersion(tx, id);
   await assertEstimateOpen(tx, version.estimateId);
   if (version.status !== 'draft')
     throw conflict(
