@@ -36,6 +36,11 @@ export async function previewInvitation(ctx: AppContext, token: string): Promise
   return { firmName: firm?.name ?? '', email: inv.email, role: inv.role };
 }
 
+const accountExists = () =>
+  conflict('This e-mail already has a Layerbook account.', [
+    { field: 'password', message: 'This e-mail already has an account: enter its current password to join.' },
+  ]);
+
 /**
  * Joins the firm: a new person sets their password here; someone who already has a Layerbook
  * account proves it is theirs with their existing password.
@@ -53,9 +58,7 @@ export async function acceptInvitation(ctx: AppContext, input: InvitationAccept,
     // The same throttle as sign-in: an invitation link must not become a way to guess a password.
     await takeSignInAttempt(ctx, found.email, address);
     if (!(await verifyPassword((await passwordHashOf(ctx.pool, existing.id)) ?? '', input.password))) {
-      throw conflict('This e-mail already has a Layerbook account.', [
-        { field: 'password', message: 'This e-mail already has an account: enter its current password to join.' },
-      ]);
+      throw accountExists();
     }
     await passedSignIn(ctx, found.email, address);
   } else {
@@ -69,10 +72,15 @@ export async function acceptInvitation(ctx: AppContext, input: InvitationAccept,
     assertUsable(inv, ctx.now());
     let id = existing?.id;
     if (!id) {
+      // Another firm's invitation to the same address may make the account at this very moment: on
+      // conflict nothing is written and the person is asked for that account's password (409), as if
+      // it had been there before.
       const [created] = await tx.db
         .insert(users)
         .values({ email: inv.email, name: input.name, passwordHash: passwordHash! })
+        .onConflictDoNothing({ target: users.email })
         .returning({ id: users.id });
+      if (!created) throw accountExists();
       id = created.id;
     }
     const already = await tx.db
