@@ -44,6 +44,21 @@ describe('firm currency', () => {
     return settings;
   };
 
+  it('is one with at most two decimals: KWD (three, ISO 4217) is refused naming the field; JPY (none) is taken', async () => {
+    const fresh = await signUpFirm(t.app);
+    const settings = await settingsOf(fresh.agent);
+    const kwd = await fresh.agent
+      .patch('/api/firm')
+      .set('x-csrf-token', fresh.csrf())
+      .send({ ...settings, currency: 'KWD' });
+    expect([kwd.status, kwd.body.errors?.map((e: { field: string }) => e.field)]).toEqual([400, ['currency']]);
+    const jpy = await fresh.agent
+      .patch('/api/firm')
+      .set('x-csrf-token', fresh.csrf())
+      .send({ ...settings, currency: 'JPY' });
+    expect([jpy.status, jpy.body.currency]).toEqual([200, 'JPY']);
+  });
+
   it('changes while the firm sets up, and stays once an invoice is issued (409 naming it, nothing changed)', async () => {
     const fresh = await signUpFirm(t.app);
     const changed = await fresh.agent

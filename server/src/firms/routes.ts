@@ -31,7 +31,10 @@ export function firmRoutes(ctx: AppContext): Router {
   router.patch('/', async (req, res) => {
     const firm = await withStaff(ctx, req, 'owner', (tx, staff) => {
       const input = parseChanges(firmSettingsUpdate, req.body);
-      if (!isKnownCurrency(input.currency)) throw badRequest([{ field: 'currency', message: 'Choose a currency from the list.' }]);
+      if (!isKnownCurrency(input.currency))
+        throw badRequest([
+          { field: 'currency', message: 'Choose a currency from the list (at most two decimals: KWD and the like are not kept yet).' },
+        ]);
       return updateFirm(tx, staffActor(staff), input, ctx.now());
     });
     res.json(firm satisfies FirmSettings);
