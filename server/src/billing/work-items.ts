@@ -110,7 +110,7 @@ export function defaultValueLines(
 
 async function loadSource(tx: TenantTx, jobId: string): Promise<JobSource | undefined> {
   const { rows } = await tx.client.query<JobSource>(
-    `select j.contract_sum::text as contract_sum, j.currency, j.accepted_variant_id as variant_id, e.result, pv.snapshot->'scope' as scope,
+    `select j.contract_sum::text as contract_sum, j.currency, j.accepted_variant_id as variant_id, coalesce(pv.result, e.result) as result, pv.snapshot->'scope' as scope,
             (select count(*)::int from job_work_items w where w.tenant_id = j.tenant_id and w.job_id = j.id) as work_items,
             (select count(*)::int from job_value_lines v where v.tenant_id = j.tenant_id and v.job_id = j.id) as value_lines
        from jobs j

@@ -8,18 +8,20 @@ export const JOBS_LISTED = 50;
  * per job (cash_job_totals, by triggers on invoices and change orders).
  */
 export const JOB_MONEY = `with listed as materialized (select * from jobs where tenant_id = $1 order by created_at desc, id desc limit ${JOBS_LISTED}),
-  -- each estimate's option read once, however many jobs share it
+  -- the signed version's option, read once however many jobs share it (the estimate's result for versions made before versions kept theirs)
   prices as materialized (
-    select p.estimate_id, p.variant_id, x.v -> 'result' -> 'price' as price
-      from (select distinct estimate_id, accepted_variant_id as variant_id from listed) p
-      join estimates e on e.tenant_id = $1 and e.id = p.estimate_id
-     cross join lateral (select v from jsonb_array_elements(e.result -> 'variants') as x(v) where x.v ->> 'id' = p.variant_id limit 1) x)
+    select p.version_id, p.variant_id, x.v -> 'result' -> 'price' as price
+      from (select distinct proposal_version_id as version_id, accepted_variant_id as variant_id from listed) p
+      join proposal_versions pv on pv.tenant_id = $1 and pv.id = p.version_id
+      join estimates e on e.tenant_id = $1 and e.id = pv.estimate_id
+     cross join lateral (select v from jsonb_array_elements(coalesce(pv.result, e.result) -> 'variants') as x(v)
+                          where x.v ->> 'id' = p.variant_id limit 1) x)
   select j.id, j.title, j.client_id, c.name as client_name, j.status, j.original_contract_sum::text as original,
          coalesce(t.change_orders, 0)::text as change_orders, coalesce(t.issued, 0)::text as issued,
          coalesce(t.credited, 0)::text as credited, coalesce(t.paid, 0)::text as paid, pr.price
     from listed j join clients c on c.tenant_id = j.tenant_id and c.id = j.client_id
     left join cash_job_totals t on t.tenant_id = $1 and t.job_id = j.id
-    left join prices pr on pr.estimate_id = j.estimate_id and pr.variant_id = j.accepted_variant_id
+    left join prices pr on pr.version_id = j.proposal_version_id and pr.variant_id = j.accepted_variant_id
    order by j.created_at desc, j.id desc`;
 
 /** Σ and count of the contract sums of the jobs not cancelled (for the average), and the decided proposals. */

@@ -147,8 +147,10 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
     [tx.tenantId, input.estimateId],
   );
   const { rows } = await tx.client.query<{ id: string; version: number }>(
-    `insert into proposal_versions (tenant_id, estimate_id, version, status, snapshot, snapshot_hash, expires_on, created_by)
-     select $1, $2, coalesce(max(version), 0) + 1, 'draft', $3, $4, $5, $6 from proposal_versions where tenant_id = $1 and estimate_id = $2
+    `insert into proposal_versions (tenant_id, estimate_id, version, status, snapshot, snapshot_hash, expires_on, created_by, result)
+     select $1, $2, coalesce(max(version), 0) + 1, 'draft', $3, $4, $5, $6,
+            (select e.result from estimates e where e.tenant_id = $1 and e.id = $2)
+       from proposal_versions where tenant_id = $1 and estimate_id = $2
      returning id, version`,
     [tx.tenantId, input.estimateId, JSON.stringify(snapshot), hash, input.expiresOn, actorUserId],
   );
@@ -204,7 +206,9 @@ export async function updateDraft(
     notes: change.notes ?? prev.notes,
   });
   await tx.client.query(
-    `update proposal_versions set snapshot = $3, snapshot_hash = $4, expires_on = $5 where tenant_id = $1 and id = $2`,
+    `update proposal_versions v set snapshot = $3, snapshot_hash = $4, expires_on = $5,
+            result = (select e.result from estimates e where e.tenant_id = v.tenant_id and e.id = v.estimate_id)
+      where v.tenant_id = $1 and v.id = $2`,
     [tx.tenantId, id, JSON.stringify(snapshot), hash, expiresOn],
   );
   await recordAudit(tx, {

@@ -61,6 +61,12 @@ export const proposalVersions = pgTable(
     status: text('status', { enum: PROPOSAL_STATUSES }).notNull().default('draft'),
     snapshot: jsonb('snapshot').notNull(),
     snapshotHash: text('snapshot_hash').notNull(),
+    /**
+     * The estimate's engine result the snapshot was made from (every option's quantities, layers,
+     * schedule, cautions, price): the accepted job's work, sheet and money come from the version the
+     * client signed, not from the estimate as the office may have saved it since.
+     */
+    result: jsonb('result'),
     expiresOn: date('expires_on').notNull(),
     sentAt: timestamp('sent_at', { withTimezone: true }),
     decidedAt: timestamp('decided_at', { withTimezone: true }),

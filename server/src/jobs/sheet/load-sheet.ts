@@ -56,7 +56,7 @@ export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<Shee
             concat_ws(', ', nullif(s.address_line1, ''), nullif(s.city, '')) as site_address,
             f.units, f.time_zone, f.country,
             pv.snapshot->>'lengthUnit' as length_unit, pv.snapshot->'scope' as scope,
-            (select v->'result' from jsonb_array_elements(coalesce(e.result->'variants', '[]'::jsonb)) v
+            (select v->'result' from jsonb_array_elements(coalesce(coalesce(pv.result, e.result)->'variants', '[]'::jsonb)) v
               where v->>'id' = j.accepted_variant_id limit 1) as result
        from jobs j
        join sites s on s.tenant_id = j.tenant_id and s.id = j.site_id
