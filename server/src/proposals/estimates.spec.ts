@@ -85,6 +85,27 @@ const inputsFor = (surfaceId: string, systemId: string): EstimateInputs => ({
 });
 
 describe('estimates', () => {
+  it("take an inquiry of this client or of no one yet, and refuse another client's (400 on inquiryId): accepting would mark it won", async () => {
+    const f = await firmWithMeasuredSite('Inquiry Link Plaster');
+    const other = await f.agent.post('/api/clients').set('x-csrf-token', f.csrf()).send({ kind: 'homeowner', name: 'Someone Else' });
+    const inquiry = async (clientId: string | null) =>
+      withTenant(t.ctx.pool, f.firmId, async (tx) => {
+        const { rows } = await tx.client.query<{ id: string }>(
+          `insert into inquiries (tenant_id, contact_name, source, stage, client_id) values ($1, 'Asker', 'phone', 'new', $2) returning id`,
+          [tx.tenantId, clientId],
+        );
+        return rows[0].id;
+      });
+    const create = (inquiryId: string) =>
+      f.agent
+        .post('/api/estimates')
+        .set('x-csrf-token', f.csrf())
+        .send({ siteId: f.siteId, title: 'Dining room', startDate: '2026-12-03', inquiryId });
+    const refused = await create(await inquiry(other.body.id as string));
+    expect([refused.status, refused.body.errors?.[0]?.field]).toEqual([400, 'inquiryId']);
+    expect((await create(await inquiry(null))).status).toBe(201);
+  });
+
   it('recomputes on the server with the same engine and input as the browser, and stores the numbers', async () => {
     const f = await firmWithMeasuredSite();
     const made = await f.agent

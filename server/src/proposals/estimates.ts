@@ -39,8 +39,14 @@ const auditedBy = (actor: Actor) => ({ actorUserId: actor.userId, actorKind: act
 export async function createEstimate(tx: TenantTx, actor: Actor, input: EstimateCreate): Promise<string> {
   const context = await loadEstimateContext(tx, input.siteId);
   if (input.inquiryId) {
-    const { rows } = await tx.client.query(`select 1 from inquiries where tenant_id = $1 and id = $2`, [tx.tenantId, input.inquiryId]);
+    const { rows } = await tx.client.query<{ client_id: string | null }>(
+      `select client_id from inquiries where tenant_id = $1 and id = $2`,
+      [tx.tenantId, input.inquiryId],
+    );
     if (!rows.length) throw badRequest([{ field: 'inquiryId', message: 'Choose an inquiry of this firm.' }]);
+    // Accepting the proposal marks its inquiry won: it must be this client's (or not filed under anyone yet).
+    if (rows[0].client_id !== null && rows[0].client_id !== context.clientId)
+      throw badRequest([{ field: 'inquiryId', message: "That inquiry is another client's. Choose one of this client's." }]);
   }
   const [row] = await tx.db
     .insert(estimates)
