@@ -28,7 +28,10 @@ export const AUDIT_KIND_RULES: Readonly<Record<AuditKind, AuditKindRule>> = {
     prefixes: ['billing.'],
   },
   voids: { exact: ['invoice.voided'], prefixes: ['credit_note.'] },
-  payments: { exact: ['invoice.payment_recorded', 'invoice.payment_needs_attention', 'invoice.attention_cleared'], prefixes: ['invoice.refund_', 'payment.', 'refund.'] },
+  payments: {
+    exact: ['invoice.payment_recorded', 'invoice.payment_needs_attention', 'invoice.attention_cleared'],
+    prefixes: ['invoice.refund_', 'payment.', 'refund.'],
+  },
   jobs: { exact: [], prefixes: ['job.', 'jobs.', 'progress.', 'takeoff.'] },
   clients: { exact: [], prefixes: ['client.', 'inquiry.', 'inquiry_stages.'] },
   team: { exact: [], prefixes: ['member.', 'invitation.', 'firm.', 'demo.'] },

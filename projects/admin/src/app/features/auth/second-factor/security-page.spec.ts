@@ -72,7 +72,7 @@ describe('SecurityPage', { timeout: 30_000 }, () => {
     expect(input.getAttribute('autocomplete')).toBe('current-password');
     input.value = 'my-own-password';
     input.dispatchEvent(new Event('input'));
-    host.querySelectorAll('form')[1]!.dispatchEvent(new Event('submit'));
+    host.querySelectorAll('form')[1].dispatchEvent(new Event('submit'));
     fixture.detectChanges();
     const off = http.expectOne({ method: 'POST', url: '/api/auth/second-factor/turn-off' });
     expect(off.request.body).toEqual({ password: 'my-own-password' });
