@@ -66,6 +66,19 @@ describe('public inquiry form', () => {
     expect(t.inbox.messages.filter((m) => JSON.stringify(m.to).includes(body.email))).toHaveLength(1);
   });
 
+  it('acknowledges one address once a day however often the form names it; every inquiry is still filed and the office told', async () => {
+    const a = await firmWithSlug('Once A Day Plaster');
+    const email = `repeat.${Date.now().toString(36)}@example.test`;
+    for (let i = 0; i < 3; i++) expect((await submitPublic(a.slug, { email, name: `Asker ${i}` })).res.status).toBe(201);
+    const { rows } = await t.queue.boss.getDb().executeSql(`select id from mail_outbox where to_address = $1`, [email]);
+    expect(rows).toHaveLength(1);
+    expect((await a.agent.get('/api/inquiries')).body.items).toHaveLength(3);
+    const { rows: notices } = await t.queue.boss
+      .getDb()
+      .executeSql(`select id from mail_outbox where to_address = $1 and subject like 'New inquiry%'`, [a.email]);
+    expect(notices).toHaveLength(3);
+  });
+
   it('silently drops a bot that fills the honeypot or sends too fast, filing nothing', async () => {
     const a = await firmWithSlug('Honeypot Plaster');
     const honeypot = await submitPublic(a.slug, { website: 'http://spam.example' });

@@ -1,4 +1,4 @@
-import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
+import { createHash, createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
 import type { InquirySource, PublicInquiryRequest, PublicSource } from '@layerbook/contracts';
 import { and, eq, firms, inArray, memberships, users, withLookup, withTenant } from '@layerbook/db';
 import type { AppContext } from '../context';
@@ -62,7 +62,8 @@ export async function publicFirm(ctx: AppContext, slug: string): Promise<{ id: s
 
 /**
  * Files a prospect's inquiry with that firm only, and queues the acknowledgement to the prospect
- * and the notice to the owner and office — all in one transaction, through the outbox.
+ * (once a day per address) and the notice to the owner and office — all in one transaction, through
+ * the outbox.
  * Returns 'ignored' for a bot (honeypot filled or sent too fast): it is told nothing different.
  */
 export async function submitPublicInquiry(ctx: AppContext, slug: string, input: PublicInquiryRequest): Promise<'filed' | 'ignored'> {
@@ -95,8 +96,11 @@ export async function submitPublicInquiry(ctx: AppContext, slug: string, input: 
       nextFollowUp: null,
       consentToContact: input.consent,
     });
+    // One acknowledgement per address per firm per day (UTC): the form files every inquiry and tells the
+    // office each time, but it is no way to send a firm's mail to a stranger over and over.
+    const addressKey = createHash('sha256').update(input.email.trim().toLowerCase()).digest('hex').slice(0, 32);
     await enqueueMail(tx, ctx.queue, {
-      purposeKey: `inquiry-ack:${id}`,
+      purposeKey: `inquiry-ack:${tx.tenantId}:${addressKey}:${now.toISOString().slice(0, 10)}`,
       tenantId: tx.tenantId,
       to: input.email,
       sender: 'firm',
