@@ -79,6 +79,13 @@ describe('public inquiry form', () => {
     expect(notices).toHaveLength(3);
   });
 
+  it('takes "Not sure" as a JSON boolean only: the string "false" is refused naming it, not read as yes', async () => {
+    const a = await firmWithSlug('Not Sure Plaster');
+    const { res } = await submitPublic(a.slug, { yearBuilt: '', yearBuiltUnknown: 'false' });
+    expect([res.status, res.body.errors?.map((e: { field: string }) => e.field)]).toEqual([400, ['yearBuiltUnknown']]);
+    expect((await a.agent.get('/api/inquiries')).body.items).toHaveLength(0);
+  });
+
   it('silently drops a bot that fills the honeypot or sends too fast, filing nothing', async () => {
     const a = await firmWithSlug('Honeypot Plaster');
     const honeypot = await submitPublic(a.slug, { website: 'http://spam.example' });

@@ -37,7 +37,8 @@ export const publicInquiryRequest = requestSchema<PublicInquiryRequest>()(
       phone,
       siteAddress: requiredText(L.siteAddress, 'Enter the address of the place to be finished.'),
       yearBuilt: z.union([yearBuilt, z.literal('')]).optional(),
-      yearBuiltUnknown: z.coerce.boolean().optional(),
+      // a JSON boolean (the page's plain form post turns its checkbox into one: public-routes.ts); "false" is no yes
+      yearBuiltUnknown: z.boolean({ error: 'Tick "Not sure" or leave it.' }).optional(),
       rooms: requiredText(L.rooms, 'Tell us which rooms and surfaces.'),
       finishIdea: text(L.finishIdea),
       timeline: text(L.timeline),
