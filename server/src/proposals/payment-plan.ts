@@ -1,5 +1,12 @@
 import type { ProposalTerms, SnapshotPayment } from '@layerbook/contracts';
-import { buildPaymentSchedule, checkDeposit, paymentLabel, type DepositCapRule, type PaymentLineInput } from '@layerbook/domain';
+import {
+  buildPaymentSchedule,
+  checkDeposit,
+  DomainInputError,
+  paymentLabel,
+  type DepositCapRule,
+  type PaymentLineInput,
+} from '@layerbook/domain';
 import Decimal from 'decimal.js';
 
 export interface ScheduleFacts {
@@ -71,6 +78,14 @@ export function optionPayments(
       lines[at] = { ...lines[at], basis: { kind: 'amount', amount: check.cap.toFixed(digits) }, percent: null };
       built = buildPaymentSchedule(total, lines, currency, 'terms');
     }
+  }
+  // A final payment of nothing could never be billed (no invoice is drafted for 0.00) and leaves no
+  // money for after the walkthrough: the deposit and the progress payment must leave some.
+  if (built.find((l) => l.role === 'final')?.amount.isZero()) {
+    throw new DomainInputError(
+      'terms.progressPercent',
+      'Leave something for the final payment: the deposit and the progress payment together must be under 100 %.',
+    );
   }
   const payments: SnapshotPayment[] = built.map((l, i) => ({
     id: l.id,

@@ -153,6 +153,9 @@ describe('proposal versions', () => {
     const over = await propose(f, { terms: { depositPercent: 70, progressPercent: 40 } });
     expect(over.status).toBe(400);
     expect(over.body.errors[0].field).toBe('terms.progressPercent');
+    // exactly 100 % before completion would leave a final payment of 0.00, which nothing could bill
+    const nothingLeft = await propose(f, { terms: { depositPercent: 60, progressPercent: 40 } });
+    expect([nothingLeft.status, nothingLeft.body.errors[0].field]).toEqual([400, 'terms.progressPercent']);
     const unknown = await propose(f, { price: '1.00' });
     expect(unknown.body.errors[0].field).toBe('price');
   });
