@@ -7,6 +7,7 @@ import { parse } from '../http/validate';
 import { endSession, logIn, logOut } from './passport-setup';
 import { setClientLanguage } from './language';
 import { redeemPortalLink, requestPortalLink } from './portal-auth';
+import { afterAnswer } from '../http/after-answer';
 
 async function portalSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<PortalSession> {
   const client = await signedInClient(ctx, req);
@@ -38,7 +39,7 @@ export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): 
 
   router.post('/auth/link', linkLimiter, async (req, res) => {
     const { email, next } = parse(portalLinkRequest, req.body);
-    await requestPortalLink(ctx, email, next);
+    afterAnswer(res, ctx.logger, 'portal link request', () => requestPortalLink(ctx, email, next));
     res.status(202).json({ detail: 'If that address belongs to a client, a sign-in link is on its way.' } satisfies Notice);
   });
 

@@ -25,6 +25,7 @@ import { endSession, logOut, type AppPassport } from './passport-setup';
 import { secondFactorRoutes } from './second-factor/routes';
 import { answerPasswordStep, staffSession } from './session-answer';
 import { completePasswordReset, requestPasswordReset } from './password-reset';
+import { afterAnswer } from '../http/after-answer';
 import { confirmSignUp, requestSignUp } from './staff-auth';
 
 export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: import('express').RequestHandler): Router {
@@ -73,7 +74,8 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
   });
 
   router.post('/password-reset', signInLimiter, async (req, res) => {
-    await requestPasswordReset(ctx, parse(passwordResetRequest, req.body).email);
+    const { email } = parse(passwordResetRequest, req.body);
+    afterAnswer(res, ctx.logger, 'password reset request', () => requestPasswordReset(ctx, email));
     res.status(202).json({ detail: 'If that e-mail has an account, a reset link is on its way.' } satisfies Notice);
   });
 
