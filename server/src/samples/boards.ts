@@ -183,7 +183,8 @@ export async function updateBoard(
   input: SampleBoardUpdate,
   now: Date,
 ): Promise<SampleBoardView> {
-  const board = await findBoard(tx, boardId);
+  // Locked, as adding a photo is: a client's approval cannot slip in between this check and the write.
+  const board = await findBoard(tx, boardId, true);
   if (board.status === 'approved') throw conflict('The client has approved this board; it is now the control sample and stays as it was.');
   const changes: Partial<typeof sampleBoards.$inferInsert> = { updatedAt: now };
   if (input.label !== undefined) changes.label = input.label;
