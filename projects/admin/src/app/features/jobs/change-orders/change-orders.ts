@@ -106,6 +106,7 @@ import { TranslatePipe } from '@ngx-translate/core';
   `,
   styleUrl: '../billing/billing-section.scss',
   styles: `
+    @use 'tables';
     .row-actions {
       display: flex;
       flex-wrap: wrap;
@@ -114,6 +115,43 @@ import { TranslatePipe } from '@ngx-translate/core';
     }
     .notice {
       margin: 0 0 0.75rem;
+    }
+    /*
+     * A phone: each change order a card — number and title, then amount and status on one line, then
+     * its buttons — with no sideways scroll. The header row is still read aloud.
+     */
+    @media (max-width: 599.98px) {
+      @include tables.rows-as-cards('table');
+      table {
+        min-width: 0;
+      }
+      tbody tr {
+        display: grid;
+        grid-template-columns: auto 1fr;
+        align-items: baseline;
+        gap: 0.2rem 0.6rem;
+        padding: 0.75rem 1rem;
+        border-bottom: 1px solid var(--mat-sys-outline-variant);
+      }
+      tbody tr:last-child {
+        border-bottom: 0;
+      }
+      tbody th {
+        font-weight: 600;
+        overflow-wrap: anywhere;
+      }
+      tbody td.num {
+        text-align: left;
+      }
+      tbody td[colspan] {
+        grid-column: 1 / -1;
+      }
+      .row-actions {
+        justify-content: flex-start;
+      }
+      tbody td:last-child {
+        grid-column: 1 / -1;
+      }
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
