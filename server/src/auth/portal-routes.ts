@@ -37,7 +37,7 @@ export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): 
     res.set('cache-control', 'no-store').json(await portalSession(ctx, req, res));
   });
 
-  router.post('/auth/link', linkLimiter, async (req, res) => {
+  router.post('/auth/link', linkLimiter, (req, res) => {
     const { email, next } = parse(portalLinkRequest, req.body);
     afterAnswer(res, ctx.logger, 'portal link request', () => requestPortalLink(ctx, email, next));
     res.status(202).json({ detail: 'If that address belongs to a client, a sign-in link is on its way.' } satisfies Notice);

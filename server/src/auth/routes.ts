@@ -73,7 +73,7 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
     res.json(await staffSession(ctx, req, res, true));
   });
 
-  router.post('/password-reset', signInLimiter, async (req, res) => {
+  router.post('/password-reset', signInLimiter, (req, res) => {
     const { email } = parse(passwordResetRequest, req.body);
     afterAnswer(res, ctx.logger, 'password reset request', () => requestPasswordReset(ctx, email));
     res.status(202).json({ detail: 'If that e-mail has an account, a reset link is on its way.' } satisfies Notice);
