@@ -20,6 +20,7 @@ import { recordOfflinePayment } from '../billing/offline-payments';
 import { recordProgress } from '../billing/progress';
 import { startBilling } from '../billing/schedule';
 import { voidInvoice } from '../billing/void';
+import { sendDueReminders } from '../billing/reminders/send-reminders';
 import { evaluateJobBilling } from '../billing/triggers/evaluate';
 import { loadWorkItems } from '../billing/work-items';
 import { loadConfig } from '../config';
@@ -106,11 +107,20 @@ interface DemoJobPlan {
  * lists, newest first, read in the story's order. The audit log and the insert-only tables keep
  * the moment of seeding.
  */
-async function stamp(tx: TenantTx, at: Date): Promise<void> {
+/**
+ * Dates what this transaction made at the seed's clock. The audit log is append-only for the web
+ * role, so its rows are dated afterwards by the owner (`dateDemoHistory`): each transaction's start
+ * (PostgreSQL's now(), to the microsecond) is kept with the moment it stands for.
+ */
+async function stamp(tx: TenantTx, at: Date, history: DemoHistory): Promise<void> {
   for (const table of ['jobs', 'invoices', 'change_orders'] as const) {
     await tx.client.query(`update ${table} set created_at = $2 where tenant_id = $1 and created_at = now()`, [tx.tenantId, at]);
   }
+  history.push({ txStart: (await tx.client.query<{ t: string }>(`select now()::text as t`)).rows[0].t, at });
 }
+
+/** Each seeding transaction's start and the moment of the demo's story it stands for. */
+export type DemoHistory = Array<{ readonly txStart: string; readonly at: Date }>;
 
 const VOID_REASON = 'Issued before the colour was settled; billed again with the agreed colour.';
 
@@ -238,7 +248,8 @@ async function firmDay(tx: TenantTx, at: Date): Promise<string> {
  * moment of the seed's clock, and the billing checks a step asks for run after it in theirs, as the
  * worker would; so the job's history and each invoice's trail read in the order things happened.
  */
-export async function seedDemoBilling(pool: Pool, firmId: string, people: DemoBillingPeople, now: Date): Promise<void> {
+export async function seedDemoBilling(pool: Pool, firmId: string, people: DemoBillingPeople, now: Date): Promise<DemoHistory> {
+  const history: DemoHistory = [];
   const clock = { current: now };
   const at = (daysAgo: number, hour = 15) => {
     const d = new Date(now.getTime() - daysAgo * DAY);
@@ -250,7 +261,7 @@ export async function seedDemoBilling(pool: Pool, firmId: string, people: DemoBi
   const inFirm = <T>(work: (tx: TenantTx) => Promise<T>) =>
     withTenant(pool, firmId, async (tx) => {
       const out = await work(tx);
-      await stamp(tx, clock.current);
+      await stamp(tx, clock.current, history);
       return out;
     });
   const timeZone = await inFirm(
@@ -397,4 +408,11 @@ export async function seedDemoBilling(pool: Pool, firmId: string, people: DemoBi
     'Carry the limewash into the three window reveals, with the same mineral primer first.',
     '380.00',
   );
+
+  // The reminders the daily job would have sent on the way, each on its day (recorded without e-mails:
+  // the demo's history mails no one), so an overdue invoice shows its chasing.
+  for (let daysAgo = 60; daysAgo >= 0; daysAgo--) {
+    await step(daysAgo, (tx) => sendDueReminders(tx, ctx.queue, ctx.config, day(daysAgo), clock.current, { mail: false }));
+  }
+  return history;
 }

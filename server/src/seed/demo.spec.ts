@@ -1,6 +1,8 @@
 import { withTenant } from '@layerbook/db';
 import { startTestServer, TestServer } from '../testing/harness';
-import { DEMO, seedDemo } from './demo';
+import { Pool } from 'pg';
+import { testDatabaseUrls } from '../testing/test-env';
+import { dateDemoHistory, DEMO, seedDemo } from './demo';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -72,5 +74,42 @@ describe('demo billing', () => {
     expect(found.orders.map((o) => o.status)).toEqual(['approved', 'sent']);
     expect(found.marks).toBeGreaterThan(0);
     expect(found.payments).toBeGreaterThanOrEqual(2);
+  });
+
+  it('shows the chasing of the overdue invoice: the reminders the daily job would have sent, each on its day', async () => {
+    const firmId = await firmOf();
+    const reminders = await withTenant(t.ctx.pool, firmId, async (tx) => {
+      const { rows } = await tx.client.query<{ step: string; sent_on: string; due_on: string }>(
+        `select r.step, r.sent_on::text as sent_on, i.due_on::text as due_on from invoice_reminders r
+           join invoices i on i.tenant_id = r.tenant_id and i.id = r.invoice_id
+          where i.status in ('issued', 'part_paid') and i.due_on < '2026-12-01' order by r.sent_on`,
+      );
+      return rows;
+    });
+    expect(reminders.length).toBeGreaterThan(0);
+    // each sent on a day of the story, none after the seed's today
+    expect(reminders.every((r) => r.sent_on <= '2026-12-01')).toBe(true);
+  });
+
+  it("dates the audit rows of a seeding transaction at the moment of the story it stands for (the owner's pool)", async () => {
+    const firmId = await firmOf();
+    const txStart = await withTenant(t.ctx.pool, firmId, async (tx) => {
+      await tx.client.query(
+        `insert into audit_log (tenant_id, actor_kind, action, entity) values ($1, 'system', 'demo.history_check', 'firm')`,
+        [tx.tenantId],
+      );
+      return (await tx.client.query<{ t: string }>(`select now()::text as t`)).rows[0].t;
+    });
+    const owner = new Pool({ connectionString: testDatabaseUrls().DATABASE_OWNER_URL, max: 1 });
+    try {
+      await dateDemoHistory(owner, firmId, [{ txStart, at: new Date('2026-09-18T15:00:00Z') }]);
+    } finally {
+      await owner.end();
+    }
+    const dated = await withTenant(t.ctx.pool, firmId, async (tx) => {
+      const { rows } = await tx.client.query<{ at: Date }>(`select created_at as at from audit_log where action = 'demo.history_check'`);
+      return rows.map((r) => r.at.toISOString());
+    });
+    expect(dated).toEqual(['2026-09-18T15:00:00.000Z']);
   });
 });

@@ -15,7 +15,7 @@ import {
 } from '@layerbook/db';
 import { usFederalHolidaysAhead } from '@layerbook/domain';
 import { localDate } from '../firms/local-date';
-import { seedDemoBilling } from './demo-billing';
+import { type DemoHistory, seedDemoBilling } from './demo-billing';
 import { seedDemoInquiries } from './demo-inquiries';
 import { seedDemoLibrary } from './demo-library';
 import { seedDemoTakeoff } from './demo-takeoff';
@@ -49,7 +49,12 @@ export const DEMO = {
   client: { name: 'Hattie Brambleton', email: 'hattie@brambleton.example' },
 } as const;
 
-export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'created' | 'present'> {
+/**
+ * The demo firm, once. With the owner's pool (`npm start`'s seed), the audit log's rows of the billing
+ * story are dated at their moments of it (the web role may only append to the log), so a job's
+ * history reads "issued 72 days ago", not everything at the moment of seeding.
+ */
+export async function seedDemo(pool: Pool, now: Date = new Date(), ownerPool?: Pool): Promise<'created' | 'present'> {
   const existing = await withGlobal(
     pool,
     async (tx) => (await tx.db.select({ id: users.id }).from(users).where(eq(users.email, DEMO.people[0].email)))[0],
@@ -99,6 +104,19 @@ export async function seedDemo(pool: Pool, now: Date = new Date()): Promise<'cre
     return { ownerId: userIds[0], officeId: userIds[1], crewId: userIds[2], clientId: client.id, siteId: site.id };
   });
   // Billing comes after, step by step (each in its own transaction), as the office and the client would do it.
-  await seedDemoBilling(pool, firmId, people, now);
+  const history = await seedDemoBilling(pool, firmId, people, now);
+  if (ownerPool) await dateDemoHistory(ownerPool, firmId, history);
   return 'created';
+}
+
+/** Dates the audit rows each seeding transaction wrote (created_at is its start) at the moment it stands for. */
+export async function dateDemoHistory(ownerPool: Pool, firmId: string, history: DemoHistory): Promise<void> {
+  await withTenant(ownerPool, firmId, (tx) =>
+    tx.client.query(
+      `update audit_log a set created_at = h.at
+         from unnest($2::timestamptz[], $3::timestamptz[]) as h(tx_start, at)
+        where a.tenant_id = $1 and a.created_at = h.tx_start`,
+      [firmId, history.map((h) => h.txStart), history.map((h) => h.at.toISOString())],
+    ),
+  );
 }

@@ -9,11 +9,14 @@ async function run(): Promise<void> {
   const config = loadConfig();
   await migrateDatabase(config.DATABASE_OWNER_URL, path.join(config.ROOT_DIR, 'migrations'));
   const pool = new Pool({ connectionString: config.DATABASE_URL, max: 2 });
+  // The owner only dates the demo's history in the audit log (append-only for the web role).
+  const ownerPool = new Pool({ connectionString: config.DATABASE_OWNER_URL, max: 1 });
   try {
-    const result = await seedDemo(pool);
+    const result = await seedDemo(pool, new Date(), ownerPool);
     console.log(result === 'created' ? `Seeded the demo firm "${DEMO.firm.name}".` : `Demo firm "${DEMO.firm.name}" is already there.`);
   } finally {
     await pool.end();
+    await ownerPool.end();
   }
 }
 

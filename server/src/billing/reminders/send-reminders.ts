@@ -20,7 +20,8 @@ interface OpenInvoice {
  * The row in invoice_reminders is the claim: only the run whose insert lands sends the e-mail, so
  * two runs of one day (two workers, a retry) send it once, also after the cadence changed. Paid
  * and void invoices get none, also one voided or paid while the run goes. `now` dates the e-mail's
- * sign-in link. Returns the steps sent.
+ * sign-in link. Returns the steps sent. `mail: false` records the steps without e-mails (the demo
+ * firm's history, which is made up and mails no one).
  */
 export async function sendDueReminders(
   tx: TenantTx,
@@ -28,6 +29,7 @@ export async function sendDueReminders(
   config: Config,
   today: string,
   now: Date,
+  { mail = true }: { readonly mail?: boolean } = {},
 ): Promise<Array<{ invoiceId: string; step: string }>> {
   const { settings } = await loadBillingSettings(tx);
   const { isOn, daysBefore, onDueDate, everyDaysAfter, maxAfter } = settings.reminders;
@@ -62,7 +64,7 @@ export async function sendDueReminders(
       [tx.tenantId, invoice.id, due.step, today],
     );
     if (!claimed.rowCount) continue;
-    await enqueueInvoiceMail(tx, queue, config, invoice.id, { kind: 'reminder', step: due.step }, now);
+    if (mail) await enqueueInvoiceMail(tx, queue, config, invoice.id, { kind: 'reminder', step: due.step }, now);
     await recordAudit(tx, {
       actorUserId: SYSTEM_ACTOR.userId,
       actorKind: SYSTEM_ACTOR.kind,
