@@ -1,7 +1,9 @@
 import { defaultEstimatingSettings, type EstimatingSettings, type EstimatingSettingsView } from '@layerbook/contracts';
 import { eq, firmEstimatingSettings, firms, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
+import { decimalsMessage, fitsCurrency } from '../billing/money';
 import type { Actor } from '../http/actor';
+import { badRequest } from '../http/problem';
 
 export async function getEstimatingSettings(tx: TenantTx): Promise<EstimatingSettingsView> {
   const firm = (await tx.db.select({ units: firms.units, currency: firms.currency }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
@@ -21,6 +23,15 @@ export async function saveEstimatingSettings(
   settings: EstimatingSettings,
   now: Date,
 ): Promise<EstimatingSettingsView> {
+  // Money finer than the firm's currency would be rounded away quietly in every price (yen have no cents).
+  const { currency } = (await tx.db.select({ currency: firms.currency }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
+  const amounts: Array<[string, string | null]> = [
+    ['labourRate', settings.labourRate],
+    ['minimumCharge', settings.minimumCharge],
+    ['rounding.increment', settings.rounding.kind === 'nearest' ? settings.rounding.increment : null],
+  ];
+  const tooFine = amounts.filter(([, amount]) => amount !== null && !fitsCurrency(amount, currency));
+  if (tooFine.length) throw badRequest(tooFine.map(([field]) => ({ field, message: decimalsMessage(currency) })));
   await tx.db
     .insert(firmEstimatingSettings)
     .values({ tenantId: tx.tenantId, settings })

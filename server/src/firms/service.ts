@@ -1,5 +1,6 @@
-import type { FirmSettings, FirmSettingsUpdate } from '@layerbook/contracts';
-import { eq, firms, TenantTx } from '@layerbook/db';
+import type { EstimatingSettings, FirmSettings, FirmSettingsUpdate, UnitSystem } from '@layerbook/contracts';
+import { convertArea, convertLength } from '@layerbook/domain';
+import { eq, firmEstimatingSettings, firms, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { conflict, notFound } from '../http/problem';
@@ -38,6 +39,27 @@ export async function firmRow(tx: TenantTx, lock = false): Promise<FirmRow> {
   return firm;
 }
 
+/**
+ * The firm's saved estimating settings hold three measures in its units: the height above which
+ * scaffold is priced, the reach from the floor, and the smallest opening deducted. When the units
+ * change they are converted (1 ft = 0.3048 m exactly, NIST SP 811 B.8), so they stay the same size
+ * instead of 12 ft becoming 12 m. Rounded to 4 decimals: a tenth of a millimetre.
+ */
+async function convertEstimatingMeasures(tx: TenantTx, from: UnitSystem, to: UnitSystem): Promise<void> {
+  const row = (await tx.db.select().from(firmEstimatingSettings).where(eq(firmEstimatingSettings.tenantId, tx.tenantId)).for('update'))[0];
+  if (!row) return;
+  const settings = row.settings as EstimatingSettings;
+  const [a, b] = [from === 'metric' ? 'm' : 'ft', to === 'metric' ? 'm' : 'ft'] as const;
+  const round = (n: number) => Math.round(n * 10_000) / 10_000;
+  const converted: EstimatingSettings = {
+    ...settings,
+    scaffoldHeight: round(convertLength(settings.scaffoldHeight, a, b)),
+    workingReach: round(convertLength(settings.workingReach, a, b)),
+    minDeductedOpeningArea: round(convertArea(settings.minDeductedOpeningArea, a, b)),
+  };
+  await tx.db.update(firmEstimatingSettings).set({ settings: converted }).where(eq(firmEstimatingSettings.tenantId, tx.tenantId));
+}
+
 export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettingsUpdate, now: Date): Promise<FirmSettings> {
   const before = await getFirm(tx);
   if (input.currency !== undefined && input.currency !== before.currency) await refuseCurrencyChangeOnceBilled(tx, before.currency);
@@ -46,6 +68,7 @@ export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettings
     .set({ ...input, updatedAt: now })
     .where(eq(firms.id, tx.tenantId))
     .returning();
+  if (input.units !== undefined && input.units !== before.units) await convertEstimatingMeasures(tx, before.units, input.units);
   const changed = (Object.keys(input) as (keyof FirmSettingsUpdate)[]).filter((k) => before[k] !== input[k]);
   if (changed.length) {
     const actorUserId = actor.kind === 'staff' ? actor.userId : null;

@@ -97,6 +97,17 @@ export const estimatingSettings = requestSchema<EstimatingSettings>()(
         .max(L.minDeductedOpeningArea.max),
     })
     .superRefine((s, ctx) => {
+      // Each would make every estimate the firm saves fail, far from here (the engine refuses both).
+      if (s.rounding.kind === 'nearest' && Number(s.rounding.increment) <= 0) {
+        ctx.addIssue({ code: 'custom', path: ['rounding', 'increment'], message: 'Round to an amount above 0, like 5.00.' });
+      }
+      if (s.calendar.dayStartHour + s.calendar.productiveHoursPerDay > 24) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['calendar', 'productiveHoursPerDay'],
+          message: 'The working day would run past midnight: start earlier or work fewer hours.',
+        });
+      }
       if (s.overheadProfit.method === 'margin' && s.overheadProfit.overheadPercent + s.overheadProfit.profitPercent >= 100) {
         ctx.addIssue({
           code: 'custom',
