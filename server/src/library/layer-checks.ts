@@ -46,6 +46,8 @@ export async function checkLayers(tx: TenantTx, layers: readonly FinishLayerInpu
         .select()
         .from(products)
         .where(and(eq(products.tenantId, tx.tenantId), inArray(products.id, ids)))
+        // share-locked until the system is saved: an archive of one of them waits, then finds the system
+        .for('share')
     : [];
   const byId = new Map(rows.map((r) => [r.id, r]));
   const problems: FieldProblem[] = [];

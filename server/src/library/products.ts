@@ -120,6 +120,9 @@ async function refuseUnitChangeInUse(tx: TenantTx, current: ProductRow, unit: st
 export const listNames = (names: readonly string[]) => names.map((n) => `"${n}"`).join(', ');
 
 export async function setProductArchived(tx: TenantTx, actor: Actor, id: string, isArchived: boolean, now: Date): Promise<ProductView> {
+  // Locked: a finish system being saved with this product share-locks it (checkLayers), so the two go
+  // one after the other and the second sees the first (never an active system naming an archived product).
+  await tx.client.query(`select 1 from products where tenant_id = $1 and id = $2 for update`, [tx.tenantId, id]);
   const current = await loadProduct(tx, id);
   if (isArchived && !current.archivedAt) {
     const names = await activeSystemsUsing(tx, id);
