@@ -1,4 +1,4 @@
-import type { BillingMethod, BillingTerms } from '@layerbook/contracts';
+import type { BillingMethod, BillingTerms, JobStatus } from '@layerbook/contracts';
 import type { SqlQuery, TenantTx } from '@layerbook/db';
 import { includedTax } from '@layerbook/domain';
 import type Decimal from 'decimal.js';
@@ -23,13 +23,14 @@ export interface BillingJob {
   finish_date: string | null;
   proposal_version_id: string;
   accepted_variant_id: string;
+  status: JobStatus;
   time_zone: string;
 }
 
 const JOB_COLUMNS = `j.id, j.client_id, j.site_id, j.title, j.currency, j.contract_sum::text as contract_sum,
             j.original_contract_sum::text as original_contract_sum, j.contract_tax::text as contract_tax, j.billing_method,
             j.billing_terms, j.billing_started_at, j.walkthrough_on::text as walkthrough_on, j.finish_date::text as finish_date,
-            j.proposal_version_id, j.accepted_variant_id, f.time_zone`;
+            j.proposal_version_id, j.accepted_variant_id, j.status, f.time_zone`;
 
 /** Loads a job (404 when it is not this firm's); `lock` takes its row lock, so billing writes on one job go one at a time. */
 export async function loadBillingJob(tx: TenantTx, jobId: string, lock = false): Promise<BillingJob> {
@@ -66,9 +67,15 @@ export async function termsOf(tx: TenantTx, job: BillingJob): Promise<BillingTer
 export type StartedJob = BillingJob & { billing_terms: BillingTerms };
 
 export function assertBillingStarted(job: BillingJob): asserts job is StartedJob {
+  refuseCancelledJob(job);
   if (!job.billing_started_at || !job.billing_terms) {
     throw conflict('Start billing for this job first (confirm its schedule).');
   }
+}
+
+/** A cancelled job bills nothing more and its schedule and change orders stay as they are (409). */
+export function refuseCancelledJob(job: Pick<BillingJob, 'status'>): void {
+  if (job.status === 'cancelled') throw conflict('This job was cancelled: nothing more is billed or changed on it.');
 }
 
 export const firmToday = (job: Pick<BillingJob, 'time_zone'>, now: Date): string => localDate(job.time_zone, now);

@@ -75,6 +75,12 @@ function auditText(r: AuditRow): string | null {
   switch (r.action) {
     case 'job.created':
       return 'Job made: the client accepted the proposal';
+    case 'job.status_changed':
+      return r.data['to'] === 'complete'
+        ? 'Job marked finished'
+        : r.data['to'] === 'in_progress'
+          ? 'Job reopened'
+          : `Job cancelled${typeof r.data['reason'] === 'string' ? `: ${r.data['reason']}` : ''}`;
     case 'billing.started':
       return 'Billing started';
     case 'billing.schedule_updated':

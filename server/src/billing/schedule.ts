@@ -15,7 +15,7 @@ import { type Actor, SYSTEM_ACTOR } from '../http/actor';
 import { badRequest, conflict } from '../http/problem';
 import { layerMilestones } from '../jobs/jobs';
 import type { JobQueue } from '../queue/job-queue';
-import { type BillingJob, firmToday, loadBillingJob } from './billing-job';
+import { type BillingJob, firmToday, loadBillingJob, refuseCancelledJob } from './billing-job';
 import { evaluateJobBilling } from './triggers/evaluate';
 import { getJobBilling, loadScheduleLines, type ScheduleLineRow } from './job-billing';
 import { decimalsMessage, fitsCurrency } from './money';
@@ -102,6 +102,7 @@ export async function updateBillingSchedule(
   now: Date,
 ): Promise<JobBillingView> {
   const job = await loadBillingJob(tx, jobId, true);
+  refuseCancelledJob(job);
   const existing = await loadScheduleLines(tx, job.id);
   const byId = new Map(existing.map((l) => [l.id, l]));
   const unknown: FieldProblem[] = body.lines.flatMap((l, i) =>
@@ -244,6 +245,7 @@ export async function startBilling(
   options: { draftNow?: boolean } = {},
 ): Promise<JobBillingView> {
   const job = await loadBillingJob(tx, jobId, true);
+  refuseCancelledJob(job);
   if (job.billing_started_at) throw conflict('Billing has already started for this job.');
   const { settings } = await loadBillingSettings(tx);
   const terms: BillingTerms = billingTermsFor(settings, job.contract_sum, job.currency);
@@ -306,6 +308,7 @@ export async function updateValueLines(
   now: Date,
 ): Promise<JobBillingView> {
   const job = await loadBillingJob(tx, jobId, true);
+  refuseCancelledJob(job);
   const existing = await loadValueLines(tx, job.id);
   const byId = new Map(existing.map((l) => [l.id, l]));
   const billed = await billedWorkByLine(tx, job.id);

@@ -37,7 +37,7 @@ describe('archiving a product while a finish system is changed to use it', () =>
     const archivedYet = new Promise<void>((r) => (archivedInTx = r));
     // Request 1: archive the product (checks no active system uses it), still uncommitted...
     const archiving = withTenant(t.ctx.pool, job.firmId, async (tx) => {
-      await setProductArchived(tx, actor as never, glaze.body.id, true, new Date());
+      await setProductArchived(tx, actor, glaze.body.id, true, new Date());
       archivedInTx();
       await held;
     });

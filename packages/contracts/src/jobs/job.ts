@@ -10,6 +10,18 @@ export const JOB_STATUS_LABELS: Readonly<Record<JobStatus, string>> = {
   cancelled: 'Cancelled',
 };
 
+/**
+ * POST /api/jobs/:id/status — the office moves a job on: finished (`complete`), reopened
+ * (`in_progress`, from finished only) or cancelled (with a reason; once no invoice of it stands).
+ */
+export interface JobStatusChange {
+  readonly status: 'complete' | 'in_progress' | 'cancelled';
+  /** why it was cancelled (required then), kept in the job's history */
+  readonly reason?: string;
+}
+
+export const JOB_CANCEL_REASON_MAX = 500;
+
 /** Where a payment sits in the schedule: the deposit, a payment during the work, the balance. */
 export const PAYMENT_LINE_ROLES = ['deposit', 'milestone', 'final'] as const;
 export type PaymentLineRole = (typeof PAYMENT_LINE_ROLES)[number];

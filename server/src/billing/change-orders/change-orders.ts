@@ -1,4 +1,4 @@
-import type { ChangeOrderCreate, ChangeOrderPricing, ChangeOrderUpdate, ChangeOrderView } from '@layerbook/contracts';
+import type { ChangeOrderCreate, ChangeOrderPricing, ChangeOrderUpdate, ChangeOrderView, JobStatus } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { formatMoney } from '@layerbook/domain';
 import Decimal from 'decimal.js';
@@ -10,6 +10,7 @@ import type { Actor } from '../../http/actor';
 import { badRequest, conflict, notFound } from '../../http/problem';
 import { enqueueMail } from '../../mail/outbox';
 import { ensurePortalAccount } from '../../proposals/client-portal-account';
+import { refuseCancelledJob } from '../billing-job';
 import { changeOrderSentMail } from './change-order-mail';
 import { whyNotApprovable } from './decide';
 import { type PricedChangeOrder, priceChangeOrder, type PricingJob } from './pricing';
@@ -30,16 +31,19 @@ interface JobRow {
   client_id: string;
   title: string;
   contract_sum: string;
+  status: JobStatus;
 }
 
 async function loadJob(tx: TenantTx, jobId: string, lock: boolean): Promise<JobRow> {
   const { rows } = await tx.client.query<JobRow>(
-    `select site_id, estimate_id, currency, start_date::text as start_date, client_id, title, contract_sum::text as contract_sum
+    `select site_id, estimate_id, currency, start_date::text as start_date, client_id, title, contract_sum::text as contract_sum, status
        from jobs where tenant_id = $1 and id = $2
       ${lock ? 'for update' : ''}`,
     [tx.tenantId, jobId],
   );
   if (!rows[0]) throw notFound('job');
+  // A cancelled job's contract stays as it ended: no change order is written, changed or sent on it.
+  refuseCancelledJob(rows[0]);
   return rows[0];
 }
 
@@ -130,9 +134,9 @@ export async function updateChangeOrder(
   if (row.status !== 'draft') throw conflict(`Change order #${row.number} was sent to the client; only a draft can change.`);
   const input = parseBody();
   const pricing: ChangeOrderPricing | undefined = input.pricing;
-  const job = pricing ? await loadJob(tx, row.job_id, false) : null;
-  const priced = pricing && job ? await priceChangeOrder(tx, pricingJob(job), pricing, await firmToday(tx, now)) : null;
-  if (job && priced) checkLeavesAContract(job, priced);
+  const job = await loadJob(tx, row.job_id, false);
+  const priced = pricing ? await priceChangeOrder(tx, pricingJob(job), pricing, await firmToday(tx, now)) : null;
+  if (priced) checkLeavesAContract(job, priced);
   await tx.client.query(
     `update change_orders set title = coalesce($3, title), description = coalesce($4, description),
             pricing = coalesce($5, pricing), price = coalesce($6, price), tax = coalesce($7, tax), amount = coalesce($8, amount),

@@ -1,4 +1,4 @@
-import type { ChangeOrderDecision, PortalChangeOrder } from '@layerbook/contracts';
+import type { ChangeOrderDecision, JobStatus, PortalChangeOrder } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { DomainInputError, formatMoney, minorUnitDigits, respreadSchedule, type PaymentLine } from '@layerbook/domain';
 import Decimal from 'decimal.js';
@@ -108,6 +108,7 @@ interface JobMoneyRow {
   billing_method: 'schedule' | 'progress';
   billing_started_at: Date | null;
   finish_date: string | null;
+  status: JobStatus;
 }
 
 /** The money side of an approval; answers the sums before and after, to freeze on the change order. */
@@ -115,11 +116,12 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
   const job = (
     await tx.client.query<JobMoneyRow>(
       `select contract_sum::text as contract_sum, contract_tax::text as contract_tax, currency, billing_method, billing_started_at,
-              finish_date::text as finish_date
+              finish_date::text as finish_date, status
          from jobs where tenant_id = $1 and id = $2 for update`,
       [tx.tenantId, row.job_id],
     )
   ).rows[0];
+  if (job.status === 'cancelled') throw conflict('The firm has cancelled this job, so this change order can no longer be approved.');
   const digits = minorUnitDigits(job.currency);
   const before = new Decimal(job.contract_sum);
   const after = before.plus(row.amount);

@@ -9,13 +9,24 @@ import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { JobBilling } from './billing/job-billing';
+import { JobStatusActions } from './job-status-actions';
 import { jobStatus } from './job-words';
 import { TranslatePipe } from '@ngx-translate/core';
 
 /** One accepted job: what was signed, for how much, and its billing (sections in ./billing). */
 @Component({
   selector: 'lb-job-detail',
-  imports: [TranslatePipe, CalendarDatePipe, FormAlert, JobBilling, MatIconModule, MatProgressBarModule, MoneyPipe, RouterLink],
+  imports: [
+    TranslatePipe,
+    CalendarDatePipe,
+    FormAlert,
+    JobBilling,
+    JobStatusActions,
+    MatIconModule,
+    MatProgressBarModule,
+    MoneyPipe,
+    RouterLink,
+  ],
   templateUrl: './job-detail.html',
   styleUrl: './job-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -33,4 +44,9 @@ export class JobDetail {
     return error ? problemMessage(error) : null;
   });
   protected readonly jobStatus = jobStatus;
+
+  /** The job as the server answered a move (finished, reopened, cancelled). */
+  protected statusChanged(job: JobView): void {
+    this.loaded.set(job);
+  }
 }
