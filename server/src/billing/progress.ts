@@ -147,6 +147,27 @@ function checkValueLine(
  * the change and the request to check billing triggers commit together. A mark sent again with
  * the same `clientKey` (a phone back online) changes nothing and answers the same.
  */
+/** Whether a mark for the same thing (a layer on a surface, a value line's percent or stored materials, the walkthrough) is dated after this one. */
+async function isOlderThanRecorded(
+  tx: TenantTx,
+  jobId: string,
+  mark: ProgressMark,
+  target: { workItemId: string | null; valueLineId: string | null },
+  progressId: string,
+): Promise<boolean> {
+  const same =
+    mark.kind === 'layerDone' || mark.kind === 'layerReopened'
+      ? { cond: `work_item_id = $4 and kind in ('layerDone', 'layerReopened')`, id: target.workItemId }
+      : mark.kind === 'walkthrough'
+        ? { cond: `job_id = $4 and kind = 'walkthrough'`, id: jobId }
+        : { cond: `value_line_id = $4 and kind = '${mark.kind}'`, id: target.valueLineId };
+  const { rowCount } = await tx.client.query(
+    `select 1 from job_progress where tenant_id = $1 and id <> $2 and happened_on > $3::date and ${same.cond} limit 1`,
+    [tx.tenantId, progressId, mark.on, same.id],
+  );
+  return (rowCount ?? 0) > 0;
+}
+
 export async function recordProgress(
   tx: TenantTx,
   queue: JobQueue,
@@ -214,6 +235,10 @@ export async function recordProgress(
     ],
   );
   if (!inserted.rows[0]) return progressView(tx, jobId);
+  // Marks kept on a phone without a signal arrive late and out of order: one dated before a mark
+  // already recorded for the same thing stays in the history but does not change where it stands
+  // (an older 30 % after a newer 60 %, a done before a later reopening).
+  if (await isOlderThanRecorded(tx, jobId, mark, target, inserted.rows[0].id)) return progressView(tx, jobId);
   // The first layer done means the work has started: a scheduled job is now under way.
   if (mark.kind === 'layerDone') {
     await tx.client.query(
@@ -224,7 +249,8 @@ export async function recordProgress(
 
   switch (mark.kind) {
     case 'layerDone':
-      await tx.client.query(`update job_work_items set done_on = $3, done_by = $4 where tenant_id = $1 and id = $2`, [
+      // Done already (a second phone, the same day): the first to mark it keeps it.
+      await tx.client.query(`update job_work_items set done_on = $3, done_by = $4 where tenant_id = $1 and id = $2 and done_on is null`, [
         tx.tenantId,
         target.workItemId,
         mark.on,
