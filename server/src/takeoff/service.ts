@@ -10,6 +10,7 @@ import type {
   TakeoffView,
 } from '@layerbook/contracts';
 import { and, asc, clients, eq, firms, rooms, sites, sql, surfaces, TenantTx } from '@layerbook/db';
+import { convertArea } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
@@ -255,23 +256,30 @@ export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, inp
 }
 
 /**
- * A new shape is measured again and saved in the firm's unit of today. Without a shape, the stored
- * one keeps its unit, and a disturbed area sent alone is read in that unit too.
+ * A new shape is measured again and saved in the firm's unit of today; a disturbed area not sent
+ * with it is converted to that unit too (50 ft² stays 4.65 m², never becomes 50 m²). Without a
+ * shape, the stored one keeps its unit, and a disturbed area sent alone is read in that unit too.
  */
 export async function updateSurface(tx: TenantTx, surfaceId: string, patch: SurfaceUpdate, now: Date): Promise<SurfaceView> {
   const current = await findSurface(tx, surfaceId);
   const shape = patch.shape ?? toSurfaceView(current).shape;
   const measure = measureOrReject(shape);
-  const disturbed = patch.disturbedPaintedArea !== undefined ? patch.disturbedPaintedArea : toSurfaceView(current).disturbedPaintedArea;
+  const unit = patch.shape !== undefined ? await firmUnit(tx) : (current.lengthUnit as TakeoffLengthUnit);
+  const stored = toSurfaceView(current).disturbedPaintedArea;
+  const kept =
+    stored !== null && unit !== current.lengthUnit
+      ? Math.round(convertArea(stored, current.lengthUnit as TakeoffLengthUnit, unit) * 100) / 100
+      : stored;
+  const disturbed = patch.disturbedPaintedArea !== undefined ? patch.disturbedPaintedArea : kept;
   checkDisturbed(disturbed, measure);
   const [row] = await tx.db
     .update(surfaces)
     .set({
       ...(patch.name !== undefined ? { name: patch.name } : {}),
       ...(patch.notes !== undefined ? { notes: patch.notes } : {}),
-      ...(patch.shape !== undefined ? { shape: patch.shape, lengthUnit: await firmUnit(tx) } : {}),
-      ...(patch.disturbedPaintedArea !== undefined
-        ? { disturbedPaintedArea: patch.disturbedPaintedArea === null ? null : String(patch.disturbedPaintedArea) }
+      ...(patch.shape !== undefined ? { shape: patch.shape, lengthUnit: unit } : {}),
+      ...(patch.disturbedPaintedArea !== undefined || kept !== stored
+        ? { disturbedPaintedArea: disturbed === null ? null : String(disturbed) }
         : {}),
       updatedAt: now,
     })
