@@ -1,3 +1,4 @@
+import { loadLibrary } from '../jobs/sheet/load-sheet';
 import {
   DEFAULT_PROPOSAL_TERMS,
   type ItemList,
@@ -155,6 +156,7 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
     [tx.tenantId, input.estimateId, JSON.stringify(snapshot), hash, input.expiresOn, actorUserId],
   );
   const made = rows[0];
+  await keepLibrary(tx, made.id);
   await recordAudit(tx, {
     actorUserId,
     actorKind: 'staff',
@@ -164,6 +166,20 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
     data: { estimateId: input.estimateId, version: made.version, snapshotHash: hash },
   });
   return getVersion(tx, made.id);
+}
+
+/** Keeps with the version the finish systems and products its options use, as they are now (no prices). */
+async function keepLibrary(tx: TenantTx, versionId: string): Promise<void> {
+  const { rows } = await tx.client.query<{
+    result: { variants?: Array<{ result: { surfaces: Parameters<typeof loadLibrary>[1] } }> } | null;
+  }>(`select result from proposal_versions where tenant_id = $1 and id = $2`, [tx.tenantId, versionId]);
+  const surfaces = (rows[0]?.result?.variants ?? []).flatMap((v) => v.result.surfaces);
+  const library = await loadLibrary(tx, surfaces);
+  await tx.client.query(`update proposal_versions set library = $3 where tenant_id = $1 and id = $2`, [
+    tx.tenantId,
+    versionId,
+    JSON.stringify(library),
+  ]);
 }
 
 /**
@@ -211,6 +227,7 @@ export async function updateDraft(
       where v.tenant_id = $1 and v.id = $2`,
     [tx.tenantId, id, JSON.stringify(snapshot), hash, expiresOn],
   );
+  await keepLibrary(tx, id);
   await recordAudit(tx, {
     actorUserId,
     actorKind: 'staff',

@@ -67,6 +67,12 @@ export const proposalVersions = pgTable(
      * client signed, not from the estimate as the office may have saved it since.
      */
     result: jsonb('result'),
+    /**
+     * The finish systems (layers, coats, recipes, waits) and products (name, unit, hazards; no price)
+     * the options use, as they were when the version was made: the crew's sheet reads the job's from
+     * here, so a library edit for future work does not reach a job already sold.
+     */
+    library: jsonb('library'),
     expiresOn: date('expires_on').notNull(),
     sentAt: timestamp('sent_at', { withTimezone: true }),
     decidedAt: timestamp('decided_at', { withTimezone: true }),

@@ -6,8 +6,9 @@ import { notFound } from '../../http/problem';
 /**
  * What a job sheet is built from, read in one tenant transaction: the job and its site, the firm's
  * units, zone and country, the accepted option's stored result and the proposal's room order, and
- * the finish systems and products that result names (archived ones too: the job was sold with
- * them). No price, cost or total is selected.
+ * the finish systems and products that result names, as the signed version kept them (the
+ * library's current rows for older versions; archived ones too: the job was sold with them). No
+ * price, cost or total is selected.
  */
 export interface SheetSource {
   readonly job: {
@@ -44,6 +45,45 @@ interface JobRow {
   length_unit: 'ft' | 'm' | null;
   scope: ProposalSnapshot['scope'] | null;
   result: Pick<EstimateResultJson, 'surfaces' | 'schedule' | 'cautions' | 'lead'> | null;
+  library: SheetLibrary | null;
+}
+
+/** The finish systems and products a job is worked with (no price: name, unit, hazards). */
+export interface SheetLibrary {
+  readonly finishSystems: ReadonlyArray<{ readonly id: string; readonly name: string; readonly layers: readonly FinishLayer[] }>;
+  readonly products: ReadonlyArray<Pick<Product, 'id' | 'name' | 'unit' | 'hazards'>>;
+}
+
+type SheetSurfaces = NonNullable<JobRow['result']>['surfaces'];
+
+/** The product ids each system's layers and each surface's quantities name. */
+function productIdsOf(systems: SheetLibrary['finishSystems'], surfaces: SheetSurfaces): Set<string> {
+  const ids = new Set<string>();
+  for (const f of systems) for (const layer of f.layers) for (const id of layerProductIds(layer)) ids.add(id);
+  for (const s of surfaces) for (const layer of s.layers) for (const p of layer.quantity.products) ids.add(p.productId);
+  return ids;
+}
+
+/** The firm's finish systems and products these surfaces name, as the library holds them now (archived ones too). */
+export async function loadLibrary(tx: TenantTx, surfaces: SheetSurfaces): Promise<SheetLibrary> {
+  const systemIds = [...new Set(surfaces.map((s) => s.finishSystemId))];
+  const { rows: finishSystems } = await tx.client.query<{ id: string; name: string; layers: FinishLayer[] }>(
+    `select id, name, layers from finish_systems where tenant_id = $1 and id::text = any($2::text[]) order by id`,
+    [tx.tenantId, systemIds],
+  );
+  const { rows: products } = await tx.client.query<{ id: string; name: string; unit: Product['unit']; hazards: Product['hazards'] | null }>(
+    `select id, name, unit, hazards from products where tenant_id = $1 and id::text = any($2::text[]) order by name, id`,
+    [tx.tenantId, [...productIdsOf(finishSystems, surfaces)]],
+  );
+  return { finishSystems, products: products.map((p) => ({ id: p.id, name: p.name, unit: p.unit, hazards: p.hazards ?? {} })) };
+}
+
+/** Of a kept library (every option's), what these surfaces use. */
+function pickLibrary(library: SheetLibrary, surfaces: SheetSurfaces): SheetLibrary {
+  const systemIds = new Set(surfaces.map((s) => s.finishSystemId));
+  const finishSystems = library.finishSystems.filter((f) => systemIds.has(f.id));
+  const productIds = productIdsOf(finishSystems, surfaces);
+  return { finishSystems, products: library.products.filter((p) => productIds.has(p.id)) };
 }
 
 /** The product ids a layer uses: the product applied as is, or its recipe's components. */
@@ -55,7 +95,7 @@ export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<Shee
     `select j.id, j.title, j.status, j.start_date::text as start_date, j.finish_date::text as finish_date,
             concat_ws(', ', nullif(s.address_line1, ''), nullif(s.city, '')) as site_address,
             f.units, f.time_zone, f.country,
-            pv.snapshot->>'lengthUnit' as length_unit, pv.snapshot->'scope' as scope,
+            pv.snapshot->>'lengthUnit' as length_unit, pv.snapshot->'scope' as scope, pv.library,
             (select v->'result' from jsonb_array_elements(coalesce(coalesce(pv.result, e.result)->'variants', '[]'::jsonb)) v
               where v->>'id' = j.accepted_variant_id limit 1) as result
        from jobs j
@@ -70,18 +110,9 @@ export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<Shee
   if (!r) throw notFound('job');
   const surfaces = r.result?.surfaces ?? [];
 
-  const systemIds = [...new Set(surfaces.map((s) => s.finishSystemId))];
-  const { rows: finishSystems } = await tx.client.query<{ id: string; name: string; layers: FinishLayer[] }>(
-    `select id, name, layers from finish_systems where tenant_id = $1 and id::text = any($2::text[])`,
-    [tx.tenantId, systemIds],
-  );
-  const productIds = new Set<string>();
-  for (const f of finishSystems) for (const layer of f.layers) for (const id of layerProductIds(layer)) productIds.add(id);
-  for (const s of surfaces) for (const layer of s.layers) for (const p of layer.quantity.products) productIds.add(p.productId);
-  const { rows: products } = await tx.client.query<{ id: string; name: string; unit: Product['unit']; hazards: Product['hazards'] | null }>(
-    `select id, name, unit, hazards from products where tenant_id = $1 and id::text = any($2::text[]) order by name, id`,
-    [tx.tenantId, [...productIds]],
-  );
+  // The finish systems and products as the version the client signed kept them; the library as it is now
+  // only for versions made before versions kept theirs (an edit for future work must not reach this crew).
+  const { finishSystems, products } = pickLibrary(r.library ?? (await loadLibrary(tx, surfaces)), surfaces);
   const { rows: changes } = await tx.client.query<{
     number: number;
     title: string;
@@ -116,7 +147,7 @@ export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<Shee
     scope: r.scope ?? [],
     roomNames: new Map(rooms.map((room) => [room.id, room.name])),
     finishSystems,
-    products: products.map((p) => ({ id: p.id, name: p.name, unit: p.unit, hazards: p.hazards ?? {} })),
+    products,
     changes: changes.map((c) => ({
       number: c.number,
       title: c.title,

@@ -1,0 +1,1 @@
+ALTER TABLE "proposal_versions" ADD COLUMN "library" jsonb;
