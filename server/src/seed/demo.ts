@@ -109,14 +109,19 @@ export async function seedDemo(pool: Pool, now: Date = new Date(), ownerPool?: P
   return 'created';
 }
 
-/** Dates the audit rows each seeding transaction wrote (created_at is its start) at the moment it stands for. */
+/**
+ * Dates the rows each seeding transaction wrote to the append-only history (the audit log, the job's
+ * progress marks; created_at is the transaction's start) at the moment of the story it stands for.
+ */
 export async function dateDemoHistory(ownerPool: Pool, firmId: string, history: DemoHistory): Promise<void> {
-  await withTenant(ownerPool, firmId, (tx) =>
-    tx.client.query(
-      `update audit_log a set created_at = h.at
-         from unnest($2::timestamptz[], $3::timestamptz[]) as h(tx_start, at)
-        where a.tenant_id = $1 and a.created_at = h.tx_start`,
-      [firmId, history.map((h) => h.txStart), history.map((h) => h.at.toISOString())],
-    ),
-  );
+  await withTenant(ownerPool, firmId, async (tx) => {
+    for (const table of ['audit_log', 'job_progress'] as const) {
+      await tx.client.query(
+        `update ${table} a set created_at = h.at
+           from unnest($2::timestamptz[], $3::timestamptz[]) as h(tx_start, at)
+          where a.tenant_id = $1 and a.created_at = h.tx_start`,
+        [firmId, history.map((h) => h.txStart), history.map((h) => h.at.toISOString())],
+      );
+    }
+  });
 }
