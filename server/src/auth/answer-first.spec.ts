@@ -25,12 +25,10 @@ function held<T extends object, K extends keyof T>(module: T, name: K) {
   return { release, started: () => started, restore: () => spy.mockRestore() };
 }
 
-it('answers a password reset request with 202 before its lookup runs', async () => {
-  const work = held(passwordReset, 'requestPasswordReset');
+/** Posts the request with the lookup held, and shows it answered 202 while the lookup had only started. */
+async function answeredFirst(work: ReturnType<typeof held>, ask: () => Promise<{ status: number }>): Promise<void> {
   try {
-    const guest = await newAgent(t.app);
-    const res = await guest.agent.post('/api/auth/password-reset').set('x-csrf-token', guest.csrf()).send({ email: 'who@example.test' });
-    expect(res.status).toBe(202);
+    expect((await ask()).status).toBe(202);
     // the answer is in the caller's hands; the lookup runs after it, held here until released
     await new Promise((resolve) => setTimeout(resolve, 20));
     expect(work.started()).toBe(true);
@@ -38,18 +36,18 @@ it('answers a password reset request with 202 before its lookup runs', async () 
     work.release();
     work.restore();
   }
+}
+
+it('answers a password reset request with 202 before its lookup runs', async () => {
+  const guest = await newAgent(t.app);
+  await answeredFirst(held(passwordReset, 'requestPasswordReset'), () =>
+    guest.agent.post('/api/auth/password-reset').set('x-csrf-token', guest.csrf()).send({ email: 'who@example.test' }),
+  );
 });
 
 it('answers a portal sign-in link request with 202 before its lookup runs', async () => {
-  const work = held(portalAuth, 'requestPortalLink');
-  try {
-    const c = await newAgent(t.app, 'portal');
-    const res = await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email: 'who@example.test' });
-    expect(res.status).toBe(202);
-    await new Promise((resolve) => setTimeout(resolve, 20));
-    expect(work.started()).toBe(true);
-  } finally {
-    work.release();
-    work.restore();
-  }
+  const c = await newAgent(t.app, 'portal');
+  await answeredFirst(held(portalAuth, 'requestPortalLink'), () =>
+    c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email: 'who@example.test' }),
+  );
 });
