@@ -89,7 +89,11 @@ const SAY: Readonly<Record<string, Say>> = {
   'billing.value_lines_updated': () => 'Changed the schedule of values',
   'billing.deposit_left_for_office': (d) => `Left the deposit for the office${paren(t(d, 'reason'))}`,
   'job.status_changed': (d) =>
-    d['to'] === 'complete' ? 'Marked a job finished' : d['to'] === 'in_progress' ? 'Reopened a job' : `Cancelled a job${paren(t(d, 'reason'))}`,
+    d['to'] === 'complete'
+      ? 'Marked a job finished'
+      : d['to'] === 'in_progress'
+        ? 'Reopened a job'
+        : `Cancelled a job${paren(t(d, 'reason'))}`,
   'job.created': (d) => `Job opened at acceptance, contract sum ${t(d, 'contractSum')} ${t(d, 'currency')}`.trimEnd(),
   'progress.marked': (d) => `Marked progress${paren(t(d, 'kind'))}${of(d, 'on', 'on')}`,
   'client.created': () => 'Added a client',

@@ -42,7 +42,7 @@ describe('a surface re-measured after the firm went metric', () => {
     // The office corrects the height, in metres now: 12.192 m × 2.5 m = 30.48 m². Only the shape is sent.
     expect((await remeasure({ kind: 'walls', perimeter: 12.192, height: 2.5 })).status).toBe(200);
     const view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body as TakeoffView;
-    const walls = view.rooms[0].surfaces[0] as SurfaceView;
+    const walls = view.rooms[0].surfaces[0];
     // 50 ft² = 4.645152 m² (1 ft² = 0.09290304 m², NIST SP 811 B.8), kept to the column's hundredths
     expect(walls.lengthUnit).toBe('m');
     expect(walls.disturbedPaintedArea).toBe(4.65);
