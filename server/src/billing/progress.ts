@@ -141,12 +141,6 @@ function checkValueLine(
   }
 }
 
-/**
- * Records one mark from the work and applies it: a layer done or reopened on a surface, a
- * percent complete or materials stored on a value line, the walkthrough held. The history row,
- * the change and the request to check billing triggers commit together. A mark sent again with
- * the same `clientKey` (a phone back online) changes nothing and answers the same.
- */
 /** Whether a mark for the same thing (a layer on a surface, a value line's percent or stored materials, the walkthrough) is dated after this one. */
 async function isOlderThanRecorded(
   tx: TenantTx,
@@ -168,6 +162,12 @@ async function isOlderThanRecorded(
   return (rowCount ?? 0) > 0;
 }
 
+/**
+ * Records one mark from the work and applies it: a layer done or reopened on a surface, a
+ * percent complete or materials stored on a value line, the walkthrough held. The history row,
+ * the change and the request to check billing triggers commit together. A mark sent again with
+ * the same `clientKey` (a phone back online) changes nothing and answers the same.
+ */
 export async function recordProgress(
   tx: TenantTx,
   queue: JobQueue,
