@@ -19,3 +19,8 @@ export async function setPasswordHash(db: Queryable, userId: string, passwordHas
 export async function endStaffSessions(db: Queryable, userId: string): Promise<void> {
   await db.query('select auth_sessions_end_for_staff($1)', [userId]);
 }
+
+/** Ends a staff member's sessions in the caller's firm only (deactivation), in its transaction. */
+export async function endMemberSessions(db: Queryable, userId: string, tenantId: string): Promise<void> {
+  await db.query('select auth_sessions_end_for_member($1, $2)', [userId, tenantId]);
+}

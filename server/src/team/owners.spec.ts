@@ -88,6 +88,16 @@ describe('owners', () => {
     expect(await activeOwners(founder.firmId)).toBe(1);
   });
 
+  it('deactivated, are signed out of this firm: reactivated, they sign in again rather than find the old session working', async () => {
+    const { first, second, b } = await firmWithTwoOwners('Signed Out Plaster');
+    expect((await second.agent.get('/api/team/members')).status).toBe(200);
+    expect((await first.agent.post(`/api/team/members/${b.id}/deactivate`).set('x-csrf-token', first.csrf()).send({})).status).toBe(200);
+    expect((await first.agent.post(`/api/team/members/${b.id}/reactivate`).set('x-csrf-token', first.csrf()).send({})).status).toBe(200);
+    expect((await second.agent.get('/api/team/members')).status).toBe(401);
+    // the one who deactivated stays signed in
+    expect((await first.agent.get('/api/team/members')).status).toBe(200);
+  });
+
   it("set a member's language and get the member back as saved", async () => {
     const owner = await signUpFirm(t.app, 'Language Answer Plaster');
     const me = ((await owner.agent.get('/api/team/members')).body as ItemList<TeamMember>).items[0];

@@ -3,6 +3,7 @@ import type { InvitationCreate, ItemList, Language, MemberStatus, StaffRole, Tea
 import { and, desc, eq, firms, invitations, isNull, memberships, sql, TenantTx, users } from '@layerbook/db';
 import type { AppContext } from '../context';
 import { recordAudit } from '../audit/record';
+import { endMemberSessions } from '../auth/password-store';
 import { minutesFromNow, newToken } from '../auth/tokens';
 import type { StaffPrincipal } from '../http/principal';
 import { conflict, notFound } from '../http/problem';
@@ -137,7 +138,8 @@ export async function revokeInvitation(ctx: AppContext, tx: TenantTx, actor: Sta
  * Changes a member's role or status, never leaving the firm without an active owner: the firm's
  * memberships are locked first, so two owners removing each other at once cannot both pass the
  * check. Someone deactivated, or no longer an owner, loses the invitations they sent that are still
- * open (an owner could otherwise invite another address of theirs and come back through it).
+ * open (an owner could otherwise invite another address of theirs and come back through it); someone
+ * deactivated is signed out of this firm (their sessions in other firms stay).
  */
 export async function changeMember(
   tx: TenantTx,
@@ -160,6 +162,8 @@ export async function changeMember(
     .update(memberships)
     .set(change)
     .where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.id, membershipId)));
+  // Deactivated: signed out of this firm too, so reactivating does not bring old sessions back to life.
+  if (change.status === 'deactivated') await endMemberSessions(tx.client, target.userId, tx.tenantId);
   const losesInviting = change.status === 'deactivated' || (change.role !== undefined && change.role !== 'owner');
   if (losesInviting) {
     await tx.db
