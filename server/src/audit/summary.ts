@@ -119,6 +119,8 @@ const SAY: Readonly<Record<string, Say>> = {
   'takeoff.room_deleted': (d) => `Deleted room ${t(d, 'name')}`,
   'takeoff.surface_created': (d) => (d['copyOf'] ? 'Copied a surface' : 'Added a surface'),
   'takeoff.surface_deleted': (d) => `Deleted surface ${t(d, 'name')}`,
+  'takeoff.surface_updated': (d) => (d['shapeAfter'] ? `Measured a surface again${fieldsOf(d)}` : `Changed a surface${fieldsOf(d)}`),
+  'takeoff.room_updated': (d) => `Changed a room${fieldsOf(d)}`,
 };
 
 /** "finish_system.archived" → "Finish system archived"; "staff.secondFactorEnrolled" → "Staff second factor enrolled". */

@@ -38,6 +38,26 @@ describe('library products', () => {
       containers: [{ price: '45.00' }, { price: '16.00' }],
     });
     expect((await o.agent.get(`/api/library/products/${made.body.id}`)).body.name).toBe('Bonding primer');
+    // a price change keeps the containers before and after in the trail, not only that they changed
+    const repriced = await o.agent
+      .patch(`/api/library/products/${made.body.id}`)
+      .set('x-csrf-token', o.csrf())
+      .send({ containers: [{ label: '1 gal', size: 1, unit: 'gallon', price: '48.00' }] });
+    expect(repriced.status).toBe(200);
+    const [entry] = await withTenant(
+      t.ctx.pool,
+      o.firmId,
+      async (tx) =>
+        (
+          await tx.client.query<{ data: { containersBefore: Array<{ price: string }>; containersAfter: Array<{ price: string }> } }>(
+            `select data from audit_log where action = 'product.updated' and data ? 'containersAfter'`,
+          )
+        ).rows,
+    );
+    expect([entry.data.containersBefore.map((c) => c.price), entry.data.containersAfter.map((c) => c.price)]).toEqual([
+      ['45.00', '16.00'],
+      ['48.00'],
+    ]);
     expect((await o.agent.get('/api/library/products')).body.items.map((p: { name: string }) => p.name)).toEqual(['Bonding primer']);
   });
 

@@ -86,7 +86,11 @@ export async function updateProduct(tx: TenantTx, actor: Actor, id: string, patc
     action: 'product.updated',
     entity: 'product',
     entityId: id,
-    data: { changed: Object.keys(patch) },
+    // Prices follow from the containers: the trail keeps them before and after, not only that they changed.
+    data: {
+      changed: Object.keys(patch),
+      ...(patch.containers ? { containersBefore: current.containers, containersAfter: merged.containers } : {}),
+    },
   });
   return toProductView(row, canSeeMoney(actor));
 }

@@ -56,8 +56,8 @@ export function takeoffRoutes(ctx: AppContext): Router {
   });
 
   router.patch('/rooms/:id', async (req, res) => {
-    const room = await withStaff(ctx, req, 'office', (tx) =>
-      updateRoom(tx, parse(roomParam, req.params).id, parseChanges(roomUpdate, req.body), ctx.now()),
+    const room = await withStaff(ctx, req, 'office', (tx, staff) =>
+      updateRoom(tx, staffActor(staff), parse(roomParam, req.params).id, parseChanges(roomUpdate, req.body), ctx.now()),
     );
     res.json(room satisfies RoomView);
   });
@@ -83,8 +83,8 @@ export function takeoffRoutes(ctx: AppContext): Router {
   });
 
   router.patch('/surfaces/:id', async (req, res) => {
-    const surface = await withStaff(ctx, req, 'office', (tx) =>
-      updateSurface(tx, parse(surfaceParam, req.params).id, parseChanges(surfaceUpdate, req.body), ctx.now()),
+    const surface = await withStaff(ctx, req, 'office', (tx, staff) =>
+      updateSurface(tx, staffActor(staff), parse(surfaceParam, req.params).id, parseChanges(surfaceUpdate, req.body), ctx.now()),
     );
     res.json(surface satisfies SurfaceView);
   });

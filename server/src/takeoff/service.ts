@@ -156,13 +156,20 @@ export async function addRoom(tx: TenantTx, actor: Actor, siteId: string, input:
   return toRoomView(row, [], await firmUnit(tx));
 }
 
-export async function updateRoom(tx: TenantTx, roomId: string, patch: RoomUpdate, now: Date): Promise<RoomView> {
+export async function updateRoom(tx: TenantTx, actor: Actor, roomId: string, patch: RoomUpdate, now: Date): Promise<RoomView> {
   const [row] = await tx.db
     .update(rooms)
     .set({ ...patch, updatedAt: now })
     .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)))
     .returning();
   if (!row) throw notFound('room');
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: 'takeoff.room_updated',
+    entity: 'room',
+    entityId: roomId,
+    data: { changed: Object.keys(patch) },
+  });
   return toRoomView(row, await roomSurfaces(tx, roomId), await firmUnit(tx));
 }
 
@@ -260,7 +267,7 @@ export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, inp
  * with it is converted to that unit too (50 ft² stays 4.65 m², never becomes 50 m²). Without a
  * shape, the stored one keeps its unit, and a disturbed area sent alone is read in that unit too.
  */
-export async function updateSurface(tx: TenantTx, surfaceId: string, patch: SurfaceUpdate, now: Date): Promise<SurfaceView> {
+export async function updateSurface(tx: TenantTx, actor: Actor, surfaceId: string, patch: SurfaceUpdate, now: Date): Promise<SurfaceView> {
   const current = await findSurface(tx, surfaceId);
   const shape = patch.shape ?? toSurfaceView(current).shape;
   const measure = measureOrReject(shape);
@@ -285,6 +292,19 @@ export async function updateSurface(tx: TenantTx, surfaceId: string, patch: Surf
     })
     .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)))
     .returning();
+  // Measurements drive quantities and prices: the trail keeps a changed shape and disturbed area before and after.
+  const before = toSurfaceView(current);
+  await recordAudit(tx, {
+    ...auditedBy(actor),
+    action: 'takeoff.surface_updated',
+    entity: 'surface',
+    entityId: surfaceId,
+    data: {
+      changed: Object.keys(patch),
+      ...(patch.shape ? { shapeBefore: before.shape, unitBefore: current.lengthUnit, shapeAfter: patch.shape, unitAfter: unit } : {}),
+      ...(disturbed !== stored ? { disturbedBefore: stored, disturbedAfter: disturbed } : {}),
+    },
+  });
   return toSurfaceView(row);
 }
 

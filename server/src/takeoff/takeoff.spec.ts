@@ -293,6 +293,9 @@ describe('site takeoff', () => {
       'takeoff.room_deleted': 1,
       'takeoff.surface_created': 3,
       'takeoff.surface_deleted': 1,
+      // a room renamed, a surface re-measured (its shape before and after kept)
+      'takeoff.room_updated': 1,
+      'takeoff.surface_updated': 1,
     });
     expect(actions.find((a) => a.action === 'takeoff.room_deleted').data).toMatchObject({ name: 'Front stair hall', surfacesDeleted: 2 });
   });

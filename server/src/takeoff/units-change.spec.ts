@@ -1,4 +1,5 @@
 import type { FirmSettings, SurfaceView, TakeoffView } from '@layerbook/contracts';
+import { withTenant } from '@layerbook/db';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
 
 let t: TestServer;
@@ -46,6 +47,22 @@ describe('a surface re-measured after the firm went metric', () => {
     // 50 ft² = 4.645152 m² (1 ft² = 0.09290304 m², NIST SP 811 B.8), kept to the column's hundredths
     expect(walls.lengthUnit).toBe('m');
     expect(walls.disturbedPaintedArea).toBe(4.65);
+    // measurements drive prices: the trail keeps them before and after
+    const [entry] = await withTenant(
+      t.ctx.pool,
+      o.firmId,
+      async (tx) =>
+        (await tx.client.query<{ data: Record<string, unknown> }>(`select data from audit_log where action = 'takeoff.surface_updated'`))
+          .rows,
+    );
+    expect(entry.data).toMatchObject({
+      shapeBefore: { kind: 'walls', perimeter: 40, height: 8 },
+      unitBefore: 'ft',
+      shapeAfter: { kind: 'walls', perimeter: 12.192, height: 2.5 },
+      unitAfter: 'm',
+      disturbedBefore: 50,
+      disturbedAfter: 4.65,
+    });
   });
 
   it('on a bigger wall too: it is not read as square metres and grown tenfold', async () => {
