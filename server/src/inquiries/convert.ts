@@ -21,7 +21,8 @@ export async function convertInquiry(tx: TenantTx, actor: Actor, id: string, inp
 
   // Filed without a choice (a bare convert, or a stage that files by itself): a client with the same
   // e-mail is the same person, so the inquiry joins that client instead of making a second one.
-  let clientId = input.clientId ?? inq.clientId ?? (input.client ? null : await soleClientWithEmail(tx, inq.email));
+  // What was asked wins: a client chosen, then a new one described; only then the inquiry's own.
+  let clientId = input.clientId ?? (input.client ? null : (inq.clientId ?? (await soleClientWithEmail(tx, inq.email))));
   if (clientId) {
     const found = await tx.db
       .select({ id: clients.id })
@@ -44,7 +45,8 @@ export async function convertInquiry(tx: TenantTx, actor: Actor, id: string, inp
     clientId = made.id;
   }
 
-  let siteId = input.siteId ?? inq.siteId ?? null;
+  // The inquiry's site goes with its client: filed under another client, it takes that client's site or a new one.
+  let siteId = input.siteId ?? (input.site ? null : clientId === inq.clientId ? inq.siteId : null);
   if (siteId) {
     const found = await tx.db
       .select({ id: sites.id })

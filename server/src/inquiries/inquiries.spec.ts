@@ -195,6 +195,39 @@ describe('inquiries in admin', () => {
     expect(conversion.body).toEqual({ clientId: moved.body.clientId, siteId: moved.body.siteId });
   });
 
+  it('files an inquiry again as asked: under another client it takes a new site, not the old client’s; "both" is refused naming the field', async () => {
+    const o = await firmWithSlug('Refile Plaster');
+    const made = await o.agent
+      .post('/api/inquiries')
+      .set('x-csrf-token', o.csrf())
+      .send({ contactName: 'Mae Orr', source: 'phone', siteAddress: '9 Quarry Row' });
+    const first = (await o.agent.post(`/api/inquiries/${made.body.id}/convert`).set('x-csrf-token', o.csrf()).send({})).body as {
+      clientId: string;
+      siteId: string;
+    };
+    const other = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: 'Orr Holdings' });
+    // another client chosen: the inquiry does not drag the first client's site along (that was a 400 on a siteId never sent)
+    const moved = await o.agent
+      .post(`/api/inquiries/${made.body.id}/convert`)
+      .set('x-csrf-token', o.csrf())
+      .send({ clientId: other.body.id });
+    expect(moved.status).toBe(200);
+    expect(moved.body.clientId).toBe(other.body.id);
+    expect(moved.body.siteId).not.toBe(first.siteId);
+    // a new client described is made, not ignored because the inquiry is filed already
+    const described = await o.agent
+      .post(`/api/inquiries/${made.body.id}/convert`)
+      .set('x-csrf-token', o.csrf())
+      .send({ client: { kind: 'homeowner', isCompany: false, name: 'Mae Orr Jr', email: '', phone: '', notes: '' } });
+    expect(described.status).toBe(200);
+    expect([first.clientId, other.body.id]).not.toContain(described.body.clientId);
+    const both = await o.agent
+      .post(`/api/inquiries/${made.body.id}/convert`)
+      .set('x-csrf-token', o.csrf())
+      .send({ clientId: other.body.id, client: { kind: 'homeowner', isCompany: false, name: 'X', email: '', phone: '', notes: '' } });
+    expect([both.status, both.body.errors?.map((e: { field: string }) => e.field)]).toEqual([400, ['client']]);
+  });
+
   it('answers the board as a list of stages in order, each with its count and cards', async () => {
     const o = await firmWithSlug('Board Plaster');
     const made = await o.agent.post('/api/inquiries').set('x-csrf-token', o.csrf()).send({ contactName: 'Card One', source: 'phone' });

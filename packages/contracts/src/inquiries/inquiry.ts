@@ -147,12 +147,20 @@ export const stageLikelihoodUpdate = requestSchema<StageLikelihoodUpdate>()(
 
 /** Booking a visit or winning: make or link the client and site from the inquiry without retyping. */
 export const inquiryConvert = requestSchema<InquiryConvert>()(
-  z.strictObject({
-    clientId: uuid('client').optional(),
-    client: clientCreate.optional(),
-    siteId: uuid('site').optional(),
-    site: siteCreate.optional(),
-  }),
+  z
+    .strictObject({
+      clientId: uuid('client').optional(),
+      client: clientCreate.optional(),
+      siteId: uuid('site').optional(),
+      site: siteCreate.optional(),
+    })
+    // One way each: an existing one by id, or a new one; both at once would leave one quietly unused.
+    .superRefine((v, ctx) => {
+      if (v.clientId !== undefined && v.client !== undefined)
+        ctx.addIssue({ code: 'custom', path: ['client'], message: 'Choose an existing client or describe a new one, not both.' });
+      if (v.siteId !== undefined && v.site !== undefined)
+        ctx.addIssue({ code: 'custom', path: ['site'], message: 'Choose an existing site or describe a new one, not both.' });
+    }),
 );
 
 export const inquiryIdParam = z.strictObject({ id: uuid('inquiry id') });
