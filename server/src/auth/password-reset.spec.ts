@@ -1,7 +1,7 @@
 import { eq, passwordResets, users, withGlobal } from '@layerbook/db';
 import { linkIn } from '../testing/inbox';
 import { newAgent, signUpFirm, startTestServer, TestServer } from '../testing/harness';
-import { RESET_MINUTES } from './password-reset';
+import { LINKS_PER_HOUR, RESET_MINUTES } from './password-reset';
 import { minutesFromNow, newToken } from './tokens';
 
 let t: TestServer;
@@ -52,5 +52,22 @@ describe('password reset links: only the newest works, and a completed reset voi
 
     expect((await completeReset(token, 'a-brand-new-pass-42')).status).toBe(200);
     expect((await completeReset(other.token, 'a-brand-new-pass-43')).status).toBe(410);
+  });
+});
+
+describe('reset links for one person', () => {
+  it('stop after a few an hour, however many are asked for (the answer is the same 202)', async () => {
+    const { email } = await signUpFirm(t.app);
+    const seen: string[] = [];
+    for (let i = 0; i < LINKS_PER_HOUR; i++) seen.push(await askForReset(email, seen));
+    const { agent, csrf } = await newAgent(t.app);
+    expect((await agent.post('/api/auth/password-reset').set('x-csrf-token', csrf()).send({ email })).status).toBe(202);
+    // the lookup runs after the answer: give it time, then count the person's links
+    await new Promise((resolve) => setTimeout(resolve, 300));
+    const rows = await withGlobal(t.ctx.pool, async (tx) => {
+      const [user] = await tx.db.select({ id: users.id }).from(users).where(eq(users.email, email));
+      return tx.db.select({ id: passwordResets.id }).from(passwordResets).where(eq(passwordResets.userId, user.id));
+    });
+    expect(rows).toHaveLength(LINKS_PER_HOUR);
   });
 });

@@ -23,6 +23,8 @@ import { firstActivePrincipal } from './staff-auth';
 import { hashToken, minutesFromNow, newToken } from './tokens';
 
 export const RESET_MINUTES = 30;
+/** E-mailed sign-in and reset links per person an hour (common practice, no source). */
+export const LINKS_PER_HOUR = 5;
 
 /** Always succeeds from the caller's point of view, so it never reveals which e-mails have accounts. */
 export async function requestPasswordReset(ctx: AppContext, email: string): Promise<void> {
@@ -41,6 +43,13 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
   const tenantId = memberships[0]?.tenantId;
   if (!tenantId) return;
   await withTenant(ctx.pool, tenantId, async (tx) => {
+    // Someone asking for a stranger's address from many places must not fill that inbox: a few links
+    // an hour per person, then nothing more (the answer was the same 202 before this ran).
+    const recent = await tx.client.query<{ n: number }>(
+      `select count(*)::int as n from password_resets where user_id = $1 and created_at > now() - interval '1 hour'`,
+      [user.id],
+    );
+    if (recent.rows[0].n >= LINKS_PER_HOUR) return;
     // Only the newest link works: asking again voids every earlier one still open.
     await voidOpenResets(tx.db, user.id, ctx.now());
     const { token, hash } = newToken();
