@@ -121,24 +121,12 @@ import { TranslatePipe } from '@ngx-translate/core';
      * its buttons — with no sideways scroll. The header row is still read aloud.
      */
     @media (max-width: 599.98px) {
-      @include tables.rows-as-cards('table');
-      table {
-        min-width: 0;
-      }
+      @include tables.table-as-cards;
       tbody tr {
         display: grid;
         grid-template-columns: auto 1fr;
         align-items: baseline;
         gap: 0.2rem 0.6rem;
-        padding: 0.75rem 1rem;
-        border-bottom: 1px solid var(--mat-sys-outline-variant);
-      }
-      tbody tr:last-child {
-        border-bottom: 0;
-      }
-      tbody th {
-        font-weight: 600;
-        overflow-wrap: anywhere;
       }
       tbody td.num {
         text-align: left;
