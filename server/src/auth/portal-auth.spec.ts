@@ -1,4 +1,6 @@
-import { portalUsers, withTenant } from '@layerbook/db';
+import { eq, portalUsers, withTenant } from '@layerbook/db';
+import { LINKS_PER_HOUR } from './password-reset';
+import { createPortalLink } from './portal-auth';
 import { linkIn } from '../testing/inbox';
 import { newAgent, signUpFirm, startTestServer, TestServer, uniqueEmail } from '../testing/harness';
 
@@ -90,6 +92,31 @@ describe('portal sign-in by e-mailed one-time link', () => {
           .send({ token: 'x'.repeat(43) })
       ).status,
     ).toBe(404);
+  });
+
+  it('stops e-mailing asked-for links after a few an hour per client; links in the firm’s own mail do not count', async () => {
+    const firm = await signUpFirm(t.app, 'Capped Links Plaster');
+    const email = uniqueEmail('client');
+    await clientOf(firm.firmId, email);
+    const account = await withTenant(t.ctx.pool, firm.firmId, async (tx) => {
+      const [user] = await tx.db.select({ id: portalUsers.id }).from(portalUsers).where(eq(portalUsers.email, email));
+      // the firm sent proposals and invoices this hour, each with its link
+      for (let i = 0; i < LINKS_PER_HOUR; i++) await createPortalLink(tx, user.id, new Date(), 60);
+      return user.id;
+    });
+    const asked = () =>
+      withTenant(t.ctx.pool, firm.firmId, (tx) =>
+        tx.client.query(`select id from portal_links where portal_user_id = $1 and asked`, [account]).then((r) => r.rowCount),
+      );
+    const c = await newAgent(t.app, 'portal');
+    for (let i = 1; i <= LINKS_PER_HOUR + 2; i++) {
+      expect((await c.agent.post('/api/portal/auth/link').set('x-csrf-token', c.csrf()).send({ email })).status).toBe(202);
+      // the lookup runs after the answer: wait for its link (or, past the cap, give it time)
+      const want = Math.min(i, LINKS_PER_HOUR);
+      for (let tries = 0; tries < 50 && (await asked()) !== want; tries++) await new Promise((r) => setTimeout(r, 20));
+      if (i > LINKS_PER_HOUR) await new Promise((r) => setTimeout(r, 300));
+      expect([i, await asked()]).toEqual([i, want]);
+    }
   });
 
   it('keeps signed-out clients out of their projects', async () => {

@@ -18,6 +18,7 @@ import type { Pool } from 'pg';
 import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
 import { gone, notFound } from '../http/problem';
+import { LINKS_PER_HOUR } from './password-reset';
 import { enqueueMail } from '../mail/outbox';
 import { portalUserReader } from '../i18n/reader';
 import { portalLinkMail } from '../mail/templates';
@@ -39,7 +40,15 @@ export async function requestPortalLink(ctx: AppContext, email: string, next?: s
       const user = (await tx.db.select().from(portalUsers).where(eq(portalUsers.id, account.id)))[0];
       const firm = (await tx.db.select({ name: firms.name }).from(firms))[0];
       if (!user || !firm) return;
-      const { id: linkId, token } = await createPortalLink(tx, user.id, ctx.now(), PORTAL_LINK_MINUTES);
+      // Someone asking for a client's address from many places must not fill that inbox: a few asked-for
+      // links an hour per account, then nothing more (the answer was the same 202 before this ran). Links
+      // the firm's own mail carries (proposals, invoices) do not count.
+      const recent = await tx.client.query<{ n: number }>(
+        `select count(*)::int as n from portal_links where portal_user_id = $1 and asked and created_at > now() - interval '1 hour'`,
+        [user.id],
+      );
+      if (recent.rows[0].n >= LINKS_PER_HOUR) return;
+      const { id: linkId, token } = await createPortalLink(tx, user.id, ctx.now(), PORTAL_LINK_MINUTES, { asked: true });
       await enqueueMail(tx, ctx.queue, {
         purposeKey: `portal-link:${linkId}`,
         tenantId: tx.tenantId,
@@ -63,11 +72,12 @@ export async function createPortalLink(
   portalUserId: string,
   now: Date,
   minutes: number,
+  { asked = false }: { asked?: boolean } = {},
 ): Promise<{ id: string; token: string }> {
   const { token, hash } = newToken();
   const [link] = await tx.db
     .insert(portalLinks)
-    .values({ tenantId: tx.tenantId, portalUserId, tokenHash: hash, expiresAt: minutesFromNow(now, minutes) })
+    .values({ tenantId: tx.tenantId, portalUserId, tokenHash: hash, expiresAt: minutesFromNow(now, minutes), asked })
     .returning({ id: portalLinks.id });
   return { id: link.id, token };
 }

@@ -1,3 +1,4 @@
+import { sql } from 'drizzle-orm';
 import { boolean, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { createdAt, id, lookupPolicy, tenantId, tenantPolicy, updatedAt } from './columns';
 import { firms } from './firms';
@@ -104,10 +105,15 @@ export const portalLinks = pgTable(
     tokenHash: text('token_hash').notNull(),
     expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
     usedAt: timestamp('used_at', { withTimezone: true }),
+    /** The client asked for it on the sign-in page (capped an hour); false for links the firm's mail carries. */
+    asked: boolean('asked').notNull().default(false),
     createdAt: createdAt(),
   },
   (t) => [
     uniqueIndex('portal_links_token_hash_key').on(t.tokenHash),
+    index('portal_links_asked_idx')
+      .on(t.portalUserId, t.createdAt)
+      .where(sql`asked`),
     tenantPolicy('portal_links'),
     lookupPolicy('portal_links', 'token_hash', 'token_hash'),
   ],

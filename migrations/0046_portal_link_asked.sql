@@ -1,0 +1,2 @@
+ALTER TABLE "portal_links" ADD COLUMN "asked" boolean DEFAULT false NOT NULL;--> statement-breakpoint
+CREATE INDEX "portal_links_asked_idx" ON "portal_links" USING btree ("portal_user_id","created_at") WHERE asked;
