@@ -5,7 +5,7 @@ import Decimal from 'decimal.js';
 import { localDate } from '../firms/local-date';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
-import { recordPayment, type RecordedPayment } from '../payments/record-payment';
+import { findRecordedPayment, recordPayment, type RecordedPayment } from '../payments/record-payment';
 import { decimalsMessage, fitsCurrency, moneyOut } from './money';
 import { longDate } from '../i18n/long-date';
 
@@ -39,6 +39,17 @@ export async function recordOfflinePayment(
     )
   ).rows[0];
   if (!inv) throw notFound('invoice');
+  if (body.clientKey !== undefined) {
+    // Sent again (the first answer was lost): the first one counted; answer the same, whatever changed since.
+    // The invoice's row lock above makes a second copy wait here until the first has committed.
+    const earlier = await findRecordedPayment(tx, { clientKey: body.clientKey });
+    if (earlier && earlier.invoiceId !== id) {
+      throw conflict('This payment’s key was already used for another invoice.', [
+        { field: 'clientKey', message: 'Use a new key for each payment.' },
+      ]);
+    }
+    if (earlier) return { ...earlier, invoiceStatus: inv.status as RecordedPayment['invoiceStatus'], alreadyRecorded: true };
+  }
   // A refunded invoice is owed again: money received for it may be recorded anew.
   if (inv.status !== 'issued' && inv.status !== 'part_paid' && inv.status !== 'refunded') {
     throw conflict(
@@ -60,6 +71,7 @@ export async function recordOfflinePayment(
     currency: inv.currency,
     receivedOn: body.receivedOn,
     reference: body.reference,
+    clientKey: body.clientKey,
   });
 }
 

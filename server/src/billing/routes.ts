@@ -111,8 +111,9 @@ export function invoiceRoutes(ctx: AppContext): Router {
     const detail = await withStaff(ctx, req, 'office', async (tx, staff) => {
       const { id } = parse(idParam, req.params);
       const recorded = await recordOfflinePayment(tx, staffActor(staff), id, parse(offlinePaymentCreate, req.body), ctx.now());
-      // The client's receipt goes out through the outbox with the payment (a client without an e-mail gets none).
-      await enqueueReceiptMail(tx, deps, { kind: 'payment', id: recorded.paymentId });
+      // The client's receipt goes out through the outbox with the payment (a client without an e-mail gets none);
+      // a payment sent again was mailed the first time.
+      if (!recorded.alreadyRecorded) await enqueueReceiptMail(tx, deps, { kind: 'payment', id: recorded.paymentId });
       return getInvoice(tx, id, ctx.now());
     });
     res.json(detail satisfies InvoiceDetail);

@@ -18,6 +18,8 @@ export interface PaymentInput {
   /** card payments: the processor's checkout session (unique: a second fulfilment finds the first) */
   readonly processorSessionId?: string;
   readonly processorPaymentIntentId?: string;
+  /** offline payments: the office form's key (unique per firm) */
+  readonly clientKey?: string;
 }
 
 export interface RecordedPayment {
@@ -59,7 +61,7 @@ export async function recordPayment(tx: TenantTx, actor: Actor, input: PaymentIn
   ).rows[0];
   if (!inv) throw notFound('invoice');
   if (input.processorSessionId) {
-    const earlier = await findSessionPayment(tx, input.processorSessionId);
+    const earlier = await findRecordedPayment(tx, { sessionId: input.processorSessionId });
     if (earlier) return { ...earlier, invoiceStatus: inv.status, alreadyRecorded: true };
   }
   const amount = new Decimal(input.amount);
@@ -70,8 +72,8 @@ export async function recordPayment(tx: TenantTx, actor: Actor, input: PaymentIn
   const receiptNo = await nextDocumentNumber(tx, 'receipt');
   const inserted = await tx.client.query<{ id: string }>(
     `insert into payments (tenant_id, invoice_id, client_id, method, amount, amount_applied, currency, received_on, reference,
-                           receipt_no, processor_session_id, processor_payment_intent_id, created_by)
-     values ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13) returning id`,
+                           receipt_no, processor_session_id, processor_payment_intent_id, client_key, created_by)
+     values ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13, $14) returning id`,
     [
       tx.tenantId,
       input.invoiceId,
@@ -85,6 +87,7 @@ export async function recordPayment(tx: TenantTx, actor: Actor, input: PaymentIn
       receiptNo,
       input.processorSessionId ?? null,
       input.processorPaymentIntentId ?? null,
+      input.clientKey ?? null,
       actor.userId,
     ],
   );
@@ -139,18 +142,21 @@ export async function recordPayment(tx: TenantTx, actor: Actor, input: PaymentIn
   };
 }
 
-async function findSessionPayment(
+/** A payment already recorded for a card checkout session, or for an office form's key; null when none. */
+export async function findRecordedPayment(
   tx: TenantTx,
-  sessionId: string,
-): Promise<Omit<RecordedPayment, 'invoiceStatus' | 'alreadyRecorded'> | null> {
-  const { rows } = await tx.client.query<{ id: string; receipt_no: number; amount: string; amount_applied: string }>(
-    `select id, receipt_no, amount::text as amount, amount_applied::text as amount_applied from payments
-      where tenant_id = $1 and processor_session_id = $2`,
-    [tx.tenantId, sessionId],
+  by: { sessionId: string } | { clientKey: string },
+): Promise<(Omit<RecordedPayment, 'invoiceStatus' | 'alreadyRecorded'> & { invoiceId: string }) | null> {
+  const [column, value] = 'sessionId' in by ? ['processor_session_id', by.sessionId] : ['client_key', by.clientKey];
+  const { rows } = await tx.client.query<{ id: string; invoice_id: string; receipt_no: number; amount: string; amount_applied: string }>(
+    `select id, invoice_id, receipt_no, amount::text as amount, amount_applied::text as amount_applied from payments
+      where tenant_id = $1 and ${column} = $2`,
+    [tx.tenantId, value],
   );
   const p = rows[0];
   if (!p) return null;
   return {
+    invoiceId: p.invoice_id,
     paymentId: p.id,
     receiptNumber: receiptNumber(p.receipt_no) as string,
     applied: new Decimal(p.amount_applied).toFixed(2),

@@ -228,6 +228,8 @@ export interface OfflinePaymentCreate {
   readonly amount: string;
   readonly receivedOn: string;
   readonly reference: string;
+  /** made once per form: the same payment sent again (a retry after a lost answer) is recorded once */
+  readonly clientKey?: string;
 }
 
 export const INVOICE_LIST_FILTERS = ['all', 'drafts', 'open', 'overdue', 'paid', 'refunded', 'void'] as const;
@@ -242,7 +244,7 @@ export const INVOICE_LIST_FILTER_LABELS: Readonly<Record<InvoiceListFilter, stri
   void: 'Void',
 };
 
-export const INVOICE_LIMITS = { notesMaxLength: 2000, reasonMaxLength: 500, referenceMaxLength: 120 } as const;
+export const INVOICE_LIMITS = { notesMaxLength: 2000, reasonMaxLength: 500, referenceMaxLength: 120, clientKeyMaxLength: 100 } as const;
 
 /** GET /api/billing/today — the money part of Today (owner, office). */
 export interface BillingToday {

@@ -77,6 +77,11 @@ export const offlinePaymentCreate = requestSchema<OfflinePaymentCreate>()(
     amount: moneyAmount,
     receivedOn: isoDate,
     reference: text(L.referenceMaxLength, 'The reference'),
+    clientKey: z
+      .string({ error: 'The payment key must be text.' })
+      .min(1, { error: 'The payment key cannot be empty.' })
+      .max(L.clientKeyMaxLength, { error: `Use at most ${L.clientKeyMaxLength} characters.` })
+      .optional(),
   }),
 );
 

@@ -39,6 +39,8 @@ export const payments = pgTable(
     receiptNo: integer('receipt_no'),
     processorSessionId: text('processor_session_id'),
     processorPaymentIntentId: text('processor_payment_intent_id'),
+    /** offline payments: the key the office's form made once; a second request with it finds the first */
+    clientKey: text('client_key'),
     createdBy: uuid('created_by').references(() => users.id),
     createdAt: createdAt(),
   },
@@ -48,6 +50,9 @@ export const payments = pgTable(
     uniqueIndex('payments_processor_session_uq')
       .on(t.processorSessionId)
       .where(sql`processor_session_id is not null`),
+    uniqueIndex('payments_client_key_uq')
+      .on(t.tenantId, t.clientKey)
+      .where(sql`client_key is not null`),
     uniqueIndex('payments_receipt_uq')
       .on(t.tenantId, t.receiptNo)
       .where(sql`receipt_no is not null`),

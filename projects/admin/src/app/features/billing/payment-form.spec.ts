@@ -43,6 +43,12 @@ describe('the payment form', () => {
     await submit();
     const post = http.expectOne({ method: 'POST', url: '/api/invoices/inv-2/payments' });
     expect(post.request.body).toMatchObject({ method: 'transfer', amount: '200.00', reference: '' });
-    post.flush(issued);
+    // the answer is lost: pressed again, the same payment goes with the same key (the API records it once)
+    post.flush({ detail: 'Gateway timeout' }, { status: 504, statusText: 'Gateway Timeout' });
+    await submit();
+    const again = http.expectOne({ method: 'POST', url: '/api/invoices/inv-2/payments' });
+    expect(again.request.body.clientKey).toMatch(/^[0-9a-f-]{36}$/);
+    expect(again.request.body.clientKey).toBe(post.request.body.clientKey);
+    again.flush(issued);
   });
 });

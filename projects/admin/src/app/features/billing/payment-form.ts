@@ -8,6 +8,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { INVOICE_LIMITS, type InvoiceDetail, type OfflinePaymentCreate } from '@layerbook/contracts/types';
 import { formatMoney } from '@layerbook/domain';
+import { newClientKey } from '../../shared/client-key';
 import { errorText } from '../../shared/forms/error-text';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { Session } from '../../core/auth/session';
@@ -113,6 +114,8 @@ export class PaymentForm {
   protected readonly isHydrated = hydratedSignal();
   protected readonly submission = new Submission();
   protected readonly errorText = errorText;
+  /** made once per form: a payment sent again after a lost answer is recorded once (the API finds the first) */
+  private readonly clientKey = newClientKey();
   /** money is recorded once received: the firm's today at the latest (the API allows its tomorrow too) */
   protected readonly today = firmToday(inject(Session).user()?.timeZone);
   protected readonly words = {
@@ -159,6 +162,12 @@ export class PaymentForm {
 
   private toPayment(): OfflinePaymentCreate {
     const { method, amount, receivedOn, reference } = this.form.getRawValue();
-    return { method, amount: toAmount(amount) ?? '', receivedOn: toIsoDate(receivedOn) ?? '', reference: reference.trim() };
+    return {
+      method,
+      amount: toAmount(amount) ?? '',
+      receivedOn: toIsoDate(receivedOn) ?? '',
+      reference: reference.trim(),
+      clientKey: this.clientKey,
+    };
   }
 }

@@ -41,8 +41,3 @@ export class JobBillingApi {
     return firstValueFrom(this.http.post<InvoiceDetail>(this.url(jobId, 'invoices'), draft));
   }
 }
-
-/** A fresh key per click, so a double-sent mark is recorded once (the server dedups by it). */
-export function newClientKey(): string {
-  return crypto.randomUUID();
-}

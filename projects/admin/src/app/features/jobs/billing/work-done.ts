@@ -13,7 +13,8 @@ import { DATE_YEAR_WORDS, dateYearInRange, toIsoDate } from '../../../shared/for
 import { Submission } from '../../../shared/forms/submission';
 import { CalendarDatePipe } from '../../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../../shared/ui/form-alert';
-import { JobBillingApi, newClientKey } from './job-billing-api';
+import { newClientKey } from '../../../shared/client-key';
+import { JobBillingApi } from './job-billing-api';
 import { groupWork } from './work-groups';
 import { TranslatePipe } from '@ngx-translate/core';
 

@@ -132,12 +132,3 @@ function isQueuedMark(value: unknown): value is QueuedMark {
     (m['problem'] === undefined || typeof m['problem'] === 'string')
   );
 }
-
-/** A random (version 4) UUID; `crypto.randomUUID` only exists on secure pages, `getRandomValues` everywhere. */
-export function newClientKey(random: (bytes: Uint8Array) => Uint8Array = (bytes) => crypto.getRandomValues(bytes)): string {
-  const b = random(new Uint8Array(16));
-  b[6] = (b[6] & 0x0f) | 0x40;
-  b[8] = (b[8] & 0x3f) | 0x80;
-  const hex = Array.from(b, (x) => x.toString(16).padStart(2, '0')).join('');
-  return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
-}

@@ -2,12 +2,12 @@ import { isPlatformBrowser } from '@angular/common';
 import { DestroyRef, Injectable, Injector, PLATFORM_ID, type Signal, computed, effect, inject, signal } from '@angular/core';
 import type { JobProgressView } from '@layerbook/contracts/types';
 import { Session } from '../../../../core/auth/session';
+import { newClientKey } from '../../../../shared/client-key';
 import {
   type LayerMarkKind,
   type QueuedMark,
   addMark,
   marksFor,
-  newClientKey,
   nextToSend,
   outcomeOf,
   problemText,

@@ -1,0 +1,2 @@
+ALTER TABLE "payments" ADD COLUMN "client_key" text;--> statement-breakpoint
+CREATE UNIQUE INDEX "payments_client_key_uq" ON "payments" USING btree ("tenant_id","client_key") WHERE client_key is not null;
