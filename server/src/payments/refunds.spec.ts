@@ -196,6 +196,28 @@ describe('concurrent refunds of one payment', () => {
   });
 });
 
+describe('a refund sent again with its key', () => {
+  it('is recorded once, one copy after another or at the same time; the key on another payment is 409 naming it', async () => {
+    const f = await issuedInvoice(t, 'Refund Key Plaster');
+    const paymentId = await f.payOffline('100.00');
+    const body = { amount: '30.00', method: 'cheque' as const, reference: '2010', clientKey: 'refund-form-1' };
+    const answers = [await f.refund(paymentId, body)];
+    answers.push(...(await Promise.all([1, 2].map(() => f.refund(paymentId, body)))));
+    expect(answers.map((a) => a.status)).toEqual([201, 201, 201]);
+    expect(new Set(answers.map((a) => (a.body as RefundView).id)).size).toBe(1);
+    expect(await f.money(paymentId)).toMatchObject({ refunded: '30.00', amountPaid: '70.00' });
+
+    const otherPayment = await f.payOffline('20.00', '1043');
+    const elsewhere = await f.refund(otherPayment, body);
+    expect([elsewhere.status, fieldOf(elsewhere.body)]).toEqual([409, 'clientKey']);
+    for (const clientKey of ['', 'k'.repeat(101)]) {
+      const bad = await f.refund(otherPayment, { ...body, clientKey });
+      expect([clientKey, bad.status, fieldOf(bad.body)]).toEqual([clientKey, 400, 'clientKey']);
+    }
+    expect(await f.money(otherPayment)).toMatchObject({ refunded: '0.00' });
+  });
+});
+
 describe('refunds and payments at once on one invoice', () => {
   it('five refunds and five cheques together: no deadlock, the books add up and the receipt numbers have no gap', async () => {
     const f = await issuedInvoice(t, 'Busy Counter Plaster', '300.00');

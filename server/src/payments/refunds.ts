@@ -63,6 +63,20 @@ export async function startRefund(
   ).rows[0]?.invoice_id;
   if (!invoiceId) throw notFound('payment');
   await tx.client.query(`select 1 from invoices where tenant_id = $1 and id = $2 for update`, [tx.tenantId, invoiceId]);
+  if (body.clientKey !== undefined) {
+    // Sent again (the first answer was lost): the first one counted; answer with it. The invoice's lock
+    // above makes a second copy wait here until the first has committed.
+    const { rows } = await tx.client.query<{ id: string; payment_id: string }>(
+      `select id, payment_id from refunds where tenant_id = $1 and client_key = $2`,
+      [tx.tenantId, body.clientKey],
+    );
+    if (rows[0] && rows[0].payment_id !== paymentId) {
+      throw conflict('This refund’s key was already used for another payment.', [
+        { field: 'clientKey', message: 'Use a new key for each refund.' },
+      ]);
+    }
+    if (rows[0]) return { kind: 'recorded', view: await readRefund(tx, rows[0].id) };
+  }
   const p = (
     await tx.client.query<LockedPayment>(
       `select p.invoice_id, p.client_id, p.method, p.amount::text as amount, p.amount_refunded::text as amount_refunded, p.currency,
@@ -85,8 +99,9 @@ export async function startRefund(
   if (!isCard) checkDate(p, refundedOn, today);
 
   const inserted = await tx.client.query<{ id: string }>(
-    `insert into refunds (tenant_id, payment_id, invoice_id, client_id, method, status, amount, currency, refunded_on, reason, reference, created_by)
-     values ($1, $2, $3, $4, $5, 'pending', $6, $7, $8, $9, $10, $11) returning id`,
+    `insert into refunds (tenant_id, payment_id, invoice_id, client_id, method, status, amount, currency, refunded_on, reason, reference,
+                          client_key, created_by)
+     values ($1, $2, $3, $4, $5, 'pending', $6, $7, $8, $9, $10, $11, $12) returning id`,
     [
       tx.tenantId,
       paymentId,
@@ -98,6 +113,7 @@ export async function startRefund(
       refundedOn,
       body.reason,
       isCard ? '' : (body.reference ?? ''),
+      body.clientKey ?? null,
       actor.userId,
     ],
   );

@@ -63,6 +63,8 @@ export interface RefundCreate {
   readonly refundedOn?: string;
   /** offline refunds: cheque number, transfer reference */
   readonly reference?: string;
+  /** made once per form: the same refund sent again (a retry after a lost answer) is recorded once */
+  readonly clientKey?: string;
 }
 
 /** A client's money kept beyond an invoice's amount due (an overpayment). */
@@ -107,7 +109,7 @@ export interface PortalReceipt {
   readonly currency: string;
 }
 
-export const PAYMENT_LIMITS = { reasonMaxLength: 500, referenceMaxLength: 120 } as const;
+export const PAYMENT_LIMITS = { reasonMaxLength: 500, referenceMaxLength: 120, clientKeyMaxLength: 100 } as const;
 
 /**
  * Why the card processor's word left something for a person: a payment taken in another amount or

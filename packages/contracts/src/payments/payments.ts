@@ -11,5 +11,10 @@ export const refundCreate = requestSchema<RefundCreate>()(
     reason: text(L.reasonMaxLength, 'The reason'),
     refundedOn: isoDate.optional(),
     reference: text(L.referenceMaxLength, 'The reference').optional(),
+    clientKey: z
+      .string({ error: 'The refund key must be text.' })
+      .min(1, { error: 'The refund key cannot be empty.' })
+      .max(L.clientKeyMaxLength, { error: `Use at most ${L.clientKeyMaxLength} characters.` })
+      .optional(),
   }),
 );

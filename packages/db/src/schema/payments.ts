@@ -90,6 +90,8 @@ export const refunds = pgTable(
     reason: text('reason').notNull().default(''),
     reference: text('reference').notNull().default(''),
     processorRefundId: text('processor_refund_id'),
+    /** the office form's key, made once: a second request with it finds the first */
+    clientKey: text('client_key'),
     failureMessage: text('failure_message'),
     receiptNo: integer('receipt_no'),
     createdBy: uuid('created_by').references(() => users.id),
@@ -101,6 +103,9 @@ export const refunds = pgTable(
     uniqueIndex('refunds_processor_uq')
       .on(t.processorRefundId)
       .where(sql`processor_refund_id is not null`),
+    uniqueIndex('refunds_client_key_uq')
+      .on(t.tenantId, t.clientKey)
+      .where(sql`client_key is not null`),
     uniqueIndex('refunds_receipt_uq')
       .on(t.tenantId, t.receiptNo)
       .where(sql`receipt_no is not null`),

@@ -65,7 +65,13 @@ describe('the refund dialog', () => {
     type('Why the money goes back', '  Less plaster needed ');
     await submit();
     const post = http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' });
-    expect(post.request.body).toEqual({ method: 'card', amount: '70', reason: 'Less plaster needed' });
+    // the dialog's key goes too: the same refund sent again after a lost answer is recorded once
+    expect(post.request.body).toEqual({
+      method: 'card',
+      amount: '70',
+      reason: 'Less plaster needed',
+      clientKey: expect.stringMatching(/^[0-9a-f-]{36}$/),
+    });
     post.flush(cardRefundPending, { status: 201, statusText: 'Created' });
     await new Promise((resolve) => setTimeout(resolve));
     expect(close).toHaveBeenCalledWith(cardRefundPending);
@@ -90,6 +96,7 @@ describe('the refund dialog', () => {
       reason: 'Paid twice',
       refundedOn: '2026-11-26',
       reference: 'Chq 000231',
+      clientKey: expect.stringMatching(/^[0-9a-f-]{36}$/),
     });
     post.flush(chequeRefund, { status: 201, statusText: 'Created' });
   });

@@ -11,6 +11,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
 import { PAYMENT_LIMITS, type PaymentDetail, type PaymentMethod, type RefundCreate, type RefundView } from '@layerbook/contracts/types';
 import { formatMoney } from '@layerbook/domain';
+import { newClientKey } from '../../shared/client-key';
 import { errorText } from '../../shared/forms/error-text';
 import { Session } from '../../core/auth/session';
 import { DATE_YEAR_WORDS, dateYearInRange, firmToday, fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
@@ -145,6 +146,9 @@ export class RefundDialog {
     });
   }
 
+  /** made once per dialog: a refund sent again after a lost answer is recorded once (the API finds the first) */
+  private readonly clientKey = newClientKey();
+
   protected async refund(): Promise<void> {
     const done = await this.submission.send(this.form, () => {
       this.sent.set(true);
@@ -155,7 +159,7 @@ export class RefundDialog {
 
   private toRefund(): RefundCreate {
     const { method, amount, refundedOn, reference, reason } = this.form.getRawValue();
-    const base = { method, amount: toAmount(amount) ?? '', reason: reason.trim() };
+    const base = { method, amount: toAmount(amount) ?? '', reason: reason.trim(), clientKey: this.clientKey };
     if (method === 'card') return base;
     const ref = reference.trim();
     return { ...base, refundedOn: toIsoDate(refundedOn) ?? '', ...(ref ? { reference: ref } : {}) };

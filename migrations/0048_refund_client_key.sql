@@ -1,0 +1,2 @@
+ALTER TABLE "refunds" ADD COLUMN "client_key" text;--> statement-breakpoint
+CREATE UNIQUE INDEX "refunds_client_key_uq" ON "refunds" USING btree ("tenant_id","client_key") WHERE client_key is not null;
