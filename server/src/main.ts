@@ -2,11 +2,11 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { migrateDatabase } from '@layerbook/db';
 import { Pool } from 'pg';
-import type { Logger } from 'pino';
 import { createApp } from './app';
 import { loadConfig } from './config';
 import { openReadPool, type AppContext } from './context';
 import { assertRlsBoundRole } from './db-roles';
+import { survivesDroppedConnections } from './db-connections';
 import { createLogger } from './http/logger';
 import { openObjectStore } from './files/object-store';
 import { metricsRegistry, startMetricsServer } from './health/metrics-server';
@@ -89,19 +89,6 @@ async function main(mode: 'web' | 'worker'): Promise<void> {
   };
   process.on('SIGTERM', () => void shutdown('SIGTERM'));
   process.on('SIGINT', () => void shutdown('SIGINT'));
-}
-
-/**
- * A connection PostgreSQL drops (a restart, a failover, an administrator's terminate) raises an
- * 'error' event: on the pool while the connection is idle there, on the client while it is checked
- * out between two queries (a transaction waiting on other work). With no listener either one crashes
- * the process; with one, the query under way fails (the request answers 503), the pool discards the
- * connection and opens a new one when next asked.
- */
-function survivesDroppedConnections(pool: Pool, logger: Logger): void {
-  const lost = (err: Error) => logger.warn({ dbError: err.message }, 'database connection lost');
-  pool.on('error', lost);
-  pool.on('connect', (client) => client.on('error', lost));
 }
 
 main(process.argv[2] === 'worker' ? 'worker' : 'web').catch((error) => {

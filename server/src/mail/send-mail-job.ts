@@ -19,6 +19,7 @@ export function fromHeader(configured: string, fromName: string | null): string 
  */
 export async function sendOutboxMail(pool: Pool, transport: Transporter, from: string, job: MailSendJob, logger: Logger): Promise<void> {
   const client = await pool.connect();
+  let broken = false;
   try {
     await client.query('begin');
     const { rows } = await client.query(
@@ -54,12 +55,21 @@ export async function sendOutboxMail(pool: Pool, transport: Transporter, from: s
     await client.query('commit');
     logger.info({ outboxId: row.id }, 'mail sent');
   } catch (error) {
-    await client.query('rollback').catch(() => undefined);
-    await pool
-      .query(`update mail_outbox set attempts = attempts + 1, last_error = $2 where id = $1`, [job.outboxId, String(error)])
-      .catch(() => undefined);
+    // On the same connection: asking the pool for another while this one is held would deadlock once
+    // every handler fails at once (four sends, four connections, the SMTP server down).
+    const kept = await client
+      .query('rollback')
+      .then(() =>
+        client.query(`update mail_outbox set attempts = attempts + 1, last_error = $2 where id = $1`, [job.outboxId, String(error)]),
+      )
+      .then(
+        () => true,
+        () => false,
+      );
+    broken = !kept;
     throw error;
   } finally {
-    client.release();
+    // A connection that failed (dropped by the database) is thrown away, not put back.
+    client.release(broken);
   }
 }

@@ -1,6 +1,7 @@
 import nodemailer from 'nodemailer';
 import { Pool } from 'pg';
 import type { Logger } from 'pino';
+import { survivesDroppedConnections } from '../db-connections';
 import type { Config } from '../config';
 import { sendOutboxMail } from '../mail/send-mail-job';
 import { sendProposalReminders } from '../proposals/expiry-reminders';
@@ -50,8 +51,8 @@ async function workEach<T extends object>(
  */
 export async function startWorkers(config: Config, queue: StartedQueue, logger: Logger, now: () => Date): Promise<Workers> {
   const pool = new Pool({ connectionString: config.DATABASE_JOBS_URL, max: 4, application_name: 'layerbook-worker' });
-  // A connection the database drops while idle (restart, failover) is an 'error' event: logged, not a crash.
-  pool.on('error', (error) => logger.warn({ dbError: error.message }, 'idle database connection lost'));
+  // A connection the database drops (restart, failover), idle or held by a job mid-send: logged, not a crash.
+  survivesDroppedConnections(pool, logger);
   const transport = nodemailer.createTransport({ host: config.SMTP_HOST, port: config.SMTP_PORT, secure: false, ignoreTLS: true });
   const { boss } = queue;
   await workEach<MailSendJob>(queue, QUEUES.mailSend, 4, (data) => sendOutboxMail(pool, transport, config.MAIL_FROM, data, logger));
