@@ -45,7 +45,17 @@ export const QUEUE_OPTIONS: ReadonlyArray<{ name: QueueName; options: Omit<PgBos
   },
   {
     name: QUEUES.billingDaily,
-    options: { retryLimit: 5, retryDelay: 30, retryBackoff: true, expireInSeconds: 600, retentionDays: 7, deadLetter: QUEUES.billingDead },
+    // one firm's day (singletonKey firm:localDate) at most once queued and once running at a time: a repeated
+    // sweep (its retry, an operator's rerun) queues no second copy beside the first
+    options: {
+      policy: 'stately',
+      retryLimit: 5,
+      retryDelay: 30,
+      retryBackoff: true,
+      expireInSeconds: 600,
+      retentionDays: 7,
+      deadLetter: QUEUES.billingDead,
+    },
   },
   {
     name: QUEUES.pruneExpired,
@@ -57,7 +67,15 @@ export const QUEUE_OPTIONS: ReadonlyArray<{ name: QueueName; options: Omit<PgBos
   },
   {
     name: QUEUES.followUpDigest,
-    options: { retryLimit: 5, retryDelay: 30, retryBackoff: true, expireInSeconds: 300, retentionDays: 7, deadLetter: QUEUES.followUpDead },
+    options: {
+      policy: 'stately',
+      retryLimit: 5,
+      retryDelay: 30,
+      retryBackoff: true,
+      expireInSeconds: 300,
+      retentionDays: 7,
+      deadLetter: QUEUES.followUpDead,
+    },
   },
   {
     name: QUEUES.mailSend,
