@@ -100,7 +100,8 @@ export async function draftLineInvoice(tx: TenantTx, request: LineDraftRequest):
 
 /**
  * The deposit credit on an invoice of a progress-billed job: the deposit invoiced so far is an
- * advance, taken off by the job's rule (pro rata or on the next invoices); the last invoice takes the rest.
+ * advance, taken off by the job's rule (pro rata of the work billed to date, or on the next invoices);
+ * the invoice that bills the contract sum in full, or the release, takes the rest.
  */
 export async function progressDepositCredit(
   tx: TenantTx,
@@ -109,9 +110,10 @@ export async function progressDepositCredit(
   isFinal: boolean,
   exceptInvoiceId: string | null,
 ): Promise<Decimal> {
-  const { rows } = await tx.client.query<{ deposit: string; credited: string }>(
+  const { rows } = await tx.client.query<{ deposit: string; credited: string; earned: string }>(
     `select coalesce(sum(total) filter (where kind = 'deposit'), 0)::text as deposit,
-            coalesce(sum(deposit_credit) filter (where kind <> 'deposit'), 0)::text as credited
+            coalesce(sum(deposit_credit) filter (where kind <> 'deposit'), 0)::text as credited,
+            coalesce(sum(subtotal) filter (where kind <> 'deposit'), 0)::text as earned
        from invoices where tenant_id = $1 and job_id = $2 and ${LIVE_ISSUED} and id is distinct from $3`,
     [tx.tenantId, job.id, exceptInvoiceId],
   );
@@ -121,6 +123,7 @@ export async function progressDepositCredit(
     rule: job.billing_terms.depositCredit,
     deposit,
     creditedBefore: Decimal.min(new Decimal(rows[0].credited), deposit),
+    earnedBefore: rows[0].earned,
     earnedThisInvoice: earned,
     contractSum: job.contract_sum,
     isFinal,

@@ -8,6 +8,7 @@ const base: DepositCreditInput = {
   rule: 'prorata',
   deposit: '1000.00',
   creditedBefore: '0',
+  earnedBefore: '0',
   earnedThisInvoice: '0',
   contractSum: '12000.00',
   isFinal: false,
@@ -16,19 +17,28 @@ const base: DepositCreditInput = {
 const credit = (over: Partial<DepositCreditInput>): string => depositCredit({ ...base, ...over }).toFixed(2);
 
 /** Credits over a run of invoices, the last one final, as the invoice service would chain them. */
-function creditsOver(rule: DepositCreditRule, deposit: Decimal, contractSum: Decimal, earned: readonly Decimal[]): Decimal[] {
+function creditsOver(
+  rule: DepositCreditRule,
+  deposit: Decimal,
+  contractSum: Decimal,
+  earned: readonly Decimal[],
+  { lastIsFinal = true } = {},
+): Decimal[] {
   let creditedBefore = new Decimal(0);
+  let earnedBefore = new Decimal(0);
   return earned.map((e, i) => {
     const c = depositCredit({
       rule,
       deposit,
       creditedBefore,
+      earnedBefore,
       earnedThisInvoice: e,
       contractSum,
-      isFinal: i === earned.length - 1,
+      isFinal: lastIsFinal && i === earned.length - 1,
       currency: 'USD',
     });
     creditedBefore = creditedBefore.plus(c);
+    earnedBefore = earnedBefore.plus(e);
     return c;
   });
 }
@@ -39,8 +49,23 @@ describe('deposit credited on progress invoices', () => {
   it.each<[string, Partial<DepositCreditInput>, string]>([
     // 1,000 × 4,000 / 12,000 = 333.333… → 333.33
     ['pro rata: a third of the work carries a third of the deposit', { earnedThisInvoice: '4000.00' }, '333.33'],
-    ['pro rata: 1,000 × 5,000 / 12,000 = 416.666… → 416.67', { earnedThisInvoice: '5000.00', creditedBefore: '333.33' }, '416.67'],
-    ['pro rata never passes what is left', { earnedThisInvoice: '6000.00', creditedBefore: '800.00' }, '200.00'],
+    // on totals to date: 1,000 × 9,000 / 12,000 = 750.00, less the 333.33 credited before
+    [
+      'pro rata: 1,000 × (4,000 + 5,000) / 12,000 − 333.33 = 416.67',
+      { earnedThisInvoice: '5000.00', earnedBefore: '4000.00', creditedBefore: '333.33' },
+      '416.67',
+    ],
+    [
+      'pro rata never passes what is left (an invoice past the contract sum)',
+      { earnedThisInvoice: '6000.00', earnedBefore: '9600.00', creditedBefore: '800.00' },
+      '200.00',
+    ],
+    // three thirds of 10,000 rounded each: 333.33 + 333.33 + 333.34 (not 333.33 three times, leaving a cent)
+    [
+      'pro rata: the invoice that bills the contract in full takes the rest',
+      { contractSum: '10000.00', earnedThisInvoice: '3333.34', earnedBefore: '6666.66', creditedBefore: '666.67' },
+      '333.33',
+    ],
     ['final takes the rest', { earnedThisInvoice: '3000.00', creditedBefore: '750.00', isFinal: true }, '250.00'],
     ['final takes the rest, capped at what it earns', { earnedThisInvoice: '100.00', creditedBefore: '750.00', isFinal: true }, '100.00'],
     ['next: all of it on the first invoice that can carry it', { rule: 'next', earnedThisInvoice: '4000.00' }, '1000.00'],
@@ -97,6 +122,35 @@ describe('deposit credited on progress invoices', () => {
         },
       ),
     );
+  });
+
+  it('pro rata with no final invoice: runs that bill the contract sum credit the deposit exactly, whatever the rounding (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 100, max: 100_000_000 }),
+        fc.integer({ min: 0, max: 10_000 }),
+        fc.array(fc.integer({ min: 1, max: 1_000 }), { minLength: 1, maxLength: 12 }),
+        (contractCents, depositBasisPoints, weights) => {
+          const contractSum = new Decimal(contractCents).div(100);
+          const deposit = contractSum.times(depositBasisPoints).div(10_000).toDecimalPlaces(2, Decimal.ROUND_DOWN);
+          const earned = allocateByWeights(contractSum, weights, 2);
+          const credits = creditsOver('prorata', deposit, contractSum, earned, { lastIsFinal: false });
+          credits.forEach((c, i) => expect(c.greaterThanOrEqualTo(0) && c.lessThanOrEqualTo(earned[i])).toBe(true));
+          expect(total(credits).equals(deposit)).toBe(true);
+        },
+      ),
+    );
+  });
+
+  it('pro rata follows a contract sum lowered by a change order: the deposit is still credited in full', () => {
+    // 10,000 contract, 1,000 deposit; half billed (500.00 credited), then a 4,000 deduction: 6,000 left to bill in all
+    const first = depositCredit({ ...base, contractSum: '10000.00', earnedThisInvoice: '5000.00' });
+    expect(first.toFixed(2)).toBe('500.00');
+    const after = (earnedThisInvoice: string, earnedBefore: string, creditedBefore: string) =>
+      depositCredit({ ...base, contractSum: '6000.00', earnedThisInvoice, earnedBefore, creditedBefore }).toFixed(2);
+    // 1,000 × 5,500 / 6,000 = 916.67, less 500.00
+    expect(after('500.00', '5000.00', '500.00')).toBe('416.67');
+    expect(after('500.00', '5500.00', '916.67')).toBe('83.33');
   });
 
   it('pro rata on a run that earns less than the contract leaves the rest of the deposit uncredited (the final invoice cannot go below zero)', () => {

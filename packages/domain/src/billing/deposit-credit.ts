@@ -5,9 +5,10 @@ import type { MoneyInput } from '../money/money';
 import { toCurrencyAmount } from './currency-amount';
 
 /**
- * How an advance deposit comes off later invoices: `prorata` — each invoice carries the deposit's
- * share of the work it bills (deposit × earned ÷ contract sum); `next` — as much as possible on the
- * next invoices until it is used up. Either way the final invoice takes whatever is left.
+ * How an advance deposit comes off later invoices: `prorata` — the deposit's share of the work billed
+ * to date (deposit × earned to date ÷ contract sum), less what earlier invoices credited; `next` — as
+ * much as possible on the next invoices until it is used up. Either way the invoice that bills the
+ * contract sum in full, or the final one, takes whatever is left.
  */
 export type DepositCreditRule = 'prorata' | 'next';
 
@@ -17,6 +18,8 @@ export interface DepositCreditInput {
   deposit: MoneyInput;
   /** deposit already credited on earlier invoices */
   creditedBefore: MoneyInput;
+  /** what earlier invoices billed for work (before their deposit credits) */
+  earnedBefore: MoneyInput;
   /** what this invoice bills for work (before the deposit credit); a negative correction earns nothing */
   earnedThisInvoice: MoneyInput;
   contractSum: MoneyInput;
@@ -34,11 +37,13 @@ export function depositCredit(input: DepositCreditInput): Decimal {
   const deposit = toCurrencyAmount(input.deposit, digits, 'deposit', 'deposit');
   const creditedBefore = toCurrencyAmount(input.creditedBefore, digits, 'creditedBefore', 'deposit already credited');
   const earned = Decimal.max(toCurrencyAmount(input.earnedThisInvoice, digits, 'earnedThisInvoice', 'amount earned', true), 0);
+  const earnedBefore = Decimal.max(toCurrencyAmount(input.earnedBefore, digits, 'earnedBefore', 'amount earned before', true), 0);
   const contractSum = toCurrencyAmount(input.contractSum, digits, 'contractSum', 'contract sum');
   if (creditedBefore.greaterThan(deposit)) {
     throw new DomainInputError('creditedBefore', 'More has been credited than the deposit.');
   }
   const remaining = deposit.minus(creditedBefore);
+  const earnedToDate = earnedBefore.plus(earned);
   let wanted: Decimal;
   if (input.isFinal || input.rule === 'next') {
     wanted = remaining;
@@ -46,7 +51,11 @@ export function depositCredit(input: DepositCreditInput): Decimal {
     if (contractSum.isZero()) {
       throw new DomainInputError('contractSum', 'A deposit credited pro rata needs a contract sum greater than zero.');
     }
-    wanted = deposit.times(earned).div(contractSum).toDecimalPlaces(digits, Decimal.ROUND_HALF_UP);
+    // On totals to date, so rounding never piles up and a contract sum changed by a change order is
+    // followed; the invoice that bills the contract sum in full takes the rest.
+    wanted = earnedToDate.greaterThanOrEqualTo(contractSum)
+      ? remaining
+      : deposit.times(earnedToDate).div(contractSum).toDecimalPlaces(digits, Decimal.ROUND_HALF_UP).minus(creditedBefore);
   } else {
     throw new DomainInputError('rule', 'A deposit is credited pro rata or on the next invoices.');
   }
