@@ -92,6 +92,13 @@ describe('payment schedule (common practice, DOMAIN.md §2.11)', () => {
     expectInputError(() => respreadSchedule(lines, '3000.00', 'USD'), 'contractSum', /already been billed/);
   });
 
+  it('a change order leaves a deposit not yet billed as it is (agreed at signing, held to its cap; common practice, no source)', () => {
+    const lines = buildPaymentSchedule('10000.00', thirds, 'USD');
+    const after = respreadSchedule(lines, '13200.00', 'USD');
+    // 13,200 − the 3,333 deposit = 9,867 split 3,333 : 3,334 over the other two
+    expect(amounts(after)).toEqual(['3333.00', '4932.76', '4934.24']);
+  });
+
   it('lines always sum to the contract, never go negative, and billed lines never move (property)', () => {
     fc.assert(
       fc.property(

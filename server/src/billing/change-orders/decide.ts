@@ -1,6 +1,6 @@
 import type { ChangeOrderDecision, JobStatus, PortalChangeOrder } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { DomainInputError, formatMoney, minorUnitDigits, respreadSchedule, type PaymentLine } from '@layerbook/domain';
+import { DomainInputError, formatMoney, minorUnitDigits, respreadSchedule, staysOnRespread, type PaymentLine } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../../audit/record';
 import type { AppContext } from '../../context';
@@ -188,9 +188,9 @@ export async function whyNotApprovable(tx: TenantTx, row: ChangeOrderRow): Promi
     return null;
   }
   const { rows: lines } = await tx.client.query<LineRow>(LINES_SQL, [tx.tenantId, row.job_id]);
-  if (lines.length > 0 && lines.every(isBilled)) {
+  if (lines.length > 0 && lines.every((l) => staysOnRespread(toPaymentLine(l)))) {
     return new Decimal(row.amount).isNegative()
-      ? 'every payment of this job is already billed, so a deduction cannot be spread (void or credit instead)'
+      ? 'every payment of this job but its deposit is already billed, so a deduction cannot be spread (void or credit instead)'
       : null;
   }
   try {
@@ -203,16 +203,16 @@ export async function whyNotApprovable(tx: TenantTx, row: ChangeOrderRow): Promi
 }
 
 /**
- * Spreads the new contract sum over the unbilled lines in proportion (billed lines never move);
- * when every line is billed, the change order becomes its own stage payment at the walkthrough,
+ * Spreads the new contract sum over the unbilled lines in proportion (billed lines and the deposit never
+ * move); when every other line is billed, the change order becomes its own stage payment at the walkthrough,
  * placed before the final line so the final payment stays last.
  */
 async function respreadLines(tx: TenantTx, row: ChangeOrderRow, job: JobMoneyRow, after: Decimal, now: Date): Promise<void> {
   const { rows: lines } = await tx.client.query<LineRow>(`${LINES_SQL} for update`, [tx.tenantId, row.job_id]);
   const digits = minorUnitDigits(job.currency);
-  if (lines.length > 0 && lines.every(isBilled)) {
+  if (lines.length > 0 && lines.every((l) => staysOnRespread(toPaymentLine(l)))) {
     if (new Decimal(row.amount).isNegative())
-      throw conflict('Every payment of this job is already billed, so a deduction cannot be spread; ask the firm for a credit.');
+      throw conflict('Every payment of this job but its deposit is already billed, so a deduction cannot be spread; ask the firm for a credit.');
     const final = lines.find((l) => l.role === 'final');
     const position = final ? final.position : Math.max(...lines.map((l) => l.position)) + 1;
     if (final)
