@@ -1,7 +1,7 @@
 import Decimal from 'decimal.js';
 import { DomainInputError } from '../errors/domain-input-error';
 import { toMoney, toNonNegativeMoney } from '../errors/input-checks';
-import { roundToCurrency } from '../money/money';
+import { minorUnitDigits } from '../money/currency';
 import type { MoneyInput } from '../money/money';
 import { type Ratio, toRatio } from '../pricing/ratio';
 
@@ -15,6 +15,10 @@ export type DepositCapRule =
   | { kind: 'share'; share: Ratio }
   | { kind: 'lesserOf'; amount: MoneyInput; share: Ratio };
 
+/** A share cap in money, rounded down: a deposit of the rounded-up cent would be over the share the law allows. */
+const shareOf = (contract: Decimal, share: Decimal, currency: string): Decimal =>
+  contract.times(share).toDecimalPlaces(minorUnitDigits(currency, 'currency'), Decimal.ROUND_DOWN);
+
 export function depositCap(rule: DepositCapRule, contractSum: MoneyInput, currency: string, field = 'depositCap'): Decimal | null {
   const contract = toNonNegativeMoney(contractSum, 'contractSum', 'contract sum');
   switch (rule.kind) {
@@ -23,11 +27,11 @@ export function depositCap(rule: DepositCapRule, contractSum: MoneyInput, curren
     case 'amount':
       return toNonNegativeMoney(rule.amount, `${field}.amount`);
     case 'share':
-      return roundToCurrency(contract.times(toRatio(rule.share, `${field}.share`, 'share')), currency);
+      return shareOf(contract, toRatio(rule.share, `${field}.share`, 'share'), currency);
     case 'lesserOf':
       return Decimal.min(
         toNonNegativeMoney(rule.amount, `${field}.amount`),
-        roundToCurrency(contract.times(toRatio(rule.share, `${field}.share`, 'share')), currency),
+        shareOf(contract, toRatio(rule.share, `${field}.share`, 'share'), currency),
       );
     default:
       throw new DomainInputError(`${field}.kind`, 'Unknown deposit rule.');

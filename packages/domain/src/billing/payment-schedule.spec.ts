@@ -78,6 +78,10 @@ describe('payment schedule (common practice, DOMAIN.md §2.11)', () => {
     expect(check.isWithinCap).toBe(false);
     expect(check.excess.toFixed(2)).toBe('2600.00');
     expect(depositCap({ kind: 'none' }, '12000.00', 'USD')).toBeNull();
+    // 10 % of 12,345.67 = 1,234.567: the cap is 1,234.56 — 1,234.57 would be more than 10 %
+    expect(depositCap(rule, '12345.67', 'USD')?.toFixed(2)).toBe('1000.00');
+    expect(depositCap({ kind: 'share', share: 0.1 }, '12345.67', 'USD')?.toFixed(2)).toBe('1234.56');
+    expect(depositCap(rule, '9999.99', 'USD')?.toFixed(2)).toBe('999.99');
   });
 
   it('a change order re-spreads unbilled lines pro rata and leaves billed lines alone', () => {
