@@ -5,11 +5,11 @@ import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
-import { type BillingJob, firmToday, LIVE_ISSUED, loadBillingJob } from './billing-job';
+import { type BillingJob, firmToday, loadBillingJob } from './billing-job';
 import { longDate } from '../i18n/long-date';
 import { draftLineInvoice, draftRetainageInvoice } from './drafts';
 import { decimalsMessage, fitsCurrency } from './money';
-import { billedWorkByLine, draftProgressInvoice, loadValueLines, percentOf } from './progress-invoice';
+import { billedWorkByLine, draftProgressInvoice, lastIssuedPeriodEnd, loadValueLines, percentOf } from './progress-invoice';
 
 /** POST /api/jobs/:id/invoices: a draft the office asks for (a schedule line, a progress application, a retainage release). */
 export async function createDraft(tx: TenantTx, actor: Actor, jobId: string, body: InvoiceDraftCreate, now: Date): Promise<string> {
@@ -49,11 +49,7 @@ export async function createDraft(tx: TenantTx, actor: Actor, jobId: string, bod
  */
 async function checkPeriodEnd(tx: TenantTx, job: BillingJob, periodEnd: string, now: Date): Promise<void> {
   const today = firmToday(job, now);
-  const { rows } = await tx.client.query<{ last: string | null }>(
-    `select max(period_end)::text as last from invoices where tenant_id = $1 and job_id = $2 and kind = 'progress' and ${LIVE_ISSUED}`,
-    [tx.tenantId, job.id],
-  );
-  const last = rows[0]?.last ?? null;
+  const last = await lastIssuedPeriodEnd(tx, job.id);
   const latest = addDays(today, 366);
   const message =
     last !== null && periodEnd < last
@@ -120,6 +116,9 @@ export async function updateDraft(tx: TenantTx, actor: Actor, id: string, body: 
     const job = await loadBillingJob(tx, draft.job_id);
     const periodEnd = body.periodEnd ?? draft.period_end ?? firmToday(job, now);
     if (body.periodEnd !== undefined) await checkPeriodEnd(tx, job, body.periodEnd, now);
+    // Readings typed on the invoice are kept in the job's history as of the period's end, or today when the
+    // period ends later: dated ahead, they would outrank the crew's marks until then (isOlderThanRecorded).
+    const readOn = periodEnd < firmToday(job, now) ? periodEnd : firmToday(job, now);
     const toDate = new Map<string, Decimal>();
     if (body.progressLines) {
       const lines = new Map((await loadValueLines(tx, job.id)).map((l) => [l.id, l]));
@@ -176,7 +175,7 @@ export async function updateDraft(tx: TenantTx, actor: Actor, id: string, body: 
           await tx.client.query(
             `insert into job_progress (tenant_id, job_id, kind, value_line_id, value, happened_on, actor_user_id, note)
              values ($1, $2, 'valuePercent', $3, $4, $5, $6, 'From the progress invoice')`,
-            [tx.tenantId, job.id, r.id, r.percent.toString(), periodEnd, actor.userId],
+            [tx.tenantId, job.id, r.id, r.percent.toString(), readOn, actor.userId],
           );
         }
         if (!new Decimal(r.stored).equals(line.stored_materials)) {
@@ -189,7 +188,7 @@ export async function updateDraft(tx: TenantTx, actor: Actor, id: string, body: 
           await tx.client.query(
             `insert into job_progress (tenant_id, job_id, kind, value_line_id, value, happened_on, actor_user_id, note)
              values ($1, $2, 'storedMaterials', $3, $4, $5, $6, 'From the progress invoice')`,
-            [tx.tenantId, job.id, r.id, r.stored, periodEnd, actor.userId],
+            [tx.tenantId, job.id, r.id, r.stored, readOn, actor.userId],
           );
         }
       }

@@ -146,7 +146,7 @@ describe('the words the system writes into an invoice, in the reader’s languag
     const before = await f.billing();
     const typed = 'Last payment at hand-over of the keys';
     // The deposit within the California rule (the lesser of 1,000 and 10 % of this contract), the rest on the stage payment.
-    const cap = Decimal.min(new Decimal(before.contractSum).times('0.1').toDecimalPlaces(2), 1000);
+    const cap = Decimal.min(new Decimal(before.contractSum).times('0.1').toDecimalPlaces(2, Decimal.ROUND_DOWN), 1000);
     const over = new Decimal(before.lines[0].amount).minus(cap);
     const amountOf = (l: JobBillingView['lines'][number]) =>
       l.role === 'deposit' ? cap.toFixed(2) : l.role === 'milestone' ? over.plus(l.amount).toFixed(2) : l.amount;

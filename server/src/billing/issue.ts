@@ -10,7 +10,7 @@ import type { JobQueue } from '../queue/job-queue';
 import { assertBillingStarted, type BillingJob, billedBeforeReadOfInvoice, firmToday, jobOfInvoiceRead, taxInside } from './billing-job';
 import { documentFrom, documentReadOfInvoice } from './document';
 import { progressDepositCredit, retainageHeld } from './drafts';
-import { refigureDraftForIssue } from './progress-invoice';
+import { lastIssuedPeriodEnd, refigureDraftForIssue } from './progress-invoice';
 import { enqueueInvoiceMail } from './invoice-mail';
 import { linesWithWords, progressWithWords } from './invoice-words';
 import { invoiceDetailFrom, invoiceDetailReads } from './invoice-read';
@@ -102,6 +102,13 @@ async function prepareIssue(
   if (!job || !locked) throw notFound('invoice');
   if (locked.status !== 'draft') throw conflict('This invoice is already issued.');
   assertBillingStarted(job);
+  if (locked.kind === 'progress' && locked.period_end !== null) {
+    const last = await lastIssuedPeriodEnd(tx, job.id);
+    if (last !== null && locked.period_end < last) {
+      const message = `The last application billed work up to ${longDate(last)}: this period ends on that day or later.`;
+      throw conflict(message, [{ field: 'periodEnd', message }]);
+    }
+  }
   // An application is issued as it figures now (its period and typed work kept): its value lines, the
   // contract sum or the invoices before it may have moved since it was drafted.
   const inv =

@@ -186,9 +186,21 @@ function keptAmounts(draft: ProgressTable | null, lines: readonly ValueLineRow[]
   return kept;
 }
 
+/** The day the job's last issued application billed work up to, or null before the first. */
+export async function lastIssuedPeriodEnd(tx: TenantTx, jobId: string): Promise<string | null> {
+  const { rows } = await tx.client.query<{ last: string | null }>(
+    `select max(period_end)::text as last from invoices where tenant_id = $1 and job_id = $2 and kind = 'progress' and ${LIVE_ISSUED}`,
+    [tx.tenantId, jobId],
+  );
+  return rows[0]?.last ?? null;
+}
+
 export interface ProgressDraftRequest {
   readonly jobId: string;
-  /** the last day of the period billed */
+  /**
+   * the last day of the period billed; from the queue (a mark's day) it only moves a period forward: never
+   * before the open draft's, nor the last issued application's
+   */
   readonly periodEnd: string;
   readonly origin: 'office' | 'queue';
   readonly actor: Actor;
@@ -209,14 +221,22 @@ export async function draftProgressInvoice(tx: TenantTx, request: ProgressDraftR
     ]);
   }
   const open = (
-    await tx.client.query<{ id: string; progress: ProgressTable | null }>(
-      `select id, progress from invoices where tenant_id = $1 and job_id = $2 and kind = 'progress' and status = 'draft' for update`,
+    await tx.client.query<{ id: string; progress: ProgressTable | null; period_end: string | null }>(
+      `select id, progress, period_end::text as period_end from invoices
+        where tenant_id = $1 and job_id = $2 and kind = 'progress' and status = 'draft' for update`,
       [tx.tenantId, job.id],
     )
   ).rows[0];
+  let periodEnd = request.periodEnd;
+  if (request.origin === 'queue') {
+    // The queue moves a period forward to the mark's day, never back: not before the period the office
+    // gave the open draft, nor before the last issued application's.
+    for (const day of [open?.period_end ?? null, await lastIssuedPeriodEnd(tx, job.id)])
+      if (day !== null && day > periodEnd) periodEnd = day;
+  }
   const lines = await loadValueLines(tx, job.id);
   const toDate = new Map([...keptAmounts(open?.progress ?? null, lines), ...(request.toDate ?? new Map<string, Decimal>())]);
-  const f = await progressFigures(tx, job, request.periodEnd, open?.id ?? null, toDate);
+  const f = await progressFigures(tx, job, periodEnd, open?.id ?? null, toDate);
   const values = [
     f.subtotal.toFixed(2),
     f.depositCredit.toFixed(2),
@@ -224,7 +244,7 @@ export async function draftProgressInvoice(tx: TenantTx, request: ProgressDraftR
     f.tax.toFixed(2),
     f.total.toFixed(2),
     JSON.stringify(f.table),
-    request.periodEnd,
+    periodEnd,
   ];
   if (open) {
     await tx.client.query(
@@ -247,7 +267,7 @@ export async function draftProgressInvoice(tx: TenantTx, request: ProgressDraftR
     action: 'invoice.drafted',
     entity: 'invoice',
     entityId: rows[0].id,
-    data: { origin: request.origin, kind: 'progress', periodEnd: request.periodEnd, total: f.total.toFixed(2) },
+    data: { origin: request.origin, kind: 'progress', periodEnd, total: f.total.toFixed(2) },
   });
   return { invoiceId: rows[0].id, isNew: true };
 }

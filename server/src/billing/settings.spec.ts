@@ -1,6 +1,5 @@
 import { DEFAULT_BILLING_SETTINGS, type BillingSettings, type ProposalVersionView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
-import { roundToCurrency } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { firmWithPricedEstimate, joinAs } from '../proposals/proposal-fixtures';
 import { startTestServer, TestServer } from '../testing/harness';
@@ -128,7 +127,8 @@ describe('firm billing settings', () => {
     expect(made.status).toBe(201);
     const option = (made.body as ProposalVersionView).snapshot.options[0];
     const deposit = option.payments.find((p) => p.role === 'deposit')!;
-    const fivePercent = roundToCurrency(new Decimal(option.total).times('0.05'), 'USD').toFixed(2);
+    // rounded down: a cent more would be over 5 %
+    const fivePercent = new Decimal(option.total).times('0.05').toDecimalPlaces(2, Decimal.ROUND_DOWN).toFixed(2);
     expect(option.isDepositCapped).toBe(true);
     expect(deposit.amount).toBe(fivePercent);
     // the rule is named where the client reads the schedule (snapshot → portal page and PDF)
