@@ -72,6 +72,30 @@ describe('change orders for the office', () => {
     expect(untaxed.taxNote).toBe('materialsOnly');
   });
 
+  it('gives back at most the tax the contract carries: a deduction on a job sold untaxed carries none', async () => {
+    const f = await acceptedJob(t, 'Untaxed Sale Plaster');
+    const contractTax = async (value: string) =>
+      withTenant(t.ctx.pool, f.firmId, (tx) =>
+        tx.client.query(`update jobs set contract_tax = $3 where tenant_id = $1 and id = $2`, [tx.tenantId, f.jobId, value]),
+      );
+    await contractTax('0');
+    // the firm taxes the whole job now (8.25 %), but this contract was sold with no tax in it
+    expect(await addChangeOrder(f, lump('Leave out the hall', '-400.00'))).toMatchObject({
+      price: '-400.00',
+      tax: '0.00',
+      amount: '-400.00',
+    });
+    await contractTax('10.00');
+    const partly = await addChangeOrder(f, lump('Leave out the stair', '-400.00'));
+    // −400.00 × 8.25 % = −33.00, but only 10.00 of tax is in the contract
+    expect(partly).toMatchObject({ tax: '-10.00', amount: '-410.00' });
+    // the contract's tax moved meanwhile (another deduction approved): sending it now is refused, naming why
+    await contractTax('5.00');
+    const sent = await f.agent.post(`/api/change-orders/${partly.id}/send`).set('x-csrf-token', f.csrf()).send({});
+    expect(sent.status).toBe(409);
+    expect(sent.body.detail).toMatch(/more tax than the contract carries/);
+  });
+
   it('prices added surfaces with the engine: the same figure the engine gives for those surfaces', async () => {
     const f = await acceptedJob(t, 'Engine Plaster');
     const made = await addChangeOrder(f, {

@@ -31,12 +31,14 @@ interface JobRow {
   client_id: string;
   title: string;
   contract_sum: string;
+  contract_tax: string;
   status: JobStatus;
 }
 
 async function loadJob(tx: TenantTx, jobId: string, lock: boolean): Promise<JobRow> {
   const { rows } = await tx.client.query<JobRow>(
-    `select site_id, estimate_id, currency, start_date::text as start_date, client_id, title, contract_sum::text as contract_sum, status
+    `select site_id, estimate_id, currency, start_date::text as start_date, client_id, title, contract_sum::text as contract_sum,
+            contract_tax::text as contract_tax, status
        from jobs where tenant_id = $1 and id = $2
       ${lock ? 'for update' : ''}`,
     [tx.tenantId, jobId],
@@ -52,6 +54,7 @@ const pricingJob = (j: JobRow): PricingJob => ({
   estimateId: j.estimate_id,
   currency: j.currency,
   startDate: j.start_date,
+  contractTax: j.contract_tax,
 });
 
 /**

@@ -126,6 +126,8 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
   const before = new Decimal(job.contract_sum);
   const after = before.plus(row.amount);
   if (after.lessThanOrEqualTo(0)) throw conflict('This change would take the contract sum to zero or below; ask the firm.');
+  if (new Decimal(job.contract_tax).plus(row.tax).isNegative())
+    throw conflict('This change would take off more tax than the contract carries; ask the firm.');
   if (after.greaterThanOrEqualTo(MONEY_COLUMN_LIMIT))
     throw conflict('This change would take the contract sum past what can be recorded; ask the firm.');
   // Progress billing keeps only its deposit in the schedule; the work is billed from the schedule of values.
@@ -173,13 +175,15 @@ const toPaymentLine = (l: LineRow): PaymentLine => ({
  */
 export async function whyNotApprovable(tx: TenantTx, row: ChangeOrderRow): Promise<string | null> {
   const job = (
-    await tx.client.query<Pick<JobMoneyRow, 'contract_sum' | 'currency' | 'billing_method'>>(
-      `select contract_sum::text as contract_sum, currency, billing_method from jobs where tenant_id = $1 and id = $2`,
+    await tx.client.query<Pick<JobMoneyRow, 'contract_sum' | 'contract_tax' | 'currency' | 'billing_method'>>(
+      `select contract_sum::text as contract_sum, contract_tax::text as contract_tax, currency, billing_method from jobs
+        where tenant_id = $1 and id = $2`,
       [tx.tenantId, row.job_id],
     )
   ).rows[0];
   const after = new Decimal(job.contract_sum).plus(row.amount);
   if (after.lessThanOrEqualTo(0)) return 'it would take the contract sum to zero or below';
+  if (new Decimal(job.contract_tax).plus(row.tax).isNegative()) return 'it would take off more tax than the contract carries';
   if (after.greaterThanOrEqualTo(MONEY_COLUMN_LIMIT)) return 'it would take the contract sum past what can be recorded';
   if (job.billing_method !== 'schedule') {
     // Progress billing takes a deduction off the schedule-of-values lines no work has touched (changeValueLines).
@@ -212,7 +216,9 @@ async function respreadLines(tx: TenantTx, row: ChangeOrderRow, job: JobMoneyRow
   const digits = minorUnitDigits(job.currency);
   if (lines.length > 0 && lines.every((l) => staysOnRespread(toPaymentLine(l)))) {
     if (new Decimal(row.amount).isNegative())
-      throw conflict('Every payment of this job but its deposit is already billed, so a deduction cannot be spread; ask the firm for a credit.');
+      throw conflict(
+        'Every payment of this job but its deposit is already billed, so a deduction cannot be spread; ask the firm for a credit.',
+      );
     const final = lines.find((l) => l.role === 'final');
     const position = final ? final.position : Math.max(...lines.map((l) => l.position)) + 1;
     if (final)

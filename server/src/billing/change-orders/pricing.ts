@@ -33,6 +33,8 @@ export interface PricingJob {
   readonly estimateId: string;
   readonly currency: string;
   readonly startDate: string | null;
+  /** the tax inside the contract sum as it stands */
+  readonly contractTax: string;
 }
 
 /** The engine's option id for the one-variant input. */
@@ -41,7 +43,7 @@ const VARIANT = 'change-order';
 /**
  * Prices a change order. A lump sum is the office's price, taxed by the firm's mode: on the whole
  * job, price × rate rounded to the currency; taxed on materials only (or not at all), a lump sum
- * has no materials line and carries no tax. Engine pricing runs the estimate engine on exactly the
+ * has no materials line and carries no tax. A deduction's tax never takes off more than the contract's. Engine pricing runs the estimate engine on exactly the
  * chosen surfaces with the chosen finish — the same assembly and computation the estimates use.
  */
 export async function priceChangeOrder(
@@ -58,7 +60,9 @@ export async function priceChangeOrder(
     const { settings, lengthUnit } = await getEstimatingSettings(tx);
     const rule = toEngineSettings(settings, lengthUnit, job.currency).tax;
     const { tax } = salesTax(rule, { materials: new Decimal(0), price }, job.currency);
-    return money('lumpSum', price, tax, digits, { taxMode: settings.tax.mode });
+    // A deduction gives back at most the tax the contract carries (none, when it was sold untaxed).
+    const given = Decimal.max(tax, new Decimal(job.contractTax).negated());
+    return money('lumpSum', price, given, digits, { taxMode: settings.tax.mode });
   }
   return priceWithEngine(tx, job, pricing, today, digits);
 }
