@@ -144,6 +144,8 @@ interface EntryRow {
 /**
  * One job of this client: its invoices (issued, never drafts), credit notes, payments and the
  * refunds that went through (a negative credit: the balance owed goes back up), with the running balance.
+ * A payment counts with the part that went on its invoice (money beyond it, or in another currency, is
+ * the client's credit, not this job's), a refund with the part that came off the invoice.
  */
 export async function getClientStatement(tx: TenantTx, client: ClientPrincipal, jobId: string): Promise<PortalStatement> {
   const clientId = await requireClientId(tx, client, 'job');
@@ -164,13 +166,15 @@ export async function getClientStatement(tx: TenantTx, client: ClientPrincipal, 
        from credit_notes n join invoices i on i.tenant_id = n.tenant_id and i.id = n.invoice_id
       where n.tenant_id = $1 and i.job_id = $2
      union all
-     select 'payment', p.received_on::text, p.reference, null, p.amount::text, p.method, null, null
+     select 'payment', p.received_on::text, p.reference, null, p.amount_applied::text, p.method, null, null
        from payments p join invoices i on i.tenant_id = p.tenant_id and i.id = p.invoice_id
-      where p.tenant_id = $1 and i.job_id = $2
+      where p.tenant_id = $1 and i.job_id = $2 and p.amount_applied > 0
      union all
-     select 'refund', r.refunded_on::text, r.reference, null, r.amount::text, r.method, null, null
+     select 'refund', r.refunded_on::text, r.reference, null, (r.amount + coalesce(c.amount, 0))::text, r.method, null, null
        from refunds r join invoices i on i.tenant_id = r.tenant_id and i.id = r.invoice_id
-      where r.tenant_id = $1 and i.job_id = $2 and r.status = 'succeeded'
+       left join lateral (select sum(c.amount) as amount from client_credits c
+                           where c.tenant_id = r.tenant_id and c.payment_id = r.payment_id and c.meta->>'refundId' = r.id::text) c on true
+      where r.tenant_id = $1 and i.job_id = $2 and r.status = 'succeeded' and r.amount + coalesce(c.amount, 0) > 0
      order by 2, 7 nulls last`,
     [tx.tenantId, jobId],
   );

@@ -1,6 +1,9 @@
 import type { InvoiceDetail, PortalInvoiceDetail, PortalStatement } from '@layerbook/contracts';
 import { clientInvoice, type PaymentsServer, startPaymentsServer } from './checkout-fixtures';
 import { payOnlineFor } from './portal-pay';
+import { recordPayment } from './record-payment';
+import { SYSTEM_ACTOR } from '../http/actor';
+import { withTenant } from '@layerbook/db';
 
 describe('payOnlineFor', () => {
   const open = { status: 'issued' as const, currency: 'USD', amountDue: '250.00' };
@@ -81,5 +84,25 @@ describe('the portal invoice and statement after payments and refunds', () => {
       ['2026-12-03', 'refund', 'Refund by cheque 77', '0.00', '-50.00', '50.00'],
     ]);
     expect(statement).toMatchObject({ invoiced: '250.00', paid: '200.00', balanceDue: '50.00' });
+  });
+
+  it('counts only what went on the invoice: a card payment taken in another currency is the client’s credit, not this job’s', async () => {
+    p.t.setNow(new Date('2026-12-05T15:00:00Z'));
+    const f = await clientInvoice(p.t, 'Other Currency Statement Plaster', { issuedOn: '2026-12-01' });
+    await withTenant(p.t.ctx.pool, f.firmId, (tx) =>
+      recordPayment(tx, SYSTEM_ACTOR, {
+        invoiceId: f.invoiceId,
+        method: 'card',
+        amount: '250.00',
+        currency: 'EUR',
+        receivedOn: '2026-12-02',
+        reference: 'pi_other_currency',
+      }),
+    );
+    const view = (await f.client.agent.get(`/api/portal/invoices/${f.invoiceId}`)).body as PortalInvoiceDetail;
+    const statement = (await f.client.agent.get(`/api/portal/jobs/${f.jobId}/statement`)).body as PortalStatement;
+    expect(statement.lines.map((l) => l.kind)).toEqual(['invoice']);
+    expect(statement).toMatchObject({ paid: '0.00', balanceDue: view.amountDue });
+    expect(view.amountDue).toBe('250.00');
   });
 });
