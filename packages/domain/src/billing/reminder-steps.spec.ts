@@ -81,9 +81,15 @@ describe('reminder steps', () => {
 
   it.each([
     // the worker was down from 01-31 to 02-12: only the latest pending step goes, the earlier ones are skipped for good
-    ['2027-02-12', [], { step: 'after:7', on: '2027-02-11', skipped: ['before:3', 'due'] }],
+    // (the before and due steps, whose words say "due on …" and "due today", are past their time and not even pending)
+    ['2027-02-12', [], { step: 'after:7', on: '2027-02-11', skipped: [] }],
     ['2027-02-13', [{ step: 'after:7' }], null],
-    ['2027-02-05', [{ step: 'before:3' }], { step: 'due', on: '2027-02-04', skipped: [] }],
+    // the due-date reminder is sent on the due date or not at all (an invoice due on receipt, issued after the morning's run)
+    ['2027-02-05', [{ step: 'before:3' }], null],
+    ['2027-02-04', [{ step: 'before:3' }], { step: 'due', on: '2027-02-04', skipped: [] }],
+    // the before step missed on its day still goes before the due date, and not on it
+    ['2027-02-02', [], { step: 'before:3', on: '2027-02-01', skipped: [] }],
+    ['2027-02-04', [], { step: 'due', on: '2027-02-04', skipped: [] }],
     // an after-due step sent under an older cadence: no before or due reminder after it
     ['2027-02-04', [{ step: 'after:1' }], null],
     ['2027-01-31', [], null],

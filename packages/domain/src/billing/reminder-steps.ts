@@ -77,7 +77,8 @@ export function reminderSteps(cadence: ReminderCadence, dueOn: IsoDate, field = 
  * The one reminder to send today, or null. A step is sendable when its date has come, it was never
  * sent (by key), it lies later than every step already sent (so nothing goes out of order, and no
  * before- or due-date reminder follows an overdue one), and, for an after-due step, fewer than
- * `maxAfter` after-due steps were sent under any cadence. When several are sendable (the worker
+ * `maxAfter` after-due steps were sent under any cadence; a before-due step only before the due
+ * date and the due-date step only on it (a late "due today" would be wrong). When several are sendable (the worker
  * was down) only the latest goes; the others are reported as skipped and, being earlier than it,
  * never become sendable again (common practice, no source).
  */
@@ -92,9 +93,12 @@ export function remindersDue(input: RemindersDueInput): ReminderDue | null {
     latestSent = Math.max(latestSent, offset);
   });
   const afterSent = [...sentKeys].filter((k) => k.startsWith('after:')).length;
+  const due = toDayNumber(input.dueOn, 'dueOn');
   const pending = steps.filter((s) => {
     const offset = stepOffset(s.step, 'step');
     if (toDayNumber(s.on) > today || sentKeys.has(s.step) || offset <= latestSent) return false;
+    // Its words say "due on …" and "due today": a before step is stale from the due date on, the due step after it.
+    if ((offset < 0 && today >= due) || (offset === 0 && today !== due)) return false;
     return offset <= 0 || afterSent < input.cadence.maxAfter;
   });
   if (pending.length === 0) return null;
