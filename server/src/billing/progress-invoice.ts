@@ -179,7 +179,8 @@ function keptAmounts(draft: ProgressTable | null, lines: readonly ValueLineRow[]
   const byId = new Map(lines.map((l) => [l.id, l]));
   for (const d of draft.lines) {
     const line = byId.get(d.valueLineId);
-    if (!line || line.scheduled_value !== d.scheduledValue) continue;
+    // compared as numbers: the table holds the currency's digits ("10000000" for yen), the column two ("10000000.00")
+    if (!line || !new Decimal(line.scheduled_value).equals(d.scheduledValue)) continue;
     const work = new Decimal(d.previousWork).plus(d.thisPeriodWork);
     if (percentOf(work, line.scheduled_value).equals(line.percent_complete)) kept.set(d.valueLineId, work);
   }
