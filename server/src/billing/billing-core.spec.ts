@@ -250,6 +250,13 @@ describe('billing core: the job schedule, drafts, issue, void, payments', () => 
     });
     expect(res.status).toBe(409);
     expect(res.body.errors).toEqual([{ field: 'lines.0.amount', message: 'This line is billed and cannot change.' }]);
+    // … and its label: its invoice carries it (a draft's would be issued under the old one)
+    const renamed = await f.send('put', `/api/jobs/${f.jobId}/billing/schedule`, {
+      ...changed,
+      lines: changed.lines.map((l, i) => (i === 0 ? { ...l, label: 'Deposit at signing' } : l)),
+    });
+    expect(renamed.status).toBe(409);
+    expect(renamed.body.errors).toEqual([{ field: 'lines.0.label', message: 'This line is billed and cannot change.' }]);
   });
 
   it('drafts a line once however often it is asked at the same time; bad draft requests are 400 naming the field', async () => {

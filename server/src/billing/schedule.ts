@@ -76,6 +76,8 @@ function billedLineChanges(body: BillingScheduleUpdate, existing: readonly Sched
     if (!new Decimal(next.amount).equals(line.amount))
       problems.push({ field: `lines[${i}].amount`, message: 'This line is billed and cannot change.' });
     if (next.role !== line.role) problems.push({ field: `lines[${i}].role`, message: 'This line is billed and cannot change.' });
+    // its invoice carries the label (a draft's is frozen at issue): renamed here, the two would disagree
+    if (next.label !== line.label) problems.push({ field: `lines[${i}].label`, message: 'This line is billed and cannot change.' });
     if (!sameTrigger(next.trigger, line.trigger)) {
       problems.push({ field: `lines[${i}].trigger`, message: 'This line is billed and cannot change.' });
     }
