@@ -7,15 +7,19 @@
 const LIVE = `('issued', 'part_paid', 'paid', 'refunded')`;
 const OPEN = `('issued', 'part_paid', 'refunded')`;
 
-const RETAINAGE = (issuedBy: string) => `held as (
+/** Live on the as-of date $2: issued, and not voided by then (a credit note dated later leaves it live that day). */
+const LIVE_AS_OF = `i.status <> 'draft' and not exists (select 1 from credit_notes n
+                     where n.tenant_id = i.tenant_id and n.invoice_id = i.id and n.issued_on <= $2::date)`;
+
+const RETAINAGE = (issuedBy: string, live = `i.status in ${LIVE}`) => `held as (
     select j.id as job_id, h.id, h.retainage_held from jobs j
      cross join lateral (select i.id, i.retainage_held from invoices i
-                          where i.tenant_id = $1 and i.job_id = j.id and i.kind = 'progress' and i.status in ${LIVE} ${issuedBy}
+                          where i.tenant_id = $1 and i.job_id = j.id and i.kind = 'progress' and ${live} ${issuedBy}
                           order by i.issued_at desc, i.number desc limit 1) h
      where j.tenant_id = $1 and j.billing_method = 'progress' and h.retainage_held > 0),
   released as (
     select i.job_id, sum(i.subtotal) as amount from held h
-      join invoices i on i.tenant_id = $1 and i.job_id = h.job_id and i.kind = 'retainage' and i.status in ${LIVE} ${issuedBy}
+      join invoices i on i.tenant_id = $1 and i.job_id = h.job_id and i.kind = 'retainage' and ${live} ${issuedBy}
      group by i.job_id),
   retainage as (
     select h.id, greatest(h.retainage_held - coalesce(r.amount, 0), 0) as amount from held h left join released r on r.job_id = h.job_id)`;
@@ -38,7 +42,7 @@ const OWED_NOW = `with ${RETAINAGE('')},
  * (succeeded; only the part that came off the invoice — the part taken from the client's credit, its
  * negative client_credits row, was never the invoice's) and credit notes issued by then.
  */
-const OWED_AS_OF = `with ${RETAINAGE('and i.issued_on <= $2::date')},
+const OWED_AS_OF = `with ${RETAINAGE('and i.issued_on <= $2::date', LIVE_AS_OF)},
   paid as (select p.invoice_id, sum(p.amount_applied) as amount from payments p
             where p.tenant_id = $1 and p.received_on <= $2::date group by p.invoice_id),
   refunded as (select f.invoice_id, sum(f.amount + coalesce(c.amount, 0)) as amount from refunds f
