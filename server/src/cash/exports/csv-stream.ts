@@ -10,6 +10,13 @@ export const EXPORT_BATCH_ROWS = 1000;
 /** RFC 4180 §2: CRLF after each record; csv-stringify quotes a cell holding a comma, a quote or a line break. */
 const CSV: Options = { record_delimiter: 'windows' };
 
+/**
+ * A download that takes nothing for this long is cut off: it holds a pooled connection and an open
+ * transaction while it waits, and a few stalled ones (a laptop closed mid-download) would take every
+ * connection of the pool (common practice, no source).
+ */
+export const EXPORT_STALL_MS = 30_000;
+
 /** The byte-order mark tells spreadsheets the file is UTF-8, so accented names open right (common practice, no source). */
 const BOM = '\uFEFF';
 
@@ -22,6 +29,8 @@ const BOM = '\uFEFF';
  */
 async function* csvPieces<R>(tx: TenantTx, spec: ExportSpec<R>, values: readonly unknown[]): AsyncGenerator<string> {
   yield BOM + stringify([[...spec.header]], CSV);
+  // The database's own backstop for the same: a transaction left waiting twice the cut-off is ended there.
+  await tx.client.query(`set local idle_in_transaction_session_timeout = ${2 * EXPORT_STALL_MS}`);
   await tx.client.query(`declare cash_export no scroll cursor for ${spec.sql}`, [...values]);
   for (;;) {
     const { rows } = await tx.client.query<R & object>(`fetch forward ${EXPORT_BATCH_ROWS} from cash_export`);
@@ -30,17 +39,36 @@ async function* csvPieces<R>(tx: TenantTx, spec: ExportSpec<R>, values: readonly
   }
 }
 
+/** The pieces, with a watchdog that cuts `out` off when the reader takes none for `stallMs`. */
+async function* watched(pieces: AsyncGenerator<string>, out: Writable, stallMs: number): AsyncGenerator<string> {
+  let timer: NodeJS.Timeout | undefined;
+  const arm = () => {
+    clearTimeout(timer);
+    timer = setTimeout(() => out.destroy(new Error(`The download took nothing for ${stallMs} ms: cut off.`)), stallMs);
+  };
+  try {
+    arm();
+    for await (const piece of pieces) {
+      yield piece;
+      arm();
+    }
+  } finally {
+    clearTimeout(timer);
+  }
+}
+
 /**
  * Writes the export to `out` as CSV with back-pressure: a slow download slows the fetching, it
  * never piles rows up in memory (at most one batch waits beside the one being written). Resolves
- * when the last row is written; rejects (and leaves `out` destroyed) if the reader goes away or a
- * query fails.
+ * when the last row is written; rejects (and leaves `out` destroyed) if the reader goes away, takes
+ * nothing for `stallMs` (its connection and transaction are given back) or a query fails.
  */
 export async function streamCsv<R>(
   tx: TenantTx,
   spec: ExportSpec<R>,
   values: readonly [tenantId: string, from: string, to: string],
   out: Writable,
+  stallMs = EXPORT_STALL_MS,
 ): Promise<void> {
-  await pipeline(Readable.from(csvPieces(tx, spec, values), { objectMode: true, highWaterMark: 1 }), out);
+  await pipeline(Readable.from(watched(csvPieces(tx, spec, values), out, stallMs), { objectMode: true, highWaterMark: 1 }), out);
 }

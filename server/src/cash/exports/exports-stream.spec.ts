@@ -2,7 +2,10 @@ import { parse } from 'csv-parse/sync';
 import Decimal from 'decimal.js';
 import type { IncomingMessage } from 'node:http';
 import { startTestServer, type TestServer } from '../../testing/harness';
-import { EXPORT_BATCH_ROWS } from './csv-stream';
+import { Writable } from 'node:stream';
+import { withTenant } from '@layerbook/db';
+import { EXPORT_BATCH_ROWS, streamCsv } from './csv-stream';
+import { EXPORTS } from './export-kinds';
 import { eventually } from '../../payments/checkout-fixtures';
 import { exportFirm } from './export-fixtures';
 
@@ -108,5 +111,23 @@ describe('a large export is streamed', () => {
     // and the next export runs to its end
     const again = await f.agent.get('/api/cash/exports/credit-notes.csv?from=2026-01-01&to=2026-12-31').buffer(true);
     expect(again.status).toBe(200);
+  });
+});
+
+describe('a download that stops reading', () => {
+  it('is cut off after a while, giving back its connection and transaction', async () => {
+    // a reader that takes the first piece and never another (a laptop closed mid-download)
+    const stalled = new Writable({ highWaterMark: 1, write: () => undefined });
+    const started = Date.now();
+    const outcome = await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      streamCsv(tx, EXPORTS.payments, [tx.tenantId, '2026-01-01', '2026-12-31'], stalled, 300).then(
+        () => 'finished',
+        (e: Error) => e.message,
+      ),
+    );
+    expect(outcome).toBe('The download took nothing for 300 ms: cut off.');
+    expect(Date.now() - started).toBeLessThan(5_000);
+    expect(stalled.destroyed).toBe(true);
+    expect(await exportSession()).toBeUndefined();
   });
 });
