@@ -1,4 +1,5 @@
 import { COUNTRIES } from '@layerbook/contracts';
+import { sentProposal } from '../proposals/portal-fixtures';
 import { issuedInvoice } from '../payments/refund-fixtures';
 import { type Agent, signUpFirm, startTestServer, TestServer } from '../testing/harness';
 
@@ -74,8 +75,18 @@ describe('firm currency', () => {
       .send({ ...(await settingsOf(billed.agent)), currency: 'EUR', name: 'Renamed Lime' });
     expect(refused.status).toBe(409);
     expect(refused.body.errors).toEqual([
-      { field: 'currency', message: "Invoices and payments are already kept in USD: the firm's currency can no longer change." },
+      { field: 'currency', message: "Proposals, jobs and invoices are already in USD: the firm's currency can no longer change." },
     ]);
     expect((await billed.agent.get('/api/firm')).body).toMatchObject({ currency: 'USD', name: 'Kept Currency Lime' });
+  });
+
+  it('stays once a proposal went to a client: its job, invoices and payments would be in the old currency', async () => {
+    const sent = await sentProposal(t, 'Sent Currency Lime');
+    const refused = await sent.agent
+      .patch('/api/firm')
+      .set('x-csrf-token', sent.csrf())
+      .send({ ...(await settingsOf(sent.agent)), currency: 'JPY' });
+    expect([refused.status, refused.body.errors?.[0]?.field]).toEqual([409, 'currency']);
+    expect((await sent.agent.get('/api/firm')).body.currency).toBe('USD');
   });
 });

@@ -62,7 +62,7 @@ async function convertEstimatingMeasures(tx: TenantTx, from: UnitSystem, to: Uni
 
 export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettingsUpdate, now: Date): Promise<FirmSettings> {
   const before = await getFirm(tx);
-  if (input.currency !== undefined && input.currency !== before.currency) await refuseCurrencyChangeOnceBilled(tx, before.currency);
+  if (input.currency !== undefined && input.currency !== before.currency) await refuseCurrencyChangeOnceSold(tx, before.currency);
   const [updated] = await tx.db
     .update(firms)
     .set({ ...input, updatedAt: now })
@@ -85,16 +85,20 @@ export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettings
 }
 
 /**
- * The firm's money (its cash view, its reports) is kept in one currency: once an invoice is issued or
- * a payment recorded, the currency stays (409 naming it). Before that — a firm setting up — it may change.
+ * The firm's money (its cash view, its reports) is kept in one currency: once a proposal has gone to a
+ * client, a job was accepted, an invoice issued or a payment recorded, the currency stays (409 naming
+ * it) — each of those carries the currency on into its job's invoices and payments, and the cash view
+ * adds them up in the firm's. Before that — a firm setting up — it may change.
  */
-async function refuseCurrencyChangeOnceBilled(tx: TenantTx, currency: string): Promise<void> {
+async function refuseCurrencyChangeOnceSold(tx: TenantTx, currency: string): Promise<void> {
   const { rowCount } = await tx.client.query(
-    `select 1 where exists (select 1 from invoices where tenant_id = $1 and status <> 'draft')
+    `select 1 where exists (select 1 from proposal_versions where tenant_id = $1 and status <> 'draft')
+                 or exists (select 1 from jobs where tenant_id = $1)
+                 or exists (select 1 from invoices where tenant_id = $1 and status <> 'draft')
                  or exists (select 1 from payments where tenant_id = $1)`,
     [tx.tenantId],
   );
   if (!rowCount) return;
-  const message = `Invoices and payments are already kept in ${currency}: the firm's currency can no longer change.`;
+  const message = `Proposals, jobs and invoices are already in ${currency}: the firm's currency can no longer change.`;
   throw conflict(message, [{ field: 'currency', message }]);
 }
