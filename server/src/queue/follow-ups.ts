@@ -34,7 +34,7 @@ interface DueRow {
 
 /**
  * E-mails each person the open inquiries whose follow-up is due or overdue: their own, and the
- * unassigned ones to the owners and office. Safe to run twice: one outbox row per person per day.
+ * unassigned ones (or assigned to someone no longer active) to the owners and office. Safe to run twice: one outbox row per person per day.
  */
 export async function sendFollowUpDigest(
   pool: Pool,
@@ -55,8 +55,11 @@ export async function sendFollowUpDigest(
         where m.tenant_id = $1 and m.status = 'active'`,
       [tx.tenantId],
     );
+    // An inquiry whose assignee no longer works here (deactivated) is nobody's: it goes to owners and office.
+    const active = new Set(people.map((p) => p.id));
+    const ownerOf = (d: DueRow) => (d.assignee_user_id !== null && active.has(d.assignee_user_id) ? d.assignee_user_id : null);
     for (const person of people) {
-      const mine = due.filter((d) => d.assignee_user_id === person.id || (d.assignee_user_id === null && person.role !== 'crew'));
+      const mine = due.filter((d) => ownerOf(d) === person.id || (ownerOf(d) === null && person.role !== 'crew'));
       if (!mine.length) continue;
       await enqueueMail(tx, queue, {
         purposeKey: `follow-ups:${tx.tenantId}:${job.localDate}:${person.id}`,
