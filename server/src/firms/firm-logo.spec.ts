@@ -3,6 +3,7 @@ import type { FirmSettings } from '@layerbook/contracts';
 import { joinAs } from '../proposals/proposal-fixtures';
 import { HTML, pngImage, TEXT } from '../files/test-images';
 import { signUpFirm, startTestServer, TestServer } from '../testing/harness';
+import { issuedInvoice } from '../payments/refund-fixtures';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -114,5 +115,36 @@ describe('the firm logo', () => {
       expect([role, res.status]).toEqual([role, 403]);
       expect([role, (await m.agent.delete('/api/firm/logo').set('x-csrf-token', m.csrf())).status]).toEqual([role, 403]);
     }
+  });
+});
+
+describe('a logo already printed on an issued invoice', () => {
+  const pdf = (agent: Owner['agent'], url: string) =>
+    agent
+      .get(url)
+      .buffer(true)
+      .parse((r, done) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => done(null, Buffer.concat(chunks)));
+      })
+      .then((res) => {
+        expect(res.status).toBe(200);
+        return res.body as Buffer;
+      });
+  const images = (bytes: Buffer) => (bytes.toString('latin1').match(/\/Subtype\s*\/Image/g) ?? []).length;
+
+  it('stays on that invoice when the firm replaces or removes its logo (an issued document never changes)', async () => {
+    const f = await issuedInvoice(t, 'Rebrand Plaster');
+    const url = `/api/invoices/${f.invoiceId}/pdf`;
+    expect(images(await pdf(f.agent, url))).toBe(1);
+    const replaced = await f.agent
+      .post('/api/firm/logo')
+      .set('x-csrf-token', f.csrf())
+      .attach('file', await pngImage(200, 80), { filename: 'new-logo.png' });
+    expect(replaced.status).toBe(200);
+    expect(images(await pdf(f.agent, url))).toBe(1);
+    expect((await f.agent.delete('/api/firm/logo').set('x-csrf-token', f.csrf())).status).toBe(200);
+    expect(images(await pdf(f.agent, url))).toBe(1);
   });
 });

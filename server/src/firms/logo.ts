@@ -14,9 +14,18 @@ export interface LogoChange {
   readonly discarded: ObjectKeys;
 }
 
-/** The previous logo's file row goes in the same transaction; its bytes after the commit (the caller's part). */
+/**
+ * The previous logo's file row goes in the same transaction; its bytes after the commit (the caller's
+ * part) — unless an issued invoice printed it: an issued document never changes, so its PDF (and its
+ * credit note's and receipts') keeps the logo it was issued with, and the file stays for it.
+ */
 async function dropLogoRow(tx: TenantTx, fileId: string | null): Promise<ObjectKeys> {
   if (!fileId) return [];
+  const printed = await tx.client.query(`select 1 from invoices where tenant_id = $1 and document->'firm'->>'logoFileId' = $2 limit 1`, [
+    tx.tenantId,
+    fileId,
+  ]);
+  if (printed.rowCount) return [];
   const file = await findFile(tx, fileId).catch(() => null);
   return file ? deleteFileRows(tx, [file]) : [];
 }
