@@ -1,5 +1,6 @@
 import { signInRequest } from '@layerbook/contracts';
 import { Pool } from 'pg';
+import { withTenant } from '@layerbook/db';
 import { pruneExpired } from '../queue/prune';
 import { newAgent, signUpFirm, startTestServer, TestServer, uniqueEmail } from '../testing/harness';
 import { testDatabaseUrls } from '../testing/test-env';
@@ -117,6 +118,63 @@ describe('prune-expired queue job', () => {
       `${tag}%`,
     ]);
     expect(left.rows.map((r) => r.k)).toEqual([`${tag}-expired-recent`, `${tag}-open`, `${tag}-used-recent`]);
+  });
+
+  it('deletes reset and portal sign-in links used or expired a day ago, and blanks the bodies of mail sent a month ago', async () => {
+    const now = new Date('2031-06-02T12:00:00Z');
+    const tag = `prune-links-${Date.now()}`;
+    const firm = await signUpFirm(t.app, 'Prune Links Plaster');
+    const at = now.toISOString();
+    const { rows: users } = await owner.query<{ id: string }>(`select id from users where email = $1`, [firm.email]);
+    const inFirm = (text: string, values: unknown[]) =>
+      withTenant(t.ctx.pool, firm.firmId, (tx) => tx.client.query<{ id: string }>(text, values));
+    const { rows: clients } = await inFirm(
+      `insert into portal_users (tenant_id, email, name) values ($1, $2, 'Prune Client') returning id`,
+      [firm.firmId, `${tag}@example.test`],
+    );
+    const links: [string, string, string | null][] = [
+      ['expired-old', "- interval '25 hours'", null],
+      ['used-old', "+ interval '9 days'", "- interval '25 hours'"],
+      ['expired-recent', "- interval '1 hour'", null],
+      ['open', "+ interval '9 days'", null],
+    ];
+    for (const [suffix, expires, used] of links) {
+      const values = [`${tag}-${suffix}`, at];
+      const times = `$2::timestamptz ${expires}, ${used ? `$2::timestamptz ${used}` : 'null'}`;
+      await owner.query(
+        `insert into password_resets (user_id, token_hash, expires_at, used_at) values ('${users[0].id}', $1, ${times})`,
+        values,
+      );
+      await inFirm(
+        `insert into portal_links (tenant_id, portal_user_id, token_hash, expires_at, used_at) values ('${firm.firmId}', '${clients[0].id}', $1, ${times})`,
+        values,
+      );
+    }
+    await inFirm(
+      `insert into mail_outbox (tenant_id, purpose_key, to_address, subject, html, text, status, sent_at)
+       values ($1, $2 || '-old', 'a@example.test', 'Old', '<p>link</p>', 'link', 'sent', $3::timestamptz - interval '31 days'),
+              ($1, $2 || '-new', 'a@example.test', 'New', '<p>link</p>', 'link', 'sent', $3::timestamptz - interval '29 days'),
+              ($1, $2 || '-pending', 'a@example.test', 'Pending', '<p>link</p>', 'link', 'pending', null)`,
+      [firm.firmId, tag, at],
+    );
+    const result = await pruneExpired(jobs, now);
+    expect(result).toMatchObject({ passwordResets: expect.any(Number), portalLinks: expect.any(Number) });
+    const kept = async (table: string) =>
+      (await owner.query<{ k: string }>(`select token_hash as k from ${table} where token_hash like $1 order by 1`, [`${tag}%`])).rows.map(
+        (r) => r.k,
+      );
+    expect(await kept('password_resets')).toEqual([`${tag}-expired-recent`, `${tag}-open`]);
+    const linksLeft = await inFirm(`select token_hash as id from portal_links where token_hash like $1 order by 1`, [`${tag}%`]);
+    expect(linksLeft.rows.map((r) => r.id)).toEqual([`${tag}-expired-recent`, `${tag}-open`]);
+    const mail = await jobs.query<{ purpose_key: string; html: string; text: string }>(
+      `select purpose_key, html, text from mail_outbox where purpose_key like $1 order by 1`,
+      [`${tag}%`],
+    );
+    expect(mail.rows.map((r) => [r.purpose_key.slice(tag.length), r.html, r.text])).toEqual([
+      ['-new', '<p>link</p>', 'link'],
+      ['-old', '', ''],
+      ['-pending', '<p>link</p>', 'link'],
+    ]);
   });
 
   it('is scheduled', async () => {

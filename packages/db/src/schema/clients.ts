@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
-import { boolean, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { createdAt, id, lookupPolicy, tenantId, tenantPolicy, updatedAt } from './columns';
+import { boolean, index, integer, pgPolicy, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { createdAt, id, jobsRole, lookupPolicy, tenantId, tenantPolicy, updatedAt } from './columns';
 import { firms } from './firms';
 
 export const CLIENT_KINDS = ['homeowner', 'designer', 'general_contractor', 'other'] as const;
@@ -116,5 +116,8 @@ export const portalLinks = pgTable(
       .where(sql`asked`),
     tenantPolicy('portal_links'),
     lookupPolicy('portal_links', 'token_hash', 'token_hash'),
+    // The hourly prune (jobs role) deletes links used or expired a day ago, for every firm (a delete reads the rows it matches).
+    pgPolicy('portal_links_prune_read', { as: 'permissive', for: 'select', to: jobsRole, using: sql`true` }),
+    pgPolicy('portal_links_prune', { as: 'permissive', for: 'delete', to: jobsRole, using: sql`true` }),
   ],
 );

@@ -1,0 +1,2 @@
+CREATE POLICY "portal_links_prune_read" ON "portal_links" AS PERMISSIVE FOR SELECT TO "layerbook_jobs" USING (true);--> statement-breakpoint
+CREATE POLICY "portal_links_prune" ON "portal_links" AS PERMISSIVE FOR DELETE TO "layerbook_jobs" USING (true);
