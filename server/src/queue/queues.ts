@@ -3,6 +3,7 @@ import type PgBoss from 'pg-boss';
 /** Every queue is declared once, here, with explicit retry, backoff, expiry and a dead letter. */
 export const QUEUES = {
   mailSend: 'mail-send',
+  mailRequeue: 'mail-requeue',
   mailDead: 'mail-dead',
   followUpSweep: 'follow-up-sweep',
   followUpDigest: 'follow-up-digest',
@@ -78,6 +79,10 @@ export const QUEUE_OPTIONS: ReadonlyArray<{ name: QueueName; options: Omit<PgBos
     },
   },
   {
+    name: QUEUES.mailRequeue,
+    options: { retryLimit: 2, retryDelay: 60, retryBackoff: true, expireInSeconds: 300, retentionDays: 3, deadLetter: QUEUES.mailDead },
+  },
+  {
     name: QUEUES.mailSend,
     options: { retryLimit: 6, retryDelay: 15, retryBackoff: true, expireInSeconds: 120, retentionDays: 7, deadLetter: QUEUES.mailDead },
   },
@@ -102,6 +107,9 @@ export interface FollowUpDigestJob {
 /** Hourly, on the hour plus five (UTC); each firm's digest goes out at FOLLOW_UP_LOCAL_HOUR its time. */
 export const FOLLOW_UP_SWEEP_CRON = '5 * * * *';
 export const FOLLOW_UP_LOCAL_HOUR = 7;
+
+/** Every quarter hour: outbox rows whose send job used up its retries are queued again (mail/requeue.ts). */
+export const MAIL_REQUEUE_CRON = '*/15 * * * *';
 
 /** Hourly at twenty past (UTC): expired sessions, old form stamps and sign-in throttle windows go. */
 export const PRUNE_EXPIRED_CRON = '20 * * * *';

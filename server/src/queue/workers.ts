@@ -3,6 +3,7 @@ import { Pool } from 'pg';
 import type { Logger } from 'pino';
 import { survivesDroppedConnections } from '../db-connections';
 import type { Config } from '../config';
+import { requeueStrandedMail } from '../mail/requeue';
 import { sendOutboxMail } from '../mail/send-mail-job';
 import { sendProposalReminders } from '../proposals/expiry-reminders';
 import { runBillingDaily } from '../billing/triggers/daily';
@@ -22,6 +23,7 @@ import {
   FOLLOW_UP_SWEEP_CRON,
   FollowUpDigestJob,
   FollowUpSweepJob,
+  MAIL_REQUEUE_CRON,
   MailSendJob,
   PaymentsApplyJob,
   PRUNE_EXPIRED_CRON,
@@ -75,9 +77,14 @@ export async function startWorkers(config: Config, queue: StartedQueue, logger: 
     if (stripe) await reconcileEvents(pool, queue, stripe, now(), logger);
   });
   await workEach<object>(queue, QUEUES.pruneExpired, 1, async () => logger.info(await pruneExpired(pool, now()), 'pruned expired rows'));
+  await workEach<object>(queue, QUEUES.mailRequeue, 1, async () => {
+    const result = await requeueStrandedMail(pool, queue, now());
+    if (result.requeued || result.failed) logger.warn(result, 'mail queued again after its send job gave up');
+  });
   // Declared once; pg-boss keeps one schedule per queue however many processes call this.
   await boss.schedule(QUEUES.followUpSweep, FOLLOW_UP_SWEEP_CRON, {}, { tz: 'UTC' });
   await boss.schedule(QUEUES.pruneExpired, PRUNE_EXPIRED_CRON, {}, { tz: 'UTC' });
+  await boss.schedule(QUEUES.mailRequeue, MAIL_REQUEUE_CRON, {}, { tz: 'UTC' });
   await boss.schedule(QUEUES.billingSweep, BILLING_SWEEP_CRON, {}, { tz: 'UTC' });
   if (stripe) await boss.schedule(QUEUES.paymentsReconcile, config.PAYMENTS_RECONCILE_CRON, {}, { tz: 'UTC' });
   return {
