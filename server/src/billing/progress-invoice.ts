@@ -126,6 +126,16 @@ export async function progressFigures(
     previousCertified: previous.rows[0]?.earned ?? '0',
   });
   const subtotal = app.summary.currentDue;
+  // A release issued before this application already billed part of the retainage on its work.
+  const released = new Decimal(
+    (
+      await tx.client.query<{ released: string }>(
+        `select coalesce(sum(subtotal), 0)::text as released from invoices
+          where tenant_id = $1 and job_id = $2 and kind = 'retainage' and ${LIVE_ISSUED}`,
+        [tx.tenantId, job.id],
+      )
+    ).rows[0].released,
+  );
   const credit = await progressDepositCredit(tx, job, subtotal, false, draftId);
   const total = subtotal.minus(credit);
   const tax = await invoiceTax(tx, job, total, draftId);
@@ -156,7 +166,8 @@ export async function progressFigures(
       earnedLessRetainage: m(s.earnedLessRetainage),
       previouslyBilled: m(s.previousCertified),
       dueThisPeriod: m(s.currentDue),
-      balanceToFinishWithRetainage: m(s.balanceToFinishWithRetainage),
+      ...(released.isZero() ? {} : { retainageReleased: m(released) }),
+      balanceToFinishWithRetainage: m(s.balanceToFinishWithRetainage.minus(released)),
     },
   };
   return { table, application: app, subtotal, depositCredit: credit, total, tax };

@@ -86,6 +86,8 @@ export interface ProgressTable {
     readonly earnedLessRetainage: string;
     readonly previouslyBilled: string;
     readonly dueThisPeriod: string;
+    /** retainage released by earlier releases (only when some was): it no longer waits in the balance to finish */
+    readonly retainageReleased?: string;
     readonly balanceToFinishWithRetainage: string;
   };
 }

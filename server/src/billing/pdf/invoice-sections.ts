@@ -76,6 +76,7 @@ export function progressSection(doc: Doc, p: ProgressTable, f: BillingFormats, t
     [w('earnedLessRetainage'), f.money(s.earnedLessRetainage)],
     [w('previouslyBilled'), f.money(s.previouslyBilled)],
     [w('dueThisPeriod'), f.money(s.dueThisPeriod)],
+    ...(s.retainageReleased ? [[w('retainageReleased'), f.money(s.retainageReleased)] as const] : []),
     [w('balanceToFinish'), f.money(s.balanceToFinishWithRetainage)],
   ]);
 }
