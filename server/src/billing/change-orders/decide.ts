@@ -136,6 +136,7 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
     `update jobs set contract_sum = $3, contract_tax = contract_tax + $4::numeric, updated_at = $5 where tenant_id = $1 and id = $2`,
     [tx.tenantId, row.job_id, after.toFixed(digits), row.tax, now],
   );
+  await addWorkItems(tx, row);
   await changeValueLines(
     tx,
     {
@@ -151,6 +152,40 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
   // The open progress application is refigured on the new contract sum and lines (the schedule's lines are checked).
   await enqueueBillingCheck(tx, ctx.queue, row.job_id, { refreshDraft: job.billing_method === 'progress' });
   return { contractSumBefore: before.toFixed(digits), contractSumAfter: after.toFixed(digits) };
+}
+
+/**
+ * The layers on the surfaces an engine-priced change order adds become the job's work, after the
+ * work sold: the office and crew mark them, and a payment due when a layer is done on every surface
+ * waits for them too (its amount grew with the change order). A surface and layer already on the job
+ * stays as it is.
+ */
+async function addWorkItems(tx: TenantTx, row: ChangeOrderRow): Promise<void> {
+  const items = row.detail.workItems ?? [];
+  if (!items.length) return;
+  await tx.client.query(
+    `insert into job_work_items (tenant_id, job_id, position, room_name, surface_id, surface_name, layer_id, layer_name, layer_order)
+     select $1, $2, (select coalesce(max(position), 0) from job_work_items where tenant_id = $1 and job_id = $2) + x.n,
+            x.room_name, x.surface_id, x.surface_name, x.layer_id, x.layer_name, x.layer_order
+       from jsonb_to_recordset($3::jsonb) as x(n int, room_name text, surface_id text, surface_name text, layer_id text, layer_name text,
+                                               layer_order int)
+     on conflict (tenant_id, job_id, surface_id, layer_id) do nothing`,
+    [
+      tx.tenantId,
+      row.job_id,
+      JSON.stringify(
+        items.map((i, k) => ({
+          n: k + 1,
+          room_name: i.roomName,
+          surface_id: i.surfaceId,
+          surface_name: i.surfaceName,
+          layer_id: i.layerId,
+          layer_name: i.layerName,
+          layer_order: i.layerOrder,
+        })),
+      ),
+    ],
+  );
 }
 
 const lineLabel = (row: ChangeOrderRow) => `Change order #${row.number}: ${row.title}`;

@@ -6,6 +6,7 @@ import Decimal from 'decimal.js';
 import { getEstimatingSettings } from '../../firms/estimating';
 import { badRequest } from '../../http/problem';
 import { loadEstimateContext } from '../../proposals/estimate-context';
+import { type JobWorkItem, workItemsOf } from '../work-items';
 
 /** What `change_orders.detail` holds: how it was priced, and the sums the client approved. */
 export interface StoredDetail {
@@ -14,10 +15,14 @@ export interface StoredDetail {
   readonly surfaceIds?: readonly string[];
   readonly finishSystemId?: string;
   readonly engine?: ChangeOrderEngineDetail;
+  /** engine pricing: the layers on each surface it adds, which become the job's work to mark when approved */
+  readonly workItems?: readonly ChangeOrderWorkItem[];
   /** frozen at approval */
   readonly contractSumBefore?: string;
   readonly contractSumAfter?: string;
 }
+
+export type ChangeOrderWorkItem = Pick<JobWorkItem, 'roomName' | 'surfaceId' | 'surfaceName' | 'layerId' | 'layerName' | 'layerOrder'>;
 
 export interface PricedChangeOrder {
   readonly pricing: ChangeOrderPricing['kind'];
@@ -117,6 +122,14 @@ async function priceWithEngine(
     surfaceIds: pricing.surfaceIds,
     finishSystemId: pricing.finishSystemId,
     engine,
+    workItems: workItemsOf(result.surfaces, null, roomOf).map(({ roomName, surfaceId, surfaceName, layerId, layerName, layerOrder }) => ({
+      roomName,
+      surfaceId,
+      surfaceName,
+      layerId,
+      layerName,
+      layerOrder,
+    })),
   });
 }
 
