@@ -8,7 +8,11 @@ const schema = z
     NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
     HOST: z.string().default('127.0.0.1'),
     PORT: z.coerce.number().int().min(0).max(65535).default(4300),
-    PUBLIC_URL: z.url().default('http://localhost:4300'),
+    // Links are built as `${PUBLIC_URL}/path`: a trailing slash given here would make them `//path`.
+    PUBLIC_URL: z
+      .url()
+      .default('http://localhost:4300')
+      .transform((url) => url.replace(/\/+$/, '')),
     DATABASE_URL: z.string().min(1),
     DATABASE_OWNER_URL: z.string().min(1),
     DATABASE_JOBS_URL: z.string().min(1),
