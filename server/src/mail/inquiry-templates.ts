@@ -39,6 +39,6 @@ export function followUpDigestMail(p: {
     `${p.items.length} follow-up${p.items.length === 1 ? '' : 's'} for today`,
     [`Good morning ${p.name},`, ...lines],
     { label: 'Open today', url: p.url },
-    `Sent by Layerbook for ${p.firmName} each working morning when follow-ups are due.`,
+    `Sent by Layerbook for ${p.firmName} each morning when follow-ups are due.`,
   );
 }
