@@ -1,9 +1,10 @@
-import { ChangeDetectionStrategy, Component, computed, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { toIsoDate } from '../../shared/forms/iso-date';
+import { Session } from '../../core/auth/session';
+import { firmToday, toIsoDate } from '../../shared/forms/iso-date';
 import { EXPORT_KINDS, defaultExportRange, exportHref, exportRangeProblem } from './export-range';
 import { TranslatePipe } from '@ngx-translate/core';
 
@@ -83,7 +84,8 @@ import { TranslatePipe } from '@ngx-translate/core';
 })
 export class CashExports {
   protected readonly kinds = EXPORT_KINDS;
-  private readonly initial = defaultExportRange(toIsoDate(new Date()) ?? '2026-01-01');
+  // the firm's today (the day the API dates money by), not the viewer's
+  private readonly initial = defaultExportRange(toIsoDate(firmToday(inject(Session).user()?.timeZone)) ?? '2026-01-01');
   protected readonly from = signal(this.initial.from);
   protected readonly to = signal(this.initial.to);
   protected readonly problem = computed(() => exportRangeProblem(this.from(), this.to()));

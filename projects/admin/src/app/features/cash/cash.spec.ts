@@ -24,7 +24,7 @@ async function open(
       provideHttpClient(),
       provideHttpClientTesting(),
       provideRouter([]),
-      { provide: Session, useValue: { isOwner: () => isOwner, hasRole: () => true } },
+      { provide: Session, useValue: { isOwner: () => isOwner, hasRole: () => true, user: () => ({ timeZone: 'America/Chicago' }) } },
     ],
   });
   await TestBed.inject(Router).navigateByUrl(url);
