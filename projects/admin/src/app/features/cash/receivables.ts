@@ -63,6 +63,11 @@ export class Receivables {
     initialValue: drillFromParams(this.route.snapshot.queryParams),
   });
   /** Apart from the drill-down, so opening a list never asks for the figures again. */
+  /** The same figures, invoice by invoice, as a spreadsheet file for the accountant. */
+  protected csvHref(asOf: string): string {
+    return `/api/cash/exports/receivables.csv?asOf=${encodeURIComponent(asOf)}`;
+  }
+
   private readonly asOf = computed(() => this.drill().asOf);
   protected readonly clientsListed = CLIENTS_LISTED;
   /** Every client who owes, or (the default) the 25 who owe most. */
