@@ -156,7 +156,10 @@ describe('Cash', { timeout: 20_000 }, () => {
   it('offers each export as a download for the chosen days', async () => {
     const { html } = await open('/', OWNER_JOBS);
     const downloads = [...html().querySelectorAll('a[download]')].map((a) => a.getAttribute('href') ?? '');
-    expect(downloads).toHaveLength(5);
+    expect(downloads).toHaveLength(6);
+    // the money owed, as of its day, first; then the exports for the chosen days
+    expect(downloads[0]).toMatch(/^\/api\/cash\/exports\/receivables\.csv\?asOf=\d{4}-\d{2}-\d{2}$/);
+    downloads.shift();
     expect(downloads.map((href) => href.split('?')[0])).toEqual([
       '/api/cash/exports/invoices.csv',
       '/api/cash/exports/payments.csv',
