@@ -1,8 +1,8 @@
 import { formatMoney } from '@layerbook/domain';
-import { pdfText } from '../proposals/pdf/pdf-text';
+import { binary, pdfTextOf as textOf } from '../testing/binary';
 import { otherClientOf } from '../proposals/portal-fixtures';
 import { joinAs } from '../proposals/proposal-fixtures';
-import { type Agent, signUpFirm, startTestServer, TestServer } from '../testing/harness';
+import { signUpFirm, startTestServer, TestServer } from '../testing/harness';
 import { acceptedJob, insertInvoice, insertPayment, PROGRESS, TERMS, voidWithCreditNote } from './pdf/invoice-fixtures';
 import { DRAFT_MARK } from './pdf/render-invoice';
 
@@ -14,16 +14,6 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 const usd = (amount: string) => formatMoney(amount, 'USD', 'en-US');
-const binary = (agent: Agent, url: string) =>
-  agent
-    .get(url)
-    .buffer(true)
-    .parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
-const textOf = (body: unknown) => pdfText(body as Buffer).replace(/\s+/g, ' ');
 
 /** One firm's job with a deposit invoice (part paid), a progress invoice (overdue), a draft, and a voided one with its credit note. */
 async function billedJob(name: string) {

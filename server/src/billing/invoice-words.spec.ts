@@ -11,8 +11,8 @@ import { withTenant } from '@layerbook/db';
 import { formatMoney, paymentLabel } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { translator } from '../i18n/catalog';
-import { pdfText } from '../proposals/pdf/pdf-text';
-import { type Agent, startTestServer, type TestServer } from '../testing/harness';
+import { binary, pdfTextOf as textOf } from '../testing/binary';
+import { startTestServer, type TestServer } from '../testing/harness';
 import { billingJob } from './billing-fixtures';
 import {
   depositPresetOf,
@@ -32,17 +32,6 @@ beforeAll(async () => {
   t.setNow(new Date('2026-12-01T15:00:00Z'));
 });
 afterAll(() => t.stop());
-
-const binary = (agent: Agent, url: string) =>
-  agent
-    .get(url)
-    .buffer(true)
-    .parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
-const textOf = (body: unknown) => pdfText(body as Buffer).replace(/\s+/g, ' ');
 
 const CALIFORNIA = DEPOSIT_CAP_PRESETS.find((p) => p.id === 'caHomeImprovement')!;
 // Intl.NumberFormat with the CLDR data Node ships: Spanish in the firm's country (es-US).

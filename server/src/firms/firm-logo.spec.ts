@@ -4,6 +4,7 @@ import { joinAs } from '../proposals/proposal-fixtures';
 import { HTML, pngImage, TEXT } from '../files/test-images';
 import { signUpFirm, startTestServer, TestServer } from '../testing/harness';
 import { issuedInvoice } from '../payments/refund-fixtures';
+import { binary } from '../testing/binary';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -119,19 +120,11 @@ describe('the firm logo', () => {
 });
 
 describe('a logo already printed on an issued invoice', () => {
-  const pdf = (agent: Owner['agent'], url: string) =>
-    agent
-      .get(url)
-      .buffer(true)
-      .parse((r, done) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => done(null, Buffer.concat(chunks)));
-      })
-      .then((res) => {
-        expect(res.status).toBe(200);
-        return res.body as Buffer;
-      });
+  const pdf = async (agent: Owner['agent'], url: string) => {
+    const res = await binary(agent, url);
+    expect(res.status).toBe(200);
+    return res.body as Buffer;
+  };
   const images = (bytes: Buffer) => (bytes.toString('latin1').match(/\/Subtype\s*\/Image/g) ?? []).length;
 
   it('stays on that invoice when the firm replaces or removes its logo (an issued document never changes)', async () => {

@@ -3,10 +3,10 @@ import { withTenant } from '@layerbook/db';
 import { formatMoney } from '@layerbook/domain';
 import { insertInvoice, voidWithCreditNote } from '../billing/pdf/invoice-fixtures';
 import { issuedInvoice } from '../payments/refund-fixtures';
-import { pdfText } from '../proposals/pdf/pdf-text';
+import { binary, pdfTextOf as textOf } from '../testing/binary';
 import { renderProposalPdf } from '../proposals/pdf/render-proposal';
 import { linkIn } from '../testing/inbox';
-import { newAgent, signUpFirm, startTestServer, type Agent, type TestServer, uniqueEmail } from '../testing/harness';
+import { newAgent, signUpFirm, startTestServer, type TestServer, uniqueEmail } from '../testing/harness';
 import { cautionIn } from './cautions';
 
 let t: TestServer;
@@ -18,16 +18,6 @@ afterAll(() => t.stop());
 
 // Intl.NumberFormat with the CLDR data Node ships: the reader's language with the firm's country.
 const usdEs = (amount: string) => formatMoney(amount, 'USD', 'es-US');
-const binary = (agent: Agent, url: string) =>
-  agent
-    .get(url)
-    .buffer(true)
-    .parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
-const textOf = (body: unknown) => pdfText(body as Buffer).replace(/\s+/g, ' ');
 const expectAll = (text: string, words: readonly string[]) => {
   for (const w of words) expect([w, text.includes(w)]).toEqual([w, true]);
 };

@@ -1,9 +1,9 @@
 import type { RefundView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { formatMoney } from '@layerbook/domain';
-import { pdfText } from '../../proposals/pdf/pdf-text';
+import { binary, pdfTextOf as textOf } from '../../testing/binary';
 import { otherClientOf } from '../../proposals/portal-fixtures';
-import { signUpFirm, startTestServer, type Agent, type TestServer } from '../../testing/harness';
+import { signUpFirm, startTestServer, type TestServer } from '../../testing/harness';
 import { enqueueReceiptMail } from '../receipt-mail';
 import { issuedInvoice } from '../refund-fixtures';
 import { listPortalReceipts, loadPaymentReceipt } from './receipt-read';
@@ -16,16 +16,6 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 const usd = (amount: string) => formatMoney(amount, 'USD', 'en-US');
-const binary = (agent: Agent, url: string) =>
-  agent
-    .get(url)
-    .buffer(true)
-    .parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
-const textOf = (body: unknown) => pdfText(body as Buffer).replace(/\s+/g, ' ');
 
 /** The outbox row of one purpose key (the jobs role sends the outbox; the web role cannot read it). */
 const outbox = async (firmId: string, key: string) => {
