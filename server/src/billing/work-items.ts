@@ -144,29 +144,7 @@ export async function ensureJobWork(tx: TenantTx, jobId: string): Promise<void> 
     [tx.tenantId, roomIds],
   );
   const items = workItemsOf(surfaces, src.scope, new Map(rooms.map((r) => [r.id, r.name])));
-  if (src.work_items === 0 && items.length) {
-    await tx.client.query(
-      `insert into job_work_items (tenant_id, job_id, position, room_name, surface_id, surface_name, layer_id, layer_name, layer_order)
-       select $1, $2, x.position, x.room_name, x.surface_id, x.surface_name, x.layer_id, x.layer_name, x.layer_order
-         from jsonb_to_recordset($3::jsonb) as x(position int, room_name text, surface_id text, surface_name text, layer_id text, layer_name text, layer_order int)
-       on conflict (tenant_id, job_id, surface_id, layer_id) do nothing`,
-      [
-        tx.tenantId,
-        jobId,
-        JSON.stringify(
-          items.map((i) => ({
-            position: i.position,
-            room_name: i.roomName,
-            surface_id: i.surfaceId,
-            surface_name: i.surfaceName,
-            layer_id: i.layerId,
-            layer_name: i.layerName,
-            layer_order: i.layerOrder,
-          })),
-        ),
-      ],
-    );
-  }
+  if (src.work_items === 0 && items.length) await insertWorkItems(tx, jobId, items);
   if (src.value_lines === 0) {
     const lines = defaultValueLines(items, src.contract_sum, src.currency);
     await tx.client.query(
@@ -175,6 +153,35 @@ export async function ensureJobWork(tx: TenantTx, jobId: string): Promise<void> 
       [tx.tenantId, jobId, JSON.stringify(lines.map((l, i) => ({ position: i + 1, label: l.label, amount: l.amount })))],
     );
   }
+}
+
+/** Adds work items to a job; a surface and layer already on it stays as it is. */
+export async function insertWorkItems(
+  tx: TenantTx,
+  jobId: string,
+  items: ReadonlyArray<Pick<JobWorkItem, 'position' | 'roomName' | 'surfaceId' | 'surfaceName' | 'layerId' | 'layerName' | 'layerOrder'>>,
+): Promise<void> {
+  await tx.client.query(
+    `insert into job_work_items (tenant_id, job_id, position, room_name, surface_id, surface_name, layer_id, layer_name, layer_order)
+     select $1, $2, x.position, x.room_name, x.surface_id, x.surface_name, x.layer_id, x.layer_name, x.layer_order
+       from jsonb_to_recordset($3::jsonb) as x(position int, room_name text, surface_id text, surface_name text, layer_id text, layer_name text, layer_order int)
+     on conflict (tenant_id, job_id, surface_id, layer_id) do nothing`,
+    [
+      tx.tenantId,
+      jobId,
+      JSON.stringify(
+        items.map((i) => ({
+          position: i.position,
+          room_name: i.roomName,
+          surface_id: i.surfaceId,
+          surface_name: i.surfaceName,
+          layer_id: i.layerId,
+          layer_name: i.layerName,
+          layer_order: i.layerOrder,
+        })),
+      ),
+    ],
+  );
 }
 
 /** The job's work items in crew order. */

@@ -9,6 +9,7 @@ import { conflict, HttpError, notFound } from '../../http/problem';
 import { enqueueMail } from '../../mail/outbox';
 import { clientIdOf } from '../../proposals/client-proposals';
 import { enqueueBillingCheck } from '../triggers/enqueue';
+import { insertWorkItems } from '../work-items';
 import { changeOrderAnsweredMail } from './change-order-mail';
 import { MONEY_COLUMN_LIMIT, type StoredDetail } from './pricing';
 import { loadChangeOrder, toView, type ChangeOrderRow } from './read';
@@ -163,28 +164,14 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
 async function addWorkItems(tx: TenantTx, row: ChangeOrderRow): Promise<void> {
   const items = row.detail.workItems ?? [];
   if (!items.length) return;
-  await tx.client.query(
-    `insert into job_work_items (tenant_id, job_id, position, room_name, surface_id, surface_name, layer_id, layer_name, layer_order)
-     select $1, $2, (select coalesce(max(position), 0) from job_work_items where tenant_id = $1 and job_id = $2) + x.n,
-            x.room_name, x.surface_id, x.surface_name, x.layer_id, x.layer_name, x.layer_order
-       from jsonb_to_recordset($3::jsonb) as x(n int, room_name text, surface_id text, surface_name text, layer_id text, layer_name text,
-                                               layer_order int)
-     on conflict (tenant_id, job_id, surface_id, layer_id) do nothing`,
-    [
-      tx.tenantId,
-      row.job_id,
-      JSON.stringify(
-        items.map((i, k) => ({
-          n: k + 1,
-          room_name: i.roomName,
-          surface_id: i.surfaceId,
-          surface_name: i.surfaceName,
-          layer_id: i.layerId,
-          layer_name: i.layerName,
-          layer_order: i.layerOrder,
-        })),
-      ),
-    ],
+  const { rows } = await tx.client.query<{ last: number }>(
+    `select coalesce(max(position), 0)::int as last from job_work_items where tenant_id = $1 and job_id = $2`,
+    [tx.tenantId, row.job_id],
+  );
+  await insertWorkItems(
+    tx,
+    row.job_id,
+    items.map((item, k) => ({ ...item, position: rows[0].last + k + 1 })),
   );
 }
 
