@@ -52,7 +52,7 @@ const within = <T>(p: Promise<T>, ms: number) =>
       () => 'settled' as const,
       () => 'settled' as const,
     ),
-    new Promise<'hung'>((r) => setTimeout(() => r('hung'), ms)),
+    new Promise<'hung'>((r) => setTimeout(() => r('hung'), ms).unref()),
   ]);
 
 it('four mail-send handlers failing together give their connections back (no pool deadlock)', async () => {
