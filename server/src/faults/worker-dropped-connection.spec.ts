@@ -81,6 +81,14 @@ it('a worker survives PostgreSQL dropping the connection a mail send holds', asy
 
   // The process should log the lost connection and carry on; it must not exit.
   const ended = await Promise.race([worker.exited, new Promise<'alive'>((r) => setTimeout(() => r('alive'), 3_000))]);
-  const why = ended === 'alive' ? '' : worker.stderr().split('\n').filter((l) => /Error|error|at /.test(l)).slice(0, 4).join('\n');
+  const why =
+    ended === 'alive'
+      ? ''
+      : worker
+          .stderr()
+          .split('\n')
+          .filter((l) => /Error|error|at /.test(l))
+          .slice(0, 4)
+          .join('\n');
   expect({ ended, why }).toEqual({ ended: 'alive', why: '' });
 }, 90_000);
