@@ -17,6 +17,18 @@ const CSV: Options = { record_delimiter: 'windows' };
  */
 export const EXPORT_STALL_MS = 30_000;
 
+/**
+ * A batch's CSV text goes out in pieces of at most this many characters, and the cut-off counts from the
+ * last piece taken: a slow link that keeps taking bytes (a 16 K piece at 1 KB/s is 16 s) is never cut off.
+ */
+const PIECE_CHARS = 16 * 1024;
+
+/**
+ * The database's own backstop, for a server that stopped minding the export: the transaction left idle
+ * this long is ended there. Longer than a slow link takes to carry one batch (common practice, no source).
+ */
+const EXPORT_IDLE_BACKSTOP_MS = 10 * 60_000;
+
 /** The byte-order mark tells spreadsheets the file is UTF-8, so accented names open right (common practice, no source). */
 const BOM = '\uFEFF';
 
@@ -29,31 +41,42 @@ const BOM = '\uFEFF';
  */
 async function* csvPieces<R>(tx: TenantTx, spec: ExportSpec<R>, values: readonly unknown[]): AsyncGenerator<string> {
   yield BOM + stringify([[...spec.header]], CSV);
-  // The database's own backstop for the same: a transaction left waiting twice the cut-off is ended there.
-  await tx.client.query(`set local idle_in_transaction_session_timeout = ${2 * EXPORT_STALL_MS}`);
+  await tx.client.query(`set local idle_in_transaction_session_timeout = ${EXPORT_IDLE_BACKSTOP_MS}`);
   await tx.client.query(`declare cash_export no scroll cursor for ${spec.sql}`, [...values]);
   for (;;) {
     const { rows } = await tx.client.query<R & object>(`fetch forward ${EXPORT_BATCH_ROWS} from cash_export`);
-    if (rows.length > 0) yield stringify(rows.map(spec.toCells), CSV);
+    if (rows.length > 0) {
+      const text = stringify(rows.map(spec.toCells), CSV);
+      for (let at = 0; at < text.length; at += PIECE_CHARS) yield text.slice(at, at + PIECE_CHARS);
+    }
     if (rows.length < EXPORT_BATCH_ROWS) return;
   }
 }
 
-/** The pieces, with a watchdog that cuts `out` off when the reader takes none for `stallMs`. */
+/**
+ * The pieces, with a watchdog that cuts `out` off when the reader takes nothing for `stallMs` (checked
+ * every `stallMs`, so it is cut within twice that): taking something is a piece pulled, `out` draining,
+ * or what `out` holds waiting going down.
+ */
 async function* watched(pieces: AsyncGenerator<string>, out: Writable, stallMs: number): AsyncGenerator<string> {
-  let timer: NodeJS.Timeout | undefined;
-  const arm = () => {
-    clearTimeout(timer);
-    timer = setTimeout(() => out.destroy(new Error(`The download took nothing for ${stallMs} ms: cut off.`)), stallMs);
-  };
+  let moves = 0;
+  const moved = () => void moves++;
+  const mark = () => `${moves}/${out.writableLength}`;
+  let seen = mark();
+  const watchdog = setInterval(() => {
+    const now = mark();
+    if (now === seen) out.destroy(new Error(`The download took nothing for ${stallMs} ms: cut off.`));
+    seen = now;
+  }, stallMs);
+  out.on('drain', moved);
   try {
-    arm();
     for await (const piece of pieces) {
+      moved();
       yield piece;
-      arm();
     }
   } finally {
-    clearTimeout(timer);
+    clearInterval(watchdog);
+    out.off('drain', moved);
   }
 }
 

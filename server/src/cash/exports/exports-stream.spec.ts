@@ -130,4 +130,28 @@ describe('a download that stops reading', () => {
     expect(stalled.destroyed).toBe(true);
     expect(await exportSession()).toBeUndefined();
   });
+
+  it('is not cut off while it keeps taking bytes, however slowly (a slow link)', async () => {
+    let taken = 0;
+    // 4 KB every 40 ms (100 KB/s), as a socket drains: slower than a 300 ms cut-off per 1,000-row batch
+    const slow = new Writable({
+      highWaterMark: 16 * 1024,
+      write(chunk: Buffer, _encoding, done) {
+        const take = (left: number): void => {
+          if (left <= 0) return done();
+          taken += Math.min(4096, left);
+          setTimeout(() => take(left - 4096), 40);
+        };
+        take(chunk.length);
+      },
+    });
+    const outcome = await withTenant(t.ctx.pool, f.firmId, (tx) =>
+      streamCsv(tx, EXPORTS.payments, [tx.tenantId, '2026-01-01', '2026-03-31'], slow, 300).then(
+        () => 'finished',
+        (e: Error) => `${e.message} after ${taken} bytes`,
+      ),
+    );
+    expect(outcome).toBe('finished');
+    expect(taken).toBeGreaterThan(100_000);
+  }, 60_000);
 });
