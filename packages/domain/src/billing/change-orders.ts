@@ -25,19 +25,25 @@ export function contractSumToDate(original: MoneyInput, changeOrders: readonly C
   return sum;
 }
 
-/** Lines a change order leaves as they are: billed ones, and the deposit (agreed at signing, and held to a legal cap). */
-export const staysOnRespread = (l: Pick<PaymentLine, 'isBilled' | 'role'>): boolean => l.isBilled || l.role === 'deposit';
+/**
+ * Lines a change order leaves as they are: billed ones, and — when the contract grows — the deposit
+ * (agreed at signing, and held to a legal cap a larger share would break). A deduction lowers a deposit
+ * not yet billed with the rest, so it keeps within a cap that is a share of the smaller contract.
+ */
+export const staysOnRespread = (l: Pick<PaymentLine, 'isBilled' | 'role'>, growing: boolean): boolean =>
+  l.isBilled || (growing && l.role === 'deposit');
 
 /**
- * Re-spreads a schedule to a new contract sum: billed lines and the deposit stay as they are, the
- * other unbilled lines absorb the change in proportion to their current amounts (equally if all are
+ * Re-spreads a schedule to a new contract sum: billed lines (and, when it grows, the deposit) stay as
+ * they are, the other unbilled lines absorb the change in proportion to their current amounts (equally if all are
  * zero), and the lines still add up to the contract exactly.
  */
 export function respreadSchedule(lines: readonly PaymentLine[], newContractSum: MoneyInput, currency: string): PaymentLine[] {
   const digits = minorUnitDigits(currency, 'currency');
   const target = toMoney(newContractSum, 'contractSum', 'contract sum');
-  const billed = lines.filter(staysOnRespread).reduce((a, l) => a.plus(l.amount), new Decimal(0));
-  const open = lines.map((l, i) => ({ l, i })).filter(({ l }) => !staysOnRespread(l));
+  const growing = target.greaterThan(lines.reduce((a, l) => a.plus(l.amount), new Decimal(0)));
+  const billed = lines.filter((l) => staysOnRespread(l, growing)).reduce((a, l) => a.plus(l.amount), new Decimal(0));
+  const open = lines.map((l, i) => ({ l, i })).filter(({ l }) => !staysOnRespread(l, growing));
   const openTotal = target.minus(billed);
   if (openTotal.isNegative()) {
     throw new DomainInputError('contractSum', 'The new contract sum is less than what has already been billed and the deposit.');

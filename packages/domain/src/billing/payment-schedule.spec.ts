@@ -101,6 +101,9 @@ describe('payment schedule (common practice, DOMAIN.md §2.11)', () => {
     const after = respreadSchedule(lines, '13200.00', 'USD');
     // 13,200 − the 3,333 deposit = 9,867 split 3,333 : 3,334 over the other two
     expect(amounts(after)).toEqual(['3333.00', '4932.76', '4934.24']);
+    // a deduction lowers it with the rest, so it keeps within a share cap of the smaller contract:
+    // 9,000 split 3,333 : 3,333 : 3,334 = 2,999.70 : 2,999.70 : 3,000.60 (largest remainder)
+    expect(amounts(respreadSchedule(lines, '9000.00', 'USD'))).toEqual(['2999.70', '2999.70', '3000.60']);
   });
 
   it('lines always sum to the contract, never go negative, and billed lines never move (property)', () => {

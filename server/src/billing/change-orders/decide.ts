@@ -214,7 +214,7 @@ export async function whyNotApprovable(tx: TenantTx, row: ChangeOrderRow): Promi
     return null;
   }
   const { rows: lines } = await tx.client.query<LineRow>(LINES_SQL, [tx.tenantId, row.job_id]);
-  if (lines.length > 0 && lines.every((l) => staysOnRespread(toPaymentLine(l)))) {
+  if (lines.length > 0 && lines.every((l) => staysOnRespread(toPaymentLine(l), new Decimal(row.amount).isPositive()))) {
     return new Decimal(row.amount).isNegative()
       ? 'every payment of this job but its deposit is already billed, so a deduction cannot be spread (void or credit instead)'
       : null;
@@ -236,7 +236,7 @@ export async function whyNotApprovable(tx: TenantTx, row: ChangeOrderRow): Promi
 async function respreadLines(tx: TenantTx, row: ChangeOrderRow, job: JobMoneyRow, after: Decimal, now: Date): Promise<void> {
   const { rows: lines } = await tx.client.query<LineRow>(`${LINES_SQL} for update`, [tx.tenantId, row.job_id]);
   const digits = minorUnitDigits(job.currency);
-  if (lines.length > 0 && lines.every((l) => staysOnRespread(toPaymentLine(l)))) {
+  if (lines.length > 0 && lines.every((l) => staysOnRespread(toPaymentLine(l), new Decimal(row.amount).isPositive()))) {
     if (new Decimal(row.amount).isNegative())
       throw conflict(
         'Every payment of this job but its deposit is already billed, so a deduction cannot be spread; ask the firm for a credit.',
