@@ -1,5 +1,6 @@
 import { COUNTRIES } from '@layerbook/contracts';
 import { sentProposal } from '../proposals/portal-fixtures';
+import { firmWithPricedEstimate } from '../proposals/proposal-fixtures';
 import { issuedInvoice } from '../payments/refund-fixtures';
 import { type Agent, signUpFirm, startTestServer, TestServer } from '../testing/harness';
 
@@ -78,6 +79,22 @@ describe('firm currency', () => {
       { field: 'currency', message: "Proposals, jobs and invoices are already in USD: the firm's currency can no longer change." },
     ]);
     expect((await billed.agent.get('/api/firm')).body).toMatchObject({ currency: 'USD', name: 'Kept Currency Lime' });
+  });
+
+  it('may change while proposals are only drafts, however many (a second version supersedes the first unsent)', async () => {
+    const f = await firmWithPricedEstimate(t, 'Two Drafts Lime');
+    for (let i = 0; i < 2; i++) {
+      const made = await f.agent
+        .post('/api/proposals')
+        .set('x-csrf-token', f.csrf())
+        .send({ estimateId: f.estimateId, expiresOn: '2026-12-31' });
+      expect(made.status).toBe(201);
+    }
+    const changed = await f.agent
+      .patch('/api/firm')
+      .set('x-csrf-token', f.csrf())
+      .send({ ...(await settingsOf(f.agent)), currency: 'CAD' });
+    expect([changed.status, changed.body.currency]).toEqual([200, 'CAD']);
   });
 
   it('stays once a proposal went to a client: its job, invoices and payments would be in the old currency', async () => {

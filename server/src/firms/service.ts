@@ -92,7 +92,7 @@ export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettings
  */
 async function refuseCurrencyChangeOnceSold(tx: TenantTx, currency: string): Promise<void> {
   const { rowCount } = await tx.client.query(
-    `select 1 where exists (select 1 from proposal_versions where tenant_id = $1 and status <> 'draft')
+    `select 1 where exists (select 1 from proposal_versions where tenant_id = $1 and sent_at is not null)
                  or exists (select 1 from jobs where tenant_id = $1)
                  or exists (select 1 from invoices where tenant_id = $1 and status <> 'draft')
                  or exists (select 1 from payments where tenant_id = $1)`,
