@@ -72,18 +72,21 @@ it('queues again an e-mail whose send job gave up, gives up after three days, an
 
   const written = new Date();
   // a few minutes later nothing is done yet (its job may only be slow); ten minutes on, it is queued again, once
-  expect(await requeueStrandedMail(jobs, t.queue, new Date(written.getTime() + 5 * 60_000))).toMatchObject({ requeued: 0 });
+  // (the sweep reads the whole database, which other spec files share: only this row is looked at)
+  await requeueStrandedMail(jobs, t.queue, new Date(written.getTime() + 5 * 60_000));
+  expect(await liveJobs(id)).toBe(0);
   const later = new Date(written.getTime() + 11 * 60_000);
-  const again = await requeueStrandedMail(jobs, t.queue, later);
-  expect(again.requeued).toBeGreaterThanOrEqual(1);
+  await requeueStrandedMail(jobs, t.queue, later);
   expect(await liveJobs(id)).toBe(1);
-  expect((await requeueStrandedMail(jobs, t.queue, later)).requeued).toBe(0);
+  await requeueStrandedMail(jobs, t.queue, later);
+  expect(await liveJobs(id)).toBe(1);
 
   // three days on it is marked failed, not tried for ever; the operator's resend queues it again
-  expect((await requeueStrandedMail(jobs, t.queue, new Date(written.getTime() + 4 * 86_400_000))).failed).toBeGreaterThanOrEqual(1);
+  await requeueStrandedMail(jobs, t.queue, new Date(written.getTime() + 4 * 86_400_000));
   expect((await rowOf(id)).status).toBe('failed');
-  expect(await resendFailedMail(jobs, t.queue)).toBeGreaterThanOrEqual(1);
+  await resendFailedMail(jobs, t.queue);
   expect((await rowOf(id)).status).toBe('pending');
+  expect(await liveJobs(id)).toBeGreaterThanOrEqual(1);
 }, 120_000);
 
 it('is scheduled', async () => {
