@@ -5,6 +5,7 @@ import type { Config } from '../config';
 import { localDate, localHour } from '../firms/local-date';
 import { enqueueMail } from '../mail/outbox';
 import { followUpDigestMail } from '../mail/inquiry-templates';
+import { sendFirmDay } from './firm-day';
 import type { StartedQueue } from './job-queue';
 import { FOLLOW_UP_LOCAL_HOUR, FollowUpDigestJob, FollowUpSweepJob, QUEUES } from './queues';
 
@@ -20,8 +21,7 @@ export async function sweepFollowUps(pool: Pool, queue: StartedQueue, job: Follo
     if (only && !only.has(firm.id)) continue;
     if (!job.force && localHour(firm.time_zone, now) !== FOLLOW_UP_LOCAL_HOUR) continue;
     const data: FollowUpDigestJob = { tenantId: firm.id, localDate: localDate(firm.time_zone, now) };
-    const id = await queue.boss.send(QUEUES.followUpDigest, data, { singletonKey: `${data.tenantId}:${data.localDate}` });
-    if (id) queued++;
+    if (await sendFirmDay(pool, queue, QUEUES.followUpDigest, data)) queued++;
   }
   return queued;
 }

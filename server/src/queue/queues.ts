@@ -47,7 +47,7 @@ export const QUEUE_OPTIONS: ReadonlyArray<{ name: QueueName; options: Omit<PgBos
   {
     name: QUEUES.billingDaily,
     // one firm's day (singletonKey firm:localDate) at most once queued and once running at a time: a repeated
-    // sweep (its retry, an operator's rerun) queues no second copy beside the first
+    // sweep (its retry, an operator's rerun) queues no second copy beside the first (and sendFirmDay none behind it)
     options: {
       policy: 'stately',
       retryLimit: 5,

@@ -1,5 +1,6 @@
 import type { Pool } from 'pg';
 import { localDate, localHour } from '../../firms/local-date';
+import { sendFirmDay } from '../../queue/firm-day';
 import type { StartedQueue } from '../../queue/job-queue';
 import { BILLING_LOCAL_HOUR, type BillingDailyJob, type BillingSweepJob, QUEUES } from '../../queue/queues';
 
@@ -16,8 +17,7 @@ export async function sweepBilling(pool: Pool, queue: StartedQueue, job: Billing
     if (only && !only.has(firm.id)) continue;
     if (!job.force && localHour(firm.time_zone, now) !== BILLING_LOCAL_HOUR) continue;
     const data: BillingDailyJob = { tenantId: firm.id, localDate: localDate(firm.time_zone, now) };
-    const id = await queue.boss.send(QUEUES.billingDaily, data, { singletonKey: `${data.tenantId}:${data.localDate}` });
-    if (id) queued++;
+    if (await sendFirmDay(pool, queue, QUEUES.billingDaily, data)) queued++;
   }
   return queued;
 }
