@@ -44,8 +44,9 @@ export async function requestPortalLink(ctx: AppContext, email: string, next?: s
       // links an hour per account, then nothing more (the answer was the same 202 before this ran). Links
       // the firm's own mail carries (proposals, invoices) do not count.
       const recent = await tx.client.query<{ n: number }>(
-        `select count(*)::int as n from portal_links where portal_user_id = $1 and asked and created_at > now() - interval '1 hour'`,
-        [user.id],
+        `select count(*)::int as n from portal_links
+          where tenant_id = $1 and portal_user_id = $2 and asked and created_at > now() - interval '1 hour'`,
+        [tx.tenantId, user.id],
       );
       if (recent.rows[0].n >= LINKS_PER_HOUR) return;
       const { id: linkId, token } = await createPortalLink(tx, user.id, ctx.now(), PORTAL_LINK_MINUTES, { asked: true });

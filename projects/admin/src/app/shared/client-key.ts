@@ -1,9 +1,9 @@
 /**
- * Keys a form or a phone makes once for a thing it sends (a progress mark, a payment), so the same
- * thing sent again — a retry after a lost answer, a phone back online — is recorded once: the API
- * finds the first by its key.
+ * The key a form or a phone makes once for a thing it sends (a progress mark, a payment), so the same
+ * thing sent again — a retry after a lost answer, a phone back online — is recorded once: the API finds
+ * the first by its key. A random (version 4) UUID; `crypto.randomUUID` only exists on secure pages,
+ * `getRandomValues` everywhere.
  */
-/** A random (version 4) UUID; `crypto.randomUUID` only exists on secure pages, `getRandomValues` everywhere. */
 export function newClientKey(random: (bytes: Uint8Array) => Uint8Array = (bytes) => crypto.getRandomValues(bytes)): string {
   const b = random(new Uint8Array(16));
   b[6] = (b[6] & 0x0f) | 0x40;

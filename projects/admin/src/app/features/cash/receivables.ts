@@ -63,11 +63,6 @@ export class Receivables {
     initialValue: drillFromParams(this.route.snapshot.queryParams),
   });
   /** Apart from the drill-down, so opening a list never asks for the figures again. */
-  /** The same figures, invoice by invoice, as a spreadsheet file for the accountant. */
-  protected csvHref(asOf: string): string {
-    return `/api/cash/exports/receivables.csv?asOf=${encodeURIComponent(asOf)}`;
-  }
-
   private readonly asOf = computed(() => this.drill().asOf);
   protected readonly clientsListed = CLIENTS_LISTED;
   /** Every client who owes, or (the default) the 25 who owe most. */
@@ -92,6 +87,11 @@ export class Receivables {
     const view = this.view();
     return view ? drillHeading(view, this.drill(), this.invoices()[0]?.clientName) : '';
   });
+
+  /** The same figures, invoice by invoice, as a spreadsheet file for the accountant. */
+  protected csvHref(asOf: string): string {
+    return `/api/cash/exports/receivables.csv?asOf=${encodeURIComponent(asOf)}`;
+  }
 
   protected chooseDay(value: string): void {
     this.go({ ...this.drill(), asOf: /^\d{4}-\d{2}-\d{2}$/.test(value) ? value : null });
