@@ -3,7 +3,7 @@ import { withTenant } from '@layerbook/db';
 import Decimal from 'decimal.js';
 import { startTestServer, TestServer } from '../testing/harness';
 import { billingJob } from './billing-fixtures';
-import { addChangeOrder, sendChangeOrder } from './change-orders/change-order-fixtures';
+import { approvedChangeOrder } from './change-orders/change-order-fixtures';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -65,15 +65,7 @@ describe('a deposit credited pro rata on a progress-billed job', () => {
     const { f, valueLines, application } = await progressJob('Deduction Deposit Plaster', '762.12', ['5000.00', '5000.00']);
     const first = await application([{ valueLineId: valueLines[0], workToDate: { percent: 100 }, storedMaterials: '0' }]);
     expect(first.depositCredit).toBe('500.00');
-    const co = await sendChangeOrder(
-      f,
-      (await addChangeOrder(f, { title: 'Smaller ceilings', description: '', pricing: { kind: 'lumpSum', price: '-4000.00' } })).id,
-    );
-    const decided = await f.client.agent
-      .post(`/api/portal/change-orders/${co.id}/decision`)
-      .set('x-csrf-token', f.client.csrf())
-      .send({ decision: 'approve', signedName: 'Edwina Marl', consent: true });
-    expect(decided.status).toBe(200);
+    await approvedChangeOrder(f, { title: 'Smaller ceilings', description: '', pricing: { kind: 'lumpSum', price: '-4000.00' } });
     const second = await application([{ valueLineId: valueLines[1], workToDate: { percent: 100 }, storedMaterials: '0' }]);
     expect(sum([first.depositCredit, second.depositCredit])).toBe('1000.00');
     expect((await f.billing()).totals.unbilled).toBe('0.00');

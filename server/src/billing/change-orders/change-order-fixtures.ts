@@ -110,3 +110,14 @@ export async function markBilled(
     ]),
   );
 }
+
+/** Makes a change order, sends it and has the client approve it (typed signature): the approved order. */
+export async function approvedChangeOrder(f: Accepted, body: ChangeOrderCreate): Promise<ChangeOrderView> {
+  const sent = await sendChangeOrder(f, (await addChangeOrder(f, body)).id);
+  const res = await f.client.agent
+    .post(`/api/portal/change-orders/${sent.id}/decision`)
+    .set('x-csrf-token', f.client.csrf())
+    .send({ decision: 'approve', signedName: 'Edwina Marl', consent: true });
+  if (res.status !== 200) throw new Error(`change order not approved: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body as ChangeOrderView;
+}

@@ -2,7 +2,7 @@ import type { JobBillingView, JobProgressView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { startTestServer, TestServer } from '../../testing/harness';
 import { billingJob } from '../billing-fixtures';
-import { addChangeOrder, sendChangeOrder } from './change-order-fixtures';
+import { approvedChangeOrder } from './change-order-fixtures';
 import { billingQueueSettled } from '../progress-fixtures';
 
 let t: TestServer;
@@ -31,21 +31,11 @@ describe('the work a change order adds', () => {
     const started = await f.send('post', `/api/jobs/${f.jobId}/billing/start`);
     expect(started.status).toBe(200);
     const stage = (started.body as JobBillingView).lines.find((l) => l.trigger.kind === 'layerComplete')!;
-    const co = await sendChangeOrder(
-      f,
-      (
-        await addChangeOrder(f, {
-          title: 'Niche',
-          description: '',
-          pricing: { kind: 'engine', surfaceIds: [nicheId], finishSystemId: f.systemId },
-        })
-      ).id,
-    );
-    const decided = await f.client.agent
-      .post(`/api/portal/change-orders/${co.id}/decision`)
-      .set('x-csrf-token', f.client.csrf())
-      .send({ decision: 'approve', signedName: 'Edwina Marl', consent: true });
-    expect(decided.status).toBe(200);
+    await approvedChangeOrder(f, {
+      title: 'Niche',
+      description: '',
+      pricing: { kind: 'engine', surfaceIds: [nicheId], finishSystemId: f.systemId },
+    });
     // the stage payment grew with the change order
     const grown = (await f.billing()).lines.find((l) => l.id === stage.id)!;
     expect(Number(grown.amount)).toBeGreaterThan(Number(stage.amount));
