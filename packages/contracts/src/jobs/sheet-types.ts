@@ -80,6 +80,8 @@ export interface SheetSurfaceLayer {
 
 export interface SheetSurface {
   readonly id: string;
+  /** the approved change order that added this surface's work; null for the work sold */
+  readonly changeOrder: number | null;
   readonly name: string;
   readonly finishId: string;
   /** 'area' in lengthUnit², 'length' in lengthUnit */

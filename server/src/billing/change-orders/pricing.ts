@@ -1,11 +1,12 @@
 import type { ChangeOrderEngineDetail, ChangeOrderPricing, EstimateInputs, TaxMode } from '@layerbook/contracts';
 import { assembleEstimateInput, toEngineSettings } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { computeEstimate, DomainInputError, measureText, minorUnitDigits, salesTax } from '@layerbook/domain';
+import { computeEstimate, DomainInputError, measureText, minorUnitDigits, salesTax, toResultJson } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { getEstimatingSettings } from '../../firms/estimating';
 import { badRequest } from '../../http/problem';
 import { loadEstimateContext } from '../../proposals/estimate-context';
+import { type ChangeOrderCrewPart, crewPartOf } from '../../jobs/sheet/change-order-work';
 import { type JobWorkItem, workItemsOf } from '../work-items';
 
 /** What `change_orders.detail` holds: how it was priced, and the sums the client approved. */
@@ -17,6 +18,8 @@ export interface StoredDetail {
   readonly engine?: ChangeOrderEngineDetail;
   /** engine pricing: the layers on each surface it adds, which become the job's work to mark when approved */
   readonly workItems?: readonly ChangeOrderWorkItem[];
+  /** engine pricing: what the crew's job sheet shows of the added work once approved (no price) */
+  readonly crew?: ChangeOrderCrewPart;
   /** frozen at approval */
   readonly contractSumBefore?: string;
   readonly contractSumAfter?: string;
@@ -122,6 +125,7 @@ async function priceWithEngine(
     surfaceIds: pricing.surfaceIds,
     finishSystemId: pricing.finishSystemId,
     engine,
+    crew: crewPartOf(toResultJson(result), context, system),
     workItems: workItemsOf(result.surfaces, null, roomOf).map(({ roomName, surfaceId, surfaceName, layerId, layerName, layerOrder }) => ({
       roomName,
       surfaceId,

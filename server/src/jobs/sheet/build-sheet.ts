@@ -6,15 +6,17 @@ import { sheetCautions, withCrewLead } from './sheet-cautions';
 /**
  * The crew's job sheet from what was sold: rooms and surfaces in the proposal's order with their
  * measured sizes, each surface's layers with their work item and material need, the finishes' layers
- * in order, the products with their hazard flags, the dated day plan, the cautions and the approved change orders. The source
+ * in order, the products with their hazard flags, the dated day plan, the cautions and the approved change orders (the surfaces
+ * they add are in their rooms, marked with their number, after the work sold). The source
  * holds no money, and nothing here adds any. Pure.
  */
 export function buildSheet(src: SheetSource, workItems: readonly WorkItemView[], photos: readonly JobPhotoView[]): JobSheet {
   const surfaces = src.result?.surfaces ?? [];
   const items = new Map(workItems.map((w) => [`${w.surfaceId}/${w.layerId}`, w]));
 
-  const toSurface = (s: (typeof surfaces)[number]): SheetSurface => ({
+  const toSurface = (s: (typeof surfaces)[number], changeOrder: number | null = null): SheetSurface => ({
     id: s.surfaceId,
+    changeOrder,
     name: s.name,
     finishId: s.finishSystemId,
     measure: s.measure.measure,
@@ -43,17 +45,23 @@ export function buildSheet(src: SheetSource, workItems: readonly WorkItemView[],
   const roomOrder = new Map(src.scope.map((room, i) => [room.id, i]));
   const surfaceOrder = new Map(src.scope.flatMap((room) => room.surfaces.map((s, i) => [s.id, i] as const)));
   const scopeNames = new Map(src.scope.map((room) => [room.id, room.name]));
-  const roomIds = [...new Set(surfaces.map((s) => s.roomId))].sort((a, b) => (roomOrder.get(a) ?? far) - (roomOrder.get(b) ?? far));
+  // A change order's surfaces follow the sold ones of their room; a room only they reach comes after the sold rooms.
+  const roomIds = [...new Set([...surfaces, ...src.added.map((a) => a.surface)].map((s) => s.roomId))].sort(
+    (a, b) => (roomOrder.get(a) ?? far) - (roomOrder.get(b) ?? far),
+  );
   const rooms: SheetRoom[] = roomIds.map((roomId) => ({
     id: roomId,
     name: scopeNames.get(roomId) ?? src.roomNames.get(roomId) ?? '',
-    surfaces: surfaces
-      .filter((s) => s.roomId === roomId)
-      .sort((a, b) => (surfaceOrder.get(a.surfaceId) ?? far) - (surfaceOrder.get(b.surfaceId) ?? far))
-      .map(toSurface),
+    surfaces: [
+      ...surfaces
+        .filter((s) => s.roomId === roomId)
+        .sort((a, b) => (surfaceOrder.get(a.surfaceId) ?? far) - (surfaceOrder.get(b.surfaceId) ?? far))
+        .map((s) => toSurface(s)),
+      ...src.added.filter((a) => a.surface.roomId === roomId).map((a) => toSurface(a.surface, a.changeOrder)),
+    ],
   }));
 
-  const usedSystems = new Set(surfaces.map((s) => s.finishSystemId));
+  const usedSystems = new Set([...surfaces, ...src.added.map((a) => a.surface)].map((s) => s.finishSystemId));
   const finishes: SheetFinish[] = src.finishSystems
     .filter((f) => usedSystems.has(f.id))
     .map((f) => ({
@@ -92,7 +100,7 @@ export function buildSheet(src: SheetSource, workItems: readonly WorkItemView[],
     finishes,
     products,
     dayPlan: schedule ? planDays(schedule) : [],
-    cautions: sheetCautions(withCrewLead(src.result?.cautions ?? [], src.result?.lead, src.firm.country), src.firm.country),
+    cautions: sheetCautions(withCrewLead(src.cautions, src.result?.lead, src.firm.country), src.firm.country),
     changes: src.changes,
     workItems,
     photos,

@@ -1,14 +1,16 @@
 import type { JobStatus, ProposalSnapshot, SheetChange } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import type { EstimateResultJson, FinishLayer, Product } from '@layerbook/domain';
+import { type EstimateResultJson, type FinishLayer, layerProductIds, type Product } from '@layerbook/domain';
 import { notFound } from '../../http/problem';
+import { type AddedSurface, type ChangeOrderCrewPart, withChangeWork } from './change-order-work';
+import type { StoredCaution } from './sheet-cautions';
 
 /**
  * What a job sheet is built from, read in one tenant transaction: the job and its site, the firm's
  * units, zone and country, the accepted option's stored result and the proposal's room order, and
  * the finish systems and products that result names, as the signed version kept them (the
- * library's current rows for older versions; archived ones too: the job was sold with them). No
- * price, cost or total is selected.
+ * library's current rows for older versions; archived ones too: the job was sold with them), and
+ * what the approved change orders add (change-order-work.ts). No price, cost or total is selected.
  */
 export interface SheetSource {
   readonly job: {
@@ -30,6 +32,10 @@ export interface SheetSource {
   readonly products: ReadonlyArray<Pick<Product, 'id' | 'name' | 'unit' | 'hazards'>>;
   /** the change orders the client approved, by number (no price is selected) */
   readonly changes: readonly SheetChange[];
+  /** the surfaces approved change orders add, in their order */
+  readonly added: readonly AddedSurface[];
+  /** the result's cautions with the approved change orders' merged in */
+  readonly cautions: readonly StoredCaution[];
 }
 
 interface JobRow {
@@ -86,10 +92,6 @@ function pickLibrary(library: SheetLibrary, surfaces: SheetSurfaces): SheetLibra
   return { finishSystems, products: library.products.filter((p) => productIds.has(p.id)) };
 }
 
-/** The product ids a layer uses: the product applied as is, or its recipe's components. */
-export const layerProductIds = (layer: Pick<FinishLayer, 'productId' | 'recipe'>): string[] =>
-  layer.recipe ? layer.recipe.components.map((c) => c.productId) : layer.productId ? [layer.productId] : [];
-
 export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<SheetSource> {
   const { rows } = await tx.client.query<JobRow>(
     `select j.id, j.title, j.status, j.start_date::text as start_date, j.finish_date::text as finish_date,
@@ -112,21 +114,24 @@ export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<Shee
 
   // The finish systems and products as the version the client signed kept them; the library as it is now
   // only for versions made before versions kept theirs (an edit for future work must not reach this crew).
-  const { finishSystems, products } = pickLibrary(r.library ?? (await loadLibrary(tx, surfaces)), surfaces);
+  const soldLibrary = pickLibrary(r.library ?? (await loadLibrary(tx, surfaces)), surfaces);
   const { rows: changes } = await tx.client.query<{
     number: number;
     title: string;
     description: string;
     approved_on: string;
     engine: { finishName: string; surfaces: SheetChange['surfaces'] } | null;
+    crew: ChangeOrderCrewPart | null;
   }>(
     `select co.number, co.title, co.description, (co.decided_at at time zone f.time_zone)::date::text as approved_on,
-            co.detail->'engine' as engine
+            co.detail->'engine' as engine, co.detail->'crew' as crew
        from change_orders co join firms f on f.id = co.tenant_id
       where co.tenant_id = $1 and co.job_id = $2 and co.status = 'approved' order by co.number`,
     [tx.tenantId, jobId],
   );
-  const roomIds = [...new Set(surfaces.map((s) => s.roomId))];
+  const lengthUnit = r.length_unit ?? (r.units === 'metric' ? 'm' : 'ft');
+  const { added, library, cautions } = withChangeWork({ library: soldLibrary, cautions: r.result?.cautions ?? [] }, changes, lengthUnit);
+  const roomIds = [...new Set([...surfaces, ...added.map((a) => a.surface)].map((s) => s.roomId))];
   const { rows: rooms } = await tx.client.query<{ id: string; name: string }>(
     `select id, name from rooms where tenant_id = $1 and id::text = any($2::text[])`,
     [tx.tenantId, roomIds],
@@ -142,12 +147,14 @@ export async function loadSheetSource(tx: TenantTx, jobId: string): Promise<Shee
       siteAddress: r.site_address,
     },
     firm: { units: r.units, timeZone: r.time_zone, country: r.country },
-    lengthUnit: r.length_unit ?? (r.units === 'metric' ? 'm' : 'ft'),
+    lengthUnit,
     result: r.result,
+    cautions,
     scope: r.scope ?? [],
     roomNames: new Map(rooms.map((room) => [room.id, room.name])),
-    finishSystems,
-    products,
+    finishSystems: library.finishSystems,
+    products: library.products,
+    added,
     changes: changes.map((c) => ({
       number: c.number,
       title: c.title,

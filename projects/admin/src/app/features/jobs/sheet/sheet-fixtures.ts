@@ -115,6 +115,7 @@ export const sheet: JobSheet = {
       surfaces: [
         {
           id: 's-1',
+          changeOrder: null,
           name: 'Walls',
           finishId: 'f-lime',
           measure: 'area',

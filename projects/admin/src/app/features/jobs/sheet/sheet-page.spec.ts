@@ -101,7 +101,13 @@ describe('SheetPage', () => {
         surfaces: [{ room: 'Landing', surface: 'Niche', quantity: '12 ft²' }],
       },
     ];
-    const { text } = await render('en', { ...sheet, changes });
+    // the niche the change adds is work to mark like the sold surfaces, tagged with its change
+    const sold = sheet.rooms[0].surfaces[0];
+    const niche = { ...sold, id: 's-9', name: 'Niche', changeOrder: 1, layers: [{ ...sold.layers[1], workItemId: 'w-9', doneOn: null }] };
+    const rooms = [...sheet.rooms, { id: 'r-9', name: 'Landing', surfaces: [niche] }];
+    const { text, button, host } = await render('en', { ...sheet, changes, rooms });
+    expect(host.querySelector('[aria-label="Landing · Niche"] .tag')?.textContent?.trim()).toBe('Added by change 1');
+    expect(button('Mark done: Glaze coat, Landing · Niche')).not.toBeNull();
     expect(text()).toContain('Changes the client approved');
     expect(text()).toContain('Change 1: Venetian niche');
     expect(text()).toContain('Approved Dec 1, 2026');

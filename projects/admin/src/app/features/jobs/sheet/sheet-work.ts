@@ -31,7 +31,7 @@ function markProblem(error: unknown): string {
     @for (room of s.rooms; track room.id) {
       <section class="room" [attr.aria-labelledby]="'room-' + room.id">
         <h3 [id]="'room-' + room.id">{{ room.name }}</h3>
-        @for (surface of room.surfaces; track surface.id) {
+        @for (surface of room.surfaces; track surface.id + '/' + surface.changeOrder) {
           @let size = sizes(surface);
           @let unit = 'sheet.units.' + size.unit | translate;
           <div class="surface" role="group" [attr.aria-label]="room.name + ' · ' + surface.name">
@@ -57,8 +57,11 @@ function markProblem(error: unknown): string {
                 </dd>
               </div>
             </dl>
-            @if (surface.isCeiling || surface.isCurved) {
+            @if (surface.isCeiling || surface.isCurved || surface.changeOrder !== null) {
               <p class="tags">
+                @if (surface.changeOrder !== null) {
+                  <span class="tag added">{{ 'sheet.work.addedBy' | translate: { number: surface.changeOrder } }}</span>
+                }
                 @if (surface.isCeiling) {
                   <span class="tag">{{ 'sheet.work.ceiling' | translate }}</span>
                 }
