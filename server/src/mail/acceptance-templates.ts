@@ -13,6 +13,8 @@ export function proposalAcceptedMail(p: {
   signedName: string;
   signedOn: string;
   url: string;
+  /** the deposit invoice issued and sent at acceptance (the firm's billing setting), or null */
+  depositNumber: string | null;
 }): RenderedMail {
   return render(
     `${p.clientName} accepted ${p.title}`,
@@ -20,7 +22,9 @@ export function proposalAcceptedMail(p: {
     [
       `${p.clientName} accepted version ${p.version} of "${p.title}", choosing "${p.optionLabel}" for ${p.total}.`,
       `Signed by typing the name "${p.signedName}" on ${p.signedOn}.`,
-      'The job has been made with a draft payment schedule taken from the proposal. Check it before the deposit invoice goes out.',
+      p.depositNumber === null
+        ? 'The job has been made with a draft payment schedule taken from the proposal. Check it before the deposit invoice goes out.'
+        : `The job has been made with a payment schedule taken from the proposal, and deposit invoice ${p.depositNumber} was issued and e-mailed to the client, as your billing settings say. Check the rest of the schedule on the job.`,
     ],
     { label: 'Open the job', url: p.url },
     `You are receiving this as an owner or the office of ${p.firmName}.`,
@@ -40,6 +44,8 @@ export function proposalAcceptedClientMail(p: {
   reference: string;
   url: string;
   language?: Language;
+  /** the deposit invoice sent in its own e-mail at acceptance, or null */
+  depositNumber: string | null;
 }): RenderedMail {
   const language = p.language ?? 'en';
   const t = translator(language);
@@ -51,7 +57,9 @@ export function proposalAcceptedClientMail(p: {
       t('mail.hello', { name: p.clientName }),
       t('mail.proposalAccepted.accepted', { version: p.version, title: p.title, firm, option: p.optionLabel, total: p.total }),
       t('mail.proposalAccepted.signed', { signedName: p.signedName, signedOn: p.signedOn, reference: p.reference }),
-      t('mail.proposalAccepted.next', { firm }),
+      p.depositNumber === null
+        ? t('mail.proposalAccepted.next', { firm })
+        : t('mail.proposalAccepted.nextDepositSent', { firm, number: p.depositNumber }),
     ],
     { label: t('mail.proposalAccepted.action'), url: p.url },
     t('mail.proposalAccepted.footer', { firm }),

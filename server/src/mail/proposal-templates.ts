@@ -31,3 +31,25 @@ export function proposalSentMail(p: {
     language,
   );
 }
+
+/** To the client before a sent proposal lapses, in their language; `expiresOn` written out for them. */
+export function proposalExpiringMail(p: {
+  firmName: string;
+  clientName: string;
+  title: string;
+  version: number;
+  expiresOn: string;
+  url: string;
+  language: Language;
+}): RenderedMail {
+  const t = translator(p.language);
+  const words = { firm: p.firmName, title: p.title, version: p.version, expiresOn: p.expiresOn };
+  return render(
+    t('mail.proposalExpiring.subject', words),
+    t('mail.proposalExpiring.heading', words),
+    [t('mail.hello', { name: p.clientName }), t('mail.proposalExpiring.body', words)],
+    { label: t('mail.proposalExpiring.action'), url: p.url },
+    t('mail.proposalExpiring.linkOnce'),
+    p.language,
+  );
+}

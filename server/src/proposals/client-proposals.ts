@@ -46,9 +46,9 @@ export async function loadClientVersion(tx: TenantTx, client: ClientPrincipal, i
   const { rows } = await tx.client.query<ClientVersionRow>(
     `select v.id, v.estimate_id, v.version, v.status, v.snapshot, v.snapshot_hash, v.expires_on::text as expires_on, v.sent_at, v.decided_at,
             v.accepted_variant_id, v.signed_name, v.client_comment, e.client_id, e.site_id, e.inquiry_id,
-            (select max(o.version) from proposal_versions o where o.tenant_id = v.tenant_id and o.estimate_id = v.estimate_id and o.status <> 'draft')::int as newest_sent
+            (select max(o.version) from proposal_versions o where o.tenant_id = v.tenant_id and o.estimate_id = v.estimate_id and o.sent_at is not null)::int as newest_sent
        from proposal_versions v join estimates e on e.tenant_id = v.tenant_id and e.id = v.estimate_id
-      where v.tenant_id = $1 and v.id = $2 and v.status <> 'draft' and e.client_id = $3
+      where v.tenant_id = $1 and v.id = $2 and v.sent_at is not null and e.client_id = $3
       ${lock ? 'for update of v, e' : ''}`,
     [tx.tenantId, id, clientId],
   );
@@ -74,9 +74,15 @@ export function toPortalProposal(row: ClientVersionRow, today: string, reader?: 
   };
 }
 
+/** How a signed-in client reads a proposal's words: their language, money and dates for it in the firm's country. */
+export const clientWords = (client: ClientPrincipal): WordsReader => ({
+  language: client.language,
+  locale: localeOf(client.language, client.country),
+});
+
 export async function getClientProposal(tx: TenantTx, client: ClientPrincipal, id: string, now: Date): Promise<PortalProposal> {
   const row = await loadClientVersion(tx, client, id);
-  return toPortalProposal(row, await firmToday(tx, now), { language: client.language, locale: localeOf(client.language, client.country) });
+  return toPortalProposal(row, await firmToday(tx, now), clientWords(client));
 }
 
 /** Each estimate of this client that has a sent proposal, with its newest sent version. */
@@ -93,8 +99,8 @@ export async function listClientProposals(tx: TenantTx, client: ClientPrincipal)
     expires_on: string;
     sent_at: Date | null;
   }>(
-    `select distinct on (e.id) e.id as estimate_id, e.title, v.snapshot->'site' as site, v.id, v.version, v.status, v.expires_on::text as expires_on, v.sent_at, e.created_at
-       from estimates e join proposal_versions v on v.tenant_id = e.tenant_id and v.estimate_id = e.id and v.status <> 'draft'
+    `select distinct on (e.id) e.id as estimate_id, v.snapshot->>'title' as title, v.snapshot->'site' as site, v.id, v.version, v.status, v.expires_on::text as expires_on, v.sent_at, e.created_at
+       from estimates e join proposal_versions v on v.tenant_id = e.tenant_id and v.estimate_id = e.id and v.sent_at is not null
       where e.tenant_id = $1 and e.client_id = $2
       order by e.id, v.version desc`,
     [tx.tenantId, clientId],

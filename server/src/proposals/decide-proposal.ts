@@ -15,7 +15,7 @@ import { badRequest, conflict, HttpError } from '../http/problem';
 import { moveStage } from '../inquiries/service';
 import { snapshotHash } from './snapshot-hash';
 import { createJobFromAcceptance } from '../jobs/create-job';
-import { firmToday, isLatest, loadClientVersion, toPortalProposal, type ClientVersionRow } from './client-proposals';
+import { clientWords, firmToday, isLatest, loadClientVersion, toPortalProposal, type ClientVersionRow } from './client-proposals';
 import { mailAcceptance, mailAnswer } from './decision-mail';
 import { longDate } from '../i18n/long-date';
 
@@ -109,10 +109,11 @@ export async function acceptProposal(
       portalUserId: client.id,
     },
   });
-  await mailAcceptance(tx, ctx, { row, option, signedName: input.signedName, signedAt: now, client, jobId });
-  // Last: issuing holds the firm's invoice counter until this transaction commits.
+  // Issuing holds the firm's invoice counter until this transaction commits: only the e-mails, which say
+  // whether the deposit invoice went out, come after it.
   const depositInvoiceId = await depositAtAcceptance(tx, ctx, jobId, today, now);
-  return { ...toPortalProposal(await loadClientVersion(tx, client, id), today), depositInvoiceId };
+  await mailAcceptance(tx, ctx, { row, option, signedName: input.signedName, signedAt: now, client, jobId, depositInvoiceId });
+  return { ...toPortalProposal(await loadClientVersion(tx, client, id), today, clientWords(client)), depositInvoiceId };
 }
 
 /** The client declines, or asks for changes: the version closes and the office hears of it. */
@@ -150,5 +151,5 @@ export async function answerProposal(
     data: { version: row.version, comment, portalUserId: client.id },
   });
   await mailAnswer(tx, ctx, { row, answer, comment, client });
-  return toPortalProposal(await loadClientVersion(tx, client, id), today);
+  return toPortalProposal(await loadClientVersion(tx, client, id), today, clientWords(client));
 }

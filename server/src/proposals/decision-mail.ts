@@ -25,9 +25,27 @@ const money = (locale: string, currency: string, amount: string) =>
 export async function mailAcceptance(
   tx: TenantTx,
   ctx: AppContext,
-  p: { row: ClientVersionRow; option: SnapshotOption; signedName: string; signedAt: Date; client: ClientPrincipal; jobId: string },
+  p: {
+    row: ClientVersionRow;
+    option: SnapshotOption;
+    signedName: string;
+    signedAt: Date;
+    client: ClientPrincipal;
+    jobId: string;
+    /** the deposit invoice issued at acceptance, if the firm's setting issued one */
+    depositInvoiceId: string | null;
+  },
 ): Promise<void> {
   const snap = p.row.snapshot;
+  const depositNumber =
+    p.depositInvoiceId === null
+      ? null
+      : ((
+          await tx.client.query<{ number_text: string | null }>(`select number_text from invoices where tenant_id = $1 and id = $2`, [
+            tx.tenantId,
+            p.depositInvoiceId,
+          ])
+        ).rows[0]?.number_text ?? null);
   const base = ctx.config.PUBLIC_URL;
   const timeZone = await firmTimeZone(tx, tx.tenantId);
   const common = {
@@ -39,6 +57,7 @@ export async function mailAcceptance(
     total: money(snap.locale, snap.currency, p.option.total),
     signedName: p.signedName,
     signedOn: firmDateTime(p.signedAt, snap.locale, timeZone),
+    depositNumber,
   };
   const clientLocale = localeOf(p.client.language, p.client.country);
   for (const staff of await officeRecipients(tx)) {

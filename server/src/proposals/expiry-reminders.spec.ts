@@ -16,7 +16,7 @@ describe('proposal expiry reminders', () => {
     const sweep = () => t.queue.boss.send('follow-up-sweep', { force: true, tenantIds: [p.firmId, later.firmId] });
     await sweep();
     const mail = await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(p.clientEmail) && /^Reminder:/.test(m.subject ?? ''));
-    expect(mail.subject).toContain('2026-12-03');
+    expect(mail.subject).toContain('December 3, 2026');
     expect(decodeURIComponent(linkIn(mail))).toContain(`/portal/proposals/${p.version.id}`);
     await sweep();
     // A marker through the same queue: once it has arrived, any duplicate would have too.

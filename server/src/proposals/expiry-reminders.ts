@@ -4,8 +4,11 @@ import type { Logger } from 'pino';
 import { createPortalLink } from '../auth/portal-auth';
 import type { Config } from '../config';
 import type { JobQueue } from '../queue/job-queue';
+import { localeOf } from '../i18n/catalog';
+import { longDate } from '../i18n/long-date';
+import { portalUserReader } from '../i18n/reader';
 import { enqueueMail } from '../mail/outbox';
-import { render } from '../mail/templates';
+import { proposalExpiringMail } from '../mail/proposal-templates';
 
 /** Reminders go out this many days before a sent proposal's last day (common practice, no source). */
 export const REMINDER_DAYS_BEFORE = 3;
@@ -37,7 +40,7 @@ export async function sendProposalReminders(
 ): Promise<number> {
   return withTenant(pool, job.tenantId, async (tx) => {
     const { rows } = await tx.client.query<OpenVersion>(
-      `select v.id, v.version, e.title, v.expires_on::text as expires_on, f.name as firm_name, p.id as portal_user_id, p.name, p.email
+      `select v.id, v.version, v.snapshot->>'title' as title, v.expires_on::text as expires_on, f.name as firm_name, p.id as portal_user_id, p.name, p.email
          from proposal_versions v
          join estimates e on e.id = v.estimate_id and e.tenant_id = v.tenant_id
          join firms f on f.id = v.tenant_id
@@ -53,21 +56,22 @@ export async function sendProposalReminders(
       if (sent.length) continue;
       const link = await createPortalLink(tx, v.portal_user_id, now, LINK_MINUTES);
       const url = `${config.PUBLIC_URL}/portal/sign-in/link?token=${link.token}&next=${encodeURIComponent(`/portal/proposals/${v.id}`)}`;
+      // In the client's language (theirs, else the firm's), the day written out for it, as the proposal's own e-mail.
+      const reader = await portalUserReader(tx, v.portal_user_id);
       await enqueueMail(tx, queue, {
         purposeKey,
         tenantId: tx.tenantId,
         to: v.email,
         sender: 'firm',
-        ...render(
-          `Reminder: your proposal from ${v.firm_name} is open until ${v.expires_on}`,
-          `Your proposal is open until ${v.expires_on}`,
-          [
-            `Hello ${v.name},`,
-            `${v.firm_name}'s proposal "${v.title}" (version ${v.version}) stands until ${v.expires_on}. You can read it, accept an option, or ask for changes in your portal.`,
-          ],
-          { label: 'Read the proposal', url },
-          'The link signs you in once and works for three days.',
-        ),
+        ...proposalExpiringMail({
+          firmName: v.firm_name,
+          clientName: v.name,
+          title: v.title,
+          version: v.version,
+          expiresOn: longDate(v.expires_on, localeOf(reader.language, reader.country)),
+          url,
+          language: reader.language,
+        }),
       });
       queued++;
     }

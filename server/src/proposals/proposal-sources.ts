@@ -75,7 +75,7 @@ interface EstimateRow {
   start_date: string;
   site_id: string;
   client_id: string;
-  result: { variants?: StoredVariant[] } | null;
+  result: { variants?: StoredVariant[]; lengthUnit?: 'ft' | 'm' } | null;
   client_notes: string | null;
 }
 
@@ -136,6 +136,13 @@ export async function loadProposalSources(tx: TenantTx, estimateId: string): Pro
       [tx.tenantId],
     )
   ).rows[0];
+  // Sizes computed in feet are not square metres: a firm that changed its units since the save prices it again first.
+  const firmUnit = firm.units === 'metric' ? 'm' : 'ft';
+  if (est.result?.lengthUnit !== undefined && est.result.lengthUnit !== firmUnit)
+    throw conflict(
+      `This estimate was saved in ${est.result.lengthUnit === 'm' ? 'metres' : 'feet'} and the firm now measures in ${firmUnit === 'm' ? 'metres' : 'feet'}. Open the estimate and save it again first.`,
+      [{ field: 'estimateId', message: 'Save the estimate again in the firm’s units.' }],
+    );
   const client = (
     await tx.client.query<ClientRow>(`select id, name, email, phone from clients where tenant_id = $1 and id = $2`, [
       tx.tenantId,

@@ -10,6 +10,7 @@ import { proposalSentMail } from '../mail/proposal-templates';
 import { ensurePortalAccount } from './client-portal-account';
 import { assertEstimateOpen } from './estimates';
 import { getVersion, lockVersion } from './proposal-versions';
+import { longDate } from '../i18n/long-date';
 import { localeOf } from '../i18n/catalog';
 import { clientReader } from '../i18n/reader';
 
@@ -79,9 +80,7 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
       clientName: client.name,
       title: snap.title,
       version: version.version,
-      expiresOn: new Intl.DateTimeFormat(localeOf(reader.language, reader.country), { dateStyle: 'long', timeZone: 'UTC' }).format(
-        new Date(`${snap.expiresOn}T00:00:00Z`),
-      ),
+      expiresOn: longDate(snap.expiresOn, localeOf(reader.language, reader.country)),
       url: `${base}/portal/sign-in/link?token=${token}&next=/portal/proposals/${id}`,
       linkDays: PROPOSAL_LINK_DAYS,
       portalUrl: `${base}/portal/sign-in`,

@@ -2,7 +2,7 @@ import type { TenantTx } from '@layerbook/db';
 import { firmDateTime, firmTimeZone } from '../mail/firm-time';
 import type { ClientPrincipal } from '../http/principal';
 import { conflict } from '../http/problem';
-import { loadClientVersion, type ClientVersionRow } from './client-proposals';
+import { clientWords, loadClientVersion, type ClientVersionRow } from './client-proposals';
 import type { SignatureRecord } from './pdf/signature-section';
 
 /**
@@ -26,7 +26,8 @@ export async function loadSignedCopy(
     row,
     signature: {
       signedName: row.signed_name,
-      signedAt: firmDateTime(row.decided_at, row.snapshot.locale, await firmTimeZone(tx, tx.tenantId)),
+      // In the reader's language, as the rest of their copy; the time in the firm's zone.
+      signedAt: firmDateTime(row.decided_at, clientWords(client).locale, await firmTimeZone(tx, tx.tenantId)),
       optionId: row.accepted_variant_id,
       ip: rows[0]?.signed_ip ?? '',
       snapshotHash: row.snapshot_hash,

@@ -124,7 +124,8 @@ export interface EstimateView {
   readonly status: EstimateStatus;
   readonly inputs: EstimateInputs;
   /** the server's numbers, per option; null until the first save with a finish on some surface */
-  readonly result: { readonly variants: readonly EstimateOptionResult[] } | null;
+  /** `lengthUnit`: the unit the sizes were computed in, the firm's when saved (results saved before it was kept lack it) */
+  readonly result: { readonly variants: readonly EstimateOptionResult[]; readonly lengthUnit?: 'ft' | 'm' } | null;
   readonly price: string | null;
   readonly computedAt: string | null;
   /** what the browser needs to recompute live with the same engine */
