@@ -50,12 +50,12 @@ const snapshot = {
   safety: { standing: CAUTION_WORDS.standing, cautions: [lime] },
 } satisfies ProposalSnapshot;
 
-async function render(language: 'en' | 'es') {
+async function render(language: 'en' | 'es', shown: ProposalSnapshot = snapshot) {
   const words = language === 'es' ? { proposals: proposalsEs, cautions: cautionsEs } : { proposals: proposalsEn, cautions: cautionsEn };
   TestBed.configureTestingModule({ providers: [provideTestI18n(words, language)] });
   await TestBed.inject(Language).use(language);
   const fixture = TestBed.createComponent(ProposalDocument);
-  fixture.componentRef.setInput('snapshot', snapshot);
+  fixture.componentRef.setInput('snapshot', shown);
   await fixture.whenStable();
   return fixture.nativeElement as HTMLElement;
 }
@@ -96,6 +96,15 @@ describe('the proposal document', () => {
     expect(html.querySelector('.total')?.textContent).toBe('$9,742.50');
     expect(html.textContent).toContain(
       'Un anticipo del 30 % al aceptar y el resto al terminar, según el calendario de pagos de cada opción.',
+    );
+  });
+
+  it('says under an option’s payments when its deposit was limited by the law, as the PDF does', async () => {
+    expect((await render('en')).querySelector('.capped')).toBeNull();
+    TestBed.resetTestingModule();
+    const capped = { ...snapshot, options: [{ ...snapshot.options[0], isDepositCapped: true }] };
+    expect((await render('es', capped)).querySelector('.capped')?.textContent?.trim()).toBe(
+      'El anticipo se limita al importe que permite la ley aquí; el resto pasa al pago final.',
     );
   });
 });

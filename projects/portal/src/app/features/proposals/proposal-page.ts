@@ -96,6 +96,11 @@ export class ProposalPage {
     const p = this.proposal();
     return !!p && p.status === 'sent' && p.isLatest && !p.isExpired;
   });
+  /** Sent and the newest, but past its expiry day: no acceptance, though changes can still be asked for. */
+  protected readonly isExpiredOpen = computed(() => {
+    const p = this.proposal();
+    return !!p && p.status === 'sent' && p.isLatest && p.isExpired;
+  });
   /** an answer given on this page (the loaded proposal replaced by the answer) */
   private readonly isAnsweredHere = signal(false);
   private readonly isLanguageChanged = this.language.changedSinceNow();
