@@ -11,6 +11,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { withStaff } from '../http/guards';
+import { clientReader } from '../i18n/reader';
 import { parse, parseChanges } from '../http/validate';
 import { proposalFilename } from './pdf/filename';
 import { renderProposalPdf } from './pdf/render-proposal';
@@ -61,10 +62,18 @@ export function proposalRoutes(ctx: AppContext): Router {
     );
   });
 
-  // Drawn from the stored snapshot after the transaction ends: a GET with no side effects.
+  // Drawn from the stored snapshot after the transaction ends: a GET with no side effects. In the client's
+  // language (theirs, else the firm's), as they get it — the office prints what the client reads, as for invoices.
   router.get('/:id/pdf', async (req, res) => {
-    const version = await withStaff(ctx, req, 'office', (tx) => getVersion(tx, parse(idParam, req.params).id));
-    const pdf = await renderProposalPdf(version.snapshot, { version: version.version, snapshotHash: version.snapshotHash });
+    const { version, language } = await withStaff(ctx, req, 'office', async (tx) => {
+      const found = await getVersion(tx, parse(idParam, req.params).id);
+      const { rows } = await tx.client.query<{ client_id: string }>(`select client_id from estimates where tenant_id = $1 and id = $2`, [
+        tx.tenantId,
+        found.estimateId,
+      ]);
+      return { version: found, language: (await clientReader(tx, rows[0].client_id)).language };
+    });
+    const pdf = await renderProposalPdf(version.snapshot, { version: version.version, snapshotHash: version.snapshotHash, language });
     res.set({
       'content-type': 'application/pdf',
       'content-disposition': `attachment; filename="${proposalFilename(version.title, version.version)}"`,
