@@ -25,6 +25,8 @@ interface InvoiceRow {
 /**
  * Invoices issued in the range (drafts have no issue date, so none), void ones included with
  * their status. Amount due is the invoice list's (total − paid − credited; nothing on a void one).
+ * Retainage is a progress application's held to date, as the application states it (each one
+ * restates the job's whole retainage, so the column is not summed down a job's invoices).
  */
 export const invoicesExport: ExportSpec<InvoiceRow> = {
   header: [
@@ -42,7 +44,7 @@ export const invoicesExport: ExportSpec<InvoiceRow> = {
     'Total',
     'Paid',
     'Credited',
-    'Retainage held',
+    'Retainage held to date',
     'Amount due',
   ],
   sql: `select i.number_text, i.issued_on::text as issued_on, i.due_on::text as due_on, i.status, i.kind, c.name as client_name,

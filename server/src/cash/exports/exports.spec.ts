@@ -85,6 +85,8 @@ describe('CSV exports for the accountant', () => {
     // RFC 4180 §2: CRLF line ends, a header line first; a UTF-8 byte-order mark leads (common practice, no source)
     expect(res.text.startsWith('\uFEFFInvoice number,Issued on,Due on,Status,Kind,Client,Job,Currency,Subtotal,')).toBe(true);
     expect(res.text.split('\r\n')).toHaveLength(5);
+    // a progress application restates the job's whole retainage: the column says so, so nobody sums it down a job
+    expect(res.text.split('\r\n')[0]).toContain(',Credited,Retainage held to date,Amount due');
 
     const rows = rowsOf(res);
     expect(rows.map((r) => [r['Invoice number'], r['Issued on'], r.Status, r.Total, r['Amount due'], r.Currency])).toEqual([
