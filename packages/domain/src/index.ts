@@ -23,7 +23,7 @@ export { addDays, daysBetween, fromDayNumber, isoWeekLabel, isoWeekday, mondayOf
 
 // money
 export type { MoneyInput } from './money/money';
-export { fromMinorUnits, roundToCurrency, roundsToZero, sumMoney, toMinorUnits } from './money/money';
+export { fromMinorUnits, percentShare, roundToCurrency, roundsToZero, sumMoney, toMinorUnits } from './money/money';
 export { isKnownCurrency, knownCurrencies, minorUnitDigits } from './money/currency';
 export type { ProcessorCurrencyRule } from './money/stripe-amount';
 export { fromProcessorAmount, processorCurrencyRule, processorMinimumCharge, toProcessorAmount } from './money/stripe-amount';

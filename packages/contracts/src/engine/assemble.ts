@@ -1,4 +1,4 @@
-import { roomWallHeight, withCeilingElevation, type EstimateInput } from '@layerbook/domain';
+import { percentShare, roomWallHeight, withCeilingElevation, type EstimateInput } from '@layerbook/domain';
 import type { EstimateInputs } from '../proposals/estimate-types';
 import type { EstimateContext } from './context';
 import { toEngineSettings } from './settings';
@@ -45,7 +45,7 @@ export function assembleEstimateInput(context: EstimateContext, inputs: Estimate
       ? {
           discount:
             inputs.discount.kind === 'percent'
-              ? { kind: 'share' as const, share: String(inputs.discount.percent / 100) }
+              ? { kind: 'share' as const, share: percentShare(inputs.discount.percent) }
               : { kind: 'amount' as const, amount: inputs.discount.amount },
         }
       : {}),

@@ -1,4 +1,4 @@
-import type { FirmSettings } from '@layerbook/domain';
+import { type FirmSettings, percentShare } from '@layerbook/domain';
 import type { EstimatingSettings } from '../firms/estimating-types';
 
 /**
@@ -6,7 +6,7 @@ import type { EstimatingSettings } from '../firms/estimating-types';
  * money stays a decimal string. No zod here, so the browser can import it cheaply.
  */
 export function toEngineSettings(s: EstimatingSettings, lengthUnit: 'ft' | 'm', currency: string): FirmSettings {
-  const share = (percent: number) => String(percent / 100);
+  const share = percentShare;
   return {
     currency,
     lengthUnit,

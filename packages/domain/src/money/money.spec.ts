@@ -1,5 +1,5 @@
 import Decimal from 'decimal.js';
-import { fromMinorUnits, roundToCurrency, roundsToZero, toMinorUnits } from './money';
+import { fromMinorUnits, roundToCurrency, roundsToZero, toMinorUnits, percentShare } from './money';
 
 describe('minor units', () => {
   it.each([
@@ -35,4 +35,16 @@ describe('roundsToZero', () => {
     ['0.0005', 'KWD', false],
     ['0', 'USD', true],
   ])('%s %s shows as zero: %s', (amount, currency, isZero) => expect(roundsToZero(amount, currency)).toBe(isZero));
+});
+
+describe('percentShare', () => {
+  it('is the exact decimal fraction, where floating-point division is not', () => {
+    // 4.712 % (Hawaii's general excise rate with a county surcharge; value from memory): 4.712 / 100 = 0.047119999999999995 in IEEE 754 double
+    expect(4.712 / 100).not.toBe(0.04712);
+    expect(percentShare(4.712)).toBe('0.04712');
+    // 1,562.50 × 0.04712 = 73.625, to the cent half up 73.63 (exact decimal arithmetic)
+    expect(roundToCurrency(new Decimal('1562.50').times(percentShare(4.712)), 'USD').toFixed(2)).toBe('73.63');
+    expect(percentShare(8.25)).toBe('0.0825');
+    expect(percentShare(0)).toBe('0');
+  });
 });

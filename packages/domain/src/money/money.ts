@@ -43,3 +43,11 @@ export function sumMoney(amounts: readonly Decimal[]): Decimal {
 export function roundsToZero(amount: Decimal.Value, currency: string): boolean {
   return roundToCurrency(amount, currency).isZero();
 }
+
+/**
+ * A percent as the exact decimal fraction it names: 4.712 → "0.04712". Dividing the number by 100
+ * in floating point gives 0.047119999999999995, which taxes 1,562.50 at 73.62 instead of 73.63.
+ */
+export function percentShare(percent: number): string {
+  return new Decimal(percent).div(100).toString();
+}

@@ -85,6 +85,17 @@ describe('pricing', () => {
     expect(priceJob({ ...BASE, discount: { kind: 'amount', amount: '3.92' } }).price.toFixed(2)).toBe('3800.00');
   });
 
+  it('rounds up to the next step rather than under the minimum charge (DOMAIN.md §2.8: price = max(computed, minimum))', () => {
+    // 3,803.92 under a 3,850.00 minimum; to the nearest 100 that would be 3,800.00, under the minimum: 3,900.00
+    const p = priceJob({ ...BASE, minimumCharge: '3850.00', rounding: { kind: 'nearest', increment: '100' } });
+    expect(p.isMinimumApplied).toBe(true);
+    expect(p.price.toFixed(2)).toBe('3900.00');
+    // a minimum on a step stays as it is
+    expect(priceJob({ ...BASE, minimumCharge: '3900.00', rounding: { kind: 'nearest', increment: '100' } }).price.toFixed(2)).toBe(
+      '3900.00',
+    );
+  });
+
   it('per-area check: 504.49 × $6 + 282.74 × $3 = $3,875.16 (DOMAIN.md §2.8 [D], common practice)', () => {
     const check = perAreaCheck([
       { label: 'walls', quantity: 2 * Math.PI * 90 - 61, rate: '6.00' },

@@ -4,7 +4,7 @@ import { requireNonNegative, toNonNegativeMoney } from '../errors/input-checks';
 import { minorUnitDigits } from '../money/currency';
 import type { MoneyInput } from '../money/money';
 import { type OverheadProfitRule, applyOverheadProfit } from './overhead-profit';
-import { type RoundingRule, roundPrice } from './price-rounding';
+import { type RoundingRule, roundPriceAtLeast } from './price-rounding';
 import { type Ratio, toRatio } from './ratio';
 import { type TaxRule, salesTax } from './sales-tax';
 
@@ -107,14 +107,16 @@ export function priceJob(input: PriceInput, field = 'pricing'): PriceBreakdown {
   }
   let unrounded = beforeAdjustments.minus(discount);
   let isMinimumApplied = false;
+  let minimum = new Decimal(0);
   if (input.minimumCharge !== undefined) {
-    const minimum = toNonNegativeMoney(input.minimumCharge, `${field}.minimumCharge`, 'minimum charge');
+    minimum = toNonNegativeMoney(input.minimumCharge, `${field}.minimumCharge`, 'minimum charge');
     if (unrounded.lessThan(minimum)) {
       unrounded = minimum;
       isMinimumApplied = true;
     }
   }
-  const price = roundPrice(unrounded, input.rounding, input.currency, `${field}.rounding`);
+  // Rounding never takes the price back under the minimum: it rounds up to the next step instead.
+  const price = roundPriceAtLeast(unrounded, input.rounding, input.currency, minimum, `${field}.rounding`);
   const { taxableBase, tax } = salesTax(input.tax, { materials, price }, input.currency, `${field}.tax`);
   const markupBase = direct.isZero() ? new Decimal(1) : direct;
   const marginBase = price.isZero() ? new Decimal(1) : price;

@@ -16,3 +16,15 @@ export function roundPrice(amount: Decimal, rule: RoundingRule, currency: string
   const unknown: { kind?: unknown } = rule;
   throw new DomainInputError(`${field}.kind`, `"${String(unknown.kind)}" is not a rounding rule.`);
 }
+
+/**
+ * roundPrice, never below `atLeast` (the firm's minimum charge, DOMAIN.md §2.8: price = max(computed,
+ * minimum)): a price the rule would round under it goes up to the next step instead — a 1,225.00
+ * minimum to the nearest 100 is 1,300.00, not 1,200.00.
+ */
+export function roundPriceAtLeast(amount: Decimal, rule: RoundingRule, currency: string, atLeast: Decimal, field = 'rounding'): Decimal {
+  const rounded = roundPrice(amount, rule, currency, field);
+  if (rounded.greaterThanOrEqualTo(atLeast)) return rounded;
+  const step = rule.kind === 'nearest' ? toMoney(rule.increment, `${field}.increment`, 'rounding increment') : null;
+  return step ? roundToCurrency(atLeast.div(step).ceil().times(step), currency) : roundToCurrency(atLeast, currency);
+}
