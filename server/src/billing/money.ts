@@ -13,6 +13,9 @@ export function moneyOut(value: string | Decimal, currency: string): string {
   return value.toFixed(digits);
 }
 
+/** What a money column (numeric(14, 2)) holds: less than a trillion either way. */
+export const MONEY_COLUMN_LIMIT = new Decimal('1e12');
+
 /** Decimals a money column keeps (numeric(14,2)): a third decimal of KWD or BHD would be rounded away on save. */
 export const STORED_DECIMALS = 2;
 

@@ -13,6 +13,7 @@ import { computeEstimate, DomainInputError, toResultJson } from '@layerbook/doma
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
+import { decimalsMessage, fitsCurrency, MONEY_COLUMN_LIMIT } from '../billing/money';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
 import { loadEstimateContext } from './estimate-context';
 
@@ -105,6 +106,37 @@ function checkReferences(context: EstimateContext, inputs: EstimateInputs): void
   if (problems.length) throw badRequest(problems);
 }
 
+/**
+ * Checks every amount the office typed fits the firm's currency (no cents in yen: they would be
+ * rounded away without a word), as the firm's settings and billing check theirs.
+ */
+function checkAmounts(inputs: EstimateInputs, currency: string): void {
+  const typed: Array<[string, string]> = [
+    ...(['equipment', 'subcontracts', 'sundries'] as const).flatMap((list) =>
+      inputs[list].map((l, i): [string, string] => [`${list}.${i}.amount`, l.amount]),
+    ),
+    ...inputs.addOns.map((a, i): [string, string] => [`addOns.${i}.materialsCost`, a.materialsCost]),
+    ...(inputs.discount?.kind === 'amount' ? [['discount.amount', inputs.discount.amount] as [string, string]] : []),
+    ...Object.entries(inputs.perAreaRates).map(([id, rate]): [string, string] => [`perAreaRates.${id}`, rate]),
+  ];
+  const problems = typed
+    .filter(([, amount]) => !fitsCurrency(amount, currency))
+    .map(([field]) => ({ field, message: decimalsMessage(currency) }));
+  if (problems.length) throw badRequest(problems);
+}
+
+/** Each option's price and its add-ons' must fit a money column; past it the save is refused, naming the option. */
+function checkPricesFit(computed: ReadonlyArray<{ result: ReturnType<typeof computeEstimate> }>): void {
+  const problems = computed.flatMap((v, i) =>
+    [v.result.price.price, v.result.price.total, ...v.result.options.map((o) => o.price.total)].some((p) =>
+      p.abs().greaterThanOrEqualTo(MONEY_COLUMN_LIMIT),
+    )
+      ? [{ field: `variants.${i}`, message: 'This option’s price is too large to record. Check the amounts and sizes.' }]
+      : [],
+  );
+  if (problems.length) throw badRequest(problems);
+}
+
 /** What an accepted estimate answers to every write: the job holds its contract sum now. */
 export const ACCEPTED_ESTIMATE_IS_READ_ONLY =
   'This estimate was accepted and is now read-only: its price is the job’s contract sum. Changes go through a change order.';
@@ -135,6 +167,7 @@ export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string,
   if (row.status === 'accepted') throw conflict(ACCEPTED_ESTIMATE_IS_READ_ONLY);
   const context = await loadEstimateContext(tx, row.siteId);
   checkReferences(context, inputs);
+  checkAmounts(inputs, context.currency);
   const computed = inputs.variants.map((v, i) => {
     try {
       return { id: v.id, label: v.label, result: computeEstimate(assembleEstimateInput(context, inputs, v.id)) };
@@ -147,6 +180,7 @@ export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string,
       throw error;
     }
   });
+  checkPricesFit(computed);
   const prices = computed.map((v) => ({ id: v.id, price: v.result.price.price.toFixed(2) }));
   // Stored as JSON with Decimals as strings, so the stored result has no floats for money.
   const variants: EstimateOptionResult[] = computed.map((v) => ({ id: v.id, label: v.label, result: toResultJson(v.result) }));

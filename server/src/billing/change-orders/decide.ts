@@ -11,7 +11,8 @@ import { clientIdOf } from '../../proposals/client-proposals';
 import { enqueueBillingCheck } from '../triggers/enqueue';
 import { insertWorkItems } from '../work-items';
 import { changeOrderAnsweredMail } from './change-order-mail';
-import { MONEY_COLUMN_LIMIT, type StoredDetail } from './pricing';
+import { MONEY_COLUMN_LIMIT } from '../money';
+import type { StoredDetail } from './pricing';
 import { loadChangeOrder, toView, type ChangeOrderRow } from './read';
 import { changeValueLines, deductionFitsUntouched } from './value-lines';
 

@@ -8,6 +8,7 @@ import { badRequest } from '../../http/problem';
 import { loadEstimateContext } from '../../proposals/estimate-context';
 import { type ChangeOrderCrewPart, crewPartOf } from '../../jobs/sheet/change-order-work';
 import { type JobWorkItem, workItemsOf } from '../work-items';
+import { MONEY_COLUMN_LIMIT } from '../money';
 
 /** What `change_orders.detail` holds: how it was priced, and the sums the client approved. */
 export interface StoredDetail {
@@ -163,8 +164,6 @@ export function changeOrderInputs(
   };
 }
 
-/** What a money column (numeric(14, 2)) holds: less than a trillion either way. */
-export const MONEY_COLUMN_LIMIT = new Decimal('1e12');
 
 function money(kind: ChangeOrderPricing['kind'], price: Decimal, tax: Decimal, digits: number, detail: StoredDetail): PricedChangeOrder {
   if (price.plus(tax).abs().greaterThanOrEqualTo(MONEY_COLUMN_LIMIT))
