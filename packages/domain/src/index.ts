@@ -165,7 +165,7 @@ export { FLAMMABLE_FLASH_MAX_C, flammableClass } from './safety/flammable';
 // the whole estimate
 export type { EstimateInput, EstimateOption, EstimateRoom, EstimateSurface, FirmSettings } from './estimate/estimate-input';
 export type { EstimateResult, LayerLine, ProductTotal, SurfaceResult } from './estimate/compute-estimate';
-export { computeEstimate } from './estimate/compute-estimate';
+export { computeEstimate, JOB_SIZE_LIMITS } from './estimate/compute-estimate';
 export type { LeadNotice, LeadStatus } from './estimate/lead-status';
 export { ASK_FOR_YEAR, TARGET_HOUSING_BEFORE, isTreatedAsTargetHousing, leadNotice, leadStatus } from './estimate/lead-status';
 export type { OptionCaution } from './estimate/merge-cautions';

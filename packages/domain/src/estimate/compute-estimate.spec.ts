@@ -180,6 +180,13 @@ describe('computeEstimate: the round dining room', () => {
     expect(e.cautions[0]?.jurisdiction).toBe('A US federal rule.');
   });
 
+  it('refuses a job measuring more than one estimate takes, before choosing containers or planning days', () => {
+    // a wall typed three zeros too long: 2π × 9 ft × 10,000 ft ≈ 565,487 ft² of walls, past the 500,000 ft² limit
+    const huge = copyJob();
+    huge.rooms[0].surfaces[0].shape = { kind: 'roundWalls', radius: 9, height: 10_000, openings: [] };
+    expectInputError(() => computeEstimate(huge), 'rooms', /more than the 500,000 ft² one estimate takes/);
+  });
+
   it('names the field of a bad input deep in the job', () => {
     const bad = copyJob();
     bad.rooms[0].surfaces[1].shape = { kind: 'sphericalCap', baseRadius: 9, rise: 12 };

@@ -13,6 +13,7 @@ import { type Caution, safetyCautions, treatedAsTargetHousing } from '../safety/
 import { type LeadStatus, leadRuleYear, leadStatus } from './lead-status';
 import { type JobSchedule, type WorkChain, scheduleJob } from '../schedule/schedule-job';
 import { type Dimension, dimensionOf, fromBase } from '../units/quantity-unit';
+import { convertArea, convertLength, type LengthUnit } from '../units/length';
 import type { EstimateInput } from './estimate-input';
 import { LayerPlan, conditionMask } from './layer-plan';
 
@@ -63,6 +64,30 @@ export interface EstimateResult {
  * deterministic, so the browser recomputing on each keystroke and the server recomputing on
  * save get the same numbers.
  */
+/**
+ * The most one estimate measures, in feet and converted to the firm's unit (common practice, no source: far past what a firm of one
+ * to fifteen people prices at once). Checked before the container search and the day plan, whose
+ * work grows with the need: a slip of three zeros in the takeoff is a 400, not a server stalled for
+ * minutes or out of memory.
+ */
+export const JOB_SIZE_LIMITS = { areaFt2: 500_000, lengthFt: 100_000 } as const;
+
+function requireJobSize(area: number, length: number, unit: LengthUnit): void {
+  const fmt = (n: number) => Math.round(n).toLocaleString('en-US');
+  const areaMax = convertArea(JOB_SIZE_LIMITS.areaFt2, 'ft', unit);
+  const lengthMax = convertLength(JOB_SIZE_LIMITS.lengthFt, 'ft', unit);
+  if (area > areaMax)
+    throw new DomainInputError(
+      'rooms',
+      `The surfaces measure ${fmt(area)} ${unit}² in all, more than the ${fmt(areaMax)} ${unit}² one estimate takes. Check the sizes in the takeoff.`,
+    );
+  if (length > lengthMax)
+    throw new DomainInputError(
+      'rooms',
+      `The running items measure ${fmt(length)} ${unit} in all, more than the ${fmt(lengthMax)} ${unit} one estimate takes. Check the sizes in the takeoff.`,
+    );
+}
+
 export function computeEstimate(input: EstimateInput): EstimateResult {
   const s = input.settings;
   requireNonEmpty(input.rooms, 'rooms', 'list of rooms');
@@ -130,6 +155,8 @@ export function computeEstimate(input: EstimateInput): EstimateResult {
       chains.push({ id: surface.id, label: roomPrefix + surface.name, steps: chainSteps });
     }
   }
+
+  requireJobSize(area, length, s.lengthUnit);
 
   // Whole-job totals first, containers second: tinted products are bought once and boxed.
   let materialsCost = new Decimal(0);
