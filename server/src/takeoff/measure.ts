@@ -1,7 +1,6 @@
 import type { RoomView, SurfaceShapeInput, TakeoffLengthUnit, TakeoffTotals } from '@layerbook/contracts';
 import {
   type Caution,
-  DEFAULT_TAKEOFF_SETTINGS,
   DomainInputError,
   convertArea,
   convertMeasure,
@@ -15,11 +14,11 @@ import { badRequest } from '../http/problem';
 /**
  * Measures a shape as the request sent it. The engine's refusal (a rise too big for its radius,
  * openings larger than the wall) becomes a 400 naming the field, before anything is written.
- * The firm's smallest deducted opening is not a setting yet, so every opening is deducted.
+ * Openings smaller than the firm's smallest deducted one (`settings`, in the shape's unit) stay in the area.
  */
-export function measureOrReject(shape: SurfaceShapeInput): SurfaceMeasure {
+export function measureOrReject(shape: SurfaceShapeInput, settings: { minDeductedOpeningArea: number }): SurfaceMeasure {
   try {
-    return measureSurface(shape, DEFAULT_TAKEOFF_SETTINGS, 'shape');
+    return measureSurface(shape, settings, 'shape');
   } catch (error) {
     if (error instanceof DomainInputError) {
       throw badRequest([{ field: dottedPath(error.field), message: error.message }], 'The sizes do not make a shape we can measure.');

@@ -17,7 +17,8 @@ import { badRequest, notFound } from '../http/problem';
 import type { ObjectKeys } from '../files/stored-files';
 import { leadCaution, measureOrReject, sumMeasures, unitOfSystem } from './measure';
 import { detachRoomPhotos } from './photos';
-import { toSurfaceView, type SurfaceRow } from './surface-view';
+import { type OpeningRule, takeoffSettingsIn, toSurfaceView, type SurfaceRow } from './surface-view';
+import { getEstimatingSettings } from '../firms/estimating';
 
 type RoomRow = typeof rooms.$inferSelect;
 
@@ -26,6 +27,12 @@ const auditedBy = (actor: Actor) => ({ actorUserId: actor.userId, actorKind: act
 
 async function firmUnit(tx: TenantTx): Promise<TakeoffLengthUnit> {
   return (await firmFacts(tx)).unit;
+}
+
+/** The firm's smallest deducted opening, in its unit: the takeoff measures as the estimate will. */
+async function openingRule(tx: TenantTx): Promise<OpeningRule> {
+  const { settings, lengthUnit } = await getEstimatingSettings(tx);
+  return { area: settings.minDeductedOpeningArea, unit: lengthUnit };
 }
 
 async function firmFacts(tx: TenantTx): Promise<{ unit: TakeoffLengthUnit; country: string }> {
@@ -84,10 +91,11 @@ export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffV
     .innerJoin(rooms, and(eq(rooms.tenantId, surfaces.tenantId), eq(rooms.id, surfaces.roomId)))
     .where(and(eq(surfaces.tenantId, tx.tenantId), eq(rooms.siteId, siteId)))
     .orderBy(asc(surfaces.position), asc(surfaces.createdAt));
+  const rule = await openingRule(tx);
   const byRoom = new Map<string, SurfaceView[]>();
   for (const { surface } of surfaceRows) {
     const list = byRoom.get(surface.roomId) ?? [];
-    list.push(toSurfaceView(surface));
+    list.push(toSurfaceView(surface, rule));
     byRoom.set(surface.roomId, list);
   }
   const roomViews = roomRows.map((r) => toRoomView(r, byRoom.get(r.id) ?? [], unit));
@@ -105,6 +113,7 @@ export async function getTakeoff(tx: TenantTx, siteId: string): Promise<TakeoffV
       accessNotes: site.accessNotes,
     },
     lengthUnit: unit,
+    minDeductedOpeningArea: takeoffSettingsIn(rule, unit).minDeductedOpeningArea,
     rooms: roomViews,
     totals: sumMeasures(
       roomViews.flatMap((r) => r.surfaces),
@@ -133,7 +142,8 @@ async function roomSurfaces(tx: TenantTx, roomId: string): Promise<SurfaceView[]
     .from(surfaces)
     .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.roomId, roomId)))
     .orderBy(asc(surfaces.position), asc(surfaces.createdAt));
-  return rows.map(toSurfaceView);
+  const rule = await openingRule(tx);
+  return rows.map((row) => toSurfaceView(row, rule));
 }
 
 export async function addRoom(tx: TenantTx, actor: Actor, siteId: string, input: RoomInput): Promise<RoomView> {
@@ -232,9 +242,10 @@ function checkDisturbed(disturbed: number | null, measure: ReturnType<typeof mea
 
 export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, input: SurfaceInput): Promise<SurfaceView> {
   await findRoom(tx, roomId);
-  const measure = measureOrReject(input.shape);
-  checkDisturbed(input.disturbedPaintedArea, measure);
   const unit = await firmUnit(tx);
+  const rule = await openingRule(tx);
+  const measure = measureOrReject(input.shape, takeoffSettingsIn(rule, unit));
+  checkDisturbed(input.disturbedPaintedArea, measure);
   const [{ next }] = await tx.db
     .select({ next: sql<number>`coalesce(max(${surfaces.position}) + 1, 0)::int` })
     .from(surfaces)
@@ -259,7 +270,7 @@ export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, inp
     entityId: row.id,
     data: { roomId, kind: input.shape.kind },
   });
-  return toSurfaceView(row);
+  return toSurfaceView(row, rule);
 }
 
 /**
@@ -269,10 +280,12 @@ export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, inp
  */
 export async function updateSurface(tx: TenantTx, actor: Actor, surfaceId: string, patch: SurfaceUpdate, now: Date): Promise<SurfaceView> {
   const current = await findSurface(tx, surfaceId);
-  const shape = patch.shape ?? toSurfaceView(current).shape;
-  const measure = measureOrReject(shape);
+  const rule = await openingRule(tx);
+  const before = toSurfaceView(current, rule);
+  const shape = patch.shape ?? before.shape;
   const unit = patch.shape !== undefined ? await firmUnit(tx) : (current.lengthUnit as TakeoffLengthUnit);
-  const stored = toSurfaceView(current).disturbedPaintedArea;
+  const measure = measureOrReject(shape, takeoffSettingsIn(rule, unit));
+  const stored = before.disturbedPaintedArea;
   const kept =
     stored !== null && unit !== current.lengthUnit
       ? Math.round(convertArea(stored, current.lengthUnit as TakeoffLengthUnit, unit) * 100) / 100
@@ -293,7 +306,6 @@ export async function updateSurface(tx: TenantTx, actor: Actor, surfaceId: strin
     .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)))
     .returning();
   // Measurements drive quantities and prices: the trail keeps a changed shape and disturbed area before and after.
-  const before = toSurfaceView(current);
   await recordAudit(tx, {
     ...auditedBy(actor),
     action: 'takeoff.surface_updated',
@@ -305,7 +317,7 @@ export async function updateSurface(tx: TenantTx, actor: Actor, surfaceId: strin
       ...(disturbed !== stored ? { disturbedBefore: stored, disturbedAfter: disturbed } : {}),
     },
   });
-  return toSurfaceView(row);
+  return toSurfaceView(row, rule);
 }
 
 export async function deleteSurface(tx: TenantTx, actor: Actor, surfaceId: string): Promise<void> {
@@ -347,7 +359,7 @@ export async function duplicateSurface(tx: TenantTx, actor: Actor, surfaceId: st
     entityId: row.id,
     data: { roomId: original.roomId, copyOf: surfaceId },
   });
-  return toSurfaceView(row);
+  return toSurfaceView(row, await openingRule(tx));
 }
 
 /** "North wall" → "North wall (copy)"; names stay within the 120-character limit. */

@@ -1,14 +1,26 @@
 import type { SurfaceShapeInput, SurfaceView, TakeoffLengthUnit } from '@layerbook/contracts';
-import { measureSurface } from '@layerbook/domain';
+import { convertArea, measureSurface } from '@layerbook/domain';
 import type { surfaces } from '@layerbook/db';
 
 export type SurfaceRow = typeof surfaces.$inferSelect;
 
+/** The firm's smallest deducted opening (an estimating setting) and the unit it is in. */
+export interface OpeningRule {
+  readonly area: number;
+  readonly unit: TakeoffLengthUnit;
+}
+
+/** The measuring settings for a surface stored in `unit`: the firm's smallest deducted opening in that unit. */
+export const takeoffSettingsIn = (rule: OpeningRule, unit: TakeoffLengthUnit) => ({
+  minDeductedOpeningArea: rule.unit === unit ? rule.area : convertArea(rule.area, rule.unit, unit),
+});
+
 /**
  * The stored shape passed the same checks when it was saved, so measuring it again cannot fail;
- * it is measured on every read rather than stored so a corrected formula reaches old takeoffs.
+ * it is measured on every read rather than stored so a corrected formula reaches old takeoffs,
+ * with the firm's smallest deducted opening, so the takeoff shows the area the estimate prices.
  */
-export function toSurfaceView(row: SurfaceRow): SurfaceView {
+export function toSurfaceView(row: SurfaceRow, rule: OpeningRule): SurfaceView {
   const shape = row.shape as SurfaceShapeInput;
   return {
     id: row.id,
@@ -19,6 +31,6 @@ export function toSurfaceView(row: SurfaceRow): SurfaceView {
     lengthUnit: row.lengthUnit as TakeoffLengthUnit,
     disturbedPaintedArea: row.disturbedPaintedArea === null ? null : Number(row.disturbedPaintedArea),
     notes: row.notes,
-    measure: measureSurface(shape),
+    measure: measureSurface(shape, takeoffSettingsIn(rule, row.lengthUnit as TakeoffLengthUnit)),
   };
 }

@@ -102,6 +102,8 @@ export interface TakeoffView {
   readonly site: TakeoffSite;
   /** the firm's unit now: new surfaces are measured in it, totals are given in it */
   readonly lengthUnit: TakeoffLengthUnit;
+  /** the firm's smallest deducted opening, in lengthUnit² (an estimating setting): smaller openings stay in the area, as the estimate prices them */
+  readonly minDeductedOpeningArea: number;
   readonly rooms: readonly RoomView[];
   readonly totals: TakeoffTotals;
   /**

@@ -7,9 +7,9 @@ export type LiveMeasure =
   | { readonly state: 'refused'; readonly shape: SurfaceShape; readonly field: string; readonly message: string };
 
 /** The same engine the server saves with, run as the measurer types (the server's number is the one kept). */
-export function measureLive(shape: SurfaceShape): LiveMeasure {
+export function measureLive(shape: SurfaceShape, settings: { readonly minDeductedOpeningArea: number }): LiveMeasure {
   try {
-    return { state: 'measured', shape, measure: measureSurface(shape) };
+    return { state: 'measured', shape, measure: measureSurface(shape, settings) };
   } catch (error) {
     if (error instanceof DomainInputError) {
       return { state: 'refused', shape, field: dottedPath(error.field), message: error.message };

@@ -34,6 +34,8 @@ export class RoomPanel implements OnInit {
   readonly room = input.required<RoomView>();
   readonly siteId = input.required<string>();
   readonly unit = input.required<TakeoffLengthUnit>();
+  /** the firm's smallest deducted opening, in `unit`² (smaller openings stay in the area) */
+  readonly minDeductedOpeningArea = input(0);
   readonly index = input.required<number>();
   readonly roomCount = input.required<number>();
   readonly startOpen = input(false);

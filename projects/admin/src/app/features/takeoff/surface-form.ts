@@ -60,6 +60,8 @@ export class SurfaceForm implements OnInit {
   readonly roomId = input.required<string>();
   readonly roomName = input.required<string>();
   readonly unit = input.required<TakeoffLengthUnit>();
+  /** the firm's smallest deducted opening, in `unit`²: the live figure is the one the server will show */
+  readonly minDeductedOpeningArea = input(0);
   readonly surface = input<SurfaceView | null>(null);
   readonly saved = output<SurfaceView>();
   readonly cancelled = output<void>();
@@ -200,7 +202,7 @@ export class SurfaceForm implements OnInit {
       this.live.set({ state: 'missing' });
       return;
     }
-    const live = measureLive(reading.shape);
+    const live = measureLive(reading.shape, { minDeductedOpeningArea: this.minDeductedOpeningArea() });
     this.live.set(live);
     if (live.state === 'refused') {
       this.mark(this.form.get(live.field), live.message);
