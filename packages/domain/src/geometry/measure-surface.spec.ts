@@ -99,6 +99,43 @@ describe('project checks (DOMAIN.md §3.7 [D], formulas as named)', () => {
     expect(area({ kind: 'ceilingPolygon', corners: [...corners].reverse() })).toBe(56);
   });
 
+  it('refuses an outline that crosses itself, whose shoelace area would be wrong', () => {
+    // a 10 × 10 ft square less a 5 × 5 ft corner is 75 ft²; with its 2nd and 3rd corners swapped the shoelace sum gives 37.5 (hand computation)
+    const swapped = [
+      [0, 0],
+      [10, 5],
+      [10, 0],
+      [5, 5],
+      [5, 10],
+      [0, 10],
+    ] as const;
+    expectInputError(() => measureSurface({ kind: 'ceilingPolygon', corners: swapped }), 'shape.corners', /crosses itself/);
+    // a bow tie: its two triangles cancel to no area at all
+    const bowTie = [
+      [0, 0],
+      [4, 4],
+      [4, 0],
+      [0, 4],
+    ] as const;
+    expectInputError(() => measureSurface({ kind: 'ceilingPolygon', corners: bowTie }), 'shape.corners', /no area|crosses itself/);
+    // a corner touching another edge counts as crossing too
+    expectInputError(
+      () =>
+        measureSurface({
+          kind: 'ceilingPolygon',
+          corners: [
+            [0, 0],
+            [6, 0],
+            [6, 6],
+            [3, 0],
+            [0, 6],
+          ],
+        }),
+      'shape.corners',
+      /crosses itself/,
+    );
+  });
+
   it('worked round dining room (DOMAIN.md §2.2 [D]): walls 504.49, dome 90π, crown 56.55 LF', () => {
     const walls = measureSurface({
       kind: 'roundWalls',
