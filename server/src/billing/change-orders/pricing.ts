@@ -164,7 +164,6 @@ export function changeOrderInputs(
   };
 }
 
-
 function money(kind: ChangeOrderPricing['kind'], price: Decimal, tax: Decimal, digits: number, detail: StoredDetail): PricedChangeOrder {
   if (price.plus(tax).abs().greaterThanOrEqualTo(MONEY_COLUMN_LIMIT))
     throw badRequest([{ field: kind === 'lumpSum' ? 'pricing.price' : 'pricing', message: 'The amount with its tax is too large.' }]);
