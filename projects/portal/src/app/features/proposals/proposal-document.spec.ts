@@ -9,6 +9,7 @@ import { provideTestI18n } from '../../../../../shared/i18n/testing';
 import proposalsEn from '../../../i18n/proposals/en.json';
 import proposalsEs from '../../../i18n/proposals/es.json';
 import { ProposalDocument } from './proposal-document';
+import { SNAPSHOT } from './proposal-fixtures';
 
 const lime = {
   id: 'lime-alkali',
@@ -20,17 +21,7 @@ const lime = {
 };
 
 const snapshot = {
-  schemaVersion: 1,
-  title: 'Dining room in lime',
-  issuedOn: '2026-03-02',
-  expiresOn: '2026-04-01',
-  currency: 'USD',
-  locale: 'en-US',
-  lengthUnit: 'ft',
-  firm: { name: 'Quillfeather Finishes', addressLines: [], phone: '' },
-  client: { name: 'Ada Client', email: 'ada@example.com', phone: '' },
-  site: { label: 'Home', addressLines: ['1 Elm St'], yearBuilt: 1990 },
-  scope: [],
+  ...SNAPSHOT,
   options: [
     {
       id: 'o1',
@@ -43,9 +34,6 @@ const snapshot = {
       isDepositCapped: false,
     },
   ],
-  addOns: [],
-  exclusions: [],
-  notes: '',
   terms: { depositPercent: 30, progressPercent: 0, text: '' },
   safety: { standing: CAUTION_WORDS.standing, cautions: [lime] },
 } satisfies ProposalSnapshot;

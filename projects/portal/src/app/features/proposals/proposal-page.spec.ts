@@ -3,13 +3,14 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { ApplicationRef } from '@angular/core';
 import { DeferBlockBehavior, TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
-import type { PortalProposal, ProposalSnapshot } from '@layerbook/contracts/types';
+import type { PortalProposal } from '@layerbook/contracts/types';
 import { describe, expect, it } from 'vitest';
 import { provideTestI18n } from '../../../../../shared/i18n/testing';
 import common from '../../../../../shared/i18n/words/common/en.json';
 import proposals from '../../../i18n/proposals/en.json';
 import { proposalUrl } from './proposal-api';
 import { ProposalPage } from './proposal-page';
+import { SNAPSHOT } from './proposal-fixtures';
 
 /** An invented proposal, sent and the newest; `isExpired` as the server says for the firm's day. */
 const proposal = (isExpired: boolean): PortalProposal => ({
@@ -19,25 +20,7 @@ const proposal = (isExpired: boolean): PortalProposal => ({
   expiresOn: '2026-11-30',
   isExpired,
   isLatest: true,
-  snapshot: {
-    schemaVersion: 1,
-    title: 'Stair hall, lime plaster',
-    issuedOn: '2026-11-01',
-    expiresOn: '2026-11-30',
-    currency: 'USD',
-    locale: 'en-US',
-    lengthUnit: 'ft',
-    firm: { name: 'Quillfeather Finishes', addressLines: [], phone: '' },
-    client: { name: 'Ada Client', email: 'ada@example.com', phone: '' },
-    site: { label: 'Home', addressLines: ['14 Quarry Lane'], yearBuilt: 1990 },
-    scope: [],
-    options: [],
-    addOns: [],
-    exclusions: [],
-    notes: '',
-    terms: { depositPercent: 0, progressPercent: 0, text: '' },
-    safety: { standing: '', cautions: [] },
-  } satisfies ProposalSnapshot,
+  snapshot: { ...SNAPSHOT, title: 'Stair hall, lime plaster', expiresOn: '2026-11-30' },
   decidedAt: null,
   acceptedVariantId: null,
   signedName: null,
