@@ -221,7 +221,8 @@ export async function showBoard(
   boardId: string,
   now: Date,
 ): Promise<SampleBoardView> {
-  const board = await findBoard(tx, boardId);
+  // Locked: a second show (a double click) waits here and then finds the board shown (409), so the client is told and audited once.
+  const board = await findBoard(tx, boardId, true);
   if (board.status !== 'draft') throw conflict('This board has already been shown to the client.');
   await tx.db
     .update(sampleBoards)

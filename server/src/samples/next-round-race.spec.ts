@@ -30,3 +30,25 @@ describe("a sample board's next round started twice at once (a double click)", (
     }
   });
 });
+
+describe('a sample board shown twice at once (a double click)', () => {
+  it('is shown once: one 200 and one 409, and one audit entry', async () => {
+    const f = await firmWithFinish(t, 'Double Show Finishes');
+    const board = await makeBoard(f, { clientId: f.clientId, siteId: f.siteId, label: 'Stair niche', finishSystemId: f.systemId });
+    const answers = await Promise.all([post(f, `/api/samples/${board.id}/show`), post(f, `/api/samples/${board.id}/show`)]);
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 409]);
+    // the e-mail to the client is queued in the same transaction as the audit entry: one entry, one showing
+    const audits = await withTenant(
+      t.ctx.pool,
+      f.firmId,
+      async (tx) =>
+        (
+          await tx.client.query(`select 1 from audit_log where tenant_id = $1 and entity_id = $2 and action = 'samples.board_shown'`, [
+            tx.tenantId,
+            board.id,
+          ])
+        ).rowCount,
+    );
+    expect(audits).toBe(1);
+  });
+});
