@@ -2,18 +2,25 @@ import type { Language } from '@layerbook/contracts';
 import { translator } from '../i18n/catalog';
 import { render, RenderedMail } from './templates';
 
-/** To the client, in their language (`language`; English when the caller does not say). */
-export function proposalSentMail(p: {
+/** What every e-mail about one proposal version names: who sends, to whom, which version, until when, the link. */
+interface ProposalMailFacts {
   firmName: string;
   clientName: string;
   title: string;
   version: number;
+  /** the offer's last day, written out for the reader */
   expiresOn: string;
   url: string;
-  linkDays: number;
-  portalUrl: string;
-  language?: Language;
-}): RenderedMail {
+}
+
+/** To the client, in their language (`language`; English when the caller does not say). */
+export function proposalSentMail(
+  p: ProposalMailFacts & {
+    linkDays: number;
+    portalUrl: string;
+    language?: Language;
+  },
+): RenderedMail {
   const language = p.language ?? 'en';
   const t = translator(language);
   const firm = p.firmName;
@@ -33,15 +40,7 @@ export function proposalSentMail(p: {
 }
 
 /** To the client before a sent proposal lapses, in their language; `expiresOn` written out for them. */
-export function proposalExpiringMail(p: {
-  firmName: string;
-  clientName: string;
-  title: string;
-  version: number;
-  expiresOn: string;
-  url: string;
-  language: Language;
-}): RenderedMail {
+export function proposalExpiringMail(p: ProposalMailFacts & { language: Language }): RenderedMail {
   const t = translator(p.language);
   const words = { firm: p.firmName, title: p.title, version: p.version, expiresOn: p.expiresOn };
   return render(
