@@ -15,7 +15,7 @@ async function finishWholeRoom(page: Page, room: string, system: string) {
 }
 
 // Journey (proposals → portal → jobs): two options priced, a proposal sent, option B accepted by the client.
-test('the office sends a two-option proposal; the client accepts option B; the job appears with its draft payment schedule', async ({
+test('the office sends a two-option proposal with an add-on; the client accepts option B with the add-on; the job appears with its draft payment schedule', async ({
   page,
   browser,
 }) => {
@@ -34,6 +34,12 @@ test('the office sends a two-option proposal; the client accepts option B; the j
   await page.getByRole('button', { name: 'Add an option' }).click();
   await page.getByRole('tabpanel').getByLabel('Option name').fill('Option B: limewash');
   await finishWholeRoom(page, 'Round sitting room', 'Two-coat limewash');
+  // An add-on the client may take with either option.
+  await page.getByRole('button', { name: 'Add an add-on' }).click();
+  const addOn = page.getByRole('group', { name: 'Add-on 1' });
+  await addOn.getByLabel('Add-on name').fill('Stencilled frieze');
+  await addOn.getByLabel('Labour hours').fill('4');
+  await addOn.getByLabel('Materials cost').fill('30');
   await page.getByRole('button', { name: 'Save estimate' }).click();
   await expect(page.getByText('All changes saved')).toBeVisible();
 
@@ -81,6 +87,12 @@ test('the office sends a two-option proposal; the client accepts option B; the j
   await portal.screenshot({ path: 'e2e/.artifacts/portal-board.png', fullPage: true });
   await portal.goto(proposalUrl);
   await portal.getByRole('radio', { name: /Option B: limewash/ }).check();
+  const agreed = portal.locator('.agreed-total');
+  const optionOnly = await agreed.textContent();
+  await portal.getByRole('checkbox', { name: /Stencilled frieze/ }).check();
+  // The total grows by the add-on, and the later payments that carry it are listed before signing.
+  await expect(agreed).not.toHaveText(optionOnly!);
+  await expect(portal.getByText('Your deposit stays as shown')).toBeVisible();
   await portal.getByLabel('Your full name').fill('Hattie Brambleton');
   await portal.getByLabel('I accept this proposal and its terms.').check();
   await portal.screenshot({ path: 'e2e/.artifacts/portal-proposal.png', fullPage: true });
@@ -89,6 +101,7 @@ test('the office sends a two-option proposal; the client accepts option B; the j
   // The document above the form (left dehydrated while it was only read) wakes up to mark the choice.
   await expect(portal.getByRole('article', { name: /Option B: limewash/ })).toContainText('Your choice');
   await expect(portal.getByRole('article', { name: /Option A/ })).not.toContainText('Your choice');
+  await expect(portal.getByRole('region', { name: 'Add-ons you can choose' })).toContainText('Your choice');
   await client.close();
 
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
@@ -96,7 +109,7 @@ test('the office sends a two-option proposal; the client accepts option B; the j
     .getByRole('link', { name: /Sitting room plaster/ })
     .first()
     .click();
-  await expect(page.getByText('Option B: limewash', { exact: true })).toBeVisible();
+  await expect(page.getByText('Option B: limewash + Stencilled frieze', { exact: true })).toBeVisible();
   // The job page's schedule editor (features/jobs/billing) checks the draft against the contract sum in words.
   const schedule = page.getByRole('form', { name: 'Payment schedule' });
   await expect(schedule).toContainText('The lines add up to the contract sum');

@@ -107,6 +107,8 @@ export type { DepositCapRule, DepositCheck } from './billing/deposit-cap';
 export { checkDeposit, depositCap } from './billing/deposit-cap';
 export type { ChangeOrder } from './billing/change-orders';
 export { contractSumToDate, respreadSchedule, staysOnRespread } from './billing/change-orders';
+export type { AcceptedSum, AddOnPrice, ShownPayment } from './billing/accepted-add-ons';
+export { acceptedSum } from './billing/accepted-add-ons';
 export type { PayApplication, PayApplicationInput, PayApplicationSummary, ValueLine, ValueLineInput } from './billing/pay-application';
 export { carryForward, computePayApplication, retainageRateFor } from './billing/pay-application';
 export type { IncludedTaxInput } from './billing/invoice-tax';

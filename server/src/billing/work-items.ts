@@ -17,6 +17,8 @@ interface JobSource {
   variant_id: string;
   result: { variants?: ReadonlyArray<{ id: string; result?: { surfaces?: readonly StoredSurface[] } }> } | null;
   scope: ProposalSnapshot['scope'] | null;
+  /** the add-ons the client took with the option, as the snapshot prices them */
+  add_ons: Array<{ label: string; total: string }>;
   work_items: number;
   value_lines: number;
 }
@@ -84,14 +86,22 @@ export function workItemsOf(
 /**
  * The default schedule of values: one line per room, the contract sum split by each room's share
  * of the labour hours, to the cent and adding up exactly (largest remainder; common practice, no
- * source). A job without hours gets one line for all the work.
+ * source). A job without hours gets one line for all the work. Each add-on the client took is a
+ * line of its own at its price, and the rooms share the rest.
  */
 export function defaultValueLines(
   items: readonly JobWorkItem[],
   contractSum: string,
   currency: string,
+  addOns: ReadonlyArray<{ label: string; total: string }> = [],
 ): Array<{ label: string; amount: string }> {
   const digits = minorUnitDigits(currency);
+  const addOnLines = addOns.map((a) => ({ label: a.label, amount: new Decimal(a.total).toFixed(digits) }));
+  const work = addOnLines.reduce((rest, a) => rest.minus(a.amount), new Decimal(contractSum));
+  return [...workValueLines(items, work.toFixed(digits), digits), ...addOnLines];
+}
+
+function workValueLines(items: readonly JobWorkItem[], contractSum: string, digits: number): Array<{ label: string; amount: string }> {
   const rooms = new Map<string, { label: string; hours: Decimal }>();
   for (const item of items) {
     const room = rooms.get(item.roomId) ?? { label: item.roomName, hours: new Decimal(0) };
@@ -111,6 +121,9 @@ export function defaultValueLines(
 async function loadSource(tx: TenantTx, jobId: string): Promise<JobSource | undefined> {
   const { rows } = await tx.client.query<JobSource>(
     `select j.contract_sum::text as contract_sum, j.currency, j.accepted_variant_id as variant_id, coalesce(pv.result, e.result) as result, pv.snapshot->'scope' as scope,
+            coalesce((select jsonb_agg(jsonb_build_object('label', a->>'label', 'total', a->>'total') order by k.n)
+                        from unnest(pv.accepted_add_on_ids) with ordinality as k(id, n)
+                        join jsonb_array_elements(pv.snapshot->'addOns') a on a->>'id' = k.id), '[]'::jsonb) as add_ons,
             (select count(*)::int from job_work_items w where w.tenant_id = j.tenant_id and w.job_id = j.id) as work_items,
             (select count(*)::int from job_value_lines v where v.tenant_id = j.tenant_id and v.job_id = j.id) as value_lines
        from jobs j
@@ -146,7 +159,7 @@ export async function ensureJobWork(tx: TenantTx, jobId: string): Promise<void> 
   const items = workItemsOf(surfaces, src.scope, new Map(rooms.map((r) => [r.id, r.name])));
   if (src.work_items === 0 && items.length) await insertWorkItems(tx, jobId, items);
   if (src.value_lines === 0) {
-    const lines = defaultValueLines(items, src.contract_sum, src.currency);
+    const lines = defaultValueLines(items, src.contract_sum, src.currency, src.add_ons);
     await tx.client.query(
       `insert into job_value_lines (tenant_id, job_id, position, label, scheduled_value)
        select $1, $2, x.position, x.label, x.amount::numeric from jsonb_to_recordset($3::jsonb) as x(position int, label text, amount text)`,

@@ -1,4 +1,6 @@
 import type {
+  ProposalSnapshot,
+  SnapshotOption,
   PortalProposal,
   PortalProposalAccepted,
   ProposalAcceptance,
@@ -6,6 +8,7 @@ import type {
   ProposalDecline,
 } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
+import { acceptedSum, DomainInputError, minorUnitDigits } from '@layerbook/domain';
 import { recordAudit } from '../audit/record';
 import { depositAtAcceptance } from '../billing/deposit-at-acceptance';
 import type { AppContext } from '../context';
@@ -14,7 +17,7 @@ import type { ClientPrincipal } from '../http/principal';
 import { badRequest, conflict, HttpError } from '../http/problem';
 import { moveStage } from '../inquiries/service';
 import { snapshotHash } from './snapshot-hash';
-import { createJobFromAcceptance } from '../jobs/create-job';
+import { type AgreedContract, createJobFromAcceptance } from '../jobs/create-job';
 import { clientWords, firmToday, isLatest, loadClientVersion, toPortalProposal, type ClientVersionRow } from './client-proposals';
 import { mailAcceptance, mailAnswer } from './decision-mail';
 import { longDate } from '../i18n/long-date';
@@ -23,6 +26,27 @@ import { longDate } from '../i18n/long-date';
 export interface SigningContext {
   readonly ip: string;
   readonly userAgent: string;
+}
+
+/**
+ * The contract the client signs: the option, with the add-ons they ticked (acceptedSum). An add-on
+ * the proposal does not offer, or one ticked twice, is a 400 naming it.
+ */
+function agreedContract(snapshot: ProposalSnapshot, option: SnapshotOption, addOnIds: readonly string[]): AgreedContract {
+  try {
+    const sum = acceptedSum(option, snapshot.addOns, addOnIds, snapshot.currency);
+    const digits = minorUnitDigits(snapshot.currency);
+    const byId = new Map(snapshot.addOns.map((a) => [a.id, a]));
+    return {
+      total: sum.total.toFixed(digits),
+      tax: sum.tax.toFixed(digits),
+      addOns: addOnIds.map((id) => byId.get(id)!),
+      payments: option.payments.map((p, i) => ({ ...p, amount: sum.payments[i].amount.toFixed(digits), percent: sum.payments[i].percent })),
+    };
+  } catch (error) {
+    if (error instanceof DomainInputError) throw badRequest([{ field: error.field, message: error.message }]);
+    throw error;
+  }
 }
 
 /** Why this version can take no answer now, as the client should read it (409), or null. */
@@ -55,6 +79,8 @@ export async function acceptProposal(
   const input = parseBody();
   const option = row.snapshot.options.find((o) => o.id === input.variantId);
   if (!option) throw badRequest([{ field: 'variantId', message: 'Choose one of the options in this proposal.' }]);
+  const addOnIds = input.addOnIds ?? [];
+  const agreed = agreedContract(row.snapshot, option, addOnIds);
   const now = ctx.now();
   const today = await firmToday(tx, now);
   const refused = refusal(row, today, true);
@@ -67,9 +93,9 @@ export async function acceptProposal(
   }
 
   await tx.client.query(
-    `update proposal_versions set status = 'accepted', decided_at = $3, accepted_variant_id = $4, signed_name = $5, signed_ip = $6, signed_user_agent = $7
+    `update proposal_versions set status = 'accepted', decided_at = $3, accepted_variant_id = $4, accepted_add_on_ids = $8, signed_name = $5, signed_ip = $6, signed_user_agent = $7
       where tenant_id = $1 and id = $2 and status = 'sent'`,
-    [tx.tenantId, id, now, option.id, input.signedName, signing.ip, signing.userAgent.slice(0, 500)],
+    [tx.tenantId, id, now, option.id, input.signedName, signing.ip, signing.userAgent.slice(0, 500), addOnIds],
   );
   await tx.client.query(
     `update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status = 'draft'`,
@@ -89,6 +115,7 @@ export async function acceptProposal(
     title: row.snapshot.title,
     currency: row.snapshot.currency,
     option,
+    agreed,
     actorPortalUserId: client.id,
   });
   if (row.inquiry_id) await moveStage(tx, clientActor(client), row.inquiry_id, { stage: 'won' }, now);
@@ -101,7 +128,8 @@ export async function acceptProposal(
     data: {
       version: row.version,
       optionId: option.id,
-      total: option.total,
+      addOnIds,
+      total: agreed.total,
       signedName: input.signedName,
       ip: signing.ip,
       snapshotHash: hash,
@@ -112,7 +140,7 @@ export async function acceptProposal(
   // Issuing holds the firm's invoice counter until this transaction commits: only the e-mails, which say
   // whether the deposit invoice went out, come after it.
   const depositInvoiceId = await depositAtAcceptance(tx, ctx, jobId, today, now);
-  await mailAcceptance(tx, ctx, { row, option, signedName: input.signedName, signedAt: now, client, jobId, depositInvoiceId });
+  await mailAcceptance(tx, ctx, { row, option, agreed, signedName: input.signedName, signedAt: now, client, jobId, depositInvoiceId });
   return { ...toPortalProposal(await loadClientVersion(tx, client, id), today, clientWords(client)), depositInvoiceId };
 }
 

@@ -6,6 +6,7 @@ import { localeOf } from '../i18n/catalog';
 import { proposalAcceptedClientMail, proposalAcceptedMail, proposalAnsweredMail } from '../mail/acceptance-templates';
 import { firmDateTime, firmTimeZone } from '../mail/firm-time';
 import { enqueueMail } from '../mail/outbox';
+import { type AgreedContract, agreedLabel } from '../jobs/create-job';
 import type { ClientVersionRow } from './client-proposals';
 
 /** Active owners and office members: the people who act on a client's answer. */
@@ -28,6 +29,7 @@ export async function mailAcceptance(
   p: {
     row: ClientVersionRow;
     option: SnapshotOption;
+    agreed: AgreedContract;
     signedName: string;
     signedAt: Date;
     client: ClientPrincipal;
@@ -53,8 +55,8 @@ export async function mailAcceptance(
     clientName: snap.client.name || p.client.name,
     title: snap.title,
     version: p.row.version,
-    optionLabel: p.option.label,
-    total: money(snap.locale, snap.currency, p.option.total),
+    optionLabel: agreedLabel(p.option, p.agreed),
+    total: money(snap.locale, snap.currency, p.agreed.total),
     signedName: p.signedName,
     signedOn: firmDateTime(p.signedAt, snap.locale, timeZone),
     depositNumber,
@@ -77,7 +79,7 @@ export async function mailAcceptance(
     // The client's copy in their language (the principal carries it), money and dates for it in the firm's country.
     ...proposalAcceptedClientMail({
       ...common,
-      total: money(clientLocale, snap.currency, p.option.total),
+      total: money(clientLocale, snap.currency, p.agreed.total),
       signedOn: firmDateTime(p.signedAt, clientLocale, timeZone),
       reference: p.row.snapshot_hash.slice(0, 12),
       url: `${base}/portal/proposals/${p.row.id}`,

@@ -30,7 +30,7 @@ export function depositCapRule(sources: ProposalSources): DepositCapRule {
 }
 
 const COLUMNS = `id, estimate_id, version, status, snapshot, snapshot_hash, expires_on::text as expires_on, sent_at, decided_at,
-  accepted_variant_id, signed_name, client_comment, created_at`;
+  accepted_variant_id, accepted_add_on_ids, signed_name, client_comment, created_at`;
 
 /** The columns COLUMNS selects, as PostgreSQL hands them over (the client's reads add to it). */
 export interface VersionRow {
@@ -44,6 +44,7 @@ export interface VersionRow {
   sent_at: Date | null;
   decided_at: Date | null;
   accepted_variant_id: string | null;
+  accepted_add_on_ids: string[];
   signed_name: string | null;
   client_comment: string;
   created_at: Date;
@@ -68,6 +69,7 @@ const view = (r: VersionRow): ProposalVersionView => ({
   ...summary(r),
   snapshot: r.snapshot,
   acceptedVariantId: r.accepted_variant_id,
+  acceptedAddOnIds: r.accepted_add_on_ids,
   signedName: r.signed_name,
   clientComment: r.client_comment,
 });

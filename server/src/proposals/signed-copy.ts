@@ -29,6 +29,7 @@ export async function loadSignedCopy(
       // In the reader's language, as the rest of their copy; the time in the firm's zone.
       signedAt: firmDateTime(row.decided_at, clientWords(client).locale, await firmTimeZone(tx, tx.tenantId)),
       optionId: row.accepted_variant_id,
+      addOnIds: row.accepted_add_on_ids,
       ip: rows[0]?.signed_ip ?? '',
       snapshotHash: row.snapshot_hash,
     },

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { requiredText, text } from '../common/fields';
+import { ESTIMATE_INPUT_LIMITS } from './estimate-types';
 import {
   PROPOSAL_COMMENT_MAX,
   SIGNED_NAME_MAX,
@@ -9,12 +10,18 @@ import {
   type ProposalDecline,
 } from './proposal-types';
 
+const CHOOSE_ADD_ONS = 'Choose add-ons from this proposal.';
+
 /**
  * The client's answer to a sent proposal in the portal. Acceptance is a typed signature: the
- * option chosen, the client's full name as they type it, and an explicit tick of consent.
+ * option chosen, the add-ons taken with it, the client's full name as they type it, and an explicit tick of consent.
  */
 export const proposalAcceptance = z.strictObject({
   variantId: z.string({ error: 'Choose an option.' }).trim().min(1, { error: 'Choose an option.' }).max(60, { error: 'Choose an option.' }),
+  addOnIds: z
+    .array(z.string({ error: CHOOSE_ADD_ONS }).max(ESTIMATE_INPUT_LIMITS.shortIdMax, { error: CHOOSE_ADD_ONS }), { error: CHOOSE_ADD_ONS })
+    .max(ESTIMATE_INPUT_LIMITS.addOnsMax, { error: CHOOSE_ADD_ONS })
+    .optional(),
   signedName: z
     .string({ error: 'Type your full name to sign.' })
     .trim()

@@ -44,6 +44,8 @@ export interface PortalProposal {
   readonly snapshot: ProposalSnapshot;
   readonly decidedAt: string | null;
   readonly acceptedVariantId: string | null;
+  /** the add-ons the client took with the option (empty: none, or not accepted) */
+  readonly acceptedAddOnIds: readonly string[];
   readonly signedName: string | null;
   readonly clientComment: string;
 }

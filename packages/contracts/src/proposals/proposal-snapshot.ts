@@ -119,6 +119,8 @@ export interface ProposalVersionSummary {
 export interface ProposalVersionView extends ProposalVersionSummary {
   readonly snapshot: ProposalSnapshot;
   readonly acceptedVariantId: string | null;
+  /** the add-ons the client took with the option (empty: none, or not accepted) */
+  readonly acceptedAddOnIds: readonly string[];
   readonly signedName: string | null;
   readonly clientComment: string;
 }

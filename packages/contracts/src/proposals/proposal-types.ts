@@ -66,9 +66,10 @@ export interface ProposalUpdate {
   readonly notes?: string;
 }
 
-/** The client's typed signature on one option. */
+/** The client's typed signature on one option, with the add-ons they take (none when absent). */
 export interface ProposalAcceptance {
   readonly variantId: string;
+  readonly addOnIds?: readonly string[];
   readonly signedName: string;
   readonly consent: true;
 }

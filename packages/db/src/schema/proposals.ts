@@ -77,6 +77,8 @@ export const proposalVersions = pgTable(
     sentAt: timestamp('sent_at', { withTimezone: true }),
     decidedAt: timestamp('decided_at', { withTimezone: true }),
     acceptedVariantId: text('accepted_variant_id'),
+    /** the add-ons the client took with the option, by their ids in the snapshot */
+    acceptedAddOnIds: text('accepted_add_on_ids').array().notNull().default([]),
     signedName: text('signed_name'),
     signedIp: text('signed_ip'),
     signedUserAgent: text('signed_user_agent'),

@@ -104,9 +104,11 @@ export class ProposalVersions {
     return this.details().get(id) ?? null;
   }
 
+  /** The option the client took, and the add-ons with it ("Polished lime + Stencilled border"). */
   protected optionLabel(view: ProposalVersionView): string {
     const id = view.acceptedVariantId;
-    return view.snapshot.options.find((o) => o.id === id)?.label ?? id ?? '';
+    const addOns = view.acceptedAddOnIds.map((a) => view.snapshot.addOns.find((o) => o.id === a)?.label ?? a);
+    return [view.snapshot.options.find((o) => o.id === id)?.label ?? id ?? '', ...addOns].join(' + ');
   }
 
   protected startNew(): void {

@@ -22,6 +22,8 @@ export class ProposalDocument {
   readonly snapshot = input.required<ProposalSnapshot>();
   /** the option the client accepted, shown as chosen */
   readonly chosenOptionId = input<string | null>(null);
+  /** the add-ons the client took with it, shown as chosen */
+  readonly chosenAddOnIds = input<readonly string[]>([]);
 
   protected readonly optionLabels = computed(() => new Map(this.snapshot().options.map((o) => [o.id, o.label])));
 
@@ -57,5 +59,9 @@ export class ProposalDocument {
 
   protected isChosen(option: SnapshotOption): boolean {
     return option.id === this.chosenOptionId();
+  }
+
+  protected isAddOnChosen(id: string): boolean {
+    return this.chosenAddOnIds().includes(id);
   }
 }

@@ -23,6 +23,7 @@ const proposal = (isExpired: boolean): PortalProposal => ({
   snapshot: { ...SNAPSHOT, title: 'Stair hall, lime plaster', expiresOn: '2026-11-30' },
   decidedAt: null,
   acceptedVariantId: null,
+  acceptedAddOnIds: [],
   signedName: null,
   clientComment: '',
 });

@@ -124,8 +124,10 @@ export class ProposalPage {
     });
   }
 
+  /** The option accepted, and the add-ons taken with it ("Polished lime + Stencilled border"). */
   protected optionLabel(p: PortalProposal): string {
-    return p.snapshot.options.find((o) => o.id === p.acceptedVariantId)?.label ?? '';
+    const addOns = p.acceptedAddOnIds.map((id) => p.snapshot.addOns.find((a) => a.id === id)?.label ?? id);
+    return [p.snapshot.options.find((o) => o.id === p.acceptedVariantId)?.label ?? '', ...addOns].join(' + ');
   }
 
   /** Accepted: the deposit invoice to pay now, when the firm issued it in the same step. */

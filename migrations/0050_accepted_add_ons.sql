@@ -1,0 +1,1 @@
+ALTER TABLE "proposal_versions" ADD COLUMN "accepted_add_on_ids" text[] DEFAULT '{}' NOT NULL;
