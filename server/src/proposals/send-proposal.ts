@@ -10,6 +10,7 @@ import { proposalSentMail } from '../mail/proposal-templates';
 import { ensurePortalAccount } from './client-portal-account';
 import { assertEstimateOpen } from './estimates';
 import { getVersion, lockVersion } from './proposal-versions';
+import { snapshotHash } from './snapshot-hash';
 import { longDate } from '../i18n/long-date';
 import { localeOf } from '../i18n/catalog';
 import { clientReader } from '../i18n/reader';
@@ -18,7 +19,7 @@ import { clientReader } from '../i18n/reader';
 export const PROPOSAL_LINK_DAYS = 3;
 
 /**
- * Sends a draft: from here the version is frozen. In one transaction it is marked sent, older sent
+ * Sends a draft: from here the version is frozen, dated the day it is sent. In one transaction it is marked sent, older sent
  * versions are superseded (only the newest can be accepted), the estimate becomes "proposed", the
  * client gets a portal account if needed and the e-mail with a one-time sign-in link goes to the outbox.
  */
@@ -52,13 +53,16 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
   const account = await ensurePortalAccount(tx, client);
 
   const sentAt = ctx.now();
+  // A proposal is dated the day it goes out, not the day its draft was made; its fingerprint follows.
+  const snap = version.snapshot.issuedOn === today ? version.snapshot : { ...version.snapshot, issuedOn: today };
+  const hash = snapshotHash(snap);
   await tx.client.query(
     `update proposal_versions set status = 'superseded' where tenant_id = $1 and estimate_id = $2 and status in ('sent', 'changes_requested') and id <> $3`,
     [tx.tenantId, version.estimateId, id],
   );
   await tx.client.query(
-    `update proposal_versions set status = 'sent', sent_at = $3 where tenant_id = $1 and id = $2 and status = 'draft'`,
-    [tx.tenantId, id, sentAt],
+    `update proposal_versions set status = 'sent', sent_at = $3, snapshot = $4::jsonb, snapshot_hash = $5 where tenant_id = $1 and id = $2 and status = 'draft'`,
+    [tx.tenantId, id, sentAt, JSON.stringify(snap), hash],
   );
   await tx.client.query(
     `update estimates set status = 'proposed', updated_at = $3 where tenant_id = $1 and id = $2 and status <> 'accepted'`,
@@ -67,7 +71,6 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
 
   const { token } = await createPortalLink(tx, account.id, sentAt, PROPOSAL_LINK_DAYS * 24 * 60);
   const base = ctx.config.PUBLIC_URL;
-  const snap = version.snapshot;
   // In the client's language (theirs, else the firm's), the date for it in the firm's country.
   const reader = await clientReader(tx, client.id);
   await enqueueMail(tx, ctx.queue, {
@@ -93,7 +96,7 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
     action: 'proposal.sent',
     entity: 'proposal_version',
     entityId: id,
-    data: { version: version.version, snapshotHash: version.snapshotHash, to: account.email },
+    data: { version: version.version, snapshotHash: hash, to: account.email },
   });
   return getVersion(tx, id);
 }
