@@ -205,7 +205,7 @@ describe('the client’s invoices in the portal', () => {
       taxIncluded: '191.29',
       amountDue: '2510.00',
       canPayOnline: false,
-      payOnlineNote: null,
+      payOnlineReason: null,
       creditNote: null,
     });
     expect(one.body.progress.summary.dueThisPeriod).toBe('2810.00');

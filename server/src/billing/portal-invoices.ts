@@ -124,7 +124,7 @@ export async function getClientInvoice(
       ? { id: note.id, number: note.number_text, issuedOn: note.issued_on, amount: moneyOut(note.amount, inv.currency) }
       : null,
     canPayOnline: online.canPayOnline,
-    payOnlineNote: online.payOnlineNote,
+    payOnlineReason: online.payOnlineReason,
     receipts: await listPortalReceipts(tx, id),
   };
 }

@@ -23,7 +23,7 @@ describe('starting a card payment from the portal', () => {
   it('opens the processor’s checkout for the amount due, offers the same one again, and records the payment on return', async () => {
     const f = await clientInvoice(p.t, 'Checkout Start Plaster', { status: 'part_paid', total: '1000.00', amountPaid: '400.00' });
     const invoice = (await f.client.agent.get(`/api/portal/invoices/${f.invoiceId}`)).body as PortalInvoiceDetail;
-    expect(invoice).toMatchObject({ amountDue: '600.00', canPayOnline: true, payOnlineNote: null });
+    expect(invoice).toMatchObject({ amountDue: '600.00', canPayOnline: true, payOnlineReason: null });
 
     const first = await f.started();
     expect(first.url).toBe(`${p.fake.baseUrl}/pay/${first.sessionId}`);
@@ -79,7 +79,7 @@ describe('starting a card payment from the portal', () => {
     expect(completed.outcome).toBe('Payment RCT-0001 already recorded');
     expect((await invoiceBooks(p.t, f.firmId, f.invoiceId)).payments).toHaveLength(1);
     const after = (await f.client.agent.get(`/api/portal/invoices/${f.invoiceId}`)).body as PortalInvoiceDetail;
-    expect(after).toMatchObject({ status: 'paid', canPayOnline: false, payOnlineNote: null });
+    expect(after).toMatchObject({ status: 'paid', canPayOnline: false, payOnlineReason: null });
     expect(after.receipts.map((r) => [r.kind, r.number, r.method, r.amount])).toEqual([['payment', 'RCT-0001', 'card', '600.00']]);
     // The receipt e-mail, queued with the payment, reaches the client once.
     const mail = await p.t.inbox.waitFor((m) => m.subject === 'Receipt RCT-0001 — Checkout Start Plaster');
@@ -142,7 +142,7 @@ describe('starting a card payment from the portal', () => {
     ]);
     expect((await f.client.agent.get(`/api/portal/invoices/${refunded}`)).body).toMatchObject({
       canPayOnline: false,
-      payOnlineNote: 'The firm gave back what was paid on this invoice, so it is not paid by card here. Please ask the firm.',
+      payOnlineReason: { code: 'refunded' },
     });
 
     // Stripe Docs "Supported currencies" — minimum charge amounts: USD 0.50.
@@ -153,7 +153,7 @@ describe('starting a card payment from the portal', () => {
     const smallView = (await f.client.agent.get(`/api/portal/invoices/${small}`)).body as PortalInvoiceDetail;
     expect(smallView).toMatchObject({
       canPayOnline: false,
-      payOnlineNote: 'Below the smallest card payment, 0.50 USD; please pay another way.',
+      payOnlineReason: { code: 'belowMinimum', currency: 'USD', minimum: '0.50' },
     });
     const atMinimum = await insertInvoice(p.t, f.firmId, f.jobId, { kind: 'milestone', status: 'issued', number: 4, total: '0.50' });
     expect((await f.start(atMinimum)).status).toBe(201);
@@ -178,7 +178,7 @@ describe('starting a card payment from the portal', () => {
     const cookie = session.request.cookies;
     const csrf = (session.body as { csrfToken: string }).csrfToken;
     const view = (await request(off.app).get(`/api/portal/invoices/${f.invoiceId}`).set('cookie', cookie)).body as PortalInvoiceDetail;
-    expect(view).toMatchObject({ amountDue: '250.00', canPayOnline: false, payOnlineNote: null });
+    expect(view).toMatchObject({ amountDue: '250.00', canPayOnline: false, payOnlineReason: null });
     const res = await request(off.app)
       .post(`/api/portal/invoices/${f.invoiceId}/checkout`)
       .set('cookie', cookie)

@@ -10,7 +10,7 @@ import { withClient } from '../http/guards';
 import type { ClientPrincipal } from '../http/principal';
 import { conflict, HttpError, notFound } from '../http/problem';
 import { clientIdOf } from '../proposals/client-proposals';
-import { payOnlineFor, REFUNDED_NOTE } from './portal-pay';
+import { payOnlineFor } from './portal-pay';
 import { processorFor } from './processor';
 
 /** How long the processor keeps a checkout open (Stripe allows 30 minutes to 24 hours). */
@@ -46,17 +46,32 @@ export async function loadPayableInvoice(tx: TenantTx, client: ClientPrincipal, 
   return rows[0];
 }
 
-/** 409 with the same words the portal shows instead of the pay button. */
+/**
+ * 409 when the invoice cannot be paid by card now, in the API's English. The portal says it in the
+ * client's language by this call, the status and the field (portal core/errors/problem-words.ts):
+ * `amount` is below the smallest card payment, anything else "cannot be paid by card now". So only
+ * the minimum names `amount`; the other refusals name the field that stops them, or none.
+ */
 function refuseUnpayable(isOnline: boolean, inv: PayableInvoice): void {
   if (!isOnline) throw conflict('This firm takes no card payments online; the invoice says how to pay.');
   if (inv.status === 'paid') throw conflict(`Invoice ${inv.number_text} is already paid.`);
   if (inv.status === 'void') throw conflict(`Invoice ${inv.number_text} is void: there is nothing to pay.`);
-  if (inv.status === 'refunded') throw conflict(REFUNDED_NOTE);
   const pay = payOnlineFor(isOnline, { status: inv.status, currency: inv.currency, amountDue: inv.due });
-  if (!pay.canPayOnline) {
-    throw conflict(pay.payOnlineNote ?? `Nothing is due on invoice ${inv.number_text}.`, [
-      { field: 'amount', message: pay.payOnlineNote ?? 'Nothing is due.' },
-    ]);
+  if (pay.canPayOnline) return;
+  const reason = pay.payOnlineReason;
+  switch (reason?.code) {
+    case 'refunded':
+      throw conflict('The firm gave back what was paid on this invoice, so it is not paid by card here. Please ask the firm.');
+    case 'currencyNotOffered': {
+      const message = `Card payment is not offered in ${reason.currency}; please pay another way.`;
+      throw conflict(message, [{ field: 'currency', message }]);
+    }
+    case 'belowMinimum': {
+      const message = `Below the smallest card payment, ${reason.minimum} ${reason.currency}; please pay another way.`;
+      throw conflict(message, [{ field: 'amount', message }]);
+    }
+    case undefined:
+      throw conflict(`Nothing is due on invoice ${inv.number_text}.`);
   }
 }
 

@@ -24,6 +24,18 @@ export interface PortalInvoiceSummary {
   readonly locale: string;
 }
 
+/**
+ * Why an invoice is not offered for card payment, as a code with its values (never words: the
+ * portal says it in the reader's language). Money: a decimal string in major units.
+ */
+export type PayOnlineReason =
+  /** the firm gave back what was paid, so the portal does not chase it; the client asks the firm */
+  | { readonly code: 'refunded' }
+  /** the card processor publishes no card charge in this currency */
+  | { readonly code: 'currencyNotOffered'; readonly currency: string }
+  /** the amount due is below the processor's smallest card charge in the currency ("0.50" USD) */
+  | { readonly code: 'belowMinimum'; readonly currency: string; readonly minimum: string };
+
 export interface PortalInvoiceDetail extends PortalInvoiceSummary {
   readonly lines: readonly InvoiceLine[];
   readonly progress: ProgressTable | null;
@@ -35,8 +47,8 @@ export interface PortalInvoiceDetail extends PortalInvoiceSummary {
   readonly creditNote: { readonly id: string; readonly number: string; readonly issuedOn: string; readonly amount: string } | null;
   /** open or part paid, online payments configured, and the amount due at least the processor's minimum */
   readonly canPayOnline: boolean;
-  /** why there is no pay button when the invoice is open ("Below the smallest card payment, 0.50 USD"); null otherwise */
-  readonly payOnlineNote: string | null;
+  /** why there is no pay button when online payments are on and the invoice is open or refunded; null otherwise */
+  readonly payOnlineReason: PayOnlineReason | null;
   /** receipts for its payments and refunds, newest last */
   readonly receipts: readonly PortalReceipt[];
 }

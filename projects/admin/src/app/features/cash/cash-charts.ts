@@ -1,4 +1,4 @@
-import type { ChartData, ChartOptions } from 'chart.js';
+import type { ChartData, ChartOptions, TooltipItem } from 'chart.js';
 import { barHeight, CHART_COLOURS, seriesFill } from './chart-look';
 import {
   CASH_AGING_BUCKETS,
@@ -8,9 +8,12 @@ import {
   type CashReceived,
 } from '@layerbook/contracts/types';
 import { monthLabel, weekLabel } from './cash-words';
-import { numberFormat } from '../../../../../shared/i18n/format/intl-cache';
+import { formatAmount, numberFormat } from '../../../../../shared/i18n/format';
 
 export type BarData = ChartData<'bar', number[], string>;
+
+/** The API's decimal text behind each bar, by series then bar: what a tooltip prints, as the table beside the chart does. */
+export type BarAmounts = readonly (readonly string[])[];
 
 /** The forecast's three parts, in the order they stack, with the words used in the legend and the table. */
 export const FORECAST_PARTS = [
@@ -42,41 +45,42 @@ export const FORECAST_PARTS = [
 
 const AGE_COLOURS = [CHART_COLOURS.verdigris, CHART_COLOURS.ochre, CHART_COLOURS.umber, CHART_COLOURS.rust, CHART_COLOURS.slate];
 
+/** Money owed by age, one figure per age (one series). */
+export const agingAmounts = (receivables: CashReceivables): BarAmounts => [CASH_AGING_BUCKETS.map((bucket) => receivables.buckets[bucket])];
+
 /** Money owed by age: one bar per age, each named on its axis. */
 export function agingChart(receivables: CashReceivables): BarData {
+  const [owed = []] = agingAmounts(receivables);
   return {
     labels: CASH_AGING_BUCKETS.map((bucket) => CASH_AGING_BUCKET_LABELS[bucket]),
-    datasets: [
-      {
-        label: 'Owed',
-        data: CASH_AGING_BUCKETS.map((bucket) => barHeight(receivables.buckets[bucket])),
-        backgroundColor: AGE_COLOURS,
-      },
-    ],
+    datasets: [{ label: 'Owed', data: owed.map(barHeight), backgroundColor: AGE_COLOURS }],
   };
 }
+
+/** Cash received by month, less refunds (one series). */
+export const receivedAmounts = (received: CashReceived): BarAmounts => [received.months.map((month) => month.net)];
 
 /** Cash received by month, less refunds given in that month. */
 export function receivedChart(received: CashReceived): BarData {
+  const [net = []] = receivedAmounts(received);
   return {
     labels: received.months.map((month) => monthLabel(month.month)),
-    datasets: [
-      {
-        label: 'Received, less refunds',
-        data: received.months.map((month) => barHeight(month.net)),
-        backgroundColor: CHART_COLOURS.verdigris,
-      },
-    ],
+    datasets: [{ label: 'Received, less refunds', data: net.map(barHeight), backgroundColor: CHART_COLOURS.verdigris }],
   };
 }
 
+/** Cash expected by week, one series per forecast part, in the order they stack. */
+export const forecastAmounts = (forecast: CashForecast): BarAmounts =>
+  FORECAST_PARTS.map((part) => forecast.weeks.map((week) => week[part.key]));
+
 /** Cash expected by week, its three parts stacked and each filled its own way. */
 export function forecastChart(forecast: CashForecast): BarData {
+  const amounts = forecastAmounts(forecast);
   return {
     labels: forecast.weeks.map((week) => weekLabel(week.weekStart)),
-    datasets: FORECAST_PARTS.map((part) => ({
+    datasets: FORECAST_PARTS.map((part, i) => ({
       label: part.label,
-      data: forecast.weeks.map((week) => barHeight(week[part.key])),
+      data: (amounts[i] ?? []).map(barHeight),
       backgroundColor: seriesFill(part.colour, part.pattern),
       borderColor: part.colour,
       borderWidth: 1,
@@ -85,20 +89,35 @@ export function forecastChart(forecast: CashForecast): BarData {
   };
 }
 
-/** Options shared by the cash charts: amounts on the value axis in the firm's currency, legend only when there are several series. */
-export function barOptions(currency: string, locale: string, options: { stacked?: boolean; legend?: boolean } = {}): ChartOptions<'bar'> {
-  const money = numberFormat(locale, { style: 'currency', currency, maximumFractionDigits: 0 });
+/**
+ * Options shared by the cash charts: amounts on the value axis in the firm's currency, legend only
+ * when there are several series. The axis rounds to whole units (its steps are round figures); a
+ * tooltip names one bar, so it prints that bar's API amount exactly as the table does (`money` pipe:
+ * formatAmount, the currency's own minor units), never the float the bar is drawn from.
+ */
+export function barOptions(
+  currency: string,
+  locale: string,
+  amounts: BarAmounts,
+  options: { stacked?: boolean; legend?: boolean } = {},
+): ChartOptions<'bar'> {
+  const axisMoney = numberFormat(locale, { style: 'currency', currency, maximumFractionDigits: 0 });
   return {
     responsive: true,
     maintainAspectRatio: false,
     animation: false,
     scales: {
       x: { stacked: options.stacked ?? false, grid: { display: false } },
-      y: { stacked: options.stacked ?? false, beginAtZero: true, ticks: { callback: (value) => money.format(Number(value)) } },
+      y: { stacked: options.stacked ?? false, beginAtZero: true, ticks: { callback: (value) => axisMoney.format(Number(value)) } },
     },
     plugins: {
       legend: { display: options.legend ?? false, position: 'bottom' },
-      tooltip: { callbacks: { label: (item) => `${item.dataset.label ?? ''}: ${money.format(item.parsed.y ?? 0)}` } },
+      tooltip: { callbacks: { label: (item) => barTooltip(item, amounts, currency, locale) } },
     },
   };
+}
+
+/** One bar's tooltip line: its series and its amount as the table prints it. */
+export function barTooltip(item: TooltipItem<'bar'>, amounts: BarAmounts, currency: string, locale: string): string {
+  return `${item.dataset.label ?? ''}: ${formatAmount(amounts[item.datasetIndex]?.[item.dataIndex], currency, locale)}`;
 }

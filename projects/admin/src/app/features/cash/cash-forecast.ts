@@ -1,12 +1,13 @@
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { loadMessage } from '../../shared/forms/load-message';
 import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { CashChart } from './cash-chart';
-import { FORECAST_PARTS, barOptions, forecastChart } from './cash-charts';
+import { barOptions, FORECAST_PARTS, forecastAmounts, forecastChart } from './cash-charts';
+import { Language } from '../../../../../shared/i18n/language';
 import type { CashForecast as CashForecastView } from '@layerbook/contracts/types';
 import { TranslatePipe } from '@ngx-translate/core';
 
@@ -117,13 +118,19 @@ export const FORECAST_URL = '/api/cash/forecast';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class CashForecast {
-  private readonly locale = inject(LOCALE_ID);
+  /** the reader's locale, as the `money` pipe of the table beside each chart uses it */
+  private readonly language = inject(Language);
   protected readonly parts = FORECAST_PARTS;
   protected readonly forecast = httpResource<CashForecastView>(() => FORECAST_URL);
   protected readonly view = computed(() => (this.forecast.hasValue() ? this.forecast.value() : null));
   protected readonly message = loadMessage(this.forecast);
   protected readonly chart = computed(() => {
     const view = this.view();
-    return view ? { data: forecastChart(view), options: barOptions(view.currency, this.locale, { stacked: true, legend: true }) } : null;
+    return view
+      ? {
+          data: forecastChart(view),
+          options: barOptions(view.currency, this.language.locale(), forecastAmounts(view), { stacked: true, legend: true }),
+        }
+      : null;
   });
 }

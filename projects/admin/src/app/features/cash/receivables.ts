@@ -1,5 +1,5 @@
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -13,7 +13,8 @@ import { CalendarDatePipe } from '../../shared/ui/calendar-date-pipe';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { CashChart } from './cash-chart';
-import { agingChart, barOptions } from './cash-charts';
+import { agingAmounts, agingChart, barOptions } from './cash-charts';
+import { Language } from '../../../../../shared/i18n/language';
 import {
   CASH_AGING_BUCKETS,
   CASH_AGING_BUCKET_LABELS,
@@ -52,7 +53,8 @@ export const CLIENTS_LISTED = 25;
 export class Receivables {
   private readonly router = inject(Router);
   private readonly route = inject(ActivatedRoute);
-  private readonly locale = inject(LOCALE_ID);
+  /** the reader's locale, as the `money` pipe of the table beside each chart uses it */
+  private readonly language = inject(Language);
 
   protected readonly buckets = CASH_AGING_BUCKETS;
   protected readonly bucketLabels = CASH_AGING_BUCKET_LABELS;
@@ -76,7 +78,7 @@ export class Receivables {
   protected readonly message = loadMessage(this.receivables);
   protected readonly chart = computed(() => {
     const view = this.view();
-    return view ? { data: agingChart(view), options: barOptions(view.currency, this.locale) } : null;
+    return view ? { data: agingChart(view), options: barOptions(view.currency, this.language.locale(), agingAmounts(view)) } : null;
   });
   protected readonly isDrilled = computed(() => this.drill().age !== null || this.drill().clientId !== null);
   /** The invoices behind a figure, asked for when the owner opens one (an age, a client, both). */

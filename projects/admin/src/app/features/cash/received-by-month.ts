@@ -1,11 +1,12 @@
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { loadMessage } from '../../shared/forms/load-message';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { CashChart } from './cash-chart';
-import { barOptions, receivedChart } from './cash-charts';
+import { barOptions, receivedAmounts, receivedChart } from './cash-charts';
+import { Language } from '../../../../../shared/i18n/language';
 import type { CashReceived } from '@layerbook/contracts/types';
 import { monthLabel } from './cash-words';
 import { TranslatePipe } from '@ngx-translate/core';
@@ -79,13 +80,14 @@ export const RECEIVED_URL = '/api/cash/received';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ReceivedByMonth {
-  private readonly locale = inject(LOCALE_ID);
+  /** the reader's locale, as the `money` pipe of the table beside each chart uses it */
+  private readonly language = inject(Language);
   protected readonly monthLabel = monthLabel;
   protected readonly received = httpResource<CashReceived>(() => RECEIVED_URL);
   protected readonly view = computed(() => (this.received.hasValue() ? this.received.value() : null));
   protected readonly message = loadMessage(this.received);
   protected readonly chart = computed(() => {
     const view = this.view();
-    return view ? { data: receivedChart(view), options: barOptions(view.currency, this.locale) } : null;
+    return view ? { data: receivedChart(view), options: barOptions(view.currency, this.language.locale(), receivedAmounts(view)) } : null;
   });
 }

@@ -1,6 +1,7 @@
 import { provideTestI18n } from '../../../../../shared/i18n/testing';
 import billing from '../../../i18n/billing/en.json';
 import payments from '../../../i18n/payments/en.json';
+import paymentsEs from '../../../i18n/payments/es.json';
 import proposals from '../../../i18n/proposals/en.json';
 import problems from '../../../i18n/problems/en.json';
 import common from '../../../../../shared/i18n/words/common/en.json';
@@ -9,20 +10,22 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { TestBed } from '@angular/core/testing';
 import type { PortalInvoiceDetail } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { Language } from '../../../../../shared/i18n/language';
 import { PayByCard } from './pay-by-card';
 import { LEAVE_FOR } from './payment-api';
 import { openDeposit } from './payment-fixtures';
 
-async function render(invoice: PortalInvoiceDetail) {
+async function render(invoice: PortalInvoiceDetail, language: 'en' | 'es' = 'en') {
   const leaveFor = vi.fn<(url: string) => void>();
   TestBed.configureTestingModule({
     providers: [
-      provideTestI18n({ billing, payments, proposals, problems, common }),
+      provideTestI18n({ billing, payments: language === 'es' ? paymentsEs : payments, proposals, problems, common }, language),
       provideHttpClient(),
       provideHttpClientTesting(),
       { provide: LEAVE_FOR, useValue: leaveFor },
     ],
   });
+  await TestBed.inject(Language).use(language);
   const fixture = TestBed.createComponent(PayByCard);
   fixture.componentRef.setInput('invoice', invoice);
   await fixture.whenStable();
@@ -74,17 +77,39 @@ describe('paying an invoice by card', () => {
   it('when paying online is not open: no button, the reason, and the firm’s own way', async () => {
     const { html, button } = await render({
       ...openDeposit,
+      amountDue: '0.40',
       canPayOnline: false,
-      payOnlineNote: 'Below the smallest card payment, 0.50 USD.',
+      payOnlineReason: { code: 'belowMinimum', currency: 'USD', minimum: '0.50' },
     });
     expect(button()).toBeNull();
     expect(html.querySelector('h2')?.textContent).toBe('How to pay');
-    expect(html.textContent).toContain('Below the smallest card payment, 0.50 USD.');
+    expect(html.querySelector('.note')?.textContent?.replace(/\s+/g, ' ').trim()).toBe(
+      'info Card payment online is not available for this invoice. The amount due is less than the smallest payment the card processor takes, $0.50.',
+    );
     expect(html.textContent).toContain('Pay Quillfeather Finishes the way the invoice says, and quote INV-0007.');
   });
 
+  it.each([
+    [
+      { code: 'belowMinimum', currency: 'USD', minimum: '0.50' },
+      'El pago con tarjeta en línea no está disponible para esta factura. El importe pendiente es menor que el pago mínimo que acepta el procesador de tarjetas, $0.50.',
+    ],
+    [
+      { code: 'currencyNotOffered', currency: 'XOF' },
+      'El pago con tarjeta en línea no está disponible para esta factura. El procesador de tarjetas no acepta pagos con tarjeta en XOF.',
+    ],
+    [
+      { code: 'refunded' },
+      'El pago con tarjeta en línea no está disponible para esta factura. La empresa devolvió lo pagado en esta factura. Por favor, consulte con la empresa antes de pagar.',
+    ],
+  ] as const)('says the reason %o in the reader’s language, Spanish here', async (reason, said) => {
+    const { html } = await render({ ...openDeposit, canPayOnline: false, payOnlineReason: reason }, 'es');
+    expect(html.querySelector('h2')?.textContent).toBe('Cómo pagar');
+    expect(html.querySelector('.note span')?.textContent?.replace(/\s+/g, ' ').trim()).toBe(said);
+  });
+
   it('when online payments are off altogether: only the firm’s own way', async () => {
-    const { html } = await render({ ...openDeposit, canPayOnline: false, payOnlineNote: null });
+    const { html } = await render({ ...openDeposit, canPayOnline: false, payOnlineReason: null });
     expect(html.textContent).not.toContain('not available');
     expect(html.textContent).toContain('quote INV-0007');
   });

@@ -9,16 +9,16 @@ import { LEAVE_FOR, PaymentApi } from './payment-api';
 import { payButtonLabel } from './payment-words';
 import { TranslatePipe } from '@ngx-translate/core';
 import { Language } from '../../../../../shared/i18n/language';
-import { formatAmount } from '../../../../../shared/i18n/format';
+import { formatAmount, LbMoneyPipe } from '../../../../../shared/i18n/format';
 
 /**
  * How to pay an open invoice: by card on the processor's payment page (the server opens a checkout,
  * the browser goes there and comes back to the return page), or, when paying online is not open for
- * it, the firm's own way with the reason why.
+ * it, the firm's own way with the reason why (the server's reason code, said in the reader's words).
  */
 @Component({
   selector: 'lb-pay-by-card',
-  imports: [FormAlert, MatButtonModule, MatIconModule, TranslatePipe],
+  imports: [FormAlert, LbMoneyPipe, MatButtonModule, MatIconModule, TranslatePipe],
   template: `
     @let inv = invoice();
     <section class="pay" aria-labelledby="pay-heading">
@@ -35,9 +35,23 @@ import { formatAmount } from '../../../../../shared/i18n/format';
         }
       } @else {
         <h2 id="pay-heading">{{ 'payments.pay.how' | translate }}</h2>
-        @if (inv.payOnlineNote; as note) {
+        @if (inv.payOnlineReason; as reason) {
           <p class="note">
-            <mat-icon aria-hidden="true">info</mat-icon><span>{{ 'payments.pay.notAvailable' | translate: { note } }}</span>
+            <mat-icon aria-hidden="true">info</mat-icon>
+            <span>
+              {{ 'payments.pay.notAvailable' | translate }}
+              @switch (reason.code) {
+                @case ('belowMinimum') {
+                  {{ 'payments.pay.why.belowMinimum' | translate: { minimum: reason.minimum | lbMoney: reason.currency } }}
+                }
+                @case ('currencyNotOffered') {
+                  {{ 'payments.pay.why.currencyNotOffered' | translate: { currency: reason.currency } }}
+                }
+                @case ('refunded') {
+                  {{ 'payments.pay.why.refunded' | translate }}
+                }
+              }
+            </span>
           </p>
         }
         <p>{{ 'payments.pay.otherWay' | translate: { firm: inv.document.firm.name, number: inv.number } }}</p>

@@ -33,7 +33,7 @@ export const openDeposit: PortalInvoiceDetail = {
   },
   creditNote: null,
   canPayOnline: true,
-  payOnlineNote: null,
+  payOnlineReason: null,
   receipts: [],
 };
 
