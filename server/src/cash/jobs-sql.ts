@@ -24,12 +24,16 @@ export const JOB_MONEY = `with listed as materialized (select * from jobs where 
     left join prices pr on pr.version_id = j.proposal_version_id and pr.variant_id = j.accepted_variant_id
    order by j.created_at desc, j.id desc`;
 
-/** Σ and count of the contract sums of the jobs not cancelled (for the average), and the decided proposals. */
-export const JOB_TOTALS = `select j.contracted_sum, j.contracted_count, p.accepted, p.declined
+/**
+ * Σ and count of the contract sums of the jobs not cancelled (for the average), and the estimates
+ * the client decided: won or declined as the estimate stands, so a first version declined and its
+ * revision accepted is one estimate won, not a win and a loss.
+ */
+export const JOB_TOTALS = `select j.contracted_sum, j.contracted_count, e.accepted, e.declined
     from (select coalesce(sum(contract_sum), 0)::text as contracted_sum, count(*)::int as contracted_count
             from jobs where tenant_id = $1 and status <> 'cancelled') j,
          (select count(*) filter (where status = 'accepted')::int as accepted, count(*) filter (where status = 'declined')::int as declined
-            from proposal_versions where tenant_id = $1 and status in ('accepted', 'declined')) p`;
+            from estimates where tenant_id = $1 and status in ('accepted', 'declined')) e`;
 
 export interface JobTotalsRow {
   contracted_sum: string;
