@@ -158,6 +158,26 @@ async function demoClient(tx: TenantTx, people: DemoBillingPeople): Promise<Clie
   };
 }
 
+/** Surfaces of the demo house and a finish system of the demo firm, by their names (a missing one stops the seed). */
+async function surfacesAndSystem(
+  tx: TenantTx,
+  siteId: string,
+  names: { surfaceNames: readonly string[]; systemName: string },
+): Promise<{ surfaceIds: string[]; finishSystemId: string }> {
+  const { rows: surfaces } = await tx.client.query<{ id: string }>(
+    `select s.id from surfaces s join rooms r on r.id = s.room_id
+      where s.tenant_id = $1 and r.site_id = $2 and s.name = any($3) order by r.position, s.position`,
+    [tx.tenantId, siteId, names.surfaceNames],
+  );
+  const { rows: systems } = await tx.client.query<{ id: string }>(`select id from finish_systems where tenant_id = $1 and name = $2`, [
+    tx.tenantId,
+    names.systemName,
+  ]);
+  if (surfaces.length !== names.surfaceNames.length || !systems[0])
+    throw new Error(`demo: surfaces or system "${names.systemName}" missing`);
+  return { surfaceIds: surfaces.map((s) => s.id), finishSystemId: systems[0].id };
+}
+
 /** An estimate on the demo house, a proposal version sent to the demo client and accepted in the portal: the job. */
 async function acceptedJob(
   inFirm: InFirm,
@@ -170,17 +190,7 @@ async function acceptedJob(
   const office: Actor = { kind: 'staff', userId: people.officeId, role: 'office' };
   clock.current = at(plan.daysAgo.estimate, 15);
   const estimateId = await inFirm(async (tx) => {
-    const { rows: surfaces } = await tx.client.query<{ id: string; name: string }>(
-      `select s.id, s.name from surfaces s join rooms r on r.id = s.room_id
-        where s.tenant_id = $1 and r.site_id = $2 and s.name = any($3) order by r.position, s.position`,
-      [tx.tenantId, people.siteId, plan.surfaceNames],
-    );
-    const { rows: systems } = await tx.client.query<{ id: string }>(`select id from finish_systems where tenant_id = $1 and name = $2`, [
-      tx.tenantId,
-      plan.systemName,
-    ]);
-    if (surfaces.length !== plan.surfaceNames.length || !systems[0])
-      throw new Error(`demo job "${plan.title}": surfaces or system missing`);
+    const found = await surfacesAndSystem(tx, people.siteId, plan);
     const startDate = await firmDay(tx, at(plan.daysAgo.start));
     const id = await createEstimate(
       tx,
@@ -196,7 +206,11 @@ async function acceptedJob(
         startDate,
         isOccupied: true,
         variants: [
-          { id: 'A', label: plan.optionLabel, surfaces: surfaces.map((s) => ({ surfaceId: s.id, finishSystemId: systems[0].id })) },
+          {
+            id: 'A',
+            label: plan.optionLabel,
+            surfaces: found.surfaceIds.map((surfaceId) => ({ surfaceId, finishSystemId: found.finishSystemId })),
+          },
         ],
         addOns: [],
         equipment: [],
@@ -330,19 +344,28 @@ export async function seedDemoBilling(pool: Pool, firmId: string, people: DemoBi
       if (!item) throw new Error(`demo seed: job ${jobId} has no stage payment waiting for a layer`);
       return item.layerOrder;
     });
-  const changeOrder = async (jobId: string, daysAgo: number, title: string, description: string, price: string) => {
-    const made = await step(daysAgo, (tx) =>
-      createChangeOrder(
-        tx,
-        office,
-        jobId,
-        () => parse(changeOrderCreate, { title, description, pricing: { kind: 'lumpSum', price } }),
-        clock.current,
-      ),
-    );
+  /** A change order made and sent: a lump sum, or priced from surfaces of the demo house with a finish system (by names). */
+  const changeOrder = async (
+    jobId: string,
+    daysAgo: number,
+    title: string,
+    description: string,
+    price: string | { surfaceNames: string[]; systemName: string },
+  ) => {
+    const made = await step(daysAgo, async (tx) => {
+      const pricing =
+        typeof price === 'string' ? { kind: 'lumpSum', price } : { kind: 'engine', ...(await surfacesAndSystem(tx, people.siteId, price)) };
+      return createChangeOrder(tx, office, jobId, () => parse(changeOrderCreate, { title, description, pricing }), clock.current);
+    });
     await step(daysAgo, (tx) => sendChangeOrder(tx, ctx, office, made.id));
     return made.id;
   };
+  const approve = (daysAgo: number, changeOrderId: string) =>
+    step(daysAgo, async (tx) =>
+      decideChangeOrder(tx, ctx, await demoClient(tx, people), changeOrderId, () =>
+        parse(changeOrderDecision, { decision: 'approve', signedName: 'Hattie Brambleton', consent: true }),
+      ),
+    );
   const job = async (plan: DemoJobPlan) => {
     const made = await acceptedJob(inFirm, ctx, clock, at, people, plan);
     await step(plan.daysAgo.accepted - 2, (tx) => startBilling(tx, ctx.queue, office, made.jobId, clock.current));
@@ -373,18 +396,14 @@ export async function seedDemoBilling(pool: Pool, firmId: string, people: DemoBi
     'Form and plaster a shallow arched niche in the landing wall, finished like the hall walls.',
     '640.00',
   );
-  await step(43, async (tx) =>
-    decideChangeOrder(tx, ctx, await demoClient(tx, people), niche, () =>
-      parse(changeOrderDecision, { decision: 'approve', signedName: 'Hattie Brambleton', consent: true }),
-    ),
-  );
+  await approve(43, niche);
   await markLayers(hall, hallLayer + 1, 99, 30);
   await step(5, (tx) => recordProgress(tx, ctx.queue, office, hall, { kind: 'walkthrough', on: day(5) }, clock.current));
   await lineInvoice(hall, 'final');
 
   // The turret room: signed three weeks ago; the first deposit invoice voided (credit note) and
-  // billed again, part paid; the first coats done and their stage payment issued; a change order
-  // waiting for the client.
+  // billed again, part paid; the crown added by a change order priced from its surface (so the crew's
+  // sheet lists it); the first coats done and their stage payment issued; a change order waiting for the client.
   const turret = await job({
     title: 'Turret room limewash',
     optionLabel: 'Two-coat limewash',
@@ -398,6 +417,14 @@ export async function seedDemoBilling(pool: Pool, firmId: string, people: DemoBi
   // Voiding puts the deposit line back to waiting for its trigger; the check the void asks for drafts it again.
   const deposit = await lineInvoice(turret, 'deposit');
   await issue(12, deposit);
+  const crown = await changeOrder(
+    turret,
+    10,
+    'Limewash the crown at the wall top',
+    'Carry the two-coat limewash up onto the crown, with the same mineral primer first.',
+    { surfaceNames: ['Crown at the wall top'], systemName: 'Two-coat limewash' },
+  );
+  await approve(9, crown);
   await pay(6, deposit, 'transfer', 'half', 'Bank transfer, first half');
   await markLayers(turret, 1, await stageLayer(turret), 5);
   await issue(2, await lineInvoice(turret, 'milestone'));

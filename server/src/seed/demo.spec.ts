@@ -51,6 +51,10 @@ describe('demo billing', () => {
       );
       const orders = await tx.client.query<{ status: string }>(`select status from change_orders order by status`);
       const marks = await tx.client.query<{ n: number }>(`select count(*)::int as n from job_progress where kind = 'layerDone'`);
+      // the turret's approved change order priced from the crown: its layers are work the crew marks
+      const crown = await tx.client.query<{ n: number }>(
+        `select count(*)::int as n from job_work_items where surface_name = 'Crown at the wall top'`,
+      );
       const payments = await tx.client.query<{ n: number }>(`select count(*)::int as n from payments`);
       return {
         jobs: jobs.rows,
@@ -58,6 +62,7 @@ describe('demo billing', () => {
         credit: credit.rows,
         orders: orders.rows,
         marks: marks.rows[0].n,
+        crownItems: crown.rows[0].n,
         payments: payments.rows[0].n,
       };
     });
@@ -71,8 +76,9 @@ describe('demo billing', () => {
     const numbers = found.invoices.filter((i) => i.number_text).map((i) => i.number_text!);
     expect([...numbers].sort()).toEqual(numbers.map((_, i) => `INV-${String(i + 1).padStart(4, '0')}`));
     expect(found.credit).toEqual([{ number_text: 'CN-0001', status: 'void' }]);
-    expect(found.orders.map((o) => o.status)).toEqual(['approved', 'sent']);
+    expect(found.orders.map((o) => o.status)).toEqual(['approved', 'approved', 'sent']);
     expect(found.marks).toBeGreaterThan(0);
+    expect(found.crownItems).toBeGreaterThan(0);
     expect(found.payments).toBeGreaterThanOrEqual(2);
   });
 
