@@ -2,12 +2,14 @@ import { eq, passwordResets, users, withGlobal } from '@layerbook/db';
 import { linkIn } from '../testing/inbox';
 import { newAgent, signUpFirm, startTestServer, TestServer } from '../testing/harness';
 import { LINKS_PER_HOUR, RESET_MINUTES } from './password-reset';
+import { enrol, invite, passwordStep, stepClock } from './second-factor/second-factor-fixtures';
 import { minutesFromNow, newToken } from './tokens';
 
 let t: TestServer;
 beforeAll(async () => {
   t = await startTestServer();
 });
+afterEach(() => t.setNow(null));
 afterAll(() => t.stop());
 
 /** Asks for a reset link and returns the token of the e-mail it sent (not one seen before). */
@@ -69,5 +71,33 @@ describe('reset links for one person', () => {
       return tx.db.select({ id: passwordResets.id }).from(passwordResets).where(eq(passwordResets.userId, user.id));
     });
     expect(rows).toHaveLength(LINKS_PER_HOUR);
+  });
+});
+
+describe('a completed reset ends every session of the person', () => {
+  it('ends a half-signed-in one too (the step before the second factor): the old password cannot go on after the reset', async () => {
+    // A firm that requires a second factor; its office members have none yet, so the password leads to setting one up.
+    const clock = stepClock(t);
+    const owner = await signUpFirm(t.app);
+    await enrol(owner, clock.now());
+    expect((await owner.agent.put('/api/auth/second-factor/firm').set('x-csrf-token', owner.csrf()).send({ required: true })).status).toBe(
+      200,
+    );
+    const office = await invite(t, owner, 'office');
+    const colleague = await invite(t, owner, 'office');
+
+    // Someone with the member's old password reaches the set-up step; so does a colleague, on their own account.
+    const holder = await passwordStep(t, office.email, office.password);
+    expect(holder.res.body).toMatchObject({ user: null, secondFactor: { step: 'enrol' } });
+    const other = await passwordStep(t, colleague.email, colleague.password);
+
+    expect((await completeReset(await askForReset(office.email), 'fresh-quartz-tiles-91')).status).toBe(200);
+
+    // The half state went with the old password: no set-up, nothing signed in.
+    const start = (who: typeof holder) => who.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', who.csrf()).send({});
+    expect((await start(holder)).status).toBe(401);
+    expect((await holder.agent.get('/api/auth/session')).body).toMatchObject({ user: null, secondFactor: null });
+    // Only that person's: the colleague's half state goes on.
+    expect((await start(other)).status).toBe(201);
   });
 });

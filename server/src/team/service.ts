@@ -4,6 +4,7 @@ import { and, desc, eq, firms, invitations, isNull, memberships, sql, TenantTx, 
 import type { AppContext } from '../context';
 import { recordAudit } from '../audit/record';
 import { endMemberSessions } from '../auth/password-store';
+import { endSessionsIfFactorMissing, risesIntoOffice } from '../auth/second-factor/rule-sessions';
 import { minutesFromNow, newToken } from '../auth/tokens';
 import type { StaffPrincipal } from '../http/principal';
 import { conflict, notFound } from '../http/problem';
@@ -139,7 +140,8 @@ export async function revokeInvitation(ctx: AppContext, tx: TenantTx, actor: Sta
  * memberships are locked first, so two owners removing each other at once cannot both pass the
  * check. Someone deactivated, or no longer an owner, loses the invitations they sent that are still
  * open (an owner could otherwise invite another address of theirs and come back through it); someone
- * deactivated is signed out of this firm (their sessions in other firms stay).
+ * deactivated is signed out of this firm (their sessions in other firms stay), as is someone raised
+ * into office or owner without the second factor the firm requires.
  */
 export async function changeMember(
   tx: TenantTx,
@@ -164,6 +166,9 @@ export async function changeMember(
     .where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.id, membershipId)));
   // Deactivated: signed out of this firm too, so reactivating does not bring old sessions back to life.
   if (change.status === 'deactivated') await endMemberSessions(tx.client, target.userId, tx.tenantId);
+  // Raised into office or owner where the firm requires a second factor they have not set up: their
+  // sessions (opened without one, as crew) end, and the next sign-in asks them to set one up.
+  if (change.role && risesIntoOffice(target.role, change.role)) await endSessionsIfFactorMissing(tx, target.userId);
   const losesInviting = change.status === 'deactivated' || (change.role !== undefined && change.role !== 'owner');
   if (losesInviting) {
     await tx.db

@@ -169,6 +169,13 @@ export interface SecondFactorPending {
 export interface SecondFactorCheck {
   readonly code: string;
 }
+/**
+ * POST /api/auth/second-factor/enrolment: signed in, the password (the same proof as renewing codes
+ * or turning it off: a session alone is not enough); right after the password at sign-in, nothing.
+ */
+export interface SecondFactorEnrolmentStart {
+  readonly password?: string;
+}
 /** POST /api/auth/second-factor/enrolment/confirm: the first code from the app. */
 export interface SecondFactorConfirm {
   readonly code: string;

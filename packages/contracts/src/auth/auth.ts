@@ -15,6 +15,7 @@ import {
   type PortalRedeemRequest,
   type SecondFactorCheck,
   type SecondFactorConfirm,
+  type SecondFactorEnrolmentStart,
   type SecondFactorTurnOff,
   type SignInRequest,
   type SignUpConfirm,
@@ -84,11 +85,17 @@ export const secondFactorCheck = requestSchema<SecondFactorCheck>()(z.strictObje
 
 export const secondFactorConfirm = requestSchema<SecondFactorConfirm>()(z.strictObject({ code: appCode }));
 
+const currentPassword = z.string().min(1, { error: 'Enter your password.' }).max(PASSWORD_MAX_LENGTH);
+
+export const secondFactorEnrolmentStart = requestSchema<SecondFactorEnrolmentStart>()(
+  z.strictObject({ password: currentPassword.optional() }),
+);
+
 export const secondFactorTurnOff = requestSchema<SecondFactorTurnOff>()(
   z
     .strictObject({
       code: secondFactorCode.optional(),
-      password: z.string().min(1, { error: 'Enter your password.' }).max(PASSWORD_MAX_LENGTH).optional(),
+      password: currentPassword.optional(),
     })
     .refine((b) => b.code !== undefined || b.password !== undefined, {
       path: ['code'],

@@ -6,6 +6,7 @@ import type { AppContext } from '../../context';
 import type { StaffPrincipal } from '../../http/principal';
 import { conflict, notFound } from '../../http/problem';
 import { newRecoveryCodes, normaliseRecoveryCode } from './recovery-codes';
+import { endSessionsIfFactorMissing, endSessionsWithoutFactor } from './rule-sessions';
 import { openSecret, recoveryCodeHash, sealSecret } from './secret-box';
 import { factorOf, keepPendingSecret, recoveryCodesLeft, removeFactor, replaceRecoveryCodes, takeStep } from './store';
 import { acceptedStep, newTotpSecret, otpauthUri, secretGroups } from './totp';
@@ -77,7 +78,11 @@ export async function turnOff(tx: TenantTx, staff: StaffPrincipal): Promise<void
 
 /**
  * The owner's rule for the firm. Turning it on needs the owner's own second factor first, so the
- * owner cannot be sent to set one up by their own switch.
+ * owner cannot be sent to set one up by their own switch. Turning it on also ends, in this firm, the
+ * open sessions of owner and office members without a confirmed factor (the rule is otherwise only
+ * checked at sign-in). The person switching is never among them: they just proved to have a
+ * confirmed factor, so their own session (the one making this request) goes on; nobody is locked
+ * out mid-request and no exception is needed.
  */
 export async function setFirmRequirement(tx: TenantTx, staff: StaffPrincipal, required: boolean): Promise<void> {
   if (required === (await firmRequiresSecondFactor(tx))) return;
@@ -85,6 +90,7 @@ export async function setFirmRequirement(tx: TenantTx, staff: StaffPrincipal, re
     throw conflict('Turn on your own second factor first.', [{ field: 'required', message: 'Turn on your own second factor first.' }]);
   }
   await tx.db.update(firms).set({ secondFactorRequired: required }).where(eq(firms.id, tx.tenantId));
+  if (required) await endSessionsWithoutFactor(tx);
   await recordAudit(tx, {
     actorUserId: staff.id,
     actorKind: 'staff',
@@ -126,6 +132,8 @@ export async function resetMemberFactor(tx: TenantTx, owner: StaffPrincipal, mem
     );
   }
   if (await removeFactor(tx, member.userId)) {
+    // Where the firm requires one, their open sessions end too: the next sign-in sets a new one up.
+    await endSessionsIfFactorMissing(tx, member.userId);
     await recordAudit(tx, {
       actorUserId: owner.id,
       actorKind: 'staff',

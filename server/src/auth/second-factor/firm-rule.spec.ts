@@ -74,7 +74,7 @@ describe("the firm's rule", () => {
     const other = await signUpFirm(t.app, 'Other Limewash Co');
     const office = await invite(t, owner, 'office');
     const officeIn = await passwordStep(t, office.email, office.password);
-    await enrol(officeIn, clock.now());
+    await enrol({ ...officeIn, password: office.password }, clock.now());
     clock.advance();
     expect((await passwordStep(t, office.email, office.password)).res.body.secondFactor).toMatchObject({ step: 'code' });
 
@@ -90,6 +90,30 @@ describe("the firm's rule", () => {
     expect((await reset(owner, member.id)).status).toBe(204);
     expect(await auditOf(t, owner.firmId, 'staff.secondFactorReset')).toEqual([expect.objectContaining({ actor_user_id: owner.userId })]);
     expect((await passwordStep(t, office.email, office.password)).res.body).toMatchObject({ user: { role: 'office' }, secondFactor: null });
+  });
+
+  it('switched on, ends the sessions of owner and office without a factor; the owner switching it goes on', async () => {
+    const clock = stepClock(t);
+    const owner = await signUpFirm(t.app);
+    await enrol(owner, clock.now());
+    const [bare, guarded, crew] = [await invite(t, owner, 'office'), await invite(t, owner, 'office'), await invite(t, owner, 'crew')];
+    const bareIn = await passwordStep(t, bare.email, bare.password);
+    const guardedIn = await passwordStep(t, guarded.email, guarded.password);
+    await enrol({ ...guardedIn, password: guarded.password }, clock.now());
+    const crewIn = await passwordStep(t, crew.email, crew.password);
+    for (const who of [bareIn, guardedIn, crewIn]) expect((await who.agent.get('/api/team/members')).status).toBe(200);
+
+    const on = await owner.agent.put('/api/auth/second-factor/firm').set('x-csrf-token', owner.csrf()).send({ required: true });
+    expect(on.status).toBe(200);
+    const statuses = async () =>
+      Promise.all([owner, bareIn, guardedIn, crewIn].map(async (who) => (await who.agent.get('/api/team/members')).status));
+    expect(await statuses()).toEqual([200, 401, 200, 200]);
+    expect((await passwordStep(t, bare.email, bare.password)).res.body.secondFactor).toMatchObject({ step: 'enrol' });
+    // Saying "on" again changes nothing and ends nothing more.
+    expect((await owner.agent.put('/api/auth/second-factor/firm').set('x-csrf-token', owner.csrf()).send({ required: true })).status).toBe(
+      200,
+    );
+    expect(await statuses()).toEqual([200, 401, 200, 200]);
   });
 
   it('keeps the setting and status to owner and office', async () => {

@@ -4,11 +4,13 @@ import {
   roleAtLeast,
   secondFactorCheck,
   secondFactorConfirm,
+  secondFactorEnrolmentStart,
   secondFactorTurnOff,
   type RecoveryCodes,
   type SecondFactorEnrolled,
   type SecondFactorEnrolment,
   type SecondFactorStatus,
+  type SecondFactorTurnOff,
   type StaffSession,
 } from '@layerbook/contracts';
 import { withTenant, type TenantTx } from '@layerbook/db';
@@ -16,7 +18,7 @@ import { Router, type Request, type RequestHandler } from 'express';
 import type { AppContext } from '../../context';
 import { withStaff } from '../../http/guards';
 import type { StaffPrincipal } from '../../http/principal';
-import { unauthorized } from '../../http/problem';
+import { badRequest, unauthorized } from '../../http/problem';
 import { parse } from '../../http/validate';
 import { passwordHashOf } from '../password-store';
 import { verifyPassword } from '../passwords';
@@ -42,10 +44,28 @@ async function halfStateStaff(tx: TenantTx, state: HalfState): Promise<StaffPrin
 }
 
 /** Setting up: a signed-in owner or office member, or someone their firm sends to set one up right after the password. */
-function withEnrollingStaff<T>(ctx: AppContext, req: Request, fn: (tx: TenantTx, staff: StaffPrincipal) => Promise<T>) {
-  if (req.user) return withStaff(ctx, req, 'office', fn);
+function withEnrollingStaff<T>(ctx: AppContext, req: Request, fn: (tx: TenantTx, staff: StaffPrincipal, isHalf: boolean) => Promise<T>) {
+  if (req.user) return withStaff(ctx, req, 'office', (tx, staff) => fn(tx, staff, false));
   const state = requireHalfState(req, ctx.now(), 'enrol');
-  return withTenant(ctx.pool, state.tenantId, async (tx) => fn(tx, await halfStateStaff(tx, state)));
+  return withTenant(ctx.pool, state.tenantId, async (tx) => fn(tx, await halfStateStaff(tx, state), true));
+}
+
+/**
+ * Proof that the person at the keyboard is the one signed in: a current code (or a recovery code) or
+ * the password, each throttled like sign-in. A wrong password answers 400 on `password`.
+ */
+async function prove(ctx: AppContext, tx: TenantTx, staff: StaffPrincipal, address: string, proof: SecondFactorTurnOff): Promise<void> {
+  if (proof.code !== undefined) {
+    await throttledCheck(ctx, staff.id, address, () => useCode(ctx, tx, staff.id, proof.code ?? ''));
+  } else {
+    await throttledCheck(
+      ctx,
+      staff.id,
+      address,
+      async () => ((await verifyPassword((await passwordHashOf(tx.client, staff.id)) ?? '', proof.password ?? '')) ? true : null),
+      wrongPassword,
+    );
+  }
 }
 
 export function secondFactorRoutes(ctx: AppContext, signInLimiter: RequestHandler): Router {
@@ -71,8 +91,18 @@ export function secondFactorRoutes(ctx: AppContext, signInLimiter: RequestHandle
     res.set('cache-control', 'no-store').json(status satisfies SecondFactorStatus);
   });
 
+  // Signed in, the password first: whoever finds an open session must not put their own app on the
+  // account (its owner then could neither sign in nor turn it off). Right after the password at
+  // sign-in (the half state), the password has just been proved.
   router.post('/enrolment', signInLimiter, async (req, res) => {
-    const enrolment = await withEnrollingStaff(ctx, req, (tx, staff) => startEnrolment(ctx, tx, staff));
+    const enrolment = await withEnrollingStaff(ctx, req, async (tx, staff, isHalf) => {
+      const { password } = parse(secondFactorEnrolmentStart, req.body);
+      if (!isHalf) {
+        if (password === undefined) throw badRequest([{ field: 'password', message: 'Enter your password.' }], 'Enter your password.');
+        await prove(ctx, tx, staff, address(req), { password });
+      }
+      return startEnrolment(ctx, tx, staff);
+    });
     res
       .set('cache-control', 'no-store')
       .status(201)
@@ -90,26 +120,10 @@ export function secondFactorRoutes(ctx: AppContext, signInLimiter: RequestHandle
     res.set('cache-control', 'no-store').json({ ...(await staffSession(ctx, req, res, half)), codes } satisfies SecondFactorEnrolled);
   });
 
-  // Proof that the person at the keyboard is the one signed in: a current code (or a recovery code) or the password.
-  const prove = async (tx: TenantTx, staff: StaffPrincipal, req: Request): Promise<void> => {
-    const proof = parse(secondFactorTurnOff, req.body);
-    if (proof.code !== undefined) {
-      await throttledCheck(ctx, staff.id, address(req), () => useCode(ctx, tx, staff.id, proof.code ?? ''));
-    } else {
-      await throttledCheck(
-        ctx,
-        staff.id,
-        address(req),
-        async () => ((await verifyPassword((await passwordHashOf(tx.client, staff.id)) ?? '', proof.password ?? '')) ? true : null),
-        wrongPassword,
-      );
-    }
-  };
-
   // New recovery codes (the old ones stop working) need the same proof as turning it off: a session alone is not enough.
   router.post('/recovery-codes', signInLimiter, async (req, res) => {
     const codes = await withStaff(ctx, req, 'office', async (tx, staff) => {
-      await prove(tx, staff, req);
+      await prove(ctx, tx, staff, address(req), parse(secondFactorTurnOff, req.body));
       return renewRecoveryCodes(ctx, tx, staff);
     });
     res.set('cache-control', 'no-store').json(codes satisfies RecoveryCodes);
@@ -118,7 +132,7 @@ export function secondFactorRoutes(ctx: AppContext, signInLimiter: RequestHandle
   // Turning it off needs a current code (or a recovery code) or the password.
   router.post('/turn-off', signInLimiter, async (req, res) => {
     const status = await withStaff(ctx, req, 'office', async (tx, staff) => {
-      await prove(tx, staff, req);
+      await prove(ctx, tx, staff, address(req), parse(secondFactorTurnOff, req.body));
       await turnOff(tx, staff);
       return secondFactorStatus(tx, staff);
     });

@@ -21,9 +21,12 @@ export function stepClock(t: TestServer) {
   };
 }
 
-/** Sets up a second factor for a signed-in person; answers the secret and the recovery codes. */
-export async function enrol(who: Signed, now: Date): Promise<{ secret: string; codes: readonly string[] }> {
-  const started = await who.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', who.csrf()).send({});
+/** Sets up a second factor for a signed-in person (who proves their password first); answers the secret and the recovery codes. */
+export async function enrol(who: Signed & { readonly password: string }, now: Date): Promise<{ secret: string; codes: readonly string[] }> {
+  const started = await who.agent
+    .post('/api/auth/second-factor/enrolment')
+    .set('x-csrf-token', who.csrf())
+    .send({ password: who.password });
   if (started.status !== 201) throw new Error(`enrolment failed: ${started.status} ${JSON.stringify(started.body)}`);
   const secret = (started.body as SecondFactorEnrolment).secretGroups.join('');
   const confirmed = await who.agent

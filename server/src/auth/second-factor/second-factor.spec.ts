@@ -23,7 +23,17 @@ describe('setting up a second factor', () => {
     const status = await owner.agent.get('/api/auth/second-factor');
     expect(status.body).toEqual({ enrolled: false, enrolledAt: null, recoveryCodesLeft: 0, firmRequires: false });
 
-    const started = await owner.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', owner.csrf()).send({});
+    // Signed in, the password first (as for renewing codes or turning it off): a session alone is not enough.
+    const start = (body: object) => owner.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', owner.csrf()).send(body);
+    const bare = await start({});
+    expect(bare.status).toBe(400);
+    expect(bare.body.errors).toEqual([{ field: 'password', message: 'Enter your password.' }]);
+    const wrongPassword = await start({ password: 'not-my-password' });
+    expect(wrongPassword.status).toBe(400);
+    expect(wrongPassword.body.errors).toEqual([expect.objectContaining({ field: 'password' })]);
+    expect((await start({ password: owner.password, extra: 1 })).status).toBe(400);
+    expect((await owner.agent.get('/api/auth/second-factor')).body.enrolled).toBe(false);
+    const started = await start({ password: owner.password });
     expect(started.status).toBe(201);
     const body = started.body as SecondFactorEnrolment;
     const secret = body.secretGroups.join('');
@@ -63,7 +73,7 @@ describe('setting up a second factor', () => {
       expect.objectContaining({ actor_user_id: owner.userId }),
     ]);
     // A second set-up waits until this one is turned off.
-    expect((await owner.agent.post('/api/auth/second-factor/enrolment').set('x-csrf-token', owner.csrf()).send({})).status).toBe(409);
+    expect((await start({ password: owner.password })).status).toBe(409);
   });
 });
 

@@ -42,6 +42,11 @@ export class TeamApi {
   reactivate(memberId: string): Promise<TeamMember> {
     return firstValueFrom(this.http.post<TeamMember>(`${memberUrl(memberId)}/reactivate`, {}));
   }
+
+  /** Clears a member's lost second factor (owner only; by membership id, as the list gives it). */
+  async clearSecondFactor(memberId: string): Promise<void> {
+    await firstValueFrom(this.http.post(`/api/auth/second-factor/members/${encodeURIComponent(memberId)}/reset`, {}));
+  }
 }
 
 function memberUrl(id: string): string {

@@ -103,6 +103,23 @@ export class Team {
     }
   }
 
+  /** Owner and office may have a second factor to lose (crew are never asked for one). */
+  protected mayHaveSecondFactor(member: TeamMember): boolean {
+    return member.status === 'active' && member.role !== 'crew';
+  }
+
+  protected async clearSecondFactor(member: TeamMember): Promise<void> {
+    const confirmed = await this.confirm({
+      title: 'team.team.clearFactorTitle',
+      message: 'team.team.clearFactorMessage',
+      confirmLabel: 'team.team.clearFactor',
+      params: { name: member.name },
+    });
+    if (confirmed) {
+      await this.act(() => this.api.clearSecondFactor(member.id), this.words('team.team.factorCleared', { name: member.name }));
+    }
+  }
+
   protected async revoke(invitation: TeamInvitation): Promise<void> {
     const confirmed = await this.confirm({
       title: 'team.team.revokeTitle',

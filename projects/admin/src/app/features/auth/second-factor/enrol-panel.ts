@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, afterNextRender, inject, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, afterNextRender, inject, input, linkedSignal, output, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -15,7 +15,9 @@ import { SecondFactorApi } from './second-factor-api';
 
 /**
  * Setting up a second factor: the server makes a secret and answers it as a QR code (and in groups
- * for typing); the first right code from the app turns it on and answers the recovery codes.
+ * for typing); the first right code from the app turns it on and answers the recovery codes. At
+ * sign-in (the firm requires one) the panel starts the set-up itself; signed in, the security page
+ * starts it with the password and hands the answer in as `begun`.
  */
 @Component({
   selector: 'lb-enrol-panel',
@@ -39,7 +41,10 @@ export class EnrolPanel {
   /** The recovery codes, once the factor is on. */
   readonly enrolled = output<readonly string[]>();
 
-  protected readonly enrolment = signal<SecondFactorEnrolment | null>(null);
+  /** A set-up already started (with the password, on the security page); none: the panel starts one. */
+  readonly begun = input<SecondFactorEnrolment | null>(null);
+
+  protected readonly enrolment = linkedSignal<SecondFactorEnrolment | null>(() => this.begun());
   protected readonly startFailed = signal<string | null>(null);
   protected readonly form = inject(NonNullableFormBuilder).group({ code: ['', [Validators.required, Validators.pattern(APP_CODE)]] });
   protected readonly submission = new Submission();
@@ -47,7 +52,9 @@ export class EnrolPanel {
 
   constructor() {
     // In the browser only: a server render must not make a secret nobody sees.
-    afterNextRender(() => void this.start());
+    afterNextRender(() => {
+      if (!this.begun()) void this.start();
+    });
   }
 
   protected async start(): Promise<void> {

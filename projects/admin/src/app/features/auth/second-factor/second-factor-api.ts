@@ -7,6 +7,7 @@ import type {
   SecondFactorConfirm,
   SecondFactorEnrolled,
   SecondFactorEnrolment,
+  SecondFactorEnrolmentStart,
   SecondFactorStatus,
   SecondFactorTurnOff,
 } from '@layerbook/contracts/types';
@@ -20,8 +21,9 @@ export class SecondFactorApi {
   private readonly http = inject(HttpClient);
   private readonly session = inject(Session);
 
-  start(): Promise<SecondFactorEnrolment> {
-    return firstValueFrom(this.http.post<SecondFactorEnrolment>(`${SECOND_FACTOR_URL}/enrolment`, {}));
+  /** Signed in, the password proves it is the person (`{ password }`); right after the password at sign-in, nothing more. */
+  start(body: SecondFactorEnrolmentStart = {}): Promise<SecondFactorEnrolment> {
+    return firstValueFrom(this.http.post<SecondFactorEnrolment>(`${SECOND_FACTOR_URL}/enrolment`, body));
   }
 
   /** The first code turns it on; the answer carries the recovery codes and the session (signed in after a set-up at sign-in). */

@@ -1,5 +1,4 @@
 import { httpResource } from '@angular/common/http';
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -7,8 +6,14 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { TranslatePipe } from '@ngx-translate/core';
-import { PASSWORD_MAX_LENGTH, SECOND_FACTOR_CODE_MAX_LENGTH, type SecondFactorStatus } from '@layerbook/contracts/types';
+import {
+  PASSWORD_MAX_LENGTH,
+  SECOND_FACTOR_CODE_MAX_LENGTH,
+  type SecondFactorEnrolment,
+  type SecondFactorStatus,
+} from '@layerbook/contracts/types';
 import { FieldErrorPipe } from '../../../../../../shared/forms/field-error-pipe';
+import { LbDatePipe } from '../../../../../../shared/i18n/format';
 import { loadMessage } from '../../../shared/forms/load-message';
 import { Submission } from '../../../shared/forms/submission';
 import { FormAlert } from '../../../shared/ui/form-alert';
@@ -21,10 +26,10 @@ import { SECOND_FACTOR_URL, SecondFactorApi } from './second-factor-api';
 @Component({
   selector: 'lb-security-page',
   imports: [
-    DatePipe,
     EnrolPanel,
     FieldErrorPipe,
     FormAlert,
+    LbDatePipe,
     MatButtonModule,
     MatFormFieldModule,
     MatInputModule,
@@ -42,8 +47,13 @@ export class SecurityPage {
 
   protected readonly status = httpResource<SecondFactorStatus>(() => SECOND_FACTOR_URL);
   protected readonly loadMessage = loadMessage(this.status);
-  /** Setting up is under way. */
-  protected readonly settingUp = signal(false);
+  /** The set-up under way (started with the password), or none. */
+  protected readonly enrolment = signal<SecondFactorEnrolment | null>(null);
+  /** Setting up needs the password, as renewing codes and turning it off do: a session alone is not enough. */
+  protected readonly setUpForm = inject(NonNullableFormBuilder).group({
+    password: ['', [Validators.required, Validators.maxLength(PASSWORD_MAX_LENGTH)]],
+  });
+  protected readonly setUpSubmission = new Submission();
   /** Recovery codes to show once (after setting up or renewing). */
   protected readonly codes = signal<readonly string[] | null>(null);
   /** New codes need the password: a session alone is not enough (the old codes stop working). */
@@ -62,8 +72,17 @@ export class SecurityPage {
   };
   protected readonly codeMax = SECOND_FACTOR_CODE_MAX_LENGTH;
 
+  protected async setUp(): Promise<void> {
+    const { password } = this.setUpForm.getRawValue();
+    const answer = await this.setUpSubmission.send(this.setUpForm, () => this.api.start({ password }));
+    if (answer) {
+      this.setUpForm.reset();
+      this.enrolment.set(answer);
+    }
+  }
+
   protected enrolled(codes: readonly string[]): void {
-    this.settingUp.set(false);
+    this.enrolment.set(null);
     this.codes.set(codes);
     this.status.reload();
   }
