@@ -2,7 +2,7 @@ import type { InvitationAccept, InvitationPreview } from '@layerbook/contracts';
 import { and, eq, firms, invitations, memberships, users, withLookup, withTenant } from '@layerbook/db';
 import type { AppContext } from '../context';
 import type { StaffPrincipal } from '../http/principal';
-import { conflict, gone, notFound } from '../http/problem';
+import { badRequest, conflict, gone, notFound } from '../http/problem';
 import { recordAudit } from '../audit/record';
 import { loadStaffPrincipal } from './staff-principal';
 import { passwordHashOf } from './password-store';
@@ -32,8 +32,12 @@ async function findByToken(ctx: AppContext, token: string): Promise<InvitationRo
 export async function previewInvitation(ctx: AppContext, token: string): Promise<InvitationPreview> {
   const inv = await findByToken(ctx, token);
   assertUsable(inv, ctx.now());
-  const firm = await withTenant(ctx.pool, inv.tenantId, async (tx) => (await tx.db.select({ name: firms.name }).from(firms))[0]);
-  return { firmName: firm?.name ?? '', email: inv.email, role: inv.role };
+  const { firm, account } = await withTenant(ctx.pool, inv.tenantId, async (tx) => ({
+    firm: (await tx.db.select({ name: firms.name }).from(firms))[0],
+    account: (await tx.db.select({ id: users.id }).from(users).where(eq(users.email, inv.email)))[0],
+  }));
+  // Only the holder of the e-mailed link learns whether its own address has an account.
+  return { firmName: firm?.name ?? '', email: inv.email, role: inv.role, hasAccount: account !== undefined };
 }
 
 const accountExists = () =>
@@ -62,6 +66,7 @@ export async function acceptInvitation(ctx: AppContext, input: InvitationAccept,
     }
     await passedSignIn(ctx, found.email, address);
   } else {
+    if (!input.name) throw badRequest([{ field: 'name', message: 'Enter a name.' }]);
     const firm = await withTenant(ctx.pool, found.tenantId, async (tx) => (await tx.db.select({ name: firms.name }).from(firms))[0]);
     assertAcceptablePassword(input.password, { email: found.email, name: input.name, firmNames: firm ? [firm.name] : [] });
     passwordHash = await hashPassword(input.password);
@@ -77,7 +82,7 @@ export async function acceptInvitation(ctx: AppContext, input: InvitationAccept,
       // it had been there before.
       const [created] = await tx.db
         .insert(users)
-        .values({ email: inv.email, name: input.name, passwordHash: passwordHash! })
+        .values({ email: inv.email, name: input.name!, passwordHash: passwordHash! })
         .onConflictDoNothing({ target: users.email })
         .returning({ id: users.id });
       if (!created) throw accountExists();

@@ -25,7 +25,14 @@ describe('invitations, end to end through the e-mail', () => {
 
     const guest = await newAgent(t.app);
     const preview = await guest.agent.get(`/api/auth/invitations/${token}`);
-    expect(preview.body).toEqual({ firmName: 'Millbrook Wax Works', email, role: 'office' });
+    expect(preview.body).toEqual({ firmName: 'Millbrook Wax Works', email, role: 'office', hasAccount: false });
+    // A new person must give a name.
+    const nameless = await guest.agent
+      .post('/api/auth/invitations/accept')
+      .set('x-csrf-token', guest.csrf())
+      .send({ token, password: 'ledger-and-lime-77' });
+    expect(nameless.status).toBe(400);
+    expect(nameless.body.errors[0].field).toBe('name');
 
     const accepted = await guest.agent
       .post('/api/auth/invitations/accept')
@@ -64,6 +71,23 @@ describe('invitations, end to end through the e-mail', () => {
     await owner.agent.post('/api/team/invitations').set('x-csrf-token', owner.csrf()).send({ email: marker, role: 'crew' });
     await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(marker));
     expect(t.inbox.messages.filter((m) => JSON.stringify(m.to).includes(email))).toHaveLength(1);
+  });
+
+  it('someone who already has an account is told so, and joins with its password and no name', async () => {
+    const existing = await signUpFirm(t.app, 'Second Home Plaster');
+    const inviter = await signUpFirm(t.app, 'Welcoming Plaster');
+    await inviter.agent.post('/api/team/invitations').set('x-csrf-token', inviter.csrf()).send({ email: existing.email, role: 'office' });
+    const token = tokenFrom(
+      linkIn(await t.inbox.waitFor((m) => JSON.stringify(m.to).includes(existing.email) && /Welcoming Plaster/.test(m.subject ?? ''))),
+    );
+    const guest = await newAgent(t.app);
+    expect((await guest.agent.get(`/api/auth/invitations/${token}`)).body).toMatchObject({ hasAccount: true });
+    const joined = await guest.agent
+      .post('/api/auth/invitations/accept')
+      .set('x-csrf-token', guest.csrf())
+      .send({ token, password: existing.password });
+    expect(joined.status).toBe(200);
+    expect(joined.body.user).toMatchObject({ role: 'office', firmId: inviter.firmId });
   });
 
   it('throttles password guessing through an invitation to an existing account (429, no lock)', async () => {

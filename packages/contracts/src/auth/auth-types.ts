@@ -72,7 +72,8 @@ export interface PasswordResetComplete {
 }
 export interface InvitationAccept {
   readonly token: string;
-  readonly name: string;
+  /** a new person's name; someone who already has an account keeps theirs */
+  readonly name?: string;
   readonly password: string;
 }
 export interface PortalLinkRequest {
@@ -117,6 +118,8 @@ export interface InvitationPreview {
   readonly firmName: string;
   readonly email: string;
   readonly role: StaffRole;
+  /** the invited address already has a Layerbook account: joining takes its password, not a new one */
+  readonly hasAccount: boolean;
 }
 
 export interface PortalClient {

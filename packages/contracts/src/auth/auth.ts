@@ -50,7 +50,9 @@ export const signUpConfirm = requestSchema<SignUpConfirm>()(z.strictObject({ tok
 
 export const passwordResetComplete = requestSchema<PasswordResetComplete>()(z.strictObject({ token, password: newPassword }));
 
-export const invitationAccept = requestSchema<InvitationAccept>()(z.strictObject({ token, name: personName, password: newPassword }));
+export const invitationAccept = requestSchema<InvitationAccept>()(
+  z.strictObject({ token, name: personName.optional(), password: newPassword }),
+);
 
 /** Portal (client) sign-in by e-mailed one-time link. */
 /** A page of the portal: `/portal/` and path segments of letters, digits, `-` and `_` (no query, no `..`). */

@@ -1,11 +1,11 @@
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { Router, RouterLink } from '@angular/router';
+import { Router } from '@angular/router';
 import {
   PASSWORD_MAX_LENGTH,
   PASSWORD_MIN_LENGTH,
@@ -38,7 +38,6 @@ import { TranslatePipe } from '@ngx-translate/core';
     MatProgressBarModule,
     ReactiveFormsModule,
     RevealPassword,
-    RouterLink,
   ],
   templateUrl: './accept-invitation.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -65,6 +64,13 @@ export class AcceptInvitation {
     password: ['', [Validators.required, Validators.minLength(PASSWORD_MIN_LENGTH), Validators.maxLength(PASSWORD_MAX_LENGTH)]],
   });
   protected readonly submission = new Submission();
+  private readonly hasAccount = computed(() => (this.preview.hasValue() ? this.preview.value().hasAccount : false));
+  /** An existing account's name is not asked for: its control drops out of the form's checks. */
+  private readonly nameWhenNew = effect(() => {
+    const name = this.form.controls.name;
+    if (this.hasAccount()) name.disable();
+    else name.enable();
+  });
   protected readonly isHydrated = hydratedSignal();
   protected readonly words = { name: NAME_ERRORS, password: NEW_PASSWORD_ERRORS };
 
@@ -75,9 +81,11 @@ export class AcceptInvitation {
       return;
     }
     const { name, password } = this.form.getRawValue();
+    // Someone who already has an account joins with its password and keeps their name.
+    const who = this.hasAccount() ? {} : { name: name.trim() };
     // Busy until the next page is open, so a second click cannot send it twice.
     await this.submission.send(this.form, async () => {
-      await this.router.navigateByUrl(await this.auth.acceptInvitation({ token, name: name.trim(), password }));
+      await this.router.navigateByUrl(await this.auth.acceptInvitation({ token, ...who, password }));
     });
   }
 }
