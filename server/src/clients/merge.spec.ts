@@ -145,6 +145,8 @@ describe('duplicate clients', () => {
             client_credits: 0,
             checkout_sessions: 0,
           },
+          // both records had the same name and e-mail, and nothing else: nothing to take
+          taken: {},
         },
       },
     ]);

@@ -1,15 +1,12 @@
 import type { ClientDetail, ClientMatch, ClientMatchReason } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
+import { and, clients, eq, type TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
+import { firmReader } from '../i18n/reader';
+import { fieldsFromDuplicate, type MergedFields } from './merge-fields';
+import { phoneDigits } from './phone';
 import { getClient } from './service';
-
-/** Digits only, so "(555) 010-0100" and "555.010.0100" compare equal; too short to tell people apart: none. */
-export function phoneDigits(phone: string): string {
-  const digits = phone.replace(/\D/g, '');
-  return digits.length >= 7 ? digits : '';
-}
 
 interface MatchRow {
   id: string;
@@ -94,18 +91,22 @@ export const CLIENT_TABLES = [
  * Merges a duplicate into the client to keep, in the caller's transaction: contacts, sites,
  * inquiries, estimates, jobs, sample boards, portal access and the billing (invoices, payments,
  * refunds, credits, checkouts; the cash figures follow by their triggers) move to the kept client,
- * the duplicate is deleted, and the audit log records what moved. Another firm's id answers 404.
+ * which also takes what only the duplicate knew (fieldsFromDuplicate: blank fields filled, its notes
+ * added); the duplicate is deleted, and the audit log records what moved and what was taken.
+ * Another firm's id answers 404.
  */
-export async function mergeClient(tx: TenantTx, actor: Actor, id: string, intoClientId: string): Promise<ClientDetail> {
+export async function mergeClient(tx: TenantTx, actor: Actor, id: string, intoClientId: string, now: Date): Promise<ClientDetail> {
   if (id === intoClientId) throw badRequest([{ field: 'intoClientId', message: 'Choose another client to keep.' }]);
-  const { rows } = await tx.client.query<{ id: string; name: string }>(
-    `select id, name from clients where tenant_id = $1 and id = any($2::uuid[]) order by id for update`,
+  const { rows } = await tx.client.query<MergedFields & { id: string }>(
+    `select id, name, email, phone, notes, language from clients where tenant_id = $1 and id = any($2::uuid[]) order by id for update`,
     [tx.tenantId, [id, intoClientId]],
   );
   const merged = rows.find((r) => r.id === id);
   const kept = rows.find((r) => r.id === intoClientId);
   if (!merged) throw notFound('client');
   if (!kept) throw notFound('client to keep');
+  // Worked out before anything moves: notes too long together refuse the merge with nothing written.
+  const { patch, taken } = fieldsFromDuplicate(kept, merged, (await firmReader(tx)).language);
   const moved: Record<string, number> = {};
   for (const table of CLIENT_TABLES) {
     const res = await tx.client.query(`update ${table} set client_id = $3 where tenant_id = $1 and client_id = $2`, [
@@ -116,13 +117,19 @@ export async function mergeClient(tx: TenantTx, actor: Actor, id: string, intoCl
     moved[table] = res.rowCount ?? 0;
   }
   await tx.client.query(`delete from clients where tenant_id = $1 and id = $2`, [tx.tenantId, id]);
+  if (Object.keys(patch).length > 0) {
+    await tx.db
+      .update(clients)
+      .set({ ...patch, updatedAt: now })
+      .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, intoClientId)));
+  }
   await recordAudit(tx, {
     actorUserId: actor.kind === 'staff' ? actor.userId : null,
     actorKind: actor.kind,
     action: 'client.merged',
     entity: 'client',
     entityId: intoClientId,
-    data: { mergedClientId: id, mergedName: merged.name, moved },
+    data: { mergedClientId: id, mergedName: merged.name, moved, taken },
   });
   return getClient(tx, intoClientId);
 }

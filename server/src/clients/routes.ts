@@ -57,7 +57,7 @@ export function clientRoutes(ctx: AppContext): Router {
   /** Merges this client into another (the one kept); this one is gone afterwards. */
   router.post('/:id/merge', async (req, res) => {
     const kept = await withStaff(ctx, req, 'office', (tx, staff) =>
-      mergeClient(tx, staffActor(staff), parse(clientIdParam, req.params).id, parse(clientMerge, req.body).intoClientId),
+      mergeClient(tx, staffActor(staff), parse(clientIdParam, req.params).id, parse(clientMerge, req.body).intoClientId, ctx.now()),
     );
     res.json(kept satisfies ClientDetail);
   });

@@ -16,6 +16,7 @@ import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { notFound } from '../http/problem';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
+import { phoneDigitsSql, phoneSearchDigits } from './phone';
 
 type ClientRow = typeof clients.$inferSelect;
 type SiteRow = typeof sites.$inferSelect;
@@ -101,7 +102,10 @@ export async function listClients(tx: TenantTx, q: ClientListQuery): Promise<Key
   if (q.kind) where.push(`kind = ${add(q.kind)}`);
   if (q.q) {
     const like = add(`%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
-    where.push(`(name ilike ${like} or email ilike ${like} or phone ilike ${like})`);
+    // A number as caller ID shows it finds the client however their phone was typed.
+    const digits = phoneSearchDigits(q.q);
+    const byDigits = digits ? ` or ${phoneDigitsSql('phone')} like ${add(`%${digits}%`)}` : '';
+    where.push(`(name ilike ${like} or email ilike ${like} or phone ilike ${like}${byDigits})`);
   }
   if (q.after) {
     const c = decodeCursor(q.after, 'timestamptz');
@@ -156,11 +160,17 @@ export async function getClient(tx: TenantTx, id: string): Promise<ClientDetail>
   };
 }
 
+/**
+ * The client exists, and stays until our new row points at it: `for key share` waits for a merge
+ * that is removing it and then finds it gone (404), where a plain read would let the insert fail
+ * on the foreign key (500). It does not hold up ordinary edits of the client.
+ */
 async function assertClient(tx: TenantTx, clientId: string): Promise<void> {
   const found = await tx.db
     .select({ id: clients.id })
     .from(clients)
-    .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)));
+    .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)))
+    .for('key share');
   if (!found.length) throw notFound('client');
 }
 

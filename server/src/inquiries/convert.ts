@@ -1,8 +1,9 @@
-import { DEFAULT_COUNTRY, type InquiryConversion, type InquiryConvert } from '@layerbook/contracts';
+import type { InquiryConversion, InquiryConvert } from '@layerbook/contracts';
 import { and, clients, eq, inquiries, sites, TenantTx } from '@layerbook/db';
 import { addSite, createClient } from '../clients/service';
 import type { Actor } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
+import { firmReader } from '../i18n/reader';
 import { logActivity } from './service';
 
 /**
@@ -24,10 +25,12 @@ export async function convertInquiry(tx: TenantTx, actor: Actor, id: string, inp
   // What was asked wins: a client chosen, then a new one described; only then the inquiry's own.
   let clientId = input.clientId ?? (input.client ? null : (inq.clientId ?? (await soleClientWithEmail(tx, inq.email))));
   if (clientId) {
+    // Key share: a merge removing this client waits for us, or we see it gone (and answer 400, not a 500).
     const found = await tx.db
       .select({ id: clients.id })
       .from(clients)
-      .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)));
+      .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)))
+      .for('key share');
     if (!found.length) throw badRequest([{ field: 'clientId', message: 'Choose a client of this firm.' }]);
   } else {
     const made = await createClient(
@@ -64,7 +67,8 @@ export async function convertInquiry(tx: TenantTx, actor: Actor, id: string, inp
         city: '',
         region: '',
         postalCode: '',
-        country: DEFAULT_COUNTRY,
+        // The prospect's place is where the firm works, not wherever our default is.
+        country: (await firmReader(tx)).country,
         yearBuilt: inq.yearBuilt,
         accessNotes: '',
       },

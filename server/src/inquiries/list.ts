@@ -3,6 +3,7 @@ import { INQUIRY_STAGES, STAGE_LABELS, UNASSIGNED } from '@layerbook/contracts';
 import { weightedPipeline } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { type SqlQuery, statementName, type TenantTx } from '@layerbook/db';
+import { phoneDigitsSql, phoneSearchDigits } from '../clients/phone';
 import type { FirmClock } from './clock';
 import { decodeCursor, encodeCursor } from './cursor';
 import { SUMMARY_COLUMNS, SUMMARY_FROM, SummaryRow, toSummary } from './rows';
@@ -32,7 +33,12 @@ export function buildListQuery(tenantId: string, q: InquiryListQuery): SqlQuery 
   else if (q.assignee) where.push(`i.assignee_user_id = ${add(q.assignee)}`);
   if (q.q) {
     const like = add(`%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
-    where.push(`(i.contact_name ilike ${like} or i.email ilike ${like} or i.site_address ilike ${like} or i.phone ilike ${like})`);
+    // Digits are compared only for a search shaped like a phone number: it costs a regexp per row.
+    const digits = phoneSearchDigits(q.q);
+    const byDigits = digits ? ` or ${phoneDigitsSql('i.phone')} like ${add(`%${digits}%`)}` : '';
+    where.push(
+      `(i.contact_name ilike ${like} or i.email ilike ${like} or i.site_address ilike ${like} or i.phone ilike ${like}${byDigits})`,
+    );
   }
   if (q.after) {
     const c = decodeCursor(q.after, sort.cast);
@@ -82,16 +88,34 @@ export async function getBoard(tx: TenantTx, clock: FirmClock, perColumn = 50): 
   };
 }
 
-/** Today: follow-ups overdue and due, and the weighted value of open inquiries. */
+/** Today lists the longest-waiting overdue follow-ups up to this many, and counts them all. */
+export const OVERDUE_SHOWN = 100;
+
+/**
+ * Today: follow-ups overdue and due, and the weighted value of open inquiries. What is due today is
+ * always listed whole (a day's calls); an old backlog of overdue ones is capped, with its true count.
+ */
 export async function getToday(tx: TenantTx, clock: FirmClock, userId?: string): Promise<TodayView> {
-  const { rows } = await tx.client.query<SummaryRow>(
-    `select ${SUMMARY_COLUMNS} ${SUMMARY_FROM}
-      where i.tenant_id = $1 and i.next_follow_up <= $2::date and i.stage not in ('won', 'lost')
-        ${userId ? 'and (i.assignee_user_id = $3 or i.assignee_user_id is null)' : ''}
-      order by i.next_follow_up, i.created_at limit 200`,
-    userId ? [tx.tenantId, clock.today, userId] : [tx.tenantId, clock.today],
+  const values = userId ? [tx.tenantId, clock.today, userId] : [tx.tenantId, clock.today];
+  const openWhere = `i.tenant_id = $1 and i.stage not in ('won', 'lost')
+    ${userId ? 'and (i.assignee_user_id = $3 or i.assignee_user_id is null)' : ''}`;
+  const summaries = async (where: string) =>
+    (await tx.client.query<SummaryRow>(`select ${SUMMARY_COLUMNS} ${SUMMARY_FROM} where ${where}`, values)).rows.map((r) =>
+      toSummary(r, clock.today),
+    );
+  const dueToday = await summaries(`${openWhere} and i.next_follow_up = $2::date order by i.created_at, i.id`);
+  const overdue = await summaries(
+    `${openWhere} and i.next_follow_up < $2::date order by i.next_follow_up, i.created_at, i.id limit ${OVERDUE_SHOWN}`,
   );
-  const due = rows.map((r) => toSummary(r, clock.today));
+  // Counted only when the list is full: otherwise the list is the count.
+  let overdueCount = overdue.length;
+  if (overdue.length === OVERDUE_SHOWN) {
+    const { rows } = await tx.client.query<{ n: number }>(
+      `select count(*)::int as n from inquiries i where ${openWhere} and i.next_follow_up < $2::date`,
+      values,
+    );
+    overdueCount = rows[0]?.n ?? overdue.length;
+  }
   const likelihood = await stageLikelihoods(tx);
   const { rows: open } = await tx.client.query<{ stage: InquiryStage; value: string; n: number }>(
     `select stage, coalesce(sum(estimated_value), 0)::text as value, count(*)::int as n
@@ -103,8 +127,9 @@ export async function getToday(tx: TenantTx, clock: FirmClock, userId?: string):
   );
   return {
     localDate: clock.today,
-    overdue: due.filter((d) => d.nextFollowUp! < clock.today),
-    dueToday: due.filter((d) => d.nextFollowUp === clock.today),
+    overdue,
+    overdueCount,
+    dueToday,
     pipeline: {
       unweighted: pipeline.unweighted.toFixed(2),
       weighted: pipeline.weighted.toFixed(2),

@@ -7,12 +7,15 @@ import { badRequest, notFound } from '../http/problem';
 import { enqueueMail } from '../mail/outbox';
 import { firmReader } from '../i18n/reader';
 import { inquiryAcknowledgementMail, inquiryNotificationMail } from '../mail/inquiry-templates';
+import { USED_STAMP_KEEP_HOURS } from '../queue/prune';
 import { createInquiry } from './service';
 
 /** By default a form must be open this long before it is sent: bots fill forms in milliseconds. */
 export const MIN_FILL_MS = 3000;
 // A stamp is good for two hours: long enough to write an inquiry, short enough to limit replays.
 const MAX_FILL_MS = 2 * 60 * 60 * 1000;
+// How old an expired stamp may be and still vouch for its renewal: below the day spent nonces are kept.
+const RENEWABLE_MS = (USED_STAMP_KEEP_HOURS - 1) * 60 * 60 * 1000;
 
 /**
  * The page stamps when the form was shown, with a random nonce, signed so a bot can neither forge
@@ -35,6 +38,18 @@ export function isFormStamp(secret: string, text: string): boolean {
 function readStamp(secret: string, stamp: string | undefined, now: Date): { age: number; nonce: string } | null {
   const signed = signedStamp(secret, stamp);
   return signed && { age: now.getTime() - signed.time, nonce: signed.nonce };
+}
+
+/**
+ * The nonce of the stamp a renewed form replaced, when it proves the page was opened long ago: this
+ * server signed it, it had expired (so it is at least two hours old), and it is young enough that its
+ * nonce, once spent, is still on record (prune.ts keeps spent nonces a day). A person told to send
+ * once more may then click at once; a bot gains nothing it lacks already, since it must hold a stamp
+ * for two hours and each one exempts a single send (its nonce is spent with the new stamp's).
+ */
+function renewedNonce(secret: string, renewedFrom: string | undefined, now: Date): string | null {
+  const old = readStamp(secret, renewedFrom, now);
+  return old && old.age > MAX_FILL_MS && old.age <= RENEWABLE_MS ? old.nonce : null;
 }
 
 function signedStamp(secret: string, stamp: string | undefined): { time: number; nonce: string } | null {
@@ -64,7 +79,7 @@ export async function publicFirm(ctx: AppContext, slug: string): Promise<{ id: s
  * Files a prospect's inquiry with that firm only, and queues the acknowledgement to the prospect
  * (once a day per address) and the notice to the owner and office — all in one transaction, through
  * the outbox.
- * Returns 'ignored' for a bot (honeypot filled or sent too fast): it is told nothing different.
+ * Returns 'ignored' for a bot (honeypot filled, sent too fast, or a stamp spent): it is told nothing different.
  */
 export async function submitPublicInquiry(ctx: AppContext, slug: string, input: PublicInquiryRequest): Promise<'filed' | 'ignored'> {
   const now = ctx.now();
@@ -72,12 +87,17 @@ export async function submitPublicInquiry(ctx: AppContext, slug: string, input: 
   const stamp = readStamp(ctx.config.SESSION_SECRET, input.startedAt, now);
   if (stamp === null || stamp.age > MAX_FILL_MS)
     throw badRequest([{ field: 'startedAt', message: 'This form has expired; reload the page and send it again.' }]);
-  if (stamp.age < ctx.config.PUBLIC_FORM_MIN_FILL_MS) return 'ignored';
+  const renewed = renewedNonce(ctx.config.SESSION_SECRET, input.renewedFrom, now);
+  if (renewed === null && stamp.age < ctx.config.PUBLIC_FORM_MIN_FILL_MS) return 'ignored';
   const firm = await publicFirm(ctx, slug);
   return withTenant(ctx.pool, firm.id, async (tx) => {
-    // A stamp files once: a replay (or a double click) is quietly dropped, like any bot.
-    const fresh = await tx.client.query(`insert into used_form_stamps (nonce) values ($1) on conflict (nonce) do nothing`, [stamp.nonce]);
-    if (fresh.rowCount !== 1) return 'ignored' as const;
+    // A stamp files once: a replay (or a double click) is quietly dropped, like any bot. So does a
+    // renewal whose old stamp was spent already (it vouches for one send only).
+    const nonces = renewed === null ? [stamp.nonce] : [stamp.nonce, renewed];
+    const fresh = await tx.client.query(`insert into used_form_stamps (nonce) select unnest($1::text[]) on conflict (nonce) do nothing`, [
+      nonces,
+    ]);
+    if (fresh.rowCount !== nonces.length) return 'ignored' as const;
     // An anonymous prospect is no one we know yet: the form files it as the system does.
     const id = await createInquiry(tx, SYSTEM_ACTOR, {
       contactName: input.name,

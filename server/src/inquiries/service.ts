@@ -1,5 +1,5 @@
 import type { ActivityCreate, ActivityKind, InquiryCreate, InquiryStage, InquiryUpdate, StageMove } from '@layerbook/contracts';
-import { and, eq, inquiries, inquiryActivities, memberships, TenantTx } from '@layerbook/db';
+import { and, eq, inArray, inquiries, inquiryActivities, memberships, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { badRequest, notFound } from '../http/problem';
@@ -11,13 +11,21 @@ import { badRequest, notFound } from '../http/problem';
  */
 const staffUserId = (actor: Actor): string | null => (actor.kind === 'staff' ? actor.userId : null);
 
+/** Only owner and office may be given an inquiry: crew cannot open inquiries (403), so one given to them would sit unseen. */
 async function assertAssignable(tx: TenantTx, userId: string | null | undefined): Promise<void> {
   if (!userId) return;
   const found = await tx.db
     .select({ id: memberships.id })
     .from(memberships)
-    .where(and(eq(memberships.tenantId, tx.tenantId), eq(memberships.userId, userId), eq(memberships.status, 'active')));
-  if (!found.length) throw badRequest([{ field: 'assigneeUserId', message: 'Choose someone on the team.' }]);
+    .where(
+      and(
+        eq(memberships.tenantId, tx.tenantId),
+        eq(memberships.userId, userId),
+        eq(memberships.status, 'active'),
+        inArray(memberships.role, ['owner', 'office']),
+      ),
+    );
+  if (!found.length) throw badRequest([{ field: 'assigneeUserId', message: 'Choose an owner or office member of the team.' }]);
 }
 
 export async function logActivity(
@@ -60,12 +68,15 @@ async function lockInquiry(tx: TenantTx, id: string) {
 
 export async function updateInquiry(tx: TenantTx, actor: Actor, id: string, patch: InquiryUpdate, now: Date): Promise<void> {
   const before = await lockInquiry(tx, id);
-  if ('assigneeUserId' in patch) await assertAssignable(tx, patch.assigneeUserId);
+  // Checked only when it changes: a form sends the assignee back as it was, and one who has since
+  // left the firm must not stop the office from changing the date or the value.
+  const isReassigned = 'assigneeUserId' in patch && patch.assigneeUserId !== before.assigneeUserId;
+  if (isReassigned) await assertAssignable(tx, patch.assigneeUserId);
   await tx.db
     .update(inquiries)
     .set({ ...patch, updatedAt: now })
     .where(and(eq(inquiries.tenantId, tx.tenantId), eq(inquiries.id, id)));
-  if ('assigneeUserId' in patch && patch.assigneeUserId !== before.assigneeUserId) {
+  if (isReassigned) {
     const data = { from: before.assigneeUserId, to: patch.assigneeUserId ?? null };
     await logActivity(tx, actor, id, 'assignment', '', data);
     await audit(tx, actor, 'inquiry.reassigned', id, data);

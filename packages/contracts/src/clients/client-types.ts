@@ -25,7 +25,8 @@ export const CLIENT_LIMITS = {
   contactName: 120,
   roleTitle: 80,
   siteLabel: 80,
-  addressLine1: 200,
+  // as long as an inquiry's siteAddress (INQUIRY_LIMITS), which filing an inquiry copies here whole
+  addressLine1: 300,
   addressLine2: 200,
   city: 80,
   region: 80,

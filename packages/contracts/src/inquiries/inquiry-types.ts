@@ -183,7 +183,10 @@ export interface InquiryConvert {
   readonly site?: SiteCreate;
 }
 
-/** The public inquiry form. `website` is a honeypot; `startedAt` the signed stamp from the page. */
+/**
+ * The public inquiry form. `website` is a honeypot; `startedAt` the signed stamp from the page;
+ * `renewedFrom` the expired stamp a renewed form replaced (it shows the form was opened long ago).
+ */
 export interface PublicInquiryRequest {
   readonly name: string;
   readonly email: string;
@@ -200,6 +203,7 @@ export interface PublicInquiryRequest {
   readonly consent: true;
   readonly website?: string;
   readonly startedAt?: string;
+  readonly renewedFrom?: string;
 }
 
 // What the inquiry routes answer.
@@ -276,7 +280,10 @@ export interface PipelineValue {
 /** GET /api/inquiries/today: follow-ups late and due in the firm's calendar, and the pipeline. */
 export interface TodayView {
   readonly localDate: string;
+  /** the longest-waiting overdue follow-ups, oldest first; a long backlog is cut short */
   readonly overdue: readonly InquirySummary[];
+  /** how many follow-ups are overdue in all (more than `overdue` holds when it is cut short) */
+  readonly overdueCount: number;
   readonly dueToday: readonly InquirySummary[];
   readonly pipeline: PipelineValue;
 }

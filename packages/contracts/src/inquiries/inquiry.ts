@@ -28,7 +28,7 @@ import {
 const phone = text(PHONE_MAX_LENGTH, 'Phone');
 const budgetRange = z.enum(BUDGET_RANGES, { error: 'Choose a budget range from the list.' });
 
-/** The public inquiry form. `website` is a honeypot; `startedAt` a signed timestamp from the page. */
+/** The public inquiry form. `website` is a honeypot; `startedAt` a signed stamp from the page, `renewedFrom` the one it replaced. */
 export const publicInquiryRequest = requestSchema<PublicInquiryRequest>()(
   z
     .strictObject({
@@ -48,6 +48,7 @@ export const publicInquiryRequest = requestSchema<PublicInquiryRequest>()(
       consent: z.literal(true, { error: 'Tick the box so we may contact you about this inquiry.' }),
       website: z.string().max(200).optional(),
       startedAt: z.string().max(200).optional(),
+      renewedFrom: z.string().max(200).optional(),
     })
     .superRefine((v, ctx) => {
       if (isReferralSource(v.heardFrom) && !v.referrerName) {

@@ -14,6 +14,7 @@ import { Submission } from '../../shared/forms/submission';
 import { requiredText } from '../../shared/forms/text-validators';
 import { YEAR_WORDS, toYear, yearText } from '../../shared/forms/year-input';
 import { FormAlert } from '../../shared/ui/form-alert';
+import { Session } from '../../core/auth/session';
 import { ClientApi } from './client-api';
 
 /** A place where work happens; adds one to a client, or edits the one it is given. */
@@ -57,6 +58,8 @@ export class SiteForm implements OnInit {
   } satisfies Record<string, FieldErrorWords>;
   /** The firm's list (ISO 3166-1), by name; the API takes only these codes. */
   protected readonly countries = COUNTRY_CHOICES;
+  /** A new site is most likely where the firm works (the session carries the firm's country). */
+  private readonly firmCountry = inject(Session).user()?.country ?? DEFAULT_COUNTRY;
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     label: ['', Validators.maxLength(L.siteLabel)],
@@ -65,7 +68,7 @@ export class SiteForm implements OnInit {
     city: ['', Validators.maxLength(L.city)],
     region: ['', Validators.maxLength(L.region)],
     postalCode: ['', Validators.maxLength(L.postalCode)],
-    country: [DEFAULT_COUNTRY, Validators.required],
+    country: [this.firmCountry, Validators.required],
     yearBuilt: ['', yearText],
     accessNotes: ['', Validators.maxLength(L.accessNotes)],
   });

@@ -3,7 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { ApplicationRef } from '@angular/core';
 import { type ComponentFixture, DeferBlockBehavior, DeferBlockState, TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
-import type { AttentionNote, BillingToday, InvoiceSummary, StaffRole, TodayView } from '@layerbook/contracts/types';
+import type { AttentionNote, BillingToday, InquirySummary, InvoiceSummary, StaffRole, TodayView } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { Session } from '../../core/auth/session';
 import { sheetSummaries } from '../jobs/sheet/sheet-fixtures';
@@ -78,6 +78,7 @@ const euroPaid: AttentionNote = {
 const inquiries: TodayView = {
   localDate: '2026-12-02',
   overdue: [],
+  overdueCount: 0,
   dueToday: [],
   pipeline: { unweighted: '0.00', weighted: '0.00', openCount: 0, currency: 'USD' },
 };
@@ -161,6 +162,39 @@ describe('Today', () => {
     expect(flag?.textContent).toContain('overdue');
     // nothing to check: no heading for it at all
     expect(text()).not.toContain('to check');
+  });
+
+  it('says how many follow-ups are overdue in all when the list shows only the oldest, and still lists what is due today', async () => {
+    const lead = (id: string, contactName: string, nextFollowUp: string): InquirySummary => ({
+      id,
+      contactName,
+      email: '',
+      phone: '',
+      siteAddress: '',
+      stage: 'new',
+      source: 'web_form',
+      referrerName: '',
+      estimatedValue: null,
+      assigneeUserId: null,
+      assigneeName: null,
+      nextFollowUp,
+      isFollowUpOverdue: nextFollowUp < '2026-12-02',
+      createdAt: '2026-01-01T12:00:00.000Z',
+    });
+    const backlog: TodayView = {
+      ...inquiries,
+      overdue: [lead('inq-1', 'Old lead 1', '2025-01-01'), lead('inq-2', 'Old lead 2', '2025-01-02')],
+      overdueCount: 205,
+      dueToday: [lead('inq-3', 'Call Back Today', '2026-12-02')],
+    };
+    const { text, html, http, settle } = await render('office');
+    http.expectOne('/api/inquiries/today').flush(backlog);
+    http.expectOne('/api/billing/today').flush(money);
+    await settle();
+    expect(text()).toMatch(/Overdue follow-ups\s*\(205\)/);
+    expect(text()).toContain('The 2 waiting longest of 205.');
+    expect(html().querySelector('a[href="/inquiries/list?sort=follow_up"]')?.textContent).toContain('See them all by follow-up date');
+    expect(text()).toContain('Call Back Today');
   });
 
   it('puts card payments to check first, each in its own currency, until marked dealt with', async () => {

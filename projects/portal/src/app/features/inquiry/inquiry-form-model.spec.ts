@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fromPosted, inquiryForm, linkDependentFields, refusedAsSent, toBody } from './inquiry-form-model';
+import { fromPosted, inquiryForm, linkDependentFields, refusedAsSent, renewedStamp, toBody } from './inquiry-form-model';
 
 function filledForm() {
   const form = inquiryForm('stamp-1');
@@ -77,10 +77,35 @@ describe('toBody', () => {
     expect(body).toMatchObject({ name: 'Della Hawthorne', yearBuilt: 1925, heardFrom: 'past_client', consent: true, startedAt: 'stamp-1' });
   });
 
+  it('sends the renewed stamp only when the form was renewed', () => {
+    expect(toBody(filledForm().getRawValue())).not.toHaveProperty('renewedFrom');
+    const form = filledForm();
+    form.patchValue(renewedStamp(form.getRawValue(), 'stamp-2'));
+    expect(toBody(form.getRawValue())).toMatchObject({ startedAt: 'stamp-2', renewedFrom: 'stamp-1' });
+  });
+
   it('sends a blank year as blank', () => {
     const form = filledForm();
     form.controls.yearBuilt.setValue('  ');
     expect(toBody(form.getRawValue()).yearBuilt).toBe('');
+  });
+});
+
+describe('renewedStamp', () => {
+  it.each([
+    ['a first renewal: the refused stamp vouches', { startedAt: 'stamp-1', renewedFrom: '' }, { startedAt: 'new', renewedFrom: 'stamp-1' }],
+    [
+      'a renewal of a renewal: the latest refused one',
+      { startedAt: 'stamp-2', renewedFrom: 'stamp-1' },
+      { startedAt: 'new', renewedFrom: 'stamp-2' },
+    ],
+    [
+      'no stamp was sent: the earlier one still vouches',
+      { startedAt: '', renewedFrom: 'stamp-1' },
+      { startedAt: 'new', renewedFrom: 'stamp-1' },
+    ],
+  ])('%s', (_case, stamps, expected) => {
+    expect(renewedStamp(stamps, 'new')).toEqual(expected);
   });
 });
 

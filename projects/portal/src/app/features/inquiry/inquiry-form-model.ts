@@ -40,6 +40,8 @@ export function inquiryForm(formStamp: string) {
     consent: box(Validators.requiredTrue),
     website: text(''),
     startedAt: text(formStamp),
+    // The expired stamp a renewal replaced: it vouches that the visitor opened the form long ago.
+    renewedFrom: text(''),
   });
 }
 
@@ -132,7 +134,7 @@ export function fromPosted(
   return value as InquiryFormValue;
 }
 
-/** The JSON body for the API: trimmed text, the year as a number when one was given. */
+/** The JSON body for the API: trimmed text, the year as a number when one was given, no empty renewal. */
 export function toBody(value: InquiryFormValue): InquiryBody {
   const year = value.yearBuilt.trim();
   return {
@@ -153,5 +155,16 @@ export function toBody(value: InquiryFormValue): InquiryBody {
     consent: value.consent,
     website: value.website,
     startedAt: value.startedAt,
+    ...(value.renewedFrom ? { renewedFrom: value.renewedFrom } : {}),
   };
+}
+
+type Stamps = Pick<InquiryFormValue, 'startedAt' | 'renewedFrom'>;
+
+/**
+ * The form with a fresh stamp in place of one the API refused as expired; the refused one goes along
+ * as `renewedFrom`, so sending again at once is not taken for a robot's haste.
+ */
+export function renewedStamp(value: Stamps, freshStamp: string): Stamps {
+  return { startedAt: freshStamp, renewedFrom: value.startedAt || value.renewedFrom };
 }

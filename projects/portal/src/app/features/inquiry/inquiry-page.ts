@@ -25,7 +25,7 @@ import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import type { FirmLookup } from './firm-lookup';
 import { InquiryApi } from './inquiry-api';
-import { INQUIRY_WORDS, fromPosted, inquiryForm, linkDependentFields, refusedAsSent, toBody } from './inquiry-form-model';
+import { INQUIRY_WORDS, fromPosted, inquiryForm, linkDependentFields, refusedAsSent, renewedStamp, toBody } from './inquiry-form-model';
 import { postedRefusal, type PostedRefusal } from './posted-refusal';
 import { PublicFrame } from './public-frame';
 import { followTypingBeforeWaking, typedBeforeHydration } from './typed-before-hydration';
@@ -101,7 +101,7 @@ export class InquiryPage {
     const typed = typedBeforeHydration(FORM_ID);
     let value = this.form.getRawValue();
     if (refusal) {
-      value = fromPosted(withoutStaleStamp(refusal), value);
+      value = fromPosted(withRenewedStamp(refusal, value.startedAt), value);
     }
     if (typed) {
       value = fromPosted(typed, value, 'keep');
@@ -210,7 +210,8 @@ export class InquiryPage {
 
   private async renewStamp(): Promise<void> {
     try {
-      this.form.controls.startedAt.setValue((await this.api.firm(this.slug)).formStamp);
+      const fresh = (await this.api.firm(this.slug)).formStamp;
+      this.form.patchValue(renewedStamp(this.form.getRawValue(), fresh));
     } catch {
       this.formMessage.set(this.say('inquiry.page.expired'));
     }
@@ -257,11 +258,14 @@ function isFieldOf<T extends object>(value: T, field: string): field is Extract<
   return field in value;
 }
 
-/** An expired stamp is not sent back into the page: the page already carries a fresh one. */
-function withoutStaleStamp(refusal: PostedRefusal): Record<string, string> {
+/**
+ * An expired stamp is not sent back into the page as its stamp: the page already carries a fresh one.
+ * It goes along as the renewed one instead, as a renewal after a JSON send does (renewedStamp).
+ */
+function withRenewedStamp(refusal: PostedRefusal, freshStamp: string): Record<string, string> {
   if (!refusal.errors.some(isStampProblem)) {
     return refusal.values;
   }
-  const { startedAt: _stale, ...rest } = refusal.values;
-  return rest;
+  const values = { startedAt: '', renewedFrom: '', ...refusal.values };
+  return { ...values, ...renewedStamp(values, freshStamp) };
 }
