@@ -78,9 +78,12 @@ describe('the owner clearing a member’s lost second factor', () => {
 
     const members = (await owner.agent.get('/api/team/members')).body as ItemList<TeamMember>;
     const member = members.items.find((m) => m.email === office.email)!;
+    expect(member.hasSecondFactor).toBe(true);
     const cleared = await owner.agent.post(`/api/auth/second-factor/members/${member.id}/reset`).set('x-csrf-token', owner.csrf()).send({});
     expect(cleared.status).toBe(204);
     expect((await officeIn.agent.get('/api/clients')).status).toBe(401);
     expect((await passwordStep(t, office.email, office.password)).res.body).toMatchObject({ user: null, secondFactor: { step: 'enrol' } });
+    const after = (await owner.agent.get('/api/team/members')).body as ItemList<TeamMember>;
+    expect(after.items.find((m) => m.email === office.email)!.hasSecondFactor).toBe(false);
   });
 });

@@ -38,6 +38,7 @@ async function members(tx: TenantTx, you: string): Promise<TeamMember[]> {
       role: memberships.role,
       status: memberships.status,
       language: memberships.language,
+      hasSecondFactor: sql<boolean>`exists (select 1 from user_second_factors f where f.user_id = ${users.id} and f.confirmed_at is not null)`,
     })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))

@@ -42,6 +42,8 @@ export interface TeamMember {
   readonly isYou: boolean;
   /** the member's own language; null follows the firm's */
   readonly language: Language | null;
+  /** a confirmed second factor guards their sign-in (the owner may clear a lost one) */
+  readonly hasSecondFactor: boolean;
 }
 
 /** GET /api/team/invitations (ItemList: those waiting or expired), and a new invitation. */

@@ -16,6 +16,7 @@ export const TEAM: ItemList<TeamMember> = {
       status: 'active',
       isYou: true,
       language: null,
+      hasSecondFactor: false,
     },
     {
       id: 'm2',
@@ -26,6 +27,7 @@ export const TEAM: ItemList<TeamMember> = {
       status: 'active',
       isYou: false,
       language: null,
+      hasSecondFactor: false,
     },
   ],
 };

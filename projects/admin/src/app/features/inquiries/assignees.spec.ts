@@ -11,6 +11,7 @@ const member = (name: string, role: TeamMember['role'], status: TeamMember['stat
   status,
   isYou: false,
   language: null,
+  hasSecondFactor: false,
 });
 
 describe('assignable', () => {

@@ -24,6 +24,7 @@ const member = (over: Partial<TeamMember>): TeamMember => ({
   status: 'active',
   language: null,
   isYou: false,
+  hasSecondFactor: true,
   ...over,
 });
 
@@ -31,7 +32,8 @@ const MEMBERS: ItemList<TeamMember> = {
   items: [
     member({ isYou: true }),
     member({ id: 'm-2', userId: 'u-2', name: 'Otto Office', email: 'otto@example.com', role: 'office' }),
-    member({ id: 'm-3', userId: 'u-3', name: 'Cora Crew', email: 'cora@example.com', role: 'crew' }),
+    member({ id: 'm-3', userId: 'u-3', name: 'Cora Crew', email: 'cora@example.com', role: 'crew', hasSecondFactor: false }),
+    member({ id: 'm-4', userId: 'u-4', name: 'Nell Nofactor', email: 'nell@example.com', role: 'office', hasSecondFactor: false }),
   ],
 };
 
@@ -66,10 +68,11 @@ async function render(role: 'owner' | 'office', confirmed: boolean) {
 describe("Team: clearing a member's second factor", { timeout: 30_000 }, () => {
   afterEach(() => TestBed.inject(HttpTestingController).verify());
 
-  it('offers the owner to clear it for other owner and office members, never for crew or themselves', async () => {
+  it('offers the owner to clear it for other members who have one, never for themselves', async () => {
     const { clearButton } = await render('owner', false);
     expect(clearButton('Otto Office')).toBeDefined();
     expect(clearButton('Cora Crew')).toBeUndefined();
+    expect(clearButton('Nell Nofactor')).toBeUndefined();
     expect(clearButton('Olive Owner')).toBeUndefined();
   });
 

@@ -105,7 +105,7 @@ export class Team {
 
   /** Owner and office may have a second factor to lose (crew are never asked for one). */
   protected mayHaveSecondFactor(member: TeamMember): boolean {
-    return member.status === 'active' && member.role !== 'crew';
+    return member.status === 'active' && member.hasSecondFactor;
   }
 
   protected async clearSecondFactor(member: TeamMember): Promise<void> {
