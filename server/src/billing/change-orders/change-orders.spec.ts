@@ -96,6 +96,23 @@ describe('change orders for the office', () => {
     expect(sent.body.detail).toMatch(/more tax than the contract carries/);
   });
 
+  it('prices added work for itself, never up to the firm minimum charge for a whole job', async () => {
+    const f = await acceptedJob(t, 'Minimum Plaster');
+    const view = (await f.agent.get('/api/firm/estimating')).body as { settings: Record<string, unknown> };
+    const raised = await f.agent
+      .put('/api/firm/estimating')
+      .set('x-csrf-token', f.csrf())
+      .send({ ...view.settings, minimumCharge: '90000.00' });
+    expect(raised.status).toBe(200);
+    const made = await addChangeOrder(f, {
+      title: 'Prime the dining room walls again',
+      description: '',
+      pricing: { kind: 'engine', surfaceIds: [f.surfaceId], finishSystemId: f.simpleId },
+    });
+    expect(Number(made.price)).toBeGreaterThan(0);
+    expect(Number(made.price)).toBeLessThan(90000);
+  });
+
   it('prices added surfaces with the engine: the same figure the engine gives for those surfaces', async () => {
     const f = await acceptedJob(t, 'Engine Plaster');
     const made = await addChangeOrder(f, {
@@ -105,7 +122,9 @@ describe('change orders for the office', () => {
     });
     const siteId = (await f.agent.get(`/api/jobs/${f.jobId}`)).body.siteId as string;
     const expected = await withTenant(t.ctx.pool, f.firmId, async (tx) => {
-      const context = await loadEstimateContext(tx, siteId);
+      const loaded = await loadEstimateContext(tx, siteId);
+      // A change order is priced without the firm's minimum charge (the job already carries it).
+      const context = { ...loaded, settings: { ...loaded.settings, minimumCharge: null } };
       const inputs: EstimateInputs = {
         title: 'Same surfaces',
         startDate: '2026-12-07',

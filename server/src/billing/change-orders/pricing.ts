@@ -83,7 +83,10 @@ async function priceWithEngine(
   today: string,
   digits: number,
 ): Promise<PricedChangeOrder> {
-  const context = await loadEstimateContext(tx, job.siteId);
+  const loaded = await loadEstimateContext(tx, job.siteId);
+  // The firm's minimum charge is the least a job is worth taking on; work added to a job under way
+  // is priced for itself (common practice, no source).
+  const context = { ...loaded, settings: { ...loaded.settings, minimumCharge: null } };
   const onSite = new Set(context.rooms.flatMap((r) => r.surfaces.map((s) => s.id)));
   const problems: Array<{ field: string; message: string }> = [];
   pricing.surfaceIds.forEach((id, i) => {
