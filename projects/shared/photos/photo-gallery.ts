@@ -25,6 +25,8 @@ import { photoProblemText, screenPick, thumbnailWidth, uploadPercent } from './p
 export interface GalleryPhoto extends PhotoThumbnail {
   readonly downloadUrl?: string;
   readonly originalName?: string;
+  /** false when the server says the reader may not delete this one (a crew member and another's photo) */
+  readonly canDelete?: boolean;
 }
 
 /** One file on its way up; `percent` is null until the browser reports a total. */
@@ -73,7 +75,7 @@ let nextGalleryId = 0;
               @if (p.caption) {
                 <span class="caption">{{ p.caption }}</span>
               }
-              @if (canDelete()) {
+              @if (canDelete() && p.canDelete !== false) {
                 @if (confirming() === p.id) {
                   <span class="confirm" role="group" [attr.aria-label]="'common.photoGallery.deleteAsk' | translate: { number: i + 1 }">
                     <button mat-flat-button type="button" data-confirm [disabled]="isBusy()" (click)="deletePhoto(p)">

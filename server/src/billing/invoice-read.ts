@@ -24,6 +24,7 @@ import { type BillingJob, jobOfInvoiceRead } from './billing-job';
 import { documentFrom, documentReadOfInvoice } from './document';
 import { moneyOut } from './money';
 import { billingSettingsOf, billingSettingsRead, billingTermsFor } from './settings';
+import { countsTowardLineSql } from './work-items';
 
 /**
  * An invoice summary's columns; `$today` is the firm-local day the query is given, so whether an
@@ -264,6 +265,7 @@ export const invoiceDetailReads = (tenantId: string, id: string, now: Date): Sql
             (select w.layer_name from job_work_items w
               where i.status = 'draft' and i.trigger->>'kind' = 'layerComplete'
                 and w.tenant_id = i.tenant_id and w.job_id = i.job_id and w.layer_id = i.trigger->>'layerId' and w.done_on is null
+                and ${countsTowardLineSql('w', 'i.schedule_line_id')}
               limit 1) as reopened_layer
        ${SUMMARY_FROM} where i.tenant_id = $1 and i.id = $2`,
     values: [tenantId, id, now],

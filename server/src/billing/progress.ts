@@ -9,7 +9,7 @@ import { badRequest, conflict, forbidden, notFound } from '../http/problem';
 import type { JobQueue } from '../queue/job-queue';
 import { decimalsMessage, fitsCurrency } from './money';
 import { enqueueBillingCheck } from './triggers/enqueue';
-import { ensureJobWork, loadWorkItems } from './work-items';
+import { countsTowardLineSql, ensureJobWork, loadWorkItems } from './work-items';
 import { longDate } from '../i18n/long-date';
 
 interface JobRow {
@@ -141,6 +141,31 @@ function checkValueLine(
   }
 }
 
+/**
+ * A layer whose stage payment is invoiced (issued, not voided) stays done: the invoice says the work
+ * was done. The office voids the invoice first if it was not; the crew, who never read billing, ask
+ * the office. A change order's layer approved after that invoice was made is not what it billed
+ * (countsTowardLine). A draft is no bar: the billing check withdraws the queue's own.
+ */
+async function refuseReopeningBilled(tx: TenantTx, workItemId: string, isCrew: boolean): Promise<void> {
+  const { rows } = await tx.client.query<{ number_text: string }>(
+    `select i.number_text
+       from job_work_items w
+       join payment_schedule_lines l on l.tenant_id = w.tenant_id and l.job_id = w.job_id
+                                    and l.trigger->>'kind' = 'layerComplete' and l.trigger->>'layerId' = w.layer_id
+       join invoices i on i.tenant_id = l.tenant_id and i.schedule_line_id = l.id and i.status not in ('draft', 'void')
+      where w.tenant_id = $1 and w.id = $2 and ${countsTowardLineSql('w', 'l.id')}
+      order by i.number limit 1`,
+    [tx.tenantId, workItemId],
+  );
+  const invoice = rows[0]?.number_text;
+  if (!invoice) return;
+  const message = isCrew
+    ? 'The payment for this layer is already billed, so it stays done: ask the office if the work needs doing again.'
+    : `Invoice ${invoice} bills the payment due when this layer is done, so it stays done. If the work is not done, void ${invoice} first, then reopen the layer.`;
+  throw conflict(message, [{ field: 'workItemId', message }]);
+}
+
 /** Whether a mark for the same thing (a layer on a surface, a value line's percent or stored materials, the walkthrough) is dated after this one. */
 async function isOlderThanRecorded(
   tx: TenantTx,
@@ -177,9 +202,12 @@ export async function recordProgress(
   now: Date,
 ): Promise<JobProgressView> {
   const job = await loadJob(tx, jobId, now, true);
-  if (actor.kind === 'staff' && actor.role === 'crew' && mark.kind === 'storedMaterials') {
+  const isCrew = actor.kind === 'staff' && actor.role === 'crew';
+  if (isCrew && mark.kind === 'storedMaterials') {
     throw forbidden('Stored materials are an amount of money: the office records them.');
   }
+  // The walkthrough is the office's: it may draft the final invoice, and the crew sheet does not offer it.
+  if (isCrew && mark.kind === 'walkthrough') throw forbidden('The office records the final walkthrough.');
   if (mark.clientKey !== undefined) {
     // Sent again (a phone back online): the first one counted; answer the same, whatever changed since.
     // The job's row lock above makes a second copy wait here until the first has committed.
@@ -195,6 +223,11 @@ export async function recordProgress(
     if (seen[0]) return progressView(tx, jobId);
   }
   if (job.status === 'cancelled') throw conflict('This job is cancelled: its progress can no longer change.');
+  // Finished means the work is done: layers and percents stay as they are until the office reopens the job.
+  // The walkthrough comes after finishing, and stored materials may still need taking down to nothing.
+  if (job.status === 'complete' && (mark.kind === 'layerDone' || mark.kind === 'layerReopened' || mark.kind === 'valuePercent')) {
+    throw conflict('This job is marked finished: reopen the job before changing its progress.');
+  }
   const latest = addDays(job.today, 1);
   const earliest = yearBefore(job.accepted_on);
   if (mark.on > latest) throw badRequest([{ field: 'on', message: `The day cannot be later than ${longDate(latest)}.` }]);
@@ -209,6 +242,7 @@ export async function recordProgress(
     workItemId: mark.kind === 'layerDone' || mark.kind === 'layerReopened' ? (await workItem(tx, jobId, mark.workItemId)).id : null,
     valueLineId: line?.id ?? null,
   };
+  if (mark.kind === 'layerReopened' && target.workItemId) await refuseReopeningBilled(tx, target.workItemId, isCrew);
   const value = mark.kind === 'valuePercent' ? String(mark.percentComplete) : mark.kind === 'storedMaterials' ? mark.amount : null;
 
   if (line) {

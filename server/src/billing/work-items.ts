@@ -168,17 +168,22 @@ export async function ensureJobWork(tx: TenantTx, jobId: string): Promise<void> 
   }
 }
 
-/** Adds work items to a job; a surface and layer already on it stays as it is. */
+/**
+ * Adds work items to a job: the work sold (`changeOrderId` null) or an approved change order's. A
+ * surface and layer already on the job for the same change order (or for none) stays as it is; a
+ * change order redoing a sold surface with the same finish gets layers of its own to mark.
+ */
 export async function insertWorkItems(
   tx: TenantTx,
   jobId: string,
   items: ReadonlyArray<Pick<JobWorkItem, 'position' | 'roomName' | 'surfaceId' | 'surfaceName' | 'layerId' | 'layerName' | 'layerOrder'>>,
+  changeOrderId: string | null = null,
 ): Promise<void> {
   await tx.client.query(
-    `insert into job_work_items (tenant_id, job_id, position, room_name, surface_id, surface_name, layer_id, layer_name, layer_order)
-     select $1, $2, x.position, x.room_name, x.surface_id, x.surface_name, x.layer_id, x.layer_name, x.layer_order
+    `insert into job_work_items (tenant_id, job_id, position, room_name, surface_id, surface_name, layer_id, layer_name, layer_order, change_order_id)
+     select $1, $2, x.position, x.room_name, x.surface_id, x.surface_name, x.layer_id, x.layer_name, x.layer_order, $4::uuid
        from jsonb_to_recordset($3::jsonb) as x(position int, room_name text, surface_id text, surface_name text, layer_id text, layer_name text, layer_order int)
-     on conflict (tenant_id, job_id, surface_id, layer_id) do nothing`,
+     on conflict (tenant_id, job_id, surface_id, layer_id, change_order_id) do nothing`,
     [
       tx.tenantId,
       jobId,
@@ -193,17 +198,39 @@ export async function insertWorkItems(
           layer_order: i.layerOrder,
         })),
       ),
+      changeOrderId,
     ],
   );
 }
 
-/** The job's work items in crew order. */
+/** The job's work items in crew order, each with the number of the change order that added it (null: sold). */
 export async function loadWorkItems(tx: TenantTx, jobId: string): Promise<WorkItemView[]> {
   const { rows } = await tx.client.query<WorkItemView>(
-    `select id, position, room_name as "roomName", surface_id as "surfaceId", surface_name as "surfaceName", layer_id as "layerId",
-            layer_name as "layerName", layer_order as "layerOrder", done_on::text as "doneOn"
-       from job_work_items where tenant_id = $1 and job_id = $2 order by position, id`,
+    `select w.id, w.position, w.room_name as "roomName", w.surface_id as "surfaceId", w.surface_name as "surfaceName", w.layer_id as "layerId",
+            w.layer_name as "layerName", w.layer_order as "layerOrder", w.done_on::text as "doneOn", co.number as "changeOrder"
+       from job_work_items w
+       left join change_orders co on co.tenant_id = w.tenant_id and co.id = w.change_order_id
+      where w.tenant_id = $1 and w.job_id = $2 order by w.position, w.id`,
     [tx.tenantId, jobId],
   );
   return rows;
 }
+
+/**
+ * Whether a work item counts towards a stage payment waiting on its layer ("when the base coat is
+ * done on every surface"). The work sold always does. A change order's work does only if the
+ * change order was approved before the line was first billed: approval spreads its amount over the
+ * lines not yet billed (respreadSchedule), so such a line now pays for the change order's layers
+ * too — a redo of a sold surface included — and waits for them. A line already billed then kept its
+ * amount, which pays for the work sold only: the change order's work neither holds it back, nor
+ * withdraws its draft, nor stops its layer being reopened. Both times are the database's (a change
+ * order's items are made in its approval's transaction). Pure.
+ */
+export function countsTowardLine(item: { readonly isChange: boolean; readonly createdAt: Date }, lineBilledSince: Date | null): boolean {
+  return !item.isChange || lineBilledSince === null || item.createdAt < lineBilledSince;
+}
+
+/** countsTowardLine in SQL, for work item `w` (joined with its tenant) and the schedule line whose id is `lineId`. */
+export const countsTowardLineSql = (w: string, lineId: string) =>
+  `(${w}.change_order_id is null or ${w}.created_at < coalesce((select min(fi.created_at) from invoices fi
+     where fi.tenant_id = ${w}.tenant_id and fi.schedule_line_id = ${lineId}), 'infinity'::timestamptz))`;

@@ -23,7 +23,8 @@ export interface PhotoRoutes<V extends PhotoView, F extends PhotoFields = PhotoF
   readonly roles: { readonly read: StaffRole; readonly upload: StaffRole; readonly delete: StaffRole };
   /** 404 unless the record is there; run before the upload's body is read */
   readonly findOwner: (tx: TenantTx, ownerId: string) => Promise<unknown>;
-  readonly list: (tx: TenantTx, ownerId: string) => Promise<V[]>;
+  /** `actor`: the reader, for an album whose photos say what the reader may do with them */
+  readonly list: (tx: TenantTx, ownerId: string, actor: Actor) => Promise<V[]>;
   readonly add: (tx: TenantTx, actor: Actor, ownerId: string, caption: string, stored: StoredImage, fields: F) => Promise<V>;
   /** `ownerId` when the delete path names the record too (`/jobs/:id/photos/:photoId`) */
   readonly remove: (tx: TenantTx, actor: Actor, photoId: string, ownerId: string | null) => Promise<ObjectKeys>;
@@ -48,7 +49,7 @@ export function mountPhotoRoutes<V extends PhotoView, F extends PhotoFields = Ph
   const receiveFile = receiveOneFile(ctx.config, 'file');
 
   router.get(photos.paths.owner, async (req, res) => {
-    const items = await withStaff(ctx, req, photos.roles.read, (tx) => photos.list(tx, photos.ownerId(req)));
+    const items = await withStaff(ctx, req, photos.roles.read, (tx, staff) => photos.list(tx, photos.ownerId(req), staffActor(staff)));
     res.json({ items } satisfies ItemList<V>);
   });
 

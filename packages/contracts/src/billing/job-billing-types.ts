@@ -91,6 +91,8 @@ export interface WorkItemView {
   readonly layerName: string;
   readonly layerOrder: number;
   readonly doneOn: string | null;
+  /** the number of the approved change order that added this work (a redo of a sold surface has its own); null: sold */
+  readonly changeOrder: number | null;
 }
 
 /** A schedule-of-values line (progress billing). */

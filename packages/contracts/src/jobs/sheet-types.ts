@@ -183,6 +183,8 @@ export interface JobSheet {
 /** A progress photo: the shared photo view plus the work item it shows. */
 export interface JobPhotoView extends PhotoView {
   readonly workItemId: string | null;
+  /** whether the reader may delete it: owner and office any photo, a crew member the ones they took */
+  readonly canDelete: boolean;
 }
 
 /** The text sent beside a progress photo (multipart fields `caption`, `workItemId`). */

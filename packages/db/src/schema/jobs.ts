@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { date, index, integer, jsonb, numeric, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { date, index, integer, jsonb, numeric, pgTable, text, timestamp, unique, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { createdAt, id, tenantId, tenantPolicy, updatedAt } from './columns';
 import { clients, sites } from './clients';
 import { firms } from './firms';
@@ -93,7 +93,8 @@ export const paymentScheduleLines = pgTable(
 
 /**
  * One layer on one surface of the accepted option, in the order the crew applies them: what
- * progress is marked against. Made from the estimate's result when the job is made.
+ * progress is marked against. Made from the estimate's result when the job is made, and from an
+ * engine-priced change order when the client approves it.
  */
 export const jobWorkItems = pgTable(
   'job_work_items',
@@ -111,12 +112,19 @@ export const jobWorkItems = pgTable(
     layerName: text('layer_name').notNull(),
     /** the layer's place in its finish (1 = first on) */
     layerOrder: integer('layer_order').notNull(),
+    /**
+     * the approved change order that added this work; null for the work sold. A change order may
+     * redo a surface already sold with the same finish (another colour): its layers are work of their
+     * own. No foreign key, as job_value_lines.change_order_id (billing.ts references jobs).
+     */
+    changeOrderId: uuid('change_order_id'),
     doneOn: date('done_on'),
     doneBy: uuid('done_by').references(() => users.id),
     createdAt: createdAt(),
   },
   (t) => [
-    uniqueIndex('job_work_items_key').on(t.tenantId, t.jobId, t.surfaceId, t.layerId),
+    // NULLS NOT DISTINCT: the work sold (no change order) stays one item per surface and layer.
+    unique('job_work_items_work_key').on(t.tenantId, t.jobId, t.surfaceId, t.layerId, t.changeOrderId).nullsNotDistinct(),
     index('job_work_items_job_idx').on(t.tenantId, t.jobId, t.position),
     tenantPolicy('job_work_items'),
   ],

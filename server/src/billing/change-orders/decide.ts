@@ -158,9 +158,9 @@ async function applyApproval(tx: TenantTx, ctx: AppContext, row: ChangeOrderRow,
 
 /**
  * The layers on the surfaces an engine-priced change order adds become the job's work, after the
- * work sold: the office and crew mark them, and a payment due when a layer is done on every surface
- * waits for them too (its amount grew with the change order). A surface and layer already on the job
- * stays as it is.
+ * work sold, as its own: the office and crew mark them, a redo of a surface already sold included,
+ * and a payment due when a layer is done on every surface waits for them too when its amount grew
+ * with the change order (not yet billed: countsTowardLine in work-items.ts).
  */
 async function addWorkItems(tx: TenantTx, row: ChangeOrderRow): Promise<void> {
   const items = row.detail.workItems ?? [];
@@ -173,6 +173,7 @@ async function addWorkItems(tx: TenantTx, row: ChangeOrderRow): Promise<void> {
     tx,
     row.job_id,
     items.map((item, k) => ({ ...item, position: rows[0].last + k + 1 })),
+    row.id,
   );
 }
 

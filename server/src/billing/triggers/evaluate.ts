@@ -10,6 +10,7 @@ import type { BillingEvaluateJob } from '../../queue/queues';
 import { recordAudit } from '../../audit/record';
 import { draftLineInvoice } from '../drafts';
 import { draftProgressInvoice, refreshOpenProgressDraft } from '../progress-invoice';
+import { countsTowardLine } from '../work-items';
 
 interface JobRow {
   billing_started_at: Date | null;
@@ -27,6 +28,12 @@ interface ItemRow {
   layer_id: string;
   layer_name: string;
   done_on: string | null;
+}
+
+/** A work item as the check reads it: whether a change order added it, and when (see countsTowardLine). */
+interface CheckedItemRow extends ItemRow {
+  is_change: boolean;
+  created_at: Date;
 }
 
 /**
@@ -111,9 +118,16 @@ export async function evaluateJobBilling(
     }
   }
   const { rows: lines } = await tx.client.query<
-    LineRow & { status: 'scheduled' | 'ready'; withdrawable: string | null; withdrawable_kind: InvoiceKind | null }
+    LineRow & {
+      status: 'scheduled' | 'ready';
+      withdrawable: string | null;
+      withdrawable_kind: InvoiceKind | null;
+      billed_since: Date | null;
+    }
   >(
-    `select l.id, l.trigger, l.status, i.id as withdrawable, i.kind as withdrawable_kind from payment_schedule_lines l
+    `select l.id, l.trigger, l.status, i.id as withdrawable, i.kind as withdrawable_kind,
+            (select min(b.created_at) from invoices b where b.tenant_id = l.tenant_id and b.schedule_line_id = l.id) as billed_since
+       from payment_schedule_lines l
        left join invoices i on i.tenant_id = l.tenant_id and i.schedule_line_id = l.id and i.status = 'draft' and i.origin = 'queue'
                            and i.updated_at = i.created_at
       where l.tenant_id = $1 and l.job_id = $2 and (l.status = 'scheduled' or (l.status = 'ready' and l.trigger->>'kind' = 'layerComplete'))
@@ -121,12 +135,14 @@ export async function evaluateJobBilling(
     [tx.tenantId, jobId],
   );
   if (!lines.length) return drafted;
-  const { rows: items } = await tx.client.query<ItemRow>(
-    `select layer_id, layer_name, done_on::text as done_on from job_work_items where tenant_id = $1 and job_id = $2 order by position`,
+  const { rows: items } = await tx.client.query<CheckedItemRow>(
+    `select layer_id, layer_name, done_on::text as done_on, change_order_id is not null as is_change, created_at
+       from job_work_items where tenant_id = $1 and job_id = $2 order by position`,
     [tx.tenantId, jobId],
   );
   for (const line of lines) {
-    const triggerText = triggerMet(line.trigger, { walkthroughOn: job.walkthrough_on }, items, today);
+    const counted = items.filter((i) => countsTowardLine({ isChange: i.is_change, createdAt: i.created_at }, line.billed_since));
+    const triggerText = triggerMet(line.trigger, { walkthroughOn: job.walkthrough_on }, counted, today);
     if (line.status === 'ready') {
       if (triggerText === null && line.withdrawable && line.withdrawable_kind) {
         await withdrawDraft(

@@ -12,7 +12,9 @@ import { sheetCautions, withCrewLead } from './sheet-cautions';
  */
 export function buildSheet(src: SheetSource, workItems: readonly WorkItemView[], photos: readonly JobPhotoView[]): JobSheet {
   const surfaces = src.result?.surfaces ?? [];
-  const items = new Map(workItems.map((w) => [`${w.surfaceId}/${w.layerId}`, w]));
+  // A change order redoing a sold surface has layers of its own: the key names the change order too.
+  const keyOf = (surfaceId: string, layerId: string, changeOrder: number | null) => `${changeOrder ?? 'sold'}/${surfaceId}/${layerId}`;
+  const items = new Map(workItems.map((w) => [keyOf(w.surfaceId, w.layerId, w.changeOrder), w]));
 
   const toSurface = (s: (typeof surfaces)[number], changeOrder: number | null = null): SheetSurface => ({
     id: s.surfaceId,
@@ -28,7 +30,7 @@ export function buildSheet(src: SheetSource, workItems: readonly WorkItemView[],
     isCurved: s.measure.isCurved,
     topHeight: s.measure.topHeight,
     layers: s.layers.map((layer) => {
-      const item = items.get(`${s.surfaceId}/${layer.layerId}`);
+      const item = items.get(keyOf(s.surfaceId, layer.layerId, changeOrder));
       return {
         layerId: layer.layerId,
         name: layer.name,

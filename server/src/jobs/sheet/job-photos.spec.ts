@@ -40,7 +40,14 @@ describe('progress photos', () => {
     const added = await upload(crew, { caption: '  Second coat, north wall ', workItemId });
     expect(added.status).toBe(201);
     const photo = added.body as JobPhotoView;
-    expect(photo).toMatchObject({ caption: 'Second coat, north wall', workItemId, width: 64, height: 48, originalName: 'wall.jpg' });
+    expect(photo).toMatchObject({
+      caption: 'Second coat, north wall',
+      workItemId,
+      canDelete: true,
+      width: 64,
+      height: 48,
+      originalName: 'wall.jpg',
+    });
     expect(photo.thumbnailUrl).toBe(`/api/files/${photo.fileId}/thumbnail`);
     const plain = await upload(crew, { caption: 'Scaffold up', workItemId: '' });
     expect(plain.status).toBe(201);
@@ -89,6 +96,36 @@ describe('progress photos', () => {
     const captions = ((await crew.agent.get(`/api/jobs/${job.job.id}/photos`)).body as ItemList<JobPhotoView>).items.map((p) => p.caption);
     expect(captions).not.toContain('Mine');
     expect(captions).not.toContain('Theirs');
+  });
+
+  it('says on each photo whether the reader may delete it, by the rule the delete follows', async () => {
+    const mine = ((await upload(crew, { caption: 'Mine to delete' })).body as JobPhotoView).id;
+    const mayDelete = async (who: Member) =>
+      Object.fromEntries(
+        ((await who.agent.get(`/api/jobs/${job.job.id}/photos`)).body as ItemList<JobPhotoView>).items.map((p) => [p.id, p.canDelete]),
+      )[mine];
+    expect([await mayDelete(crew), await mayDelete(otherCrew), await mayDelete(job)]).toEqual([true, false, true]);
+    const sheet = (await otherCrew.agent.get(`/api/jobs/${job.job.id}/sheet`)).body as JobSheet;
+    expect(sheet.photos.find((p) => p.id === mine)?.canDelete).toBe(false);
+    expect((await remove(otherCrew, mine)).status).toBe(403);
+    expect((await remove(crew, mine)).status).toBe(204);
+  });
+
+  it('takes no photos on a cancelled job (409) but still lists them', async () => {
+    const closing = await acceptedJob(t, 'Cancelled Photo Studio');
+    const closingCrew = await joinAs(t, closing, 'crew');
+    expect((await upload(closingCrew, { caption: 'Before' }, closing.job.id)).status).toBe(201);
+    const cancel = await closing.agent
+      .post(`/api/jobs/${closing.job.id}/status`)
+      .set('x-csrf-token', closing.csrf())
+      .send({ status: 'cancelled', reason: 'Client moved' });
+    expect(cancel.status).toBe(200);
+    const refused = await upload(closingCrew, { caption: 'After' }, closing.job.id);
+    expect([refused.status, refused.body.detail]).toEqual([409, 'This job is cancelled: no more photos can be added to it.']);
+    const captions = ((await closingCrew.agent.get(`/api/jobs/${closing.job.id}/photos`)).body as ItemList<JobPhotoView>).items.map(
+      (p) => p.caption,
+    );
+    expect(captions).toEqual(['Before']);
   });
 
   it('another job’s photo is not found on this job; another firm sees nothing', async () => {

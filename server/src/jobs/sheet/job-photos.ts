@@ -1,9 +1,9 @@
-import type { JobPhotoFields, JobPhotoView } from '@layerbook/contracts';
+import type { JobPhotoFields, JobPhotoView, JobStatus } from '@layerbook/contracts';
 import { and, eq, jobPhotos, jobs, jobWorkItems, TenantTx } from '@layerbook/db';
 import { addPhoto, deletePhoto, listPhotos, type PhotoAlbum } from '../../files/photos';
 import type { ObjectKeys, StoredImage } from '../../files/stored-files';
 import type { Actor } from '../../http/actor';
-import { badRequest, forbidden, notFound } from '../../http/problem';
+import { badRequest, conflict, forbidden, notFound } from '../../http/problem';
 
 const COLUMNS: PhotoAlbum['columns'] = {
   id: jobPhotos.id,
@@ -40,10 +40,10 @@ function jobAlbum(
 export const JOB_PHOTOS: PhotoAlbum = jobAlbum();
 
 /** The job, or the same 404 whether it never existed or belongs to another firm. */
-export async function findPhotoJob(tx: TenantTx, jobId: string): Promise<{ id: string; title: string }> {
+export async function findPhotoJob(tx: TenantTx, jobId: string): Promise<{ id: string; title: string; status: JobStatus }> {
   const job = (
     await tx.db
-      .select({ id: jobs.id, title: jobs.title })
+      .select({ id: jobs.id, title: jobs.title, status: jobs.status })
       .from(jobs)
       .where(and(eq(jobs.tenantId, tx.tenantId), eq(jobs.id, jobId)))
   )[0];
@@ -51,16 +51,31 @@ export async function findPhotoJob(tx: TenantTx, jobId: string): Promise<{ id: s
   return job;
 }
 
-/** The job's photos in the order they were taken, each with the work item it shows. */
-export async function listJobPhotos(tx: TenantTx, jobId: string): Promise<JobPhotoView[]> {
+/** The job a photo is added to: 404 as findPhotoJob, 409 once it is cancelled (its record is closed). */
+export async function findUploadJob(tx: TenantTx, jobId: string): Promise<{ id: string; title: string }> {
+  const job = await findPhotoJob(tx, jobId);
+  if (job.status === 'cancelled') throw conflict('This job is cancelled: no more photos can be added to it.');
+  return job;
+}
+
+/** The one rule for deleting a progress photo: owner and office any, a crew member only one they took. */
+export function mayDeletePhoto(actor: Actor, createdBy: string | null): boolean {
+  return actor.kind !== 'staff' || actor.role !== 'crew' || (createdBy !== null && createdBy === actor.userId);
+}
+
+/** The job's photos in the order they were taken, each with the work item it shows and whether `actor` may delete it. */
+export async function listJobPhotos(tx: TenantTx, actor: Actor, jobId: string): Promise<JobPhotoView[]> {
   await findPhotoJob(tx, jobId);
   const views = (await listPhotos(tx, JOB_PHOTOS, [jobId])).get(jobId) ?? [];
   const links = await tx.db
-    .select({ id: jobPhotos.id, workItemId: jobPhotos.workItemId })
+    .select({ id: jobPhotos.id, workItemId: jobPhotos.workItemId, createdBy: jobPhotos.createdBy })
     .from(jobPhotos)
     .where(and(eq(jobPhotos.tenantId, tx.tenantId), eq(jobPhotos.jobId, jobId)));
-  const workItemOf = new Map(links.map((l) => [l.id, l.workItemId]));
-  return views.map((view) => ({ ...view, workItemId: workItemOf.get(view.id) ?? null }));
+  const linkOf = new Map(links.map((l) => [l.id, l]));
+  return views.map((view) => {
+    const link = linkOf.get(view.id);
+    return { ...view, workItemId: link?.workItemId ?? null, canDelete: mayDeletePhoto(actor, link?.createdBy ?? null) };
+  });
 }
 
 export async function addJobPhoto(
@@ -70,7 +85,8 @@ export async function addJobPhoto(
   fields: JobPhotoFields,
   stored: StoredImage,
 ): Promise<JobPhotoView> {
-  const job = await findPhotoJob(tx, jobId);
+  // Checked again after the upload: the job may have been cancelled while the photo was on its way.
+  const job = await findUploadJob(tx, jobId);
   const workItemId = fields.workItemId ?? null;
   if (workItemId !== null) {
     const item = await tx.db
@@ -79,25 +95,23 @@ export async function addJobPhoto(
       .where(and(eq(jobWorkItems.tenantId, tx.tenantId), eq(jobWorkItems.jobId, jobId), eq(jobWorkItems.id, workItemId)));
     if (!item[0]) throw badRequest([{ field: 'workItemId', message: 'No such layer on this job.' }]);
   }
-  const album = jobAlbum({ workItemId, createdBy: actor.kind === 'staff' ? actor.userId : null });
+  const createdBy = actor.kind === 'staff' ? actor.userId : null;
+  const album = jobAlbum({ workItemId, createdBy });
   const about = { jobTitle: job.title, workItemId };
   const view = await addPhoto(tx, album, actor, { id: jobId, about }, fields.caption ?? '', stored);
-  return { ...view, workItemId };
+  return { ...view, workItemId, canDelete: mayDeletePhoto(actor, createdBy) };
 }
 
 /**
- * Deletes a photo of this job (404 for a photo of another job): owner and office may delete any,
- * a crew member only a photo they took themselves.
+ * Deletes a photo of this job (404 for a photo of another job), as mayDeletePhoto allows (403 otherwise).
  */
 export function deleteJobPhoto(tx: TenantTx, actor: Actor, jobId: string, photoId: string): Promise<ObjectKeys> {
   return deletePhoto(tx, JOB_PHOTOS, actor, photoId, async (ownerId) => {
     if (ownerId !== jobId) throw notFound('photo');
-    if (actor.kind === 'staff' && actor.role === 'crew') {
-      const row = await tx.db
-        .select({ createdBy: jobPhotos.createdBy })
-        .from(jobPhotos)
-        .where(and(eq(jobPhotos.tenantId, tx.tenantId), eq(jobPhotos.id, photoId)));
-      if (row[0]?.createdBy !== actor.userId) throw forbidden('Only the office or the person who took a photo may delete it.');
-    }
+    const row = await tx.db
+      .select({ createdBy: jobPhotos.createdBy })
+      .from(jobPhotos)
+      .where(and(eq(jobPhotos.tenantId, tx.tenantId), eq(jobPhotos.id, photoId)));
+    if (!mayDeletePhoto(actor, row[0]?.createdBy ?? null)) throw forbidden('Only the office or the person who took a photo may delete it.');
   });
 }

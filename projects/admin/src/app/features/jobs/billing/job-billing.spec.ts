@@ -81,6 +81,7 @@ function view(over: Partial<JobBillingView> = {}): JobBillingView {
         layerName: 'Lime base coat',
         layerOrder: 1,
         doneOn: '2026-12-10',
+        changeOrder: null,
       },
       {
         id: 'w2',
@@ -92,6 +93,7 @@ function view(over: Partial<JobBillingView> = {}): JobBillingView {
         layerName: 'Glaze',
         layerOrder: 2,
         doneOn: null,
+        changeOrder: null,
       },
     ],
     valueLines: [],
@@ -189,6 +191,31 @@ describe('JobBilling (the job page billing sections)', { timeout: 30_000 }, () =
     http.expectOne(`/api/jobs/${JOB}/billing`).flush(view());
     http.expectOne(`/api/jobs/${JOB}/history`).flush({ items: [] });
     await fixture.whenStable();
+  });
+
+  it('shows the server’s refusal to reopen a layer beside that layer, naming the invoice to void', async () => {
+    const { fixture, http, host } = await render(view());
+    const reopen = Array.from(host.querySelectorAll('button')).find((b) => b.textContent?.trim() === 'Reopen');
+    reopen?.click();
+    const said =
+      'Invoice INV-0004 bills the payment due when this layer is done, so it stays done. If the work is not done, void INV-0004 first, then reopen the layer.';
+    http
+      .expectOne(`/api/jobs/${JOB}/progress`)
+      .flush(
+        { type: 'about:blank', title: 'Conflict', status: 409, detail: said, errors: [{ field: 'workItemId', message: said }] },
+        { status: 409, statusText: 'Conflict' },
+      );
+    await fixture.whenStable();
+    const alert = Array.from(host.querySelectorAll('.layers [role="alert"]'));
+    expect(alert.map((a) => a.textContent?.trim())).toEqual([said]);
+    expect(alert[0].closest('li')?.textContent).toContain('Lime base coat');
+  });
+
+  it('lists a change order’s redo of a surface apart from the sold layers', async () => {
+    const redo = { ...view().workItems[0], id: 'w3', position: 3, doneOn: null, changeOrder: 2 };
+    const { host } = await render(view({ workItems: [...view().workItems, redo] }));
+    const groups = Array.from(host.querySelectorAll('.surface[role="group"]')).map((g) => g.getAttribute('aria-label'));
+    expect(groups).toEqual(['Dining room · Walls', 'Dining room · Walls · Added by change order #2']);
   });
 
   it('shows what the server refuses beside the field, or under the lines when no field carries it', async () => {

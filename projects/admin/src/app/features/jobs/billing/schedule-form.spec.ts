@@ -32,7 +32,18 @@ const lines: ScheduleLineView[] = [
 ];
 
 function item(id: string, layerId: string, layerName: string, layerOrder: number, position: number): WorkItemView {
-  return { id, position, roomName: 'Dining room', surfaceId: 's1', surfaceName: 'Walls', layerId, layerName, layerOrder, doneOn: null };
+  return {
+    id,
+    position,
+    roomName: 'Dining room',
+    surfaceId: 's1',
+    surfaceName: 'Walls',
+    layerId,
+    layerName,
+    layerOrder,
+    doneOn: null,
+    changeOrder: null,
+  };
 }
 
 describe('schedule form ↔ BillingScheduleUpdate', () => {

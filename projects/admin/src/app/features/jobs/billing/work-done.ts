@@ -58,6 +58,8 @@ export class WorkDone {
   protected readonly rooms = computed(() => groupWork(this.view().workItems));
   /** the work item (or "walkthrough") being sent, so its button waits */
   protected readonly sending = signal<string | null>(null);
+  /** the work item whose mark the server refused: its words go beside it (a layer whose payment is invoiced says which invoice to void) */
+  protected readonly refusedItem = signal<string | null>(null);
 
   protected markLayer(item: WorkItemView, isDone: boolean): Promise<void> {
     return this.send(item.id, (on) => ({
@@ -74,10 +76,12 @@ export class WorkDone {
 
   private async send(what: string, mark: (on: string) => ProgressMark): Promise<void> {
     this.sending.set(what);
+    this.refusedItem.set(null);
     try {
       const on = toIsoDate(this.form.controls.on.value) ?? '';
       const sent = await this.submission.send(this.form, () => this.api.markProgress(this.view().jobId, mark(on)));
       if (sent !== undefined) this.changed.emit();
+      else if (what !== 'walkthrough' && this.submission.message() !== null) this.refusedItem.set(what);
     } finally {
       this.sending.set(null);
     }

@@ -10,6 +10,7 @@ function item(
   layerName: string,
   layerOrder: number,
   doneOn: string | null = null,
+  changeOrder: number | null = null,
 ) {
   return {
     id,
@@ -21,6 +22,7 @@ function item(
     layerName,
     layerOrder,
     doneOn,
+    changeOrder,
   } satisfies WorkItemView;
 }
 
@@ -36,6 +38,19 @@ describe('groupWork (room, then surface, then the layers in order)', () => {
     expect(groups[0].surfaces[0].items.map((i) => i.layerName)).toEqual(['Base', 'Glaze']);
     expect(groups[0].surfaces[0].doneCount).toBe(1);
     expect(groups[1].surfaces).toEqual([expect.objectContaining({ surfaceId: 'dome', surfaceName: 'Dome', doneCount: 0 })]);
+  });
+
+  it('keeps a change order’s redo of a sold surface apart from the sold layers', () => {
+    const groups = groupWork([
+      item('a', 1, 'Dining room', 'walls', 'Base', 1, '2026-12-10'),
+      item('b', 2, 'Dining room', 'walls', 'Glaze', 2, '2026-12-11'),
+      item('c', 3, 'Dining room', 'walls', 'Base', 1, null, 2),
+      item('d', 4, 'Dining room', 'walls', 'Glaze', 2, null, 2),
+    ]);
+    expect(groups[0].surfaces.map((s) => [s.surfaceId, s.changeOrder, s.items.map((i) => i.id), s.doneCount])).toEqual([
+      ['walls', null, ['a', 'b'], 2],
+      ['walls', 2, ['c', 'd'], 0],
+    ]);
   });
 
   it('has nothing to show for a job without work items', () => {

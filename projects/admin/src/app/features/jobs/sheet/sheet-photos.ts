@@ -10,7 +10,7 @@ const photosUrl = (jobId: string) => `/api/jobs/${encodeURIComponent(jobId)}/pho
 /**
  * Progress photos from site: a caption and, if the crew picks one, the layer the photos show, sent
  * with each photo added (the phone's back camera first); the shared gallery shows them and the
- * upload progress.
+ * upload progress, with a delete button only on the photos the server says the reader may delete.
  */
 @Component({
   selector: 'lb-sheet-photos',
@@ -27,7 +27,12 @@ const photosUrl = (jobId: string) => `/api/jobs/${encodeURIComponent(jobId)}/pho
         <select matNativeControl [value]="workItemId()" (change)="workItemId.set($any($event.target).value)">
           <option value="">{{ 'sheet.photos.wholeJob' | translate }}</option>
           @for (item of items(); track item.id) {
-            <option [value]="item.id">{{ item.label }}</option>
+            <option [value]="item.id">
+              {{ item.label }}
+              @if (item.changeOrder !== null) {
+                · {{ 'sheet.work.addedBy' | translate: { number: item.changeOrder } }}
+              }
+            </option>
           }
         </select>
       </mat-form-field>
@@ -63,12 +68,17 @@ export class SheetPhotos {
   protected readonly url = computed(() => photosUrl(this.sheet().id));
   protected readonly caption = signal('');
   protected readonly workItemId = signal('');
-  /** the layers on surfaces a photo can show: "Dining room · Walls · Glaze coat" */
+  /**
+   * the layers on surfaces a photo can show: "Dining room · Walls · Glaze coat", and a change order's
+   * redo of a surface after it, named by its change order so it reads apart from the sold layers
+   */
   protected readonly items = computed(() =>
     this.sheet().rooms.flatMap((room) =>
       room.surfaces.flatMap((surface) =>
         surface.layers.flatMap((layer) =>
-          layer.workItemId ? [{ id: layer.workItemId, label: `${room.name} · ${surface.name} · ${layer.name}` }] : [],
+          layer.workItemId
+            ? [{ id: layer.workItemId, label: `${room.name} · ${surface.name} · ${layer.name}`, changeOrder: surface.changeOrder }]
+            : [],
         ),
       ),
     ),

@@ -25,6 +25,7 @@ const view = (doneOn: string | null): JobProgressView => ({
       layerName: 'Lime base coat',
       layerOrder: 1,
       doneOn,
+      changeOrder: null,
     },
   ],
   walkthroughOn: null,
