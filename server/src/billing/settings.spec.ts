@@ -134,4 +134,39 @@ describe('firm billing settings', () => {
     // the rule is named where the client reads the schedule (snapshot → portal page and PDF)
     expect((made.body as ProposalVersionView).snapshot.depositRule).toBe('Five percent');
   });
+
+  it('refuses a deposit limit finer than the currency (400 naming it, nothing written): no sen in yen', async () => {
+    const f = await firmWithPricedEstimate(t, 'Billing Settings Yen');
+    const {
+      id: _id,
+      slug: _slug,
+      updatedAt: _u,
+      logoUrl: _l,
+      ...profile
+    } = (await f.agent.get('/api/firm')).body as Record<string, unknown>;
+    expect(
+      (
+        await f.agent
+          .patch('/api/firm')
+          .set('x-csrf-token', f.csrf())
+          .send({ ...profile, currency: 'JPY' })
+      ).status,
+    ).toBe(200);
+    for (const depositCap of [
+      { kind: 'amount', amount: '100000.50' },
+      { kind: 'lesserOf', amount: '100000.5', percent: 10 },
+    ]) {
+      const res = await f.agent
+        .put('/api/firm/billing')
+        .set('x-csrf-token', f.csrf())
+        .send({ ...DEFAULT_BILLING_SETTINGS, depositCap, depositCapName: 'Deposit limit' });
+      expect([res.status, res.body.errors]).toEqual([400, [{ field: 'depositCap.amount', message: 'Use whole amounts in JPY.' }]]);
+    }
+    expect((await f.agent.get('/api/firm/billing')).body.isDefault).toBe(true);
+    const whole = await f.agent
+      .put('/api/firm/billing')
+      .set('x-csrf-token', f.csrf())
+      .send({ ...DEFAULT_BILLING_SETTINGS, depositCap: { kind: 'amount', amount: '100000.00' }, depositCapName: 'Deposit limit' });
+    expect(whole.status).toBe(200);
+  });
 });

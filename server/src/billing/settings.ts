@@ -10,6 +10,8 @@ import { type DepositCapRule, depositCap, minorUnitDigits } from '@layerbook/dom
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
+import { badRequest } from '../http/problem';
+import { decimalsMessage, fitsCurrency } from './money';
 
 /** The firm's stored billing settings ($1 tenant): no row until the owner saves them. */
 export const BILLING_SETTINGS_SQL = `select settings from firm_billing_settings where tenant_id = $1`;
@@ -55,8 +57,22 @@ export async function getBillingSettings(tx: TenantTx): Promise<BillingSettingsV
   return { settings, isDefault, currency: rows[0].currency };
 }
 
+/** The settings' money amounts with their field names (percents are not money). */
+export function billingAmounts(settings: BillingSettings): Array<{ field: string; label: string; amount: string }> {
+  const cap = settings.depositCap;
+  return cap.kind === 'amount' || cap.kind === 'lesserOf'
+    ? [{ field: 'depositCap.amount', label: 'The deposit limit', amount: cap.amount }]
+    : [];
+}
+
 /** PUT /api/firm/billing: the owner's whole settings; running jobs keep the terms copied when their billing started. */
 export async function saveBillingSettings(tx: TenantTx, actor: Actor, settings: BillingSettings, now: Date): Promise<BillingSettingsView> {
+  // A deposit limit finer than the currency ("100000.50" yen) would be cut on every job. The firm's row
+  // is share-locked so a currency change waits for this save and then checks what it stored.
+  const { rows } = await tx.client.query<{ currency: string }>(`select currency from firms where id = $1 for share`, [tx.tenantId]);
+  const currency = rows[0].currency;
+  const tooFine = billingAmounts(settings).filter((a) => !fitsCurrency(a.amount, currency));
+  if (tooFine.length) throw badRequest(tooFine.map((a) => ({ field: a.field, message: decimalsMessage(currency) })));
   await tx.client.query(
     `insert into firm_billing_settings (tenant_id, settings, updated_at) values ($1, $2, $3)
      on conflict (tenant_id) do update set settings = excluded.settings, updated_at = excluded.updated_at`,

@@ -1,5 +1,7 @@
 /* The firm's estimating settings: measures kept the same size across a change of units, and values the engine would refuse refused when saved. */
 import { defaultEstimatingSettings, type EstimateInputs, type EstimatingSettingsView, type FirmSettings } from '@layerbook/contracts';
+import { withTenant } from '@layerbook/db';
+import type { Pool } from 'pg';
 import { firmWithPricedEstimate } from '../proposals/proposal-fixtures';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
 
@@ -35,6 +37,46 @@ describe('estimating settings and the firm’s units', () => {
     expect(after.settings.scaffoldHeight).toBeCloseTo(3.6576, 3);
     expect(after.settings.workingReach).toBeCloseTo(1.8288, 3);
     expect(after.settings.minDeductedOpeningArea).toBeCloseTo(0.9290304, 3);
+  });
+});
+
+/** Resolves once `count` sessions of this database wait for a lock (the saves under test are queued behind the holder). */
+async function waiting(pool: Pool, count: number): Promise<void> {
+  for (let tries = 0; tries < 1000; tries++) {
+    const { rows } = await pool.query<{ n: number }>(
+      `select count(*)::int as n from pg_stat_activity where datname = current_database() and wait_event_type = 'Lock'`,
+    );
+    if ((rows[0]?.n ?? 0) >= count) return;
+    await new Promise((resolve) => setImmediate(resolve));
+  }
+  throw new Error(`${count} saves never waited for the firm's row`);
+}
+
+describe('two switches of units at once (a double-clicked Save)', () => {
+  it('converts the measures once: 12 ft is 3.6576 m, not 1.1148 m', async () => {
+    const o = await signUpFirm(t.app, 'Double Save Plaster');
+    expect(
+      (await o.agent.put('/api/firm/estimating').set('x-csrf-token', o.csrf()).send(defaultEstimatingSettings('imperial'))).status,
+    ).toBe(200);
+    // Another transaction holds the firm's row (as any change of the firm does), so both saves queue behind it.
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    let locked!: () => void;
+    const lockedYet = new Promise<void>((resolve) => (locked = resolve));
+    const holder = withTenant(t.ctx.pool, o.firmId, async (tx) => {
+      await tx.client.query(`select 1 from firms where id = $1 for update`, [o.firmId]);
+      locked();
+      await held;
+    });
+    await lockedYet;
+    const both = Promise.all([patchFirm(o, { units: 'metric' }), patchFirm(o, { units: 'metric' })]);
+    await waiting(t.ctx.pool, 2);
+    release();
+    await holder;
+    expect((await both).map((r) => r.status)).toEqual([200, 200]);
+
+    const view = (await o.agent.get('/api/firm/estimating')).body as EstimatingSettingsView;
+    expect([view.lengthUnit, view.settings.scaffoldHeight, view.settings.workingReach]).toEqual(['m', 3.6576, 1.8288]);
   });
 });
 

@@ -17,6 +17,20 @@ export async function getEstimatingSettings(tx: TenantTx): Promise<EstimatingSet
   };
 }
 
+/** The settings' money amounts with their field names (a minimum charge or rounding step left out is none). */
+export function estimatingAmounts(settings: EstimatingSettings): Array<{ field: string; label: string; amount: string }> {
+  const amounts = [
+    { field: 'labourRate', label: 'The labour rate', amount: settings.labourRate },
+    { field: 'minimumCharge', label: 'The minimum charge', amount: settings.minimumCharge },
+    {
+      field: 'rounding.increment',
+      label: 'The rounding step',
+      amount: settings.rounding.kind === 'nearest' ? settings.rounding.increment : null,
+    },
+  ];
+  return amounts.filter((a): a is { field: string; label: string; amount: string } => a.amount !== null);
+}
+
 export async function saveEstimatingSettings(
   tx: TenantTx,
   actor: Actor,
@@ -24,14 +38,10 @@ export async function saveEstimatingSettings(
   now: Date,
 ): Promise<EstimatingSettingsView> {
   // Money finer than the firm's currency would be rounded away quietly in every price (yen have no cents).
-  const { currency } = (await tx.db.select({ currency: firms.currency }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
-  const amounts: Array<[string, string | null]> = [
-    ['labourRate', settings.labourRate],
-    ['minimumCharge', settings.minimumCharge],
-    ['rounding.increment', settings.rounding.kind === 'nearest' ? settings.rounding.increment : null],
-  ];
-  const tooFine = amounts.filter(([, amount]) => amount !== null && !fitsCurrency(amount, currency));
-  if (tooFine.length) throw badRequest(tooFine.map(([field]) => ({ field, message: decimalsMessage(currency) })));
+  // The firm's row is share-locked so a currency change waits for this save and then checks what it stored.
+  const { currency } = (await tx.db.select({ currency: firms.currency }).from(firms).where(eq(firms.id, tx.tenantId)).for('share'))[0];
+  const tooFine = estimatingAmounts(settings).filter((a) => !fitsCurrency(a.amount, currency));
+  if (tooFine.length) throw badRequest(tooFine.map((a) => ({ field: a.field, message: decimalsMessage(currency) })));
   await tx.db
     .insert(firmEstimatingSettings)
     .values({ tenantId: tx.tenantId, settings })

@@ -3,8 +3,9 @@ import { convertArea, convertLength } from '@layerbook/domain';
 import { eq, firmEstimatingSettings, firms, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
-import { conflict, notFound } from '../http/problem';
+import { notFound } from '../http/problem';
 import { fileUrls } from '../files/stored-files';
+import { checkCurrencyChange } from './currency-change';
 
 export type FirmRow = typeof firms.$inferSelect;
 
@@ -61,8 +62,10 @@ async function convertEstimatingMeasures(tx: TenantTx, from: UnitSystem, to: Uni
 }
 
 export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettingsUpdate, now: Date): Promise<FirmSettings> {
-  const before = await getFirm(tx);
-  if (input.currency !== undefined && input.currency !== before.currency) await refuseCurrencyChangeOnceSold(tx, before.currency);
+  // Locked before the units and currency are compared: two saves at once (a double-clicked Save)
+  // would both see the old units and convert the estimating measures twice.
+  const before = toSettings(await firmRow(tx, true));
+  if (input.currency !== undefined && input.currency !== before.currency) await checkCurrencyChange(tx, before.currency, input.currency);
   const [updated] = await tx.db
     .update(firms)
     .set({ ...input, updatedAt: now })
@@ -82,23 +85,4 @@ export async function updateFirm(tx: TenantTx, actor: Actor, input: FirmSettings
     });
   }
   return toSettings(updated);
-}
-
-/**
- * The firm's money (its cash view, its reports) is kept in one currency: once a proposal has gone to a
- * client, a job was accepted, an invoice issued or a payment recorded, the currency stays (409 naming
- * it) — each of those carries the currency on into its job's invoices and payments, and the cash view
- * adds them up in the firm's. Before that — a firm setting up — it may change.
- */
-async function refuseCurrencyChangeOnceSold(tx: TenantTx, currency: string): Promise<void> {
-  const { rowCount } = await tx.client.query(
-    `select 1 where exists (select 1 from proposal_versions where tenant_id = $1 and sent_at is not null)
-                 or exists (select 1 from jobs where tenant_id = $1)
-                 or exists (select 1 from invoices where tenant_id = $1 and status <> 'draft')
-                 or exists (select 1 from payments where tenant_id = $1)`,
-    [tx.tenantId],
-  );
-  if (!rowCount) return;
-  const message = `Proposals, jobs and invoices are already in ${currency}: the firm's currency can no longer change.`;
-  throw conflict(message, [{ field: 'currency', message }]);
 }

@@ -12,6 +12,7 @@ import { recordAudit } from '../audit/record';
 import { type Actor, canSeeMoney } from '../http/actor';
 import { conflict, notFound } from '../http/problem';
 import { parse } from '../http/validate';
+import { checkContainerPrices, withLimeFlag } from './product-rules';
 import { layersOf, type ProductRow, toProductView } from './views';
 
 /** A small firm's library holds tens of products, and the layer editor needs all of them to pick from: one capped list, no pages. */
@@ -31,13 +32,12 @@ export async function listProducts(tx: TenantTx, actor: Actor, archived: Archive
   return { items: rows.map((r) => toProductView(r, canSeeMoney(actor))) };
 }
 
-async function loadProduct(tx: TenantTx, id: string): Promise<ProductRow> {
-  const row = (
-    await tx.db
-      .select()
-      .from(products)
-      .where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id)))
-  )[0];
+async function loadProduct(tx: TenantTx, id: string, lock = false): Promise<ProductRow> {
+  const query = tx.db
+    .select()
+    .from(products)
+    .where(and(eq(products.tenantId, tx.tenantId), eq(products.id, id)));
+  const row = (await (lock ? query.for('update') : query))[0];
   if (!row) throw notFound('product');
   return row;
 }
@@ -46,7 +46,9 @@ export async function getProduct(tx: TenantTx, actor: Actor, id: string): Promis
   return toProductView(await loadProduct(tx, id), canSeeMoney(actor));
 }
 
-export async function createProduct(tx: TenantTx, actor: Actor, input: ProductInput): Promise<ProductView> {
+export async function createProduct(tx: TenantTx, actor: Actor, body: ProductInput): Promise<ProductView> {
+  const input = withLimeFlag(body);
+  await checkContainerPrices(tx, input.containers);
   const [row] = await tx.db
     .insert(products)
     .values({ ...input, tenantId: tx.tenantId })
@@ -62,10 +64,12 @@ export async function createProduct(tx: TenantTx, actor: Actor, input: ProductIn
 }
 
 export async function updateProduct(tx: TenantTx, actor: Actor, id: string, patch: ProductUpdate, now: Date): Promise<ProductView> {
-  const current = await loadProduct(tx, id);
+  // Locked before the finish systems using it are read: a system being saved with this product
+  // share-locks it (checkLayers), so a unit change waits for that save and then finds the system.
+  const current = await loadProduct(tx, id, true);
   // The partial names only what changes; the merged product must still pass every whole-product rule
   // (a new unit with the old containers, say), reported against the same field names.
-  const merged = parse(productInput, {
+  const parsed = parse(productInput, {
     name: current.name,
     kind: current.kind,
     unit: current.unit,
@@ -75,6 +79,8 @@ export async function updateProduct(tx: TenantTx, actor: Actor, id: string, patc
     notes: current.notes,
     ...patch,
   });
+  const merged = withLimeFlag(parsed);
+  await checkContainerPrices(tx, merged.containers);
   if (merged.unit !== current.unit) await refuseUnitChangeInUse(tx, current, merged.unit);
   const [row] = await tx.db
     .update(products)
@@ -126,8 +132,7 @@ export const listNames = (names: readonly string[]) => names.map((n) => `"${n}"`
 export async function setProductArchived(tx: TenantTx, actor: Actor, id: string, isArchived: boolean, now: Date): Promise<ProductView> {
   // Locked: a finish system being saved with this product share-locks it (checkLayers), so the two go
   // one after the other and the second sees the first (never an active system naming an archived product).
-  await tx.client.query(`select 1 from products where tenant_id = $1 and id = $2 for update`, [tx.tenantId, id]);
-  const current = await loadProduct(tx, id);
+  const current = await loadProduct(tx, id, true);
   if (isArchived && !current.archivedAt) {
     const names = await activeSystemsUsing(tx, id);
     if (names.length) {

@@ -136,6 +136,7 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
     [tx.tenantId, input.estimateId],
   );
   if (accepted.rowCount) throw conflict(ACCEPTED_ESTIMATE_IS_READ_ONLY);
+  await refuseLibraryChangedSincePriced(tx, input.estimateId);
   const terms = mergeTerms(DEFAULT_PROPOSAL_TERMS, input.terms);
   const { snapshot, hash } = snapshotFor(sources, {
     issuedOn: today,
@@ -168,6 +169,40 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
     data: { estimateId: input.estimateId, version: made.version, snapshotHash: hash },
   });
   return getVersion(tx, made.id);
+}
+
+/**
+ * The rows the estimate's saved result names, share-locked (products before the finish systems naming
+ * them, the order every library writer takes) so none changes between this check and keepLibrary,
+ * each with whether it was edited since the estimate was priced. Only edits count: the database
+ * stamps a new row with its own clock, the server stamps edits and saves with its own, and a row the
+ * saved result names existed when it was saved.
+ */
+const NAMED_BY_RESULT = (table: 'products' | 'finish_systems', path: string) =>
+  `select r.name, r.updated_at > e.computed_at and r.updated_at <> r.created_at as is_changed
+     from ${table} r, estimates e
+    where r.tenant_id = $1 and e.tenant_id = $1 and e.id = $2
+      and r.id::text in (select jsonb_path_query(e.result, '${path}') #>> '{}')
+    order by r.name, r.id
+      for share of r`;
+const PRODUCTS_NAMED = NAMED_BY_RESULT('products', '$.variants[*].result.products[*].productId');
+const SYSTEMS_NAMED = NAMED_BY_RESULT('finish_systems', '$.variants[*].result.surfaces[*].finishSystemId');
+
+/**
+ * A version keeps the finish systems and products as they are when it is made (keepLibrary), beside
+ * the quantities, price and day plan the estimate's last save worked out from them. One edited since
+ * would reach the crew's sheet with waits and mixes the price never counted, so the version waits
+ * (409 `estimateId`, as for an estimate saved in the other unit) until the estimate is saved again.
+ */
+async function refuseLibraryChangedSincePriced(tx: TenantTx, estimateId: string): Promise<void> {
+  const products = await tx.client.query<{ name: string; is_changed: boolean }>(PRODUCTS_NAMED, [tx.tenantId, estimateId]);
+  const systems = await tx.client.query<{ name: string; is_changed: boolean }>(SYSTEMS_NAMED, [tx.tenantId, estimateId]);
+  const changed = [...systems.rows, ...products.rows].filter((r) => r.is_changed).map((r) => `"${r.name}"`);
+  if (!changed.length) return;
+  throw conflict(
+    `The finish systems changed since this estimate was priced (${changed.join(', ')} edited since). Open the estimate and save it again first, so the proposal keeps the layers its price was worked out from.`,
+    [{ field: 'estimateId', message: 'The finish systems changed since this estimate was priced; save the estimate again.' }],
+  );
 }
 
 /** Keeps with the version the finish systems and products its options use, as they are now (no prices). */
@@ -212,6 +247,7 @@ export async function updateDraft(
   if (current.status !== 'draft')
     throw conflict(`Version ${current.version} is ${current.status.replace('_', ' ')} and cannot change. Make a new version instead.`);
   const sources = await loadProposalSources(tx, current.estimateId);
+  await refuseLibraryChangedSincePriced(tx, current.estimateId);
   const today = localDate(sources.firm.timeZone, now);
   const expiresOn = change.expiresOn ?? current.expiresOn;
   if (change.expiresOn) checkExpiry(expiresOn, today);

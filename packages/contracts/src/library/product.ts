@@ -38,6 +38,7 @@ export const productHazards = requestSchema<ProductHazardsInput>()(
       .min(L.boilingPointMinC, { error: boilingPointRange })
       .max(L.boilingPointMaxC, { error: boilingPointRange })
       .optional(),
+    /** raises the alkali and eye-protection caution; the server sets it for every product of kind lime */
     isLime: z.boolean({ error: 'Say whether the product contains lime.' }).optional(),
     containsSilica: z.boolean({ error: 'Say whether the SDS lists crystalline silica.' }).optional(),
     containsDryingOil: z.boolean({ error: 'Say whether the product contains a drying oil (linseed, tung, oil glaze).' }).optional(),

@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, output, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -19,6 +19,7 @@ import { Language } from '../../../../../shared/i18n/language';
 import { requiredText } from '../../shared/forms/text-validators';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LibraryApi } from './library-api';
+import { syncLimeFlag } from './lime-flag';
 import { PRODUCT_KIND_CHOICES, UNIT_GROUPS, flammableNote } from './library-words';
 
 const TOO_LONG = { maxlength: 'library.common.tooLong' };
@@ -101,6 +102,13 @@ export class ProductForm implements OnInit {
   /** Shown live beside the flash point so the rule is visible, not hidden in the server. */
   private readonly boilingPoint = toSignal(this.form.controls.hazards.controls.boilingPointC.valueChanges, { initialValue: null });
   protected readonly flammableNote = computed(() => flammableNote(this.flashPoint(), this.boilingPoint(), this.language.locale()));
+  private readonly kind = toSignal(this.form.controls.kind.valueChanges, { initialValue: this.form.controls.kind.value });
+  protected readonly isLimeKind = computed(() => this.kind() === 'lime');
+
+  constructor() {
+    const { kind, hazards } = this.form.controls;
+    kind.valueChanges.pipe(takeUntilDestroyed()).subscribe(() => syncLimeFlag(kind, hazards.controls.isLime));
+  }
 
   ngOnInit(): void {
     const p = this.product();
@@ -121,6 +129,8 @@ export class ProductForm implements OnInit {
       sdsUrl: p.sdsUrl,
       notes: p.notes,
     });
+    // the hazards are reset after the kind: a lime product saved before the server set its flag shows it ticked
+    syncLimeFlag(this.form.controls.kind, this.form.controls.hazards.controls.isLime);
   }
 
   protected addContainer(): void {
