@@ -1,6 +1,6 @@
 import { withTenant } from '@layerbook/db';
-import type { Pool } from 'pg';
 import type { Response } from 'supertest';
+import { sessionsWaiting } from '../testing/lock-waits';
 import { signUpFirm, startTestServer, TestServer } from '../testing/harness';
 
 let t: TestServer;
@@ -15,18 +15,6 @@ async function client(o: Owner, name: string): Promise<string> {
   const res = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name });
   expect(res.status).toBe(201);
   return res.body.id as string;
-}
-
-/** Resolves once some session of this database waits for a lock (the request under test is queued behind the merge). */
-async function someoneWaits(pool: Pool): Promise<void> {
-  for (let tries = 0; tries < 1000; tries++) {
-    const { rows } = await pool.query<{ n: number }>(
-      `select count(*)::int as n from pg_stat_activity where datname = current_database() and wait_event_type = 'Lock'`,
-    );
-    if ((rows[0]?.n ?? 0) > 0) return;
-    await new Promise((resolve) => setImmediate(resolve));
-  }
-  throw new Error('the request never waited for the merge');
 }
 
 /**
@@ -52,7 +40,7 @@ async function duringMerge(o: Owner, write: (dup: string) => Promise<Response>):
   });
   await isLocked;
   const writing = write(dup);
-  await someoneWaits(t.ctx.pool);
+  await sessionsWaiting(t.ctx.pool, 1, 'the request');
   release();
   await merging;
   return writing;

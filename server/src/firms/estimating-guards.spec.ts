@@ -1,9 +1,9 @@
 /* The firm's estimating settings: measures kept the same size across a change of units, and values the engine would refuse refused when saved. */
 import { defaultEstimatingSettings, type EstimateInputs, type EstimatingSettingsView, type FirmSettings } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
-import type { Pool } from 'pg';
 import { firmWithPricedEstimate } from '../proposals/proposal-fixtures';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
+import { sessionsWaiting } from '../testing/lock-waits';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -40,18 +40,6 @@ describe('estimating settings and the firm’s units', () => {
   });
 });
 
-/** Resolves once `count` sessions of this database wait for a lock (the saves under test are queued behind the holder). */
-async function waiting(pool: Pool, count: number): Promise<void> {
-  for (let tries = 0; tries < 1000; tries++) {
-    const { rows } = await pool.query<{ n: number }>(
-      `select count(*)::int as n from pg_stat_activity where datname = current_database() and wait_event_type = 'Lock'`,
-    );
-    if ((rows[0]?.n ?? 0) >= count) return;
-    await new Promise((resolve) => setImmediate(resolve));
-  }
-  throw new Error(`${count} saves never waited for the firm's row`);
-}
-
 describe('two switches of units at once (a double-clicked Save)', () => {
   it('converts the measures once: 12 ft is 3.6576 m, not 1.1148 m', async () => {
     const o = await signUpFirm(t.app, 'Double Save Plaster');
@@ -70,7 +58,7 @@ describe('two switches of units at once (a double-clicked Save)', () => {
     });
     await lockedYet;
     const both = Promise.all([patchFirm(o, { units: 'metric' }), patchFirm(o, { units: 'metric' })]);
-    await waiting(t.ctx.pool, 2);
+    await sessionsWaiting(t.ctx.pool, 2, 'the two saves');
     release();
     await holder;
     expect((await both).map((r) => r.status)).toEqual([200, 200]);

@@ -1,6 +1,6 @@
 import type { FinishSystemView, ProductView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
-import type { Pool } from 'pg';
+import { sessionsWaiting } from '../testing/lock-waits';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
 import { addProduct, PRIMER, primerLayer } from './library-fixtures';
 import { updateProduct } from './products';
@@ -13,18 +13,6 @@ beforeAll(async () => {
   t = await startTestServer();
 });
 afterAll(() => t.stop());
-
-/** Resolves once some session of this database waits for a lock (the change under test is queued behind the save). */
-async function someoneWaits(pool: Pool): Promise<void> {
-  for (let tries = 0; tries < 1000; tries++) {
-    const { rows } = await pool.query<{ n: number }>(
-      `select count(*)::int as n from pg_stat_activity where datname = current_database() and wait_event_type = 'Lock'`,
-    );
-    if ((rows[0]?.n ?? 0) > 0) return;
-    await new Promise((resolve) => setImmediate(resolve));
-  }
-  throw new Error('the unit change never waited for the system save');
-}
 
 describe('switching a product between volume and weight while a finish system is saved with it', () => {
   it('waits for the save, then refuses (409), so no active system measures a kg product by the gallon', async () => {
@@ -50,7 +38,7 @@ describe('switching a product between volume and weight while a finish system is
       () => 'switched',
       (error: unknown) => (error as { status?: number }).status,
     );
-    await someoneWaits(t.ctx.pool);
+    await sessionsWaiting(t.ctx.pool, 1, 'the unit change');
     release();
     await saving;
     expect(await switching).toBe(409);
