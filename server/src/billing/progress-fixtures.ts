@@ -23,11 +23,11 @@ export async function acceptedJob(t: TestServer, firmName: string, opts: { timeZ
       [tx.tenantId, site[0].site_id],
     );
     const walls = await tx.client.query<{ id: string }>(
-      `insert into surfaces (tenant_id, room_id, name, shape, length_unit) values ($1, $2, 'Hall walls', $3, 'ft') returning id`,
+      `insert into surfaces (tenant_id, room_id, name, shape, length_unit, position) values ($1, $2, 'Hall walls', $3, 'ft', 0) returning id`,
       [tx.tenantId, room.rows[0].id, { kind: 'walls', perimeter: 40, height: 8, openings: [] }],
     );
     const ceiling = await tx.client.query<{ id: string }>(
-      `insert into surfaces (tenant_id, room_id, name, shape, length_unit) values ($1, $2, 'Hall ceiling', $3, 'ft') returning id`,
+      `insert into surfaces (tenant_id, room_id, name, shape, length_unit, position) values ($1, $2, 'Hall ceiling', $3, 'ft', 1) returning id`,
       [tx.tenantId, room.rows[0].id, { kind: 'ceilingRect', length: 12, width: 8 }],
     );
     return { wallsId: walls.rows[0].id, ceilingId: ceiling.rows[0].id };

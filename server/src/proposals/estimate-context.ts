@@ -23,7 +23,7 @@ export async function loadEstimateContext(tx: TenantTx, siteId: string): Promise
   const firmCountry = (await tx.client.query<{ country: string }>(`select country from firms where id = $1`, [tx.tenantId])).rows[0]
     ?.country;
   const { rows: roomRows } = await tx.client.query<{ id: string; name: string; is_exterior: boolean }>(
-    `select id, name, is_exterior from rooms where tenant_id = $1 and site_id = $2 order by position, created_at`,
+    `select id, name, is_exterior from rooms where tenant_id = $1 and site_id = $2 order by position, created_at, id`,
     [tx.tenantId, siteId],
   );
   const { rows: surfaceRows } = await tx.client.query<{
@@ -36,7 +36,7 @@ export async function loadEstimateContext(tx: TenantTx, siteId: string): Promise
   }>(
     `select s.id, s.room_id, s.name, s.shape, s.length_unit, s.disturbed_painted_area::text as disturbed_painted_area
        from surfaces s join rooms r on r.id = s.room_id
-      where s.tenant_id = $1 and r.site_id = $2 order by s.position, s.created_at`,
+      where s.tenant_id = $1 and r.site_id = $2 order by s.position, s.created_at, s.id`,
     [tx.tenantId, siteId],
   );
   const rooms: EngineRoom[] = roomRows.map((r) => ({

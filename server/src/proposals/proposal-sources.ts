@@ -160,7 +160,7 @@ export async function loadProposalSources(tx: TenantTx, estimateId: string): Pro
   // Archived finish systems and rooms still name what was priced.
   const rooms = (
     await tx.client.query<NamedRow>(
-      `select id, name from rooms where tenant_id = $1 and id = any($2::uuid[]) order by position, created_at`,
+      `select id, name from rooms where tenant_id = $1 and id = any($2::uuid[]) order by position, created_at, id`,
       [tx.tenantId, roomIds],
     )
   ).rows;
