@@ -37,6 +37,8 @@ export interface ClientVersionRow extends Omit<VersionRow, 'created_at'> {
   client_id: string;
   site_id: string;
   inquiry_id: string | null;
+  /** the firm's time zone: the client reads the signing time in it, as on the signed copy */
+  time_zone: string;
 }
 
 /** One readable version for this client, optionally locked for a decision; 404 otherwise. */
@@ -46,7 +48,8 @@ export async function loadClientVersion(tx: TenantTx, client: ClientPrincipal, i
   const { rows } = await tx.client.query<ClientVersionRow>(
     `select v.id, v.estimate_id, v.version, v.status, v.snapshot, v.snapshot_hash, v.expires_on::text as expires_on, v.sent_at, v.decided_at,
             v.accepted_variant_id, v.accepted_add_on_ids, v.signed_name, v.client_comment, e.client_id, e.site_id, e.inquiry_id,
-            (select max(o.version) from proposal_versions o where o.tenant_id = v.tenant_id and o.estimate_id = v.estimate_id and o.sent_at is not null)::int as newest_sent
+            (select max(o.version) from proposal_versions o where o.tenant_id = v.tenant_id and o.estimate_id = v.estimate_id and o.sent_at is not null)::int as newest_sent,
+            (select f.time_zone from firms f where f.id = v.tenant_id) as time_zone
        from proposal_versions v join estimates e on e.tenant_id = v.tenant_id and e.id = v.estimate_id
       where v.tenant_id = $1 and v.id = $2 and v.sent_at is not null and e.client_id = $3
       ${lock ? 'for update of v, e' : ''}`,
@@ -68,6 +71,7 @@ export function toPortalProposal(row: ClientVersionRow, today: string, reader?: 
     isLatest: isLatest(row),
     snapshot: reader ? snapshotForReader(reader, row.snapshot) : row.snapshot,
     decidedAt: row.decided_at?.toISOString() ?? null,
+    timeZone: row.time_zone,
     acceptedVariantId: row.accepted_variant_id,
     acceptedAddOnIds: row.accepted_add_on_ids,
     signedName: row.signed_name,

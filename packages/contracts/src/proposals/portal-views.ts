@@ -43,6 +43,8 @@ export interface PortalProposal {
   readonly isLatest: boolean;
   readonly snapshot: ProposalSnapshot;
   readonly decidedAt: string | null;
+  /** the firm's time zone (IANA): the time it was decided is read in it, on the page as on the signed copy */
+  readonly timeZone: string;
   readonly acceptedVariantId: string | null;
   /** the add-ons the client took with the option (empty: none, or not accepted) */
   readonly acceptedAddOnIds: readonly string[];

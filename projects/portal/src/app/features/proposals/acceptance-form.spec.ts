@@ -63,6 +63,7 @@ const proposal: PortalProposal = {
     addOns: [{ id: 'border', label: 'Stencilled border', price: '925.93', tax: '74.07', total: '1000.00' }],
   },
   decidedAt: null,
+  timeZone: 'America/New_York',
   acceptedVariantId: null,
   acceptedAddOnIds: [],
   signedName: null,

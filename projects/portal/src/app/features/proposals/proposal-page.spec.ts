@@ -22,6 +22,7 @@ const proposal = (isExpired: boolean): PortalProposal => ({
   isLatest: true,
   snapshot: { ...SNAPSHOT, title: 'Stair hall, lime plaster', expiresOn: '2026-11-30' },
   decidedAt: null,
+  timeZone: 'America/New_York',
   acceptedVariantId: null,
   acceptedAddOnIds: [],
   signedName: null,
@@ -57,5 +58,20 @@ describe('a proposal past its expiry day', () => {
   it('before that day, the acceptance form is there', async () => {
     const html = await render(proposal(false));
     expect(html.querySelector('lb-acceptance-form')).not.toBeNull();
+  });
+});
+
+describe('an accepted proposal', () => {
+  it('says when it was signed in the firm’s own time, as the signed copy does, wherever the page is drawn', async () => {
+    const html = await render({
+      ...proposal(false),
+      status: 'accepted',
+      decidedAt: '2026-12-01T15:00:00.000Z',
+      signedName: 'Hattie Brambleton',
+      acceptedVariantId: 'A',
+    });
+    // 15:00 UTC is 10:00 in New York (EST, UTC−5 in December).
+    expect(html.textContent).toContain('Accepted by Hattie Brambleton on December 1, 2026');
+    expect(html.textContent).toMatch(/10:00\sAM/);
   });
 });
