@@ -6,7 +6,7 @@ import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
 import { jobHistory } from './history';
-import { loadProgress, recordProgress } from './progress';
+import { loadProgress, recordProgress, wordsOf } from './progress';
 
 const idParam = z.strictObject({ id: uuid('job id') });
 
@@ -25,7 +25,7 @@ export function progressRoutes(ctx: AppContext): Router {
   router.post('/:id/progress', async (req, res) => {
     const view = await withStaff(ctx, req, 'crew', (tx, staff) => {
       const { id } = parse(idParam, req.params);
-      return recordProgress(tx, ctx.queue, staffActor(staff), id, parse(progressMark, req.body), ctx.now());
+      return recordProgress(tx, ctx.queue, staffActor(staff), id, parse(progressMark, req.body), ctx.now(), wordsOf(staff));
     });
     res.status(201).json(view satisfies JobProgressView);
   });

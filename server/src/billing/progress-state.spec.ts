@@ -37,11 +37,32 @@ describe('progress and the job’s state', () => {
       await mark(job, job, { kind: 'layerReopened', workItemId: view.workItems[0].id, on: '2026-12-01' }),
     ];
     expect(refusals.map((r) => [r.status, r.body.detail])).toEqual(
-      refusals.map(() => [409, 'This job is marked finished: reopen the job before changing its progress.']),
+      refusals.map(() => [409, 'This job is marked finished: its progress changes only once the office reopens it.']),
     );
     expect(await historyCount(job)).toBe(before);
     const walk = await mark(job, job, { kind: 'walkthrough', on: '2026-12-01' });
     expect([walk.status, (walk.body as JobProgressView).walkthroughOn]).toEqual([201, '2026-12-01']);
+  });
+
+  it('tells a crew member who reads Spanish why in Spanish, dates for the firm’s country', async () => {
+    const job = await acceptedJob(t, 'Spanish Refusal Studio');
+    const crew = await joinAs(t, job, 'crew');
+    const crewId = (await crew.agent.get('/api/auth/session')).body.user.id as string;
+    await withTenant(t.ctx.pool, job.firmId, (tx) =>
+      tx.client.query(`update memberships set language = 'es' where tenant_id = $1 and user_id = $2`, [tx.tenantId, crewId]),
+    );
+    const view = await progress(job);
+    const late = await mark(job, crew, { kind: 'layerDone', workItemId: view.workItems[0].id, on: '2026-12-09' });
+    expect([late.status, late.body.errors[0]]).toEqual([
+      400,
+      { field: 'on', message: 'El día no puede ser posterior al 2 de diciembre de 2026.' },
+    ]);
+    await job.agent.post(`/api/jobs/${job.job.id}/status`).set('x-csrf-token', job.csrf()).send({ status: 'complete' });
+    const finished = await mark(job, crew, { kind: 'layerDone', workItemId: view.workItems[0].id, on: '2026-12-01' });
+    expect([finished.status, finished.body.detail]).toEqual([
+      409,
+      'Este trabajo está marcado como terminado: su avance solo cambia cuando la oficina lo reabre.',
+    ]);
   });
 
   it('the walkthrough is the office’s: crew get 403 and nothing is written', async () => {

@@ -1,4 +1,4 @@
-import type { JobProgressView, ProgressMark } from '@layerbook/contracts';
+import type { JobProgressView, Language, ProgressMark } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { addDays, DomainInputError, minorUnitDigits, valueLineWork, yearBefore } from '@layerbook/domain';
 import Decimal from 'decimal.js';
@@ -11,6 +11,7 @@ import { decimalsMessage, fitsCurrency } from './money';
 import { enqueueBillingCheck } from './triggers/enqueue';
 import { countsTowardLineSql, ensureJobWork, loadWorkItems } from './work-items';
 import { longDate } from '../i18n/long-date';
+import { localeOf, translator, type Translate } from '../i18n/catalog';
 
 interface JobRow {
   id: string;
@@ -147,7 +148,7 @@ function checkValueLine(
  * the office. A change order's layer approved after that invoice was made is not what it billed
  * (countsTowardLine). A draft is no bar: the billing check withdraws the queue's own.
  */
-async function refuseReopeningBilled(tx: TenantTx, workItemId: string, isCrew: boolean): Promise<void> {
+async function refuseReopeningBilled(tx: TenantTx, workItemId: string, isCrew: boolean, say: Words): Promise<void> {
   const { rows } = await tx.client.query<{ number_text: string }>(
     `select i.number_text
        from job_work_items w
@@ -160,9 +161,7 @@ async function refuseReopeningBilled(tx: TenantTx, workItemId: string, isCrew: b
   );
   const invoice = rows[0]?.number_text;
   if (!invoice) return;
-  const message = isCrew
-    ? 'The payment for this layer is already billed, so it stays done: ask the office if the work needs doing again.'
-    : `Invoice ${invoice} bills the payment due when this layer is done, so it stays done. If the work is not done, void ${invoice} first, then reopen the layer.`;
+  const message = isCrew ? say.t('progress.billedForCrew') : say.t('progress.billed', { invoice });
   throw conflict(message, [{ field: 'workItemId', message }]);
 }
 
@@ -187,6 +186,19 @@ async function isOlderThanRecorded(
   return (rowCount ?? 0) > 0;
 }
 
+/** The reader's words for what a crew member may be refused (their language, dates for the firm's country). */
+export interface Words {
+  readonly t: Translate;
+  readonly locale: string;
+}
+const ENGLISH: Words = { t: translator('en'), locale: 'en-US' };
+
+/** The words of the person marking: a crew member reading Spanish is refused in Spanish. */
+export const wordsOf = (staff: { readonly language: Language; readonly country: string }): Words => ({
+  t: translator(staff.language),
+  locale: localeOf(staff.language, staff.country),
+});
+
 /**
  * Records one mark from the work and applies it: a layer done or reopened on a surface, a
  * percent complete or materials stored on a value line, the walkthrough held. The history row,
@@ -200,6 +212,7 @@ export async function recordProgress(
   jobId: string,
   mark: ProgressMark,
   now: Date,
+  say: Words = ENGLISH,
 ): Promise<JobProgressView> {
   const job = await loadJob(tx, jobId, now, true);
   const isCrew = actor.kind === 'staff' && actor.role === 'crew';
@@ -222,19 +235,16 @@ export async function recordProgress(
     }
     if (seen[0]) return progressView(tx, jobId);
   }
-  if (job.status === 'cancelled') throw conflict('This job is cancelled: its progress can no longer change.');
+  if (job.status === 'cancelled') throw conflict(say.t('progress.cancelled'));
   // Finished means the work is done: layers and percents stay as they are until the office reopens the job.
   // The walkthrough comes after finishing, and stored materials may still need taking down to nothing.
   if (job.status === 'complete' && (mark.kind === 'layerDone' || mark.kind === 'layerReopened' || mark.kind === 'valuePercent')) {
-    throw conflict('This job is marked finished: reopen the job before changing its progress.');
+    throw conflict(say.t('progress.finished'));
   }
   const latest = addDays(job.today, 1);
   const earliest = yearBefore(job.accepted_on);
-  if (mark.on > latest) throw badRequest([{ field: 'on', message: `The day cannot be later than ${longDate(latest)}.` }]);
-  if (mark.on < earliest)
-    throw badRequest([
-      { field: 'on', message: `The day cannot be earlier than ${longDate(earliest)}, a year before the job was accepted.` },
-    ]);
+  if (mark.on > latest) throw badRequest([{ field: 'on', message: say.t('progress.tooLate', { day: longDate(latest, say.locale) }) }]);
+  if (mark.on < earliest) throw badRequest([{ field: 'on', message: say.t('progress.tooEarly', { day: longDate(earliest, say.locale) }) }]);
   await ensureJobWork(tx, jobId);
 
   const line = mark.kind === 'valuePercent' || mark.kind === 'storedMaterials' ? await valueLine(tx, jobId, mark.valueLineId) : null;
@@ -242,7 +252,7 @@ export async function recordProgress(
     workItemId: mark.kind === 'layerDone' || mark.kind === 'layerReopened' ? (await workItem(tx, jobId, mark.workItemId)).id : null,
     valueLineId: line?.id ?? null,
   };
-  if (mark.kind === 'layerReopened' && target.workItemId) await refuseReopeningBilled(tx, target.workItemId, isCrew);
+  if (mark.kind === 'layerReopened' && target.workItemId) await refuseReopeningBilled(tx, target.workItemId, isCrew, say);
   const value = mark.kind === 'valuePercent' ? String(mark.percentComplete) : mark.kind === 'storedMaterials' ? mark.amount : null;
 
   if (line) {
