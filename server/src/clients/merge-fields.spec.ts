@@ -1,5 +1,6 @@
 import { withTenant } from '@layerbook/db';
 import { fieldsFromDuplicate, type MergedFields } from './merge-fields';
+import { addClient } from './client-fixtures';
 import { signUpFirm, startTestServer, TestServer, uniqueEmail } from '../testing/harness';
 
 let t: TestServer;
@@ -7,17 +8,6 @@ beforeAll(async () => {
   t = await startTestServer();
 });
 afterAll(() => t.stop());
-
-type Owner = Awaited<ReturnType<typeof signUpFirm>>;
-
-async function client(o: Owner, body: Record<string, unknown>): Promise<string> {
-  const res = await o.agent
-    .post('/api/clients')
-    .set('x-csrf-token', o.csrf())
-    .send({ kind: 'homeowner', ...body });
-  expect(res.status).toBe(201);
-  return res.body.id as string;
-}
 
 const blank: MergedFields = { name: 'Rosalind Quarrie', email: '', phone: '', notes: '', language: null };
 
@@ -64,9 +54,9 @@ describe('merging keeps what only the duplicate knew', () => {
     const o = await signUpFirm(t.app, 'Merge Keep Plaster');
     const email = uniqueEmail('rosalind');
     // The office filed her twice: once from a phone call (name only), once properly, with the gate code and her e-mail.
-    const kept = await client(o, { name: 'Rosalind Quarrie', notes: 'Called about the hallway.' });
+    const kept = await addClient(o, { name: 'Rosalind Quarrie', notes: 'Called about the hallway.' });
     const notes = 'Gate code 4471. Dog in the yard; lime dust bothers her asthma — mask up and seal the doorway.';
-    const dup = await client(o, { name: 'Rosalind Quarrie', email, phone: '555-010-0142', notes, language: 'es' });
+    const dup = await addClient(o, { name: 'Rosalind Quarrie', email, phone: '555-010-0142', notes, language: 'es' });
     const merged = await o.agent.post(`/api/clients/${dup}/merge`).set('x-csrf-token', o.csrf()).send({ intoClientId: kept });
     expect(merged.status).toBe(200);
     expect(merged.body).toMatchObject({
@@ -85,8 +75,8 @@ describe('merging keeps what only the duplicate knew', () => {
 
   it('refuses a merge whose notes together would be too long to save, and moves nothing', async () => {
     const o = await signUpFirm(t.app, 'Merge Long Notes Plaster');
-    const kept = await client(o, { name: 'Ada Ward', notes: 'a'.repeat(4000) });
-    const dup = await client(o, { name: 'Ada Ward', notes: 'b'.repeat(1000) });
+    const kept = await addClient(o, { name: 'Ada Ward', notes: 'a'.repeat(4000) });
+    const dup = await addClient(o, { name: 'Ada Ward', notes: 'b'.repeat(1000) });
     const merged = await o.agent.post(`/api/clients/${dup}/merge`).set('x-csrf-token', o.csrf()).send({ intoClientId: kept });
     expect([merged.status, merged.body.errors?.[0]?.field]).toEqual([400, 'intoClientId']);
     expect((await o.agent.get(`/api/clients/${dup}`)).status).toBe(200);

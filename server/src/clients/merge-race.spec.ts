@@ -1,6 +1,7 @@
 import { withTenant } from '@layerbook/db';
 import type { Response } from 'supertest';
 import { sessionsWaiting } from '../testing/lock-waits';
+import { addClient } from './client-fixtures';
 import { signUpFirm, startTestServer, TestServer } from '../testing/harness';
 
 let t: TestServer;
@@ -11,19 +12,13 @@ afterAll(() => t.stop());
 
 type Owner = Awaited<ReturnType<typeof signUpFirm>>;
 
-async function client(o: Owner, name: string): Promise<string> {
-  const res = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name });
-  expect(res.status).toBe(201);
-  return res.body.id as string;
-}
-
 /**
  * Runs `write` against the duplicate while a merge of it into the kept client is under way (what
  * mergeClient does, held open between its lock and its COMMIT), and answers what `write` got.
  */
 async function duringMerge(o: Owner, write: (dup: string) => Promise<Response>): Promise<Response> {
-  const kept = await client(o, 'Wendeline Rook');
-  const dup = await client(o, 'Wendeline Rook');
+  const kept = await addClient(o, { name: 'Wendeline Rook' });
+  const dup = await addClient(o, { name: 'Wendeline Rook' });
   let release!: () => void;
   const gate = new Promise<void>((resolve) => (release = resolve));
   let locked!: () => void;

@@ -2,6 +2,7 @@ import { withTenant } from '@layerbook/db';
 import type { ClientSummary, JobBillingView } from '@layerbook/contracts';
 import { billingJob } from '../billing/billing-fixtures';
 import { CLIENT_TABLES } from './merge';
+import { addClient } from './client-fixtures';
 import { signUpFirm, startTestServer, TestServer, uniqueEmail } from '../testing/harness';
 
 let t: TestServer;
@@ -11,15 +12,6 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 type Owner = Awaited<ReturnType<typeof signUpFirm>>;
-
-async function client(o: Owner, body: Record<string, unknown>): Promise<string> {
-  const res = await o.agent
-    .post('/api/clients')
-    .set('x-csrf-token', o.csrf())
-    .send({ kind: 'homeowner', ...body });
-  expect(res.status).toBe(201);
-  return res.body.id as string;
-}
 
 async function inquiry(o: Owner, body: Record<string, unknown>): Promise<string> {
   const res = await o.agent
@@ -34,9 +26,9 @@ describe('duplicate clients', () => {
   it('offers the clients with the same e-mail, phone or name, and links the inquiry to the one chosen', async () => {
     const o = await signUpFirm(t.app, 'Match Plaster');
     const email = uniqueEmail('hattie');
-    const same = await client(o, { name: 'Hattie Brambleton', email, phone: '(555) 010-0199' });
-    const samePhone = await client(o, { name: 'H. B. Holdings', phone: '555.010.0199' });
-    await client(o, { name: 'Someone Else', email: uniqueEmail('else'), phone: '555-010-0000' });
+    const same = await addClient(o, { name: 'Hattie Brambleton', email, phone: '(555) 010-0199' });
+    const samePhone = await addClient(o, { name: 'H. B. Holdings', phone: '555.010.0199' });
+    await addClient(o, { name: 'Someone Else', email: uniqueEmail('else'), phone: '555-010-0000' });
     const id = await inquiry(o, { contactName: 'hattie  brambleton', email: email.toUpperCase(), phone: '555 010 0199' });
 
     const matches = await o.agent.get(`/api/inquiries/${id}/client-matches`);
@@ -56,7 +48,7 @@ describe('duplicate clients', () => {
   it('a stage that files the client by itself joins the client with the same e-mail; "new client" still makes one', async () => {
     const o = await signUpFirm(t.app, 'Auto File Plaster');
     const email = uniqueEmail('nell');
-    const existing = await client(o, { name: 'Nell Ashdown', email });
+    const existing = await addClient(o, { name: 'Nell Ashdown', email });
     const id = await inquiry(o, { contactName: 'Nell Ashdown', email: ` ${email.toUpperCase()}` });
     const moved = await o.agent.post(`/api/inquiries/${id}/stage`).set('x-csrf-token', o.csrf()).send({ stage: 'visit_booked' });
     expect(moved.body.clientId).toBe(existing);
@@ -72,8 +64,8 @@ describe('duplicate clients', () => {
   it('merges a duplicate into the client kept: everything moves in one transaction, audited, and the duplicate is gone', async () => {
     const o = await signUpFirm(t.app, 'Merge Plaster');
     const email = uniqueEmail('ida');
-    const kept = await client(o, { name: 'Ida Marsh', email });
-    const dup = await client(o, { name: 'Ida Marsh', email });
+    const kept = await addClient(o, { name: 'Ida Marsh', email });
+    const dup = await addClient(o, { name: 'Ida Marsh', email });
     await o.agent
       .post(`/api/clients/${dup}/contacts`)
       .set('x-csrf-token', o.csrf())
@@ -182,7 +174,7 @@ describe('duplicate clients', () => {
 
   it('refuses a merge into itself or a bad id naming the field, and moves nothing', async () => {
     const o = await signUpFirm(t.app, 'Self Merge Plaster');
-    const id = await client(o, { name: 'Only One' });
+    const id = await addClient(o, { name: 'Only One' });
     const self = await o.agent.post(`/api/clients/${id}/merge`).set('x-csrf-token', o.csrf()).send({ intoClientId: id });
     expect(self.status).toBe(400);
     expect(self.body.errors.map((e: { field: string }) => e.field)).toEqual(['intoClientId']);
@@ -196,8 +188,8 @@ describe('duplicate clients', () => {
     const a = await signUpFirm(t.app, 'Firm A Plaster');
     const b = await signUpFirm(t.app, 'Firm B Plaster');
     const email = uniqueEmail('shared');
-    const aClient = await client(a, { name: 'Shared Name', email });
-    const bClient = await client(b, { name: 'Shared Name', email });
+    const aClient = await addClient(a, { name: 'Shared Name', email });
+    const bClient = await addClient(b, { name: 'Shared Name', email });
     const bInq = await inquiry(b, { contactName: 'Shared Name', email });
     expect((await a.agent.get(`/api/inquiries/${bInq}/client-matches`)).status).toBe(404);
     expect((await a.agent.get(`/api/clients/${bClient}/matches`)).status).toBe(404);

@@ -1,6 +1,7 @@
-import { DEFAULT_BILLING_SETTINGS, defaultEstimatingSettings, type EstimatingSettingsView, type FirmSettings } from '@layerbook/contracts';
+import { DEFAULT_BILLING_SETTINGS, defaultEstimatingSettings, type EstimatingSettingsView } from '@layerbook/contracts';
 import { addProduct, PRIMER } from '../library/library-fixtures';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
+import { patchFirm } from '../testing/firm-settings';
 
 /* A change of currency leaves no stored amount that its own save would refuse in the new one. */
 
@@ -11,14 +12,6 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 type Firm = Awaited<ReturnType<typeof signUpFirm>>;
-
-async function patchFirm(o: Firm, change: Partial<FirmSettings>) {
-  const { id: _id, slug: _slug, updatedAt: _u, logoUrl: _logo, ...profile } = (await o.agent.get('/api/firm')).body as FirmSettings;
-  return o.agent
-    .patch('/api/firm')
-    .set('x-csrf-token', o.csrf())
-    .send({ ...profile, ...change });
-}
 
 const putEstimating = (o: Firm, labourRate: string) =>
   o.agent

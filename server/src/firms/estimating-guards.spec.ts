@@ -1,24 +1,16 @@
 /* The firm's estimating settings: measures kept the same size across a change of units, and values the engine would refuse refused when saved. */
-import { defaultEstimatingSettings, type EstimateInputs, type EstimatingSettingsView, type FirmSettings } from '@layerbook/contracts';
+import { defaultEstimatingSettings, type EstimateInputs, type EstimatingSettingsView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { firmWithPricedEstimate } from '../proposals/proposal-fixtures';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
 import { sessionsWaiting } from '../testing/lock-waits';
+import { patchFirm } from '../testing/firm-settings';
 
 let t: TestServer;
 beforeAll(async () => {
   t = await startTestServer();
 });
 afterAll(() => t.stop());
-
-async function patchFirm(o: Awaited<ReturnType<typeof signUpFirm>>, change: Partial<FirmSettings>) {
-  const firm = (await o.agent.get('/api/firm')).body as FirmSettings;
-  const { id: _id, slug: _slug, updatedAt: _u, logoUrl: _logo, ...profile } = firm;
-  return o.agent
-    .patch('/api/firm')
-    .set('x-csrf-token', o.csrf())
-    .send({ ...profile, ...change });
-}
 
 describe('estimating settings and the firm’s units', () => {
   it('keeps the saved heights and areas the same size when the firm goes metric', async () => {

@@ -1,6 +1,7 @@
-import type { EstimateView, FirmSettings } from '@layerbook/contracts';
+import type { EstimateView } from '@layerbook/contracts';
 import { startTestServer, type TestServer } from '../testing/harness';
 import { firmWithPricedEstimate } from './proposal-fixtures';
+import { patchFirm } from '../testing/firm-settings';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -16,16 +17,7 @@ const save = (f: Firm, inputs: object) => f.agent.put(`/api/estimates/${f.estima
 describe('the amounts an estimate is saved with', () => {
   it('fit the firm’s currency: sen in a yen estimate are refused, each field named, and nothing is saved', async () => {
     const f = await firmWithPricedEstimate(t, 'Yen Amounts Plaster');
-    const firm = (await f.agent.get('/api/firm')).body as FirmSettings;
-    const { id: _id, slug: _slug, updatedAt: _u, logoUrl: _logo, ...profile } = firm;
-    expect(
-      (
-        await f.agent
-          .patch('/api/firm')
-          .set('x-csrf-token', f.csrf())
-          .send({ ...profile, currency: 'JPY' })
-      ).status,
-    ).toBe(200);
+    expect((await patchFirm(f, { currency: 'JPY' })).status).toBe(200);
     const before = (await f.agent.get(`/api/estimates/${f.estimateId}`)).body as EstimateView;
     const refused = await save(f, {
       ...before.inputs,

@@ -1,6 +1,6 @@
-import type { FirmSettings } from '@layerbook/contracts';
 import { firmWithPricedEstimate } from './proposal-fixtures';
 import { startTestServer, TestServer } from '../testing/harness';
+import { patchFirm } from '../testing/firm-settings';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -15,12 +15,7 @@ describe('a proposal made after the firm changed its units', () => {
     const est = (await f.agent.get(`/api/estimates/${f.estimateId}`)).body;
     const feet = est.result.variants[0].result.surfaces[0].measure.quantity as number;
     expect(est.result.lengthUnit).toBe('ft');
-    const firm = (await f.agent.get('/api/firm')).body as FirmSettings;
-    const { id: _id, slug: _slug, updatedAt: _u, logoUrl: _logo, ...profile } = firm;
-    const patched = await f.agent
-      .patch('/api/firm')
-      .set('x-csrf-token', f.csrf())
-      .send({ ...profile, units: 'metric' });
+    const patched = await patchFirm(f, { units: 'metric' });
     expect(patched.status).toBe(200);
     const send = () =>
       f.agent.post('/api/proposals').set('x-csrf-token', f.csrf()).send({ estimateId: f.estimateId, expiresOn: '2026-12-31' });

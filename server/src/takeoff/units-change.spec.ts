@@ -1,6 +1,7 @@
-import type { FirmSettings, SurfaceView, TakeoffView } from '@layerbook/contracts';
+import type { SurfaceView, TakeoffView } from '@layerbook/contracts';
 import { withTenant } from '@layerbook/db';
 import { signUpFirm, startTestServer, type TestServer } from '../testing/harness';
+import { patchFirm } from '../testing/firm-settings';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -22,16 +23,7 @@ async function wallThenMetric(firmName: string, perimeter: number, height: numbe
     .set('x-csrf-token', o.csrf())
     .send({ name: 'Walls', shape: { kind: 'walls', perimeter, height }, disturbedPaintedArea: 50 });
   expect(made.status).toBe(201);
-  const firm = (await o.agent.get('/api/firm')).body as FirmSettings;
-  const { id: _id, slug: _slug, updatedAt: _u, logoUrl: _logo, ...profile } = firm;
-  expect(
-    (
-      await o.agent
-        .patch('/api/firm')
-        .set('x-csrf-token', o.csrf())
-        .send({ ...profile, units: 'metric' })
-    ).status,
-  ).toBe(200);
+  expect((await patchFirm(o, { units: 'metric' })).status).toBe(200);
   const remeasure = (shape: object) => o.agent.patch(`/api/takeoff/surfaces/${made.body.id}`).set('x-csrf-token', o.csrf()).send({ shape });
   return { o, siteId: site.body.id as string, remeasure };
 }
