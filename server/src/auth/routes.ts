@@ -1,4 +1,5 @@
 import {
+  firmSwitch,
   invitationAccept,
   languageChoice,
   passwordResetComplete,
@@ -19,6 +20,7 @@ import { asError } from '../http/errors';
 import type { StaffPrincipal } from '../http/principal';
 import { withStaff } from '../http/guards';
 import { parse } from '../http/validate';
+import { switchFirm } from './firm-switch';
 import { acceptInvitation, previewInvitation } from './invitations';
 import { setOwnLanguage } from './language';
 import { endSession, logOut, type AppPassport } from './passport-setup';
@@ -62,6 +64,11 @@ export function authRoutes(ctx: AppContext, pass: AppPassport, signInLimiter: im
   router.patch('/me/language', async (req, res) => {
     await withStaff(ctx, req, 'crew', (tx, staff) => setOwnLanguage(tx, staff, parse(languageChoice, req.body).language));
     res.json((await staffSession(ctx, req, res)) satisfies StaffSession);
+  });
+
+  // Someone in several firms enters another of theirs (firm-switch.ts).
+  router.post('/firm', async (req, res) => {
+    await switchFirm(ctx, req, res, parse(firmSwitch, req.body).firmId);
   });
 
   // Owner and office: the code after the password, setting one up, turning it off, the firm's rule.

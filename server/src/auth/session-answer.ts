@@ -5,6 +5,7 @@ import type { AppContext } from '../context';
 import { csrfToken } from '../http/csrf';
 import { signedInStaff } from '../http/guards';
 import type { StaffPrincipal } from '../http/principal';
+import { otherFirmsOf } from './firm-choices';
 import { logIn } from './passport-setup';
 import { beginHalfState, pendingAnswer } from './second-factor/half-state';
 import { recordSignIn, signInStepFor, type SecondFactorUsed } from './second-factor/verify';
@@ -26,6 +27,7 @@ export async function staffSession(ctx: AppContext, req: Request, res: Response,
           units: user.units,
           country: user.country,
           timeZone: user.timeZone,
+          otherFirms: await otherFirmsOf(ctx, user.id, user.tenantId),
         }
       : null,
     csrfToken: csrfToken(ctx.config, req, res, fresh),
@@ -33,10 +35,24 @@ export async function staffSession(ctx: AppContext, req: Request, res: Response,
   };
 }
 
+declare module 'express-session' {
+  interface SessionData {
+    /** how this session's person proved a second factor, when they did: a firm switch does not ask again */
+    secondFactorUsed?: SecondFactorUsed;
+  }
+}
+
 /** Signs in fully on a fresh session id and records it in the firm's audit log. */
-export async function finishSignIn(ctx: AppContext, req: Request, staff: StaffPrincipal, used: SecondFactorUsed | null): Promise<void> {
+export async function finishSignIn(
+  ctx: AppContext,
+  req: Request,
+  staff: StaffPrincipal,
+  used: SecondFactorUsed | null,
+  how?: 'firmSwitch',
+): Promise<void> {
   await logIn(req, staff, ctx.now());
-  await withTenant(ctx.pool, staff.tenantId, (tx) => recordSignIn(tx, staff, used));
+  if (used) req.session.secondFactorUsed = used;
+  await withTenant(ctx.pool, staff.tenantId, (tx) => recordSignIn(tx, staff, used, how));
 }
 
 /**

@@ -103,6 +103,20 @@ export interface StaffUser {
   readonly country: string;
   /** the firm's time zone (IANA), so forms start from the firm's today, as the API dates things */
   readonly timeZone: string;
+  /** the other firms this person is an active member of, by name: they can switch to one (POST /api/auth/firm) */
+  readonly otherFirms: readonly FirmChoice[];
+}
+
+/** A firm a person may switch to, and what they are there. */
+export interface FirmChoice {
+  readonly id: string;
+  readonly name: string;
+  readonly role: StaffRole;
+}
+
+/** POST /api/auth/firm: enter another firm the signed-in person belongs to. */
+export interface FirmSwitch {
+  readonly firmId: string;
 }
 
 /** What the admin app knows about who is signed in (every /api/auth answer that signs in or out). */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { requestSchema } from '../common/schema-check';
+import { uuid } from '../common/fields';
 import {
   FIRM_NAME_MAX_LENGTH,
   FIRM_NAME_MIN_LENGTH,
@@ -7,6 +8,7 @@ import {
   SECOND_FACTOR_CODE_MAX_LENGTH,
   TOTP_DIGITS,
   type FirmSecondFactor,
+  type FirmSwitch,
   type InvitationAccept,
   type LanguageChoice,
   type PasswordResetComplete,
@@ -65,6 +67,8 @@ export const portalLinkRequest = requestSchema<PortalLinkRequest>()(z.strictObje
 export const portalRedeemRequest = requestSchema<PortalRedeemRequest>()(z.strictObject({ token }));
 
 /** PATCH /api/auth/me/language, /api/portal/me/language, /api/team/members/:id/language: null follows the firm. */
+export const firmSwitch = requestSchema<FirmSwitch>()(z.strictObject({ firmId: uuid('firm') }));
+
 export const languageChoice = requestSchema<LanguageChoice>()(
   z.strictObject({
     language: z.enum(LANGUAGES, { error: 'Choose English or Spanish, or leave it to the firm.' }).nullable(),

@@ -44,6 +44,14 @@ export const firms = pgTable(
     }),
     // The public inquiry form names its firm by slug; only that firm's row opens.
     lookupPolicy('firms', 'slug', 'lookup_slug'),
+    // A person in several firms sees the names of those they are an active member of (the firm switch).
+    pgPolicy('firms_lookup_by_member', {
+      as: 'permissive',
+      for: 'select',
+      to: 'public',
+      using: sql`exists (select 1 from memberships m where m.tenant_id = firms.id and m.status = 'active'
+        and m.user_id = nullif(current_setting('app.user_id', true), '')::uuid)`,
+    }),
     // The scheduler walks every firm (to fire each one's daily jobs at its local hour); it reads only.
     pgPolicy('firms_scheduler_read', { as: 'permissive', for: 'select', to: jobsRole, using: sql`true` }),
   ],

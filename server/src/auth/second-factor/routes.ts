@@ -117,6 +117,7 @@ export function secondFactorRoutes(ctx: AppContext, signInLimiter: RequestHandle
       return { staff, codes: await throttledCheck(ctx, staff.id, address(req), () => confirmEnrolment(ctx, tx, staff, code)) };
     });
     if (half) await finishSignIn(ctx, req, staff, 'app');
+    else req.session.secondFactorUsed = 'app';
     res.set('cache-control', 'no-store').json({ ...(await staffSession(ctx, req, res, half)), codes } satisfies SecondFactorEnrolled);
   });
 

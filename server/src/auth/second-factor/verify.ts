@@ -77,13 +77,13 @@ export async function firmRequiresSecondFactor(tx: TenantTx): Promise<boolean> {
 }
 
 /** Every staff sign-in is in the firm's audit log, with whether (and how) a second factor was used. */
-export function recordSignIn(tx: TenantTx, staff: StaffPrincipal, used: SecondFactorUsed | null): Promise<void> {
+export function recordSignIn(tx: TenantTx, staff: StaffPrincipal, used: SecondFactorUsed | null, how?: 'firmSwitch'): Promise<void> {
   return recordAudit(tx, {
     actorUserId: staff.id,
     actorKind: 'staff',
     action: 'staff.signedIn',
     entity: 'user',
     entityId: staff.id,
-    data: { secondFactor: used !== null, ...(used ? { secondFactorBy: used } : {}) },
+    data: { secondFactor: used !== null, ...(used ? { secondFactorBy: used } : {}), ...(how ? { by: how } : {}) },
   });
 }

@@ -1,9 +1,20 @@
 import { inject } from '@angular/core';
 import { CanActivateFn, Router } from '@angular/router';
-import type { StaffRole } from '@layerbook/contracts/types';
+import type { StaffRole, StaffSession } from '@layerbook/contracts/types';
 import { Session } from './session';
 
 export const HOME_URL = '/today';
+
+/**
+ * Where to go after an answer that may sign in: the second-factor step when the server asks for one
+ * (a code, or setting one up because the firm requires it), carrying `next`; else `next` itself.
+ */
+export function urlAfterSignIn(session: StaffSession, next: string = HOME_URL): string {
+  const step = session.secondFactor?.step;
+  if (!step) return next;
+  const path = step === 'code' ? '/sign-in/code' : '/sign-in/set-up';
+  return next === HOME_URL ? path : `${path}?next=${encodeURIComponent(next)}`;
+}
 
 /** Signed-out visitors go to the sign-in page and come back here afterwards. */
 export const signedInGuard: CanActivateFn = async (_route, state) => {

@@ -4,6 +4,7 @@ import { firstValueFrom } from 'rxjs';
 import { Language } from '../../../../../shared/i18n/language';
 import {
   type Language as LanguageCode,
+  type FirmSwitch,
   type LanguageChoice,
   type StaffRole,
   type StaffSession,
@@ -54,6 +55,16 @@ export class Session {
   async signOut(): Promise<void> {
     const session = await firstValueFrom(this.http.post<StaffSession>('/api/auth/signout', {}));
     this.accept(session);
+  }
+
+  /**
+   * Enters another firm of this person's: the answer signs in there (user set) or asks for a second
+   * factor first (user null, the step in `secondFactor`), leaving the firm they were in.
+   */
+  async switchFirm(firmId: string): Promise<StaffSession> {
+    const session = await firstValueFrom(this.http.post<StaffSession>('/api/auth/firm', { firmId } satisfies FirmSwitch));
+    this.accept(session);
+    return session;
   }
 
   /** The person's own language (null follows the firm's); the answer is the whole session, so the words switch with it. */

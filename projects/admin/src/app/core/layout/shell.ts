@@ -1,4 +1,5 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
+import { DOCUMENT } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -11,6 +12,7 @@ import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/rou
 import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { Language as LanguageCode } from '@layerbook/contracts/types';
 import { map } from 'rxjs';
+import { HOME_URL, urlAfterSignIn } from '../auth/guards';
 import { Session } from '../auth/session';
 import { toProblem } from '../errors/problem';
 import { Wordmark } from '../../shared/ui/wordmark';
@@ -44,6 +46,7 @@ export class Shell {
   private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
   private readonly translate = inject(TranslateService);
+  private readonly document = inject(DOCUMENT);
 
   protected readonly user = this.session.user;
   protected readonly isNarrow = toSignal(
@@ -76,6 +79,20 @@ export class Shell {
     try {
       await this.session.signOut();
       await this.router.navigateByUrl('/sign-in');
+    } catch (error) {
+      this.tell(toProblem(error).title);
+    }
+  }
+
+  /**
+   * Enters another of the person's firms. Signed in there, the app starts again on Today (a full load,
+   * so nothing of the first firm stays in memory); asked for a second factor first, it goes to that step.
+   */
+  protected async switchFirm(firmId: string): Promise<void> {
+    try {
+      const session = await this.session.switchFirm(firmId);
+      if (session.user) this.document.location.assign(HOME_URL);
+      else await this.router.navigateByUrl(urlAfterSignIn(session));
     } catch (error) {
       this.tell(toProblem(error).title);
     }

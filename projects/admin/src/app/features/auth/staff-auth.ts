@@ -11,19 +11,8 @@ import type {
   SignUpRequest,
   StaffSession,
 } from '@layerbook/contracts/types';
-import { HOME_URL } from '../../core/auth/guards';
+import { urlAfterSignIn } from '../../core/auth/guards';
 import { Session } from '../../core/auth/session';
-
-/**
- * Where to go after an answer that may sign in: the second-factor step when the server asks for one
- * (a code, or setting one up because the firm requires it), carrying `next`; else `next` itself.
- */
-export function urlAfterSignIn(session: StaffSession, next: string = HOME_URL): string {
-  const step = session.secondFactor?.step;
-  if (!step) return next;
-  const path = step === 'code' ? '/sign-in/code' : '/sign-in/set-up';
-  return next === HOME_URL ? path : `${path}?next=${encodeURIComponent(next)}`;
-}
 
 /**
  * The staff sign-in calls. Each one that signs someone in hands the new session to `Session` and

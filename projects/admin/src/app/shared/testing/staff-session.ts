@@ -15,6 +15,7 @@ export function staffSession(role: StaffRole = 'owner', csrfToken = 't'): StaffS
       units: 'imperial',
       country: 'US',
       timeZone: 'America/New_York',
+      otherFirms: [],
     },
     csrfToken,
   };

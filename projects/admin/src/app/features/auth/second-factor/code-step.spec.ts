@@ -8,7 +8,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { provideTestI18n } from '../../../../../../shared/i18n/testing';
 import auth from '../../../../i18n/auth/en.json';
 import { staffSession } from '../../../shared/testing/staff-session';
-import { urlAfterSignIn } from '../staff-auth';
+import { urlAfterSignIn } from '../../../core/auth/guards';
 import { SecondFactorCodeStep } from './code-step';
 
 const SIGNED_IN: StaffSession = { ...staffSession('owner', 't2'), secondFactor: null };

@@ -1,0 +1,2 @@
+CREATE POLICY "firms_lookup_by_member" ON "firms" AS PERMISSIVE FOR SELECT TO public USING (exists (select 1 from memberships m where m.tenant_id = firms.id and m.status = 'active'
+        and m.user_id = nullif(current_setting('app.user_id', true), '')::uuid));
