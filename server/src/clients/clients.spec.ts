@@ -1,6 +1,7 @@
 import { withTenant } from '@layerbook/db';
 import { linkIn } from '../testing/inbox';
 import { newAgent, signUpFirm, startTestServer, TestServer, uniqueEmail } from '../testing/harness';
+import { patchFirm } from '../testing/firm-settings';
 
 let t: TestServer;
 beforeAll(async () => {
@@ -116,6 +117,18 @@ describe('clients, contacts and sites', () => {
     const ok = await o.agent.patch(`/api/sites/${site.body.id}`).set('x-csrf-token', o.csrf()).send({ country: 'CA' });
     expect(ok.status).toBe(200);
     expect(ok.body.country).toBe('CA');
+  });
+
+  it('puts a site sent without a country in the firm’s country', async () => {
+    const o = await signUpFirm(t.app);
+    expect((await patchFirm(o, { country: 'CA' })).status).toBe(200);
+    const made = await o.agent.post('/api/clients').set('x-csrf-token', o.csrf()).send({ kind: 'homeowner', name: 'Maple Row' });
+    const site = await o.agent
+      .post(`/api/clients/${made.body.id}/sites`)
+      .set('x-csrf-token', o.csrf())
+      .send({ addressLine1: '9 Kiln Lane' });
+    expect(site.status).toBe(201);
+    expect(site.body.country).toBe('CA');
   });
 
   it('keeps crew out of clients and inquiries (no contact or money figures for crew here)', async () => {

@@ -13,6 +13,7 @@ import type {
 } from '@layerbook/contracts';
 import { and, clientContacts, clients, desc, eq, inquiries, sites, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
+import { firmReader } from '../i18n/reader';
 import type { Actor } from '../http/actor';
 import { notFound } from '../http/problem';
 import { decodeCursor, encodeCursor } from '../inquiries/cursor';
@@ -183,11 +184,13 @@ export async function addContact(tx: TenantTx, clientId: string, input: ContactC
   return toContact(row);
 }
 
+/** A site whose country is not given is in the firm's country. */
 export async function addSite(tx: TenantTx, clientId: string, input: SiteCreate): Promise<SiteView> {
   await assertClient(tx, clientId);
+  const country = input.country ?? (await firmReader(tx)).country;
   const [row] = await tx.db
     .insert(sites)
-    .values({ ...input, clientId, tenantId: tx.tenantId })
+    .values({ ...input, country, clientId, tenantId: tx.tenantId })
     .returning();
   return toSite(row);
 }

@@ -65,7 +65,8 @@ export interface SiteCreate {
   readonly city: string;
   readonly region: string;
   readonly postalCode: string;
-  readonly country: string;
+  /** ISO 3166-1 alpha-2; left out on create = the firm's country */
+  readonly country?: string;
   readonly yearBuilt: number | null;
   readonly accessNotes: string;
 }
@@ -75,6 +76,7 @@ export type SiteUpdate = Partial<SiteCreate>;
 // What the client and site routes answer.
 export interface SiteView extends SiteCreate {
   readonly id: string;
+  readonly country: string;
   readonly clientId: string;
   /** Built before 1978 (lead-safe work rules apply); null when the year is not known. */
   readonly isPre1978: boolean | null;

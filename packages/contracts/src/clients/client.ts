@@ -9,7 +9,6 @@ import { requestSchema } from '../common/schema-check';
 import {
   CLIENT_KINDS,
   CLIENT_LIMITS as L,
-  DEFAULT_COUNTRY,
   type ClientCreate,
   type ClientMerge,
   type ClientUpdate,
@@ -44,7 +43,8 @@ export const siteCreate = requestSchema<SiteCreate>()(
     city: siteFields.city.default(''),
     region: siteFields.region.default(''),
     postalCode: siteFields.postalCode.default(''),
-    country: siteFields.country.default(DEFAULT_COUNTRY),
+    // Left out, the site is in the firm's country (clients/service.ts).
+    country: siteFields.country.optional(),
     yearBuilt: siteFields.yearBuilt.default(null),
     accessNotes: siteFields.accessNotes.default(''),
   }),
