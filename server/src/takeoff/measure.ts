@@ -5,9 +5,13 @@ import {
   convertArea,
   convertMeasure,
   dottedPath,
+  leadStatus,
   measureSurface,
   safetyCautions,
   type SurfaceMeasure,
+  TARGET_HOUSING_BEFORE,
+  type TakeoffSettings,
+  treatedAsTargetHousing,
 } from '@layerbook/domain';
 import { badRequest } from '../http/problem';
 
@@ -16,7 +20,7 @@ import { badRequest } from '../http/problem';
  * openings larger than the wall) becomes a 400 naming the field, before anything is written.
  * Openings smaller than the firm's smallest deducted one (`settings`, in the shape's unit) stay in the area.
  */
-export function measureOrReject(shape: SurfaceShapeInput, settings: { minDeductedOpeningArea: number }): SurfaceMeasure {
+export function measureOrReject(shape: SurfaceShapeInput, settings: TakeoffSettings): SurfaceMeasure {
   try {
     return measureSurface(shape, settings, 'shape');
   } catch (error) {
@@ -49,7 +53,9 @@ export const unitOfSystem = (units: 'imperial' | 'metric'): TakeoffLengthUnit =>
 /**
  * The lead-safe reminder for the takeoff: the domain's safety rules (40 CFR 745.83 thresholds,
  * target housing before 1978) over the disturbed painted areas measured so far, in `unit`; it says
- * whose rule it is for the firm's country.
+ * whose rule it is for the firm's country. A home whose year is not recorded counts as built before
+ * 1978 while paint is disturbed, as the estimate decides it (`leadStatus`), and the reminder then
+ * asks for the year first (`treatedAsTargetHousing`): the measurer is told where the areas are typed.
  */
 export function leadCaution(
   rooms: readonly RoomView[],
@@ -57,20 +63,23 @@ export function leadCaution(
   unit: TakeoffLengthUnit,
   firmCountry?: string,
 ): Caution | null {
-  if (yearBuilt === null) return null;
   const disturbedPaint = rooms.flatMap((room) =>
     room.surfaces
       .filter((s) => s.disturbedPaintedArea !== null && s.disturbedPaintedArea > 0)
       .map((s) => ({ roomId: room.id, isExterior: room.isExterior, area: convertArea(s.disturbedPaintedArea ?? 0, s.lengthUnit, unit) })),
   );
+  const status = leadStatus(yearBuilt, disturbedPaint.length > 0);
+  if (status === 'year-unknown') return null;
   const cautions = safetyCautions({
     lengthUnit: unit,
-    yearBuilt,
+    // the estimate's rule year: not recorded, with paint disturbed, is a year before 1978
+    yearBuilt: yearBuilt ?? TARGET_HOUSING_BEFORE - 1,
     disturbedPaint,
     workingLevel: 0,
     products: [],
     sandsPlaster: false,
     ...(firmCountry !== undefined ? { firmCountry } : {}),
   });
-  return cautions.find((c) => c.id === 'lead-safe-work') ?? null;
+  const lead = cautions.find((c) => c.id === 'lead-safe-work') ?? null;
+  return lead && status === 'assumed-target-housing' ? treatedAsTargetHousing(lead) : lead;
 }

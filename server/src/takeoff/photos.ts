@@ -27,17 +27,24 @@ export const ROOM_PHOTOS: PhotoAlbum = {
   audit: { entity: 'room_photo', area: 'takeoff', ownerKey: 'roomId' },
 };
 
-/** The room, or the same 404 whether it never existed or belongs to another firm. */
-export async function findPhotoRoom(tx: TenantTx, roomId: string): Promise<{ id: string; name: string; siteId: string }> {
-  const room = (
-    await tx.db
-      .select({ id: rooms.id, name: rooms.name, siteId: rooms.siteId })
-      .from(rooms)
-      .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)))
-  )[0];
+type PhotoRoom = { id: string; name: string; siteId: string };
+
+/**
+ * The room, or the same 404 whether it never existed or belongs to another firm. `keyShare` when a
+ * photo is about to point at it: a delete of the room under way is waited for and then answers 404,
+ * not a foreign-key 500 (and the delete, locking the room first, waits for the photo and takes it too).
+ */
+async function roomOfPhotos(tx: TenantTx, roomId: string, keyShare: boolean): Promise<PhotoRoom> {
+  const query = tx.db
+    .select({ id: rooms.id, name: rooms.name, siteId: rooms.siteId })
+    .from(rooms)
+    .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)));
+  const room = (await (keyShare ? query.for('key share') : query))[0];
   if (!room) throw notFound('room');
   return room;
 }
+
+export const findPhotoRoom = (tx: TenantTx, roomId: string): Promise<PhotoRoom> => roomOfPhotos(tx, roomId, false);
 
 export async function listRoomPhotos(tx: TenantTx, roomId: string): Promise<RoomPhotoView[]> {
   await findPhotoRoom(tx, roomId);
@@ -51,7 +58,7 @@ export async function addRoomPhoto(
   caption: string,
   stored: StoredImage,
 ): Promise<RoomPhotoView> {
-  const room = await findPhotoRoom(tx, roomId);
+  const room = await roomOfPhotos(tx, roomId, true);
   const view = await addPhoto(tx, ROOM_PHOTOS, actor, { id: roomId, about: { roomName: room.name, siteId: room.siteId } }, caption, stored);
   return { ...view, roomId };
 }

@@ -1,13 +1,14 @@
-import type {
-  MoveInput,
-  RoomInput,
-  RoomUpdate,
-  RoomView,
-  SurfaceInput,
-  SurfaceUpdate,
-  SurfaceView,
-  TakeoffLengthUnit,
-  TakeoffView,
+import {
+  isMoreThanSurface,
+  type MoveInput,
+  type RoomInput,
+  type RoomUpdate,
+  type RoomView,
+  type SurfaceInput,
+  type SurfaceUpdate,
+  type SurfaceView,
+  type TakeoffLengthUnit,
+  type TakeoffView,
 } from '@layerbook/contracts';
 import { and, asc, clients, eq, firms, rooms, sites, sql, surfaces, TenantTx } from '@layerbook/db';
 import { convertArea } from '@layerbook/domain';
@@ -55,13 +56,18 @@ async function findSite(tx: TenantTx, siteId: string) {
   return row;
 }
 
-async function findRoom(tx: TenantTx, roomId: string): Promise<RoomRow> {
-  const row = (
-    await tx.db
-      .select()
-      .from(rooms)
-      .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)))
-  )[0];
+/**
+ * The room, locked when a write depends on it: `key share` by a writer adding a row that points at
+ * it (a surface), which waits for a delete of the room under way and then finds it gone (404) where
+ * a plain read would let the insert fail on the foreign key (500); `update` by that delete, which
+ * so waits for the rows being added and takes them with the room.
+ */
+async function findRoom(tx: TenantTx, roomId: string, lock?: 'key share' | 'update'): Promise<RoomRow> {
+  const query = tx.db
+    .select()
+    .from(rooms)
+    .where(and(eq(rooms.tenantId, tx.tenantId), eq(rooms.id, roomId)));
+  const row = (await (lock ? query.for(lock) : query))[0];
   if (!row) throw notFound('room');
   return row;
 }
@@ -188,7 +194,7 @@ export async function updateRoom(tx: TenantTx, actor: Actor, roomId: string, pat
  * photos' object keys, which the caller deletes from the store after the commit.
  */
 export async function deleteRoom(tx: TenantTx, actor: Actor, roomId: string): Promise<ObjectKeys> {
-  const room = await findRoom(tx, roomId);
+  const room = await findRoom(tx, roomId, 'update');
   const photos = await detachRoomPhotos(tx, roomId);
   const gone = await tx.db
     .delete(surfaces)
@@ -235,13 +241,13 @@ export async function moveRoom(tx: TenantTx, roomId: string, { to }: MoveInput):
 
 /** Refuses a disturbed area larger than the surface it is on: a typing slip, and it would trip lead-safe reminders. */
 function checkDisturbed(disturbed: number | null, measure: ReturnType<typeof measureOrReject>): void {
-  if (disturbed !== null && measure.measure === 'area' && disturbed > measure.gross + 1e-9) {
+  if (disturbed !== null && measure.measure === 'area' && isMoreThanSurface(disturbed, measure.gross)) {
     throw badRequest([{ field: 'disturbedPaintedArea', message: 'The disturbed painted area cannot be more than the surface itself.' }]);
   }
 }
 
 export async function addSurface(tx: TenantTx, actor: Actor, roomId: string, input: SurfaceInput): Promise<SurfaceView> {
-  await findRoom(tx, roomId);
+  await findRoom(tx, roomId, 'key share');
   const unit = await firmUnit(tx);
   const rule = await openingRule(tx);
   const measure = measureOrReject(input.shape, takeoffSettingsIn(rule, unit));
@@ -284,7 +290,8 @@ export async function updateSurface(tx: TenantTx, actor: Actor, surfaceId: strin
   const before = toSurfaceView(current, rule);
   const shape = patch.shape ?? before.shape;
   const unit = patch.shape !== undefined ? await firmUnit(tx) : (current.lengthUnit as TakeoffLengthUnit);
-  const measure = measureOrReject(shape, takeoffSettingsIn(rule, unit));
+  // the stored shape is taken as it reads (toSurfaceView); a new one must pass every check
+  const measure = measureOrReject(shape, { ...takeoffSettingsIn(rule, unit), openingsAsSaved: patch.shape === undefined });
   const stored = before.disturbedPaintedArea;
   const kept =
     stored !== null && unit !== current.lengthUnit
@@ -305,6 +312,8 @@ export async function updateSurface(tx: TenantTx, actor: Actor, surfaceId: strin
     })
     .where(and(eq(surfaces.tenantId, tx.tenantId), eq(surfaces.id, surfaceId)))
     .returning();
+  // deleted with its room meanwhile
+  if (!row) throw notFound('surface');
   // Measurements drive quantities and prices: the trail keeps a changed shape and disturbed area before and after.
   await recordAudit(tx, {
     ...auditedBy(actor),
@@ -335,6 +344,7 @@ export async function deleteSurface(tx: TenantTx, actor: Actor, surfaceId: strin
 /** A copy placed right after the original (four alike walls, two alike vault bays). */
 export async function duplicateSurface(tx: TenantTx, actor: Actor, surfaceId: string): Promise<SurfaceView> {
   const original = await findSurface(tx, surfaceId);
+  await findRoom(tx, original.roomId, 'key share');
   await tx.db
     .update(surfaces)
     .set({ position: sql`${surfaces.position} + 1` })

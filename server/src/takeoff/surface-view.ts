@@ -19,6 +19,8 @@ export const takeoffSettingsIn = (rule: OpeningRule, unit: TakeoffLengthUnit) =>
  * The stored shape passed the same checks when it was saved, so measuring it again cannot fail;
  * it is measured on every read rather than stored so a corrected formula reaches old takeoffs,
  * with the firm's smallest deducted opening, so the takeoff shows the area the estimate prices.
+ * Openings are taken as saved: one saved taller or wider than its wall before that was refused
+ * still reads (its page opens), and saving the surface again asks for it to be corrected.
  */
 export function toSurfaceView(row: SurfaceRow, rule: OpeningRule): SurfaceView {
   const shape = row.shape as SurfaceShapeInput;
@@ -31,6 +33,6 @@ export function toSurfaceView(row: SurfaceRow, rule: OpeningRule): SurfaceView {
     lengthUnit: row.lengthUnit as TakeoffLengthUnit,
     disturbedPaintedArea: row.disturbedPaintedArea === null ? null : Number(row.disturbedPaintedArea),
     notes: row.notes,
-    measure: measureSurface(shape, takeoffSettingsIn(rule, row.lengthUnit as TakeoffLengthUnit)),
+    measure: measureSurface(shape, { ...takeoffSettingsIn(rule, row.lengthUnit as TakeoffLengthUnit), openingsAsSaved: true }),
   };
 }

@@ -129,7 +129,10 @@ describe('site takeoff', () => {
     ['more than 6 ft² disturbed in a 1924 house', 1924, [4, 3], 'lead-safe-work'],
     ['6 ft² or less disturbed in a 1924 house', 1924, [4, 2], null],
     ['a 1990 house, however much is disturbed', 1990, [40], null],
-    ['a house of unknown age', null, [40], null],
+    // As the estimate, the proposal and the crew's sheet read it (leadStatus): an unknown year with paint disturbed counts as pre-1978.
+    ['more than 6 ft² disturbed in a house of unknown age', null, [40], 'lead-safe-work'],
+    ['6 ft² or less disturbed in a house of unknown age', null, [4, 2], null],
+    ['no paint disturbed in a house of unknown age', null, [0], null],
   ])('answers the lead-safe reminder with the takeoff: %s', async (_what, yearBuilt, disturbed, caution) => {
     const o = await signUpFirm(t.app);
     const siteId = await makeSite(o, yearBuilt);
@@ -148,6 +151,13 @@ describe('site takeoff', () => {
     const view = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body;
     expect(view.leadCaution?.id ?? null).toBe(caution);
     expect(view.rooms[0].totals.disturbedPaintedArea).toBe(disturbed.reduce((sum, x) => sum + x, 0));
+    if (caution !== null && yearBuilt === null) {
+      // the year asked for first, and the home said to be treated as pre-1978 rather than built then
+      expect(view.leadCaution.bullets[0]).toMatch(/^The year the building was built is not recorded\./);
+      expect(view.leadCaution.bullets[1]).toMatch(/^Treated as built before 1978/);
+    } else if (caution !== null) {
+      expect(view.leadCaution.bullets[0]).toMatch(/^Built before 1978/);
+    }
   });
 
   it.each([
@@ -178,7 +188,7 @@ describe('site takeoff', () => {
 
     const doors = await addSurface(o, roomId, {
       name: 'Walls',
-      shape: { kind: 'walls', perimeter: 4, height: 2, openings: [{ width: 3, height: 7 }] },
+      shape: { kind: 'walls', perimeter: 4, height: 2, openings: [{ width: 3, height: 2, count: 2 }] },
     });
     expect(fields(doors.body)).toEqual(['shape.openings']);
 
@@ -214,6 +224,92 @@ describe('site takeoff', () => {
     expect(fields(broken.body)).toEqual(['shape.rise']);
     const after = (await o.agent.get(`/api/takeoff/sites/${siteId}`)).body.rooms[0].surfaces[0];
     expect(after).toMatchObject({ name: 'Vault', shape: { rise: 3 } });
+  });
+
+  it('refuses an opening taller than its wall or wider than a curved segment, naming the opening', async () => {
+    const o = await signUpFirm(t.app);
+    const siteId = await makeSite(o);
+    const roomId = await makeRoom(o, siteId);
+    // A door typed 80 (inches meant) on an 8 ft wall once took 240 ft² off the 320 ft² of walls.
+    const door = await addSurface(o, roomId, {
+      name: 'Walls',
+      shape: { kind: 'walls', perimeter: 40, height: 8, openings: [{ width: 3, height: 80 }] },
+    });
+    expect(door.status).toBe(400);
+    expect(door.body.errors).toEqual([{ field: 'shape.openings.0.height', message: 'An opening cannot be taller than the wall.' }]);
+    const wideWindow = await addSurface(o, roomId, {
+      name: 'Curved wall',
+      shape: {
+        kind: 'curvedWall',
+        radius: 2,
+        angleDegrees: 90,
+        height: 8,
+        openings: [
+          { width: 3, height: 4 },
+          { width: 5, height: 4 },
+        ],
+      },
+    });
+    expect(wideWindow.body.errors).toEqual([
+      { field: 'shape.openings.1.width', message: 'An opening cannot be wider than the curved wall segment.' },
+    ]);
+    expect((await o.agent.get(`/api/takeoff/sites/${siteId}`)).body.rooms[0].surfaces).toHaveLength(0);
+    // common practice, no source: 40 × 8 − 3 × 6.75 = 299.75 ft²
+    const fits = await addSurface(o, roomId, {
+      name: 'Walls',
+      shape: { kind: 'walls', perimeter: 40, height: 8, openings: [{ width: 3, height: 6.75 }] },
+    });
+    expect(fits.status).toBe(201);
+    expect(fits.body.measure.quantity).toBe(299.75);
+  });
+
+  it('still opens a surface saved with an opening taller than its wall before that was refused, and asks for it on the next save', async () => {
+    const o = await signUpFirm(t.app);
+    const siteId = await makeSite(o);
+    const roomId = await makeRoom(o, siteId);
+    const shape = { kind: 'walls', perimeter: 40, height: 8, openings: [{ width: 3, height: 80 }] };
+    const [{ id }] = await withTenant(
+      t.ctx.pool,
+      o.firmId,
+      async (tx) =>
+        (
+          await tx.client.query<{ id: string }>(
+            `insert into surfaces (tenant_id, room_id, name, shape, length_unit) values ($1, $2, 'Walls', $3, 'ft') returning id`,
+            [tx.tenantId, roomId, shape],
+          )
+        ).rows,
+    );
+    const page = await o.agent.get(`/api/takeoff/sites/${siteId}`);
+    expect(page.status).toBe(200);
+    // as it was saved: 40 × 8 − 3 × 80 = 80 ft² (common practice, no source)
+    expect(page.body.rooms[0].surfaces[0].measure.quantity).toBe(80);
+    const renamed = await o.agent.patch(`/api/takeoff/surfaces/${id}`).set('x-csrf-token', o.csrf()).send({ name: 'North walls' });
+    expect(renamed.status).toBe(200);
+    const saved = await o.agent.patch(`/api/takeoff/surfaces/${id}`).set('x-csrf-token', o.csrf()).send({ name: 'North walls', shape });
+    expect(fields(saved.body)).toEqual(['shape.openings.0.height']);
+  });
+
+  it('refuses a size too small or too big to measure, naming it, so the site page keeps opening', async () => {
+    const o = await signUpFirm(t.app);
+    const siteId = await makeSite(o);
+    const roomId = await makeRoom(o, siteId);
+    // A rise of 1e-300 under a wide span was once saved with an area of NaN, and the page answered 500 from then on.
+    const flat = await addSurface(o, roomId, { name: 'Vault', shape: { kind: 'segmentalVault', span: 100000, rise: 1e-300, length: 10 } });
+    expect(flat.status).toBe(400);
+    expect(flat.body.errors).toEqual([{ field: 'shape.rise', message: 'Enter the rise, at least 0.001.' }]);
+    const wide = await addSurface(o, roomId, { name: 'Vault', shape: { kind: 'segmentalVault', span: 100001, rise: 3, length: 10 } });
+    expect(wide.body.errors).toEqual([{ field: 'shape.span', message: 'Enter the span, at most 100000.' }]);
+    const good = await addSurface(o, roomId, { name: 'Vault', shape: { kind: 'segmentalVault', span: 12, rise: 3, length: 20 } });
+    const edited = await o.agent
+      .patch(`/api/takeoff/surfaces/${good.body.id}`)
+      .set('x-csrf-token', o.csrf())
+      .send({ shape: { kind: 'segmentalVault', span: 12, rise: 0.0001, length: 20 } });
+    expect(edited.body.errors).toEqual([{ field: 'shape.rise', message: 'Enter the rise, at least 0.001.' }]);
+    const page = await o.agent.get(`/api/takeoff/sites/${siteId}`);
+    expect(page.status).toBe(200);
+    expect(page.body.rooms[0].surfaces).toEqual([
+      expect.objectContaining({ id: good.body.id, shape: expect.objectContaining({ rise: 3 }) }),
+    ]);
   });
 
   it('renames, orders, duplicates and deletes, auditing creates and deletes', async () => {

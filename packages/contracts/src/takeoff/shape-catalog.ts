@@ -10,6 +10,11 @@ import type { SurfaceKind } from '@layerbook/domain';
 export const SHAPE_LIMITS = {
   /** Far beyond any room; stops typing slips like an extra three zeros from reaching the estimate. */
   sizeMax: 100_000,
+  /**
+   * The smallest length or area taken (a millimetre, a third of one in feet): nothing a painter
+   * measures is smaller, and a rise of 1e-300 under a wide span is no number the engine can work with.
+   */
+  sizeMin: 0.001,
   angleMaxDegrees: 360,
   openingRowsMax: 100,
   openingCountMax: 100,
@@ -75,6 +80,7 @@ export const DIM_WORDS = {
   positive: (noun: string) => `Enter the ${noun}, more than 0.`,
   nonNegative: (noun: string) => `Enter the ${noun}, 0 or more.`,
   tooBig: (noun: string) => `Enter the ${noun}, at most ${SHAPE_LIMITS.sizeMax}.`,
+  tooSmall: (noun: string) => `Enter the ${noun}, at least ${SHAPE_LIMITS.sizeMin}.`,
   whole: (noun: string, min: number, max: number) => `Enter the ${noun} as a whole number from ${min} to ${max}.`,
   angleTooBig: `Enter an angle of at most ${SHAPE_LIMITS.angleMaxDegrees} degrees.`,
   optionalNonNegative: (noun: string) => `Enter the ${noun}, 0 or more, or leave it empty.`,

@@ -26,10 +26,10 @@ function numberFor(rule: DimRule, noun: string): z.ZodNumber {
       .max(MAX, { error: DIM_WORDS.tooBig(noun) });
   }
   const missing = DIM_WORDS.positive(noun);
-  const positive = z.number({ error: missing }).positive({ error: missing });
+  const positive = z.number({ error: missing }).positive({ error: missing, abort: true });
   return rule === 'angle'
     ? positive.max(SHAPE_LIMITS.angleMaxDegrees, { error: DIM_WORDS.angleTooBig })
-    : positive.max(MAX, { error: DIM_WORDS.tooBig(noun) });
+    : positive.min(SHAPE_LIMITS.sizeMin, { error: DIM_WORDS.tooSmall(noun) }).max(MAX, { error: DIM_WORDS.tooBig(noun) });
 }
 
 /** A shape's dimension, with the catalogue's rule and words. */

@@ -16,6 +16,18 @@ export const TAKEOFF_LIMITS = {
 /** Painted area the prep disturbs: the noun its messages use. */
 export const DISTURBED_AREA_NOUN = 'painted area the prep disturbs';
 
+/** A disturbed painted area is kept to hundredths (of a ft² or m²): half of one is the slack of that rounding. */
+const KEPT_HALF_HUNDREDTH = 0.005;
+
+/**
+ * Whether a disturbed painted area is more than the surface it is on (`gross`, the same unit
+ * squared). The whole surface as kept may read up to half a hundredth over its exact area (a fully
+ * sanded 50 ft² ceiling goes metric as 4.65 m² of 4.645152 m²), and that is not more than the surface.
+ */
+export function isMoreThanSurface(disturbed: number, gross: number): boolean {
+  return disturbed > gross + KEPT_HALF_HUNDREDTH;
+}
+
 /** Takeoffs are measured in the firm's unit system: feet or metres. */
 export const TAKEOFF_LENGTH_UNITS = ['ft', 'm'] as const satisfies readonly LengthUnit[];
 export type TakeoffLengthUnit = (typeof TAKEOFF_LENGTH_UNITS)[number];
@@ -108,7 +120,9 @@ export interface TakeoffView {
   readonly totals: TakeoffTotals;
   /**
    * The lead-safe reminder once the measurements show enough disturbed paint in a building from
-   * before 1978 (40 CFR 745.83 minor-repair limits); null otherwise or when the year is not known.
+   * before 1978 (40 CFR 745.83 minor-repair limits); null otherwise. A building whose year is not
+   * known counts as before 1978 while paint is disturbed, as in the estimate, the proposal and the
+   * crew's sheet, and the reminder then asks for the year first.
    */
   readonly leadCaution: Caution | null;
 }

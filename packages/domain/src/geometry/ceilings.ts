@@ -61,6 +61,20 @@ function crossingEdges(corners: ReadonlyArray<Point>): [number, number] | null {
   return null;
 }
 
+/**
+ * The number (from 1) of the first corner the next one repeats, the last corner when it repeats
+ * the first; null when none does. The zero-length edge of a corner typed twice would otherwise
+ * read as the outline crossing itself.
+ */
+function repeatedCorner(corners: ReadonlyArray<Point>): number | null {
+  const n = corners.length;
+  for (let i = 0; i < n; i++) {
+    const next = corners[(i + 1) % n];
+    if (corners[i][0] === next[0] && corners[i][1] === next[1]) return i + 1;
+  }
+  return null;
+}
+
 /** Shoelace formula over the corners in order (either direction); an outline that crosses itself is refused. */
 export function shoelaceArea(corners: ReadonlyArray<readonly [number, number]>, field: string): number {
   if (!isArray(corners) || corners.length < 3) {
@@ -73,6 +87,15 @@ export function shoelaceArea(corners: ReadonlyArray<readonly [number, number]>, 
     requireFiniteNumber(x1, `${field}.corners[${i}][0]`, 'corner x');
     requireFiniteNumber(y1, `${field}.corners[${i}][1]`, 'corner y');
     twice += x1 * y2 - x2 * y1;
+  }
+  const repeated = repeatedCorner(corners);
+  if (repeated !== null) {
+    throw new DomainInputError(
+      `${field}.corners`,
+      repeated === corners.length
+        ? `The last corner (corner ${repeated}) is the same as corner 1. The outline closes by itself: leave the last one out.`
+        : `Corner ${repeated + 1} is the same as corner ${repeated}. Take out the one typed twice.`,
+    );
   }
   const area = Math.abs(twice) / 2;
   if (area === 0) throw new DomainInputError(`${field}.corners`, 'The corners enclose no area (they lie on one line).');

@@ -12,8 +12,15 @@ export interface MeasureParts {
   topHeight: number | null;
 }
 
-/** Builds the result and refuses openings that add up to more than the surface. */
+/**
+ * Builds the result and refuses openings that add up to more than the surface, and sizes whose
+ * result is not a finite number (it would be saved as NaN and every later read would fail on it).
+ */
 export function measureResult(parts: MeasureParts, field: string): SurfaceMeasure {
+  if (!Number.isFinite(parts.gross)) {
+    const what = parts.measure === 'length' ? 'length' : 'area';
+    throw new DomainInputError(field, `These sizes give no ${what} we can work with. Check them for a typing slip.`);
+  }
   const deductions = parts.deductions ?? 0;
   if (deductions > parts.gross) {
     throw new DomainInputError(`${field}.openings`, 'The openings add up to more than the surface itself.');

@@ -206,7 +206,7 @@ describe('areas grow with their dimensions (property)', () => {
 describe('bad inputs name their field', () => {
   it.each<[SurfaceShape, string, RegExp]>([
     [{ kind: 'walls', perimeter: -40, height: 8 }, 'shape.perimeter', /cannot|greater than zero/],
-    [{ kind: 'walls', perimeter: 10, height: 8, openings: [{ width: 10, height: 9 }] }, 'shape.openings', /more than the surface/],
+    [{ kind: 'walls', perimeter: 10, height: 8, openings: [{ width: 6, height: 8, count: 2 }] }, 'shape.openings', /more than the surface/],
     [{ kind: 'walls', perimeter: 10, height: 8, openings: [{ width: 0, height: 9 }] }, 'shape.openings[0].width', /greater than zero/],
     [{ kind: 'sphericalCap', baseRadius: 6, rise: 7 }, 'shape.rise', /more than the base radius/],
     [{ kind: 'sphericalCapFromSphere', sphereRadius: 6, rise: 7 }, 'shape.rise', /more than the sphere radius/],
@@ -245,5 +245,104 @@ describe('bad inputs name their field', () => {
 
   it('uses the caller path', () => {
     expectInputError(() => measureSurface({ kind: 'hemisphere', radius: 0 }, undefined, 'surfaces[2]'), 'surfaces[2].radius');
+  });
+});
+
+describe('each opening fits its wall', () => {
+  it.each<[string, SurfaceShape, string, RegExp]>([
+    // a door typed 80 (inches meant) on an 8 ft wall would take 240 ft² off instead of 20 ft²
+    [
+      'a door taller than its wall',
+      { kind: 'walls', perimeter: 40, height: 8, openings: [{ width: 3, height: 80 }] },
+      'shape.openings[0].height',
+      /taller than the wall/,
+    ],
+    [
+      'an opening wider than the whole perimeter',
+      { kind: 'walls', perimeter: 10, height: 8, openings: [{ width: 11, height: 2 }] },
+      'shape.openings[0].width',
+      /wider than the whole perimeter/,
+    ],
+    [
+      'an opening wider than the way round a round room',
+      { kind: 'roundWalls', radius: 1, height: 8, openings: [{ width: 7, height: 2 }] },
+      'shape.openings[0].width',
+      /wider than the whole way round the room/,
+    ],
+    [
+      'a 5 m window in a 3.14 m curved segment',
+      { kind: 'curvedWall', radius: 2, angleDegrees: 90, height: 8, openings: [{ width: 5, height: 1 }] },
+      'shape.openings[0].width',
+      /wider than the curved wall segment/,
+    ],
+    [
+      'an arch taller than its curved wall',
+      { kind: 'curvedWall', radius: 9, angleDegrees: 90, height: 8, openings: [{ width: 3, height: 9 }] },
+      'shape.openings[0].height',
+      /taller than the wall/,
+    ],
+  ])('refuses %s, naming the opening', (_what, shape, field, message) => {
+    expectInputError(() => measureSurface(shape), field, message);
+  });
+
+  it('takes a surface saved before openings were held to their wall as saved, when reading it', () => {
+    // common practice, no source: 40 × 8 − 3 × 80 = 80, what the surface read when it was saved
+    const saved: SurfaceShape = { kind: 'walls', perimeter: 40, height: 8, openings: [{ width: 3, height: 80 }] };
+    expect(measureSurface(saved, { minDeductedOpeningArea: 0, openingsAsSaved: true }).quantity).toBe(80);
+  });
+
+  it('takes off an opening as tall as the wall and as wide as its run', () => {
+    // common practice, no source: 40 × 8 − 6 × 8 = 272; 10 × 8 − 10 × 1 = 70
+    expect(area({ kind: 'walls', perimeter: 40, height: 8, openings: [{ width: 6, height: 8 }] })).toBe(272);
+    expect(area({ kind: 'walls', perimeter: 10, height: 8, openings: [{ width: 10, height: 1 }] })).toBe(70);
+  });
+});
+
+describe('sizes whose result is not a number', () => {
+  it('refuses a segmental vault with a rise tiny next to its span, naming the rise', () => {
+    // R = (c²/4 + h²)/(2h) overflows, and R·θ would be ∞·0 = NaN (IEEE 754 arithmetic)
+    expectInputError(
+      () => measureSurface({ kind: 'segmentalVault', span: 100000, rise: 1e-300, length: 10 }),
+      'shape.rise',
+      /too small next to the span/,
+    );
+  });
+
+  it('refuses any shape whose area overflows, naming the shape', () => {
+    expectInputError(() => measureSurface({ kind: 'walls', perimeter: 1e200, height: 1e200 }), 'shape', /no area we can work with/);
+    expectInputError(
+      () => measureSurface({ kind: 'beams', count: 2, length: 1e308, width: 1, depth: 1, measureBy: 'length' }),
+      'shape',
+      /no length we can work with/,
+    );
+  });
+});
+
+describe('a ceiling corner typed twice', () => {
+  it.each<[string, ReadonlyArray<readonly [number, number]>, RegExp]>([
+    [
+      'twice in a row',
+      [
+        [0, 0],
+        [0, 0],
+        [10, 0],
+        [10, 10],
+        [0, 10],
+      ],
+      /^Corner 2 is the same as corner 1\./,
+    ],
+    [
+      'the first corner typed again at the end',
+      [
+        [0, 0],
+        [10, 0],
+        [10, 10],
+        [0, 10],
+        [0, 0],
+      ],
+      /^The last corner \(corner 5\) is the same as corner 1\./,
+    ],
+  ])('says so (%s) rather than that the outline crosses itself', (_what, corners, message) => {
+    expectInputError(() => measureSurface({ kind: 'ceilingPolygon', corners }), 'shape.corners', message);
   });
 });

@@ -18,9 +18,10 @@ export const DEFAULT_TAKEOFF_SETTINGS: TakeoffSettings = { minDeductedOpeningAre
  */
 export function measureSurface(shape: SurfaceShape, settings: TakeoffSettings = DEFAULT_TAKEOFF_SETTINGS, field = 'shape'): SurfaceMeasure {
   const minOpening = requireNonNegative(settings.minDeductedOpeningArea, 'settings.minDeductedOpeningArea', 'smallest deducted opening');
+  const openings = { minArea: minOpening, asSaved: settings.openingsAsSaved === true };
   switch (shape.kind) {
     case 'walls':
-      return measureWalls(shape, minOpening, field);
+      return measureWalls(shape, openings, field);
     case 'gable':
       return measureGable(shape, field);
     case 'trapezoid':
@@ -32,9 +33,9 @@ export function measureSurface(shape: SurfaceShape, settings: TakeoffSettings = 
     case 'ceilingPolygon':
       return measureCeilingPolygon(shape, field);
     case 'roundWalls':
-      return measureRoundWalls(shape, minOpening, field);
+      return measureRoundWalls(shape, openings, field);
     case 'curvedWall':
-      return measureCurvedWall(shape, minOpening, field);
+      return measureCurvedWall(shape, openings, field);
     case 'cone':
       return measureCone(shape, field);
     case 'pyramid':

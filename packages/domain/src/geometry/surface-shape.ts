@@ -39,6 +39,12 @@ export type SurfaceKind = SurfaceShape['kind'];
 export interface TakeoffSettings {
   /** Openings smaller than this (in unit²) are not deducted; the cutting-in is real either way. */
   minDeductedOpeningArea: number;
+  /**
+   * Deduct each opening as saved even when it is taller or wider than its wall. Only for reading a
+   * surface saved before such openings were refused, so its takeoff page still opens and it can be
+   * corrected; a save and an estimate leave it unset and refuse them.
+   */
+  openingsAsSaved?: boolean;
 }
 
 export interface SurfaceMeasure {

@@ -28,6 +28,10 @@ export function measureSegmentalVault(
     throw new DomainInputError(`${field}.rise`, 'The rise of a segmental vault cannot exceed half its span.');
   }
   const R = ((c * c) / 4 + h * h) / (2 * h);
+  // A rise tiny next to its span (1e-300 under 100000) overflows R, and R·θ would be ∞·0 = NaN.
+  if (!Number.isFinite(R)) {
+    throw new DomainInputError(`${field}.rise`, 'The rise is too small next to the span to measure. Check it for a typing slip.');
+  }
   const theta = 2 * Math.asin(Math.min(1, c / (2 * R)));
   return measureResult(
     {

@@ -1,3 +1,4 @@
+import { DomainInputError } from '../errors/domain-input-error';
 import { requireInteger, requirePositive } from '../errors/input-checks';
 import { positiveAt } from './dimension-checks';
 import { measureResult, topFrom } from './measure-result';
@@ -9,8 +10,30 @@ function checkOpening(o: Opening, at: string): void {
   if (o.count !== undefined) requireInteger(o.count, `${at}.count`, 1, 'opening count');
 }
 
-/** Σ w·h·count of the openings at least `minArea` large; smaller ones stay in the area. */
-export function openingDeductions(openings: readonly Opening[] | undefined, minArea: number, field: string): number {
+/** How a wall takes its openings: the smallest deducted, and whether each is held to the wall (see TakeoffSettings). */
+export interface OpeningDeduction {
+  readonly minArea: number;
+  readonly asSaved: boolean;
+}
+
+/**
+ * How big one opening can be in its wall: no taller than the wall, no wider than the wall's whole
+ * run. A door typed as 80 (inches meant) on an 8 ft wall would otherwise take 240 ft² off it.
+ */
+export interface OpeningRoom {
+  readonly height: number;
+  readonly width: number;
+  /** the run in a message: "An opening cannot be wider than ${run}." */
+  readonly run: string;
+}
+
+/** Σ w·h·count of the openings at least `rule.minArea` large; smaller ones stay in the area. */
+export function openingDeductions(
+  openings: readonly Opening[] | undefined,
+  rule: OpeningDeduction,
+  room: OpeningRoom,
+  field: string,
+): number {
   let total = 0;
   const list = openings ?? [];
   for (let i = 0; i < list.length; i++) {
@@ -30,7 +53,11 @@ export function openingDeductions(openings: readonly Opening[] | undefined, minA
       n >= 1
     ))
       checkOpening(o, `${field}.openings[${i}]`);
-    if (w * h >= minArea) total += w * h * n;
+    if (!rule.asSaved) {
+      if (h > room.height) throw new DomainInputError(`${field}.openings[${i}].height`, 'An opening cannot be taller than the wall.');
+      if (w > room.width) throw new DomainInputError(`${field}.openings[${i}].width`, `An opening cannot be wider than ${room.run}.`);
+    }
+    if (w * h >= rule.minArea) total += w * h * n;
   }
   return total;
 }
@@ -38,7 +65,7 @@ export function openingDeductions(openings: readonly Opening[] | undefined, minA
 /** Straight walls: perimeter × height less openings (common practice, no source). */
 export function measureWalls(
   s: { perimeter: number; height: number; openings?: Opening[] },
-  minOpening: number,
+  openings: OpeningDeduction,
   field: string,
 ): SurfaceMeasure {
   const p = positiveAt(s.perimeter, field, 'perimeter', 'perimeter');
@@ -46,7 +73,7 @@ export function measureWalls(
   return measureResult(
     {
       gross: p * h,
-      deductions: openingDeductions(s.openings, minOpening, field),
+      deductions: openingDeductions(s.openings, openings, { height: h, width: p, run: 'the whole perimeter' }, field),
       formula: 'P·H − openings',
       isCeiling: false,
       isCurved: false,

@@ -23,11 +23,17 @@ describe('measureLive', () => {
   });
 
   it('names a refused field in the API path style, so the form finds its control', () => {
-    const live = measureLive({ kind: 'walls', perimeter: 4, height: 2, openings: [{ width: 5, height: 5 }] }, EVERY_OPENING);
+    const live = measureLive({ kind: 'walls', perimeter: 4, height: 2, openings: [{ width: 3, height: 2, count: 2 }] }, EVERY_OPENING);
     expect(live).toMatchObject({
       state: 'refused',
       field: 'shape.openings',
       message: 'The openings add up to more than the surface itself.',
+    });
+    // the engine's `shape.openings[0].height` is the form's `shape.openings.0.height`
+    expect(measureLive({ kind: 'walls', perimeter: 4, height: 2, openings: [{ width: 1, height: 5 }] }, EVERY_OPENING)).toMatchObject({
+      state: 'refused',
+      field: 'shape.openings.0.height',
+      message: 'An opening cannot be taller than the wall.',
     });
   });
 });

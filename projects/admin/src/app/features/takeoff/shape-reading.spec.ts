@@ -19,6 +19,11 @@ describe('shape reading', () => {
     ['length', 'radius', 0, 'Enter the radius, more than 0.'],
     ['length', 'radius', 9, null],
     ['length', 'radius', 100_001, 'Enter the radius, at most 100000.'],
+    // a rise of 1e-300 under a wide span once saved a surface the engine measured as NaN
+    ['length', 'rise', 1e-300, 'Enter the rise, at least 0.001.'],
+    ['length', 'rise', 0.001, null],
+    ['area', 'panel area', 0.0005, 'Enter the panel area, at least 0.001.'],
+    ['depth0', 'depth', 0.0005, null],
     ['depth0', 'depth', 0, null],
     ['depth0', 'depth', -1, 'Enter the depth, 0 or more.'],
     ['angle', 'angle in degrees', 361, 'Enter an angle of at most 360 degrees.'],

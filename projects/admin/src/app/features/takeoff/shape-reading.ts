@@ -22,7 +22,8 @@ export function dimMessage(rule: DimRule, noun: string, value: number | null): s
   } else if (value === null || Number.isNaN(value) || value <= 0) {
     return DIM_WORDS.positive(noun);
   }
-  if (rule === 'angle' && value > SHAPE_LIMITS.angleMaxDegrees) return DIM_WORDS.angleTooBig;
+  if (rule === 'angle') return value > SHAPE_LIMITS.angleMaxDegrees ? DIM_WORDS.angleTooBig : null;
+  if (rule !== 'depth0' && value < SHAPE_LIMITS.sizeMin) return DIM_WORDS.tooSmall(noun);
   return value > SHAPE_LIMITS.sizeMax ? DIM_WORDS.tooBig(noun) : null;
 }
 

@@ -1,5 +1,5 @@
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import { TranslatePipe } from '@ngx-translate/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import type { SurfaceShape } from '@layerbook/domain';
 import { SKETCH_HEIGHT, SKETCH_WIDTH, sketchShape } from './sketch';
 
@@ -65,12 +65,14 @@ import { SKETCH_HEIGHT, SKETCH_WIDTH, sketchShape } from './sketch';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ShapeSketch {
+  private readonly translate = inject(TranslateService);
+
   readonly shape = input.required<SurfaceShape | null>();
   readonly unit = input.required<string>();
 
   protected readonly viewBox = `0 0 ${SKETCH_WIDTH} ${SKETCH_HEIGHT}`;
   protected readonly sketch = computed(() => {
     const shape = this.shape();
-    return shape ? sketchShape(shape, this.unit()) : null;
+    return shape ? sketchShape(shape, this.unit(), (key, params) => String(this.translate.instant(key, params))) : null;
   });
 }

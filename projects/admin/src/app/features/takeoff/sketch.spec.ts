@@ -1,7 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { SHAPE_CHOICES } from '@layerbook/contracts/types';
 import type { SurfaceShape } from '@layerbook/domain';
+import takeoff from '../../../i18n/takeoff/en.json';
 import { sketchShape } from './sketch';
+
+/** The area's English words for the drawing, as the translate service gives them. */
+const say = (key: string, params: { count: number }): string => {
+  const words: Record<string, string> = takeoff.shapeSketch;
+  return words[key.replace('takeoff.shapeSketch.', '')].replace('{{count}}', String(params.count));
+};
 
 describe('sketchShape', () => {
   it.each<[SurfaceShape, string, boolean]>([
@@ -25,14 +32,38 @@ describe('sketchShape', () => {
       true,
     ],
   ])('describes %j in words for people who cannot see the drawing', (shape, description, isToScale) => {
-    const sketch = sketchShape(shape, 'ft');
+    const sketch = sketchShape(shape, 'ft', say);
     expect(sketch.description).toBe(description);
     expect(sketch.isToScale).toBe(isToScale);
     expect(sketch.lines.length).toBeGreaterThan(0);
   });
 
+  it.each<[SurfaceShape, string]>([
+    [{ kind: 'walls', perimeter: 40, height: 9 }, 'no openings'],
+    // one door once read "1 openings"
+    [{ kind: 'walls', perimeter: 40, height: 9, openings: [{ width: 3, height: 7 }] }, '1 opening'],
+    [{ kind: 'roundWalls', radius: 9, height: 10, openings: [{ width: 3, height: 7, count: 1 }] }, '1 opening'],
+    [
+      {
+        kind: 'curvedWall',
+        radius: 9,
+        angleDegrees: 90,
+        height: 10,
+        openings: [
+          { width: 3, height: 7 },
+          { width: 4, height: 5, count: 2 },
+        ],
+      },
+      '3 openings',
+    ],
+  ])('counts the openings of %j in plain words: "%s"', (shape, words) => {
+    const sketch = sketchShape(shape, 'ft', say);
+    expect(sketch.description).toMatch(new RegExp(`, ${words}\\.$`));
+    expect(sketch.labels.map((l) => l.text)).toContain(words);
+  });
+
   it('draws a cone in section with both slopes up to the peak, the span between the eaves as a guide', () => {
-    const sketch = sketchShape({ kind: 'cone', radius: 8, rise: 6 }, 'ft');
+    const sketch = sketchShape({ kind: 'cone', radius: 8, rise: 6 }, 'ft', say);
     const points = [...sketch.lines[0].matchAll(/(-?[\d.]+) (-?[\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
     expect(points).toHaveLength(3);
     const [left, peak, right] = points;
@@ -43,7 +74,7 @@ describe('sketchShape', () => {
   });
 
   it('draws a half-sphere dome in section: a half circle on its springing line, rise equal to the radius', () => {
-    const sketch = sketchShape({ kind: 'hemisphere', radius: 9 }, 'ft');
+    const sketch = sketchShape({ kind: 'hemisphere', radius: 9 }, 'ft', say);
     expect(sketch.description).toBe('Half-sphere dome in section: r 9 ft, rise 9 ft.');
     expect(sketch.isToScale).toBe(true);
     expect(sketch.lines[0]).toMatch(/ A /);
@@ -87,7 +118,7 @@ describe('sketchShape', () => {
             }
           : {}),
       } as SurfaceShape;
-      const sketch = sketchShape(shape, 'm');
+      const sketch = sketchShape(shape, 'm', say);
       expect(sketch.description, choice.kind).not.toBe('');
       expect(
         sketch.labels.every((l) => Number.isFinite(l.x) && Number.isFinite(l.y)),

@@ -23,6 +23,21 @@ export interface Sketch {
   readonly description: string;
 }
 
+/** The area's words the drawing uses (`takeoff.shapeSketch.*`): a key and its params in, the text out. */
+export type SketchWords = (key: string, params: { readonly count: number }) => string;
+
+/** "no openings", "1 opening", "3 openings": alike openings counted one by one. */
+function openingsText(openings: readonly { count?: number }[] | undefined, say: SketchWords): string {
+  const count = (openings ?? []).reduce((n, o) => n + (o.count ?? 1), 0);
+  const key =
+    count === 0
+      ? 'takeoff.shapeSketch.openingCountNone'
+      : count === 1
+        ? 'takeoff.shapeSketch.openingCountOne'
+        : 'takeoff.shapeSketch.openingCount';
+  return say(key, { count });
+}
+
 export const SKETCH_WIDTH = 240;
 export const SKETCH_HEIGHT = 150;
 const PAD = 28;
@@ -64,7 +79,7 @@ function arcPath(a: Pt, b: Pt, chord: number, rise: number): string {
   return `M ${a[0]} ${a[1]} A ${round(r)} ${round(r)} 0 ${large} 1 ${b[0]} ${b[1]}`;
 }
 
-export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
+export function sketchShape(shape: SurfaceShape, unit: string, say: SketchWords): Sketch {
   const u = (n: number) => `${shortNumber(n)} ${unit}`;
   switch (shape.kind) {
     case 'walls':
@@ -100,7 +115,7 @@ export function sketchShape(shape: SurfaceShape, unit: string): Sketch {
           : shape.kind === 'roundWalls'
             ? `round, radius ${u(shape.radius)}`
             : `radius ${u(shape.radius)}, ${shortNumber(shape.angleDegrees)}°`;
-      const count = openings.length === 0 ? 'no openings' : `${(shape.openings ?? []).reduce((n, o) => n + (o.count ?? 1), 0)} openings`;
+      const count = openingsText(shape.openings, say);
       return {
         lines: [poly(box), ...boxes],
         guides: [],

@@ -11,6 +11,7 @@ import { TranslatePipe, TranslateService } from '@ngx-translate/core';
 import {
   DIM_WORDS,
   DISTURBED_AREA_NOUN,
+  isMoreThanSurface,
   SHAPE_GROUPS,
   TAKEOFF_LIMITS as L,
   shapeChoice,
@@ -19,7 +20,7 @@ import {
   type SurfaceView,
   type TakeoffLengthUnit,
 } from '@layerbook/contracts/types';
-import { measureText, plainNumber, workingText } from '@layerbook/domain';
+import { convertArea, measureText, plainNumber, workingText } from '@layerbook/domain';
 import { applyProblem } from '../../core/errors/apply-problem';
 import { toProblem } from '../../core/errors/problem';
 import { hydratedSignal } from '../../shared/forms/hydrated';
@@ -103,10 +104,9 @@ export class SurfaceForm implements OnInit {
     const surface = this.surface();
     if (surface) {
       loadShape(this.shape, surface, this.unit());
-      const disturbed = surface.disturbedPaintedArea;
       this.form.controls.name.setValue(surface.name);
       this.form.controls.notes.setValue(surface.notes);
-      this.form.controls.disturbedPaintedArea.setValue(disturbed === null ? '' : plainNumber(disturbed));
+      this.form.controls.disturbedPaintedArea.setValue(disturbedFormValue(surface, this.unit()));
     } else {
       enableFor(this.shape);
     }
@@ -114,8 +114,8 @@ export class SurfaceForm implements OnInit {
     this.shape.controls.kind.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe((kind) => {
       enableFor(this.shape);
       const next = shapeChoice(kind);
-      // A name nobody typed follows the shape ("Walls" → "Turret ceiling").
-      if (this.form.controls.name.pristine) this.form.controls.name.setValue(next.defaultName, { emitEvent: false });
+      // A new surface's name nobody typed follows the shape ("Walls" → "Turret ceiling"); a saved name stays.
+      if (this.isNew() && this.form.controls.name.pristine) this.form.controls.name.setValue(next.defaultName, { emitEvent: false });
       this.choice.set(next);
     });
     this.form.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe(() => this.remeasure());
@@ -208,7 +208,7 @@ export class SurfaceForm implements OnInit {
       this.mark(this.form.get(live.field), live.message);
     } else if (live.state === 'measured' && live.measure.measure === 'area') {
       const disturbed = readNumber(this.form.controls.disturbedPaintedArea.value);
-      if (disturbed !== null && disturbed > live.measure.gross) {
+      if (disturbed !== null && isMoreThanSurface(disturbed, live.measure.gross)) {
         this.mark(this.form.controls.disturbedPaintedArea, this.words('takeoff.surfaceForm.disturbedTooBig'));
       }
     }
@@ -224,6 +224,16 @@ export class SurfaceForm implements OnInit {
     control.markAsDirty();
     this.marked.push(control);
   }
+}
+
+/**
+ * The saved disturbed area in the unit the form measures in now, as the shape is (shapeFormValue):
+ * 5 ft² saved before the firm went metric is shown, and saved again, as 0.46 m², never as 5 m².
+ * Hundredths, as the area is kept.
+ */
+function disturbedFormValue(surface: SurfaceView, unit: TakeoffLengthUnit): string {
+  const saved = surface.disturbedPaintedArea;
+  return saved === null ? '' : plainNumber(convertArea(saved, surface.lengthUnit, unit), 2);
 }
 
 /** The same range and words as the API (contracts: takeoff.ts). */
