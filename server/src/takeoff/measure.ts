@@ -5,11 +5,11 @@ import {
   convertArea,
   convertMeasure,
   dottedPath,
+  leadRuleYear,
   leadStatus,
   measureSurface,
   safetyCautions,
   type SurfaceMeasure,
-  TARGET_HOUSING_BEFORE,
   type TakeoffSettings,
   treatedAsTargetHousing,
 } from '@layerbook/domain';
@@ -73,7 +73,7 @@ export function leadCaution(
   const cautions = safetyCautions({
     lengthUnit: unit,
     // the estimate's rule year: not recorded, with paint disturbed, is a year before 1978
-    yearBuilt: yearBuilt ?? TARGET_HOUSING_BEFORE - 1,
+    yearBuilt: leadRuleYear(yearBuilt, disturbedPaint.length > 0),
     disturbedPaint,
     workingLevel: 0,
     products: [],
