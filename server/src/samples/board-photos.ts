@@ -3,8 +3,8 @@ import { sampleBoardPhotos, TenantTx } from '@layerbook/db';
 import { addPhoto, deletePhoto, listPhotos, type PhotoAlbum } from '../files/photos';
 import type { ObjectKeys, StoredImage } from '../files/stored-files';
 import type { Actor } from '../http/actor';
-import { conflict } from '../http/problem';
-import { findBoard } from './boards';
+import { conflict, type HttpError } from '../http/problem';
+import { findBoard, type BoardRow } from './boards';
 
 /** Sample-board photos: what the client looks at before approving (files/photos.ts does the rest). */
 export const BOARD_PHOTOS: PhotoAlbum = {
@@ -44,6 +44,40 @@ export async function listBoardPhotos(tx: TenantTx, boardId: string): Promise<Bo
   return (await boardPhotosOf(tx, [boardId])).get(boardId) ?? [];
 }
 
+/**
+ * Photos are added and deleted only while the board is being made: once shown, the client answers
+ * on what they saw, and a turned-down board keeps the photos they turned down. Why not, in words.
+ */
+function photosFixed(board: BoardRow, change: 'add' | 'delete'): HttpError | null {
+  const isAdd = change === 'add';
+  switch (board.status) {
+    case 'draft':
+      return null;
+    case 'shown':
+      return conflict(
+        `The client has been shown this board with these photos, so ${isAdd ? 'no more can be added' : 'they stay as shown'}. If they ask for changes, add new ones to the next round.`,
+      );
+    case 'changes_requested':
+      return conflict(
+        `The client asked for changes to this board as it was shown, so ${isAdd ? 'no more photos can be added' : 'its photos stay on record'}. Add new ones to the next round.`,
+      );
+    case 'approved':
+      return conflict(
+        isAdd
+          ? 'The client approved this board with its photos; start a new board to show different ones.'
+          : 'The client approved this board with these photos, so they stay on record.',
+      );
+  }
+}
+
+/** Before an upload's body is read: the board is there and still takes photos (404 or 409 otherwise). */
+export async function findBoardTakingPhotos(tx: TenantTx, boardId: string): Promise<BoardRow> {
+  const board = await findBoard(tx, boardId);
+  const refusal = photosFixed(board, 'add');
+  if (refusal) throw refusal;
+  return board;
+}
+
 /** Writes the file row and links it to the board in one transaction; the bytes are already stored. */
 export async function addBoardPhoto(
   tx: TenantTx,
@@ -52,10 +86,10 @@ export async function addBoardPhoto(
   caption: string,
   stored: StoredImage,
 ): Promise<BoardPhotoView> {
-  // Locked, so a client's approval cannot slip in between this check and the insert.
+  // Locked, so showing the board cannot slip in between this check and the insert.
   const board = await findBoard(tx, boardId, true);
-  if (board.status === 'approved')
-    throw conflict('The client approved this board with its photos; start a new board or round to show different ones.');
+  const refusal = photosFixed(board, 'add');
+  if (refusal) throw refusal;
   const view = await addPhoto(tx, BOARD_PHOTOS, actor, { id: boardId, about: { label: board.label, round: board.round } }, caption, stored);
   return { ...view, boardId };
 }
@@ -63,8 +97,7 @@ export async function addBoardPhoto(
 /** Removes the photo and its file row; returns the object keys to delete after the commit. */
 export function deleteBoardPhoto(tx: TenantTx, actor: Actor, photoId: string): Promise<ObjectKeys> {
   return deletePhoto(tx, BOARD_PHOTOS, actor, photoId, async (boardId) => {
-    const board = await findBoard(tx, boardId, true);
-    // The approved board is the control sample: the photos the client approved stay on record.
-    if (board.status === 'approved') throw conflict('The client approved this board with these photos, so they stay on record.');
+    const refusal = photosFixed(await findBoard(tx, boardId, true), 'delete');
+    if (refusal) throw refusal;
   });
 }

@@ -1,10 +1,11 @@
-import type { FinishSnapshot, SampleBoardInput, SampleBoardListItem, SampleBoardUpdate, SampleBoardView } from '@layerbook/contracts';
+import type { FinishSnapshot, SampleBoardInput, SampleBoardUpdate, SampleBoardView } from '@layerbook/contracts';
 import { and, clients, eq, estimates, portalUsers, sampleBoards, sites, TenantTx } from '@layerbook/db';
 import { siteLine } from '@layerbook/domain';
 import type { AppContext } from '../context';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
 import { badRequest, conflict, notFound } from '../http/problem';
+import { ensurePortalAccount } from '../proposals/client-portal-account';
 import { boardPhotosOf } from './board-photos';
 import { mailBoardShown } from './sample-mail';
 import { describeFinish, snapshotFinish } from './snapshot';
@@ -22,47 +23,32 @@ export async function findBoard(tx: TenantTx, boardId: string, lock = false): Pr
   return row;
 }
 
-export async function listBoards(tx: TenantTx, filter: { clientId?: string; siteId?: string }): Promise<SampleBoardListItem[]> {
-  // One query with the first photo and the count per board: the list shows a thumbnail per row.
-  const { rows } = await tx.client.query<{
-    id: string;
-    label: string;
-    client_id: string;
-    client_name: string;
-    site_id: string | null;
-    round: number;
-    status: SampleBoardListItem['status'];
-    finish_name: string | null;
-    photo_count: number;
-    cover_file_id: string | null;
-    decided_at: Date | null;
-    created_at: Date;
-  }>(
-    `select b.id, b.label, b.client_id, c.name as client_name, b.site_id, b.round, b.status,
-            b.finish_snapshot->>'systemName' as finish_name,
-            (select count(*)::int from sample_board_photos p where p.tenant_id = b.tenant_id and p.board_id = b.id) as photo_count,
-            (select p.file_id from sample_board_photos p where p.tenant_id = b.tenant_id and p.board_id = b.id order by p.created_at, p.id limit 1) as cover_file_id,
-            b.decided_at, b.created_at
-       from sample_boards b join clients c on c.tenant_id = b.tenant_id and c.id = b.client_id
-      where b.tenant_id = $1 and ($2::uuid is null or b.client_id = $2) and ($3::uuid is null or b.site_id = $3)
-      order by b.created_at desc, b.id desc
-      limit 500`,
-    [tx.tenantId, filter.clientId ?? null, filter.siteId ?? null],
-  );
-  return rows.map((r): SampleBoardListItem => ({
-    id: r.id,
-    label: r.label,
-    clientId: r.client_id,
-    clientName: r.client_name,
-    siteId: r.site_id,
-    round: r.round,
-    status: r.status,
-    finishName: r.finish_name,
-    photoCount: r.photo_count,
-    coverThumbnailUrl: r.cover_file_id ? `/api/files/${r.cover_file_id}/thumbnail` : null,
-    decidedAt: r.decided_at?.toISOString() ?? null,
-    createdAt: r.created_at.toISOString(),
-  }));
+type BoardClient = { id: string; name: string; email: string };
+
+/**
+ * The board locked for a write that makes a row pointing at its client (the next round, a portal
+ * login): the client first, `for key share`, then the board `for update`. A merge locks the clients
+ * before it moves their boards, so the other order deadlocks against it. This way a merge under way
+ * finishes first, and the board is read again with the client it was moved to.
+ */
+async function lockBoardAndClient(tx: TenantTx, boardId: string): Promise<{ board: BoardRow; client: BoardClient }> {
+  for (let attempt = 0; attempt < 3; attempt++) {
+    const { clientId } = await findBoard(tx, boardId);
+    const client = (
+      await tx.db
+        .select({ id: clients.id, name: clients.name, email: clients.email })
+        .from(clients)
+        .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, clientId)))
+        .for('key share')
+    )[0];
+    // Merged away while we waited: the board now belongs to the kept client.
+    if (!client) continue;
+    const board = await findBoard(tx, boardId, true);
+    // Held `for key share`, the client cannot be merged away any more; a board moved anyway is not ours to guess at.
+    if (board.clientId !== client.id) break;
+    return { board, client };
+  }
+  throw conflict("This board's client was being merged with another at that moment. Try again.");
 }
 
 export async function getBoard(tx: TenantTx, boardId: string): Promise<SampleBoardView> {
@@ -114,7 +100,11 @@ export async function getBoard(tx: TenantTx, boardId: string): Promise<SampleBoa
   };
 }
 
-/** The client, site and estimate must be this firm's and belong together; each refusal names its field. */
+/**
+ * The client, site and estimate must be this firm's and belong together; each refusal names its field.
+ * The client is read `for key share`: a merge removing it finishes first and it is then gone (400),
+ * where a plain read would let the insert fail on the foreign key (500).
+ */
 async function checkLinks(
   tx: TenantTx,
   input: { clientId: string; siteId?: string | undefined; estimateId?: string | undefined },
@@ -124,6 +114,7 @@ async function checkLinks(
       .select({ id: clients.id })
       .from(clients)
       .where(and(eq(clients.tenantId, tx.tenantId), eq(clients.id, input.clientId)))
+      .for('key share')
   )[0];
   if (!client) throw badRequest([{ field: 'clientId', message: 'Choose one of your clients.' }]);
   if (input.siteId) {
@@ -186,6 +177,11 @@ export async function updateBoard(
   // Locked, as adding a photo is: a client's approval cannot slip in between this check and the write.
   const board = await findBoard(tx, boardId, true);
   if (board.status === 'approved') throw conflict('The client has approved this board; it is now the control sample and stays as it was.');
+  // The client knows the board by its label (portal, e-mail, their answer): it changes only on a draft.
+  if (input.label !== undefined && input.label !== board.label && board.status !== 'draft')
+    throw conflict('The client has seen this board under its label, so it stays as shown. Start the next round to change it.', [
+      { field: 'label', message: 'The label of a board the client has seen cannot change.' },
+    ]);
   const changes: Partial<typeof sampleBoards.$inferInsert> = { updatedAt: now };
   if (input.label !== undefined) changes.label = input.label;
   if (input.notes !== undefined) changes.notes = input.notes;
@@ -222,8 +218,15 @@ export async function showBoard(
   now: Date,
 ): Promise<SampleBoardView> {
   // Locked: a second show (a double click) waits here and then finds the board shown (409), so the client is told and audited once.
-  const board = await findBoard(tx, boardId, true);
+  const { board, client } = await lockBoardAndClient(tx, boardId);
   if (board.status !== 'draft') throw conflict('This board has already been shown to the client.');
+  // Boards come before any proposal, so the client may have no portal login yet: made here, as a proposal's send does.
+  if (!client.email.trim())
+    throw badRequest(
+      [{ field: 'client.email', message: "Add the client's e-mail address before showing them the board." }],
+      'The client has no e-mail address to tell them about the board.',
+    );
+  await ensurePortalAccount(tx, client);
   await tx.db
     .update(sampleBoards)
     .set({ status: 'shown', updatedAt: now })
@@ -254,7 +257,7 @@ async function findNextRound(tx: TenantTx, board: BoardRow): Promise<BoardRow | 
 /** After the client asked for changes: a new draft, round N+1, carrying the finish forward to be adjusted. Photos stay with the board they show. */
 export async function startNextRound(tx: TenantTx, actor: Actor, boardId: string): Promise<SampleBoardView> {
   // Locked: a second start (a double click) waits here and then finds the round this one made (409, not the unique index's 500).
-  const board = await findBoard(tx, boardId, true);
+  const { board } = await lockBoardAndClient(tx, boardId);
   if (board.status !== 'changes_requested') throw conflict('Start the next round once the client has asked for changes.');
   if (await findNextRound(tx, board)) throw conflict(`Round ${board.round + 1} of this board has already been started.`);
   const row = (

@@ -3,7 +3,7 @@ import {
   sampleBoardListQuery,
   sampleBoardUpdate,
   uuid,
-  type ItemList,
+  type KeysetPage,
   type SampleBoardListItem,
   type SampleBoardView,
 } from '@layerbook/contracts';
@@ -14,8 +14,9 @@ import { mountPhotoRoutes } from '../files/photo-routes';
 import { staffActor } from '../http/actor';
 import { withStaff } from '../http/guards';
 import { parse, parseChanges } from '../http/validate';
-import { addBoardPhoto, deleteBoardPhoto, listBoardPhotos } from './board-photos';
-import { createBoard, findBoard, getBoard, listBoards, showBoard, startNextRound, updateBoard } from './boards';
+import { addBoardPhoto, deleteBoardPhoto, findBoardTakingPhotos, listBoardPhotos } from './board-photos';
+import { listBoards } from './board-list';
+import { createBoard, getBoard, showBoard, startNextRound, updateBoard } from './boards';
 
 const boardParam = z.strictObject({ id: uuid('sample board id') });
 const photoParam = z.strictObject({ id: uuid('photo id') });
@@ -33,15 +34,15 @@ export function sampleRoutes(ctx: AppContext): Router {
     ownerId: (req) => parse(boardParam, req.params).id,
     photoId: (req) => parse(photoParam, req.params).id,
     roles: { read: 'crew', upload: 'crew', delete: 'office' },
-    findOwner: findBoard,
+    findOwner: findBoardTakingPhotos,
     list: listBoardPhotos,
     add: addBoardPhoto,
     remove: deleteBoardPhoto,
   });
 
   router.get('/', async (req, res) => {
-    const items = await withStaff(ctx, req, 'crew', (tx) => listBoards(tx, parse(sampleBoardListQuery, req.query)));
-    res.json({ items } satisfies ItemList<SampleBoardListItem>);
+    const page = await withStaff(ctx, req, 'crew', (tx) => listBoards(tx, parse(sampleBoardListQuery, req.query)));
+    res.json(page satisfies KeysetPage<SampleBoardListItem>);
   });
 
   router.post('/', async (req, res) => {

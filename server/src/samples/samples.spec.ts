@@ -94,7 +94,7 @@ describe('sample boards (staff)', () => {
     expect(fields((await send({ clientId: f.clientId, label: ' ', colour: 'red' })).body)).toEqual(['colour', 'label']);
     const otherClientSite = (await addClient(f, 'Someone Else')).siteId;
     expect(fields((await send({ clientId: f.clientId, siteId: otherClientSite, label: 'A' })).body)).toEqual(['siteId']);
-    expect((await f.agent.get('/api/samples')).body).toEqual({ items: [] });
+    expect((await f.agent.get('/api/samples')).body).toEqual({ items: [], nextCursor: null });
   });
 
   it('edits a draft, re-snapshots its finish, and keeps a shown finish as shown', async () => {
@@ -187,7 +187,7 @@ describe('sample boards (staff)', () => {
       ['thumbnail', () => b.agent.get(photo.thumbnailUrl)],
     ];
     for (const [name, call] of calls) expect({ name, status: (await call()).status }).toEqual({ name, status: 404 });
-    expect((await b.agent.get('/api/samples')).body).toEqual({ items: [] });
+    expect((await b.agent.get('/api/samples')).body).toEqual({ items: [], nextCursor: null });
     expect(await storedFor(t.ctx, b.firmId)).toEqual({ keys: [], rows: 0 });
   });
 

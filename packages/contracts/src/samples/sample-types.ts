@@ -57,7 +57,7 @@ export interface FinishSnapshot {
   readonly layers: readonly SnapshotLayer[];
 }
 
-/** GET /api/samples (items): one line per board with its first photo. */
+/** GET /api/samples (a KeysetPage, newest first): one line per board with its first photo. */
 export interface SampleBoardListItem {
   readonly id: string;
   readonly label: string;
@@ -141,10 +141,14 @@ export interface SampleBoardUpdate {
   readonly finishSystemId?: string | null;
 }
 
-/** GET /api/samples?clientId=&siteId= */
+/** GET /api/samples?clientId=&siteId=&after=&limit= */
 export interface SampleBoardListQuery {
   readonly clientId?: string;
   readonly siteId?: string;
+  /** the previous page's `nextCursor` */
+  readonly after?: string;
+  /** 1 to PAGE_SIZE_MAX; PAGE_SIZE_DEFAULT when left out */
+  readonly limit?: number;
 }
 
 /** POST /api/portal/boards/:id/request-changes */

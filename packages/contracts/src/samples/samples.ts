@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { requiredText, text, uuid } from '../common/fields';
+import { pageQuery, requiredText, text, uuid } from '../common/fields';
 import {
   SAMPLE_COMMENT_MAX,
   SAMPLE_LABEL_MAX,
@@ -32,7 +32,10 @@ export const sampleBoardUpdate = z
 export const sampleBoardListQuery = z.strictObject({
   clientId: uuid('client').optional(),
   siteId: uuid('site').optional(),
+  ...pageQuery,
 }) satisfies z.ZodType<SampleBoardListQuery>;
+/** As the server reads it: the page size always present. */
+export type SampleBoardListParams = z.infer<typeof sampleBoardListQuery>;
 
 export const sampleChangeRequest = z.strictObject({
   comment: requiredText(SAMPLE_COMMENT_MAX, 'Tell us what you would like changed.'),

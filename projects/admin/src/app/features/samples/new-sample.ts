@@ -154,10 +154,10 @@ export class NewSample {
   protected readonly siteWords = siteLine;
   protected readonly finishChoice = finishChoiceWords;
   protected readonly clientOptions = signal<readonly ClientSummary[]>([]);
-  /** the client chosen from the search, whose sites the form offers */
-  private readonly chosenClientId = signal<string | null>(null);
+  /** the client chosen from the search, whose sites the form offers, with the name the box then showed */
+  private readonly chosen = signal<Pick<ClientSummary, 'id' | 'name'> | null>(null);
   private readonly chosenClient = httpResource<ClientDetail>(() => {
-    const id = this.chosenClientId();
+    const id = this.chosen()?.id;
     return id ? `/api/clients/${encodeURIComponent(id)}` : undefined;
   });
   private readonly systemList = httpResource<ItemList<FinishSystemSummary>>(() => FINISH_SYSTEMS_URL);
@@ -182,9 +182,15 @@ export class NewSample {
   });
 
   constructor() {
-    this.clientSearch.valueChanges
+    const typed = this.clientSearch.valueChanges.pipe(filter((v): v is string => typeof v === 'string'));
+    // Text that no longer names the chosen client un-chooses it (and its sites) at once: the board
+    // is never made for a client the box has stopped showing.
+    typed.pipe(takeUntilDestroyed(this.destroyRef)).subscribe((text) => {
+      const chosen = this.chosen();
+      if (chosen && text.trim() !== chosen.name.trim()) this.forgetClient();
+    });
+    typed
       .pipe(
-        filter((v): v is string => typeof v === 'string'),
         map((v) => v.trim()),
         debounceTime(250),
         distinctUntilChanged(),
@@ -212,7 +218,12 @@ export class NewSample {
     const client = event.option.value as ClientSummary;
     this.clientSearch.setValue(client.name, { emitEvent: false });
     this.form.patchValue({ clientId: client.id, siteId: '' });
-    this.chosenClientId.set(client.id);
+    this.chosen.set({ id: client.id, name: client.name });
+  }
+
+  private forgetClient(): void {
+    this.chosen.set(null);
+    this.form.patchValue({ clientId: '', siteId: '' });
   }
 
   protected async save(): Promise<void> {

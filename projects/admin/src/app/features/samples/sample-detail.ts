@@ -16,6 +16,7 @@ import { Session } from '../../core/auth/session';
 import { toProblem } from '../../core/errors/problem';
 import { ConfirmDialog, type ConfirmDialogData } from '../../shared/ui/confirm-dialog';
 import { FormAlert } from '../../shared/ui/form-alert';
+import { BoardEditForm } from './board-edit-form';
 import { BOARD_PHOTO_BASE, SampleApi, boardPhotosUrl, boardUrl } from './sample-api';
 import { layerNote } from './layer-note';
 import { STATUS_WORDS } from './status-words';
@@ -23,7 +24,17 @@ import { STATUS_WORDS } from './status-words';
 /** One board: its finish as made (layers in order), photos, and where it stands with the client. */
 @Component({
   selector: 'lb-sample-detail',
-  imports: [FormAlert, LbDatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, PhotoGallery, RouterLink, TranslatePipe],
+  imports: [
+    BoardEditForm,
+    FormAlert,
+    LbDatePipe,
+    MatButtonModule,
+    MatIconModule,
+    MatProgressBarModule,
+    PhotoGallery,
+    RouterLink,
+    TranslatePipe,
+  ],
   template: `
     <section class="lb-page">
       <p>
@@ -72,8 +83,19 @@ import { STATUS_WORDS } from './status-words';
         }
 
         <lb-form-alert [message]="actionMessage()" />
+        @if (isClientToFix()) {
+          <p>
+            <a [routerLink]="['/clients', b.clientId]">{{ 'samples.detail.openClient' | translate: { client: b.clientName } }}</a>
+          </p>
+        }
         @if (canWrite()) {
           <div class="actions">
+            @if (b.status !== 'approved' && !isEditing()) {
+              <button mat-stroked-button type="button" [disabled]="isBusy()" (click)="isEditing.set(true)">
+                <mat-icon aria-hidden="true">edit</mat-icon
+                >{{ (b.status === 'draft' ? 'samples.edit.editBoard' : 'samples.edit.editNotes') | translate }}
+              </button>
+            }
             @if (b.status === 'draft') {
               <button mat-flat-button type="button" [disabled]="isBusy()" (click)="showToClient()">
                 <mat-icon aria-hidden="true">send</mat-icon>{{ 'samples.detail.showToClient' | translate }}
@@ -85,6 +107,9 @@ import { STATUS_WORDS } from './status-words';
               </button>
             }
           </div>
+          @if (isEditing() && b.status !== 'approved') {
+            <lb-board-edit-form [board]="b" (saved)="edited($event)" (cancelled)="isEditing.set(false)" />
+          }
         }
         @if (b.status === 'shown') {
           <p class="muted">{{ 'samples.detail.withClientNote' | translate }}</p>
@@ -123,10 +148,13 @@ import { STATUS_WORDS } from './status-words';
         <lb-photo-gallery
           [subject]="b.label"
           [(photos)]="photos"
-          [uploadUrl]="b.status === 'approved' ? null : photosUrl(b.id)"
-          [deleteBase]="canWrite() && b.status !== 'approved' ? photoBase : null"
+          [uploadUrl]="b.status === 'draft' ? photosUrl(b.id) : null"
+          [deleteBase]="canWrite() && b.status === 'draft' ? photoBase : null"
           emptyText="samples.detail.noPhotos"
         />
+        @if (b.status === 'shown' || b.status === 'changes_requested') {
+          <p class="muted">{{ 'samples.detail.photosFixed' | translate }}</p>
+        }
       } @else if (isLoading()) {
         <mat-progress-bar mode="indeterminate" [attr.aria-label]="'samples.detail.loading' | translate" />
       } @else {
@@ -214,7 +242,11 @@ export class SampleDetail {
     return toProblem(error).status === 404 ? this.say('samples.detail.notFound') : describe(error);
   });
   protected readonly isBusy = signal(false);
+  /** the edit form is open; closed again when the page moves to another board (the next round) */
+  protected readonly isEditing = linkedSignal({ source: this.id, computation: () => false });
   protected readonly actionMessage = signal<string | null>(null);
+  /** the last refusal was about the client's record (their e-mail address): the page links to it */
+  protected readonly isClientToFix = signal(false);
   protected readonly canWrite = computed(() => this.session.hasRole('office'));
 
   protected async showToClient(): Promise<void> {
@@ -228,6 +260,7 @@ export class SampleDetail {
     if (!ok) return;
     const shown = await this.act(() => this.api.show(b.id));
     if (shown) {
+      this.isEditing.set(false);
       this.loaded.set(shown);
       this.snackBar.open(this.say('samples.detail.shownNote'), this.say('samples.common.close'), { duration: 4000 });
     }
@@ -245,14 +278,23 @@ export class SampleDetail {
     }
   }
 
+  protected edited(board: SampleBoardView): void {
+    this.isEditing.set(false);
+    this.actionMessage.set(null);
+    this.loaded.set(board);
+    this.snackBar.open(this.say('samples.edit.saved'), this.say('samples.common.close'), { duration: 4000 });
+  }
+
   /** Runs one write with the buttons held; its refusal is said above them. */
   private async act(call: () => Promise<SampleBoardView>): Promise<SampleBoardView | null> {
     this.isBusy.set(true);
     this.actionMessage.set(null);
+    this.isClientToFix.set(false);
     try {
       return await call();
     } catch (error) {
       this.actionMessage.set(describe(error));
+      this.isClientToFix.set(toProblem(error).errors?.some((e) => e.field === 'client.email') ?? false);
       return null;
     } finally {
       this.isBusy.set(false);

@@ -1,19 +1,20 @@
-import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import { TranslatePipe } from '@ngx-translate/core';
-import type { ItemList, SampleBoardListItem } from '@layerbook/contracts/types';
+import type { SampleBoardListItem } from '@layerbook/contracts/types';
 import { LbDatePipe } from '../../../../../shared/i18n/format';
 import { Session } from '../../core/auth/session';
-import { problemMessage } from '../../core/errors/problem';
+import { keysetList } from '../../shared/forms/keyset-list';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { SAMPLES_URL } from './sample-api';
 import { STATUS_WORDS } from './status-words';
 
-/** Every sample board of the firm, newest first, with its status in words and a first photo. */
+const PAGE_SIZE = 50;
+
+/** Every sample board of the firm, newest first, a page at a time, with its status in words and a first photo. */
 @Component({
   selector: 'lb-sample-list',
   imports: [FormAlert, LbDatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, TranslatePipe],
@@ -30,8 +31,8 @@ import { STATUS_WORDS } from './status-words';
       </div>
       <p class="lb-lead">{{ 'samples.list.lead' | translate }}</p>
 
-      <lb-form-alert [message]="message()" />
-      @if (isLoading()) {
+      <lb-form-alert [message]="list.message()" />
+      @if (list.isLoading()) {
         <mat-progress-bar mode="indeterminate" [attr.aria-label]="'samples.list.loading' | translate" />
       }
 
@@ -50,7 +51,7 @@ import { STATUS_WORDS } from './status-words';
             </tr>
           </thead>
           <tbody>
-            @for (board of boards(); track board.id) {
+            @for (board of list.items(); track board.id) {
               <tr>
                 <td class="thumb">
                   @if (board.coverThumbnailUrl) {
@@ -80,7 +81,7 @@ import { STATUS_WORDS } from './status-words';
                 <td>{{ board.createdAt | lbDate: 'medium' : null }}</td>
               </tr>
             } @empty {
-              @if (!isLoading()) {
+              @if (!list.isLoading()) {
                 <tr>
                   <td colspan="6" class="none">{{ 'samples.list.empty' | translate }}</td>
                 </tr>
@@ -89,6 +90,11 @@ import { STATUS_WORDS } from './status-words';
           </tbody>
         </table>
       </div>
+      @if (list.hasMore()) {
+        <button mat-stroked-button type="button" class="more" (click)="list.loadMore()" [disabled]="list.isLoadingMore()">
+          {{ 'samples.list.more' | translate }}
+        </button>
+      }
     </section>
   `,
   styles: `
@@ -129,19 +135,16 @@ import { STATUS_WORDS } from './status-words';
     .none {
       padding: 1.5rem 0.5rem;
     }
+    .more {
+      margin-top: 1rem;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class SampleList {
   private readonly session = inject(Session);
-  private readonly list = httpResource<ItemList<SampleBoardListItem>>(() => SAMPLES_URL);
+  protected readonly list = keysetList<SampleBoardListItem>(SAMPLES_URL, () => ({ limit: PAGE_SIZE }));
 
   protected readonly words = STATUS_WORDS;
-  protected readonly boards = computed(() => (this.list.hasValue() ? this.list.value().items : []));
-  protected readonly isLoading = this.list.isLoading;
-  protected readonly message = computed(() => {
-    const error = this.list.error();
-    return error ? problemMessage(error) : null;
-  });
   protected readonly canWrite = () => this.session.hasRole('office');
 }
