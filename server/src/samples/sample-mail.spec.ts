@@ -5,7 +5,9 @@ const facts = {
   name: 'Marta Ríos',
   label: 'Hall, warm limewash',
   round: 2,
-  url: 'http://localhost:4300/portal/boards/x',
+  url: 'http://localhost:4300/portal/sign-in/link?token=t&next=/portal/boards/x',
+  linkDays: 3,
+  portalUrl: 'http://localhost:4300/portal/sign-in',
 };
 
 describe('sample board e-mail to the client', () => {
@@ -13,6 +15,8 @@ describe('sample board e-mail to the client', () => {
     const mail = boardShownMail(facts);
     expect(mail.subject).toBe('Casa Cal Estucos has a sample board for you to look at');
     expect(mail.text).toContain('"Hall, warm limewash" (round 2)');
+    expect(mail.text).toContain('The button signs you in once, within 3 days.');
+    expect(mail.text).toContain('Ask for a new one at http://localhost:4300/portal/sign-in.');
   });
 
   it("is in the client's language when they read Spanish, the board's own name as typed", () => {

@@ -1,5 +1,6 @@
 import type { Language } from '@layerbook/contracts';
 import { TenantTx } from '@layerbook/db';
+import { createPortalLink } from '../auth/portal-auth';
 import type { AppContext } from '../context';
 import { translator } from '../i18n/catalog';
 import { clientReader } from '../i18n/reader';
@@ -14,6 +15,9 @@ export function boardShownMail(p: {
   label: string;
   round: number;
   url: string;
+  /** how many days the button's one-time sign-in works */
+  linkDays: number;
+  portalUrl: string;
   language?: Language;
 }): RenderedMail {
   const language = p.language ?? 'en';
@@ -25,9 +29,10 @@ export function boardShownMail(p: {
     [
       t('mail.hello', { name: p.name }),
       t(p.round > 1 ? 'mail.boardShown.madeRound' : 'mail.boardShown.made', { firm, label: p.label, round: p.round }),
+      t('mail.boardShown.linkOnce', { days: p.linkDays }),
     ],
     { label: t('mail.boardShown.action'), url: p.url },
-    t('mail.boardShown.footer'),
+    t('mail.boardShown.footer', { portalUrl: p.portalUrl }),
     language,
   );
 }
@@ -62,7 +67,13 @@ export function boardDecisionMail(p: {
       );
 }
 
-/** Mails each active portal login of the board's client; returns how many were queued. */
+/** How long the board e-mail's button signs the client in (once), as a change order's does. */
+export const BOARD_LINK_DAYS = 3;
+
+/**
+ * Mails each active portal login of the board's client, with a one-time sign-in link that opens the
+ * board (a client shown a board is often new to the portal); returns how many were queued.
+ */
 export async function mailBoardShown(tx: TenantTx, ctx: AppContext, p: { board: BoardRow; firmName: string }): Promise<number> {
   const { rows } = await tx.client.query<{ id: string; email: string; name: string }>(
     `select id, email, name from portal_users where tenant_id = $1 and client_id = $2 and status = 'active' order by id`,
@@ -70,7 +81,9 @@ export async function mailBoardShown(tx: TenantTx, ctx: AppContext, p: { board: 
   );
   // In the client's language (theirs, else the firm's).
   const { language } = await clientReader(tx, p.board.clientId);
+  const base = ctx.config.PUBLIC_URL;
   for (const user of rows) {
+    const { token } = await createPortalLink(tx, user.id, ctx.now(), BOARD_LINK_DAYS * 24 * 60);
     await enqueueMail(tx, ctx.queue, {
       // One e-mail per board and person, even if the request is retried.
       purposeKey: `sample-shown:${p.board.id}:${user.id}`,
@@ -82,7 +95,9 @@ export async function mailBoardShown(tx: TenantTx, ctx: AppContext, p: { board: 
         name: user.name,
         label: p.board.label,
         round: p.board.round,
-        url: `${ctx.config.PUBLIC_URL}/portal/boards/${p.board.id}`,
+        url: `${base}/portal/sign-in/link?token=${token}&next=/portal/boards/${p.board.id}`,
+        linkDays: BOARD_LINK_DAYS,
+        portalUrl: `${base}/portal/sign-in`,
         language,
       }),
     });

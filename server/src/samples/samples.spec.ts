@@ -201,7 +201,7 @@ describe('sample boards (staff)', () => {
     const mail = await t.inbox.waitFor(
       (m) => JSON.stringify(m.to).includes(f.clientEmail) && m.subject === 'Verdigris & Daughters has a sample board for you to look at',
     );
-    expect(mail.text).toContain(`http://localhost:4300/portal/boards/${board.id}`);
+    expect(mail.text).toContain(`next=/portal/boards/${board.id}`);
     const again = await post(f, `/api/samples/${board.id}/show`);
     expect(again.status).toBe(409);
     expect(again.body.detail).toBe('This board has already been shown to the client.');

@@ -1,5 +1,6 @@
 import { withTenant } from '@layerbook/db';
-import { startTestServer, TestServer } from '../testing/harness';
+import { linkIn } from '../testing/inbox';
+import { newAgent, startTestServer, TestServer } from '../testing/harness';
 import { addClient, firmWithFinish, makeBoard, post, signInClient, type Firm } from './sample-fixtures';
 
 let t: TestServer;
@@ -42,10 +43,18 @@ describe('showing a board to a client who has no portal login yet (before any pr
     const mail = await t.inbox.waitFor(
       (m) => JSON.stringify(m.to).includes(f.clientEmail) && m.subject === 'First Board Plaster has a sample board for you to look at',
     );
-    expect(mail.text).toContain(`http://localhost:4300/portal/boards/${board.id}`);
-    // The login exists now, so the portal's "e-mail me a sign-in link" works and opens the board.
-    const client = await signInClient(t, f.firmId, f.clientId, f.clientEmail);
+    // The button signs the new client in once and opens the board.
+    const url = new URL(linkIn(mail));
+    expect(url.pathname).toBe('/portal/sign-in/link');
+    expect(url.searchParams.get('next')).toBe(`/portal/boards/${board.id}`);
+    const client = await newAgent(t.app, 'portal');
+    const redeemed = await client.agent
+      .post('/api/portal/auth/redeem')
+      .set('x-csrf-token', client.csrf())
+      .send({ token: url.searchParams.get('token') });
+    expect(redeemed.status).toBe(200);
     expect((await client.agent.get(`/api/portal/boards/${board.id}`)).body).toMatchObject({ id: board.id, status: 'shown' });
+    expect(mail.text).toContain('The button signs you in once, within 3 days.');
   });
 
   it('answers 400 naming client.email when the client has no e-mail address, and leaves the board a draft', async () => {
