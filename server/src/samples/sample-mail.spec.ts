@@ -1,4 +1,4 @@
-import { boardShownMail } from './sample-mail';
+import { boardDecisionMail, boardShownMail } from './sample-mail';
 
 const facts = {
   firmName: 'Casa Cal Estucos',
@@ -24,5 +24,28 @@ describe('sample board e-mail to the client', () => {
     expect(mail.subject).toBe('Casa Cal Estucos tiene un tablero de muestra para que lo vea');
     expect(mail.text).toContain('«Hall, warm limewash» (ronda 2)');
     expect(mail.html).toContain('lang="es"');
+  });
+});
+
+describe("sample board answer e-mail to the firm's office", () => {
+  const answer = {
+    clientName: 'Marta Ríos',
+    label: 'Hall, warm limewash',
+    round: 2,
+    comment: 'Más cálido',
+    url: 'http://localhost:4300/samples/x',
+  };
+
+  it('is in English by default, as before', () => {
+    const mail = boardDecisionMail({ ...answer, decision: 'approved' });
+    expect(mail.subject).toBe('Marta Ríos approved the sample board "Hall, warm limewash" (round 2)');
+    expect(mail.text).toContain('It is now the control sample for the work.');
+  });
+
+  it('is in Spanish for an office member who reads Spanish, with the client’s comment', () => {
+    const mail = boardDecisionMail({ ...answer, decision: 'changes_requested', language: 'es' });
+    expect(mail.subject).toBe('Marta Ríos pidió cambios en el tablero de muestra «Hall, warm limewash» (ronda 2)');
+    expect(mail.text).toContain('Más cálido');
+    expect(mail.text).toContain('Empiece la siguiente ronda desde el tablero cuando esté listo.');
   });
 });

@@ -4,6 +4,7 @@ import { createPortalLink } from '../auth/portal-auth';
 import type { AppContext } from '../context';
 import { translator } from '../i18n/catalog';
 import { clientReader } from '../i18n/reader';
+import { officeRecipients } from '../mail/office-recipients';
 import { enqueueMail } from '../mail/outbox';
 import { render, RenderedMail } from '../mail/templates';
 import type { BoardRow } from './boards';
@@ -37,6 +38,7 @@ export function boardShownMail(p: {
   );
 }
 
+/** To someone in the firm's office, in the language they read (English when the caller does not say): the client's answer on a board. */
 export function boardDecisionMail(p: {
   clientName: string;
   label: string;
@@ -44,26 +46,29 @@ export function boardDecisionMail(p: {
   decision: 'approved' | 'changes_requested';
   comment: string;
   url: string;
+  language?: Language;
 }): RenderedMail {
-  const board = `"${p.label}" (round ${p.round})`;
+  const language = p.language ?? 'en';
+  const t = translator(language);
+  const facts = { client: p.clientName, label: p.label, round: p.round };
+  const action = { label: t('mail.boardDecision.action'), url: p.url };
+  const footer = t('mail.boardDecision.footer');
   return p.decision === 'approved'
     ? render(
-        `${p.clientName} approved the sample board ${board}`,
-        'Sample board approved',
-        [`${p.clientName} approved the sample board ${board}. It is now the control sample for the work.`],
-        { label: 'Open the sample board', url: p.url },
-        'Sent by Layerbook to the owners and office of your firm.',
+        t('mail.boardDecision.approvedSubject', facts),
+        t('mail.boardDecision.approvedHeading'),
+        [t('mail.boardDecision.approved', facts)],
+        action,
+        footer,
+        language,
       )
     : render(
-        `${p.clientName} asked for changes to the sample board ${board}`,
-        'Changes asked for on a sample board',
-        [
-          `${p.clientName} asked for changes to the sample board ${board}:`,
-          p.comment,
-          'Start the next round from the board when you are ready.',
-        ],
-        { label: 'Open the sample board', url: p.url },
-        'Sent by Layerbook to the owners and office of your firm.',
+        t('mail.boardDecision.changesSubject', facts),
+        t('mail.boardDecision.changesHeading'),
+        [t('mail.boardDecision.changes', facts), p.comment, t('mail.boardDecision.nextRound')],
+        action,
+        footer,
+        language,
       );
 }
 
@@ -111,13 +116,8 @@ export async function mailBoardDecision(
   ctx: AppContext,
   p: { board: BoardRow; clientName: string; decision: 'approved' | 'changes_requested'; comment: string },
 ): Promise<void> {
-  const { rows } = await tx.client.query<{ id: string; email: string }>(
-    `select u.id, u.email from memberships m join users u on u.id = m.user_id
-      where m.tenant_id = $1 and m.status = 'active' and m.role in ('owner', 'office') order by u.id`,
-    [tx.tenantId],
-  );
   const purpose = p.decision === 'approved' ? 'sample-approved' : 'sample-changes';
-  for (const staff of rows) {
+  for (const staff of await officeRecipients(tx)) {
     await enqueueMail(tx, ctx.queue, {
       purposeKey: `${purpose}:${p.board.id}:${staff.id}`,
       tenantId: tx.tenantId,
@@ -129,6 +129,7 @@ export async function mailBoardDecision(
         decision: p.decision,
         comment: p.comment,
         url: `${ctx.config.PUBLIC_URL}/samples/${p.board.id}`,
+        language: staff.reader.language,
       }),
     });
   }

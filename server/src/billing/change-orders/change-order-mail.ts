@@ -33,7 +33,7 @@ export function changeOrderSentMail(p: {
   );
 }
 
-/** To the firm's office: the client answered a change order. */
+/** To someone in the firm's office, in the language they read (English when the caller does not say): the client answered a change order. */
 export function changeOrderAnsweredMail(p: {
   firmName: string;
   clientName: string;
@@ -45,18 +45,25 @@ export function changeOrderAnsweredMail(p: {
   amount: string;
   comment: string;
   url: string;
+  language?: Language;
 }): RenderedMail {
-  const word = p.isApproved ? 'approved' : 'declined';
+  const language = p.language ?? 'en';
+  const t = translator(language);
+  const facts = {
+    client: p.clientName,
+    number: p.number,
+    title: p.title,
+    job: p.jobTitle,
+    signedName: p.signedName ?? '',
+    amount: p.amount,
+  };
+  const answer = p.isApproved ? 'approved' : 'declined';
   return render(
-    `${p.clientName} ${word} change order #${p.number}: ${p.title}`,
-    `Change order #${p.number} ${word}`,
-    [
-      p.isApproved
-        ? `${p.clientName} approved change order #${p.number} on "${p.jobTitle}", signed "${p.signedName ?? ''}". The contract sum moved by ${p.amount} and the unbilled payments were spread again.`
-        : `${p.clientName} declined change order #${p.number} on "${p.jobTitle}". Nothing about the job changed.`,
-      ...(p.comment ? [`Their comment: "${p.comment}"`] : []),
-    ],
-    { label: 'Open the job', url: p.url },
-    `You are receiving this because you work in the office of ${p.firmName}.`,
+    t(`mail.changeOrderAnswered.${answer}Subject`, facts),
+    t(`mail.changeOrderAnswered.${answer}Heading`, facts),
+    [t(`mail.changeOrderAnswered.${answer}`, facts), ...(p.comment ? [t('mail.changeOrderAnswered.comment', { comment: p.comment })] : [])],
+    { label: t('mail.changeOrderAnswered.action'), url: p.url },
+    t('mail.changeOrderAnswered.footer', { firm: p.firmName }),
+    language,
   );
 }

@@ -6,6 +6,8 @@ import { recordAudit } from '../../audit/record';
 import type { AppContext } from '../../context';
 import type { ClientPrincipal } from '../../http/principal';
 import { conflict, HttpError, notFound } from '../../http/problem';
+import { localeOf } from '../../i18n/catalog';
+import { officeRecipients } from '../../mail/office-recipients';
 import { enqueueMail } from '../../mail/outbox';
 import { clientIdOf } from '../../proposals/client-proposals';
 import { enqueueBillingCheck } from '../triggers/enqueue';
@@ -289,28 +291,24 @@ async function mailOffice(
   const job = (
     await tx.client.query<{ title: string }>(`select title from jobs where tenant_id = $1 and id = $2`, [tx.tenantId, row.job_id])
   ).rows[0];
-  const { rows: people } = await tx.client.query<{ id: string; email: string }>(
-    `select u.id, u.email from memberships m join users u on u.id = m.user_id
-      where m.tenant_id = $1 and m.status = 'active' and m.role in ('owner', 'office') order by u.id`,
-    [tx.tenantId],
-  );
-  const mail = changeOrderAnsweredMail({
-    firmName: firm.name,
-    clientName: p.clientName,
-    jobTitle: job.title,
-    number: row.number,
-    title: row.title,
-    isApproved: p.isApproved,
-    signedName: p.signedName,
-    amount: formatMoney(row.amount, row.currency, `en-${firm.country}`),
-    comment: p.comment,
-    url: `${ctx.config.PUBLIC_URL}/jobs/${row.job_id}`,
-  });
-  for (const person of people)
+  // Each in the language they read, the amount written for it in the firm's country.
+  for (const person of await officeRecipients(tx))
     await enqueueMail(tx, ctx.queue, {
       purposeKey: `change-order-answer:${row.id}:${person.id}`,
       tenantId: tx.tenantId,
       to: person.email,
-      ...mail,
+      ...changeOrderAnsweredMail({
+        firmName: firm.name,
+        clientName: p.clientName,
+        jobTitle: job.title,
+        number: row.number,
+        title: row.title,
+        isApproved: p.isApproved,
+        signedName: p.signedName,
+        amount: formatMoney(row.amount, row.currency, localeOf(person.reader.language, person.reader.country)),
+        comment: p.comment,
+        url: `${ctx.config.PUBLIC_URL}/jobs/${row.job_id}`,
+        language: person.reader.language,
+      }),
     });
 }
