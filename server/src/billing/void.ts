@@ -4,6 +4,7 @@ import { documentNumber } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
+import { enqueueCheckoutExpiry } from '../payments/checkout-expiry';
 import { conflict, notFound } from '../http/problem';
 import { firmToday, LIVE_ISSUED, loadBillingJob } from './billing-job';
 import { enqueueInvoiceMail } from './invoice-mail';
@@ -17,8 +18,8 @@ import { loadBillingSettings } from './settings';
  * numbered from the firm's credit-note series in the same transaction, for the whole total. Refused
  * (409) on a draft (delete it), a void invoice, or one with payments (refund them first). Its
  * schedule line waits for its trigger again, and the queue drafts it afresh if the trigger is still
- * met; a progress-billed job's open draft is refigured (by the queue). The client hears of it only if
- * the invoice was e-mailed.
+ * met; a progress-billed job's open draft is refigured (by the queue); a checkout still open for it
+ * is expired at the card processor (by the queue). The client hears of it only if the invoice was e-mailed.
  */
 export async function voidInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, id: string, reason: string, now: Date): Promise<void> {
   // The job's row first, as issuing and drafting take it: an issue crediting this deposit, or billing
@@ -83,6 +84,8 @@ export async function voidInvoice(tx: TenantTx, deps: IssueDeps, actor: Actor, i
   // trigger is still met is drafted again for the office to review (as the daily check would the next
   // morning), and the open progress draft is refigured from what stays issued (the deposit it credits,
   // the work billed before).
+  // A checkout the client still has open at the card processor stops taking money once this commits.
+  await enqueueCheckoutExpiry(tx, deps.queue, id);
   const progress = job.billing_method === 'progress';
   if (progress || inv.schedule_line_id) await enqueueBillingCheck(tx, deps.queue, job.id, { refreshDraft: progress });
   if (inv.sent_at) await enqueueInvoiceMail(tx, deps.queue, deps.config, id, { kind: 'creditNote', creditNoteId });

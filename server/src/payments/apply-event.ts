@@ -2,6 +2,7 @@ import { withTenant, type TenantTx } from '@layerbook/db';
 import type { Pool } from 'pg';
 import type Stripe from 'stripe';
 import type { PaymentsApplyJob } from '../queue/queues';
+import { type CheckoutExpiryJob, expireStaleCheckouts, isCheckoutExpiryJob } from './checkout-expiry';
 import { expireCheckoutSession, fulfilCheckoutSession } from './fulfil';
 import type { ReceiptMailDeps } from './receipt-mail';
 import { processorFor } from './processor';
@@ -59,8 +60,16 @@ async function dispatch(tx: TenantTx, deps: ReceiptMailDeps, event: Stripe.Event
  * reconciliation's re-queue) applies it once. The order events arrive in does not matter: each
  * effect checks the state it finds (an expiry after the payment changes nothing; a refund before
  * its payment throws, and the queue retries it later). Returns the outcome, or null for no such event.
+ * The same queue carries the expiry of an invoice's stale checkouts (CheckoutExpiryJob), run here too.
  */
-export async function applyStoredEvent(pool: Pool, deps: ApplyDeps, job: PaymentsApplyJob, now: Date): Promise<string | null> {
+export async function applyStoredEvent(
+  pool: Pool,
+  deps: ApplyDeps,
+  job: PaymentsApplyJob | CheckoutExpiryJob,
+  now: Date,
+): Promise<string | null> {
+  // The queue's other job: stale checkouts to expire at the processor (checkout-expiry.ts).
+  if (isCheckoutExpiryJob(job)) return expireStaleCheckouts(pool, processorFor(deps.config), job);
   return withTenant(pool, job.tenantId, async (tx) => {
     const { rows } = await tx.client.query<{ payload: Stripe.Event; applied_at: Date | null; outcome: string | null }>(
       `select payload, applied_at, outcome from processor_events where tenant_id = $1 and id = $2 for update`,

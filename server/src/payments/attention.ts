@@ -1,4 +1,4 @@
-import { ATTENTION_REASONS, type AttentionNote, type AttentionReason } from '@layerbook/contracts';
+import { ATTENTION_REASONS, type AttentionNote, type AttentionReason, type InvoiceStatus } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { Actor } from '../http/actor';
@@ -40,6 +40,37 @@ export async function notePaymentMismatch(tx: TenantTx, m: PaymentMismatch): Pro
       currency: m.currency,
       asked: m.asked,
       askedCurrency: m.askedCurrency,
+    },
+  });
+}
+
+/**
+ * A card payment that came in when the invoice no longer asked for it all (voided or settled another
+ * way while the client was on the processor's page): recorded, the rest kept as the client's credit,
+ * and noted on its invoice for a person to give back or put to use.
+ * Its reason is not yet one of ATTENTION_REASONS (Today's panel has no words for it): the panel
+ * reads it as `other` meanwhile, and the entry keeps its own code for when it gets them.
+ */
+export async function notePaidWhenNotAsked(
+  tx: TenantTx,
+  m: PaymentMismatch & { readonly credit: string; readonly invoiceStatus: InvoiceStatus },
+): Promise<void> {
+  await recordAudit(tx, {
+    actorUserId: null,
+    actorKind: 'system',
+    action: 'invoice.payment_needs_attention',
+    entity: 'invoice',
+    entityId: m.invoiceId,
+    data: {
+      reason: 'paidWhenNotAsked',
+      paymentId: m.paymentId,
+      receipt: m.receiptNumber,
+      amount: m.amount,
+      currency: m.currency,
+      asked: m.asked,
+      askedCurrency: m.askedCurrency,
+      credit: m.credit,
+      invoiceStatus: m.invoiceStatus,
     },
   });
 }

@@ -1,6 +1,7 @@
 import type { CheckoutStatus } from '@layerbook/contracts';
 import { withTenant, type TenantTx } from '@layerbook/db';
 import type { Request } from 'express';
+import Decimal from 'decimal.js';
 import type Stripe from 'stripe';
 import { moneyOut } from '../billing/money';
 import type { AppContext } from '../context';
@@ -37,15 +38,29 @@ interface CheckoutRow {
 
 async function readStatus(tx: TenantTx, row: CheckoutRow): Promise<CheckoutStatus> {
   const base = { checkoutId: row.id, amount: moneyOut(row.amount, row.currency), currency: row.currency };
-  if (row.status !== 'complete') return { ...base, state: row.status, paymentId: null, receiptNumber: null };
-  const { rows } = await tx.client.query<{ id: string; receipt_no: number | null }>(
-    `select id, receipt_no from payments where tenant_id = $1 and processor_session_id = $2`,
+  const none = { paymentId: null, receiptNumber: null, credit: null };
+  if (row.status !== 'complete') return { ...base, state: row.status, ...none };
+  const { rows } = await tx.client.query<{ id: string; receipt_no: number | null; amount: string; applied: string; currency: string }>(
+    `select id, receipt_no, amount::text as amount, amount_applied::text as applied, currency from payments
+      where tenant_id = $1 and processor_session_id = $2`,
     [tx.tenantId, row.processor_session_id],
   );
   const payment = rows[0];
-  return payment
-    ? { ...base, state: 'paid', paymentId: payment.id, receiptNumber: receiptNumber(payment.receipt_no) }
-    : { ...base, state: 'confirming', paymentId: null, receiptNumber: null };
+  if (!payment) return { ...base, state: 'confirming', ...none };
+  const credit = new Decimal(payment.amount).minus(payment.applied);
+  return {
+    ...base,
+    state: 'paid',
+    paymentId: payment.id,
+    receiptNumber: receiptNumber(payment.receipt_no),
+    credit: credit.greaterThan(0)
+      ? {
+          amount: moneyOut(credit, payment.currency),
+          currency: payment.currency,
+          isWholePayment: new Decimal(payment.applied).isZero(),
+        }
+      : null,
+  };
 }
 
 async function loadCheckout(tx: TenantTx, invoiceId: string, checkoutId: string): Promise<CheckoutRow> {

@@ -10,6 +10,7 @@ import { withClient } from '../http/guards';
 import type { ClientPrincipal } from '../http/principal';
 import { conflict, HttpError, notFound } from '../http/problem';
 import { clientIdOf } from '../proposals/client-proposals';
+import { enqueueCheckoutExpiry } from './checkout-expiry';
 import { payOnlineFor } from './portal-pay';
 import { processorFor } from './processor';
 
@@ -96,7 +97,8 @@ const processorDown = () =>
  * POST /api/portal/invoices/:id/checkout — sends the client to the processor's hosted page for the
  * invoice's amount due. An open checkout of the same amount with time left is offered again; else
  * a new Checkout Session is created (idempotency key = our checkout's id, so a retried call opens
- * one) and our checkout row keeps what was asked, to check the processor's answer against.
+ * one) and our checkout row keeps what was asked, to check the processor's answer against; an
+ * older checkout of the invoice still open is expired at the processor after the commit (queued).
  * The invoice row stays locked from the reuse lookup until the new row is written, so two quick
  * starts (a double click, a second tab) wait for each other and the second reuses the first's
  * session. That holds the lock across the processor call, on this invoice only; if the call
@@ -123,6 +125,8 @@ export async function startCheckout(ctx: AppContext, req: Request, invoiceId: st
        values ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
       [checkoutId, tx.tenantId, inv.id, inv.client_id, session.id, moneyOut(inv.due, inv.currency), inv.currency, session.url, now],
     );
+    // An older checkout still open (another amount, or about to lapse) stops taking money once this commits.
+    await enqueueCheckoutExpiry(tx, ctx.queue, inv.id);
     return { url: session.url, checkoutId };
   });
 }

@@ -3,7 +3,8 @@ import { fromProcessorAmount, minorUnitDigits, toProcessorAmount } from '@layerb
 import type Stripe from 'stripe';
 import { localDate } from '../firms/local-date';
 import { SYSTEM_ACTOR } from '../http/actor';
-import { notePaymentMismatch } from './attention';
+import { notePaidWhenNotAsked, notePaymentMismatch } from './attention';
+import { enqueueCheckoutExpiry } from './checkout-expiry';
 import { enqueueReceiptMail, type ReceiptMailDeps } from './receipt-mail';
 import { recordPayment } from './record-payment';
 
@@ -84,7 +85,10 @@ function paidAmount(session: Stripe.Checkout.Session): { amount: string; currenc
  * recordPayment finds a payment already recorded for the session and writes nothing. What was really
  * paid (the processor's amount_total and currency) is what is recorded; when it differs from what
  * our checkout asked, the payment is still recorded (a different currency stays whole as the client's
- * credit), the outcome says it needs attention and the invoice gets a note for Today (attention.ts). The receipt e-mail is queued in the same transaction.
+ * credit), the outcome says it needs attention and the invoice gets a note for Today (attention.ts);
+ * so does a payment of what the checkout asked that the invoice no longer took in full (voided or
+ * settled meanwhile: the rest is credit). The receipt e-mail, and the expiry of the invoice's other
+ * checkouts still open, are queued in the same transaction.
  * The payment is dated in the firm's zone by when the processor took it (takenAt; `paidAt` when the
  * session does not say). A card payment's reference stays empty: the client reads "Payment by card"
  * and the receipt number, and the processor's PaymentIntent id is kept apart for the office.
@@ -124,26 +128,33 @@ export async function fulfilCheckoutSession(
     processorPaymentIntentId: intent ?? undefined,
   });
   if (!recorded.alreadyRecorded) await enqueueReceiptMail(tx, deps, { kind: 'payment', id: recorded.paymentId });
-  if (!recorded.alreadyRecorded && !matches) {
-    await notePaymentMismatch(tx, {
-      invoiceId: checkout.invoice_id,
-      paymentId: recorded.paymentId,
-      receiptNumber: recorded.receiptNumber,
-      amount: paid.amount,
-      currency: paid.currency,
-      asked: checkout.amount,
-      askedCurrency: checkout.currency,
-    });
+  const note = {
+    invoiceId: checkout.invoice_id,
+    paymentId: recorded.paymentId,
+    receiptNumber: recorded.receiptNumber,
+    amount: paid.amount,
+    currency: paid.currency,
+    asked: checkout.amount,
+    askedCurrency: checkout.currency,
+  };
+  if (!recorded.alreadyRecorded && !matches) await notePaymentMismatch(tx, note);
+  // What the checkout asked, but the invoice no longer did (voided or settled meanwhile): credit, and a note.
+  const unasked = matches && recorded.credit !== '0.00';
+  if (!recorded.alreadyRecorded && unasked) {
+    await notePaidWhenNotAsked(tx, { ...note, credit: recorded.credit, invoiceStatus: recorded.invoiceStatus });
   }
   await tx.client.query(
     `update checkout_sessions set status = 'complete', completed_at = coalesce(completed_at, $3) where tenant_id = $1 and id = $2`,
     [tx.tenantId, checkout.id, now],
   );
+  // The amount due changed: the invoice's other checkouts still open stop taking money once this commits.
+  if (!recorded.alreadyRecorded) await enqueueCheckoutExpiry(tx, deps.queue, checkout.invoice_id);
   const words = `${paid.amount} ${paid.currency}`;
   const outcome = recorded.alreadyRecorded
     ? `Payment ${recorded.receiptNumber} already recorded`
     : matches
-      ? `Payment ${recorded.receiptNumber} recorded: ${words}` + (recorded.credit !== '0.00' ? `, ${recorded.credit} kept as credit` : '')
+      ? `${unasked ? 'Needs attention: ' : ''}Payment ${recorded.receiptNumber} recorded: ${words}` +
+        (unasked ? `, ${recorded.credit} kept as credit (the invoice is ${recorded.invoiceStatus.replace('_', ' ')})` : '')
       : `Needs attention: paid ${words} where the checkout asked ${checkout.amount} ${checkout.currency}; ` +
         `payment ${recorded.receiptNumber} recorded, ${recorded.applied} on the invoice, ${recorded.credit} kept as credit`;
   return { outcome, paymentId: recorded.paymentId, receiptNumber: recorded.receiptNumber };

@@ -1,4 +1,4 @@
-import { type InvoiceDocument, type PaymentMethod } from '@layerbook/contracts';
+import { type InvoiceDocument, type InvoiceStatus, type PaymentMethod } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { formatMoney } from '@layerbook/domain';
 import Decimal from 'decimal.js';
@@ -30,6 +30,7 @@ interface ReceiptRow {
   payment_receipt_no: number | null;
   invoice_number: string | null;
   invoice_currency: string;
+  invoice_status: InvoiceStatus;
   amount_due: string;
   document: InvoiceDocument | null;
   firm_name: string;
@@ -40,7 +41,7 @@ interface ReceiptRow {
 
 const INVOICE_AND_CLIENT = `join invoices i on i.tenant_id = p.tenant_id and i.id = p.invoice_id
   join clients c on c.tenant_id = i.tenant_id and c.id = i.client_id join firms f on f.id = i.tenant_id`;
-const INVOICE_FACTS = `i.number_text as invoice_number, i.currency as invoice_currency, i.document, f.name as firm_name,
+const INVOICE_FACTS = `i.number_text as invoice_number, i.currency as invoice_currency, i.status as invoice_status, i.document, f.name as firm_name,
   c.id as client_id, c.name as client_name, c.email as client_email,
   (case when i.status = 'void' then 0 else greatest(i.total - i.amount_paid - i.amount_credited, 0) end)::numeric(14, 2)::text as amount_due`;
 
@@ -91,6 +92,7 @@ export async function enqueueReceiptMail(
     how,
     on: formatsFor(locale, row.currency).date(row.on),
     amountDue: new Decimal(row.amount_due).greaterThan(0) ? money(row.amount_due, row.invoice_currency) : null,
+    isInvoiceRefunded: row.invoice_status === 'refunded',
     credit: new Decimal(row.credit).greaterThan(0) ? money(row.credit, row.currency) : null,
     paymentNumber: receiptNumber(row.payment_receipt_no),
     reason: row.reason,

@@ -5,6 +5,8 @@ import type Stripe from 'stripe';
 import type PgBoss from 'pg-boss';
 import type { JobQueue } from '../queue/job-queue';
 import { type PaymentsApplyJob, QUEUES } from '../queue/queues';
+import { CHECKOUT_LIFETIME_SECONDS } from './checkout';
+import { expireStaleCheckouts, invoicesWithStaleCheckouts } from './checkout-expiry';
 import { eventTenant, storeEvent } from './events';
 
 /** The one processor account this server talks to (processor_sync keeps one row per account). */
@@ -39,13 +41,16 @@ export interface ReconcileReport {
   readonly listed: number;
   readonly stored: number;
   readonly requeued: number;
+  /** invoices whose stale checkouts were dealt with at the processor (sweepStaleCheckouts) */
+  readonly checkoutsExpired: number;
   readonly cursor: number | null;
 }
 
 /**
  * The payments-reconcile job: lists the processor's events since the last one seen (less an
  * overlap), stores what the webhook never delivered (received_via 'reconcile') with its application
- * queued, queues again every stored event left unapplied for over a minute, and advances the cursor.
+ * queued, queues again every stored event left unapplied for over a minute, expires checkouts left
+ * open that the invoice no longer asks for (sweepStaleCheckouts), and advances the cursor.
  * Safe to run at any time and any number of times: storing is by event id, applying is exactly once.
  */
 export async function reconcileEvents(
@@ -78,6 +83,7 @@ export async function reconcileEvents(
     if (result === 'unknownFirm') logger?.warn({ eventId: event.id }, 'processor event names an unknown firm; not stored');
   }
   const requeued = await requeueUnapplied(pool, queue, now);
+  const checkoutsExpired = await sweepStaleCheckouts(pool, stripe, now, logger);
   if (newest) {
     const { id, created } = newest;
     await withGlobal(pool, (tx) =>
@@ -88,8 +94,8 @@ export async function reconcileEvents(
       ),
     );
   }
-  const report = { listed, stored, requeued, cursor: newest?.created ?? cursor };
-  if (stored || requeued) logger?.info(report, 'processor events reconciled');
+  const report = { listed, stored, requeued, checkoutsExpired, cursor: newest?.created ?? cursor };
+  if (stored || requeued || checkoutsExpired) logger?.info(report, 'processor events reconciled');
   return report;
 }
 
@@ -120,4 +126,28 @@ export async function requeueUnapplied(pool: Pool, queue: ReconcileQueue, now: D
     });
   }
   return requeued;
+}
+
+/**
+ * Stale checkouts (checkout-expiry.ts) still open: those of an offline payment, whose route queues no
+ * expiry, and any whose expiry job gave up. Expired at the processor firm by firm, invoice by invoice,
+ * outside the firm's transaction; one that fails is logged and left to the next run. Only checkouts
+ * opened within their lifetime: the processor has let older ones lapse. Returns how many invoices
+ * had theirs dealt with.
+ */
+export async function sweepStaleCheckouts(pool: Pool, stripe: Stripe, now: Date, logger?: Pick<Logger, 'info' | 'warn'>): Promise<number> {
+  const { rows: firms } = await pool.query<{ id: string }>(`select id from firms`);
+  let expired = 0;
+  for (const firm of firms) {
+    const invoiceIds = await withTenant(pool, firm.id, (tx) => invoicesWithStaleCheckouts(tx, now, CHECKOUT_LIFETIME_SECONDS));
+    for (const invoiceId of invoiceIds) {
+      try {
+        await expireStaleCheckouts(pool, stripe, { tenantId: firm.id, expireCheckoutsOf: invoiceId });
+        expired++;
+      } catch (error) {
+        logger?.warn({ err: error, invoiceId }, 'stale checkout not expired at the processor; tried again at the next run');
+      }
+    }
+  }
+  return expired;
 }

@@ -23,6 +23,8 @@ afterAll(async () => {
   await t.stop();
 });
 
+const fieldOf = (body: unknown) => (body as Problem).errors?.[0]?.field;
+
 // 100.00 USD is 10000 in the smallest unit (Stripe Docs "Supported currencies": USD is not a zero-decimal currency)
 const USD_100 = { total: '100.00', currency: 'USD', processorAmount: 10000 };
 
@@ -124,6 +126,49 @@ describe('card refunds through the processor', () => {
     expect(await f.money(f.paymentId)).toMatchObject({ status: 'paid', refunded: '0.00' });
     expect((await f.refund(f.paymentId, { method: 'card', amount: '100.00' })).status).toBe(201);
     expect(await f.money(f.paymentId)).toMatchObject({ status: 'refunded', amountPaid: '0.00', refunded: '100.00' });
+  });
+
+  it('answers 409 naming clientKey when the dialog’s key names a refused refund or another method or amount, and records nothing', async () => {
+    const f = await cardPaid('Key Reuse Plaster');
+    fake.controls.failNext({
+      method: 'POST',
+      path: '/v1/refunds',
+      status: 402,
+      error: { type: 'invalid_request_error', code: 'charge_disputed', message: 'This charge is disputed.' },
+    });
+    const key = 'dialog-1';
+    expect((await f.refund(f.paymentId, { method: 'card', amount: '100.00', clientKey: key })).status).toBe(502);
+    // the same key again: the refused refund is not answered as if it had been made, whatever is asked
+    for (const body of [
+      { method: 'cash' as const, amount: '40.00', refundedOn: '2026-12-20' },
+      { method: 'card' as const, amount: '100.00' },
+    ]) {
+      const again = await f.refund(f.paymentId, { ...body, clientKey: key });
+      expect([body.method, again.status, fieldOf(again.body)]).toEqual([body.method, 409, 'clientKey']);
+    }
+    expect(await f.money(f.paymentId)).toMatchObject({ status: 'paid', refunded: '0.00' });
+    // a new key (the dialog makes one after a refusal) records the cash given back
+    const cash = await f.refund(f.paymentId, { method: 'cash', amount: '40.00', refundedOn: '2026-12-20', clientKey: 'dialog-2' });
+    expect(cash.status).toBe(201);
+    expect(cash.body).toMatchObject({ method: 'cash', status: 'succeeded', amount: '40.00' });
+    expect(await f.money(f.paymentId)).toMatchObject({ status: 'part_paid', refunded: '40.00' });
+  });
+
+  it('answers a card refund sent again with its key, still being sent back, with the same refund; another amount is 409', async () => {
+    const f = await cardPaid('Key Pending Glaze');
+    fake.controls.refundsStayPending(true);
+    try {
+      const body = { method: 'card' as const, amount: '20.00', clientKey: 'dialog-3' };
+      const first = await f.refund(f.paymentId, body);
+      expect(first.body).toMatchObject({ status: 'pending', amount: '20.00' });
+      const again = await f.refund(f.paymentId, body);
+      expect([again.status, (again.body as RefundView).id]).toEqual([201, (first.body as RefundView).id]);
+      const other = await f.refund(f.paymentId, { ...body, amount: '25.00' });
+      expect([other.status, fieldOf(other.body)]).toEqual([409, 'clientKey']);
+      expect(await f.atProcessor()).toHaveLength(1);
+    } finally {
+      fake.controls.refundsStayPending(false);
+    }
   });
 
   it('sends again with the same idempotency key when the processor fails once: refunded once', async () => {

@@ -1,4 +1,4 @@
-import type { PaymentMethod, RefundCreate, RefundView } from '@layerbook/contracts';
+import type { PaymentMethod, RefundCreate, RefundStatus, RefundView } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
 import { addDays, DomainInputError, toProcessorAmount } from '@layerbook/domain';
 import Decimal from 'decimal.js';
@@ -64,18 +64,8 @@ export async function startRefund(
   if (!invoiceId) throw notFound('payment');
   await tx.client.query(`select 1 from invoices where tenant_id = $1 and id = $2 for update`, [tx.tenantId, invoiceId]);
   if (body.clientKey !== undefined) {
-    // Sent again (the first answer was lost): the first one counted; answer with it. The invoice's lock
-    // above makes a second copy wait here until the first has committed.
-    const { rows } = await tx.client.query<{ id: string; payment_id: string }>(
-      `select id, payment_id from refunds where tenant_id = $1 and client_key = $2`,
-      [tx.tenantId, body.clientKey],
-    );
-    if (rows[0] && rows[0].payment_id !== paymentId) {
-      throw conflict('This refund’s key was already used for another payment.', [
-        { field: 'clientKey', message: 'Use a new key for each refund.' },
-      ]);
-    }
-    if (rows[0]) return { kind: 'recorded', view: await readRefund(tx, rows[0].id) };
+    const earlier = await refundSentAgain(tx, paymentId, body);
+    if (earlier) return { kind: 'recorded', view: await readRefund(tx, earlier) };
   }
   const p = (
     await tx.client.query<LockedPayment>(
@@ -132,6 +122,30 @@ export async function startRefund(
   }
   await settleRefund(tx, deps, actor, refundId, { status: 'succeeded' }, now);
   return { kind: 'recorded', view: await readRefund(tx, refundId) };
+}
+
+/**
+ * A refund sent again with its key (the first answer was lost): the first one counted, so its id is
+ * answered — while it stands (succeeded, or still being sent back) and it is the same refund. A key
+ * on another payment, on a refund that failed, or on one of another method or amount is 409 naming
+ * `clientKey`: replaying it would tell the office a refund they did not ask for was made (the
+ * dialog makes a new key after a refusal). The invoice's lock, taken before, makes a second copy wait
+ * here until the first has committed. Null when the key is new.
+ */
+async function refundSentAgain(tx: TenantTx, paymentId: string, body: RefundCreate): Promise<string | null> {
+  const { rows } = await tx.client.query<{ id: string; payment_id: string; status: RefundStatus; method: PaymentMethod; amount: string }>(
+    `select id, payment_id, status, method, amount::text as amount from refunds where tenant_id = $1 and client_key = $2`,
+    [tx.tenantId, body.clientKey],
+  );
+  const earlier = rows[0];
+  if (!earlier) return null;
+  const refuse = (detail: string) => conflict(detail, [{ field: 'clientKey', message: 'Use a new key for each refund.' }]);
+  if (earlier.payment_id !== paymentId) throw refuse('This refund’s key was already used for another payment.');
+  if (earlier.status === 'failed') throw refuse('This refund’s key belongs to a refund that failed: send the refund again as a new one.');
+  if (earlier.method !== body.method || !new Decimal(earlier.amount).equals(body.amount)) {
+    throw refuse('This refund’s key was already used for a refund of another method or amount.');
+  }
+  return earlier.id;
 }
 
 function checkMethod(p: LockedPayment, method: PaymentMethod, onlinePayments: boolean): void {

@@ -1,4 +1,4 @@
-import { refundCreate, uuid, type RefundView } from '@layerbook/contracts';
+import { REFUND_PROCESSOR_PROBLEMS, refundCreate, uuid, type RefundView } from '@layerbook/contracts';
 import { type Request, Router } from 'express';
 import type Stripe from 'stripe';
 import { z } from 'zod';
@@ -31,12 +31,12 @@ export function paymentRoutes(ctx: AppContext): Router {
       if (answer.kind === 'answered') await settleRefund(tx, deps, actor, refundId, answer.outcome, ctx.now());
       return readRefund(tx, refundId);
     });
-    if (view.status === 'failed') throw new HttpError(502, 'The payment processor refused the refund', view.failureMessage ?? undefined);
+    if (view.status === 'failed') throw new HttpError(502, REFUND_PROCESSOR_PROBLEMS.refused, view.failureMessage ?? undefined);
     if (answer.kind === 'unknown') {
       ctx.logger.warn({ refundId, err: answer.message }, 'card refund sent without an answer; left pending');
       throw new HttpError(
         502,
-        'The payment processor did not answer',
+        REFUND_PROCESSOR_PROBLEMS.noAnswer,
         'The refund is kept as being sent back: it is settled when the processor confirms it, or send it again — nothing is refunded twice.',
       );
     }

@@ -35,6 +35,16 @@ export interface RefundView {
   readonly failureMessage: string | null;
 }
 
+/**
+ * The titles of the 502 answers to a card refund (POST /api/payments/:id/refunds and its send again):
+ * the processor refused it (the refund is marked failed; trying again is a new refund, with a new key)
+ * or did not answer (the refund is kept as being sent back; sending it again is the same refund).
+ */
+export const REFUND_PROCESSOR_PROBLEMS = {
+  refused: 'The payment processor refused the refund',
+  noAnswer: 'The payment processor did not answer',
+} as const;
+
 /** One payment as the office sees it on the invoice (and the client in the portal, without `createdBy`). */
 export interface PaymentDetail {
   readonly id: string;
@@ -96,6 +106,19 @@ export interface CheckoutStatus {
   /** the receipt, once the payment is recorded */
   readonly paymentId: string | null;
   readonly receiptNumber: string | null;
+  /**
+   * once recorded: what of the payment is kept as the client's credit rather than put on the invoice
+   * (it was voided or settled another way meanwhile, or paid in another currency); null when none is
+   */
+  readonly credit: CheckoutCredit | null;
+}
+
+export interface CheckoutCredit {
+  /** in the payment's currency (major units) */
+  readonly amount: string;
+  readonly currency: string;
+  /** none of the payment went on the invoice */
+  readonly isWholePayment: boolean;
 }
 
 /** A receipt line in the portal (payments and refunds of one invoice). */

@@ -18,6 +18,8 @@ export interface ReceiptMailFacts {
   readonly on: string;
   /** still due on the invoice, formatted; null when nothing is */
   readonly amountDue: string | null;
+  /** the firm gave back all that was paid on the invoice: it is not chased, so the e-mail says nothing of what is due */
+  readonly isInvoiceRefunded: boolean;
   /** payments: what was kept as credit, formatted; null when nothing */
   readonly credit: string | null;
   /** refunds: the payment's receipt number it gives back from */
@@ -36,17 +38,21 @@ export function receiptMail(p: ReceiptMailFacts): RenderedMail {
   const language = p.language ?? 'en';
   const t = translator(language);
   const names = { firm: p.firmName, amount: p.amount, how: p.how, on: p.on, invoice: p.invoiceNumber, job: p.jobTitle };
-  const due = p.amountDue
-    ? t('mail.receipt.stillDue', { amount: p.amountDue, invoice: p.invoiceNumber })
-    : t('mail.receipt.nothingDue', { invoice: p.invoiceNumber });
+  const due = p.isInvoiceRefunded
+    ? []
+    : [
+        p.amountDue
+          ? t('mail.receipt.stillDue', { amount: p.amountDue, invoice: p.invoiceNumber })
+          : t('mail.receipt.nothingDue', { invoice: p.invoiceNumber }),
+      ];
   const lines =
     p.kind === 'payment'
-      ? [t('mail.receipt.received', names), ...(p.credit ? [t('mail.receipt.credit', { credit: p.credit })] : []), due]
+      ? [t('mail.receipt.received', names), ...(p.credit ? [t('mail.receipt.credit', { credit: p.credit })] : []), ...due]
       : [
           p.paymentNumber ? t('mail.receipt.givenBackFrom', { ...names, payment: p.paymentNumber }) : t('mail.receipt.givenBack', names),
           ...(p.reason ? [t('mail.receipt.reason', { reason: p.reason })] : []),
           ...(p.toCard ? [t('mail.receipt.cardDelay')] : []),
-          due,
+          ...due,
         ];
   return render(
     t('mail.receipt.subject', { number: p.number, firm: p.firmName }),

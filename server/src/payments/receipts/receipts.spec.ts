@@ -83,6 +83,35 @@ describe('receipt PDFs', () => {
     }
   });
 
+  it('prints what is still due in the invoice’s currency on the receipt of a payment taken in another', async () => {
+    const f = await issuedInvoice(t, 'Euro Receipt Plaster', '250.00');
+    const paid = await f.payDirect({ method: 'card', amount: '90.00', currency: 'EUR', processorSessionId: 'cs_test_eur_receipt' });
+    const text = textOf((await binary(f.agent, `/api/payments/${paid.paymentId}/receipt.pdf`)).body);
+    const eur = (amount: string) => formatMoney(amount, 'EUR', 'en-US');
+    // all 90.00 EUR kept as credit (another currency than the invoice's); the invoice still asks its own 250.00 USD
+    expect(text).toContain(`Received ${eur('90.00')}`);
+    expect(text).toContain(`Kept as credit for Edwina Marl ${eur('90.00')}`);
+    expect(text).toContain(`Still due on INV-0001 as of December 20, 2026 ${usd('250.00')}`);
+  });
+
+  it('says nothing is still due on the receipts of an invoice whose payments were all given back', async () => {
+    const f = await issuedInvoice(t, 'Full Refund Print Plaster', '100.00');
+    const cheque = await f.payOffline('100.00', '1042', '2026-12-10');
+    const res = await f.refund(cheque, {
+      amount: '100.00',
+      method: 'cheque',
+      reference: '2001',
+      refundedOn: '2026-12-18',
+      reason: 'Job called off',
+    });
+    expect(await f.money(cheque)).toMatchObject({ status: 'refunded' });
+    for (const url of [`/api/payments/refunds/${(res.body as RefundView).id}/receipt.pdf`, `/api/payments/${cheque}/receipt.pdf`]) {
+      const text = textOf((await binary(f.agent, url)).body);
+      expect(text).toContain('INV-0001');
+      expect(text).not.toContain('Still due');
+    }
+  });
+
   it('lets a client read only their own receipts, and no one another firm’s', async () => {
     const f = await receiptsJob('Own Receipts Lime');
     const mine = await withTenant(t.ctx.pool, f.firmId, async (tx) => {
@@ -164,6 +193,24 @@ describe('receipt e-mails', () => {
     expect(mail.text).toContain(`received ${usd('200.00')} from you by bank transfer TRF-88 on December 12, 2026 for invoice INV-0001`);
     expect(mail.text).toContain(`${usd('20.00')} of it was more than the invoice asked and is kept as credit on your account.`);
     expect(mail.text).toContain('Nothing is due on invoice INV-0001 now.');
+  });
+
+  it('does not ask for the invoice’s amount in the receipt of a refund that gave back all that was paid', async () => {
+    const f = await issuedInvoice(t, 'Full Refund Mail Plaster', '100.00');
+    const cheque = await f.payOffline('100.00', '1042', '2026-12-10');
+    const res = await f.refund(cheque, {
+      amount: '100.00',
+      method: 'cheque',
+      reference: '2001',
+      refundedOn: '2026-12-18',
+      reason: 'Job called off',
+    });
+    const [mail] = await outbox(f.firmId, `receipt:refund:${(res.body as RefundView).id}`);
+    expect(mail.text).toContain(
+      `gave back ${usd('100.00')} by cheque 2001 on December 18, 2026, from your payment RCT-0001 on invoice INV-0001`,
+    );
+    expect(mail.text).not.toContain('still due');
+    expect(mail.text).not.toContain('Nothing is due');
   });
 
   it("words a receipt in the client's language (Spanish), with money and dates for it", async () => {

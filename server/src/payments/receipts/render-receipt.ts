@@ -19,12 +19,15 @@ const withReference = (words: string, reference: string) => `${words}${reference
 /**
  * A receipt PDF under the firm's heading (as its invoices), in the client's language: for a payment,
  * what was received, how, what went on the invoice and what was kept as credit; for a refund, what
- * was given back and how; both end with what is still due on the invoice on the day it is printed.
+ * was given back and how; both end with what is still due on the invoice on the day it is printed,
+ * in the invoice's own currency (a card payment may come in another) — except on an invoice whose
+ * payments were all given back, which the firm does not chase.
  */
 export function renderReceiptPdf(r: PrintableReceipt, logo: Buffer | null): Promise<Buffer> {
   const inv = r.invoice;
   const d = inv.document;
   const { t, f } = printingFor(inv, r.currency);
+  const inInvoiceCurrency = printingFor(inv, inv.currency).f;
   const w = (key: string, params?: Record<string, string>) => t(`pdf.receipt.${key}`, params);
   const isRefund = r.kind === 'refund';
   const invoiceNumber = inv.number ?? w('theInvoice');
@@ -41,10 +44,10 @@ export function renderReceiptPdf(r: PrintableReceipt, logo: Buffer | null): Prom
   documentHeading(doc, d, logo, { title: isRefund ? w('refundTitle') : w('title'), facts }, t);
 
   const invoiceWords = w('invoiceWords', { number: invoiceNumber, kind: t(`pdf.invoice.kinds.${inv.kind}`) });
-  const stillDue: readonly [string, string] = [
-    w('stillDue', { invoice: invoiceNumber, date: f.date(r.printedOn) }),
-    f.money(inv.amountDue),
-  ];
+  const stillDue: ReadonlyArray<readonly [string, string]> =
+    inv.status === 'refunded'
+      ? []
+      : [[w('stillDue', { invoice: invoiceNumber, date: f.date(r.printedOn) }), inInvoiceCurrency.money(inv.amountDue)]];
   if (isRefund) {
     sectionHeading(doc, w('refundHeading', { number: r.number }));
     const how = r.method === 'card' ? w('backToCard') : withReference(w(`refundBy.${r.method}`), r.reference);
@@ -62,7 +65,7 @@ export function renderReceiptPdf(r: PrintableReceipt, logo: Buffer | null): Prom
         [w('givenBack'), f.money(r.amount)],
         [capitalised(w('paymentReceived', { payment: paid })), f.money(r.payment.amount)],
         [w('refundedAll'), f.money(r.payment.refunded)],
-        stillDue,
+        ...stillDue,
       ],
       true,
     );
@@ -85,7 +88,7 @@ export function renderReceiptPdf(r: PrintableReceipt, logo: Buffer | null): Prom
     rows.push([w('appliedTo', { invoice: invoiceNumber }), f.money(r.payment.applied)]);
     if (!isZero(r.payment.credit)) rows.push([w('keptAsCredit', { client: d.client.name }), f.money(r.payment.credit)]);
     if (!isZero(r.payment.refunded)) rows.push([w('refundedSince'), f.minus(r.payment.refunded)]);
-    rows.push(stillDue);
+    rows.push(...stillDue);
     summaryRows(doc, rows, true);
     doc.moveDown(0.6);
     paragraph(doc, w('thanks'), 'strong', COLOURS.ink, 10.5);

@@ -3,7 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { TestBed } from '@angular/core/testing';
 import { MAT_DIALOG_DATA, MatDialogRef } from '@angular/material/dialog';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
-import type { PaymentDetail } from '@layerbook/contracts/types';
+import { REFUND_PROCESSOR_PROBLEMS, type PaymentDetail, type RefundCreate } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cardOverpayment, cardRefundPending, chequeRefund, transferPayment } from './payment-fixtures';
 import { RefundDialog, type RefundDialogData } from './refund-dialog';
@@ -169,20 +169,73 @@ describe('the refund dialog', () => {
     expect(close).not.toHaveBeenCalled();
   });
 
-  it('says at the top when the card processor refuses, and stays open', async () => {
-    const { fixture, html, type, submit, http, close, component } = render(cardOverpayment);
+  it('says at the top when the card processor refuses, stays open, and sends the next try as a refund of its own', async () => {
+    const { fixture, html, type, choose, submit, http, close, component } = render(cardOverpayment);
     type('Why the money goes back', 'Job cancelled');
     await submit();
-    http
-      .expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' })
-      .flush(
-        { type: 'about:blank', title: 'The card processor refused the refund.', status: 502, detail: 'The card was closed by its bank.' },
-        { status: 502, statusText: 'Bad Gateway' },
-      );
+    const refused = http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' });
+    const firstKey = (refused.request.body as RefundCreate).clientKey;
+    refused.flush(
+      { type: 'about:blank', title: REFUND_PROCESSOR_PROBLEMS.refused, status: 502, detail: 'The card was closed by its bank.' },
+      { status: 502, statusText: 'Bad Gateway' },
+    );
     await fixture.whenStable();
     fixture.detectChanges();
     expect(html.querySelector('lb-form-alert')?.textContent).toContain('The card was closed by its bank.');
     expect(close).not.toHaveBeenCalled();
     expect(component.wasSent()).toBe(true);
+
+    // the refused refund is marked failed: cash handed back instead is a new refund, with a new key
+    choose('Cash (already handed back)');
+    type('Amount to give back', '40.00');
+    await submit();
+    const cash = http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' });
+    expect(cash.request.body).toMatchObject({ method: 'cash', amount: '40.00' });
+    expect((cash.request.body as RefundCreate).clientKey).not.toBe(firstKey);
+    cash.flush(chequeRefund, { status: 201, statusText: 'Created' });
+    await new Promise((resolve) => setTimeout(resolve));
+    expect(close).toHaveBeenCalledWith(chequeRefund);
+  });
+
+  it('sends the same key again when the processor did not answer, so a refund already made is not made twice', async () => {
+    const { fixture, type, submit, http } = render(cardOverpayment);
+    type('Why the money goes back', 'Job cancelled');
+    await submit();
+    const lost = http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' });
+    const key = (lost.request.body as RefundCreate).clientKey;
+    lost.flush(
+      { type: 'about:blank', title: REFUND_PROCESSOR_PROBLEMS.noAnswer, status: 502, detail: 'The refund is kept as being sent back.' },
+      { status: 502, statusText: 'Bad Gateway' },
+    );
+    await fixture.whenStable();
+    await submit();
+    const again = http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' });
+    expect((again.request.body as RefundCreate).clientKey).toBe(key);
+    again.flush(cardRefundPending, { status: 201, statusText: 'Created' });
+    await fixture.whenStable();
+  });
+
+  it('makes a new key after the API refuses the key itself (409 naming clientKey)', async () => {
+    const { fixture, type, submit, http } = render(cardOverpayment);
+    type('Why the money goes back', 'Job cancelled');
+    await submit();
+    const refused = http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' });
+    const key = (refused.request.body as RefundCreate).clientKey;
+    refused.flush(
+      {
+        type: 'about:blank',
+        title: 'Conflict',
+        status: 409,
+        detail: 'This refund’s key belongs to a refund that failed: send the refund again as a new one.',
+        errors: [{ field: 'clientKey', message: 'Use a new key for each refund.' }],
+      },
+      { status: 409, statusText: 'Conflict', headers: { 'Content-Type': 'application/problem+json' } },
+    );
+    await fixture.whenStable();
+    await submit();
+    const again = http.expectOne({ method: 'POST', url: '/api/payments/pay-2/refunds' });
+    expect((again.request.body as RefundCreate).clientKey).not.toBe(key);
+    again.flush(cardRefundPending, { status: 201, statusText: 'Created' });
+    await fixture.whenStable();
   });
 });

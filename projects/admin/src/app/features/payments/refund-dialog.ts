@@ -12,6 +12,7 @@ import { MatRadioModule } from '@angular/material/radio';
 import { PAYMENT_LIMITS, type PaymentDetail, type PaymentMethod, type RefundCreate, type RefundView } from '@layerbook/contracts/types';
 import { formatMoney } from '@layerbook/domain';
 import { newClientKey } from '../../shared/client-key';
+import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
 import { Session } from '../../core/auth/session';
 import { DATE_YEAR_WORDS, dateYearInRange, firmToday, fromIsoDate, toIsoDate } from '../../shared/forms/iso-date';
@@ -25,7 +26,7 @@ import { PAYMENT_METHOD_LABELS } from '../billing/invoice-words';
 import { PaymentApi } from './payment-api';
 import { paymentParts, refundSplit } from './payment-money';
 import { REFUND_CHOICE_WORDS, refundSplitWords } from './payment-words';
-import { defaultRefundMethod, refundAmountCheck, refundMethods } from './refund-input';
+import { defaultRefundMethod, isRefusedForGood, refundAmountCheck, refundMethods } from './refund-input';
 import { TranslatePipe } from '@ngx-translate/core';
 import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 
@@ -146,13 +147,22 @@ export class RefundDialog {
     });
   }
 
-  /** made once per dialog: a refund sent again after a lost answer is recorded once (the API finds the first) */
-  private readonly clientKey = newClientKey();
+  /**
+   * Kept while the outcome is unknown, so a refund sent again after a lost answer is recorded once (the
+   * API finds the first); a new one after a definite refusal, so the next try is a refund of its own —
+   * the API never answers a key with a refund that failed or asked something else.
+   */
+  private clientKey = newClientKey();
 
   protected async refund(): Promise<void> {
     const done = await this.submission.send(this.form, () => {
       this.sent.set(true);
-      return this.api.refund(this.payment.id, this.toRefund());
+      const sending = this.api.refund(this.payment.id, this.toRefund());
+      // Beside the submission's own handling, which shows the refusal.
+      void sending.catch((error: unknown) => {
+        if (isRefusedForGood(toProblem(error))) this.clientKey = newClientKey();
+      });
+      return sending;
     });
     if (done) this.ref.close(done);
   }

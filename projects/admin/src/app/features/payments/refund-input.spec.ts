@@ -1,6 +1,7 @@
 import { FormControl } from '@angular/forms';
 import { describe, expect, it } from 'vitest';
-import { defaultRefundMethod, refundAmountCheck, refundMethods } from './refund-input';
+import { REFUND_PROCESSOR_PROBLEMS } from '@layerbook/contracts/types';
+import { defaultRefundMethod, isRefusedForGood, refundAmountCheck, refundMethods } from './refund-input';
 
 describe('refund choices', () => {
   it('offers the card first for a card payment, and only by hand for the others', () => {
@@ -38,5 +39,21 @@ describe('refundAmountCheck', () => {
     );
     expect(small(new FormControl('0.30', { nonNullable: true }))).toBeNull();
     expect(small(new FormControl('0.31', { nonNullable: true }))).toEqual({ overRefundable: '0.30' });
+  });
+});
+
+describe('isRefusedForGood', () => {
+  it.each([
+    [400, 'The request has invalid fields', true],
+    [409, 'Conflict', true],
+    [401, 'Not signed in', true],
+    [502, REFUND_PROCESSOR_PROBLEMS.refused, true],
+    // the outcome is unknown: the same refund (and key) goes again
+    [502, REFUND_PROCESSOR_PROBLEMS.noAnswer, false],
+    [500, 'Internal Server Error', false],
+    [503, 'Service Unavailable', false],
+    [0, 'Layerbook could not be reached. Check your connection and try again.', false],
+  ])('a %i “%s” is refused for good: %s', (status, title, expected) => {
+    expect(isRefusedForGood({ status, title })).toBe(expected);
   });
 });

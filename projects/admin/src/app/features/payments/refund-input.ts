@@ -1,6 +1,12 @@
 import { AbstractControl, ValidationErrors, ValidatorFn } from '@angular/forms';
 import { roundToCurrency, roundsToZero } from '@layerbook/contracts/engine';
-import { MONEY_AMOUNT_PATTERN, type PaymentDetail, type PaymentMethod } from '@layerbook/contracts/types';
+import {
+  MONEY_AMOUNT_PATTERN,
+  REFUND_PROCESSOR_PROBLEMS,
+  type PaymentDetail,
+  type PaymentMethod,
+  type Problem,
+} from '@layerbook/contracts/types';
 import { toAmount } from '../../shared/forms/money-input';
 
 const OFFLINE_REFUNDS: readonly PaymentMethod[] = ['transfer', 'cheque', 'cash'];
@@ -29,3 +35,12 @@ export function refundAmountCheck(refundable: () => string, currency: () => stri
       : null;
   };
 }
+
+/**
+ * Whether the API's answer to a refund settles that nothing was refunded, so trying again is a new
+ * refund and needs a new key: a 4xx (the request was refused as it stood) or the processor's refusal
+ * (the refund is marked failed). When the outcome is unknown — the processor did not answer, a server
+ * error, no connection — the same key goes again, and the API answers the refund already made.
+ */
+export const isRefusedForGood = (problem: Pick<Problem, 'status' | 'title'>): boolean =>
+  (problem.status >= 400 && problem.status < 500) || (problem.status === 502 && problem.title === REFUND_PROCESSOR_PROBLEMS.refused);

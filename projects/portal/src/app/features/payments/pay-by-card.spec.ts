@@ -51,7 +51,7 @@ describe('paying an invoice by card', () => {
     expect(leaveFor).toHaveBeenCalledWith('http://127.0.0.1:12111/pay/cs_test_1');
   });
 
-  it('shows the server’s refusal in words and lets the client try again', async () => {
+  it('after a refusal (409) reads the invoice again: the server’s reason, and the reason from the invoice as it stands now', async () => {
     const { fixture, html, http, leaveFor, button } = await render({ ...openDeposit, amountDue: '0.30' });
     expect(button()?.textContent).toContain('Pay $0.30 by card');
     button()!.click();
@@ -68,10 +68,58 @@ describe('paying an invoice by card', () => {
       { status: 409, statusText: 'Conflict' },
     );
     await fixture.whenStable();
+    http.expectOne({ method: 'GET', url: '/api/portal/invoices/inv-1' }).flush({
+      ...openDeposit,
+      amountDue: '0.30',
+      canPayOnline: false,
+      payOnlineReason: { code: 'belowMinimum', currency: 'USD', minimum: '0.50' },
+    });
+    await fixture.whenStable();
     fixture.detectChanges();
     expect(html.querySelector('[role="alert"]')?.textContent).toContain(problems.belowMinimum);
-    expect(button()?.disabled).toBe(false);
+    expect(button()).toBeNull();
+    expect(html.querySelector('.note')?.textContent).toContain(
+      'The amount due is less than the smallest payment the card processor takes, $0.50.',
+    );
     expect(leaveFor).not.toHaveBeenCalled();
+  });
+
+  it('after a refusal because the invoice was paid another way meanwhile: no stale amount or button, and the page is told', async () => {
+    const { fixture, html, http, leaveFor, button } = await render(openDeposit);
+    const changed = vi.fn();
+    fixture.componentRef.instance.invoiceChanged.subscribe(changed);
+    button()!.click();
+    http
+      .expectOne({ method: 'POST', url: '/api/portal/invoices/inv-1/checkout' })
+      .flush(
+        { type: 'about:blank', title: 'Conflict', status: 409, detail: 'Invoice INV-0007 is already paid.' },
+        { status: 409, statusText: 'Conflict' },
+      );
+    await fixture.whenStable();
+    const paid = { ...openDeposit, status: 'paid' as const, amountPaid: '1200.00', amountDue: '0.00', canPayOnline: false };
+    http.expectOne({ method: 'GET', url: '/api/portal/invoices/inv-1' }).flush(paid);
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(button()).toBeNull();
+    expect(html.textContent).not.toContain('$1,200.00');
+    expect(html.querySelector('[role="alert"]')?.textContent).toContain(problems.notPayable);
+    expect(html.textContent).toContain('Invoice INV-0007 is now paid in full: there is nothing left to pay.');
+    expect(html.textContent).not.toContain('the way the invoice says');
+    expect(changed).toHaveBeenCalledWith(paid);
+    expect(leaveFor).not.toHaveBeenCalled();
+  });
+
+  it('when the card page could not be opened (502): says so and lets the client try again, reading nothing', async () => {
+    const { fixture, html, http, button } = await render(openDeposit);
+    button()!.click();
+    http
+      .expectOne({ method: 'POST', url: '/api/portal/invoices/inv-1/checkout' })
+      .flush({ type: 'about:blank', title: 'The card processor did not answer', status: 502 }, { status: 502, statusText: 'Bad Gateway' });
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(html.querySelector('[role="alert"]')?.textContent).toContain(problems.processorDown);
+    expect(button()?.disabled).toBe(false);
+    expect(button()?.textContent).toContain('Pay $1,200.00 by card');
   });
 
   it('when paying online is not open: no button, the reason, and the firm’s own way', async () => {

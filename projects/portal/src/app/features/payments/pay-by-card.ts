@@ -1,8 +1,8 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, linkedSignal, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import type { PortalInvoiceDetail } from '@layerbook/contracts/types';
-import { problemMessage } from '../../core/errors/problem';
+import { problemMessage, toProblem } from '../../core/errors/problem';
 import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { LEAVE_FOR, PaymentApi } from './payment-api';
@@ -20,7 +20,7 @@ import { formatAmount, LbMoneyPipe } from '../../../../../shared/i18n/format';
   selector: 'lb-pay-by-card',
   imports: [FormAlert, LbMoneyPipe, MatButtonModule, MatIconModule, TranslatePipe],
   template: `
-    @let inv = invoice();
+    @let inv = current();
     <section class="pay" aria-labelledby="pay-heading">
       @if (inv.canPayOnline) {
         <h2 id="pay-heading">{{ 'payments.pay.online' | translate }}</h2>
@@ -33,8 +33,13 @@ import { formatAmount, LbMoneyPipe } from '../../../../../shared/i18n/format';
         @if (isBusy()) {
           <p class="small" role="status">{{ 'payments.pay.opening' | translate }}</p>
         }
+      } @else if (inv.status === 'paid' || inv.status === 'void') {
+        <h2 id="pay-heading">{{ 'payments.pay.how' | translate }}</h2>
+        <lb-form-alert [message]="message()" />
+        <p>{{ (inv.status === 'paid' ? 'payments.pay.nowPaid' : 'payments.pay.nowVoid') | translate: { number: inv.number } }}</p>
       } @else {
         <h2 id="pay-heading">{{ 'payments.pay.how' | translate }}</h2>
+        <lb-form-alert [message]="message()" />
         @if (inv.payOnlineReason; as reason) {
           <p class="note">
             <mat-icon aria-hidden="true">info</mat-icon>
@@ -95,25 +100,45 @@ export class PayByCard {
   private readonly language = inject(Language);
 
   readonly invoice = input.required<PortalInvoiceDetail>();
+  /** The invoice as read again after a refusal, for the page around to show what stands now too. */
+  readonly invoiceChanged = output<PortalInvoiceDetail>();
 
+  /** The page's invoice, or the one read again here after the server refused a card payment (it changed meanwhile). */
+  protected readonly current = linkedSignal(() => this.invoice());
   protected readonly label = computed(() => {
-    const inv = this.invoice();
+    const inv = this.current();
     return payButtonLabel(formatAmount(inv.amountDue, inv.currency, this.language.locale()));
   });
   protected readonly isBusy = signal(false);
   protected readonly message = signal<string | null>(null);
   protected readonly isHydrated = hydratedSignal();
 
-  /** Opens a checkout for the amount due and sends the browser to the processor's page; stays busy while it leaves. */
+  /**
+   * Opens a checkout for the amount due and sends the browser to the processor's page; stays busy while
+   * it leaves. A 409 means the invoice changed since the page read it (paid another way, voided, less
+   * due): the server's reason stays shown, and the invoice is read again so the amount and the button
+   * are what stands now.
+   */
   protected async pay(): Promise<void> {
     this.message.set(null);
     this.isBusy.set(true);
     try {
-      const start = await this.api.startCheckout(this.invoice().id);
+      const start = await this.api.startCheckout(this.current().id);
       this.leaveFor(start.url);
     } catch (error) {
       this.message.set(problemMessage(error));
+      if (toProblem(error).status === 409) await this.readAgain();
       this.isBusy.set(false);
+    }
+  }
+
+  private async readAgain(): Promise<void> {
+    try {
+      const fresh = await this.api.invoice(this.current().id);
+      this.current.set(fresh);
+      this.invoiceChanged.emit(fresh);
+    } catch {
+      // Not read: the page's copy stays, and the server's reason above still says why it was refused.
     }
   }
 }

@@ -1,7 +1,7 @@
 import { DOCUMENT } from '@angular/common';
 import { HttpClient } from '@angular/common/http';
 import { InjectionToken, Injectable, inject } from '@angular/core';
-import type { CheckoutStart } from '@layerbook/contracts/types';
+import type { CheckoutStart, PortalInvoiceDetail } from '@layerbook/contracts/types';
 import { firstValueFrom } from 'rxjs';
 
 const invoicePath = (invoiceId: string) => `/api/portal/invoices/${encodeURIComponent(invoiceId)}`;
@@ -21,6 +21,11 @@ export class PaymentApi {
 
   startCheckout(invoiceId: string): Promise<CheckoutStart> {
     return firstValueFrom(this.http.post<CheckoutStart>(`${invoicePath(invoiceId)}/checkout`, {}));
+  }
+
+  /** The invoice read again, as it stands now (after a card payment was refused because it changed). */
+  invoice(invoiceId: string): Promise<PortalInvoiceDetail> {
+    return firstValueFrom(this.http.get<PortalInvoiceDetail>(invoicePath(invoiceId)));
   }
 }
 

@@ -53,4 +53,5 @@ export const checkout = (state: CheckoutStatus['state'], paid = false): Checkout
   currency: 'USD',
   paymentId: paid ? 'pay-1' : null,
   receiptNumber: paid ? 'RCT-0007' : null,
+  credit: null,
 });

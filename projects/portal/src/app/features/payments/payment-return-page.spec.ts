@@ -121,6 +121,26 @@ describe('the page the card page sends the client back to', () => {
     expect(state()).toContain('Paid — receipt RCT-0007');
   });
 
+  it('a payment that landed after the invoice was voided: kept as credit, never "Paid"', async () => {
+    const keptAsCredit: CheckoutStatus = {
+      ...checkout('paid', true),
+      credit: { amount: '1200.00', currency: 'USD', isWholePayment: true },
+    };
+    const { html, state } = await render(keptAsCredit, undefined, {
+      ...openDeposit,
+      status: 'void',
+      amountDue: '0.00',
+      canPayOnline: false,
+    });
+    expect(state()).toContain('Payment kept as credit — receipt RCT-0007');
+    expect(state()).toContain(
+      'Your payment of $1,200.00 came in, but it could not go on this invoice, so the firm keeps it as credit for you.',
+    );
+    expect(state()).not.toContain('Paid');
+    expect(html.querySelector('a[download]')?.textContent).toContain('Download receipt RCT-0007 (PDF)');
+    expect(html.textContent).not.toContain('paid in full');
+  });
+
   it('a card page that closed unpaid: nothing was charged, and the way back to the invoice', async () => {
     const { html, http, settle, state } = await render(checkout('expired'));
     expect(state()).toContain('nothing was charged');

@@ -62,7 +62,8 @@ export class PaymentReturnPage {
   });
   protected readonly words = computed(() => {
     const s = this.status();
-    return s ? checkoutWords(s, this.gaveUp()) : null;
+    const locale = this.language.locale();
+    return s ? checkoutWords(s, this.gaveUp(), (amount, currency) => formatAmount(amount, currency, locale)) : null;
   });
   protected readonly amount = computed(() => {
     const s = this.status();

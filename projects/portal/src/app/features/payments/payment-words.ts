@@ -12,6 +12,7 @@ export interface CheckoutWords {
   readonly heading: string;
   readonly headingParams?: Readonly<Record<string, string>>;
   readonly text: string;
+  readonly textParams?: Readonly<Record<string, string>>;
   readonly icon: string;
   /** still checking by itself */
   readonly isWaiting: boolean;
@@ -20,19 +21,41 @@ export interface CheckoutWords {
 
 /**
  * The return page's words for a checkout's state. `gaveUp`: the page stopped checking (about a
- * minute) and the payment is still not recorded; a client must never be led to pay twice.
+ * minute) and the payment is still not recorded; a client must never be led to pay twice. A payment
+ * the invoice no longer asked for (voided or settled meanwhile) is kept as the client's credit: never
+ * "paid" then, and the part kept is said when only some of it is. `money` formats an amount in a currency.
  */
-export function checkoutWords(status: Pick<CheckoutStatus, 'state' | 'receiptNumber'>, gaveUp: boolean): CheckoutWords {
+export function checkoutWords(
+  status: Pick<CheckoutStatus, 'state' | 'receiptNumber' | 'credit'>,
+  gaveUp: boolean,
+  money: (amount: string, currency: string) => string,
+): CheckoutWords {
   switch (status.state) {
-    case 'paid':
+    case 'paid': {
+      const receipt = status.receiptNumber ? { headingParams: { number: status.receiptNumber } } : {};
+      const credit = status.credit;
+      if (credit?.isWholePayment) {
+        return {
+          heading: status.receiptNumber ? 'payments.checkout.keptAsCreditReceipt' : 'payments.checkout.keptAsCredit',
+          ...receipt,
+          text: 'payments.checkout.keptAsCreditText',
+          textParams: { amount: money(credit.amount, credit.currency) },
+          icon: 'info',
+          isWaiting: false,
+          tone: 'notice',
+        };
+      }
       return {
         heading: status.receiptNumber ? 'payments.checkout.paidReceipt' : 'payments.checkout.paid',
-        ...(status.receiptNumber ? { headingParams: { number: status.receiptNumber } } : {}),
-        text: 'payments.checkout.paidText',
+        ...receipt,
+        ...(credit
+          ? { text: 'payments.checkout.paidPartCreditText', textParams: { amount: money(credit.amount, credit.currency) } }
+          : { text: 'payments.checkout.paidText' }),
         icon: 'task_alt',
         isWaiting: false,
         tone: 'done',
       };
+    }
     case 'expired':
       return {
         heading: 'payments.checkout.expired',
