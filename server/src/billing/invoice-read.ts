@@ -237,7 +237,9 @@ function trailText(action: string, data: AuditData, currency: string): string {
     case 'invoice.refund_needs_attention':
       return `A refund at the card processor needs checking: ${String(data['why'] ?? '')}`;
     case 'invoice.payment_needs_attention':
-      return `A card payment needs checking: ${paidOther(data)}`;
+      return data['reason'] === 'paidWhenNotAsked'
+        ? `A card payment of ${money(data['amount'])} came in after the invoice stopped asking for it; kept as the client's credit (${money(data['credit'])})`
+        : `A card payment needs checking: ${paidOther(data)}`;
     case 'invoice.attention_cleared':
       return 'Marked as dealt with';
     case 'invoice.reminded':

@@ -22,6 +22,7 @@ import { parse, parseChanges } from '../http/validate';
 import { deleteDraft, updateDraft } from './draft-edits';
 import { buildInvoiceListQuery, getInvoice, type InvoiceListRow, invoicePage } from './invoice-read';
 import { issueAndRead } from './issue';
+import { enqueueCheckoutExpiry } from '../payments/checkout-expiry';
 import { recordOfflinePayment } from './offline-payments';
 import { clearAttentionNote } from '../payments/attention';
 import { enqueueReceiptMail } from '../payments/receipt-mail';
@@ -113,7 +114,11 @@ export function invoiceRoutes(ctx: AppContext): Router {
       const recorded = await recordOfflinePayment(tx, staffActor(staff), id, parse(offlinePaymentCreate, req.body), ctx.now());
       // The client's receipt goes out through the outbox with the payment (a client without an e-mail gets none);
       // a payment sent again was mailed the first time.
-      if (!recorded.alreadyRecorded) await enqueueReceiptMail(tx, deps, { kind: 'payment', id: recorded.paymentId });
+      if (!recorded.alreadyRecorded) {
+        await enqueueReceiptMail(tx, deps, { kind: 'payment', id: recorded.paymentId });
+        // A card page opened for the old amount due stops taking money once the job runs (payments/checkout-expiry.ts).
+        await enqueueCheckoutExpiry(tx, ctx.queue, id);
+      }
       return getInvoice(tx, id, ctx.now());
     });
     res.json(detail satisfies InvoiceDetail);

@@ -48,8 +48,6 @@ export async function notePaymentMismatch(tx: TenantTx, m: PaymentMismatch): Pro
  * A card payment that came in when the invoice no longer asked for it all (voided or settled another
  * way while the client was on the processor's page): recorded, the rest kept as the client's credit,
  * and noted on its invoice for a person to give back or put to use.
- * Its reason is not yet one of ATTENTION_REASONS (Today's panel has no words for it): the panel
- * reads it as `other` meanwhile, and the entry keeps its own code for when it gets them.
  */
 export async function notePaidWhenNotAsked(
   tx: TenantTx,
@@ -62,7 +60,7 @@ export async function notePaidWhenNotAsked(
     entity: 'invoice',
     entityId: m.invoiceId,
     data: {
-      reason: 'paidWhenNotAsked',
+      reason: 'paidWhenNotAsked' satisfies AttentionReason,
       paymentId: m.paymentId,
       receipt: m.receiptNumber,
       amount: m.amount,

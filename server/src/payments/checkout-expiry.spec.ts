@@ -55,18 +55,29 @@ describe('checkouts the invoice no longer asks for', () => {
     expect(await invoiceBooks(p.t, f.firmId, f.invoiceId)).toMatchObject({ status: 'paid', amountPaid: '250.00', credits: [] });
   });
 
-  it('expires an open checkout of an invoice a cheque settled, at the reconciliation’s next run', async () => {
+  it('expires an open checkout of an invoice a cheque settled, by the job the cheque queues', async () => {
     const f = await clientInvoice(p.t, 'Cheque Settled Plaster');
     const started = await f.started();
     expect((await cheque(f, '250.00')).status).toBe(200);
+    await eventually(async () => (await atProcessor(started.sessionId)) === 'expired', 'the session expired');
+    await eventually(async () => (await checkoutStates(f.firmId, f.invoiceId))[started.checkoutId] === 'expired', 'ours marked expired');
+    expect(p.fake.controls.pay(started.sessionId).ok).toBe(false);
+    // nothing left to expire: the reconciliation's run leaves it alone
+    expect((await p.reconcile()).checkoutsExpired).toBe(0);
+  });
+
+  it('expires at the reconciliation’s next run a stale checkout no job expired (one that gave up)', async () => {
+    const f = await clientInvoice(p.t, 'Swept Plaster');
+    const started = await f.started();
+    // Settled in a way that queued nothing: the invoice stops asking while its card page stays open.
+    await withTenant(p.t.ctx.pool, f.firmId, (tx) =>
+      tx.client.query(`update invoices set status = 'void' where tenant_id = $1 and id = $2`, [f.firmId, f.invoiceId]),
+    );
     const report = await p.reconcile();
     expect(report.checkoutsExpired).toBeGreaterThanOrEqual(1);
     expect(await atProcessor(started.sessionId)).toBe('expired');
     expect((await checkoutStates(f.firmId, f.invoiceId))[started.checkoutId]).toBe('expired');
-    expect(p.fake.controls.pay(started.sessionId).ok).toBe(false);
-    // nothing left to expire: the next run leaves it alone
-    const again = await p.reconcile();
-    expect(again.checkoutsExpired).toBe(0);
+    expect((await p.reconcile()).checkoutsExpired).toBe(0);
   });
 
   it('keeps a card payment that lands on a voided invoice as credit, notes it on Today, and the return page says so', async () => {
@@ -94,9 +105,15 @@ describe('checkouts the invoice no longer asks for', () => {
       receiptNumber: 'RCT-0001',
       credit: { amount: '250.00', currency: 'USD', isWholePayment: true },
     });
-    // Today's money panel lists it until someone deals with it (words for it: the panel's general note to check)
+    // Today's money panel lists it until someone deals with it, and the invoice's history says what happened
     const notes = ((await f.agent.get('/api/billing/today')).body as BillingToday).needsAttention;
-    expect(notes.map((n) => [n.reason, n.invoiceNumber, n.amount, n.currency])).toEqual([['other', 'INV-0001', '250.00', 'USD']]);
+    expect(notes.map((n) => [n.reason, n.invoiceNumber, n.amount, n.currency])).toEqual([
+      ['paidWhenNotAsked', 'INV-0001', '250.00', 'USD'],
+    ]);
+    const trail = (await f.agent.get(`/api/invoices/${f.invoiceId}`)).body.auditTrail as { action: string; text: string }[];
+    expect(trail.find((a) => a.action === 'invoice.payment_needs_attention')?.text).toBe(
+      "A card payment of $250.00 came in after the invoice stopped asking for it; kept as the client's credit ($250.00)",
+    );
   });
 
   it('says a card payment went on the invoice in full when it did: no credit', async () => {

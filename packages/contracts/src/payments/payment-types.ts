@@ -138,10 +138,12 @@ export const PAYMENT_LIMITS = { reasonMaxLength: 500, referenceMaxLength: 120, c
  * Why the card processor's word left something for a person: a payment taken in another amount or
  * currency than the invoice asked; a refund the processor reported failed after we recorded it given
  * back, or went through after we were told it failed; a refund made at the processor's dashboard we
- * could not record (another currency, more than was left on the payment). `other` for older notes.
+ * could not record (another currency, more than was left on the payment); a card payment that came in
+ * after the invoice stopped asking for it (voided, or settled another way). `other` for older notes.
  */
 export const ATTENTION_REASONS = [
   'paidOtherAmount',
+  'paidWhenNotAsked',
   'refundFailedAfter',
   'refundWentThroughAfter',
   'refundOtherCurrency',

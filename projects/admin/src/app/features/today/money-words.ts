@@ -29,6 +29,7 @@ export function receivedWords(receivedOn: string, today: string | null): 'today'
 /** What each kind of note to check says (its amounts as params: `amount`, and `asked` for a payment). */
 export const ATTENTION_WORDS: Readonly<Record<AttentionReason, string>> = {
   paidOtherAmount: 'today.money.attentionPaidOtherAmount',
+  paidWhenNotAsked: 'today.money.attentionPaidWhenNotAsked',
   refundFailedAfter: 'today.money.attentionRefundFailedAfter',
   refundWentThroughAfter: 'today.money.attentionRefundWentThroughAfter',
   refundOtherCurrency: 'today.money.attentionRefundOtherCurrency',

@@ -7,10 +7,12 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ApplicationRef } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
+import { By } from '@angular/platform-browser';
 import { provideRouter } from '@angular/router';
 import type { PortalInvoiceDetail } from '@layerbook/contracts/types';
 import { afterEach, describe, expect, it } from 'vitest';
 import { openDeposit, paidDeposit } from '../payments/payment-fixtures';
+import { PayByCard } from '../payments/pay-by-card';
 import { InvoicePage } from './invoice-page';
 import { Language } from '../../../../../shared/i18n/language';
 
@@ -31,7 +33,7 @@ async function render(invoice: PortalInvoiceDetail, payment?: string) {
   await fixture.whenStable();
   fixture.detectChanges();
   const html = fixture.nativeElement as HTMLElement;
-  return { html, text: () => html.textContent ?? '' };
+  return { fixture, html, text: () => html.textContent ?? '' };
 }
 
 describe('the client’s invoice page', () => {
@@ -42,6 +44,15 @@ describe('the client’s invoice page', () => {
     expect(html.querySelector('lb-pay-by-card button')?.textContent).toContain('Pay $1,200.00 by card');
     expect(html.querySelector('lb-receipt-list')).toBeNull();
     expect(text()).not.toContain('nothing was charged');
+  });
+
+  it('shows the invoice as it stands now when the pay button read it again after a refusal', async () => {
+    const { fixture, html, text } = await render(openDeposit);
+    fixture.debugElement.query(By.directive(PayByCard)).componentInstance.invoiceChanged.emit(paidDeposit);
+    fixture.detectChanges();
+    await fixture.whenStable();
+    expect(text()).toContain('Paid in full. Thank you.');
+    expect(html.querySelector('lb-pay-by-card')).toBeNull();
   });
 
   it('names the deposit rule on a deposit only', async () => {

@@ -42,6 +42,11 @@ export class InvoicePage {
   });
 
   protected readonly invoice = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
+
+  /** The invoice as it stands now, read again by the pay button after a refusal (paid or voided meanwhile). */
+  protected showFresh(fresh: PortalInvoiceDetail): void {
+    this.loaded.set(fresh);
+  }
   protected readonly isLoading = computed(() => !this.loaded.hasValue() && this.loaded.isLoading());
   /** 404 and a malformed id read the same: the link is wrong, or the invoice is not theirs. */
   private readonly isMissing = computed(() => {
