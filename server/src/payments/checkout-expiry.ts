@@ -35,8 +35,8 @@ export const isCheckoutExpiryJob = (job: object): job is CheckoutExpiryJob => 'e
 /**
  * Queues the expiry of the invoice's stale checkouts, in the caller's transaction, so it runs once
  * that commits (and not at all if it rolls back); nothing when none is stale. Called after what makes
- * them stale: voiding, recording a card payment, opening a newer checkout. An offline payment's route
- * does not call it; the reconciliation's sweep (`sweepStaleCheckouts`) expires those within its period.
+ * them stale: voiding, recording a card or offline payment, opening a newer checkout. The
+ * reconciliation's sweep (`sweepStaleCheckouts`) expires any left open (a job that gave up).
  */
 export async function enqueueCheckoutExpiry(tx: TenantTx, queue: JobQueue, invoiceId: string): Promise<void> {
   const { rowCount } = await tx.client.query(
