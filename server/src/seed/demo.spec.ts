@@ -32,6 +32,24 @@ describe('demo seed', () => {
   });
 });
 
+describe('demo sample boards', () => {
+  it("gives the demo client's house a board in each state: a round she asked to change, its approved next round, one shown, one draft", async () => {
+    const firmId = (await t.queue.boss.getDb().executeSql(`select id from firms where slug = $1`, [DEMO.firm.slug])).rows[0].id;
+    const boards = await withTenant(t.ctx.pool, firmId, (tx) =>
+      tx.client.query<{ label: string; round: number; status: string; has_finish: boolean; follows: boolean }>(
+        `select label, round, status, finish_snapshot is not null as has_finish, previous_board_id is not null as follows
+           from sample_boards order by label, round`,
+      ),
+    );
+    expect(boards.rows).toEqual([
+      { label: 'Library, antiqued glaze', round: 1, status: 'draft', has_finish: true, follows: false },
+      { label: 'Stair hall, burnished lime', round: 1, status: 'changes_requested', has_finish: true, follows: false },
+      { label: 'Stair hall, burnished lime', round: 2, status: 'approved', has_finish: true, follows: true },
+      { label: 'Turret room, two-coat limewash', round: 1, status: 'shown', has_finish: true, follows: false },
+    ]);
+  });
+});
+
 describe('demo billing', () => {
   const firmOf = async () =>
     (await t.queue.boss.getDb().executeSql(`select id from firms where slug = $1`, [DEMO.firm.slug])).rows[0].id as string;

@@ -18,6 +18,7 @@ import { localDate } from '../firms/local-date';
 import { type DemoHistory, seedDemoBilling } from './demo-billing';
 import { seedDemoInquiries } from './demo-inquiries';
 import { seedDemoLibrary } from './demo-library';
+import { seedDemoSamples } from './demo-samples';
 import { seedDemoTakeoff } from './demo-takeoff';
 import { Pool } from 'pg';
 import { hashPassword } from '../auth/passwords';
@@ -96,10 +97,14 @@ export async function seedDemo(pool: Pool, now: Date = new Date(), ownerPool?: P
         accessNotes: 'Stair hall ceiling 17 ft; round sitting room with a turret ceiling',
       })
       .returning({ id: sites.id });
-    await tx.db.insert(portalUsers).values({ tenantId: firmId, clientId: client.id, email: DEMO.client.email, name: DEMO.client.name });
+    const [portalUser] = await tx.db
+      .insert(portalUsers)
+      .values({ tenantId: firmId, clientId: client.id, email: DEMO.client.email, name: DEMO.client.name })
+      .returning({ id: portalUsers.id });
     await seedDemoInquiries(tx, today, userIds[0]);
-    await seedDemoLibrary(tx);
+    const library = await seedDemoLibrary(tx);
     await seedDemoTakeoff(tx, site.id);
+    await seedDemoSamples(tx, { clientId: client.id, siteId: site.id, officeId: userIds[1], portalUserId: portalUser.id, library, now });
     await tx.db.insert(auditLog).values({ tenantId: firmId, actorKind: 'system', action: 'demo.seeded', entity: 'firm', entityId: firmId });
     return { ownerId: userIds[0], officeId: userIds[1], crewId: userIds[2], clientId: client.id, siteId: site.id };
   });
