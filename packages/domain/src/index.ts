@@ -169,7 +169,14 @@ export type { EstimateInput, EstimateOption, EstimateRoom, EstimateSurface, Firm
 export type { EstimateResult, LayerLine, ProductTotal, SurfaceResult } from './estimate/compute-estimate';
 export { computeEstimate, JOB_SIZE_LIMITS } from './estimate/compute-estimate';
 export type { LeadNotice, LeadStatus } from './estimate/lead-status';
-export { ASK_FOR_YEAR, TARGET_HOUSING_BEFORE, isTreatedAsTargetHousing, leadNotice, leadRuleYear, leadStatus } from './estimate/lead-status';
+export {
+  ASK_FOR_YEAR,
+  TARGET_HOUSING_BEFORE,
+  isTreatedAsTargetHousing,
+  leadNotice,
+  leadRuleYear,
+  leadStatus,
+} from './estimate/lead-status';
 export type { OptionCaution } from './estimate/merge-cautions';
 export { mergeCautions } from './estimate/merge-cautions';
 export type { EstimateResultJson, Jsonified } from './estimate/result-json';
