@@ -91,7 +91,7 @@ export async function getClientProposal(tx: TenantTx, client: ClientPrincipal, i
 }
 
 /** Each estimate of this client that has a sent proposal, with its newest sent version. */
-export async function listClientProposals(tx: TenantTx, client: ClientPrincipal): Promise<PortalProposalSummary[]> {
+export async function listClientProposals(tx: TenantTx, client: ClientPrincipal, now: Date): Promise<PortalProposalSummary[]> {
   const clientId = await clientIdOf(tx, client);
   if (!clientId) return [];
   const { rows } = await tx.client.query<{
@@ -111,13 +111,21 @@ export async function listClientProposals(tx: TenantTx, client: ClientPrincipal)
     [tx.tenantId, clientId],
   );
   const changeOrders = await clientChangeOrders(tx, clientId);
+  const today = await firmToday(tx, now);
   return rows
     .sort((a, b) => (b.sent_at?.getTime() ?? 0) - (a.sent_at?.getTime() ?? 0))
     .map((r) => ({
       estimateId: r.estimate_id,
       title: r.title,
       siteAddress: r.site.addressLines.join(', '),
-      latest: { id: r.id, version: r.version, status: r.status, expiresOn: r.expires_on, sentAt: r.sent_at?.toISOString() ?? null },
+      latest: {
+        id: r.id,
+        version: r.version,
+        status: r.status,
+        expiresOn: r.expires_on,
+        isExpired: r.expires_on < today,
+        sentAt: r.sent_at?.toISOString() ?? null,
+      },
       changeOrders: changeOrders.get(r.estimate_id) ?? [],
     }));
 }

@@ -4,6 +4,7 @@ import type {
   EstimateInputs,
   EstimateListItem,
   EstimateOptionResult,
+  EstimateSave,
   EstimateView,
   KeysetPage,
 } from '@layerbook/contracts';
@@ -150,22 +151,20 @@ export async function assertEstimateOpen(tx: TenantTx, estimateId: string): Prom
   if (row?.status === 'accepted') throw conflict(ACCEPTED_ESTIMATE_IS_READ_ONLY);
 }
 
+/** The stored result of an estimate: each option's numbers and the unit its sizes are in. */
+export type EstimateResult = NonNullable<EstimateView['result']>;
+
 /**
- * Saves the office's choices and recomputes every option with the engine — the stored numbers are
- * the server's, whatever the browser showed. An engine refusal becomes a 400 naming its field.
- * An accepted estimate takes no change (409), so its total cannot drift from the job's contract sum.
+ * Prices `inputs` for the site with the engine, from the site's measurements, the firm's estimating
+ * settings and library as they are now: the one path every save and every proposal check takes.
+ * An engine refusal becomes a 400 naming its field.
  */
-export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string, inputs: EstimateInputs, now: Date): Promise<EstimateView> {
-  const row = (
-    await tx.db
-      .select()
-      .from(estimates)
-      .where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, id)))
-      .for('update')
-  )[0];
-  if (!row) throw notFound('estimate');
-  if (row.status === 'accepted') throw conflict(ACCEPTED_ESTIMATE_IS_READ_ONLY);
-  const context = await loadEstimateContext(tx, row.siteId);
+export async function priceEstimate(
+  tx: TenantTx,
+  siteId: string,
+  inputs: EstimateInputs,
+): Promise<{ result: EstimateResult; prices: Array<{ id: string; price: string }> }> {
+  const context = await loadEstimateContext(tx, siteId);
   checkReferences(context, inputs);
   checkAmounts(inputs, context.currency);
   const computed = inputs.variants.map((v, i) => {
@@ -184,13 +183,52 @@ export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string,
   const prices = computed.map((v) => ({ id: v.id, price: v.result.price.price.toFixed(2) }));
   // Stored as JSON with Decimals as strings, so the stored result has no floats for money.
   const variants: EstimateOptionResult[] = computed.map((v) => ({ id: v.id, label: v.label, result: toResultJson(v.result) }));
+  return { result: { variants, lengthUnit: context.lengthUnit }, prices };
+}
+
+async function firmTimeZone(tx: TenantTx): Promise<string> {
+  const { rows } = await tx.client.query<{ time_zone: string }>(`select time_zone from firms where id = $1`, [tx.tenantId]);
+  return rows[0].time_zone;
+}
+
+/**
+ * Optimistic concurrency: the save names the last save it started from (`computedAt` as loaded, null
+ * before the first). Another save since means this one was typed over an older copy and would
+ * silently undo it: 409 naming `computedAt`. A save that names none (an older client) is not checked.
+ */
+async function checkNotSavedSince(tx: TenantTx, savedAt: Date | null, expected: string | null | undefined): Promise<void> {
+  if (expected === undefined || savedAt === null || savedAt.toISOString() === expected) return;
+  const timeZone = await firmTimeZone(tx);
+  const time = new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(savedAt);
+  const message = `Someone else saved this estimate at ${time}, after you opened it. Reload to see their changes, then make yours again.`;
+  throw conflict(message, [{ field: 'computedAt', message }]);
+}
+
+/**
+ * Saves the office's choices and recomputes every option with the engine — the stored numbers are
+ * the server's, whatever the browser showed. An engine refusal becomes a 400 naming its field.
+ * An accepted estimate takes no change (409), so its total cannot drift from the job's contract sum.
+ */
+export async function saveEstimateInputs(tx: TenantTx, actor: Actor, id: string, save: EstimateSave, now: Date): Promise<EstimateView> {
+  const { computedAt: expected, ...inputs } = save;
+  const row = (
+    await tx.db
+      .select()
+      .from(estimates)
+      .where(and(eq(estimates.tenantId, tx.tenantId), eq(estimates.id, id)))
+      .for('update')
+  )[0];
+  if (!row) throw notFound('estimate');
+  if (row.status === 'accepted') throw conflict(ACCEPTED_ESTIMATE_IS_READ_ONLY);
+  await checkNotSavedSince(tx, row.computedAt, expected);
+  const { result, prices } = await priceEstimate(tx, row.siteId, inputs);
   await tx.db
     .update(estimates)
     .set({
       inputs,
       title: inputs.title,
       startDate: inputs.startDate,
-      result: { variants, lengthUnit: context.lengthUnit },
+      result,
       price: prices[0].price,
       computedAt: now,
       updatedAt: now,

@@ -25,7 +25,7 @@ export function portalProposalRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    const items = await withClient(ctx, req, (tx, client) => listClientProposals(tx, client));
+    const items = await withClient(ctx, req, (tx, client) => listClientProposals(tx, client, ctx.now()));
     res.json({ items } satisfies ItemList<PortalProposalSummary>);
   });
 

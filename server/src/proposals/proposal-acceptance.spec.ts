@@ -32,7 +32,14 @@ describe('a client reads and accepts a proposal in the portal', () => {
           estimateId: p.estimateId,
           title: 'Dining room plaster',
           siteAddress: '1 Round Row, Ochreford',
-          latest: { id: p.version.id, version: 1, status: 'sent', expiresOn: '2026-12-31', sentAt: '2026-12-01T15:00:00.000Z' },
+          latest: {
+            id: p.version.id,
+            version: 1,
+            status: 'sent',
+            expiresOn: '2026-12-31',
+            isExpired: false,
+            sentAt: '2026-12-01T15:00:00.000Z',
+          },
           // No job yet, so no change orders.
           changeOrders: [],
         },

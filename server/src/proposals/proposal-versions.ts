@@ -17,6 +17,7 @@ import { toDepositCapRule } from '../billing/settings';
 import { localDate } from '../firms/local-date';
 import { badRequest, conflict, notFound } from '../http/problem';
 import { ACCEPTED_ESTIMATE_IS_READ_ONLY, assertEstimateOpen } from './estimates';
+import { refuseNumbersChangedSinceSaved } from './estimate-freshness';
 import { buildSnapshot, type ProposalChoice } from './build-snapshot';
 import { loadProposalSources, type ProposalSources } from './proposal-sources';
 import { snapshotHash } from './snapshot-hash';
@@ -137,6 +138,7 @@ export async function createVersion(tx: TenantTx, actorUserId: string, input: Pr
   );
   if (accepted.rowCount) throw conflict(ACCEPTED_ESTIMATE_IS_READ_ONLY);
   await refuseLibraryChangedSincePriced(tx, input.estimateId);
+  await refuseNumbersChangedSinceSaved(tx, input.estimateId);
   const terms = mergeTerms(DEFAULT_PROPOSAL_TERMS, input.terms);
   const { snapshot, hash } = snapshotFor(sources, {
     issuedOn: today,
@@ -248,6 +250,7 @@ export async function updateDraft(
     throw conflict(`Version ${current.version} is ${current.status.replace('_', ' ')} and cannot change. Make a new version instead.`);
   const sources = await loadProposalSources(tx, current.estimateId);
   await refuseLibraryChangedSincePriced(tx, current.estimateId);
+  await refuseNumbersChangedSinceSaved(tx, current.estimateId);
   const today = localDate(sources.firm.timeZone, now);
   const expiresOn = change.expiresOn ?? current.expiresOn;
   if (change.expiresOn) checkExpiry(expiresOn, today);

@@ -1,6 +1,6 @@
 import {
   estimateCreate,
-  estimateInputs,
+  estimateSave,
   estimateListQuery,
   uuid,
   type EstimateListItem,
@@ -40,7 +40,7 @@ export function estimateRoutes(ctx: AppContext): Router {
 
   router.put('/:id/inputs', async (req, res) => {
     const saved = await withStaff(ctx, req, 'office', (tx, staff) =>
-      saveEstimateInputs(tx, staffActor(staff), parse(idParam, req.params).id, parse(estimateInputs, req.body), ctx.now()),
+      saveEstimateInputs(tx, staffActor(staff), parse(idParam, req.params).id, parse(estimateSave, req.body), ctx.now()),
     );
     res.json(saved satisfies EstimateView);
   });

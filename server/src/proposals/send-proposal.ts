@@ -9,6 +9,7 @@ import { enqueueMail } from '../mail/outbox';
 import { proposalSentMail } from '../mail/proposal-templates';
 import { ensurePortalAccount } from './client-portal-account';
 import { assertEstimateOpen } from './estimates';
+import { refuseDraftOlderThanEstimate, refuseNumbersChangedSinceSaved } from './estimate-freshness';
 import { getVersion, lockVersion } from './proposal-versions';
 import { snapshotHash } from './snapshot-hash';
 import { longDate } from '../i18n/long-date';
@@ -30,6 +31,9 @@ export async function sendVersion(tx: TenantTx, ctx: AppContext, actorUserId: st
     throw conflict(
       `Version ${version.version} is ${version.status.replace('_', ' ')}; only a draft can be sent. Make a new version instead.`,
     );
+  // the client gets the price the estimate has now, worked out from what the site and firm are now
+  await refuseDraftOlderThanEstimate(tx, id, version.version);
+  await refuseNumbersChangedSinceSaved(tx, version.estimateId);
   const est = (
     await tx.client.query<{ client_id: string }>(`select client_id from estimates where tenant_id = $1 and id = $2 for update`, [
       tx.tenantId,

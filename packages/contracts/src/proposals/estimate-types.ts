@@ -86,6 +86,14 @@ export interface EstimateInputs {
   clientNotes?: string;
 }
 
+/**
+ * PUT /api/estimates/:id/inputs: the inputs and the `computedAt` of the estimate as it was loaded (null
+ * before its first save). Another save since answers 409 naming `computedAt`; a body without it is not checked.
+ */
+export interface EstimateSave extends EstimateInputs {
+  computedAt?: string | null;
+}
+
 /** POST /api/estimates. */
 export interface EstimateCreate {
   siteId: string;

@@ -7,6 +7,8 @@ export interface PortalLatestProposal {
   readonly version: number;
   readonly status: ProposalVersionStatus;
   readonly expiresOn: string;
+  /** past its expiry day in the firm's calendar */
+  readonly isExpired: boolean;
   readonly sentAt: string | null;
 }
 

@@ -1,7 +1,15 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { Observable, firstValueFrom } from 'rxjs';
-import type { ClientDetail, ClientSummary, EstimateCreate, EstimateInputs, EstimateView, KeysetPage } from '@layerbook/contracts/types';
+import type {
+  ClientDetail,
+  ClientSummary,
+  EstimateCreate,
+  EstimateInputs,
+  EstimateSave,
+  EstimateView,
+  KeysetPage,
+} from '@layerbook/contracts/types';
 
 /** GET: newest first, one keyset page at a time (`?after=` the previous page's nextCursor). */
 export const ESTIMATES_URL = '/api/estimates';
@@ -20,8 +28,10 @@ export class EstimateApi {
     return firstValueFrom(this.http.post<EstimateView>(ESTIMATES_URL, body));
   }
 
-  saveInputs(id: string, inputs: EstimateInputs): Promise<EstimateView> {
-    return firstValueFrom(this.http.put<EstimateView>(`${estimateUrl(id)}/inputs`, inputs));
+  /** `computedAt`: the last save this copy was loaded from (null before the first); another save since answers 409. */
+  saveInputs(id: string, inputs: EstimateInputs, computedAt: string | null): Promise<EstimateView> {
+    const body: EstimateSave = { ...inputs, computedAt };
+    return firstValueFrom(this.http.put<EstimateView>(`${estimateUrl(id)}/inputs`, body));
   }
 
   /** Client search for choosing where the work is. */

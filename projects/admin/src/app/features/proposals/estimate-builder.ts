@@ -33,6 +33,8 @@ import { AddOnsSection } from './addons-section';
 import { EstimateApi } from './estimate-api';
 import { MAX_OPTIONS, NOTES_MAX, WORDS, estimateForm, fillForm, nextOptionId, optionGroup, readInputs } from './estimate-form';
 import { SAVED_WORDS, readOnlyReason, statusWord } from './estimate-words';
+import { type HoldsUnsavedChanges } from './leave-estimate-guard';
+import { afterSaveAnswer, isSavedByOther } from './save-answer';
 import { ExtrasFields } from './extras-fields';
 import { applySaveProblem, targetKey } from './field-targets';
 import { LabourSection } from './labour-section';
@@ -80,8 +82,9 @@ type Shown =
   templateUrl: './estimate-builder.html',
   styleUrl: './estimate-builder.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
+  host: { '(window:beforeunload)': 'warnBeforeUnload($event)' },
 })
-export class EstimateBuilder implements OnInit {
+export class EstimateBuilder implements OnInit, HoldsUnsavedChanges {
   private readonly translate = inject(TranslateService);
   private readonly api = inject(EstimateApi);
   private readonly locale = inject(LOCALE_ID);
@@ -97,6 +100,8 @@ export class EstimateBuilder implements OnInit {
   protected readonly loadMessage = signal<string | null>(null);
   protected readonly formMessage = signal<string | null>(null);
   protected readonly justSaved = signal(false);
+  /** the last save was refused because someone else saved since this copy was loaded: offer to reload */
+  protected readonly isSavedByOther = signal(false);
   protected readonly currentIndex = signal(0);
   protected readonly maxOptions = MAX_OPTIONS;
   protected readonly notesMax = NOTES_MAX;
@@ -220,6 +225,24 @@ export class EstimateBuilder implements OnInit {
     void this.load();
   }
 
+  /** For the route's leave guard: typing not saved yet (an accepted, read-only estimate has none). */
+  hasUnsavedChanges(): boolean {
+    return this.isDirty() && !this.readOnlyReason();
+  }
+
+  /** Closing the tab or reloading with unsaved changes: the browser asks, in its own words. */
+  protected warnBeforeUnload(event: BeforeUnloadEvent): void {
+    if (this.hasUnsavedChanges()) event.preventDefault();
+  }
+
+  /** After someone else's save: their copy replaces this one (the typing here is given up). */
+  protected async reload(): Promise<void> {
+    this.isSavedByOther.set(false);
+    this.formMessage.set(null);
+    this.isLoading.set(true);
+    await this.load();
+  }
+
   protected selectOption(index: number): void {
     this.currentIndex.set(index);
   }
@@ -271,12 +294,21 @@ export class EstimateBuilder implements OnInit {
       return;
     }
     const sent = readInputs(this.form, view.context);
+    const sentForm = JSON.stringify(this.form.getRawValue());
     this.isSaving.set(true);
+    this.isSavedByOther.set(false);
     try {
-      this.show(await this.api.saveInputs(view.id, sent));
-      this.justSaved.set(true);
+      const saved = await this.api.saveInputs(view.id, sent, view.computedAt);
+      if (afterSaveAnswer(sentForm, JSON.stringify(this.form.getRawValue())) === 'refill') {
+        this.show(saved);
+        this.justSaved.set(true);
+      } else {
+        this.keepTyped(saved, sentForm);
+      }
     } catch (error) {
-      this.formMessage.set(applySaveProblem(this.form, view.context, sent, toProblem(error)));
+      const problem = toProblem(error);
+      this.isSavedByOther.set(isSavedByOther(problem));
+      this.formMessage.set(applySaveProblem(this.form, view.context, sent, problem));
       this.revision.update((n) => n + 1);
     } finally {
       this.isSaving.set(false);
@@ -295,6 +327,16 @@ export class EstimateBuilder implements OnInit {
     } finally {
       this.isLoading.set(false);
     }
+  }
+
+  /**
+   * A save answered while the office kept typing: the typing stays, the form still counts as unsaved
+   * (measured against what was sent, which is what the server now holds) and the next save sends it.
+   */
+  private keepTyped(saved: EstimateView, sentForm: string): void {
+    this.baseline.set(sentForm);
+    this.view.set(saved);
+    this.revision.update((n) => n + 1);
   }
 
   /** Shows what the server holds: its inputs in the form, its numbers on the right. */

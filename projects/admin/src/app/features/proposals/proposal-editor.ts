@@ -15,7 +15,16 @@ import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import { ProposalApi } from './proposal-api';
 import { PROGRESS_PAYMENT_HINT } from './proposal-words';
-import { MAX_EXCLUSIONS, MAX_TEXT, PROPOSAL_WORDS, fillProposal, placeExclusionErrors, proposalForm, readProposal } from './proposal-form';
+import {
+  MAX_EXCLUSIONS,
+  MAX_TEXT,
+  PROPOSAL_WORDS,
+  fillProposal,
+  placeExclusionErrors,
+  proposalForm,
+  readProposal,
+  startNewProposal,
+} from './proposal-form';
 
 /**
  * The choices a proposal version carries beyond the estimate's numbers: how long the offer stands,
@@ -132,6 +141,8 @@ export class ProposalEditor implements OnInit {
   readonly estimateId = input.required<string>();
   /** the draft to change; none makes a new version */
   readonly draft = input<ProposalVersionView | null>(null);
+  /** the estimate's notes for the client: a new version's Notes start from them */
+  readonly clientNotes = input<string | undefined>('');
   readonly saved = output<ProposalVersionView>();
   readonly cancelled = output<void>();
 
@@ -149,6 +160,7 @@ export class ProposalEditor implements OnInit {
   ngOnInit(): void {
     const draft = this.draft();
     if (draft) fillProposal(this.form, draft.snapshot);
+    else startNewProposal(this.form, this.clientNotes());
   }
 
   protected async save(): Promise<void> {

@@ -1,6 +1,6 @@
 import type { Problem, ProposalSnapshot } from '@layerbook/contracts/types';
 import { describe, expect, it } from 'vitest';
-import { MAX_EXCLUSIONS, fillProposal, placeExclusionErrors, proposalForm, readProposal, toLines } from './proposal-form';
+import { MAX_EXCLUSIONS, fillProposal, placeExclusionErrors, proposalForm, readProposal, startNewProposal, toLines } from './proposal-form';
 
 describe('toLines', () => {
   it.each([
@@ -27,6 +27,15 @@ describe('the proposal form', () => {
       exclusions: ['Moving furniture', 'Repairs to the plaster beneath'],
       notes: 'Access by the side gate.',
     });
+  });
+
+  it.each([
+    ['We cover floors daily.', 'We cover floors daily.'],
+    [undefined, ''],
+  ])("starts a new version with the estimate's notes for the client (%j → %j)", (clientNotes, notes) => {
+    const form = proposalForm();
+    startNewProposal(form, clientNotes);
+    expect(readProposal(form).notes).toBe(notes);
   });
 
   it('puts a draft back into the form', () => {

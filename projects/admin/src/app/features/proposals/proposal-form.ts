@@ -107,6 +107,14 @@ export function readProposal(form: ProposalForm): Required<ProposalUpdate> {
   };
 }
 
+/**
+ * A new version starts with the estimate's notes for the client in its Notes box, as the builder
+ * promises; the office may change or clear them for this version.
+ */
+export function startNewProposal(form: ProposalForm, clientNotes: string | undefined): void {
+  form.controls.notes.reset(clientNotes ?? '');
+}
+
 /** A draft's stored choices back into the form, for editing. */
 export function fillProposal(form: ProposalForm, snapshot: ProposalSnapshot): void {
   form.reset({

@@ -1,4 +1,5 @@
 import { Routes } from '@angular/router';
+import { confirmLeaveUnsaved } from './leave-estimate-guard';
 
 export default [
   {
@@ -15,6 +16,7 @@ export default [
   {
     path: ':id',
     title: 'proposals.titles.estimate',
+    canDeactivate: [confirmLeaveUnsaved],
     loadComponent: () => import('./estimate-builder').then((m) => m.EstimateBuilder),
   },
   {

@@ -36,9 +36,14 @@ import { PROPOSALS_URL } from './proposal-api';
             <p class="site">{{ project.siteAddress }}</p>
             <p>
               {{ 'proposals.list.version' | translate: { version: project.latest.version } }}
-              <strong>{{ 'proposals.status.' + project.latest.status | translate }}</strong>
-              @if (project.latest.status === 'sent') {
-                {{ 'proposals.list.standsUntil' | translate: { day: project.latest.expiresOn | lbDate: 'long' } }}
+              @if (project.latest.status === 'sent' && project.latest.isExpired) {
+                <strong>{{ 'proposals.list.expired' | translate }}</strong>
+                {{ 'proposals.list.expiredOn' | translate: { day: project.latest.expiresOn | lbDate: 'long' } }}
+              } @else {
+                <strong>{{ 'proposals.status.' + project.latest.status | translate }}</strong>
+                @if (project.latest.status === 'sent') {
+                  {{ 'proposals.list.standsUntil' | translate: { day: project.latest.expiresOn | lbDate: 'long' } }}
+                }
               }
             </p>
             <a [routerLink]="['/proposals', project.latest.id]"
