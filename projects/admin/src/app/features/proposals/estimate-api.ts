@@ -8,6 +8,7 @@ import type {
   EstimateInputs,
   EstimateSave,
   EstimateView,
+  InquiryDetail,
   KeysetPage,
 } from '@layerbook/contracts/types';
 
@@ -37,6 +38,11 @@ export class EstimateApi {
   /** Client search for choosing where the work is. */
   findClients(q: string): Observable<KeysetPage<ClientSummary>> {
     return this.http.get<KeysetPage<ClientSummary>>('/api/clients', { params: new HttpParams().set('q', q.trim()).set('limit', 20) });
+  }
+
+  /** The inquiry an estimate is started from (its client and site, once filed). */
+  inquiry(id: string): Promise<InquiryDetail> {
+    return firstValueFrom(this.http.get<InquiryDetail>(`/api/inquiries/${encodeURIComponent(id)}`));
   }
 
   client(id: string): Promise<ClientDetail> {

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, inject, input, OnInit, signal } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { AbstractControl, FormControl, FormGroup, ReactiveFormsModule, ValidationErrors, Validators } from '@angular/forms';
 import { MatAutocompleteModule, MatAutocompleteSelectedEvent } from '@angular/material/autocomplete';
@@ -28,7 +28,11 @@ function chosenClient(control: AbstractControl<string | ClientSummary | null>): 
   return typeof control.value === 'object' && control.value !== null ? null : { client: true };
 }
 
-/** Starts an estimate: which client, which of their sites, a title and a start date. */
+/**
+ * Starts an estimate: which client, which of their sites, a title and a start date. Opened from an
+ * inquiry (`?inquiry=<id>`), it starts from that inquiry's client and site and is tied to it, so the
+ * client's acceptance marks the inquiry won.
+ */
 @Component({
   selector: 'lb-new-estimate',
   imports: [
@@ -62,7 +66,7 @@ function chosenClient(control: AbstractControl<string | ClientSummary | null>): 
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class NewEstimate {
+export class NewEstimate implements OnInit {
   private readonly api = inject(EstimateApi);
   private readonly router = inject(Router);
 
@@ -71,6 +75,10 @@ export class NewEstimate {
   protected readonly formMessage = signal<string | null>(null);
   protected readonly matches = signal<readonly ClientSummary[]>([]);
   protected readonly sites = signal<readonly SiteView[] | null>(null);
+  /** from the query (withComponentInputBinding): the inquiry this estimate answers */
+  readonly inquiry = input<string | undefined>();
+  /** the inquiry tied to the estimate while its client is the one chosen */
+  protected readonly fromInquiry = signal<{ id: string; clientId: string; contactName: string } | null>(null);
   protected readonly errorText = errorText;
   protected readonly words = {
     client: { client: 'Choose a client from the list.' },
@@ -105,6 +113,27 @@ export class NewEstimate {
         takeUntilDestroyed(inject(DestroyRef)),
       )
       .subscribe((items) => this.matches.set(items));
+  }
+
+  ngOnInit(): void {
+    const id = this.inquiry();
+    if (id) void this.startFromInquiry(id);
+  }
+
+  private async startFromInquiry(id: string): Promise<void> {
+    try {
+      const inquiry = await this.api.inquiry(id);
+      if (!inquiry.clientId) return;
+      const client = await this.api.client(inquiry.clientId);
+      this.fromInquiry.set({ id: inquiry.id, clientId: client.id, contactName: inquiry.contactName });
+      this.form.controls.client.setValue(client);
+      this.sites.set(client.sites);
+      const site = client.sites.find((s) => s.id === inquiry.siteId) ?? (client.sites.length === 1 ? client.sites[0] : undefined);
+      if (site) this.form.controls.siteId.setValue(site.id);
+      if (inquiry.finishIdea.trim()) this.form.controls.title.setValue(inquiry.finishIdea.trim().slice(0, ESTIMATE_INPUT_LIMITS.titleMax));
+    } catch (error) {
+      this.formMessage.set(toProblem(error).title);
+    }
   }
 
   protected clientName(value: string | ClientSummary | null): string {
@@ -145,7 +174,8 @@ export class NewEstimate {
     try {
       const made = await this.api.create({
         siteId: v.siteId,
-        inquiryId: null,
+        // Tied to the inquiry only while its client is the one chosen.
+        inquiryId: this.fromInquiry()?.clientId === this.chosenClientId() ? (this.fromInquiry()?.id ?? null) : null,
         title: v.title.trim(),
         startDate: toIsoDate(v.startDate) ?? '',
       });
