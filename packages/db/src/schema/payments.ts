@@ -142,6 +142,10 @@ export const checkoutSessions = pgTable(
   (t) => [
     uniqueIndex('checkout_sessions_processor_uq').on(t.processorSessionId),
     index('checkout_sessions_invoice_idx').on(t.tenantId, t.invoiceId),
+    // The reconciliation's sweep reads only the open ones (payments/checkout-expiry.ts).
+    index('checkout_sessions_open_idx')
+      .on(t.tenantId, t.createdAt)
+      .where(sql`status = 'open'`),
     tenantPolicy('checkout_sessions'),
   ],
 );

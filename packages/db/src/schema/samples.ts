@@ -38,6 +38,8 @@ export const sampleBoards = pgTable(
   },
   (t) => [
     index('sample_boards_client_idx').on(t.tenantId, t.clientId, t.createdAt),
+    // The firm's board list pages by (created_at, id), newest first (samples/board-list.ts).
+    index('sample_boards_list_idx').on(t.tenantId, t.createdAt, t.id),
     uniqueIndex('sample_boards_previous_key').on(t.tenantId, t.previousBoardId),
     tenantPolicy('sample_boards'),
   ],

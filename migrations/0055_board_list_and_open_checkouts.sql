@@ -1,0 +1,2 @@
+CREATE INDEX "sample_boards_list_idx" ON "sample_boards" USING btree ("tenant_id","created_at","id");--> statement-breakpoint
+CREATE INDEX "checkout_sessions_open_idx" ON "checkout_sessions" USING btree ("tenant_id","created_at") WHERE status = 'open';
