@@ -156,12 +156,8 @@ export async function draftRetainageInvoice(
     [tx.tenantId, job.id],
   );
   if (open.rows[0]) return { invoiceId: open.rows[0].id, isNew: false };
-  const held = await retainageHeld(tx, job.id);
+  const { held, credit, total, tax, lines } = await releaseFigures(tx, job, null);
   if (held.lessThanOrEqualTo(0)) throw conflict('No retainage is held on this job.');
-  const credit = await progressDepositCredit(tx, job, held, true, null);
-  const total = held.minus(credit);
-  const tax = await invoiceTax(tx, job, total, null);
-  const lines: InvoiceLine[] = [{ ...RETAINAGE_RELEASED_LINE, amount: held.toFixed(2) }];
   const { rows } = await tx.client.query<{ id: string }>(
     `insert into invoices (tenant_id, job_id, client_id, kind, currency, subtotal, deposit_credit, tax_included, total, lines, origin, created_by)
      values ($1, $2, $3, 'retainage', $4, $5, $6, $7, $8, $9, $10, $11) returning id`,
@@ -188,4 +184,48 @@ export async function draftRetainageInvoice(
     data: { origin: request.origin, kind: 'retainage', total: total.toFixed(2) },
   });
   return { invoiceId: rows[0].id, isNew: true };
+}
+
+/** A release's amounts: all the retainage held now (less other releases than `draftId`), the rest of the deposit credited, the tax inside. */
+async function releaseFigures(tx: TenantTx, job: StartedJob, draftId: string | null) {
+  const held = await retainageHeld(tx, job.id, draftId);
+  const credit = await progressDepositCredit(tx, job, held, true, draftId);
+  const total = held.minus(credit);
+  const tax = await invoiceTax(tx, job, total, draftId);
+  const lines: InvoiceLine[] = [{ ...RETAINAGE_RELEASED_LINE, amount: held.toFixed(2) }];
+  return { held, credit, total, tax, lines };
+}
+
+/**
+ * After another invoice of a progress-billed job is issued or voided (the queue's `refreshDraft`), its
+ * open retainage release is figured again, so it bills all the retainage held now, never what an
+ * application issued since it was drafted left behind; a changed total is in its history. One that
+ * would bill nothing is left as it is: issuing refuses it, and the office deletes it.
+ */
+export async function refreshOpenReleaseDraft(tx: TenantTx, jobId: string, actor: Actor): Promise<void> {
+  // The job's row first, the order issuing and drafting take.
+  const job = await loadBillingJob(tx, jobId, true);
+  const open = (
+    await tx.client.query<{ id: string; total: string }>(
+      `select id, total::text as total from invoices where tenant_id = $1 and job_id = $2 and kind = 'retainage' and status = 'draft' for update`,
+      [tx.tenantId, jobId],
+    )
+  ).rows[0];
+  if (!open) return;
+  assertBillingStarted(job);
+  const { held, credit, total, tax, lines } = await releaseFigures(tx, job, open.id);
+  if (held.lessThanOrEqualTo(0) || total.equals(open.total)) return;
+  await tx.client.query(
+    `update invoices set subtotal = $3, deposit_credit = $4, tax_included = $5, total = $6, lines = $7, updated_at = now()
+      where tenant_id = $1 and id = $2`,
+    [tx.tenantId, open.id, held.toFixed(2), credit.toFixed(2), tax.toFixed(2), total.toFixed(2), JSON.stringify(lines)],
+  );
+  await recordAudit(tx, {
+    actorUserId: actor.userId,
+    actorKind: actor.kind,
+    action: 'invoice.updated',
+    entity: 'invoice',
+    entityId: open.id,
+    data: { kind: 'retainage', refigured: 'the job’s other invoices changed', totalBefore: open.total, total: total.toFixed(2) },
+  });
 }

@@ -121,9 +121,18 @@ async function prepareIssue(
   if (subtotal.isZero() && inv.kind !== 'progress' && inv.kind !== 'retainage') {
     throw conflict('This draft bills 0.00: there is nothing to issue. Change its line or delete the draft.');
   }
-  // A release drafted before its application was voided would bill retainage no longer held.
-  if (inv.kind === 'retainage' && subtotal.greaterThan(await retainageHeld(tx, job.id, inv.id))) {
-    throw conflict('Less retainage is held now than this release bills: delete it and draft the release again.');
+  // A release bills all the retainage held when it was drafted: one drafted before its application was
+  // voided would bill retainage no longer held, one drafted before a later application too little.
+  if (inv.kind === 'retainage') {
+    const held = await retainageHeld(tx, job.id, inv.id);
+    if (subtotal.greaterThan(held)) {
+      throw conflict('Less retainage is held now than this release bills: delete it and draft the release again.');
+    }
+    if (subtotal.lessThan(held)) {
+      throw conflict(
+        `More retainage is held now (${held.toFixed(2)}) than this release bills: an application was issued after it was drafted. Delete it and draft the release again.`,
+      );
+    }
   }
   const isProgressJob = job.billing_method === 'progress' && (inv.kind === 'progress' || inv.kind === 'retainage');
   const credit = isProgressJob ? await progressDepositCredit(tx, job, subtotal, inv.kind === 'retainage', inv.id) : new Decimal(0);
@@ -131,6 +140,7 @@ async function prepareIssue(
   if (total.isNegative()) {
     throw conflict('This invoice comes to less than nothing: earlier invoices billed more than is earned. Correct the readings first.');
   }
+  if (body.expectedTotal !== undefined && !total.equals(body.expectedTotal)) throw totalMoved(inv.kind, total, body.expectedTotal);
   const tax = taxInside(job, total, billedRows[0] as { billed: string; tax: string });
   const { settings } = billingSettingsOf(settingsRows as Array<{ settings: BillingSettings }>);
   const issuedOn = issueDate(job, body.issuedOn, now);
@@ -173,10 +183,21 @@ async function prepareIssue(
     { actorUserId: actor.userId, actorKind: actor.kind },
   );
   // A deposit (or a release) issued on a progress-billed job changes what its open progress draft
-  // credits: the queue refigures it once this commits (a trip only for those, before the counter is taken).
-  if (job.billing_method === 'progress' && inv.kind !== 'progress')
-    await enqueueBillingCheck(tx, deps.queue, job.id, { refreshDraft: true });
+  // credits, and an application what its open release bills: the queue refigures them once this commits
+  // (a trip only for those, before the counter is taken).
+  if (job.billing_method === 'progress') await enqueueBillingCheck(tx, deps.queue, job.id, { refreshDraft: true });
   return { writes: [frozen, number] };
+}
+
+/**
+ * Issuing figures an application (and a release's deposit credit) again, so what it takes can differ
+ * from the total the office confirmed (`expectedTotal`, from the issue dialog): nothing is issued then.
+ * An application's draft can be figured again and confirmed; a release is drafted again.
+ */
+function totalMoved(kind: string, total: Decimal, expected: string) {
+  const moved = `This invoice now comes to ${total.toFixed(2)}, not the ${new Decimal(expected).toFixed(2)} you confirmed: the job's figures changed since it was drafted.`;
+  const message = `${moved} ${kind === 'progress' ? 'Check the new total, then issue it.' : 'Delete it and draft it again.'}`;
+  return conflict(message, [{ field: 'expectedTotal', message }]);
 }
 
 /** The invoice with the schedule line it bills, locked (for update of the invoice alone). */

@@ -165,6 +165,8 @@ describe('progress billing through the API', () => {
       contractSumToDate: '51200.00',
       completedToDate: '33700.00',
       retainage: '3370.00',
+      // kept back this period: 3,370 to date less application #1's 1,480 (= 18,900 of work and stored × 10 %)
+      retainageThisPeriod: '1890.00',
       earnedLessRetainage: '30330.00',
       previouslyBilled: '13320.00',
       dueThisPeriod: '17010.00',

@@ -73,8 +73,8 @@ export async function progressFigures(
   if (lines.length === 0)
     throw conflict('This job has no schedule of values yet.', [{ field: 'valueLines', message: 'Add its lines first.' }]);
   const billed = await billedWorkByLine(tx, job.id);
-  const previous = await tx.client.query<{ earned: string | null }>(
-    `select progress->'summary'->>'earnedLessRetainage' as earned from invoices
+  const previous = await tx.client.query<{ earned: string | null; retainage: string | null }>(
+    `select progress->'summary'->>'earnedLessRetainage' as earned, progress->'summary'->>'retainage' as retainage from invoices
       where tenant_id = $1 and job_id = $2 and kind = 'progress' and ${LIVE_ISSUED} order by issued_at desc, number desc limit 1`,
     [tx.tenantId, job.id],
   );
@@ -163,6 +163,8 @@ export async function progressFigures(
       contractSumToDate: m(s.contractSumToDate),
       completedToDate: m(s.completedAndStoredToDate),
       retainage: m(s.retainage),
+      // what this period kept back: the retainage to date less the last application's
+      retainageThisPeriod: m(s.retainage.minus(previous.rows[0]?.retainage ?? '0')),
       earnedLessRetainage: m(s.earnedLessRetainage),
       previouslyBilled: m(s.previousCertified),
       dueThisPeriod: m(s.currentDue),

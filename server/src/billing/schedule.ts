@@ -7,7 +7,16 @@ import type {
   ValueLinesUpdate,
 } from '@layerbook/contracts';
 import type { TenantTx } from '@layerbook/db';
-import { addDays, checkBillingSchedule, checkDeposit, type DepositCapRule, sumMoney, yearBefore } from '@layerbook/domain';
+import {
+  addDays,
+  checkBillingSchedule,
+  checkDeposit,
+  type DepositCapRule,
+  minorUnitDigits,
+  sumMoney,
+  valueLineWork,
+  yearBefore,
+} from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../audit/record';
 import { longDate } from '../i18n/long-date';
@@ -19,7 +28,7 @@ import { type BillingJob, firmToday, loadBillingJob, refuseCancelledJob } from '
 import { evaluateJobBilling } from './triggers/evaluate';
 import { getJobBilling, loadScheduleLines, type ScheduleLineRow } from './job-billing';
 import { decimalsMessage, fitsCurrency } from './money';
-import { billedWorkByLine, loadValueLines } from './progress-invoice';
+import { billedWorkByLine, loadValueLines, type ValueLineRow } from './progress-invoice';
 import { billingTermsFor, loadBillingSettings, toDepositCapRule } from './settings';
 import { enqueueBillingCheck } from './triggers/enqueue';
 
@@ -297,6 +306,21 @@ export async function startBilling(
 }
 
 /**
+ * A line's new value must still hold what it records (DOMAIN.md §2.10: G ≤ C), or every later
+ * application is refused: work to date — its recorded percent of the new value, never below the work
+ * billed, as progressFigures figures it — plus the materials stored on it. The words of the progress
+ * mark's own check.
+ */
+function passedByWorkAndStored(line: ValueLineRow, scheduledValue: string, billed: Decimal, currency: string): string | null {
+  const digits = minorUnitDigits(currency);
+  const atPercent = valueLineWork({ scheduledValue, percentToDate: line.percent_complete, previousWork: '0', currency });
+  const work = Decimal.max(atPercent, billed);
+  const stored = new Decimal(line.stored_materials);
+  if (!work.plus(stored).greaterThan(scheduledValue)) return null;
+  return `With ${work.toFixed(digits)} of work done and ${stored.toFixed(digits)} of materials stored, work done and stored would pass the line's value ${new Decimal(scheduledValue).toFixed(digits)}: keep the value higher, or lower the stored materials first.`;
+}
+
+/**
  * PUT /api/jobs/:id/billing/value-lines: the whole schedule of values, adding up to the contract
  * sum to date exactly; a line never drops below the work already billed on it, and a line with
  * billed work or marks in the job's history stays.
@@ -324,12 +348,16 @@ export async function updateValueLines(
     }
     if (l.id === undefined) return;
     if (!byId.has(l.id)) problems.push({ field: `lines[${i}].id`, message: 'No such line on this job.' });
+    const line = byId.get(l.id);
     const done = billed.get(l.id);
     if (done && new Decimal(l.scheduledValue).lessThan(done)) {
       problems.push({
         field: `lines[${i}].scheduledValue`,
         message: `${done.toFixed(2)} is already billed on this line; it cannot be less.`,
       });
+    } else if (line && fitsCurrency(l.scheduledValue, job.currency)) {
+      const message = passedByWorkAndStored(line, l.scheduledValue, done ?? new Decimal(0), job.currency);
+      if (message) problems.push({ field: `lines[${i}].scheduledValue`, message });
     }
   });
   const ids = body.lines.map((l) => l.id).filter((id) => id !== undefined);

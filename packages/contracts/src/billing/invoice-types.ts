@@ -82,7 +82,10 @@ export interface ProgressTable {
     readonly changeOrders: string;
     readonly contractSumToDate: string;
     readonly completedToDate: string;
+    /** retainage held on the job to date (this application included) */
     readonly retainage: string;
+    /** what this application kept back: `retainage` less the previous application's (absent on applications figured before it was kept) */
+    readonly retainageThisPeriod?: string;
     readonly earnedLessRetainage: string;
     readonly previouslyBilled: string;
     readonly dueThisPeriod: string;
@@ -217,6 +220,11 @@ export interface InvoiceDraftUpdate {
 export interface InvoiceIssue {
   readonly issuedOn?: string;
   readonly send: boolean;
+  /**
+   * the total the office confirmed: issuing figures a progress application (and a release's deposit
+   * credit) again, and refuses (409 naming `expectedTotal`) when that comes to another total
+   */
+  readonly expectedTotal?: string;
 }
 
 /** POST /api/invoices/:id/void */

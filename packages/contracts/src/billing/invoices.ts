@@ -62,6 +62,7 @@ export const invoiceIssue = requestSchema<InvoiceIssue>()(
   z.strictObject({
     issuedOn: isoDate.optional(),
     send: z.boolean({ error: 'Say whether to e-mail the invoice (send: true or false).' }),
+    expectedTotal: moneyAmount.optional(),
   }),
 );
 

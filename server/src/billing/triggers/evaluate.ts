@@ -8,7 +8,7 @@ import { type Actor, SYSTEM_ACTOR } from '../../http/actor';
 import { HttpError } from '../../http/problem';
 import type { BillingEvaluateJob } from '../../queue/queues';
 import { recordAudit } from '../../audit/record';
-import { draftLineInvoice } from '../drafts';
+import { draftLineInvoice, refreshOpenReleaseDraft } from '../drafts';
 import { draftProgressInvoice, refreshOpenProgressDraft } from '../progress-invoice';
 import { countsTowardLine } from '../work-items';
 
@@ -110,6 +110,7 @@ export async function evaluateJobBilling(
         if (isNew) drafted++;
       } else {
         await refreshOpenProgressDraft(tx, jobId, actor);
+        await refreshOpenReleaseDraft(tx, jobId, actor);
       }
       await tx.client.query('release savepoint progress_draft');
     } catch (error) {

@@ -54,6 +54,22 @@ describe('the invoice page', () => {
     expect(text()).toContain('10 % of work, 10 % of stored materials');
   });
 
+  it('adds up a progress application’s amounts as the PDF does: earned less retainage, less the deposit, is the total; retainage only said beside', async () => {
+    const credited: InvoiceDetail = { ...progressDraft, depositCredit: '135.00', total: '1215.00', amountDue: '1215.00' };
+    const { html } = await render(credited);
+    const amounts = html.querySelector('dl.amounts')!;
+    const rows = [...amounts.querySelectorAll('dt')].map((dt) => [dt.textContent?.trim(), dt.nextElementSibling?.textContent?.trim()]);
+    expect(rows.slice(0, 3)).toEqual([
+      ['Earned this period, less retainage', '$1,350.00'],
+      ['Deposit credited', '−$135.00'],
+      ['Total', '$1,215.00'],
+    ]);
+    expect(amounts.textContent).not.toContain('Retainage');
+    expect(html.querySelector('.retainage-note')?.textContent?.trim()).toBe(
+      'Retainage kept back this period: $150.00; held on the job to date: $350.00. It is not taken off the amounts above (they are after retainage already): a retainage release bills it.',
+    );
+  });
+
   it('warns on a stage payment’s draft whose layer was reopened after it was drafted', async () => {
     const { html, text } = await render({ ...progressDraft, kind: 'milestone', progress: null, reopenedLayer: 'Lime base coat' });
     expect(html.querySelector('[role="note"]')?.textContent).toContain(
@@ -179,6 +195,22 @@ describe('the invoice page', () => {
     const { html, text } = await render(partPaid);
     expect(buttons(html).some((b) => b.includes('Void'))).toBe(false);
     expect(text()).toContain('To void it, refund the payments first.');
+  });
+
+  it('offers Void on an invoice issued with nothing due (paid, nothing paid), with no word of refunds', async () => {
+    const nothingDue: InvoiceDetail = {
+      ...progressDraft,
+      ...issuedSummary,
+      isOverdue: false,
+      status: 'paid',
+      total: '0.00',
+      amountDue: '0.00',
+      amountPaid: '0.00',
+      progress: null,
+    };
+    const { html, text } = await render(nothingDue);
+    expect(buttons(html)).toEqual(expect.arrayContaining([expect.stringContaining('Void…')]));
+    expect(text()).not.toContain('refund the payments first');
   });
 
   it('says a refunded invoice is refunded, in words and with its icon, and offers a new payment or Void', async () => {

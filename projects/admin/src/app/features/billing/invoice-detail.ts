@@ -18,7 +18,7 @@ import { FormAlert } from '../../shared/ui/form-alert';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { DraftNotes } from './draft-notes';
 import { INVOICES_URL, InvoiceApi, creditNotePdfHref, invoicePdfHref } from './invoice-api';
-import { invoiceStatus, kindWord, paymentRecordedWords, takesPayments } from './invoice-words';
+import { canBeVoided, invoiceStatus, kindWord, mustRefundBeforeVoid, paymentRecordedWords, takesPayments } from './invoice-words';
 import { InvoicePayments, type RefundOutcome } from '../payments/invoice-payments';
 import { IssueDialog, type IssueDialogData, type IssueResult } from './issue-dialog';
 import { PaymentForm } from './payment-form';
@@ -78,9 +78,11 @@ export class InvoiceDetailPage {
   /** Voiding is refused while money is kept on it ("Refund the payments first"), so it is offered only before or after. */
   protected readonly canVoid = computed(() => {
     const invoice = this.invoice();
-    return (
-      !!invoice && (invoice.status === 'issued' || invoice.status === 'refunded') && roundsToZero(invoice.amountPaid, invoice.currency)
-    );
+    return !!invoice && canBeVoided(invoice);
+  });
+  protected readonly mustRefundFirst = computed(() => {
+    const invoice = this.invoice();
+    return !!invoice && mustRefundBeforeVoid(invoice);
   });
 
   protected readonly kindWord = kindWord;
@@ -95,7 +97,8 @@ export class InvoiceDetailPage {
   }
 
   protected async openIssue(invoice: InvoiceDetail): Promise<void> {
-    const ref = this.dialog.open<IssueDialog, IssueDialogData, IssueResult>(IssueDialog, { data: { invoice }, width: '32rem' });
+    const refigured = (draft: InvoiceDetail) => this.loaded.set(draft);
+    const ref = this.dialog.open<IssueDialog, IssueDialogData, IssueResult>(IssueDialog, { data: { invoice, refigured }, width: '32rem' });
     const result = await firstValueFrom(ref.afterClosed());
     if (result) {
       const number = result.invoice.number ?? '';

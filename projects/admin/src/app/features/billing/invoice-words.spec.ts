@@ -1,7 +1,17 @@
 import { INVOICE_LIST_FILTERS } from '@layerbook/contracts/types';
 import { describe, expect, it } from 'vitest';
 import { transferPayment } from '../payments/payment-fixtures';
-import { filterOrder, invoiceNumber, invoiceStatus, kindWord, paymentRecordedWords, retainageWords, takesPayments } from './invoice-words';
+import {
+  canBeVoided,
+  filterOrder,
+  invoiceNumber,
+  invoiceStatus,
+  kindWord,
+  mustRefundBeforeVoid,
+  paymentRecordedWords,
+  retainageWords,
+  takesPayments,
+} from './invoice-words';
 
 describe('invoice words', () => {
   it.each([
@@ -21,6 +31,23 @@ describe('invoice words', () => {
     expect(look.word).toBe(word);
     expect(look.icon).toBe(icon);
     expect(look.isOverdue).toBe(icon === 'alarm');
+  });
+
+  // the server's rule (voidInvoice): not a draft, not void, and nothing paid kept on it
+  it.each([
+    ['draft', '0.00', false, false],
+    ['issued', '0.00', true, false],
+    // issued with nothing due: it reads paid, nothing was paid, and the server voids it
+    ['paid', '0.00', true, false],
+    ['paid', '4200.00', false, true],
+    ['part_paid', '200.00', false, true],
+    // every payment given back
+    ['refunded', '0.00', true, false],
+    ['void', '0.00', false, false],
+  ] as const)('a %s invoice with %s paid: void offered %s, refund first %s', (status, amountPaid, voidable, refundFirst) => {
+    const invoice = { status, amountPaid, currency: 'USD' };
+    expect(canBeVoided(invoice)).toBe(voidable);
+    expect(mustRefundBeforeVoid(invoice)).toBe(refundFirst);
   });
 
   it('names kinds in our words', () => {

@@ -11,6 +11,7 @@ import {
   type PaymentMethod,
   type ProgressTable,
 } from '@layerbook/contracts/types';
+import { roundsToZero } from '@layerbook/contracts/engine';
 
 export interface StatusLook {
   readonly word: string;
@@ -49,6 +50,18 @@ export function filterOrder(hasDrafts: boolean): readonly InvoiceListFilter[] {
 
 /** Whether payments may be recorded against the invoice: issued and not settled or voided (a refunded one is owed again). */
 export const takesPayments = (status: InvoiceStatus): boolean => status === 'issued' || status === 'part_paid' || status === 'refunded';
+
+/**
+ * The server's void rule (`voidInvoice`): any issued invoice — open, paid, part paid or refunded — as
+ * long as nothing paid stays on it (payments net of refunds). One issued with nothing due reads paid
+ * with nothing paid, and may be voided.
+ */
+export const canBeVoided = (invoice: Pick<InvoiceDetail, 'status' | 'amountPaid' | 'currency'>): boolean =>
+  invoice.status !== 'draft' && invoice.status !== 'void' && roundsToZero(invoice.amountPaid, invoice.currency);
+
+/** Voiding waits for a refund only when money was paid and kept on the invoice. */
+export const mustRefundBeforeVoid = (invoice: Pick<InvoiceDetail, 'status' | 'amountPaid' | 'currency'>): boolean =>
+  invoice.status !== 'draft' && invoice.status !== 'void' && !roundsToZero(invoice.amountPaid, invoice.currency);
 
 /** "10 % of work, 5 % of stored materials, until 50 % complete" */
 export function retainageWords(rates: ProgressTable['retainageRates']): string {

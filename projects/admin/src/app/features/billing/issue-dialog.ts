@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -8,6 +8,7 @@ import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/materia
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import type { InvoiceDetail, InvoiceIssue } from '@layerbook/contracts/types';
+import { toProblem } from '../../core/errors/problem';
 import { errorText } from '../../shared/forms/error-text';
 import { Session } from '../../core/auth/session';
 import { DATE_YEAR_WORDS, dateYearInRange, firmToday, toIsoDate } from '../../shared/forms/iso-date';
@@ -20,6 +21,8 @@ import { provideFieldDefaults } from '../../../../../shared/app/field-defaults';
 
 export interface IssueDialogData {
   readonly invoice: InvoiceDetail;
+  /** the draft as it was figured again when the server refused the total shown, for the page behind */
+  readonly refigured?: (draft: InvoiceDetail) => void;
 }
 
 export interface IssueResult {
@@ -52,7 +55,7 @@ export interface IssueResult {
         <p>
           {{
             'billing.issueDialog.willOweTheInvoice'
-              | translate: { clientName: data.invoice.clientName, total: (data.invoice.total | money: data.invoice.currency) }
+              | translate: { clientName: data.invoice.clientName, total: (total() | money: data.invoice.currency) }
           }}
         </p>
         <mat-form-field class="lb-full">
@@ -95,6 +98,8 @@ export class IssueDialog {
   private readonly fb = inject(NonNullableFormBuilder);
 
   protected readonly clientEmail = this.data.invoice.document.client.email;
+  /** the total the office confirms, sent with the issue: the server refuses (409) to issue another */
+  protected readonly total = signal(this.data.invoice.total);
   protected readonly submission = new Submission();
   protected readonly errorText = errorText;
   protected readonly words = {
@@ -109,13 +114,40 @@ export class IssueDialog {
 
   protected async issue(): Promise<void> {
     const body = this.toIssue();
-    const issued = await this.submission.send(this.form, () => this.api.issue(this.data.invoice.id, body));
+    const issued = await this.submission.send(this.form, () => this.issueAsConfirmed(body));
     if (issued) this.ref.close({ invoice: issued, isEmailed: body.send });
+  }
+
+  /**
+   * The server figures a progress application again as it issues it. When that is not the total shown,
+   * it issues nothing (409 on expectedTotal); the draft is then figured again here, its new total shown
+   * for the office to confirm, and the server's words said.
+   */
+  private async issueAsConfirmed(body: InvoiceIssue): Promise<InvoiceDetail> {
+    const { invoice } = this.data;
+    try {
+      return await this.api.issue(invoice.id, body);
+    } catch (error) {
+      const problem = toProblem(error);
+      const hasMoved = problem.status === 409 && (problem.errors ?? []).some((e) => e.field === 'expectedTotal');
+      if (hasMoved && invoice.kind === 'progress' && invoice.periodEnd) {
+        const refigured = await this.api.update(invoice.id, { periodEnd: invoice.periodEnd }).catch(() => null);
+        if (refigured) {
+          this.total.set(refigured.total);
+          this.data.refigured?.(refigured);
+        }
+      }
+      throw error;
+    }
   }
 
   private toIssue(): InvoiceIssue {
     const { issuedOn, send } = this.form.getRawValue();
     const isDateChosen = this.form.controls.issuedOn.dirty;
-    return { send: send && this.clientEmail !== '', ...(isDateChosen ? { issuedOn: toIsoDate(issuedOn) ?? undefined } : {}) };
+    return {
+      send: send && this.clientEmail !== '',
+      ...(isDateChosen ? { issuedOn: toIsoDate(issuedOn) ?? undefined } : {}),
+      expectedTotal: this.total(),
+    };
   }
 }
