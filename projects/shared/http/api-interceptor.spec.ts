@@ -4,6 +4,7 @@ import { ApplicationRef, Component, Injectable } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { Router, provideRouter } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
+import { PROBLEM_TYPES } from '@layerbook/contracts/types';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { apiInterceptorFor, transferable } from './api-interceptor';
 import type { ApiSettings } from './api-settings';
@@ -149,6 +150,43 @@ describe('apiInterceptorFor', () => {
       expect(sent.request.headers.get('x-csrf-token')).toBe('token-2');
       sent.flush({});
       await write;
+    });
+
+    describe('a write refused for a stale token (signed in again in another tab)', () => {
+      const STALE = { type: PROBLEM_TYPES.csrf, title: 'Security check failed', status: 403, detail: 'Reload the page and try again.' };
+      const refuse = (request: ReturnType<HttpTestingController['expectOne']>, body: object = STALE) =>
+        request.flush(body, { status: 403, statusText: 'Forbidden' });
+
+      beforeEach(async () => {
+        const probe = firstValueFrom(http.get('/api/auth/session'));
+        api.expectOne('/api/auth/session').flush({ user: null, csrfToken: 'old' });
+        await probe;
+      });
+
+      it('fetches the session’s token and sends the write once more with it', async () => {
+        const write = firstValueFrom(http.post('/api/jobs', { name: 'Hall' }));
+        refuse(api.expectOne({ method: 'POST', url: '/api/jobs' }));
+        api.expectOne({ method: 'GET', url: '/api/auth/session' }).flush({ user: null, csrfToken: 'new' });
+        const again = api.expectOne({ method: 'POST', url: '/api/jobs' });
+        expect([again.request.headers.get('x-csrf-token'), again.request.body]).toEqual(['new', { name: 'Hall' }]);
+        again.flush({ id: 'j1' });
+        expect(await write).toEqual({ id: 'j1' });
+      });
+
+      it('tries only once: a second refusal reaches the page', async () => {
+        const write = failing(firstValueFrom(http.post('/api/jobs', {})));
+        refuse(api.expectOne({ method: 'POST', url: '/api/jobs' }));
+        api.expectOne({ method: 'GET', url: '/api/auth/session' }).flush({ user: null, csrfToken: 'new' });
+        refuse(api.expectOne({ method: 'POST', url: '/api/jobs' }));
+        await write;
+      });
+
+      it('leaves any other 403 (a role, a record) to the page, unsent again', async () => {
+        const write = failing(firstValueFrom(http.post('/api/jobs', {})));
+        refuse(api.expectOne({ method: 'POST', url: '/api/jobs' }), { ...STALE, type: 'https://layerbook.local/problems/403' });
+        await write;
+        api.expectNone('/api/auth/session');
+      });
     });
 
     it.each([['/api/public/firms/fernhollow'], ['/assets/logo.svg'], ['https://example.test/api/x']])(

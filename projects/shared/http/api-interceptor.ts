@@ -2,7 +2,8 @@ import { HttpErrorResponse, HttpEvent, HttpHandlerFn, HttpInterceptorFn, HttpReq
 import { isPlatformServer } from '@angular/common';
 import { PLATFORM_ID, REQUEST, inject } from '@angular/core';
 import { Router } from '@angular/router';
-import { Observable, filter, switchMap, take, tap } from 'rxjs';
+import { PROBLEM_TYPES } from '@layerbook/contracts/types';
+import { Observable, catchError, filter, switchMap, take, tap, throwError } from 'rxjs';
 import { API_PREFIX, ApiSettings, PUBLIC_API_PREFIX, isSessionCall } from './api-settings';
 import { CsrfToken } from './csrf-token';
 import { signInRedirect } from './return-address';
@@ -15,7 +16,8 @@ const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
  * session cookie, so its cookie is forwarded (the server platform makes the URL absolute).
  * Browser: same-origin cookies plus the CSRF token from the last session answer on writes; the
  * anonymous public API goes out as it is; a 401 means the session ended, so the person is sent to
- * sign in and brought back afterwards.
+ * sign in and brought back afterwards. A write refused for a stale CSRF token (a sign-in in another
+ * tab replaced the session's token) fetches the session's token and is sent once more.
  */
 export function apiInterceptorFor(settings: ApiSettings): HttpInterceptorFn {
   return (req, next) => {
@@ -43,16 +45,24 @@ export function apiInterceptorFor(settings: ApiSettings): HttpInterceptorFn {
     if (SAFE_METHODS.has(req.method)) {
       return next(req).pipe(watch);
     }
-    const send = () => next(req.clone({ setHeaders: { 'x-csrf-token': csrf.value() } })).pipe(watch);
+    const send = () => next(req.clone({ setHeaders: { 'x-csrf-token': csrf.value() } }));
+    const refreshToken = () => fetchSession(next, settings.sessionUrl).pipe(tap((event) => rememberToken(event, csrf)));
+    const sendAgainIfStale = catchError<HttpEvent<unknown>, Observable<HttpEvent<unknown>>>((error: unknown) =>
+      isStaleToken(error) ? refreshToken().pipe(switchMap(send)) : throwError(() => error),
+    );
     if (csrf.value()) {
-      return send();
+      return send().pipe(sendAgainIfStale, watch);
     }
     // A write before any session answer (e.g. the session call failed): fetch a token first.
-    return fetchSession(next, settings.sessionUrl).pipe(
-      tap((event) => rememberToken(event, csrf)),
-      switchMap(send),
-    );
+    return refreshToken().pipe(switchMap(send), sendAgainIfStale, watch);
   };
+}
+
+/** The API's refusal of a write for its CSRF token, as opposed to any other 403 (a role, a record). */
+function isStaleToken(error: unknown): boolean {
+  if (!(error instanceof HttpErrorResponse) || error.status !== 403) return false;
+  const body: unknown = error.error;
+  return typeof body === 'object' && body !== null && 'type' in body && body.type === PROBLEM_TYPES.csrf;
 }
 
 /** Forgets the user and opens the sign-in page with the current page as the way back. */

@@ -10,7 +10,7 @@ import {
 } from '@angular/core';
 import { TranslateLoader, provideMissingTranslationHandler, provideTranslateService } from '@ngx-translate/core';
 import type { Language as LanguageCode } from '@layerbook/contracts/types';
-import { Language, knownLanguage, languageFromAcceptHeader } from './language';
+import { Language, knownLanguage, languageFromAcceptHeader, languageFromUrl } from './language';
 import { TransferTranslationLoader, WaitForWholeWords } from './translation-loader';
 import { provideTranslatedTitles } from './translated-title';
 
@@ -21,7 +21,7 @@ export const VISITOR_LANGUAGE = new InjectionToken<() => Promise<{ language: Lan
  * ngx-translate for one app (route titles included): English as the fallback, words from the
  * transfer state (the page's part; the rest loaded when idle) or the app's `i18n/` files, and the
  * first language chosen before the first render — on the server from the signed-in person (else
- * Accept-Language), in the browser from the `lang` the server wrote.
+ * the address's `?lang=`, else Accept-Language), in the browser from the `lang` the server wrote.
  */
 export function provideI18n(): Array<Provider | EnvironmentProviders> {
   return [
@@ -41,7 +41,8 @@ export function provideI18n(): Array<Provider | EnvironmentProviders> {
         const request = inject(REQUEST, { optional: true });
         // No request while the build extracts routes: asking the session then would render the app again.
         return (visitor && request ? visitor() : Promise.resolve(null)).then(async (found) => {
-          const chosen = found?.language ?? languageFromAcceptHeader(request?.headers.get('accept-language')) ?? 'en';
+          const chosen =
+            found?.language ?? languageFromUrl(request?.url) ?? languageFromAcceptHeader(request?.headers.get('accept-language')) ?? 'en';
           language.setRegion(found?.country);
           await language.use(chosen);
           document.documentElement.lang = chosen;

@@ -10,6 +10,19 @@ export function knownLanguage(value: unknown): LanguageCode | null {
 }
 
 /**
+ * The language a signed-out page was asked for in its address (`?lang=es`: the portal's language
+ * switch, links in e-mails), else null. Takes an absolute URL or a path.
+ */
+export function languageFromUrl(url: string | null | undefined): LanguageCode | null {
+  if (!url) return null;
+  try {
+    return knownLanguage(new URL(url, 'http://page.invalid').searchParams.get('lang'));
+  } catch {
+    return null;
+  }
+}
+
+/**
  * The first of the visitor's Accept-Language choices we have words for (q-values respected), else null.
  * RFC 9110 §12.5.4.
  */

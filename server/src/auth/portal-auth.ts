@@ -1,4 +1,4 @@
-import type { Language } from '@layerbook/contracts';
+import { PROBLEM_TYPES, type Language } from '@layerbook/contracts';
 import {
   and,
   clients,
@@ -17,7 +17,7 @@ import {
 import type { Pool } from 'pg';
 import type { AppContext } from '../context';
 import type { ClientPrincipal } from '../http/principal';
-import { gone, notFound } from '../http/problem';
+import { HttpError, gone, notFound } from '../http/problem';
 import { LINKS_PER_HOUR } from './password-reset';
 import { enqueueMail } from '../mail/outbox';
 import { portalUserReader } from '../i18n/reader';
@@ -50,6 +50,7 @@ export async function requestPortalLink(ctx: AppContext, email: string, next?: s
       );
       if (recent.rows[0].n >= LINKS_PER_HOUR) return;
       const { id: linkId, token } = await createPortalLink(tx, user.id, ctx.now(), PORTAL_LINK_MINUTES, { asked: true });
+      const { language } = await portalUserReader(tx, user.id);
       await enqueueMail(tx, ctx.queue, {
         purposeKey: `portal-link:${linkId}`,
         tenantId: tx.tenantId,
@@ -58,9 +59,10 @@ export async function requestPortalLink(ctx: AppContext, email: string, next?: s
         ...portalLinkMail({
           name: user.name,
           firmName: firm.name,
-          url: `${ctx.config.PUBLIC_URL}/portal/sign-in/link?token=${token}${next ? `&next=${encodeURIComponent(next)}` : ''}`,
+          // `lang`: the page the link opens speaks the e-mail's language before anyone is signed in
+          url: `${ctx.config.PUBLIC_URL}/portal/sign-in/link?token=${token}${next ? `&next=${encodeURIComponent(next)}` : ''}&lang=${language}`,
           minutes: PORTAL_LINK_MINUTES,
-          language: (await portalUserReader(tx, user.id)).language,
+          language,
         }),
       });
     });
@@ -83,7 +85,16 @@ export async function createPortalLink(
   return { id: link.id, token };
 }
 
-export async function redeemPortalLink(ctx: AppContext, token: string): Promise<ClientPrincipal> {
+/**
+ * Spends a one-time link and names the client it signs in. A second click on a link (spent or
+ * expired) by the client this browser is already signed in as answers that client as it is, with
+ * `isSignedInAlready` so the route keeps the session (and its token, which other open tabs hold).
+ */
+export async function redeemPortalLink(
+  ctx: AppContext,
+  token: string,
+  current: ClientPrincipal | null = null,
+): Promise<{ principal: ClientPrincipal; isSignedInAlready: boolean }> {
   const tokenHash = hashToken(token);
   const found = await withLookup(
     ctx.pool,
@@ -94,17 +105,45 @@ export async function redeemPortalLink(ctx: AppContext, token: string): Promise<
   const portalUserId = await withTenant(ctx.pool, found.tenantId, async (tx) => {
     const link = (await tx.db.select().from(portalLinks).where(eq(portalLinks.id, found.id)).for('update'))[0];
     if (!link) throw notFound('sign-in link');
-    if (link.usedAt) throw gone('This sign-in link was already used. Ask for a new one.');
-    if (link.expiresAt <= ctx.now()) throw gone('This sign-in link has expired. Ask for a new one.');
+    const isOwnLink = current?.tenantId === found.tenantId && current.id === link.portalUserId;
+    if (!isOwnLink) {
+      if (link.usedAt) throw gone('This sign-in link was already used. Ask for a new one.');
+      if (link.expiresAt <= ctx.now()) throw gone('This sign-in link has expired. Ask for a new one.');
+    }
     await tx.db
       .update(portalLinks)
       .set({ usedAt: ctx.now() })
       .where(and(eq(portalLinks.id, link.id), isNull(portalLinks.usedAt)));
     return link.portalUserId;
   });
+  if (current?.tenantId === found.tenantId && current.id === portalUserId) return { principal: current, isSignedInAlready: true };
   const principal = await loadClientPrincipal(ctx.pool, portalUserId, found.tenantId);
-  if (!principal) throw gone('This client account is no longer active.');
-  return principal;
+  if (!principal) throw accessOff();
+  return { principal, isSignedInAlready: false };
+}
+
+/** Its own problem type, so the portal says the firm turned access off (asking for a new link would not help). */
+const accessOff = () =>
+  new HttpError(
+    410,
+    'Portal access turned off',
+    'The firm has turned off this client account. Contact the firm.',
+    undefined,
+    PROBLEM_TYPES.portalAccessOff,
+  );
+
+/**
+ * The firm's name when this browser's client claim names an account the firm has turned off (or
+ * removed), for the session answer; null while the account is active. Read only after the session
+ * check found no live client, so a signed-out session costs nothing.
+ */
+export async function portalAccessOffAt(pool: Pool, portalUserId: string, tenantId: string): Promise<{ firmName: string } | null> {
+  if (!isUuid(portalUserId) || !isUuid(tenantId)) return null;
+  return withTenant(pool, tenantId, async (tx) => {
+    const firm = (await tx.db.select({ name: firms.name }).from(firms))[0];
+    const user = (await tx.db.select({ status: portalUsers.status }).from(portalUsers).where(eq(portalUsers.id, portalUserId)))[0];
+    return firm && user?.status !== 'active' ? { firmName: firm.name } : null;
+  });
 }
 
 export function loadClientPrincipal(pool: Pool, portalUserId: string, tenantId: string): Promise<ClientPrincipal | null> {

@@ -6,12 +6,16 @@ import { signedInClient, withClient } from '../http/guards';
 import { parse } from '../http/validate';
 import { endSession, logIn, logOut } from './passport-setup';
 import { setClientLanguage } from './language';
-import { redeemPortalLink, requestPortalLink } from './portal-auth';
+import { portalAccessOffAt, redeemPortalLink, requestPortalLink } from './portal-auth';
 import { afterAnswer } from '../http/after-answer';
 
 async function portalSession(ctx: AppContext, req: Request, res: Response, fresh = false): Promise<PortalSession> {
   const client = await signedInClient(ctx, req);
+  // A client claim with no live client: tell the portal when it is because the firm turned access off.
+  const claim = req.user;
+  const accessOff = !client && claim?.kind === 'client' ? await portalAccessOffAt(ctx.pool, claim.id, claim.tenantId) : null;
   return {
+    ...(accessOff ? { accessOff } : {}),
     client: client
       ? {
           id: client.id,
@@ -45,7 +49,11 @@ export function portalAuthRoutes(ctx: AppContext, linkLimiter: RequestHandler): 
 
   router.post('/auth/redeem', linkLimiter, async (req, res) => {
     const { token } = parse(portalRedeemRequest, req.body);
-    const principal = await redeemPortalLink(ctx, token);
+    const { principal, isSignedInAlready } = await redeemPortalLink(ctx, token, await signedInClient(ctx, req));
+    if (isSignedInAlready) {
+      res.json(await portalSession(ctx, req, res));
+      return;
+    }
     await logIn(req, principal, ctx.now());
     res.json(await portalSession(ctx, req, res, true));
   });

@@ -1,6 +1,7 @@
 import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
 import { csrfSync } from 'csrf-sync';
 import type { Request, RequestHandler, Response } from 'express';
+import { PROBLEM_TYPES } from '@layerbook/contracts';
 import type { Config } from '../config';
 import { isProduction } from '../config';
 import { HttpError } from './problem';
@@ -19,7 +20,9 @@ const sync = csrfSync({
 });
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
-const refused = () => new HttpError(403, 'Security check failed', 'Reload the page and try again.');
+// Its own problem type: the apps fetch the session's current token and send once more (a sign-in
+// in another tab renews the token), which a 403 for a role or a record must not trigger.
+const refused = () => new HttpError(403, 'Security check failed', 'Reload the page and try again.', undefined, PROBLEM_TYPES.csrf);
 
 function headerToken(req: Request): string | undefined {
   const header = req.headers['x-csrf-token'];
@@ -70,7 +73,11 @@ export function csrfToken(config: Config, req: Request, res: Response, fresh = f
 export function csrfProtection(config: Config): RequestHandler {
   return (req, res, next) => {
     if (SAFE_METHODS.has(req.method)) return next();
-    if (req.session?.csrfToken) return sync.csrfSynchronisedProtection(req, res, next);
+    if (req.session?.csrfToken) {
+      return sync.csrfSynchronisedProtection(req, res, (error?: unknown) =>
+        next((error as { code?: string } | undefined)?.code === 'EBADCSRFTOKEN' ? refused() : error),
+      );
+    }
     const header = headerToken(req);
     const cookie = readCookie(req, csrfCookieName(config));
     if (header && cookie && sameToken(header, cookie) && validAnonymousToken(config.SESSION_SECRET, header)) return next();

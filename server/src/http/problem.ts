@@ -8,13 +8,15 @@ export class HttpError extends Error {
     readonly title: string,
     readonly detail?: string,
     readonly errors?: readonly FieldProblem[],
+    /** a problem type the apps tell apart from others of this status (contracts' PROBLEM_TYPES); by status otherwise */
+    readonly problemType?: string,
   ) {
     super(detail ?? title);
   }
 
   toProblem(requestId?: string): Problem {
     return {
-      type: `https://layerbook.local/problems/${this.status}`,
+      type: this.problemType ?? `https://layerbook.local/problems/${this.status}`,
       title: this.title,
       status: this.status,
       ...(this.detail ? { detail: this.detail } : {}),

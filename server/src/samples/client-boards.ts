@@ -5,7 +5,7 @@ import {
   type ClientBoardView,
   type FinishSnapshot,
 } from '@layerbook/contracts';
-import { and, asc, eq, inArray, portalUsers, sampleBoards, TenantTx } from '@layerbook/db';
+import { and, asc, eq, firms, inArray, portalUsers, sampleBoards, TenantTx } from '@layerbook/db';
 import { recordAudit } from '../audit/record';
 import type { AppContext } from '../context';
 import { clientActor } from '../http/actor';
@@ -75,7 +75,14 @@ async function photosOf(tx: TenantTx, boardIds: readonly string[]): Promise<Map<
   return byBoard;
 }
 
-const toClientView = (board: BoardRow, client: ClientPrincipal, photos: ClientBoardPhoto[]): ClientBoardView => {
+/** The firm's time zone: the portal shows when a board was answered as the firm's own day. */
+async function firmTimeZone(tx: TenantTx): Promise<string> {
+  const row = (await tx.db.select({ timeZone: firms.timeZone }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
+  if (!row) throw notFound('firm');
+  return row.timeZone;
+}
+
+const toClientView = (board: BoardRow, client: ClientPrincipal, photos: ClientBoardPhoto[], timeZone: string): ClientBoardView => {
   const snapshot = board.finishSnapshot as FinishSnapshot | null;
   return {
     id: board.id,
@@ -88,6 +95,7 @@ const toClientView = (board: BoardRow, client: ClientPrincipal, photos: ClientBo
     finishSteps: snapshot ? clientFinishStepsIn(snapshot.layers, client.language) : [],
     clientComment: board.clientComment,
     decidedAt: board.decidedAt?.toISOString() ?? null,
+    timeZone,
     photos,
   };
 };
@@ -104,12 +112,13 @@ export async function listClientBoards(tx: TenantTx, client: ClientPrincipal): P
     tx,
     boards.map((b) => b.id),
   );
-  return boards.map((b) => toClientView(b, client, photos.get(b.id) ?? []));
+  const timeZone = await firmTimeZone(tx);
+  return boards.map((b) => toClientView(b, client, photos.get(b.id) ?? [], timeZone));
 }
 
 export async function getClientBoard(tx: TenantTx, client: ClientPrincipal, boardId: string): Promise<ClientBoardView> {
   const board = await findClientBoard(tx, client, boardId);
-  return toClientView(board, client, (await photosOf(tx, [board.id])).get(board.id) ?? []);
+  return toClientView(board, client, (await photosOf(tx, [board.id])).get(board.id) ?? [], await firmTimeZone(tx));
 }
 
 /** The stored file of a photo on a board this client may see (404 otherwise). */
@@ -159,5 +168,5 @@ export async function decideBoard(
     data: { label: board.label, round: board.round, clientName: client.name, ...(comment ? { comment } : {}) },
   });
   await mailBoardDecision(tx, ctx, { board: updated, clientName: client.name, decision, comment });
-  return toClientView(updated, client, (await photosOf(tx, [boardId])).get(boardId) ?? []);
+  return toClientView(updated, client, (await photosOf(tx, [boardId])).get(boardId) ?? [], await firmTimeZone(tx));
 }

@@ -1,4 +1,4 @@
-import { withTenant } from '@layerbook/db';
+import { eq, firms, withTenant } from '@layerbook/db';
 import { newAgent, startTestServer, TestServer } from '../testing/harness';
 import { addClient, firmWithFinish, makeBoard, post, signInClient, uploadBoardPhoto } from './sample-fixtures';
 
@@ -69,11 +69,15 @@ describe('sample boards in the client portal', () => {
 
   it('records the approval once (409 after), audits it and tells the office', async () => {
     const { f, client, board } = await shownBoard('Approval Plaster Co');
+    // the portal shows the day it was answered in the firm's zone, the same on the server and in the browser
+    await withTenant(t.ctx.pool, f.firmId, (tx) => tx.db.update(firms).set({ timeZone: 'Pacific/Auckland' }).where(eq(firms.id, f.firmId)));
+    expect((await client.agent.get(`/api/portal/boards/${board.id}`)).body.timeZone).toBe('Pacific/Auckland');
+    expect((await client.agent.get('/api/portal/boards')).body.items[0].timeZone).toBe('Pacific/Auckland');
     t.setNow(new Date('2026-03-04T15:30:00Z'));
     try {
       const approved = await post(client, `/api/portal/boards/${board.id}/approve`);
       expect(approved.status).toBe(200);
-      expect(approved.body).toMatchObject({ status: 'approved', decidedAt: '2026-03-04T15:30:00.000Z' });
+      expect(approved.body).toMatchObject({ status: 'approved', decidedAt: '2026-03-04T15:30:00.000Z', timeZone: 'Pacific/Auckland' });
     } finally {
       t.setNow(null);
     }

@@ -156,7 +156,19 @@ export interface PortalClient {
 export interface PortalSession {
   readonly client: PortalClient | null;
   readonly csrfToken: string;
+  /** Set when this browser was signed in as a client whose portal access the firm has since turned off. */
+  readonly accessOff?: { readonly firmName: string };
 }
+
+/**
+ * Problem types (RFC 9457 `type`) the apps tell apart from others of the same status:
+ * `csrf` a 403 for a stale or missing security token (fetch the session's token and send again);
+ * `portalAccessOff` a 410 for a sign-in link of a client whose portal access the firm turned off.
+ */
+export const PROBLEM_TYPES = {
+  csrf: 'https://layerbook.local/problems/csrf',
+  portalAccessOff: 'https://layerbook.local/problems/portal-access-off',
+} as const;
 
 /** PATCH /api/auth/me/language (staff, for themselves) and /api/portal/me/language (the client): null follows the firm. */
 export interface LanguageChoice {

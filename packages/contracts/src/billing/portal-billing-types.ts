@@ -79,5 +79,8 @@ export interface PortalStatement {
   readonly unbilled: string;
 }
 
-/** GET /api/portal/change-orders/:id */
-export type PortalChangeOrder = ChangeOrderView;
+/** GET /api/portal/change-orders/:id (and the answer to the client's decision) */
+export interface PortalChangeOrder extends ChangeOrderView {
+  /** the firm's IANA time zone: when it was answered is shown as the firm's day and time, as on the proposal */
+  readonly timeZone: string;
+}

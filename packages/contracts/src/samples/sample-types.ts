@@ -119,6 +119,8 @@ export interface ClientBoardView {
   readonly finishSteps: readonly string[];
   readonly clientComment: string;
   readonly decidedAt: string | null;
+  /** the firm's IANA time zone: `decidedAt` is shown as the firm's day, the same on the server render and in the browser */
+  readonly timeZone: string;
   /** thumbnails, each with the full photo to open (the portal's own routes) */
   readonly photos: readonly ClientBoardPhoto[];
 }

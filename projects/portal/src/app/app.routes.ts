@@ -50,7 +50,7 @@ export const routes: Routes = [
       {
         path: 'projects',
         title: 'layout.titles.projects',
-        loadComponent: () => import('./features/proposals/proposal-list').then((m) => m.ProposalList),
+        loadComponent: () => import('./features/home/home-page').then((m) => m.HomePage),
       },
       {
         path: 'boards',

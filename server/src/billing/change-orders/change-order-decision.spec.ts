@@ -1,5 +1,5 @@
 import type { ItemList, PortalProposalSummary } from '@layerbook/contracts';
-import { withTenant } from '@layerbook/db';
+import { firms, withTenant } from '@layerbook/db';
 import Decimal from 'decimal.js';
 import { otherClientOf, sentProposal } from '../../proposals/portal-fixtures';
 import { startTestServer, TestServer } from '../../testing/harness';
@@ -35,13 +35,21 @@ describe('change orders in the portal', () => {
       contractSumBefore: before.contract_sum,
       contractSumAfter: new Decimal(before.contract_sum).plus('1082.50').toFixed(2),
     });
+    // the firm's zone, so the portal shows when it was answered as the firm's day and time
+    const zone = await withTenant(t.ctx.pool, f.firmId, (tx) => tx.db.select({ timeZone: firms.timeZone }).from(firms));
+    expect(read.body.timeZone).toBe(zone[0].timeZone);
 
     const res = await f.client.agent
       .post(`/api/portal/change-orders/${made.id}/decision`)
       .set('x-csrf-token', f.client.csrf())
       .send(approve);
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ status: 'approved', signedName: 'Edwina Marl', decidedAt: '2026-12-01T15:00:00.000Z' });
+    expect(res.body).toMatchObject({
+      status: 'approved',
+      signedName: 'Edwina Marl',
+      decidedAt: '2026-12-01T15:00:00.000Z',
+      timeZone: zone[0].timeZone,
+    });
 
     const after = await jobMoney(t, f);
     const newSum = new Decimal(before.contract_sum).plus('1082.50').toFixed(2);

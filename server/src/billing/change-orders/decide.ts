@@ -1,5 +1,5 @@
-import type { ChangeOrderDecision, JobStatus, PortalChangeOrder } from '@layerbook/contracts';
-import type { TenantTx } from '@layerbook/db';
+import type { ChangeOrderDecision, ChangeOrderView, JobStatus, PortalChangeOrder } from '@layerbook/contracts';
+import { eq, firms, type TenantTx } from '@layerbook/db';
 import { DomainInputError, formatMoney, minorUnitDigits, respreadSchedule, staysOnRespread, type PaymentLine } from '@layerbook/domain';
 import Decimal from 'decimal.js';
 import { recordAudit } from '../../audit/record';
@@ -28,7 +28,14 @@ async function loadClientChangeOrder(tx: TenantTx, client: ClientPrincipal, id: 
 }
 
 export async function getClientChangeOrder(tx: TenantTx, client: ClientPrincipal, id: string): Promise<PortalChangeOrder> {
-  return toView(await loadClientChangeOrder(tx, client, id));
+  return forPortal(tx, toView(await loadClientChangeOrder(tx, client, id)));
+}
+
+/** The client's view carries the firm's time zone, so the portal shows when it was answered as the firm's day and time. */
+async function forPortal(tx: TenantTx, view: ChangeOrderView): Promise<PortalChangeOrder> {
+  const firm = (await tx.db.select({ timeZone: firms.timeZone }).from(firms).where(eq(firms.id, tx.tenantId)))[0];
+  if (!firm) throw notFound('firm');
+  return { ...view, timeZone: firm.timeZone };
 }
 
 interface LineRow {
@@ -102,7 +109,7 @@ export async function decideChangeOrder(
     },
   });
   await mailOffice(tx, ctx, row, { isApproved, signedName: isApproved ? input.signedName : null, comment, clientName: client.name });
-  return toView(await loadChangeOrder(tx, id));
+  return forPortal(tx, toView(await loadChangeOrder(tx, id)));
 }
 
 interface JobMoneyRow {

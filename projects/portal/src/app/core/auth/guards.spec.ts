@@ -1,8 +1,15 @@
 import { TestBed } from '@angular/core/testing';
-import { provideRouter, Router, type RouterStateSnapshot, type UrlTree } from '@angular/router';
+import {
+  convertToParamMap,
+  provideRouter,
+  Router,
+  type ActivatedRouteSnapshot,
+  type RouterStateSnapshot,
+  type UrlTree,
+} from '@angular/router';
 import { describe, expect, it } from 'vitest';
 import { nextUrl } from '../../features/auth/next-url';
-import { signedInGuard } from './guards';
+import { signedInGuard, signedOutGuard } from './guards';
 import { Session } from './session';
 
 describe('signedInGuard', () => {
@@ -23,5 +30,32 @@ describe('signedInGuard', () => {
     });
     const answer = await TestBed.runInInjectionContext(() => signedInGuard({} as never, { url: '/projects' } as RouterStateSnapshot));
     expect(answer).toBe(true);
+  });
+});
+
+describe('signedOutGuard', () => {
+  const route = (next?: string) => ({ queryParamMap: convertToParamMap(next ? { next } : {}) }) as ActivatedRouteSnapshot;
+  const answerFor = async (client: unknown, next?: string) => {
+    TestBed.configureTestingModule({
+      providers: [provideRouter([]), { provide: Session, useValue: { load: () => Promise.resolve(client) } }],
+    });
+    const answer = await TestBed.runInInjectionContext(() => signedOutGuard(route(next), {} as RouterStateSnapshot));
+    return answer === true ? true : TestBed.inject(Router).serializeUrl(answer as UrlTree);
+  };
+
+  it('sends a signed-in client on to the page the sign-in was asked for (next)', async () => {
+    expect(await answerFor({ id: 'c1' }, '/portal/invoices/inv-7')).toBe('/invoices/inv-7');
+  });
+
+  it('sends a signed-in client home when next is missing', async () => {
+    expect(await answerFor({ id: 'c1' })).toBe('/projects');
+  });
+
+  it('sends a signed-in client home when next leaves the portal', async () => {
+    expect(await answerFor({ id: 'c1' }, '//elsewhere.example/portal/x')).toBe('/projects');
+  });
+
+  it('lets a signed-out client in', async () => {
+    expect(await answerFor(null, '/portal/invoices/inv-7')).toBe(true);
   });
 });

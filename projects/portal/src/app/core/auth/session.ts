@@ -6,35 +6,45 @@ import type { LanguageChoice, PortalSession } from '@layerbook/contracts/types';
 
 export type PortalClient = NonNullable<PortalSession['client']>;
 
-/** Which client is signed in to the portal. `undefined` until the first session answer arrives. */
+/** Why this browser's client was signed out: the firm turned their portal access off (named for the sign-in page). */
+export type PortalAccessOff = NonNullable<PortalSession['accessOff']>;
+
+/** Which client is signed in to the portal. `undefined` until a session answer arrives. */
 @Injectable({ providedIn: 'root' })
 export class Session {
   private readonly http = inject(HttpClient);
   private readonly language = inject(Language);
   private readonly current = signal<PortalClient | null | undefined>(undefined);
+  private readonly off = signal<PortalAccessOff | null>(null);
   private pending: Promise<PortalClient | null> | null = null;
 
   readonly client = computed(() => this.current() ?? null);
+  /** Set when this browser's client was signed out because the firm turned their portal access off. */
+  readonly accessOff = this.off.asReadonly();
 
-  /** Loads the session once; an unreachable API counts as signed out so the sign-in page still renders. */
+  /**
+   * The signed-in client, asked once and then remembered. An unreachable API counts as signed out for
+   * this check only (the sign-in page still renders): one failed probe is tried again at once, and a
+   * second failure is not remembered, so the next page asks again instead of keeping the client out.
+   */
   load(): Promise<PortalClient | null> {
     const known = this.current();
     if (known !== undefined) {
       return Promise.resolve(known);
     }
-    this.pending ??= firstValueFrom(this.http.get<PortalSession>('/api/portal/session'))
-      .then(
-        (session) => this.accept(session),
-        () => this.accept(null),
-      )
-      .finally(() => (this.pending = null));
+    this.pending ??= this.ask().finally(() => (this.pending = null));
     return this.pending;
   }
 
-  /** Every portal auth answer carries the whole session; the CSRF token is kept by the interceptor. */
+  /**
+   * Every portal auth answer carries the whole session; the CSRF token is kept by the interceptor.
+   * `null` (the API said the session is over) forgets the client, and the next check asks the API
+   * again, whose answer says whether the firm turned access off.
+   */
   accept(session: PortalSession | null): PortalClient | null {
     const client = session?.client ?? null;
-    this.current.set(client);
+    this.current.set(session ? client : undefined);
+    this.off.set(session?.accessOff ?? null);
     this.follow(client);
     return client;
   }
@@ -47,6 +57,16 @@ export class Session {
 
   async signOut(): Promise<void> {
     this.accept(await firstValueFrom(this.http.post<PortalSession>('/api/portal/auth/signout', {})));
+  }
+
+  private async ask(): Promise<PortalClient | null> {
+    for (let attempt = 1; ; attempt++) {
+      try {
+        return this.accept(await firstValueFrom(this.http.get<PortalSession>('/api/portal/session')));
+      } catch {
+        if (attempt >= 2) return null;
+      }
+    }
   }
 
   /** The words follow the signed-in person's language (a sign-in or a change of it switches them). */

@@ -1,7 +1,7 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
 import { TranslateService } from '@ngx-translate/core';
-import type { Problem } from '@layerbook/contracts/types';
+import { PROBLEM_TYPES, type Problem } from '@layerbook/contracts/types';
 import { describe, expect, it } from 'vitest';
 import { toProblem as sharedToProblem } from '../../../../../shared/errors/problem';
 import { sayIn } from '../../../../../shared/errors/say-pipe';
@@ -49,6 +49,18 @@ describe('problems in the portal’s words, by call, status and field', () => {
       'auth.signInLink.expired',
     ],
     ['an unknown sign-in link', '/api/portal/auth/redeem', answer(404, 'No such sign-in link.'), 'auth.signInLink.unknown'],
+    [
+      'a link for an account the firm turned off',
+      '/api/portal/auth/redeem',
+      { ...answer(410, 'The firm has turned off this client account.'), type: PROBLEM_TYPES.portalAccessOff },
+      'auth.signInLink.accessOff',
+    ],
+    [
+      'a stale security token (signed in again in another tab)',
+      '/api/portal/boards/b/approve',
+      { ...answer(403, 'Reload the page and try again.'), type: PROBLEM_TYPES.csrf },
+      'common.problems.securityCheck',
+    ],
     ['too many link requests', '/api/portal/auth/link', answer(429, 'Too many attempts from this address.'), 'problems.tooMany'],
     [
       'too many inquiries',
@@ -144,6 +156,8 @@ describe('a Spanish reader', () => {
     expect(say(failed('/api/portal/auth/link', answer(429, 'Too many attempts')))).toBe(problemsEs.tooMany);
     expect(say(failed('/api/portal/proposals/p/decline', answer(409, 'You declined this proposal.')))).toBe(problemsEs.proposalDecided);
     expect(say(failed('/api/portal/auth/redeem', answer(410, 'This sign-in link was already used.')))).toBe(authEs.signInLink.expired);
+    const staleToken = { ...answer(403, 'Reload the page and try again.'), type: PROBLEM_TYPES.csrf };
+    expect(say(failed('/api/portal/change-orders/c/decision', staleToken))).toBe(commonEs.problems.securityCheck);
     const fields = toProblem(
       failed(
         '/api/portal/proposals/p/accept',

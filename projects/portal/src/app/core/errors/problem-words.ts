@@ -1,4 +1,4 @@
-import type { FieldProblem, Problem } from '@layerbook/contracts/types';
+import { PROBLEM_TYPES, type FieldProblem, type Problem } from '@layerbook/contracts/types';
 
 /**
  * The portal's own words for the problems a client can meet, by what was asked (the API path), the
@@ -50,9 +50,11 @@ function sentenceFor(call: Call | null, problem: Problem): string | null {
   if (status === 0) return 'common.problems.unreachable';
   if (status === 429) return call === 'inquiry' ? 'problems.tooManyInquiries' : 'problems.tooMany';
   if (status === 401) return 'common.problems.signInAgain';
+  // a stale security token, left after the interceptor fetched a fresh one and tried once more
+  if (status === 403 && problem.type === PROBLEM_TYPES.csrf) return 'common.problems.securityCheck';
   switch (call) {
     case 'signInLink':
-      if (status === 410) return 'auth.signInLink.expired';
+      if (status === 410) return problem.type === PROBLEM_TYPES.portalAccessOff ? 'auth.signInLink.accessOff' : 'auth.signInLink.expired';
       if (status === 404) return 'auth.signInLink.unknown';
       if (status === 400) return 'auth.signInLink.incomplete';
       break;

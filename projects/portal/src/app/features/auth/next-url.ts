@@ -1,4 +1,4 @@
-import { HOME_URL } from '../../core/auth/guards';
+import { HOME_URL } from '../../core/auth/home-url';
 
 const PORTAL_PREFIX = '/portal/';
 

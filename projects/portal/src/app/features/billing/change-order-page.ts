@@ -1,4 +1,3 @@
-import { DOCUMENT } from '@angular/common';
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, RESPONSE_INIT, computed, effect, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
@@ -7,6 +6,7 @@ import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 import type { PortalChangeOrder } from '@layerbook/contracts/types';
 import { problemMessage, toProblem } from '../../core/errors/problem';
+import { focusAfterRender } from '../../shared/ui/focus-after-render';
 import { changeOrderUrl } from './change-order-api';
 import { ChangeOrderDecisionForm } from './change-order-decision-form';
 import { contractChangeWords } from './change-order-words';
@@ -33,22 +33,31 @@ import { LbDatePipe, LbNumberPipe, formatAmount } from '../../../../../shared/i1
       <h1>{{ 'billing.changeOrder.title' | translate: { number: co.number, title: co.title } }}</h1>
       <p class="meta">{{ 'billing.changeOrder.for' | translate: { job: co.jobTitle } }}</p>
 
-      @if (co.status === 'approved') {
-        <div class="lb-success" role="status">
-          <mat-icon aria-hidden="true">verified</mat-icon>
-          <p>{{ 'billing.changeOrder.approved' | translate: { name: co.signedName, when: co.decidedAt | lbDate: 'long' : 'short' } }}</p>
-        </div>
-      } @else if (co.status === 'declined') {
-        <div class="lb-notice" role="status">
-          <mat-icon aria-hidden="true">do_not_disturb_on</mat-icon>
-          <p>
-            {{ 'billing.changeOrder.declined' | translate: { when: co.decidedAt | lbDate: 'long' : 'short' } }}
-            @if (co.clientComment) {
-              {{ 'proposals.page.youWrote' | translate: { comment: co.clientComment } }}
-            }
-          </p>
-        </div>
-      } @else {
+      <!-- in the page before the answer and filled by it, so screen readers read it; focus moves here -->
+      <div class="outcome" role="status" tabindex="-1">
+        @if (co.status === 'approved') {
+          <div class="lb-success">
+            <mat-icon aria-hidden="true">verified</mat-icon>
+            <p>
+              {{
+                'billing.changeOrder.approved'
+                  | translate: { name: co.signedName, when: co.decidedAt | lbDate: 'long' : 'short' : co.timeZone }
+              }}
+            </p>
+          </div>
+        } @else if (co.status === 'declined') {
+          <div class="lb-notice">
+            <mat-icon aria-hidden="true">do_not_disturb_on</mat-icon>
+            <p>
+              {{ 'billing.changeOrder.declined' | translate: { when: co.decidedAt | lbDate: 'long' : 'short' : co.timeZone } }}
+              @if (co.clientComment) {
+                {{ 'proposals.page.youWrote' | translate: { comment: co.clientComment } }}
+              }
+            </p>
+          </div>
+        }
+      </div>
+      @if (co.status === 'sent') {
         <p class="lb-lead">{{ 'billing.changeOrder.readBelow' | translate }}</p>
       }
 
@@ -98,6 +107,9 @@ import { LbDatePipe, LbNumberPipe, formatAmount } from '../../../../../shared/i1
     h1 {
       margin: 0;
     }
+    .outcome:focus {
+      outline: none;
+    }
     .meta {
       color: var(--mat-sys-on-surface-variant);
       margin: 0.25rem 0 1rem;
@@ -134,9 +146,9 @@ import { LbDatePipe, LbNumberPipe, formatAmount } from '../../../../../shared/i1
 export class ChangeOrderPage {
   private readonly title = inject(Title);
   private readonly response = inject(RESPONSE_INIT, { optional: true });
-  private readonly document = inject(DOCUMENT);
   private readonly translate = inject(TranslateService);
   private readonly language = inject(Language);
+  private readonly focus = focusAfterRender();
 
   /** route parameter */
   readonly id = input.required<string>();
@@ -180,9 +192,9 @@ export class ChangeOrderPage {
     return formatAmount(amount, currency, this.language.locale());
   }
 
-  /** After an answer the form goes away; bring the reader back to the message at the top. */
+  /** After an answer the form goes away; the reader is brought back to the answer, said at the top, and it takes focus. */
   protected show(answer: PortalChangeOrder): void {
     this.loaded.set(answer);
-    this.document.querySelector('h1')?.scrollIntoView();
+    this.focus('.outcome');
   }
 }

@@ -1,5 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { fromPosted, inquiryForm, linkDependentFields, refusedAsSent, renewedStamp, toBody } from './inquiry-form-model';
+import {
+  REFUSED_FIELD,
+  fromPosted,
+  inquiryForm,
+  linkDependentFields,
+  markRefused,
+  refusedAsSent,
+  renewedStamp,
+  toBody,
+} from './inquiry-form-model';
 
 function filledForm() {
   const form = inquiryForm('stamp-1');
@@ -117,5 +126,28 @@ describe('refusedAsSent', () => {
     expect(rule(form.controls.yearBuilt)).toEqual({ server: 'Enter the year the building was built, or tick "Not sure".' });
     form.controls.yearBuiltUnknown.setValue(true);
     expect(rule(form.controls.yearBuilt)).toBeNull();
+  });
+});
+
+describe('a field the server refused on a form posted before the script loaded', () => {
+  it('is said in the form’s own words when its own rule finds the problem, never in the server’s English', () => {
+    const form = filledForm();
+    form.controls.name.setValue('');
+    form.controls.consent.setValue(false);
+    const sent = form.getRawValue();
+    markRefused(form, sent, 'name');
+    markRefused(form, sent, 'consent');
+    expect(form.controls.name.errors).toEqual({ required: true });
+    expect(form.controls.consent.errors).toEqual({ required: true });
+    expect(form.controls.name.touched).toBe(true);
+  });
+
+  it('says "check this field" for a rule the form does not see, until the field is changed', () => {
+    const form = filledForm();
+    const sent = form.getRawValue();
+    markRefused(form, sent, 'email');
+    expect(form.controls.email.errors).toEqual({ server: REFUSED_FIELD });
+    form.controls.email.setValue('della@example.org');
+    expect(form.controls.email.errors).toBeNull();
   });
 });

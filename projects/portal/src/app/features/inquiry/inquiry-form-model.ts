@@ -103,6 +103,23 @@ export function refusedAsSent(sent: InquiryFormValue, field: FieldName, message:
   };
 }
 
+/** What a refused field says when the form's own rules find nothing wrong with what was sent. */
+export const REFUSED_FIELD = 'common.fieldErrors.checkField';
+
+/**
+ * Shows a field the server refused (a form posted before the script loaded) in the form's own
+ * words, in the reader's language: the rule the sent value breaks here (they mirror the API's) names
+ * the problem; a refusal these rules do not see gets "Check this field", never the server's English.
+ */
+export function markRefused(form: InquiryForm, sent: InquiryFormValue, field: FieldName): void {
+  const control = form.controls[field];
+  if (!control.errors) {
+    control.addValidators(refusedAsSent(sent, field, REFUSED_FIELD));
+  }
+  control.updateValueAndValidity();
+  control.markAsTouched();
+}
+
 /** Re-checks the fields whose rule depends on another field when that field changes. */
 export function linkDependentFields(form: InquiryForm): { unsubscribe(): void } {
   const a = form.controls.yearBuiltUnknown.valueChanges.subscribe(() => form.controls.yearBuilt.updateValueAndValidity());

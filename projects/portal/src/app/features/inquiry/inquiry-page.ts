@@ -25,7 +25,7 @@ import { hydratedSignal } from '../../shared/forms/hydrated';
 import { FormAlert } from '../../shared/ui/form-alert';
 import type { FirmLookup } from './firm-lookup';
 import { InquiryApi } from './inquiry-api';
-import { INQUIRY_WORDS, fromPosted, inquiryForm, linkDependentFields, refusedAsSent, renewedStamp, toBody } from './inquiry-form-model';
+import { INQUIRY_WORDS, fromPosted, inquiryForm, linkDependentFields, markRefused, renewedStamp, toBody } from './inquiry-form-model';
 import { postedRefusal, type PostedRefusal } from './posted-refusal';
 import { PublicFrame } from './public-frame';
 import { followTypingBeforeWaking, typedBeforeHydration } from './typed-before-hydration';
@@ -185,10 +185,7 @@ export class InquiryPage {
         unplaced.push(message);
         continue;
       }
-      const control = this.form.controls[field];
-      control.addValidators(refusedAsSent(sent, field, message));
-      control.updateValueAndValidity();
-      control.markAsTouched();
+      markRefused(this.form, sent, field);
       placedAny = true;
     }
     this.formMessage.set(this.summary(placedAny, unplaced.join(' '), refusal.errors.some(isStampProblem)));

@@ -1,16 +1,18 @@
 import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { TranslatePipe } from '@ngx-translate/core';
+import { LanguageSwitch } from '../../shared/ui/language-switch';
 
 /** The frame around a firm's public pages: the firm's words in one card, a quiet credit below. */
 @Component({
   selector: 'lb-public-frame',
-  imports: [TranslatePipe],
+  imports: [LanguageSwitch, TranslatePipe],
   template: `
     <main class="frame">
       <div class="card">
         <ng-content />
       </div>
       <p class="credit">{{ 'inquiry.page.credit' | translate }}</p>
+      <lb-language-switch />
     </main>
   `,
   styles: `

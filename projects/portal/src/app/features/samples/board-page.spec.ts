@@ -1,10 +1,10 @@
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { ApplicationRef } from '@angular/core';
+import { ApplicationRef, RESPONSE_INIT } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import type { ClientBoardView } from '@layerbook/contracts/types';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import common from '../../../../../shared/i18n/words/common/en.json';
 import { Language } from '../../../../../shared/i18n/language';
 import { provideTestI18n } from '../../../../../shared/i18n/testing';
@@ -26,6 +26,7 @@ const board = (finishSteps: string[]): ClientBoardView => ({
   finishSteps,
   clientComment: '',
   decidedAt: null,
+  timeZone: 'America/New_York',
   photos: [],
 });
 
@@ -39,6 +40,7 @@ function render() {
     ],
   });
   const fixture = TestBed.createComponent(BoardPage);
+  document.body.appendChild(fixture.nativeElement as HTMLElement);
   fixture.componentRef.setInput('id', 'b-1');
   TestBed.inject(ApplicationRef).tick();
   const http = TestBed.inject(HttpTestingController);
@@ -116,5 +118,61 @@ describe('a sample board in the portal', () => {
     expect(sent.request.body).toEqual({ comment: 'A little less gold in the glaze, please.' });
     sent.flush({ ...board([]), status: 'changes_requested', clientComment: 'A little less gold in the glaze, please.' });
     http.verify();
+  });
+
+  it('moves focus to the question on Approve, then to the answer, said in a status region that was there, empty, before', async () => {
+    const { fixture, http, html } = render();
+    http.expectOne('/api/portal/boards/b-1').flush(board([]));
+    await fixture.whenStable();
+    fixture.detectChanges();
+    const outcome = html.querySelector<HTMLElement>('[role=status]')!;
+    expect(outcome.textContent?.trim()).toBe('');
+    [...html.querySelectorAll('button')].find((b) => b.textContent?.includes('Approve this board'))!.click();
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(document.activeElement?.textContent).toContain(samples.board.yes);
+    (document.activeElement as HTMLButtonElement).click();
+    http
+      .expectOne({ method: 'POST', url: '/api/portal/boards/b-1/approve' })
+      .flush({ ...board([]), status: 'approved', decidedAt: '2026-03-04T15:30:00Z' });
+    await vi.waitFor(() => {
+      fixture.detectChanges();
+      expect(document.activeElement).toBe(outcome);
+    });
+    expect(html.querySelector('[role=status]')).toBe(outcome);
+    expect(outcome.textContent).toContain('You approved this board on');
+    fixture.nativeElement.remove();
+    http.verify();
+  });
+
+  it('says the day it was answered in the firm’s time zone, not the server’s or the browser’s', async () => {
+    const { fixture, http, html } = render();
+    // 03:30 on March 4 in UTC is still March 3 in Los Angeles
+    http.expectOne('/api/portal/boards/b-1').flush({
+      ...board([]),
+      status: 'approved',
+      decidedAt: '2026-03-04T03:30:00Z',
+      timeZone: 'America/Los_Angeles',
+    });
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(html.querySelector('[role=status]')?.textContent).toContain('March 3, 2026');
+    fixture.nativeElement.remove();
+  });
+
+  it.each([
+    [400, 'a link cut short'],
+    [404, 'a board that is not theirs'],
+  ])('answers %s (%s) with the not-found words, a 404 on the server render and a way back to the boards', async (status) => {
+    const init: { status?: number } = {};
+    TestBed.configureTestingModule({ providers: [{ provide: RESPONSE_INIT, useValue: init }] });
+    const { fixture, http, html } = render();
+    http.expectOne('/api/portal/boards/b-1').flush({ type: 'about:blank', title: 'x', status, detail: 'x' }, { status, statusText: 'x' });
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(html.querySelector('[role=alert]')?.textContent).toContain(samples.board.missing);
+    expect(html.querySelector('a[href="/boards"]')).not.toBeNull();
+    expect(init.status).toBe(404);
+    fixture.nativeElement.remove();
   });
 });

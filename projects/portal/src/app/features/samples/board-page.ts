@@ -1,5 +1,5 @@
 import { httpResource } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, RESPONSE_INIT, computed, effect, inject, input, signal } from '@angular/core';
 import { AbstractControl, FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -11,6 +11,7 @@ import { RouterLink } from '@angular/router';
 import { SAMPLE_COMMENT_MAX, type ClientBoardView } from '@layerbook/contracts/types';
 import { PhotoGallery } from '../../../../../shared/photos/photo-gallery';
 import { problemMessage, toProblem } from '../../core/errors/problem';
+import { focusAfterRender } from '../../shared/ui/focus-after-render';
 import { BoardApi, boardUrl } from './board-api';
 import { BOARD_STATUS_WORDS } from './board-words';
 import { TranslatePipe, TranslateService } from '@ngx-translate/core';
@@ -53,27 +54,30 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
           }
         </p>
 
-        @switch (b.status) {
-          @case ('approved') {
-            <p class="decided" role="status">
-              <mat-icon aria-hidden="true">verified</mat-icon>
-              {{ 'samples.board.approved' | translate: { day: b.decidedAt | lbDate: 'long' : null, firm: b.firmName } }}
-            </p>
-          }
-          @case ('changes_requested') {
-            <div class="decided" role="status">
-              <p>
-                <mat-icon aria-hidden="true">edit_note</mat-icon>
-                {{ 'samples.board.changes' | translate: { day: b.decidedAt | lbDate: 'long' : null, firm: b.firmName } }}
+        <!-- in the page before the answer and filled by it, so screen readers read it; focus moves here -->
+        <div class="outcome" role="status" tabindex="-1">
+          @switch (b.status) {
+            @case ('approved') {
+              <p class="decided">
+                <mat-icon aria-hidden="true">verified</mat-icon>
+                {{ 'samples.board.approved' | translate: { day: b.decidedAt | lbDate: 'long' : null : b.timeZone, firm: b.firmName } }}
               </p>
-              <p class="comment">{{ 'proposals.page.youWrote' | translate: { comment: b.clientComment } }}</p>
-            </div>
+            }
+            @case ('changes_requested') {
+              <div class="decided">
+                <p>
+                  <mat-icon aria-hidden="true">edit_note</mat-icon>
+                  {{ 'samples.board.changes' | translate: { day: b.decidedAt | lbDate: 'long' : null : b.timeZone, firm: b.firmName } }}
+                </p>
+                <p class="comment">{{ 'proposals.page.youWrote' | translate: { comment: b.clientComment } }}</p>
+              </div>
+            }
           }
-          @default {
-            <p class="status">
-              <mat-icon aria-hidden="true">{{ words.shown.icon }}</mat-icon> {{ words.shown.text | translate }}
-            </p>
-          }
+        </div>
+        @if (b.status === 'shown') {
+          <p class="status">
+            <mat-icon aria-hidden="true">{{ words.shown.icon }}</mat-icon> {{ words.shown.text | translate }}
+          </p>
         }
 
         <lb-photo-gallery [subject]="b.label" [photos]="b.photos" [readOnly]="true" [thumbHeight]="180" />
@@ -100,19 +104,19 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
             @if (isConfirming()) {
               <div class="confirm" role="group" aria-labelledby="confirm-text">
                 <p id="confirm-text">{{ 'samples.board.confirm' | translate: { label: b.label } }}</p>
-                <button mat-flat-button type="button" [disabled]="isBusy()" (click)="approve(b)">
+                <button mat-flat-button type="button" data-confirm [disabled]="isBusy()" (click)="approve(b)">
                   {{ 'samples.board.yes' | translate }}
                 </button>
-                <button mat-button type="button" [disabled]="isBusy()" (click)="isConfirming.set(false)">
+                <button mat-button type="button" [disabled]="isBusy()" (click)="stopConfirming()">
                   {{ 'samples.board.notYet' | translate }}
                 </button>
               </div>
             } @else if (!isAsking()) {
               <div class="buttons">
-                <button mat-flat-button type="button" (click)="isConfirming.set(true)">
+                <button mat-flat-button type="button" data-approve (click)="confirmApproval()">
                   <mat-icon aria-hidden="true">check</mat-icon>{{ 'samples.board.approve' | translate }}
                 </button>
-                <button mat-stroked-button type="button" (click)="isAsking.set(true)">
+                <button mat-stroked-button type="button" (click)="askForChanges()">
                   <mat-icon aria-hidden="true">edit_note</mat-icon>{{ 'proposals.answers.askChanges' | translate }}
                 </button>
               </div>
@@ -140,7 +144,9 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
       } @else if (isLoading()) {
         <mat-progress-bar mode="indeterminate" [attr.aria-label]="'samples.board.loading' | translate" />
       } @else {
-        <p role="alert">{{ loadMessage() | lbSay }}</p>
+        <p class="lb-form-alert" role="alert">
+          <mat-icon aria-hidden="true">error</mat-icon><span>{{ loadMessage() | lbSay }}</span>
+        </p>
       }
     </section>
   `,
@@ -155,6 +161,9 @@ const notBlank = (c: AbstractControl<string>) => (typeof c.value === 'string' &&
     .meta {
       color: var(--mat-sys-on-surface-variant);
       margin-top: 0;
+    }
+    .outcome:focus {
+      outline: none;
     }
     .status,
     .decided p:first-child {
@@ -206,6 +215,8 @@ export class BoardPage {
   private readonly title = inject(Title);
   private readonly translate = inject(TranslateService);
   private readonly language = inject(Language);
+  private readonly response = inject(RESPONSE_INIT, { optional: true });
+  private readonly focus = focusAfterRender();
 
   /** route parameter */
   readonly id = input.required<string>();
@@ -219,10 +230,15 @@ export class BoardPage {
   protected readonly words = BOARD_STATUS_WORDS;
   protected readonly board = computed(() => (this.loaded.hasValue() ? this.loaded.value() : null));
   protected readonly isLoading = this.loaded.isLoading;
+  /** 404 and a malformed id (400, a link cut short) read the same: the link is wrong, or the board is not theirs. */
+  private readonly isMissing = computed(() => {
+    const error = this.loaded.error();
+    return error !== undefined && [400, 404].includes(toProblem(error).status);
+  });
   protected readonly loadMessage = computed(() => {
     const error = this.loaded.error();
     if (!error) return null;
-    return toProblem(error).status === 404 ? 'samples.board.missing' : problemMessage(error);
+    return this.isMissing() ? 'samples.board.missing' : problemMessage(error);
   });
   protected readonly isBusy = signal(false);
   protected readonly isConfirming = signal(false);
@@ -240,12 +256,32 @@ export class BoardPage {
       this.language.current();
       if (b) this.title.setTitle(this.translate.instant('layout.titles.named', { name: b.label }) as string);
     });
+    // Tells crawlers and the host's logs the truth while rendering on the server.
+    effect(() => {
+      if (this.isMissing() && this.response) this.response.status = 404;
+    });
   }
 
   protected readonly commentWords: FieldErrorWords = {
     maxlength: { key: 'samples.board.tooLong', params: { max: SAMPLE_COMMENT_MAX } },
     required: 'samples.board.commentRequired',
   };
+
+  /** The Approve button gives way to the question: focus goes to its Yes, and back to Approve on Not yet. */
+  protected confirmApproval(): void {
+    this.isConfirming.set(true);
+    this.focus('[data-confirm]');
+  }
+
+  protected stopConfirming(): void {
+    this.isConfirming.set(false);
+    this.focus('[data-approve]');
+  }
+
+  protected askForChanges(): void {
+    this.isAsking.set(true);
+    this.focus('textarea');
+  }
 
   protected async approve(b: ClientBoardView): Promise<void> {
     await this.answer(() => this.api.approve(b.id));
@@ -264,6 +300,8 @@ export class BoardPage {
       this.loaded.set(await call());
       this.isConfirming.set(false);
       this.isAsking.set(false);
+      // The buttons are gone: the answer, now said at the top, takes focus.
+      this.focus('.outcome');
     } catch (error) {
       const problem = toProblem(error);
       const field = problem.errors?.find((e) => e.field === 'comment');
