@@ -7,8 +7,9 @@ import { WaitingBoards } from '../samples/waiting-boards';
   selector: 'lb-home-page',
   imports: [ProposalList, WaitingBoards],
   template: `
-    <lb-waiting-boards />
-    <lb-proposal-list />
+    <lb-proposal-list>
+      <lb-waiting-boards />
+    </lb-proposal-list>
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

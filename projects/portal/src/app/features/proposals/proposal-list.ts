@@ -19,6 +19,8 @@ import { PROPOSALS_URL } from './proposal-api';
     @if (client(); as me) {
       <p class="lb-lead">{{ 'proposals.list.lead' | translate: { firm: me.firmName } }}</p>
     }
+    <!-- What the home page puts first, under the page's heading (boards waiting for an answer). -->
+    <ng-content />
     @if (isLoading()) {
       <mat-progress-bar mode="indeterminate" [attr.aria-label]="'proposals.list.loading' | translate" />
     } @else if (loadMessage(); as message) {
