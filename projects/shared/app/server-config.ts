@@ -1,9 +1,13 @@
 import { FetchBackend, HttpBackend } from '@angular/common/http';
 import { ApplicationConfig, NgZone, REQUEST_CONTEXT, inject, mergeApplicationConfig } from '@angular/core';
 import { RenderMode, ServerRoute, provideServerRendering, withRoutes } from '@angular/ssr';
+import type { TranslationObject } from '@ngx-translate/core';
 import { map } from 'rxjs';
 import { readFile } from 'node:fs/promises';
 import { transferable } from '../http/api-interceptor';
+import { SERVER_LANGUAGE_CHOICE } from '../i18n/i18n-providers';
+import { chooseLanguageOnServer } from '../i18n/server-language';
+import { watchedWords } from '../i18n/server-words';
 import { TRANSLATION_FILES } from '../i18n/translation-loader';
 import { apiDispatchOf } from '../ssr/api-dispatch';
 import { InProcessBackend } from '../ssr/in-process-backend';
@@ -12,13 +16,13 @@ import { InProcessBackend } from '../ssr/in-process-backend';
  * The app's merged words beside its browser files (`dist/<app>/browser/i18n/<lang>.json`; this code
  * runs from `dist/<app>/server/`), read once per process.
  */
-const wordsByLanguage = new Map<string, Promise<Record<string, unknown>>>();
-function translationFiles(language: string): Promise<Record<string, unknown>> {
+const wordsByLanguage = new Map<string, Promise<TranslationObject>>();
+function translationFiles(language: string): Promise<TranslationObject> {
   if (!/^[a-z]{2}$/.test(language)) return Promise.resolve({});
   let words = wordsByLanguage.get(language);
   if (!words) {
     words = readFile(new URL(`../browser/i18n/${language}.json`, import.meta.url), 'utf8').then(
-      (text) => JSON.parse(text) as Record<string, unknown>,
+      (text) => JSON.parse(text) as TranslationObject,
       // The build's route extraction runs the app away from dist/; a missing file shows keys, never a failed page.
       (error: unknown) => {
         console.error(`Words for "${language}" could not be read`, error);
@@ -56,7 +60,8 @@ export function serverConfigFor(appConfig: ApplicationConfig): ApplicationConfig
       provideServerRendering(withRoutes(SERVER_ROUTES)),
       FetchBackend,
       { provide: HttpBackend, useFactory: transferableBackend },
-      { provide: TRANSLATION_FILES, useValue: translationFiles },
+      { provide: TRANSLATION_FILES, useFactory: watchedWords(translationFiles) },
+      { provide: SERVER_LANGUAGE_CHOICE, useFactory: chooseLanguageOnServer },
     ],
   });
 }

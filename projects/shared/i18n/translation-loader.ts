@@ -8,8 +8,7 @@ import {
   TranslateService,
   type TranslationObject,
 } from '@ngx-translate/core';
-import { Observable, from, map, of } from 'rxjs';
-import { type UsedGroups, pickGroups, watchWordReads } from './used-words';
+import { Observable, from, of } from 'rxjs';
 
 /**
  * Where the server reads an app's merged words (`dist/<app>/browser/i18n/<lang>.json`); provided by
@@ -17,7 +16,8 @@ import { type UsedGroups, pickGroups, watchWordReads } from './used-words';
  */
 export const TRANSLATION_FILES = new InjectionToken<(language: string) => Promise<TranslationObject>>('TRANSLATION_FILES');
 
-const stateKey = (language: string) => makeStateKey<TranslationObject>(`lb-i18n-${language}`);
+/** Where a page carries a language's words (the server puts the groups its render read there: server-words.ts). */
+export const translationStateKey = (language: string) => makeStateKey<TranslationObject>(`lb-i18n-${language}`);
 
 /**
  * Words for a language. On the server from disk, watched: the page's transfer state carries only the
@@ -36,17 +36,9 @@ export class TransferTranslationLoader implements TranslateLoader {
   private completing = false;
 
   getTranslation(language: string): Observable<TranslationObject> {
-    const key = stateKey(language);
-    if (this.files) {
-      const used: UsedGroups = new Set();
-      return from(this.files(language)).pipe(
-        map((words) => {
-          this.state.onSerialize(key, () => pickGroups(words, used));
-          return watchWordReads(words, used);
-        }),
-      );
-    }
-    const carried = this.state.get(key, null);
+    // On the server: from disk, watched (server-words.ts).
+    if (this.files) return from(this.files(language));
+    const carried = this.state.get(translationStateKey(language), null);
     if (!carried) return this.whole(language);
     this.partial.add(language);
     void this.injector
