@@ -24,24 +24,30 @@ export interface PaymentMismatch {
   readonly askedCurrency: string;
 }
 
-/** A card payment recorded in another amount or currency than its checkout asked, noted on its invoice. */
-export async function notePaymentMismatch(tx: TenantTx, m: PaymentMismatch): Promise<void> {
-  await recordAudit(tx, {
+/** A note on the invoice for a person about a card payment, with what was paid and what was asked. */
+function notePayment(tx: TenantTx, reason: AttentionReason, m: PaymentMismatch, more: Record<string, string> = {}): Promise<void> {
+  return recordAudit(tx, {
     actorUserId: null,
     actorKind: 'system',
     action: 'invoice.payment_needs_attention',
     entity: 'invoice',
     entityId: m.invoiceId,
     data: {
-      reason: 'paidOtherAmount' satisfies AttentionReason,
+      reason,
       paymentId: m.paymentId,
       receipt: m.receiptNumber,
       amount: m.amount,
       currency: m.currency,
       asked: m.asked,
       askedCurrency: m.askedCurrency,
+      ...more,
     },
   });
+}
+
+/** A card payment recorded in another amount or currency than its checkout asked, noted on its invoice. */
+export function notePaymentMismatch(tx: TenantTx, m: PaymentMismatch): Promise<void> {
+  return notePayment(tx, 'paidOtherAmount', m);
 }
 
 /**
@@ -49,28 +55,11 @@ export async function notePaymentMismatch(tx: TenantTx, m: PaymentMismatch): Pro
  * way while the client was on the processor's page): recorded, the rest kept as the client's credit,
  * and noted on its invoice for a person to give back or put to use.
  */
-export async function notePaidWhenNotAsked(
+export function notePaidWhenNotAsked(
   tx: TenantTx,
   m: PaymentMismatch & { readonly credit: string; readonly invoiceStatus: InvoiceStatus },
 ): Promise<void> {
-  await recordAudit(tx, {
-    actorUserId: null,
-    actorKind: 'system',
-    action: 'invoice.payment_needs_attention',
-    entity: 'invoice',
-    entityId: m.invoiceId,
-    data: {
-      reason: 'paidWhenNotAsked' satisfies AttentionReason,
-      paymentId: m.paymentId,
-      receipt: m.receiptNumber,
-      amount: m.amount,
-      currency: m.currency,
-      asked: m.asked,
-      askedCurrency: m.askedCurrency,
-      credit: m.credit,
-      invoiceStatus: m.invoiceStatus,
-    },
-  });
+  return notePayment(tx, 'paidWhenNotAsked', m, { credit: m.credit, invoiceStatus: m.invoiceStatus });
 }
 
 interface NoteRow {
